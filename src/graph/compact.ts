@@ -1,0 +1,221 @@
+// The compact graph: a design compiled once into CSR typed arrays so that every metric,
+// challenge and envelope works on integer indices with no per-step allocation.
+// Removal never copies the graph: it is expressed by a Mask (see mask.ts).
+
+import type { Topology } from '../topology/model.js';
+
+export interface CompactGraph {
+  /** Number of nodes (original, N0). */
+  readonly n: number;
+  /** Number of links (original, L0), parallel links included. */
+  readonly m: number;
+  /** CSR row offsets, length n + 1. Neighbours of v are neighbors[offsets[v] .. offsets[v+1]). */
+  readonly offsets: Int32Array;
+  /** CSR column indices, length 2m (each undirected link appears twice). */
+  readonly neighbors: Int32Array;
+  /** For each adjacency entry, the index of the link it belongs to. */
+  readonly linkOf: Int32Array;
+  /** Link ends, length m. */
+  readonly linkSource: Int32Array;
+  readonly linkTarget: Int32Array;
+  /** Link lengths in km (NaN where unknown), or null when no link has one. */
+  readonly length: Float64Array | null;
+  /** Link latencies in ms (NaN where unknown), or null when no link has one. */
+  readonly latency: Float64Array | null;
+  /** Generic link weights from interchange formats (NaN where unknown), or null. */
+  readonly weight: Float64Array | null;
+  /** 1 where the node / link is hardened (never removed by challenges). */
+  readonly nodeHardened: Uint8Array;
+  readonly linkHardened: Uint8Array;
+  /** Site coordinates in degrees (NaN where unknown), or null when no node has both. */
+  readonly lat: Float64Array | null;
+  readonly lon: Float64Array | null;
+  /** Element ids in file order; index i ↔ id. */
+  readonly nodeIds: readonly string[];
+  readonly linkIds: readonly string[];
+  /** Stable link keys (see TopoLink.key) used to seed random orders. */
+  readonly linkKeys: readonly string[];
+  readonly nodeIndex: ReadonlyMap<string, number>;
+  readonly linkIndex: ReadonlyMap<string, number>;
+  /** 1-based source lines, for reports. */
+  readonly nodeLine: Int32Array;
+  readonly linkLine: Int32Array;
+  /** Shared-risk link groups: group g holds groupLinks[groupOffsets[g] .. groupOffsets[g+1]). */
+  readonly groupIds: readonly string[];
+  readonly groupLine: Int32Array;
+  readonly groupOffsets: Int32Array;
+  readonly groupLinks: Int32Array;
+  /** Traffic demands between node indices. */
+  readonly demandSource: Int32Array;
+  readonly demandTarget: Int32Array;
+  readonly demandVolume: Float64Array;
+  /** Latency budget factor for demand_served, if the design sets one. */
+  readonly latencyBudget: number | undefined;
+}
+
+/** Compile a parsed design into its compact graph. Node and link order follow the file. */
+export function compileTopology(t: Topology): CompactGraph {
+  const n = t.nodes.length;
+  const m = t.links.length;
+  const nodeIndex = new Map<string, number>();
+  t.nodes.forEach((node, i) => nodeIndex.set(node.id, i));
+  const linkIndex = new Map<string, number>();
+
+  const linkSource = new Int32Array(m);
+  const linkTarget = new Int32Array(m);
+  const degree = new Int32Array(n);
+  const linkLine = new Int32Array(m);
+  const linkHardened = new Uint8Array(m);
+  let hasLength = false;
+  let hasLatency = false;
+  let hasWeight = false;
+  for (let e = 0; e < m; e++) {
+    const link = t.links[e];
+    const s = nodeIndex.get(link.source);
+    const d = nodeIndex.get(link.target);
+    if (s === undefined || d === undefined) {
+      // Parsers reject this with a located error; reaching here is a programming error.
+      throw new Error(`link ${link.id} refers to a node that is not in the design`);
+    }
+    linkSource[e] = s;
+    linkTarget[e] = d;
+    degree[s]++;
+    degree[d]++;
+    linkLine[e] = link.pos.line;
+    linkHardened[e] = link.hardened ? 1 : 0;
+    if (!linkIndex.has(link.id)) linkIndex.set(link.id, e);
+    hasLength ||= link.length !== undefined;
+    hasLatency ||= link.latency !== undefined;
+    hasWeight ||= link.weight !== undefined;
+  }
+
+  const offsets = new Int32Array(n + 1);
+  for (let v = 0; v < n; v++) offsets[v + 1] = offsets[v] + degree[v];
+  const neighbors = new Int32Array(2 * m);
+  const linkOf = new Int32Array(2 * m);
+  const fill = offsets.slice(0, n);
+  for (let e = 0; e < m; e++) {
+    const s = linkSource[e];
+    const d = linkTarget[e];
+    neighbors[fill[s]] = d;
+    linkOf[fill[s]++] = e;
+    neighbors[fill[d]] = s;
+    linkOf[fill[d]++] = e;
+  }
+
+  const column = (pick: (i: number) => number | undefined, present: boolean, count: number) => {
+    if (!present) return null;
+    const a = new Float64Array(count);
+    for (let i = 0; i < count; i++) a[i] = pick(i) ?? Number.NaN;
+    return a;
+  };
+
+  const hasCoords = t.nodes.some((v) => v.lat !== undefined && v.lon !== undefined);
+  const nodeHardened = new Uint8Array(n);
+  const nodeLine = new Int32Array(n);
+  t.nodes.forEach((v, i) => {
+    nodeHardened[i] = v.hardened ? 1 : 0;
+    nodeLine[i] = v.pos.line;
+  });
+
+  // Risk groups: described groups first (file order), then groups only named by links.
+  const groupIds: string[] = [];
+  const groupLineList: number[] = [];
+  const groupPos = new Map<string, number>();
+  for (const g of t.riskGroups) {
+    if (groupPos.has(g.id)) continue;
+    groupPos.set(g.id, groupIds.length);
+    groupIds.push(g.id);
+    groupLineList.push(g.pos.line);
+  }
+  const members: number[][] = groupIds.map(() => []);
+  t.links.forEach((link, e) => {
+    for (const gid of link.riskGroups) {
+      let g = groupPos.get(gid);
+      if (g === undefined) {
+        g = groupIds.length;
+        groupPos.set(gid, g);
+        groupIds.push(gid);
+        groupLineList.push(link.pos.line);
+        members.push([]);
+      }
+      if (members[g][members[g].length - 1] !== e) members[g].push(e);
+    }
+  });
+  const groupOffsets = new Int32Array(groupIds.length + 1);
+  members.forEach((list, g) => (groupOffsets[g + 1] = groupOffsets[g] + list.length));
+  const groupLinks = new Int32Array(groupOffsets[groupIds.length]);
+  members.forEach((list, g) => groupLinks.set(list, groupOffsets[g]));
+
+  const k = t.demands.length;
+  const demandSource = new Int32Array(k);
+  const demandTarget = new Int32Array(k);
+  const demandVolume = new Float64Array(k);
+  t.demands.forEach((d, i) => {
+    demandSource[i] = nodeIndex.get(d.source) ?? -1;
+    demandTarget[i] = nodeIndex.get(d.target) ?? -1;
+    demandVolume[i] = d.volume;
+  });
+
+  return {
+    n,
+    m,
+    offsets,
+    neighbors,
+    linkOf,
+    linkSource,
+    linkTarget,
+    length: column((e) => t.links[e].length, hasLength, m),
+    latency: column((e) => t.links[e].latency, hasLatency, m),
+    weight: column((e) => t.links[e].weight, hasWeight, m),
+    nodeHardened,
+    linkHardened,
+    lat: column((i) => t.nodes[i].lat, hasCoords, n),
+    lon: column((i) => t.nodes[i].lon, hasCoords, n),
+    nodeIds: t.nodes.map((v) => v.id),
+    linkIds: t.links.map((l) => l.id),
+    linkKeys: t.links.map((l) => l.key),
+    nodeIndex,
+    linkIndex,
+    nodeLine,
+    linkLine,
+    groupIds,
+    groupLine: Int32Array.from(groupLineList),
+    groupOffsets,
+    groupLinks,
+    demandSource,
+    demandTarget,
+    demandVolume,
+    latencyBudget: t.latencyBudget,
+  };
+}
+
+/** Build a compact graph straight from an edge list (tests, generators, benchmarks). */
+export function graphFromEdges(n: number, edges: readonly (readonly [number, number])[]): CompactGraph {
+  const pos = { line: 0, column: 0 };
+  const counts = new Map<string, number>();
+  return compileTopology({
+    file: '<generated>',
+    format: 'csv',
+    nodes: Array.from({ length: n }, (_, i) => ({ id: String(i), hardened: false, pos, attrs: {} })),
+    links: edges.map(([a, b], e) => {
+      const base = a < b ? `${a}-${b}` : `${b}-${a}`;
+      const c = (counts.get(base) ?? 0) + 1;
+      counts.set(base, c);
+      return {
+        id: `e${e}`,
+        key: c > 1 ? `${base}#${c}` : base,
+        source: String(a),
+        target: String(b),
+        riskGroups: [],
+        hardened: false,
+        pos,
+        attrs: {},
+      };
+    }),
+    riskGroups: [],
+    demands: [],
+    metadata: {},
+    warnings: [],
+  });
+}

@@ -1,0 +1,53 @@
+// The contract every metric implements. A metric is a factory: `create` allocates its
+// scratch space once per graph and returns an evaluator that is called thousands of times
+// with different masks (envelope realizations), so it must not allocate per call.
+
+import type { CompactGraph } from '../graph/compact.js';
+import type { Mask } from '../graph/mask.js';
+
+export type MetricId =
+  | 'efficiency'
+  | 'weighted_efficiency'
+  | 'largest_component'
+  | 'pair_connectivity'
+  | 'average_hop'
+  | 'diameter'
+  | 'algebraic_connectivity'
+  | 'effective_resistance'
+  | 'natural_connectivity'
+  | 'spectral_radius'
+  | 'node_connectivity'
+  | 'link_connectivity'
+  | 'bridges'
+  | 'cut_nodes'
+  | 'demand_served';
+
+/** How the cost of one evaluation grows; used by budgets and the engine's planning. */
+export type CostClass = 'linear' | 'all-pairs' | 'spectral' | 'flow';
+
+export interface MetricValue {
+  /** The metric in its own unit (hops, eigenvalue, count...). */
+  raw: number;
+  /** In [0, 1]; 1 = the best the metric can say, 0 = no robustness left. */
+  normalized: number;
+}
+
+export interface MetricOptions {
+  /** Latency budget factor for demand_served (overrides the design's). */
+  latencyBudget?: number;
+}
+
+/** An evaluator bound to one graph; reuse it for every mask. */
+export type MetricEvaluator = (mask: Mask) => MetricValue;
+
+export interface Metric {
+  readonly id: MetricId;
+  /** One line for help texts and reports. */
+  readonly description: string;
+  /** One line saying how raw maps to [0, 1] (shown in `metrics --help` and the README). */
+  readonly normalization: string;
+  readonly cost: CostClass;
+  /** False when the design lacks what the metric needs (weights, demands). */
+  appliesTo(g: CompactGraph): boolean;
+  create(g: CompactGraph, options?: MetricOptions): MetricEvaluator;
+}

@@ -1,0 +1,5 @@
+// The command table. Each command lives in its own file; add yours here.
+
+import type { Command } from '../io.js';
+
+export const commands: Command[] = [];
