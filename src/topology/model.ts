@@ -70,6 +70,8 @@ export interface Topology {
   file: string;
   format: DesignFormat;
   name?: string;
+  /** What the design is, in the author's words (our format's `network.description`). */
+  description?: string;
   nodes: TopoNode[];
   links: TopoLink[];
   /** Described risk groups; groups referenced by links but not described are added implicitly. */

@@ -1,0 +1,228 @@
+// GraphML (Brandes et al., "GraphML Progress Report", Graph Drawing 2001; the schema at
+// graphml.graphdrawing.org) read with saxes, a streaming XML parser that never fetches
+// external entities. We also refuse any DOCTYPE that declares entities, before a single
+// element is read: that is how "billion laughs" documents grow, and no GraphML needs one.
+// Attributes are matched by their <key attr.name>; see attributes.ts for the mapping.
+
+import { SaxesParser, type SaxesTagPlain } from 'saxes';
+import type { DesignFormat, SourcePos, Topology } from './model.js';
+import { TopologyBuilder, type BuilderOptions } from './builder.js';
+import { mapLinkAttributes, mapNodeAttributes, toFlag, toNumber } from './attributes.js';
+
+interface KeyDef {
+  name: string;
+  domain: string;
+  type: string;
+  default?: string;
+}
+
+interface Element {
+  pos: SourcePos;
+  attrs: Record<string, string>;
+  data: Record<string, unknown>;
+  dataPos: Map<string, SourcePos>;
+}
+
+/** Converts a <data> text by its key's attr.type; text that does not fit stays text. */
+function typed(text: string, type: string): unknown {
+  switch (type) {
+    case 'int':
+    case 'integer':
+    case 'long':
+    case 'float':
+    case 'double':
+      return toNumber(text) ?? text;
+    case 'boolean':
+      return toFlag(text) ?? text;
+    default:
+      return text;
+  }
+}
+
+export function parseGraphml(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'graphml'): Topology {
+  const b = new TopologyBuilder(file, format, options);
+  const parser = new SaxesParser({ xmlns: false, position: true });
+  const keys = new Map<string, KeyDef>();
+  const nodes: Element[] = [];
+  const edges: Element[] = [];
+  const metadata: Record<string, unknown> = {};
+  const metadataPos = new Map<string, SourcePos>();
+
+  // What we are inside of: element names from the root, and the element being filled.
+  const stack: string[] = [];
+  let current: Element | undefined;
+  let graphDepth = 0;
+  let currentKey: KeyDef | undefined;
+  let dataKey: string | undefined;
+  let dataPos: SourcePos = { line: 1, column: 1 };
+  let dataText = '';
+  let dataNested = false;
+  let defaultText: string | undefined;
+  let sawRoot = false;
+  let warnedDirected = false;
+  let warnedNested = false;
+  let tagStart: SourcePos = { line: 1, column: 1 };
+
+  const here = (): SourcePos => ({ line: parser.line, column: parser.column + 1 });
+  const directed = (pos: SourcePos, how: string) => {
+    if (warnedDirected) return;
+    warnedDirected = true;
+    b.warn(`the graph is directed (${how}); links are read as undirected`, pos);
+  };
+
+  parser.on('error', (err) => {
+    const message = err.message.replace(/^[^:]*:\d+:\d+: /, '');
+    throw b.error(`malformed XML: ${message}`, here(), 'the file is not well-formed XML; check the tag at this point');
+  });
+  parser.on('doctype', (doctype) => {
+    if (/<!ENTITY/i.test(doctype)) {
+      throw b.error(
+        'the XML declares entities in a DOCTYPE, which netbrace refuses',
+        tagStart,
+        'entity declarations can expand without bound ("billion laughs"); GraphML needs none — remove the DOCTYPE',
+      );
+    }
+  });
+  parser.on('opentagstart', (tag) => {
+    // saxes reports the position after the tag name; the tag began at its "<".
+    tagStart = { line: parser.line, column: Math.max(1, parser.column - tag.name.length) };
+  });
+  parser.on('opentag', (tag: SaxesTagPlain) => {
+    const name = localName(tag.name);
+    const attrs = tag.attributes as Record<string, string>;
+    const pos = tagStart;
+    stack.push(name);
+    if (dataKey !== undefined) {
+      dataNested = true; // markup inside <data> (drawing tools): keep only plain text values
+      return;
+    }
+    switch (name) {
+      case 'graphml':
+        sawRoot = true;
+        break;
+      case 'key': {
+        const id = attrs.id;
+        if (id === undefined) throw b.error('<key> without an "id"', pos);
+        currentKey = { name: attrs['attr.name'] ?? id, domain: attrs.for ?? 'all', type: attrs['attr.type'] ?? 'string' };
+        keys.set(id, currentKey);
+        break;
+      }
+      case 'default':
+        if (currentKey) defaultText = '';
+        break;
+      case 'graph':
+        graphDepth++;
+        if (graphDepth > 1 && !warnedNested) {
+          warnedNested = true;
+          b.warn('nested <graph> found; its nodes and edges are read into the one design', pos);
+        }
+        if (attrs.edgedefault === 'directed') directed(pos, 'edgedefault="directed"');
+        break;
+      case 'node':
+        if (attrs.id === undefined) throw b.error('<node> without an "id"', pos, 'every GraphML node needs id="..."');
+        current = { pos, attrs, data: {}, dataPos: new Map() };
+        nodes.push(current);
+        break;
+      case 'edge':
+        if (attrs.source === undefined || attrs.target === undefined) {
+          throw b.error(`<edge> without a "${attrs.source === undefined ? 'source' : 'target'}"`, pos, 'every GraphML edge needs source="..." and target="..."');
+        }
+        if (attrs.directed === 'true') directed(pos, 'an edge has directed="true"');
+        current = { pos, attrs, data: {}, dataPos: new Map() };
+        edges.push(current);
+        break;
+      case 'hyperedge':
+        b.warn('<hyperedge> is not supported and was skipped', pos);
+        break;
+      case 'data':
+        dataKey = attrs.key ?? '';
+        dataPos = pos;
+        dataText = '';
+        dataNested = false;
+        break;
+      default:
+        break;
+    }
+  });
+  const onText = (t: string) => {
+    if (dataKey !== undefined && !dataNested) dataText += t;
+    else if (defaultText !== undefined) defaultText += t;
+  };
+  parser.on('text', onText);
+  parser.on('cdata', onText);
+  parser.on('closetag', (tag) => {
+    const name = localName(tag.name);
+    stack.pop();
+    if (dataKey !== undefined && name !== 'data') return;
+    switch (name) {
+      case 'data': {
+        const def = keys.get(dataKey ?? '');
+        const attrName = def?.name ?? dataKey ?? '';
+        const value = typed(dataNested ? dataText.trim() : dataText, def?.type ?? 'string');
+        if (current) {
+          current.data[attrName] = value;
+          current.dataPos.set(attrName, dataPos);
+        } else if (graphDepth > 0) {
+          metadata[attrName] = value;
+          metadataPos.set(attrName, dataPos);
+        }
+        dataKey = undefined;
+        break;
+      }
+      case 'default':
+        if (currentKey && defaultText !== undefined) currentKey.default = defaultText;
+        defaultText = undefined;
+        break;
+      case 'key':
+        currentKey = undefined;
+        break;
+      case 'node':
+      case 'edge':
+        current = undefined;
+        break;
+      case 'graph':
+        graphDepth--;
+        break;
+      default:
+        break;
+    }
+  });
+
+  parser.write(text).close();
+  if (!sawRoot) throw b.error('no <graphml> element in this file', { line: 1, column: 1 }, 'is this really a GraphML file?');
+
+  // Defaults from <key><default>, for elements that do not set the attribute themselves.
+  const defaults = (domain: string) =>
+    [...keys.values()].filter((k) => k.default !== undefined && (k.domain === domain || k.domain === 'all'));
+  const nodeDefaults = defaults('node');
+  const edgeDefaults = defaults('edge');
+  const withDefaults = (el: Element, defs: KeyDef[]) => {
+    for (const k of defs) if (!(k.name in el.data)) el.data[k.name] = typed(k.default!, k.type);
+    return el.data;
+  };
+
+  for (const n of nodes) {
+    const mapped = mapNodeAttributes(withDefaults(n, nodeDefaults), b, (k) => n.dataPos.get(k) ?? n.pos);
+    b.addNode({ id: n.attrs.id, pos: n.pos, ...mapped });
+  }
+  // Edges are resolved after all nodes: GraphML allows them in any order.
+  for (const e of edges) {
+    const data = withDefaults(e, edgeDefaults);
+    let id: string | undefined = e.attrs.id;
+    if (id === undefined && 'id' in data) {
+      id = String(data.id);
+      delete data.id;
+    }
+    const mapped = mapLinkAttributes(data, b, (k) => e.dataPos.get(k) ?? e.pos);
+    b.addLink({ ...(id !== undefined ? { id } : {}), source: e.attrs.source, target: e.attrs.target, pos: e.pos, ...mapped });
+  }
+
+  const name = metadata.label ?? metadata.Network ?? metadata.name;
+  return b.finish({ ...(typeof name === 'string' ? { name } : {}), metadata });
+}
+
+/** `y:ShapeNode` → `ShapeNode`; GraphML's own elements are unprefixed or in its namespace. */
+function localName(qname: string): string {
+  const colon = qname.indexOf(':');
+  return colon < 0 ? qname : qname.slice(colon + 1);
+}

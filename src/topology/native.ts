@@ -1,0 +1,297 @@
+// Our own design format, YAML (.net.yaml) or the same structure as JSON (.net.json).
+// Both are read with the `yaml` package (JSON is YAML 1.2's flow subset), because it keeps
+// every node's source offset — so schema errors point at the line a user has to fix — and
+// because it caps alias expansion (a "billion laughs" document must fail, not eat memory).
+// The structure is validated against design.schema.json with ajv, then checked for what a
+// schema cannot say (ids unique, link and demand ends declared).
+
+import AjvModule, { type ErrorObject, type ValidateFunction } from 'ajv';
+import { isAlias, isCollection, isMap, isPair, isScalar, LineCounter, parseDocument, visit, type Document, type Node as YamlNode } from 'yaml';
+import schema from './design.schema.json' with { type: 'json' };
+import { DesignError } from '../errors.js';
+import type { DesignFormat, SourcePos, Topology } from './model.js';
+import { TopologyBuilder, type BuilderOptions } from './builder.js';
+import { didYouMean } from './suggest.js';
+
+/**
+ * Aliases a document may expand. Real designs rarely use anchors at all; the yaml package's
+ * default (100) already stops exponential growth, and a lower cap fails sooner.
+ */
+export const MAX_ALIAS_COUNT = 50;
+
+// ajv is published as CommonJS with a `default` property; under NodeNext the default import
+// is the module object, so pick the class from whichever shape arrives.
+const Ajv = ((AjvModule as unknown as { default?: typeof AjvModule }).default ?? AjvModule) as unknown as new (
+  opts: Record<string, unknown>,
+) => { compile(s: object): ValidateFunction };
+
+let validator: ValidateFunction | undefined;
+function validate(): ValidateFunction {
+  validator ??= new Ajv({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true }).compile(schema);
+  return validator;
+}
+
+type Path = (string | number)[];
+
+/** Finds source positions in the parsed YAML document. */
+class Locator {
+  constructor(
+    private readonly doc: Document,
+    private readonly lines: LineCounter,
+  ) {}
+
+  at(offset: number): SourcePos {
+    const p = this.lines.linePos(offset);
+    return { line: p.line, column: p.col };
+  }
+
+  private child(node: unknown, key: string | number): unknown {
+    if (isAlias(node)) node = node.resolve(this.doc);
+    if (!isCollection(node)) return undefined;
+    for (const item of node.items) {
+      if (isPair(item)) {
+        const k = isScalar(item.key) ? item.key.value : item.key;
+        if (String(k) === String(key)) return item.value;
+      }
+    }
+    if (typeof key === 'number' && !isMap(node)) return node.items[key];
+    return undefined;
+  }
+
+  /** The YAML node at a path (the deepest one that exists) and whether it was found whole. */
+  node(path: Path): { node: YamlNode | undefined; exact: boolean } {
+    let cur: unknown = this.doc.contents;
+    let last: YamlNode | undefined = (cur as YamlNode | null) ?? undefined;
+    for (const key of path) {
+      const next = this.child(cur, key);
+      if (next === undefined || next === null) return { node: last, exact: false };
+      cur = next;
+      last = next as YamlNode;
+    }
+    return { node: last, exact: true };
+  }
+
+  pos(path: Path): SourcePos {
+    const { node } = this.node(path);
+    return node?.range ? this.at(node.range[0]) : { line: 1, column: 1 };
+  }
+
+  /** Where the key `name` of the map at `path` is written. */
+  keyPos(path: Path, name: string): SourcePos {
+    let { node } = this.node(path);
+    if (isAlias(node)) node = node.resolve(this.doc) as YamlNode | undefined;
+    if (isMap(node)) {
+      for (const item of node.items) {
+        const k = item.key;
+        if (isScalar(k) && String(k.value) === name && k.range) return this.at(k.range[0]);
+      }
+    }
+    return this.pos(path);
+  }
+}
+
+/** `links[2].length_km` from ajv's `/links/2/length_km`. */
+function pathText(path: Path): string {
+  let s = '';
+  for (const k of path) s += typeof k === 'number' ? `[${k}]` : s === '' ? k : `.${k}`;
+  return s === '' ? 'the design' : s;
+}
+
+function splitPointer(pointer: string): Path {
+  if (pointer === '') return [];
+  return pointer
+    .slice(1)
+    .split('/')
+    .map((seg) => seg.replace(/~1/g, '/').replace(/~0/g, '~'))
+    .map((seg) => (/^\d+$/.test(seg) ? Number(seg) : seg));
+}
+
+function describe(v: unknown): string {
+  if (v === null) return 'empty (null)';
+  if (Array.isArray(v)) return 'a list';
+  if (typeof v === 'string') return `the text "${v.length > 40 ? `${v.slice(0, 40)}…` : v}"`;
+  if (typeof v === 'object') return 'a mapping';
+  return `${typeof v} ${String(v)}`;
+}
+
+const TYPE_WORDS: Readonly<Record<string, string>> = {
+  number: 'a number',
+  integer: 'a whole number',
+  string: 'text',
+  boolean: 'true or false',
+  object: 'a mapping (key: value)',
+  array: 'a list',
+  'string,integer': 'an id (text or a whole number)',
+};
+
+/** One ajv error as a located DesignError. */
+function toDesignError(e: ErrorObject, file: string, loc: Locator): DesignError {
+  const path = splitPointer(e.instancePath);
+  const where = (pos: SourcePos) => ({ file, line: pos.line, column: pos.column });
+  const what = pathText(path);
+  const params = e.params as Record<string, unknown>;
+  switch (e.keyword) {
+    case 'additionalProperties': {
+      const key = String(params.additionalProperty);
+      const allowed = Object.keys((e.parentSchema as { properties?: object } | undefined)?.properties ?? {});
+      return new DesignError(
+        `unknown key "${key}" in ${what}`,
+        where(loc.keyPos(path, key)),
+        didYouMean(key, allowed, `allowed keys: ${allowed.join(', ')}`),
+      );
+    }
+    case 'required': {
+      const key = String(params.missingProperty);
+      if (key === 'between' && path[0] === 'links') {
+        return new DesignError(`${what} has no ends: "between" is missing`, where(loc.pos(path)), 'write between: [node-a, node-b]');
+      }
+      return new DesignError(`${what} is missing the required key "${key}"`, where(loc.pos(path)));
+    }
+    case 'type': {
+      const want = TYPE_WORDS[String(params.type)] ?? String(params.type);
+      return new DesignError(`${what} must be ${want}, not ${describe(e.data)}`, where(loc.pos(path)), e.data === null ? 'give a value after the colon, or remove the key' : '');
+    }
+    case 'minItems':
+    case 'maxItems': {
+      const n = Array.isArray(e.data) ? e.data.length : 0;
+      if (path[path.length - 1] === 'between') {
+        return new DesignError(
+          `${what} needs exactly two node ids, found ${n}`,
+          where(loc.pos(path)),
+          n < 2 ? 'a link end is missing: write between: [node-a, node-b]' : 'a link joins two nodes; write one link per pair',
+        );
+      }
+      return new DesignError(`${what} ${e.message ?? 'has the wrong number of items'}`, where(loc.pos(path)));
+    }
+    case 'minimum':
+    case 'exclusiveMinimum': {
+      const limit = Number(params.limit);
+      const message = limit === 0 ? `${what} must not be negative (found ${String(e.data)})` : `${what} must be at least ${limit} (found ${String(e.data)})`;
+      return new DesignError(message, where(loc.pos(path)));
+    }
+    case 'maximum':
+      return new DesignError(`${what} must be at most ${String(params.limit)} (found ${String(e.data)})`, where(loc.pos(path)));
+    case 'minLength':
+      return new DesignError(`${what} must not be empty`, where(loc.pos(path)));
+    default:
+      return new DesignError(`${what} ${e.message ?? 'is not valid'}`, where(loc.pos(path)));
+  }
+}
+
+/** The error a user should fix first: the earliest in the file. */
+function firstError(errors: readonly ErrorObject[], file: string, loc: Locator): DesignError {
+  const located = errors.map((e) => toDesignError(e, file, loc));
+  located.sort((a, b) => a.line - b.line || a.column - b.column);
+  return located[0];
+}
+
+interface NativeDesign {
+  network?: { name?: string; description?: string };
+  nodes: { id: string | number; label?: string; kind?: string; site?: { lat: number; lon: number }; hardened?: boolean }[];
+  links?: {
+    id?: string | number;
+    between: [string | number, string | number];
+    length_km?: number;
+    latency_ms?: number;
+    capacity_gbps?: number;
+    risk_groups?: (string | number)[];
+    hardened?: boolean;
+  }[];
+  risk_groups?: { id: string | number; description?: string }[];
+  demands?: { between: [string | number, string | number]; volume: number }[];
+  latency_budget?: number;
+  metadata?: Record<string, unknown>;
+}
+
+export function parseNative(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'native-yaml'): Topology {
+  const lines = new LineCounter();
+  const doc = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: true, strict: true });
+  const loc = new Locator(doc, lines);
+  const kindWord = format === 'native-json' ? 'JSON' : 'YAML';
+  if (doc.errors.length > 0) {
+    const e = doc.errors[0];
+    if (e.code === 'DUPLICATE_KEY') {
+      throw new DesignError(`${kindWord}: a key appears twice in the same mapping`, { file, ...loc.at(e.pos[0]) }, 'keep one of them');
+    }
+    const message = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
+    throw new DesignError(`${kindWord} syntax error: ${message}`, { file, ...loc.at(e.pos[0]) }, 'fix the syntax at this point (check indentation, colons and quotes)');
+  }
+
+  let data: unknown;
+  try {
+    data = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
+  } catch (e) {
+    if (e instanceof ReferenceError || (e instanceof Error && /alias/i.test(e.message))) {
+      // Point at the first alias: that is where the expansion starts.
+      let first: SourcePos = { line: 1, column: 1 };
+      visit(doc, {
+        Alias(_, node) {
+          if (node.range) first = loc.at(node.range[0]);
+          return visit.BREAK;
+        },
+      });
+      throw new DesignError(
+        'too many YAML aliases are expanded (this looks like an alias bomb)',
+        { file, ...first },
+        `netbrace expands at most ${MAX_ALIAS_COUNT} aliases; write the values out instead of using *aliases`,
+      );
+    }
+    throw e;
+  }
+  if (data === null || data === undefined) {
+    throw new DesignError(`the ${kindWord} design is empty`, { file, line: 1, column: 1 }, 'a design needs at least `nodes:`');
+  }
+
+  const check = validate();
+  if (!check(data)) throw firstError(check.errors ?? [], file, loc);
+  const d = data as NativeDesign;
+
+  const b = new TopologyBuilder(file, format, { ...options, duplicateLinkIds: 'error' });
+  for (const w of doc.warnings) b.warn(`${kindWord}: ${w.message.split('\n')[0]}`, loc.at(w.pos[0]));
+
+  d.nodes.forEach((n, i) => {
+    b.addNode({
+      id: String(n.id),
+      pos: loc.pos(['nodes', i]),
+      ...(n.label !== undefined ? { label: n.label } : {}),
+      ...(n.kind !== undefined ? { kind: n.kind } : {}),
+      ...(n.site ? { lat: n.site.lat, lon: n.site.lon } : {}),
+      hardened: n.hardened ?? false,
+    });
+  });
+  (d.risk_groups ?? []).forEach((g, i) => {
+    b.addRiskGroup({ id: String(g.id), pos: loc.pos(['risk_groups', i]), ...(g.description !== undefined ? { description: g.description } : {}) });
+  });
+  (d.links ?? []).forEach((l, i) => {
+    const at = ['links', i];
+    b.addLink({
+      what: l.id !== undefined ? `link "${String(l.id)}" (links[${i}])` : `links[${i}]`,
+      ...(l.id !== undefined ? { id: String(l.id) } : {}),
+      source: String(l.between[0]),
+      target: String(l.between[1]),
+      pos: loc.pos(at),
+      sourcePos: loc.pos([...at, 'between', 0]),
+      targetPos: loc.pos([...at, 'between', 1]),
+      ...(l.length_km !== undefined ? { length: l.length_km } : {}),
+      ...(l.latency_ms !== undefined ? { latency: l.latency_ms } : {}),
+      ...(l.capacity_gbps !== undefined ? { capacity: l.capacity_gbps } : {}),
+      riskGroups: (l.risk_groups ?? []).map(String),
+      hardened: l.hardened ?? false,
+    });
+  });
+  (d.demands ?? []).forEach((dm, i) => {
+    const at = ['demands', i];
+    b.addDemand(String(dm.between[0]), String(dm.between[1]), dm.volume, loc.pos(at), [
+      loc.pos([...at, 'between', 0]),
+      loc.pos([...at, 'between', 1]),
+    ], `demands[${i}]`);
+  });
+
+  const t = b.finish({
+    ...(d.network?.name !== undefined ? { name: d.network.name } : {}),
+    ...(d.latency_budget !== undefined ? { latencyBudget: d.latency_budget } : {}),
+    metadata: d.metadata ?? {},
+  });
+  if (d.network?.description !== undefined) t.description = d.network.description;
+  return t;
+}
