@@ -1,0 +1,170 @@
+// Words and numbers shared by the human views (terminal, HTML): how a challenge, a status or
+// a number is written, and where an element's line is found. Pure; no colour, no markup.
+
+import type { ChallengeName, ElementKind } from '../envelope/types.js';
+import type { FileReport, FileStatus, RequirementResult } from './report.js';
+
+
+const CHALLENGE_LABEL: Record<ChallengeName, string> = {
+  'random-nodes': 'random site failures',
+  'random-links': 'random link failures',
+  degree: 'degree attack',
+  'degree-adaptive': 'adaptive degree attack',
+  betweenness: 'betweenness attack',
+  'betweenness-adaptive': 'adaptive betweenness attack',
+  eigenvector: 'eigenvector attack',
+  closeness: 'closeness attack',
+  'link-betweenness': 'link betweenness attack',
+  'link-betweenness-adaptive': 'adaptive link betweenness attack',
+  'risk-groups': 'random shared-risk group failures',
+  'risk-groups-worst': 'worst-first shared-risk groups',
+  regional: 'regional outages',
+  'n-1': 'single element loss (N\u22121)',
+  'n-2': 'double element loss (N\u22122)',
+};
+
+export function challengeLabel(c: ChallengeName): string {
+  return CHALLENGE_LABEL[c] ?? c;
+}
+
+const KIND_PLURAL: Record<ElementKind, string> = { node: 'sites', link: 'links', group: 'shared-risk groups' };
+
+export function kindPlural(k: ElementKind): string {
+  return KIND_PLURAL[k] ?? k;
+}
+
+export function kindSingular(k: ElementKind): string {
+  return k === 'node' ? 'site' : k === 'group' ? 'shared-risk group' : 'link';
+}
+
+/** The x-axis caption of an envelope chart. */
+export function xAxisLabel(kind: ElementKind, xUnit: 'fraction' | 'km'): string {
+  return xUnit === 'km' ? 'outage radius (km)' : `fraction of ${kindPlural(kind)} removed`;
+}
+
+/** A value of R or a metric: three decimals, a real minus sign, "–" when absent. */
+export function formatValue(v: number | null | undefined): string {
+  if (v === null || v === undefined || Number.isNaN(v)) return '\u2013';
+  return minus(v.toFixed(3));
+}
+
+/** Whether a requirement counts things (bridges, cut nodes): shown as whole numbers. */
+export function isCountRequirement(r: RequirementResult): boolean {
+  const vals = [r.base, r.head, r.delta, r.threshold].filter((v): v is number => v !== null);
+  return r.se === 0 && vals.every(Number.isInteger) && (/spof|bridge|cut/.test(r.id) || vals.some((v) => Math.abs(v) > 1));
+}
+
+/** A requirement's value: whole numbers for counts, else as formatValue. */
+export function formatRequirementValue(r: RequirementResult, v: number | null): string {
+  return v !== null && isCountRequirement(r) ? String(v) : formatValue(v);
+}
+
+/** A requirement's delta: signed whole numbers for counts, else as formatDelta. */
+export function formatRequirementDelta(r: RequirementResult): string {
+  if (r.delta === null || !isCountRequirement(r)) return formatDelta(r.delta);
+  return r.delta > 0 ? `+${r.delta}` : r.delta < 0 ? `\u2212${-r.delta}` : '0';
+}
+
+/** A signed delta: "+0.012", "\u22120.040", "0.000" for an exact zero (never "\u22120.000"). */
+export function formatDelta(v: number | null | undefined): string {
+  if (v === null || v === undefined || Number.isNaN(v)) return '\u2013';
+  const text = Math.abs(v).toFixed(3);
+  if (Number(text) === 0) return '0.000';
+  return (v > 0 ? '+' : '\u2212') + text;
+}
+
+/** "\u00b1 0.004" for a Monte Carlo error; empty for deterministic values (se 0) and absent ones. */
+export function formatError(se: number | null | undefined): string {
+  if (se === null || se === undefined || Number.isNaN(se) || se === 0) return '';
+  return `\u00b1 ${se < 0.0005 ? '<0.001' : se.toFixed(3)}`;
+}
+
+export function formatFraction(x: number): string {
+  return `${Math.round(x * 1000) / 10} %`;
+}
+
+function minus(text: string): string {
+  return text.startsWith('-') ? `\u2212${text.slice(1)}` : text;
+}
+
+export const STATUS_WORD: Record<FileStatus, string> = {
+  pass: 'pass',
+  regressed: 'regressed',
+  'below-threshold': 'below threshold',
+  new: 'new design',
+  removed: 'removed',
+  renamed: 'renamed',
+  error: 'could not be read',
+};
+
+export const REQUIREMENT_STATUS_WORD: Record<RequirementResult['status'], string> = {
+  met: 'met',
+  missed: 'missed',
+  regressed: 'regressed',
+  'within-noise': 'within noise',
+  uncertain: 'uncertain',
+};
+
+/** Whether a file, on its own, fails the gate: any fail-severity finding, or an error. */
+export function fileFails(f: FileReport): boolean {
+  return f.status === 'error' || f.findings.some((x) => x.severity === 'fail');
+}
+
+/** Whether a file has warnings (and no failure). */
+export function fileWarns(f: FileReport): boolean {
+  return !fileFails(f) && f.findings.some((x) => x.severity === 'warn');
+}
+
+/** id → line for every element the file's report names (findings first, then structure). */
+export function elementLines(f: FileReport): Map<string, number> {
+  const lines = new Map<string, number>();
+  const add = (id: string, line: number) => {
+    if (line > 0 && !lines.has(id)) lines.set(id, line);
+  };
+  for (const finding of f.findings) for (const e of finding.elements) add(e.id, e.line);
+  for (const side of [f.head, f.base]) {
+    if (!side) continue;
+    for (const e of side.structure.bridges) add(e.id, e.line);
+    for (const e of side.structure.cutNodes) add(e.id, e.line);
+  }
+  return lines;
+}
+
+/** "kaskeld (line 14)", or the bare id when its line is unknown. */
+export function elementWithLine(id: string, lines: ReadonlyMap<string, number>): string {
+  const line = lines.get(id);
+  return line ? `${id} (line\u00a0${line})` : id;
+}
+
+export interface NamedSequence {
+  /** "Worst case found under random site failures (exact search, 3 sites)". */
+  title: string;
+  ids: string[];
+  /** R after each step, when known. */
+  values?: number[];
+}
+
+/**
+ * The sequences a planner acts on, in this order and without repeats: each envelope's worst
+ * case, the gate's weakest-sequence findings, then each envelope's weakest realization.
+ */
+export function weakestSequences(f: FileReport): NamedSequence[] {
+  const seen = new Set<string>();
+  const out: NamedSequence[] = [];
+  const add = (title: string, ids: string[], values?: number[]) => {
+    const key = ids.join('\u0000');
+    if (!ids.length || seen.has(key)) return;
+    seen.add(key);
+    out.push(values && values.length ? { title, ids, values } : { title, ids });
+  };
+  for (const env of f.head?.envelopes ?? []) {
+    const wc = env.worstCase;
+    if (wc) add(`Worst case found under ${challengeLabel(env.challenge)} (${wc.method} search, ${wc.k} ${wc.k === 1 ? kindSingular(wc.kind) : kindPlural(wc.kind)})`, wc.elements, wc.values);
+  }
+  for (const x of f.findings) if (x.rule === 'weakest-sequence') add(x.message, x.elements.map((e) => e.id));
+  for (const env of f.head?.envelopes ?? []) {
+    const w = env.weakest[0];
+    if (w) add(`Weakest realization${w.realization !== undefined ? ` #${w.realization}` : ''} under ${challengeLabel(env.challenge)}`, w.elements, w.values);
+  }
+  return out;
+}
