@@ -44,6 +44,8 @@ export interface ChallengeParams {
   /** For n-1 / n-2: which kind of element. */
   element?: 'node' | 'link';
   threads?: number;
+  /** x values that must be grid points (policy thresholds), merged into the grid. */
+  at?: number[];
 }
 
 /** A removal sequence reported to the user: element ids in removal order. */

@@ -1,0 +1,64 @@
+// Targeted node attacks by shortest-path betweenness (Brandes 2001, see brandes.ts).
+// Static: ranked once on the intact design ("IB"); adaptive: recomputed after every removal
+// ("RB"; Holme, Kim, Yoon & Han, PRE 65:056109, 2002). After a removal only the component
+// that held the removed node is recomputed — every other component's scores are exactly
+// unchanged — and components of two nodes or fewer have no betweenness at all (SCIENCE.md §6).
+// Cost: O(N·L) static; adaptive at most O(K·N·L) for K steps.
+
+import type { CompactGraph } from '../graph/compact.js';
+import { createMask } from '../graph/mask.js';
+import type { AttackChallenge } from './types.js';
+import { accumulateBetweenness, allNodes, componentOf, createBrandesWorkspace } from './brandes.js';
+import { argmaxTied, rankScores } from './rank.js';
+import { eligibleUnits } from './units.js';
+
+export function nodeBetweenness(g: CompactGraph): Float64Array {
+  const score = new Float64Array(g.n);
+  accumulateBetweenness(g, createMask(g), allNodes(g), score, null);
+  return score;
+}
+
+export function staticBetweennessOrder(g: CompactGraph, steps: number): Int32Array {
+  return rankScores(nodeBetweenness(g), eligibleUnits(g, 'node'), steps);
+}
+
+export function adaptiveBetweennessOrder(g: CompactGraph, steps: number): Int32Array {
+  const mask = createMask(g);
+  const ws = createBrandesWorkspace(g);
+  const score = new Float64Array(g.n);
+  accumulateBetweenness(g, mask, allNodes(g), score, null, ws);
+  const candidate = eligibleUnits(g, 'node');
+  const seen = new Uint8Array(g.n);
+  const comp = new Int32Array(g.n);
+  const out: number[] = [];
+  while (out.length < steps) {
+    const v = argmaxTied(score, candidate);
+    if (v < 0) break;
+    out.push(v);
+    const size = componentOf(g, mask, v, seen, comp);
+    mask.node[v] = 1;
+    candidate[v] = 0;
+    score[v] = 0;
+    if (size <= 1) continue;
+    for (let i = 0; i < size; i++) score[comp[i]] = 0;
+    if (size <= 3) continue; // what is left has at most two nodes per component: no betweenness
+    accumulateBetweenness(g, mask, comp.subarray(0, size), score, null, ws);
+  }
+  return Int32Array.from(out);
+}
+
+export const betweenness: AttackChallenge = {
+  name: 'betweenness',
+  type: 'attack',
+  kind: 'node',
+  summary: 'targeted attack: nodes by shortest-path betweenness on the intact design, highest first',
+  sequence: (g, steps) => staticBetweennessOrder(g, steps),
+};
+
+export const betweennessAdaptive: AttackChallenge = {
+  name: 'betweenness-adaptive',
+  type: 'attack',
+  kind: 'node',
+  summary: 'targeted attack: the node with the highest current betweenness, recomputed after every removal',
+  sequence: (g, steps) => adaptiveBetweennessOrder(g, steps),
+};

@@ -1,0 +1,87 @@
+// The R-value: one number in [0, 1] per state of the design, combining normalized metrics
+// (SCIENCE.md §2, the R-model: R = Σ s_i t_i with weights s_i summing to 1) either as their
+// weighted mean or as their minimum (a "weakest aspect" score; weights only select metrics).
+// One metric alone is the common case.
+
+import type { CompactGraph } from '../graph/compact.js';
+import type { Mask } from '../graph/mask.js';
+import { getMetric } from '../metrics/registry.js';
+import type { CostClass, MetricId, MetricOptions } from '../metrics/types.js';
+import type { RValueSpec } from './types.js';
+import type { ConnectivityCurve } from './union-find.js';
+
+export type RFunction = (mask: Mask) => number;
+
+export function validateRSpec(spec: RValueSpec): void {
+  if (spec.metrics.length === 0) throw new RangeError('the R-value needs at least one metric');
+  for (const m of spec.metrics) {
+    if (!(m.weight > 0) || !Number.isFinite(m.weight)) throw new RangeError(`metric ${m.id}: weight must be > 0, got ${m.weight}`);
+  }
+  if (spec.combine !== 'mean' && spec.combine !== 'min') throw new RangeError(`combine must be "mean" or "min"`);
+}
+
+/** Combines normalized values in spec order; the one formula every path uses, so results agree bit for bit. */
+export function combineR(spec: RValueSpec, values: ArrayLike<number>): number {
+  if (spec.combine === 'min') {
+    let r = Infinity;
+    for (let i = 0; i < values.length; i++) if (values[i] < r) r = values[i];
+    return r;
+  }
+  let sum = 0;
+  let weight = 0;
+  for (let i = 0; i < values.length; i++) {
+    sum += spec.metrics[i].weight * values[i];
+    weight += spec.metrics[i].weight;
+  }
+  return sum / weight;
+}
+
+export function createRValue(g: CompactGraph, spec: RValueSpec, options?: MetricOptions): RFunction {
+  validateRSpec(spec);
+  const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, options));
+  const values = new Float64Array(evaluators.length);
+  return (mask) => {
+    for (let i = 0; i < evaluators.length; i++) values[i] = evaluators[i](mask).normalized;
+    return combineR(spec, values);
+  };
+}
+
+const UNION_FIND_METRICS: ReadonlySet<MetricId> = new Set(['largest_component', 'pair_connectivity']);
+
+/**
+ * When R uses only largest_component and pair_connectivity, R after k removals follows from a
+ * union–find curve (union-find.ts) with no per-step recomputation: returns that mapping, with
+ * exactly the normalisations of the registry metrics. Otherwise null.
+ */
+export function unionFindR(g: CompactGraph, spec: RValueSpec): ((curve: ConnectivityCurve, k: number) => number) | null {
+  if (!spec.metrics.every((m) => UNION_FIND_METRICS.has(m.id))) return null;
+  const n = g.n;
+  const allPairs = (n * (n - 1)) / 2;
+  const values = new Float64Array(spec.metrics.length);
+  const ids = spec.metrics.map((m) => m.id);
+  return (curve, k) => {
+    for (let i = 0; i < ids.length; i++) {
+      values[i] =
+        ids[i] === 'largest_component'
+          ? n > 0
+            ? curve.lcc[k] / n
+            : 0
+          : allPairs > 0
+            ? curve.pairs[k] / allPairs
+            : 0;
+    }
+    return combineR(spec, values);
+  };
+}
+
+/**
+ * Work of one evaluation of R in "graph passes" (one pass visits every node and link once):
+ * linear metrics 1, all-pairs metrics N (one search per node), spectral 50 (a few dozen
+ * sparse products), flow N. The engine's budget multiplies passes by N + L.
+ */
+export function rPasses(g: CompactGraph, spec: RValueSpec): number {
+  const passes: Record<CostClass, number> = { linear: 1, 'all-pairs': Math.max(1, g.n), spectral: 50, flow: Math.max(1, g.n) };
+  let total = 0;
+  for (const m of spec.metrics) total += passes[getMetric(m.id).cost];
+  return total;
+}

@@ -1,0 +1,132 @@
+// Seeded randomness for the envelope engine. Two pieces:
+// - element keys: key = hash(seed, realization, stable element id). A random removal order is
+//   the eligible elements sorted by key, so two versions of a design (base and head) give the
+//   elements they share the same relative order in every realization (common random numbers,
+//   SCIENCE.md §8), and the order never depends on the thread that computes it.
+// - a small generator (xoshiro128**, Blackman & Vigna, "Scrambled linear pseudorandom number
+//   generators", ACM TOMS 47:36, 2021) seeded from (seed, stream) through the murmur3
+//   finaliser, for the few places that need a stream of numbers (bootstrap resampling).
+// All arithmetic is 32-bit integer (Math.imul, >>>), so results are identical on every engine.
+
+/** murmur3's 32-bit finaliser (Appleby, MurmurHash3, public domain): a bijective avalanche mix. */
+export function mix32(h: number): number {
+  h ^= h >>> 16;
+  h = Math.imul(h, 0x85ebca6b);
+  h ^= h >>> 13;
+  h = Math.imul(h, 0xc2b2ae35);
+  h ^= h >>> 16;
+  return h >>> 0;
+}
+
+/** A 32-bit hash of a string's UTF-16 code units (murmur3-style body, mix32 finaliser). */
+export function hashString(s: string, seed: number): number {
+  let h = seed >>> 0;
+  for (let i = 0; i < s.length; i++) {
+    let k = Math.imul(s.charCodeAt(i), 0xcc9e2d51);
+    k = (k << 15) | (k >>> 17);
+    h ^= Math.imul(k, 0x1b873593);
+    h = (h << 13) | (h >>> 19);
+    h = (Math.imul(h, 5) + 0xe6546b64) | 0;
+  }
+  return mix32(h ^ s.length);
+}
+
+/** Folds an arbitrary integer seed (up to 2^53) into 32 bits without losing its high part. */
+export function seedWord(seed: number): number {
+  if (!Number.isSafeInteger(seed) || seed < 0) throw new RangeError(`seed must be a non-negative integer, got ${seed}`);
+  const lo = seed >>> 0;
+  const hi = Math.floor(seed / 0x1_0000_0000) >>> 0;
+  return mix32(lo ^ mix32(hi ^ 0x9e3779b9));
+}
+
+/** Stable per-element hashes, computed once per design: one 32-bit word per id. */
+export function hashIds(ids: readonly string[]): Uint32Array {
+  const out = new Uint32Array(ids.length);
+  for (let i = 0; i < ids.length; i++) out[i] = hashString(ids[i], 0x6e627263);
+  return out;
+}
+
+/** The key of one element in one realization: hash(seed, realization, element id). */
+export function elementKey(seedW: number, realization: number, idHash: number): number {
+  const r = mix32((Math.imul(realization + 1, 0x9e3779b9) ^ seedW) >>> 0);
+  return mix32((idHash ^ r) + Math.imul(r, 0x27d4eb2d) + 0x165667b1);
+}
+
+/** Indices are packed below the 32-bit key: 2^21 > the 2,000,000-element design limit. */
+const INDEX_BITS = 21;
+const INDEX_SPAN = 2 ** INDEX_BITS;
+
+/**
+ * The random removal order of one realization: the eligible elements (eligible[i] === 1, or all
+ * when `eligible` is null) in ascending key order; equal keys (a 2^-32 event) go to the lower
+ * index. Writes into `out` and returns how many elements it holds. `scratch` must have room for
+ * every element.
+ */
+export function randomOrder(
+  idHash: Uint32Array,
+  eligible: Uint8Array | null,
+  seedW: number,
+  realization: number,
+  out: Int32Array,
+  scratch: Float64Array = new Float64Array(idHash.length),
+): number {
+  const n = idHash.length;
+  if (n > INDEX_SPAN) throw new RangeError(`at most ${INDEX_SPAN} elements can be ordered, got ${n}`);
+  let count = 0;
+  for (let i = 0; i < n; i++) {
+    if (eligible !== null && eligible[i] === 0) continue;
+    scratch[count++] = elementKey(seedW, realization, idHash[i]) * INDEX_SPAN + i;
+  }
+  // Keys < 2^53 are exact doubles, so the typed-array numeric sort orders (key, index) exactly.
+  const keys = scratch.subarray(0, count).sort();
+  for (let j = 0; j < count; j++) out[j] = keys[j] % INDEX_SPAN;
+  return count;
+}
+
+/** xoshiro128**: a fast 32-bit generator with a 2^128 − 1 period. */
+export class Xoshiro128 {
+  private a: number;
+  private b: number;
+  private c: number;
+  private d: number;
+
+  constructor(seed: number, stream = 0) {
+    const s = seedWord(seed);
+    const t = mix32((Math.imul(stream + 1, 0x9e3779b9) ^ s) >>> 0);
+    this.a = mix32(s ^ 0x243f6a88) | 1;
+    this.b = mix32(t ^ 0x85a308d3);
+    this.c = mix32((s + t) ^ 0x13198a2e);
+    this.d = mix32((t - s) ^ 0x03707344);
+  }
+
+  /** Next uniform 32-bit unsigned integer. */
+  nextUint32(): number {
+    const result = Math.imul(rotl(Math.imul(this.b, 5), 7), 9) >>> 0;
+    const t = this.b << 9;
+    this.c ^= this.a;
+    this.d ^= this.b;
+    this.b ^= this.c;
+    this.a ^= this.d;
+    this.c ^= t;
+    this.d = rotl(this.d, 11);
+    return result;
+  }
+
+  /** Uniform in [0, 1) with 32 random bits. */
+  nextFloat(): number {
+    return this.nextUint32() / 0x1_0000_0000;
+  }
+
+  /** Uniform integer in [0, n), unbiased (rejection of the short tail). */
+  nextInt(n: number): number {
+    const limit = 0x1_0000_0000 - (0x1_0000_0000 % n);
+    for (;;) {
+      const u = this.nextUint32();
+      if (u < limit) return u % n;
+    }
+  }
+}
+
+function rotl(x: number, k: number): number {
+  return (x << k) | (x >>> (32 - k));
+}
