@@ -1,0 +1,130 @@
+// The report as workflow annotations: one per finding, on the design file at the line of the
+// element concerned. GitHub keeps at most 10 errors, 10 warnings and 10 notices per step and
+// drops the rest silently, so the list is ranked (severity, then whether the line is one the
+// change touched, since only those show inline in "Files changed") and cut to the budget,
+// and a last notice says how many more there are and where. Pure: the shell turns the list
+// into @actions/core calls.
+
+import { logText, oneLine } from './escape.js';
+import { findingNumbers, repoPath } from './finding-text.js';
+import { SEVERITY_RANK, rankFiles } from './rank.js';
+import type { Finding, Report, Severity } from './report.js';
+
+export type AnnotationLevel = 'error' | 'warning' | 'notice';
+
+export interface Annotation {
+  level: AnnotationLevel;
+  /** Repository-relative path with forward slashes. */
+  file: string;
+  startLine: number;
+  startColumn?: number;
+  title: string;
+  message: string;
+  /** The finding kind; "more" for the closing notice about findings left out. */
+  rule: Finding['rule'] | 'more';
+  /** Whether the line is one the change touched (annotations show inline only there). */
+  inDiff: boolean;
+}
+
+export interface AnnotationOptions {
+  /** Annotations per level per step; GitHub keeps 10. */
+  perLevel?: number;
+  /** Joined before report paths to make them repository-relative (the working directory). */
+  pathPrefix?: string;
+  /** Lines touched at head per repository-relative path; a path not in the map: unknown. */
+  changedLines?: ReadonlyMap<string, ReadonlySet<number>>;
+  /** Where the rest can be read, for the closing notice. */
+  elsewhere?: string;
+}
+
+export interface AnnotationPlan {
+  /** What to emit, in order (the closing notice, if any, is last). */
+  annotations: Annotation[];
+  /** Findings that did not fit the budget. */
+  omitted: number;
+  /** Findings in the report. */
+  total: number;
+}
+
+export const ANNOTATIONS_PER_LEVEL = 10;
+
+const LEVEL: Record<Severity, AnnotationLevel> = { fail: 'error', warn: 'warning', notice: 'notice' };
+
+const TITLE: Record<Finding['rule'], string> = {
+  'r-threshold': 'r-threshold missed',
+  'area-floor': 'envelope area below its floor',
+  'spread-ceiling': 'envelope spread above its ceiling',
+  'n-1': 'N\u22121 rule broken',
+  'new-bridge': 'new single point of failure (bridge)',
+  'new-cut-node': 'new single point of failure (cut site)',
+  regression: 'robustness regressed',
+  'weakest-sequence': 'weakest removal sequence',
+  'parse-error': 'design could not be read',
+  'removed-design': 'design removed',
+  'policy-changed': 'policy changed (applies after merge)',
+  degraded: 'evaluation reduced by budget',
+};
+
+
+
+/** Every finding as an annotation, ranked, before the budget is applied. */
+export function annotationsOf(report: Report, options: AnnotationOptions = {}): Annotation[] {
+  const out: Annotation[] = [];
+  for (const f of rankFiles(report.files)) {
+    const file = repoPath(options.pathPrefix, f.path);
+    const touched = options.changedLines?.get(file);
+    const findings = [...f.findings];
+    if (f.status === 'error' && f.error && !findings.some((x) => x.rule === 'parse-error')) {
+      findings.push({ rule: 'parse-error', severity: 'fail', message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
+    }
+    for (const x of findings) {
+      const startLine = Math.max(1, Math.floor(x.line || 1));
+      out.push({
+        level: LEVEL[x.severity],
+        file,
+        startLine,
+        ...(x.column && x.column > 0 ? { startColumn: Math.floor(x.column) } : {}),
+        title: oneLine(`netbrace: ${TITLE[x.rule] ?? x.rule}`, 200),
+        message: logText(`${x.message}${findingNumbers(x)}`),
+        rule: x.rule,
+        inDiff: touched ? touched.has(startLine) : false,
+      });
+    }
+  }
+  const rank = (a: Annotation) => SEVERITY_RANK[a.level === 'error' ? 'fail' : a.level === 'warning' ? 'warn' : 'notice'];
+  // Stable sort: within a severity, touched lines first, then the files' worst-first order.
+  return out.sort((a, b) => rank(a) - rank(b) || Number(b.inDiff) - Number(a.inDiff));
+}
+
+/** The annotations to emit within GitHub's per-step budget, and a closing notice for the rest. */
+export function planAnnotations(report: Report, options: AnnotationOptions = {}): AnnotationPlan {
+  const perLevel = options.perLevel ?? ANNOTATIONS_PER_LEVEL;
+  const all = annotationsOf(report, options);
+  const taken: Annotation[] = [];
+  const used: Record<AnnotationLevel, number> = { error: 0, warning: 0, notice: 0 };
+  // If anything is left out, the last notice slot is the closing notice.
+  const fitsAll = (['error', 'warning', 'notice'] as AnnotationLevel[]).every((l) => all.filter((a) => a.level === l).length <= perLevel);
+  const cap: Record<AnnotationLevel, number> = { error: perLevel, warning: perLevel, notice: fitsAll ? perLevel : perLevel - 1 };
+  for (const a of all) {
+    if (used[a.level] < cap[a.level]) {
+      taken.push(a);
+      used[a.level]++;
+    }
+  }
+  const omitted = all.length - taken.length;
+  if (omitted > 0) {
+    const elsewhere = options.elsewhere ?? 'the job summary and the SARIF file';
+    taken.push({
+      level: 'notice',
+      file: '',
+      startLine: 0,
+      title: 'netbrace: more findings',
+      message: logText(
+        `${omitted} more finding${omitted === 1 ? '' : 's'} (of ${all.length}) not annotated here: GitHub shows at most ${perLevel} annotations per level and step. All of them are in ${elsewhere}.`,
+      ),
+      rule: 'more',
+      inDiff: false,
+    });
+  }
+  return { annotations: taken, omitted, total: all.length };
+}

@@ -1,0 +1,23 @@
+// Small text helpers the GitHub views share: a finding's numbers in words and the
+// repository-relative path of a report path. Pure.
+
+import { formatDelta, formatError, formatValue } from './labels.js';
+import type { Finding } from './report.js';
+
+/** " (base 0.742, head 0.680, Δ −0.062 ± 0.004)", or "" when the finding has no numbers. */
+export function findingNumbers(x: Finding, deltaWord = '\u0394'): string {
+  const parts: string[] = [];
+  if (x.base !== undefined && x.base !== null) parts.push(`base ${formatValue(x.base)}`);
+  if (x.head !== undefined && x.head !== null) parts.push(`head ${formatValue(x.head)}`);
+  if (x.delta !== undefined && x.delta !== null) {
+    const err = formatError(x.se);
+    parts.push(`${deltaWord} ${formatDelta(x.delta)}${err ? ` ${err}` : ''}`);
+  }
+  return parts.length ? ` (${parts.join(', ')})` : '';
+}
+
+/** `prefix/p` with forward slashes; the prefix is the working directory within the repository. */
+export function repoPath(prefix: string | undefined, p: string): string {
+  const clean = (prefix ?? '').replace(/\\/g, '/').replace(/^\.(\/|$)/, '').replace(/\/+$/, '');
+  return clean ? `${clean}/${p}` : p;
+}

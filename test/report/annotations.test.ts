@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import { annotationsOf, planAnnotations } from '../../src/report/annotations.js';
+import { hugeReport, sampleReport } from './sample-report.js';
+
+describe('annotations', () => {
+  it('puts each finding on its design file at the element\u2019s line, with title and numbers', () => {
+    const all = annotationsOf(sampleReport());
+    const bridge = all.find((a) => a.rule === 'new-bridge')!;
+    expect(bridge).toMatchObject({ level: 'error', file: 'backbone/core.net.yaml', startLine: 42 });
+    expect(bridge.title).toBe('netbrace: new single point of failure (bridge)');
+    const regression = all.find((a) => a.rule === 'regression')!;
+    expect(regression.message).toContain('(base 0.742, head 0.680, \u0394 \u22120.062 \u00b1 0.004)');
+    const parse = all.find((a) => a.rule === 'parse-error')!;
+    expect(parse).toMatchObject({ file: 'edge/west.net.yaml', startLine: 7, startColumn: 13, level: 'error' });
+  });
+
+  it('ranks by severity, then lines the change touched', () => {
+    const changed = new Map([['metro/north.graphml', new Set([88])]]);
+    const all = annotationsOf(sampleReport(), { changedLines: changed });
+    const levels = all.map((a) => a.level);
+    expect(levels).toEqual([...levels].sort((a, b) => ['error', 'warning', 'notice'].indexOf(a) - ['error', 'warning', 'notice'].indexOf(b)));
+    const warnings = all.filter((a) => a.level === 'warning');
+    expect(warnings[0]).toMatchObject({ file: 'metro/north.graphml', startLine: 88, inDiff: true });
+    expect(warnings[1].inDiff).toBe(false);
+  });
+
+  it('emits everything, with no closing notice, when the budget suffices', () => {
+    const plan = planAnnotations(sampleReport());
+    expect(plan.omitted).toBe(0);
+    expect(plan.annotations.length).toBe(plan.total);
+    expect(plan.annotations.some((a) => a.rule === 'more')).toBe(false);
+  });
+
+  it('keeps 10 per level and ends with a notice counting the rest', () => {
+    const r = hugeReport(20, 30); // 600 findings, 200 of each severity
+    const plan = planAnnotations(r);
+    const count = (l: string) => plan.annotations.filter((a) => a.level === l).length;
+    expect(count('error')).toBe(10);
+    expect(count('warning')).toBe(10);
+    expect(count('notice')).toBe(10); // 9 findings + the closing notice
+    const last = plan.annotations[plan.annotations.length - 1];
+    expect(last.rule).toBe('more');
+    expect(plan.omitted).toBe(600 - 29);
+    expect(last.message).toContain(`${600 - 29} more findings (of 600)`);
+    expect(last.message).toContain('the job summary and the SARIF file');
+  });
+
+  it('prefixes the working directory and never points at line 0', () => {
+    const r = sampleReport();
+    r.files[1].findings[1].line = 0;
+    const all = annotationsOf(r, { pathPrefix: 'networks/' });
+    expect(all.every((a) => a.file.startsWith('networks/'))).toBe(true);
+    expect(all.every((a) => a.startLine >= 1)).toBe(true);
+  });
+
+  it('defuses workflow commands and invisible characters in messages', () => {
+    const r = sampleReport();
+    r.files[1].findings[0].message = 'bad\n::error file=x,line=1::forged\u202E';
+    const a = annotationsOf(r).find((x) => x.rule === 'new-bridge')!;
+    expect(a.message.split('\n').some((l) => l.startsWith('::'))).toBe(false);
+    expect(a.message).not.toContain('\u202E');
+  });
+});
