@@ -132,6 +132,7 @@ export function parseEdgeList(text: string, file: string, options: BuilderOption
     const mapped = mapLinkAttributes(raw, b, (k) => where.get(k) ?? pos);
     const id = idCol >= 0 ? cells[idCol].text.trim() : '';
     b.addLink({
+      what: `row ${r + 1}`,
       ...(id !== '' ? { id } : {}),
       source: ends[0].text.trim(),
       target: ends[1].text.trim(),

@@ -216,5 +216,5 @@ function readEdge(edge: GmlPair, body: GmlPair[], b: TopologyBuilder): void {
   const d = scalarId(target);
   if (s === undefined || d === undefined) throw b.error('edge "source" and "target" must be node ids', edge.pos);
   const mapped = mapLinkAttributes(raw, b, (k) => where.get(k) ?? edge.pos);
-  b.addLink({ ...(id !== undefined ? { id } : {}), source: s, target: d, pos: edge.pos, sourcePos: source.pos, targetPos: target.pos, ...mapped });
+  b.addLink({ what: id !== undefined ? `edge "${id}"` : 'edge', ...(id !== undefined ? { id } : {}), source: s, target: d, pos: edge.pos, sourcePos: source.pos, targetPos: target.pos, ...mapped });
 }

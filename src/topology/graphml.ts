@@ -46,7 +46,6 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
   const nodes: Element[] = [];
   const edges: Element[] = [];
   const metadata: Record<string, unknown> = {};
-  const metadataPos = new Map<string, SourcePos>();
 
   // What we are inside of: element names from the root, and the element being filled.
   const stack: string[] = [];
@@ -62,6 +61,7 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
   let warnedDirected = false;
   let warnedNested = false;
   let tagStart: SourcePos = { line: 1, column: 1 };
+  let graphId: string | undefined;
 
   const here = (): SourcePos => ({ line: parser.line, column: parser.column + 1 });
   const directed = (pos: SourcePos, how: string) => {
@@ -71,21 +71,23 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
   };
 
   parser.on('error', (err) => {
-    const message = err.message.replace(/^[^:]*:\d+:\d+: /, '');
+    // saxes prefixes its own (0-based) position and ends with a full stop; we give ours.
+    const message = err.message.replace(/^(?:[^:\n]*:)?\d+:\d+: /, '').replace(/\.$/, '');
     throw b.error(`malformed XML: ${message}`, here(), 'the file is not well-formed XML; check the tag at this point');
   });
   parser.on('doctype', (doctype) => {
     if (/<!ENTITY/i.test(doctype)) {
       throw b.error(
         'the XML declares entities in a DOCTYPE, which netbrace refuses',
-        tagStart,
+        offsetPos(text, text.search(/<!DOCTYPE/i)),
         'entity declarations can expand without bound ("billion laughs"); GraphML needs none — remove the DOCTYPE',
       );
     }
   });
   parser.on('opentagstart', (tag) => {
-    // saxes reports the position after the tag name; the tag began at its "<".
-    tagStart = { line: parser.line, column: Math.max(1, parser.column - tag.name.length) };
+    // saxes reports the position after the tag name and the character that ended it;
+    // the tag began at its "<".
+    tagStart = { line: parser.line, column: Math.max(1, parser.column - tag.name.length - 1) };
   });
   parser.on('opentag', (tag: SaxesTagPlain) => {
     const name = localName(tag.name);
@@ -112,6 +114,7 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
         break;
       case 'graph':
         graphDepth++;
+        if (graphDepth === 1 && attrs.id) graphId = attrs.id;
         if (graphDepth > 1 && !warnedNested) {
           warnedNested = true;
           b.warn('nested <graph> found; its nodes and edges are read into the one design', pos);
@@ -164,7 +167,6 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
           current.dataPos.set(attrName, dataPos);
         } else if (graphDepth > 0) {
           metadata[attrName] = value;
-          metadataPos.set(attrName, dataPos);
         }
         dataKey = undefined;
         break;
@@ -214,11 +216,23 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
       delete data.id;
     }
     const mapped = mapLinkAttributes(data, b, (k) => e.dataPos.get(k) ?? e.pos);
-    b.addLink({ ...(id !== undefined ? { id } : {}), source: e.attrs.source, target: e.attrs.target, pos: e.pos, ...mapped });
+    b.addLink({ what: id !== undefined ? `edge "${id}"` : 'edge', ...(id !== undefined ? { id } : {}), source: e.attrs.source, target: e.attrs.target, pos: e.pos, ...mapped });
   }
 
-  const name = metadata.label ?? metadata.Network ?? metadata.name;
+  const name = metadata.label ?? metadata.Network ?? metadata.name ?? graphId;
   return b.finish({ ...(typeof name === 'string' ? { name } : {}), metadata });
+}
+
+/** 1-based line and column of a string offset (for the rare error found outside saxes). */
+function offsetPos(text: string, offset: number): SourcePos {
+  if (offset < 0) return { line: 1, column: 1 };
+  let line = 1;
+  let start = 0;
+  for (let i = text.indexOf('\n'); i >= 0 && i < offset; i = text.indexOf('\n', i + 1)) {
+    line++;
+    start = i + 1;
+  }
+  return { line, column: offset - start + 1 };
 }
 
 /** `y:ShapeNode` → `ShapeNode`; GraphML's own elements are unprefixed or in its namespace. */

@@ -27,15 +27,15 @@ export function utf8Length(text: string): number {
 /** Refuses text over the byte limit (cheap bounds first: each UTF-16 unit is 1–3 bytes). */
 export function checkSize(text: string, file: string, maxBytes = DEFAULT_MAX_BYTES): void {
   if (text.length * 3 <= maxBytes) return;
-  const bytes = text.length > maxBytes ? text.length : utf8Length(text);
+  const bytes = utf8Length(text);
   if (bytes > maxBytes) throw sizeError(file, bytes, maxBytes);
 }
 
 export function sizeError(file: string, bytes: number, maxBytes: number): LimitError {
   return new LimitError(
-    `the design file is ${bytes > maxBytes * 10 ? 'far ' : ''}larger than the limit (${bytes} bytes > ${maxBytes})`,
+    `the design file is larger than the limit (${bytes} bytes > ${maxBytes})`,
     { file },
-    'raise the limit (--max-bytes, or the policy\'s limit) if a file this large is intended',
+    'raise the limit (for the CLI: --max-bytes) if a file this large is intended',
   );
 }
 
@@ -54,6 +54,8 @@ export function parseDesign(text: string, file: string, options: ParseOptions = 
     );
   }
   checkSize(text, file, options.maxBytes ?? DEFAULT_MAX_BYTES);
+  // A byte-order mark is not content (and is invisible, so columns on line 1 still match).
+  if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
   const builderOptions = { maxElements: options.maxElements ?? DEFAULT_MAX_ELEMENTS };
   switch (format) {
     case 'native-yaml':

@@ -57,7 +57,7 @@ describe('GML', () => {
 
   it('edge to a missing node', () => {
     const e = caught(gml('graph [\n  node [ id 1 ]\n  node [ id 2 ]\n  edge [\n    source 1\n    target 3\n  ]\n]\n'));
-    expect(e.format()).toBe('wan.gml:6:5: link on line 4 refers to unknown node "3" — declare the node first, or fix the id');
+    expect(e.format()).toBe('wan.gml:6:5: edge refers to unknown node "3" — declare the node first, or fix the id');
   });
 
   it('edge without a target', () => {

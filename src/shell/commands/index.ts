@@ -1,5 +1,6 @@
 // The command table. Each command lives in its own file; add yours here.
 
 import type { Command } from '../io.js';
+import { inspectCommand } from './inspect.js';
 
-export const commands: Command[] = [];
+export const commands: Command[] = [inspectCommand];
