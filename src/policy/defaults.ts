@@ -1,0 +1,110 @@
+// The built-in policy for communication backbones, used when a repository has no policy
+// file, and the starter file `netbrace init` writes. Both are the same text, so what the
+// starter says is exactly what applies without one. Parameter choices are common practice
+// for a first gate, not a standard: tune them for the network at hand.
+
+export const DEFAULT_POLICY_PATH = '.netbrace.yaml';
+
+/** The name diagnostics use for the built-in policy. */
+export const BUILTIN_POLICY_NAME = '<built-in policy>';
+
+export const DEFAULT_DESIGN_GLOBS: readonly string[] = [
+  '**/*.graphml',
+  '**/*.gml',
+  '**/*.net.yaml',
+  '**/*.net.yml',
+  '**/*.net.json',
+];
+
+/** Default noise factor: drops below 2 standard errors are Monte Carlo noise (about 95 % two-sided, common practice). */
+export const DEFAULT_NOISE_FACTOR = 2;
+
+export const STARTER_POLICY = `# netbrace policy: what a network design must satisfy before a change to it merges.
+# Every key is optional; a key left out takes the value of the built-in policy, which is
+# exactly this file. Editors can check it against policy.schema.json (shipped in dist/).
+#
+# netbrace informs engineering judgement; it does not replace engineering studies.
+# Local codes, regulators' standards and licensed practice decide for real infrastructure.
+version: 1
+
+# Which files are designs (globs from the repository root; "format" forces a format).
+designs:
+  - files: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
+# ignore: ["archive/**"]
+
+# Seed of every random challenge: the same inputs and seed give the same report.
+seed: 1
+
+# R, the robustness value: normalized metrics (each in [0, 1]) combined into one number.
+r-value:
+  metrics:
+    pair_connectivity: 1   # share of node pairs that can still reach each other
+    efficiency: 1          # mean inverse hop distance
+  combine: mean            # mean (weighted) or min
+
+# Challenges, each under a name of your choosing (requirements refer to it).
+#   remove:   nodes | links | risk-groups | region
+#   order:    random (a Monte Carlo envelope) | degree | betweenness | eigenvector |
+#             closeness (targeted attacks, highest score first) | worst-first (risk groups)
+#   adaptive: true recomputes the attack's scores after every removal
+challenges:
+  node-failures:
+    remove: nodes
+    order: random
+    until: 0.2             # up to 20 % of the nodes fail
+    points: 5              # grid 0, 0.05, 0.1, 0.15, 0.2
+    realizations: 200
+    band: [0.1, 0.9]       # the envelope's lower and upper quantile
+  link-failures:
+    remove: links
+    order: random
+    until: 0.2
+    points: 5
+    realizations: 200
+    band: [0.1, 0.9]
+  degree-attack:
+    remove: nodes
+    order: degree
+    adaptive: true
+    until: 0.2
+
+# Requirements; severity is fail (the gate fails), warn or notice.
+requirements:
+  # A change may not add a bridge or a cut node that the base did not have.
+  - kind: no-new-spof
+    severity: fail
+  # Areas under the envelopes, tracked for regressions (no floor of their own).
+  - kind: area-floor
+    challenge: node-failures
+  - kind: area-floor
+    challenge: link-failures
+  - kind: area-floor
+    challenge: degree-attack
+  # Floors to set for your network, for example:
+  # - kind: r-threshold      # the 10 % quantile of R with 10 % of nodes failed
+  #   challenge: node-failures
+  #   at: 0.1
+  #   statistic: quantile
+  #   q: 0.1
+  #   min: 0.6
+  # - kind: n-1              # no single link failure drops R below 0.8
+  #   element: link
+  #   min: 0.8
+
+# How far a requirement's value may drop from the base to the head.
+regression:
+  allowed-drop: 0.02       # in units of R
+  noise-factor: 2          # a drop below 2 × its Monte Carlo error never fails
+  severity: fail
+
+# A deleted design file: fail | warn | notice | ignore.
+removed-designs: notice
+
+# Rules for some files only; they may add or tighten requirements, never loosen them.
+# overrides:
+#   - files: "core/**"
+#     requirements:
+#       - kind: n-1
+#         element: node
+#         min: 0.7
+`;

@@ -1,0 +1,359 @@
+// One policy file: YAML text → a checked PolicyFile whose every definition knows its line.
+// Schema checks (policy.schema.json, via ajv) come first, then the checks a schema cannot
+// express (which removal orders exist for what, grids, duplicates). Pure: the caller reads
+// the file; `extends` and overrides are applied in resolve.ts.
+
+import { Ajv, type ValidateFunction } from 'ajv';
+import { PolicyError } from '../errors.js';
+import type { ChallengeName, ChallengeParams, RValueSpec } from '../envelope/types.js';
+import type { MetricId } from '../metrics/types.js';
+import type { DesignFormat } from '../topology/model.js';
+import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
+import { DEFAULT_NOISE_FACTOR } from './defaults.js';
+import { requirementId } from './requirement-id.js';
+import schema from './policy.schema.json' with { type: 'json' };
+import { describePath as describe, throwSchemaErrors } from './schema-errors.js';
+import type {
+  ChallengeDef,
+  DesignGlob,
+  Override,
+  PolicyFile,
+  RegressionRule,
+  RemovalOrder,
+  RemovedSeverity,
+  RemoveWhat,
+  Requirement,
+  Severity,
+  ThresholdStatistic,
+  Where,
+} from './types.js';
+import { type Segment, YamlSource } from './yaml-source.js';
+
+let validator: ValidateFunction | undefined;
+
+function validate(data: unknown): ValidateFunction {
+  validator ??= new Ajv({ allErrors: true, verbose: true, discriminator: true, strict: false }).compile(schema);
+  validator(data);
+  return validator;
+}
+
+/** Which engine challenge a (remove, order, adaptive) triple is; undefined when it does not exist. */
+const ENGINE: Record<RemoveWhat, Partial<Record<RemovalOrder, { static?: ChallengeName; adaptive?: ChallengeName }>>> = {
+  nodes: {
+    random: { static: 'random-nodes' },
+    degree: { static: 'degree', adaptive: 'degree-adaptive' },
+    betweenness: { static: 'betweenness', adaptive: 'betweenness-adaptive' },
+    eigenvector: { static: 'eigenvector' },
+    closeness: { static: 'closeness' },
+  },
+  links: {
+    random: { static: 'random-links' },
+    betweenness: { static: 'link-betweenness', adaptive: 'link-betweenness-adaptive' },
+  },
+  'risk-groups': {
+    random: { static: 'risk-groups' },
+    'worst-first': { static: 'risk-groups-worst' },
+  },
+  region: {
+    random: { static: 'regional' },
+  },
+};
+
+type Obj = Record<string, unknown>;
+
+function globs(value: unknown): string[] {
+  return typeof value === 'string' ? [value] : (value as string[]);
+}
+
+class FileBuilder {
+  constructor(readonly src: YamlSource) {}
+
+  at(path: readonly Segment[], key = false): Where {
+    return this.src.where(path, key);
+  }
+
+  fail(message: string, path: readonly Segment[], hint = '', key = false): never {
+    throw new PolicyError(message, this.at(path, key), hint);
+  }
+
+  challenge(name: string, raw: Obj): ChallengeDef {
+    const path = ['challenges', name];
+    const remove = raw.remove as RemoveWhat;
+    const order = (raw.order as RemovalOrder | undefined) ?? 'random';
+    const adaptive = (raw.adaptive as boolean | undefined) ?? false;
+    const options = ENGINE[remove];
+    const entry = options[order];
+    if (!entry) {
+      this.fail(
+        `challenge "${name}": ${remove} cannot be removed in ${order} order`,
+        [...path, raw.order === undefined ? 'remove' : 'order'],
+        `orders for ${remove}: ${Object.keys(options).join(', ')}`,
+      );
+    }
+    const engine = adaptive ? entry.adaptive : entry.static;
+    if (!engine) {
+      this.fail(
+        `challenge "${name}": the ${order} order of ${remove} has no adaptive form`,
+        [...path, 'adaptive'],
+        order === 'random' ? 'adaptive applies to targeted attacks only' : 'remove "adaptive: true"',
+      );
+    }
+    const random = order === 'random';
+    for (const key of ['realizations', 'band'] as const) {
+      if (!random && raw[key] !== undefined) {
+        this.fail(`challenge "${name}": "${key}" applies only to random order`, [...path, key], 'a targeted attack is one curve', true);
+      }
+    }
+    if (raw['worst-case'] !== undefined && !(random && (remove === 'nodes' || remove === 'links'))) {
+      this.fail(
+        `challenge "${name}": "worst-case" applies only to random node or link removal`,
+        [...path, 'worst-case'],
+        '',
+        true,
+      );
+    }
+    const until = raw.until as number | undefined;
+    if (remove !== 'region' && until !== undefined && until > 1) {
+      this.fail(
+        `challenge "${name}": "until" is a fraction of the ${remove} removed and must be ≤ 1 (it is ${until})`,
+        [...path, 'until'],
+        'e.g. 0.5 for half of them',
+      );
+    }
+    const band = raw.band as [number, number] | undefined;
+    if (band && !(band[0] < band[1])) {
+      this.fail(`challenge "${name}": the band's lower quantile must be below its upper one`, [...path, 'band'], `e.g. [0.1, 0.9]`);
+    }
+    // The engine's defaults, written out, so that reports say exactly what ran. A region's
+    // radius is left to the engine (it derives one from the design's extent).
+    const params: ChallengeParams = { challenge: engine };
+    if (remove !== 'region' || until !== undefined) params.until = until ?? CHALLENGE_DEFAULTS.until;
+    if (random) {
+      params.points = (raw.points as number | undefined) ?? CHALLENGE_DEFAULTS.points;
+      params.realizations = (raw.realizations as number | undefined) ?? CHALLENGE_DEFAULTS.realizations;
+      params.band = band ?? [...CHALLENGE_DEFAULTS.band];
+      params.worstCase = (raw['worst-case'] as number | undefined) ?? CHALLENGE_DEFAULTS.worstCase;
+    } else if (raw.points !== undefined) {
+      params.points = raw.points as number;
+    }
+    if (raw.seed !== undefined) params.seed = raw.seed as number;
+    return { name, remove, order, adaptive, engine, random, params, where: this.at(path, true) };
+  }
+
+  statistic(raw: Obj, path: readonly Segment[]): ThresholdStatistic {
+    const kind = (raw.statistic as ThresholdStatistic['kind'] | undefined) ?? 'median';
+    if (raw.q !== undefined && kind !== 'quantile') {
+      this.fail(`${describe(path)}: "q" needs "statistic: quantile"`, [...path, 'q'], 'add "statistic: quantile" or remove "q"', true);
+    }
+    if (raw.removals !== undefined && kind !== 'worst-case') {
+      this.fail(`${describe(path)}: "removals" needs "statistic: worst-case"`, [...path, 'removals'], '', true);
+    }
+    if (kind === 'quantile') {
+      if (raw.q === undefined) this.fail(`${describe(path)}: "statistic: quantile" needs "q"`, [...path, 'statistic'], 'e.g. "q: 0.1"');
+      return { kind, q: raw.q as number };
+    }
+    if (kind === 'worst-case') {
+      if (raw.removals === undefined) {
+        this.fail(`${describe(path)}: "statistic: worst-case" needs "removals"`, [...path, 'statistic'], 'e.g. "removals: 2"');
+      }
+      if (raw.at !== undefined) {
+        this.fail(`${describe(path)}: a worst-case threshold counts "removals", not "at"`, [...path, 'at'], 'remove "at"', true);
+      }
+      return { kind, removals: raw.removals as number };
+    }
+    return { kind };
+  }
+
+  requirement(raw: Obj, path: readonly Segment[]): Requirement {
+    const where = this.at(path);
+    const severity = (raw.severity as Severity | undefined) ?? 'fail';
+    const valueKey = raw.min !== undefined ? 'min' : raw.max !== undefined ? 'max' : 'kind';
+    const valueWhere = this.at([...path, valueKey]);
+    const common = { id: '', severity, where, valueWhere };
+    const ref = { challenge: raw.challenge as string, challengeWhere: this.at([...path, 'challenge']) };
+    let req: Requirement;
+    switch (raw.kind) {
+      case 'r-threshold': {
+        const statistic = this.statistic(raw, path);
+        if (statistic.kind !== 'worst-case' && raw.at === undefined) {
+          this.fail(`${describe(path)} has no "at"`, path, 'add "at:", the removal fraction where R is judged');
+        }
+        req = {
+          ...common,
+          kind: 'r-threshold',
+          ...ref,
+          statistic,
+          min: raw.min as number,
+          ...(raw.at !== undefined ? { at: raw.at as number } : {}),
+        };
+        break;
+      }
+      case 'area-floor':
+        req = {
+          ...common,
+          kind: 'area-floor',
+          ...ref,
+          ...(raw.min !== undefined ? { min: raw.min as number } : {}),
+        };
+        break;
+      case 'spread-ceiling':
+        req = { ...common, kind: 'spread-ceiling', ...ref, max: raw.max as number };
+        break;
+      case 'n-1':
+        req = { ...common, kind: 'n-1', element: (raw.element as 'node' | 'link' | undefined) ?? 'link', min: raw.min as number };
+        break;
+      default: {
+        const elements = (raw.elements as string[] | undefined) ?? ['bridges', 'cut-nodes'];
+        req = {
+          ...common,
+          valueWhere: this.at([...path, raw.elements !== undefined ? 'elements' : 'kind']),
+          kind: 'no-new-spof',
+          bridges: elements.includes('bridges'),
+          cutNodes: elements.includes('cut-nodes'),
+        };
+      }
+    }
+    req.id = requirementId(req);
+    return req;
+  }
+
+  requirements(list: unknown, path: readonly Segment[]): Requirement[] {
+    if (list === undefined) return [];
+    const out: Requirement[] = [];
+    const byId = new Map<string, Requirement>();
+    (list as Obj[]).forEach((raw, i) => {
+      const req = this.requirement(raw, [...path, i]);
+      const twin = byId.get(req.id);
+      if (twin) {
+        throw new PolicyError(`${describe([...path, i])} repeats requirement ${req.id}`, req.where, 'keep one of them', [
+          { ...twin.where, message: 'first written here' },
+        ]);
+      }
+      byId.set(req.id, req);
+      out.push(req);
+    });
+    return out;
+  }
+
+  regression(raw: Obj | undefined, path: readonly Segment[]): RegressionRule | undefined {
+    if (raw === undefined) return undefined;
+    const fieldWhere: RegressionRule['fieldWhere'] = {};
+    const field = (key: string, name: keyof RegressionRule['fieldWhere']) => {
+      if (raw[key] !== undefined) fieldWhere[name] = this.at([...path, key]);
+      return raw[key];
+    };
+    const rule: RegressionRule = {
+      noiseFactor: (field('noise-factor', 'noiseFactor') as number | undefined) ?? DEFAULT_NOISE_FACTOR,
+      severity: (field('severity', 'severity') as Severity | undefined) ?? 'fail',
+      where: this.at(path, true),
+      fieldWhere,
+    };
+    const abs = field('allowed-drop', 'allowedDrop');
+    const rel = field('allowed-relative-drop', 'allowedRelativeDrop');
+    if (abs !== undefined) rule.allowedDrop = abs as number;
+    if (rel !== undefined) rule.allowedRelativeDrop = rel as number;
+    return rule;
+  }
+
+  removed(raw: unknown, path: readonly Segment[]): { severity: RemovedSeverity; where: Where } | undefined {
+    return raw === undefined ? undefined : { severity: raw as RemovedSeverity, where: this.at(path) };
+  }
+}
+
+/** Normalise a repository path: forward slashes, no "." segments; PolicyError if it leaves the repository. */
+export function joinRepoPath(fromFile: string, relative: string, where: Where): string {
+  if (relative.startsWith('/') || /^[A-Za-z]:[\\/]/.test(relative)) {
+    throw new PolicyError(`"extends" must be a path inside the repository, not ${relative}`, where, 'write it relative to this policy file');
+  }
+  const dir = fromFile.split('/').slice(0, -1);
+  const parts = [...dir];
+  for (const seg of relative.replace(/\\/g, '/').split('/')) {
+    if (seg === '' || seg === '.') continue;
+    if (seg === '..') {
+      if (parts.length === 0) {
+        throw new PolicyError(`"extends" leaves the repository: ${relative}`, where, 'the base policy must be a file in this repository');
+      }
+      parts.pop();
+    } else {
+      parts.push(seg);
+    }
+  }
+  return parts.join('/');
+}
+
+/** Parse and check one policy file. Throws PolicyError with file:line:col. */
+export function parsePolicyFile(text: string, file: string): PolicyFile {
+  const src = new YamlSource(text, file);
+  const data = (src.data ?? {}) as unknown;
+  if (typeof data !== 'object' || data === null || Array.isArray(data)) {
+    throw new PolicyError('the policy must be a mapping of keys (key: value lines)', src.where([]), 'see "netbrace init" for a starter file');
+  }
+  const v = validate(data);
+  if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
+
+  const raw = data as Obj;
+  const b = new FileBuilder(src);
+  const policy: PolicyFile = { path: file, overrides: [] };
+
+  if (raw.extends !== undefined) {
+    const where = src.where(['extends']);
+    policy.extends = { path: joinRepoPath(file, raw.extends as string, where), where };
+  }
+  if (raw.designs !== undefined) {
+    policy.designs = (raw.designs as Obj[]).map(
+      (d, i): DesignGlob => ({
+        files: globs(d.files),
+        ...(d.format !== undefined ? { format: d.format as DesignFormat } : {}),
+        where: src.where(['designs', i]),
+      }),
+    );
+  }
+  if (raw.ignore !== undefined) policy.ignore = { globs: globs(raw.ignore), where: src.where(['ignore']) };
+  if (raw.seed !== undefined) policy.seed = { value: raw.seed as number, where: src.where(['seed']) };
+  if (raw['r-value'] !== undefined) {
+    const r = raw['r-value'] as Obj;
+    const spec: RValueSpec = {
+      metrics: Object.entries(r.metrics as Record<string, number>).map(([id, weight]) => ({ id: id as MetricId, weight })),
+      combine: (r.combine as 'mean' | 'min' | undefined) ?? 'mean',
+    };
+    policy.rValue = { spec, where: src.where(['r-value'], true) };
+  }
+
+  const byEngine = new Map<string, ChallengeDef>();
+  if (raw.challenges !== undefined) policy.challenges = [];
+  for (const [name, c] of Object.entries((raw.challenges as Record<string, Obj> | undefined) ?? {})) {
+    const def = b.challenge(name, c);
+    const twin = byEngine.get(def.engine);
+    if (twin) {
+      throw new PolicyError(
+        `challenges "${twin.name}" and "${name}" are the same challenge (${def.remove}, ${def.order}${def.adaptive ? ', adaptive' : ''})`,
+        def.where,
+        'define each challenge once',
+        [{ ...twin.where, message: `"${twin.name}" is defined here` }],
+      );
+    }
+    byEngine.set(def.engine, def);
+    policy.challenges?.push(def);
+  }
+
+  if (raw.requirements !== undefined) policy.requirements = b.requirements(raw.requirements, ['requirements']);
+  const regression = b.regression(raw.regression as Obj | undefined, ['regression']);
+  if (regression) policy.regression = regression;
+  const removed = b.removed(raw['removed-designs'], ['removed-designs']);
+  if (removed) policy.removedDesigns = removed;
+
+  policy.overrides = ((raw.overrides as Obj[] | undefined) ?? []).map((o, i): Override => {
+    const path: Segment[] = ['overrides', i];
+    const override: Override = {
+      files: globs(o.files),
+      requirements: b.requirements(o.requirements, [...path, 'requirements']),
+      where: src.where(path),
+    };
+    const rule = b.regression(o.regression as Obj | undefined, [...path, 'regression']);
+    if (rule) override.regression = rule;
+    const rem = b.removed(o['removed-designs'], [...path, 'removed-designs']);
+    if (rem) override.removedDesigns = rem;
+    return override;
+  });
+  return policy;
+}

@@ -1,0 +1,444 @@
+// From policy files to the rules for one design file: follow `extends`, fill what the root
+// file leaves out from the built-in policy, merge layer by layer, then apply the overrides
+// whose globs match the file. A floor may only ever be tightened: a definition that
+// loosens one written in its own file or in a file it extends is a PolicyError naming both
+// lines. A floor from a more basic file that is looser than one a more derived file set is
+// simply outvoted (the tighter one holds). Pure: files are read through the `read` callback.
+
+import picomatch from 'picomatch';
+import { PolicyError } from '../errors.js';
+import type { RValueSpec } from '../envelope/types.js';
+import { isMetricId, metrics as knownMetrics } from '../metrics/registry.js';
+import { closest } from '../topology/suggest.js';
+import { BUILTIN_POLICY_NAME, DEFAULT_POLICY_PATH, STARTER_POLICY } from './defaults.js';
+import { parsePolicyFile } from './load.js';
+import { requirementId } from './requirement-id.js';
+import type {
+  ChallengeDef,
+  FilePolicy,
+  Policy,
+  PolicyFile,
+  PolicyOverride,
+  RegressionRule,
+  RemovedSeverity,
+  Requirement,
+  Where,
+} from './types.js';
+
+export { DEFAULT_POLICY_PATH };
+
+/** Reads a repository file; null when it does not exist (at the revision in question). */
+export type ReadFile = (path: string) => string | null;
+
+const SEVERITY_RANK: Record<RemovedSeverity, number> = { ignore: 0, notice: 1, warn: 2, fail: 3 };
+
+/** A definition plus the depth of the file that wrote it (0 = the most basic file). */
+interface Layered<T> {
+  value: T;
+  layer: number;
+}
+
+let builtinFile: PolicyFile | undefined;
+
+function builtin(): PolicyFile {
+  builtinFile ??= parsePolicyFile(STARTER_POLICY, BUILTIN_POLICY_NAME);
+  return builtinFile;
+}
+
+function related(where: Where, message: string): Where & { message: string } {
+  return { ...where, message };
+}
+
+function describeValue(r: Requirement): string {
+  switch (r.kind) {
+    case 'spread-ceiling':
+      return `max ${r.max}`;
+    case 'no-new-spof':
+      return [r.bridges ? 'bridges' : '', r.cutNodes ? 'cut-nodes' : ''].filter(Boolean).join(' and ');
+    case 'area-floor':
+      return r.min === undefined ? 'no floor' : `min ${r.min}`;
+    default:
+      return `min ${r.min}`;
+  }
+}
+
+/** Why `next` is looser than `prev` (same id), or undefined when it is at least as tight. */
+function loosening(prev: Requirement, next: Requirement): { message: string; where: Where; prevWhere: Where } | undefined {
+  if (SEVERITY_RANK[next.severity] < SEVERITY_RANK[prev.severity]) {
+    return {
+      message: `lowers the severity of ${prev.id} from ${prev.severity} to ${next.severity}`,
+      where: next.where,
+      prevWhere: prev.where,
+    };
+  }
+  let looser = false;
+  if (prev.kind === 'spread-ceiling' && next.kind === 'spread-ceiling') looser = next.max > prev.max;
+  else if (prev.kind === 'no-new-spof' && next.kind === 'no-new-spof') {
+    looser = (prev.bridges && !next.bridges) || (prev.cutNodes && !next.cutNodes);
+  } else if (prev.kind === 'area-floor' && next.kind === 'area-floor') {
+    looser = prev.min !== undefined && (next.min === undefined || next.min < prev.min);
+  } else if ('min' in prev && 'min' in next) looser = (next.min as number) < (prev.min as number);
+  if (!looser) return undefined;
+  return {
+    message: `loosens ${prev.id}: ${describeValue(next)} where ${describeValue(prev)} is required`,
+    where: next.valueWhere,
+    prevWhere: prev.valueWhere,
+  };
+}
+
+function loosenError(what: string, why: string, where: Where, prevWhere: Where): PolicyError {
+  return new PolicyError(`${what} ${why}`, where, 'an extending policy or an override may tighten a floor, never loosen it', [
+    related(prevWhere, 'the floor it would loosen'),
+  ]);
+}
+
+/** Merge `next` into the list; tighten-only, see the file comment. */
+function mergeRequirement(list: Layered<Requirement>[], next: Layered<Requirement>, what: string): void {
+  const i = list.findIndex((r) => r.value.id === next.value.id);
+  if (i < 0) {
+    list.push(next);
+    return;
+  }
+  const prev = list[i];
+  const why = loosening(prev.value, next.value);
+  if (!why) {
+    list[i] = { value: next.value, layer: Math.max(prev.layer, next.layer) };
+    return;
+  }
+  if (next.layer >= prev.layer) throw loosenError(what, why.message, why.where, why.prevWhere);
+  // A more basic file's looser floor: the tighter one from a derived file holds.
+}
+
+type RegressionField =
+  | 'allowedDrop'   | 'allowedRelativeDrop'
+  | 'noiseFactor';
+const REGRESSION_FIELDS: readonly [RegressionField, string][] = [
+  ['allowedDrop', 'allowed-drop'],
+  ['allowedRelativeDrop', 'allowed-relative-drop'],
+  ['noiseFactor', 'noise-factor'],
+];
+
+/** Apply the fields `next` sets on top of `prev`, refusing to loosen any of them. */
+function mergeRegression(prev: Layered<RegressionRule>, next: Layered<RegressionRule>, what: string): Layered<RegressionRule> {
+  const merged: RegressionRule = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
+  const mayLoosen = next.layer < prev.layer;
+  for (const [field, key] of REGRESSION_FIELDS) {
+    const at = next.value.fieldWhere[field];
+    if (!at) continue;
+    const value = next.value[field] as number;
+    const before = prev.value[field] ?? 0;
+    const prevAt = prev.value.fieldWhere[field] ?? prev.value.where;
+    if (value > before) {
+      if (mayLoosen) continue;
+      throw loosenError(what, `loosens regression ${key}: ${value} where ${before} is allowed`, at, prevAt);
+    }
+    merged[field] = value;
+    merged.fieldWhere[field] = at;
+  }
+  const sevAt = next.value.fieldWhere.severity;
+  if (sevAt) {
+    if (SEVERITY_RANK[next.value.severity] < SEVERITY_RANK[prev.value.severity]) {
+      if (!mayLoosen) {
+        throw loosenError(
+          what,
+          `lowers the severity of regressions from ${prev.value.severity} to ${next.value.severity}`,
+          sevAt,
+          prev.value.fieldWhere.severity ?? prev.value.where,
+        );
+      }
+    } else {
+      merged.severity = next.value.severity;
+      merged.fieldWhere.severity = sevAt;
+    }
+  }
+  return { value: merged, layer: Math.max(prev.layer, next.layer) };
+}
+
+function mergeRemoved(
+  prev: Layered<{ severity: RemovedSeverity; where?: Where }>,
+  next: Layered<{ severity: RemovedSeverity; where: Where }>,
+  what: string,
+): Layered<{ severity: RemovedSeverity; where?: Where }> {
+  if (SEVERITY_RANK[next.value.severity] >= SEVERITY_RANK[prev.value.severity]) return next;
+  if (next.layer < prev.layer) return prev;
+  throw loosenError(
+    what,
+    `lowers removed-designs from ${prev.value.severity} to ${next.value.severity}`,
+    next.value.where,
+    prev.value.where ?? next.value.where,
+  );
+}
+
+function sameRValue(a: RValueSpec, b: RValueSpec): boolean {
+  return JSON.stringify(a) === JSON.stringify(b);
+}
+
+function sameChallenge(a: ChallengeDef, b: ChallengeDef): boolean {
+  return a.engine === b.engine && JSON.stringify(a.params) === JSON.stringify(b.params);
+}
+
+/** Requirement ↔ challenge consistency, checked once every file of the chain is known. */
+function checkRequirement(r: Requirement, challenges: readonly ChallengeDef[], what: string): Requirement {
+  if (r.kind === 'n-1' || r.kind === 'no-new-spof') return r;
+  const c = challenges.find((x) => x.name === r.challenge);
+  if (!c) {
+    const near = closest(r.challenge, challenges.map((x) => x.name));
+    throw new PolicyError(
+      `${what} refers to challenge "${r.challenge}", which the policy does not define`,
+      r.challengeWhere,
+      near ? `did you mean "${near}"?` : `defined challenges: ${challenges.map((x) => x.name).join(', ') || 'none'}`,
+    );
+  }
+  if (r.kind === 'spread-ceiling' && !c.random) {
+    throw new PolicyError(
+      `${what}: challenge "${c.name}" is a targeted attack (one curve), so it has no spread`,
+      r.where,
+      'use a random challenge',
+      [related(c.where, `"${c.name}" is defined here`)],
+    );
+  }
+  if (r.kind !== 'r-threshold') return r;
+  const s = r.statistic;
+  if (s.kind === 'worst-case') {
+    const depth = c.params.worstCase ?? 0;
+    if (r.statistic.kind === 'worst-case' && s.removals > depth) {
+      throw new PolicyError(
+        `${what} asks for the worst ${s.removals} removals, but challenge "${c.name}" searches only ${depth} deep`,
+        r.valueWhere,
+        `set "worst-case: ${s.removals}" (or more) on challenge "${c.name}"`,
+        [related(c.where, `"${c.name}" is defined here`)],
+      );
+    }
+    return r;
+  }
+  if (!c.random) {
+    if (s.kind === 'quantile' || s.kind === 'min' || s.kind === 'mean') {
+      throw new PolicyError(
+        `${what}: challenge "${c.name}" is a targeted attack (one curve); "statistic: ${s.kind}" needs a random challenge`,
+        r.where,
+        'leave "statistic" out (the curve\u2019s value is judged)',
+        [related(c.where, `"${c.name}" is defined here`)],
+      );
+    }
+    if (s.kind !== 'value') {
+      const normalized: Requirement = { ...r, statistic: { kind: 'value' } };
+      normalized.id = requirementId(normalized);
+      return normalized;
+    }
+  } else if (s.kind === 'value') {
+    throw new PolicyError(
+      `${what}: challenge "${c.name}" is random; say which statistic of its envelope is judged`,
+      r.where,
+      'statistic: quantile (with q), median, mean or min',
+    );
+  }
+  if (r.at !== undefined && c.params.until !== undefined && r.at > c.params.until + 1e-12) {
+    throw new PolicyError(
+      `${what} judges R at ${r.at}, beyond the end of challenge "${c.name}" (until ${c.params.until})`,
+      r.where,
+      `raise "until" of "${c.name}" or lower "at"`,
+      [related(c.where, `"${c.name}" is defined here`)],
+    );
+  }
+  return r;
+}
+
+function checkMetrics(spec: RValueSpec, where: Where): void {
+  for (const m of spec.metrics) {
+    if (!isMetricId(m.id)) {
+      throw new PolicyError(
+        `metric "${m.id}" is not available in this version of netbrace`,
+        where,
+        `available: ${knownMetrics.map((x) => x.id).join(', ')}`,
+      );
+    }
+  }
+}
+
+function describeRequirementSite(file: PolicyFile, r: Requirement, override?: number): string {
+  const list = override === undefined ? file.requirements : file.overrides[override].requirements;
+  const index = (list ?? []).indexOf(r);
+  const req = index >= 0 ? `requirement ${index + 1}` : 'a requirement';
+  return override === undefined ? req : `override ${override + 1}, ${req}`;
+}
+
+/** Read `entry` and every file it extends, the most basic file first. */
+function readChain(entry: string, read: ReadFile): PolicyFile[] {
+  const chain: PolicyFile[] = [];
+  const seen = new Set<string>();
+  let path = entry;
+  let from: Where | undefined;
+  for (;;) {
+    if (seen.has(path)) {
+      throw new PolicyError(`"extends" goes round in a circle back to ${path}`, from ?? { file: path }, 'remove one of the extends lines');
+    }
+    seen.add(path);
+    const text = read(path);
+    if (text === null) {
+      if (from) throw new PolicyError(`the base policy ${path} does not exist`, from, 'check the path; it is relative to this file');
+      throw new PolicyError(`the policy file ${path} does not exist`, { file: path }, 'run "netbrace init" to write one');
+    }
+    const file = parsePolicyFile(text, path);
+    chain.unshift(file);
+    if (!file.extends) break;
+    from = file.extends.where;
+    path = file.extends.path;
+  }
+  return chain;
+}
+
+/** The built-in policy (communication backbones), as if it were the repository's policy file. */
+export function builtinPolicy(): Policy {
+  return { ...mergeChain([builtin()]), source: 'builtin', files: [] };
+}
+
+/** Load a policy file and the files it extends. Throws PolicyError. */
+export function loadPolicy(entry: string, read: ReadFile): Policy {
+  return mergeChain(readChain(entry, read));
+}
+
+function mergeChain(chain: PolicyFile[]): Policy {
+  const root = chain[0];
+  const base = builtin();
+  const challenges = new Map<string, ChallengeDef>();
+  for (const c of root.challenges ?? base.challenges ?? []) challenges.set(c.name, c);
+
+  let rValue = { spec: (root.rValue ?? base.rValue)!.spec, where: (root.rValue ?? base.rValue)!.where };
+  checkMetrics(rValue.spec, rValue.where);
+  let designs = root.designs ?? base.designs ?? [];
+  const ignore = [...(root.ignore?.globs ?? [])];
+  let seed = (root.seed ?? base.seed)?.value ?? 1;
+  let regression: Layered<RegressionRule> = { value: (root.regression ?? base.regression)!, layer: 0 };
+  let removed: Layered<{ severity: RemovedSeverity; where?: Where }> = {
+    value: root.removedDesigns ?? base.removedDesigns ?? { severity: 'notice' },
+    layer: 0,
+  };
+
+  const requirements: Layered<Requirement>[] = [];
+  const rootReqs =
+    root.requirements ??
+    (root.challenges === undefined
+      ? (base.requirements ?? [])
+      : (base.requirements ?? []).filter((r) => !('challenge' in r) || challenges.has(r.challenge)));
+  for (const r of rootReqs) requirements.push({ value: r, layer: 0 });
+
+  chain.forEach((file, layer) => {
+    if (layer === 0) return;
+    if (file.rValue && !sameRValue(file.rValue.spec, rValue.spec)) {
+      throw new PolicyError(
+        'an extending policy cannot change the r-value of the policy it extends',
+        file.rValue.where,
+        'the floors of the base policy are measured in its R; remove "r-value" here',
+        [related(rValue.where, 'the r-value in force')],
+      );
+    }
+    for (const c of file.challenges ?? []) {
+      const prev = challenges.get(c.name) ?? [...challenges.values()].find((x) => x.engine === c.engine);
+      if (prev && !sameChallenge(prev, c)) {
+        throw new PolicyError(
+          `challenge "${c.name}" redefines challenge "${prev.name}" of the policy it extends`,
+          c.where,
+          'an extending policy may add challenges, not change them',
+          [related(prev.where, `"${prev.name}" is defined here`)],
+        );
+      }
+      if (!prev) challenges.set(c.name, c);
+    }
+    if (file.designs) designs = [...designs, ...file.designs];
+    for (const g of file.ignore?.globs ?? []) {
+      if (!ignore.includes(g)) {
+        throw new PolicyError(
+          `an extending policy cannot ignore "${g}": the policy it extends judges those files`,
+          file.ignore!.where,
+          'ignore the files in the base policy, or narrow the designs there',
+        );
+      }
+    }
+    if (file.seed) seed = file.seed.value;
+    for (const r of file.requirements ?? []) {
+      mergeRequirement(requirements, { value: r, layer }, describeRequirementSite(file, r));
+    }
+    if (file.regression) regression = mergeRegression(regression, { value: file.regression, layer }, 'regression');
+    if (file.removedDesigns) removed = mergeRemoved(removed, { value: file.removedDesigns, layer }, 'the policy');
+  });
+
+  const challengeList = [...challenges.values()];
+  const checked = requirements.map((r) => ({
+    ...r,
+    value: checkRequirement(r.value, challengeList, describeRequirementSite(chain[r.layer] ?? root, r.value)),
+  }));
+
+  // Overrides: check them against the merged top level now, so that a loosening is an
+  // error whether or not a changed file matches; overlaps between overrides are per file.
+  const overrides: PolicyOverride[] = [];
+  chain.forEach((file, layer) =>
+    file.overrides.forEach((o, i) => {
+      const what = (r: Requirement) => describeRequirementSite(file, r, i);
+      const requirementsChecked = o.requirements.map((r) => checkRequirement(r, challengeList, what(r)));
+      const scratch = checked.map((r) => ({ ...r }));
+      for (const r of requirementsChecked) mergeRequirement(scratch, { value: r, layer }, what(r));
+      if (o.regression) mergeRegression(regression, { value: o.regression, layer }, `override ${i + 1}, regression`);
+      if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `override ${i + 1}`);
+      overrides.push({ ...o, requirements: requirementsChecked, layer });
+    }),
+  );
+
+  return {
+    source: 'file',
+    files: chain.map((f) => f.path).reverse(),
+    designs,
+    ignore,
+    seed,
+    rValue: rValue.spec,
+    challenges: challengeList,
+    requirements: checked.map((r) => r.value),
+    regression: regression.value,
+    removedDesigns: removed.value,
+    overrides,
+    layers: { requirements: checked.map((r) => r.layer), regression: regression.layer, removed: removed.layer },
+  };
+}
+
+const matchers = new Map<string, (path: string) => boolean>();
+
+function matches(globs: readonly string[], path: string): boolean {
+  return globs.some((g) => {
+    let m = matchers.get(g);
+    if (!m) {
+      m = picomatch(g, { dot: true });
+      matchers.set(g, m);
+    }
+    return m(path);
+  });
+}
+
+/** Whether the policy treats this repository path as a design file. */
+export function isDesignPath(policy: Policy, path: string): boolean {
+  return policy.designs.some((d) => matches(d.files, path)) && !matches(policy.ignore, path);
+}
+
+/** The rules for one design file: the policy with its matching overrides applied. Throws PolicyError. */
+export function policyForFile(policy: Policy, path: string): FilePolicy {
+  const layers = policy.layers;
+  const requirements: Layered<Requirement>[] = policy.requirements.map((value, i) => ({ value, layer: layers.requirements[i] }));
+  let regression: Layered<RegressionRule> = { value: policy.regression, layer: layers.regression };
+  let removed: Layered<{ severity: RemovedSeverity; where?: Where }> = { value: policy.removedDesigns, layer: layers.removed };
+  for (const o of policy.overrides) {
+    if (!matches(o.files, path)) continue;
+    const { layer } = o;
+    const what = `an override matching ${path}`;
+    for (const r of o.requirements) mergeRequirement(requirements, { value: r, layer }, what);
+    if (o.regression) regression = mergeRegression(regression, { value: o.regression, layer }, `${what}:`);
+    if (o.removedDesigns) removed = mergeRemoved(removed, { value: o.removedDesigns, layer }, what);
+  }
+  const format = policy.designs.find((d) => d.format !== undefined && matches(d.files, path))?.format;
+  return {
+    rValue: policy.rValue,
+    seed: policy.seed,
+    challenges: policy.challenges,
+    requirements: requirements.map((r) => r.value),
+    regression: regression.value,
+    removedDesigns: removed.value.severity,
+    ...(format ? { format } : {}),
+  };
+}

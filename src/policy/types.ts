@@ -1,0 +1,181 @@
+// The policy as the gate uses it: what a reviewed YAML file (plus the files it extends and
+// its overrides) says about which files are designs, how R is computed, which challenges
+// run and what each design must satisfy. Every definition keeps its source location so
+// that a conflict can name the lines involved.
+
+import type { SourceLocation } from '../errors.js';
+import type { ChallengeName, ChallengeParams, RValueSpec } from '../envelope/types.js';
+import type { Severity } from '../report/report.js';
+import type { DesignFormat } from '../topology/model.js';
+
+export type { Severity };
+
+/** Where a definition was written. */
+export type Where = SourceLocation;
+
+/** What a challenge removes, in the policy's words. */
+export type RemoveWhat = 'nodes' | 'links' | 'risk-groups' | 'region';
+/** In which order, in the policy's words. */
+export type RemovalOrder = 'random' | 'degree' | 'betweenness' | 'eigenvector' | 'closeness' | 'worst-first';
+
+/** A challenge as the policy names it. `params` is handed to the engine (plus the grid's `at`). */
+export interface ChallengeDef {
+  /** The user's name for it (the key under `challenges:`); requirements refer to it. */
+  name: string;
+  remove: RemoveWhat;
+  order: RemovalOrder;
+  adaptive: boolean;
+  engine: ChallengeName;
+  /** Random challenges give envelopes (bands over realizations); the others one curve. */
+  random: boolean;
+  params: ChallengeParams;
+  where: Where;
+}
+
+/** The statistic of an envelope an r-threshold judges. */
+export type ThresholdStatistic =
+  | { kind: 'quantile'; q: number }
+  | { kind: 'median' }
+  | { kind: 'mean' }
+  | { kind: 'min' }
+  /** R after the worst `removals` removals the worst-case search found. */
+  | { kind: 'worst-case'; removals: number }
+  /** The one value of a deterministic curve (targeted attack). */
+  | { kind: 'value' };
+
+interface RequirementBase {
+  /** Stable id, e.g. "r-threshold:random-failures@0.2:q0.1"; equal ids are the same floor. */
+  id: string;
+  severity: Severity;
+  where: Where;
+  /** Location of the value that a tightening is judged on (the `min` / `max` line). */
+  valueWhere: Where;
+}
+
+/** Where the `challenge:` reference was written. */
+interface ChallengeRef {
+  challenge: string;
+  challengeWhere: Where;
+}
+
+export interface ThresholdRequirement extends RequirementBase, ChallengeRef {
+  kind: 'r-threshold';
+  /** Removal fraction (or km for regional challenges); absent for worst-case. */
+  at?: number;
+  statistic: ThresholdStatistic;
+  min: number;
+}
+
+export interface AreaRequirement extends RequirementBase, ChallengeRef {
+  kind: 'area-floor';
+  /** Without a floor the area is only tracked (regressions are still judged). */
+  min?: number;
+}
+
+export interface SpreadRequirement extends RequirementBase, ChallengeRef {
+  kind: 'spread-ceiling';
+  max: number;
+}
+
+export interface ContingencyRequirement extends RequirementBase {
+  kind: 'n-1';
+  element: 'node' | 'link';
+  min: number;
+}
+
+export interface SpofRequirement extends RequirementBase {
+  kind: 'no-new-spof';
+  bridges: boolean;
+  cutNodes: boolean;
+}
+
+export type Requirement =
+  | ThresholdRequirement
+  | AreaRequirement
+  | SpreadRequirement
+  | ContingencyRequirement
+  | SpofRequirement;
+
+export type RequirementKind = Requirement['kind'];
+
+export interface RegressionRule {
+  /** Largest drop tolerated, in units of R (absolute). */
+  allowedDrop?: number;
+  /** Largest drop tolerated as a fraction of the base value. */
+  allowedRelativeDrop?: number;
+  /** A drop smaller than noiseFactor × se is Monte Carlo noise, never a failure. */
+  noiseFactor: number;
+  severity: Severity;
+  where: Where;
+  /** Per field, where it was written (for loosening errors). */
+  fieldWhere: Partial<Record<'allowedDrop' | 'allowedRelativeDrop' | 'noiseFactor' | 'severity', Where>>;
+}
+
+export type RemovedSeverity = Severity | 'ignore';
+
+export interface DesignGlob {
+  files: string[];
+  format?: DesignFormat;
+  where: Where;
+}
+
+export interface Override {
+  files: string[];
+  requirements: Requirement[];
+  regression?: RegressionRule;
+  removedDesigns?: { severity: RemovedSeverity; where: Where };
+  where: Where;
+}
+
+/** One policy file as written (before `extends` and overrides are applied). */
+export interface PolicyFile {
+  path: string;
+  extends?: { path: string; where: Where };
+  designs?: DesignGlob[];
+  ignore?: { globs: string[]; where: Where };
+  seed?: { value: number; where: Where };
+  rValue?: { spec: RValueSpec; where: Where };
+  /** Undefined when the file leaves `challenges` out (then it inherits them). */
+  challenges?: ChallengeDef[];
+  /** Undefined when the file leaves `requirements` out. */
+  requirements?: Requirement[];
+  regression?: RegressionRule;
+  removedDesigns?: { severity: RemovedSeverity; where: Where };
+  overrides: Override[];
+}
+
+/** The policy after `extends` is resolved; overrides still apply per file. */
+export interface Policy {
+  /** "builtin" when no policy file exists and the defaults apply. */
+  source: 'file' | 'builtin';
+  /** The policy file and the files it extends, the extending file first. */
+  files: string[];
+  designs: DesignGlob[];
+  ignore: string[];
+  seed: number;
+  rValue: RValueSpec;
+  challenges: ChallengeDef[];
+  requirements: Requirement[];
+  regression: RegressionRule;
+  removedDesigns: { severity: RemovedSeverity; where?: Where };
+  /** Overrides of every file of the chain, the most basic file's first. */
+  overrides: PolicyOverride[];
+  /** Depth of the file each definition came from (0 = the most basic): a definition may
+   *  not loosen one from its own or a more basic file. */
+  layers: { requirements: number[]; regression: number; removed: number };
+}
+
+export interface PolicyOverride extends Override {
+  layer: number;
+}
+
+/** What applies to one design file. */
+export interface FilePolicy {
+  rValue: RValueSpec;
+  seed: number;
+  challenges: ChallengeDef[];
+  requirements: Requirement[];
+  regression: RegressionRule;
+  removedDesigns: RemovedSeverity;
+  format?: DesignFormat;
+}
