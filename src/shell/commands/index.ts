@@ -2,5 +2,6 @@
 
 import type { Command } from '../io.js';
 import { inspectCommand } from './inspect.js';
+import { explainCommand } from './explain.js';
 
-export const commands: Command[] = [inspectCommand];
+export const commands: Command[] = [inspectCommand, explainCommand];
