@@ -160,7 +160,7 @@ const num = (v: number) => (Math.round(v * 10) / 10).toString();
 /** The chart as one standalone SVG element (inline attributes only, so it survives copying). */
 export function renderChartSvg(chart: EnvelopeChart, options: SvgOptions = {}): string {
   const id = options.idPrefix ?? 'nb-chart';
-  const width = options.width ?? 640;
+  const width = options.width ?? 600;
   const plotH = 240;
   const m = { left: 56, right: 20, top: 18, bottom: 48 };
   const legendItems = chart.series.length;

@@ -55,7 +55,7 @@ nav a{color:var(--ink)}
 .chip.fail{color:var(--fail)}.chip.warn{color:var(--warn)}.chip.pass{color:var(--pass)}
 .chip.notice{color:var(--notice)}
 .facts{color:var(--muted);font-size:.9rem;margin:6px 0 0}
-.charts{display:grid;grid-template-columns:repeat(auto-fit,minmax(440px,1fr));gap:18px;margin-top:10px}
+.charts{display:grid;grid-template-columns:repeat(auto-fill,minmax(440px,1fr));gap:18px;margin-top:10px}
 figure{margin:0}
 figure svg{width:100%;height:auto;display:block}
 figcaption{font-size:.85rem;color:var(--muted);margin-top:4px}
