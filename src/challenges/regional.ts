@@ -51,8 +51,11 @@ export const regional: BandChallenge = {
   summary: 'regional disasters: all sites within radius x km of an epicentre fail; band over epicentres at every site',
   plan(g, params) {
     const x = makeGrid(params.until, params.points, params.at);
-    const sites = sitesWithCoordinates(g);
-    const removable = sites.filter((v) => g.nodeHardened[v] === 0);
+    const all = sitesWithCoordinates(g);
+    // A work budget may cap the epicentres: then they are spread evenly over the file's sites.
+    const cap = params.epicentres ?? all.length;
+    const sites = cap >= all.length ? all : Array.from({ length: cap }, (_, r) => all[Math.floor((r * all.length) / cap)]);
+    const removable = all.filter((v) => g.nodeHardened[v] === 0);
     const dist = new Float64Array(removable.length);
     const idx = removable.map((_, i) => i);
     return {

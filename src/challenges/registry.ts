@@ -72,6 +72,7 @@ export function resolveParams(g: CompactGraph, p: ChallengeParams, seed: number)
   }
   const worstCase = p.worstCase ?? DEFAULTS.worstCase;
   if (!Number.isInteger(worstCase) || worstCase < 0) throw new RangeError(`${p.challenge}: worstCase must be an integer ≥ 0`);
+  if (p.beam !== undefined && (!Number.isInteger(p.beam) || p.beam < 1)) throw new RangeError(`${p.challenge}: beam must be an integer ≥ 1`);
   const at = p.at ?? [];
   for (const x of at) {
     if (!Number.isFinite(x) || x < 0 || (fraction && x > 1)) throw new RangeError(`${p.challenge}: grid point ${x} is out of range`);
@@ -86,5 +87,6 @@ export function resolveParams(g: CompactGraph, p: ChallengeParams, seed: number)
     worstCase,
     element: p.element ?? DEFAULTS.element,
     at,
+    beam: p.beam ?? 1,
   };
 }

@@ -71,4 +71,7 @@ export interface ResolvedParams {
   worstCase: number;
   element: 'node' | 'link';
   at: number[];
+  beam: number;
+  /** Regional only: evaluate at most this many epicentres (set by work budgets). */
+  epicentres?: number;
 }

@@ -41,6 +41,8 @@ export interface ChallengeParams {
   seed?: number;
   /** Length of the worst-case search (0 = none). */
   worstCase?: number;
+  /** Beam width of the worst-case search beyond exact enumeration (1 = greedy, the default). */
+  beam?: number;
   /** For n-1 / n-2: which kind of element. */
   element?: 'node' | 'link';
   threads?: number;
@@ -52,10 +54,17 @@ export interface ChallengeParams {
 export interface RemovalSequence {
   kind: ElementKind;
   elements: string[];
-  /** R after each step (same length as elements). */
+  /** R after each step (same length as elements), or after the steps listed in `steps`. */
   values: number[];
+  /**
+   * Removal counts at which `values` were taken, when R is costly per step (distance and
+   * spectral metrics are evaluated at grid points only). Absent: after every step.
+   */
+  steps?: number[];
   /** Realization index for random challenges. */
   realization?: number;
+  /** What the realization stands for, e.g. the epicentre site of a regional failure. */
+  label?: string;
 }
 
 export interface WorstCase extends RemovalSequence {
@@ -95,6 +104,11 @@ export interface Envelope {
   /** The three weakest realizations with their removal sequences. */
   weakest: RemovalSequence[];
   worstCase?: WorstCase;
+  /**
+   * netbrace's attack gap (SCIENCE.md §2): mean over the grid of q_lo − R of the most harmful
+   * targeted attack of the same element kind in this evaluation; absent without such an attack.
+   */
+  attackGap?: { value: number; attack: ChallengeName };
   /** Set when the engine had to reduce work (budgets); the report marks the result degraded. */
   degraded?: string;
 }
@@ -107,7 +121,11 @@ export interface AttackCurve {
   x: number[];
   values: number[];
   sequence: string[];
+  /** Units the x axis divides by: N, L or the number of groups (always set by the engine). */
+  count?: number;
+  /** Mean of values[1..K] (Schneider's R when the attack runs to the end and R is the LCC share). */
   area: number;
+  worstCase?: WorstCase;
 }
 
 /** N-1 / N-2: every single element (or pair), exhaustively within a budget. */

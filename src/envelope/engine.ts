@@ -1,0 +1,179 @@
+// The envelope engine's unit of work: a task is a pure function of (graph, plan, task) and
+// returns plain data, so tasks can run in any thread and in any order; results are merged in
+// task order (evaluate.ts), which is what makes the output independent of the thread count.
+// Band challenges are cut into fixed chunks of CHUNK realizations; every task creates its own
+// metric evaluators, so even evaluators that keep warm-start state between calls give the same
+// numbers whichever thread runs the chunk.
+
+import type { CompactGraph } from '../graph/compact.js';
+import { createMask, type Mask } from '../graph/mask.js';
+import { getChallenge } from '../challenges/registry.js';
+import type { BandPlan, ResolvedParams } from '../challenges/types.js';
+import { countOnes, eligibleUnits, removeUnit, stepsAt, unitCount } from '../challenges/units.js';
+import type { Contingency, ElementKind, RValueSpec, WorstCase } from './types.js';
+import { createRValue, unionFindR, type RFunction } from './r-value.js';
+import { connectivityCurve, createUnionFindWorkspace, type ConnectivityCurve, type UnionFindWorkspace } from './union-find.js';
+import { evaluateContingency } from './contingency.js';
+import { searchWorstCase } from './worst-case.js';
+
+/** Realizations per band task. Fixed: part of what makes results thread-count independent. */
+export const CHUNK = 16;
+
+export interface PlannedChallenge {
+  params: ResolvedParams;
+  type: 'band' | 'attack' | 'contingency';
+  /** Contingency cases to evaluate at most. */
+  maxCases: number;
+  /** Worst-case search: largest exact enumeration allowed (0 = never exact), and beam width. */
+  exactLimit: number;
+  beam: number;
+  /** Why this challenge was reduced, when it was. */
+  degraded?: string;
+}
+
+export interface EvaluationPlan {
+  r: RValueSpec;
+  items: PlannedChallenge[];
+  /** Reasons the evaluation as a whole was reduced or challenges skipped. */
+  degraded: string[];
+}
+
+export type Task =
+  | { type: 'band'; item: number; from: number; to: number }
+  | { type: 'attack'; item: number }
+  | { type: 'contingency'; item: number }
+  | { type: 'worst'; item: number };
+
+export type TaskResult =
+  | { type: 'band'; values: Float64Array[] }
+  | { type: 'attack'; sequence: Int32Array; values: Float64Array }
+  | { type: 'contingency'; result: Contingency }
+  | { type: 'worst'; result: WorstCase };
+
+export function planTasks(plan: EvaluationPlan, g: CompactGraph): Task[] {
+  const tasks: Task[] = [];
+  plan.items.forEach((it, item) => {
+    if (it.type === 'band') {
+      const m = realizationCount(g, it);
+      for (let from = 0; from < m; from += CHUNK) tasks.push({ type: 'band', item, from, to: Math.min(m, from + CHUNK) });
+    } else if (it.type === 'attack') tasks.push({ type: 'attack', item });
+    else tasks.push({ type: 'contingency', item });
+    if (it.params.worstCase > 0) tasks.push({ type: 'worst', item });
+  });
+  return tasks;
+}
+
+/** Realizations a band item runs: the requested count, or one per epicentre for regional. */
+export function realizationCount(g: CompactGraph, it: PlannedChallenge): number {
+  return bandPlan(g, it.params).realizations;
+}
+
+export function bandPlan(g: CompactGraph, params: ResolvedParams): BandPlan {
+  const c = getChallenge(params.challenge);
+  if (c.type !== 'band') throw new TypeError(`${params.challenge} is not a band challenge`);
+  return c.plan(g, params);
+}
+
+/** The unit kind a challenge removes. */
+export function challengeKind(g: CompactGraph, params: ResolvedParams): ElementKind {
+  const c = getChallenge(params.challenge);
+  if (c.type === 'band') return c.plan(g, params).kind;
+  if (c.type === 'attack') return c.kind;
+  return params.element;
+}
+
+/** Steps of an attack: round(until · count), capped by what may be removed. */
+export function attackSteps(g: CompactGraph, kind: ElementKind, until: number): number {
+  return stepsAt(until, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
+}
+
+/** Evaluates R along one removal order at the given step counts (non-decreasing). */
+export class StepEvaluator {
+  private readonly rfn: RFunction;
+  private readonly ufr: ((c: ConnectivityCurve, k: number) => number) | null;
+  private readonly ws: UnionFindWorkspace | null;
+  private readonly mask: Mask;
+
+  constructor(
+    private readonly g: CompactGraph,
+    spec: RValueSpec,
+  ) {
+    this.rfn = createRValue(g, spec);
+    this.ufr = unionFindR(g, spec);
+    this.ws = this.ufr ? createUnionFindWorkspace(g) : null;
+    this.mask = createMask(g);
+  }
+
+  get r(): RFunction {
+    return this.rfn;
+  }
+
+  /** True when every step is free (union–find curve). */
+  get stepsAreFree(): boolean {
+    return this.ufr !== null;
+  }
+
+  /** R after steps[j] units of `order` are removed, for each j. */
+  at(kind: ElementKind, order: ArrayLike<number>, len: number, steps: ArrayLike<number>, out: Float64Array): Float64Array {
+    if (this.ufr !== null) {
+      const curve = connectivityCurve(this.g, kind, order, len, this.ws!);
+      for (let j = 0; j < steps.length; j++) out[j] = this.ufr(curve, steps[j]);
+      return out;
+    }
+    const mask = this.mask;
+    mask.node.fill(0);
+    mask.link.fill(0);
+    let applied = 0;
+    for (let j = 0; j < steps.length; j++) {
+      if (j > 0 && steps[j] === steps[j - 1]) {
+        out[j] = out[j - 1];
+        continue;
+      }
+      while (applied < steps[j]) removeUnit(this.g, mask, kind, order[applied++]);
+      out[j] = this.rfn(mask);
+    }
+    return out;
+  }
+
+  /** R after every step k = 0..len. */
+  everyStep(kind: ElementKind, order: ArrayLike<number>, len: number): Float64Array {
+    const steps = new Int32Array(len + 1);
+    for (let k = 0; k <= len; k++) steps[k] = k;
+    return this.at(kind, order, len, steps, new Float64Array(len + 1));
+  }
+}
+
+export function runTask(g: CompactGraph, plan: EvaluationPlan, task: Task): TaskResult {
+  const it = plan.items[task.item];
+  const params = it.params;
+  const ev = new StepEvaluator(g, plan.r);
+  switch (task.type) {
+    case 'band': {
+      const bp = bandPlan(g, params);
+      const order = new Int32Array(bp.maxUnits);
+      const steps = new Int32Array(bp.x.length);
+      const values: Float64Array[] = [];
+      for (let r = task.from; r < task.to; r++) {
+        const len = bp.realize(r, order, steps);
+        values.push(ev.at(bp.kind, order, len, steps, new Float64Array(bp.x.length)));
+      }
+      return { type: 'band', values };
+    }
+    case 'attack': {
+      const c = getChallenge(params.challenge);
+      if (c.type !== 'attack') throw new TypeError(`${params.challenge} is not an attack`);
+      const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: ev.r });
+      return { type: 'attack', sequence, values: ev.everyStep(c.kind, sequence, sequence.length) };
+    }
+    case 'contingency': {
+      const c = getChallenge(params.challenge);
+      if (c.type !== 'contingency') throw new TypeError(`${params.challenge} is not a contingency`);
+      return { type: 'contingency', result: evaluateContingency(g, params.element, c.order, ev.r, it.maxCases) };
+    }
+    case 'worst': {
+      const kind = challengeKind(g, params);
+      const result = searchWorstCase(g, kind, params.worstCase, ev.r, { exactLimit: it.exactLimit, beam: it.beam });
+      return { type: 'worst', result };
+    }
+  }
+}

@@ -1,0 +1,348 @@
+// evaluateDesign: one design, one R-value, a list of challenges → the Evaluation that reports
+// serialise, plus every realization's curve for paired comparison (pairing.ts).
+// Pure, synchronous and deterministic: the same graph and spec give byte-identical JSON, and
+// evaluateDesignParallel (src/parallel/) runs the very same tasks on worker threads.
+//
+// Work budget. The unit is one element visit; one "graph pass" visits N + L elements, and R
+// costs rPasses() passes per evaluation (r-value.ts). Estimated work per challenge:
+//   band         M · (2 passes on the union–find path | distinct grid steps · R passes + 1)
+//   attack       ranking passes (degree 1–2, betweenness/closeness N, adaptive betweenness K·N,
+//                eigenvector 200, worst-first groups G(G+1)/2 · R) + curve (1 | (K + 1) · R)
+//   contingency  cases · R passes
+//   worst case   exact: C(E, k) (+E for k = 2) · R; greedy/beam: k · E · width · R passes
+// When the estimate exceeds maxWork (default DEFAULT_MAX_WORK): first, exact worst-case
+// searches switch to greedy; if that is not enough, every band's realizations and every
+// contingency's cases are scaled by the same factor s = (maxWork − fixed work) / reducible
+// work, keeping at least MIN_REALIZATIONS realizations (or all, if fewer) and one case. Each
+// reduction is stated in `degraded` (per challenge and for the evaluation).
+
+import type { CompactGraph } from '../graph/compact.js';
+import { findComponents, findCutElements } from '../graph/structure.js';
+import type { Evaluation, StructureSummary } from '../report/report.js';
+import { getChallenge, resolveParams } from '../challenges/registry.js';
+import { sitesWithCoordinates } from '../challenges/regional.js';
+import { countOnes, eligibleUnits, stepsAt, unitCount, unitIds } from '../challenges/units.js';
+import { makeGrid } from '../challenges/grid.js';
+import type { AttackCurve, ChallengeName, ChallengeParams, Contingency, Envelope, RValueSpec, RemovalSequence, WorstCase } from './types.js';
+import { rPasses, unionFindR, validateRSpec } from './r-value.js';
+import {
+  attackSteps,
+  bandPlan,
+  challengeKind,
+  planTasks,
+  runTask,
+  StepEvaluator,
+  type EvaluationPlan,
+  type PlannedChallenge,
+  type Task,
+  type TaskResult,
+} from './engine.js';
+import { contingencyTotal } from './contingency.js';
+import { subsets } from './worst-case.js';
+import { area, attackGap, gridMean, gridStats, quantileKey, spread } from './summary.js';
+
+export { pairedStatistic, type PairedStatistic, type Statistic } from './pairing.js';
+
+export interface EvaluationSpec {
+  r: RValueSpec;
+  challenges: ChallengeParams[];
+  seed: number;
+  budget?: { maxWork?: number };
+}
+
+export interface DesignEvaluation {
+  evaluation: Evaluation;
+  /** Per band challenge, per realization: R at each grid point. Kept for pairing, not serialised. */
+  samples: Map<ChallengeName, Float64Array[]>;
+  /** What each realization stands for when it is not its index (regional: epicentre ids). */
+  labels: Map<ChallengeName, string[]>;
+}
+
+/** Default work budget in element visits (see above); about a minute of engine time. */
+export const DEFAULT_MAX_WORK = 1e10;
+/** Fewest realizations a budget may leave a band with. */
+export const MIN_REALIZATIONS = 10;
+/** Largest exact worst-case enumeration (subsets) before the search goes greedy. */
+export const EXACT_LIMIT = 1_000_000;
+/** How many of the weakest realizations an envelope keeps. */
+export const WEAKEST_KEPT = 3;
+
+const RANKING_PASSES: Partial<Record<ChallengeName, (n: number, k: number) => number>> = {
+  degree: () => 1,
+  'degree-adaptive': () => 2,
+  betweenness: (n) => n,
+  'betweenness-adaptive': (n, k) => n * Math.max(1, k),
+  eigenvector: () => 200,
+  closeness: (n) => n,
+  'link-betweenness': (n) => n,
+  'link-betweenness-adaptive': (n, k) => n * Math.max(1, k),
+};
+
+/** Resolves parameters, skips challenges the design cannot support, and applies the budget. */
+export function planEvaluation(g: CompactGraph, spec: EvaluationSpec): EvaluationPlan {
+  validateRSpec(spec.r);
+  const degraded: string[] = [];
+  const items: PlannedChallenge[] = [];
+  const seen = new Set<string>();
+  for (const p of spec.challenges) {
+    if (seen.has(p.challenge)) throw new RangeError(`challenge ${p.challenge} is listed twice`);
+    seen.add(p.challenge);
+    const params = resolveParams(g, p, spec.seed);
+    const c = getChallenge(p.challenge);
+    if (p.challenge === 'regional' && sitesWithCoordinates(g).length === 0) {
+      degraded.push('regional: skipped, no site has coordinates (lat/lon)');
+      continue;
+    }
+    if ((p.challenge === 'risk-groups' || p.challenge === 'risk-groups-worst') && countOnes(eligibleUnits(g, 'group')) === 0) {
+      degraded.push(`${p.challenge}: skipped, the design has no shared-risk group that can fail`);
+      continue;
+    }
+    if (c.type === 'contingency') params.worstCase = 0;
+    items.push({ params, type: c.type, maxCases: Infinity, exactLimit: EXACT_LIMIT, beam: params.beam });
+  }
+  const maxWork = spec.budget?.maxWork ?? DEFAULT_MAX_WORK;
+  if (!(maxWork > 0)) throw new RangeError(`budget.maxWork must be > 0, got ${maxWork}`);
+  const visits = g.n + g.m;
+  const rp = rPasses(g, spec.r);
+  const free = unionFindR(g, spec.r) !== null;
+  const est = items.map((it) => estimate(g, it, rp, free));
+  const total = () => est.reduce((s, e) => s + e.band + e.cases + e.fixed + e.worst, 0) * visits;
+
+  if (total() > maxWork) {
+    items.forEach((it, i) => {
+      if (est[i].worstExact && est[i].worst * visits > maxWork / 4) {
+        it.exactLimit = 0;
+        est[i] = estimate(g, it, rp, free);
+        note(it, `worst-case search greedy instead of exact (work budget ${maxWork})`);
+      }
+    });
+  }
+  if (total() > maxWork) {
+    const fixed = est.reduce((s, e) => s + e.fixed + e.worst, 0) * visits;
+    const reducible = est.reduce((s, e) => s + e.band + e.cases, 0) * visits;
+    const scale = Math.max(0, maxWork - fixed) / reducible;
+    items.forEach((it, i) => {
+      if (it.type === 'band' && est[i].band > 0) {
+        const m = est[i].realizations;
+        const reduced = Math.max(Math.min(m, MIN_REALIZATIONS), Math.floor(m * scale));
+        if (reduced < m) {
+          if (it.params.challenge === 'regional') it.params.epicentres = reduced;
+          else it.params.realizations = reduced;
+          note(it, `realizations reduced from ${m} to ${reduced} by the work budget (${maxWork} element visits)`);
+        }
+      } else if (it.type === 'contingency') {
+        const cases = est[i].totalCases;
+        const reduced = Math.max(1, Math.floor(cases * scale));
+        if (reduced < cases) {
+          it.maxCases = reduced;
+          note(it, `${reduced} of ${cases} cases evaluated within the work budget (${maxWork} element visits)`);
+        }
+      }
+    });
+  }
+  for (const it of items) if (it.degraded) degraded.push(`${it.params.challenge}: ${it.degraded}`);
+  return { r: spec.r, items, degraded };
+}
+
+function note(it: PlannedChallenge, reason: string): void {
+  it.degraded = it.degraded ? `${it.degraded}; ${reason}` : reason;
+}
+
+interface Estimate {
+  band: number;
+  cases: number;
+  fixed: number;
+  worst: number;
+  worstExact: boolean;
+  realizations: number;
+  totalCases: number;
+}
+
+/** Work estimate of one challenge in graph passes (see the header). */
+function estimate(g: CompactGraph, it: PlannedChallenge, rp: number, free: boolean): Estimate {
+  const p = it.params;
+  const e: Estimate = { band: 0, cases: 0, fixed: 0, worst: 0, worstExact: false, realizations: 0, totalCases: 0 };
+  const kind = challengeKind(g, p);
+  if (it.type === 'band') {
+    const m = p.challenge === 'regional' ? sitesWithCoordinates(g).length : p.realizations;
+    const x = makeGrid(p.until, p.points, p.at);
+    const count = unitCount(g, kind);
+    const distinct = p.challenge === 'regional' ? x.length : new Set(x.map((v) => Math.round(v * count))).size;
+    e.realizations = m;
+    e.band = m * (free ? 2 : distinct * rp + 1);
+  } else if (it.type === 'attack') {
+    const k = attackSteps(g, kind, p.until);
+    const groups = g.groupIds.length;
+    const ranking = p.challenge === 'risk-groups-worst' ? ((groups * (groups + 1)) / 2) * rp : RANKING_PASSES[p.challenge]!(g.n, k);
+    e.fixed = ranking + (free ? 1 : (k + 1) * rp);
+  } else {
+    const order = p.challenge === 'n-2' ? 2 : 1;
+    e.totalCases = contingencyTotal(g, p.element, order);
+    e.cases = Math.min(e.totalCases, it.maxCases) * rp;
+  }
+  if (p.worstCase > 0) {
+    const units = countOnes(eligibleUnits(g, kind));
+    const k = Math.min(p.worstCase, units);
+    const exactCases = subsets(units, k);
+    e.worstExact = k <= 2 && exactCases <= it.exactLimit;
+    e.worst = (e.worstExact ? exactCases + (k === 2 ? units : 0) : k * units * Math.max(1, it.beam)) * rp;
+  }
+  return e;
+}
+
+export function evaluateDesign(g: CompactGraph, spec: EvaluationSpec): DesignEvaluation {
+  const plan = planEvaluation(g, spec);
+  const tasks = planTasks(plan, g);
+  return assembleEvaluation(g, plan, tasks, tasks.map((t) => runTask(g, plan, t)));
+}
+
+export function structureSummary(g: CompactGraph): StructureSummary {
+  const comps = findComponents(g);
+  const cuts = findCutElements(g);
+  return {
+    nodes: g.n,
+    links: g.m,
+    components: comps.sizes.length,
+    bridges: cuts.bridges.map((e) => ({ id: g.linkIds[e], kind: 'link' as const, line: g.linkLine[e] })),
+    cutNodes: cuts.cutNodes.map((v) => ({ id: g.nodeIds[v], kind: 'node' as const, line: g.nodeLine[v] })),
+  };
+}
+
+/** Merges task results (in task order) into the evaluation. */
+export function assembleEvaluation(g: CompactGraph, plan: EvaluationPlan, tasks: Task[], results: TaskResult[]): DesignEvaluation {
+  const samples = new Map<ChallengeName, Float64Array[]>();
+  const labels = new Map<ChallengeName, string[]>();
+  const evaluation: Evaluation = {
+    r: plan.r,
+    structure: structureSummary(g),
+    envelopes: [],
+    attacks: [],
+    contingencies: [],
+    degraded: [...plan.degraded],
+  };
+  const envelopeOf = new Map<number, Envelope>();
+  const attackOf = new Map<number, AttackCurve>();
+  const ev = new StepEvaluator(g, plan.r);
+
+  plan.items.forEach((it, item) => {
+    const p = it.params;
+    const mine = tasks.map((t, i) => ({ t, res: results[i] })).filter(({ t }) => t.item === item);
+    if (it.type === 'band') {
+      const values = mine.flatMap(({ res }) => (res.type === 'band' ? res.values : []));
+      const bp = bandPlan(g, p);
+      const env = buildEnvelope(g, it, bp, values, ev);
+      samples.set(p.challenge, values);
+      if (bp.label) labels.set(p.challenge, values.map((_, r) => bp.label!(r)));
+      envelopeOf.set(item, env);
+      evaluation.envelopes.push(env);
+    } else if (it.type === 'attack') {
+      const res = mine.find(({ res }) => res.type === 'attack')!.res as Extract<TaskResult, { type: 'attack' }>;
+      const c = getChallenge(p.challenge);
+      const kind = c.type === 'attack' ? c.kind : 'node';
+      const count = unitCount(g, kind);
+      const ids = unitIds(g, kind);
+      const values = Array.from(res.values);
+      const curve: AttackCurve = {
+        challenge: p.challenge,
+        kind,
+        x: values.map((_, k) => (count > 0 ? k / count : 0)),
+        values,
+        sequence: Array.from(res.sequence, (u) => ids[u]),
+        count,
+        area: gridMean(values),
+      };
+      attackOf.set(item, curve);
+      evaluation.attacks.push(curve);
+    } else {
+      const res = mine.find(({ res }) => res.type === 'contingency')!.res as Extract<TaskResult, { type: 'contingency' }>;
+      evaluation.contingencies.push(res.result as Contingency);
+    }
+    const worst = mine.find(({ res }) => res.type === 'worst')?.res as Extract<TaskResult, { type: 'worst' }> | undefined;
+    if (worst) {
+      const target = envelopeOf.get(item) ?? attackOf.get(item);
+      if (target) target.worstCase = worst.result as WorstCase;
+    }
+  });
+
+  // Attack gap: each fraction envelope against the most harmful attack of its element kind.
+  for (const env of evaluation.envelopes) {
+    if (env.xUnit !== 'fraction') continue;
+    const candidates = evaluation.attacks.filter((a) => a.kind === env.kind);
+    if (candidates.length === 0) continue;
+    let worst = candidates[0];
+    for (const a of candidates) if (a.area < worst.area) worst = a;
+    const count = unitCount(g, env.kind);
+    const eligible = countOnes(eligibleUnits(g, env.kind));
+    const atGrid = env.x.map((x) => {
+      const k = stepsAt(x, count, eligible);
+      return k < worst.values.length ? worst.values[k] : null;
+    });
+    const lo = env.quantiles[quantileKey(env.band[0])].value;
+    const gap = attackGap(lo, atGrid);
+    if (gap !== null) env.attackGap = { value: gap, attack: worst.challenge };
+  }
+  return { evaluation, samples, labels };
+}
+
+function buildEnvelope(
+  g: CompactGraph,
+  it: PlannedChallenge,
+  bp: ReturnType<typeof bandPlan>,
+  values: Float64Array[],
+  ev: StepEvaluator,
+): Envelope {
+  const p = it.params;
+  const stats = gridStats(values, bp.x.length, p.band);
+  const lo = stats.quantiles[quantileKey(p.band[0])].value;
+  const hi = stats.quantiles[quantileKey(p.band[1])].value;
+  const env: Envelope = {
+    challenge: p.challenge,
+    kind: bp.kind,
+    xUnit: bp.xUnit,
+    x: bp.x,
+    realizations: values.length,
+    seed: p.seed,
+    band: p.band,
+    min: stats.min,
+    max: stats.max,
+    mean: stats.mean,
+    median: stats.median,
+    quantiles: stats.quantiles,
+    area: area(stats.median),
+    spread: spread(lo, hi),
+    weakest: weakestSequences(g, bp, values, ev),
+  };
+  if (it.degraded) env.degraded = it.degraded;
+  return env;
+}
+
+/** The realizations with the lowest mean R over the grid (ties: lower index), with their sequences. */
+function weakestSequences(g: CompactGraph, bp: ReturnType<typeof bandPlan>, values: Float64Array[], ev: StepEvaluator): RemovalSequence[] {
+  const score = values.map((v) => gridMean(v));
+  const picks = values
+    .map((_, r) => r)
+    .sort((a, b) => score[a] - score[b] || a - b)
+    .slice(0, WEAKEST_KEPT);
+  const ids = unitIds(g, bp.kind);
+  const order = new Int32Array(bp.maxUnits);
+  const steps = new Int32Array(bp.x.length);
+  return picks.map((r) => {
+    const len = bp.realize(r, order, steps);
+    const seq: RemovalSequence = { kind: bp.kind, elements: Array.from(order.subarray(0, len), (u) => ids[u]), values: [], realization: r };
+    if (bp.label) seq.label = bp.label(r);
+    if (ev.stepsAreFree) {
+      seq.values = Array.from(ev.everyStep(bp.kind, order, len).subarray(1));
+    } else {
+      const at: number[] = [];
+      const vals: number[] = [];
+      for (let j = 0; j < steps.length; j++) {
+        if (steps[j] === 0 || (at.length > 0 && at[at.length - 1] === steps[j])) continue;
+        at.push(steps[j]);
+        vals.push(values[r][j]);
+      }
+      seq.values = vals;
+      seq.steps = at;
+    }
+    return seq;
+  });
+}
