@@ -4,6 +4,7 @@
 
 import type { AttackCurve, Envelope } from '../envelope/types.js';
 import type { Evaluation } from './report.js';
+import { escapeHtml } from './escape.js';
 import { challengeLabel, formatFraction, formatValue, kindPlural, kindSingular, xAxisLabel } from './labels.js';
 
 export interface ChartPoint {
@@ -153,8 +154,7 @@ export interface SvgOptions {
   width?: number;
 }
 
-const esc = (s: string) =>
-  s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+const esc = (s: string) => escapeHtml(s);
 const num = (v: number) => (Math.round(v * 10) / 10).toString();
 
 /** The chart as one standalone SVG element (inline attributes only, so it survives copying). */

@@ -21,9 +21,9 @@ import {
   weakestSequences,
 } from './labels.js';
 import type { Evaluation, FileReport, Finding, Report, ReportElement, RequirementResult } from './report.js';
+import { escapeHtml } from './escape.js';
 
-const esc = (s: string | number) =>
-  String(s).replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
+const esc = (s: string | number) => escapeHtml(String(s));
 
 /** A JSON number as an attribute value (exact, so tests can compare with the report). */
 const dataValue = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));

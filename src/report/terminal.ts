@@ -21,6 +21,7 @@ import {
   weakestSequences,
 } from './labels.js';
 import type { Evaluation, FileReport, Finding, Report, RequirementResult } from './report.js';
+import { oneLine } from './escape.js';
 
 export interface TerminalOptions {
   /** ANSI colour (the shell decides: NO_COLOR, TTY, FORCE_COLOR). */
@@ -31,7 +32,11 @@ export interface TerminalOptions {
 
 const SYMBOL = { fail: '\u2717', warn: '\u25b2', notice: 'i', pass: '\u2713' } as const;
 
-export function renderTerminal(report: Report, options: TerminalOptions): string {
+export function renderTerminal(input: Report, options: TerminalOptions): string {
+  // Every string in a report may come from a design file (ids, paths, messages): strip control
+  // characters and invisible reordering ones before any of it reaches a terminal, so a crafted
+  // id cannot move the cursor, recolour or hide text.
+  const report = JSON.parse(JSON.stringify(input), (_key, v: unknown) => (typeof v === 'string' ? oneLine(v) : v)) as Report;
   const c = createColors(options.color);
   const width = Math.max(60, Math.min(options.width || 100, 160));
   const out: string[] = [];

@@ -94,4 +94,13 @@ describe('renderTerminal', () => {
     expect(text).toContain('No design files changed: nothing to judge.');
     expect(text).toContain('\u2713 Verdict: PASS \u2014 0 designs');
   });
+
+  it('strips control characters from report text, so a crafted id cannot drive the terminal', () => {
+    const r = demoReport();
+    r.files[0].path = 'designs/\u001b[2J\u001b[31mevil\u202e.net.yaml';
+    r.files[0].findings[0].message = 'bridge \u001b]0;title\u0007 here';
+    const text = renderTerminal(r, { color: false, width: 100 });
+    expect(text).not.toMatch(/[\u0007\u001b\u202e]/);
+    expect(text).toContain('designs/[2J[31mevil.net.yaml');
+  });
 });
