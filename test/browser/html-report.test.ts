@@ -151,7 +151,7 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
     const charts = await page.$$eval('svg.nb-chart', (svgs) =>
       svgs.map((svg) => {
         const [t, d] = (svg.getAttribute('aria-labelledby') ?? '').split(' ');
-        return { role: svg.getAttribute('role'), title: document.getElementById(t)?.textContent, desc: document.getElementById(d)?.textContent };
+        return { role: svg.getAttribute('role'), title: svg.ownerDocument.getElementById(t)?.textContent, desc: svg.ownerDocument.getElementById(d)?.textContent };
       }),
     );
     expect(charts.length).toBeGreaterThan(0);
