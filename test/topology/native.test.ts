@@ -1,7 +1,8 @@
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseDesign } from '../../src/topology/parse.js';
 import { compileTopology } from '../../src/graph/compact.js';
-import { caught, fixture } from './helpers.js';
+import { caught, fixture, repoRoot } from './helpers.js';
 
 const yaml = (text: string) => () => parseDesign(text, 'net/core.net.yaml');
 const twoNodes = 'nodes:\n  - id: a\n  - id: b\n';
@@ -159,5 +160,16 @@ describe('our design format: bad input is located', () => {
   it('a few ordinary aliases are fine', () => {
     const t = parseDesign('metadata:\n  base: &b {owner: ops}\n  copy: *b\nnodes: [{id: a}]\n', 'x.net.yaml');
     expect(t.metadata).toEqual({ base: { owner: 'ops' }, copy: { owner: 'ops' } });
+  });
+});
+
+describe('the README example', () => {
+  it('parses, with the parallel link kept', () => {
+    const readme = readFileSync(`${repoRoot}/README.md`, 'utf8');
+    const block = /### Our format\n```yaml\n([\s\S]*?)```/.exec(readme);
+    expect(block, 'README.md has a "### Our format" yaml block').not.toBeNull();
+    const t = parseDesign(block![1], 'README.net.yaml');
+    expect([t.nodes.length, t.links.length, t.demands.length, t.riskGroups.length]).toEqual([3, 3, 1, 1]);
+    expect(t.links.map((l) => l.id)).toEqual(['ns-1', 'north\u2014south#2', 'south\u2014west']);
   });
 });
