@@ -1,0 +1,319 @@
+// The Action's run() in process, with the gate, git and the runner protocol replaced by
+// recording doubles: which commits it asks the gate to compare, what it writes, and how it
+// ends. The bundled action is exercised end to end in e2e.test.ts.
+
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, symlinkSync, writeFileSync, existsSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import type { Annotation } from '../../src/report/annotations.js';
+import { commentMarker, renderComment } from '../../src/report/markdown.js';
+import type { Report } from '../../src/report/report.js';
+import {
+  readInputs,
+  run,
+  shouldWriteComment,
+  type ActionDeps,
+  type GateRequestLike,
+  type GitResult,
+} from '../../src/shell/action-run.js';
+import { createClient } from '../../src/shell/github.js';
+import { startFakeApi, type FakeApi } from './fake-api.js';
+import { emptyReport, sampleReport } from '../report/sample-report.js';
+
+const BASE = 'a'.repeat(40);
+const HEAD = 'b'.repeat(40);
+const MERGE_SHA = 'c'.repeat(40);
+
+interface Recorder {
+  annotations: Annotation[];
+  warnings: string[];
+  infos: string[];
+  outputs: Record<string, string>;
+  failed: string[];
+  summary: string;
+  gateCalls: GateRequestLike[];
+  gitCalls: string[][];
+}
+
+let dir: string;
+let api: FakeApi;
+
+beforeEach(async () => {
+  dir = mkdtempSync(path.join(tmpdir(), 'nb-run-'));
+  mkdirSync(path.join(dir, 'ws'));
+  api = await startFakeApi();
+});
+afterEach(async () => {
+  await api.close();
+  rmSync(dir, { recursive: true, force: true });
+});
+
+let events = 0;
+function prEvent(extra: Record<string, unknown> = {}): string {
+  const file = path.join(dir, `event-${events++}.json`);
+  writeFileSync(
+    file,
+    JSON.stringify({
+      number: 12,
+      pull_request: {
+        number: 12,
+        base: { sha: BASE, repo: { full_name: 'acme/net' } },
+        head: { sha: HEAD, repo: { full_name: 'acme/net', fork: false } },
+        ...extra,
+      },
+      repository: { full_name: 'acme/net' },
+    }),
+  );
+  return file;
+}
+
+function env(over: Record<string, string> = {}): Record<string, string> {
+  return {
+    GITHUB_WORKSPACE: path.join(dir, 'ws'),
+    GITHUB_EVENT_NAME: 'pull_request',
+    GITHUB_EVENT_PATH: prEvent(),
+    GITHUB_SHA: MERGE_SHA,
+    GITHUB_REPOSITORY: 'acme/net',
+    GITHUB_API_URL: api.url,
+    GITHUB_RUN_ID: '99',
+    'INPUT_TOKEN': 'tok',
+    'INPUT_COMMENT': 'always',
+    NETBRACE_HTTP_RETRIES: '1',
+    NETBRACE_HTTP_BACKOFF_MS: '5',
+    NETBRACE_HTTP_TIMEOUT_MS: '300',
+    ...over,
+  };
+}
+
+function deps(report: Report | ((r: GateRequestLike) => Report), git: (args: string[]) => GitResult = () => ({ code: 0, stdout: '', stderr: '' })) {
+  const rec: Recorder = { annotations: [], warnings: [], infos: [], outputs: {}, failed: [], summary: '', gateCalls: [], gitCalls: [] };
+  const d: ActionDeps = {
+    gate: async (request) => {
+      rec.gateCalls.push(request);
+      const r = typeof report === 'function' ? report(request) : structuredClone(report);
+      r.mode = request.mode;
+      return { report: r, exitCode: r.verdict === 'fail' && request.mode === 'enforce' ? 1 : 0 };
+    },
+    merge: (reports) => {
+      const r = structuredClone(reports[0]);
+      r.files = reports.flatMap((x) => x.files);
+      r.verdict = reports.some((x) => x.verdict === 'fail') ? 'fail' : 'pass';
+      delete r.shard;
+      return r;
+    },
+    git: async (args) => {
+      rec.gitCalls.push(args);
+      return git(args);
+    },
+    github: (o) => createClient(o),
+    renderHtml: () => '<!doctype html><title>r</title>',
+    out: {
+      annotate: (a) => rec.annotations.push(a),
+      info: (m) => rec.infos.push(m),
+      warning: (m) => rec.warnings.push(m),
+      setOutput: (k, v) => {
+        rec.outputs[k] = v;
+      },
+      setFailed: (m) => rec.failed.push(m),
+      appendSummary: (m) => {
+        rec.summary += m;
+      },
+    },
+  };
+  return { d, rec };
+}
+
+describe('inputs', () => {
+  it('reads the runner\u2019s INPUT_ names (upper case, dashes kept) and validates them', () => {
+    const i = readInputs({ 'INPUT_COMMENT-KEY': 'metro', 'INPUT_POLICY-SOURCE': 'head', INPUT_SHARD: '2/4', INPUT_MODE: 'advise' });
+    expect(i).toMatchObject({ commentKey: 'metro', policySource: 'head', shard: { index: 2, total: 4 }, mode: 'advise', comment: 'on-change' });
+    expect(() => readInputs({ INPUT_MODE: 'strict' })).toThrow(/input "mode" is "strict"; use one of: enforce, advise/);
+    expect(() => readInputs({ INPUT_SHARD: '5/4' })).toThrow(/input "shard"/);
+    expect(() => readInputs({ 'INPUT_COMMENT-KEY': 'a b' })).toThrow(/comment-key/);
+    expect(() => readInputs({ INPUT_BASE: '--upload-pack=evil' })).toThrow(/input "base"/);
+    expect(() => readInputs({ INPUT_SHARD: '1/2', INPUT_MERGE: 'shards' })).toThrow(/exclude each other/);
+  });
+
+  it('a bad input ends in exactly one setFailed and no evaluation', async () => {
+    const { d, rec } = deps(sampleReport());
+    const out = await run(env({ INPUT_COMMENT: 'sometimes' }), d);
+    expect(out.exitCode).toBe(2);
+    expect(rec.failed).toEqual(['netbrace: input "comment" is "sometimes"; use one of: always, on-change, on-failure, never']);
+    expect(rec.gateCalls.length).toBe(0);
+  });
+
+  it('refuses output paths that leave the workspace, symlinks included', async () => {
+    symlinkSync(dir, path.join(dir, 'ws', 'escape'));
+    for (const bad of ['../outside.json', 'escape/outside.json']) {
+      const { d, rec } = deps(sampleReport());
+      const out = await run(env({ INPUT_REPORT: bad }), d);
+      expect(out.exitCode).toBe(2);
+      expect(rec.failed.length).toBe(1);
+      expect(rec.failed[0]).toMatch(/input "report" .* outside the workspace/);
+    }
+    expect(existsSync(path.join(dir, 'outside.json'))).toBe(false);
+  });
+});
+
+describe('events', () => {
+  it('pull_request: compares the payload\u2019s base and head, never GITHUB_SHA', async () => {
+    const { d, rec } = deps(sampleReport());
+    await run(env(), d);
+    expect(rec.gateCalls[0]).toMatchObject({ base: BASE, head: HEAD, policySource: 'base', mode: 'enforce', eventKind: 'pull-request' });
+    expect(JSON.stringify(rec.gateCalls)).not.toContain(MERGE_SHA);
+  });
+
+  it('push of a new branch (all-zero before) compares with the head\u2019s parent', async () => {
+    const event = path.join(dir, 'push.json');
+    writeFileSync(event, JSON.stringify({ before: '0'.repeat(40), after: HEAD }));
+    const parent = 'd'.repeat(40);
+    const { d, rec } = deps(sampleReport(), (args) => (args[0] === 'rev-parse' ? { code: 0, stdout: `${parent}\n`, stderr: '' } : { code: 0, stdout: '', stderr: '' }));
+    await run(env({ GITHUB_EVENT_NAME: 'push', GITHUB_EVENT_PATH: event }), d);
+    expect(rec.gateCalls[0]).toMatchObject({ base: parent, head: HEAD, eventKind: 'push' });
+  });
+
+  it('schedule: every design against thresholds only', async () => {
+    const { d, rec } = deps(sampleReport());
+    await run(env({ GITHUB_EVENT_NAME: 'schedule', GITHUB_EVENT_PATH: '' }), d);
+    expect(rec.gateCalls[0].base).toBeUndefined();
+    expect(rec.gateCalls[0]).toMatchObject({ head: MERGE_SHA, eventKind: 'full' });
+  });
+
+  it('a deleted branch has nothing to judge and passes saying so', async () => {
+    const event = path.join(dir, 'push.json');
+    writeFileSync(event, JSON.stringify({ before: HEAD, after: '0'.repeat(40), deleted: true }));
+    const { d, rec } = deps(sampleReport());
+    const out = await run(env({ GITHUB_EVENT_NAME: 'push', GITHUB_EVENT_PATH: event }), d);
+    expect(out).toMatchObject({ exitCode: 0, verdict: 'pass' });
+    expect(rec.gateCalls.length).toBe(0);
+    expect(rec.summary).toContain('no design file changed');
+  });
+
+  it('a missing base that cannot be fetched stops with the checkout fix', async () => {
+    api.reads = 'error500';
+    const { d, rec } = deps(sampleReport(), (args) => (args[0] === 'cat-file' && args[2].startsWith(BASE) ? { code: 1, stdout: '', stderr: '' } : args[0] === 'fetch' ? { code: 128, stdout: '', stderr: 'fatal: no such commit' } : { code: 0, stdout: '', stderr: '' }));
+    const out = await run(env(), d);
+    expect(out.exitCode).toBe(2);
+    expect(rec.failed).toHaveLength(1);
+    expect(rec.failed[0]).toContain('add `fetch-depth: 0` to the actions/checkout step');
+    expect(rec.gitCalls).toContainEqual(['fetch', '--no-tags', '--no-recurse-submodules', '--depth=1', 'origin', BASE]);
+  });
+
+  it('a missing base with no design among the pull request\u2019s files (REST fallback) passes', async () => {
+    api.prFiles.push({ filename: 'README.md', status: 'modified' });
+    const { d, rec } = deps((r) => (r.paths ? emptyReport() : sampleReport()), (args) => (args[0] === 'cat-file' && args[2].startsWith(BASE) ? { code: 1, stdout: '', stderr: '' } : args[0] === 'fetch' ? { code: 128, stdout: '', stderr: 'fatal' } : { code: 0, stdout: '', stderr: '' }));
+    const out = await run(env(), d);
+    expect(out).toMatchObject({ exitCode: 0, verdict: 'pass' });
+    expect(rec.gateCalls[0].paths).toEqual(['README.md']);
+    expect(rec.summary).toContain('no design file changed');
+    expect(api.requests.some((r) => r.path.endsWith('/pulls/12/files'))).toBe(true);
+  });
+});
+
+describe('verdict and comment', () => {
+  it('enforce + fail: one setFailed at the end, after summary, annotations and outputs', async () => {
+    const { d, rec } = deps(sampleReport());
+    const out = await run(env(), d);
+    expect(out).toMatchObject({ exitCode: 1, verdict: 'fail' });
+    expect(rec.failed).toEqual(['netbrace: the gate failed: 2 designs with failures (see the annotations and the job summary)']);
+    expect(rec.outputs).toMatchObject({ verdict: 'fail', 'count-regressed': '1', 'count-error': '1', designs: '5', report: '.netbrace-out/netbrace-report.json', sarif: '.netbrace-out/netbrace.sarif' });
+    expect(rec.annotations[0]).toMatchObject({ level: 'error', file: 'backbone/core.net.yaml', startLine: 42 });
+    expect(rec.summary).toContain('the gate failed');
+    const written = JSON.parse(readFileSync(path.join(dir, 'ws', '.netbrace-out', 'netbrace-report.json'), 'utf8'));
+    expect(written.verdict).toBe('fail');
+  });
+
+  it('advise + fail: reports, warns, never fails the step', async () => {
+    const { d, rec } = deps(sampleReport());
+    const out = await run(env({ INPUT_MODE: 'advise' }), d);
+    expect(out).toMatchObject({ exitCode: 0, verdict: 'fail' });
+    expect(rec.failed).toEqual([]);
+    expect(rec.outputs.verdict).toBe('fail');
+    expect(rec.warnings.some((w) => /advise mode/.test(w))).toBe(true);
+  });
+
+  it('one living comment: created, then updated in place', async () => {
+    const a = deps(sampleReport());
+    await run(env(), a.d);
+    const changed = sampleReport();
+    changed.files[1].findings.pop();
+    const b = deps(changed);
+    await run(env(), b.d);
+    const ours = api.comments.filter((c) => c.body.includes(commentMarker('default')));
+    expect(ours).toHaveLength(1);
+    expect(api.requests.filter((r) => r.method === 'POST')).toHaveLength(1);
+    expect(api.requests.filter((r) => r.method === 'PATCH')).toHaveLength(1);
+  }, 20_000);
+
+  it('fork pull request: the 403 is a warning; the verdict stands', async () => {
+    api.writes = 'forbidden';
+    const { d, rec } = deps(sampleReport());
+    const out = await run(env({ GITHUB_EVENT_PATH: prEvent({ head: { sha: HEAD, repo: { full_name: 'someone/net', fork: true } } }) }), d);
+    expect(out).toMatchObject({ exitCode: 1, verdict: 'fail', comment: 'failed' });
+    expect(rec.warnings).toEqual([expect.stringMatching(/fork.*two-workflow/)]);
+    expect(rec.failed).toHaveLength(1);
+    expect(rec.summary).toContain('could not be written');
+  });
+
+  it('API down: the comment fails quickly, the verdict is unchanged', async () => {
+    api.reads = 'error500';
+    api.writes = 'error500';
+    const { d, rec } = deps(emptyReport());
+    const t0 = Date.now();
+    const out = await run(env(), d);
+    expect(Date.now() - t0).toBeLessThan(5000);
+    expect(out).toMatchObject({ exitCode: 0, verdict: 'pass', comment: 'failed' });
+    expect(rec.failed).toEqual([]);
+    expect(rec.warnings.some((w) => /could not write the pull-request comment/.test(w))).toBe(true);
+  });
+
+  it('comment modes decide from the report and the existing comment', () => {
+    const fail = sampleReport();
+    const pass = emptyReport();
+    const existing = { id: 1, body: renderComment(fail, { key: 'k' }) };
+    expect(shouldWriteComment('never', fail, undefined)).toBe(false);
+    expect(shouldWriteComment('always', pass, undefined)).toBe(true);
+    expect(shouldWriteComment('on-failure', pass, undefined)).toBe(false);
+    expect(shouldWriteComment('on-failure', pass, existing)).toBe(true);
+    expect(shouldWriteComment('on-change', fail, existing)).toBe(false);
+    expect(shouldWriteComment('on-change', pass, existing)).toBe(true);
+    expect(shouldWriteComment('on-change', pass, undefined)).toBe(false);
+  });
+});
+
+describe('shards', () => {
+  it('a shard job writes its report and leaves the decision to the merge job', async () => {
+    const r = sampleReport();
+    r.shard = { index: 1, total: 2 };
+    const { d, rec } = deps(r);
+    const out = await run(env({ INPUT_SHARD: '1/2', INPUT_REPORT: 'shards/shard-1.json' }), d);
+    expect(out).toMatchObject({ exitCode: 0, verdict: 'fail' });
+    expect(rec.gateCalls[0].shard).toEqual({ index: 1, total: 2 });
+    expect(rec.annotations).toEqual([]);
+    expect(rec.failed).toEqual([]);
+    expect(api.requests).toEqual([]);
+    expect(existsSync(path.join(dir, 'ws', 'shards', 'shard-1.json'))).toBe(true);
+  });
+
+  it('the merge job reads the shard reports as data and decides', async () => {
+    const shards = path.join(dir, 'ws', 'shards');
+    mkdirSync(shards);
+    const r1 = sampleReport();
+    r1.files = r1.files.slice(0, 2);
+    const r2 = sampleReport();
+    r2.files = r2.files.slice(2);
+    writeFileSync(path.join(shards, 'a.json'), JSON.stringify(r1));
+    writeFileSync(path.join(shards, 'b.json'), JSON.stringify(r2));
+    const { d, rec } = deps(sampleReport());
+    const out = await run(env({ INPUT_MERGE: 'shards' }), d);
+    expect(rec.gateCalls).toEqual([]);
+    expect(out).toMatchObject({ exitCode: 1, verdict: 'fail' });
+    expect(rec.outputs.designs).toBe('5');
+    writeFileSync(path.join(shards, 'c.json'), '{"not":"a report"}');
+    const bad = deps(sampleReport());
+    const out2 = await run(env({ INPUT_MERGE: 'shards' }), bad.d);
+    expect(out2.exitCode).toBe(2);
+    expect(bad.rec.failed[0]).toContain('c.json is not a netbrace report');
+  });
+});
