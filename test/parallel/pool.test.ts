@@ -1,0 +1,42 @@
+import { describe, expect, it } from 'vitest';
+import { evaluateDesignParallel, workerEntry } from '../../src/parallel/pool.js';
+import { evaluateDesign, type EvaluationSpec } from '../../src/envelope/evaluate.js';
+import { preferentialGraph } from '../envelope/graphs.js';
+
+describe('deterministic parallel realizations', () => {
+  const g = preferentialGraph(120, 2, 5);
+  const spec: EvaluationSpec = {
+    r: { metrics: [{ id: 'efficiency', weight: 2 }, { id: 'largest_component', weight: 1 }], combine: 'mean' },
+    seed: 77,
+    challenges: [
+      { challenge: 'random-links', realizations: 40, until: 0.5, worstCase: 3 },
+      { challenge: 'random-nodes', realizations: 37, points: 6 },
+      { challenge: 'degree-adaptive', until: 0.3 },
+      { challenge: 'n-1' },
+    ],
+  };
+
+  it('gives byte-identical JSON for 1 and 2 worker threads, and equals the synchronous evaluation', async () => {
+    const one = await evaluateDesignParallel(g, spec, 1);
+    const two = await evaluateDesignParallel(g, spec, 2);
+    const sync = evaluateDesign(g, spec);
+    const json = JSON.stringify(one.evaluation);
+    expect(JSON.stringify(two.evaluation)).toBe(json);
+    expect(JSON.stringify(sync.evaluation)).toBe(json);
+    expect(two.samples.get('random-links')!.map((a) => Array.from(a))).toEqual(one.samples.get('random-links')!.map((a) => Array.from(a)));
+    expect(one.evaluation.envelopes[0].realizations).toBe(40);
+  });
+
+  it('finds its worker from source (tsx) and from the bundle (dist/worker.js)', () => {
+    const source = workerEntry(new URL('../../src/parallel/pool.ts', import.meta.url).href);
+    expect(source.url.href).toBe(new URL('../../src/parallel/worker.ts', import.meta.url).href);
+    expect(source.loader).toMatch(/tsx\/dist\/esm\/api\/index\.mjs$/);
+    const bundled = workerEntry('file:///x/dist/cli.js');
+    expect(bundled.url.href).toBe('file:///x/dist/worker.js');
+    expect(bundled.loader).toBeUndefined();
+  });
+
+  it('rejects a thread count that is not a positive integer', async () => {
+    await expect(evaluateDesignParallel(g, spec, 0)).rejects.toThrow(RangeError);
+  });
+});
