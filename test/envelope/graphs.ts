@@ -1,6 +1,6 @@
 // Seeded graph generators for the engine's tests (not a reference: the outside checks use
 // networkx's own graphs, committed under test/reference/).
-import { graphFromEdges, type CompactGraph } from '../../src/graph/compact.js';
+import { compileTopology, graphFromEdges, type CompactGraph } from '../../src/graph/compact.js';
 import { Xoshiro128 } from '../../src/envelope/rng.js';
 
 /** G(n, L): L distinct links chosen uniformly. */
@@ -34,4 +34,40 @@ export function preferentialGraph(n: number, m: number, seed: number): CompactGr
     }
   }
   return graphFromEdges(n, edges);
+}
+
+export interface SketchNode {
+  id: string;
+  lat?: number;
+  lon?: number;
+  hardened?: boolean;
+}
+export interface SketchLink {
+  a: string;
+  b: string;
+  groups?: string[];
+  hardened?: boolean;
+}
+
+/** A small design from nodes and links, as a parser would hand it over. */
+export function design(nodes: SketchNode[], links: SketchLink[]): CompactGraph {
+  return compileTopology({
+    file: 'sketch.yaml',
+    format: 'native-yaml',
+    nodes: nodes.map((v, i) => ({ id: v.id, lat: v.lat, lon: v.lon, hardened: v.hardened ?? false, pos: { line: i + 2, column: 1 }, attrs: {} })),
+    links: links.map((l, e) => ({
+      id: `${l.a}-${l.b}`,
+      key: l.a < l.b ? `${l.a}-${l.b}` : `${l.b}-${l.a}`,
+      source: l.a,
+      target: l.b,
+      riskGroups: l.groups ?? [],
+      hardened: l.hardened ?? false,
+      pos: { line: nodes.length + e + 2, column: 1 },
+      attrs: {},
+    })),
+    riskGroups: [],
+    demands: [],
+    metadata: {},
+    warnings: [],
+  });
 }
