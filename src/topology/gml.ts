@@ -31,6 +31,10 @@ function unescape(s: string): string {
   });
 }
 
+// Sticky patterns, shared by every reader (lastIndex is set before each use).
+const KEY = /[A-Za-z_][A-Za-z0-9_]*/y;
+const NUMBER = /[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?/y;
+
 class GmlReader {
   private i = 0;
   private line = 1;
@@ -84,9 +88,8 @@ class GmlReader {
         throw this.b.error('unexpected "]" with no open "["', this.here(), 'remove it, or add the "[" it closes');
       }
       const pos = this.here();
-      const m = /[A-Za-z_][A-Za-z0-9_]*/y;
-      m.lastIndex = this.i;
-      const key = m.exec(t);
+      KEY.lastIndex = this.i;
+      const key = KEY.exec(t);
       if (!key) throw this.b.error(`expected a key, found "${t[this.i]}"`, pos, 'GML is a list of `key value` pairs; keys are letters, digits and _');
       this.i += key[0].length;
       this.skip();
@@ -117,9 +120,8 @@ class GmlReader {
       this.i = end + 1;
       return { key, value: unescape(raw), raw, pos };
     }
-    const m = /[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?/y;
-    m.lastIndex = this.i;
-    const num = m.exec(t);
+    NUMBER.lastIndex = this.i;
+    const num = NUMBER.exec(t);
     if (num) {
       this.i += num[0].length;
       return { key, value: Number(num[0]), raw: num[0], pos };

@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, truncateSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -104,6 +104,14 @@ describe('netbrace inspect', () => {
     const big = await run('inspect', '--max-bytes', '10', txt);
     expect(big.code).toBe(1);
     expect(big.stderr).toBe(`${txt}:1:1: the design file is larger than the limit (18 bytes > 10) — raise the limit (for the CLI: --max-bytes) if a file this large is intended\n`);
+  });
+
+  it('the default 20 MB limit refuses a larger file from its size alone', async () => {
+    const big = write('huge.gml', '');
+    truncateSync(big, 25 * 1024 * 1024); // sparse: no 25 MB is written or read
+    const { code, stderr } = await run('inspect', big);
+    expect(code).toBe(1);
+    expect(stderr).toContain(`${big}:1:1: the design file is larger than the limit (26214400 bytes > 20971520)`);
   });
 
   it('usage errors exit 2', async () => {
