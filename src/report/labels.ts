@@ -133,7 +133,7 @@ export function elementLines(f: FileReport): Map<string, number> {
 /** "kaskeld (line 14)", or the bare id when its line is unknown. */
 export function elementWithLine(id: string, lines: ReadonlyMap<string, number>): string {
   const line = lines.get(id);
-  return line ? `${id} (line\u00a0${line})` : id;
+  return line ? `${id}\u00a0(line\u00a0${line})` : id;
 }
 
 export interface NamedSequence {

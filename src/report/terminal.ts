@@ -97,15 +97,18 @@ function renderFile(f: FileReport, c: Colors, width: number): string[] {
   const findings = f.findings.filter((x) => x.rule !== 'weakest-sequence' && x.rule !== 'parse-error');
   if (findings.length) {
     out.push('', c.bold('  Findings'));
-    for (const x of findings) out.push(...findingLines(x, c, width));
+    for (const x of groupFindings(findings)) out.push(...findingLines(x, c, width));
   }
   const sequences = weakestSequences(f);
   if (sequences.length) {
     out.push('', c.bold('  Weakest removal sequences'));
     for (const s of sequences) {
-      const chain = s.ids.map((id) => elementWithLine(id, lines)).join(' \u2192 ');
-      const rs = s.values ? ` \u00b7 R ${s.values.map(formatValue).join(' \u2192 ')}` : '';
-      out.push(...wrap(`${s.title}: ${chain}${rs}`, width - 4).map((l, i) => (i === 0 ? `  \u2022 ${l}` : `    ${l}`)));
+      const shown = s.ids.slice(0, MAX_CHAIN);
+      const more = s.ids.length > shown.length ? ` \u2192 \u2026 (${s.ids.length - shown.length} more)` : '';
+      const chain = shown.map((id) => elementWithLine(id, lines)).join(' \u2192 ') + more;
+      const v = s.values ?? [];
+      const rs = !v.length ? '' : v.length === s.ids.length && v.length <= MAX_CHAIN ? v.map(formatValue).join(' \u2192 ') : `${formatValue(v[0])} \u2192 \u2026 \u2192 ${formatValue(v[v.length - 1])}`;
+      out.push(...wrap(`${s.title}: ${chain}${rs ? ` \u00b7 R ${rs}` : ''}`, width - 4).map((l, i) => (i === 0 ? `  \u2022 ${l}` : `    ${l}`)));
     }
   }
   const env = f.head?.envelopes[0];
@@ -143,15 +146,48 @@ function requirementTable(rows: RequirementResult[], c: Colors, width: number): 
   return out;
 }
 
-function findingLines(x: Finding, c: Colors, width: number): string[] {
+/** Elements shown under a finding, and steps of a sequence, before "… N more". */
+const MAX_ELEMENTS = 5;
+const MAX_CHAIN = 8;
+
+/** New bridges and cut nodes of one severity read best as one list: merge their findings. */
+function groupFindings(findings: Finding[]): Finding[] {
+  const out: Finding[] = [];
+  for (const x of findings) {
+    const groupable = (x.rule === 'new-bridge' || x.rule === 'new-cut-node') && x.elements.length === 1;
+    const prev = out[out.length - 1];
+    if (groupable && prev && prev.rule === x.rule && prev.severity === x.severity && prev.elements.length >= 1 && (prev as Grouped).grouped) {
+      prev.elements.push(...x.elements);
+      continue;
+    }
+    out.push(groupable ? ({ ...x, elements: [...x.elements], grouped: true } as Grouped) : x);
+  }
+  for (const x of out as Grouped[]) {
+    if (!x.grouped || x.elements.length < 2) continue;
+    const what = x.rule === 'new-bridge' ? 'new bridges (links whose loss alone splits the design)' : 'new cut nodes (sites whose loss alone splits the design)';
+    x.message = `${x.elements.length} ${what}: ${x.elements.map((e) => `${e.id}\u00a0(line\u00a0${e.line})`).join(', ')}`;
+  }
+  return out;
+}
+
+type Grouped = Finding & { grouped?: boolean };
+
+function findingLines(x: Grouped, c: Colors, width: number): string[] {
   const paint = x.severity === 'fail' ? c.red : x.severity === 'warn' ? c.yellow : c.cyan;
   const where = x.line > 0 ? `line ${x.line}` : '';
   const head = `  ${paint(`${SYMBOL[x.severity]} ${x.severity.padEnd(6)}`)} ${x.rule.padEnd(16)} ${where.padEnd(10)} `;
-  const body = wrap(x.message, Math.max(30, width - 40));
+  const room = Math.max(30, width - 39);
+  if (x.severity === 'notice') {
+    // Notices are context, not work: one line each.
+    return [head + (x.message.length > room ? `${x.message.slice(0, room - 1)}\u2026` : x.message)];
+  }
+  const body = wrap(x.message, room);
   const out = [head + body[0], ...body.slice(1).map((l) => ' '.repeat(39) + l)];
-  if (x.elements.length > 0) {
-    const list = `at ${x.elements.map((e) => `${e.id} (line ${e.line})`).join(', ')}`;
-    out.push(...wrap(list, Math.max(30, width - 40)).map((l) => ' '.repeat(39) + c.dim(l)));
+  const named = x.elements.length === 1 && x.message.includes(x.elements[0].id);
+  if (x.elements.length > 0 && !x.grouped && !named) {
+    const shown = x.elements.slice(0, MAX_ELEMENTS).map((e) => `${e.id}\u00a0(line\u00a0${e.line})`);
+    const more = x.elements.length > MAX_ELEMENTS ? `, \u2026 ${x.elements.length - MAX_ELEMENTS} more` : '';
+    out.push(...wrap(`at ${shown.join(', ')}${more}`, room).map((l) => ' '.repeat(39) + c.dim(l)));
   }
   return out;
 }

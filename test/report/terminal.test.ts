@@ -4,7 +4,8 @@ import { CAUTION } from '../../src/report/report.js';
 import { demoReport } from './demo-report.fixture.js';
 
 const ANSI = /\u001b\[[0-9;]*m/;
-const plain = (width = 100) => renderTerminal(demoReport(), { color: false, width });
+// Element names keep their line with no-break spaces; compare with plain spaces.
+const plain = (width = 100) => renderTerminal(demoReport(), { color: false, width }).replace(/\u00a0/g, ' ');
 
 describe('renderTerminal', () => {
   it('gives a verdict per design and overall', () => {
@@ -31,7 +32,7 @@ describe('renderTerminal', () => {
   it('names the weakest sequences by element and line, and the new bridges with their lines', () => {
     const text = plain(160);
     expect(text).toContain(
-      'Worst case found under random site failures (exact search, 3 sites): kaskeld (line\u00a031) \u2192 lunmere (line\u00a012) \u2192 tessaway (line\u00a019) \u00b7 R 0.655 \u2192 0.561 \u2192 0.468',
+      'Worst case found under random site failures (exact search, 3 sites): kaskeld (line 31) \u2192 lunmere (line 12) \u2192 tessaway (line 19) \u00b7 R 0.655 \u2192 0.561 \u2192 0.468',
     );
     expect(text).toContain('at lunmere-kaskeld (line 197), kaskeld-ibberlin (line 201)');
     expect(text).toMatch(/fail\s+new-bridge\s+line 197/);
@@ -71,7 +72,7 @@ describe('renderTerminal', () => {
     expect(plain()).not.toMatch(ANSI);
     const coloured = renderTerminal(demoReport(), { color: true, width: 100 });
     expect(coloured).toMatch(ANSI);
-    expect(coloured.replace(/\u001b\[[0-9;]*m/g, '')).toBe(plain());
+    expect(coloured.replace(/\u001b\[[0-9;]*m/g, '').replace(/\u00a0/g, ' ')).toBe(plain());
   });
 
   it('keeps lines within the width', () => {
@@ -102,5 +103,26 @@ describe('renderTerminal', () => {
     const text = renderTerminal(r, { color: false, width: 100 });
     expect(text).not.toMatch(/[\u0007\u001b\u202e]/);
     expect(text).toContain('designs/[2J[31mevil.net.yaml');
+  });
+
+  it('lists new bridges of one severity together, and keeps notices to one line', () => {
+    const r = demoReport();
+    const f = r.files[0];
+    const one = (id: string, line: number) => ({
+      rule: 'new-bridge' as const,
+      severity: 'warn' as const,
+      message: `link ${id} is a new bridge`,
+      elements: [{ id, kind: 'link' as const, line }],
+      line,
+    });
+    f.findings = [one('a-b', 10), one('b-c', 12), { ...one('c-d', 14), severity: 'fail' }, { rule: 'regression', severity: 'notice', message: 'x '.repeat(200), elements: [{ id: 'n', kind: 'node', line: 3 }], line: 3 }];
+    const lines = renderTerminal(r, { color: false, width: 100 }).replace(/\u00a0/g, ' ').split('\n');
+    const i = lines.findIndex((l) => l.includes('2 new bridges'));
+    expect(lines[i]).toMatch(/\u25b2 warn\s+new-bridge\s+line 10\s+2 new bridges \(links whose loss alone splits the design\):$/);
+    expect(lines[i + 1].trim()).toBe('a-b (line 10), b-c (line 12)');
+    expect(lines[i + 2]).toMatch(/\u2717 fail\s+new-bridge\s+line 14\s+link c-d is a new bridge$/);
+    expect(lines[i + 3]).toMatch(/i notice regression\s+line 3\s+x x .*\u2026$/);
+    expect(lines[i + 3].length).toBeLessThanOrEqual(100);
+    expect(lines[i + 4]).toBe('');
   });
 });
