@@ -215,10 +215,17 @@ function header(report: Report, options: MarkdownOptions): string {
   if (report.base && report.head) facts.push(`base ${shortSha(report.base)} \u2192 head ${shortSha(report.head)}`);
   else if (report.head) facts.push(`head ${shortSha(report.head)}, thresholds only (no base)`);
   facts.push(`seed ${report.seed}`);
+  if (report.scope === 'all') facts.push('every design, thresholds only');
   if (report.shard) facts.push(`shard ${report.shard.index} of ${report.shard.total}`);
+  if (report.shards) facts.push(`merged shards ${report.shards.merged.join(', ')} of ${report.shards.total}`);
   let text = `## ${verdict}\n\n${facts.join(' \u00b7 ')}\n\n`;
   if (report.policy.changed) {
-    text += `> ${ICON.warn} This change modifies the policy file. The policy shown here was read from the base; the proposed policy applies once the change is merged.\n\n`;
+    const said = report.policy.note
+      ? `${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ''), 600)}.`
+      : 'The policy shown here was read from the base; the proposed policy applies once the change is merged.';
+    text += `> ${ICON.warn} This change modifies the policy file. ${said}\n\n`;
+  } else if (report.policy.note) {
+    text += `> ${ICON.notice} ${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ''), 600)}.\n\n`;
   }
   for (const n of options.notes ?? []) text += `> ${escapeMarkdown(n, 500)}\n\n`;
   return text;

@@ -6,7 +6,7 @@
 // exactly one setFailed message. No input reaches a shell: git runs through execFile with
 // argument arrays, and commit ids and refs are validated before they get there.
 
-import { execFile } from 'node:child_process';
+import { execFile, execFileSync } from 'node:child_process';
 import { lstatSync, readFileSync, readdirSync, statSync, writeFileSync, appendFileSync, realpathSync } from 'node:fs';
 import path from 'node:path';
 import * as core from '@actions/core';
@@ -16,6 +16,8 @@ import { logText, oneLine } from '../report/escape.js';
 import { commentDigest, commentMarker, renderComment, renderSummary, reportDigest } from '../report/markdown.js';
 import { CAUTION, REPORT_VERSION, type FileStatus, type Report } from '../report/report.js';
 import { VERSION } from '../version.js';
+import { DEFAULT_POLICY_PATH } from '../policy/defaults.js';
+import { builtinPolicy, isDesignPath, loadPolicy } from '../policy/resolve.js';
 import { renderSarif } from '../report/sarif.js';
 import {
   createClient,
@@ -44,7 +46,7 @@ export interface GateRequestLike {
   seed?: number;
   threads?: number;
   shard?: { index: number; total: number };
-  eventKind?: 'pull-request' | 'push' | 'full';
+  eventKind?: 'pull-request' | 'push' | 'schedule' | 'local';
 }
 
 export interface GateResultLike {
@@ -70,7 +72,7 @@ export interface ActionOutput {
 
 export interface ActionDeps {
   gate(request: GateRequestLike, cwd: string): Promise<GateResultLike>;
-  merge(reports: Report[]): Report;
+  merge(reports: readonly unknown[]): Report;
   git(args: string[], cwd: string): Promise<GitResult>;
   github(options: ClientOptions): Client;
   renderHtml?(report: Report): string;
@@ -301,15 +303,8 @@ async function changedLines(deps: ActionDeps, cwd: string, base: string, head: s
 
 const MAX_REPORT_BYTES = 64 * 1024 * 1024;
 
-function looksLikeReport(x: unknown): x is Report {
-  const r = x as Partial<Report> | null;
-  return (
-    typeof r === 'object' && r !== null && typeof r.version === 'number' && (r.verdict === 'pass' || r.verdict === 'fail') &&
-    Array.isArray(r.files) && r.files.every((f) => typeof f?.path === 'string' && typeof f?.status === 'string' && Array.isArray(f?.findings))
-  );
-}
-
-export function readShardReports(folder: string): { reports: Report[]; names: string[] } {
+/** The shard reports in `folder` (and up to three levels below), parsed as data, not yet checked. */
+export function readShardReports(folder: string): { reports: unknown[]; names: string[] } {
   const names: string[] = [];
   const walk = (dir: string, depth: number) => {
     for (const entry of readdirSync(dir, { withFileTypes: true }).sort((a, b) => (a.name < b.name ? -1 : 1))) {
@@ -320,7 +315,7 @@ export function readShardReports(folder: string): { reports: Report[]; names: st
     }
   };
   walk(folder, 0);
-  const reports: Report[] = [];
+  const reports: unknown[] = [];
   for (const file of names) {
     const stat = lstatSync(file);
     if (stat.size > MAX_REPORT_BYTES) throw new InputError(`shard report ${path.basename(file)} is larger than 64 MiB`);
@@ -330,7 +325,6 @@ export function readShardReports(folder: string): { reports: Report[]; names: st
     } catch {
       throw new InputError(`shard report ${path.basename(file)} is not valid JSON`);
     }
-    if (!looksLikeReport(parsed)) throw new InputError(`shard report ${path.basename(file)} is not a netbrace report`);
     reports.push(parsed);
   }
   if (!reports.length) throw new InputError(`input "merge": no shard report (*.json) in ${path.basename(folder)}; download the shards' artifacts there first`);
@@ -420,9 +414,23 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       const folder = resolveInWorkspace(workspace, workdir, inputs.merge, 'merge');
       const { reports, names } = readShardReports(folder);
       deps.out.info(`netbrace: merging ${reports.length} shard reports`);
-      report = deps.merge(reports);
+      try {
+        report = deps.merge(reports);
+      } catch (error) {
+        // Name the file: the merge numbers reports in the order they were read.
+        const m = /^report (\d+)/.exec(error instanceof Error ? error.message : '');
+        if (m && isNetbraceError(error)) throw new InputError(`shard report ${path.basename(names[Number(m[1]) - 1] ?? '?')}: ${error.message.replace(/^report \d+ /, '')}`);
+        throw error;
+      }
       report.mode = inputs.mode;
       gateExit = report.verdict === 'fail' ? 1 : 0;
+      const merged = report.shards;
+      if (merged) {
+        const missing = Array.from({ length: merged.total }, (_, i) => i + 1).filter((k) => !merged.merged.includes(k));
+        if (missing.length) {
+          return fail(`netbrace: shard report${missing.length === 1 ? '' : 's'} ${missing.map((k) => `${k}/${merged.total}`).join(', ')} missing from ${inputs.merge}: every shard must upload its report before the merge job runs (needs: the shard job)`, 2);
+        }
+      }
       notes.push(`Merged from ${names.length} shard report${names.length === 1 ? '' : 's'}.`);
     } else if (target.kind === 'nothing') {
       report = emptyReport(inputs, target);
@@ -446,24 +454,19 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
         const missing = await ensureCommit(deps, workdir, head, 'head');
         if (missing) return fail(`netbrace: ${missing}. For pull_request_target, check out the pull request head (ref: \${{ github.event.pull_request.head.sha }}) or ${FETCH_DEPTH_HINT}.`, 2);
       }
-      let kind: GateRequestLike['eventKind'] = target.kind === 'full' || !base ? 'full' : target.kind;
+      let kind: GateRequestLike['eventKind'] = target.kind === 'full' || !base ? 'schedule' : target.kind;
       let paths: string[] | undefined;
       if (base) {
         const missing = await ensureCommit(deps, workdir, base, 'base');
         if (missing) {
           // Fallback: the API knows which files the pull request changes. If none is a design,
           // the answer is "nothing to judge"; otherwise comparing needs the base: stop and say how.
-          const fromApi = target.pr ? await prFilesFallback(deps, env, inputs, target) : undefined;
-          if (fromApi && fromApi.length === 0) {
-            paths = [];
-          } else if (fromApi) {
-            const probe = await deps.gate({ head, paths: fromApi, policyPath: inputs.policy || undefined, policySource: 'head', mode: inputs.mode, eventKind: 'full' }, workdir);
-            if (probe.report.files.length === 0) paths = [];
-          }
+          const fromApi = target.pr && head ? await prFilesFallback(deps, env, inputs, target) : undefined;
+          if (fromApi && head && designsAmong(workdir, head, inputs.policy, fromApi, pathPrefix) === 0) paths = [];
           if (paths === undefined) return fail(`netbrace: ${missing}. To fix it, ${FETCH_DEPTH_HINT}.`, 2);
           notes.push('The base commit could not be fetched; the pull request\u2019s file list (REST API) shows that no design file changed.');
           base = undefined;
-          kind = 'full';
+          kind = 'schedule';
         }
       }
       const request: GateRequestLike = {
@@ -557,6 +560,30 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     const message = error instanceof Error ? error.message : String(error);
     return fail(`netbrace: internal error: ${message} \u2014 please report this with the workflow run`, 2);
   }
+}
+
+/**
+ * How many of the pull request's files (repository paths, from the API) are designs, by the
+ * policy at head. Trusted only when the pull request leaves the policy files alone (then the
+ * head's policy is the base's); a changed policy counts as "there may be designs".
+ */
+function designsAmong(workdir: string, head: string, policyPath: string, changed: string[], pathPrefix: string): number {
+  const local = changed
+    .map((p) => (pathPrefix ? (p.startsWith(`${pathPrefix}/`) ? p.slice(pathPrefix.length + 1) : undefined) : p))
+    .filter((p): p is string => p !== undefined);
+  const read = (p: string): string | null => {
+    try {
+      return execFileSync('git', ['show', `${head}:./${p}`], { cwd: workdir, encoding: 'utf8', maxBuffer: 16 * 1024 * 1024, stdio: ['ignore', 'pipe', 'ignore'] });
+    } catch {
+      return null;
+    }
+  };
+  const entry = policyPath || DEFAULT_POLICY_PATH;
+  const text = read(entry);
+  const policy = text === null ? builtinPolicy() : loadPolicy(entry, read);
+  const policyFiles = new Set([entry, ...policy.files]);
+  if (local.some((p) => policyFiles.has(p))) return Number.POSITIVE_INFINITY;
+  return local.filter((p) => isDesignPath(policy, p)).length;
 }
 
 async function prFilesFallback(deps: ActionDeps, env: Env, inputs: ActionInputs, target: Target): Promise<string[] | undefined> {

@@ -18,6 +18,7 @@ import {
   type GitResult,
 } from '../../src/shell/action-run.js';
 import { createClient } from '../../src/shell/github.js';
+import { mergeReports } from '../../src/gate/merge.js';
 import { startFakeApi, type FakeApi } from './fake-api.js';
 import { emptyReport, sampleReport } from '../report/sample-report.js';
 
@@ -95,13 +96,7 @@ function deps(report: Report | ((r: GateRequestLike) => Report), git: (args: str
       r.mode = request.mode;
       return { report: r, exitCode: r.verdict === 'fail' && request.mode === 'enforce' ? 1 : 0 };
     },
-    merge: (reports) => {
-      const r = structuredClone(reports[0]);
-      r.files = reports.flatMap((x) => x.files);
-      r.verdict = reports.some((x) => x.verdict === 'fail') ? 'fail' : 'pass';
-      delete r.shard;
-      return r;
-    },
+    merge: mergeReports,
     git: async (args) => {
       rec.gitCalls.push(args);
       return git(args);
@@ -177,7 +172,7 @@ describe('events', () => {
     const { d, rec } = deps(sampleReport());
     await run(env({ GITHUB_EVENT_NAME: 'schedule', GITHUB_EVENT_PATH: '' }), d);
     expect(rec.gateCalls[0].base).toBeUndefined();
-    expect(rec.gateCalls[0]).toMatchObject({ head: MERGE_SHA, eventKind: 'full' });
+    expect(rec.gateCalls[0]).toMatchObject({ head: MERGE_SHA, eventKind: 'schedule' });
   });
 
   it('a deleted branch has nothing to judge and passes saying so', async () => {
@@ -205,7 +200,7 @@ describe('events', () => {
     const { d, rec } = deps((r) => (r.paths ? emptyReport() : sampleReport()), (args) => (args[0] === 'cat-file' && args[2].startsWith(BASE) ? { code: 1, stdout: '', stderr: '' } : args[0] === 'fetch' ? { code: 128, stdout: '', stderr: 'fatal' } : { code: 0, stdout: '', stderr: '' }));
     const out = await run(env(), d);
     expect(out).toMatchObject({ exitCode: 0, verdict: 'pass' });
-    expect(rec.gateCalls[0].paths).toEqual(['README.md']);
+    expect(rec.gateCalls).toEqual([]);
     expect(rec.summary).toContain('no design file changed');
     expect(api.requests.some((r) => r.path.endsWith('/pulls/12/files'))).toBe(true);
   });
@@ -310,10 +305,15 @@ describe('shards', () => {
     expect(rec.gateCalls).toEqual([]);
     expect(out).toMatchObject({ exitCode: 1, verdict: 'fail' });
     expect(rec.outputs.designs).toBe('5');
+    r2.shard = { index: 2, total: 3 };
+    writeFileSync(path.join(shards, 'b.json'), JSON.stringify(r2));
+    const gap = deps(sampleReport());
+    expect((await run(env({ INPUT_MERGE: 'shards' }), gap.d)).exitCode).toBe(2);
+    expect(gap.rec.failed[0]).toMatch(/shard reports 1\/3, 3\/3 missing/);
     writeFileSync(path.join(shards, 'c.json'), '{"not":"a report"}');
     const bad = deps(sampleReport());
     const out2 = await run(env({ INPUT_MERGE: 'shards' }), bad.d);
     expect(out2.exitCode).toBe(2);
-    expect(bad.rec.failed[0]).toContain('c.json is not a netbrace report');
+    expect(bad.rec.failed[0]).toMatch(/shard report c\.json: .*not a netbrace report/);
   });
 });
