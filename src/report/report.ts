@@ -98,6 +98,8 @@ export interface FileReport {
   base?: Evaluation;
   /** For status "error": what could not be read. */
   error?: { message: string; line: number; column: number };
+  /** Elements added and removed by the change (nodes by id, links by their ends), head lines for added, base lines for removed. */
+  changes?: { added: ReportElement[]; removed: ReportElement[] };
 }
 
 export interface Report {
@@ -113,12 +115,20 @@ export interface Report {
     revision?: string;
     /** True when the change under review modifies the policy itself (reported, not applied). */
     changed?: boolean;
+    /** The policy file and the files it extends, the extending file first. */
+    files?: string[];
+    /** A plain sentence about the policy, e.g. why a changed policy was not applied. */
+    note?: string;
   };
   base?: string;
   head?: string;
   seed: number;
-  /** When this run evaluated one shard of the changed designs. */
+  /** When this run evaluated one shard of the changed designs (index is 1-based: shard k of n). */
   shard?: { index: number; total: number };
+  /** Set by mergeReports: the shards merged into this report (1-based), out of `total`. */
+  shards?: { total: number; merged: number[] };
+  /** What the run judged: the changed designs, the given paths, or every design (thresholds only). */
+  scope?: 'changed' | 'paths' | 'all';
   counts: Record<FileStatus, number>;
   files: FileReport[];
   /** The plain statement that the tool informs engineering judgement and does not replace it. */
@@ -130,3 +140,23 @@ export const CAUTION =
   'and removal models in the policy). It informs engineering judgement; it does not replace engineering ' +
   'studies. Local codes, regulators\u2019 standards and licensed practice decide for real infrastructure, ' +
   'power systems especially.';
+
+/** Significant digits kept in the JSON report: enough for any R, few enough that engines that
+ *  differ in the last bits of Math.exp/log still write the same bytes (SCIENCE.md §8). */
+export const REPORT_DIGITS = 12;
+
+/** The report as JSON: stable key order (construction order), numbers rounded to REPORT_DIGITS
+ *  significant digits, non-finite numbers as null, two-space indent, final newline. */
+export function serializeReport(report: Report): string {
+  return `${JSON.stringify(
+    report,
+    (_key, value: unknown) => {
+      if (typeof value !== 'number') return value;
+      if (!Number.isFinite(value)) return null;
+      if (Number.isInteger(value)) return value;
+      const rounded = Number(value.toPrecision(REPORT_DIGITS));
+      return Object.is(rounded, -0) ? 0 : rounded;
+    },
+    2,
+  )}\n`;
+}

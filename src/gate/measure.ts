@@ -1,0 +1,180 @@
+// What a requirement measures on one design, or on a base/head pair: the value (and, for
+// a pair, the paired delta and its standard error from common random numbers), the
+// confidence interval where the engine gives one, and the elements behind the number
+// (the weakest removal sequence, the worst case, the element whose loss breaks N−1).
+
+import { pairedStatistic, type DesignEvaluation, type Statistic } from '../envelope/evaluate.js';
+import type { AttackCurve, Contingency, ElementKind, Envelope, RemovalSequence } from '../envelope/types.js';
+import { countOnes, eligibleUnits, stepsAt, unitCount } from '../challenges/units.js';
+import { quantileKey } from '../envelope/summary.js';
+import type { CompactGraph } from '../graph/compact.js';
+import type { ReportElement } from '../report/report.js';
+import type { ChallengeDef, Requirement, ThresholdRequirement } from '../policy/types.js';
+
+/** One side of a comparison: the compiled design and what the engine made of it. */
+export interface DesignSide {
+  graph: CompactGraph;
+  result: DesignEvaluation;
+}
+
+export interface Measured {
+  base: number | null;
+  head: number | null;
+  delta: number | null;
+  se: number | null;
+  /** Confidence interval of the head value (order statistics), when known. */
+  lo?: number;
+  hi?: number;
+  /** Higher is better (false for spread). */
+  higherIsBetter: boolean;
+  /** Elements behind the head value, in order. */
+  elements: { id: string; kind: ElementKind }[];
+  /** Set when the value could not be computed (challenge skipped, too few steps...). */
+  missing?: string;
+}
+
+/** Most elements a finding lists. */
+export const MAX_ELEMENTS = 10;
+
+/** Line of an element in the head design, else in the base design, else 0. */
+export function locate(el: { id: string; kind: ElementKind }, head?: CompactGraph, base?: CompactGraph): ReportElement {
+  for (const g of [head, base]) {
+    if (!g) continue;
+    if (el.kind === 'node') {
+      const i = g.nodeIndex.get(el.id);
+      if (i !== undefined) return { id: el.id, kind: 'node', line: g.nodeLine[i] };
+    } else if (el.kind === 'link') {
+      const i = g.linkIndex.get(el.id);
+      if (i !== undefined) return { id: el.id, kind: 'link', line: g.linkLine[i] };
+    } else {
+      const i = g.groupIds.indexOf(el.id);
+      if (i >= 0) return { id: el.id, kind: 'group', line: g.groupLine[i] };
+    }
+  }
+  return { id: el.id, kind: el.kind, line: 0 };
+}
+
+function envelopeOf(side: DesignSide, c: ChallengeDef): Envelope | undefined {
+  return side.result.evaluation.envelopes.find((e) => e.challenge === c.engine);
+}
+
+function attackOf(side: DesignSide, c: ChallengeDef): AttackCurve | undefined {
+  return side.result.evaluation.attacks.find((a) => a.challenge === c.engine);
+}
+
+function contingencyOf(side: DesignSide, element: 'node' | 'link'): Contingency | undefined {
+  return side.result.evaluation.contingencies.find((x) => x.challenge === 'n-1' && x.kind === element);
+}
+
+/** Removals at x for an element kind on this design (as the engine counts them). */
+function removalsAt(g: CompactGraph, kind: ElementKind, x: number): number {
+  return stepsAt(x, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
+}
+
+function sequenceElements(seq: RemovalSequence | undefined, count = MAX_ELEMENTS): { id: string; kind: ElementKind }[] {
+  if (!seq) return [];
+  return seq.elements.slice(0, Math.min(count, MAX_ELEMENTS)).map((id) => ({ id, kind: seq.kind }));
+}
+
+function gridIndex(env: Envelope, x: number): number {
+  return env.x.findIndex((v) => Math.abs(v - x) <= 1e-9 * Math.max(1, Math.abs(x)));
+}
+
+/** The engine's statistic for an envelope requirement. */
+function statisticOf(req: Requirement): Statistic | undefined {
+  if (req.kind === 'area-floor') return { kind: 'area' };
+  if (req.kind === 'spread-ceiling') return { kind: 'spread' };
+  if (req.kind !== 'r-threshold') return undefined;
+  switch (req.statistic.kind) {
+    case 'quantile':
+      return { kind: 'quantile', q: req.statistic.q };
+    case 'median':
+      return { kind: 'quantile', q: 0.5 };
+    case 'mean':
+      return { kind: 'mean' };
+    case 'min':
+      return { kind: 'min' };
+    default:
+      return undefined;
+  }
+}
+
+function missing(reason: string, higherIsBetter = true): Measured {
+  return { base: null, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason };
+}
+
+/** Value of a deterministic requirement on one side, with its elements. */
+function deterministic(req: Requirement, c: ChallengeDef | undefined, side: DesignSide): { value: number; elements: { id: string; kind: ElementKind }[] } | string {
+  if (req.kind === 'n-1') {
+    const cont = contingencyOf(side, req.element);
+    if (!cont) return `the N\u22121 evaluation of ${req.element}s did not run`;
+    if (cont.evaluated === 0) return `the design has no ${req.element} that can fail`;
+    const worst = cont.worst[0];
+    return { value: cont.min, elements: worst ? worst.elements.map((id) => ({ id, kind: cont.kind })) : [] };
+  }
+  if (!c) return 'no challenge';
+  if (req.kind === 'r-threshold' && req.statistic.kind === 'worst-case') {
+    const env = envelopeOf(side, c);
+    const wc = env?.worstCase;
+    if (!wc) return `challenge "${c.name}" has no worst-case result`;
+    const k = req.statistic.removals;
+    const i = wc.steps ? wc.steps.indexOf(k) : k - 1;
+    if (i < 0 || i >= wc.values.length) return `the worst-case search of "${c.name}" stopped before ${k} removals`;
+    return { value: wc.values[i], elements: sequenceElements(wc, k) };
+  }
+  const curve = attackOf(side, c);
+  if (!curve) return `challenge "${c.name}" did not run on this design`;
+  if (req.kind === 'area-floor') return { value: curve.area, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }) };
+  const t = req as ThresholdRequirement;
+  const k = removalsAt(side.graph, curve.kind, t.at ?? 0);
+  if (k >= curve.values.length) return `the attack "${c.name}" ends before ${t.at}`;
+  return { value: curve.values[k], elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, k) };
+}
+
+/** Measure one requirement (not no-new-spof) on head, and on base when there is one. */
+export function measure(req: Requirement, challenges: readonly ChallengeDef[], head: DesignSide, base?: DesignSide): Measured {
+  const c = 'challenge' in req ? challenges.find((x) => x.name === req.challenge) : undefined;
+  const higherIsBetter = req.kind !== 'spread-ceiling';
+  const stat = c?.random ? statisticOf(req) : undefined;
+
+  if (c?.random && stat) {
+    const env = envelopeOf(head, c);
+    if (!env) return missing(`challenge "${c.name}" did not run on this design`, higherIsBetter);
+    const x = req.kind === 'r-threshold' ? req.at : undefined;
+    const j = x === undefined ? -1 : gridIndex(env, x);
+    if (x !== undefined && j < 0) return missing(`${x} is not on the grid of "${c.name}"`, higherIsBetter);
+    const baseEnv = base ? envelopeOf(base, c) : undefined;
+    const same = base !== undefined && base.result === head.result;
+    const p = pairedStatistic(baseEnv ? base!.result : head.result, head.result, c.engine, stat, x);
+    const out: Measured = {
+      base: baseEnv ? p.base : null,
+      head: p.head,
+      delta: baseEnv ? (same ? 0 : p.delta) : null,
+      se: baseEnv ? (same ? 0 : p.se) : null,
+      higherIsBetter,
+      elements: sequenceElements(env.weakest[0], x === undefined ? MAX_ELEMENTS : removalsAt(head.graph, env.kind, x)),
+    };
+    if (stat.kind === 'quantile' && j >= 0) {
+      const band = env.quantiles[quantileKey(stat.q)];
+      if (band) {
+        out.lo = band.lo[j];
+        out.hi = band.hi[j];
+      }
+    }
+    return out;
+  }
+
+  const h = deterministic(req, c, head);
+  if (typeof h === 'string') return missing(h, higherIsBetter);
+  const b = base ? deterministic(req, c, base) : undefined;
+  const bv = b !== undefined && typeof b !== 'string' ? b.value : null;
+  const same = base !== undefined && base.result === head.result;
+  return {
+    base: bv,
+    head: h.value,
+    delta: bv === null ? null : same ? 0 : h.value - bv,
+    se: bv === null ? null : 0,
+    higherIsBetter,
+    elements: h.elements,
+  };
+}

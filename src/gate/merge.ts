@@ -1,0 +1,54 @@
+// Merging the reports of shards (one job per slice of the changed designs) into the one
+// report the final job turns into a summary, a comment and a verdict. Reads reports of this
+// and of older versions: fields added since version 1 are optional and filled here.
+
+import { UsageError } from '../errors.js';
+import { CAUTION, REPORT_VERSION, type FileReport, type Report } from '../report/report.js';
+import { countStatuses, verdictOf } from './verdict.js';
+
+/** Accept a parsed report of this or an older version; UsageError for anything else. */
+export function upgradeReport(value: unknown, name = 'report'): Report {
+  const r = value as Partial<Report> | null;
+  if (r === null || typeof r !== 'object' || typeof r.version !== 'number' || !Array.isArray(r.files)) {
+    throw new UsageError(`${name} is not a netbrace report`, 'pass the JSON files written by "netbrace check --json" or the action');
+  }
+  if (r.version > REPORT_VERSION) {
+    throw new UsageError(`${name} has report version ${r.version}, newer than this netbrace (${REPORT_VERSION})`, 'merge with the newest netbrace');
+  }
+  const files = r.files.map((f: FileReport) => ({ ...f, findings: f.findings ?? [], requirements: f.requirements ?? [] }));
+  return {
+    ...(r as Report),
+    version: REPORT_VERSION,
+    files,
+    counts: countStatuses(files),
+    caution: r.caution ?? CAUTION,
+  };
+}
+
+export function mergeReports(reports: readonly unknown[]): Report {
+  if (reports.length === 0) throw new UsageError('there are no reports to merge', 'check the folder of shard reports');
+  const list = reports.map((r, i) => upgradeReport(r, `report ${i + 1}`));
+  const first = list[0];
+  const byPath = new Map<string, FileReport>();
+  for (const r of list) for (const f of r.files) if (!byPath.has(f.path)) byPath.set(f.path, f);
+  const files = [...byPath.values()].sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
+  const merged: Report = {
+    version: REPORT_VERSION,
+    tool: first.tool,
+    verdict: list.some((r) => r.verdict === 'fail') ? 'fail' : verdictOf(files),
+    mode: list.some((r) => r.mode === 'enforce') ? 'enforce' : 'advise',
+    policy: { ...first.policy, ...(list.some((r) => r.policy?.changed) ? { changed: true } : {}) },
+    ...(first.base !== undefined ? { base: first.base } : {}),
+    ...(first.head !== undefined ? { head: first.head } : {}),
+    seed: first.seed,
+    ...(first.scope !== undefined ? { scope: first.scope } : {}),
+    counts: countStatuses(files),
+    files,
+    caution: first.caution,
+  };
+  const shards = list.map((r) => r.shard).filter((s): s is NonNullable<Report['shard']> => s !== undefined);
+  if (shards.length > 0) {
+    merged.shards = { total: Math.max(...shards.map((s) => s.total)), merged: [...new Set(shards.map((s) => s.index))].sort((a, b) => a - b) };
+  }
+  return merged;
+}

@@ -1,0 +1,209 @@
+// Gate decisions on fixture pairs with known answers (fixtures/gate/, invented designs).
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { runGate, type GateRequest } from '../../src/run-gate.js';
+import type { Report } from '../../src/report/report.js';
+import { gateFixture, lineOf, memoryDeps, pairRepo, repoRoot, type MemoryRepo } from './memory-repo.js';
+
+const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'enforce' };
+const FILE = 'networks/site.net.yaml';
+
+async function gate(repo: MemoryRepo, extra: Partial<GateRequest> = {}) {
+  return runGate({ ...request, ...extra }, memoryDeps(repo));
+}
+
+const fileOf = (r: Report, p = FILE) => r.files.find((f) => f.path === p)!;
+
+describe('gate decisions on fixture pairs', () => {
+  it('retiring the span that closes a ring makes a chain: new bridges and cut nodes fail, at their lines', async () => {
+    const { report, exitCode } = await gate(pairRepo('ring-to-chain'));
+    expect(exitCode).toBe(1);
+    expect(report.verdict).toBe('fail');
+    const f = fileOf(report);
+    expect(f.status).toBe('regressed');
+    const head = gateFixture('ring-to-chain/head.net.yaml');
+    // Every link of a path is a bridge and every inner node a cut node (common practice, textbook fact).
+    const bridges = f.findings.filter((x) => x.rule === 'new-bridge');
+    const chain = ['harbour, mill', 'mill, quarry', 'quarry, ridge', 'ridge, weir', 'weir, orchard'];
+    expect(bridges.map((b) => b.line)).toEqual(chain.map((l) => lineOf(head, `between: [${l}]`)));
+    expect(bridges.every((b) => b.severity === 'fail' && b.elements[0].kind === 'link' && b.elements[0].line === b.line)).toBe(true);
+    const cuts = f.findings.filter((x) => x.rule === 'new-cut-node');
+    expect(cuts.map((c) => c.elements[0].id)).toEqual(['mill', 'quarry', 'ridge', 'weir']);
+    expect(cuts.map((c) => c.line)).toEqual(['mill', 'quarry', 'ridge', 'weir'].map((n) => lineOf(head, `id: ${n}`)));
+    const spof = f.requirements.find((r) => r.id === 'no-new-spof')!;
+    expect([spof.base, spof.head, spof.status]).toEqual([0, 9, 'regressed']);
+    // The removed span is listed with its line in the base.
+    expect(f.changes?.removed).toEqual([
+      { id: 'orchard\u2014harbour', kind: 'link', line: lineOf(gateFixture('ring-to-chain/base.net.yaml'), 'between: [orchard, harbour]') },
+    ]);
+  });
+
+  it('adding a redundant link passes with a positive delta', async () => {
+    const { report, exitCode } = await gate(pairRepo('redundant-link'));
+    expect(exitCode).toBe(0);
+    const f = fileOf(report);
+    expect(f.status).toBe('pass');
+    expect(f.findings.filter((x) => x.severity !== 'notice')).toEqual([]);
+    // Node failures use the same node keys on both sides, so every realization removes the same
+    // nodes; a link more never lowers pair connectivity or efficiency: the delta cannot be negative.
+    const area = f.requirements.find((r) => r.id === 'area-floor:node-failures')!;
+    expect(area.delta).toBeGreaterThan(0);
+    expect(area.delta!).toBeGreaterThan(2 * area.se!);
+    expect(f.requirements.find((r) => r.id === 'n-1:link')!.delta).toBeGreaterThan(0);
+    expect(f.changes?.added.map((e) => e.id)).toEqual(['harbour\u2014ridge']);
+  });
+
+  it('an unchanged design gives a delta of exactly 0 and no finding', async () => {
+    const same = gateFixture('unchanged/base.net.yaml');
+    const policy = gateFixture('policy.yaml');
+    const repo: MemoryRepo = { base: { '.netbrace.yaml': policy, [FILE]: same }, head: { '.netbrace.yaml': policy, [FILE]: same } };
+    const { report } = await gate(repo, { paths: [FILE] });
+    const f = fileOf(report);
+    expect(f.findings).toEqual([]);
+    for (const r of f.requirements) expect([r.delta, r.se]).toEqual([0, 0]);
+  });
+
+  it('a reworded comment (same topology, different text) also gives exactly 0: common random numbers', async () => {
+    const { report } = await gate(pairRepo('unchanged'));
+    const f = fileOf(report);
+    expect(f.status).toBe('pass');
+    expect(f.findings).toEqual([]);
+    for (const r of f.requirements) expect([r.delta, r.se]).toEqual([0, 0]);
+  });
+
+  it('a removed node whose loss is within tolerance passes with a notice', async () => {
+    const { report, exitCode } = await gate(pairRepo('removed-node'));
+    expect(exitCode).toBe(0);
+    const f = fileOf(report);
+    expect(f.status).toBe('pass');
+    const notices = f.findings.filter((x) => x.rule === 'regression');
+    expect(notices.length).toBeGreaterThan(0);
+    expect(notices.every((x) => x.severity === 'notice')).toBe(true);
+    expect(notices.some((x) => /within the allowed 0\.050|within noise/.test(x.message))).toBe(true);
+    const dropped = f.requirements.filter((r) => r.delta !== null && r.delta < 0);
+    expect(dropped.length).toBeGreaterThan(0);
+    for (const r of dropped) expect(-r.delta!).toBeLessThanOrEqual(0.05);
+    expect(f.changes?.removed.filter((e) => e.kind === 'node').map((e) => e.id)).toEqual(['annex']);
+  });
+
+  it('a drop below noise-factor × se is within noise, never a failure, even with no allowance', async () => {
+    const strict = gateFixture('policy.yaml').replace('allowed-drop: 0.05', 'allowed-drop: 0');
+    const { report } = await gate(pairRepo('removed-node', FILE, strict));
+    const f = fileOf(report);
+    const noisy = f.requirements.filter((r) => r.status === 'within-noise');
+    expect(noisy.length).toBeGreaterThan(0);
+    for (const r of noisy) expect(-r.delta!).toBeLessThan(2 * r.se!);
+    for (const r of noisy) {
+      const x = f.findings.find((y) => y.requirement === r.id && y.rule === 'regression')!;
+      expect([x.severity, /within noise, not a failure/.test(x.message)]).toEqual(['notice', true]);
+    }
+    // Drops beyond the noise with no allowance are regressions.
+    const regressed = f.requirements.filter((r) => r.status === 'regressed');
+    for (const r of regressed) expect(-r.delta!).toBeGreaterThanOrEqual(2 * r.se!);
+    expect(report.verdict).toBe(regressed.length > 0 ? 'fail' : 'pass');
+  });
+
+  it('a head that does not parse fails with its line; the other designs are still judged', async () => {
+    const repo = pairRepo('redundant-link');
+    repo.base['networks/broken.net.yaml'] = gateFixture('unchanged/base.net.yaml');
+    repo.head['networks/broken.net.yaml'] = 'nodes:\n  - id: a\nlinks:\n  - between: [a, nowhere]\n';
+    const { report, exitCode } = await gate(repo);
+    expect(exitCode).toBe(1);
+    const broken = fileOf(report, 'networks/broken.net.yaml');
+    expect(broken.status).toBe('error');
+    expect(broken.error?.line).toBe(4);
+    expect(broken.findings[0]).toMatchObject({ rule: 'parse-error', severity: 'fail', line: 4 });
+    expect(fileOf(report).status).toBe('pass');
+    expect(report.counts).toMatchObject({ error: 1, pass: 1 });
+  });
+
+  it('a deleted design is reported; it fails only when the policy says so', async () => {
+    const repo = pairRepo('unchanged');
+    delete repo.head[FILE];
+    const soft = await gate(repo);
+    expect(fileOf(soft.report)).toMatchObject({ status: 'removed', findings: [{ rule: 'removed-design', severity: 'notice' }] });
+    expect(soft.exitCode).toBe(0);
+    const strict = gateFixture('policy.yaml').replace('removed-designs: notice', 'removed-designs: fail');
+    repo.base['.netbrace.yaml'] = strict;
+    const hard = await gate(repo);
+    expect(hard.exitCode).toBe(1);
+    expect(fileOf(hard.report).findings[0].severity).toBe('fail');
+  });
+
+  it('a renamed design is compared with its old self', async () => {
+    const repo = pairRepo('unchanged');
+    repo.head = { '.netbrace.yaml': repo.head['.netbrace.yaml'], 'networks/moved.net.yaml': repo.base[FILE] };
+    repo.renames = { 'networks/moved.net.yaml': FILE };
+    const { report } = await gate(repo);
+    expect(report.files).toHaveLength(1);
+    const f = fileOf(report, 'networks/moved.net.yaml');
+    expect([f.status, f.previousPath]).toEqual(['renamed', FILE]);
+    for (const r of f.requirements) expect(r.delta).toBe(0);
+  });
+
+  it('a new design is judged on thresholds only', async () => {
+    const repo = pairRepo('unchanged');
+    repo.head['networks/extra.net.yaml'] = gateFixture('ring-to-chain/head.net.yaml');
+    const { report, exitCode } = await gate(repo);
+    const f = fileOf(report, 'networks/extra.net.yaml');
+    expect(f.status).toBe('new');
+    expect(f.requirements.every((r) => r.base === null && r.delta === null)).toBe(true);
+    expect(f.findings.filter((x) => x.rule === 'new-bridge')).toEqual([]);
+    expect(exitCode).toBe(0);
+  });
+});
+
+describe('a threshold on a known attack curve (karate club, static degree attack)', () => {
+  // test/reference/envelope.json, graph "karate": largest_component after the static
+  // highest-degree attack, computed with networkx 2.8.8 (ties to the lowest index).
+  const ref = JSON.parse(readFileSync(path.join(repoRoot, 'test', 'reference', 'envelope.json'), 'utf8'));
+  const karate = ref.graphs.find((g: { name: string }) => g.name === 'karate');
+  const curve: number[] = karate.attacks.degree.largest_component;
+  const sequence: number[] = karate.attacks.degree.sequence;
+  const design =
+    '# Zachary\u2019s karate club (Zachary, J. Anthropol. Res. 33:452, 1977), as networkx ships it, weights dropped\nnodes:\n' +
+    Array.from({ length: karate.n }, (_, i) => `  - id: "${i}"\n`).join('') +
+    'links:\n' +
+    karate.edges.map(([a, b]: [number, number]) => `  - between: ["${a}", "${b}"]\n`).join('');
+  const policy = [
+    'r-value:',
+    '  metrics:',
+    '    largest_component: 1',
+    'challenges:',
+    '  hubs:',
+    '    remove: nodes',
+    '    order: degree',
+    '    until: 0.2',
+    'requirements:',
+    '  - kind: r-threshold   # 2 of 34 removed: reference 26/34 = 0.7647',
+    '    challenge: hubs',
+    '    at: 0.06',
+    '    min: 0.7',
+    '  - kind: r-threshold   # 4 of 34 removed: reference 10/34 = 0.2941',
+    '    challenge: hubs',
+    '    at: 0.12',
+    '    min: 0.7',
+    '',
+  ].join('\n');
+
+  it('is met at 6 % removed and missed at 12 %, with the values and sequence of the reference', async () => {
+    const repo: MemoryRepo = { base: {}, head: { '.netbrace.yaml': policy, 'karate.net.yaml': design } };
+    const { report, exitCode } = await runGate(
+      { head: 'head', policySource: 'head', mode: 'enforce', paths: ['karate.net.yaml'] },
+      memoryDeps(repo),
+    );
+    const f = fileOf(report, 'karate.net.yaml');
+    const [met, missed] = f.requirements;
+    expect(met.id).toBe('r-threshold:hubs@0.06:value');
+    expect(met.status).toBe('met');
+    expect(met.head).toBeCloseTo(curve[2], 12);
+    expect(missed.status).toBe('missed');
+    expect(missed.head).toBeCloseTo(curve[4], 12);
+    expect(f.status).toBe('below-threshold');
+    expect(exitCode).toBe(1);
+    const finding = f.findings.find((x) => x.rule === 'r-threshold')!;
+    expect(finding.elements.map((e) => e.id)).toEqual(sequence.slice(0, 4).map(String));
+    expect(finding.line).toBe(lineOf(design, `id: "${sequence[0]}"`));
+  });
+});

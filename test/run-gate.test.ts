@@ -1,0 +1,201 @@
+// The orchestrator: which policy judges, which files are judged, sharding and merging,
+// determinism, and that configuration errors stop the run before any evaluation.
+import { describe, expect, it, vi } from 'vitest';
+import { PolicyError, UsageError } from '../src/errors.js';
+import { evaluateDesign } from '../src/envelope/evaluate.js';
+import { mergeReports, runGate, inShard, pathHash, type GateRequest } from '../src/run-gate.js';
+import { REPORT_VERSION, serializeReport, type Report } from '../src/report/report.js';
+import { gateFixture, memoryDeps, pairRepo, type MemoryRepo } from './gate/memory-repo.js';
+
+const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'enforce' };
+const FILE = 'networks/site.net.yaml';
+const spy = () => vi.fn(evaluateDesign);
+
+describe('trusted policy', () => {
+  it('is read from the base: a change that loosens its own policy is judged by the old one', async () => {
+    const repo = pairRepo('ring-to-chain');
+    repo.head['.netbrace.yaml'] = 'requirements: []\n';
+    const { report, exitCode } = await runGate(request, memoryDeps(repo));
+    expect(exitCode).toBe(1);
+    expect(report.policy).toMatchObject({ source: 'file', path: '.netbrace.yaml', revision: 'base', changed: true });
+    expect(report.policy.note).toContain('the version at the base judges it');
+  });
+
+  it('policy-source head applies the policy of the head, and says the policy changed', async () => {
+    const repo = pairRepo('ring-to-chain');
+    repo.head['.netbrace.yaml'] = 'requirements: []\n';
+    const { report, exitCode } = await runGate({ ...request, policySource: 'head' }, memoryDeps(repo));
+    expect(exitCode).toBe(0);
+    expect(report.policy).toMatchObject({ revision: 'head', changed: true });
+  });
+
+  it('a broken proposed policy is reported in the note, not applied', async () => {
+    const repo = pairRepo('unchanged');
+    repo.head['.netbrace.yaml'] = 'requirments: []\n';
+    const { report } = await runGate(request, memoryDeps(repo));
+    expect(report.policy.note).toContain('.netbrace.yaml:1:1: unknown key "requirments"');
+  });
+
+  it('without a policy file the built-in policy applies and the report says so', async () => {
+    const repo = pairRepo('ring-to-chain');
+    delete repo.base['.netbrace.yaml'];
+    delete repo.head['.netbrace.yaml'];
+    const { report, exitCode } = await runGate(request, memoryDeps(repo));
+    expect(report.policy).toEqual({ source: 'builtin', revision: 'base' });
+    expect(exitCode).toBe(1); // the built-in policy fails new single points of failure
+    expect(report.files[0].findings.some((f) => f.rule === 'new-bridge' && f.severity === 'fail')).toBe(true);
+  });
+
+  it('a policy added by the change does not judge it', async () => {
+    const repo = pairRepo('unchanged');
+    delete repo.base['.netbrace.yaml'];
+    const { report } = await runGate(request, memoryDeps(repo));
+    expect(report.policy).toMatchObject({ source: 'builtin', changed: true });
+  });
+
+  it('a missing explicit policy file is a usage error', async () => {
+    await expect(runGate({ ...request, policyPath: 'nope.yaml' }, memoryDeps(pairRepo('unchanged')))).rejects.toBeInstanceOf(UsageError);
+  });
+
+  it('an override that loosens an extends floor stops the run with both lines, before any evaluation', async () => {
+    const repo = pairRepo('redundant-link');
+    const org = 'requirements:\n  - kind: n-1\n    element: link\n    min: 0.7\n';
+    const team = 'extends: org.yaml\noverrides:\n  - files: "networks/**"\n    requirements:\n      - kind: n-1\n        element: link\n        min: 0.5\n';
+    for (const side of [repo.base, repo.head]) Object.assign(side, { 'org.yaml': org, '.netbrace.yaml': team });
+    const evaluate = spy();
+    const error = await runGate(request, memoryDeps(repo, { evaluate })).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(PolicyError);
+    const e = error as PolicyError;
+    expect([e.file, e.line]).toEqual(['.netbrace.yaml', 7]);
+    expect(e.related.map((r) => [r.file, r.line])).toEqual([['org.yaml', 4]]);
+    expect(e.format()).toMatch(/^\.netbrace\.yaml:7:14: override 1, requirement 1 loosens n-1:link: min 0\.5 where min 0\.7 is required/);
+    expect(evaluate).not.toHaveBeenCalled();
+  });
+
+  it('a broken policy at the base stops the run before any evaluation', async () => {
+    const repo = pairRepo('redundant-link');
+    repo.base['.netbrace.yaml'] = 'seed: -1\n';
+    const evaluate = spy();
+    await expect(runGate(request, memoryDeps(repo, { evaluate }))).rejects.toMatchObject({ kind: 'policy', line: 1, column: 7 });
+    expect(evaluate).not.toHaveBeenCalled();
+  });
+});
+
+describe('which designs are judged', () => {
+  it('only changed files that the policy calls designs', async () => {
+    const repo = pairRepo('unchanged');
+    repo.head['README.md'] = 'notes';
+    repo.head['docs/diagram.svg'] = '<svg/>';
+    const { report } = await runGate(request, memoryDeps(repo));
+    expect(report.files.map((f) => f.path)).toEqual([FILE]);
+    expect(report.scope).toBe('changed');
+  });
+
+  it('no changed design: a pass that says so', async () => {
+    const repo = pairRepo('unchanged');
+    repo.head[FILE] = repo.base[FILE];
+    const { report, exitCode } = await runGate(request, memoryDeps(repo));
+    expect([report.files, report.verdict, exitCode]).toEqual([[], 'pass', 0]);
+  });
+
+  it('a scheduled run judges every design on thresholds only', async () => {
+    const repo = pairRepo('ring-to-chain');
+    repo.head['other.gml'] = 'graph [\n  node [ id 1 ]\n  node [ id 2 ]\n  edge [ source 1 target 2 ]\n]\n';
+    const { report, exitCode } = await runGate({ ...request, eventKind: 'schedule' }, memoryDeps(repo));
+    expect(report.scope).toBe('all');
+    expect(report.base).toBeUndefined();
+    // The two-node design misses the N−1 floor (losing its one link leaves R = 0).
+    expect(report.files.map((f) => [f.path, f.status])).toEqual([
+      [FILE, 'pass'],
+      ['other.gml', 'below-threshold'],
+    ]);
+    expect(report.files[1].requirements.find((r) => r.id === 'n-1:link')).toMatchObject({ head: 0, status: 'missed' });
+    expect(report.files.every((f) => f.requirements.every((r) => r.base === null))).toBe(true);
+    expect(exitCode).toBe(1);
+  });
+
+  it('advise mode reports the failed verdict and exits 0', async () => {
+    const { report, exitCode } = await runGate({ ...request, mode: 'advise' }, memoryDeps(pairRepo('ring-to-chain')));
+    expect([report.verdict, report.mode, exitCode]).toEqual(['fail', 'advise', 0]);
+  });
+
+  it('rejects a request that makes no sense', async () => {
+    const deps = memoryDeps(pairRepo('unchanged'));
+    await expect(runGate({ ...request, shard: { index: 3, total: 2 } }, deps)).rejects.toBeInstanceOf(UsageError);
+    await expect(runGate({ ...request, seed: 1.5 }, deps)).rejects.toBeInstanceOf(UsageError);
+    await expect(runGate({ ...request, mode: 'strict' as 'enforce' }, deps)).rejects.toBeInstanceOf(UsageError);
+  });
+});
+
+function manyDesigns(): MemoryRepo {
+  // Fewer realizations than the fixtures' policy: this test is about bookkeeping, not precision.
+  const policy = gateFixture('policy.yaml').replace(/realizations: 200/g, 'realizations: 30');
+  const repo: MemoryRepo = { base: { '.netbrace.yaml': policy }, head: { '.netbrace.yaml': policy } };
+  const pairs = ['ring-to-chain', 'redundant-link', 'unchanged', 'removed-node'];
+  for (let i = 0; i < 8; i++) {
+    const pair = pairs[i % pairs.length];
+    repo.base[`region-${i}/core.net.yaml`] = gateFixture(`${pair}/base.net.yaml`);
+    repo.head[`region-${i}/core.net.yaml`] = gateFixture(`${pair}/head.net.yaml`);
+  }
+  return repo;
+}
+
+describe('determinism, shards and merging', () => {
+  it('the same inputs and seed give a byte-identical report; another seed another one', async () => {
+    const a = await runGate(request, memoryDeps(pairRepo('removed-node')));
+    const b = await runGate(request, memoryDeps(pairRepo('removed-node')));
+    expect(serializeReport(a.report)).toBe(serializeReport(b.report));
+    const c = await runGate({ ...request, seed: 2 }, memoryDeps(pairRepo('removed-node')));
+    expect(c.report.seed).toBe(2);
+    expect(serializeReport(c.report)).not.toBe(serializeReport(a.report));
+  });
+
+  it('shards are a deterministic partition by path hash, and merged they give the unsharded report', async () => {
+    const repo = manyDesigns();
+    const whole = await runGate(request, memoryDeps(repo));
+    const shards = await Promise.all([1, 2, 3].map((index) => runGate({ ...request, shard: { index, total: 3 } }, memoryDeps(repo))));
+    const paths = shards.map((s) => s.report.files.map((f) => f.path));
+    expect(paths.flat().sort()).toEqual(whole.report.files.map((f) => f.path));
+    expect(new Set(paths.flat()).size).toBe(paths.flat().length);
+    for (const [i, s] of shards.entries()) {
+      expect(s.report.shard).toEqual({ index: i + 1, total: 3 });
+      for (const f of s.report.files) expect(pathHash(f.path) % 3).toBe(i);
+    }
+    // Merge what the shard jobs wrote (JSON files), in any order.
+    const merged = mergeReports([shards[2], shards[0], shards[1]].map((s) => JSON.parse(serializeReport(s.report))));
+    expect(merged.shards).toEqual({ total: 3, merged: [1, 2, 3] });
+    const strip = (r: Report) => ({ ...r, shard: undefined, shards: undefined });
+    expect(serializeReport(strip(merged))).toBe(serializeReport(strip(JSON.parse(serializeReport(whole.report)))));
+    expect(merged.verdict).toBe(whole.report.verdict);
+  });
+
+  it('FNV-1a matches its published test vectors', () => {
+    // Fowler–Noll–Vo reference test vectors (FNV-1a, 32 bit).
+    expect(pathHash('')).toBe(0x811c9dc5);
+    expect(pathHash('a')).toBe(0xe40c292c);
+    expect(pathHash('foobar')).toBe(0xbf9cf968);
+    expect(inShard('a', { index: 1, total: 1 })).toBe(true);
+  });
+
+  it('merge reads reports of older writers (optional fields missing) and refuses newer versions', () => {
+    const old = {
+      version: 1,
+      tool: { name: 'netbrace', version: '0.0.9' },
+      verdict: 'pass',
+      mode: 'enforce',
+      policy: { source: 'builtin' },
+      seed: 1,
+      files: [{ path: 'a.gml', status: 'pass', findings: [], requirements: [] }],
+    };
+    const failing = { ...old, files: [{ path: 'b.gml', status: 'error', findings: [{ rule: 'parse-error', severity: 'fail', message: 'x', elements: [], line: 3 }] }] };
+    const merged = mergeReports([old, failing]);
+    expect(merged.version).toBe(REPORT_VERSION);
+    expect(merged.files.map((f) => f.path)).toEqual(['a.gml', 'b.gml']);
+    expect(merged.counts).toMatchObject({ pass: 1, error: 1 });
+    expect(merged.verdict).toBe('fail');
+    expect(merged.caution.length).toBeGreaterThan(0);
+    expect(() => mergeReports([{ ...old, version: REPORT_VERSION + 1 }])).toThrow(UsageError);
+    expect(() => mergeReports([{ hello: 1 }])).toThrow(UsageError);
+    expect(() => mergeReports([])).toThrow(UsageError);
+  });
+});
