@@ -6,6 +6,7 @@
 
 import { attacksFor, envelopeChart, renderChartSvg, type EnvelopeChart } from './chart.js';
 import {
+  describeChanges,
   elementLines,
   elementWithLine,
   fileFails,
@@ -137,8 +138,9 @@ function masthead(r: Report): string {
     r.policy.source === 'builtin'
       ? 'no policy file: the built-in defaults for communication backbones were applied'
       : `<code>${esc(r.policy.path ?? 'policy file')}</code>${r.policy.revision ? ` as of <code>${esc(r.policy.revision)}</code>` : ''}` +
-        (r.policy.changed ? ' (this change edits the policy; the proposed policy was not applied)' : ''),
+        (r.policy.note ? `. ${esc(r.policy.note)}` : r.policy.changed ? ' (this change edits the policy; the proposed policy was not applied)' : ''),
   ]);
+  if (r.scope === 'all') meta.push(['Scope', 'every design in the repository, judged against thresholds only']);
   meta.push(['Mode', r.mode === 'advise' ? 'advise: failures are reported, the run does not fail' : 'enforce: failures fail the check']);
   meta.push(['Seed', String(r.seed)]);
   if (r.shard) meta.push(['Shard', `${r.shard.index} of ${r.shard.total}`]);
@@ -189,6 +191,8 @@ function designSection(f: FileReport, index: number): string {
     );
   }
   if (f.head) out.push(`<p class="facts">${esc(facts(f.head))}</p>`);
+  const changed = describeChanges(f);
+  if (changed) out.push(`<p class="facts changes"><strong>What the change does:</strong> ${esc(changed)}</p>`);
   const lines = elementLines(f);
   if (f.head && f.head.envelopes.length) out.push(charts(f, id));
   if (f.requirements.length) out.push(requirementTable(f.requirements, id));

@@ -168,3 +168,19 @@ export function weakestSequences(f: FileReport): NamedSequence[] {
   }
   return out;
 }
+
+/** "+1 site (saltmarrow, line 83), +2 links (…); −2 links (…)": what the change added and removed. */
+export function describeChanges(f: FileReport, max = 4): string | undefined {
+  const ch = f.changes;
+  if (!ch || (ch.added.length === 0 && ch.removed.length === 0)) return undefined;
+  const part = (sign: string, list: typeof ch.added, side: string) => {
+    const byKind = (['node', 'link', 'group'] as const).map((k) => list.filter((e) => e.kind === k)).filter((l) => l.length);
+    return byKind.map((l) => {
+      const n = l.length;
+      const noun = n === 1 ? kindSingular(l[0].kind) : kindPlural(l[0].kind);
+      const names = l.slice(0, max).map((e) => `${e.id}, ${side}line ${e.line}`).join('; ');
+      return `${sign}${n} ${noun} (${names}${n > max ? `; \u2026 ${n - max} more` : ''})`;
+    });
+  };
+  return [...part('+', ch.added, ''), ...part('\u2212', ch.removed, 'base ')].join(', ');
+}

@@ -7,6 +7,7 @@ import type { Colors } from 'picocolors/types.js';
 import type { Envelope } from '../envelope/types.js';
 import { envelopeChart, type ChartSeries, type EnvelopeChart } from './chart.js';
 import {
+  describeChanges,
   elementLines,
   elementWithLine,
   fileFails,
@@ -61,7 +62,9 @@ function policyNotes(r: Report): string[] {
   const notes: string[] = [];
   if (r.policy.source === 'builtin') notes.push('policy: none found \u2014 the built-in defaults for communication backbones were applied');
   else notes.push(`policy: ${r.policy.path ?? '(file)'}${r.policy.revision ? ` as of ${r.policy.revision}` : ''}`);
-  if (r.policy.changed) notes.push('policy: this change edits the policy; the proposed policy was not applied to judge it');
+  if (r.policy.note) notes.push(`policy: ${r.policy.note}`);
+  else if (r.policy.changed) notes.push('policy: this change edits the policy; the proposed policy was not applied to judge it');
+  if (r.scope === 'all') notes.push('scope: every design in the repository, judged against thresholds only');
   if (r.mode === 'advise') notes.push('mode: advise \u2014 failures are reported but do not fail the run');
   return notes;
 }
@@ -92,6 +95,8 @@ function renderFile(f: FileReport, c: Colors, width: number): string[] {
     out.push(...wrap(`${f.path}:${f.error.line || 1}:${f.error.column || 1}: ${f.error.message}`, width - 2).map((l) => `  ${l}`));
   }
   if (f.head) out.push(...wrap(describeEvaluation(f.head), width - 2).map((l) => c.dim(`  ${l}`)));
+  const changed = describeChanges(f);
+  if (changed) out.push(...wrap(`changed: ${changed}`, width - 2).map((l) => `  ${l}`));
   if (f.requirements.length) out.push('', ...requirementTable(f.requirements, c, width));
   const lines = elementLines(f);
   const findings = f.findings.filter((x) => x.rule !== 'weakest-sequence' && x.rule !== 'parse-error');

@@ -253,6 +253,13 @@ const backbone: FileReport = {
   ],
   base: baseBackbone,
   head: headBackbone,
+  changes: {
+    added: [],
+    removed: [
+      { id: 'kaskeld-fenwhistle', kind: 'link', line: 214 },
+      { id: 'ibberlin-tarnquist', kind: 'link', line: 205 },
+    ],
+  },
 };
 
 const metroHead: Evaluation = {

@@ -62,6 +62,10 @@ describe('renderTerminal', () => {
     expect(firstCell).toBe('\u25cf');
   });
 
+  it('says what the change added and removed, with lines', () => {
+    expect(plain(160)).toContain('changed: \u22122 links (kaskeld-fenwhistle, base line 214; ibberlin-tarnquist, base line 205)');
+  });
+
   it('ends with the caution', () => {
     const lines = plain(100).trimEnd().split('\n');
     const start = lines.findIndex((l) => l.startsWith('Caution: '));
