@@ -14,7 +14,7 @@ import { formatDiagnostic, isNetbraceError } from '../errors.js';
 import { planAnnotations, type Annotation } from '../report/annotations.js';
 import { logText, oneLine } from '../report/escape.js';
 import { commentDigest, commentMarker, renderComment, renderSummary, reportDigest } from '../report/markdown.js';
-import { CAUTION, REPORT_VERSION, type FileStatus, type Report } from '../report/report.js';
+import { CAUTION, REPORT_VERSION, serializeReport, type FileStatus, type Report } from '../report/report.js';
 import { VERSION } from '../version.js';
 import { DEFAULT_POLICY_PATH } from '../policy/defaults.js';
 import { builtinPolicy, isDesignPath, loadPolicy } from '../policy/resolve.js';
@@ -24,6 +24,7 @@ import {
   httpSettingsFromEnv,
   isPermissionError,
   listPullRequestFiles,
+  pullRequestHead,
   upsertComment,
   type Client,
   type ClientOptions,
@@ -115,6 +116,8 @@ export interface ActionInputs {
   title: string;
   seed?: number;
   threads?: number;
+  /** The pull request to comment on when the event has none (a workflow_run that posts a fork's report). */
+  pullRequest?: number;
 }
 
 /** An input as the runner passes it: INPUT_<NAME>, upper-cased, spaces as underscores, dashes kept. */
@@ -186,6 +189,7 @@ export function readInputs(env: Env): ActionInputs {
     title: oneLine(getInput(env, 'title'), 120),
     seed: optionalInt(env, 'seed', 0, 2 ** 32 - 1),
     threads: optionalInt(env, 'threads', 1, 256),
+    pullRequest: optionalInt(env, 'pull-request', 1, 2 ** 31 - 1),
   };
 }
 
@@ -205,6 +209,8 @@ export interface Target {
   reason?: string;
   /** A push that created a branch: compare with the head's parent, if there is one. */
   newBranch?: boolean;
+  /** workflow_run: the head commit of the run that triggered this one. */
+  runHeadSha?: string;
 }
 
 function sha(value: unknown, what: string): string {
@@ -244,7 +250,8 @@ export function readTarget(env: Env): Target {
   }
   // workflow_dispatch, schedule and anything else: every design, thresholds only.
   const head = env.GITHUB_SHA && SHA_RE.test(env.GITHUB_SHA) ? env.GITHUB_SHA : undefined;
-  return { eventName, kind: 'full', ...(head ? { head } : {}) };
+  const runHead = payload.workflow_run?.head_sha;
+  return { eventName, kind: 'full', ...(head ? { head } : {}), ...(typeof runHead === 'string' && SHA_RE.test(runHead) ? { runHeadSha: runHead } : {}) };
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -501,7 +508,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       artifacts.push(rel);
       return rel;
     };
-    const reportPath = inputs.report ? write('report', inputs.report, `${JSON.stringify(report, null, 2)}\n`) : '';
+    const reportPath = inputs.report ? write('report', inputs.report, serializeReport(report)) : '';
     let sarifPath = '';
     let htmlPath = '';
     if (!shardJob) {
@@ -520,6 +527,9 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     let comment: RunOutcome['comment'] = 'not-applicable';
     const url = runUrl(env);
     const viewOptions = { pathPrefix, ...(url ? { runUrl: url } : {}), artifacts, ...(inputs.title ? { title: inputs.title } : {}) };
+    if (!shardJob && !target.pr && inputs.pullRequest) {
+      target.pr = await trustedPullRequest(deps, env, inputs, target, inputs.pullRequest);
+    }
     if (!shardJob) {
       const body = renderComment(report, { ...viewOptions, key: inputs.commentKey });
       comment = await postComment(deps, env, inputs, target, report, body);
@@ -560,6 +570,30 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     const message = error instanceof Error ? error.message : String(error);
     return fail(`netbrace: internal error: ${message} \u2014 please report this with the workflow run`, 2);
   }
+}
+
+/**
+ * The pull request named by the "pull-request" input. In a workflow_run that posts the report
+ * of a pull-request run (a fork's), the number comes from an artifact, which is untrusted: it
+ * is used only if the pull request's head is the commit that run evaluated.
+ */
+async function trustedPullRequest(deps: ActionDeps, env: Env, inputs: ActionInputs, target: Target, number: number): Promise<Target['pr']> {
+  const [owner = '', repo = ''] = (env.GITHUB_REPOSITORY ?? '').split('/');
+  const pr = { owner, repo, number, fork: false };
+  if (target.eventName !== 'workflow_run') return pr;
+  if (!target.runHeadSha || !inputs.token) {
+    deps.out.warning('netbrace: no comment: the workflow_run payload has no head commit to check the pull request against');
+    return undefined;
+  }
+  try {
+    const client = deps.github({ token: inputs.token, baseUrl: env.GITHUB_API_URL || 'https://api.github.com', ...httpSettingsFromEnv(env) });
+    const head = await pullRequestHead(client, { owner, repo, issueNumber: number });
+    if (head === target.runHeadSha) return pr;
+    deps.out.warning(`netbrace: no comment: pull request #${number} is at ${head.slice(0, 12)}, not at ${target.runHeadSha.slice(0, 12)} which the report is about`);
+  } catch (error) {
+    deps.out.warning(`netbrace: no comment: could not read pull request #${number} (${oneLine(error instanceof Error ? error.message : String(error), 200)})`);
+  }
+  return undefined;
 }
 
 /**

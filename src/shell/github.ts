@@ -184,6 +184,12 @@ export async function listPullRequestFiles(client: Client, ref: IssueRef): Promi
   return { files, truncated: files.length >= PR_FILES_LIMIT };
 }
 
+/** The head commit of a pull request, as the API sees it now. */
+export async function pullRequestHead(client: Client, ref: IssueRef): Promise<string> {
+  const res = await client.rest.pulls.get({ owner: ref.owner, repo: ref.repo, pull_number: ref.issueNumber });
+  return res.data.head.sha;
+}
+
 /** HTTP status of an Octokit error, if it has one. */
 export function statusOf(error: unknown): number | undefined {
   const s = (error as { status?: unknown } | null)?.status;

@@ -28,6 +28,8 @@ export interface FakeApi {
   requests: RecordedRequest[];
   comments: FakeComment[];
   prFiles: { filename: string; status: string; previous_filename?: string }[];
+  /** What GET /repos/:o/:r/pulls/:n answers as head.sha. */
+  prHeadSha: string;
   /** What reads (GET) and writes (POST/PATCH) answer; `failFirst` failures, then normal. */
   reads: Failure;
   writes: Failure;
@@ -46,6 +48,7 @@ export async function startFakeApi(): Promise<FakeApi> {
     requests: [],
     comments: [],
     prFiles: [],
+    prHeadSha: '',
     reads: 'none',
     writes: 'none',
     failFirst: Number.POSITIVE_INFINITY,
@@ -114,6 +117,9 @@ export async function startFakeApi(): Promise<FakeApi> {
         if (!c) return send(res, 404, { message: 'Not Found' });
         c.body = String((body as { body: string }).body);
         return send(res, 200, { ...c, html_url: `${api.url}/comment/${c.id}` });
+      }
+      if ((m = u.pathname.match(/^\/repos\/[^/]+\/[^/]+\/pulls\/(\d+)$/)) && req.method === 'GET') {
+        return send(res, 200, { number: Number(m[1]), head: { sha: api.prHeadSha } });
       }
       if (u.pathname.match(/^\/repos\/[^/]+\/[^/]+\/pulls\/(\d+)\/files$/) && req.method === 'GET') {
         return paginate(req, res, api.prFiles, query);

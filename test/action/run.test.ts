@@ -277,6 +277,38 @@ describe('verdict and comment', () => {
   });
 });
 
+describe('workflow_run (posting a fork\u2019s report)', () => {
+  function runEvent(headSha: string): string {
+    const file = path.join(dir, `run-${events++}.json`);
+    writeFileSync(file, JSON.stringify({ workflow_run: { head_sha: headSha, event: 'pull_request' } }));
+    return file;
+  }
+  function shardsDir(): void {
+    mkdirSync(path.join(dir, 'ws', 'in'), { recursive: true });
+    writeFileSync(path.join(dir, 'ws', 'in', 'netbrace-report.json'), JSON.stringify(sampleReport()));
+  }
+
+  it('comments on the pull request whose head is the evaluated commit', async () => {
+    shardsDir();
+    api.prHeadSha = HEAD;
+    const { d, rec } = deps(sampleReport());
+    const out = await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), INPUT_MERGE: 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'advise' }), d);
+    expect(out).toMatchObject({ exitCode: 0, verdict: 'fail' });
+    expect(rec.gateCalls).toEqual([]);
+    expect(api.comments).toHaveLength(1);
+    expect(api.requests.some((r) => r.method === 'GET' && r.path === '/repos/acme/net/pulls/12')).toBe(true);
+  });
+
+  it('refuses a pull-request number that does not match the evaluated commit', async () => {
+    shardsDir();
+    api.prHeadSha = 'e'.repeat(40);
+    const { d, rec } = deps(sampleReport());
+    await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), INPUT_MERGE: 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'advise' }), d);
+    expect(api.comments).toHaveLength(0);
+    expect(rec.warnings.some((w) => /not at bbbbbbbbbbbb/.test(w))).toBe(true);
+  });
+});
+
 describe('shards', () => {
   it('a shard job writes its report and leaves the decision to the merge job', async () => {
     const r = sampleReport();
