@@ -3,5 +3,6 @@
 import type { Command } from '../io.js';
 import { inspectCommand } from './inspect.js';
 import { explainCommand } from './explain.js';
+import { envelopeCommand } from './envelope.js';
 
-export const commands: Command[] = [inspectCommand, explainCommand];
+export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand];
