@@ -21,9 +21,19 @@ Usage: netbrace <command> [options]
 Commands:
 ${list}
 
-Run "netbrace <command> --help" for a command's options and examples.
+Run "netbrace <command> --help" (or "netbrace help <command>") for a command's options
+and examples; "netbrace --version" prints the version.
+
+Examples:
+  netbrace demo                                   the whole gate on an invented backbone
+  netbrace check --base main                      judge the designs changed since main
+  netbrace explain designs/core.net.yaml          which single losses hurt R most
+  netbrace inspect designs/core.net.yaml          counts, bridges and cut nodes
 
 ${EXIT_CODES_HELP}
+
+netbrace evaluates topology-level robustness under the assumptions in the policy; it does
+not replace engineering studies. Local codes, standards and licensed practice decide.
 `;
 }
 
