@@ -19,9 +19,12 @@ import {
   formatValue,
   REQUIREMENT_STATUS_WORD,
   STATUS_WORD,
+  bySeverity,
+  groupFindings,
   weakestSequences,
+  type GroupedFinding,
 } from './labels.js';
-import type { Evaluation, FileReport, Finding, Report, ReportElement, RequirementResult } from './report.js';
+import type { Evaluation, FileReport, Report, ReportElement, RequirementResult } from './report.js';
 import { escapeHtml } from './escape.js';
 
 const esc = (s: string | number) => escapeHtml(String(s));
@@ -196,10 +199,15 @@ function designSection(f: FileReport, index: number): string {
   const lines = elementLines(f);
   if (f.head && f.head.envelopes.length) out.push(charts(f, id));
   if (f.requirements.length) out.push(requirementTable(f.requirements, id));
-  const findings = f.findings.filter((x) => x.rule !== 'weakest-sequence');
-  if (findings.length) {
-    out.push('<h3>Findings</h3>');
-    out.push(`<ul class="findings">${findings.map(findingItem).join('')}</ul>`);
+  const findings = groupFindings(bySeverity(f.findings.filter((x) => x.rule !== 'weakest-sequence')));
+  const work = findings.filter((x) => x.severity !== 'notice');
+  const notices = findings.filter((x) => x.severity === 'notice');
+  if (findings.length) out.push('<h3>Findings</h3>');
+  if (work.length) out.push(`<ul class="findings">${work.map(findingItem).join('')}</ul>`);
+  if (notices.length) {
+    out.push(
+      `<details class="notices"><summary>${notices.length} notice${notices.length === 1 ? '' : 's'} (within allowances, or context)</summary><ul class="findings">${notices.map(findingItem).join('')}</ul></details>`,
+    );
   }
   out.push(weakest(f, lines));
   out.push(structure(f));
@@ -285,17 +293,23 @@ function requirementTable(rows: RequirementResult[], id: string): string {
   ].join('\n');
 }
 
+const MAX_ELEMENTS = 8;
+
 function elementList(elements: ReportElement[]): string {
-  return elements.map((e) => `<span class="el">${esc(e.id)}</span> <span class="line">(${esc(e.kind)}, line ${e.line})</span>`).join(', ');
+  const shown = elements.slice(0, MAX_ELEMENTS).map((e) => `<span class="el">${esc(e.id)}</span> <span class="line">(${esc(e.kind)}, line ${e.line})</span>`);
+  const more = elements.length > MAX_ELEMENTS ? `, \u2026 ${elements.length - MAX_ELEMENTS} more` : '';
+  return shown.join(', ') + more;
 }
 
-function findingItem(x: Finding): string {
+function findingItem(x: GroupedFinding): string {
   const where = x.line > 0 ? ` <span class="line">line ${x.line}${x.column ? `:${x.column}` : ''}</span>` : '';
+  // The gate's messages usually state the values already; repeat them only when they do not.
   const values =
-    x.head !== undefined && x.head !== null
-      ? ` <span class="line">(base ${esc(formatValue(x.base))}, head ${esc(formatValue(x.head))}${x.delta !== undefined && x.delta !== null ? `, \u0394 ${esc(formatDelta(x.delta))} ${esc(formatError(x.se))}` : ''})</span>`
+    x.head !== undefined && x.head !== null && !x.message.includes(formatValue(x.head))
+      ? ` <span class="line">(base ${esc(formatValue(x.base))}, head ${esc(formatValue(x.head))}${x.delta !== undefined && x.delta !== null ? `, \u0394 ${esc(`${formatDelta(x.delta)} ${formatError(x.se)}`.trim())}` : ''})</span>`
       : '';
-  const els = x.elements.length ? `<div>${elementList(x.elements)}</div>` : '';
+  const named = x.elements.length === 1 && x.message.includes(x.elements[0].id);
+  const els = x.elements.length && !named ? `<div>${elementList(x.elements)}</div>` : '';
   return `<li class="${x.severity}" data-rule="${esc(x.rule)}"><span class="chip ${x.severity}">${esc(x.severity)}</span> <span class="rule">${esc(x.rule)}</span>${where}<div>${esc(x.message)}${values}</div>${els}</li>`;
 }
 

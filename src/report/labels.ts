@@ -2,7 +2,7 @@
 // a number is written, and where an element's line is found. Pure; no colour, no markup.
 
 import type { ChallengeName, ElementKind } from '../envelope/types.js';
-import type { FileReport, FileStatus, RequirementResult } from './report.js';
+import type { FileReport, FileStatus, Finding, RequirementResult } from './report.js';
 
 
 const CHALLENGE_LABEL: Record<ChallengeName, string> = {
@@ -184,3 +184,35 @@ export function describeChanges(f: FileReport, max = 4): string | undefined {
   };
   return [...part('+', ch.added, ''), ...part('\u2212', ch.removed, 'base ')].join(', ');
 }
+
+/** A finding, or several new-bridge / new-cut-node findings of one severity merged into one. */
+export type GroupedFinding = Finding & { grouped?: boolean };
+
+const SEVERITY_ORDER = { fail: 0, warn: 1, notice: 2 } as const;
+
+/** Findings in reading order: failures, then warnings, then notices (stable within each). */
+export function bySeverity<T extends Finding>(findings: readonly T[]): T[] {
+  return [...findings].sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity]);
+}
+
+/** New bridges and cut nodes of one severity read best as one list: merge their findings. */
+export function groupFindings(findings: readonly Finding[]): GroupedFinding[] {
+  const out: GroupedFinding[] = [];
+  for (const x of findings) {
+    const groupable = (x.rule === 'new-bridge' || x.rule === 'new-cut-node') && x.elements.length === 1;
+    const prev = out[out.length - 1];
+    if (groupable && prev && prev.rule === x.rule && prev.severity === x.severity && prev.elements.length >= 1 && (prev as GroupedFinding).grouped) {
+      prev.elements.push(...x.elements);
+      continue;
+    }
+    out.push(groupable ? ({ ...x, elements: [...x.elements], grouped: true } as GroupedFinding) : x);
+  }
+  for (const x of out as GroupedFinding[]) {
+    if (!x.grouped || x.elements.length < 2) continue;
+    const what = x.rule === 'new-bridge' ? 'new bridges (links whose loss alone splits the design)' : 'new cut nodes (sites whose loss alone splits the design)';
+    x.message = `${x.elements.length} ${what}: ${x.elements.map((e) => `${e.id}\u00a0(line\u00a0${e.line})`).join(', ')}`;
+  }
+  return out;
+}
+
+

@@ -19,7 +19,10 @@ import {
   formatValue,
   REQUIREMENT_STATUS_WORD,
   STATUS_WORD,
+  bySeverity,
+  groupFindings,
   weakestSequences,
+  type GroupedFinding,
 } from './labels.js';
 import type { Evaluation, FileReport, Finding, Report, RequirementResult } from './report.js';
 import { oneLine } from './escape.js';
@@ -102,7 +105,7 @@ function renderFile(f: FileReport, c: Colors, width: number): string[] {
   const findings = f.findings.filter((x) => x.rule !== 'weakest-sequence' && x.rule !== 'parse-error');
   if (findings.length) {
     out.push('', c.bold('  Findings'));
-    for (const x of groupFindings(findings)) out.push(...findingLines(x, c, width));
+    for (const x of groupFindings(bySeverity(findings))) out.push(...findingLines(x, c, width));
   }
   const sequences = weakestSequences(f);
   if (sequences.length) {
@@ -155,29 +158,7 @@ function requirementTable(rows: RequirementResult[], c: Colors, width: number): 
 const MAX_ELEMENTS = 5;
 const MAX_CHAIN = 8;
 
-/** New bridges and cut nodes of one severity read best as one list: merge their findings. */
-function groupFindings(findings: Finding[]): Finding[] {
-  const out: Finding[] = [];
-  for (const x of findings) {
-    const groupable = (x.rule === 'new-bridge' || x.rule === 'new-cut-node') && x.elements.length === 1;
-    const prev = out[out.length - 1];
-    if (groupable && prev && prev.rule === x.rule && prev.severity === x.severity && prev.elements.length >= 1 && (prev as Grouped).grouped) {
-      prev.elements.push(...x.elements);
-      continue;
-    }
-    out.push(groupable ? ({ ...x, elements: [...x.elements], grouped: true } as Grouped) : x);
-  }
-  for (const x of out as Grouped[]) {
-    if (!x.grouped || x.elements.length < 2) continue;
-    const what = x.rule === 'new-bridge' ? 'new bridges (links whose loss alone splits the design)' : 'new cut nodes (sites whose loss alone splits the design)';
-    x.message = `${x.elements.length} ${what}: ${x.elements.map((e) => `${e.id}\u00a0(line\u00a0${e.line})`).join(', ')}`;
-  }
-  return out;
-}
-
-type Grouped = Finding & { grouped?: boolean };
-
-function findingLines(x: Grouped, c: Colors, width: number): string[] {
+function findingLines(x: GroupedFinding, c: Colors, width: number): string[] {
   const paint = x.severity === 'fail' ? c.red : x.severity === 'warn' ? c.yellow : c.cyan;
   const where = x.line > 0 ? `line ${x.line}` : '';
   const head = `  ${paint(`${SYMBOL[x.severity]} ${x.severity.padEnd(6)}`)} ${x.rule.padEnd(16)} ${where.padEnd(10)} `;

@@ -91,4 +91,11 @@ describe('renderHtml', () => {
     expect(html).toContain(CAUTION);
     expect(html).toContain('@media print');
   });
+
+  it('lists failures before warnings, and folds notices away', () => {
+    const s = sections();
+    const rules = [...s[0].matchAll(/<li class="(fail|warn|notice)" data-rule="([^"]+)"/g)].map((m) => m[1]);
+    expect(rules).toEqual([...rules].sort((a, b) => ['fail', 'warn', 'notice'].indexOf(a) - ['fail', 'warn', 'notice'].indexOf(b)));
+    expect(s[1]).toMatch(/<details class="notices"><summary>1 notice \(within allowances, or context\)<\/summary><ul class="findings"><li class="notice" data-rule="degraded"/);
+  });
 });

@@ -121,10 +121,11 @@ describe('renderTerminal', () => {
     });
     f.findings = [one('a-b', 10), one('b-c', 12), { ...one('c-d', 14), severity: 'fail' }, { rule: 'regression', severity: 'notice', message: 'x '.repeat(200), elements: [{ id: 'n', kind: 'node', line: 3 }], line: 3 }];
     const lines = renderTerminal(r, { color: false, width: 100 }).replace(/\u00a0/g, ' ').split('\n');
-    const i = lines.findIndex((l) => l.includes('2 new bridges'));
-    expect(lines[i]).toMatch(/\u25b2 warn\s+new-bridge\s+line 10\s+2 new bridges \(links whose loss alone splits the design\):$/);
-    expect(lines[i + 1].trim()).toBe('a-b (line 10), b-c (line 12)');
-    expect(lines[i + 2]).toMatch(/\u2717 fail\s+new-bridge\s+line 14\s+link c-d is a new bridge$/);
+    const i = lines.findIndex((l) => l.includes('link c-d is a new bridge'));
+    // failures first, then warnings, then notices
+    expect(lines[i]).toMatch(/\u2717 fail\s+new-bridge\s+line 14\s+link c-d is a new bridge$/);
+    expect(lines[i + 1]).toMatch(/\u25b2 warn\s+new-bridge\s+line 10\s+2 new bridges \(links whose loss alone splits the design\):$/);
+    expect(lines[i + 2].trim()).toBe('a-b (line 10), b-c (line 12)');
     expect(lines[i + 3]).toMatch(/i notice regression\s+line 3\s+x x .*\u2026$/);
     expect(lines[i + 3].length).toBeLessThanOrEqual(100);
     expect(lines[i + 4]).toBe('');
