@@ -4,5 +4,8 @@ import type { Command } from '../io.js';
 import { inspectCommand } from './inspect.js';
 import { explainCommand } from './explain.js';
 import { envelopeCommand } from './envelope.js';
+import { checkCommand } from './check.js';
+import { initCommand } from './init.js';
+import { demoCommand } from './demo.js';
 
-export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand];
+export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand];

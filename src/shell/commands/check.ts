@@ -1,0 +1,216 @@
+// `netbrace check`: the gate on the command line. Finds the design files that changed between
+// two revisions (or takes the given paths), evaluates both sides under the policy, prints the
+// verdict and writes the report files. The same runGate the GitHub Action calls.
+
+import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import { parseArgs } from 'node:util';
+import { UsageError } from '../../errors.js';
+import { evaluateDesignParallel } from '../../parallel/pool.js';
+import { renderHtml } from '../../report/html.js';
+import { renderSummary } from '../../report/markdown.js';
+import { serializeReport, type Report } from '../../report/report.js';
+import { renderSarif } from '../../report/sarif.js';
+import { renderTerminal } from '../../report/terminal.js';
+import { runGate, type GateDeps, type GateRequest } from '../../run-gate.js';
+import { colorEnabled, terminalWidth } from '../color.js';
+import { gitDeps, mergeBase, repoRoot, revParse } from '../git.js';
+import type { Command, CommandIO } from '../io.js';
+
+const HELP = `Usage: netbrace check [options] [PATH...]
+
+Judge network designs against the policy: every design file that changed between two
+revisions (or the PATHs given), at the head and at the base, with the same rules the
+GitHub Action applies.
+
+Revisions:
+  --base REF             compare with REF (default: HEAD for --worktree, else the head's
+                         parent); with a branch, from where the head's history left it
+  --head REF             judge the commit REF
+  --worktree             judge the files on disk (the default when --head is not given)
+
+Policy:
+  --policy FILE          the policy file (default .netbrace.yaml at the repository root;
+                         without one the built-in policy applies)
+  --policy-source SIDE   base (default): read the policy at the base, so a change cannot
+                         loosen the rules that judge it; head: the policy of the head
+
+Evaluation:
+  --seed S               seed of the random challenges (default: the policy's)
+  --threads N            worker threads (results do not depend on N)
+  --mode MODE            enforce (default): exit 1 when the gate fails; advise: exit 0
+  --shard K/N            judge only slice K of N of the designs (by path hash)
+
+Output:
+  --format FORMAT        text (default), markdown or json, on standard output
+  --json FILE            write the JSON report
+  --summary FILE         write the Markdown summary
+  --html FILE            write the HTML report
+  --sarif FILE           write SARIF 2.1.0 for code scanning
+
+Examples:
+  netbrace check                          designs changed in the working tree since HEAD
+  netbrace check --base main              what this branch changes, as a pull request would
+  netbrace check --head HEAD --json r.json   the last commit, report to r.json
+  netbrace check networks/core.net.yaml   one design, against HEAD
+
+netbrace informs engineering judgement; it does not replace engineering studies.
+
+Exit codes:
+  0  pass (or nothing to judge, or --mode advise)
+  1  the gate failed: a requirement was broken or a design could not be read
+  2  usage or configuration error (bad option, broken policy); nothing was evaluated
+`;
+
+const OPTIONS = {
+  base: { type: 'string' },
+  head: { type: 'string' },
+  worktree: { type: 'boolean' },
+  policy: { type: 'string' },
+  'policy-source': { type: 'string' },
+  seed: { type: 'string' },
+  threads: { type: 'string' },
+  mode: { type: 'string' },
+  shard: { type: 'string' },
+  format: { type: 'string' },
+  json: { type: 'string' },
+  summary: { type: 'string' },
+  html: { type: 'string' },
+  sarif: { type: 'string' },
+} as const;
+
+type Values = ReturnType<typeof parse>['values'];
+
+function parse(args: string[]) {
+  try {
+    return parseArgs({ args, options: OPTIONS, allowPositionals: true, strict: true });
+  } catch (e) {
+    throw new UsageError((e as Error).message.split('\n')[0], 'see "netbrace check --help"');
+  }
+}
+
+function choice<T extends string>(name: string, value: string | undefined, allowed: readonly T[], fallback: T): T {
+  if (value === undefined) return fallback;
+  if (!(allowed as readonly string[]).includes(value)) throw new UsageError(`--${name} must be ${allowed.join(', ')}, not "${value}"`);
+  return value as T;
+}
+
+function wholeNumber(name: string, value: string | undefined, min: number, max = Number.MAX_SAFE_INTEGER): number | undefined {
+  if (value === undefined) return undefined;
+  if (!/^[0-9]+$/.test(value) || Number(value) < min || Number(value) > max) {
+    throw new UsageError(`--${name} must be a whole number from ${min} to ${max}, not "${value}"`);
+  }
+  return Number(value);
+}
+
+function shardOf(value: string | undefined): GateRequest['shard'] {
+  if (value === undefined) return undefined;
+  const m = /^([0-9]+)\/([0-9]+)$/.exec(value);
+  const [k, n] = m ? [Number(m[1]), Number(m[2])] : [0, 0];
+  if (!m || k < 1 || n < 1 || k > n) throw new UsageError(`--shard must be K/N with 1 ≤ K ≤ N, not "${value}"`, 'e.g. --shard 2/4');
+  return { index: k, total: n };
+}
+
+/** A path the user typed (relative to where they are) as a repository path. */
+function repoPath(root: string, cwd: string, p: string): string {
+  const rel = path.relative(root, path.resolve(cwd, p));
+  if (rel === '' || rel.startsWith('..') || path.isAbsolute(rel)) throw new UsageError(`${p} is not inside the repository`);
+  return rel.split(path.sep).join('/');
+}
+
+async function revision(root: string, ref: string): Promise<string> {
+  const sha = await revParse(root, ref);
+  if (!sha) throw new UsageError(`"${ref}" is not a commit in this repository`, 'check the ref (git fetch it first if it is remote)');
+  return sha;
+}
+
+/** Readers for designs outside any git repository: the files on disk, no base. */
+function plainDeps(cwd: string): Pick<GateDeps, 'listChanged' | 'readAt' | 'listAll'> {
+  return {
+    listChanged: () => [],
+    listAll: () => [],
+    readAt: async (_rev, file) => {
+      try {
+        return await readFile(path.resolve(cwd, file), 'utf8');
+      } catch (e) {
+        if ((e as NodeJS.ErrnoException).code === 'ENOENT') return null;
+        throw e;
+      }
+    },
+  };
+}
+
+async function buildRequest(v: Values, positionals: string[], io: CommandIO): Promise<{ request: GateRequest; deps: GateDeps }> {
+  if (v.head !== undefined && v.worktree) throw new UsageError('--head and --worktree exclude each other', 'judge a commit or the files on disk');
+  const threads = wholeNumber('threads', v.threads, 1, 256);
+  const request: GateRequest = {
+    policySource: choice('policy-source', v['policy-source'], ['base', 'head'] as const, 'base'),
+    mode: choice('mode', v.mode, ['enforce', 'advise'] as const, 'enforce'),
+    eventKind: 'local',
+  };
+  const seed = wholeNumber('seed', v.seed, 0, 0xffffffff);
+  if (seed !== undefined) request.seed = seed;
+  if (threads !== undefined) request.threads = threads;
+  const shard = shardOf(v.shard);
+  if (shard) request.shard = shard;
+  const evaluate: GateDeps['evaluate'] = threads !== undefined && threads > 1 ? (g, spec) => evaluateDesignParallel(g, spec, threads) : undefined;
+
+  const root = await repoRoot(io.cwd);
+  if (root === null) {
+    if (positionals.length === 0) throw new UsageError('this is not a git repository', 'give the design files to judge as paths');
+    if (v.base !== undefined || v.head !== undefined) throw new UsageError('--base and --head need a git repository');
+    request.worktree = true;
+    request.paths = positionals.map((p) => path.relative(io.cwd, path.resolve(io.cwd, p)).split(path.sep).join('/'));
+    if (v.policy !== undefined) request.policyPath = path.relative(io.cwd, path.resolve(io.cwd, v.policy)).split(path.sep).join('/');
+    return { request, deps: { ...plainDeps(io.cwd), ...(evaluate ? { evaluate } : {}) } };
+  }
+
+  const worktree = v.head === undefined;
+  let head: string | undefined;
+  if (worktree) request.worktree = true;
+  else request.head = head = await revision(root, v.head!);
+  if (v.base !== undefined) {
+    const b = await revision(root, v.base);
+    const from = head ?? (await revParse(root, 'HEAD'));
+    // What the head changes since its history left the base, as a pull request shows it.
+    request.base = (from && (await mergeBase(root, b, from))) ?? b;
+  } else {
+    const b = worktree ? await revParse(root, 'HEAD') : await revParse(root, `${head}^`);
+    if (b) request.base = b;
+  }
+  if (positionals.length > 0) request.paths = positionals.map((p) => repoPath(root, io.cwd, p));
+  if (v.policy !== undefined) request.policyPath = repoPath(root, io.cwd, v.policy);
+  return { request, deps: { ...gitDeps(root), ...(evaluate ? { evaluate } : {}) } };
+}
+
+async function writeOut(io: CommandIO, file: string, text: string): Promise<void> {
+  const full = path.resolve(io.cwd, file);
+  await mkdir(path.dirname(full), { recursive: true });
+  await writeFile(full, text);
+}
+
+async function writeReports(v: Values, report: Report, io: CommandIO): Promise<void> {
+  if (v.json !== undefined) await writeOut(io, v.json, serializeReport(report));
+  if (v.summary !== undefined) await writeOut(io, v.summary, renderSummary(report));
+  if (v.html !== undefined) await writeOut(io, v.html, renderHtml(report));
+  if (v.sarif !== undefined) await writeOut(io, v.sarif, `${JSON.stringify(renderSarif(report), null, 2)}\n`);
+}
+
+async function run(args: string[], io: CommandIO): Promise<number> {
+  const { values, positionals } = parse(args);
+  const format = choice('format', values.format, ['text', 'markdown', 'json'] as const, 'text');
+  const { request, deps } = await buildRequest(values, positionals, io);
+  const { report, exitCode } = await runGate(request, deps);
+  await writeReports(values, report, io);
+  if (format === 'json') io.stdout(serializeReport(report));
+  else if (format === 'markdown') io.stdout(renderSummary(report));
+  else io.stdout(renderTerminal(report, { color: colorEnabled(io), width: terminalWidth(io) }));
+  return exitCode;
+}
+
+export const checkCommand: Command = {
+  name: 'check',
+  summary: 'judge the designs a change touches against the policy (the gate)',
+  help: HELP,
+  run,
+};
