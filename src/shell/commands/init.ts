@@ -17,6 +17,10 @@ ${DEFAULT_POLICY_PATH} at the repository root (or FILE). An existing file is nev
 
 Next: set the floors for your network, then run "netbrace check".
 
+Examples:
+  netbrace init                          writes .netbrace.yaml at the repository root
+  netbrace init --policy org/base.yaml   a base policy that team policies extend
+
 Exit codes:
   0  written
   2  usage error, or the file exists already
