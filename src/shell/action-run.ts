@@ -6,7 +6,7 @@
 // exactly one setFailed message. No input reaches a shell: git runs through execFile with
 // argument arrays, and commit ids and refs are validated before they get there.
 
-import { execFile, execFileSync } from 'node:child_process';
+import { execFileSync } from 'node:child_process';
 import { lstatSync, readFileSync, readdirSync, statSync, writeFileSync, appendFileSync, realpathSync } from 'node:fs';
 import path from 'node:path';
 import * as core from '@actions/core';
@@ -257,15 +257,6 @@ export function readTarget(env: Env): Target {
 // ---------------------------------------------------------------------------------------------
 // git
 
-export function execGit(args: string[], cwd: string): Promise<GitResult> {
-  return new Promise((resolve) => {
-    execFile('git', args, { cwd, maxBuffer: 64 * 1024 * 1024, env: { ...process.env, GIT_TERMINAL_PROMPT: '0' } }, (error, stdout, stderr) => {
-      const code = error ? (typeof (error as { code?: unknown }).code === 'number' ? ((error as { code: number }).code) : 128) : 0;
-      resolve({ code, stdout: String(stdout), stderr: String(stderr) });
-    });
-  });
-}
-
 async function hasCommit(deps: ActionDeps, cwd: string, commit: string): Promise<boolean> {
   return (await deps.git(['cat-file', '-e', `${commit}^{commit}`], cwd)).code === 0;
 }
@@ -285,7 +276,7 @@ async function ensureCommit(deps: ActionDeps, cwd: string, commit: string, what:
 /** Lines touched at head per repository-relative path, from `git diff -U0`. */
 async function changedLines(deps: ActionDeps, cwd: string, base: string, head: string): Promise<Map<string, Set<number>>> {
   const out = new Map<string, Set<number>>();
-  const diff = await deps.git(['-c', 'core.quotePath=false', 'diff', '-U0', '--no-color', '--no-ext-diff', '-M', '--relative', base, head, '--'], cwd);
+  const diff = await deps.git(['-c', 'core.quotePath=false', 'diff', '-U0', '--no-color', '--no-ext-diff', '-M', '--end-of-options', base, head, '--'], cwd);
   if (diff.code !== 0) return out;
   let current: Set<number> | undefined;
   for (const line of diff.stdout.split('\n')) {
@@ -409,8 +400,16 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     const workspace = realpathSync(workspaceGiven);
     const workdir = resolveInWorkspace(workspace, workspace, inputs.workingDirectory || '.', 'working-directory');
     if (!statSync(workdir).isDirectory()) throw new InputError(`input "working-directory" (${inputs.workingDirectory}) is not a directory`);
-    const prefix = workspaceRelative(workspace, workdir);
-    const pathPrefix = prefix === '.' ? '' : prefix;
+    // The gate works at the repository's top level (report paths are repository paths, as
+    // annotations and SARIF want them); working-directory only says where the checkout is.
+    // A merge job reads reports only and needs no checkout.
+    const repositoryRoot = async (): Promise<string> => {
+      const top = await deps.git(['rev-parse', '--show-toplevel'], workdir);
+      if (top.code !== 0 || top.stdout.trim() === '') {
+        throw new InputError(`input "working-directory" (${inputs.workingDirectory}) is not inside a git repository; run actions/checkout before netbrace`);
+      }
+      return resolveInWorkspace(workspace, workspace, top.stdout.trim(), 'working-directory');
+    };
     const target = readTarget(env);
     const notes: string[] = [];
 
@@ -418,7 +417,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     let gateExit = 0;
     let lines = new Map<string, Set<number>>();
     if (inputs.merge) {
-      const folder = resolveInWorkspace(workspace, workdir, inputs.merge, 'merge');
+      const folder = resolveInWorkspace(workspace, workspace, inputs.merge, 'merge');
       const { reports, names } = readShardReports(folder);
       deps.out.info(`netbrace: merging ${reports.length} shard reports`);
       try {
@@ -443,33 +442,34 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       report = emptyReport(inputs, target);
       notes.push(`Nothing to judge: ${target.reason}.`);
     } else {
+      const root = await repositoryRoot();
       let base = inputs.base || target.base;
       const head = target.head;
       if (inputs.base && !SHA_RE.test(inputs.base)) {
-        const resolved = await deps.git(['rev-parse', '--verify', '--quiet', '--end-of-options', `${inputs.base}^{commit}`], workdir);
+        const resolved = await deps.git(['rev-parse', '--verify', '--quiet', '--end-of-options', `${inputs.base}^{commit}`], root);
         if (resolved.code !== 0) throw new InputError(`input "base" (${inputs.base}) is not a commit in the clone; ${FETCH_DEPTH_HINT}`);
         base = resolved.stdout.trim();
       }
       if (target.newBranch && !inputs.base && head) {
         // A new branch: compare with the parent of the pushed head, when the clone can have it.
-        await deps.git(['fetch', '--no-tags', '--no-recurse-submodules', '--depth=2', 'origin', head], workdir);
-        const parent = await deps.git(['rev-parse', '--verify', '--quiet', `${head}^1`], workdir);
+        await deps.git(['fetch', '--no-tags', '--no-recurse-submodules', '--depth=2', 'origin', head], root);
+        const parent = await deps.git(['rev-parse', '--verify', '--quiet', `${head}^1`], root);
         if (parent.code === 0 && SHA_RE.test(parent.stdout.trim())) base = parent.stdout.trim();
         else notes.push('A new branch without a parent commit: every design is judged against thresholds only.');
       }
       if (head) {
-        const missing = await ensureCommit(deps, workdir, head, 'head');
+        const missing = await ensureCommit(deps, root, head, 'head');
         if (missing) return fail(`netbrace: ${missing}. For pull_request_target, check out the pull request head (ref: \${{ github.event.pull_request.head.sha }}) or ${FETCH_DEPTH_HINT}.`, 2);
       }
       let kind: GateRequestLike['eventKind'] = target.kind === 'full' || !base ? 'schedule' : target.kind;
       let paths: string[] | undefined;
       if (base) {
-        const missing = await ensureCommit(deps, workdir, base, 'base');
+        const missing = await ensureCommit(deps, root, base, 'base');
         if (missing) {
           // Fallback: the API knows which files the pull request changes. If none is a design,
           // the answer is "nothing to judge"; otherwise comparing needs the base: stop and say how.
           const fromApi = target.pr && head ? await prFilesFallback(deps, env, inputs, target) : undefined;
-          if (fromApi && head && designsAmong(workdir, head, inputs.policy, fromApi, pathPrefix) === 0) paths = [];
+          if (fromApi && head && designsAmong(root, head, inputs.policy, fromApi) === 0) paths = [];
           if (paths === undefined) return fail(`netbrace: ${missing}. To fix it, ${FETCH_DEPTH_HINT}.`, 2);
           notes.push('The base commit could not be fetched; the pull request\u2019s file list (REST API) shows that no design file changed.');
           base = undefined;
@@ -491,10 +491,10 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       if (paths && paths.length === 0) {
         report = emptyReport(inputs, target);
       } else {
-        const result = await deps.gate(request, workdir);
+        const result = await deps.gate(request, root);
         report = result.report;
         gateExit = result.exitCode;
-        if (base && head) lines = await changedLines(deps, workdir, base, head);
+        if (base && head) lines = await changedLines(deps, root, base, head);
       }
     }
     if (gateExit === 2) return fail('netbrace: the gate stopped with a configuration error (see the messages above)', 2);
@@ -502,7 +502,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     const shardJob = Boolean(inputs.shard);
     const artifacts: string[] = [];
     const write = (input: string, given: string, text: string): string => {
-      const full = prepareWrite(workspace, workdir, given, input);
+      const full = prepareWrite(workspace, workspace, given, input);
       writeFileSync(full, text);
       const rel = workspaceRelative(workspace, full);
       artifacts.push(rel);
@@ -512,21 +512,21 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     let sarifPath = '';
     let htmlPath = '';
     if (!shardJob) {
-      if (inputs.sarif) sarifPath = write('sarif', inputs.sarif, `${JSON.stringify(renderSarif(report, { pathPrefix, category: inputs.sarifCategory }), null, 2)}\n`);
+      if (inputs.sarif) sarifPath = write('sarif', inputs.sarif, `${JSON.stringify(renderSarif(report, { category: inputs.sarifCategory }), null, 2)}\n`);
       if (inputs.html && deps.renderHtml) htmlPath = write('html', inputs.html, deps.renderHtml(report));
     }
 
     // Annotations (the merge job emits those of every shard; a shard job leaves them to it).
     if (!shardJob) {
       const elsewhere = sarifPath ? `the job summary and ${sarifPath}` : 'the job summary and the JSON report';
-      const plan = planAnnotations(report, { pathPrefix, changedLines: lines, elsewhere });
+      const plan = planAnnotations(report, { changedLines: lines, elsewhere });
       for (const a of plan.annotations) deps.out.annotate(a);
     }
 
     // The comment, then the summary (which mentions what happened to the comment).
     let comment: RunOutcome['comment'] = 'not-applicable';
     const url = runUrl(env);
-    const viewOptions = { pathPrefix, ...(url ? { runUrl: url } : {}), artifacts, ...(inputs.title ? { title: inputs.title } : {}) };
+    const viewOptions = { ...(url ? { runUrl: url } : {}), artifacts, ...(inputs.title ? { title: inputs.title } : {}) };
     if (!shardJob && !target.pr && inputs.pullRequest) {
       target.pr = await trustedPullRequest(deps, env, inputs, target, inputs.pullRequest);
     }
@@ -601,13 +601,10 @@ async function trustedPullRequest(deps: ActionDeps, env: Env, inputs: ActionInpu
  * policy at head. Trusted only when the pull request leaves the policy files alone (then the
  * head's policy is the base's); a changed policy counts as "there may be designs".
  */
-function designsAmong(workdir: string, head: string, policyPath: string, changed: string[], pathPrefix: string): number {
-  const local = changed
-    .map((p) => (pathPrefix ? (p.startsWith(`${pathPrefix}/`) ? p.slice(pathPrefix.length + 1) : undefined) : p))
-    .filter((p): p is string => p !== undefined);
+function designsAmong(root: string, head: string, policyPath: string, changed: string[]): number {
   const read = (p: string): string | null => {
     try {
-      return execFileSync('git', ['show', `${head}:./${p}`], { cwd: workdir, encoding: 'utf8', maxBuffer: 16 * 1024 * 1024, stdio: ['ignore', 'pipe', 'ignore'] });
+      return execFileSync('git', ['show', '--no-textconv', '--end-of-options', `${head}:${p}`], { cwd: root, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024, stdio: ['ignore', 'pipe', 'ignore'] });
     } catch {
       return null;
     }
@@ -616,8 +613,8 @@ function designsAmong(workdir: string, head: string, policyPath: string, changed
   const text = read(entry);
   const policy = text === null ? builtinPolicy() : loadPolicy(entry, read);
   const policyFiles = new Set([entry, ...policy.files]);
-  if (local.some((p) => policyFiles.has(p))) return Number.POSITIVE_INFINITY;
-  return local.filter((p) => isDesignPath(policy, p)).length;
+  if (changed.some((p) => policyFiles.has(p))) return Number.POSITIVE_INFINITY;
+  return changed.filter((p) => isDesignPath(policy, p)).length;
 }
 
 async function prFilesFallback(deps: ActionDeps, env: Env, inputs: ActionInputs, target: Target): Promise<string[] | undefined> {

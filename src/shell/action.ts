@@ -1,5 +1,16 @@
-// GitHub Action entry. The action issue replaces this with the real run; until then it
-// refuses clearly instead of pretending to judge anything.
+// GitHub Action entry: the real runner, the real gate. Everything else is in action-run.ts,
+// whose run() turns every error into one setFailed; the catch here is the last resort.
 import * as core from '@actions/core';
+import { renderHtml } from '../report/html.js';
+import { mergeReports, runGate } from '../run-gate.js';
+import { coreOutput, defaultGithub, run } from './action-run.js';
+import { gitDeps, runGit } from './git.js';
 
-core.setFailed('netbrace: the GitHub Action entry is not wired yet in this build');
+run(process.env, {
+  gate: (request, root) => runGate(request, gitDeps(root)),
+  merge: mergeReports,
+  git: (args, cwd) => runGit(cwd, args),
+  github: defaultGithub,
+  renderHtml,
+  out: coreOutput(process.env),
+}).catch((error: unknown) => core.setFailed(`netbrace: internal error: ${error instanceof Error ? error.message : String(error)}`));

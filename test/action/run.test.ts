@@ -99,6 +99,7 @@ function deps(report: Report | ((r: GateRequestLike) => Report), git: (args: str
     merge: mergeReports,
     git: async (args) => {
       rec.gitCalls.push(args);
+      if (args[0] === 'rev-parse' && args[1] === '--show-toplevel') return { code: 0, stdout: `${path.join(dir, 'ws')}\n`, stderr: '' };
       return git(args);
     },
     github: (o) => createClient(o),
