@@ -13,9 +13,6 @@ import { parseArgs } from 'node:util';
 import type { Command, CommandIO } from '../io.js';
 import { UsageError } from '../../errors.js';
 import type { Report } from '../../report/report.js';
-import { renderHtml } from '../../report/html.js';
-import { renderSummary } from '../../report/markdown.js';
-import { renderSarif } from '../../report/sarif.js';
 
 export interface DemoChange {
   /** Branch and file stem: "1-retire-east-chord". */
@@ -154,10 +151,11 @@ export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ ou
         html: path.join(out, `${change.id}.html`),
         text: path.join(out, `${change.id}.txt`),
       };
-      const args = ['check', '--base', 'main', '--head', branch, '--json', files.json];
+      const args = ['check', '--base', 'main', '--head', branch, '--json', files.json, '--summary', files.markdown, '--sarif', files.sarif, '--html', files.html];
       io.stdout(`\n\u2500\u2500 Change ${i + 1} of ${DEMO_CHANGES.length}: ${change.title}\n`);
       io.stdout(`   ${branch}: ${git('log', '-1', '--format=%h')} \u00b7 expected: ${EXPECT_WORD[change.expect]}\n`);
-      io.stdout(`$ netbrace ${args.join(' ')}\n\n`);
+      const shown = args.map((a) => (a.startsWith(out) ? path.relative(io.cwd, a) || a : a));
+      io.stdout(`$ netbrace ${shown.join(' ')}\n\n`);
       const printed: string[] = [];
       const childIO: CommandIO = {
         ...io,
@@ -171,13 +169,7 @@ export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ ou
       writeFileSync(files.text, printed.join('').replace(/\u001b\[[0-9;]*m/g, ''));
       let verdict: DemoOutcome['verdict'] = 'error';
       let warnings = 0;
-      if (existsSync(files.json)) {
-        const report = JSON.parse(readFileSync(files.json, 'utf8')) as Report;
-        ({ verdict, warnings } = judge(report));
-        writeFileSync(files.markdown, renderSummary(report));
-        writeFileSync(files.sarif, `${JSON.stringify(renderSarif(report), null, 2)}\n`);
-        writeFileSync(files.html, renderHtml(report));
-      }
+      if (existsSync(files.json)) ({ verdict, warnings } = judge(JSON.parse(readFileSync(files.json, 'utf8')) as Report));
       git('checkout', '-q', 'main');
       outcomes.push({ change, exitCode, verdict, warnings, files, asExpected: exitCode !== 2 && matches(change.expect, verdict, warnings) });
     }

@@ -1,0 +1,140 @@
+// `netbrace demo` end to end: the scratch repository, `netbrace check` on each of the three
+// proposed changes through the real command line, and the reports it writes. The scenario's
+// structure (which links are bridges, which sites cut nodes, before and after each change)
+// is checked against networkx 2.8.8 (Debian python3-networkx) via demo-reference.json, made by
+// test/shell/demo-reference.py (command recorded in the file).
+import { execFileSync } from 'node:child_process';
+import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { main } from '../../src/shell/cli.js';
+import { DEMO_CHANGES } from '../../src/shell/commands/demo.js';
+import type { Report } from '../../src/report/report.js';
+import { CAUTION } from '../../src/report/report.js';
+import { repoRoot } from '../topology/helpers.js';
+import { recordIO } from './helpers-io.js';
+
+interface Facts {
+  nodes: number;
+  links: number;
+  bridges: string[];
+  cut_nodes: string[];
+}
+const ref = JSON.parse(readFileSync(path.join(repoRoot, 'test', 'shell', 'demo-reference.json'), 'utf8')) as {
+  library: string;
+  base: Facts;
+  changes: Record<string, Facts>;
+};
+
+describe('netbrace demo', () => {
+  let out: string;
+  let code: number;
+  let stdout: string;
+  const reports = new Map<string, Report>();
+
+  beforeAll(async () => {
+    out = mkdtempSync(path.join(tmpdir(), 'nb-demo-test-'));
+    const io = recordIO(repoRoot, { PATH: process.env.PATH, CI: 'true' });
+    code = await main(['demo', '--out', out], io);
+    stdout = io.out.join('');
+    for (const c of DEMO_CHANGES) {
+      const file = path.join(out, `${c.id}.report.json`);
+      if (existsSync(file)) reports.set(c.id, JSON.parse(readFileSync(file, 'utf8')) as Report);
+    }
+  }, 240_000);
+
+  afterAll(() => rmSync(out, { recursive: true, force: true }));
+
+  it('judges the three changes as the scenario intends, and exits 0', () => {
+    expect(code).toBe(0);
+    const verdicts = DEMO_CHANGES.map((c) => {
+      const r = reports.get(c.id)!;
+      const warns = r.files.flatMap((f) => f.findings).filter((x) => x.severity === 'warn').length;
+      return [c.id, r.verdict, warns > 0];
+    });
+    expect(verdicts).toEqual([
+      ['1-retire-east-chord', 'fail', true],
+      ['2-close-west-ring', 'pass', false],
+      ['3-saltmarrow-spur', 'pass', true],
+    ]);
+    expect(stdout).toMatch(/\u2713 1\. 1-retire-east-chord\s+FAIL/);
+    expect(stdout).toMatch(/\u2713 2\. 2-close-west-ring\s+PASS\s/);
+    expect(stdout).toMatch(/\u2713 3\. 3-saltmarrow-spur\s+PASS with 1 warning/);
+    expect(stdout).toContain(`Reports written to ${out}`);
+  });
+
+  it(`has the structure the story claims, as networkx computes it (${ref.library})`, () => {
+    for (const c of DEMO_CHANGES) {
+      const f = reports.get(c.id)!.files[0];
+      const want = ref.changes[c.id];
+      expect(f.head!.structure.nodes, c.id).toBe(want.nodes);
+      expect(f.head!.structure.links, c.id).toBe(want.links);
+      expect(f.head!.structure.bridges.map((e) => e.id).sort(), c.id).toEqual(want.bridges);
+      expect(f.head!.structure.cutNodes.map((e) => e.id).sort(), c.id).toEqual(want.cut_nodes);
+      expect(f.base!.structure.bridges.map((e) => e.id).sort(), c.id).toEqual(ref.base.bridges);
+    }
+  });
+
+  it('change 1 fails, names the new bridges with their lines and the weakest removal sequence', () => {
+    const f = reports.get('1-retire-east-chord')!.files[0];
+    expect(f.path).toBe('designs/lunmere-backbone.net.yaml');
+    const bridges = f.findings.filter((x) => x.rule === 'new-bridge').flatMap((x) => x.elements);
+    expect(bridges.map((e) => e.id).sort()).toEqual(['fenwhistle-orrowin', 'kaskeld-ibberlin', 'tarnquist-fenwhistle', 'tessaway-kaskeld']);
+    const head = headText('1-retire-east-chord').split('\n');
+    for (const e of bridges) expect(head[e.line - 1], e.id).toBe(`  - id: ${e.id}`);
+    expect(f.findings.some((x) => x.severity === 'fail')).toBe(true);
+    expect(f.head!.envelopes.some((e) => e.worstCase && e.worstCase.elements.length > 0)).toBe(true);
+    // the terminal report printed for change 1
+    const one = stdout.slice(stdout.indexOf('Change 1 of 3'), stdout.indexOf('Change 2 of 3'));
+    expect(one).toContain('$ netbrace check --base main --head change/1-retire-east-chord --json');
+    expect(one).toMatch(/\u2717 designs\/lunmere-backbone\.net\.yaml \u2014 FAIL/);
+    expect(one).toMatch(/4 new bridges \(links whose loss alone splits the design\)/);
+    expect(one).toContain('Weakest removal sequences');
+    expect(one.replace(/\s+/g, ' ')).toContain(`Caution: ${CAUTION}`);
+  });
+
+  it('change 2 passes with a positive delta and no bridge left', () => {
+    const f = reports.get('2-close-west-ring')!.files[0];
+    expect(f.status).toBe('pass');
+    const deltas = f.requirements.filter((r) => r.id !== 'no-new-spof' && r.delta !== null).map((r) => r.delta!);
+    expect(deltas.length).toBeGreaterThan(0);
+    expect(deltas.some((d) => d > 0)).toBe(true);
+    expect(f.head!.structure.bridges).toEqual([]);
+  });
+
+  it('change 3 passes with a warning for the new cut node Gantrevel', () => {
+    const f = reports.get('3-saltmarrow-spur')!.files[0];
+    const warns = f.findings.filter((x) => x.severity === 'warn');
+    expect(warns.map((x) => [x.rule, x.elements.map((e) => e.id)])).toEqual([['new-cut-node', ['gantrevel']]]);
+    expect(f.findings.filter((x) => x.rule === 'new-bridge')).toEqual([]);
+  });
+
+  it('writes the JSON report, summary markdown, SARIF, HTML and terminal text for each change', () => {
+    for (const c of DEMO_CHANGES) {
+      const md = readFileSync(path.join(out, `${c.id}.summary.md`), 'utf8');
+      expect(md.length).toBeGreaterThan(200);
+      const sarif = JSON.parse(readFileSync(path.join(out, `${c.id}.sarif`), 'utf8')) as { version: string; runs: unknown[] };
+      expect(sarif.version).toBe('2.1.0');
+      const html = readFileSync(path.join(out, `${c.id}.html`), 'utf8');
+      expect(html).toContain('<svg');
+      expect(html).not.toMatch(/<script/i);
+      const text = readFileSync(path.join(out, `${c.id}.txt`), 'utf8');
+      expect(text).toContain('Verdict:');
+      expect(text).not.toMatch(/\u001b\[/);
+    }
+  });
+});
+
+/** The head design of a change: the base with the change's patch applied by git. */
+function headText(change: string): string {
+  const dir = mkdtempSync(path.join(tmpdir(), 'nb-demo-head-'));
+  try {
+    mkdirSync(path.join(dir, 'designs'));
+    copyFileSync(path.join(repoRoot, 'fixtures', 'demo', 'base', 'designs', 'lunmere-backbone.net.yaml'), path.join(dir, 'designs', 'lunmere-backbone.net.yaml'));
+    execFileSync('git', ['apply', path.join(repoRoot, 'fixtures', 'demo', 'changes', `${change}.patch`)], { cwd: dir });
+    return readFileSync(path.join(dir, 'designs', 'lunmere-backbone.net.yaml'), 'utf8');
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
