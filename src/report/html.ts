@@ -21,6 +21,7 @@ import {
   STATUS_WORD,
   bySeverity,
   groupFindings,
+  shortRevision,
   weakestSequences,
   type GroupedFinding,
 } from './labels.js';
@@ -135,12 +136,12 @@ function masthead(r: Report): string {
       ? `Gate failed: ${failed} of ${r.files.length} design${r.files.length === 1 ? '' : 's'} failing`
       : `Gate passed${r.files.some(fileWarns) ? ' with warnings' : ''}`;
   const meta: [string, string][] = [];
-  if (r.base || r.head) meta.push(['Compared', `base <code>${esc(r.base ?? '\u2013')}</code> \u2192 head <code>${esc(r.head ?? '\u2013')}</code>`]);
+  if (r.base || r.head) meta.push(['Compared', `base <code title="${esc(r.base ?? '')}">${esc(shortRevision(r.base))}</code> \u2192 head <code title="${esc(r.head ?? '')}">${esc(shortRevision(r.head))}</code>`]);
   meta.push([
     'Policy',
     r.policy.source === 'builtin'
       ? 'no policy file: the built-in defaults for communication backbones were applied'
-      : `<code>${esc(r.policy.path ?? 'policy file')}</code>${r.policy.revision ? ` as of <code>${esc(r.policy.revision)}</code>` : ''}` +
+      : `<code>${esc(r.policy.path ?? 'policy file')}</code>${r.policy.revision ? ` as of <code>${esc(shortRevision(r.policy.revision))}</code>` : ''}` +
         (r.policy.note ? `. ${esc(r.policy.note)}` : r.policy.changed ? ' (this change edits the policy; the proposed policy was not applied)' : ''),
   ]);
   if (r.scope === 'all') meta.push(['Scope', 'every design in the repository, judged against thresholds only']);

@@ -216,3 +216,9 @@ export function groupFindings(findings: readonly Finding[]): GroupedFinding[] {
 }
 
 
+
+/** A revision for display: a full commit id shortened to 12 hex digits, anything else as given. */
+export function shortRevision(rev: string | undefined): string {
+  if (rev === undefined) return '\u2013';
+  return /^[0-9a-f]{40}([0-9a-f]{24})?$/.test(rev) ? rev.slice(0, 12) : rev;
+}

@@ -21,6 +21,7 @@ import {
   STATUS_WORD,
   bySeverity,
   groupFindings,
+  shortRevision,
   weakestSequences,
   type GroupedFinding,
 } from './labels.js';
@@ -55,7 +56,7 @@ export function renderTerminal(input: Report, options: TerminalOptions): string 
 
 function headerLine(r: Report, c: Colors): string {
   const parts = [`netbrace ${r.tool.version}`];
-  if (r.base || r.head) parts.push(`base ${r.base ?? '\u2013'} \u2192 head ${r.head ?? '\u2013'}`);
+  if (r.base || r.head) parts.push(`base ${shortRevision(r.base)} \u2192 head ${shortRevision(r.head)}`);
   parts.push(`seed ${r.seed}`);
   if (r.shard) parts.push(`shard ${r.shard.index}/${r.shard.total}`);
   return c.bold(parts.join(' \u00b7 '));
@@ -64,7 +65,7 @@ function headerLine(r: Report, c: Colors): string {
 function policyNotes(r: Report): string[] {
   const notes: string[] = [];
   if (r.policy.source === 'builtin') notes.push('policy: none found \u2014 the built-in defaults for communication backbones were applied');
-  else notes.push(`policy: ${r.policy.path ?? '(file)'}${r.policy.revision ? ` as of ${r.policy.revision}` : ''}`);
+  else notes.push(`policy: ${r.policy.path ?? '(file)'}${r.policy.revision ? ` as of ${shortRevision(r.policy.revision)}` : ''}`);
   if (r.policy.note) notes.push(`policy: ${r.policy.note}`);
   else if (r.policy.changed) notes.push('policy: this change edits the policy; the proposed policy was not applied to judge it');
   if (r.scope === 'all') notes.push('scope: every design in the repository, judged against thresholds only');

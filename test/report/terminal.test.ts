@@ -130,4 +130,11 @@ describe('renderTerminal', () => {
     expect(lines[i + 3].length).toBeLessThanOrEqual(100);
     expect(lines[i + 4]).toBe('');
   });
+
+  it('shortens full commit ids in the header', () => {
+    const r = demoReport();
+    r.base = '3e5b5ee6078607f2ca16d1ad923901916b181f57';
+    r.head = 'feature/x';
+    expect(renderTerminal(r, { color: false, width: 100 }).split('\n')[0]).toBe('netbrace 0.1.0 \u00b7 base 3e5b5ee60786 \u2192 head feature/x \u00b7 seed 7');
+  });
 });
