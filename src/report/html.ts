@@ -310,7 +310,7 @@ function findingItem(x: GroupedFinding): string {
       ? ` <span class="line">(base ${esc(formatValue(x.base))}, head ${esc(formatValue(x.head))}${x.delta !== undefined && x.delta !== null ? `, \u0394 ${esc(`${formatDelta(x.delta)} ${formatError(x.se)}`.trim())}` : ''})</span>`
       : '';
   const named = x.elements.length === 1 && x.message.includes(x.elements[0].id);
-  const els = x.elements.length && !named ? `<div>${elementList(x.elements)}</div>` : '';
+  const els = x.elements.length && !named && !x.grouped ? `<div>${elementList(x.elements)}</div>` : '';
   return `<li class="${x.severity}" data-rule="${esc(x.rule)}"><span class="chip ${x.severity}">${esc(x.severity)}</span> <span class="rule">${esc(x.rule)}</span>${where}<div>${esc(x.message)}${values}</div>${els}</li>`;
 }
 
