@@ -154,6 +154,58 @@ describe('gate decisions on fixture pairs', () => {
   });
 });
 
+describe('envelope floors read the engine\'s envelope', () => {
+  const policy = (min: number) =>
+    [
+      'challenges:',
+      '  failures:',
+      '    remove: nodes',
+      '    until: 0.5',
+      '    points: 4',
+      '    realizations: 100',
+      'requirements:',
+      '  - kind: r-threshold',
+      '    challenge: failures',
+      '    at: 0.2',
+      '    statistic: quantile',
+      '    q: 0.1',
+      `    min: ${min}`,
+      '  - kind: spread-ceiling',
+      '    challenge: failures',
+      '    max: 0.0001',
+      '',
+    ].join('\n');
+  const run = (min: number) =>
+    runGate(
+      { head: 'head', policySource: 'head', mode: 'enforce', paths: [FILE] },
+      memoryDeps({ base: {}, head: { '.netbrace.yaml': policy(min), [FILE]: gateFixture('removed-node/base.net.yaml') } }),
+    );
+
+  it('a quantile threshold off the regular grid is put on it, and judged on the envelope\'s value', async () => {
+    const { report } = await run(0.99);
+    const f = fileOf(report);
+    const env = f.head!.envelopes[0];
+    const j = env.x.indexOf(0.2);
+    expect(j).toBeGreaterThan(0); // 0, 1/6, 1/3, 1/2 plus the threshold's 0.2
+    const [q, spread] = f.requirements;
+    expect(q.head).toBe(env.quantiles['0.1'].value[j]);
+    expect(q.status).toBe('missed');
+    expect(spread.head).toBe(env.spread);
+    expect(spread.status).toBe(env.spread > 0.0001 ? 'missed' : 'met');
+    expect(f.findings.find((x) => x.rule === 'r-threshold')!.elements.length).toBe(Math.round(0.2 * 11));
+  });
+
+  it('a floor met by the estimate but not by its confidence interval is uncertain, not met', async () => {
+    const first = fileOf((await run(0.99)).report);
+    const env = first.head!.envelopes[0];
+    const j = env.x.indexOf(0.2);
+    const band = env.quantiles['0.1'];
+    const f = fileOf((await run(band.value[j])).report);
+    expect(f.requirements[0].status).toBe(band.lo[j] < band.value[j] ? 'uncertain' : 'met');
+    expect(band.lo[j]).toBeLessThan(band.value[j]); // this design's band is wide enough to show it
+  });
+});
+
 describe('a threshold on a known attack curve (karate club, static degree attack)', () => {
   // test/reference/envelope.json, graph "karate": largest_component after the static
   // highest-degree attack, computed with networkx 2.8.8 (ties to the lowest index).
@@ -205,5 +257,45 @@ describe('a threshold on a known attack curve (karate club, static degree attack
     const finding = f.findings.find((x) => x.rule === 'r-threshold')!;
     expect(finding.elements.map((e) => e.id)).toEqual(sequence.slice(0, 4).map(String));
     expect(finding.line).toBe(lineOf(design, `id: "${sequence[0]}"`));
+  });
+
+  it('the worst-case and N−1 floors see the brute-force worst removals of the reference', async () => {
+    // test/reference/envelope.json, karate "worst": exhaustive search with networkx 2.8.8;
+    // also SCIENCE.md §4 (k=1: 27/34 removing node 0; k=2: 24/34 removing nodes 0 and 1).
+    const worst = karate.worst.largest_component;
+    const strict = [
+      'r-value:',
+      '  metrics:',
+      '    largest_component: 1',
+      'challenges:',
+      '  failures:',
+      '    remove: nodes',
+      '    until: 0.2',
+      '    points: 3',
+      '    realizations: 20',
+      '    worst-case: 2',
+      'requirements:',
+      '  - kind: r-threshold',
+      '    challenge: failures',
+      '    statistic: worst-case',
+      '    removals: 2',
+      '    min: 0.72',
+      '  - kind: n-1',
+      '    element: node',
+      '    min: 0.8',
+      '',
+    ].join('\n');
+    const repo: MemoryRepo = { base: {}, head: { '.netbrace.yaml': strict, 'karate.net.yaml': design } };
+    const { report } = await runGate({ head: 'head', policySource: 'head', mode: 'enforce', paths: ['karate.net.yaml'] }, memoryDeps(repo));
+    const f = fileOf(report, 'karate.net.yaml');
+    const [wc, n1] = f.requirements;
+    expect([wc.id, wc.status]).toEqual(['r-threshold:failures:worst-case\u00d72', 'missed']);
+    expect(wc.head).toBeCloseTo(worst['2'].value, 12);
+    expect([n1.id, n1.status]).toEqual(['n-1:node', 'missed']);
+    expect(n1.head).toBeCloseTo(worst['1'].value, 12);
+    const byReq = (id: string) => f.findings.find((x) => x.requirement === id)!;
+    expect(byReq(wc.id).elements.map((e) => e.id).sort()).toEqual(worst['2'].set.map(String).sort());
+    expect(byReq(n1.id).elements.map((e) => e.id)).toEqual(worst['1'].set.map(String));
+    expect(byReq(n1.id).line).toBe(lineOf(design, 'id: "0"'));
   });
 });

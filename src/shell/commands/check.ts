@@ -14,7 +14,7 @@ import { renderSarif } from '../../report/sarif.js';
 import { renderTerminal } from '../../report/terminal.js';
 import { runGate, type GateDeps, type GateRequest } from '../../run-gate.js';
 import { colorEnabled, terminalWidth } from '../color.js';
-import { gitDeps, mergeBase, repoRoot, revParse } from '../git.js';
+import { ensureCommit, gitDeps, mergeBase, repoRoot, revParse } from '../git.js';
 import type { Command, CommandIO } from '../io.js';
 
 const HELP = `Usage: netbrace check [options] [PATH...]
@@ -119,6 +119,8 @@ function repoPath(root: string, cwd: string, p: string): string {
 }
 
 async function revision(root: string, ref: string): Promise<string> {
+  // A full commit id missing from a shallow clone is fetched (that one commit only).
+  if (/^[0-9a-f]{40}$/.test(ref) && !(await revParse(root, ref))) await ensureCommit(root, ref);
   const sha = await revParse(root, ref);
   if (!sha) throw new UsageError(`"${ref}" is not a commit in this repository`, 'check the ref (git fetch it first if it is remote)');
   return sha;
@@ -153,7 +155,7 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
   if (threads !== undefined) request.threads = threads;
   const shard = shardOf(v.shard);
   if (shard) request.shard = shard;
-  const evaluate: GateDeps['evaluate'] = threads !== undefined && threads > 1 ? (g, spec) => evaluateDesignParallel(g, spec, threads) : undefined;
+  const evaluate: GateDeps['evaluate'] = threads !== undefined && threads > 1 ? (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) : undefined;
 
   const root = await repoRoot(io.cwd);
   if (root === null) {
