@@ -154,7 +154,11 @@ export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ ou
       const args = ['check', '--base', 'main', '--head', branch, '--json', files.json, '--summary', files.markdown, '--sarif', files.sarif, '--html', files.html];
       io.stdout(`\n\u2500\u2500 Change ${i + 1} of ${DEMO_CHANGES.length}: ${change.title}\n`);
       io.stdout(`   ${branch}: ${git('log', '-1', '--format=%h')} \u00b7 expected: ${EXPECT_WORD[change.expect]}\n`);
-      const shown = args.map((a) => (a.startsWith(out) ? path.relative(io.cwd, a) || a : a));
+      const rel = (a: string) => {
+        const r = path.relative(io.cwd, a);
+        return r && !r.startsWith('..') && !path.isAbsolute(r) ? r : a;
+      };
+      const shown = args.map((a) => (a.startsWith(out) ? rel(a) : a));
       io.stdout(`$ netbrace ${shown.join(' ')}\n\n`);
       const printed: string[] = [];
       const childIO: CommandIO = {
