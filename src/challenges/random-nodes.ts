@@ -5,7 +5,7 @@
 
 import type { CompactGraph } from '../graph/compact.js';
 import type { ElementKind } from '../envelope/types.js';
-import { hashIds, randomOrder, seedWord } from '../envelope/rng.js';
+import { createOrderWorkspace, hashIds, randomOrder, seedWord } from '../envelope/rng.js';
 import type { BandChallenge, BandPlan, ResolvedParams } from './types.js';
 import { makeGrid } from './grid.js';
 import { countOnes, eligibleUnits, stepsAt, unitCount, unitKeys } from './units.js';
@@ -21,7 +21,7 @@ export function randomOrderPlan(g: CompactGraph, kind: ElementKind, params: Reso
   const idHash = hashIds(unitKeys(g, kind));
   const seedW = seedWord(params.seed);
   const full = new Int32Array(count);
-  const scratch = new Float64Array(count);
+  const ws = createOrderWorkspace(count);
   return {
     kind,
     xUnit: 'fraction',
@@ -29,7 +29,7 @@ export function randomOrderPlan(g: CompactGraph, kind: ElementKind, params: Reso
     realizations: params.realizations,
     maxUnits,
     realize(r, order, steps) {
-      randomOrder(idHash, eligible, seedW, r, full, scratch);
+      randomOrder(idHash, eligible, seedW, r, full, ws);
       order.set(full.subarray(0, maxUnits));
       steps.set(stepTable);
       return maxUnits;

@@ -52,15 +52,28 @@ export function elementKey(seedW: number, realization: number, idHash: number): 
   return mix32((idHash ^ r) + Math.imul(r, 0x27d4eb2d) + 0x165667b1);
 }
 
-/** Indices are packed below the 32-bit key: 2^21 > the 2,000,000-element design limit. */
-const INDEX_BITS = 21;
-const INDEX_SPAN = 2 ** INDEX_BITS;
+/** Scratch space of randomOrder for up to `capacity` elements. */
+export interface OrderWorkspace {
+  keys: Uint32Array;
+  keys2: Uint32Array;
+  idx2: Int32Array;
+  counts: Uint32Array;
+}
+
+export function createOrderWorkspace(capacity: number): OrderWorkspace {
+  return {
+    keys: new Uint32Array(capacity),
+    keys2: new Uint32Array(capacity),
+    idx2: new Int32Array(capacity),
+    counts: new Uint32Array(2048),
+  };
+}
 
 /**
  * The random removal order of one realization: the eligible elements (eligible[i] === 1, or all
- * when `eligible` is null) in ascending key order; equal keys (a 2^-32 event) go to the lower
- * index. Writes into `out` and returns how many elements it holds. `scratch` must have room for
- * every element.
+ * when `eligible` is null) in ascending key order; equal keys (a 2^-32 event) keep file order.
+ * Writes into `out` and returns how many elements it holds. A stable LSD radix sort (11, 11 and
+ * 10 bits) keeps the cost linear: O(n) per realization instead of O(n log n).
  */
 export function randomOrder(
   idHash: Uint32Array,
@@ -68,18 +81,39 @@ export function randomOrder(
   seedW: number,
   realization: number,
   out: Int32Array,
-  scratch: Float64Array = new Float64Array(idHash.length),
+  ws: OrderWorkspace = createOrderWorkspace(idHash.length),
 ): number {
   const n = idHash.length;
-  if (n > INDEX_SPAN) throw new RangeError(`at most ${INDEX_SPAN} elements can be ordered, got ${n}`);
+  let { keys, keys2, idx2 } = ws;
+  const counts = ws.counts;
+  let idx = out;
   let count = 0;
   for (let i = 0; i < n; i++) {
     if (eligible !== null && eligible[i] === 0) continue;
-    scratch[count++] = elementKey(seedW, realization, idHash[i]) * INDEX_SPAN + i;
+    keys[count] = elementKey(seedW, realization, idHash[i]);
+    idx[count++] = i;
   }
-  // Keys < 2^53 are exact doubles, so the typed-array numeric sort orders (key, index) exactly.
-  const keys = scratch.subarray(0, count).sort();
-  for (let j = 0; j < count; j++) out[j] = keys[j] % INDEX_SPAN;
+  for (let shift = 0; shift < 32; shift += 11) {
+    const bits = shift === 22 ? 10 : 11;
+    const mask = (1 << bits) - 1;
+    counts.fill(0, 0, mask + 1);
+    for (let j = 0; j < count; j++) counts[(keys[j] >>> shift) & mask]++;
+    let sum = 0;
+    for (let b = 0; b <= mask; b++) {
+      const c = counts[b];
+      counts[b] = sum;
+      sum += c;
+    }
+    for (let j = 0; j < count; j++) {
+      const pos = counts[(keys[j] >>> shift) & mask]++;
+      keys2[pos] = keys[j];
+      idx2[pos] = idx[j];
+    }
+    [keys, keys2] = [keys2, keys];
+    [idx, idx2] = [idx2, idx];
+  }
+  // Three passes: the sorted indices sit in the scratch array; copy them home.
+  if (idx !== out) out.set(idx.subarray(0, count));
   return count;
 }
 

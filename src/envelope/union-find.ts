@@ -65,40 +65,34 @@ export function connectivityCurve(
     }
   }
 
-  let lcc = 0;
-  let pairs = 0;
-  const { uf } = ws;
-  const join = (a: number, b: number): void => {
-    const ra = uf.find(a);
-    const rb = uf.find(b);
-    if (ra === rb) return;
-    pairs += uf.size[ra] * uf.size[rb];
-    const root = uf.union(ra, rb);
-    if (uf.size[root] > lcc) lcc = uf.size[root];
-  };
+  const { parent, size } = ws.uf;
+  const st: JoinState = { lcc: 0, pairs: 0 };
+  const { offsets, neighbors, linkOf, linkSource, linkTarget } = g;
   const addNode = (v: number): void => {
     nodeOn[v] = 1;
-    if (lcc < 1) lcc = 1;
-    for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
-      const w = g.neighbors[p];
-      if (nodeOn[w] === 1 && linkOn[g.linkOf[p]] === 1) join(v, w);
+    if (st.lcc < 1) st.lcc = 1;
+    for (let p = offsets[v]; p < offsets[v + 1]; p++) {
+      const w = neighbors[p];
+      if (nodeOn[w] === 1 && linkOn[linkOf[p]] === 1) join(st, parent, size, v, w);
     }
   };
   const addLink = (e: number): void => {
     linkOn[e] = 1;
-    const a = g.linkSource[e];
-    const b = g.linkTarget[e];
-    if (nodeOn[a] === 1 && nodeOn[b] === 1) join(a, b);
+    const a = linkSource[e];
+    const b = linkTarget[e];
+    if (nodeOn[a] === 1 && nodeOn[b] === 1) join(st, parent, size, a, b);
   };
 
   // The survivors at k = count.
-  uf.reset(g.n);
-  for (let v = 0; v < g.n; v++) if (nodeOn[v] === 1) lcc = 1;
+  ws.uf.reset(g.n);
+  for (let v = 0; v < g.n; v++) if (nodeOn[v] === 1) st.lcc = 1;
   for (let e = 0; e < g.m; e++) {
-    if (linkOn[e] === 1 && nodeOn[g.linkSource[e]] === 1 && nodeOn[g.linkTarget[e]] === 1) join(g.linkSource[e], g.linkTarget[e]);
+    const a = linkSource[e];
+    const b = linkTarget[e];
+    if (linkOn[e] === 1 && nodeOn[a] === 1 && nodeOn[b] === 1) join(st, parent, size, a, b);
   }
-  out.lcc[count] = lcc;
-  out.pairs[count] = pairs;
+  out.lcc[count] = st.lcc;
+  out.pairs[count] = st.pairs;
 
   // Add back in reverse order.
   for (let i = count - 1; i >= 0; i--) {
@@ -111,8 +105,40 @@ export function connectivityCurve(
         if (firstGroup[e] === i) addLink(e);
       }
     }
-    out.lcc[i] = lcc;
-    out.pairs[i] = pairs;
+    out.lcc[i] = st.lcc;
+    out.pairs[i] = st.pairs;
   }
   return out;
+}
+
+interface JoinState {
+  lcc: number;
+  pairs: number;
+}
+
+/** Union by size with path halving (the structure of metrics/kernels/union-find.ts, inlined for the hot loop). */
+function join(st: JoinState, parent: Int32Array, size: Int32Array, a: number, b: number): void {
+  while (parent[a] !== a) {
+    const up = parent[parent[a]];
+    parent[a] = up;
+    a = up;
+  }
+  while (parent[b] !== b) {
+    const up = parent[parent[b]];
+    parent[b] = up;
+    b = up;
+  }
+  if (a === b) return;
+  const sa = size[a];
+  const sb = size[b];
+  const s = sa + sb;
+  st.pairs += sa * sb;
+  if (sa < sb) {
+    parent[a] = b;
+    size[b] = s;
+  } else {
+    parent[b] = a;
+    size[a] = s;
+  }
+  if (s > st.lcc) st.lcc = s;
 }
