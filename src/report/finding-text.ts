@@ -4,8 +4,13 @@
 import { formatDelta, formatError, formatValue } from './labels.js';
 import type { Finding } from './report.js';
 
-/** " (base 0.742, head 0.680, Δ −0.062 ± 0.004)", or "" when the finding has no numbers. */
+/**
+ * " (base 0.742, head 0.680, Δ −0.062 ± 0.004)", or "" when the finding has no numbers or its
+ * message already states them (the gate's messages often do).
+ */
 export function findingNumbers(x: Finding, deltaWord = '\u0394'): string {
+  const stated = x.delta !== undefined && x.delta !== null ? formatDelta(x.delta) : x.head !== undefined && x.head !== null ? formatValue(x.head) : undefined;
+  if (stated !== undefined && x.message.includes(stated)) return '';
   const parts: string[] = [];
   if (x.base !== undefined && x.base !== null) parts.push(`base ${formatValue(x.base)}`);
   if (x.head !== undefined && x.head !== null) parts.push(`head ${formatValue(x.head)}`);

@@ -15,10 +15,14 @@ import {
   REQUIREMENT_STATUS_WORD,
   STATUS_WORD,
   challengeLabel,
-  formatDelta,
+  describeChanges,
   formatError,
+  formatRequirementDelta,
+  formatRequirementValue,
   formatValue,
+  groupFindings,
   kindPlural,
+  weakestSequences,
   xAxisLabel,
 } from './labels.js';
 import { rankFiles, rankFindings, worstSeverity } from './rank.js';
@@ -113,6 +117,7 @@ export function renderSummary(report: Report, options: MarkdownOptions = {}): st
     charts: Number.MAX_SAFE_INTEGER,
     prefix: '',
     chartPoints: options.chartPoints ?? CHART_POINTS,
+    envelopesPerDesign: 4,
   });
 }
 
@@ -128,6 +133,7 @@ export function renderComment(report: Report, options: CommentOptions): string {
     charts: 3,
     prefix,
     chartPoints: options.chartPoints ?? CHART_POINTS,
+    envelopesPerDesign: 1,
   });
 }
 
@@ -141,6 +147,8 @@ interface Layout {
   charts: number;
   prefix: string;
   chartPoints: number;
+  /** Envelopes charted per design at full detail. */
+  envelopesPerDesign: number;
 }
 
 type Detail = 'full' | 'compact';
@@ -270,7 +278,10 @@ function fileSection(f: FileReport, detail: Detail, layout: Layout, path: (p: st
   let text = `### ${w ? ICON[w] : ICON.ok} ${markdownCode(path(f.path))} \u2014 ${STATUS_WORD[f.status]}${renamed}\n\n`;
   if (f.error) text += `Could not be read: line ${f.error.line}, column ${f.error.column}: ${escapeMarkdown(f.error.message, 500)}\n\n`;
   if (f.requirements.length) text += requirementTable(f.requirements);
-  const findings = rankFindings(f.findings);
+  const changes = describeChanges(f);
+  if (changes) text += `Changed: ${escapeMarkdown(changes, 1500)}\n\n`;
+  // New bridges and cut nodes of one severity read best as one line each.
+  const findings = groupFindings(rankFindings(f.findings));
   const cap = detail === 'full' ? layout.findingsFull : layout.findingsCompact;
   if (findings.length) {
     text += '**Findings**, worst first:\n\n';
@@ -279,7 +290,7 @@ function fileSection(f: FileReport, detail: Detail, layout: Layout, path: (p: st
     text += '\n';
   }
   if (detail === 'full') {
-    if (chart) text += chartSection(f, layout.chartPoints);
+    if (chart) for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign)) text += chartSection(f, env, layout.chartPoints);
     text += weakestSection(f);
     text += structureSection(f);
   }
@@ -293,8 +304,8 @@ function requirementTable(rows: RequirementResult[]): string {
     const icon = r.status === 'met' ? ICON.ok : r.status === 'within-noise' ? '\u3030\uFE0F' : r.status === 'uncertain' ? '\u2754' : ICON[r.severity];
     if (r.status === 'within-noise') noise = true;
     const err = formatError(r.se);
-    const delta = r.delta === null ? '\u2013' : `${formatDelta(r.delta)}${err ? ` ${err}` : ''}`;
-    text += `| ${escapeMarkdown(r.description, 200)} | ${formatValue(r.base)} | ${formatValue(r.head)} | ${delta} | ${icon} ${REQUIREMENT_STATUS_WORD[r.status]} |\n`;
+    const delta = r.delta === null ? '\u2013' : `${formatRequirementDelta(r)}${err ? ` ${err}` : ''}`;
+    text += `| ${escapeMarkdown(r.description, 200)} | ${formatRequirementValue(r, r.base)} | ${formatRequirementValue(r, r.head)} | ${delta} | ${icon} ${REQUIREMENT_STATUS_WORD[r.status]} |\n`;
   }
   if (noise) text += '\n\u3030\uFE0F *within noise*: the value dropped by less than its Monte Carlo error, which is never a failure.\n';
   return `${text}\n`;
@@ -326,9 +337,7 @@ function chartNumber(v: number): string {
   return Number.isFinite(v) ? String(Math.round(v * 1000) / 1000) : '0';
 }
 
-function chartSection(f: FileReport, points: number): string {
-  const head = f.head?.envelopes[0];
-  if (!head) return '';
+function chartSection(f: FileReport, head: Envelope, points: number): string {
   const base = f.base?.envelopes.find((e) => e.challenge === head.challenge && e.kind === head.kind && sameGrid(e, head));
   const idx = sampleIndices(head.x.length, points);
   const pick = (v: readonly number[]) => idx.map((i) => v[i] ?? 0);
@@ -375,6 +384,14 @@ function elementChain(ids: readonly string[], lines: ReadonlyMap<string, number>
   return shown.join(' \u2192 ') + (ids.length > max ? ` \u2192 \u2026 (${ids.length - max} more)` : '');
 }
 
+function elementList(ids: readonly string[], lines: ReadonlyMap<string, number>, max = 20): string {
+  const shown = ids.slice(0, max).map((id) => {
+    const line = lines.get(id);
+    return `${markdownCode(id, 120)}${line ? ` (line ${line})` : ''}`;
+  });
+  return shown.join(', ') + (ids.length > max ? `, \u2026 (${ids.length - max} more)` : '');
+}
+
 function knownLines(f: FileReport): Map<string, number> {
   const lines = new Map<string, number>();
   for (const x of f.findings) for (const e of x.elements) if (e.line > 0 && !lines.has(e.id)) lines.set(e.id, e.line);
@@ -390,27 +407,14 @@ function weakestSection(f: FileReport): string {
   if (!head) return '';
   const lines = knownLines(f);
   const items: string[] = [];
-  for (const e of head.envelopes) {
-    for (const w of e.weakest.slice(0, 3)) {
-      if (!w.elements.length) continue;
-      const r = w.values.length ? `; R ${formatValue(w.values[0])} \u2192 ${formatValue(w.values[w.values.length - 1])}` : '';
-      const which = w.realization !== undefined ? `, realization ${w.realization}` : '';
-      items.push(`- ${challengeLabel(e.challenge)}${which}: ${elementChain(w.elements, lines)}${r}`);
-    }
-    if (e.worstCase && e.worstCase.elements.length) {
-      const wc = e.worstCase;
-      items.push(`- worst ${wc.k} removals (${wc.method}): ${elementChain(wc.elements, lines)}; R ${formatValue(wc.values[wc.values.length - 1])}`);
-    }
-  }
-  for (const a of head.attacks) {
-    if (a.sequence.length) items.push(`- ${challengeLabel(a.challenge)} (area ${formatValue(a.area)}): ${elementChain(a.sequence, lines, 6)}`);
+  for (const seq of weakestSequences(f).slice(0, 6)) {
+    const r = seq.values && seq.values.length ? `; R ${formatValue(seq.values[0])} \u2192 ${formatValue(seq.values[seq.values.length - 1])}` : '';
+    items.push(`- ${escapeMarkdown(seq.title, 300)}: ${elementChain(seq.ids, lines)}${r}`);
   }
   for (const c of head.contingencies) {
     const worst = c.worst[0];
     if (worst) {
-      items.push(
-        `- ${challengeLabel(c.challenge)}, ${c.evaluated} of ${c.total} cases: worst ${elementChain(worst.elements, lines)} leaves R ${formatValue(worst.value)}`,
-      );
+      items.push(`- ${challengeLabel(c.challenge)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList(worst.elements, lines)}, leaves R ${formatValue(worst.value)}`);
     }
   }
   if (!items.length) return '';
@@ -422,7 +426,7 @@ function structureSection(f: FileReport): string {
   if (!h) return '';
   const b = f.base?.structure;
   const lines = knownLines(f);
-  const list = (els: { id: string }[]) => (els.length ? elementChain(els.map((e) => e.id), lines, 20) : 'none');
+  const list = (els: { id: string }[]) => (els.length ? elementList(els.map((e) => e.id), lines) : 'none');
   const rows = [
     `| sites | ${b ? b.nodes : '\u2013'} | ${h.nodes} |`,
     `| links | ${b ? b.links : '\u2013'} | ${h.links} |`,

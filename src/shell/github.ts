@@ -24,6 +24,11 @@ export interface ClientOptions {
   maxRateLimitWaitS?: number;
   /** Where the client reports retries and give-ups (a warning line in the log). */
   log?: (message: string) => void;
+  /**
+   * The throttling plugin (rate-limit waits; it also spaces writes 3 s apart per process).
+   * Default on; in-process tests that do not test rate limits turn it off to stay fast.
+   */
+  throttle?: boolean;
 }
 
 /**
@@ -87,6 +92,7 @@ export function createClient(options: ClientOptions): Client {
       request: { fetch: timedFetch(inner, timeoutMs) },
       retry: { retries, retryAfterBaseValue: backoffMs },
       throttle: {
+        enabled: options.throttle ?? true,
         retryAfterBaseValue: backoffMs,
         fallbackSecondaryRateRetryAfter: 5,
         onRateLimit: onLimit('rate limit'),

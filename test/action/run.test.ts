@@ -102,7 +102,9 @@ function deps(report: Report | ((r: GateRequestLike) => Report), git: (args: str
       if (args[0] === 'rev-parse' && args[1] === '--show-toplevel') return { code: 0, stdout: `${path.join(dir, 'ws')}\n`, stderr: '' };
       return git(args);
     },
-    github: (o) => createClient(o),
+    // Throttling is off here only for speed (it spaces writes 3 s apart); rate limits are
+    // exercised in github.test.ts and e2e.test.ts.
+    github: (o) => createClient({ ...o, throttle: false }),
     renderHtml: () => '<!doctype html><title>r</title>',
     out: {
       annotate: (a) => rec.annotations.push(a),

@@ -1,0 +1,423 @@
+// The bundled Action, run as the runner runs it (see harness.ts), with the inputs of the
+// README's workflows, in temporary git repositories with real base and head commits, against
+// a loopback stand-in for the REST API. One scenario per behaviour the issue names: pass, fail,
+// advise, fork, shallow clone, API down, rate limit, API hanging, shards merged, push, schedule,
+// nothing changed.
+
+import { mkdtempSync, readFileSync, readdirSync, rmSync, existsSync } from 'node:fs';
+import { readFile } from 'node:fs/promises';
+import { createRequire } from 'node:module';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { commentMarker } from '../../src/report/markdown.js';
+import { inShard } from '../../src/run-gate.js';
+import { startFakeApi, type FakeApi } from './fake-api.js';
+import {
+  actionDefaults,
+  buildBundle,
+  commands,
+  commit,
+  git,
+  netbraceInputs,
+  readmeWorkflow,
+  runAction,
+  type RunResult,
+} from './harness.js';
+
+// ---------------------------------------------------------------------------------------------
+// Invented designs: a ring of eight sites (every site has two ways out), the same ring with one
+// span retired (a chain: every link a bridge, every inner site a cut node), and the ring with
+// a chord added. The policy is small so that each run takes well under a second.
+
+const SITES = ['harbour', 'mill', 'quarry', 'ridge', 'weir', 'orchard', 'moor', 'ferry'];
+
+function ring(extra: [string, string][] = [], drop?: [string, string]): string {
+  const links: [string, string][] = SITES.map((s, i) => [s, SITES[(i + 1) % SITES.length]]);
+  const kept = links.filter(([a, b]) => !(drop && a === drop[0] && b === drop[1]));
+  return [
+    '# Invented eight-site ring for the Action tests.',
+    'network:',
+    '  name: Test ring',
+    'nodes:',
+    ...SITES.map((s) => `  - id: ${s}`),
+    'links:',
+    ...[...kept, ...extra].map(([a, b]) => `  - between: [${a}, ${b}]`),
+    '',
+  ].join('\n');
+}
+
+const POLICY = `# Policy of the Action tests (invented): random node failures, no new single points of failure.
+seed: 1
+r-value:
+  metrics:
+    pair_connectivity: 1
+    efficiency: 1
+challenges:
+  node-failures:
+    remove: nodes
+    until: 0.5
+    points: 6
+    realizations: 40
+requirements:
+  - kind: no-new-spof
+  - kind: area-floor
+    challenge: node-failures
+regression:
+  allowed-drop: 0.05
+  noise-factor: 2
+`;
+
+const TOKEN = 'ghs_test_token';
+const DESIGN = 'nets/ring.net.yaml';
+/** Line of the ferry-harbour link in ring(): header 4 lines + 8 nodes + "links:" + 8th link. */
+const CHAIN_DROP: [string, string] = ['ferry', 'harbour'];
+
+interface Scenario {
+  root: string;
+  origin: string;
+  base: string;
+  fail: string;
+  pass: string;
+  readme: string;
+  shards: string;
+}
+
+let scenario: Scenario;
+let api: FakeApi;
+let work: string;
+
+const SARIF_SCHEMA = (() => {
+  const require = createRequire(import.meta.url);
+  return require.resolve('@microsoft/jest-sarif/lib/schemas/sarif-2.1.0-rtm.5.json');
+})();
+
+async function sarifValidator() {
+  const require = createRequire(import.meta.url);
+  const Ajv = require('ajv-draft-04').default as typeof import('ajv-draft-04').default;
+  const ajv = new Ajv({ allErrors: true, strict: false, unicodeRegExp: false, validateFormats: false });
+  return ajv.compile(JSON.parse(await readFile(SARIF_SCHEMA, 'utf8')));
+}
+
+beforeAll(() => {
+  buildBundle();
+  const root = mkdtempSync(path.join(tmpdir(), 'nb-e2e-'));
+  const author = path.join(root, 'author');
+  const origin = path.join(root, 'origin.git');
+  git(root, 'init', '-q', '--bare', origin);
+  // Let a shallow clone fetch one commit by id, as GitHub does.
+  git(origin, 'config', 'uploadpack.allowAnySHA1InWant', 'true');
+  git(root, 'init', '-q', '-b', 'main', author);
+  const base = commit(author, 'base: ring and policy', {
+    '.netbrace.yaml': POLICY,
+    [DESIGN]: ring(),
+    'nets/metro-a.net.yaml': ring([['harbour', 'weir']]),
+    'nets/metro-b.net.yaml': ring([['mill', 'orchard']]),
+    'nets/metro-c.net.yaml': ring([['quarry', 'moor']]),
+    'README.md': 'designs\n',
+  });
+  git(author, 'push', '-q', origin, 'main');
+  git(author, 'checkout', '-q', '-b', 'retire-span');
+  const fail = commit(author, 'retire the ferry-harbour span', { [DESIGN]: ring([], CHAIN_DROP) });
+  git(author, 'checkout', '-q', '--detach', base);
+  const pass = commit(author, 'add a chord', { [DESIGN]: ring([['harbour', 'ridge']]) });
+  git(author, 'checkout', '-q', '--detach', base);
+  const readme = commit(author, 'docs only', { 'README.md': 'designs, documented\n' });
+  git(author, 'checkout', '-q', '--detach', base);
+  const shards = commit(author, 'retire one span in every design', {
+    [DESIGN]: ring([], CHAIN_DROP),
+    'nets/metro-a.net.yaml': ring([['harbour', 'weir'], ['mill', 'moor']]),
+    'nets/metro-b.net.yaml': ring([['mill', 'orchard'], ['quarry', 'ferry']]),
+    'nets/metro-c.net.yaml': ring([['quarry', 'moor']], CHAIN_DROP),
+  });
+  for (const [name, sha] of Object.entries({ fail, pass, readme, shards })) git(author, 'push', '-q', origin, `${sha}:refs/heads/${name}`);
+  scenario = { root, origin, base, fail, pass, readme, shards };
+}, 120_000);
+
+afterAll(() => {
+  if (scenario) rmSync(scenario.root, { recursive: true, force: true });
+});
+
+beforeEach(async () => {
+  api = await startFakeApi();
+  work = mkdtempSync(path.join(scenario.root, 'job-'));
+});
+afterEach(async () => {
+  await api.close();
+});
+
+/** A workspace as actions/checkout leaves it: a clone of the origin at `sha` (shallow by default, like checkout). */
+function checkout(sha: string, opts: { shallow?: boolean; branch?: string } = {}): string {
+  const ws = path.join(work, 'workspace');
+  const branch = opts.branch ?? Object.entries(scenario).find(([, v]) => v === sha)?.[0] ?? 'main';
+  const ref = branch === 'base' ? 'main' : branch;
+  if (opts.shallow === false) git(work, 'clone', '-q', `file://${scenario.origin}`, ws);
+  else git(work, 'clone', '-q', '--depth=1', '--branch', ref, `file://${scenario.origin}`, ws);
+  git(ws, 'checkout', '-q', '--detach', sha);
+  return ws;
+}
+
+function prEvent(base: string, head: string, fork = false) {
+  return {
+    number: 7,
+    pull_request: {
+      number: 7,
+      base: { sha: base, ref: 'main', repo: { full_name: 'acme/backbone' } },
+      head: { sha: head, ref: 'topic', repo: { full_name: fork ? 'outsider/backbone' : 'acme/backbone', fork } },
+    },
+    repository: { full_name: 'acme/backbone' },
+  };
+}
+
+/** The inputs of the README's pull-request workflow, on top of action.yml's defaults. */
+function prInputs(over: Record<string, string> = {}): Record<string, string> {
+  return { ...actionDefaults(TOKEN), ...netbraceInputs('pull-request', 'netbrace'), ...over };
+}
+
+function run(ws: string, eventName: string, event: unknown, inputs: Record<string, string>, sha?: string): Promise<RunResult> {
+  return runAction({ workspace: ws, runnerTemp: path.join(work, 'runner-temp'), eventName, event, inputs, apiUrl: api.url, ...(sha ? { sha } : {}) });
+}
+
+function failedMessages(r: RunResult): string[] {
+  // core.setFailed writes one ::error:: without properties.
+  return commands(r.stdout, 'error').filter((c) => Object.keys(c.props).length === 0).map((c) => c.message);
+}
+
+describe('the README workflow is what the Action accepts', () => {
+  it('every input the README uses is declared in action.yml, and permissions are minimal', () => {
+    const declared = new Set(Object.keys(actionDefaults(TOKEN)));
+    for (const [wf, job, values] of [
+      ['pull-request', 'netbrace', {}],
+      ['fork-comment', 'comment', { 'steps.pr.outputs.number': '7' }],
+      ['shards', 'shard', { 'matrix.shard': '1' }],
+      ['shards', 'decide', {}],
+    ] as const) {
+      for (const name of Object.keys(netbraceInputs(wf, job, values))) expect(declared.has(name), `${wf}/${job}: ${name}`).toBe(true);
+    }
+    expect(readmeWorkflow('pull-request').permissions).toEqual({ contents: 'read', 'pull-requests': 'write', 'security-events': 'write' });
+    expect(readmeWorkflow('fork-comment').permissions).toEqual({ actions: 'read', 'pull-requests': 'write' });
+  });
+});
+
+describe('pull requests', () => {
+  it('fail: annotations on the design\u2019s lines, summary, outputs, SARIF, comment created then updated', async () => {
+    const ws = checkout(scenario.fail, { shallow: false });
+    const r1 = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs());
+    expect(r1.code, r1.stdout + r1.stderr).toBe(1);
+    expect(failedMessages(r1)).toEqual([expect.stringMatching(/^netbrace: the gate failed: 1 design with failures/)]);
+    // Annotations: errors on the design file, at lines of the ring's elements.
+    const errors = commands(r1.stdout, 'error').filter((c) => c.props.file);
+    expect(errors.length).toBeGreaterThan(0);
+    expect(errors.length).toBeLessThanOrEqual(10);
+    const lines = readFileSync(path.join(ws, DESIGN), 'utf8').split('\n');
+    for (const e of errors) {
+      expect(e.props.file).toBe(DESIGN);
+      expect(e.props.title).toMatch(/^netbrace: /);
+      const line = Number(e.props.line);
+      expect(line).toBeGreaterThanOrEqual(1);
+      expect(lines[line - 1]).toMatch(/^ {2}- (id|between): /);
+    }
+    expect(errors.some((e) => /single point of failure/.test(e.props.title))).toBe(true);
+    // Outputs.
+    expect(r1.outputs).toMatchObject({ verdict: 'fail', designs: '1', report: '.netbrace-out/netbrace-report.json', sarif: '.netbrace-out/netbrace.sarif', html: '.netbrace-out/netbrace-report.html' });
+    expect(Number(r1.outputs['count-regressed']) + Number(r1.outputs['count-below-threshold'])).toBe(1);
+    // Summary.
+    expect(r1.summary).toMatch(/^## \u274C netbrace: the gate failed/);
+    expect(r1.summary).toContain('```mermaid\nxychart-beta');
+    expect(r1.summary).toContain('`nets/ring.net.yaml`');
+    // Files.
+    const report = JSON.parse(readFileSync(path.join(ws, r1.outputs.report), 'utf8'));
+    expect(report.verdict).toBe('fail');
+    expect(report.base).toBe(scenario.base);
+    expect(report.head).toBe(scenario.fail);
+    const sarif = JSON.parse(readFileSync(path.join(ws, r1.outputs.sarif), 'utf8'));
+    const validate = await sarifValidator();
+    expect(validate(sarif), JSON.stringify(validate.errors)).toBe(true);
+    expect(sarif.runs[0].automationDetails.id).toBe('netbrace-backbone/');
+    expect(readFileSync(path.join(ws, r1.outputs.html), 'utf8')).toMatch(/^<!doctype html>/i);
+    // Comment created.
+    expect(api.comments).toHaveLength(1);
+    expect(api.comments[0].body.startsWith(commentMarker('backbone'))).toBe(true);
+    expect(r1.outputs['comment-url']).toContain(`/comment/${api.comments[0].id}`);
+    const created = api.comments[0].id;
+
+    // The author fixes it (a new head): the same comment is updated, not duplicated.
+    const ws2 = path.join(work, 'ws2');
+    git(work, 'clone', '-q', `file://${scenario.origin}`, ws2);
+    git(ws2, 'checkout', '-q', '--detach', scenario.pass);
+    const r2 = await runAction({ workspace: ws2, runnerTemp: path.join(work, 'rt2'), eventName: 'pull_request', event: prEvent(scenario.base, scenario.pass), inputs: prInputs(), apiUrl: api.url });
+    expect(r2.code, r2.stdout + r2.stderr).toBe(0);
+    expect(r2.outputs.verdict).toBe('pass');
+    expect(api.comments).toHaveLength(1);
+    expect(api.comments[0].id).toBe(created);
+    expect(api.comments[0].body).toMatch(/netbrace: pass/);
+    expect(api.requests.filter((q) => q.method === 'POST')).toHaveLength(1);
+    expect(api.requests.filter((q) => q.method === 'PATCH')).toHaveLength(1);
+    expect(api.requests.every((q) => q.authorization === `token ${TOKEN}`)).toBe(true);
+  }, 60_000);
+
+  it('advise: the same findings, the step passes', async () => {
+    const ws = checkout(scenario.fail, { shallow: false });
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ mode: 'advise' }));
+    expect(r.code, r.stdout + r.stderr).toBe(0);
+    expect(r.outputs.verdict).toBe('fail');
+    expect(failedMessages(r)).toEqual([]);
+    expect(commands(r.stdout, 'error').filter((c) => c.props.file).length).toBeGreaterThan(0);
+    expect(commands(r.stdout, 'warning').some((c) => /advise mode/.test(c.message))).toBe(true);
+    expect(r.summary).toContain('would fail (advise mode, not blocking)');
+  }, 30_000);
+
+  it('fork: the read-only token\u2019s 403 is a warning; summary, annotations and verdict stand', async () => {
+    api.writes = 'forbidden';
+    const ws = checkout(scenario.fail, { shallow: false });
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'always' }));
+    expect(r.code).toBe(1);
+    expect(r.outputs.verdict).toBe('fail');
+    expect(failedMessages(r)).toHaveLength(1);
+    const warnings = commands(r.stdout, 'warning').map((c) => c.message);
+    expect(warnings.some((w) => /cannot write the pull-request comment/.test(w) && /fork/.test(w))).toBe(true);
+    expect(r.summary).toContain('could not be written');
+    expect(api.comments).toHaveLength(0);
+  }, 30_000);
+
+  it('shallow clone: the base commit is fetched, then compared', async () => {
+    const ws = checkout(scenario.fail); // --depth=1: only the head commit
+    expect(() => git(ws, 'cat-file', '-e', `${scenario.base}^{commit}`)).toThrow();
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs());
+    expect(r.code, r.stdout + r.stderr).toBe(1);
+    expect(r.stdout).toContain('is not in the clone (shallow checkout); fetching that one commit');
+    expect(r.outputs.verdict).toBe('fail');
+    expect(git(ws, 'cat-file', '-t', scenario.base)).toBe('commit');
+  }, 30_000);
+
+  it('shallow clone whose base cannot be fetched: stops and says what to add to the checkout step', async () => {
+    const ws = checkout(scenario.fail);
+    git(ws, 'remote', 'set-url', 'origin', path.join(work, 'no-such-remote.git'));
+    api.prFiles.push({ filename: DESIGN, status: 'modified' });
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs());
+    expect(r.code).toBe(1);
+    const failed = failedMessages(r);
+    expect(failed).toHaveLength(1);
+    expect(failed[0]).toContain('add `fetch-depth: 0` to the actions/checkout step');
+    expect(api.requests.some((q) => q.path === '/repos/acme/backbone/pulls/7/files')).toBe(true);
+  }, 30_000);
+
+  it('no design changed (even with the base unfetchable, from the API\u2019s file list): a pass that says so', async () => {
+    const ws = checkout(scenario.readme);
+    git(ws, 'remote', 'set-url', 'origin', path.join(work, 'no-such-remote.git'));
+    api.prFiles.push({ filename: 'README.md', status: 'modified' });
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.readme), prInputs());
+    expect(r.code, r.stdout + r.stderr).toBe(0);
+    expect(r.outputs).toMatchObject({ verdict: 'pass', designs: '0' });
+    expect(r.summary).toContain('no design file changed');
+    // on-change: nothing to say, so no comment is created.
+    expect(api.comments).toHaveLength(0);
+  }, 30_000);
+});
+
+describe('an unreliable API never changes the verdict', () => {
+  it('API down (500 on every call): bounded retries, a warning, the verdict stands', async () => {
+    api.reads = 'error500';
+    api.writes = 'error500';
+    const ws = checkout(scenario.fail, { shallow: false });
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ comment: 'always' }));
+    expect(r.code).toBe(1);
+    expect(r.outputs.verdict).toBe('fail');
+    expect(failedMessages(r)).toHaveLength(1);
+    expect(commands(r.stdout, 'warning').some((c) => /could not write the pull-request comment/.test(c.message))).toBe(true);
+    expect(api.requests.length).toBe(3); // one listing, retried twice (NETBRACE_HTTP_RETRIES=2)
+    expect(r.ms).toBeLessThan(15_000);
+  }, 30_000);
+
+  it('rate limited (403, x-ratelimit-remaining: 0): waits for the reset, then writes', async () => {
+    api.reads = 'rateLimit';
+    api.failFirst = 1;
+    const ws = checkout(scenario.fail, { shallow: false });
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ comment: 'always' }));
+    expect(r.code).toBe(1);
+    expect(api.comments).toHaveLength(1);
+    expect(r.stdout).toMatch(/rate limit .*retrying/);
+  }, 30_000);
+
+  it('API hanging: each call times out, the step ends in seconds', async () => {
+    api.reads = 'hang';
+    const ws = checkout(scenario.pass, { shallow: false });
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.pass), prInputs({ comment: 'always' }));
+    expect(r.code, r.stdout + r.stderr).toBe(0);
+    expect(r.outputs.verdict).toBe('pass');
+    expect(commands(r.stdout, 'warning').some((c) => /no answer within 500 ms/.test(c.message))).toBe(true);
+    expect(r.ms).toBeLessThan(15_000);
+  }, 30_000);
+});
+
+describe('other events', () => {
+  it('push: compares the commit before the push with the pushed head', async () => {
+    const ws = checkout(scenario.pass, { shallow: false });
+    const r = await run(ws, 'push', { before: scenario.base, after: scenario.pass, ref: 'refs/heads/main' }, prInputs(), scenario.pass);
+    expect(r.code, r.stdout + r.stderr).toBe(0);
+    const report = JSON.parse(readFileSync(path.join(ws, r.outputs.report), 'utf8'));
+    expect(report).toMatchObject({ base: scenario.base, head: scenario.pass, verdict: 'pass' });
+    expect(api.requests).toEqual([]); // no pull request, no comment
+  }, 30_000);
+
+  it('push of a new branch (all-zero before): compared with the head\u2019s parent', async () => {
+    const ws = checkout(scenario.fail);
+    const r = await run(ws, 'push', { before: '0'.repeat(40), after: scenario.fail, created: true }, prInputs(), scenario.fail);
+    expect(r.code, r.stdout + r.stderr).toBe(1);
+    const report = JSON.parse(readFileSync(path.join(ws, r.outputs.report), 'utf8'));
+    expect(report.base).toBe(scenario.base);
+  }, 30_000);
+
+  it('schedule: every design against the thresholds only', async () => {
+    const ws = checkout(scenario.base, { shallow: false, branch: 'main' });
+    const r = await run(ws, 'schedule', { schedule: '23 5 * * 1' }, prInputs(), scenario.base);
+    expect(r.code, r.stdout + r.stderr).toBe(0);
+    expect(r.outputs.designs).toBe('4');
+    const report = JSON.parse(readFileSync(path.join(ws, r.outputs.report), 'utf8'));
+    expect(report.base).toBeUndefined();
+    expect(report.scope).toBe('all');
+  }, 30_000);
+});
+
+describe('shards', () => {
+  it('two matrix legs, then the merge job: one summary, one comment, one verdict', async () => {
+    const legs = (readmeWorkflow('shards').jobs.shard.strategy?.matrix?.shard ?? []).map(String);
+    expect(legs).toEqual(['1', '2']);
+    const shardFolder = path.join(work, 'decide-ws', '.netbrace-shards');
+    const perShard: string[][] = [];
+    for (const k of legs) {
+      const ws = path.join(work, `leg-${k}`);
+      git(work, 'clone', '-q', '--depth=1', '--branch', 'shards', `file://${scenario.origin}`, ws);
+      const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('shards', 'shard', { 'matrix.shard': k }) };
+      const r = await runAction({ workspace: ws, runnerTemp: path.join(work, `rt-${k}`), eventName: 'pull_request', event: prEvent(scenario.base, scenario.shards), inputs, apiUrl: api.url });
+      expect(r.code, r.stdout + r.stderr).toBe(0); // shard legs never decide
+      expect(commands(r.stdout, 'error')).toEqual([]);
+      const file = path.join(ws, r.outputs.report);
+      expect(r.outputs.report).toBe(`.netbrace-out/shard-${k}.json`);
+      const shard = JSON.parse(readFileSync(file, 'utf8'));
+      expect(shard.shard).toEqual({ index: Number(k), total: 2 });
+      perShard.push(shard.files.map((f: { path: string }) => f.path));
+      // "upload-artifact" then "download-artifact" with merge-multiple: one folder of reports.
+      git(work, 'init', '-q', path.join(work, 'decide-ws'));
+      const { mkdirSync, copyFileSync } = await import('node:fs');
+      mkdirSync(shardFolder, { recursive: true });
+      copyFileSync(file, path.join(shardFolder, path.basename(file)));
+    }
+    const all = ['nets/metro-a.net.yaml', 'nets/metro-b.net.yaml', 'nets/metro-c.net.yaml', DESIGN];
+    expect([...perShard.flat()].sort()).toEqual(all);
+    for (const [i, files] of perShard.entries()) for (const f of files) expect(inShard(f, { index: i + 1, total: 2 })).toBe(true);
+    expect(api.requests).toEqual([]); // legs write no comment
+
+    const decide = path.join(work, 'decide-ws');
+    const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('shards', 'decide') };
+    const r = await runAction({ workspace: decide, runnerTemp: path.join(work, 'rt-decide'), eventName: 'pull_request', event: prEvent(scenario.base, scenario.shards), inputs, apiUrl: api.url });
+    expect(r.code, r.stdout + r.stderr).toBe(1);
+    expect(r.outputs).toMatchObject({ verdict: 'fail', designs: '4' });
+    expect(r.summary).toContain('merged shards 1, 2 of 2');
+    for (const f of all) expect(r.summary).toContain(`\`${f}\``);
+    expect(api.comments).toHaveLength(1);
+    expect(commands(r.stdout, 'error').filter((c) => c.props.file).length).toBeGreaterThan(0);
+    expect(existsSync(path.join(decide, '.netbrace-out', 'netbrace.sarif'))).toBe(true);
+    expect(readdirSync(shardFolder).sort()).toEqual(['shard-1.json', 'shard-2.json']);
+  }, 60_000);
+});
