@@ -249,14 +249,13 @@ export function elementChanges(base: DesignSide, head: DesignSide): { added: Rep
 export function fileStatus(change: CompareInput['change'], findings: readonly Finding[]): FileStatus {
   const failing = findings.filter((f) => f.severity === 'fail');
   if (failing.some((f) => f.rule === 'parse-error')) return 'error';
-  if (failing.some((f) => f.rule in THRESHOLD_RULE_SET)) return 'below-threshold';
+  const thresholdRules = new Set<Finding['rule']>(Object.values(THRESHOLD_RULE));
+  if (failing.some((f) => thresholdRules.has(f.rule))) return 'below-threshold';
   if (failing.some((f) => f.rule === 'regression' || f.rule === 'new-bridge' || f.rule === 'new-cut-node')) return 'regressed';
   if (change === 'added') return 'new';
   if (change === 'renamed') return 'renamed';
   return 'pass';
 }
-
-const THRESHOLD_RULE_SET: Record<string, true> = { 'r-threshold': true, 'area-floor': true, 'spread-ceiling': true, 'n-1': true };
 
 export function compareDesign(input: CompareInput): FileReport {
   const report: FileReport = { path: input.path, status: 'pass', findings: [], requirements: [] };
