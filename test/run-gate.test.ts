@@ -59,16 +59,16 @@ describe('trusted policy', () => {
 
   it('an override that loosens an extends floor stops the run with both lines, before any evaluation', async () => {
     const repo = pairRepo('redundant-link');
-    const org = 'requirements:\n  - kind: n-1\n    element: link\n    min: 0.7\n';
-    const team = 'extends: org.yaml\noverrides:\n  - files: "networks/**"\n    requirements:\n      - kind: n-1\n        element: link\n        min: 0.5\n';
+    // fixtures/gate/extends/: the team's policy extends the organisation's and lowers its floor.
+    const [org, team] = [gateFixture('extends/org.yaml'), gateFixture('extends/team.yaml')];
     for (const side of [repo.base, repo.head]) Object.assign(side, { 'org.yaml': org, '.netbrace.yaml': team });
     const evaluate = spy();
     const error = await runGate(request, memoryDeps(repo, { evaluate })).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(PolicyError);
     const e = error as PolicyError;
-    expect([e.file, e.line]).toEqual(['.netbrace.yaml', 7]);
-    expect(e.related.map((r) => [r.file, r.line])).toEqual([['org.yaml', 4]]);
-    expect(e.format()).toMatch(/^\.netbrace\.yaml:7:14: override 1, requirement 1 loosens n-1:link: min 0\.5 where min 0\.7 is required/);
+    expect([e.file, e.line]).toEqual(['.netbrace.yaml', 8]);
+    expect(e.related.map((r) => [r.file, r.line])).toEqual([['org.yaml', 5]]);
+    expect(e.format()).toMatch(/^\.netbrace\.yaml:8:14: override 1, requirement 1 loosens n-1:link: min 0\.5 where min 0\.7 is required/);
     expect(evaluate).not.toHaveBeenCalled();
   });
 
