@@ -26,7 +26,11 @@ export type MetricId =
 export type CostClass = 'linear' | 'all-pairs' | 'spectral' | 'flow';
 
 export interface MetricValue {
-  /** The metric in its own unit (hops, eigenvalue, count...). */
+  /**
+   * The metric in its own unit (hops, eigenvalue, count...). May be Infinity (effective
+   * resistance of a disconnected survivor) or NaN (hop metrics with no pair left); JSON
+   * output writes both as null. `normalized` is always a finite number in [0, 1].
+   */
   raw: number;
   /** In [0, 1]; 1 = the best the metric can say, 0 = no robustness left. */
   normalized: number;
@@ -35,6 +39,19 @@ export interface MetricValue {
 export interface MetricOptions {
   /** Latency budget factor for demand_served (overrides the design's). */
   latencyBudget?: number;
+  /**
+   * Spectral metrics: components of up to this many nodes use the exact dense eigen-solver,
+   * larger ones the iterative kernels (Lanczos, stochastic Lanczos quadrature). The default
+   * depends on the metric (see its file); Infinity forces the exact path.
+   */
+  denseLimit?: number;
+  /**
+   * Spectral metrics: start each Lanczos run from the previous evaluation's eigenvector
+   * (faster on sequences of similar masks). Off by default, because results then depend on
+   * the order of evaluation in the last digits (about 1e-10 relative) — with it off, every
+   * value is a pure function of the graph and the mask, whatever the thread count.
+   */
+  warmStart?: boolean;
 }
 
 /** An evaluator bound to one graph; reuse it for every mask. */

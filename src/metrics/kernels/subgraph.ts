@@ -80,21 +80,22 @@ export function createSurvivorBuilder(g: CompactGraph, simple: boolean): (mask: 
 }
 
 /**
- * The subgraph of `src` induced by `nodes[0..count)` (local indices of `src`), written into
- * `out` in that order. `out.toOriginal` maps back to the original graph and `out.toLocal`
- * (sized to the original graph) maps original indices into `out` until the next call.
+ * The subgraph of `src` induced by `nodes[from .. from+count)` (local indices of `src`),
+ * written into `out` in that order. `out.toOriginal` maps back to the original graph and
+ * `out.toLocal` (sized to the original graph) maps original indices into `out` until the
+ * next call.
  */
-export function inducedSubgraph(src: LocalGraph, nodes: Int32Array, count: number, out: LocalGraph): LocalGraph {
+export function inducedSubgraph(src: LocalGraph, nodes: Int32Array, from: number, count: number, out: LocalGraph): LocalGraph {
   const position = out.toLocal;
   for (let i = 0; i < out.n; i++) position[out.toOriginal[i]] = -1;
   for (let i = 0; i < count; i++) {
-    const original = src.toOriginal[nodes[i]];
+    const original = src.toOriginal[nodes[from + i]];
     out.toOriginal[i] = original;
     position[original] = i;
   }
   let k = 0;
   for (let i = 0; i < count; i++) {
-    const v = nodes[i];
+    const v = nodes[from + i];
     out.offsets[i] = k;
     for (let p = src.offsets[v]; p < src.offsets[v + 1]; p++) {
       const local = position[src.toOriginal[src.neighbors[p]]];

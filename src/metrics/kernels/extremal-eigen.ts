@@ -1,0 +1,53 @@
+// One extremal eigenvalue of a connected local graph — the Fiedler value μ₂ of its
+// Laplacian or the spectral radius λ₁ of its adjacency matrix — by the dense values-only
+// solver up to `denseLimit` nodes and by thick-restart Lanczos above (the Laplacian's
+// constant null vector deflated). With `warmStart`, Lanczos starts from the previous call's
+// eigenvector restricted to the surviving nodes (SCIENCE.md §6's warm start).
+
+import type { CompactGraph } from '../../graph/compact.js';
+import { createDenseSpectrum } from './dense-spectrum.js';
+import { createLanczos } from './lanczos.js';
+import { createAdjacencyOperator, createLaplacianOperator } from './operators.js';
+import type { LocalGraph } from './subgraph.js';
+
+export function createExtremalSolver(
+  g: CompactGraph,
+  kind: 'fiedler' | 'radius',
+  denseLimit: number,
+  warmStart: boolean,
+): (part: LocalGraph, keys: Int32Array) => number {
+  const limit = Math.min(g.n, denseLimit);
+  const fiedler = kind === 'fiedler';
+  const dense = createDenseSpectrum(limit);
+  const lanczos = createLanczos(g.n, 1);
+  const op = fiedler ? createLaplacianOperator() : createAdjacencyOperator();
+  const one = new Float64Array(fiedler ? g.n : 0);
+  const previous = new Float64Array(warmStart ? g.n : 0);
+  const start = new Float64Array(warmStart ? g.n : 0);
+  let hasPrevious = false;
+  return (part, keys) => {
+    const n = part.n;
+    if (n <= limit) {
+      const d = fiedler ? dense.laplacian(part) : dense.adjacency(part);
+      return fiedler ? d[1] : d[n - 1];
+    }
+    op.bind(part);
+    if (fiedler) one.fill(1 / Math.sqrt(n), 0, n);
+    const warm = warmStart && hasPrevious;
+    if (warm) for (let i = 0; i < n; i++) start[i] = previous[part.toOriginal[i]];
+    const r = lanczos.solve(op, {
+      which: fiedler ? 'smallest' : 'largest',
+      count: 1,
+      deflation: fiedler ? one : undefined,
+      deflationCount: fiedler ? 1 : 0,
+      start: warm ? start : null,
+      keys,
+    });
+    if (warmStart) {
+      previous.fill(0);
+      for (let i = 0; i < n; i++) previous[part.toOriginal[i]] = r.vectors[i];
+      hasPrevious = true;
+    }
+    return r.values[0];
+  };
+}
