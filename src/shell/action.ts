@@ -1,13 +1,19 @@
 // GitHub Action entry: the real runner, the real gate. Everything else is in action-run.ts,
 // whose run() turns every error into one setFailed; the catch here is the last resort.
+import { availableParallelism } from 'node:os';
 import * as core from '@actions/core';
+import { evaluateDesignParallel } from '../parallel/pool.js';
 import { renderHtml } from '../report/html.js';
 import { mergeReports, runGate } from '../run-gate.js';
 import { coreOutput, defaultGithub, run } from './action-run.js';
 import { gitDeps, runGit } from './git.js';
 
 run(process.env, {
-  gate: (request, root) => runGate(request, gitDeps(root)),
+  gate: (request, root) => {
+    // Worker threads on every core the runner gives (the result does not depend on the count).
+    const threads = request.threads ?? availableParallelism();
+    return runGate(request, { ...gitDeps(root), ...(threads > 1 ? { evaluate: (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) } : {}) });
+  },
   merge: mergeReports,
   git: (args, cwd) => runGit(cwd, args),
   github: defaultGithub,

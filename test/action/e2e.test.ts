@@ -9,6 +9,7 @@ import { readFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { parse as parseYaml } from 'yaml';
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { commentMarker } from '../../src/report/markdown.js';
 import { inShard } from '../../src/run-gate.js';
@@ -21,6 +22,7 @@ import {
   git,
   netbraceInputs,
   readmeWorkflow,
+  repoRoot,
   runAction,
   type RunResult,
 } from './harness.js';
@@ -178,6 +180,10 @@ function run(ws: string, eventName: string, event: unknown, inputs: Record<strin
   return runAction({ workspace: ws, runnerTemp: path.join(work, 'runner-temp'), eventName, event, inputs, apiUrl: api.url, ...(sha ? { sha } : {}) });
 }
 
+function actionOutputs(): Record<string, unknown> {
+  return (parseYaml(readFileSync(path.join(repoRoot, 'action.yml'), 'utf8')) as { outputs: Record<string, unknown> }).outputs;
+}
+
 function failedMessages(r: RunResult): string[] {
   // core.setFailed writes one ::error:: without properties.
   return commands(r.stdout, 'error').filter((c) => Object.keys(c.props).length === 0).map((c) => c.message);
@@ -221,6 +227,7 @@ describe('pull requests', () => {
     // Outputs.
     expect(r1.outputs).toMatchObject({ verdict: 'fail', designs: '1', report: '.netbrace-out/netbrace-report.json', sarif: '.netbrace-out/netbrace.sarif', html: '.netbrace-out/netbrace-report.html' });
     expect(Number(r1.outputs['count-regressed']) + Number(r1.outputs['count-below-threshold'])).toBe(1);
+    expect(Object.keys(r1.outputs).sort()).toEqual(Object.keys(actionOutputs()).sort());
     // Summary.
     expect(r1.summary).toMatch(/^## \u274C netbrace: the gate failed/);
     expect(r1.summary).toContain('```mermaid\nxychart-beta');

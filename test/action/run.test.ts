@@ -4,6 +4,8 @@
 
 import { mkdirSync, mkdtempSync, readFileSync, rmSync, symlinkSync, writeFileSync, existsSync } from 'node:fs';
 import { tmpdir } from 'node:os';
+import { fileURLToPath } from 'node:url';
+import { parse as parseYaml } from 'yaml';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { Annotation } from '../../src/report/annotations.js';
@@ -123,6 +125,14 @@ function deps(report: Report | ((r: GateRequestLike) => Report), git: (args: str
 }
 
 describe('inputs', () => {
+  it('reads exactly the inputs action.yml declares', () => {
+    const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
+    const declared = Object.keys((parseYaml(readFileSync(path.join(root, 'action.yml'), 'utf8')) as { inputs: object }).inputs).sort();
+    const source = readFileSync(path.join(root, 'src', 'shell', 'action-run.ts'), 'utf8');
+    const read = [...new Set([...source.matchAll(/(?:getInput|oneOf|relativePath|optionalInt)\(env, '([a-z-]+)'/g)].map((m) => m[1]))].sort();
+    expect(read).toEqual(declared);
+  });
+
   it('reads the runner\u2019s INPUT_ names (upper case, dashes kept) and validates them', () => {
     const i = readInputs({ 'INPUT_COMMENT-KEY': 'metro', 'INPUT_POLICY-SOURCE': 'head', INPUT_SHARD: '2/4', INPUT_MODE: 'advise' });
     expect(i).toMatchObject({ commentKey: 'metro', policySource: 'head', shard: { index: 2, total: 4 }, mode: 'advise', comment: 'on-change' });
