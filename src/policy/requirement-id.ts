@@ -27,6 +27,9 @@ export function requirementId(r: Requirement): string {
     case 'n-1':
       return `n-1:${r.element}`;
     case 'no-new-spof':
-      return 'no-new-spof';
+      // One id per kind of single point of failure, so a policy can fail on new bridges and
+      // only warn on new cut nodes; a rule for both keeps the plain id.
+      if (r.bridges && r.cutNodes) return 'no-new-spof';
+      return r.bridges ? 'no-new-spof:bridges' : 'no-new-spof:cut-nodes';
   }
 }

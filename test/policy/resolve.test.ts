@@ -53,6 +53,24 @@ describe('built-in policy', () => {
     expect(p.challenges.map((c) => c.engine)).toEqual(['degree']);
   });
 
+  it('bridges and cut nodes can be ruled separately, each with its own id and severity', () => {
+    const text = [
+      'requirements:',
+      '  - kind: no-new-spof',
+      '    elements: [bridges]',
+      '    severity: fail',
+      '  - kind: no-new-spof',
+      '    elements: [cut-nodes]',
+      '    severity: warn',
+      '',
+    ].join('\n');
+    const p = loadPolicy('p.yaml', repo({ 'p.yaml': text }));
+    expect(p.requirements.map((r) => [r.id, r.severity])).toEqual([
+      ['no-new-spof:bridges', 'fail'],
+      ['no-new-spof:cut-nodes', 'warn'],
+    ]);
+  });
+
   it('an explicit empty list means no requirements', () => {
     expect(loadPolicy('p.yaml', repo({ 'p.yaml': 'requirements: []\n' })).requirements).toEqual([]);
   });
