@@ -322,6 +322,34 @@ describe('pull requests', () => {
   }, 30_000);
 });
 
+describe('hostile element ids', () => {
+  it('cannot forge workflow commands, markup or mentions in any view', async () => {
+    const ids = ['::warning::forged', '<img src=x onerror=alert(1)>', '@acme/admins', 'pct%0A::error::x', '</details>'];
+    const design = (closed: boolean) =>
+      ['network:', '  name: hostile', 'nodes:', ...ids.map((id) => `  - id: ${JSON.stringify(id)}`), 'links:',
+        ...ids.slice(0, closed ? ids.length : -1).map((id, i) => `  - between: [${JSON.stringify(id)}, ${JSON.stringify(ids[(i + 1) % ids.length])}]`), ''].join('\n');
+    const author = path.join(work, 'hostile');
+    git(work, 'clone', '-q', `file://${scenario.origin}`, author);
+    const base = commit(author, 'hostile ring', { 'nets/hostile.net.yaml': design(true) });
+    const head = commit(author, 'hostile chain', { 'nets/hostile.net.yaml': design(false) });
+    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ comment: 'always' }));
+    expect(r.code, r.stdout + r.stderr).toBe(1);
+    for (const line of r.stdout.split('\n')) {
+      expect(line).not.toMatch(/^::(warning|error)::(forged|x)/);
+      if (line.startsWith('::')) expect(line).toMatch(/^::(error|warning|notice|debug|group|endgroup)[ :]/);
+    }
+    const errors = commands(r.stdout, 'error').filter((c) => c.props.file);
+    expect(errors.some((e) => e.message.includes('::warning::forged'))).toBe(true); // shown, as text
+    const strip = (md: string) => md.replace(/(`+)(?!`)[\s\S]*?[^`]\1(?!`)/g, '');
+    for (const md of [r.summary, api.comments[0].body]) {
+      expect(strip(md)).not.toMatch(/<img|@acme/);
+      expect(strip(md).match(/<details>/g)?.length ?? 0).toBe(strip(md).match(/<\/details>/g)?.length ?? 0);
+    }
+    const validate = await sarifValidator();
+    expect(validate(JSON.parse(readFileSync(path.join(author, r.outputs.sarif), 'utf8')))).toBe(true);
+  }, 30_000);
+});
+
 describe('an unreliable API never changes the verdict', () => {
   it('API down (500 on every call): bounded retries, a warning, the verdict stands', async () => {
     api.reads = 'error500';
