@@ -7,5 +7,6 @@ import { envelopeCommand } from './envelope.js';
 import { checkCommand } from './check.js';
 import { initCommand } from './init.js';
 import { demoCommand } from './demo.js';
+import { metricsCommand } from './metrics.js';
 
-export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand];
+export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand, metricsCommand];
