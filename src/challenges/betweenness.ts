@@ -8,8 +8,8 @@
 import type { CompactGraph } from '../graph/compact.js';
 import { createMask } from '../graph/mask.js';
 import type { AttackChallenge } from './types.js';
-import { accumulateBetweenness, allNodes, componentOf, createBrandesWorkspace } from './brandes.js';
-import { argmaxTied, rankScores } from './rank.js';
+import { accumulateBetweenness, adaptiveBetweenness, allNodes } from './brandes.js';
+import { rankScores } from './rank.js';
 import { eligibleUnits } from './units.js';
 
 export function nodeBetweenness(g: CompactGraph): Float64Array {
@@ -23,28 +23,7 @@ export function staticBetweennessOrder(g: CompactGraph, steps: number): Int32Arr
 }
 
 export function adaptiveBetweennessOrder(g: CompactGraph, steps: number): Int32Array {
-  const mask = createMask(g);
-  const ws = createBrandesWorkspace(g);
-  const score = new Float64Array(g.n);
-  accumulateBetweenness(g, mask, allNodes(g), score, null, ws);
-  const candidate = eligibleUnits(g, 'node');
-  const seen = new Uint8Array(g.n);
-  const comp = new Int32Array(g.n);
-  const out: number[] = [];
-  while (out.length < steps) {
-    const v = argmaxTied(score, candidate);
-    if (v < 0) break;
-    out.push(v);
-    const size = componentOf(g, mask, v, seen, comp);
-    mask.node[v] = 1;
-    candidate[v] = 0;
-    score[v] = 0;
-    if (size <= 1) continue;
-    for (let i = 0; i < size; i++) score[comp[i]] = 0;
-    if (size <= 3) continue; // what is left has at most two nodes per component: no betweenness
-    accumulateBetweenness(g, mask, comp.subarray(0, size), score, null, ws);
-  }
-  return Int32Array.from(out);
+  return adaptiveBetweenness(g, 'node', steps);
 }
 
 export const betweenness: AttackChallenge = {

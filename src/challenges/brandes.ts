@@ -7,7 +7,9 @@
 // need: removing an element changes scores only inside the component that held it.
 
 import type { CompactGraph } from '../graph/compact.js';
-import type { Mask } from '../graph/mask.js';
+import { createMask, type Mask } from '../graph/mask.js';
+import { argmaxTied } from './rank.js';
+import { eligibleUnits } from './units.js';
 
 export interface BrandesWorkspace {
   dist: Int32Array;
@@ -104,4 +106,43 @@ export function allNodes(g: CompactGraph): Int32Array {
   const a = new Int32Array(g.n);
   for (let v = 0; v < g.n; v++) a[v] = v;
   return a;
+}
+
+/**
+ * Adaptive betweenness attack on nodes or links: remove the element with the highest current
+ * score (ties to the lowest index), then recompute only the component that held it — every
+ * other component's scores are exactly unchanged. Node components left with at most two nodes
+ * have no betweenness, so they are not recomputed.
+ */
+export function adaptiveBetweenness(g: CompactGraph, kind: 'node' | 'link', steps: number): Int32Array {
+  const mask = createMask(g);
+  const ws = createBrandesWorkspace(g);
+  const nodes = kind === 'node';
+  const score = new Float64Array(nodes ? g.n : g.m);
+  accumulateBetweenness(g, mask, allNodes(g), nodes ? score : null, nodes ? null : score, ws);
+  const candidate = eligibleUnits(g, kind);
+  const seen = new Uint8Array(g.n);
+  const comp = new Int32Array(g.n);
+  const out: number[] = [];
+  while (out.length < steps) {
+    const u = argmaxTied(score, candidate);
+    if (u < 0) break;
+    out.push(u);
+    candidate[u] = 0;
+    const size = componentOf(g, mask, nodes ? u : g.linkSource[u], seen, comp);
+    if (nodes) {
+      mask.node[u] = 1;
+      score[u] = 0;
+      for (let i = 0; i < size; i++) score[comp[i]] = 0;
+      if (size <= 3) continue; // what is left has at most two nodes per component
+    } else {
+      mask.link[u] = 1;
+      for (let i = 0; i < size; i++) {
+        const v = comp[i];
+        for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) score[g.linkOf[p]] = 0;
+      }
+    }
+    accumulateBetweenness(g, mask, comp.subarray(0, size), nodes ? score : null, nodes ? null : score, ws);
+  }
+  return Int32Array.from(out);
 }

@@ -5,8 +5,8 @@
 import type { CompactGraph } from '../graph/compact.js';
 import { createMask } from '../graph/mask.js';
 import type { AttackChallenge } from './types.js';
-import { accumulateBetweenness, allNodes, componentOf, createBrandesWorkspace } from './brandes.js';
-import { argmaxTied, rankScores } from './rank.js';
+import { accumulateBetweenness, adaptiveBetweenness, allNodes } from './brandes.js';
+import { rankScores } from './rank.js';
 import { eligibleUnits } from './units.js';
 
 export function linkBetweenness(g: CompactGraph): Float64Array {
@@ -20,28 +20,7 @@ export function staticLinkBetweennessOrder(g: CompactGraph, steps: number): Int3
 }
 
 export function adaptiveLinkBetweennessOrder(g: CompactGraph, steps: number): Int32Array {
-  const mask = createMask(g);
-  const ws = createBrandesWorkspace(g);
-  const score = new Float64Array(g.m);
-  accumulateBetweenness(g, mask, allNodes(g), null, score, ws);
-  const candidate = eligibleUnits(g, 'link');
-  const seen = new Uint8Array(g.n);
-  const comp = new Int32Array(g.n);
-  const out: number[] = [];
-  while (out.length < steps) {
-    const e = argmaxTied(score, candidate);
-    if (e < 0) break;
-    out.push(e);
-    const size = componentOf(g, mask, g.linkSource[e], seen, comp);
-    mask.link[e] = 1;
-    candidate[e] = 0;
-    for (let i = 0; i < size; i++) {
-      const v = comp[i];
-      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) score[g.linkOf[p]] = 0;
-    }
-    accumulateBetweenness(g, mask, comp.subarray(0, size), null, score, ws);
-  }
-  return Int32Array.from(out);
+  return adaptiveBetweenness(g, 'link', steps);
 }
 
 export const linkBetweennessStatic: AttackChallenge = {
