@@ -11,7 +11,9 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { Annotation } from '../../src/report/annotations.js';
 import { commentMarker, renderComment } from '../../src/report/markdown.js';
 import type { Report } from '../../src/report/report.js';
+import { Ajv } from 'ajv';
 import {
+  emptyReport as emptyRunReport,
   readInputs,
   run,
   shouldWriteComment,
@@ -186,6 +188,14 @@ describe('events', () => {
     await run(env({ GITHUB_EVENT_NAME: 'schedule', GITHUB_EVENT_PATH: '' }), d);
     expect(rec.gateCalls[0].base).toBeUndefined();
     expect(rec.gateCalls[0]).toMatchObject({ head: MERGE_SHA, eventKind: 'schedule' });
+  });
+
+  it('the report of a run with nothing to judge follows the published report schema', () => {
+    const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
+    const validate = new Ajv({ allErrors: true, strict: false }).compile(JSON.parse(readFileSync(path.join(root, 'src', 'report', 'report.schema.json'), 'utf8')));
+    for (const r of [emptyRunReport({ mode: 'advise', policy: '', seed: undefined }, {}), emptyRunReport({ mode: 'enforce', policy: 'p.yaml', seed: 3 }, { base: BASE, head: HEAD })]) {
+      expect(validate(JSON.parse(JSON.stringify(r))), JSON.stringify(validate.errors)).toBe(true);
+    }
   });
 
   it('a deleted branch has nothing to judge and passes saying so', async () => {
