@@ -249,3 +249,22 @@ describe('paired comparison with common random numbers', () => {
     expect(q.se).toBeLessThan(0.05);
   });
 });
+
+describe('paired regional comparison', () => {
+  it('pairs epicentres by site id when the head adds a site', () => {
+    const nodes = Array.from({ length: 8 }, (_, i) => ({ id: `c${i}`, lat: 50 + (i % 3) * 0.3, lon: 8 + i * 0.4 }));
+    const links = nodes.slice(1).map((v, i) => ({ a: nodes[i].id, b: v.id }));
+    const base = design(nodes, [...links, { a: 'c0', b: 'c4' }]);
+    const head = design([{ id: 'new', lat: 50.1, lon: 9 }, ...nodes], [...links, { a: 'c0', b: 'c4' }, { a: 'new', b: 'c2' }]);
+    const spec: EvaluationSpec = { r: single('largest_component'), seed: 1, challenges: [{ challenge: 'regional', until: 60, points: 4 }] };
+    const eb = evaluateDesign(base, spec);
+    const eh = evaluateDesign(head, spec);
+    expect(eh.labels.get('regional')![0]).toBe('new');
+    const same = pairedStatistic(eb, eb, 'regional', { kind: 'mean' }, 40);
+    expect(same).toEqual({ base: same.base, head: same.base, delta: 0, se: 0 });
+    const p = pairedStatistic(eb, eh, 'regional', { kind: 'mean' }, 40);
+    expect(p.base).toBe(eb.evaluation.envelopes[0].mean[2]);
+    expect(p.head).toBe(eh.evaluation.envelopes[0].mean[2]);
+    expect(Number.isFinite(p.se)).toBe(true);
+  });
+});
