@@ -36,6 +36,8 @@ export interface EvaluationPlan {
   items: PlannedChallenge[];
   /** Reasons the evaluation as a whole was reduced or challenges skipped. */
   degraded: string[];
+  /** Estimated work in element visits after any reduction (see evaluate.ts). */
+  work: number;
 }
 
 export type Task =

@@ -141,7 +141,11 @@ export function planEvaluation(g: CompactGraph, spec: EvaluationSpec): Evaluatio
     });
   }
   for (const it of items) if (it.degraded) degraded.push(`${it.params.challenge}: ${it.degraded}`);
-  return { r: spec.r, items, degraded };
+  const work = items.reduce((s, it) => {
+    const e = estimate(g, it, rp, free);
+    return s + e.band + e.cases + e.fixed + e.worst;
+  }, 0);
+  return { r: spec.r, items, degraded, work: work * visits };
 }
 
 function note(it: PlannedChallenge, reason: string): void {
@@ -164,7 +168,7 @@ function estimate(g: CompactGraph, it: PlannedChallenge, rp: number, free: boole
   const e: Estimate = { band: 0, cases: 0, fixed: 0, worst: 0, worstExact: false, realizations: 0, totalCases: 0 };
   const kind = challengeKind(g, p);
   if (it.type === 'band') {
-    const m = p.challenge === 'regional' ? sitesWithCoordinates(g).length : p.realizations;
+    const m = p.challenge === 'regional' ? (p.epicentres ?? sitesWithCoordinates(g).length) : p.realizations;
     const x = makeGrid(p.until, p.points, p.at);
     const count = unitCount(g, kind);
     const distinct = p.challenge === 'regional' ? x.length : new Set(x.map((v) => Math.round(v * count))).size;

@@ -16,6 +16,9 @@ import { planTasks, runTask, type EvaluationPlan, type Task, type TaskResult } f
 import { assembleEvaluation, planEvaluation, type DesignEvaluation, type EvaluationSpec } from '../envelope/evaluate.js';
 import type { ResultMessage, WorkerInit } from './protocol.js';
 
+/** Below this estimated work (element visits, about 0.1 s of engine time) no thread is started. */
+export const PARALLEL_MIN_WORK = 5e7;
+
 export interface WorkerEntry {
   /** The worker module. */
   url: URL;
@@ -37,11 +40,22 @@ function startWorker(entry: WorkerEntry, init: WorkerInit): Worker {
   return new Worker(boot, { eval: true, workerData: init });
 }
 
-export async function evaluateDesignParallel(g: CompactGraph, spec: EvaluationSpec, threads: number): Promise<DesignEvaluation> {
+export interface ParallelOptions {
+  /** Run inline below this estimated work (default PARALLEL_MIN_WORK; 0 = always use threads). */
+  minWork?: number;
+}
+
+export async function evaluateDesignParallel(
+  g: CompactGraph,
+  spec: EvaluationSpec,
+  threads: number,
+  options: ParallelOptions = {},
+): Promise<DesignEvaluation> {
   if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be an integer ≥ 1, got ${threads}`);
   const plan = planEvaluation(g, spec);
   const tasks = planTasks(plan, g);
-  const workers = Math.min(threads, tasks.length);
+  // Small evaluations run inline: starting threads would cost more than it saves.
+  const workers = plan.work < (options.minWork ?? PARALLEL_MIN_WORK) ? 1 : Math.min(threads, tasks.length);
   const results = workers <= 1 ? tasks.map((t) => runTask(g, plan, t)) : await runOnWorkers(g, plan, tasks, workers);
   return assembleEvaluation(g, plan, tasks, results);
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { evaluateDesignParallel, workerEntry } from '../../src/parallel/pool.js';
-import { evaluateDesign, type EvaluationSpec } from '../../src/envelope/evaluate.js';
+import { evaluateDesignParallel, PARALLEL_MIN_WORK, workerEntry } from '../../src/parallel/pool.js';
+import { evaluateDesign, planEvaluation, type EvaluationSpec } from '../../src/envelope/evaluate.js';
 import { preferentialGraph } from '../envelope/graphs.js';
 
 describe('deterministic parallel realizations', () => {
@@ -17,8 +17,8 @@ describe('deterministic parallel realizations', () => {
   };
 
   it('gives byte-identical JSON for 1 and 2 worker threads, and equals the synchronous evaluation', async () => {
-    const one = await evaluateDesignParallel(g, spec, 1);
-    const two = await evaluateDesignParallel(g, spec, 2);
+    const one = await evaluateDesignParallel(g, spec, 1, { minWork: 0 });
+    const two = await evaluateDesignParallel(g, spec, 2, { minWork: 0 });
     const sync = evaluateDesign(g, spec);
     const json = JSON.stringify(one.evaluation);
     expect(JSON.stringify(two.evaluation)).toBe(json);
@@ -34,6 +34,13 @@ describe('deterministic parallel realizations', () => {
     const bundled = workerEntry('file:///x/dist/cli.js');
     expect(bundled.url.href).toBe('file:///x/dist/worker.js');
     expect(bundled.loader).toBeUndefined();
+  });
+
+  it('runs small evaluations inline (no thread would pay for itself) with the same result', async () => {
+    const small = { ...spec, challenges: [{ challenge: 'random-nodes' as const, realizations: 5 }] };
+    const plan = planEvaluation(g, small);
+    expect(plan.work).toBeLessThan(PARALLEL_MIN_WORK);
+    expect(JSON.stringify((await evaluateDesignParallel(g, small, 2)).evaluation)).toBe(JSON.stringify(evaluateDesign(g, small).evaluation));
   });
 
   it('rejects a thread count that is not a positive integer', async () => {
