@@ -101,8 +101,11 @@ async function sarifValidator() {
   return ajv.compile(JSON.parse(await readFile(SARIF_SCHEMA, 'utf8')));
 }
 
+let bundleFile = '';
+
 beforeAll(() => {
-  buildBundle();
+  bundleFile = buildBundle();
+  expect(readdirSync(path.dirname(bundleFile))).toEqual(expect.arrayContaining(['index.js', 'worker.js']));
   const root = mkdtempSync(path.join(tmpdir(), 'nb-e2e-'));
   const author = path.join(root, 'author');
   const origin = path.join(root, 'origin.git');
@@ -138,6 +141,7 @@ beforeAll(() => {
 
 afterAll(() => {
   if (scenario) rmSync(scenario.root, { recursive: true, force: true });
+  if (bundleFile) rmSync(path.dirname(path.dirname(bundleFile)), { recursive: true, force: true });
 });
 
 beforeEach(async () => {

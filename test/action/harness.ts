@@ -4,17 +4,26 @@
 // is a real git clone. Also builds the small repositories the end-to-end tests use.
 
 import { execFileSync, spawn } from 'node:child_process';
-import { mkdirSync, readFileSync, writeFileSync, existsSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, symlinkSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parse as parseYaml } from 'yaml';
 
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
-export const bundle = path.join(repoRoot, 'dist', 'index.js');
+let bundle = '';
 
-/** Build dist/ exactly as `npm run build` does. */
-export function buildBundle(): void {
-  execFileSync(process.execPath, [path.join(repoRoot, '.ci', 'build.mjs')], { cwd: repoRoot, stdio: 'pipe' });
+/**
+ * Build the bundle with the build script of `npm run build`, into a scratch folder whose `src`
+ * links to the sources: the same dist/index.js (and dist/worker.js beside it), without
+ * rewriting the repository's dist/ under anyone running it meanwhile.
+ */
+export function buildBundle(): string {
+  const out = mkdtempSync(path.join(tmpdir(), 'nb-bundle-'));
+  symlinkSync(path.join(repoRoot, 'src'), path.join(out, 'src'));
+  execFileSync(process.execPath, [path.join(repoRoot, '.ci', 'build.mjs')], { cwd: out, stdio: 'pipe' });
+  bundle = path.join(out, 'dist', 'index.js');
+  return bundle;
 }
 
 const GIT_ENV = {
@@ -139,6 +148,7 @@ export interface RunOptions {
 let runs = 0;
 
 export function runAction(o: RunOptions): Promise<RunResult> {
+  if (!bundle) throw new Error('call buildBundle() first');
   const n = runs++;
   const dir = path.join(o.runnerTemp, `run-${n}`);
   mkdirSync(dir, { recursive: true });
