@@ -11,6 +11,7 @@ import { lstatSync, readFileSync, readdirSync, statSync, writeFileSync, appendFi
 import path from 'node:path';
 import * as core from '@actions/core';
 import { formatDiagnostic, isNetbraceError } from '../errors.js';
+import type { GateRequest, GateResult } from '../run-gate.js';
 import { planAnnotations, type Annotation } from '../report/annotations.js';
 import { logText, oneLine } from '../report/escape.js';
 import { commentDigest, commentMarker, renderComment, renderSummary, reportDigest } from '../report/markdown.js';
@@ -34,26 +35,11 @@ import {
 import { WorkspacePathError, prepareWrite, resolveInWorkspace, workspaceRelative } from './workspace-paths.js';
 
 // ---------------------------------------------------------------------------------------------
-// The gate, as the Action sees it (src/run-gate.ts implements it).
+// Seams
 
-export interface GateRequestLike {
-  base?: string;
-  head?: string;
-  worktree?: boolean;
-  paths?: string[];
-  policyPath?: string;
-  policySource: 'base' | 'head';
-  mode: 'enforce' | 'advise';
-  seed?: number;
-  threads?: number;
-  shard?: { index: number; total: number };
-  eventKind?: 'pull-request' | 'push' | 'schedule' | 'local';
-}
-
-export interface GateResultLike {
-  report: Report;
-  exitCode: number;
-}
+/** The gate as the Action calls it (src/run-gate.ts, with git readers for the repository at `root`). */
+export type GateRequestLike = GateRequest;
+export type GateResultLike = GateResult;
 
 export interface GitResult {
   code: number;
@@ -414,7 +400,6 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     const notes: string[] = [];
 
     let report: Report;
-    let gateExit = 0;
     let lines = new Map<string, Set<number>>();
     if (inputs.merge) {
       const folder = resolveInWorkspace(workspace, workspace, inputs.merge, 'merge');
@@ -429,7 +414,6 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
         throw error;
       }
       report.mode = inputs.mode;
-      gateExit = report.verdict === 'fail' ? 1 : 0;
       const merged = report.shards;
       if (merged) {
         const missing = Array.from({ length: merged.total }, (_, i) => i + 1).filter((k) => !merged.merged.includes(k));
@@ -493,11 +477,9 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       } else {
         const result = await deps.gate(request, root);
         report = result.report;
-        gateExit = result.exitCode;
         if (base && head) lines = await changedLines(deps, root, base, head);
       }
     }
-    if (gateExit === 2) return fail('netbrace: the gate stopped with a configuration error (see the messages above)', 2);
 
     const shardJob = Boolean(inputs.shard);
     const artifacts: string[] = [];
