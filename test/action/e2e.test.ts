@@ -326,6 +326,24 @@ describe('pull requests', () => {
   }, 30_000);
 });
 
+describe('errors', () => {
+  it('a broken policy: one failure message with its line, an annotation on the policy, in advise mode too', async () => {
+    const author = path.join(work, 'broken-policy');
+    git(work, 'clone', '-q', `file://${scenario.origin}`, author);
+    const base = commit(author, 'typo in the policy', { '.netbrace.yaml': POLICY.replace('realizations: 40', 'realisations: 40') });
+    const head = commit(author, 'chain', { [DESIGN]: ring([], CHAIN_DROP) });
+    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ mode: 'advise' }));
+    expect(r.code).toBe(1);
+    const failed = failedMessages(r);
+    expect(failed).toHaveLength(1);
+    expect(failed[0]).toMatch(/^netbrace: \.netbrace\.yaml:\d+:\d+: /);
+    const onPolicy = commands(r.stdout, 'error').filter((c) => c.props.file === '.netbrace.yaml');
+    expect(onPolicy).toHaveLength(1);
+    expect(Number(onPolicy[0].props.line)).toBe(POLICY.split('\n').findIndex((l) => l.includes('realizations')) + 1);
+    expect(r.stderr).not.toMatch(/at .*\.js:\d+/); // no stack trace
+  }, 30_000);
+});
+
 describe('hostile element ids', () => {
   it('cannot forge workflow commands, markup or mentions in any view', async () => {
     const ids = ['::warning::forged', '<img src=x onerror=alert(1)>', '@acme/admins', 'pct%0A::error::x', '</details>'];
