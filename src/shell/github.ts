@@ -118,7 +118,11 @@ export interface FoundComment {
   url?: string;
 }
 
-/** The first comment on the issue whose body contains `marker` (every page is read). */
+/**
+ * The comment on the issue whose body contains `marker` (every page is read). Anyone can paste
+ * the marker into a comment of their own, so a comment written by a bot account (the workflow
+ * token's github-actions[bot], or an app) is preferred over the first match.
+ */
 export async function findComment(client: Client, ref: IssueRef, marker: string): Promise<FoundComment | undefined> {
   const iterator = client.paginate.iterator(client.rest.issues.listComments, {
     owner: ref.owner,
@@ -126,12 +130,16 @@ export async function findComment(client: Client, ref: IssueRef, marker: string)
     issue_number: ref.issueNumber,
     per_page: 100,
   });
+  let first: FoundComment | undefined;
   for await (const page of iterator) {
     for (const c of page.data) {
-      if (typeof c.body === 'string' && c.body.includes(marker)) return { id: c.id, body: c.body, url: c.html_url };
+      if (typeof c.body !== 'string' || !c.body.includes(marker)) continue;
+      const found = { id: c.id, body: c.body, url: c.html_url };
+      if (c.user?.type === 'Bot') return found;
+      first ??= found;
     }
   }
-  return undefined;
+  return first;
 }
 
 export type CommentAction = 'created' | 'updated' | 'unchanged' | 'skipped';

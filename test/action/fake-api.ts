@@ -20,7 +20,7 @@ export interface RecordedRequest {
 export interface FakeComment {
   id: number;
   body: string;
-  user: { login: string };
+  user: { login: string; type?: string };
 }
 
 export interface FakeApi {
@@ -107,7 +107,7 @@ export async function startFakeApi(): Promise<FakeApi> {
       if ((m = u.pathname.match(/^\/repos\/[^/]+\/[^/]+\/issues\/(\d+)\/comments$/))) {
         if (req.method === 'GET') return paginate(req, res, api.comments, query);
         if (req.method === 'POST') {
-          const c = { id: nextId++, body: String((body as { body: string }).body), user: { login: 'github-actions[bot]' } };
+          const c = { id: nextId++, body: String((body as { body: string }).body), user: { login: 'github-actions[bot]', type: 'Bot' } };
           api.comments.push(c);
           return send(res, 201, { ...c, html_url: `${api.url}/comment/${c.id}` });
         }

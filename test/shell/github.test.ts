@@ -40,6 +40,12 @@ describe('the living comment', () => {
     expect(third.action).toBe('unchanged');
   }, 20_000);
 
+  it('prefers its own (bot) comment over a pasted copy of the marker', async () => {
+    api.comments.push({ id: 1, body: `${marker}\nfake, pasted by someone`, user: { login: 'someone', type: 'User' } });
+    api.comments.push({ id: 2, body: `${marker}\nreal`, user: { login: 'github-actions[bot]', type: 'Bot' } });
+    expect((await findComment(client(), ref, marker))?.id).toBe(2);
+  });
+
   it('lets the caller skip the write', async () => {
     const r = await upsertComment(client(), ref, marker, `${marker}\nx`, () => false);
     expect(r.action).toBe('skipped');
