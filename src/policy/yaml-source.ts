@@ -4,6 +4,7 @@
 
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, type Document, type Node } from 'yaml';
 import { PolicyError } from '../errors.js';
+import { MAX_NESTING, positionOf, yamlNestingExceeded } from '../topology/nesting.js';
 import type { Where } from './types.js';
 
 export type Segment = string | number;
@@ -20,6 +21,11 @@ export class YamlSource {
   constructor(text: string, file: string) {
     this.file = file;
     this.lines = new LineCounter();
+    // Measured before parsing: the yaml package recurses once per level (see nesting.ts).
+    const deep = yamlNestingExceeded(text);
+    if (deep >= 0) {
+      throw new PolicyError(`the policy nests deeper than ${MAX_NESTING} levels`, { file, ...positionOf(text, deep) }, 'a policy needs a few levels of nesting; flatten this structure');
+    }
     this.doc = parseDocument(text, { lineCounter: this.lines, prettyErrors: false, uniqueKeys: true });
     const problem = this.doc.errors[0];
     if (problem) {

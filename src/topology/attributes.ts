@@ -60,7 +60,9 @@ export function toNumber(v: unknown): number | undefined {
   if (typeof v !== 'string') return undefined;
   const s = v.trim();
   if (s === '' || !/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(s)) return undefined;
-  return Number(s);
+  // "1e999" is well formed but overflows to Infinity: not a length anyone measured.
+  const n = Number(s);
+  return Number.isFinite(n) ? n : undefined;
 }
 
 export function toFlag(v: unknown): boolean | undefined {

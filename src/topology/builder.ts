@@ -57,6 +57,14 @@ export interface BuilderOptions {
   duplicateLinkIds?: 'warn' | 'error';
 }
 
+/**
+ * Longest element id accepted, in UTF-16 code units. Ids are repeated in every message,
+ * table row, annotation and fingerprint that names an element, and compared by edit distance
+ * for "did you mean"; a bound keeps a hostile 1 MB id from multiplying into every output.
+ * Long human names belong in `label`.
+ */
+export const MAX_ID_LENGTH = 256;
+
 /** Link end separator in derived ids and keys (an em dash, as in linkKey). */
 const DASH = '\u2014';
 
@@ -107,6 +115,16 @@ export class TopologyBuilder {
     });
   }
 
+  /** Refuses an id longer than MAX_ID_LENGTH (LimitError at the element). */
+  checkId(id: string, what: string, pos: SourcePos | undefined): void {
+    if (id.length <= MAX_ID_LENGTH) return;
+    throw new LimitError(
+      `${what} is ${id.length} characters long; netbrace accepts ids of at most ${MAX_ID_LENGTH} ("${id.slice(0, 24)}\u2026")`,
+      { file: this.file, line: pos?.line ?? 0, column: pos?.column ?? 0 },
+      'use a short id and put the long name in a label',
+    );
+  }
+
   private countElement(pos: SourcePos): void {
     if (this.nodes.length + this.links.length >= this.maxElements) {
       throw new LimitError(
@@ -118,6 +136,7 @@ export class TopologyBuilder {
   }
 
   addNode(input: NodeInput): void {
+    this.checkId(input.id, 'a node id', input.pos);
     const first = this.nodeLine.get(input.id);
     if (first !== undefined) {
       throw this.error(`duplicate node id "${input.id}"`, input.pos, `first defined on line ${first.line}; node ids must be unique`);
@@ -136,6 +155,7 @@ export class TopologyBuilder {
 
   private requireNode(id: string, pos: SourcePos, what: string): void {
     if (this.nodeLine.has(id)) return;
+    this.checkId(id, `a node id in ${what}`, pos);
     throw this.error(
       `${what} refers to unknown node "${id}"`,
       pos,
@@ -145,6 +165,8 @@ export class TopologyBuilder {
 
   /** Adds a link; returns false when it was dropped (a self-loop). */
   addLink(input: LinkInput): boolean {
+    if (input.id !== undefined) this.checkId(input.id, 'a link id', input.pos);
+    for (const g of input.riskGroups ?? []) this.checkId(g, 'a risk group id of a link', input.pos);
     const what = input.what ?? (input.id !== undefined ? `link "${input.id}"` : `link on line ${input.pos.line}`);
     this.requireNode(input.source, input.sourcePos ?? input.pos, what);
     this.requireNode(input.target, input.targetPos ?? input.pos, what);
@@ -195,6 +217,7 @@ export class TopologyBuilder {
   }
 
   addRiskGroup(group: RiskGroup): void {
+    this.checkId(group.id, 'a risk group id', group.pos);
     const first = this.riskGroupPos.get(group.id);
     if (first) throw this.error(`duplicate risk group id "${group.id}"`, group.pos, `first described on line ${first.line}`);
     this.riskGroupPos.set(group.id, group.pos);

@@ -6,6 +6,7 @@
 import type { DesignFormat, SourcePos, Topology } from './model.js';
 import { TopologyBuilder, type BuilderOptions } from './builder.js';
 import { mapLinkAttributes, mapNodeAttributes } from './attributes.js';
+import { MAX_NESTING } from './nesting.js';
 
 type GmlValue = number | string | GmlPair[];
 
@@ -39,6 +40,8 @@ class GmlReader {
   private i = 0;
   private line = 1;
   private lineStart = 0;
+  /** Lists open; bounded so that hostile nesting is an error, not a stack overflow. */
+  private depth = 0;
 
   constructor(
     private readonly text: string,
@@ -103,8 +106,13 @@ class GmlReader {
     if (this.i >= t.length) throw this.b.error(`key "${key}" has no value`, pos, 'give a number, a "string" or a [ list ]');
     const c = t[this.i];
     if (c === '[') {
+      if (++this.depth > MAX_NESTING) {
+        throw this.b.error(`lists nest deeper than ${MAX_NESTING} levels`, vpos, 'a GML design needs a few levels (graph, node, graphics); flatten this structure');
+      }
       this.i++;
-      return { key, value: this.readList(vpos), raw: '', pos };
+      const value = this.readList(vpos);
+      this.depth--;
+      return { key, value, raw: '', pos };
     }
     if (c === '"') {
       const start = this.i + 1;

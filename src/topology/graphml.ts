@@ -8,6 +8,7 @@ import { SaxesParser, type SaxesTagPlain } from 'saxes';
 import type { DesignFormat, SourcePos, Topology } from './model.js';
 import { TopologyBuilder, type BuilderOptions } from './builder.js';
 import { mapLinkAttributes, mapNodeAttributes, toFlag, toNumber } from './attributes.js';
+import { MAX_NESTING } from './nesting.js';
 
 interface KeyDef {
   name: string;
@@ -94,6 +95,9 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
     const attrs = tag.attributes as Record<string, string>;
     const pos = tagStart;
     stack.push(name);
+    if (stack.length > MAX_NESTING) {
+      throw b.error(`elements nest deeper than ${MAX_NESTING} levels`, pos, 'GraphML needs a few levels (graphml, graph, node, data); flatten this structure');
+    }
     if (dataKey !== undefined) {
       dataNested = true; // markup inside <data> (drawing tools): keep only plain text values
       return;

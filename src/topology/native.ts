@@ -12,6 +12,7 @@ import { DesignError } from '../errors.js';
 import type { DesignFormat, SourcePos, Topology } from './model.js';
 import { TopologyBuilder, type BuilderOptions } from './builder.js';
 import { didYouMean } from './suggest.js';
+import { MAX_NESTING, positionOf, yamlNestingExceeded } from './nesting.js';
 
 /**
  * Aliases a document may expand. Real designs rarely use anchors at all; the yaml package's
@@ -48,13 +49,15 @@ class Locator {
   private child(node: unknown, key: string | number): unknown {
     if (isAlias(node)) node = node.resolve(this.doc);
     if (!isCollection(node)) return undefined;
+    // A list index is direct: scanning the items would make every lookup O(n), and a
+    // design's positions O(n²) (minutes for a few tens of thousands of nodes).
+    if (typeof key === 'number' && !isMap(node)) return node.items[key];
     for (const item of node.items) {
       if (isPair(item)) {
         const k = isScalar(item.key) ? item.key.value : item.key;
         if (String(k) === String(key)) return item.value;
       }
     }
-    if (typeof key === 'number' && !isMap(node)) return node.items[key];
     return undefined;
   }
 
@@ -204,10 +207,18 @@ interface NativeDesign {
 }
 
 export function parseNative(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'native-yaml'): Topology {
+  const kindWord = format === 'native-json' ? 'JSON' : 'YAML';
+  const deep = yamlNestingExceeded(text);
+  if (deep >= 0) {
+    throw new DesignError(
+      `the ${kindWord} nests deeper than ${MAX_NESTING} levels`,
+      { file, ...positionOf(text, deep) },
+      'a design needs a few levels of nesting; flatten this structure',
+    );
+  }
   const lines = new LineCounter();
   const doc = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: true, strict: true });
   const loc = new Locator(doc, lines);
-  const kindWord = format === 'native-json' ? 'JSON' : 'YAML';
   if (doc.errors.length > 0) {
     const e = doc.errors[0];
     if (e.code === 'DUPLICATE_KEY') {

@@ -23,12 +23,16 @@ export function levenshtein(a: string, b: string): number {
 
 /** Candidates compared at most; suggestions are a courtesy on the error path, not a search. */
 const MAX_CANDIDATES = 5000;
+/** Longest word a suggestion is looked for. */
+const MAX_WORD = 64;
 
 /**
  * The candidate closest to `word` (case-insensitive), or undefined when none is within
  * about a third of the word's length (at least 1, at most 3 edits).
  */
 export function closest(word: string, candidates: Iterable<string>): string | undefined {
+  // Edit distance is quadratic in the length: long words (hostile ids) get no suggestion.
+  if (word.length > MAX_WORD) return undefined;
   const limit = Math.min(3, Math.max(1, Math.ceil(word.length / 3)));
   const w = word.toLowerCase();
   let best: string | undefined;

@@ -1,0 +1,113 @@
+// Shared pieces of the hardening suite: where the real inputs are, how an outcome is judged
+// (a parsed result, or a located NetbraceError — nothing else), and the case-count lines the
+// suite prints so that a CI log shows how much was fuzzed.
+
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { isNetbraceError, type NetbraceError } from '../../src/errors.js';
+
+export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
+
+/** The Internet Topology Zoo (Knight et al., IEEE JSAC 29(9):1765–1775, 2011; CC BY 4.0). */
+export const ZOO = path.resolve(repoRoot, '..', 'shared', 'datasets', 'topology-zoo');
+
+/** One fixed seed for every property in the suite (fast-check replays it exactly). */
+export const SEED = 20_240_817;
+
+export interface SeedFile {
+  name: string;
+  text: string;
+}
+
+/**
+ * The `count` smallest zoo files of a format above `minBytes`, in name order: real files
+ * written by several tools, small enough that thousands of mutated copies parse in seconds.
+ */
+export function zooSeeds(format: 'gml' | 'graphml', count: number, minBytes = 2_000): SeedFile[] {
+  const dir = path.join(ZOO, format);
+  return readdirSync(dir)
+    .filter((f) => f.endsWith(`.${format}`))
+    .map((f) => ({ f, size: statSync(path.join(dir, f)).size }))
+    .filter((x) => x.size >= minBytes)
+    .sort((a, b) => a.size - b.size || (a.f < b.f ? -1 : 1))
+    .slice(0, count)
+    .sort((a, b) => (a.f < b.f ? -1 : 1))
+    .map(({ f }) => ({ name: `topology-zoo/${format}/${f}`, text: readFileSync(path.join(dir, f), 'utf8') }));
+}
+
+export function fixtureText(...parts: string[]): string {
+  return readFileSync(path.join(repoRoot, 'fixtures', ...parts), 'utf8');
+}
+
+/** Lines in a text as an editor counts them (a final newline opens no new line of content). */
+export function lineCount(text: string): number {
+  if (text === '') return 0;
+  let n = 1;
+  for (let i = text.indexOf('\n'); i >= 0; i = text.indexOf('\n', i + 1)) n++;
+  return n;
+}
+
+export type Outcome<T> = { ok: true; value: T; ms: number } | { ok: false; error: NetbraceError; ms: number };
+
+/** Runs `fn`: a value or a NetbraceError; any other exception is rethrown (the property fails). */
+export function attempt<T>(fn: () => T): Outcome<T> {
+  const t0 = performance.now();
+  try {
+    const value = fn();
+    return { ok: true, value, ms: performance.now() - t0 };
+  } catch (e) {
+    if (isNetbraceError(e)) return { ok: false, error: e, ms: performance.now() - t0 };
+    const err = e instanceof Error ? e : new Error(String(e));
+    throw new Error(`not a NetbraceError: ${err.name}: ${err.message}\n${err.stack ?? ''}`);
+  }
+}
+
+/**
+ * Problems with an error's location for an input `text` named `files` (empty: fine). The
+ * error must name one of the files; where the input has lines, the line must be one of them
+ * (0 is allowed only for whole-file limits: the size limit).
+ */
+export function locationProblems(e: NetbraceError, text: string, files: readonly string[]): string[] {
+  const problems: string[] = [];
+  if (!files.includes(e.file)) problems.push(`names file "${e.file}", not one of ${files.join(', ')}`);
+  const lines = lineCount(text);
+  const wholeFile = e.kind === 'limit' && e.line === 0 && /larger than the limit/.test(e.message);
+  if (lines > 0 && !wholeFile) {
+    if (!(e.line >= 1)) problems.push(`line ${e.line} < 1`);
+    if (e.line > lines + 1) problems.push(`line ${e.line} is past the end (${lines} lines)`);
+  }
+  if (!(e.column >= 0)) problems.push(`column ${e.column} < 0`);
+  if (e.message.trim() === '') problems.push('empty message');
+  if (e.message.length > 4000) problems.push(`message of ${e.message.length} characters`);
+  return problems;
+}
+
+/** Prints the count line the issue asks for, e.g. "fuzz: graphml 2000 cases". */
+export function reportCount(theme: string, what: string, cases: number, extra = ''): void {
+  console.log(`${theme}: ${what} ${cases} cases${extra ? ` (${extra})` : ''}`);
+}
+
+/** A tally of outcomes, for the count lines. */
+export class Tally {
+  cases = 0;
+  parsed = 0;
+  refused = 0;
+  slowestMs = 0;
+  kinds = new Map<string, number>();
+
+  add(o: Outcome<unknown>): void {
+    this.cases++;
+    this.slowestMs = Math.max(this.slowestMs, o.ms);
+    if (o.ok) this.parsed++;
+    else {
+      this.refused++;
+      this.kinds.set(o.error.kind, (this.kinds.get(o.error.kind) ?? 0) + 1);
+    }
+  }
+
+  summary(): string {
+    const kinds = [...this.kinds].sort().map(([k, n]) => `${k} ${n}`).join(', ');
+    return `${this.parsed} parsed, ${this.refused} refused${kinds ? ` [${kinds}]` : ''}, slowest ${this.slowestMs.toFixed(0)} ms`;
+  }
+}
