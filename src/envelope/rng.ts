@@ -48,7 +48,15 @@ export function hashIds(ids: readonly string[]): Uint32Array {
 
 /** The key of one element in one realization: hash(seed, realization, element id). */
 export function elementKey(seedW: number, realization: number, idHash: number): number {
-  const r = mix32((Math.imul(realization + 1, 0x9e3779b9) ^ seedW) >>> 0);
+  return keyOf(realizationWord(seedW, realization), idHash);
+}
+
+/** The part of a key shared by every element of one realization. */
+function realizationWord(seedW: number, realization: number): number {
+  return mix32((Math.imul(realization + 1, 0x9e3779b9) ^ seedW) >>> 0);
+}
+
+function keyOf(r: number, idHash: number): number {
   return mix32((idHash ^ r) + Math.imul(r, 0x27d4eb2d) + 0x165667b1);
 }
 
@@ -88,9 +96,10 @@ export function randomOrder(
   const counts = ws.counts;
   let idx = out;
   let count = 0;
+  const r = realizationWord(seedW, realization);
   for (let i = 0; i < n; i++) {
     if (eligible !== null && eligible[i] === 0) continue;
-    keys[count] = elementKey(seedW, realization, idHash[i]);
+    keys[count] = keyOf(r, idHash[i]);
     idx[count++] = i;
   }
   for (let shift = 0; shift < 32; shift += 11) {
