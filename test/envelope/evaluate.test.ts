@@ -119,6 +119,31 @@ describe('evaluateDesign', () => {
     expect(ev.evaluation.degraded).toEqual(plan.degraded);
   });
 
+  it('switches an exact worst-case search to greedy when the budget is too small, and says so', () => {
+    const spec: EvaluationSpec = { r: single('efficiency'), seed: 1, challenges: [{ challenge: 'random-nodes', realizations: 10, worstCase: 2 }], budget: { maxWork: 2e7 } };
+    const ev = evaluateDesign(g, spec);
+    expect(ev.evaluation.envelopes[0].worstCase!.method).toBe('greedy');
+    expect(ev.evaluation.degraded.join()).toMatch(/worst-case search greedy instead of exact/);
+    const full = evaluateDesign(g, { ...spec, budget: undefined });
+    expect(full.evaluation.envelopes[0].worstCase!.method).toBe('exact');
+    expect(full.evaluation.envelopes[0].worstCase!.values[1]).toBeLessThanOrEqual(ev.evaluation.envelopes[0].worstCase!.values[1]);
+  });
+
+  it('measures the attack gap against the most harmful attack of the same kind', () => {
+    const ev = evaluateDesign(g, {
+      r: single('largest_component'),
+      seed: 1,
+      challenges: [{ challenge: 'random-nodes', realizations: 50 }, { challenge: 'degree', until: 0.5 }, { challenge: 'betweenness-adaptive', until: 0.5 }],
+    });
+    const env = ev.evaluation.envelopes[0];
+    const worst = [...ev.evaluation.attacks].sort((a, b) => a.area - b.area)[0];
+    expect(env.attackGap!.attack).toBe(worst.challenge);
+    const lo = env.quantiles['0.1'].value;
+    const expected = env.x.slice(1).reduce((s, x, i) => s + lo[i + 1] - worst.values[Math.round(x * 60)], 0) / (env.x.length - 1);
+    expect(env.attackGap!.value).toBeCloseTo(expected, 12);
+    expect(env.attackGap!.value).toBeGreaterThan(0);
+  });
+
   it('skips challenges the design cannot support, with a reason', () => {
     const ev = evaluateDesign(g, { r: single('largest_component'), seed: 1, challenges: [{ challenge: 'regional' }, { challenge: 'risk-groups' }] });
     expect(ev.evaluation.envelopes).toHaveLength(0);
