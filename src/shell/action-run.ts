@@ -413,7 +413,8 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
         if (m && isNetbraceError(error)) throw new InputError(`shard report ${path.basename(names[Number(m[1]) - 1] ?? '?')}: ${error.message.replace(/^report \d+ /, '')}`);
         throw error;
       }
-      report.mode = inputs.mode;
+      // The report keeps the mode its runs had (what the comment says); whether this step
+      // fails follows this job's own "mode" input.
       const merged = report.shards;
       if (merged) {
         const missing = Array.from({ length: merged.total }, (_, i) => i + 1).filter((k) => !merged.merged.includes(k));

@@ -291,6 +291,34 @@ describe('pull requests', () => {
     expect(api.comments).toHaveLength(0);
   }, 30_000);
 
+  it('fork, two workflows: the pull_request run uploads the report, the workflow_run run posts it', async () => {
+    const ws = checkout(scenario.fail, { shallow: false });
+    const first = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'never' }));
+    expect(first.code).toBe(1);
+    expect(api.requests).toEqual([]);
+    // upload-artifact / download-artifact: the .netbrace-out folder, plus the pr-number file.
+    const { cpSync, writeFileSync } = await import('node:fs');
+    const second = path.join(work, 'comment-ws');
+    cpSync(path.join(ws, '.netbrace-out'), path.join(second, 'netbrace-untrusted'), { recursive: true });
+    writeFileSync(path.join(second, 'netbrace-untrusted', 'pr-number'), '7\n');
+    const number = readFileSync(path.join(second, 'netbrace-untrusted', 'pr-number'), 'utf8').slice(0, 16).replace(/[^0-9]/g, '');
+    api.prHeadSha = scenario.fail;
+    const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('fork-comment', 'comment', { 'steps.pr.outputs.number': number }) };
+    const event = { workflow_run: { id: 99, event: 'pull_request', head_sha: scenario.fail } };
+    const r = await runAction({ workspace: second, runnerTemp: path.join(work, 'rt-comment'), eventName: 'workflow_run', event, inputs, apiUrl: api.url });
+    expect(r.code, r.stdout + r.stderr).toBe(0); // advise: the first run decided
+    expect(api.comments).toHaveLength(1);
+    expect(api.comments[0].body).toContain('the gate failed');
+    expect(api.requests.some((q) => q.method === 'GET' && q.path === '/repos/acme/backbone/pulls/7')).toBe(true);
+    // A report about another commit is not posted.
+    api.comments.length = 0;
+    api.prHeadSha = scenario.pass;
+    const r2 = await runAction({ workspace: second, runnerTemp: path.join(work, 'rt-comment2'), eventName: 'workflow_run', event, inputs, apiUrl: api.url });
+    expect(r2.code).toBe(0);
+    expect(api.comments).toHaveLength(0);
+    expect(commands(r2.stdout, 'warning').some((c) => /no comment: pull request #7 is at/.test(c.message))).toBe(true);
+  }, 30_000);
+
   it('shallow clone: the base commit is fetched, then compared', async () => {
     const ws = checkout(scenario.fail); // --depth=1: only the head commit
     expect(() => git(ws, 'cat-file', '-e', `${scenario.base}^{commit}`)).toThrow();
