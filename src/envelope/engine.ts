@@ -1,7 +1,7 @@
 // The envelope engine's unit of work: a task is a pure function of (graph, plan, task) and
 // returns plain data, so tasks can run in any thread and in any order; results are merged in
 // task order (evaluate.ts), which is what makes the output independent of the thread count.
-// Band challenges are cut into fixed chunks of CHUNK realizations; every task creates its own
+// Band challenges are cut into fixed chunks (chunkSize, from M alone); every task creates its own
 // metric evaluators, so even evaluators that keep warm-start state between calls give the same
 // numbers whichever thread runs the chunk.
 
@@ -16,8 +16,14 @@ import { connectivityCurve, createUnionFindWorkspace, type ConnectivityCurve, ty
 import { evaluateContingency } from './contingency.js';
 import { searchWorstCase } from './worst-case.js';
 
-/** Realizations per band task. Fixed: part of what makes results thread-count independent. */
-export const CHUNK = 16;
+/**
+ * Realizations per band task: about 32 tasks per band (so two or four threads stay evenly
+ * loaded), at most 16 realizations each. It depends on M only, never on the thread count —
+ * part of what makes results thread-count independent.
+ */
+export function chunkSize(realizations: number): number {
+  return Math.min(16, Math.max(1, Math.ceil(realizations / 32)));
+}
 
 export interface PlannedChallenge {
   params: ResolvedParams;
@@ -57,7 +63,8 @@ export function planTasks(plan: EvaluationPlan, g: CompactGraph): Task[] {
   plan.items.forEach((it, item) => {
     if (it.type === 'band') {
       const m = realizationCount(g, it);
-      for (let from = 0; from < m; from += CHUNK) tasks.push({ type: 'band', item, from, to: Math.min(m, from + CHUNK) });
+      const chunk = chunkSize(m);
+      for (let from = 0; from < m; from += chunk) tasks.push({ type: 'band', item, from, to: Math.min(m, from + chunk) });
     } else if (it.type === 'attack') tasks.push({ type: 'attack', item });
     else tasks.push({ type: 'contingency', item });
     if (it.params.worstCase > 0) tasks.push({ type: 'worst', item });
@@ -70,16 +77,28 @@ export function realizationCount(g: CompactGraph, it: PlannedChallenge): number 
   return bandPlan(g, it.params).realizations;
 }
 
+// Plans are pure functions of (graph, parameters) and `realize` rewrites its outputs in full, so
+// one plan per graph and parameter set serves every task of a thread (ids are hashed once).
+const planCache = new WeakMap<CompactGraph, Map<string, BandPlan>>();
+
 export function bandPlan(g: CompactGraph, params: ResolvedParams): BandPlan {
+  let byParams = planCache.get(g);
+  if (!byParams) planCache.set(g, (byParams = new Map()));
+  const key = JSON.stringify(params);
+  const hit = byParams.get(key);
+  if (hit) return hit;
   const c = getChallenge(params.challenge);
   if (c.type !== 'band') throw new TypeError(`${params.challenge} is not a band challenge`);
-  return c.plan(g, params);
+  const plan = c.plan(g, params);
+  if (byParams.size > 64) byParams.clear();
+  byParams.set(key, plan);
+  return plan;
 }
 
 /** The unit kind a challenge removes. */
 export function challengeKind(g: CompactGraph, params: ResolvedParams): ElementKind {
   const c = getChallenge(params.challenge);
-  if (c.type === 'band') return c.plan(g, params).kind;
+  if (c.type === 'band') return bandPlan(g, params).kind;
   if (c.type === 'attack') return c.kind;
   return params.element;
 }
