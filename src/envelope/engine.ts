@@ -3,7 +3,8 @@
 // task order (evaluate.ts), which is what makes the output independent of the thread count.
 // Band challenges are cut into fixed chunks (chunkSize, from M alone); every task creates its own
 // metric evaluators, so even evaluators that keep warm-start state between calls give the same
-// numbers whichever thread runs the chunk.
+// numbers whichever thread runs the chunk. That is also why spectral metrics may warm-start
+// (each Lanczos run from the previous grid point's eigenvector, MetricOptions.warmStart).
 
 import type { CompactGraph } from '../graph/compact.js';
 import { createMask, type Mask } from '../graph/mask.js';
@@ -119,7 +120,9 @@ export class StepEvaluator {
     private readonly g: CompactGraph,
     spec: RValueSpec,
   ) {
-    this.rfn = createRValue(g, spec);
+    // Warm starts are safe here: a task evaluates its masks in a fixed order (realizations of a
+    // fixed chunk, grid points ascending), so every value is still a function of the plan alone.
+    this.rfn = createRValue(g, spec, { warmStart: true });
     this.ufr = unionFindR(g, spec);
     this.ws = this.ufr ? createUnionFindWorkspace(g) : null;
     this.mask = createMask(g);
