@@ -4,7 +4,7 @@
 // persists across pushes (even when lines above it move) stays the same alert instead of
 // closing and reopening. Pure: report in, plain object out (the shell serialises it).
 
-import { plainText } from './escape.js';
+import { oneLine } from './escape.js';
 import { stableHash } from './fingerprint.js';
 import { findingNumbers, repoPath } from './finding-text.js';
 import { rankFiles, rankFindings } from './rank.js';
@@ -130,7 +130,8 @@ function uriOf(path: string): string {
 }
 
 function nonEmpty(text: string, fallback: string): string {
-  const t = plainText(text).trim();
+  // One line: a line break from an id would forge lines wherever the message is shown.
+  const t = oneLine(text).trim();
   return t.length ? t : fallback;
 }
 

@@ -51,7 +51,10 @@ export function renderTerminal(input: Report, options: TerminalOptions): string 
   for (const f of report.files) out.push('', ...renderFile(f, c, width));
   out.push('', ...verdictLines(report, c, width));
   out.push(...wrap(`Caution: ${report.caution}`, width).map((l) => c.dim(l)));
-  return out.join('\n') + '\n';
+  // The terminal view is also a CI log: the runner reads `::` at a line start as a workflow
+  // command, and wrapping can put an id's `::` there (after spaces or colour codes). Defuse
+  // it as logText() does.
+  return `${out.join('\n')}\n`.replace(/(^|\n)((?:\s|\u001b\[[0-9;]*m)*)::/g, '$1$2:\u200A:');
 }
 
 function headerLine(r: Report, c: Colors): string {
