@@ -2,6 +2,7 @@
 // contingencies, worst-case searches; see envelope/engine.ts) are handed to worker threads as
 // they become free, and their results are merged in task order. Each task is a pure function
 // of (graph, plan, task), so the serialised evaluation is byte-identical for any thread count.
+// Threads are started on first use and kept idle (unreferenced) for the next evaluation.
 //
 // Where the worker lives: beside this module. Running from source (vitest, tsx), this file is
 // src/parallel/pool.ts and the worker is worker.ts, started with the tsx loader; bundled, this
@@ -14,7 +15,7 @@ import { Worker } from 'node:worker_threads';
 import type { CompactGraph } from '../graph/compact.js';
 import { planTasks, runTask, type EvaluationPlan, type Task, type TaskResult } from '../envelope/engine.js';
 import { assembleEvaluation, planEvaluation, type DesignEvaluation, type EvaluationSpec } from '../envelope/evaluate.js';
-import type { ResultMessage, WorkerInit } from './protocol.js';
+import type { ResultMessage } from './protocol.js';
 
 /** Below this estimated work (element visits, about 0.1 s of engine time) no thread is started. */
 export const PARALLEL_MIN_WORK = 5e7;
@@ -33,11 +34,11 @@ export function workerEntry(moduleUrl: string = import.meta.url): WorkerEntry {
 }
 
 /** A thread running the worker; from source it loads worker.ts through tsx. */
-function startWorker(entry: WorkerEntry, init: WorkerInit): Worker {
-  if (!entry.loader) return new Worker(entry.url, { workerData: init });
+function startWorker(entry: WorkerEntry): Worker {
+  if (!entry.loader) return new Worker(entry.url);
   const url = JSON.stringify(entry.url.href);
   const boot = `import(${JSON.stringify(entry.loader)}).then(({ tsImport }) => tsImport(${url}, ${url}));`;
-  return new Worker(boot, { eval: true, workerData: init });
+  return new Worker(boot, { eval: true });
 }
 
 export interface ParallelOptions {
@@ -60,43 +61,80 @@ export async function evaluateDesignParallel(
   return assembleEvaluation(g, plan, tasks, results);
 }
 
-async function runOnWorkers(g: CompactGraph, plan: EvaluationPlan, tasks: Task[], count: number): Promise<TaskResult[]> {
+// Idle workers are kept between evaluations (a gate evaluates many designs), unreferenced so
+// that they never keep the process alive; one evaluation uses them at a time.
+const idle: Worker[] = [];
+let queue: Promise<unknown> = Promise.resolve();
+let jobs = 0;
+
+/** Stops the idle worker threads (tests, or a long-lived host that wants its threads back). */
+export async function closeWorkers(): Promise<void> {
+  const all = idle.splice(0);
+  await Promise.all(all.map((w) => w.terminate()));
+}
+
+function runOnWorkers(g: CompactGraph, plan: EvaluationPlan, tasks: Task[], count: number): Promise<TaskResult[]> {
+  const run = queue.then(() => runExclusive(g, plan, tasks, count));
+  queue = run.catch(() => undefined);
+  return run;
+}
+
+async function runExclusive(g: CompactGraph, plan: EvaluationPlan, tasks: Task[], count: number): Promise<TaskResult[]> {
   const entry = workerEntry();
-  const init: WorkerInit = { g, plan };
+  const pool = idle.splice(0, count);
+  while (pool.length < count) pool.push(startWorker(entry));
+  const job = ++jobs;
   const results: TaskResult[] = new Array(tasks.length);
-  const pool = Array.from({ length: count }, () => startWorker(entry, init));
   let next = 0;
+  let failed = false;
+  const listeners: (() => void)[] = [];
   try {
     await Promise.all(
       pool.map(
         (worker) =>
           new Promise<void>((resolve, reject) => {
+            worker.ref();
             const feed = () => {
               if (next >= tasks.length) {
                 resolve();
                 return;
               }
               const id = next++;
-              worker.postMessage({ id, task: tasks[id] });
+              worker.postMessage({ type: 'task', job, id, task: tasks[id] });
             };
-            worker.on('message', (msg: ResultMessage) => {
+            const onMessage = (msg: ResultMessage) => {
               if ('error' in msg) {
                 reject(new Error(`worker task ${msg.id} failed: ${msg.error}`));
                 return;
               }
               results[msg.id] = msg.result;
               feed();
-            });
+            };
+            const onExit = (code: number) => reject(new Error(`worker thread stopped with exit code ${code}`));
+            worker.on('message', onMessage);
             worker.on('error', reject);
-            worker.on('exit', (code) => {
-              if (code !== 0) reject(new Error(`worker thread stopped with exit code ${code}`));
+            worker.on('exit', onExit);
+            listeners.push(() => {
+              worker.off('message', onMessage);
+              worker.off('error', reject);
+              worker.off('exit', onExit);
             });
+            worker.postMessage({ type: 'init', job, g, plan });
             feed();
           }),
       ),
     );
+  } catch (error) {
+    failed = true;
+    throw error;
   } finally {
-    await Promise.all(pool.map((w) => w.terminate()));
+    listeners.forEach((off) => off());
+    if (failed) await Promise.all(pool.map((w) => w.terminate()));
+    else
+      for (const w of pool) {
+        w.unref();
+        idle.push(w);
+      }
   }
   return results;
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { evaluateDesignParallel, PARALLEL_MIN_WORK, workerEntry } from '../../src/parallel/pool.js';
+import { closeWorkers, evaluateDesignParallel, PARALLEL_MIN_WORK, workerEntry } from '../../src/parallel/pool.js';
 import { evaluateDesign, planEvaluation, type EvaluationSpec } from '../../src/envelope/evaluate.js';
 import { preferentialGraph } from '../envelope/graphs.js';
 
@@ -41,6 +41,16 @@ describe('deterministic parallel realizations', () => {
     expect(JSON.stringify(two.evaluation)).toBe(JSON.stringify(one.evaluation));
     // At 5 % every survivor is still connected, so the iterative eigen-solver ran there.
     expect(one.evaluation.envelopes[0].min[1]).toBeGreaterThan(0);
+  });
+
+  it('reuses its idle threads for the next evaluation, a different design included', async () => {
+    const other = preferentialGraph(90, 3, 6);
+    const a = await evaluateDesignParallel(other, spec, 2, { minWork: 0 });
+    const b = await evaluateDesignParallel(g, spec, 2, { minWork: 0 });
+    const c = await evaluateDesignParallel(other, spec, 2, { minWork: 0 });
+    expect(JSON.stringify(c.evaluation)).toBe(JSON.stringify(a.evaluation));
+    expect(JSON.stringify(b.evaluation)).toBe(JSON.stringify(evaluateDesign(g, spec).evaluation));
+    await closeWorkers();
   });
 
   it('finds its worker from source (tsx) and from the bundle (dist/worker.js)', () => {
