@@ -35,10 +35,22 @@ export function workerEntry(moduleUrl: string = import.meta.url): WorkerEntry {
 
 /** A thread running the worker; from source it loads worker.ts through tsx. */
 function startWorker(entry: WorkerEntry): Worker {
-  if (!entry.loader) return new Worker(entry.url);
-  const url = JSON.stringify(entry.url.href);
-  const boot = `import(${JSON.stringify(entry.loader)}).then(({ tsImport }) => tsImport(${url}, ${url}));`;
-  return new Worker(boot, { eval: true });
+  let worker: Worker;
+  if (!entry.loader) worker = new Worker(entry.url);
+  else {
+    const url = JSON.stringify(entry.url.href);
+    const boot = `import(${JSON.stringify(entry.loader)}).then(({ tsImport }) => tsImport(${url}, ${url}));`;
+    worker = new Worker(boot, { eval: true });
+  }
+  // A thread that fails or stops while idle just leaves the pool (a running evaluation has
+  // its own listeners and reports the failure).
+  const drop = () => {
+    const i = idle.indexOf(worker);
+    if (i >= 0) idle.splice(i, 1);
+  };
+  worker.on('error', drop);
+  worker.on('exit', drop);
+  return worker;
 }
 
 export interface ParallelOptions {
