@@ -32,7 +32,7 @@ import {
   type FoundComment,
   type UpsertResult,
 } from './github.js';
-import { WorkspacePathError, prepareWrite, resolveInWorkspace, workspaceRelative } from './workspace-paths.js';
+import { WorkspacePathError, prepareWrite, repositoryPath, resolveInWorkspace, workspaceRelative } from './workspace.js';
 
 // ---------------------------------------------------------------------------------------------
 // Seams
@@ -126,6 +126,11 @@ function relativePath(env: Env, name: string, fallback: string): string {
   return v;
 }
 
+/** A repository path input (read from git, at the repository root): never absolute, never above the root. */
+function repositoryInput(value: string, name: string): string {
+  return value === '' ? value : repositoryPath(value, `input "${name}"`);
+}
+
 function optionalInt(env: Env, name: string, min: number, max: number): number | undefined {
   const v = getInput(env, name);
   if (v === '') return undefined;
@@ -158,7 +163,7 @@ export function readInputs(env: Env): ActionInputs {
   if (merge && shard) throw new InputError('inputs "merge" and "shard" exclude each other: shards evaluate, the merge job combines their reports');
   const category = getInput(env, 'sarif-category') || (commentKey === 'default' ? 'netbrace' : `netbrace-${commentKey}`);
   return {
-    policy: relativePath(env, 'policy', ''),
+    policy: repositoryInput(relativePath(env, 'policy', ''), 'policy'),
     policySource: oneOf(env, 'policy-source', ['base', 'head'] as const, 'base'),
     token: getInput(env, 'token'),
     mode: oneOf(env, 'mode', ['enforce', 'advise'] as const, 'enforce'),
@@ -606,7 +611,16 @@ async function prFilesFallback(deps: ActionDeps, env: Env, inputs: ActionInputs,
     const client = deps.github({ token: inputs.token, baseUrl: env.GITHUB_API_URL || 'https://api.github.com', ...httpSettingsFromEnv(env) });
     const { files, truncated } = await listPullRequestFiles(client, { owner: target.pr.owner, repo: target.pr.repo, issueNumber: target.pr.number });
     if (truncated) return undefined;
-    return files.filter((f) => f.status !== 'D').map((f) => f.path);
+    const names = files.filter((f) => f.status !== 'D').map((f) => f.path);
+    // The names are data from the API: one that is not a plain repository path makes the list untrusted.
+    const plain = (p: string) => {
+      try {
+        return repositoryPath(p, 'a file name') === p;
+      } catch {
+        return false;
+      }
+    };
+    return names.every(plain) ? names : undefined;
   } catch (error) {
     deps.out.warning(`netbrace: could not list the pull request\u2019s files (${oneLine(error instanceof Error ? error.message : String(error), 200)})`);
     return undefined;

@@ -4,10 +4,9 @@
 // read directly from disk, never outside the repository root.
 
 import { execFile } from 'node:child_process';
-import { readFile, realpath } from 'node:fs/promises';
-import path from 'node:path';
 import { GitError, UsageError } from '../errors.js';
 import type { ChangedFile, GateDeps, Revision } from '../run-gate.js';
+import { readInside, tooLarge } from './workspace.js';
 
 /** Design files may be up to 20 MB; give git's output room beyond that. */
 const MAX_BUFFER = 64 * 1024 * 1024;
@@ -136,7 +135,11 @@ export async function listChanged(cwd: string, base: Revision, head: Revision): 
 /** A file at a revision; null when it does not exist there. */
 export async function showFile(cwd: string, rev: string, file: string): Promise<string | null> {
   const spec = `${checkRef(rev)}:${file}`;
-  const out = await runGit(cwd, ['show', '--no-textconv', '--end-of-options', spec]);
+  const out = await runGit(cwd, ['show', '--no-textconv', '--end-of-options', spec]).catch((e: unknown) => {
+    // A blob over the output buffer: say which file, not what the buffer is called.
+    if (e instanceof GitError && /maxBuffer/i.test(e.message)) throw tooLarge(file, undefined, MAX_BUFFER, rev.slice(0, 12));
+    throw e;
+  });
   if (out.code === 0) return out.stdout;
   // Tell "no such file at this revision" from real failures.
   const exists = await runGit(cwd, ['cat-file', '-e', '--end-of-options', spec]);
@@ -144,22 +147,10 @@ export async function showFile(cwd: string, rev: string, file: string): Promise<
   throw new GitError(`git show ${spec}: ${out.stderr.trim().split('\n')[0]}`);
 }
 
-/** A file of the working tree, read from disk; null when absent. Never outside `root`. */
+/** A file of the working tree, read from disk; null when absent. Never outside `root`, links included (workspace.ts). */
 export async function readWorktree(root: string, file: string): Promise<string | null> {
-  const full = path.resolve(root, file);
-  const rel = path.relative(root, full);
-  if (rel.startsWith('..') || path.isAbsolute(rel)) throw new UsageError(`${file} is outside the repository`, 'give paths inside the repository');
-  try {
-    const real = await realpath(full);
-    const realRoot = await realpath(root);
-    const realRel = path.relative(realRoot, real);
-    if (realRel.startsWith('..') || path.isAbsolute(realRel)) throw new UsageError(`${file} leads outside the repository (symbolic link)`);
-    return await readFile(real, 'utf8');
-  } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    if (code === 'ENOENT' || code === 'ENOTDIR' || code === 'EISDIR') return null;
-    throw e;
-  }
+  // The same ceiling as `git show`: what is read is then held to the parsers' size limit.
+  return readInside(root, file, MAX_BUFFER);
 }
 
 /** Every file at a revision; for the working tree, tracked and untracked-but-not-ignored files on disk. */

@@ -2,10 +2,12 @@
 // (a parsed result, or a located NetbraceError — nothing else), and the case-count lines the
 // suite prints so that a CI log shows how much was fuzzed.
 
-import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { execFileSync } from 'node:child_process';
+import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { isNetbraceError, type NetbraceError } from '../../src/errors.js';
+import { main } from '../../src/shell/cli.js';
 
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 
@@ -110,4 +112,49 @@ export class Tally {
     const kinds = [...this.kinds].sort().map(([k, n]) => `${k} ${n}`).join(', ');
     return `${this.parsed} parsed, ${this.refused} refused${kinds ? ` [${kinds}]` : ''}, slowest ${this.slowestMs.toFixed(0)} ms`;
   }
+}
+
+/** A scratch git repository with one commit of `files`; returns its directory. */
+export function scratchRepo(root: string, files: Record<string, string>): string {
+  const dir = mkdtempSync(path.join(root, 'repo-'));
+  git(dir, 'init', '-q', '-b', 'main');
+  git(dir, 'config', 'user.email', 'planner@example.invalid');
+  git(dir, 'config', 'user.name', 'Planner');
+  git(dir, 'config', 'commit.gpgsign', 'false');
+  commitFiles(dir, files, 'base');
+  return dir;
+}
+
+export function git(cwd: string, ...args: string[]): string {
+  return execFileSync('git', args, { cwd, encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'], env: { ...process.env, GIT_AUTHOR_DATE: '2001-01-01T00:00:00Z', GIT_COMMITTER_DATE: '2001-01-01T00:00:00Z' } }).trim();
+}
+
+/** Writes the files (null deletes) and commits everything; returns the commit id. */
+export function commitFiles(dir: string, files: Record<string, string | null>, message: string): string {
+  for (const [p, text] of Object.entries(files)) {
+    const full = path.join(dir, p);
+    if (text === null) rmSync(full, { force: true });
+    else {
+      mkdirSync(path.dirname(full), { recursive: true });
+      writeFileSync(full, text);
+    }
+  }
+  git(dir, 'add', '-A');
+  git(dir, 'commit', '-q', '--allow-empty', '-m', message);
+  return git(dir, 'rev-parse', 'HEAD');
+}
+
+/** The CLI's main() as a user runs it, without colour. */
+export async function cli(cwd: string, ...args: string[]): Promise<{ code: number; out: string; err: string }> {
+  const out: string[] = [];
+  const err: string[] = [];
+  const code = await main(args, {
+    stdout: (t) => void out.push(t),
+    stderr: (t) => void err.push(t),
+    cwd,
+    env: { NO_COLOR: '1' },
+    stdoutIsTTY: false,
+    stderrIsTTY: false,
+  });
+  return { code, out: out.join(''), err: err.join('') };
 }

@@ -2,7 +2,7 @@
 // two revisions (or takes the given paths), evaluates both sides under the policy, prints the
 // verdict and writes the report files. The same runGate the GitHub Action calls.
 
-import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { mkdir, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { UsageError } from '../../errors.js';
@@ -16,6 +16,7 @@ import { runGate, type GateDeps, type GateRequest } from '../../run-gate.js';
 import { colorEnabled, terminalWidth } from '../color.js';
 import { ensureCommit, gitDeps, mergeBase, repoRoot, revParse } from '../git.js';
 import type { Command, CommandIO } from '../io.js';
+import { readInside } from '../workspace.js';
 
 const HELP = `Usage: netbrace check [options] [PATH...]
 
@@ -131,14 +132,8 @@ function plainDeps(cwd: string): Pick<GateDeps, 'listChanged' | 'readAt' | 'list
   return {
     listChanged: () => [],
     listAll: () => [],
-    readAt: async (_rev, file) => {
-      try {
-        return await readFile(path.resolve(cwd, file), 'utf8');
-      } catch (e) {
-        if ((e as NodeJS.ErrnoException).code === 'ENOENT') return null;
-        throw e;
-      }
-    },
+    // Inside the directory netbrace runs in, links included (workspace.ts), as in a repository.
+    readAt: (_rev, file) => readInside(cwd, file),
   };
 }
 

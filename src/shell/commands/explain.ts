@@ -3,7 +3,6 @@
 // (the N−1 challenge, exhaustively), and the elements are ranked by the R they leave, worst
 // first, each with its line in the design file and the sites it cuts off.
 
-import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
 import type { Command, CommandIO } from '../io.js';
@@ -21,6 +20,7 @@ import type { Topology } from '../../topology/model.js';
 import { CAUTION } from '../../report/report.js';
 import { wrap } from '../../report/terminal.js';
 import { readDesign, type ReadDesignOptions } from '../read-design.js';
+import { readInsideSync } from '../workspace.js';
 import { createProgress, type Progress } from '../progress.js';
 import { colorEnabled, terminalWidth } from '../color.js';
 import { createColors } from 'picocolors';
@@ -121,10 +121,8 @@ function resolveR(file: string, metricIds: string[], policyPath: string | undefi
       source: metricIds.length === 1 ? '--metric' : '--metric (equal weights)',
     };
   }
-  const read = (p: string) => {
-    const full = path.resolve(io.cwd, p);
-    return existsSync(full) ? readFileSync(full, 'utf8') : null;
-  };
+  // The policy and the files it extends: inside the working directory, links included.
+  const read = (p: string) => readInsideSync(io.cwd, p);
   const chosen = policyPath ?? (read(DEFAULT_POLICY_PATH) !== null ? DEFAULT_POLICY_PATH : undefined);
   if (chosen === undefined) return { spec: builtinPolicy().rValue, source: 'the built-in policy' };
   if (policyPath !== undefined && read(policyPath) === null) {
