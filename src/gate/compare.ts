@@ -5,7 +5,9 @@
 // Judging a value (higher is better, except spread):
 //   missed        the head misses the floor (or ceiling)                → finding at the requirement's severity
 //   uncertain     the head meets it, but the confidence interval of the quantile reaches past it,
-//                 or the value could not be computed                    → notice / warning, never "met"
+//                 or the work behind it was cut by the budget (N−1 cases left out, a greedy
+//                 worst case instead of the exact one), or the value could not be computed
+//                                                                       → notice / warning, never "met"
 //   regressed     it dropped from base by more than the allowance, and by at least
 //                 noise-factor × se                                     → finding at the regression severity
 //   within-noise  it dropped, but by less than noise-factor × se        → notice: Monte Carlo noise, not a failure
@@ -111,6 +113,12 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
     const relation = m.higherIsBetter ? 'is below' : 'is above';
     findings.push(
       finding(THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE], r.severity, `${description}: ${formatR(m.head)} ${relation} ${threshold}`, elements, extra),
+    );
+  } else if (threshold !== null && m.incomplete !== undefined) {
+    // Met by incomplete work: not proven, so not "met".
+    row.status = 'uncertain';
+    findings.push(
+      finding(THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE], 'warn', `${description}: ${formatR(m.head)} meets it, but ${m.incomplete}`, elements, extra),
     );
   } else if (threshold !== null && m.lo !== undefined && m.hi !== undefined && !better(m.higherIsBetter ? m.lo : m.hi, threshold)) {
     row.status = 'uncertain';

@@ -31,6 +31,12 @@ export interface Measured {
   elements: { id: string; kind: ElementKind }[];
   /** Set when the value could not be computed (challenge skipped, too few steps...). */
   missing?: string;
+  /**
+   * Set when the value comes from incomplete work (N−1 cases or an exact worst-case search
+   * cut by the work budget): it may be higher than the true value, so a floor it meets is
+   * not proven. Says why.
+   */
+  incomplete?: string;
 }
 
 /** Most elements a finding lists. */
@@ -104,13 +110,17 @@ function missing(reason: string, higherIsBetter = true): Measured {
 }
 
 /** Value of a deterministic requirement on one side, with its elements. */
-function deterministic(req: Requirement, c: ChallengeDef | undefined, side: DesignSide): { value: number; elements: { id: string; kind: ElementKind }[] } | string {
+type Value = { value: number; elements: { id: string; kind: ElementKind }[]; incomplete?: string };
+
+function deterministic(req: Requirement, c: ChallengeDef | undefined, side: DesignSide): Value | string {
   if (req.kind === 'n-1') {
     const cont = contingencyOf(side, req.element);
     if (!cont) return `the N\u22121 evaluation of ${req.element}s did not run`;
     if (cont.evaluated === 0) return `the design has no ${req.element} that can fail`;
     const worst = cont.worst[0];
-    return { value: cont.min, elements: worst ? worst.elements.map((id) => ({ id, kind: cont.kind })) : [] };
+    const out: Value = { value: cont.min, elements: worst ? worst.elements.map((id) => ({ id, kind: cont.kind })) : [] };
+    if (cont.evaluated < cont.total) out.incomplete = `only ${cont.evaluated} of ${cont.total} single ${req.element} losses were evaluated (work budget)`;
+    return out;
   }
   if (!c) return 'no challenge';
   if (req.kind === 'r-threshold' && req.statistic.kind === 'worst-case') {
@@ -120,7 +130,10 @@ function deterministic(req: Requirement, c: ChallengeDef | undefined, side: Desi
     const k = req.statistic.removals;
     const i = wc.steps ? wc.steps.indexOf(k) : k - 1;
     if (i < 0 || i >= wc.values.length) return `the worst-case search of "${c.name}" stopped before ${k} removals`;
-    return { value: wc.values[i], elements: sequenceElements(wc, k) };
+    const out: Value = { value: wc.values[i], elements: sequenceElements(wc, k) };
+    // Up to two removals the search is exact unless the budget (or the subset limit) forbade it.
+    if (k <= 2 && wc.method !== 'exact') out.incomplete = `the worst case was searched greedily, not exhaustively (work budget), so the true worst case may be lower`;
+    return out;
   }
   const curve = attackOf(side, c);
   if (!curve) return `challenge "${c.name}" did not run on this design`;
@@ -176,5 +189,6 @@ export function measure(req: Requirement, challenges: readonly ChallengeDef[], h
     se: bv === null ? null : 0,
     higherIsBetter,
     elements: h.elements,
+    ...(h.incomplete !== undefined ? { incomplete: h.incomplete } : {}),
   };
 }
