@@ -45,9 +45,22 @@ export function runGit(cwd: string, args: readonly string[], timeout = 0): Promi
   });
 }
 
+/** git's own reason, in one line: its `fatal:` line when it has one (the first lines are often detail). */
+function gitReason(out: GitOutput): string {
+  const lines = out.stderr.trim().split('\n').filter((l) => l.trim() !== '');
+  return lines.find((l) => l.startsWith('fatal:')) ?? lines[0] ?? `git exited with ${out.code}`;
+}
+
+/** A hint for failures that mean the clone itself is damaged. */
+function damageHint(out: GitOutput): string {
+  return /corrupt|unable to unpack|inflate|bad object|missing blob|missing tree/i.test(out.stderr)
+    ? 'the clone is damaged (a git object cannot be read): run "git fsck", or clone the repository again'
+    : '';
+}
+
 async function git(cwd: string, args: readonly string[], what: string): Promise<string> {
   const out = await runGit(cwd, args);
-  if (out.code !== 0) throw new GitError(`${what}: ${out.stderr.trim().split('\n')[0] || `git exited with ${out.code}`}`);
+  if (out.code !== 0) throw new GitError(`${what}: ${gitReason(out)}`, damageHint(out));
   return out.stdout;
 }
 
@@ -141,10 +154,12 @@ export async function showFile(cwd: string, rev: string, file: string): Promise<
     throw e;
   });
   if (out.code === 0) return out.stdout;
-  // Tell "no such file at this revision" from real failures.
-  const exists = await runGit(cwd, ['cat-file', '-e', '--end-of-options', spec]);
-  if (exists.code !== 0) return null;
-  throw new GitError(`git show ${spec}: ${out.stderr.trim().split('\n')[0]}`);
+  // Tell "no such file at this revision" from a clone that cannot read it: ask the tree, which
+  // lists the file without reading its object. (`cat-file -e` fails for both, and a missing
+  // object must not make a changed design look deleted.)
+  const listed = await runGit(cwd, ['ls-tree', '-z', '--end-of-options', checkRef(rev), '--', file]);
+  if (listed.code === 0 && listed.stdout === '') return null;
+  throw new GitError(`git show ${spec}: ${gitReason(out)}`, damageHint(out) || damageHint(listed));
 }
 
 /** A file of the working tree, read from disk; null when absent. Never outside `root`, links included (workspace.ts). */
