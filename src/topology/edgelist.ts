@@ -21,7 +21,14 @@ interface Row {
 
 /** Splits RFC 4180 text into rows of located cells; blank lines are skipped. */
 export function readCsv(text: string, b: TopologyBuilder): Row[] {
-  const rows: Row[] = [];
+  return [...csvRows(text, b)];
+}
+
+/**
+ * The rows one at a time, so that a file with millions of rows is never held as rows: the
+ * builder's element limit stops the read where it is crossed.
+ */
+export function* csvRows(text: string, b: TopologyBuilder): Generator<Row> {
   let i = 0;
   let line = 1;
   let lineStart = 0;
@@ -75,35 +82,37 @@ export function readCsv(text: string, b: TopologyBuilder): Row[] {
     line++;
     lineStart = i;
     if (cells.length === 1 && cells[0].text.trim() === '') continue;
-    rows.push({ cells, end });
+    yield { cells, end };
   }
-  return rows;
 }
 
 export function parseEdgeList(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'csv'): Topology {
   const b = new TopologyBuilder(file, format, options);
-  const rows = readCsv(text, b);
-  if (rows.length === 0) throw b.error('the CSV file is empty', { line: 1, column: 1 }, 'the first line must be a header with source,target');
-  const header = rows[0].cells.map((c) => c.text.trim());
+  const rows = csvRows(text, b);
+  const first = rows.next();
+  if (first.done) throw b.error('the CSV file is empty', { line: 1, column: 1 }, 'the first line must be a header with source,target');
+  const headerCells = first.value.cells;
+  const header = headerCells.map((c) => c.text.trim());
   const lower = header.map((h) => h.toLowerCase());
   for (const need of ['source', 'target']) {
     if (!lower.includes(need)) {
-      throw b.error(`the CSV header has no "${need}" column`, rows[0].cells[0].pos, 'the first line must name the columns, e.g. source,target,length');
+      throw b.error(`the CSV header has no "${need}" column`, headerCells[0].pos, 'the first line must name the columns, e.g. source,target,length');
     }
   }
   const seen = new Map<string, number>();
   lower.forEach((h, k) => {
-    if (h === '') throw b.error(`column ${k + 1} of the header has no name`, rows[0].cells[k].pos);
-    const first = seen.get(h);
-    if (first !== undefined) throw b.error(`column "${header[k]}" appears twice in the header`, rows[0].cells[k].pos, `first as column ${first + 1}`);
+    if (h === '') throw b.error(`column ${k + 1} of the header has no name`, headerCells[k].pos);
+    const earlier = seen.get(h);
+    if (earlier !== undefined) throw b.error(`column "${header[k]}" appears twice in the header`, headerCells[k].pos, `first as column ${earlier + 1}`);
     seen.set(h, k);
   });
   const src = lower.indexOf('source');
   const dst = lower.indexOf('target');
   const idCol = lower.indexOf('id');
 
-  for (let r = 1; r < rows.length; r++) {
-    const { cells, end } = rows[r];
+  let r = 0;
+  for (const { cells, end } of rows) {
+    r++;
     if (cells.length < header.length) {
       const missing = header.slice(cells.length).map((h) => `"${h}"`).join(', ');
       throw b.error(
