@@ -401,7 +401,11 @@ function mergeChain(chain: PolicyFile[]): Policy {
 
 const matchers = new Map<string, (path: string) => boolean>();
 
-function matches(globs: readonly string[], path: string): boolean {
+function matches(globs: readonly string[], given: string): boolean {
+  // picomatch's `**` is a regex `.`, which stops at line terminators: a design in a directory
+  // whose name holds a line break would slip past every `**/` glob. Match such paths with the
+  // breaks stood in for by a character `.` does match.
+  const path = given.replace(/[\r\n\u2028\u2029]/g, '\u001a');
   return globs.some((g) => {
     let m = matchers.get(g);
     if (!m) {

@@ -8,7 +8,7 @@
 // Mermaid; everything user-controlled goes through escape.ts.
 
 import type { Envelope } from '../envelope/types.js';
-import { escapeHtml, escapeMarkdown, markdownCode, markerValue } from './escape.js';
+import { escapeHtml, escapeMarkdown, markdownCode, markerValue, oneLine } from './escape.js';
 import { findingNumbers, repoPath } from './finding-text.js';
 import { stableHash } from './fingerprint.js';
 import {
@@ -434,7 +434,8 @@ function structureSection(f: FileReport): string {
     `| bridges | ${b ? b.bridges.length : '\u2013'} | ${h.bridges.length} |`,
     `| cut sites | ${b ? b.cutNodes.length : '\u2013'} | ${h.cutNodes.length} |`,
   ];
-  let text = `<details><summary>Structure of ${escapeHtml(f.path)}</summary>\n\n| | base | head |\n|---|---:|---:|\n${rows.join('\n')}\n\n`;
+  // One line: a line break (a blank line above all) would end the HTML block early.
+  let text = `<details><summary>Structure of ${escapeHtml(oneLine(f.path, 300))}</summary>\n\n| | base | head |\n|---|---:|---:|\n${rows.join('\n')}\n\n`;
   text += `Bridges at head: ${list(h.bridges)}\n\nCut sites at head: ${list(h.cutNodes)}\n\n`;
   const degraded = f.head?.degraded ?? [];
   if (degraded.length) text += `Reduced evaluation: ${degraded.map((d) => escapeMarkdown(d, 200)).join('; ')}\n\n`;

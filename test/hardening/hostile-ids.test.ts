@@ -50,6 +50,8 @@ const ALL = Object.values(IDS);
 const SITES = [IDS.script, IDS.img, IDS.markdown, IDS.pipes, IDS.code, IDS.mention, IDS.ansi, IDS.command, IDS.bidi, IDS.comment];
 const LINKS = [IDS.setOutput, IDS.percent, IDS.crlf, IDS.newline, IDS.expr, `${IDS.script} l`, `${IDS.ansi} l`, `${IDS.command} l`, `${IDS.bidi} l`, `${IDS.comment} l`, `${IDS.markdown} l`];
 const REMOVED = `${IDS.newline} site`;
+/** The design's file name is the pull request's too: table pipes, a line break and a command in it. */
+const PATH = `designs/${IDS.pipes}\r\n::error::path-injected ${IDS.script}.net.yaml`;
 
 function repo(): MemoryRepo {
   const chain = ['end-a', ...SITES, 'end-b'];
@@ -61,7 +63,7 @@ function repo(): MemoryRepo {
       links: [...links, ...(base ? [{ between: ['end-b', REMOVED] }, { between: [REMOVED, 'end-a'] }] : [])],
     });
   const policy = 'designs:\n  - files: ["**/*.net.yaml"]\n';
-  const file = `designs/${IDS.pipes}.net.yaml`;
+  const file = PATH;
   return { base: { '.netbrace.yaml': policy, [file]: design(true) }, head: { '.netbrace.yaml': policy, [file]: design(false) } };
 }
 
@@ -166,7 +168,7 @@ afterAll(async () => {
 describe('hostile ids in a real gate run', () => {
   it('reach the report as data: ids kept exactly, in findings, sequences and changes', () => {
     const f = report.files[0];
-    expect(f.path).toBe(`designs/${IDS.pipes}.net.yaml`);
+    expect(f.path).toBe(PATH);
     expect(f.findings.some((x) => x.rule === 'new-bridge')).toBe(true);
     expect(f.findings.some((x) => x.rule === 'new-cut-node')).toBe(true);
     // Every link is a new bridge and every hostile site a new cut node, with its id byte for byte.
