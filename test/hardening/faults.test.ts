@@ -20,7 +20,7 @@ import { gitDeps, runGit } from '../../src/shell/git.js';
 import { createClient } from '../../src/shell/github.js';
 import { startFakeApi, type FakeApi } from '../action/fake-api.js';
 import { emptyReport, sampleReport } from '../report/sample-report.js';
-import { cli, commitFiles, fixtureText, git, reportCount, scratchRepo } from './support.js';
+import { cli, commitFiles, fakeGit, fixtureText, git, reportCount, scratchRepo } from './support.js';
 
 const BASE = 'a'.repeat(40);
 const HEAD = 'b'.repeat(40);
@@ -50,7 +50,7 @@ function stubDeps(report: Report, ws: string): { d: ActionDeps; rec: Rec } {
       return { report: r, exitCode: r.verdict === 'fail' ? 1 : 0 };
     },
     merge: mergeReports,
-    git: async (args) => ({ code: 0, stdout: args.includes('--show-toplevel') ? `${ws}\n` : '', stderr: '' }),
+    git: async (args) => fakeGit(ws)(args),
     github: (o) => createClient(o),
     out: {
       annotate: () => {},
@@ -205,14 +205,8 @@ describe('REST API faults: the verdict is that of a healthy run; the step says w
     api.reads = 'error500';
     api.prFiles.push({ filename: 'README.md', status: 'modified' });
     const { d, rec } = stubDeps(emptyReport(), ws);
-    d.git = async (args) =>
-      args.includes('--show-toplevel')
-        ? { code: 0, stdout: `${ws}\n`, stderr: '' }
-        : args[0] === 'cat-file' && args.some((a) => a.startsWith(BASE))
-          ? { code: 1, stdout: '', stderr: '' }
-          : args[0] === 'fetch'
-            ? { code: 128, stdout: '', stderr: 'fatal: remote error: upload-pack: not our ref' }
-            : { code: 0, stdout: '', stderr: '' };
+    const missingBase = fakeGit(ws, BASE);
+    d.git = async (args) => missingBase(args);
     const out = await run(env(ws, api.url), d);
     expect(out.exitCode).toBe(2);
     expect(rec.failed).toHaveLength(1);

@@ -16,7 +16,7 @@ import { createClient } from '../../src/shell/github.js';
 import { prepareWrite, readInside, readInsideSync, repositoryPath, resolveInWorkspace, WorkspacePathError } from '../../src/shell/workspace.js';
 import { startFakeApi, type FakeApi } from '../action/fake-api.js';
 import { sampleReport } from '../report/sample-report.js';
-import { cli, commitFiles, fixtureText, reportCount, scratchRepo } from './support.js';
+import { cli, commitFiles, fakeGit, fixtureText, reportCount, scratchRepo } from './support.js';
 
 let tmp: string;
 let ws: string;
@@ -113,7 +113,7 @@ interface Recorded {
   gateCalls: number;
 }
 
-function actionDeps(git: (args: string[]) => GitResult = (args) => ({ code: 0, stdout: args.includes('--show-toplevel') ? `${ws}\n` : '', stderr: '' })): { d: ActionDeps; rec: Recorded } {
+function actionDeps(git: (args: string[]) => GitResult = fakeGit(ws)): { d: ActionDeps; rec: Recorded } {
   const rec: Recorded = { failed: [], warnings: [], gateCalls: 0 };
   const d: ActionDeps = {
     gate: async (request) => {
@@ -188,14 +188,7 @@ describe('Action inputs never reach outside the workspace', () => {
     refusals++;
     api.prFiles.length = 0;
     api.prFiles.push({ filename: 'README.md', status: 'modified' }, { filename: '../../outside/secret.net.yaml', status: 'added' });
-    const missingBase = (args: string[]): GitResult =>
-      args.includes('--show-toplevel')
-        ? { code: 0, stdout: `${ws}\n`, stderr: '' }
-        : args[0] === 'cat-file' && args.some((a) => a.startsWith(BASE))
-          ? { code: 1, stdout: '', stderr: '' }
-          : args[0] === 'fetch'
-            ? { code: 128, stdout: '', stderr: 'fatal: not our ref' }
-            : { code: 0, stdout: '', stderr: '' };
+    const missingBase = fakeGit(ws, BASE);
     const { d, rec } = actionDeps(missingBase);
     const outcome = await run(actionEnv({ INPUT_COMMENT: 'never' }), d);
     // Not "no design changed, pass": the base is needed, and the message says how to get it.

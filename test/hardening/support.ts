@@ -7,6 +7,7 @@ import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, wr
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { isNetbraceError, type NetbraceError } from '../../src/errors.js';
+import type { GitResult } from '../../src/shell/action-run.js';
 import { main } from '../../src/shell/cli.js';
 
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -157,4 +158,18 @@ export async function cli(cwd: string, ...args: string[]): Promise<{ code: numbe
     stderrIsTTY: false,
   });
   return { code, out: out.join(''), err: err.join('') };
+}
+
+/**
+ * git as the Action asks it, faked: the workspace is the repository's top level; every command
+ * succeeds, except that commit `missing` (a base a shallow clone lacks) is absent and cannot be
+ * fetched.
+ */
+export function fakeGit(toplevel: string, missing?: string, fetchError = 'fatal: remote error: upload-pack: not our ref'): (args: string[]) => GitResult {
+  return (args) => {
+    if (args.includes('--show-toplevel')) return { code: 0, stdout: `${toplevel}\n`, stderr: '' };
+    if (missing && args[0] === 'cat-file' && args.some((a) => a.startsWith(missing))) return { code: 1, stdout: '', stderr: '' };
+    if (missing && args[0] === 'fetch') return { code: 128, stdout: '', stderr: fetchError };
+    return { code: 0, stdout: '', stderr: '' };
+  };
 }
