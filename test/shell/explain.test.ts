@@ -116,7 +116,7 @@ describe('netbrace explain', () => {
   it('reports usage errors with exit code 2 and unreadable files with exit code 1', async () => {
     const cases: [string[], number, RegExp][] = [
       [['explain'], 2, /explain needs a design FILE/],
-      [['explain', FILE, '--top', '0'], 2, /--top must be a positive whole number/],
+      [['explain', FILE, '--top', '0'], 2, /--top must be a whole number ≥ 1/],
       [['explain', FILE, '--kind', 'duct'], 2, /--kind must be node, link, group or all/],
       [['explain', FILE, '--metric', 'speed'], 2, /unknown metric "speed"/],
       [['explain', FILE, '--policy', 'nope.yaml'], 2, /policy file nope\.yaml not found/],

@@ -4,7 +4,6 @@
 
 import { mkdir, writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { parseArgs } from 'node:util';
 import { UsageError } from '../../errors.js';
 import { evaluateDesignParallel } from '../../parallel/pool.js';
 import { renderHtml } from '../../report/html.js';
@@ -17,6 +16,7 @@ import { colorEnabled, terminalWidth } from '../color.js';
 import { ensureCommit, gitDeps, mergeBase, repoRoot, revParse } from '../git.js';
 import type { Command, CommandIO } from '../io.js';
 import { readInside } from '../workspace.js';
+import { choice, parseCommandArgs, wholeNumber } from '../args.js';
 
 const HELP = `Usage: netbrace check [options] [PATH...]
 
@@ -83,25 +83,7 @@ const OPTIONS = {
 type Values = ReturnType<typeof parse>['values'];
 
 function parse(args: string[]) {
-  try {
-    return parseArgs({ args, options: OPTIONS, allowPositionals: true, strict: true });
-  } catch (e) {
-    throw new UsageError((e as Error).message.split('\n')[0], 'see "netbrace check --help"');
-  }
-}
-
-function choice<T extends string>(name: string, value: string | undefined, allowed: readonly T[], fallback: T): T {
-  if (value === undefined) return fallback;
-  if (!(allowed as readonly string[]).includes(value)) throw new UsageError(`--${name} must be ${allowed.join(', ')}, not "${value}"`);
-  return value as T;
-}
-
-function wholeNumber(name: string, value: string | undefined, min: number, max = Number.MAX_SAFE_INTEGER): number | undefined {
-  if (value === undefined) return undefined;
-  if (!/^[0-9]+$/.test(value) || Number(value) < min || Number(value) > max) {
-    throw new UsageError(`--${name} must be a whole number from ${min} to ${max}, not "${value}"`);
-  }
-  return Number(value);
+  return parseCommandArgs('check', args, OPTIONS);
 }
 
 function shardOf(value: string | undefined): GateRequest['shard'] {
@@ -139,13 +121,13 @@ function plainDeps(cwd: string): Pick<GateDeps, 'listChanged' | 'readAt' | 'list
 
 async function buildRequest(v: Values, positionals: string[], io: CommandIO): Promise<{ request: GateRequest; deps: GateDeps }> {
   if (v.head !== undefined && v.worktree) throw new UsageError('--head and --worktree exclude each other', 'judge a commit or the files on disk');
-  const threads = wholeNumber('threads', v.threads, 1, 256);
+  const threads = wholeNumber('--threads', v.threads, 1, 256);
   const request: GateRequest = {
-    policySource: choice('policy-source', v['policy-source'], ['base', 'head'] as const, 'base'),
-    mode: choice('mode', v.mode, ['enforce', 'advise'] as const, 'enforce'),
+    policySource: choice('--policy-source', v['policy-source'], ['base', 'head'] as const, 'base'),
+    mode: choice('--mode', v.mode, ['enforce', 'advise'] as const, 'enforce'),
     eventKind: 'local',
   };
-  const seed = wholeNumber('seed', v.seed, 0, 0xffffffff);
+  const seed = wholeNumber('--seed', v.seed, 0, 0xffffffff);
   if (seed !== undefined) request.seed = seed;
   if (threads !== undefined) request.threads = threads;
   const shard = shardOf(v.shard);
@@ -195,7 +177,7 @@ async function writeReports(v: Values, report: Report, io: CommandIO): Promise<v
 
 async function run(args: string[], io: CommandIO): Promise<number> {
   const { values, positionals } = parse(args);
-  const format = choice('format', values.format, ['text', 'markdown', 'json'] as const, 'text');
+  const format = choice('--format', values.format, ['text', 'markdown', 'json'] as const, 'text');
   const { request, deps } = await buildRequest(values, positionals, io);
   const { report, exitCode } = await runGate(request, deps);
   await writeReports(values, report, io);

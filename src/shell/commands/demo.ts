@@ -9,8 +9,8 @@ import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync,
 import { devNull, tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { parseArgs } from 'node:util';
 import type { Command, CommandIO } from '../io.js';
+import { parseCommandArgs } from '../args.js';
 import { UsageError } from '../../errors.js';
 import type { Report } from '../../report/report.js';
 
@@ -226,12 +226,7 @@ export const demoCommand: Command = {
   summary: 'run the gate on an invented backbone and three proposed changes; write all reports',
   help: HELP,
   async run(args: string[], io: CommandIO): Promise<number> {
-    let parsed;
-    try {
-      parsed = parseArgs({ args, allowPositionals: false, strict: true, options: { out: { type: 'string' }, keep: { type: 'boolean' } } });
-    } catch (e) {
-      throw new UsageError(e instanceof Error ? e.message : String(e), 'run "netbrace demo --help" for the options');
-    }
+    const parsed = parseCommandArgs('demo', args, { out: { type: 'string' }, keep: { type: 'boolean' } }, false);
     const out = parsed.values.out ?? path.join('.netbrace-out', 'demo');
     let result;
     try {

@@ -3,8 +3,8 @@
 // the N−1 / N−2 table — with the weakest sequences and, on request, the worst-case search.
 
 import { availableParallelism } from 'node:os';
-import { parseArgs } from 'node:util';
 import type { Command, CommandIO } from '../io.js';
+import { finiteNumber, parseCommandArgs, wholeNumber } from '../args.js';
 import { UsageError } from '../../errors.js';
 import { compileTopology } from '../../graph/compact.js';
 import { parseFormatName, FORMAT_CHOICES } from '../../topology/detect.js';
@@ -65,14 +65,6 @@ engineering studies, and local codes, standards and licensed practice decide.
 Exit codes: 0 evaluated, 1 the design could not be read, 2 usage error.
 `;
 
-function number(value: string | undefined, name: string, check: (x: number) => boolean, what: string): number | undefined {
-  if (value === undefined) return undefined;
-  const x = Number(value);
-  if (value.trim() === '' || !Number.isFinite(x) || !check(x)) throw new UsageError(`${name} must be ${what}, not "${value}"`);
-  return x;
-}
-
-const integer = (min: number) => (x: number) => Number.isInteger(x) && x >= min;
 
 export function parseScore(text: string, combine: string | undefined): RValueSpec {
   if (combine !== undefined && combine !== 'mean' && combine !== 'min') {
@@ -190,34 +182,24 @@ export const envelopeCommand: Command = {
   summary: 'robustness envelope, attack curve or N-1/N-2 of one design under one challenge',
   help: HELP,
   async run(args: string[], io: CommandIO): Promise<number> {
-    let parsed;
-    try {
-      parsed = parseArgs({
-        args,
-        allowPositionals: true,
-        strict: true,
-        options: {
-          challenge: { type: 'string' },
-          metric: { type: 'string' },
-          score: { type: 'string' },
-          combine: { type: 'string' },
-          realizations: { type: 'string' },
-          seed: { type: 'string' },
-          until: { type: 'string' },
-          points: { type: 'string' },
-          band: { type: 'string' },
-          'worst-case': { type: 'string' },
-          beam: { type: 'string' },
-          element: { type: 'string' },
-          threads: { type: 'string' },
-          'max-work': { type: 'string' },
-          format: { type: 'string' },
-          json: { type: 'boolean' },
-        },
-      });
-    } catch (e) {
-      throw new UsageError(e instanceof Error ? e.message : String(e), 'run "netbrace envelope --help" for the options');
-    }
+    const parsed = parseCommandArgs('envelope', args, {
+      challenge: { type: 'string' },
+      metric: { type: 'string' },
+      score: { type: 'string' },
+      combine: { type: 'string' },
+      realizations: { type: 'string' },
+      seed: { type: 'string' },
+      until: { type: 'string' },
+      points: { type: 'string' },
+      band: { type: 'string' },
+      'worst-case': { type: 'string' },
+      beam: { type: 'string' },
+      element: { type: 'string' },
+      threads: { type: 'string' },
+      'max-work': { type: 'string' },
+      format: { type: 'string' },
+      json: { type: 'boolean' },
+    });
     const v = parsed.values;
     if (parsed.positionals.length !== 1) throw new UsageError('envelope needs exactly one FILE', 'netbrace envelope designs/core.net.yaml --challenge random-nodes');
     const file = parsed.positionals[0];
@@ -236,11 +218,11 @@ export const envelopeCommand: Command = {
     const set = <K extends keyof ChallengeParams>(key: K, value: ChallengeParams[K] | undefined) => {
       if (value !== undefined) params[key] = value;
     };
-    set('realizations', number(v.realizations, '--realizations', integer(1), 'a whole number ≥ 1'));
-    set('until', number(v.until, '--until', (x) => x >= 0, 'a number ≥ 0'));
-    set('points', number(v.points, '--points', integer(2), 'a whole number ≥ 2'));
-    set('worstCase', number(v['worst-case'], '--worst-case', integer(0), 'a whole number ≥ 0'));
-    set('beam', number(v.beam, '--beam', integer(1), 'a whole number ≥ 1'));
+    set('realizations', wholeNumber('--realizations', v.realizations, 1));
+    set('until', finiteNumber('--until', v.until, (x) => x >= 0, 'a number ≥ 0'));
+    set('points', wholeNumber('--points', v.points, 2));
+    set('worstCase', wholeNumber('--worst-case', v['worst-case'], 0));
+    set('beam', wholeNumber('--beam', v.beam, 1));
     if (v.band !== undefined) {
       const b = v.band.split(',').map(Number);
       if (b.length !== 2 || !(b[0] > 0 && b[0] < b[1] && b[1] < 1)) throw new UsageError(`--band must be LO,HI with 0 < LO < HI < 1, not "${v.band}"`);
@@ -250,9 +232,9 @@ export const envelopeCommand: Command = {
       if (v.element !== 'node' && v.element !== 'link') throw new UsageError(`--element must be node or link, not "${v.element}"`);
       params.element = v.element;
     }
-    const seed = number(v.seed, '--seed', (x) => Number.isSafeInteger(x) && x >= 0, 'a whole number ≥ 0') ?? 1;
-    const threads = number(v.threads, '--threads', integer(1), 'a whole number ≥ 1') ?? Math.min(4, availableParallelism());
-    const maxWork = number(v['max-work'], '--max-work', (x) => x > 0, 'a number > 0');
+    const seed = wholeNumber('--seed', v.seed, 0) ?? 1;
+    const threads = wholeNumber('--threads', v.threads, 1) ?? Math.min(4, availableParallelism());
+    const maxWork = finiteNumber('--max-work', v['max-work'], (x) => x > 0, 'a number > 0');
     const options: ReadDesignOptions = { cwd: io.cwd };
     if (v.format !== undefined) options.format = parseFormatName(v.format);
 

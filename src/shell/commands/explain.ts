@@ -4,8 +4,8 @@
 // first, each with its line in the design file and the sites it cuts off.
 
 import path from 'node:path';
-import { parseArgs } from 'node:util';
 import type { Command, CommandIO } from '../io.js';
+import { parseCommandArgs, wholeNumber } from '../args.js';
 import { UsageError } from '../../errors.js';
 import { compileTopology, type CompactGraph } from '../../graph/compact.js';
 import { createMask } from '../../graph/mask.js';
@@ -229,39 +229,23 @@ Exit codes:
   2  usage or configuration error (bad option, unknown metric, broken policy)
 `;
 
-function positiveInt(value: string | undefined, name: string, fallback: number): number {
-  if (value === undefined) return fallback;
-  if (!/^\d+$/.test(value) || Number(value) <= 0) throw new UsageError(`${name} must be a positive whole number, not "${value}"`);
-  return Number(value);
-}
-
 export const explainCommand: Command = {
   name: 'explain',
   summary: 'rank the sites, links and ducts whose single loss hurts R most (with their lines)',
   help: HELP,
   async run(args: string[], io: CommandIO): Promise<number> {
-    let parsed;
-    try {
-      parsed = parseArgs({
-        args,
-        allowPositionals: true,
-        strict: true,
-        options: {
-          metric: { type: 'string', multiple: true },
-          top: { type: 'string' },
-          kind: { type: 'string' },
-          policy: { type: 'string' },
-          format: { type: 'string' },
-          json: { type: 'boolean' },
-        },
-      });
-    } catch (e) {
-      throw new UsageError(e instanceof Error ? e.message : String(e), 'run "netbrace explain --help" for the options');
-    }
+    const parsed = parseCommandArgs('explain', args, {
+      metric: { type: 'string', multiple: true },
+      top: { type: 'string' },
+      kind: { type: 'string' },
+      policy: { type: 'string' },
+      format: { type: 'string' },
+      json: { type: 'boolean' },
+    });
     const [file, ...extra] = parsed.positionals;
     if (file === undefined) throw new UsageError('explain needs a design FILE', 'netbrace explain designs/backbone.net.yaml');
     if (extra.length) throw new UsageError(`explain takes one FILE, got ${parsed.positionals.length}`, 'run it once per file');
-    const top = positiveInt(parsed.values.top, '--top', 15);
+    const top = wholeNumber('--top', parsed.values.top, 1) ?? 15;
     const kindArg = parsed.values.kind ?? 'all';
     if (!['node', 'link', 'group', 'all'].includes(kindArg)) {
       throw new UsageError(`--kind must be node, link, group or all, not "${kindArg}"`);

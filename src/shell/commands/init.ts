@@ -3,11 +3,11 @@
 
 import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { parseArgs } from 'node:util';
 import { UsageError } from '../../errors.js';
 import { DEFAULT_POLICY_PATH, STARTER_POLICY } from '../../policy/defaults.js';
 import { repoRoot } from '../git.js';
 import type { Command, CommandIO } from '../io.js';
+import { parseCommandArgs } from '../args.js';
 
 const HELP = `Usage: netbrace init [--policy FILE]
 
@@ -27,12 +27,7 @@ Exit codes:
 `;
 
 async function run(args: string[], io: CommandIO): Promise<number> {
-  let values: { policy?: string };
-  try {
-    ({ values } = parseArgs({ args, options: { policy: { type: 'string' } }, allowPositionals: false, strict: true }));
-  } catch (e) {
-    throw new UsageError((e as Error).message.split('\n')[0], 'see "netbrace init --help"');
-  }
+  const { values } = parseCommandArgs('init', args, { policy: { type: 'string' } }, false);
   const root = (await repoRoot(io.cwd)) ?? io.cwd;
   const target = values.policy !== undefined ? path.resolve(io.cwd, values.policy) : path.join(root, DEFAULT_POLICY_PATH);
   const shown = path.relative(io.cwd, target) || target;

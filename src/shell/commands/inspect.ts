@@ -1,8 +1,8 @@
 // `netbrace inspect FILE...`: what a design file holds and where it is structurally weak
 // (bridges, cut nodes, isolated nodes), without any policy or challenge.
 
-import { parseArgs } from 'node:util';
 import type { Command, CommandIO } from '../io.js';
+import { parseCommandArgs, wholeNumber } from '../args.js';
 import { formatDiagnostic, isNetbraceError, UsageError, type Diagnostic } from '../../errors.js';
 import type { Topology } from '../../topology/model.js';
 import { parseFormatName, FORMAT_CHOICES } from '../../topology/detect.js';
@@ -146,12 +146,6 @@ Examples:
 Exit codes: 0 all files read, 1 a file could not be read, 2 usage error.
 `;
 
-function positiveInt(value: string | undefined, name: string): number | undefined {
-  if (value === undefined) return undefined;
-  if (!/^\d+$/.test(value) || Number(value) <= 0) throw new UsageError(`${name} must be a positive whole number, not "${value}"`);
-  return Number(value);
-}
-
 function errorJson(file: string, e: unknown): object {
   if (isNetbraceError(e)) {
     return {
@@ -167,29 +161,19 @@ export const inspectCommand: Command = {
   summary: 'show what a design file holds: counts, components, bridges, cut nodes, warnings',
   help: HELP,
   async run(args: string[], io: CommandIO): Promise<number> {
-    let parsed;
-    try {
-      parsed = parseArgs({
-        args,
-        allowPositionals: true,
-        strict: true,
-        options: {
-          json: { type: 'boolean' },
-          format: { type: 'string' },
-          'max-bytes': { type: 'string' },
-          'max-elements': { type: 'string' },
-        },
-      });
-    } catch (e) {
-      throw new UsageError(e instanceof Error ? e.message : String(e), 'run "netbrace inspect --help" for the options');
-    }
+    const parsed = parseCommandArgs('inspect', args, {
+      json: { type: 'boolean' },
+      format: { type: 'string' },
+      'max-bytes': { type: 'string' },
+      'max-elements': { type: 'string' },
+    });
     const files = parsed.positionals;
     if (files.length === 0) throw new UsageError('inspect needs at least one FILE', 'netbrace inspect designs/core.net.yaml');
     const options: ReadDesignOptions = { cwd: io.cwd };
     if (parsed.values.format !== undefined) options.format = parseFormatName(parsed.values.format);
-    const maxBytes = positiveInt(parsed.values['max-bytes'], '--max-bytes');
+    const maxBytes = wholeNumber('--max-bytes', parsed.values['max-bytes'], 1);
     if (maxBytes !== undefined) options.maxBytes = maxBytes;
-    const maxElements = positiveInt(parsed.values['max-elements'], '--max-elements');
+    const maxElements = wholeNumber('--max-elements', parsed.values['max-elements'], 1);
     if (maxElements !== undefined) options.maxElements = maxElements;
 
     const results: object[] = [];
