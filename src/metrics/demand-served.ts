@@ -15,7 +15,7 @@
 import { createDijkstra } from './kernels/dijkstra.js';
 import { chooseLinkCost } from './kernels/link-cost.js';
 import { createSurvivorBuilder } from './kernels/subgraph.js';
-import { createComponentCounter } from './kernels/union-find.js';
+import { createComponentCounter, findRoot } from './kernels/union-find.js';
 import { createMask } from '../graph/mask.js';
 import type { CompactGraph } from '../graph/compact.js';
 import type { Metric } from './types.js';
@@ -44,12 +44,13 @@ export const demandServed: Metric = {
       return (mask) => {
         if (total <= 0) return { raw: 0, normalized: 0 };
         counter.run(mask);
+        const parent = counter.uf.parent;
         let served = 0;
         for (let d = 0; d < k; d++) {
           const s = src[d];
           const t = dst[d];
           if (s < 0 || t < 0 || !(vol[d] > 0) || mask.node[s] || mask.node[t]) continue;
-          if (s === t || counter.uf.find(s) === counter.uf.find(t)) served += vol[d];
+          if (s === t || findRoot(parent, s) === findRoot(parent, t)) served += vol[d];
         }
         return { raw: served, normalized: served / total };
       };

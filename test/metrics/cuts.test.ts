@@ -52,6 +52,18 @@ describe('bridges and cut_nodes', () => {
   });
 });
 
+describe('link connectivity counts parallel links', () => {
+  it('three parallel links: λ = 3 (score capped at 1); a cycle with one doubled link: λ = 2; κ ignores parallels', () => {
+    const triple = graphFromEdges(2, [[0, 1], [0, 1], [0, 1]]);
+    expect(value('link_connectivity', triple)).toEqual({ raw: 3, normalized: 1 });
+    expect(value('node_connectivity', triple).raw).toBe(1);
+    const ring = graphFromEdges(5, [[0, 1], [1, 2], [2, 3], [3, 4], [4, 0], [0, 1]]);
+    expect(value('link_connectivity', ring).raw).toBe(2);
+    const chain = graphFromEdges(4, [[0, 1], [0, 1], [1, 2], [1, 2], [2, 3], [2, 3], [2, 3]]);
+    expect(value('link_connectivity', chain).raw).toBe(2);
+  });
+});
+
 describe('node and link connectivity against brute force', () => {
   /** Smallest set of nodes (or links) whose removal disconnects the survivors, by enumeration. */
   function brute(n: number, edges: [number, number][], nodes: boolean): number {

@@ -5,7 +5,7 @@ import type { CompactGraph } from '../../graph/compact.js';
 import type { Mask } from '../../graph/mask.js';
 import { createHopHistogram, type HopHistogram } from './bit-bfs.js';
 import { createSurvivorBuilder, type LocalGraph } from './subgraph.js';
-import { createComponentCounter } from './union-find.js';
+import { createComponentCounter, findRoot } from './union-find.js';
 
 export function createLargestComponentSources(g: CompactGraph): (mask: Mask, local: LocalGraph) => { sources: Int32Array; count: number } {
   const counter = createComponentCounter(g);
@@ -16,7 +16,8 @@ export function createLargestComponentSources(g: CompactGraph): (mask: Mask, loc
     out.count = 0;
     if (s.largestRoot < 0) return out;
     const root = s.largestRoot;
-    for (let i = 0; i < local.n; i++) if (counter.uf.find(local.toOriginal[i]) === root) sources[out.count++] = i;
+    const parent = counter.uf.parent;
+    for (let i = 0; i < local.n; i++) if (findRoot(parent, local.toOriginal[i]) === root) sources[out.count++] = i;
     return out;
   };
 }

@@ -5,52 +5,38 @@
 import type { CompactGraph } from '../../graph/compact.js';
 import type { Mask } from '../../graph/mask.js';
 
+/** Root of i's set, halving the path on the way (module-level so every caller stays monomorphic). */
+export function findRoot(parent: Int32Array, i: number): number {
+  while (parent[i] !== i) {
+    const up = parent[parent[i]];
+    parent[i] = up;
+    i = up;
+  }
+  return i;
+}
+
+/**
+ * Join the sets of a and b (union by size); returns false when they were already joined.
+ */
+export function unite(parent: Int32Array, size: Int32Array, a: number, b: number): boolean {
+  let ra = findRoot(parent, a);
+  let rb = findRoot(parent, b);
+  if (ra === rb) return false;
+  if (size[ra] < size[rb]) {
+    const t = ra;
+    ra = rb;
+    rb = t;
+  }
+  parent[rb] = ra;
+  size[ra] += size[rb];
+  return true;
+}
+
 export interface UnionFind {
   readonly parent: Int32Array;
   /** Size of the set rooted at i (meaningful at roots only). */
   readonly size: Int32Array;
   find(i: number): number;
-  /** Join the sets of a and b; returns the new root, or -1 when they were already joined. */
-  union(a: number, b: number): number;
-  /** Make 0..n-1 singletons again. */
-  reset(n: number): void;
-}
-
-export function createUnionFind(capacity: number): UnionFind {
-  const parent = new Int32Array(capacity);
-  const size = new Int32Array(capacity);
-  const find = (i: number): number => {
-    while (parent[i] !== i) {
-      const up = parent[parent[i]];
-      parent[i] = up;
-      i = up;
-    }
-    return i;
-  };
-  return {
-    parent,
-    size,
-    find,
-    union(a, b) {
-      let ra = find(a);
-      let rb = find(b);
-      if (ra === rb) return -1;
-      if (size[ra] < size[rb]) {
-        const t = ra;
-        ra = rb;
-        rb = t;
-      }
-      parent[rb] = ra;
-      size[ra] += size[rb];
-      return ra;
-    },
-    reset(n) {
-      for (let i = 0; i < n; i++) {
-        parent[i] = i;
-        size[i] = 1;
-      }
-    },
-  };
 }
 
 /** Summary of the surviving graph's components, refreshed in place by each call. */
@@ -69,14 +55,16 @@ export interface ComponentSummary {
 
 /**
  * Component summary of the masked graph: one pass over the links with union–find.
- * `uf` is left holding the partition, so callers can ask `uf.find(v)` afterwards.
+ * `uf` is left holding the partition, so callers can ask `findRoot(uf.parent, v)` afterwards.
  */
 export function createComponentCounter(g: CompactGraph): {
   uf: UnionFind;
   summary: ComponentSummary;
   run(mask: Mask): ComponentSummary;
 } {
-  const uf = createUnionFind(g.n);
+  const parent = new Int32Array(g.n);
+  const size = new Int32Array(g.n);
+  const uf: UnionFind = { parent, size, find: (i) => findRoot(parent, i) };
   const summary: ComponentSummary = { alive: 0, count: 0, largest: 0, largestRoot: -1, connectedPairs: 0 };
   const { linkSource, linkTarget } = g;
   return {
@@ -85,22 +73,25 @@ export function createComponentCounter(g: CompactGraph): {
     run(mask) {
       const node = mask.node;
       const link = mask.link;
-      uf.reset(g.n);
+      const n = g.n;
       let alive = 0;
-      for (let v = 0; v < g.n; v++) alive += node[v] ^ 1;
+      for (let v = 0; v < n; v++) {
+        parent[v] = v;
+        size[v] = 1;
+        alive += node[v] ^ 1;
+      }
       let count = alive;
       for (let e = 0; e < g.m; e++) {
         if (link[e]) continue;
         const a = linkSource[e];
         const b = linkTarget[e];
         if (node[a] || node[b]) continue;
-        if (uf.union(a, b) >= 0) count--;
+        if (unite(parent, size, a, b)) count--;
       }
       let largest = 0;
       let largestRoot = -1;
       let pairs = 0;
-      const { parent, size } = uf;
-      for (let v = 0; v < g.n; v++) {
+      for (let v = 0; v < n; v++) {
         if (node[v] || parent[v] !== v) continue;
         const s = size[v];
         pairs += (s * (s - 1)) / 2;
