@@ -8,8 +8,9 @@
 //      followed), or every design for a scheduled run (thresholds only); then the shard;
 //   3. the rules for each file (overrides) — every configuration error surfaces here, before
 //      anything is evaluated;
-//   4. each file at head and at base: parse, compile, evaluate, compare; a head that cannot be
-//      parsed fails with its line, and the other files are still judged;
+//   4. each file at head and at base: parse, compile, evaluate under the policy's work budget
+//      (the same on both sides, realizations kept paired: gate/budget.ts), compare; a head that
+//      cannot be parsed fails with its line, and the other files are still judged;
 //   5. the report and the verdict.
 // Configuration and usage problems are thrown (PolicyError, UsageError, GitError: exit 2);
 // a failed gate is a result (exit 1).
@@ -18,6 +19,7 @@ import { isNetbraceError, PolicyError, UsageError } from './errors.js';
 import { evaluateDesign, type DesignEvaluation, type EvaluationSpec } from './envelope/evaluate.js';
 import type { ChallengeParams } from './envelope/types.js';
 import { compileTopology, type CompactGraph } from './graph/compact.js';
+import { budgetSpecs, notePairedCuts, type PairedCut } from './gate/budget.js';
 import { compareDesign, type CompareInput, type DesignSide } from './gate/compare.js';
 import { countStatuses, exitCodeOf, verdictOf } from './gate/verdict.js';
 import { DEFAULT_POLICY_PATH } from './policy/defaults.js';
@@ -218,7 +220,11 @@ function normalizePath(p: string): string {
   return p.replace(/\\/g, '/').replace(/^\.\//, '');
 }
 
-/** The engine request for one file: its challenges, every threshold's x on the grid, N−1 where required. */
+/**
+ * The engine request for one file: its challenges, every threshold's x on the grid, N−1 where
+ * required, and the policy's work budget (runGate shares it out between the requests of a
+ * design and pairs it across base and head: gate/budget.ts).
+ */
 export function evaluationSpecs(fp: FilePolicy, seed: number): EvaluationSpec[] {
   const challenges: ChallengeParams[] = fp.challenges.map((c) => {
     const at = fp.requirements
@@ -230,11 +236,12 @@ export function evaluationSpecs(fp: FilePolicy, seed: number): EvaluationSpec[] 
   });
   const elements = [...new Set(fp.requirements.flatMap((r) => (r.kind === 'n-1' ? [r.element] : [])))].sort();
   // The engine runs each challenge once per evaluation: N−1 of a second element kind gets its own.
-  const specs: EvaluationSpec[] = [{ r: fp.rValue, challenges, seed }];
+  const budget = { maxWork: fp.budget.maxWork };
+  const specs: EvaluationSpec[] = [{ r: fp.rValue, challenges, seed, budget }];
   elements.forEach((element, i) => {
     const n1: ChallengeParams = { challenge: 'n-1', element };
     if (i === 0) specs[0].challenges.push(n1);
-    else specs.push({ r: fp.rValue, challenges: [n1], seed });
+    else specs.push({ r: fp.rValue, challenges: [n1], seed, budget });
   });
   return specs;
 }
@@ -261,34 +268,27 @@ function joinEvaluations(parts: DesignEvaluation[]): DesignEvaluation {
   return { evaluation, samples, labels };
 }
 
-interface Side {
-  side?: DesignSide;
-  error?: CompareInput['headError'];
-  text: string;
-}
-
-async function evaluateText(
-  text: string,
-  path: string,
-  fp: FilePolicy,
-  seed: number,
-  request: GateRequest,
-  deps: GateDeps,
-): Promise<Side> {
-  let g: CompactGraph;
+/** Parse and compile one side; a design error becomes the located problem the report shows. */
+function compileText(text: string, path: string, fp: FilePolicy): { graph: CompactGraph } | { error: NonNullable<CompareInput['headError']> } {
   try {
-    const topology = parseDesign(text, path, fp.format ? { format: fp.format } : {});
-    g = compileTopology(topology);
+    return { graph: compileTopology(parseDesign(text, path, fp.format ? { format: fp.format } : {})) };
   } catch (e) {
     if (isNetbraceError(e) && (e.kind === 'design' || e.kind === 'limit' || e.kind === 'usage')) {
-      return { text, error: { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column } };
+      return { error: { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column } };
     }
     throw e;
   }
+}
+
+async function evaluateGraph(g: CompactGraph, specs: EvaluationSpec[], cuts: readonly PairedCut[], request: GateRequest, deps: GateDeps): Promise<DesignSide> {
   const evaluate = deps.evaluate ?? ((graph: CompactGraph, spec: EvaluationSpec) => evaluateDesign(graph, spec));
   const parts: DesignEvaluation[] = [];
-  for (const spec of evaluationSpecs(fp, seed)) parts.push(await evaluate(g, spec, request.threads));
-  return { text, side: { graph: g, result: joinEvaluations(parts) } };
+  for (const [i, spec] of specs.entries()) {
+    const part = await evaluate(g, spec, request.threads);
+    notePairedCuts(part, cuts, i);
+    parts.push(part);
+  }
+  return { graph: g, result: joinEvaluations(parts) };
 }
 
 function validateRequest(request: GateRequest): void {
@@ -333,19 +333,26 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
       if (headText === null) {
         input.change = 'deleted';
       } else {
-        const h = await evaluateText(headText, c.path, fp, seed, request, deps);
-        if (h.error) input.headError = h.error;
-        else input.head = h.side;
-        if (!thresholdsOnly && input.head && c.change !== 'added') {
-          const basePath = c.previousPath ?? c.path;
-          const baseText = await deps.readAt(base!, basePath);
-          if (baseText === headText) {
-            input.base = input.head; // identical text: the same evaluation, delta exactly 0
-          } else if (baseText !== null) {
-            const b = await evaluateText(baseText, basePath, fp, seed, request, deps);
-            if (b.error) input.baseError = b.error;
-            else input.base = b.side;
+        const h = compileText(headText, c.path, fp);
+        if ('error' in h) input.headError = h.error;
+        else {
+          let baseGraph: CompactGraph | undefined;
+          let same = false;
+          if (!thresholdsOnly && c.change !== 'added') {
+            const basePath = c.previousPath ?? c.path;
+            const baseText = await deps.readAt(base!, basePath);
+            if (baseText === headText) {
+              same = true; // identical text: the same evaluation, delta exactly 0
+            } else if (baseText !== null) {
+              const b = compileText(baseText, basePath, fp);
+              if ('error' in b) input.baseError = b.error;
+              else baseGraph = b.graph;
+            }
           }
+          const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
+          input.head = await evaluateGraph(h.graph, specs.head, specs.cuts, request, deps);
+          if (same) input.base = input.head;
+          else if (baseGraph) input.base = await evaluateGraph(baseGraph, specs.base!, specs.cuts, request, deps);
         }
       }
     }

@@ -6,12 +6,20 @@
 //   missed        the head misses the floor (or ceiling)                → finding at the requirement's severity
 //   uncertain     the head meets it, but the confidence interval of the quantile reaches past it,
 //                 or the work behind it was cut by the budget (N−1 cases left out, a greedy
-//                 worst case instead of the exact one), or the value could not be computed
+//                 worst case instead of the exact one), or the budget cut the realizations and
+//                 the value clears the floor by no more than REDUCED_MARGIN_SE standard errors
+//                 of its own (a minimum over cut realizations: always, since the minimum of
+//                 fewer can only be higher), or the value could not be computed
 //                                                                       → notice / warning, never "met"
 //   regressed     it dropped from base by more than the allowance, and by at least
 //                 noise-factor × se                                     → finding at the regression severity
 //   within-noise  it dropped, but by less than noise-factor × se        → notice: Monte Carlo noise, not a failure
 //   met           otherwise; a drop inside the allowance is a notice
+// On realizations cut by the budget a drop is judged both ways: regressed only when it exceeds
+// the allowance by more than noise-factor × se, a notice when it stays below the allowance by
+// more than that, and uncertain in between; when the budget cut base and head differently
+// their realizations do not pair, and the change is uncertain whatever its sign. Every
+// requirement whose value rests on reduced work says so in a finding of its own.
 // A new single point of failure is a bridge (by the link's stable key, its end ids) or cut node
 // (by node id) of the head that the base does not have; hardened elements never count, since
 // challenges never remove them.
@@ -21,6 +29,11 @@ import { findCutElements } from '../graph/structure.js';
 import type { Finding, FileReport, FileStatus, ReportElement, RequirementResult, Severity } from '../report/report.js';
 import type { FilePolicy, Requirement, SpofRequirement } from '../policy/types.js';
 import { describeRequirement, formatDelta, formatR } from './describe.js';
+
+/** A standard error in findings: three decimals, or "unknown" when it cannot be estimated. */
+function formatSe(se: number): string {
+  return Number.isFinite(se) ? se.toFixed(3) : 'unknown';
+}
 import { type DesignSide, locate, measure, type Measured } from './measure.js';
 
 export type { DesignSide };
@@ -49,6 +62,18 @@ export interface CompareInput {
 
 /** Values closer than this (relative) are the same: no "−0.000" regressions. */
 const SAME = 1e-12;
+
+/**
+ * On realizations cut by the budget, a value meets its floor only when it clears it by more
+ * than this many of its own standard errors (about 97.7 % one-sided under a normal
+ * approximation; common practice).
+ */
+export const REDUCED_MARGIN_SE = 2;
+
+/** An uncertain judgement is a warning, or a notice where the rule itself is only a notice. */
+function uncertainSeverity(severity: Severity): Severity {
+  return severity === 'notice' ? 'notice' : 'warn';
+}
 
 const THRESHOLD_RULE: Record<Exclude<Requirement['kind'], 'no-new-spof'>, Finding['rule']> = {
   'r-threshold': 'r-threshold',
@@ -107,6 +132,8 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
     return { row, findings };
   }
   const better = (a: number, b: number) => (m.higherIsBetter ? a >= b : a <= b);
+  const thresholdRule = THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE];
+  const margin = threshold === null ? 0 : m.higherIsBetter ? m.head - threshold : threshold - m.head;
 
   if (threshold !== null && !better(m.head, threshold)) {
     row.status = 'missed';
@@ -123,25 +150,91 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
   } else if (threshold !== null && m.lo !== undefined && m.hi !== undefined && !better(m.higherIsBetter ? m.lo : m.hi, threshold)) {
     row.status = 'uncertain';
     const edge = m.higherIsBetter ? m.lo : m.hi;
+    const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
     findings.push(
       finding(
-        THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE],
-        'notice',
-        `${description}: ${formatR(m.head)} meets it, but its confidence interval reaches ${formatR(edge)}; more realizations would settle it`,
+        thresholdRule,
+        m.reduced !== undefined ? uncertainSeverity(r.severity) : 'notice',
+        `${description}: ${formatR(m.head)} meets it, but its confidence interval reaches ${formatR(edge)}; more realizations would settle it${cut}`,
+        elements,
+        extra,
+      ),
+    );
+  } else if (threshold !== null && m.headSe !== undefined && r.kind === 'r-threshold' && r.statistic.kind === 'min') {
+    // The least of fewer realizations is never below the least of all of them: not proven.
+    row.status = 'uncertain';
+    findings.push(
+      finding(
+        thresholdRule,
+        uncertainSeverity(r.severity),
+        `${description}: ${formatR(m.head)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
+        elements,
+        extra,
+      ),
+    );
+  } else if (threshold !== null && m.headSe !== undefined && !(margin > REDUCED_MARGIN_SE * m.headSe)) {
+    // Met on realizations the budget cut, by a margin their own error does not clear.
+    row.status = 'uncertain';
+    findings.push(
+      finding(
+        thresholdRule,
+        uncertainSeverity(r.severity),
+        `${description}: ${formatR(m.head)} meets it, but ${m.reduced}, and it clears the ${m.higherIsBetter ? 'floor' : 'ceiling'} by ${formatR(margin)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} \u00d7 ${formatSe(m.headSe)})`,
         elements,
         extra,
       ),
     );
   }
 
-  if (m.base !== null && m.delta !== null && m.se !== null) {
+  if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== undefined) {
+    // Reduced differently on the two sides: the realizations do not pair, so no delta is judged.
+    if (row.status === 'met') row.status = 'uncertain';
+    const regression = input.policy.regression;
+    findings.push(
+      finding(
+        'regression',
+        uncertainSeverity(regression.severity),
+        `${description}: from ${formatR(m.base)} to ${formatR(m.head)}, but ${m.unpaired}; the change cannot be judged`,
+        elements,
+        extra,
+      ),
+    );
+  } else if (m.base !== null && m.delta !== null && m.se !== null) {
     const drop = m.higherIsBetter ? -m.delta : m.delta;
     if (drop > SAME * Math.max(1, Math.abs(m.base))) {
       const rule = input.policy.regression;
       const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(m.base));
       const change = `from ${formatR(m.base)} to ${formatR(m.head)} (\u0394 ${formatDelta(m.delta, m.se)})`;
       const noise = rule.noiseFactor * m.se;
-      if (drop < noise) {
+      const verb = m.higherIsBetter ? 'dropped' : 'rose';
+      if (m.reduced !== undefined && !(drop > allowance + noise) && !(drop <= allowance - noise)) {
+        // On cut realizations the drop is within noise-factor × se of the allowance: either side of it.
+        if (row.status === 'met') row.status = 'uncertain';
+        findings.push(
+          finding(
+            'regression',
+            uncertainSeverity(rule.severity),
+            `${description}: ${verb} ${change}, within ${rule.noiseFactor} \u00d7 its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            elements,
+            extra,
+          ),
+        );
+      } else if (m.reduced !== undefined && drop <= allowance - noise) {
+        findings.push(
+          finding('regression', 'notice', `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} \u00d7 its error; ${m.reduced}`, elements, extra),
+        );
+      } else if (m.reduced !== undefined) {
+        if (row.status !== 'missed') row.status = 'regressed';
+        findings.push(
+          finding(
+            'regression',
+            rule.severity,
+            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} \u00d7 its error; ${m.reduced}`,
+            elements,
+            extra,
+          ),
+        );
+      } else if (drop < noise) {
         if (row.status === 'met') row.status = 'within-noise';
         findings.push(
           finding(
@@ -169,6 +262,11 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
         );
       }
     }
+  }
+  // Every requirement judged on reduced work says so, once.
+  const reducedWork = m.reduced ?? m.incomplete;
+  if (reducedWork !== undefined && !findings.some((f) => f.message.includes(reducedWork))) {
+    findings.push(finding(thresholdRule, 'notice', `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, line: 0 }));
   }
   return { row, findings };
 }
@@ -302,6 +400,11 @@ export function compareDesign(input: CompareInput): FileReport {
   }
   for (const reason of input.head.result.evaluation.degraded) {
     report.findings.push(finding('degraded', 'notice', `head evaluation reduced: ${reason}`, [], { line: 0 }));
+  }
+  if (effective.base && !effective.thresholdsOnly && effective.base.result !== input.head.result) {
+    for (const reason of effective.base.result.evaluation.degraded) {
+      report.findings.push(finding('degraded', 'notice', `base evaluation reduced: ${reason}`, [], { line: 0 }));
+    }
   }
   report.head = input.head.result.evaluation;
   if (effective.base && !effective.thresholdsOnly) {

@@ -2,11 +2,17 @@
 // a pair, the paired delta and its standard error from common random numbers), the
 // confidence interval where the engine gives one, and the elements behind the number
 // (the weakest removal sequence, the worst case, the element whose loss breaks N−1).
+// When the work budget cut a random challenge's realizations (on either side), the value says
+// so (`reduced`), carries the standard error of the head's own statistic (`headSe`) for the
+// judging in compare.ts, and says when base and head were cut differently (`unpaired`).
 
 import { pairedStatistic, type DesignEvaluation, type Statistic } from '../envelope/evaluate.js';
 import type { AttackCurve, Contingency, ElementKind, Envelope, RemovalSequence } from '../envelope/types.js';
+import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
+import { sitesWithCoordinates } from '../challenges/regional.js';
 import { countOnes, eligibleUnits, stepsAt, unitCount } from '../challenges/units.js';
-import { quantileKey } from '../envelope/summary.js';
+import { quantileEstimate } from '../envelope/quantiles.js';
+import { quantileKey, sortedColumn } from '../envelope/summary.js';
 import type { CompactGraph } from '../graph/compact.js';
 import type { ReportElement } from '../report/report.js';
 import type { ChallengeDef, Requirement, ThresholdRequirement } from '../policy/types.js';
@@ -37,6 +43,16 @@ export interface Measured {
    * not proven. Says why.
    */
   incomplete?: string;
+  /**
+   * Set when the work budget left a random challenge with fewer realizations than the policy
+   * asks for, on the head or the base: says how many ran. The value and the delta then rest on
+   * fewer realizations.
+   */
+  reduced?: string;
+  /** Standard error of the head value itself, when the head's realizations were cut. */
+  headSe?: number;
+  /** Set when the budget cut base and head differently, so their realizations do not pair. */
+  unpaired?: string;
 }
 
 /** Most elements a finding lists. */
@@ -105,6 +121,48 @@ function statisticOf(req: Requirement): Statistic | undefined {
   }
 }
 
+/** Realizations a random challenge ran on one side, against those the policy asks for there. */
+function realizationsOf(env: Envelope, c: ChallengeDef, g: CompactGraph): { ran: number; asked: number } {
+  const asked = c.engine === 'regional' ? sitesWithCoordinates(g).length : (c.params.realizations ?? CHALLENGE_DEFAULTS.realizations);
+  return { ran: env.realizations, asked };
+}
+
+/** What the budget did to a challenge on both sides: how many realizations ran, and whether they pair. */
+function reductionOf(c: ChallengeDef, head: DesignSide, env: Envelope, base?: DesignSide, baseEnv?: Envelope): Pick<Measured, 'reduced' | 'unpaired'> {
+  const h = realizationsOf(env, c, head.graph);
+  const b = base && baseEnv ? realizationsOf(baseEnv, c, base.graph) : undefined;
+  const headCut = h.ran < h.asked;
+  const baseCut = b !== undefined && b.ran < b.asked;
+  if (!headCut && !baseCut) return {};
+  const out: Pick<Measured, 'reduced' | 'unpaired'> = {};
+  if (b === undefined) out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations`;
+  else if (h.ran === b.ran && h.asked === b.asked) out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on head and base`;
+  else out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on the head and ${b.ran} of ${b.asked} on the base`;
+  if (b !== undefined && base!.result !== head.result) {
+    const lh = head.result.labels.get(c.engine);
+    const lb = base!.result.labels.get(c.engine);
+    const sameLabels = lh === undefined || lb === undefined || (lh.length === lb.length && lh.every((l, i) => l === lb[i]));
+    if (h.ran !== b.ran) out.unpaired = `the budget cut base and head to different numbers of realizations (${b.ran} and ${h.ran}), so they do not pair`;
+    else if (!sameLabels) out.unpaired = 'the budget cut base and head to different epicentres, so they do not pair';
+  }
+  return out;
+}
+
+/**
+ * Standard error of the head's own statistic: the engine's paired estimate against a twin
+ * whose every sample is 0 (its statistic is then 0, so the paired delta is the head's value
+ * and the paired se is the head's se: sd/√n for the mean, the seeded bootstrap otherwise).
+ */
+function ownSe(head: DesignEvaluation, env: Envelope, stat: Statistic, x: number | undefined): number {
+  const samples = head.samples.get(env.challenge) ?? [];
+  const zero: DesignEvaluation = {
+    evaluation: { ...head.evaluation, envelopes: [env], attacks: [], contingencies: [] },
+    samples: new Map([[env.challenge, samples.map((s) => new Float64Array(s.length))]]),
+    labels: head.labels,
+  };
+  return pairedStatistic(zero, head, env.challenge, stat, x).se;
+}
+
 function missing(reason: string, higherIsBetter = true): Measured {
   return { base: null, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason };
 }
@@ -168,12 +226,19 @@ export function measure(req: Requirement, challenges: readonly ChallengeDef[], h
       elements: sequenceElements(env.weakest[0], x === undefined ? MAX_ELEMENTS : removalsAt(head.graph, env.kind, x)),
     };
     if (stat.kind === 'quantile' && j >= 0) {
+      // The band's quantiles carry their interval; any other q gets the same order-statistic one.
       const band = env.quantiles[quantileKey(stat.q)];
-      if (band) {
-        out.lo = band.lo[j];
-        out.hi = band.hi[j];
-      }
+      const ci = band ? { lo: band.lo[j], hi: band.hi[j] } : quantileEstimate(sortedColumn(head.result.samples.get(c.engine) ?? [], j), stat.q);
+      out.lo = ci.lo;
+      out.hi = ci.hi;
     }
+    const reduction = reductionOf(c, head, env, baseEnv ? base : undefined, baseEnv);
+    if (reduction.reduced !== undefined) {
+      out.reduced = reduction.reduced;
+      const h = realizationsOf(env, c, head.graph);
+      if (h.ran < h.asked) out.headSe = ownSe(head.result, env, stat, x);
+    }
+    if (reduction.unpaired !== undefined) out.unpaired = reduction.unpaired;
     return out;
   }
 

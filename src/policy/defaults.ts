@@ -16,6 +16,13 @@ export const DEFAULT_DESIGN_GLOBS: readonly string[] = [
   '**/*.net.json',
 ];
 
+/**
+ * Radius of a regional challenge that sets no `until`, in km. Fixed rather than derived from
+ * each design (so base and head share one grid); 50 km is a metropolitan-scale disaster, a
+ * round figure chosen for a first gate (common practice is to set it per hazard and region).
+ */
+export const REGIONAL_UNTIL_KM = 50;
+
 /** Default noise factor: drops below 2 standard errors are Monte Carlo noise (about 95 % two-sided, common practice). */
 export const DEFAULT_NOISE_FACTOR = 2;
 
@@ -100,7 +107,16 @@ regression:
 # A deleted design file: fail | warn | notice | ignore.
 removed-designs: notice
 
-# Rules for some files only; they may add or tighten requirements, never loosen them.
+# Work each evaluation of a design may take (head and base each). Beyond it the engine runs
+# fewer realizations or N-1 cases and the report marks the result as reduced; what the reduced
+# work cannot settle is "uncertain", never a pass. Seconds are converted to work at a fixed
+# rate (5e7 element visits per second), so a report never depends on the machine's speed.
+budget:
+  seconds: 60              # about a minute for a 1,000-node design under this policy
+  # work: 3e9              # the same in element visits; with both, the smaller applies
+
+# Rules for some files only; they may add or tighten requirements, never loosen them
+# (and raise the budget, never lower it).
 # overrides:
 #   - files: "core/**"
 #     requirements:

@@ -9,11 +9,12 @@ import type { ChallengeName, ChallengeParams, RValueSpec } from '../envelope/typ
 import type { MetricId } from '../metrics/types.js';
 import type { DesignFormat } from '../topology/model.js';
 import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
-import { DEFAULT_NOISE_FACTOR } from './defaults.js';
+import { DEFAULT_NOISE_FACTOR, REGIONAL_UNTIL_KM } from './defaults.js';
 import { requirementId } from './requirement-id.js';
 import schema from './policy.schema.json' with { type: 'json' };
 import { describePath as describe, throwSchemaErrors } from './schema-errors.js';
 import type {
+  Budget,
   ChallengeDef,
   DesignGlob,
   Override,
@@ -125,9 +126,9 @@ class FileBuilder {
       this.fail(`challenge "${name}": the band's lower quantile must be below its upper one`, [...path, 'band'], `e.g. [0.1, 0.9]`);
     }
     // The engine's defaults, written out, so that reports say exactly what ran. A region's
-    // radius is left to the engine (it derives one from the design's extent).
-    const params: ChallengeParams = { challenge: engine };
-    if (remove !== 'region' || until !== undefined) params.until = until ?? CHALLENGE_DEFAULTS.until;
+    // radius is fixed here too (the engine would derive one from each design's extent, so base
+    // and head could get different grids, whose areas and spreads do not compare).
+    const params: ChallengeParams = { challenge: engine, until: until ?? (remove === 'region' ? REGIONAL_UNTIL_KM : CHALLENGE_DEFAULTS.until) };
     if (random) {
       params.points = (raw.points as number | undefined) ?? CHALLENGE_DEFAULTS.points;
       params.realizations = (raw.realizations as number | undefined) ?? CHALLENGE_DEFAULTS.realizations;
@@ -255,6 +256,17 @@ class FileBuilder {
     return rule;
   }
 
+  budget(raw: Obj | undefined, path: readonly Segment[]): Budget | undefined {
+    if (raw === undefined) return undefined;
+    const budget: Budget = { where: this.at(path, true), fieldWhere: {} };
+    for (const key of ['work', 'seconds'] as const) {
+      if (raw[key] === undefined) continue;
+      budget[key] = raw[key] as number;
+      budget.fieldWhere[key] = this.at([...path, key]);
+    }
+    return budget;
+  }
+
   removed(raw: unknown, path: readonly Segment[]): { severity: RemovedSeverity; where: Where } | undefined {
     return raw === undefined ? undefined : { severity: raw as RemovedSeverity, where: this.at(path) };
   }
@@ -341,6 +353,8 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   if (regression) policy.regression = regression;
   const removed = b.removed(raw['removed-designs'], ['removed-designs']);
   if (removed) policy.removedDesigns = removed;
+  const budget = b.budget(raw.budget as Obj | undefined, ['budget']);
+  if (budget) policy.budget = budget;
 
   policy.overrides = ((raw.overrides as Obj[] | undefined) ?? []).map((o, i): Override => {
     const path: Segment[] = ['overrides', i];
@@ -353,6 +367,8 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
     if (rule) override.regression = rule;
     const rem = b.removed(o['removed-designs'], [...path, 'removed-designs']);
     if (rem) override.removedDesigns = rem;
+    const ob = b.budget(o.budget as Obj | undefined, [...path, 'budget']);
+    if (ob) override.budget = ob;
     return override;
   });
   return policy;

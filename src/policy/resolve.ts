@@ -1,8 +1,8 @@
 // From policy files to the rules for one design file: follow `extends`, fill what the root
 // file leaves out from the built-in policy, merge layer by layer, then apply the overrides
-// whose globs match the file. A floor may only ever be tightened: a definition that
-// loosens one written in its own file or in a file it extends is a PolicyError naming both
-// lines. A floor from a more basic file that is looser than one a more derived file set is
+// whose globs match the file. A floor may only ever be tightened (and the work budget that
+// judges the floors only raised): a definition that loosens one written in its own file or in
+// a file it extends is a PolicyError naming both lines. A floor from a more basic file that is looser than one a more derived file set is
 // simply outvoted (the tighter one holds). Pure: files are read through the `read` callback.
 
 import picomatch from 'picomatch';
@@ -10,10 +10,12 @@ import { PolicyError } from '../errors.js';
 import type { RValueSpec } from '../envelope/types.js';
 import { isMetricId, metrics as knownMetrics } from '../metrics/registry.js';
 import { closest } from '../topology/suggest.js';
+import { budgetWork, ENGINE_VISITS_PER_SECOND } from './budget.js';
 import { BUILTIN_POLICY_NAME, DEFAULT_POLICY_PATH, STARTER_POLICY } from './defaults.js';
 import { parsePolicyFile } from './load.js';
 import { requirementId } from './requirement-id.js';
 import type {
+  Budget,
   ChallengeDef,
   FilePolicy,
   Policy,
@@ -169,6 +171,48 @@ function mergeRemoved(
   );
 }
 
+/** Element visits in plain figures: 3e9, 2.5e9, 40000. */
+function visits(n: number): string {
+  return n >= 1e6 ? n.toExponential().replace('e+', 'e') : String(n);
+}
+
+/** The key of a budget that sets its element visits (the smaller limit), for naming its line. */
+function bindingKey(b: Budget): 'work' | 'seconds' | undefined {
+  if (b.seconds !== undefined && (b.work === undefined || b.seconds * ENGINE_VISITS_PER_SECOND <= b.work)) return 'seconds';
+  return b.work !== undefined ? 'work' : undefined;
+}
+
+function describeBudget(b: Budget): string {
+  return [b.work !== undefined ? `work ${visits(b.work)}` : '', b.seconds !== undefined ? `seconds ${b.seconds}` : ''].filter(Boolean).join(', ');
+}
+
+/**
+ * Apply the keys `next` sets on top of `prev`. A budget is not a floor, but it is the effort
+ * that judges the floors: what a smaller one cannot settle is "uncertain" (a warning), so a
+ * derived file or an override may raise it, never lower it.
+ */
+function mergeBudget(prev: Layered<Budget>, next: Layered<Budget>, what: string): Layered<Budget> {
+  const merged: Budget = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
+  for (const key of ['work', 'seconds'] as const) {
+    const value = next.value[key];
+    if (value === undefined) continue;
+    merged[key] = value;
+    merged.fieldWhere[key] = next.value.fieldWhere[key];
+  }
+  const before = budgetWork(prev.value);
+  const after = budgetWork(merged);
+  if (after >= before) return { value: merged, layer: Math.max(prev.layer, next.layer) };
+  if (next.layer < prev.layer) return prev; // a more basic file's smaller budget is outvoted
+  const at = bindingKey(merged);
+  const prevAt = bindingKey(prev.value);
+  throw new PolicyError(
+    `${what} lowers the budget to ${visits(after)} element visits (${describeBudget(merged)}) where ${visits(before)} (${describeBudget(prev.value)}) is in force`,
+    (at && merged.fieldWhere[at]) || next.value.where,
+    'an extending policy or an override may raise the budget, never lower it: a smaller budget leaves requirements uncertain',
+    [related((prevAt && prev.value.fieldWhere[prevAt]) || prev.value.where, 'the budget in force')],
+  );
+}
+
 function sameRValue(a: RValueSpec, b: RValueSpec): boolean {
   return JSON.stringify(a) === JSON.stringify(b);
 }
@@ -313,6 +357,7 @@ function mergeChain(chain: PolicyFile[]): Policy {
     value: root.removedDesigns ?? base.removedDesigns ?? { severity: 'notice' },
     layer: 0,
   };
+  let budget: Layered<Budget> = { value: (root.budget ?? base.budget)!, layer: 0 };
 
   const requirements: Layered<Requirement>[] = [];
   const rootReqs =
@@ -360,6 +405,7 @@ function mergeChain(chain: PolicyFile[]): Policy {
     }
     if (file.regression) regression = mergeRegression(regression, { value: file.regression, layer }, 'regression');
     if (file.removedDesigns) removed = mergeRemoved(removed, { value: file.removedDesigns, layer }, 'the policy');
+    if (file.budget) budget = mergeBudget(budget, { value: file.budget, layer }, 'the policy');
   });
 
   const challengeList = [...challenges.values()];
@@ -379,6 +425,7 @@ function mergeChain(chain: PolicyFile[]): Policy {
       for (const r of requirementsChecked) mergeRequirement(scratch, { value: r, layer }, what(r));
       if (o.regression) mergeRegression(regression, { value: o.regression, layer }, `override ${i + 1}, regression`);
       if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `override ${i + 1}`);
+      if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `override ${i + 1}`);
       overrides.push({ ...o, requirements: requirementsChecked, layer });
     }),
   );
@@ -394,8 +441,9 @@ function mergeChain(chain: PolicyFile[]): Policy {
     requirements: checked.map((r) => r.value),
     regression: regression.value,
     removedDesigns: removed.value,
+    budget: budget.value,
     overrides,
-    layers: { requirements: checked.map((r) => r.layer), regression: regression.layer, removed: removed.layer },
+    layers: { requirements: checked.map((r) => r.layer), regression: regression.layer, removed: removed.layer, budget: budget.layer },
   };
 }
 
@@ -427,6 +475,7 @@ export function policyForFile(policy: Policy, path: string): FilePolicy {
   const requirements: Layered<Requirement>[] = policy.requirements.map((value, i) => ({ value, layer: layers.requirements[i] }));
   let regression: Layered<RegressionRule> = { value: policy.regression, layer: layers.regression };
   let removed: Layered<{ severity: RemovedSeverity; where?: Where }> = { value: policy.removedDesigns, layer: layers.removed };
+  let budget: Layered<Budget> = { value: policy.budget, layer: layers.budget };
   for (const o of policy.overrides) {
     if (!matches(o.files, path)) continue;
     const { layer } = o;
@@ -434,7 +483,9 @@ export function policyForFile(policy: Policy, path: string): FilePolicy {
     for (const r of o.requirements) mergeRequirement(requirements, { value: r, layer }, what);
     if (o.regression) regression = mergeRegression(regression, { value: o.regression, layer }, `${what}:`);
     if (o.removedDesigns) removed = mergeRemoved(removed, { value: o.removedDesigns, layer }, what);
+    if (o.budget) budget = mergeBudget(budget, { value: o.budget, layer }, what);
   }
+  const b = budget.value;
   const format = policy.designs.find((d) => d.format !== undefined && matches(d.files, path))?.format;
   return {
     rValue: policy.rValue,
@@ -443,6 +494,7 @@ export function policyForFile(policy: Policy, path: string): FilePolicy {
     requirements: requirements.map((r) => r.value),
     regression: regression.value,
     removedDesigns: removed.value.severity,
+    budget: { ...(b.work !== undefined ? { work: b.work } : {}), ...(b.seconds !== undefined ? { seconds: b.seconds } : {}), maxWork: budgetWork(b) },
     ...(format ? { format } : {}),
   };
 }

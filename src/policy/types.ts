@@ -119,11 +119,33 @@ export interface DesignGlob {
   where: Where;
 }
 
+/**
+ * The work budget of each design evaluation (head and base alike). Not a floor of the design,
+ * but the effort that judges the floors: an extending policy or an override may raise it,
+ * never lower it (a smaller budget turns judgements into "uncertain").
+ */
+export interface Budget {
+  /** Element visits (the engine's unit of work). */
+  work?: number;
+  /** Seconds, converted to element visits at a fixed rate (src/policy/budget.ts). */
+  seconds?: number;
+  where: Where;
+  fieldWhere: Partial<Record<'work' | 'seconds', Where>>;
+}
+
+/** A budget in force for one file: as written, and the element visits it allows. */
+export interface ResolvedBudget {
+  work?: number;
+  seconds?: number;
+  maxWork: number;
+}
+
 export interface Override {
   files: string[];
   requirements: Requirement[];
   regression?: RegressionRule;
   removedDesigns?: { severity: RemovedSeverity; where: Where };
+  budget?: Budget;
   where: Where;
 }
 
@@ -141,6 +163,7 @@ export interface PolicyFile {
   requirements?: Requirement[];
   regression?: RegressionRule;
   removedDesigns?: { severity: RemovedSeverity; where: Where };
+  budget?: Budget;
   overrides: Override[];
 }
 
@@ -158,11 +181,12 @@ export interface Policy {
   requirements: Requirement[];
   regression: RegressionRule;
   removedDesigns: { severity: RemovedSeverity; where?: Where };
+  budget: Budget;
   /** Overrides of every file of the chain, the most basic file's first. */
   overrides: PolicyOverride[];
   /** Depth of the file each definition came from (0 = the most basic): a definition may
    *  not loosen one from its own or a more basic file. */
-  layers: { requirements: number[]; regression: number; removed: number };
+  layers: { requirements: number[]; regression: number; removed: number; budget: number };
 }
 
 export interface PolicyOverride extends Override {
@@ -177,5 +201,6 @@ export interface FilePolicy {
   requirements: Requirement[];
   regression: RegressionRule;
   removedDesigns: RemovedSeverity;
+  budget: ResolvedBudget;
   format?: DesignFormat;
 }
