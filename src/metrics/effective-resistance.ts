@@ -5,22 +5,29 @@
 // complete graph (R_G ≥ N' − 1 by AM–HM). Here N' must be the survivor count: with N0 a
 // complete survivor could score above 1. Disconnected survivors: R_G = ∞, score 0
 // (detected by components). Fewer than two survivors: raw 0, score 0.
-// Solvers: survivors of up to `denseLimit` nodes (default 300) get the exact dense
-// Laplacian spectrum. Larger: tr(L⁺) by stochastic Lanczos quadrature of 1/x on the
+// Exact path: the reduced Laplacian factored in band storage after reverse Cuthill–McKee
+// ordering, tr(M⁻¹) by Takahashi's recurrence (kernels/banded-resistance.ts), O(N·b²).
+// It is taken whenever the survivors have at most `denseLimit` nodes (default 300) or the
+// factorisation costs at most `exactWork` operations (default 5e7) — real network designs
+// are long and sparse, so b stays small (31 for the 754-node Kdl zoo network) and they are
+// exact at any size. Otherwise (expander-like graphs: b = 638 for a 1,000-node
+// Barabási–Albert graph) tr(L⁺) is ESTIMATED by stochastic Lanczos quadrature of 1/x on the
 // Laplacian with the constant vector deflated — the Lanczos form of CG + Hutchinson
 // (SCIENCE.md §6) — 32 fixed Rademacher probes keyed by node id, each run until its Gauss
-// quadrature settles to 1e-9 (at most 120 steps). This is an ESTIMATE: measured relative
-// error on seeded random graphs is about 1e-2 at 300 nodes, falling roughly as 1/√N (1.6e-3
-// at 1,200; test/metrics/spectral.test.ts). Deflating the smallest eigenpairs first, as
-// for natural_connectivity, did not pay here: on flat Laplacian spectra it cost 5–10× more
-// time for no measurable gain. Use denseLimit: Infinity for the exact value (O(N³)).
+// quadrature settles to 1e-9 (at most 120 steps). Measured relative error of the estimate:
+// 2.0e-3 on that BA graph, up to about 1e-2 on random graphs of a few hundred nodes
+// (test/metrics/spectral.test.ts checks 2e-2). Deflating the smallest eigenpairs first, as
+// for natural_connectivity, cost 5–10× more time there for no measurable gain.
+// denseLimit: Infinity forces the exact path.
 
-import { createDenseSpectrum } from './kernels/dense-spectrum.js';
+import { createBandedResistance } from './kernels/banded-resistance.js';
 import { createLaplacianOperator } from './kernels/operators.js';
 import { createTraceEstimator } from './kernels/slq.js';
 import { createSpectralSurvivors, TRACE_DENSE_LIMIT } from './kernels/spectral-survivors.js';
 import type { Metric } from './types.js';
 
+/** Largest banded factorisation (N·b² operations) done exactly above the dense limit. */
+export const DEFAULT_EXACT_WORK = 5e7;
 const PROBES = 32;
 const STEPS = 120;
 const inverse = (x: number) => 1 / x;
@@ -32,32 +39,33 @@ export const effectiveResistance: Metric = {
   cost: 'spectral',
   appliesTo: () => true,
   create(g, options = {}) {
-    const limit = Math.min(g.n, options.denseLimit ?? TRACE_DENSE_LIMIT);
+    const limit = options.denseLimit ?? TRACE_DENSE_LIMIT;
+    const maxWork = options.exactWork ?? DEFAULT_EXACT_WORK;
     const spectral = createSpectralSurvivors(g);
-    const dense = createDenseSpectrum(limit);
-    const big = g.n > limit;
-    const slq = big ? createTraceEstimator(g.n, STEPS) : null;
+    const banded = createBandedResistance(g.n);
+    let slq: ReturnType<typeof createTraceEstimator> | null = null;
     const op = createLaplacianOperator();
-    const deflation = new Float64Array(big ? g.n : 0);
+    const deflation = new Float64Array(g.n);
     return (mask) => {
       const local = spectral.survivors(mask);
       const n = local.n;
       if (n < 2) return { raw: 0, normalized: 0 };
       if (spectral.components(local).count > 1) return { raw: Infinity, normalized: 0 };
-      let trace = 0;
-      if (n <= limit) {
-        const d = dense.laplacian(local);
-        for (let i = 1; i < n; i++) trace += 1 / d[i];
+      const b = banded.prepare(local);
+      let resistance: number;
+      if (n <= limit || n * b * b <= maxWork) {
+        resistance = banded.resistance(local, b);
       } else {
         op.bind(local);
         deflation.fill(1 / Math.sqrt(n), 0, n);
-        trace = slq!.estimate(op, inverse, spectral.keysOf(local), deflation, 1, {
+        slq ??= createTraceEstimator(g.n, STEPS);
+        const trace = slq.estimate(op, inverse, spectral.keysOf(local), deflation, 1, {
           probes: PROBES,
           steps: STEPS,
           tol: 1e-9,
         });
+        resistance = n * trace;
       }
-      const resistance = n * trace;
       return { raw: resistance, normalized: Math.min(1, (n - 1) / resistance) };
     };
   },

@@ -46,6 +46,12 @@ export interface MetricOptions {
    */
   denseLimit?: number;
   /**
+   * effective_resistance: survivors whose banded factorisation costs at most this many
+   * operations (N·b², b the band width after reverse Cuthill–McKee) are solved exactly even
+   * above `denseLimit` (default 5e7); larger ones are estimated.
+   */
+  exactWork?: number;
+  /**
    * Spectral metrics: start each Lanczos run from the previous evaluation's eigenvector
    * (faster on sequences of similar masks). Off by default, because results then depend on
    * the order of evaluation in the last digits (about 1e-10 relative) — with it off, every

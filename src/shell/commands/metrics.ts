@@ -17,7 +17,8 @@ Computes the robustness metrics of one design with nothing removed: each metric'
 and its normalised score in [0, 1] (1 = the best the metric can say, 0 = no robustness left).
 Metrics that need data the design lacks (link latencies or lengths, traffic demands) are left
 out. Spectral metrics are taken on the simple graph (parallel links merged); above 300 nodes
-effective_resistance and natural_connectivity are seeded estimates (see the README).
+natural_connectivity, and effective_resistance of dense, expander-like designs, are seeded
+estimates (see the README).
 
 Metrics:
 ${metrics.map((m) => `  ${m.id.padEnd(23)} ${m.description}\n  ${''.padEnd(23)} score: ${m.normalization}`).join('\n')}
