@@ -5,7 +5,7 @@
 // Curves hold raw counts; index k is "after k units were removed".
 
 import type { CompactGraph } from '../graph/compact.js';
-import { createUnionFind, type UnionFind } from '../metrics/kernels/union-find.js';
+import { findRoot } from '../metrics/kernels/union-find.js';
 import type { ElementKind } from './types.js';
 
 export interface ConnectivityCurve {
@@ -17,7 +17,9 @@ export interface ConnectivityCurve {
 
 /** Scratch space for one graph, reused by every realization. */
 export interface UnionFindWorkspace {
-  uf: UnionFind;
+  /** Union–find forest (union by size, path halving) over node indices. */
+  parent: Int32Array;
+  size: Int32Array;
   nodeOn: Uint8Array;
   linkOn: Uint8Array;
   /** For group orders: the position of the group that takes each link first. */
@@ -26,7 +28,8 @@ export interface UnionFindWorkspace {
 
 export function createUnionFindWorkspace(g: CompactGraph): UnionFindWorkspace {
   return {
-    uf: createUnionFind(g.n),
+    parent: new Int32Array(g.n),
+    size: new Int32Array(g.n),
     nodeOn: new Uint8Array(g.n),
     linkOn: new Uint8Array(g.m),
     firstGroup: new Int32Array(g.m),
@@ -65,7 +68,7 @@ export function connectivityCurve(
     }
   }
 
-  const { parent, size } = ws.uf;
+  const { parent, size } = ws;
   const st: JoinState = { lcc: 0, pairs: 0 };
   const { offsets, neighbors, linkOf, linkSource, linkTarget } = g;
   const addNode = (v: number): void => {
@@ -84,7 +87,10 @@ export function connectivityCurve(
   };
 
   // The survivors at k = count.
-  ws.uf.reset(g.n);
+  for (let v = 0; v < g.n; v++) {
+    parent[v] = v;
+    size[v] = 1;
+  }
   for (let v = 0; v < g.n; v++) if (nodeOn[v] === 1) st.lcc = 1;
   for (let e = 0; e < g.m; e++) {
     const a = linkSource[e];
@@ -116,18 +122,10 @@ interface JoinState {
   pairs: number;
 }
 
-/** Union by size with path halving (the structure of metrics/kernels/union-find.ts, inlined for the hot loop). */
+/** Union by size with path halving (metrics/kernels/union-find.ts), also counting the pairs each merge connects. */
 function join(st: JoinState, parent: Int32Array, size: Int32Array, a: number, b: number): void {
-  while (parent[a] !== a) {
-    const up = parent[parent[a]];
-    parent[a] = up;
-    a = up;
-  }
-  while (parent[b] !== b) {
-    const up = parent[parent[b]];
-    parent[b] = up;
-    b = up;
-  }
+  a = findRoot(parent, a);
+  b = findRoot(parent, b);
   if (a === b) return;
   const sa = size[a];
   const sb = size[b];
