@@ -30229,9 +30229,9 @@ var require_float = __commonJS({
       test: /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/,
       resolve(str) {
         const node = new Scalar.Scalar(parseFloat(str));
-        const dot = str.indexOf(".");
-        if (dot !== -1 && str[str.length - 1] === "0")
-          node.minFractionDigits = str.length - dot - 1;
+        const dot2 = str.indexOf(".");
+        if (dot2 !== -1 && str[str.length - 1] === "0")
+          node.minFractionDigits = str.length - dot2 - 1;
         return node;
       },
       stringify: stringifyNumber.stringifyNumber
@@ -30669,9 +30669,9 @@ var require_float2 = __commonJS({
       test: /^[-+]?(?:[0-9][0-9_]*)?\.[0-9_]*$/,
       resolve(str) {
         const node = new Scalar.Scalar(parseFloat(str.replace(/_/g, "")));
-        const dot = str.indexOf(".");
-        if (dot !== -1) {
-          const f = str.substring(dot + 1).replace(/_/g, "");
+        const dot2 = str.indexOf(".");
+        if (dot2 !== -1) {
+          const f = str.substring(dot2 + 1).replace(/_/g, "");
           if (f[f.length - 1] === "0")
             node.minFractionDigits = f.length;
         }
@@ -40016,18 +40016,18 @@ function eigenvectorCentrality(g, tolerance = 1e-13, maxRounds = 1e5) {
   let x = new Float64Array(n).fill(n > 0 ? 1 / Math.sqrt(n) : 0);
   let y = new Float64Array(n);
   for (let round = 0; round < maxRounds; round++) {
-    let norm = 0;
+    let norm2 = 0;
     for (let v = 0; v < n; v++) {
       let s = x[v];
       for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) s += x[g.neighbors[p]];
       y[v] = s;
-      norm += s * s;
+      norm2 += s * s;
     }
-    norm = Math.sqrt(norm);
-    if (norm === 0) break;
+    norm2 = Math.sqrt(norm2);
+    if (norm2 === 0) break;
     let change = 0;
     for (let v = 0; v < n; v++) {
-      y[v] /= norm;
+      y[v] /= norm2;
       const d = Math.abs(y[v] - x[v]);
       if (d > change) change = d;
     }
@@ -40835,7 +40835,57 @@ function sign(a, b) {
 }
 
 // src/metrics/kernels/lanczos.ts
-function createLanczos(capacity, maxCount, basis = 40) {
+function dot(a, ao, b, bo, n) {
+  let s = 0;
+  for (let i = 0; i < n; i++) s += a[ao + i] * b[bo + i];
+  return s;
+}
+function axpy(w, c, V, off, n) {
+  for (let i = 0; i < n; i++) w[i] -= c * V[off + i];
+}
+function norm(w, n) {
+  return Math.sqrt(dot(w, 0, w, 0, n));
+}
+function orthogonalize(w, V, stride, n, upTo, defl, dc, coeff, ref = norm(w, n)) {
+  for (let pass = 0; pass < 2; pass++) {
+    if (pass === 1 && norm(w, n) > 0.7071 * ref) break;
+    for (let k = 0; k < dc; k++) {
+      const c = dot(defl, k * n, w, 0, n);
+      axpy(w, c, defl, k * n, n);
+    }
+    let l = 0;
+    for (; l + 4 <= upTo; l += 4) {
+      const o0 = l * stride;
+      const o1 = o0 + stride;
+      const o2 = o1 + stride;
+      const o3 = o2 + stride;
+      let c0 = 0;
+      let c1 = 0;
+      let c2 = 0;
+      let c3 = 0;
+      for (let i = 0; i < n; i++) {
+        const x = w[i];
+        c0 += V[o0 + i] * x;
+        c1 += V[o1 + i] * x;
+        c2 += V[o2 + i] * x;
+        c3 += V[o3 + i] * x;
+      }
+      for (let i = 0; i < n; i++) w[i] -= c0 * V[o0 + i] + c1 * V[o1 + i] + c2 * V[o2 + i] + c3 * V[o3 + i];
+      if (coeff) {
+        coeff[l] += c0;
+        coeff[l + 1] += c1;
+        coeff[l + 2] += c2;
+        coeff[l + 3] += c3;
+      }
+    }
+    for (; l < upTo; l++) {
+      const c = dot(V, l * stride, w, 0, n);
+      if (coeff) coeff[l] += c;
+      axpy(w, c, V, l * stride, n);
+    }
+  }
+}
+function createLanczos(capacity, maxCount, basis = 24) {
   const m0 = Math.max(basis, 2 * maxCount + 8);
   const stride = Math.max(1, capacity);
   const V = new Float64Array(m0 * stride);
@@ -40846,6 +40896,7 @@ function createLanczos(capacity, maxCount, basis = 40) {
   const theta = new Float64Array(m0);
   const scratch = new Float64Array(m0);
   const h = new Float64Array(m0);
+  const views = Array.from({ length: m0 }, (_, i) => V.subarray(i * stride, (i + 1) * stride));
   const result = {
     values: new Float64Array(maxCount),
     vectors: new Float64Array(maxCount * stride),
@@ -40854,30 +40905,6 @@ function createLanczos(capacity, maxCount, basis = 40) {
     applications: 0,
     converged: false
   };
-  function dot(a, ao, b, bo, n) {
-    let s = 0;
-    for (let i = 0; i < n; i++) s += a[ao + i] * b[bo + i];
-    return s;
-  }
-  function orthogonalize(n, upTo, defl, dc, coeff) {
-    const before = norm(n);
-    for (let pass = 0; pass < 2; pass++) {
-      if (pass === 1 && norm(n) > 0.7071 * before) break;
-      for (let k = 0; k < dc; k++) {
-        const c = dot(defl, k * n, w, 0, n);
-        for (let i = 0; i < n; i++) w[i] -= c * defl[k * n + i];
-      }
-      for (let l = 0; l < upTo; l++) {
-        const c = dot(V, l * stride, w, 0, n);
-        if (coeff) coeff[l] += c;
-        const off = l * stride;
-        for (let i = 0; i < n; i++) w[i] -= c * V[off + i];
-      }
-    }
-  }
-  function norm(n) {
-    return Math.sqrt(dot(w, 0, w, 0, n));
-  }
   return {
     result,
     solve(op, req) {
@@ -40900,41 +40927,57 @@ function createLanczos(capacity, maxCount, basis = 40) {
       const keys = req.keys ?? null;
       if (req.start) for (let i = 0; i < n; i++) w[i] = req.start[i];
       else for (let i = 0; i < n; i++) w[i] = noise(keys ? keys[i] : i, 24301);
-      orthogonalize(n, 0, defl, dc, null);
-      let beta = norm(n);
+      orthogonalize(w, V, stride, n, 0, defl, dc, null);
+      let beta = norm(w, n);
       if (!(beta > 1e-8)) {
         for (let i = 0; i < n; i++) w[i] = noise(keys ? keys[i] : i, 24301 + salt++);
-        orthogonalize(n, 0, defl, dc, null);
-        beta = norm(n);
+        orthogonalize(w, V, stride, n, 0, defl, dc, null);
+        beta = norm(w, n);
       }
       for (let i = 0; i < n; i++) V[i] = w[i] / beta;
       H.fill(0, 0, m * m);
       let j = 0;
       let apps = 0;
+      let betaPrev = 0;
       for (; ; ) {
         let residual = 0;
         for (let i = j; i < m; i++) {
-          const vi = V.subarray(i * stride, i * stride + n);
-          op.apply(vi, w);
+          op.apply(views[i], w);
           apps++;
           h.fill(0, 0, i + 1);
-          orthogonalize(n, i + 1, defl, dc, h);
+          if (i === j && j > 0) {
+            for (let k = 0; k < j; k++) {
+              const c = H[k * m + j];
+              h[k] = c;
+              if (c !== 0) axpy(w, c, V, k * stride, n);
+            }
+          } else if (i > 0 && betaPrev !== 0) {
+            h[i - 1] = betaPrev;
+            axpy(w, betaPrev, V, (i - 1) * stride, n);
+          }
+          const alpha = dot(V, i * stride, w, 0, n);
+          h[i] += alpha;
+          axpy(w, alpha, V, i * stride, n);
+          orthogonalize(w, V, stride, n, i + 1, defl, dc, h);
           for (let l = 0; l <= i; l++) {
             H[l * m + i] = h[l];
             H[i * m + l] = h[l];
           }
-          beta = norm(n);
+          beta = norm(w, n);
           residual = beta;
+          betaPrev = beta;
           if (i + 1 < m) {
             if (beta <= 1e-10 * Math.max(op.normBound, 1)) {
               for (let t = 0; t < n; t++) w[t] = noise(keys ? keys[t] : t, 24301 + salt++);
-              orthogonalize(n, i + 1, defl, dc, null);
-              beta = norm(n);
+              orthogonalize(w, V, stride, n, i + 1, defl, dc, null);
+              beta = norm(w, n);
+              betaPrev = 0;
               H[(i + 1) * m + i] = 0;
               H[i * m + i + 1] = 0;
             }
             const off2 = (i + 1) * stride;
-            for (let t = 0; t < n; t++) V[off2 + t] = w[t] / beta;
+            const inv = 1 / beta;
+            for (let t = 0; t < n; t++) V[off2 + t] = w[t] * inv;
           }
         }
         Y.set(H.subarray(0, m * m));
@@ -40983,12 +41026,12 @@ function createLanczos(capacity, maxCount, basis = 40) {
           H[k * m + keep] = c;
           H[keep * m + k] = c;
         }
-        orthogonalize(n, keep, defl, dc, null);
-        beta = norm(n);
+        orthogonalize(w, V, stride, n, keep, defl, dc, null);
+        beta = norm(w, n);
         if (!(beta > 1e-300)) {
           for (let t = 0; t < n; t++) w[t] = noise(keys ? keys[t] : t, 24301 + salt++);
-          orthogonalize(n, keep, defl, dc, null);
-          beta = norm(n);
+          orthogonalize(w, V, stride, n, keep, defl, dc, null);
+          beta = norm(w, n);
         }
         const off = keep * stride;
         for (let t = 0; t < n; t++) V[off + t] = w[t] / beta;
@@ -41203,18 +41246,49 @@ function popcount32(x) {
   x = x + (x >>> 4) & 252645135;
   return Math.imul(x, 16843009) >>> 24;
 }
+var LONG_GRAPH_ECCENTRICITY = 99;
 function wordsFor(sources) {
   return Math.max(1, Math.min(8, Math.ceil(sources / 32)));
 }
 function createHopHistogram(capacity) {
   const maxWords = wordsFor(capacity);
-  const seen = new Uint32Array(Math.max(1, capacity * maxWords));
-  let frontier = new Uint32Array(seen.length);
-  let next = new Uint32Array(seen.length);
+  const size = Math.max(1, capacity * maxWords);
+  const seen = new Uint32Array(size);
+  let frontier = new Uint32Array(size);
+  let next = new Uint32Array(size);
   const done = new Uint8Array(Math.max(1, capacity));
+  const listed = new Uint8Array(Math.max(1, capacity));
+  let active = new Int32Array(Math.max(1, capacity));
+  let nextActive = new Int32Array(Math.max(1, capacity));
   const full = new Uint32Array(maxWords);
   const acc = new Uint32Array(maxWords);
   const result = { hist: new Float64Array(capacity + 1), maxDistance: 0 };
+  const dist = new Int32Array(Math.max(1, capacity));
+  const queue2 = new Int32Array(Math.max(1, capacity));
+  function single(graph, s) {
+    const { offsets, neighbors } = graph;
+    dist.fill(-1, 0, graph.n);
+    dist[s] = 0;
+    queue2[0] = s;
+    let head = 0;
+    let tail = 1;
+    let ecc = 0;
+    const hist = result.hist;
+    while (head < tail) {
+      const v = queue2[head++];
+      const dv = dist[v] + 1;
+      for (let p = offsets[v]; p < offsets[v + 1]; p++) {
+        const w = neighbors[p];
+        if (dist[w] >= 0) continue;
+        dist[w] = dv;
+        queue2[tail++] = w;
+        hist[dv]++;
+        if (dv > ecc) ecc = dv;
+      }
+    }
+    if (ecc > result.maxDistance) result.maxDistance = ecc;
+    return ecc;
+  }
   return {
     run(graph, sources, count) {
       const n = graph.n;
@@ -41222,76 +41296,120 @@ function createHopHistogram(capacity) {
       const hist = result.hist;
       hist.fill(0, 0, result.maxDistance + 1);
       result.maxDistance = 0;
+      if (count === 0) return result;
+      const ecc = single(graph, sources[0]);
+      if (ecc >= LONG_GRAPH_ECCENTRICITY) {
+        for (let i = 1; i < count; i++) single(graph, sources[i]);
+        return result;
+      }
+      hist.fill(0, 0, result.maxDistance + 1);
+      result.maxDistance = 0;
       const W = wordsFor(count);
       const batch = 32 * W;
+      const sweepWork = n + offsets[n];
       for (let start = 0; start < count; start += batch) {
         const width = Math.min(batch, count - start);
         const used = n * W;
         seen.fill(0, 0, used);
         frontier.fill(0, 0, used);
+        next.fill(0, 0, used);
         done.fill(0, 0, n);
         for (let w = 0; w < W; w++) {
           const bits = width - 32 * w;
           full[w] = bits >= 32 ? 4294967295 : bits <= 0 ? 0 : (1 << bits) - 1 >>> 0;
         }
+        let activeCount = 0;
         for (let i = 0; i < width; i++) {
-          const at = sources[start + i] * W + (i >>> 5);
+          const s = sources[start + i];
+          const at = s * W + (i >>> 5);
           const bit = 1 << (i & 31);
           seen[at] |= bit;
           frontier[at] |= bit;
+          if (!listed[s]) {
+            listed[s] = 1;
+            active[activeCount++] = s;
+          }
         }
-        for (let d = 1; ; d++) {
+        for (let i = 0; i < activeCount; i++) listed[active[i]] = 0;
+        for (let d = 1; activeCount > 0; d++) {
+          let frontierWork = 0;
+          for (let i = 0; i < activeCount; i++) frontierWork += offsets[active[i] + 1] - offsets[active[i]];
           let reached = 0;
-          if (W === 1) {
-            for (let v = 0; v < n; v++) {
-              if (done[v]) {
-                next[v] = 0;
-                continue;
+          let nextCount = 0;
+          if (4 * frontierWork < sweepWork) {
+            for (let i = 0; i < activeCount; i++) {
+              const v = active[i];
+              const vb = v * W;
+              for (let p = offsets[v]; p < offsets[v + 1]; p++) {
+                const u = neighbors[p];
+                if (done[u]) continue;
+                const ub = u * W;
+                let any = 0;
+                for (let w = 0; w < W; w++) {
+                  const x = frontier[vb + w] & ~seen[ub + w];
+                  next[ub + w] |= x;
+                  any |= x;
+                }
+                if (any !== 0 && !listed[u]) {
+                  listed[u] = 1;
+                  nextActive[nextCount++] = u;
+                }
               }
-              let a = 0;
-              for (let p = offsets[v]; p < offsets[v + 1]; p++) a |= frontier[neighbors[p]];
-              const s = seen[v];
-              const x = a & ~s;
-              next[v] = x;
-              if (x !== 0) {
-                const t2 = s | x;
-                seen[v] = t2;
+            }
+            for (let i = 0; i < nextCount; i++) {
+              const u = nextActive[i];
+              listed[u] = 0;
+              const ub = u * W;
+              let complete2 = true;
+              for (let w = 0; w < W; w++) {
+                const x = next[ub + w];
                 reached += popcount32(x);
-                if (t2 >>> 0 === full[0]) done[v] = 1;
+                const t = (seen[ub + w] | x) >>> 0;
+                seen[ub + w] = t;
+                if (t !== full[w]) complete2 = false;
               }
+              if (complete2) done[u] = 1;
             }
           } else {
             for (let v = 0; v < n; v++) {
+              if (done[v]) continue;
               const base = v * W;
-              if (done[v]) {
-                for (let w = 0; w < W; w++) next[base + w] = 0;
-                continue;
-              }
-              acc.fill(0, 0, W);
+              for (let w = 0; w < W; w++) acc[w] = 0;
               for (let p = offsets[v]; p < offsets[v + 1]; p++) {
                 const ub = neighbors[p] * W;
                 for (let w = 0; w < W; w++) acc[w] |= frontier[ub + w];
               }
+              let any = 0;
               let complete2 = true;
               for (let w = 0; w < W; w++) {
                 const s = seen[base + w];
                 const x = acc[w] & ~s;
                 next[base + w] = x;
-                if (x !== 0) {
-                  seen[base + w] = s | x;
-                  reached += popcount32(x);
-                }
-                if (seen[base + w] >>> 0 !== full[w]) complete2 = false;
+                any |= x;
+                const t = (s | x) >>> 0;
+                seen[base + w] = t;
+                if (t !== full[w]) complete2 = false;
+                if (x !== 0) reached += popcount32(x);
               }
+              if (any !== 0) nextActive[nextCount++] = v;
               if (complete2) done[v] = 1;
             }
           }
-          if (reached === 0) break;
-          hist[d] += reached;
-          if (d > result.maxDistance) result.maxDistance = d;
-          const t = frontier;
+          if (reached > 0) {
+            hist[d] += reached;
+            if (d > result.maxDistance) result.maxDistance = d;
+          }
+          for (let i = 0; i < activeCount; i++) {
+            const vb = active[i] * W;
+            for (let w = 0; w < W; w++) frontier[vb + w] = 0;
+          }
+          const f = frontier;
           frontier = next;
-          next = t;
+          next = f;
+          const a = active;
+          active = nextActive;
+          nextActive = a;
+          activeCount = nextCount;
         }
       }
       return result;
@@ -41300,44 +41418,31 @@ function createHopHistogram(capacity) {
 }
 
 // src/metrics/kernels/union-find.ts
-function createUnionFind(capacity) {
-  const parent = new Int32Array(capacity);
-  const size = new Int32Array(capacity);
-  const find = (i) => {
-    while (parent[i] !== i) {
-      const up = parent[parent[i]];
-      parent[i] = up;
-      i = up;
-    }
-    return i;
-  };
-  return {
-    parent,
-    size,
-    find,
-    union(a, b) {
-      let ra = find(a);
-      let rb = find(b);
-      if (ra === rb) return -1;
-      if (size[ra] < size[rb]) {
-        const t = ra;
-        ra = rb;
-        rb = t;
-      }
-      parent[rb] = ra;
-      size[ra] += size[rb];
-      return ra;
-    },
-    reset(n) {
-      for (let i = 0; i < n; i++) {
-        parent[i] = i;
-        size[i] = 1;
-      }
-    }
-  };
+function findRoot(parent, i) {
+  while (parent[i] !== i) {
+    const up = parent[parent[i]];
+    parent[i] = up;
+    i = up;
+  }
+  return i;
+}
+function unite(parent, size, a, b) {
+  let ra = findRoot(parent, a);
+  let rb = findRoot(parent, b);
+  if (ra === rb) return false;
+  if (size[ra] < size[rb]) {
+    const t = ra;
+    ra = rb;
+    rb = t;
+  }
+  parent[rb] = ra;
+  size[ra] += size[rb];
+  return true;
 }
 function createComponentCounter(g) {
-  const uf = createUnionFind(g.n);
+  const parent = new Int32Array(g.n);
+  const size = new Int32Array(g.n);
+  const uf = { parent, size, find: (i) => findRoot(parent, i) };
   const summary2 = { alive: 0, count: 0, largest: 0, largestRoot: -1, connectedPairs: 0 };
   const { linkSource, linkTarget } = g;
   return {
@@ -41346,22 +41451,25 @@ function createComponentCounter(g) {
     run(mask) {
       const node = mask.node;
       const link = mask.link;
-      uf.reset(g.n);
+      const n = g.n;
       let alive = 0;
-      for (let v = 0; v < g.n; v++) alive += node[v] ^ 1;
+      for (let v = 0; v < n; v++) {
+        parent[v] = v;
+        size[v] = 1;
+        alive += node[v] ^ 1;
+      }
       let count = alive;
       for (let e = 0; e < g.m; e++) {
         if (link[e]) continue;
         const a = linkSource[e];
         const b = linkTarget[e];
         if (node[a] || node[b]) continue;
-        if (uf.union(a, b) >= 0) count--;
+        if (unite(parent, size, a, b)) count--;
       }
       let largest = 0;
       let largestRoot = -1;
       let pairs = 0;
-      const { parent, size } = uf;
-      for (let v = 0; v < g.n; v++) {
+      for (let v = 0; v < n; v++) {
         if (node[v] || parent[v] !== v) continue;
         const s = size[v];
         pairs += s * (s - 1) / 2;
@@ -41390,7 +41498,8 @@ function createLargestComponentSources(g) {
     out.count = 0;
     if (s.largestRoot < 0) return out;
     const root = s.largestRoot;
-    for (let i = 0; i < local.n; i++) if (counter.uf.find(local.toOriginal[i]) === root) sources[out.count++] = i;
+    const parent = counter.uf.parent;
+    for (let i = 0; i < local.n; i++) if (findRoot(parent, local.toOriginal[i]) === root) sources[out.count++] = i;
     return out;
   };
 }
@@ -41548,85 +41657,83 @@ var cutNodes = cutMetric(
 );
 
 // src/metrics/kernels/dijkstra.ts
+function siftUp(heap, pos, dist, i) {
+  const v = heap[i];
+  const d = dist[v];
+  while (i > 0) {
+    const parent = i - 1 >> 1;
+    const u = heap[parent];
+    if (dist[u] <= d) break;
+    heap[i] = u;
+    pos[u] = i;
+    i = parent;
+  }
+  heap[i] = v;
+  pos[v] = i;
+}
+function siftDown(heap, pos, dist, size, i) {
+  const v = heap[i];
+  const d = dist[v];
+  for (; ; ) {
+    let child = 2 * i + 1;
+    if (child >= size) break;
+    if (child + 1 < size && dist[heap[child + 1]] < dist[heap[child]]) child++;
+    const u = heap[child];
+    if (dist[u] >= d) break;
+    heap[i] = u;
+    pos[u] = i;
+    i = child;
+  }
+  heap[i] = v;
+  pos[v] = i;
+}
+function shortestPaths(g, cost, source, dist, heap, pos, visit2) {
+  const n = g.n;
+  const { offsets, neighbors, linkOf } = g;
+  dist.fill(Infinity, 0, n);
+  pos.fill(-1, 0, n);
+  let size = 0;
+  dist[source] = 0;
+  heap[size++] = source;
+  pos[source] = 0;
+  while (size > 0) {
+    const v = heap[0];
+    const dv = dist[v];
+    pos[v] = -2;
+    const last = heap[--size];
+    if (size > 0) {
+      heap[0] = last;
+      pos[last] = 0;
+      siftDown(heap, pos, dist, size, 0);
+    }
+    if (visit2 !== void 0 && visit2(v, dv)) return;
+    for (let p = offsets[v]; p < offsets[v + 1]; p++) {
+      const w = neighbors[p];
+      const at = pos[w];
+      if (at === -2) continue;
+      const nd = dv + cost[linkOf[p]];
+      if (nd < dist[w]) {
+        dist[w] = nd;
+        if (at === -1) {
+          heap[size] = w;
+          pos[w] = size++;
+          siftUp(heap, pos, dist, size - 1);
+        } else {
+          siftUp(heap, pos, dist, at);
+        }
+      }
+    }
+  }
+}
 function createDijkstra(capacity) {
   const dist = new Float64Array(capacity);
   const heap = new Int32Array(capacity);
   const pos = new Int32Array(capacity);
-  let size = 0;
-  function up(i) {
-    const v = heap[i];
-    const d = dist[v];
-    while (i > 0) {
-      const parent = i - 1 >> 1;
-      const u = heap[parent];
-      if (dist[u] <= d) break;
-      heap[i] = u;
-      pos[u] = i;
-      i = parent;
-    }
-    heap[i] = v;
-    pos[v] = i;
-  }
-  function down(i) {
-    const v = heap[i];
-    const d = dist[v];
-    for (; ; ) {
-      let child = 2 * i + 1;
-      if (child >= size) break;
-      if (child + 1 < size && dist[heap[child + 1]] < dist[heap[child]]) child++;
-      const u = heap[child];
-      if (dist[u] >= d) break;
-      heap[i] = u;
-      pos[u] = i;
-      i = child;
-    }
-    heap[i] = v;
-    pos[v] = i;
-  }
   return {
     dist,
-    /**
-     * Distances from `source` into `dist[0..g.n)` (Infinity where unreachable). `visit(v, d)`
-     * is called as each node is settled, in order of distance; returning true stops early,
-     * leaving the unsettled distances as upper bounds.
-     */
+    /** See shortestPaths; results in `dist`. */
     run(g, cost, source, visit2) {
-      const n = g.n;
-      const { offsets, neighbors, linkOf } = g;
-      dist.fill(Infinity, 0, n);
-      pos.fill(-1, 0, n);
-      size = 0;
-      dist[source] = 0;
-      heap[size++] = source;
-      pos[source] = 0;
-      while (size > 0) {
-        const v = heap[0];
-        const dv = dist[v];
-        pos[v] = -2;
-        const last = heap[--size];
-        if (size > 0) {
-          heap[0] = last;
-          pos[last] = 0;
-          down(0);
-        }
-        if (visit2 && visit2(v, dv)) return;
-        for (let p = offsets[v]; p < offsets[v + 1]; p++) {
-          const w = neighbors[p];
-          const at = pos[w];
-          if (at === -2) continue;
-          const nd = dv + cost[linkOf[p]];
-          if (nd < dist[w]) {
-            dist[w] = nd;
-            if (at === -1) {
-              heap[size] = w;
-              pos[w] = size++;
-              up(size - 1);
-            } else {
-              up(at);
-            }
-          }
-        }
-      }
+      shortestPaths(g, cost, source, dist, heap, pos, visit2);
     }
   };
 }
@@ -41679,12 +41786,13 @@ var demandServed = {
       return (mask) => {
         if (total <= 0) return { raw: 0, normalized: 0 };
         counter.run(mask);
+        const parent = counter.uf.parent;
         let served = 0;
         for (let d = 0; d < k; d++) {
           const s = src[d];
           const t = dst[d];
           if (s < 0 || t < 0 || !(vol[d] > 0) || mask.node[s] || mask.node[t]) continue;
-          if (s === t || counter.uf.find(s) === counter.uf.find(t)) served += vol[d];
+          if (s === t || findRoot(parent, s) === findRoot(parent, t)) served += vol[d];
         }
         return { raw: served, normalized: served / total };
       };
@@ -41753,6 +41861,142 @@ var diameter = {
     };
   }
 };
+
+// src/metrics/kernels/banded-resistance.ts
+function createBandedResistance(capacity) {
+  const perm = new Int32Array(capacity);
+  const place = new Int32Array(capacity);
+  const queue2 = new Int32Array(capacity);
+  const seen = new Uint8Array(capacity);
+  const order = new Int32Array(capacity);
+  const d = new Float64Array(capacity);
+  const x = new Float64Array(capacity);
+  let band = new Float64Array(0);
+  let inverse2 = new Float64Array(0);
+  function cuthillMcKee(g, start) {
+    seen.fill(0, 0, g.n);
+    let head = 0;
+    let tail = 0;
+    queue2[tail++] = start;
+    seen[start] = 1;
+    let lastLevelStart = start;
+    let levelEnd = 1;
+    while (head < tail) {
+      if (head === levelEnd) {
+        lastLevelStart = queue2[head];
+        levelEnd = tail;
+      }
+      const v = queue2[head++];
+      const from = tail;
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+        const w = g.neighbors[p];
+        if (seen[w]) continue;
+        seen[w] = 1;
+        const dw = g.offsets[w + 1] - g.offsets[w];
+        let k = tail++;
+        while (k > from && g.offsets[queue2[k - 1] + 1] - g.offsets[queue2[k - 1]] > dw) {
+          queue2[k] = queue2[k - 1];
+          k--;
+        }
+        queue2[k] = w;
+      }
+    }
+    return lastLevelStart;
+  }
+  return {
+    /**
+     * The band width the ordering gives for `g` (connected, n ≥ 2), leaving the ordering in
+     * place for `resistance`. The ground is the last node of the ordering.
+     */
+    prepare(g) {
+      const n = g.n;
+      let start = 0;
+      for (let v = 1; v < n; v++) if (g.offsets[v + 1] - g.offsets[v] < g.offsets[start + 1] - g.offsets[start]) start = v;
+      start = cuthillMcKee(g, start);
+      cuthillMcKee(g, start);
+      for (let i = 0; i < n; i++) order[i] = queue2[n - 1 - i];
+      for (let i = 0; i < n; i++) {
+        perm[i] = order[i];
+        place[order[i]] = i;
+      }
+      let b = 0;
+      for (let v = 0; v < n; v++) {
+        for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+          const gap = Math.abs(place[v] - place[g.neighbors[p]]);
+          if (gap > b) b = gap;
+        }
+      }
+      return b;
+    },
+    /** R_G of the connected graph `g` after `prepare(g)` returned `b`. */
+    resistance(g, b) {
+      const n = g.n;
+      const m = n - 1;
+      const w = b + 1;
+      if (band.length < m * w) {
+        band = new Float64Array(m * w);
+        inverse2 = new Float64Array(m * w);
+      }
+      band.fill(0, 0, m * w);
+      for (let i = 0; i < m; i++) {
+        const v = perm[i];
+        band[i * w] = g.offsets[v + 1] - g.offsets[v];
+        for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+          const j = place[g.neighbors[p]];
+          if (j < i) band[i * w + (i - j)] -= 1;
+        }
+      }
+      for (let i = 0; i < m; i++) {
+        const lo = Math.max(0, i - b);
+        const ri = i * w;
+        for (let j = lo; j < i; j++) {
+          const rj = j * w;
+          let s2 = band[ri + (i - j)];
+          const k0 = Math.max(lo, j - b);
+          for (let k = k0; k < j; k++) s2 -= band[ri + (i - k)] * d[k] * band[rj + (j - k)];
+          band[ri + (i - j)] = s2 / d[j];
+        }
+        let s = band[ri];
+        for (let k = lo; k < i; k++) {
+          const l = band[ri + (i - k)];
+          s -= l * l * d[k];
+        }
+        d[i] = s;
+      }
+      let trace = 0;
+      for (let i = m - 1; i >= 0; i--) {
+        const hi = Math.min(m - 1, i + b);
+        for (let j = hi; j > i; j--) {
+          let s2 = 0;
+          for (let k = i + 1; k <= hi; k++) {
+            const lki = band[k * w + (k - i)];
+            if (lki === 0) continue;
+            s2 -= lki * (k <= j ? inverse2[j * w + (j - k)] : inverse2[k * w + (k - j)]);
+          }
+          inverse2[j * w + (j - i)] = s2;
+        }
+        let s = 1 / d[i];
+        for (let k = i + 1; k <= hi; k++) s -= band[k * w + (k - i)] * inverse2[k * w + (k - i)];
+        inverse2[i * w] = s;
+        trace += s;
+      }
+      for (let i = 0; i < m; i++) {
+        let s = 1;
+        for (let k = Math.max(0, i - b); k < i; k++) s -= band[i * w + (i - k)] * x[k];
+        x[i] = s;
+      }
+      for (let i = 0; i < m; i++) x[i] /= d[i];
+      for (let i = m - 1; i >= 0; i--) {
+        let s = x[i];
+        for (let k = i + 1; k <= Math.min(m - 1, i + b); k++) s -= band[k * w + (k - i)] * x[k];
+        x[i] = s;
+      }
+      let total = 0;
+      for (let i = 0; i < m; i++) total += x[i];
+      return n * trace - total;
+    }
+  };
+}
 
 // src/metrics/kernels/slq.ts
 function createTraceEstimator(capacity, maxSteps) {
@@ -41839,6 +42083,7 @@ function createTraceEstimator(capacity, maxSteps) {
 }
 
 // src/metrics/effective-resistance.ts
+var DEFAULT_EXACT_WORK = 5e7;
 var PROBES = 32;
 var STEPS = 120;
 var inverse = (x) => 1 / x;
@@ -41849,32 +42094,33 @@ var effectiveResistance = {
   cost: "spectral",
   appliesTo: () => true,
   create(g, options = {}) {
-    const limit = Math.min(g.n, options.denseLimit ?? TRACE_DENSE_LIMIT);
+    const limit = options.denseLimit ?? TRACE_DENSE_LIMIT;
+    const maxWork = options.exactWork ?? DEFAULT_EXACT_WORK;
     const spectral = createSpectralSurvivors(g);
-    const dense = createDenseSpectrum(limit);
-    const big = g.n > limit;
-    const slq = big ? createTraceEstimator(g.n, STEPS) : null;
+    const banded = createBandedResistance(g.n);
+    let slq = null;
     const op = createLaplacianOperator();
-    const deflation = new Float64Array(big ? g.n : 0);
+    const deflation = new Float64Array(g.n);
     return (mask) => {
       const local = spectral.survivors(mask);
       const n = local.n;
       if (n < 2) return { raw: 0, normalized: 0 };
       if (spectral.components(local).count > 1) return { raw: Infinity, normalized: 0 };
-      let trace = 0;
-      if (n <= limit) {
-        const d = dense.laplacian(local);
-        for (let i = 1; i < n; i++) trace += 1 / d[i];
+      const b = banded.prepare(local);
+      let resistance;
+      if (n <= limit || n * b * b <= maxWork) {
+        resistance = banded.resistance(local, b);
       } else {
         op.bind(local);
         deflation.fill(1 / Math.sqrt(n), 0, n);
-        trace = slq.estimate(op, inverse, spectral.keysOf(local), deflation, 1, {
+        slq ??= createTraceEstimator(g.n, STEPS);
+        const trace = slq.estimate(op, inverse, spectral.keysOf(local), deflation, 1, {
           probes: PROBES,
           steps: STEPS,
           tol: 1e-9
         });
+        resistance = n * trace;
       }
-      const resistance = n * trace;
       return { raw: resistance, normalized: Math.min(1, (n - 1) / resistance) };
     };
   }
@@ -42019,6 +42265,38 @@ function createConnectivityCounter(nodeCapacity, entryCapacity) {
   const network = createFlowNetwork(nodeCapacity, entryCapacity);
   const mark = new Int32Array(nodeCapacity).fill(-1);
   let stampCounter = 0;
+  const domNodes = new Int32Array(nodeCapacity);
+  const dominated = new Uint8Array(nodeCapacity);
+  const dominating = { nodes: domNodes, count: 0 };
+  function dominatingSet(g) {
+    dominated.fill(0, 0, g.n);
+    dominating.count = 0;
+    for (let v = 0; v < g.n; v++) {
+      if (dominated[v]) continue;
+      domNodes[dominating.count++] = v;
+      dominated[v] = 1;
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) dominated[g.neighbors[p]] = 1;
+    }
+    return dominating;
+  }
+  function nextStamp() {
+    if (stampCounter >= 1073741823) {
+      mark.fill(-1);
+      stampCounter = 0;
+    }
+    return ++stampCounter;
+  }
+  function hasParallel(g) {
+    for (let v = 0; v < g.n; v++) {
+      const stamp = nextStamp();
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+        const w = g.neighbors[p];
+        if (mark[w] === stamp) return true;
+        mark[w] = stamp;
+      }
+    }
+    return false;
+  }
   function minDegree(g) {
     let node = 0;
     let degree2 = Infinity;
@@ -42034,10 +42312,14 @@ function createConnectivityCounter(nodeCapacity, entryCapacity) {
   return {
     /** λ of a connected multigraph (parallel links count) with at least two nodes. */
     linkConnectivity(g) {
-      const { node: s, degree: degree2 } = minDegree(g);
+      const { degree: degree2 } = minDegree(g);
       let best = degree2;
       network.build(g, false);
-      for (let t = 0; t < g.n && best > 0; t++) {
+      const dominating2 = hasParallel(g) ? null : dominatingSet(g);
+      const targets = dominating2 ? dominating2.count : g.n;
+      const s = dominating2 ? dominating2.nodes[0] : 0;
+      for (let k = 0; k < targets && best > 0; k++) {
+        const t = dominating2 ? dominating2.nodes[k] : k;
         if (t === s) continue;
         const f = network.flow(s, t, best);
         if (f < best) best = f;
@@ -42051,7 +42333,7 @@ function createConnectivityCounter(nodeCapacity, entryCapacity) {
       const { node: v, degree: degree2 } = minDegree(g);
       let best = degree2;
       network.build(g, true);
-      const stamp = ++stampCounter;
+      const stamp = nextStamp();
       mark[v] = stamp;
       for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) mark[g.neighbors[p]] = stamp;
       for (let w = 0; w < n && best > 0; w++) {
@@ -42061,7 +42343,7 @@ function createConnectivityCounter(nodeCapacity, entryCapacity) {
       }
       for (let p = g.offsets[v]; p < g.offsets[v + 1] && best > 0; p++) {
         const x = g.neighbors[p];
-        const sx = ++stampCounter;
+        const sx = nextStamp();
         for (let r = g.offsets[x]; r < g.offsets[x + 1]; r++) mark[g.neighbors[r]] = sx;
         for (let q = p + 1; q < g.offsets[v + 1] && best > 0; q++) {
           const y = g.neighbors[q];
@@ -42368,7 +42650,8 @@ function rPasses(g, spec) {
 // src/envelope/union-find.ts
 function createUnionFindWorkspace(g) {
   return {
-    uf: createUnionFind(g.n),
+    parent: new Int32Array(g.n),
+    size: new Int32Array(g.n),
     nodeOn: new Uint8Array(g.n),
     linkOn: new Uint8Array(g.m),
     firstGroup: new Int32Array(g.m)
@@ -42393,7 +42676,7 @@ function connectivityCurve(g, kind, order, count, ws = createUnionFindWorkspace(
       }
     }
   }
-  const { parent, size } = ws.uf;
+  const { parent, size } = ws;
   const st = { lcc: 0, pairs: 0 };
   const { offsets, neighbors, linkOf, linkSource, linkTarget } = g;
   const addNode = (v) => {
@@ -42410,7 +42693,10 @@ function connectivityCurve(g, kind, order, count, ws = createUnionFindWorkspace(
     const b = linkTarget[e];
     if (nodeOn[a] === 1 && nodeOn[b] === 1) join(st, parent, size, a, b);
   };
-  ws.uf.reset(g.n);
+  for (let v = 0; v < g.n; v++) {
+    parent[v] = v;
+    size[v] = 1;
+  }
   for (let v = 0; v < g.n; v++) if (nodeOn[v] === 1) st.lcc = 1;
   for (let e = 0; e < g.m; e++) {
     const a = linkSource[e];
@@ -42435,16 +42721,8 @@ function connectivityCurve(g, kind, order, count, ws = createUnionFindWorkspace(
   return out;
 }
 function join(st, parent, size, a, b) {
-  while (parent[a] !== a) {
-    const up = parent[parent[a]];
-    parent[a] = up;
-    a = up;
-  }
-  while (parent[b] !== b) {
-    const up = parent[parent[b]];
-    parent[b] = up;
-    b = up;
-  }
+  a = findRoot(parent, a);
+  b = findRoot(parent, b);
   if (a === b) return;
   const sa = size[a];
   const sb = size[b];
@@ -43123,14 +43401,14 @@ function planEvaluation(g, spec) {
   }
   const maxWork = spec.budget?.maxWork ?? DEFAULT_MAX_WORK;
   if (!(maxWork > 0)) throw new RangeError(`budget.maxWork must be > 0, got ${maxWork}`);
-  const visits = g.n + g.m;
+  const visits2 = g.n + g.m;
   const rp = rPasses(g, spec.r);
   const free = unionFindR(g, spec.r) !== null;
   const est = items.map((it) => estimate(g, it, rp, free));
-  const total = () => est.reduce((s, e) => s + e.band + e.cases + e.fixed + e.worst, 0) * visits;
+  const total = () => est.reduce((s, e) => s + e.band + e.cases + e.fixed + e.worst, 0) * visits2;
   if (total() > maxWork) {
     items.forEach((it, i) => {
-      if (est[i].worstExact && est[i].worst * visits > maxWork / 4) {
+      if (est[i].worstExact && est[i].worst * visits2 > maxWork / 4) {
         it.exactLimit = 0;
         est[i] = estimate(g, it, rp, free);
         note(it, `worst-case search greedy instead of exact (work budget ${maxWork})`);
@@ -43138,8 +43416,8 @@ function planEvaluation(g, spec) {
     });
   }
   if (total() > maxWork) {
-    const fixed = est.reduce((s, e) => s + e.fixed + e.worst, 0) * visits;
-    const reducible = est.reduce((s, e) => s + e.band + e.cases, 0) * visits;
+    const fixed = est.reduce((s, e) => s + e.fixed + e.worst, 0) * visits2;
+    const reducible = est.reduce((s, e) => s + e.band + e.cases, 0) * visits2;
     const scale = Math.max(0, maxWork - fixed) / reducible;
     items.forEach((it, i) => {
       if (it.type === "band" && est[i].band > 0) {
@@ -43165,7 +43443,7 @@ function planEvaluation(g, spec) {
     const e = estimate(g, it, rp, free);
     return s + e.band + e.cases + e.fixed + e.worst;
   }, 0);
-  return { r: spec.r, items, degraded, work: work * visits };
+  return { r: spec.r, items, degraded, work: work * visits2 };
 }
 function note(it, reason) {
   it.degraded = it.degraded ? `${it.degraded}; ${reason}` : reason;
@@ -44249,6 +44527,76 @@ function compileTopology(t) {
   };
 }
 
+// src/gate/budget.ts
+var PAIRING_ROUNDS = 8;
+function withBudget(spec, maxWork) {
+  return { ...spec, challenges: spec.challenges.map((c) => ({ ...c })), budget: { maxWork } };
+}
+function shareBudget(specs, maxWork, graphs) {
+  const need = specs.map((spec) => Math.max(...graphs.map((g) => planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work)));
+  const total = need.reduce((a, b) => a + b, 0);
+  if (total <= maxWork) return specs.map(() => maxWork);
+  return need.map((w) => Math.max(1, Math.floor(maxWork * w / total)));
+}
+function bandCounts(g, spec) {
+  const out = /* @__PURE__ */ new Map();
+  for (const it of planEvaluation(g, spec).items) {
+    if (it.type === "band" && it.params.challenge !== "regional") out.set(it.params.challenge, it.params.realizations);
+  }
+  return out;
+}
+function budgetSpecs(specs, maxWork, head, base) {
+  const shares = shareBudget(specs, maxWork, base ? [head, base] : [head]);
+  const headSpecs = specs.map((s, i) => withBudget(s, shares[i]));
+  if (!base) return { head: headSpecs, cuts: [] };
+  const baseSpecs = specs.map((s, i) => withBudget(s, shares[i]));
+  const cuts = [];
+  specs.forEach((spec, i) => {
+    const asked = bandCounts(head, { ...spec, budget: { maxWork: Infinity } });
+    const lowered = /* @__PURE__ */ new Set();
+    for (let round = 0; round < PAIRING_ROUNDS; round++) {
+      const h = bandCounts(head, headSpecs[i]);
+      const b = bandCounts(base, baseSpecs[i]);
+      let changed = false;
+      for (const [challenge, count] of h) {
+        const other = b.get(challenge);
+        if (other === void 0 || other === count) continue;
+        const common = Math.min(count, other);
+        for (const s of [headSpecs[i], baseSpecs[i]]) {
+          const c = s.challenges.find((x) => x.challenge === challenge);
+          c.realizations = common;
+        }
+        lowered.add(challenge);
+        changed = true;
+      }
+      if (!changed) break;
+    }
+    const final = bandCounts(head, headSpecs[i]);
+    for (const challenge of lowered) {
+      const from = asked.get(challenge);
+      const to = final.get(challenge);
+      if (to < from) cuts.push({ spec: i, challenge, from, to, maxWork: shares[i] });
+    }
+  });
+  return { head: headSpecs, base: baseSpecs, cuts };
+}
+function notePairedCuts(result, cuts, spec) {
+  for (const cut of cuts) {
+    if (cut.spec !== spec) continue;
+    const env = result.evaluation.envelopes.find((e) => e.challenge === cut.challenge);
+    if (!env || env.realizations >= cut.from) continue;
+    const reason = `realizations reduced from ${cut.from} to ${env.realizations} by the work budget (${cut.maxWork} element visits), on base and head alike so that they stay paired`;
+    const others = (env.degraded ?? "").split("; ").filter((part) => part !== "" && !part.startsWith("realizations reduced from"));
+    env.degraded = [reason, ...others].join("; ");
+    const prefix = `${cut.challenge}: `;
+    const line = `${prefix}${env.degraded}`;
+    const list = result.evaluation.degraded;
+    const at = list.findIndex((d) => d.startsWith(prefix));
+    if (at >= 0) list[at] = line;
+    else list.push(line);
+  }
+}
+
 // src/gate/describe.ts
 var WHAT = { nodes: "nodes", links: "links", "risk-groups": "risk groups", region: "region" };
 function formatR(x) {
@@ -44350,6 +44698,38 @@ function statisticOf(req) {
       return void 0;
   }
 }
+function realizationsOf(env, c, g) {
+  const asked = c.engine === "regional" ? sitesWithCoordinates(g).length : c.params.realizations ?? DEFAULTS.realizations;
+  return { ran: env.realizations, asked };
+}
+function reductionOf(c, head, env, base, baseEnv) {
+  const h = realizationsOf(env, c, head.graph);
+  const b = base && baseEnv ? realizationsOf(baseEnv, c, base.graph) : void 0;
+  const headCut = h.ran < h.asked;
+  const baseCut = b !== void 0 && b.ran < b.asked;
+  if (!headCut && !baseCut) return {};
+  const out = {};
+  if (b === void 0) out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations`;
+  else if (h.ran === b.ran && h.asked === b.asked) out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on head and base`;
+  else out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on the head and ${b.ran} of ${b.asked} on the base`;
+  if (b !== void 0 && base.result !== head.result) {
+    const lh = head.result.labels.get(c.engine);
+    const lb = base.result.labels.get(c.engine);
+    const sameLabels = lh === void 0 || lb === void 0 || lh.length === lb.length && lh.every((l, i) => l === lb[i]);
+    if (h.ran !== b.ran) out.unpaired = `the budget cut base and head to different numbers of realizations (${b.ran} and ${h.ran}), so they do not pair`;
+    else if (!sameLabels) out.unpaired = "the budget cut base and head to different epicentres, so they do not pair";
+  }
+  return out;
+}
+function ownSe(head, env, stat2, x) {
+  const samples = head.samples.get(env.challenge) ?? [];
+  const zero = {
+    evaluation: { ...head.evaluation, envelopes: [env], attacks: [], contingencies: [] },
+    samples: /* @__PURE__ */ new Map([[env.challenge, samples.map((s) => new Float64Array(s.length))]]),
+    labels: head.labels
+  };
+  return pairedStatistic(zero, head, env.challenge, stat2, x).se;
+}
 function missing(reason, higherIsBetter = true) {
   return { base: null, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason };
 }
@@ -44406,11 +44786,17 @@ function measure(req, challenges2, head, base) {
     };
     if (stat2.kind === "quantile" && j >= 0) {
       const band = env.quantiles[quantileKey(stat2.q)];
-      if (band) {
-        out.lo = band.lo[j];
-        out.hi = band.hi[j];
-      }
+      const ci = band ? { lo: band.lo[j], hi: band.hi[j] } : quantileEstimate(sortedColumn(head.result.samples.get(c.engine) ?? [], j), stat2.q);
+      out.lo = ci.lo;
+      out.hi = ci.hi;
     }
+    const reduction = reductionOf(c, head, env, baseEnv ? base : void 0, baseEnv);
+    if (reduction.reduced !== void 0) {
+      out.reduced = reduction.reduced;
+      const h2 = realizationsOf(env, c, head.graph);
+      if (h2.ran < h2.asked) out.headSe = ownSe(head.result, env, stat2, x);
+    }
+    if (reduction.unpaired !== void 0) out.unpaired = reduction.unpaired;
     return out;
   }
   const h = deterministic2(req, c, head);
@@ -44430,7 +44816,14 @@ function measure(req, challenges2, head, base) {
 }
 
 // src/gate/compare.ts
+function formatSe(se) {
+  return Number.isFinite(se) ? se.toFixed(3) : "unknown";
+}
 var SAME = 1e-12;
+var REDUCED_MARGIN_SE = 2;
+function uncertainSeverity(severity) {
+  return severity === "notice" ? "notice" : "warn";
+}
 var THRESHOLD_RULE = {
   "r-threshold": "r-threshold",
   "area-floor": "area-floor",
@@ -44477,6 +44870,8 @@ function judge(r, input, description) {
     return { row, findings };
   }
   const better = (a, b) => m.higherIsBetter ? a >= b : a <= b;
+  const thresholdRule = THRESHOLD_RULE[r.kind];
+  const margin = threshold === null ? 0 : m.higherIsBetter ? m.head - threshold : threshold - m.head;
   if (threshold !== null && !better(m.head, threshold)) {
     row.status = "missed";
     const relation = m.higherIsBetter ? "is below" : "is above";
@@ -44491,24 +44886,86 @@ function judge(r, input, description) {
   } else if (threshold !== null && m.lo !== void 0 && m.hi !== void 0 && !better(m.higherIsBetter ? m.lo : m.hi, threshold)) {
     row.status = "uncertain";
     const edge = m.higherIsBetter ? m.lo : m.hi;
+    const cut = m.reduced !== void 0 ? `; ${m.reduced}` : "";
     findings.push(
       finding(
-        THRESHOLD_RULE[r.kind],
-        "notice",
-        `${description}: ${formatR(m.head)} meets it, but its confidence interval reaches ${formatR(edge)}; more realizations would settle it`,
+        thresholdRule,
+        m.reduced !== void 0 ? uncertainSeverity(r.severity) : "notice",
+        `${description}: ${formatR(m.head)} meets it, but its confidence interval reaches ${formatR(edge)}; more realizations would settle it${cut}`,
+        elements,
+        extra
+      )
+    );
+  } else if (threshold !== null && m.headSe !== void 0 && r.kind === "r-threshold" && r.statistic.kind === "min") {
+    row.status = "uncertain";
+    findings.push(
+      finding(
+        thresholdRule,
+        uncertainSeverity(r.severity),
+        `${description}: ${formatR(m.head)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
+        elements,
+        extra
+      )
+    );
+  } else if (threshold !== null && m.headSe !== void 0 && !(margin > REDUCED_MARGIN_SE * m.headSe)) {
+    row.status = "uncertain";
+    findings.push(
+      finding(
+        thresholdRule,
+        uncertainSeverity(r.severity),
+        `${description}: ${formatR(m.head)} meets it, but ${m.reduced}, and it clears the ${m.higherIsBetter ? "floor" : "ceiling"} by ${formatR(margin)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} × ${formatSe(m.headSe)})`,
         elements,
         extra
       )
     );
   }
-  if (m.base !== null && m.delta !== null && m.se !== null) {
+  if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== void 0) {
+    if (row.status === "met") row.status = "uncertain";
+    const regression = input.policy.regression;
+    findings.push(
+      finding(
+        "regression",
+        uncertainSeverity(regression.severity),
+        `${description}: from ${formatR(m.base)} to ${formatR(m.head)}, but ${m.unpaired}; the change cannot be judged`,
+        elements,
+        extra
+      )
+    );
+  } else if (m.base !== null && m.delta !== null && m.se !== null) {
     const drop = m.higherIsBetter ? -m.delta : m.delta;
     if (drop > SAME * Math.max(1, Math.abs(m.base))) {
       const rule = input.policy.regression;
       const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(m.base));
       const change = `from ${formatR(m.base)} to ${formatR(m.head)} (Δ ${formatDelta2(m.delta, m.se)})`;
       const noise2 = rule.noiseFactor * m.se;
-      if (drop < noise2) {
+      const verb = m.higherIsBetter ? "dropped" : "rose";
+      if (m.reduced !== void 0 && !(drop > allowance + noise2) && !(drop <= allowance - noise2)) {
+        if (row.status === "met") row.status = "uncertain";
+        findings.push(
+          finding(
+            "regression",
+            uncertainSeverity(rule.severity),
+            `${description}: ${verb} ${change}, within ${rule.noiseFactor} × its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            elements,
+            extra
+          )
+        );
+      } else if (m.reduced !== void 0 && drop <= allowance - noise2) {
+        findings.push(
+          finding("regression", "notice", `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} × its error; ${m.reduced}`, elements, extra)
+        );
+      } else if (m.reduced !== void 0) {
+        if (row.status !== "missed") row.status = "regressed";
+        findings.push(
+          finding(
+            "regression",
+            rule.severity,
+            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} × its error; ${m.reduced}`,
+            elements,
+            extra
+          )
+        );
+      } else if (drop < noise2) {
         if (row.status === "met") row.status = "within-noise";
         findings.push(
           finding(
@@ -44536,6 +44993,10 @@ function judge(r, input, description) {
         );
       }
     }
+  }
+  const reducedWork = m.reduced ?? m.incomplete;
+  if (reducedWork !== void 0 && !findings.some((f) => f.message.includes(reducedWork))) {
+    findings.push(finding(thresholdRule, "notice", `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, line: 0 }));
   }
   return { row, findings };
 }
@@ -44655,6 +45116,11 @@ function compareDesign(input) {
   for (const reason of input.head.result.evaluation.degraded) {
     report.findings.push(finding("degraded", "notice", `head evaluation reduced: ${reason}`, [], { line: 0 }));
   }
+  if (effective.base && !effective.thresholdsOnly && effective.base.result !== input.head.result) {
+    for (const reason of effective.base.result.evaluation.degraded) {
+      report.findings.push(finding("degraded", "notice", `base evaluation reduced: ${reason}`, [], { line: 0 }));
+    }
+  }
   report.head = input.head.result.evaluation;
   if (effective.base && !effective.thresholdsOnly) {
     report.base = effective.base.result.evaluation;
@@ -44683,6 +45149,7 @@ function exitCodeOf(report) {
 // src/policy/defaults.ts
 var DEFAULT_POLICY_PATH = ".netbrace.yaml";
 var BUILTIN_POLICY_NAME = "<built-in policy>";
+var REGIONAL_UNTIL_KM = 50;
 var DEFAULT_NOISE_FACTOR = 2;
 var STARTER_POLICY = `# netbrace policy: what a network design must satisfy before a change to it merges.
 # Every key is optional; a key left out takes the value of the built-in policy, which is
@@ -44765,7 +45232,16 @@ regression:
 # A deleted design file: fail | warn | notice | ignore.
 removed-designs: notice
 
-# Rules for some files only; they may add or tighten requirements, never loosen them.
+# Work each evaluation of a design may take (head and base each). Beyond it the engine runs
+# fewer realizations or N-1 cases and the report marks the result as reduced; what the reduced
+# work cannot settle is "uncertain", never a pass. Seconds are converted to work at a fixed
+# rate (5e7 element visits per second), so a report never depends on the machine's speed.
+budget:
+  seconds: 60              # about a minute for a 1,000-node design under this policy
+  # work: 3e9              # the same in element visits; with both, the smaller applies
+
+# Rules for some files only; they may add or tighten requirements, never loosen them
+# (and raise the budget, never lower it).
 # overrides:
 #   - files: "core/**"
 #     requirements:
@@ -44819,6 +45295,16 @@ function closest(word, candidates2) {
 function didYouMean(word, candidates2, fallback = "") {
   const c = closest(word, candidates2);
   return c === void 0 ? fallback : `did you mean "${c}"?`;
+}
+
+// src/policy/budget.ts
+var ENGINE_VISITS_PER_SECOND = 5e7;
+var DEFAULT_BUDGET_SECONDS = 60;
+function budgetWork(b) {
+  const fromSeconds = b.seconds === void 0 ? Infinity : Math.floor(b.seconds * ENGINE_VISITS_PER_SECOND);
+  const work = Math.min(b.work ?? Infinity, fromSeconds);
+  if (work === Infinity) return budgetWork({ seconds: DEFAULT_BUDGET_SECONDS });
+  return Math.max(1, Math.floor(work));
 }
 
 // src/policy/load.ts
@@ -44929,6 +45415,7 @@ var policy_schema_default = {
     },
     regression: { $ref: "#/definitions/regression" },
     "removed-designs": { $ref: "#/definitions/removedDesigns" },
+    budget: { $ref: "#/definitions/budget" },
     overrides: {
       description: "Rules for some files only: they add requirements or tighten existing ones, never loosen them.",
       type: "array",
@@ -44940,7 +45427,8 @@ var policy_schema_default = {
           files: { description: "Globs of the design files this override applies to.", $ref: "#/definitions/globs" },
           requirements: { $ref: "#/definitions/requirements" },
           regression: { $ref: "#/definitions/regression" },
-          "removed-designs": { $ref: "#/definitions/removedDesigns" }
+          "removed-designs": { $ref: "#/definitions/removedDesigns" },
+          budget: { $ref: "#/definitions/budget" }
         }
       }
     }
@@ -44993,7 +45481,7 @@ var policy_schema_default = {
           default: false
         },
         until: {
-          description: "End of the x axis: the fraction removed (0 < until ≤ 1), or the radius in km for region.",
+          description: "End of the x axis: the fraction removed (0 < until ≤ 1), or the radius in km for region (default 50 km, the same for every design so that base and head share one grid).",
           type: "number",
           exclusiveMinimum: 0
         },
@@ -45107,6 +45595,16 @@ var policy_schema_default = {
         "allowed-relative-drop": { description: "Largest tolerated drop as a fraction of the base value (0.05 = 5 %). With allowed-drop too, the larger allowance applies.", type: "number", minimum: 0, maximum: 1 },
         "noise-factor": { description: "A drop below noise-factor × se is Monte Carlo noise (default 2).", type: "number", minimum: 0 },
         severity: { $ref: "#/definitions/severity" }
+      }
+    },
+    budget: {
+      description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is uncertain, never met. Default: seconds 60. An extending policy or an override may raise it, never lower it.",
+      type: "object",
+      additionalProperties: false,
+      minProperties: 1,
+      properties: {
+        work: { description: "Element visits (one graph pass visits every node and link once). With seconds too, the smaller applies.", type: "number", exclusiveMinimum: 0 },
+        seconds: { description: "Seconds of engine time, converted to work at a fixed rate of 5e7 element visits per second, so results never depend on the machine's speed.", type: "number", exclusiveMinimum: 0 }
       }
     },
     removedDesigns: {
@@ -45511,8 +46009,7 @@ var FileBuilder = class {
     if (band && !(band[0] < band[1])) {
       this.fail(`challenge "${name}": the band's lower quantile must be below its upper one`, [...path3, "band"], `e.g. [0.1, 0.9]`);
     }
-    const params = { challenge: engine };
-    if (remove !== "region" || until !== void 0) params.until = until ?? DEFAULTS.until;
+    const params = { challenge: engine, until: until ?? (remove === "region" ? REGIONAL_UNTIL_KM : DEFAULTS.until) };
     if (random) {
       params.points = raw.points ?? DEFAULTS.points;
       params.realizations = raw.realizations ?? DEFAULTS.realizations;
@@ -45635,6 +46132,16 @@ var FileBuilder = class {
     if (rel !== void 0) rule.allowedRelativeDrop = rel;
     return rule;
   }
+  budget(raw, path3) {
+    if (raw === void 0) return void 0;
+    const budget = { where: this.at(path3, true), fieldWhere: {} };
+    for (const key of ["work", "seconds"]) {
+      if (raw[key] === void 0) continue;
+      budget[key] = raw[key];
+      budget.fieldWhere[key] = this.at([...path3, key]);
+    }
+    return budget;
+  }
   removed(raw, path3) {
     return raw === void 0 ? void 0 : { severity: raw, where: this.at(path3) };
   }
@@ -45713,6 +46220,8 @@ function parsePolicyFile(text2, file) {
   if (regression) policy.regression = regression;
   const removed = b.removed(raw["removed-designs"], ["removed-designs"]);
   if (removed) policy.removedDesigns = removed;
+  const budget = b.budget(raw.budget, ["budget"]);
+  if (budget) policy.budget = budget;
   policy.overrides = (raw.overrides ?? []).map((o, i) => {
     const path3 = ["overrides", i];
     const override = {
@@ -45724,6 +46233,8 @@ function parsePolicyFile(text2, file) {
     if (rule) override.regression = rule;
     const rem = b.removed(o["removed-designs"], [...path3, "removed-designs"]);
     if (rem) override.removedDesigns = rem;
+    const ob = b.budget(o.budget, [...path3, "budget"]);
+    if (ob) override.budget = ob;
     return override;
   });
   return policy;
@@ -45839,6 +46350,37 @@ function mergeRemoved(prev, next, what) {
     `lowers removed-designs from ${prev.value.severity} to ${next.value.severity}`,
     next.value.where,
     prev.value.where ?? next.value.where
+  );
+}
+function visits(n) {
+  return n >= 1e6 ? n.toExponential().replace("e+", "e") : String(n);
+}
+function bindingKey(b) {
+  if (b.seconds !== void 0 && (b.work === void 0 || b.seconds * ENGINE_VISITS_PER_SECOND <= b.work)) return "seconds";
+  return b.work !== void 0 ? "work" : void 0;
+}
+function describeBudget(b) {
+  return [b.work !== void 0 ? `work ${visits(b.work)}` : "", b.seconds !== void 0 ? `seconds ${b.seconds}` : ""].filter(Boolean).join(", ");
+}
+function mergeBudget(prev, next, what) {
+  const merged = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
+  for (const key of ["work", "seconds"]) {
+    const value = next.value[key];
+    if (value === void 0) continue;
+    merged[key] = value;
+    merged.fieldWhere[key] = next.value.fieldWhere[key];
+  }
+  const before = budgetWork(prev.value);
+  const after = budgetWork(merged);
+  if (after >= before) return { value: merged, layer: Math.max(prev.layer, next.layer) };
+  if (next.layer < prev.layer) return prev;
+  const at = bindingKey(merged);
+  const prevAt = bindingKey(prev.value);
+  throw new PolicyError(
+    `${what} lowers the budget to ${visits(after)} element visits (${describeBudget(merged)}) where ${visits(before)} (${describeBudget(prev.value)}) is in force`,
+    at && merged.fieldWhere[at] || next.value.where,
+    "an extending policy or an override may raise the budget, never lower it: a smaller budget leaves requirements uncertain",
+    [related(prevAt && prev.value.fieldWhere[prevAt] || prev.value.where, "the budget in force")]
   );
 }
 function sameRValue(a, b) {
@@ -45972,6 +46514,7 @@ function mergeChain(chain) {
     value: root.removedDesigns ?? base.removedDesigns ?? { severity: "notice" },
     layer: 0
   };
+  let budget = { value: root.budget ?? base.budget, layer: 0 };
   const requirements = [];
   const rootReqs = root.requirements ?? (root.challenges === void 0 ? base.requirements ?? [] : (base.requirements ?? []).filter((r) => !("challenge" in r) || challenges2.has(r.challenge)));
   for (const r of rootReqs) requirements.push({ value: r, layer: 0 });
@@ -46013,6 +46556,7 @@ function mergeChain(chain) {
     }
     if (file.regression) regression = mergeRegression(regression, { value: file.regression, layer }, "regression");
     if (file.removedDesigns) removed = mergeRemoved(removed, { value: file.removedDesigns, layer }, "the policy");
+    if (file.budget) budget = mergeBudget(budget, { value: file.budget, layer }, "the policy");
   });
   const challengeList = [...challenges2.values()];
   const checked = requirements.map((r) => ({
@@ -46028,6 +46572,7 @@ function mergeChain(chain) {
       for (const r of requirementsChecked) mergeRequirement(scratch, { value: r, layer }, what(r));
       if (o.regression) mergeRegression(regression, { value: o.regression, layer }, `override ${i + 1}, regression`);
       if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `override ${i + 1}`);
+      if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `override ${i + 1}`);
       overrides.push({ ...o, requirements: requirementsChecked, layer });
     })
   );
@@ -46042,12 +46587,14 @@ function mergeChain(chain) {
     requirements: checked.map((r) => r.value),
     regression: regression.value,
     removedDesigns: removed.value,
+    budget: budget.value,
     overrides,
-    layers: { requirements: checked.map((r) => r.layer), regression: regression.layer, removed: removed.layer }
+    layers: { requirements: checked.map((r) => r.layer), regression: regression.layer, removed: removed.layer, budget: budget.layer }
   };
 }
 var matchers = /* @__PURE__ */ new Map();
-function matches(globs2, path3) {
+function matches(globs2, given) {
+  const path3 = given.replace(/[\r\n\u2028\u2029]/g, "");
   return globs2.some((g) => {
     let m = matchers.get(g);
     if (!m) {
@@ -46065,6 +46612,7 @@ function policyForFile(policy, path3) {
   const requirements = policy.requirements.map((value, i) => ({ value, layer: layers.requirements[i] }));
   let regression = { value: policy.regression, layer: layers.regression };
   let removed = { value: policy.removedDesigns, layer: layers.removed };
+  let budget = { value: policy.budget, layer: layers.budget };
   for (const o of policy.overrides) {
     if (!matches(o.files, path3)) continue;
     const { layer } = o;
@@ -46072,7 +46620,9 @@ function policyForFile(policy, path3) {
     for (const r of o.requirements) mergeRequirement(requirements, { value: r, layer }, what);
     if (o.regression) regression = mergeRegression(regression, { value: o.regression, layer }, `${what}:`);
     if (o.removedDesigns) removed = mergeRemoved(removed, { value: o.removedDesigns, layer }, what);
+    if (o.budget) budget = mergeBudget(budget, { value: o.budget, layer }, what);
   }
+  const b = budget.value;
   const format = policy.designs.find((d) => d.format !== void 0 && matches(d.files, path3))?.format;
   return {
     rValue: policy.rValue,
@@ -46081,6 +46631,7 @@ function policyForFile(policy, path3) {
     requirements: requirements.map((r) => r.value),
     regression: regression.value,
     removedDesigns: removed.value.severity,
+    budget: { ...b.work !== void 0 ? { work: b.work } : {}, ...b.seconds !== void 0 ? { seconds: b.seconds } : {}, maxWork: budgetWork(b) },
     ...format ? { format } : {}
   };
 }
@@ -47203,8 +47754,7 @@ function localName(qname) {
 }
 
 // src/topology/edgelist.ts
-function readCsv(text2, b) {
-  const rows = [];
+function* csvRows(text2, b) {
   let i = 0;
   let line = 1;
   let lineStart = 0;
@@ -47258,33 +47808,35 @@ function readCsv(text2, b) {
     line++;
     lineStart = i;
     if (cells.length === 1 && cells[0].text.trim() === "") continue;
-    rows.push({ cells, end });
+    yield { cells, end };
   }
-  return rows;
 }
 function parseEdgeList(text2, file, options = {}, format = "csv") {
   const b = new TopologyBuilder(file, format, options);
-  const rows = readCsv(text2, b);
-  if (rows.length === 0) throw b.error("the CSV file is empty", { line: 1, column: 1 }, "the first line must be a header with source,target");
-  const header2 = rows[0].cells.map((c) => c.text.trim());
+  const rows = csvRows(text2, b);
+  const first = rows.next();
+  if (first.done) throw b.error("the CSV file is empty", { line: 1, column: 1 }, "the first line must be a header with source,target");
+  const headerCells = first.value.cells;
+  const header2 = headerCells.map((c) => c.text.trim());
   const lower = header2.map((h) => h.toLowerCase());
   for (const need of ["source", "target"]) {
     if (!lower.includes(need)) {
-      throw b.error(`the CSV header has no "${need}" column`, rows[0].cells[0].pos, "the first line must name the columns, e.g. source,target,length");
+      throw b.error(`the CSV header has no "${need}" column`, headerCells[0].pos, "the first line must name the columns, e.g. source,target,length");
     }
   }
   const seen = /* @__PURE__ */ new Map();
   lower.forEach((h, k) => {
-    if (h === "") throw b.error(`column ${k + 1} of the header has no name`, rows[0].cells[k].pos);
-    const first = seen.get(h);
-    if (first !== void 0) throw b.error(`column "${header2[k]}" appears twice in the header`, rows[0].cells[k].pos, `first as column ${first + 1}`);
+    if (h === "") throw b.error(`column ${k + 1} of the header has no name`, headerCells[k].pos);
+    const earlier = seen.get(h);
+    if (earlier !== void 0) throw b.error(`column "${header2[k]}" appears twice in the header`, headerCells[k].pos, `first as column ${earlier + 1}`);
     seen.set(h, k);
   });
   const src = lower.indexOf("source");
   const dst = lower.indexOf("target");
   const idCol = lower.indexOf("id");
-  for (let r = 1; r < rows.length; r++) {
-    const { cells, end } = rows[r];
+  let r = 0;
+  for (const { cells, end } of rows) {
+    r++;
     if (cells.length < header2.length) {
       const missing2 = header2.slice(cells.length).map((h) => `"${h}"`).join(", ");
       throw b.error(
@@ -47545,11 +48097,12 @@ function evaluationSpecs(fp, seed) {
     return params;
   });
   const elements = [...new Set(fp.requirements.flatMap((r) => r.kind === "n-1" ? [r.element] : []))].sort();
-  const specs = [{ r: fp.rValue, challenges: challenges2, seed }];
+  const budget = { maxWork: fp.budget.maxWork };
+  const specs = [{ r: fp.rValue, challenges: challenges2, seed, budget }];
   elements.forEach((element, i) => {
     const n1 = { challenge: "n-1", element };
     if (i === 0) specs[0].challenges.push(n1);
-    else specs.push({ r: fp.rValue, challenges: [n1], seed });
+    else specs.push({ r: fp.rValue, challenges: [n1], seed, budget });
   });
   return specs;
 }
@@ -47573,21 +48126,25 @@ function joinEvaluations(parts) {
   }
   return { evaluation, samples, labels };
 }
-async function evaluateText(text2, path3, fp, seed, request2, deps) {
-  let g;
+function compileText(text2, path3, fp) {
   try {
-    const topology = parseDesign(text2, path3, fp.format ? { format: fp.format } : {});
-    g = compileTopology(topology);
+    return { graph: compileTopology(parseDesign(text2, path3, fp.format ? { format: fp.format } : {})) };
   } catch (e) {
     if (isNetbraceError(e) && (e.kind === "design" || e.kind === "limit" || e.kind === "usage")) {
-      return { text: text2, error: { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column } };
+      return { error: { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column } };
     }
     throw e;
   }
+}
+async function evaluateGraph(g, specs, cuts, request2, deps) {
   const evaluate = deps.evaluate ?? ((graph, spec) => evaluateDesign(graph, spec));
   const parts = [];
-  for (const spec of evaluationSpecs(fp, seed)) parts.push(await evaluate(g, spec, request2.threads));
-  return { text: text2, side: { graph: g, result: joinEvaluations(parts) } };
+  for (const [i, spec] of specs.entries()) {
+    const part = await evaluate(g, spec, request2.threads);
+    notePairedCuts(part, cuts, i);
+    parts.push(part);
+  }
+  return { graph: g, result: joinEvaluations(parts) };
 }
 function validateRequest(request2) {
   if (request2.mode !== "enforce" && request2.mode !== "advise") throw new UsageError(`mode must be enforce or advise, not ${String(request2.mode)}`);
@@ -47626,19 +48183,26 @@ async function runGate(request2, deps) {
       if (headText === null) {
         input.change = "deleted";
       } else {
-        const h = await evaluateText(headText, c.path, fp, seed, request2, deps);
-        if (h.error) input.headError = h.error;
-        else input.head = h.side;
-        if (!thresholdsOnly && input.head && c.change !== "added") {
-          const basePath = c.previousPath ?? c.path;
-          const baseText = await deps.readAt(base, basePath);
-          if (baseText === headText) {
-            input.base = input.head;
-          } else if (baseText !== null) {
-            const b = await evaluateText(baseText, basePath, fp, seed, request2, deps);
-            if (b.error) input.baseError = b.error;
-            else input.base = b.side;
+        const h = compileText(headText, c.path, fp);
+        if ("error" in h) input.headError = h.error;
+        else {
+          let baseGraph;
+          let same = false;
+          if (!thresholdsOnly && c.change !== "added") {
+            const basePath = c.previousPath ?? c.path;
+            const baseText = await deps.readAt(base, basePath);
+            if (baseText === headText) {
+              same = true;
+            } else if (baseText !== null) {
+              const b = compileText(baseText, basePath, fp);
+              if ("error" in b) input.baseError = b.error;
+              else baseGraph = b.graph;
+            }
           }
+          const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
+          input.head = await evaluateGraph(h.graph, specs.head, specs.cuts, request2, deps);
+          if (same) input.base = input.head;
+          else if (baseGraph) input.base = await evaluateGraph(baseGraph, specs.base, specs.cuts, request2, deps);
         }
       }
     }
@@ -48165,7 +48729,7 @@ function structureSection(f) {
     `| bridges | ${b ? b.bridges.length : "–"} | ${h.bridges.length} |`,
     `| cut sites | ${b ? b.cutNodes.length : "–"} | ${h.cutNodes.length} |`
   ];
-  let text2 = `<details><summary>Structure of ${escapeHtml(f.path)}</summary>
+  let text2 = `<details><summary>Structure of ${escapeHtml(oneLine(f.path, 300))}</summary>
 
 | | base | head |
 |---|---:|---:|

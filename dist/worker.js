@@ -360,18 +360,18 @@ function eigenvectorCentrality(g, tolerance = 1e-13, maxRounds = 1e5) {
   let x = new Float64Array(n).fill(n > 0 ? 1 / Math.sqrt(n) : 0);
   let y = new Float64Array(n);
   for (let round = 0; round < maxRounds; round++) {
-    let norm = 0;
+    let norm2 = 0;
     for (let v = 0; v < n; v++) {
       let s = x[v];
       for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) s += x[g.neighbors[p]];
       y[v] = s;
-      norm += s * s;
+      norm2 += s * s;
     }
-    norm = Math.sqrt(norm);
-    if (norm === 0) break;
+    norm2 = Math.sqrt(norm2);
+    if (norm2 === 0) break;
     let change = 0;
     for (let v = 0; v < n; v++) {
-      y[v] /= norm;
+      y[v] /= norm2;
       const d = Math.abs(y[v] - x[v]);
       if (d > change) change = d;
     }
@@ -1056,7 +1056,57 @@ function sign(a, b) {
 }
 
 // src/metrics/kernels/lanczos.ts
-function createLanczos(capacity, maxCount, basis = 40) {
+function dot(a, ao, b, bo, n) {
+  let s = 0;
+  for (let i = 0; i < n; i++) s += a[ao + i] * b[bo + i];
+  return s;
+}
+function axpy(w, c, V, off, n) {
+  for (let i = 0; i < n; i++) w[i] -= c * V[off + i];
+}
+function norm(w, n) {
+  return Math.sqrt(dot(w, 0, w, 0, n));
+}
+function orthogonalize(w, V, stride, n, upTo, defl, dc, coeff, ref = norm(w, n)) {
+  for (let pass = 0; pass < 2; pass++) {
+    if (pass === 1 && norm(w, n) > 0.7071 * ref) break;
+    for (let k = 0; k < dc; k++) {
+      const c = dot(defl, k * n, w, 0, n);
+      axpy(w, c, defl, k * n, n);
+    }
+    let l = 0;
+    for (; l + 4 <= upTo; l += 4) {
+      const o0 = l * stride;
+      const o1 = o0 + stride;
+      const o2 = o1 + stride;
+      const o3 = o2 + stride;
+      let c0 = 0;
+      let c1 = 0;
+      let c2 = 0;
+      let c3 = 0;
+      for (let i = 0; i < n; i++) {
+        const x = w[i];
+        c0 += V[o0 + i] * x;
+        c1 += V[o1 + i] * x;
+        c2 += V[o2 + i] * x;
+        c3 += V[o3 + i] * x;
+      }
+      for (let i = 0; i < n; i++) w[i] -= c0 * V[o0 + i] + c1 * V[o1 + i] + c2 * V[o2 + i] + c3 * V[o3 + i];
+      if (coeff) {
+        coeff[l] += c0;
+        coeff[l + 1] += c1;
+        coeff[l + 2] += c2;
+        coeff[l + 3] += c3;
+      }
+    }
+    for (; l < upTo; l++) {
+      const c = dot(V, l * stride, w, 0, n);
+      if (coeff) coeff[l] += c;
+      axpy(w, c, V, l * stride, n);
+    }
+  }
+}
+function createLanczos(capacity, maxCount, basis = 24) {
   const m0 = Math.max(basis, 2 * maxCount + 8);
   const stride = Math.max(1, capacity);
   const V = new Float64Array(m0 * stride);
@@ -1067,6 +1117,7 @@ function createLanczos(capacity, maxCount, basis = 40) {
   const theta = new Float64Array(m0);
   const scratch = new Float64Array(m0);
   const h = new Float64Array(m0);
+  const views = Array.from({ length: m0 }, (_, i) => V.subarray(i * stride, (i + 1) * stride));
   const result = {
     values: new Float64Array(maxCount),
     vectors: new Float64Array(maxCount * stride),
@@ -1075,30 +1126,6 @@ function createLanczos(capacity, maxCount, basis = 40) {
     applications: 0,
     converged: false
   };
-  function dot(a, ao, b, bo, n) {
-    let s = 0;
-    for (let i = 0; i < n; i++) s += a[ao + i] * b[bo + i];
-    return s;
-  }
-  function orthogonalize(n, upTo, defl, dc, coeff) {
-    const before = norm(n);
-    for (let pass = 0; pass < 2; pass++) {
-      if (pass === 1 && norm(n) > 0.7071 * before) break;
-      for (let k = 0; k < dc; k++) {
-        const c = dot(defl, k * n, w, 0, n);
-        for (let i = 0; i < n; i++) w[i] -= c * defl[k * n + i];
-      }
-      for (let l = 0; l < upTo; l++) {
-        const c = dot(V, l * stride, w, 0, n);
-        if (coeff) coeff[l] += c;
-        const off = l * stride;
-        for (let i = 0; i < n; i++) w[i] -= c * V[off + i];
-      }
-    }
-  }
-  function norm(n) {
-    return Math.sqrt(dot(w, 0, w, 0, n));
-  }
   return {
     result,
     solve(op, req) {
@@ -1121,41 +1148,57 @@ function createLanczos(capacity, maxCount, basis = 40) {
       const keys = req.keys ?? null;
       if (req.start) for (let i = 0; i < n; i++) w[i] = req.start[i];
       else for (let i = 0; i < n; i++) w[i] = noise(keys ? keys[i] : i, 24301);
-      orthogonalize(n, 0, defl, dc, null);
-      let beta = norm(n);
+      orthogonalize(w, V, stride, n, 0, defl, dc, null);
+      let beta = norm(w, n);
       if (!(beta > 1e-8)) {
         for (let i = 0; i < n; i++) w[i] = noise(keys ? keys[i] : i, 24301 + salt++);
-        orthogonalize(n, 0, defl, dc, null);
-        beta = norm(n);
+        orthogonalize(w, V, stride, n, 0, defl, dc, null);
+        beta = norm(w, n);
       }
       for (let i = 0; i < n; i++) V[i] = w[i] / beta;
       H.fill(0, 0, m * m);
       let j = 0;
       let apps = 0;
+      let betaPrev = 0;
       for (; ; ) {
         let residual = 0;
         for (let i = j; i < m; i++) {
-          const vi = V.subarray(i * stride, i * stride + n);
-          op.apply(vi, w);
+          op.apply(views[i], w);
           apps++;
           h.fill(0, 0, i + 1);
-          orthogonalize(n, i + 1, defl, dc, h);
+          if (i === j && j > 0) {
+            for (let k = 0; k < j; k++) {
+              const c = H[k * m + j];
+              h[k] = c;
+              if (c !== 0) axpy(w, c, V, k * stride, n);
+            }
+          } else if (i > 0 && betaPrev !== 0) {
+            h[i - 1] = betaPrev;
+            axpy(w, betaPrev, V, (i - 1) * stride, n);
+          }
+          const alpha = dot(V, i * stride, w, 0, n);
+          h[i] += alpha;
+          axpy(w, alpha, V, i * stride, n);
+          orthogonalize(w, V, stride, n, i + 1, defl, dc, h);
           for (let l = 0; l <= i; l++) {
             H[l * m + i] = h[l];
             H[i * m + l] = h[l];
           }
-          beta = norm(n);
+          beta = norm(w, n);
           residual = beta;
+          betaPrev = beta;
           if (i + 1 < m) {
             if (beta <= 1e-10 * Math.max(op.normBound, 1)) {
               for (let t = 0; t < n; t++) w[t] = noise(keys ? keys[t] : t, 24301 + salt++);
-              orthogonalize(n, i + 1, defl, dc, null);
-              beta = norm(n);
+              orthogonalize(w, V, stride, n, i + 1, defl, dc, null);
+              beta = norm(w, n);
+              betaPrev = 0;
               H[(i + 1) * m + i] = 0;
               H[i * m + i + 1] = 0;
             }
             const off2 = (i + 1) * stride;
-            for (let t = 0; t < n; t++) V[off2 + t] = w[t] / beta;
+            const inv = 1 / beta;
+            for (let t = 0; t < n; t++) V[off2 + t] = w[t] * inv;
           }
         }
         Y.set(H.subarray(0, m * m));
@@ -1204,12 +1247,12 @@ function createLanczos(capacity, maxCount, basis = 40) {
           H[k * m + keep] = c;
           H[keep * m + k] = c;
         }
-        orthogonalize(n, keep, defl, dc, null);
-        beta = norm(n);
+        orthogonalize(w, V, stride, n, keep, defl, dc, null);
+        beta = norm(w, n);
         if (!(beta > 1e-300)) {
           for (let t = 0; t < n; t++) w[t] = noise(keys ? keys[t] : t, 24301 + salt++);
-          orthogonalize(n, keep, defl, dc, null);
-          beta = norm(n);
+          orthogonalize(w, V, stride, n, keep, defl, dc, null);
+          beta = norm(w, n);
         }
         const off = keep * stride;
         for (let t = 0; t < n; t++) V[off + t] = w[t] / beta;
@@ -1424,18 +1467,49 @@ function popcount32(x) {
   x = x + (x >>> 4) & 252645135;
   return Math.imul(x, 16843009) >>> 24;
 }
+var LONG_GRAPH_ECCENTRICITY = 12;
 function wordsFor(sources) {
   return Math.max(1, Math.min(8, Math.ceil(sources / 32)));
 }
 function createHopHistogram(capacity) {
   const maxWords = wordsFor(capacity);
-  const seen = new Uint32Array(Math.max(1, capacity * maxWords));
-  let frontier = new Uint32Array(seen.length);
-  let next = new Uint32Array(seen.length);
+  const size = Math.max(1, capacity * maxWords);
+  const seen = new Uint32Array(size);
+  let frontier = new Uint32Array(size);
+  let next = new Uint32Array(size);
   const done = new Uint8Array(Math.max(1, capacity));
+  const listed = new Uint8Array(Math.max(1, capacity));
+  let active = new Int32Array(Math.max(1, capacity));
+  let nextActive = new Int32Array(Math.max(1, capacity));
   const full = new Uint32Array(maxWords);
   const acc = new Uint32Array(maxWords);
   const result = { hist: new Float64Array(capacity + 1), maxDistance: 0 };
+  const dist = new Int32Array(Math.max(1, capacity));
+  const queue = new Int32Array(Math.max(1, capacity));
+  function single(graph, s) {
+    const { offsets, neighbors } = graph;
+    dist.fill(-1, 0, graph.n);
+    dist[s] = 0;
+    queue[0] = s;
+    let head = 0;
+    let tail = 1;
+    let ecc = 0;
+    const hist = result.hist;
+    while (head < tail) {
+      const v = queue[head++];
+      const dv = dist[v] + 1;
+      for (let p = offsets[v]; p < offsets[v + 1]; p++) {
+        const w = neighbors[p];
+        if (dist[w] >= 0) continue;
+        dist[w] = dv;
+        queue[tail++] = w;
+        hist[dv]++;
+        if (dv > ecc) ecc = dv;
+      }
+    }
+    if (ecc > result.maxDistance) result.maxDistance = ecc;
+    return ecc;
+  }
   return {
     run(graph, sources, count) {
       const n = graph.n;
@@ -1443,76 +1517,120 @@ function createHopHistogram(capacity) {
       const hist = result.hist;
       hist.fill(0, 0, result.maxDistance + 1);
       result.maxDistance = 0;
+      if (count === 0) return result;
+      const ecc = single(graph, sources[0]);
+      if (ecc >= LONG_GRAPH_ECCENTRICITY) {
+        for (let i = 1; i < count; i++) single(graph, sources[i]);
+        return result;
+      }
+      hist.fill(0, 0, result.maxDistance + 1);
+      result.maxDistance = 0;
       const W = wordsFor(count);
       const batch = 32 * W;
+      const sweepWork = n + offsets[n];
       for (let start = 0; start < count; start += batch) {
         const width = Math.min(batch, count - start);
         const used = n * W;
         seen.fill(0, 0, used);
         frontier.fill(0, 0, used);
+        next.fill(0, 0, used);
         done.fill(0, 0, n);
         for (let w = 0; w < W; w++) {
           const bits = width - 32 * w;
           full[w] = bits >= 32 ? 4294967295 : bits <= 0 ? 0 : (1 << bits) - 1 >>> 0;
         }
+        let activeCount = 0;
         for (let i = 0; i < width; i++) {
-          const at = sources[start + i] * W + (i >>> 5);
+          const s = sources[start + i];
+          const at = s * W + (i >>> 5);
           const bit = 1 << (i & 31);
           seen[at] |= bit;
           frontier[at] |= bit;
+          if (!listed[s]) {
+            listed[s] = 1;
+            active[activeCount++] = s;
+          }
         }
-        for (let d = 1; ; d++) {
+        for (let i = 0; i < activeCount; i++) listed[active[i]] = 0;
+        for (let d = 1; activeCount > 0; d++) {
+          let frontierWork = 0;
+          for (let i = 0; i < activeCount; i++) frontierWork += offsets[active[i] + 1] - offsets[active[i]];
           let reached = 0;
-          if (W === 1) {
-            for (let v = 0; v < n; v++) {
-              if (done[v]) {
-                next[v] = 0;
-                continue;
+          let nextCount = 0;
+          if (4 * frontierWork < sweepWork) {
+            for (let i = 0; i < activeCount; i++) {
+              const v = active[i];
+              const vb = v * W;
+              for (let p = offsets[v]; p < offsets[v + 1]; p++) {
+                const u = neighbors[p];
+                if (done[u]) continue;
+                const ub = u * W;
+                let any = 0;
+                for (let w = 0; w < W; w++) {
+                  const x = frontier[vb + w] & ~seen[ub + w];
+                  next[ub + w] |= x;
+                  any |= x;
+                }
+                if (any !== 0 && !listed[u]) {
+                  listed[u] = 1;
+                  nextActive[nextCount++] = u;
+                }
               }
-              let a = 0;
-              for (let p = offsets[v]; p < offsets[v + 1]; p++) a |= frontier[neighbors[p]];
-              const s = seen[v];
-              const x = a & ~s;
-              next[v] = x;
-              if (x !== 0) {
-                const t2 = s | x;
-                seen[v] = t2;
+            }
+            for (let i = 0; i < nextCount; i++) {
+              const u = nextActive[i];
+              listed[u] = 0;
+              const ub = u * W;
+              let complete2 = true;
+              for (let w = 0; w < W; w++) {
+                const x = next[ub + w];
                 reached += popcount32(x);
-                if (t2 >>> 0 === full[0]) done[v] = 1;
+                const t = (seen[ub + w] | x) >>> 0;
+                seen[ub + w] = t;
+                if (t !== full[w]) complete2 = false;
               }
+              if (complete2) done[u] = 1;
             }
           } else {
             for (let v = 0; v < n; v++) {
+              if (done[v]) continue;
               const base = v * W;
-              if (done[v]) {
-                for (let w = 0; w < W; w++) next[base + w] = 0;
-                continue;
-              }
-              acc.fill(0, 0, W);
+              for (let w = 0; w < W; w++) acc[w] = 0;
               for (let p = offsets[v]; p < offsets[v + 1]; p++) {
                 const ub = neighbors[p] * W;
                 for (let w = 0; w < W; w++) acc[w] |= frontier[ub + w];
               }
+              let any = 0;
               let complete2 = true;
               for (let w = 0; w < W; w++) {
                 const s = seen[base + w];
                 const x = acc[w] & ~s;
                 next[base + w] = x;
-                if (x !== 0) {
-                  seen[base + w] = s | x;
-                  reached += popcount32(x);
-                }
-                if (seen[base + w] >>> 0 !== full[w]) complete2 = false;
+                any |= x;
+                const t = (s | x) >>> 0;
+                seen[base + w] = t;
+                if (t !== full[w]) complete2 = false;
+                if (x !== 0) reached += popcount32(x);
               }
+              if (any !== 0) nextActive[nextCount++] = v;
               if (complete2) done[v] = 1;
             }
           }
-          if (reached === 0) break;
-          hist[d] += reached;
-          if (d > result.maxDistance) result.maxDistance = d;
-          const t = frontier;
+          if (reached > 0) {
+            hist[d] += reached;
+            if (d > result.maxDistance) result.maxDistance = d;
+          }
+          for (let i = 0; i < activeCount; i++) {
+            const vb = active[i] * W;
+            for (let w = 0; w < W; w++) frontier[vb + w] = 0;
+          }
+          const f = frontier;
           frontier = next;
-          next = t;
+          next = f;
+          const a = active;
+          active = nextActive;
+          nextActive = a;
+          activeCount = nextCount;
         }
       }
       return result;
@@ -1521,44 +1639,31 @@ function createHopHistogram(capacity) {
 }
 
 // src/metrics/kernels/union-find.ts
-function createUnionFind(capacity) {
-  const parent = new Int32Array(capacity);
-  const size = new Int32Array(capacity);
-  const find = (i) => {
-    while (parent[i] !== i) {
-      const up = parent[parent[i]];
-      parent[i] = up;
-      i = up;
-    }
-    return i;
-  };
-  return {
-    parent,
-    size,
-    find,
-    union(a, b) {
-      let ra = find(a);
-      let rb = find(b);
-      if (ra === rb) return -1;
-      if (size[ra] < size[rb]) {
-        const t = ra;
-        ra = rb;
-        rb = t;
-      }
-      parent[rb] = ra;
-      size[ra] += size[rb];
-      return ra;
-    },
-    reset(n) {
-      for (let i = 0; i < n; i++) {
-        parent[i] = i;
-        size[i] = 1;
-      }
-    }
-  };
+function findRoot(parent, i) {
+  while (parent[i] !== i) {
+    const up = parent[parent[i]];
+    parent[i] = up;
+    i = up;
+  }
+  return i;
+}
+function unite(parent, size, a, b) {
+  let ra = findRoot(parent, a);
+  let rb = findRoot(parent, b);
+  if (ra === rb) return false;
+  if (size[ra] < size[rb]) {
+    const t = ra;
+    ra = rb;
+    rb = t;
+  }
+  parent[rb] = ra;
+  size[ra] += size[rb];
+  return true;
 }
 function createComponentCounter(g) {
-  const uf = createUnionFind(g.n);
+  const parent = new Int32Array(g.n);
+  const size = new Int32Array(g.n);
+  const uf = { parent, size, find: (i) => findRoot(parent, i) };
   const summary = { alive: 0, count: 0, largest: 0, largestRoot: -1, connectedPairs: 0 };
   const { linkSource, linkTarget } = g;
   return {
@@ -1567,22 +1672,25 @@ function createComponentCounter(g) {
     run(mask) {
       const node = mask.node;
       const link = mask.link;
-      uf.reset(g.n);
+      const n = g.n;
       let alive = 0;
-      for (let v = 0; v < g.n; v++) alive += node[v] ^ 1;
+      for (let v = 0; v < n; v++) {
+        parent[v] = v;
+        size[v] = 1;
+        alive += node[v] ^ 1;
+      }
       let count = alive;
       for (let e = 0; e < g.m; e++) {
         if (link[e]) continue;
         const a = linkSource[e];
         const b = linkTarget[e];
         if (node[a] || node[b]) continue;
-        if (uf.union(a, b) >= 0) count--;
+        if (unite(parent, size, a, b)) count--;
       }
       let largest = 0;
       let largestRoot = -1;
       let pairs = 0;
-      const { parent, size } = uf;
-      for (let v = 0; v < g.n; v++) {
+      for (let v = 0; v < n; v++) {
         if (node[v] || parent[v] !== v) continue;
         const s = size[v];
         pairs += s * (s - 1) / 2;
@@ -1611,7 +1719,8 @@ function createLargestComponentSources(g) {
     out.count = 0;
     if (s.largestRoot < 0) return out;
     const root = s.largestRoot;
-    for (let i = 0; i < local.n; i++) if (counter.uf.find(local.toOriginal[i]) === root) sources[out.count++] = i;
+    const parent = counter.uf.parent;
+    for (let i = 0; i < local.n; i++) if (findRoot(parent, local.toOriginal[i]) === root) sources[out.count++] = i;
     return out;
   };
 }
@@ -1769,85 +1878,83 @@ var cutNodes = cutMetric(
 );
 
 // src/metrics/kernels/dijkstra.ts
+function siftUp(heap, pos, dist, i) {
+  const v = heap[i];
+  const d = dist[v];
+  while (i > 0) {
+    const parent = i - 1 >> 1;
+    const u = heap[parent];
+    if (dist[u] <= d) break;
+    heap[i] = u;
+    pos[u] = i;
+    i = parent;
+  }
+  heap[i] = v;
+  pos[v] = i;
+}
+function siftDown(heap, pos, dist, size, i) {
+  const v = heap[i];
+  const d = dist[v];
+  for (; ; ) {
+    let child = 2 * i + 1;
+    if (child >= size) break;
+    if (child + 1 < size && dist[heap[child + 1]] < dist[heap[child]]) child++;
+    const u = heap[child];
+    if (dist[u] >= d) break;
+    heap[i] = u;
+    pos[u] = i;
+    i = child;
+  }
+  heap[i] = v;
+  pos[v] = i;
+}
+function shortestPaths(g, cost, source, dist, heap, pos, visit) {
+  const n = g.n;
+  const { offsets, neighbors, linkOf } = g;
+  dist.fill(Infinity, 0, n);
+  pos.fill(-1, 0, n);
+  let size = 0;
+  dist[source] = 0;
+  heap[size++] = source;
+  pos[source] = 0;
+  while (size > 0) {
+    const v = heap[0];
+    const dv = dist[v];
+    pos[v] = -2;
+    const last = heap[--size];
+    if (size > 0) {
+      heap[0] = last;
+      pos[last] = 0;
+      siftDown(heap, pos, dist, size, 0);
+    }
+    if (visit !== void 0 && visit(v, dv)) return;
+    for (let p = offsets[v]; p < offsets[v + 1]; p++) {
+      const w = neighbors[p];
+      const at = pos[w];
+      if (at === -2) continue;
+      const nd = dv + cost[linkOf[p]];
+      if (nd < dist[w]) {
+        dist[w] = nd;
+        if (at === -1) {
+          heap[size] = w;
+          pos[w] = size++;
+          siftUp(heap, pos, dist, size - 1);
+        } else {
+          siftUp(heap, pos, dist, at);
+        }
+      }
+    }
+  }
+}
 function createDijkstra(capacity) {
   const dist = new Float64Array(capacity);
   const heap = new Int32Array(capacity);
   const pos = new Int32Array(capacity);
-  let size = 0;
-  function up(i) {
-    const v = heap[i];
-    const d = dist[v];
-    while (i > 0) {
-      const parent = i - 1 >> 1;
-      const u = heap[parent];
-      if (dist[u] <= d) break;
-      heap[i] = u;
-      pos[u] = i;
-      i = parent;
-    }
-    heap[i] = v;
-    pos[v] = i;
-  }
-  function down(i) {
-    const v = heap[i];
-    const d = dist[v];
-    for (; ; ) {
-      let child = 2 * i + 1;
-      if (child >= size) break;
-      if (child + 1 < size && dist[heap[child + 1]] < dist[heap[child]]) child++;
-      const u = heap[child];
-      if (dist[u] >= d) break;
-      heap[i] = u;
-      pos[u] = i;
-      i = child;
-    }
-    heap[i] = v;
-    pos[v] = i;
-  }
   return {
     dist,
-    /**
-     * Distances from `source` into `dist[0..g.n)` (Infinity where unreachable). `visit(v, d)`
-     * is called as each node is settled, in order of distance; returning true stops early,
-     * leaving the unsettled distances as upper bounds.
-     */
+    /** See shortestPaths; results in `dist`. */
     run(g, cost, source, visit) {
-      const n = g.n;
-      const { offsets, neighbors, linkOf } = g;
-      dist.fill(Infinity, 0, n);
-      pos.fill(-1, 0, n);
-      size = 0;
-      dist[source] = 0;
-      heap[size++] = source;
-      pos[source] = 0;
-      while (size > 0) {
-        const v = heap[0];
-        const dv = dist[v];
-        pos[v] = -2;
-        const last = heap[--size];
-        if (size > 0) {
-          heap[0] = last;
-          pos[last] = 0;
-          down(0);
-        }
-        if (visit && visit(v, dv)) return;
-        for (let p = offsets[v]; p < offsets[v + 1]; p++) {
-          const w = neighbors[p];
-          const at = pos[w];
-          if (at === -2) continue;
-          const nd = dv + cost[linkOf[p]];
-          if (nd < dist[w]) {
-            dist[w] = nd;
-            if (at === -1) {
-              heap[size] = w;
-              pos[w] = size++;
-              up(size - 1);
-            } else {
-              up(at);
-            }
-          }
-        }
-      }
+      shortestPaths(g, cost, source, dist, heap, pos, visit);
     }
   };
 }
@@ -1900,12 +2007,13 @@ var demandServed = {
       return (mask) => {
         if (total <= 0) return { raw: 0, normalized: 0 };
         counter.run(mask);
+        const parent = counter.uf.parent;
         let served = 0;
         for (let d = 0; d < k; d++) {
           const s = src[d];
           const t = dst[d];
           if (s < 0 || t < 0 || !(vol[d] > 0) || mask.node[s] || mask.node[t]) continue;
-          if (s === t || counter.uf.find(s) === counter.uf.find(t)) served += vol[d];
+          if (s === t || findRoot(parent, s) === findRoot(parent, t)) served += vol[d];
         }
         return { raw: served, normalized: served / total };
       };
@@ -1974,6 +2082,142 @@ var diameter = {
     };
   }
 };
+
+// src/metrics/kernels/banded-resistance.ts
+function createBandedResistance(capacity) {
+  const perm = new Int32Array(capacity);
+  const place = new Int32Array(capacity);
+  const queue = new Int32Array(capacity);
+  const seen = new Uint8Array(capacity);
+  const order = new Int32Array(capacity);
+  const d = new Float64Array(capacity);
+  const x = new Float64Array(capacity);
+  let band = new Float64Array(0);
+  let inverse2 = new Float64Array(0);
+  function cuthillMcKee(g, start) {
+    seen.fill(0, 0, g.n);
+    let head = 0;
+    let tail = 0;
+    queue[tail++] = start;
+    seen[start] = 1;
+    let lastLevelStart = start;
+    let levelEnd = 1;
+    while (head < tail) {
+      if (head === levelEnd) {
+        lastLevelStart = queue[head];
+        levelEnd = tail;
+      }
+      const v = queue[head++];
+      const from = tail;
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+        const w = g.neighbors[p];
+        if (seen[w]) continue;
+        seen[w] = 1;
+        const dw = g.offsets[w + 1] - g.offsets[w];
+        let k = tail++;
+        while (k > from && g.offsets[queue[k - 1] + 1] - g.offsets[queue[k - 1]] > dw) {
+          queue[k] = queue[k - 1];
+          k--;
+        }
+        queue[k] = w;
+      }
+    }
+    return lastLevelStart;
+  }
+  return {
+    /**
+     * The band width the ordering gives for `g` (connected, n ≥ 2), leaving the ordering in
+     * place for `resistance`. The ground is the last node of the ordering.
+     */
+    prepare(g) {
+      const n = g.n;
+      let start = 0;
+      for (let v = 1; v < n; v++) if (g.offsets[v + 1] - g.offsets[v] < g.offsets[start + 1] - g.offsets[start]) start = v;
+      start = cuthillMcKee(g, start);
+      cuthillMcKee(g, start);
+      for (let i = 0; i < n; i++) order[i] = queue[n - 1 - i];
+      for (let i = 0; i < n; i++) {
+        perm[i] = order[i];
+        place[order[i]] = i;
+      }
+      let b = 0;
+      for (let v = 0; v < n; v++) {
+        for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+          const gap = Math.abs(place[v] - place[g.neighbors[p]]);
+          if (gap > b) b = gap;
+        }
+      }
+      return b;
+    },
+    /** R_G of the connected graph `g` after `prepare(g)` returned `b`. */
+    resistance(g, b) {
+      const n = g.n;
+      const m = n - 1;
+      const w = b + 1;
+      if (band.length < m * w) {
+        band = new Float64Array(m * w);
+        inverse2 = new Float64Array(m * w);
+      }
+      band.fill(0, 0, m * w);
+      for (let i = 0; i < m; i++) {
+        const v = perm[i];
+        band[i * w] = g.offsets[v + 1] - g.offsets[v];
+        for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+          const j = place[g.neighbors[p]];
+          if (j < i) band[i * w + (i - j)] -= 1;
+        }
+      }
+      for (let i = 0; i < m; i++) {
+        const lo = Math.max(0, i - b);
+        const ri = i * w;
+        for (let j = lo; j < i; j++) {
+          const rj = j * w;
+          let s2 = band[ri + (i - j)];
+          const k0 = Math.max(lo, j - b);
+          for (let k = k0; k < j; k++) s2 -= band[ri + (i - k)] * d[k] * band[rj + (j - k)];
+          band[ri + (i - j)] = s2 / d[j];
+        }
+        let s = band[ri];
+        for (let k = lo; k < i; k++) {
+          const l = band[ri + (i - k)];
+          s -= l * l * d[k];
+        }
+        d[i] = s;
+      }
+      let trace = 0;
+      for (let i = m - 1; i >= 0; i--) {
+        const hi = Math.min(m - 1, i + b);
+        for (let j = hi; j > i; j--) {
+          let s2 = 0;
+          for (let k = i + 1; k <= hi; k++) {
+            const lki = band[k * w + (k - i)];
+            if (lki === 0) continue;
+            s2 -= lki * (k <= j ? inverse2[j * w + (j - k)] : inverse2[k * w + (k - j)]);
+          }
+          inverse2[j * w + (j - i)] = s2;
+        }
+        let s = 1 / d[i];
+        for (let k = i + 1; k <= hi; k++) s -= band[k * w + (k - i)] * inverse2[k * w + (k - i)];
+        inverse2[i * w] = s;
+        trace += s;
+      }
+      for (let i = 0; i < m; i++) {
+        let s = 1;
+        for (let k = Math.max(0, i - b); k < i; k++) s -= band[i * w + (i - k)] * x[k];
+        x[i] = s;
+      }
+      for (let i = 0; i < m; i++) x[i] /= d[i];
+      for (let i = m - 1; i >= 0; i--) {
+        let s = x[i];
+        for (let k = i + 1; k <= Math.min(m - 1, i + b); k++) s -= band[k * w + (k - i)] * x[k];
+        x[i] = s;
+      }
+      let total = 0;
+      for (let i = 0; i < m; i++) total += x[i];
+      return n * trace - total;
+    }
+  };
+}
 
 // src/metrics/kernels/slq.ts
 function createTraceEstimator(capacity, maxSteps) {
@@ -2060,6 +2304,7 @@ function createTraceEstimator(capacity, maxSteps) {
 }
 
 // src/metrics/effective-resistance.ts
+var DEFAULT_EXACT_WORK = 5e7;
 var PROBES = 32;
 var STEPS = 120;
 var inverse = (x) => 1 / x;
@@ -2070,32 +2315,33 @@ var effectiveResistance = {
   cost: "spectral",
   appliesTo: () => true,
   create(g, options = {}) {
-    const limit = Math.min(g.n, options.denseLimit ?? TRACE_DENSE_LIMIT);
+    const limit = options.denseLimit ?? TRACE_DENSE_LIMIT;
+    const maxWork = options.exactWork ?? DEFAULT_EXACT_WORK;
     const spectral = createSpectralSurvivors(g);
-    const dense = createDenseSpectrum(limit);
-    const big = g.n > limit;
-    const slq = big ? createTraceEstimator(g.n, STEPS) : null;
+    const banded = createBandedResistance(g.n);
+    let slq = null;
     const op = createLaplacianOperator();
-    const deflation = new Float64Array(big ? g.n : 0);
+    const deflation = new Float64Array(g.n);
     return (mask) => {
       const local = spectral.survivors(mask);
       const n = local.n;
       if (n < 2) return { raw: 0, normalized: 0 };
       if (spectral.components(local).count > 1) return { raw: Infinity, normalized: 0 };
-      let trace = 0;
-      if (n <= limit) {
-        const d = dense.laplacian(local);
-        for (let i = 1; i < n; i++) trace += 1 / d[i];
+      const b = banded.prepare(local);
+      let resistance;
+      if (n <= limit || n * b * b <= maxWork) {
+        resistance = banded.resistance(local, b);
       } else {
         op.bind(local);
         deflation.fill(1 / Math.sqrt(n), 0, n);
-        trace = slq.estimate(op, inverse, spectral.keysOf(local), deflation, 1, {
+        slq ??= createTraceEstimator(g.n, STEPS);
+        const trace = slq.estimate(op, inverse, spectral.keysOf(local), deflation, 1, {
           probes: PROBES,
           steps: STEPS,
           tol: 1e-9
         });
+        resistance = n * trace;
       }
-      const resistance = n * trace;
       return { raw: resistance, normalized: Math.min(1, (n - 1) / resistance) };
     };
   }
@@ -2240,6 +2486,38 @@ function createConnectivityCounter(nodeCapacity, entryCapacity) {
   const network = createFlowNetwork(nodeCapacity, entryCapacity);
   const mark = new Int32Array(nodeCapacity).fill(-1);
   let stampCounter = 0;
+  const domNodes = new Int32Array(nodeCapacity);
+  const dominated = new Uint8Array(nodeCapacity);
+  const dominating = { nodes: domNodes, count: 0 };
+  function dominatingSet(g) {
+    dominated.fill(0, 0, g.n);
+    dominating.count = 0;
+    for (let v = 0; v < g.n; v++) {
+      if (dominated[v]) continue;
+      domNodes[dominating.count++] = v;
+      dominated[v] = 1;
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) dominated[g.neighbors[p]] = 1;
+    }
+    return dominating;
+  }
+  function nextStamp() {
+    if (stampCounter >= 1073741823) {
+      mark.fill(-1);
+      stampCounter = 0;
+    }
+    return ++stampCounter;
+  }
+  function hasParallel(g) {
+    for (let v = 0; v < g.n; v++) {
+      const stamp = nextStamp();
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+        const w = g.neighbors[p];
+        if (mark[w] === stamp) return true;
+        mark[w] = stamp;
+      }
+    }
+    return false;
+  }
   function minDegree(g) {
     let node = 0;
     let degree2 = Infinity;
@@ -2255,10 +2533,14 @@ function createConnectivityCounter(nodeCapacity, entryCapacity) {
   return {
     /** λ of a connected multigraph (parallel links count) with at least two nodes. */
     linkConnectivity(g) {
-      const { node: s, degree: degree2 } = minDegree(g);
+      const { degree: degree2 } = minDegree(g);
       let best = degree2;
       network.build(g, false);
-      for (let t = 0; t < g.n && best > 0; t++) {
+      const dominating2 = hasParallel(g) ? null : dominatingSet(g);
+      const targets = dominating2 ? dominating2.count : g.n;
+      const s = dominating2 ? dominating2.nodes[0] : 0;
+      for (let k = 0; k < targets && best > 0; k++) {
+        const t = dominating2 ? dominating2.nodes[k] : k;
         if (t === s) continue;
         const f = network.flow(s, t, best);
         if (f < best) best = f;
@@ -2272,7 +2554,7 @@ function createConnectivityCounter(nodeCapacity, entryCapacity) {
       const { node: v, degree: degree2 } = minDegree(g);
       let best = degree2;
       network.build(g, true);
-      const stamp = ++stampCounter;
+      const stamp = nextStamp();
       mark[v] = stamp;
       for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) mark[g.neighbors[p]] = stamp;
       for (let w = 0; w < n && best > 0; w++) {
@@ -2282,7 +2564,7 @@ function createConnectivityCounter(nodeCapacity, entryCapacity) {
       }
       for (let p = g.offsets[v]; p < g.offsets[v + 1] && best > 0; p++) {
         const x = g.neighbors[p];
-        const sx = ++stampCounter;
+        const sx = nextStamp();
         for (let r = g.offsets[x]; r < g.offsets[x + 1]; r++) mark[g.neighbors[r]] = sx;
         for (let q = p + 1; q < g.offsets[v + 1] && best > 0; q++) {
           const y = g.neighbors[q];
@@ -2580,7 +2862,8 @@ function unionFindR(g, spec) {
 // src/envelope/union-find.ts
 function createUnionFindWorkspace(g) {
   return {
-    uf: createUnionFind(g.n),
+    parent: new Int32Array(g.n),
+    size: new Int32Array(g.n),
     nodeOn: new Uint8Array(g.n),
     linkOn: new Uint8Array(g.m),
     firstGroup: new Int32Array(g.m)
@@ -2605,7 +2888,7 @@ function connectivityCurve(g, kind, order, count, ws = createUnionFindWorkspace(
       }
     }
   }
-  const { parent, size } = ws.uf;
+  const { parent, size } = ws;
   const st = { lcc: 0, pairs: 0 };
   const { offsets, neighbors, linkOf, linkSource, linkTarget } = g;
   const addNode = (v) => {
@@ -2622,7 +2905,10 @@ function connectivityCurve(g, kind, order, count, ws = createUnionFindWorkspace(
     const b = linkTarget[e];
     if (nodeOn[a] === 1 && nodeOn[b] === 1) join(st, parent, size, a, b);
   };
-  ws.uf.reset(g.n);
+  for (let v = 0; v < g.n; v++) {
+    parent[v] = v;
+    size[v] = 1;
+  }
   for (let v = 0; v < g.n; v++) if (nodeOn[v] === 1) st.lcc = 1;
   for (let e = 0; e < g.m; e++) {
     const a = linkSource[e];
@@ -2647,16 +2933,8 @@ function connectivityCurve(g, kind, order, count, ws = createUnionFindWorkspace(
   return out;
 }
 function join(st, parent, size, a, b) {
-  while (parent[a] !== a) {
-    const up = parent[parent[a]];
-    parent[a] = up;
-    a = up;
-  }
-  while (parent[b] !== b) {
-    const up = parent[parent[b]];
-    parent[b] = up;
-    b = up;
-  }
+  a = findRoot(parent, a);
+  b = findRoot(parent, b);
   if (a === b) return;
   const sa = size[a];
   const sb = size[b];
