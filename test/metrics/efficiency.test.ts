@@ -70,6 +70,25 @@ describe('efficiency under removal', () => {
     const g = graphFromEdges(3, [[0, 1], [0, 1], [1, 2], [2, 2]]);
     expectRelative(value(g), value(path(3)));
   });
+  it('matches single-source BFS on long thin graphs (the one-source-at-a-time path) and under masks', () => {
+    const r = rng(5);
+    const n = 400;
+    const edges: [number, number][] = [];
+    for (let i = 0; i + 1 < n; i++) {
+      edges.push([i, i + 1]);
+      if (r() < 0.3 && i + 3 < n) edges.push([i, i + 2 + Math.floor(r() * 2)]);
+    }
+    const g = graphFromEdges(n, edges);
+    const evaluate = eff.create(g);
+    const mask = createMask(g);
+    const dead = new Set<number>();
+    expectRelative(evaluate(mask).raw, bruteEfficiency(n, edges, dead), 1e-10);
+    for (const v of [17, 150, 151, 333]) {
+      mask.node[v] = 1;
+      dead.add(v);
+    }
+    expectRelative(evaluate(mask).raw, bruteEfficiency(n, edges, dead), 1e-10);
+  });
   it('matches single-source BFS on random graphs and masks across batch widths (32..256 sources)', () => {
     const r = rng(11);
     for (const [n, m] of [[20, 30], [45, 60], [130, 260], [300, 500], [700, 1400]] as const) {
