@@ -41246,7 +41246,7 @@ function popcount32(x) {
   x = x + (x >>> 4) & 252645135;
   return Math.imul(x, 16843009) >>> 24;
 }
-var LONG_GRAPH_ECCENTRICITY = 99;
+var LONG_GRAPH_ECCENTRICITY = 12;
 function wordsFor(sources) {
   return Math.max(1, Math.min(8, Math.ceil(sources / 32)));
 }
