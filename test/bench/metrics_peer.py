@@ -44,7 +44,7 @@ def best_time(fn, budget=0.3):
     return best
 
 
-CAP_SECONDS = 20
+CAP_SECONDS = 15
 
 
 def capped(measure):
