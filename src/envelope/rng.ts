@@ -8,15 +8,9 @@
 //   finaliser, for the few places that need a stream of numbers (bootstrap resampling).
 // All arithmetic is 32-bit integer (Math.imul, >>>), so results are identical on every engine.
 
-/** murmur3's 32-bit finaliser (Appleby, MurmurHash3, public domain): a bijective avalanche mix. */
-export function mix32(h: number): number {
-  h ^= h >>> 16;
-  h = Math.imul(h, 0x85ebca6b);
-  h ^= h >>> 13;
-  h = Math.imul(h, 0xc2b2ae35);
-  h ^= h >>> 16;
-  return h >>> 0;
-}
+import { mix32 } from '../metrics/kernels/hash-noise.js';
+
+export { mix32 };
 
 /** A 32-bit hash of a string's UTF-16 code units (murmur3-style body, mix32 finaliser). */
 export function hashString(s: string, seed: number): number {
