@@ -1,8 +1,8 @@
 // `netbrace metrics FILE [--only id,id] [--json]`: every robustness metric of one design,
 // intact (nothing removed), raw and normalised — a table for people, JSON for scripts.
 
-import { parseArgs } from 'node:util';
 import type { Command, CommandIO } from '../io.js';
+import { parseCommandArgs } from '../args.js';
 import { UsageError } from '../../errors.js';
 import { compileTopology, type CompactGraph } from '../../graph/compact.js';
 import { createMask } from '../../graph/mask.js';
@@ -89,22 +89,12 @@ export const metricsCommand: Command = {
   summary: 'compute the robustness metrics of one design (raw and normalised)',
   help: HELP,
   async run(args: string[], io: CommandIO): Promise<number> {
-    let parsed;
-    try {
-      parsed = parseArgs({
-        args,
-        allowPositionals: true,
-        strict: true,
-        options: {
-          only: { type: 'string' },
-          json: { type: 'boolean' },
-          format: { type: 'string' },
-          'latency-budget': { type: 'string' },
-        },
-      });
-    } catch (e) {
-      throw new UsageError(e instanceof Error ? e.message : String(e), 'run "netbrace metrics --help" for the options');
-    }
+    const parsed = parseCommandArgs('metrics', args, {
+      only: { type: 'string' },
+      json: { type: 'boolean' },
+      format: { type: 'string' },
+      'latency-budget': { type: 'string' },
+    });
     if (parsed.positionals.length !== 1) {
       throw new UsageError('metrics needs exactly one FILE', 'netbrace metrics designs/core.net.yaml');
     }
