@@ -18576,14 +18576,16 @@ var init_dense_spectrum = __esm({
 });
 
 // src/metrics/kernels/hash-noise.ts
-function hash32(a, b) {
-  let h = Math.imul(a ^ 2654435769, 2246822507) ^ Math.imul(b + 1663821227, 3266489909);
+function mix32(h) {
   h ^= h >>> 16;
   h = Math.imul(h, 2246822507);
   h ^= h >>> 13;
   h = Math.imul(h, 3266489909);
   h ^= h >>> 16;
   return h >>> 0;
+}
+function hash32(a, b) {
+  return mix32(Math.imul(a ^ 2654435769, 2246822507) ^ Math.imul(b + 1663821227, 3266489909));
 }
 function noise(a, b) {
   return hash32(a, b) / 2147483648 - 1;
@@ -23038,14 +23040,6 @@ var init_link_betweenness = __esm({
 });
 
 // src/envelope/rng.ts
-function mix32(h) {
-  h ^= h >>> 16;
-  h = Math.imul(h, 2246822507);
-  h ^= h >>> 13;
-  h = Math.imul(h, 3266489909);
-  h ^= h >>> 16;
-  return h >>> 0;
-}
 function hashString(s, seed) {
   let h = seed >>> 0;
   for (let i = 0; i < s.length; i++) {
@@ -23123,6 +23117,7 @@ var Xoshiro128;
 var init_rng = __esm({
   "src/envelope/rng.ts"() {
     "use strict";
+    init_hash_noise();
     Xoshiro128 = class {
       a;
       b;
@@ -29606,7 +29601,6 @@ Reports written to ${dir}
 });
 
 // src/shell/commands/metrics.ts
-import { parseArgs as parseArgs2 } from "node:util";
 function computeMetrics(g, selected, options = {}) {
   const mask = createMask(g);
   const out = { nodes: g.n, links: g.m, metrics: {} };
@@ -29641,6 +29635,7 @@ var HELP7, NOTE2, metricsCommand;
 var init_metrics = __esm({
   "src/shell/commands/metrics.ts"() {
     "use strict";
+    init_args();
     init_errors();
     init_compact();
     init_mask();
@@ -29680,22 +29675,12 @@ Exit codes: 0 computed, 1 the design could not be read, 2 usage error.
       summary: "compute the robustness metrics of one design (raw and normalised)",
       help: HELP7,
       async run(args, io) {
-        let parsed;
-        try {
-          parsed = parseArgs2({
-            args,
-            allowPositionals: true,
-            strict: true,
-            options: {
-              only: { type: "string" },
-              json: { type: "boolean" },
-              format: { type: "string" },
-              "latency-budget": { type: "string" }
-            }
-          });
-        } catch (e) {
-          throw new UsageError(e instanceof Error ? e.message : String(e), 'run "netbrace metrics --help" for the options');
-        }
+        const parsed = parseCommandArgs("metrics", args, {
+          only: { type: "string" },
+          json: { type: "boolean" },
+          format: { type: "string" },
+          "latency-budget": { type: "string" }
+        });
         if (parsed.positionals.length !== 1) {
           throw new UsageError("metrics needs exactly one FILE", "netbrace metrics designs/core.net.yaml");
         }

@@ -417,7 +417,7 @@ var linkBetweennessAdaptive = {
   sequence: (g, steps) => adaptiveLinkBetweennessOrder(g, steps)
 };
 
-// src/envelope/rng.ts
+// src/metrics/kernels/hash-noise.ts
 function mix32(h) {
   h ^= h >>> 16;
   h = Math.imul(h, 2246822507);
@@ -426,6 +426,17 @@ function mix32(h) {
   h ^= h >>> 16;
   return h >>> 0;
 }
+function hash32(a, b) {
+  return mix32(Math.imul(a ^ 2654435769, 2246822507) ^ Math.imul(b + 1663821227, 3266489909));
+}
+function noise(a, b) {
+  return hash32(a, b) / 2147483648 - 1;
+}
+function sign(a, b) {
+  return hash32(a, b) & 1 ? 1 : -1;
+}
+
+// src/envelope/rng.ts
 function hashString(s, seed) {
   let h = seed >>> 0;
   for (let i = 0; i < s.length; i++) {
@@ -1036,23 +1047,6 @@ function createDenseSpectrum(limit) {
     /** Adjacency eigenvalues, ascending, in the first g.n entries (shared buffer). */
     adjacency: (g) => run(g, false)
   };
-}
-
-// src/metrics/kernels/hash-noise.ts
-function hash32(a, b) {
-  let h = Math.imul(a ^ 2654435769, 2246822507) ^ Math.imul(b + 1663821227, 3266489909);
-  h ^= h >>> 16;
-  h = Math.imul(h, 2246822507);
-  h ^= h >>> 13;
-  h = Math.imul(h, 3266489909);
-  h ^= h >>> 16;
-  return h >>> 0;
-}
-function noise(a, b) {
-  return hash32(a, b) / 2147483648 - 1;
-}
-function sign(a, b) {
-  return hash32(a, b) & 1 ? 1 : -1;
 }
 
 // src/metrics/kernels/lanczos.ts
