@@ -23,7 +23,7 @@ import { readDesign } from '../../src/shell/read-design.js';
 import type { Topology } from '../../src/topology/model.js';
 
 const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..', '..');
-const zooDir = path.resolve(root, '..', 'shared', 'datasets', 'topology-zoo', 'gml');
+const zooDir = path.resolve(root, 'fixtures', 'topology-zoo', 'gml');
 
 interface BenchGraph {
   n: number;

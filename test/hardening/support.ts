@@ -13,7 +13,7 @@ import { main } from '../../src/shell/cli.js';
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 
 /** The Internet Topology Zoo (Knight et al., IEEE JSAC 29(9):1765–1775, 2011; CC BY 4.0). */
-export const ZOO = path.resolve(repoRoot, '..', 'shared', 'datasets', 'topology-zoo');
+export const ZOO = path.resolve(repoRoot, 'fixtures', 'topology-zoo');
 
 /** One fixed seed for every property in the suite (fast-check replays it exactly). */
 export const SEED = 20_240_817;

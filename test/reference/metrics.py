@@ -23,7 +23,7 @@ under netbrace's definitions (README "Metrics"), each computed here by the named
 Graphs: the karate club, Les Misérables and Florentine families graphs shipped with
 networkx (weights stripped: SCIENCE.md §4's pitfall), networks of the Internet Topology Zoo
 (S. Knight et al., IEEE JSAC 29(9):1765, 2011, CC BY 4.0) read from
-../shared/datasets/topology-zoo/gml and collapsed to simple graphs (parallel links merged,
+fixtures/topology-zoo/gml (copied from the dataset, CC BY 4.0) and collapsed to simple graphs (parallel links merged,
 self-loops dropped: netbrace's spectral and hop metrics use the simple graph), and seeded
 Erdős–Rényi, Barabási–Albert, Watts–Strogatz and random geometric graphs.
 """
@@ -40,7 +40,7 @@ import networkx as nx
 import numpy as np
 
 ROOT = os.path.dirname(os.path.dirname(os.path.dirname(os.path.abspath(__file__))))
-ZOO = os.path.join(os.path.dirname(ROOT), "shared", "datasets", "topology-zoo", "gml")
+ZOO = os.path.join(ROOT, "fixtures", "topology-zoo", "gml")
 EARTH_KM = 6371.0088
 FIBRE_MS_PER_KM = 0.0049
 

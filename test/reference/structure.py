@@ -30,7 +30,7 @@ import sys
 import networkx as nx
 
 REPO = os.path.dirname(os.path.dirname(os.path.dirname(os.path.abspath(__file__))))
-ZOO = os.path.join(REPO, "..", "shared", "datasets", "topology-zoo", "gml")
+ZOO = os.path.join(REPO, "fixtures", "topology-zoo", "gml")
 
 
 def structure(G):

@@ -30,7 +30,7 @@ const ref = JSON.parse(readFileSync(path.join(repoRoot, 'test', 'reference', 'st
   zoo_unreadable_by_networkx: unknown[];
   generated: (Facts & { name: string; n: number; edges: [number, number][] })[];
 };
-const ZOO = path.resolve(repoRoot, '..', 'shared', 'datasets', 'topology-zoo', 'gml');
+const ZOO = path.resolve(repoRoot, 'fixtures', 'topology-zoo', 'gml');
 
 /** The same facts, computed by netbrace, in the reference's shape. */
 function facts(g: CompactGraph): Facts {

@@ -10,7 +10,7 @@ import { parseDesign } from '../../src/topology/parse.js';
 import type { Topology } from '../../src/topology/model.js';
 import { repoRoot } from './helpers.js';
 
-const ZOO = path.resolve(repoRoot, '..', 'shared', 'datasets', 'topology-zoo');
+const ZOO = path.resolve(repoRoot, 'fixtures', 'topology-zoo');
 
 /**
  * Networks whose GML and GraphML copies differ in node or link count, with the reason.
@@ -31,7 +31,7 @@ function load(format: 'gml' | 'graphml', file: string): { t: Topology; text: str
 }
 
 describe('Internet Topology Zoo', () => {
-  it('the dataset is where the tests expect it (../shared/datasets/topology-zoo from the repository root)', () => {
+  it('the dataset is where the tests expect it (fixtures/topology-zoo, copied with its licence and attribution)', () => {
     expect(existsSync(path.join(ZOO, 'gml')), ZOO).toBe(true);
     expect(existsSync(path.join(ZOO, 'graphml')), ZOO).toBe(true);
   });
