@@ -35,6 +35,9 @@ export interface AnnotationOptions {
   changedLines?: ReadonlyMap<string, ReadonlySet<number>>;
   /** Where the rest can be read, for the closing notice. */
   elsewhere?: string;
+  /** Error slots kept free for the step's own failure message (core.setFailed is an error
+   *  annotation too: with 10 finding errors beside it GitHub dropped one). */
+  reservedErrors?: number;
 }
 
 export interface AnnotationPlan {
@@ -103,8 +106,10 @@ export function planAnnotations(report: Report, options: AnnotationOptions = {})
   const taken: Annotation[] = [];
   const used: Record<AnnotationLevel, number> = { error: 0, warning: 0, notice: 0 };
   // If anything is left out, the last notice slot is the closing notice.
-  const fitsAll = (['error', 'warning', 'notice'] as AnnotationLevel[]).every((l) => all.filter((a) => a.level === l).length <= perLevel);
-  const cap: Record<AnnotationLevel, number> = { error: perLevel, warning: perLevel, notice: fitsAll ? perLevel : perLevel - 1 };
+  const errorCap = Math.max(0, perLevel - (options.reservedErrors ?? 0));
+  const capOf = (l: AnnotationLevel) => (l === 'error' ? errorCap : perLevel);
+  const fitsAll = (['error', 'warning', 'notice'] as AnnotationLevel[]).every((l) => all.filter((a) => a.level === l).length <= capOf(l));
+  const cap: Record<AnnotationLevel, number> = { error: errorCap, warning: perLevel, notice: fitsAll ? perLevel : perLevel - 1 };
   for (const a of all) {
     if (used[a.level] < cap[a.level]) {
       taken.push(a);

@@ -125,6 +125,13 @@ export function findingFingerprint(path: string, x: Finding): string {
 }
 
 
+/** The key our finding ids carry under a result's `fingerprints` (versioned, our own). */
+export const FINGERPRINT_KEY = 'netbraceFinding/v1';
+
+function instanceOf(report: Report): string {
+  return (report.head ?? 'worktree').replace(/[^A-Za-z0-9._-]/g, '-') || 'worktree';
+}
+
 function uriOf(path: string): string {
   return path.split('/').map(encodeURIComponent).join('/');
 }
@@ -184,7 +191,10 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
         level: LEVEL[x.severity],
         message: { text: nonEmpty(`${x.message}${findingNumbers(x, 'delta')}`, RULES[x.rule].short) },
         locations: [{ physicalLocation: { artifactLocation: { uri: uriOf(path) }, region } }],
-        partialFingerprints: { primaryLocationLineHash: `${base}:${occurrence}` },
+        // Our id is a hash of rule, path, requirement and elements, not of the line's text, so
+        // it goes under the standard `fingerprints` with a key of our own; code scanning fills
+        // partialFingerprints.primaryLocationLineHash (a hash of the line) itself.
+        fingerprints: { [FINGERPRINT_KEY]: `${base}:${occurrence}` },
         properties,
       });
     }
@@ -204,7 +214,9 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
             rules,
           },
         },
-        automationDetails: { id: `${category}/` },
+        // "category/instance" (SARIF 2.1.0 §3.17.4; code scanning reads the category as
+        // everything before the last slash): the instance is the head revision judged.
+        automationDetails: { id: `${category}/${instanceOf(report)}` },
         results,
         properties: runProperties,
       },

@@ -507,7 +507,9 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     // Annotations (the merge job emits those of every shard; a shard job leaves them to it).
     if (!shardJob) {
       const elsewhere = sarifPath ? `the job summary and ${sarifPath}` : 'the job summary and the JSON report';
-      const plan = planAnnotations(report, { changedLines: lines, elsewhere });
+      // A failing step also logs its setFailed message as an error annotation: keep a slot for it.
+      const reservedErrors = report.verdict === 'fail' && report.mode === 'enforce' ? 1 : 0;
+      const plan = planAnnotations(report, { changedLines: lines, elsewhere, reservedErrors });
       for (const a of plan.annotations) deps.out.annotate(a);
     }
 

@@ -118,28 +118,49 @@ export interface FoundComment {
   url?: string;
 }
 
+/** The login GitHub gives the workflow's own token (GITHUB_TOKEN), documented by GitHub. */
+export const WORKFLOW_TOKEN_LOGIN = 'github-actions[bot]';
+
 /**
- * The comment on the issue whose body contains `marker` (every page is read). Anyone can paste
- * the marker into a comment of their own, so a comment written by a bot account (the workflow
- * token's github-actions[bot], or an app) is preferred over the first match.
+ * The login the token acts as: GET /user answers for personal and user tokens; the workflow
+ * token and app installation tokens are refused there (401/403/404), and the workflow token's
+ * comments are written by github-actions[bot]. A failure of another kind is thrown.
  */
-export async function findComment(client: Client, ref: IssueRef, marker: string): Promise<FoundComment | undefined> {
+export async function tokenLogin(client: Client): Promise<string> {
+  try {
+    const res = await client.rest.users.getAuthenticated();
+    if (typeof res.data.login === 'string' && res.data.login !== '') return res.data.login;
+    return WORKFLOW_TOKEN_LOGIN;
+  } catch (e) {
+    const status = (e as { status?: number } | null)?.status;
+    if (status === 401 || status === 403 || status === 404) return WORKFLOW_TOKEN_LOGIN;
+    throw e;
+  }
+}
+
+/**
+ * Our comment on the issue: the first whose body contains `marker` and whose author is the
+ * identity the token acts as (every page is read). Anyone can paste the marker into a comment
+ * of their own; such a comment is never adopted, so it is never edited. The token's identity
+ * is asked for only when some comment carries the marker.
+ */
+export async function findComment(client: Client, ref: IssueRef, marker: string, login?: () => Promise<string>): Promise<FoundComment | undefined> {
   const iterator = client.paginate.iterator(client.rest.issues.listComments, {
     owner: ref.owner,
     repo: ref.repo,
     issue_number: ref.issueNumber,
     per_page: 100,
   });
-  let first: FoundComment | undefined;
+  const marked: { found: FoundComment; author: string }[] = [];
   for await (const page of iterator) {
     for (const c of page.data) {
       if (typeof c.body !== 'string' || !c.body.includes(marker)) continue;
-      const found = { id: c.id, body: c.body, url: c.html_url };
-      if (c.user?.type === 'Bot') return found;
-      first ??= found;
+      marked.push({ found: { id: c.id, body: c.body, url: c.html_url }, author: c.user?.login ?? '' });
     }
   }
-  return first;
+  if (marked.length === 0) return undefined;
+  const me = await (login ?? (() => tokenLogin(client)))();
+  return marked.find((m) => m.author === me)?.found;
 }
 
 export type CommentAction = 'created' | 'updated' | 'unchanged' | 'skipped';

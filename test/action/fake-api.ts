@@ -34,6 +34,8 @@ export interface FakeApi {
   reads: Failure;
   writes: Failure;
   failFirst: number;
+  /** The login GET /user answers (a personal token); unset: 403, as for the workflow token. */
+  tokenUser?: string;
   close(): Promise<void>;
 }
 
@@ -104,10 +106,14 @@ export async function startFakeApi(): Promise<FakeApi> {
       const write = req.method === 'POST' || req.method === 'PATCH';
       if (fail(res, write ? api.writes : api.reads)) return;
       let m: RegExpMatchArray | null;
+      if (u.pathname === '/user' && req.method === 'GET') {
+        if (api.tokenUser === undefined) return send(res, 403, { message: 'Resource not accessible by integration' });
+        return send(res, 200, { login: api.tokenUser, type: 'User' });
+      }
       if ((m = u.pathname.match(/^\/repos\/[^/]+\/[^/]+\/issues\/(\d+)\/comments$/))) {
         if (req.method === 'GET') return paginate(req, res, api.comments, query);
         if (req.method === 'POST') {
-          const c = { id: nextId++, body: String((body as { body: string }).body), user: { login: 'github-actions[bot]', type: 'Bot' } };
+          const c = { id: nextId++, body: String((body as { body: string }).body), user: api.tokenUser !== undefined ? { login: api.tokenUser, type: 'User' } : { login: 'github-actions[bot]', type: 'Bot' } };
           api.comments.push(c);
           return send(res, 201, { ...c, html_url: `${api.url}/comment/${c.id}` });
         }

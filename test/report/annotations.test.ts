@@ -45,6 +45,15 @@ describe('annotations', () => {
     expect(last.message).toContain('the job summary and the SARIF file');
   });
 
+  it('keeps an error slot free for the step\u2019s own failure message, so at most 10 errors reach GitHub in all', () => {
+    // GitHub keeps 10 error annotations per step (shared ACTIONS limits, documented by GitHub);
+    // core.setFailed logs one more error, so a failing run may annotate 9 findings as errors.
+    const plan = planAnnotations(hugeReport(20, 30), { reservedErrors: 1 });
+    expect(plan.annotations.filter((a) => a.level === 'error').length).toBe(9);
+    expect(plan.omitted).toBe(600 - 28);
+    expect(plan.annotations.at(-1)?.rule).toBe('more');
+  });
+
   it('prefixes the working directory and never points at line 0', () => {
     const r = sampleReport();
     r.files[1].findings[1].line = 0;

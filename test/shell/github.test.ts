@@ -40,9 +40,25 @@ describe('the living comment', () => {
     expect(third.action).toBe('unchanged');
   }, 20_000);
 
-  it('prefers its own (bot) comment over a pasted copy of the marker', async () => {
+  it('adopts only a comment written by the identity the token acts as, never a pasted copy of the marker', async () => {
     api.comments.push({ id: 1, body: `${marker}\nfake, pasted by someone`, user: { login: 'someone', type: 'User' } });
-    api.comments.push({ id: 2, body: `${marker}\nreal`, user: { login: 'github-actions[bot]', type: 'Bot' } });
+    api.comments.push({ id: 2, body: `${marker}\nanother bot's`, user: { login: 'other-app[bot]', type: 'Bot' } });
+    api.comments.push({ id: 3, body: `${marker}\nreal`, user: { login: 'github-actions[bot]', type: 'Bot' } });
+    expect((await findComment(client(), ref, marker))?.id).toBe(3);
+  });
+
+  it('never edits a person\u2019s comment that quotes the marker: creates its own instead', async () => {
+    api.comments.push({ id: 1, body: `> ${marker}\nquoted by a reviewer`, user: { login: 'reviewer', type: 'User' } });
+    const r = await upsertComment(client(), ref, marker, `${marker}\nours`);
+    expect(r.action).toBe('created');
+    expect(api.comments.find((c) => c.id === 1)?.body).toBe(`> ${marker}\nquoted by a reviewer`);
+    expect(api.requests.some((x) => x.method === 'PATCH')).toBe(false);
+  });
+
+  it('with a personal token, adopts the comment of the user GET /user names', async () => {
+    api.tokenUser = 'planner-bot';
+    api.comments.push({ id: 1, body: `${marker}\nby the workflow token`, user: { login: 'github-actions[bot]', type: 'Bot' } });
+    api.comments.push({ id: 2, body: `${marker}\nours`, user: { login: 'planner-bot', type: 'User' } });
     expect((await findComment(client(), ref, marker))?.id).toBe(2);
   });
 
