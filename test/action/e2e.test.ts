@@ -14,8 +14,10 @@ import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from
 import { commentMarker } from '../../src/report/markdown.js';
 import { inShard } from '../../src/run-gate.js';
 import { startFakeApi, type FakeApi } from './fake-api.js';
+import { execFileSync } from 'node:child_process';
 import {
   actionDefaults,
+  actionNode,
   buildBundle,
   commands,
   commit,
@@ -192,6 +194,15 @@ function failedMessages(r: RunResult): string[] {
   // core.setFailed writes one ::error:: without properties.
   return commands(r.stdout, 'error').filter((c) => Object.keys(c.props).length === 0).map((c) => c.message);
 }
+
+describe('the runtime', () => {
+  it('the bundle runs under the Node.js action.yml declares when CI provides it, else under this process\u2019s', () => {
+    const declared = (parseYaml(readFileSync(path.join(repoRoot, 'action.yml'), 'utf8')) as { runs: { using: string } }).runs.using;
+    const version = execFileSync(actionNode(), ['--version'], { encoding: 'utf8' }).trim();
+    if (process.env.NETBRACE_ACTION_NODE) expect(`node${version.replace(/^v(\d+).*$/, '$1')}`).toBe(declared);
+    else expect(version).toBe(process.version);
+  });
+});
 
 describe('the README workflow is what the Action accepts', () => {
   it('every input the README uses is declared in action.yml, and permissions are minimal', () => {

