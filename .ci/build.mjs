@@ -1,7 +1,9 @@
 // Bundles the two entries into dist/ with esbuild. The output must be byte-stable
 // (CI rebuilds it and fails on any diff), so no timestamps, no absolute paths.
 import { build } from 'esbuild';
-import { copyFileSync, existsSync, mkdirSync } from 'node:fs';
+import { execFileSync } from 'node:child_process';
+import { copyFileSync, existsSync, mkdirSync, rmSync } from 'node:fs';
+import { createRequire } from 'node:module';
 
 const banner = {
   // Some CommonJS dependencies call require(); give the ESM bundle one.
@@ -27,6 +29,15 @@ await build({
   outfile: 'dist/cli.js',
   banner: { js: '#!/usr/bin/env node\n' + banner.js },
 });
+// The library API (`import … from 'netbrace'`): graphology stays external, so the graphs it
+// returns and takes are the caller's own graphology's.
+if (existsSync('src/api/index.ts')) {
+  await build({ ...common, entryPoints: ['src/api/index.ts'], outfile: 'dist/api.js', banner, external: ['graphology'] });
+  // Its type declarations, generated from the sources (tsc is deterministic).
+  rmSync('dist/types', { recursive: true, force: true });
+  const tsc = createRequire(import.meta.url).resolve('typescript/bin/tsc');
+  execFileSync(process.execPath, [tsc, '-p', 'tsconfig.api.json'], { stdio: 'inherit' });
+}
 // The worker pool's thread entry is bundled on its own; the pool loads it beside cli/index.
 if (existsSync('src/parallel/worker.ts')) {
   await build({ ...common, entryPoints: ['src/parallel/worker.ts'], outfile: 'dist/worker.js', banner });

@@ -27899,6 +27899,9 @@ var init_markdown = __esm({
 function findingFingerprint(path7, x) {
   return stableHash([x.rule, path7, x.requirement ?? "", ...x.elements.map((e) => `${e.kind}:${e.id}`)].join("\0"));
 }
+function instanceOf(report) {
+  return (report.head ?? "worktree").replace(/[^A-Za-z0-9._-]/g, "-") || "worktree";
+}
 function uriOf(path7) {
   return path7.split("/").map(encodeURIComponent).join("/");
 }
@@ -27949,7 +27952,10 @@ ${r.help}` },
         level: LEVEL[x.severity],
         message: { text: nonEmpty(`${x.message}${findingNumbers(x, "delta")}`, RULES[x.rule].short) },
         locations: [{ physicalLocation: { artifactLocation: { uri: uriOf(path7) }, region } }],
-        partialFingerprints: { primaryLocationLineHash: `${base}:${occurrence}` },
+        // Our id is a hash of rule, path, requirement and elements, not of the line's text, so
+        // it goes under the standard `fingerprints` with a key of our own; code scanning fills
+        // partialFingerprints.primaryLocationLineHash (a hash of the line) itself.
+        fingerprints: { [FINGERPRINT_KEY]: `${base}:${occurrence}` },
         properties
       });
     }
@@ -27969,14 +27975,16 @@ ${r.help}` },
             rules
           }
         },
-        automationDetails: { id: `${category}/` },
+        // "category/instance" (SARIF 2.1.0 §3.17.4; code scanning reads the category as
+        // everything before the last slash): the instance is the head revision judged.
+        automationDetails: { id: `${category}/${instanceOf(report)}` },
         results,
         properties: runProperties
       }
     ]
   };
 }
-var SARIF_SCHEMA_URI, SARIF_MAX_RESULTS, RULES, LEVEL, RULE_IDS;
+var SARIF_SCHEMA_URI, SARIF_MAX_RESULTS, RULES, LEVEL, RULE_IDS, FINGERPRINT_KEY;
 var init_sarif = __esm({
   "src/report/sarif.ts"() {
     "use strict";
@@ -28062,6 +28070,7 @@ var init_sarif = __esm({
     };
     LEVEL = { fail: "error", warn: "warning", notice: "note" };
     RULE_IDS = Object.keys(RULES);
+    FINGERPRINT_KEY = "netbraceFinding/v1";
   }
 });
 

@@ -48325,8 +48325,10 @@ function planAnnotations(report, options = {}) {
   const all = annotationsOf(report, options);
   const taken = [];
   const used = { error: 0, warning: 0, notice: 0 };
-  const fitsAll = ["error", "warning", "notice"].every((l) => all.filter((a) => a.level === l).length <= perLevel);
-  const cap = { error: perLevel, warning: perLevel, notice: fitsAll ? perLevel : perLevel - 1 };
+  const errorCap = Math.max(0, perLevel - (options.reservedErrors ?? 0));
+  const capOf = (l) => l === "error" ? errorCap : perLevel;
+  const fitsAll = ["error", "warning", "notice"].every((l) => all.filter((a) => a.level === l).length <= capOf(l));
+  const cap = { error: errorCap, warning: perLevel, notice: fitsAll ? perLevel : perLevel - 1 };
   for (const a of all) {
     if (used[a.level] < cap[a.level]) {
       taken.push(a);
@@ -48856,6 +48858,10 @@ var RULE_IDS = Object.keys(RULES);
 function findingFingerprint(path3, x) {
   return stableHash([x.rule, path3, x.requirement ?? "", ...x.elements.map((e) => `${e.kind}:${e.id}`)].join("\0"));
 }
+var FINGERPRINT_KEY = "netbraceFinding/v1";
+function instanceOf(report) {
+  return (report.head ?? "worktree").replace(/[^A-Za-z0-9._-]/g, "-") || "worktree";
+}
 function uriOf(path3) {
   return path3.split("/").map(encodeURIComponent).join("/");
 }
@@ -48906,7 +48912,10 @@ ${r.help}` },
         level: LEVEL2[x.severity],
         message: { text: nonEmpty(`${x.message}${findingNumbers(x, "delta")}`, RULES[x.rule].short) },
         locations: [{ physicalLocation: { artifactLocation: { uri: uriOf(path3) }, region } }],
-        partialFingerprints: { primaryLocationLineHash: `${base}:${occurrence}` },
+        // Our id is a hash of rule, path, requirement and elements, not of the line's text, so
+        // it goes under the standard `fingerprints` with a key of our own; code scanning fills
+        // partialFingerprints.primaryLocationLineHash (a hash of the line) itself.
+        fingerprints: { [FINGERPRINT_KEY]: `${base}:${occurrence}` },
         properties
       });
     }
@@ -48926,7 +48935,9 @@ ${r.help}` },
             rules
           }
         },
-        automationDetails: { id: `${category}/` },
+        // "category/instance" (SARIF 2.1.0 §3.17.4; code scanning reads the category as
+        // everything before the last slash): the instance is the head revision judged.
+        automationDetails: { id: `${category}/${instanceOf(report)}` },
         results,
         properties: runProperties
       }
@@ -53468,23 +53479,35 @@ function createClient(options) {
     throttling
   );
 }
-async function findComment(client, ref, marker) {
+var WORKFLOW_TOKEN_LOGIN = "github-actions[bot]";
+async function tokenLogin(client) {
+  try {
+    const res = await client.rest.users.getAuthenticated();
+    if (typeof res.data.login === "string" && res.data.login !== "") return res.data.login;
+    return WORKFLOW_TOKEN_LOGIN;
+  } catch (e) {
+    const status = e?.status;
+    if (status === 401 || status === 403 || status === 404) return WORKFLOW_TOKEN_LOGIN;
+    throw e;
+  }
+}
+async function findComment(client, ref, marker, login) {
   const iterator2 = client.paginate.iterator(client.rest.issues.listComments, {
     owner: ref.owner,
     repo: ref.repo,
     issue_number: ref.issueNumber,
     per_page: 100
   });
-  let first;
+  const marked = [];
   for await (const page of iterator2) {
     for (const c of page.data) {
       if (typeof c.body !== "string" || !c.body.includes(marker)) continue;
-      const found = { id: c.id, body: c.body, url: c.html_url };
-      if (c.user?.type === "Bot") return found;
-      first ??= found;
+      marked.push({ found: { id: c.id, body: c.body, url: c.html_url }, author: c.user?.login ?? "" });
     }
   }
-  return first;
+  if (marked.length === 0) return void 0;
+  const me = await (login ?? (() => tokenLogin(client)))();
+  return marked.find((m) => m.author === me)?.found;
 }
 async function upsertComment(client, ref, marker, body, decide = () => true) {
   if (!body.includes(marker)) throw new Error("the comment body must contain its marker");
@@ -53962,7 +53985,8 @@ async function run(env, deps) {
     }
     if (!shardJob) {
       const elsewhere = sarifPath ? `the job summary and ${sarifPath}` : "the job summary and the JSON report";
-      const plan = planAnnotations(report, { changedLines: lines, elsewhere });
+      const reservedErrors = report.verdict === "fail" && report.mode === "enforce" ? 1 : 0;
+      const plan = planAnnotations(report, { changedLines: lines, elsewhere, reservedErrors });
       for (const a of plan.annotations) deps.out.annotate(a);
     }
     let comment = "not-applicable";

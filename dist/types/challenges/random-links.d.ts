@@ -1,0 +1,2 @@
+import type { BandChallenge } from './types.js';
+export declare const randomLinks: BandChallenge;

@@ -1,0 +1,83 @@
+import type { CompactGraph } from '../graph/compact.js';
+import type { BandPlan, ResolvedParams } from '../challenges/types.js';
+import type { Contingency, ElementKind, RValueSpec, WorstCase } from './types.js';
+import { type RFunction } from './r-value.js';
+/**
+ * Realizations per band task: about 32 tasks per band (so two or four threads stay evenly
+ * loaded), at most 16 realizations each. It depends on M only, never on the thread count —
+ * part of what makes results thread-count independent.
+ */
+export declare function chunkSize(realizations: number): number;
+export interface PlannedChallenge {
+    params: ResolvedParams;
+    type: 'band' | 'attack' | 'contingency';
+    /** Contingency cases to evaluate at most. */
+    maxCases: number;
+    /** Worst-case search: largest exact enumeration allowed (0 = never exact), and beam width. */
+    exactLimit: number;
+    beam: number;
+    /** Why this challenge was reduced, when it was. */
+    degraded?: string;
+}
+export interface EvaluationPlan {
+    r: RValueSpec;
+    items: PlannedChallenge[];
+    /** Reasons the evaluation as a whole was reduced or challenges skipped. */
+    degraded: string[];
+    /** Estimated work in element visits after any reduction (see evaluate.ts). */
+    work: number;
+}
+export type Task = {
+    type: 'band';
+    item: number;
+    from: number;
+    to: number;
+} | {
+    type: 'attack';
+    item: number;
+} | {
+    type: 'contingency';
+    item: number;
+} | {
+    type: 'worst';
+    item: number;
+};
+export type TaskResult = {
+    type: 'band';
+    values: Float64Array[];
+} | {
+    type: 'attack';
+    sequence: Int32Array;
+    values: Float64Array;
+} | {
+    type: 'contingency';
+    result: Contingency;
+} | {
+    type: 'worst';
+    result: WorstCase;
+};
+export declare function planTasks(plan: EvaluationPlan, g: CompactGraph): Task[];
+/** Realizations a band item runs: the requested count, or one per epicentre for regional. */
+export declare function realizationCount(g: CompactGraph, it: PlannedChallenge): number;
+export declare function bandPlan(g: CompactGraph, params: ResolvedParams): BandPlan;
+/** The unit kind a challenge removes. */
+export declare function challengeKind(g: CompactGraph, params: ResolvedParams): ElementKind;
+/** Steps of an attack: round(until · count), capped by what may be removed. */
+export declare function attackSteps(g: CompactGraph, kind: ElementKind, until: number): number;
+/** Evaluates R along one removal order at the given step counts (non-decreasing). */
+export declare class StepEvaluator {
+    private readonly g;
+    private readonly rfn;
+    private readonly ufr;
+    private readonly ws;
+    private readonly mask;
+    constructor(g: CompactGraph, spec: RValueSpec);
+    get r(): RFunction;
+    /** True when every step is free (union–find curve). */
+    get stepsAreFree(): boolean;
+    /** R after steps[j] units of `order` are removed, for each j. */
+    at(kind: ElementKind, order: ArrayLike<number>, len: number, steps: ArrayLike<number>, out: Float64Array): Float64Array;
+    /** R after every step k = 0..len. */
+    everyStep(kind: ElementKind, order: ArrayLike<number>, len: number): Float64Array;
+}
+export declare function runTask(g: CompactGraph, plan: EvaluationPlan, task: Task): TaskResult;

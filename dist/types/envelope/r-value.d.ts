@@ -1,0 +1,22 @@
+import type { CompactGraph } from '../graph/compact.js';
+import type { Mask } from '../graph/mask.js';
+import type { MetricOptions } from '../metrics/types.js';
+import type { RValueSpec } from './types.js';
+import type { ConnectivityCurve } from './union-find.js';
+export type RFunction = (mask: Mask) => number;
+export declare function validateRSpec(spec: RValueSpec): void;
+/** Combines normalized values in spec order; the one formula every path uses, so results agree bit for bit. */
+export declare function combineR(spec: RValueSpec, values: ArrayLike<number>): number;
+export declare function createRValue(g: CompactGraph, spec: RValueSpec, options?: MetricOptions): RFunction;
+/**
+ * When R uses only largest_component and pair_connectivity, R after k removals follows from a
+ * union–find curve (union-find.ts) with no per-step recomputation: returns that mapping, with
+ * exactly the normalisations of the registry metrics. Otherwise null.
+ */
+export declare function unionFindR(g: CompactGraph, spec: RValueSpec): ((curve: ConnectivityCurve, k: number) => number) | null;
+/**
+ * Work of one evaluation of R in "graph passes" (one pass visits every node and link once):
+ * linear metrics 1, all-pairs metrics N (one search per node), spectral 50 (a few dozen
+ * sparse products), flow N. The engine's budget multiplies passes by N + L.
+ */
+export declare function rPasses(g: CompactGraph, spec: RValueSpec): number;

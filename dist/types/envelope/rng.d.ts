@@ -1,0 +1,39 @@
+import { mix32 } from '../metrics/kernels/hash-noise.js';
+export { mix32 };
+/** A 32-bit hash of a string's UTF-16 code units (murmur3-style body, mix32 finaliser). */
+export declare function hashString(s: string, seed: number): number;
+/** Folds an arbitrary integer seed (up to 2^53) into 32 bits without losing its high part. */
+export declare function seedWord(seed: number): number;
+/** Stable per-element hashes, computed once per design: one 32-bit word per id. */
+export declare function hashIds(ids: readonly string[]): Uint32Array;
+/** The key of one element in one realization: hash(seed, realization, element id). */
+export declare function elementKey(seedW: number, realization: number, idHash: number): number;
+/** Scratch space of randomOrder for up to `capacity` elements. */
+export interface OrderWorkspace {
+    keys: Uint32Array;
+    keys2: Uint32Array;
+    idx2: Int32Array;
+    counts: Uint32Array;
+}
+export declare function createOrderWorkspace(capacity: number): OrderWorkspace;
+/**
+ * The random removal order of one realization: the eligible elements (eligible[i] === 1, or all
+ * when `eligible` is null) in ascending key order; equal keys (a 2^-32 event) keep file order.
+ * Writes into `out` and returns how many elements it holds. A stable LSD radix sort (11, 11 and
+ * 10 bits) keeps the cost linear: O(n) per realization instead of O(n log n).
+ */
+export declare function randomOrder(idHash: Uint32Array, eligible: Uint8Array | null, seedW: number, realization: number, out: Int32Array, ws?: OrderWorkspace): number;
+/** xoshiro128**: a fast 32-bit generator with a 2^128 − 1 period. */
+export declare class Xoshiro128 {
+    private a;
+    private b;
+    private c;
+    private d;
+    constructor(seed: number, stream?: number);
+    /** Next uniform 32-bit unsigned integer. */
+    nextUint32(): number;
+    /** Uniform in [0, 1) with 32 random bits. */
+    nextFloat(): number;
+    /** Uniform integer in [0, n), unbiased (rejection of the short tail). */
+    nextInt(n: number): number;
+}

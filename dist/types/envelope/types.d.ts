@@ -1,0 +1,127 @@
+import type { MetricId } from '../metrics/types.js';
+/** How normalized metrics combine into R. */
+export interface RValueSpec {
+    metrics: {
+        id: MetricId;
+        weight: number;
+    }[];
+    combine: 'mean' | 'min';
+}
+export type ChallengeName = 'random-nodes' | 'random-links' | 'degree' | 'degree-adaptive' | 'betweenness' | 'betweenness-adaptive' | 'eigenvector' | 'closeness' | 'link-betweenness' | 'link-betweenness-adaptive' | 'risk-groups' | 'risk-groups-worst' | 'regional' | 'n-1' | 'n-2';
+export type ElementKind = 'node' | 'link' | 'group';
+export interface ChallengeParams {
+    challenge: ChallengeName;
+    /** Upper end of the x axis: a fraction in (0, 1] for removal challenges, km for `regional`. */
+    until?: number;
+    /** Grid points on the x axis, 0 included. */
+    points?: number;
+    realizations?: number;
+    /** Quantiles of the band, e.g. [0.1, 0.9]. */
+    band?: [number, number];
+    seed?: number;
+    /** Length of the worst-case search (0 = none). */
+    worstCase?: number;
+    /** Beam width of the worst-case search beyond exact enumeration (1 = greedy, the default). */
+    beam?: number;
+    /** For n-1 / n-2: which kind of element. */
+    element?: 'node' | 'link';
+    threads?: number;
+    /** x values that must be grid points (policy thresholds), merged into the grid. */
+    at?: number[];
+}
+/** A removal sequence reported to the user: element ids in removal order. */
+export interface RemovalSequence {
+    kind: ElementKind;
+    elements: string[];
+    /** R after each step (same length as elements), or after the steps listed in `steps`. */
+    values: number[];
+    /**
+     * Removal counts at which `values` were taken, when R is costly per step (distance and
+     * spectral metrics are evaluated at grid points only). Absent: after every step.
+     */
+    steps?: number[];
+    /** Realization index for random challenges. */
+    realization?: number;
+    /** What the realization stands for, e.g. the epicentre site of a regional failure. */
+    label?: string;
+}
+export interface WorstCase extends RemovalSequence {
+    k: number;
+    method: 'exact' | 'greedy' | 'beam';
+}
+export interface QuantileBand {
+    /** Point estimate at each grid point. */
+    value: number[];
+    /** Distribution-free confidence interval from order statistics (SCIENCE.md §8). */
+    lo: number[];
+    hi: number[];
+    /** Standard error of the estimate at each grid point. */
+    se: number[];
+}
+/** A random challenge's envelope: a band over realizations (or epicentres). */
+export interface Envelope {
+    challenge: ChallengeName;
+    kind: ElementKind;
+    /** What the x axis counts: fraction of elements removed, or radius in km. */
+    xUnit: 'fraction' | 'km';
+    x: number[];
+    realizations: number;
+    seed: number;
+    band: [number, number];
+    min: number[];
+    max: number[];
+    mean: number[];
+    median: number[];
+    /** Keyed by the quantile as written, e.g. "0.1", "0.5", "0.9". */
+    quantiles: Record<string, QuantileBand>;
+    /** netbrace's own summaries (SCIENCE.md §2): mean of the median; mean band width. */
+    area: number;
+    spread: number;
+    /** The three weakest realizations with their removal sequences. */
+    weakest: RemovalSequence[];
+    worstCase?: WorstCase;
+    /**
+     * netbrace's attack gap (SCIENCE.md §2): mean over the grid of q_lo − R of the most harmful
+     * targeted attack of the same element kind in this evaluation; absent without such an attack.
+     */
+    attackGap?: {
+        value: number;
+        attack: ChallengeName;
+    };
+    /** Set when the engine had to reduce work (budgets); the report marks the result degraded. */
+    degraded?: string;
+}
+/** A deterministic challenge (targeted attack, worst-first groups): one curve. */
+export interface AttackCurve {
+    challenge: ChallengeName;
+    kind: ElementKind;
+    /** x = k / N (or L, or groups) for k = 0..K. */
+    x: number[];
+    values: number[];
+    sequence: string[];
+    /** Units the x axis divides by: N, L or the number of groups (always set by the engine). */
+    count?: number;
+    /** Mean of values[1..K] (Schneider's R when the attack runs to the end and R is the LCC share). */
+    area: number;
+    worstCase?: WorstCase;
+}
+/** N-1 / N-2: every single element (or pair), exhaustively within a budget. */
+export interface Contingency {
+    challenge: 'n-1' | 'n-2';
+    kind: 'node' | 'link';
+    /** Cases evaluated and cases that exist. */
+    evaluated: number;
+    total: number;
+    /** The worst cases, ascending by R. */
+    worst: {
+        elements: string[];
+        value: number;
+    }[];
+    /** Lowest R over evaluated cases. */
+    min: number;
+}
+/** A paired difference head − base with its standard error. */
+export interface PairedDelta {
+    delta: number;
+    se: number;
+}

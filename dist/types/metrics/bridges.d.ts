@@ -1,0 +1,1 @@
+export declare const bridges: import("./types.js").Metric;

@@ -1,0 +1,1 @@
+export declare const cutNodes: import("./types.js").Metric;

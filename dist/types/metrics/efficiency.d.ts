@@ -1,0 +1,2 @@
+import type { Metric } from './types.js';
+export declare const efficiency: Metric;

@@ -1,0 +1,2 @@
+import type { Requirement } from './types.js';
+export declare function requirementId(r: Requirement): string;

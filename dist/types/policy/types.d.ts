@@ -1,0 +1,208 @@
+import type { SourceLocation } from '../errors.js';
+import type { ChallengeName, ChallengeParams, RValueSpec } from '../envelope/types.js';
+import type { Severity } from '../report/report.js';
+import type { DesignFormat } from '../topology/model.js';
+export type { Severity };
+/** Where a definition was written. */
+export type Where = SourceLocation;
+/** What a challenge removes, in the policy's words. */
+export type RemoveWhat = 'nodes' | 'links' | 'risk-groups' | 'region';
+/** In which order, in the policy's words. */
+export type RemovalOrder = 'random' | 'degree' | 'betweenness' | 'eigenvector' | 'closeness' | 'worst-first';
+/** A challenge as the policy names it. `params` is handed to the engine (plus the grid's `at`). */
+export interface ChallengeDef {
+    /** The user's name for it (the key under `challenges:`); requirements refer to it. */
+    name: string;
+    remove: RemoveWhat;
+    order: RemovalOrder;
+    adaptive: boolean;
+    engine: ChallengeName;
+    /** Random challenges give envelopes (bands over realizations); the others one curve. */
+    random: boolean;
+    params: ChallengeParams;
+    where: Where;
+}
+/** The statistic of an envelope an r-threshold judges. */
+export type ThresholdStatistic = {
+    kind: 'quantile';
+    q: number;
+} | {
+    kind: 'median';
+} | {
+    kind: 'mean';
+} | {
+    kind: 'min';
+}
+/** R after the worst `removals` removals the worst-case search found. */
+ | {
+    kind: 'worst-case';
+    removals: number;
+}
+/** The one value of a deterministic curve (targeted attack). */
+ | {
+    kind: 'value';
+};
+interface RequirementBase {
+    /** Stable id, e.g. "r-threshold:random-failures@0.2:q0.1"; equal ids are the same floor. */
+    id: string;
+    severity: Severity;
+    where: Where;
+    /** Location of the value that a tightening is judged on (the `min` / `max` line). */
+    valueWhere: Where;
+}
+/** Where the `challenge:` reference was written. */
+interface ChallengeRef {
+    challenge: string;
+    challengeWhere: Where;
+}
+export interface ThresholdRequirement extends RequirementBase, ChallengeRef {
+    kind: 'r-threshold';
+    /** Removal fraction (or km for regional challenges); absent for worst-case. */
+    at?: number;
+    statistic: ThresholdStatistic;
+    min: number;
+}
+export interface AreaRequirement extends RequirementBase, ChallengeRef {
+    kind: 'area-floor';
+    /** Without a floor the area is only tracked (regressions are still judged). */
+    min?: number;
+}
+export interface SpreadRequirement extends RequirementBase, ChallengeRef {
+    kind: 'spread-ceiling';
+    max: number;
+}
+export interface ContingencyRequirement extends RequirementBase {
+    kind: 'n-1';
+    element: 'node' | 'link';
+    min: number;
+}
+export interface SpofRequirement extends RequirementBase {
+    kind: 'no-new-spof';
+    bridges: boolean;
+    cutNodes: boolean;
+}
+export type Requirement = ThresholdRequirement | AreaRequirement | SpreadRequirement | ContingencyRequirement | SpofRequirement;
+export type RequirementKind = Requirement['kind'];
+export interface RegressionRule {
+    /** Largest drop tolerated, in units of R (absolute). */
+    allowedDrop?: number;
+    /** Largest drop tolerated as a fraction of the base value. */
+    allowedRelativeDrop?: number;
+    /** A drop smaller than noiseFactor × se is Monte Carlo noise, never a failure. */
+    noiseFactor: number;
+    severity: Severity;
+    where: Where;
+    /** Per field, where it was written (for loosening errors). */
+    fieldWhere: Partial<Record<'allowedDrop' | 'allowedRelativeDrop' | 'noiseFactor' | 'severity', Where>>;
+}
+export type RemovedSeverity = Severity | 'ignore';
+export interface DesignGlob {
+    files: string[];
+    format?: DesignFormat;
+    where: Where;
+}
+/**
+ * The work budget of each design evaluation (head and base alike). Not a floor of the design,
+ * but the effort that judges the floors: an extending policy or an override may raise it,
+ * never lower it (a smaller budget turns judgements into "uncertain").
+ */
+export interface Budget {
+    /** Element visits (the engine's unit of work). */
+    work?: number;
+    /** Seconds, converted to element visits at a fixed rate (src/policy/budget.ts). */
+    seconds?: number;
+    where: Where;
+    fieldWhere: Partial<Record<'work' | 'seconds', Where>>;
+}
+/** A budget in force for one file: as written, and the element visits it allows. */
+export interface ResolvedBudget {
+    work?: number;
+    seconds?: number;
+    maxWork: number;
+}
+export interface Override {
+    files: string[];
+    requirements: Requirement[];
+    regression?: RegressionRule;
+    removedDesigns?: {
+        severity: RemovedSeverity;
+        where: Where;
+    };
+    budget?: Budget;
+    where: Where;
+}
+/** One policy file as written (before `extends` and overrides are applied). */
+export interface PolicyFile {
+    path: string;
+    extends?: {
+        path: string;
+        where: Where;
+    };
+    designs?: DesignGlob[];
+    ignore?: {
+        globs: string[];
+        where: Where;
+    };
+    seed?: {
+        value: number;
+        where: Where;
+    };
+    rValue?: {
+        spec: RValueSpec;
+        where: Where;
+    };
+    /** Undefined when the file leaves `challenges` out (then it inherits them). */
+    challenges?: ChallengeDef[];
+    /** Undefined when the file leaves `requirements` out. */
+    requirements?: Requirement[];
+    regression?: RegressionRule;
+    removedDesigns?: {
+        severity: RemovedSeverity;
+        where: Where;
+    };
+    budget?: Budget;
+    overrides: Override[];
+}
+/** The policy after `extends` is resolved; overrides still apply per file. */
+export interface Policy {
+    /** "builtin" when no policy file exists and the defaults apply. */
+    source: 'file' | 'builtin';
+    /** The policy file and the files it extends, the extending file first. */
+    files: string[];
+    designs: DesignGlob[];
+    ignore: string[];
+    seed: number;
+    rValue: RValueSpec;
+    challenges: ChallengeDef[];
+    requirements: Requirement[];
+    regression: RegressionRule;
+    removedDesigns: {
+        severity: RemovedSeverity;
+        where?: Where;
+    };
+    budget: Budget;
+    /** Overrides of every file of the chain, the most basic file's first. */
+    overrides: PolicyOverride[];
+    /** Depth of the file each definition came from (0 = the most basic): a definition may
+     *  not loosen one from its own or a more basic file. */
+    layers: {
+        requirements: number[];
+        regression: number;
+        removed: number;
+        budget: number;
+    };
+}
+export interface PolicyOverride extends Override {
+    layer: number;
+}
+/** What applies to one design file. */
+export interface FilePolicy {
+    rValue: RValueSpec;
+    seed: number;
+    challenges: ChallengeDef[];
+    requirements: Requirement[];
+    regression: RegressionRule;
+    removedDesigns: RemovedSeverity;
+    budget: ResolvedBudget;
+    format?: DesignFormat;
+}

@@ -1,0 +1,20 @@
+import type { DesignFormat, SourcePos, Topology } from './model.js';
+import { TopologyBuilder, type BuilderOptions } from './builder.js';
+interface Cell {
+    text: string;
+    pos: SourcePos;
+}
+interface Row {
+    cells: Cell[];
+    /** Where the row ends (for "missing column" errors). */
+    end: SourcePos;
+}
+/** Splits RFC 4180 text into rows of located cells; blank lines are skipped. */
+export declare function readCsv(text: string, b: TopologyBuilder): Row[];
+/**
+ * The rows one at a time, so that a file with millions of rows is never held as rows: the
+ * builder's element limit stops the read where it is crossed.
+ */
+export declare function csvRows(text: string, b: TopologyBuilder): Generator<Row>;
+export declare function parseEdgeList(text: string, file: string, options?: BuilderOptions, format?: DesignFormat): Topology;
+export {};

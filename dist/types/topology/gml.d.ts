@@ -1,0 +1,3 @@
+import type { DesignFormat, Topology } from './model.js';
+import { type BuilderOptions } from './builder.js';
+export declare function parseGml(text: string, file: string, options?: BuilderOptions, format?: DesignFormat): Topology;
