@@ -3,6 +3,7 @@
 // links are physical redundancy; undirected, because netbrace reads every design that way.
 
 import { MultiUndirectedGraph } from 'graphology';
+import type { AbstractGraph } from 'graphology-types';
 import type { Demand, DesignFormat, RiskGroup, SourcePos, Topology } from '../topology/model.js';
 import { TopologyBuilder } from '../topology/builder.js';
 
@@ -98,12 +99,16 @@ function lineOf(v: unknown, fallback: number): SourcePos {
  * that exist, self-loops dropped with a warning, parallel links kept. Direction is ignored.
  * Elements without a `line` attribute are numbered in graph order.
  */
-export function fromGraph(g: { forEachNode: DesignGraph['forEachNode']; forEachEdge: DesignGraph['forEachEdge']; getAttributes(): Loose }, options: FromGraphOptions = {}): Topology {
+// Any graphology graph, whatever attribute types its author declared.
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+export type AnyGraph = AbstractGraph<any, any, any>;
+
+export function fromGraph(g: AnyGraph, options: FromGraphOptions = {}): Topology {
   const ga = g.getAttributes() as Partial<DesignAttributes>;
   const file = options.file ?? (typeof ga.file === 'string' ? ga.file : 'graph');
   const b = new TopologyBuilder(file, 'native-json');
   let i = 0;
-  g.forEachNode((id, raw) => {
+  g.forEachNode((id: string, raw: Loose) => {
     const a = raw as unknown as Loose;
     const known = new Set(['label', 'kind', 'lat', 'lon', 'hardened', 'line', 'attrs']);
     const attrs: Loose = { ...((a.attrs as Loose | undefined) ?? {}) };
@@ -119,7 +124,7 @@ export function fromGraph(g: { forEachNode: DesignGraph['forEachNode']; forEachE
       attrs,
     });
   });
-  g.forEachEdge((key, raw, source, target) => {
+  g.forEachEdge((key: string, raw: Loose, source: string, target: string) => {
     const a = raw as unknown as Loose;
     const known = new Set(['id', 'length_km', 'latency_ms', 'capacity_gbps', 'weight', 'risk_groups', 'hardened', 'line', 'attrs']);
     const attrs: Loose = { ...((a.attrs as Loose | undefined) ?? {}) };

@@ -1,4 +1,5 @@
 import { MultiUndirectedGraph } from 'graphology';
+import type { AbstractGraph } from 'graphology-types';
 import type { Demand, DesignFormat, RiskGroup, Topology } from '../topology/model.js';
 export interface NodeAttributes {
     label?: string;
@@ -40,16 +41,11 @@ export interface FromGraphOptions {
     /** The name reports give the design (default: the graph's `file` attribute, else "graph"). */
     file?: string;
 }
-type Loose = Record<string, unknown>;
 /**
  * A Topology from any graphology graph (attributes as toGraph writes them; unknown ones are
  * kept). The same rules as every file reader apply (TopologyBuilder): unique ids, link ends
  * that exist, self-loops dropped with a warning, parallel links kept. Direction is ignored.
  * Elements without a `line` attribute are numbered in graph order.
  */
-export declare function fromGraph(g: {
-    forEachNode: DesignGraph['forEachNode'];
-    forEachEdge: DesignGraph['forEachEdge'];
-    getAttributes(): Loose;
-}, options?: FromGraphOptions): Topology;
-export {};
+export type AnyGraph = AbstractGraph<any, any, any>;
+export declare function fromGraph(g: AnyGraph, options?: FromGraphOptions): Topology;
