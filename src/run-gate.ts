@@ -3,10 +3,10 @@
 // whole gate runs in tests without a repository or a process.
 //
 //   1. the policy, read from the trusted revision (the base, by default) with every file it
-//      extends; a policy that the change modifies is reported and not applied;
+//      inherits; a policy that the change modifies is reported and not applied;
 //   2. the design files: the given paths, or those changed between base and head (renames
 //      followed), or every design for a scheduled run (thresholds only); then the shard;
-//   3. the rules for each file (overrides) — every configuration error surfaces here, before
+//   3. the rules for each file (scopes) — every configuration error surfaces here, before
 //      anything is evaluated;
 //   4. each file at head and at base: parse, compile, evaluate under the policy's work budget
 //      (the same on both sides, realizations kept paired: gate/budget.ts), compare; a head that
@@ -123,7 +123,7 @@ async function loadPolicyAt(entry: string, read: (path: string) => Promise<strin
       texts.set(e.path, await read(e.path));
     }
   }
-  throw new PolicyError('the policy extends too many files', { file: entry }, 'keep the chain of extends short');
+  throw new PolicyError('the policy inherits too many files', { file: entry }, 'keep the chain of inherits short');
 }
 
 interface PolicyChoice {

@@ -57,10 +57,10 @@ describe('trusted policy', () => {
     await expect(runGate({ ...request, policyPath: 'nope.yaml' }, memoryDeps(pairRepo('unchanged')))).rejects.toBeInstanceOf(UsageError);
   });
 
-  it('an override that loosens an extends floor stops the run with both lines, before any evaluation', async () => {
+  it('a scope that loosens an inherited floor stops the run with both lines, before any evaluation', async () => {
     const repo = pairRepo('redundant-link');
-    // fixtures/gate/extends/: the team's policy extends the organisation's and lowers its floor.
-    const [org, team] = [gateFixture('extends/org.yaml'), gateFixture('extends/team.yaml')];
+    // fixtures/gate/inherits/: the team's policy inherits the organisation's and lowers its floor.
+    const [org, team] = [gateFixture('inherits/org.yaml'), gateFixture('inherits/team.yaml')];
     for (const side of [repo.base, repo.head]) Object.assign(side, { 'org.yaml': org, '.netbrace.yaml': team });
     const evaluate = spy();
     const error = await runGate(request, memoryDeps(repo, { evaluate })).catch((e: unknown) => e);
@@ -68,7 +68,7 @@ describe('trusted policy', () => {
     const e = error as PolicyError;
     expect([e.file, e.line]).toEqual(['.netbrace.yaml', 8]);
     expect(e.related.map((r) => [r.file, r.line])).toEqual([['org.yaml', 5]]);
-    expect(e.format()).toMatch(/^\.netbrace\.yaml:8:14: override 1, requirement 1 loosens n-1:link: min 0\.5 where min 0\.7 is required/);
+    expect(e.format()).toMatch(/^\.netbrace\.yaml:8:14: scope 1, requirement 1 loosens n-1:link: min 0\.5 where min 0\.7 is required/);
     expect(evaluate).not.toHaveBeenCalled();
   });
 

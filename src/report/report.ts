@@ -115,7 +115,7 @@ export interface Report {
     revision?: string;
     /** True when the change under review modifies the policy itself (reported, not applied). */
     changed?: boolean;
-    /** The policy file and the files it extends, the extending file first. */
+    /** The policy file and the files it inherits, the inheriting file first. */
     files?: string[];
     /** A plain sentence about the policy, e.g. why a changed policy was not applied. */
     note?: string;

@@ -67,9 +67,9 @@ requirements:
   - kind: no-new-spof
   - kind: area-floor
     challenge: node-failures
-regression:
+weakening:
   allowed-drop: 0.05
-  noise-factor: 2
+  error-multiple: 2
 `;
 
 const TOKEN = 'ghs_test_token';

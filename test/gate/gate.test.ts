@@ -87,7 +87,7 @@ describe('gate decisions on fixture pairs', () => {
     expect(f.changes?.removed.filter((e) => e.kind === 'node').map((e) => e.id)).toEqual(['annex']);
   });
 
-  it('a drop below noise-factor × se is within noise, never a failure, even with no allowance', async () => {
+  it('a drop below error-multiple × se is within noise, never a failure, even with no allowance', async () => {
     const strict = gateFixture('policy.yaml').replace('allowed-drop: 0.05', 'allowed-drop: 0');
     const { report } = await gate(pairRepo('removed-node', FILE, strict));
     const f = fileOf(report);

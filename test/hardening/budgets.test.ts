@@ -232,7 +232,7 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
 
 describe('base and head: one budget, paired realizations', () => {
   const area = '  - kind: area-floor\n    challenge: failures\n';
-  const rest = (drop: number) => `regression:\n  allowed-drop: ${drop}\n  noise-factor: 2\n`;
+  const rest = (drop: number) => `weakening:\n  allowed-drop: ${drop}\n  error-multiple: 2\n`;
 
   it('the budget cuts both sides to the same count, where the engine alone would not', async () => {
     const work = 2 * VISITS * 40;
@@ -308,8 +308,8 @@ describe('the budget in the policy', () => {
     expect(first).toContain('by the work budget (5000 element visits)');
   });
 
-  it('an override raises the budget for its files only', async () => {
-    const text = `${policy('  - kind: area-floor\n    challenge: failures\n')}budget:\n  work: ${2 * VISITS * 20}\noverrides:\n  - files: "networks/core/**"\n    budget:\n      work: 1e9\n`;
+  it('a scope raises the budget for its files only', async () => {
+    const text = `${policy('  - kind: area-floor\n    challenge: failures\n')}budget:\n  work: ${2 * VISITS * 20}\nscopes:\n  - paths: "networks/core/**"\n    budget:\n      work: 1e9\n`;
     const core = 'networks/core/mesh.net.yaml';
     const { report } = await runGate(
       { head: 'head', policySource: 'head', mode: 'enforce', paths: [FILE, core] },

@@ -332,7 +332,7 @@ describe('git failures end with one clear message', () => {
     writeFileSync(big, 'source,target\n');
     for (let i = 0; i < 66; i++) writeFileSync(big, line, { flag: 'a' });
     const head = commitFiles(repo, {}, 'huge');
-    const policy = 'designs:\n  - files: ["designs/**"]\n';
+    const policy = 'designs:\n  - paths: ["designs/**"]\n';
     commitFiles(repo, { '.netbrace.yaml': policy }, 'policy');
     const r = await cli(repo, 'check', '--head', 'HEAD', '--base', `${head}~1`, '--policy-source', 'head');
     expect(r.code).toBe(2);

@@ -62,7 +62,7 @@ function repo(): MemoryRepo {
       nodes: [...chain.map((id) => ({ id, label: IDS.img })), ...(base ? [{ id: REMOVED }] : [])],
       links: [...links, ...(base ? [{ between: ['end-b', REMOVED] }, { between: [REMOVED, 'end-a'] }] : [])],
     });
-  const policy = 'designs:\n  - files: ["**/*.net.yaml"]\n';
+  const policy = 'designs:\n  - paths: ["**/*.net.yaml"]\n';
   const file = PATH;
   return { base: { '.netbrace.yaml': policy, [file]: design(true) }, head: { '.netbrace.yaml': policy, [file]: design(false) } };
 }

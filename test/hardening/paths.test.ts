@@ -2,7 +2,7 @@
 // absolute paths, and symbolic links that point out (at the file or at a directory on the
 // way). First the one module that decides (src/shell/workspace.ts), then every caller: the
 // Action's inputs, the names the REST API returns, shard report folders, `netbrace check`
-// paths and --policy, a policy's `extends` and design globs, and designs that are links.
+// paths and --policy, a policy's `inherits` and design globs, and designs that are links.
 
 import { existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync, symlinkSync, truncateSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -261,12 +261,12 @@ describe('the gate on the command line', () => {
     commitFiles(repo, { 'designs/committed.net.yaml': null }, 'remove the link');
   });
 
-  it('a policy whose extends climbs out, or that is itself a link out, is refused', async () => {
+  it('a policy whose inherits climbs out, or that is itself a link out, is refused', async () => {
     refusals += 2;
-    commitFiles(repo, { '.netbrace.yaml': 'extends: ../../outside/policy.yaml\n' }, 'policy extends out');
+    commitFiles(repo, { '.netbrace.yaml': 'inherits: ../../outside/policy.yaml\n' }, 'policy inherits out');
     let r = await cli(repo, 'check', '--worktree', '--policy-source', 'head');
     expect(r.code).toBe(2);
-    expect(r.err).toMatch(/^\.netbrace\.yaml:1:\d+: "extends" leaves the repository/);
+    expect(r.err).toMatch(/^\.netbrace\.yaml:1:\d+: "inherits" leaves the repository/);
     rmSync(path.join(repo, '.netbrace.yaml'));
     symlinkSync(path.join(outside, 'policy.yaml'), path.join(repo, '.netbrace.yaml'));
     r = await cli(repo, 'check', '--worktree', '--policy-source', 'head');
@@ -279,7 +279,7 @@ describe('the gate on the command line', () => {
 
   it('design globs that name ../ or absolute paths match nothing outside: only repository files are judged', async () => {
     refusals++;
-    const policy = `designs:\n  - files: ["../**", "${outside}/**", "/**/*.net.yaml", "**/*.net.yaml"]\n`;
+    const policy = `designs:\n  - paths: ["../**", "${outside}/**", "/**/*.net.yaml", "**/*.net.yaml"]\n`;
     commitFiles(repo, { '.netbrace.yaml': policy }, 'globs');
     const r = await cli(repo, 'check', '--worktree', '--policy-source', 'head', '--format', 'json', 'designs/ring.net.yaml');
     expect(r.code, r.err).toBeLessThan(2);
