@@ -67,7 +67,7 @@ export interface GateRequest {
   policyPath?: string;
   /** Where the policy is read: the base (trusted, the default) or the head. */
   policySource: 'base' | 'head';
-  mode: 'enforce' | 'advise';
+  mode: 'block' | 'inform';
   /** Overrides the policy's seed. */
   seed?: number;
   threads?: number;
@@ -292,7 +292,7 @@ async function evaluateGraph(g: CompactGraph, specs: EvaluationSpec[], cuts: rea
 }
 
 function validateRequest(request: GateRequest): void {
-  if (request.mode !== 'enforce' && request.mode !== 'advise') throw new UsageError(`mode must be enforce or advise, not ${String(request.mode)}`);
+  if (request.mode !== 'block' && request.mode !== 'inform') throw new UsageError(`mode must be block or inform, not ${String(request.mode)}`);
   if (request.policySource !== 'base' && request.policySource !== 'head') {
     throw new UsageError(`policy-source must be base or head, not ${String(request.policySource)}`);
   }

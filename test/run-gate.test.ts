@@ -7,7 +7,7 @@ import { mergeReports, runGate, inShard, pathHash, type GateRequest } from '../s
 import { REPORT_VERSION, serializeReport, type Report } from '../src/report/report.js';
 import { gateFixture, memoryDeps, pairRepo, type MemoryRepo } from './gate/memory-repo.js';
 
-const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'enforce' };
+const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block' };
 const FILE = 'networks/site.net.yaml';
 const spy = () => vi.fn(evaluateDesign);
 
@@ -114,16 +114,16 @@ describe('which designs are judged', () => {
     expect(exitCode).toBe(1);
   });
 
-  it('advise mode reports the failed verdict and exits 0', async () => {
-    const { report, exitCode } = await runGate({ ...request, mode: 'advise' }, memoryDeps(pairRepo('ring-to-chain')));
-    expect([report.verdict, report.mode, exitCode]).toEqual(['fail', 'advise', 0]);
+  it('inform mode reports the failed verdict and exits 0', async () => {
+    const { report, exitCode } = await runGate({ ...request, mode: 'inform' }, memoryDeps(pairRepo('ring-to-chain')));
+    expect([report.verdict, report.mode, exitCode]).toEqual(['fail', 'inform', 0]);
   });
 
   it('rejects a request that makes no sense', async () => {
     const deps = memoryDeps(pairRepo('unchanged'));
     await expect(runGate({ ...request, shard: { index: 3, total: 2 } }, deps)).rejects.toBeInstanceOf(UsageError);
     await expect(runGate({ ...request, seed: 1.5 }, deps)).rejects.toBeInstanceOf(UsageError);
-    await expect(runGate({ ...request, mode: 'strict' as 'enforce' }, deps)).rejects.toBeInstanceOf(UsageError);
+    await expect(runGate({ ...request, mode: 'strict' as 'block' }, deps)).rejects.toBeInstanceOf(UsageError);
   });
 });
 
@@ -182,7 +182,7 @@ describe('determinism, shards and merging', () => {
       version: 1,
       tool: { name: 'netbrace', version: '0.0.9' },
       verdict: 'pass',
-      mode: 'enforce',
+      mode: 'block',
       policy: { source: 'builtin' },
       seed: 1,
       files: [{ path: 'a.gml', status: 'pass', findings: [], requirements: [] }],

@@ -36,7 +36,7 @@ export function mergeReports(reports: readonly unknown[]): Report {
     version: REPORT_VERSION,
     tool: first.tool,
     verdict: list.some((r) => r.verdict === 'fail') ? 'fail' : verdictOf(files),
-    mode: list.some((r) => r.mode === 'enforce') ? 'enforce' : 'advise',
+    mode: list.some((r) => r.mode === 'block') ? 'block' : 'inform',
     policy: { ...first.policy, ...(list.some((r) => r.policy?.changed) ? { changed: true } : {}) },
     ...(first.base !== undefined ? { base: first.base } : {}),
     ...(first.head !== undefined ? { head: first.head } : {}),

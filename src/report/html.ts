@@ -145,7 +145,7 @@ function masthead(r: Report): string {
         (r.policy.note ? `. ${esc(r.policy.note)}` : r.policy.changed ? ' (this change edits the policy; the proposed policy was not applied)' : ''),
   ]);
   if (r.scope === 'all') meta.push(['Scope', 'every design in the repository, judged against thresholds only']);
-  meta.push(['Mode', r.mode === 'advise' ? 'advise: failures are reported, the run does not fail' : 'enforce: failures fail the check']);
+  meta.push(['Mode', r.mode === 'inform' ? 'inform: failures are reported, the run does not fail' : 'block: failures fail the check']);
   meta.push(['Seed', String(r.seed)]);
   if (r.shard) meta.push(['Shard', `${r.shard.index} of ${r.shard.total}`]);
   const counts = Object.entries(r.counts)

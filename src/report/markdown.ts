@@ -212,7 +212,7 @@ function header(report: Report, options: MarkdownOptions): string {
   let verdict: string;
   if (report.files.length === 0) verdict = `${ICON.ok} ${name}: no design file changed \u2014 pass`;
   else if (report.verdict === 'pass') verdict = `${ICON.ok} ${name}: pass`;
-  else if (report.mode === 'advise') verdict = `${ICON.warn} ${name}: would fail (advise mode, not blocking)`;
+  else if (report.mode === 'inform') verdict = `${ICON.warn} ${name}: would fail (inform mode, not blocking)`;
   else verdict = `${ICON.fail} ${name}: the gate failed`;
   const facts: string[] = [`${report.mode} mode`];
   if (report.policy.source === 'builtin') facts.push('built-in default policy (no policy file)');

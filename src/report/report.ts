@@ -106,7 +106,7 @@ export interface Report {
   version: typeof REPORT_VERSION;
   tool: { name: 'netbrace'; version: string };
   verdict: 'pass' | 'fail';
-  mode: 'enforce' | 'advise';
+  mode: 'block' | 'inform';
   policy: {
     /** "file": read from the repository; "builtin": no policy file, defaults applied. */
     source: 'file' | 'builtin';

@@ -72,7 +72,7 @@ function policyNotes(r: Report): string[] {
   if (r.policy.note) notes.push(`policy: ${r.policy.note}`);
   else if (r.policy.changed) notes.push('policy: this change edits the policy; the proposed policy was not applied to judge it');
   if (r.scope === 'all') notes.push('scope: every design in the repository, judged against thresholds only');
-  if (r.mode === 'advise') notes.push('mode: advise \u2014 failures are reported but do not fail the run');
+  if (r.mode === 'inform') notes.push('mode: inform \u2014 failures are reported but do not fail the run');
   return notes;
 }
 

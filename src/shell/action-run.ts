@@ -67,7 +67,7 @@ export interface ActionDeps {
 }
 
 export interface RunOutcome {
-  /** 0 pass (or advise), 1 the gate failed in enforce mode, 2 usage, configuration or internal error. */
+  /** 0 pass (or inform), 1 the gate failed in block mode, 2 usage, configuration or internal error. */
   exitCode: number;
   verdict?: 'pass' | 'fail';
   comment?: UpsertResult | 'failed' | 'not-applicable';
@@ -82,13 +82,13 @@ export class InputError extends Error {
   override name = 'InputError';
 }
 
-export type CommentMode = 'always' | 'on-change' | 'on-failure' | 'never';
+export type CommentMode = 'every-run' | 'when-changed' | 'when-failing' | 'off';
 
 export interface ActionInputs {
   policy: string;
   policySource: 'base' | 'head';
   token: string;
-  mode: 'enforce' | 'advise';
+  mode: 'block' | 'inform';
   comment: CommentMode;
   commentKey: string;
   report: string;
@@ -166,8 +166,8 @@ export function readInputs(env: Env): ActionInputs {
     policy: repositoryInput(relativePath(env, 'policy', ''), 'policy'),
     policySource: oneOf(env, 'policy-source', ['base', 'head'] as const, 'base'),
     token: getInput(env, 'token'),
-    mode: oneOf(env, 'mode', ['enforce', 'advise'] as const, 'enforce'),
-    comment: oneOf(env, 'comment', ['always', 'on-change', 'on-failure', 'never'] as const, 'on-change'),
+    mode: oneOf(env, 'mode', ['block', 'inform'] as const, 'block'),
+    comment: oneOf(env, 'comment', ['every-run', 'when-changed', 'when-failing', 'off'] as const, 'when-changed'),
     commentKey,
     report: relativePath(env, 'report', '.netbrace-out/netbrace-report.json'),
     sarif: relativePath(env, 'sarif', '.netbrace-out/netbrace.sarif'),
@@ -325,17 +325,17 @@ export function readShardReports(folder: string): { reports: unknown[]; names: s
 
 /** Whether to write the comment, given the mode, the report and the comment that exists. */
 export function shouldWriteComment(mode: CommentMode, report: Report, existing: FoundComment | undefined): boolean {
-  if (mode === 'never') return false;
-  if (mode === 'always') return true;
+  if (mode === 'off') return false;
+  if (mode === 'every-run') return true;
   const failing = report.verdict === 'fail';
-  if (mode === 'on-failure') return failing || existing !== undefined; // a stale failure is corrected
-  // on-change: update when what it says changed; create only when there is something to say.
+  if (mode === 'when-failing') return failing || existing !== undefined; // a stale failure is corrected
+  // when-changed: update when what it says changed; create only when there is something to say.
   if (existing) return commentDigest(existing.body) !== reportDigest(report);
   return failing || report.files.some((f) => f.findings.length > 0);
 }
 
 async function postComment(deps: ActionDeps, env: Env, inputs: ActionInputs, target: Target, report: Report, body: string): Promise<RunOutcome['comment']> {
-  if (!target.pr || inputs.comment === 'never') return 'not-applicable';
+  if (!target.pr || inputs.comment === 'off') return 'not-applicable';
   if (!inputs.token) {
     deps.out.warning('netbrace: no token, so no pull-request comment (set the "token" input, default github.token)');
     return 'failed';
@@ -508,7 +508,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     if (!shardJob) {
       const elsewhere = sarifPath ? `the job summary and ${sarifPath}` : 'the job summary and the JSON report';
       // A failing step also logs its setFailed message as an error annotation: keep a slot for it.
-      const reservedErrors = report.verdict === 'fail' && report.mode === 'enforce' ? 1 : 0;
+      const reservedErrors = report.verdict === 'fail' && report.mode === 'block' ? 1 : 0;
       const plan = planAnnotations(report, { changedLines: lines, elsewhere, reservedErrors });
       for (const a of plan.annotations) deps.out.annotate(a);
     }
@@ -543,11 +543,11 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       deps.out.info(`netbrace: shard ${inputs.shard!.index}/${inputs.shard!.total} ${verdict === 'fail' ? 'has failures' : 'passes'}; the merge job decides`);
       return { exitCode: 0, verdict, comment };
     }
-    if (verdict === 'fail' && inputs.mode === 'enforce') {
+    if (verdict === 'fail' && inputs.mode === 'block') {
       const n = report.files.filter((f) => f.status === 'error' || f.findings.some((x) => x.severity === 'fail')).length;
       return { ...fail(`netbrace: the gate failed: ${n} design${n === 1 ? '' : 's'} with failures (see the annotations and the job summary)`, 1), verdict, comment };
     }
-    if (verdict === 'fail') deps.out.warning('netbrace: the gate would fail; advise mode reports without failing the step');
+    if (verdict === 'fail') deps.out.warning('netbrace: the gate would fail; inform mode reports without failing the step');
     return { exitCode: 0, verdict, comment };
   } catch (error) {
     if (isNetbraceError(error)) {

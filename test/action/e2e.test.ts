@@ -1,7 +1,7 @@
 // The bundled Action, run as the runner runs it (see harness.ts), with the inputs of the
 // README's workflows, in temporary git repositories with real base and head commits, against
 // a loopback stand-in for the REST API. One scenario per behaviour the issue names: pass, fail,
-// advise, fork, shallow clone, API down, rate limit, API hanging, shards merged, push, schedule,
+// inform, fork, shallow clone, API down, rate limit, API hanging, shards merged, push, schedule,
 // nothing changed.
 
 import { mkdtempSync, readFileSync, readdirSync, rmSync, existsSync } from 'node:fs';
@@ -279,21 +279,21 @@ describe('pull requests', () => {
     expect(api.requests.every((q) => q.authorization === `token ${TOKEN}`)).toBe(true);
   }, 60_000);
 
-  it('advise: the same findings, the step passes', async () => {
+  it('inform: the same findings, the step passes', async () => {
     const ws = checkout(scenario.fail, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ mode: 'advise' }));
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ mode: 'inform' }));
     expect(r.code, r.stdout + r.stderr).toBe(0);
     expect(r.outputs.verdict).toBe('fail');
     expect(failedMessages(r)).toEqual([]);
     expect(commands(r.stdout, 'error').filter((c) => c.props.file).length).toBeGreaterThan(0);
-    expect(commands(r.stdout, 'warning').some((c) => /advise mode/.test(c.message))).toBe(true);
-    expect(r.summary).toContain('would fail (advise mode, not blocking)');
+    expect(commands(r.stdout, 'warning').some((c) => /inform mode/.test(c.message))).toBe(true);
+    expect(r.summary).toContain('would fail (inform mode, not blocking)');
   }, 30_000);
 
   it('fork: the read-only token\u2019s 403 is a warning; summary, annotations and verdict stand', async () => {
     api.writes = 'forbidden';
     const ws = checkout(scenario.fail, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'always' }));
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'every-run' }));
     expect(r.code).toBe(1);
     expect(r.outputs.verdict).toBe('fail');
     expect(failedMessages(r)).toHaveLength(1);
@@ -305,7 +305,7 @@ describe('pull requests', () => {
 
   it('fork, two workflows: the pull_request run uploads the report, the workflow_run run posts it', async () => {
     const ws = checkout(scenario.fail, { shallow: false });
-    const first = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'never' }));
+    const first = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'off' }));
     expect(first.code).toBe(1);
     expect(api.requests).toEqual([]);
     // upload-artifact / download-artifact: the .netbrace-out folder, plus the pr-number file.
@@ -318,7 +318,7 @@ describe('pull requests', () => {
     const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('fork-comment', 'comment', { 'steps.pr.outputs.number': number }) };
     const event = { workflow_run: { id: 99, event: 'pull_request', head_sha: scenario.fail } };
     const r = await runAction({ workspace: second, runnerTemp: path.join(work, 'rt-comment'), eventName: 'workflow_run', event, inputs, apiUrl: api.url });
-    expect(r.code, r.stdout + r.stderr).toBe(0); // advise: the first run decided
+    expect(r.code, r.stdout + r.stderr).toBe(0); // inform: the first run decided
     expect(api.comments).toHaveLength(1);
     expect(api.comments[0].body).toContain('the gate failed');
     expect(api.requests.some((q) => q.method === 'GET' && q.path === '/repos/acme/backbone/pulls/7')).toBe(true);
@@ -361,18 +361,18 @@ describe('pull requests', () => {
     expect(r.code, r.stdout + r.stderr).toBe(0);
     expect(r.outputs).toMatchObject({ verdict: 'pass', designs: '0' });
     expect(r.summary).toContain('no design file changed');
-    // on-change: nothing to say, so no comment is created.
+    // when-changed: nothing to say, so no comment is created.
     expect(api.comments).toHaveLength(0);
   }, 30_000);
 });
 
 describe('errors', () => {
-  it('a broken policy: one failure message with its line, an annotation on the policy, in advise mode too', async () => {
+  it('a broken policy: one failure message with its line, an annotation on the policy, in inform mode too', async () => {
     const author = path.join(work, 'broken-policy');
     git(work, 'clone', '-q', `file://${scenario.origin}`, author);
     const base = commit(author, 'typo in the policy', { '.netbrace.yaml': POLICY.replace('realizations: 40', 'realisations: 40') });
     const head = commit(author, 'chain', { [DESIGN]: ring([], CHAIN_DROP) });
-    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ mode: 'advise' }));
+    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ mode: 'inform' }));
     expect(r.code).toBe(1);
     const failed = failedMessages(r);
     expect(failed).toHaveLength(1);
@@ -394,7 +394,7 @@ describe('hostile element ids', () => {
     git(work, 'clone', '-q', `file://${scenario.origin}`, author);
     const base = commit(author, 'hostile ring', { 'nets/hostile.net.yaml': design(true) });
     const head = commit(author, 'hostile chain', { 'nets/hostile.net.yaml': design(false) });
-    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ comment: 'always' }));
+    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ comment: 'every-run' }));
     expect(r.code, r.stdout + r.stderr).toBe(1);
     for (const line of r.stdout.split('\n')) {
       expect(line).not.toMatch(/^::(warning|error)::(forged|x)/);
@@ -417,7 +417,7 @@ describe('an unreliable API never changes the verdict', () => {
     api.reads = 'error500';
     api.writes = 'error500';
     const ws = checkout(scenario.fail, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ comment: 'always' }));
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ comment: 'every-run' }));
     expect(r.code).toBe(1);
     expect(r.outputs.verdict).toBe('fail');
     expect(failedMessages(r)).toHaveLength(1);
@@ -430,7 +430,7 @@ describe('an unreliable API never changes the verdict', () => {
     api.reads = 'rateLimit';
     api.failFirst = 1;
     const ws = checkout(scenario.fail, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ comment: 'always' }));
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ comment: 'every-run' }));
     expect(r.code).toBe(1);
     expect(api.comments).toHaveLength(1);
     expect(r.stdout).toMatch(/rate limit .*retrying/);
@@ -439,7 +439,7 @@ describe('an unreliable API never changes the verdict', () => {
   it('API hanging: each call times out, the step ends in seconds', async () => {
     api.reads = 'hang';
     const ws = checkout(scenario.pass, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.pass), prInputs({ comment: 'always' }));
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.pass), prInputs({ comment: 'every-run' }));
     expect(r.code, r.stdout + r.stderr).toBe(0);
     expect(r.outputs.verdict).toBe('pass');
     expect(commands(r.stdout, 'warning').some((c) => /no answer within 500 ms/.test(c.message))).toBe(true);

@@ -83,7 +83,7 @@ function env(over: Record<string, string> = {}): Record<string, string> {
     GITHUB_API_URL: api.url,
     GITHUB_RUN_ID: '99',
     'INPUT_TOKEN': 'tok',
-    'INPUT_COMMENT': 'always',
+    'INPUT_COMMENT': 'every-run',
     NETBRACE_HTTP_RETRIES: '1',
     NETBRACE_HTTP_BACKOFF_MS: '5',
     NETBRACE_HTTP_TIMEOUT_MS: '300',
@@ -98,7 +98,7 @@ function deps(report: Report | ((r: GateRequestLike) => Report), git: (args: str
       rec.gateCalls.push(request);
       const r = typeof report === 'function' ? report(request) : structuredClone(report);
       r.mode = request.mode;
-      return { report: r, exitCode: r.verdict === 'fail' && request.mode === 'enforce' ? 1 : 0 };
+      return { report: r, exitCode: r.verdict === 'fail' && request.mode === 'block' ? 1 : 0 };
     },
     merge: mergeReports,
     git: async (args) => {
@@ -136,9 +136,9 @@ describe('inputs', () => {
   });
 
   it('reads the runner\u2019s INPUT_ names (upper case, dashes kept) and validates them', () => {
-    const i = readInputs({ 'INPUT_COMMENT-KEY': 'metro', 'INPUT_POLICY-SOURCE': 'head', INPUT_SHARD: '2/4', INPUT_MODE: 'advise' });
-    expect(i).toMatchObject({ commentKey: 'metro', policySource: 'head', shard: { index: 2, total: 4 }, mode: 'advise', comment: 'on-change' });
-    expect(() => readInputs({ INPUT_MODE: 'strict' })).toThrow(/input "mode" is "strict"; use one of: enforce, advise/);
+    const i = readInputs({ 'INPUT_COMMENT-KEY': 'metro', 'INPUT_POLICY-SOURCE': 'head', INPUT_SHARD: '2/4', INPUT_MODE: 'inform' });
+    expect(i).toMatchObject({ commentKey: 'metro', policySource: 'head', shard: { index: 2, total: 4 }, mode: 'inform', comment: 'when-changed' });
+    expect(() => readInputs({ INPUT_MODE: 'strict' })).toThrow(/input "mode" is "strict"; use one of: block, inform/);
     expect(() => readInputs({ INPUT_SHARD: '5/4' })).toThrow(/input "shard"/);
     expect(() => readInputs({ 'INPUT_COMMENT-KEY': 'a b' })).toThrow(/comment-key/);
     expect(() => readInputs({ INPUT_BASE: '--upload-pack=evil' })).toThrow(/input "base"/);
@@ -149,7 +149,7 @@ describe('inputs', () => {
     const { d, rec } = deps(sampleReport());
     const out = await run(env({ INPUT_COMMENT: 'sometimes' }), d);
     expect(out.exitCode).toBe(2);
-    expect(rec.failed).toEqual(['netbrace: input "comment" is "sometimes"; use one of: always, on-change, on-failure, never']);
+    expect(rec.failed).toEqual(['netbrace: input "comment" is "sometimes"; use one of: every-run, when-changed, when-failing, off']);
     expect(rec.gateCalls.length).toBe(0);
   });
 
@@ -170,7 +170,7 @@ describe('events', () => {
   it('pull_request: compares the payload\u2019s base and head, never GITHUB_SHA', async () => {
     const { d, rec } = deps(sampleReport());
     await run(env(), d);
-    expect(rec.gateCalls[0]).toMatchObject({ base: BASE, head: HEAD, policySource: 'base', mode: 'enforce', eventKind: 'pull-request' });
+    expect(rec.gateCalls[0]).toMatchObject({ base: BASE, head: HEAD, policySource: 'base', mode: 'block', eventKind: 'pull-request' });
     expect(JSON.stringify(rec.gateCalls)).not.toContain(MERGE_SHA);
   });
 
@@ -193,7 +193,7 @@ describe('events', () => {
   it('the report of a run with nothing to judge follows the published report schema', () => {
     const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
     const validate = new Ajv({ allErrors: true, strict: false }).compile(JSON.parse(readFileSync(path.join(root, 'src', 'report', 'report.schema.json'), 'utf8')));
-    for (const r of [emptyRunReport({ mode: 'advise', policy: '', seed: undefined }, {}), emptyRunReport({ mode: 'enforce', policy: 'p.yaml', seed: 3 }, { base: BASE, head: HEAD })]) {
+    for (const r of [emptyRunReport({ mode: 'inform', policy: '', seed: undefined }, {}), emptyRunReport({ mode: 'block', policy: 'p.yaml', seed: 3 }, { base: BASE, head: HEAD })]) {
       expect(validate(JSON.parse(JSON.stringify(r))), JSON.stringify(validate.errors)).toBe(true);
     }
   });
@@ -230,7 +230,7 @@ describe('events', () => {
 });
 
 describe('verdict and comment', () => {
-  it('enforce + fail: one setFailed at the end, after summary, annotations and outputs', async () => {
+  it('block + fail: one setFailed at the end, after summary, annotations and outputs', async () => {
     const { d, rec } = deps(sampleReport());
     const out = await run(env(), d);
     expect(out).toMatchObject({ exitCode: 1, verdict: 'fail' });
@@ -242,13 +242,13 @@ describe('verdict and comment', () => {
     expect(written.verdict).toBe('fail');
   });
 
-  it('advise + fail: reports, warns, never fails the step', async () => {
+  it('inform + fail: reports, warns, never fails the step', async () => {
     const { d, rec } = deps(sampleReport());
-    const out = await run(env({ INPUT_MODE: 'advise' }), d);
+    const out = await run(env({ INPUT_MODE: 'inform' }), d);
     expect(out).toMatchObject({ exitCode: 0, verdict: 'fail' });
     expect(rec.failed).toEqual([]);
     expect(rec.outputs.verdict).toBe('fail');
-    expect(rec.warnings.some((w) => /advise mode/.test(w))).toBe(true);
+    expect(rec.warnings.some((w) => /inform mode/.test(w))).toBe(true);
   });
 
   it('one living comment: created, then updated in place', async () => {
@@ -290,13 +290,13 @@ describe('verdict and comment', () => {
     const fail = sampleReport();
     const pass = emptyReport();
     const existing = { id: 1, body: renderComment(fail, { key: 'k' }) };
-    expect(shouldWriteComment('never', fail, undefined)).toBe(false);
-    expect(shouldWriteComment('always', pass, undefined)).toBe(true);
-    expect(shouldWriteComment('on-failure', pass, undefined)).toBe(false);
-    expect(shouldWriteComment('on-failure', pass, existing)).toBe(true);
-    expect(shouldWriteComment('on-change', fail, existing)).toBe(false);
-    expect(shouldWriteComment('on-change', pass, existing)).toBe(true);
-    expect(shouldWriteComment('on-change', pass, undefined)).toBe(false);
+    expect(shouldWriteComment('off', fail, undefined)).toBe(false);
+    expect(shouldWriteComment('every-run', pass, undefined)).toBe(true);
+    expect(shouldWriteComment('when-failing', pass, undefined)).toBe(false);
+    expect(shouldWriteComment('when-failing', pass, existing)).toBe(true);
+    expect(shouldWriteComment('when-changed', fail, existing)).toBe(false);
+    expect(shouldWriteComment('when-changed', pass, existing)).toBe(true);
+    expect(shouldWriteComment('when-changed', pass, undefined)).toBe(false);
   });
 });
 
@@ -315,7 +315,7 @@ describe('workflow_run (posting a fork\u2019s report)', () => {
     shardsDir();
     api.prHeadSha = HEAD;
     const { d, rec } = deps(sampleReport());
-    const out = await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), INPUT_MERGE: 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'advise' }), d);
+    const out = await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), INPUT_MERGE: 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'inform' }), d);
     expect(out).toMatchObject({ exitCode: 0, verdict: 'fail' });
     expect(rec.gateCalls).toEqual([]);
     expect(api.comments).toHaveLength(1);
@@ -326,7 +326,7 @@ describe('workflow_run (posting a fork\u2019s report)', () => {
     shardsDir();
     api.prHeadSha = 'e'.repeat(40);
     const { d, rec } = deps(sampleReport());
-    await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), INPUT_MERGE: 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'advise' }), d);
+    await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), INPUT_MERGE: 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'inform' }), d);
     expect(api.comments).toHaveLength(0);
     expect(rec.warnings.some((w) => /not at bbbbbbbbbbbb/.test(w))).toBe(true);
   });

@@ -23,7 +23,7 @@ describe('report schema', () => {
     repo.base['old.net.yaml'] = gateFixture('redundant-link/base.net.yaml');
     repo.head['new.net.yaml'] = gateFixture('redundant-link/head.net.yaml');
     repo.renames = { 'new.net.yaml': 'old.net.yaml' };
-    const request = { base: 'base', head: 'head', policySource: 'base' as const, mode: 'advise' as const };
+    const request = { base: 'base', head: 'head', policySource: 'base' as const, mode: 'inform' as const };
     const whole = await runGate(request, memoryDeps(repo));
     expect(whole.report.files.map((f) => f.status).sort()).toEqual(['error', 'regressed', 'removed', 'renamed']);
     // Through JSON, as every reader sees it (non-finite numbers become null).

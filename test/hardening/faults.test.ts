@@ -74,7 +74,7 @@ function env(ws: string, apiUrl: string, over: Record<string, string> = {}): Rec
     GITHUB_REPOSITORY: 'acme/net',
     GITHUB_API_URL: apiUrl,
     INPUT_TOKEN: 'tok',
-    INPUT_COMMENT: 'always',
+    INPUT_COMMENT: 'every-run',
     NETBRACE_HTTP_RETRIES: '1',
     NETBRACE_HTTP_BACKOFF_MS: '5',
     NETBRACE_HTTP_TIMEOUT_MS: '400',
@@ -118,9 +118,9 @@ describe('REST API faults: the verdict is that of a healthy run; the step says w
     return { out, rec, ms: performance.now() - t0 };
   }
 
-  /** The same report without any API call (comment: never), to compare against. */
+  /** The same report without any API call (comment: off), to compare against. */
   async function healthy(report: Report) {
-    const h = await runWith(report, api.url, { INPUT_COMMENT: 'never' });
+    const h = await runWith(report, api.url, { INPUT_COMMENT: 'off' });
     expect(h.rec.warnings).toEqual([]);
     expect(api.requests).toEqual([]);
     return h;
@@ -254,7 +254,7 @@ describe('git failures end with one clear message', () => {
       d.git = (args, cwd) => runGit(cwd, args);
       return { d, rec };
     };
-    const e = { GITHUB_WORKSPACE: clone, GITHUB_EVENT_NAME: 'pull_request', GITHUB_EVENT_PATH: event, GITHUB_REPOSITORY: 'acme/net', INPUT_COMMENT: 'never' };
+    const e = { GITHUB_WORKSPACE: clone, GITHUB_EVENT_NAME: 'pull_request', GITHUB_EVENT_PATH: event, GITHUB_REPOSITORY: 'acme/net', INPUT_COMMENT: 'off' };
     const fetched = realDeps();
     const ok = await run(e, fetched.d);
     expect(fetched.rec.failed).toEqual([]);

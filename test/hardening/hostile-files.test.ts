@@ -273,7 +273,7 @@ describe('through the gate', () => {
     const good = fixtureText('designs', 'ring.net.yaml');
     const policy = 'designs:\n  - paths: ["designs/**"]\n';
     const head = { ...hostile, 'designs/ring.net.yaml': good, '.netbrace.yaml': policy };
-    const { report, exitCode } = await runGate({ policySource: 'base', mode: 'enforce', eventKind: 'schedule', head: 'head' }, memoryDeps({ base: head, head }));
+    const { report, exitCode } = await runGate({ policySource: 'base', mode: 'block', eventKind: 'schedule', head: 'head' }, memoryDeps({ base: head, head }));
     expect(exitCode).toBe(1);
     const byPath = new Map(report.files.map((f) => [f.path, f]));
     for (const p of Object.keys(hostile)) {

@@ -155,7 +155,7 @@ let dir: string;
 let api: FakeApi;
 
 beforeAll(async () => {
-  const { report: r } = await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'enforce' }, memoryDeps(repo()));
+  const { report: r } = await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'block' }, memoryDeps(repo()));
   report = r;
   dir = mkdtempSync(path.join(tmpdir(), 'nb-ids-'));
   api = await startFakeApi();
@@ -233,7 +233,7 @@ describe('hostile ids through the Action, as the runner sees its output', () => 
       GITHUB_API_URL: api.url,
       GITHUB_STEP_SUMMARY: summaryFile,
       INPUT_TOKEN: 'tok',
-      INPUT_COMMENT: 'always',
+      INPUT_COMMENT: 'every-run',
       INPUT_HTML: 'out/report.html',
       NETBRACE_HTTP_RETRIES: '0',
     };

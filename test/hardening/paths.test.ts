@@ -147,7 +147,7 @@ function actionEnv(over: Record<string, string> = {}): Record<string, string> {
     GITHUB_REPOSITORY: 'acme/net',
     GITHUB_API_URL: api.url,
     INPUT_TOKEN: 'tok',
-    INPUT_COMMENT: 'never',
+    INPUT_COMMENT: 'off',
     NETBRACE_HTTP_RETRIES: '0',
     NETBRACE_HTTP_TIMEOUT_MS: '500',
     ...over,
@@ -190,7 +190,7 @@ describe('Action inputs never reach outside the workspace', () => {
     api.prFiles.push({ filename: 'README.md', status: 'modified' }, { filename: '../../outside/secret.net.yaml', status: 'added' });
     const missingBase = fakeGit(ws, BASE);
     const { d, rec } = actionDeps(missingBase);
-    const outcome = await run(actionEnv({ INPUT_COMMENT: 'never' }), d);
+    const outcome = await run(actionEnv({ INPUT_COMMENT: 'off' }), d);
     // Not "no design changed, pass": the base is needed, and the message says how to get it.
     expect(outcome.exitCode).toBe(2);
     expect(rec.gateCalls).toBe(0);

@@ -81,10 +81,10 @@ describe('job summary', () => {
     expect(md).toContain('nothing to judge');
   });
 
-  it('advise mode says it would fail without blocking', () => {
+  it('inform mode says it would fail without blocking', () => {
     const r = sampleReport();
-    r.mode = 'advise';
-    expect(renderSummary(r).split('\n')[0]).toContain('would fail (advise mode, not blocking)');
+    r.mode = 'inform';
+    expect(renderSummary(r).split('\n')[0]).toContain('would fail (inform mode, not blocking)');
   });
 
   it('reports a changed policy as proposed and carries the caution', () => {

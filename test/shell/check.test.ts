@@ -124,10 +124,10 @@ describe('netbrace check in a git repository', () => {
     expect(trusting.code).toBe(0);
   });
 
-  it('advise mode reports the failure and exits 0; markdown goes to stdout; files are written', async () => {
+  it('inform mode reports the failure and exits 0; markdown goes to stdout; files are written', async () => {
     const dir = newRepo({ [DESIGN]: gateFixture('ring-to-chain/base.net.yaml') });
     put(dir, { [DESIGN]: gateFixture('ring-to-chain/head.net.yaml') });
-    const r = await check(dir, 'check', '--mode', 'advise', '--format', 'markdown', '--summary', 's.md', '--sarif', 'r.sarif', '--html', 'r.html');
+    const r = await check(dir, 'check', '--mode', 'inform', '--format', 'markdown', '--summary', 's.md', '--sarif', 'r.sarif', '--html', 'r.html');
     expect(r.code).toBe(0);
     expect(r.out).toContain('metro.net.yaml');
     expect(readFileSync(path.join(dir, 's.md'), 'utf8')).toBe(r.out);

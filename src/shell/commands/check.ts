@@ -39,7 +39,7 @@ Policy:
 Evaluation:
   --seed S               seed of the random challenges (default: the policy's)
   --threads N            worker threads (results do not depend on N)
-  --mode MODE            enforce (default): exit 1 when the gate fails; advise: exit 0
+  --mode MODE            block (default): exit 1 when the gate fails; inform: exit 0
   --shard K/N            judge only slice K of N of the designs (by path hash)
 
 Output:
@@ -58,7 +58,7 @@ Examples:
 netbrace informs engineering judgement; it does not replace engineering studies.
 
 Exit codes:
-  0  pass (or nothing to judge, or --mode advise)
+  0  pass (or nothing to judge, or --mode inform)
   1  the gate failed: a requirement was broken or a design could not be read
   2  usage or configuration error (bad option, broken policy); nothing was evaluated
 `;
@@ -124,7 +124,7 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
   const threads = wholeNumber('--threads', v.threads, 1, 256);
   const request: GateRequest = {
     policySource: choice('--policy-source', v['policy-source'], ['base', 'head'] as const, 'base'),
-    mode: choice('--mode', v.mode, ['enforce', 'advise'] as const, 'enforce'),
+    mode: choice('--mode', v.mode, ['block', 'inform'] as const, 'block'),
     eventKind: 'local',
   };
   const seed = wholeNumber('--seed', v.seed, 0, 0xffffffff);
