@@ -147,7 +147,7 @@ function masthead(r: Report): string {
   if (r.scope === 'all') meta.push(['Scope', 'every design in the repository, judged against thresholds only']);
   meta.push(['Mode', r.mode === 'inform' ? 'inform: failures are reported, the run does not fail' : 'block: failures fail the check']);
   meta.push(['Seed', String(r.seed)]);
-  if (r.shard) meta.push(['Shard', `${r.shard.index} of ${r.shard.total}`]);
+  if (r.part) meta.push(['Part', `${r.part.index} of ${r.part.total}`]);
   const counts = Object.entries(r.counts)
     .filter(([, n]) => n > 0)
     .map(([k, n]) => `${n} ${esc(STATUS_WORD[k as keyof typeof STATUS_WORD])}`)

@@ -1,5 +1,5 @@
 // The JSON report: the one contract between the gate and every view (terminal, markdown
-// summary, PR comment, annotations, SARIF, HTML). Versioned; `merge` must keep reading
+// summary, PR comment, annotations, SARIF, HTML). Versioned; `join` must keep reading
 // reports of older versions. Keep it deterministic: no timings, no absolute paths, no dates.
 
 import type { AttackCurve, Contingency, Envelope, RValueSpec } from '../envelope/types.js';
@@ -123,10 +123,10 @@ export interface Report {
   base?: string;
   head?: string;
   seed: number;
-  /** When this run evaluated one shard of the changed designs (index is 1-based: shard k of n). */
-  shard?: { index: number; total: number };
-  /** Set by mergeReports: the shards merged into this report (1-based), out of `total`. */
-  shards?: { total: number; merged: number[] };
+  /** When this run evaluated one part of the changed designs (index is 1-based: part k of n). */
+  part?: { index: number; total: number };
+  /** Set by joinReports: the parts joined into this report (1-based), out of `total`. */
+  parts?: { total: number; joined: number[] };
   /** What the run judged: the changed designs, the given paths, or every design (thresholds only). */
   scope?: 'changed' | 'paths' | 'all';
   counts: Record<FileStatus, number>;

@@ -61,7 +61,7 @@ function headerLine(r: Report, c: Colors): string {
   const parts = [`netbrace ${r.tool.version}`];
   if (r.base || r.head) parts.push(`base ${shortRevision(r.base)} \u2192 head ${shortRevision(r.head)}`);
   parts.push(`seed ${r.seed}`);
-  if (r.shard) parts.push(`shard ${r.shard.index}/${r.shard.total}`);
+  if (r.part) parts.push(`part ${r.part.index}/${r.part.total}`);
   return c.bold(parts.join(' \u00b7 '));
 }
 

@@ -12,7 +12,7 @@ import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { mergeReports } from '../../src/gate/merge.js';
+import { joinReports } from '../../src/gate/join.js';
 import type { Report } from '../../src/report/report.js';
 import { runGate } from '../../src/run-gate.js';
 import { run, type ActionDeps, type RunOutcome } from '../../src/shell/action-run.js';
@@ -49,7 +49,7 @@ function stubDeps(report: Report, ws: string): { d: ActionDeps; rec: Rec } {
       r.mode = request.mode;
       return { report: r, exitCode: r.verdict === 'fail' ? 1 : 0 };
     },
-    merge: mergeReports,
+    join: joinReports,
     git: async (args) => fakeGit(ws)(args),
     github: (o) => createClient(o),
     out: {

@@ -11,7 +11,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { stringify as yamlStringify } from 'yaml';
-import { mergeReports } from '../../src/gate/merge.js';
+import { joinReports } from '../../src/gate/join.js';
 import { renderHtml } from '../../src/report/html.js';
 import { renderComment, renderSummary } from '../../src/report/markdown.js';
 import type { Report } from '../../src/report/report.js';
@@ -252,7 +252,7 @@ describe('hostile ids through the Action, as the runner sees its output', () => 
     try {
       outcome = await run(env, {
         gate: (request) => runGate({ ...request, base: 'base', head: 'head' }, mem),
-        merge: mergeReports,
+        join: joinReports,
         git: async (args) => ({ code: 0, stdout: args.includes('--show-toplevel') ? `${ws}\n` : '', stderr: '' }),
         github: (o) => createClient(o),
         renderHtml,

@@ -40,7 +40,7 @@ Evaluation:
   --seed S               seed of the random challenges (default: the policy's)
   --threads N            worker threads (results do not depend on N)
   --mode MODE            block (default): exit 1 when the gate fails; inform: exit 0
-  --shard K/N            judge only slice K of N of the designs (by path hash)
+  --part K/N             judge only slice K of N of the designs (by path hash)
 
 Output:
   --format FORMAT        text (default), markdown or json, on standard output
@@ -72,7 +72,7 @@ const OPTIONS = {
   seed: { type: 'string' },
   threads: { type: 'string' },
   mode: { type: 'string' },
-  shard: { type: 'string' },
+  part: { type: 'string' },
   format: { type: 'string' },
   json: { type: 'string' },
   summary: { type: 'string' },
@@ -86,11 +86,11 @@ function parse(args: string[]) {
   return parseCommandArgs('check', args, OPTIONS);
 }
 
-function shardOf(value: string | undefined): GateRequest['shard'] {
+function partOf(value: string | undefined): GateRequest['part'] {
   if (value === undefined) return undefined;
   const m = /^([0-9]+)\/([0-9]+)$/.exec(value);
   const [k, n] = m ? [Number(m[1]), Number(m[2])] : [0, 0];
-  if (!m || k < 1 || n < 1 || k > n) throw new UsageError(`--shard must be K/N with 1 ≤ K ≤ N, not "${value}"`, 'e.g. --shard 2/4');
+  if (!m || k < 1 || n < 1 || k > n) throw new UsageError(`--part must be K/N with 1 ≤ K ≤ N, not "${value}"`, 'e.g. --part 2/4');
   return { index: k, total: n };
 }
 
@@ -130,8 +130,8 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
   const seed = wholeNumber('--seed', v.seed, 0, 0xffffffff);
   if (seed !== undefined) request.seed = seed;
   if (threads !== undefined) request.threads = threads;
-  const shard = shardOf(v.shard);
-  if (shard) request.shard = shard;
+  const part = partOf(v.part);
+  if (part) request.part = part;
   const evaluate: GateDeps['evaluate'] = threads !== undefined && threads > 1 ? (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) : undefined;
 
   const root = await repoRoot(io.cwd);
