@@ -3,10 +3,10 @@
 // whole gate runs in tests without a repository or a process.
 //
 //   1. the policy, read from the trusted revision (the base, by default) with every file it
-//      extends; a policy that the change modifies is reported and not applied;
+//      inherits; a policy that the change modifies is reported and not applied;
 //   2. the design files: the given paths, or those changed between base and head (renames
-//      followed), or every design for a scheduled run (thresholds only); then the shard;
-//   3. the rules for each file (overrides) — every configuration error surfaces here, before
+//      followed), or every design for a scheduled run (thresholds only); then the part;
+//   3. the rules for each file (scopes) — every configuration error surfaces here, before
 //      anything is evaluated;
 //   4. each file at head and at base: parse, compile, evaluate under the policy's work budget
 //      (the same on both sides, realizations kept paired: gate/budget.ts), compare; a head that
@@ -29,7 +29,7 @@ import { CAUTION, REPORT_VERSION, type FileReport, type Report } from './report/
 import { parseDesign } from './topology/parse.js';
 import { VERSION } from './version.js';
 
-export { mergeReports } from './gate/merge.js';
+export { joinReports } from './gate/join.js';
 
 /** A revision as git names it, or "worktree" for the files on disk. */
 export type Revision = string;
@@ -67,12 +67,12 @@ export interface GateRequest {
   policyPath?: string;
   /** Where the policy is read: the base (trusted, the default) or the head. */
   policySource: 'base' | 'head';
-  mode: 'enforce' | 'advise';
+  mode: 'block' | 'inform';
   /** Overrides the policy's seed. */
   seed?: number;
   threads?: number;
-  /** Evaluate shard `index` (1-based) of `total`: a deterministic slice by path hash. */
-  shard?: { index: number; total: number };
+  /** Evaluate part `index` (1-based) of `total`: a deterministic slice by path hash. */
+  part?: { index: number; total: number };
   /** Scheduled runs judge every design against thresholds only. */
   eventKind?: 'pull-request' | 'push' | 'schedule' | 'local';
 }
@@ -93,9 +93,9 @@ export function pathHash(path: string): number {
   return h >>> 0;
 }
 
-/** Whether a path belongs to shard `index` (1-based) of `total`. */
-export function inShard(path: string, shard: { index: number; total: number }): boolean {
-  return pathHash(path) % shard.total === shard.index - 1;
+/** Whether a path belongs to part `index` (1-based) of `total`. */
+export function inPart(path: string, part: { index: number; total: number }): boolean {
+  return pathHash(path) % part.total === part.index - 1;
 }
 
 /** Signals that the synchronous policy loader needs a file that has not been read yet. */
@@ -123,7 +123,7 @@ async function loadPolicyAt(entry: string, read: (path: string) => Promise<strin
       texts.set(e.path, await read(e.path));
     }
   }
-  throw new PolicyError('the policy extends too many files', { file: entry }, 'keep the chain of extends short');
+  throw new PolicyError('the policy inherits too many files', { file: entry }, 'keep the chain of inherits short');
 }
 
 interface PolicyChoice {
@@ -292,13 +292,13 @@ async function evaluateGraph(g: CompactGraph, specs: EvaluationSpec[], cuts: rea
 }
 
 function validateRequest(request: GateRequest): void {
-  if (request.mode !== 'enforce' && request.mode !== 'advise') throw new UsageError(`mode must be enforce or advise, not ${String(request.mode)}`);
+  if (request.mode !== 'block' && request.mode !== 'inform') throw new UsageError(`mode must be block or inform, not ${String(request.mode)}`);
   if (request.policySource !== 'base' && request.policySource !== 'head') {
     throw new UsageError(`policy-source must be base or head, not ${String(request.policySource)}`);
   }
-  const s = request.shard;
+  const s = request.part;
   if (s && !(Number.isInteger(s.index) && Number.isInteger(s.total) && s.total >= 1 && s.index >= 1 && s.index <= s.total)) {
-    throw new UsageError(`shard ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, 'e.g. 2/4 for the second of four shards');
+    throw new UsageError(`part ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, 'e.g. 2/4 for the second of four parts');
   }
   if (request.seed !== undefined && !(Number.isInteger(request.seed) && request.seed >= 0 && request.seed <= 0xffffffff)) {
     throw new UsageError(`seed must be a whole number from 0 to 4294967295, not ${request.seed}`);
@@ -315,7 +315,7 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
 
   const { policy, info } = await choosePolicy(request, deps, base, head);
   const { list: all, scope } = await candidates(request, deps, policy, base, head);
-  const chosen = [...all].sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0)).filter((c) => !request.shard || inShard(c.path, request.shard));
+  const chosen = [...all].sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0)).filter((c) => !request.part || inPart(c.path, request.part));
 
   // Every file's rules before any evaluation: configuration errors stop the run here.
   const rules = chosen.map((c) => policyForFile(policy, c.path));
@@ -368,7 +368,7 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
     ...(base !== undefined ? { base } : {}),
     head,
     seed,
-    ...(request.shard ? { shard: { index: request.shard.index, total: request.shard.total } } : {}),
+    ...(request.part ? { part: { index: request.part.index, total: request.part.total } } : {}),
     scope,
     counts: countStatuses(files),
     files,

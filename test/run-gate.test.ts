@@ -1,13 +1,13 @@
-// The orchestrator: which policy judges, which files are judged, sharding and merging,
+// The orchestrator: which policy judges, which files are judged, parts and joining,
 // determinism, and that configuration errors stop the run before any evaluation.
 import { describe, expect, it, vi } from 'vitest';
 import { PolicyError, UsageError } from '../src/errors.js';
 import { evaluateDesign } from '../src/envelope/evaluate.js';
-import { mergeReports, runGate, inShard, pathHash, type GateRequest } from '../src/run-gate.js';
+import { joinReports, runGate, inPart, pathHash, type GateRequest } from '../src/run-gate.js';
 import { REPORT_VERSION, serializeReport, type Report } from '../src/report/report.js';
 import { gateFixture, memoryDeps, pairRepo, type MemoryRepo } from './gate/memory-repo.js';
 
-const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'enforce' };
+const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block' };
 const FILE = 'networks/site.net.yaml';
 const spy = () => vi.fn(evaluateDesign);
 
@@ -57,10 +57,10 @@ describe('trusted policy', () => {
     await expect(runGate({ ...request, policyPath: 'nope.yaml' }, memoryDeps(pairRepo('unchanged')))).rejects.toBeInstanceOf(UsageError);
   });
 
-  it('an override that loosens an extends floor stops the run with both lines, before any evaluation', async () => {
+  it('a scope that loosens an inherited floor stops the run with both lines, before any evaluation', async () => {
     const repo = pairRepo('redundant-link');
-    // fixtures/gate/extends/: the team's policy extends the organisation's and lowers its floor.
-    const [org, team] = [gateFixture('extends/org.yaml'), gateFixture('extends/team.yaml')];
+    // fixtures/gate/inherits/: the team's policy inherits the organisation's and lowers its floor.
+    const [org, team] = [gateFixture('inherits/org.yaml'), gateFixture('inherits/team.yaml')];
     for (const side of [repo.base, repo.head]) Object.assign(side, { 'org.yaml': org, '.netbrace.yaml': team });
     const evaluate = spy();
     const error = await runGate(request, memoryDeps(repo, { evaluate })).catch((e: unknown) => e);
@@ -68,7 +68,7 @@ describe('trusted policy', () => {
     const e = error as PolicyError;
     expect([e.file, e.line]).toEqual(['.netbrace.yaml', 8]);
     expect(e.related.map((r) => [r.file, r.line])).toEqual([['org.yaml', 5]]);
-    expect(e.format()).toMatch(/^\.netbrace\.yaml:8:14: override 1, requirement 1 loosens n-1:link: min 0\.5 where min 0\.7 is required/);
+    expect(e.format()).toMatch(/^\.netbrace\.yaml:8:14: scope 1, requirement 1 loosens n-1:link: min 0\.5 where min 0\.7 is required/);
     expect(evaluate).not.toHaveBeenCalled();
   });
 
@@ -114,16 +114,16 @@ describe('which designs are judged', () => {
     expect(exitCode).toBe(1);
   });
 
-  it('advise mode reports the failed verdict and exits 0', async () => {
-    const { report, exitCode } = await runGate({ ...request, mode: 'advise' }, memoryDeps(pairRepo('ring-to-chain')));
-    expect([report.verdict, report.mode, exitCode]).toEqual(['fail', 'advise', 0]);
+  it('inform mode reports the failed verdict and exits 0', async () => {
+    const { report, exitCode } = await runGate({ ...request, mode: 'inform' }, memoryDeps(pairRepo('ring-to-chain')));
+    expect([report.verdict, report.mode, exitCode]).toEqual(['fail', 'inform', 0]);
   });
 
   it('rejects a request that makes no sense', async () => {
     const deps = memoryDeps(pairRepo('unchanged'));
-    await expect(runGate({ ...request, shard: { index: 3, total: 2 } }, deps)).rejects.toBeInstanceOf(UsageError);
+    await expect(runGate({ ...request, part: { index: 3, total: 2 } }, deps)).rejects.toBeInstanceOf(UsageError);
     await expect(runGate({ ...request, seed: 1.5 }, deps)).rejects.toBeInstanceOf(UsageError);
-    await expect(runGate({ ...request, mode: 'strict' as 'enforce' }, deps)).rejects.toBeInstanceOf(UsageError);
+    await expect(runGate({ ...request, mode: 'strict' as 'block' }, deps)).rejects.toBeInstanceOf(UsageError);
   });
 });
 
@@ -140,7 +140,7 @@ function manyDesigns(): MemoryRepo {
   return repo;
 }
 
-describe('determinism, shards and merging', () => {
+describe('determinism, parts and joining', () => {
   it('the same inputs and seed give a byte-identical report; another seed another one', async () => {
     const a = await runGate(request, memoryDeps(pairRepo('removed-node')));
     const b = await runGate(request, memoryDeps(pairRepo('removed-node')));
@@ -150,23 +150,23 @@ describe('determinism, shards and merging', () => {
     expect(serializeReport(c.report)).not.toBe(serializeReport(a.report));
   });
 
-  it('shards are a deterministic partition by path hash, and merged they give the unsharded report', async () => {
+  it('parts are a deterministic partition by path hash, and joined they give the report of the whole', async () => {
     const repo = manyDesigns();
     const whole = await runGate(request, memoryDeps(repo));
-    const shards = await Promise.all([1, 2, 3].map((index) => runGate({ ...request, shard: { index, total: 3 } }, memoryDeps(repo))));
-    const paths = shards.map((s) => s.report.files.map((f) => f.path));
+    const parts = await Promise.all([1, 2, 3].map((index) => runGate({ ...request, part: { index, total: 3 } }, memoryDeps(repo))));
+    const paths = parts.map((s) => s.report.files.map((f) => f.path));
     expect(paths.flat().sort()).toEqual(whole.report.files.map((f) => f.path));
     expect(new Set(paths.flat()).size).toBe(paths.flat().length);
-    for (const [i, s] of shards.entries()) {
-      expect(s.report.shard).toEqual({ index: i + 1, total: 3 });
+    for (const [i, s] of parts.entries()) {
+      expect(s.report.part).toEqual({ index: i + 1, total: 3 });
       for (const f of s.report.files) expect(pathHash(f.path) % 3).toBe(i);
     }
-    // Merge what the shard jobs wrote (JSON files), in any order.
-    const merged = mergeReports([shards[2], shards[0], shards[1]].map((s) => JSON.parse(serializeReport(s.report))));
-    expect(merged.shards).toEqual({ total: 3, merged: [1, 2, 3] });
-    const strip = (r: Report) => ({ ...r, shard: undefined, shards: undefined });
-    expect(serializeReport(strip(merged))).toBe(serializeReport(strip(JSON.parse(serializeReport(whole.report)))));
-    expect(merged.verdict).toBe(whole.report.verdict);
+    // Join what the part jobs wrote (JSON files), in any order.
+    const joined = joinReports([parts[2], parts[0], parts[1]].map((s) => JSON.parse(serializeReport(s.report))));
+    expect(joined.parts).toEqual({ total: 3, joined: [1, 2, 3] });
+    const strip = (r: Report) => ({ ...r, part: undefined, parts: undefined });
+    expect(serializeReport(strip(joined))).toBe(serializeReport(strip(JSON.parse(serializeReport(whole.report)))));
+    expect(joined.verdict).toBe(whole.report.verdict);
   });
 
   it('FNV-1a matches its published test vectors', () => {
@@ -174,28 +174,28 @@ describe('determinism, shards and merging', () => {
     expect(pathHash('')).toBe(0x811c9dc5);
     expect(pathHash('a')).toBe(0xe40c292c);
     expect(pathHash('foobar')).toBe(0xbf9cf968);
-    expect(inShard('a', { index: 1, total: 1 })).toBe(true);
+    expect(inPart('a', { index: 1, total: 1 })).toBe(true);
   });
 
-  it('merge reads reports of older writers (optional fields missing) and refuses newer versions', () => {
+  it('join reads reports of older writers (optional fields missing) and refuses newer versions', () => {
     const old = {
       version: 1,
       tool: { name: 'netbrace', version: '0.0.9' },
       verdict: 'pass',
-      mode: 'enforce',
+      mode: 'block',
       policy: { source: 'builtin' },
       seed: 1,
       files: [{ path: 'a.gml', status: 'pass', findings: [], requirements: [] }],
     };
     const failing = { ...old, files: [{ path: 'b.gml', status: 'error', findings: [{ rule: 'parse-error', severity: 'fail', message: 'x', elements: [], line: 3 }] }] };
-    const merged = mergeReports([old, failing]);
-    expect(merged.version).toBe(REPORT_VERSION);
-    expect(merged.files.map((f) => f.path)).toEqual(['a.gml', 'b.gml']);
-    expect(merged.counts).toMatchObject({ pass: 1, error: 1 });
-    expect(merged.verdict).toBe('fail');
-    expect(merged.caution.length).toBeGreaterThan(0);
-    expect(() => mergeReports([{ ...old, version: REPORT_VERSION + 1 }])).toThrow(UsageError);
-    expect(() => mergeReports([{ hello: 1 }])).toThrow(UsageError);
-    expect(() => mergeReports([])).toThrow(UsageError);
+    const joined = joinReports([old, failing]);
+    expect(joined.version).toBe(REPORT_VERSION);
+    expect(joined.files.map((f) => f.path)).toEqual(['a.gml', 'b.gml']);
+    expect(joined.counts).toMatchObject({ pass: 1, error: 1 });
+    expect(joined.verdict).toBe('fail');
+    expect(joined.caution.length).toBeGreaterThan(0);
+    expect(() => joinReports([{ ...old, version: REPORT_VERSION + 1 }])).toThrow(UsageError);
+    expect(() => joinReports([{ hello: 1 }])).toThrow(UsageError);
+    expect(() => joinReports([])).toThrow(UsageError);
   });
 });

@@ -12,11 +12,11 @@
 //                 fewer can only be higher), or the value could not be computed
 //                                                                       → notice / warning, never "met"
 //   regressed     it dropped from base by more than the allowance, and by at least
-//                 noise-factor × se                                     → finding at the regression severity
-//   within-noise  it dropped, but by less than noise-factor × se        → notice: Monte Carlo noise, not a failure
+//                 error-multiple × se                                   → finding at the weakening severity
+//   within-noise  it dropped, but by less than error-multiple × se      → notice: Monte Carlo noise, not a failure
 //   met           otherwise; a drop inside the allowance is a notice
 // On realizations cut by the budget a drop is judged both ways: regressed only when it exceeds
-// the allowance by more than noise-factor × se, a notice when it stays below the allowance by
+// the allowance by more than error-multiple × se, a notice when it stays below the allowance by
 // more than that, and uncertain in between; when the budget cut base and head differently
 // their realizations do not pair, and the change is uncertain whatever its sign. Every
 // requirement whose value rests on reduced work says so in a finding of its own.
@@ -189,11 +189,11 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== undefined) {
     // Reduced differently on the two sides: the realizations do not pair, so no delta is judged.
     if (row.status === 'met') row.status = 'uncertain';
-    const regression = input.policy.regression;
+    const weakening = input.policy.weakening;
     findings.push(
       finding(
         'regression',
-        uncertainSeverity(regression.severity),
+        uncertainSeverity(weakening.severity),
         `${description}: from ${formatR(m.base)} to ${formatR(m.head)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
         extra,
@@ -202,26 +202,26 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
     const drop = m.higherIsBetter ? -m.delta : m.delta;
     if (drop > SAME * Math.max(1, Math.abs(m.base))) {
-      const rule = input.policy.regression;
+      const rule = input.policy.weakening;
       const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(m.base));
       const change = `from ${formatR(m.base)} to ${formatR(m.head)} (\u0394 ${formatDelta(m.delta, m.se)})`;
-      const noise = rule.noiseFactor * m.se;
+      const noise = rule.errorMultiple * m.se;
       const verb = m.higherIsBetter ? 'dropped' : 'rose';
       if (m.reduced !== undefined && !(drop > allowance + noise) && !(drop <= allowance - noise)) {
-        // On cut realizations the drop is within noise-factor × se of the allowance: either side of it.
+        // On cut realizations the drop is within error-multiple × se of the allowance: either side of it.
         if (row.status === 'met') row.status = 'uncertain';
         findings.push(
           finding(
             'regression',
             uncertainSeverity(rule.severity),
-            `${description}: ${verb} ${change}, within ${rule.noiseFactor} \u00d7 its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            `${description}: ${verb} ${change}, within ${rule.errorMultiple} \u00d7 its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
             extra,
           ),
         );
       } else if (m.reduced !== undefined && drop <= allowance - noise) {
         findings.push(
-          finding('regression', 'notice', `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} \u00d7 its error; ${m.reduced}`, elements, extra),
+          finding('regression', 'notice', `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} \u00d7 its error; ${m.reduced}`, elements, extra),
         );
       } else if (m.reduced !== undefined) {
         if (row.status !== 'missed') row.status = 'regressed';
@@ -229,7 +229,7 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
           finding(
             'regression',
             rule.severity,
-            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} \u00d7 its error; ${m.reduced}`,
+            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} \u00d7 its error; ${m.reduced}`,
             elements,
             extra,
           ),
@@ -240,7 +240,7 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
           finding(
             'regression',
             'notice',
-            `${description}: ${m.higherIsBetter ? 'dropped' : 'rose'} ${change}, less than ${rule.noiseFactor} \u00d7 its Monte Carlo error: within noise, not a failure`,
+            `${description}: ${m.higherIsBetter ? 'dropped' : 'rose'} ${change}, less than ${rule.errorMultiple} \u00d7 its Monte Carlo error: within noise, not a failure`,
             elements,
             extra,
           ),

@@ -1,6 +1,6 @@
 // The overall decision: the gate fails when any finding of severity "fail" remains (a broken
 // floor, a regression beyond tolerance, a new single point of failure, an unreadable head, a
-// deleted design when the policy says so). In advise mode the verdict is still reported, but
+// deleted design when the policy says so). In inform mode the verdict is still reported, but
 // the exit code is 0.
 
 import type { FileReport, FileStatus, Report } from '../report/report.js';
@@ -18,7 +18,7 @@ export function verdictOf(files: readonly FileReport[]): 'pass' | 'fail' {
   return failed ? 'fail' : 'pass';
 }
 
-/** 0 pass (or advise), 1 the gate failed. Configuration errors (2) never reach a report. */
+/** 0 pass (or inform), 1 the gate failed. Configuration errors (2) never reach a report. */
 export function exitCodeOf(report: Pick<Report, 'verdict' | 'mode'>): 0 | 1 {
-  return report.verdict === 'fail' && report.mode === 'enforce' ? 1 : 0;
+  return report.verdict === 'fail' && report.mode === 'block' ? 1 : 0;
 }

@@ -23,8 +23,8 @@ export const DEFAULT_DESIGN_GLOBS: readonly string[] = [
  */
 export const REGIONAL_UNTIL_KM = 50;
 
-/** Default noise factor: drops below 2 standard errors are Monte Carlo noise (about 95 % two-sided, common practice). */
-export const DEFAULT_NOISE_FACTOR = 2;
+/** Default error multiple: drops below 2 standard errors are Monte Carlo noise (about 95 % two-sided, common practice). */
+export const DEFAULT_ERROR_MULTIPLE = 2;
 
 export const STARTER_POLICY = `# netbrace policy: what a network design must satisfy before a change to it merges.
 # Every key is optional; a key left out takes the value of the built-in policy, which is
@@ -36,8 +36,8 @@ version: 1
 
 # Which files are designs (globs from the repository root; "format" forces a format).
 designs:
-  - files: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
-# ignore: ["archive/**"]
+  - paths: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
+# exclude: ["archive/**"]
 
 # Seed of every random challenge: the same inputs and seed give the same report.
 seed: 1
@@ -80,7 +80,7 @@ requirements:
   # A change may not add a bridge or a cut node that the base did not have.
   - kind: no-new-spof
     severity: fail
-  # Areas under the envelopes, tracked for regressions (no floor of their own).
+  # Areas under the envelopes, tracked for weakening (no floor of their own).
   - kind: area-floor
     challenge: node-failures
   - kind: area-floor
@@ -99,9 +99,9 @@ requirements:
   #   min: 0.8
 
 # How far a requirement's value may drop from the base to the head.
-regression:
+weakening:
   allowed-drop: 0.02       # in units of R
-  noise-factor: 2          # a drop below 2 × its Monte Carlo error never fails
+  error-multiple: 2        # a drop below 2 × its Monte Carlo error never fails
   severity: fail
 
 # A deleted design file: fail | warn | notice | ignore.
@@ -117,8 +117,8 @@ budget:
 
 # Rules for some files only; they may add or tighten requirements, never loosen them
 # (and raise the budget, never lower it).
-# overrides:
-#   - files: "core/**"
+# scopes:
+#   - paths: "core/**"
 #     requirements:
 #       - kind: n-1
 #         element: node

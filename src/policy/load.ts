@@ -1,7 +1,7 @@
 // One policy file: YAML text → a checked PolicyFile whose every definition knows its line.
 // Schema checks (policy.schema.json, via ajv) come first, then the checks a schema cannot
 // express (which removal orders exist for what, grids, duplicates). Pure: the caller reads
-// the file; `extends` and overrides are applied in resolve.ts.
+// the file; `inherits` and scopes are applied in resolve.ts.
 
 import { Ajv, type ValidateFunction } from 'ajv';
 import { PolicyError } from '../errors.js';
@@ -9,7 +9,7 @@ import type { ChallengeName, ChallengeParams, RValueSpec } from '../envelope/typ
 import type { MetricId } from '../metrics/types.js';
 import type { DesignFormat } from '../topology/model.js';
 import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
-import { DEFAULT_NOISE_FACTOR, REGIONAL_UNTIL_KM } from './defaults.js';
+import { DEFAULT_ERROR_MULTIPLE, REGIONAL_UNTIL_KM } from './defaults.js';
 import { requirementId } from './requirement-id.js';
 import schema from './policy.schema.json' with { type: 'json' };
 import { describePath as describe, throwSchemaErrors } from './schema-errors.js';
@@ -17,15 +17,15 @@ import type {
   Budget,
   ChallengeDef,
   DesignGlob,
-  Override,
   PolicyFile,
-  RegressionRule,
   RemovalOrder,
   RemovedSeverity,
   RemoveWhat,
   Requirement,
+  Scope,
   Severity,
   ThresholdStatistic,
+  WeakeningRule,
   Where,
 } from './types.js';
 import { type Segment, YamlSource } from './yaml-source.js';
@@ -236,15 +236,15 @@ class FileBuilder {
     return out;
   }
 
-  regression(raw: Obj | undefined, path: readonly Segment[]): RegressionRule | undefined {
+  weakening(raw: Obj | undefined, path: readonly Segment[]): WeakeningRule | undefined {
     if (raw === undefined) return undefined;
-    const fieldWhere: RegressionRule['fieldWhere'] = {};
-    const field = (key: string, name: keyof RegressionRule['fieldWhere']) => {
+    const fieldWhere: WeakeningRule['fieldWhere'] = {};
+    const field = (key: string, name: keyof WeakeningRule['fieldWhere']) => {
       if (raw[key] !== undefined) fieldWhere[name] = this.at([...path, key]);
       return raw[key];
     };
-    const rule: RegressionRule = {
-      noiseFactor: (field('noise-factor', 'noiseFactor') as number | undefined) ?? DEFAULT_NOISE_FACTOR,
+    const rule: WeakeningRule = {
+      errorMultiple: (field('error-multiple', 'errorMultiple') as number | undefined) ?? DEFAULT_ERROR_MULTIPLE,
       severity: (field('severity', 'severity') as Severity | undefined) ?? 'fail',
       where: this.at(path, true),
       fieldWhere,
@@ -275,7 +275,7 @@ class FileBuilder {
 /** Normalise a repository path: forward slashes, no "." segments; PolicyError if it leaves the repository. */
 export function joinRepoPath(fromFile: string, relative: string, where: Where): string {
   if (relative.startsWith('/') || /^[A-Za-z]:[\\/]/.test(relative)) {
-    throw new PolicyError(`"extends" must be a path inside the repository, not ${relative}`, where, 'write it relative to this policy file');
+    throw new PolicyError(`"inherits" must be a path inside the repository, not ${relative}`, where, 'write it relative to this policy file');
   }
   const dir = fromFile.split('/').slice(0, -1);
   const parts = [...dir];
@@ -283,7 +283,7 @@ export function joinRepoPath(fromFile: string, relative: string, where: Where): 
     if (seg === '' || seg === '.') continue;
     if (seg === '..') {
       if (parts.length === 0) {
-        throw new PolicyError(`"extends" leaves the repository: ${relative}`, where, 'the base policy must be a file in this repository');
+        throw new PolicyError(`"inherits" leaves the repository: ${relative}`, where, 'the base policy must be a file in this repository');
       }
       parts.pop();
     } else {
@@ -305,22 +305,22 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
 
   const raw = data as Obj;
   const b = new FileBuilder(src);
-  const policy: PolicyFile = { path: file, overrides: [] };
+  const policy: PolicyFile = { path: file, scopes: [] };
 
-  if (raw.extends !== undefined) {
-    const where = src.where(['extends']);
-    policy.extends = { path: joinRepoPath(file, raw.extends as string, where), where };
+  if (raw.inherits !== undefined) {
+    const where = src.where(['inherits']);
+    policy.inherits = { path: joinRepoPath(file, raw.inherits as string, where), where };
   }
   if (raw.designs !== undefined) {
     policy.designs = (raw.designs as Obj[]).map(
       (d, i): DesignGlob => ({
-        files: globs(d.files),
+        paths: globs(d.paths),
         ...(d.format !== undefined ? { format: d.format as DesignFormat } : {}),
         where: src.where(['designs', i]),
       }),
     );
   }
-  if (raw.ignore !== undefined) policy.ignore = { globs: globs(raw.ignore), where: src.where(['ignore']) };
+  if (raw.exclude !== undefined) policy.exclude = { globs: globs(raw.exclude), where: src.where(['exclude']) };
   if (raw.seed !== undefined) policy.seed = { value: raw.seed as number, where: src.where(['seed']) };
   if (raw['r-value'] !== undefined) {
     const r = raw['r-value'] as Obj;
@@ -349,27 +349,27 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   }
 
   if (raw.requirements !== undefined) policy.requirements = b.requirements(raw.requirements, ['requirements']);
-  const regression = b.regression(raw.regression as Obj | undefined, ['regression']);
-  if (regression) policy.regression = regression;
+  const weakening = b.weakening(raw.weakening as Obj | undefined, ['weakening']);
+  if (weakening) policy.weakening = weakening;
   const removed = b.removed(raw['removed-designs'], ['removed-designs']);
   if (removed) policy.removedDesigns = removed;
   const budget = b.budget(raw.budget as Obj | undefined, ['budget']);
   if (budget) policy.budget = budget;
 
-  policy.overrides = ((raw.overrides as Obj[] | undefined) ?? []).map((o, i): Override => {
-    const path: Segment[] = ['overrides', i];
-    const override: Override = {
-      files: globs(o.files),
+  policy.scopes = ((raw.scopes as Obj[] | undefined) ?? []).map((o, i): Scope => {
+    const path: Segment[] = ['scopes', i];
+    const scope: Scope = {
+      paths: globs(o.paths),
       requirements: b.requirements(o.requirements, [...path, 'requirements']),
       where: src.where(path),
     };
-    const rule = b.regression(o.regression as Obj | undefined, [...path, 'regression']);
-    if (rule) override.regression = rule;
+    const rule = b.weakening(o.weakening as Obj | undefined, [...path, 'weakening']);
+    if (rule) scope.weakening = rule;
     const rem = b.removed(o['removed-designs'], [...path, 'removed-designs']);
-    if (rem) override.removedDesigns = rem;
+    if (rem) scope.removedDesigns = rem;
     const ob = b.budget(o.budget as Obj | undefined, [...path, 'budget']);
-    if (ob) override.budget = ob;
-    return override;
+    if (ob) scope.budget = ob;
+    return scope;
   });
   return policy;
 }

@@ -1,5 +1,5 @@
-// Stable ids of requirements: two requirements with the same id are the same floor (an
-// override or an extending policy may tighten it, never loosen it), and reports, SARIF
+// Stable ids of requirements: two requirements with the same id are the same floor (a
+// scope or an inheriting policy may tighten it, never loosen it), and reports, SARIF
 // fingerprints and PR comments key on them.
 
 import type { Requirement, ThresholdStatistic } from './types.js';

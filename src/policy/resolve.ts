@@ -1,8 +1,8 @@
-// From policy files to the rules for one design file: follow `extends`, fill what the root
-// file leaves out from the built-in policy, merge layer by layer, then apply the overrides
+// From policy files to the rules for one design file: follow `inherits`, fill what the root
+// file leaves out from the built-in policy, merge layer by layer, then apply the scopes
 // whose globs match the file. A floor may only ever be tightened (and the work budget that
 // judges the floors only raised): a definition that loosens one written in its own file or in
-// a file it extends is a PolicyError naming both lines. A floor from a more basic file that is looser than one a more derived file set is
+// a file it inherits is a PolicyError naming both lines. A floor from a more basic file that is looser than one a more derived file set is
 // simply outvoted (the tighter one holds). Pure: files are read through the `read` callback.
 
 import picomatch from 'picomatch';
@@ -20,10 +20,10 @@ import type {
   FilePolicy,
   Policy,
   PolicyFile,
-  PolicyOverride,
-  RegressionRule,
+  PolicyScope,
   RemovedSeverity,
   Requirement,
+  WeakeningRule,
   Where,
 } from './types.js';
 
@@ -89,7 +89,7 @@ function loosening(prev: Requirement, next: Requirement): { message: string; whe
 }
 
 function loosenError(what: string, why: string, where: Where, prevWhere: Where): PolicyError {
-  return new PolicyError(`${what} ${why}`, where, 'an extending policy or an override may tighten a floor, never loosen it', [
+  return new PolicyError(`${what} ${why}`, where, 'an inheriting policy or a scope may tighten a floor, never loosen it', [
     related(prevWhere, 'the floor it would loosen'),
   ]);
 }
@@ -111,20 +111,20 @@ function mergeRequirement(list: Layered<Requirement>[], next: Layered<Requiremen
   // A more basic file's looser floor: the tighter one from a derived file holds.
 }
 
-type RegressionField =
+type WeakeningField =
   | 'allowedDrop'   | 'allowedRelativeDrop'
-  | 'noiseFactor';
-const REGRESSION_FIELDS: readonly [RegressionField, string][] = [
+  | 'errorMultiple';
+const WEAKENING_FIELDS: readonly [WeakeningField, string][] = [
   ['allowedDrop', 'allowed-drop'],
   ['allowedRelativeDrop', 'allowed-relative-drop'],
-  ['noiseFactor', 'noise-factor'],
+  ['errorMultiple', 'error-multiple'],
 ];
 
 /** Apply the fields `next` sets on top of `prev`, refusing to loosen any of them. */
-function mergeRegression(prev: Layered<RegressionRule>, next: Layered<RegressionRule>, what: string): Layered<RegressionRule> {
-  const merged: RegressionRule = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
+function mergeWeakening(prev: Layered<WeakeningRule>, next: Layered<WeakeningRule>, what: string): Layered<WeakeningRule> {
+  const merged: WeakeningRule = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
   const mayLoosen = next.layer < prev.layer;
-  for (const [field, key] of REGRESSION_FIELDS) {
+  for (const [field, key] of WEAKENING_FIELDS) {
     const at = next.value.fieldWhere[field];
     if (!at) continue;
     const value = next.value[field] as number;
@@ -132,7 +132,7 @@ function mergeRegression(prev: Layered<RegressionRule>, next: Layered<Regression
     const prevAt = prev.value.fieldWhere[field] ?? prev.value.where;
     if (value > before) {
       if (mayLoosen) continue;
-      throw loosenError(what, `loosens regression ${key}: ${value} where ${before} is allowed`, at, prevAt);
+      throw loosenError(what, `loosens weakening ${key}: ${value} where ${before} is allowed`, at, prevAt);
     }
     merged[field] = value;
     merged.fieldWhere[field] = at;
@@ -143,7 +143,7 @@ function mergeRegression(prev: Layered<RegressionRule>, next: Layered<Regression
       if (!mayLoosen) {
         throw loosenError(
           what,
-          `lowers the severity of regressions from ${prev.value.severity} to ${next.value.severity}`,
+          `lowers the weakening severity from ${prev.value.severity} to ${next.value.severity}`,
           sevAt,
           prev.value.fieldWhere.severity ?? prev.value.where,
         );
@@ -189,7 +189,7 @@ function describeBudget(b: Budget): string {
 /**
  * Apply the keys `next` sets on top of `prev`. A budget is not a floor, but it is the effort
  * that judges the floors: what a smaller one cannot settle is "uncertain" (a warning), so a
- * derived file or an override may raise it, never lower it.
+ * derived file or a scope may raise it, never lower it.
  */
 function mergeBudget(prev: Layered<Budget>, next: Layered<Budget>, what: string): Layered<Budget> {
   const merged: Budget = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
@@ -208,7 +208,7 @@ function mergeBudget(prev: Layered<Budget>, next: Layered<Budget>, what: string)
   throw new PolicyError(
     `${what} lowers the budget to ${visits(after)} element visits (${describeBudget(merged)}) where ${visits(before)} (${describeBudget(prev.value)}) is in force`,
     (at && merged.fieldWhere[at]) || next.value.where,
-    'an extending policy or an override may raise the budget, never lower it: a smaller budget leaves requirements uncertain',
+    'an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements uncertain',
     [related((prevAt && prev.value.fieldWhere[prevAt]) || prev.value.where, 'the budget in force')],
   );
 }
@@ -299,14 +299,14 @@ function checkMetrics(spec: RValueSpec, where: Where): void {
   }
 }
 
-function describeRequirementSite(file: PolicyFile, r: Requirement, override?: number): string {
-  const list = override === undefined ? file.requirements : file.overrides[override].requirements;
+function describeRequirementSite(file: PolicyFile, r: Requirement, scope?: number): string {
+  const list = scope === undefined ? file.requirements : file.scopes[scope].requirements;
   const index = (list ?? []).indexOf(r);
   const req = index >= 0 ? `requirement ${index + 1}` : 'a requirement';
-  return override === undefined ? req : `override ${override + 1}, ${req}`;
+  return scope === undefined ? req : `scope ${scope + 1}, ${req}`;
 }
 
-/** Read `entry` and every file it extends, the most basic file first. */
+/** Read `entry` and every file it inherits, the most basic file first. */
 function readChain(entry: string, read: ReadFile): PolicyFile[] {
   const chain: PolicyFile[] = [];
   const seen = new Set<string>();
@@ -314,7 +314,7 @@ function readChain(entry: string, read: ReadFile): PolicyFile[] {
   let from: Where | undefined;
   for (;;) {
     if (seen.has(path)) {
-      throw new PolicyError(`"extends" goes round in a circle back to ${path}`, from ?? { file: path }, 'remove one of the extends lines');
+      throw new PolicyError(`"inherits" goes round in a circle back to ${path}`, from ?? { file: path }, 'remove one of the inherits lines');
     }
     seen.add(path);
     const text = read(path);
@@ -324,9 +324,9 @@ function readChain(entry: string, read: ReadFile): PolicyFile[] {
     }
     const file = parsePolicyFile(text, path);
     chain.unshift(file);
-    if (!file.extends) break;
-    from = file.extends.where;
-    path = file.extends.path;
+    if (!file.inherits) break;
+    from = file.inherits.where;
+    path = file.inherits.path;
   }
   return chain;
 }
@@ -336,7 +336,7 @@ export function builtinPolicy(): Policy {
   return { ...mergeChain([builtin()]), source: 'builtin', files: [] };
 }
 
-/** Load a policy file and the files it extends. Throws PolicyError. */
+/** Load a policy file and the files it inherits. Throws PolicyError. */
 export function loadPolicy(entry: string, read: ReadFile): Policy {
   return mergeChain(readChain(entry, read));
 }
@@ -350,9 +350,9 @@ function mergeChain(chain: PolicyFile[]): Policy {
   let rValue = { spec: (root.rValue ?? base.rValue)!.spec, where: (root.rValue ?? base.rValue)!.where };
   checkMetrics(rValue.spec, rValue.where);
   let designs = root.designs ?? base.designs ?? [];
-  const ignore = [...(root.ignore?.globs ?? [])];
+  const exclude = [...(root.exclude?.globs ?? [])];
   let seed = (root.seed ?? base.seed)?.value ?? 1;
-  let regression: Layered<RegressionRule> = { value: (root.regression ?? base.regression)!, layer: 0 };
+  let weakening: Layered<WeakeningRule> = { value: (root.weakening ?? base.weakening)!, layer: 0 };
   let removed: Layered<{ severity: RemovedSeverity; where?: Where }> = {
     value: root.removedDesigns ?? base.removedDesigns ?? { severity: 'notice' },
     layer: 0,
@@ -371,7 +371,7 @@ function mergeChain(chain: PolicyFile[]): Policy {
     if (layer === 0) return;
     if (file.rValue && !sameRValue(file.rValue.spec, rValue.spec)) {
       throw new PolicyError(
-        'an extending policy cannot change the r-value of the policy it extends',
+        'an inheriting policy cannot change the r-value of the policy it inherits',
         file.rValue.where,
         'the floors of the base policy are measured in its R; remove "r-value" here',
         [related(rValue.where, 'the r-value in force')],
@@ -381,21 +381,21 @@ function mergeChain(chain: PolicyFile[]): Policy {
       const prev = challenges.get(c.name) ?? [...challenges.values()].find((x) => x.engine === c.engine);
       if (prev && !sameChallenge(prev, c)) {
         throw new PolicyError(
-          `challenge "${c.name}" redefines challenge "${prev.name}" of the policy it extends`,
+          `challenge "${c.name}" redefines challenge "${prev.name}" of the policy it inherits`,
           c.where,
-          'an extending policy may add challenges, not change them',
+          'an inheriting policy may add challenges, not change them',
           [related(prev.where, `"${prev.name}" is defined here`)],
         );
       }
       if (!prev) challenges.set(c.name, c);
     }
     if (file.designs) designs = [...designs, ...file.designs];
-    for (const g of file.ignore?.globs ?? []) {
-      if (!ignore.includes(g)) {
+    for (const g of file.exclude?.globs ?? []) {
+      if (!exclude.includes(g)) {
         throw new PolicyError(
-          `an extending policy cannot ignore "${g}": the policy it extends judges those files`,
-          file.ignore!.where,
-          'ignore the files in the base policy, or narrow the designs there',
+          `an inheriting policy cannot exclude "${g}": the policy it inherits judges those files`,
+          file.exclude!.where,
+          'exclude the files in the base policy, or narrow the designs there',
         );
       }
     }
@@ -403,7 +403,7 @@ function mergeChain(chain: PolicyFile[]): Policy {
     for (const r of file.requirements ?? []) {
       mergeRequirement(requirements, { value: r, layer }, describeRequirementSite(file, r));
     }
-    if (file.regression) regression = mergeRegression(regression, { value: file.regression, layer }, 'regression');
+    if (file.weakening) weakening = mergeWeakening(weakening, { value: file.weakening, layer }, 'weakening');
     if (file.removedDesigns) removed = mergeRemoved(removed, { value: file.removedDesigns, layer }, 'the policy');
     if (file.budget) budget = mergeBudget(budget, { value: file.budget, layer }, 'the policy');
   });
@@ -414,19 +414,19 @@ function mergeChain(chain: PolicyFile[]): Policy {
     value: checkRequirement(r.value, challengeList, describeRequirementSite(chain[r.layer] ?? root, r.value)),
   }));
 
-  // Overrides: check them against the merged top level now, so that a loosening is an
-  // error whether or not a changed file matches; overlaps between overrides are per file.
-  const overrides: PolicyOverride[] = [];
+  // Scopes: check them against the merged top level now, so that a loosening is an
+  // error whether or not a changed file matches; overlaps between scopes are per file.
+  const scopes: PolicyScope[] = [];
   chain.forEach((file, layer) =>
-    file.overrides.forEach((o, i) => {
+    file.scopes.forEach((o, i) => {
       const what = (r: Requirement) => describeRequirementSite(file, r, i);
       const requirementsChecked = o.requirements.map((r) => checkRequirement(r, challengeList, what(r)));
       const scratch = checked.map((r) => ({ ...r }));
       for (const r of requirementsChecked) mergeRequirement(scratch, { value: r, layer }, what(r));
-      if (o.regression) mergeRegression(regression, { value: o.regression, layer }, `override ${i + 1}, regression`);
-      if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `override ${i + 1}`);
-      if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `override ${i + 1}`);
-      overrides.push({ ...o, requirements: requirementsChecked, layer });
+      if (o.weakening) mergeWeakening(weakening, { value: o.weakening, layer }, `scope ${i + 1}, weakening`);
+      if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `scope ${i + 1}`);
+      if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `scope ${i + 1}`);
+      scopes.push({ ...o, requirements: requirementsChecked, layer });
     }),
   );
 
@@ -434,16 +434,16 @@ function mergeChain(chain: PolicyFile[]): Policy {
     source: 'file',
     files: chain.map((f) => f.path).reverse(),
     designs,
-    ignore,
+    exclude,
     seed,
     rValue: rValue.spec,
     challenges: challengeList,
     requirements: checked.map((r) => r.value),
-    regression: regression.value,
+    weakening: weakening.value,
     removedDesigns: removed.value,
     budget: budget.value,
-    overrides,
-    layers: { requirements: checked.map((r) => r.layer), regression: regression.layer, removed: removed.layer, budget: budget.layer },
+    scopes,
+    layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer },
   };
 }
 
@@ -466,33 +466,33 @@ function matches(globs: readonly string[], given: string): boolean {
 
 /** Whether the policy treats this repository path as a design file. */
 export function isDesignPath(policy: Policy, path: string): boolean {
-  return policy.designs.some((d) => matches(d.files, path)) && !matches(policy.ignore, path);
+  return policy.designs.some((d) => matches(d.paths, path)) && !matches(policy.exclude, path);
 }
 
-/** The rules for one design file: the policy with its matching overrides applied. Throws PolicyError. */
+/** The rules for one design file: the policy with its matching scopes applied. Throws PolicyError. */
 export function policyForFile(policy: Policy, path: string): FilePolicy {
   const layers = policy.layers;
   const requirements: Layered<Requirement>[] = policy.requirements.map((value, i) => ({ value, layer: layers.requirements[i] }));
-  let regression: Layered<RegressionRule> = { value: policy.regression, layer: layers.regression };
+  let weakening: Layered<WeakeningRule> = { value: policy.weakening, layer: layers.weakening };
   let removed: Layered<{ severity: RemovedSeverity; where?: Where }> = { value: policy.removedDesigns, layer: layers.removed };
   let budget: Layered<Budget> = { value: policy.budget, layer: layers.budget };
-  for (const o of policy.overrides) {
-    if (!matches(o.files, path)) continue;
+  for (const o of policy.scopes) {
+    if (!matches(o.paths, path)) continue;
     const { layer } = o;
-    const what = `an override matching ${path}`;
+    const what = `a scope matching ${path}`;
     for (const r of o.requirements) mergeRequirement(requirements, { value: r, layer }, what);
-    if (o.regression) regression = mergeRegression(regression, { value: o.regression, layer }, `${what}:`);
+    if (o.weakening) weakening = mergeWeakening(weakening, { value: o.weakening, layer }, `${what}:`);
     if (o.removedDesigns) removed = mergeRemoved(removed, { value: o.removedDesigns, layer }, what);
     if (o.budget) budget = mergeBudget(budget, { value: o.budget, layer }, what);
   }
   const b = budget.value;
-  const format = policy.designs.find((d) => d.format !== undefined && matches(d.files, path))?.format;
+  const format = policy.designs.find((d) => d.format !== undefined && matches(d.paths, path))?.format;
   return {
     rValue: policy.rValue,
     seed: policy.seed,
     challenges: policy.challenges,
     requirements: requirements.map((r) => r.value),
-    regression: regression.value,
+    weakening: weakening.value,
     removedDesigns: removed.value.severity,
     budget: { ...(b.work !== undefined ? { work: b.work } : {}), ...(b.seconds !== undefined ? { seconds: b.seconds } : {}), maxWork: budgetWork(b) },
     ...(format ? { format } : {}),

@@ -1,6 +1,6 @@
 // Turns ajv's schema errors into our diagnostics: one plain sentence per problem, at the
 // line and column where it was written, with a "did you mean" when a name is close to a
-// known one.
+// known one (or is the former name of one).
 
 import type { ErrorObject } from 'ajv';
 import { PolicyError } from '../errors.js';
@@ -14,7 +14,7 @@ interface Diagnosed {
   hint: string;
 }
 
-/** Plain words for where a value sits: "requirement 2", "challenge \"random\"", "override 1, requirement 3". */
+/** Plain words for where a value sits: "requirement 2", "challenge \"random\"", "scope 1, requirement 3". */
 export function describePath(path: readonly Segment[]): string {
   if (path.length === 0) return 'the policy';
   const parts: string[] = [];
@@ -25,8 +25,8 @@ export function describePath(path: readonly Segment[]): string {
     if (seg === 'requirements' && typeof next === 'number') {
       parts.push(`requirement ${next + 1}`);
       i += 2;
-    } else if (seg === 'overrides' && typeof next === 'number') {
-      parts.push(`override ${next + 1}`);
+    } else if (seg === 'scopes' && typeof next === 'number') {
+      parts.push(`scope ${next + 1}`);
       i += 2;
     } else if (seg === 'designs' && typeof next === 'number') {
       parts.push(`designs entry ${next + 1}`);
@@ -63,6 +63,33 @@ function typeOf(value: unknown): string {
   return String(value);
 }
 
+/**
+ * Keys renamed before the first release. The old names are not accepted; the unknown-key
+ * error names the new one wherever the new one is a known key.
+ */
+const RENAMED_KEYS: Readonly<Record<string, string>> = {
+  'extends': 'inherits',
+  'ignore': 'exclude',
+  'files': 'paths',
+  'overrides': 'scopes',
+  'regression': 'weakening',
+  'noise-factor': 'error-multiple',
+};
+
+/** The new name of a renamed key, when it is one of the keys known where the old one was written. */
+function renamedKey(key: string, known: readonly string[]): string | undefined {
+  const renamed = Object.hasOwn(RENAMED_KEYS, key) ? RENAMED_KEYS[key] : undefined;
+  return renamed !== undefined && known.includes(renamed) ? renamed : undefined;
+}
+
+/** "path\0new name" for each key written under its former name. */
+function renamedAt(e: ErrorObject): string | undefined {
+  if (e.keyword !== 'additionalProperties') return undefined;
+  const known = Object.keys(((e.parentSchema as Record<string, unknown> | undefined)?.properties as object | undefined) ?? {});
+  const renamed = renamedKey(String((e.params as Record<string, unknown>).additionalProperty), known);
+  return renamed === undefined ? undefined : `${e.instancePath}\0${renamed}`;
+}
+
 function suggestion(word: unknown, candidates: readonly string[], listName: string): string {
   const c = typeof word === 'string' ? closest(word, candidates) : undefined;
   return c !== undefined ? `did you mean "${c}"?` : `${listName}: ${candidates.join(', ')}`;
@@ -81,7 +108,9 @@ function diagnose(e: ErrorObject, src: YamlSource): Diagnosed | undefined {
       if (path.length === 2 && path[0] === 'r-value' && path[1] === 'metrics') {
         return { where, message: `unknown metric "${key}"`, hint: suggestion(key, known, 'known metrics') };
       }
-      return { where, message: `unknown key "${key}" in ${subject}`, hint: suggestion(key, known, 'known keys') };
+      const renamed = renamedKey(key, known);
+      const hint = renamed !== undefined ? `did you mean "${renamed}"?` : suggestion(key, known, 'known keys');
+      return { where, message: `unknown key "${key}" in ${subject}`, hint };
     }
     case 'required': {
       const key = String(params.missingProperty);
@@ -167,10 +196,13 @@ function requirementKinds(schema: Record<string, unknown> | undefined): string[]
 export function throwSchemaErrors(errors: readonly ErrorObject[], src: YamlSource): never {
   // An anyOf error explains its branches' failures; drop those.
   const anyOfPaths = errors.filter((e) => e.keyword === 'anyOf').map((e) => e.instancePath);
+  // A required key written under its former name is missing too: say only that it was renamed.
+  const renamed = new Set(errors.map(renamedAt).filter((r) => r !== undefined));
   const kept = errors.filter(
     (e) =>
-      e.keyword === 'anyOf' ||
-      !anyOfPaths.some((p) => e.instancePath === p || e.instancePath.startsWith(`${p}/`)),
+      (e.keyword === 'anyOf' ||
+        !anyOfPaths.some((p) => e.instancePath === p || e.instancePath.startsWith(`${p}/`))) &&
+      !(e.keyword === 'required' && renamed.has(`${e.instancePath}\0${String((e.params as Record<string, unknown>).missingProperty)}`)),
   );
   const seen = new Set<string>();
   const list: Diagnosed[] = [];

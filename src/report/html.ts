@@ -145,9 +145,9 @@ function masthead(r: Report): string {
         (r.policy.note ? `. ${esc(r.policy.note)}` : r.policy.changed ? ' (this change edits the policy; the proposed policy was not applied)' : ''),
   ]);
   if (r.scope === 'all') meta.push(['Scope', 'every design in the repository, judged against thresholds only']);
-  meta.push(['Mode', r.mode === 'advise' ? 'advise: failures are reported, the run does not fail' : 'enforce: failures fail the check']);
+  meta.push(['Mode', r.mode === 'inform' ? 'inform: failures are reported, the run does not fail' : 'block: failures fail the check']);
   meta.push(['Seed', String(r.seed)]);
-  if (r.shard) meta.push(['Shard', `${r.shard.index} of ${r.shard.total}`]);
+  if (r.part) meta.push(['Part', `${r.part.index} of ${r.part.total}`]);
   const counts = Object.entries(r.counts)
     .filter(([, n]) => n > 0)
     .map(([k, n]) => `${n} ${esc(STATUS_WORD[k as keyof typeof STATUS_WORD])}`)

@@ -212,7 +212,7 @@ function header(report: Report, options: MarkdownOptions): string {
   let verdict: string;
   if (report.files.length === 0) verdict = `${ICON.ok} ${name}: no design file changed \u2014 pass`;
   else if (report.verdict === 'pass') verdict = `${ICON.ok} ${name}: pass`;
-  else if (report.mode === 'advise') verdict = `${ICON.warn} ${name}: would fail (advise mode, not blocking)`;
+  else if (report.mode === 'inform') verdict = `${ICON.warn} ${name}: would fail (inform mode, not blocking)`;
   else verdict = `${ICON.fail} ${name}: the gate failed`;
   const facts: string[] = [`${report.mode} mode`];
   if (report.policy.source === 'builtin') facts.push('built-in default policy (no policy file)');
@@ -224,8 +224,8 @@ function header(report: Report, options: MarkdownOptions): string {
   else if (report.head) facts.push(`head ${shortSha(report.head)}, thresholds only (no base)`);
   facts.push(`seed ${report.seed}`);
   if (report.scope === 'all') facts.push('every design, thresholds only');
-  if (report.shard) facts.push(`shard ${report.shard.index} of ${report.shard.total}`);
-  if (report.shards) facts.push(`merged shards ${report.shards.merged.join(', ')} of ${report.shards.total}`);
+  if (report.part) facts.push(`part ${report.part.index} of ${report.part.total}`);
+  if (report.parts) facts.push(`joined parts ${report.parts.joined.join(', ')} of ${report.parts.total}`);
   let text = `## ${verdict}\n\n${facts.join(' \u00b7 ')}\n\n`;
   if (report.policy.changed) {
     const said = report.policy.note

@@ -61,7 +61,7 @@ function headerLine(r: Report, c: Colors): string {
   const parts = [`netbrace ${r.tool.version}`];
   if (r.base || r.head) parts.push(`base ${shortRevision(r.base)} \u2192 head ${shortRevision(r.head)}`);
   parts.push(`seed ${r.seed}`);
-  if (r.shard) parts.push(`shard ${r.shard.index}/${r.shard.total}`);
+  if (r.part) parts.push(`part ${r.part.index}/${r.part.total}`);
   return c.bold(parts.join(' \u00b7 '));
 }
 
@@ -72,7 +72,7 @@ function policyNotes(r: Report): string[] {
   if (r.policy.note) notes.push(`policy: ${r.policy.note}`);
   else if (r.policy.changed) notes.push('policy: this change edits the policy; the proposed policy was not applied to judge it');
   if (r.scope === 'all') notes.push('scope: every design in the repository, judged against thresholds only');
-  if (r.mode === 'advise') notes.push('mode: advise \u2014 failures are reported but do not fail the run');
+  if (r.mode === 'inform') notes.push('mode: inform \u2014 failures are reported but do not fail the run');
   return notes;
 }
 

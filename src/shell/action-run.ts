@@ -59,7 +59,7 @@ export interface ActionOutput {
 
 export interface ActionDeps {
   gate(request: GateRequestLike, cwd: string): Promise<GateResultLike>;
-  merge(reports: readonly unknown[]): Report;
+  join(reports: readonly unknown[]): Report;
   git(args: string[], cwd: string): Promise<GitResult>;
   github(options: ClientOptions): Client;
   renderHtml?(report: Report): string;
@@ -67,7 +67,7 @@ export interface ActionDeps {
 }
 
 export interface RunOutcome {
-  /** 0 pass (or advise), 1 the gate failed in enforce mode, 2 usage, configuration or internal error. */
+  /** 0 pass (or inform), 1 the gate failed in block mode, 2 usage, configuration or internal error. */
   exitCode: number;
   verdict?: 'pass' | 'fail';
   comment?: UpsertResult | 'failed' | 'not-applicable';
@@ -82,13 +82,13 @@ export class InputError extends Error {
   override name = 'InputError';
 }
 
-export type CommentMode = 'always' | 'on-change' | 'on-failure' | 'never';
+export type CommentMode = 'every-run' | 'when-changed' | 'when-failing' | 'off';
 
 export interface ActionInputs {
   policy: string;
   policySource: 'base' | 'head';
   token: string;
-  mode: 'enforce' | 'advise';
+  mode: 'block' | 'inform';
   comment: CommentMode;
   commentKey: string;
   report: string;
@@ -96,8 +96,8 @@ export interface ActionInputs {
   sarifCategory: string;
   html: string;
   base: string;
-  shard?: { index: number; total: number };
-  merge: string;
+  part?: { index: number; total: number };
+  joinParts: string;
   workingDirectory: string;
   title: string;
   seed?: number;
@@ -143,39 +143,39 @@ const REF_RE = /^(?!-)(?!.*\.\.)[A-Za-z0-9._/@^~-]{1,200}$/;
 
 export function readInputs(env: Env): ActionInputs {
   const workingDirectory = relativePath(env, 'working-directory', '.');
-  const shardText = getInput(env, 'shard');
-  let shard: ActionInputs['shard'];
-  if (shardText) {
-    const m = /^(\d+)\s*\/\s*(\d+)$/.exec(shardText);
+  const partText = getInput(env, 'part');
+  let part: ActionInputs['part'];
+  if (partText) {
+    const m = /^(\d+)\s*\/\s*(\d+)$/.exec(partText);
     const index = m ? Number(m[1]) : NaN;
     const total = m ? Number(m[2]) : NaN;
     if (!m || index < 1 || total < 1 || index > total || total > 256) {
-      throw new InputError(`input "shard" is "${oneLine(shardText, 40)}"; write k/n with 1 \u2264 k \u2264 n \u2264 256, e.g. 2/4 (use the matrix: shard: \${{ matrix.shard }}/4)`);
+      throw new InputError(`input "part" is "${oneLine(partText, 40)}"; write k/n with 1 \u2264 k \u2264 n \u2264 256, e.g. 2/4 (use the matrix: part: \${{ matrix.part }}/4)`);
     }
-    shard = { index, total };
+    part = { index, total };
   }
   const defaultKey = workingDirectory === '.' || workingDirectory === '' ? 'default' : workingDirectory.replace(/[^A-Za-z0-9._/-]/g, '-').slice(0, 64);
   const commentKey = getInput(env, 'comment-key') || defaultKey;
   if (!KEY_RE.test(commentKey)) throw new InputError(`input "comment-key" may use letters, digits, ".", "_", "/" and "-" (at most 64)`);
   const base = getInput(env, 'base');
   if (base && !REF_RE.test(base)) throw new InputError(`input "base" is not a valid git ref or commit id`);
-  const merge = relativePath(env, 'merge', '');
-  if (merge && shard) throw new InputError('inputs "merge" and "shard" exclude each other: shards evaluate, the merge job combines their reports');
+  const joinParts = relativePath(env, 'join-parts', '');
+  if (joinParts && part) throw new InputError('inputs "join-parts" and "part" exclude each other: parts evaluate, the join job combines their reports');
   const category = getInput(env, 'sarif-category') || (commentKey === 'default' ? 'netbrace' : `netbrace-${commentKey}`);
   return {
     policy: repositoryInput(relativePath(env, 'policy', ''), 'policy'),
     policySource: oneOf(env, 'policy-source', ['base', 'head'] as const, 'base'),
     token: getInput(env, 'token'),
-    mode: oneOf(env, 'mode', ['enforce', 'advise'] as const, 'enforce'),
-    comment: oneOf(env, 'comment', ['always', 'on-change', 'on-failure', 'never'] as const, 'on-change'),
+    mode: oneOf(env, 'mode', ['block', 'inform'] as const, 'block'),
+    comment: oneOf(env, 'comment', ['every-run', 'when-changed', 'when-failing', 'off'] as const, 'when-changed'),
     commentKey,
     report: relativePath(env, 'report', '.netbrace-out/netbrace-report.json'),
     sarif: relativePath(env, 'sarif', '.netbrace-out/netbrace.sarif'),
     sarifCategory: category.replace(/[^A-Za-z0-9._-]/g, '-'),
     html: relativePath(env, 'html', ''),
     base,
-    shard,
-    merge,
+    part,
+    joinParts,
     workingDirectory,
     title: oneLine(getInput(env, 'title'), 120),
     seed: optionalInt(env, 'seed', 0, 2 ** 32 - 1),
@@ -288,12 +288,12 @@ async function changedLines(deps: ActionDeps, cwd: string, base: string, head: s
 }
 
 // ---------------------------------------------------------------------------------------------
-// Merging shard reports (untrusted files: size-checked, parsed as data, shape-checked)
+// Joining part reports (untrusted files: size-checked, parsed as data, shape-checked)
 
 const MAX_REPORT_BYTES = 64 * 1024 * 1024;
 
-/** The shard reports in `folder` (and up to three levels below), parsed as data, not yet checked. */
-export function readShardReports(folder: string): { reports: unknown[]; names: string[] } {
+/** The part reports in `folder` (and up to three levels below), parsed as data, not yet checked. */
+export function readPartReports(folder: string): { reports: unknown[]; names: string[] } {
   const names: string[] = [];
   const walk = (dir: string, depth: number) => {
     for (const entry of readdirSync(dir, { withFileTypes: true }).sort((a, b) => (a.name < b.name ? -1 : 1))) {
@@ -307,16 +307,16 @@ export function readShardReports(folder: string): { reports: unknown[]; names: s
   const reports: unknown[] = [];
   for (const file of names) {
     const stat = lstatSync(file);
-    if (stat.size > MAX_REPORT_BYTES) throw new InputError(`shard report ${path.basename(file)} is larger than 64 MiB`);
+    if (stat.size > MAX_REPORT_BYTES) throw new InputError(`part report ${path.basename(file)} is larger than 64 MiB`);
     let parsed: unknown;
     try {
       parsed = JSON.parse(readFileSync(file, 'utf8'));
     } catch {
-      throw new InputError(`shard report ${path.basename(file)} is not valid JSON`);
+      throw new InputError(`part report ${path.basename(file)} is not valid JSON`);
     }
     reports.push(parsed);
   }
-  if (!reports.length) throw new InputError(`input "merge": no shard report (*.json) in ${path.basename(folder)}; download the shards' artifacts there first`);
+  if (!reports.length) throw new InputError(`input "join-parts": no part report (*.json) in ${path.basename(folder)}; download the parts' artifacts there first`);
   return { reports, names };
 }
 
@@ -325,17 +325,17 @@ export function readShardReports(folder: string): { reports: unknown[]; names: s
 
 /** Whether to write the comment, given the mode, the report and the comment that exists. */
 export function shouldWriteComment(mode: CommentMode, report: Report, existing: FoundComment | undefined): boolean {
-  if (mode === 'never') return false;
-  if (mode === 'always') return true;
+  if (mode === 'off') return false;
+  if (mode === 'every-run') return true;
   const failing = report.verdict === 'fail';
-  if (mode === 'on-failure') return failing || existing !== undefined; // a stale failure is corrected
-  // on-change: update when what it says changed; create only when there is something to say.
+  if (mode === 'when-failing') return failing || existing !== undefined; // a stale failure is corrected
+  // when-changed: update when what it says changed; create only when there is something to say.
   if (existing) return commentDigest(existing.body) !== reportDigest(report);
   return failing || report.files.some((f) => f.findings.length > 0);
 }
 
 async function postComment(deps: ActionDeps, env: Env, inputs: ActionInputs, target: Target, report: Report, body: string): Promise<RunOutcome['comment']> {
-  if (!target.pr || inputs.comment === 'never') return 'not-applicable';
+  if (!target.pr || inputs.comment === 'off') return 'not-applicable';
   if (!inputs.token) {
     deps.out.warning('netbrace: no token, so no pull-request comment (set the "token" input, default github.token)');
     return 'failed';
@@ -393,7 +393,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     if (!statSync(workdir).isDirectory()) throw new InputError(`input "working-directory" (${inputs.workingDirectory}) is not a directory`);
     // The gate works at the repository's top level (report paths are repository paths, as
     // annotations and SARIF want them); working-directory only says where the checkout is.
-    // A merge job reads reports only and needs no checkout.
+    // A join job reads reports only and needs no checkout.
     const repositoryRoot = async (): Promise<string> => {
       const top = await deps.git(['rev-parse', '--show-toplevel'], workdir);
       if (top.code !== 0 || top.stdout.trim() === '') {
@@ -406,28 +406,28 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
 
     let report: Report;
     let lines = new Map<string, Set<number>>();
-    if (inputs.merge) {
-      const folder = resolveInWorkspace(workspace, workspace, inputs.merge, 'merge');
-      const { reports, names } = readShardReports(folder);
-      deps.out.info(`netbrace: merging ${reports.length} shard reports`);
+    if (inputs.joinParts) {
+      const folder = resolveInWorkspace(workspace, workspace, inputs.joinParts, 'join-parts');
+      const { reports, names } = readPartReports(folder);
+      deps.out.info(`netbrace: joining ${reports.length} part reports`);
       try {
-        report = deps.merge(reports);
+        report = deps.join(reports);
       } catch (error) {
-        // Name the file: the merge numbers reports in the order they were read.
+        // Name the file: the join numbers reports in the order they were read.
         const m = /^report (\d+)/.exec(error instanceof Error ? error.message : '');
-        if (m && isNetbraceError(error)) throw new InputError(`shard report ${path.basename(names[Number(m[1]) - 1] ?? '?')}: ${error.message.replace(/^report \d+ /, '')}`);
+        if (m && isNetbraceError(error)) throw new InputError(`part report ${path.basename(names[Number(m[1]) - 1] ?? '?')}: ${error.message.replace(/^report \d+ /, '')}`);
         throw error;
       }
       // The report keeps the mode its runs had (what the comment says); whether this step
       // fails follows this job's own "mode" input.
-      const merged = report.shards;
-      if (merged) {
-        const missing = Array.from({ length: merged.total }, (_, i) => i + 1).filter((k) => !merged.merged.includes(k));
+      const joined = report.parts;
+      if (joined) {
+        const missing = Array.from({ length: joined.total }, (_, i) => i + 1).filter((k) => !joined.joined.includes(k));
         if (missing.length) {
-          return fail(`netbrace: shard report${missing.length === 1 ? '' : 's'} ${missing.map((k) => `${k}/${merged.total}`).join(', ')} missing from ${inputs.merge}: every shard must upload its report before the merge job runs (needs: the shard job)`, 2);
+          return fail(`netbrace: part report${missing.length === 1 ? '' : 's'} ${missing.map((k) => `${k}/${joined.total}`).join(', ')} missing from ${inputs.joinParts}: every part must upload its report before the join job runs (needs: the part job)`, 2);
         }
       }
-      notes.push(`Merged from ${names.length} shard report${names.length === 1 ? '' : 's'}.`);
+      notes.push(`Joined from ${names.length} part report${names.length === 1 ? '' : 's'}.`);
     } else if (target.kind === 'nothing') {
       report = emptyReport(inputs, target);
       notes.push(`Nothing to judge: ${target.reason}.`);
@@ -475,7 +475,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
         mode: inputs.mode,
         ...(inputs.seed !== undefined ? { seed: inputs.seed } : {}),
         ...(inputs.threads !== undefined ? { threads: inputs.threads } : {}),
-        ...(inputs.shard ? { shard: inputs.shard } : {}),
+        ...(inputs.part ? { part: inputs.part } : {}),
         eventKind: kind,
       };
       if (paths && paths.length === 0) {
@@ -487,7 +487,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       }
     }
 
-    const shardJob = Boolean(inputs.shard);
+    const partJob = Boolean(inputs.part);
     const artifacts: string[] = [];
     const write = (input: string, given: string, text: string): string => {
       const full = prepareWrite(workspace, workspace, given, input);
@@ -499,16 +499,16 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     const reportPath = inputs.report ? write('report', inputs.report, serializeReport(report)) : '';
     let sarifPath = '';
     let htmlPath = '';
-    if (!shardJob) {
+    if (!partJob) {
       if (inputs.sarif) sarifPath = write('sarif', inputs.sarif, `${JSON.stringify(renderSarif(report, { category: inputs.sarifCategory }), null, 2)}\n`);
       if (inputs.html && deps.renderHtml) htmlPath = write('html', inputs.html, deps.renderHtml(report));
     }
 
-    // Annotations (the merge job emits those of every shard; a shard job leaves them to it).
-    if (!shardJob) {
+    // Annotations (the join job emits those of every part; a part job leaves them to it).
+    if (!partJob) {
       const elsewhere = sarifPath ? `the job summary and ${sarifPath}` : 'the job summary and the JSON report';
       // A failing step also logs its setFailed message as an error annotation: keep a slot for it.
-      const reservedErrors = report.verdict === 'fail' && report.mode === 'enforce' ? 1 : 0;
+      const reservedErrors = report.verdict === 'fail' && report.mode === 'block' ? 1 : 0;
       const plan = planAnnotations(report, { changedLines: lines, elsewhere, reservedErrors });
       for (const a of plan.annotations) deps.out.annotate(a);
     }
@@ -517,10 +517,10 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     let comment: RunOutcome['comment'] = 'not-applicable';
     const url = runUrl(env);
     const viewOptions = { ...(url ? { runUrl: url } : {}), artifacts, ...(inputs.title ? { title: inputs.title } : {}) };
-    if (!shardJob && !target.pr && inputs.pullRequest) {
+    if (!partJob && !target.pr && inputs.pullRequest) {
       target.pr = await trustedPullRequest(deps, env, inputs, target, inputs.pullRequest);
     }
-    if (!shardJob) {
+    if (!partJob) {
       const body = renderComment(report, { ...viewOptions, key: inputs.commentKey });
       comment = await postComment(deps, env, inputs, target, report, body);
       if (comment === 'failed') notes.push('The pull-request comment could not be written (see the warning in the log); this does not change the verdict.');
@@ -539,15 +539,15 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     deps.out.setOutput('comment-url', typeof comment === 'object' && comment.url ? comment.url : '');
 
     const verdict = report.verdict;
-    if (shardJob) {
-      deps.out.info(`netbrace: shard ${inputs.shard!.index}/${inputs.shard!.total} ${verdict === 'fail' ? 'has failures' : 'passes'}; the merge job decides`);
+    if (partJob) {
+      deps.out.info(`netbrace: part ${inputs.part!.index}/${inputs.part!.total} ${verdict === 'fail' ? 'has failures' : 'passes'}; the join job decides`);
       return { exitCode: 0, verdict, comment };
     }
-    if (verdict === 'fail' && inputs.mode === 'enforce') {
+    if (verdict === 'fail' && inputs.mode === 'block') {
       const n = report.files.filter((f) => f.status === 'error' || f.findings.some((x) => x.severity === 'fail')).length;
       return { ...fail(`netbrace: the gate failed: ${n} design${n === 1 ? '' : 's'} with failures (see the annotations and the job summary)`, 1), verdict, comment };
     }
-    if (verdict === 'fail') deps.out.warning('netbrace: the gate would fail; advise mode reports without failing the step');
+    if (verdict === 'fail') deps.out.warning('netbrace: the gate would fail; inform mode reports without failing the step');
     return { exitCode: 0, verdict, comment };
   } catch (error) {
     if (isNetbraceError(error)) {

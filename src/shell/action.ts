@@ -4,7 +4,7 @@ import { availableParallelism } from 'node:os';
 import * as core from '@actions/core';
 import { evaluateDesignParallel } from '../parallel/pool.js';
 import { renderHtml } from '../report/html.js';
-import { mergeReports, runGate } from '../run-gate.js';
+import { joinReports, runGate } from '../run-gate.js';
 import { coreOutput, defaultGithub, run } from './action-run.js';
 import { gitDeps, runGit } from './git.js';
 
@@ -14,7 +14,7 @@ run(process.env, {
     const threads = request.threads ?? availableParallelism();
     return runGate(request, { ...gitDeps(root), ...(threads > 1 ? { evaluate: (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) } : {}) });
   },
-  merge: mergeReports,
+  join: joinReports,
   git: (args, cwd) => runGit(cwd, args),
   github: defaultGithub,
   renderHtml,

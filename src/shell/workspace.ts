@@ -5,7 +5,7 @@
 // first kinds; realpath() of the target — or, for a file still to be written, of its nearest
 // existing ancestor — catches the links. Writes never follow a link at the target itself.
 //
-// Who uses it: the Action's inputs (policy, report, sarif, html, merge, working-directory),
+// Who uses it: the Action's inputs (policy, report, sarif, html, join-parts, working-directory),
 // the gate's reader of the working tree (design and policy files named by the policy, by git
 // or on the command line), and the policy reader of `netbrace explain`. Not the files a local
 // user names explicitly to `inspect`/`explain` or as `--json FILE`: those are the user's own.

@@ -1,7 +1,7 @@
 // The one place where every parser turns what it read into a Topology, so that all four
 // formats agree on the rules: ids are unique, link ends must exist, self-loops are dropped
 // with a warning, parallel links are kept (physical redundancy) with distinct stable keys,
-// and the element limit is enforced as elements arrive rather than after the fact.
+// and the element limit is applied as elements arrive rather than after the fact.
 
 import { DesignError, LimitError, type Diagnostic } from '../errors.js';
 import { didYouMean } from './suggest.js';

@@ -1,7 +1,7 @@
 // The bundled Action, run as the runner runs it (see harness.ts), with the inputs of the
 // README's workflows, in temporary git repositories with real base and head commits, against
 // a loopback stand-in for the REST API. One scenario per behaviour the issue names: pass, fail,
-// advise, fork, shallow clone, API down, rate limit, API hanging, shards merged, push, schedule,
+// inform, fork, shallow clone, API down, rate limit, API hanging, parts joined, push, schedule,
 // nothing changed.
 
 import { mkdtempSync, readFileSync, readdirSync, rmSync, existsSync } from 'node:fs';
@@ -12,7 +12,7 @@ import path from 'node:path';
 import { parse as parseYaml } from 'yaml';
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { commentMarker } from '../../src/report/markdown.js';
-import { inShard } from '../../src/run-gate.js';
+import { inPart } from '../../src/run-gate.js';
 import { startFakeApi, type FakeApi } from './fake-api.js';
 import { execFileSync } from 'node:child_process';
 import {
@@ -67,9 +67,9 @@ requirements:
   - kind: no-new-spof
   - kind: area-floor
     challenge: node-failures
-regression:
+weakening:
   allowed-drop: 0.05
-  noise-factor: 2
+  error-multiple: 2
 `;
 
 const TOKEN = 'ghs_test_token';
@@ -84,7 +84,7 @@ interface Scenario {
   fail: string;
   pass: string;
   readme: string;
-  shards: string;
+  parts: string;
 }
 
 let scenario: Scenario;
@@ -131,14 +131,14 @@ beforeAll(() => {
   git(author, 'checkout', '-q', '--detach', base);
   const readme = commit(author, 'docs only', { 'README.md': 'designs, documented\n' });
   git(author, 'checkout', '-q', '--detach', base);
-  const shards = commit(author, 'retire one span in every design', {
+  const parts = commit(author, 'retire one span in every design', {
     [DESIGN]: ring([], CHAIN_DROP),
     'nets/metro-a.net.yaml': ring([['harbour', 'weir'], ['mill', 'moor']]),
     'nets/metro-b.net.yaml': ring([['mill', 'orchard'], ['quarry', 'ferry']]),
     'nets/metro-c.net.yaml': ring([['quarry', 'moor']], CHAIN_DROP),
   });
-  for (const [name, sha] of Object.entries({ fail, pass, readme, shards })) git(author, 'push', '-q', origin, `${sha}:refs/heads/${name}`);
-  scenario = { root, origin, base, fail, pass, readme, shards };
+  for (const [name, sha] of Object.entries({ fail, pass, readme, parts })) git(author, 'push', '-q', origin, `${sha}:refs/heads/${name}`);
+  scenario = { root, origin, base, fail, pass, readme, parts };
 }, 120_000);
 
 afterAll(() => {
@@ -210,8 +210,8 @@ describe('the README workflow is what the Action accepts', () => {
     for (const [wf, job, values] of [
       ['pull-request', 'netbrace', {}],
       ['fork-comment', 'comment', { 'steps.pr.outputs.number': '7' }],
-      ['shards', 'shard', { 'matrix.shard': '1' }],
-      ['shards', 'decide', {}],
+      ['parts', 'part', { 'matrix.part': '1' }],
+      ['parts', 'decide', {}],
     ] as const) {
       for (const name of Object.keys(netbraceInputs(wf, job, values))) expect(declared.has(name), `${wf}/${job}: ${name}`).toBe(true);
     }
@@ -279,21 +279,21 @@ describe('pull requests', () => {
     expect(api.requests.every((q) => q.authorization === `token ${TOKEN}`)).toBe(true);
   }, 60_000);
 
-  it('advise: the same findings, the step passes', async () => {
+  it('inform: the same findings, the step passes', async () => {
     const ws = checkout(scenario.fail, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ mode: 'advise' }));
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ mode: 'inform' }));
     expect(r.code, r.stdout + r.stderr).toBe(0);
     expect(r.outputs.verdict).toBe('fail');
     expect(failedMessages(r)).toEqual([]);
     expect(commands(r.stdout, 'error').filter((c) => c.props.file).length).toBeGreaterThan(0);
-    expect(commands(r.stdout, 'warning').some((c) => /advise mode/.test(c.message))).toBe(true);
-    expect(r.summary).toContain('would fail (advise mode, not blocking)');
+    expect(commands(r.stdout, 'warning').some((c) => /inform mode/.test(c.message))).toBe(true);
+    expect(r.summary).toContain('would fail (inform mode, not blocking)');
   }, 30_000);
 
   it('fork: the read-only token\u2019s 403 is a warning; summary, annotations and verdict stand', async () => {
     api.writes = 'forbidden';
     const ws = checkout(scenario.fail, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'always' }));
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'every-run' }));
     expect(r.code).toBe(1);
     expect(r.outputs.verdict).toBe('fail');
     expect(failedMessages(r)).toHaveLength(1);
@@ -305,7 +305,7 @@ describe('pull requests', () => {
 
   it('fork, two workflows: the pull_request run uploads the report, the workflow_run run posts it', async () => {
     const ws = checkout(scenario.fail, { shallow: false });
-    const first = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'never' }));
+    const first = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'off' }));
     expect(first.code).toBe(1);
     expect(api.requests).toEqual([]);
     // upload-artifact / download-artifact: the .netbrace-out folder, plus the pr-number file.
@@ -318,7 +318,7 @@ describe('pull requests', () => {
     const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('fork-comment', 'comment', { 'steps.pr.outputs.number': number }) };
     const event = { workflow_run: { id: 99, event: 'pull_request', head_sha: scenario.fail } };
     const r = await runAction({ workspace: second, runnerTemp: path.join(work, 'rt-comment'), eventName: 'workflow_run', event, inputs, apiUrl: api.url });
-    expect(r.code, r.stdout + r.stderr).toBe(0); // advise: the first run decided
+    expect(r.code, r.stdout + r.stderr).toBe(0); // inform: the first run decided
     expect(api.comments).toHaveLength(1);
     expect(api.comments[0].body).toContain('the gate failed');
     expect(api.requests.some((q) => q.method === 'GET' && q.path === '/repos/acme/backbone/pulls/7')).toBe(true);
@@ -361,18 +361,18 @@ describe('pull requests', () => {
     expect(r.code, r.stdout + r.stderr).toBe(0);
     expect(r.outputs).toMatchObject({ verdict: 'pass', designs: '0' });
     expect(r.summary).toContain('no design file changed');
-    // on-change: nothing to say, so no comment is created.
+    // when-changed: nothing to say, so no comment is created.
     expect(api.comments).toHaveLength(0);
   }, 30_000);
 });
 
 describe('errors', () => {
-  it('a broken policy: one failure message with its line, an annotation on the policy, in advise mode too', async () => {
+  it('a broken policy: one failure message with its line, an annotation on the policy, in inform mode too', async () => {
     const author = path.join(work, 'broken-policy');
     git(work, 'clone', '-q', `file://${scenario.origin}`, author);
     const base = commit(author, 'typo in the policy', { '.netbrace.yaml': POLICY.replace('realizations: 40', 'realisations: 40') });
     const head = commit(author, 'chain', { [DESIGN]: ring([], CHAIN_DROP) });
-    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ mode: 'advise' }));
+    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ mode: 'inform' }));
     expect(r.code).toBe(1);
     const failed = failedMessages(r);
     expect(failed).toHaveLength(1);
@@ -394,7 +394,7 @@ describe('hostile element ids', () => {
     git(work, 'clone', '-q', `file://${scenario.origin}`, author);
     const base = commit(author, 'hostile ring', { 'nets/hostile.net.yaml': design(true) });
     const head = commit(author, 'hostile chain', { 'nets/hostile.net.yaml': design(false) });
-    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ comment: 'always' }));
+    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ comment: 'every-run' }));
     expect(r.code, r.stdout + r.stderr).toBe(1);
     for (const line of r.stdout.split('\n')) {
       expect(line).not.toMatch(/^::(warning|error)::(forged|x)/);
@@ -417,7 +417,7 @@ describe('an unreliable API never changes the verdict', () => {
     api.reads = 'error500';
     api.writes = 'error500';
     const ws = checkout(scenario.fail, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ comment: 'always' }));
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ comment: 'every-run' }));
     expect(r.code).toBe(1);
     expect(r.outputs.verdict).toBe('fail');
     expect(failedMessages(r)).toHaveLength(1);
@@ -430,7 +430,7 @@ describe('an unreliable API never changes the verdict', () => {
     api.reads = 'rateLimit';
     api.failFirst = 1;
     const ws = checkout(scenario.fail, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ comment: 'always' }));
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ comment: 'every-run' }));
     expect(r.code).toBe(1);
     expect(api.comments).toHaveLength(1);
     expect(r.stdout).toMatch(/rate limit .*retrying/);
@@ -439,7 +439,7 @@ describe('an unreliable API never changes the verdict', () => {
   it('API hanging: each call times out, the step ends in seconds', async () => {
     api.reads = 'hang';
     const ws = checkout(scenario.pass, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.pass), prInputs({ comment: 'always' }));
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.pass), prInputs({ comment: 'every-run' }));
     expect(r.code, r.stdout + r.stderr).toBe(0);
     expect(r.outputs.verdict).toBe('pass');
     expect(commands(r.stdout, 'warning').some((c) => /no answer within 500 ms/.test(c.message))).toBe(true);
@@ -476,45 +476,45 @@ describe('other events', () => {
   }, 30_000);
 });
 
-describe('shards', () => {
-  it('two matrix legs, then the merge job: one summary, one comment, one verdict', async () => {
-    const legs = (readmeWorkflow('shards').jobs.shard.strategy?.matrix?.shard ?? []).map(String);
+describe('parts', () => {
+  it('two matrix legs, then the join job: one summary, one comment, one verdict', async () => {
+    const legs = (readmeWorkflow('parts').jobs.part.strategy?.matrix?.part ?? []).map(String);
     expect(legs).toEqual(['1', '2']);
-    const shardFolder = path.join(work, 'decide-ws', '.netbrace-shards');
-    const perShard: string[][] = [];
+    const partFolder = path.join(work, 'decide-ws', '.netbrace-parts');
+    const perPart: string[][] = [];
     for (const k of legs) {
       const ws = path.join(work, `leg-${k}`);
-      git(work, 'clone', '-q', '--depth=1', '--branch', 'shards', `file://${scenario.origin}`, ws);
-      const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('shards', 'shard', { 'matrix.shard': k }) };
-      const r = await runAction({ workspace: ws, runnerTemp: path.join(work, `rt-${k}`), eventName: 'pull_request', event: prEvent(scenario.base, scenario.shards), inputs, apiUrl: api.url });
-      expect(r.code, r.stdout + r.stderr).toBe(0); // shard legs never decide
+      git(work, 'clone', '-q', '--depth=1', '--branch', 'parts', `file://${scenario.origin}`, ws);
+      const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('parts', 'part', { 'matrix.part': k }) };
+      const r = await runAction({ workspace: ws, runnerTemp: path.join(work, `rt-${k}`), eventName: 'pull_request', event: prEvent(scenario.base, scenario.parts), inputs, apiUrl: api.url });
+      expect(r.code, r.stdout + r.stderr).toBe(0); // part legs never decide
       expect(commands(r.stdout, 'error')).toEqual([]);
       const file = path.join(ws, r.outputs.report);
-      expect(r.outputs.report).toBe(`.netbrace-out/shard-${k}.json`);
-      const shard = JSON.parse(readFileSync(file, 'utf8'));
-      expect(shard.shard).toEqual({ index: Number(k), total: 2 });
-      perShard.push(shard.files.map((f: { path: string }) => f.path));
+      expect(r.outputs.report).toBe(`.netbrace-out/part-${k}.json`);
+      const part = JSON.parse(readFileSync(file, 'utf8'));
+      expect(part.part).toEqual({ index: Number(k), total: 2 });
+      perPart.push(part.files.map((f: { path: string }) => f.path));
       // "upload-artifact" then "download-artifact" with merge-multiple: one folder of reports.
       git(work, 'init', '-q', path.join(work, 'decide-ws'));
       const { mkdirSync, copyFileSync } = await import('node:fs');
-      mkdirSync(shardFolder, { recursive: true });
-      copyFileSync(file, path.join(shardFolder, path.basename(file)));
+      mkdirSync(partFolder, { recursive: true });
+      copyFileSync(file, path.join(partFolder, path.basename(file)));
     }
     const all = ['nets/metro-a.net.yaml', 'nets/metro-b.net.yaml', 'nets/metro-c.net.yaml', DESIGN];
-    expect([...perShard.flat()].sort()).toEqual(all);
-    for (const [i, files] of perShard.entries()) for (const f of files) expect(inShard(f, { index: i + 1, total: 2 })).toBe(true);
+    expect([...perPart.flat()].sort()).toEqual(all);
+    for (const [i, files] of perPart.entries()) for (const f of files) expect(inPart(f, { index: i + 1, total: 2 })).toBe(true);
     expect(api.requests).toEqual([]); // legs write no comment
 
     const decide = path.join(work, 'decide-ws');
-    const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('shards', 'decide') };
-    const r = await runAction({ workspace: decide, runnerTemp: path.join(work, 'rt-decide'), eventName: 'pull_request', event: prEvent(scenario.base, scenario.shards), inputs, apiUrl: api.url });
+    const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('parts', 'decide') };
+    const r = await runAction({ workspace: decide, runnerTemp: path.join(work, 'rt-decide'), eventName: 'pull_request', event: prEvent(scenario.base, scenario.parts), inputs, apiUrl: api.url });
     expect(r.code, r.stdout + r.stderr).toBe(1);
     expect(r.outputs).toMatchObject({ verdict: 'fail', designs: '4' });
-    expect(r.summary).toContain('merged shards 1, 2 of 2');
+    expect(r.summary).toContain('joined parts 1, 2 of 2');
     for (const f of all) expect(r.summary).toContain(`\`${f}\``);
     expect(api.comments).toHaveLength(1);
     expect(commands(r.stdout, 'error').filter((c) => c.props.file).length).toBeGreaterThan(0);
     expect(existsSync(path.join(decide, '.netbrace-out', 'netbrace.sarif'))).toBe(true);
-    expect(readdirSync(shardFolder).sort()).toEqual(['shard-1.json', 'shard-2.json']);
+    expect(readdirSync(partFolder).sort()).toEqual(['part-1.json', 'part-2.json']);
   }, 60_000);
 });

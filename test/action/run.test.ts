@@ -22,7 +22,7 @@ import {
   type GitResult,
 } from '../../src/shell/action-run.js';
 import { createClient } from '../../src/shell/github.js';
-import { mergeReports } from '../../src/gate/merge.js';
+import { joinReports } from '../../src/gate/join.js';
 import { startFakeApi, type FakeApi } from './fake-api.js';
 import { emptyReport, sampleReport } from '../report/sample-report.js';
 
@@ -83,7 +83,7 @@ function env(over: Record<string, string> = {}): Record<string, string> {
     GITHUB_API_URL: api.url,
     GITHUB_RUN_ID: '99',
     'INPUT_TOKEN': 'tok',
-    'INPUT_COMMENT': 'always',
+    'INPUT_COMMENT': 'every-run',
     NETBRACE_HTTP_RETRIES: '1',
     NETBRACE_HTTP_BACKOFF_MS: '5',
     NETBRACE_HTTP_TIMEOUT_MS: '300',
@@ -98,9 +98,9 @@ function deps(report: Report | ((r: GateRequestLike) => Report), git: (args: str
       rec.gateCalls.push(request);
       const r = typeof report === 'function' ? report(request) : structuredClone(report);
       r.mode = request.mode;
-      return { report: r, exitCode: r.verdict === 'fail' && request.mode === 'enforce' ? 1 : 0 };
+      return { report: r, exitCode: r.verdict === 'fail' && request.mode === 'block' ? 1 : 0 };
     },
-    merge: mergeReports,
+    join: joinReports,
     git: async (args) => {
       rec.gitCalls.push(args);
       if (args[0] === 'rev-parse' && args[1] === '--show-toplevel') return { code: 0, stdout: `${path.join(dir, 'ws')}\n`, stderr: '' };
@@ -136,20 +136,29 @@ describe('inputs', () => {
   });
 
   it('reads the runner\u2019s INPUT_ names (upper case, dashes kept) and validates them', () => {
-    const i = readInputs({ 'INPUT_COMMENT-KEY': 'metro', 'INPUT_POLICY-SOURCE': 'head', INPUT_SHARD: '2/4', INPUT_MODE: 'advise' });
-    expect(i).toMatchObject({ commentKey: 'metro', policySource: 'head', shard: { index: 2, total: 4 }, mode: 'advise', comment: 'on-change' });
-    expect(() => readInputs({ INPUT_MODE: 'strict' })).toThrow(/input "mode" is "strict"; use one of: enforce, advise/);
-    expect(() => readInputs({ INPUT_SHARD: '5/4' })).toThrow(/input "shard"/);
+    const i = readInputs({ 'INPUT_COMMENT-KEY': 'metro', 'INPUT_POLICY-SOURCE': 'head', INPUT_PART: '2/4', INPUT_MODE: 'inform' });
+    expect(i).toMatchObject({ commentKey: 'metro', policySource: 'head', part: { index: 2, total: 4 }, mode: 'inform', comment: 'when-changed' });
+    expect(() => readInputs({ INPUT_MODE: 'strict' })).toThrow(/input "mode" is "strict"; use one of: block, inform/);
+    expect(() => readInputs({ INPUT_PART: '5/4' })).toThrow(/input "part"/);
     expect(() => readInputs({ 'INPUT_COMMENT-KEY': 'a b' })).toThrow(/comment-key/);
     expect(() => readInputs({ INPUT_BASE: '--upload-pack=evil' })).toThrow(/input "base"/);
-    expect(() => readInputs({ INPUT_SHARD: '1/2', INPUT_MERGE: 'shards' })).toThrow(/exclude each other/);
+    expect(() => readInputs({ INPUT_PART: '1/2', 'INPUT_JOIN-PARTS': 'parts' })).toThrow(/exclude each other/);
+  });
+
+  it('the former values of mode and comment are refused with the values to use', () => {
+    for (const old of ['enforce', 'advise']) {
+      expect(() => readInputs({ INPUT_MODE: old })).toThrow(`input "mode" is "${old}"; use one of: block, inform`);
+    }
+    for (const old of ['always', 'on-change', 'on-failure', 'never']) {
+      expect(() => readInputs({ INPUT_COMMENT: old })).toThrow(`input "comment" is "${old}"; use one of: every-run, when-changed, when-failing, off`);
+    }
   });
 
   it('a bad input ends in exactly one setFailed and no evaluation', async () => {
     const { d, rec } = deps(sampleReport());
     const out = await run(env({ INPUT_COMMENT: 'sometimes' }), d);
     expect(out.exitCode).toBe(2);
-    expect(rec.failed).toEqual(['netbrace: input "comment" is "sometimes"; use one of: always, on-change, on-failure, never']);
+    expect(rec.failed).toEqual(['netbrace: input "comment" is "sometimes"; use one of: every-run, when-changed, when-failing, off']);
     expect(rec.gateCalls.length).toBe(0);
   });
 
@@ -170,7 +179,7 @@ describe('events', () => {
   it('pull_request: compares the payload\u2019s base and head, never GITHUB_SHA', async () => {
     const { d, rec } = deps(sampleReport());
     await run(env(), d);
-    expect(rec.gateCalls[0]).toMatchObject({ base: BASE, head: HEAD, policySource: 'base', mode: 'enforce', eventKind: 'pull-request' });
+    expect(rec.gateCalls[0]).toMatchObject({ base: BASE, head: HEAD, policySource: 'base', mode: 'block', eventKind: 'pull-request' });
     expect(JSON.stringify(rec.gateCalls)).not.toContain(MERGE_SHA);
   });
 
@@ -193,7 +202,7 @@ describe('events', () => {
   it('the report of a run with nothing to judge follows the published report schema', () => {
     const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
     const validate = new Ajv({ allErrors: true, strict: false }).compile(JSON.parse(readFileSync(path.join(root, 'src', 'report', 'report.schema.json'), 'utf8')));
-    for (const r of [emptyRunReport({ mode: 'advise', policy: '', seed: undefined }, {}), emptyRunReport({ mode: 'enforce', policy: 'p.yaml', seed: 3 }, { base: BASE, head: HEAD })]) {
+    for (const r of [emptyRunReport({ mode: 'inform', policy: '', seed: undefined }, {}), emptyRunReport({ mode: 'block', policy: 'p.yaml', seed: 3 }, { base: BASE, head: HEAD })]) {
       expect(validate(JSON.parse(JSON.stringify(r))), JSON.stringify(validate.errors)).toBe(true);
     }
   });
@@ -230,7 +239,7 @@ describe('events', () => {
 });
 
 describe('verdict and comment', () => {
-  it('enforce + fail: one setFailed at the end, after summary, annotations and outputs', async () => {
+  it('block + fail: one setFailed at the end, after summary, annotations and outputs', async () => {
     const { d, rec } = deps(sampleReport());
     const out = await run(env(), d);
     expect(out).toMatchObject({ exitCode: 1, verdict: 'fail' });
@@ -242,13 +251,13 @@ describe('verdict and comment', () => {
     expect(written.verdict).toBe('fail');
   });
 
-  it('advise + fail: reports, warns, never fails the step', async () => {
+  it('inform + fail: reports, warns, never fails the step', async () => {
     const { d, rec } = deps(sampleReport());
-    const out = await run(env({ INPUT_MODE: 'advise' }), d);
+    const out = await run(env({ INPUT_MODE: 'inform' }), d);
     expect(out).toMatchObject({ exitCode: 0, verdict: 'fail' });
     expect(rec.failed).toEqual([]);
     expect(rec.outputs.verdict).toBe('fail');
-    expect(rec.warnings.some((w) => /advise mode/.test(w))).toBe(true);
+    expect(rec.warnings.some((w) => /inform mode/.test(w))).toBe(true);
   });
 
   it('one living comment: created, then updated in place', async () => {
@@ -290,13 +299,13 @@ describe('verdict and comment', () => {
     const fail = sampleReport();
     const pass = emptyReport();
     const existing = { id: 1, body: renderComment(fail, { key: 'k' }) };
-    expect(shouldWriteComment('never', fail, undefined)).toBe(false);
-    expect(shouldWriteComment('always', pass, undefined)).toBe(true);
-    expect(shouldWriteComment('on-failure', pass, undefined)).toBe(false);
-    expect(shouldWriteComment('on-failure', pass, existing)).toBe(true);
-    expect(shouldWriteComment('on-change', fail, existing)).toBe(false);
-    expect(shouldWriteComment('on-change', pass, existing)).toBe(true);
-    expect(shouldWriteComment('on-change', pass, undefined)).toBe(false);
+    expect(shouldWriteComment('off', fail, undefined)).toBe(false);
+    expect(shouldWriteComment('every-run', pass, undefined)).toBe(true);
+    expect(shouldWriteComment('when-failing', pass, undefined)).toBe(false);
+    expect(shouldWriteComment('when-failing', pass, existing)).toBe(true);
+    expect(shouldWriteComment('when-changed', fail, existing)).toBe(false);
+    expect(shouldWriteComment('when-changed', pass, existing)).toBe(true);
+    expect(shouldWriteComment('when-changed', pass, undefined)).toBe(false);
   });
 });
 
@@ -306,16 +315,16 @@ describe('workflow_run (posting a fork\u2019s report)', () => {
     writeFileSync(file, JSON.stringify({ workflow_run: { head_sha: headSha, event: 'pull_request' } }));
     return file;
   }
-  function shardsDir(): void {
+  function partsDir(): void {
     mkdirSync(path.join(dir, 'ws', 'in'), { recursive: true });
     writeFileSync(path.join(dir, 'ws', 'in', 'netbrace-report.json'), JSON.stringify(sampleReport()));
   }
 
   it('comments on the pull request whose head is the evaluated commit', async () => {
-    shardsDir();
+    partsDir();
     api.prHeadSha = HEAD;
     const { d, rec } = deps(sampleReport());
-    const out = await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), INPUT_MERGE: 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'advise' }), d);
+    const out = await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), 'INPUT_JOIN-PARTS': 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'inform' }), d);
     expect(out).toMatchObject({ exitCode: 0, verdict: 'fail' });
     expect(rec.gateCalls).toEqual([]);
     expect(api.comments).toHaveLength(1);
@@ -323,52 +332,52 @@ describe('workflow_run (posting a fork\u2019s report)', () => {
   });
 
   it('refuses a pull-request number that does not match the evaluated commit', async () => {
-    shardsDir();
+    partsDir();
     api.prHeadSha = 'e'.repeat(40);
     const { d, rec } = deps(sampleReport());
-    await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), INPUT_MERGE: 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'advise' }), d);
+    await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), 'INPUT_JOIN-PARTS': 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'inform' }), d);
     expect(api.comments).toHaveLength(0);
     expect(rec.warnings.some((w) => /not at bbbbbbbbbbbb/.test(w))).toBe(true);
   });
 });
 
-describe('shards', () => {
-  it('a shard job writes its report and leaves the decision to the merge job', async () => {
+describe('parts', () => {
+  it('a part job writes its report and leaves the decision to the join job', async () => {
     const r = sampleReport();
-    r.shard = { index: 1, total: 2 };
+    r.part = { index: 1, total: 2 };
     const { d, rec } = deps(r);
-    const out = await run(env({ INPUT_SHARD: '1/2', INPUT_REPORT: 'shards/shard-1.json' }), d);
+    const out = await run(env({ INPUT_PART: '1/2', INPUT_REPORT: 'parts/part-1.json' }), d);
     expect(out).toMatchObject({ exitCode: 0, verdict: 'fail' });
-    expect(rec.gateCalls[0].shard).toEqual({ index: 1, total: 2 });
+    expect(rec.gateCalls[0].part).toEqual({ index: 1, total: 2 });
     expect(rec.annotations).toEqual([]);
     expect(rec.failed).toEqual([]);
     expect(api.requests).toEqual([]);
-    expect(existsSync(path.join(dir, 'ws', 'shards', 'shard-1.json'))).toBe(true);
+    expect(existsSync(path.join(dir, 'ws', 'parts', 'part-1.json'))).toBe(true);
   });
 
-  it('the merge job reads the shard reports as data and decides', async () => {
-    const shards = path.join(dir, 'ws', 'shards');
-    mkdirSync(shards);
+  it('the join job reads the part reports as data and decides', async () => {
+    const parts = path.join(dir, 'ws', 'parts');
+    mkdirSync(parts);
     const r1 = sampleReport();
     r1.files = r1.files.slice(0, 2);
     const r2 = sampleReport();
     r2.files = r2.files.slice(2);
-    writeFileSync(path.join(shards, 'a.json'), JSON.stringify(r1));
-    writeFileSync(path.join(shards, 'b.json'), JSON.stringify(r2));
+    writeFileSync(path.join(parts, 'a.json'), JSON.stringify(r1));
+    writeFileSync(path.join(parts, 'b.json'), JSON.stringify(r2));
     const { d, rec } = deps(sampleReport());
-    const out = await run(env({ INPUT_MERGE: 'shards' }), d);
+    const out = await run(env({ 'INPUT_JOIN-PARTS': 'parts' }), d);
     expect(rec.gateCalls).toEqual([]);
     expect(out).toMatchObject({ exitCode: 1, verdict: 'fail' });
     expect(rec.outputs.designs).toBe('5');
-    r2.shard = { index: 2, total: 3 };
-    writeFileSync(path.join(shards, 'b.json'), JSON.stringify(r2));
+    r2.part = { index: 2, total: 3 };
+    writeFileSync(path.join(parts, 'b.json'), JSON.stringify(r2));
     const gap = deps(sampleReport());
-    expect((await run(env({ INPUT_MERGE: 'shards' }), gap.d)).exitCode).toBe(2);
-    expect(gap.rec.failed[0]).toMatch(/shard reports 1\/3, 3\/3 missing/);
-    writeFileSync(path.join(shards, 'c.json'), '{"not":"a report"}');
+    expect((await run(env({ 'INPUT_JOIN-PARTS': 'parts' }), gap.d)).exitCode).toBe(2);
+    expect(gap.rec.failed[0]).toMatch(/part reports 1\/3, 3\/3 missing/);
+    writeFileSync(path.join(parts, 'c.json'), '{"not":"a report"}');
     const bad = deps(sampleReport());
-    const out2 = await run(env({ INPUT_MERGE: 'shards' }), bad.d);
+    const out2 = await run(env({ 'INPUT_JOIN-PARTS': 'parts' }), bad.d);
     expect(out2.exitCode).toBe(2);
-    expect(bad.rec.failed[0]).toMatch(/shard report c\.json: .*not a netbrace report/);
+    expect(bad.rec.failed[0]).toMatch(/part report c\.json: .*not a netbrace report/);
   });
 });

@@ -6,7 +6,7 @@ import { runGate, type GateRequest } from '../../src/run-gate.js';
 import type { Report } from '../../src/report/report.js';
 import { gateFixture, lineOf, memoryDeps, pairRepo, repoRoot, type MemoryRepo } from './memory-repo.js';
 
-const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'enforce' };
+const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block' };
 const FILE = 'networks/site.net.yaml';
 
 async function gate(repo: MemoryRepo, extra: Partial<GateRequest> = {}) {
@@ -87,7 +87,7 @@ describe('gate decisions on fixture pairs', () => {
     expect(f.changes?.removed.filter((e) => e.kind === 'node').map((e) => e.id)).toEqual(['annex']);
   });
 
-  it('a drop below noise-factor × se is within noise, never a failure, even with no allowance', async () => {
+  it('a drop below error-multiple × se is within noise, never a failure, even with no allowance', async () => {
     const strict = gateFixture('policy.yaml').replace('allowed-drop: 0.05', 'allowed-drop: 0');
     const { report } = await gate(pairRepo('removed-node', FILE, strict));
     const f = fileOf(report);
@@ -177,7 +177,7 @@ describe('envelope floors read the engine\'s envelope', () => {
     ].join('\n');
   const run = (min: number) =>
     runGate(
-      { head: 'head', policySource: 'head', mode: 'enforce', paths: [FILE] },
+      { head: 'head', policySource: 'head', mode: 'block', paths: [FILE] },
       memoryDeps({ base: {}, head: { '.netbrace.yaml': policy(min), [FILE]: gateFixture('removed-node/base.net.yaml') } }),
     );
 
@@ -242,7 +242,7 @@ describe('a threshold on a known attack curve (karate club, static degree attack
   it('is met at 6 % removed and missed at 12 %, with the values and sequence of the reference', async () => {
     const repo: MemoryRepo = { base: {}, head: { '.netbrace.yaml': policy, 'karate.net.yaml': design } };
     const { report, exitCode } = await runGate(
-      { head: 'head', policySource: 'head', mode: 'enforce', paths: ['karate.net.yaml'] },
+      { head: 'head', policySource: 'head', mode: 'block', paths: ['karate.net.yaml'] },
       memoryDeps(repo),
     );
     const f = fileOf(report, 'karate.net.yaml');
@@ -286,7 +286,7 @@ describe('a threshold on a known attack curve (karate club, static degree attack
       '',
     ].join('\n');
     const repo: MemoryRepo = { base: {}, head: { '.netbrace.yaml': strict, 'karate.net.yaml': design } };
-    const { report } = await runGate({ head: 'head', policySource: 'head', mode: 'enforce', paths: ['karate.net.yaml'] }, memoryDeps(repo));
+    const { report } = await runGate({ head: 'head', policySource: 'head', mode: 'block', paths: ['karate.net.yaml'] }, memoryDeps(repo));
     const f = fileOf(report, 'karate.net.yaml');
     const [wc, n1] = f.requirements;
     expect([wc.id, wc.status]).toEqual(['r-threshold:failures:worst-case\u00d72', 'missed']);

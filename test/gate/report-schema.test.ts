@@ -1,7 +1,7 @@
 // Real reports validate against the published report schema (src/report/report.schema.json).
 import { Ajv } from 'ajv';
 import { describe, expect, it } from 'vitest';
-import { mergeReports, runGate } from '../../src/run-gate.js';
+import { joinReports, runGate } from '../../src/run-gate.js';
 import { serializeReport } from '../../src/report/report.js';
 import schema from '../../src/report/report.schema.json' with { type: 'json' };
 import { gateFixture, memoryDeps, pairRepo } from './memory-repo.js';
@@ -15,7 +15,7 @@ function check(value: unknown): void {
 }
 
 describe('report schema', () => {
-  it('accepts reports of failing, passing, broken, deleted, renamed and sharded runs', async () => {
+  it('accepts reports of failing, passing, broken, deleted, renamed and runs in parts', async () => {
     const repo = pairRepo('ring-to-chain');
     repo.base['b.net.yaml'] = gateFixture('unchanged/base.net.yaml');
     repo.head['b.net.yaml'] = 'nodes: [\n';
@@ -23,14 +23,14 @@ describe('report schema', () => {
     repo.base['old.net.yaml'] = gateFixture('redundant-link/base.net.yaml');
     repo.head['new.net.yaml'] = gateFixture('redundant-link/head.net.yaml');
     repo.renames = { 'new.net.yaml': 'old.net.yaml' };
-    const request = { base: 'base', head: 'head', policySource: 'base' as const, mode: 'advise' as const };
+    const request = { base: 'base', head: 'head', policySource: 'base' as const, mode: 'inform' as const };
     const whole = await runGate(request, memoryDeps(repo));
     expect(whole.report.files.map((f) => f.status).sort()).toEqual(['error', 'regressed', 'removed', 'renamed']);
     // Through JSON, as every reader sees it (non-finite numbers become null).
     check(JSON.parse(serializeReport(whole.report)));
-    const shards = await Promise.all([1, 2].map((index) => runGate({ ...request, shard: { index, total: 2 } }, memoryDeps(repo))));
-    for (const s of shards) check(JSON.parse(serializeReport(s.report)));
-    check(JSON.parse(serializeReport(mergeReports(shards.map((s) => JSON.parse(serializeReport(s.report)))))));
+    const parts = await Promise.all([1, 2].map((index) => runGate({ ...request, part: { index, total: 2 } }, memoryDeps(repo))));
+    for (const s of parts) check(JSON.parse(serializeReport(s.report)));
+    check(JSON.parse(serializeReport(joinReports(parts.map((s) => JSON.parse(serializeReport(s.report)))))));
   });
 
   it('rejects what is not a report', () => {

@@ -83,7 +83,7 @@ const withBudget = (text: string, work?: number) => (work === undefined ? text :
 /** The mesh alone (thresholds only) under a policy, with a budget of `work` element visits. */
 async function judge(policyText: string, work?: number, deps: Partial<GateDeps> = {}): Promise<FileReport & { report: Report }> {
   const { report } = await runGate(
-    { head: 'head', policySource: 'head', mode: 'enforce', paths: [FILE] },
+    { head: 'head', policySource: 'head', mode: 'block', paths: [FILE] },
     memoryDeps({ base: {}, head: { '.netbrace.yaml': withBudget(policyText, work), [FILE]: MESH } }, deps),
   );
   return { ...report.files[0], report };
@@ -93,7 +93,7 @@ async function judge(policyText: string, work?: number, deps: Partial<GateDeps> 
 async function compare(policyText: string, work?: number, deps: Partial<GateDeps> = {}): Promise<FileReport & { report: Report }> {
   const text = withBudget(policyText, work);
   const { report } = await runGate(
-    { base: 'base', head: 'head', policySource: 'base', mode: 'enforce', paths: [FILE] },
+    { base: 'base', head: 'head', policySource: 'base', mode: 'block', paths: [FILE] },
     memoryDeps({ base: { '.netbrace.yaml': text, [FILE]: MESH }, head: { '.netbrace.yaml': text, [FILE]: HEAD } }, deps),
   );
   return { ...report.files[0], report };
@@ -232,7 +232,7 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
 
 describe('base and head: one budget, paired realizations', () => {
   const area = '  - kind: area-floor\n    challenge: failures\n';
-  const rest = (drop: number) => `regression:\n  allowed-drop: ${drop}\n  noise-factor: 2\n`;
+  const rest = (drop: number) => `weakening:\n  allowed-drop: ${drop}\n  error-multiple: 2\n`;
 
   it('the budget cuts both sides to the same count, where the engine alone would not', async () => {
     const work = 2 * VISITS * 40;
@@ -308,11 +308,11 @@ describe('the budget in the policy', () => {
     expect(first).toContain('by the work budget (5000 element visits)');
   });
 
-  it('an override raises the budget for its files only', async () => {
-    const text = `${policy('  - kind: area-floor\n    challenge: failures\n')}budget:\n  work: ${2 * VISITS * 20}\noverrides:\n  - files: "networks/core/**"\n    budget:\n      work: 1e9\n`;
+  it('a scope raises the budget for its files only', async () => {
+    const text = `${policy('  - kind: area-floor\n    challenge: failures\n')}budget:\n  work: ${2 * VISITS * 20}\nscopes:\n  - paths: "networks/core/**"\n    budget:\n      work: 1e9\n`;
     const core = 'networks/core/mesh.net.yaml';
     const { report } = await runGate(
-      { head: 'head', policySource: 'head', mode: 'enforce', paths: [FILE, core] },
+      { head: 'head', policySource: 'head', mode: 'block', paths: [FILE, core] },
       memoryDeps({ base: {}, head: { '.netbrace.yaml': text, [FILE]: MESH, [core]: MESH } }),
     );
     const byPath = new Map(report.files.map((f) => [f.path, f]));

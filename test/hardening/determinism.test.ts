@@ -73,7 +73,7 @@ describe('the gate', () => {
   it('the demo change judged with 1, 2 and 4 threads gives the same JSON report, byte for byte', async () => {
     const head = applyRemovals(base, fixtureText('demo', 'changes', '1-retire-east-chord.patch'));
     const repo = { base: { '.netbrace.yaml': policyText, [DESIGN]: base }, head: { '.netbrace.yaml': policyText, [DESIGN]: head } };
-    const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'enforce' };
+    const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block' };
     const reports: string[] = [];
     for (const threads of [1, 2, 4]) {
       const { report } = await runGate({ ...request, threads }, memoryDeps(repo, { evaluate: threaded }));
@@ -89,7 +89,7 @@ describe('the gate', () => {
 
   it('ten runs started together (threads 1, 2 and 4 mixed) give ten identical reports', async () => {
     const repo = pairRepo('removed-node');
-    const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'enforce' };
+    const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block' };
     const threads = [1, 2, 4, 1, 2, 4, 1, 2, 4, 2];
     const runs = await Promise.all(threads.map((n) => runGate({ ...request, threads: n }, memoryDeps(repo, { evaluate: threaded }))));
     const bytes = runs.map((r) => serializeReport(r.report));

@@ -12,7 +12,7 @@ import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { mergeReports } from '../../src/gate/merge.js';
+import { joinReports } from '../../src/gate/join.js';
 import type { Report } from '../../src/report/report.js';
 import { runGate } from '../../src/run-gate.js';
 import { run, type ActionDeps, type RunOutcome } from '../../src/shell/action-run.js';
@@ -49,7 +49,7 @@ function stubDeps(report: Report, ws: string): { d: ActionDeps; rec: Rec } {
       r.mode = request.mode;
       return { report: r, exitCode: r.verdict === 'fail' ? 1 : 0 };
     },
-    merge: mergeReports,
+    join: joinReports,
     git: async (args) => fakeGit(ws)(args),
     github: (o) => createClient(o),
     out: {
@@ -74,7 +74,7 @@ function env(ws: string, apiUrl: string, over: Record<string, string> = {}): Rec
     GITHUB_REPOSITORY: 'acme/net',
     GITHUB_API_URL: apiUrl,
     INPUT_TOKEN: 'tok',
-    INPUT_COMMENT: 'always',
+    INPUT_COMMENT: 'every-run',
     NETBRACE_HTTP_RETRIES: '1',
     NETBRACE_HTTP_BACKOFF_MS: '5',
     NETBRACE_HTTP_TIMEOUT_MS: '400',
@@ -118,9 +118,9 @@ describe('REST API faults: the verdict is that of a healthy run; the step says w
     return { out, rec, ms: performance.now() - t0 };
   }
 
-  /** The same report without any API call (comment: never), to compare against. */
+  /** The same report without any API call (comment: off), to compare against. */
   async function healthy(report: Report) {
-    const h = await runWith(report, api.url, { INPUT_COMMENT: 'never' });
+    const h = await runWith(report, api.url, { INPUT_COMMENT: 'off' });
     expect(h.rec.warnings).toEqual([]);
     expect(api.requests).toEqual([]);
     return h;
@@ -254,7 +254,7 @@ describe('git failures end with one clear message', () => {
       d.git = (args, cwd) => runGit(cwd, args);
       return { d, rec };
     };
-    const e = { GITHUB_WORKSPACE: clone, GITHUB_EVENT_NAME: 'pull_request', GITHUB_EVENT_PATH: event, GITHUB_REPOSITORY: 'acme/net', INPUT_COMMENT: 'never' };
+    const e = { GITHUB_WORKSPACE: clone, GITHUB_EVENT_NAME: 'pull_request', GITHUB_EVENT_PATH: event, GITHUB_REPOSITORY: 'acme/net', INPUT_COMMENT: 'off' };
     const fetched = realDeps();
     const ok = await run(e, fetched.d);
     expect(fetched.rec.failed).toEqual([]);
@@ -332,7 +332,7 @@ describe('git failures end with one clear message', () => {
     writeFileSync(big, 'source,target\n');
     for (let i = 0; i < 66; i++) writeFileSync(big, line, { flag: 'a' });
     const head = commitFiles(repo, {}, 'huge');
-    const policy = 'designs:\n  - files: ["designs/**"]\n';
+    const policy = 'designs:\n  - paths: ["designs/**"]\n';
     commitFiles(repo, { '.netbrace.yaml': policy }, 'policy');
     const r = await cli(repo, 'check', '--head', 'HEAD', '--base', `${head}~1`, '--policy-source', 'head');
     expect(r.code).toBe(2);

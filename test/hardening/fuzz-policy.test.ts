@@ -26,14 +26,14 @@ const SEEDS: { name: string; text: string; base?: string }[] = [
   { name: 'fixtures/policy/full.yaml', text: fixtureText('policy', 'full.yaml'), base: fixtureText('policy', 'base.yaml') },
   { name: 'fixtures/policy/base.yaml', text: fixtureText('policy', 'base.yaml') },
   { name: 'fixtures/gate/policy.yaml', text: fixtureText('gate', 'policy.yaml') },
-  { name: 'fixtures/gate/extends/team.yaml', text: fixtureText('gate', 'extends', 'team.yaml'), base: fixtureText('gate', 'extends', 'org.yaml') },
+  { name: 'fixtures/gate/inherits/team.yaml', text: fixtureText('gate', 'inherits', 'team.yaml'), base: fixtureText('gate', 'inherits', 'org.yaml') },
   { name: 'fixtures/demo/policy.yaml', text: fixtureText('demo', 'policy.yaml') },
   { name: 'STARTER_POLICY', text: STARTER_POLICY },
 ];
 
 const TOKENS = [
-  'version: 1', 'version: 2', 'extends: base.yaml', 'extends: team.yaml', 'extends: ../../../etc/passwd', 'extends: /etc/passwd', 'extends: ""',
-  'designs:', '  - files: "../**"', '  - files: "/etc/*"', '  - files: "**/*"', '    format: graphml', '    format: exe', 'ignore: ["**"]',
+  'version: 1', 'version: 2', 'inherits: base.yaml', 'inherits: team.yaml', 'inherits: ../../../etc/passwd', 'inherits: /etc/passwd', 'inherits: ""',
+  'designs:', '  - paths: "../**"', '  - paths: "/etc/*"', '  - paths: "**/*"', '    format: graphml', '    format: exe', 'exclude: ["**"]',
   'seed: -1', 'seed: 4294967296', 'seed: 1e20', 'seed: .nan', 'r-value:', '  metrics:', '    efficiency: 0', '    efficiency: -1',
   '    pair_connectivity: 1e999', '    bogus_metric: 1', '  combine: min', 'challenges:', '  c1:', '    remove: nodes', '    remove: region',
   '    remove: risk-groups', '    order: worst-first', '    order: sideways', '    adaptive: true', '    until: 0', '    until: 1e999',
@@ -41,7 +41,7 @@ const TOKENS = [
   '    band: [0, 1]', '    worst-case: 10', '    beam: 0', 'requirements:', '  - kind: r-threshold', '  - kind: n-1', '  - kind: no-new-spof',
   '    challenge: c1', '    challenge: missing', '    at: 0.1', '    at: 99', '    statistic: quantile', '    statistic: worst-case', '    q: 0',
   '    q: 1', '    removals: 11', '    min: 2', '    min: -1', '    max: 0', '    element: group', '    severity: fatal', '    elements: [bridges]',
-  'regression:', '  allowed-drop: -1', '  noise-factor: 1e999', 'removed-designs: ignore', 'overrides:', '  - files: "networks/core/**"',
+  'weakening:', '  allowed-drop: -1', '  error-multiple: 1e999', 'removed-designs: ignore', 'scopes:', '  - paths: "networks/core/**"',
   '    requirements: []', '&a ', '*a', '<<: *a', '!!binary', '? ', '- ', '{', '}', '[', ']', '"', "'", '|', '>', '---', '...', '__proto__:',
   'constructor:', '\t', '\n', '  ', '#', ': ', ',', '~', '\u2028', '\uFEFF',
 ];
@@ -122,9 +122,9 @@ const drawnPolicy = fc
         ),
         { maxLength: 3 },
       ),
-      regression: fc.record({ 'allowed-drop': NUMBER, 'allowed-relative-drop': NUMBER, 'noise-factor': NUMBER, severity: fc.constantFrom('fail', 'warn') }, { requiredKeys: [] }),
+      weakening: fc.record({ 'allowed-drop': NUMBER, 'allowed-relative-drop': NUMBER, 'error-multiple': NUMBER, severity: fc.constantFrom('fail', 'warn') }, { requiredKeys: [] }),
       'removed-designs': fc.constantFrom('fail', 'warn', 'notice', 'ignore', 'never'),
-      extends: fc.constantFrom('base.yaml', 'team.yaml', '../../x.yaml', '/etc/passwd'),
+      inherits: fc.constantFrom('base.yaml', 'team.yaml', '../../x.yaml', '/etc/passwd'),
     },
     { requiredKeys: [] },
   )
@@ -142,7 +142,7 @@ const cases: fc.Arbitrary<Case> = fc.oneof(
       .record({ seed: fc.integer({ min: 0, max: SEEDS.length - 1 }), edits: fc.array(edit, { minLength: 1, maxLength: 3 }), baseEdits: fc.array(edit, { maxLength: 2 }) })
       .map(({ seed, edits, baseEdits }) => {
         const s = SEEDS[seed];
-        const entry = edits.reduce(applyEdit, s.base !== undefined ? s.text.replace(/^extends: .*$/m, 'extends: base.yaml') : s.text);
+        const entry = edits.reduce(applyEdit, s.base !== undefined ? s.text.replace(/^inherits: .*$/m, 'inherits: base.yaml') : s.text);
         return { entry, base: s.base !== undefined ? baseEdits.reduce(applyEdit, s.base) : undefined };
       }),
   },
@@ -180,7 +180,7 @@ describe('fuzzing the policy loader (seeded)', () => {
         if (!o.ok) {
           expect(o.error.kind).toBe('policy');
           const text = texts[o.error.file] ?? '';
-          // "does not exist" concerns a file that has no text: it must point at the extends line instead.
+          // "does not exist" concerns a file that has no text: it must point at the inherits line instead.
           expect(locationProblems(o.error, text || entry, asked), o.error.format()).toEqual([]);
           return;
         }

@@ -124,7 +124,7 @@ describe('YAML aliases', () => {
 
   it('an alias bomb in a policy is a PolicyError with its line', () => {
     tried++;
-    const text = `seed: 1\n${bomb('ignore')}`;
+    const text = `seed: 1\n${bomb('exclude')}`;
     const o = attempt(() => loadPolicy('.netbrace.yaml', () => text));
     expect(o.ok).toBe(false);
     if (o.ok) return;
@@ -158,7 +158,7 @@ describe('nesting 100,000 levels deep', () => {
 
   it('a policy nested 100,000 levels deep: a located PolicyError', () => {
     tried++;
-    const text = `seed: 1\nignore: ${'['.repeat(D)}${']'.repeat(D)}\n`;
+    const text = `seed: 1\nexclude: ${'['.repeat(D)}${']'.repeat(D)}\n`;
     for (let round = 0; round < 2; round++) {
       const o = attempt(() => loadPolicy('.netbrace.yaml', () => text));
       expect(o.ok).toBe(false);
@@ -271,9 +271,9 @@ describe('through the gate', () => {
       'designs/bomb.net.yaml': `nodes: [{id: a}]\nx: &x [1, 1, 1, 1, 1, 1, 1, 1, 1, 1]\n${Array.from({ length: 60 }, (_, i) => `y${i}: *x`).join('\n')}\n`,
     };
     const good = fixtureText('designs', 'ring.net.yaml');
-    const policy = 'designs:\n  - files: ["designs/**"]\n';
+    const policy = 'designs:\n  - paths: ["designs/**"]\n';
     const head = { ...hostile, 'designs/ring.net.yaml': good, '.netbrace.yaml': policy };
-    const { report, exitCode } = await runGate({ policySource: 'base', mode: 'enforce', eventKind: 'schedule', head: 'head' }, memoryDeps({ base: head, head }));
+    const { report, exitCode } = await runGate({ policySource: 'base', mode: 'block', eventKind: 'schedule', head: 'head' }, memoryDeps({ base: head, head }));
     expect(exitCode).toBe(1);
     const byPath = new Map(report.files.map((f) => [f.path, f]));
     for (const p of Object.keys(hostile)) {

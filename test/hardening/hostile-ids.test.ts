@@ -11,7 +11,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { stringify as yamlStringify } from 'yaml';
-import { mergeReports } from '../../src/gate/merge.js';
+import { joinReports } from '../../src/gate/join.js';
 import { renderHtml } from '../../src/report/html.js';
 import { renderComment, renderSummary } from '../../src/report/markdown.js';
 import type { Report } from '../../src/report/report.js';
@@ -62,7 +62,7 @@ function repo(): MemoryRepo {
       nodes: [...chain.map((id) => ({ id, label: IDS.img })), ...(base ? [{ id: REMOVED }] : [])],
       links: [...links, ...(base ? [{ between: ['end-b', REMOVED] }, { between: [REMOVED, 'end-a'] }] : [])],
     });
-  const policy = 'designs:\n  - files: ["**/*.net.yaml"]\n';
+  const policy = 'designs:\n  - paths: ["**/*.net.yaml"]\n';
   const file = PATH;
   return { base: { '.netbrace.yaml': policy, [file]: design(true) }, head: { '.netbrace.yaml': policy, [file]: design(false) } };
 }
@@ -155,7 +155,7 @@ let dir: string;
 let api: FakeApi;
 
 beforeAll(async () => {
-  const { report: r } = await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'enforce' }, memoryDeps(repo()));
+  const { report: r } = await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'block' }, memoryDeps(repo()));
   report = r;
   dir = mkdtempSync(path.join(tmpdir(), 'nb-ids-'));
   api = await startFakeApi();
@@ -233,7 +233,7 @@ describe('hostile ids through the Action, as the runner sees its output', () => 
       GITHUB_API_URL: api.url,
       GITHUB_STEP_SUMMARY: summaryFile,
       INPUT_TOKEN: 'tok',
-      INPUT_COMMENT: 'always',
+      INPUT_COMMENT: 'every-run',
       INPUT_HTML: 'out/report.html',
       NETBRACE_HTTP_RETRIES: '0',
     };
@@ -252,7 +252,7 @@ describe('hostile ids through the Action, as the runner sees its output', () => 
     try {
       outcome = await run(env, {
         gate: (request) => runGate({ ...request, base: 'base', head: 'head' }, mem),
-        merge: mergeReports,
+        join: joinReports,
         git: async (args) => ({ code: 0, stdout: args.includes('--show-toplevel') ? `${ws}\n` : '', stderr: '' }),
         github: (o) => createClient(o),
         renderHtml,

@@ -1,15 +1,15 @@
 // Paths named by a user, a policy or an event never reach outside the workspace: `../x`,
 // absolute paths, and symbolic links that point out (at the file or at a directory on the
 // way). First the one module that decides (src/shell/workspace.ts), then every caller: the
-// Action's inputs, the names the REST API returns, shard report folders, `netbrace check`
-// paths and --policy, a policy's `extends` and design globs, and designs that are links.
+// Action's inputs, the names the REST API returns, part report folders, `netbrace check`
+// paths and --policy, a policy's `inherits` and design globs, and designs that are links.
 
 import { existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync, symlinkSync, truncateSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { isNetbraceError } from '../../src/errors.js';
-import { mergeReports } from '../../src/gate/merge.js';
+import { joinReports } from '../../src/gate/join.js';
 import type { Report } from '../../src/report/report.js';
 import { run, type ActionDeps, type GitResult } from '../../src/shell/action-run.js';
 import { createClient } from '../../src/shell/github.js';
@@ -122,7 +122,7 @@ function actionDeps(git: (args: string[]) => GitResult = fakeGit(ws)): { d: Acti
       r.mode = request.mode;
       return { report: r, exitCode: 1 };
     },
-    merge: mergeReports,
+    join: joinReports,
     git: async (args) => git(args),
     github: (o) => createClient(o),
     renderHtml: () => '<!doctype html><title>r</title>',
@@ -147,7 +147,7 @@ function actionEnv(over: Record<string, string> = {}): Record<string, string> {
     GITHUB_REPOSITORY: 'acme/net',
     GITHUB_API_URL: api.url,
     INPUT_TOKEN: 'tok',
-    INPUT_COMMENT: 'never',
+    INPUT_COMMENT: 'off',
     NETBRACE_HTTP_RETRIES: '0',
     NETBRACE_HTTP_TIMEOUT_MS: '500',
     ...over,
@@ -164,8 +164,8 @@ describe('Action inputs never reach outside the workspace', () => {
     ['SARIF', 'escape/deep/r.sarif', /input "sarif" .* through a symbolic link/],
     ['HTML', '../outside/r.html', /input "html" .* points outside the workspace/],
     ['HTML', 'escape/r.html', /input "html" .* through a symbolic link/],
-    ['MERGE', '../outside', /input "merge" .* points outside the workspace/],
-    ['MERGE', 'escape', /input "merge" .* through a symbolic link/],
+    ['JOIN-PARTS', '../outside', /input "join-parts" .* points outside the workspace/],
+    ['JOIN-PARTS', 'escape', /input "join-parts" .* through a symbolic link/],
     ['WORKING-DIRECTORY', '..', /input "working-directory" .* points outside the workspace/],
     ['WORKING-DIRECTORY', 'escape', /input "working-directory" .* through a symbolic link/],
   ];
@@ -190,7 +190,7 @@ describe('Action inputs never reach outside the workspace', () => {
     api.prFiles.push({ filename: 'README.md', status: 'modified' }, { filename: '../../outside/secret.net.yaml', status: 'added' });
     const missingBase = fakeGit(ws, BASE);
     const { d, rec } = actionDeps(missingBase);
-    const outcome = await run(actionEnv({ INPUT_COMMENT: 'never' }), d);
+    const outcome = await run(actionEnv({ INPUT_COMMENT: 'off' }), d);
     // Not "no design changed, pass": the base is needed, and the message says how to get it.
     expect(outcome.exitCode).toBe(2);
     expect(rec.gateCalls).toBe(0);
@@ -201,22 +201,22 @@ describe('Action inputs never reach outside the workspace', () => {
     expect((await run(actionEnv(), again.d)).exitCode).toBe(0);
   });
 
-  it('a shard report that is a link out of the merge folder is never read', async () => {
+  it('a part report that is a link out of the join folder is never read', async () => {
     refusals++;
-    const shards = path.join(ws, 'shards');
-    mkdirSync(shards);
+    const parts = path.join(ws, 'parts');
+    mkdirSync(parts);
     const r = sampleReport();
-    writeFileSync(path.join(shards, 'a.json'), JSON.stringify(r));
+    writeFileSync(path.join(parts, 'a.json'), JSON.stringify(r));
     writeFileSync(path.join(outside, 'b.json'), JSON.stringify({ ...r, files: [{ path: SECRET, status: 'error', findings: [], requirements: [] }] }));
-    symlinkSync(path.join(outside, 'b.json'), path.join(shards, 'b.json'));
-    symlinkSync(outside, path.join(shards, 'more'));
+    symlinkSync(path.join(outside, 'b.json'), path.join(parts, 'b.json'));
+    symlinkSync(outside, path.join(parts, 'more'));
     const summaries: string[] = [];
     const { d } = actionDeps();
     d.out.appendSummary = (m) => void summaries.push(m);
-    const outcome = await run(actionEnv({ INPUT_MERGE: 'shards' }), d);
+    const outcome = await run(actionEnv({ 'INPUT_JOIN-PARTS': 'parts' }), d);
     expect(outcome.verdict).toBe('fail');
     expect(summaries.join('')).not.toContain(SECRET);
-    expect(summaries.join('')).toContain('Merged from 1 shard report');
+    expect(summaries.join('')).toContain('Joined from 1 part report');
   });
 });
 
@@ -261,12 +261,12 @@ describe('the gate on the command line', () => {
     commitFiles(repo, { 'designs/committed.net.yaml': null }, 'remove the link');
   });
 
-  it('a policy whose extends climbs out, or that is itself a link out, is refused', async () => {
+  it('a policy whose inherits climbs out, or that is itself a link out, is refused', async () => {
     refusals += 2;
-    commitFiles(repo, { '.netbrace.yaml': 'extends: ../../outside/policy.yaml\n' }, 'policy extends out');
+    commitFiles(repo, { '.netbrace.yaml': 'inherits: ../../outside/policy.yaml\n' }, 'policy inherits out');
     let r = await cli(repo, 'check', '--worktree', '--policy-source', 'head');
     expect(r.code).toBe(2);
-    expect(r.err).toMatch(/^\.netbrace\.yaml:1:\d+: "extends" leaves the repository/);
+    expect(r.err).toMatch(/^\.netbrace\.yaml:1:\d+: "inherits" leaves the repository/);
     rmSync(path.join(repo, '.netbrace.yaml'));
     symlinkSync(path.join(outside, 'policy.yaml'), path.join(repo, '.netbrace.yaml'));
     r = await cli(repo, 'check', '--worktree', '--policy-source', 'head');
@@ -279,7 +279,7 @@ describe('the gate on the command line', () => {
 
   it('design globs that name ../ or absolute paths match nothing outside: only repository files are judged', async () => {
     refusals++;
-    const policy = `designs:\n  - files: ["../**", "${outside}/**", "/**/*.net.yaml", "**/*.net.yaml"]\n`;
+    const policy = `designs:\n  - paths: ["../**", "${outside}/**", "/**/*.net.yaml", "**/*.net.yaml"]\n`;
     commitFiles(repo, { '.netbrace.yaml': policy }, 'globs');
     const r = await cli(repo, 'check', '--worktree', '--policy-source', 'head', '--format', 'json', 'designs/ring.net.yaml');
     expect(r.code, r.err).toBeLessThan(2);

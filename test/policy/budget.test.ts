@@ -1,5 +1,5 @@
 // The policy's work budget: seconds become element visits at the one documented rate (never
-// the clock), the built-in default, overrides and extending policies that raise it, and the
+// the clock), the built-in default, scopes and inheriting policies that raise it, and the
 // regional radius that the policy fixes so that base and head share one grid.
 import { describe, expect, it } from 'vitest';
 import { PolicyError } from '../../src/errors.js';
@@ -54,29 +54,29 @@ describe('the default budget and the engine request', () => {
   });
 });
 
-describe('overrides and extending policies may raise the budget, never lower it', () => {
-  const org = 'budget:\n  seconds: 10\noverrides:\n  - files: "core/**"\n    budget:\n      seconds: 40\n';
+describe('scopes and inheriting policies may raise the budget, never lower it', () => {
+  const org = 'budget:\n  seconds: 10\nscopes:\n  - paths: "core/**"\n    budget:\n      seconds: 40\n';
 
-  it('an override raises it for the files it matches only', () => {
+  it('a scope raises it for the files it matches only', () => {
     const files = { 'p.yaml': org };
     expect(budgetOf(files, 'edge/a.graphml')).toEqual({ seconds: 10, maxWork: 5e8 });
     expect(budgetOf(files, 'core/a.graphml')).toEqual({ seconds: 40, maxWork: 2e9 });
   });
 
-  it('an extending policy raises it, and keys it leaves out keep the value in force', () => {
-    const files = { 'org.yaml': org, 'p.yaml': 'extends: org.yaml\nbudget:\n  work: 9e8\n  seconds: 30\n' };
+  it('an inheriting policy raises it, and keys it leaves out keep the value in force', () => {
+    const files = { 'org.yaml': org, 'p.yaml': 'inherits: org.yaml\nbudget:\n  work: 9e8\n  seconds: 30\n' };
     expect(budgetOf(files, 'edge/a.graphml')).toEqual({ work: 9e8, seconds: 30, maxWork: 9e8 });
-    // The org override (40 s) raises it further for core/**; work 9e8 stays in force and binds.
+    // The org scope (40 s) raises it further for core/**; work 9e8 stays in force and binds.
     expect(budgetOf(files, 'core/a.graphml')).toEqual({ work: 9e8, seconds: 40, maxWork: 9e8 });
   });
 
-  it('a more basic file\u2019s smaller override is outvoted by a larger budget of the extending file', () => {
-    const files = { 'org.yaml': org, 'p.yaml': 'extends: org.yaml\nbudget:\n  seconds: 100\n' };
+  it('a more basic file\u2019s smaller scope is outvoted by a larger budget of the inheriting file', () => {
+    const files = { 'org.yaml': org, 'p.yaml': 'inherits: org.yaml\nbudget:\n  seconds: 100\n' };
     expect(budgetOf(files, 'core/a.graphml')).toEqual({ seconds: 100, maxWork: 5e9 });
   });
 
   it('lowering it for some files is a policy error naming both lines, whether or not a file matches', () => {
-    const files = { 'p.yaml': 'budget:\n  seconds: 60\noverrides:\n  - files: "lab/**"\n    budget:\n      seconds: 10\n' };
+    const files = { 'p.yaml': 'budget:\n  seconds: 60\nscopes:\n  - paths: "lab/**"\n    budget:\n      seconds: 10\n' };
     let error: unknown;
     try {
       loadPolicy('p.yaml', repo(files));
@@ -85,7 +85,7 @@ describe('overrides and extending policies may raise the budget, never lower it'
     }
     expect(error).toBeInstanceOf(PolicyError);
     const e = error as PolicyError;
-    expect(e.message).toBe('override 1 lowers the budget to 5e8 element visits (seconds 10) where 3e9 (seconds 60) is in force');
+    expect(e.message).toBe('scope 1 lowers the budget to 5e8 element visits (seconds 10) where 3e9 (seconds 60) is in force');
     expect([e.line, e.column]).toEqual([6, 16]);
     expect(e.related.map((r) => [r.file, r.line, r.column])).toEqual([['p.yaml', 2, 12]]);
   });

@@ -22,7 +22,7 @@ describe('built-in policy', () => {
       'area-floor:degree-attack',
     ]);
     expect(p.requirements[0].where.file).toBe(BUILTIN_POLICY_NAME);
-    expect(p.regression).toMatchObject({ allowedDrop: 0.02, noiseFactor: 2, severity: 'fail' });
+    expect(p.weakening).toMatchObject({ allowedDrop: 0.02, errorMultiple: 2, severity: 'fail' });
     expect(p.removedDesigns.severity).toBe('notice');
     expect(parsePolicyFile(STARTER_POLICY, 'x').challenges?.map((c) => c.engine)).toEqual([
       'random-nodes',
@@ -76,7 +76,7 @@ describe('built-in policy', () => {
   });
 });
 
-describe('extends and overrides', () => {
+describe('inherits and scopes', () => {
   const org = [
     'challenges:',
     '  fail:',
@@ -89,8 +89,8 @@ describe('extends and overrides', () => {
     '    statistic: quantile',
     '    q: 0.1',
     '    min: 0.5',
-    'overrides:',
-    '  - files: "core/**"',
+    'scopes:',
+    '  - paths: "core/**"',
     '    requirements:',
     '      - kind: n-1',
     '        min: 0.6',
@@ -98,7 +98,7 @@ describe('extends and overrides', () => {
   ].join('\n');
 
   it('a tightened floor replaces the base one', () => {
-    const team = 'extends: ../org.yaml\nrequirements:\n  - kind: r-threshold\n    challenge: fail\n    at: 0.2\n    statistic: quantile\n    q: 0.1\n    min: 0.55\n';
+    const team = 'inherits: ../org.yaml\nrequirements:\n  - kind: r-threshold\n    challenge: fail\n    at: 0.2\n    statistic: quantile\n    q: 0.1\n    min: 0.55\n';
     const p = loadPolicy('team/p.yaml', repo({ 'org.yaml': org, 'team/p.yaml': team }));
     expect(p.files).toEqual(['team/p.yaml', 'org.yaml']);
     expect(floor(p.requirements, 'r-threshold:fail@0.2:q0.1')).toBe(0.55);
@@ -112,16 +112,16 @@ describe('extends and overrides', () => {
     expect(p.requirements.map((r) => r.id)).toEqual(['r-threshold:hubs@0.1:value']);
   });
 
-  it('overrides apply only to the files they match, and may tighten', () => {
-    const team = 'extends: org.yaml\noverrides:\n  - files: "core/metro/**"\n    requirements:\n      - kind: n-1\n        min: 0.7\n';
+  it('scopes apply only to the files they match, and may tighten', () => {
+    const team = 'inherits: org.yaml\nscopes:\n  - paths: "core/metro/**"\n    requirements:\n      - kind: n-1\n        min: 0.7\n';
     const p = loadPolicy('p.yaml', repo({ 'org.yaml': org, 'p.yaml': team }));
     expect(floor(policyForFile(p, 'edge/a.graphml').requirements, 'n-1:link')).toBeUndefined();
     expect(floor(policyForFile(p, 'core/a.graphml').requirements, 'n-1:link')).toBe(0.6);
     expect(floor(policyForFile(p, 'core/metro/a.graphml').requirements, 'n-1:link')).toBe(0.7);
   });
 
-  it('an override that loosens a base override on the same file is an error naming both lines', () => {
-    const team = 'extends: org.yaml\noverrides:\n  - files: "core/metro/**"\n    requirements:\n      - kind: n-1\n        min: 0.4\n';
+  it('a scope that loosens a base scope on the same file is an error naming both lines', () => {
+    const team = 'inherits: org.yaml\nscopes:\n  - paths: "core/metro/**"\n    requirements:\n      - kind: n-1\n        min: 0.4\n';
     const p = loadPolicy('p.yaml', repo({ 'org.yaml': org, 'p.yaml': team }));
     expect(() => policyForFile(p, 'edge/a.graphml')).not.toThrow();
     let error: PolicyError | undefined;
@@ -137,15 +137,15 @@ describe('extends and overrides', () => {
   });
 
   it('a looser floor of a more basic file is outvoted, not an error', () => {
-    // The team raises the n-1 floor for everything; the org override for core/** (0.6) is then looser.
-    const team = 'extends: org.yaml\nrequirements:\n  - kind: n-1\n    min: 0.8\n';
+    // The team raises the n-1 floor for everything; the org scope for core/** (0.6) is then looser.
+    const team = 'inherits: org.yaml\nrequirements:\n  - kind: n-1\n    min: 0.8\n';
     const p = loadPolicy('p.yaml', repo({ 'org.yaml': org, 'p.yaml': team }));
     expect(floor(policyForFile(p, 'core/a.graphml').requirements, 'n-1:link')).toBe(0.8);
   });
 
   it('a format hint applies to the files of its glob', () => {
     const p = loadPolicy('p.yaml', repo({
-      'p.yaml': 'designs:\n  - files: "**/*.graphml"\n  - files: "legacy/*.xml"\n    format: graphml\n',
+      'p.yaml': 'designs:\n  - paths: "**/*.graphml"\n  - paths: "legacy/*.xml"\n    format: graphml\n',
     }));
     expect(isDesignPath(p, 'legacy/a.xml')).toBe(true);
     expect(policyForFile(p, 'legacy/a.xml').format).toBe('graphml');
@@ -153,8 +153,8 @@ describe('extends and overrides', () => {
     expect(isDesignPath(p, 'x.gml')).toBe(false);
   });
 
-  it('ignore wins over designs', () => {
-    const p = loadPolicy('p.yaml', repo({ 'p.yaml': 'ignore: "archive/**"\n' }));
+  it('exclude wins over designs', () => {
+    const p = loadPolicy('p.yaml', repo({ 'p.yaml': 'exclude: "archive/**"\n' }));
     expect(isDesignPath(p, 'archive/old.graphml')).toBe(false);
     expect(isDesignPath(p, 'live/new.graphml')).toBe(true);
   });

@@ -63,18 +63,18 @@ usedKeys(parseDocument(fullText).toJS(), '', [], used);
 
 describe('policy schema', () => {
   it('the full example uses every key the schema defines, and nothing else', () => {
-    // Overrides reuse the definitions of the top level: count their keys once.
-    const canon = (k: string) => k.replace(/^overrides\.(requirements|regression|budget)\./, '$1.');
+    // Scopes reuse the definitions of the top level: count their keys once.
+    const canon = (k: string) => k.replace(/^scopes\.(requirements|weakening|budget)\./, '$1.');
     const defined = [...new Set([...schemaKeys(schema as S, '', new Set())].map(canon))].sort();
     expect([...new Set([...used.keys()].map(canon))].sort()).toEqual(defined);
   });
 
-  it('the full example loads, extends its base and tightens it', () => {
+  it('the full example loads, inherits its base and tightens it', () => {
     const p = loadPolicy('full.yaml', read);
     expect(p.files).toEqual(['full.yaml', 'base.yaml']);
     const q = p.requirements.find((r) => r.id === 'r-threshold:node-failures@0.1:q0.05');
     expect(q && 'min' in q ? q.min : undefined).toBe(0.5);
-    expect(p.regression.allowedDrop).toBe(0.02);
+    expect(p.weakening.allowedDrop).toBe(0.02);
     expect(p.challenges.map((c) => c.engine)).toEqual(['random-nodes', 'random-links', 'degree-adaptive']);
   });
 

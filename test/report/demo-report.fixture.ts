@@ -323,7 +323,7 @@ export function demoReport(): Report {
     version: REPORT_VERSION,
     tool: { name: 'netbrace', version: '0.1.0' },
     verdict: 'fail',
-    mode: 'enforce',
+    mode: 'block',
     policy: { source: 'file', path: 'policy.yaml', revision: '3f9c2e1' },
     base: '3f9c2e1',
     head: '8a41d07',

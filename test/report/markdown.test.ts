@@ -81,10 +81,10 @@ describe('job summary', () => {
     expect(md).toContain('nothing to judge');
   });
 
-  it('advise mode says it would fail without blocking', () => {
+  it('inform mode says it would fail without blocking', () => {
     const r = sampleReport();
-    r.mode = 'advise';
-    expect(renderSummary(r).split('\n')[0]).toContain('would fail (advise mode, not blocking)');
+    r.mode = 'inform';
+    expect(renderSummary(r).split('\n')[0]).toContain('would fail (inform mode, not blocking)');
   });
 
   it('reports a changed policy as proposed and carries the caution', () => {
@@ -95,16 +95,16 @@ describe('job summary', () => {
     expect(md).toContain('informs engineering judgement');
   });
 
-  it('shows the gate\u2019s note on the policy, the scope and merged shards', () => {
+  it('shows the gate\u2019s note on the policy, the scope and joined parts', () => {
     const r = sampleReport();
     r.policy.changed = true;
     r.policy.note = 'this change modifies the policy; the version at the base judges it (it applies once merged)';
     r.scope = 'all';
-    r.shards = { total: 3, merged: [1, 2, 3] };
+    r.parts = { total: 3, joined: [1, 2, 3] };
     const md = renderSummary(r);
     expect(md).toContain('This change modifies the policy file. this change modifies the policy; the version at the base judges it \\(it applies once merged\\).');
     expect(md).toContain('every design, thresholds only');
-    expect(md).toContain('merged shards 1, 2, 3 of 3');
+    expect(md).toContain('joined parts 1, 2, 3 of 3');
   });
 
   it('stays within ~900 KiB on a huge report and says what was cut', () => {

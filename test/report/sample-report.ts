@@ -222,7 +222,7 @@ export function sampleReport(): Report {
     version: REPORT_VERSION,
     tool: { name: 'netbrace', version: '0.1.0' },
     verdict: 'fail',
-    mode: 'enforce',
+    mode: 'block',
     policy: { source: 'file', path: 'netbrace.policy.yaml', revision: 'b1e5c0ffee00000000000000000000000000abcd', changed: false },
     base: 'b1e5c0ffee00000000000000000000000000abcd',
     head: 'feedface0000000000000000000000000000beef',

@@ -124,10 +124,10 @@ describe('netbrace check in a git repository', () => {
     expect(trusting.code).toBe(0);
   });
 
-  it('advise mode reports the failure and exits 0; markdown goes to stdout; files are written', async () => {
+  it('inform mode reports the failure and exits 0; markdown goes to stdout; files are written', async () => {
     const dir = newRepo({ [DESIGN]: gateFixture('ring-to-chain/base.net.yaml') });
     put(dir, { [DESIGN]: gateFixture('ring-to-chain/head.net.yaml') });
-    const r = await check(dir, 'check', '--mode', 'advise', '--format', 'markdown', '--summary', 's.md', '--sarif', 'r.sarif', '--html', 'r.html');
+    const r = await check(dir, 'check', '--mode', 'inform', '--format', 'markdown', '--summary', 's.md', '--sarif', 'r.sarif', '--html', 'r.html');
     expect(r.code).toBe(0);
     expect(r.out).toContain('metro.net.yaml');
     expect(readFileSync(path.join(dir, 's.md'), 'utf8')).toBe(r.out);
@@ -158,7 +158,7 @@ describe('netbrace check in a git repository', () => {
       ['--bogus'],
       ['--mode', 'strict'],
       ['--head', 'HEAD', '--worktree'],
-      ['--shard', '3/2'],
+      ['--part', '3/2'],
       ['--base', 'no-such-branch'],
       ['--seed', '-1'],
       ['../outside.net.yaml'],
@@ -168,6 +168,20 @@ describe('netbrace check in a git repository', () => {
       expect([args, r.code]).toEqual([args, 2]);
       expect(r.err.length).toBeGreaterThan(0);
     }
+  });
+
+  it('the former option names and mode values are refused, naming what to use', async () => {
+    const dir = newRepo({ [DESIGN]: gateFixture('unchanged/base.net.yaml') });
+    for (const [args, message] of [
+      [['--mode', 'enforce'], '--mode must be block, inform, not "enforce"'],
+      [['--mode', 'advise'], '--mode must be block, inform, not "advise"'],
+      [['--shard', '1/2'], "Unknown option '--shard'"],
+    ] as const) {
+      const r = await check(dir, 'check', ...args);
+      expect([args, r.code]).toEqual([args, 2]);
+      expect(r.err).toContain(message);
+    }
+    expect((await check(dir, 'check', '--help')).out).toContain('--part K/N');
   });
 
   it('outside a git repository it judges the given files on thresholds only', async () => {

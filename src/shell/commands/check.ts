@@ -39,8 +39,8 @@ Policy:
 Evaluation:
   --seed S               seed of the random challenges (default: the policy's)
   --threads N            worker threads (results do not depend on N)
-  --mode MODE            enforce (default): exit 1 when the gate fails; advise: exit 0
-  --shard K/N            judge only slice K of N of the designs (by path hash)
+  --mode MODE            block (default): exit 1 when the gate fails; inform: exit 0
+  --part K/N             judge only slice K of N of the designs (by path hash)
 
 Output:
   --format FORMAT        text (default), markdown or json, on standard output
@@ -58,7 +58,7 @@ Examples:
 netbrace informs engineering judgement; it does not replace engineering studies.
 
 Exit codes:
-  0  pass (or nothing to judge, or --mode advise)
+  0  pass (or nothing to judge, or --mode inform)
   1  the gate failed: a requirement was broken or a design could not be read
   2  usage or configuration error (bad option, broken policy); nothing was evaluated
 `;
@@ -72,7 +72,7 @@ const OPTIONS = {
   seed: { type: 'string' },
   threads: { type: 'string' },
   mode: { type: 'string' },
-  shard: { type: 'string' },
+  part: { type: 'string' },
   format: { type: 'string' },
   json: { type: 'string' },
   summary: { type: 'string' },
@@ -86,11 +86,11 @@ function parse(args: string[]) {
   return parseCommandArgs('check', args, OPTIONS);
 }
 
-function shardOf(value: string | undefined): GateRequest['shard'] {
+function partOf(value: string | undefined): GateRequest['part'] {
   if (value === undefined) return undefined;
   const m = /^([0-9]+)\/([0-9]+)$/.exec(value);
   const [k, n] = m ? [Number(m[1]), Number(m[2])] : [0, 0];
-  if (!m || k < 1 || n < 1 || k > n) throw new UsageError(`--shard must be K/N with 1 ≤ K ≤ N, not "${value}"`, 'e.g. --shard 2/4');
+  if (!m || k < 1 || n < 1 || k > n) throw new UsageError(`--part must be K/N with 1 ≤ K ≤ N, not "${value}"`, 'e.g. --part 2/4');
   return { index: k, total: n };
 }
 
@@ -124,14 +124,14 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
   const threads = wholeNumber('--threads', v.threads, 1, 256);
   const request: GateRequest = {
     policySource: choice('--policy-source', v['policy-source'], ['base', 'head'] as const, 'base'),
-    mode: choice('--mode', v.mode, ['enforce', 'advise'] as const, 'enforce'),
+    mode: choice('--mode', v.mode, ['block', 'inform'] as const, 'block'),
     eventKind: 'local',
   };
   const seed = wholeNumber('--seed', v.seed, 0, 0xffffffff);
   if (seed !== undefined) request.seed = seed;
   if (threads !== undefined) request.threads = threads;
-  const shard = shardOf(v.shard);
-  if (shard) request.shard = shard;
+  const part = partOf(v.part);
+  if (part) request.part = part;
   const evaluate: GateDeps['evaluate'] = threads !== undefined && threads > 1 ? (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) : undefined;
 
   const root = await repoRoot(io.cwd);

@@ -121,7 +121,7 @@ function resolveR(file: string, metricIds: string[], policyPath: string | undefi
       source: metricIds.length === 1 ? '--metric' : '--metric (equal weights)',
     };
   }
-  // The policy and the files it extends: inside the working directory, links included.
+  // The policy and the files it inherits: inside the working directory, links included.
   const read = (p: string) => readInsideSync(io.cwd, p);
   const chosen = policyPath ?? (read(DEFAULT_POLICY_PATH) !== null ? DEFAULT_POLICY_PATH : undefined);
   if (chosen === undefined) return { spec: builtinPolicy().rValue, source: 'the built-in policy' };

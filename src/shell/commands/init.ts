@@ -19,7 +19,7 @@ Next: set the floors for your network, then run "netbrace check".
 
 Examples:
   netbrace init                          writes .netbrace.yaml at the repository root
-  netbrace init --policy org/base.yaml   a base policy that team policies extend
+  netbrace init --policy org/base.yaml   a base policy that team policies inherit
 
 Exit codes:
   0  written

@@ -1,4 +1,4 @@
-// Merging the reports of shards (one job per slice of the changed designs) into the one
+// Joining the reports of parts (one job per slice of the changed designs) into the one
 // report the final job turns into a summary, a comment and a verdict. Reads reports of this
 // and of older versions: fields added since version 1 are optional and filled here.
 
@@ -13,7 +13,7 @@ export function upgradeReport(value: unknown, name = 'report'): Report {
     throw new UsageError(`${name} is not a netbrace report`, 'pass the JSON files written by "netbrace check --json" or the action');
   }
   if (r.version > REPORT_VERSION) {
-    throw new UsageError(`${name} has report version ${r.version}, newer than this netbrace (${REPORT_VERSION})`, 'merge with the newest netbrace');
+    throw new UsageError(`${name} has report version ${r.version}, newer than this netbrace (${REPORT_VERSION})`, 'join with the newest netbrace');
   }
   const files = r.files.map((f: FileReport) => ({ ...f, findings: f.findings ?? [], requirements: f.requirements ?? [] }));
   return {
@@ -25,18 +25,18 @@ export function upgradeReport(value: unknown, name = 'report'): Report {
   };
 }
 
-export function mergeReports(reports: readonly unknown[]): Report {
-  if (reports.length === 0) throw new UsageError('there are no reports to merge', 'check the folder of shard reports');
+export function joinReports(reports: readonly unknown[]): Report {
+  if (reports.length === 0) throw new UsageError('there are no reports to join', 'check the folder of part reports');
   const list = reports.map((r, i) => upgradeReport(r, `report ${i + 1}`));
   const first = list[0];
   const byPath = new Map<string, FileReport>();
   for (const r of list) for (const f of r.files) if (!byPath.has(f.path)) byPath.set(f.path, f);
   const files = [...byPath.values()].sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
-  const merged: Report = {
+  const joined: Report = {
     version: REPORT_VERSION,
     tool: first.tool,
     verdict: list.some((r) => r.verdict === 'fail') ? 'fail' : verdictOf(files),
-    mode: list.some((r) => r.mode === 'enforce') ? 'enforce' : 'advise',
+    mode: list.some((r) => r.mode === 'block') ? 'block' : 'inform',
     policy: { ...first.policy, ...(list.some((r) => r.policy?.changed) ? { changed: true } : {}) },
     ...(first.base !== undefined ? { base: first.base } : {}),
     ...(first.head !== undefined ? { head: first.head } : {}),
@@ -46,9 +46,9 @@ export function mergeReports(reports: readonly unknown[]): Report {
     files,
     caution: first.caution,
   };
-  const shards = list.map((r) => r.shard).filter((s): s is NonNullable<Report['shard']> => s !== undefined);
-  if (shards.length > 0) {
-    merged.shards = { total: Math.max(...shards.map((s) => s.total)), merged: [...new Set(shards.map((s) => s.index))].sort((a, b) => a - b) };
+  const parts = list.map((r) => r.part).filter((s): s is NonNullable<Report['part']> => s !== undefined);
+  if (parts.length > 0) {
+    joined.parts = { total: Math.max(...parts.map((s) => s.total)), joined: [...new Set(parts.map((s) => s.index))].sort((a, b) => a - b) };
   }
-  return merged;
+  return joined;
 }
