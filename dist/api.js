@@ -17959,7 +17959,7 @@ var require_saxes = __commonJS({
 var DEFAULT_POLICY_PATH = ".netbrace.yaml";
 var BUILTIN_POLICY_NAME = "<built-in policy>";
 var REGIONAL_UNTIL_KM = 50;
-var DEFAULT_NOISE_FACTOR = 2;
+var DEFAULT_ERROR_MULTIPLE = 2;
 var STARTER_POLICY = `# netbrace policy: what a network design must satisfy before a change to it merges.
 # Every key is optional; a key left out takes the value of the built-in policy, which is
 # exactly this file. Editors can check it against policy.schema.json (shipped in dist/).
@@ -17970,8 +17970,8 @@ version: 1
 
 # Which files are designs (globs from the repository root; "format" forces a format).
 designs:
-  - files: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
-# ignore: ["archive/**"]
+  - paths: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
+# exclude: ["archive/**"]
 
 # Seed of every random challenge: the same inputs and seed give the same report.
 seed: 1
@@ -18014,7 +18014,7 @@ requirements:
   # A change may not add a bridge or a cut node that the base did not have.
   - kind: no-new-spof
     severity: fail
-  # Areas under the envelopes, tracked for regressions (no floor of their own).
+  # Areas under the envelopes, tracked for weakening (no floor of their own).
   - kind: area-floor
     challenge: node-failures
   - kind: area-floor
@@ -18033,9 +18033,9 @@ requirements:
   #   min: 0.8
 
 # How far a requirement's value may drop from the base to the head.
-regression:
+weakening:
   allowed-drop: 0.02       # in units of R
-  noise-factor: 2          # a drop below 2 × its Monte Carlo error never fails
+  error-multiple: 2        # a drop below 2 × its Monte Carlo error never fails
   severity: fail
 
 # A deleted design file: fail | warn | notice | ignore.
@@ -18051,8 +18051,8 @@ budget:
 
 # Rules for some files only; they may add or tighten requirements, never loosen them
 # (and raise the budget, never lower it).
-# overrides:
-#   - files: "core/**"
+# scopes:
+#   - paths: "core/**"
 #     requirements:
 #       - kind: n-1
 #         element: node
@@ -18067,7 +18067,7 @@ var NetbraceError = class extends Error {
   line;
   column;
   hint;
-  /** Further locations that belong to the same problem (e.g. the floor an override loosens). */
+  /** Further locations that belong to the same problem (e.g. the floor a scope loosens). */
   related;
   constructor(kind, message, where = {}, hint = "", related2 = []) {
     super(message);
@@ -22529,11 +22529,11 @@ function judge(r, input, description) {
   }
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== void 0) {
     if (row.status === "met") row.status = "uncertain";
-    const regression = input.policy.regression;
+    const weakening = input.policy.weakening;
     findings.push(
       finding(
         "regression",
-        uncertainSeverity(regression.severity),
+        uncertainSeverity(weakening.severity),
         `${description}: from ${formatR(m.base)} to ${formatR(m.head)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
         extra
@@ -22542,10 +22542,10 @@ function judge(r, input, description) {
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
     const drop = m.higherIsBetter ? -m.delta : m.delta;
     if (drop > SAME * Math.max(1, Math.abs(m.base))) {
-      const rule = input.policy.regression;
+      const rule = input.policy.weakening;
       const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(m.base));
       const change = `from ${formatR(m.base)} to ${formatR(m.head)} (Δ ${formatDelta(m.delta, m.se)})`;
-      const noise2 = rule.noiseFactor * m.se;
+      const noise2 = rule.errorMultiple * m.se;
       const verb = m.higherIsBetter ? "dropped" : "rose";
       if (m.reduced !== void 0 && !(drop > allowance + noise2) && !(drop <= allowance - noise2)) {
         if (row.status === "met") row.status = "uncertain";
@@ -22553,14 +22553,14 @@ function judge(r, input, description) {
           finding(
             "regression",
             uncertainSeverity(rule.severity),
-            `${description}: ${verb} ${change}, within ${rule.noiseFactor} × its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            `${description}: ${verb} ${change}, within ${rule.errorMultiple} × its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
             extra
           )
         );
       } else if (m.reduced !== void 0 && drop <= allowance - noise2) {
         findings.push(
-          finding("regression", "notice", `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} × its error; ${m.reduced}`, elements, extra)
+          finding("regression", "notice", `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} × its error; ${m.reduced}`, elements, extra)
         );
       } else if (m.reduced !== void 0) {
         if (row.status !== "missed") row.status = "regressed";
@@ -22568,7 +22568,7 @@ function judge(r, input, description) {
           finding(
             "regression",
             rule.severity,
-            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} × its error; ${m.reduced}`,
+            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} × its error; ${m.reduced}`,
             elements,
             extra
           )
@@ -22579,7 +22579,7 @@ function judge(r, input, description) {
           finding(
             "regression",
             "notice",
-            `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, less than ${rule.noiseFactor} × its Monte Carlo error: within noise, not a failure`,
+            `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, less than ${rule.errorMultiple} × its Monte Carlo error: within noise, not a failure`,
             elements,
             extra
           )
@@ -22751,7 +22751,7 @@ function verdictOf(files) {
   return failed ? "fail" : "pass";
 }
 function exitCodeOf(report) {
-  return report.verdict === "fail" && report.mode === "enforce" ? 1 : 0;
+  return report.verdict === "fail" && report.mode === "block" ? 1 : 0;
 }
 
 // src/policy/resolve.ts
@@ -22852,7 +22852,7 @@ var policy_schema_default = {
       description: "Version of the policy format. Only 1 exists.",
       const: 1
     },
-    extends: {
+    inherits: {
       description: "A base policy file (path in the repository, relative to this file). Its floors may be tightened here, never loosened.",
       type: "string",
       minLength: 1
@@ -22863,7 +22863,7 @@ var policy_schema_default = {
       minItems: 1,
       items: { $ref: "#/definitions/designGlob" }
     },
-    ignore: {
+    exclude: {
       description: "Globs of files that are never designs, even when a designs glob matches them.",
       $ref: "#/definitions/globs"
     },
@@ -22917,20 +22917,20 @@ var policy_schema_default = {
       description: "What every design must satisfy.",
       $ref: "#/definitions/requirements"
     },
-    regression: { $ref: "#/definitions/regression" },
+    weakening: { $ref: "#/definitions/weakening" },
     "removed-designs": { $ref: "#/definitions/removedDesigns" },
     budget: { $ref: "#/definitions/budget" },
-    overrides: {
+    scopes: {
       description: "Rules for some files only: they add requirements or tighten existing ones, never loosen them.",
       type: "array",
       items: {
         type: "object",
         additionalProperties: false,
-        required: ["files"],
+        required: ["paths"],
         properties: {
-          files: { description: "Globs of the design files this override applies to.", $ref: "#/definitions/globs" },
+          paths: { description: "Globs of the design files this scope applies to.", $ref: "#/definitions/globs" },
           requirements: { $ref: "#/definitions/requirements" },
-          regression: { $ref: "#/definitions/regression" },
+          weakening: { $ref: "#/definitions/weakening" },
           "removed-designs": { $ref: "#/definitions/removedDesigns" },
           budget: { $ref: "#/definitions/budget" }
         }
@@ -22956,9 +22956,9 @@ var policy_schema_default = {
     designGlob: {
       type: "object",
       additionalProperties: false,
-      required: ["files"],
+      required: ["paths"],
       properties: {
-        files: { description: "Globs of design files (relative to the repository root).", $ref: "#/definitions/globs" },
+        paths: { description: "Globs of design files (relative to the repository root).", $ref: "#/definitions/globs" },
         format: {
           description: "The format of the matched files, where the extension does not say it.",
           enum: ["native-yaml", "native-json", "graphml", "gml", "csv"]
@@ -23090,19 +23090,19 @@ var policy_schema_default = {
         }
       ]
     },
-    regression: {
-      description: "How far a requirement's value may drop from base to head. A drop within the allowance is a notice; a drop smaller than noise-factor × its standard error is never a failure.",
+    weakening: {
+      description: "How far a requirement's value may drop from base to head. A drop within the allowance is a notice; a drop smaller than error-multiple × its standard error is never a failure.",
       type: "object",
       additionalProperties: false,
       properties: {
         "allowed-drop": { description: "Largest tolerated drop, in units of R.", type: "number", minimum: 0 },
         "allowed-relative-drop": { description: "Largest tolerated drop as a fraction of the base value (0.05 = 5 %). With allowed-drop too, the larger allowance applies.", type: "number", minimum: 0, maximum: 1 },
-        "noise-factor": { description: "A drop below noise-factor × se is Monte Carlo noise (default 2).", type: "number", minimum: 0 },
+        "error-multiple": { description: "A drop below error-multiple × se is Monte Carlo noise (default 2).", type: "number", minimum: 0 },
         severity: { $ref: "#/definitions/severity" }
       }
     },
     budget: {
-      description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is uncertain, never met. Default: seconds 60. An extending policy or an override may raise it, never lower it.",
+      description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is uncertain, never met. Default: seconds 60. An inheriting policy or a scope may raise it, never lower it.",
       type: "object",
       additionalProperties: false,
       minProperties: 1,
@@ -23275,8 +23275,8 @@ function describePath(path) {
     if (seg === "requirements" && typeof next === "number") {
       parts.push(`requirement ${next + 1}`);
       i += 2;
-    } else if (seg === "overrides" && typeof next === "number") {
-      parts.push(`override ${next + 1}`);
+    } else if (seg === "scopes" && typeof next === "number") {
+      parts.push(`scope ${next + 1}`);
       i += 2;
     } else if (seg === "designs" && typeof next === "number") {
       parts.push(`designs entry ${next + 1}`);
@@ -23310,6 +23310,24 @@ function typeOf(value) {
   if (typeof value === "number") return Number.isInteger(value) ? `the number ${value}` : `the number ${value}`;
   return String(value);
 }
+var RENAMED_KEYS = {
+  "extends": "inherits",
+  "ignore": "exclude",
+  "files": "paths",
+  "overrides": "scopes",
+  "regression": "weakening",
+  "noise-factor": "error-multiple"
+};
+function renamedKey(key, known) {
+  const renamed = Object.hasOwn(RENAMED_KEYS, key) ? RENAMED_KEYS[key] : void 0;
+  return renamed !== void 0 && known.includes(renamed) ? renamed : void 0;
+}
+function renamedAt(e) {
+  if (e.keyword !== "additionalProperties") return void 0;
+  const known = Object.keys(e.parentSchema?.properties ?? {});
+  const renamed = renamedKey(String(e.params.additionalProperty), known);
+  return renamed === void 0 ? void 0 : `${e.instancePath}\0${renamed}`;
+}
 function suggestion(word, candidates2, listName) {
   const c = typeof word === "string" ? closest(word, candidates2) : void 0;
   return c !== void 0 ? `did you mean "${c}"?` : `${listName}: ${candidates2.join(", ")}`;
@@ -23327,7 +23345,9 @@ function diagnose(e, src) {
       if (path.length === 2 && path[0] === "r-value" && path[1] === "metrics") {
         return { where, message: `unknown metric "${key}"`, hint: suggestion(key, known, "known metrics") };
       }
-      return { where, message: `unknown key "${key}" in ${subject}`, hint: suggestion(key, known, "known keys") };
+      const renamed = renamedKey(key, known);
+      const hint = renamed !== void 0 ? `did you mean "${renamed}"?` : suggestion(key, known, "known keys");
+      return { where, message: `unknown key "${key}" in ${subject}`, hint };
     }
     case "required": {
       const key = String(params.missingProperty);
@@ -23401,8 +23421,9 @@ function requirementKinds(schema) {
 }
 function throwSchemaErrors(errors, src) {
   const anyOfPaths = errors.filter((e) => e.keyword === "anyOf").map((e) => e.instancePath);
+  const renamed = new Set(errors.map(renamedAt).filter((r) => r !== void 0));
   const kept = errors.filter(
-    (e) => e.keyword === "anyOf" || !anyOfPaths.some((p) => e.instancePath === p || e.instancePath.startsWith(`${p}/`))
+    (e) => (e.keyword === "anyOf" || !anyOfPaths.some((p) => e.instancePath === p || e.instancePath.startsWith(`${p}/`))) && !(e.keyword === "required" && renamed.has(`${e.instancePath}\0${String(e.params.missingProperty)}`))
   );
   const seen = /* @__PURE__ */ new Set();
   const list = [];
@@ -23617,7 +23638,7 @@ var FileBuilder = class {
     });
     return out;
   }
-  regression(raw, path) {
+  weakening(raw, path) {
     if (raw === void 0) return void 0;
     const fieldWhere = {};
     const field = (key, name) => {
@@ -23625,7 +23646,7 @@ var FileBuilder = class {
       return raw[key];
     };
     const rule = {
-      noiseFactor: field("noise-factor", "noiseFactor") ?? DEFAULT_NOISE_FACTOR,
+      errorMultiple: field("error-multiple", "errorMultiple") ?? DEFAULT_ERROR_MULTIPLE,
       severity: field("severity", "severity") ?? "fail",
       where: this.at(path, true),
       fieldWhere
@@ -23652,7 +23673,7 @@ var FileBuilder = class {
 };
 function joinRepoPath(fromFile, relative, where) {
   if (relative.startsWith("/") || /^[A-Za-z]:[\\/]/.test(relative)) {
-    throw new PolicyError(`"extends" must be a path inside the repository, not ${relative}`, where, "write it relative to this policy file");
+    throw new PolicyError(`"inherits" must be a path inside the repository, not ${relative}`, where, "write it relative to this policy file");
   }
   const dir = fromFile.split("/").slice(0, -1);
   const parts = [...dir];
@@ -23660,7 +23681,7 @@ function joinRepoPath(fromFile, relative, where) {
     if (seg === "" || seg === ".") continue;
     if (seg === "..") {
       if (parts.length === 0) {
-        throw new PolicyError(`"extends" leaves the repository: ${relative}`, where, "the base policy must be a file in this repository");
+        throw new PolicyError(`"inherits" leaves the repository: ${relative}`, where, "the base policy must be a file in this repository");
       }
       parts.pop();
     } else {
@@ -23679,21 +23700,21 @@ function parsePolicyFile(text2, file) {
   if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
   const raw = data;
   const b = new FileBuilder(src);
-  const policy = { path: file, overrides: [] };
-  if (raw.extends !== void 0) {
-    const where = src.where(["extends"]);
-    policy.extends = { path: joinRepoPath(file, raw.extends, where), where };
+  const policy = { path: file, scopes: [] };
+  if (raw.inherits !== void 0) {
+    const where = src.where(["inherits"]);
+    policy.inherits = { path: joinRepoPath(file, raw.inherits, where), where };
   }
   if (raw.designs !== void 0) {
     policy.designs = raw.designs.map(
       (d, i) => ({
-        files: globs(d.files),
+        paths: globs(d.paths),
         ...d.format !== void 0 ? { format: d.format } : {},
         where: src.where(["designs", i])
       })
     );
   }
-  if (raw.ignore !== void 0) policy.ignore = { globs: globs(raw.ignore), where: src.where(["ignore"]) };
+  if (raw.exclude !== void 0) policy.exclude = { globs: globs(raw.exclude), where: src.where(["exclude"]) };
   if (raw.seed !== void 0) policy.seed = { value: raw.seed, where: src.where(["seed"]) };
   if (raw["r-value"] !== void 0) {
     const r = raw["r-value"];
@@ -23720,26 +23741,26 @@ function parsePolicyFile(text2, file) {
     policy.challenges?.push(def);
   }
   if (raw.requirements !== void 0) policy.requirements = b.requirements(raw.requirements, ["requirements"]);
-  const regression = b.regression(raw.regression, ["regression"]);
-  if (regression) policy.regression = regression;
+  const weakening = b.weakening(raw.weakening, ["weakening"]);
+  if (weakening) policy.weakening = weakening;
   const removed = b.removed(raw["removed-designs"], ["removed-designs"]);
   if (removed) policy.removedDesigns = removed;
   const budget = b.budget(raw.budget, ["budget"]);
   if (budget) policy.budget = budget;
-  policy.overrides = (raw.overrides ?? []).map((o, i) => {
-    const path = ["overrides", i];
-    const override = {
-      files: globs(o.files),
+  policy.scopes = (raw.scopes ?? []).map((o, i) => {
+    const path = ["scopes", i];
+    const scope = {
+      paths: globs(o.paths),
       requirements: b.requirements(o.requirements, [...path, "requirements"]),
       where: src.where(path)
     };
-    const rule = b.regression(o.regression, [...path, "regression"]);
-    if (rule) override.regression = rule;
+    const rule = b.weakening(o.weakening, [...path, "weakening"]);
+    if (rule) scope.weakening = rule;
     const rem = b.removed(o["removed-designs"], [...path, "removed-designs"]);
-    if (rem) override.removedDesigns = rem;
+    if (rem) scope.removedDesigns = rem;
     const ob = b.budget(o.budget, [...path, "budget"]);
-    if (ob) override.budget = ob;
-    return override;
+    if (ob) scope.budget = ob;
+    return scope;
   });
   return policy;
 }
@@ -23789,7 +23810,7 @@ function loosening(prev, next) {
   };
 }
 function loosenError(what, why, where, prevWhere) {
-  return new PolicyError(`${what} ${why}`, where, "an extending policy or an override may tighten a floor, never loosen it", [
+  return new PolicyError(`${what} ${why}`, where, "an inheriting policy or a scope may tighten a floor, never loosen it", [
     related(prevWhere, "the floor it would loosen")
   ]);
 }
@@ -23807,15 +23828,15 @@ function mergeRequirement(list, next, what) {
   }
   if (next.layer >= prev.layer) throw loosenError(what, why.message, why.where, why.prevWhere);
 }
-var REGRESSION_FIELDS = [
+var WEAKENING_FIELDS = [
   ["allowedDrop", "allowed-drop"],
   ["allowedRelativeDrop", "allowed-relative-drop"],
-  ["noiseFactor", "noise-factor"]
+  ["errorMultiple", "error-multiple"]
 ];
-function mergeRegression(prev, next, what) {
+function mergeWeakening(prev, next, what) {
   const merged = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
   const mayLoosen = next.layer < prev.layer;
-  for (const [field, key] of REGRESSION_FIELDS) {
+  for (const [field, key] of WEAKENING_FIELDS) {
     const at = next.value.fieldWhere[field];
     if (!at) continue;
     const value = next.value[field];
@@ -23823,7 +23844,7 @@ function mergeRegression(prev, next, what) {
     const prevAt = prev.value.fieldWhere[field] ?? prev.value.where;
     if (value > before) {
       if (mayLoosen) continue;
-      throw loosenError(what, `loosens regression ${key}: ${value} where ${before} is allowed`, at, prevAt);
+      throw loosenError(what, `loosens weakening ${key}: ${value} where ${before} is allowed`, at, prevAt);
     }
     merged[field] = value;
     merged.fieldWhere[field] = at;
@@ -23834,7 +23855,7 @@ function mergeRegression(prev, next, what) {
       if (!mayLoosen) {
         throw loosenError(
           what,
-          `lowers the severity of regressions from ${prev.value.severity} to ${next.value.severity}`,
+          `lowers the weakening severity from ${prev.value.severity} to ${next.value.severity}`,
           sevAt,
           prev.value.fieldWhere.severity ?? prev.value.where
         );
@@ -23883,7 +23904,7 @@ function mergeBudget(prev, next, what) {
   throw new PolicyError(
     `${what} lowers the budget to ${visits(after)} element visits (${describeBudget(merged)}) where ${visits(before)} (${describeBudget(prev.value)}) is in force`,
     at && merged.fieldWhere[at] || next.value.where,
-    "an extending policy or an override may raise the budget, never lower it: a smaller budget leaves requirements uncertain",
+    "an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements uncertain",
     [related(prevAt && prev.value.fieldWhere[prevAt] || prev.value.where, "the budget in force")]
   );
 }
@@ -23968,11 +23989,11 @@ function checkMetrics(spec, where) {
     }
   }
 }
-function describeRequirementSite(file, r, override) {
-  const list = override === void 0 ? file.requirements : file.overrides[override].requirements;
+function describeRequirementSite(file, r, scope) {
+  const list = scope === void 0 ? file.requirements : file.scopes[scope].requirements;
   const index = (list ?? []).indexOf(r);
   const req = index >= 0 ? `requirement ${index + 1}` : "a requirement";
-  return override === void 0 ? req : `override ${override + 1}, ${req}`;
+  return scope === void 0 ? req : `scope ${scope + 1}, ${req}`;
 }
 function readChain(entry, read) {
   const chain = [];
@@ -23981,7 +24002,7 @@ function readChain(entry, read) {
   let from;
   for (; ; ) {
     if (seen.has(path)) {
-      throw new PolicyError(`"extends" goes round in a circle back to ${path}`, from ?? { file: path }, "remove one of the extends lines");
+      throw new PolicyError(`"inherits" goes round in a circle back to ${path}`, from ?? { file: path }, "remove one of the inherits lines");
     }
     seen.add(path);
     const text2 = read(path);
@@ -23991,9 +24012,9 @@ function readChain(entry, read) {
     }
     const file = parsePolicyFile(text2, path);
     chain.unshift(file);
-    if (!file.extends) break;
-    from = file.extends.where;
-    path = file.extends.path;
+    if (!file.inherits) break;
+    from = file.inherits.where;
+    path = file.inherits.path;
   }
   return chain;
 }
@@ -24011,9 +24032,9 @@ function mergeChain(chain) {
   let rValue = { spec: (root.rValue ?? base.rValue).spec, where: (root.rValue ?? base.rValue).where };
   checkMetrics(rValue.spec, rValue.where);
   let designs = root.designs ?? base.designs ?? [];
-  const ignore = [...root.ignore?.globs ?? []];
+  const exclude = [...root.exclude?.globs ?? []];
   let seed = (root.seed ?? base.seed)?.value ?? 1;
-  let regression = { value: root.regression ?? base.regression, layer: 0 };
+  let weakening = { value: root.weakening ?? base.weakening, layer: 0 };
   let removed = {
     value: root.removedDesigns ?? base.removedDesigns ?? { severity: "notice" },
     layer: 0
@@ -24026,7 +24047,7 @@ function mergeChain(chain) {
     if (layer === 0) return;
     if (file.rValue && !sameRValue(file.rValue.spec, rValue.spec)) {
       throw new PolicyError(
-        "an extending policy cannot change the r-value of the policy it extends",
+        "an inheriting policy cannot change the r-value of the policy it inherits",
         file.rValue.where,
         'the floors of the base policy are measured in its R; remove "r-value" here',
         [related(rValue.where, "the r-value in force")]
@@ -24036,21 +24057,21 @@ function mergeChain(chain) {
       const prev = challenges2.get(c.name) ?? [...challenges2.values()].find((x) => x.engine === c.engine);
       if (prev && !sameChallenge(prev, c)) {
         throw new PolicyError(
-          `challenge "${c.name}" redefines challenge "${prev.name}" of the policy it extends`,
+          `challenge "${c.name}" redefines challenge "${prev.name}" of the policy it inherits`,
           c.where,
-          "an extending policy may add challenges, not change them",
+          "an inheriting policy may add challenges, not change them",
           [related(prev.where, `"${prev.name}" is defined here`)]
         );
       }
       if (!prev) challenges2.set(c.name, c);
     }
     if (file.designs) designs = [...designs, ...file.designs];
-    for (const g of file.ignore?.globs ?? []) {
-      if (!ignore.includes(g)) {
+    for (const g of file.exclude?.globs ?? []) {
+      if (!exclude.includes(g)) {
         throw new PolicyError(
-          `an extending policy cannot ignore "${g}": the policy it extends judges those files`,
-          file.ignore.where,
-          "ignore the files in the base policy, or narrow the designs there"
+          `an inheriting policy cannot exclude "${g}": the policy it inherits judges those files`,
+          file.exclude.where,
+          "exclude the files in the base policy, or narrow the designs there"
         );
       }
     }
@@ -24058,7 +24079,7 @@ function mergeChain(chain) {
     for (const r of file.requirements ?? []) {
       mergeRequirement(requirements, { value: r, layer }, describeRequirementSite(file, r));
     }
-    if (file.regression) regression = mergeRegression(regression, { value: file.regression, layer }, "regression");
+    if (file.weakening) weakening = mergeWeakening(weakening, { value: file.weakening, layer }, "weakening");
     if (file.removedDesigns) removed = mergeRemoved(removed, { value: file.removedDesigns, layer }, "the policy");
     if (file.budget) budget = mergeBudget(budget, { value: file.budget, layer }, "the policy");
   });
@@ -24067,33 +24088,33 @@ function mergeChain(chain) {
     ...r,
     value: checkRequirement(r.value, challengeList, describeRequirementSite(chain[r.layer] ?? root, r.value))
   }));
-  const overrides = [];
+  const scopes = [];
   chain.forEach(
-    (file, layer) => file.overrides.forEach((o, i) => {
+    (file, layer) => file.scopes.forEach((o, i) => {
       const what = (r) => describeRequirementSite(file, r, i);
       const requirementsChecked = o.requirements.map((r) => checkRequirement(r, challengeList, what(r)));
       const scratch = checked.map((r) => ({ ...r }));
       for (const r of requirementsChecked) mergeRequirement(scratch, { value: r, layer }, what(r));
-      if (o.regression) mergeRegression(regression, { value: o.regression, layer }, `override ${i + 1}, regression`);
-      if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `override ${i + 1}`);
-      if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `override ${i + 1}`);
-      overrides.push({ ...o, requirements: requirementsChecked, layer });
+      if (o.weakening) mergeWeakening(weakening, { value: o.weakening, layer }, `scope ${i + 1}, weakening`);
+      if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `scope ${i + 1}`);
+      if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `scope ${i + 1}`);
+      scopes.push({ ...o, requirements: requirementsChecked, layer });
     })
   );
   return {
     source: "file",
     files: chain.map((f) => f.path).reverse(),
     designs,
-    ignore,
+    exclude,
     seed,
     rValue: rValue.spec,
     challenges: challengeList,
     requirements: checked.map((r) => r.value),
-    regression: regression.value,
+    weakening: weakening.value,
     removedDesigns: removed.value,
     budget: budget.value,
-    overrides,
-    layers: { requirements: checked.map((r) => r.layer), regression: regression.layer, removed: removed.layer, budget: budget.layer }
+    scopes,
+    layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer }
   };
 }
 var matchers = /* @__PURE__ */ new Map();
@@ -24109,31 +24130,31 @@ function matches(globs2, given) {
   });
 }
 function isDesignPath(policy, path) {
-  return policy.designs.some((d) => matches(d.files, path)) && !matches(policy.ignore, path);
+  return policy.designs.some((d) => matches(d.paths, path)) && !matches(policy.exclude, path);
 }
 function policyForFile(policy, path) {
   const layers = policy.layers;
   const requirements = policy.requirements.map((value, i) => ({ value, layer: layers.requirements[i] }));
-  let regression = { value: policy.regression, layer: layers.regression };
+  let weakening = { value: policy.weakening, layer: layers.weakening };
   let removed = { value: policy.removedDesigns, layer: layers.removed };
   let budget = { value: policy.budget, layer: layers.budget };
-  for (const o of policy.overrides) {
-    if (!matches(o.files, path)) continue;
+  for (const o of policy.scopes) {
+    if (!matches(o.paths, path)) continue;
     const { layer } = o;
-    const what = `an override matching ${path}`;
+    const what = `a scope matching ${path}`;
     for (const r of o.requirements) mergeRequirement(requirements, { value: r, layer }, what);
-    if (o.regression) regression = mergeRegression(regression, { value: o.regression, layer }, `${what}:`);
+    if (o.weakening) weakening = mergeWeakening(weakening, { value: o.weakening, layer }, `${what}:`);
     if (o.removedDesigns) removed = mergeRemoved(removed, { value: o.removedDesigns, layer }, what);
     if (o.budget) budget = mergeBudget(budget, { value: o.budget, layer }, what);
   }
   const b = budget.value;
-  const format = policy.designs.find((d) => d.format !== void 0 && matches(d.files, path))?.format;
+  const format = policy.designs.find((d) => d.format !== void 0 && matches(d.paths, path))?.format;
   return {
     rValue: policy.rValue,
     seed: policy.seed,
     challenges: policy.challenges,
     requirements: requirements.map((r) => r.value),
-    regression: regression.value,
+    weakening: weakening.value,
     removedDesigns: removed.value.severity,
     budget: { ...b.work !== void 0 ? { work: b.work } : {}, ...b.seconds !== void 0 ? { seconds: b.seconds } : {}, maxWork: budgetWork(b) },
     ...format ? { format } : {}
@@ -25446,8 +25467,8 @@ function pathHash(path) {
   }
   return h >>> 0;
 }
-function inShard(path, shard) {
-  return pathHash(path) % shard.total === shard.index - 1;
+function inPart(path, part) {
+  return pathHash(path) % part.total === part.index - 1;
 }
 var NeedFile = class {
   constructor(path) {
@@ -25469,7 +25490,7 @@ async function loadPolicyAt(entry, read) {
       texts.set(e.path, await read(e.path));
     }
   }
-  throw new PolicyError("the policy extends too many files", { file: entry }, "keep the chain of extends short");
+  throw new PolicyError("the policy inherits too many files", { file: entry }, "keep the chain of inherits short");
 }
 async function choosePolicy(request, deps, base, head) {
   const path = request.policyPath ?? DEFAULT_POLICY_PATH;
@@ -25605,13 +25626,13 @@ async function evaluateGraph(g, specs, cuts, request, deps) {
   return { graph: g, result: joinEvaluations(parts) };
 }
 function validateRequest(request) {
-  if (request.mode !== "enforce" && request.mode !== "advise") throw new UsageError(`mode must be enforce or advise, not ${String(request.mode)}`);
+  if (request.mode !== "block" && request.mode !== "inform") throw new UsageError(`mode must be block or inform, not ${String(request.mode)}`);
   if (request.policySource !== "base" && request.policySource !== "head") {
     throw new UsageError(`policy-source must be base or head, not ${String(request.policySource)}`);
   }
-  const s = request.shard;
+  const s = request.part;
   if (s && !(Number.isInteger(s.index) && Number.isInteger(s.total) && s.total >= 1 && s.index >= 1 && s.index <= s.total)) {
-    throw new UsageError(`shard ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, "e.g. 2/4 for the second of four shards");
+    throw new UsageError(`part ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, "e.g. 2/4 for the second of four parts");
   }
   if (request.seed !== void 0 && !(Number.isInteger(request.seed) && request.seed >= 0 && request.seed <= 4294967295)) {
     throw new UsageError(`seed must be a whole number from 0 to 4294967295, not ${request.seed}`);
@@ -25626,7 +25647,7 @@ async function runGate(request, deps) {
   const base = request.eventKind === "schedule" ? void 0 : request.base;
   const { policy, info } = await choosePolicy(request, deps, base, head);
   const { list: all, scope } = await candidates(request, deps, policy, base, head);
-  const chosen = [...all].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0).filter((c) => !request.shard || inShard(c.path, request.shard));
+  const chosen = [...all].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0).filter((c) => !request.part || inPart(c.path, request.part));
   const rules = chosen.map((c) => policyForFile(policy, c.path));
   const seed = request.seed ?? policy.seed;
   const files = [];
@@ -25675,7 +25696,7 @@ async function runGate(request, deps) {
     ...base !== void 0 ? { base } : {},
     head,
     seed,
-    ...request.shard ? { shard: { index: request.shard.index, total: request.shard.total } } : {},
+    ...request.part ? { part: { index: request.part.index, total: request.part.total } } : {},
     scope,
     counts: countStatuses(files),
     files,
@@ -25850,7 +25871,7 @@ async function check(input) {
     ...input.base !== void 0 ? { base: "base" } : {},
     head: "head",
     policySource: "base",
-    mode: input.mode ?? "enforce",
+    mode: input.mode ?? "block",
     eventKind: "local",
     ...input.seed !== void 0 ? { seed: input.seed } : {}
   };

@@ -71,7 +71,7 @@ var init_errors = __esm({
       line;
       column;
       hint;
-      /** Further locations that belong to the same problem (e.g. the floor an override loosens). */
+      /** Further locations that belong to the same problem (e.g. the floor a scope loosens). */
       related;
       constructor(kind, message, where = {}, hint = "", related2 = []) {
         super(message);
@@ -22503,14 +22503,14 @@ var init_budget = __esm({
 });
 
 // src/policy/defaults.ts
-var DEFAULT_POLICY_PATH, BUILTIN_POLICY_NAME, REGIONAL_UNTIL_KM, DEFAULT_NOISE_FACTOR, STARTER_POLICY;
+var DEFAULT_POLICY_PATH, BUILTIN_POLICY_NAME, REGIONAL_UNTIL_KM, DEFAULT_ERROR_MULTIPLE, STARTER_POLICY;
 var init_defaults = __esm({
   "src/policy/defaults.ts"() {
     "use strict";
     DEFAULT_POLICY_PATH = ".netbrace.yaml";
     BUILTIN_POLICY_NAME = "<built-in policy>";
     REGIONAL_UNTIL_KM = 50;
-    DEFAULT_NOISE_FACTOR = 2;
+    DEFAULT_ERROR_MULTIPLE = 2;
     STARTER_POLICY = `# netbrace policy: what a network design must satisfy before a change to it merges.
 # Every key is optional; a key left out takes the value of the built-in policy, which is
 # exactly this file. Editors can check it against policy.schema.json (shipped in dist/).
@@ -22521,8 +22521,8 @@ version: 1
 
 # Which files are designs (globs from the repository root; "format" forces a format).
 designs:
-  - files: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
-# ignore: ["archive/**"]
+  - paths: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
+# exclude: ["archive/**"]
 
 # Seed of every random challenge: the same inputs and seed give the same report.
 seed: 1
@@ -22565,7 +22565,7 @@ requirements:
   # A change may not add a bridge or a cut node that the base did not have.
   - kind: no-new-spof
     severity: fail
-  # Areas under the envelopes, tracked for regressions (no floor of their own).
+  # Areas under the envelopes, tracked for weakening (no floor of their own).
   - kind: area-floor
     challenge: node-failures
   - kind: area-floor
@@ -22584,9 +22584,9 @@ requirements:
   #   min: 0.8
 
 # How far a requirement's value may drop from the base to the head.
-regression:
+weakening:
   allowed-drop: 0.02       # in units of R
-  noise-factor: 2          # a drop below 2 × its Monte Carlo error never fails
+  error-multiple: 2        # a drop below 2 × its Monte Carlo error never fails
   severity: fail
 
 # A deleted design file: fail | warn | notice | ignore.
@@ -22602,8 +22602,8 @@ budget:
 
 # Rules for some files only; they may add or tighten requirements, never loosen them
 # (and raise the budget, never lower it).
-# overrides:
-#   - files: "core/**"
+# scopes:
+#   - paths: "core/**"
 #     requirements:
 #       - kind: n-1
 #         element: node
@@ -23490,7 +23490,7 @@ var init_policy_schema = __esm({
           description: "Version of the policy format. Only 1 exists.",
           const: 1
         },
-        extends: {
+        inherits: {
           description: "A base policy file (path in the repository, relative to this file). Its floors may be tightened here, never loosened.",
           type: "string",
           minLength: 1
@@ -23501,7 +23501,7 @@ var init_policy_schema = __esm({
           minItems: 1,
           items: { $ref: "#/definitions/designGlob" }
         },
-        ignore: {
+        exclude: {
           description: "Globs of files that are never designs, even when a designs glob matches them.",
           $ref: "#/definitions/globs"
         },
@@ -23555,20 +23555,20 @@ var init_policy_schema = __esm({
           description: "What every design must satisfy.",
           $ref: "#/definitions/requirements"
         },
-        regression: { $ref: "#/definitions/regression" },
+        weakening: { $ref: "#/definitions/weakening" },
         "removed-designs": { $ref: "#/definitions/removedDesigns" },
         budget: { $ref: "#/definitions/budget" },
-        overrides: {
+        scopes: {
           description: "Rules for some files only: they add requirements or tighten existing ones, never loosen them.",
           type: "array",
           items: {
             type: "object",
             additionalProperties: false,
-            required: ["files"],
+            required: ["paths"],
             properties: {
-              files: { description: "Globs of the design files this override applies to.", $ref: "#/definitions/globs" },
+              paths: { description: "Globs of the design files this scope applies to.", $ref: "#/definitions/globs" },
               requirements: { $ref: "#/definitions/requirements" },
-              regression: { $ref: "#/definitions/regression" },
+              weakening: { $ref: "#/definitions/weakening" },
               "removed-designs": { $ref: "#/definitions/removedDesigns" },
               budget: { $ref: "#/definitions/budget" }
             }
@@ -23594,9 +23594,9 @@ var init_policy_schema = __esm({
         designGlob: {
           type: "object",
           additionalProperties: false,
-          required: ["files"],
+          required: ["paths"],
           properties: {
-            files: { description: "Globs of design files (relative to the repository root).", $ref: "#/definitions/globs" },
+            paths: { description: "Globs of design files (relative to the repository root).", $ref: "#/definitions/globs" },
             format: {
               description: "The format of the matched files, where the extension does not say it.",
               enum: ["native-yaml", "native-json", "graphml", "gml", "csv"]
@@ -23728,19 +23728,19 @@ var init_policy_schema = __esm({
             }
           ]
         },
-        regression: {
-          description: "How far a requirement's value may drop from base to head. A drop within the allowance is a notice; a drop smaller than noise-factor × its standard error is never a failure.",
+        weakening: {
+          description: "How far a requirement's value may drop from base to head. A drop within the allowance is a notice; a drop smaller than error-multiple × its standard error is never a failure.",
           type: "object",
           additionalProperties: false,
           properties: {
             "allowed-drop": { description: "Largest tolerated drop, in units of R.", type: "number", minimum: 0 },
             "allowed-relative-drop": { description: "Largest tolerated drop as a fraction of the base value (0.05 = 5 %). With allowed-drop too, the larger allowance applies.", type: "number", minimum: 0, maximum: 1 },
-            "noise-factor": { description: "A drop below noise-factor × se is Monte Carlo noise (default 2).", type: "number", minimum: 0 },
+            "error-multiple": { description: "A drop below error-multiple × se is Monte Carlo noise (default 2).", type: "number", minimum: 0 },
             severity: { $ref: "#/definitions/severity" }
           }
         },
         budget: {
-          description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is uncertain, never met. Default: seconds 60. An extending policy or an override may raise it, never lower it.",
+          description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is uncertain, never met. Default: seconds 60. An inheriting policy or a scope may raise it, never lower it.",
           type: "object",
           additionalProperties: false,
           minProperties: 1,
@@ -23851,8 +23851,8 @@ function describePath(path7) {
     if (seg === "requirements" && typeof next === "number") {
       parts.push(`requirement ${next + 1}`);
       i += 2;
-    } else if (seg === "overrides" && typeof next === "number") {
-      parts.push(`override ${next + 1}`);
+    } else if (seg === "scopes" && typeof next === "number") {
+      parts.push(`scope ${next + 1}`);
       i += 2;
     } else if (seg === "designs" && typeof next === "number") {
       parts.push(`designs entry ${next + 1}`);
@@ -23878,6 +23878,16 @@ function typeOf(value) {
   if (typeof value === "number") return Number.isInteger(value) ? `the number ${value}` : `the number ${value}`;
   return String(value);
 }
+function renamedKey(key, known) {
+  const renamed = Object.hasOwn(RENAMED_KEYS, key) ? RENAMED_KEYS[key] : void 0;
+  return renamed !== void 0 && known.includes(renamed) ? renamed : void 0;
+}
+function renamedAt(e) {
+  if (e.keyword !== "additionalProperties") return void 0;
+  const known = Object.keys(e.parentSchema?.properties ?? {});
+  const renamed = renamedKey(String(e.params.additionalProperty), known);
+  return renamed === void 0 ? void 0 : `${e.instancePath}\0${renamed}`;
+}
 function suggestion(word, candidates2, listName) {
   const c = typeof word === "string" ? closest(word, candidates2) : void 0;
   return c !== void 0 ? `did you mean "${c}"?` : `${listName}: ${candidates2.join(", ")}`;
@@ -23895,7 +23905,9 @@ function diagnose(e, src) {
       if (path7.length === 2 && path7[0] === "r-value" && path7[1] === "metrics") {
         return { where, message: `unknown metric "${key}"`, hint: suggestion(key, known, "known metrics") };
       }
-      return { where, message: `unknown key "${key}" in ${subject}`, hint: suggestion(key, known, "known keys") };
+      const renamed = renamedKey(key, known);
+      const hint = renamed !== void 0 ? `did you mean "${renamed}"?` : suggestion(key, known, "known keys");
+      return { where, message: `unknown key "${key}" in ${subject}`, hint };
     }
     case "required": {
       const key = String(params.missingProperty);
@@ -23969,8 +23981,9 @@ function requirementKinds(schema) {
 }
 function throwSchemaErrors(errors, src) {
   const anyOfPaths = errors.filter((e) => e.keyword === "anyOf").map((e) => e.instancePath);
+  const renamed = new Set(errors.map(renamedAt).filter((r) => r !== void 0));
   const kept = errors.filter(
-    (e) => e.keyword === "anyOf" || !anyOfPaths.some((p) => e.instancePath === p || e.instancePath.startsWith(`${p}/`))
+    (e) => (e.keyword === "anyOf" || !anyOfPaths.some((p) => e.instancePath === p || e.instancePath.startsWith(`${p}/`))) && !(e.keyword === "required" && renamed.has(`${e.instancePath}\0${String(e.params.missingProperty)}`))
   );
   const seen = /* @__PURE__ */ new Set();
   const list2 = [];
@@ -23991,7 +24004,7 @@ function throwSchemaErrors(errors, src) {
     rest.slice(0, 20).map((d) => ({ ...d.where, message: d.hint ? `${d.message} — ${d.hint}` : d.message }))
   );
 }
-var TYPE_WORDS2;
+var TYPE_WORDS2, RENAMED_KEYS;
 var init_schema_errors = __esm({
   "src/policy/schema-errors.ts"() {
     "use strict";
@@ -24005,6 +24018,14 @@ var init_schema_errors = __esm({
       number: "a number",
       integer: "a whole number",
       boolean: "true or false"
+    };
+    RENAMED_KEYS = {
+      "extends": "inherits",
+      "ignore": "exclude",
+      "files": "paths",
+      "overrides": "scopes",
+      "regression": "weakening",
+      "noise-factor": "error-multiple"
     };
   }
 });
@@ -24020,7 +24041,7 @@ function globs(value) {
 }
 function joinRepoPath(fromFile, relative, where) {
   if (relative.startsWith("/") || /^[A-Za-z]:[\\/]/.test(relative)) {
-    throw new PolicyError(`"extends" must be a path inside the repository, not ${relative}`, where, "write it relative to this policy file");
+    throw new PolicyError(`"inherits" must be a path inside the repository, not ${relative}`, where, "write it relative to this policy file");
   }
   const dir = fromFile.split("/").slice(0, -1);
   const parts = [...dir];
@@ -24028,7 +24049,7 @@ function joinRepoPath(fromFile, relative, where) {
     if (seg === "" || seg === ".") continue;
     if (seg === "..") {
       if (parts.length === 0) {
-        throw new PolicyError(`"extends" leaves the repository: ${relative}`, where, "the base policy must be a file in this repository");
+        throw new PolicyError(`"inherits" leaves the repository: ${relative}`, where, "the base policy must be a file in this repository");
       }
       parts.pop();
     } else {
@@ -24047,21 +24068,21 @@ function parsePolicyFile(text2, file) {
   if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
   const raw = data;
   const b = new FileBuilder(src);
-  const policy = { path: file, overrides: [] };
-  if (raw.extends !== void 0) {
-    const where = src.where(["extends"]);
-    policy.extends = { path: joinRepoPath(file, raw.extends, where), where };
+  const policy = { path: file, scopes: [] };
+  if (raw.inherits !== void 0) {
+    const where = src.where(["inherits"]);
+    policy.inherits = { path: joinRepoPath(file, raw.inherits, where), where };
   }
   if (raw.designs !== void 0) {
     policy.designs = raw.designs.map(
       (d, i) => ({
-        files: globs(d.files),
+        paths: globs(d.paths),
         ...d.format !== void 0 ? { format: d.format } : {},
         where: src.where(["designs", i])
       })
     );
   }
-  if (raw.ignore !== void 0) policy.ignore = { globs: globs(raw.ignore), where: src.where(["ignore"]) };
+  if (raw.exclude !== void 0) policy.exclude = { globs: globs(raw.exclude), where: src.where(["exclude"]) };
   if (raw.seed !== void 0) policy.seed = { value: raw.seed, where: src.where(["seed"]) };
   if (raw["r-value"] !== void 0) {
     const r = raw["r-value"];
@@ -24088,26 +24109,26 @@ function parsePolicyFile(text2, file) {
     policy.challenges?.push(def);
   }
   if (raw.requirements !== void 0) policy.requirements = b.requirements(raw.requirements, ["requirements"]);
-  const regression = b.regression(raw.regression, ["regression"]);
-  if (regression) policy.regression = regression;
+  const weakening = b.weakening(raw.weakening, ["weakening"]);
+  if (weakening) policy.weakening = weakening;
   const removed = b.removed(raw["removed-designs"], ["removed-designs"]);
   if (removed) policy.removedDesigns = removed;
   const budget = b.budget(raw.budget, ["budget"]);
   if (budget) policy.budget = budget;
-  policy.overrides = (raw.overrides ?? []).map((o, i) => {
-    const path7 = ["overrides", i];
-    const override = {
-      files: globs(o.files),
+  policy.scopes = (raw.scopes ?? []).map((o, i) => {
+    const path7 = ["scopes", i];
+    const scope = {
+      paths: globs(o.paths),
       requirements: b.requirements(o.requirements, [...path7, "requirements"]),
       where: src.where(path7)
     };
-    const rule = b.regression(o.regression, [...path7, "regression"]);
-    if (rule) override.regression = rule;
+    const rule = b.weakening(o.weakening, [...path7, "weakening"]);
+    if (rule) scope.weakening = rule;
     const rem = b.removed(o["removed-designs"], [...path7, "removed-designs"]);
-    if (rem) override.removedDesigns = rem;
+    if (rem) scope.removedDesigns = rem;
     const ob = b.budget(o.budget, [...path7, "budget"]);
-    if (ob) override.budget = ob;
-    return override;
+    if (ob) scope.budget = ob;
+    return scope;
   });
   return policy;
 }
@@ -24306,7 +24327,7 @@ var init_load = __esm({
         });
         return out;
       }
-      regression(raw, path7) {
+      weakening(raw, path7) {
         if (raw === void 0) return void 0;
         const fieldWhere = {};
         const field = (key, name) => {
@@ -24314,7 +24335,7 @@ var init_load = __esm({
           return raw[key];
         };
         const rule = {
-          noiseFactor: field("noise-factor", "noiseFactor") ?? DEFAULT_NOISE_FACTOR,
+          errorMultiple: field("error-multiple", "errorMultiple") ?? DEFAULT_ERROR_MULTIPLE,
           severity: field("severity", "severity") ?? "fail",
           where: this.at(path7, true),
           fieldWhere
@@ -24385,7 +24406,7 @@ function loosening(prev, next) {
   };
 }
 function loosenError(what, why, where, prevWhere) {
-  return new PolicyError(`${what} ${why}`, where, "an extending policy or an override may tighten a floor, never loosen it", [
+  return new PolicyError(`${what} ${why}`, where, "an inheriting policy or a scope may tighten a floor, never loosen it", [
     related(prevWhere, "the floor it would loosen")
   ]);
 }
@@ -24403,10 +24424,10 @@ function mergeRequirement(list2, next, what) {
   }
   if (next.layer >= prev.layer) throw loosenError(what, why.message, why.where, why.prevWhere);
 }
-function mergeRegression(prev, next, what) {
+function mergeWeakening(prev, next, what) {
   const merged = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
   const mayLoosen = next.layer < prev.layer;
-  for (const [field, key] of REGRESSION_FIELDS) {
+  for (const [field, key] of WEAKENING_FIELDS) {
     const at = next.value.fieldWhere[field];
     if (!at) continue;
     const value = next.value[field];
@@ -24414,7 +24435,7 @@ function mergeRegression(prev, next, what) {
     const prevAt = prev.value.fieldWhere[field] ?? prev.value.where;
     if (value > before) {
       if (mayLoosen) continue;
-      throw loosenError(what, `loosens regression ${key}: ${value} where ${before} is allowed`, at, prevAt);
+      throw loosenError(what, `loosens weakening ${key}: ${value} where ${before} is allowed`, at, prevAt);
     }
     merged[field] = value;
     merged.fieldWhere[field] = at;
@@ -24425,7 +24446,7 @@ function mergeRegression(prev, next, what) {
       if (!mayLoosen) {
         throw loosenError(
           what,
-          `lowers the severity of regressions from ${prev.value.severity} to ${next.value.severity}`,
+          `lowers the weakening severity from ${prev.value.severity} to ${next.value.severity}`,
           sevAt,
           prev.value.fieldWhere.severity ?? prev.value.where
         );
@@ -24474,7 +24495,7 @@ function mergeBudget(prev, next, what) {
   throw new PolicyError(
     `${what} lowers the budget to ${visits(after)} element visits (${describeBudget(merged)}) where ${visits(before)} (${describeBudget(prev.value)}) is in force`,
     at && merged.fieldWhere[at] || next.value.where,
-    "an extending policy or an override may raise the budget, never lower it: a smaller budget leaves requirements uncertain",
+    "an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements uncertain",
     [related(prevAt && prev.value.fieldWhere[prevAt] || prev.value.where, "the budget in force")]
   );
 }
@@ -24559,11 +24580,11 @@ function checkMetrics(spec, where) {
     }
   }
 }
-function describeRequirementSite(file, r, override) {
-  const list2 = override === void 0 ? file.requirements : file.overrides[override].requirements;
+function describeRequirementSite(file, r, scope) {
+  const list2 = scope === void 0 ? file.requirements : file.scopes[scope].requirements;
   const index = (list2 ?? []).indexOf(r);
   const req = index >= 0 ? `requirement ${index + 1}` : "a requirement";
-  return override === void 0 ? req : `override ${override + 1}, ${req}`;
+  return scope === void 0 ? req : `scope ${scope + 1}, ${req}`;
 }
 function readChain(entry, read) {
   const chain = [];
@@ -24572,7 +24593,7 @@ function readChain(entry, read) {
   let from;
   for (; ; ) {
     if (seen.has(path7)) {
-      throw new PolicyError(`"extends" goes round in a circle back to ${path7}`, from ?? { file: path7 }, "remove one of the extends lines");
+      throw new PolicyError(`"inherits" goes round in a circle back to ${path7}`, from ?? { file: path7 }, "remove one of the inherits lines");
     }
     seen.add(path7);
     const text2 = read(path7);
@@ -24582,9 +24603,9 @@ function readChain(entry, read) {
     }
     const file = parsePolicyFile(text2, path7);
     chain.unshift(file);
-    if (!file.extends) break;
-    from = file.extends.where;
-    path7 = file.extends.path;
+    if (!file.inherits) break;
+    from = file.inherits.where;
+    path7 = file.inherits.path;
   }
   return chain;
 }
@@ -24602,9 +24623,9 @@ function mergeChain(chain) {
   let rValue = { spec: (root.rValue ?? base.rValue).spec, where: (root.rValue ?? base.rValue).where };
   checkMetrics(rValue.spec, rValue.where);
   let designs = root.designs ?? base.designs ?? [];
-  const ignore = [...root.ignore?.globs ?? []];
+  const exclude = [...root.exclude?.globs ?? []];
   let seed = (root.seed ?? base.seed)?.value ?? 1;
-  let regression = { value: root.regression ?? base.regression, layer: 0 };
+  let weakening = { value: root.weakening ?? base.weakening, layer: 0 };
   let removed = {
     value: root.removedDesigns ?? base.removedDesigns ?? { severity: "notice" },
     layer: 0
@@ -24617,7 +24638,7 @@ function mergeChain(chain) {
     if (layer === 0) return;
     if (file.rValue && !sameRValue(file.rValue.spec, rValue.spec)) {
       throw new PolicyError(
-        "an extending policy cannot change the r-value of the policy it extends",
+        "an inheriting policy cannot change the r-value of the policy it inherits",
         file.rValue.where,
         'the floors of the base policy are measured in its R; remove "r-value" here',
         [related(rValue.where, "the r-value in force")]
@@ -24627,21 +24648,21 @@ function mergeChain(chain) {
       const prev = challenges2.get(c.name) ?? [...challenges2.values()].find((x) => x.engine === c.engine);
       if (prev && !sameChallenge(prev, c)) {
         throw new PolicyError(
-          `challenge "${c.name}" redefines challenge "${prev.name}" of the policy it extends`,
+          `challenge "${c.name}" redefines challenge "${prev.name}" of the policy it inherits`,
           c.where,
-          "an extending policy may add challenges, not change them",
+          "an inheriting policy may add challenges, not change them",
           [related(prev.where, `"${prev.name}" is defined here`)]
         );
       }
       if (!prev) challenges2.set(c.name, c);
     }
     if (file.designs) designs = [...designs, ...file.designs];
-    for (const g of file.ignore?.globs ?? []) {
-      if (!ignore.includes(g)) {
+    for (const g of file.exclude?.globs ?? []) {
+      if (!exclude.includes(g)) {
         throw new PolicyError(
-          `an extending policy cannot ignore "${g}": the policy it extends judges those files`,
-          file.ignore.where,
-          "ignore the files in the base policy, or narrow the designs there"
+          `an inheriting policy cannot exclude "${g}": the policy it inherits judges those files`,
+          file.exclude.where,
+          "exclude the files in the base policy, or narrow the designs there"
         );
       }
     }
@@ -24649,7 +24670,7 @@ function mergeChain(chain) {
     for (const r of file.requirements ?? []) {
       mergeRequirement(requirements, { value: r, layer }, describeRequirementSite(file, r));
     }
-    if (file.regression) regression = mergeRegression(regression, { value: file.regression, layer }, "regression");
+    if (file.weakening) weakening = mergeWeakening(weakening, { value: file.weakening, layer }, "weakening");
     if (file.removedDesigns) removed = mergeRemoved(removed, { value: file.removedDesigns, layer }, "the policy");
     if (file.budget) budget = mergeBudget(budget, { value: file.budget, layer }, "the policy");
   });
@@ -24658,33 +24679,33 @@ function mergeChain(chain) {
     ...r,
     value: checkRequirement(r.value, challengeList, describeRequirementSite(chain[r.layer] ?? root, r.value))
   }));
-  const overrides = [];
+  const scopes = [];
   chain.forEach(
-    (file, layer) => file.overrides.forEach((o, i) => {
+    (file, layer) => file.scopes.forEach((o, i) => {
       const what = (r) => describeRequirementSite(file, r, i);
       const requirementsChecked = o.requirements.map((r) => checkRequirement(r, challengeList, what(r)));
       const scratch = checked.map((r) => ({ ...r }));
       for (const r of requirementsChecked) mergeRequirement(scratch, { value: r, layer }, what(r));
-      if (o.regression) mergeRegression(regression, { value: o.regression, layer }, `override ${i + 1}, regression`);
-      if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `override ${i + 1}`);
-      if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `override ${i + 1}`);
-      overrides.push({ ...o, requirements: requirementsChecked, layer });
+      if (o.weakening) mergeWeakening(weakening, { value: o.weakening, layer }, `scope ${i + 1}, weakening`);
+      if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `scope ${i + 1}`);
+      if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `scope ${i + 1}`);
+      scopes.push({ ...o, requirements: requirementsChecked, layer });
     })
   );
   return {
     source: "file",
     files: chain.map((f) => f.path).reverse(),
     designs,
-    ignore,
+    exclude,
     seed,
     rValue: rValue.spec,
     challenges: challengeList,
     requirements: checked.map((r) => r.value),
-    regression: regression.value,
+    weakening: weakening.value,
     removedDesigns: removed.value,
     budget: budget.value,
-    overrides,
-    layers: { requirements: checked.map((r) => r.layer), regression: regression.layer, removed: removed.layer, budget: budget.layer }
+    scopes,
+    layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer }
   };
 }
 function matches(globs2, given) {
@@ -24699,37 +24720,37 @@ function matches(globs2, given) {
   });
 }
 function isDesignPath(policy, path7) {
-  return policy.designs.some((d) => matches(d.files, path7)) && !matches(policy.ignore, path7);
+  return policy.designs.some((d) => matches(d.paths, path7)) && !matches(policy.exclude, path7);
 }
 function policyForFile(policy, path7) {
   const layers = policy.layers;
   const requirements = policy.requirements.map((value, i) => ({ value, layer: layers.requirements[i] }));
-  let regression = { value: policy.regression, layer: layers.regression };
+  let weakening = { value: policy.weakening, layer: layers.weakening };
   let removed = { value: policy.removedDesigns, layer: layers.removed };
   let budget = { value: policy.budget, layer: layers.budget };
-  for (const o of policy.overrides) {
-    if (!matches(o.files, path7)) continue;
+  for (const o of policy.scopes) {
+    if (!matches(o.paths, path7)) continue;
     const { layer } = o;
-    const what = `an override matching ${path7}`;
+    const what = `a scope matching ${path7}`;
     for (const r of o.requirements) mergeRequirement(requirements, { value: r, layer }, what);
-    if (o.regression) regression = mergeRegression(regression, { value: o.regression, layer }, `${what}:`);
+    if (o.weakening) weakening = mergeWeakening(weakening, { value: o.weakening, layer }, `${what}:`);
     if (o.removedDesigns) removed = mergeRemoved(removed, { value: o.removedDesigns, layer }, what);
     if (o.budget) budget = mergeBudget(budget, { value: o.budget, layer }, what);
   }
   const b = budget.value;
-  const format = policy.designs.find((d) => d.format !== void 0 && matches(d.files, path7))?.format;
+  const format = policy.designs.find((d) => d.format !== void 0 && matches(d.paths, path7))?.format;
   return {
     rValue: policy.rValue,
     seed: policy.seed,
     challenges: policy.challenges,
     requirements: requirements.map((r) => r.value),
-    regression: regression.value,
+    weakening: weakening.value,
     removedDesigns: removed.value.severity,
     budget: { ...b.work !== void 0 ? { work: b.work } : {}, ...b.seconds !== void 0 ? { seconds: b.seconds } : {}, maxWork: budgetWork(b) },
     ...format ? { format } : {}
   };
 }
-var import_picomatch, SEVERITY_RANK, builtinFile, REGRESSION_FIELDS, matchers;
+var import_picomatch, SEVERITY_RANK, builtinFile, WEAKENING_FIELDS, matchers;
 var init_resolve = __esm({
   "src/policy/resolve.ts"() {
     "use strict";
@@ -24742,10 +24763,10 @@ var init_resolve = __esm({
     init_load();
     init_requirement_id();
     SEVERITY_RANK = { ignore: 0, notice: 1, warn: 2, fail: 3 };
-    REGRESSION_FIELDS = [
+    WEAKENING_FIELDS = [
       ["allowedDrop", "allowed-drop"],
       ["allowedRelativeDrop", "allowed-relative-drop"],
-      ["noiseFactor", "noise-factor"]
+      ["errorMultiple", "error-multiple"]
     ];
     matchers = /* @__PURE__ */ new Map();
   }
@@ -25281,7 +25302,7 @@ function headerLine(r, c) {
   const parts = [`netbrace ${r.tool.version}`];
   if (r.base || r.head) parts.push(`base ${shortRevision(r.base)} → head ${shortRevision(r.head)}`);
   parts.push(`seed ${r.seed}`);
-  if (r.shard) parts.push(`shard ${r.shard.index}/${r.shard.total}`);
+  if (r.part) parts.push(`part ${r.part.index}/${r.part.total}`);
   return c.bold(parts.join(" · "));
 }
 function policyNotes(r) {
@@ -25291,7 +25312,7 @@ function policyNotes(r) {
   if (r.policy.note) notes.push(`policy: ${r.policy.note}`);
   else if (r.policy.changed) notes.push("policy: this change edits the policy; the proposed policy was not applied to judge it");
   if (r.scope === "all") notes.push("scope: every design in the repository, judged against thresholds only");
-  if (r.mode === "advise") notes.push("mode: advise — failures are reported but do not fail the run");
+  if (r.mode === "inform") notes.push("mode: inform — failures are reported but do not fail the run");
   return notes;
 }
 function verdictLines(r, c, width2) {
@@ -27180,9 +27201,9 @@ function masthead(r) {
     r.policy.source === "builtin" ? "no policy file: the built-in defaults for communication backbones were applied" : `<code>${esc2(r.policy.path ?? "policy file")}</code>${r.policy.revision ? ` as of <code>${esc2(shortRevision(r.policy.revision))}</code>` : ""}` + (r.policy.note ? `. ${esc2(r.policy.note)}` : r.policy.changed ? " (this change edits the policy; the proposed policy was not applied)" : "")
   ]);
   if (r.scope === "all") meta.push(["Scope", "every design in the repository, judged against thresholds only"]);
-  meta.push(["Mode", r.mode === "advise" ? "advise: failures are reported, the run does not fail" : "enforce: failures fail the check"]);
+  meta.push(["Mode", r.mode === "inform" ? "inform: failures are reported, the run does not fail" : "block: failures fail the check"]);
   meta.push(["Seed", String(r.seed)]);
-  if (r.shard) meta.push(["Shard", `${r.shard.index} of ${r.shard.total}`]);
+  if (r.part) meta.push(["Part", `${r.part.index} of ${r.part.total}`]);
   const counts = Object.entries(r.counts).filter(([, n]) => n > 0).map(([k, n]) => `${n} ${esc2(STATUS_WORD[k])}`).join(", ");
   meta.push(["Designs", `${r.files.length}${counts ? ` (${counts})` : ""}`]);
   return [
@@ -27579,7 +27600,7 @@ function header(report, options) {
   let verdict;
   if (report.files.length === 0) verdict = `${ICON.ok} ${name}: no design file changed — pass`;
   else if (report.verdict === "pass") verdict = `${ICON.ok} ${name}: pass`;
-  else if (report.mode === "advise") verdict = `${ICON.warn} ${name}: would fail (advise mode, not blocking)`;
+  else if (report.mode === "inform") verdict = `${ICON.warn} ${name}: would fail (inform mode, not blocking)`;
   else verdict = `${ICON.fail} ${name}: the gate failed`;
   const facts2 = [`${report.mode} mode`];
   if (report.policy.source === "builtin") facts2.push("built-in default policy (no policy file)");
@@ -27591,8 +27612,8 @@ function header(report, options) {
   else if (report.head) facts2.push(`head ${shortSha(report.head)}, thresholds only (no base)`);
   facts2.push(`seed ${report.seed}`);
   if (report.scope === "all") facts2.push("every design, thresholds only");
-  if (report.shard) facts2.push(`shard ${report.shard.index} of ${report.shard.total}`);
-  if (report.shards) facts2.push(`merged shards ${report.shards.merged.join(", ")} of ${report.shards.total}`);
+  if (report.part) facts2.push(`part ${report.part.index} of ${report.part.total}`);
+  if (report.parts) facts2.push(`joined parts ${report.parts.joined.join(", ")} of ${report.parts.total}`);
   let text2 = `## ${verdict}
 
 ${facts2.join(" · ")}
@@ -27999,7 +28020,7 @@ var init_sarif = __esm({
         name: "RThreshold",
         short: "An r-threshold of the policy is missed",
         full: "At the stated removal fraction, the stated statistic of the robustness envelope (a quantile, the median, the minimum or the worst case) of R is below the threshold the policy requires.",
-        help: "The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by overrides but never loosened below a floor it extends."
+        help: "The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by scopes but never loosened below a floor it inherits."
       },
       "area-floor": {
         name: "AreaFloor",
@@ -28485,11 +28506,11 @@ function judge(r, input, description) {
   }
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== void 0) {
     if (row.status === "met") row.status = "uncertain";
-    const regression = input.policy.regression;
+    const weakening = input.policy.weakening;
     findings.push(
       finding(
         "regression",
-        uncertainSeverity(regression.severity),
+        uncertainSeverity(weakening.severity),
         `${description}: from ${formatR(m.base)} to ${formatR(m.head)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
         extra
@@ -28498,10 +28519,10 @@ function judge(r, input, description) {
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
     const drop = m.higherIsBetter ? -m.delta : m.delta;
     if (drop > SAME * Math.max(1, Math.abs(m.base))) {
-      const rule = input.policy.regression;
+      const rule = input.policy.weakening;
       const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(m.base));
       const change = `from ${formatR(m.base)} to ${formatR(m.head)} (Δ ${formatDelta2(m.delta, m.se)})`;
-      const noise2 = rule.noiseFactor * m.se;
+      const noise2 = rule.errorMultiple * m.se;
       const verb = m.higherIsBetter ? "dropped" : "rose";
       if (m.reduced !== void 0 && !(drop > allowance + noise2) && !(drop <= allowance - noise2)) {
         if (row.status === "met") row.status = "uncertain";
@@ -28509,14 +28530,14 @@ function judge(r, input, description) {
           finding(
             "regression",
             uncertainSeverity(rule.severity),
-            `${description}: ${verb} ${change}, within ${rule.noiseFactor} × its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            `${description}: ${verb} ${change}, within ${rule.errorMultiple} × its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
             extra
           )
         );
       } else if (m.reduced !== void 0 && drop <= allowance - noise2) {
         findings.push(
-          finding("regression", "notice", `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} × its error; ${m.reduced}`, elements, extra)
+          finding("regression", "notice", `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} × its error; ${m.reduced}`, elements, extra)
         );
       } else if (m.reduced !== void 0) {
         if (row.status !== "missed") row.status = "regressed";
@@ -28524,7 +28545,7 @@ function judge(r, input, description) {
           finding(
             "regression",
             rule.severity,
-            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} × its error; ${m.reduced}`,
+            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} × its error; ${m.reduced}`,
             elements,
             extra
           )
@@ -28535,7 +28556,7 @@ function judge(r, input, description) {
           finding(
             "regression",
             "notice",
-            `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, less than ${rule.noiseFactor} × its Monte Carlo error: within noise, not a failure`,
+            `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, less than ${rule.errorMultiple} × its Monte Carlo error: within noise, not a failure`,
             elements,
             extra
           )
@@ -28723,7 +28744,7 @@ function verdictOf(files) {
   return failed ? "fail" : "pass";
 }
 function exitCodeOf(report) {
-  return report.verdict === "fail" && report.mode === "enforce" ? 1 : 0;
+  return report.verdict === "fail" && report.mode === "block" ? 1 : 0;
 }
 var FILE_STATUSES;
 var init_verdict = __esm({
@@ -28742,9 +28763,9 @@ var init_version = __esm({
   }
 });
 
-// src/gate/merge.ts
-var init_merge = __esm({
-  "src/gate/merge.ts"() {
+// src/gate/join.ts
+var init_join = __esm({
+  "src/gate/join.ts"() {
     "use strict";
     init_errors();
     init_report();
@@ -28762,8 +28783,8 @@ function pathHash(path7) {
   }
   return h >>> 0;
 }
-function inShard(path7, shard) {
-  return pathHash(path7) % shard.total === shard.index - 1;
+function inPart(path7, part) {
+  return pathHash(path7) % part.total === part.index - 1;
 }
 async function loadPolicyAt(entry, read) {
   const texts = /* @__PURE__ */ new Map();
@@ -28779,7 +28800,7 @@ async function loadPolicyAt(entry, read) {
       texts.set(e.path, await read(e.path));
     }
   }
-  throw new PolicyError("the policy extends too many files", { file: entry }, "keep the chain of extends short");
+  throw new PolicyError("the policy inherits too many files", { file: entry }, "keep the chain of inherits short");
 }
 async function choosePolicy(request, deps, base, head) {
   const path7 = request.policyPath ?? DEFAULT_POLICY_PATH;
@@ -28915,13 +28936,13 @@ async function evaluateGraph(g, specs, cuts, request, deps) {
   return { graph: g, result: joinEvaluations(parts) };
 }
 function validateRequest(request) {
-  if (request.mode !== "enforce" && request.mode !== "advise") throw new UsageError(`mode must be enforce or advise, not ${String(request.mode)}`);
+  if (request.mode !== "block" && request.mode !== "inform") throw new UsageError(`mode must be block or inform, not ${String(request.mode)}`);
   if (request.policySource !== "base" && request.policySource !== "head") {
     throw new UsageError(`policy-source must be base or head, not ${String(request.policySource)}`);
   }
-  const s = request.shard;
+  const s = request.part;
   if (s && !(Number.isInteger(s.index) && Number.isInteger(s.total) && s.total >= 1 && s.index >= 1 && s.index <= s.total)) {
-    throw new UsageError(`shard ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, "e.g. 2/4 for the second of four shards");
+    throw new UsageError(`part ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, "e.g. 2/4 for the second of four parts");
   }
   if (request.seed !== void 0 && !(Number.isInteger(request.seed) && request.seed >= 0 && request.seed <= 4294967295)) {
     throw new UsageError(`seed must be a whole number from 0 to 4294967295, not ${request.seed}`);
@@ -28936,7 +28957,7 @@ async function runGate(request, deps) {
   const base = request.eventKind === "schedule" ? void 0 : request.base;
   const { policy, info } = await choosePolicy(request, deps, base, head);
   const { list: all, scope } = await candidates(request, deps, policy, base, head);
-  const chosen = [...all].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0).filter((c) => !request.shard || inShard(c.path, request.shard));
+  const chosen = [...all].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0).filter((c) => !request.part || inPart(c.path, request.part));
   const rules = chosen.map((c) => policyForFile(policy, c.path));
   const seed = request.seed ?? policy.seed;
   const files = [];
@@ -28985,7 +29006,7 @@ async function runGate(request, deps) {
     ...base !== void 0 ? { base } : {},
     head,
     seed,
-    ...request.shard ? { shard: { index: request.shard.index, total: request.shard.total } } : {},
+    ...request.part ? { part: { index: request.part.index, total: request.part.total } } : {},
     scope,
     counts: countStatuses(files),
     files,
@@ -29008,7 +29029,7 @@ var init_run_gate = __esm({
     init_report();
     init_parse();
     init_version();
-    init_merge();
+    init_join();
     NeedFile = class {
       constructor(path7) {
         this.path = path7;
@@ -29165,11 +29186,11 @@ import path4 from "node:path";
 function parse(args) {
   return parseCommandArgs("check", args, OPTIONS);
 }
-function shardOf(value) {
+function partOf(value) {
   if (value === void 0) return void 0;
   const m = /^([0-9]+)\/([0-9]+)$/.exec(value);
   const [k, n] = m ? [Number(m[1]), Number(m[2])] : [0, 0];
-  if (!m || k < 1 || n < 1 || k > n) throw new UsageError(`--shard must be K/N with 1 ≤ K ≤ N, not "${value}"`, "e.g. --shard 2/4");
+  if (!m || k < 1 || n < 1 || k > n) throw new UsageError(`--part must be K/N with 1 ≤ K ≤ N, not "${value}"`, "e.g. --part 2/4");
   return { index: k, total: n };
 }
 function repoPath2(root, cwd, p) {
@@ -29196,14 +29217,14 @@ async function buildRequest(v, positionals, io) {
   const threads = wholeNumber("--threads", v.threads, 1, 256);
   const request = {
     policySource: choice("--policy-source", v["policy-source"], ["base", "head"], "base"),
-    mode: choice("--mode", v.mode, ["enforce", "advise"], "enforce"),
+    mode: choice("--mode", v.mode, ["block", "inform"], "block"),
     eventKind: "local"
   };
   const seed = wholeNumber("--seed", v.seed, 0, 4294967295);
   if (seed !== void 0) request.seed = seed;
   if (threads !== void 0) request.threads = threads;
-  const shard = shardOf(v.shard);
-  if (shard) request.shard = shard;
+  const part = partOf(v.part);
+  if (part) request.part = part;
   const evaluate = threads !== void 0 && threads > 1 ? (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) : void 0;
   const root = await repoRoot(io.cwd);
   if (root === null) {
@@ -29290,8 +29311,8 @@ Policy:
 Evaluation:
   --seed S               seed of the random challenges (default: the policy's)
   --threads N            worker threads (results do not depend on N)
-  --mode MODE            enforce (default): exit 1 when the gate fails; advise: exit 0
-  --shard K/N            judge only slice K of N of the designs (by path hash)
+  --mode MODE            block (default): exit 1 when the gate fails; inform: exit 0
+  --part K/N             judge only slice K of N of the designs (by path hash)
 
 Output:
   --format FORMAT        text (default), markdown or json, on standard output
@@ -29309,7 +29330,7 @@ Examples:
 netbrace informs engineering judgement; it does not replace engineering studies.
 
 Exit codes:
-  0  pass (or nothing to judge, or --mode advise)
+  0  pass (or nothing to judge, or --mode inform)
   1  the gate failed: a requirement was broken or a design could not be read
   2  usage or configuration error (bad option, broken policy); nothing was evaluated
 `;
@@ -29322,7 +29343,7 @@ Exit codes:
       seed: { type: "string" },
       threads: { type: "string" },
       mode: { type: "string" },
-      shard: { type: "string" },
+      part: { type: "string" },
       format: { type: "string" },
       json: { type: "string" },
       summary: { type: "string" },
@@ -29376,7 +29397,7 @@ Next: set the floors for your network, then run "netbrace check".
 
 Examples:
   netbrace init                          writes .netbrace.yaml at the repository root
-  netbrace init --policy org/base.yaml   a base policy that team policies extend
+  netbrace init --policy org/base.yaml   a base policy that team policies inherit
 
 Exit codes:
   0  written

@@ -40442,7 +40442,7 @@ var NetbraceError = class extends Error {
   line;
   column;
   hint;
-  /** Further locations that belong to the same problem (e.g. the floor an override loosens). */
+  /** Further locations that belong to the same problem (e.g. the floor a scope loosens). */
   related;
   constructor(kind, message, where = {}, hint = "", related2 = []) {
     super(message);
@@ -44219,9 +44219,9 @@ function masthead(r) {
     r.policy.source === "builtin" ? "no policy file: the built-in defaults for communication backbones were applied" : `<code>${esc2(r.policy.path ?? "policy file")}</code>${r.policy.revision ? ` as of <code>${esc2(shortRevision(r.policy.revision))}</code>` : ""}` + (r.policy.note ? `. ${esc2(r.policy.note)}` : r.policy.changed ? " (this change edits the policy; the proposed policy was not applied)" : "")
   ]);
   if (r.scope === "all") meta.push(["Scope", "every design in the repository, judged against thresholds only"]);
-  meta.push(["Mode", r.mode === "advise" ? "advise: failures are reported, the run does not fail" : "enforce: failures fail the check"]);
+  meta.push(["Mode", r.mode === "inform" ? "inform: failures are reported, the run does not fail" : "block: failures fail the check"]);
   meta.push(["Seed", String(r.seed)]);
-  if (r.shard) meta.push(["Shard", `${r.shard.index} of ${r.shard.total}`]);
+  if (r.part) meta.push(["Part", `${r.part.index} of ${r.part.total}`]);
   const counts = Object.entries(r.counts).filter(([, n]) => n > 0).map(([k, n]) => `${n} ${esc2(STATUS_WORD[k])}`).join(", ");
   meta.push(["Designs", `${r.files.length}${counts ? ` (${counts})` : ""}`]);
   return [
@@ -44915,11 +44915,11 @@ function judge(r, input, description) {
   }
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== void 0) {
     if (row.status === "met") row.status = "uncertain";
-    const regression = input.policy.regression;
+    const weakening = input.policy.weakening;
     findings.push(
       finding(
         "regression",
-        uncertainSeverity(regression.severity),
+        uncertainSeverity(weakening.severity),
         `${description}: from ${formatR(m.base)} to ${formatR(m.head)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
         extra
@@ -44928,10 +44928,10 @@ function judge(r, input, description) {
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
     const drop = m.higherIsBetter ? -m.delta : m.delta;
     if (drop > SAME * Math.max(1, Math.abs(m.base))) {
-      const rule = input.policy.regression;
+      const rule = input.policy.weakening;
       const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(m.base));
       const change = `from ${formatR(m.base)} to ${formatR(m.head)} (Δ ${formatDelta2(m.delta, m.se)})`;
-      const noise2 = rule.noiseFactor * m.se;
+      const noise2 = rule.errorMultiple * m.se;
       const verb = m.higherIsBetter ? "dropped" : "rose";
       if (m.reduced !== void 0 && !(drop > allowance + noise2) && !(drop <= allowance - noise2)) {
         if (row.status === "met") row.status = "uncertain";
@@ -44939,14 +44939,14 @@ function judge(r, input, description) {
           finding(
             "regression",
             uncertainSeverity(rule.severity),
-            `${description}: ${verb} ${change}, within ${rule.noiseFactor} × its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            `${description}: ${verb} ${change}, within ${rule.errorMultiple} × its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
             extra
           )
         );
       } else if (m.reduced !== void 0 && drop <= allowance - noise2) {
         findings.push(
-          finding("regression", "notice", `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} × its error; ${m.reduced}`, elements, extra)
+          finding("regression", "notice", `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} × its error; ${m.reduced}`, elements, extra)
         );
       } else if (m.reduced !== void 0) {
         if (row.status !== "missed") row.status = "regressed";
@@ -44954,7 +44954,7 @@ function judge(r, input, description) {
           finding(
             "regression",
             rule.severity,
-            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.noiseFactor} × its error; ${m.reduced}`,
+            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} × its error; ${m.reduced}`,
             elements,
             extra
           )
@@ -44965,7 +44965,7 @@ function judge(r, input, description) {
           finding(
             "regression",
             "notice",
-            `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, less than ${rule.noiseFactor} × its Monte Carlo error: within noise, not a failure`,
+            `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, less than ${rule.errorMultiple} × its Monte Carlo error: within noise, not a failure`,
             elements,
             extra
           )
@@ -45137,14 +45137,14 @@ function verdictOf(files) {
   return failed ? "fail" : "pass";
 }
 function exitCodeOf(report) {
-  return report.verdict === "fail" && report.mode === "enforce" ? 1 : 0;
+  return report.verdict === "fail" && report.mode === "block" ? 1 : 0;
 }
 
 // src/policy/defaults.ts
 var DEFAULT_POLICY_PATH = ".netbrace.yaml";
 var BUILTIN_POLICY_NAME = "<built-in policy>";
 var REGIONAL_UNTIL_KM = 50;
-var DEFAULT_NOISE_FACTOR = 2;
+var DEFAULT_ERROR_MULTIPLE = 2;
 var STARTER_POLICY = `# netbrace policy: what a network design must satisfy before a change to it merges.
 # Every key is optional; a key left out takes the value of the built-in policy, which is
 # exactly this file. Editors can check it against policy.schema.json (shipped in dist/).
@@ -45155,8 +45155,8 @@ version: 1
 
 # Which files are designs (globs from the repository root; "format" forces a format).
 designs:
-  - files: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
-# ignore: ["archive/**"]
+  - paths: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
+# exclude: ["archive/**"]
 
 # Seed of every random challenge: the same inputs and seed give the same report.
 seed: 1
@@ -45199,7 +45199,7 @@ requirements:
   # A change may not add a bridge or a cut node that the base did not have.
   - kind: no-new-spof
     severity: fail
-  # Areas under the envelopes, tracked for regressions (no floor of their own).
+  # Areas under the envelopes, tracked for weakening (no floor of their own).
   - kind: area-floor
     challenge: node-failures
   - kind: area-floor
@@ -45218,9 +45218,9 @@ requirements:
   #   min: 0.8
 
 # How far a requirement's value may drop from the base to the head.
-regression:
+weakening:
   allowed-drop: 0.02       # in units of R
-  noise-factor: 2          # a drop below 2 × its Monte Carlo error never fails
+  error-multiple: 2        # a drop below 2 × its Monte Carlo error never fails
   severity: fail
 
 # A deleted design file: fail | warn | notice | ignore.
@@ -45236,8 +45236,8 @@ budget:
 
 # Rules for some files only; they may add or tighten requirements, never loosen them
 # (and raise the budget, never lower it).
-# overrides:
-#   - files: "core/**"
+# scopes:
+#   - paths: "core/**"
 #     requirements:
 #       - kind: n-1
 #         element: node
@@ -45342,7 +45342,7 @@ var policy_schema_default = {
       description: "Version of the policy format. Only 1 exists.",
       const: 1
     },
-    extends: {
+    inherits: {
       description: "A base policy file (path in the repository, relative to this file). Its floors may be tightened here, never loosened.",
       type: "string",
       minLength: 1
@@ -45353,7 +45353,7 @@ var policy_schema_default = {
       minItems: 1,
       items: { $ref: "#/definitions/designGlob" }
     },
-    ignore: {
+    exclude: {
       description: "Globs of files that are never designs, even when a designs glob matches them.",
       $ref: "#/definitions/globs"
     },
@@ -45407,20 +45407,20 @@ var policy_schema_default = {
       description: "What every design must satisfy.",
       $ref: "#/definitions/requirements"
     },
-    regression: { $ref: "#/definitions/regression" },
+    weakening: { $ref: "#/definitions/weakening" },
     "removed-designs": { $ref: "#/definitions/removedDesigns" },
     budget: { $ref: "#/definitions/budget" },
-    overrides: {
+    scopes: {
       description: "Rules for some files only: they add requirements or tighten existing ones, never loosen them.",
       type: "array",
       items: {
         type: "object",
         additionalProperties: false,
-        required: ["files"],
+        required: ["paths"],
         properties: {
-          files: { description: "Globs of the design files this override applies to.", $ref: "#/definitions/globs" },
+          paths: { description: "Globs of the design files this scope applies to.", $ref: "#/definitions/globs" },
           requirements: { $ref: "#/definitions/requirements" },
-          regression: { $ref: "#/definitions/regression" },
+          weakening: { $ref: "#/definitions/weakening" },
           "removed-designs": { $ref: "#/definitions/removedDesigns" },
           budget: { $ref: "#/definitions/budget" }
         }
@@ -45446,9 +45446,9 @@ var policy_schema_default = {
     designGlob: {
       type: "object",
       additionalProperties: false,
-      required: ["files"],
+      required: ["paths"],
       properties: {
-        files: { description: "Globs of design files (relative to the repository root).", $ref: "#/definitions/globs" },
+        paths: { description: "Globs of design files (relative to the repository root).", $ref: "#/definitions/globs" },
         format: {
           description: "The format of the matched files, where the extension does not say it.",
           enum: ["native-yaml", "native-json", "graphml", "gml", "csv"]
@@ -45580,19 +45580,19 @@ var policy_schema_default = {
         }
       ]
     },
-    regression: {
-      description: "How far a requirement's value may drop from base to head. A drop within the allowance is a notice; a drop smaller than noise-factor × its standard error is never a failure.",
+    weakening: {
+      description: "How far a requirement's value may drop from base to head. A drop within the allowance is a notice; a drop smaller than error-multiple × its standard error is never a failure.",
       type: "object",
       additionalProperties: false,
       properties: {
         "allowed-drop": { description: "Largest tolerated drop, in units of R.", type: "number", minimum: 0 },
         "allowed-relative-drop": { description: "Largest tolerated drop as a fraction of the base value (0.05 = 5 %). With allowed-drop too, the larger allowance applies.", type: "number", minimum: 0, maximum: 1 },
-        "noise-factor": { description: "A drop below noise-factor × se is Monte Carlo noise (default 2).", type: "number", minimum: 0 },
+        "error-multiple": { description: "A drop below error-multiple × se is Monte Carlo noise (default 2).", type: "number", minimum: 0 },
         severity: { $ref: "#/definitions/severity" }
       }
     },
     budget: {
-      description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is uncertain, never met. Default: seconds 60. An extending policy or an override may raise it, never lower it.",
+      description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is uncertain, never met. Default: seconds 60. An inheriting policy or a scope may raise it, never lower it.",
       type: "object",
       additionalProperties: false,
       minProperties: 1,
@@ -45765,8 +45765,8 @@ function describePath(path3) {
     if (seg === "requirements" && typeof next === "number") {
       parts.push(`requirement ${next + 1}`);
       i += 2;
-    } else if (seg === "overrides" && typeof next === "number") {
-      parts.push(`override ${next + 1}`);
+    } else if (seg === "scopes" && typeof next === "number") {
+      parts.push(`scope ${next + 1}`);
       i += 2;
     } else if (seg === "designs" && typeof next === "number") {
       parts.push(`designs entry ${next + 1}`);
@@ -45800,6 +45800,24 @@ function typeOf(value) {
   if (typeof value === "number") return Number.isInteger(value) ? `the number ${value}` : `the number ${value}`;
   return String(value);
 }
+var RENAMED_KEYS = {
+  "extends": "inherits",
+  "ignore": "exclude",
+  "files": "paths",
+  "overrides": "scopes",
+  "regression": "weakening",
+  "noise-factor": "error-multiple"
+};
+function renamedKey(key, known) {
+  const renamed = Object.hasOwn(RENAMED_KEYS, key) ? RENAMED_KEYS[key] : void 0;
+  return renamed !== void 0 && known.includes(renamed) ? renamed : void 0;
+}
+function renamedAt(e) {
+  if (e.keyword !== "additionalProperties") return void 0;
+  const known = Object.keys(e.parentSchema?.properties ?? {});
+  const renamed = renamedKey(String(e.params.additionalProperty), known);
+  return renamed === void 0 ? void 0 : `${e.instancePath}\0${renamed}`;
+}
 function suggestion(word, candidates2, listName) {
   const c = typeof word === "string" ? closest(word, candidates2) : void 0;
   return c !== void 0 ? `did you mean "${c}"?` : `${listName}: ${candidates2.join(", ")}`;
@@ -45817,7 +45835,9 @@ function diagnose(e, src) {
       if (path3.length === 2 && path3[0] === "r-value" && path3[1] === "metrics") {
         return { where, message: `unknown metric "${key}"`, hint: suggestion(key, known, "known metrics") };
       }
-      return { where, message: `unknown key "${key}" in ${subject}`, hint: suggestion(key, known, "known keys") };
+      const renamed = renamedKey(key, known);
+      const hint = renamed !== void 0 ? `did you mean "${renamed}"?` : suggestion(key, known, "known keys");
+      return { where, message: `unknown key "${key}" in ${subject}`, hint };
     }
     case "required": {
       const key = String(params.missingProperty);
@@ -45891,8 +45911,9 @@ function requirementKinds(schema) {
 }
 function throwSchemaErrors(errors, src) {
   const anyOfPaths = errors.filter((e) => e.keyword === "anyOf").map((e) => e.instancePath);
+  const renamed = new Set(errors.map(renamedAt).filter((r) => r !== void 0));
   const kept = errors.filter(
-    (e) => e.keyword === "anyOf" || !anyOfPaths.some((p) => e.instancePath === p || e.instancePath.startsWith(`${p}/`))
+    (e) => (e.keyword === "anyOf" || !anyOfPaths.some((p) => e.instancePath === p || e.instancePath.startsWith(`${p}/`))) && !(e.keyword === "required" && renamed.has(`${e.instancePath}\0${String(e.params.missingProperty)}`))
   );
   const seen = /* @__PURE__ */ new Set();
   const list = [];
@@ -46107,7 +46128,7 @@ var FileBuilder = class {
     });
     return out;
   }
-  regression(raw, path3) {
+  weakening(raw, path3) {
     if (raw === void 0) return void 0;
     const fieldWhere = {};
     const field = (key, name) => {
@@ -46115,7 +46136,7 @@ var FileBuilder = class {
       return raw[key];
     };
     const rule = {
-      noiseFactor: field("noise-factor", "noiseFactor") ?? DEFAULT_NOISE_FACTOR,
+      errorMultiple: field("error-multiple", "errorMultiple") ?? DEFAULT_ERROR_MULTIPLE,
       severity: field("severity", "severity") ?? "fail",
       where: this.at(path3, true),
       fieldWhere
@@ -46142,7 +46163,7 @@ var FileBuilder = class {
 };
 function joinRepoPath(fromFile, relative, where) {
   if (relative.startsWith("/") || /^[A-Za-z]:[\\/]/.test(relative)) {
-    throw new PolicyError(`"extends" must be a path inside the repository, not ${relative}`, where, "write it relative to this policy file");
+    throw new PolicyError(`"inherits" must be a path inside the repository, not ${relative}`, where, "write it relative to this policy file");
   }
   const dir = fromFile.split("/").slice(0, -1);
   const parts = [...dir];
@@ -46150,7 +46171,7 @@ function joinRepoPath(fromFile, relative, where) {
     if (seg === "" || seg === ".") continue;
     if (seg === "..") {
       if (parts.length === 0) {
-        throw new PolicyError(`"extends" leaves the repository: ${relative}`, where, "the base policy must be a file in this repository");
+        throw new PolicyError(`"inherits" leaves the repository: ${relative}`, where, "the base policy must be a file in this repository");
       }
       parts.pop();
     } else {
@@ -46169,21 +46190,21 @@ function parsePolicyFile(text2, file) {
   if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
   const raw = data;
   const b = new FileBuilder(src);
-  const policy = { path: file, overrides: [] };
-  if (raw.extends !== void 0) {
-    const where = src.where(["extends"]);
-    policy.extends = { path: joinRepoPath(file, raw.extends, where), where };
+  const policy = { path: file, scopes: [] };
+  if (raw.inherits !== void 0) {
+    const where = src.where(["inherits"]);
+    policy.inherits = { path: joinRepoPath(file, raw.inherits, where), where };
   }
   if (raw.designs !== void 0) {
     policy.designs = raw.designs.map(
       (d, i) => ({
-        files: globs(d.files),
+        paths: globs(d.paths),
         ...d.format !== void 0 ? { format: d.format } : {},
         where: src.where(["designs", i])
       })
     );
   }
-  if (raw.ignore !== void 0) policy.ignore = { globs: globs(raw.ignore), where: src.where(["ignore"]) };
+  if (raw.exclude !== void 0) policy.exclude = { globs: globs(raw.exclude), where: src.where(["exclude"]) };
   if (raw.seed !== void 0) policy.seed = { value: raw.seed, where: src.where(["seed"]) };
   if (raw["r-value"] !== void 0) {
     const r = raw["r-value"];
@@ -46210,26 +46231,26 @@ function parsePolicyFile(text2, file) {
     policy.challenges?.push(def);
   }
   if (raw.requirements !== void 0) policy.requirements = b.requirements(raw.requirements, ["requirements"]);
-  const regression = b.regression(raw.regression, ["regression"]);
-  if (regression) policy.regression = regression;
+  const weakening = b.weakening(raw.weakening, ["weakening"]);
+  if (weakening) policy.weakening = weakening;
   const removed = b.removed(raw["removed-designs"], ["removed-designs"]);
   if (removed) policy.removedDesigns = removed;
   const budget = b.budget(raw.budget, ["budget"]);
   if (budget) policy.budget = budget;
-  policy.overrides = (raw.overrides ?? []).map((o, i) => {
-    const path3 = ["overrides", i];
-    const override = {
-      files: globs(o.files),
+  policy.scopes = (raw.scopes ?? []).map((o, i) => {
+    const path3 = ["scopes", i];
+    const scope = {
+      paths: globs(o.paths),
       requirements: b.requirements(o.requirements, [...path3, "requirements"]),
       where: src.where(path3)
     };
-    const rule = b.regression(o.regression, [...path3, "regression"]);
-    if (rule) override.regression = rule;
+    const rule = b.weakening(o.weakening, [...path3, "weakening"]);
+    if (rule) scope.weakening = rule;
     const rem = b.removed(o["removed-designs"], [...path3, "removed-designs"]);
-    if (rem) override.removedDesigns = rem;
+    if (rem) scope.removedDesigns = rem;
     const ob = b.budget(o.budget, [...path3, "budget"]);
-    if (ob) override.budget = ob;
-    return override;
+    if (ob) scope.budget = ob;
+    return scope;
   });
   return policy;
 }
@@ -46279,7 +46300,7 @@ function loosening(prev, next) {
   };
 }
 function loosenError(what, why, where, prevWhere) {
-  return new PolicyError(`${what} ${why}`, where, "an extending policy or an override may tighten a floor, never loosen it", [
+  return new PolicyError(`${what} ${why}`, where, "an inheriting policy or a scope may tighten a floor, never loosen it", [
     related(prevWhere, "the floor it would loosen")
   ]);
 }
@@ -46297,15 +46318,15 @@ function mergeRequirement(list, next, what) {
   }
   if (next.layer >= prev.layer) throw loosenError(what, why.message, why.where, why.prevWhere);
 }
-var REGRESSION_FIELDS = [
+var WEAKENING_FIELDS = [
   ["allowedDrop", "allowed-drop"],
   ["allowedRelativeDrop", "allowed-relative-drop"],
-  ["noiseFactor", "noise-factor"]
+  ["errorMultiple", "error-multiple"]
 ];
-function mergeRegression(prev, next, what) {
+function mergeWeakening(prev, next, what) {
   const merged = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
   const mayLoosen = next.layer < prev.layer;
-  for (const [field, key] of REGRESSION_FIELDS) {
+  for (const [field, key] of WEAKENING_FIELDS) {
     const at = next.value.fieldWhere[field];
     if (!at) continue;
     const value = next.value[field];
@@ -46313,7 +46334,7 @@ function mergeRegression(prev, next, what) {
     const prevAt = prev.value.fieldWhere[field] ?? prev.value.where;
     if (value > before) {
       if (mayLoosen) continue;
-      throw loosenError(what, `loosens regression ${key}: ${value} where ${before} is allowed`, at, prevAt);
+      throw loosenError(what, `loosens weakening ${key}: ${value} where ${before} is allowed`, at, prevAt);
     }
     merged[field] = value;
     merged.fieldWhere[field] = at;
@@ -46324,7 +46345,7 @@ function mergeRegression(prev, next, what) {
       if (!mayLoosen) {
         throw loosenError(
           what,
-          `lowers the severity of regressions from ${prev.value.severity} to ${next.value.severity}`,
+          `lowers the weakening severity from ${prev.value.severity} to ${next.value.severity}`,
           sevAt,
           prev.value.fieldWhere.severity ?? prev.value.where
         );
@@ -46373,7 +46394,7 @@ function mergeBudget(prev, next, what) {
   throw new PolicyError(
     `${what} lowers the budget to ${visits(after)} element visits (${describeBudget(merged)}) where ${visits(before)} (${describeBudget(prev.value)}) is in force`,
     at && merged.fieldWhere[at] || next.value.where,
-    "an extending policy or an override may raise the budget, never lower it: a smaller budget leaves requirements uncertain",
+    "an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements uncertain",
     [related(prevAt && prev.value.fieldWhere[prevAt] || prev.value.where, "the budget in force")]
   );
 }
@@ -46458,11 +46479,11 @@ function checkMetrics(spec, where) {
     }
   }
 }
-function describeRequirementSite(file, r, override) {
-  const list = override === void 0 ? file.requirements : file.overrides[override].requirements;
+function describeRequirementSite(file, r, scope) {
+  const list = scope === void 0 ? file.requirements : file.scopes[scope].requirements;
   const index = (list ?? []).indexOf(r);
   const req = index >= 0 ? `requirement ${index + 1}` : "a requirement";
-  return override === void 0 ? req : `override ${override + 1}, ${req}`;
+  return scope === void 0 ? req : `scope ${scope + 1}, ${req}`;
 }
 function readChain(entry, read) {
   const chain = [];
@@ -46471,7 +46492,7 @@ function readChain(entry, read) {
   let from;
   for (; ; ) {
     if (seen.has(path3)) {
-      throw new PolicyError(`"extends" goes round in a circle back to ${path3}`, from ?? { file: path3 }, "remove one of the extends lines");
+      throw new PolicyError(`"inherits" goes round in a circle back to ${path3}`, from ?? { file: path3 }, "remove one of the inherits lines");
     }
     seen.add(path3);
     const text2 = read(path3);
@@ -46481,9 +46502,9 @@ function readChain(entry, read) {
     }
     const file = parsePolicyFile(text2, path3);
     chain.unshift(file);
-    if (!file.extends) break;
-    from = file.extends.where;
-    path3 = file.extends.path;
+    if (!file.inherits) break;
+    from = file.inherits.where;
+    path3 = file.inherits.path;
   }
   return chain;
 }
@@ -46501,9 +46522,9 @@ function mergeChain(chain) {
   let rValue = { spec: (root.rValue ?? base.rValue).spec, where: (root.rValue ?? base.rValue).where };
   checkMetrics(rValue.spec, rValue.where);
   let designs = root.designs ?? base.designs ?? [];
-  const ignore = [...root.ignore?.globs ?? []];
+  const exclude = [...root.exclude?.globs ?? []];
   let seed = (root.seed ?? base.seed)?.value ?? 1;
-  let regression = { value: root.regression ?? base.regression, layer: 0 };
+  let weakening = { value: root.weakening ?? base.weakening, layer: 0 };
   let removed = {
     value: root.removedDesigns ?? base.removedDesigns ?? { severity: "notice" },
     layer: 0
@@ -46516,7 +46537,7 @@ function mergeChain(chain) {
     if (layer === 0) return;
     if (file.rValue && !sameRValue(file.rValue.spec, rValue.spec)) {
       throw new PolicyError(
-        "an extending policy cannot change the r-value of the policy it extends",
+        "an inheriting policy cannot change the r-value of the policy it inherits",
         file.rValue.where,
         'the floors of the base policy are measured in its R; remove "r-value" here',
         [related(rValue.where, "the r-value in force")]
@@ -46526,21 +46547,21 @@ function mergeChain(chain) {
       const prev = challenges2.get(c.name) ?? [...challenges2.values()].find((x) => x.engine === c.engine);
       if (prev && !sameChallenge(prev, c)) {
         throw new PolicyError(
-          `challenge "${c.name}" redefines challenge "${prev.name}" of the policy it extends`,
+          `challenge "${c.name}" redefines challenge "${prev.name}" of the policy it inherits`,
           c.where,
-          "an extending policy may add challenges, not change them",
+          "an inheriting policy may add challenges, not change them",
           [related(prev.where, `"${prev.name}" is defined here`)]
         );
       }
       if (!prev) challenges2.set(c.name, c);
     }
     if (file.designs) designs = [...designs, ...file.designs];
-    for (const g of file.ignore?.globs ?? []) {
-      if (!ignore.includes(g)) {
+    for (const g of file.exclude?.globs ?? []) {
+      if (!exclude.includes(g)) {
         throw new PolicyError(
-          `an extending policy cannot ignore "${g}": the policy it extends judges those files`,
-          file.ignore.where,
-          "ignore the files in the base policy, or narrow the designs there"
+          `an inheriting policy cannot exclude "${g}": the policy it inherits judges those files`,
+          file.exclude.where,
+          "exclude the files in the base policy, or narrow the designs there"
         );
       }
     }
@@ -46548,7 +46569,7 @@ function mergeChain(chain) {
     for (const r of file.requirements ?? []) {
       mergeRequirement(requirements, { value: r, layer }, describeRequirementSite(file, r));
     }
-    if (file.regression) regression = mergeRegression(regression, { value: file.regression, layer }, "regression");
+    if (file.weakening) weakening = mergeWeakening(weakening, { value: file.weakening, layer }, "weakening");
     if (file.removedDesigns) removed = mergeRemoved(removed, { value: file.removedDesigns, layer }, "the policy");
     if (file.budget) budget = mergeBudget(budget, { value: file.budget, layer }, "the policy");
   });
@@ -46557,33 +46578,33 @@ function mergeChain(chain) {
     ...r,
     value: checkRequirement(r.value, challengeList, describeRequirementSite(chain[r.layer] ?? root, r.value))
   }));
-  const overrides = [];
+  const scopes = [];
   chain.forEach(
-    (file, layer) => file.overrides.forEach((o, i) => {
+    (file, layer) => file.scopes.forEach((o, i) => {
       const what = (r) => describeRequirementSite(file, r, i);
       const requirementsChecked = o.requirements.map((r) => checkRequirement(r, challengeList, what(r)));
       const scratch = checked.map((r) => ({ ...r }));
       for (const r of requirementsChecked) mergeRequirement(scratch, { value: r, layer }, what(r));
-      if (o.regression) mergeRegression(regression, { value: o.regression, layer }, `override ${i + 1}, regression`);
-      if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `override ${i + 1}`);
-      if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `override ${i + 1}`);
-      overrides.push({ ...o, requirements: requirementsChecked, layer });
+      if (o.weakening) mergeWeakening(weakening, { value: o.weakening, layer }, `scope ${i + 1}, weakening`);
+      if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `scope ${i + 1}`);
+      if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `scope ${i + 1}`);
+      scopes.push({ ...o, requirements: requirementsChecked, layer });
     })
   );
   return {
     source: "file",
     files: chain.map((f) => f.path).reverse(),
     designs,
-    ignore,
+    exclude,
     seed,
     rValue: rValue.spec,
     challenges: challengeList,
     requirements: checked.map((r) => r.value),
-    regression: regression.value,
+    weakening: weakening.value,
     removedDesigns: removed.value,
     budget: budget.value,
-    overrides,
-    layers: { requirements: checked.map((r) => r.layer), regression: regression.layer, removed: removed.layer, budget: budget.layer }
+    scopes,
+    layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer }
   };
 }
 var matchers = /* @__PURE__ */ new Map();
@@ -46599,31 +46620,31 @@ function matches(globs2, given) {
   });
 }
 function isDesignPath(policy, path3) {
-  return policy.designs.some((d) => matches(d.files, path3)) && !matches(policy.ignore, path3);
+  return policy.designs.some((d) => matches(d.paths, path3)) && !matches(policy.exclude, path3);
 }
 function policyForFile(policy, path3) {
   const layers = policy.layers;
   const requirements = policy.requirements.map((value, i) => ({ value, layer: layers.requirements[i] }));
-  let regression = { value: policy.regression, layer: layers.regression };
+  let weakening = { value: policy.weakening, layer: layers.weakening };
   let removed = { value: policy.removedDesigns, layer: layers.removed };
   let budget = { value: policy.budget, layer: layers.budget };
-  for (const o of policy.overrides) {
-    if (!matches(o.files, path3)) continue;
+  for (const o of policy.scopes) {
+    if (!matches(o.paths, path3)) continue;
     const { layer } = o;
-    const what = `an override matching ${path3}`;
+    const what = `a scope matching ${path3}`;
     for (const r of o.requirements) mergeRequirement(requirements, { value: r, layer }, what);
-    if (o.regression) regression = mergeRegression(regression, { value: o.regression, layer }, `${what}:`);
+    if (o.weakening) weakening = mergeWeakening(weakening, { value: o.weakening, layer }, `${what}:`);
     if (o.removedDesigns) removed = mergeRemoved(removed, { value: o.removedDesigns, layer }, what);
     if (o.budget) budget = mergeBudget(budget, { value: o.budget, layer }, what);
   }
   const b = budget.value;
-  const format = policy.designs.find((d) => d.format !== void 0 && matches(d.files, path3))?.format;
+  const format = policy.designs.find((d) => d.format !== void 0 && matches(d.paths, path3))?.format;
   return {
     rValue: policy.rValue,
     seed: policy.seed,
     challenges: policy.challenges,
     requirements: requirements.map((r) => r.value),
-    regression: regression.value,
+    weakening: weakening.value,
     removedDesigns: removed.value.severity,
     budget: { ...b.work !== void 0 ? { work: b.work } : {}, ...b.seconds !== void 0 ? { seconds: b.seconds } : {}, maxWork: budgetWork(b) },
     ...format ? { format } : {}
@@ -47926,14 +47947,14 @@ function parseDesign(text2, file, options = {}) {
 // src/version.ts
 var VERSION = "0.1.0";
 
-// src/gate/merge.ts
+// src/gate/join.ts
 function upgradeReport(value, name = "report") {
   const r = value;
   if (r === null || typeof r !== "object" || typeof r.version !== "number" || !Array.isArray(r.files)) {
     throw new UsageError(`${name} is not a netbrace report`, 'pass the JSON files written by "netbrace check --json" or the action');
   }
   if (r.version > REPORT_VERSION) {
-    throw new UsageError(`${name} has report version ${r.version}, newer than this netbrace (${REPORT_VERSION})`, "merge with the newest netbrace");
+    throw new UsageError(`${name} has report version ${r.version}, newer than this netbrace (${REPORT_VERSION})`, "join with the newest netbrace");
   }
   const files = r.files.map((f) => ({ ...f, findings: f.findings ?? [], requirements: f.requirements ?? [] }));
   return {
@@ -47944,18 +47965,18 @@ function upgradeReport(value, name = "report") {
     caution: r.caution ?? CAUTION
   };
 }
-function mergeReports(reports) {
-  if (reports.length === 0) throw new UsageError("there are no reports to merge", "check the folder of shard reports");
+function joinReports(reports) {
+  if (reports.length === 0) throw new UsageError("there are no reports to join", "check the folder of part reports");
   const list = reports.map((r, i) => upgradeReport(r, `report ${i + 1}`));
   const first = list[0];
   const byPath = /* @__PURE__ */ new Map();
   for (const r of list) for (const f of r.files) if (!byPath.has(f.path)) byPath.set(f.path, f);
   const files = [...byPath.values()].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
-  const merged = {
+  const joined = {
     version: REPORT_VERSION,
     tool: first.tool,
     verdict: list.some((r) => r.verdict === "fail") ? "fail" : verdictOf(files),
-    mode: list.some((r) => r.mode === "enforce") ? "enforce" : "advise",
+    mode: list.some((r) => r.mode === "block") ? "block" : "inform",
     policy: { ...first.policy, ...list.some((r) => r.policy?.changed) ? { changed: true } : {} },
     ...first.base !== void 0 ? { base: first.base } : {},
     ...first.head !== void 0 ? { head: first.head } : {},
@@ -47965,11 +47986,11 @@ function mergeReports(reports) {
     files,
     caution: first.caution
   };
-  const shards = list.map((r) => r.shard).filter((s) => s !== void 0);
-  if (shards.length > 0) {
-    merged.shards = { total: Math.max(...shards.map((s) => s.total)), merged: [...new Set(shards.map((s) => s.index))].sort((a, b) => a - b) };
+  const parts = list.map((r) => r.part).filter((s) => s !== void 0);
+  if (parts.length > 0) {
+    joined.parts = { total: Math.max(...parts.map((s) => s.total)), joined: [...new Set(parts.map((s) => s.index))].sort((a, b) => a - b) };
   }
-  return merged;
+  return joined;
 }
 
 // src/run-gate.ts
@@ -47982,8 +48003,8 @@ function pathHash(path3) {
   }
   return h >>> 0;
 }
-function inShard(path3, shard) {
-  return pathHash(path3) % shard.total === shard.index - 1;
+function inPart(path3, part) {
+  return pathHash(path3) % part.total === part.index - 1;
 }
 var NeedFile = class {
   constructor(path3) {
@@ -48005,7 +48026,7 @@ async function loadPolicyAt(entry, read) {
       texts.set(e.path, await read(e.path));
     }
   }
-  throw new PolicyError("the policy extends too many files", { file: entry }, "keep the chain of extends short");
+  throw new PolicyError("the policy inherits too many files", { file: entry }, "keep the chain of inherits short");
 }
 async function choosePolicy(request2, deps, base, head) {
   const path3 = request2.policyPath ?? DEFAULT_POLICY_PATH;
@@ -48141,13 +48162,13 @@ async function evaluateGraph(g, specs, cuts, request2, deps) {
   return { graph: g, result: joinEvaluations(parts) };
 }
 function validateRequest(request2) {
-  if (request2.mode !== "enforce" && request2.mode !== "advise") throw new UsageError(`mode must be enforce or advise, not ${String(request2.mode)}`);
+  if (request2.mode !== "block" && request2.mode !== "inform") throw new UsageError(`mode must be block or inform, not ${String(request2.mode)}`);
   if (request2.policySource !== "base" && request2.policySource !== "head") {
     throw new UsageError(`policy-source must be base or head, not ${String(request2.policySource)}`);
   }
-  const s = request2.shard;
+  const s = request2.part;
   if (s && !(Number.isInteger(s.index) && Number.isInteger(s.total) && s.total >= 1 && s.index >= 1 && s.index <= s.total)) {
-    throw new UsageError(`shard ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, "e.g. 2/4 for the second of four shards");
+    throw new UsageError(`part ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, "e.g. 2/4 for the second of four parts");
   }
   if (request2.seed !== void 0 && !(Number.isInteger(request2.seed) && request2.seed >= 0 && request2.seed <= 4294967295)) {
     throw new UsageError(`seed must be a whole number from 0 to 4294967295, not ${request2.seed}`);
@@ -48162,7 +48183,7 @@ async function runGate(request2, deps) {
   const base = request2.eventKind === "schedule" ? void 0 : request2.base;
   const { policy, info: info2 } = await choosePolicy(request2, deps, base, head);
   const { list: all, scope } = await candidates(request2, deps, policy, base, head);
-  const chosen = [...all].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0).filter((c) => !request2.shard || inShard(c.path, request2.shard));
+  const chosen = [...all].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0).filter((c) => !request2.part || inPart(c.path, request2.part));
   const rules = chosen.map((c) => policyForFile(policy, c.path));
   const seed = request2.seed ?? policy.seed;
   const files = [];
@@ -48211,7 +48232,7 @@ async function runGate(request2, deps) {
     ...base !== void 0 ? { base } : {},
     head,
     seed,
-    ...request2.shard ? { shard: { index: request2.shard.index, total: request2.shard.total } } : {},
+    ...request2.part ? { part: { index: request2.part.index, total: request2.part.total } } : {},
     scope,
     counts: countStatuses(files),
     files,
@@ -48489,7 +48510,7 @@ function header(report, options) {
   let verdict;
   if (report.files.length === 0) verdict = `${ICON.ok} ${name}: no design file changed — pass`;
   else if (report.verdict === "pass") verdict = `${ICON.ok} ${name}: pass`;
-  else if (report.mode === "advise") verdict = `${ICON.warn} ${name}: would fail (advise mode, not blocking)`;
+  else if (report.mode === "inform") verdict = `${ICON.warn} ${name}: would fail (inform mode, not blocking)`;
   else verdict = `${ICON.fail} ${name}: the gate failed`;
   const facts2 = [`${report.mode} mode`];
   if (report.policy.source === "builtin") facts2.push("built-in default policy (no policy file)");
@@ -48501,8 +48522,8 @@ function header(report, options) {
   else if (report.head) facts2.push(`head ${shortSha(report.head)}, thresholds only (no base)`);
   facts2.push(`seed ${report.seed}`);
   if (report.scope === "all") facts2.push("every design, thresholds only");
-  if (report.shard) facts2.push(`shard ${report.shard.index} of ${report.shard.total}`);
-  if (report.shards) facts2.push(`merged shards ${report.shards.merged.join(", ")} of ${report.shards.total}`);
+  if (report.part) facts2.push(`part ${report.part.index} of ${report.part.total}`);
+  if (report.parts) facts2.push(`joined parts ${report.parts.joined.join(", ")} of ${report.parts.total}`);
   let text2 = `## ${verdict}
 
 ${facts2.join(" · ")}
@@ -48784,7 +48805,7 @@ var RULES = {
     name: "RThreshold",
     short: "An r-threshold of the policy is missed",
     full: "At the stated removal fraction, the stated statistic of the robustness envelope (a quantile, the median, the minimum or the worst case) of R is below the threshold the policy requires.",
-    help: "The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by overrides but never loosened below a floor it extends."
+    help: "The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by scopes but never loosened below a floor it inherits."
   },
   "area-floor": {
     name: "AreaFloor",
@@ -53687,39 +53708,39 @@ var KEY_RE = /^[A-Za-z0-9._/-]{1,64}$/;
 var REF_RE = /^(?!-)(?!.*\.\.)[A-Za-z0-9._/@^~-]{1,200}$/;
 function readInputs(env) {
   const workingDirectory = relativePath(env, "working-directory", ".");
-  const shardText = getInput(env, "shard");
-  let shard;
-  if (shardText) {
-    const m = /^(\d+)\s*\/\s*(\d+)$/.exec(shardText);
+  const partText = getInput(env, "part");
+  let part;
+  if (partText) {
+    const m = /^(\d+)\s*\/\s*(\d+)$/.exec(partText);
     const index = m ? Number(m[1]) : NaN;
     const total = m ? Number(m[2]) : NaN;
     if (!m || index < 1 || total < 1 || index > total || total > 256) {
-      throw new InputError(`input "shard" is "${oneLine(shardText, 40)}"; write k/n with 1 ≤ k ≤ n ≤ 256, e.g. 2/4 (use the matrix: shard: \${{ matrix.shard }}/4)`);
+      throw new InputError(`input "part" is "${oneLine(partText, 40)}"; write k/n with 1 ≤ k ≤ n ≤ 256, e.g. 2/4 (use the matrix: part: \${{ matrix.part }}/4)`);
     }
-    shard = { index, total };
+    part = { index, total };
   }
   const defaultKey = workingDirectory === "." || workingDirectory === "" ? "default" : workingDirectory.replace(/[^A-Za-z0-9._/-]/g, "-").slice(0, 64);
   const commentKey = getInput(env, "comment-key") || defaultKey;
   if (!KEY_RE.test(commentKey)) throw new InputError(`input "comment-key" may use letters, digits, ".", "_", "/" and "-" (at most 64)`);
   const base = getInput(env, "base");
   if (base && !REF_RE.test(base)) throw new InputError(`input "base" is not a valid git ref or commit id`);
-  const merge2 = relativePath(env, "merge", "");
-  if (merge2 && shard) throw new InputError('inputs "merge" and "shard" exclude each other: shards evaluate, the merge job combines their reports');
+  const joinParts = relativePath(env, "join-parts", "");
+  if (joinParts && part) throw new InputError('inputs "join-parts" and "part" exclude each other: parts evaluate, the join job combines their reports');
   const category = getInput(env, "sarif-category") || (commentKey === "default" ? "netbrace" : `netbrace-${commentKey}`);
   return {
     policy: repositoryInput(relativePath(env, "policy", ""), "policy"),
     policySource: oneOf(env, "policy-source", ["base", "head"], "base"),
     token: getInput(env, "token"),
-    mode: oneOf(env, "mode", ["enforce", "advise"], "enforce"),
-    comment: oneOf(env, "comment", ["always", "on-change", "on-failure", "never"], "on-change"),
+    mode: oneOf(env, "mode", ["block", "inform"], "block"),
+    comment: oneOf(env, "comment", ["every-run", "when-changed", "when-failing", "off"], "when-changed"),
     commentKey,
     report: relativePath(env, "report", ".netbrace-out/netbrace-report.json"),
     sarif: relativePath(env, "sarif", ".netbrace-out/netbrace.sarif"),
     sarifCategory: category.replace(/[^A-Za-z0-9._-]/g, "-"),
     html: relativePath(env, "html", ""),
     base,
-    shard,
-    merge: merge2,
+    part,
+    joinParts,
     workingDirectory,
     title: oneLine(getInput(env, "title"), 120),
     seed: optionalInt(env, "seed", 0, 2 ** 32 - 1),
@@ -53800,7 +53821,7 @@ async function changedLines(deps, cwd, base, head) {
   return out;
 }
 var MAX_REPORT_BYTES = 64 * 1024 * 1024;
-function readShardReports(folder) {
+function readPartReports(folder) {
   const names = [];
   const walk = (dir, depth) => {
     for (const entry of readdirSync(dir, { withFileTypes: true }).sort((a, b) => a.name < b.name ? -1 : 1)) {
@@ -53814,28 +53835,28 @@ function readShardReports(folder) {
   const reports = [];
   for (const file of names) {
     const stat2 = lstatSync2(file);
-    if (stat2.size > MAX_REPORT_BYTES) throw new InputError(`shard report ${path2.basename(file)} is larger than 64 MiB`);
+    if (stat2.size > MAX_REPORT_BYTES) throw new InputError(`part report ${path2.basename(file)} is larger than 64 MiB`);
     let parsed;
     try {
       parsed = JSON.parse(readFileSync3(file, "utf8"));
     } catch {
-      throw new InputError(`shard report ${path2.basename(file)} is not valid JSON`);
+      throw new InputError(`part report ${path2.basename(file)} is not valid JSON`);
     }
     reports.push(parsed);
   }
-  if (!reports.length) throw new InputError(`input "merge": no shard report (*.json) in ${path2.basename(folder)}; download the shards' artifacts there first`);
+  if (!reports.length) throw new InputError(`input "join-parts": no part report (*.json) in ${path2.basename(folder)}; download the parts' artifacts there first`);
   return { reports, names };
 }
 function shouldWriteComment(mode, report, existing) {
-  if (mode === "never") return false;
-  if (mode === "always") return true;
+  if (mode === "off") return false;
+  if (mode === "every-run") return true;
   const failing = report.verdict === "fail";
-  if (mode === "on-failure") return failing || existing !== void 0;
+  if (mode === "when-failing") return failing || existing !== void 0;
   if (existing) return commentDigest(existing.body) !== reportDigest(report);
   return failing || report.files.some((f) => f.findings.length > 0);
 }
 async function postComment(deps, env, inputs, target, report, body) {
-  if (!target.pr || inputs.comment === "never") return "not-applicable";
+  if (!target.pr || inputs.comment === "off") return "not-applicable";
   if (!inputs.token) {
     deps.out.warning('netbrace: no token, so no pull-request comment (set the "token" input, default github.token)');
     return "failed";
@@ -53892,25 +53913,25 @@ async function run(env, deps) {
     const notes = [];
     let report;
     let lines = /* @__PURE__ */ new Map();
-    if (inputs.merge) {
-      const folder = resolveInWorkspace(workspace, workspace, inputs.merge, "merge");
-      const { reports, names } = readShardReports(folder);
-      deps.out.info(`netbrace: merging ${reports.length} shard reports`);
+    if (inputs.joinParts) {
+      const folder = resolveInWorkspace(workspace, workspace, inputs.joinParts, "join-parts");
+      const { reports, names } = readPartReports(folder);
+      deps.out.info(`netbrace: joining ${reports.length} part reports`);
       try {
-        report = deps.merge(reports);
+        report = deps.join(reports);
       } catch (error2) {
         const m = /^report (\d+)/.exec(error2 instanceof Error ? error2.message : "");
-        if (m && isNetbraceError(error2)) throw new InputError(`shard report ${path2.basename(names[Number(m[1]) - 1] ?? "?")}: ${error2.message.replace(/^report \d+ /, "")}`);
+        if (m && isNetbraceError(error2)) throw new InputError(`part report ${path2.basename(names[Number(m[1]) - 1] ?? "?")}: ${error2.message.replace(/^report \d+ /, "")}`);
         throw error2;
       }
-      const merged = report.shards;
-      if (merged) {
-        const missing2 = Array.from({ length: merged.total }, (_, i) => i + 1).filter((k) => !merged.merged.includes(k));
+      const joined = report.parts;
+      if (joined) {
+        const missing2 = Array.from({ length: joined.total }, (_, i) => i + 1).filter((k) => !joined.joined.includes(k));
         if (missing2.length) {
-          return fail(`netbrace: shard report${missing2.length === 1 ? "" : "s"} ${missing2.map((k) => `${k}/${merged.total}`).join(", ")} missing from ${inputs.merge}: every shard must upload its report before the merge job runs (needs: the shard job)`, 2);
+          return fail(`netbrace: part report${missing2.length === 1 ? "" : "s"} ${missing2.map((k) => `${k}/${joined.total}`).join(", ")} missing from ${inputs.joinParts}: every part must upload its report before the join job runs (needs: the part job)`, 2);
         }
       }
-      notes.push(`Merged from ${names.length} shard report${names.length === 1 ? "" : "s"}.`);
+      notes.push(`Joined from ${names.length} part report${names.length === 1 ? "" : "s"}.`);
     } else if (target.kind === "nothing") {
       report = emptyReport(inputs, target);
       notes.push(`Nothing to judge: ${target.reason}.`);
@@ -53955,7 +53976,7 @@ async function run(env, deps) {
         mode: inputs.mode,
         ...inputs.seed !== void 0 ? { seed: inputs.seed } : {},
         ...inputs.threads !== void 0 ? { threads: inputs.threads } : {},
-        ...inputs.shard ? { shard: inputs.shard } : {},
+        ...inputs.part ? { part: inputs.part } : {},
         eventKind: kind
       };
       if (paths && paths.length === 0) {
@@ -53966,7 +53987,7 @@ async function run(env, deps) {
         if (base && head) lines = await changedLines(deps, root, base, head);
       }
     }
-    const shardJob = Boolean(inputs.shard);
+    const partJob = Boolean(inputs.part);
     const artifacts = [];
     const write = (input, given, text2) => {
       const full = prepareWrite(workspace, workspace, given, input);
@@ -53978,24 +53999,24 @@ async function run(env, deps) {
     const reportPath = inputs.report ? write("report", inputs.report, serializeReport(report)) : "";
     let sarifPath = "";
     let htmlPath = "";
-    if (!shardJob) {
+    if (!partJob) {
       if (inputs.sarif) sarifPath = write("sarif", inputs.sarif, `${JSON.stringify(renderSarif(report, { category: inputs.sarifCategory }), null, 2)}
 `);
       if (inputs.html && deps.renderHtml) htmlPath = write("html", inputs.html, deps.renderHtml(report));
     }
-    if (!shardJob) {
+    if (!partJob) {
       const elsewhere = sarifPath ? `the job summary and ${sarifPath}` : "the job summary and the JSON report";
-      const reservedErrors = report.verdict === "fail" && report.mode === "enforce" ? 1 : 0;
+      const reservedErrors = report.verdict === "fail" && report.mode === "block" ? 1 : 0;
       const plan = planAnnotations(report, { changedLines: lines, elsewhere, reservedErrors });
       for (const a of plan.annotations) deps.out.annotate(a);
     }
     let comment = "not-applicable";
     const url = runUrl(env);
     const viewOptions = { ...url ? { runUrl: url } : {}, artifacts, ...inputs.title ? { title: inputs.title } : {} };
-    if (!shardJob && !target.pr && inputs.pullRequest) {
+    if (!partJob && !target.pr && inputs.pullRequest) {
       target.pr = await trustedPullRequest(deps, env, inputs, target, inputs.pullRequest);
     }
-    if (!shardJob) {
+    if (!partJob) {
       const body = renderComment(report, { ...viewOptions, key: inputs.commentKey });
       comment = await postComment(deps, env, inputs, target, report, body);
       if (comment === "failed") notes.push("The pull-request comment could not be written (see the warning in the log); this does not change the verdict.");
@@ -54011,15 +54032,15 @@ async function run(env, deps) {
     deps.out.setOutput("html", htmlPath);
     deps.out.setOutput("comment-url", typeof comment === "object" && comment.url ? comment.url : "");
     const verdict = report.verdict;
-    if (shardJob) {
-      deps.out.info(`netbrace: shard ${inputs.shard.index}/${inputs.shard.total} ${verdict === "fail" ? "has failures" : "passes"}; the merge job decides`);
+    if (partJob) {
+      deps.out.info(`netbrace: part ${inputs.part.index}/${inputs.part.total} ${verdict === "fail" ? "has failures" : "passes"}; the join job decides`);
       return { exitCode: 0, verdict, comment };
     }
-    if (verdict === "fail" && inputs.mode === "enforce") {
+    if (verdict === "fail" && inputs.mode === "block") {
       const n = report.files.filter((f) => f.status === "error" || f.findings.some((x) => x.severity === "fail")).length;
       return { ...fail(`netbrace: the gate failed: ${n} design${n === 1 ? "" : "s"} with failures (see the annotations and the job summary)`, 1), verdict, comment };
     }
-    if (verdict === "fail") deps.out.warning("netbrace: the gate would fail; advise mode reports without failing the step");
+    if (verdict === "fail") deps.out.warning("netbrace: the gate would fail; inform mode reports without failing the step");
     return { exitCode: 0, verdict, comment };
   } catch (error2) {
     if (isNetbraceError(error2)) {
@@ -54242,7 +54263,7 @@ run(process.env, {
     const threads = request2.threads ?? availableParallelism();
     return runGate(request2, { ...gitDeps(root), ...threads > 1 ? { evaluate: (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) } : {} });
   },
-  merge: mergeReports,
+  join: joinReports,
   git: (args, cwd) => runGit(cwd, args),
   github: defaultGithub,
   renderHtml,

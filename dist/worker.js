@@ -690,7 +690,7 @@ var NetbraceError = class extends Error {
   line;
   column;
   hint;
-  /** Further locations that belong to the same problem (e.g. the floor an override loosens). */
+  /** Further locations that belong to the same problem (e.g. the floor a scope loosens). */
   related;
   constructor(kind, message, where = {}, hint = "", related = []) {
     super(message);

@@ -13,7 +13,7 @@ export declare class NetbraceError extends Error {
     readonly line: number;
     readonly column: number;
     readonly hint: string;
-    /** Further locations that belong to the same problem (e.g. the floor an override loosens). */
+    /** Further locations that belong to the same problem (e.g. the floor a scope loosens). */
     readonly related: readonly (SourceLocation & {
         message: string;
     })[];

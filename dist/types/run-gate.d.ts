@@ -2,7 +2,7 @@ import { type DesignEvaluation, type EvaluationSpec } from './envelope/evaluate.
 import { type CompactGraph } from './graph/compact.js';
 import type { FilePolicy } from './policy/types.js';
 import { type Report } from './report/report.js';
-export { mergeReports } from './gate/merge.js';
+export { joinReports } from './gate/join.js';
 /** A revision as git names it, or "worktree" for the files on disk. */
 export type Revision = string;
 export interface ChangedFile {
@@ -35,12 +35,12 @@ export interface GateRequest {
     policyPath?: string;
     /** Where the policy is read: the base (trusted, the default) or the head. */
     policySource: 'base' | 'head';
-    mode: 'enforce' | 'advise';
+    mode: 'block' | 'inform';
     /** Overrides the policy's seed. */
     seed?: number;
     threads?: number;
-    /** Evaluate shard `index` (1-based) of `total`: a deterministic slice by path hash. */
-    shard?: {
+    /** Evaluate part `index` (1-based) of `total`: a deterministic slice by path hash. */
+    part?: {
         index: number;
         total: number;
     };
@@ -53,8 +53,8 @@ export interface GateResult {
 }
 /** FNV-1a 32-bit hash of a path (Fowler, Noll, Vo; common practice for stable bucketing). */
 export declare function pathHash(path: string): number;
-/** Whether a path belongs to shard `index` (1-based) of `total`. */
-export declare function inShard(path: string, shard: {
+/** Whether a path belongs to part `index` (1-based) of `total`. */
+export declare function inPart(path: string, part: {
     index: number;
     total: number;
 }): boolean;

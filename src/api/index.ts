@@ -45,7 +45,8 @@ export interface CheckInput {
   policy?: string;
   /** Further policy files by path, for a policy that inherits others. */
   policyFiles?: Record<string, string>;
-  mode?: 'enforce' | 'advise';
+  /** block (default): exitCode 1 when the change fails; inform: report the same, exitCode 0. */
+  mode?: 'block' | 'inform';
   seed?: number;
 }
 
@@ -88,7 +89,7 @@ export async function check(input: CheckInput): Promise<CheckResult> {
     ...(input.base !== undefined ? { base: 'base' } : {}),
     head: 'head',
     policySource: 'base' as const,
-    mode: input.mode ?? 'enforce',
+    mode: input.mode ?? 'block',
     eventKind: 'local' as const,
     ...(input.seed !== undefined ? { seed: input.seed } : {}),
   };

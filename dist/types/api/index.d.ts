@@ -18,7 +18,8 @@ export interface CheckInput {
     policy?: string;
     /** Further policy files by path, for a policy that inherits others. */
     policyFiles?: Record<string, string>;
-    mode?: 'enforce' | 'advise';
+    /** block (default): exitCode 1 when the change fails; inform: report the same, exitCode 0. */
+    mode?: 'block' | 'inform';
     seed?: number;
 }
 export interface CheckResult {

@@ -64,7 +64,7 @@ export interface ThresholdRequirement extends RequirementBase, ChallengeRef {
 }
 export interface AreaRequirement extends RequirementBase, ChallengeRef {
     kind: 'area-floor';
-    /** Without a floor the area is only tracked (regressions are still judged). */
+    /** Without a floor the area is only tracked (weakening is still judged). */
     min?: number;
 }
 export interface SpreadRequirement extends RequirementBase, ChallengeRef {
@@ -83,27 +83,27 @@ export interface SpofRequirement extends RequirementBase {
 }
 export type Requirement = ThresholdRequirement | AreaRequirement | SpreadRequirement | ContingencyRequirement | SpofRequirement;
 export type RequirementKind = Requirement['kind'];
-export interface RegressionRule {
+export interface WeakeningRule {
     /** Largest drop tolerated, in units of R (absolute). */
     allowedDrop?: number;
     /** Largest drop tolerated as a fraction of the base value. */
     allowedRelativeDrop?: number;
-    /** A drop smaller than noiseFactor × se is Monte Carlo noise, never a failure. */
-    noiseFactor: number;
+    /** A drop smaller than errorMultiple × se is Monte Carlo noise, never a failure. */
+    errorMultiple: number;
     severity: Severity;
     where: Where;
     /** Per field, where it was written (for loosening errors). */
-    fieldWhere: Partial<Record<'allowedDrop' | 'allowedRelativeDrop' | 'noiseFactor' | 'severity', Where>>;
+    fieldWhere: Partial<Record<'allowedDrop' | 'allowedRelativeDrop' | 'errorMultiple' | 'severity', Where>>;
 }
 export type RemovedSeverity = Severity | 'ignore';
 export interface DesignGlob {
-    files: string[];
+    paths: string[];
     format?: DesignFormat;
     where: Where;
 }
 /**
  * The work budget of each design evaluation (head and base alike). Not a floor of the design,
- * but the effort that judges the floors: an extending policy or an override may raise it,
+ * but the effort that judges the floors: an inheriting policy or a scope may raise it,
  * never lower it (a smaller budget turns judgements into "uncertain").
  */
 export interface Budget {
@@ -120,10 +120,10 @@ export interface ResolvedBudget {
     seconds?: number;
     maxWork: number;
 }
-export interface Override {
-    files: string[];
+export interface Scope {
+    paths: string[];
     requirements: Requirement[];
-    regression?: RegressionRule;
+    weakening?: WeakeningRule;
     removedDesigns?: {
         severity: RemovedSeverity;
         where: Where;
@@ -131,15 +131,15 @@ export interface Override {
     budget?: Budget;
     where: Where;
 }
-/** One policy file as written (before `extends` and overrides are applied). */
+/** One policy file as written (before `inherits` and scopes are applied). */
 export interface PolicyFile {
     path: string;
-    extends?: {
+    inherits?: {
         path: string;
         where: Where;
     };
     designs?: DesignGlob[];
-    ignore?: {
+    exclude?: {
         globs: string[];
         where: Where;
     };
@@ -155,44 +155,44 @@ export interface PolicyFile {
     challenges?: ChallengeDef[];
     /** Undefined when the file leaves `requirements` out. */
     requirements?: Requirement[];
-    regression?: RegressionRule;
+    weakening?: WeakeningRule;
     removedDesigns?: {
         severity: RemovedSeverity;
         where: Where;
     };
     budget?: Budget;
-    overrides: Override[];
+    scopes: Scope[];
 }
-/** The policy after `extends` is resolved; overrides still apply per file. */
+/** The policy after `inherits` is resolved; scopes still apply per file. */
 export interface Policy {
     /** "builtin" when no policy file exists and the defaults apply. */
     source: 'file' | 'builtin';
-    /** The policy file and the files it extends, the extending file first. */
+    /** The policy file and the files it inherits, the inheriting file first. */
     files: string[];
     designs: DesignGlob[];
-    ignore: string[];
+    exclude: string[];
     seed: number;
     rValue: RValueSpec;
     challenges: ChallengeDef[];
     requirements: Requirement[];
-    regression: RegressionRule;
+    weakening: WeakeningRule;
     removedDesigns: {
         severity: RemovedSeverity;
         where?: Where;
     };
     budget: Budget;
-    /** Overrides of every file of the chain, the most basic file's first. */
-    overrides: PolicyOverride[];
+    /** Scopes of every file of the chain, the most basic file's first. */
+    scopes: PolicyScope[];
     /** Depth of the file each definition came from (0 = the most basic): a definition may
      *  not loosen one from its own or a more basic file. */
     layers: {
         requirements: number[];
-        regression: number;
+        weakening: number;
         removed: number;
         budget: number;
     };
 }
-export interface PolicyOverride extends Override {
+export interface PolicyScope extends Scope {
     layer: number;
 }
 /** What applies to one design file. */
@@ -201,7 +201,7 @@ export interface FilePolicy {
     seed: number;
     challenges: ChallengeDef[];
     requirements: Requirement[];
-    regression: RegressionRule;
+    weakening: WeakeningRule;
     removedDesigns: RemovedSeverity;
     budget: ResolvedBudget;
     format?: DesignFormat;

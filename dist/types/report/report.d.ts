@@ -91,7 +91,7 @@ export interface Report {
         version: string;
     };
     verdict: 'pass' | 'fail';
-    mode: 'enforce' | 'advise';
+    mode: 'block' | 'inform';
     policy: {
         /** "file": read from the repository; "builtin": no policy file, defaults applied. */
         source: 'file' | 'builtin';
@@ -100,7 +100,7 @@ export interface Report {
         revision?: string;
         /** True when the change under review modifies the policy itself (reported, not applied). */
         changed?: boolean;
-        /** The policy file and the files it extends, the extending file first. */
+        /** The policy file and the files it inherits, the inheriting file first. */
         files?: string[];
         /** A plain sentence about the policy, e.g. why a changed policy was not applied. */
         note?: string;
@@ -108,15 +108,15 @@ export interface Report {
     base?: string;
     head?: string;
     seed: number;
-    /** When this run evaluated one shard of the changed designs (index is 1-based: shard k of n). */
-    shard?: {
+    /** When this run evaluated one part of the changed designs (index is 1-based: part k of n). */
+    part?: {
         index: number;
         total: number;
     };
-    /** Set by mergeReports: the shards merged into this report (1-based), out of `total`. */
-    shards?: {
+    /** Set by joinReports: the parts joined into this report (1-based), out of `total`. */
+    parts?: {
         total: number;
-        merged: number[];
+        joined: number[];
     };
     /** What the run judged: the changed designs, the given paths, or every design (thresholds only). */
     scope?: 'changed' | 'paths' | 'all';

@@ -1,4 +1,4 @@
 import { type Report } from '../report/report.js';
 /** Accept a parsed report of this or an older version; UsageError for anything else. */
 export declare function upgradeReport(value: unknown, name?: string): Report;
-export declare function mergeReports(reports: readonly unknown[]): Report;
+export declare function joinReports(reports: readonly unknown[]): Report;
