@@ -33,7 +33,10 @@ await build({
 // returns and takes are the caller's own graphology's.
 if (existsSync('src/api/index.ts')) {
   await build({ ...common, entryPoints: ['src/api/index.ts'], outfile: 'dist/api.js', banner, external: ['graphology'] });
-  // Its type declarations, generated from the sources (tsc is deterministic).
+}
+// Its type declarations, generated from the sources (tsc is deterministic). Scratch builds of
+// the Action bundle (the end-to-end tests) have no tsconfig and need none.
+if (existsSync('src/api/index.ts') && existsSync('tsconfig.api.json')) {
   rmSync('dist/types', { recursive: true, force: true });
   const tsc = createRequire(import.meta.url).resolve('typescript/bin/tsc');
   execFileSync(process.execPath, [tsc, '-p', 'tsconfig.api.json'], { stdio: 'inherit' });

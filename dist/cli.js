@@ -22291,7 +22291,7 @@ var require_parse = __commonJS({
         if (opts2.noglobstar === true) return star;
         return `(${capture}(?:(?!${START_ANCHOR}${opts2.dot ? DOTS_SLASH : DOT_LITERAL}).)*?)`;
       };
-      const create = (str) => {
+      const create2 = (str) => {
         switch (str) {
           case "*":
             return `${nodot}${ONE_CHAR}${star}`;
@@ -22312,14 +22312,14 @@ var require_parse = __commonJS({
           default: {
             const match = /^(.*?)\.(\w+)$/.exec(str);
             if (!match) return;
-            const source2 = create(match[1]);
+            const source2 = create2(match[1]);
             if (!source2) return;
             return source2 + DOT_LITERAL + match[2];
           }
         }
       };
       const output = utils.removePrefix(input, state);
-      let source = create(output);
+      let source = create2(output);
       if (source && opts.strictSlashes !== true) {
         source += `${SLASH_LITERAL}?`;
       }
@@ -29359,39 +29359,155 @@ Exit codes:
   }
 });
 
+// src/policy/workflow-template.ts
+function workflowText(o) {
+  return `# netbrace: judge every changed network design before it merges.
+# Written by "netbrace init --workflow". The job's name (${CHECK_NAME}) is the check to require
+# in branch protection or a repository ruleset: see the README, "Making it block".
+name: ${CHECK_NAME}
+on:
+  pull_request:
+  push:
+    branches: [main]
+
+permissions:
+  contents: read           # read the designs, the policy and their history
+  pull-requests: write     # the one living comment on the pull request
+
+jobs:
+  ${CHECK_NAME}:
+    name: ${CHECK_NAME}
+    runs-on: ubuntu-latest
+    steps:
+      - uses: actions/checkout@v5
+        with:
+          fetch-depth: 0     # full history: the base of the pull request is always there
+      - uses: ${o.action}  # ${o.version}
+        with:${o.policyPath === DEFAULT_POLICY_PATH ? "" : `
+          policy: ${o.policyPath}`}
+          mode: block
+          comment: when-changed
+`;
+}
+function codeownersText(owners, policyPath) {
+  return `# netbrace: the rules that judge network designs, and the workflow that runs them.
+/${policyPath} ${owners}
+/${WORKFLOW_PATH} ${owners}
+`;
+}
+function requiredCheckSteps(owners) {
+  return [
+    "To make the check block merges:",
+    `  1. Commit the files and open a pull request; the check "${CHECK_NAME}" runs once.`,
+    "  2. Settings → Rules → Rulesets → New branch ruleset (or Settings → Branches → branch protection",
+    '     rule) for the default branch: "Require status checks to pass", add the check',
+    `     "${CHECK_NAME}", and "Require a pull request before merging" with "Require review from Code Owners".`,
+    owners === void 0 ? `  3. Add the policy and ${WORKFLOW_PATH} to ${CODEOWNERS_PATH} (give --owners to have it written).` : `  3. The code owners (${owners}) must review every change to the policy and the workflow.`,
+    "  Organisations: a ruleset at the organisation level can require this workflow in every repository (README)."
+  ].join("\n");
+}
+var CHECK_NAME, WORKFLOW_PATH, CODEOWNERS_PATH, ACTION_PLACEHOLDER;
+var init_workflow_template = __esm({
+  "src/policy/workflow-template.ts"() {
+    "use strict";
+    init_defaults();
+    CHECK_NAME = "netbrace";
+    WORKFLOW_PATH = ".github/workflows/netbrace.yml";
+    CODEOWNERS_PATH = ".github/CODEOWNERS";
+    ACTION_PLACEHOLDER = "OWNER/netbrace@0000000000000000000000000000000000000000";
+  }
+});
+
 // src/shell/commands/init.ts
 import { writeFile as writeFile2 } from "node:fs/promises";
 import path5 from "node:path";
-async function run2(args, io) {
-  const { values } = parseCommandArgs("init", args, { policy: { type: "string" } }, false);
-  const root = await repoRoot(io.cwd) ?? io.cwd;
-  const target = values.policy !== void 0 ? path5.resolve(io.cwd, values.policy) : path5.join(root, DEFAULT_POLICY_PATH);
-  const shown = path5.relative(io.cwd, target) || target;
+import { mkdir as mkdir2 } from "node:fs/promises";
+async function create(target, text2, shown) {
   try {
-    await writeFile2(target, STARTER_POLICY, { flag: "wx" });
+    await writeFile2(target, text2, { flag: "wx" });
+    return true;
   } catch (e) {
     const code = e.code;
-    if (code === "EEXIST") throw new UsageError(`${shown} exists already; netbrace init never overwrites a policy`, "edit it, or give another --policy FILE");
+    if (code === "EEXIST") return false;
     if (code === "ENOENT") throw new UsageError(`cannot write ${shown}: its folder does not exist`);
     throw e;
   }
-  io.stdout(`wrote ${shown}: the built-in policy, commented. Set the floors for your network, then run "netbrace check".
+}
+async function run2(args, io) {
+  const { values } = parseCommandArgs(
+    "init",
+    args,
+    { policy: { type: "string" }, workflow: { type: "boolean" }, action: { type: "string" }, owners: { type: "string" } },
+    false
+  );
+  if (!values.workflow && (values.action !== void 0 || values.owners !== void 0)) {
+    throw new UsageError("--action and --owners go with --workflow", "add --workflow");
+  }
+  const action = values.action ?? ACTION_PLACEHOLDER;
+  if (values.action !== void 0 && !/^[A-Za-z0-9_.-]+\/[A-Za-z0-9_.-]+@[0-9a-f]{40}$/.test(values.action)) {
+    throw new UsageError(`--action ${values.action} is not OWNER/REPO@<40-character commit SHA>`, 'pin by the full commit: tags can be moved (README, "Pinning")');
+  }
+  const owners = values.owners?.trim().split(/\s+/).filter(Boolean);
+  for (const o of owners ?? []) if (!OWNER.test(o)) throw new UsageError(`--owners: "${o}" is not @user, @org/team or an e-mail address`);
+  const root = await repoRoot(io.cwd) ?? io.cwd;
+  const target = values.policy !== void 0 ? path5.resolve(io.cwd, values.policy) : path5.join(root, DEFAULT_POLICY_PATH);
+  const shown = path5.relative(io.cwd, target) || target;
+  if (!await create(target, STARTER_POLICY, shown)) {
+    if (!values.workflow) throw new UsageError(`${shown} exists already; netbrace init never overwrites a policy`, "edit it, or give another --policy FILE");
+    io.stdout(`kept ${shown}: it exists already (never overwritten)
+`);
+  } else io.stdout(`wrote ${shown}: the built-in policy, commented. Set the floors for your network, then run "netbrace check".
+`);
+  if (!values.workflow) return 0;
+  const policyPath = path5.relative(root, target).split(path5.sep).join("/");
+  if (policyPath.startsWith("..")) throw new UsageError(`the policy ${shown} is outside the repository`, "the workflow reads it from the repository");
+  const wfTarget = path5.join(root, WORKFLOW_PATH);
+  const wfShown = path5.relative(io.cwd, wfTarget) || wfTarget;
+  await mkdir2(path5.dirname(wfTarget), { recursive: true });
+  if (await create(wfTarget, workflowText({ action, version: `v${VERSION}`, policyPath }), wfShown)) {
+    io.stdout(`wrote ${wfShown}: the check "netbrace" on every pull request, in block mode
+`);
+    if (action === ACTION_PLACEHOLDER) io.stdout(`  replace ${ACTION_PLACEHOLDER} by the repository and commit you take netbrace from (README, "Pinning")
+`);
+  } else io.stdout(`kept ${wfShown}: it exists already (never overwritten); compare it with "netbrace init --help"
+`);
+  const ownersText = owners && owners.length > 0 ? codeownersText(owners.join(" "), policyPath) : void 0;
+  if (ownersText) {
+    const coTarget = path5.join(root, CODEOWNERS_PATH);
+    const coShown = path5.relative(io.cwd, coTarget) || coTarget;
+    if (await create(coTarget, ownersText, coShown)) io.stdout(`wrote ${coShown}: the policy and the workflow need their owners' review
+`);
+    else io.stdout(`kept ${coShown}: it exists already (never overwritten); add these lines:
+${ownersText}`);
+  }
+  io.stdout(`
+${requiredCheckSteps(ownersText ? owners.join(" ") : void 0)}
 `);
   return 0;
 }
-var HELP5, initCommand;
+var HELP5, OWNER, initCommand;
 var init_init = __esm({
   "src/shell/commands/init.ts"() {
     "use strict";
     init_errors();
     init_defaults();
+    init_workflow_template();
+    init_version();
     init_git();
     init_args();
-    HELP5 = `Usage: netbrace init [--policy FILE]
+    HELP5 = `Usage: netbrace init [--policy FILE] [--workflow [--action REF] [--owners OWNERS]]
 
 Write a commented starter policy: the built-in policy that applies when a repository has
 none, spelled out key by key, with examples of floors to set. It is written to
 ${DEFAULT_POLICY_PATH} at the repository root (or FILE). An existing file is never overwritten.
+
+  --workflow         also write ${WORKFLOW_PATH}: pull requests and pushes, block
+                     mode, full-depth checkout, only the permissions it needs; and, with
+                     --owners, ${CODEOWNERS_PATH} lines for the policy and the workflow.
+                     Then prints the steps that make the check required.
+  --action REF       netbrace pinned by commit, OWNER/REPO@<40-character SHA> (default: a
+                     placeholder to replace)
+  --owners OWNERS    code owners, e.g. "@acme/network-planning" (several separated by spaces)
 
 Next: set the floors for your network, then run "netbrace check".
 
@@ -29403,6 +29519,7 @@ Exit codes:
   0  written
   2  usage error, or the file exists already
 `;
+    OWNER = /^@[A-Za-z0-9][A-Za-z0-9-]*(\/[A-Za-z0-9._-]+)?$|^[^@\s]+@[^@\s]+\.[^@\s]+$/;
     initCommand = {
       name: "init",
       summary: "write a commented starter policy (.netbrace.yaml)",

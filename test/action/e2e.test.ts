@@ -12,6 +12,7 @@ import path from 'node:path';
 import { parse as parseYaml } from 'yaml';
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { commentMarker } from '../../src/report/markdown.js';
+import { workflowText } from '../../src/policy/workflow-template.js';
 import { inPart } from '../../src/run-gate.js';
 import { startFakeApi, type FakeApi } from './fake-api.js';
 import { execFileSync } from 'node:child_process';
@@ -221,6 +222,18 @@ describe('the README workflow is what the Action accepts', () => {
 });
 
 describe('pull requests', () => {
+  it('the workflow "netbrace init --workflow" writes blocks a weakening pull request', async () => {
+    const wf = parseYaml(workflowText({ action: `acme/netbrace@${'b'.repeat(40)}`, version: 'v0', policyPath: '.netbrace.yaml' })) as {
+      jobs: { netbrace: { steps: { uses?: string; with?: Record<string, unknown> }[] } };
+    };
+    const step = wf.jobs.netbrace.steps.find((s) => s.uses?.includes('/netbrace@'))!;
+    const inputs = { ...actionDefaults(TOKEN), ...Object.fromEntries(Object.entries(step.with ?? {}).map(([k, v]) => [k, String(v)])) };
+    const ws = checkout(scenario.fail, { shallow: false }); // the workflow's fetch-depth: 0
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), inputs);
+    expect(r.code, r.stdout + r.stderr).toBe(1);
+    expect(r.outputs.verdict).toBe('fail');
+  });
+
   it('fail: annotations on the design\u2019s lines, summary, outputs, SARIF, comment created then updated', async () => {
     const ws = checkout(scenario.fail, { shallow: false });
     const r1 = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs());

