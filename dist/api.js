@@ -25492,12 +25492,37 @@ async function loadPolicyAt(entry, read) {
   }
   throw new PolicyError("the policy inherits too many files", { file: entry }, "keep the chain of inherits short");
 }
+function orgFolder(orgPath) {
+  const i = orgPath.lastIndexOf("/");
+  return i < 0 ? "" : orgPath.slice(0, i + 1);
+}
+function isOrgFile(request, p) {
+  const org = request.orgPolicyPath;
+  if (org === void 0) return false;
+  const folder = orgFolder(org);
+  return p === org || folder !== "" && p.startsWith(folder);
+}
+function requireOrgPolicy(request, entry, policy) {
+  const org = request.orgPolicyPath;
+  if (org === void 0 || entry === org || policy.files.includes(org)) return;
+  throw new PolicyError(
+    `${entry} does not inherit the organisation policy ${org}`,
+    { file: entry, line: 1, column: 1 },
+    `add "inherits: ${org}" (or inherit a file that inherits it); a team policy may only tighten the organisation's floors`,
+    [{ file: org, line: 1, column: 1, message: "the organisation policy every team policy must inherit" }]
+  );
+}
 async function choosePolicy(request, deps, base, head) {
   const path = request.policyPath ?? DEFAULT_POLICY_PATH;
   const explicit = request.policyPath !== void 0;
   const trusted = request.policySource === "base" && base !== void 0 ? base : head;
   const other = trusted === head ? base : head;
-  const readTrusted = async (p) => deps.readAt(trusted, p);
+  const readOrg = async (p) => {
+    if (!deps.readOrgPolicy) throw new UsageError(`the organisation policy ${p} cannot be read here`, "give the path of its checkout");
+    return deps.readOrgPolicy(p);
+  };
+  const readAtRev = (rev) => async (p) => isOrgFile(request, p) ? readOrg(p) : deps.readAt(rev, p);
+  const readTrusted = readAtRev(trusted);
   const entryText = await readTrusted(path);
   const otherText = other !== void 0 ? await deps.readAt(other, path) : null;
   if (entryText === null) {
@@ -25517,19 +25542,26 @@ async function choosePolicy(request, deps, base, head) {
     if (explicit) {
       throw new UsageError(`the policy file ${path} does not exist${trusted === "worktree" ? "" : ` at ${trusted}`}`, 'check --policy, or run "netbrace init"');
     }
+    if (request.orgPolicyPath !== void 0) {
+      const org = request.orgPolicyPath;
+      const { policy: policy2 } = await loadPolicyAt(org, readOrg);
+      return { policy: policy2, info: { source: "file", path: org, files: policy2.files, note: `the repository has no policy; the organisation policy ${org} applies` } };
+    }
     return { policy: builtinPolicy(), info: { source: "builtin", revision: trusted } };
   }
   const { policy, texts } = await loadPolicyAt(path, readTrusted);
+  requireOrgPolicy(request, path, policy);
   const info = { source: "file", path, revision: trusted, files: policy.files };
   if (other !== void 0) {
     let changed = false;
-    for (const [p, text2] of texts) if (await deps.readAt(other, p) !== text2) changed = true;
+    for (const [p, text2] of texts) if (!isOrgFile(request, p) && await deps.readAt(other, p) !== text2) changed = true;
     if (changed) {
       info.changed = true;
       if (trusted === base) {
         let verdict = "it applies once merged";
         try {
-          await loadPolicyAt(path, async (p) => deps.readAt(other, p));
+          const proposed = await loadPolicyAt(path, readAtRev(other));
+          requireOrgPolicy(request, path, proposed.policy);
         } catch (e) {
           if (!isNetbraceError(e)) throw e;
           verdict = `the proposed version has an error: ${e.format().split("\n")[0]}`;

@@ -28802,12 +28802,37 @@ async function loadPolicyAt(entry, read) {
   }
   throw new PolicyError("the policy inherits too many files", { file: entry }, "keep the chain of inherits short");
 }
+function orgFolder(orgPath) {
+  const i = orgPath.lastIndexOf("/");
+  return i < 0 ? "" : orgPath.slice(0, i + 1);
+}
+function isOrgFile(request, p) {
+  const org = request.orgPolicyPath;
+  if (org === void 0) return false;
+  const folder = orgFolder(org);
+  return p === org || folder !== "" && p.startsWith(folder);
+}
+function requireOrgPolicy(request, entry, policy) {
+  const org = request.orgPolicyPath;
+  if (org === void 0 || entry === org || policy.files.includes(org)) return;
+  throw new PolicyError(
+    `${entry} does not inherit the organisation policy ${org}`,
+    { file: entry, line: 1, column: 1 },
+    `add "inherits: ${org}" (or inherit a file that inherits it); a team policy may only tighten the organisation's floors`,
+    [{ file: org, line: 1, column: 1, message: "the organisation policy every team policy must inherit" }]
+  );
+}
 async function choosePolicy(request, deps, base, head) {
   const path7 = request.policyPath ?? DEFAULT_POLICY_PATH;
   const explicit = request.policyPath !== void 0;
   const trusted = request.policySource === "base" && base !== void 0 ? base : head;
   const other = trusted === head ? base : head;
-  const readTrusted = async (p) => deps.readAt(trusted, p);
+  const readOrg = async (p) => {
+    if (!deps.readOrgPolicy) throw new UsageError(`the organisation policy ${p} cannot be read here`, "give the path of its checkout");
+    return deps.readOrgPolicy(p);
+  };
+  const readAtRev = (rev) => async (p) => isOrgFile(request, p) ? readOrg(p) : deps.readAt(rev, p);
+  const readTrusted = readAtRev(trusted);
   const entryText = await readTrusted(path7);
   const otherText = other !== void 0 ? await deps.readAt(other, path7) : null;
   if (entryText === null) {
@@ -28827,19 +28852,26 @@ async function choosePolicy(request, deps, base, head) {
     if (explicit) {
       throw new UsageError(`the policy file ${path7} does not exist${trusted === "worktree" ? "" : ` at ${trusted}`}`, 'check --policy, or run "netbrace init"');
     }
+    if (request.orgPolicyPath !== void 0) {
+      const org = request.orgPolicyPath;
+      const { policy: policy2 } = await loadPolicyAt(org, readOrg);
+      return { policy: policy2, info: { source: "file", path: org, files: policy2.files, note: `the repository has no policy; the organisation policy ${org} applies` } };
+    }
     return { policy: builtinPolicy(), info: { source: "builtin", revision: trusted } };
   }
   const { policy, texts } = await loadPolicyAt(path7, readTrusted);
+  requireOrgPolicy(request, path7, policy);
   const info = { source: "file", path: path7, revision: trusted, files: policy.files };
   if (other !== void 0) {
     let changed = false;
-    for (const [p, text2] of texts) if (await deps.readAt(other, p) !== text2) changed = true;
+    for (const [p, text2] of texts) if (!isOrgFile(request, p) && await deps.readAt(other, p) !== text2) changed = true;
     if (changed) {
       info.changed = true;
       if (trusted === base) {
         let verdict = "it applies once merged";
         try {
-          await loadPolicyAt(path7, async (p) => deps.readAt(other, p));
+          const proposed = await loadPolicyAt(path7, readAtRev(other));
+          requireOrgPolicy(request, path7, proposed.policy);
         } catch (e) {
           if (!isNetbraceError(e)) throw e;
           verdict = `the proposed version has an error: ${e.format().split("\n")[0]}`;
@@ -29165,7 +29197,8 @@ function gitDeps(root) {
   return {
     listChanged: (base, head) => listChanged(root, base, head),
     readAt: (rev, file) => rev === "worktree" ? readWorktree(root, file) : showFile(root, rev, file),
-    listAll: (rev) => listFiles(root, rev)
+    listAll: (rev) => listFiles(root, rev),
+    readOrgPolicy: (file) => readWorktree(root, file)
   };
 }
 var MAX_BUFFER, FETCH_TIMEOUT_MS, STATUS;
@@ -29249,6 +29282,7 @@ async function buildRequest(v, positionals, io) {
   }
   if (positionals.length > 0) request.paths = positionals.map((p) => repoPath2(root, io.cwd, p));
   if (v.policy !== void 0) request.policyPath = repoPath2(root, io.cwd, v.policy);
+  if (v["org-policy"] !== void 0) request.orgPolicyPath = repoPath2(root, io.cwd, v["org-policy"]);
   return { request, deps: { ...gitDeps(root), ...evaluate ? { evaluate } : {} } };
 }
 async function writeOut(io, file, text2) {
@@ -29305,6 +29339,8 @@ Revisions:
 Policy:
   --policy FILE          the policy file (default .netbrace.yaml at the repository root;
                          without one the built-in policy applies)
+  --org-policy FILE      the organisation's policy (e.g. a second checkout) that the
+                         repository's policy must inherit and may only tighten
   --policy-source SIDE   base (default): read the policy at the base, so a change cannot
                          loosen the rules that judge it; head: the policy of the head
 
@@ -29339,6 +29375,7 @@ Exit codes:
       head: { type: "string" },
       worktree: { type: "boolean" },
       policy: { type: "string" },
+      "org-policy": { type: "string" },
       "policy-source": { type: "string" },
       seed: { type: "string" },
       threads: { type: "string" },

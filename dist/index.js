@@ -48028,12 +48028,37 @@ async function loadPolicyAt(entry, read) {
   }
   throw new PolicyError("the policy inherits too many files", { file: entry }, "keep the chain of inherits short");
 }
+function orgFolder(orgPath) {
+  const i = orgPath.lastIndexOf("/");
+  return i < 0 ? "" : orgPath.slice(0, i + 1);
+}
+function isOrgFile(request2, p) {
+  const org = request2.orgPolicyPath;
+  if (org === void 0) return false;
+  const folder = orgFolder(org);
+  return p === org || folder !== "" && p.startsWith(folder);
+}
+function requireOrgPolicy(request2, entry, policy) {
+  const org = request2.orgPolicyPath;
+  if (org === void 0 || entry === org || policy.files.includes(org)) return;
+  throw new PolicyError(
+    `${entry} does not inherit the organisation policy ${org}`,
+    { file: entry, line: 1, column: 1 },
+    `add "inherits: ${org}" (or inherit a file that inherits it); a team policy may only tighten the organisation's floors`,
+    [{ file: org, line: 1, column: 1, message: "the organisation policy every team policy must inherit" }]
+  );
+}
 async function choosePolicy(request2, deps, base, head) {
   const path3 = request2.policyPath ?? DEFAULT_POLICY_PATH;
   const explicit = request2.policyPath !== void 0;
   const trusted = request2.policySource === "base" && base !== void 0 ? base : head;
   const other = trusted === head ? base : head;
-  const readTrusted = async (p) => deps.readAt(trusted, p);
+  const readOrg = async (p) => {
+    if (!deps.readOrgPolicy) throw new UsageError(`the organisation policy ${p} cannot be read here`, "give the path of its checkout");
+    return deps.readOrgPolicy(p);
+  };
+  const readAtRev = (rev) => async (p) => isOrgFile(request2, p) ? readOrg(p) : deps.readAt(rev, p);
+  const readTrusted = readAtRev(trusted);
   const entryText = await readTrusted(path3);
   const otherText = other !== void 0 ? await deps.readAt(other, path3) : null;
   if (entryText === null) {
@@ -48053,19 +48078,26 @@ async function choosePolicy(request2, deps, base, head) {
     if (explicit) {
       throw new UsageError(`the policy file ${path3} does not exist${trusted === "worktree" ? "" : ` at ${trusted}`}`, 'check --policy, or run "netbrace init"');
     }
+    if (request2.orgPolicyPath !== void 0) {
+      const org = request2.orgPolicyPath;
+      const { policy: policy2 } = await loadPolicyAt(org, readOrg);
+      return { policy: policy2, info: { source: "file", path: org, files: policy2.files, note: `the repository has no policy; the organisation policy ${org} applies` } };
+    }
     return { policy: builtinPolicy(), info: { source: "builtin", revision: trusted } };
   }
   const { policy, texts } = await loadPolicyAt(path3, readTrusted);
+  requireOrgPolicy(request2, path3, policy);
   const info2 = { source: "file", path: path3, revision: trusted, files: policy.files };
   if (other !== void 0) {
     let changed = false;
-    for (const [p, text2] of texts) if (await deps.readAt(other, p) !== text2) changed = true;
+    for (const [p, text2] of texts) if (!isOrgFile(request2, p) && await deps.readAt(other, p) !== text2) changed = true;
     if (changed) {
       info2.changed = true;
       if (trusted === base) {
         let verdict = "it applies once merged";
         try {
-          await loadPolicyAt(path3, async (p) => deps.readAt(other, p));
+          const proposed = await loadPolicyAt(path3, readAtRev(other));
+          requireOrgPolicy(request2, path3, proposed.policy);
         } catch (e) {
           if (!isNetbraceError(e)) throw e;
           verdict = `the proposed version has an error: ${e.format().split("\n")[0]}`;
@@ -53729,6 +53761,7 @@ function readInputs(env) {
   const category = getInput(env, "sarif-category") || (commentKey === "default" ? "netbrace" : `netbrace-${commentKey}`);
   return {
     policy: repositoryInput(relativePath(env, "policy", ""), "policy"),
+    orgPolicy: repositoryInput(relativePath(env, "org-policy", ""), "org-policy"),
     policySource: oneOf(env, "policy-source", ["base", "head"], "base"),
     token: getInput(env, "token"),
     mode: oneOf(env, "mode", ["block", "inform"], "block"),
@@ -53972,6 +54005,7 @@ async function run(env, deps) {
         ...head ? { head } : { worktree: true },
         ...paths ? { paths } : {},
         ...inputs.policy ? { policyPath: inputs.policy } : {},
+        ...inputs.orgPolicy ? { orgPolicyPath: inputs.orgPolicy } : {},
         policySource: inputs.policySource,
         mode: inputs.mode,
         ...inputs.seed !== void 0 ? { seed: inputs.seed } : {},
@@ -54253,7 +54287,8 @@ function gitDeps(root) {
   return {
     listChanged: (base, head) => listChanged(root, base, head),
     readAt: (rev, file) => rev === "worktree" ? readWorktree(root, file) : showFile(root, rev, file),
-    listAll: (rev) => listFiles(root, rev)
+    listAll: (rev) => listFiles(root, rev),
+    readOrgPolicy: (file) => readWorktree(root, file)
   };
 }
 

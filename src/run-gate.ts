@@ -50,6 +50,8 @@ export interface GateDeps {
   readAt(rev: Revision, path: string): MaybePromise<string | null>;
   /** Every file at a revision (for scheduled runs over all designs). */
   listAll(rev: Revision): MaybePromise<string[]>;
+  /** A file of the organisation policy's folder (request.orgPolicyPath), outside the history. */
+  readOrgPolicy?: (path: string) => MaybePromise<string | null>;
   /** The envelope engine; defaults to evaluateDesign on this thread. */
   evaluate?: (g: CompactGraph, spec: EvaluationSpec, threads?: number) => MaybePromise<DesignEvaluation>;
 }
@@ -67,6 +69,12 @@ export interface GateRequest {
   policyPath?: string;
   /** Where the policy is read: the base (trusted, the default) or the head. */
   policySource: 'base' | 'head';
+  /**
+   * The organisation's policy, which the repository's policy must inherit (and may only
+   * tighten): its path as the repository's policy names it in `inherits`. Its files are read
+   * with `GateDeps.readOrgPolicy` (a second checkout), never from the change under review.
+   */
+  orgPolicyPath?: string;
   mode: 'block' | 'inform';
   /** Overrides the policy's seed. */
   seed?: number;
@@ -131,12 +139,42 @@ interface PolicyChoice {
   info: Report['policy'];
 }
 
+/** The folder of the organisation policy: its files come from the second checkout. */
+function orgFolder(orgPath: string): string {
+  const i = orgPath.lastIndexOf('/');
+  return i < 0 ? '' : orgPath.slice(0, i + 1);
+}
+
+function isOrgFile(request: GateRequest, p: string): boolean {
+  const org = request.orgPolicyPath;
+  if (org === undefined) return false;
+  const folder = orgFolder(org);
+  return p === org || (folder !== '' && p.startsWith(folder));
+}
+
+/** The repository's policy must inherit the organisation's: else a located error naming both. */
+function requireOrgPolicy(request: GateRequest, entry: string, policy: Policy): void {
+  const org = request.orgPolicyPath;
+  if (org === undefined || entry === org || policy.files.includes(org)) return;
+  throw new PolicyError(
+    `${entry} does not inherit the organisation policy ${org}`,
+    { file: entry, line: 1, column: 1 },
+    `add "inherits: ${org}" (or inherit a file that inherits it); a team policy may only tighten the organisation's floors`,
+    [{ file: org, line: 1, column: 1, message: 'the organisation policy every team policy must inherit' }],
+  );
+}
+
 async function choosePolicy(request: GateRequest, deps: GateDeps, base: Revision | undefined, head: Revision): Promise<PolicyChoice> {
   const path = request.policyPath ?? DEFAULT_POLICY_PATH;
   const explicit = request.policyPath !== undefined;
   const trusted = request.policySource === 'base' && base !== undefined ? base : head;
   const other = trusted === head ? base : head;
-  const readTrusted = async (p: string) => deps.readAt(trusted, p);
+  const readOrg = async (p: string): Promise<string | null> => {
+    if (!deps.readOrgPolicy) throw new UsageError(`the organisation policy ${p} cannot be read here`, 'give the path of its checkout');
+    return deps.readOrgPolicy(p);
+  };
+  const readAtRev = (rev: Revision) => async (p: string) => (isOrgFile(request, p) ? readOrg(p) : deps.readAt(rev, p));
+  const readTrusted = readAtRev(trusted);
   const entryText = await readTrusted(path);
   const otherText = other !== undefined ? await deps.readAt(other, path) : null;
 
@@ -157,20 +195,28 @@ async function choosePolicy(request: GateRequest, deps: GateDeps, base: Revision
     if (explicit) {
       throw new UsageError(`the policy file ${path} does not exist${trusted === 'worktree' ? '' : ` at ${trusted}`}`, 'check --policy, or run "netbrace init"');
     }
+    if (request.orgPolicyPath !== undefined) {
+      // No policy of its own: the organisation's applies as it is.
+      const org = request.orgPolicyPath;
+      const { policy } = await loadPolicyAt(org, readOrg);
+      return { policy, info: { source: 'file', path: org, files: policy.files, note: `the repository has no policy; the organisation policy ${org} applies` } };
+    }
     return { policy: builtinPolicy(), info: { source: 'builtin', revision: trusted } };
   }
 
   const { policy, texts } = await loadPolicyAt(path, readTrusted);
+  requireOrgPolicy(request, path, policy);
   const info: Report['policy'] = { source: 'file', path, revision: trusted, files: policy.files };
   if (other !== undefined) {
     let changed = false;
-    for (const [p, text] of texts) if ((await deps.readAt(other, p)) !== text) changed = true;
+    for (const [p, text] of texts) if (!isOrgFile(request, p) && (await deps.readAt(other, p)) !== text) changed = true;
     if (changed) {
       info.changed = true;
       if (trusted === base) {
         let verdict = 'it applies once merged';
         try {
-          await loadPolicyAt(path, async (p) => deps.readAt(other, p));
+          const proposed = await loadPolicyAt(path, readAtRev(other));
+          requireOrgPolicy(request, path, proposed.policy);
         } catch (e) {
           if (!isNetbraceError(e)) throw e;
           verdict = `the proposed version has an error: ${e.format().split('\n')[0]}`;

@@ -19,6 +19,8 @@ export interface GateDeps {
     readAt(rev: Revision, path: string): MaybePromise<string | null>;
     /** Every file at a revision (for scheduled runs over all designs). */
     listAll(rev: Revision): MaybePromise<string[]>;
+    /** A file of the organisation policy's folder (request.orgPolicyPath), outside the history. */
+    readOrgPolicy?: (path: string) => MaybePromise<string | null>;
     /** The envelope engine; defaults to evaluateDesign on this thread. */
     evaluate?: (g: CompactGraph, spec: EvaluationSpec, threads?: number) => MaybePromise<DesignEvaluation>;
 }
@@ -35,6 +37,12 @@ export interface GateRequest {
     policyPath?: string;
     /** Where the policy is read: the base (trusted, the default) or the head. */
     policySource: 'base' | 'head';
+    /**
+     * The organisation's policy, which the repository's policy must inherit (and may only
+     * tighten): its path as the repository's policy names it in `inherits`. Its files are read
+     * with `GateDeps.readOrgPolicy` (a second checkout), never from the change under review.
+     */
+    orgPolicyPath?: string;
     mode: 'block' | 'inform';
     /** Overrides the policy's seed. */
     seed?: number;

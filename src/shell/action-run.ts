@@ -86,6 +86,8 @@ export type CommentMode = 'every-run' | 'when-changed' | 'when-failing' | 'off';
 
 export interface ActionInputs {
   policy: string;
+  /** The organisation policy (a second checkout) the repository's policy must inherit; '' for none. */
+  orgPolicy: string;
   policySource: 'base' | 'head';
   token: string;
   mode: 'block' | 'inform';
@@ -164,6 +166,7 @@ export function readInputs(env: Env): ActionInputs {
   const category = getInput(env, 'sarif-category') || (commentKey === 'default' ? 'netbrace' : `netbrace-${commentKey}`);
   return {
     policy: repositoryInput(relativePath(env, 'policy', ''), 'policy'),
+    orgPolicy: repositoryInput(relativePath(env, 'org-policy', ''), 'org-policy'),
     policySource: oneOf(env, 'policy-source', ['base', 'head'] as const, 'base'),
     token: getInput(env, 'token'),
     mode: oneOf(env, 'mode', ['block', 'inform'] as const, 'block'),
@@ -471,6 +474,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
         ...(head ? { head } : { worktree: true }),
         ...(paths ? { paths } : {}),
         ...(inputs.policy ? { policyPath: inputs.policy } : {}),
+        ...(inputs.orgPolicy ? { orgPolicyPath: inputs.orgPolicy } : {}),
         policySource: inputs.policySource,
         mode: inputs.mode,
         ...(inputs.seed !== undefined ? { seed: inputs.seed } : {}),

@@ -179,11 +179,13 @@ export async function listFiles(cwd: string, rev: Revision): Promise<string[]> {
   return [...new Set(all.filter((f) => !deleted.has(f)))].sort();
 }
 
-/** The gate's readers for the repository at `root` (its top-level directory). */
-export function gitDeps(root: string): Pick<GateDeps, 'listChanged' | 'readAt' | 'listAll'> {
+/** The gate's readers for the repository at `root` (its top-level directory). The
+ *  organisation policy comes from disk (a second checkout inside the repository's folder). */
+export function gitDeps(root: string): Pick<GateDeps, 'listChanged' | 'readAt' | 'listAll' | 'readOrgPolicy'> {
   return {
     listChanged: (base, head) => listChanged(root, base, head),
     readAt: (rev, file) => (rev === 'worktree' ? readWorktree(root, file) : showFile(root, rev, file)),
     listAll: (rev) => listFiles(root, rev),
+    readOrgPolicy: (file) => readWorktree(root, file),
   };
 }

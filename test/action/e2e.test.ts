@@ -4,7 +4,7 @@
 // inform, fork, shallow clone, API down, rate limit, API hanging, parts joined, push, schedule,
 // nothing changed.
 
-import { mkdtempSync, readFileSync, readdirSync, rmSync, existsSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync, existsSync, writeFileSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
@@ -394,6 +394,37 @@ describe('errors', () => {
     expect(onPolicy).toHaveLength(1);
     expect(Number(onPolicy[0].props.line)).toBe(POLICY.split('\n').findIndex((l) => l.includes('realizations')) + 1);
     expect(r.stderr).not.toMatch(/at .*\.js:\d+/); // no stack trace
+  }, 30_000);
+});
+
+describe('the organisation policy from a second checkout', () => {
+  // The organisation's policy: the tests' policy plus an N−1 floor of its own.
+  const ORG_TEXT = POLICY.replace('    challenge: node-failures\n', '    challenge: node-failures\n  - kind: n-1\n    element: link\n    min: 0.2\n');
+  function withOrg(ws: string): void {
+    mkdirSync(path.join(ws, 'org-policy'), { recursive: true });
+    writeFileSync(path.join(ws, 'org-policy', 'org.yaml'), ORG_TEXT);
+  }
+
+  it('a team policy that does not inherit it fails the step, naming both files', async () => {
+    const ws = checkout(scenario.fail, { shallow: false });
+    withOrg(ws);
+    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ 'org-policy': 'org-policy/org.yaml' }));
+    expect(r.code).not.toBe(0);
+    expect(failedMessages(r)[0]).toContain('.netbrace.yaml does not inherit the organisation policy org-policy/org.yaml');
+  });
+
+  it('a team policy that inherits it is judged under the organisation\u2019s floor too', async () => {
+    const author = path.join(work, 'author');
+    git(work, 'clone', '-q', `file://${scenario.origin}`, author);
+    const base = commit(author, 'inherit the organisation policy', { '.netbrace.yaml': 'inherits: org-policy/org.yaml\nrequirements:\n  - kind: no-new-spof\n' });
+    const head = commit(author, 'chain', { [DESIGN]: ring([], CHAIN_DROP) });
+    withOrg(author);
+    const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ 'org-policy': 'org-policy/org.yaml' }));
+    expect(r.code, r.stdout + r.stderr).not.toBe(2);
+    expect(r.outputs.report, r.stdout + r.stderr).toBeTruthy();
+    const report = JSON.parse(readFileSync(path.join(author, r.outputs.report), 'utf8')) as { policy: { files: string[] }; files: { requirements: { id: string; threshold: number | null }[] }[] };
+    expect(report.policy.files).toEqual(['.netbrace.yaml', 'org-policy/org.yaml']);
+    expect(report.files[0].requirements.some((q) => q.id.startsWith('n-1') && q.threshold === 0.2)).toBe(true);
   }, 30_000);
 });
 

@@ -33,6 +33,8 @@ Revisions:
 Policy:
   --policy FILE          the policy file (default .netbrace.yaml at the repository root;
                          without one the built-in policy applies)
+  --org-policy FILE      the organisation's policy (e.g. a second checkout) that the
+                         repository's policy must inherit and may only tighten
   --policy-source SIDE   base (default): read the policy at the base, so a change cannot
                          loosen the rules that judge it; head: the policy of the head
 
@@ -68,6 +70,7 @@ const OPTIONS = {
   head: { type: 'string' },
   worktree: { type: 'boolean' },
   policy: { type: 'string' },
+  'org-policy': { type: 'string' },
   'policy-source': { type: 'string' },
   seed: { type: 'string' },
   threads: { type: 'string' },
@@ -159,6 +162,7 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
   }
   if (positionals.length > 0) request.paths = positionals.map((p) => repoPath(root, io.cwd, p));
   if (v.policy !== undefined) request.policyPath = repoPath(root, io.cwd, v.policy);
+  if (v['org-policy'] !== undefined) request.orgPolicyPath = repoPath(root, io.cwd, v['org-policy']);
   return { request, deps: { ...gitDeps(root), ...(evaluate ? { evaluate } : {}) } };
 }
 
