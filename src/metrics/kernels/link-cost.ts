@@ -6,6 +6,8 @@
 
 import type { CompactGraph } from '../../graph/compact.js';
 
+export { greatCircleKm } from '../../topology/geodesy.js';
+
 export interface LinkCost {
   kind: 'latency' | 'length' | 'weight';
   /** Unit of the cost, for reports. */
@@ -29,15 +31,6 @@ export function chooseLinkCost(g: CompactGraph): LinkCost | null {
     return { kind, unit, values: values!, min };
   };
   return pick('latency', 'ms', g.latency) ?? pick('length', 'km', g.length) ?? pick('weight', '', g.weight);
-}
-
-/** Great-circle distance in km between two points given in degrees (haversine, mean Earth radius 6,371.0088 km, IUGG). */
-export function greatCircleKm(lat1: number, lon1: number, lat2: number, lon2: number): number {
-  const rad = Math.PI / 180;
-  const dLat = (lat2 - lat1) * rad;
-  const dLon = (lon2 - lon1) * rad;
-  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
-  return 2 * 6371.0088 * Math.asin(Math.min(1, Math.sqrt(a)));
 }
 
 /** One-way propagation delay of light in optical fibre, ms per km (≈ c / 1.47; common practice). */
