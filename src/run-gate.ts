@@ -295,14 +295,13 @@ function problemOf(e: NetbraceError): NonNullable<CompareInput['headError']> {
 
 /**
  * A file's text at a revision; null when absent. A file that cannot be read as text (not UTF-8,
- * decode.ts) or is over the size limit is that file's located problem, so the other files are
- * still judged.
+ * decode.ts) is that file's located problem, so the other files are still judged.
  */
 async function readSide(deps: GateDeps, rev: Revision, path: string): Promise<string | null | { error: NonNullable<CompareInput['headError']> }> {
   try {
     return await deps.readAt(rev, path);
   } catch (e) {
-    if (isNetbraceError(e) && (e.kind === 'design' || e.kind === 'limit')) return { error: problemOf(e) };
+    if (e instanceof EncodingError) return { error: problemOf(e) };
     throw e;
   }
 }
