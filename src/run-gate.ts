@@ -15,7 +15,8 @@
 // Configuration and usage problems are thrown (PolicyError, UsageError, GitError: exit 2);
 // a failed gate is a result (exit 1).
 
-import { isNetbraceError, PolicyError, UsageError } from './errors.js';
+import { EncodingError } from './decode.js';
+import { isNetbraceError, PolicyError, UsageError, type NetbraceError } from './errors.js';
 import { evaluateDesign, type DesignEvaluation, type EvaluationSpec } from './envelope/evaluate.js';
 import type { ChallengeParams } from './envelope/types.js';
 import { compileTopology, type CompactGraph } from './graph/compact.js';
@@ -119,16 +120,25 @@ interface LoadedPolicy {
 /** Load a policy through an async reader: the loader is pure and synchronous, so files are fetched on demand and the load retried. */
 async function loadPolicyAt(entry: string, read: (path: string) => Promise<string | null>): Promise<LoadedPolicy> {
   const texts = new Map<string, string | null>();
+  // A file that is not text is an error of the policy that names it (readChain says where).
+  const unreadable = new Map<string, EncodingError>();
   for (let attempt = 0; attempt < 64; attempt++) {
     try {
       const policy = loadPolicy(entry, (p) => {
+        const bad = unreadable.get(p);
+        if (bad) throw bad;
         if (!texts.has(p)) throw new NeedFile(p);
         return texts.get(p)!;
       });
       return { policy, texts };
     } catch (e) {
       if (!(e instanceof NeedFile)) throw e;
-      texts.set(e.path, await read(e.path));
+      try {
+        texts.set(e.path, await read(e.path));
+      } catch (r) {
+        if (!(r instanceof EncodingError)) throw r;
+        unreadable.set(e.path, r);
+      }
     }
   }
   throw new PolicyError('the policy inherits too many files', { file: entry }, 'keep the chain of inherits short');
@@ -175,11 +185,21 @@ async function choosePolicy(request: GateRequest, deps: GateDeps, base: Revision
   };
   const readAtRev = (rev: Revision) => async (p: string) => (isOrgFile(request, p) ? readOrg(p) : deps.readAt(rev, p));
   const readTrusted = readAtRev(trusted);
-  const entryText = await readTrusted(path);
-  const otherText = other !== undefined ? await deps.readAt(other, path) : null;
+  // Whether the entry exists decides between the file and the built-in policy; one that is not
+  // text exists (loadPolicyAt reports it).
+  const exists = async (rev: Revision, p: string) => {
+    try {
+      return (await deps.readAt(rev, p)) !== null;
+    } catch (e) {
+      if (e instanceof EncodingError) return true;
+      throw e;
+    }
+  };
+  const entryExists = await exists(trusted, path);
+  const otherExists = other !== undefined && (await exists(other, path));
 
-  if (entryText === null) {
-    if (otherText !== null && other !== undefined) {
+  if (!entryExists) {
+    if (otherExists) {
       const p = builtinPolicy();
       return {
         policy: p,
@@ -209,7 +229,7 @@ async function choosePolicy(request: GateRequest, deps: GateDeps, base: Revision
   const info: Report['policy'] = { source: 'file', path, revision: trusted, files: policy.files };
   if (other !== undefined) {
     let changed = false;
-    for (const [p, text] of texts) if (!isOrgFile(request, p) && (await deps.readAt(other, p)) !== text) changed = true;
+    for (const [p, text] of texts) if (!isOrgFile(request, p) && (await readSide(deps, other, p)) !== text) changed = true;
     if (changed) {
       info.changed = true;
       if (trusted === base) {
@@ -244,8 +264,8 @@ async function candidates(request: GateRequest, deps: GateDeps, policy: Policy, 
         list.push({ path, change: 'unchanged' });
         continue;
       }
-      const [h, b] = [await deps.readAt(head, path), await deps.readAt(base, path)];
-      const change: Candidate['change'] = h === null ? 'deleted' : b === null ? 'added' : h === b ? 'unchanged' : 'modified';
+      const [h, b] = [await readSide(deps, head, path), await readSide(deps, base, path)];
+      const change: Candidate['change'] = h === null ? 'deleted' : b === null ? 'added' : typeof h === 'string' && h === b ? 'unchanged' : 'modified';
       if (h === null && b === null) throw new UsageError(`${path} exists neither at ${head} nor at ${base}`, 'give paths relative to the repository root');
       list.push({ path, change });
     }
@@ -314,13 +334,31 @@ function joinEvaluations(parts: DesignEvaluation[]): DesignEvaluation {
   return { evaluation, samples, labels };
 }
 
+/** A design error as the located problem the report shows. */
+function problemOf(e: NetbraceError): NonNullable<CompareInput['headError']> {
+  return { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column };
+}
+
+/**
+ * A file's text at a revision; null when absent. A file that cannot be read as text (not UTF-8,
+ * decode.ts) is that file's located problem, so the other files are still judged.
+ */
+async function readSide(deps: GateDeps, rev: Revision, path: string): Promise<string | null | { error: NonNullable<CompareInput['headError']> }> {
+  try {
+    return await deps.readAt(rev, path);
+  } catch (e) {
+    if (e instanceof EncodingError) return { error: problemOf(e) };
+    throw e;
+  }
+}
+
 /** Parse and compile one side; a design error becomes the located problem the report shows. */
 function compileText(text: string, path: string, fp: FilePolicy): { graph: CompactGraph } | { error: NonNullable<CompareInput['headError']> } {
   try {
     return { graph: compileTopology(parseDesign(text, path, fp.format ? { format: fp.format } : {})) };
   } catch (e) {
     if (isNetbraceError(e) && (e.kind === 'design' || e.kind === 'limit' || e.kind === 'usage')) {
-      return { error: { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column } };
+      return { error: problemOf(e) };
     }
     throw e;
   }
@@ -375,22 +413,22 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
     if (c.previousPath !== undefined) input.previousPath = c.previousPath;
     if (fp.format) input.format = fp.format;
     if (c.change !== 'deleted') {
-      const headText = await deps.readAt(head, c.path);
+      const headText = await readSide(deps, head, c.path);
       if (headText === null) {
         input.change = 'deleted';
       } else {
-        const h = compileText(headText, c.path, fp);
+        const h = typeof headText === 'string' ? compileText(headText, c.path, fp) : headText;
         if ('error' in h) input.headError = h.error;
         else {
           let baseGraph: CompactGraph | undefined;
           let same = false;
           if (!thresholdsOnly && c.change !== 'added') {
             const basePath = c.previousPath ?? c.path;
-            const baseText = await deps.readAt(base!, basePath);
+            const baseText = await readSide(deps, base!, basePath);
             if (baseText === headText) {
               same = true; // identical text: the same evaluation, delta exactly 0
             } else if (baseText !== null) {
-              const b = compileText(baseText, basePath, fp);
+              const b = typeof baseText === 'string' ? compileText(baseText, basePath, fp) : baseText;
               if ('error' in b) input.baseError = b.error;
               else baseGraph = b.graph;
             }

@@ -8,6 +8,7 @@ import { PolicyError } from '../errors.js';
 import type { ChallengeName, ChallengeParams, RValueSpec } from '../envelope/types.js';
 import type { MetricId } from '../metrics/types.js';
 import type { DesignFormat } from '../topology/model.js';
+import { fmt, nonNormal } from '../topology/quantities.js';
 import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
 import { DEFAULT_ERROR_MULTIPLE, REGIONAL_UNTIL_KM } from './defaults.js';
 import { requirementId } from './requirement-id.js';
@@ -29,6 +30,33 @@ import type {
   Where,
 } from './types.js';
 import { type Segment, YamlSource } from './yaml-source.js';
+
+/**
+ * Range of a metric weight in the r-value. Only ratios matter; a million to one is already more
+ * than any mix means, and the bounds keep the weighted sum far from overflow (a weight of 1e308
+ * made the sum Infinity and R 0 everywhere) and from subnormal products.
+ */
+export const MIN_METRIC_WEIGHT = 1e-6;
+export const MAX_METRIC_WEIGHT = 1e6;
+
+/** The first number of a policy that is NaN, infinite or subnormal, with where it is. */
+function firstNonNormal(v: unknown, path: Segment[]): { path: Segment[]; why: string } | undefined {
+  // One path array, extended and shortened in place: a large design has many numbers.
+  if (typeof v === 'number') {
+    const why = nonNormal(v);
+    return why ? { path: [...path], why } : undefined;
+  }
+  if (v === null || typeof v !== 'object') return undefined;
+  const entries: [string | number, unknown][] = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
+  for (const [k, x] of entries) {
+    if (typeof x !== 'number' && (x === null || typeof x !== 'object')) continue;
+    path.push(k);
+    const found = firstNonNormal(x, path);
+    path.pop();
+    if (found) return found;
+  }
+  return undefined;
+}
 
 let validator: ValidateFunction | undefined;
 
@@ -300,6 +328,9 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   if (typeof data !== 'object' || data === null || Array.isArray(data)) {
     throw new PolicyError('the policy must be a mapping of keys (key: value lines)', src.where([]), 'see "netbrace init" for a starter file');
   }
+  // Before the schema, which would call .inf or 1e400 "not a number" without saying why.
+  const odd = firstNonNormal(data, []);
+  if (odd) throw new PolicyError(`${describe(odd.path)} ${odd.why}`, src.where(odd.path), 'write a plain decimal number');
   const v = validate(data);
   if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
 
@@ -324,6 +355,15 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   if (raw.seed !== undefined) policy.seed = { value: raw.seed as number, where: src.where(['seed']) };
   if (raw['r-value'] !== undefined) {
     const r = raw['r-value'] as Obj;
+    for (const [id, weight] of Object.entries(r.metrics as Record<string, number>)) {
+      if (weight < MIN_METRIC_WEIGHT || weight > MAX_METRIC_WEIGHT) {
+        throw new PolicyError(
+          `the weight of ${id} in r-value.metrics is ${fmt(weight)}, outside ${fmt(MIN_METRIC_WEIGHT)} to ${fmt(MAX_METRIC_WEIGHT)}`,
+          src.where(['r-value', 'metrics', id]),
+          'weights only set the metrics against each other (R is their weighted mean): 1 and 2 say the same as 1000 and 2000',
+        );
+      }
+    }
     const spec: RValueSpec = {
       metrics: Object.entries(r.metrics as Record<string, number>).map(([id, weight]) => ({ id: id as MetricId, weight })),
       combine: (r.combine as 'mean' | 'min' | undefined) ?? 'mean',

@@ -6,6 +6,7 @@
 // simply outvoted (the tighter one holds). Pure: files are read through the `read` callback.
 
 import picomatch from 'picomatch';
+import { EncodingError } from '../decode.js';
 import { PolicyError } from '../errors.js';
 import type { RValueSpec } from '../envelope/types.js';
 import { isMetricId, metrics as knownMetrics } from '../metrics/registry.js';
@@ -317,7 +318,14 @@ function readChain(entry: string, read: ReadFile): PolicyFile[] {
       throw new PolicyError(`"inherits" goes round in a circle back to ${path}`, from ?? { file: path }, 'remove one of the inherits lines');
     }
     seen.add(path);
-    const text = read(path);
+    let text: string | null;
+    try {
+      text = read(path);
+    } catch (e) {
+      // Bytes that are not text (decode.ts): the same located message, as a policy problem.
+      if (e instanceof EncodingError) throw new PolicyError(e.message, { file: e.file, line: e.line, column: e.column }, e.hint);
+      throw e;
+    }
     if (text === null) {
       if (from) throw new PolicyError(`the base policy ${path} does not exist`, from, 'check the path; it is relative to this file');
       throw new PolicyError(`the policy file ${path} does not exist`, { file: path }, 'run "netbrace init" to write one');

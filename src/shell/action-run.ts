@@ -10,6 +10,7 @@ import { execFileSync } from 'node:child_process';
 import { lstatSync, readFileSync, readdirSync, statSync, writeFileSync, appendFileSync, realpathSync } from 'node:fs';
 import path from 'node:path';
 import * as core from '@actions/core';
+import { decodeText } from '../decode.js';
 import { formatDiagnostic, isNetbraceError } from '../errors.js';
 import type { GateRequest, GateResult } from '../run-gate.js';
 import { planAnnotations, type Annotation } from '../report/annotations.js';
@@ -598,7 +599,7 @@ async function trustedPullRequest(deps: ActionDeps, env: Env, inputs: ActionInpu
 function designsAmong(root: string, head: string, policyPath: string, changed: string[]): number {
   const read = (p: string): string | null => {
     try {
-      return execFileSync('git', ['show', '--no-textconv', '--end-of-options', `${head}:${p}`], { cwd: root, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024, stdio: ['ignore', 'pipe', 'ignore'] });
+      return decodeText(execFileSync('git', ['show', '--no-textconv', '--end-of-options', `${head}:${p}`], { cwd: root, maxBuffer: 64 * 1024 * 1024, stdio: ['ignore', 'pipe', 'ignore'] }), p);
     } catch {
       return null;
     }

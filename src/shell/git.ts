@@ -4,6 +4,7 @@
 // read directly from disk, never outside the repository root.
 
 import { execFile } from 'node:child_process';
+import { decodeText } from '../decode.js';
 import { GitError, UsageError } from '../errors.js';
 import type { ChangedFile, GateDeps, Revision } from '../run-gate.js';
 import { readInside, tooLarge } from './workspace.js';
@@ -13,13 +14,28 @@ const MAX_BUFFER = 64 * 1024 * 1024;
 /** A fetch of one commit; anything longer is a network problem, not a large repository. */
 const FETCH_TIMEOUT_MS = 120_000;
 
-export interface GitOutput {
+export interface GitOutput<Stdout = string> {
   code: number;
-  stdout: string;
+  stdout: Stdout;
   stderr: string;
 }
 
 export function runGit(cwd: string, args: readonly string[], timeout = 0): Promise<GitOutput> {
+  return execGit(cwd, args, timeout, 'utf8');
+}
+
+/** runGit with stdout as bytes: file contents, which decode.ts turns into text (or refuses). */
+function runGitBytes(cwd: string, args: readonly string[]): Promise<GitOutput<Uint8Array>> {
+  return execGit(cwd, args, 0, 'buffer');
+}
+
+function execGit<E extends 'utf8' | 'buffer'>(
+  cwd: string,
+  args: readonly string[],
+  timeout: number,
+  encoding: E,
+): Promise<GitOutput<E extends 'utf8' ? string : Uint8Array>> {
+  type Out = GitOutput<E extends 'utf8' ? string : Uint8Array>;
   return new Promise((resolve, reject) => {
     execFile(
       'git',
@@ -28,7 +44,7 @@ export function runGit(cwd: string, args: readonly string[], timeout = 0): Promi
         cwd,
         maxBuffer: MAX_BUFFER,
         timeout,
-        encoding: 'utf8',
+        encoding,
         // Never prompt for credentials (a fetch in CI would hang); stable English messages.
         env: { ...process.env, GIT_TERMINAL_PROMPT: '0', LC_ALL: 'C' },
       },
@@ -39,20 +55,20 @@ export function runGit(cwd: string, args: readonly string[], timeout = 0): Promi
           reject(new GitError(code === 'ENOENT' ? 'git is not installed or not on PATH' : `git failed: ${error.message}`));
           return;
         }
-        resolve({ code: error ? ((error as { code?: number }).code ?? 1) : 0, stdout, stderr });
+        resolve({ code: error ? ((error as { code?: number }).code ?? 1) : 0, stdout, stderr: String(stderr) } as Out);
       },
     );
   });
 }
 
 /** git's own reason, in one line: its `fatal:` line when it has one (the first lines are often detail). */
-function gitReason(out: GitOutput): string {
+function gitReason(out: GitOutput<unknown>): string {
   const lines = out.stderr.trim().split('\n').filter((l) => l.trim() !== '');
   return lines.find((l) => l.startsWith('fatal:')) ?? lines[0] ?? `git exited with ${out.code}`;
 }
 
 /** A hint for failures that mean the clone itself is damaged. */
-function damageHint(out: GitOutput): string {
+function damageHint(out: GitOutput<unknown>): string {
   return /corrupt|unable to unpack|inflate|bad object|missing blob|missing tree/i.test(out.stderr)
     ? 'the clone is damaged (a git object cannot be read): run "git fsck", or clone the repository again'
     : '';
@@ -145,15 +161,15 @@ export async function listChanged(cwd: string, base: Revision, head: Revision): 
   return files;
 }
 
-/** A file at a revision; null when it does not exist there. */
+/** A file at a revision, decoded (decode.ts: EncodingError when it is not UTF-8); null when it does not exist there. */
 export async function showFile(cwd: string, rev: string, file: string): Promise<string | null> {
   const spec = `${checkRef(rev)}:${file}`;
-  const out = await runGit(cwd, ['show', '--no-textconv', '--end-of-options', spec]).catch((e: unknown) => {
+  const out = await runGitBytes(cwd, ['show', '--no-textconv', '--end-of-options', spec]).catch((e: unknown) => {
     // A blob over the output buffer: say which file, not what the buffer is called.
     if (e instanceof GitError && /maxBuffer/i.test(e.message)) throw tooLarge(file, undefined, MAX_BUFFER, rev.slice(0, 12));
     throw e;
   });
-  if (out.code === 0) return out.stdout;
+  if (out.code === 0) return decodeText(out.stdout, file);
   // Tell "no such file at this revision" from a clone that cannot read it: ask the tree, which
   // lists the file without reading its object. (`cat-file -e` fails for both, and a missing
   // object must not make a changed design look deleted.)

@@ -3,6 +3,7 @@
 
 import { readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
+import { decodeText } from '../decode.js';
 import { DesignError } from '../errors.js';
 import { DEFAULT_MAX_BYTES, type ParseOptions, type Topology } from '../topology/model.js';
 import { parseDesign, sizeError } from '../topology/parse.js';
@@ -25,7 +26,7 @@ export function readDesign(file: string, options: ReadDesignOptions = {}): Topol
     const stat = statSync(full);
     if (stat.isDirectory()) throw new DesignError('is a directory, not a design file', { file: shown }, 'name a design file inside it');
     if (stat.size > maxBytes) throw sizeError(shown, stat.size, maxBytes);
-    text = readFileSync(full, 'utf8');
+    text = decodeText(readFileSync(full), shown);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
     if (code === 'ENOENT') throw new DesignError('no such file', { file: shown }, 'check the path (it is read relative to the working directory)');

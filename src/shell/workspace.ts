@@ -12,6 +12,7 @@
 
 import { existsSync, lstatSync, mkdirSync, readFileSync, realpathSync, statSync } from 'node:fs';
 import path from 'node:path';
+import { decodeText } from '../decode.js';
 import { LimitError, UsageError } from '../errors.js';
 import { DEFAULT_MAX_BYTES } from '../topology/model.js';
 
@@ -132,7 +133,8 @@ export function tooLarge(file: string, bytes: number | undefined, maxBytes: numb
 }
 
 /**
- * A file of the tree at `root`, as text; null when it does not exist (or is a directory).
+ * A file of the tree at `root`, as text (decode.ts: EncodingError when it is not UTF-8); null
+ * when it does not exist (or is a directory).
  * Refuses (WorkspacePathError) a path outside `root`, lexically or through a link; refuses
  * (LimitError, from stat, before reading) a file over `maxBytes`.
  */
@@ -145,7 +147,7 @@ export function readInsideSync(root: string, file: string, maxBytes = DEFAULT_MA
     const st = statSync(real);
     if (st.isDirectory()) return null;
     if (st.size > maxBytes) throw tooLarge(file, st.size, maxBytes);
-    return readFileSync(real, 'utf8');
+    return decodeText(readFileSync(real), file);
   } catch (e) {
     if (absent(e)) return null;
     throw e;

@@ -5,6 +5,7 @@
 // LinkSpeedRaw (bit/s); other tools write lat/lon, x/y, weight, length, latency or delay.
 
 import type { SourcePos } from './model.js';
+import { nonNormal, quantityProblem } from './quantities.js';
 import type { LinkInput, NodeInput, TopologyBuilder } from './builder.js';
 
 const NODE_FIELDS: Readonly<Record<string, 'label' | 'kind' | 'lat' | 'lon' | 'x' | 'y' | 'hardened'>> = {
@@ -46,6 +47,16 @@ const LINK_FIELDS: Readonly<Record<string, 'length' | 'latency' | 'capacity' | '
   hardened: 'hardened',
 };
 
+/** Whether an attribute name is one the node mapping reads (not only keeps in attrs). */
+export function isNodeField(name: string): boolean {
+  return Object.hasOwn(NODE_FIELDS, name.toLowerCase());
+}
+
+/** Whether an attribute name is one the link mapping reads. */
+export function isLinkField(name: string): boolean {
+  return Object.hasOwn(LINK_FIELDS, name.toLowerCase());
+}
+
 /** What the attributes say about a node: every NodeInput field but its id and position. */
 export type MappedNode = Omit<NodeInput, 'id' | 'pos' | 'attrs'> & { attrs: Record<string, unknown> };
 
@@ -54,15 +65,24 @@ export type MappedLink = Pick<LinkInput, 'length' | 'latency' | 'capacity' | 'we
   attrs: Record<string, unknown>;
 };
 
-/** A finite number from a number or numeric string, else undefined. */
-export function toNumber(v: unknown): number | undefined {
-  if (typeof v === 'number') return Number.isFinite(v) ? v : undefined;
+const NUMERAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+
+/**
+ * The number a value is written as: a number, or a string that is a plain decimal numeral
+ * (however large or small: "1e999" is Infinity, which quantities.ts then refuses), else undefined.
+ */
+export function numeral(v: unknown): number | undefined {
+  if (typeof v === 'number') return v;
   if (typeof v !== 'string') return undefined;
   const s = v.trim();
-  if (s === '' || !/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(s)) return undefined;
+  return s !== '' && NUMERAL.test(s) ? Number(s) : undefined;
+}
+
+/** A finite number from a number or numeric string, else undefined. */
+export function toNumber(v: unknown): number | undefined {
+  const n = numeral(v);
   // "1e999" is well formed but overflows to Infinity: not a length anyone measured.
-  const n = Number(s);
-  return Number.isFinite(n) ? n : undefined;
+  return n !== undefined && Number.isFinite(n) ? n : undefined;
 }
 
 export function toFlag(v: unknown): boolean | undefined {
@@ -78,30 +98,55 @@ export function toFlag(v: unknown): boolean | undefined {
 const text = (v: unknown): string => (typeof v === 'string' ? v : String(v));
 
 /**
- * Map one node's raw attributes. `posOf(name)` gives where an attribute is written (for
- * warnings); coordinates out of range are dropped with a warning rather than refused,
- * since interchange files often carry drawing positions in x/y.
+ * Where an attribute is written and how: `pos` for messages, `text` the value as written when
+ * the reader has it (GML keeps `007` apart from `7`; a typed GraphML value its source text), so
+ * labels and risk group ids stay strings as written.
+ */
+export interface AttributeSource {
+  pos: (name: string) => SourcePos;
+  text?: (name: string) => string | undefined;
+}
+
+function sourceOf(where: AttributeSource | ((name: string) => SourcePos)): Required<AttributeSource> {
+  if (typeof where === 'function') return { pos: where, text: () => undefined };
+  return { pos: where.pos, text: where.text ?? (() => undefined) };
+}
+
+/**
+ * Map one node's raw attributes. `where` gives where (and how) an attribute is written;
+ * coordinates out of range are dropped with a warning rather than refused, since interchange
+ * files often carry drawing positions in x/y, but a coordinate no computation can use (NaN,
+ * infinite, subnormal) is refused. A `label` names the node; `name` does when there is no label.
  */
 export function mapNodeAttributes(
   raw: Readonly<Record<string, unknown>>,
   b: TopologyBuilder,
-  posOf: (name: string) => SourcePos,
+  where: AttributeSource | ((name: string) => SourcePos),
 ): MappedNode {
+  const src = sourceOf(where);
+  const posOf = src.pos;
+  const written = (name: string, value: unknown) => src.text(name) ?? text(value);
   const out: MappedNode = { attrs: {} };
+  // A `label` attribute names the node even when a `name` is there too (kept in attrs then).
+  const hasLabel = Object.keys(raw).some((k) => k.toLowerCase() === 'label');
   let x: [number, string] | undefined;
   let y: [number, string] | undefined;
   let lat: [number, string] | undefined;
   let lon: [number, string] | undefined;
   for (const [name, value] of Object.entries(raw)) {
     const field = NODE_FIELDS[name.toLowerCase()];
-    if (field === 'label') out.label = text(value);
-    else if (field === 'kind') out.kind = text(value);
+    if (field === 'label') {
+      if (hasLabel && name.toLowerCase() !== 'label') out.attrs[name] = value;
+      else out.label = written(name, value);
+    } else if (field === 'kind') out.kind = written(name, value);
     else if (field === 'hardened') {
       const f = toFlag(value);
       if (f === undefined) throw b.error(`"${name}" must be true/false or 1/0, not "${text(value)}"`, posOf(name));
       out.hardened = f;
     } else if (field === 'lat' || field === 'lon' || field === 'x' || field === 'y') {
-      const n = toNumber(value);
+      const n = numeral(value);
+      const bad = n === undefined ? undefined : nonNormal(n);
+      if (bad) throw b.error(`node coordinate "${name}" ${bad} ("${written(name, value)}")`, posOf(name), 'write a plain decimal number of degrees');
       if (n === undefined) {
         b.warn(`node coordinate "${name}" is not a number ("${text(value)}"); ignored`, posOf(name));
         out.attrs[name] = value;
@@ -138,12 +183,14 @@ export function mapNodeAttributes(
   return out;
 }
 
-/** Map one link's raw attributes; numeric fields must be non-negative numbers. */
+/** Map one link's raw attributes; numeric fields must be numbers in their range (quantities.ts). */
 export function mapLinkAttributes(
   raw: Readonly<Record<string, unknown>>,
   b: TopologyBuilder,
-  posOf: (name: string) => SourcePos,
+  where: AttributeSource | ((name: string) => SourcePos),
 ): MappedLink {
+  const src = sourceOf(where);
+  const posOf = src.pos;
   const out: MappedLink = { attrs: {} };
   for (const [name, value] of Object.entries(raw)) {
     const field = LINK_FIELDS[name.toLowerCase()];
@@ -152,7 +199,7 @@ export function mapLinkAttributes(
       continue;
     }
     if (field === 'riskGroups') {
-      out.riskGroups = text(value)
+      out.riskGroups = (src.text(name) ?? text(value))
         .split(';')
         .map((s) => s.trim())
         .filter((s) => s !== '');
@@ -165,15 +212,19 @@ export function mapLinkAttributes(
       continue;
     }
     if (typeof value === 'string' && value.trim() === '') continue; // an empty cell: unknown
-    const n = toNumber(value);
+    const n = numeral(value);
+    const as = src.text(name) ?? text(value);
     if (field === 'bitrate') {
-      // Informational; a malformed speed is kept as written rather than refused.
-      if (n !== undefined && n >= 0) out.capacity ??= n / 1e9;
+      // Informational; a malformed or out-of-range speed is kept as written rather than refused.
+      const gbps = n === undefined ? undefined : n / 1e9;
+      if (gbps !== undefined && quantityProblem('capacity', gbps) === undefined) out.capacity ??= gbps;
+      else b.warn(`link ${name} "${as}" is not a speed in bit/s that netbrace accepts; not read as the capacity`, posOf(name));
       out.attrs[name] = value;
       continue;
     }
-    if (n === undefined) throw b.error(`link ${name} must be a number, not "${text(value)}"`, posOf(name), 'write a plain decimal number');
-    if (n < 0) throw b.error(`link ${name} must not be negative (${n})`, posOf(name));
+    if (n === undefined) throw b.error(`link ${name} must be a number, not "${as}"`, posOf(name), 'write a plain decimal number');
+    const problem = quantityProblem(field, n, as);
+    if (problem) throw b.error(`link ${name} ${problem.message}`, posOf(name), problem.hint);
     if (field === 'capacity') out.capacity = n;
     else out[field] = n;
   }

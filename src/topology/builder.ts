@@ -1,7 +1,8 @@
 // The one place where every parser turns what it read into a Topology, so that all four
 // formats agree on the rules: ids are unique, link ends must exist, self-loops are dropped
 // with a warning, parallel links are kept (physical redundancy) with distinct stable keys,
-// and the element limit is applied as elements arrive rather than after the fact.
+// the arcs of a directed file pair up with their reverse arcs into one undirected link, and
+// the element limit is applied as elements arrive rather than after the fact.
 
 import { DesignError, LimitError, type Diagnostic } from '../errors.js';
 import { didYouMean } from './suggest.js';
@@ -46,6 +47,11 @@ export interface LinkInput {
   riskGroups?: string[];
   hardened?: boolean;
   attrs?: Record<string, unknown>;
+  /**
+   * A directed arc source → target (GraphML `directed`, GML `directed 1`). Links are
+   * undirected: an arc and a later arc the other way between the same nodes are one link.
+   */
+  arc?: boolean;
 }
 
 export interface BuilderOptions {
@@ -83,6 +89,10 @@ export class TopologyBuilder {
   private readonly riskGroups: RiskGroup[] = [];
   private readonly riskGroupPos = new Map<string, SourcePos>();
   private readonly demands: Demand[] = [];
+  /** Arcs not yet paired with a reverse arc, by `source\0target`, oldest first. */
+  private readonly openArcs = new Map<string, TopoLink[]>();
+  private directedAt: { pos: SourcePos; how: string } | undefined;
+  private mergedArcs = 0;
 
   constructor(file: string, format: DesignFormat, options: BuilderOptions = {}) {
     this.file = file;
@@ -163,7 +173,19 @@ export class TopologyBuilder {
     );
   }
 
-  /** Adds a link; returns false when it was dropped (a self-loop). */
+  /**
+   * Says the file declares direction (`how`, e.g. `edgedefault="directed"`), once; finish()
+   * warns that direction is ignored and how many reverse arcs were merged.
+   */
+  directed(pos: SourcePos, how: string): void {
+    this.directedAt ??= { pos, how };
+  }
+
+  /**
+   * Adds a link; returns false when it was dropped (a self-loop) or merged into the link of
+   * the reverse arc. Arcs pair up in file order, so the links between two nodes are as many
+   * as the arcs in the more frequent direction: u→v with v→u is one link, u→v twice is two.
+   */
   addLink(input: LinkInput): boolean {
     if (input.id !== undefined) this.checkId(input.id, 'a link id', input.pos);
     for (const g of input.riskGroups ?? []) this.checkId(g, 'a risk group id of a link', input.pos);
@@ -173,6 +195,14 @@ export class TopologyBuilder {
     if (input.source === input.target) {
       this.warn(`self-loop on node "${input.source}" dropped`, input.pos, 'a link from a node to itself adds no connectivity');
       return false;
+    }
+    if (input.arc) {
+      const reverse = this.openArcs.get(`${input.target}\u0000${input.source}`);
+      const partner = reverse?.shift();
+      if (partner) {
+        this.mergeArc(partner, input);
+        return false;
+      }
     }
     this.countElement(input.pos);
     const pairKey = input.source <= input.target ? `${input.source}\u0000${input.target}` : `${input.target}\u0000${input.source}`;
@@ -213,7 +243,32 @@ export class TopologyBuilder {
     if (input.capacity !== undefined) link.capacity = input.capacity;
     if (input.weight !== undefined) link.weight = input.weight;
     this.links.push(link);
+    if (input.arc) {
+      const key = `${input.source}\u0000${input.target}`;
+      const open = this.openArcs.get(key);
+      if (open) open.push(link);
+      else this.openArcs.set(key, [link]);
+    }
     return true;
+  }
+
+  /** The reverse arc joins its partner's link; values that differ are reported, the first kept. */
+  private mergeArc(link: TopoLink, arc: LinkInput): void {
+    this.mergedArcs++;
+    const differs: string[] = [];
+    for (const k of ['length', 'latency', 'capacity', 'weight'] as const) {
+      if (arc[k] !== link[k]) differs.push(`${k} ${link[k] ?? 'unset'} vs ${arc[k] ?? 'unset'}`);
+    }
+    if ((arc.hardened ?? false) !== link.hardened) differs.push(`hardened ${link.hardened} vs ${arc.hardened ?? false}`);
+    const groups = (g: readonly string[]) => [...new Set(g)].sort().join(';');
+    if (groups(arc.riskGroups ?? []) !== groups(link.riskGroups)) differs.push(`risk groups "${groups(link.riskGroups)}" vs "${groups(arc.riskGroups ?? [])}"`);
+    if (differs.length > 0) {
+      this.warn(
+        `the arc ${arc.source} → ${arc.target} is merged with the reverse arc on line ${link.pos.line}, which says otherwise (${differs.join(', ')}); the first arc's values are kept`,
+        arc.pos,
+        'give both directions the same values, or write one undirected link',
+      );
+    }
   }
 
   addRiskGroup(group: RiskGroup): void {
@@ -232,6 +287,18 @@ export class TopologyBuilder {
   }
 
   finish(extra: { name?: string; latencyBudget?: number; metadata?: Record<string, unknown> } = {}): Topology {
+    if (this.directedAt) {
+      const merged = this.mergedArcs;
+      this.warnings.unshift({
+        file: this.file,
+        line: this.directedAt.pos.line,
+        column: this.directedAt.pos.column,
+        severity: 'warning',
+        message:
+          `the graph is directed (${this.directedAt.how}); direction is ignored and links are read as undirected` +
+          (merged > 0 ? `: ${merged} pair${merged === 1 ? '' : 's'} of reverse arcs (u → v and v → u) merged into one link each` : ''),
+      });
+    }
     const t: Topology = {
       file: this.file,
       format: this.format,

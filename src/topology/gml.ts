@@ -1,11 +1,12 @@
 // GML (Himsholt, "GML: A portable Graph File Format", Universität Passau, 1997): a tree of
 // `key value` pairs where a value is an integer, a real, a "string" or a [ list ].
 // No library fits (we need every element's line and column), so this is a small tokenizer
-// and recursive-descent reader of our own. Directed graphs are read as undirected.
+// and recursive-descent reader of our own. Directed graphs are read as undirected (reverse
+// arcs merged, builder.ts); one flat graph per file: a second graph or a nested one is refused.
 
 import type { DesignFormat, SourcePos, Topology } from './model.js';
 import { TopologyBuilder, type BuilderOptions } from './builder.js';
-import { mapLinkAttributes, mapNodeAttributes } from './attributes.js';
+import { isLinkField, isNodeField, mapLinkAttributes, mapNodeAttributes } from './attributes.js';
 import { MAX_NESTING } from './nesting.js';
 
 type GmlValue = number | string | GmlPair[];
@@ -159,19 +160,32 @@ function scalarId(p: GmlPair): string | undefined {
 export function parseGml(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'gml'): Topology {
   const b = new TopologyBuilder(file, format, options);
   const top = new GmlReader(text, b).readList();
-  const graph = top.find((p) => p.key === 'graph');
+  const graphs = top.filter((p) => p.key === 'graph');
+  const graph = graphs[0];
   if (!graph || !Array.isArray(graph.value)) {
     throw b.error('no "graph [ ... ]" list in this file', top[0]?.pos ?? { line: 1, column: 1 }, 'a GML design is `graph [ node [ id 1 ] ... edge [ source 1 target 2 ] ]`');
   }
+  if (graphs.length > 1) {
+    throw b.error(
+      `a second top-level graph (the first begins on line ${graph.pos.line})`,
+      graphs[1].pos,
+      'netbrace reads one design per file: put each graph in a file of its own',
+    );
+  }
+  refuseNestedGraphs(graph.value, b);
   const metadata: Record<string, unknown> = {};
   let name: string | undefined;
   let network: string | undefined;
+  let directed = false;
   const edges: GmlPair[] = [];
   for (const p of graph.value) {
     if (p.key === 'node' && Array.isArray(p.value)) readNode(p, p.value, b);
     else if (p.key === 'edge' && Array.isArray(p.value)) edges.push(p);
     else if (p.key === 'directed') {
-      if (p.value !== 0) b.warn('the graph is directed ("directed 1"); links are read as undirected', p.pos);
+      if (p.value !== 0) {
+        directed = true;
+        b.directed(p.pos, '"directed 1"');
+      }
     } else if (p.key === 'multigraph') {
       // Parallel links are always kept; the flag adds nothing.
     } else {
@@ -181,50 +195,93 @@ export function parseGml(text: string, file: string, options: BuilderOptions = {
     }
   }
   // Edges are resolved after all nodes, so a file may list them in any order.
-  for (const e of edges) readEdge(e, e.value as GmlPair[], b);
+  for (const e of edges) readEdge(e, e.value as GmlPair[], b, directed);
   const resolved = name ?? network;
   return b.finish({ ...(resolved !== undefined ? { name: resolved } : {}), metadata });
 }
 
-function readNode(node: GmlPair, body: GmlPair[], b: TopologyBuilder): void {
-  let id: string | undefined;
+/**
+ * Hierarchical GML (a graph inside the graph, or inside a node) is not read: refused where it
+ * begins, rather than its nodes and edges silently left out.
+ */
+function refuseNestedGraphs(pairs: GmlPair[], b: TopologyBuilder): void {
+  for (const p of pairs) {
+    if (!Array.isArray(p.value)) continue;
+    if (p.key === 'graph') {
+      throw b.error('a nested graph: netbrace reads one flat graph per file', p.pos, 'list its nodes and edges in the top-level graph (node ids must stay unique)');
+    }
+    refuseNestedGraphs(p.value, b);
+  }
+}
+
+/**
+ * The pairs of a node or edge body as attributes: a key netbrace reads (`read(key)`) may be
+ * written once — a second one is refused with both lines, not silently the one that counts;
+ * other repeated keys are kept, as a list of their values.
+ */
+function bodyAttributes(body: GmlPair[], what: string, b: TopologyBuilder, read: (key: string) => boolean) {
   const raw: Record<string, unknown> = {};
   const where = new Map<string, SourcePos>();
+  const written = new Map<string, string>();
+  const first = new Map<string, GmlPair>();
+  const repeated = new Set<string>();
   for (const p of body) {
-    if (p.key === 'id') {
-      id = scalarId(p);
-      if (id === undefined) throw b.error('node "id" must be a number or a string', p.pos);
+    const value = Array.isArray(p.value) ? toPlain(p.value) : p.value;
+    const earlier = first.get(p.key);
+    if (earlier !== undefined) {
+      if (read(p.key)) {
+        throw b.error(`${what} has "${p.key}" twice (lines ${earlier.pos.line} and ${p.pos.line})`, p.pos, `keep one; the first is on line ${earlier.pos.line}`);
+      }
+      raw[p.key] = repeated.has(p.key) ? [...(raw[p.key] as unknown[]), value] : [raw[p.key], value];
+      repeated.add(p.key);
       continue;
     }
-    raw[p.key] = Array.isArray(p.value) ? toPlain(p.value) : p.value;
+    first.set(p.key, p);
+    raw[p.key] = value;
     where.set(p.key, p.pos);
+    if (typeof p.value === 'number') written.set(p.key, p.raw);
   }
-  if (id === undefined) throw b.error('node without "id"', node.pos, 'every GML node needs `id N`');
-  const mapped = mapNodeAttributes(raw, b, (k) => where.get(k) ?? node.pos);
+  return { raw, where, written, first };
+}
+
+function readNode(node: GmlPair, body: GmlPair[], b: TopologyBuilder): void {
+  const { raw, where, written, first } = bodyAttributes(body, `the node on line ${node.pos.line}`, b, (k) => k === 'id' || isNodeField(k));
+  const idPair = first.get('id');
+  if (idPair === undefined) throw b.error('node without "id"', node.pos, 'every GML node needs `id N`');
+  const id = scalarId(idPair);
+  if (id === undefined) throw b.error('node "id" must be a number or a string', idPair.pos);
+  delete raw.id;
+  const mapped = mapNodeAttributes(raw, b, { pos: (k) => where.get(k) ?? node.pos, text: (k) => written.get(k) });
   b.addNode({ id, pos: node.pos, ...mapped });
 }
 
-function readEdge(edge: GmlPair, body: GmlPair[], b: TopologyBuilder): void {
-  let source: GmlPair | undefined;
-  let target: GmlPair | undefined;
-  let id: string | undefined;
-  const raw: Record<string, unknown> = {};
-  const where = new Map<string, SourcePos>();
-  for (const p of body) {
-    if (p.key === 'source') source = p;
-    else if (p.key === 'target') target = p;
-    else if (p.key === 'id' && !Array.isArray(p.value)) id = scalarId(p);
-    else {
-      raw[p.key] = Array.isArray(p.value) ? toPlain(p.value) : p.value;
-      where.set(p.key, p.pos);
-    }
-  }
+function readEdge(edge: GmlPair, body: GmlPair[], b: TopologyBuilder, directed: boolean): void {
+  const ends = (k: string) => k === 'id' || k === 'source' || k === 'target';
+  const { raw, where, written, first } = bodyAttributes(body, `the edge on line ${edge.pos.line}`, b, (k) => ends(k) || isLinkField(k));
+  const source = first.get('source');
+  const target = first.get('target');
+  const idPair = first.get('id');
+  const id = idPair !== undefined ? scalarId(idPair) : undefined;
+  // A list under `id` is not an id; it stays an attribute.
+  if (id !== undefined) delete raw.id;
+  delete raw.source;
+  delete raw.target;
   if (!source || !target) {
     throw b.error(`edge without "${source ? 'target' : 'source'}"`, edge.pos, 'every GML edge needs `source N target M`');
   }
   const s = scalarId(source);
   const d = scalarId(target);
   if (s === undefined || d === undefined) throw b.error('edge "source" and "target" must be node ids', edge.pos);
-  const mapped = mapLinkAttributes(raw, b, (k) => where.get(k) ?? edge.pos);
-  b.addLink({ what: id !== undefined ? `edge "${id}"` : 'edge', ...(id !== undefined ? { id } : {}), source: s, target: d, pos: edge.pos, sourcePos: source.pos, targetPos: target.pos, ...mapped });
+  const mapped = mapLinkAttributes(raw, b, { pos: (k) => where.get(k) ?? edge.pos, text: (k) => written.get(k) });
+  b.addLink({
+    what: id !== undefined ? `edge "${id}"` : 'edge',
+    ...(id !== undefined ? { id } : {}),
+    source: s,
+    target: d,
+    pos: edge.pos,
+    sourcePos: source.pos,
+    targetPos: target.pos,
+    ...mapped,
+    ...(directed ? { arc: true } : {}),
+  });
 }

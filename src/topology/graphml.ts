@@ -22,6 +22,10 @@ interface Element {
   attrs: Record<string, string>;
   data: Record<string, unknown>;
   dataPos: Map<string, SourcePos>;
+  /** Each <data> as written, before its key's attr.type converted it (ids stay as written). */
+  dataText: Map<string, string>;
+  /** An edge that is a directed arc (its own `directed`, else its graph's `edgedefault`). */
+  arc?: boolean;
 }
 
 /** Converts a <data> text by its key's attr.type; text that does not fit stays text. */
@@ -52,6 +56,8 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
   const stack: string[] = [];
   let current: Element | undefined;
   let graphDepth = 0;
+  /** edgedefault of each open <graph>, innermost last. */
+  const directedGraphs: boolean[] = [];
   let currentKey: KeyDef | undefined;
   let dataKey: string | undefined;
   let dataPos: SourcePos = { line: 1, column: 1 };
@@ -59,17 +65,11 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
   let dataNested = false;
   let defaultText: string | undefined;
   let sawRoot = false;
-  let warnedDirected = false;
   let warnedNested = false;
   let tagStart: SourcePos = { line: 1, column: 1 };
   let graphId: string | undefined;
 
   const here = (): SourcePos => ({ line: parser.line, column: parser.column + 1 });
-  const directed = (pos: SourcePos, how: string) => {
-    if (warnedDirected) return;
-    warnedDirected = true;
-    b.warn(`the graph is directed (${how}); links are read as undirected`, pos);
-  };
 
   parser.on('error', (err) => {
     // saxes prefixes its own (0-based) position and ends with a full stop; we give ours.
@@ -123,19 +123,27 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
           warnedNested = true;
           b.warn('nested <graph> found; its nodes and edges are read into the one design', pos);
         }
-        if (attrs.edgedefault === 'directed') directed(pos, 'edgedefault="directed"');
+        directedGraphs.push(attrs.edgedefault === 'directed');
+        if (attrs.edgedefault === 'directed') b.directed(pos, 'edgedefault="directed"');
         break;
       case 'node':
         if (attrs.id === undefined) throw b.error('<node> without an "id"', pos, 'every GraphML node needs id="..."');
-        current = { pos, attrs, data: {}, dataPos: new Map() };
+        current = { pos, attrs, data: {}, dataPos: new Map(), dataText: new Map() };
         nodes.push(current);
         break;
       case 'edge':
         if (attrs.source === undefined || attrs.target === undefined) {
           throw b.error(`<edge> without a "${attrs.source === undefined ? 'source' : 'target'}"`, pos, 'every GraphML edge needs source="..." and target="..."');
         }
-        if (attrs.directed === 'true') directed(pos, 'an edge has directed="true"');
-        current = { pos, attrs, data: {}, dataPos: new Map() };
+        if (attrs.directed === 'true') b.directed(pos, 'an edge has directed="true"');
+        current = {
+          pos,
+          attrs,
+          data: {},
+          dataPos: new Map(),
+          dataText: new Map(),
+          arc: attrs.directed === 'true' || (attrs.directed !== 'false' && directedGraphs[directedGraphs.length - 1] === true),
+        };
         edges.push(current);
         break;
       case 'hyperedge':
@@ -165,10 +173,12 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
       case 'data': {
         const def = keys.get(dataKey ?? '');
         const attrName = def?.name ?? dataKey ?? '';
-        const value = typed(dataNested ? dataText.trim() : dataText, def?.type ?? 'string');
+        const written = dataNested ? dataText.trim() : dataText;
+        const value = typed(written, def?.type ?? 'string');
         if (current) {
           current.data[attrName] = value;
           current.dataPos.set(attrName, dataPos);
+          current.dataText.set(attrName, written);
         } else if (graphDepth > 0) {
           metadata[attrName] = value;
         }
@@ -188,6 +198,7 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
         break;
       case 'graph':
         graphDepth--;
+        directedGraphs.pop();
         break;
       default:
         break;
@@ -203,12 +214,17 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
   const nodeDefaults = defaults('node');
   const edgeDefaults = defaults('edge');
   const withDefaults = (el: Element, defs: KeyDef[]) => {
-    for (const k of defs) if (!(k.name in el.data)) el.data[k.name] = typed(k.default!, k.type);
+    for (const k of defs) {
+      if (k.name in el.data) continue;
+      el.data[k.name] = typed(k.default!, k.type);
+      el.dataText.set(k.name, k.default!);
+    }
     return el.data;
   };
+  const sourceOf = (el: Element) => ({ pos: (k: string) => el.dataPos.get(k) ?? el.pos, text: (k: string) => el.dataText.get(k) });
 
   for (const n of nodes) {
-    const mapped = mapNodeAttributes(withDefaults(n, nodeDefaults), b, (k) => n.dataPos.get(k) ?? n.pos);
+    const mapped = mapNodeAttributes(withDefaults(n, nodeDefaults), b, sourceOf(n));
     b.addNode({ id: n.attrs.id, pos: n.pos, ...mapped });
   }
   // Edges are resolved after all nodes: GraphML allows them in any order.
@@ -216,11 +232,19 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
     const data = withDefaults(e, edgeDefaults);
     let id: string | undefined = e.attrs.id;
     if (id === undefined && 'id' in data) {
-      id = String(data.id);
+      id = e.dataText.get('id') ?? String(data.id);
       delete data.id;
     }
-    const mapped = mapLinkAttributes(data, b, (k) => e.dataPos.get(k) ?? e.pos);
-    b.addLink({ what: id !== undefined ? `edge "${id}"` : 'edge', ...(id !== undefined ? { id } : {}), source: e.attrs.source, target: e.attrs.target, pos: e.pos, ...mapped });
+    const mapped = mapLinkAttributes(data, b, sourceOf(e));
+    b.addLink({
+      what: id !== undefined ? `edge "${id}"` : 'edge',
+      ...(id !== undefined ? { id } : {}),
+      source: e.attrs.source,
+      target: e.attrs.target,
+      pos: e.pos,
+      ...mapped,
+      ...(e.arc ? { arc: true } : {}),
+    });
   }
 
   const name = metadata.label ?? metadata.Network ?? metadata.name ?? graphId;

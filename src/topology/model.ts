@@ -14,7 +14,7 @@ export interface SourcePos {
 
 export interface TopoNode {
   id: string;
-  /** Human label when the file has one (GraphML/GML `label`), else undefined. */
+  /** Human label when the file has one (ours: `label`; GraphML/GML: `label`, else `name`; CSV has none). */
   label?: string;
   kind?: string;
   lat?: number;

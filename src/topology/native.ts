@@ -12,6 +12,7 @@ import { DesignError } from '../errors.js';
 import type { DesignFormat, SourcePos, Topology } from './model.js';
 import { TopologyBuilder, type BuilderOptions } from './builder.js';
 import { didYouMean } from './suggest.js';
+import { nonNormal, quantityProblem, type Quantity } from './quantities.js';
 import { MAX_NESTING, positionOf, yamlNestingExceeded } from './nesting.js';
 
 /**
@@ -74,6 +75,20 @@ class Locator {
     return { node: last, exact: true };
   }
 
+  /** The source text of the plain scalar at `path` (a number as written), if there is one. */
+  source(path: Path): string | undefined {
+    let { node, exact } = this.node(path);
+    if (!exact) return undefined;
+    if (isAlias(node)) node = node.resolve(this.doc) as YamlNode | undefined;
+    return isScalar(node) && typeof node.source === 'string' ? node.source : undefined;
+  }
+
+  /** `prefix + source + suffix` when the scalar at `path` has source text, else ''. */
+  written(path: Path, prefix: string, suffix: string): string {
+    const s = this.source(path);
+    return s === undefined ? '' : `${prefix}${s}${suffix}`;
+  }
+
   pos(path: Path): SourcePos {
     const { node } = this.node(path);
     return node?.range ? this.at(node.range[0]) : { line: 1, column: 1 };
@@ -91,6 +106,29 @@ class Locator {
     }
     return this.pos(path);
   }
+}
+
+/**
+ * The first number in the design (outside free-form `metadata`) that no computation can use:
+ * NaN, ±Infinity (`.inf`, or a numeral too large such as 1e400) or a subnormal (1e-310).
+ */
+function firstNonNormal(v: unknown, path: Path): { path: Path; why: string } | undefined {
+  // One path array, extended and shortened in place: a large design has many numbers.
+  if (typeof v === 'number') {
+    const why = nonNormal(v);
+    return why ? { path: [...path], why } : undefined;
+  }
+  if (v === null || typeof v !== 'object') return undefined;
+  const entries: [string | number, unknown][] = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
+  for (const [k, x] of entries) {
+    if (typeof x !== 'number' && (x === null || typeof x !== 'object')) continue;
+    if (path.length === 0 && k === 'metadata') continue;
+    path.push(k);
+    const found = firstNonNormal(x, path);
+    path.pop();
+    if (found) return found;
+  }
+  return undefined;
 }
 
 /** `links[2].length_km` from ajv's `/links/2/length_km`. */
@@ -253,16 +291,30 @@ export function parseNative(text: string, file: string, options: BuilderOptions 
     throw new DesignError(`the ${kindWord} design is empty`, { file, line: 1, column: 1 }, 'a design needs at least `nodes:`');
   }
 
+  // Before the schema, which would call Infinity "not a number" without saying why.
+  const odd = firstNonNormal(data, []);
+  if (odd) {
+    throw new DesignError(`${pathText(odd.path)} ${odd.why}${loc.written(odd.path, ' (written ', ')')}`, { file, ...loc.pos(odd.path) }, 'write a plain decimal number');
+  }
   const check = validate();
   if (!check(data)) throw firstError(check.errors ?? [], file, loc);
   const d = data as NativeDesign;
+  /** An id as written: `0x10` and `16` are two ids, and 12345678901234567890 keeps its digits. */
+  const idAt = (path: Path, v: string | number): string => (typeof v === 'string' ? v : (loc.source(path) ?? String(v)));
+  /** A measured quantity, refused at its line when it is out of range (quantities.ts). */
+  const quantity = (kind: Quantity, path: Path, v: number | undefined): number | undefined => {
+    if (v === undefined) return undefined;
+    const problem = quantityProblem(kind, v, loc.source(path));
+    if (problem) throw new DesignError(`${pathText(path)} ${problem.message}`, { file, ...loc.pos(path) }, problem.hint);
+    return v;
+  };
 
   const b = new TopologyBuilder(file, format, { ...options, duplicateLinkIds: 'error' });
   for (const w of doc.warnings) b.warn(`${kindWord}: ${w.message.split('\n')[0]}`, loc.at(w.pos[0]));
 
   d.nodes.forEach((n, i) => {
     b.addNode({
-      id: String(n.id),
+      id: idAt(['nodes', i, 'id'], n.id),
       pos: loc.pos(['nodes', i]),
       ...(n.label !== undefined ? { label: n.label } : {}),
       ...(n.kind !== undefined ? { kind: n.kind } : {}),
@@ -271,28 +323,33 @@ export function parseNative(text: string, file: string, options: BuilderOptions 
     });
   });
   (d.risk_groups ?? []).forEach((g, i) => {
-    b.addRiskGroup({ id: String(g.id), pos: loc.pos(['risk_groups', i]), ...(g.description !== undefined ? { description: g.description } : {}) });
+    b.addRiskGroup({ id: idAt(['risk_groups', i, 'id'], g.id), pos: loc.pos(['risk_groups', i]), ...(g.description !== undefined ? { description: g.description } : {}) });
   });
   (d.links ?? []).forEach((l, i) => {
     const at = ['links', i];
+    const id = l.id !== undefined ? idAt([...at, 'id'], l.id) : undefined;
+    const length = quantity('length', [...at, 'length_km'], l.length_km);
+    const latency = quantity('latency', [...at, 'latency_ms'], l.latency_ms);
+    const capacity = quantity('capacity', [...at, 'capacity_gbps'], l.capacity_gbps);
     b.addLink({
-      what: l.id !== undefined ? `link "${String(l.id)}" (links[${i}])` : `links[${i}]`,
-      ...(l.id !== undefined ? { id: String(l.id) } : {}),
-      source: String(l.between[0]),
-      target: String(l.between[1]),
+      what: id !== undefined ? `link "${id}" (links[${i}])` : `links[${i}]`,
+      ...(id !== undefined ? { id } : {}),
+      source: idAt([...at, 'between', 0], l.between[0]),
+      target: idAt([...at, 'between', 1], l.between[1]),
       pos: loc.pos(at),
       sourcePos: loc.pos([...at, 'between', 0]),
       targetPos: loc.pos([...at, 'between', 1]),
-      ...(l.length_km !== undefined ? { length: l.length_km } : {}),
-      ...(l.latency_ms !== undefined ? { latency: l.latency_ms } : {}),
-      ...(l.capacity_gbps !== undefined ? { capacity: l.capacity_gbps } : {}),
-      riskGroups: (l.risk_groups ?? []).map(String),
+      ...(length !== undefined ? { length } : {}),
+      ...(latency !== undefined ? { latency } : {}),
+      ...(capacity !== undefined ? { capacity } : {}),
+      riskGroups: (l.risk_groups ?? []).map((g, k) => idAt([...at, 'risk_groups', k], g)),
       hardened: l.hardened ?? false,
     });
   });
   (d.demands ?? []).forEach((dm, i) => {
     const at = ['demands', i];
-    b.addDemand(String(dm.between[0]), String(dm.between[1]), dm.volume, loc.pos(at), [
+    const volume = quantity('volume', [...at, 'volume'], dm.volume)!;
+    b.addDemand(idAt([...at, 'between', 0], dm.between[0]), idAt([...at, 'between', 1], dm.between[1]), volume, loc.pos(at), [
       loc.pos([...at, 'between', 0]),
       loc.pos([...at, 'between', 1]),
     ], `demands[${i}]`);

@@ -261,6 +261,46 @@ describe(`a node id 1 MB long (the limit is ${MAX_ID_LENGTH} characters)`, () =>
   });
 });
 
+describe('bytes that are not UTF-8 text', () => {
+  /** Writes `bytes` to `name` and reads it as the shell does (readDesign: stat, read, decode, parse). */
+  function readBytes(name: string, bytes: Uint8Array) {
+    tried++;
+    writeFileSync(path.join(dir, name), bytes);
+    return attempt(() => readDesign(name, { cwd: dir }));
+  }
+  const ascii = (s: string) => new TextEncoder().encode(s);
+
+  const cases: [string, () => Uint8Array, number, RegExp][] = [
+    // 5 MB of plain text, then one Latin-1 byte on the last line: found, not decoded with U+FFFD.
+    ['late-latin1.csv', () => new Uint8Array([...ascii('source,target\n'), ...new Uint8Array(5_000_000).fill(0x61), 0x2c, 0xe9, 0x0a]), 2, /^not UTF-8: byte 0xE9 at line 2, column 5000002; it looks like Latin-1/],
+    // A PNG signature under a design name.
+    ['image.gml', () => new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d]), 1, /^not UTF-8: byte 0x89 at line 1, column 1/],
+    // UTF-16 with a mark, then a high surrogate with no low one.
+    ['lone.net.yaml', () => new Uint8Array([0xff, 0xfe, 0x61, 0, 0x0a, 0, 0x00, 0xd8, 0x62, 0]), 2, /^not valid UTF-16: a lone surrogate 0xD800/],
+    ['nul.csv', () => ascii('source,target\na\u0000,b\n'), 2, /^not UTF-8 text: a NUL character at line 2, column 2/],
+  ];
+  for (const [name, make, line, message] of cases) {
+    it(`${name}: refused at line ${line}, the encoding named`, () => {
+      const o = readBytes(name, make());
+      expect(o.ms, 'hang guard').toBeLessThan(HANG_MS);
+      if (o.ok) throw new Error(`${name} was accepted`);
+      expect([o.error.name, o.error.line, o.error.hint]).toEqual(['EncodingError', line, 'save the file as UTF-8']);
+      expect(o.error.message).toMatch(message);
+      expect(o.error.format().length).toBeLessThan(300);
+    });
+  }
+
+  it('UTF-16 with a byte-order mark reads as the same design', () => {
+    const text = fixtureText('designs', 'ring.graphml');
+    const wide = new Uint8Array(2 + 2 * text.length);
+    wide.set([0xfe, 0xff]);
+    for (let i = 0; i < text.length; i++) wide.set([text.charCodeAt(i) >> 8, text.charCodeAt(i) & 0xff], 2 + 2 * i);
+    const o = readBytes('wide.graphml', wide);
+    if (!o.ok) throw new Error(o.error.format());
+    expect(JSON.stringify(o.value)).toBe(JSON.stringify(parseDesign(text, 'wide.graphml')));
+  });
+});
+
 describe('through the gate', () => {
   it('each hostile design fails alone with its line; the good design beside them is still judged', async () => {
     const hostile: Record<string, string> = {

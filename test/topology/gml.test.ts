@@ -36,7 +36,7 @@ describe('GML', () => {
   it('reads a directed graph as undirected, with a warning', () => {
     const t = parseDesign('graph [\n  directed 1\n  node [ id 1 ]\n  node [ id 2 ]\n  edge [ source 2 target 1 ]\n]\n', 'd.gml');
     expect(t.links).toHaveLength(1);
-    expect(t.warnings[0]).toMatchObject({ line: 2, column: 3, message: 'the graph is directed ("directed 1"); links are read as undirected' });
+    expect(t.warnings[0]).toMatchObject({ line: 2, column: 3, message: 'the graph is directed ("directed 1"); direction is ignored and links are read as undirected' });
   });
 
   it('skips # comments', () => {
@@ -82,5 +82,39 @@ describe('GML', () => {
   it('a non-numeric length is refused where it is written', () => {
     const e = caught(gml('graph [\n  node [ id 1 ]\n  node [ id 2 ]\n  edge [ source 1 target 2\n    length "far" ]\n]\n'));
     expect(e.format()).toBe('wan.gml:5:5: link length must be a number, not "far" — write a plain decimal number');
+  });
+
+  it('a second top-level graph is refused where it begins (not silently left out)', () => {
+    expect(caught(gml('graph [\n  node [ id 1 ]\n]\ngraph [\n  node [ id 2 ]\n]\n')).format()).toBe(
+      'wan.gml:4:1: a second top-level graph (the first begins on line 1) — netbrace reads one design per file: put each graph in a file of its own',
+    );
+  });
+
+  it('a nested graph is refused where it begins, in the graph or inside a node', () => {
+    const msg = 'a nested graph: netbrace reads one flat graph per file — list its nodes and edges in the top-level graph (node ids must stay unique)';
+    expect(caught(gml('graph [\n  node [ id 1 ]\n  graph [\n    node [ id 2 ]\n  ]\n]\n')).format()).toBe(`wan.gml:3:3: ${msg}`);
+    expect(caught(gml('graph [\n  node [\n    id 1\n    graph [ node [ id 2 ] ]\n  ]\n]\n')).format()).toBe(`wan.gml:4:5: ${msg}`);
+    // A key that merely says "graph" in a drawing block is a value, not a graph.
+    expect(parseDesign('graph [\n  node [ id 1 graphics [ graph "x" ] ]\n]\n', 'g.gml').nodes).toHaveLength(1);
+  });
+
+  it('a key netbrace reads, written twice on a node or an edge, is refused with both lines', () => {
+    expect(caught(gml('graph [\n  node [\n    id 1\n    id 2\n  ]\n]\n')).format()).toBe(
+      'wan.gml:4:5: the node on line 2 has "id" twice (lines 3 and 4) — keep one; the first is on line 3',
+    );
+    expect(caught(gml('graph [\n  node [ id 1 label "a"\n    label "b" ]\n]\n')).format()).toBe(
+      'wan.gml:3:5: the node on line 2 has "label" twice (lines 2 and 3) — keep one; the first is on line 2',
+    );
+    const two = 'graph [\n  node [ id 1 ]\n  node [ id 2 ]\n  node [ id 3 ]\n';
+    expect(caught(gml(`${two}  edge [ source 1 target 2\n    target 3 ]\n]\n`)).format()).toBe(
+      'wan.gml:6:5: the edge on line 5 has "target" twice (lines 5 and 6) — keep one; the first is on line 5',
+    );
+    expect(caught(gml(`${two}  edge [\n    source 1\n    source 3\n    target 2 ]\n]\n`)).message).toBe('the edge on line 5 has "source" twice (lines 6 and 7)');
+    expect(caught(gml(`${two}  edge [ source 1 target 2 length 3\n    length 4 ]\n]\n`)).message).toBe('the edge on line 5 has "length" twice (lines 5 and 6)');
+  });
+
+  it('other repeated keys are all kept, as a list', () => {
+    const t = parseDesign('graph [\n  node [ id 1 note "a" note "b" note "c" ]\n]\n', 'r.gml');
+    expect(t.nodes[0].attrs).toEqual({ note: ['a', 'b', 'c'] });
   });
 });
