@@ -7,6 +7,8 @@ const BY_EXTENSION: readonly (readonly [string, DesignFormat])[] = [
   ['.net.yaml', 'native-yaml'],
   ['.net.yml', 'native-yaml'],
   ['.net.json', 'native-json'],
+  ['.geojson', 'geojson'],
+  ['.geo.json', 'geojson'],
   ['.yaml', 'native-yaml'],
   ['.yml', 'native-yaml'],
   ['.json', 'native-json'],
@@ -33,9 +35,10 @@ const FORMAT_NAMES: Readonly<Record<string, DesignFormat>> = {
   graphml: 'graphml',
   gml: 'gml',
   csv: 'csv',
+  geojson: 'geojson',
 };
 
-export const FORMAT_CHOICES = 'yaml, json, graphml, gml, csv';
+export const FORMAT_CHOICES = 'yaml, json, graphml, gml, csv, geojson';
 
 /** Read a user-given format name; throws a UsageError for an unknown one. */
 export function parseFormatName(name: string): DesignFormat {

@@ -3,7 +3,7 @@
 
 import type { Diagnostic } from '../errors.js';
 
-export type DesignFormat = 'native-yaml' | 'native-json' | 'graphml' | 'gml' | 'csv';
+export type DesignFormat = 'native-yaml' | 'native-json' | 'graphml' | 'gml' | 'csv' | 'geojson';
 
 export interface SourcePos {
   /** 1-based line of the element in the design file. */

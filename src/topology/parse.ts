@@ -8,6 +8,7 @@ import { parseNative } from './native.js';
 import { parseGml } from './gml.js';
 import { parseGraphml } from './graphml.js';
 import { parseEdgeList } from './edgelist.js';
+import { parseGeojson } from './geojson.js';
 
 /** UTF-8 byte length without allocating an encoded copy. */
 export function utf8Length(text: string): number {
@@ -50,7 +51,7 @@ export function parseDesign(text: string, file: string, options: ParseOptions = 
     throw new DesignError(
       'cannot tell the design format from the file name',
       { file },
-      `use an extension .net.yaml, .net.json, .graphml, .gml or .csv, or force one (${FORMAT_CHOICES})`,
+      `use an extension .net.yaml, .net.json, .graphml, .gml, .csv or .geojson, or force one (${FORMAT_CHOICES})`,
     );
   }
   checkSize(text, file, options.maxBytes ?? DEFAULT_MAX_BYTES);
@@ -67,5 +68,7 @@ export function parseDesign(text: string, file: string, options: ParseOptions = 
       return parseGraphml(text, file, builderOptions);
     case 'csv':
       return parseEdgeList(text, file, builderOptions);
+    case 'geojson':
+      return parseGeojson(text, file, builderOptions);
   }
 }

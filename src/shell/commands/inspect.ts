@@ -16,6 +16,7 @@ const FORMAT_LABEL: Readonly<Record<Topology['format'], string>> = {
   graphml: 'GraphML',
   gml: 'GML',
   csv: 'CSV edge list',
+  geojson: 'GeoJSON (RFC 7946)',
 };
 
 export interface InspectSummary {
