@@ -10,6 +10,7 @@ import type { MetricId } from '../metrics/types.js';
 import type { DesignFormat } from '../topology/model.js';
 import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
 import { DEFAULT_NOISE_FACTOR, REGIONAL_UNTIL_KM } from './defaults.js';
+import { globProblem } from './globs.js';
 import { requirementId } from './requirement-id.js';
 import schema from './policy.schema.json' with { type: 'json' };
 import { describePath as describe, throwSchemaErrors } from './schema-errors.js';
@@ -62,8 +63,17 @@ const ENGINE: Record<RemoveWhat, Partial<Record<RemovalOrder, { static?: Challen
 
 type Obj = Record<string, unknown>;
 
-function globs(value: unknown): string[] {
-  return typeof value === 'string' ? [value] : (value as string[]);
+/**
+ * The globs of a `files` / `ignore` value (one glob or a list), each checked (globs.ts): a glob
+ * that could select nothing is a PolicyError at its own line, named as `what` says.
+ */
+function globs(value: unknown, src: YamlSource, path: readonly Segment[], what: string): string[] {
+  const list = typeof value === 'string' ? [value] : (value as string[]);
+  list.forEach((g, j) => {
+    const problem = globProblem(g);
+    if (problem) throw new PolicyError(`${what}, glob "${g}" ${problem.message}`, src.where(typeof value === 'string' ? path : [...path, j]), problem.hint);
+  });
+  return list;
 }
 
 class FileBuilder {
@@ -314,13 +324,14 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   if (raw.designs !== undefined) {
     policy.designs = (raw.designs as Obj[]).map(
       (d, i): DesignGlob => ({
-        files: globs(d.files),
+        files: globs(d.files, src, ['designs', i, 'files'], `designs entry ${i + 1}`),
         ...(d.format !== undefined ? { format: d.format as DesignFormat } : {}),
         where: src.where(['designs', i]),
+        fileWhere: typeof d.files === 'string' ? [src.where(['designs', i, 'files'])] : (d.files as string[]).map((_, j) => src.where(['designs', i, 'files', j])),
       }),
     );
   }
-  if (raw.ignore !== undefined) policy.ignore = { globs: globs(raw.ignore), where: src.where(['ignore']) };
+  if (raw.ignore !== undefined) policy.ignore = { globs: globs(raw.ignore, src, ['ignore'], 'ignore'), where: src.where(['ignore']) };
   if (raw.seed !== undefined) policy.seed = { value: raw.seed as number, where: src.where(['seed']) };
   if (raw['r-value'] !== undefined) {
     const r = raw['r-value'] as Obj;
@@ -359,7 +370,7 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   policy.overrides = ((raw.overrides as Obj[] | undefined) ?? []).map((o, i): Override => {
     const path: Segment[] = ['overrides', i];
     const override: Override = {
-      files: globs(o.files),
+      files: globs(o.files, src, [...path, 'files'], `override ${i + 1}`),
       requirements: b.requirements(o.requirements, [...path, 'requirements']),
       where: src.where(path),
     };

@@ -117,6 +117,8 @@ export interface DesignGlob {
   files: string[];
   format?: DesignFormat;
   where: Where;
+  /** Where each of `files` was written (the built-in policy's globs included). */
+  fileWhere: Where[];
 }
 
 /**
