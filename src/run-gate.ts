@@ -5,7 +5,8 @@
 //   1. the policy, read from the trusted revision (the base, by default) with every file it
 //      inherits; a policy that the change modifies is reported and not applied;
 //   2. the design files: the given paths, or those changed between base and head (renames
-//      followed), or every design for a scheduled run (thresholds only); then the part;
+//      followed, and a design deleted and added again in another file paired with it:
+//      gate/pair-designs.ts), or every design for a scheduled run (thresholds only); then the part;
 //   3. the rules for each file (scopes) — every configuration error surfaces here, before
 //      anything is evaluated;
 //   4. each file at head and at base: parse, compile, evaluate under the policy's work budget
@@ -23,10 +24,12 @@ import { compileTopology, type CompactGraph } from './graph/compact.js';
 import { budgetSpecs, notePairedCuts, type PairedCut } from './gate/budget.js';
 import { compareDesign, type CompareInput, type DesignSide } from './gate/compare.js';
 import { countStatuses, exitCodeOf, verdictOf } from './gate/verdict.js';
-import { DEFAULT_POLICY_PATH } from './policy/defaults.js';
-import { builtinPolicy, isDesignPath, loadPolicy, policyForFile } from './policy/resolve.js';
+import { pairDesigns, type UnpairedDesign } from './gate/pair-designs.js';
+import { BUILTIN_POLICY_NAME, DEFAULT_DESIGN_GLOBS, DEFAULT_POLICY_PATH } from './policy/defaults.js';
+import { builtinPolicy, designFormat, globsMatch, isDesignPath, loadPolicy, policyForFile } from './policy/resolve.js';
 import type { FilePolicy, Policy } from './policy/types.js';
 import { CAUTION, REPORT_VERSION, type FileReport, type Report } from './report/report.js';
+import type { DesignFormat } from './topology/model.js';
 import { parseDesign } from './topology/parse.js';
 import { VERSION } from './version.js';
 
@@ -256,11 +259,22 @@ interface Candidate {
   change: CompareInput['change'];
 }
 
-async function candidates(request: GateRequest, deps: GateDeps, policy: Policy, base: Revision | undefined, head: Revision): Promise<{ list: Candidate[]; scope: Report['scope'] }> {
+interface Candidates {
+  list: Candidate[];
+  scope: Report['scope'];
+  /** A sentence for the report when a `designs` glob selects nothing (see deadGlobNote). */
+  note?: string;
+}
+
+async function candidates(request: GateRequest, deps: GateDeps, policy: Policy, base: Revision | undefined, head: Revision): Promise<Candidates> {
   if (request.paths && request.paths.length > 0) {
     const list: Candidate[] = [];
     for (const path of [...new Set(request.paths.map(normalizePath))]) {
       if (base === undefined) {
+        // A path that is not there is a typing mistake, not a design to report as removed.
+        if ((await deps.readAt(head, path)) === null) {
+          throw new UsageError(`${path} does not exist${head === 'worktree' ? '' : ` at ${head}`} (or is not a file)`, 'give the path of a design file');
+        }
         list.push({ path, change: 'unchanged' });
         continue;
       }
@@ -279,7 +293,76 @@ async function candidates(request: GateRequest, deps: GateDeps, policy: Policy, 
   const list = changed
     .filter((f) => isDesignPath(policy, f.path) || (f.previousPath !== undefined && isDesignPath(policy, f.previousPath)))
     .map((f): Candidate => ({ path: f.path, change: f.status, ...(f.previousPath !== undefined ? { previousPath: f.previousPath } : {}) }));
-  return { list, scope: 'changed' };
+  const note = await deadGlobNote(changed, deps, policy, base, head);
+  return { list: await pairMovedDesigns(list, deps, policy, base, head), scope: 'changed', ...(note ? { note } : {}) };
+}
+
+/** The network name a design file gives itself, or undefined when it names none or cannot be read. */
+function networkName(text: string | null, path: string, policy: Policy): string | undefined {
+  if (text === null) return undefined;
+  try {
+    const format = designFormat(policy, path);
+    const t = parseDesign(text, path, format ? { format } : {});
+    const name = t.name ?? t.metadata.name; // GML's "name" when it has no label
+    return typeof name === 'string' ? name : undefined;
+  } catch (e) {
+    if (isNetbraceError(e)) return undefined; // it is judged (and its error reported) as it stands
+    throw e;
+  }
+}
+
+/**
+ * A design deleted and another added by the same change, that are one design moved (and
+ * usually converted to another format): judged as renamed, base against head
+ * (gate/pair-designs.ts says how they are paired).
+ */
+async function pairMovedDesigns(list: Candidate[], deps: GateDeps, policy: Policy, base: Revision, head: Revision): Promise<Candidate[]> {
+  const deleted = list.filter((c) => c.change === 'deleted');
+  const added = list.filter((c) => c.change === 'added');
+  if (deleted.length === 0 || added.length === 0) return list;
+  const named = async (rev: Revision, cs: Candidate[]): Promise<UnpairedDesign[]> => {
+    const out: UnpairedDesign[] = [];
+    for (const c of cs) {
+      const name = networkName(await deps.readAt(rev, c.path), c.path, policy);
+      out.push({ path: c.path, ...(name !== undefined ? { name } : {}) });
+    }
+    return out;
+  };
+  const pairs = pairDesigns(await named(base, deleted), await named(head, added));
+  if (pairs.length === 0) return list;
+  const gone = new Set(pairs.map((p) => p.previousPath));
+  const into = new Map(pairs.map((p) => [p.path, p.previousPath]));
+  return list
+    .filter((c) => !(c.change === 'deleted' && gone.has(c.path)))
+    .map((c) => (c.change === 'added' && into.has(c.path) ? { path: c.path, previousPath: into.get(c.path)!, change: 'renamed' as const } : c));
+}
+
+/** Shown at most this many design files that no glob selects. */
+const UNSELECTED_SHOWN = 5;
+
+/**
+ * A `designs` glob written in the policy that matches no file at the base or the head, in a
+ * change that touches design-looking files (by the built-in globs) that the policy neither
+ * judges nor excludes: most likely a misspelt directory, and the change passes unjudged. Said
+ * as a notice: a glob that matches nothing yet is allowed (a directory still to come), and
+ * a design-looking file outside the globs may be left out on purpose. Globs of the built-in
+ * policy are never named (a repository rarely has every format).
+ */
+async function deadGlobNote(changed: readonly ChangedFile[], deps: GateDeps, policy: Policy, base: Revision, head: Revision): Promise<string | undefined> {
+  const looksLikeDesign = (p: string) => globsMatch(DEFAULT_DESIGN_GLOBS, p) && !isDesignPath(policy, p) && !globsMatch(policy.exclude, p);
+  const unselected = [...new Set(changed.flatMap((f) => [f.path, ...(f.previousPath !== undefined ? [f.previousPath] : [])]).filter(looksLikeDesign))].sort();
+  if (unselected.length === 0) return undefined;
+  const written = policy.designs.flatMap((d) => d.paths.map((glob: string, i: number) => ({ glob, where: d.fileWhere[i] ?? d.where }))).filter((g) => g.where.file !== BUILTIN_POLICY_NAME);
+  if (written.length === 0) return undefined;
+  const files = [...new Set([...(await deps.listAll(base)), ...(await deps.listAll(head))])];
+  const dead = written.filter((g) => !files.some((f) => globsMatch([g.glob], f)));
+  if (dead.length === 0) return undefined;
+  const globs = dead.map((g) => `designs glob "${g.glob}" (${g.where.file}:${g.where.line}:${g.where.column})`).join(', ');
+  const shown = unselected.slice(0, UNSELECTED_SHOWN).join(', ') + (unselected.length > UNSELECTED_SHOWN ? `, and ${unselected.length - UNSELECTED_SHOWN} more` : '');
+  return (
+    `${globs} ${dead.length === 1 ? 'matches' : 'match'} no file at the base or the head, and this change touches design files that no glob ` +
+    `selects, so they were not judged: ${shown}; check the glob`
+  );
 }
 
 function normalizePath(p: string): string {
@@ -353,9 +436,9 @@ async function readSide(deps: GateDeps, rev: Revision, path: string): Promise<st
 }
 
 /** Parse and compile one side; a design error becomes the located problem the report shows. */
-function compileText(text: string, path: string, fp: FilePolicy): { graph: CompactGraph } | { error: NonNullable<CompareInput['headError']> } {
+function compileText(text: string, path: string, format: DesignFormat | undefined): { graph: CompactGraph } | { error: NonNullable<CompareInput['headError']> } {
   try {
-    return { graph: compileTopology(parseDesign(text, path, fp.format ? { format: fp.format } : {})) };
+    return { graph: compileTopology(parseDesign(text, path, format ? { format } : {})) };
   } catch (e) {
     if (isNetbraceError(e) && (e.kind === 'design' || e.kind === 'limit' || e.kind === 'usage')) {
       return { error: problemOf(e) };
@@ -398,7 +481,8 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
   const base = request.eventKind === 'schedule' ? undefined : request.base;
 
   const { policy, info } = await choosePolicy(request, deps, base, head);
-  const { list: all, scope } = await candidates(request, deps, policy, base, head);
+  const { list: all, scope, note } = await candidates(request, deps, policy, base, head);
+  if (note) info.note = info.note ? `${info.note}. ${note}` : note;
   const chosen = [...all].sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0)).filter((c) => !request.part || inPart(c.path, request.part));
 
   // Every file's rules before any evaluation: configuration errors stop the run here.
@@ -417,7 +501,7 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
       if (headText === null) {
         input.change = 'deleted';
       } else {
-        const h = typeof headText === 'string' ? compileText(headText, c.path, fp) : headText;
+        const h = typeof headText === 'string' ? compileText(headText, c.path, fp.format) : headText;
         if ('error' in h) input.headError = h.error;
         else {
           let baseGraph: CompactGraph | undefined;
@@ -428,7 +512,8 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
             if (baseText === headText) {
               same = true; // identical text: the same evaluation, delta exactly 0
             } else if (baseText !== null) {
-              const b = typeof baseText === 'string' ? compileText(baseText, basePath, fp) : baseText;
+              // The base may be another file in another format (a design moved and converted).
+              const b = typeof baseText === 'string' ? compileText(baseText, basePath, basePath === c.path ? fp.format : designFormat(policy, basePath)) : baseText;
               if ('error' in b) input.baseError = b.error;
               else baseGraph = b.graph;
             }

@@ -11,6 +11,7 @@ import type { DesignFormat } from '../topology/model.js';
 import { fmt, nonNormal } from '../topology/quantities.js';
 import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
 import { DEFAULT_ERROR_MULTIPLE, REGIONAL_UNTIL_KM } from './defaults.js';
+import { globProblem } from './globs.js';
 import { requirementId } from './requirement-id.js';
 import schema from './policy.schema.json' with { type: 'json' };
 import { describePath as describe, throwSchemaErrors } from './schema-errors.js';
@@ -90,8 +91,17 @@ const ENGINE: Record<RemoveWhat, Partial<Record<RemovalOrder, { static?: Challen
 
 type Obj = Record<string, unknown>;
 
-function globs(value: unknown): string[] {
-  return typeof value === 'string' ? [value] : (value as string[]);
+/**
+ * The globs of a `files` / `ignore` value (one glob or a list), each checked (globs.ts): a glob
+ * that could select nothing is a PolicyError at its own line, named as `what` says.
+ */
+function globs(value: unknown, src: YamlSource, path: readonly Segment[], what: string): string[] {
+  const list = typeof value === 'string' ? [value] : (value as string[]);
+  list.forEach((g, j) => {
+    const problem = globProblem(g);
+    if (problem) throw new PolicyError(`${what}, glob "${g}" ${problem.message}`, src.where(typeof value === 'string' ? path : [...path, j]), problem.hint);
+  });
+  return list;
 }
 
 class FileBuilder {
@@ -345,13 +355,14 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   if (raw.designs !== undefined) {
     policy.designs = (raw.designs as Obj[]).map(
       (d, i): DesignGlob => ({
-        paths: globs(d.paths),
+        paths: globs(d.paths, src, ['designs', i, 'paths'], `designs entry ${i + 1}`),
         ...(d.format !== undefined ? { format: d.format as DesignFormat } : {}),
         where: src.where(['designs', i]),
+        fileWhere: typeof d.paths === 'string' ? [src.where(['designs', i, 'paths'])] : (d.paths as string[]).map((_, j) => src.where(['designs', i, 'paths', j])),
       }),
     );
   }
-  if (raw.exclude !== undefined) policy.exclude = { globs: globs(raw.exclude), where: src.where(['exclude']) };
+  if (raw.exclude !== undefined) policy.exclude = { globs: globs(raw.exclude, src, ['exclude'], 'exclude'), where: src.where(['exclude']) };
   if (raw.seed !== undefined) policy.seed = { value: raw.seed as number, where: src.where(['seed']) };
   if (raw['r-value'] !== undefined) {
     const r = raw['r-value'] as Obj;
@@ -399,7 +410,7 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   policy.scopes = ((raw.scopes as Obj[] | undefined) ?? []).map((o, i): Scope => {
     const path: Segment[] = ['scopes', i];
     const scope: Scope = {
-      paths: globs(o.paths),
+      paths: globs(o.paths, src, [...path, 'paths'], `scope ${i + 1}`),
       requirements: b.requirements(o.requirements, [...path, 'requirements']),
       where: src.where(path),
     };

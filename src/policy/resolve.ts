@@ -9,6 +9,7 @@ import picomatch from 'picomatch';
 import { EncodingError } from '../decode.js';
 import { PolicyError } from '../errors.js';
 import type { RValueSpec } from '../envelope/types.js';
+import type { DesignFormat } from '../topology/model.js';
 import { isMetricId, metrics as knownMetrics } from '../metrics/registry.js';
 import { closest } from '../topology/suggest.js';
 import { budgetWork, ENGINE_VISITS_PER_SECOND } from './budget.js';
@@ -457,7 +458,8 @@ function mergeChain(chain: PolicyFile[]): Policy {
 
 const matchers = new Map<string, (path: string) => boolean>();
 
-function matches(globs: readonly string[], given: string): boolean {
+/** Whether any of the globs matches the repository path (every policy glob goes through here). */
+export function globsMatch(globs: readonly string[], given: string): boolean {
   // picomatch's `**` is a regex `.`, which stops at line terminators: a design in a directory
   // whose name holds a line break would slip past every `**/` glob. Match such paths with the
   // breaks stood in for by a character `.` does match.
@@ -474,7 +476,12 @@ function matches(globs: readonly string[], given: string): boolean {
 
 /** Whether the policy treats this repository path as a design file. */
 export function isDesignPath(policy: Policy, path: string): boolean {
-  return policy.designs.some((d) => matches(d.paths, path)) && !matches(policy.exclude, path);
+  return policy.designs.some((d) => globsMatch(d.paths, path)) && !globsMatch(policy.exclude, path);
+}
+
+/** The format the policy forces on this path (a `designs` entry's `format`), if any. */
+export function designFormat(policy: Policy, path: string): DesignFormat | undefined {
+  return policy.designs.find((d) => d.format !== undefined && globsMatch(d.paths, path))?.format;
 }
 
 /** The rules for one design file: the policy with its matching scopes applied. Throws PolicyError. */
@@ -485,7 +492,7 @@ export function policyForFile(policy: Policy, path: string): FilePolicy {
   let removed: Layered<{ severity: RemovedSeverity; where?: Where }> = { value: policy.removedDesigns, layer: layers.removed };
   let budget: Layered<Budget> = { value: policy.budget, layer: layers.budget };
   for (const o of policy.scopes) {
-    if (!matches(o.paths, path)) continue;
+    if (!globsMatch(o.paths, path)) continue;
     const { layer } = o;
     const what = `a scope matching ${path}`;
     for (const r of o.requirements) mergeRequirement(requirements, { value: r, layer }, what);
@@ -494,7 +501,7 @@ export function policyForFile(policy: Policy, path: string): FilePolicy {
     if (o.budget) budget = mergeBudget(budget, { value: o.budget, layer }, what);
   }
   const b = budget.value;
-  const format = policy.designs.find((d) => d.format !== undefined && matches(d.paths, path))?.format;
+  const format = designFormat(policy, path);
   return {
     rValue: policy.rValue,
     seed: policy.seed,

@@ -117,6 +117,8 @@ export interface DesignGlob {
   paths: string[];
   format?: DesignFormat;
   where: Where;
+  /** Where each of `paths` was written (the built-in policy's globs included). */
+  fileWhere: Where[];
 }
 
 /**

@@ -21,7 +21,7 @@ describe('netbrace envelope', () => {
   });
 
   it('prints the envelope JSON fields, worst case included when asked', async () => {
-    const { code, out } = await run(design, '--challenge', 'random-links', '--realizations', '30', '--worst-case', '2', '--json', '--threads', '1');
+    const { code, out } = await run(design, '--challenge', 'random-links', '--metric', 'largest_component', '--realizations', '30', '--worst-case', '2', '--json', '--threads', '1');
     expect(code).toBe(0);
     const j = JSON.parse(out);
     for (const key of ['challenge', 'x', 'min', 'max', 'mean', 'quantiles', 'area', 'spread', 'weakest', 'worst_case']) expect(j).toHaveProperty(key);
@@ -36,7 +36,7 @@ describe('netbrace envelope', () => {
   });
 
   it('gives a targeted attack its curve at every removal step and its sequence', async () => {
-    const { code, out } = await run(design, '--challenge', 'degree', '--until', '0.2', '--json');
+    const { code, out } = await run(design, '--challenge', 'degree', '--metric', 'largest_component', '--until', '0.2', '--json');
     expect(code).toBe(0);
     const j = JSON.parse(out);
     expect(j.values.length).toBe(j.sequence.length + 1);

@@ -277,13 +277,21 @@ describe('the gate on the command line', () => {
     commitFiles(repo, { '.netbrace.yaml': null }, 'no policy');
   });
 
-  it('design globs that name ../ or absolute paths match nothing outside: only repository files are judged', async () => {
+  it('design globs that name ../ or absolute paths are refused where they are written; only repository files are judged', async () => {
     refusals++;
-    const policy = `designs:\n  - paths: ["../**", "${outside}/**", "/**/*.net.yaml", "**/*.net.yaml"]\n`;
-    commitFiles(repo, { '.netbrace.yaml': policy }, 'globs');
+    // Such a glob can match no repository path: it is a policy error at its line (policy/globs.ts).
+    for (const glob of ['../**', `${outside}/**`, '/**/*.net.yaml']) {
+      commitFiles(repo, { '.netbrace.yaml': `designs:\n  - paths: ["**/*.net.yaml", "${glob}"]\n` }, 'globs');
+      const r = await cli(repo, 'check', '--worktree', '--policy-source', 'head', '--format', 'json', 'designs/ring.net.yaml');
+      expect([glob, r.code, r.out]).toEqual([glob, 2, '']);
+      expect(r.err).toMatch(/^\.netbrace\.yaml:2:30: designs entry 1, glob "/);
+      expect(r.err).not.toContain(SECRET);
+    }
+    commitFiles(repo, { '.netbrace.yaml': 'designs:\n  - paths: ["**/*.net.yaml"]\n' }, 'globs');
     const r = await cli(repo, 'check', '--worktree', '--policy-source', 'head', '--format', 'json', 'designs/ring.net.yaml');
     expect(r.code, r.err).toBeLessThan(2);
-    const all = await cli(repo, 'check', '--head', 'HEAD', '--base', 'HEAD~1', '--format', 'json');
+    // (the base's policy is the refused one: the head's judges)
+    const all = await cli(repo, 'check', '--head', 'HEAD', '--base', 'HEAD~1', '--policy-source', 'head', '--format', 'json');
     for (const out of [r.out, all.out]) {
       const report = JSON.parse(out) as Report;
       for (const f of report.files) expect(f.path.startsWith('..') || path.isAbsolute(f.path)).toBe(false);

@@ -116,7 +116,7 @@ describe('netbrace inspect', () => {
 
   it('usage errors exit 2', async () => {
     expect((await run('inspect')).code).toBe(2);
-    expect((await run('inspect', '--format', 'dot', 'x.gml')).stderr).toBe('unknown design format "dot" — use one of yaml, json, graphml, gml, csv\n');
+    expect((await run('inspect', '--format', 'dot', 'x.gml')).stderr).toBe('unknown design format "dot" — use one of yaml, json, graphml, gml, csv, geojson\n');
     expect((await run('inspect', '--max-bytes', 'lots', 'x.gml')).code).toBe(2);
     expect((await run('inspect', '--colour', 'x.gml')).code).toBe(2);
   });

@@ -19,7 +19,7 @@ describe('format detection', () => {
       'csv',
       'native-yaml',
     ]);
-    expect(caught(() => parseFormatName('dot')).format()).toBe('unknown design format "dot" — use one of yaml, json, graphml, gml, csv');
+    expect(caught(() => parseFormatName('dot')).format()).toBe('unknown design format "dot" — use one of yaml, json, graphml, gml, csv, geojson');
   });
 
   it('options.format overrides the extension', () => {
@@ -29,7 +29,7 @@ describe('format detection', () => {
 
   it('an unknown extension is a located error with a hint', () => {
     expect(caught(() => parseDesign('', 'net.txt')).format()).toBe(
-      'net.txt:1:1: cannot tell the design format from the file name — use an extension .net.yaml, .net.json, .graphml, .gml or .csv, or force one (yaml, json, graphml, gml, csv)',
+      'net.txt:1:1: cannot tell the design format from the file name — use an extension .net.yaml, .net.json, .graphml, .gml, .csv or .geojson, or force one (yaml, json, graphml, gml, csv, geojson)',
     );
   });
 });

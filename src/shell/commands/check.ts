@@ -22,7 +22,9 @@ const HELP = `Usage: netbrace check [options] [PATH...]
 
 Judge network designs against the policy: every design file that changed between two
 revisions (or the PATHs given), at the head and at the base, with the same rules the
-GitHub Action applies.
+GitHub Action applies. A design deleted and added again under another file (a change of
+format, say) is judged as renamed: paired by its network name, else by its base name in the
+same directory. A PATH that exists at neither side is a usage error.
 
 Revisions:
   --base REF             compare with REF (default: HEAD for --worktree, else the head's

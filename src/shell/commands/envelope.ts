@@ -1,6 +1,9 @@
 // `netbrace envelope FILE --challenge NAME ...`: one challenge on one design — the robustness
 // envelope of a random challenge (band over realizations), the curve of a targeted attack, or
 // the N−1 / N−2 table — with the weakest sequences and, on request, the worst-case search.
+// The policy is the gate's (local-policy.ts): its R, seed and work budget apply unless an
+// option says otherwise, and a challenge it defines can be named as the policy names it, to
+// run with the parameters the gate gives it (evaluationSpecs in run-gate.ts).
 
 import { availableParallelism } from 'node:os';
 import type { Command, CommandIO } from '../io.js';
@@ -11,7 +14,11 @@ import { parseFormatName, FORMAT_CHOICES } from '../../topology/detect.js';
 import { challenges, DEFAULTS, isChallengeName } from '../../challenges/registry.js';
 import { isMetricId, metrics } from '../../metrics/registry.js';
 import { CAUTION } from '../../report/report.js';
-import { DEFAULT_MAX_WORK, type DesignEvaluation, type EvaluationSpec } from '../../envelope/evaluate.js';
+import type { DesignEvaluation, EvaluationSpec } from '../../envelope/evaluate.js';
+import { budgetWork } from '../../policy/budget.js';
+import { DEFAULT_POLICY_PATH, REGIONAL_UNTIL_KM } from '../../policy/defaults.js';
+import { evaluationSpecs } from '../../run-gate.js';
+import { designPolicy, readLocalPolicy } from '../local-policy.js';
 import { evaluateDesignParallel } from '../../parallel/pool.js';
 import type { AttackCurve, ChallengeParams, Contingency, Envelope, RValueSpec, WorstCase } from '../../envelope/types.js';
 import type { MetricId } from '../../metrics/types.js';
@@ -27,18 +34,25 @@ for a random challenge the envelope (min, max, mean, quantile band with confiden
 intervals, area, spread, the three weakest realizations), for a targeted attack its curve at
 every removal step and its removal sequence, for n-1 / n-2 the worst cases.
 
-Challenges:
+The policy is the gate's: --policy FILE, else ${DEFAULT_POLICY_PATH} at the root of the git
+repository that holds the working directory (outside git: in the working directory), else
+the built-in policy. Its r-value, seed and work budget for FILE apply unless --metric /
+--score, --seed or --max-work say otherwise, and NAME may be a challenge the policy defines
+(e.g. node-failures), run with the gate's parameters; the options below change them.
+
+Challenges (besides the policy's):
 ${CHALLENGE_LIST}
 
 Options:
-  --challenge NAME     the challenge (required; see the list above)
-  --metric ID          R is this one normalized metric (default largest_component)
+  --challenge NAME     the challenge (required): one the policy defines, or one of the list
+  --policy FILE        the policy file (default ${DEFAULT_POLICY_PATH} at the repository root, if present)
+  --metric ID          R is this one normalized metric (default: the policy's r-value)
   --score ID=W,...     R is a weighted combination of metrics, e.g. efficiency=2,largest_component=1
   --combine mean|min   how --score combines: weighted mean (default) or minimum
   --realizations M     random realizations (default ${DEFAULTS.realizations}); regional uses every epicentre
-  --seed S             seed of the random orders (default 1); same seed, same result
+  --seed S             seed of the random orders (default: the policy's); same seed, same result
   --until X            end of the x axis: a fraction of nodes/links/groups (default ${DEFAULTS.until}),
-                       or a radius in km for regional (default: a quarter of the widest site distance)
+                       or a radius in km for regional (default ${REGIONAL_UNTIL_KM} km, the gate's)
   --points K           grid points on the x axis, 0 included (default ${DEFAULTS.points})
   --band LO,HI         quantiles of the band (default ${DEFAULTS.band.join(',')})
   --worst-case K       also search the weakest removal sequence of length K (exact for K ≤ 2)
@@ -46,8 +60,8 @@ Options:
   --element node|link  what n-1 / n-2 remove (default node)
   --threads N          worker threads (default: the machine's cores, at most 4); the result
                        does not depend on it
-  --max-work W         work budget in element visits (default ${DEFAULT_MAX_WORK}); beyond it
-                       realizations are reduced and the output says so
+  --max-work W         work budget in element visits (default: the policy's budget for FILE);
+                       beyond it realizations are reduced and the output says so
   --format F           read FILE as F (${FORMAT_CHOICES}) instead of by extension
   --json               print one JSON object
 
@@ -55,6 +69,7 @@ Metrics: ${metrics.map((m) => m.id).join(', ')}
 
 Examples:
   netbrace envelope designs/core.net.yaml --challenge random-nodes --metric efficiency
+  netbrace envelope designs/core.net.yaml --challenge node-failures   a challenge of the policy
   netbrace envelope core.graphml --challenge degree-adaptive --until 0.2 --json
   netbrace envelope core.net.yaml --challenge n-1 --element link
   netbrace envelope core.net.yaml --challenge regional --until 300 --points 7
@@ -64,7 +79,6 @@ engineering studies, and local codes, standards and licensed practice decide.
 
 Exit codes: 0 evaluated, 1 the design could not be read, 2 usage error.
 `;
-
 
 export function parseScore(text: string, combine: string | undefined): RValueSpec {
   if (combine !== undefined && combine !== 'mean' && combine !== 'min') {
@@ -82,10 +96,24 @@ export function parseScore(text: string, combine: string | undefined): RValueSpe
   return { metrics: list, combine: (combine ?? 'mean') as 'mean' | 'min' };
 }
 
+/** Where the run's R and challenge came from, for the output. */
+export interface EnvelopeOrigin {
+  /** The policy's name of the challenge, when NAME was one. */
+  policyChallenge?: string;
+  /** "--metric", "--score", or the policy R came from. */
+  rSource?: string;
+}
+
 /** The command's JSON: one object per run (snake_case, as the CLI's other outputs). */
-export function envelopeJson(file: string, spec: EvaluationSpec, ev: DesignEvaluation): Record<string, unknown> {
+export function envelopeJson(file: string, spec: EvaluationSpec, ev: DesignEvaluation, origin: EnvelopeOrigin = {}): Record<string, unknown> {
   const e = ev.evaluation;
-  const common = { file, r: spec.r, seed: spec.seed };
+  const common = {
+    file,
+    ...(origin.policyChallenge !== undefined ? { policy_challenge: origin.policyChallenge } : {}),
+    r: spec.r,
+    ...(origin.rSource !== undefined ? { r_source: origin.rSource } : {}),
+    seed: spec.seed,
+  };
   const worst = (w: WorstCase | undefined) => (w ? { worst_case: { k: w.k, method: w.method, kind: w.kind, elements: w.elements, values: w.values } } : {});
   const env: Envelope | undefined = e.envelopes[0];
   const attack: AttackCurve | undefined = e.attacks[0];
@@ -132,7 +160,7 @@ function shortList(ids: readonly string[], limit = 10): string {
 }
 
 /** The human view. */
-export function formatEnvelope(file: string, spec: EvaluationSpec, ev: DesignEvaluation): string {
+export function formatEnvelope(file: string, spec: EvaluationSpec, ev: DesignEvaluation, origin: EnvelopeOrigin = {}): string {
   const e = ev.evaluation;
   const rText = spec.r.metrics.length === 1 ? spec.r.metrics[0].id : `${spec.r.combine} of ${spec.r.metrics.map((m) => `${m.id}×${m.weight}`).join(', ')}`;
   const lines: string[] = [];
@@ -173,6 +201,11 @@ export function formatEnvelope(file: string, spec: EvaluationSpec, ev: DesignEva
     for (const w of cont.worst) lines.push(`  ${f4(w.value)}  ${w.elements.join(' + ')}`);
   }
   for (const d of e.degraded) lines.push(`  degraded: ${d}`);
+  const from = [
+    origin.policyChallenge !== undefined ? `challenge "${origin.policyChallenge}" of the policy` : '',
+    origin.rSource !== undefined ? `R from ${origin.rSource}` : '',
+  ].filter(Boolean);
+  if (from.length) lines.push(`  ${from.join('; ')}`);
   lines.push('', `note: ${CAUTION}`);
   return `${lines.join('\n')}\n`;
 }
@@ -184,6 +217,7 @@ export const envelopeCommand: Command = {
   async run(args: string[], io: CommandIO): Promise<number> {
     const parsed = parseCommandArgs('envelope', args, {
       challenge: { type: 'string' },
+      policy: { type: 'string' },
       metric: { type: 'string' },
       score: { type: 'string' },
       combine: { type: 'string' },
@@ -203,18 +237,39 @@ export const envelopeCommand: Command = {
     const v = parsed.values;
     if (parsed.positionals.length !== 1) throw new UsageError('envelope needs exactly one FILE', 'netbrace envelope designs/core.net.yaml --challenge random-nodes');
     const file = parsed.positionals[0];
-    if (v.challenge === undefined) throw new UsageError('--challenge is required', `one of: ${challenges.map((c) => c.name).join(', ')}`);
-    if (!isChallengeName(v.challenge)) throw new UsageError(`unknown challenge "${v.challenge}"`, `one of: ${challenges.map((c) => c.name).join(', ')}`);
     if (v.metric !== undefined && v.score !== undefined) throw new UsageError('give --metric or --score, not both');
     if (v.combine !== undefined && v.score === undefined) throw new UsageError('--combine goes with --score');
+    const local = await readLocalPolicy(io, v.policy);
+    const fp = designPolicy(local, io, file);
+    const names = [...fp.challenges.map((c) => c.name), ...challenges.map((c) => c.name).filter((n) => !fp.challenges.some((c) => c.name === n))];
+    if (v.challenge === undefined) throw new UsageError('--challenge is required', `one of: ${names.join(', ')}`);
+    const defined = fp.challenges.find((c) => c.name === v.challenge);
+    if (!defined && !isChallengeName(v.challenge)) throw new UsageError(`unknown challenge "${v.challenge}"`, `one of: ${names.join(', ')}`);
+    const origin: EnvelopeOrigin = {};
     let r: RValueSpec;
-    if (v.score !== undefined) r = parseScore(v.score, v.combine);
-    else {
-      const id = v.metric ?? 'largest_component';
-      if (!isMetricId(id)) throw new UsageError(`unknown metric "${id}"`, `known metrics: ${metrics.map((m) => m.id).join(', ')}`);
-      r = { metrics: [{ id, weight: 1 }], combine: 'mean' };
+    if (v.score !== undefined) {
+      r = parseScore(v.score, v.combine);
+      origin.rSource = '--score';
+    } else if (v.metric !== undefined) {
+      if (!isMetricId(v.metric)) throw new UsageError(`unknown metric "${v.metric}"`, `known metrics: ${metrics.map((m) => m.id).join(', ')}`);
+      r = { metrics: [{ id: v.metric, weight: 1 }], combine: 'mean' };
+      origin.rSource = '--metric';
+    } else {
+      r = fp.rValue;
+      origin.rSource = local.source;
     }
-    const params: ChallengeParams = { challenge: v.challenge };
+    const seed = wholeNumber('--seed', v.seed, 0) ?? fp.seed;
+    let params: ChallengeParams;
+    if (defined) {
+      // The gate's request for this challenge (its grid includes every threshold's x).
+      const gate = evaluationSpecs(fp, seed)[0].challenges.find((c) => c.challenge === defined.engine);
+      params = { ...(gate ?? defined.params) };
+      origin.policyChallenge = defined.name;
+    } else {
+      params = { challenge: v.challenge as ChallengeParams['challenge'] };
+      // The radius the gate gives a region without "until" (the same for every design).
+      if (v.challenge === 'regional') params.until = REGIONAL_UNTIL_KM;
+    }
     const set = <K extends keyof ChallengeParams>(key: K, value: ChallengeParams[K] | undefined) => {
       if (value !== undefined) params[key] = value;
     };
@@ -232,14 +287,18 @@ export const envelopeCommand: Command = {
       if (v.element !== 'node' && v.element !== 'link') throw new UsageError(`--element must be node or link, not "${v.element}"`);
       params.element = v.element;
     }
-    const seed = wholeNumber('--seed', v.seed, 0) ?? 1;
+    // A threshold's x beyond a changed --until is not on the grid any more.
+    if (params.at && params.until !== undefined) params.at = params.at.filter((x) => x <= params.until!);
     const threads = wholeNumber('--threads', v.threads, 1) ?? Math.min(4, availableParallelism());
-    const maxWork = finiteNumber('--max-work', v['max-work'], (x) => x > 0, 'a number > 0');
+    const maxWorkArg = finiteNumber('--max-work', v['max-work'], (x) => x > 0, 'a number > 0');
+    // The same budget arithmetic as the gate's (policy/budget.ts).
+    const maxWork = maxWorkArg !== undefined ? budgetWork({ work: maxWorkArg }) : fp.budget.maxWork;
     const options: ReadDesignOptions = { cwd: io.cwd };
     if (v.format !== undefined) options.format = parseFormatName(v.format);
+    else if (fp.format) options.format = fp.format; // as the gate reads it
 
     const g = compileTopology(readDesign(file, options));
-    const spec: EvaluationSpec = { r, seed, challenges: [params], ...(maxWork !== undefined ? { budget: { maxWork } } : {}) };
+    const spec: EvaluationSpec = { r, seed, challenges: [params], budget: { maxWork } };
     let ev: DesignEvaluation;
     try {
       ev = await evaluateDesignParallel(g, spec, threads);
@@ -251,7 +310,7 @@ export const envelopeCommand: Command = {
     if (e.envelopes.length + e.attacks.length + e.contingencies.length === 0) {
       throw new UsageError(e.degraded[0] ?? `${v.challenge} produced no result`, 'choose another challenge for this design');
     }
-    io.stdout(v.json ? `${JSON.stringify(envelopeJson(file, spec, ev), null, 2)}\n` : formatEnvelope(file, spec, ev));
+    io.stdout(v.json ? `${JSON.stringify(envelopeJson(file, spec, ev, origin), null, 2)}\n` : formatEnvelope(file, spec, ev, origin));
     return 0;
   },
 };

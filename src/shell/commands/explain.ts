@@ -1,26 +1,30 @@
 // `netbrace explain FILE`: the planner's to-do list. Every single element (site, link, and
 // shared-risk group: one duct is one event) is removed on its own, R is taken on what is left
 // (the N−1 challenge, exhaustively), and the elements are ranked by the R they leave, worst
-// first, each with its line in the design file and the sites it cuts off.
+// first, each with its line in the design file and the sites it cuts off. R and the work
+// budget are the gate's: the policy that applies to the file (local-policy.ts).
+// Under the budget a big design is not ranked in full: single points of failure first, then
+// shared-risk groups, then the best-connected sites and links (planSingleLosses), and the
+// output says how many were left out.
 
-import path from 'node:path';
 import type { Command, CommandIO } from '../io.js';
-import { parseCommandArgs, wholeNumber } from '../args.js';
+import { finiteNumber, parseCommandArgs, wholeNumber } from '../args.js';
 import { UsageError } from '../../errors.js';
 import { compileTopology, type CompactGraph } from '../../graph/compact.js';
 import { createMask } from '../../graph/mask.js';
 import { findComponents, findCutElements } from '../../graph/structure.js';
-import { createRValue, type RFunction } from '../../envelope/r-value.js';
+import { createRValue, rPasses, type RFunction } from '../../envelope/r-value.js';
 import type { ElementKind, RValueSpec } from '../../envelope/types.js';
-import { eligibleUnits, removeUnit, restoreUnit, unitCount, unitIds } from '../../challenges/units.js';
+import { countOnes, eligibleUnits, removeUnit, restoreUnit, unitCount, unitIds } from '../../challenges/units.js';
 import { getMetric, isMetricId, metrics as knownMetrics } from '../../metrics/registry.js';
-import { builtinPolicy, loadPolicy, policyForFile, DEFAULT_POLICY_PATH } from '../../policy/resolve.js';
+import { DEFAULT_POLICY_PATH } from '../../policy/resolve.js';
+import { budgetWork } from '../../policy/budget.js';
+import { designPolicy, readLocalPolicy } from '../local-policy.js';
 import { parseFormatName, FORMAT_CHOICES } from '../../topology/detect.js';
 import type { Topology } from '../../topology/model.js';
 import { CAUTION } from '../../report/report.js';
 import { wrap } from '../../report/terminal.js';
 import { readDesign, type ReadDesignOptions } from '../read-design.js';
-import { readInsideSync } from '../workspace.js';
 import { createProgress, type Progress } from '../progress.js';
 import { colorEnabled, terminalWidth } from '../color.js';
 import { createColors } from 'picocolors';
@@ -52,6 +56,28 @@ export interface Explanation {
   evaluated: Record<ElementKind, number>;
   hardened: Record<ElementKind, number>;
   elements: SingleLoss[];
+  /** Set when the work budget left single losses out (they are not ranked). */
+  reduced?: ReducedRanking;
+}
+
+export interface ReducedRanking {
+  /** Single losses evaluated, and how many there are. */
+  evaluated: number;
+  total: number;
+  /** The work budget (element visits) and the work the whole ranking needs. */
+  maxWork: number;
+  work: number;
+  /** Which ones were evaluated, in words. */
+  chosen: string;
+}
+
+/** One planned ranking: which units of each kind are evaluated, within the budget. */
+export interface SingleLossPlan {
+  /** Per kind, the eligible units to evaluate (all of them unless reduced). */
+  units: Map<ElementKind, Set<number>>;
+  /** Work of one single loss: R plus the component search, in element visits. */
+  perCase: number;
+  reduced?: ReducedRanking;
 }
 
 const KINDS: readonly ElementKind[] = ['node', 'link', 'group'];
@@ -65,6 +91,7 @@ export function rankSingleLosses(
   rfn: RFunction,
   kinds: readonly ElementKind[] = KINDS,
   onStep: (done: number, total: number) => void = () => {},
+  only?: ReadonlyMap<ElementKind, ReadonlySet<number>>,
 ): { intact: number; evaluated: Record<ElementKind, number>; hardened: Record<ElementKind, number>; ranked: Omit<SingleLoss, 'rank' | 'label'>[] } {
   const mask = createMask(g);
   const intact = rfn(mask);
@@ -75,7 +102,7 @@ export function rankSingleLosses(
   const hardened: Record<ElementKind, number> = { node: 0, link: 0, group: 0 };
   const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
   let total = 0;
-  for (const k of kinds) for (const e of eligible.get(k)!) total += e;
+  for (const k of kinds) total += only ? (only.get(k)?.size ?? 0) : countOnes(eligible.get(k)!);
   const out: (Omit<SingleLoss, 'rank' | 'label'> & { order: number })[] = [];
   let done = 0;
   for (const kind of kinds) {
@@ -86,6 +113,7 @@ export function rankSingleLosses(
         hardened[kind]++;
         continue;
       }
+      if (only && !only.get(kind)?.has(u)) continue;
       removeUnit(g, mask, kind, u);
       const r = rfn(mask);
       const comps = findComponents(g, mask);
@@ -110,27 +138,77 @@ export function rankSingleLosses(
   return { intact, evaluated, hardened, ranked: out.map(({ order: _order, ...rest }) => rest) };
 }
 
-/** R's definition: --metric ids, else the policy that applies to this file, else the built-in one. */
-function resolveR(file: string, metricIds: string[], policyPath: string | undefined, io: CommandIO): { spec: RValueSpec; source: string } {
-  if (metricIds.length) {
-    for (const id of metricIds) {
-      if (!isMetricId(id)) getMetric(id); // throws the UsageError that lists the known ids
+/** R's definition from --metric ids (an equal-weight mean), or undefined when none is given. */
+function metricR(metricIds: string[]): { spec: RValueSpec; source: string } | undefined {
+  if (metricIds.length === 0) return undefined;
+  for (const id of metricIds) {
+    if (!isMetricId(id)) getMetric(id); // throws the UsageError that lists the known ids
+  }
+  return {
+    spec: { metrics: metricIds.map((id) => ({ id: id as RValueSpec['metrics'][number]['id'], weight: 1 })), combine: 'mean' },
+    source: metricIds.length === 1 ? '--metric' : '--metric (equal weights)',
+  };
+}
+
+const CHOSEN =
+  'single points of failure (cut sites, bridges) first, then shared-risk groups, then the other sites and links ' +
+  'by the links they touch, most first (a share for each kind); the rest are not ranked, and one of them may hurt more than those shown';
+
+/**
+ * Which single losses to evaluate within `maxWork` element visits. One loss costs R (rPasses
+ * graph passes, the engine's estimate: envelope/evaluate.ts) plus one pass for the components,
+ * each pass visiting every node and link; the intact R costs one more. When all of them do not
+ * fit, the order of CHOSEN is our own heuristic (not a published rule): elements that cut sites
+ * off are the ones a planner must see, a duct fails many links at once, and an element that
+ * touches more links tends to leave a lower R. Ties go to file order. Pure.
+ */
+export function planSingleLosses(g: CompactGraph, spec: RValueSpec, kinds: readonly ElementKind[], maxWork: number): SingleLossPlan {
+  const perCase = (rPasses(g, spec) + 1) * (g.n + g.m);
+  const units = new Map<ElementKind, Set<number>>();
+  const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
+  let total = 0;
+  for (const k of kinds) total += countOnes(eligible.get(k)!);
+  const work = (total + 1) * perCase;
+  const fit = Math.max(0, Math.floor(maxWork / perCase) - 1);
+  if (work <= maxWork || fit >= total) {
+    for (const k of kinds) {
+      const ok = eligible.get(k)!;
+      units.set(k, new Set(Array.from({ length: ok.length }, (_, u) => u).filter((u) => ok[u])));
     }
-    return {
-      spec: { metrics: metricIds.map((id) => ({ id: id as RValueSpec['metrics'][number]['id'], weight: 1 })), combine: 'mean' },
-      source: metricIds.length === 1 ? '--metric' : '--metric (equal weights)',
-    };
+    return { units, perCase };
   }
-  // The policy and the files it inherits: inside the working directory, links included.
-  const read = (p: string) => readInsideSync(io.cwd, p);
-  const chosen = policyPath ?? (read(DEFAULT_POLICY_PATH) !== null ? DEFAULT_POLICY_PATH : undefined);
-  if (chosen === undefined) return { spec: builtinPolicy().rValue, source: 'the built-in policy' };
-  if (policyPath !== undefined && read(policyPath) === null) {
-    throw new UsageError(`policy file ${policyPath} not found`, 'give a path relative to the working directory');
+  for (const k of kinds) units.set(k, new Set());
+  let room = fit;
+  const take = (k: ElementKind, u: number) => {
+    if (room > 0 && !units.get(k)!.has(u)) {
+      units.get(k)!.add(u);
+      room--;
+    }
+  };
+  // 1. Single points of failure, 2. groups: in file order while there is room.
+  const cuts = findCutElements(g);
+  const okOf = (k: ElementKind) => eligible.get(k);
+  if (okOf('node')) for (const v of [...cuts.cutNodes].sort((a, b) => a - b)) if (okOf('node')![v]) take('node', v);
+  if (okOf('link')) for (const e of [...cuts.bridges].sort((a, b) => a - b)) if (okOf('link')![e]) take('link', e);
+  if (okOf('group')) for (let u = 0; u < g.groupIds.length; u++) if (okOf('group')![u]) take('group', u);
+  // 3. The rest of the sites and links by the links they touch, most first; each kind its share of the room left.
+  const degree = (v: number) => g.offsets[v + 1] - g.offsets[v];
+  const rest = new Map<ElementKind, number[]>();
+  for (const k of ['node', 'link'] as const) {
+    const ok = okOf(k);
+    if (!ok) continue;
+    const score = k === 'node' ? degree : (e: number) => degree(g.linkSource[e]) + degree(g.linkTarget[e]) - 2;
+    const list = Array.from({ length: ok.length }, (_, u) => u).filter((u) => ok[u] && !units.get(k)!.has(u));
+    list.sort((a, b) => score(b) - score(a) || a - b);
+    rest.set(k, list);
   }
-  const policy = loadPolicy(chosen, read);
-  const rel = path.relative(io.cwd, path.resolve(io.cwd, file)).split(path.sep).join('/');
-  return { spec: policyForFile(policy, rel).rValue, source: `policy ${chosen}` };
+  const left = [...rest.values()].reduce((s, l) => s + l.length, 0);
+  const budget = room;
+  for (const [k, list] of rest) for (const u of list.slice(0, Math.floor((budget * list.length) / Math.max(1, left)))) take(k, u);
+  for (const [k, list] of rest) for (const u of list) take(k, u); // what rounding left over, in kind order
+  let evaluated = 0;
+  for (const s of units.values()) evaluated += s.size;
+  return { units, perCase, reduced: { evaluated, total, maxWork, work, chosen: CHOSEN } };
 }
 
 export function explainDesign(
@@ -140,9 +218,11 @@ export function explainDesign(
   kinds: readonly ElementKind[] = KINDS,
   progress?: Progress,
   g: CompactGraph = compileTopology(t),
+  maxWork = Infinity,
 ): Explanation {
   const rfn = createRValue(g, spec, t.latencyBudget !== undefined ? { latencyBudget: t.latencyBudget } : undefined);
-  const res = rankSingleLosses(g, rfn, kinds, (done) => progress?.update(done));
+  const plan = planSingleLosses(g, spec, kinds, maxWork);
+  const res = rankSingleLosses(g, rfn, kinds, (done) => progress?.update(done), plan.reduced ? plan.units : undefined);
   const labels = new Map(t.nodes.filter((n) => n.label).map((n) => [n.id, n.label as string]));
   return {
     file: t.file,
@@ -155,7 +235,13 @@ export function explainDesign(
       const label = e.kind === 'node' ? labels.get(e.id) : undefined;
       return { rank: i + 1, ...e, ...(label !== undefined && label !== e.id ? { label } : {}) };
     }),
+    ...(plan.reduced ? { reduced: plan.reduced } : {}),
   };
+}
+
+/** Element visits in plain figures: 3e9, 40000. */
+function visits(n: number): string {
+  return n >= 1e6 ? n.toExponential(1).replace('e+', 'e').replace('.0e', 'e') : String(n);
 }
 
 const r4 = (v: number) => v.toFixed(4);
@@ -173,6 +259,13 @@ export function formatExplanation(x: Explanation, top: number, color: boolean, w
     `intact R ${r4(x.intact)} \u00b7 evaluated ${x.evaluated.node} sites, ${x.evaluated.link} links, ${x.evaluated.group} shared-risk groups` +
       (hard.length ? ` \u00b7 hardened, not removed: ${hard.join(', ')}` : ''),
   );
+  if (x.reduced) {
+    const r = x.reduced;
+    const line =
+      `reduced: ${r.evaluated} of ${r.total} single losses evaluated within the work budget (${visits(r.maxWork)} element visits; ` +
+      `all of them need ${visits(r.work)}): ${r.chosen}. Raise the policy's budget or give --max-work to rank them all.`;
+    for (const l of wrap(line, width)) out.push(c.yellow(l));
+  }
   out.push('');
   const rows = x.elements.slice(0, top);
   const shown = (e: SingleLoss) => (e.label && e.label.toLowerCase() !== e.id.toLowerCase() ? `${e.id} (${e.label})` : e.id);
@@ -198,30 +291,37 @@ export function formatExplanation(x: Explanation, top: number, color: boolean, w
   return out.join('\n') + '\n';
 }
 
-const HELP = `Usage: netbrace explain FILE [--metric ID]... [--top N] [--kind K] [--policy FILE] [--json]
+const HELP = `Usage: netbrace explain FILE [--metric ID]... [--top N] [--kind K] [--policy FILE] [--max-work W] [--json]
 
 The planner's to-do list: removes every site, every link and every shared-risk group
 (a duct: all its links at once) on its own, computes R on what is left, and ranks them
 by the R they leave, worst first. Each row gives the element's line in FILE, the R it
 leaves, the drop from the intact R, and the sites it cuts off from the largest part.
 
-R is defined by, in this order: the --metric options (equal weights); the policy's
-r-value for FILE (--policy FILE, else ${DEFAULT_POLICY_PATH} in the working directory, if
-present); the built-in policy. Hardened elements are never removed.
+The policy is the gate's: --policy FILE, else ${DEFAULT_POLICY_PATH} at the root of the git
+repository that holds the working directory (outside git: in the working directory), else
+the built-in policy. R is the --metric options (equal weights), else the policy's r-value for
+FILE. The work is held to the policy's budget for FILE (or --max-work): on a design too big
+to rank in full, single points of failure come first, then shared-risk groups, then the
+sites and links that touch the most links, and the output says how many were left out.
+Hardened elements are never removed.
 
 Options:
   --metric ID    a metric for R (repeat for an equal-weight mean); one of:
                  ${knownMetrics.map((m) => m.id).join(', ')}
   --top N        show the N worst rows (default 15; --json lists all)
   --kind K       node, link, group or all (default all)
-  --policy FILE  the policy file whose r-value applies (default ${DEFAULT_POLICY_PATH} if present)
+  --policy FILE  the policy file (default ${DEFAULT_POLICY_PATH} at the repository root, if present)
+  --max-work W   work budget in element visits (default: the policy's budget for FILE)
   --format F     read FILE as F (${FORMAT_CHOICES}) instead of by extension
-  --json         print the ranking as JSON: {file, r, intact, evaluated, hardened, elements}
+  --json         print the ranking as JSON: {file, r, intact, evaluated, hardened, elements,
+                 reduced (when the budget left losses out)}
 
 Examples:
   netbrace explain designs/backbone.net.yaml
   netbrace explain designs/backbone.net.yaml --metric largest_component --top 5
   netbrace explain core.graphml --kind link --json | jq '.elements[0]'
+  netbrace explain big.graphml --max-work 1e10      rank more of a big design
 
 Exit codes:
   0  the ranking was printed
@@ -239,6 +339,7 @@ export const explainCommand: Command = {
       top: { type: 'string' },
       kind: { type: 'string' },
       policy: { type: 'string' },
+      'max-work': { type: 'string' },
       format: { type: 'string' },
       json: { type: 'boolean' },
     });
@@ -254,14 +355,21 @@ export const explainCommand: Command = {
     const options: ReadDesignOptions = { cwd: io.cwd };
     if (parsed.values.format !== undefined) options.format = parseFormatName(parsed.values.format);
 
-    const { spec, source } = resolveR(file, parsed.values.metric ?? [], parsed.values.policy, io);
+    const maxWorkArg = finiteNumber('--max-work', parsed.values['max-work'], (x) => x > 0, 'a number > 0');
+
+    const local = await readLocalPolicy(io, parsed.values.policy);
+    const fp = designPolicy(local, io, file);
+    const { spec, source } = metricR(parsed.values.metric ?? []) ?? { spec: fp.rValue, source: local.source };
+    // The same budget arithmetic as the gate's (policy/budget.ts).
+    const maxWork = maxWorkArg !== undefined ? budgetWork({ work: maxWorkArg }) : fp.budget.maxWork;
+    if (options.format === undefined && fp.format) options.format = fp.format; // as the gate reads it
     const t = readDesign(file, options);
     const g = compileTopology(t);
-    const total = kinds.reduce((s, k) => s + unitCount(g, k), 0);
+    const total = [...planSingleLosses(g, spec, kinds, maxWork).units.values()].reduce((s, u) => s + u.size, 0);
     const progress = createProgress(io, { label: `explain ${file}`, total });
     let x: Explanation;
     try {
-      x = explainDesign(t, spec, source, kinds, progress, g);
+      x = explainDesign(t, spec, source, kinds, progress, g, maxWork);
     } finally {
       progress.finish();
     }
