@@ -17,6 +17,7 @@
 // reduction is stated in `degraded` (per challenge and for the evaluation).
 
 import type { CompactGraph } from '../graph/compact.js';
+import { reportElement } from '../graph/element.js';
 import { findComponents, findCutElements } from '../graph/structure.js';
 import type { Evaluation, StructureSummary } from '../report/report.js';
 import { getChallenge, resolveParams } from '../challenges/registry.js';
@@ -207,8 +208,8 @@ export function structureSummary(g: CompactGraph): StructureSummary {
     nodes: g.n,
     links: g.m,
     components: comps.sizes.length,
-    bridges: cuts.bridges.map((e) => ({ id: g.linkIds[e], kind: 'link' as const, line: g.linkLine[e] })),
-    cutNodes: cuts.cutNodes.map((v) => ({ id: g.nodeIds[v], kind: 'node' as const, line: g.nodeLine[v] })),
+    bridges: cuts.bridges.map((e) => reportElement(g, 'link', e)),
+    cutNodes: cuts.cutNodes.map((v) => reportElement(g, 'node', v)),
   };
 }
 

@@ -3,6 +3,7 @@
 // two evaluations (base and head) can be compared pairwise with common random numbers.
 
 import type { MetricId } from '../metrics/types.js';
+import type { Consequence, ReportElement } from '../report/report.js';
 
 /** How normalized metrics combine into R. */
 export interface RValueSpec {
@@ -65,6 +66,10 @@ export interface RemovalSequence {
   realization?: number;
   /** What the realization stands for, e.g. the epicentre site of a regional failure. */
   label?: string;
+  /** The elements with their lines and labels (added by the gate for the report). */
+  located?: ReportElement[];
+  /** What the whole sequence costs (added by the gate for the report). */
+  consequence?: Consequence;
 }
 
 export interface WorstCase extends RemovalSequence {
@@ -135,8 +140,8 @@ export interface Contingency {
   /** Cases evaluated and cases that exist. */
   evaluated: number;
   total: number;
-  /** The worst cases, ascending by R. */
-  worst: { elements: string[]; value: number }[];
+  /** The worst cases, ascending by R (`located`: the elements with lines and labels, added by the gate). */
+  worst: { elements: string[]; value: number; located?: ReportElement[] }[];
   /** Lowest R over evaluated cases. */
   min: number;
 }

@@ -20,15 +20,21 @@
 // more than that, and uncertain in between; when the budget cut base and head differently
 // their realizations do not pair, and the change is uncertain whatever its sign. Every
 // requirement whose value rests on reduced work says so in a finding of its own.
-// A new single point of failure is a bridge (by the link's stable key, its end ids) or cut node
-// (by node id) of the head that the base does not have; hardened elements never count, since
-// challenges never remove them.
+// A new single point of failure is a bridge, cut node or stranding shared-risk group of the head
+// that the base does not have, base and head matched by id and, for renamed ids, by
+// neighbourhood (spof.ts, rename.ts); hardened elements never count, but weak points hidden
+// by newly hardened ones are findings of their own.
 
 import type { ElementKind } from '../envelope/types.js';
-import { findCutElements } from '../graph/structure.js';
 import type { Finding, FileReport, FileStatus, ReportElement, RequirementResult, Severity } from '../report/report.js';
-import type { FilePolicy, Requirement, SpofRequirement } from '../policy/types.js';
-import { describeRequirement, formatDelta, formatR } from './describe.js';
+import type { FilePolicy, Requirement } from '../policy/types.js';
+import { withSequenceDetails } from './consequence.js';
+import { describeRequirement, elementChanges as describeElementChanges, formatDelta, formatR, type ElementChanges } from './describe.js';
+import { identityMatching, matchDesigns, type Matching } from './rename.js';
+import { judgeSpof } from './spof.js';
+
+/** Finding rules of new single points of failure (a failing one makes the file "regressed"). */
+const SPOF_RULES = new Set<Finding['rule']>(['new-bridge', 'new-cut-node', 'new-stranding-group', 'hardened-weak-point']);
 
 /** A standard error in findings: three decimals, or "unknown" when it cannot be estimated. */
 function formatSe(se: number): string {
@@ -271,84 +277,9 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
   return { row, findings };
 }
 
-interface SpofSet {
-  bridges: Map<string, number>;
-  cutNodes: Map<string, number>;
-}
-
-/** Bridges by stable link key and cut nodes by id, hardened ones left out. */
-function spofs(side: DesignSide): SpofSet {
-  const g = side.graph;
-  const cuts = findCutElements(g);
-  const bridges = new Map<string, number>();
-  for (const e of cuts.bridges) if (!g.linkHardened[e]) bridges.set(g.linkKeys[e], e);
-  const cutNodes = new Map<string, number>();
-  for (const v of cuts.cutNodes) if (!g.nodeHardened[v]) cutNodes.set(g.nodeIds[v], v);
-  return { bridges, cutNodes };
-}
-
-function judgeSpof(r: SpofRequirement, input: CompareInput, description: string): { row: RequirementResult; findings: Finding[] } {
-  const g = input.head!.graph;
-  const head = spofs(input.head!);
-  const comparing = !input.thresholdsOnly && input.base !== undefined;
-  const base = comparing ? spofs(input.base!) : undefined;
-  const count = (s: SpofSet) => (r.bridges ? s.bridges.size : 0) + (r.cutNodes ? s.cutNodes.size : 0);
-  const row: RequirementResult = {
-    id: r.id,
-    description,
-    severity: r.severity,
-    base: base ? count(base) : null,
-    head: count(head),
-    delta: base ? count(head) - count(base) : null,
-    se: base ? 0 : null,
-    threshold: null,
-    status: 'met',
-  };
-  const findings: Finding[] = [];
-  if (!base) return { row, findings };
-  if (r.bridges) {
-    for (const [key, e] of head.bridges) {
-      if (base.bridges.has(key)) continue;
-      const el: ReportElement = { id: g.linkIds[e], kind: 'link', line: g.linkLine[e] };
-      const ends = `${g.nodeIds[g.linkSource[e]]}\u2013${g.nodeIds[g.linkTarget[e]]}`;
-      findings.push(
-        finding('new-bridge', r.severity, `link ${el.id} (${ends}) is a new bridge: losing it splits the design, which the base did not`, [el], {
-          requirement: r.id,
-        }),
-      );
-    }
-  }
-  if (r.cutNodes) {
-    for (const [id, v] of head.cutNodes) {
-      if (base.cutNodes.has(id)) continue;
-      const el: ReportElement = { id, kind: 'node', line: g.nodeLine[v] };
-      findings.push(
-        finding('new-cut-node', r.severity, `node ${id} is a new cut node: losing it splits the design, which the base did not`, [el], {
-          requirement: r.id,
-        }),
-      );
-    }
-  }
-  if (findings.length > 0) row.status = 'regressed';
-  return { row, findings };
-}
-
-/** Nodes (by id) and links (by stable key) that the change added or removed. */
-export function elementChanges(base: DesignSide, head: DesignSide): { added: ReportElement[]; removed: ReportElement[] } {
-  const diff = (from: DesignSide, to: DesignSide): ReportElement[] => {
-    const a = from.graph;
-    const b = to.graph;
-    const out: ReportElement[] = [];
-    a.nodeIds.forEach((id, v) => {
-      if (!b.nodeIndex.has(id)) out.push({ id, kind: 'node', line: a.nodeLine[v] });
-    });
-    const keys = new Set(b.linkKeys);
-    a.linkKeys.forEach((key, e) => {
-      if (!keys.has(key)) out.push({ id: a.linkIds[e], kind: 'link', line: a.linkLine[e] });
-    });
-    return out;
-  };
-  return { added: diff(head, base), removed: diff(base, head) };
+/** Nodes, links and shared-risk groups that the change added, removed, renamed or (un)hardened. */
+export function elementChanges(base: DesignSide, head: DesignSide, matching: Matching = matchDesigns(base.graph, head.graph)): ElementChanges {
+  return describeElementChanges(base.graph, head.graph, matching);
 }
 
 /** Which status a judged file has, from its findings (only fail-severity findings change it). */
@@ -357,7 +288,7 @@ export function fileStatus(change: CompareInput['change'], findings: readonly Fi
   if (failing.some((f) => f.rule === 'parse-error')) return 'error';
   const thresholdRules = new Set<Finding['rule']>(Object.values(THRESHOLD_RULE));
   if (failing.some((f) => thresholdRules.has(f.rule))) return 'below-threshold';
-  if (failing.some((f) => f.rule === 'regression' || f.rule === 'new-bridge' || f.rule === 'new-cut-node')) return 'regressed';
+  if (failing.some((f) => f.rule === 'regression' || SPOF_RULES.has(f.rule))) return 'regressed';
   if (change === 'added') return 'new';
   if (change === 'renamed') return 'renamed';
   return 'pass';
@@ -392,9 +323,12 @@ export function compareDesign(input: CompareInput): FileReport {
       }),
     );
   }
+  const comparing = effective.base !== undefined && !effective.thresholdsOnly;
+  const matching = !comparing ? undefined : effective.base!.result === input.head.result ? identityMatching(input.head.graph) : matchDesigns(effective.base!.graph, input.head.graph);
   for (const r of input.policy.requirements) {
     const description = describeRequirement(r, input.policy.challenges);
-    const { row, findings } = r.kind === 'no-new-spof' ? judgeSpof(r, effective, description) : judge(r, effective, description);
+    const { row, findings } =
+      r.kind === 'no-new-spof' ? judgeSpof(r, description, input.head, comparing ? effective.base : undefined, matching) : judge(r, effective, description);
     report.requirements.push(row);
     report.findings.push(...findings);
   }
@@ -406,11 +340,11 @@ export function compareDesign(input: CompareInput): FileReport {
       report.findings.push(finding('degraded', 'notice', `base evaluation reduced: ${reason}`, [], { line: 0 }));
     }
   }
-  report.head = input.head.result.evaluation;
+  report.head = withSequenceDetails(input.head.result.evaluation, input.head.graph);
   if (effective.base && !effective.thresholdsOnly) {
-    report.base = effective.base.result.evaluation;
-    const changes = elementChanges(effective.base, input.head);
-    if (changes.added.length + changes.removed.length > 0) report.changes = changes;
+    report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.graph);
+    const changes = elementChanges(effective.base, input.head, matching);
+    if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) > 0) report.changes = changes;
   }
   report.status = fileStatus(input.change, report.findings);
   return report;

@@ -1,6 +1,11 @@
-// Plain words for requirements and numbers, shared by the findings' messages.
+// Plain words for requirements and numbers, shared by the findings' messages; and what a
+// change does to a design, element by element (added, removed, renamed, hardened).
 
+import type { CompactGraph } from '../graph/compact.js';
+import { reportElement } from '../graph/element.js';
 import type { ChallengeDef, Requirement } from '../policy/types.js';
+import type { FileReport, ReportElement } from '../report/report.js';
+import type { Matching } from './rename.js';
 
 const WHAT: Record<string, string> = { nodes: 'nodes', links: 'links', 'risk-groups': 'risk groups', region: 'region' };
 
@@ -51,8 +56,57 @@ export function describeRequirement(r: Requirement, challenges: readonly Challen
     case 'n-1':
       return `R after any single ${r.element} removal \u2265 ${r.min}`;
     case 'no-new-spof': {
-      const what = [r.bridges ? 'bridges' : '', r.cutNodes ? 'cut nodes' : ''].filter(Boolean).join(' or ');
+      const parts = [r.bridges ? 'bridges' : '', r.cutNodes ? 'cut nodes' : '', r.riskGroups ? 'shared-risk groups that strand sites' : ''].filter(Boolean);
+      const what = parts.length > 1 ? `${parts.slice(0, -1).join(', ')} or ${parts[parts.length - 1]}` : parts[0];
       return `no new ${what}`;
     }
   }
+}
+
+export type ElementChanges = NonNullable<FileReport['changes']>;
+
+/**
+ * What the change does to the design's elements, read through the matching of base and head:
+ * nodes, links and shared-risk groups without a counterpart are removed (base line) or added
+ * (head line); matched nodes and groups whose id changed are renamed; matched elements whose
+ * hardened flag changed are listed with the flag they have now (see hardenedChanges).
+ */
+export function elementChanges(base: CompactGraph, head: CompactGraph, m: Matching): ElementChanges {
+  const unmatched = (g: CompactGraph, toOther: { node: Int32Array; link: Int32Array; group: Int32Array }): ReportElement[] => {
+    const out: ReportElement[] = [];
+    for (let v = 0; v < g.n; v++) if (toOther.node[v] < 0) out.push(reportElement(g, 'node', v));
+    for (let e = 0; e < g.m; e++) if (toOther.link[e] < 0) out.push(reportElement(g, 'link', e));
+    for (let k = 0; k < g.groupIds.length; k++) if (toOther.group[k] < 0) out.push(reportElement(g, 'group', k));
+    return out;
+  };
+  const changes: ElementChanges = {
+    added: unmatched(head, { node: m.nodeToBase, link: m.linkToBase, group: m.groupToBase }),
+    removed: unmatched(base, { node: m.nodeToHead, link: m.linkToHead, group: m.groupToHead }),
+  };
+  const renamed = [
+    ...m.renamedNodes.map(([b, h]) => ({ from: reportElement(base, 'node', b), to: reportElement(head, 'node', h) })),
+    ...m.renamedGroups.map(([b, h]) => ({ from: reportElement(base, 'group', b), to: reportElement(head, 'group', h) })),
+  ];
+  if (renamed.length) changes.renamed = renamed;
+  const hardened = hardenedChanges(base, head, m);
+  if (hardened.length) changes.hardened = hardened;
+  return changes;
+}
+
+/**
+ * Matched nodes and links whose hardened flag the change set or cleared, in head file order
+ * (nodes, then links), each with the flag it has at head. Hardening changes what the
+ * challenges may remove, so it is a change to the design even when no element moved.
+ */
+export function hardenedChanges(base: CompactGraph, head: CompactGraph, m: Matching): (ReportElement & { hardened: boolean })[] {
+  const out: (ReportElement & { hardened: boolean })[] = [];
+  for (let v = 0; v < head.n; v++) {
+    const b = m.nodeToBase[v];
+    if (b >= 0 && base.nodeHardened[b] !== head.nodeHardened[v]) out.push({ ...reportElement(head, 'node', v), hardened: head.nodeHardened[v] === 1 });
+  }
+  for (let e = 0; e < head.m; e++) {
+    const b = m.linkToBase[e];
+    if (b >= 0 && base.linkHardened[b] !== head.linkHardened[e]) out.push({ ...reportElement(head, 'link', e), hardened: head.linkHardened[e] === 1 });
+  }
+  return out;
 }

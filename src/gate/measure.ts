@@ -14,6 +14,7 @@ import { countOnes, eligibleUnits, stepsAt, unitCount } from '../challenges/unit
 import { quantileEstimate } from '../envelope/quantiles.js';
 import { quantileKey, sortedColumn } from '../envelope/summary.js';
 import type { CompactGraph } from '../graph/compact.js';
+import { locateElement } from '../graph/element.js';
 import type { ReportElement } from '../report/report.js';
 import type { ChallengeDef, Requirement, ThresholdRequirement } from '../policy/types.js';
 
@@ -58,22 +59,9 @@ export interface Measured {
 /** Most elements a finding lists. */
 export const MAX_ELEMENTS = 10;
 
-/** Line of an element in the head design, else in the base design, else 0. */
+/** Line (and label) of an element in the head design, else in the base design, else 0. */
 export function locate(el: { id: string; kind: ElementKind }, head?: CompactGraph, base?: CompactGraph): ReportElement {
-  for (const g of [head, base]) {
-    if (!g) continue;
-    if (el.kind === 'node') {
-      const i = g.nodeIndex.get(el.id);
-      if (i !== undefined) return { id: el.id, kind: 'node', line: g.nodeLine[i] };
-    } else if (el.kind === 'link') {
-      const i = g.linkIndex.get(el.id);
-      if (i !== undefined) return { id: el.id, kind: 'link', line: g.linkLine[i] };
-    } else {
-      const i = g.groupIds.indexOf(el.id);
-      if (i >= 0) return { id: el.id, kind: 'group', line: g.groupLine[i] };
-    }
-  }
-  return { id: el.id, kind: el.kind, line: 0 };
+  return locateElement(el, head, base);
 }
 
 function envelopeOf(side: DesignSide, c: ChallengeDef): Envelope | undefined {

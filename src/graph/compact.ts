@@ -32,6 +32,8 @@ export interface CompactGraph {
   readonly lon: Float64Array | null;
   /** Element ids in file order; index i ↔ id. */
   readonly nodeIds: readonly string[];
+  /** Human labels of nodes (GraphML/GML `label` or `name`, our format's `label`), else undefined. */
+  readonly nodeLabels: readonly (string | undefined)[];
   readonly linkIds: readonly string[];
   /** Stable link keys (see TopoLink.key) used to seed random orders. */
   readonly linkKeys: readonly string[];
@@ -173,6 +175,7 @@ export function compileTopology(t: Topology): CompactGraph {
     lat: column((i) => t.nodes[i].lat, hasCoords, n),
     lon: column((i) => t.nodes[i].lon, hasCoords, n),
     nodeIds: t.nodes.map((v) => v.id),
+    nodeLabels: t.nodes.map((v) => v.label),
     linkIds: t.links.map((l) => l.id),
     linkKeys: t.links.map((l) => l.key),
     nodeIndex,

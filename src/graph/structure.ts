@@ -101,3 +101,41 @@ export function findCutElements(g: CompactGraph, mask: Mask = createMask(g)): Cu
   for (let v = 0; v < n; v++) if (isCut[v]) cutNodes.push(v);
   return { bridges, cutNodes };
 }
+
+/** The links a shared-risk group takes down: all of them, or (honouring hardening) those not hardened. */
+export function groupLinkMask(g: CompactGraph, k: number, honourHardening: boolean, mask: Mask = createMask(g)): Mask {
+  for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) {
+    const e = g.groupLinks[p];
+    if (!honourHardening || g.linkHardened[e] === 0) mask.link[e] = 1;
+  }
+  return mask;
+}
+
+/**
+ * Shared-risk groups whose loss (all their links at once) splits the design, ascending. A group
+ * counts only for what its members do together: its links that are bridges on their own are
+ * left out of the test (each is already a single point of failure), so a group is listed when
+ * losing its other links still adds a component. Removing bridges never changes which links
+ * lie on a cycle, so this separates the two cleanly. Honouring hardening, hardened links are
+ * not lost (as the challenges treat them) and hardened bridges are not counted as bridges.
+ * O(groups × (n + m)).
+ */
+export function findStrandingGroups(g: CompactGraph, honourHardening: boolean, cuts: CutElements = findCutElements(g)): number[] {
+  const isBridge = new Uint8Array(g.m);
+  for (const e of cuts.bridges) if (!honourHardening || g.linkHardened[e] === 0) isBridge[e] = 1;
+  const intact = findComponents(g).sizes.length;
+  const mask = createMask(g);
+  const out: number[] = [];
+  for (let k = 0; k < g.groupIds.length; k++) {
+    mask.link.fill(0);
+    let removed = 0;
+    for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) {
+      const e = g.groupLinks[p];
+      if (isBridge[e] || (honourHardening && g.linkHardened[e])) continue;
+      mask.link[e] = 1;
+      removed++;
+    }
+    if (removed > 1 && findComponents(g, mask).sizes.length > intact) out.push(k);
+  }
+  return out;
+}

@@ -77,9 +77,12 @@ challenges:
 
 # Requirements; severity is fail (the gate fails), warn or notice.
 requirements:
-  # A change may not add a bridge or a cut node that the base did not have.
+  # A change may not add a bridge, a cut node or a shared-risk group (a duct) whose loss cuts
+  # sites off, that the base did not have. A new weak point hidden behind an element that the
+  # change marks hardened is a warning: hardening is a claim the gate cannot check.
   - kind: no-new-spof
     severity: fail
+    hardened-weak-points: warn
   # Areas under the envelopes, tracked for weakening (no floor of their own).
   - kind: area-floor
     challenge: node-failures

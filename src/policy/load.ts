@@ -242,13 +242,16 @@ class FileBuilder {
         req = { ...common, kind: 'n-1', element: (raw.element as 'node' | 'link' | undefined) ?? 'link', min: raw.min as number };
         break;
       default: {
-        const elements = (raw.elements as string[] | undefined) ?? ['bridges', 'cut-nodes'];
+        const elements = (raw.elements as string[] | undefined) ?? ['bridges', 'cut-nodes', 'risk-groups'];
         req = {
           ...common,
           valueWhere: this.at([...path, raw.elements !== undefined ? 'elements' : 'kind']),
           kind: 'no-new-spof',
           bridges: elements.includes('bridges'),
           cutNodes: elements.includes('cut-nodes'),
+          riskGroups: elements.includes('risk-groups'),
+          hardenedWeakPoints: (raw['hardened-weak-points'] as RemovedSeverity | undefined) ?? 'warn',
+          ...(raw['hardened-weak-points'] !== undefined ? { hardenedWhere: this.at([...path, 'hardened-weak-points']) } : {}),
         };
       }
     }

@@ -28,8 +28,8 @@ export function requirementId(r: Requirement): string {
       return `n-1:${r.element}`;
     case 'no-new-spof':
       // One id per kind of single point of failure, so a policy can fail on new bridges and
-      // only warn on new cut nodes; a rule for both keeps the plain id.
+      // only warn on new cut nodes; a rule for both keeps the plain id (risk groups or not).
       if (r.bridges && r.cutNodes) return 'no-new-spof';
-      return r.bridges ? 'no-new-spof:bridges' : 'no-new-spof:cut-nodes';
+      return `no-new-spof:${[r.bridges ? 'bridges' : '', r.cutNodes ? 'cut-nodes' : '', r.riskGroups ? 'risk-groups' : ''].filter(Boolean).join('+')}`;
   }
 }

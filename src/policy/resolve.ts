@@ -58,7 +58,7 @@ function describeValue(r: Requirement): string {
     case 'spread-ceiling':
       return `max ${r.max}`;
     case 'no-new-spof':
-      return [r.bridges ? 'bridges' : '', r.cutNodes ? 'cut-nodes' : ''].filter(Boolean).join(' and ');
+      return `elements ${[r.bridges ? 'bridges' : '', r.cutNodes ? 'cut-nodes' : '', r.riskGroups ? 'risk-groups' : ''].filter(Boolean).join(', ')}`;
     case 'area-floor':
       return r.min === undefined ? 'no floor' : `min ${r.min}`;
     default:
@@ -78,7 +78,14 @@ function loosening(prev: Requirement, next: Requirement): { message: string; whe
   let looser = false;
   if (prev.kind === 'spread-ceiling' && next.kind === 'spread-ceiling') looser = next.max > prev.max;
   else if (prev.kind === 'no-new-spof' && next.kind === 'no-new-spof') {
-    looser = (prev.bridges && !next.bridges) || (prev.cutNodes && !next.cutNodes);
+    looser = (prev.bridges && !next.bridges) || (prev.cutNodes && !next.cutNodes) || (prev.riskGroups && !next.riskGroups);
+    if (!looser && SEVERITY_RANK[next.hardenedWeakPoints] < SEVERITY_RANK[prev.hardenedWeakPoints]) {
+      return {
+        message: `lowers hardened-weak-points of ${prev.id} from ${prev.hardenedWeakPoints} to ${next.hardenedWeakPoints}`,
+        where: next.hardenedWhere ?? next.where,
+        prevWhere: prev.hardenedWhere ?? prev.where,
+      };
+    }
   } else if (prev.kind === 'area-floor' && next.kind === 'area-floor') {
     looser = prev.min !== undefined && (next.min === undefined || next.min < prev.min);
   } else if ('min' in prev && 'min' in next) looser = (next.min as number) < (prev.min as number);

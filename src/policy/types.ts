@@ -87,6 +87,12 @@ export interface SpofRequirement extends RequirementBase {
   kind: 'no-new-spof';
   bridges: boolean;
   cutNodes: boolean;
+  /** Shared-risk groups whose loss strands sites (default on). */
+  riskGroups: boolean;
+  /** What a new weak point hidden by a newly hardened element is (default warn). */
+  hardenedWeakPoints: RemovedSeverity;
+  /** Where hardened-weak-points was written (for loosening errors). */
+  hardenedWhere?: Where;
 }
 
 export type Requirement =

@@ -6,7 +6,7 @@
 // into @actions/core calls.
 
 import { logText, oneLine } from './escape.js';
-import { findingNumbers, repoPath } from './finding-text.js';
+import { findingCost, findingNumbers, repoPath } from './finding-text.js';
 import { SEVERITY_RANK, rankFiles } from './rank.js';
 import type { Finding, Report, Severity } from './report.js';
 
@@ -60,6 +60,8 @@ const TITLE: Record<Finding['rule'], string> = {
   'n-1': 'N\u22121 rule broken',
   'new-bridge': 'new single point of failure (bridge)',
   'new-cut-node': 'new single point of failure (cut site)',
+  'new-stranding-group': 'new single point of failure (shared-risk group)',
+  'hardened-weak-point': 'new weak point hidden by hardening',
   regression: 'robustness regressed',
   'weakest-sequence': 'weakest removal sequence',
   'parse-error': 'design could not be read',
@@ -88,7 +90,7 @@ export function annotationsOf(report: Report, options: AnnotationOptions = {}): 
         startLine,
         ...(x.column && x.column > 0 ? { startColumn: Math.floor(x.column) } : {}),
         title: oneLine(`netbrace: ${TITLE[x.rule] ?? x.rule}`, 200),
-        message: logText(`${x.message}${findingNumbers(x)}`),
+        message: logText(`${x.message}${findingNumbers(x)}${findingCost(x)}`),
         rule: x.rule,
         inDiff: touched ? touched.has(startLine) : false,
       });

@@ -1,7 +1,7 @@
 // Small text helpers the GitHub views share: a finding's numbers in words and the
 // repository-relative path of a report path. Pure.
 
-import { formatDelta, formatError, formatValue } from './labels.js';
+import { consequenceSentence, formatDelta, formatError, formatValue, type ElementStyle } from './labels.js';
 import type { Finding } from './report.js';
 
 /**
@@ -19,6 +19,11 @@ export function findingNumbers(x: Finding, deltaWord = '\u0394'): string {
     parts.push(`${deltaWord} ${formatDelta(x.delta)}${err ? ` ${err}` : ''}`);
   }
   return parts.length ? ` (${parts.join(', ')})` : '';
+}
+
+/** " Losing it cuts off …": what the finding's element costs, or "" when the finding does not say. */
+export function findingCost(x: Finding, style: ElementStyle = {}): string {
+  return x.consequence ? ` ${consequenceSentence(x.consequence, 'Losing it', style)}` : '';
 }
 
 /** `prefix/p` with forward slashes; the prefix is the working directory within the repository. */

@@ -6,9 +6,11 @@
 
 import { attacksFor, envelopeChart, renderChartSvg, type EnvelopeChart } from './chart.js';
 import {
+  consequenceSentence,
   describeChanges,
-  elementLines,
-  elementWithLine,
+  formatElement,
+  knownElement,
+  knownElements,
   fileFails,
   fileWarns,
   formatDelta,
@@ -25,7 +27,7 @@ import {
   weakestSequences,
   type GroupedFinding,
 } from './labels.js';
-import type { Evaluation, FileReport, Report, ReportElement, RequirementResult } from './report.js';
+import type { Consequence, Evaluation, FileReport, Report, ReportElement, RequirementResult } from './report.js';
 import { escapeHtml } from './escape.js';
 
 const esc = (s: string | number) => escapeHtml(String(s));
@@ -197,7 +199,6 @@ function designSection(f: FileReport, index: number): string {
   if (f.head) out.push(`<p class="facts">${esc(facts(f.head))}</p>`);
   const changed = describeChanges(f);
   if (changed) out.push(`<p class="facts changes"><strong>What the change does:</strong> ${esc(changed)}</p>`);
-  const lines = elementLines(f);
   if (f.head && f.head.envelopes.length) out.push(charts(f, id));
   if (f.requirements.length) out.push(requirementTable(f.requirements, id));
   const findings = groupFindings(bySeverity(f.findings.filter((x) => x.rule !== 'weakest-sequence')));
@@ -210,7 +211,7 @@ function designSection(f: FileReport, index: number): string {
       `<details class="notices"><summary>${notices.length} notice${notices.length === 1 ? '' : 's'} (within allowances, or context)</summary><ul class="findings">${notices.map(findingItem).join('')}</ul></details>`,
     );
   }
-  out.push(weakest(f, lines));
+  out.push(weakest(f));
   out.push(structure(f));
   out.push('</section>');
   return out.filter(Boolean).join('\n');
@@ -296,10 +297,20 @@ function requirementTable(rows: RequirementResult[], id: string): string {
 
 const MAX_ELEMENTS = 8;
 
+/** An element as the HTML names it: formatElement with its label and id marked up, the parenthesis muted. */
+function htmlElement(e: ReportElement): string {
+  const el = (x: string) => `<span class="el">${esc(x)}</span>`;
+  return formatElement(e, { id: el, text: el, meta: (x) => `<span class="line">${x}</span>` });
+}
+
 function elementList(elements: ReportElement[]): string {
-  const shown = elements.slice(0, MAX_ELEMENTS).map((e) => `<span class="el">${esc(e.id)}</span> <span class="line">(${esc(e.kind)}, line ${e.line})</span>`);
+  const shown = elements.slice(0, MAX_ELEMENTS).map(htmlElement);
   const more = elements.length > MAX_ELEMENTS ? `, \u2026 ${elements.length - MAX_ELEMENTS} more` : '';
   return shown.join(', ') + more;
+}
+
+function costItem(c: Consequence | undefined, subject: string): string {
+  return c ? `<p class="cost">${esc(consequenceSentence(c, subject))}</p>` : '';
 }
 
 function findingItem(x: GroupedFinding): string {
@@ -311,22 +322,27 @@ function findingItem(x: GroupedFinding): string {
       : '';
   const named = x.elements.length === 1 && x.message.includes(x.elements[0].id);
   const els = x.elements.length && !named && !x.grouped ? `<div>${elementList(x.elements)}</div>` : '';
-  return `<li class="${x.severity}" data-rule="${esc(x.rule)}"><span class="chip ${x.severity}">${esc(x.severity)}</span> <span class="rule">${esc(x.rule)}</span>${where}<div>${esc(x.message)}${values}</div>${els}</li>`;
+  const members = x.grouped && x.members && x.members.length > 1 ? x.members.filter((m) => m.consequence) : [];
+  const cost = members.length
+    ? `<ul class="costs">${members.map((m) => `<li>${htmlElement(m.elements[0])}: ${esc(consequenceSentence(m.consequence!, ''))}</li>`).join('')}</ul>`
+    : costItem(x.consequence, 'Losing it');
+  return `<li class="${x.severity}" data-rule="${esc(x.rule)}"><span class="chip ${x.severity}">${esc(x.severity)}</span> <span class="rule">${esc(x.rule)}</span>${where}<div>${esc(x.message)}${values}</div>${els}${cost}</li>`;
 }
 
-function weakest(f: FileReport, lines: ReadonlyMap<string, number>): string {
+function weakest(f: FileReport): string {
+  const known = knownElements(f);
   const items = weakestSequences(f).map((s) => {
-    const steps = s.ids
-      .map((id, i) => `<li><span class="el">${esc(id)}</span>${lines.get(id) ? ` <span class="line">line ${lines.get(id)}</span>` : ''}${s.values && s.values[i] !== undefined ? ` \u2014 R ${esc(formatValue(s.values[i]))}` : ''}</li>`)
+    const steps = s.elements
+      .map((e, i) => `<li>${htmlElement(e)}${s.values && s.values[i] !== undefined ? ` \u2014 R ${esc(formatValue(s.values[i]))}` : ''}</li>`)
       .join('');
-    return `<div class="sequence"><p>${esc(s.title)}</p><ol class="seq">${steps}</ol></div>`;
+    return `<div class="sequence"><p>${esc(s.title)}</p><ol class="seq">${steps}</ol>${costItem(s.consequence, 'These removals')}</div>`;
   });
   for (const c of f.head?.contingencies ?? []) {
     const worst = c.worst[0];
     if (worst) {
-      const what = worst.elements.map((id) => elementWithLine(id, lines)).join(' + ');
+      const what = worst.elements.map((id, i) => htmlElement(worst.located?.[i] ?? knownElement(known, c.kind, id))).join(' + ');
       items.push(
-        `<div class="sequence"><p>${esc(c.challenge === 'n-1' ? 'Single' : 'Double')} ${esc(c.kind)} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): <span class="el">${esc(what)}</span> leaves R ${esc(formatValue(worst.value))}</p></div>`,
+        `<div class="sequence"><p>${esc(c.challenge === 'n-1' ? 'Single' : 'Double')} ${esc(c.kind)} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): ${what} leaves R ${esc(formatValue(worst.value))}</p></div>`,
       );
     }
   }
@@ -341,7 +357,7 @@ function structure(f: FileReport): string {
     if (!list.length) return `<tr><th scope="row">${esc(label)}</th><td>none</td></tr>`;
     const items = list.map((e) => {
       const isNew = f.base !== undefined && !baseIds.has(e.id);
-      return `<span class="el">${esc(e.id)}</span> <span class="line">line ${e.line}</span>${isNew ? ' <strong class="sev-fail">new</strong>' : ''}`;
+      return `${htmlElement(e)}${isNew ? ' <strong class="sev-fail">new</strong>' : ''}`;
     });
     return `<tr><th scope="row">${esc(label)}</th><td>${items.join(', ')}</td></tr>`;
   };

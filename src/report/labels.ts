@@ -2,7 +2,7 @@
 // a number is written, and where an element's line is found. Pure; no colour, no markup.
 
 import type { ChallengeName, ElementKind } from '../envelope/types.js';
-import type { FileReport, FileStatus, Finding, RequirementResult } from './report.js';
+import type { Consequence, FileReport, FileStatus, Finding, ReportElement, RequirementResult } from './report.js';
 
 
 const CHALLENGE_LABEL: Record<ChallengeName, string> = {
@@ -115,78 +115,174 @@ export function fileWarns(f: FileReport): boolean {
   return !fileFails(f) && f.findings.some((x) => x.severity === 'warn');
 }
 
-/** id → line for every element the file's report names (findings first, then structure). */
-export function elementLines(f: FileReport): Map<string, number> {
-  const lines = new Map<string, number>();
-  const add = (id: string, line: number) => {
-    if (line > 0 && !lines.has(id)) lines.set(id, line);
+/**
+ * id → element (line, label) for every element the file's report names: findings first, then
+ * structure, sequences and what they strand, then the change list. Keyed by kind and id.
+ */
+export function knownElements(f: FileReport): Map<string, ReportElement> {
+  const known = new Map<string, ReportElement>();
+  const add = (e: ReportElement) => {
+    const key = `${e.kind}\u0000${e.id}`;
+    if (e.line > 0 && !known.has(key)) known.set(key, e);
   };
-  for (const finding of f.findings) for (const e of finding.elements) add(e.id, e.line);
+  for (const finding of f.findings) {
+    finding.elements.forEach(add);
+    finding.consequence?.stranded.forEach(add);
+  }
   for (const side of [f.head, f.base]) {
     if (!side) continue;
-    for (const e of side.structure.bridges) add(e.id, e.line);
-    for (const e of side.structure.cutNodes) add(e.id, e.line);
+    side.structure.bridges.forEach(add);
+    side.structure.cutNodes.forEach(add);
+    for (const env of side.envelopes) {
+      for (const seq of [...env.weakest, ...(env.worstCase ? [env.worstCase] : [])]) {
+        seq.located?.forEach(add);
+        seq.consequence?.stranded.forEach(add);
+      }
+    }
   }
-  return lines;
+  f.changes?.added.forEach(add);
+  return known;
 }
 
-/** "kaskeld (line 14)", or the bare id when its line is unknown. */
-export function elementWithLine(id: string, lines: ReadonlyMap<string, number>): string {
-  const line = lines.get(id);
-  return line ? `${id}\u00a0(line\u00a0${line})` : id;
+/** The element of this kind and id as the report names it, else the bare id (line 0). */
+export function knownElement(known: ReadonlyMap<string, ReportElement>, kind: ReportElement['kind'], id: string): ReportElement {
+  return known.get(`${kind}\u0000${id}`) ?? { id, kind, line: 0 };
+}
+
+/** How a view writes the parts of an element's name: ids (code), labels (text), the space that keeps "line 14" together. */
+export interface ElementStyle {
+  id?: (id: string) => string;
+  text?: (label: string) => string;
+  /** The parenthesised part, "(node 8, line 93)", whole (for muted styling). */
+  meta?: (part: string) => string;
+  space?: string;
+}
+
+/**
+ * The one way an element is named in every view and message: "Bratislava (node 8, line 93)"
+ * for a site with a label, "kaskeld (line 14)" without one, the bare id when the line is unknown.
+ */
+export function formatElement(e: Pick<ReportElement, 'id' | 'kind' | 'line' | 'label'>, style: ElementStyle = {}): string {
+  const id = style.id ?? ((x: string) => x);
+  const text = style.text ?? ((x: string) => x);
+  const sp = style.space ?? ' ';
+  const meta = style.meta ?? ((x: string) => x);
+  const line = e.line > 0 ? `line${sp}${e.line}` : '';
+  if (e.label) return `${text(e.label)}${sp}${meta(`(${e.kind}${sp}${id(e.id)}${line ? `, ${line}` : ''})`)}`;
+  return line ? `${id(e.id)}${sp}${meta(`(${line})`)}` : id(e.id);
+}
+
+/** A number of the design's own unit (volumes): up to six significant digits, no exponent for everyday sizes. */
+function amount(x: number): string {
+  return String(Number(x.toPrecision(6)));
+}
+
+/** Most stranded sites a sentence names before "and N more". */
+const NAMED_STRANDED = 3;
+
+/**
+ * What a loss costs, in one short sentence: "Losing it cuts off Saltmere (node 0, line 6) from
+ * the largest part; 1 of 3 demands (volume 10 of 17) loses every path." `subject` is who does
+ * it ("Losing it", "These removals"; empty for a clause that follows an element's name).
+ */
+export function consequenceSentence(c: Consequence, subject = 'Losing it', style: ElementStyle = {}): string {
+  const plural = / removals$/.test(subject);
+  const verb = (one: string, many: string) => (plural ? many : one);
+  const named = c.stranded.slice(0, NAMED_STRANDED).map((e) => formatElement(e, style));
+  const more = c.strandedCount - named.length;
+  let what: string;
+  if (c.strandedCount === 0) what = `${verb('cuts', 'cut')} no surviving site off from the largest part`;
+  else {
+    const list = more > 0 ? `${named.join(', ')} and ${more} more (${c.strandedCount} sites)` : named.length > 1 ? `${named.slice(0, -1).join(', ')} and ${named[named.length - 1]}` : named[0];
+    what = `${verb('cuts', 'cut')} off ${list} from the largest part`;
+  }
+  let demands = '';
+  if (c.demandsTotal !== undefined && c.demandsLost !== undefined) {
+    const total = `${c.demandsTotal} demand${c.demandsTotal === 1 ? '' : 's'}`;
+    demands =
+      c.demandsLost === 0
+        ? `; every demand keeps a path`
+        : `; ${c.demandsLost} of ${total} (volume ${amount(c.volumeLost ?? 0)} of ${amount(c.volumeTotal ?? 0)}) ${c.demandsLost === 1 ? 'loses' : 'lose'} every path`;
+  }
+  return `${subject ? `${subject} ` : ''}${what}${demands}.`;
 }
 
 export interface NamedSequence {
   /** "Worst case found under random site failures (exact search, 3 sites)". */
   title: string;
   ids: string[];
+  /** The elements with their lines and labels, in order. */
+  elements: ReportElement[];
   /** R after each step, when known. */
   values?: number[];
+  /** What the whole sequence costs, when the report says. */
+  consequence?: Consequence;
 }
 
 /**
  * The sequences a planner acts on, in this order and without repeats: each envelope's worst
- * case, the gate's weakest-sequence findings, then each envelope's weakest realization.
+ * case, the gate's weakest-sequence findings, then each envelope's weakest realization. Every
+ * element carries its line (from the sequence itself, else from what the report names).
  */
 export function weakestSequences(f: FileReport): NamedSequence[] {
   const seen = new Set<string>();
   const out: NamedSequence[] = [];
-  const add = (title: string, ids: string[], values?: number[]) => {
+  const known = knownElements(f);
+  const add = (title: string, seq: { kind: ReportElement['kind']; elements: string[]; values?: number[]; located?: ReportElement[]; consequence?: Consequence }) => {
+    const ids = seq.elements;
     const key = ids.join('\u0000');
     if (!ids.length || seen.has(key)) return;
     seen.add(key);
-    out.push(values && values.length ? { title, ids, values } : { title, ids });
+    const elements = ids.map((id, i) => seq.located?.[i] ?? knownElement(known, seq.kind, id));
+    const named: NamedSequence = { title, ids, elements };
+    if (seq.values && seq.values.length) named.values = seq.values;
+    if (seq.consequence) named.consequence = seq.consequence;
+    out.push(named);
   };
   for (const env of f.head?.envelopes ?? []) {
     const wc = env.worstCase;
-    if (wc) add(`Worst case found under ${challengeLabel(env.challenge)} (${wc.method} search, ${wc.k} ${wc.k === 1 ? kindSingular(wc.kind) : kindPlural(wc.kind)})`, wc.elements, wc.values);
+    if (wc) add(`Worst case found under ${challengeLabel(env.challenge)} (${wc.method} search, ${wc.k} ${wc.k === 1 ? kindSingular(wc.kind) : kindPlural(wc.kind)})`, wc);
   }
-  for (const x of f.findings) if (x.rule === 'weakest-sequence') add(x.message, x.elements.map((e) => e.id));
+  for (const x of f.findings) {
+    if (x.rule !== 'weakest-sequence') continue;
+    add(x.message, { kind: x.elements[0]?.kind ?? 'node', elements: x.elements.map((e) => e.id), located: x.elements, ...(x.consequence ? { consequence: x.consequence } : {}) });
+  }
   for (const env of f.head?.envelopes ?? []) {
     const w = env.weakest[0];
-    if (w) add(`Weakest realization${w.realization !== undefined ? ` #${w.realization}` : ''} under ${challengeLabel(env.challenge)}`, w.elements, w.values);
+    if (w) add(`Weakest realization${w.realization !== undefined ? ` #${w.realization}` : ''} under ${challengeLabel(env.challenge)}`, w);
   }
   return out;
 }
 
-/** "+1 site (saltmarrow, line 83), +2 links (…); −2 links (…)": what the change added and removed. */
+/** "+1 site (saltmarrow, line 83), +2 links (…); −2 links (…); node a renamed b; now hardened: …": what the change did. */
 export function describeChanges(f: FileReport, max = 4): string | undefined {
   const ch = f.changes;
-  if (!ch || (ch.added.length === 0 && ch.removed.length === 0)) return undefined;
+  const renamed = ch?.renamed ?? [];
+  const hardened = ch?.hardened ?? [];
+  if (!ch || (ch.added.length === 0 && ch.removed.length === 0 && renamed.length === 0 && hardened.length === 0)) return undefined;
+  const cut = <T>(l: readonly T[]) => l.slice(0, max);
+  const tail = (n: number) => (n > max ? `; \u2026 ${n - max} more` : '');
   const part = (sign: string, list: typeof ch.added, side: string) => {
     const byKind = (['node', 'link', 'group'] as const).map((k) => list.filter((e) => e.kind === k)).filter((l) => l.length);
     return byKind.map((l) => {
       const n = l.length;
       const noun = n === 1 ? kindSingular(l[0].kind) : kindPlural(l[0].kind);
-      const names = l.slice(0, max).map((e) => `${e.id}, ${side}line ${e.line}`).join('; ');
-      return `${sign}${n} ${noun} (${names}${n > max ? `; \u2026 ${n - max} more` : ''})`;
+      const names = cut(l).map((e) => (e.label ? `${e.label}, ${e.id}, ${side}line ${e.line}` : `${e.id}, ${side}line ${e.line}`)).join('; ');
+      return `${sign}${n} ${noun} (${names}${tail(n)})`;
     });
   };
-  return [...part('+', ch.added, ''), ...part('\u2212', ch.removed, 'base ')].join(', ');
+  const words = [...part('+', ch.added, ''), ...part('\u2212', ch.removed, 'base ')];
+  for (const r of cut(renamed)) words.push(`${r.from.kind} ${r.from.id} renamed ${r.to.id} (line ${r.to.line})`);
+  if (renamed.length > max) words.push(`\u2026 ${renamed.length - max} more renamed`);
+  for (const [flag, word] of [[true, 'now hardened'], [false, 'no longer hardened']] as const) {
+    const l = hardened.filter((e) => e.hardened === flag);
+    if (l.length) words.push(`${word}: ${cut(l).map((e) => formatElement(e)).join(', ')}${l.length > max ? `, \u2026 ${l.length - max} more` : ''}`);
+  }
+  return words.join(', ');
 }
 
-/** A finding, or several new-bridge / new-cut-node findings of one severity merged into one. */
-export type GroupedFinding = Finding & { grouped?: boolean };
+/** A finding, or several new-bridge / new-cut-node / hardened-weak-point findings of one severity merged into one (`members` keeps them). */
+export type GroupedFinding = Finding & { grouped?: boolean; members?: Finding[] };
 
 const SEVERITY_ORDER = { fail: 0, warn: 1, notice: 2 } as const;
 
@@ -195,27 +291,34 @@ export function bySeverity<T extends Finding>(findings: readonly T[]): T[] {
   return [...findings].sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity]);
 }
 
-/** New bridges and cut nodes of one severity read best as one list: merge their findings. */
+const GROUPABLE = new Set<Finding['rule']>(['new-bridge', 'new-cut-node', 'hardened-weak-point']);
+
+/** New bridges and cut nodes (and weak points hidden by hardening) of one severity read best as one list: merge their findings. */
 export function groupFindings(findings: readonly Finding[]): GroupedFinding[] {
   const out: GroupedFinding[] = [];
   for (const x of findings) {
-    const groupable = (x.rule === 'new-bridge' || x.rule === 'new-cut-node') && x.elements.length === 1;
+    const groupable = GROUPABLE.has(x.rule) && x.elements.length === 1;
     const prev = out[out.length - 1];
-    if (groupable && prev && prev.rule === x.rule && prev.severity === x.severity && prev.elements.length >= 1 && (prev as GroupedFinding).grouped) {
+    if (groupable && prev && prev.rule === x.rule && prev.severity === x.severity && prev.elements.length >= 1 && prev.grouped) {
       prev.elements.push(...x.elements);
+      prev.members!.push(x);
       continue;
     }
-    out.push(groupable ? ({ ...x, elements: [...x.elements], grouped: true } as GroupedFinding) : x);
+    out.push(groupable ? { ...x, elements: [...x.elements], grouped: true, members: [x] } : x);
   }
-  for (const x of out as GroupedFinding[]) {
+  for (const x of out) {
     if (!x.grouped || x.elements.length < 2) continue;
-    const what = x.rule === 'new-bridge' ? 'new bridges (links whose loss alone splits the design)' : 'new cut nodes (sites whose loss alone splits the design)';
-    x.message = `${x.elements.length} ${what}: ${x.elements.map((e) => `${e.id}\u00a0(line\u00a0${e.line})`).join(', ')}`;
+    const what =
+      x.rule === 'new-bridge'
+        ? 'new bridges (links whose loss alone splits the design)'
+        : x.rule === 'new-cut-node'
+          ? 'new cut nodes (sites whose loss alone splits the design)'
+          : 'new weak points hidden by hardening (the change marks them hardened; hardening is a claim the gate cannot check)';
+    x.message = `${x.elements.length} ${what}: ${x.elements.map((e) => formatElement(e, { space: '\u00a0' })).join(', ')}`;
+    delete x.consequence;
   }
   return out;
 }
-
-
 
 /** A revision for display: a full commit id shortened to 12 hex digits, anything else as given. */
 export function shortRevision(rev: string | undefined): string {

@@ -15,18 +15,23 @@ import {
   REQUIREMENT_STATUS_WORD,
   STATUS_WORD,
   challengeLabel,
+  consequenceSentence,
   describeChanges,
+  formatElement,
   formatError,
   formatRequirementDelta,
   formatRequirementValue,
   formatValue,
   groupFindings,
   kindPlural,
+  knownElement,
+  knownElements,
+  type GroupedFinding,
   weakestSequences,
   xAxisLabel,
 } from './labels.js';
 import { rankFiles, rankFindings, worstSeverity } from './rank.js';
-import type { FileReport, FileStatus, Finding, Report, RequirementResult, Severity } from './report.js';
+import type { Consequence, FileReport, FileStatus, Finding, Report, ReportElement, RequirementResult, Severity } from './report.js';
 
 /** GitHub refuses a step summary over 1 MiB; stay well below (bytes of UTF-8). */
 export const SUMMARY_BUDGET_BYTES = 900 * 1024;
@@ -66,6 +71,8 @@ const RULE_WORD: Record<Finding['rule'], string> = {
   'n-1': 'N\u22121 rule',
   'new-bridge': 'new bridge',
   'new-cut-node': 'new cut node',
+  'new-stranding-group': 'new stranding shared-risk group',
+  'hardened-weak-point': 'weak point hidden by hardening',
   regression: 'regression',
   'weakest-sequence': 'weakest sequence',
   'parse-error': 'unreadable design',
@@ -311,9 +318,15 @@ function requirementTable(rows: RequirementResult[]): string {
   return `${text}\n`;
 }
 
-function findingLine(x: Finding): string {
+function findingLine(x: GroupedFinding): string {
   const where = x.line > 0 ? ` (line ${x.line}${x.column ? `, column ${x.column}` : ''})` : '';
-  return `${ICON[x.severity]} **${RULE_WORD[x.rule] ?? escapeMarkdown(x.rule, 40)}**${where}: ${escapeMarkdown(x.message, 600)}${findingNumbers(x)}`;
+  const text = `${ICON[x.severity]} **${RULE_WORD[x.rule] ?? escapeMarkdown(x.rule, 40)}**${where}: ${escapeMarkdown(x.message, 600)}${findingNumbers(x)}`;
+  // What each weak point costs: one sentence, or one sub-item per member of a merged finding
+  // (escaped as plain text, like the message it follows).
+  const members = x.grouped && x.members && x.members.length > 1 ? x.members.filter((m) => m.consequence) : [];
+  const plain = (t: string) => escapeMarkdown(t, 1200);
+  if (members.length) return `${text}\n${members.map((m) => `  - ${plain(`${formatElement(m.elements[0])}: ${consequenceSentence(m.consequence!, '')}`)}`).join('\n')}`;
+  return x.consequence ? `${text} ${plain(consequenceSentence(x.consequence))}` : text;
 }
 
 /** Evenly spaced indices, first and last included, at most `max` of them. */
@@ -376,45 +389,44 @@ function mermaidSafe(text: string): string {
   return text.replace(/["\n\r\\`<>]/g, ' ');
 }
 
-function elementChain(ids: readonly string[], lines: ReadonlyMap<string, number>, max = 12): string {
-  const shown = ids.slice(0, max).map((id) => {
-    const line = lines.get(id);
-    return `${markdownCode(id, 120)}${line ? ` (line ${line})` : ''}`;
-  });
-  return shown.join(' \u2192 ') + (ids.length > max ? ` \u2192 \u2026 (${ids.length - max} more)` : '');
+/**
+ * An element as Markdown names it: formatElement with its id and label in code spans. A line
+ * holds user text either in code spans or escaped, never both, so no escaped backtick of one
+ * can be read as pairing with a code span of the other.
+ */
+function mdElement(e: ReportElement): string {
+  return formatElement(e, MD_STYLE);
 }
 
-function elementList(ids: readonly string[], lines: ReadonlyMap<string, number>, max = 20): string {
-  const shown = ids.slice(0, max).map((id) => {
-    const line = lines.get(id);
-    return `${markdownCode(id, 120)}${line ? ` (line ${line})` : ''}`;
-  });
-  return shown.join(', ') + (ids.length > max ? `, \u2026 (${ids.length - max} more)` : '');
+function elementChain(elements: readonly ReportElement[], max = 12): string {
+  const shown = elements.slice(0, max).map(mdElement);
+  return shown.join(' \u2192 ') + (elements.length > max ? ` \u2192 \u2026 (${elements.length - max} more)` : '');
 }
 
-function knownLines(f: FileReport): Map<string, number> {
-  const lines = new Map<string, number>();
-  for (const x of f.findings) for (const e of x.elements) if (e.line > 0 && !lines.has(e.id)) lines.set(e.id, e.line);
-  for (const side of [f.head, f.base]) {
-    if (!side) continue;
-    for (const e of [...side.structure.bridges, ...side.structure.cutNodes]) if (e.line > 0 && !lines.has(e.id)) lines.set(e.id, e.line);
-  }
-  return lines;
+function elementList(elements: readonly ReportElement[], max = 20): string {
+  const shown = elements.slice(0, max).map(mdElement);
+  return shown.join(', ') + (elements.length > max ? `, \u2026 (${elements.length - max} more)` : '');
 }
+
+function mdCost(c: Consequence | undefined, subject: string): string {
+  return c ? ` ${consequenceSentence(c, subject, MD_STYLE)}` : '';
+}
+
+const MD_STYLE = { id: (x: string) => markdownCode(x, 120), text: (x: string) => markdownCode(x, 120) };
 
 function weakestSection(f: FileReport): string {
   const head = f.head;
   if (!head) return '';
-  const lines = knownLines(f);
+  const known = knownElements(f);
   const items: string[] = [];
   for (const seq of weakestSequences(f).slice(0, 6)) {
     const r = seq.values && seq.values.length ? `; R ${formatValue(seq.values[0])} \u2192 ${formatValue(seq.values[seq.values.length - 1])}` : '';
-    items.push(`- ${escapeMarkdown(seq.title, 300)}: ${elementChain(seq.ids, lines)}${r}`);
+    items.push(`- ${escapeMarkdown(seq.title, 300)}: ${elementChain(seq.elements)}${r}.${mdCost(seq.consequence, 'These removals')}`);
   }
   for (const c of head.contingencies) {
     const worst = c.worst[0];
     if (worst) {
-      items.push(`- ${challengeLabel(c.challenge)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList(worst.elements, lines)}, leaves R ${formatValue(worst.value)}`);
+      items.push(`- ${challengeLabel(c.challenge)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList(worst.elements.map((id, i) => worst.located?.[i] ?? knownElement(known, c.kind, id)))}, leaves R ${formatValue(worst.value)}`);
     }
   }
   if (!items.length) return '';
@@ -425,8 +437,7 @@ function structureSection(f: FileReport): string {
   const h = f.head?.structure;
   if (!h) return '';
   const b = f.base?.structure;
-  const lines = knownLines(f);
-  const list = (els: { id: string }[]) => (els.length ? elementList(els.map((e) => e.id), lines) : 'none');
+  const list = (els: ReportElement[]) => (els.length ? elementList(els) : 'none');
   const rows = [
     `| sites | ${b ? b.nodes : '\u2013'} | ${h.nodes} |`,
     `| links | ${b ? b.links : '\u2013'} | ${h.links} |`,

@@ -14,6 +14,26 @@ export interface ReportElement {
   kind: 'node' | 'link' | 'group';
   /** 1-based line in the design file (head side unless the element only exists at base). */
   line: number;
+  /** The site's name in the design (GraphML/GML `label` or `name`, our `label`), when it has one. */
+  label?: string;
+}
+
+/**
+ * What losing an element (or a whole removal sequence) costs, on connectivity alone: the
+ * surviving sites cut off from the largest part and, when the design has demands, the demands
+ * whose two ends no longer share a part (latency budgets are not considered here).
+ */
+export interface Consequence {
+  /** Surviving sites cut off from the largest part, in file order (at most MAX_STRANDED listed). */
+  stranded: ReportElement[];
+  /** How many sites are cut off (the list may be shorter). */
+  strandedCount: number;
+  /** Demands that were connected and lose every path, and how many demands the design has. */
+  demandsLost?: number;
+  demandsTotal?: number;
+  /** Their volume, and the volume of all demands (the design's own unit). */
+  volumeLost?: number;
+  volumeTotal?: number;
 }
 
 /** One requirement of the policy, judged on one file: the rows of the requirement table. */
@@ -46,6 +66,8 @@ export interface Finding {
     | 'n-1'
     | 'new-bridge'
     | 'new-cut-node'
+    | 'new-stranding-group'
+    | 'hardened-weak-point'
     | 'regression'
     | 'weakest-sequence'
     | 'parse-error'
@@ -65,6 +87,8 @@ export interface Finding {
   /** Line to annotate: the first element's, or the error's. */
   line: number;
   column?: number;
+  /** For a weak point: what losing it costs at head. */
+  consequence?: Consequence;
 }
 
 export interface StructureSummary {
@@ -98,8 +122,17 @@ export interface FileReport {
   base?: Evaluation;
   /** For status "error": what could not be read. */
   error?: { message: string; line: number; column: number };
-  /** Elements added and removed by the change (nodes by id, links by their ends), head lines for added, base lines for removed. */
-  changes?: { added: ReportElement[]; removed: ReportElement[] };
+  /**
+   * Elements added and removed by the change (nodes by id or, renamed, by neighbourhood; links by
+   * their ends; shared-risk groups by id or members), head lines for added, base lines for removed;
+   * renamed elements (base → head); elements whose hardened flag the change set or cleared (head side).
+   */
+  changes?: {
+    added: ReportElement[];
+    removed: ReportElement[];
+    renamed?: { from: ReportElement; to: ReportElement }[];
+    hardened?: (ReportElement & { hardened: boolean })[];
+  };
 }
 
 export interface Report {

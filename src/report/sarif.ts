@@ -6,7 +6,7 @@
 
 import { oneLine } from './escape.js';
 import { stableHash } from './fingerprint.js';
-import { findingNumbers, repoPath } from './finding-text.js';
+import { findingCost, findingNumbers, repoPath } from './finding-text.js';
 import { rankFiles, rankFindings } from './rank.js';
 import type { Finding, Report, Severity } from './report.js';
 
@@ -69,6 +69,18 @@ const RULES: Record<RuleId, RuleText> = {
     short: 'The change adds a cut site (a site whose loss splits the network)',
     full: 'At head, the named site is a cut node: removing it disconnects the network. It was not one at the base, so the change adds a single point of failure.',
     help: 'Connect the part that hangs off this site to the rest of the network by a second path that avoids it.',
+  },
+  'new-stranding-group': {
+    name: 'NewStrandingGroup',
+    short: 'The change adds a shared-risk group whose loss cuts sites off',
+    full: 'At head, losing the named shared-risk group (all of its links at once, as in a duct cut) cuts sites off from the rest of the network, through links that are not bridges on their own. The base had no such group, so the change adds a single point of failure that the bridges and cut nodes do not show.',
+    help: 'Route one of the links through a different duct or path, or add a link outside the group between the parts it separates.',
+  },
+  'hardened-weak-point': {
+    name: 'HardenedWeakPoint',
+    short: 'A weak point the change hides by marking elements hardened',
+    full: 'Ignoring the hardened flags, the named element would be a new bridge, cut node or stranding shared-risk group. The change marks it (or its links) hardened, so the challenges never remove it; hardening is a claim in the design file that the gate cannot check.',
+    help: 'Make sure the element really is engineered not to fail (and reviewed as such), or restore the redundancy instead. The policy key hardened-weak-points sets how this is judged.',
   },
   regression: {
     name: 'Regression',
@@ -160,7 +172,7 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
       shortDescription: { text: r.short },
       fullDescription: { text: r.full },
       help: { text: r.help, markdown: `**${r.short}.** ${r.full}\n\n${r.help}` },
-      defaultConfiguration: { level: id === 'weakest-sequence' || id === 'removed-design' || id === 'policy-changed' ? 'note' : id === 'degraded' ? 'warning' : 'error' },
+      defaultConfiguration: { level: id === 'weakest-sequence' || id === 'removed-design' || id === 'policy-changed' ? 'note' : id === 'degraded' || id === 'hardened-weak-point' ? 'warning' : 'error' },
       properties: { tags: ['robustness', 'network-design'] },
     };
   });
@@ -184,12 +196,13 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
       const properties: Record<string, unknown> = { fileStatus: f.status };
       if (x.requirement) properties.requirement = x.requirement;
       for (const k of ['base', 'head', 'delta', 'se'] as const) if (typeof x[k] === 'number') properties[k] = x[k];
-      if (x.elements.length) properties.elements = x.elements.map((e) => ({ id: e.id, kind: e.kind, line: e.line }));
+      if (x.elements.length) properties.elements = x.elements.map((e) => ({ id: e.id, kind: e.kind, line: e.line, ...(e.label !== undefined ? { label: e.label } : {}) }));
+      if (x.consequence) properties.consequence = x.consequence;
       results.push({
         ruleId: x.rule,
         ruleIndex: RULE_IDS.indexOf(x.rule),
         level: LEVEL[x.severity],
-        message: { text: nonEmpty(`${x.message}${findingNumbers(x, 'delta')}`, RULES[x.rule].short) },
+        message: { text: nonEmpty(`${x.message}${findingNumbers(x, 'delta')}${findingCost(x)}`, RULES[x.rule].short) },
         locations: [{ physicalLocation: { artifactLocation: { uri: uriOf(path) }, region } }],
         // Our id is a hash of rule, path, requirement and elements, not of the line's text, so
         // it goes under the standard `fingerprints` with a key of our own; code scanning fills

@@ -7,10 +7,10 @@ import type { Colors } from 'picocolors/types.js';
 import type { Envelope } from '../envelope/types.js';
 import { envelopeChart, type ChartSeries, type EnvelopeChart } from './chart.js';
 import {
+  consequenceSentence,
   describeChanges,
-  elementLines,
-  elementWithLine,
   fileFails,
+  formatElement,
   fileWarns,
   formatError,
   formatFraction,
@@ -105,7 +105,6 @@ function renderFile(f: FileReport, c: Colors, width: number): string[] {
   const changed = describeChanges(f);
   if (changed) out.push(...wrap(`changed: ${changed}`, width - 2).map((l) => `  ${l}`));
   if (f.requirements.length) out.push('', ...requirementTable(f.requirements, c, width));
-  const lines = elementLines(f);
   const findings = f.findings.filter((x) => x.rule !== 'weakest-sequence' && x.rule !== 'parse-error');
   if (findings.length) {
     out.push('', c.bold('  Findings'));
@@ -115,12 +114,12 @@ function renderFile(f: FileReport, c: Colors, width: number): string[] {
   if (sequences.length) {
     out.push('', c.bold('  Weakest removal sequences'));
     for (const s of sequences) {
-      const shown = s.ids.slice(0, MAX_CHAIN);
-      const more = s.ids.length > shown.length ? ` \u2192 \u2026 (${s.ids.length - shown.length} more)` : '';
-      const chain = shown.map((id) => elementWithLine(id, lines)).join(' \u2192 ') + more;
+      const more = s.ids.length > MAX_CHAIN ? ` \u2192 \u2026 (${s.ids.length - MAX_CHAIN} more)` : '';
+      const chain = s.elements.slice(0, MAX_CHAIN).map((e) => formatElement(e, NBSP)).join(' \u2192 ') + more;
       const v = s.values ?? [];
       const rs = !v.length ? '' : v.length === s.ids.length && v.length <= MAX_CHAIN ? v.map(formatValue).join(' \u2192 ') : `${formatValue(v[0])} \u2192 \u2026 \u2192 ${formatValue(v[v.length - 1])}`;
       out.push(...wrap(`${s.title}: ${chain}${rs ? ` \u00b7 R ${rs}` : ''}`, width - 4).map((l, i) => (i === 0 ? `  \u2022 ${l}` : `    ${l}`)));
+      if (s.consequence) out.push(...wrap(consequenceSentence(s.consequence, 'These removals', NBSP), width - 4).map((l) => c.dim(`    ${l}`)));
     }
   }
   const env = f.head?.envelopes[0];
@@ -158,6 +157,9 @@ function requirementTable(rows: RequirementResult[], c: Colors, width: number): 
   return out;
 }
 
+/** Element names keep "(line 14)" together when lines wrap. */
+const NBSP = { space: '\u00a0' };
+
 /** Elements shown under a finding, and steps of a sequence, before "… N more". */
 const MAX_ELEMENTS = 5;
 const MAX_CHAIN = 8;
@@ -174,10 +176,20 @@ function findingLines(x: GroupedFinding, c: Colors, width: number): string[] {
   const body = wrap(x.message, room);
   const out = [head + body[0], ...body.slice(1).map((l) => ' '.repeat(39) + l)];
   const named = x.elements.length === 1 && x.message.includes(x.elements[0].id);
+  const indent = ' '.repeat(39);
   if (x.elements.length > 0 && !x.grouped && !named) {
-    const shown = x.elements.slice(0, MAX_ELEMENTS).map((e) => `${e.id}\u00a0(line\u00a0${e.line})`);
+    const shown = x.elements.slice(0, MAX_ELEMENTS).map((e) => formatElement(e, NBSP));
     const more = x.elements.length > MAX_ELEMENTS ? `, \u2026 ${x.elements.length - MAX_ELEMENTS} more` : '';
-    out.push(...wrap(`at ${shown.join(', ')}${more}`, room).map((l) => ' '.repeat(39) + c.dim(l)));
+    out.push(...wrap(`at ${shown.join(', ')}${more}`, room).map((l) => indent + c.dim(l)));
+  }
+  // What each weak point costs: one sentence, or one line per member of a merged finding.
+  if (x.grouped && x.members && x.members.length > 1) {
+    for (const m of x.members) {
+      if (!m.consequence) continue;
+      out.push(...wrap(`${formatElement(m.elements[0], NBSP)}: ${consequenceSentence(m.consequence, '', NBSP)}`, room).map((l) => indent + c.dim(l)));
+    }
+  } else if (x.consequence) {
+    out.push(...wrap(consequenceSentence(x.consequence, 'Losing it', NBSP), room).map((l) => indent + c.dim(l)));
   }
   return out;
 }

@@ -59,7 +59,8 @@ function repo(): MemoryRepo {
   const design = (base: boolean) =>
     yamlStringify({
       network: { name: IDS.markdown, description: IDS.ansi },
-      nodes: [...chain.map((id) => ({ id, label: IDS.img })), ...(base ? [{ id: REMOVED }] : [])],
+      // Labels are the pull request's too, and views now name sites by them: one trick each.
+      nodes: [...chain.map((id, i) => ({ id, label: ALL[(i + 1) % ALL.length] })), ...(base ? [{ id: REMOVED }] : [])],
       links: [...links, ...(base ? [{ between: ['end-b', REMOVED] }, { between: [REMOVED, 'end-a'] }] : [])],
     });
   const policy = 'designs:\n  - paths: ["**/*.net.yaml"]\n';
@@ -176,6 +177,8 @@ describe('hostile ids in a real gate run', () => {
     expect(f.head!.structure.cutNodes.map((b) => b.id)).toEqual(SITES);
     expect(f.changes?.removed.map((e) => e.id)).toContain(REMOVED);
     expect(strings(f.findings)).toEqual(expect.arrayContaining([...SITES, ...LINKS]));
+    // Labels are kept exactly too, on the elements that have them.
+    expect(f.findings.flatMap((x) => x.elements).some((e) => e.label === IDS.crlf)).toBe(true);
   });
 
   it('terminal: no ESC, BEL, CR or bidi character from an id, with colour off or on', () => {

@@ -82,9 +82,9 @@ describe('renderHtml', () => {
   it('names the weakest sequence by element and line, and marks new single points of failure', () => {
     const s = sections()[0];
     expect(s).toContain('Worst case found under random site failures (exact search, 3 sites)');
-    expect(s).toMatch(/<span class="el">kaskeld<\/span> <span class="line">line 31<\/span> \u2014 R 0\.655/);
-    expect(s).toMatch(/lunmere-kaskeld<\/span> <span class="line">line 197<\/span> <strong class="sev-fail">new<\/strong>/);
-    expect(s).not.toMatch(/wendlequist-yarlsquay<\/span> <span class="line">line 268<\/span> <strong/);
+    expect(s).toMatch(/<span class="el">kaskeld<\/span> <span class="line">\(line 31\)<\/span> \u2014 R 0\.655/);
+    expect(s).toMatch(/lunmere-kaskeld<\/span> <span class="line">\(line 197\)<\/span> <strong class="sev-fail">new<\/strong>/);
+    expect(s).not.toMatch(/wendlequist-yarlsquay<\/span> <span class="line">\(line 268\)<\/span> <strong/);
   });
 
   it('carries the caution and a print stylesheet', () => {
