@@ -160,6 +160,14 @@ export interface Report {
   part?: { index: number; total: number };
   /** Set by joinReports: the parts joined into this report (1-based), out of `total`. */
   parts?: { total: number; joined: number[] };
+  /**
+   * The change edits the gate's own configuration: the workflow that runs netbrace (settings
+   * compared with the base's; a weakening fails the check unless the base already allowed it).
+   */
+  configuration?: {
+    workflow: string;
+    changes: { setting: string; base: string; head: string; weakens: boolean; line: number; message: string; severity: Severity }[];
+  };
   /** What the run judged: the changed designs, the given paths, or every design (thresholds only). */
   scope?: 'changed' | 'paths' | 'all';
   counts: Record<FileStatus, number>;

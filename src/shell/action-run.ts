@@ -14,6 +14,7 @@ import { decodeText } from '../decode.js';
 import { formatDiagnostic, isNetbraceError } from '../errors.js';
 import type { GateRequest, GateResult } from '../run-gate.js';
 import { planAnnotations, type Annotation } from '../report/annotations.js';
+import { compareSettings, type SettingChange } from '../gate/own-settings.js';
 import { logText, oneLine } from '../report/escape.js';
 import { commentDigest, commentMarker, renderComment, renderSummary, reportDigest } from '../report/markdown.js';
 import { CAUTION, REPORT_VERSION, serializeReport, type FileStatus, type Report } from '../report/report.js';
@@ -268,6 +269,52 @@ async function ensureCommit(deps: ActionDeps, cwd: string, commit: string, what:
   return `the ${what} commit ${commit} is not in the clone and could not be fetched (git fetch: ${oneLine(fetched.stderr, 300) || `exit ${fetched.code}`})`;
 }
 
+/** The running workflow's path from GITHUB_WORKFLOW_REF (`owner/repo/path@ref`). */
+export function workflowPathOf(env: Env): string | undefined {
+  const ref = env.GITHUB_WORKFLOW_REF ?? '';
+  const at = ref.lastIndexOf('@');
+  const full = at > 0 ? ref.slice(0, at) : ref;
+  const parts = full.split('/');
+  if (parts.length < 3) return undefined;
+  const p = parts.slice(2).join('/');
+  return /^\.github\/workflows\/[^\0]+\.ya?ml$/.test(p) ? p : undefined;
+}
+
+async function showAt(deps: ActionDeps, cwd: string, rev: string, file: string): Promise<string | null> {
+  const r = await deps.git(['show', `${rev}:${file}`], cwd);
+  return r.code === 0 ? r.stdout : null;
+}
+
+/** The settings of this job's netbrace step that the change edits, when it edits its workflow. */
+async function ownSettingChanges(deps: ActionDeps, env: Env, root: string, base: string, head: string): Promise<{ workflow: string; changes: SettingChange[] } | undefined> {
+  const workflow = workflowPathOf(env);
+  if (!workflow) return undefined;
+  const [b, h] = [await showAt(deps, root, base, workflow), await showAt(deps, root, head, workflow)];
+  if (b === h) return undefined;
+  return { workflow, changes: compareSettings(b, h, env.GITHUB_JOB || undefined) };
+}
+
+/** Keep the base's value of every setting the head weakens (what the trusted revision said). */
+function applyBaseSettings(inputs: ActionInputs, changes: readonly SettingChange[], deps: ActionDeps): void {
+  for (const c of changes) {
+    if (!c.weakens) continue;
+    const base = c.base === '(unset)' ? '' : c.base;
+    if (c.setting === 'mode' && base === 'block') inputs.mode = 'block';
+    else if (c.setting === 'policy-source' && base === 'base') inputs.policySource = 'base';
+    else if (c.setting === 'policy') inputs.policy = base;
+    else if (c.setting === 'org-policy') inputs.orgPolicy = base;
+    deps.out.warning(`netbrace: this change edits its own workflow: ${c.message}; the base's setting (${c.base}) applies`);
+  }
+}
+
+function attachSettings(report: Report, own: { workflow: string; changes: SettingChange[] }, mode: ActionInputs['mode']): void {
+  report.configuration = { workflow: own.workflow, changes: own.changes.map((c) => ({ ...c, severity: c.weakens ? 'fail' : 'notice' })) };
+  if (own.changes.some((c) => c.weakens)) {
+    report.verdict = 'fail';
+    report.mode = mode;
+  }
+}
+
 /** Lines touched at head per repository-relative path, from `git diff -U0`. */
 async function changedLines(deps: ActionDeps, cwd: string, base: string, head: string): Promise<Map<string, Set<number>>> {
   const out = new Map<string, Set<number>>();
@@ -407,6 +454,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     };
     const target = readTarget(env);
     const notes: string[] = [];
+    let ownSettings: { workflow: string; changes: SettingChange[] } | undefined;
 
     let report: Report;
     let lines = new Map<string, Set<number>>();
@@ -470,6 +518,11 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
           kind = 'schedule';
         }
       }
+      // A change to the workflow that runs this step: the base's settings stay in force.
+      if (base && head && target.pr) {
+        ownSettings = await ownSettingChanges(deps, env, root, base, head);
+        if (ownSettings) applyBaseSettings(inputs, ownSettings.changes, deps);
+      }
       const request: GateRequestLike = {
         ...(base ? { base } : {}),
         ...(head ? { head } : { worktree: true }),
@@ -488,6 +541,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       } else {
         const result = await deps.gate(request, root);
         report = result.report;
+        if (ownSettings) attachSettings(report, ownSettings, inputs.mode);
         if (base && head) lines = await changedLines(deps, root, base, head);
       }
     }
@@ -550,7 +604,12 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     }
     if (verdict === 'fail' && inputs.mode === 'block') {
       const n = report.files.filter((f) => f.status === 'error' || f.findings.some((x) => x.severity === 'fail')).length;
-      return { ...fail(`netbrace: the gate failed: ${n} design${n === 1 ? '' : 's'} with failures (see the annotations and the job summary)`, 1), verdict, comment };
+      const own = report.configuration?.changes.filter((c) => c.weakens).length ?? 0;
+      const what = [
+        ...(n > 0 ? [`${n} design${n === 1 ? '' : 's'} with failures`] : []),
+        ...(own > 0 ? [`the change weakens netbrace's own settings in ${report.configuration!.workflow}`] : []),
+      ].join('; ');
+      return { ...fail(`netbrace: the gate failed: ${what} (see the annotations and the job summary)`, 1), verdict, comment };
     }
     if (verdict === 'fail') deps.out.warning('netbrace: the gate would fail; inform mode reports without failing the step');
     return { exitCode: 0, verdict, comment };
