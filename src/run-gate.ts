@@ -27,6 +27,8 @@ import { builtinPolicy, isDesignPath, loadPolicy, policyForFile } from './policy
 import type { FilePolicy, Policy } from './policy/types.js';
 import { CAUTION, REPORT_VERSION, type FileReport, type Report } from './report/report.js';
 import { parseDesign } from './topology/parse.js';
+import type { Topology } from './topology/model.js';
+import { unsupportedMetric } from './envelope/r-value.js';
 import { VERSION } from './version.js';
 
 export { mergeReports } from './gate/merge.js';
@@ -255,6 +257,7 @@ function joinEvaluations(parts: DesignEvaluation[]): DesignEvaluation {
   evaluation.attacks = [...first.evaluation.attacks];
   evaluation.contingencies = [...first.evaluation.contingencies];
   evaluation.degraded = [...first.evaluation.degraded];
+  const notApplicable = [...(first.evaluation.notApplicable ?? [])];
   const samples = new Map(first.samples);
   const labels = new Map(first.labels);
   for (const p of rest) {
@@ -262,16 +265,31 @@ function joinEvaluations(parts: DesignEvaluation[]): DesignEvaluation {
     evaluation.attacks.push(...p.evaluation.attacks);
     evaluation.contingencies.push(...p.evaluation.contingencies);
     evaluation.degraded.push(...p.evaluation.degraded);
+    notApplicable.push(...(p.evaluation.notApplicable ?? []));
     for (const [k, v] of p.samples) samples.set(k, v);
     for (const [k, v] of p.labels) labels.set(k, v);
   }
+  if (notApplicable.length) evaluation.notApplicable = notApplicable;
+  else delete evaluation.notApplicable;
   return { evaluation, samples, labels };
 }
 
-/** Parse and compile one side; a design error becomes the located problem the report shows. */
-function compileText(text: string, path: string, fp: FilePolicy): { graph: CompactGraph } | { error: NonNullable<CompareInput['headError']> } {
+/**
+ * Parse and compile one side; a design error becomes the located problem the report shows, and
+ * so does an R the design cannot support (a metric of R that does not apply to it: demand_served
+ * without demands), which would otherwise score 0 on every state.
+ */
+function compileText(
+  text: string,
+  path: string,
+  fp: FilePolicy,
+): { graph: CompactGraph; topology: Topology } | { error: NonNullable<CompareInput['headError']> } | { unsupported: NonNullable<CompareInput['headUnsupported']> } {
   try {
-    return { graph: compileTopology(parseDesign(text, path, fp.format ? { format: fp.format } : {})) };
+    const topology = parseDesign(text, path, fp.format ? { format: fp.format } : {});
+    const graph = compileTopology(topology);
+    const problem = unsupportedMetric(graph, fp.rValue);
+    if (problem) return { unsupported: { message: `${problem.message} \u2014 ${problem.hint}`, line: 0, column: 0 } };
+    return { graph, topology };
   } catch (e) {
     if (isNetbraceError(e) && (e.kind === 'design' || e.kind === 'limit' || e.kind === 'usage')) {
       return { error: { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column } };
@@ -280,7 +298,14 @@ function compileText(text: string, path: string, fp: FilePolicy): { graph: Compa
   }
 }
 
-async function evaluateGraph(g: CompactGraph, specs: EvaluationSpec[], cuts: readonly PairedCut[], request: GateRequest, deps: GateDeps): Promise<DesignSide> {
+async function evaluateGraph(
+  g: CompactGraph,
+  topology: Topology,
+  specs: EvaluationSpec[],
+  cuts: readonly PairedCut[],
+  request: GateRequest,
+  deps: GateDeps,
+): Promise<DesignSide> {
   const evaluate = deps.evaluate ?? ((graph: CompactGraph, spec: EvaluationSpec) => evaluateDesign(graph, spec));
   const parts: DesignEvaluation[] = [];
   for (const [i, spec] of specs.entries()) {
@@ -288,7 +313,7 @@ async function evaluateGraph(g: CompactGraph, specs: EvaluationSpec[], cuts: rea
     notePairedCuts(part, cuts, i);
     parts.push(part);
   }
-  return { graph: g, result: joinEvaluations(parts) };
+  return { graph: g, result: joinEvaluations(parts), topology };
 }
 
 function validateRequest(request: GateRequest): void {
@@ -335,8 +360,10 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
       } else {
         const h = compileText(headText, c.path, fp);
         if ('error' in h) input.headError = h.error;
+        else if ('unsupported' in h) input.headUnsupported = h.unsupported;
         else {
           let baseGraph: CompactGraph | undefined;
+          let baseTopology: Topology | undefined;
           let same = false;
           if (!thresholdsOnly && c.change !== 'added') {
             const basePath = c.previousPath ?? c.path;
@@ -346,13 +373,17 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
             } else if (baseText !== null) {
               const b = compileText(baseText, basePath, fp);
               if ('error' in b) input.baseError = b.error;
-              else baseGraph = b.graph;
+              else if ('unsupported' in b) input.baseError = b.unsupported;
+              else {
+                baseGraph = b.graph;
+                baseTopology = b.topology;
+              }
             }
           }
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
-          input.head = await evaluateGraph(h.graph, specs.head, specs.cuts, request, deps);
+          input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
           if (same) input.base = input.head;
-          else if (baseGraph) input.base = await evaluateGraph(baseGraph, specs.base!, specs.cuts, request, deps);
+          else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
         }
       }
     }

@@ -6,11 +6,11 @@
 import path from 'node:path';
 import type { Command, CommandIO } from '../io.js';
 import { parseCommandArgs, wholeNumber } from '../args.js';
-import { UsageError } from '../../errors.js';
+import { DesignError, UsageError } from '../../errors.js';
 import { compileTopology, type CompactGraph } from '../../graph/compact.js';
 import { createMask } from '../../graph/mask.js';
 import { findComponents, findCutElements } from '../../graph/structure.js';
-import { createRValue, type RFunction } from '../../envelope/r-value.js';
+import { createRValue, unsupportedMetric, type RFunction } from '../../envelope/r-value.js';
 import type { ElementKind, RValueSpec } from '../../envelope/types.js';
 import { eligibleUnits, removeUnit, restoreUnit, unitCount, unitIds } from '../../challenges/units.js';
 import { getMetric, isMetricId, metrics as knownMetrics } from '../../metrics/registry.js';
@@ -225,7 +225,8 @@ Examples:
 
 Exit codes:
   0  the ranking was printed
-  1  FILE could not be read (the message gives file:line:col)
+  1  FILE could not be read (the message gives file:line:col), or R cannot be computed
+     on it (a metric that needs demands or link lengths the design does not have)
   2  usage or configuration error (bad option, unknown metric, broken policy)
 `;
 
@@ -257,6 +258,9 @@ export const explainCommand: Command = {
     const { spec, source } = resolveR(file, parsed.values.metric ?? [], parsed.values.policy, io);
     const t = readDesign(file, options);
     const g = compileTopology(t);
+    // A metric the design cannot support would rank every loss at R 0: refuse, naming what is missing.
+    const unsupported = unsupportedMetric(g, spec);
+    if (unsupported) throw new DesignError(unsupported.message, { file }, unsupported.hint);
     const total = kinds.reduce((s, k) => s + unitCount(g, k), 0);
     const progress = createProgress(io, { label: `explain ${file}`, total });
     let x: Explanation;
