@@ -31,6 +31,8 @@ import type { FilePolicy, Policy } from './policy/types.js';
 import { CAUTION, REPORT_VERSION, type FileReport, type Report } from './report/report.js';
 import type { DesignFormat } from './topology/model.js';
 import { parseDesign } from './topology/parse.js';
+import type { Topology } from './topology/model.js';
+import { unsupportedMetric } from './envelope/r-value.js';
 import { VERSION } from './version.js';
 
 export { joinReports } from './gate/join.js';
@@ -404,6 +406,7 @@ function joinEvaluations(parts: DesignEvaluation[]): DesignEvaluation {
   evaluation.attacks = [...first.evaluation.attacks];
   evaluation.contingencies = [...first.evaluation.contingencies];
   evaluation.degraded = [...first.evaluation.degraded];
+  const notApplicable = [...(first.evaluation.notApplicable ?? [])];
   const samples = new Map(first.samples);
   const labels = new Map(first.labels);
   for (const p of rest) {
@@ -411,9 +414,12 @@ function joinEvaluations(parts: DesignEvaluation[]): DesignEvaluation {
     evaluation.attacks.push(...p.evaluation.attacks);
     evaluation.contingencies.push(...p.evaluation.contingencies);
     evaluation.degraded.push(...p.evaluation.degraded);
+    notApplicable.push(...(p.evaluation.notApplicable ?? []));
     for (const [k, v] of p.samples) samples.set(k, v);
     for (const [k, v] of p.labels) labels.set(k, v);
   }
+  if (notApplicable.length) evaluation.notApplicable = notApplicable;
+  else delete evaluation.notApplicable;
   return { evaluation, samples, labels };
 }
 
@@ -435,10 +441,23 @@ async function readSide(deps: GateDeps, rev: Revision, path: string): Promise<st
   }
 }
 
-/** Parse and compile one side; a design error becomes the located problem the report shows. */
-function compileText(text: string, path: string, format: DesignFormat | undefined): { graph: CompactGraph } | { error: NonNullable<CompareInput['headError']> } {
+/**
+ * Parse and compile one side; a design error becomes the located problem the report shows, and
+ * so does an R the design cannot support (a metric of R that does not apply to it: demand_served
+ * without demands), which would otherwise score 0 on every state.
+ */
+function compileText(
+  text: string,
+  path: string,
+  format: DesignFormat | undefined,
+  rValue: FilePolicy['rValue'],
+): { graph: CompactGraph; topology: Topology } | { error: NonNullable<CompareInput['headError']> } | { unsupported: NonNullable<CompareInput['headUnsupported']> } {
   try {
-    return { graph: compileTopology(parseDesign(text, path, format ? { format } : {})) };
+    const topology = parseDesign(text, path, format ? { format } : {});
+    const graph = compileTopology(topology);
+    const problem = unsupportedMetric(graph, rValue);
+    if (problem) return { unsupported: { message: `${problem.message} \u2014 ${problem.hint}`, line: 0, column: 0 } };
+    return { graph, topology };
   } catch (e) {
     if (isNetbraceError(e) && (e.kind === 'design' || e.kind === 'limit' || e.kind === 'usage')) {
       return { error: problemOf(e) };
@@ -447,7 +466,14 @@ function compileText(text: string, path: string, format: DesignFormat | undefine
   }
 }
 
-async function evaluateGraph(g: CompactGraph, specs: EvaluationSpec[], cuts: readonly PairedCut[], request: GateRequest, deps: GateDeps): Promise<DesignSide> {
+async function evaluateGraph(
+  g: CompactGraph,
+  topology: Topology,
+  specs: EvaluationSpec[],
+  cuts: readonly PairedCut[],
+  request: GateRequest,
+  deps: GateDeps,
+): Promise<DesignSide> {
   const evaluate = deps.evaluate ?? ((graph: CompactGraph, spec: EvaluationSpec) => evaluateDesign(graph, spec));
   const parts: DesignEvaluation[] = [];
   for (const [i, spec] of specs.entries()) {
@@ -455,7 +481,7 @@ async function evaluateGraph(g: CompactGraph, specs: EvaluationSpec[], cuts: rea
     notePairedCuts(part, cuts, i);
     parts.push(part);
   }
-  return { graph: g, result: joinEvaluations(parts) };
+  return { graph: g, result: joinEvaluations(parts), topology };
 }
 
 function validateRequest(request: GateRequest): void {
@@ -501,10 +527,12 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
       if (headText === null) {
         input.change = 'deleted';
       } else {
-        const h = typeof headText === 'string' ? compileText(headText, c.path, fp.format) : headText;
+        const h = typeof headText === 'string' ? compileText(headText, c.path, fp.format, fp.rValue) : headText;
         if ('error' in h) input.headError = h.error;
+        else if ('unsupported' in h) input.headUnsupported = h.unsupported;
         else {
           let baseGraph: CompactGraph | undefined;
+          let baseTopology: Topology | undefined;
           let same = false;
           if (!thresholdsOnly && c.change !== 'added') {
             const basePath = c.previousPath ?? c.path;
@@ -513,15 +541,19 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
               same = true; // identical text: the same evaluation, delta exactly 0
             } else if (baseText !== null) {
               // The base may be another file in another format (a design moved and converted).
-              const b = typeof baseText === 'string' ? compileText(baseText, basePath, basePath === c.path ? fp.format : designFormat(policy, basePath)) : baseText;
+              const b = typeof baseText === 'string' ? compileText(baseText, basePath, basePath === c.path ? fp.format : designFormat(policy, basePath), fp.rValue) : baseText;
               if ('error' in b) input.baseError = b.error;
-              else baseGraph = b.graph;
+              else if ('unsupported' in b) input.baseError = b.unsupported;
+              else {
+                baseGraph = b.graph;
+                baseTopology = b.topology;
+              }
             }
           }
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
-          input.head = await evaluateGraph(h.graph, specs.head, specs.cuts, request, deps);
+          input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
           if (same) input.base = input.head;
-          else if (baseGraph) input.base = await evaluateGraph(baseGraph, specs.base!, specs.cuts, request, deps);
+          else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
         }
       }
     }

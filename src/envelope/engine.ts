@@ -11,7 +11,7 @@ import { createMask, type Mask } from '../graph/mask.js';
 import { getChallenge } from '../challenges/registry.js';
 import type { BandPlan, ResolvedParams } from '../challenges/types.js';
 import { countOnes, eligibleUnits, removeUnit, stepsAt, unitCount } from '../challenges/units.js';
-import type { Contingency, ElementKind, RValueSpec, WorstCase } from './types.js';
+import type { ChallengeName, Contingency, ElementKind, RValueSpec, WorstCase } from './types.js';
 import { createRValue, unionFindR, type RFunction } from './r-value.js';
 import { connectivityCurve, createUnionFindWorkspace, type ConnectivityCurve, type UnionFindWorkspace } from './union-find.js';
 import { evaluateContingency } from './contingency.js';
@@ -41,8 +41,10 @@ export interface PlannedChallenge {
 export interface EvaluationPlan {
   r: RValueSpec;
   items: PlannedChallenge[];
-  /** Reasons the evaluation as a whole was reduced or challenges skipped. */
+  /** Reasons the evaluation as a whole was reduced. */
   degraded: string[];
+  /** Challenges left out because the design lacks what they need (coordinates, risk groups). */
+  notApplicable?: { challenge: ChallengeName; reason: string }[];
   /** Estimated work in element visits after any reduction (see evaluate.ts). */
   work: number;
 }

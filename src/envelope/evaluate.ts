@@ -25,7 +25,7 @@ import { sitesWithCoordinates } from '../challenges/regional.js';
 import { countOnes, eligibleUnits, stepsAt, unitCount, unitIds } from '../challenges/units.js';
 import { makeGrid } from '../challenges/grid.js';
 import type { AttackCurve, ChallengeName, ChallengeParams, Contingency, Envelope, RValueSpec, RemovalSequence, WorstCase } from './types.js';
-import { rPasses, unionFindR, validateRSpec } from './r-value.js';
+import { rPasses, unionFindR, unsupportedMetric, UnsupportedMetricError, validateRSpec } from './r-value.js';
 import {
   attackSteps,
   bandPlan,
@@ -82,7 +82,11 @@ const RANKING_PASSES: Partial<Record<ChallengeName, (n: number, k: number) => nu
 /** Resolves parameters, skips challenges the design cannot support, and applies the budget. */
 export function planEvaluation(g: CompactGraph, spec: EvaluationSpec): EvaluationPlan {
   validateRSpec(spec.r);
+  const unsupported = unsupportedMetric(g, spec.r);
+  if (unsupported) throw new UnsupportedMetricError(unsupported);
   const degraded: string[] = [];
+  // A challenge the design lacks the data for does not apply: not a reduction of the work.
+  const notApplicable: { challenge: ChallengeName; reason: string }[] = [];
   const items: PlannedChallenge[] = [];
   const seen = new Set<string>();
   for (const p of spec.challenges) {
@@ -91,11 +95,11 @@ export function planEvaluation(g: CompactGraph, spec: EvaluationSpec): Evaluatio
     const params = resolveParams(g, p, spec.seed);
     const c = getChallenge(p.challenge);
     if (p.challenge === 'regional' && sitesWithCoordinates(g).length === 0) {
-      degraded.push('regional: skipped, no site has coordinates (lat/lon)');
+      notApplicable.push({ challenge: 'regional', reason: 'no site has coordinates (lat/lon)' });
       continue;
     }
     if ((p.challenge === 'risk-groups' || p.challenge === 'risk-groups-worst') && countOnes(eligibleUnits(g, 'group')) === 0) {
-      degraded.push(`${p.challenge}: skipped, the design has no shared-risk group that can fail`);
+      notApplicable.push({ challenge: p.challenge, reason: 'the design has no shared-risk group that can fail' });
       continue;
     }
     if (c.type === 'contingency') params.worstCase = 0;
@@ -146,7 +150,7 @@ export function planEvaluation(g: CompactGraph, spec: EvaluationSpec): Evaluatio
     const e = estimate(g, it, rp, free);
     return s + e.band + e.cases + e.fixed + e.worst;
   }, 0);
-  return { r: spec.r, items, degraded, work: work * visits };
+  return { r: spec.r, items, degraded, ...(notApplicable.length ? { notApplicable } : {}), work: work * visits };
 }
 
 function note(it: PlannedChallenge, reason: string): void {
@@ -224,6 +228,7 @@ export function assembleEvaluation(g: CompactGraph, plan: EvaluationPlan, tasks:
     attacks: [],
     contingencies: [],
     degraded: [...plan.degraded],
+    ...(plan.notApplicable ? { notApplicable: plan.notApplicable.map((x) => ({ ...x })) } : {}),
   };
   const envelopeOf = new Map<number, Envelope>();
   const attackOf = new Map<number, AttackCurve>();

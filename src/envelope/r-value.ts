@@ -36,8 +36,39 @@ export function combineR(spec: RValueSpec, values: ArrayLike<number>): number {
   return sum / weight;
 }
 
+/** A metric of R that this design cannot support: its id, what it needs and how to fix it. */
+export interface UnsupportedMetric {
+  id: MetricId;
+  message: string;
+  hint: string;
+}
+
+/**
+ * The first metric of R that does not apply to the design (Metric.appliesTo), in spec order;
+ * undefined when R can be computed. A metric that does not apply would score 0 on every state,
+ * which reads as "no robustness" rather than "cannot be computed", so callers refuse instead.
+ */
+export function unsupportedMetric(g: CompactGraph, spec: RValueSpec): UnsupportedMetric | undefined {
+  for (const m of spec.metrics) {
+    const metric = getMetric(m.id);
+    if (metric.appliesTo(g)) continue;
+    const needs = metric.needs ?? { what: 'data this design does not have', hint: `take ${m.id} out of the r-value` };
+    return { id: m.id, message: `metric ${m.id} needs ${needs.what}`, hint: needs.hint };
+  }
+  return undefined;
+}
+
+/** Thrown by createRValue for a design one of R's metrics does not apply to. */
+export class UnsupportedMetricError extends RangeError {
+  constructor(readonly problem: UnsupportedMetric) {
+    super(`${problem.message} — ${problem.hint}`);
+  }
+}
+
 export function createRValue(g: CompactGraph, spec: RValueSpec, options?: MetricOptions): RFunction {
   validateRSpec(spec);
+  const problem = unsupportedMetric(g, spec);
+  if (problem) throw new UnsupportedMetricError(problem);
   const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, options));
   const values = new Float64Array(evaluators.length);
   return (mask) => {

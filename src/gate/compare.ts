@@ -3,33 +3,50 @@
 // finding with its elements and lines. Pure.
 //
 // Judging a value (higher is better, except spread):
-//   missed        the head misses the floor (or ceiling)                → finding at the requirement's severity
+//   not-computable  the value (head, base or delta) is NaN or infinite    → failure, whatever the severity
+//   missed        the head misses the floor (or ceiling), or the head can no longer be judged
+//                 while the base could (the change removed the coordinates, risk groups...
+//                 the requirement needs)                                → finding at the requirement's severity
 //   uncertain     the head meets it, but the confidence interval of the quantile reaches past it,
 //                 or the work behind it was cut by the budget (N−1 cases left out, a greedy
 //                 worst case instead of the exact one), or the budget cut the realizations and
 //                 the value clears the floor by no more than REDUCED_MARGIN_SE standard errors
 //                 of its own (a minimum over cut realizations: always, since the minimum of
-//                 fewer can only be higher), or the value could not be computed
+//                 fewer can only be higher), or the value could not be computed on either side
 //                                                                       → notice / warning, never "met"
 //   regressed     it dropped from base by more than the allowance, and by at least
-//                 error-multiple × se                                   → finding at the weakening severity
-//   within-noise  it dropped, but by less than error-multiple × se      → notice: Monte Carlo noise, not a failure
-//   met           otherwise; a drop inside the allowance is a notice
+//                 error-multiple × se                                     → finding at the weakening severity,
+//                                                                         never graver than the requirement's
+//   within-noise  it dropped, but by less than error-multiple × se        → notice: Monte Carlo noise, not a failure
+//   not-applicable  a tracked value (no floor) whose challenge the design gives no data for on
+//                 either side (no risk groups, no coordinates)            → no finding: nothing is required
+//   met           otherwise; a drop inside the allowance is a notice, a change of exactly 0 says nothing
 // On realizations cut by the budget a drop is judged both ways: regressed only when it exceeds
 // the allowance by more than error-multiple × se, a notice when it stays below the allowance by
 // more than that, and uncertain in between; when the budget cut base and head differently
 // their realizations do not pair, and the change is uncertain whatever its sign. Every
 // requirement whose value rests on reduced work says so in a finding of its own.
+// Every comparison is written so that a NaN falls to the failing side (`!(x <= limit)`, not
+// `x > limit`), and messages print the digits that decide (describe.ts, decidingDecimals).
 // A new single point of failure is a bridge, cut node or stranding shared-risk group of the head
 // that the base does not have, base and head matched by id and, for renamed ids, by
 // neighbourhood (spof.ts, rename.ts); hardened elements never count, but weak points hidden
-// by newly hardened ones are findings of their own.
+// by newly hardened ones are findings of their own. Each kind is a row of its own.
 
 import type { ElementKind } from '../envelope/types.js';
-import type { Finding, FileReport, FileStatus, ReportElement, RequirementResult, Severity } from '../report/report.js';
+import type { Finding, FileReport, FileStatus, FindingStatus, ReportElement, RequirementResult, Severity } from '../report/report.js';
 import type { FilePolicy, Requirement } from '../policy/types.js';
 import { withSequenceDetails } from './consequence.js';
-import { describeRequirement, elementChanges as describeElementChanges, formatDelta, formatR, type ElementChanges } from './describe.js';
+import {
+  changeDecimals,
+  decidingDecimals,
+  describeRequirement,
+  designChanges,
+  elementChanges as describeElementChanges,
+  formatDelta,
+  formatR,
+  type ElementChanges,
+} from './describe.js';
 import { identityMatching, matchDesigns, type Matching } from './rename.js';
 import { judgeSpof } from './spof.js';
 
@@ -62,7 +79,9 @@ export interface CompareInput {
   base?: DesignSide;
   /** The head could not be read (parse error): the file fails with this line. */
   headError?: LocatedProblem;
-  /** The base could not be read: the head is judged on thresholds only. */
+  /** The head was read, but R cannot be computed on it (a metric of R does not apply): the file fails. */
+  headUnsupported?: LocatedProblem;
+  /** The base could not be read (or R cannot be computed on it): the head is judged on thresholds only. */
   baseError?: LocatedProblem;
 }
 
@@ -75,6 +94,13 @@ const SAME = 1e-12;
  * approximation; common practice).
  */
 export const REDUCED_MARGIN_SE = 2;
+
+const GRAVITY: Record<Severity, number> = { fail: 0, warn: 1, notice: 2 };
+
+/** The milder of two severities: a regression finding is never graver than its requirement. */
+function milder(a: Severity, b: Severity): Severity {
+  return GRAVITY[a] >= GRAVITY[b] ? a : b;
+}
 
 /** An uncertain judgement is a warning, or a notice where the rule itself is only a notice. */
 function uncertainSeverity(severity: Severity): Severity {
@@ -113,7 +139,33 @@ function floorOf(r: Requirement): number | null {
   return r.min ?? null;
 }
 
-function judge(r: Requirement, input: CompareInput, description: string): { row: RequirementResult; findings: Finding[] } {
+/** Which of a measured value's numbers is NaN or infinite, in words; undefined when all are finite. */
+function notFinite(m: Measured): string | undefined {
+  const named: [string, number | null][] = [
+    ['head value', m.head],
+    ['base value', m.base],
+    ['delta', m.delta],
+  ];
+  const bad = named.filter(([, v]) => v !== null && !Number.isFinite(v));
+  if (!bad.length) return undefined;
+  return `the ${bad.map(([n, v]) => `${n} is ${String(v)}`).join(' and the ')}, not a finite number`;
+}
+
+/** How a drop from base to head is judged (see the header); NaN falls to "regressed" or "uncertain". */
+function classifyDrop(drop: number, allowance: number, noise: number, reduced: boolean): Exclude<FindingStatus, 'missed' | 'reduced-work' | 'not-computable'> {
+  if (reduced) {
+    if (drop > allowance + noise) return 'regressed';
+    if (drop <= allowance - noise) return 'within-allowance';
+    return 'uncertain';
+  }
+  if (drop < noise) return 'within-noise';
+  if (drop <= allowance) return 'within-allowance';
+  return 'regressed';
+}
+
+type Judged = { rows: RequirementResult[]; findings: Finding[] };
+
+function judge(r: Requirement, input: CompareInput, description: string): Judged {
   const head = input.head!;
   const comparing = !input.thresholdsOnly && input.base !== undefined;
   const m = measure(r, input.policy.challenges, head, comparing ? input.base : undefined);
@@ -131,39 +183,76 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
   };
   const findings: Finding[] = [];
   const elements = elementsOf(m.elements, head, input.base);
-  const extra = { requirement: r.id, ...numbers(m) };
-  if (m.missing !== undefined || m.head === null) {
-    row.status = 'uncertain';
-    findings.push(finding(THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE], 'warn', `${description}: could not be judged: ${m.missing}`, [], extra));
-    return { row, findings };
-  }
-  const better = (a: number, b: number) => (m.higherIsBetter ? a >= b : a <= b);
-  const thresholdRule = THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE];
-  const margin = threshold === null ? 0 : m.higherIsBetter ? m.head - threshold : threshold - m.head;
+  const rule = THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE];
+  const extra = { requirement: r.id, ...numbers(m), ...(threshold !== null ? { threshold } : {}) };
+  const result = (): Judged => ({ rows: [row], findings });
 
-  if (threshold !== null && !better(m.head, threshold)) {
+  if (m.missing !== undefined || m.head === null) {
+    const why = m.missing ?? 'no value';
+    if (m.base !== null) {
+      // The base could be judged and the head cannot: the change took away what the requirement needs.
+      row.status = 'missed';
+      findings.push(
+        finding(rule, r.severity, `${description}: the head can no longer be judged, though the base could (${formatR(m.base)}): ${why}`, [], {
+          ...extra,
+          status: 'missed',
+        }),
+      );
+    } else if (m.notApplicable && threshold === null) {
+      // A tracked value (no floor) on a challenge the design gives no data for: nothing is required.
+      row.status = 'not-applicable';
+    } else {
+      // A floor the policy sets cannot be judged: never "met".
+      row.status = 'uncertain';
+      findings.push(finding(rule, uncertainSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: 'uncertain' }));
+    }
+    return result();
+  }
+  const broken = notFinite(m);
+  if (broken !== undefined) {
+    // A NaN or infinite R says the computation failed, not that the design is robust.
+    row.status = 'uncertain';
+    findings.push(
+      finding('not-computable', 'fail', `${description}: ${broken}; a value that cannot be computed is never a pass`, elements, {
+        ...extra,
+        status: 'not-computable',
+      }),
+    );
+    return result();
+  }
+
+  const headValue = m.head;
+  // Meets the limit, with a NaN on either side counting as not meeting it.
+  const meets = (v: number, limit: number) => (m.higherIsBetter ? v >= limit : v <= limit);
+  const limitWord = m.higherIsBetter ? 'floor' : 'ceiling';
+  /** A value beside the limit it is judged against, at the digits that tell them apart. */
+  const against = (v: number, limit: number) => formatR(v, decidingDecimals(v, limit));
+
+  if (threshold !== null && !meets(headValue, threshold)) {
     row.status = 'missed';
     const relation = m.higherIsBetter ? 'is below' : 'is above';
-    findings.push(
-      finding(THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE], r.severity, `${description}: ${formatR(m.head)} ${relation} ${threshold}`, elements, extra),
-    );
+    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'missed' }));
   } else if (threshold !== null && m.incomplete !== undefined) {
     // Met by incomplete work: not proven, so not "met".
     row.status = 'uncertain';
     findings.push(
-      finding(THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE], 'warn', `${description}: ${formatR(m.head)} meets it, but ${m.incomplete}`, elements, extra),
+      finding(rule, uncertainSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
+        ...extra,
+        status: 'uncertain',
+      }),
     );
-  } else if (threshold !== null && m.lo !== undefined && m.hi !== undefined && !better(m.higherIsBetter ? m.lo : m.hi, threshold)) {
+  } else if (threshold !== null && m.lo !== undefined && m.hi !== undefined && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
     row.status = 'uncertain';
     const edge = m.higherIsBetter ? m.lo : m.hi;
     const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
+    const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
     findings.push(
       finding(
-        thresholdRule,
+        rule,
         m.reduced !== undefined ? uncertainSeverity(r.severity) : 'notice',
-        `${description}: ${formatR(m.head)} meets it, but its confidence interval reaches ${formatR(edge)}; more realizations would settle it${cut}`,
+        `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
         elements,
-        extra,
+        { ...extra, status: 'uncertain' },
       ),
     );
   } else if (threshold !== null && m.headSe !== undefined && r.kind === 'r-threshold' && r.statistic.kind === 'min') {
@@ -171,110 +260,102 @@ function judge(r: Requirement, input: CompareInput, description: string): { row:
     row.status = 'uncertain';
     findings.push(
       finding(
-        thresholdRule,
+        rule,
         uncertainSeverity(r.severity),
-        `${description}: ${formatR(m.head)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
+        `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
         elements,
-        extra,
+        { ...extra, status: 'uncertain' },
       ),
     );
-  } else if (threshold !== null && m.headSe !== undefined && !(margin > REDUCED_MARGIN_SE * m.headSe)) {
-    // Met on realizations the budget cut, by a margin their own error does not clear.
-    row.status = 'uncertain';
-    findings.push(
-      finding(
-        thresholdRule,
-        uncertainSeverity(r.severity),
-        `${description}: ${formatR(m.head)} meets it, but ${m.reduced}, and it clears the ${m.higherIsBetter ? 'floor' : 'ceiling'} by ${formatR(margin)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} \u00d7 ${formatSe(m.headSe)})`,
-        elements,
-        extra,
-      ),
-    );
+  } else if (threshold !== null && m.headSe !== undefined) {
+    const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
+    const needed = REDUCED_MARGIN_SE * m.headSe;
+    if (!(margin > needed)) {
+      // Met on realizations the budget cut, by a margin their own error does not clear.
+      row.status = 'uncertain';
+      const d = decidingDecimals(margin, needed);
+      const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : 'unknown';
+      findings.push(
+        finding(
+          rule,
+          uncertainSeverity(r.severity),
+          `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} \u00d7 ${se})`,
+          elements,
+          { ...extra, status: 'uncertain' },
+        ),
+      );
+    }
   }
 
+  const policyRule = input.policy.weakening;
+  const regressionSeverity = milder(policyRule.severity, r.severity);
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== undefined) {
     // Reduced differently on the two sides: the realizations do not pair, so no delta is judged.
     if (row.status === 'met') row.status = 'uncertain';
-    const weakening = input.policy.weakening;
     findings.push(
       finding(
         'regression',
-        uncertainSeverity(weakening.severity),
-        `${description}: from ${formatR(m.base)} to ${formatR(m.head)}, but ${m.unpaired}; the change cannot be judged`,
+        uncertainSeverity(regressionSeverity),
+        `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
-        extra,
+        { ...extra, status: 'uncertain' },
       ),
     );
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
+    const base = m.base;
     const drop = m.higherIsBetter ? -m.delta : m.delta;
-    if (drop > SAME * Math.max(1, Math.abs(m.base))) {
-      const rule = input.policy.weakening;
-      const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(m.base));
-      const change = `from ${formatR(m.base)} to ${formatR(m.head)} (\u0394 ${formatDelta(m.delta, m.se)})`;
-      const noise = rule.errorMultiple * m.se;
+    // A rise, no change, or a drop within rounding says nothing (written so that NaN does not pass).
+    if (!(drop <= SAME * Math.max(1, Math.abs(base)))) {
+      const allowance = Math.max(policyRule.allowedDrop ?? 0, (policyRule.allowedRelativeDrop ?? 0) * Math.abs(base));
+      const noise = policyRule.errorMultiple * m.se;
+      const reduced = m.reduced !== undefined;
+      const outcome = classifyDrop(drop, allowance, noise, reduced);
+      // The digits that decide: the drop against the allowance (and the noise band around it).
+      const digits = (limit: number) => changeDecimals(base, headValue, m.higherIsBetter, limit);
+      const d =
+        outcome === 'within-noise'
+          ? digits(noise)
+          : reduced
+            ? Math.max(digits(allowance), digits(outcome === 'regressed' ? allowance + noise : allowance - noise))
+            : digits(allowance);
       const verb = m.higherIsBetter ? 'dropped' : 'rose';
-      if (m.reduced !== undefined && !(drop > allowance + noise) && !(drop <= allowance - noise)) {
+      const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (\u0394 ${formatDelta(m.delta, m.se, d)})`;
+      const allowed = formatR(allowance, d);
+      const k = policyRule.errorMultiple;
+      const data = { ...extra, allowance, status: outcome };
+      if (outcome === 'regressed') {
+        if (row.status !== 'missed') row.status = 'regressed';
+        const beyond = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
+        findings.push(finding('regression', regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
+      } else if (outcome === 'uncertain') {
         // On cut realizations the drop is within error-multiple × se of the allowance: either side of it.
         if (row.status === 'met') row.status = 'uncertain';
         findings.push(
           finding(
             'regression',
-            uncertainSeverity(rule.severity),
-            `${description}: ${verb} ${change}, within ${rule.errorMultiple} \u00d7 its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            uncertainSeverity(regressionSeverity),
+            `${description}: ${change}, within ${k} \u00d7 its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
-            extra,
+            data,
           ),
         );
-      } else if (m.reduced !== undefined && drop <= allowance - noise) {
-        findings.push(
-          finding('regression', 'notice', `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} \u00d7 its error; ${m.reduced}`, elements, extra),
-        );
-      } else if (m.reduced !== undefined) {
-        if (row.status !== 'missed') row.status = 'regressed';
-        findings.push(
-          finding(
-            'regression',
-            rule.severity,
-            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} \u00d7 its error; ${m.reduced}`,
-            elements,
-            extra,
-          ),
-        );
-      } else if (drop < noise) {
+      } else if (outcome === 'within-noise') {
         if (row.status === 'met') row.status = 'within-noise';
         findings.push(
-          finding(
-            'regression',
-            'notice',
-            `${description}: ${m.higherIsBetter ? 'dropped' : 'rose'} ${change}, less than ${rule.errorMultiple} \u00d7 its Monte Carlo error: within noise, not a failure`,
-            elements,
-            extra,
-          ),
-        );
-      } else if (drop <= allowance) {
-        findings.push(
-          finding('regression', 'notice', `${description}: ${m.higherIsBetter ? 'dropped' : 'rose'} ${change}, within the allowed ${formatR(allowance)}`, elements, extra),
+          finding('regression', 'notice', `${description}: ${change}, less than ${k} \u00d7 its Monte Carlo error (${formatR(noise, d)}): within noise, not a failure`, elements, data),
         );
       } else {
-        if (row.status !== 'missed') row.status = 'regressed';
-        findings.push(
-          finding(
-            'regression',
-            rule.severity,
-            `${description}: ${m.higherIsBetter ? 'dropped' : 'rose'} ${change}, more than the allowed ${formatR(allowance)}`,
-            elements,
-            extra,
-          ),
-        );
+        const margin = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
+        findings.push(finding('regression', 'notice', `${description}: ${change}, within the allowed ${allowed}${margin}`, elements, data));
       }
     }
   }
   // Every requirement judged on reduced work says so, once.
   const reducedWork = m.reduced ?? m.incomplete;
   if (reducedWork !== undefined && !findings.some((f) => f.message.includes(reducedWork))) {
-    findings.push(finding(thresholdRule, 'notice', `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, line: 0 }));
+    findings.push(finding(rule, 'notice', `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, status: 'reduced-work', line: 0 }));
   }
-  return { row, findings };
+  return result();
 }
 
 /** Nodes, links and shared-risk groups that the change added, removed, renamed or (un)hardened. */
@@ -285,7 +366,7 @@ export function elementChanges(base: DesignSide, head: DesignSide, matching: Mat
 /** Which status a judged file has, from its findings (only fail-severity findings change it). */
 export function fileStatus(change: CompareInput['change'], findings: readonly Finding[]): FileStatus {
   const failing = findings.filter((f) => f.severity === 'fail');
-  if (failing.some((f) => f.rule === 'parse-error')) return 'error';
+  if (failing.some((f) => f.rule === 'parse-error' || f.rule === 'not-computable')) return 'error';
   const thresholdRules = new Set<Finding['rule']>(Object.values(THRESHOLD_RULE));
   if (failing.some((f) => thresholdRules.has(f.rule))) return 'below-threshold';
   if (failing.some((f) => f.rule === 'regression' || SPOF_RULES.has(f.rule))) return 'regressed';
@@ -307,11 +388,12 @@ export function compareDesign(input: CompareInput): FileReport {
     }
     return report;
   }
-  if (input.headError || !input.head) {
-    const e = input.headError ?? { message: 'the design could not be read', line: 0, column: 0 };
+  if (input.headError || input.headUnsupported || !input.head) {
+    const e = input.headError ?? input.headUnsupported ?? { message: 'the design could not be read', line: 0, column: 0 };
     report.status = 'error';
     report.error = { message: e.message, line: e.line, column: e.column };
-    report.findings.push(finding('parse-error', 'fail', e.message, [], { line: e.line, column: e.column }));
+    const rule = input.headUnsupported && !input.headError ? 'not-computable' : 'parse-error';
+    report.findings.push(finding(rule, 'fail', e.message, [], { line: e.line, column: e.column, ...(rule === 'not-computable' ? { status: 'not-computable' as const } : {}) }));
     return report;
   }
 
@@ -327,9 +409,9 @@ export function compareDesign(input: CompareInput): FileReport {
   const matching = !comparing ? undefined : effective.base!.result === input.head.result ? identityMatching(input.head.graph) : matchDesigns(effective.base!.graph, input.head.graph);
   for (const r of input.policy.requirements) {
     const description = describeRequirement(r, input.policy.challenges);
-    const { row, findings } =
+    const { rows, findings } =
       r.kind === 'no-new-spof' ? judgeSpof(r, description, input.head, comparing ? effective.base : undefined, matching) : judge(r, effective, description);
-    report.requirements.push(row);
+    report.requirements.push(...rows);
     report.findings.push(...findings);
   }
   for (const reason of input.head.result.evaluation.degraded) {
@@ -344,7 +426,10 @@ export function compareDesign(input: CompareInput): FileReport {
   if (effective.base && !effective.thresholdsOnly) {
     report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.graph);
     const changes = elementChanges(effective.base, input.head, matching);
-    if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) > 0) report.changes = changes;
+    // Attributes changed on elements both sides have (by id and link key), with both lines.
+    const modified = effective.base.topology && input.head.topology ? designChanges(effective.base.topology, input.head.topology)?.modified : undefined;
+    if (modified?.length) changes.modified = modified;
+    if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) + (changes.modified?.length ?? 0) > 0) report.changes = changes;
   }
   report.status = fileStatus(input.change, report.findings);
   return report;

@@ -1,24 +1,64 @@
-// Plain words for requirements and numbers, shared by the findings' messages; and what a
-// change does to a design, element by element (added, removed, renamed, hardened).
+// Plain words for requirements, numbers and changes, shared by the findings' messages and
+// the report's "what the change does": elements added, removed, renamed, hardened, and the
+// attributes changed on elements both sides have.
 
 import type { CompactGraph } from '../graph/compact.js';
 import { reportElement } from '../graph/element.js';
 import type { ChallengeDef, Requirement } from '../policy/types.js';
-import type { FileReport, ReportElement } from '../report/report.js';
+import type { AttributeChange, FileReport, ReportElement } from '../report/report.js';
+import type { TopoLink, TopoNode, Topology } from '../topology/model.js';
 import type { Matching } from './rename.js';
 
 const WHAT: Record<string, string> = { nodes: 'nodes', links: 'links', 'risk-groups': 'risk groups', region: 'region' };
 
-/** R values and deltas: three decimals, a true minus sign, no "-0.000". */
-export function formatR(x: number): string {
-  const s = x.toFixed(3);
+/** Most decimals a message prints to show which side of a limit a value is on. */
+const MAX_DECIMALS = 12;
+
+/** R values and deltas: three decimals (or more when asked), a true minus sign, no "-0.000". */
+export function formatR(x: number, decimals = 3): string {
+  if (!Number.isFinite(x)) return String(x);
+  const s = x.toFixed(decimals);
   if (/^-0\.0+$/.test(s)) return s.slice(1);
   return s.replace(/^-/, '\u2212');
 }
 
-export function formatDelta(delta: number, se: number | null): string {
-  const sign = delta > 0 && formatR(delta) !== '0.000' ? '+' : '';
-  return `${sign}${formatR(delta)}${se !== null && se > 0 ? ` \u00b1 ${se.toFixed(3)}` : ''}`;
+/**
+ * The fewest decimals (at least `min`) at which `a` and `b` print differently, so that a message
+ * shows the digits that decide (a drop of 0.0104 against an allowance of 0.010 prints as 0.0104
+ * and 0.0100, never as "0.010, more than the allowed 0.010"). Rounding is monotone, so values
+ * that print differently print in their true order. `min` when they are equal or not finite.
+ */
+export function decidingDecimals(a: number, b: number, min = 3): number {
+  if (!Number.isFinite(a) || !Number.isFinite(b) || a === b) return min;
+  for (let d = min; d <= MAX_DECIMALS; d++) if (formatR(a, d) !== formatR(b, d)) return d;
+  return MAX_DECIMALS;
+}
+
+/**
+ * Decimals for "dropped from B to H (Δ D), more than the allowed A": the fewest (at least 3)
+ * at which the drop and the limit print differently and the drop between B and H as printed
+ * lies on the same side of the printed limit as the true drop, so that nobody can subtract the
+ * shown numbers and reach the opposite verdict. `drop` = base − head when higher is better.
+ */
+export function changeDecimals(base: number, head: number, higherIsBetter: boolean, limit: number): number {
+  const drop = higherIsBetter ? base - head : head - base;
+  if (![base, head, limit].every(Number.isFinite)) return 3;
+  const beyond = drop > limit;
+  for (let d = decidingDecimals(drop, limit); d <= MAX_DECIMALS; d++) {
+    const b = Number(base.toFixed(d));
+    const h = Number(head.toFixed(d));
+    const shown = Number((higherIsBetter ? b - h : h - b).toFixed(d));
+    const shownLimit = Number(limit.toFixed(d));
+    if (beyond ? shown > shownLimit : shown <= shownLimit) return d;
+  }
+  return MAX_DECIMALS;
+}
+
+/** A signed delta with its standard error, both at `decimals` decimals: "−0.0104 ± 0.0020". */
+export function formatDelta(delta: number, se: number | null, decimals = 3): string {
+  const sign = delta > 0 && formatR(delta, decimals) !== formatR(0, decimals) ? '+' : '';
+  const err = se !== null && se > 0 ? ` \u00b1 ${Number.isFinite(se) ? se.toFixed(decimals) : 'unknown'}` : '';
+  return `${sign}${formatR(delta, decimals)}${err}`;
 }
 
 function percent(x: number): string {
@@ -54,7 +94,7 @@ export function describeRequirement(r: Requirement, challenges: readonly Challen
     case 'spread-ceiling':
       return `spread of ${challengeWords(c, r.challenge)} \u2264 ${r.max}`;
     case 'n-1':
-      return `R after any single ${r.element} removal \u2265 ${r.min}`;
+      return `N\u22121 (${r.element}s): R after any single ${r.element} removal \u2265 ${r.min}`;
     case 'no-new-spof': {
       const parts = [r.bridges ? 'bridges' : '', r.cutNodes ? 'cut nodes' : '', r.riskGroups ? 'shared-risk groups that strand sites' : ''].filter(Boolean);
       const what = parts.length > 1 ? `${parts.slice(0, -1).join(', ')} or ${parts[parts.length - 1]}` : parts[0];
@@ -109,4 +149,99 @@ export function hardenedChanges(base: CompactGraph, head: CompactGraph, m: Match
     if (b >= 0 && base.linkHardened[b] !== head.linkHardened[e]) out.push({ ...reportElement(head, 'link', e), hardened: head.linkHardened[e] === 1 });
   }
   return out;
+}
+
+/** The kinds of weak point a no-new-spof requirement counts, each in a row of its own. */
+export type SpofPart = 'bridges' | 'cut-nodes' | 'risk-groups';
+
+/** The rows of a no-new-spof requirement: bridges, cut nodes and stranding groups are counted apart, never added. */
+export function spofRowParts(r: Requirement & { kind: 'no-new-spof' }): { id: string; description: string; kind: SpofPart }[] {
+  const parts: { kind: SpofPart; words: string }[] = [];
+  if (r.bridges) parts.push({ kind: 'bridges', words: 'no new bridges' });
+  if (r.cutNodes) parts.push({ kind: 'cut-nodes', words: 'no new cut nodes' });
+  if (r.riskGroups) parts.push({ kind: 'risk-groups', words: 'no new shared-risk groups that strand sites' });
+  return parts.map((p) => ({ id: parts.length > 1 ? `${r.id}/${p.kind}` : r.id, description: p.words, kind: p.kind }));
+}
+
+// --- what the change does ----------------------------------------------------------------
+
+const NONE = '\u2013';
+
+function num(v: number | undefined, unit: string): string {
+  return v === undefined ? NONE : `${v} ${unit}`.trim();
+}
+
+function yesNo(v: boolean): string {
+  return v ? 'yes' : 'no';
+}
+
+function place(v: TopoNode): string {
+  return v.lat === undefined || v.lon === undefined ? NONE : `${v.lat}, ${v.lon}`;
+}
+
+function groupsOf(l: TopoLink): string {
+  return l.riskGroups.length ? [...new Set(l.riskGroups)].sort().join(', ') : 'none';
+}
+
+const NODE_ATTRIBUTES: { attribute: string; value: (v: TopoNode) => string }[] = [
+  { attribute: 'label', value: (v) => v.label ?? NONE },
+  { attribute: 'kind', value: (v) => v.kind ?? NONE },
+  { attribute: 'coordinates', value: place },
+  { attribute: 'hardened', value: (v) => yesNo(v.hardened) },
+];
+
+const LINK_ATTRIBUTES: { attribute: string; value: (l: TopoLink) => string }[] = [
+  { attribute: 'risk groups', value: groupsOf },
+  { attribute: 'hardened', value: (l) => yesNo(l.hardened) },
+  { attribute: 'length', value: (l) => num(l.length, 'km') },
+  { attribute: 'latency', value: (l) => num(l.latency, 'ms') },
+  { attribute: 'capacity', value: (l) => num(l.capacity, 'Gbit/s') },
+  { attribute: 'weight', value: (l) => num(l.weight, '') },
+];
+
+/**
+ * Everything the change does to a design, base against head: nodes (by id), links (by stable
+ * key: their ends) and shared-risk groups (by id) added and removed, and, on nodes and links
+ * both sides have, every attribute
+ * the gate or a planner reads — labels, kinds, coordinates, hardening, risk-group membership,
+ * lengths, latencies, capacities, weights — with the element's line on each side. Undefined
+ * when the two sides describe the same design.
+ */
+export function designChanges(base: Topology, head: Topology): FileReport['changes'] {
+  const added: ReportElement[] = [];
+  const removed: ReportElement[] = [];
+  const modified: AttributeChange[] = [];
+  const baseNodes = new Map(base.nodes.map((v) => [v.id, v]));
+  const headNodes = new Map(head.nodes.map((v) => [v.id, v]));
+  const baseLinks = new Map(base.links.map((l) => [l.key, l]));
+  const headLinks = new Map(head.links.map((l) => [l.key, l]));
+  for (const v of head.nodes) if (!baseNodes.has(v.id)) added.push({ id: v.id, kind: 'node', line: v.pos.line });
+  for (const l of head.links) if (!baseLinks.has(l.key)) added.push({ id: l.id, kind: 'link', line: l.pos.line });
+  for (const v of base.nodes) if (!headNodes.has(v.id)) removed.push({ id: v.id, kind: 'node', line: v.pos.line });
+  for (const l of base.links) if (!headLinks.has(l.key)) removed.push({ id: l.id, kind: 'link', line: l.pos.line });
+  // Shared-risk groups declared (or first named) on one side only.
+  const baseGroups = new Set(base.riskGroups.map((x) => x.id));
+  const headGroups = new Set(head.riskGroups.map((x) => x.id));
+  for (const x of head.riskGroups) if (!baseGroups.has(x.id)) added.push({ id: x.id, kind: 'group', line: x.pos.line });
+  for (const x of base.riskGroups) if (!headGroups.has(x.id)) removed.push({ id: x.id, kind: 'group', line: x.pos.line });
+  for (const h of head.nodes) {
+    const b = baseNodes.get(h.id);
+    if (!b) continue;
+    for (const a of NODE_ATTRIBUTES) {
+      const before = a.value(b);
+      const after = a.value(h);
+      if (before !== after) modified.push({ id: h.id, kind: 'node', attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
+    }
+  }
+  for (const h of head.links) {
+    const b = baseLinks.get(h.key);
+    if (!b) continue;
+    for (const a of LINK_ATTRIBUTES) {
+      const before = a.value(b);
+      const after = a.value(h);
+      if (before !== after) modified.push({ id: h.id, kind: 'link', attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
+    }
+  }
+  if (added.length + removed.length + modified.length === 0) return undefined;
+  return modified.length ? { added, removed, modified } : { added, removed };
 }

@@ -17,11 +17,14 @@ import type { CompactGraph } from '../graph/compact.js';
 import { locateElement } from '../graph/element.js';
 import type { ReportElement } from '../report/report.js';
 import type { ChallengeDef, Requirement, ThresholdRequirement } from '../policy/types.js';
+import type { Topology } from '../topology/model.js';
 
 /** One side of a comparison: the compiled design and what the engine made of it. */
 export interface DesignSide {
   graph: CompactGraph;
   result: DesignEvaluation;
+  /** The parsed design, for what the change does to its attributes (labels, lengths...). */
+  topology?: Topology;
 }
 
 export interface Measured {
@@ -38,6 +41,8 @@ export interface Measured {
   elements: { id: string; kind: ElementKind }[];
   /** Set when the value could not be computed (challenge skipped, too few steps...). */
   missing?: string;
+  /** Set with `missing` when the head lacks what the challenge needs (coordinates, risk groups). */
+  notApplicable?: boolean;
   /**
    * Set when the value comes from incomplete work (N−1 cases or an exact worst-case search
    * cut by the work budget): it may be higher than the true value, so a floor it meets is
@@ -151,8 +156,19 @@ function ownSe(head: DesignEvaluation, env: Envelope, stat: Statistic, x: number
   return pairedStatistic(zero, head, env.challenge, stat, x).se;
 }
 
-function missing(reason: string, higherIsBetter = true): Measured {
-  return { base: null, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason };
+/** The head cannot give the value; the base's value, when the base could, says the head lost what it needs. */
+function missing(reason: string, higherIsBetter = true, base: number | null = null, notApplicable = false): Measured {
+  return { base, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason, ...(notApplicable ? { notApplicable } : {}) };
+}
+
+/** Why a challenge has no result on this side: it does not apply (and why), or it did not run. */
+function didNotRun(side: DesignSide, c: ChallengeDef): string {
+  const why = notApplicableReason(side, c);
+  return why !== undefined ? `challenge "${c.name}" does not apply to this design: ${why}` : `challenge "${c.name}" did not run on this design`;
+}
+
+function notApplicableReason(side: DesignSide, c: ChallengeDef | undefined): string | undefined {
+  return c ? side.result.evaluation.notApplicable?.find((x) => x.challenge === c.engine)?.reason : undefined;
 }
 
 /** Value of a deterministic requirement on one side, with its elements. */
@@ -182,7 +198,7 @@ function deterministic(req: Requirement, c: ChallengeDef | undefined, side: Desi
     return out;
   }
   const curve = attackOf(side, c);
-  if (!curve) return `challenge "${c.name}" did not run on this design`;
+  if (!curve) return didNotRun(side, c);
   if (req.kind === 'area-floor') return { value: curve.area, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }) };
   const t = req as ThresholdRequirement;
   const k = removalsAt(side.graph, curve.kind, t.at ?? 0);
@@ -198,11 +214,18 @@ export function measure(req: Requirement, challenges: readonly ChallengeDef[], h
 
   if (c?.random && stat) {
     const env = envelopeOf(head, c);
-    if (!env) return missing(`challenge "${c.name}" did not run on this design`, higherIsBetter);
     const x = req.kind === 'r-threshold' ? req.at : undefined;
+    const baseEnv = base ? envelopeOf(base, c) : undefined;
+    if (!env) {
+      // The base's own value, when it has one: then the head lost what the challenge needs.
+      const baseValue =
+        baseEnv && base!.result !== head.result && (x === undefined || gridIndex(baseEnv, x) >= 0)
+          ? pairedStatistic(base!.result, base!.result, c.engine, stat, x).base
+          : null;
+      return missing(didNotRun(head, c), higherIsBetter, baseValue, notApplicableReason(head, c) !== undefined);
+    }
     const j = x === undefined ? -1 : gridIndex(env, x);
     if (x !== undefined && j < 0) return missing(`${x} is not on the grid of "${c.name}"`, higherIsBetter);
-    const baseEnv = base ? envelopeOf(base, c) : undefined;
     const same = base !== undefined && base.result === head.result;
     const p = pairedStatistic(baseEnv ? base!.result : head.result, head.result, c.engine, stat, x);
     const out: Measured = {
@@ -231,9 +254,9 @@ export function measure(req: Requirement, challenges: readonly ChallengeDef[], h
   }
 
   const h = deterministic(req, c, head);
-  if (typeof h === 'string') return missing(h, higherIsBetter);
   const b = base ? deterministic(req, c, base) : undefined;
   const bv = b !== undefined && typeof b !== 'string' ? b.value : null;
+  if (typeof h === 'string') return missing(h, higherIsBetter, base !== undefined && base.result !== head.result ? bv : null, notApplicableReason(head, c) !== undefined);
   const same = base !== undefined && base.result === head.result;
   return {
     base: bv,

@@ -11,6 +11,7 @@
 // (`hardened-weak-point`, at the policy's `hardened-weak-points` severity, warn by default).
 // Each finding says what losing the element costs (consequence.ts).
 
+import { spofRowParts, type SpofPart } from './describe.js';
 import type { CompactGraph } from '../graph/compact.js';
 import { reportElement } from '../graph/element.js';
 import type { Mask } from '../graph/mask.js';
@@ -77,24 +78,26 @@ export function judgeSpof(
   head: DesignSide,
   base: DesignSide | undefined,
   matching: Matching | undefined,
-): { row: RequirementResult; findings: Finding[] } {
+): { rows: RequirementResult[]; findings: Finding[] } {
   const g = head.graph;
   const now = weakPoints(g, true);
   const before = base ? weakPoints(base.graph, true) : undefined;
-  const count = (s: WeakPoints) => (r.bridges ? s.bridges.size : 0) + (r.cutNodes ? s.cutNodes.size : 0) + (r.riskGroups ? s.groups.size : 0);
-  const row: RequirementResult = {
-    id: r.id,
-    description,
+  // One row per kind of weak point: a count of bridges and a count of cut nodes are never added.
+  const parts = spofRowParts(r);
+  const sizeOf = (s: WeakPoints, kind: SpofPart) => (kind === 'bridges' ? s.bridges.size : kind === 'cut-nodes' ? s.cutNodes.size : s.groups.size);
+  const rows: RequirementResult[] = parts.map((part) => ({
+    id: part.id,
+    description: part.description,
     severity: r.severity,
-    base: before ? count(before) : null,
-    head: count(now),
-    delta: before ? count(now) - count(before) : null,
+    base: before ? sizeOf(before, part.kind) : null,
+    head: sizeOf(now, part.kind),
+    delta: before ? sizeOf(now, part.kind) - sizeOf(before, part.kind) : null,
     se: before ? 0 : null,
     threshold: null,
     status: 'met',
-  };
+  }));
   const findings: Finding[] = [];
-  if (!base || !before || !matching) return { row, findings };
+  if (!base || !before || !matching) return { rows, findings };
   const b = base.graph;
   const isNew = (set: Set<number>, toBase: Int32Array, h: number, baseSet: Set<number>) => {
     const k = toBase[h];
@@ -129,7 +132,6 @@ export function judgeSpof(
       findings.push(finding('new-stranding-group', r.severity, message, reportElement(g, 'group', k), r.id, groupCost(k, true)));
     }
   }
-  const weak = findings.length > 0;
 
   // Weak points that only the head's new hardened flags hide.
   if (r.hardenedWeakPoints !== 'ignore') {
@@ -177,8 +179,19 @@ export function judgeSpof(
       requirement: r.id,
     });
   }
-  // Hidden weak points cannot be judged (the claim is unchecked): uncertain, unless the policy fails them.
-  if (weak || (findings.length > 0 && r.hardenedWeakPoints === 'fail')) row.status = 'regressed';
-  else if (findings.length > 0) row.status = 'uncertain';
-  return { row, findings };
+  // Each finding marks the row of its kind. Hidden weak points cannot be judged (the claim is
+  // unchecked): uncertain, unless the policy fails them.
+  const partOf = (x: Finding): SpofPart =>
+    x.rule === 'new-bridge' ? 'bridges' : x.rule === 'new-cut-node' ? 'cut-nodes' : x.rule === 'new-stranding-group' ? 'risk-groups' : x.elements[0]?.kind === 'link' ? 'bridges' : x.elements[0]?.kind === 'node' ? 'cut-nodes' : 'risk-groups';
+  parts.forEach((part, i) => {
+    const mine = findings.filter((x) => x.rule !== 'degraded' && partOf(x) === part.kind);
+    const weakHere = mine.some((x) => x.rule !== 'hardened-weak-point');
+    if (weakHere || (mine.length > 0 && r.hardenedWeakPoints === 'fail')) rows[i].status = 'regressed';
+    else if (mine.length > 0) rows[i].status = 'uncertain';
+  });
+  for (const x of findings) {
+    const i = parts.findIndex((p) => p.kind === partOf(x));
+    if (x.rule !== 'degraded' && i >= 0 && parts.length > 1) x.requirement = parts[i].id;
+  }
+  return { rows, findings };
 }

@@ -34,6 +34,7 @@ export const demandServed: Metric = {
   normalization: 'served volume / total demand volume; raw = served volume.',
   cost: 'linear',
   appliesTo: (g) => totalVolume(g) > 0,
+  needs: { what: 'demands', hint: 'declare demands (a volume > 0 between two sites) in the design, or take demand_served out of the r-value' },
   create(g, options = {}) {
     const total = totalVolume(g);
     const budget = options.latencyBudget ?? g.latencyBudget;

@@ -7,6 +7,7 @@
 
 import { logText, oneLine } from './escape.js';
 import { findingCost, findingNumbers, repoPath } from './finding-text.js';
+import { findingTitle } from './labels.js';
 import { SEVERITY_RANK, rankFiles } from './rank.js';
 import type { Finding, Report, Severity } from './report.js';
 
@@ -68,6 +69,7 @@ const TITLE: Record<Finding['rule'], string> = {
   'removed-design': 'design removed',
   'policy-changed': 'policy changed (applies after merge)',
   degraded: 'evaluation reduced by budget',
+  'not-computable': 'value could not be computed',
 };
 
 
@@ -79,7 +81,7 @@ export function annotationsOf(report: Report, options: AnnotationOptions = {}): 
     const file = repoPath(options.pathPrefix, f.path);
     const touched = options.changedLines?.get(file);
     const findings = [...f.findings];
-    if (f.status === 'error' && f.error && !findings.some((x) => x.rule === 'parse-error')) {
+    if (f.status === 'error' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
       findings.push({ rule: 'parse-error', severity: 'fail', message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
     }
     for (const x of findings) {
@@ -89,7 +91,7 @@ export function annotationsOf(report: Report, options: AnnotationOptions = {}): 
         file,
         startLine,
         ...(x.column && x.column > 0 ? { startColumn: Math.floor(x.column) } : {}),
-        title: oneLine(`netbrace: ${TITLE[x.rule] ?? x.rule}`, 200),
+        title: oneLine(`netbrace: ${findingTitle(x, TITLE)}`, 200),
         message: logText(`${x.message}${findingNumbers(x)}${findingCost(x)}`),
         rule: x.rule,
         inDiff: touched ? touched.has(startLine) : false,

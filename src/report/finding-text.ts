@@ -6,9 +6,11 @@ import type { Finding } from './report.js';
 
 /**
  * " (base 0.742, head 0.680, Δ −0.062 ± 0.004)", or "" when the finding has no numbers or its
- * message already states them (the gate's messages often do).
+ * message already states them: a judged finding (one with a status) states the numbers that
+ * decide, at the digits that decide, and three decimals beside them would contradict it.
  */
 export function findingNumbers(x: Finding, deltaWord = '\u0394'): string {
+  if (x.status !== undefined) return '';
   const stated = x.delta !== undefined && x.delta !== null ? formatDelta(x.delta) : x.head !== undefined && x.head !== null ? formatValue(x.head) : undefined;
   if (stated !== undefined && x.message.includes(stated)) return '';
   const parts: string[] = [];

@@ -7,8 +7,15 @@
 import { attacksFor, envelopeChart, renderChartSvg, type EnvelopeChart } from './chart.js';
 import {
   consequenceSentence,
+  contingencyLabel,
   describeChanges,
+  describeModifications,
+  describeNotApplicable,
+  fileStatusWord,
+  statusCounts,
+  findingTitle,
   formatElement,
+  kindSingular,
   knownElement,
   knownElements,
   fileFails,
@@ -27,10 +34,29 @@ import {
   weakestSequences,
   type GroupedFinding,
 } from './labels.js';
-import type { Consequence, Evaluation, FileReport, Report, ReportElement, RequirementResult } from './report.js';
+import type { Consequence, Evaluation, FileReport, Finding, Report, ReportElement, RequirementResult } from './report.js';
 import { escapeHtml } from './escape.js';
 
 const esc = (s: string | number) => escapeHtml(String(s));
+
+/** A finding's title by rule, refined by its status (labels.ts, findingTitle). */
+const RULE_TITLE: Record<Finding['rule'], string> = {
+  'r-threshold': 'r-threshold missed',
+  'area-floor': 'area below its floor',
+  'spread-ceiling': 'spread above its ceiling',
+  'n-1': 'N\u22121 rule broken',
+  'new-bridge': 'new bridge',
+  'new-cut-node': 'new cut node',
+  'new-stranding-group': 'new stranding shared-risk group',
+  'hardened-weak-point': 'weak point hidden by hardening',
+  regression: 'regression',
+  'weakest-sequence': 'weakest sequence',
+  'parse-error': 'unreadable design',
+  'removed-design': 'removed design',
+  'policy-changed': 'policy changed',
+  degraded: 'reduced evaluation',
+  'not-computable': 'value not computable',
+};
 
 /** A JSON number as an attribute value (exact, so tests can compare with the report). */
 const dataValue = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));
@@ -150,10 +176,7 @@ function masthead(r: Report): string {
   meta.push(['Mode', r.mode === 'inform' ? 'inform: failures are reported, the run does not fail' : 'block: failures fail the check']);
   meta.push(['Seed', String(r.seed)]);
   if (r.part) meta.push(['Part', `${r.part.index} of ${r.part.total}`]);
-  const counts = Object.entries(r.counts)
-    .filter(([, n]) => n > 0)
-    .map(([k, n]) => `${n} ${esc(STATUS_WORD[k as keyof typeof STATUS_WORD])}`)
-    .join(', ');
+  const counts = statusCounts(r).map(esc).join(', ');
   meta.push(['Designs', `${r.files.length}${counts ? ` (${counts})` : ''}`]);
   return [
     '<header class="mast">',
@@ -188,17 +211,23 @@ function designSection(f: FileReport, index: number): string {
   out.push('<header>');
   out.push(`<h2 id="${id}-h">${esc(f.path)}</h2>`);
   out.push(`<span class="chip ${tone}">${esc(toneWord(f))}</span>`);
-  out.push(`<span class="chip notice">${esc(STATUS_WORD[f.status])}</span>`);
+  out.push(`<span class="chip notice">${esc(fileStatusWord(f))}</span>`);
   out.push('</header>');
   if (f.previousPath) out.push(`<p class="facts">Renamed from <code>${esc(f.previousPath)}</code>; compared with its old self.</p>`);
   if (f.error) {
     out.push(
-      `<p class="error">Could not be read: <code>${esc(f.path)}:${f.error.line || 1}:${f.error.column || 1}</code> ${esc(f.error.message)}</p>`,
+      `<p class="error">${fileStatusWord(f) === STATUS_WORD.error ? 'Could not be read' : 'Could not be evaluated'}: <code>${esc(f.path)}:${f.error.line || 1}:${f.error.column || 1}</code> ${esc(f.error.message)}</p>`,
     );
   }
   if (f.head) out.push(`<p class="facts">${esc(facts(f.head))}</p>`);
+  const notApplicable = describeNotApplicable(f.head);
+  if (notApplicable) out.push(`<p class="facts not-applicable"><strong>Not applicable to this design:</strong> ${esc(notApplicable)}</p>`);
   const changed = describeChanges(f);
-  if (changed) out.push(`<p class="facts changes"><strong>What the change does:</strong> ${esc(changed)}</p>`);
+  const modified = describeModifications(f, 200);
+  if (changed || modified.length) {
+    const items = [...(changed ? [changed] : []), ...modified].map((l) => `<li>${esc(l)}</li>`).join('');
+    out.push(`<div class="facts changes"><strong>What the change does:</strong><ul>${items}</ul></div>`);
+  }
   if (f.head && f.head.envelopes.length) out.push(charts(f, id));
   if (f.requirements.length) out.push(requirementTable(f.requirements, id));
   const findings = groupFindings(bySeverity(f.findings.filter((x) => x.rule !== 'weakest-sequence')));
@@ -326,7 +355,7 @@ function findingItem(x: GroupedFinding): string {
   const cost = members.length
     ? `<ul class="costs">${members.map((m) => `<li>${htmlElement(m.elements[0])}: ${esc(consequenceSentence(m.consequence!, ''))}</li>`).join('')}</ul>`
     : costItem(x.consequence, 'Losing it');
-  return `<li class="${x.severity}" data-rule="${esc(x.rule)}"><span class="chip ${x.severity}">${esc(x.severity)}</span> <span class="rule">${esc(x.rule)}</span>${where}<div>${esc(x.message)}${values}</div>${els}${cost}</li>`;
+  return `<li class="${x.severity}" data-rule="${esc(x.rule)}"${x.status ? ` data-status="${esc(x.status)}"` : ''}><span class="chip ${x.severity}">${esc(x.severity)}</span> <span class="rule">${esc(findingTitle(x, RULE_TITLE))}</span>${where}<div>${esc(x.message)}${values}</div>${els}${cost}</li>`;
 }
 
 function weakest(f: FileReport): string {
@@ -342,7 +371,7 @@ function weakest(f: FileReport): string {
     if (worst) {
       const what = worst.elements.map((id, i) => htmlElement(worst.located?.[i] ?? knownElement(known, c.kind, id))).join(' + ');
       items.push(
-        `<div class="sequence"><p>${esc(c.challenge === 'n-1' ? 'Single' : 'Double')} ${esc(c.kind)} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): ${what} leaves R ${esc(formatValue(worst.value))}</p></div>`,
+        `<div class="sequence"><p>${esc(contingencyLabel(c.challenge, c.kind))}: the ${esc(c.challenge === 'n-1' ? 'single' : 'double')} ${esc(kindSingular(c.kind))} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): <span class="el">${esc(what)}</span> leaves R ${esc(formatValue(worst.value))}</p></div>`,
       );
     }
   }

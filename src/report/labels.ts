@@ -2,7 +2,7 @@
 // a number is written, and where an element's line is found. Pure; no colour, no markup.
 
 import type { ChallengeName, ElementKind } from '../envelope/types.js';
-import type { Consequence, FileReport, FileStatus, Finding, ReportElement, RequirementResult } from './report.js';
+import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, RequirementResult } from './report.js';
 
 
 const CHALLENGE_LABEL: Record<ChallengeName, string> = {
@@ -103,7 +103,37 @@ export const REQUIREMENT_STATUS_WORD: Record<RequirementResult['status'], string
   regressed: 'regressed',
   'within-noise': 'within noise',
   uncertain: 'uncertain',
+  'not-applicable': 'not applicable',
 };
+
+/** A file's status in words; an error whose R cannot be computed is not "could not be read". */
+export function fileStatusWord(f: FileReport): string {
+  if (f.status === 'error' && !f.findings.some((x) => x.rule === 'parse-error') && f.findings.some((x) => x.rule === 'not-computable')) return 'could not be evaluated';
+  return STATUS_WORD[f.status];
+}
+
+/** "2 pass, 1 could not be read": the report's counts in words, errors told apart by fileStatusWord. */
+export function statusCounts(r: { counts: Record<FileStatus, number>; files: FileReport[] }): string[] {
+  const out: string[] = [];
+  for (const [k, n] of Object.entries(r.counts) as [FileStatus, number][]) {
+    if (n <= 0) continue;
+    if (k !== 'error') {
+      out.push(`${n} ${STATUS_WORD[k]}`);
+      continue;
+    }
+    const evaluated = r.files.filter((f) => f.status === 'error' && fileStatusWord(f) !== STATUS_WORD.error).length;
+    if (n - evaluated > 0) out.push(`${n - evaluated} ${STATUS_WORD.error}`);
+    if (evaluated > 0) out.push(`${evaluated} could not be evaluated`);
+  }
+  return out;
+}
+
+/** "regional (no site has coordinates (lat/lon))": the challenges that do not apply to a side. */
+export function describeNotApplicable(ev: { notApplicable?: { challenge: ChallengeName; reason: string }[] } | undefined): string | undefined {
+  const list = ev?.notApplicable ?? [];
+  if (!list.length) return undefined;
+  return list.map((x) => `${challengeLabel(x.challenge)} (${x.reason})`).join('; ');
+}
 
 /** Whether a file, on its own, fails the gate: any fail-severity finding, or an error. */
 export function fileFails(f: FileReport): boolean {
@@ -251,6 +281,65 @@ export function weakestSequences(f: FileReport): NamedSequence[] {
     const w = env.weakest[0];
     if (w) add(`Weakest realization${w.realization !== undefined ? ` #${w.realization}` : ''} under ${challengeLabel(env.challenge)}`, w);
   }
+  return out;
+}
+
+/**
+ * How a finding is titled, from its rule and what the judging found: a drop within the
+ * allowance is not "regressed", a floor that was not settled is not "missed". `names` gives
+ * the view's word for each rule when the finding is what the rule is about.
+ */
+export function findingTitle(x: Finding, names: Readonly<Record<Finding['rule'], string>>): string {
+  const subject = SUBJECT[x.rule as keyof typeof SUBJECT];
+  const kind = x.rule === 'n-1' ? n1Kind(x) : undefined;
+  switch (x.status) {
+    case 'within-allowance':
+      return 'robustness dropped within the allowance';
+    case 'within-noise':
+      return 'change within Monte Carlo noise';
+    case 'uncertain':
+      return x.rule === 'regression' ? 'change could not be judged' : `${subject ?? x.rule}${kind ?? ''} not settled`;
+    case 'reduced-work':
+      return `${subject ?? x.rule}${kind ?? ''} judged on reduced work`;
+    case 'not-computable':
+      return names['not-computable'];
+    default:
+      // Reports written before findings carried a status: a notice regression is not a regression.
+      if (x.status === undefined && x.rule === 'regression' && x.severity === 'notice') return 'robustness changed';
+      if (kind !== undefined) return names[x.rule].replace('N\u22121', `N\u22121${kind}`);
+      return names[x.rule] ?? x.rule;
+  }
+}
+
+const SUBJECT = {
+  'r-threshold': 'r-threshold',
+  'area-floor': 'envelope area floor',
+  'spread-ceiling': 'envelope spread ceiling',
+  'n-1': 'N\u22121 rule',
+} as const;
+
+/** " (links)" or " (sites)" for an N−1 finding, from its requirement id or its elements. */
+function n1Kind(x: Finding): string | undefined {
+  const kind = x.requirement?.endsWith(':node') ? 'node' : x.requirement?.endsWith(':link') ? 'link' : x.elements[0]?.kind;
+  return kind === 'node' || kind === 'link' ? ` (${kindPlural(kind)})` : undefined;
+}
+
+/** "N−1 (links)", "N−2 (sites)": a contingency table's name with the element kind it removes. */
+export function contingencyLabel(challenge: ChallengeName, kind: ElementKind): string {
+  return `${challenge === 'n-2' ? 'N\u22122' : 'N\u22121'} (${kindPlural(kind)})`;
+}
+
+/** "link a—b: length 24 km → 30 km (base line 12, head line 13)": one attribute the change altered. */
+export function describeModification(c: AttributeChange): string {
+  const lines = c.baseLine === c.headLine ? `line ${c.headLine}` : `base line ${c.baseLine}, head line ${c.headLine}`;
+  return `${kindSingular(c.kind)} ${c.id}: ${c.attribute} ${c.before} \u2192 ${c.after} (${lines})`;
+}
+
+/** Every attribute change of a file, one line each, at most `max` and a "… N more" line. */
+export function describeModifications(f: FileReport, max = 20): string[] {
+  const list = f.changes?.modified ?? [];
+  const out = list.slice(0, max).map(describeModification);
+  if (list.length > max) out.push(`\u2026 ${list.length - max} more attribute changes in the JSON report`);
   return out;
 }
 

@@ -16,7 +16,12 @@ import {
   STATUS_WORD,
   challengeLabel,
   consequenceSentence,
+  contingencyLabel,
   describeChanges,
+  describeModifications,
+  describeNotApplicable,
+  fileStatusWord,
+  findingTitle,
   formatElement,
   formatError,
   formatRequirementDelta,
@@ -79,6 +84,7 @@ const RULE_WORD: Record<Finding['rule'], string> = {
   'removed-design': 'removed design',
   'policy-changed': 'policy changed',
   degraded: 'reduced evaluation',
+  'not-computable': 'value not computable',
 };
 
 /** The hidden line that identifies the living comment of one key. */
@@ -248,9 +254,9 @@ function header(report: Report, options: MarkdownOptions): string {
 
 function overview(files: FileReport[], maxRows: number, path: (p: string) => string): string {
   if (files.length === 0) return 'No design file changed between base and head, so there is nothing to judge.\n\n';
-  const counts = new Map<FileStatus, number>();
-  for (const f of files) counts.set(f.status, (counts.get(f.status) ?? 0) + 1);
-  const parts = [...counts.entries()].map(([s, n]) => `${n} ${STATUS_WORD[s]}`);
+  const counts = new Map<string, number>();
+  for (const f of files) counts.set(fileStatusWord(f), (counts.get(fileStatusWord(f)) ?? 0) + 1);
+  const parts = [...counts.entries()].map(([s, n]) => `${n} ${s}`);
   let text = `${files.length} design${files.length === 1 ? '' : 's'} evaluated: ${parts.join(', ')}.\n\n`;
   text += '| | design | status | findings | worst finding |\n|---|---|---|---|---|\n';
   for (const f of files.slice(0, maxRows)) {
@@ -258,7 +264,7 @@ function overview(files: FileReport[], maxRows: number, path: (p: string) => str
     const w = worstSeverity(f);
     const name = f.previousPath ? `${markdownCode(path(f.previousPath), 200, true)} \u2192 ${markdownCode(path(f.path), 200, true)}` : markdownCode(path(f.path), 200, true);
     const worstText = worst ? `${lineRef(worst)}${escapeMarkdown(worst.message, 160)}` : '';
-    text += `| ${w ? ICON[w] : ICON.ok} | ${name} | ${STATUS_WORD[f.status]} | ${findingCounts(f)} | ${worstText} |\n`;
+    text += `| ${w ? ICON[w] : ICON.ok} | ${name} | ${fileStatusWord(f)} | ${findingCounts(f)} | ${worstText} |\n`;
   }
   if (files.length > maxRows) text += `\n\u2026 and ${files.length - maxRows} more designs, least severe last; see the JSON report.\n`;
   return `${text}\n`;
@@ -282,11 +288,22 @@ function hasChart(f: FileReport): boolean {
 function fileSection(f: FileReport, detail: Detail, layout: Layout, path: (p: string) => string, chart: boolean): string {
   const w = worstSeverity(f);
   const renamed = f.previousPath ? ` (renamed from ${markdownCode(path(f.previousPath))})` : '';
-  let text = `### ${w ? ICON[w] : ICON.ok} ${markdownCode(path(f.path))} \u2014 ${STATUS_WORD[f.status]}${renamed}\n\n`;
-  if (f.error) text += `Could not be read: line ${f.error.line}, column ${f.error.column}: ${escapeMarkdown(f.error.message, 500)}\n\n`;
+  let text = `### ${w ? ICON[w] : ICON.ok} ${markdownCode(path(f.path))} \u2014 ${fileStatusWord(f)}${renamed}\n\n`;
+  if (f.error) {
+    const what = fileStatusWord(f) === STATUS_WORD.error ? 'Could not be read' : 'Could not be evaluated';
+    text += `${what}: line ${f.error.line}, column ${f.error.column}: ${escapeMarkdown(f.error.message, 500)}\n\n`;
+  }
   if (f.requirements.length) text += requirementTable(f.requirements);
+  const notApplicable = describeNotApplicable(f.head);
+  if (notApplicable) text += `Not applicable to this design: ${escapeMarkdown(notApplicable, 600)}\n\n`;
   const changes = describeChanges(f);
-  if (changes) text += `Changed: ${escapeMarkdown(changes, 1500)}\n\n`;
+  const modified = describeModifications(f, detail === 'full' ? 50 : 10);
+  if (changes || modified.length) {
+    text += '**What the change does**:\n\n';
+    if (changes) text += `- ${escapeMarkdown(changes, 1500)}\n`;
+    for (const m of modified) text += `- ${escapeMarkdown(m, 300)}\n`;
+    text += '\n';
+  }
   // New bridges and cut nodes of one severity read best as one line each.
   const findings = groupFindings(rankFindings(f.findings));
   const cap = detail === 'full' ? layout.findingsFull : layout.findingsCompact;
@@ -308,7 +325,8 @@ function requirementTable(rows: RequirementResult[]): string {
   let text = '| requirement | base | head | \u0394 \u00b1 error | status |\n|---|---:|---:|---:|---|\n';
   let noise = false;
   for (const r of rows) {
-    const icon = r.status === 'met' ? ICON.ok : r.status === 'within-noise' ? '\u3030\uFE0F' : r.status === 'uncertain' ? '\u2754' : ICON[r.severity];
+    const icon =
+      r.status === 'met' ? ICON.ok : r.status === 'within-noise' ? '\u3030\uFE0F' : r.status === 'uncertain' ? '\u2754' : r.status === 'not-applicable' ? '\u2796' : ICON[r.severity];
     if (r.status === 'within-noise') noise = true;
     const err = formatError(r.se);
     const delta = r.delta === null ? '\u2013' : `${formatRequirementDelta(r)}${err ? ` ${err}` : ''}`;
@@ -320,7 +338,7 @@ function requirementTable(rows: RequirementResult[]): string {
 
 function findingLine(x: GroupedFinding): string {
   const where = x.line > 0 ? ` (line ${x.line}${x.column ? `, column ${x.column}` : ''})` : '';
-  const text = `${ICON[x.severity]} **${RULE_WORD[x.rule] ?? escapeMarkdown(x.rule, 40)}**${where}: ${escapeMarkdown(x.message, 600)}${findingNumbers(x)}`;
+  const text = `${ICON[x.severity]} **${RULE_WORD[x.rule] ? findingTitle(x, RULE_WORD) : escapeMarkdown(x.rule, 40)}**${where}: ${escapeMarkdown(x.message, 600)}${findingNumbers(x)}`;
   // What each weak point costs: one sentence, or one sub-item per member of a merged finding
   // (escaped as plain text, like the message it follows).
   const members = x.grouped && x.members && x.members.length > 1 ? x.members.filter((m) => m.consequence) : [];
@@ -426,7 +444,7 @@ function weakestSection(f: FileReport): string {
   for (const c of head.contingencies) {
     const worst = c.worst[0];
     if (worst) {
-      items.push(`- ${challengeLabel(c.challenge)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList(worst.elements.map((id, i) => worst.located?.[i] ?? knownElement(known, c.kind, id)))}, leaves R ${formatValue(worst.value)}`);
+      items.push(`- ${contingencyLabel(c.challenge, c.kind)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList(worst.elements.map((id, i) => worst.located?.[i] ?? knownElement(known, c.kind, id)))}, leaves R ${formatValue(worst.value)}`);
     }
   }
   if (!items.length) return '';

@@ -2,7 +2,7 @@
 // summary, PR comment, annotations, SARIF, HTML). Versioned; `join` must keep reading
 // reports of older versions. Keep it deterministic: no timings, no absolute paths, no dates.
 
-import type { AttackCurve, Contingency, Envelope, RValueSpec } from '../envelope/types.js';
+import type { AttackCurve, ChallengeName, Contingency, Envelope, RValueSpec } from '../envelope/types.js';
 
 export const REPORT_VERSION = 1;
 
@@ -53,8 +53,9 @@ export interface RequirementResult {
   threshold: number | null;
   /** met: fine; missed: below threshold; regressed: dropped beyond tolerance;
    *  within-noise: dropped, but by less than the Monte Carlo error; uncertain: could not be
-   *  judged with enough confidence (never reported as met). */
-  status: 'met' | 'missed' | 'regressed' | 'within-noise' | 'uncertain';
+   *  judged with enough confidence (never reported as met); not-applicable: a tracked value
+   *  (no floor) whose challenge does not apply to the design on either side (no risk groups). */
+  status: 'met' | 'missed' | 'regressed' | 'within-noise' | 'uncertain' | 'not-applicable';
 }
 
 export interface Finding {
@@ -73,15 +74,26 @@ export interface Finding {
     | 'parse-error'
     | 'removed-design'
     | 'policy-changed'
-    | 'degraded';
+    | 'degraded'
+    | 'not-computable';
   /** The requirement id this finding is about, when there is one. */
   requirement?: string;
+  /** The requirement's severity, capped by the regression rule's for a regression. */
   severity: Severity;
+  /**
+   * What the judging found, for a finding about a requirement's value: views title the
+   * finding by it (a drop within the allowance is not "regressed").
+   */
+  status?: FindingStatus;
   message: string;
   base?: number | null;
   head?: number | null;
   delta?: number | null;
   se?: number | null;
+  /** The floor (or ceiling) the head value was judged against. */
+  threshold?: number;
+  /** The drop the regression rule allows for this requirement (head − base beyond it regresses). */
+  allowance?: number;
   /** Elements that cause the finding, in order (a weakest sequence is ordered). */
   elements: ReportElement[];
   /** Line to annotate: the first element's, or the error's. */
@@ -89,6 +101,28 @@ export interface Finding {
   column?: number;
   /** For a weak point: what losing it costs at head. */
   consequence?: Consequence;
+}
+
+/**
+ * missed: the head misses its floor (or can no longer be judged though the base could);
+ * regressed: a drop beyond the allowance; within-allowance / within-noise: a drop that is not a
+ * failure; uncertain: neither proven nor refuted; reduced-work: judged on work the budget cut;
+ * not-computable: a value that is not a finite number.
+ */
+export type FindingStatus = 'missed' | 'regressed' | 'within-allowance' | 'within-noise' | 'uncertain' | 'reduced-work' | 'not-computable';
+
+/** An attribute of a node or link that the change altered (see FileReport.changes). */
+export interface AttributeChange {
+  id: string;
+  kind: 'node' | 'link' | 'group';
+  /** e.g. "risk groups", "hardened", "length (km)", "latency (ms)", "capacity (Gbit/s)", "coordinates", "label". */
+  attribute: string;
+  /** The value at base and at head, as plain text ("–" when absent). */
+  before: string;
+  after: string;
+  /** 1-based lines of the element at base and at head. */
+  baseLine: number;
+  headLine: number;
 }
 
 export interface StructureSummary {
@@ -108,6 +142,8 @@ export interface Evaluation {
   contingencies: Contingency[];
   /** Reasons the evaluation was reduced by budgets; empty when it ran in full. */
   degraded: string[];
+  /** Challenges that do not apply to this design (it lacks coordinates, risk groups...), with why; absent when all applied. */
+  notApplicable?: { challenge: ChallengeName; reason: string }[];
 }
 
 export interface FileReport {
@@ -123,15 +159,17 @@ export interface FileReport {
   /** For status "error": what could not be read. */
   error?: { message: string; line: number; column: number };
   /**
-   * Elements added and removed by the change (nodes by id or, renamed, by neighbourhood; links by
-   * their ends; shared-risk groups by id or members), head lines for added, base lines for removed;
-   * renamed elements (base → head); elements whose hardened flag the change set or cleared (head side).
+   * What the change does: elements added and removed (nodes by id or, renamed, by neighbourhood;
+   * links by their ends; shared-risk groups by id or members; head lines for added, base lines
+   * for removed), renamed elements (base → head), elements whose hardened flag the change set or
+   * cleared (head side), and attributes changed on elements both sides have.
    */
   changes?: {
     added: ReportElement[];
     removed: ReportElement[];
     renamed?: { from: ReportElement; to: ReportElement }[];
     hardened?: (ReportElement & { hardened: boolean })[];
+    modified?: AttributeChange[];
   };
 }
 

@@ -118,6 +118,12 @@ const RULES: Record<RuleId, RuleText> = {
     full: 'The evaluation of this design was reduced (fewer realizations, sampled sources, a shorter worst-case search) to stay within the configured budgets, so its results carry more uncertainty.',
     help: 'Raise the budgets in the policy, or run netbrace with more threads, for a full evaluation.',
   },
+  'not-computable': {
+    name: 'NotComputable',
+    short: 'A value the gate needs could not be computed',
+    full: 'R, or a requirement\u2019s value, could not be computed on this design: a metric of R does not apply to it (demand_served on a design without demands, weighted_efficiency without link lengths or latencies), or the value came out NaN or infinite. A value that cannot be computed is never a pass, so this fails the gate.',
+    help: 'Give the design what the metric needs (the message says what), or define R in the policy with metrics the design supports.',
+  },
 };
 
 const LEVEL: Record<Severity, 'error' | 'warning' | 'note'> = { fail: 'error', warn: 'warning', notice: 'note' };
@@ -182,7 +188,7 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
   for (const f of rankFiles(report.files)) {
     const path = repoPath(options.pathPrefix, f.path);
     const findings = rankFindings(f.findings);
-    if (f.status === 'error' && f.error && !findings.some((x) => x.rule === 'parse-error')) {
+    if (f.status === 'error' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
       findings.unshift({ rule: 'parse-error', severity: 'fail', message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
     }
     for (const x of findings) {
@@ -195,7 +201,8 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
       if (x.column && x.column > 0) region.startColumn = Math.floor(x.column);
       const properties: Record<string, unknown> = { fileStatus: f.status };
       if (x.requirement) properties.requirement = x.requirement;
-      for (const k of ['base', 'head', 'delta', 'se'] as const) if (typeof x[k] === 'number') properties[k] = x[k];
+      for (const k of ['base', 'head', 'delta', 'se', 'threshold', 'allowance'] as const) if (typeof x[k] === 'number') properties[k] = x[k];
+      if (x.status) properties.status = x.status;
       if (x.elements.length) properties.elements = x.elements.map((e) => ({ id: e.id, kind: e.kind, line: e.line, ...(e.label !== undefined ? { label: e.label } : {}) }));
       if (x.consequence) properties.consequence = x.consequence;
       results.push({

@@ -9,6 +9,10 @@ import { envelopeChart, type ChartSeries, type EnvelopeChart } from './chart.js'
 import {
   consequenceSentence,
   describeChanges,
+  describeModifications,
+  describeNotApplicable,
+  statusCounts,
+  fileStatusWord,
   fileFails,
   formatElement,
   fileWarns,
@@ -18,7 +22,6 @@ import {
   formatRequirementValue,
   formatValue,
   REQUIREMENT_STATUS_WORD,
-  STATUS_WORD,
   bySeverity,
   groupFindings,
   shortRevision,
@@ -79,10 +82,7 @@ function policyNotes(r: Report): string[] {
 function verdictLines(r: Report, c: Colors, width: number): string[] {
   const failed = r.files.filter(fileFails).length;
   const warned = r.files.filter(fileWarns).length;
-  const counts = Object.entries(r.counts)
-    .filter(([, n]) => n > 0)
-    .map(([k, n]) => `${n} ${STATUS_WORD[k as keyof typeof STATUS_WORD]}`)
-    .join(', ');
+  const counts = statusCounts(r).join(', ');
   const tail = `${r.files.length} design${r.files.length === 1 ? '' : 's'}${counts ? ` (${counts})` : ''}` +
     (failed ? `, ${failed} failing` : '') + (warned ? `, ${warned} with warnings` : '');
   const text = r.verdict === 'fail' ? `${SYMBOL.fail} Verdict: FAIL \u2014 ${tail}` : `${SYMBOL.pass} Verdict: PASS \u2014 ${tail}`;
@@ -97,15 +97,23 @@ function renderFile(f: FileReport, c: Colors, width: number): string[] {
   const mark = fails ? c.red(SYMBOL.fail) : warns ? c.yellow(SYMBOL.warn) : c.green(SYMBOL.pass);
   const word = fails ? c.red('FAIL') : warns ? c.yellow('PASS with warnings') : c.green('PASS');
   const renamed = f.previousPath ? ` (was ${f.previousPath})` : '';
-  out.push(`${mark} ${c.bold(f.path)}${renamed} \u2014 ${word} \u00b7 ${STATUS_WORD[f.status]}`);
+  out.push(`${mark} ${c.bold(f.path)}${renamed} \u2014 ${word} \u00b7 ${fileStatusWord(f)}`);
   if (f.error) {
     out.push(...wrap(`${f.path}:${f.error.line || 1}:${f.error.column || 1}: ${f.error.message}`, width - 2).map((l) => `  ${l}`));
   }
   if (f.head) out.push(...wrap(describeEvaluation(f.head), width - 2).map((l) => c.dim(`  ${l}`)));
+  const notApplicable = describeNotApplicable(f.head);
+  if (notApplicable) out.push(...wrap(`not applicable: ${notApplicable}`, width - 2).map((l) => c.dim(`  ${l}`)));
   const changed = describeChanges(f);
   if (changed) out.push(...wrap(`changed: ${changed}`, width - 2).map((l) => `  ${l}`));
+  const modified = describeModifications(f);
+  if (modified.length) {
+    out.push('  changed attributes:');
+    for (const m of modified) out.push(...wrap(m, width - 6).map((l, i) => (i === 0 ? `    \u2022 ${l}` : `      ${l}`)));
+  }
   if (f.requirements.length) out.push('', ...requirementTable(f.requirements, c, width));
-  const findings = f.findings.filter((x) => x.rule !== 'weakest-sequence' && x.rule !== 'parse-error');
+  // The file's error is printed above: its finding is not repeated.
+  const findings = f.findings.filter((x) => x.rule !== 'weakest-sequence' && x.rule !== 'parse-error' && !(f.error && x.rule === 'not-computable' && x.message === f.error.message));
   if (findings.length) {
     out.push('', c.bold('  Findings'));
     for (const x of groupFindings(bySeverity(findings))) out.push(...findingLines(x, c, width));
@@ -146,7 +154,7 @@ function requirementTable(rows: RequirementResult[], c: Colors, width: number): 
     const status = REQUIREMENT_STATUS_WORD[r.status];
     const bad = r.status === 'missed' || r.status === 'regressed';
     const sev = bad ? (r.severity === 'fail' ? c.red : r.severity === 'warn' ? c.yellow : c.cyan) : r.status === 'met' ? c.green : c.dim;
-    const symbol = bad ? SYMBOL[r.severity] : r.status === 'met' ? SYMBOL.pass : '~';
+    const symbol = bad ? SYMBOL[r.severity] : r.status === 'met' ? SYMBOL.pass : r.status === 'not-applicable' ? '\u2013' : '~';
     const first = `  ${desc[0].padEnd(descWidth)}  ${formatRequirementValue(r, r.base).padStart(6)} \u2192 ${formatRequirementValue(r, r.head).padStart(6)}  ${delta.padEnd(17)}  ${sev(`${symbol} ${status}`)}`;
     out.push(first, ...desc.slice(1).map((l) => `  ${l}`));
   }
@@ -159,6 +167,11 @@ function requirementTable(rows: RequirementResult[], c: Colors, width: number): 
 
 /** Element names keep "(line 14)" together when lines wrap. */
 const NBSP = { space: '\u00a0' };
+/** The finding's kind in the findings list: a drop that is not a regression is a "change". */
+function findingTag(x: GroupedFinding): string {
+  if (x.rule === 'regression' && x.status !== undefined && x.status !== 'regressed') return 'change';
+  return x.rule;
+}
 
 /** Elements shown under a finding, and steps of a sequence, before "… N more". */
 const MAX_ELEMENTS = 5;
@@ -167,7 +180,7 @@ const MAX_CHAIN = 8;
 function findingLines(x: GroupedFinding, c: Colors, width: number): string[] {
   const paint = x.severity === 'fail' ? c.red : x.severity === 'warn' ? c.yellow : c.cyan;
   const where = x.line > 0 ? `line ${x.line}` : '';
-  const head = `  ${paint(`${SYMBOL[x.severity]} ${x.severity.padEnd(6)}`)} ${x.rule.padEnd(16)} ${where.padEnd(10)} `;
+  const head = `  ${paint(`${SYMBOL[x.severity]} ${x.severity.padEnd(6)}`)} ${findingTag(x).padEnd(16)} ${where.padEnd(10)} `;
   const room = Math.max(30, width - 39);
   if (x.severity === 'notice') {
     // Notices are context, not work: one line each.

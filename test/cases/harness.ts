@@ -34,6 +34,8 @@ export interface FileExpectation {
   noFindings?: string[];
   /** Every requirement with both sides has delta exactly 0. */
   deltaZero?: boolean;
+  /** Requirement ids left out of deltaZero (rows the change really moves). */
+  deltaZeroExcept?: string[];
   /** Substrings some finding message must contain. */
   messages?: string[];
   /** Requirement id → status. */

@@ -73,7 +73,12 @@ describe('single points of failure: costs, labels, renames, hardening', () => {
       removed: [],
       renamed: [{ from: { id: 'weir', kind: 'node', line: 9, label: 'Weir Lane' }, to: { id: 'weir-lane', kind: 'node', line: 9, label: 'Weir Lane' } }],
     });
-    expect(f.requirements.find((r) => r.id === 'no-new-spof')).toMatchObject({ base: 4, head: 4, delta: 0, status: 'met' });
+    // Bridges and cut nodes in rows of their own: 4 weak points on each side, none new.
+    const spof = f.requirements.filter((r) => r.id.startsWith('no-new-spof/'));
+    expect(spof.map((r) => r.id)).toEqual(['no-new-spof/bridges', 'no-new-spof/cut-nodes', 'no-new-spof/risk-groups']);
+    expect(spof.reduce((n, r) => n + (r.base ?? 0), 0)).toBe(4);
+    for (const r of spof) expect(r).toMatchObject({ delta: 0, status: 'met' });
+    expect(spof.map((r) => r.base)).toEqual(spof.map((r) => r.head));
   });
 
   it('a hardened chain: the flags are a change, each hidden weak point is named with its cost', async () => {
@@ -94,7 +99,8 @@ describe('single points of failure: costs, labels, renames, hardening', () => {
     expect(hidden.every((x) => x.severity === 'warn')).toBe(true);
     // Losing the middle link quarry–ridge leaves 3 | 3: ridge, weir and orchard are cut off.
     expect(hidden[2].consequence?.stranded.map((e) => e.id)).toEqual(['ridge', 'weir', 'orchard']);
-    expect(f.requirements.find((r) => r.id === 'no-new-spof')?.status).toBe('uncertain');
+    expect(f.requirements.find((r) => r.id === 'no-new-spof/bridges')?.status).toBe('uncertain');
+    expect(f.requirements.find((r) => r.id === 'no-new-spof/cut-nodes')?.status).toBe('uncertain');
   });
 
   it('labels from GraphML name every site a finding strands', async () => {

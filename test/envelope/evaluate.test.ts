@@ -144,10 +144,14 @@ describe('evaluateDesign', () => {
     expect(env.attackGap!.value).toBeGreaterThan(0);
   });
 
-  it('skips challenges the design cannot support, with a reason', () => {
+  it('skips challenges the design cannot support as not applicable, with a reason, not as a reduction', () => {
     const ev = evaluateDesign(g, { r: single('largest_component'), seed: 1, challenges: [{ challenge: 'regional' }, { challenge: 'risk-groups' }] });
     expect(ev.evaluation.envelopes).toHaveLength(0);
-    expect(ev.evaluation.degraded.join('\n')).toMatch(/regional: skipped.*\n.*risk-groups: skipped/);
+    expect(ev.evaluation.degraded).toEqual([]);
+    expect(ev.evaluation.notApplicable).toEqual([
+      { challenge: 'regional', reason: 'no site has coordinates (lat/lon)' },
+      { challenge: 'risk-groups', reason: 'the design has no shared-risk group that can fail' },
+    ]);
   });
 
   it('reports the structure of the intact design', () => {

@@ -2,7 +2,7 @@
 // two revisions (or takes the given paths), evaluates both sides under the policy, prints the
 // verdict and writes the report files. The same runGate the GitHub Action calls.
 
-import { mkdir, writeFile } from 'node:fs/promises';
+import { mkdir, stat, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { UsageError } from '../../errors.js';
 import { evaluateDesignParallel } from '../../parallel/pool.js';
@@ -64,7 +64,9 @@ netbrace informs engineering judgement; it does not replace engineering studies.
 Exit codes:
   0  pass (or nothing to judge, or --mode inform)
   1  the gate failed: a requirement was broken or a design could not be read
-  2  usage or configuration error (bad option, broken policy); nothing was evaluated
+  2  usage or configuration error (bad option, broken policy); nothing was evaluated;
+     or a report file (--json, --summary, --html, --sarif) could not be written, after
+     the verdict was printed
 `;
 
 const OPTIONS = {
@@ -168,17 +170,71 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
   return { request, deps: { ...gitDeps(root), ...(evaluate ? { evaluate } : {}) } };
 }
 
-async function writeOut(io: CommandIO, file: string, text: string): Promise<void> {
-  const full = path.resolve(io.cwd, file);
-  await mkdir(path.dirname(full), { recursive: true });
-  await writeFile(full, text);
+/**
+ * Create the missing directories of `dir` one level at a time. Not mkdir's `recursive`: under
+ * a pseudo file system such as /proc it retries ENOENT for ever instead of failing.
+ */
+async function ensureDirectory(dir: string): Promise<void> {
+  const missing: string[] = [];
+  for (let d = dir; ; d = path.dirname(d)) {
+    try {
+      if (!(await stat(d)).isDirectory()) throw Object.assign(new Error(`${d} is not a directory`), { code: 'ENOTDIR' });
+      break;
+    } catch (e) {
+      if ((e as NodeJS.ErrnoException).code !== 'ENOENT' || path.dirname(d) === d) throw e;
+      missing.push(d);
+    }
+  }
+  for (const d of missing.reverse()) {
+    try {
+      await mkdir(d);
+    } catch (e) {
+      if ((e as NodeJS.ErrnoException).code !== 'EEXIST') throw e;
+    }
+  }
 }
 
-async function writeReports(v: Values, report: Report, io: CommandIO): Promise<void> {
-  if (v.json !== undefined) await writeOut(io, v.json, serializeReport(report));
-  if (v.summary !== undefined) await writeOut(io, v.summary, renderSummary(report));
-  if (v.html !== undefined) await writeOut(io, v.html, renderHtml(report));
-  if (v.sarif !== undefined) await writeOut(io, v.sarif, `${JSON.stringify(renderSarif(report), null, 2)}\n`);
+const WRITE_PROBLEM: Record<string, string> = {
+  ENOENT: 'its directory does not exist and cannot be created',
+  ENOTDIR: 'a part of the path is not a directory',
+  EISDIR: 'it is a directory',
+  EACCES: 'permission denied',
+  EPERM: 'permission denied',
+  EROFS: 'the file system is read-only',
+  ENOSPC: 'no space left on the device',
+  EIO: 'the file system refused the write',
+};
+
+/** Write one output file; a failure is a located message (the file the user named), never a stack trace. */
+async function writeOut(io: CommandIO, option: string, file: string, text: string): Promise<string | undefined> {
+  const full = path.resolve(io.cwd, file);
+  try {
+    await ensureDirectory(path.dirname(full));
+    await writeFile(full, text);
+    return undefined;
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code ?? '';
+    const why = WRITE_PROBLEM[code] ?? (e instanceof Error ? e.message : String(e));
+    // `file: message — hint`: the place to fix is the path itself, which has no line.
+    return `${file}: cannot write the ${option} report: ${why}${code ? ` (${code})` : ''} \u2014 give ${option} a file in a writable directory`;
+  }
+}
+
+/** Every requested report file; each one that cannot be written is one message (the others are still written). */
+async function writeReports(v: Values, report: Report, io: CommandIO): Promise<string[]> {
+  const outputs: [string, string | undefined, () => string][] = [
+    ['--json', v.json, () => serializeReport(report)],
+    ['--summary', v.summary, () => renderSummary(report)],
+    ['--html', v.html, () => renderHtml(report)],
+    ['--sarif', v.sarif, () => `${JSON.stringify(renderSarif(report), null, 2)}\n`],
+  ];
+  const problems: string[] = [];
+  for (const [option, file, render] of outputs) {
+    if (file === undefined) continue;
+    const problem = await writeOut(io, option, file, render());
+    if (problem) problems.push(problem);
+  }
+  return problems;
 }
 
 async function run(args: string[], io: CommandIO): Promise<number> {
@@ -186,11 +242,13 @@ async function run(args: string[], io: CommandIO): Promise<number> {
   const format = choice('--format', values.format, ['text', 'markdown', 'json'] as const, 'text');
   const { request, deps } = await buildRequest(values, positionals, io);
   const { report, exitCode } = await runGate(request, deps);
-  await writeReports(values, report, io);
+  // The verdict first: a report file that cannot be written must not hide it.
   if (format === 'json') io.stdout(serializeReport(report));
   else if (format === 'markdown') io.stdout(renderSummary(report));
   else io.stdout(renderTerminal(report, { color: colorEnabled(io), width: terminalWidth(io) }));
-  return exitCode;
+  const problems = await writeReports(values, report, io);
+  for (const p of problems) io.stderr(`${p}\n`);
+  return problems.length ? 2 : exitCode;
 }
 
 export const checkCommand: Command = {

@@ -8,7 +8,8 @@
 import { availableParallelism } from 'node:os';
 import type { Command, CommandIO } from '../io.js';
 import { finiteNumber, parseCommandArgs, wholeNumber } from '../args.js';
-import { UsageError } from '../../errors.js';
+import { DesignError, UsageError } from '../../errors.js';
+import { unsupportedMetric } from '../../envelope/r-value.js';
 import { compileTopology } from '../../graph/compact.js';
 import { parseFormatName, FORMAT_CHOICES } from '../../topology/detect.js';
 import { challenges, DEFAULTS, isChallengeName } from '../../challenges/registry.js';
@@ -77,7 +78,7 @@ Examples:
 The result informs engineering judgement under the stated model; it does not replace
 engineering studies, and local codes, standards and licensed practice decide.
 
-Exit codes: 0 evaluated, 1 the design could not be read, 2 usage error.
+Exit codes: 0 evaluated, 1 the design could not be read or R cannot be computed on it, 2 usage error.
 `;
 
 export function parseScore(text: string, combine: string | undefined): RValueSpec {
@@ -298,6 +299,9 @@ export const envelopeCommand: Command = {
     else if (fp.format) options.format = fp.format; // as the gate reads it
 
     const g = compileTopology(readDesign(file, options));
+    // A metric the design cannot support would give an envelope of zeros: refuse, naming what is missing.
+    const unsupported = unsupportedMetric(g, r);
+    if (unsupported) throw new DesignError(unsupported.message, { file }, unsupported.hint);
     const spec: EvaluationSpec = { r, seed, challenges: [params], budget: { maxWork } };
     let ev: DesignEvaluation;
     try {
@@ -308,7 +312,8 @@ export const envelopeCommand: Command = {
     }
     const e = ev.evaluation;
     if (e.envelopes.length + e.attacks.length + e.contingencies.length === 0) {
-      throw new UsageError(e.degraded[0] ?? `${v.challenge} produced no result`, 'choose another challenge for this design');
+      const na = e.notApplicable?.[0];
+      throw new UsageError(na ? `${na.challenge} does not apply to this design: ${na.reason}` : (e.degraded[0] ?? `${v.challenge} produced no result`), 'choose another challenge for this design');
     }
     io.stdout(v.json ? `${JSON.stringify(envelopeJson(file, spec, ev, origin), null, 2)}\n` : formatEnvelope(file, spec, ev, origin));
     return 0;

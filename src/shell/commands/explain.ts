@@ -9,11 +9,11 @@
 
 import type { Command, CommandIO } from '../io.js';
 import { finiteNumber, parseCommandArgs, wholeNumber } from '../args.js';
-import { UsageError } from '../../errors.js';
+import { DesignError, UsageError } from '../../errors.js';
 import { compileTopology, type CompactGraph } from '../../graph/compact.js';
 import { createMask } from '../../graph/mask.js';
 import { findComponents, findCutElements } from '../../graph/structure.js';
-import { createRValue, rPasses, type RFunction } from '../../envelope/r-value.js';
+import { createRValue, rPasses, unsupportedMetric, type RFunction } from '../../envelope/r-value.js';
 import type { ElementKind, RValueSpec } from '../../envelope/types.js';
 import { countOnes, eligibleUnits, removeUnit, restoreUnit, unitCount, unitIds } from '../../challenges/units.js';
 import { getMetric, isMetricId, metrics as knownMetrics } from '../../metrics/registry.js';
@@ -325,7 +325,8 @@ Examples:
 
 Exit codes:
   0  the ranking was printed
-  1  FILE could not be read (the message gives file:line:col)
+  1  FILE could not be read (the message gives file:line:col), or R cannot be computed
+     on it (a metric that needs demands or link lengths the design does not have)
   2  usage or configuration error (bad option, unknown metric, broken policy)
 `;
 
@@ -365,6 +366,9 @@ export const explainCommand: Command = {
     if (options.format === undefined && fp.format) options.format = fp.format; // as the gate reads it
     const t = readDesign(file, options);
     const g = compileTopology(t);
+    // A metric the design cannot support would rank every loss at R 0: refuse, naming what is missing.
+    const unsupported = unsupportedMetric(g, spec);
+    if (unsupported) throw new DesignError(unsupported.message, { file }, unsupported.hint);
     const total = [...planSingleLosses(g, spec, kinds, maxWork).units.values()].reduce((s, u) => s + u.size, 0);
     const progress = createProgress(io, { label: `explain ${file}`, total });
     let x: Explanation;
