@@ -21,12 +21,14 @@ describe('evaluateDesign', () => {
     const params = resolveParams(g, spec.challenges[0], spec.seed);
     const bp = bandPlan(g, params);
     const order = new Int32Array(bp.maxUnits);
-    const steps = new Int32Array(bp.x.length);
+    const steps = new Float64Array(bp.x.length);
     const metric = getMetric('largest_component').create(g);
     const samples = ev.samples.get('random-nodes')!;
     for (let r = 0; r < 12; r++) {
       bp.realize(r, order, steps);
       bp.x.forEach((_, j) => {
+        // 60 nodes and a grid in steps of 0.05: every count x·N is whole here.
+        expect(Number.isInteger(steps[j])).toBe(true);
         const mask = createMask(g);
         for (let i = 0; i < steps[j]; i++) removeUnit(g, mask, 'node', order[i]);
         expect(samples[r][j]).toBe(metric(mask).normalized);
