@@ -16,7 +16,7 @@
 // work, keeping at least MIN_REALIZATIONS realizations (or all, if fewer) and one case. Each
 // reduction is stated in `degraded` (per challenge and for the evaluation).
 
-import type { CompactGraph } from '../graph/compact.js';
+import { linksByLine, nodesByLine, type CompactGraph } from '../graph/compact.js';
 import { findComponents, findCutElements } from '../graph/structure.js';
 import type { Evaluation, StructureSummary } from '../report/report.js';
 import { getChallenge, resolveParams } from '../challenges/registry.js';
@@ -208,8 +208,9 @@ export function structureSummary(g: CompactGraph): StructureSummary {
     nodes: g.n,
     links: g.m,
     components: comps.sizes.length,
-    bridges: cuts.bridges.map((e) => ({ id: g.linkIds[e], kind: 'link' as const, line: g.linkLine[e] })),
-    cutNodes: cuts.cutNodes.map((v) => ({ id: g.nodeIds[v], kind: 'node' as const, line: g.nodeLine[v] })),
+    // Listed as the file lists them.
+    bridges: linksByLine(g, cuts.bridges).map((e) => ({ id: g.linkIds[e], kind: 'link' as const, line: g.linkLine[e] })),
+    cutNodes: nodesByLine(g, cuts.cutNodes).map((v) => ({ id: g.nodeIds[v], kind: 'node' as const, line: g.nodeLine[v] })),
   };
 }
 

@@ -26,6 +26,7 @@
 
 import type { ElementKind } from '../envelope/types.js';
 import { findCutElements } from '../graph/structure.js';
+import { linksByLine, nodesByLine } from '../graph/compact.js';
 import type { Finding, FileReport, FileStatus, ReportElement, RequirementResult, Severity } from '../report/report.js';
 import type { FilePolicy, Requirement, SpofRequirement } from '../policy/types.js';
 import { describeRequirement, formatDelta, formatR } from './describe.js';
@@ -276,14 +277,14 @@ interface SpofSet {
   cutNodes: Map<string, number>;
 }
 
-/** Bridges by stable link key and cut nodes by id, hardened ones left out. */
+/** Bridges by stable link key and cut nodes by id, hardened ones left out; in file order. */
 function spofs(side: DesignSide): SpofSet {
   const g = side.graph;
   const cuts = findCutElements(g);
   const bridges = new Map<string, number>();
-  for (const e of cuts.bridges) if (!g.linkHardened[e]) bridges.set(g.linkKeys[e], e);
+  for (const e of linksByLine(g, cuts.bridges)) if (!g.linkHardened[e]) bridges.set(g.linkKeys[e], e);
   const cutNodes = new Map<string, number>();
-  for (const v of cuts.cutNodes) if (!g.nodeHardened[v]) cutNodes.set(g.nodeIds[v], v);
+  for (const v of nodesByLine(g, cuts.cutNodes)) if (!g.nodeHardened[v]) cutNodes.set(g.nodeIds[v], v);
   return { bridges, cutNodes };
 }
 
@@ -339,13 +340,14 @@ export function elementChanges(base: DesignSide, head: DesignSide): { added: Rep
     const a = from.graph;
     const b = to.graph;
     const out: ReportElement[] = [];
-    a.nodeIds.forEach((id, v) => {
+    for (const v of nodesByLine(a, a.nodeIds.keys())) {
+      const id = a.nodeIds[v];
       if (!b.nodeIndex.has(id)) out.push({ id, kind: 'node', line: a.nodeLine[v] });
-    });
+    }
     const keys = new Set(b.linkKeys);
-    a.linkKeys.forEach((key, e) => {
-      if (!keys.has(key)) out.push({ id: a.linkIds[e], kind: 'link', line: a.linkLine[e] });
-    });
+    for (const e of linksByLine(a, a.linkKeys.keys())) {
+      if (!keys.has(a.linkKeys[e])) out.push({ id: a.linkIds[e], kind: 'link', line: a.linkLine[e] });
+    }
     return out;
   };
   return { added: diff(head, base), removed: diff(base, head) };
