@@ -5,7 +5,7 @@
 // eigenvectors unchanged), from the all-ones vector, until the largest change of the unit
 // vector is below 1e-13 or 100,000 rounds; O(L) per round. On a disconnected design the
 // iteration settles on the component(s) with the largest eigenvalue; the others score ~0 and
-// are ranked by file order after them.
+// are ranked after them by index (natural id order).
 
 import type { CompactGraph } from '../graph/compact.js';
 import type { AttackChallenge } from './types.js';

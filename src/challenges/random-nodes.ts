@@ -1,14 +1,15 @@
 // Random node failures: each realization removes the nodes that are not hardened in the order
 // of their keys hash(seed, realization, node id) (envelope/rng.ts), so versions of a design
 // share the dice for the nodes they have in common. x = fraction of the original node count;
-// k = round(x·N) nodes are removed at grid point x (a fixed count, "microcanonical").
+// x·N nodes are removed at grid point x (a fixed count, "microcanonical"); when x·N is not whole,
+// R there is interpolated between ⌊x·N⌋ and ⌈x·N⌉ removals of the same realization (units.ts).
 
 import type { CompactGraph } from '../graph/compact.js';
 import type { ElementKind } from '../envelope/types.js';
 import { createOrderWorkspace, hashIds, randomOrder, seedWord } from '../envelope/rng.js';
 import type { BandChallenge, BandPlan, ResolvedParams } from './types.js';
 import { makeGrid } from './grid.js';
-import { countOnes, eligibleUnits, stepsAt, unitCount, unitKeys } from './units.js';
+import { countAt, countOnes, eligibleUnits, unitCount, unitKeys } from './units.js';
 
 /** The plan shared by every "units in random key order" challenge. */
 export function randomOrderPlan(g: CompactGraph, kind: ElementKind, params: ResolvedParams): BandPlan {
@@ -16,8 +17,8 @@ export function randomOrderPlan(g: CompactGraph, kind: ElementKind, params: Reso
   const count = unitCount(g, kind);
   const eligible = eligibleUnits(g, kind);
   const available = countOnes(eligible);
-  const stepTable = Int32Array.from(x, (xi) => stepsAt(xi, count, available));
-  const maxUnits = stepTable.length ? stepTable[stepTable.length - 1] : 0;
+  const stepTable = Float64Array.from(x, (xi) => countAt(xi, count, available));
+  const maxUnits = stepTable.length ? Math.ceil(stepTable[stepTable.length - 1]) : 0;
   const idHash = hashIds(unitKeys(g, kind));
   const seedW = seedWord(params.seed);
   const full = new Int32Array(count);

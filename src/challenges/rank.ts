@@ -1,8 +1,9 @@
-// Ranking rules shared by the targeted attacks. Ties go to the element that appears first in
-// the file (lowest index). Scores from floating-point kernels (betweenness, eigenvector,
-// closeness) are compared after rounding to 2^-32 of the largest score, so that rounding noise
-// — which differs between implementations summing in different orders — cannot split a tie
-// that is exact in real arithmetic. Integer scores (degree) are compared exactly.
+// Ranking rules shared by the targeted attacks. Ties go to the lowest index: the element whose
+// id comes first in natural order (graph/canonical.ts), whatever the file's order. Scores from
+// floating-point kernels (betweenness, eigenvector, closeness) are compared after rounding to
+// 2^-32 of the largest score, so that rounding noise — which differs between implementations
+// summing in different orders — cannot split a tie that is exact in real arithmetic. Integer
+// scores (degree) are compared exactly.
 
 const QUANTUM = 2 ** 32;
 

@@ -24,7 +24,7 @@ export function haversineKm(lat1: number, lon1: number, lat2: number, lon2: numb
   return 2 * EARTH_RADIUS_KM * Math.asin(Math.min(1, Math.sqrt(a)));
 }
 
-/** Indices of nodes with both coordinates, in file order. */
+/** Indices of nodes with both coordinates, in index (natural id) order. */
 export function sitesWithCoordinates(g: CompactGraph): number[] {
   const sites: number[] = [];
   if (g.lat === null || g.lon === null) return sites;
@@ -52,7 +52,7 @@ export const regional: BandChallenge = {
   plan(g, params) {
     const x = makeGrid(params.until, params.points, params.at);
     const all = sitesWithCoordinates(g);
-    // A work budget may cap the epicentres: then they are spread evenly over the file's sites.
+    // A work budget may cap the epicentres: then they are spread evenly over the sites in id order.
     const cap = params.epicentres ?? all.length;
     const sites = cap >= all.length ? all : Array.from({ length: cap }, (_, r) => all[Math.floor((r * all.length) / cap)]);
     const removable = all.filter((v) => g.nodeHardened[v] === 0);

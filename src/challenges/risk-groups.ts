@@ -4,7 +4,7 @@
 // design's groups.
 // - risk-groups: groups fail in seeded random order (keys from group ids); band over realizations.
 // - risk-groups-worst: worst first — at each step the group whose loss leaves the lowest R
-//   (ties to the group first in the file); O(G²) evaluations of R for G groups.
+//   (ties to the group whose id comes first in natural order); O(G²) evaluations of R for G groups.
 
 import { copyMask, createMask } from '../graph/mask.js';
 import type { AttackChallenge, BandChallenge } from './types.js';

@@ -1,5 +1,6 @@
 // What a challenge removes, one "unit" at a time: a node, a link, or a shared-risk group (all of
-// its links at once). Units are integer indices in file order; ids are restored only here.
+// its links at once). Units are integer indices in the compact graph's canonical order
+// (graph/canonical.ts); ids are restored only here.
 
 import type { CompactGraph } from '../graph/compact.js';
 import type { Mask } from '../graph/mask.js';
@@ -53,9 +54,37 @@ export function restoreUnit(g: CompactGraph, mask: Mask, kind: ElementKind, u: n
   else for (let p = g.groupOffsets[u]; p < g.groupOffsets[u + 1]; p++) mask.link[g.groupLinks[p]] = 0;
 }
 
-/** Number of units removed at fraction x of the original count, capped by what may be removed. */
+/**
+ * Units removed at fraction x of the original count: the real number x·count, capped by what
+ * may be removed. It is whole when x·count is (up to the grid's 12-decimal rounding); otherwise
+ * R there is read between the two neighbouring whole counts (valueAtCount), so that a value at
+ * a fraction moves continuously with the design's size instead of jumping where rounding does.
+ */
+export function countAt(x: number, count: number, eligible: number): number {
+  const c = Math.min(x * count, eligible);
+  const whole = Math.round(c);
+  return Math.abs(c - whole) <= 1e-9 * Math.max(1, whole) ? whole : c;
+}
+
+/** Whole units a removal order must hold to reach fraction x: ⌈countAt⌉. */
 export function stepsAt(x: number, count: number, eligible: number): number {
-  return Math.min(Math.round(x * count), eligible);
+  return Math.ceil(countAt(x, count, eligible));
+}
+
+/**
+ * R at a real removal count c from R after whole counts (values[k] after k removals): linear
+ * between ⌊c⌋ and ⌈c⌉, exactly values[c] when c is whole. NaN when ⌈c⌉ is beyond the values.
+ */
+export function valueAtCount(values: ArrayLike<number>, c: number): number {
+  const lo = Math.floor(c);
+  const hi = Math.ceil(c);
+  if (!(lo >= 0) || hi >= values.length) return Number.NaN;
+  return lerp(values[lo], values[hi], c - lo);
+}
+
+/** a + w·(b − a): exactly a at w = 0 and when a = b (so equal neighbours never drift). */
+export function lerp(a: number, b: number, w: number): number {
+  return w === 0 || a === b ? a : a + w * (b - a);
 }
 
 export function countOnes(a: Uint8Array): number {

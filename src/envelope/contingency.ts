@@ -1,5 +1,5 @@
 // N−1 / N−2 evaluation (challenge: challenges/contingency.ts). Every single element, then every
-// pair (i < j in file order), of the chosen kind is removed and R is taken on what is left.
+// pair (i < j in canonical index order, graph/canonical.ts), of the chosen kind is removed and R is taken on what is left.
 // Cases run in lexicographic order up to `maxCases`; `evaluated` and `total` say how far it got.
 
 import type { CompactGraph } from '../graph/compact.js';

@@ -10,7 +10,7 @@ import type { CompactGraph } from '../graph/compact.js';
 import { createMask, type Mask } from '../graph/mask.js';
 import { getChallenge } from '../challenges/registry.js';
 import type { BandPlan, ResolvedParams } from '../challenges/types.js';
-import { countOnes, eligibleUnits, removeUnit, stepsAt, unitCount } from '../challenges/units.js';
+import { countOnes, eligibleUnits, lerp, removeUnit, stepsAt, unitCount } from '../challenges/units.js';
 import type { ChallengeName, Contingency, ElementKind, RValueSpec, WorstCase } from './types.js';
 import { createRValue, unionFindR, type RFunction } from './r-value.js';
 import { connectivityCurve, createUnionFindWorkspace, type ConnectivityCurve, type UnionFindWorkspace } from './union-find.js';
@@ -106,7 +106,7 @@ export function challengeKind(g: CompactGraph, params: ResolvedParams): ElementK
   return params.element;
 }
 
-/** Steps of an attack: round(until · count), capped by what may be removed. */
+/** Steps of an attack: ⌈until · count⌉ (R at `until` may be read between two steps), capped by what may be removed. */
 export function attackSteps(g: CompactGraph, kind: ElementKind, until: number): number {
   return stepsAt(until, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
 }
@@ -139,26 +139,56 @@ export class StepEvaluator {
     return this.ufr !== null;
   }
 
-  /** R after steps[j] units of `order` are removed, for each j. */
+  /**
+   * R after steps[j] units of `order` are removed, for each j (non-decreasing). A real count c
+   * (a fraction of the units, units.ts countAt) reads R linearly between ⌊c⌋ and ⌈c⌉ removals of
+   * this same order, so `order` must hold ⌈c⌉ units; a whole count is R there exactly.
+   */
   at(kind: ElementKind, order: ArrayLike<number>, len: number, steps: ArrayLike<number>, out: Float64Array): Float64Array {
     if (this.ufr !== null) {
+      // One curve gives every whole count; a real count costs one more lookup.
       const curve = connectivityCurve(this.g, kind, order, len, this.ws!);
-      for (let j = 0; j < steps.length; j++) out[j] = this.ufr(curve, steps[j]);
+      for (let j = 0; j < steps.length; j++) {
+        const c = steps[j];
+        const lo = Math.floor(c);
+        const r = this.ufr(curve, lo);
+        out[j] = c === lo ? r : lerp(r, this.ufr(curve, lo + 1), c - lo);
+      }
       return out;
     }
     const mask = this.mask;
     mask.node.fill(0);
     mask.link.fill(0);
-    let applied = 0;
+    // Counts arrive ascending; a real count needs ⌊c⌋ and ⌈c⌉, and the next grid point may need
+    // ⌊c⌋ again, so the last two evaluations are kept.
+    const memo = this.memo;
+    memo.applied = 0;
+    memo.kLast = -1;
+    memo.kPrev = -1;
     for (let j = 0; j < steps.length; j++) {
-      if (j > 0 && steps[j] === steps[j - 1]) {
-        out[j] = out[j - 1];
-        continue;
-      }
-      while (applied < steps[j]) removeUnit(this.g, mask, kind, order[applied++]);
-      out[j] = this.rfn(mask);
+      const c = steps[j];
+      const lo = Math.floor(c);
+      const r = this.rAfter(kind, order, lo);
+      out[j] = c === lo ? r : lerp(r, this.rAfter(kind, order, lo + 1), c - lo);
     }
     return out;
+  }
+
+  private readonly memo = { applied: 0, kLast: -1, rLast: 0, kPrev: -1, rPrev: 0 };
+
+  /** R after k removals of `order` on the shared mask; k never below the last two asked. */
+  private rAfter(kind: ElementKind, order: ArrayLike<number>, k: number): number {
+    const memo = this.memo;
+    if (k === memo.kLast) return memo.rLast;
+    if (k === memo.kPrev) return memo.rPrev;
+    if (k < memo.applied) throw new RangeError(`removal counts must not decrease (${k} after ${memo.applied})`);
+    while (memo.applied < k) removeUnit(this.g, this.mask, kind, order[memo.applied++]);
+    const r = this.rfn(this.mask);
+    memo.kPrev = memo.kLast;
+    memo.rPrev = memo.rLast;
+    memo.kLast = k;
+    memo.rLast = r;
+    return r;
   }
 
   /** R after every step k = 0..len. */
@@ -177,7 +207,7 @@ export function runTask(g: CompactGraph, plan: EvaluationPlan, task: Task): Task
     case 'band': {
       const bp = bandPlan(g, params);
       const order = new Int32Array(bp.maxUnits);
-      const steps = new Int32Array(bp.x.length);
+      const steps = new Float64Array(bp.x.length);
       const values: Float64Array[] = [];
       for (let r = task.from; r < task.to; r++) {
         const len = bp.realize(r, order, steps);

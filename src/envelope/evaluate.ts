@@ -16,13 +16,13 @@
 // work, keeping at least MIN_REALIZATIONS realizations (or all, if fewer) and one case. Each
 // reduction is stated in `degraded` (per challenge and for the evaluation).
 
-import type { CompactGraph } from '../graph/compact.js';
+import { linksByLine, nodesByLine, type CompactGraph } from '../graph/compact.js';
 import { reportElement } from '../graph/element.js';
 import { findComponents, findCutElements } from '../graph/structure.js';
 import type { Evaluation, StructureSummary } from '../report/report.js';
 import { getChallenge, resolveParams } from '../challenges/registry.js';
 import { sitesWithCoordinates } from '../challenges/regional.js';
-import { countOnes, eligibleUnits, stepsAt, unitCount, unitIds } from '../challenges/units.js';
+import { countAt, countOnes, eligibleUnits, unitCount, unitIds, valueAtCount } from '../challenges/units.js';
 import { makeGrid } from '../challenges/grid.js';
 import type { AttackCurve, ChallengeName, ChallengeParams, Contingency, Envelope, RValueSpec, RemovalSequence, WorstCase } from './types.js';
 import { rPasses, unionFindR, unsupportedMetric, UnsupportedMetricError, validateRSpec } from './r-value.js';
@@ -40,7 +40,7 @@ import {
 } from './engine.js';
 import { contingencyTotal } from './contingency.js';
 import { subsets } from './worst-case.js';
-import { area, attackGap, gridMean, gridStats, quantileKey, spread } from './summary.js';
+import { area, attackArea, attackGap, gridMean, gridStats, quantileKey, spread } from './summary.js';
 
 export { pairedStatistic, type PairedStatistic, type Statistic } from './pairing.js';
 
@@ -176,7 +176,8 @@ function estimate(g: CompactGraph, it: PlannedChallenge, rp: number, free: boole
     const m = p.challenge === 'regional' ? (p.epicentres ?? sitesWithCoordinates(g).length) : p.realizations;
     const x = makeGrid(p.until, p.points, p.at);
     const count = unitCount(g, kind);
-    const distinct = p.challenge === 'regional' ? x.length : new Set(x.map((v) => Math.round(v * count))).size;
+    // A real count x·N costs R at both neighbouring whole counts.
+    const distinct = p.challenge === 'regional' ? x.length : new Set(x.flatMap((v) => [Math.floor(v * count), Math.ceil(v * count)])).size;
     e.realizations = m;
     e.band = m * (free ? 2 : distinct * rp + 1);
   } else if (it.type === 'attack') {
@@ -212,8 +213,9 @@ export function structureSummary(g: CompactGraph): StructureSummary {
     nodes: g.n,
     links: g.m,
     components: comps.sizes.length,
-    bridges: cuts.bridges.map((e) => reportElement(g, 'link', e)),
-    cutNodes: cuts.cutNodes.map((v) => reportElement(g, 'node', v)),
+    // Listed as the file lists them.
+    bridges: linksByLine(g, cuts.bridges).map((e) => reportElement(g, 'link', e)),
+    cutNodes: nodesByLine(g, cuts.cutNodes).map((v) => reportElement(g, 'node', v)),
   };
 }
 
@@ -252,6 +254,7 @@ export function assembleEvaluation(g: CompactGraph, plan: EvaluationPlan, tasks:
       const count = unitCount(g, kind);
       const ids = unitIds(g, kind);
       const values = Array.from(res.values);
+      const until = Math.min(countAt(p.until, count, countOnes(eligibleUnits(g, kind))), res.sequence.length);
       const curve: AttackCurve = {
         challenge: p.challenge,
         kind,
@@ -259,7 +262,7 @@ export function assembleEvaluation(g: CompactGraph, plan: EvaluationPlan, tasks:
         values,
         sequence: Array.from(res.sequence, (u) => ids[u]),
         count,
-        area: gridMean(values),
+        area: attackArea(values, until),
       };
       attackOf.set(item, curve);
       evaluation.attacks.push(curve);
@@ -284,8 +287,8 @@ export function assembleEvaluation(g: CompactGraph, plan: EvaluationPlan, tasks:
     const count = unitCount(g, env.kind);
     const eligible = countOnes(eligibleUnits(g, env.kind));
     const atGrid = env.x.map((x) => {
-      const k = stepsAt(x, count, eligible);
-      return k < worst.values.length ? worst.values[k] : null;
+      const r = valueAtCount(worst.values, countAt(x, count, eligible));
+      return Number.isNaN(r) ? null : r;
     });
     const lo = env.quantiles[quantileKey(env.band[0])].value;
     const gap = attackGap(lo, atGrid);
@@ -335,14 +338,15 @@ function weakestSequences(g: CompactGraph, bp: ReturnType<typeof bandPlan>, valu
     .slice(0, WEAKEST_KEPT);
   const ids = unitIds(g, bp.kind);
   const order = new Int32Array(bp.maxUnits);
-  const steps = new Int32Array(bp.x.length);
+  const steps = new Float64Array(bp.x.length);
   return picks.map((r) => {
     const len = bp.realize(r, order, steps);
     const seq: RemovalSequence = { kind: bp.kind, elements: Array.from(order.subarray(0, len), (u) => ids[u]), values: [], realization: r };
     if (bp.label) seq.label = bp.label(r);
     if (ev.stepsAreFree) {
       seq.values = Array.from(ev.everyStep(bp.kind, order, len).subarray(1));
-    } else {
+    } else if (steps.every((c) => Number.isInteger(c))) {
+      // The grid's own values, at the counts they were taken.
       const at: number[] = [];
       const vals: number[] = [];
       for (let j = 0; j < steps.length; j++) {
@@ -351,6 +355,14 @@ function weakestSequences(g: CompactGraph, bp: ReturnType<typeof bandPlan>, valu
         vals.push(values[r][j]);
       }
       seq.values = vals;
+      seq.steps = at;
+    } else {
+      // Some grid values lie between two whole counts (x·N is not whole): R at those whole
+      // counts, recomputed for these few sequences, so the steps stay removal counts.
+      const whole = new Set<number>();
+      for (let j = 0; j < steps.length; j++) for (const k of [Math.floor(steps[j]), Math.ceil(steps[j])]) if (k > 0) whole.add(k);
+      const at = [...whole].sort((a, b) => a - b);
+      seq.values = Array.from(ev.at(bp.kind, order, len, at, new Float64Array(at.length)));
       seq.steps = at;
     }
     return seq;

@@ -21,6 +21,7 @@ import { gridMean, sortedColumn } from './summary.js';
 import type { ChallengeName, Envelope } from './types.js';
 import type { DesignEvaluation } from './evaluate.js';
 import { round12 } from '../challenges/grid.js';
+import { countAt, valueAtCount } from '../challenges/units.js';
 
 export type Statistic = { kind: 'quantile'; q: number } | { kind: 'mean' } | { kind: 'min' } | { kind: 'area' } | { kind: 'spread' };
 
@@ -50,10 +51,11 @@ export function pairedStatistic(
       if (statistic.kind === 'area') return a.area;
       if (statistic.kind === 'spread') return 0;
       if (x === undefined) throw new RangeError(`${challenge}: the ${statistic.kind} of an attack needs x`);
+      // R at x·count removals, between the two neighbouring steps when it is not whole (units.ts).
       const count = a.count ?? a.values.length - 1;
-      const k = Math.round(x * count);
-      if (k >= a.values.length) throw new RangeError(`${challenge}: the attack stops before x = ${x}`);
-      return a.values[k];
+      const r = valueAtCount(a.values, countAt(x, count, count));
+      if (Number.isNaN(r)) throw new RangeError(`${challenge}: the attack stops before x = ${x}`);
+      return r;
     };
     return deterministic(value(atB), value(atH));
   }

@@ -10,6 +10,7 @@
 
 import type { QuantileBand } from './types.js';
 import { quantileEstimate, quantileSorted } from './quantiles.js';
+import { valueAtCount } from '../challenges/units.js';
 
 export interface GridStats {
   min: number[];
@@ -72,6 +73,23 @@ export function spread(lo: ArrayLike<number>, hi: ArrayLike<number>): number {
   const w = new Float64Array(lo.length);
   for (let j = 0; j < lo.length; j++) w[j] = hi[j] - lo[j];
   return gridMean(w);
+}
+
+/**
+ * Area of an attack curve (values[k] = R after k removals) up to a real count c of removals:
+ * the right-endpoint sum Σ_{k=1..⌊c⌋} R(k) + (c − ⌊c⌋)·R(c), over c, with R(c) interpolated
+ * between ⌊c⌋ and ⌈c⌉. For whole c it is the mean of values[1..c] (Schneider's R when c = N and
+ * R is the LCC share: Schneider et al., PNAS 108:3838, 2011); between whole counts it moves
+ * continuously with c instead of jumping by a whole step. c = 0: R of the intact design.
+ */
+export function attackArea(values: ArrayLike<number>, c: number): number {
+  if (values.length === 0) return Number.NaN;
+  if (!(c > 0)) return values[0];
+  const lo = Math.floor(c);
+  let sum = 0;
+  for (let k = 1; k <= lo; k++) sum += values[k];
+  if (c === lo) return sum / c;
+  return (sum + (c - lo) * valueAtCount(values, c)) / c;
 }
 
 /** Attack gap over the grid points x_1..x_K the attack reaches: mean of q_lo − R_attack. */

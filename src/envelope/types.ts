@@ -122,13 +122,17 @@ export interface Envelope {
 export interface AttackCurve {
   challenge: ChallengeName;
   kind: ElementKind;
-  /** x = k / N (or L, or groups) for k = 0..K. */
+  /** x = k / N (or L, or groups) for k = 0..K, K = ⌈until·N⌉ (values at a fraction in between are interpolated). */
   x: number[];
   values: number[];
   sequence: string[];
   /** Units the x axis divides by: N, L or the number of groups (always set by the engine). */
   count?: number;
-  /** Mean of values[1..K] (Schneider's R when the attack runs to the end and R is the LCC share). */
+  /**
+   * Mean of values[1..K] up to `until`·count removals (Schneider's R when the attack runs to the
+   * end and R is the LCC share); when until·count is not whole, the last step counts with its
+   * fraction and R there is interpolated (summary.ts attackArea).
+   */
   area: number;
   worstCase?: WorstCase;
 }

@@ -5,7 +5,8 @@
 // - greedy: adaptive greedy — each step removes the element whose loss leaves the lowest R.
 // Beam and greedy results are the best attack found: an upper bound on the true worst case
 // (Lordan & Albareda-Sambola 2019 show greedy adaptive falls short of the optimum).
-// Ties go to the element first in the file (lexicographically smallest index sequence).
+// Ties go to the lexicographically smallest index sequence: the elements first in canonical
+// (natural id) order, graph/canonical.ts — never to where the file lists them.
 
 import type { CompactGraph } from '../graph/compact.js';
 import { copyMask, createMask, type Mask } from '../graph/mask.js';
@@ -113,7 +114,7 @@ export function searchWorstCase(
     }
     if (candidates.length === 0) break;
     // Lowest R first; then the lexicographically smallest set, so equal sets reached in
-    // different orders are kept once and ties go to the file's first elements.
+    // different orders are kept once and ties go to the lowest indices (natural id order).
     for (const c of candidates) c.key = [...c.parent.seq, c.u].sort((x, y) => x - y).join(',');
     candidates.sort((x, y) => x.r - y.r || compareKeys(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u]));
     const next: State[] = [];

@@ -117,7 +117,8 @@ export function elementChanges(base: CompactGraph, head: CompactGraph, m: Matchi
     for (let v = 0; v < g.n; v++) if (toOther.node[v] < 0) out.push(reportElement(g, 'node', v));
     for (let e = 0; e < g.m; e++) if (toOther.link[e] < 0) out.push(reportElement(g, 'link', e));
     for (let k = 0; k < g.groupIds.length; k++) if (toOther.group[k] < 0) out.push(reportElement(g, 'group', k));
-    return out;
+    // As the file lists them (the graph is numbered in id order).
+    return out.sort((a, b) => a.line - b.line);
   };
   const changes: ElementChanges = {
     added: unmatched(head, { node: m.nodeToBase, link: m.linkToBase, group: m.groupToBase }),
@@ -148,7 +149,8 @@ export function hardenedChanges(base: CompactGraph, head: CompactGraph, m: Match
     const b = m.linkToBase[e];
     if (b >= 0 && base.linkHardened[b] !== head.linkHardened[e]) out.push({ ...reportElement(head, 'link', e), hardened: head.linkHardened[e] === 1 });
   }
-  return out;
+  // Sites first, then links, each as the file lists them.
+  return out.sort((a, b) => (a.kind === b.kind ? a.line - b.line : a.kind === 'node' ? -1 : 1));
 }
 
 /** The kinds of weak point a no-new-spof requirement counts, each in a row of its own. */

@@ -10,7 +10,7 @@ import { pairedStatistic, type DesignEvaluation, type Statistic } from '../envel
 import type { AttackCurve, Contingency, ElementKind, Envelope, RemovalSequence } from '../envelope/types.js';
 import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
 import { sitesWithCoordinates } from '../challenges/regional.js';
-import { countOnes, eligibleUnits, stepsAt, unitCount } from '../challenges/units.js';
+import { countAt, countOnes, eligibleUnits, unitCount, valueAtCount } from '../challenges/units.js';
 import { quantileEstimate } from '../envelope/quantiles.js';
 import { quantileKey, sortedColumn } from '../envelope/summary.js';
 import type { CompactGraph } from '../graph/compact.js';
@@ -81,9 +81,9 @@ function contingencyOf(side: DesignSide, element: 'node' | 'link'): Contingency 
   return side.result.evaluation.contingencies.find((x) => x.challenge === 'n-1' && x.kind === element);
 }
 
-/** Removals at x for an element kind on this design (as the engine counts them). */
+/** Removals at x for an element kind on this design (as the engine counts them): x·N, possibly not whole. */
 function removalsAt(g: CompactGraph, kind: ElementKind, x: number): number {
-  return stepsAt(x, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
+  return countAt(x, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
 }
 
 function sequenceElements(seq: RemovalSequence | undefined, count = MAX_ELEMENTS): { id: string; kind: ElementKind }[] {
@@ -201,9 +201,11 @@ function deterministic(req: Requirement, c: ChallengeDef | undefined, side: Desi
   if (!curve) return didNotRun(side, c);
   if (req.kind === 'area-floor') return { value: curve.area, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }) };
   const t = req as ThresholdRequirement;
+  // R at x·N removals: between the two neighbouring steps when x·N is not whole.
   const k = removalsAt(side.graph, curve.kind, t.at ?? 0);
-  if (k >= curve.values.length) return `the attack "${c.name}" ends before ${t.at}`;
-  return { value: curve.values[k], elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, k) };
+  const value = valueAtCount(curve.values, k);
+  if (Number.isNaN(value)) return `the attack "${c.name}" ends before ${t.at}`;
+  return { value, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, Math.ceil(k)) };
 }
 
 /** Measure one requirement (not no-new-spof) on head, and on base when there is one. */
@@ -234,7 +236,7 @@ export function measure(req: Requirement, challenges: readonly ChallengeDef[], h
       delta: baseEnv ? (same ? 0 : p.delta) : null,
       se: baseEnv ? (same ? 0 : p.se) : null,
       higherIsBetter,
-      elements: sequenceElements(env.weakest[0], x === undefined ? MAX_ELEMENTS : removalsAt(head.graph, env.kind, x)),
+      elements: sequenceElements(env.weakest[0], x === undefined ? MAX_ELEMENTS : Math.ceil(removalsAt(head.graph, env.kind, x))),
     };
     if (stat.kind === 'quantile' && j >= 0) {
       // The band's quantiles carry their interval; any other q gets the same order-statistic one.

@@ -12,7 +12,7 @@
 // Each finding says what losing the element costs (consequence.ts).
 
 import { spofRowParts, type SpofPart } from './describe.js';
-import type { CompactGraph } from '../graph/compact.js';
+import { linksByLine, nodesByLine, type CompactGraph } from '../graph/compact.js';
 import { reportElement } from '../graph/element.js';
 import type { Mask } from '../graph/mask.js';
 import { findComponents, findCutElements, findStrandingGroups, groupLinkMask } from '../graph/structure.js';
@@ -111,14 +111,14 @@ export function judgeSpof(
   const groupCost = (k: number, honour: boolean) => cost((m) => void groupLinkMask(g, k, honour, m));
 
   if (r.bridges) {
-    for (const e of [...now.bridges].sort((x, y) => x - y)) {
+    for (const e of linksByLine(g, now.bridges)) {
       if (!isNew(now.bridges, matching.linkToBase, e, before.bridges)) continue;
       const message = `${linkWords(g, e)} is a new bridge: losing it splits the design, which the base did not`;
       findings.push(finding('new-bridge', r.severity, message, reportElement(g, 'link', e), r.id, linkCost(e)));
     }
   }
   if (r.cutNodes) {
-    for (const v of [...now.cutNodes].sort((x, y) => x - y)) {
+    for (const v of nodesByLine(g, now.cutNodes)) {
       if (!isNew(now.cutNodes, matching.nodeToBase, v, before.cutNodes)) continue;
       const el = reportElement(g, 'node', v);
       const message = `site ${formatElement(el)} is a new cut node: losing it splits the design, which the base did not`;
@@ -140,7 +140,7 @@ export function judgeSpof(
     const rawBefore = weakPoints(b, false);
     const claim = 'the change marks it hardened, so the gate does not count it; hardening is a claim the gate cannot check';
     if (r.bridges) {
-      for (const e of [...raw.bridges].sort((x, y) => x - y)) {
+      for (const e of linksByLine(g, raw.bridges)) {
         if (now.bridges.has(e) || !isNew(raw.bridges, matching.linkToBase, e, rawBefore.bridges)) continue;
         if (!newlyHardened(g.linkHardened, b.linkHardened, matching.linkToBase, e)) continue;
         const message = `${linkWords(g, e)} would be a new bridge (losing it splits the design), but ${claim}`;
@@ -148,7 +148,7 @@ export function judgeSpof(
       }
     }
     if (r.cutNodes) {
-      for (const v of [...raw.cutNodes].sort((x, y) => x - y)) {
+      for (const v of nodesByLine(g, raw.cutNodes)) {
         if (now.cutNodes.has(v) || !isNew(raw.cutNodes, matching.nodeToBase, v, rawBefore.cutNodes)) continue;
         if (!newlyHardened(g.nodeHardened, b.nodeHardened, matching.nodeToBase, v)) continue;
         const el = reportElement(g, 'node', v);

@@ -3,6 +3,7 @@
 // Removal never copies the graph: it is expressed by a Mask (see mask.ts).
 
 import type { Topology } from '../topology/model.js';
+import { canonicalOrder, compareIds } from './canonical.js';
 
 export interface CompactGraph {
   /** Number of nodes (original, N0). */
@@ -30,12 +31,12 @@ export interface CompactGraph {
   /** Site coordinates in degrees (NaN where unknown), or null when no node has both. */
   readonly lat: Float64Array | null;
   readonly lon: Float64Array | null;
-  /** Element ids in file order; index i ↔ id. */
+  /** Element ids in canonical order (canonical.ts: natural id order); index i ↔ id. */
   readonly nodeIds: readonly string[];
   /** Human labels of nodes (GraphML/GML `label` or `name`, our format's `label`), else undefined. */
   readonly nodeLabels: readonly (string | undefined)[];
   readonly linkIds: readonly string[];
-  /** Stable link keys (see TopoLink.key) used to seed random orders. */
+  /** Stable link keys (TopoLink.key; parallel links share theirs out in canonical order) that seed random orders. */
   readonly linkKeys: readonly string[];
   readonly nodeIndex: ReadonlyMap<string, number>;
   readonly linkIndex: ReadonlyMap<string, number>;
@@ -55,12 +56,20 @@ export interface CompactGraph {
   readonly latencyBudget: number | undefined;
 }
 
-/** Compile a parsed design into its compact graph. Node and link order follow the file. */
+/**
+ * Compile a parsed design into its compact graph. Nodes, links, groups and demands are numbered
+ * in canonical order (canonical.ts), not file order: the same topology listed in another order
+ * compiles to the same graph, so every result is the same. Lines stay with their elements.
+ */
 export function compileTopology(t: Topology): CompactGraph {
-  const n = t.nodes.length;
-  const m = t.links.length;
+  const order = canonicalOrder(t);
+  const nodes = order.nodes.map((i) => t.nodes[i]);
+  const links = order.links.map((e) => t.links[e]);
+  const keys = order.keys;
+  const n = nodes.length;
+  const m = links.length;
   const nodeIndex = new Map<string, number>();
-  t.nodes.forEach((node, i) => nodeIndex.set(node.id, i));
+  nodes.forEach((node, i) => nodeIndex.set(node.id, i));
   const linkIndex = new Map<string, number>();
 
   const linkSource = new Int32Array(m);
@@ -72,10 +81,11 @@ export function compileTopology(t: Topology): CompactGraph {
   let hasLatency = false;
   let hasWeight = false;
   for (let e = 0; e < m; e++) {
-    const link = t.links[e];
-    const s = nodeIndex.get(link.source);
-    const d = nodeIndex.get(link.target);
-    if (s === undefined || d === undefined) {
+    const link = links[e];
+    // Ends in canonical order too: which end a file writes first changes nothing.
+    const s = order.lo[order.links[e]];
+    const d = order.hi[order.links[e]];
+    if (s < 0) {
       // Parsers reject this with a located error; reaching here is a programming error.
       throw new Error(`link ${link.id} refers to a node that is not in the design`);
     }
@@ -112,36 +122,27 @@ export function compileTopology(t: Topology): CompactGraph {
     return a;
   };
 
-  const hasCoords = t.nodes.some((v) => v.lat !== undefined && v.lon !== undefined);
+  const hasCoords = nodes.some((v) => v.lat !== undefined && v.lon !== undefined);
   const nodeHardened = new Uint8Array(n);
   const nodeLine = new Int32Array(n);
-  t.nodes.forEach((v, i) => {
+  nodes.forEach((v, i) => {
     nodeHardened[i] = v.hardened ? 1 : 0;
     nodeLine[i] = v.pos.line;
   });
 
-  // Risk groups: described groups first (file order), then groups only named by links.
-  const groupIds: string[] = [];
-  const groupLineList: number[] = [];
+  // Risk groups: the described ones and those only named by links, by id. A group's line is its
+  // description's, else that of the first link in the file that names it.
+  const groupLineOf = new Map<string, number>();
+  for (const g of t.riskGroups) if (!groupLineOf.has(g.id)) groupLineOf.set(g.id, g.pos.line);
+  for (const link of t.links) for (const gid of link.riskGroups) if (!groupLineOf.has(gid)) groupLineOf.set(gid, link.pos.line);
+  const groupIds = [...groupLineOf.keys()].sort(compareIds);
   const groupPos = new Map<string, number>();
-  for (const g of t.riskGroups) {
-    if (groupPos.has(g.id)) continue;
-    groupPos.set(g.id, groupIds.length);
-    groupIds.push(g.id);
-    groupLineList.push(g.pos.line);
-  }
+  groupIds.forEach((id, g) => groupPos.set(id, g));
   const members: number[][] = groupIds.map(() => []);
-  t.links.forEach((link, e) => {
+  links.forEach((link, e) => {
     for (const gid of link.riskGroups) {
-      let g = groupPos.get(gid);
-      if (g === undefined) {
-        g = groupIds.length;
-        groupPos.set(gid, g);
-        groupIds.push(gid);
-        groupLineList.push(link.pos.line);
-        members.push([]);
-      }
-      if (members[g][members[g].length - 1] !== e) members[g].push(e);
+      const list = members[groupPos.get(gid)!];
+      if (list[list.length - 1] !== e) list.push(e);
     }
   });
   const groupOffsets = new Int32Array(groupIds.length + 1);
@@ -149,11 +150,12 @@ export function compileTopology(t: Topology): CompactGraph {
   const groupLinks = new Int32Array(groupOffsets[groupIds.length]);
   members.forEach((list, g) => groupLinks.set(list, groupOffsets[g]));
 
-  const k = t.demands.length;
+  const demands = order.demands.map((i) => t.demands[i]);
+  const k = demands.length;
   const demandSource = new Int32Array(k);
   const demandTarget = new Int32Array(k);
   const demandVolume = new Float64Array(k);
-  t.demands.forEach((d, i) => {
+  demands.forEach((d, i) => {
     demandSource[i] = nodeIndex.get(d.source) ?? -1;
     demandTarget[i] = nodeIndex.get(d.target) ?? -1;
     demandVolume[i] = d.volume;
@@ -167,23 +169,23 @@ export function compileTopology(t: Topology): CompactGraph {
     linkOf,
     linkSource,
     linkTarget,
-    length: column((e) => t.links[e].length, hasLength, m),
-    latency: column((e) => t.links[e].latency, hasLatency, m),
-    weight: column((e) => t.links[e].weight, hasWeight, m),
+    length: column((e) => links[e].length, hasLength, m),
+    latency: column((e) => links[e].latency, hasLatency, m),
+    weight: column((e) => links[e].weight, hasWeight, m),
     nodeHardened,
     linkHardened,
-    lat: column((i) => t.nodes[i].lat, hasCoords, n),
-    lon: column((i) => t.nodes[i].lon, hasCoords, n),
-    nodeIds: t.nodes.map((v) => v.id),
-    nodeLabels: t.nodes.map((v) => v.label),
-    linkIds: t.links.map((l) => l.id),
-    linkKeys: t.links.map((l) => l.key),
+    lat: column((i) => nodes[i].lat, hasCoords, n),
+    lon: column((i) => nodes[i].lon, hasCoords, n),
+    nodeIds: nodes.map((v) => v.id),
+    nodeLabels: nodes.map((v) => v.label),
+    linkIds: links.map((l) => l.id),
+    linkKeys: keys,
     nodeIndex,
     linkIndex,
     nodeLine,
     linkLine,
     groupIds,
-    groupLine: Int32Array.from(groupLineList),
+    groupLine: Int32Array.from(groupIds, (id) => groupLineOf.get(id)!),
     groupOffsets,
     groupLinks,
     demandSource,
@@ -221,4 +223,17 @@ export function graphFromEdges(n: number, edges: readonly (readonly [number, num
     metadata: {},
     warnings: [],
   });
+}
+
+/**
+ * Node indices in the order the file lists them (by source line, then index): for lists a
+ * person reads next to the file. Computations use the canonical index order instead.
+ */
+export function nodesByLine(g: CompactGraph, nodes: Iterable<number>): number[] {
+  return [...nodes].sort((a, b) => g.nodeLine[a] - g.nodeLine[b] || a - b);
+}
+
+/** Link indices in the order the file lists them (by source line, then index). */
+export function linksByLine(g: CompactGraph, links: Iterable<number>): number[] {
+  return [...links].sort((a, b) => g.linkLine[a] - g.linkLine[b] || a - b);
 }

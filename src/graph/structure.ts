@@ -8,7 +8,7 @@ import type { CompactGraph } from './compact.js';
 import { createMask, isLinkAlive, type Mask } from './mask.js';
 
 export interface Components {
-  /** Component label per node, -1 for removed nodes. Labels follow file order of first node. */
+  /** Component label per node, -1 for removed nodes. Labels follow the index order of each component's first node. */
   label: Int32Array;
   /** Size of each component. */
   sizes: number[];

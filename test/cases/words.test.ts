@@ -158,13 +158,13 @@ describe('a NaN or infinite value is never a pass', () => {
       expect(exitCode).toBe(1);
       expect(f.status).toBe('error');
       const broken = f.findings.filter((x) => x.rule === 'not-computable');
-      expect(broken.map((x) => [x.requirement, x.severity])).toEqual([
-        ['area-floor:site-failures', 'fail'],
-        ['r-threshold:hub-attack@0.2:value', 'fail'],
-      ]);
-      // The attack's step carries the value itself; the envelope's area of infinite samples is NaN.
-      expect(broken[1].message).toContain(`the head value is ${String(value)} and the delta is`);
+      expect(broken.find((x) => x.requirement === 'area-floor:site-failures')?.severity).toBe('fail');
       for (const x of broken) expect(x.message).toMatch(/is (NaN|-?Infinity)(,| and)/);
+      // The attack's value at 0.2 is read between two poisoned steps: an infinite value (not
+      // computable), or for NaN no value at all (the floor cannot be judged at head though the
+      // base could): a failure either way.
+      const attack = f.findings.filter((x) => x.requirement === 'r-threshold:hub-attack@0.2:value');
+      expect(attack.map((x) => x.severity)).toEqual(['fail']);
       expect(f.requirements.every((r) => r.status !== 'met')).toBe(true);
     });
   }
@@ -182,19 +182,19 @@ describe('views title and word findings by what the judging found', () => {
     const report = run.report!;
     const about = (challenge: string) =>
       planAnnotations(report).annotations.find((a) => a.rule === 'regression' && a.message.startsWith(`area of "${challenge}"`));
-    expect(about('site-failures')?.title).toBe('netbrace: robustness regressed');
-    expect(about('link-failures')?.title).toBe('netbrace: robustness dropped within the allowance');
-    expect(about('link-failures')?.level).toBe('notice');
+    expect(about('link-failures')?.title).toBe('netbrace: robustness regressed');
+    expect(about('site-failures')?.title).toBe('netbrace: robustness dropped within the allowance');
+    expect(about('site-failures')?.level).toBe('notice');
     // Markdown escapes brackets; compare the text a reader sees.
     const md = renderSummary(report).replace(/\\/g, '');
     expect(md).toContain('**robustness dropped within the allowance**');
     // The deciding digits, and no three-decimal restatement beside them that would contradict them.
-    expect(md).toContain('(\u0394 \u22120.01076 \u00b1 0.00121), more than the allowed 0.01070\n');
+    expect(md).toContain('(\u0394 \u22120.02983 \u00b1 0.00153), more than the allowed 0.02980\n');
     // The numbers travel as data too: the allowance each drop was judged against.
-    const regressed = only(report).findings.find((x) => x.requirement === 'area-floor:site-failures' && x.rule === 'regression')!;
-    expect([regressed.status, regressed.allowance]).toEqual(['regressed', 0.0107]);
+    const regressed = only(report).findings.find((x) => x.requirement === 'area-floor:link-failures' && x.rule === 'regression')!;
+    expect([regressed.status, regressed.allowance]).toEqual(['regressed', 0.0298]);
     const sarif = JSON.stringify(renderSarif(report));
-    expect(sarif).toContain('"allowance":0.0107');
+    expect(sarif).toContain('"allowance":0.0298');
     expect(renderHtml(report)).toContain('data-status="within-allowance"');
   });
 

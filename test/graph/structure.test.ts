@@ -27,8 +27,11 @@ describe('structure', () => {
   it('masking a cycle link turns the cycle into a path', () => {
     const g = cycle(5);
     const mask = createMask(g);
-    mask.link[4] = 1; // 4–0
-    expect(findCutElements(g, mask)).toEqual({ bridges: [0, 1, 2, 3], cutNodes: [1, 2, 3] });
+    mask.link[g.linkIndex.get('e4')!] = 1; // 4–0
+    const ids = (list: number[]) => list.map((e) => g.linkIds[e]);
+    const cuts = findCutElements(g, mask);
+    expect(ids(cuts.bridges).sort()).toEqual(['e0', 'e1', 'e2', 'e3']);
+    expect(cuts.cutNodes).toEqual([1, 2, 3]);
   });
 
   it('components count and the largest one, removed nodes excluded', () => {

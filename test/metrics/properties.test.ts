@@ -123,10 +123,12 @@ describe('a mask equals rebuilding the graph without the element', () => {
       fc.property(specArb, fc.array(fc.boolean(), { maxLength: 60 }), (spec, drop) => {
         const g = design(spec);
         const mask = createMask(g);
+        // Spec edge e is link "e<e>"; the compact graph numbers links in canonical order.
+        const index = (e: number) => g.linkIndex.get(`e${e}`)!;
         drop.forEach((d, e) => {
-          if (d && e < g.m) mask.link[e] = 1;
+          if (d && e < g.m) mask.link[index(e)] = 1;
         });
-        const rebuilt = design(spec, () => true, (e) => !mask.link[e]);
+        const rebuilt = design(spec, () => true, (e) => !mask.link[index(e)]);
         for (const m of applicable(g)) {
           // weighted_efficiency's ideal uses the intact design's cheapest link (ℓ_min), and
           // demand_served's budget the intact paths: both are defined against the intact
@@ -149,10 +151,12 @@ describe('a mask equals rebuilding the graph without the element', () => {
       fc.property(specArb, fc.array(fc.boolean(), { maxLength: 22 }), (spec, drop) => {
         const g = design(spec);
         const mask = createMask(g);
+        // Spec node i is "v<i>"; the compact graph numbers nodes in id order (v10 before v2).
+        const index = (i: number) => g.nodeIndex.get(`v${i}`)!;
         drop.forEach((d, i) => {
-          if (d && i < g.n) mask.node[i] = 1;
+          if (d && i < g.n) mask.node[index(i)] = 1;
         });
-        const rebuilt = design(spec, (i) => !mask.node[i]);
+        const rebuilt = design(spec, (i) => !mask.node[index(i)]);
         const n0 = g.n;
         const n1 = rebuilt.n;
         for (const m of applicable(g)) {

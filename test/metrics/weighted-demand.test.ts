@@ -7,6 +7,9 @@ import { expectRelative } from './families.js';
 
 const pos = { line: 0, column: 0 };
 
+/** Index of the link the sketch lists as `id` (links are numbered by their ends, not by the sketch's order). */
+const linkOf = (g: CompactGraph, id: string): number => g.linkIndex.get(id)!;
+
 interface LinkSpec {
   a: string;
   b: string;
@@ -101,8 +104,8 @@ describe('demand_served', () => {
     const evaluate = ds.create(g);
     const mask = createMask(g);
     expect(evaluate(mask)).toEqual({ raw: 45, normalized: 1 });
-    mask.link[1] = 1;
-    mask.link[3] = 1; // a-b | c-d
+    mask.link[linkOf(g, 'l1')] = 1;
+    mask.link[linkOf(g, 'l3')] = 1; // a-b | c-d
     expect(evaluate(mask)).toEqual({ raw: 5, normalized: 5 / 45 });
     mask.node[1] = 1;
     expect(evaluate(mask).raw).toBe(0);
@@ -110,7 +113,7 @@ describe('demand_served', () => {
   it('with a latency budget, the detour must stay within budget × the intact latency', () => {
     const g = ring();
     const mask = createMask(g);
-    mask.link[0] = 1; // a-b gone. a→c: intact 2 (a-b-c), now 6 (a-d-c); a→d: intact 3 (a-b-c-d), now 5.
+    mask.link[linkOf(g, 'l0')] = 1; // a-b gone. a→c: intact 2 (a-b-c), now 6 (a-d-c); a→d: intact 3 (a-b-c-d), now 5.
     // budget 1.5: a→c 6 > 3 and a→d 5 > 4.5, so only the self-demand b→b (5) is served.
     expect(ds.create(g, { latencyBudget: 1.5 })(mask).raw).toBe(5);
     // budget 2: a→d 5 ≤ 6 yes; a→c 6 ≤ 4 no.
@@ -123,7 +126,7 @@ describe('demand_served', () => {
   it("takes the design's latencyBudget unless the option overrides it, and hop counts without link costs", () => {
     const g = design(['a', 'b', 'c'], [{ a: 'a', b: 'b' }, { a: 'b', b: 'c' }, { a: 'a', b: 'c' }], [['a', 'c', 1]], 1.5);
     const mask = createMask(g);
-    mask.link[2] = 1; // a-c: 1 hop → 2 hops
+    mask.link[linkOf(g, 'l2')] = 1; // a-c: 1 hop → 2 hops
     expect(ds.create(g)(mask).raw).toBe(0);
     expect(ds.create(g, { latencyBudget: 2 })(mask).raw).toBe(1);
   });

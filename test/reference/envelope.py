@@ -9,7 +9,8 @@ graphs from networkx's own generators) it records the edge list, the removal seq
 curve of every targeted attack, and brute-force worst removal sets. Conventions are netbrace's:
 - R values use the ORIGINAL node count N0 (largest component / N0; connected pairs / C(N0, 2);
   efficiency = sum over ordered pairs of 1/d divided by N0(N0 - 1)).
-- Ties go to the lowest node (or link) index. Floating-point scores are compared after
+- Ties go to the lowest node (or link) index; links are indexed in netbrace's canonical order,
+  by (smaller end, larger end). Floating-point scores are compared after
   rounding to 2**-32 of the largest score among the candidates: q = floor(s / max * 2**32 + 0.5).
 - Adaptive attacks recompute the score on the whole surviving graph after every removal
   (netbrace recomputes only the component that held the removed element; this checks it).
@@ -146,7 +147,8 @@ def describe(name, source, G, with_efficiency):
     H.add_nodes_from(range(G.number_of_nodes()))
     H.add_edges_from(G.edges())
     G = H
-    edges = [list(e) for e in G.edges()]
+    # Links numbered as netbrace numbers them (src/graph/canonical.ts): by smaller end, then larger.
+    edges = sorted(sorted(e) for e in G.edges())
     index = {frozenset(e): i for i, e in enumerate(edges)}
     entry = {'name': name, 'source': source, 'n': G.number_of_nodes(), 'edges': edges, 'attacks': {}}
     names = ['degree', 'degree-adaptive', 'betweenness', 'betweenness-adaptive', 'closeness']

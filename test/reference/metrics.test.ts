@@ -149,7 +149,8 @@ describe(`demand_served against networkx ${ref.libraries.networkx} shortest path
       const options: MetricOptions = { latencyBudget: c.latencyBudget };
       const plain = designOf(r, c, undefined);
       const mask = createMask(plain);
-      for (const e of c.removedLinks) mask.link[e] = 1;
+      // Reference edge e is link "e<e>" (the compact graph numbers links by their ends).
+      for (const e of c.removedLinks) mask.link[plain.linkIndex.get(`e${e}`)!] = 1;
       const served = getMetric('demand_served').create(plain)(mask);
       close(served.raw, c.served.value, 1e-12, 'served volume');
       close(served.normalized, c.served.normalized, 1e-12, 'served share');

@@ -10,7 +10,7 @@
 import type { Command, CommandIO } from '../io.js';
 import { finiteNumber, parseCommandArgs, wholeNumber } from '../args.js';
 import { DesignError, UsageError } from '../../errors.js';
-import { compileTopology, type CompactGraph } from '../../graph/compact.js';
+import { compileTopology, nodesByLine, type CompactGraph } from '../../graph/compact.js';
 import { createMask } from '../../graph/mask.js';
 import { findComponents, findCutElements } from '../../graph/structure.js';
 import { createRValue, rPasses, unsupportedMetric, type RFunction } from '../../envelope/r-value.js';
@@ -103,6 +103,8 @@ export function rankSingleLosses(
   const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
   let total = 0;
   for (const k of kinds) total += only ? (only.get(k)?.size ?? 0) : countOnes(eligible.get(k)!);
+  // Lists and ties follow the file, the order a planner reads it in.
+  const byLine = nodesByLine(g, g.nodeIds.keys());
   const out: (Omit<SingleLoss, 'rank' | 'label'> & { order: number })[] = [];
   let done = 0;
   for (const kind of kinds) {
@@ -118,7 +120,7 @@ export function rankSingleLosses(
       const r = rfn(mask);
       const comps = findComponents(g, mask);
       const cutsOff: string[] = [];
-      for (let v = 0; v < g.n; v++) if (comps.label[v] >= 0 && comps.label[v] !== comps.largest) cutsOff.push(g.nodeIds[v]);
+      for (const v of byLine) if (comps.label[v] >= 0 && comps.label[v] !== comps.largest) cutsOff.push(g.nodeIds[v]);
       restoreUnit(g, mask, kind, u);
       evaluated[kind]++;
       out.push({
@@ -134,7 +136,7 @@ export function rankSingleLosses(
       onStep(++done, total);
     }
   }
-  out.sort((a, b) => a.r - b.r || a.order - b.order);
+  out.sort((a, b) => a.r - b.r || kinds.indexOf(a.kind) - kinds.indexOf(b.kind) || a.line - b.line || a.order - b.order);
   return { intact, evaluated, hardened, ranked: out.map(({ order: _order, ...rest }) => rest) };
 }
 

@@ -6,7 +6,7 @@ import { parseCommandArgs, wholeNumber } from '../args.js';
 import { formatDiagnostic, isNetbraceError, UsageError, type Diagnostic } from '../../errors.js';
 import type { Topology } from '../../topology/model.js';
 import { parseFormatName, FORMAT_CHOICES } from '../../topology/detect.js';
-import { compileTopology } from '../../graph/compact.js';
+import { compileTopology, linksByLine, nodesByLine } from '../../graph/compact.js';
 import { findComponents, findCutElements } from '../../graph/structure.js';
 import { readDesign, type ReadDesignOptions } from '../read-design.js';
 
@@ -78,9 +78,10 @@ export function summarize(t: Topology): InspectSummary {
     component_sizes: [...comps.sizes].sort((a, b) => b - a),
     // Mean degree 2L/N (each parallel link counts), rounded to 3 decimals.
     degree: { min, mean: g.n > 0 ? Math.round((2 * g.m * 1000) / g.n) / 1000 : 0, max },
-    bridges: cuts.bridges.map((e) => g.linkIds[e]),
-    cut_nodes: cuts.cutNodes.map((v) => g.nodeIds[v]),
-    isolated,
+    // Listed as the file lists them.
+    bridges: linksByLine(g, cuts.bridges).map((e) => g.linkIds[e]),
+    cut_nodes: nodesByLine(g, cuts.cutNodes).map((v) => g.nodeIds[v]),
+    isolated: nodesByLine(g, isolated.map((id) => g.nodeIndex.get(id)!)).map((v) => g.nodeIds[v]),
     warnings: t.warnings.map((w: Diagnostic) => ({
       line: w.line,
       column: w.column,
