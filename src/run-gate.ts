@@ -26,6 +26,7 @@ import { DEFAULT_POLICY_PATH } from './policy/defaults.js';
 import { builtinPolicy, isDesignPath, loadPolicy, policyForFile } from './policy/resolve.js';
 import type { FilePolicy, Policy } from './policy/types.js';
 import { CAUTION, REPORT_VERSION, type FileReport, type Report } from './report/report.js';
+import { addMapAndMend } from './map-mend-step.js';
 import { parseDesign } from './topology/parse.js';
 import { VERSION } from './version.js';
 
@@ -75,6 +76,9 @@ export interface GateRequest {
   shard?: { index: number; total: number };
   /** Scheduled runs judge every design against thresholds only. */
   eventKind?: 'pull-request' | 'push' | 'schedule' | 'local';
+  /** Draw each design's map (default true), and search what would mend a design: when it fails (default), always, or never. */
+  map?: boolean;
+  mend?: 'failing' | 'always' | 'never';
 }
 
 export interface GateResult {
@@ -280,7 +284,7 @@ function compileText(text: string, path: string, fp: FilePolicy): { graph: Compa
   }
 }
 
-async function evaluateGraph(g: CompactGraph, specs: EvaluationSpec[], cuts: readonly PairedCut[], request: GateRequest, deps: GateDeps): Promise<DesignSide> {
+export async function evaluateGraph(g: CompactGraph, specs: EvaluationSpec[], cuts: readonly PairedCut[], request: GateRequest, deps: GateDeps): Promise<DesignSide> {
   const evaluate = deps.evaluate ?? ((graph: CompactGraph, spec: EvaluationSpec) => evaluateDesign(graph, spec));
   const parts: DesignEvaluation[] = [];
   for (const [i, spec] of specs.entries()) {
@@ -356,7 +360,9 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
         }
       }
     }
-    files.push(compareDesign(input));
+    const judged = compareDesign(input);
+    await addMapAndMend(judged, input, { request, deps, head, ...(base !== undefined ? { base } : {}), seed });
+    files.push(judged);
   }
 
   const report: Report = {

@@ -149,6 +149,21 @@ export interface Override {
   where: Where;
 }
 
+/** How to look for what would mend a failing design (advice only; never changes a verdict). */
+export interface MendSettings {
+  /** Repository path of the planner's candidate-link file. */
+  candidates?: string;
+  /** Generated candidates: great-circle distance × this factor. */
+  routeFactor?: number;
+  /** Generated candidates: most great-circle km between the two sites. */
+  maxKm?: number;
+  /** Most links one suggestion adds. */
+  maxLinks?: number;
+  /** Most engine evaluations per failing design; 0: no search. */
+  evaluations?: number;
+  where?: Where;
+}
+
 /** One policy file as written (before `extends` and overrides are applied). */
 export interface PolicyFile {
   path: string;
@@ -164,6 +179,7 @@ export interface PolicyFile {
   regression?: RegressionRule;
   removedDesigns?: { severity: RemovedSeverity; where: Where };
   budget?: Budget;
+  mend?: MendSettings;
   overrides: Override[];
 }
 
@@ -182,6 +198,8 @@ export interface Policy {
   regression: RegressionRule;
   removedDesigns: { severity: RemovedSeverity; where?: Where };
   budget: Budget;
+  /** Mend settings, the extending file's keys over the extended file's. */
+  mend?: MendSettings;
   /** Overrides of every file of the chain, the most basic file's first. */
   overrides: PolicyOverride[];
   /** Depth of the file each definition came from (0 = the most basic): a definition may
@@ -203,4 +221,5 @@ export interface FilePolicy {
   removedDesigns: RemovedSeverity;
   budget: ResolvedBudget;
   format?: DesignFormat;
+  mend?: MendSettings;
 }

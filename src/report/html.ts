@@ -27,6 +27,8 @@ import {
 } from './labels.js';
 import type { Evaluation, FileReport, Report, ReportElement, RequirementResult } from './report.js';
 import { escapeHtml } from './escape.js';
+import { mapHtml } from './map-html.js';
+import { mendHtml } from './mend-text.js';
 
 const esc = (s: string | number) => escapeHtml(String(s));
 
@@ -199,6 +201,7 @@ function designSection(f: FileReport, index: number): string {
   if (changed) out.push(`<p class="facts changes"><strong>What the change does:</strong> ${esc(changed)}</p>`);
   const lines = elementLines(f);
   if (f.head && f.head.envelopes.length) out.push(charts(f, id));
+  out.push(mapHtml(f, id));
   if (f.requirements.length) out.push(requirementTable(f.requirements, id));
   const findings = groupFindings(bySeverity(f.findings.filter((x) => x.rule !== 'weakest-sequence')));
   const work = findings.filter((x) => x.severity !== 'notice');
@@ -212,6 +215,7 @@ function designSection(f: FileReport, index: number): string {
   }
   out.push(weakest(f, lines));
   out.push(structure(f));
+  out.push(mendHtml(f, id));
   out.push('</section>');
   return out.filter(Boolean).join('\n');
 }

@@ -3,6 +3,8 @@
 // reports of older versions. Keep it deterministic: no timings, no absolute paths, no dates.
 
 import type { AttackCurve, Contingency, Envelope, RValueSpec } from '../envelope/types.js';
+import type { DesignMap, OmittedMap } from '../map/types.js';
+import type { MendReport } from '../mend/types.js';
 
 export const REPORT_VERSION = 1;
 
@@ -100,6 +102,10 @@ export interface FileReport {
   error?: { message: string; line: number; column: number };
   /** Elements added and removed by the change (nodes by id, links by their ends), head lines for added, base lines for removed. */
   changes?: { added: ReportElement[]; removed: ReportElement[] };
+  /** Where each site and link is drawn, base and head together (src/map/). */
+  map?: DesignMap | OmittedMap;
+  /** For a failing design: what would mend it (src/mend/). */
+  mend?: MendReport;
 }
 
 export interface Report {
