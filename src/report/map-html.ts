@@ -19,7 +19,7 @@ export function mapHtml(f: FileReport, id: string): string {
     const caption = [
       map.layout === 'geographic' ? 'Sites at their coordinates.' : 'Positions from a force-directed layout: they show how sites are linked, not where they are.',
       f.base ? 'Base and head together: removed links dashed, added links doubled.' : '',
-      h.weakest.length ? `Numbers: the weakest removal sequence${h.weakestTitle ? ` (${h.weakestTitle})` : ''}.` : '',
+      h.weakest.length ? `Numbers: the weakest removal sequence${h.weakestTitle ? `, ${h.weakestTitle.charAt(0).toLowerCase()}${h.weakestTitle.slice(1)}` : ''}.` : '',
       h.proposed.length ? 'Dotted: the links of the first suggestion below.' : '',
       'Hover an element for its name, id and line.',
     ].filter(Boolean);

@@ -227,7 +227,7 @@ export function renderMapSvg(map: DesignMap, h: MapHighlights, options: { idPref
 
   // Legend: only what the map shows.
   const items = legend(C).filter((it) => used.has(it.key));
-  const perRow = 3;
+  const perRow = 2;
   const rows = Math.ceil(items.length / perRow);
   const height = map.height + (rows ? rows * LEGEND_ROW + 14 : 0);
   const colW = map.width / perRow;

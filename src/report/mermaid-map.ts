@@ -67,7 +67,7 @@ export function neighbourhoodMermaid(f: FileReport): string {
   const name = new Map(nodes.map((n, i) => [n.id, `n${i}`]));
   const lines: string[] = ['```mermaid', 'graph LR'];
   for (const n of nodes) {
-    const label = mermaidLabel(n.id);
+    const label = mermaidLabel(n.label ?? n.id);
     const shape = newCuts.has(n.id) ? `{{"${label}"}}` : n.side === 'head' ? `(["${label}"])` : n.side === 'base' ? `[/"${label}"/]` : `("${label}")`;
     lines.push(`  ${name.get(n.id)}${shape}`);
   }

@@ -9,6 +9,7 @@ import { UsageError } from '../../errors.js';
 import { applyToText } from '../../mend/apply.js';
 import { oneLine } from '../../report/escape.js';
 import { renderMendText } from '../../report/mend-text.js';
+import { REPORT_DIGITS } from '../../report/report.js';
 import { parseDesign } from '../../topology/parse.js';
 import type { DesignFormat } from '../../topology/model.js';
 import type { Command, CommandIO } from '../io.js';
@@ -58,6 +59,15 @@ Exit codes:
   2  usage or configuration error (bad option, broken policy, --apply on another format)
 `;
 
+/** Numbers as the JSON report writes them (serializeReport): 12 significant digits, so both agree. */
+function reportNumber(_key: string, value: unknown): unknown {
+  if (typeof value !== 'number') return value;
+  if (!Number.isFinite(value)) return null;
+  if (Number.isInteger(value)) return value;
+  const rounded = Number(value.toPrecision(REPORT_DIGITS));
+  return Object.is(rounded, -0) ? 0 : rounded;
+}
+
 async function run(args: string[], io: CommandIO): Promise<number> {
   const { values, positionals } = parseCommandArgs('mend', args, {
     ...ONE_DESIGN_OPTIONS,
@@ -76,7 +86,7 @@ async function run(args: string[], io: CommandIO): Promise<number> {
     return 1;
   }
   const m = f.mend;
-  if (values.json) io.stdout(`${JSON.stringify(m ?? null, null, 2)}\n`);
+  if (values.json) io.stdout(`${JSON.stringify(m ?? null, reportNumber, 2)}\n`);
   else io.stdout(renderMendText(f));
   if (!m) return 0;
   const holdsAlready = m.targets.length === 0 && !f.findings.some((x) => x.severity === 'fail');
