@@ -23,7 +23,6 @@ import type { Topology } from './topology/model.js';
 export const MEND_MAX_EVALUATIONS = 10;
 export const MEND_BUDGET_FACTOR = 4;
 export const MEND_MIN_EVALUATIONS = 2;
-export const MEND_MAX_LINKS = 3;
 
 export interface StepContext {
   request: GateRequest;
@@ -119,7 +118,7 @@ export async function addMapAndMend(report: FileReport, input: CompareInput, ctx
     graph: g,
     report,
     candidates,
-    maxLinks: settings.maxLinks ?? MEND_MAX_LINKS,
+    ...(settings.maxLinks !== undefined ? { maxLinks: settings.maxLinks } : {}),
     maxEvaluations,
     judge,
     ...(settings.candidates !== undefined ? { candidatePath: settings.candidates } : {}),

@@ -26,6 +26,8 @@ export const DEFAULT_ROUTE_FACTOR = 1.3;
 /** Generated candidates when coordinates are missing: every pair up to this many sites, else pairs within MAX_HOPS. */
 export const ALL_PAIRS_LIMIT = 300;
 export const MAX_HOPS = 3;
+/** With coordinates: every pair up to this many located sites, else pairs within MAX_HOPS hops (and the distance limit). */
+export const GEO_ALL_PAIRS_LIMIT = 2000;
 /** Most generated candidates kept (the nearest first). */
 export const MAX_GENERATED = 20_000;
 
@@ -197,15 +199,16 @@ export function generateCandidates(g: CompactGraph, options: CandidateOptions = 
   for (let v = 0; v < g.n; v++) if (hasCoords(v)) located.push(v);
   if (located.length >= 2) {
     const maxKm = options.maxKm ?? longestSpanKm(g);
-    for (let i = 0; i < located.length; i++) {
-      for (let j = i + 1; j < located.length; j++) {
-        const a = located[i];
-        const b = located[j];
-        if (joined.has(a * g.n + b)) continue;
-        const d = greatCircleKm(g.lat![a], g.lon![a], g.lat![b], g.lon![b]);
-        if (!(d <= maxKm)) continue;
-        list.push({ a, b, lengthKm: Math.round(d * routeFactor * 10) / 10, source: 'generated' });
-      }
+    const consider = (a: number, b: number) => {
+      if (joined.has(a * g.n + b)) return;
+      const d = greatCircleKm(g.lat![a], g.lon![a], g.lat![b], g.lon![b]);
+      if (d <= maxKm) list.push({ a, b, lengthKm: Math.round(d * routeFactor * 10) / 10, source: 'generated' });
+    };
+    if (located.length <= GEO_ALL_PAIRS_LIMIT) {
+      for (let i = 0; i < located.length; i++) for (let j = i + 1; j < located.length; j++) consider(located[i], located[j]);
+    } else {
+      for (const [a, b] of nearPairs(g)) if (hasCoords(a) && hasCoords(b)) consider(a, b);
+      notes.push(`${located.length} located sites: only pairs within ${MAX_HOPS} hops were considered`);
     }
     list.sort((x, y) => x.lengthKm! - y.lengthKm! || x.a - y.a || x.b - y.b);
     if (list.length > MAX_GENERATED) {
@@ -220,29 +223,42 @@ export function generateCandidates(g: CompactGraph, options: CandidateOptions = 
     for (let a = 0; a < g.n; a++) for (let b = a + 1; b < g.n; b++) if (!joined.has(a * g.n + b)) list.push({ a, b, source: 'generated' });
     notes.push('the design has no coordinates: every pair of sites not yet joined is a candidate, and lengths are unknown');
   } else {
-    const dist = new Int32Array(g.n);
-    const queue = new Int32Array(g.n);
-    for (let a = 0; a < g.n && list.length < MAX_GENERATED; a++) {
-      dist.fill(-1);
-      let head = 0;
-      let tail = 0;
-      queue[tail++] = a;
-      dist[a] = 0;
-      while (head < tail) {
-        const v = queue[head++];
-        if (dist[v] >= MAX_HOPS) continue;
-        for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
-          const w = g.neighbors[p];
-          if (dist[w] !== -1) continue;
-          dist[w] = dist[v] + 1;
-          queue[tail++] = w;
-        }
-      }
-      for (let b = a + 1; b < g.n; b++) if (dist[b] >= 2 && list.length < MAX_GENERATED) list.push({ a, b, source: 'generated' });
-    }
+    for (const [a, b] of nearPairs(g)) list.push({ a, b, source: 'generated' });
     notes.push(`the design has no coordinates: site pairs within ${MAX_HOPS} hops are the candidates, and lengths are unknown`);
   }
   return { list, unit: 'link', source: 'generated', notes };
+}
+
+/** Pairs a < b at 2 to MAX_HOPS hops, in order of a then b, at most MAX_GENERATED (the BFS touches only what it reaches). */
+function nearPairs(g: CompactGraph): [number, number][] {
+  const out: [number, number][] = [];
+  const dist = new Int32Array(g.n).fill(-1);
+  const queue = new Int32Array(g.n);
+  for (let a = 0; a < g.n && out.length < MAX_GENERATED; a++) {
+    let head = 0;
+    let tail = 0;
+    queue[tail++] = a;
+    dist[a] = 0;
+    while (head < tail) {
+      const v = queue[head++];
+      if (dist[v] >= MAX_HOPS) continue;
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+        const w = g.neighbors[p];
+        if (dist[w] !== -1) continue;
+        dist[w] = dist[v] + 1;
+        queue[tail++] = w;
+      }
+    }
+    const near: number[] = [];
+    for (let i = 0; i < tail; i++) {
+      const b = queue[i];
+      if (b > a && dist[b] >= 2) near.push(b);
+    }
+    near.sort((x, y) => x - y);
+    for (const b of near) if (out.length < MAX_GENERATED) out.push([a, b]);
+    for (let i = 0; i < tail; i++) dist[queue[i]] = -1;
+  }
+  return out;
 }
 
 function round1(x: number): number {

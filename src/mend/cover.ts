@@ -21,6 +21,8 @@ import { bridgeForest } from './bridge-tree.js';
 
 export const BRANCH_WIDTH = 8;
 export const MAX_EXPANSIONS = 3000;
+/** Element visits the search may spend in all (each state costs one pass over the design). */
+export const MAX_VISITS = 5e7;
 
 export interface CoverProblem {
   g: CompactGraph;
@@ -61,6 +63,13 @@ interface Residual {
 }
 
 export function solveCover(p: CoverProblem): CoverResult {
+  const maxExpansions = Math.max(20, Math.min(MAX_EXPANSIONS, Math.floor(MAX_VISITS / Math.max(1, p.g.n + p.g.m))));
+  // Candidates by end node, so a leaf's candidates are found without a pass over all of them.
+  const byNode: number[][] = Array.from({ length: p.g.n }, () => []);
+  p.pairs.forEach(([a, b], c) => {
+    byNode[a].push(c);
+    if (b !== a) byNode[b].push(c);
+  });
   let expansions = 0;
   let truncated = false;
   let incompleteBelow = false;
@@ -98,25 +107,39 @@ export function solveCover(p: CoverProblem): CoverResult {
         adj[a].push(b);
         adj[b].push(a);
       }
-      let bestLeaf = -1;
-      let bestList: number[] = [];
-      let bestDist: Int32Array | null = null;
-      for (let leaf = 0; leaf < f.pieces; leaf++) {
-        if (f.degree[leaf] !== 1) continue;
+      // Nodes of each leaf piece; the leaf with the fewest useful candidates is branched on.
+      const members = new Map<number, number[]>();
+      for (let v = 0; v < r.g.n; v++) {
+        const pc = f.piece[v];
+        if (f.degree[pc] === 1) (members.get(pc) ?? members.set(pc, []).get(pc)!).push(v);
+      }
+      const treeOf = (leaf: number) => {
         const dist = new Int32Array(f.pieces).fill(-1);
         const queue = [leaf];
         dist[leaf] = 0;
         for (let h = 0; h < queue.length; h++) for (const w of adj[queue[h]]) if (dist[w] === -1) (dist[w] = dist[queue[h]] + 1), queue.push(w);
+        return dist;
+      };
+      let bestLeaf = -1;
+      let bestList: number[] = [];
+      let bestDist: Int32Array | null = null;
+      for (const [leaf, nodes] of [...members.entries()].sort((a, b) => a[0] - b[0])) {
+        const dist = treeOf(leaf);
         const list: number[] = [];
-        for (let c = 0; c < p.pairs.length; c++) {
-          if (used.has(c)) continue;
-          const [a, b] = p.pairs[c];
-          const pa = f.piece[a];
-          const pb = f.piece[b];
-          if ((pa === leaf) === (pb === leaf)) continue;
-          const other = pa === leaf ? pb : pa;
-          if (dist[other] > 0) list.push(c);
+        const seenHere = new Set<number>();
+        for (const v of nodes) {
+          for (const c of byNode[v]) {
+            if (used.has(c) || seenHere.has(c)) continue;
+            seenHere.add(c);
+            const [a, b] = p.pairs[c];
+            const pa = f.piece[a];
+            const pb = f.piece[b];
+            if ((pa === leaf) === (pb === leaf)) continue;
+            const other = pa === leaf ? pb : pa;
+            if (dist[other] > 0) list.push(c);
+          }
         }
+        list.sort((x, y) => x - y);
         if (bestLeaf < 0 || list.length < bestList.length) {
           bestLeaf = leaf;
           bestList = list;
@@ -162,6 +185,7 @@ export function solveCover(p: CoverProblem): CoverResult {
   };
 
   let depthComplete = true;
+  let everIncomplete = false;
   const seen = new Set<string>();
   const dfs = (set: number[], r: Residual, limit: number) => {
     if (r.bridges.length === 0 && r.cutNodes.length === 0) {
@@ -181,7 +205,7 @@ export function solveCover(p: CoverProblem): CoverResult {
     const { list, cut } = children(set, r);
     if (cut) depthComplete = false;
     for (const c of list) {
-      if (expansions >= MAX_EXPANSIONS) {
+      if (expansions >= maxExpansions) {
         truncated = true;
         depthComplete = false;
         return;
@@ -199,6 +223,7 @@ export function solveCover(p: CoverProblem): CoverResult {
     depthComplete = true;
     seen.clear();
     dfs([], root, limit);
+    if (!depthComplete) everIncomplete = true;
     if (found.size > 0) break;
     if (!depthComplete) incompleteBelow = true;
     if (truncated) break;
@@ -206,8 +231,10 @@ export function solveCover(p: CoverProblem): CoverResult {
   const sets = [...found.values()].sort((a, b) => a.price - b.price || (a.set.join(',') < b.set.join(',') ? -1 : 1)).map((x) => x.set);
   if (sets.length === 0) {
     const reason = truncated
-      ? `no set of at most ${p.maxLinks} candidate links was found within the search limit (${MAX_EXPANSIONS} states)`
-      : `no set of at most ${p.maxLinks} candidate links removes them all`;
+      ? `no set of at most ${p.maxLinks} candidate links was found within the search limit (${maxExpansions} states)`
+      : everIncomplete
+        ? `no set of at most ${p.maxLinks} candidate links was found among the ${BRANCH_WIDTH} best-ranked choices at each step`
+        : `no set of at most ${p.maxLinks} candidate links does it`;
     return { sets, lowerBound, minimal: false, truncated, expansions, reason };
   }
   const size = sets[0].length;

@@ -31,12 +31,16 @@ import { solveCover } from './cover.js';
 import { fiedler, ghoshBoydScore } from './fiedler.js';
 import type { MendLink, MendReport, MendRequirement, MendSuggestion, MendTarget } from './types.js';
 
+/** Most links one suggestion adds when the policy does not say (see MendContext.maxLinks). */
+export const DEFAULT_MAX_LINKS = 3;
 /** Candidates judged by the engine per greedy step. */
 export const GREEDY_POOL = 3;
 /** Structural sets judged by the engine. */
 export const STRUCTURAL_KEEP = 3;
 /** Link suggestions kept in the report. */
 export const SUGGESTIONS_KEPT = 5;
+/** Above this many sites candidates are not ranked by Ghosh–Boyd (the eigenvector costs too much); ties then go by price. */
+export const FIEDLER_LIMIT = 20_000;
 
 export const R_DEFINITION =
   'R\u0304: the mean area of the policy\u2019s random-failure envelopes (the mean of each median R over its grid); without envelopes, of its attack curves';
@@ -50,8 +54,8 @@ export interface MendContext {
   /** The head's judged report (compareDesign). */
   report: FileReport;
   candidates: CandidateSet;
-  /** Most links one suggestion may add. */
-  maxLinks: number;
+  /** Most links one suggestion may add; default: DEFAULT_MAX_LINKS, or one more than the Eswaran–Tarjan bound of the new bridges when that is larger. */
+  maxLinks?: number;
   /** Most engine evaluations the search may run (the hardening alternative included). */
   maxEvaluations: number;
   /** The design with a change applied, judged as `check` judges it. */
@@ -156,6 +160,7 @@ export async function mendDesign(ctx: MendContext): Promise<MendReport> {
     notes,
   };
   if (bridgeTargets.length > 0) out.bounds.newBridges = eswaranTarjanBound(g, bridgeTargets);
+  const maxLinks = ctx.maxLinks ?? Math.max(DEFAULT_MAX_LINKS, (out.bounds.newBridges?.links ?? 0) + 1);
   if (targets.length === 0) {
     notes.push('nothing to mend: no failing or warning finding that a change to the design can fix');
     return out;
@@ -201,8 +206,14 @@ export async function mendDesign(ctx: MendContext): Promise<MendReport> {
 
   const prices = cand.list.map((c) => price(c, cand.unit));
   const pairs = cand.list.map((c) => [c.a, c.b] as const);
-  const baseFiedler = fiedler(g);
-  const scores = pairs.map(([a, b]) => ghoshBoydScore(baseFiedler, a, b));
+  const ranked = g.n <= FIEDLER_LIMIT;
+  if (!ranked) notes.push(`more than ${FIEDLER_LIMIT} sites: candidates are not ranked by algebraic connectivity`);
+  const scoreOf = (extra: readonly number[]) => {
+    if (!ranked) return pairs.map(() => 0);
+    const f = fiedler(g, extra.map((c) => pairs[c]));
+    return pairs.map(([a, b]) => ghoshBoydScore(f, a, b));
+  };
+  const scores = scoreOf([]);
   // Keep one evaluation for the hardening alternative.
   const hardenTargets = hardenSet(targets);
   const linkBudget = () => ctx.maxEvaluations - (hardenTargets.length > 0 ? 1 : 0);
@@ -210,6 +221,7 @@ export async function mendDesign(ctx: MendContext): Promise<MendReport> {
 
   let start: number[][] = [[]];
   let structuralMethod = '';
+  let structuralFailed = false;
   if ((bridgeTargets.length > 0 || cutTargets.length > 0) && cand.list.length > 0) {
     const cover = solveCover({
       g,
@@ -218,11 +230,12 @@ export async function mendDesign(ctx: MendContext): Promise<MendReport> {
       score: scores,
       bridges: bridgeTargets,
       cutNodes: cutTargets,
-      maxLinks: ctx.maxLinks,
+      maxLinks,
       keep: STRUCTURAL_KEEP,
     });
     if (cover.sets.length === 0) {
-      notes.push(`the candidate links cannot remove every new bridge and cut node: ${cover.reason}`);
+      notes.push(`no link suggestion removes every new bridge and cut site: ${cover.reason}`);
+      structuralFailed = true;
     } else {
       const size = cover.sets[0].length;
       const bound = out.bounds.newBridges?.links;
@@ -239,7 +252,8 @@ export async function mendDesign(ctx: MendContext): Promise<MendReport> {
     notes.push('there are no candidate links to try');
   }
 
-  if (cand.list.length > 0) {
+  // Without a structural fix the design cannot hold: links are not searched further.
+  if (cand.list.length > 0 && !structuralFailed) {
     for (const set of start) {
       if (set.length === 0) continue;
       if (out.evaluations >= linkBudget()) break;
@@ -254,19 +268,19 @@ export async function mendDesign(ctx: MendContext): Promise<MendReport> {
     let step = 0;
     while (!holds(current) && out.evaluations < linkBudget()) {
       const base = current?.candidates ?? (start[0].length === 0 ? [] : start[0]);
-      if (base.length >= ctx.maxLinks) break;
-      const f = fiedler(g, base.map((c) => pairs[c]));
+      if (base.length >= maxLinks) break;
+      const stepScores = base.length ? scoreOf(base) : scores;
       const inSet = new Set(base);
-      const ranked = cand.list
+      const pool = cand.list
         .map((_, c) => c)
         .filter((c) => !inSet.has(c))
-        .map((c) => ({ c, s: ghoshBoydScore(f, pairs[c][0], pairs[c][1]) }))
+        .map((c) => ({ c, s: stepScores[c] }))
         .sort((x, y) => y.s - x.s || prices[x.c] - prices[y.c] || x.c - y.c)
         .slice(0, GREEDY_POOL);
-      if (ranked.length === 0) break;
+      if (pool.length === 0) break;
       let best: Judged | null = null;
       step++;
-      for (const { c } of ranked) {
+      for (const { c } of pool) {
         if (out.evaluations >= linkBudget()) break;
         const j = await judgeSet([...base, c]);
         if (!j) break;
