@@ -113,7 +113,8 @@ export function renderMendText(f: FileReport): string {
   out.push(`  Candidates: ${plain(candidateWords(m))}`);
   out.push(`  ${m.rDefinition}; ${m.evaluations} engine evaluation${m.evaluations === 1 ? '' : 's'}`);
   out.push('');
-  if (!m.suggestions.length) out.push('  No suggestion: nothing tried removes a target.');
+  if (!m.targets.length) out.push('  Nothing to mend: no failing or warning finding that a change to the design can fix.');
+  else if (!m.suggestions.length) out.push('  No suggestion: nothing tried removes a target.');
   m.suggestions.forEach((s, i) => {
     out.push(`  ${plain(headline(s, i + 1))}`);
     for (const l of s.links) out.push(`       + ${plain(l.id)}: ${plain(linkWords(l))}`);
@@ -129,7 +130,7 @@ export function renderMendText(f: FileReport): string {
     }
     out.push('');
   });
-  for (const n of m.notes) out.push(`  Note: ${plain(n)}`);
+  for (const n of m.notes) if (m.targets.length || !n.startsWith('nothing to mend')) out.push(`  Note: ${plain(n)}`);
   out.push(`  Caution: ${MEND_CAUTION}`);
   return `${out.join('\n')}\n`;
 }

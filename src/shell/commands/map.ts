@@ -65,7 +65,7 @@ async function run(args: string[], io: CommandIO): Promise<number> {
   const changed = map.links.filter((l) => l.side !== 'both').length + map.nodes.filter((n) => n.side !== 'both').length;
   io.stdout(
     `map of ${oneLine(f.path)}: ${map.nodes.length} sites, ${map.links.length} links (${map.layout === 'geographic' ? 'at their coordinates' : 'force-directed layout'})` +
-      `${changed ? `, ${changed} elements changed` : ''}; written to ${oneLine(values.svg)}\n`,
+      `${changed ? `, ${changed} element${changed === 1 ? '' : 's'} changed` : ''}; written to ${oneLine(values.svg)}\n`,
   );
   return 0;
 }
