@@ -26,7 +26,7 @@ import {
   weakestSequences,
   xAxisLabel,
 } from './labels.js';
-import { neighbourhoodMermaid } from './mermaid-map.js';
+import { changeMapMarkdown } from './mermaid-map.js';
 import { rankFiles, rankFindings, worstSeverity } from './rank.js';
 import type { FileReport, FileStatus, Finding, Report, RequirementResult, Severity } from './report.js';
 
@@ -293,7 +293,7 @@ function fileSection(f: FileReport, detail: Detail, layout: Layout, path: (p: st
   }
   if (detail === 'full') {
     if (chart) for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign)) text += chartSection(f, env, layout.chartPoints);
-    text += neighbourhoodMermaid(f);
+    text += changeMapMarkdown(f);
     text += weakestSection(f);
     text += structureSection(f);
   }

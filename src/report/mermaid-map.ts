@@ -1,5 +1,6 @@
-// The neighbourhood of a change as a Mermaid graph for the pull-request summary and comment
-// (GitHub draws Mermaid; it allows no SVG). The sites and links the change adds or removes,
+// Where the change is and what would mend it, for the pull-request summary and comment: the
+// neighbourhood of the change as a Mermaid graph (GitHub draws Mermaid; it allows no SVG), and
+// one paragraph naming the first suggestions of FileReport.mend. The sites and links the change adds or removes,
 // its new bridges and cut sites, and their neighbours, while the picture stays legible
 // (MAX_ELEMENTS sites + links); beyond that, one sentence points to the HTML report's map.
 // Mermaid sees no user text as written: node ids are generated (n0, n1, …), and labels are
@@ -7,6 +8,9 @@
 // so an id cannot close a label, start a directive or inject a link.
 
 import type { MapLink } from '../map/types.js';
+import type { MendSuggestion } from '../mend/types.js';
+import { markdownCode } from './escape.js';
+import { formatValue } from './labels.js';
 import type { FileReport } from './report.js';
 
 /** Most sites + links drawn. */
@@ -101,4 +105,33 @@ export function neighbourhoodMermaid(f: FileReport): string {
     'Hexagons are new cut sites; thick links new bridges; dashed links removed, labelled ones added.' +
     (more > 0 ? ` ${more} more sites are not drawn; the HTML report has the whole map.` : '');
   return `**Where the change is**: the neighbourhood of the change.\n\n${lines.join('\n')}\n\n${legend}\n\n`;
+}
+
+function suggestionWords(s: MendSuggestion): string {
+  const what =
+    s.kind === 'links'
+      ? `add ${s.links
+          .map((l) => `${markdownCode(l.id, 80)} (${markdownCode(`${l.between[0]}\u2013${l.between[1]}`, 120)}${l.lengthKm !== undefined ? `, ${l.lengthKm} km` : ''}${l.cost !== undefined ? `, cost ${l.cost}` : ''})`)
+          .join(' and ')}`
+      : `harden ${s.harden.length} element${s.harden.length === 1 ? '' : 's'} (${s.harden.slice(0, 6).map((e) => markdownCode(e.id, 80)).join(', ')}${s.harden.length > 6 ? ', \u2026' : ''})`;
+  const r = s.rBefore !== null && s.rAfter !== null ? `, R\u0304 ${formatValue(s.rBefore)} \u2192 ${formatValue(s.rAfter)}` : '';
+  return `${what}: ${s.holds ? 'holds' : 'does not hold on its own'}${r}`;
+}
+
+/** One paragraph: the best link suggestion and the hardening alternative, judged by the gate. */
+export function mendMarkdown(f: FileReport): string {
+  const m = f.mend;
+  if (!m || m.targets.length === 0) return '';
+  const links = m.suggestions.find((s) => s.kind === 'links');
+  const harden = m.suggestions.find((s) => s.kind === 'harden');
+  const parts = [links ? suggestionWords(links) : 'no link suggestion', ...(harden ? [`or ${suggestionWords(harden)}`] : [])];
+  return (
+    `**What would mend it**, each judged again by the same gate: ${parts.join('; ')}. ` +
+    'The HTML report (or `netbrace mend`) has every suggestion, the YAML to add and the caution: a suggestion is a topology-level hint, not a route survey.\n\n'
+  );
+}
+
+/** The section the summary shows per design: where the change is, and what would mend it. */
+export function changeMapMarkdown(f: FileReport): string {
+  return neighbourhoodMermaid(f) + mendMarkdown(f);
 }

@@ -59,6 +59,14 @@ describe('the Mermaid neighbourhood of the change', () => {
     expect(renderComment(report, { key: 'k' })).toContain('**Where the change is**');
   });
 
+  it('names the first suggestion and the hardening alternative below the graph', () => {
+    const md = renderSummary(report);
+    const line = md.split('\n').find((l) => l.startsWith('**What would mend it**'))!;
+    expect(line).toBeDefined();
+    expect(line).toMatch(/add `[^`]+` \(`(harbour–orchard|orchard–harbour)`\): holds, R̄ \d\.\d{3} → \d\.\d{3}; or harden 9 elements/);
+    expect(line).toContain('not a route survey');
+  });
+
   it('gives a sentence pointing to the HTML report when the change is too large to draw', () => {
     const n = 30;
     const map: DesignMap = {
