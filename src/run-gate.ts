@@ -30,6 +30,7 @@ import { builtinPolicy, designFormat, globsMatch, isDesignPath, loadPolicy, poli
 import type { FilePolicy, Policy } from './policy/types.js';
 import { CAUTION, REPORT_VERSION, type FileReport, type Report } from './report/report.js';
 import type { DesignFormat } from './topology/model.js';
+import { addMapAndMend } from './map-mend-step.js';
 import { parseDesign } from './topology/parse.js';
 import type { Topology } from './topology/model.js';
 import { unsupportedMetric } from './envelope/r-value.js';
@@ -89,6 +90,9 @@ export interface GateRequest {
   part?: { index: number; total: number };
   /** Scheduled runs judge every design against thresholds only. */
   eventKind?: 'pull-request' | 'push' | 'schedule' | 'local';
+  /** Draw each design's map (default true), and search what would mend a design: when it fails (default), always, or never. */
+  map?: boolean;
+  mend?: 'failing' | 'always' | 'never';
 }
 
 export interface GateResult {
@@ -466,9 +470,9 @@ function compileText(
   }
 }
 
-async function evaluateGraph(
+export async function evaluateGraph(
   g: CompactGraph,
-  topology: Topology,
+  topology: Topology | undefined,
   specs: EvaluationSpec[],
   cuts: readonly PairedCut[],
   request: GateRequest,
@@ -557,7 +561,9 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
         }
       }
     }
-    files.push(compareDesign(input));
+    const judged = compareDesign(input);
+    await addMapAndMend(judged, input, { request, deps, head, ...(base !== undefined ? { base } : {}), seed });
+    files.push(judged);
   }
 
   const report: Report = {

@@ -18,6 +18,7 @@ import { describePath as describe, throwSchemaErrors } from './schema-errors.js'
 import type {
   Budget,
   ChallengeDef,
+  MendSettings,
   DesignGlob,
   PolicyFile,
   RemovalOrder,
@@ -308,6 +309,23 @@ class FileBuilder {
     return budget;
   }
 
+  mend(raw: Obj | undefined): MendSettings | undefined {
+    if (raw === undefined) return undefined;
+    const m: MendSettings = { where: this.at(['mend'], true) };
+    if (raw.candidates !== undefined) {
+      const c = String(raw.candidates).replace(/\\/g, '/');
+      if (c.startsWith('/') || /^[A-Za-z]:\//.test(c) || c.split('/').includes('..')) {
+        this.fail(`"mend.candidates" must be a path inside the repository, not ${c}`, ['mend', 'candidates'], 'write it from the repository root, e.g. planning/candidate-links.yaml');
+      }
+      m.candidates = c.split('/').filter((s) => s !== '' && s !== '.').join('/');
+    }
+    if (raw['route-factor'] !== undefined) m.routeFactor = raw['route-factor'] as number;
+    if (raw['max-km'] !== undefined) m.maxKm = raw['max-km'] as number;
+    if (raw['max-links'] !== undefined) m.maxLinks = raw['max-links'] as number;
+    if (raw.evaluations !== undefined) m.evaluations = raw.evaluations as number;
+    return m;
+  }
+
   removed(raw: unknown, path: readonly Segment[]): { severity: RemovedSeverity; where: Where } | undefined {
     return raw === undefined ? undefined : { severity: raw as RemovedSeverity, where: this.at(path) };
   }
@@ -409,6 +427,8 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   if (removed) policy.removedDesigns = removed;
   const budget = b.budget(raw.budget as Obj | undefined, ['budget']);
   if (budget) policy.budget = budget;
+  const mend = b.mend(raw.mend as Obj | undefined);
+  if (mend) policy.mend = mend;
 
   policy.scopes = ((raw.scopes as Obj[] | undefined) ?? []).map((o, i): Scope => {
     const path: Segment[] = ['scopes', i];

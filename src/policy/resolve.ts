@@ -20,6 +20,7 @@ import type {
   Budget,
   ChallengeDef,
   FilePolicy,
+  MendSettings,
   Policy,
   PolicyFile,
   PolicyScope,
@@ -446,6 +447,9 @@ function mergeChain(chain: PolicyFile[]): Policy {
     }),
   );
 
+  // Mend settings are advice, not floors: the extending file's keys simply win.
+  const mend = chain.reduce<MendSettings | undefined>((acc, f) => (f.mend ? { ...acc, ...f.mend } : acc), undefined);
+
   return {
     source: 'file',
     files: chain.map((f) => f.path).reverse(),
@@ -460,6 +464,7 @@ function mergeChain(chain: PolicyFile[]): Policy {
     budget: budget.value,
     scopes,
     layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer },
+    ...(mend ? { mend } : {}),
   };
 }
 
@@ -518,5 +523,6 @@ export function policyForFile(policy: Policy, path: string): FilePolicy {
     removedDesigns: removed.value.severity,
     budget: { ...(b.work !== undefined ? { work: b.work } : {}), ...(b.seconds !== undefined ? { seconds: b.seconds } : {}), maxWork: budgetWork(b) },
     ...(format ? { format } : {}),
+    ...(policy.mend ? { mend: policy.mend } : {}),
   };
 }

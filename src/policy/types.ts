@@ -157,6 +157,21 @@ export interface Scope {
   where: Where;
 }
 
+/** How to look for what would mend a failing design (advice only; never changes a verdict). */
+export interface MendSettings {
+  /** Repository path of the planner's candidate-link file. */
+  candidates?: string;
+  /** Generated candidates: great-circle distance × this factor. */
+  routeFactor?: number;
+  /** Generated candidates: most great-circle km between the two sites. */
+  maxKm?: number;
+  /** Most links one suggestion adds. */
+  maxLinks?: number;
+  /** Most engine evaluations per failing design; 0: no search. */
+  evaluations?: number;
+  where?: Where;
+}
+
 /** One policy file as written (before `inherits` and scopes are applied). */
 export interface PolicyFile {
   path: string;
@@ -172,6 +187,7 @@ export interface PolicyFile {
   weakening?: WeakeningRule;
   removedDesigns?: { severity: RemovedSeverity; where: Where };
   budget?: Budget;
+  mend?: MendSettings;
   scopes: Scope[];
 }
 
@@ -190,6 +206,8 @@ export interface Policy {
   weakening: WeakeningRule;
   removedDesigns: { severity: RemovedSeverity; where?: Where };
   budget: Budget;
+  /** Mend settings, the inheriting file's keys over the inherited file's. */
+  mend?: MendSettings;
   /** Scopes of every file of the chain, the most basic file's first. */
   scopes: PolicyScope[];
   /** Depth of the file each definition came from (0 = the most basic): a definition may
@@ -211,4 +229,5 @@ export interface FilePolicy {
   removedDesigns: RemovedSeverity;
   budget: ResolvedBudget;
   format?: DesignFormat;
+  mend?: MendSettings;
 }

@@ -36,6 +36,8 @@ import {
 } from './labels.js';
 import type { Consequence, Evaluation, FileReport, Finding, Report, ReportElement, RequirementResult } from './report.js';
 import { escapeHtml } from './escape.js';
+import { mapHtml } from './map-html.js';
+import { mendHtml } from './mend-text.js';
 
 const esc = (s: string | number) => escapeHtml(String(s));
 
@@ -229,6 +231,7 @@ function designSection(f: FileReport, index: number): string {
     out.push(`<div class="facts changes"><strong>What the change does:</strong><ul>${items}</ul></div>`);
   }
   if (f.head && f.head.envelopes.length) out.push(charts(f, id));
+  out.push(mapHtml(f, id));
   if (f.requirements.length) out.push(requirementTable(f.requirements, id));
   const findings = groupFindings(bySeverity(f.findings.filter((x) => x.rule !== 'weakest-sequence')));
   const work = findings.filter((x) => x.severity !== 'notice');
@@ -242,6 +245,7 @@ function designSection(f: FileReport, index: number): string {
   }
   out.push(weakest(f));
   out.push(structure(f));
+  out.push(mendHtml(f, id));
   out.push('</section>');
   return out.filter(Boolean).join('\n');
 }

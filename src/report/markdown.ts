@@ -5,7 +5,8 @@
 // saying what was left out and where it is. Charts are Mermaid `xychart-beta` blocks (which
 // GitHub renders in summaries and comments) with a Unicode sparkline table beside them, since
 // GitHub Markdown allows neither inline SVG nor data: images. No user-controlled text enters
-// Mermaid; everything user-controlled goes through escape.ts.
+// Mermaid except the change's neighbourhood graph's labels, reduced to letters, digits and
+// ". _ -" (mermaid-map.ts); everything user-controlled goes through escape.ts.
 
 import type { Envelope } from '../envelope/types.js';
 import { escapeHtml, escapeMarkdown, markdownCode, markerValue, oneLine } from './escape.js';
@@ -35,6 +36,7 @@ import {
   weakestSequences,
   xAxisLabel,
 } from './labels.js';
+import { changeMapMarkdown } from './mermaid-map.js';
 import { rankFiles, rankFindings, worstSeverity } from './rank.js';
 import type { Consequence, FileReport, FileStatus, Finding, Report, ReportElement, RequirementResult, Severity } from './report.js';
 
@@ -315,6 +317,7 @@ function fileSection(f: FileReport, detail: Detail, layout: Layout, path: (p: st
   }
   if (detail === 'full') {
     if (chart) for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign)) text += chartSection(f, env, layout.chartPoints);
+    text += changeMapMarkdown(f);
     text += weakestSection(f);
     text += structureSection(f);
   }

@@ -3,6 +3,8 @@
 // reports of older versions. Keep it deterministic: no timings, no absolute paths, no dates.
 
 import type { AttackCurve, ChallengeName, Contingency, Envelope, RValueSpec } from '../envelope/types.js';
+import type { DesignMap, OmittedMap } from '../map/types.js';
+import type { MendReport } from '../mend/types.js';
 
 export const REPORT_VERSION = 1;
 
@@ -171,6 +173,10 @@ export interface FileReport {
     hardened?: (ReportElement & { hardened: boolean })[];
     modified?: AttributeChange[];
   };
+  /** Where each site and link is drawn, base and head together (src/map/). */
+  map?: DesignMap | OmittedMap;
+  /** For a failing design: what would mend it (src/mend/). */
+  mend?: MendReport;
 }
 
 export interface Report {

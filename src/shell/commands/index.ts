@@ -8,5 +8,7 @@ import { checkCommand } from './check.js';
 import { initCommand } from './init.js';
 import { demoCommand } from './demo.js';
 import { metricsCommand } from './metrics.js';
+import { mapCommand } from './map.js';
+import { mendCommand } from './mend.js';
 
-export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand, metricsCommand];
+export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand, metricsCommand, mapCommand, mendCommand];
