@@ -7,7 +7,8 @@
 // GraphML and GML (attributes.ts): `id`, `label`/`name`, `kind`, `hardened`, `risk_groups`
 // (a list, or ids separated by `;`), `capacity_gbps`, `latency_ms`, … A link keeps its
 // geometry in the attribute `route` (so a conversion back to GeoJSON keeps the drawing) and
-// its measured length in `route_km`. The collection's `name`, `description` and `metadata`
+// its measured length in `route_km`; `route_known: false` marks a line that only joins its two
+// sites (no corridor is looked for along it). The collection's `name`, `description` and `metadata`
 // (foreign members, RFC 7946 §6.1) describe the design.
 //
 // Routes that run side by side are reported as a possible shared-risk group the design does
@@ -26,12 +27,21 @@ import type { SourcePos, Topology } from './model.js';
 import { MAX_NESTING, positionOf, yamlNestingExceeded } from './nesting.js';
 import { nonNormal, quantityProblem } from './quantities.js';
 
+/**
+ * A link property: `false` says the line only joins the two sites (netbrace convert draws such
+ * lines when no route is known), so it takes no part in the search for shared corridors.
+ */
+export const ROUTE_KNOWN = 'route_known';
+
 /** A line's end belongs to a site within this many metres (common practice for surveyed plans). */
 export const END_TOLERANCE_M = 100;
 /** Shared corridors: within this many metres ... */
 export const CORRIDOR_WITHIN_M = 50;
 /** ... for more than this many km. */
 export const CORRIDOR_MIN_KM = 1;
+
+/** Property names that would be read as coordinates elsewhere (attributes.ts); a site's geometry decides. */
+const COORDINATE_NAMES = new Set(['lat', 'lon', 'lng', 'long', 'latitude', 'longitude', 'x', 'y']);
 
 type Json = null | boolean | number | string | Json[] | { [k: string]: Json };
 type Path = (string | number)[];
@@ -152,9 +162,16 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
     const [lon, lat] = position(f, ['geometry', 'coordinates'], f.geometry.coordinates, `site features[${i}]`);
     const id = idOf(f);
     if (id === undefined) fail(f.pos)(`site features[${i}] has no id`, 'give the feature an "id", or properties.id');
-    const { id: _drop, lat: _lat, lon: _lon, latitude: _la, longitude: _lo, ...rest } = f.properties;
+    // The geometry places the site: coordinates among the properties are only attributes.
+    const rest: Record<string, Json> = {};
+    const asWritten: Record<string, Json> = {};
+    for (const [k, v] of Object.entries(f.properties)) {
+      if (k === 'id') continue;
+      if (COORDINATE_NAMES.has(k.toLowerCase())) asWritten[k] = v;
+      else rest[k] = v;
+    }
     const mapped = mapNodeAttributes(rest, b, { pos: (k) => where(nodeAt(f.node, ['properties', k]), f.pos), text: (k) => (typeof rest[k] === 'number' ? written(f, ['properties', k], rest[k]) : undefined) });
-    b.addNode({ id: id!, pos: f.pos, ...mapped, lat, lon });
+    b.addNode({ id: id!, pos: f.pos, ...mapped, attrs: { ...mapped.attrs, ...asWritten }, lat, lon });
     sites.push({ id: id!, lon, lat });
   });
 
@@ -251,7 +268,9 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
       attrs: { ...mapped.attrs, route_km: Math.round(measured * 1000) / 1000, route: { type, coordinates: type === 'LineString' ? parts[0] : parts } },
       what: `link features[${i}]`,
     });
-    if (added) routes.push({ parts, linkIndex: linkCount++, groups: mapped.riskGroups ?? [], pos: f.pos });
+    // A line drawn only to join two sites (route_known: false) says nothing about where the cable runs.
+    if (added && mapped.attrs[ROUTE_KNOWN] !== false) routes.push({ parts, linkIndex: linkCount, groups: mapped.riskGroups ?? [], pos: f.pos });
+    if (added) linkCount++;
   });
 
   const meta = rootMap.metadata;

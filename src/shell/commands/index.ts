@@ -8,5 +8,6 @@ import { checkCommand } from './check.js';
 import { initCommand } from './init.js';
 import { demoCommand } from './demo.js';
 import { metricsCommand } from './metrics.js';
+import { convertCommand } from './convert.js';
 
-export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand, metricsCommand];
+export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand, metricsCommand, convertCommand];
