@@ -35,6 +35,8 @@ export const ROUTE_KNOWN = 'route_known';
 
 /** A line's end belongs to a site within this many metres (common practice for surveyed plans). */
 export const END_TOLERANCE_M = 100;
+/** END_TOLERANCE_M in degrees of latitude, rounded up (a prefilter: 1° of latitude is 111.2 km). */
+const END_TOLERANCE_DEG = (END_TOLERANCE_M / 111_000) * 1.01;
 /** Shared corridors: within this many metres ... */
 export const CORRIDOR_WITHIN_M = 50;
 /** ... for more than this many km. */
@@ -180,6 +182,8 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
     let best: string | undefined;
     let bestM = Infinity;
     for (const s of sites) {
+      // 100 m is under 0.001° of latitude anywhere: most sites are ruled out without trigonometry.
+      if (Math.abs(s.lat - p[1]) > END_TOLERANCE_DEG) continue;
       const m = greatCircleKm(p[1], p[0], s.lat, s.lon) * 1000;
       if (m < bestM) [best, bestM] = [s.id, m];
     }
