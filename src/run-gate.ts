@@ -26,7 +26,7 @@ import { compareDesign, type CompareInput, type DesignSide } from './gate/compar
 import { countStatuses, exitCodeOf, verdictOf } from './gate/verdict.js';
 import { pairDesigns, type UnpairedDesign } from './gate/pair-designs.js';
 import { BUILTIN_POLICY_NAME, DEFAULT_DESIGN_GLOBS, DEFAULT_POLICY_PATH } from './policy/defaults.js';
-import { builtinPolicy, designFormat, globsMatch, isDesignPath, loadPolicy, policyForFile } from './policy/resolve.js';
+import { builtinPolicy, designFormat, designNeedsHeader, globsMatch, isDesignPath, isDesignText, loadPolicy, policyForFile } from './policy/resolve.js';
 import type { FilePolicy, Policy } from './policy/types.js';
 import { CAUTION, REPORT_VERSION, type FileReport, type Report } from './report/report.js';
 import type { DesignFormat } from './topology/model.js';
@@ -293,14 +293,49 @@ async function candidates(request: GateRequest, deps: GateDeps, policy: Policy, 
   }
   if (base === undefined || request.eventKind === 'schedule') {
     const all = await deps.listAll(head);
-    return { list: all.filter((p) => isDesignPath(policy, p)).map((path) => ({ path, change: 'unchanged' as const })), scope: 'all' };
+    const list = all.filter((p) => isDesignPath(policy, p)).map((path) => ({ path, change: 'unchanged' as const }));
+    return { list: await withDesignHeaders(list, deps, policy, undefined, head), scope: 'all' };
   }
   const changed = await deps.listChanged(base, head);
-  const list = changed
+  const selected = changed
     .filter((f) => isDesignPath(policy, f.path) || (f.previousPath !== undefined && isDesignPath(policy, f.previousPath)))
     .map((f): Candidate => ({ path: f.path, change: f.status, ...(f.previousPath !== undefined ? { previousPath: f.previousPath } : {}) }));
+  const list = await withDesignHeaders(selected, deps, policy, base, head);
   const note = await deadGlobNote(changed, deps, policy, base, head);
   return { list: await pairMovedDesigns(list, deps, policy, base, head), scope: 'changed', ...(note ? { note } : {}) };
+}
+
+/** A file's text for a header check; null when it is absent or not text (then it is no design). */
+async function textOrNull(deps: GateDeps, rev: Revision, path: string): Promise<string | null> {
+  try {
+    return await deps.readAt(rev, path);
+  } catch (e) {
+    if (e instanceof EncodingError) return null;
+    throw e;
+  }
+}
+
+/** Whether a file is a CSV design by its header, at the head or at the base of the change. */
+async function hasDesignHeader(c: Candidate, deps: GateDeps, policy: Policy, base: Revision | undefined, head: Revision): Promise<boolean> {
+  const sides: [Revision, string][] = [];
+  if (c.change !== 'deleted') sides.push([head, c.path]);
+  if (base !== undefined && c.change !== 'added') sides.push([base, c.previousPath ?? c.path]);
+  for (const [rev, p] of sides) if (isDesignText(policy, p, await textOrNull(deps, rev, p))) return true;
+  return false;
+}
+
+/**
+ * A CSV that only the built-in `**\/*.csv` glob selects is judged when its header has source
+ * and target columns, on either side of the change (csvHasEdgeHeader); any other CSV — a
+ * spreadsheet of something else — is not a design and is left out without a word.
+ */
+async function withDesignHeaders(list: Candidate[], deps: GateDeps, policy: Policy, base: Revision | undefined, head: Revision): Promise<Candidate[]> {
+  const kept: Candidate[] = [];
+  for (const c of list) {
+    const sniffed = designNeedsHeader(policy, c.path) || (c.previousPath !== undefined && designNeedsHeader(policy, c.previousPath));
+    if (!sniffed || (await hasDesignHeader(c, deps, policy, base, head))) kept.push(c);
+  }
+  return kept;
 }
 
 /** The network name a design file gives itself, or undefined when it names none or cannot be read. */
@@ -356,13 +391,21 @@ const UNSELECTED_SHOWN = 5;
  */
 async function deadGlobNote(changed: readonly ChangedFile[], deps: GateDeps, policy: Policy, base: Revision, head: Revision): Promise<string | undefined> {
   const looksLikeDesign = (p: string) => globsMatch(DEFAULT_DESIGN_GLOBS, p) && !isDesignPath(policy, p) && !globsMatch(policy.exclude, p);
-  const unselected = [...new Set(changed.flatMap((f) => [f.path, ...(f.previousPath !== undefined ? [f.previousPath] : [])]).filter(looksLikeDesign))].sort();
-  if (unselected.length === 0) return undefined;
+  const looking = [...new Set(changed.flatMap((f) => [f.path, ...(f.previousPath !== undefined ? [f.previousPath] : [])]).filter(looksLikeDesign))].sort();
+  if (looking.length === 0) return undefined;
   const written = policy.designs.flatMap((d) => d.paths.map((glob: string, i: number) => ({ glob, where: d.fileWhere[i] ?? d.where }))).filter((g) => g.where.file !== BUILTIN_POLICY_NAME);
   if (written.length === 0) return undefined;
   const files = [...new Set([...(await deps.listAll(base)), ...(await deps.listAll(head))])];
   const dead = written.filter((g) => !files.some((f) => globsMatch([g.glob], f)));
   if (dead.length === 0) return undefined;
+  // A CSV looks like a design only when its header says so (at the head or the base).
+  const builtin = builtinPolicy();
+  const unselected: string[] = [];
+  for (const p of looking) {
+    if (!designNeedsHeader(builtin, p)) unselected.push(p);
+    else if (isDesignText(builtin, p, await textOrNull(deps, head, p)) || isDesignText(builtin, p, await textOrNull(deps, base, p))) unselected.push(p);
+  }
+  if (unselected.length === 0) return undefined;
   const globs = dead.map((g) => `designs glob "${g.glob}" (${g.where.file}:${g.where.line}:${g.where.column})`).join(', ');
   const shown = unselected.slice(0, UNSELECTED_SHOWN).join(', ') + (unselected.length > UNSELECTED_SHOWN ? `, and ${unselected.length - UNSELECTED_SHOWN} more` : '');
   return (

@@ -8,12 +8,20 @@ export const DEFAULT_POLICY_PATH = '.netbrace.yaml';
 /** The name diagnostics use for the built-in policy. */
 export const BUILTIN_POLICY_NAME = '<built-in policy>';
 
+/**
+ * The built-in glob for CSV edge lists. A CSV it alone selects is judged only when its header
+ * names source and target columns (csvHasEdgeHeader): a repository's other CSV files (a
+ * spreadsheet of anything else) are not designs.
+ */
+export const CSV_DESIGN_GLOB = '**/*.csv';
+
 export const DEFAULT_DESIGN_GLOBS: readonly string[] = [
   '**/*.graphml',
   '**/*.gml',
   '**/*.net.yaml',
   '**/*.net.yml',
   '**/*.net.json',
+  CSV_DESIGN_GLOB,
 ];
 
 /**
@@ -35,8 +43,10 @@ export const STARTER_POLICY = `# netbrace policy: what a network design must sat
 version: 1
 
 # Which files are designs (globs from the repository root; "format" forces a format).
+# A CSV that only "**/*.csv" selects is a design when its header has source and target
+# columns; other CSV files are left alone. List CSV designs by another glob to judge them always.
 designs:
-  - paths: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
+  - paths: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json", "**/*.csv"]
 # exclude: ["archive/**"]
 
 # Seed of every random challenge: the same inputs and seed give the same report.

@@ -13,7 +13,8 @@ import type { DesignFormat } from '../topology/model.js';
 import { isMetricId, metrics as knownMetrics } from '../metrics/registry.js';
 import { closest } from '../topology/suggest.js';
 import { budgetWork, ENGINE_VISITS_PER_SECOND } from './budget.js';
-import { BUILTIN_POLICY_NAME, DEFAULT_POLICY_PATH, STARTER_POLICY } from './defaults.js';
+import { BUILTIN_POLICY_NAME, CSV_DESIGN_GLOB, DEFAULT_POLICY_PATH, STARTER_POLICY } from './defaults.js';
+import { csvHasEdgeHeader } from '../topology/edgelist.js';
 import { parsePolicyFile } from './load.js';
 import { requirementId } from './requirement-id.js';
 import type {
@@ -489,6 +490,22 @@ export function globsMatch(globs: readonly string[], given: string): boolean {
 /** Whether the policy treats this repository path as a design file. */
 export function isDesignPath(policy: Policy, path: string): boolean {
   return policy.designs.some((d) => globsMatch(d.paths, path)) && !globsMatch(policy.exclude, path);
+}
+
+/**
+ * Whether the policy selects this path only by the built-in CSV glob (`**\/*.csv`, in an entry
+ * that forces no format): such a file is a design only if its header says so
+ * (`isDesignText`). A CSV that any other glob selects is judged whatever it holds.
+ */
+export function designNeedsHeader(policy: Policy, path: string): boolean {
+  const matching = policy.designs.flatMap((d) => d.paths.filter((g: string) => globsMatch([g], path)).map((g: string) => ({ g, format: d.format })));
+  return matching.length > 0 && matching.every((m) => m.g === CSV_DESIGN_GLOB && m.format === undefined);
+}
+
+/** Whether a file with this text (null: absent or unreadable) at this path is a design the policy judges. */
+export function isDesignText(policy: Policy, path: string, text: string | null): boolean {
+  if (!isDesignPath(policy, path)) return false;
+  return !designNeedsHeader(policy, path) || (text !== null && csvHasEdgeHeader(text));
 }
 
 /** The format the policy forces on this path (a `designs` entry's `format`), if any. */

@@ -20,7 +20,7 @@ import { commentDigest, commentMarker, renderComment, renderSummary, reportDiges
 import { CAUTION, REPORT_VERSION, serializeReport, type FileStatus, type Report } from '../report/report.js';
 import { VERSION } from '../version.js';
 import { DEFAULT_POLICY_PATH } from '../policy/defaults.js';
-import { builtinPolicy, isDesignPath, loadPolicy } from '../policy/resolve.js';
+import { builtinPolicy, designNeedsHeader, isDesignPath, isDesignText, loadPolicy } from '../policy/resolve.js';
 import { renderSarif } from '../report/sarif.js';
 import {
   createClient,
@@ -668,7 +668,14 @@ function designsAmong(root: string, head: string, policyPath: string, changed: s
   const policy = text === null ? builtinPolicy() : loadPolicy(entry, read);
   const policyFiles = new Set([entry, ...policy.files]);
   if (changed.some((p) => policyFiles.has(p))) return Number.POSITIVE_INFINITY;
-  return changed.filter((p) => isDesignPath(policy, p)).length;
+  // A CSV the built-in glob alone selects counts when its header makes it a design (or when it
+  // is gone at head: it may be a design the change deletes).
+  const counts = (p: string) => {
+    if (!designNeedsHeader(policy, p)) return true;
+    const t = read(p);
+    return t === null || isDesignText(policy, p, t);
+  };
+  return changed.filter((p) => isDesignPath(policy, p) && counts(p)).length;
 }
 
 async function prFilesFallback(deps: ActionDeps, env: Env, inputs: ActionInputs, target: Target): Promise<string[] | undefined> {

@@ -109,7 +109,9 @@ export function sharedCorridors(routes: readonly Route[], options: CorridorOptio
   const stepM = options.stepM ?? 25;
   const padDeg = (withinM / EARTH_M) / RAD;
   const boxes = routes.map((r) => boxOf(r, padDeg));
-  const samples = routes.map((r) => sample(r, stepM));
+  // Sampled only when a route has a partner to compare with: a long route has many samples.
+  const samples: ({ p: [number, number]; m: number }[] | undefined)[] = [];
+  const samplesOf = (a: number) => (samples[a] ??= sample(routes[a], stepM));
   const found: SharedCorridor[] = [];
   for (let a = 0; a < routes.length; a++) {
     if (routes[a].length < 2) continue;
@@ -118,7 +120,10 @@ export function sharedCorridors(routes: readonly Route[], options: CorridorOptio
       let m = 0;
       let from: [number, number] | undefined;
       let to: [number, number] | undefined;
-      for (const s of samples[a]) {
+      const box = boxes[b];
+      for (const s of samplesOf(a)) {
+        // Outside route b's box (padded by withinM) no segment of b can be near.
+        if (s.p[0] < box.minX || s.p[0] > box.maxX || s.p[1] < box.minY || s.p[1] > box.maxY) continue;
         let near = false;
         for (let i = 1; i < routes[b].length && !near; i++) near = pointSegmentM(s.p, routes[b][i - 1], routes[b][i]) <= withinM;
         if (near) {

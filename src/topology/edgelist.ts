@@ -86,6 +86,22 @@ export function* csvRows(text: string, b: TopologyBuilder): Generator<Row> {
   }
 }
 
+/**
+ * Whether a CSV text is an edge list: its first row (the header) names a `source` and a
+ * `target` column (ignoring case and spaces around names), as parseEdgeList requires. A text
+ * whose first row cannot be read as CSV is not one. Reads the first row only.
+ */
+export function csvHasEdgeHeader(text: string): boolean {
+  try {
+    const first = csvRows(text, new TopologyBuilder('', 'csv')).next();
+    if (first.done) return false;
+    const names = first.value.cells.map((c) => c.text.trim().toLowerCase());
+    return names.includes('source') && names.includes('target');
+  } catch {
+    return false; // an unterminated quote on the first line: not a header of ours
+  }
+}
+
 export function parseEdgeList(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'csv'): Topology {
   const b = new TopologyBuilder(file, format, options);
   const rows = csvRows(text, b);

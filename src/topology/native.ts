@@ -228,15 +228,17 @@ function firstError(errors: readonly ErrorObject[], file: string, loc: Locator):
 
 interface NativeDesign {
   network?: { name?: string; description?: string };
-  nodes: { id: string | number; label?: string; kind?: string; site?: { lat: number; lon: number }; hardened?: boolean }[];
+  nodes: { id: string | number; label?: string; kind?: string; site?: { lat: number; lon: number }; hardened?: boolean; attributes?: Record<string, unknown> }[];
   links?: {
     id?: string | number;
     between: [string | number, string | number];
     length_km?: number;
     latency_ms?: number;
     capacity_gbps?: number;
+    weight?: number;
     risk_groups?: (string | number)[];
     hardened?: boolean;
+    attributes?: Record<string, unknown>;
   }[];
   risk_groups?: { id: string | number; description?: string }[];
   demands?: { between: [string | number, string | number]; volume: number }[];
@@ -320,6 +322,7 @@ export function parseNative(text: string, file: string, options: BuilderOptions 
       ...(n.kind !== undefined ? { kind: n.kind } : {}),
       ...(n.site ? { lat: n.site.lat, lon: n.site.lon } : {}),
       hardened: n.hardened ?? false,
+      ...(n.attributes ? { attrs: n.attributes } : {}),
     });
   });
   (d.risk_groups ?? []).forEach((g, i) => {
@@ -331,6 +334,7 @@ export function parseNative(text: string, file: string, options: BuilderOptions 
     const length = quantity('length', [...at, 'length_km'], l.length_km);
     const latency = quantity('latency', [...at, 'latency_ms'], l.latency_ms);
     const capacity = quantity('capacity', [...at, 'capacity_gbps'], l.capacity_gbps);
+    const weight = quantity('weight', [...at, 'weight'], l.weight);
     b.addLink({
       what: id !== undefined ? `link "${id}" (links[${i}])` : `links[${i}]`,
       ...(id !== undefined ? { id } : {}),
@@ -342,8 +346,10 @@ export function parseNative(text: string, file: string, options: BuilderOptions 
       ...(length !== undefined ? { length } : {}),
       ...(latency !== undefined ? { latency } : {}),
       ...(capacity !== undefined ? { capacity } : {}),
+      ...(weight !== undefined ? { weight } : {}),
       riskGroups: (l.risk_groups ?? []).map((g, k) => idAt([...at, 'risk_groups', k], g)),
       hardened: l.hardened ?? false,
+      ...(l.attributes ? { attrs: l.attributes } : {}),
     });
   });
   (d.demands ?? []).forEach((dm, i) => {

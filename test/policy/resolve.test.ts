@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { PolicyError } from '../../src/errors.js';
 import { BUILTIN_POLICY_NAME, STARTER_POLICY } from '../../src/policy/defaults.js';
 import { parsePolicyFile } from '../../src/policy/load.js';
-import { builtinPolicy, isDesignPath, loadPolicy, policyForFile } from '../../src/policy/resolve.js';
+import { builtinPolicy, designNeedsHeader, isDesignPath, isDesignText, loadPolicy, policyForFile } from '../../src/policy/resolve.js';
 import type { Requirement } from '../../src/policy/types.js';
 
 const repo = (files: Record<string, string>) => (p: string) => files[p] ?? null;
@@ -37,6 +37,20 @@ describe('built-in policy', () => {
       expect(isDesignPath(p, f)).toBe(true);
     }
     for (const f of ['a.yaml', 'policy.json', 'README.md', 'a.graphml.bak', 'net.yaml']) expect(isDesignPath(p, f)).toBe(false);
+  });
+
+  it('a CSV that only the built-in glob selects is a design when its header has source and target', () => {
+    const p = builtinPolicy();
+    expect(isDesignPath(p, 'links/metro.csv')).toBe(true);
+    expect(designNeedsHeader(p, 'links/metro.csv')).toBe(true);
+    expect(designNeedsHeader(p, 'a.gml')).toBe(false);
+    expect(isDesignText(p, 'links/metro.csv', 'Source, Target ,length\na,b,1\n')).toBe(true);
+    expect(isDesignText(p, 'budget.csv', 'item,quantity\nducts,4\n')).toBe(false);
+    expect(isDesignText(p, 'budget.csv', null)).toBe(false);
+    // Listed by a glob of its own (or with a format forced), a CSV is judged whatever its header says.
+    const listed = loadPolicy('p.yaml', repo({ 'p.yaml': 'designs:\n  - paths: ["**/*.csv", "links/*.csv"]\n  - paths: "raw/**"\n    format: csv\n' }));
+    expect([designNeedsHeader(listed, 'links/a.csv'), designNeedsHeader(listed, 'other/a.csv'), designNeedsHeader(listed, 'raw/a.csv')]).toEqual([false, true, false]);
+    expect(isDesignText(listed, 'links/a.csv', 'item,quantity\n')).toBe(true);
   });
 
   it('fills what a policy file leaves out', () => {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { parseDesign } from '../../src/topology/parse.js';
+import { csvHasEdgeHeader } from '../../src/topology/edgelist.js';
 import { caught, fixture } from './helpers.js';
 
 const csv = (text: string) => () => parseDesign(text, 'links.csv');
@@ -55,5 +56,17 @@ describe('CSV edge list', () => {
     expect(caught(csv('source,target,length\na,b,-1\n')).message).toBe('link length must not be negative (-1)');
     expect(caught(csv('source,target,source\na,b,c\n')).message).toBe('column "source" appears twice in the header');
     expect(caught(csv('')).message).toBe('the CSV file is empty');
+  });
+});
+
+describe('is it an edge list? (the header decides)', () => {
+  it('a header with source and target columns, in any case, order or quoting', () => {
+    expect(csvHasEdgeHeader(fixture('ring.csv'))).toBe(true);
+    expect(csvHasEdgeHeader('\ufeff"Target",id,SOURCE\r\nb,1,a\r\n')).toBe(true);
+    expect(csvHasEdgeHeader('\n\nsource,target\n')).toBe(true);
+  });
+
+  it('anything else is not: other columns, one of the two, an empty file, a broken first line', () => {
+    for (const text of ['item,quantity\nducts,4\n', 'source,length\n', '', '"source,target\n', 'from,to\na,b\n']) expect(csvHasEdgeHeader(text), text).toBe(false);
   });
 });

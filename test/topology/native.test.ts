@@ -173,3 +173,18 @@ describe('the README example', () => {
     expect(t.links.map((l) => l.id)).toEqual(['ns-1', 'north\u2014south#2', 'south\u2014west']);
   });
 });
+
+describe('attributes and weights in our format', () => {
+  it('keeps a node\'s and a link\'s attributes, and reads a weight', () => {
+    const t = parseDesign(`${twoNodes}  - id: c\n    attributes: {Country: Norway, Internal: 1}\nlinks:\n  - between: [a, c]\n    weight: 12\n    attributes: {LinkLabel: 10G, length_estimated: true}\n`, 'a.net.yaml');
+    expect(t.nodes[2].attrs).toEqual({ Country: 'Norway', Internal: 1 });
+    expect(t.links[0]).toMatchObject({ weight: 12, attrs: { LinkLabel: '10G', length_estimated: true } });
+  });
+
+  it('a weight out of range or an attributes list is refused at its line', () => {
+    expect(caught(yaml(`${twoNodes}links:\n  - between: [a, b]\n    weight: 1e12\n`)).format()).toBe(
+      'net/core.net.yaml:6:13: links[0].weight must be at most 1000000000 (found 1000000000000)',
+    );
+    expect(caught(yaml(`${twoNodes}    attributes: [x]\n`)).format()).toBe('net/core.net.yaml:4:17: nodes[1].attributes must be a mapping (key: value), not a list');
+  });
+});

@@ -55,7 +55,7 @@ describe('limits', () => {
   });
 
   it('refuses designs over the element limit, in every format, at the element that crosses it', () => {
-    for (const file of ['ring.net.yaml', 'ring.gml', 'ring.graphml', 'ring.csv']) {
+    for (const file of ['ring.net.yaml', 'ring.gml', 'ring.graphml', 'ring.csv', 'ring.geojson']) {
       const e = caught(() => parseDesign(fixture(file), file, { maxElements: 6 }));
       expect(e.name, file).toBe('LimitError');
       expect(e.message).toBe('the design has more than 6 elements (nodes + links)');
@@ -66,7 +66,7 @@ describe('limits', () => {
   });
 });
 
-describe('the four formats agree', () => {
+describe('the five formats agree', () => {
   it('the ring fixture has the same ends, lengths and keys in every format', () => {
     const ends = (file: string) => {
       const t = parseDesign(fixture(file), file);
@@ -74,6 +74,6 @@ describe('the four formats agree', () => {
       return t.links.map((l) => [name.get(l.source), name.get(l.target), l.length]);
     };
     const expected = ends('ring.net.yaml');
-    for (const f of ['ring.net.json', 'ring.gml', 'ring.graphml', 'ring.csv']) expect(ends(f), f).toEqual(expected);
+    for (const f of ['ring.net.json', 'ring.gml', 'ring.graphml', 'ring.csv', 'ring.geojson']) expect(ends(f), f).toEqual(expected);
   });
 });

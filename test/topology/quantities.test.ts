@@ -31,10 +31,11 @@ describe('the rule (quantities.ts)', () => {
 
   it('the design schema states the same upper limits (editors show them)', () => {
     const link = schema.definitions.link.properties;
-    expect([link.length_km.maximum, link.latency_ms.maximum, link.capacity_gbps.maximum]).toEqual([
+    expect([link.length_km.maximum, link.latency_ms.maximum, link.capacity_gbps.maximum, link.weight.maximum]).toEqual([
       QUANTITY_RANGE.length.max,
       QUANTITY_RANGE.latency.max,
       QUANTITY_RANGE.capacity.max,
+      QUANTITY_RANGE.weight.max,
     ]);
     expect(schema.definitions.demand.properties.volume.maximum).toBe(QUANTITY_RANGE.volume.max);
   });

@@ -10,5 +10,6 @@ import { demoCommand } from './demo.js';
 import { metricsCommand } from './metrics.js';
 import { mapCommand } from './map.js';
 import { mendCommand } from './mend.js';
+import { convertCommand } from './convert.js';
 
-export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand, metricsCommand, mapCommand, mendCommand];
+export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand, metricsCommand, mapCommand, mendCommand, convertCommand];
