@@ -962,10 +962,10 @@ var require_parse = __commonJS({
       const eos = () => state.index === len - 1;
       const peek = state.peek = (n = 1) => input[state.index + n];
       const advance = state.advance = () => input[++state.index] || "";
-      const remaining = () => input.slice(state.index + 1);
-      const consume = (value2 = "", num2 = 0) => {
+      const remaining2 = () => input.slice(state.index + 1);
+      const consume = (value2 = "", num3 = 0) => {
         state.consumed += value2;
-        state.index += num2;
+        state.index += num3;
       };
       const append = (token) => {
         state.output += token.output != null ? token.output : token.value;
@@ -1059,10 +1059,10 @@ var require_parse = __commonJS({
           if (token.inner && token.inner.length > 1 && token.inner.includes("/")) {
             extglobStar = globstar(opts);
           }
-          if (extglobStar !== star || eos() || /^\)+$/.test(remaining())) {
+          if (extglobStar !== star || eos() || /^\)+$/.test(remaining2())) {
             output = token.close = `)$))${extglobStar}`;
           }
-          if (token.inner.includes("*") && (rest = remaining()) && /^\.[^\\/.]+$/.test(rest)) {
+          if (token.inner.includes("*") && (rest = remaining2()) && /^\.[^\\/.]+$/.test(rest)) {
             const expression = parse(rest, { ...options, fastpaths: false }).output;
             output = token.close = `)${expression})${extglobStar})`;
           }
@@ -1134,7 +1134,7 @@ var require_parse = __commonJS({
             push({ type: "text", value });
             continue;
           }
-          const match = /^\\+/.exec(remaining());
+          const match = /^\\+/.exec(remaining2());
           let slashes = 0;
           if (match && match[0].length > 2) {
             slashes = match[0].length;
@@ -1220,7 +1220,7 @@ var require_parse = __commonJS({
           continue;
         }
         if (value === "[") {
-          if (opts.nobracket === true || !remaining().includes("]")) {
+          if (opts.nobracket === true || !remaining2().includes("]")) {
             if (opts.nobracket !== true && opts.strictBrackets === true) {
               throw new SyntaxError(syntaxError("closing", "]"));
             }
@@ -1369,7 +1369,7 @@ var require_parse = __commonJS({
           if (prev && prev.type === "paren") {
             const next = peek();
             let output = value;
-            if (prev.value === "(" && !/[!=<:]/.test(next) || next === "<" && !/<([!=]|\w+>)/.test(remaining())) {
+            if (prev.value === "(" && !/[!=<:]/.test(next) || next === "<" && !/<([!=]|\w+>)/.test(remaining2())) {
               output = `\\${value}`;
             }
             push({ type: "text", value, output });
@@ -1422,7 +1422,7 @@ var require_parse = __commonJS({
           if (value === "$" || value === "^") {
             value = `\\${value}`;
           }
-          const match = REGEX_NON_SPECIAL_CHARS.exec(remaining());
+          const match = REGEX_NON_SPECIAL_CHARS.exec(remaining2());
           if (match) {
             value += match[0];
             state.index += match[0].length;
@@ -1440,7 +1440,7 @@ var require_parse = __commonJS({
           consume(value);
           continue;
         }
-        let rest = remaining();
+        let rest = remaining2();
         if (opts.noextglob !== true && /^\([^?]/.test(rest)) {
           extglobOpen("star", value);
           continue;
@@ -1663,10 +1663,10 @@ var require_picomatch = __commonJS({
     var parse = require_parse();
     var utils = require_utils();
     var constants = require_constants();
-    var isObject = (val) => val && typeof val === "object" && !Array.isArray(val);
-    var picomatch2 = (glob, options, returnState = false) => {
+    var isObject2 = (val) => val && typeof val === "object" && !Array.isArray(val);
+    var picomatch3 = (glob, options, returnState = false) => {
       if (Array.isArray(glob)) {
-        const fns = glob.map((input) => picomatch2(input, options, returnState));
+        const fns = glob.map((input) => picomatch3(input, options, returnState));
         const arrayMatcher = (str) => {
           for (const isMatch of fns) {
             const state2 = isMatch(str);
@@ -1676,22 +1676,22 @@ var require_picomatch = __commonJS({
         };
         return arrayMatcher;
       }
-      const isState = isObject(glob) && glob.tokens && glob.input;
+      const isState = isObject2(glob) && glob.tokens && glob.input;
       if (glob === "" || typeof glob !== "string" && !isState) {
         throw new TypeError("Expected pattern to be a non-empty string");
       }
       const opts = options || {};
       const posix = opts.windows;
-      const regex = isState ? picomatch2.compileRe(glob, options) : picomatch2.makeRe(glob, options, false, true);
+      const regex = isState ? picomatch3.compileRe(glob, options) : picomatch3.makeRe(glob, options, false, true);
       const state = regex.state;
       delete regex.state;
       let isIgnored = () => false;
       if (opts.ignore) {
         const ignoreOpts = { ...options, ignore: null, onMatch: null, onResult: null };
-        isIgnored = picomatch2(opts.ignore, ignoreOpts, returnState);
+        isIgnored = picomatch3(opts.ignore, ignoreOpts, returnState);
       }
       const matcher = (input, returnObject = false) => {
-        const { isMatch, match, output } = picomatch2.test(input, regex, options, { glob, posix });
+        const { isMatch, match, output } = picomatch3.test(input, regex, options, { glob, posix });
         const result = { glob, state, regex, posix, input, output, match, isMatch };
         if (typeof opts.onResult === "function") {
           opts.onResult(result);
@@ -1717,7 +1717,7 @@ var require_picomatch = __commonJS({
       }
       return matcher;
     };
-    picomatch2.test = (input, regex, options, { glob, posix } = {}) => {
+    picomatch3.test = (input, regex, options, { glob, posix } = {}) => {
       if (typeof input !== "string") {
         throw new TypeError("Expected input to be a string");
       }
@@ -1734,24 +1734,24 @@ var require_picomatch = __commonJS({
       }
       if (match === false || opts.capture === true) {
         if (opts.matchBase === true || opts.basename === true) {
-          match = picomatch2.matchBase(input, regex, options, posix);
+          match = picomatch3.matchBase(input, regex, options, posix);
         } else {
           match = regex.exec(output);
         }
       }
       return { isMatch: Boolean(match), match, output };
     };
-    picomatch2.matchBase = (input, glob, options, posix = options && options.windows) => {
-      const regex = glob instanceof RegExp ? glob : picomatch2.makeRe(glob, options);
+    picomatch3.matchBase = (input, glob, options, posix = options && options.windows) => {
+      const regex = glob instanceof RegExp ? glob : picomatch3.makeRe(glob, options);
       return regex.test(utils.basename(input, { windows: posix }));
     };
-    picomatch2.isMatch = (str, patterns, options) => picomatch2(patterns, options)(str);
-    picomatch2.parse = (pattern, options) => {
-      if (Array.isArray(pattern)) return pattern.map((p) => picomatch2.parse(p, options));
+    picomatch3.isMatch = (str, patterns, options) => picomatch3(patterns, options)(str);
+    picomatch3.parse = (pattern, options) => {
+      if (Array.isArray(pattern)) return pattern.map((p) => picomatch3.parse(p, options));
       return parse(pattern, { ...options, fastpaths: false });
     };
-    picomatch2.scan = (input, options) => scan(input, options);
-    picomatch2.compileRe = (state, options, returnOutput = false, returnState = false) => {
+    picomatch3.scan = (input, options) => scan(input, options);
+    picomatch3.compileRe = (state, options, returnOutput = false, returnState = false) => {
       if (returnOutput === true) {
         return state.output;
       }
@@ -1762,26 +1762,26 @@ var require_picomatch = __commonJS({
       if (state && state.negated === true) {
         source = `^(?!${source}).*$`;
       }
-      const regex = picomatch2.toRegex(source, options);
+      const regex = picomatch3.toRegex(source, options);
       if (returnState === true) {
         regex.state = state;
       }
       return regex;
     };
-    picomatch2.makeRe = (input, options = {}, returnOutput = false, returnState = false) => {
+    picomatch3.makeRe = (input, options = {}, returnOutput = false, returnState = false) => {
       if (!input || typeof input !== "string") {
         throw new TypeError("Expected a non-empty string");
       }
-      let parsed = { negated: false, fastpaths: true };
+      let parsed2 = { negated: false, fastpaths: true };
       if (options.fastpaths !== false && (input[0] === "." || input[0] === "*")) {
-        parsed.output = parse.fastpaths(input, options);
+        parsed2.output = parse.fastpaths(input, options);
       }
-      if (!parsed.output) {
-        parsed = parse(input, options);
+      if (!parsed2.output) {
+        parsed2 = parse(input, options);
       }
-      return picomatch2.compileRe(parsed, options, returnOutput, returnState);
+      return picomatch3.compileRe(parsed2, options, returnOutput, returnState);
     };
-    picomatch2.toRegex = (source, options) => {
+    picomatch3.toRegex = (source, options) => {
       try {
         const opts = options || {};
         return new RegExp(source, opts.flags || (opts.nocase ? "i" : ""));
@@ -1790,8 +1790,8 @@ var require_picomatch = __commonJS({
         return /$^/;
       }
     };
-    picomatch2.constants = constants;
-    module.exports = picomatch2;
+    picomatch3.constants = constants;
+    module.exports = picomatch3;
   }
 });
 
@@ -1801,14 +1801,14 @@ var require_picomatch2 = __commonJS({
     "use strict";
     var pico = require_picomatch();
     var utils = require_utils();
-    function picomatch2(glob, options, returnState = false) {
+    function picomatch3(glob, options, returnState = false) {
       if (options && (options.windows === null || options.windows === void 0)) {
         options = { ...options, windows: utils.isWindows() };
       }
       return pico(glob, options, returnState);
     }
-    Object.assign(picomatch2, pico);
-    module.exports = picomatch2;
+    Object.assign(picomatch3, pico);
+    module.exports = picomatch3;
   }
 });
 
@@ -4573,11 +4573,11 @@ var require_validate = __commonJS({
         jsonPointer = $data;
         data = names_1.default.rootData;
       } else {
-        const matches2 = RELATIVE_JSON_POINTER.exec($data);
-        if (!matches2)
+        const matches = RELATIVE_JSON_POINTER.exec($data);
+        if (!matches)
           throw new Error(`Invalid JSON-pointer: ${$data}`);
-        const up = +matches2[1];
-        jsonPointer = matches2[2];
+        const up = +matches[1];
+        jsonPointer = matches[2];
         if (jsonPointer === "#") {
           if (up >= dataLevel)
             throw new Error(errorMsg("property/index", up));
@@ -5496,11 +5496,11 @@ var require_schemes = __commonJS({
         urnComponent.error = "URN can not be parsed";
         return urnComponent;
       }
-      const matches2 = urnComponent.path.match(URN_REG);
-      if (matches2 && matches2[0] === urnComponent.path) {
+      const matches = urnComponent.path.match(URN_REG);
+      if (matches && matches[0] === urnComponent.path) {
         const scheme = options.scheme || urnComponent.scheme || "urn";
-        urnComponent.nid = matches2[1].toLowerCase();
-        urnComponent.nss = matches2[2];
+        urnComponent.nid = matches[1].toLowerCase();
+        urnComponent.nss = matches[2];
         const urnScheme = `${scheme}:${options.nid || urnComponent.nid}`;
         const schemeHandler = getSchemeHandler(urnScheme);
         urnComponent.path = void 0;
@@ -5821,11 +5821,11 @@ var require_fast_uri = __commonJS({
     var URI_PARSE = /^(?:([^#/:?]+):)?(?:\/\/((?:([^#/?@]*)@)?(\[[^#/?\]]+\]|[^#/:?]*)(?::(\d*))?))?([^#?]*)(?:\?([^#]*))?(?:#((?:.|[\n\r])*))?/u;
     var AUTHORITY_PREFIX = /^(?:[^#/:?]+:)?\/\/([^/?#]*)/;
     var AUTHORITY_INTRODUCER_REGION = /^(?:[^#/:?]+:)?([/\\\t\n\r]*)/;
-    function getParseError(parsed, matches2) {
-      if (matches2[2] !== void 0 && parsed.path && parsed.path[0] !== "/") {
+    function getParseError(parsed2, matches) {
+      if (matches[2] !== void 0 && parsed2.path && parsed2.path[0] !== "/") {
         return 'URI path must start with "/" when authority is present.';
       }
-      if (typeof parsed.port === "number" && (parsed.port < 0 || parsed.port > 65535)) {
+      if (typeof parsed2.port === "number" && (parsed2.port < 0 || parsed2.port > 65535)) {
         return "URI port is malformed.";
       }
       return void 0;
@@ -5844,34 +5844,34 @@ var require_fast_uri = __commonJS({
     function isIPLiteral(host) {
       return host[0] === "[" && host[host.length - 1] === "]";
     }
-    function hasMalformedComponentPercentEncoding(matches2) {
-      const host = matches2[4];
-      return hasMalformedPercentEncoding(matches2[3]) || host !== void 0 && !isIPLiteral(host) && hasMalformedPercentEncoding(host) || hasMalformedPercentEncoding(matches2[6]) || hasMalformedPercentEncoding(matches2[7]) || hasMalformedPercentEncoding(matches2[8]);
+    function hasMalformedComponentPercentEncoding(matches) {
+      const host = matches[4];
+      return hasMalformedPercentEncoding(matches[3]) || host !== void 0 && !isIPLiteral(host) && hasMalformedPercentEncoding(host) || hasMalformedPercentEncoding(matches[6]) || hasMalformedPercentEncoding(matches[7]) || hasMalformedPercentEncoding(matches[8]);
     }
-    function canonicalizeHost(parsed, options, schemeHandler, isIP) {
-      if (hasForbiddenDomainHost(parsed, options, schemeHandler, isIP)) {
-        parsed.error = parsed.error || MALFORMED_HOST_ERROR;
+    function canonicalizeHost(parsed2, options, schemeHandler, isIP) {
+      if (hasForbiddenDomainHost(parsed2, options, schemeHandler, isIP)) {
+        parsed2.error = parsed2.error || MALFORMED_HOST_ERROR;
         return true;
       }
-      if (!options.unicodeSupport && (!schemeHandler || !schemeHandler.unicodeSupport) && parsed.host && !isIPLiteral(parsed.host) && (options.domainHost || schemeHandler && schemeHandler.domainHost) && isIP === false && nonSimpleDomain(parsed.host)) {
+      if (!options.unicodeSupport && (!schemeHandler || !schemeHandler.unicodeSupport) && parsed2.host && !isIPLiteral(parsed2.host) && (options.domainHost || schemeHandler && schemeHandler.domainHost) && isIP === false && nonSimpleDomain(parsed2.host)) {
         let url;
         try {
-          url = new URL("http://" + parsed.host);
+          url = new URL("http://" + parsed2.host);
         } catch (e) {
-          parsed.error = parsed.error || "Host's domain name can not be converted to ASCII: " + e;
+          parsed2.error = parsed2.error || "Host's domain name can not be converted to ASCII: " + e;
           return true;
         }
         if (!isHostOnlyURL(url)) {
-          parsed.error = parsed.error || MALFORMED_HOST_ERROR;
+          parsed2.error = parsed2.error || MALFORMED_HOST_ERROR;
           return true;
         }
-        parsed.host = url.hostname;
+        parsed2.host = url.hostname;
       }
       return false;
     }
-    function hasForbiddenDomainHost(parsed, options, schemeHandler, isIP) {
+    function hasForbiddenDomainHost(parsed2, options, schemeHandler, isIP) {
       return Boolean(
-        parsed.host && isIP === false && !isIPLiteral(parsed.host) && (options.domainHost || schemeHandler && schemeHandler.domainHost) && FORBIDDEN_DOMAIN_HOST_CHARACTER.test(parsed.host)
+        parsed2.host && isIP === false && !isIPLiteral(parsed2.host) && (options.domainHost || schemeHandler && schemeHandler.domainHost) && FORBIDDEN_DOMAIN_HOST_CHARACTER.test(parsed2.host)
       );
     }
     function isHostOnlyURL(url) {
@@ -5879,7 +5879,7 @@ var require_fast_uri = __commonJS({
     }
     function parseWithStatus(uri, opts) {
       const options = Object.assign({}, opts);
-      const parsed = {
+      const parsed2 = {
         scheme: void 0,
         userinfo: void 0,
         host: "",
@@ -5904,7 +5904,7 @@ var require_fast_uri = __commonJS({
       }
       const authorityMatch = uri.match(AUTHORITY_PREFIX);
       if (authorityMatch !== null && authorityMatch[1].indexOf("\\") !== -1) {
-        parsed.error = "URI authority must not contain a literal backslash.";
+        parsed2.error = "URI authority must not contain a literal backslash.";
         malformedAuthorityOrPort = true;
       }
       const introducerMatch = uri.match(AUTHORITY_INTRODUCER_REGION);
@@ -5913,104 +5913,104 @@ var require_fast_uri = __commonJS({
         const normalizedRegion = region.replace(/[\t\n\r]/g, "");
         if (normalizedRegion.length >= 2) {
           if (normalizedRegion.slice(0, 2) !== "//") {
-            parsed.error = parsed.error || "URI authority must not contain a literal backslash.";
+            parsed2.error = parsed2.error || "URI authority must not contain a literal backslash.";
             malformedAuthorityOrPort = true;
           } else if (region.length !== normalizedRegion.length) {
-            parsed.error = parsed.error || "URI authority introducer must not contain whitespace.";
+            parsed2.error = parsed2.error || "URI authority introducer must not contain whitespace.";
             malformedAuthorityOrPort = true;
           }
         }
       }
-      const matches2 = uri.match(URI_PARSE);
-      if (matches2) {
-        parsed.scheme = matches2[1];
-        parsed.userinfo = matches2[3];
-        parsed.host = matches2[4];
-        parsed.port = parseInt(matches2[5], 10);
-        parsed.path = matches2[6] || "";
-        parsed.query = matches2[7];
-        parsed.fragment = matches2[8];
-        if (parsed.scheme !== void 0) {
-          if (VALID_SCHEME.test(parsed.scheme)) {
-            parsed.scheme = parsed.scheme.toLowerCase();
+      const matches = uri.match(URI_PARSE);
+      if (matches) {
+        parsed2.scheme = matches[1];
+        parsed2.userinfo = matches[3];
+        parsed2.host = matches[4];
+        parsed2.port = parseInt(matches[5], 10);
+        parsed2.path = matches[6] || "";
+        parsed2.query = matches[7];
+        parsed2.fragment = matches[8];
+        if (parsed2.scheme !== void 0) {
+          if (VALID_SCHEME.test(parsed2.scheme)) {
+            parsed2.scheme = parsed2.scheme.toLowerCase();
           } else {
-            parsed.error = parsed.error || MALFORMED_SCHEME_ERROR;
+            parsed2.error = parsed2.error || MALFORMED_SCHEME_ERROR;
             malformedScheme = true;
           }
         }
-        malformedPercentEncoding = hasMalformedComponentPercentEncoding(matches2);
+        malformedPercentEncoding = hasMalformedComponentPercentEncoding(matches);
         if (malformedPercentEncoding) {
-          parsed.error = parsed.error || "URI contains malformed percent-encoding.";
+          parsed2.error = parsed2.error || "URI contains malformed percent-encoding.";
         }
-        if (isNaN(parsed.port)) {
-          parsed.port = matches2[5];
+        if (isNaN(parsed2.port)) {
+          parsed2.port = matches[5];
         }
-        const parseError = getParseError(parsed, matches2);
+        const parseError = getParseError(parsed2, matches);
         if (parseError !== void 0) {
-          parsed.error = parsed.error || parseError;
+          parsed2.error = parsed2.error || parseError;
           malformedAuthorityOrPort = true;
         }
-        if (parsed.host) {
-          const ipv4result = isIPv4(parsed.host);
+        if (parsed2.host) {
+          const ipv4result = isIPv4(parsed2.host);
           if (ipv4result === false) {
-            const bracketedIPLiteral = isIPLiteral(parsed.host);
-            const hasIPLiteralBracket = parsed.host.indexOf("[") !== -1 || parsed.host.indexOf("]") !== -1;
-            const ipv6result = normalizeIPv6(parsed.host);
+            const bracketedIPLiteral = isIPLiteral(parsed2.host);
+            const hasIPLiteralBracket = parsed2.host.indexOf("[") !== -1 || parsed2.host.indexOf("]") !== -1;
+            const ipv6result = normalizeIPv6(parsed2.host);
             isIP = ipv6result.isIPV6 || ipv6result.isIPVFuture === true;
             malformedIPLiteral = hasIPLiteralBracket && (!bracketedIPLiteral || ipv6result.error === true);
-            parsed.host = isIP ? ipv6result.host : ipv6result.host.toLowerCase();
+            parsed2.host = isIP ? ipv6result.host : ipv6result.host.toLowerCase();
             if (malformedIPLiteral) {
-              parsed.error = parsed.error || MALFORMED_HOST_ERROR;
+              parsed2.error = parsed2.error || MALFORMED_HOST_ERROR;
               malformedAuthorityOrPort = true;
             }
           } else {
             isIP = true;
           }
         }
-        if (parsed.scheme === void 0 && parsed.userinfo === void 0 && parsed.host === void 0 && parsed.port === void 0 && parsed.query === void 0 && !parsed.path) {
-          parsed.reference = "same-document";
-        } else if (parsed.scheme === void 0) {
-          parsed.reference = "relative";
-        } else if (parsed.fragment === void 0) {
-          parsed.reference = "absolute";
+        if (parsed2.scheme === void 0 && parsed2.userinfo === void 0 && parsed2.host === void 0 && parsed2.port === void 0 && parsed2.query === void 0 && !parsed2.path) {
+          parsed2.reference = "same-document";
+        } else if (parsed2.scheme === void 0) {
+          parsed2.reference = "relative";
+        } else if (parsed2.fragment === void 0) {
+          parsed2.reference = "absolute";
         } else {
-          parsed.reference = "uri";
+          parsed2.reference = "uri";
         }
-        if (options.reference && options.reference !== "suffix" && options.reference !== parsed.reference) {
-          parsed.error = parsed.error || "URI is not a " + options.reference + " reference.";
+        if (options.reference && options.reference !== "suffix" && options.reference !== parsed2.reference) {
+          parsed2.error = parsed2.error || "URI is not a " + options.reference + " reference.";
         }
-        const schemeHandler = getSchemeHandler(options.scheme || parsed.scheme);
+        const schemeHandler = getSchemeHandler(options.scheme || parsed2.scheme);
         if (!malformedIPLiteral) {
-          malformedHost = canonicalizeHost(parsed, options, schemeHandler, isIP);
+          malformedHost = canonicalizeHost(parsed2, options, schemeHandler, isIP);
         }
-        if (uri.indexOf("%") !== -1 && parsed.host !== void 0 && !malformedIPLiteral) {
-          let host = isIP ? parsed.host : normalizePercentEncoding(parsed.host, true);
+        if (uri.indexOf("%") !== -1 && parsed2.host !== void 0 && !malformedIPLiteral) {
+          let host = isIP ? parsed2.host : normalizePercentEncoding(parsed2.host, true);
           if (!isIP) {
             host = normalizePercentEncoding(host.toLowerCase());
           }
-          parsed.host = isIP || options.scheme !== "null" ? reescapeHostDelimiters(host, isIP) : host;
+          parsed2.host = isIP || options.scheme !== "null" ? reescapeHostDelimiters(host, isIP) : host;
         }
         if (!schemeHandler || schemeHandler && !schemeHandler.skipNormalize) {
-          if (parsed.path) {
-            parsed.path = normalizePathEncoding(parsed.path);
+          if (parsed2.path) {
+            parsed2.path = normalizePathEncoding(parsed2.path);
           }
-          if (parsed.query) {
-            parsed.query = normalizeQueryFragmentEncoding(parsed.query);
+          if (parsed2.query) {
+            parsed2.query = normalizeQueryFragmentEncoding(parsed2.query);
           }
-          if (parsed.fragment) {
-            parsed.fragment = normalizeQueryFragmentEncoding(parsed.fragment);
+          if (parsed2.fragment) {
+            parsed2.fragment = normalizeQueryFragmentEncoding(parsed2.fragment);
           }
         }
         if (schemeHandler && schemeHandler.parse) {
-          schemeHandler.parse(parsed, options);
-          if (schemeHandler === SCHEMES.urn && parsed.nid === void 0) {
+          schemeHandler.parse(parsed2, options);
+          if (schemeHandler === SCHEMES.urn && parsed2.nid === void 0) {
             malformedSchemeSpecific = true;
           }
         }
       } else {
-        parsed.error = parsed.error || "URI can not be parsed.";
+        parsed2.error = parsed2.error || "URI can not be parsed.";
       }
-      return { parsed, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme };
+      return { parsed: parsed2, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme };
     }
     function parse(uri, opts) {
       return parseWithStatus(uri, opts).parsed;
@@ -6019,9 +6019,9 @@ var require_fast_uri = __commonJS({
       return normalizeStringWithStatus(uri, opts).normalized;
     }
     function normalizeStringWithStatus(uri, opts) {
-      const { parsed, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = parseWithStatus(uri, opts);
+      const { parsed: parsed2, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = parseWithStatus(uri, opts);
       return {
-        normalized: malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? uri : serialize(parsed, opts),
+        normalized: malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? uri : serialize(parsed2, opts),
         malformedAuthorityOrPort,
         malformedPercentEncoding,
         malformedSchemeSpecific,
@@ -8294,11 +8294,11 @@ var require_format = __commonJS({
           }
           function getFormat(fmtDef) {
             const code = fmtDef instanceof RegExp ? (0, codegen_1.regexpCode)(fmtDef) : opts.code.formats ? (0, codegen_1._)`${opts.code.formats}${(0, codegen_1.getProperty)(schema)}` : void 0;
-            const fmt = gen.scopeValue("formats", { key: schema, ref: fmtDef, code });
+            const fmt2 = gen.scopeValue("formats", { key: schema, ref: fmtDef, code });
             if (typeof fmtDef == "object" && !(fmtDef instanceof RegExp)) {
-              return [fmtDef.type || "string", fmtDef.validate, (0, codegen_1._)`${fmt}.validate`];
+              return [fmtDef.type || "string", fmtDef.validate, (0, codegen_1._)`${fmt2}.validate`];
             }
-            return ["string", fmtDef, fmt];
+            return ["string", fmtDef, fmt2];
           }
           function validCondition() {
             if (typeof formatDef == "object" && !(formatDef instanceof RegExp) && formatDef.async) {
@@ -8730,10 +8730,10 @@ var require_identity = __commonJS({
     var NODE_TYPE = /* @__PURE__ */ Symbol.for("yaml.node.type");
     var isAlias3 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === ALIAS;
     var isDocument = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === DOC;
-    var isMap3 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === MAP;
-    var isPair2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === PAIR;
-    var isScalar3 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SCALAR2;
-    var isSeq2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SEQ;
+    var isMap7 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === MAP;
+    var isPair3 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === PAIR;
+    var isScalar7 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SCALAR2;
+    var isSeq6 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SEQ;
     function isCollection2(node) {
       if (node && typeof node === "object")
         switch (node[NODE_TYPE]) {
@@ -8754,7 +8754,7 @@ var require_identity = __commonJS({
         }
       return false;
     }
-    var hasAnchor = (node) => (isScalar3(node) || isCollection2(node)) && !!node.anchor;
+    var hasAnchor = (node) => (isScalar7(node) || isCollection2(node)) && !!node.anchor;
     exports.ALIAS = ALIAS;
     exports.DOC = DOC;
     exports.MAP = MAP;
@@ -8766,11 +8766,11 @@ var require_identity = __commonJS({
     exports.isAlias = isAlias3;
     exports.isCollection = isCollection2;
     exports.isDocument = isDocument;
-    exports.isMap = isMap3;
+    exports.isMap = isMap7;
     exports.isNode = isNode;
-    exports.isPair = isPair2;
-    exports.isScalar = isScalar3;
-    exports.isSeq = isSeq2;
+    exports.isPair = isPair3;
+    exports.isScalar = isScalar7;
+    exports.isSeq = isSeq6;
   }
 });
 
@@ -8782,7 +8782,7 @@ var require_visit = __commonJS({
     var BREAK = /* @__PURE__ */ Symbol("break visit");
     var SKIP = /* @__PURE__ */ Symbol("skip children");
     var REMOVE = /* @__PURE__ */ Symbol("remove node");
-    function visit2(node, visitor) {
+    function visit3(node, visitor) {
       const visitor_ = initVisitor(visitor);
       if (identity.isDocument(node)) {
         const cd = visit_(null, node.contents, visitor_, Object.freeze([node]));
@@ -8791,9 +8791,9 @@ var require_visit = __commonJS({
       } else
         visit_(null, node, visitor_, Object.freeze([]));
     }
-    visit2.BREAK = BREAK;
-    visit2.SKIP = SKIP;
-    visit2.REMOVE = REMOVE;
+    visit3.BREAK = BREAK;
+    visit3.SKIP = SKIP;
+    visit3.REMOVE = REMOVE;
     function visit_(key, node, visitor, path) {
       const ctrl = callVisitor(key, node, visitor, path);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
@@ -8927,7 +8927,7 @@ var require_visit = __commonJS({
         throw new Error(`Cannot replace node with ${pt} parent`);
       }
     }
-    exports.visit = visit2;
+    exports.visit = visit3;
     exports.visitAsync = visitAsync;
   }
 });
@@ -8937,7 +8937,7 @@ var require_directives = __commonJS({
   "node_modules/yaml/dist/doc/directives.js"(exports) {
     "use strict";
     var identity = require_identity();
-    var visit2 = require_visit();
+    var visit3 = require_visit();
     var escapeChars = {
       "!": "%21",
       ",": "%2C",
@@ -9081,7 +9081,7 @@ var require_directives = __commonJS({
         let tagNames;
         if (doc && tagEntries.length > 0 && identity.isNode(doc.contents)) {
           const tags = {};
-          visit2.visit(doc.contents, (_key, node) => {
+          visit3.visit(doc.contents, (_key, node) => {
             if (identity.isNode(node) && node.tag)
               tags[node.tag] = true;
           });
@@ -9108,7 +9108,7 @@ var require_anchors = __commonJS({
   "node_modules/yaml/dist/doc/anchors.js"(exports) {
     "use strict";
     var identity = require_identity();
-    var visit2 = require_visit();
+    var visit3 = require_visit();
     function anchorIsValid(anchor) {
       if (/[\x00-\x19\s,[\]{}]/.test(anchor)) {
         const sa = JSON.stringify(anchor);
@@ -9119,7 +9119,7 @@ var require_anchors = __commonJS({
     }
     function anchorNames(root) {
       const anchors = /* @__PURE__ */ new Set();
-      visit2.visit(root, {
+      visit3.visit(root, {
         Value(_key, node) {
           if (node.anchor)
             anchors.add(node.anchor);
@@ -9299,7 +9299,7 @@ var require_Alias = __commonJS({
   "node_modules/yaml/dist/nodes/Alias.js"(exports) {
     "use strict";
     var anchors = require_anchors();
-    var visit2 = require_visit();
+    var visit3 = require_visit();
     var identity = require_identity();
     var Node = require_Node();
     var toJS = require_toJS();
@@ -9325,7 +9325,7 @@ var require_Alias = __commonJS({
           nodes = ctx.aliasResolveCache;
         } else {
           nodes = [];
-          visit2.visit(doc, {
+          visit3.visit(doc, {
             Node: (_key, node) => {
               if (identity.isAlias(node) || identity.hasAnchor(node))
                 nodes.push(node);
@@ -11062,9 +11062,9 @@ var require_stringifyNumber = __commonJS({
     function stringifyNumber({ format, minFractionDigits, tag, value }) {
       if (typeof value === "bigint")
         return String(value);
-      const num2 = typeof value === "number" ? value : Number(value);
-      if (!isFinite(num2))
-        return isNaN(num2) ? ".nan" : num2 < 0 ? "-.inf" : ".inf";
+      const num3 = typeof value === "number" ? value : Number(value);
+      if (!isFinite(num3))
+        return isNaN(num3) ? ".nan" : num3 < 0 ? "-.inf" : ".inf";
       let n = Object.is(value, -0) ? "-0" : JSON.stringify(value);
       if (!format && minFractionDigits && (!tag || tag === "tag:yaml.org,2002:float") && /^-?\d/.test(n) && !n.includes("e")) {
         let i = n.indexOf(".");
@@ -11104,8 +11104,8 @@ var require_float = __commonJS({
       test: /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num3 = Number(node.value);
+        return isFinite(num3) ? num3.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
@@ -11544,8 +11544,8 @@ var require_float2 = __commonJS({
       test: /^[-+]?(?:[0-9][0-9_]*)?(?:\.[0-9_]*)?[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str.replace(/_/g, "")),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num3 = Number(node.value);
+        return isFinite(num3) ? num3.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
@@ -11747,23 +11747,23 @@ var require_timestamp = __commonJS({
     function parseSexagesimal(str, asBigInt) {
       const sign2 = str[0];
       const parts = sign2 === "-" || sign2 === "+" ? str.substring(1) : str;
-      const num2 = (n) => asBigInt ? BigInt(n) : Number(n);
-      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num2(60) + num2(p), num2(0));
-      return sign2 === "-" ? num2(-1) * res : res;
+      const num3 = (n) => asBigInt ? BigInt(n) : Number(n);
+      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num3(60) + num3(p), num3(0));
+      return sign2 === "-" ? num3(-1) * res : res;
     }
     function stringifySexagesimal(node) {
       let { value } = node;
-      let num2 = (n) => n;
+      let num3 = (n) => n;
       if (typeof value === "bigint")
-        num2 = (n) => BigInt(n);
+        num3 = (n) => BigInt(n);
       else if (isNaN(value) || !isFinite(value))
         return stringifyNumber.stringifyNumber(node);
       let sign2 = "";
       if (value < 0) {
         sign2 = "-";
-        value *= num2(-1);
+        value *= num3(-1);
       }
-      const _60 = num2(60);
+      const _60 = num3(60);
       const parts = [value % _60];
       if (value < 60) {
         parts.unshift(0);
@@ -12092,7 +12092,7 @@ var require_Document = __commonJS({
     var applyReviver = require_applyReviver();
     var createNode = require_createNode();
     var directives = require_directives();
-    var Document = class _Document {
+    var Document2 = class _Document {
       constructor(value, replacer, options) {
         this.commentBefore = null;
         this.comment = null;
@@ -12382,7 +12382,7 @@ var require_Document = __commonJS({
         return true;
       throw new Error("Expected a YAML collection as document contents");
     }
-    exports.Document = Document;
+    exports.Document = Document2;
   }
 });
 
@@ -12878,9 +12878,9 @@ var require_resolve_flow_collection = __commonJS({
     var blockMsg = "Block collections are not allowed within flow collections";
     var isBlock = (token) => token && (token.type === "block-map" || token.type === "block-seq");
     function resolveFlowCollection({ composeNode, composeEmptyNode }, ctx, fc, onError, tag) {
-      const isMap3 = fc.start.source === "{";
-      const fcName = isMap3 ? "flow map" : "flow sequence";
-      const NodeClass = tag?.nodeClass ?? (isMap3 ? YAMLMap.YAMLMap : YAMLSeq.YAMLSeq);
+      const isMap7 = fc.start.source === "{";
+      const fcName = isMap7 ? "flow map" : "flow sequence";
+      const NodeClass = tag?.nodeClass ?? (isMap7 ? YAMLMap.YAMLMap : YAMLSeq.YAMLSeq);
       const coll = new NodeClass(ctx.schema);
       coll.flow = true;
       const atRoot = ctx.atRoot;
@@ -12916,7 +12916,7 @@ var require_resolve_flow_collection = __commonJS({
             offset = props.end;
             continue;
           }
-          if (!isMap3 && ctx.options.strict && utilContainsNewline.containsNewline(key))
+          if (!isMap7 && ctx.options.strict && utilContainsNewline.containsNewline(key))
             onError(
               key,
               // checked by containsNewline()
@@ -12956,7 +12956,7 @@ var require_resolve_flow_collection = __commonJS({
             }
           }
         }
-        if (!isMap3 && !sep && !props.found) {
+        if (!isMap7 && !sep && !props.found) {
           const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep, null, props, onError);
           coll.items.push(valueNode);
           offset = valueNode.range[2];
@@ -12979,7 +12979,7 @@ var require_resolve_flow_collection = __commonJS({
             startOnNewline: false
           });
           if (valueProps.found) {
-            if (!isMap3 && !props.found && ctx.options.strict) {
+            if (!isMap7 && !props.found && ctx.options.strict) {
               if (sep)
                 for (const st of sep) {
                   if (st === valueProps.found)
@@ -13011,7 +13011,7 @@ var require_resolve_flow_collection = __commonJS({
           const pair = new Pair.Pair(keyNode, valueNode);
           if (ctx.options.keepSourceTokens)
             pair.srcToken = collItem;
-          if (isMap3) {
+          if (isMap7) {
             const map = coll;
             if (utilMapIncludes.mapIncludes(ctx, map.items, keyNode))
               onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
@@ -13027,7 +13027,7 @@ var require_resolve_flow_collection = __commonJS({
           offset = valueNode ? valueNode.range[2] : valueProps.end;
         }
       }
-      const expectedEnd = isMap3 ? "}" : "]";
+      const expectedEnd = isMap7 ? "}" : "]";
       const [ce, ...ee] = fc.end;
       let cePos = offset;
       if (ce?.source === expectedEnd)
@@ -13747,13 +13747,13 @@ var require_compose_node = __commonJS({
 var require_compose_doc = __commonJS({
   "node_modules/yaml/dist/compose/compose-doc.js"(exports) {
     "use strict";
-    var Document = require_Document();
+    var Document2 = require_Document();
     var composeNode = require_compose_node();
     var resolveEnd = require_resolve_end();
     var resolveProps = require_resolve_props();
     function composeDoc(options, directives, { offset, start, value, end }, onError) {
       const opts = Object.assign({ _directives: directives }, options);
-      const doc = new Document.Document(void 0, opts);
+      const doc = new Document2.Document(void 0, opts);
       const ctx = {
         atKey: false,
         atRoot: true,
@@ -13792,7 +13792,7 @@ var require_composer = __commonJS({
     "use strict";
     var node_process = __require("process");
     var directives = require_directives();
-    var Document = require_Document();
+    var Document2 = require_Document();
     var errors = require_errors2();
     var identity = require_identity();
     var composeDoc = require_compose_doc();
@@ -13981,7 +13981,7 @@ ${end.comment}` : end.comment;
           this.doc = null;
         } else if (forceDoc) {
           const opts = Object.assign({ _directives: this.directives }, this.options);
-          const doc = new Document.Document(void 0, opts);
+          const doc = new Document2.Document(void 0, opts);
           if (this.atDirectives)
             this.onError(endOffset, "MISSING_CHAR", "Missing directives-end indicator line");
           doc.range = [0, endOffset, endOffset];
@@ -14247,15 +14247,15 @@ var require_cst_visit = __commonJS({
     var BREAK = /* @__PURE__ */ Symbol("break visit");
     var SKIP = /* @__PURE__ */ Symbol("skip children");
     var REMOVE = /* @__PURE__ */ Symbol("remove item");
-    function visit2(cst, visitor) {
+    function visit3(cst, visitor) {
       if ("type" in cst && cst.type === "document")
         cst = { start: cst.start, value: cst.value };
       _visit(Object.freeze([]), cst, visitor);
     }
-    visit2.BREAK = BREAK;
-    visit2.SKIP = SKIP;
-    visit2.REMOVE = REMOVE;
-    visit2.itemAtPath = (cst, path) => {
+    visit3.BREAK = BREAK;
+    visit3.SKIP = SKIP;
+    visit3.REMOVE = REMOVE;
+    visit3.itemAtPath = (cst, path) => {
       let item = cst;
       for (const [field, index] of path) {
         const tok = item?.[field];
@@ -14266,8 +14266,8 @@ var require_cst_visit = __commonJS({
       }
       return item;
     };
-    visit2.parentCollection = (cst, path) => {
-      const parent = visit2.itemAtPath(cst, path.slice(0, -1));
+    visit3.parentCollection = (cst, path) => {
+      const parent = visit3.itemAtPath(cst, path.slice(0, -1));
       const field = path[path.length - 1][0];
       const coll = parent?.[field];
       if (coll && "items" in coll)
@@ -14298,7 +14298,7 @@ var require_cst_visit = __commonJS({
       }
       return typeof ctrl === "function" ? ctrl(item, path) : ctrl;
     }
-    exports.visit = visit2;
+    exports.visit = visit3;
   }
 });
 
@@ -14314,7 +14314,7 @@ var require_cst = __commonJS({
     var FLOW_END2 = "";
     var SCALAR2 = "";
     var isCollection2 = (token) => !!token && "items" in token;
-    var isScalar3 = (token) => !!token && (token.type === "scalar" || token.type === "single-quoted-scalar" || token.type === "double-quoted-scalar" || token.type === "block-scalar");
+    var isScalar7 = (token) => !!token && (token.type === "scalar" || token.type === "single-quoted-scalar" || token.type === "double-quoted-scalar" || token.type === "block-scalar");
     function prettyToken(token) {
       switch (token) {
         case BOM:
@@ -14398,7 +14398,7 @@ var require_cst = __commonJS({
     exports.FLOW_END = FLOW_END2;
     exports.SCALAR = SCALAR2;
     exports.isCollection = isCollection2;
-    exports.isScalar = isScalar3;
+    exports.isScalar = isScalar7;
     exports.prettyToken = prettyToken;
     exports.tokenType = tokenType;
   }
@@ -14997,7 +14997,7 @@ var require_lexer = __commonJS({
 var require_line_counter = __commonJS({
   "node_modules/yaml/dist/parse/line-counter.js"(exports) {
     "use strict";
-    var LineCounter3 = class {
+    var LineCounter5 = class {
       constructor() {
         this.lineStarts = [];
         this.addNewLine = (offset) => this.lineStarts.push(offset);
@@ -15020,7 +15020,7 @@ var require_line_counter = __commonJS({
         };
       }
     };
-    exports.LineCounter = LineCounter3;
+    exports.LineCounter = LineCounter5;
   }
 });
 
@@ -15903,7 +15903,7 @@ var require_public_api = __commonJS({
   "node_modules/yaml/dist/public-api.js"(exports) {
     "use strict";
     var composer = require_composer();
-    var Document = require_Document();
+    var Document2 = require_Document();
     var errors = require_errors2();
     var log = require_log();
     var identity = require_identity();
@@ -15928,7 +15928,7 @@ var require_public_api = __commonJS({
         return docs;
       return Object.assign([], { empty: true }, composer$1.streamInfo());
     }
-    function parseDocument3(source, options = {}) {
+    function parseDocument6(source, options = {}) {
       const { lineCounter: lineCounter2, prettyErrors } = parseOptions(options);
       const parser$1 = new parser.Parser(lineCounter2?.addNewLine);
       const composer$1 = new composer.Composer(options);
@@ -15954,7 +15954,7 @@ var require_public_api = __commonJS({
       } else if (options === void 0 && reviver && typeof reviver === "object") {
         options = reviver;
       }
-      const doc = parseDocument3(src, options);
+      const doc = parseDocument6(src, options);
       if (!doc)
         return null;
       doc.warnings.forEach((warning) => log.warn(doc.options.logLevel, warning));
@@ -15986,11 +15986,11 @@ var require_public_api = __commonJS({
       }
       if (identity.isDocument(value) && !_replacer)
         return value.toString(options);
-      return new Document.Document(value, _replacer, options).toString(options);
+      return new Document2.Document(value, _replacer, options).toString(options);
     }
     exports.parse = parse;
     exports.parseAllDocuments = parseAllDocuments;
-    exports.parseDocument = parseDocument3;
+    exports.parseDocument = parseDocument6;
     exports.stringify = stringify;
   }
 });
@@ -16000,7 +16000,7 @@ var require_dist = __commonJS({
   "node_modules/yaml/dist/index.js"(exports) {
     "use strict";
     var composer = require_composer();
-    var Document = require_Document();
+    var Document2 = require_Document();
     var Schema = require_Schema();
     var errors = require_errors2();
     var Alias = require_Alias();
@@ -16014,9 +16014,9 @@ var require_dist = __commonJS({
     var lineCounter = require_line_counter();
     var parser = require_parser();
     var publicApi = require_public_api();
-    var visit2 = require_visit();
+    var visit3 = require_visit();
     exports.Composer = composer.Composer;
-    exports.Document = Document.Document;
+    exports.Document = Document2.Document;
     exports.Schema = Schema.Schema;
     exports.YAMLError = errors.YAMLError;
     exports.YAMLParseError = errors.YAMLParseError;
@@ -16042,8 +16042,1007 @@ var require_dist = __commonJS({
     exports.parseAllDocuments = publicApi.parseAllDocuments;
     exports.parseDocument = publicApi.parseDocument;
     exports.stringify = publicApi.stringify;
-    exports.visit = visit2.visit;
-    exports.visitAsync = visit2.visitAsync;
+    exports.visit = visit3.visit;
+    exports.visitAsync = visit3.visitAsync;
+  }
+});
+
+// node_modules/graphology-utils/is-graph.js
+var require_is_graph = __commonJS({
+  "node_modules/graphology-utils/is-graph.js"(exports, module) {
+    module.exports = function isGraph(value) {
+      return value !== null && typeof value === "object" && typeof value.addUndirectedEdgeWithKey === "function" && typeof value.dropNode === "function" && typeof value.multi === "boolean";
+    };
+  }
+});
+
+// node_modules/graphology-utils/getters.js
+var require_getters = __commonJS({
+  "node_modules/graphology-utils/getters.js"(exports) {
+    function coerceWeight(value) {
+      if (typeof value !== "number" || isNaN(value)) return 1;
+      return value;
+    }
+    function createNodeValueGetter(nameOrFunction, defaultValue) {
+      var getter = {};
+      var coerceToDefault = function(v) {
+        if (typeof v === "undefined") return defaultValue;
+        return v;
+      };
+      if (typeof defaultValue === "function") coerceToDefault = defaultValue;
+      var get = function(attributes) {
+        return coerceToDefault(attributes[nameOrFunction]);
+      };
+      var returnDefault = function() {
+        return coerceToDefault(void 0);
+      };
+      if (typeof nameOrFunction === "string") {
+        getter.fromAttributes = get;
+        getter.fromGraph = function(graph, node) {
+          return get(graph.getNodeAttributes(node));
+        };
+        getter.fromEntry = function(node, attributes) {
+          return get(attributes);
+        };
+      } else if (typeof nameOrFunction === "function") {
+        getter.fromAttributes = function() {
+          throw new Error(
+            "graphology-utils/getters/createNodeValueGetter: irrelevant usage."
+          );
+        };
+        getter.fromGraph = function(graph, node) {
+          return coerceToDefault(
+            nameOrFunction(node, graph.getNodeAttributes(node))
+          );
+        };
+        getter.fromEntry = function(node, attributes) {
+          return coerceToDefault(nameOrFunction(node, attributes));
+        };
+      } else {
+        getter.fromAttributes = returnDefault;
+        getter.fromGraph = returnDefault;
+        getter.fromEntry = returnDefault;
+      }
+      return getter;
+    }
+    function createEdgeValueGetter(nameOrFunction, defaultValue) {
+      var getter = {};
+      var coerceToDefault = function(v) {
+        if (typeof v === "undefined") return defaultValue;
+        return v;
+      };
+      if (typeof defaultValue === "function") coerceToDefault = defaultValue;
+      var get = function(attributes) {
+        return coerceToDefault(attributes[nameOrFunction]);
+      };
+      var returnDefault = function() {
+        return coerceToDefault(void 0);
+      };
+      if (typeof nameOrFunction === "string") {
+        getter.fromAttributes = get;
+        getter.fromGraph = function(graph, edge) {
+          return get(graph.getEdgeAttributes(edge));
+        };
+        getter.fromEntry = function(edge, attributes) {
+          return get(attributes);
+        };
+        getter.fromPartialEntry = getter.fromEntry;
+        getter.fromMinimalEntry = getter.fromEntry;
+      } else if (typeof nameOrFunction === "function") {
+        getter.fromAttributes = function() {
+          throw new Error(
+            "graphology-utils/getters/createEdgeValueGetter: irrelevant usage."
+          );
+        };
+        getter.fromGraph = function(graph, edge) {
+          var extremities = graph.extremities(edge);
+          return coerceToDefault(
+            nameOrFunction(
+              edge,
+              graph.getEdgeAttributes(edge),
+              extremities[0],
+              extremities[1],
+              graph.getNodeAttributes(extremities[0]),
+              graph.getNodeAttributes(extremities[1]),
+              graph.isUndirected(edge)
+            )
+          );
+        };
+        getter.fromEntry = function(e, a, s, t, sa, ta, u) {
+          return coerceToDefault(nameOrFunction(e, a, s, t, sa, ta, u));
+        };
+        getter.fromPartialEntry = function(e, a, s, t) {
+          return coerceToDefault(nameOrFunction(e, a, s, t));
+        };
+        getter.fromMinimalEntry = function(e, a) {
+          return coerceToDefault(nameOrFunction(e, a));
+        };
+      } else {
+        getter.fromAttributes = returnDefault;
+        getter.fromGraph = returnDefault;
+        getter.fromEntry = returnDefault;
+        getter.fromMinimalEntry = returnDefault;
+      }
+      return getter;
+    }
+    exports.createNodeValueGetter = createNodeValueGetter;
+    exports.createEdgeValueGetter = createEdgeValueGetter;
+    exports.createEdgeWeightGetter = function(name) {
+      return createEdgeValueGetter(name, coerceWeight);
+    };
+  }
+});
+
+// node_modules/graphology-layout-forceatlas2/iterate.js
+var require_iterate = __commonJS({
+  "node_modules/graphology-layout-forceatlas2/iterate.js"(exports, module) {
+    var NODE_X = 0;
+    var NODE_Y = 1;
+    var NODE_DX = 2;
+    var NODE_DY = 3;
+    var NODE_OLD_DX = 4;
+    var NODE_OLD_DY = 5;
+    var NODE_MASS = 6;
+    var NODE_CONVERGENCE = 7;
+    var NODE_SIZE = 8;
+    var NODE_FIXED = 9;
+    var EDGE_SOURCE = 0;
+    var EDGE_TARGET = 1;
+    var EDGE_WEIGHT = 2;
+    var REGION_NODE = 0;
+    var REGION_CENTER_X = 1;
+    var REGION_CENTER_Y = 2;
+    var REGION_SIZE = 3;
+    var REGION_NEXT_SIBLING = 4;
+    var REGION_FIRST_CHILD = 5;
+    var REGION_MASS = 6;
+    var REGION_MASS_CENTER_X = 7;
+    var REGION_MASS_CENTER_Y = 8;
+    var SUBDIVISION_ATTEMPTS = 3;
+    var PPN = 10;
+    var PPE = 3;
+    var PPR = 9;
+    var MAX_FORCE = 10;
+    module.exports = function iterate(options, NodeMatrix, EdgeMatrix) {
+      var l, r, n, n1, n2, rn, e, w, g, s;
+      var order = NodeMatrix.length, size = EdgeMatrix.length;
+      var adjustSizes = options.adjustSizes;
+      var thetaSquared = options.barnesHutTheta * options.barnesHutTheta;
+      var outboundAttCompensation, coefficient, xDist, yDist, ewc, distance, factor;
+      var RegionMatrix = [];
+      for (n = 0; n < order; n += PPN) {
+        NodeMatrix[n + NODE_OLD_DX] = NodeMatrix[n + NODE_DX];
+        NodeMatrix[n + NODE_OLD_DY] = NodeMatrix[n + NODE_DY];
+        NodeMatrix[n + NODE_DX] = 0;
+        NodeMatrix[n + NODE_DY] = 0;
+      }
+      if (options.outboundAttractionDistribution) {
+        outboundAttCompensation = 0;
+        for (n = 0; n < order; n += PPN) {
+          outboundAttCompensation += NodeMatrix[n + NODE_MASS];
+        }
+        outboundAttCompensation /= order / PPN;
+      }
+      if (options.barnesHutOptimize) {
+        var minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity, q, q2, subdivisionAttempts;
+        for (n = 0; n < order; n += PPN) {
+          minX = Math.min(minX, NodeMatrix[n + NODE_X]);
+          maxX = Math.max(maxX, NodeMatrix[n + NODE_X]);
+          minY = Math.min(minY, NodeMatrix[n + NODE_Y]);
+          maxY = Math.max(maxY, NodeMatrix[n + NODE_Y]);
+        }
+        var dx = maxX - minX, dy = maxY - minY;
+        if (dx > dy) {
+          minY -= (dx - dy) / 2;
+          maxY = minY + dx;
+        } else {
+          minX -= (dy - dx) / 2;
+          maxX = minX + dy;
+        }
+        RegionMatrix[0 + REGION_NODE] = -1;
+        RegionMatrix[0 + REGION_CENTER_X] = (minX + maxX) / 2;
+        RegionMatrix[0 + REGION_CENTER_Y] = (minY + maxY) / 2;
+        RegionMatrix[0 + REGION_SIZE] = Math.max(maxX - minX, maxY - minY);
+        RegionMatrix[0 + REGION_NEXT_SIBLING] = -1;
+        RegionMatrix[0 + REGION_FIRST_CHILD] = -1;
+        RegionMatrix[0 + REGION_MASS] = 0;
+        RegionMatrix[0 + REGION_MASS_CENTER_X] = 0;
+        RegionMatrix[0 + REGION_MASS_CENTER_Y] = 0;
+        l = 1;
+        for (n = 0; n < order; n += PPN) {
+          r = 0;
+          subdivisionAttempts = SUBDIVISION_ATTEMPTS;
+          while (true) {
+            if (RegionMatrix[r + REGION_FIRST_CHILD] >= 0) {
+              if (NodeMatrix[n + NODE_X] < RegionMatrix[r + REGION_CENTER_X]) {
+                if (NodeMatrix[n + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                  q = RegionMatrix[r + REGION_FIRST_CHILD];
+                } else {
+                  q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR;
+                }
+              } else {
+                if (NodeMatrix[n + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                  q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 2;
+                } else {
+                  q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 3;
+                }
+              }
+              RegionMatrix[r + REGION_MASS_CENTER_X] = (RegionMatrix[r + REGION_MASS_CENTER_X] * RegionMatrix[r + REGION_MASS] + NodeMatrix[n + NODE_X] * NodeMatrix[n + NODE_MASS]) / (RegionMatrix[r + REGION_MASS] + NodeMatrix[n + NODE_MASS]);
+              RegionMatrix[r + REGION_MASS_CENTER_Y] = (RegionMatrix[r + REGION_MASS_CENTER_Y] * RegionMatrix[r + REGION_MASS] + NodeMatrix[n + NODE_Y] * NodeMatrix[n + NODE_MASS]) / (RegionMatrix[r + REGION_MASS] + NodeMatrix[n + NODE_MASS]);
+              RegionMatrix[r + REGION_MASS] += NodeMatrix[n + NODE_MASS];
+              r = q;
+              continue;
+            } else {
+              if (RegionMatrix[r + REGION_NODE] < 0) {
+                RegionMatrix[r + REGION_NODE] = n;
+                break;
+              } else {
+                RegionMatrix[r + REGION_FIRST_CHILD] = l * PPR;
+                w = RegionMatrix[r + REGION_SIZE] / 2;
+                g = RegionMatrix[r + REGION_FIRST_CHILD];
+                RegionMatrix[g + REGION_NODE] = -1;
+                RegionMatrix[g + REGION_CENTER_X] = RegionMatrix[r + REGION_CENTER_X] - w;
+                RegionMatrix[g + REGION_CENTER_Y] = RegionMatrix[r + REGION_CENTER_Y] - w;
+                RegionMatrix[g + REGION_SIZE] = w;
+                RegionMatrix[g + REGION_NEXT_SIBLING] = g + PPR;
+                RegionMatrix[g + REGION_FIRST_CHILD] = -1;
+                RegionMatrix[g + REGION_MASS] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_X] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_Y] = 0;
+                g += PPR;
+                RegionMatrix[g + REGION_NODE] = -1;
+                RegionMatrix[g + REGION_CENTER_X] = RegionMatrix[r + REGION_CENTER_X] - w;
+                RegionMatrix[g + REGION_CENTER_Y] = RegionMatrix[r + REGION_CENTER_Y] + w;
+                RegionMatrix[g + REGION_SIZE] = w;
+                RegionMatrix[g + REGION_NEXT_SIBLING] = g + PPR;
+                RegionMatrix[g + REGION_FIRST_CHILD] = -1;
+                RegionMatrix[g + REGION_MASS] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_X] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_Y] = 0;
+                g += PPR;
+                RegionMatrix[g + REGION_NODE] = -1;
+                RegionMatrix[g + REGION_CENTER_X] = RegionMatrix[r + REGION_CENTER_X] + w;
+                RegionMatrix[g + REGION_CENTER_Y] = RegionMatrix[r + REGION_CENTER_Y] - w;
+                RegionMatrix[g + REGION_SIZE] = w;
+                RegionMatrix[g + REGION_NEXT_SIBLING] = g + PPR;
+                RegionMatrix[g + REGION_FIRST_CHILD] = -1;
+                RegionMatrix[g + REGION_MASS] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_X] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_Y] = 0;
+                g += PPR;
+                RegionMatrix[g + REGION_NODE] = -1;
+                RegionMatrix[g + REGION_CENTER_X] = RegionMatrix[r + REGION_CENTER_X] + w;
+                RegionMatrix[g + REGION_CENTER_Y] = RegionMatrix[r + REGION_CENTER_Y] + w;
+                RegionMatrix[g + REGION_SIZE] = w;
+                RegionMatrix[g + REGION_NEXT_SIBLING] = RegionMatrix[r + REGION_NEXT_SIBLING];
+                RegionMatrix[g + REGION_FIRST_CHILD] = -1;
+                RegionMatrix[g + REGION_MASS] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_X] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_Y] = 0;
+                l += 4;
+                if (NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_X] < RegionMatrix[r + REGION_CENTER_X]) {
+                  if (NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                    q = RegionMatrix[r + REGION_FIRST_CHILD];
+                  } else {
+                    q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR;
+                  }
+                } else {
+                  if (NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                    q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 2;
+                  } else {
+                    q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 3;
+                  }
+                }
+                RegionMatrix[r + REGION_MASS] = NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_MASS];
+                RegionMatrix[r + REGION_MASS_CENTER_X] = NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_X];
+                RegionMatrix[r + REGION_MASS_CENTER_Y] = NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_Y];
+                RegionMatrix[q + REGION_NODE] = RegionMatrix[r + REGION_NODE];
+                RegionMatrix[r + REGION_NODE] = -1;
+                if (NodeMatrix[n + NODE_X] < RegionMatrix[r + REGION_CENTER_X]) {
+                  if (NodeMatrix[n + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                    q2 = RegionMatrix[r + REGION_FIRST_CHILD];
+                  } else {
+                    q2 = RegionMatrix[r + REGION_FIRST_CHILD] + PPR;
+                  }
+                } else {
+                  if (NodeMatrix[n + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                    q2 = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 2;
+                  } else {
+                    q2 = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 3;
+                  }
+                }
+                if (q === q2) {
+                  if (subdivisionAttempts--) {
+                    r = q;
+                    continue;
+                  } else {
+                    subdivisionAttempts = SUBDIVISION_ATTEMPTS;
+                    break;
+                  }
+                }
+                RegionMatrix[q2 + REGION_NODE] = n;
+                break;
+              }
+            }
+          }
+        }
+      }
+      if (options.barnesHutOptimize) {
+        coefficient = options.scalingRatio;
+        for (n = 0; n < order; n += PPN) {
+          r = 0;
+          while (true) {
+            if (RegionMatrix[r + REGION_FIRST_CHILD] >= 0) {
+              distance = Math.pow(
+                NodeMatrix[n + NODE_X] - RegionMatrix[r + REGION_MASS_CENTER_X],
+                2
+              ) + Math.pow(
+                NodeMatrix[n + NODE_Y] - RegionMatrix[r + REGION_MASS_CENTER_Y],
+                2
+              );
+              s = RegionMatrix[r + REGION_SIZE];
+              if (4 * s * s / distance < thetaSquared) {
+                xDist = NodeMatrix[n + NODE_X] - RegionMatrix[r + REGION_MASS_CENTER_X];
+                yDist = NodeMatrix[n + NODE_Y] - RegionMatrix[r + REGION_MASS_CENTER_Y];
+                if (adjustSizes === true) {
+                  if (distance > 0) {
+                    factor = coefficient * NodeMatrix[n + NODE_MASS] * RegionMatrix[r + REGION_MASS] / distance;
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  } else if (distance < 0) {
+                    factor = -coefficient * NodeMatrix[n + NODE_MASS] * RegionMatrix[r + REGION_MASS] / Math.sqrt(distance);
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  }
+                } else {
+                  if (distance > 0) {
+                    factor = coefficient * NodeMatrix[n + NODE_MASS] * RegionMatrix[r + REGION_MASS] / distance;
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  }
+                }
+                r = RegionMatrix[r + REGION_NEXT_SIBLING];
+                if (r < 0) break;
+                continue;
+              } else {
+                r = RegionMatrix[r + REGION_FIRST_CHILD];
+                continue;
+              }
+            } else {
+              rn = RegionMatrix[r + REGION_NODE];
+              if (rn >= 0 && rn !== n) {
+                xDist = NodeMatrix[n + NODE_X] - NodeMatrix[rn + NODE_X];
+                yDist = NodeMatrix[n + NODE_Y] - NodeMatrix[rn + NODE_Y];
+                distance = xDist * xDist + yDist * yDist;
+                if (adjustSizes === true) {
+                  if (distance > 0) {
+                    factor = coefficient * NodeMatrix[n + NODE_MASS] * NodeMatrix[rn + NODE_MASS] / distance;
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  } else if (distance < 0) {
+                    factor = -coefficient * NodeMatrix[n + NODE_MASS] * NodeMatrix[rn + NODE_MASS] / Math.sqrt(distance);
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  }
+                } else {
+                  if (distance > 0) {
+                    factor = coefficient * NodeMatrix[n + NODE_MASS] * NodeMatrix[rn + NODE_MASS] / distance;
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  }
+                }
+              }
+              r = RegionMatrix[r + REGION_NEXT_SIBLING];
+              if (r < 0) break;
+              continue;
+            }
+          }
+        }
+      } else {
+        coefficient = options.scalingRatio;
+        for (n1 = 0; n1 < order; n1 += PPN) {
+          for (n2 = 0; n2 < n1; n2 += PPN) {
+            xDist = NodeMatrix[n1 + NODE_X] - NodeMatrix[n2 + NODE_X];
+            yDist = NodeMatrix[n1 + NODE_Y] - NodeMatrix[n2 + NODE_Y];
+            if (adjustSizes === true) {
+              distance = Math.sqrt(xDist * xDist + yDist * yDist) - NodeMatrix[n1 + NODE_SIZE] - NodeMatrix[n2 + NODE_SIZE];
+              if (distance > 0) {
+                factor = coefficient * NodeMatrix[n1 + NODE_MASS] * NodeMatrix[n2 + NODE_MASS] / distance / distance;
+                NodeMatrix[n1 + NODE_DX] += xDist * factor;
+                NodeMatrix[n1 + NODE_DY] += yDist * factor;
+                NodeMatrix[n2 + NODE_DX] -= xDist * factor;
+                NodeMatrix[n2 + NODE_DY] -= yDist * factor;
+              } else if (distance < 0) {
+                factor = 100 * coefficient * NodeMatrix[n1 + NODE_MASS] * NodeMatrix[n2 + NODE_MASS];
+                NodeMatrix[n1 + NODE_DX] += xDist * factor;
+                NodeMatrix[n1 + NODE_DY] += yDist * factor;
+                NodeMatrix[n2 + NODE_DX] -= xDist * factor;
+                NodeMatrix[n2 + NODE_DY] -= yDist * factor;
+              }
+            } else {
+              distance = Math.sqrt(xDist * xDist + yDist * yDist);
+              if (distance > 0) {
+                factor = coefficient * NodeMatrix[n1 + NODE_MASS] * NodeMatrix[n2 + NODE_MASS] / distance / distance;
+                NodeMatrix[n1 + NODE_DX] += xDist * factor;
+                NodeMatrix[n1 + NODE_DY] += yDist * factor;
+                NodeMatrix[n2 + NODE_DX] -= xDist * factor;
+                NodeMatrix[n2 + NODE_DY] -= yDist * factor;
+              }
+            }
+          }
+        }
+      }
+      g = options.gravity / options.scalingRatio;
+      coefficient = options.scalingRatio;
+      for (n = 0; n < order; n += PPN) {
+        factor = 0;
+        xDist = NodeMatrix[n + NODE_X];
+        yDist = NodeMatrix[n + NODE_Y];
+        distance = Math.sqrt(Math.pow(xDist, 2) + Math.pow(yDist, 2));
+        if (options.strongGravityMode) {
+          if (distance > 0) factor = coefficient * NodeMatrix[n + NODE_MASS] * g;
+        } else {
+          if (distance > 0)
+            factor = coefficient * NodeMatrix[n + NODE_MASS] * g / distance;
+        }
+        NodeMatrix[n + NODE_DX] -= xDist * factor;
+        NodeMatrix[n + NODE_DY] -= yDist * factor;
+      }
+      coefficient = 1 * (options.outboundAttractionDistribution ? outboundAttCompensation : 1);
+      for (e = 0; e < size; e += PPE) {
+        n1 = EdgeMatrix[e + EDGE_SOURCE];
+        n2 = EdgeMatrix[e + EDGE_TARGET];
+        w = EdgeMatrix[e + EDGE_WEIGHT];
+        ewc = Math.pow(w, options.edgeWeightInfluence);
+        xDist = NodeMatrix[n1 + NODE_X] - NodeMatrix[n2 + NODE_X];
+        yDist = NodeMatrix[n1 + NODE_Y] - NodeMatrix[n2 + NODE_Y];
+        if (adjustSizes === true) {
+          distance = Math.sqrt(xDist * xDist + yDist * yDist) - NodeMatrix[n1 + NODE_SIZE] - NodeMatrix[n2 + NODE_SIZE];
+          if (options.linLogMode) {
+            if (options.outboundAttractionDistribution) {
+              if (distance > 0) {
+                factor = -coefficient * ewc * Math.log(1 + distance) / distance / NodeMatrix[n1 + NODE_MASS];
+              }
+            } else {
+              if (distance > 0) {
+                factor = -coefficient * ewc * Math.log(1 + distance) / distance;
+              }
+            }
+          } else {
+            if (options.outboundAttractionDistribution) {
+              if (distance > 0) {
+                factor = -coefficient * ewc / NodeMatrix[n1 + NODE_MASS];
+              }
+            } else {
+              if (distance > 0) {
+                factor = -coefficient * ewc;
+              }
+            }
+          }
+        } else {
+          distance = Math.sqrt(Math.pow(xDist, 2) + Math.pow(yDist, 2));
+          if (options.linLogMode) {
+            if (options.outboundAttractionDistribution) {
+              if (distance > 0) {
+                factor = -coefficient * ewc * Math.log(1 + distance) / distance / NodeMatrix[n1 + NODE_MASS];
+              }
+            } else {
+              if (distance > 0)
+                factor = -coefficient * ewc * Math.log(1 + distance) / distance;
+            }
+          } else {
+            if (options.outboundAttractionDistribution) {
+              distance = 1;
+              factor = -coefficient * ewc / NodeMatrix[n1 + NODE_MASS];
+            } else {
+              distance = 1;
+              factor = -coefficient * ewc;
+            }
+          }
+        }
+        if (distance > 0) {
+          NodeMatrix[n1 + NODE_DX] += xDist * factor;
+          NodeMatrix[n1 + NODE_DY] += yDist * factor;
+          NodeMatrix[n2 + NODE_DX] -= xDist * factor;
+          NodeMatrix[n2 + NODE_DY] -= yDist * factor;
+        }
+      }
+      var force, swinging, traction, nodespeed, newX, newY;
+      if (adjustSizes === true) {
+        for (n = 0; n < order; n += PPN) {
+          if (NodeMatrix[n + NODE_FIXED] !== 1) {
+            force = Math.sqrt(
+              Math.pow(NodeMatrix[n + NODE_DX], 2) + Math.pow(NodeMatrix[n + NODE_DY], 2)
+            );
+            if (force > MAX_FORCE) {
+              NodeMatrix[n + NODE_DX] = NodeMatrix[n + NODE_DX] * MAX_FORCE / force;
+              NodeMatrix[n + NODE_DY] = NodeMatrix[n + NODE_DY] * MAX_FORCE / force;
+            }
+            swinging = NodeMatrix[n + NODE_MASS] * Math.sqrt(
+              (NodeMatrix[n + NODE_OLD_DX] - NodeMatrix[n + NODE_DX]) * (NodeMatrix[n + NODE_OLD_DX] - NodeMatrix[n + NODE_DX]) + (NodeMatrix[n + NODE_OLD_DY] - NodeMatrix[n + NODE_DY]) * (NodeMatrix[n + NODE_OLD_DY] - NodeMatrix[n + NODE_DY])
+            );
+            traction = Math.sqrt(
+              (NodeMatrix[n + NODE_OLD_DX] + NodeMatrix[n + NODE_DX]) * (NodeMatrix[n + NODE_OLD_DX] + NodeMatrix[n + NODE_DX]) + (NodeMatrix[n + NODE_OLD_DY] + NodeMatrix[n + NODE_DY]) * (NodeMatrix[n + NODE_OLD_DY] + NodeMatrix[n + NODE_DY])
+            ) / 2;
+            nodespeed = 0.1 * Math.log(1 + traction) / (1 + Math.sqrt(swinging));
+            newX = NodeMatrix[n + NODE_X] + NodeMatrix[n + NODE_DX] * (nodespeed / options.slowDown);
+            NodeMatrix[n + NODE_X] = newX;
+            newY = NodeMatrix[n + NODE_Y] + NodeMatrix[n + NODE_DY] * (nodespeed / options.slowDown);
+            NodeMatrix[n + NODE_Y] = newY;
+          }
+        }
+      } else {
+        for (n = 0; n < order; n += PPN) {
+          if (NodeMatrix[n + NODE_FIXED] !== 1) {
+            swinging = NodeMatrix[n + NODE_MASS] * Math.sqrt(
+              (NodeMatrix[n + NODE_OLD_DX] - NodeMatrix[n + NODE_DX]) * (NodeMatrix[n + NODE_OLD_DX] - NodeMatrix[n + NODE_DX]) + (NodeMatrix[n + NODE_OLD_DY] - NodeMatrix[n + NODE_DY]) * (NodeMatrix[n + NODE_OLD_DY] - NodeMatrix[n + NODE_DY])
+            );
+            traction = Math.sqrt(
+              (NodeMatrix[n + NODE_OLD_DX] + NodeMatrix[n + NODE_DX]) * (NodeMatrix[n + NODE_OLD_DX] + NodeMatrix[n + NODE_DX]) + (NodeMatrix[n + NODE_OLD_DY] + NodeMatrix[n + NODE_DY]) * (NodeMatrix[n + NODE_OLD_DY] + NodeMatrix[n + NODE_DY])
+            ) / 2;
+            nodespeed = NodeMatrix[n + NODE_CONVERGENCE] * Math.log(1 + traction) / (1 + Math.sqrt(swinging));
+            NodeMatrix[n + NODE_CONVERGENCE] = Math.min(
+              1,
+              Math.sqrt(
+                nodespeed * (Math.pow(NodeMatrix[n + NODE_DX], 2) + Math.pow(NodeMatrix[n + NODE_DY], 2)) / (1 + Math.sqrt(swinging))
+              )
+            );
+            newX = NodeMatrix[n + NODE_X] + NodeMatrix[n + NODE_DX] * (nodespeed / options.slowDown);
+            NodeMatrix[n + NODE_X] = newX;
+            newY = NodeMatrix[n + NODE_Y] + NodeMatrix[n + NODE_DY] * (nodespeed / options.slowDown);
+            NodeMatrix[n + NODE_Y] = newY;
+          }
+        }
+      }
+      return {};
+    };
+  }
+});
+
+// node_modules/graphology-layout-forceatlas2/helpers.js
+var require_helpers = __commonJS({
+  "node_modules/graphology-layout-forceatlas2/helpers.js"(exports) {
+    var PPN = 10;
+    var PPE = 3;
+    exports.assign = function(target) {
+      target = target || {};
+      var objects = Array.prototype.slice.call(arguments).slice(1), i, k, l;
+      for (i = 0, l = objects.length; i < l; i++) {
+        if (!objects[i]) continue;
+        for (k in objects[i]) target[k] = objects[i][k];
+      }
+      return target;
+    };
+    exports.validateSettings = function(settings) {
+      if ("linLogMode" in settings && typeof settings.linLogMode !== "boolean")
+        return { message: "the `linLogMode` setting should be a boolean." };
+      if ("outboundAttractionDistribution" in settings && typeof settings.outboundAttractionDistribution !== "boolean")
+        return {
+          message: "the `outboundAttractionDistribution` setting should be a boolean."
+        };
+      if ("adjustSizes" in settings && typeof settings.adjustSizes !== "boolean")
+        return { message: "the `adjustSizes` setting should be a boolean." };
+      if ("edgeWeightInfluence" in settings && typeof settings.edgeWeightInfluence !== "number")
+        return {
+          message: "the `edgeWeightInfluence` setting should be a number."
+        };
+      if ("scalingRatio" in settings && !(typeof settings.scalingRatio === "number" && settings.scalingRatio >= 0))
+        return { message: "the `scalingRatio` setting should be a number >= 0." };
+      if ("strongGravityMode" in settings && typeof settings.strongGravityMode !== "boolean")
+        return { message: "the `strongGravityMode` setting should be a boolean." };
+      if ("gravity" in settings && !(typeof settings.gravity === "number" && settings.gravity >= 0))
+        return { message: "the `gravity` setting should be a number >= 0." };
+      if ("slowDown" in settings && !(typeof settings.slowDown === "number" || settings.slowDown >= 0))
+        return { message: "the `slowDown` setting should be a number >= 0." };
+      if ("barnesHutOptimize" in settings && typeof settings.barnesHutOptimize !== "boolean")
+        return { message: "the `barnesHutOptimize` setting should be a boolean." };
+      if ("barnesHutTheta" in settings && !(typeof settings.barnesHutTheta === "number" && settings.barnesHutTheta >= 0))
+        return { message: "the `barnesHutTheta` setting should be a number >= 0." };
+      return null;
+    };
+    exports.graphToByteArrays = function(graph, getEdgeWeight) {
+      var order = graph.order;
+      var size = graph.size;
+      var index = {};
+      var j;
+      var NodeMatrix = new Float32Array(order * PPN);
+      var EdgeMatrix = new Float32Array(size * PPE);
+      j = 0;
+      graph.forEachNode(function(node, attr) {
+        index[node] = j;
+        NodeMatrix[j] = attr.x;
+        NodeMatrix[j + 1] = attr.y;
+        NodeMatrix[j + 2] = 0;
+        NodeMatrix[j + 3] = 0;
+        NodeMatrix[j + 4] = 0;
+        NodeMatrix[j + 5] = 0;
+        NodeMatrix[j + 6] = 1;
+        NodeMatrix[j + 7] = 1;
+        NodeMatrix[j + 8] = attr.size || 1;
+        NodeMatrix[j + 9] = attr.fixed ? 1 : 0;
+        j += PPN;
+      });
+      j = 0;
+      graph.forEachEdge(function(edge, attr, source, target, sa, ta, u) {
+        var sj = index[source];
+        var tj = index[target];
+        var weight = getEdgeWeight(edge, attr, source, target, sa, ta, u);
+        NodeMatrix[sj + 6] += weight;
+        NodeMatrix[tj + 6] += weight;
+        EdgeMatrix[j] = sj;
+        EdgeMatrix[j + 1] = tj;
+        EdgeMatrix[j + 2] = weight;
+        j += PPE;
+      });
+      return {
+        nodes: NodeMatrix,
+        edges: EdgeMatrix
+      };
+    };
+    exports.assignLayoutChanges = function(graph, NodeMatrix, outputReducer) {
+      var i = 0;
+      graph.updateEachNodeAttributes(function(node, attr) {
+        attr.x = NodeMatrix[i];
+        attr.y = NodeMatrix[i + 1];
+        i += PPN;
+        return outputReducer ? outputReducer(node, attr) : attr;
+      });
+    };
+    exports.readGraphPositions = function(graph, NodeMatrix) {
+      var i = 0;
+      graph.forEachNode(function(node, attr) {
+        NodeMatrix[i] = attr.x;
+        NodeMatrix[i + 1] = attr.y;
+        i += PPN;
+      });
+    };
+    exports.collectLayoutChanges = function(graph, NodeMatrix, outputReducer) {
+      var nodes = graph.nodes(), positions = {};
+      for (var i = 0, j = 0, l = NodeMatrix.length; i < l; i += PPN) {
+        if (outputReducer) {
+          var newAttr = Object.assign({}, graph.getNodeAttributes(nodes[j]));
+          newAttr.x = NodeMatrix[i];
+          newAttr.y = NodeMatrix[i + 1];
+          newAttr = outputReducer(nodes[j], newAttr);
+          positions[nodes[j]] = {
+            x: newAttr.x,
+            y: newAttr.y
+          };
+        } else {
+          positions[nodes[j]] = {
+            x: NodeMatrix[i],
+            y: NodeMatrix[i + 1]
+          };
+        }
+        j++;
+      }
+      return positions;
+    };
+    exports.createWorker = function createWorker(fn) {
+      var xURL = window.URL || window.webkitURL;
+      var code = fn.toString();
+      var objectUrl = xURL.createObjectURL(
+        new Blob(["(" + code + ").call(this);"], { type: "text/javascript" })
+      );
+      var worker = new Worker(objectUrl);
+      xURL.revokeObjectURL(objectUrl);
+      return worker;
+    };
+  }
+});
+
+// node_modules/graphology-layout-forceatlas2/defaults.js
+var require_defaults2 = __commonJS({
+  "node_modules/graphology-layout-forceatlas2/defaults.js"(exports, module) {
+    module.exports = {
+      linLogMode: false,
+      outboundAttractionDistribution: false,
+      adjustSizes: false,
+      edgeWeightInfluence: 1,
+      scalingRatio: 1,
+      strongGravityMode: false,
+      gravity: 1,
+      slowDown: 1,
+      barnesHutOptimize: false,
+      barnesHutTheta: 0.5
+    };
+  }
+});
+
+// node_modules/graphology-layout-forceatlas2/index.js
+var require_graphology_layout_forceatlas2 = __commonJS({
+  "node_modules/graphology-layout-forceatlas2/index.js"(exports, module) {
+    var isGraph = require_is_graph();
+    var createEdgeWeightGetter = require_getters().createEdgeWeightGetter;
+    var iterate = require_iterate();
+    var helpers = require_helpers();
+    var DEFAULT_SETTINGS = require_defaults2();
+    function abstractSynchronousLayout(assign, graph, params) {
+      if (!isGraph(graph))
+        throw new Error(
+          "graphology-layout-forceatlas2: the given graph is not a valid graphology instance."
+        );
+      if (typeof params === "number") params = { iterations: params };
+      var iterations = params.iterations;
+      if (typeof iterations !== "number")
+        throw new Error(
+          "graphology-layout-forceatlas2: invalid number of iterations."
+        );
+      if (iterations <= 0)
+        throw new Error(
+          "graphology-layout-forceatlas2: you should provide a positive number of iterations."
+        );
+      var getEdgeWeight = createEdgeWeightGetter(
+        "getEdgeWeight" in params ? params.getEdgeWeight : "weight"
+      ).fromEntry;
+      var outputReducer = typeof params.outputReducer === "function" ? params.outputReducer : null;
+      var settings = helpers.assign({}, DEFAULT_SETTINGS, params.settings);
+      var validationError = helpers.validateSettings(settings);
+      if (validationError)
+        throw new Error(
+          "graphology-layout-forceatlas2: " + validationError.message
+        );
+      var matrices = helpers.graphToByteArrays(graph, getEdgeWeight);
+      var i;
+      for (i = 0; i < iterations; i++)
+        iterate(settings, matrices.nodes, matrices.edges);
+      if (assign) {
+        helpers.assignLayoutChanges(graph, matrices.nodes, outputReducer);
+        return;
+      }
+      return helpers.collectLayoutChanges(graph, matrices.nodes);
+    }
+    function inferSettings(graph) {
+      var order = typeof graph === "number" ? graph : graph.order;
+      return {
+        barnesHutOptimize: order > 2e3,
+        strongGravityMode: true,
+        gravity: 0.05,
+        scalingRatio: 10,
+        slowDown: 1 + Math.log(order)
+      };
+    }
+    var synchronousLayout = abstractSynchronousLayout.bind(null, false);
+    synchronousLayout.assign = abstractSynchronousLayout.bind(null, true);
+    synchronousLayout.inferSettings = inferSettings;
+    module.exports = synchronousLayout;
+  }
+});
+
+// node_modules/graphology-layout-noverlap/iterate.js
+var require_iterate2 = __commonJS({
+  "node_modules/graphology-layout-noverlap/iterate.js"(exports, module) {
+    var NODE_X = 0;
+    var NODE_Y = 1;
+    var NODE_SIZE = 2;
+    var PPN = 3;
+    function hashPair(a, b) {
+      return a + "§" + b;
+    }
+    function jitter() {
+      return 0.01 * (0.5 - Math.random());
+    }
+    module.exports = function iterate(options, NodeMatrix) {
+      var margin = options.margin;
+      var ratio = options.ratio;
+      var expansion = options.expansion;
+      var gridSize = options.gridSize;
+      var speed = options.speed;
+      var i, j, x, y, l, size;
+      var converged = true;
+      var length = NodeMatrix.length;
+      var order = length / PPN | 0;
+      var deltaX = new Float32Array(order);
+      var deltaY = new Float32Array(order);
+      var xMin = Infinity;
+      var yMin = Infinity;
+      var xMax = -Infinity;
+      var yMax = -Infinity;
+      for (i = 0; i < length; i += PPN) {
+        x = NodeMatrix[i + NODE_X];
+        y = NodeMatrix[i + NODE_Y];
+        size = NodeMatrix[i + NODE_SIZE] * ratio + margin;
+        xMin = Math.min(xMin, x - size);
+        xMax = Math.max(xMax, x + size);
+        yMin = Math.min(yMin, y - size);
+        yMax = Math.max(yMax, y + size);
+      }
+      var width = xMax - xMin;
+      var height = yMax - yMin;
+      var xCenter = (xMin + xMax) / 2;
+      var yCenter = (yMin + yMax) / 2;
+      xMin = xCenter - expansion * width / 2;
+      xMax = xCenter + expansion * width / 2;
+      yMin = yCenter - expansion * height / 2;
+      yMax = yCenter + expansion * height / 2;
+      var grid = new Array(gridSize * gridSize), gridLength = grid.length, c;
+      for (c = 0; c < gridLength; c++) grid[c] = [];
+      var nxMin, nxMax, nyMin, nyMax;
+      var xMinBox, xMaxBox, yMinBox, yMaxBox;
+      var col, row;
+      for (i = 0; i < length; i += PPN) {
+        x = NodeMatrix[i + NODE_X];
+        y = NodeMatrix[i + NODE_Y];
+        size = NodeMatrix[i + NODE_SIZE] * ratio + margin;
+        nxMin = x - size;
+        nxMax = x + size;
+        nyMin = y - size;
+        nyMax = y + size;
+        xMinBox = Math.floor(gridSize * (nxMin - xMin) / (xMax - xMin));
+        xMaxBox = Math.floor(gridSize * (nxMax - xMin) / (xMax - xMin));
+        yMinBox = Math.floor(gridSize * (nyMin - yMin) / (yMax - yMin));
+        yMaxBox = Math.floor(gridSize * (nyMax - yMin) / (yMax - yMin));
+        for (col = xMinBox; col <= xMaxBox; col++) {
+          for (row = yMinBox; row <= yMaxBox; row++) {
+            grid[col * gridSize + row].push(i);
+          }
+        }
+      }
+      var cell;
+      var collisions = /* @__PURE__ */ new Set();
+      var n1, n2, x1, x2, y1, y2, s1, s2, h;
+      var xDist, yDist, dist, collision;
+      for (c = 0; c < gridLength; c++) {
+        cell = grid[c];
+        for (i = 0, l = cell.length; i < l; i++) {
+          n1 = cell[i];
+          x1 = NodeMatrix[n1 + NODE_X];
+          y1 = NodeMatrix[n1 + NODE_Y];
+          s1 = NodeMatrix[n1 + NODE_SIZE];
+          for (j = i + 1; j < l; j++) {
+            n2 = cell[j];
+            h = hashPair(n1, n2);
+            if (gridLength > 1 && collisions.has(h)) continue;
+            if (gridLength > 1) collisions.add(h);
+            x2 = NodeMatrix[n2 + NODE_X];
+            y2 = NodeMatrix[n2 + NODE_Y];
+            s2 = NodeMatrix[n2 + NODE_SIZE];
+            xDist = x2 - x1;
+            yDist = y2 - y1;
+            dist = Math.sqrt(xDist * xDist + yDist * yDist);
+            collision = dist < s1 * ratio + margin + (s2 * ratio + margin);
+            if (collision) {
+              converged = false;
+              n2 = n2 / PPN | 0;
+              if (dist > 0) {
+                deltaX[n2] += xDist / dist * (1 + s1);
+                deltaY[n2] += yDist / dist * (1 + s1);
+              } else {
+                deltaX[n2] += width * jitter();
+                deltaY[n2] += height * jitter();
+              }
+            }
+          }
+        }
+      }
+      for (i = 0, j = 0; i < length; i += PPN, j++) {
+        NodeMatrix[i + NODE_X] += deltaX[j] * 0.1 * speed;
+        NodeMatrix[i + NODE_Y] += deltaY[j] * 0.1 * speed;
+      }
+      return { converged };
+    };
+  }
+});
+
+// node_modules/graphology-layout-noverlap/helpers.js
+var require_helpers2 = __commonJS({
+  "node_modules/graphology-layout-noverlap/helpers.js"(exports) {
+    var PPN = 3;
+    exports.validateSettings = function(settings) {
+      if ("gridSize" in settings && typeof settings.gridSize !== "number" || settings.gridSize <= 0)
+        return { message: "the `gridSize` setting should be a positive number." };
+      if ("margin" in settings && typeof settings.margin !== "number" || settings.margin < 0)
+        return {
+          message: "the `margin` setting should be 0 or a positive number."
+        };
+      if ("expansion" in settings && typeof settings.expansion !== "number" || settings.expansion <= 0)
+        return { message: "the `expansion` setting should be a positive number." };
+      if ("ratio" in settings && typeof settings.ratio !== "number" || settings.ratio <= 0)
+        return { message: "the `ratio` setting should be a positive number." };
+      if ("speed" in settings && typeof settings.speed !== "number" || settings.speed <= 0)
+        return { message: "the `speed` setting should be a positive number." };
+      return null;
+    };
+    exports.graphToByteArray = function(graph, reducer) {
+      var order = graph.order;
+      var matrix = new Float32Array(order * PPN);
+      var j = 0;
+      graph.forEachNode(function(node, attr) {
+        if (typeof reducer === "function") attr = reducer(node, attr);
+        matrix[j] = attr.x;
+        matrix[j + 1] = attr.y;
+        matrix[j + 2] = attr.size || 1;
+        j += PPN;
+      });
+      return matrix;
+    };
+    exports.assignLayoutChanges = function(graph, NodeMatrix, reducer) {
+      var i = 0;
+      graph.forEachNode(function(node) {
+        var pos = {
+          x: NodeMatrix[i],
+          y: NodeMatrix[i + 1]
+        };
+        if (typeof reducer === "function") pos = reducer(node, pos);
+        graph.mergeNodeAttributes(node, pos);
+        i += PPN;
+      });
+    };
+    exports.collectLayoutChanges = function(graph, NodeMatrix, reducer) {
+      var positions = {};
+      var i = 0;
+      graph.forEachNode(function(node) {
+        var pos = {
+          x: NodeMatrix[i],
+          y: NodeMatrix[i + 1]
+        };
+        if (typeof reducer === "function") pos = reducer(node, pos);
+        positions[node] = pos;
+        i += PPN;
+      });
+      return positions;
+    };
+    exports.createWorker = function createWorker(fn) {
+      var xURL = window.URL || window.webkitURL;
+      var code = fn.toString();
+      var objectUrl = xURL.createObjectURL(
+        new Blob(["(" + code + ").call(this);"], { type: "text/javascript" })
+      );
+      var worker = new Worker(objectUrl);
+      xURL.revokeObjectURL(objectUrl);
+      return worker;
+    };
+  }
+});
+
+// node_modules/graphology-layout-noverlap/defaults.js
+var require_defaults3 = __commonJS({
+  "node_modules/graphology-layout-noverlap/defaults.js"(exports, module) {
+    module.exports = {
+      gridSize: 20,
+      margin: 5,
+      expansion: 1.1,
+      ratio: 1,
+      speed: 3
+    };
+  }
+});
+
+// node_modules/graphology-layout-noverlap/index.js
+var require_graphology_layout_noverlap = __commonJS({
+  "node_modules/graphology-layout-noverlap/index.js"(exports, module) {
+    var isGraph = require_is_graph();
+    var iterate = require_iterate2();
+    var helpers = require_helpers2();
+    var DEFAULT_SETTINGS = require_defaults3();
+    var DEFAULT_MAX_ITERATIONS = 500;
+    function abstractSynchronousLayout(assign, graph, params) {
+      if (!isGraph(graph))
+        throw new Error(
+          "graphology-layout-noverlap: the given graph is not a valid graphology instance."
+        );
+      if (typeof params === "number") params = { maxIterations: params };
+      else params = params || {};
+      var maxIterations = params.maxIterations || DEFAULT_MAX_ITERATIONS;
+      if (typeof maxIterations !== "number" || maxIterations <= 0)
+        throw new Error(
+          "graphology-layout-force: you should provide a positive number of maximum iterations."
+        );
+      var settings = Object.assign({}, DEFAULT_SETTINGS, params.settings), validationError = helpers.validateSettings(settings);
+      if (validationError)
+        throw new Error("graphology-layout-noverlap: " + validationError.message);
+      var matrix = helpers.graphToByteArray(graph, params.inputReducer), converged = false, i;
+      for (i = 0; i < maxIterations && !converged; i++)
+        converged = iterate(settings, matrix).converged;
+      if (assign) {
+        helpers.assignLayoutChanges(graph, matrix, params.outputReducer);
+        return;
+      }
+      return helpers.collectLayoutChanges(graph, matrix, params.outputReducer);
+    }
+    var synchronousLayout = abstractSynchronousLayout.bind(null, false);
+    synchronousLayout.assign = abstractSynchronousLayout.bind(null, true);
+    module.exports = synchronousLayout;
   }
 });
 
@@ -17004,16 +18003,16 @@ var require_saxes = __commonJS({
                 const { entityReturnState } = this;
                 const entity = this.entity + chunk.slice(start, this.prevI);
                 this.state = entityReturnState;
-                let parsed;
+                let parsed2;
                 if (entity === "") {
                   this.fail("empty entity name.");
-                  parsed = "&;";
+                  parsed2 = "&;";
                 } else {
-                  parsed = this.parseEntity(entity);
+                  parsed2 = this.parseEntity(entity);
                   this.entity = "";
                 }
                 if (entityReturnState !== S_TEXT || this.textHandler !== void 0) {
-                  this.text += parsed;
+                  this.text += parsed2;
                 }
                 break loop;
               }
@@ -17938,17 +18937,17 @@ var require_saxes = __commonJS({
           this.fail(this.isName(entity) ? "undefined entity." : "disallowed character in entity name.");
           return `&${entity};`;
         }
-        let num2 = NaN;
+        let num3 = NaN;
         if (entity[1] === "x" && /^#x[0-9a-f]+$/i.test(entity)) {
-          num2 = parseInt(entity.slice(2), 16);
+          num3 = parseInt(entity.slice(2), 16);
         } else if (/^#[0-9]+$/.test(entity)) {
-          num2 = parseInt(entity.slice(1), 10);
+          num3 = parseInt(entity.slice(1), 10);
         }
-        if (!this.isChar(num2)) {
+        if (!this.isChar(num3)) {
           this.fail("malformed character entity.");
           return `&${entity};`;
         }
-        return String.fromCodePoint(num2);
+        return String.fromCodePoint(num3);
       }
     };
     exports.SaxesParser = SaxesParser2;
@@ -17958,6 +18957,15 @@ var require_saxes = __commonJS({
 // src/policy/defaults.ts
 var DEFAULT_POLICY_PATH = ".netbrace.yaml";
 var BUILTIN_POLICY_NAME = "<built-in policy>";
+var CSV_DESIGN_GLOB = "**/*.csv";
+var DEFAULT_DESIGN_GLOBS = [
+  "**/*.graphml",
+  "**/*.gml",
+  "**/*.net.yaml",
+  "**/*.net.yml",
+  "**/*.net.json",
+  CSV_DESIGN_GLOB
+];
 var REGIONAL_UNTIL_KM = 50;
 var DEFAULT_ERROR_MULTIPLE = 2;
 var STARTER_POLICY = `# netbrace policy: what a network design must satisfy before a change to it merges.
@@ -17969,8 +18977,10 @@ var STARTER_POLICY = `# netbrace policy: what a network design must satisfy befo
 version: 1
 
 # Which files are designs (globs from the repository root; "format" forces a format).
+# A CSV that only "**/*.csv" selects is a design when its header has source and target
+# columns; other CSV files are left alone. List CSV designs by another glob to judge them always.
 designs:
-  - paths: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
+  - paths: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json", "**/*.csv"]
 # exclude: ["archive/**"]
 
 # Seed of every random challenge: the same inputs and seed give the same report.
@@ -18011,9 +19021,12 @@ challenges:
 
 # Requirements; severity is fail (the gate fails), warn or notice.
 requirements:
-  # A change may not add a bridge or a cut node that the base did not have.
+  # A change may not add a bridge, a cut node or a shared-risk group (a duct) whose loss cuts
+  # sites off, that the base did not have. A new weak point hidden behind an element that the
+  # change marks hardened is a warning: hardening is a claim the gate cannot check.
   - kind: no-new-spof
     severity: fail
+    hardened-weak-points: warn
   # Areas under the envelopes, tracked for weakening (no floor of their own).
   - kind: area-floor
     challenge: node-failures
@@ -18118,6 +19131,280 @@ function isNetbraceError(e) {
   return e instanceof NetbraceError;
 }
 
+// src/decode.ts
+var EncodingError = class extends DesignError {
+  name = "EncodingError";
+};
+var utf8Decoder = new TextDecoder("utf-8", { fatal: true, ignoreBOM: true });
+
+// src/graph/canonical.ts
+var WHOLE = /^[0-9]+$/;
+function compareIds(a, b) {
+  if (a === b) return 0;
+  return compareParsed(a, WHOLE.test(a) ? stripZeros(a) : null, b, WHOLE.test(b) ? stripZeros(b) : null);
+}
+function compareParsed(a, da, b, db) {
+  if (da !== null && db !== null) {
+    if (da.length !== db.length) return da.length - db.length;
+    if (da !== db) return da < db ? -1 : 1;
+  } else if (da !== null || db !== null) return da !== null ? -1 : 1;
+  return compareCodePoints(a, b);
+}
+function naturalOrder(ids) {
+  const digits = ids.map((id) => WHOLE.test(id) ? stripZeros(id) : null);
+  return ids.map((_, i) => i).sort((a, b) => (ids[a] === ids[b] ? 0 : compareParsed(ids[a], digits[a], ids[b], digits[b])) || a - b);
+}
+function stripZeros(s) {
+  let i = 0;
+  while (i < s.length - 1 && s.charCodeAt(i) === 48) i++;
+  return s.slice(i);
+}
+function compareCodePoints(a, b) {
+  const n = Math.min(a.length, b.length);
+  for (let i = 0; i < n; i++) {
+    const x = a.charCodeAt(i);
+    const y = b.charCodeAt(i);
+    if (x !== y) return unitRank(x) - unitRank(y);
+  }
+  return a.length - b.length;
+}
+function unitRank(u) {
+  if (u >= 55296 && u <= 57343) return u + 8192;
+  if (u >= 57344) return u - 2048;
+  return u;
+}
+function canonicalOrder(t) {
+  const nodes = naturalOrder(t.nodes.map((v) => v.id));
+  const rank = /* @__PURE__ */ new Map();
+  nodes.forEach((i, r) => rank.set(t.nodes[i].id, r));
+  const m = t.links.length;
+  const lo = new Int32Array(m);
+  const hi = new Int32Array(m);
+  t.links.forEach((l, e) => {
+    const s = rank.get(l.source) ?? -1;
+    const d = rank.get(l.target) ?? -1;
+    lo[e] = Math.min(s, d);
+    hi[e] = Math.max(s, d);
+  });
+  const buckets = nodes.length + 1;
+  const start = new Int32Array(buckets + 1);
+  for (let e = 0; e < m; e++) start[lo[e] + 2]++;
+  for (let b = 0; b < buckets; b++) start[b + 1] += start[b];
+  const fill = start.slice(0, buckets);
+  const order = new Int32Array(m);
+  for (let e = 0; e < m; e++) order[fill[lo[e] + 1]++] = e;
+  const cmp = (x, y) => hi[x] - hi[y] || (hi[x] === hi[y] && lo[x] === lo[y] ? compareParallel(t.links[x], t.links[y]) : 0) || x - y;
+  for (let b = 0; b < buckets; b++) {
+    const from = start[b];
+    const to = start[b + 1];
+    if (to - from < 2) continue;
+    if (to - from <= 16) {
+      for (let i = from + 1; i < to; i++) {
+        const e = order[i];
+        let j = i - 1;
+        while (j >= from && cmp(order[j], e) > 0) {
+          order[j + 1] = order[j];
+          j--;
+        }
+        order[j + 1] = e;
+      }
+    } else order.subarray(from, to).sort(cmp);
+  }
+  const links = Array.from(order);
+  const keys = links.map((e) => t.links[e].key);
+  for (let i = 0; i < links.length; ) {
+    let j = i + 1;
+    while (j < links.length && lo[links[j]] === lo[links[i]] && hi[links[j]] === hi[links[i]]) j++;
+    if (j - i > 1) keys.splice(i, j - i, ...keys.slice(i, j).sort(compareKeys));
+    i = j;
+  }
+  const demandEnd = (d, which) => rank.get(d[which]) ?? -1;
+  const demands = t.demands.map((_, i) => i).sort((a, b) => {
+    const x = t.demands[a];
+    const y = t.demands[b];
+    return demandEnd(x, "source") - demandEnd(y, "source") || demandEnd(x, "target") - demandEnd(y, "target") || x.volume - y.volume || a - b;
+  });
+  return { nodes, links, keys, demands, lo, hi };
+}
+function compareKeys(a, b) {
+  return a.length - b.length || compareCodePoints(a, b);
+}
+function compareParallel(a, b) {
+  return compareOptional(a.length, b.length) || compareOptional(a.latency, b.latency) || compareOptional(a.weight, b.weight) || compareOptional(a.capacity, b.capacity) || Number(a.hardened) - Number(b.hardened) || compareCodePoints(groupsKey(a), groupsKey(b)) || compareCodePoints(stableJson(a.attrs), stableJson(b.attrs)) || compareIds(a.id, b.id);
+}
+function compareOptional(a, b) {
+  if (a === b) return 0;
+  if (a === void 0) return -1;
+  if (b === void 0) return 1;
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+function groupsKey(l) {
+  return [...new Set(l.riskGroups)].sort(compareIds).join("\0");
+}
+function stableJson(value) {
+  if (Array.isArray(value)) return `[${value.map(stableJson).join(",")}]`;
+  if (value !== null && typeof value === "object") {
+    const entries = Object.keys(value).sort(compareCodePoints).map((k) => `${JSON.stringify(k)}:${stableJson(value[k])}`);
+    return `{${entries.join(",")}}`;
+  }
+  return JSON.stringify(value) ?? "null";
+}
+
+// src/graph/compact.ts
+function compileTopology(t) {
+  const order = canonicalOrder(t);
+  const nodes = order.nodes.map((i) => t.nodes[i]);
+  const links = order.links.map((e) => t.links[e]);
+  const keys = order.keys;
+  const n = nodes.length;
+  const m = links.length;
+  const nodeIndex = /* @__PURE__ */ new Map();
+  nodes.forEach((node, i) => nodeIndex.set(node.id, i));
+  const linkIndex = /* @__PURE__ */ new Map();
+  const linkSource = new Int32Array(m);
+  const linkTarget = new Int32Array(m);
+  const degree2 = new Int32Array(n);
+  const linkLine = new Int32Array(m);
+  const linkHardened = new Uint8Array(m);
+  let hasLength = false;
+  let hasLatency = false;
+  let hasWeight = false;
+  for (let e = 0; e < m; e++) {
+    const link = links[e];
+    const s = order.lo[order.links[e]];
+    const d = order.hi[order.links[e]];
+    if (s < 0) {
+      throw new Error(`link ${link.id} refers to a node that is not in the design`);
+    }
+    linkSource[e] = s;
+    linkTarget[e] = d;
+    degree2[s]++;
+    degree2[d]++;
+    linkLine[e] = link.pos.line;
+    linkHardened[e] = link.hardened ? 1 : 0;
+    if (!linkIndex.has(link.id)) linkIndex.set(link.id, e);
+    hasLength ||= link.length !== void 0;
+    hasLatency ||= link.latency !== void 0;
+    hasWeight ||= link.weight !== void 0;
+  }
+  const offsets = new Int32Array(n + 1);
+  for (let v = 0; v < n; v++) offsets[v + 1] = offsets[v] + degree2[v];
+  const neighbors = new Int32Array(2 * m);
+  const linkOf = new Int32Array(2 * m);
+  const fill = offsets.slice(0, n);
+  for (let e = 0; e < m; e++) {
+    const s = linkSource[e];
+    const d = linkTarget[e];
+    neighbors[fill[s]] = d;
+    linkOf[fill[s]++] = e;
+    neighbors[fill[d]] = s;
+    linkOf[fill[d]++] = e;
+  }
+  const column = (pick, present, count) => {
+    if (!present) return null;
+    const a = new Float64Array(count);
+    for (let i = 0; i < count; i++) a[i] = pick(i) ?? Number.NaN;
+    return a;
+  };
+  const hasCoords = nodes.some((v) => v.lat !== void 0 && v.lon !== void 0);
+  const nodeHardened = new Uint8Array(n);
+  const nodeLine = new Int32Array(n);
+  nodes.forEach((v, i) => {
+    nodeHardened[i] = v.hardened ? 1 : 0;
+    nodeLine[i] = v.pos.line;
+  });
+  const groupLineOf = /* @__PURE__ */ new Map();
+  for (const g of t.riskGroups) if (!groupLineOf.has(g.id)) groupLineOf.set(g.id, g.pos.line);
+  for (const link of t.links) for (const gid of link.riskGroups) if (!groupLineOf.has(gid)) groupLineOf.set(gid, link.pos.line);
+  const groupIds = [...groupLineOf.keys()].sort(compareIds);
+  const groupPos = /* @__PURE__ */ new Map();
+  groupIds.forEach((id, g) => groupPos.set(id, g));
+  const members = groupIds.map(() => []);
+  links.forEach((link, e) => {
+    for (const gid of link.riskGroups) {
+      const list = members[groupPos.get(gid)];
+      if (list[list.length - 1] !== e) list.push(e);
+    }
+  });
+  const groupOffsets = new Int32Array(groupIds.length + 1);
+  members.forEach((list, g) => groupOffsets[g + 1] = groupOffsets[g] + list.length);
+  const groupLinks = new Int32Array(groupOffsets[groupIds.length]);
+  members.forEach((list, g) => groupLinks.set(list, groupOffsets[g]));
+  const demands = order.demands.map((i) => t.demands[i]);
+  const k = demands.length;
+  const demandSource = new Int32Array(k);
+  const demandTarget = new Int32Array(k);
+  const demandVolume = new Float64Array(k);
+  demands.forEach((d, i) => {
+    demandSource[i] = nodeIndex.get(d.source) ?? -1;
+    demandTarget[i] = nodeIndex.get(d.target) ?? -1;
+    demandVolume[i] = d.volume;
+  });
+  return {
+    n,
+    m,
+    offsets,
+    neighbors,
+    linkOf,
+    linkSource,
+    linkTarget,
+    length: column((e) => links[e].length, hasLength, m),
+    latency: column((e) => links[e].latency, hasLatency, m),
+    weight: column((e) => links[e].weight, hasWeight, m),
+    nodeHardened,
+    linkHardened,
+    lat: column((i) => nodes[i].lat, hasCoords, n),
+    lon: column((i) => nodes[i].lon, hasCoords, n),
+    nodeIds: nodes.map((v) => v.id),
+    nodeLabels: nodes.map((v) => v.label),
+    linkIds: links.map((l) => l.id),
+    linkKeys: keys,
+    nodeIndex,
+    linkIndex,
+    nodeLine,
+    linkLine,
+    groupIds,
+    groupLine: Int32Array.from(groupIds, (id) => groupLineOf.get(id)),
+    groupOffsets,
+    groupLinks,
+    demandSource,
+    demandTarget,
+    demandVolume,
+    latencyBudget: t.latencyBudget
+  };
+}
+function nodesByLine(g, nodes) {
+  return [...nodes].sort((a, b) => g.nodeLine[a] - g.nodeLine[b] || a - b);
+}
+function linksByLine(g, links) {
+  return [...links].sort((a, b) => g.linkLine[a] - g.linkLine[b] || a - b);
+}
+
+// src/graph/element.ts
+function reportElement(g, kind, i) {
+  if (kind === "node") {
+    const label = g.nodeLabels[i];
+    const el = { id: g.nodeIds[i], kind, line: g.nodeLine[i] };
+    if (label !== void 0 && label !== "" && label !== el.id) el.label = label;
+    return el;
+  }
+  if (kind === "link") return { id: g.linkIds[i], kind, line: g.linkLine[i] };
+  return { id: g.groupIds[i], kind, line: g.groupLine[i] };
+}
+function indexOfElement(g, kind, id) {
+  if (kind === "node") return g.nodeIndex.get(id) ?? -1;
+  if (kind === "link") return g.linkIndex.get(id) ?? -1;
+  return g.groupIds.indexOf(id);
+}
+function locateElement(el, ...graphs) {
+  for (const g of graphs) {
+    if (!g) continue;
+    const i = indexOfElement(g, el.kind, el.id);
+    if (i >= 0) return reportElement(g, el.kind, i);
+  }
+  return { id: el.id, kind: el.kind, line: 0 };
+}
+
 // src/graph/mask.ts
 function createMask(g) {
   return { node: new Uint8Array(g.n), link: new Uint8Array(g.m) };
@@ -18206,6 +19493,32 @@ function findCutElements(g, mask = createMask(g)) {
   for (let v = 0; v < n; v++) if (isCut[v]) cutNodes2.push(v);
   return { bridges: bridges2, cutNodes: cutNodes2 };
 }
+function groupLinkMask(g, k, honourHardening, mask = createMask(g)) {
+  for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) {
+    const e = g.groupLinks[p];
+    if (!honourHardening || g.linkHardened[e] === 0) mask.link[e] = 1;
+  }
+  return mask;
+}
+function findStrandingGroups(g, honourHardening, cuts = findCutElements(g)) {
+  const isBridge = new Uint8Array(g.m);
+  for (const e of cuts.bridges) if (!honourHardening || g.linkHardened[e] === 0) isBridge[e] = 1;
+  const intact = findComponents(g).sizes.length;
+  const mask = createMask(g);
+  const out = [];
+  for (let k = 0; k < g.groupIds.length; k++) {
+    mask.link.fill(0);
+    let removed = 0;
+    for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) {
+      const e = g.groupLinks[p];
+      if (isBridge[e] || honourHardening && g.linkHardened[e]) continue;
+      mask.link[e] = 1;
+      removed++;
+    }
+    if (removed > 1 && findComponents(g, mask).sizes.length > intact) out.push(k);
+  }
+  return out;
+}
 
 // src/challenges/rank.ts
 var QUANTUM = 2 ** 32;
@@ -18272,8 +19585,22 @@ function removeUnit(g, mask, kind, u) {
     }
   }
 }
+function countAt(x, count, eligible) {
+  const c = Math.min(x * count, eligible);
+  const whole = Math.round(c);
+  return Math.abs(c - whole) <= 1e-9 * Math.max(1, whole) ? whole : c;
+}
 function stepsAt(x, count, eligible) {
-  return Math.min(Math.round(x * count), eligible);
+  return Math.ceil(countAt(x, count, eligible));
+}
+function valueAtCount(values, c) {
+  const lo = Math.floor(c);
+  const hi = Math.ceil(c);
+  if (!(lo >= 0) || hi >= values.length) return Number.NaN;
+  return lerp(values[lo], values[hi], c - lo);
+}
+function lerp(a, b, w) {
+  return w === 0 || a === b ? a : a + w * (b - a);
 }
 function countOnes(a) {
   let c = 0;
@@ -18765,8 +20092,8 @@ function randomOrderPlan(g, kind, params) {
   const count = unitCount(g, kind);
   const eligible = eligibleUnits(g, kind);
   const available = countOnes(eligible);
-  const stepTable = Int32Array.from(x, (xi) => stepsAt(xi, count, available));
-  const maxUnits = stepTable.length ? stepTable[stepTable.length - 1] : 0;
+  const stepTable = Float64Array.from(x, (xi) => countAt(xi, count, available));
+  const maxUnits = stepTable.length ? Math.ceil(stepTable[stepTable.length - 1]) : 0;
   const idHash = hashIds(unitKeys(g, kind));
   const seedW = seedWord(params.seed);
   const full = new Int32Array(count);
@@ -19511,29 +20838,29 @@ function createLanczos(capacity, maxCount, basis = 24) {
 // src/metrics/kernels/extremal-eigen.ts
 function createExtremalSolver(g, kind, denseLimit, warmStart) {
   const limit = Math.min(g.n, denseLimit);
-  const fiedler = kind === "fiedler";
+  const fiedler2 = kind === "fiedler";
   const dense = createDenseSpectrum(limit);
   const lanczos = createLanczos(g.n, 1);
-  const op = fiedler ? createLaplacianOperator() : createAdjacencyOperator();
-  const one = new Float64Array(fiedler ? g.n : 0);
+  const op = fiedler2 ? createLaplacianOperator() : createAdjacencyOperator();
+  const one = new Float64Array(fiedler2 ? g.n : 0);
   const previous = new Float64Array(warmStart ? g.n : 0);
   const start = new Float64Array(warmStart ? g.n : 0);
   let hasPrevious = false;
   return (part, keys) => {
     const n = part.n;
     if (n <= limit) {
-      const d = fiedler ? dense.laplacian(part) : dense.adjacency(part);
-      return fiedler ? d[1] : d[n - 1];
+      const d = fiedler2 ? dense.laplacian(part) : dense.adjacency(part);
+      return fiedler2 ? d[1] : d[n - 1];
     }
     op.bind(part);
-    if (fiedler) one.fill(1 / Math.sqrt(n), 0, n);
+    if (fiedler2) one.fill(1 / Math.sqrt(n), 0, n);
     const warm = warmStart && hasPrevious;
     if (warm) for (let i = 0; i < n; i++) start[i] = previous[part.toOriginal[i]];
     const r = lanczos.solve(op, {
-      which: fiedler ? "smallest" : "largest",
+      which: fiedler2 ? "smallest" : "largest",
       count: 1,
-      deflation: fiedler ? one : void 0,
-      deflationCount: fiedler ? 1 : 0,
+      deflation: fiedler2 ? one : void 0,
+      deflationCount: fiedler2 ? 1 : 0,
       start: warm ? start : null,
       keys
     });
@@ -20154,7 +21481,7 @@ function siftDown(heap, pos, dist, size, i) {
   heap[i] = v;
   pos[v] = i;
 }
-function shortestPaths(g, cost, source, dist, heap, pos, visit2) {
+function shortestPaths(g, cost, source, dist, heap, pos, visit3) {
   const n = g.n;
   const { offsets, neighbors, linkOf } = g;
   dist.fill(Infinity, 0, n);
@@ -20173,7 +21500,7 @@ function shortestPaths(g, cost, source, dist, heap, pos, visit2) {
       pos[last] = 0;
       siftDown(heap, pos, dist, size, 0);
     }
-    if (visit2 !== void 0 && visit2(v, dv)) return;
+    if (visit3 !== void 0 && visit3(v, dv)) return;
     for (let p = offsets[v]; p < offsets[v + 1]; p++) {
       const w = neighbors[p];
       const at = pos[w];
@@ -20199,10 +21526,19 @@ function createDijkstra(capacity) {
   return {
     dist,
     /** See shortestPaths; results in `dist`. */
-    run(g, cost, source, visit2) {
-      shortestPaths(g, cost, source, dist, heap, pos, visit2);
+    run(g, cost, source, visit3) {
+      shortestPaths(g, cost, source, dist, heap, pos, visit3);
     }
   };
+}
+
+// src/topology/geodesy.ts
+function greatCircleKm(lat1, lon1, lat2, lon2) {
+  const rad = Math.PI / 180;
+  const dLat = (lat2 - lat1) * rad;
+  const dLon = (lon2 - lon1) * rad;
+  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
+  return 2 * 6371.0088 * Math.asin(Math.min(1, Math.sqrt(a)));
 }
 
 // src/metrics/kernels/link-cost.ts
@@ -20220,13 +21556,6 @@ function chooseLinkCost(g) {
   };
   return pick("latency", "ms", g.latency) ?? pick("length", "km", g.length) ?? pick("weight", "", g.weight);
 }
-function greatCircleKm(lat1, lon1, lat2, lon2) {
-  const rad = Math.PI / 180;
-  const dLat = (lat2 - lat1) * rad;
-  const dLon = (lon2 - lon1) * rad;
-  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
-  return 2 * 6371.0088 * Math.asin(Math.min(1, Math.sqrt(a)));
-}
 var FIBRE_MS_PER_KM = 49e-4;
 
 // src/metrics/demand-served.ts
@@ -20243,6 +21572,7 @@ var demandServed = {
   normalization: "served volume / total demand volume; raw = served volume.",
   cost: "linear",
   appliesTo: (g) => totalVolume(g) > 0,
+  needs: { what: "demands", hint: "declare demands (a volume > 0 between two sites) in the design, or take demand_served out of the r-value" },
   create(g, options = {}) {
     const total = totalVolume(g);
     const budget = options.latencyBudget ?? g.latencyBudget;
@@ -20332,7 +21662,7 @@ var diameter = {
 // src/metrics/kernels/banded-resistance.ts
 function createBandedResistance(capacity) {
   const perm = new Int32Array(capacity);
-  const place = new Int32Array(capacity);
+  const place2 = new Int32Array(capacity);
   const queue = new Int32Array(capacity);
   const seen = new Uint8Array(capacity);
   const order = new Int32Array(capacity);
@@ -20384,12 +21714,12 @@ function createBandedResistance(capacity) {
       for (let i = 0; i < n; i++) order[i] = queue[n - 1 - i];
       for (let i = 0; i < n; i++) {
         perm[i] = order[i];
-        place[order[i]] = i;
+        place2[order[i]] = i;
       }
       let b = 0;
       for (let v = 0; v < n; v++) {
         for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
-          const gap = Math.abs(place[v] - place[g.neighbors[p]]);
+          const gap = Math.abs(place2[v] - place2[g.neighbors[p]]);
           if (gap > b) b = gap;
         }
       }
@@ -20409,7 +21739,7 @@ function createBandedResistance(capacity) {
         const v = perm[i];
         band[i * w] = g.offsets[v + 1] - g.offsets[v];
         for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
-          const j = place[g.neighbors[p]];
+          const j = place2[g.neighbors[p]];
           if (j < i) band[i * w + (i - j)] -= 1;
         }
       }
@@ -21008,6 +22338,7 @@ var weightedEfficiency = {
   normalization: "E_w / E_ideal, ideal = every pair joined directly (great-circle distance, at least the cheapest link).",
   cost: "all-pairs",
   appliesTo: (g) => chooseLinkCost(g) !== null,
+  needs: { what: "a latency, length or weight > 0 on every link", hint: "give every link latency_ms or length_km, or take weighted_efficiency out of the r-value" },
   create(g) {
     const cost = chooseLinkCost(g);
     if (!cost) throw new RangeError("weighted_efficiency needs latency, length or weight on every link");
@@ -21084,8 +22415,26 @@ function combineR(spec, values) {
   }
   return sum / weight;
 }
+function unsupportedMetric(g, spec) {
+  for (const m of spec.metrics) {
+    const metric = getMetric(m.id);
+    if (metric.appliesTo(g)) continue;
+    const needs = metric.needs ?? { what: "data this design does not have", hint: `take ${m.id} out of the r-value` };
+    return { id: m.id, message: `metric ${m.id} needs ${needs.what}`, hint: needs.hint };
+  }
+  return void 0;
+}
+var UnsupportedMetricError = class extends RangeError {
+  constructor(problem) {
+    super(`${problem.message} — ${problem.hint}`);
+    this.problem = problem;
+  }
+  problem;
+};
 function createRValue(g, spec, options) {
   validateRSpec(spec);
+  const problem = unsupportedMetric(g, spec);
+  if (problem) throw new UnsupportedMetricError(problem);
   const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, options));
   const values = new Float64Array(evaluators.length);
   return (mask) => {
@@ -21281,7 +22630,7 @@ function searchWorstCase(g, kind, k, rfn, options) {
     }
     if (candidates2.length === 0) break;
     for (const c of candidates2) c.key = [...c.parent.seq, c.u].sort((x, y) => x - y).join(",");
-    candidates2.sort((x, y) => x.r - y.r || compareKeys(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u]));
+    candidates2.sort((x, y) => x.r - y.r || compareKeys2(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u]));
     const next = [];
     const seen = /* @__PURE__ */ new Set();
     for (const c of candidates2) {
@@ -21298,7 +22647,7 @@ function searchWorstCase(g, kind, k, rfn, options) {
   const best = beam[0];
   return done(best.seq, best.values, width > 1 ? "beam" : "greedy");
 }
-function compareKeys(a, b) {
+function compareKeys2(a, b) {
   return compareSeq(a.split(",").map(Number), b.split(",").map(Number));
 }
 function compareSeq(a, b) {
@@ -21427,26 +22776,51 @@ var StepEvaluator = class {
   get stepsAreFree() {
     return this.ufr !== null;
   }
-  /** R after steps[j] units of `order` are removed, for each j. */
+  /**
+   * R after steps[j] units of `order` are removed, for each j (non-decreasing). A real count c
+   * (a fraction of the units, units.ts countAt) reads R linearly between ⌊c⌋ and ⌈c⌉ removals of
+   * this same order, so `order` must hold ⌈c⌉ units; a whole count is R there exactly.
+   */
   at(kind, order, len, steps, out) {
     if (this.ufr !== null) {
       const curve = connectivityCurve(this.g, kind, order, len, this.ws);
-      for (let j = 0; j < steps.length; j++) out[j] = this.ufr(curve, steps[j]);
+      for (let j = 0; j < steps.length; j++) {
+        const c = steps[j];
+        const lo = Math.floor(c);
+        const r = this.ufr(curve, lo);
+        out[j] = c === lo ? r : lerp(r, this.ufr(curve, lo + 1), c - lo);
+      }
       return out;
     }
     const mask = this.mask;
     mask.node.fill(0);
     mask.link.fill(0);
-    let applied = 0;
+    const memo = this.memo;
+    memo.applied = 0;
+    memo.kLast = -1;
+    memo.kPrev = -1;
     for (let j = 0; j < steps.length; j++) {
-      if (j > 0 && steps[j] === steps[j - 1]) {
-        out[j] = out[j - 1];
-        continue;
-      }
-      while (applied < steps[j]) removeUnit(this.g, mask, kind, order[applied++]);
-      out[j] = this.rfn(mask);
+      const c = steps[j];
+      const lo = Math.floor(c);
+      const r = this.rAfter(kind, order, lo);
+      out[j] = c === lo ? r : lerp(r, this.rAfter(kind, order, lo + 1), c - lo);
     }
     return out;
+  }
+  memo = { applied: 0, kLast: -1, rLast: 0, kPrev: -1, rPrev: 0 };
+  /** R after k removals of `order` on the shared mask; k never below the last two asked. */
+  rAfter(kind, order, k) {
+    const memo = this.memo;
+    if (k === memo.kLast) return memo.rLast;
+    if (k === memo.kPrev) return memo.rPrev;
+    if (k < memo.applied) throw new RangeError(`removal counts must not decrease (${k} after ${memo.applied})`);
+    while (memo.applied < k) removeUnit(this.g, this.mask, kind, order[memo.applied++]);
+    const r = this.rfn(this.mask);
+    memo.kPrev = memo.kLast;
+    memo.rPrev = memo.rLast;
+    memo.kLast = k;
+    memo.rLast = r;
+    return r;
   }
   /** R after every step k = 0..len. */
   everyStep(kind, order, len) {
@@ -21463,7 +22837,7 @@ function runTask(g, plan, task) {
     case "band": {
       const bp = bandPlan(g, params);
       const order = new Int32Array(bp.maxUnits);
-      const steps = new Int32Array(bp.x.length);
+      const steps = new Float64Array(bp.x.length);
       const values = [];
       for (let r = task.from; r < task.to; r++) {
         const len = bp.realize(r, order, steps);
@@ -21626,6 +23000,15 @@ function spread(lo, hi) {
   for (let j = 0; j < lo.length; j++) w[j] = hi[j] - lo[j];
   return gridMean(w);
 }
+function attackArea(values, c) {
+  if (values.length === 0) return Number.NaN;
+  if (!(c > 0)) return values[0];
+  const lo = Math.floor(c);
+  let sum = 0;
+  for (let k = 1; k <= lo; k++) sum += values[k];
+  if (c === lo) return sum / c;
+  return (sum + (c - lo) * valueAtCount(values, c)) / c;
+}
 function attackGap(lo, attackAtGrid) {
   let sum = 0;
   let count = 0;
@@ -21652,9 +23035,9 @@ function pairedStatistic(base, head, challenge, statistic, x) {
       if (statistic.kind === "spread") return 0;
       if (x === void 0) throw new RangeError(`${challenge}: the ${statistic.kind} of an attack needs x`);
       const count = a.count ?? a.values.length - 1;
-      const k = Math.round(x * count);
-      if (k >= a.values.length) throw new RangeError(`${challenge}: the attack stops before x = ${x}`);
-      return a.values[k];
+      const r = valueAtCount(a.values, countAt(x, count, count));
+      if (Number.isNaN(r)) throw new RangeError(`${challenge}: the attack stops before x = ${x}`);
+      return r;
     };
     return deterministic(value(atB), value(atH));
   }
@@ -21770,7 +23153,10 @@ var RANKING_PASSES = {
 };
 function planEvaluation(g, spec) {
   validateRSpec(spec.r);
+  const unsupported = unsupportedMetric(g, spec.r);
+  if (unsupported) throw new UnsupportedMetricError(unsupported);
   const degraded = [];
+  const notApplicable = [];
   const items = [];
   const seen = /* @__PURE__ */ new Set();
   for (const p of spec.challenges) {
@@ -21779,11 +23165,11 @@ function planEvaluation(g, spec) {
     const params = resolveParams(g, p, spec.seed);
     const c = getChallenge(p.challenge);
     if (p.challenge === "regional" && sitesWithCoordinates(g).length === 0) {
-      degraded.push("regional: skipped, no site has coordinates (lat/lon)");
+      notApplicable.push({ challenge: "regional", reason: "no site has coordinates (lat/lon)" });
       continue;
     }
     if ((p.challenge === "risk-groups" || p.challenge === "risk-groups-worst") && countOnes(eligibleUnits(g, "group")) === 0) {
-      degraded.push(`${p.challenge}: skipped, the design has no shared-risk group that can fail`);
+      notApplicable.push({ challenge: p.challenge, reason: "the design has no shared-risk group that can fail" });
       continue;
     }
     if (c.type === "contingency") params.worstCase = 0;
@@ -21833,7 +23219,7 @@ function planEvaluation(g, spec) {
     const e = estimate(g, it, rp, free);
     return s + e.band + e.cases + e.fixed + e.worst;
   }, 0);
-  return { r: spec.r, items, degraded, work: work * visits2 };
+  return { r: spec.r, items, degraded, ...notApplicable.length ? { notApplicable } : {}, work: work * visits2 };
 }
 function note(it, reason) {
   it.degraded = it.degraded ? `${it.degraded}; ${reason}` : reason;
@@ -21846,7 +23232,7 @@ function estimate(g, it, rp, free) {
     const m = p.challenge === "regional" ? p.epicentres ?? sitesWithCoordinates(g).length : p.realizations;
     const x = makeGrid(p.until, p.points, p.at);
     const count = unitCount(g, kind);
-    const distinct = p.challenge === "regional" ? x.length : new Set(x.map((v) => Math.round(v * count))).size;
+    const distinct = p.challenge === "regional" ? x.length : new Set(x.flatMap((v) => [Math.floor(v * count), Math.ceil(v * count)])).size;
     e.realizations = m;
     e.band = m * (free ? 2 : distinct * rp + 1);
   } else if (it.type === "attack") {
@@ -21880,20 +23266,22 @@ function structureSummary(g) {
     nodes: g.n,
     links: g.m,
     components: comps.sizes.length,
-    bridges: cuts.bridges.map((e) => ({ id: g.linkIds[e], kind: "link", line: g.linkLine[e] })),
-    cutNodes: cuts.cutNodes.map((v) => ({ id: g.nodeIds[v], kind: "node", line: g.nodeLine[v] }))
+    // Listed as the file lists them.
+    bridges: linksByLine(g, cuts.bridges).map((e) => reportElement(g, "link", e)),
+    cutNodes: nodesByLine(g, cuts.cutNodes).map((v) => reportElement(g, "node", v))
   };
 }
 function assembleEvaluation(g, plan, tasks, results) {
   const samples = /* @__PURE__ */ new Map();
-  const labels = /* @__PURE__ */ new Map();
+  const labels2 = /* @__PURE__ */ new Map();
   const evaluation = {
     r: plan.r,
     structure: structureSummary(g),
     envelopes: [],
     attacks: [],
     contingencies: [],
-    degraded: [...plan.degraded]
+    degraded: [...plan.degraded],
+    ...plan.notApplicable ? { notApplicable: plan.notApplicable.map((x) => ({ ...x })) } : {}
   };
   const envelopeOf2 = /* @__PURE__ */ new Map();
   const attackOf2 = /* @__PURE__ */ new Map();
@@ -21906,7 +23294,7 @@ function assembleEvaluation(g, plan, tasks, results) {
       const bp = bandPlan(g, p);
       const env = buildEnvelope(g, it, bp, values, ev);
       samples.set(p.challenge, values);
-      if (bp.label) labels.set(p.challenge, values.map((_, r) => bp.label(r)));
+      if (bp.label) labels2.set(p.challenge, values.map((_, r) => bp.label(r)));
       envelopeOf2.set(item, env);
       evaluation.envelopes.push(env);
     } else if (it.type === "attack") {
@@ -21916,6 +23304,7 @@ function assembleEvaluation(g, plan, tasks, results) {
       const count = unitCount(g, kind);
       const ids = unitIds(g, kind);
       const values = Array.from(res.values);
+      const until = Math.min(countAt(p.until, count, countOnes(eligibleUnits(g, kind))), res.sequence.length);
       const curve = {
         challenge: p.challenge,
         kind,
@@ -21923,7 +23312,7 @@ function assembleEvaluation(g, plan, tasks, results) {
         values,
         sequence: Array.from(res.sequence, (u) => ids[u]),
         count,
-        area: gridMean(values)
+        area: attackArea(values, until)
       };
       attackOf2.set(item, curve);
       evaluation.attacks.push(curve);
@@ -21946,14 +23335,14 @@ function assembleEvaluation(g, plan, tasks, results) {
     const count = unitCount(g, env.kind);
     const eligible = countOnes(eligibleUnits(g, env.kind));
     const atGrid = env.x.map((x) => {
-      const k = stepsAt(x, count, eligible);
-      return k < worst.values.length ? worst.values[k] : null;
+      const r = valueAtCount(worst.values, countAt(x, count, eligible));
+      return Number.isNaN(r) ? null : r;
     });
     const lo = env.quantiles[quantileKey(env.band[0])].value;
     const gap = attackGap(lo, atGrid);
     if (gap !== null) env.attackGap = { value: gap, attack: worst.challenge };
   }
-  return { evaluation, samples, labels };
+  return { evaluation, samples, labels: labels2 };
 }
 function buildEnvelope(g, it, bp, values, ev) {
   const p = it.params;
@@ -21985,14 +23374,14 @@ function weakestSequences(g, bp, values, ev) {
   const picks = values.map((_, r) => r).sort((a, b) => score[a] - score[b] || a - b).slice(0, WEAKEST_KEPT);
   const ids = unitIds(g, bp.kind);
   const order = new Int32Array(bp.maxUnits);
-  const steps = new Int32Array(bp.x.length);
+  const steps = new Float64Array(bp.x.length);
   return picks.map((r) => {
     const len = bp.realize(r, order, steps);
     const seq = { kind: bp.kind, elements: Array.from(order.subarray(0, len), (u) => ids[u]), values: [], realization: r };
     if (bp.label) seq.label = bp.label(r);
     if (ev.stepsAreFree) {
       seq.values = Array.from(ev.everyStep(bp.kind, order, len).subarray(1));
-    } else {
+    } else if (steps.every((c) => Number.isInteger(c))) {
       const at = [];
       const vals = [];
       for (let j = 0; j < steps.length; j++) {
@@ -22002,137 +23391,15 @@ function weakestSequences(g, bp, values, ev) {
       }
       seq.values = vals;
       seq.steps = at;
+    } else {
+      const whole = /* @__PURE__ */ new Set();
+      for (let j = 0; j < steps.length; j++) for (const k of [Math.floor(steps[j]), Math.ceil(steps[j])]) if (k > 0) whole.add(k);
+      const at = [...whole].sort((a, b) => a - b);
+      seq.values = Array.from(ev.at(bp.kind, order, len, at, new Float64Array(at.length)));
+      seq.steps = at;
     }
     return seq;
   });
-}
-
-// src/graph/compact.ts
-function compileTopology(t) {
-  const n = t.nodes.length;
-  const m = t.links.length;
-  const nodeIndex = /* @__PURE__ */ new Map();
-  t.nodes.forEach((node, i) => nodeIndex.set(node.id, i));
-  const linkIndex = /* @__PURE__ */ new Map();
-  const linkSource = new Int32Array(m);
-  const linkTarget = new Int32Array(m);
-  const degree2 = new Int32Array(n);
-  const linkLine = new Int32Array(m);
-  const linkHardened = new Uint8Array(m);
-  let hasLength = false;
-  let hasLatency = false;
-  let hasWeight = false;
-  for (let e = 0; e < m; e++) {
-    const link = t.links[e];
-    const s = nodeIndex.get(link.source);
-    const d = nodeIndex.get(link.target);
-    if (s === void 0 || d === void 0) {
-      throw new Error(`link ${link.id} refers to a node that is not in the design`);
-    }
-    linkSource[e] = s;
-    linkTarget[e] = d;
-    degree2[s]++;
-    degree2[d]++;
-    linkLine[e] = link.pos.line;
-    linkHardened[e] = link.hardened ? 1 : 0;
-    if (!linkIndex.has(link.id)) linkIndex.set(link.id, e);
-    hasLength ||= link.length !== void 0;
-    hasLatency ||= link.latency !== void 0;
-    hasWeight ||= link.weight !== void 0;
-  }
-  const offsets = new Int32Array(n + 1);
-  for (let v = 0; v < n; v++) offsets[v + 1] = offsets[v] + degree2[v];
-  const neighbors = new Int32Array(2 * m);
-  const linkOf = new Int32Array(2 * m);
-  const fill = offsets.slice(0, n);
-  for (let e = 0; e < m; e++) {
-    const s = linkSource[e];
-    const d = linkTarget[e];
-    neighbors[fill[s]] = d;
-    linkOf[fill[s]++] = e;
-    neighbors[fill[d]] = s;
-    linkOf[fill[d]++] = e;
-  }
-  const column = (pick, present, count) => {
-    if (!present) return null;
-    const a = new Float64Array(count);
-    for (let i = 0; i < count; i++) a[i] = pick(i) ?? Number.NaN;
-    return a;
-  };
-  const hasCoords = t.nodes.some((v) => v.lat !== void 0 && v.lon !== void 0);
-  const nodeHardened = new Uint8Array(n);
-  const nodeLine = new Int32Array(n);
-  t.nodes.forEach((v, i) => {
-    nodeHardened[i] = v.hardened ? 1 : 0;
-    nodeLine[i] = v.pos.line;
-  });
-  const groupIds = [];
-  const groupLineList = [];
-  const groupPos = /* @__PURE__ */ new Map();
-  for (const g of t.riskGroups) {
-    if (groupPos.has(g.id)) continue;
-    groupPos.set(g.id, groupIds.length);
-    groupIds.push(g.id);
-    groupLineList.push(g.pos.line);
-  }
-  const members = groupIds.map(() => []);
-  t.links.forEach((link, e) => {
-    for (const gid of link.riskGroups) {
-      let g = groupPos.get(gid);
-      if (g === void 0) {
-        g = groupIds.length;
-        groupPos.set(gid, g);
-        groupIds.push(gid);
-        groupLineList.push(link.pos.line);
-        members.push([]);
-      }
-      if (members[g][members[g].length - 1] !== e) members[g].push(e);
-    }
-  });
-  const groupOffsets = new Int32Array(groupIds.length + 1);
-  members.forEach((list, g) => groupOffsets[g + 1] = groupOffsets[g] + list.length);
-  const groupLinks = new Int32Array(groupOffsets[groupIds.length]);
-  members.forEach((list, g) => groupLinks.set(list, groupOffsets[g]));
-  const k = t.demands.length;
-  const demandSource = new Int32Array(k);
-  const demandTarget = new Int32Array(k);
-  const demandVolume = new Float64Array(k);
-  t.demands.forEach((d, i) => {
-    demandSource[i] = nodeIndex.get(d.source) ?? -1;
-    demandTarget[i] = nodeIndex.get(d.target) ?? -1;
-    demandVolume[i] = d.volume;
-  });
-  return {
-    n,
-    m,
-    offsets,
-    neighbors,
-    linkOf,
-    linkSource,
-    linkTarget,
-    length: column((e) => t.links[e].length, hasLength, m),
-    latency: column((e) => t.links[e].latency, hasLatency, m),
-    weight: column((e) => t.links[e].weight, hasWeight, m),
-    nodeHardened,
-    linkHardened,
-    lat: column((i) => t.nodes[i].lat, hasCoords, n),
-    lon: column((i) => t.nodes[i].lon, hasCoords, n),
-    nodeIds: t.nodes.map((v) => v.id),
-    linkIds: t.links.map((l) => l.id),
-    linkKeys: t.links.map((l) => l.key),
-    nodeIndex,
-    linkIndex,
-    nodeLine,
-    linkLine,
-    groupIds,
-    groupLine: Int32Array.from(groupLineList),
-    groupOffsets,
-    groupLinks,
-    demandSource,
-    demandTarget,
-    demandVolume,
-    latencyBudget: t.latencyBudget
-  };
 }
 
 // src/gate/budget.ts
@@ -22205,16 +23472,119 @@ function notePairedCuts(result, cuts, spec) {
   }
 }
 
+// src/graph/consequence.ts
+function removalCost(g, mask, intact = findComponents(g, createMask(g))) {
+  const before = intact;
+  const after = findComponents(g, mask);
+  const stranded = [];
+  if (after.largest >= 0) {
+    let home = -1;
+    for (let v = 0; v < g.n && home < 0; v++) if (after.label[v] === after.largest) home = before.label[v];
+    for (let v = 0; v < g.n; v++) {
+      if (mask.node[v] || after.label[v] === after.largest) continue;
+      if (before.label[v] === home) stranded.push(v);
+    }
+  }
+  const demandsLost = [];
+  let volumeLost = 0;
+  let volumeTotal = 0;
+  for (let d = 0; d < g.demandSource.length; d++) {
+    const s = g.demandSource[d];
+    const t = g.demandTarget[d];
+    volumeTotal += g.demandVolume[d];
+    if (s < 0 || t < 0 || before.label[s] !== before.label[t]) continue;
+    const served = !mask.node[s] && !mask.node[t] && after.label[s] === after.label[t];
+    if (!served) {
+      demandsLost.push(d);
+      volumeLost += g.demandVolume[d];
+    }
+  }
+  return { stranded, demandsLost, volumeLost, volumeTotal };
+}
+
+// src/gate/consequence.ts
+var MAX_STRANDED = 20;
+var MAX_COSTED = 500;
+function consequenceOf(g, mask, intact) {
+  const cost = removalCost(g, mask, intact);
+  const out = {
+    stranded: cost.stranded.slice(0, MAX_STRANDED).map((v) => reportElement(g, "node", v)),
+    strandedCount: cost.stranded.length
+  };
+  if (g.demandSource.length > 0) {
+    out.demandsLost = cost.demandsLost.length;
+    out.demandsTotal = g.demandSource.length;
+    out.volumeLost = cost.volumeLost;
+    out.volumeTotal = cost.volumeTotal;
+  }
+  return out;
+}
+function costOf(g, remove, intact) {
+  const mask = createMask(g);
+  remove(mask);
+  return consequenceOf(g, mask, intact);
+}
+function sequenceMask(g, seq) {
+  const mask = createMask(g);
+  for (const id of seq.elements) {
+    const i = indexOfElement(g, seq.kind, id);
+    if (i >= 0) removeUnit(g, mask, seq.kind, i);
+  }
+  return mask;
+}
+function detailed(g, seq, intact) {
+  return {
+    ...seq,
+    located: seq.elements.map((id) => locateElement({ id, kind: seq.kind }, g)),
+    consequence: consequenceOf(g, sequenceMask(g, seq), intact)
+  };
+}
+function withSequenceDetails(ev, g) {
+  const intact = findComponents(g);
+  const envelopes = ev.envelopes.map((env) => {
+    const out = { ...env, weakest: env.weakest.map((s) => detailed(g, s, intact)) };
+    if (env.worstCase) out.worstCase = detailed(g, env.worstCase, intact);
+    return out;
+  });
+  const attacks = ev.attacks.map((a) => a.worstCase ? { ...a, worstCase: detailed(g, a.worstCase, intact) } : a);
+  const contingencies = ev.contingencies.map((c) => ({
+    ...c,
+    worst: c.worst.map((w) => ({ ...w, located: w.elements.map((id) => locateElement({ id, kind: c.kind }, g)) }))
+  }));
+  return { ...ev, envelopes, attacks, contingencies };
+}
+
 // src/gate/describe.ts
 var WHAT = { nodes: "nodes", links: "links", "risk-groups": "risk groups", region: "region" };
-function formatR(x) {
-  const s = x.toFixed(3);
+var MAX_DECIMALS = 12;
+function formatR(x, decimals = 3) {
+  if (!Number.isFinite(x)) return String(x);
+  const s = x.toFixed(decimals);
   if (/^-0\.0+$/.test(s)) return s.slice(1);
   return s.replace(/^-/, "−");
 }
-function formatDelta(delta, se) {
-  const sign2 = delta > 0 && formatR(delta) !== "0.000" ? "+" : "";
-  return `${sign2}${formatR(delta)}${se !== null && se > 0 ? ` ± ${se.toFixed(3)}` : ""}`;
+function decidingDecimals(a, b, min = 3) {
+  if (!Number.isFinite(a) || !Number.isFinite(b) || a === b) return min;
+  for (let d = min; d <= MAX_DECIMALS; d++) if (formatR(a, d) !== formatR(b, d)) return d;
+  return MAX_DECIMALS;
+}
+function changeDecimals(base, head, higherIsBetter, limit) {
+  const drop = higherIsBetter ? base - head : head - base;
+  if (![base, head, limit].every(Number.isFinite)) return 3;
+  const beyond = drop > limit;
+  for (let d = decidingDecimals(drop, limit); d <= MAX_DECIMALS; d++) {
+    const b = Number(base.toFixed(d));
+    const h = Number(head.toFixed(d));
+    const shown2 = Number((higherIsBetter ? b - h : h - b).toFixed(d));
+    const shownLimit = Number(limit.toFixed(d));
+    if (beyond ? shown2 > shownLimit : shown2 <= shownLimit) return d;
+  }
+  return MAX_DECIMALS;
+}
+function formatDelta(delta, se, decimals = 3) {
+  const sign2 = delta > 0 && formatR(delta, decimals) !== formatR(0, decimals) ? "+" : "";
+  const err = se !== null && se > 0 ? ` ± ${Number.isFinite(se) ? se.toFixed(decimals) : "unknown"}` : "";
+  return `${sign2}${formatR(delta, decimals)}${err}`;
 }
 function percent(x) {
   return `${Number((x * 100).toFixed(6))} %`;
@@ -22244,31 +23614,457 @@ function describeRequirement(r, challenges2) {
     case "spread-ceiling":
       return `spread of ${challengeWords(c, r.challenge)} ≤ ${r.max}`;
     case "n-1":
-      return `R after any single ${r.element} removal ≥ ${r.min}`;
+      return `N−1 (${r.element}s): R after any single ${r.element} removal ≥ ${r.min}`;
     case "no-new-spof": {
-      const what = [r.bridges ? "bridges" : "", r.cutNodes ? "cut nodes" : ""].filter(Boolean).join(" or ");
+      const parts = [r.bridges ? "bridges" : "", r.cutNodes ? "cut nodes" : "", r.riskGroups ? "shared-risk groups that strand sites" : ""].filter(Boolean);
+      const what = parts.length > 1 ? `${parts.slice(0, -1).join(", ")} or ${parts[parts.length - 1]}` : parts[0];
       return `no new ${what}`;
     }
   }
+}
+function elementChanges(base, head, m) {
+  const unmatched = (g, toOther) => {
+    const out = [];
+    for (let v = 0; v < g.n; v++) if (toOther.node[v] < 0) out.push(reportElement(g, "node", v));
+    for (let e = 0; e < g.m; e++) if (toOther.link[e] < 0) out.push(reportElement(g, "link", e));
+    for (let k = 0; k < g.groupIds.length; k++) if (toOther.group[k] < 0) out.push(reportElement(g, "group", k));
+    return out.sort((a, b) => a.line - b.line);
+  };
+  const changes = {
+    added: unmatched(head, { node: m.nodeToBase, link: m.linkToBase, group: m.groupToBase }),
+    removed: unmatched(base, { node: m.nodeToHead, link: m.linkToHead, group: m.groupToHead })
+  };
+  const renamed = [
+    ...m.renamedNodes.map(([b, h]) => ({ from: reportElement(base, "node", b), to: reportElement(head, "node", h) })),
+    ...m.renamedGroups.map(([b, h]) => ({ from: reportElement(base, "group", b), to: reportElement(head, "group", h) }))
+  ];
+  if (renamed.length) changes.renamed = renamed;
+  const hardened = hardenedChanges(base, head, m);
+  if (hardened.length) changes.hardened = hardened;
+  return changes;
+}
+function hardenedChanges(base, head, m) {
+  const out = [];
+  for (let v = 0; v < head.n; v++) {
+    const b = m.nodeToBase[v];
+    if (b >= 0 && base.nodeHardened[b] !== head.nodeHardened[v]) out.push({ ...reportElement(head, "node", v), hardened: head.nodeHardened[v] === 1 });
+  }
+  for (let e = 0; e < head.m; e++) {
+    const b = m.linkToBase[e];
+    if (b >= 0 && base.linkHardened[b] !== head.linkHardened[e]) out.push({ ...reportElement(head, "link", e), hardened: head.linkHardened[e] === 1 });
+  }
+  return out.sort((a, b) => a.kind === b.kind ? a.line - b.line : a.kind === "node" ? -1 : 1);
+}
+function spofRowParts(r) {
+  const parts = [];
+  if (r.bridges) parts.push({ kind: "bridges", words: "no new bridges" });
+  if (r.cutNodes) parts.push({ kind: "cut-nodes", words: "no new cut nodes" });
+  if (r.riskGroups) parts.push({ kind: "risk-groups", words: "no new shared-risk groups that strand sites" });
+  return parts.map((p) => ({ id: parts.length > 1 ? `${r.id}/${p.kind}` : r.id, description: p.words, kind: p.kind }));
+}
+var NONE = "–";
+function num(v, unit) {
+  return v === void 0 ? NONE : `${v} ${unit}`.trim();
+}
+function yesNo(v) {
+  return v ? "yes" : "no";
+}
+function place(v) {
+  return v.lat === void 0 || v.lon === void 0 ? NONE : `${v.lat}, ${v.lon}`;
+}
+function groupsOf(l) {
+  return l.riskGroups.length ? [...new Set(l.riskGroups)].sort().join(", ") : "none";
+}
+var NODE_ATTRIBUTES = [
+  { attribute: "label", value: (v) => v.label ?? NONE },
+  { attribute: "kind", value: (v) => v.kind ?? NONE },
+  { attribute: "coordinates", value: place },
+  { attribute: "hardened", value: (v) => yesNo(v.hardened) }
+];
+var LINK_ATTRIBUTES = [
+  { attribute: "risk groups", value: groupsOf },
+  { attribute: "hardened", value: (l) => yesNo(l.hardened) },
+  { attribute: "length", value: (l) => num(l.length, "km") },
+  { attribute: "latency", value: (l) => num(l.latency, "ms") },
+  { attribute: "capacity", value: (l) => num(l.capacity, "Gbit/s") },
+  { attribute: "weight", value: (l) => num(l.weight, "") }
+];
+function designChanges(base, head) {
+  const added = [];
+  const removed = [];
+  const modified = [];
+  const baseNodes = new Map(base.nodes.map((v) => [v.id, v]));
+  const headNodes = new Map(head.nodes.map((v) => [v.id, v]));
+  const baseLinks = new Map(base.links.map((l) => [l.key, l]));
+  const headLinks = new Map(head.links.map((l) => [l.key, l]));
+  for (const v of head.nodes) if (!baseNodes.has(v.id)) added.push({ id: v.id, kind: "node", line: v.pos.line });
+  for (const l of head.links) if (!baseLinks.has(l.key)) added.push({ id: l.id, kind: "link", line: l.pos.line });
+  for (const v of base.nodes) if (!headNodes.has(v.id)) removed.push({ id: v.id, kind: "node", line: v.pos.line });
+  for (const l of base.links) if (!headLinks.has(l.key)) removed.push({ id: l.id, kind: "link", line: l.pos.line });
+  const baseGroups = new Set(base.riskGroups.map((x) => x.id));
+  const headGroups = new Set(head.riskGroups.map((x) => x.id));
+  for (const x of head.riskGroups) if (!baseGroups.has(x.id)) added.push({ id: x.id, kind: "group", line: x.pos.line });
+  for (const x of base.riskGroups) if (!headGroups.has(x.id)) removed.push({ id: x.id, kind: "group", line: x.pos.line });
+  for (const h of head.nodes) {
+    const b = baseNodes.get(h.id);
+    if (!b) continue;
+    for (const a of NODE_ATTRIBUTES) {
+      const before = a.value(b);
+      const after = a.value(h);
+      if (before !== after) modified.push({ id: h.id, kind: "node", attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
+    }
+  }
+  for (const h of head.links) {
+    const b = baseLinks.get(h.key);
+    if (!b) continue;
+    for (const a of LINK_ATTRIBUTES) {
+      const before = a.value(b);
+      const after = a.value(h);
+      if (before !== after) modified.push({ id: h.id, kind: "link", attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
+    }
+  }
+  if (added.length + removed.length + modified.length === 0) return void 0;
+  return modified.length ? { added, removed, modified } : { added, removed };
+}
+
+// src/gate/rename.ts
+function identityMatching(g) {
+  const id = (k) => Int32Array.from({ length: k }, (_, i) => i);
+  return {
+    nodeToHead: id(g.n),
+    nodeToBase: id(g.n),
+    linkToHead: id(g.m),
+    linkToBase: id(g.m),
+    groupToHead: id(g.groupIds.length),
+    groupToBase: id(g.groupIds.length),
+    renamedNodes: [],
+    renamedGroups: []
+  };
+}
+function neighbourhood(g, v, map) {
+  const matched = [];
+  let unmatched = 0;
+  for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+    const w = map[g.neighbors[p]];
+    if (w < 0) unmatched++;
+    else matched.push(w);
+  }
+  matched.sort((a, b) => a - b);
+  return { matched, unmatched };
+}
+function headNeighbourhood(g, h, toBase) {
+  const matched = [];
+  let unmatched = 0;
+  for (let p = g.offsets[h]; p < g.offsets[h + 1]; p++) {
+    const w = g.neighbors[p];
+    if (toBase[w] < 0) unmatched++;
+    else matched.push(w);
+  }
+  matched.sort((a, b) => a - b);
+  return { matched, unmatched };
+}
+var signature = (nb) => `${nb.matched.join(",")}|${nb.unmatched}`;
+function addTo(map, key, value) {
+  const list = map.get(key);
+  if (list) list.push(value);
+  else map.set(key, [value]);
+}
+function matchNodes(base, head) {
+  const toHead = new Int32Array(base.n).fill(-1);
+  const toBase = new Int32Array(head.n).fill(-1);
+  const byId2 = /* @__PURE__ */ new Set();
+  for (let b = 0; b < base.n; b++) {
+    const h = head.nodeIndex.get(base.nodeIds[b]);
+    if (h !== void 0) {
+      toHead[b] = h;
+      toBase[h] = b;
+      byId2.add(b);
+    }
+  }
+  for (; ; ) {
+    const baseBy = /* @__PURE__ */ new Map();
+    const headBy = /* @__PURE__ */ new Map();
+    for (let b = 0; b < base.n; b++) {
+      if (toHead[b] >= 0) continue;
+      const nb = neighbourhood(base, b, toHead);
+      if (nb.matched.length === 0) continue;
+      addTo(baseBy, signature(nb), b);
+    }
+    if (baseBy.size === 0) break;
+    for (let h = 0; h < head.n; h++) {
+      if (toBase[h] >= 0) continue;
+      const nb = headNeighbourhood(head, h, toBase);
+      if (nb.matched.length === 0) continue;
+      addTo(headBy, signature(nb), h);
+    }
+    let made = 0;
+    for (const [key, bs] of baseBy) {
+      const hs = headBy.get(key);
+      if (bs.length !== 1 || hs?.length !== 1) continue;
+      toHead[bs[0]] = hs[0];
+      toBase[hs[0]] = bs[0];
+      made++;
+    }
+    if (made === 0) break;
+  }
+  for (let changed = true; changed; ) {
+    changed = false;
+    for (let b = 0; b < base.n; b++) {
+      const h = toHead[b];
+      if (h < 0 || byId2.has(b)) continue;
+      const nb = neighbourhood(base, b, toHead);
+      const nh = headNeighbourhood(head, h, toBase);
+      if (nb.unmatched === 0 && nh.unmatched === 0 && signature(nb) === signature(nh)) continue;
+      toHead[b] = -1;
+      toBase[h] = -1;
+      changed = true;
+    }
+  }
+  return { toHead, toBase };
+}
+function linksByEnds(g, endOf) {
+  const out = /* @__PURE__ */ new Map();
+  for (let e = 0; e < g.m; e++) {
+    const a = endOf(g.linkSource[e]);
+    const b = endOf(g.linkTarget[e]);
+    if (a < 0 || b < 0) continue;
+    const key = a < b ? `${a}-${b}` : `${b}-${a}`;
+    const list = out.get(key);
+    if (list) list.push(e);
+    else out.set(key, [e]);
+  }
+  return out;
+}
+function groupMembers(g, k) {
+  return Array.from(g.groupLinks.subarray(g.groupOffsets[k], g.groupOffsets[k + 1]));
+}
+function matchDesigns(base, head) {
+  const nodes = matchNodes(base, head);
+  const linkToHead = new Int32Array(base.m).fill(-1);
+  const linkToBase = new Int32Array(head.m).fill(-1);
+  const headLinks = linksByEnds(head, (v) => v);
+  for (const [key, bs] of linksByEnds(base, (v) => nodes.toHead[v])) {
+    const hs = headLinks.get(key) ?? [];
+    for (let i = 0; i < Math.min(bs.length, hs.length); i++) {
+      linkToHead[bs[i]] = hs[i];
+      linkToBase[hs[i]] = bs[i];
+    }
+  }
+  const G = base.groupIds.length;
+  const H = head.groupIds.length;
+  const groupToHead = new Int32Array(G).fill(-1);
+  const groupToBase = new Int32Array(H).fill(-1);
+  const headGroup = new Map(head.groupIds.map((id, k) => [id, k]));
+  for (let k = 0; k < G; k++) {
+    const h = headGroup.get(base.groupIds[k]);
+    if (h !== void 0) {
+      groupToHead[k] = h;
+      groupToBase[h] = k;
+    }
+  }
+  const membersKey = (list) => [...list].sort((a, b) => a - b).join(",");
+  const baseBy = /* @__PURE__ */ new Map();
+  for (let k = 0; k < G; k++) {
+    if (groupToHead[k] >= 0) continue;
+    const mapped = groupMembers(base, k).map((e) => linkToHead[e]);
+    if (mapped.length === 0 || mapped.some((e) => e < 0)) continue;
+    addTo(baseBy, membersKey(mapped), k);
+  }
+  const headBy = /* @__PURE__ */ new Map();
+  for (let h = 0; h < H; h++) {
+    if (groupToBase[h] >= 0) continue;
+    const members = groupMembers(head, h);
+    if (members.length === 0) continue;
+    addTo(headBy, membersKey(members), h);
+  }
+  for (const [key, ks] of baseBy) {
+    const hs = headBy.get(key);
+    if (ks.length !== 1 || hs?.length !== 1) continue;
+    groupToHead[ks[0]] = hs[0];
+    groupToBase[hs[0]] = ks[0];
+  }
+  const renamedNodes = [];
+  for (let h = 0; h < head.n; h++) {
+    const b = nodes.toBase[h];
+    if (b >= 0 && base.nodeIds[b] !== head.nodeIds[h]) renamedNodes.push([b, h]);
+  }
+  const renamedGroups = [];
+  for (let h = 0; h < H; h++) {
+    const b = groupToBase[h];
+    if (b >= 0 && base.groupIds[b] !== head.groupIds[h]) renamedGroups.push([b, h]);
+  }
+  return {
+    nodeToHead: nodes.toHead,
+    nodeToBase: nodes.toBase,
+    linkToHead,
+    linkToBase,
+    groupToHead,
+    groupToBase,
+    renamedNodes,
+    renamedGroups
+  };
+}
+
+// src/report/labels.ts
+function formatElement(e, style = {}) {
+  const id = style.id ?? ((x) => x);
+  const text2 = style.text ?? ((x) => x);
+  const sp = style.space ?? " ";
+  const meta = style.meta ?? ((x) => x);
+  const line = e.line > 0 ? `line${sp}${e.line}` : "";
+  if (e.label) return `${text2(e.label)}${sp}${meta(`(${e.kind}${sp}${id(e.id)}${line ? `, ${line}` : ""})`)}`;
+  return line ? `${id(e.id)}${sp}${meta(`(${line})`)}` : id(e.id);
+}
+
+// src/gate/spof.ts
+function weakPoints(g, honourHardening) {
+  const cuts = findCutElements(g);
+  return {
+    bridges: new Set(cuts.bridges.filter((e) => !honourHardening || !g.linkHardened[e])),
+    cutNodes: new Set(cuts.cutNodes.filter((v) => !honourHardening || !g.nodeHardened[v])),
+    groups: new Set(findStrandingGroups(g, honourHardening, cuts))
+  };
+}
+function finding(rule, severity, message, el, requirement, consequence) {
+  const f = { rule, severity, message, elements: [el], line: el.line, requirement };
+  if (consequence) f.consequence = consequence;
+  return f;
+}
+function siteName(g, v) {
+  return g.nodeLabels[v] || g.nodeIds[v];
+}
+function linkWords(g, e) {
+  return `link ${formatElement(reportElement(g, "link", e))} between ${siteName(g, g.linkSource[e])} and ${siteName(g, g.linkTarget[e])}`;
+}
+function groupWords(g, k, honourHardening) {
+  const members = [];
+  for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) {
+    const e = g.groupLinks[p];
+    if (!honourHardening || !g.linkHardened[e]) members.push(formatElement(reportElement(g, "link", e)));
+  }
+  const list = members.length > 1 ? `${members.slice(0, -1).join(", ")} and ${members[members.length - 1]}` : members[0] ?? "no link";
+  return `shared-risk group ${formatElement(reportElement(g, "group", k))}, which carries ${list},`;
+}
+function newlyHardened(flags, baseFlags, toBase, h) {
+  if (!flags[h]) return false;
+  const b = toBase[h];
+  return b < 0 || !baseFlags[b];
+}
+function judgeSpof(r, description, head, base, matching) {
+  const g = head.graph;
+  const now = weakPoints(g, true);
+  const before = base ? weakPoints(base.graph, true) : void 0;
+  const parts = spofRowParts(r);
+  const sizeOf = (s, kind) => kind === "bridges" ? s.bridges.size : kind === "cut-nodes" ? s.cutNodes.size : s.groups.size;
+  const rows = parts.map((part) => ({
+    id: part.id,
+    description: part.description,
+    severity: r.severity,
+    base: before ? sizeOf(before, part.kind) : null,
+    head: sizeOf(now, part.kind),
+    delta: before ? sizeOf(now, part.kind) - sizeOf(before, part.kind) : null,
+    se: before ? 0 : null,
+    threshold: null,
+    status: "met"
+  }));
+  const findings = [];
+  if (!base || !before || !matching) return { rows, findings };
+  const b = base.graph;
+  const isNew = (set, toBase, h, baseSet) => {
+    const k = toBase[h];
+    return set.has(h) && (k < 0 || !baseSet.has(k));
+  };
+  const intact = findComponents(g);
+  let costed = 0;
+  const cost = (remove) => costed++ < MAX_COSTED ? costOf(g, remove, intact) : void 0;
+  const linkCost = (e) => cost((m) => m.link[e] = 1);
+  const nodeCost = (v) => cost((m) => m.node[v] = 1);
+  const groupCost = (k, honour) => cost((m) => void groupLinkMask(g, k, honour, m));
+  if (r.bridges) {
+    for (const e of linksByLine(g, now.bridges)) {
+      if (!isNew(now.bridges, matching.linkToBase, e, before.bridges)) continue;
+      const message = `${linkWords(g, e)} is a new bridge: losing it splits the design, which the base did not`;
+      findings.push(finding("new-bridge", r.severity, message, reportElement(g, "link", e), r.id, linkCost(e)));
+    }
+  }
+  if (r.cutNodes) {
+    for (const v of nodesByLine(g, now.cutNodes)) {
+      if (!isNew(now.cutNodes, matching.nodeToBase, v, before.cutNodes)) continue;
+      const el = reportElement(g, "node", v);
+      const message = `site ${formatElement(el)} is a new cut node: losing it splits the design, which the base did not`;
+      findings.push(finding("new-cut-node", r.severity, message, el, r.id, nodeCost(v)));
+    }
+  }
+  if (r.riskGroups) {
+    for (const k of [...now.groups].sort((x, y) => x - y)) {
+      if (!isNew(now.groups, matching.groupToBase, k, before.groups)) continue;
+      const message = `${groupWords(g, k, true)} is a new single point of failure: losing it cuts sites off, which the base did not`;
+      findings.push(finding("new-stranding-group", r.severity, message, reportElement(g, "group", k), r.id, groupCost(k, true)));
+    }
+  }
+  if (r.hardenedWeakPoints !== "ignore") {
+    const severity = r.hardenedWeakPoints;
+    const raw = weakPoints(g, false);
+    const rawBefore = weakPoints(b, false);
+    const claim = "the change marks it hardened, so the gate does not count it; hardening is a claim the gate cannot check";
+    if (r.bridges) {
+      for (const e of linksByLine(g, raw.bridges)) {
+        if (now.bridges.has(e) || !isNew(raw.bridges, matching.linkToBase, e, rawBefore.bridges)) continue;
+        if (!newlyHardened(g.linkHardened, b.linkHardened, matching.linkToBase, e)) continue;
+        const message = `${linkWords(g, e)} would be a new bridge (losing it splits the design), but ${claim}`;
+        findings.push(finding("hardened-weak-point", severity, message, reportElement(g, "link", e), r.id, linkCost(e)));
+      }
+    }
+    if (r.cutNodes) {
+      for (const v of nodesByLine(g, raw.cutNodes)) {
+        if (now.cutNodes.has(v) || !isNew(raw.cutNodes, matching.nodeToBase, v, rawBefore.cutNodes)) continue;
+        if (!newlyHardened(g.nodeHardened, b.nodeHardened, matching.nodeToBase, v)) continue;
+        const el = reportElement(g, "node", v);
+        const message = `site ${formatElement(el)} would be a new cut node (losing it splits the design), but ${claim}`;
+        findings.push(finding("hardened-weak-point", severity, message, el, r.id, nodeCost(v)));
+      }
+    }
+    if (r.riskGroups) {
+      for (const k of [...raw.groups].sort((x, y) => x - y)) {
+        if (now.groups.has(k) || !isNew(raw.groups, matching.groupToBase, k, rawBefore.groups)) continue;
+        let hidden = false;
+        for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) {
+          if (newlyHardened(g.linkHardened, b.linkHardened, matching.linkToBase, g.groupLinks[p])) hidden = true;
+        }
+        if (!hidden) continue;
+        const message = `${groupWords(g, k, false)} would cut sites off if lost, but the change marks links of it hardened, so the gate does not count it; hardening is a claim the gate cannot check`;
+        findings.push(finding("hardened-weak-point", severity, message, reportElement(g, "group", k), r.id, groupCost(k, false)));
+      }
+    }
+  }
+  if (costed > MAX_COSTED) {
+    findings.push({
+      rule: "degraded",
+      severity: "notice",
+      message: `${description}: what losing them costs is given for the first ${MAX_COSTED} of ${costed} weak points only (work limit)`,
+      elements: [],
+      line: 0,
+      requirement: r.id
+    });
+  }
+  const partOf = (x) => x.rule === "new-bridge" ? "bridges" : x.rule === "new-cut-node" ? "cut-nodes" : x.rule === "new-stranding-group" ? "risk-groups" : x.elements[0]?.kind === "link" ? "bridges" : x.elements[0]?.kind === "node" ? "cut-nodes" : "risk-groups";
+  parts.forEach((part, i) => {
+    const mine = findings.filter((x) => x.rule !== "degraded" && partOf(x) === part.kind);
+    const weakHere = mine.some((x) => x.rule !== "hardened-weak-point");
+    if (weakHere || mine.length > 0 && r.hardenedWeakPoints === "fail") rows[i].status = "regressed";
+    else if (mine.length > 0) rows[i].status = "uncertain";
+  });
+  for (const x of findings) {
+    const i = parts.findIndex((p) => p.kind === partOf(x));
+    if (x.rule !== "degraded" && i >= 0 && parts.length > 1) x.requirement = parts[i].id;
+  }
+  return { rows, findings };
 }
 
 // src/gate/measure.ts
 var MAX_ELEMENTS = 10;
 function locate(el, head, base) {
-  for (const g of [head, base]) {
-    if (!g) continue;
-    if (el.kind === "node") {
-      const i = g.nodeIndex.get(el.id);
-      if (i !== void 0) return { id: el.id, kind: "node", line: g.nodeLine[i] };
-    } else if (el.kind === "link") {
-      const i = g.linkIndex.get(el.id);
-      if (i !== void 0) return { id: el.id, kind: "link", line: g.linkLine[i] };
-    } else {
-      const i = g.groupIds.indexOf(el.id);
-      if (i >= 0) return { id: el.id, kind: "group", line: g.groupLine[i] };
-    }
-  }
-  return { id: el.id, kind: el.kind, line: 0 };
+  return locateElement(el, head, base);
 }
 function envelopeOf(side, c) {
   return side.result.evaluation.envelopes.find((e) => e.challenge === c.engine);
@@ -22280,7 +24076,7 @@ function contingencyOf(side, element) {
   return side.result.evaluation.contingencies.find((x) => x.challenge === "n-1" && x.kind === element);
 }
 function removalsAt(g, kind, x) {
-  return stepsAt(x, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
+  return countAt(x, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
 }
 function sequenceElements(seq, count = MAX_ELEMENTS) {
   if (!seq) return [];
@@ -22338,8 +24134,15 @@ function ownSe(head, env, stat, x) {
   };
   return pairedStatistic(zero, head, env.challenge, stat, x).se;
 }
-function missing(reason, higherIsBetter = true) {
-  return { base: null, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason };
+function missing(reason, higherIsBetter = true, base = null, notApplicable = false) {
+  return { base, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason, ...notApplicable ? { notApplicable } : {} };
+}
+function didNotRun(side, c) {
+  const why = notApplicableReason(side, c);
+  return why !== void 0 ? `challenge "${c.name}" does not apply to this design: ${why}` : `challenge "${c.name}" did not run on this design`;
+}
+function notApplicableReason(side, c) {
+  return c ? side.result.evaluation.notApplicable?.find((x) => x.challenge === c.engine)?.reason : void 0;
 }
 function deterministic2(req, c, side) {
   if (req.kind === "n-1") {
@@ -22364,12 +24167,13 @@ function deterministic2(req, c, side) {
     return out;
   }
   const curve = attackOf(side, c);
-  if (!curve) return `challenge "${c.name}" did not run on this design`;
+  if (!curve) return didNotRun(side, c);
   if (req.kind === "area-floor") return { value: curve.area, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }) };
   const t = req;
   const k = removalsAt(side.graph, curve.kind, t.at ?? 0);
-  if (k >= curve.values.length) return `the attack "${c.name}" ends before ${t.at}`;
-  return { value: curve.values[k], elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, k) };
+  const value = valueAtCount(curve.values, k);
+  if (Number.isNaN(value)) return `the attack "${c.name}" ends before ${t.at}`;
+  return { value, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, Math.ceil(k)) };
 }
 function measure(req, challenges2, head, base) {
   const c = "challenge" in req ? challenges2.find((x) => x.name === req.challenge) : void 0;
@@ -22377,11 +24181,14 @@ function measure(req, challenges2, head, base) {
   const stat = c?.random ? statisticOf(req) : void 0;
   if (c?.random && stat) {
     const env = envelopeOf(head, c);
-    if (!env) return missing(`challenge "${c.name}" did not run on this design`, higherIsBetter);
     const x = req.kind === "r-threshold" ? req.at : void 0;
+    const baseEnv = base ? envelopeOf(base, c) : void 0;
+    if (!env) {
+      const baseValue = baseEnv && base.result !== head.result && (x === void 0 || gridIndex2(baseEnv, x) >= 0) ? pairedStatistic(base.result, base.result, c.engine, stat, x).base : null;
+      return missing(didNotRun(head, c), higherIsBetter, baseValue, notApplicableReason(head, c) !== void 0);
+    }
     const j = x === void 0 ? -1 : gridIndex2(env, x);
     if (x !== void 0 && j < 0) return missing(`${x} is not on the grid of "${c.name}"`, higherIsBetter);
-    const baseEnv = base ? envelopeOf(base, c) : void 0;
     const same2 = base !== void 0 && base.result === head.result;
     const p = pairedStatistic(baseEnv ? base.result : head.result, head.result, c.engine, stat, x);
     const out = {
@@ -22390,7 +24197,7 @@ function measure(req, challenges2, head, base) {
       delta: baseEnv ? same2 ? 0 : p.delta : null,
       se: baseEnv ? same2 ? 0 : p.se : null,
       higherIsBetter,
-      elements: sequenceElements(env.weakest[0], x === void 0 ? MAX_ELEMENTS : removalsAt(head.graph, env.kind, x))
+      elements: sequenceElements(env.weakest[0], x === void 0 ? MAX_ELEMENTS : Math.ceil(removalsAt(head.graph, env.kind, x)))
     };
     if (stat.kind === "quantile" && j >= 0) {
       const band = env.quantiles[quantileKey(stat.q)];
@@ -22408,9 +24215,9 @@ function measure(req, challenges2, head, base) {
     return out;
   }
   const h = deterministic2(req, c, head);
-  if (typeof h === "string") return missing(h, higherIsBetter);
   const b = base ? deterministic2(req, c, base) : void 0;
   const bv = b !== void 0 && typeof b !== "string" ? b.value : null;
+  if (typeof h === "string") return missing(h, higherIsBetter, base !== void 0 && base.result !== head.result ? bv : null, notApplicableReason(head, c) !== void 0);
   const same = base !== void 0 && base.result === head.result;
   return {
     base: bv,
@@ -22424,11 +24231,13 @@ function measure(req, challenges2, head, base) {
 }
 
 // src/gate/compare.ts
-function formatSe(se) {
-  return Number.isFinite(se) ? se.toFixed(3) : "unknown";
-}
+var SPOF_RULES = /* @__PURE__ */ new Set(["new-bridge", "new-cut-node", "new-stranding-group", "hardened-weak-point"]);
 var SAME = 1e-12;
 var REDUCED_MARGIN_SE = 2;
+var GRAVITY = { fail: 0, warn: 1, notice: 2 };
+function milder(a, b) {
+  return GRAVITY[a] >= GRAVITY[b] ? a : b;
+}
 function uncertainSeverity(severity) {
   return severity === "notice" ? "notice" : "warn";
 }
@@ -22441,7 +24250,7 @@ var THRESHOLD_RULE = {
 function elementsOf(list, head, base) {
   return list.map((e) => locate(e, head?.graph, base?.graph));
 }
-function finding(rule, severity, message, elements, extra = {}) {
+function finding2(rule, severity, message, elements, extra = {}) {
   const line = extra.line ?? elements.find((e) => e.line > 0)?.line ?? 0;
   return { rule, severity, message, ...extra, elements, line };
 }
@@ -22452,6 +24261,26 @@ function floorOf(r) {
   if (r.kind === "spread-ceiling") return r.max;
   if (r.kind === "no-new-spof") return null;
   return r.min ?? null;
+}
+function notFinite(m) {
+  const named = [
+    ["head value", m.head],
+    ["base value", m.base],
+    ["delta", m.delta]
+  ];
+  const bad = named.filter(([, v]) => v !== null && !Number.isFinite(v));
+  if (!bad.length) return void 0;
+  return `the ${bad.map(([n, v]) => `${n} is ${String(v)}`).join(" and the ")}, not a finite number`;
+}
+function classifyDrop(drop, allowance, noise2, reduced) {
+  if (reduced) {
+    if (drop > allowance + noise2) return "regressed";
+    if (drop <= allowance - noise2) return "within-allowance";
+    return "uncertain";
+  }
+  if (drop < noise2) return "within-noise";
+  if (drop <= allowance) return "within-allowance";
+  return "regressed";
 }
 function judge(r, input, description) {
   const head = input.head;
@@ -22471,219 +24300,166 @@ function judge(r, input, description) {
   };
   const findings = [];
   const elements = elementsOf(m.elements, head, input.base);
-  const extra = { requirement: r.id, ...numbers(m) };
+  const rule = THRESHOLD_RULE[r.kind];
+  const extra = { requirement: r.id, ...numbers(m), ...threshold !== null ? { threshold } : {} };
+  const result = () => ({ rows: [row], findings });
   if (m.missing !== void 0 || m.head === null) {
-    row.status = "uncertain";
-    findings.push(finding(THRESHOLD_RULE[r.kind], "warn", `${description}: could not be judged: ${m.missing}`, [], extra));
-    return { row, findings };
+    const why = m.missing ?? "no value";
+    if (m.base !== null) {
+      row.status = "missed";
+      findings.push(
+        finding2(rule, r.severity, `${description}: the head can no longer be judged, though the base could (${formatR(m.base)}): ${why}`, [], {
+          ...extra,
+          status: "missed"
+        })
+      );
+    } else if (m.notApplicable && threshold === null) {
+      row.status = "not-applicable";
+    } else {
+      row.status = "uncertain";
+      findings.push(finding2(rule, uncertainSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: "uncertain" }));
+    }
+    return result();
   }
-  const better = (a, b) => m.higherIsBetter ? a >= b : a <= b;
-  const thresholdRule = THRESHOLD_RULE[r.kind];
-  const margin = threshold === null ? 0 : m.higherIsBetter ? m.head - threshold : threshold - m.head;
-  if (threshold !== null && !better(m.head, threshold)) {
+  const broken = notFinite(m);
+  if (broken !== void 0) {
+    row.status = "uncertain";
+    findings.push(
+      finding2("not-computable", "fail", `${description}: ${broken}; a value that cannot be computed is never a pass`, elements, {
+        ...extra,
+        status: "not-computable"
+      })
+    );
+    return result();
+  }
+  const headValue = m.head;
+  const meets = (v, limit) => m.higherIsBetter ? v >= limit : v <= limit;
+  const limitWord = m.higherIsBetter ? "floor" : "ceiling";
+  const against = (v, limit) => formatR(v, decidingDecimals(v, limit));
+  if (threshold !== null && !meets(headValue, threshold)) {
     row.status = "missed";
     const relation = m.higherIsBetter ? "is below" : "is above";
-    findings.push(
-      finding(THRESHOLD_RULE[r.kind], r.severity, `${description}: ${formatR(m.head)} ${relation} ${threshold}`, elements, extra)
-    );
+    findings.push(finding2(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: "missed" }));
   } else if (threshold !== null && m.incomplete !== void 0) {
     row.status = "uncertain";
     findings.push(
-      finding(THRESHOLD_RULE[r.kind], "warn", `${description}: ${formatR(m.head)} meets it, but ${m.incomplete}`, elements, extra)
+      finding2(rule, uncertainSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
+        ...extra,
+        status: "uncertain"
+      })
     );
-  } else if (threshold !== null && m.lo !== void 0 && m.hi !== void 0 && !better(m.higherIsBetter ? m.lo : m.hi, threshold)) {
+  } else if (threshold !== null && m.lo !== void 0 && m.hi !== void 0 && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
     row.status = "uncertain";
     const edge = m.higherIsBetter ? m.lo : m.hi;
     const cut = m.reduced !== void 0 ? `; ${m.reduced}` : "";
+    const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
     findings.push(
-      finding(
-        thresholdRule,
+      finding2(
+        rule,
         m.reduced !== void 0 ? uncertainSeverity(r.severity) : "notice",
-        `${description}: ${formatR(m.head)} meets it, but its confidence interval reaches ${formatR(edge)}; more realizations would settle it${cut}`,
+        `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
         elements,
-        extra
+        { ...extra, status: "uncertain" }
       )
     );
   } else if (threshold !== null && m.headSe !== void 0 && r.kind === "r-threshold" && r.statistic.kind === "min") {
     row.status = "uncertain";
     findings.push(
-      finding(
-        thresholdRule,
+      finding2(
+        rule,
         uncertainSeverity(r.severity),
-        `${description}: ${formatR(m.head)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
+        `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
         elements,
-        extra
+        { ...extra, status: "uncertain" }
       )
     );
-  } else if (threshold !== null && m.headSe !== void 0 && !(margin > REDUCED_MARGIN_SE * m.headSe)) {
-    row.status = "uncertain";
-    findings.push(
-      finding(
-        thresholdRule,
-        uncertainSeverity(r.severity),
-        `${description}: ${formatR(m.head)} meets it, but ${m.reduced}, and it clears the ${m.higherIsBetter ? "floor" : "ceiling"} by ${formatR(margin)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} × ${formatSe(m.headSe)})`,
-        elements,
-        extra
-      )
-    );
+  } else if (threshold !== null && m.headSe !== void 0) {
+    const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
+    const needed = REDUCED_MARGIN_SE * m.headSe;
+    if (!(margin > needed)) {
+      row.status = "uncertain";
+      const d = decidingDecimals(margin, needed);
+      const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : "unknown";
+      findings.push(
+        finding2(
+          rule,
+          uncertainSeverity(r.severity),
+          `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} × ${se})`,
+          elements,
+          { ...extra, status: "uncertain" }
+        )
+      );
+    }
   }
+  const policyRule = input.policy.weakening;
+  const regressionSeverity = milder(policyRule.severity, r.severity);
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== void 0) {
     if (row.status === "met") row.status = "uncertain";
-    const weakening = input.policy.weakening;
     findings.push(
-      finding(
+      finding2(
         "regression",
-        uncertainSeverity(weakening.severity),
-        `${description}: from ${formatR(m.base)} to ${formatR(m.head)}, but ${m.unpaired}; the change cannot be judged`,
+        uncertainSeverity(regressionSeverity),
+        `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
-        extra
+        { ...extra, status: "uncertain" }
       )
     );
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
+    const base = m.base;
     const drop = m.higherIsBetter ? -m.delta : m.delta;
-    if (drop > SAME * Math.max(1, Math.abs(m.base))) {
-      const rule = input.policy.weakening;
-      const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(m.base));
-      const change = `from ${formatR(m.base)} to ${formatR(m.head)} (Δ ${formatDelta(m.delta, m.se)})`;
-      const noise2 = rule.errorMultiple * m.se;
+    if (!(drop <= SAME * Math.max(1, Math.abs(base)))) {
+      const allowance = Math.max(policyRule.allowedDrop ?? 0, (policyRule.allowedRelativeDrop ?? 0) * Math.abs(base));
+      const noise2 = policyRule.errorMultiple * m.se;
+      const reduced = m.reduced !== void 0;
+      const outcome = classifyDrop(drop, allowance, noise2, reduced);
+      const digits = (limit) => changeDecimals(base, headValue, m.higherIsBetter, limit);
+      const d = outcome === "within-noise" ? digits(noise2) : reduced ? Math.max(digits(allowance), digits(outcome === "regressed" ? allowance + noise2 : allowance - noise2)) : digits(allowance);
       const verb = m.higherIsBetter ? "dropped" : "rose";
-      if (m.reduced !== void 0 && !(drop > allowance + noise2) && !(drop <= allowance - noise2)) {
+      const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (Δ ${formatDelta(m.delta, m.se, d)})`;
+      const allowed = formatR(allowance, d);
+      const k = policyRule.errorMultiple;
+      const data = { ...extra, allowance, status: outcome };
+      if (outcome === "regressed") {
+        if (row.status !== "missed") row.status = "regressed";
+        const beyond = reduced ? ` by more than ${k} × its error; ${m.reduced}` : "";
+        findings.push(finding2("regression", regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
+      } else if (outcome === "uncertain") {
         if (row.status === "met") row.status = "uncertain";
         findings.push(
-          finding(
+          finding2(
             "regression",
-            uncertainSeverity(rule.severity),
-            `${description}: ${verb} ${change}, within ${rule.errorMultiple} × its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            uncertainSeverity(regressionSeverity),
+            `${description}: ${change}, within ${k} × its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
-            extra
+            data
           )
         );
-      } else if (m.reduced !== void 0 && drop <= allowance - noise2) {
-        findings.push(
-          finding("regression", "notice", `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} × its error; ${m.reduced}`, elements, extra)
-        );
-      } else if (m.reduced !== void 0) {
-        if (row.status !== "missed") row.status = "regressed";
-        findings.push(
-          finding(
-            "regression",
-            rule.severity,
-            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} × its error; ${m.reduced}`,
-            elements,
-            extra
-          )
-        );
-      } else if (drop < noise2) {
+      } else if (outcome === "within-noise") {
         if (row.status === "met") row.status = "within-noise";
         findings.push(
-          finding(
-            "regression",
-            "notice",
-            `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, less than ${rule.errorMultiple} × its Monte Carlo error: within noise, not a failure`,
-            elements,
-            extra
-          )
-        );
-      } else if (drop <= allowance) {
-        findings.push(
-          finding("regression", "notice", `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, within the allowed ${formatR(allowance)}`, elements, extra)
+          finding2("regression", "notice", `${description}: ${change}, less than ${k} × its Monte Carlo error (${formatR(noise2, d)}): within noise, not a failure`, elements, data)
         );
       } else {
-        if (row.status !== "missed") row.status = "regressed";
-        findings.push(
-          finding(
-            "regression",
-            rule.severity,
-            `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, more than the allowed ${formatR(allowance)}`,
-            elements,
-            extra
-          )
-        );
+        const margin = reduced ? ` by more than ${k} × its error; ${m.reduced}` : "";
+        findings.push(finding2("regression", "notice", `${description}: ${change}, within the allowed ${allowed}${margin}`, elements, data));
       }
     }
   }
   const reducedWork = m.reduced ?? m.incomplete;
   if (reducedWork !== void 0 && !findings.some((f) => f.message.includes(reducedWork))) {
-    findings.push(finding(thresholdRule, "notice", `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, line: 0 }));
+    findings.push(finding2(rule, "notice", `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, status: "reduced-work", line: 0 }));
   }
-  return { row, findings };
+  return result();
 }
-function spofs(side) {
-  const g = side.graph;
-  const cuts = findCutElements(g);
-  const bridges2 = /* @__PURE__ */ new Map();
-  for (const e of cuts.bridges) if (!g.linkHardened[e]) bridges2.set(g.linkKeys[e], e);
-  const cutNodes2 = /* @__PURE__ */ new Map();
-  for (const v of cuts.cutNodes) if (!g.nodeHardened[v]) cutNodes2.set(g.nodeIds[v], v);
-  return { bridges: bridges2, cutNodes: cutNodes2 };
-}
-function judgeSpof(r, input, description) {
-  const g = input.head.graph;
-  const head = spofs(input.head);
-  const comparing = !input.thresholdsOnly && input.base !== void 0;
-  const base = comparing ? spofs(input.base) : void 0;
-  const count = (s) => (r.bridges ? s.bridges.size : 0) + (r.cutNodes ? s.cutNodes.size : 0);
-  const row = {
-    id: r.id,
-    description,
-    severity: r.severity,
-    base: base ? count(base) : null,
-    head: count(head),
-    delta: base ? count(head) - count(base) : null,
-    se: base ? 0 : null,
-    threshold: null,
-    status: "met"
-  };
-  const findings = [];
-  if (!base) return { row, findings };
-  if (r.bridges) {
-    for (const [key, e] of head.bridges) {
-      if (base.bridges.has(key)) continue;
-      const el = { id: g.linkIds[e], kind: "link", line: g.linkLine[e] };
-      const ends = `${g.nodeIds[g.linkSource[e]]}–${g.nodeIds[g.linkTarget[e]]}`;
-      findings.push(
-        finding("new-bridge", r.severity, `link ${el.id} (${ends}) is a new bridge: losing it splits the design, which the base did not`, [el], {
-          requirement: r.id
-        })
-      );
-    }
-  }
-  if (r.cutNodes) {
-    for (const [id, v] of head.cutNodes) {
-      if (base.cutNodes.has(id)) continue;
-      const el = { id, kind: "node", line: g.nodeLine[v] };
-      findings.push(
-        finding("new-cut-node", r.severity, `node ${id} is a new cut node: losing it splits the design, which the base did not`, [el], {
-          requirement: r.id
-        })
-      );
-    }
-  }
-  if (findings.length > 0) row.status = "regressed";
-  return { row, findings };
-}
-function elementChanges(base, head) {
-  const diff = (from, to) => {
-    const a = from.graph;
-    const b = to.graph;
-    const out = [];
-    a.nodeIds.forEach((id, v) => {
-      if (!b.nodeIndex.has(id)) out.push({ id, kind: "node", line: a.nodeLine[v] });
-    });
-    const keys = new Set(b.linkKeys);
-    a.linkKeys.forEach((key, e) => {
-      if (!keys.has(key)) out.push({ id: a.linkIds[e], kind: "link", line: a.linkLine[e] });
-    });
-    return out;
-  };
-  return { added: diff(head, base), removed: diff(base, head) };
+function elementChanges2(base, head, matching = matchDesigns(base.graph, head.graph)) {
+  return elementChanges(base.graph, head.graph, matching);
 }
 function fileStatus(change, findings) {
   const failing = findings.filter((f) => f.severity === "fail");
-  if (failing.some((f) => f.rule === "parse-error")) return "error";
+  if (failing.some((f) => f.rule === "parse-error" || f.rule === "not-computable")) return "error";
   const thresholdRules = new Set(Object.values(THRESHOLD_RULE));
   if (failing.some((f) => thresholdRules.has(f.rule))) return "below-threshold";
-  if (failing.some((f) => f.rule === "regression" || f.rule === "new-bridge" || f.rule === "new-cut-node")) return "regressed";
+  if (failing.some((f) => f.rule === "regression" || SPOF_RULES.has(f.rule))) return "regressed";
   if (change === "added") return "new";
   if (change === "renamed") return "renamed";
   return "pass";
@@ -22696,44 +24472,49 @@ function compareDesign(input) {
     report.status = "removed";
     const severity = input.policy.removedDesigns;
     if (severity !== "ignore") {
-      report.findings.push(finding("removed-design", severity, "the design file was deleted by this change", [], { line: 0 }));
+      report.findings.push(finding2("removed-design", severity, "the design file was deleted by this change", [], { line: 0 }));
     }
     return report;
   }
-  if (input.headError || !input.head) {
-    const e = input.headError ?? { message: "the design could not be read", line: 0, column: 0 };
+  if (input.headError || input.headUnsupported || !input.head) {
+    const e = input.headError ?? input.headUnsupported ?? { message: "the design could not be read", line: 0, column: 0 };
     report.status = "error";
     report.error = { message: e.message, line: e.line, column: e.column };
-    report.findings.push(finding("parse-error", "fail", e.message, [], { line: e.line, column: e.column }));
+    const rule = input.headUnsupported && !input.headError ? "not-computable" : "parse-error";
+    report.findings.push(finding2(rule, "fail", e.message, [], { line: e.line, column: e.column, ...rule === "not-computable" ? { status: "not-computable" } : {} }));
     return report;
   }
   const effective = input.baseError ? { ...input, base: void 0, thresholdsOnly: true } : input;
   if (input.baseError) {
     report.findings.push(
-      finding("parse-error", "notice", `the base version could not be read (${input.baseError.message}); judged on thresholds only`, [], {
+      finding2("parse-error", "notice", `the base version could not be read (${input.baseError.message}); judged on thresholds only`, [], {
         line: 0
       })
     );
   }
+  const comparing = effective.base !== void 0 && !effective.thresholdsOnly;
+  const matching = !comparing ? void 0 : effective.base.result === input.head.result ? identityMatching(input.head.graph) : matchDesigns(effective.base.graph, input.head.graph);
   for (const r of input.policy.requirements) {
     const description = describeRequirement(r, input.policy.challenges);
-    const { row, findings } = r.kind === "no-new-spof" ? judgeSpof(r, effective, description) : judge(r, effective, description);
-    report.requirements.push(row);
+    const { rows, findings } = r.kind === "no-new-spof" ? judgeSpof(r, description, input.head, comparing ? effective.base : void 0, matching) : judge(r, effective, description);
+    report.requirements.push(...rows);
     report.findings.push(...findings);
   }
   for (const reason of input.head.result.evaluation.degraded) {
-    report.findings.push(finding("degraded", "notice", `head evaluation reduced: ${reason}`, [], { line: 0 }));
+    report.findings.push(finding2("degraded", "notice", `head evaluation reduced: ${reason}`, [], { line: 0 }));
   }
   if (effective.base && !effective.thresholdsOnly && effective.base.result !== input.head.result) {
     for (const reason of effective.base.result.evaluation.degraded) {
-      report.findings.push(finding("degraded", "notice", `base evaluation reduced: ${reason}`, [], { line: 0 }));
+      report.findings.push(finding2("degraded", "notice", `base evaluation reduced: ${reason}`, [], { line: 0 }));
     }
   }
-  report.head = input.head.result.evaluation;
+  report.head = withSequenceDetails(input.head.result.evaluation, input.head.graph);
   if (effective.base && !effective.thresholdsOnly) {
-    report.base = effective.base.result.evaluation;
-    const changes = elementChanges(effective.base, input.head);
-    if (changes.added.length + changes.removed.length > 0) report.changes = changes;
+    report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.graph);
+    const changes = elementChanges2(effective.base, input.head, matching);
+    const modified = effective.base.topology && input.head.topology ? designChanges(effective.base.topology, input.head.topology)?.modified : void 0;
+    if (modified?.length) changes.modified = modified;
+    if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) + (changes.modified?.length ?? 0) > 0) report.changes = changes;
   }
   report.status = fileStatus(input.change, report.findings);
   return report;
@@ -22754,8 +24535,49 @@ function exitCodeOf(report) {
   return report.verdict === "fail" && report.mode === "block" ? 1 : 0;
 }
 
+// src/gate/pair-designs.ts
+var EXTENSIONS = [".net.yaml", ".net.yml", ".net.json", ".graphml", ".yaml", ".yml", ".json", ".gml", ".csv"];
+function designStem(path) {
+  const lower = path.toLowerCase();
+  const ext = EXTENSIONS.find((e) => lower.endsWith(e));
+  if (ext) return path.slice(0, -ext.length);
+  const slash = path.lastIndexOf("/");
+  const dot2 = path.lastIndexOf(".");
+  return dot2 > slash + 1 ? path.slice(0, dot2) : path;
+}
+function pairBy(deleted, added, key, by, out) {
+  const group = (list) => {
+    const m = /* @__PURE__ */ new Map();
+    for (const d of list) {
+      const k = key(d);
+      if (k === void 0 || k === "") continue;
+      m.set(k, [...m.get(k) ?? [], d]);
+    }
+    return m;
+  };
+  const gone = group(deleted);
+  const fresh = group(added);
+  for (const [k, before] of gone) {
+    const after = fresh.get(k);
+    if (before.length === 1 && after?.length === 1) out.push({ previousPath: before[0].path, path: after[0].path, by });
+  }
+}
+function pairDesigns(deleted, added) {
+  const pairs = [];
+  pairBy([...deleted], [...added], (d) => d.name?.trim(), "network name", pairs);
+  const used = new Set(pairs.flatMap((p) => [p.previousPath, p.path]));
+  pairBy(
+    deleted.filter((d) => !used.has(d.path)),
+    added.filter((d) => !used.has(d.path)),
+    (d) => designStem(d.path),
+    "base name",
+    pairs
+  );
+  return pairs.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
+}
+
 // src/policy/resolve.ts
-var import_picomatch = __toESM(require_picomatch2(), 1);
+var import_picomatch2 = __toESM(require_picomatch2(), 1);
 
 // src/topology/suggest.ts
 function levenshtein(a, b) {
@@ -22811,8 +24633,627 @@ function budgetWork(b) {
   return Math.max(1, Math.floor(work));
 }
 
+// src/topology/model.ts
+var DEFAULT_MAX_BYTES = 20 * 1024 * 1024;
+var DEFAULT_MAX_ELEMENTS = 2e6;
+function linkKey(source, target, occurrence) {
+  const [a, b] = source <= target ? [source, target] : [target, source];
+  return occurrence > 1 ? `${a}—${b}#${occurrence}` : `${a}—${b}`;
+}
+
+// src/topology/builder.ts
+var MAX_ID_LENGTH = 256;
+var DASH = "—";
+var TopologyBuilder = class {
+  file;
+  format;
+  maxElements;
+  duplicateLinkIds;
+  nodes = [];
+  links = [];
+  nodeLine = /* @__PURE__ */ new Map();
+  linkIds = /* @__PURE__ */ new Map();
+  /** Occurrences of each unordered end pair so far, for parallel-link keys. */
+  pairCount = /* @__PURE__ */ new Map();
+  warnings = [];
+  riskGroups = [];
+  riskGroupPos = /* @__PURE__ */ new Map();
+  demands = [];
+  /** Arcs not yet paired with a reverse arc, by `source\0target`, oldest first. */
+  openArcs = /* @__PURE__ */ new Map();
+  directedAt;
+  mergedArcs = 0;
+  constructor(file, format, options = {}) {
+    this.file = file;
+    this.format = format;
+    this.maxElements = options.maxElements ?? DEFAULT_MAX_ELEMENTS;
+    this.duplicateLinkIds = options.duplicateLinkIds ?? "warn";
+  }
+  get nodeCount() {
+    return this.nodes.length;
+  }
+  hasNode(id) {
+    return this.nodeLine.has(id);
+  }
+  /** A located DesignError in this file. */
+  error(message, pos, hint = "") {
+    return new DesignError(message, { file: this.file, line: pos?.line ?? 0, column: pos?.column ?? 0 }, hint);
+  }
+  warn(message, pos, hint) {
+    this.warnings.push({
+      file: this.file,
+      line: pos?.line ?? 0,
+      column: pos?.column ?? 0,
+      severity: "warning",
+      message,
+      ...hint ? { hint } : {}
+    });
+  }
+  /** Refuses an id longer than MAX_ID_LENGTH (LimitError at the element). */
+  checkId(id, what, pos) {
+    if (id.length <= MAX_ID_LENGTH) return;
+    throw new LimitError(
+      `${what} is ${id.length} characters long; netbrace accepts ids of at most ${MAX_ID_LENGTH} ("${id.slice(0, 24)}…")`,
+      { file: this.file, line: pos?.line ?? 0, column: pos?.column ?? 0 },
+      "use a short id and put the long name in a label"
+    );
+  }
+  countElement(pos) {
+    if (this.nodes.length + this.links.length >= this.maxElements) {
+      throw new LimitError(
+        `the design has more than ${this.maxElements} elements (nodes + links)`,
+        { file: this.file, line: pos.line, column: pos.column },
+        "split the design, or raise the element limit if this size is intended"
+      );
+    }
+  }
+  addNode(input) {
+    this.checkId(input.id, "a node id", input.pos);
+    const first = this.nodeLine.get(input.id);
+    if (first !== void 0) {
+      throw this.error(`duplicate node id "${input.id}"`, input.pos, `first defined on line ${first.line}; node ids must be unique`);
+    }
+    this.countElement(input.pos);
+    this.nodeLine.set(input.id, input.pos);
+    const node = { id: input.id, hardened: input.hardened ?? false, pos: input.pos, attrs: input.attrs ?? {} };
+    if (input.label !== void 0) node.label = input.label;
+    if (input.kind !== void 0) node.kind = input.kind;
+    if (input.lat !== void 0 && input.lon !== void 0) {
+      node.lat = input.lat;
+      node.lon = input.lon;
+    }
+    this.nodes.push(node);
+  }
+  requireNode(id, pos, what) {
+    if (this.nodeLine.has(id)) return;
+    this.checkId(id, `a node id in ${what}`, pos);
+    throw this.error(
+      `${what} refers to unknown node "${id}"`,
+      pos,
+      didYouMean(id, this.nodeLine.keys(), "declare the node first, or fix the id")
+    );
+  }
+  /**
+   * Says the file declares direction (`how`, e.g. `edgedefault="directed"`), once; finish()
+   * warns that direction is ignored and how many reverse arcs were merged.
+   */
+  directed(pos, how) {
+    this.directedAt ??= { pos, how };
+  }
+  /**
+   * Adds a link; returns false when it was dropped (a self-loop) or merged into the link of
+   * the reverse arc. Arcs pair up in file order, so the links between two nodes are as many
+   * as the arcs in the more frequent direction: u→v with v→u is one link, u→v twice is two.
+   */
+  addLink(input) {
+    if (input.id !== void 0) this.checkId(input.id, "a link id", input.pos);
+    for (const g of input.riskGroups ?? []) this.checkId(g, "a risk group id of a link", input.pos);
+    const what = input.what ?? (input.id !== void 0 ? `link "${input.id}"` : `link on line ${input.pos.line}`);
+    this.requireNode(input.source, input.sourcePos ?? input.pos, what);
+    this.requireNode(input.target, input.targetPos ?? input.pos, what);
+    if (input.source === input.target) {
+      this.warn(`self-loop on node "${input.source}" dropped`, input.pos, "a link from a node to itself adds no connectivity");
+      return false;
+    }
+    if (input.arc) {
+      const reverse = this.openArcs.get(`${input.target}\0${input.source}`);
+      const partner = reverse?.shift();
+      if (partner) {
+        this.mergeArc(partner, input);
+        return false;
+      }
+    }
+    this.countElement(input.pos);
+    const pairKey = input.source <= input.target ? `${input.source}\0${input.target}` : `${input.target}\0${input.source}`;
+    const occurrence = (this.pairCount.get(pairKey) ?? 0) + 1;
+    this.pairCount.set(pairKey, occurrence);
+    let id = input.id;
+    if (id !== void 0) {
+      const first = this.linkIds.get(id);
+      if (first !== void 0) {
+        if (this.duplicateLinkIds === "error") {
+          throw this.error(`duplicate link id "${id}"`, input.pos, `first used on line ${first.line}; link ids must be unique`);
+        }
+        this.warn(`duplicate link id "${id}" (first on line ${first.line}); the link is named by its ends instead`, input.pos);
+        id = void 0;
+      }
+    }
+    if (id === void 0) {
+      const base = `${input.source}${DASH}${input.target}`;
+      id = occurrence > 1 ? `${base}#${occurrence}` : base;
+      for (let k = 2; this.linkIds.has(id); k++) id = `${base}#${occurrence}.${k}`;
+    }
+    this.linkIds.set(id, input.pos);
+    const link = {
+      id,
+      key: linkKey(input.source, input.target, occurrence),
+      source: input.source,
+      target: input.target,
+      riskGroups: input.riskGroups ?? [],
+      hardened: input.hardened ?? false,
+      pos: input.pos,
+      attrs: input.attrs ?? {}
+    };
+    if (input.length !== void 0) link.length = input.length;
+    if (input.latency !== void 0) link.latency = input.latency;
+    if (input.capacity !== void 0) link.capacity = input.capacity;
+    if (input.weight !== void 0) link.weight = input.weight;
+    this.links.push(link);
+    if (input.arc) {
+      const key = `${input.source}\0${input.target}`;
+      const open = this.openArcs.get(key);
+      if (open) open.push(link);
+      else this.openArcs.set(key, [link]);
+    }
+    return true;
+  }
+  /** The reverse arc joins its partner's link; values that differ are reported, the first kept. */
+  mergeArc(link, arc) {
+    this.mergedArcs++;
+    const differs = [];
+    for (const k of ["length", "latency", "capacity", "weight"]) {
+      if (arc[k] !== link[k]) differs.push(`${k} ${link[k] ?? "unset"} vs ${arc[k] ?? "unset"}`);
+    }
+    if ((arc.hardened ?? false) !== link.hardened) differs.push(`hardened ${link.hardened} vs ${arc.hardened ?? false}`);
+    const groups = (g) => [...new Set(g)].sort().join(";");
+    if (groups(arc.riskGroups ?? []) !== groups(link.riskGroups)) differs.push(`risk groups "${groups(link.riskGroups)}" vs "${groups(arc.riskGroups ?? [])}"`);
+    if (differs.length > 0) {
+      this.warn(
+        `the arc ${arc.source} → ${arc.target} is merged with the reverse arc on line ${link.pos.line}, which says otherwise (${differs.join(", ")}); the first arc's values are kept`,
+        arc.pos,
+        "give both directions the same values, or write one undirected link"
+      );
+    }
+  }
+  addRiskGroup(group) {
+    this.checkId(group.id, "a risk group id", group.pos);
+    const first = this.riskGroupPos.get(group.id);
+    if (first) throw this.error(`duplicate risk group id "${group.id}"`, group.pos, `first described on line ${first.line}`);
+    this.riskGroupPos.set(group.id, group.pos);
+    this.riskGroups.push(group);
+  }
+  addDemand(source, target, volume, pos, endPos, what = "demand") {
+    this.requireNode(source, endPos?.[0] ?? pos, what);
+    this.requireNode(target, endPos?.[1] ?? pos, what);
+    if (source === target) throw this.error(`${what} goes from node "${source}" to itself`, pos, "a demand needs two different ends");
+    this.demands.push({ source, target, volume, pos });
+  }
+  finish(extra = {}) {
+    if (this.directedAt) {
+      const merged = this.mergedArcs;
+      this.warnings.unshift({
+        file: this.file,
+        line: this.directedAt.pos.line,
+        column: this.directedAt.pos.column,
+        severity: "warning",
+        message: `the graph is directed (${this.directedAt.how}); direction is ignored and links are read as undirected` + (merged > 0 ? `: ${merged} pair${merged === 1 ? "" : "s"} of reverse arcs (u → v and v → u) merged into one link each` : "")
+      });
+    }
+    const t = {
+      file: this.file,
+      format: this.format,
+      nodes: this.nodes,
+      links: this.links,
+      riskGroups: this.riskGroups,
+      demands: this.demands,
+      metadata: extra.metadata ?? {},
+      warnings: this.warnings
+    };
+    if (extra.name !== void 0) t.name = extra.name;
+    if (extra.latencyBudget !== void 0) t.latencyBudget = extra.latencyBudget;
+    return t;
+  }
+};
+
+// src/topology/quantities.ts
+var MIN_NORMAL = 22250738585072014e-324;
+var QUANTITY_RANGE = {
+  length: { min: 1e-6, max: 1e6, unit: "km" },
+  latency: { min: 1e-6, max: 1e6, unit: "ms" },
+  capacity: { min: 1e-9, max: 1e9, unit: "Gbit/s" },
+  weight: { min: 1e-9, max: 1e9, unit: "" },
+  volume: { min: 1e-12, max: 1e15, unit: "" }
+};
+function nonNormal(n) {
+  if (Number.isNaN(n)) return "is not a number (NaN)";
+  if (!Number.isFinite(n)) return "is infinite (or too large for a number)";
+  if (n !== 0 && Math.abs(n) < MIN_NORMAL) return "is so close to 0 that it cannot be computed with (a subnormal number)";
+  return void 0;
+}
+var fmt = (n) => Math.abs(n) >= 1e5 || n !== 0 && Math.abs(n) < 1e-3 ? n.toExponential().replace("e+", "e") : String(n);
+var shown = (n, unit) => `${fmt(n)}${unit ? ` ${unit}` : ""}`;
+function quantityProblem(kind, value, written) {
+  const as = written !== void 0 && written.trim() !== String(value) && written.trim() !== fmt(value) ? ` (written ${written.trim()})` : "";
+  const bad = nonNormal(value);
+  const r = QUANTITY_RANGE[kind];
+  const range = `netbrace accepts 0 or ${shown(r.min, r.unit)} to ${shown(r.max, r.unit)}`;
+  if (bad) return { message: `${bad}${as}`, hint: Number.isFinite(value) ? `${range}; write 0 for none` : `${range}; check the unit` };
+  if (value < 0) return { message: `must not be negative (${value})`, hint: range };
+  if (value > r.max) return { message: `is ${fmt(value)}${as}, above the limit of ${shown(r.max, r.unit)}`, hint: `${range}; check the unit` };
+  if (value > 0 && value < r.min) return { message: `is ${fmt(value)}${as}, below the smallest value accepted (${shown(r.min, r.unit)})`, hint: `${range}; write 0 for none` };
+  return void 0;
+}
+
+// src/topology/attributes.ts
+var NODE_FIELDS = {
+  label: "label",
+  name: "label",
+  type: "kind",
+  kind: "kind",
+  latitude: "lat",
+  lat: "lat",
+  longitude: "lon",
+  lon: "lon",
+  lng: "lon",
+  long: "lon",
+  x: "x",
+  y: "y",
+  hardened: "hardened"
+};
+var LINK_FIELDS = {
+  weight: "weight",
+  cost: "weight",
+  length: "length",
+  length_km: "length",
+  distance: "length",
+  linklength: "length",
+  latency: "latency",
+  latency_ms: "latency",
+  delay: "latency",
+  linklatency: "latency",
+  linkdelay: "latency",
+  capacity: "capacity",
+  capacity_gbps: "capacity",
+  bandwidth: "capacity",
+  // The zoo's raw link speed is in bit/s; capacity is kept in Gbit/s.
+  linkspeedraw: "bitrate",
+  risk_groups: "riskGroups",
+  srlg: "riskGroups",
+  srlgs: "riskGroups",
+  hardened: "hardened"
+};
+function isNodeField(name) {
+  return Object.hasOwn(NODE_FIELDS, name.toLowerCase());
+}
+function isLinkField(name) {
+  return Object.hasOwn(LINK_FIELDS, name.toLowerCase());
+}
+var NUMERAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+function numeral(v) {
+  if (typeof v === "number") return v;
+  if (typeof v !== "string") return void 0;
+  const s = v.trim();
+  return s !== "" && NUMERAL.test(s) ? Number(s) : void 0;
+}
+function toNumber(v) {
+  const n = numeral(v);
+  return n !== void 0 && Number.isFinite(n) ? n : void 0;
+}
+function toFlag(v) {
+  if (typeof v === "boolean") return v;
+  if (typeof v === "number") return v !== 0;
+  if (typeof v !== "string") return void 0;
+  const s = v.trim().toLowerCase();
+  if (["1", "true", "yes", "y"].includes(s)) return true;
+  if (["0", "false", "no", "n", ""].includes(s)) return false;
+  return void 0;
+}
+var text = (v) => typeof v === "string" ? v : String(v);
+function sourceOf(where) {
+  if (typeof where === "function") return { pos: where, text: () => void 0 };
+  return { pos: where.pos, text: where.text ?? (() => void 0) };
+}
+function mapNodeAttributes(raw, b, where) {
+  const src = sourceOf(where);
+  const posOf = src.pos;
+  const written = (name, value) => src.text(name) ?? text(value);
+  const out = { attrs: {} };
+  const hasLabel = Object.keys(raw).some((k) => k.toLowerCase() === "label");
+  let x;
+  let y;
+  let lat;
+  let lon;
+  for (const [name, value] of Object.entries(raw)) {
+    const field = NODE_FIELDS[name.toLowerCase()];
+    if (field === "label") {
+      if (hasLabel && name.toLowerCase() !== "label") out.attrs[name] = value;
+      else out.label = written(name, value);
+    } else if (field === "kind") out.kind = written(name, value);
+    else if (field === "hardened") {
+      const f = toFlag(value);
+      if (f === void 0) throw b.error(`"${name}" must be true/false or 1/0, not "${text(value)}"`, posOf(name));
+      out.hardened = f;
+    } else if (field === "lat" || field === "lon" || field === "x" || field === "y") {
+      const n = numeral(value);
+      const bad = n === void 0 ? void 0 : nonNormal(n);
+      if (bad) throw b.error(`node coordinate "${name}" ${bad} ("${written(name, value)}")`, posOf(name), "write a plain decimal number of degrees");
+      if (n === void 0) {
+        b.warn(`node coordinate "${name}" is not a number ("${text(value)}"); ignored`, posOf(name));
+        out.attrs[name] = value;
+        continue;
+      }
+      if (field === "lat") lat = [n, name];
+      else if (field === "lon") lon = [n, name];
+      else if (field === "x") x = [n, name];
+      else y = [n, name];
+      out.attrs[name] = value;
+    } else {
+      out.attrs[name] = value;
+    }
+  }
+  if (lat === void 0 && lon === void 0 && x !== void 0 && y !== void 0) {
+    lat = y;
+    lon = x;
+  }
+  if (lat !== void 0 && lon !== void 0) {
+    for (const name of [lat[1], lon[1]]) delete out.attrs[name];
+    if (Math.abs(lat[0]) <= 90 && Math.abs(lon[0]) <= 180) {
+      out.lat = lat[0];
+      out.lon = lon[0];
+    } else {
+      b.warn(`coordinates ${lat[1]}=${lat[0]}, ${lon[1]}=${lon[0]} are not a latitude/longitude; ignored`, posOf(lat[1]));
+      out.attrs[lat[1]] = lat[0];
+      out.attrs[lon[1]] = lon[0];
+    }
+  } else if (lat === void 0 !== (lon === void 0)) {
+    const only = lat ?? lon;
+    b.warn(`node has "${only[1]}" but not the other coordinate; no site recorded`, posOf(only[1]));
+  }
+  return out;
+}
+function mapLinkAttributes(raw, b, where) {
+  const src = sourceOf(where);
+  const posOf = src.pos;
+  const out = { attrs: {} };
+  for (const [name, value] of Object.entries(raw)) {
+    const field = LINK_FIELDS[name.toLowerCase()];
+    if (field === void 0) {
+      out.attrs[name] = value;
+      continue;
+    }
+    if (field === "riskGroups") {
+      out.riskGroups = (src.text(name) ?? text(value)).split(";").map((s) => s.trim()).filter((s) => s !== "");
+      continue;
+    }
+    if (field === "hardened") {
+      const f = toFlag(value);
+      if (f === void 0) throw b.error(`"${name}" must be true/false or 1/0, not "${text(value)}"`, posOf(name));
+      out.hardened = f;
+      continue;
+    }
+    if (typeof value === "string" && value.trim() === "") continue;
+    const n = numeral(value);
+    const as = src.text(name) ?? text(value);
+    if (field === "bitrate") {
+      const gbps = n === void 0 ? void 0 : n / 1e9;
+      if (gbps !== void 0 && quantityProblem("capacity", gbps) === void 0) out.capacity ??= gbps;
+      else b.warn(`link ${name} "${as}" is not a speed in bit/s that netbrace accepts; not read as the capacity`, posOf(name));
+      out.attrs[name] = value;
+      continue;
+    }
+    if (n === void 0) throw b.error(`link ${name} must be a number, not "${as}"`, posOf(name), "write a plain decimal number");
+    const problem = quantityProblem(field, n, as);
+    if (problem) throw b.error(`link ${name} ${problem.message}`, posOf(name), problem.hint);
+    if (field === "capacity") out.capacity = n;
+    else out[field] = n;
+  }
+  return out;
+}
+
+// src/topology/edgelist.ts
+function* csvRows(text2, b) {
+  let i = 0;
+  let line = 1;
+  let lineStart = 0;
+  if (text2.charCodeAt(0) === 65279) i = lineStart = 1;
+  const n = text2.length;
+  while (i < n) {
+    const cells = [];
+    for (; ; ) {
+      const pos = { line, column: i - lineStart + 1 };
+      let value = "";
+      if (text2[i] === '"') {
+        i++;
+        for (; ; ) {
+          if (i >= n) throw b.error("unterminated quoted field", pos, 'close the field with a double quote (write "" for a quote inside it)');
+          const c = text2[i];
+          if (c === '"') {
+            if (text2[i + 1] === '"') {
+              value += '"';
+              i += 2;
+              continue;
+            }
+            i++;
+            break;
+          }
+          if (c === "\n") {
+            line++;
+            lineStart = i + 1;
+          }
+          value += c;
+          i++;
+        }
+        if (i < n && text2[i] !== "," && text2[i] !== "\n" && text2[i] !== "\r") {
+          throw b.error("text after a closing quote", { line, column: i - lineStart + 1 }, "a quoted field must end at a comma or the end of the line");
+        }
+      } else {
+        const start = i;
+        while (i < n && text2[i] !== "," && text2[i] !== "\n" && text2[i] !== "\r") i++;
+        value = text2.slice(start, i);
+        if (value.includes('"')) throw b.error("a double quote inside an unquoted field", pos, 'quote the whole field and double the quote: "a ""b"""');
+      }
+      cells.push({ text: value, pos });
+      if (i < n && text2[i] === ",") {
+        i++;
+        continue;
+      }
+      break;
+    }
+    const end = { line, column: i - lineStart + 1 };
+    if (text2[i] === "\r") i++;
+    if (text2[i] === "\n") i++;
+    line++;
+    lineStart = i;
+    if (cells.length === 1 && cells[0].text.trim() === "") continue;
+    yield { cells, end };
+  }
+}
+function csvHasEdgeHeader(text2) {
+  try {
+    const first = csvRows(text2, new TopologyBuilder("", "csv")).next();
+    if (first.done) return false;
+    const names = first.value.cells.map((c) => c.text.trim().toLowerCase());
+    return names.includes("source") && names.includes("target");
+  } catch {
+    return false;
+  }
+}
+function parseEdgeList(text2, file, options = {}, format = "csv") {
+  const b = new TopologyBuilder(file, format, options);
+  const rows = csvRows(text2, b);
+  const first = rows.next();
+  if (first.done) throw b.error("the CSV file is empty", { line: 1, column: 1 }, "the first line must be a header with source,target");
+  const headerCells = first.value.cells;
+  const header = headerCells.map((c) => c.text.trim());
+  const lower = header.map((h) => h.toLowerCase());
+  for (const need of ["source", "target"]) {
+    if (!lower.includes(need)) {
+      throw b.error(`the CSV header has no "${need}" column`, headerCells[0].pos, "the first line must name the columns, e.g. source,target,length");
+    }
+  }
+  const seen = /* @__PURE__ */ new Map();
+  lower.forEach((h, k) => {
+    if (h === "") throw b.error(`column ${k + 1} of the header has no name`, headerCells[k].pos);
+    const earlier = seen.get(h);
+    if (earlier !== void 0) throw b.error(`column "${header[k]}" appears twice in the header`, headerCells[k].pos, `first as column ${earlier + 1}`);
+    seen.set(h, k);
+  });
+  const src = lower.indexOf("source");
+  const dst = lower.indexOf("target");
+  const idCol = lower.indexOf("id");
+  let r = 0;
+  for (const { cells, end } of rows) {
+    r++;
+    if (cells.length < header.length) {
+      const missing2 = header.slice(cells.length).map((h) => `"${h}"`).join(", ");
+      throw b.error(
+        `row has ${cells.length} of the header's ${header.length} columns (missing ${missing2})`,
+        end,
+        "add the missing values (an empty value is written as nothing between two commas)"
+      );
+    }
+    if (cells.length > header.length) {
+      throw b.error(`row has ${cells.length} columns but the header has ${header.length}`, cells[header.length].pos, "quote values that contain commas");
+    }
+    const pos = cells[0].pos;
+    const ends = [cells[src], cells[dst]];
+    for (const c of ends) {
+      const id2 = c.text.trim();
+      if (id2 === "") throw b.error(`empty ${c === cells[src] ? "source" : "target"}`, c.pos, "every row needs both link ends");
+      if (!b.hasNode(id2)) b.addNode({ id: id2, pos: c.pos });
+    }
+    const raw = {};
+    const where = /* @__PURE__ */ new Map();
+    header.forEach((h, k) => {
+      if (k === src || k === dst || k === idCol) return;
+      raw[h] = cells[k].text;
+      where.set(h, cells[k].pos);
+    });
+    const mapped = mapLinkAttributes(raw, b, (k) => where.get(k) ?? pos);
+    const id = idCol >= 0 ? cells[idCol].text.trim() : "";
+    b.addLink({
+      what: `row ${r + 1}`,
+      ...id !== "" ? { id } : {},
+      source: ends[0].text.trim(),
+      target: ends[1].text.trim(),
+      pos,
+      sourcePos: ends[0].pos,
+      targetPos: ends[1].pos,
+      ...mapped
+    });
+  }
+  return b.finish();
+}
+
 // src/policy/load.ts
 var import_ajv = __toESM(require_ajv(), 1);
+
+// src/policy/globs.ts
+var import_picomatch = __toESM(require_picomatch2(), 1);
+var ESCAPABLE = new Set("*?[]{}()!+@,\\/^$.|- ".split(""));
+function globProblem(glob) {
+  if (glob.trim() === "") return { message: "is empty", hint: 'write a glob such as "networks/**/*.net.yaml"' };
+  if (glob.trim() !== glob) return { message: "starts or ends with white space, which is part of the glob", hint: "remove the spaces" };
+  if (glob.startsWith("!") && !glob.startsWith("!(")) {
+    return { message: 'starts with "!", which would select every file except these', hint: 'list the files to leave out under "ignore:"' };
+  }
+  if (glob.startsWith("/") || /^[A-Za-z]:[\\/]/.test(glob)) {
+    return { message: "is an absolute path; globs are read from the repository root", hint: `write it without the leading "/": "${glob.replace(/^\/+|^[A-Za-z]:[\\/]+/, "")}"` };
+  }
+  const braces = [];
+  const parens = [];
+  for (let i = 0; i < glob.length; i++) {
+    const ch = glob[i];
+    if (ch === "\\") {
+      const next = glob[i + 1];
+      if (next === void 0 || !ESCAPABLE.has(next)) {
+        return { message: "has a backslash, which escapes the next character in a glob; it is not a path separator", hint: `use forward slashes: "${glob.replace(/\\/g, "/")}"` };
+      }
+      i++;
+    } else if (ch === "[") {
+      let j = i + 1;
+      if (glob[j] === "!") {
+        return { message: 'has "[!", which picomatch reads as the character "!", not as "none of"', hint: 'write "[^" for a class of characters to leave out' };
+      }
+      if (glob[j] === "^") j++;
+      if (glob[j] === "]") j++;
+      while (j < glob.length && glob[j] !== "]") j += glob[j] === "\\" ? 2 : 1;
+      if (j >= glob.length) return { message: 'has a "[" that is never closed', hint: 'close the character class with "]", or write "\\[" for a literal bracket' };
+      i = j;
+    } else if (ch === "{") braces.push(i);
+    else if (ch === "}") {
+      if (braces.pop() === void 0) return { message: 'has a "}" without its "{"', hint: "alternatives are written {a,b}" };
+    } else if (ch === "(") parens.push(i);
+    else if (ch === ")") {
+      if (parens.pop() === void 0) return { message: 'has a ")" without its "("', hint: "groups are written @(a|b)" };
+    }
+  }
+  if (braces.length > 0) return { message: 'has a "{" that is never closed', hint: 'close it: alternatives are written {a,b}, e.g. "**/*.{graphml,gml}"' };
+  if (parens.length > 0) return { message: 'has a "(" that is never closed', hint: "close it: groups are written @(a|b)" };
+  if (glob.endsWith("/")) return { message: 'ends with "/", so it matches directories, never files', hint: `add the files: "${glob}**"` };
+  const segments = glob.replace(/^\.\//, "").split("/");
+  if (segments.includes("..")) return { message: 'has a ".." segment; globs are read from the repository root', hint: 'write the path from the root, without ".."' };
+  if (segments.includes(".")) return { message: 'has a "." segment, which repository paths never have', hint: 'remove the "./"' };
+  if (segments.includes("")) return { message: 'has an empty segment ("//"), which repository paths never have', hint: 'write one "/"' };
+  let re;
+  try {
+    re = import_picomatch.default.makeRe(glob, { dot: true });
+  } catch (e) {
+    return { message: `cannot be read as a glob (${e instanceof Error ? e.message : String(e)})`, hint: 'see the glob syntax in the README ("Policy")' };
+  }
+  if (re.source === "$^") return { message: "cannot be read as a glob: it would match no file", hint: 'see the glob syntax in the README ("Policy")' };
+  return void 0;
+}
 
 // src/policy/requirement-id.ts
 function statisticTag(s) {
@@ -22836,7 +25277,7 @@ function requirementId(r) {
       return `n-1:${r.element}`;
     case "no-new-spof":
       if (r.bridges && r.cutNodes) return "no-new-spof";
-      return r.bridges ? "no-new-spof:bridges" : "no-new-spof:cut-nodes";
+      return `no-new-spof:${[r.bridges ? "bridges" : "", r.cutNodes ? "cut-nodes" : "", r.riskGroups ? "risk-groups" : ""].filter(Boolean).join("+")}`;
   }
 }
 
@@ -22920,6 +25361,41 @@ var policy_schema_default = {
     weakening: { $ref: "#/definitions/weakening" },
     "removed-designs": { $ref: "#/definitions/removedDesigns" },
     budget: { $ref: "#/definitions/budget" },
+    mend: {
+      description: 'How netbrace looks for what would mend a failing design (netbrace mend, and the "what would mend it" part of the reports). Advice only: it never changes a verdict.',
+      type: "object",
+      additionalProperties: false,
+      properties: {
+        candidates: {
+          description: "The planner's list of candidate links (a YAML or JSON file; repository path from the root): candidates: [{between: [a, b], length_km, latency_ms, cost, risk_groups, id, note}]. Without it, site pairs within max-km are the candidates.",
+          type: "string",
+          minLength: 1
+        },
+        "route-factor": {
+          description: "Length of a generated candidate = great-circle distance × this factor (common practice: fibre follows roads and coasts). Default 1.3.",
+          type: "number",
+          minimum: 1,
+          maximum: 10
+        },
+        "max-km": {
+          description: "Generated candidates join only sites at most this far apart (great circle, km). Default: the longest span the design already has.",
+          type: "number",
+          exclusiveMinimum: 0
+        },
+        "max-links": {
+          description: "Most links one suggestion may add. Default 3, or one more than the Eswaran–Tarjan bound of the new bridges when that is larger.",
+          type: "integer",
+          minimum: 1,
+          maximum: 10
+        },
+        evaluations: {
+          description: "Most engine evaluations of mended designs per failing design (each one full evaluation under this policy); 0 turns the search off. Default: up to 10, within four times the design's budget.",
+          type: "integer",
+          minimum: 0,
+          maximum: 100
+        }
+      }
+    },
     scopes: {
       description: "Rules for some files only: they add requirements or tighten existing ones, never loosen them.",
       type: "array",
@@ -22946,7 +25422,7 @@ var policy_schema_default = {
       ]
     },
     seed: { type: "integer", minimum: 0, maximum: 4294967295 },
-    weight: { description: "Weight of the metric in the mean (> 0).", type: "number", exclusiveMinimum: 0 },
+    weight: { description: "Weight of the metric in the mean, from 1e-6 to 1e6 (only the ratios between weights matter).", type: "number", exclusiveMinimum: 0 },
     severity: {
       description: "fail: the gate fails; warn: reported as a warning; notice: reported only.",
       enum: ["fail", "warn", "notice"],
@@ -23072,18 +25548,22 @@ var policy_schema_default = {
           }
         },
         {
-          description: "no-new-spof: the change may not add bridges or cut nodes that the base did not have.",
+          description: "no-new-spof: the change may not add bridges, cut nodes or shared-risk groups whose loss strands sites that the base did not have.",
           type: "object",
           additionalProperties: false,
           required: ["kind"],
           properties: {
             kind: { const: "no-new-spof" },
             elements: {
-              description: "Which single points of failure count (default both).",
+              description: "Which single points of failure count (default all three): bridges (links), cut-nodes (sites), risk-groups (shared-risk groups whose loss cuts sites off).",
               type: "array",
               minItems: 1,
               uniqueItems: true,
-              items: { enum: ["bridges", "cut-nodes"] }
+              items: { enum: ["bridges", "cut-nodes", "risk-groups"] }
+            },
+            "hardened-weak-points": {
+              description: "What a new weak point hidden by an element the change marks hardened is: fail, warn (the default), notice or ignore. Hardening is a claim the gate cannot check.",
+              enum: ["fail", "warn", "notice", "ignore"]
             },
             severity: { $ref: "#/definitions/severity" }
           }
@@ -23446,6 +25926,24 @@ function throwSchemaErrors(errors, src) {
 }
 
 // src/policy/load.ts
+var MIN_METRIC_WEIGHT = 1e-6;
+var MAX_METRIC_WEIGHT = 1e6;
+function firstNonNormal(v, path) {
+  if (typeof v === "number") {
+    const why = nonNormal(v);
+    return why ? { path: [...path], why } : void 0;
+  }
+  if (v === null || typeof v !== "object") return void 0;
+  const entries = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
+  for (const [k, x] of entries) {
+    if (typeof x !== "number" && (x === null || typeof x !== "object")) continue;
+    path.push(k);
+    const found = firstNonNormal(x, path);
+    path.pop();
+    if (found) return found;
+  }
+  return void 0;
+}
 var validator;
 function validate(data) {
   validator ??= new import_ajv.Ajv({ allErrors: true, verbose: true, discriminator: true, strict: false }).compile(policy_schema_default);
@@ -23472,8 +25970,13 @@ var ENGINE = {
     random: { static: "regional" }
   }
 };
-function globs(value) {
-  return typeof value === "string" ? [value] : value;
+function globs(value, src, path, what) {
+  const list = typeof value === "string" ? [value] : value;
+  list.forEach((g, j) => {
+    const problem = globProblem(g);
+    if (problem) throw new PolicyError(`${what}, glob "${g}" ${problem.message}`, src.where(typeof value === "string" ? path : [...path, j]), problem.hint);
+  });
+  return list;
 }
 var FileBuilder = class {
   constructor(src) {
@@ -23608,13 +26111,16 @@ var FileBuilder = class {
         req = { ...common, kind: "n-1", element: raw.element ?? "link", min: raw.min };
         break;
       default: {
-        const elements = raw.elements ?? ["bridges", "cut-nodes"];
+        const elements = raw.elements ?? ["bridges", "cut-nodes", "risk-groups"];
         req = {
           ...common,
           valueWhere: this.at([...path, raw.elements !== void 0 ? "elements" : "kind"]),
           kind: "no-new-spof",
           bridges: elements.includes("bridges"),
-          cutNodes: elements.includes("cut-nodes")
+          cutNodes: elements.includes("cut-nodes"),
+          riskGroups: elements.includes("risk-groups"),
+          hardenedWeakPoints: raw["hardened-weak-points"] ?? "warn",
+          ...raw["hardened-weak-points"] !== void 0 ? { hardenedWhere: this.at([...path, "hardened-weak-points"]) } : {}
         };
       }
     }
@@ -23667,6 +26173,22 @@ var FileBuilder = class {
     }
     return budget;
   }
+  mend(raw) {
+    if (raw === void 0) return void 0;
+    const m = { where: this.at(["mend"], true) };
+    if (raw.candidates !== void 0) {
+      const c = String(raw.candidates).replace(/\\/g, "/");
+      if (c.startsWith("/") || /^[A-Za-z]:\//.test(c) || c.split("/").includes("..")) {
+        this.fail(`"mend.candidates" must be a path inside the repository, not ${c}`, ["mend", "candidates"], "write it from the repository root, e.g. planning/candidate-links.yaml");
+      }
+      m.candidates = c.split("/").filter((s) => s !== "" && s !== ".").join("/");
+    }
+    if (raw["route-factor"] !== void 0) m.routeFactor = raw["route-factor"];
+    if (raw["max-km"] !== void 0) m.maxKm = raw["max-km"];
+    if (raw["max-links"] !== void 0) m.maxLinks = raw["max-links"];
+    if (raw.evaluations !== void 0) m.evaluations = raw.evaluations;
+    return m;
+  }
   removed(raw, path) {
     return raw === void 0 ? void 0 : { severity: raw, where: this.at(path) };
   }
@@ -23696,6 +26218,8 @@ function parsePolicyFile(text2, file) {
   if (typeof data !== "object" || data === null || Array.isArray(data)) {
     throw new PolicyError("the policy must be a mapping of keys (key: value lines)", src.where([]), 'see "netbrace init" for a starter file');
   }
+  const odd = firstNonNormal(data, []);
+  if (odd) throw new PolicyError(`${describePath(odd.path)} ${odd.why}`, src.where(odd.path), "write a plain decimal number");
   const v = validate(data);
   if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
   const raw = data;
@@ -23708,16 +26232,26 @@ function parsePolicyFile(text2, file) {
   if (raw.designs !== void 0) {
     policy.designs = raw.designs.map(
       (d, i) => ({
-        paths: globs(d.paths),
+        paths: globs(d.paths, src, ["designs", i, "paths"], `designs entry ${i + 1}`),
         ...d.format !== void 0 ? { format: d.format } : {},
-        where: src.where(["designs", i])
+        where: src.where(["designs", i]),
+        fileWhere: typeof d.paths === "string" ? [src.where(["designs", i, "paths"])] : d.paths.map((_, j) => src.where(["designs", i, "paths", j]))
       })
     );
   }
-  if (raw.exclude !== void 0) policy.exclude = { globs: globs(raw.exclude), where: src.where(["exclude"]) };
+  if (raw.exclude !== void 0) policy.exclude = { globs: globs(raw.exclude, src, ["exclude"], "exclude"), where: src.where(["exclude"]) };
   if (raw.seed !== void 0) policy.seed = { value: raw.seed, where: src.where(["seed"]) };
   if (raw["r-value"] !== void 0) {
     const r = raw["r-value"];
+    for (const [id, weight] of Object.entries(r.metrics)) {
+      if (weight < MIN_METRIC_WEIGHT || weight > MAX_METRIC_WEIGHT) {
+        throw new PolicyError(
+          `the weight of ${id} in r-value.metrics is ${fmt(weight)}, outside ${fmt(MIN_METRIC_WEIGHT)} to ${fmt(MAX_METRIC_WEIGHT)}`,
+          src.where(["r-value", "metrics", id]),
+          "weights only set the metrics against each other (R is their weighted mean): 1 and 2 say the same as 1000 and 2000"
+        );
+      }
+    }
     const spec = {
       metrics: Object.entries(r.metrics).map(([id, weight]) => ({ id, weight })),
       combine: r.combine ?? "mean"
@@ -23747,10 +26281,12 @@ function parsePolicyFile(text2, file) {
   if (removed) policy.removedDesigns = removed;
   const budget = b.budget(raw.budget, ["budget"]);
   if (budget) policy.budget = budget;
+  const mend = b.mend(raw.mend);
+  if (mend) policy.mend = mend;
   policy.scopes = (raw.scopes ?? []).map((o, i) => {
     const path = ["scopes", i];
     const scope = {
-      paths: globs(o.paths),
+      paths: globs(o.paths, src, [...path, "paths"], `scope ${i + 1}`),
       requirements: b.requirements(o.requirements, [...path, "requirements"]),
       where: src.where(path)
     };
@@ -23780,7 +26316,7 @@ function describeValue(r) {
     case "spread-ceiling":
       return `max ${r.max}`;
     case "no-new-spof":
-      return [r.bridges ? "bridges" : "", r.cutNodes ? "cut-nodes" : ""].filter(Boolean).join(" and ");
+      return `elements ${[r.bridges ? "bridges" : "", r.cutNodes ? "cut-nodes" : "", r.riskGroups ? "risk-groups" : ""].filter(Boolean).join(", ")}`;
     case "area-floor":
       return r.min === void 0 ? "no floor" : `min ${r.min}`;
     default:
@@ -23798,7 +26334,14 @@ function loosening(prev, next) {
   let looser = false;
   if (prev.kind === "spread-ceiling" && next.kind === "spread-ceiling") looser = next.max > prev.max;
   else if (prev.kind === "no-new-spof" && next.kind === "no-new-spof") {
-    looser = prev.bridges && !next.bridges || prev.cutNodes && !next.cutNodes;
+    looser = prev.bridges && !next.bridges || prev.cutNodes && !next.cutNodes || prev.riskGroups && !next.riskGroups;
+    if (!looser && SEVERITY_RANK[next.hardenedWeakPoints] < SEVERITY_RANK[prev.hardenedWeakPoints]) {
+      return {
+        message: `lowers hardened-weak-points of ${prev.id} from ${prev.hardenedWeakPoints} to ${next.hardenedWeakPoints}`,
+        where: next.hardenedWhere ?? next.where,
+        prevWhere: prev.hardenedWhere ?? prev.where
+      };
+    }
   } else if (prev.kind === "area-floor" && next.kind === "area-floor") {
     looser = prev.min !== void 0 && (next.min === void 0 || next.min < prev.min);
   } else if ("min" in prev && "min" in next) looser = next.min < prev.min;
@@ -24005,7 +26548,13 @@ function readChain(entry, read) {
       throw new PolicyError(`"inherits" goes round in a circle back to ${path}`, from ?? { file: path }, "remove one of the inherits lines");
     }
     seen.add(path);
-    const text2 = read(path);
+    let text2;
+    try {
+      text2 = read(path);
+    } catch (e) {
+      if (e instanceof EncodingError) throw new PolicyError(e.message, { file: e.file, line: e.line, column: e.column }, e.hint);
+      throw e;
+    }
     if (text2 === null) {
       if (from) throw new PolicyError(`the base policy ${path} does not exist`, from, "check the path; it is relative to this file");
       throw new PolicyError(`the policy file ${path} does not exist`, { file: path }, 'run "netbrace init" to write one');
@@ -24101,6 +26650,7 @@ function mergeChain(chain) {
       scopes.push({ ...o, requirements: requirementsChecked, layer });
     })
   );
+  const mend = chain.reduce((acc, f) => f.mend ? { ...acc, ...f.mend } : acc, void 0);
   return {
     source: "file",
     files: chain.map((f) => f.path).reverse(),
@@ -24114,23 +26664,35 @@ function mergeChain(chain) {
     removedDesigns: removed.value,
     budget: budget.value,
     scopes,
-    layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer }
+    layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer },
+    ...mend ? { mend } : {}
   };
 }
 var matchers = /* @__PURE__ */ new Map();
-function matches(globs2, given) {
+function globsMatch(globs2, given) {
   const path = given.replace(/[\r\n\u2028\u2029]/g, "");
   return globs2.some((g) => {
     let m = matchers.get(g);
     if (!m) {
-      m = (0, import_picomatch.default)(g, { dot: true });
+      m = (0, import_picomatch2.default)(g, { dot: true });
       matchers.set(g, m);
     }
     return m(path);
   });
 }
 function isDesignPath(policy, path) {
-  return policy.designs.some((d) => matches(d.paths, path)) && !matches(policy.exclude, path);
+  return policy.designs.some((d) => globsMatch(d.paths, path)) && !globsMatch(policy.exclude, path);
+}
+function designNeedsHeader(policy, path) {
+  const matching = policy.designs.flatMap((d) => d.paths.filter((g) => globsMatch([g], path)).map((g) => ({ g, format: d.format })));
+  return matching.length > 0 && matching.every((m) => m.g === CSV_DESIGN_GLOB && m.format === void 0);
+}
+function isDesignText(policy, path, text2) {
+  if (!isDesignPath(policy, path)) return false;
+  return !designNeedsHeader(policy, path) || text2 !== null && csvHasEdgeHeader(text2);
+}
+function designFormat(policy, path) {
+  return policy.designs.find((d) => d.format !== void 0 && globsMatch(d.paths, path))?.format;
 }
 function policyForFile(policy, path) {
   const layers = policy.layers;
@@ -24139,7 +26701,7 @@ function policyForFile(policy, path) {
   let removed = { value: policy.removedDesigns, layer: layers.removed };
   let budget = { value: policy.budget, layer: layers.budget };
   for (const o of policy.scopes) {
-    if (!matches(o.paths, path)) continue;
+    if (!globsMatch(o.paths, path)) continue;
     const { layer } = o;
     const what = `a scope matching ${path}`;
     for (const r of o.requirements) mergeRequirement(requirements, { value: r, layer }, what);
@@ -24148,7 +26710,7 @@ function policyForFile(policy, path) {
     if (o.budget) budget = mergeBudget(budget, { value: o.budget, layer }, what);
   }
   const b = budget.value;
-  const format = policy.designs.find((d) => d.format !== void 0 && matches(d.paths, path))?.format;
+  const format = designFormat(policy, path);
   return {
     rValue: policy.rValue,
     seed: policy.seed,
@@ -24157,7 +26719,8 @@ function policyForFile(policy, path) {
     weakening: weakening.value,
     removedDesigns: removed.value.severity,
     budget: { ...b.work !== void 0 ? { work: b.work } : {}, ...b.seconds !== void 0 ? { seconds: b.seconds } : {}, maxWork: budgetWork(b) },
-    ...format ? { format } : {}
+    ...format ? { format } : {},
+    ...policy.mend ? { mend: policy.mend } : {}
   };
 }
 
@@ -24180,12 +26743,1129 @@ function serializeReport(report) {
 `;
 }
 
-// src/topology/model.ts
-var DEFAULT_MAX_BYTES = 20 * 1024 * 1024;
-var DEFAULT_MAX_ELEMENTS = 2e6;
-function linkKey(source, target, occurrence) {
-  const [a, b] = source <= target ? [source, target] : [target, source];
-  return occurrence > 1 ? `${a}—${b}#${occurrence}` : `${a}—${b}`;
+// src/map/force.ts
+var import_graphology_layout_forceatlas2 = __toESM(require_graphology_layout_forceatlas2(), 1);
+var import_graphology_layout_noverlap = __toESM(require_graphology_layout_noverlap(), 1);
+import { UndirectedGraph } from "graphology";
+
+// src/map/project.ts
+var MAP_WIDTH = 760;
+var MAP_MAX_HEIGHT = 640;
+var MAP_MIN_HEIGHT = 260;
+var MAP_MARGIN = 36;
+function round1(v) {
+  const r = Math.round(v * 10) / 10;
+  return Object.is(r, -0) ? 0 : r;
+}
+function unwrapLongitudes(lon) {
+  if (lon.length < 2) return [...lon];
+  const norm2 = lon.map((l) => ((l + 180) % 360 + 360) % 360 - 180);
+  const sorted = [...new Set(norm2)].sort((a, b) => a - b);
+  let gap = sorted[0] + 360 - sorted[sorted.length - 1];
+  let start = sorted[0];
+  for (let i = 1; i < sorted.length; i++) {
+    const d = sorted[i] - sorted[i - 1];
+    if (d > gap) {
+      gap = d;
+      start = sorted[i];
+    }
+  }
+  return norm2.map((l) => l < start ? l + 360 : l);
+}
+function fitToBox(px, py, width = MAP_WIDTH, maxHeight = MAP_MAX_HEIGHT, margin = MAP_MARGIN) {
+  const n = px.length;
+  let x0 = Infinity;
+  let x1 = -Infinity;
+  let y0 = Infinity;
+  let y1 = -Infinity;
+  for (let i = 0; i < n; i++) {
+    x0 = Math.min(x0, px[i]);
+    x1 = Math.max(x1, px[i]);
+    y0 = Math.min(y0, py[i]);
+    y1 = Math.max(y1, py[i]);
+  }
+  const x = new Float64Array(n);
+  const y = new Float64Array(n);
+  if (n === 0) return { x, y, width, height: MAP_MIN_HEIGHT };
+  const spanX = x1 - x0;
+  const spanY = y1 - y0;
+  const innerW = width - 2 * margin;
+  const innerH = maxHeight - 2 * margin;
+  const s = spanX <= 0 && spanY <= 0 ? 1 : Math.min(spanX > 0 ? innerW / spanX : Infinity, spanY > 0 ? innerH / spanY : Infinity);
+  const height = Math.max(MAP_MIN_HEIGHT, Math.min(maxHeight, Math.ceil(spanY * s + 2 * margin)));
+  const offX = (width - spanX * s) / 2;
+  const offY = (height - spanY * s) / 2;
+  for (let i = 0; i < n; i++) {
+    x[i] = round1(offX + (px[i] - x0) * s);
+    y[i] = round1(offY + (py[i] - y0) * s);
+  }
+  return { x, y, width, height };
+}
+function projectGeographic(lat, lon) {
+  const lons = unwrapLongitudes(lon);
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of lat) {
+    lo = Math.min(lo, v);
+    hi = Math.max(hi, v);
+  }
+  const phi0 = lat.length ? (lo + hi) / 2 * (Math.PI / 180) : 0;
+  const k = Math.max(0.05, Math.cos(phi0));
+  return fitToBox(
+    lons.map((l) => l * k),
+    lat.map((v) => -v)
+  );
+}
+
+// src/map/force.ts
+var forceAtlas2 = import_graphology_layout_forceatlas2.default;
+var noverlap = import_graphology_layout_noverlap.default;
+var LAYOUT_SEED = 7168368;
+function iterationsFor(n) {
+  return n <= 300 ? 500 : n <= 1e3 ? 250 : 120;
+}
+function forceLayout(ids, edges, seed = LAYOUT_SEED) {
+  const n = ids.length;
+  if (n === 0) return fitToBox([], []);
+  const graph = new UndirectedGraph({ multi: false, allowSelfLoops: false });
+  const s = seedWord(seed);
+  const spread2 = 10 * Math.sqrt(n);
+  ids.forEach((id, i) => {
+    const hx = hashString(id, s) / 4294967296;
+    const hy = hashString(id, s ^ 2654435769) / 4294967296;
+    graph.addNode(String(i), { x: (hx * 2 - 1) * spread2, y: (hy * 2 - 1) * spread2, size: 1 });
+  });
+  for (const [a, b] of edges) {
+    if (a === b) continue;
+    const u = String(a);
+    const v = String(b);
+    const e = graph.edge(u, v);
+    if (e === void 0) graph.addEdge(u, v, { weight: 1 });
+    else graph.updateEdgeAttribute(e, "weight", (w) => (w ?? 1) + 1);
+  }
+  if (n > 1) {
+    const settings = { ...forceAtlas2.inferSettings(n), barnesHutOptimize: n > 600 };
+    forceAtlas2.assign(graph, { iterations: iterationsFor(n), settings, getEdgeWeight: "weight" });
+    noverlap.assign(graph, { maxIterations: 80, settings: { margin: 2, ratio: 1.2 } });
+  }
+  const px = [];
+  const py = [];
+  for (let i = 0; i < n; i++) {
+    const a = graph.getNodeAttributes(String(i));
+    px.push(Number.isFinite(a.x) ? a.x : 0);
+    py.push(Number.isFinite(a.y) ? a.y : 0);
+  }
+  return fitToBox(px, py);
+}
+
+// src/map/stranding.ts
+function offMain(g, mask = createMask(g)) {
+  const c = findComponents(g, mask);
+  return c.largest < 0 ? 0 : g.n - c.sizes[c.largest];
+}
+function strandingGroups(g) {
+  const out = /* @__PURE__ */ new Map();
+  const intact = offMain(g);
+  const mask = createMask(g);
+  for (let u = 0; u < unitCount(g, "group"); u++) {
+    mask.link.fill(0);
+    removeUnit(g, mask, "group", u);
+    const strands = offMain(g, mask) - intact;
+    if (strands > 0) out.set(g.groupIds[u], strands);
+  }
+  return out;
+}
+
+// src/map/build.ts
+var MAP_MAX_NODES = 1e3;
+var MAP_MAX_LINKS = 4e3;
+function buildDesignMap(head, base) {
+  const h = head.graph;
+  const b = base?.graph;
+  const nodes = [];
+  const index = /* @__PURE__ */ new Map();
+  const lat = [];
+  const lon = [];
+  const addNode = (g, v, side, labels2) => {
+    const id = g.nodeIds[v];
+    index.set(id, nodes.length);
+    const node = { id, x: 0, y: 0, line: g.nodeLine[v], side };
+    const label = labels2?.get(id);
+    if (label !== void 0 && label !== id) node.label = label;
+    if (g.nodeHardened[v]) node.hardened = true;
+    nodes.push(node);
+    lat.push(g.lat ? g.lat[v] : Number.NaN);
+    lon.push(g.lon ? g.lon[v] : Number.NaN);
+  };
+  for (let v = 0; v < h.n; v++) addNode(h, v, b && !b.nodeIndex.has(h.nodeIds[v]) ? "head" : "both", head.labels);
+  if (b) {
+    for (let v = 0; v < b.n; v++) if (!h.nodeIndex.has(b.nodeIds[v])) addNode(b, v, "base", base?.labels);
+  }
+  const links = [];
+  const edges = [];
+  const addLink = (g, e, side) => {
+    const source = g.nodeIds[g.linkSource[e]];
+    const target = g.nodeIds[g.linkTarget[e]];
+    const link = { id: g.linkIds[e], source, target, line: g.linkLine[e], side };
+    if (g.linkHardened[e]) link.hardened = true;
+    const groups = [];
+    for (let k = 0; k < g.groupIds.length; k++) {
+      for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) if (g.groupLinks[p] === e) groups.push(g.groupIds[k]);
+    }
+    if (groups.length) link.groups = groups;
+    links.push(link);
+    edges.push([index.get(source), index.get(target)]);
+  };
+  const baseKeys = new Set(b?.linkKeys ?? []);
+  const headKeys = new Set(h.linkKeys);
+  for (let e = 0; e < h.m; e++) addLink(h, e, b && !baseKeys.has(h.linkKeys[e]) ? "head" : "both");
+  if (b) {
+    for (let e = 0; e < b.m; e++) if (!headKeys.has(b.linkKeys[e])) addLink(b, e, "base");
+  }
+  if (nodes.length > MAP_MAX_NODES || links.length > MAP_MAX_LINKS) {
+    return { omitted: `${nodes.length} sites and ${links.length} links, base and head together: more than a map shows legibly (${MAP_MAX_NODES} sites, ${MAP_MAX_LINKS} links)` };
+  }
+  const located = nodes.map((_, i) => Number.isFinite(lat[i]) && Number.isFinite(lon[i]));
+  const nLocated = located.filter(Boolean).length;
+  let layout;
+  let method;
+  let width;
+  let height;
+  if (nLocated >= 2) {
+    layout = "geographic";
+    const idx = nodes.map((_, i) => i).filter((i) => located[i]);
+    const placed = projectGeographic(idx.map((i) => lat[i]), idx.map((i) => lon[i]));
+    width = placed.width;
+    height = placed.height;
+    const x = new Float64Array(nodes.length).fill(Number.NaN);
+    const y = new Float64Array(nodes.length).fill(Number.NaN);
+    idx.forEach((i, k) => {
+      x[i] = placed.x[k];
+      y[i] = placed.y[k];
+    });
+    placeUnlocated(nodes.length, edges, x, y, width, height);
+    nodes.forEach((node, i) => {
+      node.x = x[i];
+      node.y = y[i];
+      if (!located[i]) node.placed = true;
+    });
+    method = "sites at their coordinates: equirectangular projection centred on the design, fitted to its extent" + (nLocated < nodes.length ? `; ${nodes.length - nLocated} site${nodes.length - nLocated === 1 ? "" : "s"} without coordinates placed beside their neighbours` : "");
+  } else {
+    layout = "force";
+    const placed = forceLayout(nodes.map((n) => n.id), edges);
+    width = placed.width;
+    height = placed.height;
+    nodes.forEach((node, i) => {
+      node.x = placed.x[i];
+      node.y = placed.y[i];
+    });
+    method = "no coordinates: a seeded ForceAtlas2 layout of the links, with an anti-overlap pass (positions carry no geographic meaning)";
+  }
+  const headStrand = strandingGroups(h);
+  const baseStrand = b ? strandingGroups(b) : /* @__PURE__ */ new Map();
+  const strandingGroupsList = [...headStrand.entries()].map(([id, strands]) => ({
+    id,
+    line: h.groupLine[h.groupIds.indexOf(id)] ?? 0,
+    strands,
+    isNew: b !== void 0 && !baseStrand.has(id)
+  }));
+  return { layout, width, height, nodes, links, strandingGroups: strandingGroupsList, method };
+}
+function placeUnlocated(n, edges, x, y, width, height) {
+  const adj = Array.from({ length: n }, () => []);
+  for (const [a, b] of edges) {
+    adj[a].push(b);
+    adj[b].push(a);
+  }
+  for (let round = 0; round < 16; round++) {
+    let changed = false;
+    const nx = Float64Array.from(x);
+    const ny = Float64Array.from(y);
+    for (let i = 0; i < n; i++) {
+      if (Number.isFinite(x[i])) continue;
+      const near = adj[i].filter((j) => Number.isFinite(x[j]));
+      if (!near.length) continue;
+      nx[i] = round1(near.reduce((s, j) => s + x[j], 0) / near.length + 9 * Math.cos(i));
+      ny[i] = round1(near.reduce((s, j) => s + y[j], 0) / near.length + 9 * Math.sin(i));
+      changed = true;
+    }
+    x.set(nx);
+    y.set(ny);
+    if (!changed) break;
+  }
+  const rest = [];
+  for (let i = 0; i < n; i++) if (!Number.isFinite(x[i])) rest.push(i);
+  rest.forEach((i, k) => {
+    x[i] = round1(MAP_MARGIN + (width - 2 * MAP_MARGIN) * (k + 0.5) / rest.length);
+    y[i] = round1(height - MAP_MARGIN / 2);
+  });
+}
+
+// src/mend/apply.ts
+var import_yaml3 = __toESM(require_dist(), 1);
+function withExtraLinks(g, extra) {
+  if (extra.length === 0) return g;
+  const m = g.m + extra.length;
+  const linkSource = new Int32Array(m);
+  const linkTarget = new Int32Array(m);
+  linkSource.set(g.linkSource);
+  linkTarget.set(g.linkTarget);
+  extra.forEach(([a, b], k) => {
+    linkSource[g.m + k] = a;
+    linkTarget[g.m + k] = b;
+  });
+  const degree2 = new Int32Array(g.n);
+  for (let e = 0; e < m; e++) {
+    degree2[linkSource[e]]++;
+    degree2[linkTarget[e]]++;
+  }
+  const offsets = new Int32Array(g.n + 1);
+  for (let v = 0; v < g.n; v++) offsets[v + 1] = offsets[v] + degree2[v];
+  const neighbors = new Int32Array(2 * m);
+  const linkOf = new Int32Array(2 * m);
+  const fill = offsets.slice(0, g.n);
+  for (let e = 0; e < m; e++) {
+    const s = linkSource[e];
+    const d = linkTarget[e];
+    neighbors[fill[s]] = d;
+    linkOf[fill[s]++] = e;
+    neighbors[fill[d]] = s;
+    linkOf[fill[d]++] = e;
+  }
+  const linkHardened = new Uint8Array(m);
+  linkHardened.set(g.linkHardened);
+  const linkLine = new Int32Array(m);
+  linkLine.set(g.linkLine);
+  return {
+    ...g,
+    m,
+    offsets,
+    neighbors,
+    linkOf,
+    linkSource,
+    linkTarget,
+    linkHardened,
+    linkLine,
+    length: null,
+    latency: null,
+    weight: null,
+    linkIds: [...g.linkIds, ...extra.map((_, k) => `\0extra${k}`)],
+    linkKeys: [...g.linkKeys, ...extra.map((_, k) => `\0extra${k}`)]
+  };
+}
+function applyToTopology(t, change) {
+  const hardNodes = new Set(change.harden.filter((e) => e.kind === "node").map((e) => e.id));
+  const hardLinks = new Set(change.harden.filter((e) => e.kind === "link").map((e) => e.id));
+  const pairs = /* @__PURE__ */ new Map();
+  for (const l of t.links) {
+    const k = linkKey(l.source, l.target, 1);
+    pairs.set(k, (pairs.get(k) ?? 0) + 1);
+  }
+  const added = change.links.map((l) => {
+    const [source, target] = l.between;
+    const k = linkKey(source, target, 1);
+    const occurrence = (pairs.get(k) ?? 0) + 1;
+    pairs.set(k, occurrence);
+    const link = {
+      id: l.id,
+      key: linkKey(source, target, occurrence),
+      source,
+      target,
+      riskGroups: [...l.riskGroups ?? []],
+      hardened: false,
+      pos: { line: 0, column: 0 },
+      attrs: {}
+    };
+    if (l.lengthKm !== void 0) link.length = l.lengthKm;
+    if (l.latencyMs !== void 0) link.latency = l.latencyMs;
+    return link;
+  });
+  return {
+    ...t,
+    nodes: t.nodes.map((v) => hardNodes.has(v.id) ? { ...v, hardened: true } : v),
+    links: [...t.links.map((l) => hardLinks.has(l.id) ? { ...l, hardened: true } : l), ...added]
+  };
+}
+
+// src/mend/candidates.ts
+var import_yaml4 = __toESM(require_dist(), 1);
+var DEFAULT_ROUTE_FACTOR = 1.3;
+var ALL_PAIRS_LIMIT = 300;
+var MAX_HOPS = 3;
+var GEO_ALL_PAIRS_LIMIT = 2e3;
+var MAX_GENERATED = 2e4;
+var KEYS = /* @__PURE__ */ new Set(["between", "id", "length_km", "latency_ms", "cost", "risk_groups", "note"]);
+function price(c, unit) {
+  if (unit === "cost") return c.cost ?? 0;
+  if (unit === "km") return c.lengthKm ?? 0;
+  return 1;
+}
+function unitOf(list) {
+  if (list.length > 0 && list.every((c) => c.cost !== void 0)) return "cost";
+  if (list.length > 0 && list.every((c) => c.lengthKm !== void 0)) return "km";
+  return "link";
+}
+function parseCandidateFile(text2, file, g) {
+  const lines = new import_yaml4.LineCounter();
+  const doc = (0, import_yaml4.parseDocument)(text2, { lineCounter: lines, prettyErrors: false, uniqueKeys: true });
+  const at = (node) => {
+    const p = node?.range ? lines.linePos(node.range[0]) : { line: 1, col: 1 };
+    return { file, line: p.line, column: p.col };
+  };
+  if (doc.errors.length > 0) {
+    const p = lines.linePos(doc.errors[0].pos[0]);
+    throw new PolicyError(`the candidate list is not valid YAML: ${doc.errors[0].message.split("\n")[0]}`, { file, line: p.line, column: p.col }, "check the indentation and quoting on this line");
+  }
+  const root = doc.contents;
+  const hint = 'write "candidates:" followed by a list of {between: [a, b], length_km: …}';
+  if (!(0, import_yaml4.isMap)(root)) throw new PolicyError('the candidate list must be a mapping with a "candidates" list', at(root), hint);
+  const pair = root.items.find((p) => (0, import_yaml4.isScalar)(p.key) && p.key.value === "candidates");
+  if (!pair || !(0, import_yaml4.isSeq)(pair.value)) throw new PolicyError('the candidate list has no "candidates" list', at(pair?.value ?? root), hint);
+  const list = [];
+  const notes = [];
+  const missing2 = /* @__PURE__ */ new Set();
+  pair.value.items.forEach((item, i) => {
+    const what = `candidate ${i + 1}`;
+    if (!(0, import_yaml4.isMap)(item)) throw new PolicyError(`${what} must be a mapping`, at(item), hint);
+    const get = (k) => item.items.find((p) => (0, import_yaml4.isScalar)(p.key) && p.key.value === k);
+    for (const p of item.items) {
+      const k = (0, import_yaml4.isScalar)(p.key) ? String(p.key.value) : "";
+      if (!KEYS.has(k)) throw new PolicyError(`${what}: unknown key "${k}"`, at(p.key), `known keys: ${[...KEYS].join(", ")}`);
+    }
+    const between = get("between");
+    const ends = between && (0, import_yaml4.isSeq)(between.value) ? between.value.items : null;
+    if (!ends || ends.length !== 2 || !ends.every((e) => (0, import_yaml4.isScalar)(e) && (typeof e.value === "string" || typeof e.value === "number"))) {
+      throw new PolicyError(`${what}: "between" must list two site ids`, at(between?.value ?? item), "e.g. between: [north, south]");
+    }
+    const [s, t] = ends.map((e) => String(e.value));
+    if (s === t) throw new PolicyError(`${what}: a link from a site to itself adds nothing`, at(ends[1]), "name two different sites");
+    const num3 = (k) => {
+      const p = get(k);
+      if (!p) return void 0;
+      const v = (0, import_yaml4.isScalar)(p.value) ? p.value.value : void 0;
+      if (typeof v !== "number" || !Number.isFinite(v) || v < 0) throw new PolicyError(`${what}: "${k}" must be a number ≥ 0`, at(p.value), "");
+      return v;
+    };
+    const str = (k) => {
+      const p = get(k);
+      if (!p) return void 0;
+      const v = (0, import_yaml4.isScalar)(p.value) ? p.value.value : void 0;
+      if (typeof v !== "string" && typeof v !== "number") throw new PolicyError(`${what}: "${k}" must be text`, at(p.value), "");
+      return String(v);
+    };
+    const lengthKm = num3("length_km");
+    const cost = num3("cost");
+    if (lengthKm === void 0 && cost === void 0) throw new PolicyError(`${what} has neither "length_km" nor "cost"`, at(item), "give its length or its cost");
+    const rg = get("risk_groups");
+    let riskGroups2;
+    if (rg) {
+      if (!(0, import_yaml4.isSeq)(rg.value) || !rg.value.items.every((x) => (0, import_yaml4.isScalar)(x))) throw new PolicyError(`${what}: "risk_groups" must be a list of ids`, at(rg.value), "");
+      riskGroups2 = rg.value.items.map((x) => String(x.value));
+    }
+    const a = g.nodeIndex.get(s);
+    const b = g.nodeIndex.get(t);
+    if (a === void 0 || b === void 0) {
+      for (const id2 of [s, t]) if (!g.nodeIndex.has(id2)) missing2.add(id2);
+      return;
+    }
+    const c = { a, b, source: "list", line: at(item).line };
+    const id = str("id");
+    if (id !== void 0) c.id = id;
+    if (lengthKm !== void 0) c.lengthKm = lengthKm;
+    const latency = num3("latency_ms");
+    if (latency !== void 0) c.latencyMs = latency;
+    if (cost !== void 0) c.cost = cost;
+    if (riskGroups2) c.riskGroups = riskGroups2;
+    const note2 = str("note");
+    if (note2 !== void 0) c.note = note2;
+    list.push(c);
+  });
+  if (missing2.size > 0) {
+    const names = [...missing2].slice(0, 5).join(", ");
+    notes.push(`candidates naming sites this design does not have were skipped (${names}${missing2.size > 5 ? ", …" : ""})`);
+  }
+  return { list, unit: unitOf(list), source: "list", notes };
+}
+function longestSpanKm(g) {
+  let best = 0;
+  if (!g.lat || !g.lon) return 0;
+  for (let e = 0; e < g.m; e++) {
+    const s = g.linkSource[e];
+    const t = g.linkTarget[e];
+    const d = greatCircleKm(g.lat[s], g.lon[s], g.lat[t], g.lon[t]);
+    if (Number.isFinite(d) && d > best) best = d;
+  }
+  return best;
+}
+function adjacency(g) {
+  const set = /* @__PURE__ */ new Set();
+  for (let e = 0; e < g.m; e++) {
+    const s = g.linkSource[e];
+    const t = g.linkTarget[e];
+    set.add(s < t ? s * g.n + t : t * g.n + s);
+  }
+  return set;
+}
+function generateCandidates(g, options = {}) {
+  const routeFactor = options.routeFactor ?? DEFAULT_ROUTE_FACTOR;
+  const joined = adjacency(g);
+  const notes = [];
+  const list = [];
+  const hasCoords = (v) => g.lat !== null && g.lon !== null && Number.isFinite(g.lat[v]) && Number.isFinite(g.lon[v]);
+  const located = [];
+  for (let v = 0; v < g.n; v++) if (hasCoords(v)) located.push(v);
+  if (located.length >= 2) {
+    const maxKm = options.maxKm ?? longestSpanKm(g);
+    const consider = (a, b) => {
+      if (joined.has(a * g.n + b)) return;
+      const d = greatCircleKm(g.lat[a], g.lon[a], g.lat[b], g.lon[b]);
+      if (d <= maxKm) list.push({ a, b, lengthKm: Math.round(d * routeFactor * 10) / 10, source: "generated" });
+    };
+    if (located.length <= GEO_ALL_PAIRS_LIMIT) {
+      for (let i = 0; i < located.length; i++) for (let j = i + 1; j < located.length; j++) consider(located[i], located[j]);
+    } else {
+      for (const [a, b] of nearPairs(g)) if (hasCoords(a) && hasCoords(b)) consider(a, b);
+      notes.push(`${located.length} located sites: only pairs within ${MAX_HOPS} hops were considered`);
+    }
+    list.sort((x, y) => x.lengthKm - y.lengthKm || x.a - y.a || x.b - y.b);
+    if (list.length > MAX_GENERATED) {
+      notes.push(`${list.length} site pairs lie within ${round13(maxKm)} km; the ${MAX_GENERATED} shortest were considered`);
+      list.length = MAX_GENERATED;
+    }
+    if (located.length < g.n) notes.push(`${g.n - located.length} sites have no coordinates and get no generated candidate`);
+    return { list, unit: "km", source: "generated", routeFactor, maxKm: round13(maxKm), notes };
+  }
+  if (g.n <= ALL_PAIRS_LIMIT) {
+    for (let a = 0; a < g.n; a++) for (let b = a + 1; b < g.n; b++) if (!joined.has(a * g.n + b)) list.push({ a, b, source: "generated" });
+    notes.push("the design has no coordinates: every pair of sites not yet joined is a candidate, and lengths are unknown");
+  } else {
+    for (const [a, b] of nearPairs(g)) list.push({ a, b, source: "generated" });
+    notes.push(`the design has no coordinates: site pairs within ${MAX_HOPS} hops are the candidates, and lengths are unknown`);
+  }
+  return { list, unit: "link", source: "generated", notes };
+}
+function nearPairs(g) {
+  const out = [];
+  const dist = new Int32Array(g.n).fill(-1);
+  const queue = new Int32Array(g.n);
+  for (let a = 0; a < g.n && out.length < MAX_GENERATED; a++) {
+    let head = 0;
+    let tail = 0;
+    queue[tail++] = a;
+    dist[a] = 0;
+    while (head < tail) {
+      const v = queue[head++];
+      if (dist[v] >= MAX_HOPS) continue;
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+        const w = g.neighbors[p];
+        if (dist[w] !== -1) continue;
+        dist[w] = dist[v] + 1;
+        queue[tail++] = w;
+      }
+    }
+    const near = [];
+    for (let i = 0; i < tail; i++) {
+      const b = queue[i];
+      if (b > a && dist[b] >= 2) near.push(b);
+    }
+    near.sort((x, y) => x - y);
+    for (const b of near) if (out.length < MAX_GENERATED) out.push([a, b]);
+    for (let i = 0; i < tail; i++) dist[queue[i]] = -1;
+  }
+  return out;
+}
+function round13(x) {
+  return Math.round(x * 10) / 10;
+}
+
+// src/mend/bridge-tree.ts
+function bridgeForest(g, cut) {
+  const isCut = new Uint8Array(g.m);
+  for (const e of cut) isCut[e] = 1;
+  const piece = new Int32Array(g.n).fill(-1);
+  const queue = new Int32Array(g.n);
+  let pieces = 0;
+  for (let s = 0; s < g.n; s++) {
+    if (piece[s] !== -1) continue;
+    let head = 0;
+    let tail = 0;
+    queue[tail++] = s;
+    piece[s] = pieces;
+    while (head < tail) {
+      const v = queue[head++];
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+        if (isCut[g.linkOf[p]]) continue;
+        const w = g.neighbors[p];
+        if (piece[w] !== -1) continue;
+        piece[w] = pieces;
+        queue[tail++] = w;
+      }
+    }
+    pieces++;
+  }
+  const degree2 = new Int32Array(pieces);
+  for (const e of cut) {
+    degree2[piece[g.linkSource[e]]]++;
+    degree2[piece[g.linkTarget[e]]]++;
+  }
+  return { piece, pieces, degree: degree2 };
+}
+function eswaranTarjanBound(g, bridges2) {
+  const all = bridges2 === void 0;
+  const cut = bridges2 ?? findCutElements(g).bridges;
+  const f = bridgeForest(g, cut);
+  let leaves = 0;
+  let isolated = 0;
+  for (let i = 0; i < f.pieces; i++) {
+    if (f.degree[i] === 1) leaves++;
+    else if (f.degree[i] === 0) isolated++;
+  }
+  if (!all) return { leaves, isolated: 0, links: Math.ceil(leaves / 2) };
+  if (f.pieces <= 1) return { leaves: 0, isolated: 0, links: 0 };
+  return { leaves, isolated, links: Math.ceil(leaves / 2) + isolated };
+}
+
+// src/mend/cover.ts
+var BRANCH_WIDTH = 8;
+var MAX_EXPANSIONS = 3e3;
+var MAX_VISITS = 5e7;
+function solveCover(p) {
+  const maxExpansions = Math.max(20, Math.min(MAX_EXPANSIONS, Math.floor(MAX_VISITS / Math.max(1, p.g.n + p.g.m))));
+  const byNode = Array.from({ length: p.g.n }, () => []);
+  p.pairs.forEach(([a, b], c) => {
+    byNode[a].push(c);
+    if (b !== a) byNode[b].push(c);
+  });
+  let expansions = 0;
+  let truncated = false;
+  let incompleteBelow = false;
+  const residual = (set) => {
+    expansions++;
+    const g = withExtraLinks(p.g, set.map((c) => p.pairs[c]));
+    const cuts = findCutElements(g);
+    const isBridge = new Set(cuts.bridges);
+    const isCut = new Set(cuts.cutNodes);
+    const bridges2 = p.bridges.filter((e) => isBridge.has(e));
+    const cutNodes2 = p.cutNodes.filter((v) => isCut.has(v));
+    let bound = 0;
+    if (bridges2.length > 0) {
+      const f = bridgeForest(g, bridges2);
+      let leaves = 0;
+      for (let i = 0; i < f.pieces; i++) if (f.degree[i] === 1) leaves++;
+      bound = Math.ceil(leaves / 2);
+    } else if (cutNodes2.length > 0) bound = 1;
+    return { bridges: bridges2, cutNodes: cutNodes2, bound, g };
+  };
+  const children = (set, r) => {
+    const used = new Set(set);
+    const order = (cands, cover) => cands.sort((a, b) => cover(b) - cover(a) || p.score[b] - p.score[a] || p.price[a] - p.price[b] || a - b);
+    if (r.bridges.length > 0) {
+      const f = bridgeForest(r.g, r.bridges);
+      const adj = Array.from({ length: f.pieces }, () => []);
+      for (const e of r.bridges) {
+        const a = f.piece[r.g.linkSource[e]];
+        const b = f.piece[r.g.linkTarget[e]];
+        adj[a].push(b);
+        adj[b].push(a);
+      }
+      const members = /* @__PURE__ */ new Map();
+      for (let v2 = 0; v2 < r.g.n; v2++) {
+        const pc = f.piece[v2];
+        if (f.degree[pc] === 1) (members.get(pc) ?? members.set(pc, []).get(pc)).push(v2);
+      }
+      const treeOf = (leaf) => {
+        const dist2 = new Int32Array(f.pieces).fill(-1);
+        const queue = [leaf];
+        dist2[leaf] = 0;
+        for (let h = 0; h < queue.length; h++) for (const w of adj[queue[h]]) if (dist2[w] === -1) dist2[w] = dist2[queue[h]] + 1, queue.push(w);
+        return dist2;
+      };
+      let bestLeaf = -1;
+      let bestList = [];
+      let bestDist = null;
+      for (const [leaf, nodes] of [...members.entries()].sort((a, b) => a[0] - b[0])) {
+        const dist2 = treeOf(leaf);
+        const list2 = [];
+        const seenHere = /* @__PURE__ */ new Set();
+        for (const v2 of nodes) {
+          for (const c of byNode[v2]) {
+            if (used.has(c) || seenHere.has(c)) continue;
+            seenHere.add(c);
+            const [a, b] = p.pairs[c];
+            const pa = f.piece[a];
+            const pb = f.piece[b];
+            if (pa === leaf === (pb === leaf)) continue;
+            const other = pa === leaf ? pb : pa;
+            if (dist2[other] > 0) list2.push(c);
+          }
+        }
+        list2.sort((x, y) => x - y);
+        if (bestLeaf < 0 || list2.length < bestList.length) {
+          bestLeaf = leaf;
+          bestList = list2;
+          bestDist = dist2;
+        }
+        if (list2.length === 0) break;
+      }
+      const dist = bestDist;
+      const cover = (c) => {
+        const [a, b] = p.pairs[c];
+        return Math.max(dist[f.piece[a]], dist[f.piece[b]]);
+      };
+      order(bestList, cover);
+      return { list: bestList.slice(0, BRANCH_WIDTH), cut: bestList.length > BRANCH_WIDTH };
+    }
+    const v = r.cutNodes[0];
+    const mask = createMask(r.g);
+    mask.node[v] = 1;
+    const comps = findComponents(r.g, mask);
+    const list = [];
+    for (let c = 0; c < p.pairs.length; c++) {
+      if (used.has(c)) continue;
+      const [a, b] = p.pairs[c];
+      if (a === v || b === v) continue;
+      if (comps.label[a] !== comps.label[b]) list.push(c);
+    }
+    order(list, () => 0);
+    return { list: list.slice(0, BRANCH_WIDTH), cut: list.length > BRANCH_WIDTH };
+  };
+  const root = residual([]);
+  const lowerBound = root.bridges.length > 0 ? root.bound : root.cutNodes.length > 0 ? 1 : 0;
+  if (root.bridges.length === 0 && root.cutNodes.length === 0) {
+    return { sets: [[]], lowerBound: 0, minimal: true, truncated: false, expansions };
+  }
+  const found = /* @__PURE__ */ new Map();
+  const priceOf = (set) => set.reduce((s, c) => s + p.price[c], 0);
+  const worstKept = () => {
+    if (found.size < p.keep) return Infinity;
+    return Math.max(...[...found.values()].map((x) => x.price));
+  };
+  let depthComplete = true;
+  let everIncomplete = false;
+  const seen = /* @__PURE__ */ new Set();
+  const dfs = (set, r, limit) => {
+    if (r.bridges.length === 0 && r.cutNodes.length === 0) {
+      const sorted = [...set].sort((a, b) => a - b);
+      const key = sorted.join(",");
+      if (!found.has(key)) {
+        found.set(key, { set: sorted, price: priceOf(sorted) });
+        if (found.size > p.keep) {
+          const worst = [...found.entries()].sort((a, b) => b[1].price - a[1].price || (a[0] < b[0] ? 1 : -1))[0][0];
+          found.delete(worst);
+        }
+      }
+      return;
+    }
+    if (set.length + r.bound > limit || set.length >= limit) return;
+    const { list, cut } = children(set, r);
+    if (cut) depthComplete = false;
+    for (const c of list) {
+      if (expansions >= maxExpansions) {
+        truncated = true;
+        depthComplete = false;
+        return;
+      }
+      const next = [...set, c];
+      const key = [...next].sort((a, b) => a - b).join(",");
+      if (seen.has(key)) continue;
+      seen.add(key);
+      if (priceOf(next) > worstKept()) continue;
+      dfs(next, residual(next), limit);
+    }
+  };
+  for (let limit = Math.max(1, lowerBound); limit <= p.maxLinks; limit++) {
+    depthComplete = true;
+    seen.clear();
+    dfs([], root, limit);
+    if (!depthComplete) everIncomplete = true;
+    if (found.size > 0) break;
+    if (!depthComplete) incompleteBelow = true;
+    if (truncated) break;
+  }
+  const sets = [...found.values()].sort((a, b) => a.price - b.price || (a.set.join(",") < b.set.join(",") ? -1 : 1)).map((x) => x.set);
+  if (sets.length === 0) {
+    const reason = truncated ? `no set of at most ${p.maxLinks} candidate links was found within the search limit (${maxExpansions} states)` : everIncomplete ? `no set of at most ${p.maxLinks} candidate links was found among the ${BRANCH_WIDTH} best-ranked choices at each step` : `no set of at most ${p.maxLinks} candidate links does it`;
+    return { sets, lowerBound, minimal: false, truncated, expansions, reason };
+  }
+  const size = sets[0].length;
+  return { sets, lowerBound, minimal: size === lowerBound || !incompleteBelow, truncated, expansions };
+}
+
+// src/mend/fiedler.ts
+var DENSE_LIMIT = 400;
+function fiedler(g, extra = []) {
+  const n = g.n;
+  if (n < 2) return { value: 0, vector: new Float64Array(n) };
+  const src = [];
+  const dst = [];
+  for (let e = 0; e < g.m; e++) {
+    src.push(g.linkSource[e]);
+    dst.push(g.linkTarget[e]);
+  }
+  for (const [a, b] of extra) {
+    src.push(a);
+    dst.push(b);
+  }
+  if (n <= DENSE_LIMIT) {
+    const a = new Float64Array(n * n);
+    for (let k = 0; k < src.length; k++) {
+      const i = src[k];
+      const j = dst[k];
+      if (i === j) continue;
+      a[i * n + i] += 1;
+      a[j * n + j] += 1;
+      a[i * n + j] -= 1;
+      a[j * n + i] -= 1;
+    }
+    const d = new Float64Array(n);
+    const e = new Float64Array(n);
+    symmetricEigen(a, n, d, e);
+    const vector = new Float64Array(n);
+    for (let i = 0; i < n; i++) vector[i] = a[i * n + 1];
+    return { value: Math.max(0, d[1]), vector };
+  }
+  const degree2 = new Float64Array(n);
+  for (let k = 0; k < src.length; k++) {
+    if (src[k] === dst[k]) continue;
+    degree2[src[k]]++;
+    degree2[dst[k]]++;
+  }
+  let maxDegree2 = 0;
+  for (let i = 0; i < n; i++) if (degree2[i] > maxDegree2) maxDegree2 = degree2[i];
+  const op = {
+    n,
+    normBound: 2 * maxDegree2,
+    apply(x, y) {
+      for (let i = 0; i < n; i++) y[i] = degree2[i] * x[i];
+      for (let k = 0; k < src.length; k++) {
+        const i = src[k];
+        const j = dst[k];
+        if (i === j) continue;
+        y[i] -= x[j];
+        y[j] -= x[i];
+      }
+    }
+  };
+  const one = new Float64Array(n).fill(1 / Math.sqrt(n));
+  const r = createLanczos(n, 1).solve(op, { which: "smallest", count: 1, deflation: one, deflationCount: 1 });
+  return { value: Math.max(0, r.values[0]), vector: r.vectors.slice(0, n) };
+}
+function ghoshBoydScore(f, a, b) {
+  const d = f.vector[a] - f.vector[b];
+  return d * d;
+}
+
+// src/mend/search.ts
+var DEFAULT_MAX_LINKS = 3;
+var GREEDY_POOL = 3;
+var STRUCTURAL_KEEP = 3;
+var SUGGESTIONS_KEPT = 5;
+var FIEDLER_LIMIT = 2e4;
+var R_DEFINITION = "R̄: the mean area of the policy’s random-failure envelopes (the mean of each median R over its grid); without envelopes, of its attack curves";
+var FIXABLE = /* @__PURE__ */ new Set(["new-bridge", "new-cut-node", "r-threshold", "area-floor", "spread-ceiling", "n-1", "regression"]);
+function targetKey(f) {
+  if (f.rule === "new-bridge" || f.rule === "new-cut-node") return `${f.rule}|${f.elements.map((e) => e.id).join("\0")}`;
+  return `${f.rule}|${f.requirement ?? ""}`;
+}
+function mendTargets(report) {
+  const rows = new Map(report.requirements.map((r) => [r.id, r]));
+  const out = [];
+  const seen = /* @__PURE__ */ new Set();
+  for (const f of report.findings) {
+    if (f.severity === "notice" || !FIXABLE.has(f.rule)) continue;
+    if (f.rule !== "new-bridge" && f.rule !== "new-cut-node") {
+      const row = f.requirement ? rows.get(f.requirement) : void 0;
+      if (!row || row.status !== "missed" && row.status !== "regressed") continue;
+    }
+    const key = targetKey(f);
+    if (seen.has(key)) continue;
+    seen.add(key);
+    const t = { key, rule: f.rule, severity: f.severity, message: f.message, elements: f.elements, line: f.line };
+    if (f.requirement !== void 0) t.requirement = f.requirement;
+    out.push(t);
+  }
+  return out;
+}
+function meanArea(report) {
+  const head = report.head;
+  if (!head) return null;
+  const areas = head.envelopes.length > 0 ? head.envelopes.map((e) => e.area) : head.attacks.map((a) => a.area);
+  const finite = areas.filter(Number.isFinite);
+  return finite.length ? finite.reduce((s, a) => s + a, 0) / finite.length : null;
+}
+function latencyModel(t) {
+  if (t.links.length === 0 || !t.links.every((l) => l.latency !== void 0)) return null;
+  const pts = t.links.filter((l) => l.length !== void 0 && l.latency !== void 0).map((l) => [l.length, l.latency]);
+  if (pts.length < 2) return null;
+  const n = pts.length;
+  const mx = pts.reduce((s, p) => s + p[0], 0) / n;
+  const my = pts.reduce((s, p) => s + p[1], 0) / n;
+  let sxx = 0;
+  let sxy = 0;
+  for (const [x, y] of pts) {
+    sxx += (x - mx) * (x - mx);
+    sxy += (x - mx) * (y - my);
+  }
+  const slope = sxx > 0 ? Math.max(0, sxy / sxx) : 0;
+  const intercept = Math.max(0, my - slope * mx);
+  return (km) => Math.round((intercept + slope * km) * 1e3) / 1e3;
+}
+async function mendDesign(ctx) {
+  const g = ctx.graph;
+  const cand = ctx.candidates;
+  const targets = mendTargets(ctx.report);
+  const notes = [...ctx.notes ?? [], ...cand.notes];
+  const bridgeTargets = [];
+  const cutTargets = [];
+  for (const t of targets) {
+    for (const e of t.elements) {
+      if (t.rule === "new-bridge" && e.kind === "link") {
+        const i = g.linkIndex.get(e.id);
+        if (i !== void 0 && !bridgeTargets.includes(i)) bridgeTargets.push(i);
+      } else if (t.rule === "new-cut-node" && e.kind === "node") {
+        const v = g.nodeIndex.get(e.id);
+        if (v !== void 0 && !cutTargets.includes(v)) cutTargets.push(v);
+      }
+    }
+  }
+  const out = {
+    targets,
+    rDefinition: R_DEFINITION,
+    bounds: { allBridges: eswaranTarjanBound(g) },
+    candidates: {
+      source: cand.source,
+      ...ctx.candidatePath !== void 0 ? { path: ctx.candidatePath } : {},
+      count: cand.list.length,
+      ...cand.routeFactor !== void 0 ? { routeFactor: cand.routeFactor } : {},
+      ...cand.maxKm !== void 0 ? { maxKm: cand.maxKm } : {}
+    },
+    suggestions: [],
+    evaluations: 0,
+    notes
+  };
+  if (bridgeTargets.length > 0) out.bounds.newBridges = eswaranTarjanBound(g, bridgeTargets);
+  const maxLinks = ctx.maxLinks ?? Math.max(DEFAULT_MAX_LINKS, (out.bounds.newBridges?.links ?? 0) + 1);
+  if (targets.length === 0) {
+    notes.push("nothing to mend: no failing or warning finding that a change to the design can fix");
+    return out;
+  }
+  const rBefore = meanArea(ctx.report);
+  const latency = latencyModel(ctx.topology);
+  const usedIds = new Set(g.linkIds);
+  const linkFor = (c, taken) => {
+    const a = g.nodeIds[c.a];
+    const b = g.nodeIds[c.b];
+    let id = c.id ?? `${a}-${b}`;
+    for (let k = 2; usedIds.has(id) || taken.has(id); k++) id = `${c.id ?? `${a}-${b}`}-${k}`;
+    taken.add(id);
+    const l = { id, between: [a, b], source: c.source };
+    if (c.lengthKm !== void 0) l.lengthKm = c.lengthKm;
+    if (c.latencyMs !== void 0) l.latencyMs = c.latencyMs;
+    else if (latency && c.lengthKm !== void 0) {
+      l.latencyMs = latency(c.lengthKm);
+      l.latencyEstimated = true;
+    }
+    if (c.cost !== void 0) l.cost = c.cost;
+    if (c.riskGroups) l.riskGroups = [...c.riskGroups];
+    if (c.line !== void 0) l.line = c.line;
+    return l;
+  };
+  const changeFor = (set) => {
+    const taken = /* @__PURE__ */ new Set();
+    return { links: set.map((i) => linkFor(cand.list[i], taken)), harden: [] };
+  };
+  const cache = /* @__PURE__ */ new Map();
+  const judgeSet = async (set, change = changeFor(set)) => {
+    const key = change.links.length ? [...set].sort((a, b) => a - b).join(",") : `harden:${change.harden.map((e) => `${e.kind}:${e.id}`).join(",")}`;
+    const hit = cache.get(key);
+    if (hit) return hit;
+    if (out.evaluations >= ctx.maxEvaluations) return null;
+    out.evaluations++;
+    const judged = { report: await ctx.judge(change), change, candidates: [...set] };
+    cache.set(key, judged);
+    return judged;
+  };
+  const prices = cand.list.map((c) => price(c, cand.unit));
+  const pairs = cand.list.map((c) => [c.a, c.b]);
+  const ranked = g.n <= FIEDLER_LIMIT;
+  if (!ranked) notes.push(`more than ${FIEDLER_LIMIT} sites: candidates are not ranked by algebraic connectivity`);
+  const scoreOf = (extra) => {
+    if (!ranked) return pairs.map(() => 0);
+    const f = fiedler(g, extra.map((c) => pairs[c]));
+    return pairs.map(([a, b]) => ghoshBoydScore(f, a, b));
+  };
+  const scores = scoreOf([]);
+  const hardenTargets = hardenSet(targets);
+  const linkBudget = () => ctx.maxEvaluations - (hardenTargets.length > 0 ? 1 : 0);
+  const judgedSets = [];
+  let start = [[]];
+  let structuralMethod = "";
+  let structuralFailed = false;
+  if ((bridgeTargets.length > 0 || cutTargets.length > 0) && cand.list.length > 0) {
+    const cover = solveCover({
+      g,
+      pairs,
+      price: prices,
+      score: scores,
+      bridges: bridgeTargets,
+      cutNodes: cutTargets,
+      maxLinks,
+      keep: STRUCTURAL_KEEP
+    });
+    if (cover.sets.length === 0) {
+      notes.push(`no link suggestion removes every new bridge and cut site: ${cover.reason}`);
+      structuralFailed = true;
+    } else {
+      const size = cover.sets[0].length;
+      const bound = out.bounds.newBridges?.links;
+      structuralMethod = `removes the new single points of failure with ${size} link${size === 1 ? "" : "s"}` + (cover.minimal ? bound !== void 0 && size === bound ? `, the fewest possible (the Eswaran–Tarjan bound is ${bound})` : ", the fewest the candidates allow" : ` (the smallest found; the search stopped at its limit, the Eswaran–Tarjan bound is ${bound ?? cover.lowerBound})`);
+      start = cover.sets;
+    }
+  } else if (bridgeTargets.length > 0 || cutTargets.length > 0) {
+    notes.push("there are no candidate links to try");
+  }
+  if (cand.list.length > 0 && !structuralFailed) {
+    for (const set of start) {
+      if (set.length === 0) continue;
+      if (out.evaluations >= linkBudget()) break;
+      const j = await judgeSet(set);
+      if (j) judgedSets.push({ judged: j, method: `${structuralMethod}; judged by the engine` });
+    }
+    const better = (a, b) => compareJudged(a, b, targets, rBefore, prices, cand.unit) < 0;
+    let current = null;
+    for (const { judged } of judgedSets) if (!current || better(judged, current)) current = judged;
+    const holds = (j) => j !== null && !fails(j.report);
+    let step = 0;
+    while (!holds(current) && out.evaluations < linkBudget()) {
+      const base = current?.candidates ?? (start[0].length === 0 ? [] : start[0]);
+      if (base.length >= maxLinks) break;
+      const stepScores = base.length ? scoreOf(base) : scores;
+      const inSet = new Set(base);
+      const pool = cand.list.map((_, c) => c).filter((c) => !inSet.has(c)).map((c) => ({ c, s: stepScores[c] })).sort((x, y) => y.s - x.s || prices[x.c] - prices[y.c] || x.c - y.c).slice(0, GREEDY_POOL);
+      if (pool.length === 0) break;
+      let best = null;
+      step++;
+      for (const { c } of pool) {
+        if (out.evaluations >= linkBudget()) break;
+        const j = await judgeSet([...base, c]);
+        if (!j) break;
+        judgedSets.push({
+          judged: j,
+          method: `${base.length ? `${structuralMethod ? "the structural set" : "the set so far"} plus ` : ""}a link ranked by Ghosh–Boyd (greedy step ${step}); judged by the engine`
+        });
+        if (!best || better(j, best)) best = j;
+      }
+      if (!best || current && !better(best, current)) break;
+      current = best;
+    }
+    if (!holds(current) && out.evaluations >= linkBudget()) notes.push(`the search stopped after ${out.evaluations} engine evaluations (its limit)`);
+  } else if (targets.some((t) => t.rule !== "new-bridge" && t.rule !== "new-cut-node")) {
+    notes.push("there are no candidate links to try");
+  }
+  const suggestions = [];
+  const seenLinks = /* @__PURE__ */ new Set();
+  for (const { judged, method } of judgedSets) {
+    const key = [...judged.candidates].sort((a, b) => a - b).join(",");
+    if (seenLinks.has(key)) continue;
+    seenLinks.add(key);
+    const s = suggestion2(judged, "links", method, targets, ctx.report, rBefore, prices, cand.unit);
+    if (s.fixes.length > 0 || s.holds) suggestions.push(s);
+  }
+  suggestions.sort((a, b) => rankSuggestions(a, b));
+  out.suggestions = suggestions.slice(0, SUGGESTIONS_KEPT);
+  if (hardenTargets.length > 0) {
+    const j = await judgeSet([], { links: [], harden: hardenTargets });
+    if (j) {
+      out.suggestions.push(
+        suggestion2(j, "harden", "harden the elements of the new single points of failure (they then never fail in any challenge); judged by the engine", targets, ctx.report, rBefore, prices, cand.unit)
+      );
+    }
+  }
+  return out;
+}
+function hardenSet(targets) {
+  const out = [];
+  const seen = /* @__PURE__ */ new Set();
+  for (const t of targets) {
+    if (t.rule !== "new-bridge" && t.rule !== "new-cut-node") continue;
+    for (const e of t.elements) {
+      const k = `${e.kind}:${e.id}`;
+      if (seen.has(k)) continue;
+      seen.add(k);
+      out.push(e);
+    }
+  }
+  return out;
+}
+function fails(r) {
+  return r.status === "error" || r.findings.some((f) => f.severity === "fail");
+}
+function remaining(r, targets) {
+  const present = new Set(r.findings.filter((f) => f.severity !== "notice").map(targetKey));
+  return targets.filter((t) => present.has(t.key)).map((t) => t.key);
+}
+function failCount(r) {
+  return r.findings.filter((f) => f.severity === "fail").length;
+}
+function totalOf(set, prices, unit) {
+  if (unit === "link") return set.length;
+  return Math.round(set.reduce((s, c) => s + prices[c], 0) * 1e3) / 1e3;
+}
+function gain(r, rBefore, total) {
+  const after = meanArea(r);
+  if (after === null || rBefore === null || total === null || !(total > 0)) return null;
+  return (after - rBefore) / total;
+}
+function compareJudged(a, b, targets, rBefore, prices, unit) {
+  const fa = failCount(a.report);
+  const fb = failCount(b.report);
+  if (fa !== fb) return fa - fb;
+  const ra = remaining(a.report, targets).length;
+  const rb = remaining(b.report, targets).length;
+  if (ra !== rb) return ra - rb;
+  const ga = gain(a.report, rBefore, totalOf(a.candidates, prices, unit)) ?? -Infinity;
+  const gb = gain(b.report, rBefore, totalOf(b.candidates, prices, unit)) ?? -Infinity;
+  if (ga !== gb) return gb - ga;
+  return (totalOf(a.candidates, prices, unit) ?? 0) - (totalOf(b.candidates, prices, unit) ?? 0);
+}
+function rankSuggestions(a, b) {
+  if (a.holds !== b.holds) return a.holds ? -1 : 1;
+  if (a.fixes.length !== b.fixes.length) return b.fixes.length - a.fixes.length;
+  const ga = a.gainPerUnit ?? -Infinity;
+  const gb = b.gainPerUnit ?? -Infinity;
+  if (ga !== gb) return gb - ga;
+  if ((a.total ?? 0) !== (b.total ?? 0)) return (a.total ?? 0) - (b.total ?? 0);
+  const ka = a.links.map((l) => l.id).join(",");
+  const kb = b.links.map((l) => l.id).join(",");
+  return ka < kb ? -1 : ka > kb ? 1 : 0;
+}
+function suggestion2(j, kind, method, targets, before, rBefore, prices, unit) {
+  const left = remaining(j.report, targets);
+  const leftSet = new Set(left);
+  const total = kind === "links" ? totalOf(j.candidates, prices, unit) : j.change.harden.length;
+  const rAfter = meanArea(j.report);
+  const wanted = new Set(targets.map((t) => t.requirement).filter((r) => r !== void 0));
+  const afterRows = new Map(j.report.requirements.map((r) => [r.id, r]));
+  const requirements = before.requirements.filter((r) => wanted.has(r.id)).map((r) => {
+    const a = afterRows.get(r.id);
+    return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? "uncertain" };
+  });
+  return {
+    kind,
+    links: [...j.change.links],
+    harden: [...j.change.harden],
+    total,
+    unit: kind === "harden" ? "element" : unit,
+    fixes: targets.filter((t) => !leftSet.has(t.key)).map((t) => t.key),
+    leaves: left,
+    status: j.report.status,
+    holds: !fails(j.report),
+    rBefore,
+    rAfter,
+    gainPerUnit: rAfter !== null && rBefore !== null && total !== null && total > 0 ? (rAfter - rBefore) / total : null,
+    requirements,
+    method
+  };
 }
 
 // src/topology/detect.ts
@@ -24193,6 +27873,8 @@ var BY_EXTENSION = [
   [".net.yaml", "native-yaml"],
   [".net.yml", "native-yaml"],
   [".net.json", "native-json"],
+  [".geojson", "geojson"],
+  [".geo.json", "geojson"],
   [".yaml", "native-yaml"],
   [".yml", "native-yaml"],
   [".json", "native-json"],
@@ -24205,11 +27887,11 @@ function detectFormat(file) {
   for (const [ext, format] of BY_EXTENSION) if (lower.endsWith(ext)) return format;
   return void 0;
 }
-var FORMAT_CHOICES = "yaml, json, graphml, gml, csv";
+var FORMAT_CHOICES = "yaml, json, graphml, gml, csv, geojson";
 
 // src/topology/native.ts
 var import_ajv2 = __toESM(require_ajv(), 1);
-var import_yaml3 = __toESM(require_dist(), 1);
+var import_yaml5 = __toESM(require_dist(), 1);
 
 // src/topology/design.schema.json
 var design_schema_default = {
@@ -24253,7 +27935,8 @@ var design_schema_default = {
     latency_budget: {
       description: "How much longer than the intact network's path a demand's path may become and still count as served (1.5 = 50 % longer).",
       type: "number",
-      minimum: 1
+      minimum: 1,
+      maximum: 1e3
     },
     metadata: {
       description: "Anything else you want to keep with the design; netbrace carries it into reports and ignores it otherwise.",
@@ -24283,7 +27966,8 @@ var design_schema_default = {
             lon: { type: "number", minimum: -180, maximum: 180 }
           }
         },
-        hardened: { description: "Never removed by a challenge.", type: "boolean" }
+        hardened: { description: "Never removed by a challenge.", type: "boolean" },
+        attributes: { description: "Anything else known about the node (kept through conversions, e.g. a GraphML or GML attribute); netbrace ignores it otherwise.", type: "object" }
       }
     },
     link: {
@@ -24299,15 +27983,17 @@ var design_schema_default = {
           minItems: 2,
           maxItems: 2
         },
-        length_km: { type: "number", minimum: 0 },
-        latency_ms: { type: "number", minimum: 0 },
-        capacity_gbps: { type: "number", minimum: 0 },
+        length_km: { description: "Length in km: 0, or from 1e-6 (1 mm) to 1e6 (25 times around the Earth).", type: "number", minimum: 0, maximum: 1e6 },
+        latency_ms: { description: "Latency in ms: 0, or from 1e-6 (1 ns) to 1e6 (1,000 s).", type: "number", minimum: 0, maximum: 1e6 },
+        capacity_gbps: { description: "Capacity in Gbit/s, informational: 0, or from 1e-9 (1 bit/s) to 1e9.", type: "number", minimum: 0, maximum: 1e9 },
+        weight: { description: "A routing weight without unit (e.g. an OSPF cost), the link's cost where it has no latency and no length: 0, or from 1e-9 to 1e9.", type: "number", minimum: 0, maximum: 1e9 },
         risk_groups: {
           description: "Ids of the shared-risk link groups this link belongs to.",
           type: "array",
           items: { $ref: "#/definitions/id" }
         },
-        hardened: { description: "Never removed by a challenge.", type: "boolean" }
+        hardened: { description: "Never removed by a challenge.", type: "boolean" },
+        attributes: { description: "Anything else known about the link (kept through conversions; `length_estimated: true` marks a length computed from the sites' coordinates); netbrace ignores it otherwise.", type: "object" }
       }
     },
     riskGroup: {
@@ -24330,176 +28016,9 @@ var design_schema_default = {
           minItems: 2,
           maxItems: 2
         },
-        volume: { type: "number", minimum: 0 }
+        volume: { description: "Traffic volume in any consistent unit: 0, or from 1e-12 to 1e15.", type: "number", minimum: 0, maximum: 1e15 }
       }
     }
-  }
-};
-
-// src/topology/builder.ts
-var MAX_ID_LENGTH = 256;
-var DASH = "—";
-var TopologyBuilder = class {
-  file;
-  format;
-  maxElements;
-  duplicateLinkIds;
-  nodes = [];
-  links = [];
-  nodeLine = /* @__PURE__ */ new Map();
-  linkIds = /* @__PURE__ */ new Map();
-  /** Occurrences of each unordered end pair so far, for parallel-link keys. */
-  pairCount = /* @__PURE__ */ new Map();
-  warnings = [];
-  riskGroups = [];
-  riskGroupPos = /* @__PURE__ */ new Map();
-  demands = [];
-  constructor(file, format, options = {}) {
-    this.file = file;
-    this.format = format;
-    this.maxElements = options.maxElements ?? DEFAULT_MAX_ELEMENTS;
-    this.duplicateLinkIds = options.duplicateLinkIds ?? "warn";
-  }
-  get nodeCount() {
-    return this.nodes.length;
-  }
-  hasNode(id) {
-    return this.nodeLine.has(id);
-  }
-  /** A located DesignError in this file. */
-  error(message, pos, hint = "") {
-    return new DesignError(message, { file: this.file, line: pos?.line ?? 0, column: pos?.column ?? 0 }, hint);
-  }
-  warn(message, pos, hint) {
-    this.warnings.push({
-      file: this.file,
-      line: pos?.line ?? 0,
-      column: pos?.column ?? 0,
-      severity: "warning",
-      message,
-      ...hint ? { hint } : {}
-    });
-  }
-  /** Refuses an id longer than MAX_ID_LENGTH (LimitError at the element). */
-  checkId(id, what, pos) {
-    if (id.length <= MAX_ID_LENGTH) return;
-    throw new LimitError(
-      `${what} is ${id.length} characters long; netbrace accepts ids of at most ${MAX_ID_LENGTH} ("${id.slice(0, 24)}…")`,
-      { file: this.file, line: pos?.line ?? 0, column: pos?.column ?? 0 },
-      "use a short id and put the long name in a label"
-    );
-  }
-  countElement(pos) {
-    if (this.nodes.length + this.links.length >= this.maxElements) {
-      throw new LimitError(
-        `the design has more than ${this.maxElements} elements (nodes + links)`,
-        { file: this.file, line: pos.line, column: pos.column },
-        "split the design, or raise the element limit if this size is intended"
-      );
-    }
-  }
-  addNode(input) {
-    this.checkId(input.id, "a node id", input.pos);
-    const first = this.nodeLine.get(input.id);
-    if (first !== void 0) {
-      throw this.error(`duplicate node id "${input.id}"`, input.pos, `first defined on line ${first.line}; node ids must be unique`);
-    }
-    this.countElement(input.pos);
-    this.nodeLine.set(input.id, input.pos);
-    const node = { id: input.id, hardened: input.hardened ?? false, pos: input.pos, attrs: input.attrs ?? {} };
-    if (input.label !== void 0) node.label = input.label;
-    if (input.kind !== void 0) node.kind = input.kind;
-    if (input.lat !== void 0 && input.lon !== void 0) {
-      node.lat = input.lat;
-      node.lon = input.lon;
-    }
-    this.nodes.push(node);
-  }
-  requireNode(id, pos, what) {
-    if (this.nodeLine.has(id)) return;
-    this.checkId(id, `a node id in ${what}`, pos);
-    throw this.error(
-      `${what} refers to unknown node "${id}"`,
-      pos,
-      didYouMean(id, this.nodeLine.keys(), "declare the node first, or fix the id")
-    );
-  }
-  /** Adds a link; returns false when it was dropped (a self-loop). */
-  addLink(input) {
-    if (input.id !== void 0) this.checkId(input.id, "a link id", input.pos);
-    for (const g of input.riskGroups ?? []) this.checkId(g, "a risk group id of a link", input.pos);
-    const what = input.what ?? (input.id !== void 0 ? `link "${input.id}"` : `link on line ${input.pos.line}`);
-    this.requireNode(input.source, input.sourcePos ?? input.pos, what);
-    this.requireNode(input.target, input.targetPos ?? input.pos, what);
-    if (input.source === input.target) {
-      this.warn(`self-loop on node "${input.source}" dropped`, input.pos, "a link from a node to itself adds no connectivity");
-      return false;
-    }
-    this.countElement(input.pos);
-    const pairKey = input.source <= input.target ? `${input.source}\0${input.target}` : `${input.target}\0${input.source}`;
-    const occurrence = (this.pairCount.get(pairKey) ?? 0) + 1;
-    this.pairCount.set(pairKey, occurrence);
-    let id = input.id;
-    if (id !== void 0) {
-      const first = this.linkIds.get(id);
-      if (first !== void 0) {
-        if (this.duplicateLinkIds === "error") {
-          throw this.error(`duplicate link id "${id}"`, input.pos, `first used on line ${first.line}; link ids must be unique`);
-        }
-        this.warn(`duplicate link id "${id}" (first on line ${first.line}); the link is named by its ends instead`, input.pos);
-        id = void 0;
-      }
-    }
-    if (id === void 0) {
-      const base = `${input.source}${DASH}${input.target}`;
-      id = occurrence > 1 ? `${base}#${occurrence}` : base;
-      for (let k = 2; this.linkIds.has(id); k++) id = `${base}#${occurrence}.${k}`;
-    }
-    this.linkIds.set(id, input.pos);
-    const link = {
-      id,
-      key: linkKey(input.source, input.target, occurrence),
-      source: input.source,
-      target: input.target,
-      riskGroups: input.riskGroups ?? [],
-      hardened: input.hardened ?? false,
-      pos: input.pos,
-      attrs: input.attrs ?? {}
-    };
-    if (input.length !== void 0) link.length = input.length;
-    if (input.latency !== void 0) link.latency = input.latency;
-    if (input.capacity !== void 0) link.capacity = input.capacity;
-    if (input.weight !== void 0) link.weight = input.weight;
-    this.links.push(link);
-    return true;
-  }
-  addRiskGroup(group) {
-    this.checkId(group.id, "a risk group id", group.pos);
-    const first = this.riskGroupPos.get(group.id);
-    if (first) throw this.error(`duplicate risk group id "${group.id}"`, group.pos, `first described on line ${first.line}`);
-    this.riskGroupPos.set(group.id, group.pos);
-    this.riskGroups.push(group);
-  }
-  addDemand(source, target, volume, pos, endPos, what = "demand") {
-    this.requireNode(source, endPos?.[0] ?? pos, what);
-    this.requireNode(target, endPos?.[1] ?? pos, what);
-    if (source === target) throw this.error(`${what} goes from node "${source}" to itself`, pos, "a demand needs two different ends");
-    this.demands.push({ source, target, volume, pos });
-  }
-  finish(extra = {}) {
-    const t = {
-      file: this.file,
-      format: this.format,
-      nodes: this.nodes,
-      links: this.links,
-      riskGroups: this.riskGroups,
-      demands: this.demands,
-      metadata: extra.metadata ?? {},
-      warnings: this.warnings
-    };
-    if (extra.name !== void 0) t.name = extra.name;
-    if (extra.latencyBudget !== void 0) t.latencyBudget = extra.latencyBudget;
-    return t;
   }
 };
 
@@ -24523,12 +28042,12 @@ var Locator = class {
     return { line: p.line, column: p.col };
   }
   child(node, key) {
-    if ((0, import_yaml3.isAlias)(node)) node = node.resolve(this.doc);
-    if (!(0, import_yaml3.isCollection)(node)) return void 0;
-    if (typeof key === "number" && !(0, import_yaml3.isMap)(node)) return node.items[key];
+    if ((0, import_yaml5.isAlias)(node)) node = node.resolve(this.doc);
+    if (!(0, import_yaml5.isCollection)(node)) return void 0;
+    if (typeof key === "number" && !(0, import_yaml5.isMap)(node)) return node.items[key];
     for (const item of node.items) {
-      if ((0, import_yaml3.isPair)(item)) {
-        const k = (0, import_yaml3.isScalar)(item.key) ? item.key.value : item.key;
+      if ((0, import_yaml5.isPair)(item)) {
+        const k = (0, import_yaml5.isScalar)(item.key) ? item.key.value : item.key;
         if (String(k) === String(key)) return item.value;
       }
     }
@@ -24546,6 +28065,18 @@ var Locator = class {
     }
     return { node: last, exact: true };
   }
+  /** The source text of the plain scalar at `path` (a number as written), if there is one. */
+  source(path) {
+    let { node, exact } = this.node(path);
+    if (!exact) return void 0;
+    if ((0, import_yaml5.isAlias)(node)) node = node.resolve(this.doc);
+    return (0, import_yaml5.isScalar)(node) && typeof node.source === "string" ? node.source : void 0;
+  }
+  /** `prefix + source + suffix` when the scalar at `path` has source text, else ''. */
+  written(path, prefix, suffix) {
+    const s = this.source(path);
+    return s === void 0 ? "" : `${prefix}${s}${suffix}`;
+  }
   pos(path) {
     const { node } = this.node(path);
     return node?.range ? this.at(node.range[0]) : { line: 1, column: 1 };
@@ -24553,16 +28084,33 @@ var Locator = class {
   /** Where the key `name` of the map at `path` is written. */
   keyPos(path, name) {
     let { node } = this.node(path);
-    if ((0, import_yaml3.isAlias)(node)) node = node.resolve(this.doc);
-    if ((0, import_yaml3.isMap)(node)) {
+    if ((0, import_yaml5.isAlias)(node)) node = node.resolve(this.doc);
+    if ((0, import_yaml5.isMap)(node)) {
       for (const item of node.items) {
         const k = item.key;
-        if ((0, import_yaml3.isScalar)(k) && String(k.value) === name && k.range) return this.at(k.range[0]);
+        if ((0, import_yaml5.isScalar)(k) && String(k.value) === name && k.range) return this.at(k.range[0]);
       }
     }
     return this.pos(path);
   }
 };
+function firstNonNormal2(v, path) {
+  if (typeof v === "number") {
+    const why = nonNormal(v);
+    return why ? { path: [...path], why } : void 0;
+  }
+  if (v === null || typeof v !== "object") return void 0;
+  const entries = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
+  for (const [k, x] of entries) {
+    if (typeof x !== "number" && (x === null || typeof x !== "object")) continue;
+    if (path.length === 0 && k === "metadata") continue;
+    path.push(k);
+    const found = firstNonNormal2(x, path);
+    path.pop();
+    if (found) return found;
+  }
+  return void 0;
+}
 function pathText(path) {
   let s = "";
   for (const k of path) s += typeof k === "number" ? `[${k}]` : s === "" ? k : `.${k}`;
@@ -24655,8 +28203,8 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
       "a design needs a few levels of nesting; flatten this structure"
     );
   }
-  const lines = new import_yaml3.LineCounter();
-  const doc = (0, import_yaml3.parseDocument)(text2, { lineCounter: lines, prettyErrors: false, uniqueKeys: true, strict: true });
+  const lines = new import_yaml5.LineCounter();
+  const doc = (0, import_yaml5.parseDocument)(text2, { lineCounter: lines, prettyErrors: false, uniqueKeys: true, strict: true });
   const loc = new Locator(doc, lines);
   if (doc.errors.length > 0) {
     const e = doc.errors[0];
@@ -24672,10 +28220,10 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
   } catch (e) {
     if (e instanceof ReferenceError || e instanceof Error && /alias/i.test(e.message)) {
       let first = { line: 1, column: 1 };
-      (0, import_yaml3.visit)(doc, {
+      (0, import_yaml5.visit)(doc, {
         Alias(_, node) {
           if (node.range) first = loc.at(node.range[0]);
-          return import_yaml3.visit.BREAK;
+          return import_yaml5.visit.BREAK;
         }
       });
       throw new DesignError(
@@ -24689,44 +28237,64 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
   if (data === null || data === void 0) {
     throw new DesignError(`the ${kindWord} design is empty`, { file, line: 1, column: 1 }, "a design needs at least `nodes:`");
   }
+  const odd = firstNonNormal2(data, []);
+  if (odd) {
+    throw new DesignError(`${pathText(odd.path)} ${odd.why}${loc.written(odd.path, " (written ", ")")}`, { file, ...loc.pos(odd.path) }, "write a plain decimal number");
+  }
   const check2 = validate2();
   if (!check2(data)) throw firstError(check2.errors ?? [], file, loc);
   const d = data;
+  const idAt = (path, v) => typeof v === "string" ? v : loc.source(path) ?? String(v);
+  const quantity = (kind, path, v) => {
+    if (v === void 0) return void 0;
+    const problem = quantityProblem(kind, v, loc.source(path));
+    if (problem) throw new DesignError(`${pathText(path)} ${problem.message}`, { file, ...loc.pos(path) }, problem.hint);
+    return v;
+  };
   const b = new TopologyBuilder(file, format, { ...options, duplicateLinkIds: "error" });
   for (const w of doc.warnings) b.warn(`${kindWord}: ${w.message.split("\n")[0]}`, loc.at(w.pos[0]));
   d.nodes.forEach((n, i) => {
     b.addNode({
-      id: String(n.id),
+      id: idAt(["nodes", i, "id"], n.id),
       pos: loc.pos(["nodes", i]),
       ...n.label !== void 0 ? { label: n.label } : {},
       ...n.kind !== void 0 ? { kind: n.kind } : {},
       ...n.site ? { lat: n.site.lat, lon: n.site.lon } : {},
-      hardened: n.hardened ?? false
+      hardened: n.hardened ?? false,
+      ...n.attributes ? { attrs: n.attributes } : {}
     });
   });
   (d.risk_groups ?? []).forEach((g, i) => {
-    b.addRiskGroup({ id: String(g.id), pos: loc.pos(["risk_groups", i]), ...g.description !== void 0 ? { description: g.description } : {} });
+    b.addRiskGroup({ id: idAt(["risk_groups", i, "id"], g.id), pos: loc.pos(["risk_groups", i]), ...g.description !== void 0 ? { description: g.description } : {} });
   });
   (d.links ?? []).forEach((l, i) => {
     const at = ["links", i];
+    const id = l.id !== void 0 ? idAt([...at, "id"], l.id) : void 0;
+    const length = quantity("length", [...at, "length_km"], l.length_km);
+    const latency = quantity("latency", [...at, "latency_ms"], l.latency_ms);
+    const capacity = quantity("capacity", [...at, "capacity_gbps"], l.capacity_gbps);
+    const weight = quantity("weight", [...at, "weight"], l.weight);
     b.addLink({
-      what: l.id !== void 0 ? `link "${String(l.id)}" (links[${i}])` : `links[${i}]`,
-      ...l.id !== void 0 ? { id: String(l.id) } : {},
-      source: String(l.between[0]),
-      target: String(l.between[1]),
+      what: id !== void 0 ? `link "${id}" (links[${i}])` : `links[${i}]`,
+      ...id !== void 0 ? { id } : {},
+      source: idAt([...at, "between", 0], l.between[0]),
+      target: idAt([...at, "between", 1], l.between[1]),
       pos: loc.pos(at),
       sourcePos: loc.pos([...at, "between", 0]),
       targetPos: loc.pos([...at, "between", 1]),
-      ...l.length_km !== void 0 ? { length: l.length_km } : {},
-      ...l.latency_ms !== void 0 ? { latency: l.latency_ms } : {},
-      ...l.capacity_gbps !== void 0 ? { capacity: l.capacity_gbps } : {},
-      riskGroups: (l.risk_groups ?? []).map(String),
-      hardened: l.hardened ?? false
+      ...length !== void 0 ? { length } : {},
+      ...latency !== void 0 ? { latency } : {},
+      ...capacity !== void 0 ? { capacity } : {},
+      ...weight !== void 0 ? { weight } : {},
+      riskGroups: (l.risk_groups ?? []).map((g, k) => idAt([...at, "risk_groups", k], g)),
+      hardened: l.hardened ?? false,
+      ...l.attributes ? { attrs: l.attributes } : {}
     });
   });
   (d.demands ?? []).forEach((dm, i) => {
     const at = ["demands", i];
-    b.addDemand(String(dm.between[0]), String(dm.between[1]), dm.volume, loc.pos(at), [
+    const volume = quantity("volume", [...at, "volume"], dm.volume);
+    b.addDemand(idAt([...at, "between", 0], dm.between[0]), idAt([...at, "between", 1], dm.between[1]), volume, loc.pos(at), [
       loc.pos([...at, "between", 0]),
       loc.pos([...at, "between", 1])
     ], `demands[${i}]`);
@@ -24738,145 +28306,6 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
   });
   if (d.network?.description !== void 0) t.description = d.network.description;
   return t;
-}
-
-// src/topology/attributes.ts
-var NODE_FIELDS = {
-  label: "label",
-  name: "label",
-  type: "kind",
-  kind: "kind",
-  latitude: "lat",
-  lat: "lat",
-  longitude: "lon",
-  lon: "lon",
-  lng: "lon",
-  long: "lon",
-  x: "x",
-  y: "y",
-  hardened: "hardened"
-};
-var LINK_FIELDS = {
-  weight: "weight",
-  cost: "weight",
-  length: "length",
-  length_km: "length",
-  distance: "length",
-  linklength: "length",
-  latency: "latency",
-  latency_ms: "latency",
-  delay: "latency",
-  linklatency: "latency",
-  linkdelay: "latency",
-  capacity: "capacity",
-  capacity_gbps: "capacity",
-  bandwidth: "capacity",
-  // The zoo's raw link speed is in bit/s; capacity is kept in Gbit/s.
-  linkspeedraw: "bitrate",
-  risk_groups: "riskGroups",
-  srlg: "riskGroups",
-  srlgs: "riskGroups",
-  hardened: "hardened"
-};
-function toNumber(v) {
-  if (typeof v === "number") return Number.isFinite(v) ? v : void 0;
-  if (typeof v !== "string") return void 0;
-  const s = v.trim();
-  if (s === "" || !/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(s)) return void 0;
-  const n = Number(s);
-  return Number.isFinite(n) ? n : void 0;
-}
-function toFlag(v) {
-  if (typeof v === "boolean") return v;
-  if (typeof v === "number") return v !== 0;
-  if (typeof v !== "string") return void 0;
-  const s = v.trim().toLowerCase();
-  if (["1", "true", "yes", "y"].includes(s)) return true;
-  if (["0", "false", "no", "n", ""].includes(s)) return false;
-  return void 0;
-}
-var text = (v) => typeof v === "string" ? v : String(v);
-function mapNodeAttributes(raw, b, posOf) {
-  const out = { attrs: {} };
-  let x;
-  let y;
-  let lat;
-  let lon;
-  for (const [name, value] of Object.entries(raw)) {
-    const field = NODE_FIELDS[name.toLowerCase()];
-    if (field === "label") out.label = text(value);
-    else if (field === "kind") out.kind = text(value);
-    else if (field === "hardened") {
-      const f = toFlag(value);
-      if (f === void 0) throw b.error(`"${name}" must be true/false or 1/0, not "${text(value)}"`, posOf(name));
-      out.hardened = f;
-    } else if (field === "lat" || field === "lon" || field === "x" || field === "y") {
-      const n = toNumber(value);
-      if (n === void 0) {
-        b.warn(`node coordinate "${name}" is not a number ("${text(value)}"); ignored`, posOf(name));
-        out.attrs[name] = value;
-        continue;
-      }
-      if (field === "lat") lat = [n, name];
-      else if (field === "lon") lon = [n, name];
-      else if (field === "x") x = [n, name];
-      else y = [n, name];
-      out.attrs[name] = value;
-    } else {
-      out.attrs[name] = value;
-    }
-  }
-  if (lat === void 0 && lon === void 0 && x !== void 0 && y !== void 0) {
-    lat = y;
-    lon = x;
-  }
-  if (lat !== void 0 && lon !== void 0) {
-    for (const name of [lat[1], lon[1]]) delete out.attrs[name];
-    if (Math.abs(lat[0]) <= 90 && Math.abs(lon[0]) <= 180) {
-      out.lat = lat[0];
-      out.lon = lon[0];
-    } else {
-      b.warn(`coordinates ${lat[1]}=${lat[0]}, ${lon[1]}=${lon[0]} are not a latitude/longitude; ignored`, posOf(lat[1]));
-      out.attrs[lat[1]] = lat[0];
-      out.attrs[lon[1]] = lon[0];
-    }
-  } else if (lat === void 0 !== (lon === void 0)) {
-    const only = lat ?? lon;
-    b.warn(`node has "${only[1]}" but not the other coordinate; no site recorded`, posOf(only[1]));
-  }
-  return out;
-}
-function mapLinkAttributes(raw, b, posOf) {
-  const out = { attrs: {} };
-  for (const [name, value] of Object.entries(raw)) {
-    const field = LINK_FIELDS[name.toLowerCase()];
-    if (field === void 0) {
-      out.attrs[name] = value;
-      continue;
-    }
-    if (field === "riskGroups") {
-      out.riskGroups = text(value).split(";").map((s) => s.trim()).filter((s) => s !== "");
-      continue;
-    }
-    if (field === "hardened") {
-      const f = toFlag(value);
-      if (f === void 0) throw b.error(`"${name}" must be true/false or 1/0, not "${text(value)}"`, posOf(name));
-      out.hardened = f;
-      continue;
-    }
-    if (typeof value === "string" && value.trim() === "") continue;
-    const n = toNumber(value);
-    if (field === "bitrate") {
-      if (n !== void 0 && n >= 0) out.capacity ??= n / 1e9;
-      out.attrs[name] = value;
-      continue;
-    }
-    if (n === void 0) throw b.error(`link ${name} must be a number, not "${text(value)}"`, posOf(name), "write a plain decimal number");
-    if (n < 0) throw b.error(`link ${name} must not be negative (${n})`, posOf(name));
-    if (field === "capacity") out.capacity = n;
-    else out[field] = n;
-  }
-  return out;
 }
 
 // src/topology/gml.ts
@@ -24983,10 +28412,10 @@ var GmlReader = class {
       return { key, value: unescape(raw), raw, pos };
     }
     NUMBER.lastIndex = this.i;
-    const num2 = NUMBER.exec(t);
-    if (num2) {
-      this.i += num2[0].length;
-      return { key, value: Number(num2[0]), raw: num2[0], pos };
+    const num3 = NUMBER.exec(t);
+    if (num3) {
+      this.i += num3[0].length;
+      return { key, value: Number(num3[0]), raw: num3[0], pos };
     }
     throw this.b.error(`value of "${key}" is not a number, a "string" or a [ list ]`, vpos);
   }
@@ -25009,19 +28438,32 @@ function scalarId(p) {
 function parseGml(text2, file, options = {}, format = "gml") {
   const b = new TopologyBuilder(file, format, options);
   const top = new GmlReader(text2, b).readList();
-  const graph = top.find((p) => p.key === "graph");
+  const graphs = top.filter((p) => p.key === "graph");
+  const graph = graphs[0];
   if (!graph || !Array.isArray(graph.value)) {
     throw b.error('no "graph [ ... ]" list in this file', top[0]?.pos ?? { line: 1, column: 1 }, "a GML design is `graph [ node [ id 1 ] ... edge [ source 1 target 2 ] ]`");
   }
+  if (graphs.length > 1) {
+    throw b.error(
+      `a second top-level graph (the first begins on line ${graph.pos.line})`,
+      graphs[1].pos,
+      "netbrace reads one design per file: put each graph in a file of its own"
+    );
+  }
+  refuseNestedGraphs(graph.value, b);
   const metadata = {};
   let name;
   let network;
+  let directed = false;
   const edges = [];
   for (const p of graph.value) {
     if (p.key === "node" && Array.isArray(p.value)) readNode(p, p.value, b);
     else if (p.key === "edge" && Array.isArray(p.value)) edges.push(p);
     else if (p.key === "directed") {
-      if (p.value !== 0) b.warn('the graph is directed ("directed 1"); links are read as undirected', p.pos);
+      if (p.value !== 0) {
+        directed = true;
+        b.directed(p.pos, '"directed 1"');
+      }
     } else if (p.key === "multigraph") {
     } else {
       if (p.key === "label" && typeof p.value === "string") name = p.value;
@@ -25029,50 +28471,81 @@ function parseGml(text2, file, options = {}, format = "gml") {
       metadata[p.key] = Array.isArray(p.value) ? toPlain(p.value) : p.value;
     }
   }
-  for (const e of edges) readEdge(e, e.value, b);
+  for (const e of edges) readEdge(e, e.value, b, directed);
   const resolved = name ?? network;
   return b.finish({ ...resolved !== void 0 ? { name: resolved } : {}, metadata });
 }
-function readNode(node, body, b) {
-  let id;
+function refuseNestedGraphs(pairs, b) {
+  for (const p of pairs) {
+    if (!Array.isArray(p.value)) continue;
+    if (p.key === "graph") {
+      throw b.error("a nested graph: netbrace reads one flat graph per file", p.pos, "list its nodes and edges in the top-level graph (node ids must stay unique)");
+    }
+    refuseNestedGraphs(p.value, b);
+  }
+}
+function bodyAttributes(body, what, b, read) {
   const raw = {};
   const where = /* @__PURE__ */ new Map();
+  const written = /* @__PURE__ */ new Map();
+  const first = /* @__PURE__ */ new Map();
+  const repeated = /* @__PURE__ */ new Set();
   for (const p of body) {
-    if (p.key === "id") {
-      id = scalarId(p);
-      if (id === void 0) throw b.error('node "id" must be a number or a string', p.pos);
+    const value = Array.isArray(p.value) ? toPlain(p.value) : p.value;
+    const earlier = first.get(p.key);
+    if (earlier !== void 0) {
+      if (read(p.key)) {
+        throw b.error(`${what} has "${p.key}" twice (lines ${earlier.pos.line} and ${p.pos.line})`, p.pos, `keep one; the first is on line ${earlier.pos.line}`);
+      }
+      raw[p.key] = repeated.has(p.key) ? [...raw[p.key], value] : [raw[p.key], value];
+      repeated.add(p.key);
       continue;
     }
-    raw[p.key] = Array.isArray(p.value) ? toPlain(p.value) : p.value;
+    first.set(p.key, p);
+    raw[p.key] = value;
     where.set(p.key, p.pos);
+    if (typeof p.value === "number") written.set(p.key, p.raw);
   }
-  if (id === void 0) throw b.error('node without "id"', node.pos, "every GML node needs `id N`");
-  const mapped = mapNodeAttributes(raw, b, (k) => where.get(k) ?? node.pos);
+  return { raw, where, written, first };
+}
+function readNode(node, body, b) {
+  const { raw, where, written, first } = bodyAttributes(body, `the node on line ${node.pos.line}`, b, (k) => k === "id" || isNodeField(k));
+  const idPair = first.get("id");
+  if (idPair === void 0) throw b.error('node without "id"', node.pos, "every GML node needs `id N`");
+  const id = scalarId(idPair);
+  if (id === void 0) throw b.error('node "id" must be a number or a string', idPair.pos);
+  delete raw.id;
+  const mapped = mapNodeAttributes(raw, b, { pos: (k) => where.get(k) ?? node.pos, text: (k) => written.get(k) });
   b.addNode({ id, pos: node.pos, ...mapped });
 }
-function readEdge(edge, body, b) {
-  let source;
-  let target;
-  let id;
-  const raw = {};
-  const where = /* @__PURE__ */ new Map();
-  for (const p of body) {
-    if (p.key === "source") source = p;
-    else if (p.key === "target") target = p;
-    else if (p.key === "id" && !Array.isArray(p.value)) id = scalarId(p);
-    else {
-      raw[p.key] = Array.isArray(p.value) ? toPlain(p.value) : p.value;
-      where.set(p.key, p.pos);
-    }
-  }
+function readEdge(edge, body, b, directed) {
+  const ends = (k) => k === "id" || k === "source" || k === "target";
+  const { raw, where, written, first } = bodyAttributes(body, `the edge on line ${edge.pos.line}`, b, (k) => ends(k) || isLinkField(k));
+  const source = first.get("source");
+  const target = first.get("target");
+  const idPair = first.get("id");
+  const id = idPair !== void 0 ? scalarId(idPair) : void 0;
+  if (id !== void 0) delete raw.id;
+  delete raw.source;
+  delete raw.target;
   if (!source || !target) {
     throw b.error(`edge without "${source ? "target" : "source"}"`, edge.pos, "every GML edge needs `source N target M`");
   }
   const s = scalarId(source);
   const d = scalarId(target);
   if (s === void 0 || d === void 0) throw b.error('edge "source" and "target" must be node ids', edge.pos);
-  const mapped = mapLinkAttributes(raw, b, (k) => where.get(k) ?? edge.pos);
-  b.addLink({ what: id !== void 0 ? `edge "${id}"` : "edge", ...id !== void 0 ? { id } : {}, source: s, target: d, pos: edge.pos, sourcePos: source.pos, targetPos: target.pos, ...mapped });
+  const mapped = mapLinkAttributes(raw, b, { pos: (k) => where.get(k) ?? edge.pos, text: (k) => written.get(k) });
+  b.addLink({
+    what: id !== void 0 ? `edge "${id}"` : "edge",
+    ...id !== void 0 ? { id } : {},
+    source: s,
+    target: d,
+    pos: edge.pos,
+    sourcePos: source.pos,
+    targetPos: target.pos,
+    ...mapped,
+    ...directed ? { arc: true } : {}
+  });
 }
 
 // src/topology/graphml.ts
@@ -25101,6 +28574,7 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
   const stack = [];
   let current;
   let graphDepth = 0;
+  const directedGraphs = [];
   let currentKey;
   let dataKey;
   let dataPos = { line: 1, column: 1 };
@@ -25108,16 +28582,10 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
   let dataNested = false;
   let defaultText;
   let sawRoot = false;
-  let warnedDirected = false;
   let warnedNested = false;
   let tagStart = { line: 1, column: 1 };
   let graphId;
   const here = () => ({ line: parser.line, column: parser.column + 1 });
-  const directed = (pos, how) => {
-    if (warnedDirected) return;
-    warnedDirected = true;
-    b.warn(`the graph is directed (${how}); links are read as undirected`, pos);
-  };
   parser.on("error", (err) => {
     const message = err.message.replace(/^(?:[^:\n]*:)?\d+:\d+: /, "").replace(/\.$/, "");
     throw b.error(`malformed XML: ${message}`, here(), "the file is not well-formed XML; check the tag at this point");
@@ -25167,19 +28635,27 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
           warnedNested = true;
           b.warn("nested <graph> found; its nodes and edges are read into the one design", pos);
         }
-        if (attrs.edgedefault === "directed") directed(pos, 'edgedefault="directed"');
+        directedGraphs.push(attrs.edgedefault === "directed");
+        if (attrs.edgedefault === "directed") b.directed(pos, 'edgedefault="directed"');
         break;
       case "node":
         if (attrs.id === void 0) throw b.error('<node> without an "id"', pos, 'every GraphML node needs id="..."');
-        current = { pos, attrs, data: {}, dataPos: /* @__PURE__ */ new Map() };
+        current = { pos, attrs, data: {}, dataPos: /* @__PURE__ */ new Map(), dataText: /* @__PURE__ */ new Map() };
         nodes.push(current);
         break;
       case "edge":
         if (attrs.source === void 0 || attrs.target === void 0) {
           throw b.error(`<edge> without a "${attrs.source === void 0 ? "source" : "target"}"`, pos, 'every GraphML edge needs source="..." and target="..."');
         }
-        if (attrs.directed === "true") directed(pos, 'an edge has directed="true"');
-        current = { pos, attrs, data: {}, dataPos: /* @__PURE__ */ new Map() };
+        if (attrs.directed === "true") b.directed(pos, 'an edge has directed="true"');
+        current = {
+          pos,
+          attrs,
+          data: {},
+          dataPos: /* @__PURE__ */ new Map(),
+          dataText: /* @__PURE__ */ new Map(),
+          arc: attrs.directed === "true" || attrs.directed !== "false" && directedGraphs[directedGraphs.length - 1] === true
+        };
         edges.push(current);
         break;
       case "hyperedge":
@@ -25209,10 +28685,12 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
       case "data": {
         const def = keys.get(dataKey ?? "");
         const attrName = def?.name ?? dataKey ?? "";
-        const value = typed(dataNested ? dataText.trim() : dataText, def?.type ?? "string");
+        const written = dataNested ? dataText.trim() : dataText;
+        const value = typed(written, def?.type ?? "string");
         if (current) {
           current.data[attrName] = value;
           current.dataPos.set(attrName, dataPos);
+          current.dataText.set(attrName, written);
         } else if (graphDepth > 0) {
           metadata[attrName] = value;
         }
@@ -25232,6 +28710,7 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
         break;
       case "graph":
         graphDepth--;
+        directedGraphs.pop();
         break;
       default:
         break;
@@ -25243,22 +28722,35 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
   const nodeDefaults = defaults("node");
   const edgeDefaults = defaults("edge");
   const withDefaults = (el, defs) => {
-    for (const k of defs) if (!(k.name in el.data)) el.data[k.name] = typed(k.default, k.type);
+    for (const k of defs) {
+      if (k.name in el.data) continue;
+      el.data[k.name] = typed(k.default, k.type);
+      el.dataText.set(k.name, k.default);
+    }
     return el.data;
   };
+  const sourceOf2 = (el) => ({ pos: (k) => el.dataPos.get(k) ?? el.pos, text: (k) => el.dataText.get(k) });
   for (const n of nodes) {
-    const mapped = mapNodeAttributes(withDefaults(n, nodeDefaults), b, (k) => n.dataPos.get(k) ?? n.pos);
+    const mapped = mapNodeAttributes(withDefaults(n, nodeDefaults), b, sourceOf2(n));
     b.addNode({ id: n.attrs.id, pos: n.pos, ...mapped });
   }
   for (const e of edges) {
     const data = withDefaults(e, edgeDefaults);
     let id = e.attrs.id;
     if (id === void 0 && "id" in data) {
-      id = String(data.id);
+      id = e.dataText.get("id") ?? String(data.id);
       delete data.id;
     }
-    const mapped = mapLinkAttributes(data, b, (k) => e.dataPos.get(k) ?? e.pos);
-    b.addLink({ what: id !== void 0 ? `edge "${id}"` : "edge", ...id !== void 0 ? { id } : {}, source: e.attrs.source, target: e.attrs.target, pos: e.pos, ...mapped });
+    const mapped = mapLinkAttributes(data, b, sourceOf2(e));
+    b.addLink({
+      what: id !== void 0 ? `edge "${id}"` : "edge",
+      ...id !== void 0 ? { id } : {},
+      source: e.attrs.source,
+      target: e.attrs.target,
+      pos: e.pos,
+      ...mapped,
+      ...e.arc ? { arc: true } : {}
+    });
   }
   const name = metadata.label ?? metadata.Network ?? metadata.name ?? graphId;
   return b.finish({ ...typeof name === "string" ? { name } : {}, metadata });
@@ -25278,129 +28770,335 @@ function localName(qname) {
   return colon < 0 ? qname : qname.slice(colon + 1);
 }
 
-// src/topology/edgelist.ts
-function* csvRows(text2, b) {
-  let i = 0;
-  let line = 1;
-  let lineStart = 0;
-  if (text2.charCodeAt(0) === 65279) i = lineStart = 1;
-  const n = text2.length;
-  while (i < n) {
-    const cells = [];
-    for (; ; ) {
-      const pos = { line, column: i - lineStart + 1 };
-      let value = "";
-      if (text2[i] === '"') {
-        i++;
-        for (; ; ) {
-          if (i >= n) throw b.error("unterminated quoted field", pos, 'close the field with a double quote (write "" for a quote inside it)');
-          const c = text2[i];
-          if (c === '"') {
-            if (text2[i + 1] === '"') {
-              value += '"';
-              i += 2;
-              continue;
-            }
-            i++;
-            break;
-          }
-          if (c === "\n") {
-            line++;
-            lineStart = i + 1;
-          }
-          value += c;
-          i++;
-        }
-        if (i < n && text2[i] !== "," && text2[i] !== "\n" && text2[i] !== "\r") {
-          throw b.error("text after a closing quote", { line, column: i - lineStart + 1 }, "a quoted field must end at a comma or the end of the line");
-        }
-      } else {
-        const start = i;
-        while (i < n && text2[i] !== "," && text2[i] !== "\n" && text2[i] !== "\r") i++;
-        value = text2.slice(start, i);
-        if (value.includes('"')) throw b.error("a double quote inside an unquoted field", pos, 'quote the whole field and double the quote: "a ""b"""');
-      }
-      cells.push({ text: value, pos });
-      if (i < n && text2[i] === ",") {
-        i++;
-        continue;
-      }
-      break;
-    }
-    const end = { line, column: i - lineStart + 1 };
-    if (text2[i] === "\r") i++;
-    if (text2[i] === "\n") i++;
-    line++;
-    lineStart = i;
-    if (cells.length === 1 && cells[0].text.trim() === "") continue;
-    yield { cells, end };
-  }
+// src/topology/geojson.ts
+var import_yaml6 = __toESM(require_dist(), 1);
+
+// src/topology/corridors.ts
+var EARTH_M = 63710088e-1;
+var RAD = Math.PI / 180;
+function routeKm(route) {
+  let km = 0;
+  for (let i = 1; i < route.length; i++) km += greatCircleKm(route[i - 1][1], route[i - 1][0], route[i][1], route[i][0]);
+  return km;
 }
-function parseEdgeList(text2, file, options = {}, format = "csv") {
-  const b = new TopologyBuilder(file, format, options);
-  const rows = csvRows(text2, b);
-  const first = rows.next();
-  if (first.done) throw b.error("the CSV file is empty", { line: 1, column: 1 }, "the first line must be a header with source,target");
-  const headerCells = first.value.cells;
-  const header = headerCells.map((c) => c.text.trim());
-  const lower = header.map((h) => h.toLowerCase());
-  for (const need of ["source", "target"]) {
-    if (!lower.includes(need)) {
-      throw b.error(`the CSV header has no "${need}" column`, headerCells[0].pos, "the first line must name the columns, e.g. source,target,length");
+function sample(route, stepM) {
+  const out = [];
+  for (let i = 1; i < route.length; i++) {
+    const [x0, y0] = route[i - 1];
+    const [x1, y1] = route[i];
+    const len = greatCircleKm(y0, x0, y1, x1) * 1e3;
+    const n = Math.max(1, Math.ceil(len / stepM));
+    for (let k = i === 1 ? 0 : 1; k <= n; k++) {
+      const t = k / n;
+      out.push({ p: [x0 + (x1 - x0) * t, y0 + (y1 - y0) * t], m: k === 0 ? 0 : len / n });
     }
   }
-  const seen = /* @__PURE__ */ new Map();
-  lower.forEach((h, k) => {
-    if (h === "") throw b.error(`column ${k + 1} of the header has no name`, headerCells[k].pos);
-    const earlier = seen.get(h);
-    if (earlier !== void 0) throw b.error(`column "${header[k]}" appears twice in the header`, headerCells[k].pos, `first as column ${earlier + 1}`);
-    seen.set(h, k);
+  return out;
+}
+function pointSegmentM(p, q0, q1) {
+  const kx = Math.cos(p[1] * RAD) * RAD * EARTH_M;
+  const ky = RAD * EARTH_M;
+  const ax = (q0[0] - p[0]) * kx;
+  const ay = (q0[1] - p[1]) * ky;
+  const bx = (q1[0] - p[0]) * kx;
+  const by = (q1[1] - p[1]) * ky;
+  const dx = bx - ax;
+  const dy = by - ay;
+  const len2 = dx * dx + dy * dy;
+  const t = len2 > 0 ? Math.min(1, Math.max(0, -(ax * dx + ay * dy) / len2)) : 0;
+  const cx = ax + t * dx;
+  const cy = ay + t * dy;
+  return Math.hypot(cx, cy);
+}
+function boxOf(route, padDeg) {
+  const b = { minX: Infinity, minY: Infinity, maxX: -Infinity, maxY: -Infinity };
+  for (const [x, y] of route) {
+    b.minX = Math.min(b.minX, x);
+    b.maxX = Math.max(b.maxX, x);
+    b.minY = Math.min(b.minY, y);
+    b.maxY = Math.max(b.maxY, y);
+  }
+  const padX = padDeg / Math.max(0.01, Math.cos((b.minY + b.maxY) / 2 * RAD));
+  return { minX: b.minX - padX, maxX: b.maxX + padX, minY: b.minY - padDeg, maxY: b.maxY + padDeg };
+}
+var overlaps = (a, b) => a.minX <= b.maxX && b.minX <= a.maxX && a.minY <= b.maxY && b.minY <= a.maxY;
+function sharedCorridors(routes, options = {}) {
+  const withinM = options.withinM ?? 50;
+  const minKm = options.minKm ?? 1;
+  const stepM = options.stepM ?? 25;
+  const padDeg = withinM / EARTH_M / RAD;
+  const boxes = routes.map((r) => boxOf(r, padDeg));
+  const samples = [];
+  const samplesOf = (a) => samples[a] ??= sample(routes[a], stepM);
+  const found = [];
+  for (let a = 0; a < routes.length; a++) {
+    if (routes[a].length < 2) continue;
+    for (let b = a + 1; b < routes.length; b++) {
+      if (routes[b].length < 2 || !overlaps(boxes[a], boxes[b])) continue;
+      let m = 0;
+      let from;
+      let to;
+      const box = boxes[b];
+      for (const s of samplesOf(a)) {
+        if (s.p[0] < box.minX || s.p[0] > box.maxX || s.p[1] < box.minY || s.p[1] > box.maxY) continue;
+        let near = false;
+        for (let i = 1; i < routes[b].length && !near; i++) near = pointSegmentM(s.p, routes[b][i - 1], routes[b][i]) <= withinM;
+        if (near) {
+          m += s.m;
+          from ??= s.p;
+          to = s.p;
+        }
+      }
+      if (m / 1e3 > minKm && from && to) found.push({ a, b, km: m / 1e3, from, to });
+    }
+  }
+  return found.sort((x, y) => y.km - x.km || x.a - y.a || x.b - y.b);
+}
+
+// src/topology/geojson.ts
+var ROUTE_KNOWN = "route_known";
+var END_TOLERANCE_M = 100;
+var END_TOLERANCE_DEG = END_TOLERANCE_M / 111e3 * 1.01;
+var CORRIDOR_WITHIN_M = 50;
+var CORRIDOR_MIN_KM = 1;
+var COORDINATE_NAMES = /* @__PURE__ */ new Set(["lat", "lon", "lng", "long", "latitude", "longitude", "x", "y"]);
+function isObject(v) {
+  return typeof v === "object" && v !== null && !Array.isArray(v);
+}
+function nodeAt(from, path) {
+  let cur = from ?? void 0;
+  for (const k of path) {
+    if ((0, import_yaml6.isMap)(cur)) cur = cur.get(k, true);
+    else if ((0, import_yaml6.isSeq)(cur) && typeof k === "number") cur = cur.items[k];
+    else return void 0;
+  }
+  return cur ?? void 0;
+}
+function crsProblem(crs) {
+  if (crs === void 0 || crs === null) return void 0;
+  const name = isObject(crs) && isObject(crs.properties) ? crs.properties.name : void 0;
+  const text2 = typeof name === "string" ? name : JSON.stringify(crs);
+  return /CRS84|EPSG:+4326\b|EPSG::?4979\b/i.test(text2) ? void 0 : text2;
+}
+function parseGeojson(text2, file, options = {}) {
+  const deep = yamlNestingExceeded(text2);
+  if (deep >= 0) throw new DesignError(`the GeoJSON nests deeper than ${MAX_NESTING} levels`, { file, ...positionOf(text2, deep) }, "a FeatureCollection needs a few levels only");
+  const lines = new import_yaml6.LineCounter();
+  const doc = (0, import_yaml6.parseDocument)(text2, { lineCounter: lines, uniqueKeys: true, prettyErrors: false });
+  const at = (offset) => {
+    const p = lines.linePos(offset);
+    return { line: p.line, column: p.col };
+  };
+  const where = (n, fallback = { line: 1, column: 1 }) => n?.range ? at(n.range[0]) : fallback;
+  if (doc.errors.length > 0) {
+    const e = doc.errors[0];
+    throw new DesignError(`GeoJSON syntax error: ${e.message.split("\n")[0]}`, { file, ...at(e.pos[0]) }, "fix the JSON at this point");
+  }
+  const root = doc.toJS({ maxAliasCount: 0 });
+  const b = new TopologyBuilder(file, "geojson", options);
+  const fail = (pos) => (message, hint = "") => {
+    throw b.error(message, pos, hint);
+  };
+  if (!isObject(root) || root.type !== "FeatureCollection" || !Array.isArray(root.features)) {
+    fail({ line: 1, column: 1 })('a GeoJSON design is a FeatureCollection with a "features" list', "points are sites, lines are links");
+  }
+  const rootMap = root;
+  const crs = crsProblem(rootMap.crs);
+  if (crs !== void 0) {
+    fail(where(nodeAt(doc.contents, ["crs"])))(`the coordinates are in another reference system (${crs.slice(0, 80)})`, "RFC 7946 GeoJSON is WGS 84 longitude/latitude: export the layer as EPSG:4326");
+  }
+  const featureNodes = nodeAt(doc.contents, ["features"]);
+  const features = rootMap.features.map((f, i) => {
+    const node = nodeAt(featureNodes, [i]);
+    const pos = where(node);
+    if (!isObject(f) || f.type !== "Feature") fail(pos)(`features[${i}] is not a Feature`);
+    const g = f.geometry;
+    if (g !== null && !(isObject(g) && typeof g.type === "string")) fail(pos)(`features[${i}] has no geometry object`, 'a Feature has "geometry": a Point (a site) or a LineString (a link)');
+    const props = f.properties;
+    return {
+      geometry: g,
+      properties: isObject(props) ? props : {},
+      ...f.id !== void 0 ? { id: f.id } : {},
+      pos,
+      node
+    };
   });
-  const src = lower.indexOf("source");
-  const dst = lower.indexOf("target");
-  const idCol = lower.indexOf("id");
-  let r = 0;
-  for (const { cells, end } of rows) {
-    r++;
-    if (cells.length < header.length) {
-      const missing2 = header.slice(cells.length).map((h) => `"${h}"`).join(", ");
-      throw b.error(
-        `row has ${cells.length} of the header's ${header.length} columns (missing ${missing2})`,
-        end,
-        "add the missing values (an empty value is written as nothing between two commas)"
+  const written = (f, path, v) => {
+    if (typeof v !== "number") return String(v);
+    const n = nodeAt(f.node, path);
+    return (0, import_yaml6.isScalar)(n) && typeof n.source === "string" ? n.source : String(v);
+  };
+  const idOf = (f) => {
+    const raw = f.properties.id ?? f.id;
+    if (raw === void 0 || raw === null || raw === "") return void 0;
+    return written(f, f.properties.id !== void 0 && f.properties.id !== null ? ["properties", "id"] : ["id"], raw);
+  };
+  const position = (f, path, v, what) => {
+    const here = fail(where(nodeAt(f.node, path), f.pos));
+    if (!Array.isArray(v) || v.length < 2 || typeof v[0] !== "number" || typeof v[1] !== "number") {
+      here(`${what} is not a [longitude, latitude] position`, "a position is two numbers, e.g. [-35.2, 45.45]");
+    }
+    const [lon, lat] = v;
+    const bad = nonNormal(lon) ?? nonNormal(lat);
+    if (bad) here(`${what} ${bad}`, "write plain decimal degrees");
+    if (lon < -180 || lon > 180 || lat < -90 || lat > 90) {
+      here(`${what} [${lon}, ${lat}] is outside longitude −180…180 / latitude −90…90`, "GeoJSON writes longitude first, in degrees of WGS 84 (RFC 7946 §3.1.1)");
+    }
+    return [lon, lat];
+  };
+  const sites = [];
+  features.forEach((f, i) => {
+    if (f.geometry === null) {
+      b.warn(`features[${i}] has no geometry (null); skipped`, f.pos, "give a site a Point and a link a LineString");
+      return;
+    }
+    if (f.geometry.type !== "Point") return;
+    const [lon, lat] = position(f, ["geometry", "coordinates"], f.geometry.coordinates, `site features[${i}]`);
+    const id = idOf(f);
+    if (id === void 0) fail(f.pos)(`site features[${i}] has no id`, 'give the feature an "id", or properties.id');
+    const rest = {};
+    const asWritten = {};
+    for (const [k, v] of Object.entries(f.properties)) {
+      if (k === "id") continue;
+      if (COORDINATE_NAMES.has(k.toLowerCase())) asWritten[k] = v;
+      else rest[k] = v;
+    }
+    const mapped = mapNodeAttributes(rest, b, { pos: (k) => where(nodeAt(f.node, ["properties", k]), f.pos), text: (k) => typeof rest[k] === "number" ? written(f, ["properties", k], rest[k]) : void 0 });
+    b.addNode({ id, pos: f.pos, ...mapped, attrs: { ...mapped.attrs, ...asWritten }, lat, lon });
+    sites.push({ id, lon, lat });
+  });
+  const nearest = (p) => {
+    let best;
+    let bestM = Infinity;
+    for (const s of sites) {
+      if (Math.abs(s.lat - p[1]) > END_TOLERANCE_DEG) continue;
+      const m = greatCircleKm(p[1], p[0], s.lat, s.lon) * 1e3;
+      if (m < bestM) [best, bestM] = [s.id, m];
+    }
+    return bestM <= END_TOLERANCE_M ? best : void 0;
+  };
+  const routes = [];
+  let linkCount = 0;
+  features.forEach((f, i) => {
+    if (f.geometry === null || f.geometry.type === "Point") return;
+    const type = f.geometry.type;
+    const here = fail(f.pos);
+    if (type !== "LineString" && type !== "MultiLineString") {
+      here(`features[${i}] is a ${type}: only Point (sites) and LineString or MultiLineString (links) are read`, "keep areas and other shapes in another file");
+    }
+    const coords = f.geometry.coordinates;
+    const partList = type === "LineString" ? [coords] : Array.isArray(coords) ? coords : [];
+    if (partList.length === 0) here(`link features[${i}] has no line`, "a MultiLineString holds a list of lines");
+    const parts = partList.map((part, k) => {
+      const base = type === "LineString" ? ["geometry", "coordinates"] : ["geometry", "coordinates", k];
+      if (!Array.isArray(part) || part.length < 2) {
+        fail(where(nodeAt(f.node, base), f.pos))(`link features[${i}] has a line with fewer than two positions`, "a line needs at least its two ends");
+      }
+      return part.map((p, j) => position(f, [...base, j], p, `position ${j} of link features[${i}]`));
+    });
+    const first = parts[0][0];
+    const last = parts[parts.length - 1][parts[parts.length - 1].length - 1];
+    for (let k = 1; k < parts.length; k++) {
+      const [a, c] = [parts[k - 1][parts[k - 1].length - 1], parts[k][0]];
+      const gapM = greatCircleKm(a[1], a[0], c[1], c[0]) * 1e3;
+      if (gapM > END_TOLERANCE_M) {
+        b.warn(
+          `link features[${i}] has a gap of ${(gapM / 1e3).toFixed(3)} km between lines ${k} and ${k + 1} of its MultiLineString; the length counts the lines only`,
+          where(nodeAt(f.node, ["geometry", "coordinates", k]), f.pos),
+          "join the lines, or give the length in properties.length_km"
+        );
+      }
+    }
+    const raw = f.properties;
+    const named = (a, c) => {
+      for (const k of [a, c]) if (raw[k] !== void 0 && raw[k] !== null && raw[k] !== "") return [k, raw[k]];
+      return void 0;
+    };
+    const nameOf = (n) => n ? written(f, ["properties", n[0]], n[1]) : void 0;
+    const ends = [nameOf(named("source", "from")) ?? nearest(first), nameOf(named("target", "to")) ?? nearest(last)];
+    for (const [k, e] of ends.entries()) {
+      if (e === void 0) {
+        const p = k === 0 ? first : last;
+        here(
+          `link features[${i}] ${k === 0 ? "starts" : "ends"} at [${p[0]}, ${p[1]}], more than ${END_TOLERANCE_M} m from every site`,
+          "move the line’s end onto its site, or name the sites in properties.source and properties.target"
+        );
+      }
+    }
+    const drawn = [nearest(first), nearest(last)];
+    if (named("source", "from") && named("target", "to") && drawn.every((d) => d !== void 0) && [...drawn].sort().join("\0") !== [...ends].sort().join("\0")) {
+      b.warn(
+        `link features[${i}] names the sites "${ends[0]}" and "${ends[1]}", but its line is drawn between "${drawn[0]}" and "${drawn[1]}"; the named sites are used`,
+        f.pos,
+        "check that the properties and the drawing describe the same link"
       );
     }
-    if (cells.length > header.length) {
-      throw b.error(`row has ${cells.length} columns but the header has ${header.length}`, cells[header.length].pos, "quote values that contain commas");
+    const { source: _s, target: _t, from: _f, to: _to, id: _id, risk_groups: groupsRaw, ...rest } = raw;
+    const listedGroups = Array.isArray(groupsRaw) ? groupsRaw.map((g, k) => written(f, ["properties", "risk_groups", k], g)).filter((g) => g !== "") : void 0;
+    const mapped = mapLinkAttributes(
+      listedGroups === void 0 && groupsRaw !== void 0 ? { ...rest, risk_groups: groupsRaw } : rest,
+      b,
+      { pos: (k) => where(nodeAt(f.node, ["properties", k]), f.pos), text: (k) => typeof raw[k] === "number" ? written(f, ["properties", k], raw[k]) : void 0 }
+    );
+    if (listedGroups !== void 0) mapped.riskGroups = listedGroups;
+    const measured = parts.reduce((s, p) => s + routeKm(p), 0);
+    if (mapped.length === void 0) {
+      const problem = quantityProblem("length", measured);
+      if (problem) here(`the line of link features[${i}] ${problem.message}`, "check the coordinates");
     }
-    const pos = cells[0].pos;
-    const ends = [cells[src], cells[dst]];
-    for (const c of ends) {
-      const id2 = c.text.trim();
-      if (id2 === "") throw b.error(`empty ${c === cells[src] ? "source" : "target"}`, c.pos, "every row needs both link ends");
-      if (!b.hasNode(id2)) b.addNode({ id: id2, pos: c.pos });
+    const id = idOf(f);
+    const added = b.addLink({
+      ...id !== void 0 ? { id } : {},
+      source: ends[0],
+      target: ends[1],
+      pos: f.pos,
+      ...mapped,
+      ...mapped.length === void 0 ? { length: measured } : {},
+      attrs: { ...mapped.attrs, route_km: Math.round(measured * 1e3) / 1e3, route: { type, coordinates: type === "LineString" ? parts[0] : parts } },
+      what: `link features[${i}]`
+    });
+    if (added && mapped.attrs[ROUTE_KNOWN] !== false) routes.push({ parts, linkIndex: linkCount, groups: mapped.riskGroups ?? [], pos: f.pos });
+    if (added) linkCount++;
+  });
+  const meta = rootMap.metadata;
+  const t = b.finish({
+    ...typeof rootMap.name === "string" ? { name: rootMap.name } : {},
+    ...isObject(meta) ? { metadata: meta } : {}
+  });
+  if (typeof rootMap.description === "string") t.description = rootMap.description;
+  const flat = [];
+  const owner = [];
+  routes.forEach((r, k) => {
+    for (const p of r.parts) {
+      flat.push(p);
+      owner.push(k);
     }
-    const raw = {};
-    const where = /* @__PURE__ */ new Map();
-    header.forEach((h, k) => {
-      if (k === src || k === dst || k === idCol) return;
-      raw[h] = cells[k].text;
-      where.set(h, cells[k].pos);
-    });
-    const mapped = mapLinkAttributes(raw, b, (k) => where.get(k) ?? pos);
-    const id = idCol >= 0 ? cells[idCol].text.trim() : "";
-    b.addLink({
-      what: `row ${r + 1}`,
-      ...id !== "" ? { id } : {},
-      source: ends[0].text.trim(),
-      target: ends[1].text.trim(),
-      pos,
-      sourcePos: ends[0].pos,
-      targetPos: ends[1].pos,
-      ...mapped
-    });
+  });
+  const seen = /* @__PURE__ */ new Map();
+  for (const c of sharedCorridors(flat, { withinM: CORRIDOR_WITHIN_M, minKm: 0 })) {
+    const [a, z] = [owner[c.a], owner[c.b]];
+    if (a === z) continue;
+    const key = `${a}\0${z}`;
+    const prev = seen.get(key);
+    if (prev) prev.km += c.km;
+    else seen.set(key, { a, b: z, km: c.km, from: c.from, to: c.to });
   }
-  return b.finish();
+  const found = [...seen.values()].filter((c) => c.km > CORRIDOR_MIN_KM).sort((x, y) => y.km - x.km || x.a - y.a || x.b - y.b);
+  for (const c of found) {
+    const [ra, rb] = [routes[c.a], routes[c.b]];
+    if (ra.groups.some((g) => rb.groups.includes(g))) continue;
+    const [la, lb] = [t.links[ra.linkIndex], t.links[rb.linkIndex]];
+    const d = {
+      file,
+      line: ra.pos.line,
+      column: ra.pos.column,
+      severity: "warning",
+      message: `links "${la.id}" (line ${ra.pos.line}) and "${lb.id}" (line ${rb.pos.line}) run within ${CORRIDOR_WITHIN_M} m of each other for ${c.km.toFixed(1)} km, from [${c.from[0].toFixed(5)}, ${c.from[1].toFixed(5)}] to [${c.to[0].toFixed(5)}, ${c.to[1].toFixed(5)}]: a possible shared-risk group the design does not declare`,
+      hint: "if they share a duct, trench or bridge, give both the same risk_groups entry; otherwise this warning can stand"
+    };
+    t.warnings.push(d);
+  }
+  return t;
 }
 
 // src/topology/parse.ts
@@ -25435,7 +29133,7 @@ function parseDesign(text2, file, options = {}) {
     throw new DesignError(
       "cannot tell the design format from the file name",
       { file },
-      `use an extension .net.yaml, .net.json, .graphml, .gml or .csv, or force one (${FORMAT_CHOICES})`
+      `use an extension .net.yaml, .net.json, .graphml, .gml, .csv or .geojson, or force one (${FORMAT_CHOICES})`
     );
   }
   checkSize(text2, file, options.maxBytes ?? DEFAULT_MAX_BYTES);
@@ -25451,7 +29149,100 @@ function parseDesign(text2, file, options = {}) {
       return parseGraphml(text2, file, builderOptions);
     case "csv":
       return parseEdgeList(text2, file, builderOptions);
+    case "geojson":
+      return parseGeojson(text2, file, builderOptions);
   }
+}
+
+// src/map-mend-step.ts
+var MEND_MAX_EVALUATIONS = 10;
+var MEND_BUDGET_FACTOR = 4;
+var MEND_MIN_EVALUATIONS = 2;
+function parsed(text2, path, format) {
+  if (text2 === null) return null;
+  try {
+    return parseDesign(text2, path, format ? { format } : {});
+  } catch (e) {
+    if (isNetbraceError(e)) return null;
+    throw e;
+  }
+}
+function labels(t) {
+  if (!t) return void 0;
+  return new Map(t.nodes.filter((n) => n.label !== void 0).map((n) => [n.id, n.label]));
+}
+async function addMapAndMend(report, input, ctx) {
+  if (!input.head || input.headError) return;
+  const comparing = !input.thresholdsOnly && input.base !== void 0 && !input.baseError;
+  const headTopo = parsed(await ctx.deps.readAt(ctx.head, input.path), input.path, input.policy.format);
+  if (!headTopo) return;
+  if (ctx.request.map !== false) {
+    let baseTopo = null;
+    if (comparing && input.base.graph !== input.head.graph) {
+      const basePath = input.previousPath ?? input.path;
+      baseTopo = parsed(await ctx.deps.readAt(ctx.base, basePath), basePath, input.policy.format);
+    }
+    report.map = buildDesignMap(
+      { graph: input.head.graph, labels: labels(headTopo) },
+      comparing ? { graph: input.base.graph, labels: labels(baseTopo) ?? labels(headTopo) } : void 0
+    );
+  }
+  const when = ctx.request.mend ?? "failing";
+  const failing = report.status === "error" || report.findings.some((f) => f.severity === "fail");
+  if (when === "never" || when === "failing" && !failing) return;
+  const settings = input.policy.mend ?? {};
+  if (settings.evaluations === 0) return;
+  const fp = input.policy;
+  const g = input.head.graph;
+  const notes = [];
+  let candidates2;
+  if (settings.candidates !== void 0) {
+    const text2 = await ctx.deps.readAt(ctx.head, settings.candidates);
+    if (text2 === null) {
+      notes.push(`the candidate list ${settings.candidates} named by the policy does not exist${ctx.head === "worktree" ? "" : ` at ${ctx.head}`}`);
+      candidates2 = { list: [], unit: "link", source: "list", notes: [] };
+    } else {
+      try {
+        candidates2 = parseCandidateFile(text2, settings.candidates, g);
+      } catch (e) {
+        if (!isNetbraceError(e)) throw e;
+        notes.push(`the candidate list could not be read: ${e.format().split("\n")[0]}`);
+        candidates2 = { list: [], unit: "link", source: "list", notes: [] };
+      }
+    }
+  } else {
+    candidates2 = generateCandidates(g, {
+      ...settings.routeFactor !== void 0 ? { routeFactor: settings.routeFactor } : {},
+      ...settings.maxKm !== void 0 ? { maxKm: settings.maxKm } : {}
+    });
+  }
+  const baseSide = comparing ? input.base : void 0;
+  const specs = evaluationSpecs(fp, ctx.seed);
+  const original = budgetSpecs(specs, fp.budget.maxWork, g, baseSide?.graph);
+  const work = original.head.reduce((s, spec) => s + planEvaluation(g, spec).work, 0);
+  const affordable = work > 0 ? Math.floor(MEND_BUDGET_FACTOR * fp.budget.maxWork / work) : MEND_MAX_EVALUATIONS;
+  const maxEvaluations = settings.evaluations ?? Math.max(MEND_MIN_EVALUATIONS, Math.min(MEND_MAX_EVALUATIONS, affordable));
+  const judge2 = async (change) => {
+    const mended = compileTopology(applyToTopology(headTopo, change));
+    const budgeted = budgetSpecs(specs, fp.budget.maxWork, mended, baseSide?.graph);
+    const head = await evaluateGraph(mended, void 0, budgeted.head, budgeted.cuts, ctx.request, ctx.deps);
+    let base = baseSide;
+    if (baseSide && JSON.stringify(budgeted.base) !== JSON.stringify(original.base)) {
+      base = await evaluateGraph(baseSide.graph, baseSide.topology, budgeted.base, budgeted.cuts, ctx.request, ctx.deps);
+    }
+    return compareDesign({ ...input, head, ...base ? { base } : {} });
+  };
+  report.mend = await mendDesign({
+    topology: headTopo,
+    graph: g,
+    report,
+    candidates: candidates2,
+    ...settings.maxLinks !== void 0 ? { maxLinks: settings.maxLinks } : {},
+    maxEvaluations,
+    judge: judge2,
+    ...settings.candidates !== void 0 ? { candidatePath: settings.candidates } : {},
+    notes
+  });
 }
 
 // src/version.ts
@@ -25478,16 +29269,24 @@ var NeedFile = class {
 };
 async function loadPolicyAt(entry, read) {
   const texts = /* @__PURE__ */ new Map();
+  const unreadable = /* @__PURE__ */ new Map();
   for (let attempt = 0; attempt < 64; attempt++) {
     try {
       const policy = loadPolicy(entry, (p) => {
+        const bad = unreadable.get(p);
+        if (bad) throw bad;
         if (!texts.has(p)) throw new NeedFile(p);
         return texts.get(p);
       });
       return { policy, texts };
     } catch (e) {
       if (!(e instanceof NeedFile)) throw e;
-      texts.set(e.path, await read(e.path));
+      try {
+        texts.set(e.path, await read(e.path));
+      } catch (r) {
+        if (!(r instanceof EncodingError)) throw r;
+        unreadable.set(e.path, r);
+      }
     }
   }
   throw new PolicyError("the policy inherits too many files", { file: entry }, "keep the chain of inherits short");
@@ -25523,10 +29322,18 @@ async function choosePolicy(request, deps, base, head) {
   };
   const readAtRev = (rev) => async (p) => isOrgFile(request, p) ? readOrg(p) : deps.readAt(rev, p);
   const readTrusted = readAtRev(trusted);
-  const entryText = await readTrusted(path);
-  const otherText = other !== void 0 ? await deps.readAt(other, path) : null;
-  if (entryText === null) {
-    if (otherText !== null && other !== void 0) {
+  const exists = async (rev, p) => {
+    try {
+      return await deps.readAt(rev, p) !== null;
+    } catch (e) {
+      if (e instanceof EncodingError) return true;
+      throw e;
+    }
+  };
+  const entryExists = await exists(trusted, path);
+  const otherExists = other !== void 0 && await exists(other, path);
+  if (!entryExists) {
+    if (otherExists) {
       const p = builtinPolicy();
       return {
         policy: p,
@@ -25554,7 +29361,7 @@ async function choosePolicy(request, deps, base, head) {
   const info = { source: "file", path, revision: trusted, files: policy.files };
   if (other !== void 0) {
     let changed = false;
-    for (const [p, text2] of texts) if (!isOrgFile(request, p) && await deps.readAt(other, p) !== text2) changed = true;
+    for (const [p, text2] of texts) if (!isOrgFile(request, p) && await readSide(deps, other, p) !== text2) changed = true;
     if (changed) {
       info.changed = true;
       if (trusted === base) {
@@ -25579,11 +29386,14 @@ async function candidates(request, deps, policy, base, head) {
     const list2 = [];
     for (const path of [...new Set(request.paths.map(normalizePath))]) {
       if (base === void 0) {
+        if (await deps.readAt(head, path) === null) {
+          throw new UsageError(`${path} does not exist${head === "worktree" ? "" : ` at ${head}`} (or is not a file)`, "give the path of a design file");
+        }
         list2.push({ path, change: "unchanged" });
         continue;
       }
-      const [h, b] = [await deps.readAt(head, path), await deps.readAt(base, path)];
-      const change = h === null ? "deleted" : b === null ? "added" : h === b ? "unchanged" : "modified";
+      const [h, b] = [await readSide(deps, head, path), await readSide(deps, base, path)];
+      const change = h === null ? "deleted" : b === null ? "added" : typeof h === "string" && h === b ? "unchanged" : "modified";
       if (h === null && b === null) throw new UsageError(`${path} exists neither at ${head} nor at ${base}`, "give paths relative to the repository root");
       list2.push({ path, change });
     }
@@ -25591,11 +29401,88 @@ async function candidates(request, deps, policy, base, head) {
   }
   if (base === void 0 || request.eventKind === "schedule") {
     const all = await deps.listAll(head);
-    return { list: all.filter((p) => isDesignPath(policy, p)).map((path) => ({ path, change: "unchanged" })), scope: "all" };
+    const list2 = all.filter((p) => isDesignPath(policy, p)).map((path) => ({ path, change: "unchanged" }));
+    return { list: await withDesignHeaders(list2, deps, policy, void 0, head), scope: "all" };
   }
   const changed = await deps.listChanged(base, head);
-  const list = changed.filter((f) => isDesignPath(policy, f.path) || f.previousPath !== void 0 && isDesignPath(policy, f.previousPath)).map((f) => ({ path: f.path, change: f.status, ...f.previousPath !== void 0 ? { previousPath: f.previousPath } : {} }));
-  return { list, scope: "changed" };
+  const selected = changed.filter((f) => isDesignPath(policy, f.path) || f.previousPath !== void 0 && isDesignPath(policy, f.previousPath)).map((f) => ({ path: f.path, change: f.status, ...f.previousPath !== void 0 ? { previousPath: f.previousPath } : {} }));
+  const list = await withDesignHeaders(selected, deps, policy, base, head);
+  const note2 = await deadGlobNote(changed, deps, policy, base, head);
+  return { list: await pairMovedDesigns(list, deps, policy, base, head), scope: "changed", ...note2 ? { note: note2 } : {} };
+}
+async function textOrNull(deps, rev, path) {
+  try {
+    return await deps.readAt(rev, path);
+  } catch (e) {
+    if (e instanceof EncodingError) return null;
+    throw e;
+  }
+}
+async function hasDesignHeader(c, deps, policy, base, head) {
+  const sides = [];
+  if (c.change !== "deleted") sides.push([head, c.path]);
+  if (base !== void 0 && c.change !== "added") sides.push([base, c.previousPath ?? c.path]);
+  for (const [rev, p] of sides) if (isDesignText(policy, p, await textOrNull(deps, rev, p))) return true;
+  return false;
+}
+async function withDesignHeaders(list, deps, policy, base, head) {
+  const kept = [];
+  for (const c of list) {
+    const sniffed = designNeedsHeader(policy, c.path) || c.previousPath !== void 0 && designNeedsHeader(policy, c.previousPath);
+    if (!sniffed || await hasDesignHeader(c, deps, policy, base, head)) kept.push(c);
+  }
+  return kept;
+}
+function networkName(text2, path, policy) {
+  if (text2 === null) return void 0;
+  try {
+    const format = designFormat(policy, path);
+    const t = parseDesign(text2, path, format ? { format } : {});
+    const name = t.name ?? t.metadata.name;
+    return typeof name === "string" ? name : void 0;
+  } catch (e) {
+    if (isNetbraceError(e)) return void 0;
+    throw e;
+  }
+}
+async function pairMovedDesigns(list, deps, policy, base, head) {
+  const deleted = list.filter((c) => c.change === "deleted");
+  const added = list.filter((c) => c.change === "added");
+  if (deleted.length === 0 || added.length === 0) return list;
+  const named = async (rev, cs) => {
+    const out = [];
+    for (const c of cs) {
+      const name = networkName(await deps.readAt(rev, c.path), c.path, policy);
+      out.push({ path: c.path, ...name !== void 0 ? { name } : {} });
+    }
+    return out;
+  };
+  const pairs = pairDesigns(await named(base, deleted), await named(head, added));
+  if (pairs.length === 0) return list;
+  const gone = new Set(pairs.map((p) => p.previousPath));
+  const into = new Map(pairs.map((p) => [p.path, p.previousPath]));
+  return list.filter((c) => !(c.change === "deleted" && gone.has(c.path))).map((c) => c.change === "added" && into.has(c.path) ? { path: c.path, previousPath: into.get(c.path), change: "renamed" } : c);
+}
+var UNSELECTED_SHOWN = 5;
+async function deadGlobNote(changed, deps, policy, base, head) {
+  const looksLikeDesign = (p) => globsMatch(DEFAULT_DESIGN_GLOBS, p) && !isDesignPath(policy, p) && !globsMatch(policy.exclude, p);
+  const looking = [...new Set(changed.flatMap((f) => [f.path, ...f.previousPath !== void 0 ? [f.previousPath] : []]).filter(looksLikeDesign))].sort();
+  if (looking.length === 0) return void 0;
+  const written = policy.designs.flatMap((d) => d.paths.map((glob, i) => ({ glob, where: d.fileWhere[i] ?? d.where }))).filter((g) => g.where.file !== BUILTIN_POLICY_NAME);
+  if (written.length === 0) return void 0;
+  const files = [.../* @__PURE__ */ new Set([...await deps.listAll(base), ...await deps.listAll(head)])];
+  const dead = written.filter((g) => !files.some((f) => globsMatch([g.glob], f)));
+  if (dead.length === 0) return void 0;
+  const builtin2 = builtinPolicy();
+  const unselected = [];
+  for (const p of looking) {
+    if (!designNeedsHeader(builtin2, p)) unselected.push(p);
+    else if (isDesignText(builtin2, p, await textOrNull(deps, head, p)) || isDesignText(builtin2, p, await textOrNull(deps, base, p))) unselected.push(p);
+  }
+  if (unselected.length === 0) return void 0;
+  const globs2 = dead.map((g) => `designs glob "${g.glob}" (${g.where.file}:${g.where.line}:${g.where.column})`).join(", ");
+  const shown2 = unselected.slice(0, UNSELECTED_SHOWN).join(", ") + (unselected.length > UNSELECTED_SHOWN ? `, and ${unselected.length - UNSELECTED_SHOWN} more` : "");
+  return `${globs2} ${dead.length === 1 ? "matches" : "match"} no file at the base or the head, and this change touches design files that no glob selects, so they were not judged: ${shown2}; check the glob`;
 }
 function normalizePath(p) {
   return p.replace(/\\/g, "/").replace(/^\.\//, "");
@@ -25625,29 +29512,48 @@ function joinEvaluations(parts) {
   evaluation.attacks = [...first.evaluation.attacks];
   evaluation.contingencies = [...first.evaluation.contingencies];
   evaluation.degraded = [...first.evaluation.degraded];
+  const notApplicable = [...first.evaluation.notApplicable ?? []];
   const samples = new Map(first.samples);
-  const labels = new Map(first.labels);
+  const labels2 = new Map(first.labels);
   for (const p of rest) {
     evaluation.envelopes.push(...p.evaluation.envelopes);
     evaluation.attacks.push(...p.evaluation.attacks);
     evaluation.contingencies.push(...p.evaluation.contingencies);
     evaluation.degraded.push(...p.evaluation.degraded);
+    notApplicable.push(...p.evaluation.notApplicable ?? []);
     for (const [k, v] of p.samples) samples.set(k, v);
-    for (const [k, v] of p.labels) labels.set(k, v);
+    for (const [k, v] of p.labels) labels2.set(k, v);
   }
-  return { evaluation, samples, labels };
+  if (notApplicable.length) evaluation.notApplicable = notApplicable;
+  else delete evaluation.notApplicable;
+  return { evaluation, samples, labels: labels2 };
 }
-function compileText(text2, path, fp) {
+function problemOf(e) {
+  return { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column };
+}
+async function readSide(deps, rev, path) {
   try {
-    return { graph: compileTopology(parseDesign(text2, path, fp.format ? { format: fp.format } : {})) };
+    return await deps.readAt(rev, path);
+  } catch (e) {
+    if (e instanceof EncodingError) return { error: problemOf(e) };
+    throw e;
+  }
+}
+function compileText(text2, path, format, rValue) {
+  try {
+    const topology = parseDesign(text2, path, format ? { format } : {});
+    const graph = compileTopology(topology);
+    const problem = unsupportedMetric(graph, rValue);
+    if (problem) return { unsupported: { message: `${problem.message} — ${problem.hint}`, line: 0, column: 0 } };
+    return { graph, topology };
   } catch (e) {
     if (isNetbraceError(e) && (e.kind === "design" || e.kind === "limit" || e.kind === "usage")) {
-      return { error: { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column } };
+      return { error: problemOf(e) };
     }
     throw e;
   }
 }
-async function evaluateGraph(g, specs, cuts, request, deps) {
+async function evaluateGraph(g, topology, specs, cuts, request, deps) {
   const evaluate2 = deps.evaluate ?? ((graph, spec) => evaluateDesign(graph, spec));
   const parts = [];
   for (const [i, spec] of specs.entries()) {
@@ -25655,7 +29561,7 @@ async function evaluateGraph(g, specs, cuts, request, deps) {
     notePairedCuts(part, cuts, i);
     parts.push(part);
   }
-  return { graph: g, result: joinEvaluations(parts) };
+  return { graph: g, result: joinEvaluations(parts), topology };
 }
 function validateRequest(request) {
   if (request.mode !== "block" && request.mode !== "inform") throw new UsageError(`mode must be block or inform, not ${String(request.mode)}`);
@@ -25678,7 +29584,8 @@ async function runGate(request, deps) {
   const head = request.worktree ? "worktree" : request.head ?? "HEAD";
   const base = request.eventKind === "schedule" ? void 0 : request.base;
   const { policy, info } = await choosePolicy(request, deps, base, head);
-  const { list: all, scope } = await candidates(request, deps, policy, base, head);
+  const { list: all, scope, note: note2 } = await candidates(request, deps, policy, base, head);
+  if (note2) info.note = info.note ? `${info.note}. ${note2}` : note2;
   const chosen = [...all].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0).filter((c) => !request.part || inPart(c.path, request.part));
   const rules = chosen.map((c) => policyForFile(policy, c.path));
   const seed = request.seed ?? policy.seed;
@@ -25690,34 +29597,42 @@ async function runGate(request, deps) {
     if (c.previousPath !== void 0) input.previousPath = c.previousPath;
     if (fp.format) input.format = fp.format;
     if (c.change !== "deleted") {
-      const headText = await deps.readAt(head, c.path);
+      const headText = await readSide(deps, head, c.path);
       if (headText === null) {
         input.change = "deleted";
       } else {
-        const h = compileText(headText, c.path, fp);
+        const h = typeof headText === "string" ? compileText(headText, c.path, fp.format, fp.rValue) : headText;
         if ("error" in h) input.headError = h.error;
+        else if ("unsupported" in h) input.headUnsupported = h.unsupported;
         else {
           let baseGraph;
+          let baseTopology;
           let same = false;
           if (!thresholdsOnly && c.change !== "added") {
             const basePath = c.previousPath ?? c.path;
-            const baseText = await deps.readAt(base, basePath);
+            const baseText = await readSide(deps, base, basePath);
             if (baseText === headText) {
               same = true;
             } else if (baseText !== null) {
-              const b = compileText(baseText, basePath, fp);
+              const b = typeof baseText === "string" ? compileText(baseText, basePath, basePath === c.path ? fp.format : designFormat(policy, basePath), fp.rValue) : baseText;
               if ("error" in b) input.baseError = b.error;
-              else baseGraph = b.graph;
+              else if ("unsupported" in b) input.baseError = b.unsupported;
+              else {
+                baseGraph = b.graph;
+                baseTopology = b.topology;
+              }
             }
           }
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
-          input.head = await evaluateGraph(h.graph, specs.head, specs.cuts, request, deps);
+          input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
           if (same) input.base = input.head;
-          else if (baseGraph) input.base = await evaluateGraph(baseGraph, specs.base, specs.cuts, request, deps);
+          else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology, specs.base, specs.cuts, request, deps);
         }
       }
     }
-    files.push(compareDesign(input));
+    const judged = compareDesign(input);
+    await addMapAndMend(judged, input, { request, deps, head, ...base !== void 0 ? { base } : {}, seed });
+    files.push(judged);
   }
   const report = {
     version: REPORT_VERSION,
@@ -25738,32 +29653,39 @@ async function runGate(request, deps) {
 }
 
 // src/topology/write-native.ts
-function writeNativeJson(t) {
+var import_yaml7 = __toESM(require_dist(), 1);
+function nativeDocument(t) {
   const doc = {};
   if (t.name !== void 0 || t.description !== void 0) {
     doc.network = { ...t.name !== void 0 ? { name: t.name } : {}, ...t.description !== void 0 ? { description: t.description } : {} };
   }
+  if (t.latencyBudget !== void 0) doc.latency_budget = t.latencyBudget;
   doc.nodes = t.nodes.map((n) => ({
     id: n.id,
     ...n.label !== void 0 ? { label: n.label } : {},
     ...n.kind !== void 0 ? { kind: n.kind } : {},
     ...n.lat !== void 0 && n.lon !== void 0 ? { site: { lat: n.lat, lon: n.lon } } : {},
-    ...n.hardened ? { hardened: true } : {}
+    ...n.hardened ? { hardened: true } : {},
+    ...Object.keys(n.attrs).length > 0 ? { attributes: n.attrs } : {}
   }));
   doc.links = t.links.map((l) => ({
     between: [l.source, l.target],
     id: l.id,
     ...l.length !== void 0 ? { length_km: l.length } : {},
-    ...l.weight !== void 0 ? { weight: l.weight } : {},
     ...l.latency !== void 0 ? { latency_ms: l.latency } : {},
     ...l.capacity !== void 0 ? { capacity_gbps: l.capacity } : {},
+    ...l.weight !== void 0 ? { weight: l.weight } : {},
     ...l.riskGroups.length > 0 ? { risk_groups: [...l.riskGroups] } : {},
-    ...l.hardened ? { hardened: true } : {}
+    ...l.hardened ? { hardened: true } : {},
+    ...Object.keys(l.attrs).length > 0 ? { attributes: l.attrs } : {}
   }));
   if (t.riskGroups.length > 0) doc.risk_groups = t.riskGroups.map((r) => ({ id: r.id, ...r.description !== void 0 ? { description: r.description } : {} }));
   if (t.demands.length > 0) doc.demands = t.demands.map((d) => ({ between: [d.source, d.target], volume: d.volume }));
-  if (t.latencyBudget !== void 0) doc.latency_budget = t.latencyBudget;
-  return `${JSON.stringify(doc, null, 2)}
+  if (Object.keys(t.metadata).length > 0) doc.metadata = t.metadata;
+  return doc;
+}
+function writeNativeJson(t) {
+  return `${JSON.stringify(nativeDocument(t), null, 2)}
 `;
 }
 
@@ -25800,7 +29722,7 @@ function toGraph(t) {
   }
   return g;
 }
-function num(v) {
+function num2(v) {
   return typeof v === "number" && Number.isFinite(v) ? v : void 0;
 }
 function lineOf(v, fallback) {
@@ -25822,7 +29744,7 @@ function fromGraph(g, options = {}) {
       pos: lineOf(a.line, i),
       ...typeof a.label === "string" ? { label: a.label } : {},
       ...typeof a.kind === "string" ? { kind: a.kind } : {},
-      ...num(a.lat) !== void 0 && num(a.lon) !== void 0 ? { lat: num(a.lat), lon: num(a.lon) } : {},
+      ...num2(a.lat) !== void 0 && num2(a.lon) !== void 0 ? { lat: num2(a.lat), lon: num2(a.lon) } : {},
       hardened: a.hardened === true,
       attrs
     });
@@ -25834,10 +29756,10 @@ function fromGraph(g, options = {}) {
     for (const [k, v] of Object.entries(a)) if (!known.has(k)) attrs[k] = v;
     i++;
     const pos = lineOf(a.line, i);
-    const length = num(a.length_km);
-    const latency = num(a.latency_ms);
-    const capacity = num(a.capacity_gbps);
-    const weight = num(a.weight);
+    const length = num2(a.length_km);
+    const latency = num2(a.latency_ms);
+    const capacity = num2(a.capacity_gbps);
+    const weight = num2(a.weight);
     b.addLink({
       ...typeof a.id === "string" && a.id !== "" ? { id: a.id } : {},
       source: String(source),

@@ -130,24 +130,24 @@ function parseCommandArgs(command, args, options, allowPositionals = true) {
     throw new UsageError(message, `run "netbrace ${command} --help" for the options`);
   }
 }
-function wholeNumber(name, value, min, max = Number.MAX_SAFE_INTEGER) {
-  if (value === void 0) return void 0;
-  if (!/^[0-9]+$/.test(value) || Number(value) < min || Number(value) > max) {
+function wholeNumber(name, value2, min, max = Number.MAX_SAFE_INTEGER) {
+  if (value2 === void 0) return void 0;
+  if (!/^[0-9]+$/.test(value2) || Number(value2) < min || Number(value2) > max) {
     const range = max === Number.MAX_SAFE_INTEGER ? `≥ ${min}` : `from ${min} to ${max}`;
-    throw new UsageError(`${name} must be a whole number ${range}, not "${value}"`);
+    throw new UsageError(`${name} must be a whole number ${range}, not "${value2}"`);
   }
-  return Number(value);
+  return Number(value2);
 }
-function finiteNumber(name, value, check, what) {
-  if (value === void 0) return void 0;
-  const x = Number(value);
-  if (value.trim() === "" || !Number.isFinite(x) || !check(x)) throw new UsageError(`${name} must be ${what}, not "${value}"`);
+function finiteNumber(name, value2, check, what) {
+  if (value2 === void 0) return void 0;
+  const x = Number(value2);
+  if (value2.trim() === "" || !Number.isFinite(x) || !check(x)) throw new UsageError(`${name} must be ${what}, not "${value2}"`);
   return x;
 }
-function choice(name, value, allowed, fallback) {
-  if (value === void 0) return fallback;
-  if (!allowed.includes(value)) throw new UsageError(`${name} must be ${allowed.join(", ")}, not "${value}"`);
-  return value;
+function choice(name, value2, allowed, fallback) {
+  if (value2 === void 0) return fallback;
+  if (!allowed.includes(value2)) throw new UsageError(`${name} must be ${allowed.join(", ")}, not "${value2}"`);
+  return value2;
 }
 var init_args = __esm({
   "src/shell/args.ts"() {
@@ -176,6 +176,8 @@ var init_detect = __esm({
       [".net.yaml", "native-yaml"],
       [".net.yml", "native-yaml"],
       [".net.json", "native-json"],
+      [".geojson", "geojson"],
+      [".geo.json", "geojson"],
       [".yaml", "native-yaml"],
       [".yml", "native-yaml"],
       [".json", "native-json"],
@@ -192,18 +194,142 @@ var init_detect = __esm({
       "native-json": "native-json",
       graphml: "graphml",
       gml: "gml",
-      csv: "csv"
+      csv: "csv",
+      geojson: "geojson"
     };
-    FORMAT_CHOICES = "yaml, json, graphml, gml, csv";
+    FORMAT_CHOICES = "yaml, json, graphml, gml, csv, geojson";
+  }
+});
+
+// src/graph/canonical.ts
+function compareIds(a, b) {
+  if (a === b) return 0;
+  return compareParsed(a, WHOLE.test(a) ? stripZeros(a) : null, b, WHOLE.test(b) ? stripZeros(b) : null);
+}
+function compareParsed(a, da, b, db) {
+  if (da !== null && db !== null) {
+    if (da.length !== db.length) return da.length - db.length;
+    if (da !== db) return da < db ? -1 : 1;
+  } else if (da !== null || db !== null) return da !== null ? -1 : 1;
+  return compareCodePoints(a, b);
+}
+function naturalOrder(ids) {
+  const digits = ids.map((id2) => WHOLE.test(id2) ? stripZeros(id2) : null);
+  return ids.map((_, i) => i).sort((a, b) => (ids[a] === ids[b] ? 0 : compareParsed(ids[a], digits[a], ids[b], digits[b])) || a - b);
+}
+function stripZeros(s) {
+  let i = 0;
+  while (i < s.length - 1 && s.charCodeAt(i) === 48) i++;
+  return s.slice(i);
+}
+function compareCodePoints(a, b) {
+  const n = Math.min(a.length, b.length);
+  for (let i = 0; i < n; i++) {
+    const x = a.charCodeAt(i);
+    const y = b.charCodeAt(i);
+    if (x !== y) return unitRank(x) - unitRank(y);
+  }
+  return a.length - b.length;
+}
+function unitRank(u) {
+  if (u >= 55296 && u <= 57343) return u + 8192;
+  if (u >= 57344) return u - 2048;
+  return u;
+}
+function canonicalOrder(t) {
+  const nodes = naturalOrder(t.nodes.map((v) => v.id));
+  const rank = /* @__PURE__ */ new Map();
+  nodes.forEach((i, r) => rank.set(t.nodes[i].id, r));
+  const m = t.links.length;
+  const lo = new Int32Array(m);
+  const hi = new Int32Array(m);
+  t.links.forEach((l, e) => {
+    const s = rank.get(l.source) ?? -1;
+    const d = rank.get(l.target) ?? -1;
+    lo[e] = Math.min(s, d);
+    hi[e] = Math.max(s, d);
+  });
+  const buckets = nodes.length + 1;
+  const start = new Int32Array(buckets + 1);
+  for (let e = 0; e < m; e++) start[lo[e] + 2]++;
+  for (let b = 0; b < buckets; b++) start[b + 1] += start[b];
+  const fill = start.slice(0, buckets);
+  const order = new Int32Array(m);
+  for (let e = 0; e < m; e++) order[fill[lo[e] + 1]++] = e;
+  const cmp = (x, y) => hi[x] - hi[y] || (hi[x] === hi[y] && lo[x] === lo[y] ? compareParallel(t.links[x], t.links[y]) : 0) || x - y;
+  for (let b = 0; b < buckets; b++) {
+    const from = start[b];
+    const to = start[b + 1];
+    if (to - from < 2) continue;
+    if (to - from <= 16) {
+      for (let i = from + 1; i < to; i++) {
+        const e = order[i];
+        let j = i - 1;
+        while (j >= from && cmp(order[j], e) > 0) {
+          order[j + 1] = order[j];
+          j--;
+        }
+        order[j + 1] = e;
+      }
+    } else order.subarray(from, to).sort(cmp);
+  }
+  const links = Array.from(order);
+  const keys = links.map((e) => t.links[e].key);
+  for (let i = 0; i < links.length; ) {
+    let j = i + 1;
+    while (j < links.length && lo[links[j]] === lo[links[i]] && hi[links[j]] === hi[links[i]]) j++;
+    if (j - i > 1) keys.splice(i, j - i, ...keys.slice(i, j).sort(compareKeys));
+    i = j;
+  }
+  const demandEnd = (d, which) => rank.get(d[which]) ?? -1;
+  const demands = t.demands.map((_, i) => i).sort((a, b) => {
+    const x = t.demands[a];
+    const y = t.demands[b];
+    return demandEnd(x, "source") - demandEnd(y, "source") || demandEnd(x, "target") - demandEnd(y, "target") || x.volume - y.volume || a - b;
+  });
+  return { nodes, links, keys, demands, lo, hi };
+}
+function compareKeys(a, b) {
+  return a.length - b.length || compareCodePoints(a, b);
+}
+function compareParallel(a, b) {
+  return compareOptional(a.length, b.length) || compareOptional(a.latency, b.latency) || compareOptional(a.weight, b.weight) || compareOptional(a.capacity, b.capacity) || Number(a.hardened) - Number(b.hardened) || compareCodePoints(groupsKey(a), groupsKey(b)) || compareCodePoints(stableJson(a.attrs), stableJson(b.attrs)) || compareIds(a.id, b.id);
+}
+function compareOptional(a, b) {
+  if (a === b) return 0;
+  if (a === void 0) return -1;
+  if (b === void 0) return 1;
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+function groupsKey(l) {
+  return [...new Set(l.riskGroups)].sort(compareIds).join("\0");
+}
+function stableJson(value2) {
+  if (Array.isArray(value2)) return `[${value2.map(stableJson).join(",")}]`;
+  if (value2 !== null && typeof value2 === "object") {
+    const entries = Object.keys(value2).sort(compareCodePoints).map((k) => `${JSON.stringify(k)}:${stableJson(value2[k])}`);
+    return `{${entries.join(",")}}`;
+  }
+  return JSON.stringify(value2) ?? "null";
+}
+var WHOLE;
+var init_canonical = __esm({
+  "src/graph/canonical.ts"() {
+    "use strict";
+    WHOLE = /^[0-9]+$/;
   }
 });
 
 // src/graph/compact.ts
 function compileTopology(t) {
-  const n = t.nodes.length;
-  const m = t.links.length;
+  const order = canonicalOrder(t);
+  const nodes = order.nodes.map((i) => t.nodes[i]);
+  const links = order.links.map((e) => t.links[e]);
+  const keys = order.keys;
+  const n = nodes.length;
+  const m = links.length;
   const nodeIndex = /* @__PURE__ */ new Map();
-  t.nodes.forEach((node, i) => nodeIndex.set(node.id, i));
+  nodes.forEach((node, i) => nodeIndex.set(node.id, i));
   const linkIndex = /* @__PURE__ */ new Map();
   const linkSource = new Int32Array(m);
   const linkTarget = new Int32Array(m);
@@ -214,10 +340,10 @@ function compileTopology(t) {
   let hasLatency = false;
   let hasWeight = false;
   for (let e = 0; e < m; e++) {
-    const link = t.links[e];
-    const s = nodeIndex.get(link.source);
-    const d = nodeIndex.get(link.target);
-    if (s === void 0 || d === void 0) {
+    const link = links[e];
+    const s = order.lo[order.links[e]];
+    const d = order.hi[order.links[e]];
+    if (s < 0) {
       throw new Error(`link ${link.id} refers to a node that is not in the design`);
     }
     linkSource[e] = s;
@@ -250,45 +376,36 @@ function compileTopology(t) {
     for (let i = 0; i < count; i++) a[i] = pick(i) ?? Number.NaN;
     return a;
   };
-  const hasCoords = t.nodes.some((v) => v.lat !== void 0 && v.lon !== void 0);
+  const hasCoords = nodes.some((v) => v.lat !== void 0 && v.lon !== void 0);
   const nodeHardened = new Uint8Array(n);
   const nodeLine = new Int32Array(n);
-  t.nodes.forEach((v, i) => {
+  nodes.forEach((v, i) => {
     nodeHardened[i] = v.hardened ? 1 : 0;
     nodeLine[i] = v.pos.line;
   });
-  const groupIds = [];
-  const groupLineList = [];
+  const groupLineOf = /* @__PURE__ */ new Map();
+  for (const g of t.riskGroups) if (!groupLineOf.has(g.id)) groupLineOf.set(g.id, g.pos.line);
+  for (const link of t.links) for (const gid of link.riskGroups) if (!groupLineOf.has(gid)) groupLineOf.set(gid, link.pos.line);
+  const groupIds = [...groupLineOf.keys()].sort(compareIds);
   const groupPos = /* @__PURE__ */ new Map();
-  for (const g of t.riskGroups) {
-    if (groupPos.has(g.id)) continue;
-    groupPos.set(g.id, groupIds.length);
-    groupIds.push(g.id);
-    groupLineList.push(g.pos.line);
-  }
+  groupIds.forEach((id2, g) => groupPos.set(id2, g));
   const members = groupIds.map(() => []);
-  t.links.forEach((link, e) => {
+  links.forEach((link, e) => {
     for (const gid of link.riskGroups) {
-      let g = groupPos.get(gid);
-      if (g === void 0) {
-        g = groupIds.length;
-        groupPos.set(gid, g);
-        groupIds.push(gid);
-        groupLineList.push(link.pos.line);
-        members.push([]);
-      }
-      if (members[g][members[g].length - 1] !== e) members[g].push(e);
+      const list2 = members[groupPos.get(gid)];
+      if (list2[list2.length - 1] !== e) list2.push(e);
     }
   });
   const groupOffsets = new Int32Array(groupIds.length + 1);
   members.forEach((list2, g) => groupOffsets[g + 1] = groupOffsets[g] + list2.length);
   const groupLinks = new Int32Array(groupOffsets[groupIds.length]);
   members.forEach((list2, g) => groupLinks.set(list2, groupOffsets[g]));
-  const k = t.demands.length;
+  const demands = order.demands.map((i) => t.demands[i]);
+  const k = demands.length;
   const demandSource = new Int32Array(k);
   const demandTarget = new Int32Array(k);
   const demandVolume = new Float64Array(k);
-  t.demands.forEach((d, i) => {
+  demands.forEach((d, i) => {
     demandSource[i] = nodeIndex.get(d.source) ?? -1;
     demandTarget[i] = nodeIndex.get(d.target) ?? -1;
     demandVolume[i] = d.volume;
@@ -301,22 +418,23 @@ function compileTopology(t) {
     linkOf,
     linkSource,
     linkTarget,
-    length: column((e) => t.links[e].length, hasLength, m),
-    latency: column((e) => t.links[e].latency, hasLatency, m),
-    weight: column((e) => t.links[e].weight, hasWeight, m),
+    length: column((e) => links[e].length, hasLength, m),
+    latency: column((e) => links[e].latency, hasLatency, m),
+    weight: column((e) => links[e].weight, hasWeight, m),
     nodeHardened,
     linkHardened,
-    lat: column((i) => t.nodes[i].lat, hasCoords, n),
-    lon: column((i) => t.nodes[i].lon, hasCoords, n),
-    nodeIds: t.nodes.map((v) => v.id),
-    linkIds: t.links.map((l) => l.id),
-    linkKeys: t.links.map((l) => l.key),
+    lat: column((i) => nodes[i].lat, hasCoords, n),
+    lon: column((i) => nodes[i].lon, hasCoords, n),
+    nodeIds: nodes.map((v) => v.id),
+    nodeLabels: nodes.map((v) => v.label),
+    linkIds: links.map((l) => l.id),
+    linkKeys: keys,
     nodeIndex,
     linkIndex,
     nodeLine,
     linkLine,
     groupIds,
-    groupLine: Int32Array.from(groupLineList),
+    groupLine: Int32Array.from(groupIds, (id2) => groupLineOf.get(id2)),
     groupOffsets,
     groupLinks,
     demandSource,
@@ -325,9 +443,16 @@ function compileTopology(t) {
     latencyBudget: t.latencyBudget
   };
 }
+function nodesByLine(g, nodes) {
+  return [...nodes].sort((a, b) => g.nodeLine[a] - g.nodeLine[b] || a - b);
+}
+function linksByLine(g, links) {
+  return [...links].sort((a, b) => g.linkLine[a] - g.linkLine[b] || a - b);
+}
 var init_compact = __esm({
   "src/graph/compact.ts"() {
     "use strict";
+    init_canonical();
   }
 });
 
@@ -424,10 +549,189 @@ function findCutElements(g, mask = createMask(g)) {
   for (let v = 0; v < n; v++) if (isCut[v]) cutNodes2.push(v);
   return { bridges: bridges2, cutNodes: cutNodes2 };
 }
+function groupLinkMask(g, k, honourHardening, mask = createMask(g)) {
+  for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) {
+    const e = g.groupLinks[p];
+    if (!honourHardening || g.linkHardened[e] === 0) mask.link[e] = 1;
+  }
+  return mask;
+}
+function findStrandingGroups(g, honourHardening, cuts = findCutElements(g)) {
+  const isBridge = new Uint8Array(g.m);
+  for (const e of cuts.bridges) if (!honourHardening || g.linkHardened[e] === 0) isBridge[e] = 1;
+  const intact = findComponents(g).sizes.length;
+  const mask = createMask(g);
+  const out = [];
+  for (let k = 0; k < g.groupIds.length; k++) {
+    mask.link.fill(0);
+    let removed = 0;
+    for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) {
+      const e = g.groupLinks[p];
+      if (isBridge[e] || honourHardening && g.linkHardened[e]) continue;
+      mask.link[e] = 1;
+      removed++;
+    }
+    if (removed > 1 && findComponents(g, mask).sizes.length > intact) out.push(k);
+  }
+  return out;
+}
 var init_structure = __esm({
   "src/graph/structure.ts"() {
     "use strict";
     init_mask();
+  }
+});
+
+// src/decode.ts
+function sequenceLength(b, i) {
+  const c = b[i];
+  if (c < 128) return 1;
+  let need;
+  let lo = 128;
+  let hi = 191;
+  if (c >= 194 && c <= 223) need = 1;
+  else if (c === 224) [need, lo] = [2, 160];
+  else if (c === 237) [need, hi] = [2, 159];
+  else if (c >= 225 && c <= 239) need = 2;
+  else if (c === 240) [need, lo] = [3, 144];
+  else if (c === 244) [need, hi] = [3, 143];
+  else if (c >= 241 && c <= 243) need = 3;
+  else return 0;
+  if (i + need >= b.length) return 0;
+  const b1 = b[i + 1];
+  if (b1 < lo || b1 > hi) return 0;
+  for (let k = 2; k <= need; k++) {
+    const x = b[i + k];
+    if (x < 128 || x > 191) return 0;
+  }
+  return need + 1;
+}
+function firstInvalidUtf8(b, from = 0) {
+  for (let i = from; i < b.length; ) {
+    if (b[i] < 128) {
+      i++;
+      continue;
+    }
+    const len = sequenceLength(b, i);
+    if (len === 0) return i;
+    i += len;
+  }
+  return -1;
+}
+function guessEncoding(b) {
+  let stray = 0;
+  let c1 = false;
+  let utf8 = false;
+  for (let i = 0; i < b.length; ) {
+    if (b[i] < 128) {
+      i++;
+      continue;
+    }
+    const len = sequenceLength(b, i);
+    if (len > 0) {
+      utf8 = true;
+      i += len;
+      continue;
+    }
+    stray++;
+    if (b[i] <= 159) c1 = true;
+    i++;
+  }
+  const page = c1 ? "Windows-1252" : "Latin-1 (ISO 8859-1)";
+  return utf8 ? `it mixes UTF-8 with another encoding, which looks like ${page}` : `it looks like ${page}`;
+}
+function textPosition(text2, at) {
+  let line = 1;
+  let start = 0;
+  for (let i = text2.indexOf("\n"); i >= 0 && i < at; i = text2.indexOf("\n", i + 1)) {
+    line++;
+    start = i + 1;
+  }
+  return { line, column: at - start + 1 };
+}
+function decodeUtf8(bytes, start, file) {
+  const bad = firstInvalidUtf8(bytes, start);
+  if (bad >= 0) {
+    let lineStart = bad;
+    let line = 1;
+    while (lineStart > start && bytes[lineStart - 1] !== 10) lineStart--;
+    for (let i = start; i < lineStart; i++) if (bytes[i] === 10) line++;
+    const column = utf8Decoder.decode(bytes.subarray(lineStart, bad)).length + 1;
+    const hex = bytes[bad].toString(16).toUpperCase().padStart(2, "0");
+    throw new EncodingError(
+      `not UTF-8: byte 0x${hex} at line ${line}, column ${column}; ${guessEncoding(bytes.subarray(start))}`,
+      { file, line, column },
+      HINT
+    );
+  }
+  return utf8Decoder.decode(bytes.subarray(start));
+}
+function decodeUtf16(bytes, littleEndian, file) {
+  const units = bytes.length - 2 >> 1;
+  const chunks = [];
+  const CHUNK = 8192;
+  const buf = new Array(CHUNK);
+  let decoded = "";
+  const fail = (message, unitIndex) => {
+    decoded = chunks.join("") + String.fromCharCode(...buf.slice(0, unitIndex % CHUNK));
+    throw new EncodingError(`not valid UTF-16: ${message}`, { file, ...textPosition(decoded, decoded.length) }, HINT);
+  };
+  for (let u = 0; u < units; u++) {
+    const p = 2 + 2 * u;
+    const code = littleEndian ? bytes[p] | bytes[p + 1] << 8 : bytes[p] << 8 | bytes[p + 1];
+    if (code >= 55296 && code <= 56319) {
+      const q = p + 2;
+      const next = q + 1 < bytes.length ? littleEndian ? bytes[q] | bytes[q + 1] << 8 : bytes[q] << 8 | bytes[q + 1] : -1;
+      if (!(next >= 56320 && next <= 57343)) fail(`a lone surrogate 0x${code.toString(16).toUpperCase()}`, u);
+    } else if (code >= 56320 && code <= 57343) {
+      const prev = u > 0 ? littleEndian ? bytes[p - 2] | bytes[p - 1] << 8 : bytes[p - 2] << 8 | bytes[p - 1] : -1;
+      if (!(prev >= 55296 && prev <= 56319)) fail(`a lone surrogate 0x${code.toString(16).toUpperCase()}`, u);
+    }
+    buf[u % CHUNK] = code;
+    if (u % CHUNK === CHUNK - 1) chunks.push(String.fromCharCode(...buf));
+  }
+  if (units % CHUNK !== 0) chunks.push(String.fromCharCode(...buf.slice(0, units % CHUNK)));
+  const text2 = chunks.join("");
+  if ((bytes.length & 1) === 1) {
+    throw new EncodingError("not valid UTF-16: the file ends in the middle of a character (an odd number of bytes)", { file, ...textPosition(text2, text2.length) }, HINT);
+  }
+  return text2;
+}
+function decodeText(bytes, file) {
+  let text2;
+  if (bytes[0] === 255 && bytes[1] === 254 && bytes[2] === 0 && bytes[3] === 0) {
+    throw new EncodingError("not UTF-8: the file starts with a UTF-32 byte-order mark", { file, line: 1, column: 1 }, HINT);
+  } else if (bytes[0] === 0 && bytes[1] === 0 && bytes[2] === 254 && bytes[3] === 255) {
+    throw new EncodingError("not UTF-8: the file starts with a UTF-32 byte-order mark", { file, line: 1, column: 1 }, HINT);
+  } else if (bytes[0] === 255 && bytes[1] === 254) {
+    text2 = decodeUtf16(bytes, true, file);
+  } else if (bytes[0] === 254 && bytes[1] === 255) {
+    text2 = decodeUtf16(bytes, false, file);
+  } else {
+    const bom = bytes[0] === 239 && bytes[1] === 187 && bytes[2] === 191 ? 3 : 0;
+    text2 = decodeUtf8(bytes, bom, file);
+  }
+  const nul = text2.indexOf("\0");
+  if (nul >= 0) {
+    const { line, column } = textPosition(text2, nul);
+    const sample2 = bytes.subarray(0, 4096);
+    let zeros = 0;
+    for (const x of sample2) if (x === 0) zeros++;
+    const looks = zeros * 4 >= sample2.length ? "it looks like UTF-16 without a byte-order mark" : "it looks like a binary file, not text";
+    throw new EncodingError(`not UTF-8 text: a NUL character at line ${line}, column ${column}; ${looks}`, { file, line, column }, HINT);
+  }
+  return text2;
+}
+var EncodingError, HINT, utf8Decoder;
+var init_decode = __esm({
+  "src/decode.ts"() {
+    "use strict";
+    init_errors();
+    EncodingError = class extends DesignError {
+      name = "EncodingError";
+    };
+    HINT = "save the file as UTF-8";
+    utf8Decoder = new TextDecoder("utf-8", { fatal: true, ignoreBOM: true });
   }
 });
 
@@ -573,10 +877,10 @@ var require_code = __commonJS({
     function interpolate(x) {
       return typeof x == "number" || typeof x == "boolean" || x === null ? x : safeStringify(Array.isArray(x) ? x.join(",") : x);
     }
-    function stringify(x) {
+    function stringify2(x) {
       return new _Code(safeStringify(x));
     }
-    exports.stringify = stringify;
+    exports.stringify = stringify2;
     function safeStringify(x) {
       return JSON.stringify(x).replace(/\u2028/g, "\\u2028").replace(/\u2029/g, "\\u2029");
     }
@@ -652,8 +956,8 @@ var require_scope = __commonJS({
         super(nameStr);
         this.prefix = prefix;
       }
-      setValue(value, { property, itemIndex }) {
-        this.value = value;
+      setValue(value2, { property, itemIndex }) {
+        this.value = value2;
         this.scopePath = (0, code_1._)`.${new code_1.Name(property)}[${itemIndex}]`;
       }
     };
@@ -672,13 +976,13 @@ var require_scope = __commonJS({
       name(prefix) {
         return new ValueScopeName(prefix, this._newName(prefix));
       }
-      value(nameOrPrefix, value) {
+      value(nameOrPrefix, value2) {
         var _a;
-        if (value.ref === void 0)
+        if (value2.ref === void 0)
           throw new Error("CodeGen: ref must be passed in value");
         const name = this.toName(nameOrPrefix);
         const { prefix } = name;
-        const valueKey = (_a = value.key) !== null && _a !== void 0 ? _a : value.ref;
+        const valueKey = (_a = value2.key) !== null && _a !== void 0 ? _a : value2.ref;
         let vs = this._values[prefix];
         if (vs) {
           const _name = vs.get(valueKey);
@@ -690,8 +994,8 @@ var require_scope = __commonJS({
         vs.set(valueKey, name);
         const s = this._scope[prefix] || (this._scope[prefix] = []);
         const itemIndex = s.length;
-        s[itemIndex] = value.ref;
-        name.setValue(value, { property: prefix, itemIndex });
+        s[itemIndex] = value2.ref;
+        name.setValue(value2, { property: prefix, itemIndex });
         return name;
       }
       getValue(prefix, keyOrRef) {
@@ -1161,8 +1465,8 @@ var require_codegen = __commonJS({
         return this._extScope.name(prefix);
       }
       // reserves unique name in the external scope and assigns value to it
-      scopeValue(prefixOrName, value) {
-        const name = this._extScope.value(prefixOrName, value);
+      scopeValue(prefixOrName, value2) {
+        const name = this._extScope.value(prefixOrName, value2);
         const vs = this._values[name.prefix] || (this._values[name.prefix] = /* @__PURE__ */ new Set());
         vs.add(name);
         return name;
@@ -1216,13 +1520,13 @@ var require_codegen = __commonJS({
       // returns code for object literal for the passed argument list of key-value pairs
       object(...keyValues) {
         const code = ["{"];
-        for (const [key, value] of keyValues) {
+        for (const [key, value2] of keyValues) {
           if (code.length > 1)
             code.push(",");
           code.push(key);
-          if (key !== value || this.opts.es5) {
+          if (key !== value2 || this.opts.es5) {
             code.push(":");
-            (0, code_1.addCodeArg)(code, value);
+            (0, code_1.addCodeArg)(code, value2);
           }
         }
         code.push("}");
@@ -1301,10 +1605,10 @@ var require_codegen = __commonJS({
         return this._leafNode(new Break(label));
       }
       // `return` statement
-      return(value) {
+      return(value2) {
         const node = new Return();
         this._blockNode(node);
-        this.code(value);
+        this.code(value2);
         if (node.nodes.length !== 1)
           throw new Error('CodeGen: "return" should have one node');
         return this._endBlockNode(Return);
@@ -2647,10 +2951,10 @@ var require_resolve = __commonJS({
       }
       return count;
     }
-    function getFullPath(resolver, id = "", normalize) {
+    function getFullPath(resolver, id2 = "", normalize) {
       if (normalize !== false)
-        id = normalizeId(id);
-      const p = resolver.parse(id);
+        id2 = normalizeId(id2);
+      const p = resolver.parse(id2);
       return _getFullPath(resolver, p);
     }
     exports.getFullPath = getFullPath;
@@ -2660,13 +2964,13 @@ var require_resolve = __commonJS({
     }
     exports._getFullPath = _getFullPath;
     var TRAILING_SLASH_HASH = /#\/?$/;
-    function normalizeId(id) {
-      return id ? id.replace(TRAILING_SLASH_HASH, "") : "";
+    function normalizeId(id2) {
+      return id2 ? id2.replace(TRAILING_SLASH_HASH, "") : "";
     }
     exports.normalizeId = normalizeId;
-    function resolveUrl(resolver, baseId, id) {
-      id = normalizeId(id);
-      return resolver.resolve(baseId, id);
+    function resolveUrl(resolver, baseId, id2) {
+      id2 = normalizeId(id2);
+      return resolver.resolve(baseId, id2);
     }
     exports.resolveUrl = resolveUrl;
     var ANCHOR = /^[a-z_][-a-z0-9._]*$/i;
@@ -3106,8 +3410,8 @@ var require_validate = __commonJS({
         if (!this.allErrors)
           this.gen.if(cond);
       }
-      setParams(obj, assign) {
-        if (assign)
+      setParams(obj, assign2) {
+        if (assign2)
           Object.assign(this.params, obj);
         else
           this.params = obj;
@@ -3206,11 +3510,11 @@ var require_validate = __commonJS({
         jsonPointer = $data;
         data = names_1.default.rootData;
       } else {
-        const matches3 = RELATIVE_JSON_POINTER.exec($data);
-        if (!matches3)
+        const matches2 = RELATIVE_JSON_POINTER.exec($data);
+        if (!matches2)
           throw new Error(`Invalid JSON-pointer: ${$data}`);
-        const up = +matches3[1];
-        jsonPointer = matches3[2];
+        const up = +matches2[1];
+        jsonPointer = matches2[2];
         if (jsonPointer === "#") {
           if (up >= dataLevel)
             throw new Error(errorMsg("property/index", up));
@@ -3436,8 +3740,8 @@ var require_compile = __commonJS({
       if (Object.keys(root.schema).length > 0 && refPath === baseId) {
         return getJsonPointer.call(this, p, root);
       }
-      const id = (0, resolve_1.normalizeId)(refPath);
-      const schOrRef = this.refs[id] || this.schemas[id];
+      const id2 = (0, resolve_1.normalizeId)(refPath);
+      const schOrRef = this.refs[id2] || this.schemas[id2];
       if (typeof schOrRef == "string") {
         const sch = resolveSchema.call(this, root, schOrRef);
         if (typeof (sch === null || sch === void 0 ? void 0 : sch.schema) !== "object")
@@ -3448,7 +3752,7 @@ var require_compile = __commonJS({
         return;
       if (!schOrRef.validate)
         compileSchema.call(this, schOrRef);
-      if (id === (0, resolve_1.normalizeId)(ref)) {
+      if (id2 === (0, resolve_1.normalizeId)(ref)) {
         const { schema } = schOrRef;
         const { schemaId } = this.opts;
         const schId = schema[schemaId];
@@ -3674,8 +3978,8 @@ var require_utils = __commonJS({
       }
       return ind;
     }
-    function removeDotSegments(path7) {
-      let input = path7;
+    function removeDotSegments(path11) {
+      let input = path11;
       const output = [];
       let nextSlash = -1;
       let len = 0;
@@ -3749,11 +4053,11 @@ var require_utils = __commonJS({
       }
       return output.join("");
     }
-    function removeDotSegmentsRelative(path7) {
-      if (path7 === "" || path7[0] === "/") {
-        return removeDotSegments(path7);
+    function removeDotSegmentsRelative(path11) {
+      if (path11 === "" || path11[0] === "/") {
+        return removeDotSegments(path11);
       }
-      const segments = path7.split("/");
+      const segments = path11.split("/");
       const last = segments.length - 1;
       const output = [];
       let trailingDirectory = false;
@@ -4116,8 +4420,8 @@ var require_schemes = __commonJS({
       }
       if (wsComponent.resourceName) {
         const queryIndex = wsComponent.resourceName.indexOf("?");
-        const path7 = queryIndex === -1 ? wsComponent.resourceName : wsComponent.resourceName.slice(0, queryIndex);
-        wsComponent.path = path7 && path7 !== "/" ? path7 : void 0;
+        const path11 = queryIndex === -1 ? wsComponent.resourceName : wsComponent.resourceName.slice(0, queryIndex);
+        wsComponent.path = path11 && path11 !== "/" ? path11 : void 0;
         wsComponent.query = queryIndex === -1 ? void 0 : wsComponent.resourceName.slice(queryIndex + 1);
         wsComponent.resourceName = void 0;
       }
@@ -4129,11 +4433,11 @@ var require_schemes = __commonJS({
         urnComponent.error = "URN can not be parsed";
         return urnComponent;
       }
-      const matches3 = urnComponent.path.match(URN_REG);
-      if (matches3 && matches3[0] === urnComponent.path) {
+      const matches2 = urnComponent.path.match(URN_REG);
+      if (matches2 && matches2[0] === urnComponent.path) {
         const scheme = options.scheme || urnComponent.scheme || "urn";
-        urnComponent.nid = matches3[1].toLowerCase();
-        urnComponent.nss = matches3[2];
+        urnComponent.nid = matches2[1].toLowerCase();
+        urnComponent.nss = matches2[2];
         const urnScheme = `${scheme}:${options.nid || urnComponent.nid}`;
         const schemeHandler = getSchemeHandler(urnScheme);
         urnComponent.path = void 0;
@@ -4323,50 +4627,50 @@ var require_fast_uri = __commonJS({
       schemelessOptions.skipEscape = true;
       return serialize(resolved, schemelessOptions);
     }
-    function resolveComponent(base, relative, options, skipNormalization) {
+    function resolveComponent(base, relative2, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
         base = parse2(serialize(base, options), options);
-        relative = parse2(serialize(relative, options), options);
+        relative2 = parse2(serialize(relative2, options), options);
       }
       options = options || {};
-      if (!options.tolerant && relative.scheme) {
-        target.scheme = relative.scheme;
-        target.userinfo = relative.userinfo;
-        target.host = relative.host;
-        target.port = relative.port;
-        target.path = removeDotSegments(relative.path || "");
-        target.query = relative.query;
+      if (!options.tolerant && relative2.scheme) {
+        target.scheme = relative2.scheme;
+        target.userinfo = relative2.userinfo;
+        target.host = relative2.host;
+        target.port = relative2.port;
+        target.path = removeDotSegments(relative2.path || "");
+        target.query = relative2.query;
       } else {
-        if (relative.userinfo !== void 0 || relative.host !== void 0 || relative.port !== void 0) {
-          target.userinfo = relative.userinfo;
-          target.host = relative.host;
-          target.port = relative.port;
-          target.path = removeDotSegments(relative.path || "");
-          target.query = relative.query;
+        if (relative2.userinfo !== void 0 || relative2.host !== void 0 || relative2.port !== void 0) {
+          target.userinfo = relative2.userinfo;
+          target.host = relative2.host;
+          target.port = relative2.port;
+          target.path = removeDotSegments(relative2.path || "");
+          target.query = relative2.query;
         } else {
-          if (!relative.path) {
+          if (!relative2.path) {
             target.path = base.path;
-            if (relative.query !== void 0) {
-              target.query = relative.query;
+            if (relative2.query !== void 0) {
+              target.query = relative2.query;
             } else {
               target.query = base.query;
             }
           } else {
-            if (relative.path[0] === "/") {
-              target.path = removeDotSegments(relative.path);
+            if (relative2.path[0] === "/") {
+              target.path = removeDotSegments(relative2.path);
             } else {
               const baseHasAuthority = base.userinfo !== void 0 || base.host !== void 0 || base.port !== void 0;
               if (baseHasAuthority && !base.path) {
-                target.path = "/" + relative.path;
+                target.path = "/" + relative2.path;
               } else if (!base.path) {
-                target.path = relative.path;
+                target.path = relative2.path;
               } else {
-                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative.path;
+                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative2.path;
               }
               target.path = base.scheme === void 0 && !baseHasAuthority && target.path[0] !== "/" ? removeDotSegmentsRelative(target.path) : removeDotSegments(target.path);
             }
-            target.query = relative.query;
+            target.query = relative2.query;
           }
           target.userinfo = base.userinfo;
           target.host = base.host;
@@ -4374,7 +4678,7 @@ var require_fast_uri = __commonJS({
         }
         target.scheme = base.scheme;
       }
-      target.fragment = relative.fragment;
+      target.fragment = relative2.fragment;
       return target;
     }
     function equal(uriA, uriB, options) {
@@ -4454,11 +4758,11 @@ var require_fast_uri = __commonJS({
     var URI_PARSE = /^(?:([^#/:?]+):)?(?:\/\/((?:([^#/?@]*)@)?(\[[^#/?\]]+\]|[^#/:?]*)(?::(\d*))?))?([^#?]*)(?:\?([^#]*))?(?:#((?:.|[\n\r])*))?/u;
     var AUTHORITY_PREFIX = /^(?:[^#/:?]+:)?\/\/([^/?#]*)/;
     var AUTHORITY_INTRODUCER_REGION = /^(?:[^#/:?]+:)?([/\\\t\n\r]*)/;
-    function getParseError(parsed, matches3) {
-      if (matches3[2] !== void 0 && parsed.path && parsed.path[0] !== "/") {
+    function getParseError(parsed2, matches2) {
+      if (matches2[2] !== void 0 && parsed2.path && parsed2.path[0] !== "/") {
         return 'URI path must start with "/" when authority is present.';
       }
-      if (typeof parsed.port === "number" && (parsed.port < 0 || parsed.port > 65535)) {
+      if (typeof parsed2.port === "number" && (parsed2.port < 0 || parsed2.port > 65535)) {
         return "URI port is malformed.";
       }
       return void 0;
@@ -4477,34 +4781,34 @@ var require_fast_uri = __commonJS({
     function isIPLiteral(host) {
       return host[0] === "[" && host[host.length - 1] === "]";
     }
-    function hasMalformedComponentPercentEncoding(matches3) {
-      const host = matches3[4];
-      return hasMalformedPercentEncoding(matches3[3]) || host !== void 0 && !isIPLiteral(host) && hasMalformedPercentEncoding(host) || hasMalformedPercentEncoding(matches3[6]) || hasMalformedPercentEncoding(matches3[7]) || hasMalformedPercentEncoding(matches3[8]);
+    function hasMalformedComponentPercentEncoding(matches2) {
+      const host = matches2[4];
+      return hasMalformedPercentEncoding(matches2[3]) || host !== void 0 && !isIPLiteral(host) && hasMalformedPercentEncoding(host) || hasMalformedPercentEncoding(matches2[6]) || hasMalformedPercentEncoding(matches2[7]) || hasMalformedPercentEncoding(matches2[8]);
     }
-    function canonicalizeHost(parsed, options, schemeHandler, isIP) {
-      if (hasForbiddenDomainHost(parsed, options, schemeHandler, isIP)) {
-        parsed.error = parsed.error || MALFORMED_HOST_ERROR;
+    function canonicalizeHost(parsed2, options, schemeHandler, isIP) {
+      if (hasForbiddenDomainHost(parsed2, options, schemeHandler, isIP)) {
+        parsed2.error = parsed2.error || MALFORMED_HOST_ERROR;
         return true;
       }
-      if (!options.unicodeSupport && (!schemeHandler || !schemeHandler.unicodeSupport) && parsed.host && !isIPLiteral(parsed.host) && (options.domainHost || schemeHandler && schemeHandler.domainHost) && isIP === false && nonSimpleDomain(parsed.host)) {
+      if (!options.unicodeSupport && (!schemeHandler || !schemeHandler.unicodeSupport) && parsed2.host && !isIPLiteral(parsed2.host) && (options.domainHost || schemeHandler && schemeHandler.domainHost) && isIP === false && nonSimpleDomain(parsed2.host)) {
         let url;
         try {
-          url = new URL("http://" + parsed.host);
+          url = new URL("http://" + parsed2.host);
         } catch (e) {
-          parsed.error = parsed.error || "Host's domain name can not be converted to ASCII: " + e;
+          parsed2.error = parsed2.error || "Host's domain name can not be converted to ASCII: " + e;
           return true;
         }
         if (!isHostOnlyURL(url)) {
-          parsed.error = parsed.error || MALFORMED_HOST_ERROR;
+          parsed2.error = parsed2.error || MALFORMED_HOST_ERROR;
           return true;
         }
-        parsed.host = url.hostname;
+        parsed2.host = url.hostname;
       }
       return false;
     }
-    function hasForbiddenDomainHost(parsed, options, schemeHandler, isIP) {
+    function hasForbiddenDomainHost(parsed2, options, schemeHandler, isIP) {
       return Boolean(
-        parsed.host && isIP === false && !isIPLiteral(parsed.host) && (options.domainHost || schemeHandler && schemeHandler.domainHost) && FORBIDDEN_DOMAIN_HOST_CHARACTER.test(parsed.host)
+        parsed2.host && isIP === false && !isIPLiteral(parsed2.host) && (options.domainHost || schemeHandler && schemeHandler.domainHost) && FORBIDDEN_DOMAIN_HOST_CHARACTER.test(parsed2.host)
       );
     }
     function isHostOnlyURL(url) {
@@ -4512,7 +4816,7 @@ var require_fast_uri = __commonJS({
     }
     function parseWithStatus(uri, opts) {
       const options = Object.assign({}, opts);
-      const parsed = {
+      const parsed2 = {
         scheme: void 0,
         userinfo: void 0,
         host: "",
@@ -4537,7 +4841,7 @@ var require_fast_uri = __commonJS({
       }
       const authorityMatch = uri.match(AUTHORITY_PREFIX);
       if (authorityMatch !== null && authorityMatch[1].indexOf("\\") !== -1) {
-        parsed.error = "URI authority must not contain a literal backslash.";
+        parsed2.error = "URI authority must not contain a literal backslash.";
         malformedAuthorityOrPort = true;
       }
       const introducerMatch = uri.match(AUTHORITY_INTRODUCER_REGION);
@@ -4546,104 +4850,104 @@ var require_fast_uri = __commonJS({
         const normalizedRegion = region.replace(/[\t\n\r]/g, "");
         if (normalizedRegion.length >= 2) {
           if (normalizedRegion.slice(0, 2) !== "//") {
-            parsed.error = parsed.error || "URI authority must not contain a literal backslash.";
+            parsed2.error = parsed2.error || "URI authority must not contain a literal backslash.";
             malformedAuthorityOrPort = true;
           } else if (region.length !== normalizedRegion.length) {
-            parsed.error = parsed.error || "URI authority introducer must not contain whitespace.";
+            parsed2.error = parsed2.error || "URI authority introducer must not contain whitespace.";
             malformedAuthorityOrPort = true;
           }
         }
       }
-      const matches3 = uri.match(URI_PARSE);
-      if (matches3) {
-        parsed.scheme = matches3[1];
-        parsed.userinfo = matches3[3];
-        parsed.host = matches3[4];
-        parsed.port = parseInt(matches3[5], 10);
-        parsed.path = matches3[6] || "";
-        parsed.query = matches3[7];
-        parsed.fragment = matches3[8];
-        if (parsed.scheme !== void 0) {
-          if (VALID_SCHEME.test(parsed.scheme)) {
-            parsed.scheme = parsed.scheme.toLowerCase();
+      const matches2 = uri.match(URI_PARSE);
+      if (matches2) {
+        parsed2.scheme = matches2[1];
+        parsed2.userinfo = matches2[3];
+        parsed2.host = matches2[4];
+        parsed2.port = parseInt(matches2[5], 10);
+        parsed2.path = matches2[6] || "";
+        parsed2.query = matches2[7];
+        parsed2.fragment = matches2[8];
+        if (parsed2.scheme !== void 0) {
+          if (VALID_SCHEME.test(parsed2.scheme)) {
+            parsed2.scheme = parsed2.scheme.toLowerCase();
           } else {
-            parsed.error = parsed.error || MALFORMED_SCHEME_ERROR;
+            parsed2.error = parsed2.error || MALFORMED_SCHEME_ERROR;
             malformedScheme = true;
           }
         }
-        malformedPercentEncoding = hasMalformedComponentPercentEncoding(matches3);
+        malformedPercentEncoding = hasMalformedComponentPercentEncoding(matches2);
         if (malformedPercentEncoding) {
-          parsed.error = parsed.error || "URI contains malformed percent-encoding.";
+          parsed2.error = parsed2.error || "URI contains malformed percent-encoding.";
         }
-        if (isNaN(parsed.port)) {
-          parsed.port = matches3[5];
+        if (isNaN(parsed2.port)) {
+          parsed2.port = matches2[5];
         }
-        const parseError = getParseError(parsed, matches3);
+        const parseError = getParseError(parsed2, matches2);
         if (parseError !== void 0) {
-          parsed.error = parsed.error || parseError;
+          parsed2.error = parsed2.error || parseError;
           malformedAuthorityOrPort = true;
         }
-        if (parsed.host) {
-          const ipv4result = isIPv4(parsed.host);
+        if (parsed2.host) {
+          const ipv4result = isIPv4(parsed2.host);
           if (ipv4result === false) {
-            const bracketedIPLiteral = isIPLiteral(parsed.host);
-            const hasIPLiteralBracket = parsed.host.indexOf("[") !== -1 || parsed.host.indexOf("]") !== -1;
-            const ipv6result = normalizeIPv6(parsed.host);
+            const bracketedIPLiteral = isIPLiteral(parsed2.host);
+            const hasIPLiteralBracket = parsed2.host.indexOf("[") !== -1 || parsed2.host.indexOf("]") !== -1;
+            const ipv6result = normalizeIPv6(parsed2.host);
             isIP = ipv6result.isIPV6 || ipv6result.isIPVFuture === true;
             malformedIPLiteral = hasIPLiteralBracket && (!bracketedIPLiteral || ipv6result.error === true);
-            parsed.host = isIP ? ipv6result.host : ipv6result.host.toLowerCase();
+            parsed2.host = isIP ? ipv6result.host : ipv6result.host.toLowerCase();
             if (malformedIPLiteral) {
-              parsed.error = parsed.error || MALFORMED_HOST_ERROR;
+              parsed2.error = parsed2.error || MALFORMED_HOST_ERROR;
               malformedAuthorityOrPort = true;
             }
           } else {
             isIP = true;
           }
         }
-        if (parsed.scheme === void 0 && parsed.userinfo === void 0 && parsed.host === void 0 && parsed.port === void 0 && parsed.query === void 0 && !parsed.path) {
-          parsed.reference = "same-document";
-        } else if (parsed.scheme === void 0) {
-          parsed.reference = "relative";
-        } else if (parsed.fragment === void 0) {
-          parsed.reference = "absolute";
+        if (parsed2.scheme === void 0 && parsed2.userinfo === void 0 && parsed2.host === void 0 && parsed2.port === void 0 && parsed2.query === void 0 && !parsed2.path) {
+          parsed2.reference = "same-document";
+        } else if (parsed2.scheme === void 0) {
+          parsed2.reference = "relative";
+        } else if (parsed2.fragment === void 0) {
+          parsed2.reference = "absolute";
         } else {
-          parsed.reference = "uri";
+          parsed2.reference = "uri";
         }
-        if (options.reference && options.reference !== "suffix" && options.reference !== parsed.reference) {
-          parsed.error = parsed.error || "URI is not a " + options.reference + " reference.";
+        if (options.reference && options.reference !== "suffix" && options.reference !== parsed2.reference) {
+          parsed2.error = parsed2.error || "URI is not a " + options.reference + " reference.";
         }
-        const schemeHandler = getSchemeHandler(options.scheme || parsed.scheme);
+        const schemeHandler = getSchemeHandler(options.scheme || parsed2.scheme);
         if (!malformedIPLiteral) {
-          malformedHost = canonicalizeHost(parsed, options, schemeHandler, isIP);
+          malformedHost = canonicalizeHost(parsed2, options, schemeHandler, isIP);
         }
-        if (uri.indexOf("%") !== -1 && parsed.host !== void 0 && !malformedIPLiteral) {
-          let host = isIP ? parsed.host : normalizePercentEncoding(parsed.host, true);
+        if (uri.indexOf("%") !== -1 && parsed2.host !== void 0 && !malformedIPLiteral) {
+          let host = isIP ? parsed2.host : normalizePercentEncoding(parsed2.host, true);
           if (!isIP) {
             host = normalizePercentEncoding(host.toLowerCase());
           }
-          parsed.host = isIP || options.scheme !== "null" ? reescapeHostDelimiters(host, isIP) : host;
+          parsed2.host = isIP || options.scheme !== "null" ? reescapeHostDelimiters(host, isIP) : host;
         }
         if (!schemeHandler || schemeHandler && !schemeHandler.skipNormalize) {
-          if (parsed.path) {
-            parsed.path = normalizePathEncoding(parsed.path);
+          if (parsed2.path) {
+            parsed2.path = normalizePathEncoding(parsed2.path);
           }
-          if (parsed.query) {
-            parsed.query = normalizeQueryFragmentEncoding(parsed.query);
+          if (parsed2.query) {
+            parsed2.query = normalizeQueryFragmentEncoding(parsed2.query);
           }
-          if (parsed.fragment) {
-            parsed.fragment = normalizeQueryFragmentEncoding(parsed.fragment);
+          if (parsed2.fragment) {
+            parsed2.fragment = normalizeQueryFragmentEncoding(parsed2.fragment);
           }
         }
         if (schemeHandler && schemeHandler.parse) {
-          schemeHandler.parse(parsed, options);
-          if (schemeHandler === SCHEMES.urn && parsed.nid === void 0) {
+          schemeHandler.parse(parsed2, options);
+          if (schemeHandler === SCHEMES.urn && parsed2.nid === void 0) {
             malformedSchemeSpecific = true;
           }
         }
       } else {
-        parsed.error = parsed.error || "URI can not be parsed.";
+        parsed2.error = parsed2.error || "URI can not be parsed.";
       }
-      return { parsed, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme };
+      return { parsed: parsed2, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme };
     }
     function parse2(uri, opts) {
       return parseWithStatus(uri, opts).parsed;
@@ -4652,9 +4956,9 @@ var require_fast_uri = __commonJS({
       return normalizeStringWithStatus(uri, opts).normalized;
     }
     function normalizeStringWithStatus(uri, opts) {
-      const { parsed, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = parseWithStatus(uri, opts);
+      const { parsed: parsed2, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = parseWithStatus(uri, opts);
       return {
-        normalized: malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? uri : serialize(parsed, opts),
+        normalized: malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? uri : serialize(parsed2, opts),
         malformedAuthorityOrPort,
         malformedPercentEncoding,
         malformedSchemeSpecific,
@@ -4666,13 +4970,13 @@ var require_fast_uri = __commonJS({
       if (typeof uri !== "string" && typeof uri !== "object") {
         return void 0;
       }
-      let value;
+      let value2;
       try {
-        value = typeof uri === "string" ? uri : serialize(uri, opts);
+        value2 = typeof uri === "string" ? uri : serialize(uri, opts);
       } catch {
         return void 0;
       }
-      const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value, opts);
+      const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value2, opts);
       return malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? void 0 : normalized;
     }
     var fastUri = {
@@ -4931,15 +5235,15 @@ var require_core = __commonJS({
             this.addSchema(sch, void 0, _meta, _validateSchema);
           return this;
         }
-        let id;
+        let id2;
         if (typeof schema === "object") {
           const { schemaId } = this.opts;
-          id = schema[schemaId];
-          if (id !== void 0 && typeof id != "string") {
+          id2 = schema[schemaId];
+          if (id2 !== void 0 && typeof id2 != "string") {
             throw new Error(`schema ${schemaId} must be string`);
           }
         }
-        key = (0, resolve_1.normalizeId)(key || id);
+        key = (0, resolve_1.normalizeId)(key || id2);
         this._checkUnique(key);
         this.schemas[key] = this._addSchema(schema, _meta, key, _validateSchema, true);
         return this;
@@ -5018,11 +5322,11 @@ var require_core = __commonJS({
           case "object": {
             const cacheKey = schemaKeyRef;
             this._cache.delete(cacheKey);
-            let id = schemaKeyRef[this.opts.schemaId];
-            if (id) {
-              id = (0, resolve_1.normalizeId)(id);
-              delete this.schemas[id];
-              delete this.refs[id];
+            let id2 = schemaKeyRef[this.opts.schemaId];
+            if (id2) {
+              id2 = (0, resolve_1.normalizeId)(id2);
+              delete this.schemas[id2];
+              delete this.refs[id2];
             }
             return this;
           }
@@ -5101,8 +5405,8 @@ var require_core = __commonJS({
         for (const jsonPointer of keywordsJsonPointers) {
           const segments = jsonPointer.split("/").slice(1);
           let keywords = metaSchema;
-          for (const seg of segments)
-            keywords = keywords[seg];
+          for (const seg2 of segments)
+            keywords = keywords[seg2];
           for (const key in rules) {
             const rule = rules[key];
             if (typeof rule != "object")
@@ -5129,10 +5433,10 @@ var require_core = __commonJS({
         }
       }
       _addSchema(schema, meta, baseId, validateSchema = this.opts.validateSchema, addSchema = this.opts.addUsedSchema) {
-        let id;
+        let id2;
         const { schemaId } = this.opts;
         if (typeof schema == "object") {
-          id = schema[schemaId];
+          id2 = schema[schemaId];
         } else {
           if (this.opts.jtd)
             throw new Error("schema must be object");
@@ -5142,7 +5446,7 @@ var require_core = __commonJS({
         let sch = this._cache.get(schema);
         if (sch !== void 0)
           return sch;
-        baseId = (0, resolve_1.normalizeId)(id || baseId);
+        baseId = (0, resolve_1.normalizeId)(id2 || baseId);
         const localRefs = resolve_1.getSchemaRefs.call(this, schema, baseId);
         sch = new compile_1.SchemaEnv({ schema, schemaId, meta, baseId, localRefs });
         this._cache.set(sch.schema, sch);
@@ -5155,9 +5459,9 @@ var require_core = __commonJS({
           this.validateSchema(schema, true);
         return sch;
       }
-      _checkUnique(id) {
-        if (this.schemas[id] || this.refs[id]) {
-          throw new Error(`schema with key or id "${id}" already exists`);
+      _checkUnique(id2) {
+        if (this.schemas[id2] || this.refs[id2]) {
+          throw new Error(`schema with key or id "${id2}" already exists`);
         }
       }
       _compileSchemaEnv(sch) {
@@ -5539,13 +5843,13 @@ var require_ucs2length = __commonJS({
       const len = str.length;
       let length = 0;
       let pos = 0;
-      let value;
+      let value2;
       while (pos < len) {
         length++;
-        value = str.charCodeAt(pos++);
-        if (value >= 55296 && value <= 56319 && pos < len) {
-          value = str.charCodeAt(pos);
-          if ((value & 64512) === 56320)
+        value2 = str.charCodeAt(pos++);
+        if (value2 >= 55296 && value2 <= 56319 && pos < len) {
+          value2 = str.charCodeAt(pos);
+          if ((value2 & 64512) === 56320)
             pos++;
         }
       }
@@ -6927,11 +7231,11 @@ var require_format = __commonJS({
           }
           function getFormat(fmtDef) {
             const code = fmtDef instanceof RegExp ? (0, codegen_1.regexpCode)(fmtDef) : opts.code.formats ? (0, codegen_1._)`${opts.code.formats}${(0, codegen_1.getProperty)(schema)}` : void 0;
-            const fmt = gen.scopeValue("formats", { key: schema, ref: fmtDef, code });
+            const fmt2 = gen.scopeValue("formats", { key: schema, ref: fmtDef, code });
             if (typeof fmtDef == "object" && !(fmtDef instanceof RegExp)) {
-              return [fmtDef.type || "string", fmtDef.validate, (0, codegen_1._)`${fmt}.validate`];
+              return [fmtDef.type || "string", fmtDef.validate, (0, codegen_1._)`${fmt2}.validate`];
             }
-            return ["string", fmtDef, fmt];
+            return ["string", fmtDef, fmt2];
           }
           function validCondition() {
             if (typeof formatDef == "object" && !(formatDef instanceof RegExp) && formatDef.async) {
@@ -7363,10 +7667,10 @@ var require_identity = __commonJS({
     var NODE_TYPE = /* @__PURE__ */ Symbol.for("yaml.node.type");
     var isAlias3 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === ALIAS;
     var isDocument = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === DOC;
-    var isMap3 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === MAP;
-    var isPair2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === PAIR;
-    var isScalar3 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SCALAR2;
-    var isSeq2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SEQ;
+    var isMap7 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === MAP;
+    var isPair3 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === PAIR;
+    var isScalar7 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SCALAR2;
+    var isSeq6 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SEQ;
     function isCollection2(node) {
       if (node && typeof node === "object")
         switch (node[NODE_TYPE]) {
@@ -7387,7 +7691,7 @@ var require_identity = __commonJS({
         }
       return false;
     }
-    var hasAnchor = (node) => (isScalar3(node) || isCollection2(node)) && !!node.anchor;
+    var hasAnchor = (node) => (isScalar7(node) || isCollection2(node)) && !!node.anchor;
     exports.ALIAS = ALIAS;
     exports.DOC = DOC;
     exports.MAP = MAP;
@@ -7399,11 +7703,11 @@ var require_identity = __commonJS({
     exports.isAlias = isAlias3;
     exports.isCollection = isCollection2;
     exports.isDocument = isDocument;
-    exports.isMap = isMap3;
+    exports.isMap = isMap7;
     exports.isNode = isNode;
-    exports.isPair = isPair2;
-    exports.isScalar = isScalar3;
-    exports.isSeq = isSeq2;
+    exports.isPair = isPair3;
+    exports.isScalar = isScalar7;
+    exports.isSeq = isSeq6;
   }
 });
 
@@ -7415,7 +7719,7 @@ var require_visit = __commonJS({
     var BREAK = /* @__PURE__ */ Symbol("break visit");
     var SKIP = /* @__PURE__ */ Symbol("skip children");
     var REMOVE = /* @__PURE__ */ Symbol("remove node");
-    function visit2(node, visitor) {
+    function visit3(node, visitor) {
       const visitor_ = initVisitor(visitor);
       if (identity.isDocument(node)) {
         const cd = visit_(null, node.contents, visitor_, Object.freeze([node]));
@@ -7424,20 +7728,20 @@ var require_visit = __commonJS({
       } else
         visit_(null, node, visitor_, Object.freeze([]));
     }
-    visit2.BREAK = BREAK;
-    visit2.SKIP = SKIP;
-    visit2.REMOVE = REMOVE;
-    function visit_(key, node, visitor, path7) {
-      const ctrl = callVisitor(key, node, visitor, path7);
+    visit3.BREAK = BREAK;
+    visit3.SKIP = SKIP;
+    visit3.REMOVE = REMOVE;
+    function visit_(key, node, visitor, path11) {
+      const ctrl = callVisitor(key, node, visitor, path11);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path7, ctrl);
-        return visit_(key, ctrl, visitor, path7);
+        replaceNode(key, path11, ctrl);
+        return visit_(key, ctrl, visitor, path11);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path7 = Object.freeze(path7.concat(node));
+          path11 = Object.freeze(path11.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = visit_(i, node.items[i], visitor, path7);
+            const ci = visit_(i, node.items[i], visitor, path11);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -7448,13 +7752,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path7 = Object.freeze(path7.concat(node));
-          const ck = visit_("key", node.key, visitor, path7);
+          path11 = Object.freeze(path11.concat(node));
+          const ck = visit_("key", node.key, visitor, path11);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = visit_("value", node.value, visitor, path7);
+          const cv = visit_("value", node.value, visitor, path11);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -7475,17 +7779,17 @@ var require_visit = __commonJS({
     visitAsync.BREAK = BREAK;
     visitAsync.SKIP = SKIP;
     visitAsync.REMOVE = REMOVE;
-    async function visitAsync_(key, node, visitor, path7) {
-      const ctrl = await callVisitor(key, node, visitor, path7);
+    async function visitAsync_(key, node, visitor, path11) {
+      const ctrl = await callVisitor(key, node, visitor, path11);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path7, ctrl);
-        return visitAsync_(key, ctrl, visitor, path7);
+        replaceNode(key, path11, ctrl);
+        return visitAsync_(key, ctrl, visitor, path11);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path7 = Object.freeze(path7.concat(node));
+          path11 = Object.freeze(path11.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = await visitAsync_(i, node.items[i], visitor, path7);
+            const ci = await visitAsync_(i, node.items[i], visitor, path11);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -7496,13 +7800,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path7 = Object.freeze(path7.concat(node));
-          const ck = await visitAsync_("key", node.key, visitor, path7);
+          path11 = Object.freeze(path11.concat(node));
+          const ck = await visitAsync_("key", node.key, visitor, path11);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = await visitAsync_("value", node.value, visitor, path7);
+          const cv = await visitAsync_("value", node.value, visitor, path11);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -7529,23 +7833,23 @@ var require_visit = __commonJS({
       }
       return visitor;
     }
-    function callVisitor(key, node, visitor, path7) {
+    function callVisitor(key, node, visitor, path11) {
       if (typeof visitor === "function")
-        return visitor(key, node, path7);
+        return visitor(key, node, path11);
       if (identity.isMap(node))
-        return visitor.Map?.(key, node, path7);
+        return visitor.Map?.(key, node, path11);
       if (identity.isSeq(node))
-        return visitor.Seq?.(key, node, path7);
+        return visitor.Seq?.(key, node, path11);
       if (identity.isPair(node))
-        return visitor.Pair?.(key, node, path7);
+        return visitor.Pair?.(key, node, path11);
       if (identity.isScalar(node))
-        return visitor.Scalar?.(key, node, path7);
+        return visitor.Scalar?.(key, node, path11);
       if (identity.isAlias(node))
-        return visitor.Alias?.(key, node, path7);
+        return visitor.Alias?.(key, node, path11);
       return void 0;
     }
-    function replaceNode(key, path7, node) {
-      const parent = path7[path7.length - 1];
+    function replaceNode(key, path11, node) {
+      const parent = path11[path11.length - 1];
       if (identity.isCollection(parent)) {
         parent.items[key] = node;
       } else if (identity.isPair(parent)) {
@@ -7560,7 +7864,7 @@ var require_visit = __commonJS({
         throw new Error(`Cannot replace node with ${pt} parent`);
       }
     }
-    exports.visit = visit2;
+    exports.visit = visit3;
     exports.visitAsync = visitAsync;
   }
 });
@@ -7570,7 +7874,7 @@ var require_directives = __commonJS({
   "node_modules/yaml/dist/doc/directives.js"(exports) {
     "use strict";
     var identity = require_identity();
-    var visit2 = require_visit();
+    var visit3 = require_visit();
     var escapeChars = {
       "!": "%21",
       ",": "%2C",
@@ -7714,7 +8018,7 @@ var require_directives = __commonJS({
         let tagNames;
         if (doc && tagEntries.length > 0 && identity.isNode(doc.contents)) {
           const tags = {};
-          visit2.visit(doc.contents, (_key, node) => {
+          visit3.visit(doc.contents, (_key, node) => {
             if (identity.isNode(node) && node.tag)
               tags[node.tag] = true;
           });
@@ -7741,7 +8045,7 @@ var require_anchors = __commonJS({
   "node_modules/yaml/dist/doc/anchors.js"(exports) {
     "use strict";
     var identity = require_identity();
-    var visit2 = require_visit();
+    var visit3 = require_visit();
     function anchorIsValid(anchor) {
       if (/[\x00-\x19\s,[\]{}]/.test(anchor)) {
         const sa = JSON.stringify(anchor);
@@ -7752,7 +8056,7 @@ var require_anchors = __commonJS({
     }
     function anchorNames(root) {
       const anchors = /* @__PURE__ */ new Set();
-      visit2.visit(root, {
+      visit3.visit(root, {
         Value(_key, node) {
           if (node.anchor)
             anchors.add(node.anchor);
@@ -7861,26 +8165,26 @@ var require_toJS = __commonJS({
   "node_modules/yaml/dist/nodes/toJS.js"(exports) {
     "use strict";
     var identity = require_identity();
-    function toJS(value, arg, ctx) {
-      if (Array.isArray(value))
-        return value.map((v, i) => toJS(v, String(i), ctx));
-      if (value && typeof value.toJSON === "function") {
-        if (!ctx || !identity.hasAnchor(value))
-          return value.toJSON(arg, ctx);
+    function toJS(value2, arg, ctx) {
+      if (Array.isArray(value2))
+        return value2.map((v, i) => toJS(v, String(i), ctx));
+      if (value2 && typeof value2.toJSON === "function") {
+        if (!ctx || !identity.hasAnchor(value2))
+          return value2.toJSON(arg, ctx);
         const data = { aliasCount: 0, count: 1, res: void 0 };
-        ctx.anchors.set(value, data);
+        ctx.anchors.set(value2, data);
         ctx.onCreate = (res2) => {
           data.res = res2;
           delete ctx.onCreate;
         };
-        const res = value.toJSON(arg, ctx);
+        const res = value2.toJSON(arg, ctx);
         if (ctx.onCreate)
           ctx.onCreate(res);
         return res;
       }
-      if (typeof value === "bigint" && !ctx?.keep)
-        return Number(value);
-      return value;
+      if (typeof value2 === "bigint" && !ctx?.keep)
+        return Number(value2);
+      return value2;
     }
     exports.toJS = toJS;
   }
@@ -7932,7 +8236,7 @@ var require_Alias = __commonJS({
   "node_modules/yaml/dist/nodes/Alias.js"(exports) {
     "use strict";
     var anchors = require_anchors();
-    var visit2 = require_visit();
+    var visit3 = require_visit();
     var identity = require_identity();
     var Node = require_Node();
     var toJS = require_toJS();
@@ -7958,7 +8262,7 @@ var require_Alias = __commonJS({
           nodes = ctx.aliasResolveCache;
         } else {
           nodes = [];
-          visit2.visit(doc, {
+          visit3.visit(doc, {
             Node: (_key, node) => {
               if (identity.isAlias(node) || identity.hasAnchor(node))
                 nodes.push(node);
@@ -8052,11 +8356,11 @@ var require_Scalar = __commonJS({
     var identity = require_identity();
     var Node = require_Node();
     var toJS = require_toJS();
-    var isScalarValue = (value) => !value || typeof value !== "function" && typeof value !== "object";
+    var isScalarValue = (value2) => !value2 || typeof value2 !== "function" && typeof value2 !== "object";
     var Scalar = class extends Node.NodeBase {
-      constructor(value) {
+      constructor(value2) {
         super(identity.SCALAR);
-        this.value = value;
+        this.value = value2;
       }
       toJSON(arg, ctx) {
         return ctx?.keep ? this.value : toJS.toJS(this.value, arg, ctx);
@@ -8083,7 +8387,7 @@ var require_createNode = __commonJS({
     var identity = require_identity();
     var Scalar = require_Scalar();
     var defaultTagPrefix = "tag:yaml.org,2002:";
-    function findTagObject(value, tagName, tags) {
+    function findTagObject(value2, tagName, tags) {
       if (tagName) {
         const match = tags.filter((t) => t.tag === tagName);
         const tagObj = match.find((t) => !t.format) ?? match[0];
@@ -8091,53 +8395,53 @@ var require_createNode = __commonJS({
           throw new Error(`Tag ${tagName} not found`);
         return tagObj;
       }
-      return tags.find((t) => t.identify?.(value) && !t.format);
+      return tags.find((t) => t.identify?.(value2) && !t.format);
     }
-    function createNode(value, tagName, ctx) {
-      if (identity.isDocument(value))
-        value = value.contents;
-      if (identity.isNode(value))
-        return value;
-      if (identity.isPair(value)) {
+    function createNode(value2, tagName, ctx) {
+      if (identity.isDocument(value2))
+        value2 = value2.contents;
+      if (identity.isNode(value2))
+        return value2;
+      if (identity.isPair(value2)) {
         const map = ctx.schema[identity.MAP].createNode?.(ctx.schema, null, ctx);
-        map.items.push(value);
+        map.items.push(value2);
         return map;
       }
-      if (value instanceof String || value instanceof Number || value instanceof Boolean || typeof BigInt !== "undefined" && value instanceof BigInt) {
-        value = value.valueOf();
+      if (value2 instanceof String || value2 instanceof Number || value2 instanceof Boolean || typeof BigInt !== "undefined" && value2 instanceof BigInt) {
+        value2 = value2.valueOf();
       }
       const { aliasDuplicateObjects, onAnchor, onTagObj, schema, sourceObjects } = ctx;
       let ref = void 0;
-      if (aliasDuplicateObjects && value && typeof value === "object") {
-        ref = sourceObjects.get(value);
+      if (aliasDuplicateObjects && value2 && typeof value2 === "object") {
+        ref = sourceObjects.get(value2);
         if (ref) {
-          ref.anchor ?? (ref.anchor = onAnchor(value));
+          ref.anchor ?? (ref.anchor = onAnchor(value2));
           return new Alias.Alias(ref.anchor);
         } else {
           ref = { anchor: null, node: null };
-          sourceObjects.set(value, ref);
+          sourceObjects.set(value2, ref);
         }
       }
       if (tagName?.startsWith("!!"))
         tagName = defaultTagPrefix + tagName.slice(2);
-      let tagObj = findTagObject(value, tagName, schema.tags);
+      let tagObj = findTagObject(value2, tagName, schema.tags);
       if (!tagObj) {
-        if (value && typeof value.toJSON === "function") {
-          value = value.toJSON();
+        if (value2 && typeof value2.toJSON === "function") {
+          value2 = value2.toJSON();
         }
-        if (!value || typeof value !== "object") {
-          const node2 = new Scalar.Scalar(value);
+        if (!value2 || typeof value2 !== "object") {
+          const node2 = new Scalar.Scalar(value2);
           if (ref)
             ref.node = node2;
           return node2;
         }
-        tagObj = value instanceof Map ? schema[identity.MAP] : Symbol.iterator in Object(value) ? schema[identity.SEQ] : schema[identity.MAP];
+        tagObj = value2 instanceof Map ? schema[identity.MAP] : Symbol.iterator in Object(value2) ? schema[identity.SEQ] : schema[identity.MAP];
       }
       if (onTagObj) {
         onTagObj(tagObj);
         delete ctx.onTagObj;
       }
-      const node = tagObj?.createNode ? tagObj.createNode(ctx.schema, value, ctx) : typeof tagObj?.nodeClass?.from === "function" ? tagObj.nodeClass.from(ctx.schema, value, ctx) : new Scalar.Scalar(value);
+      const node = tagObj?.createNode ? tagObj.createNode(ctx.schema, value2, ctx) : typeof tagObj?.nodeClass?.from === "function" ? tagObj.nodeClass.from(ctx.schema, value2, ctx) : new Scalar.Scalar(value2);
       if (tagName)
         node.tag = tagName;
       else if (!tagObj.default)
@@ -8157,10 +8461,10 @@ var require_Collection = __commonJS({
     var createNode = require_createNode();
     var identity = require_identity();
     var Node = require_Node();
-    function collectionFromPath(schema, path7, value) {
-      let v = value;
-      for (let i = path7.length - 1; i >= 0; --i) {
-        const k = path7[i];
+    function collectionFromPath(schema, path11, value2) {
+      let v = value2;
+      for (let i = path11.length - 1; i >= 0; --i) {
+        const k = path11[i];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
           const a = [];
           a[k] = v;
@@ -8179,7 +8483,7 @@ var require_Collection = __commonJS({
         sourceObjects: /* @__PURE__ */ new Map()
       });
     }
-    var isEmptyPath = (path7) => path7 == null || typeof path7 === "object" && !!path7[Symbol.iterator]().next().done;
+    var isEmptyPath = (path11) => path11 == null || typeof path11 === "object" && !!path11[Symbol.iterator]().next().done;
     var Collection = class extends Node.NodeBase {
       constructor(type, schema) {
         super(type);
@@ -8209,16 +8513,16 @@ var require_Collection = __commonJS({
        * be a Pair instance or a `{ key, value }` object, which may not have a key
        * that already exists in the map.
        */
-      addIn(path7, value) {
-        if (isEmptyPath(path7))
-          this.add(value);
+      addIn(path11, value2) {
+        if (isEmptyPath(path11))
+          this.add(value2);
         else {
-          const [key, ...rest] = path7;
+          const [key, ...rest] = path11;
           const node = this.get(key, true);
           if (identity.isCollection(node))
-            node.addIn(rest, value);
+            node.addIn(rest, value2);
           else if (node === void 0 && this.schema)
-            this.set(key, collectionFromPath(this.schema, rest, value));
+            this.set(key, collectionFromPath(this.schema, rest, value2));
           else
             throw new Error(`Expected YAML collection at ${key}. Remaining path: ${rest}`);
         }
@@ -8227,8 +8531,8 @@ var require_Collection = __commonJS({
        * Removes a value from the collection.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path7) {
-        const [key, ...rest] = path7;
+      deleteIn(path11) {
+        const [key, ...rest] = path11;
         if (rest.length === 0)
           return this.delete(key);
         const node = this.get(key, true);
@@ -8242,8 +8546,8 @@ var require_Collection = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path7, keepScalar) {
-        const [key, ...rest] = path7;
+      getIn(path11, keepScalar) {
+        const [key, ...rest] = path11;
         const node = this.get(key, true);
         if (rest.length === 0)
           return !keepScalar && identity.isScalar(node) ? node.value : node;
@@ -8261,8 +8565,8 @@ var require_Collection = __commonJS({
       /**
        * Checks if the collection includes a value with the key `key`.
        */
-      hasIn(path7) {
-        const [key, ...rest] = path7;
+      hasIn(path11) {
+        const [key, ...rest] = path11;
         if (rest.length === 0)
           return this.has(key);
         const node = this.get(key, true);
@@ -8272,16 +8576,16 @@ var require_Collection = __commonJS({
        * Sets a value in this collection. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path7, value) {
-        const [key, ...rest] = path7;
+      setIn(path11, value2) {
+        const [key, ...rest] = path11;
         if (rest.length === 0) {
-          this.set(key, value);
+          this.set(key, value2);
         } else {
           const node = this.get(key, true);
           if (identity.isCollection(node))
-            node.setIn(rest, value);
+            node.setIn(rest, value2);
           else if (node === void 0 && this.schema)
-            this.set(key, collectionFromPath(this.schema, rest, value));
+            this.set(key, collectionFromPath(this.schema, rest, value2));
           else
             throw new Error(`Expected YAML collection at ${key}. Remaining path: ${rest}`);
         }
@@ -8476,13 +8780,13 @@ var require_stringifyString = __commonJS({
       }
       return true;
     }
-    function doubleQuotedString(value, ctx) {
-      const json = JSON.stringify(value);
+    function doubleQuotedString(value2, ctx) {
+      const json = JSON.stringify(value2);
       if (ctx.options.doubleQuotedAsJSON)
         return json;
       const { implicitKey } = ctx;
       const minMultiLineLength = ctx.options.doubleQuotedMinMultiLineLength;
-      const indent = ctx.indent || (containsDocumentMarker(value) ? "  " : "");
+      const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
       let str = "";
       let start = 0;
       for (let i = 0, ch = json[i]; ch; ch = json[++i]) {
@@ -8556,22 +8860,22 @@ var require_stringifyString = __commonJS({
       str = start ? str + json.slice(start) : json;
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_QUOTED, getFoldOptions(ctx, false));
     }
-    function singleQuotedString(value, ctx) {
-      if (ctx.options.singleQuote === false || ctx.implicitKey && value.includes("\n") || /[ \t]\n|\n[ \t]/.test(value))
-        return doubleQuotedString(value, ctx);
-      const indent = ctx.indent || (containsDocumentMarker(value) ? "  " : "");
-      const res = "'" + value.replace(/'/g, "''").replace(/\n+/g, `$&
+    function singleQuotedString(value2, ctx) {
+      if (ctx.options.singleQuote === false || ctx.implicitKey && value2.includes("\n") || /[ \t]\n|\n[ \t]/.test(value2))
+        return doubleQuotedString(value2, ctx);
+      const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
+      const res = "'" + value2.replace(/'/g, "''").replace(/\n+/g, `$&
 ${indent}`) + "'";
       return ctx.implicitKey ? res : foldFlowLines.foldFlowLines(res, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
     }
-    function quotedString(value, ctx) {
+    function quotedString(value2, ctx) {
       const { singleQuote } = ctx.options;
       let qs;
       if (singleQuote === false)
         qs = doubleQuotedString;
       else {
-        const hasDouble = value.includes('"');
-        const hasSingle = value.includes("'");
+        const hasDouble = value2.includes('"');
+        const hasSingle = value2.includes("'");
         if (hasDouble && !hasSingle)
           qs = singleQuotedString;
         else if (hasSingle && !hasDouble)
@@ -8579,7 +8883,7 @@ ${indent}`) + "'";
         else
           qs = singleQuote ? singleQuotedString : doubleQuotedString;
       }
-      return qs(value, ctx);
+      return qs(value2, ctx);
     }
     var blockEndNewlines;
     try {
@@ -8587,27 +8891,27 @@ ${indent}`) + "'";
     } catch {
       blockEndNewlines = /\n+(?!\n|$)/g;
     }
-    function blockString({ comment, type, value }, ctx, onComment, onChompKeep) {
+    function blockString({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
       const { blockQuote, commentString, lineWidth } = ctx.options;
-      if (!blockQuote || /\n[\t ]+$/.test(value)) {
-        return quotedString(value, ctx);
+      if (!blockQuote || /\n[\t ]+$/.test(value2)) {
+        return quotedString(value2, ctx);
       }
-      const indent = ctx.indent || (ctx.forceBlockIndent || containsDocumentMarker(value) ? "  " : "");
-      const literal = blockQuote === "literal" ? true : blockQuote === "folded" || type === Scalar.Scalar.BLOCK_FOLDED ? false : type === Scalar.Scalar.BLOCK_LITERAL ? true : !lineLengthOverLimit(value, lineWidth, indent.length);
-      if (!value)
+      const indent = ctx.indent || (ctx.forceBlockIndent || containsDocumentMarker(value2) ? "  " : "");
+      const literal = blockQuote === "literal" ? true : blockQuote === "folded" || type === Scalar.Scalar.BLOCK_FOLDED ? false : type === Scalar.Scalar.BLOCK_LITERAL ? true : !lineLengthOverLimit(value2, lineWidth, indent.length);
+      if (!value2)
         return literal ? "|\n" : ">\n";
       let chomp;
       let endStart;
-      for (endStart = value.length; endStart > 0; --endStart) {
-        const ch = value[endStart - 1];
+      for (endStart = value2.length; endStart > 0; --endStart) {
+        const ch = value2[endStart - 1];
         if (ch !== "\n" && ch !== "	" && ch !== " ")
           break;
       }
-      let end = value.substring(endStart);
+      let end = value2.substring(endStart);
       const endNlPos = end.indexOf("\n");
       if (endNlPos === -1) {
         chomp = "-";
-      } else if (value === end || endNlPos !== end.length - 1) {
+      } else if (value2 === end || endNlPos !== end.length - 1) {
         chomp = "+";
         if (onChompKeep)
           onChompKeep();
@@ -8615,7 +8919,7 @@ ${indent}`) + "'";
         chomp = "";
       }
       if (end) {
-        value = value.slice(0, -end.length);
+        value2 = value2.slice(0, -end.length);
         if (end[end.length - 1] === "\n")
           end = end.slice(0, -1);
         end = end.replace(blockEndNewlines, `$&${indent}`);
@@ -8623,8 +8927,8 @@ ${indent}`) + "'";
       let startWithSpace = false;
       let startEnd;
       let startNlPos = -1;
-      for (startEnd = 0; startEnd < value.length; ++startEnd) {
-        const ch = value[startEnd];
+      for (startEnd = 0; startEnd < value2.length; ++startEnd) {
+        const ch = value2[startEnd];
         if (ch === " ")
           startWithSpace = true;
         else if (ch === "\n")
@@ -8632,9 +8936,9 @@ ${indent}`) + "'";
         else
           break;
       }
-      let start = value.substring(0, startNlPos < startEnd ? startNlPos + 1 : startEnd);
+      let start = value2.substring(0, startNlPos < startEnd ? startNlPos + 1 : startEnd);
       if (start) {
-        value = value.substring(start.length);
+        value2 = value2.substring(start.length);
         start = start.replace(/\n+/g, `$&${indent}`);
       }
       const indentSize = indent ? "2" : "1";
@@ -8645,7 +8949,7 @@ ${indent}`) + "'";
           onComment();
       }
       if (!literal) {
-        const foldedValue = value.replace(/\n+/g, "\n$&").replace(/(?:^|\n)([\t ].*)(?:([\n\t ]*)\n(?![\n\t ]))?/g, "$1$2").replace(/\n+/g, `$&${indent}`);
+        const foldedValue = value2.replace(/\n+/g, "\n$&").replace(/(?:^|\n)([\t ].*)(?:([\n\t ]*)\n(?![\n\t ]))?/g, "$1$2").replace(/\n+/g, `$&${indent}`);
         let literalFallback = false;
         const foldOptions = getFoldOptions(ctx, true);
         if (blockQuote !== "folded" && type !== Scalar.Scalar.BLOCK_FOLDED) {
@@ -8658,37 +8962,37 @@ ${indent}`) + "'";
           return `>${header2}
 ${indent}${body}`;
       }
-      value = value.replace(/\n+/g, `$&${indent}`);
+      value2 = value2.replace(/\n+/g, `$&${indent}`);
       return `|${header2}
-${indent}${start}${value}${end}`;
+${indent}${start}${value2}${end}`;
     }
     function plainString(item, ctx, onComment, onChompKeep) {
-      const { type, value } = item;
+      const { type, value: value2 } = item;
       const { actualString, implicitKey, indent, indentStep, inFlow } = ctx;
-      if (implicitKey && value.includes("\n") || inFlow && /[[\]{},]/.test(value)) {
-        return quotedString(value, ctx);
+      if (implicitKey && value2.includes("\n") || inFlow && /[[\]{},]/.test(value2)) {
+        return quotedString(value2, ctx);
       }
-      if (/^[\n\t ,[\]{}#&*!|>'"%@`]|^[?-]$|^[?-][ \t]|[\n:][ \t]|[ \t]\n|[\n\t ]#|[\n\t :]$/.test(value)) {
-        return implicitKey || inFlow || !value.includes("\n") ? quotedString(value, ctx) : blockString(item, ctx, onComment, onChompKeep);
+      if (/^[\n\t ,[\]{}#&*!|>'"%@`]|^[?-]$|^[?-][ \t]|[\n:][ \t]|[ \t]\n|[\n\t ]#|[\n\t :]$/.test(value2)) {
+        return implicitKey || inFlow || !value2.includes("\n") ? quotedString(value2, ctx) : blockString(item, ctx, onComment, onChompKeep);
       }
-      if (!implicitKey && !inFlow && type !== Scalar.Scalar.PLAIN && value.includes("\n")) {
+      if (!implicitKey && !inFlow && type !== Scalar.Scalar.PLAIN && value2.includes("\n")) {
         return blockString(item, ctx, onComment, onChompKeep);
       }
-      if (containsDocumentMarker(value)) {
+      if (containsDocumentMarker(value2)) {
         if (indent === "") {
           ctx.forceBlockIndent = true;
           return blockString(item, ctx, onComment, onChompKeep);
         } else if (implicitKey && indent === indentStep) {
-          return quotedString(value, ctx);
+          return quotedString(value2, ctx);
         }
       }
-      const str = value.replace(/\n+/g, `$&
+      const str = value2.replace(/\n+/g, `$&
 ${indent}`);
       if (actualString) {
         const test = (tag) => tag.default && tag.tag !== "tag:yaml.org,2002:str" && tag.test?.test(str);
         const { compat, tags } = ctx.doc.schema;
         if (tags.some(test) || compat?.some(test))
-          return quotedString(value, ctx);
+          return quotedString(value2, ctx);
       }
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
     }
@@ -8820,7 +9124,7 @@ var require_stringify = __commonJS({
         props.push(doc.directives.tagString(tag));
       return props.join(" ");
     }
-    function stringify(item, ctx, onComment, onChompKeep) {
+    function stringify2(item, ctx, onComment, onChompKeep) {
       if (identity.isPair(item))
         return item.toString(ctx, onComment, onChompKeep);
       if (identity.isAlias(item)) {
@@ -8849,7 +9153,7 @@ var require_stringify = __commonJS({
 ${ctx.indent}${str}`;
     }
     exports.createStringifyContext = createStringifyContext;
-    exports.stringify = stringify;
+    exports.stringify = stringify2;
   }
 });
 
@@ -8859,9 +9163,9 @@ var require_stringifyPair = __commonJS({
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
-    var stringify = require_stringify();
+    var stringify2 = require_stringify();
     var stringifyComment = require_stringifyComment();
-    function stringifyPair({ key, value }, ctx, onComment, onChompKeep) {
+    function stringifyPair({ key, value: value2 }, ctx, onComment, onChompKeep) {
       const { allNullValues, doc, indent, indentStep, options: { commentString, indentSeq, simpleKeys } } = ctx;
       let keyComment = identity.isNode(key) && key.comment || null;
       if (simpleKeys) {
@@ -8873,7 +9177,7 @@ var require_stringifyPair = __commonJS({
           throw new Error(msg);
         }
       }
-      let explicitKey = !simpleKeys && (!key || keyComment && value == null && !ctx.inFlow || identity.isCollection(key) || (identity.isScalar(key) ? key.type === Scalar.Scalar.BLOCK_FOLDED || key.type === Scalar.Scalar.BLOCK_LITERAL : typeof key === "object"));
+      let explicitKey = !simpleKeys && (!key || keyComment && value2 == null && !ctx.inFlow || identity.isCollection(key) || (identity.isScalar(key) ? key.type === Scalar.Scalar.BLOCK_FOLDED || key.type === Scalar.Scalar.BLOCK_LITERAL : typeof key === "object"));
       ctx = Object.assign({}, ctx, {
         allNullValues: false,
         implicitKey: !explicitKey && (simpleKeys || !allNullValues),
@@ -8881,19 +9185,19 @@ var require_stringifyPair = __commonJS({
       });
       let keyCommentDone = false;
       let chompKeep = false;
-      let str = stringify.stringify(key, ctx, () => keyCommentDone = true, () => chompKeep = true);
+      let str = stringify2.stringify(key, ctx, () => keyCommentDone = true, () => chompKeep = true);
       if (!explicitKey && !ctx.inFlow && str.length > 1024) {
         if (simpleKeys)
           throw new Error("With simple keys, single line scalar must not span more than 1024 characters");
         explicitKey = true;
       }
       if (ctx.inFlow) {
-        if (allNullValues || value == null) {
+        if (allNullValues || value2 == null) {
           if (keyCommentDone && onComment)
             onComment();
           return str === "" ? "?" : explicitKey ? `? ${str}` : str;
         }
-      } else if (allNullValues && !simpleKeys || value == null && explicitKey) {
+      } else if (allNullValues && !simpleKeys || value2 == null && explicitKey) {
         str = `? ${str}`;
         if (keyComment && !keyCommentDone) {
           str += stringifyComment.lineComment(str, ctx.indent, commentString(keyComment));
@@ -8914,26 +9218,26 @@ ${indent}:`;
           str += stringifyComment.lineComment(str, ctx.indent, commentString(keyComment));
       }
       let vsb, vcb, valueComment;
-      if (identity.isNode(value)) {
-        vsb = !!value.spaceBefore;
-        vcb = value.commentBefore;
-        valueComment = value.comment;
+      if (identity.isNode(value2)) {
+        vsb = !!value2.spaceBefore;
+        vcb = value2.commentBefore;
+        valueComment = value2.comment;
       } else {
         vsb = false;
         vcb = null;
         valueComment = null;
-        if (value && typeof value === "object")
-          value = doc.createNode(value);
+        if (value2 && typeof value2 === "object")
+          value2 = doc.createNode(value2);
       }
       ctx.implicitKey = false;
-      if (!explicitKey && !keyComment && identity.isScalar(value))
+      if (!explicitKey && !keyComment && identity.isScalar(value2))
         ctx.indentAtStart = str.length + 1;
       chompKeep = false;
-      if (!indentSeq && indentStep.length >= 2 && !ctx.inFlow && !explicitKey && identity.isSeq(value) && !value.flow && !value.tag && !value.anchor) {
+      if (!indentSeq && indentStep.length >= 2 && !ctx.inFlow && !explicitKey && identity.isSeq(value2) && !value2.flow && !value2.tag && !value2.anchor) {
         ctx.indent = ctx.indent.substring(2);
       }
       let valueCommentDone = false;
-      const valueStr = stringify.stringify(value, ctx, () => valueCommentDone = true, () => chompKeep = true);
+      const valueStr = stringify2.stringify(value2, ctx, () => valueCommentDone = true, () => chompKeep = true);
       let ws = " ";
       if (keyComment || vsb || vcb) {
         ws = vsb ? "\n" : "";
@@ -8949,11 +9253,11 @@ ${stringifyComment.indentComment(cs, ctx.indent)}`;
           ws += `
 ${ctx.indent}`;
         }
-      } else if (!explicitKey && identity.isCollection(value)) {
+      } else if (!explicitKey && identity.isCollection(value2)) {
         const vs0 = valueStr[0];
         const nl0 = valueStr.indexOf("\n");
         const hasNewline = nl0 !== -1;
-        const flow = ctx.inFlow ?? value.flow ?? value.items.length === 0;
+        const flow = ctx.inFlow ?? value2.flow ?? value2.items.length === 0;
         if (hasNewline || !flow) {
           let hasPropsLine = false;
           if (hasNewline && (vs0 === "&" || vs0 === "!")) {
@@ -9016,7 +9320,7 @@ var require_merge = __commonJS({
     var Scalar = require_Scalar();
     var MERGE_KEY = "<<";
     var merge = {
-      identify: (value) => value === MERGE_KEY || typeof value === "symbol" && value.description === MERGE_KEY,
+      identify: (value2) => value2 === MERGE_KEY || typeof value2 === "symbol" && value2.description === MERGE_KEY,
       default: "key",
       tag: "tag:yaml.org,2002:merge",
       test: /^<<$/,
@@ -9026,8 +9330,8 @@ var require_merge = __commonJS({
       stringify: () => MERGE_KEY
     };
     var isMergeKey = (ctx, key) => (merge.identify(key) || identity.isScalar(key) && (!key.type || key.type === Scalar.Scalar.PLAIN) && merge.identify(key.value)) && ctx?.doc.schema.tags.some((tag) => tag.tag === merge.tag && tag.default);
-    function addMergeToJSMap(ctx, map, value) {
-      const source = resolveAliasValue(ctx, value);
+    function addMergeToJSMap(ctx, map, value2) {
+      const source = resolveAliasValue(ctx, value2);
       if (identity.isSeq(source))
         for (const it of source.items)
           mergeValue(ctx, map, it);
@@ -9037,20 +9341,20 @@ var require_merge = __commonJS({
       else
         mergeValue(ctx, map, source);
     }
-    function mergeValue(ctx, map, value) {
-      const source = resolveAliasValue(ctx, value);
+    function mergeValue(ctx, map, value2) {
+      const source = resolveAliasValue(ctx, value2);
       if (!identity.isMap(source))
         throw new Error("Merge sources must be maps or map aliases");
       const srcMap = source.toJSON(null, ctx, Map);
-      for (const [key, value2] of srcMap) {
+      for (const [key, value3] of srcMap) {
         if (map instanceof Map) {
           if (!map.has(key))
-            map.set(key, value2);
+            map.set(key, value3);
         } else if (map instanceof Set) {
           map.add(key);
         } else if (!Object.prototype.hasOwnProperty.call(map, key)) {
           Object.defineProperty(map, key, {
-            value: value2,
+            value: value3,
             writable: true,
             enumerable: true,
             configurable: true
@@ -9059,8 +9363,8 @@ var require_merge = __commonJS({
       }
       return map;
     }
-    function resolveAliasValue(ctx, value) {
-      return ctx && identity.isAlias(value) ? value.resolve(ctx.doc, ctx) : value;
+    function resolveAliasValue(ctx, value2) {
+      return ctx && identity.isAlias(value2) ? value2.resolve(ctx.doc, ctx) : value2;
     }
     exports.addMergeToJSMap = addMergeToJSMap;
     exports.isMergeKey = isMergeKey;
@@ -9074,23 +9378,23 @@ var require_addPairToJSMap = __commonJS({
     "use strict";
     var log = require_log();
     var merge = require_merge();
-    var stringify = require_stringify();
+    var stringify2 = require_stringify();
     var identity = require_identity();
     var toJS = require_toJS();
-    function addPairToJSMap(ctx, map, { key, value }) {
+    function addPairToJSMap(ctx, map, { key, value: value2 }) {
       if (identity.isNode(key) && key.addToJSMap)
-        key.addToJSMap(ctx, map, value);
+        key.addToJSMap(ctx, map, value2);
       else if (merge.isMergeKey(ctx, key))
-        merge.addMergeToJSMap(ctx, map, value);
+        merge.addMergeToJSMap(ctx, map, value2);
       else {
         const jsKey = toJS.toJS(key, "", ctx);
         if (map instanceof Map) {
-          map.set(jsKey, toJS.toJS(value, jsKey, ctx));
+          map.set(jsKey, toJS.toJS(value2, jsKey, ctx));
         } else if (map instanceof Set) {
           map.add(jsKey);
         } else {
           const stringKey = stringifyKey(key, jsKey, ctx);
-          const jsValue = toJS.toJS(value, stringKey, ctx);
+          const jsValue = toJS.toJS(value2, stringKey, ctx);
           if (stringKey in map)
             Object.defineProperty(map, stringKey, {
               value: jsValue,
@@ -9110,7 +9414,7 @@ var require_addPairToJSMap = __commonJS({
       if (typeof jsKey !== "object")
         return String(jsKey);
       if (identity.isNode(key) && ctx?.doc) {
-        const strCtx = stringify.createStringifyContext(ctx.doc, {});
+        const strCtx = stringify2.createStringifyContext(ctx.doc, {});
         strCtx.anchors = /* @__PURE__ */ new Set();
         for (const node of ctx.anchors.keys())
           strCtx.anchors.add(node.anchor);
@@ -9140,28 +9444,28 @@ var require_Pair = __commonJS({
     var stringifyPair = require_stringifyPair();
     var addPairToJSMap = require_addPairToJSMap();
     var identity = require_identity();
-    function createPair(key, value, ctx) {
+    function createPair(key, value2, ctx) {
       const k = createNode.createNode(key, void 0, ctx);
-      const v = createNode.createNode(value, void 0, ctx);
+      const v = createNode.createNode(value2, void 0, ctx);
       return new Pair(k, v);
     }
     var Pair = class _Pair {
-      constructor(key, value = null) {
+      constructor(key, value2 = null) {
         Object.defineProperty(this, identity.NODE_TYPE, { value: identity.PAIR });
         this.key = key;
-        this.value = value;
+        this.value = value2;
       }
       clone(schema) {
-        let { key, value } = this;
+        let { key, value: value2 } = this;
         if (identity.isNode(key))
           key = key.clone(schema);
-        if (identity.isNode(value))
-          value = value.clone(schema);
-        return new _Pair(key, value);
+        if (identity.isNode(value2))
+          value2 = value2.clone(schema);
+        return new _Pair(key, value2);
       }
       toJSON(_, ctx) {
-        const pair = ctx?.mapAsMap ? /* @__PURE__ */ new Map() : {};
-        return addPairToJSMap.addPairToJSMap(ctx, pair, this);
+        const pair2 = ctx?.mapAsMap ? /* @__PURE__ */ new Map() : {};
+        return addPairToJSMap.addPairToJSMap(ctx, pair2, this);
       }
       toString(ctx, onComment, onChompKeep) {
         return ctx?.doc ? stringifyPair.stringifyPair(this, ctx, onComment, onChompKeep) : JSON.stringify(this);
@@ -9177,12 +9481,12 @@ var require_stringifyCollection = __commonJS({
   "node_modules/yaml/dist/stringify/stringifyCollection.js"(exports) {
     "use strict";
     var identity = require_identity();
-    var stringify = require_stringify();
+    var stringify2 = require_stringify();
     var stringifyComment = require_stringifyComment();
     function stringifyCollection(collection, ctx, options) {
       const flow = ctx.inFlow ?? collection.flow;
-      const stringify2 = flow ? stringifyFlowCollection : stringifyBlockCollection;
-      return stringify2(collection, ctx, options);
+      const stringify3 = flow ? stringifyFlowCollection : stringifyBlockCollection;
+      return stringify3(collection, ctx, options);
     }
     function stringifyBlockCollection({ comment, items }, ctx, { blockItemPrefix, flowChars, itemIndent, onChompKeep, onComment }) {
       const { indent, options: { commentString } } = ctx;
@@ -9207,7 +9511,7 @@ var require_stringifyCollection = __commonJS({
           }
         }
         chompKeep = false;
-        let str2 = stringify.stringify(item, itemCtx, () => comment2 = null, () => chompKeep = true);
+        let str2 = stringify2.stringify(item, itemCtx, () => comment2 = null, () => chompKeep = true);
         if (comment2)
           str2 += stringifyComment.lineComment(str2, itemIndent, commentString(comment2));
         if (chompKeep && comment2)
@@ -9274,7 +9578,7 @@ ${indent}${line}` : "\n";
         }
         if (comment)
           reqNewline = true;
-        let str = stringify.stringify(item, itemCtx, () => comment = null);
+        let str = stringify2.stringify(item, itemCtx, () => comment = null);
         reqNewline || (reqNewline = lines.length > linesAtValue || str.includes("\n"));
         if (i < items.length - 1) {
           str += ",";
@@ -9360,17 +9664,17 @@ var require_YAMLMap = __commonJS({
       static from(schema, obj, ctx) {
         const { keepUndefined, replacer } = ctx;
         const map = new this(schema);
-        const add = (key, value) => {
+        const add = (key, value2) => {
           if (typeof replacer === "function")
-            value = replacer.call(obj, key, value);
+            value2 = replacer.call(obj, key, value2);
           else if (Array.isArray(replacer) && !replacer.includes(key))
             return;
-          if (value !== void 0 || keepUndefined)
-            map.items.push(Pair.createPair(key, value, ctx));
+          if (value2 !== void 0 || keepUndefined)
+            map.items.push(Pair.createPair(key, value2, ctx));
         };
         if (obj instanceof Map) {
-          for (const [key, value] of obj)
-            add(key, value);
+          for (const [key, value2] of obj)
+            add(key, value2);
         } else if (obj && typeof obj === "object") {
           for (const key of Object.keys(obj))
             add(key, obj[key]);
@@ -9386,14 +9690,14 @@ var require_YAMLMap = __commonJS({
        * @param overwrite - If not set `true`, using a key that is already in the
        *   collection will throw. Otherwise, overwrites the previous value.
        */
-      add(pair, overwrite) {
+      add(pair2, overwrite) {
         let _pair;
-        if (identity.isPair(pair))
-          _pair = pair;
-        else if (!pair || typeof pair !== "object" || !("key" in pair)) {
-          _pair = new Pair.Pair(pair, pair?.value);
+        if (identity.isPair(pair2))
+          _pair = pair2;
+        else if (!pair2 || typeof pair2 !== "object" || !("key" in pair2)) {
+          _pair = new Pair.Pair(pair2, pair2?.value);
         } else
-          _pair = new Pair.Pair(pair.key, pair.value);
+          _pair = new Pair.Pair(pair2.key, pair2.value);
         const prev = findPair(this.items, _pair.key);
         const sortEntries = this.schema?.sortMapEntries;
         if (prev) {
@@ -9428,8 +9732,8 @@ var require_YAMLMap = __commonJS({
       has(key) {
         return !!findPair(this.items, key);
       }
-      set(key, value) {
-        this.add(new Pair.Pair(key, value), true);
+      set(key, value2) {
+        this.add(new Pair.Pair(key, value2), true);
       }
       /**
        * @param ctx - Conversion context, originally set in Document#toJS()
@@ -9507,8 +9811,8 @@ var require_YAMLSeq = __commonJS({
         super(identity.SEQ, schema);
         this.items = [];
       }
-      add(value) {
-        this.items.push(value);
+      add(value2) {
+        this.items.push(value2);
       }
       /**
        * Removes a value from the collection.
@@ -9549,15 +9853,15 @@ var require_YAMLSeq = __commonJS({
        * If `key` does not contain a representation of an integer, this will throw.
        * It may be wrapped in a `Scalar`.
        */
-      set(key, value) {
+      set(key, value2) {
         const idx = asItemIndex(key);
         if (typeof idx !== "number")
           throw new Error(`Expected a valid index, not ${key}.`);
         const prev = this.items[idx];
-        if (identity.isScalar(prev) && Scalar.isScalarValue(value))
-          prev.value = value;
+        if (identity.isScalar(prev) && Scalar.isScalarValue(value2))
+          prev.value = value2;
         else
-          this.items[idx] = value;
+          this.items[idx] = value2;
       }
       toJSON(_, ctx) {
         const seq = [];
@@ -9633,7 +9937,7 @@ var require_string = __commonJS({
     "use strict";
     var stringifyString = require_stringifyString();
     var string = {
-      identify: (value) => typeof value === "string",
+      identify: (value2) => typeof value2 === "string",
       default: true,
       tag: "tag:yaml.org,2002:str",
       resolve: (str) => str,
@@ -9652,7 +9956,7 @@ var require_null = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var nullTag = {
-      identify: (value) => value == null,
+      identify: (value2) => value2 == null,
       createNode: () => new Scalar.Scalar(null),
       default: true,
       tag: "tag:yaml.org,2002:null",
@@ -9670,18 +9974,18 @@ var require_bool = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var boolTag = {
-      identify: (value) => typeof value === "boolean",
+      identify: (value2) => typeof value2 === "boolean",
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:[Tt]rue|TRUE|[Ff]alse|FALSE)$/,
       resolve: (str) => new Scalar.Scalar(str[0] === "t" || str[0] === "T"),
-      stringify({ source, value }, ctx) {
+      stringify({ source, value: value2 }, ctx) {
         if (source && boolTag.test.test(source)) {
           const sv = source[0] === "t" || source[0] === "T";
-          if (value === sv)
+          if (value2 === sv)
             return source;
         }
-        return value ? ctx.options.trueStr : ctx.options.falseStr;
+        return value2 ? ctx.options.trueStr : ctx.options.falseStr;
       }
     };
     exports.boolTag = boolTag;
@@ -9692,13 +9996,13 @@ var require_bool = __commonJS({
 var require_stringifyNumber = __commonJS({
   "node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
     "use strict";
-    function stringifyNumber({ format, minFractionDigits, tag, value }) {
-      if (typeof value === "bigint")
-        return String(value);
-      const num2 = typeof value === "number" ? value : Number(value);
-      if (!isFinite(num2))
-        return isNaN(num2) ? ".nan" : num2 < 0 ? "-.inf" : ".inf";
-      let n = Object.is(value, -0) ? "-0" : JSON.stringify(value);
+    function stringifyNumber({ format, minFractionDigits, tag, value: value2 }) {
+      if (typeof value2 === "bigint")
+        return String(value2);
+      const num3 = typeof value2 === "number" ? value2 : Number(value2);
+      if (!isFinite(num3))
+        return isNaN(num3) ? ".nan" : num3 < 0 ? "-.inf" : ".inf";
+      let n = Object.is(value2, -0) ? "-0" : JSON.stringify(value2);
       if (!format && minFractionDigits && (!tag || tag === "tag:yaml.org,2002:float") && /^-?\d/.test(n) && !n.includes("e")) {
         let i = n.indexOf(".");
         if (i < 0) {
@@ -9722,7 +10026,7 @@ var require_float = __commonJS({
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
     var floatNaN = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/,
@@ -9730,19 +10034,19 @@ var require_float = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var floatExp = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "EXP",
       test: /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num3 = Number(node.value);
+        return isFinite(num3) ? num3.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/,
@@ -9766,16 +10070,16 @@ var require_int = __commonJS({
   "node_modules/yaml/dist/schema/core/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
-    var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
+    var intIdentify = (value2) => typeof value2 === "bigint" || Number.isInteger(value2);
     var intResolve = (str, offset, radix, { intAsBigInt }) => intAsBigInt ? BigInt(str) : parseInt(str.substring(offset), radix);
     function intStringify(node, radix, prefix) {
-      const { value } = node;
-      if (intIdentify(value) && value >= 0)
-        return prefix + value.toString(radix);
+      const { value: value2 } = node;
+      if (intIdentify(value2) && value2 >= 0)
+        return prefix + value2.toString(radix);
       return stringifyNumber.stringifyNumber(node);
     }
     var intOct = {
-      identify: (value) => intIdentify(value) && value >= 0,
+      identify: (value2) => intIdentify(value2) && value2 >= 0,
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "OCT",
@@ -9792,7 +10096,7 @@ var require_int = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var intHex = {
-      identify: (value) => intIdentify(value) && value >= 0,
+      identify: (value2) => intIdentify(value2) && value2 >= 0,
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "HEX",
@@ -9841,20 +10145,20 @@ var require_schema2 = __commonJS({
     var Scalar = require_Scalar();
     var map = require_map();
     var seq = require_seq();
-    function intIdentify(value) {
-      return typeof value === "bigint" || Number.isInteger(value);
+    function intIdentify(value2) {
+      return typeof value2 === "bigint" || Number.isInteger(value2);
     }
-    var stringifyJSON = ({ value }) => JSON.stringify(value);
+    var stringifyJSON = ({ value: value2 }) => JSON.stringify(value2);
     var jsonScalars = [
       {
-        identify: (value) => typeof value === "string",
+        identify: (value2) => typeof value2 === "string",
         default: true,
         tag: "tag:yaml.org,2002:str",
         resolve: (str) => str,
         stringify: stringifyJSON
       },
       {
-        identify: (value) => value == null,
+        identify: (value2) => value2 == null,
         createNode: () => new Scalar.Scalar(null),
         default: true,
         tag: "tag:yaml.org,2002:null",
@@ -9863,7 +10167,7 @@ var require_schema2 = __commonJS({
         stringify: stringifyJSON
       },
       {
-        identify: (value) => typeof value === "boolean",
+        identify: (value2) => typeof value2 === "boolean",
         default: true,
         tag: "tag:yaml.org,2002:bool",
         test: /^true$|^false$/,
@@ -9876,10 +10180,10 @@ var require_schema2 = __commonJS({
         tag: "tag:yaml.org,2002:int",
         test: /^-?(?:0|[1-9][0-9]*)$/,
         resolve: (str, _onError, { intAsBigInt }) => intAsBigInt ? BigInt(str) : parseInt(str, 10),
-        stringify: ({ value }) => intIdentify(value) ? value.toString() : JSON.stringify(value)
+        stringify: ({ value: value2 }) => intIdentify(value2) ? value2.toString() : JSON.stringify(value2)
       },
       {
-        identify: (value) => typeof value === "number",
+        identify: (value2) => typeof value2 === "number",
         default: true,
         tag: "tag:yaml.org,2002:float",
         test: /^-?(?:0|[1-9][0-9]*)(?:\.[0-9]*)?(?:[eE][-+]?[0-9]+)?$/,
@@ -9909,7 +10213,7 @@ var require_binary = __commonJS({
     var Scalar = require_Scalar();
     var stringifyString = require_stringifyString();
     var binary = {
-      identify: (value) => value instanceof Uint8Array,
+      identify: (value2) => value2 instanceof Uint8Array,
       // Buffer inherits from Uint8Array
       default: false,
       tag: "tag:yaml.org,2002:binary",
@@ -9935,10 +10239,10 @@ var require_binary = __commonJS({
           return src;
         }
       },
-      stringify({ comment, type, value }, ctx, onComment, onChompKeep) {
-        if (!value)
+      stringify({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
+        if (!value2)
           return "";
-        const buf = value;
+        const buf = value2;
         let str;
         if (typeof node_buffer.Buffer === "function") {
           str = buf instanceof node_buffer.Buffer ? buf.toString("base64") : node_buffer.Buffer.from(buf.buffer).toString("base64");
@@ -9984,16 +10288,16 @@ var require_pairs = __commonJS({
           else if (identity.isMap(item)) {
             if (item.items.length > 1)
               onError("Each pair must have its own sequence indicator");
-            const pair = item.items[0] || new Pair.Pair(new Scalar.Scalar(null));
+            const pair2 = item.items[0] || new Pair.Pair(new Scalar.Scalar(null));
             if (item.commentBefore)
-              pair.key.commentBefore = pair.key.commentBefore ? `${item.commentBefore}
-${pair.key.commentBefore}` : item.commentBefore;
+              pair2.key.commentBefore = pair2.key.commentBefore ? `${item.commentBefore}
+${pair2.key.commentBefore}` : item.commentBefore;
             if (item.comment) {
-              const cn = pair.value ?? pair.key;
+              const cn = pair2.value ?? pair2.key;
               cn.comment = cn.comment ? `${item.comment}
 ${cn.comment}` : item.comment;
             }
-            item = pair;
+            item = pair2;
           }
           seq.items[i] = identity.isPair(item) ? item : new Pair.Pair(item);
         }
@@ -10010,25 +10314,25 @@ ${cn.comment}` : item.comment;
         for (let it of iterable) {
           if (typeof replacer === "function")
             it = replacer.call(iterable, String(i++), it);
-          let key, value;
+          let key, value2;
           if (Array.isArray(it)) {
             if (it.length === 2) {
               key = it[0];
-              value = it[1];
+              value2 = it[1];
             } else
               throw new TypeError(`Expected [key, value] tuple: ${it}`);
           } else if (it && it instanceof Object) {
             const keys = Object.keys(it);
             if (keys.length === 1) {
               key = keys[0];
-              value = it[key];
+              value2 = it[key];
             } else {
               throw new TypeError(`Expected tuple with one key, not ${keys.length} keys`);
             }
           } else {
             key = it;
           }
-          pairs2.items.push(Pair.createPair(key, value, ctx));
+          pairs2.items.push(Pair.createPair(key, value2, ctx));
         }
       return pairs2;
     }
@@ -10074,17 +10378,17 @@ var require_omap = __commonJS({
         const map = /* @__PURE__ */ new Map();
         if (ctx?.onCreate)
           ctx.onCreate(map);
-        for (const pair of this.items) {
-          let key, value;
-          if (identity.isPair(pair)) {
-            key = toJS.toJS(pair.key, "", ctx);
-            value = toJS.toJS(pair.value, key, ctx);
+        for (const pair2 of this.items) {
+          let key, value2;
+          if (identity.isPair(pair2)) {
+            key = toJS.toJS(pair2.key, "", ctx);
+            value2 = toJS.toJS(pair2.value, key, ctx);
           } else {
-            key = toJS.toJS(pair, "", ctx);
+            key = toJS.toJS(pair2, "", ctx);
           }
           if (map.has(key))
             throw new Error("Ordered maps must not include duplicate keys");
-          map.set(key, value);
+          map.set(key, value2);
         }
         return map;
       }
@@ -10098,7 +10402,7 @@ var require_omap = __commonJS({
     YAMLOMap.tag = "tag:yaml.org,2002:omap";
     var omap = {
       collection: "seq",
-      identify: (value) => value instanceof Map,
+      identify: (value2) => value2 instanceof Map,
       nodeClass: YAMLOMap,
       default: false,
       tag: "tag:yaml.org,2002:omap",
@@ -10128,14 +10432,14 @@ var require_bool2 = __commonJS({
   "node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
-    function boolStringify({ value, source }, ctx) {
-      const boolObj = value ? trueTag : falseTag;
+    function boolStringify({ value: value2, source }, ctx) {
+      const boolObj = value2 ? trueTag : falseTag;
       if (source && boolObj.test.test(source))
         return source;
-      return value ? ctx.options.trueStr : ctx.options.falseStr;
+      return value2 ? ctx.options.trueStr : ctx.options.falseStr;
     }
     var trueTag = {
-      identify: (value) => value === true,
+      identify: (value2) => value2 === true,
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:Y|y|[Yy]es|YES|[Tt]rue|TRUE|[Oo]n|ON)$/,
@@ -10143,7 +10447,7 @@ var require_bool2 = __commonJS({
       stringify: boolStringify
     };
     var falseTag = {
-      identify: (value) => value === false,
+      identify: (value2) => value2 === false,
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:N|n|[Nn]o|NO|[Ff]alse|FALSE|[Oo]ff|OFF)$/,
@@ -10162,7 +10466,7 @@ var require_float2 = __commonJS({
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
     var floatNaN = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/,
@@ -10170,19 +10474,19 @@ var require_float2 = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var floatExp = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "EXP",
       test: /^[-+]?(?:[0-9][0-9_]*)?(?:\.[0-9_]*)?[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str.replace(/_/g, "")),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num3 = Number(node.value);
+        return isFinite(num3) ? num3.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^[-+]?(?:[0-9][0-9_]*)?\.[0-9_]*$/,
@@ -10209,7 +10513,7 @@ var require_int2 = __commonJS({
   "node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
-    var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
+    var intIdentify = (value2) => typeof value2 === "bigint" || Number.isInteger(value2);
     function intResolve(str, offset, radix, { intAsBigInt }) {
       const sign2 = str[0];
       if (sign2 === "-" || sign2 === "+")
@@ -10234,10 +10538,10 @@ var require_int2 = __commonJS({
       return sign2 === "-" ? -1 * n : n;
     }
     function intStringify(node, radix, prefix) {
-      const { value } = node;
-      if (intIdentify(value)) {
-        const str = value.toString(radix);
-        return value < 0 ? "-" + prefix + str.substr(1) : prefix + str;
+      const { value: value2 } = node;
+      if (intIdentify(value2)) {
+        const str = value2.toString(radix);
+        return value2 < 0 ? "-" + prefix + str.substr(1) : prefix + str;
       }
       return stringifyNumber.stringifyNumber(node);
     }
@@ -10296,32 +10600,32 @@ var require_set = __commonJS({
         this.tag = _YAMLSet.tag;
       }
       add(key) {
-        let pair;
+        let pair2;
         if (identity.isPair(key))
-          pair = key;
+          pair2 = key;
         else if (key && typeof key === "object" && "key" in key && "value" in key && key.value === null)
-          pair = new Pair.Pair(key.key, null);
+          pair2 = new Pair.Pair(key.key, null);
         else
-          pair = new Pair.Pair(key, null);
-        const prev = YAMLMap.findPair(this.items, pair.key);
+          pair2 = new Pair.Pair(key, null);
+        const prev = YAMLMap.findPair(this.items, pair2.key);
         if (!prev)
-          this.items.push(pair);
+          this.items.push(pair2);
       }
       /**
        * If `keepPair` is `true`, returns the Pair matching `key`.
        * Otherwise, returns the value of that Pair's key.
        */
       get(key, keepPair) {
-        const pair = YAMLMap.findPair(this.items, key);
-        return !keepPair && identity.isPair(pair) ? identity.isScalar(pair.key) ? pair.key.value : pair.key : pair;
+        const pair2 = YAMLMap.findPair(this.items, key);
+        return !keepPair && identity.isPair(pair2) ? identity.isScalar(pair2.key) ? pair2.key.value : pair2.key : pair2;
       }
-      set(key, value) {
-        if (typeof value !== "boolean")
-          throw new Error(`Expected boolean value for set(key, value) in a YAML set, not ${typeof value}`);
+      set(key, value2) {
+        if (typeof value2 !== "boolean")
+          throw new Error(`Expected boolean value for set(key, value) in a YAML set, not ${typeof value2}`);
         const prev = YAMLMap.findPair(this.items, key);
-        if (prev && !value) {
+        if (prev && !value2) {
           this.items.splice(this.items.indexOf(prev), 1);
-        } else if (!prev && value) {
+        } else if (!prev && value2) {
           this.items.push(new Pair.Pair(key));
         }
       }
@@ -10340,10 +10644,10 @@ var require_set = __commonJS({
         const { replacer } = ctx;
         const set2 = new this(schema);
         if (iterable && Symbol.iterator in Object(iterable))
-          for (let value of iterable) {
+          for (let value2 of iterable) {
             if (typeof replacer === "function")
-              value = replacer.call(iterable, value, value);
-            set2.items.push(Pair.createPair(value, null, ctx));
+              value2 = replacer.call(iterable, value2, value2);
+            set2.items.push(Pair.createPair(value2, null, ctx));
           }
         return set2;
       }
@@ -10351,7 +10655,7 @@ var require_set = __commonJS({
     YAMLSet.tag = "tag:yaml.org,2002:set";
     var set = {
       collection: "map",
-      identify: (value) => value instanceof Set,
+      identify: (value2) => value2 instanceof Set,
       nodeClass: YAMLSet,
       default: false,
       tag: "tag:yaml.org,2002:set",
@@ -10380,38 +10684,38 @@ var require_timestamp = __commonJS({
     function parseSexagesimal(str, asBigInt) {
       const sign2 = str[0];
       const parts = sign2 === "-" || sign2 === "+" ? str.substring(1) : str;
-      const num2 = (n) => asBigInt ? BigInt(n) : Number(n);
-      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num2(60) + num2(p), num2(0));
-      return sign2 === "-" ? num2(-1) * res : res;
+      const num3 = (n) => asBigInt ? BigInt(n) : Number(n);
+      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num3(60) + num3(p), num3(0));
+      return sign2 === "-" ? num3(-1) * res : res;
     }
     function stringifySexagesimal(node) {
-      let { value } = node;
-      let num2 = (n) => n;
-      if (typeof value === "bigint")
-        num2 = (n) => BigInt(n);
-      else if (isNaN(value) || !isFinite(value))
+      let { value: value2 } = node;
+      let num3 = (n) => n;
+      if (typeof value2 === "bigint")
+        num3 = (n) => BigInt(n);
+      else if (isNaN(value2) || !isFinite(value2))
         return stringifyNumber.stringifyNumber(node);
       let sign2 = "";
-      if (value < 0) {
+      if (value2 < 0) {
         sign2 = "-";
-        value *= num2(-1);
+        value2 *= num3(-1);
       }
-      const _60 = num2(60);
-      const parts = [value % _60];
-      if (value < 60) {
+      const _60 = num3(60);
+      const parts = [value2 % _60];
+      if (value2 < 60) {
         parts.unshift(0);
       } else {
-        value = (value - parts[0]) / _60;
-        parts.unshift(value % _60);
-        if (value >= 60) {
-          value = (value - parts[0]) / _60;
-          parts.unshift(value);
+        value2 = (value2 - parts[0]) / _60;
+        parts.unshift(value2 % _60);
+        if (value2 >= 60) {
+          value2 = (value2 - parts[0]) / _60;
+          parts.unshift(value2);
         }
       }
       return sign2 + parts.map((n) => String(n).padStart(2, "0")).join(":").replace(/000000\d*$/, "");
     }
     var intTime = {
-      identify: (value) => typeof value === "bigint" || Number.isInteger(value),
+      identify: (value2) => typeof value2 === "bigint" || Number.isInteger(value2),
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "TIME",
@@ -10420,7 +10724,7 @@ var require_timestamp = __commonJS({
       stringify: stringifySexagesimal
     };
     var floatTime = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "TIME",
@@ -10429,7 +10733,7 @@ var require_timestamp = __commonJS({
       stringify: stringifySexagesimal
     };
     var timestamp = {
-      identify: (value) => value instanceof Date,
+      identify: (value2) => value2 instanceof Date,
       default: true,
       tag: "tag:yaml.org,2002:timestamp",
       // If the time zone is omitted, the timestamp is assumed to be specified in UTC. The time part
@@ -10452,7 +10756,7 @@ var require_timestamp = __commonJS({
         }
         return new Date(date);
       },
-      stringify: ({ value }) => value?.toISOString().replace(/(T00:00:00)?\.000Z$/, "") ?? ""
+      stringify: ({ value: value2 }) => value2?.toISOString().replace(/(T00:00:00)?\.000Z$/, "") ?? ""
     };
     exports.floatTime = floatTime;
     exports.intTime = intTime;
@@ -10635,7 +10939,7 @@ var require_stringifyDocument = __commonJS({
   "node_modules/yaml/dist/stringify/stringifyDocument.js"(exports) {
     "use strict";
     var identity = require_identity();
-    var stringify = require_stringify();
+    var stringify2 = require_stringify();
     var stringifyComment = require_stringifyComment();
     function stringifyDocument(doc, options) {
       const lines = [];
@@ -10650,7 +10954,7 @@ var require_stringifyDocument = __commonJS({
       }
       if (hasDirectives)
         lines.push("---");
-      const ctx = stringify.createStringifyContext(doc, options);
+      const ctx = stringify2.createStringifyContext(doc, options);
       const { commentString } = ctx.options;
       if (doc.commentBefore) {
         if (lines.length !== 1)
@@ -10672,7 +10976,7 @@ var require_stringifyDocument = __commonJS({
           contentComment = doc.contents.comment;
         }
         const onChompKeep = contentComment ? void 0 : () => chompKeep = true;
-        let body = stringify.stringify(doc.contents, ctx, () => contentComment = null, onChompKeep);
+        let body = stringify2.stringify(doc.contents, ctx, () => contentComment = null, onChompKeep);
         if (contentComment)
           body += stringifyComment.lineComment(body, "", commentString(contentComment));
         if ((body[0] === "|" || body[0] === ">") && lines[lines.length - 1] === "---") {
@@ -10680,7 +10984,7 @@ var require_stringifyDocument = __commonJS({
         } else
           lines.push(body);
       } else {
-        lines.push(stringify.stringify(doc.contents, ctx));
+        lines.push(stringify2.stringify(doc.contents, ctx));
       }
       if (doc.directives?.docEnd) {
         if (doc.comment) {
@@ -10725,8 +11029,8 @@ var require_Document = __commonJS({
     var applyReviver = require_applyReviver();
     var createNode = require_createNode();
     var directives = require_directives();
-    var Document = class _Document {
-      constructor(value, replacer, options) {
+    var Document2 = class _Document {
+      constructor(value2, replacer, options) {
         this.commentBefore = null;
         this.comment = null;
         this.errors = [];
@@ -10758,7 +11062,7 @@ var require_Document = __commonJS({
         } else
           this.directives = new directives.Directives({ version });
         this.setSchema(version, options);
-        this.contents = value === void 0 ? null : this.createNode(value, _replacer, options);
+        this.contents = value2 === void 0 ? null : this.createNode(value2, _replacer, options);
       }
       /**
        * Create a deep copy of this Document and its contents.
@@ -10783,14 +11087,14 @@ var require_Document = __commonJS({
         return copy;
       }
       /** Adds a value to the document. */
-      add(value) {
+      add(value2) {
         if (assertCollection(this.contents))
-          this.contents.add(value);
+          this.contents.add(value2);
       }
       /** Adds a value to the document. */
-      addIn(path7, value) {
+      addIn(path11, value2) {
         if (assertCollection(this.contents))
-          this.contents.addIn(path7, value);
+          this.contents.addIn(path11, value2);
       }
       /**
        * Create a new `Alias` node, ensuring that the target `node` has the required anchor.
@@ -10809,10 +11113,10 @@ var require_Document = __commonJS({
         }
         return new Alias.Alias(node.anchor);
       }
-      createNode(value, replacer, options) {
+      createNode(value2, replacer, options) {
         let _replacer = void 0;
         if (typeof replacer === "function") {
-          value = replacer.call({ "": value }, "", value);
+          value2 = replacer.call({ "": value2 }, "", value2);
           _replacer = replacer;
         } else if (Array.isArray(replacer)) {
           const keyToStr = (v) => typeof v === "number" || v instanceof String || v instanceof Number;
@@ -10839,7 +11143,7 @@ var require_Document = __commonJS({
           schema: this.schema,
           sourceObjects
         };
-        const node = createNode.createNode(value, tag, ctx);
+        const node = createNode.createNode(value2, tag, ctx);
         if (flow && identity.isCollection(node))
           node.flow = true;
         setAnchors();
@@ -10849,9 +11153,9 @@ var require_Document = __commonJS({
        * Convert a key and a value into a `Pair` using the current schema,
        * recursively wrapping all values as `Scalar` or `Collection` nodes.
        */
-      createPair(key, value, options = {}) {
+      createPair(key, value2, options = {}) {
         const k = this.createNode(key, null, options);
-        const v = this.createNode(value, null, options);
+        const v = this.createNode(value2, null, options);
         return new Pair.Pair(k, v);
       }
       /**
@@ -10865,14 +11169,14 @@ var require_Document = __commonJS({
        * Removes a value from the document.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path7) {
-        if (Collection.isEmptyPath(path7)) {
+      deleteIn(path11) {
+        if (Collection.isEmptyPath(path11)) {
           if (this.contents == null)
             return false;
           this.contents = null;
           return true;
         }
-        return assertCollection(this.contents) ? this.contents.deleteIn(path7) : false;
+        return assertCollection(this.contents) ? this.contents.deleteIn(path11) : false;
       }
       /**
        * Returns item at `key`, or `undefined` if not found. By default unwraps
@@ -10887,10 +11191,10 @@ var require_Document = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path7, keepScalar) {
-        if (Collection.isEmptyPath(path7))
+      getIn(path11, keepScalar) {
+        if (Collection.isEmptyPath(path11))
           return !keepScalar && identity.isScalar(this.contents) ? this.contents.value : this.contents;
-        return identity.isCollection(this.contents) ? this.contents.getIn(path7, keepScalar) : void 0;
+        return identity.isCollection(this.contents) ? this.contents.getIn(path11, keepScalar) : void 0;
       }
       /**
        * Checks if the document includes a value with the key `key`.
@@ -10901,33 +11205,33 @@ var require_Document = __commonJS({
       /**
        * Checks if the document includes a value at `path`.
        */
-      hasIn(path7) {
-        if (Collection.isEmptyPath(path7))
+      hasIn(path11) {
+        if (Collection.isEmptyPath(path11))
           return this.contents !== void 0;
-        return identity.isCollection(this.contents) ? this.contents.hasIn(path7) : false;
+        return identity.isCollection(this.contents) ? this.contents.hasIn(path11) : false;
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      set(key, value) {
+      set(key, value2) {
         if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, [key], value);
+          this.contents = Collection.collectionFromPath(this.schema, [key], value2);
         } else if (assertCollection(this.contents)) {
-          this.contents.set(key, value);
+          this.contents.set(key, value2);
         }
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path7, value) {
-        if (Collection.isEmptyPath(path7)) {
-          this.contents = value;
+      setIn(path11, value2) {
+        if (Collection.isEmptyPath(path11)) {
+          this.contents = value2;
         } else if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, Array.from(path7), value);
+          this.contents = Collection.collectionFromPath(this.schema, Array.from(path11), value2);
         } else if (assertCollection(this.contents)) {
-          this.contents.setIn(path7, value);
+          this.contents.setIn(path11, value2);
         }
       }
       /**
@@ -11015,7 +11319,7 @@ var require_Document = __commonJS({
         return true;
       throw new Error("Expected a YAML collection as document contents");
     }
-    exports.Document = Document;
+    exports.Document = Document2;
   }
 });
 
@@ -11288,7 +11592,7 @@ var require_util_map_includes = __commonJS({
       if (uniqueKeys === false)
         return false;
       const isEqual = typeof uniqueKeys === "function" ? uniqueKeys : (a, b) => a === b || identity.isScalar(a) && identity.isScalar(b) && a.value === b.value;
-      return items.some((pair) => isEqual(pair.key, search));
+      return items.some((pair2) => isEqual(pair2.key, search));
     }
     exports.mapIncludes = mapIncludes;
   }
@@ -11313,7 +11617,7 @@ var require_resolve_block_map = __commonJS({
       let offset = bm.offset;
       let commentEnd = null;
       for (const collItem of bm.items) {
-        const { start, key, sep, value } = collItem;
+        const { start, key, sep, value: value2 } = collItem;
         const keyProps = resolveProps.resolveProps(start, {
           indicator: "explicit-key-ind",
           next: key ?? sep?.[0],
@@ -11356,7 +11660,7 @@ var require_resolve_block_map = __commonJS({
           onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
         const valueProps = resolveProps.resolveProps(sep ?? [], {
           indicator: "map-value-ind",
-          next: value,
+          next: value2,
           offset: keyNode.range[2],
           onError,
           parentIndent: bm.indent,
@@ -11365,19 +11669,19 @@ var require_resolve_block_map = __commonJS({
         offset = valueProps.end;
         if (valueProps.found) {
           if (implicitKey) {
-            if (value?.type === "block-map" && !valueProps.hasNewline)
+            if (value2?.type === "block-map" && !valueProps.hasNewline)
               onError(offset, "BLOCK_AS_IMPLICIT_KEY", "Nested mappings are not allowed in compact mappings");
             if (ctx.options.strict && keyProps.start < valueProps.found.offset - 1024)
               onError(keyNode.range, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit block mapping key");
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : composeEmptyNode(ctx, offset, sep, null, valueProps, onError);
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : composeEmptyNode(ctx, offset, sep, null, valueProps, onError);
           if (ctx.schema.compat)
-            utilFlowIndentCheck.flowIndentCheck(bm.indent, value, onError);
+            utilFlowIndentCheck.flowIndentCheck(bm.indent, value2, onError);
           offset = valueNode.range[2];
-          const pair = new Pair.Pair(keyNode, valueNode);
+          const pair2 = new Pair.Pair(keyNode, valueNode);
           if (ctx.options.keepSourceTokens)
-            pair.srcToken = collItem;
-          map.items.push(pair);
+            pair2.srcToken = collItem;
+          map.items.push(pair2);
         } else {
           if (implicitKey)
             onError(keyNode.range, "MISSING_CHAR", "Implicit map keys need to be followed by map values");
@@ -11387,10 +11691,10 @@ var require_resolve_block_map = __commonJS({
             else
               keyNode.comment = valueProps.comment;
           }
-          const pair = new Pair.Pair(keyNode);
+          const pair2 = new Pair.Pair(keyNode);
           if (ctx.options.keepSourceTokens)
-            pair.srcToken = collItem;
-          map.items.push(pair);
+            pair2.srcToken = collItem;
+          map.items.push(pair2);
         }
       }
       if (commentEnd && commentEnd < offset)
@@ -11418,18 +11722,18 @@ var require_resolve_block_seq = __commonJS({
         ctx.atKey = false;
       let offset = bs.offset;
       let commentEnd = null;
-      for (const { start, value } of bs.items) {
+      for (const { start, value: value2 } of bs.items) {
         const props = resolveProps.resolveProps(start, {
           indicator: "seq-item-ind",
-          next: value,
+          next: value2,
           offset,
           onError,
           parentIndent: bs.indent,
           startOnNewline: true
         });
         if (!props.found) {
-          if (props.anchor || props.tag || value) {
-            if (value?.type === "block-seq")
+          if (props.anchor || props.tag || value2) {
+            if (value2?.type === "block-seq")
               onError(props.end, "BAD_INDENT", "All sequence items must start at the same column");
             else
               onError(offset, "MISSING_CHAR", "Sequence item without - indicator");
@@ -11440,9 +11744,9 @@ var require_resolve_block_seq = __commonJS({
             continue;
           }
         }
-        const node = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, start, null, props, onError);
+        const node = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, start, null, props, onError);
         if (ctx.schema.compat)
-          utilFlowIndentCheck.flowIndentCheck(bs.indent, value, onError);
+          utilFlowIndentCheck.flowIndentCheck(bs.indent, value2, onError);
         offset = node.range[2];
         seq.items.push(node);
       }
@@ -11511,9 +11815,9 @@ var require_resolve_flow_collection = __commonJS({
     var blockMsg = "Block collections are not allowed within flow collections";
     var isBlock = (token) => token && (token.type === "block-map" || token.type === "block-seq");
     function resolveFlowCollection({ composeNode, composeEmptyNode }, ctx, fc, onError, tag) {
-      const isMap3 = fc.start.source === "{";
-      const fcName = isMap3 ? "flow map" : "flow sequence";
-      const NodeClass = tag?.nodeClass ?? (isMap3 ? YAMLMap.YAMLMap : YAMLSeq.YAMLSeq);
+      const isMap7 = fc.start.source === "{";
+      const fcName = isMap7 ? "flow map" : "flow sequence";
+      const NodeClass = tag?.nodeClass ?? (isMap7 ? YAMLMap.YAMLMap : YAMLSeq.YAMLSeq);
       const coll = new NodeClass(ctx.schema);
       coll.flow = true;
       const atRoot = ctx.atRoot;
@@ -11524,7 +11828,7 @@ var require_resolve_flow_collection = __commonJS({
       let offset = fc.offset + fc.start.source.length;
       for (let i = 0; i < fc.items.length; ++i) {
         const collItem = fc.items[i];
-        const { start, key, sep, value } = collItem;
+        const { start, key, sep, value: value2 } = collItem;
         const props = resolveProps.resolveProps(start, {
           flow: fcName,
           indicator: "explicit-key-ind",
@@ -11535,7 +11839,7 @@ var require_resolve_flow_collection = __commonJS({
           startOnNewline: false
         });
         if (!props.found) {
-          if (!props.anchor && !props.tag && !sep && !value) {
+          if (!props.anchor && !props.tag && !sep && !value2) {
             if (i === 0 && props.comma)
               onError(props.comma, "UNEXPECTED_TOKEN", `Unexpected , in ${fcName}`);
             else if (i < fc.items.length - 1)
@@ -11549,7 +11853,7 @@ var require_resolve_flow_collection = __commonJS({
             offset = props.end;
             continue;
           }
-          if (!isMap3 && ctx.options.strict && utilContainsNewline.containsNewline(key))
+          if (!isMap7 && ctx.options.strict && utilContainsNewline.containsNewline(key))
             onError(
               key,
               // checked by containsNewline()
@@ -11589,11 +11893,11 @@ var require_resolve_flow_collection = __commonJS({
             }
           }
         }
-        if (!isMap3 && !sep && !props.found) {
-          const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep, null, props, onError);
+        if (!isMap7 && !sep && !props.found) {
+          const valueNode = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, sep, null, props, onError);
           coll.items.push(valueNode);
           offset = valueNode.range[2];
-          if (isBlock(value))
+          if (isBlock(value2))
             onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
         } else {
           ctx.atKey = true;
@@ -11605,14 +11909,14 @@ var require_resolve_flow_collection = __commonJS({
           const valueProps = resolveProps.resolveProps(sep ?? [], {
             flow: fcName,
             indicator: "map-value-ind",
-            next: value,
+            next: value2,
             offset: keyNode.range[2],
             onError,
             parentIndent: fc.indent,
             startOnNewline: false
           });
           if (valueProps.found) {
-            if (!isMap3 && !props.found && ctx.options.strict) {
+            if (!isMap7 && !props.found && ctx.options.strict) {
               if (sep)
                 for (const st of sep) {
                   if (st === valueProps.found)
@@ -11625,15 +11929,15 @@ var require_resolve_flow_collection = __commonJS({
               if (props.start < valueProps.found.offset - 1024)
                 onError(valueProps.found, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit flow sequence key");
             }
-          } else if (value) {
-            if ("source" in value && value.source?.[0] === ":")
-              onError(value, "MISSING_CHAR", `Missing space after : in ${fcName}`);
+          } else if (value2) {
+            if ("source" in value2 && value2.source?.[0] === ":")
+              onError(value2, "MISSING_CHAR", `Missing space after : in ${fcName}`);
             else
               onError(valueProps.start, "MISSING_CHAR", `Missing , or : between ${fcName} items`);
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep, null, valueProps, onError) : null;
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep, null, valueProps, onError) : null;
           if (valueNode) {
-            if (isBlock(value))
+            if (isBlock(value2))
               onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
           } else if (valueProps.comment) {
             if (keyNode.comment)
@@ -11641,18 +11945,18 @@ var require_resolve_flow_collection = __commonJS({
             else
               keyNode.comment = valueProps.comment;
           }
-          const pair = new Pair.Pair(keyNode, valueNode);
+          const pair2 = new Pair.Pair(keyNode, valueNode);
           if (ctx.options.keepSourceTokens)
-            pair.srcToken = collItem;
-          if (isMap3) {
+            pair2.srcToken = collItem;
+          if (isMap7) {
             const map = coll;
             if (utilMapIncludes.mapIncludes(ctx, map.items, keyNode))
               onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
-            map.items.push(pair);
+            map.items.push(pair2);
           } else {
             const map = new YAMLMap.YAMLMap(ctx.schema);
             map.flow = true;
-            map.items.push(pair);
+            map.items.push(pair2);
             const endRange = (valueNode ?? keyNode).range;
             map.range = [keyNode.range[0], endRange[1], endRange[2]];
             coll.items.push(map);
@@ -11660,7 +11964,7 @@ var require_resolve_flow_collection = __commonJS({
           offset = valueNode ? valueNode.range[2] : valueProps.end;
         }
       }
-      const expectedEnd = isMap3 ? "}" : "]";
+      const expectedEnd = isMap7 ? "}" : "]";
       const [ce, ...ee] = fc.end;
       let cePos = offset;
       if (ce?.source === expectedEnd)
@@ -11776,11 +12080,11 @@ var require_resolve_block_scalar = __commonJS({
           break;
       }
       if (chompStart === 0) {
-        const value2 = header2.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
+        const value3 = header2.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
         let end2 = start + header2.length;
         if (scalar.source)
           end2 += scalar.source.length;
-        return { value: value2, type, comment: header2.comment, range: [start, end2, end2] };
+        return { value: value3, type, comment: header2.comment, range: [start, end2, end2] };
       }
       let trimIndent = scalar.indent + header2.indent;
       let offset = scalar.offset + header2.length;
@@ -11810,11 +12114,11 @@ var require_resolve_block_scalar = __commonJS({
         if (lines[i][0].length > trimIndent)
           chompStart = i + 1;
       }
-      let value = "";
+      let value2 = "";
       let sep = "";
       let prevMoreIndented = false;
       for (let i = 0; i < contentStart; ++i)
-        value += lines[i][0].slice(trimIndent) + "\n";
+        value2 += lines[i][0].slice(trimIndent) + "\n";
       for (let i = contentStart; i < chompStart; ++i) {
         let [indent, content] = lines[i];
         offset += indent.length + content.length + 1;
@@ -11828,23 +12132,23 @@ var require_resolve_block_scalar = __commonJS({
           indent = "";
         }
         if (type === Scalar.Scalar.BLOCK_LITERAL) {
-          value += sep + indent.slice(trimIndent) + content;
+          value2 += sep + indent.slice(trimIndent) + content;
           sep = "\n";
         } else if (indent.length > trimIndent || content[0] === "	") {
           if (sep === " ")
             sep = "\n";
           else if (!prevMoreIndented && sep === "\n")
             sep = "\n\n";
-          value += sep + indent.slice(trimIndent) + content;
+          value2 += sep + indent.slice(trimIndent) + content;
           sep = "\n";
           prevMoreIndented = true;
         } else if (content === "") {
           if (sep === "\n")
-            value += "\n";
+            value2 += "\n";
           else
             sep = "\n";
         } else {
-          value += sep + content;
+          value2 += sep + content;
           sep = " ";
           prevMoreIndented = false;
         }
@@ -11854,15 +12158,15 @@ var require_resolve_block_scalar = __commonJS({
           break;
         case "+":
           for (let i = chompStart; i < lines.length; ++i)
-            value += "\n" + lines[i][0].slice(trimIndent);
-          if (value[value.length - 1] !== "\n")
-            value += "\n";
+            value2 += "\n" + lines[i][0].slice(trimIndent);
+          if (value2[value2.length - 1] !== "\n")
+            value2 += "\n";
           break;
         default:
-          value += "\n";
+          value2 += "\n";
       }
       const end = start + header2.length + scalar.source.length;
-      return { value, type, comment: header2.comment, range: [start, end, end] };
+      return { value: value2, type, comment: header2.comment, range: [start, end, end] };
     }
     function parseBlockScalarHeader({ offset, props }, strict, onError) {
       if (props[0].type !== "block-scalar-header") {
@@ -11947,20 +12251,20 @@ var require_resolve_flow_scalar = __commonJS({
     function resolveFlowScalar(scalar, strict, onError) {
       const { offset, type, source, end } = scalar;
       let _type;
-      let value;
+      let value2;
       const _onError = (rel, code, msg) => onError(offset + rel, code, msg);
       switch (type) {
         case "scalar":
           _type = Scalar.Scalar.PLAIN;
-          value = plainValue(source, _onError);
+          value2 = plainValue(source, _onError);
           break;
         case "single-quoted-scalar":
           _type = Scalar.Scalar.QUOTE_SINGLE;
-          value = singleQuotedValue(source, _onError);
+          value2 = singleQuotedValue(source, _onError);
           break;
         case "double-quoted-scalar":
           _type = Scalar.Scalar.QUOTE_DOUBLE;
-          value = doubleQuotedValue(source, _onError);
+          value2 = doubleQuotedValue(source, _onError);
           break;
         /* istanbul ignore next should not happen */
         default:
@@ -11975,7 +12279,7 @@ var require_resolve_flow_scalar = __commonJS({
       const valueEnd = offset + source.length;
       const re = resolveEnd.resolveEnd(end, valueEnd, strict, onError);
       return {
-        value,
+        value: value2,
         type: _type,
         comment: re.comment,
         range: [offset, valueEnd, re.offset]
@@ -12168,28 +12472,28 @@ var require_compose_scalar = __commonJS({
     var resolveBlockScalar = require_resolve_block_scalar();
     var resolveFlowScalar = require_resolve_flow_scalar();
     function composeScalar(ctx, token, tagToken, onError) {
-      const { value, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
+      const { value: value2, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
       const tagName = tagToken ? ctx.directives.tagName(tagToken.source, (msg) => onError(tagToken, "TAG_RESOLVE_FAILED", msg)) : null;
       let tag;
       if (ctx.options.stringKeys && ctx.atKey) {
         tag = ctx.schema[identity.SCALAR];
       } else if (tagName)
-        tag = findScalarTagByName(ctx.schema, value, tagName, tagToken, onError);
+        tag = findScalarTagByName(ctx.schema, value2, tagName, tagToken, onError);
       else if (token.type === "scalar")
-        tag = findScalarTagByTest(ctx, value, token, onError);
+        tag = findScalarTagByTest(ctx, value2, token, onError);
       else
         tag = ctx.schema[identity.SCALAR];
       let scalar;
       try {
-        const res = tag.resolve(value, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
+        const res = tag.resolve(value2, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
         scalar = identity.isScalar(res) ? res : new Scalar.Scalar(res);
       } catch (error) {
         const msg = error instanceof Error ? error.message : String(error);
         onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg);
-        scalar = new Scalar.Scalar(value);
+        scalar = new Scalar.Scalar(value2);
       }
       scalar.range = range;
-      scalar.source = value;
+      scalar.source = value2;
       if (type)
         scalar.type = type;
       if (tagName)
@@ -12200,7 +12504,7 @@ var require_compose_scalar = __commonJS({
         scalar.comment = comment;
       return scalar;
     }
-    function findScalarTagByName(schema, value, tagName, tagToken, onError) {
+    function findScalarTagByName(schema, value2, tagName, tagToken, onError) {
       if (tagName === "!")
         return schema[identity.SCALAR];
       const matchWithTest = [];
@@ -12213,7 +12517,7 @@ var require_compose_scalar = __commonJS({
         }
       }
       for (const tag of matchWithTest)
-        if (tag.test?.test(value))
+        if (tag.test?.test(value2))
           return tag;
       const kt = schema.knownTags[tagName];
       if (kt && !kt.collection) {
@@ -12223,10 +12527,10 @@ var require_compose_scalar = __commonJS({
       onError(tagToken, "TAG_RESOLVE_FAILED", `Unresolved tag: ${tagName}`, tagName !== "tag:yaml.org,2002:str");
       return schema[identity.SCALAR];
     }
-    function findScalarTagByTest({ atKey, directives, schema }, value, token, onError) {
-      const tag = schema.tags.find((tag2) => (tag2.default === true || atKey && tag2.default === "key") && tag2.test?.test(value)) || schema[identity.SCALAR];
+    function findScalarTagByTest({ atKey, directives, schema }, value2, token, onError) {
+      const tag = schema.tags.find((tag2) => (tag2.default === true || atKey && tag2.default === "key") && tag2.test?.test(value2)) || schema[identity.SCALAR];
       if (schema.compat) {
-        const compat = schema.compat.find((tag2) => tag2.default && tag2.test?.test(value)) ?? schema[identity.SCALAR];
+        const compat = schema.compat.find((tag2) => tag2.default && tag2.test?.test(value2)) ?? schema[identity.SCALAR];
         if (tag.tag !== compat.tag) {
           const ts = directives.tagString(tag.tag);
           const cs = directives.tagString(compat.tag);
@@ -12380,13 +12684,13 @@ var require_compose_node = __commonJS({
 var require_compose_doc = __commonJS({
   "node_modules/yaml/dist/compose/compose-doc.js"(exports) {
     "use strict";
-    var Document = require_Document();
+    var Document2 = require_Document();
     var composeNode = require_compose_node();
     var resolveEnd = require_resolve_end();
     var resolveProps = require_resolve_props();
-    function composeDoc(options, directives, { offset, start, value, end }, onError) {
+    function composeDoc(options, directives, { offset, start, value: value2, end }, onError) {
       const opts = Object.assign({ _directives: directives }, options);
-      const doc = new Document.Document(void 0, opts);
+      const doc = new Document2.Document(void 0, opts);
       const ctx = {
         atKey: false,
         atRoot: true,
@@ -12396,7 +12700,7 @@ var require_compose_doc = __commonJS({
       };
       const props = resolveProps.resolveProps(start, {
         indicator: "doc-start",
-        next: value ?? end?.[0],
+        next: value2 ?? end?.[0],
         offset,
         onError,
         parentIndent: 0,
@@ -12404,10 +12708,10 @@ var require_compose_doc = __commonJS({
       });
       if (props.found) {
         doc.directives.docStart = true;
-        if (value && (value.type === "block-map" || value.type === "block-seq") && !props.hasNewline)
+        if (value2 && (value2.type === "block-map" || value2.type === "block-seq") && !props.hasNewline)
           onError(props.end, "MISSING_CHAR", "Block collection cannot start on same line with directives-end marker");
       }
-      doc.contents = value ? composeNode.composeNode(ctx, value, props, onError) : composeNode.composeEmptyNode(ctx, props.end, start, null, props, onError);
+      doc.contents = value2 ? composeNode.composeNode(ctx, value2, props, onError) : composeNode.composeEmptyNode(ctx, props.end, start, null, props, onError);
       const contentEnd = doc.contents.range[2];
       const re = resolveEnd.resolveEnd(end, contentEnd, false, onError);
       if (re.comment)
@@ -12425,7 +12729,7 @@ var require_composer = __commonJS({
     "use strict";
     var node_process = __require("process");
     var directives = require_directives();
-    var Document = require_Document();
+    var Document2 = require_Document();
     var errors = require_errors2();
     var identity = require_identity();
     var composeDoc = require_compose_doc();
@@ -12614,7 +12918,7 @@ ${end.comment}` : end.comment;
           this.doc = null;
         } else if (forceDoc) {
           const opts = Object.assign({ _directives: this.directives }, this.options);
-          const doc = new Document.Document(void 0, opts);
+          const doc = new Document2.Document(void 0, opts);
           if (this.atDirectives)
             this.onError(endOffset, "MISSING_CHAR", "Missing directives-end indicator line");
           doc.range = [0, endOffset, endOffset];
@@ -12655,9 +12959,9 @@ var require_cst_scalar = __commonJS({
       }
       return null;
     }
-    function createScalarToken(value, context) {
+    function createScalarToken(value2, context) {
       const { implicitKey = false, indent, inFlow = false, offset = -1, type = "PLAIN" } = context;
-      const source = stringifyString.stringifyString({ type, value }, {
+      const source = stringifyString.stringifyString({ type, value: value2 }, {
         implicitKey,
         indent: indent > 0 ? " ".repeat(indent) : "",
         inFlow,
@@ -12687,7 +12991,7 @@ var require_cst_scalar = __commonJS({
           return { type: "scalar", offset, indent, source, end };
       }
     }
-    function setScalarValue(token, value, context = {}) {
+    function setScalarValue(token, value2, context = {}) {
       let { afterKey = false, implicitKey = false, inFlow = false, type } = context;
       let indent = "indent" in token ? token.indent : null;
       if (afterKey && typeof indent === "number")
@@ -12710,7 +13014,7 @@ var require_cst_scalar = __commonJS({
           default:
             type = "PLAIN";
         }
-      const source = stringifyString.stringifyString({ type, value }, {
+      const source = stringifyString.stringifyString({ type, value: value2 }, {
         implicitKey: implicitKey || indent === null,
         indent: indent !== null && indent > 0 ? " ".repeat(indent) : "",
         inFlow,
@@ -12816,7 +13120,7 @@ var require_cst_scalar = __commonJS({
 var require_cst_stringify = __commonJS({
   "node_modules/yaml/dist/parse/cst-stringify.js"(exports) {
     "use strict";
-    var stringify = (cst) => "type" in cst ? stringifyToken(cst) : stringifyItem(cst);
+    var stringify2 = (cst) => "type" in cst ? stringifyToken(cst) : stringifyItem(cst);
     function stringifyToken(token) {
       switch (token.type) {
         case "block-scalar": {
@@ -12856,7 +13160,7 @@ var require_cst_stringify = __commonJS({
         }
       }
     }
-    function stringifyItem({ start, key, sep, value }) {
+    function stringifyItem({ start, key, sep, value: value2 }) {
       let res = "";
       for (const st of start)
         res += st.source;
@@ -12865,11 +13169,11 @@ var require_cst_stringify = __commonJS({
       if (sep)
         for (const st of sep)
           res += st.source;
-      if (value)
-        res += stringifyToken(value);
+      if (value2)
+        res += stringifyToken(value2);
       return res;
     }
-    exports.stringify = stringify;
+    exports.stringify = stringify2;
   }
 });
 
@@ -12880,17 +13184,17 @@ var require_cst_visit = __commonJS({
     var BREAK = /* @__PURE__ */ Symbol("break visit");
     var SKIP = /* @__PURE__ */ Symbol("skip children");
     var REMOVE = /* @__PURE__ */ Symbol("remove item");
-    function visit2(cst, visitor) {
+    function visit3(cst, visitor) {
       if ("type" in cst && cst.type === "document")
         cst = { start: cst.start, value: cst.value };
       _visit(Object.freeze([]), cst, visitor);
     }
-    visit2.BREAK = BREAK;
-    visit2.SKIP = SKIP;
-    visit2.REMOVE = REMOVE;
-    visit2.itemAtPath = (cst, path7) => {
+    visit3.BREAK = BREAK;
+    visit3.SKIP = SKIP;
+    visit3.REMOVE = REMOVE;
+    visit3.itemAtPath = (cst, path11) => {
       let item = cst;
-      for (const [field, index] of path7) {
+      for (const [field, index] of path11) {
         const tok = item?.[field];
         if (tok && "items" in tok) {
           item = tok.items[index];
@@ -12899,23 +13203,23 @@ var require_cst_visit = __commonJS({
       }
       return item;
     };
-    visit2.parentCollection = (cst, path7) => {
-      const parent = visit2.itemAtPath(cst, path7.slice(0, -1));
-      const field = path7[path7.length - 1][0];
+    visit3.parentCollection = (cst, path11) => {
+      const parent = visit3.itemAtPath(cst, path11.slice(0, -1));
+      const field = path11[path11.length - 1][0];
       const coll = parent?.[field];
       if (coll && "items" in coll)
         return coll;
       throw new Error("Parent collection not found");
     };
-    function _visit(path7, item, visitor) {
-      let ctrl = visitor(item, path7);
+    function _visit(path11, item, visitor) {
+      let ctrl = visitor(item, path11);
       if (typeof ctrl === "symbol")
         return ctrl;
       for (const field of ["key", "value"]) {
         const token = item[field];
         if (token && "items" in token) {
           for (let i = 0; i < token.items.length; ++i) {
-            const ci = _visit(Object.freeze(path7.concat([[field, i]])), token.items[i], visitor);
+            const ci = _visit(Object.freeze(path11.concat([[field, i]])), token.items[i], visitor);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -12926,12 +13230,12 @@ var require_cst_visit = __commonJS({
             }
           }
           if (typeof ctrl === "function" && field === "key")
-            ctrl = ctrl(item, path7);
+            ctrl = ctrl(item, path11);
         }
       }
-      return typeof ctrl === "function" ? ctrl(item, path7) : ctrl;
+      return typeof ctrl === "function" ? ctrl(item, path11) : ctrl;
     }
-    exports.visit = visit2;
+    exports.visit = visit3;
   }
 });
 
@@ -12947,7 +13251,7 @@ var require_cst = __commonJS({
     var FLOW_END2 = "";
     var SCALAR2 = "";
     var isCollection2 = (token) => !!token && "items" in token;
-    var isScalar3 = (token) => !!token && (token.type === "scalar" || token.type === "single-quoted-scalar" || token.type === "double-quoted-scalar" || token.type === "block-scalar");
+    var isScalar7 = (token) => !!token && (token.type === "scalar" || token.type === "single-quoted-scalar" || token.type === "double-quoted-scalar" || token.type === "block-scalar");
     function prettyToken(token) {
       switch (token) {
         case BOM:
@@ -13031,7 +13335,7 @@ var require_cst = __commonJS({
     exports.FLOW_END = FLOW_END2;
     exports.SCALAR = SCALAR2;
     exports.isCollection = isCollection2;
-    exports.isScalar = isScalar3;
+    exports.isScalar = isScalar7;
     exports.prettyToken = prettyToken;
     exports.tokenType = tokenType;
   }
@@ -13042,7 +13346,7 @@ var require_lexer = __commonJS({
   "node_modules/yaml/dist/parse/lexer.js"(exports) {
     "use strict";
     var cst = require_cst();
-    function isEmpty(ch) {
+    function isEmpty2(ch) {
       switch (ch) {
         case void 0:
         case " ":
@@ -13120,7 +13424,7 @@ var require_lexer = __commonJS({
         }
         if (ch === "-" || ch === ".") {
           const dt = this.buffer.substr(offset, 3);
-          if ((dt === "---" || dt === "...") && isEmpty(this.buffer[offset + 3]))
+          if ((dt === "---" || dt === "...") && isEmpty2(this.buffer[offset + 3]))
             return -1;
         }
         return offset;
@@ -13219,7 +13523,7 @@ var require_lexer = __commonJS({
           if (!this.atEnd && !this.hasChars(4))
             return this.setNext("line-start");
           const s = this.peek(3);
-          if ((s === "---" || s === "...") && isEmpty(this.charAt(3))) {
+          if ((s === "---" || s === "...") && isEmpty2(this.charAt(3))) {
             yield* this.pushCount(3);
             this.indentValue = 0;
             this.indentNext = 0;
@@ -13227,7 +13531,7 @@ var require_lexer = __commonJS({
           }
         }
         this.indentValue = yield* this.pushSpaces(false);
-        if (this.indentNext > this.indentValue && !isEmpty(this.charAt(1)))
+        if (this.indentNext > this.indentValue && !isEmpty2(this.charAt(1)))
           this.indentNext = this.indentValue;
         return yield* this.parseBlockStart();
       }
@@ -13235,7 +13539,7 @@ var require_lexer = __commonJS({
         const [ch0, ch1] = this.peek(2);
         if (!ch1 && !this.atEnd)
           return this.setNext("block-start");
-        if ((ch0 === "-" || ch0 === "?" || ch0 === ":") && isEmpty(ch1)) {
+        if ((ch0 === "-" || ch0 === "?" || ch0 === ":") && isEmpty2(ch1)) {
           const n = (yield* this.pushCount(1)) + (yield* this.pushSpaces(true));
           this.indentNext = this.indentValue + 1;
           this.indentValue += n;
@@ -13299,7 +13603,7 @@ var require_lexer = __commonJS({
         const line = this.getLine();
         if (line === null)
           return this.setNext("flow");
-        if (indent !== -1 && indent < this.indentNext && line[0] !== "#" || indent === 0 && (line.startsWith("---") || line.startsWith("...")) && isEmpty(line[3])) {
+        if (indent !== -1 && indent < this.indentNext && line[0] !== "#" || indent === 0 && (line.startsWith("---") || line.startsWith("...")) && isEmpty2(line[3])) {
           const atFlowEndMarker = indent === this.indentNext - 1 && this.flowLevel === 1 && (line[0] === "]" || line[0] === "}");
           if (!atFlowEndMarker) {
             this.flowLevel = 0;
@@ -13341,7 +13645,7 @@ var require_lexer = __commonJS({
             return yield* this.parseQuotedScalar();
           case ":": {
             const next = this.charAt(1);
-            if (this.flowKey || isEmpty(next) || next === ",") {
+            if (this.flowKey || isEmpty2(next) || next === ",") {
               this.flowKey = false;
               yield* this.pushCount(1);
               yield* this.pushSpaces(true);
@@ -13404,7 +13708,7 @@ var require_lexer = __commonJS({
           else if (ch !== "-")
             break;
         }
-        return yield* this.pushUntil((ch) => isEmpty(ch) || ch === "#");
+        return yield* this.pushUntil((ch) => isEmpty2(ch) || ch === "#");
       }
       *parseBlockScalar() {
         let nl = this.pos - 1;
@@ -13486,10 +13790,10 @@ var require_lexer = __commonJS({
         while (ch = this.buffer[++i]) {
           if (ch === ":") {
             const next = this.buffer[i + 1];
-            if (isEmpty(next) || inFlow && flowIndicatorChars.has(next))
+            if (isEmpty2(next) || inFlow && flowIndicatorChars.has(next))
               break;
             end = i;
-          } else if (isEmpty(ch)) {
+          } else if (isEmpty2(ch)) {
             let next = this.buffer[i + 1];
             if (ch === "\r") {
               if (next === "\n") {
@@ -13556,7 +13860,7 @@ var require_lexer = __commonJS({
             case ":": {
               const inFlow = this.flowLevel > 0;
               const ch1 = this.charAt(1);
-              if (isEmpty(ch1) || inFlow && flowIndicatorChars.has(ch1)) {
+              if (isEmpty2(ch1) || inFlow && flowIndicatorChars.has(ch1)) {
                 if (!inFlow)
                   this.indentNext = this.indentValue + 1;
                 else if (this.flowKey)
@@ -13575,7 +13879,7 @@ var require_lexer = __commonJS({
         if (this.charAt(1) === "<") {
           let i = this.pos + 2;
           let ch = this.buffer[i];
-          while (!isEmpty(ch) && ch !== ">")
+          while (!isEmpty2(ch) && ch !== ">")
             ch = this.buffer[++i];
           return yield* this.pushToIndex(ch === ">" ? i + 1 : i, false);
         } else {
@@ -13630,7 +13934,7 @@ var require_lexer = __commonJS({
 var require_line_counter = __commonJS({
   "node_modules/yaml/dist/parse/line-counter.js"(exports) {
     "use strict";
-    var LineCounter3 = class {
+    var LineCounter5 = class {
       constructor() {
         this.lineStarts = [];
         this.addNewLine = (offset) => this.lineStarts.push(offset);
@@ -13638,11 +13942,11 @@ var require_line_counter = __commonJS({
           let low = 0;
           let high = this.lineStarts.length;
           while (low < high) {
-            const mid = low + high >> 1;
-            if (this.lineStarts[mid] < offset)
-              low = mid + 1;
+            const mid2 = low + high >> 1;
+            if (this.lineStarts[mid2] < offset)
+              low = mid2 + 1;
             else
-              high = mid;
+              high = mid2;
           }
           if (this.lineStarts[low] === offset)
             return { line: low + 1, col: 1 };
@@ -13653,7 +13957,7 @@ var require_line_counter = __commonJS({
         };
       }
     };
-    exports.LineCounter = LineCounter3;
+    exports.LineCounter = LineCounter5;
   }
 });
 
@@ -14536,7 +14840,7 @@ var require_public_api = __commonJS({
   "node_modules/yaml/dist/public-api.js"(exports) {
     "use strict";
     var composer = require_composer();
-    var Document = require_Document();
+    var Document2 = require_Document();
     var errors = require_errors2();
     var log = require_log();
     var identity = require_identity();
@@ -14561,7 +14865,7 @@ var require_public_api = __commonJS({
         return docs;
       return Object.assign([], { empty: true }, composer$1.streamInfo());
     }
-    function parseDocument3(source, options = {}) {
+    function parseDocument6(source, options = {}) {
       const { lineCounter: lineCounter2, prettyErrors } = parseOptions(options);
       const parser$1 = new parser.Parser(lineCounter2?.addNewLine);
       const composer$1 = new composer.Composer(options);
@@ -14587,7 +14891,7 @@ var require_public_api = __commonJS({
       } else if (options === void 0 && reviver && typeof reviver === "object") {
         options = reviver;
       }
-      const doc = parseDocument3(src, options);
+      const doc = parseDocument6(src, options);
       if (!doc)
         return null;
       doc.warnings.forEach((warning) => log.warn(doc.options.logLevel, warning));
@@ -14599,7 +14903,7 @@ var require_public_api = __commonJS({
       }
       return doc.toJS(Object.assign({ reviver: _reviver }, options));
     }
-    function stringify(value, replacer, options) {
+    function stringify2(value2, replacer, options) {
       let _replacer = null;
       if (typeof replacer === "function" || Array.isArray(replacer)) {
         _replacer = replacer;
@@ -14612,19 +14916,19 @@ var require_public_api = __commonJS({
         const indent = Math.round(options);
         options = indent < 1 ? void 0 : indent > 8 ? { indent: 8 } : { indent };
       }
-      if (value === void 0) {
+      if (value2 === void 0) {
         const { keepUndefined } = options ?? replacer ?? {};
         if (!keepUndefined)
           return void 0;
       }
-      if (identity.isDocument(value) && !_replacer)
-        return value.toString(options);
-      return new Document.Document(value, _replacer, options).toString(options);
+      if (identity.isDocument(value2) && !_replacer)
+        return value2.toString(options);
+      return new Document2.Document(value2, _replacer, options).toString(options);
     }
     exports.parse = parse2;
     exports.parseAllDocuments = parseAllDocuments;
-    exports.parseDocument = parseDocument3;
-    exports.stringify = stringify;
+    exports.parseDocument = parseDocument6;
+    exports.stringify = stringify2;
   }
 });
 
@@ -14633,7 +14937,7 @@ var require_dist = __commonJS({
   "node_modules/yaml/dist/index.js"(exports) {
     "use strict";
     var composer = require_composer();
-    var Document = require_Document();
+    var Document2 = require_Document();
     var Schema = require_Schema();
     var errors = require_errors2();
     var Alias = require_Alias();
@@ -14647,9 +14951,9 @@ var require_dist = __commonJS({
     var lineCounter = require_line_counter();
     var parser = require_parser();
     var publicApi = require_public_api();
-    var visit2 = require_visit();
+    var visit3 = require_visit();
     exports.Composer = composer.Composer;
-    exports.Document = Document.Document;
+    exports.Document = Document2.Document;
     exports.Schema = Schema.Schema;
     exports.YAMLError = errors.YAMLError;
     exports.YAMLParseError = errors.YAMLParseError;
@@ -14675,8 +14979,8 @@ var require_dist = __commonJS({
     exports.parseAllDocuments = publicApi.parseAllDocuments;
     exports.parseDocument = publicApi.parseDocument;
     exports.stringify = publicApi.stringify;
-    exports.visit = visit2.visit;
-    exports.visitAsync = visit2.visitAsync;
+    exports.visit = visit3.visit;
+    exports.visitAsync = visit3.visitAsync;
   }
 });
 
@@ -14725,7 +15029,8 @@ var init_design_schema = __esm({
         latency_budget: {
           description: "How much longer than the intact network's path a demand's path may become and still count as served (1.5 = 50 % longer).",
           type: "number",
-          minimum: 1
+          minimum: 1,
+          maximum: 1e3
         },
         metadata: {
           description: "Anything else you want to keep with the design; netbrace carries it into reports and ignores it otherwise.",
@@ -14755,7 +15060,8 @@ var init_design_schema = __esm({
                 lon: { type: "number", minimum: -180, maximum: 180 }
               }
             },
-            hardened: { description: "Never removed by a challenge.", type: "boolean" }
+            hardened: { description: "Never removed by a challenge.", type: "boolean" },
+            attributes: { description: "Anything else known about the node (kept through conversions, e.g. a GraphML or GML attribute); netbrace ignores it otherwise.", type: "object" }
           }
         },
         link: {
@@ -14771,15 +15077,17 @@ var init_design_schema = __esm({
               minItems: 2,
               maxItems: 2
             },
-            length_km: { type: "number", minimum: 0 },
-            latency_ms: { type: "number", minimum: 0 },
-            capacity_gbps: { type: "number", minimum: 0 },
+            length_km: { description: "Length in km: 0, or from 1e-6 (1 mm) to 1e6 (25 times around the Earth).", type: "number", minimum: 0, maximum: 1e6 },
+            latency_ms: { description: "Latency in ms: 0, or from 1e-6 (1 ns) to 1e6 (1,000 s).", type: "number", minimum: 0, maximum: 1e6 },
+            capacity_gbps: { description: "Capacity in Gbit/s, informational: 0, or from 1e-9 (1 bit/s) to 1e9.", type: "number", minimum: 0, maximum: 1e9 },
+            weight: { description: "A routing weight without unit (e.g. an OSPF cost), the link's cost where it has no latency and no length: 0, or from 1e-9 to 1e9.", type: "number", minimum: 0, maximum: 1e9 },
             risk_groups: {
               description: "Ids of the shared-risk link groups this link belongs to.",
               type: "array",
               items: { $ref: "#/definitions/id" }
             },
-            hardened: { description: "Never removed by a challenge.", type: "boolean" }
+            hardened: { description: "Never removed by a challenge.", type: "boolean" },
+            attributes: { description: "Anything else known about the link (kept through conversions; `length_estimated: true` marks a length computed from the sites' coordinates); netbrace ignores it otherwise.", type: "object" }
           }
         },
         riskGroup: {
@@ -14802,7 +15110,7 @@ var init_design_schema = __esm({
               minItems: 2,
               maxItems: 2
             },
-            volume: { type: "number", minimum: 0 }
+            volume: { description: "Traffic volume in any consistent unit: 0, or from 1e-12 to 1e15.", type: "number", minimum: 0, maximum: 1e15 }
           }
         }
       }
@@ -14885,6 +15193,10 @@ var init_builder = __esm({
       riskGroups = [];
       riskGroupPos = /* @__PURE__ */ new Map();
       demands = [];
+      /** Arcs not yet paired with a reverse arc, by `source\0target`, oldest first. */
+      openArcs = /* @__PURE__ */ new Map();
+      directedAt;
+      mergedArcs = 0;
       constructor(file, format, options = {}) {
         this.file = file;
         this.format = format;
@@ -14894,8 +15206,8 @@ var init_builder = __esm({
       get nodeCount() {
         return this.nodes.length;
       }
-      hasNode(id) {
-        return this.nodeLine.has(id);
+      hasNode(id2) {
+        return this.nodeLine.has(id2);
       }
       /** A located DesignError in this file. */
       error(message, pos, hint = "") {
@@ -14912,10 +15224,10 @@ var init_builder = __esm({
         });
       }
       /** Refuses an id longer than MAX_ID_LENGTH (LimitError at the element). */
-      checkId(id, what, pos) {
-        if (id.length <= MAX_ID_LENGTH) return;
+      checkId(id2, what, pos) {
+        if (id2.length <= MAX_ID_LENGTH) return;
         throw new LimitError(
-          `${what} is ${id.length} characters long; netbrace accepts ids of at most ${MAX_ID_LENGTH} ("${id.slice(0, 24)}…")`,
+          `${what} is ${id2.length} characters long; netbrace accepts ids of at most ${MAX_ID_LENGTH} ("${id2.slice(0, 24)}…")`,
           { file: this.file, line: pos?.line ?? 0, column: pos?.column ?? 0 },
           "use a short id and put the long name in a label"
         );
@@ -14946,16 +15258,27 @@ var init_builder = __esm({
         }
         this.nodes.push(node);
       }
-      requireNode(id, pos, what) {
-        if (this.nodeLine.has(id)) return;
-        this.checkId(id, `a node id in ${what}`, pos);
+      requireNode(id2, pos, what) {
+        if (this.nodeLine.has(id2)) return;
+        this.checkId(id2, `a node id in ${what}`, pos);
         throw this.error(
-          `${what} refers to unknown node "${id}"`,
+          `${what} refers to unknown node "${id2}"`,
           pos,
-          didYouMean(id, this.nodeLine.keys(), "declare the node first, or fix the id")
+          didYouMean(id2, this.nodeLine.keys(), "declare the node first, or fix the id")
         );
       }
-      /** Adds a link; returns false when it was dropped (a self-loop). */
+      /**
+       * Says the file declares direction (`how`, e.g. `edgedefault="directed"`), once; finish()
+       * warns that direction is ignored and how many reverse arcs were merged.
+       */
+      directed(pos, how) {
+        this.directedAt ??= { pos, how };
+      }
+      /**
+       * Adds a link; returns false when it was dropped (a self-loop) or merged into the link of
+       * the reverse arc. Arcs pair up in file order, so the links between two nodes are as many
+       * as the arcs in the more frequent direction: u→v with v→u is one link, u→v twice is two.
+       */
       addLink(input) {
         if (input.id !== void 0) this.checkId(input.id, "a link id", input.pos);
         for (const g of input.riskGroups ?? []) this.checkId(g, "a risk group id of a link", input.pos);
@@ -14966,29 +15289,37 @@ var init_builder = __esm({
           this.warn(`self-loop on node "${input.source}" dropped`, input.pos, "a link from a node to itself adds no connectivity");
           return false;
         }
+        if (input.arc) {
+          const reverse = this.openArcs.get(`${input.target}\0${input.source}`);
+          const partner = reverse?.shift();
+          if (partner) {
+            this.mergeArc(partner, input);
+            return false;
+          }
+        }
         this.countElement(input.pos);
         const pairKey = input.source <= input.target ? `${input.source}\0${input.target}` : `${input.target}\0${input.source}`;
         const occurrence = (this.pairCount.get(pairKey) ?? 0) + 1;
         this.pairCount.set(pairKey, occurrence);
-        let id = input.id;
-        if (id !== void 0) {
-          const first = this.linkIds.get(id);
+        let id2 = input.id;
+        if (id2 !== void 0) {
+          const first = this.linkIds.get(id2);
           if (first !== void 0) {
             if (this.duplicateLinkIds === "error") {
-              throw this.error(`duplicate link id "${id}"`, input.pos, `first used on line ${first.line}; link ids must be unique`);
+              throw this.error(`duplicate link id "${id2}"`, input.pos, `first used on line ${first.line}; link ids must be unique`);
             }
-            this.warn(`duplicate link id "${id}" (first on line ${first.line}); the link is named by its ends instead`, input.pos);
-            id = void 0;
+            this.warn(`duplicate link id "${id2}" (first on line ${first.line}); the link is named by its ends instead`, input.pos);
+            id2 = void 0;
           }
         }
-        if (id === void 0) {
+        if (id2 === void 0) {
           const base = `${input.source}${DASH}${input.target}`;
-          id = occurrence > 1 ? `${base}#${occurrence}` : base;
-          for (let k = 2; this.linkIds.has(id); k++) id = `${base}#${occurrence}.${k}`;
+          id2 = occurrence > 1 ? `${base}#${occurrence}` : base;
+          for (let k = 2; this.linkIds.has(id2); k++) id2 = `${base}#${occurrence}.${k}`;
         }
-        this.linkIds.set(id, input.pos);
+        this.linkIds.set(id2, input.pos);
         const link = {
-          id,
+          id: id2,
           key: linkKey(input.source, input.target, occurrence),
           source: input.source,
           target: input.target,
@@ -15002,7 +15333,31 @@ var init_builder = __esm({
         if (input.capacity !== void 0) link.capacity = input.capacity;
         if (input.weight !== void 0) link.weight = input.weight;
         this.links.push(link);
+        if (input.arc) {
+          const key = `${input.source}\0${input.target}`;
+          const open = this.openArcs.get(key);
+          if (open) open.push(link);
+          else this.openArcs.set(key, [link]);
+        }
         return true;
+      }
+      /** The reverse arc joins its partner's link; values that differ are reported, the first kept. */
+      mergeArc(link, arc) {
+        this.mergedArcs++;
+        const differs = [];
+        for (const k of ["length", "latency", "capacity", "weight"]) {
+          if (arc[k] !== link[k]) differs.push(`${k} ${link[k] ?? "unset"} vs ${arc[k] ?? "unset"}`);
+        }
+        if ((arc.hardened ?? false) !== link.hardened) differs.push(`hardened ${link.hardened} vs ${arc.hardened ?? false}`);
+        const groups = (g) => [...new Set(g)].sort().join(";");
+        if (groups(arc.riskGroups ?? []) !== groups(link.riskGroups)) differs.push(`risk groups "${groups(link.riskGroups)}" vs "${groups(arc.riskGroups ?? [])}"`);
+        if (differs.length > 0) {
+          this.warn(
+            `the arc ${arc.source} → ${arc.target} is merged with the reverse arc on line ${link.pos.line}, which says otherwise (${differs.join(", ")}); the first arc's values are kept`,
+            arc.pos,
+            "give both directions the same values, or write one undirected link"
+          );
+        }
       }
       addRiskGroup(group) {
         this.checkId(group.id, "a risk group id", group.pos);
@@ -15018,6 +15373,16 @@ var init_builder = __esm({
         this.demands.push({ source, target, volume, pos });
       }
       finish(extra = {}) {
+        if (this.directedAt) {
+          const merged = this.mergedArcs;
+          this.warnings.unshift({
+            file: this.file,
+            line: this.directedAt.pos.line,
+            column: this.directedAt.pos.column,
+            severity: "warning",
+            message: `the graph is directed (${this.directedAt.how}); direction is ignored and links are read as undirected` + (merged > 0 ? `: ${merged} pair${merged === 1 ? "" : "s"} of reverse arcs (u → v and v → u) merged into one link each` : "")
+          });
+        }
         const t = {
           file: this.file,
           format: this.format,
@@ -15033,6 +15398,41 @@ var init_builder = __esm({
         return t;
       }
     };
+  }
+});
+
+// src/topology/quantities.ts
+function nonNormal(n) {
+  if (Number.isNaN(n)) return "is not a number (NaN)";
+  if (!Number.isFinite(n)) return "is infinite (or too large for a number)";
+  if (n !== 0 && Math.abs(n) < MIN_NORMAL) return "is so close to 0 that it cannot be computed with (a subnormal number)";
+  return void 0;
+}
+function quantityProblem(kind, value2, written) {
+  const as = written !== void 0 && written.trim() !== String(value2) && written.trim() !== fmt(value2) ? ` (written ${written.trim()})` : "";
+  const bad = nonNormal(value2);
+  const r = QUANTITY_RANGE[kind];
+  const range = `netbrace accepts 0 or ${shown(r.min, r.unit)} to ${shown(r.max, r.unit)}`;
+  if (bad) return { message: `${bad}${as}`, hint: Number.isFinite(value2) ? `${range}; write 0 for none` : `${range}; check the unit` };
+  if (value2 < 0) return { message: `must not be negative (${value2})`, hint: range };
+  if (value2 > r.max) return { message: `is ${fmt(value2)}${as}, above the limit of ${shown(r.max, r.unit)}`, hint: `${range}; check the unit` };
+  if (value2 > 0 && value2 < r.min) return { message: `is ${fmt(value2)}${as}, below the smallest value accepted (${shown(r.min, r.unit)})`, hint: `${range}; write 0 for none` };
+  return void 0;
+}
+var MIN_NORMAL, QUANTITY_RANGE, fmt, shown;
+var init_quantities = __esm({
+  "src/topology/quantities.ts"() {
+    "use strict";
+    MIN_NORMAL = 22250738585072014e-324;
+    QUANTITY_RANGE = {
+      length: { min: 1e-6, max: 1e6, unit: "km" },
+      latency: { min: 1e-6, max: 1e6, unit: "ms" },
+      capacity: { min: 1e-9, max: 1e9, unit: "Gbit/s" },
+      weight: { min: 1e-9, max: 1e9, unit: "" },
+      volume: { min: 1e-12, max: 1e15, unit: "" }
+    };
+    fmt = (n) => Math.abs(n) >= 1e5 || n !== 0 && Math.abs(n) < 1e-3 ? n.toExponential().replace("e+", "e") : String(n);
+    shown = (n, unit) => `${fmt(n)}${unit ? ` ${unit}` : ""}`;
   }
 });
 
@@ -15117,14 +15517,31 @@ function validate() {
   validator ??= new Ajv({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true }).compile(design_schema_default);
   return validator;
 }
-function pathText(path7) {
+function firstNonNormal(v, path11) {
+  if (typeof v === "number") {
+    const why = nonNormal(v);
+    return why ? { path: [...path11], why } : void 0;
+  }
+  if (v === null || typeof v !== "object") return void 0;
+  const entries = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
+  for (const [k, x] of entries) {
+    if (typeof x !== "number" && (x === null || typeof x !== "object")) continue;
+    if (path11.length === 0 && k === "metadata") continue;
+    path11.push(k);
+    const found = firstNonNormal(x, path11);
+    path11.pop();
+    if (found) return found;
+  }
+  return void 0;
+}
+function pathText(path11) {
   let s = "";
-  for (const k of path7) s += typeof k === "number" ? `[${k}]` : s === "" ? k : `.${k}`;
+  for (const k of path11) s += typeof k === "number" ? `[${k}]` : s === "" ? k : `.${k}`;
   return s === "" ? "the design" : s;
 }
 function splitPointer(pointer) {
   if (pointer === "") return [];
-  return pointer.slice(1).split("/").map((seg) => seg.replace(/~1/g, "/").replace(/~0/g, "~")).map((seg) => /^\d+$/.test(seg) ? Number(seg) : seg);
+  return pointer.slice(1).split("/").map((seg2) => seg2.replace(/~1/g, "/").replace(/~0/g, "~")).map((seg2) => /^\d+$/.test(seg2) ? Number(seg2) : seg2);
 }
 function describe(v) {
   if (v === null) return "empty (null)";
@@ -15134,9 +15551,9 @@ function describe(v) {
   return `${typeof v} ${String(v)}`;
 }
 function toDesignError(e, file, loc) {
-  const path7 = splitPointer(e.instancePath);
+  const path11 = splitPointer(e.instancePath);
   const where = (pos) => ({ file, line: pos.line, column: pos.column });
-  const what = pathText(path7);
+  const what = pathText(path11);
   const params = e.params;
   switch (e.keyword) {
     case "additionalProperties": {
@@ -15144,45 +15561,45 @@ function toDesignError(e, file, loc) {
       const allowed = Object.keys(e.parentSchema?.properties ?? {});
       return new DesignError(
         `unknown key "${key}" in ${what}`,
-        where(loc.keyPos(path7, key)),
+        where(loc.keyPos(path11, key)),
         didYouMean(key, allowed, `allowed keys: ${allowed.join(", ")}`)
       );
     }
     case "required": {
       const key = String(params.missingProperty);
-      if (key === "between" && path7[0] === "links") {
-        return new DesignError(`${what} has no ends: "between" is missing`, where(loc.pos(path7)), "write between: [node-a, node-b]");
+      if (key === "between" && path11[0] === "links") {
+        return new DesignError(`${what} has no ends: "between" is missing`, where(loc.pos(path11)), "write between: [node-a, node-b]");
       }
-      return new DesignError(`${what} is missing the required key "${key}"`, where(loc.pos(path7)));
+      return new DesignError(`${what} is missing the required key "${key}"`, where(loc.pos(path11)));
     }
     case "type": {
       const want = TYPE_WORDS[String(params.type)] ?? String(params.type);
-      return new DesignError(`${what} must be ${want}, not ${describe(e.data)}`, where(loc.pos(path7)), e.data === null ? "give a value after the colon, or remove the key" : "");
+      return new DesignError(`${what} must be ${want}, not ${describe(e.data)}`, where(loc.pos(path11)), e.data === null ? "give a value after the colon, or remove the key" : "");
     }
     case "minItems":
     case "maxItems": {
       const n = Array.isArray(e.data) ? e.data.length : 0;
-      if (path7[path7.length - 1] === "between") {
+      if (path11[path11.length - 1] === "between") {
         return new DesignError(
           `${what} needs exactly two node ids, found ${n}`,
-          where(loc.pos(path7)),
+          where(loc.pos(path11)),
           n < 2 ? "a link end is missing: write between: [node-a, node-b]" : "a link joins two nodes; write one link per pair"
         );
       }
-      return new DesignError(`${what} ${e.message ?? "has the wrong number of items"}`, where(loc.pos(path7)));
+      return new DesignError(`${what} ${e.message ?? "has the wrong number of items"}`, where(loc.pos(path11)));
     }
     case "minimum":
     case "exclusiveMinimum": {
       const limit = Number(params.limit);
       const message = limit === 0 ? `${what} must not be negative (found ${String(e.data)})` : `${what} must be at least ${limit} (found ${String(e.data)})`;
-      return new DesignError(message, where(loc.pos(path7)));
+      return new DesignError(message, where(loc.pos(path11)));
     }
     case "maximum":
-      return new DesignError(`${what} must be at most ${String(params.limit)} (found ${String(e.data)})`, where(loc.pos(path7)));
+      return new DesignError(`${what} must be at most ${String(params.limit)} (found ${String(e.data)})`, where(loc.pos(path11)));
     case "minLength":
-      return new DesignError(`${what} must not be empty`, where(loc.pos(path7)));
+      return new DesignError(`${what} must not be empty`, where(loc.pos(path11)));
     default:
-      return new DesignError(`${what} ${e.message ?? "is not valid"}`, where(loc.pos(path7)));
+      return new DesignError(`${what} ${e.message ?? "is not valid"}`, where(loc.pos(path11)));
   }
 }
 function firstError(errors, file, loc) {
@@ -15234,44 +15651,64 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
   if (data === null || data === void 0) {
     throw new DesignError(`the ${kindWord} design is empty`, { file, line: 1, column: 1 }, "a design needs at least `nodes:`");
   }
+  const odd = firstNonNormal(data, []);
+  if (odd) {
+    throw new DesignError(`${pathText(odd.path)} ${odd.why}${loc.written(odd.path, " (written ", ")")}`, { file, ...loc.pos(odd.path) }, "write a plain decimal number");
+  }
   const check = validate();
   if (!check(data)) throw firstError(check.errors ?? [], file, loc);
   const d = data;
+  const idAt = (path11, v) => typeof v === "string" ? v : loc.source(path11) ?? String(v);
+  const quantity = (kind, path11, v) => {
+    if (v === void 0) return void 0;
+    const problem = quantityProblem(kind, v, loc.source(path11));
+    if (problem) throw new DesignError(`${pathText(path11)} ${problem.message}`, { file, ...loc.pos(path11) }, problem.hint);
+    return v;
+  };
   const b = new TopologyBuilder(file, format, { ...options, duplicateLinkIds: "error" });
   for (const w of doc.warnings) b.warn(`${kindWord}: ${w.message.split("\n")[0]}`, loc.at(w.pos[0]));
   d.nodes.forEach((n, i) => {
     b.addNode({
-      id: String(n.id),
+      id: idAt(["nodes", i, "id"], n.id),
       pos: loc.pos(["nodes", i]),
       ...n.label !== void 0 ? { label: n.label } : {},
       ...n.kind !== void 0 ? { kind: n.kind } : {},
       ...n.site ? { lat: n.site.lat, lon: n.site.lon } : {},
-      hardened: n.hardened ?? false
+      hardened: n.hardened ?? false,
+      ...n.attributes ? { attrs: n.attributes } : {}
     });
   });
   (d.risk_groups ?? []).forEach((g, i) => {
-    b.addRiskGroup({ id: String(g.id), pos: loc.pos(["risk_groups", i]), ...g.description !== void 0 ? { description: g.description } : {} });
+    b.addRiskGroup({ id: idAt(["risk_groups", i, "id"], g.id), pos: loc.pos(["risk_groups", i]), ...g.description !== void 0 ? { description: g.description } : {} });
   });
   (d.links ?? []).forEach((l, i) => {
     const at = ["links", i];
+    const id2 = l.id !== void 0 ? idAt([...at, "id"], l.id) : void 0;
+    const length = quantity("length", [...at, "length_km"], l.length_km);
+    const latency = quantity("latency", [...at, "latency_ms"], l.latency_ms);
+    const capacity = quantity("capacity", [...at, "capacity_gbps"], l.capacity_gbps);
+    const weight = quantity("weight", [...at, "weight"], l.weight);
     b.addLink({
-      what: l.id !== void 0 ? `link "${String(l.id)}" (links[${i}])` : `links[${i}]`,
-      ...l.id !== void 0 ? { id: String(l.id) } : {},
-      source: String(l.between[0]),
-      target: String(l.between[1]),
+      what: id2 !== void 0 ? `link "${id2}" (links[${i}])` : `links[${i}]`,
+      ...id2 !== void 0 ? { id: id2 } : {},
+      source: idAt([...at, "between", 0], l.between[0]),
+      target: idAt([...at, "between", 1], l.between[1]),
       pos: loc.pos(at),
       sourcePos: loc.pos([...at, "between", 0]),
       targetPos: loc.pos([...at, "between", 1]),
-      ...l.length_km !== void 0 ? { length: l.length_km } : {},
-      ...l.latency_ms !== void 0 ? { latency: l.latency_ms } : {},
-      ...l.capacity_gbps !== void 0 ? { capacity: l.capacity_gbps } : {},
-      riskGroups: (l.risk_groups ?? []).map(String),
-      hardened: l.hardened ?? false
+      ...length !== void 0 ? { length } : {},
+      ...latency !== void 0 ? { latency } : {},
+      ...capacity !== void 0 ? { capacity } : {},
+      ...weight !== void 0 ? { weight } : {},
+      riskGroups: (l.risk_groups ?? []).map((g, k) => idAt([...at, "risk_groups", k], g)),
+      hardened: l.hardened ?? false,
+      ...l.attributes ? { attrs: l.attributes } : {}
     });
   });
   (d.demands ?? []).forEach((dm, i) => {
     const at = ["demands", i];
-    b.addDemand(String(dm.between[0]), String(dm.between[1]), dm.volume, loc.pos(at), [
+    const volume = quantity("volume", [...at, "volume"], dm.volume);
+    b.addDemand(idAt([...at, "between", 0], dm.between[0]), idAt([...at, "between", 1], dm.between[1]), volume, loc.pos(at), [
       loc.pos([...at, "between", 0]),
       loc.pos([...at, "between", 1])
     ], `demands[${i}]`);
@@ -15294,6 +15731,7 @@ var init_native = __esm({
     init_errors();
     init_builder();
     init_suggest();
+    init_quantities();
     init_nesting();
     MAX_ALIAS_COUNT = 50;
     Ajv = import_ajv.default.default ?? import_ajv.default;
@@ -15321,10 +15759,10 @@ var init_native = __esm({
         return void 0;
       }
       /** The YAML node at a path (the deepest one that exists) and whether it was found whole. */
-      node(path7) {
+      node(path11) {
         let cur = this.doc.contents;
         let last = cur ?? void 0;
-        for (const key of path7) {
+        for (const key of path11) {
           const next = this.child(cur, key);
           if (next === void 0 || next === null) return { node: last, exact: false };
           cur = next;
@@ -15332,13 +15770,25 @@ var init_native = __esm({
         }
         return { node: last, exact: true };
       }
-      pos(path7) {
-        const { node } = this.node(path7);
+      /** The source text of the plain scalar at `path` (a number as written), if there is one. */
+      source(path11) {
+        let { node, exact } = this.node(path11);
+        if (!exact) return void 0;
+        if ((0, import_yaml2.isAlias)(node)) node = node.resolve(this.doc);
+        return (0, import_yaml2.isScalar)(node) && typeof node.source === "string" ? node.source : void 0;
+      }
+      /** `prefix + source + suffix` when the scalar at `path` has source text, else ''. */
+      written(path11, prefix, suffix) {
+        const s = this.source(path11);
+        return s === void 0 ? "" : `${prefix}${s}${suffix}`;
+      }
+      pos(path11) {
+        const { node } = this.node(path11);
         return node?.range ? this.at(node.range[0]) : { line: 1, column: 1 };
       }
       /** Where the key `name` of the map at `path` is written. */
-      keyPos(path7, name) {
-        let { node } = this.node(path7);
+      keyPos(path11, name) {
+        let { node } = this.node(path11);
         if ((0, import_yaml2.isAlias)(node)) node = node.resolve(this.doc);
         if ((0, import_yaml2.isMap)(node)) {
           for (const item of node.items) {
@@ -15346,7 +15796,7 @@ var init_native = __esm({
             if ((0, import_yaml2.isScalar)(k) && String(k.value) === name && k.range) return this.at(k.range[0]);
           }
         }
-        return this.pos(path7);
+        return this.pos(path11);
       }
     };
     TYPE_WORDS = {
@@ -15362,13 +15812,21 @@ var init_native = __esm({
 });
 
 // src/topology/attributes.ts
-function toNumber(v) {
-  if (typeof v === "number") return Number.isFinite(v) ? v : void 0;
+function isNodeField(name) {
+  return Object.hasOwn(NODE_FIELDS, name.toLowerCase());
+}
+function isLinkField(name) {
+  return Object.hasOwn(LINK_FIELDS, name.toLowerCase());
+}
+function numeral(v) {
+  if (typeof v === "number") return v;
   if (typeof v !== "string") return void 0;
   const s = v.trim();
-  if (s === "" || !/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(s)) return void 0;
-  const n = Number(s);
-  return Number.isFinite(n) ? n : void 0;
+  return s !== "" && NUMERAL.test(s) ? Number(s) : void 0;
+}
+function toNumber(v) {
+  const n = numeral(v);
+  return n !== void 0 && Number.isFinite(n) ? n : void 0;
 }
 function toFlag(v) {
   if (typeof v === "boolean") return v;
@@ -15379,34 +15837,46 @@ function toFlag(v) {
   if (["0", "false", "no", "n", ""].includes(s)) return false;
   return void 0;
 }
-function mapNodeAttributes(raw, b, posOf) {
+function sourceOf(where) {
+  if (typeof where === "function") return { pos: where, text: () => void 0 };
+  return { pos: where.pos, text: where.text ?? (() => void 0) };
+}
+function mapNodeAttributes(raw, b, where) {
+  const src = sourceOf(where);
+  const posOf = src.pos;
+  const written = (name, value2) => src.text(name) ?? text(value2);
   const out = { attrs: {} };
+  const hasLabel = Object.keys(raw).some((k) => k.toLowerCase() === "label");
   let x;
   let y;
   let lat;
   let lon;
-  for (const [name, value] of Object.entries(raw)) {
+  for (const [name, value2] of Object.entries(raw)) {
     const field = NODE_FIELDS[name.toLowerCase()];
-    if (field === "label") out.label = text(value);
-    else if (field === "kind") out.kind = text(value);
+    if (field === "label") {
+      if (hasLabel && name.toLowerCase() !== "label") out.attrs[name] = value2;
+      else out.label = written(name, value2);
+    } else if (field === "kind") out.kind = written(name, value2);
     else if (field === "hardened") {
-      const f = toFlag(value);
-      if (f === void 0) throw b.error(`"${name}" must be true/false or 1/0, not "${text(value)}"`, posOf(name));
+      const f = toFlag(value2);
+      if (f === void 0) throw b.error(`"${name}" must be true/false or 1/0, not "${text(value2)}"`, posOf(name));
       out.hardened = f;
     } else if (field === "lat" || field === "lon" || field === "x" || field === "y") {
-      const n = toNumber(value);
+      const n = numeral(value2);
+      const bad = n === void 0 ? void 0 : nonNormal(n);
+      if (bad) throw b.error(`node coordinate "${name}" ${bad} ("${written(name, value2)}")`, posOf(name), "write a plain decimal number of degrees");
       if (n === void 0) {
-        b.warn(`node coordinate "${name}" is not a number ("${text(value)}"); ignored`, posOf(name));
-        out.attrs[name] = value;
+        b.warn(`node coordinate "${name}" is not a number ("${text(value2)}"); ignored`, posOf(name));
+        out.attrs[name] = value2;
         continue;
       }
       if (field === "lat") lat = [n, name];
       else if (field === "lon") lon = [n, name];
       else if (field === "x") x = [n, name];
       else y = [n, name];
-      out.attrs[name] = value;
+      out.attrs[name] = value2;
     } else {
-      out.attrs[name] = value;
+      out.attrs[name] = value2;
     }
   }
   if (lat === void 0 && lon === void 0 && x !== void 0 && y !== void 0) {
@@ -15429,42 +15899,49 @@ function mapNodeAttributes(raw, b, posOf) {
   }
   return out;
 }
-function mapLinkAttributes(raw, b, posOf) {
+function mapLinkAttributes(raw, b, where) {
+  const src = sourceOf(where);
+  const posOf = src.pos;
   const out = { attrs: {} };
-  for (const [name, value] of Object.entries(raw)) {
+  for (const [name, value2] of Object.entries(raw)) {
     const field = LINK_FIELDS[name.toLowerCase()];
     if (field === void 0) {
-      out.attrs[name] = value;
+      out.attrs[name] = value2;
       continue;
     }
     if (field === "riskGroups") {
-      out.riskGroups = text(value).split(";").map((s) => s.trim()).filter((s) => s !== "");
+      out.riskGroups = (src.text(name) ?? text(value2)).split(";").map((s) => s.trim()).filter((s) => s !== "");
       continue;
     }
     if (field === "hardened") {
-      const f = toFlag(value);
-      if (f === void 0) throw b.error(`"${name}" must be true/false or 1/0, not "${text(value)}"`, posOf(name));
+      const f = toFlag(value2);
+      if (f === void 0) throw b.error(`"${name}" must be true/false or 1/0, not "${text(value2)}"`, posOf(name));
       out.hardened = f;
       continue;
     }
-    if (typeof value === "string" && value.trim() === "") continue;
-    const n = toNumber(value);
+    if (typeof value2 === "string" && value2.trim() === "") continue;
+    const n = numeral(value2);
+    const as = src.text(name) ?? text(value2);
     if (field === "bitrate") {
-      if (n !== void 0 && n >= 0) out.capacity ??= n / 1e9;
-      out.attrs[name] = value;
+      const gbps = n === void 0 ? void 0 : n / 1e9;
+      if (gbps !== void 0 && quantityProblem("capacity", gbps) === void 0) out.capacity ??= gbps;
+      else b.warn(`link ${name} "${as}" is not a speed in bit/s that netbrace accepts; not read as the capacity`, posOf(name));
+      out.attrs[name] = value2;
       continue;
     }
-    if (n === void 0) throw b.error(`link ${name} must be a number, not "${text(value)}"`, posOf(name), "write a plain decimal number");
-    if (n < 0) throw b.error(`link ${name} must not be negative (${n})`, posOf(name));
+    if (n === void 0) throw b.error(`link ${name} must be a number, not "${as}"`, posOf(name), "write a plain decimal number");
+    const problem = quantityProblem(field, n, as);
+    if (problem) throw b.error(`link ${name} ${problem.message}`, posOf(name), problem.hint);
     if (field === "capacity") out.capacity = n;
     else out[field] = n;
   }
   return out;
 }
-var NODE_FIELDS, LINK_FIELDS, text;
+var NODE_FIELDS, LINK_FIELDS, NUMERAL, text;
 var init_attributes = __esm({
   "src/topology/attributes.ts"() {
     "use strict";
+    init_quantities();
     NODE_FIELDS = {
       label: "label",
       name: "label",
@@ -15502,6 +15979,7 @@ var init_attributes = __esm({
       srlgs: "riskGroups",
       hardened: "hardened"
     };
+    NUMERAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
     text = (v) => typeof v === "string" ? v : String(v);
   }
 });
@@ -15535,19 +16013,32 @@ function scalarId(p) {
 function parseGml(text2, file, options = {}, format = "gml") {
   const b = new TopologyBuilder(file, format, options);
   const top = new GmlReader(text2, b).readList();
-  const graph = top.find((p) => p.key === "graph");
+  const graphs = top.filter((p) => p.key === "graph");
+  const graph = graphs[0];
   if (!graph || !Array.isArray(graph.value)) {
     throw b.error('no "graph [ ... ]" list in this file', top[0]?.pos ?? { line: 1, column: 1 }, "a GML design is `graph [ node [ id 1 ] ... edge [ source 1 target 2 ] ]`");
   }
+  if (graphs.length > 1) {
+    throw b.error(
+      `a second top-level graph (the first begins on line ${graph.pos.line})`,
+      graphs[1].pos,
+      "netbrace reads one design per file: put each graph in a file of its own"
+    );
+  }
+  refuseNestedGraphs(graph.value, b);
   const metadata = {};
   let name;
   let network;
+  let directed = false;
   const edges = [];
   for (const p of graph.value) {
     if (p.key === "node" && Array.isArray(p.value)) readNode(p, p.value, b);
     else if (p.key === "edge" && Array.isArray(p.value)) edges.push(p);
     else if (p.key === "directed") {
-      if (p.value !== 0) b.warn('the graph is directed ("directed 1"); links are read as undirected', p.pos);
+      if (p.value !== 0) {
+        directed = true;
+        b.directed(p.pos, '"directed 1"');
+      }
     } else if (p.key === "multigraph") {
     } else {
       if (p.key === "label" && typeof p.value === "string") name = p.value;
@@ -15555,50 +16046,81 @@ function parseGml(text2, file, options = {}, format = "gml") {
       metadata[p.key] = Array.isArray(p.value) ? toPlain(p.value) : p.value;
     }
   }
-  for (const e of edges) readEdge(e, e.value, b);
+  for (const e of edges) readEdge(e, e.value, b, directed);
   const resolved = name ?? network;
   return b.finish({ ...resolved !== void 0 ? { name: resolved } : {}, metadata });
 }
-function readNode(node, body, b) {
-  let id;
+function refuseNestedGraphs(pairs, b) {
+  for (const p of pairs) {
+    if (!Array.isArray(p.value)) continue;
+    if (p.key === "graph") {
+      throw b.error("a nested graph: netbrace reads one flat graph per file", p.pos, "list its nodes and edges in the top-level graph (node ids must stay unique)");
+    }
+    refuseNestedGraphs(p.value, b);
+  }
+}
+function bodyAttributes(body, what, b, read) {
   const raw = {};
   const where = /* @__PURE__ */ new Map();
+  const written = /* @__PURE__ */ new Map();
+  const first = /* @__PURE__ */ new Map();
+  const repeated = /* @__PURE__ */ new Set();
   for (const p of body) {
-    if (p.key === "id") {
-      id = scalarId(p);
-      if (id === void 0) throw b.error('node "id" must be a number or a string', p.pos);
+    const value2 = Array.isArray(p.value) ? toPlain(p.value) : p.value;
+    const earlier = first.get(p.key);
+    if (earlier !== void 0) {
+      if (read(p.key)) {
+        throw b.error(`${what} has "${p.key}" twice (lines ${earlier.pos.line} and ${p.pos.line})`, p.pos, `keep one; the first is on line ${earlier.pos.line}`);
+      }
+      raw[p.key] = repeated.has(p.key) ? [...raw[p.key], value2] : [raw[p.key], value2];
+      repeated.add(p.key);
       continue;
     }
-    raw[p.key] = Array.isArray(p.value) ? toPlain(p.value) : p.value;
+    first.set(p.key, p);
+    raw[p.key] = value2;
     where.set(p.key, p.pos);
+    if (typeof p.value === "number") written.set(p.key, p.raw);
   }
-  if (id === void 0) throw b.error('node without "id"', node.pos, "every GML node needs `id N`");
-  const mapped = mapNodeAttributes(raw, b, (k) => where.get(k) ?? node.pos);
-  b.addNode({ id, pos: node.pos, ...mapped });
+  return { raw, where, written, first };
 }
-function readEdge(edge, body, b) {
-  let source;
-  let target;
-  let id;
-  const raw = {};
-  const where = /* @__PURE__ */ new Map();
-  for (const p of body) {
-    if (p.key === "source") source = p;
-    else if (p.key === "target") target = p;
-    else if (p.key === "id" && !Array.isArray(p.value)) id = scalarId(p);
-    else {
-      raw[p.key] = Array.isArray(p.value) ? toPlain(p.value) : p.value;
-      where.set(p.key, p.pos);
-    }
-  }
+function readNode(node, body, b) {
+  const { raw, where, written, first } = bodyAttributes(body, `the node on line ${node.pos.line}`, b, (k) => k === "id" || isNodeField(k));
+  const idPair = first.get("id");
+  if (idPair === void 0) throw b.error('node without "id"', node.pos, "every GML node needs `id N`");
+  const id2 = scalarId(idPair);
+  if (id2 === void 0) throw b.error('node "id" must be a number or a string', idPair.pos);
+  delete raw.id;
+  const mapped = mapNodeAttributes(raw, b, { pos: (k) => where.get(k) ?? node.pos, text: (k) => written.get(k) });
+  b.addNode({ id: id2, pos: node.pos, ...mapped });
+}
+function readEdge(edge, body, b, directed) {
+  const ends = (k) => k === "id" || k === "source" || k === "target";
+  const { raw, where, written, first } = bodyAttributes(body, `the edge on line ${edge.pos.line}`, b, (k) => ends(k) || isLinkField(k));
+  const source = first.get("source");
+  const target = first.get("target");
+  const idPair = first.get("id");
+  const id2 = idPair !== void 0 ? scalarId(idPair) : void 0;
+  if (id2 !== void 0) delete raw.id;
+  delete raw.source;
+  delete raw.target;
   if (!source || !target) {
     throw b.error(`edge without "${source ? "target" : "source"}"`, edge.pos, "every GML edge needs `source N target M`");
   }
   const s = scalarId(source);
   const d = scalarId(target);
   if (s === void 0 || d === void 0) throw b.error('edge "source" and "target" must be node ids', edge.pos);
-  const mapped = mapLinkAttributes(raw, b, (k) => where.get(k) ?? edge.pos);
-  b.addLink({ what: id !== void 0 ? `edge "${id}"` : "edge", ...id !== void 0 ? { id } : {}, source: s, target: d, pos: edge.pos, sourcePos: source.pos, targetPos: target.pos, ...mapped });
+  const mapped = mapLinkAttributes(raw, b, { pos: (k) => where.get(k) ?? edge.pos, text: (k) => written.get(k) });
+  b.addLink({
+    what: id2 !== void 0 ? `edge "${id2}"` : "edge",
+    ...id2 !== void 0 ? { id: id2 } : {},
+    source: s,
+    target: d,
+    pos: edge.pos,
+    sourcePos: source.pos,
+    targetPos: target.pos,
+    ...mapped,
+    ...directed ? { arc: true } : {}
+  });
 }
 var ENTITIES, KEY, NUMBER, GmlReader;
 var init_gml = __esm({
@@ -15681,9 +16203,9 @@ var init_gml = __esm({
             throw this.b.error(`lists nest deeper than ${MAX_NESTING} levels`, vpos, "a GML design needs a few levels (graph, node, graphics); flatten this structure");
           }
           this.i++;
-          const value = this.readList(vpos);
+          const value2 = this.readList(vpos);
           this.depth--;
-          return { key, value, raw: "", pos };
+          return { key, value: value2, raw: "", pos };
         }
         if (c === '"') {
           const start = this.i + 1;
@@ -15700,10 +16222,10 @@ var init_gml = __esm({
           return { key, value: unescape(raw), raw, pos };
         }
         NUMBER.lastIndex = this.i;
-        const num2 = NUMBER.exec(t);
-        if (num2) {
-          this.i += num2[0].length;
-          return { key, value: Number(num2[0]), raw: num2[0], pos };
+        const num3 = NUMBER.exec(t);
+        if (num3) {
+          this.i += num3[0].length;
+          return { key, value: Number(num3[0]), raw: num3[0], pos };
         }
         throw this.b.error(`value of "${key}" is not a number, a "string" or a [ list ]`, vpos);
       }
@@ -16668,16 +17190,16 @@ var require_saxes = __commonJS({
                 const { entityReturnState } = this;
                 const entity = this.entity + chunk.slice(start, this.prevI);
                 this.state = entityReturnState;
-                let parsed;
+                let parsed2;
                 if (entity === "") {
                   this.fail("empty entity name.");
-                  parsed = "&;";
+                  parsed2 = "&;";
                 } else {
-                  parsed = this.parseEntity(entity);
+                  parsed2 = this.parseEntity(entity);
                   this.entity = "";
                 }
                 if (entityReturnState !== S_TEXT || this.textHandler !== void 0) {
-                  this.text += parsed;
+                  this.text += parsed2;
                 }
                 break loop;
               }
@@ -16967,12 +17489,12 @@ var require_saxes = __commonJS({
         if (c === EOC) {
           return;
         }
-        const value = this.text;
+        const value2 = this.text;
         this.text = "";
         switch (this.name) {
           case "version": {
             this.xmlDeclExpects = ["encoding", "standalone"];
-            const version = value;
+            const version = value2;
             this.xmlDecl.version = version;
             if (!/^1\.[0-9]+$/.test(version)) {
               this.fail("version number must match /^1\\.[0-9]+$/.");
@@ -16982,18 +17504,18 @@ var require_saxes = __commonJS({
             break;
           }
           case "encoding":
-            if (!/^[A-Za-z][A-Za-z0-9._-]*$/.test(value)) {
+            if (!/^[A-Za-z][A-Za-z0-9._-]*$/.test(value2)) {
               this.fail("encoding value must match /^[A-Za-z0-9][A-Za-z0-9._-]*$/.");
             }
             this.xmlDeclExpects = ["standalone"];
-            this.xmlDecl.encoding = value;
+            this.xmlDecl.encoding = value2;
             break;
           case "standalone":
-            if (value !== "yes" && value !== "no") {
+            if (value2 !== "yes" && value2 !== "no") {
               this.fail('standalone value must match "yes" or "no".');
             }
             this.xmlDeclExpects = [];
-            this.xmlDecl.standalone = value;
+            this.xmlDecl.standalone = value2;
             break;
           default:
         }
@@ -17360,28 +17882,28 @@ var require_saxes = __commonJS({
           this.reportedTextAfterRoot = true;
         }
       }
-      pushAttribNS(name, value) {
+      pushAttribNS(name, value2) {
         var _a;
         const { prefix, local } = this.qname(name);
-        const attr = { name, prefix, local, value };
+        const attr = { name, prefix, local, value: value2 };
         this.attribList.push(attr);
         (_a = this.attributeHandler) === null || _a === void 0 ? void 0 : _a.call(this, attr);
         if (prefix === "xmlns") {
-          const trimmed = value.trim();
+          const trimmed = value2.trim();
           if (this.currentXMLVersion === "1.0" && trimmed === "") {
             this.fail("invalid attempt to undefine prefix in XML 1.0");
           }
           this.topNS[local] = trimmed;
           nsPairCheck(this, local, trimmed);
         } else if (name === "xmlns") {
-          const trimmed = value.trim();
+          const trimmed = value2.trim();
           this.topNS[""] = trimmed;
           nsPairCheck(this, "", trimmed);
         }
       }
-      pushAttribPlain(name, value) {
+      pushAttribPlain(name, value2) {
         var _a;
-        const attr = { name, value };
+        const attr = { name, value: value2 };
         this.attribList.push(attr);
         (_a = this.attributeHandler) === null || _a === void 0 ? void 0 : _a.call(this, attr);
       }
@@ -17510,11 +18032,11 @@ var require_saxes = __commonJS({
       processAttribsPlain() {
         const { attribList } = this;
         const attributes = this.tag.attributes;
-        for (const { name, value } of attribList) {
+        for (const { name, value: value2 } of attribList) {
           if (attributes[name] !== void 0) {
             this.fail(`duplicate attribute: ${name}.`);
           }
-          attributes[name] = value;
+          attributes[name] = value2;
         }
         this.attribList = [];
       }
@@ -17602,17 +18124,17 @@ var require_saxes = __commonJS({
           this.fail(this.isName(entity) ? "undefined entity." : "disallowed character in entity name.");
           return `&${entity};`;
         }
-        let num2 = NaN;
+        let num3 = NaN;
         if (entity[1] === "x" && /^#x[0-9a-f]+$/i.test(entity)) {
-          num2 = parseInt(entity.slice(2), 16);
+          num3 = parseInt(entity.slice(2), 16);
         } else if (/^#[0-9]+$/.test(entity)) {
-          num2 = parseInt(entity.slice(1), 10);
+          num3 = parseInt(entity.slice(1), 10);
         }
-        if (!this.isChar(num2)) {
+        if (!this.isChar(num3)) {
           this.fail("malformed character entity.");
           return `&${entity};`;
         }
-        return String.fromCodePoint(num2);
+        return String.fromCodePoint(num3);
       }
     };
     exports.SaxesParser = SaxesParser2;
@@ -17644,6 +18166,7 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
   const stack = [];
   let current;
   let graphDepth = 0;
+  const directedGraphs = [];
   let currentKey;
   let dataKey;
   let dataPos = { line: 1, column: 1 };
@@ -17651,16 +18174,10 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
   let dataNested = false;
   let defaultText;
   let sawRoot = false;
-  let warnedDirected = false;
   let warnedNested = false;
   let tagStart = { line: 1, column: 1 };
   let graphId;
   const here = () => ({ line: parser.line, column: parser.column + 1 });
-  const directed = (pos, how) => {
-    if (warnedDirected) return;
-    warnedDirected = true;
-    b.warn(`the graph is directed (${how}); links are read as undirected`, pos);
-  };
   parser.on("error", (err) => {
     const message = err.message.replace(/^(?:[^:\n]*:)?\d+:\d+: /, "").replace(/\.$/, "");
     throw b.error(`malformed XML: ${message}`, here(), "the file is not well-formed XML; check the tag at this point");
@@ -17694,10 +18211,10 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
         sawRoot = true;
         break;
       case "key": {
-        const id = attrs.id;
-        if (id === void 0) throw b.error('<key> without an "id"', pos);
-        currentKey = { name: attrs["attr.name"] ?? id, domain: attrs.for ?? "all", type: attrs["attr.type"] ?? "string" };
-        keys.set(id, currentKey);
+        const id2 = attrs.id;
+        if (id2 === void 0) throw b.error('<key> without an "id"', pos);
+        currentKey = { name: attrs["attr.name"] ?? id2, domain: attrs.for ?? "all", type: attrs["attr.type"] ?? "string" };
+        keys.set(id2, currentKey);
         break;
       }
       case "default":
@@ -17710,19 +18227,27 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
           warnedNested = true;
           b.warn("nested <graph> found; its nodes and edges are read into the one design", pos);
         }
-        if (attrs.edgedefault === "directed") directed(pos, 'edgedefault="directed"');
+        directedGraphs.push(attrs.edgedefault === "directed");
+        if (attrs.edgedefault === "directed") b.directed(pos, 'edgedefault="directed"');
         break;
       case "node":
         if (attrs.id === void 0) throw b.error('<node> without an "id"', pos, 'every GraphML node needs id="..."');
-        current = { pos, attrs, data: {}, dataPos: /* @__PURE__ */ new Map() };
+        current = { pos, attrs, data: {}, dataPos: /* @__PURE__ */ new Map(), dataText: /* @__PURE__ */ new Map() };
         nodes.push(current);
         break;
       case "edge":
         if (attrs.source === void 0 || attrs.target === void 0) {
           throw b.error(`<edge> without a "${attrs.source === void 0 ? "source" : "target"}"`, pos, 'every GraphML edge needs source="..." and target="..."');
         }
-        if (attrs.directed === "true") directed(pos, 'an edge has directed="true"');
-        current = { pos, attrs, data: {}, dataPos: /* @__PURE__ */ new Map() };
+        if (attrs.directed === "true") b.directed(pos, 'an edge has directed="true"');
+        current = {
+          pos,
+          attrs,
+          data: {},
+          dataPos: /* @__PURE__ */ new Map(),
+          dataText: /* @__PURE__ */ new Map(),
+          arc: attrs.directed === "true" || attrs.directed !== "false" && directedGraphs[directedGraphs.length - 1] === true
+        };
         edges.push(current);
         break;
       case "hyperedge":
@@ -17752,12 +18277,14 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
       case "data": {
         const def = keys.get(dataKey ?? "");
         const attrName = def?.name ?? dataKey ?? "";
-        const value = typed(dataNested ? dataText.trim() : dataText, def?.type ?? "string");
+        const written = dataNested ? dataText.trim() : dataText;
+        const value2 = typed(written, def?.type ?? "string");
         if (current) {
-          current.data[attrName] = value;
+          current.data[attrName] = value2;
           current.dataPos.set(attrName, dataPos);
+          current.dataText.set(attrName, written);
         } else if (graphDepth > 0) {
-          metadata[attrName] = value;
+          metadata[attrName] = value2;
         }
         dataKey = void 0;
         break;
@@ -17775,6 +18302,7 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
         break;
       case "graph":
         graphDepth--;
+        directedGraphs.pop();
         break;
       default:
         break;
@@ -17786,22 +18314,35 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
   const nodeDefaults = defaults("node");
   const edgeDefaults = defaults("edge");
   const withDefaults = (el, defs) => {
-    for (const k of defs) if (!(k.name in el.data)) el.data[k.name] = typed(k.default, k.type);
+    for (const k of defs) {
+      if (k.name in el.data) continue;
+      el.data[k.name] = typed(k.default, k.type);
+      el.dataText.set(k.name, k.default);
+    }
     return el.data;
   };
+  const sourceOf2 = (el) => ({ pos: (k) => el.dataPos.get(k) ?? el.pos, text: (k) => el.dataText.get(k) });
   for (const n of nodes) {
-    const mapped = mapNodeAttributes(withDefaults(n, nodeDefaults), b, (k) => n.dataPos.get(k) ?? n.pos);
+    const mapped = mapNodeAttributes(withDefaults(n, nodeDefaults), b, sourceOf2(n));
     b.addNode({ id: n.attrs.id, pos: n.pos, ...mapped });
   }
   for (const e of edges) {
     const data = withDefaults(e, edgeDefaults);
-    let id = e.attrs.id;
-    if (id === void 0 && "id" in data) {
-      id = String(data.id);
+    let id2 = e.attrs.id;
+    if (id2 === void 0 && "id" in data) {
+      id2 = e.dataText.get("id") ?? String(data.id);
       delete data.id;
     }
-    const mapped = mapLinkAttributes(data, b, (k) => e.dataPos.get(k) ?? e.pos);
-    b.addLink({ what: id !== void 0 ? `edge "${id}"` : "edge", ...id !== void 0 ? { id } : {}, source: e.attrs.source, target: e.attrs.target, pos: e.pos, ...mapped });
+    const mapped = mapLinkAttributes(data, b, sourceOf2(e));
+    b.addLink({
+      what: id2 !== void 0 ? `edge "${id2}"` : "edge",
+      ...id2 !== void 0 ? { id: id2 } : {},
+      source: e.attrs.source,
+      target: e.attrs.target,
+      pos: e.pos,
+      ...mapped,
+      ...e.arc ? { arc: true } : {}
+    });
   }
   const name = metadata.label ?? metadata.Network ?? metadata.name ?? graphId;
   return b.finish({ ...typeof name === "string" ? { name } : {}, metadata });
@@ -17842,7 +18383,7 @@ function* csvRows(text2, b) {
     const cells = [];
     for (; ; ) {
       const pos = { line, column: i - lineStart + 1 };
-      let value = "";
+      let value2 = "";
       if (text2[i] === '"') {
         i++;
         for (; ; ) {
@@ -17850,7 +18391,7 @@ function* csvRows(text2, b) {
           const c = text2[i];
           if (c === '"') {
             if (text2[i + 1] === '"') {
-              value += '"';
+              value2 += '"';
               i += 2;
               continue;
             }
@@ -17861,7 +18402,7 @@ function* csvRows(text2, b) {
             line++;
             lineStart = i + 1;
           }
-          value += c;
+          value2 += c;
           i++;
         }
         if (i < n && text2[i] !== "," && text2[i] !== "\n" && text2[i] !== "\r") {
@@ -17870,10 +18411,10 @@ function* csvRows(text2, b) {
       } else {
         const start = i;
         while (i < n && text2[i] !== "," && text2[i] !== "\n" && text2[i] !== "\r") i++;
-        value = text2.slice(start, i);
-        if (value.includes('"')) throw b.error("a double quote inside an unquoted field", pos, 'quote the whole field and double the quote: "a ""b"""');
+        value2 = text2.slice(start, i);
+        if (value2.includes('"')) throw b.error("a double quote inside an unquoted field", pos, 'quote the whole field and double the quote: "a ""b"""');
       }
-      cells.push({ text: value, pos });
+      cells.push({ text: value2, pos });
       if (i < n && text2[i] === ",") {
         i++;
         continue;
@@ -17887,6 +18428,16 @@ function* csvRows(text2, b) {
     lineStart = i;
     if (cells.length === 1 && cells[0].text.trim() === "") continue;
     yield { cells, end };
+  }
+}
+function csvHasEdgeHeader(text2) {
+  try {
+    const first = csvRows(text2, new TopologyBuilder("", "csv")).next();
+    if (first.done) return false;
+    const names = first.value.cells.map((c) => c.text.trim().toLowerCase());
+    return names.includes("source") && names.includes("target");
+  } catch {
+    return false;
   }
 }
 function parseEdgeList(text2, file, options = {}, format = "csv") {
@@ -17929,9 +18480,9 @@ function parseEdgeList(text2, file, options = {}, format = "csv") {
     const pos = cells[0].pos;
     const ends = [cells[src], cells[dst]];
     for (const c of ends) {
-      const id2 = c.text.trim();
-      if (id2 === "") throw b.error(`empty ${c === cells[src] ? "source" : "target"}`, c.pos, "every row needs both link ends");
-      if (!b.hasNode(id2)) b.addNode({ id: id2, pos: c.pos });
+      const id3 = c.text.trim();
+      if (id3 === "") throw b.error(`empty ${c === cells[src] ? "source" : "target"}`, c.pos, "every row needs both link ends");
+      if (!b.hasNode(id3)) b.addNode({ id: id3, pos: c.pos });
     }
     const raw = {};
     const where = /* @__PURE__ */ new Map();
@@ -17941,10 +18492,10 @@ function parseEdgeList(text2, file, options = {}, format = "csv") {
       where.set(h, cells[k].pos);
     });
     const mapped = mapLinkAttributes(raw, b, (k) => where.get(k) ?? pos);
-    const id = idCol >= 0 ? cells[idCol].text.trim() : "";
+    const id2 = idCol >= 0 ? cells[idCol].text.trim() : "";
     b.addLink({
       what: `row ${r + 1}`,
-      ...id !== "" ? { id } : {},
+      ...id2 !== "" ? { id: id2 } : {},
       source: ends[0].text.trim(),
       target: ends[1].text.trim(),
       pos,
@@ -17960,6 +18511,369 @@ var init_edgelist = __esm({
     "use strict";
     init_builder();
     init_attributes();
+  }
+});
+
+// src/topology/geodesy.ts
+function greatCircleKm(lat1, lon1, lat2, lon2) {
+  const rad = Math.PI / 180;
+  const dLat = (lat2 - lat1) * rad;
+  const dLon = (lon2 - lon1) * rad;
+  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
+  return 2 * 6371.0088 * Math.asin(Math.min(1, Math.sqrt(a)));
+}
+var init_geodesy = __esm({
+  "src/topology/geodesy.ts"() {
+    "use strict";
+  }
+});
+
+// src/topology/corridors.ts
+function routeKm(route) {
+  let km = 0;
+  for (let i = 1; i < route.length; i++) km += greatCircleKm(route[i - 1][1], route[i - 1][0], route[i][1], route[i][0]);
+  return km;
+}
+function sample(route, stepM) {
+  const out = [];
+  for (let i = 1; i < route.length; i++) {
+    const [x0, y0] = route[i - 1];
+    const [x1, y1] = route[i];
+    const len = greatCircleKm(y0, x0, y1, x1) * 1e3;
+    const n = Math.max(1, Math.ceil(len / stepM));
+    for (let k = i === 1 ? 0 : 1; k <= n; k++) {
+      const t = k / n;
+      out.push({ p: [x0 + (x1 - x0) * t, y0 + (y1 - y0) * t], m: k === 0 ? 0 : len / n });
+    }
+  }
+  return out;
+}
+function pointSegmentM(p, q0, q1) {
+  const kx = Math.cos(p[1] * RAD) * RAD * EARTH_M;
+  const ky = RAD * EARTH_M;
+  const ax = (q0[0] - p[0]) * kx;
+  const ay = (q0[1] - p[1]) * ky;
+  const bx = (q1[0] - p[0]) * kx;
+  const by = (q1[1] - p[1]) * ky;
+  const dx = bx - ax;
+  const dy = by - ay;
+  const len2 = dx * dx + dy * dy;
+  const t = len2 > 0 ? Math.min(1, Math.max(0, -(ax * dx + ay * dy) / len2)) : 0;
+  const cx = ax + t * dx;
+  const cy = ay + t * dy;
+  return Math.hypot(cx, cy);
+}
+function boxOf(route, padDeg) {
+  const b = { minX: Infinity, minY: Infinity, maxX: -Infinity, maxY: -Infinity };
+  for (const [x, y] of route) {
+    b.minX = Math.min(b.minX, x);
+    b.maxX = Math.max(b.maxX, x);
+    b.minY = Math.min(b.minY, y);
+    b.maxY = Math.max(b.maxY, y);
+  }
+  const padX = padDeg / Math.max(0.01, Math.cos((b.minY + b.maxY) / 2 * RAD));
+  return { minX: b.minX - padX, maxX: b.maxX + padX, minY: b.minY - padDeg, maxY: b.maxY + padDeg };
+}
+function sharedCorridors(routes, options = {}) {
+  const withinM = options.withinM ?? 50;
+  const minKm = options.minKm ?? 1;
+  const stepM = options.stepM ?? 25;
+  const padDeg = withinM / EARTH_M / RAD;
+  const boxes = routes.map((r) => boxOf(r, padDeg));
+  const samples = [];
+  const samplesOf = (a) => samples[a] ??= sample(routes[a], stepM);
+  const found = [];
+  for (let a = 0; a < routes.length; a++) {
+    if (routes[a].length < 2) continue;
+    for (let b = a + 1; b < routes.length; b++) {
+      if (routes[b].length < 2 || !overlaps(boxes[a], boxes[b])) continue;
+      let m = 0;
+      let from;
+      let to;
+      const box = boxes[b];
+      for (const s of samplesOf(a)) {
+        if (s.p[0] < box.minX || s.p[0] > box.maxX || s.p[1] < box.minY || s.p[1] > box.maxY) continue;
+        let near = false;
+        for (let i = 1; i < routes[b].length && !near; i++) near = pointSegmentM(s.p, routes[b][i - 1], routes[b][i]) <= withinM;
+        if (near) {
+          m += s.m;
+          from ??= s.p;
+          to = s.p;
+        }
+      }
+      if (m / 1e3 > minKm && from && to) found.push({ a, b, km: m / 1e3, from, to });
+    }
+  }
+  return found.sort((x, y) => y.km - x.km || x.a - y.a || x.b - y.b);
+}
+var EARTH_M, RAD, overlaps;
+var init_corridors = __esm({
+  "src/topology/corridors.ts"() {
+    "use strict";
+    init_geodesy();
+    EARTH_M = 63710088e-1;
+    RAD = Math.PI / 180;
+    overlaps = (a, b) => a.minX <= b.maxX && b.minX <= a.maxX && a.minY <= b.maxY && b.minY <= a.maxY;
+  }
+});
+
+// src/topology/geojson.ts
+function isObject(v) {
+  return typeof v === "object" && v !== null && !Array.isArray(v);
+}
+function nodeAt(from, path11) {
+  let cur = from ?? void 0;
+  for (const k of path11) {
+    if ((0, import_yaml3.isMap)(cur)) cur = cur.get(k, true);
+    else if ((0, import_yaml3.isSeq)(cur) && typeof k === "number") cur = cur.items[k];
+    else return void 0;
+  }
+  return cur ?? void 0;
+}
+function crsProblem(crs) {
+  if (crs === void 0 || crs === null) return void 0;
+  const name = isObject(crs) && isObject(crs.properties) ? crs.properties.name : void 0;
+  const text2 = typeof name === "string" ? name : JSON.stringify(crs);
+  return /CRS84|EPSG:+4326\b|EPSG::?4979\b/i.test(text2) ? void 0 : text2;
+}
+function parseGeojson(text2, file, options = {}) {
+  const deep = yamlNestingExceeded(text2);
+  if (deep >= 0) throw new DesignError(`the GeoJSON nests deeper than ${MAX_NESTING} levels`, { file, ...positionOf(text2, deep) }, "a FeatureCollection needs a few levels only");
+  const lines = new import_yaml3.LineCounter();
+  const doc = (0, import_yaml3.parseDocument)(text2, { lineCounter: lines, uniqueKeys: true, prettyErrors: false });
+  const at = (offset) => {
+    const p = lines.linePos(offset);
+    return { line: p.line, column: p.col };
+  };
+  const where = (n, fallback = { line: 1, column: 1 }) => n?.range ? at(n.range[0]) : fallback;
+  if (doc.errors.length > 0) {
+    const e = doc.errors[0];
+    throw new DesignError(`GeoJSON syntax error: ${e.message.split("\n")[0]}`, { file, ...at(e.pos[0]) }, "fix the JSON at this point");
+  }
+  const root = doc.toJS({ maxAliasCount: 0 });
+  const b = new TopologyBuilder(file, "geojson", options);
+  const fail = (pos) => (message, hint = "") => {
+    throw b.error(message, pos, hint);
+  };
+  if (!isObject(root) || root.type !== "FeatureCollection" || !Array.isArray(root.features)) {
+    fail({ line: 1, column: 1 })('a GeoJSON design is a FeatureCollection with a "features" list', "points are sites, lines are links");
+  }
+  const rootMap = root;
+  const crs = crsProblem(rootMap.crs);
+  if (crs !== void 0) {
+    fail(where(nodeAt(doc.contents, ["crs"])))(`the coordinates are in another reference system (${crs.slice(0, 80)})`, "RFC 7946 GeoJSON is WGS 84 longitude/latitude: export the layer as EPSG:4326");
+  }
+  const featureNodes = nodeAt(doc.contents, ["features"]);
+  const features = rootMap.features.map((f, i) => {
+    const node = nodeAt(featureNodes, [i]);
+    const pos = where(node);
+    if (!isObject(f) || f.type !== "Feature") fail(pos)(`features[${i}] is not a Feature`);
+    const g = f.geometry;
+    if (g !== null && !(isObject(g) && typeof g.type === "string")) fail(pos)(`features[${i}] has no geometry object`, 'a Feature has "geometry": a Point (a site) or a LineString (a link)');
+    const props = f.properties;
+    return {
+      geometry: g,
+      properties: isObject(props) ? props : {},
+      ...f.id !== void 0 ? { id: f.id } : {},
+      pos,
+      node
+    };
+  });
+  const written = (f, path11, v) => {
+    if (typeof v !== "number") return String(v);
+    const n = nodeAt(f.node, path11);
+    return (0, import_yaml3.isScalar)(n) && typeof n.source === "string" ? n.source : String(v);
+  };
+  const idOf = (f) => {
+    const raw = f.properties.id ?? f.id;
+    if (raw === void 0 || raw === null || raw === "") return void 0;
+    return written(f, f.properties.id !== void 0 && f.properties.id !== null ? ["properties", "id"] : ["id"], raw);
+  };
+  const position = (f, path11, v, what) => {
+    const here = fail(where(nodeAt(f.node, path11), f.pos));
+    if (!Array.isArray(v) || v.length < 2 || typeof v[0] !== "number" || typeof v[1] !== "number") {
+      here(`${what} is not a [longitude, latitude] position`, "a position is two numbers, e.g. [-35.2, 45.45]");
+    }
+    const [lon, lat] = v;
+    const bad = nonNormal(lon) ?? nonNormal(lat);
+    if (bad) here(`${what} ${bad}`, "write plain decimal degrees");
+    if (lon < -180 || lon > 180 || lat < -90 || lat > 90) {
+      here(`${what} [${lon}, ${lat}] is outside longitude −180…180 / latitude −90…90`, "GeoJSON writes longitude first, in degrees of WGS 84 (RFC 7946 §3.1.1)");
+    }
+    return [lon, lat];
+  };
+  const sites = [];
+  features.forEach((f, i) => {
+    if (f.geometry === null) {
+      b.warn(`features[${i}] has no geometry (null); skipped`, f.pos, "give a site a Point and a link a LineString");
+      return;
+    }
+    if (f.geometry.type !== "Point") return;
+    const [lon, lat] = position(f, ["geometry", "coordinates"], f.geometry.coordinates, `site features[${i}]`);
+    const id2 = idOf(f);
+    if (id2 === void 0) fail(f.pos)(`site features[${i}] has no id`, 'give the feature an "id", or properties.id');
+    const rest = {};
+    const asWritten = {};
+    for (const [k, v] of Object.entries(f.properties)) {
+      if (k === "id") continue;
+      if (COORDINATE_NAMES.has(k.toLowerCase())) asWritten[k] = v;
+      else rest[k] = v;
+    }
+    const mapped = mapNodeAttributes(rest, b, { pos: (k) => where(nodeAt(f.node, ["properties", k]), f.pos), text: (k) => typeof rest[k] === "number" ? written(f, ["properties", k], rest[k]) : void 0 });
+    b.addNode({ id: id2, pos: f.pos, ...mapped, attrs: { ...mapped.attrs, ...asWritten }, lat, lon });
+    sites.push({ id: id2, lon, lat });
+  });
+  const nearest = (p) => {
+    let best;
+    let bestM = Infinity;
+    for (const s of sites) {
+      if (Math.abs(s.lat - p[1]) > END_TOLERANCE_DEG) continue;
+      const m = greatCircleKm(p[1], p[0], s.lat, s.lon) * 1e3;
+      if (m < bestM) [best, bestM] = [s.id, m];
+    }
+    return bestM <= END_TOLERANCE_M ? best : void 0;
+  };
+  const routes = [];
+  let linkCount = 0;
+  features.forEach((f, i) => {
+    if (f.geometry === null || f.geometry.type === "Point") return;
+    const type = f.geometry.type;
+    const here = fail(f.pos);
+    if (type !== "LineString" && type !== "MultiLineString") {
+      here(`features[${i}] is a ${type}: only Point (sites) and LineString or MultiLineString (links) are read`, "keep areas and other shapes in another file");
+    }
+    const coords = f.geometry.coordinates;
+    const partList = type === "LineString" ? [coords] : Array.isArray(coords) ? coords : [];
+    if (partList.length === 0) here(`link features[${i}] has no line`, "a MultiLineString holds a list of lines");
+    const parts = partList.map((part, k) => {
+      const base = type === "LineString" ? ["geometry", "coordinates"] : ["geometry", "coordinates", k];
+      if (!Array.isArray(part) || part.length < 2) {
+        fail(where(nodeAt(f.node, base), f.pos))(`link features[${i}] has a line with fewer than two positions`, "a line needs at least its two ends");
+      }
+      return part.map((p, j) => position(f, [...base, j], p, `position ${j} of link features[${i}]`));
+    });
+    const first = parts[0][0];
+    const last = parts[parts.length - 1][parts[parts.length - 1].length - 1];
+    for (let k = 1; k < parts.length; k++) {
+      const [a, c] = [parts[k - 1][parts[k - 1].length - 1], parts[k][0]];
+      const gapM = greatCircleKm(a[1], a[0], c[1], c[0]) * 1e3;
+      if (gapM > END_TOLERANCE_M) {
+        b.warn(
+          `link features[${i}] has a gap of ${(gapM / 1e3).toFixed(3)} km between lines ${k} and ${k + 1} of its MultiLineString; the length counts the lines only`,
+          where(nodeAt(f.node, ["geometry", "coordinates", k]), f.pos),
+          "join the lines, or give the length in properties.length_km"
+        );
+      }
+    }
+    const raw = f.properties;
+    const named = (a, c) => {
+      for (const k of [a, c]) if (raw[k] !== void 0 && raw[k] !== null && raw[k] !== "") return [k, raw[k]];
+      return void 0;
+    };
+    const nameOf = (n) => n ? written(f, ["properties", n[0]], n[1]) : void 0;
+    const ends = [nameOf(named("source", "from")) ?? nearest(first), nameOf(named("target", "to")) ?? nearest(last)];
+    for (const [k, e] of ends.entries()) {
+      if (e === void 0) {
+        const p = k === 0 ? first : last;
+        here(
+          `link features[${i}] ${k === 0 ? "starts" : "ends"} at [${p[0]}, ${p[1]}], more than ${END_TOLERANCE_M} m from every site`,
+          "move the line’s end onto its site, or name the sites in properties.source and properties.target"
+        );
+      }
+    }
+    const drawn = [nearest(first), nearest(last)];
+    if (named("source", "from") && named("target", "to") && drawn.every((d) => d !== void 0) && [...drawn].sort().join("\0") !== [...ends].sort().join("\0")) {
+      b.warn(
+        `link features[${i}] names the sites "${ends[0]}" and "${ends[1]}", but its line is drawn between "${drawn[0]}" and "${drawn[1]}"; the named sites are used`,
+        f.pos,
+        "check that the properties and the drawing describe the same link"
+      );
+    }
+    const { source: _s, target: _t, from: _f, to: _to, id: _id, risk_groups: groupsRaw, ...rest } = raw;
+    const listedGroups = Array.isArray(groupsRaw) ? groupsRaw.map((g, k) => written(f, ["properties", "risk_groups", k], g)).filter((g) => g !== "") : void 0;
+    const mapped = mapLinkAttributes(
+      listedGroups === void 0 && groupsRaw !== void 0 ? { ...rest, risk_groups: groupsRaw } : rest,
+      b,
+      { pos: (k) => where(nodeAt(f.node, ["properties", k]), f.pos), text: (k) => typeof raw[k] === "number" ? written(f, ["properties", k], raw[k]) : void 0 }
+    );
+    if (listedGroups !== void 0) mapped.riskGroups = listedGroups;
+    const measured = parts.reduce((s, p) => s + routeKm(p), 0);
+    if (mapped.length === void 0) {
+      const problem = quantityProblem("length", measured);
+      if (problem) here(`the line of link features[${i}] ${problem.message}`, "check the coordinates");
+    }
+    const id2 = idOf(f);
+    const added = b.addLink({
+      ...id2 !== void 0 ? { id: id2 } : {},
+      source: ends[0],
+      target: ends[1],
+      pos: f.pos,
+      ...mapped,
+      ...mapped.length === void 0 ? { length: measured } : {},
+      attrs: { ...mapped.attrs, route_km: Math.round(measured * 1e3) / 1e3, route: { type, coordinates: type === "LineString" ? parts[0] : parts } },
+      what: `link features[${i}]`
+    });
+    if (added && mapped.attrs[ROUTE_KNOWN] !== false) routes.push({ parts, linkIndex: linkCount, groups: mapped.riskGroups ?? [], pos: f.pos });
+    if (added) linkCount++;
+  });
+  const meta = rootMap.metadata;
+  const t = b.finish({
+    ...typeof rootMap.name === "string" ? { name: rootMap.name } : {},
+    ...isObject(meta) ? { metadata: meta } : {}
+  });
+  if (typeof rootMap.description === "string") t.description = rootMap.description;
+  const flat = [];
+  const owner = [];
+  routes.forEach((r, k) => {
+    for (const p of r.parts) {
+      flat.push(p);
+      owner.push(k);
+    }
+  });
+  const seen = /* @__PURE__ */ new Map();
+  for (const c of sharedCorridors(flat, { withinM: CORRIDOR_WITHIN_M, minKm: 0 })) {
+    const [a, z] = [owner[c.a], owner[c.b]];
+    if (a === z) continue;
+    const key = `${a}\0${z}`;
+    const prev = seen.get(key);
+    if (prev) prev.km += c.km;
+    else seen.set(key, { a, b: z, km: c.km, from: c.from, to: c.to });
+  }
+  const found = [...seen.values()].filter((c) => c.km > CORRIDOR_MIN_KM).sort((x, y) => y.km - x.km || x.a - y.a || x.b - y.b);
+  for (const c of found) {
+    const [ra, rb] = [routes[c.a], routes[c.b]];
+    if (ra.groups.some((g) => rb.groups.includes(g))) continue;
+    const [la, lb] = [t.links[ra.linkIndex], t.links[rb.linkIndex]];
+    const d = {
+      file,
+      line: ra.pos.line,
+      column: ra.pos.column,
+      severity: "warning",
+      message: `links "${la.id}" (line ${ra.pos.line}) and "${lb.id}" (line ${rb.pos.line}) run within ${CORRIDOR_WITHIN_M} m of each other for ${c.km.toFixed(1)} km, from [${c.from[0].toFixed(5)}, ${c.from[1].toFixed(5)}] to [${c.to[0].toFixed(5)}, ${c.to[1].toFixed(5)}]: a possible shared-risk group the design does not declare`,
+      hint: "if they share a duct, trench or bridge, give both the same risk_groups entry; otherwise this warning can stand"
+    };
+    t.warnings.push(d);
+  }
+  return t;
+}
+var import_yaml3, ROUTE_KNOWN, END_TOLERANCE_M, END_TOLERANCE_DEG, CORRIDOR_WITHIN_M, CORRIDOR_MIN_KM, COORDINATE_NAMES;
+var init_geojson = __esm({
+  "src/topology/geojson.ts"() {
+    "use strict";
+    import_yaml3 = __toESM(require_dist(), 1);
+    init_errors();
+    init_attributes();
+    init_builder();
+    init_corridors();
+    init_geodesy();
+    init_nesting();
+    init_quantities();
+    ROUTE_KNOWN = "route_known";
+    END_TOLERANCE_M = 100;
+    END_TOLERANCE_DEG = END_TOLERANCE_M / 111e3 * 1.01;
+    CORRIDOR_WITHIN_M = 50;
+    CORRIDOR_MIN_KM = 1;
+    COORDINATE_NAMES = /* @__PURE__ */ new Set(["lat", "lon", "lng", "long", "latitude", "longitude", "x", "y"]);
   }
 });
 
@@ -17995,7 +18909,7 @@ function parseDesign(text2, file, options = {}) {
     throw new DesignError(
       "cannot tell the design format from the file name",
       { file },
-      `use an extension .net.yaml, .net.json, .graphml, .gml or .csv, or force one (${FORMAT_CHOICES})`
+      `use an extension .net.yaml, .net.json, .graphml, .gml, .csv or .geojson, or force one (${FORMAT_CHOICES})`
     );
   }
   checkSize(text2, file, options.maxBytes ?? DEFAULT_MAX_BYTES);
@@ -18011,6 +18925,8 @@ function parseDesign(text2, file, options = {}) {
       return parseGraphml(text2, file, builderOptions);
     case "csv":
       return parseEdgeList(text2, file, builderOptions);
+    case "geojson":
+      return parseGeojson(text2, file, builderOptions);
   }
 }
 var init_parse = __esm({
@@ -18023,6 +18939,7 @@ var init_parse = __esm({
     init_gml();
     init_graphml();
     init_edgelist();
+    init_geojson();
   }
 });
 
@@ -18031,27 +18948,28 @@ import { readFileSync, statSync } from "node:fs";
 import path from "node:path";
 function readDesign(file, options = {}) {
   const { cwd, displayName, ...parse2 } = options;
-  const shown = displayName ?? file;
+  const shown2 = displayName ?? file;
   const full = path.resolve(cwd ?? process.cwd(), file);
   const maxBytes = parse2.maxBytes ?? DEFAULT_MAX_BYTES;
   let text2;
   try {
-    const stat = statSync(full);
-    if (stat.isDirectory()) throw new DesignError("is a directory, not a design file", { file: shown }, "name a design file inside it");
-    if (stat.size > maxBytes) throw sizeError(shown, stat.size, maxBytes);
-    text2 = readFileSync(full, "utf8");
+    const stat2 = statSync(full);
+    if (stat2.isDirectory()) throw new DesignError("is a directory, not a design file", { file: shown2 }, "name a design file inside it");
+    if (stat2.size > maxBytes) throw sizeError(shown2, stat2.size, maxBytes);
+    text2 = decodeText(readFileSync(full), shown2);
   } catch (e) {
     const code = e.code;
-    if (code === "ENOENT") throw new DesignError("no such file", { file: shown }, "check the path (it is read relative to the working directory)");
-    if (code === "EACCES" || code === "EPERM") throw new DesignError("permission denied reading the file", { file: shown });
-    if (code !== void 0) throw new DesignError(`cannot read the file (${code})`, { file: shown });
+    if (code === "ENOENT") throw new DesignError("no such file", { file: shown2 }, "check the path (it is read relative to the working directory)");
+    if (code === "EACCES" || code === "EPERM") throw new DesignError("permission denied reading the file", { file: shown2 });
+    if (code !== void 0) throw new DesignError(`cannot read the file (${code})`, { file: shown2 });
     throw e;
   }
-  return parseDesign(text2, shown, parse2);
+  return parseDesign(text2, shown2, parse2);
 }
 var init_read_design = __esm({
   "src/shell/read-design.ts"() {
     "use strict";
+    init_decode();
     init_errors();
     init_model();
     init_parse();
@@ -18094,9 +19012,10 @@ function summarize(t) {
     component_sizes: [...comps.sizes].sort((a, b) => b - a),
     // Mean degree 2L/N (each parallel link counts), rounded to 3 decimals.
     degree: { min, mean: g.n > 0 ? Math.round(2 * g.m * 1e3 / g.n) / 1e3 : 0, max },
-    bridges: cuts.bridges.map((e) => g.linkIds[e]),
-    cut_nodes: cuts.cutNodes.map((v) => g.nodeIds[v]),
-    isolated,
+    // Listed as the file lists them.
+    bridges: linksByLine(g, cuts.bridges).map((e) => g.linkIds[e]),
+    cut_nodes: nodesByLine(g, cuts.cutNodes).map((v) => g.nodeIds[v]),
+    isolated: nodesByLine(g, isolated.map((id2) => g.nodeIndex.get(id2))).map((v) => g.nodeIds[v]),
     warnings: t.warnings.map((w) => ({
       line: w.line,
       column: w.column,
@@ -18107,8 +19026,8 @@ function summarize(t) {
 }
 function list(ids) {
   if (ids.length === 0) return "";
-  const shown = ids.slice(0, LIST_LIMIT).join(", ");
-  return `: ${shown}${ids.length > LIST_LIMIT ? `, … (${ids.length - LIST_LIMIT} more)` : ""}`;
+  const shown2 = ids.slice(0, LIST_LIMIT).join(", ");
+  return `: ${shown2}${ids.length > LIST_LIMIT ? `, … (${ids.length - LIST_LIMIT} more)` : ""}`;
 }
 function formatSummary(s, t) {
   const lines = [`${s.file} — ${FORMAT_LABEL[s.format]}${s.name ? `, "${s.name}"` : ""}`];
@@ -18154,7 +19073,8 @@ var init_inspect = __esm({
       "native-json": "netbrace design (JSON)",
       graphml: "GraphML",
       gml: "GML",
-      csv: "CSV edge list"
+      csv: "CSV edge list",
+      geojson: "GeoJSON (RFC 7946)"
     };
     LIST_LIMIT = 12;
     NOTE = "note: bridges and cut nodes are read from the graph alone. Links that share a duct, route or\nbuilding can fail together where the graph shows redundancy (declare risk_groups). This informs\nengineering judgement; local codes, standards and licensed practice decide for real infrastructure.\n";
@@ -18185,19 +19105,19 @@ Exit codes: 0 all files read, 1 a file could not be read, 2 usage error.
       summary: "show what a design file holds: counts, components, bridges, cut nodes, warnings",
       help: HELP,
       async run(args, io) {
-        const parsed = parseCommandArgs("inspect", args, {
+        const parsed2 = parseCommandArgs("inspect", args, {
           json: { type: "boolean" },
           format: { type: "string" },
           "max-bytes": { type: "string" },
           "max-elements": { type: "string" }
         });
-        const files = parsed.positionals;
+        const files = parsed2.positionals;
         if (files.length === 0) throw new UsageError("inspect needs at least one FILE", "netbrace inspect designs/core.net.yaml");
         const options = { cwd: io.cwd };
-        if (parsed.values.format !== void 0) options.format = parseFormatName(parsed.values.format);
-        const maxBytes = wholeNumber("--max-bytes", parsed.values["max-bytes"], 1);
+        if (parsed2.values.format !== void 0) options.format = parseFormatName(parsed2.values.format);
+        const maxBytes = wholeNumber("--max-bytes", parsed2.values["max-bytes"], 1);
         if (maxBytes !== void 0) options.maxBytes = maxBytes;
-        const maxElements = wholeNumber("--max-elements", parsed.values["max-elements"], 1);
+        const maxElements = wholeNumber("--max-elements", parsed2.values["max-elements"], 1);
         if (maxElements !== void 0) options.maxElements = maxElements;
         const results = [];
         let failed = 0;
@@ -18215,7 +19135,7 @@ Exit codes: 0 all files read, 1 a file could not be read, 2 usage error.
 `);
           }
         }
-        if (parsed.values.json) {
+        if (parsed2.values.json) {
           io.stdout(`${JSON.stringify(files.length === 1 ? results[0] : { files: results }, null, 2)}
 `);
         } else if (text2) {
@@ -18554,7 +19474,7 @@ function createDenseSpectrum(limit) {
   const a = new Float64Array(size * size);
   const d = new Float64Array(size);
   const e = new Float64Array(size);
-  const run3 = (g, laplacian) => {
+  const run6 = (g, laplacian) => {
     if (g.n > size) throw new RangeError(`dense spectrum limited to ${size} nodes, got ${g.n}`);
     denseMatrix(g, laplacian, a);
     symmetricEigenvalues(a, g.n, d, e);
@@ -18562,9 +19482,9 @@ function createDenseSpectrum(limit) {
   };
   return {
     /** Laplacian eigenvalues, ascending, in the first g.n entries (shared buffer). */
-    laplacian: (g) => run3(g, true),
+    laplacian: (g) => run6(g, true),
     /** Adjacency eigenvalues, ascending, in the first g.n entries (shared buffer). */
-    adjacency: (g) => run3(g, false)
+    adjacency: (g) => run6(g, false)
   };
 }
 var init_dense_spectrum = __esm({
@@ -18816,29 +19736,29 @@ var init_lanczos = __esm({
 // src/metrics/kernels/extremal-eigen.ts
 function createExtremalSolver(g, kind, denseLimit, warmStart) {
   const limit = Math.min(g.n, denseLimit);
-  const fiedler = kind === "fiedler";
+  const fiedler2 = kind === "fiedler";
   const dense = createDenseSpectrum(limit);
   const lanczos = createLanczos(g.n, 1);
-  const op = fiedler ? createLaplacianOperator() : createAdjacencyOperator();
-  const one = new Float64Array(fiedler ? g.n : 0);
+  const op = fiedler2 ? createLaplacianOperator() : createAdjacencyOperator();
+  const one = new Float64Array(fiedler2 ? g.n : 0);
   const previous = new Float64Array(warmStart ? g.n : 0);
   const start = new Float64Array(warmStart ? g.n : 0);
   let hasPrevious = false;
   return (part, keys) => {
     const n = part.n;
     if (n <= limit) {
-      const d = fiedler ? dense.laplacian(part) : dense.adjacency(part);
-      return fiedler ? d[1] : d[n - 1];
+      const d = fiedler2 ? dense.laplacian(part) : dense.adjacency(part);
+      return fiedler2 ? d[1] : d[n - 1];
     }
     op.bind(part);
-    if (fiedler) one.fill(1 / Math.sqrt(n), 0, n);
+    if (fiedler2) one.fill(1 / Math.sqrt(n), 0, n);
     const warm = warmStart && hasPrevious;
     if (warm) for (let i = 0; i < n; i++) start[i] = previous[part.toOriginal[i]];
     const r = lanczos.solve(op, {
-      which: fiedler ? "smallest" : "largest",
+      which: fiedler2 ? "smallest" : "largest",
       count: 1,
-      deflation: fiedler ? one : void 0,
-      deflationCount: fiedler ? 1 : 0,
+      deflation: fiedler2 ? one : void 0,
+      deflationCount: fiedler2 ? 1 : 0,
       start: warm ? start : null,
       keys
     });
@@ -19452,9 +20372,9 @@ var init_cut_elements = __esm({
 });
 
 // src/metrics/kernels/cut-metric.ts
-function cutMetric(id, description, normalization, pick) {
+function cutMetric(id2, description, normalization, pick) {
   return {
-    id,
+    id: id2,
     description,
     normalization,
     cost: "linear",
@@ -19539,7 +20459,7 @@ function siftDown(heap, pos, dist, size, i) {
   heap[i] = v;
   pos[v] = i;
 }
-function shortestPaths(g, cost, source, dist, heap, pos, visit2) {
+function shortestPaths(g, cost, source, dist, heap, pos, visit3) {
   const n = g.n;
   const { offsets, neighbors, linkOf } = g;
   dist.fill(Infinity, 0, n);
@@ -19558,7 +20478,7 @@ function shortestPaths(g, cost, source, dist, heap, pos, visit2) {
       pos[last] = 0;
       siftDown(heap, pos, dist, size, 0);
     }
-    if (visit2 !== void 0 && visit2(v, dv)) return;
+    if (visit3 !== void 0 && visit3(v, dv)) return;
     for (let p = offsets[v]; p < offsets[v + 1]; p++) {
       const w = neighbors[p];
       const at = pos[w];
@@ -19584,8 +20504,8 @@ function createDijkstra(capacity) {
   return {
     dist,
     /** See shortestPaths; results in `dist`. */
-    run(g, cost, source, visit2) {
-      shortestPaths(g, cost, source, dist, heap, pos, visit2);
+    run(g, cost, source, visit3) {
+      shortestPaths(g, cost, source, dist, heap, pos, visit3);
     }
   };
 }
@@ -19610,17 +20530,11 @@ function chooseLinkCost(g) {
   };
   return pick("latency", "ms", g.latency) ?? pick("length", "km", g.length) ?? pick("weight", "", g.weight);
 }
-function greatCircleKm(lat1, lon1, lat2, lon2) {
-  const rad = Math.PI / 180;
-  const dLat = (lat2 - lat1) * rad;
-  const dLon = (lon2 - lon1) * rad;
-  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
-  return 2 * 6371.0088 * Math.asin(Math.min(1, Math.sqrt(a)));
-}
 var FIBRE_MS_PER_KM;
 var init_link_cost = __esm({
   "src/metrics/kernels/link-cost.ts"() {
     "use strict";
+    init_geodesy();
     FIBRE_MS_PER_KM = 49e-4;
   }
 });
@@ -19648,6 +20562,7 @@ var init_demand_served = __esm({
       normalization: "served volume / total demand volume; raw = served volume.",
       cost: "linear",
       appliesTo: (g) => totalVolume(g) > 0,
+      needs: { what: "demands", hint: "declare demands (a volume > 0 between two sites) in the design, or take demand_served out of the r-value" },
       create(g, options = {}) {
         const total = totalVolume(g);
         const budget = options.latencyBudget ?? g.latencyBudget;
@@ -19746,7 +20661,7 @@ var init_diameter = __esm({
 // src/metrics/kernels/banded-resistance.ts
 function createBandedResistance(capacity) {
   const perm = new Int32Array(capacity);
-  const place = new Int32Array(capacity);
+  const place2 = new Int32Array(capacity);
   const queue2 = new Int32Array(capacity);
   const seen = new Uint8Array(capacity);
   const order = new Int32Array(capacity);
@@ -19798,12 +20713,12 @@ function createBandedResistance(capacity) {
       for (let i = 0; i < n; i++) order[i] = queue2[n - 1 - i];
       for (let i = 0; i < n; i++) {
         perm[i] = order[i];
-        place[order[i]] = i;
+        place2[order[i]] = i;
       }
       let b = 0;
       for (let v = 0; v < n; v++) {
         for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
-          const gap = Math.abs(place[v] - place[g.neighbors[p]]);
+          const gap = Math.abs(place2[v] - place2[g.neighbors[p]]);
           if (gap > b) b = gap;
         }
       }
@@ -19823,7 +20738,7 @@ function createBandedResistance(capacity) {
         const v = perm[i];
         band[i * w] = g.offsets[v + 1] - g.offsets[v];
         for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
-          const j = place[g.neighbors[p]];
+          const j = place2[g.neighbors[p]];
           if (j < i) band[i * w + (i - j)] -= 1;
         }
       }
@@ -20522,6 +21437,7 @@ var init_weighted_efficiency = __esm({
       normalization: "E_w / E_ideal, ideal = every pair joined directly (great-circle distance, at least the cheapest link).",
       cost: "all-pairs",
       appliesTo: (g) => chooseLinkCost(g) !== null,
+      needs: { what: "a latency, length or weight > 0 on every link", hint: "give every link latency_ms or length_km, or take weighted_efficiency out of the r-value" },
       create(g) {
         const cost = chooseLinkCost(g);
         if (!cost) throw new RangeError("weighted_efficiency needs latency, length or weight on every link");
@@ -20554,9 +21470,9 @@ var init_weighted_efficiency = __esm({
 function isMetricId(s) {
   return byId.has(s);
 }
-function getMetric(id) {
-  const m = byId.get(id);
-  if (!m) throw new UsageError(`unknown metric "${id}"`, `known metrics: ${metrics.map((x) => x.id).join(", ")}`);
+function getMetric(id2) {
+  const m = byId.get(id2);
+  if (!m) throw new UsageError(`unknown metric "${id2}"`, `known metrics: ${metrics.map((x) => x.id).join(", ")}`);
   return m;
 }
 var metrics, byId;
@@ -20622,8 +21538,19 @@ function combineR(spec, values) {
   }
   return sum / weight;
 }
+function unsupportedMetric(g, spec) {
+  for (const m of spec.metrics) {
+    const metric = getMetric(m.id);
+    if (metric.appliesTo(g)) continue;
+    const needs = metric.needs ?? { what: "data this design does not have", hint: `take ${m.id} out of the r-value` };
+    return { id: m.id, message: `metric ${m.id} needs ${needs.what}`, hint: needs.hint };
+  }
+  return void 0;
+}
 function createRValue(g, spec, options) {
   validateRSpec(spec);
+  const problem = unsupportedMetric(g, spec);
+  if (problem) throw new UnsupportedMetricError(problem);
   const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, options));
   const values = new Float64Array(evaluators.length);
   return (mask) => {
@@ -20650,11 +21577,18 @@ function rPasses(g, spec) {
   for (const m of spec.metrics) total += passes[getMetric(m.id).cost];
   return total;
 }
-var UNION_FIND_METRICS;
+var UnsupportedMetricError, UNION_FIND_METRICS;
 var init_r_value = __esm({
   "src/envelope/r-value.ts"() {
     "use strict";
     init_registry();
+    UnsupportedMetricError = class extends RangeError {
+      constructor(problem) {
+        super(`${problem.message} — ${problem.hint}`);
+        this.problem = problem;
+      }
+      problem;
+    };
     UNION_FIND_METRICS = /* @__PURE__ */ new Set(["largest_component", "pair_connectivity"]);
   }
 });
@@ -20696,8 +21630,22 @@ function restoreUnit(g, mask, kind, u) {
   else if (kind === "link") mask.link[u] = 0;
   else for (let p = g.groupOffsets[u]; p < g.groupOffsets[u + 1]; p++) mask.link[g.groupLinks[p]] = 0;
 }
+function countAt(x, count, eligible) {
+  const c = Math.min(x * count, eligible);
+  const whole = Math.round(c);
+  return Math.abs(c - whole) <= 1e-9 * Math.max(1, whole) ? whole : c;
+}
 function stepsAt(x, count, eligible) {
-  return Math.min(Math.round(x * count), eligible);
+  return Math.ceil(countAt(x, count, eligible));
+}
+function valueAtCount(values, c) {
+  const lo = Math.floor(c);
+  const hi = Math.ceil(c);
+  if (!(lo >= 0) || hi >= values.length) return Number.NaN;
+  return lerp(values[lo], values[hi], c - lo);
+}
+function lerp(a, b, w) {
+  return w === 0 || a === b ? a : a + w * (b - a);
 }
 function countOnes(a) {
   let c = 0;
@@ -20965,8 +21913,8 @@ var require_utils2 = __commonJS({
       }
       return output;
     };
-    exports.basename = (path7, { windows } = {}) => {
-      const segs = path7.split(windows ? /[\\/]/ : "/");
+    exports.basename = (path11, { windows } = {}) => {
+      const segs = path11.split(windows ? /[\\/]/ : "/");
       const last = segs[segs.length - 1];
       if (last === "") {
         return segs[segs.length - 2];
@@ -21281,27 +22229,27 @@ var require_scan = __commonJS({
         for (let idx = 0; idx < slashes.length; idx++) {
           const n2 = prevIndex !== void 0 ? prevIndex + 1 : start;
           const i = slashes[idx];
-          const value2 = input.slice(n2, i);
+          const value3 = input.slice(n2, i);
           if (opts.tokens) {
             if (idx === 0 && start !== 0) {
               tokens[idx].isPrefix = true;
               tokens[idx].value = prefix;
             } else {
-              tokens[idx].value = value2;
+              tokens[idx].value = value3;
             }
             depth(tokens[idx]);
             state.maxDepth += tokens[idx].depth;
           }
           if (i >= start) {
-            parts.push(value2);
+            parts.push(value3);
             prevIndex = i;
           }
         }
         const n = prevIndex !== void 0 ? prevIndex + 1 : start;
-        const value = input.slice(n);
-        parts.push(value);
+        const value2 = input.slice(n);
+        parts.push(value2);
         if (opts.tokens && prevIndex && prevIndex + 1 < input.length) {
-          tokens[tokens.length - 1].value = value;
+          tokens[tokens.length - 1].value = value2;
           depth(tokens[tokens.length - 1]);
           state.maxDepth += tokens[tokens.length - 1].depth;
         }
@@ -21332,13 +22280,13 @@ var require_parse = __commonJS({
         return options.expandRange(...args, options);
       }
       args.sort();
-      const value = `[${args.join("-")}]`;
+      const value2 = `[${args.join("-")}]`;
       try {
-        new RegExp(value);
+        new RegExp(value2);
       } catch (ex) {
         return args.map((v) => utils.escapeRegex(v)).join("..");
       }
-      return value;
+      return value2;
     };
     var syntaxError = (type, char) => {
       return `Missing ${type}: "${char}" - use "\\\\${char}" to match literal characters`;
@@ -21348,22 +22296,22 @@ var require_parse = __commonJS({
       let bracket = 0;
       let paren = 0;
       let quote = 0;
-      let value = "";
+      let value2 = "";
       let escaped = false;
       for (const ch of input) {
         if (escaped === true) {
-          value += ch;
+          value2 += ch;
           escaped = false;
           continue;
         }
         if (ch === "\\") {
-          value += ch;
+          value2 += ch;
           escaped = true;
           continue;
         }
         if (ch === '"') {
           quote = quote === 1 ? 0 : 1;
-          value += ch;
+          value2 += ch;
           continue;
         }
         if (quote === 0) {
@@ -21377,15 +22325,15 @@ var require_parse = __commonJS({
             } else if (ch === ")" && paren > 0) {
               paren--;
             } else if (ch === "|" && paren === 0) {
-              parts.push(value);
-              value = "";
+              parts.push(value2);
+              value2 = "";
               continue;
             }
           }
         }
-        value += ch;
+        value2 += ch;
       }
-      parts.push(value);
+      parts.push(value2);
       return parts;
     };
     var isPlainBranch = (branch) => {
@@ -21406,19 +22354,19 @@ var require_parse = __commonJS({
       return true;
     };
     var normalizeSimpleBranch = (branch) => {
-      let value = branch.trim();
+      let value2 = branch.trim();
       let changed = true;
       while (changed === true) {
         changed = false;
-        if (/^@\([^\\()[\]{}|]+\)$/.test(value)) {
-          value = value.slice(2, -1);
+        if (/^@\([^\\()[\]{}|]+\)$/.test(value2)) {
+          value2 = value2.slice(2, -1);
           changed = true;
         }
       }
-      if (!isPlainBranch(value)) {
+      if (!isPlainBranch(value2)) {
         return;
       }
-      return value.replace(/\\(.)/g, "$1");
+      return value2.replace(/\\(.)/g, "$1");
     };
     var hasRepeatedCharPrefixOverlap = (branches) => {
       const values = branches.map(normalizeSimpleBranch).filter(Boolean);
@@ -21522,12 +22470,12 @@ var require_parse = __commonJS({
     };
     var repeatedExtglobRecursion = (pattern) => {
       let depth = 0;
-      let value = pattern.trim();
-      let match = parseRepeatedExtglob(value);
+      let value2 = pattern.trim();
+      let match = parseRepeatedExtglob(value2);
       while (match) {
         depth++;
-        value = match.body.trim();
-        match = parseRepeatedExtglob(value);
+        value2 = match.body.trim();
+        match = parseRepeatedExtglob(value2);
       }
       return depth;
     };
@@ -21632,14 +22580,14 @@ var require_parse = __commonJS({
       const braces = [];
       const stack = [];
       let prev = bos;
-      let value;
+      let value2;
       const eos = () => state.index === len - 1;
       const peek = state.peek = (n = 1) => input[state.index + n];
       const advance = state.advance = () => input[++state.index] || "";
-      const remaining = () => input.slice(state.index + 1);
-      const consume = (value2 = "", num2 = 0) => {
-        state.consumed += value2;
-        state.index += num2;
+      const remaining2 = () => input.slice(state.index + 1);
+      const consume = (value3 = "", num3 = 0) => {
+        state.consumed += value3;
+        state.index += num3;
       };
       const append = (token) => {
         state.output += token.output != null ? token.output : token.value;
@@ -21692,8 +22640,8 @@ var require_parse = __commonJS({
         tokens.push(tok);
         prev = tok;
       };
-      const extglobOpen = (type, value2) => {
-        const token = { ...EXTGLOB_CHARS[value2], conditions: 1, inner: "" };
+      const extglobOpen = (type, value3) => {
+        const token = { ...EXTGLOB_CHARS[value3], conditions: 1, inner: "" };
         token.prev = prev;
         token.parens = state.parens;
         token.output = state.output;
@@ -21701,7 +22649,7 @@ var require_parse = __commonJS({
         token.tokensIndex = tokens.length;
         const output = (opts.capture ? "(" : "") + token.open;
         increment("parens");
-        push({ type, value: value2, output: state.output ? "" : ONE_CHAR });
+        push({ type, value: value3, output: state.output ? "" : ONE_CHAR });
         push({ type: "paren", extglob: true, value: advance(), output });
         extglobs.push(token);
       };
@@ -21722,7 +22670,7 @@ var require_parse = __commonJS({
           }
           state.output = token.output + open.output;
           state.backtrack = true;
-          push({ type: "paren", extglob: true, value, output: "" });
+          push({ type: "paren", extglob: true, value: value2, output: "" });
           decrement("parens");
           return;
         }
@@ -21733,10 +22681,10 @@ var require_parse = __commonJS({
           if (token.inner && token.inner.length > 1 && token.inner.includes("/")) {
             extglobStar = globstar(opts);
           }
-          if (extglobStar !== star || eos() || /^\)+$/.test(remaining())) {
+          if (extglobStar !== star || eos() || /^\)+$/.test(remaining2())) {
             output = token.close = `)$))${extglobStar}`;
           }
-          if (token.inner.includes("*") && (rest = remaining()) && /^\.[^\\/.]+$/.test(rest)) {
+          if (token.inner.includes("*") && (rest = remaining2()) && /^\.[^\\/.]+$/.test(rest)) {
             const expression = parse2(rest, { ...options, fastpaths: false }).output;
             output = token.close = `)${expression})${extglobStar})`;
           }
@@ -21744,19 +22692,19 @@ var require_parse = __commonJS({
             state.negatedExtglob = true;
           }
         }
-        push({ type: "paren", extglob: true, value, output });
+        push({ type: "paren", extglob: true, value: value2, output });
         decrement("parens");
       };
       if (opts.fastpaths !== false && !/(^[*!]|[/()[\]{}"])/.test(input)) {
         let backslashes = false;
-        let output = input.replace(REGEX_SPECIAL_CHARS_BACKREF, (m, esc3, chars, first, rest, index) => {
+        let output = input.replace(REGEX_SPECIAL_CHARS_BACKREF, (m, esc7, chars, first, rest, index) => {
           if (first === "\\") {
             backslashes = true;
             return m;
           }
           if (first === "?") {
-            if (esc3) {
-              return esc3 + first + (rest ? QMARK.repeat(rest.length) : "");
+            if (esc7) {
+              return esc7 + first + (rest ? QMARK.repeat(rest.length) : "");
             }
             if (index === 0) {
               return qmarkNoDot + (rest ? QMARK.repeat(rest.length) : "");
@@ -21767,12 +22715,12 @@ var require_parse = __commonJS({
             return DOT_LITERAL.repeat(chars.length);
           }
           if (first === "*") {
-            if (esc3) {
-              return esc3 + first + (rest ? star : "");
+            if (esc7) {
+              return esc7 + first + (rest ? star : "");
             }
             return star;
           }
-          return esc3 ? m : `\\${m}`;
+          return esc7 ? m : `\\${m}`;
         });
         if (backslashes === true) {
           if (opts.unescape === true) {
@@ -21791,11 +22739,11 @@ var require_parse = __commonJS({
         return state;
       }
       while (!eos()) {
-        value = advance();
-        if (value === "\0") {
+        value2 = advance();
+        if (value2 === "\0") {
           continue;
         }
-        if (value === "\\") {
+        if (value2 === "\\") {
           const next = peek();
           if (next === "/" && opts.bash !== true) {
             continue;
@@ -21804,31 +22752,31 @@ var require_parse = __commonJS({
             continue;
           }
           if (!next) {
-            value += "\\";
-            push({ type: "text", value });
+            value2 += "\\";
+            push({ type: "text", value: value2 });
             continue;
           }
-          const match = /^\\+/.exec(remaining());
+          const match = /^\\+/.exec(remaining2());
           let slashes = 0;
           if (match && match[0].length > 2) {
             slashes = match[0].length;
             state.index += slashes;
             if (slashes % 2 !== 0) {
-              value += "\\";
+              value2 += "\\";
             }
           }
           if (opts.unescape === true) {
-            value = advance();
+            value2 = advance();
           } else {
-            value += advance();
+            value2 += advance();
           }
           if (state.brackets === 0) {
-            push({ type: "text", value });
+            push({ type: "text", value: value2 });
             continue;
           }
         }
-        if (state.brackets > 0 && (value !== "]" || prev.value === "[" || prev.value === "[^")) {
-          if (opts.posix !== false && value === ":") {
+        if (state.brackets > 0 && (value2 !== "]" || prev.value === "[" || prev.value === "[^")) {
+          if (opts.posix !== false && value2 === ":") {
             const inner = prev.value.slice(1);
             if (inner.includes("[")) {
               prev.posix = true;
@@ -21849,38 +22797,38 @@ var require_parse = __commonJS({
               }
             }
           }
-          if (value === "[" && peek() !== ":" || value === "-" && peek() === "]") {
-            value = `\\${value}`;
+          if (value2 === "[" && peek() !== ":" || value2 === "-" && peek() === "]") {
+            value2 = `\\${value2}`;
           }
-          if (value === "]" && (prev.value === "[" || prev.value === "[^")) {
-            value = `\\${value}`;
+          if (value2 === "]" && (prev.value === "[" || prev.value === "[^")) {
+            value2 = `\\${value2}`;
           }
-          if (opts.posix === true && value === "!" && prev.value === "[") {
-            value = "^";
+          if (opts.posix === true && value2 === "!" && prev.value === "[") {
+            value2 = "^";
           }
-          prev.value += value;
-          append({ value });
+          prev.value += value2;
+          append({ value: value2 });
           continue;
         }
-        if (state.quotes === 1 && value !== '"') {
-          value = utils.escapeRegex(value);
-          prev.value += value;
-          append({ value });
+        if (state.quotes === 1 && value2 !== '"') {
+          value2 = utils.escapeRegex(value2);
+          prev.value += value2;
+          append({ value: value2 });
           continue;
         }
-        if (value === '"') {
+        if (value2 === '"') {
           state.quotes = state.quotes === 1 ? 0 : 1;
           if (opts.keepQuotes === true) {
-            push({ type: "text", value });
+            push({ type: "text", value: value2 });
           }
           continue;
         }
-        if (value === "(") {
+        if (value2 === "(") {
           increment("parens");
-          push({ type: "paren", value });
+          push({ type: "paren", value: value2 });
           continue;
         }
-        if (value === ")") {
+        if (value2 === ")") {
           if (state.parens === 0 && opts.strictBrackets === true) {
             throw new SyntaxError(syntaxError("opening", "("));
           }
@@ -21889,41 +22837,41 @@ var require_parse = __commonJS({
             extglobClose(extglobs.pop());
             continue;
           }
-          push({ type: "paren", value, output: state.parens ? ")" : "\\)" });
+          push({ type: "paren", value: value2, output: state.parens ? ")" : "\\)" });
           decrement("parens");
           continue;
         }
-        if (value === "[") {
-          if (opts.nobracket === true || !remaining().includes("]")) {
+        if (value2 === "[") {
+          if (opts.nobracket === true || !remaining2().includes("]")) {
             if (opts.nobracket !== true && opts.strictBrackets === true) {
               throw new SyntaxError(syntaxError("closing", "]"));
             }
-            value = `\\${value}`;
+            value2 = `\\${value2}`;
           } else {
             increment("brackets");
           }
-          push({ type: "bracket", value });
+          push({ type: "bracket", value: value2 });
           continue;
         }
-        if (value === "]") {
+        if (value2 === "]") {
           if (opts.nobracket === true || prev && prev.type === "bracket" && prev.value.length === 1) {
-            push({ type: "text", value, output: `\\${value}` });
+            push({ type: "text", value: value2, output: `\\${value2}` });
             continue;
           }
           if (state.brackets === 0) {
             if (opts.strictBrackets === true) {
               throw new SyntaxError(syntaxError("opening", "["));
             }
-            push({ type: "text", value, output: `\\${value}` });
+            push({ type: "text", value: value2, output: `\\${value2}` });
             continue;
           }
           decrement("brackets");
           const prevValue = prev.value.slice(1);
           if (prev.posix !== true && prevValue[0] === "^" && !prevValue.includes("/")) {
-            value = `/${value}`;
+            value2 = `/${value2}`;
           }
-          prev.value += value;
-          append({ value });
+          prev.value += value2;
+          append({ value: value2 });
           if (opts.literalBrackets === false || utils.hasRegexChars(prevValue)) {
             continue;
           }
@@ -21938,11 +22886,11 @@ var require_parse = __commonJS({
           state.output += prev.value;
           continue;
         }
-        if (value === "{" && opts.nobrace !== true) {
+        if (value2 === "{" && opts.nobrace !== true) {
           increment("braces");
           const open = {
             type: "brace",
-            value,
+            value: value2,
             output: "(",
             outputIndex: state.output.length,
             tokensIndex: state.tokens.length
@@ -21951,10 +22899,10 @@ var require_parse = __commonJS({
           push(open);
           continue;
         }
-        if (value === "}") {
+        if (value2 === "}") {
           const brace = braces[braces.length - 1];
           if (opts.nobrace === true || !brace) {
-            push({ type: "text", value, output: value });
+            push({ type: "text", value: value2, output: value2 });
             continue;
           }
           let output = ")";
@@ -21977,35 +22925,35 @@ var require_parse = __commonJS({
             const out = state.output.slice(0, brace.outputIndex);
             const toks = state.tokens.slice(brace.tokensIndex);
             brace.value = brace.output = "\\{";
-            value = output = "\\}";
+            value2 = output = "\\}";
             state.output = out;
             for (const t of toks) {
               state.output += t.output || t.value;
             }
           }
-          push({ type: "brace", value, output });
+          push({ type: "brace", value: value2, output });
           decrement("braces");
           braces.pop();
           continue;
         }
-        if (value === "|") {
+        if (value2 === "|") {
           if (extglobs.length > 0) {
             extglobs[extglobs.length - 1].conditions++;
           }
-          push({ type: "text", value });
+          push({ type: "text", value: value2 });
           continue;
         }
-        if (value === ",") {
-          let output = value;
+        if (value2 === ",") {
+          let output = value2;
           const brace = braces[braces.length - 1];
           if (brace && stack[stack.length - 1] === "braces") {
             brace.comma = true;
             output = "|";
           }
-          push({ type: "comma", value, output });
+          push({ type: "comma", value: value2, output });
           continue;
         }
-        if (value === "/") {
+        if (value2 === "/") {
           if (prev.type === "dot" && state.index === state.start + 1) {
             state.start = state.index + 1;
             state.consumed = "";
@@ -22014,52 +22962,52 @@ var require_parse = __commonJS({
             prev = bos;
             continue;
           }
-          push({ type: "slash", value, output: SLASH_LITERAL });
+          push({ type: "slash", value: value2, output: SLASH_LITERAL });
           continue;
         }
-        if (value === ".") {
+        if (value2 === ".") {
           if (state.braces > 0 && prev.type === "dot") {
             if (prev.value === ".") prev.output = DOT_LITERAL;
             const brace = braces[braces.length - 1];
             prev.type = "dots";
-            prev.output += value;
-            prev.value += value;
+            prev.output += value2;
+            prev.value += value2;
             brace.dots = true;
             continue;
           }
           if (state.braces + state.parens === 0 && prev.type !== "bos" && prev.type !== "slash") {
-            push({ type: "text", value, output: DOT_LITERAL });
+            push({ type: "text", value: value2, output: DOT_LITERAL });
             continue;
           }
-          push({ type: "dot", value, output: DOT_LITERAL });
+          push({ type: "dot", value: value2, output: DOT_LITERAL });
           continue;
         }
-        if (value === "?") {
+        if (value2 === "?") {
           const isGroup = prev && prev.value === "(";
           if (!isGroup && opts.noextglob !== true && peek() === "(" && peek(2) !== "?") {
-            extglobOpen("qmark", value);
+            extglobOpen("qmark", value2);
             continue;
           }
           if (prev && prev.type === "paren") {
             const next = peek();
-            let output = value;
-            if (prev.value === "(" && !/[!=<:]/.test(next) || next === "<" && !/<([!=]|\w+>)/.test(remaining())) {
-              output = `\\${value}`;
+            let output = value2;
+            if (prev.value === "(" && !/[!=<:]/.test(next) || next === "<" && !/<([!=]|\w+>)/.test(remaining2())) {
+              output = `\\${value2}`;
             }
-            push({ type: "text", value, output });
+            push({ type: "text", value: value2, output });
             continue;
           }
           if (opts.dot !== true && (prev.type === "slash" || prev.type === "bos")) {
-            push({ type: "qmark", value, output: QMARK_NO_DOT });
+            push({ type: "qmark", value: value2, output: QMARK_NO_DOT });
             continue;
           }
-          push({ type: "qmark", value, output: QMARK });
+          push({ type: "qmark", value: value2, output: QMARK });
           continue;
         }
-        if (value === "!") {
+        if (value2 === "!") {
           if (opts.noextglob !== true && peek() === "(") {
             if (peek(2) !== "?" || !/[!=<:]/.test(peek(3))) {
-              extglobOpen("negate", value);
+              extglobOpen("negate", value2);
               continue;
             }
           }
@@ -22068,60 +23016,60 @@ var require_parse = __commonJS({
             continue;
           }
         }
-        if (value === "+") {
+        if (value2 === "+") {
           if (opts.noextglob !== true && peek() === "(" && peek(2) !== "?") {
-            extglobOpen("plus", value);
+            extglobOpen("plus", value2);
             continue;
           }
           if (prev && prev.value === "(" || opts.regex === false) {
-            push({ type: "plus", value, output: PLUS_LITERAL });
+            push({ type: "plus", value: value2, output: PLUS_LITERAL });
             continue;
           }
           if (prev && (prev.type === "bracket" || prev.type === "paren" || prev.type === "brace") || state.parens > 0) {
-            push({ type: "plus", value });
+            push({ type: "plus", value: value2 });
             continue;
           }
           push({ type: "plus", value: PLUS_LITERAL });
           continue;
         }
-        if (value === "@") {
+        if (value2 === "@") {
           if (opts.noextglob !== true && peek() === "(" && peek(2) !== "?") {
-            push({ type: "at", extglob: true, value, output: "" });
+            push({ type: "at", extglob: true, value: value2, output: "" });
             continue;
           }
-          push({ type: "text", value });
+          push({ type: "text", value: value2 });
           continue;
         }
-        if (value !== "*") {
-          if (value === "$" || value === "^") {
-            value = `\\${value}`;
+        if (value2 !== "*") {
+          if (value2 === "$" || value2 === "^") {
+            value2 = `\\${value2}`;
           }
-          const match = REGEX_NON_SPECIAL_CHARS.exec(remaining());
+          const match = REGEX_NON_SPECIAL_CHARS.exec(remaining2());
           if (match) {
-            value += match[0];
+            value2 += match[0];
             state.index += match[0].length;
           }
-          push({ type: "text", value });
+          push({ type: "text", value: value2 });
           continue;
         }
         if (prev && (prev.type === "globstar" || prev.star === true)) {
           prev.type = "star";
           prev.star = true;
-          prev.value += value;
+          prev.value += value2;
           prev.output = star;
           state.backtrack = true;
           state.globstar = true;
-          consume(value);
+          consume(value2);
           continue;
         }
-        let rest = remaining();
+        let rest = remaining2();
         if (opts.noextglob !== true && /^\([^?]/.test(rest)) {
-          extglobOpen("star", value);
+          extglobOpen("star", value2);
           continue;
         }
         if (prev.type === "star") {
           if (opts.noglobstar === true) {
-            consume(value);
+            consume(value2);
             continue;
           }
           const prior = prev.prev;
@@ -22129,13 +23077,13 @@ var require_parse = __commonJS({
           const isStart = prior.type === "slash" || prior.type === "bos";
           const afterStar = before && (before.type === "star" || before.type === "globstar");
           if (opts.bash === true && (!isStart || rest[0] && rest[0] !== "/")) {
-            push({ type: "star", value, output: "" });
+            push({ type: "star", value: value2, output: "" });
             continue;
           }
           const isBrace = state.braces > 0 && (prior.type === "comma" || prior.type === "brace");
           const isExtglob = extglobs.length && (prior.type === "pipe" || prior.type === "paren");
           if (!isStart && prior.type !== "paren" && !isBrace && !isExtglob) {
-            push({ type: "star", value, output: "" });
+            push({ type: "star", value: value2, output: "" });
             continue;
           }
           while (rest.slice(0, 3) === "/**") {
@@ -22149,11 +23097,11 @@ var require_parse = __commonJS({
           const isEnd = eos() || state.parens > 0 && rest === ")".repeat(state.parens) && !extglobs.some((extglob) => extglob.type === "negate");
           if (prior.type === "bos" && eos()) {
             prev.type = "globstar";
-            prev.value += value;
+            prev.value += value2;
             prev.output = globstar(opts);
             state.output = prev.output;
             state.globstar = true;
-            consume(value);
+            consume(value2);
             continue;
           }
           if (prior.type === "slash" && prior.prev.type !== "bos" && !afterStar && isEnd) {
@@ -22161,10 +23109,10 @@ var require_parse = __commonJS({
             prior.output = `(?:${prior.output}`;
             prev.type = "globstar";
             prev.output = globstar(opts) + (opts.strictSlashes ? ")" : "|$)");
-            prev.value += value;
+            prev.value += value2;
             state.globstar = true;
             state.output += prior.output + prev.output;
-            consume(value);
+            consume(value2);
             continue;
           }
           if (prior.type === "slash" && prior.prev.type !== "bos" && rest[0] === "/") {
@@ -22173,33 +23121,33 @@ var require_parse = __commonJS({
             prior.output = `(?:${prior.output}`;
             prev.type = "globstar";
             prev.output = `${globstar(opts)}${SLASH_LITERAL}|${SLASH_LITERAL}${end})`;
-            prev.value += value;
+            prev.value += value2;
             state.output += prior.output + prev.output;
             state.globstar = true;
-            consume(value + advance());
+            consume(value2 + advance());
             push({ type: "slash", value: "/", output: "" });
             continue;
           }
           if (prior.type === "bos" && rest[0] === "/") {
             prev.type = "globstar";
-            prev.value += value;
+            prev.value += value2;
             prev.output = `(?:^|${SLASH_LITERAL}|${globstar(opts)}${SLASH_LITERAL})`;
             state.output = prev.output;
             state.globstar = true;
-            consume(value + advance());
+            consume(value2 + advance());
             push({ type: "slash", value: "/", output: "" });
             continue;
           }
           state.output = state.output.slice(0, -prev.output.length);
           prev.type = "globstar";
           prev.output = globstar(opts);
-          prev.value += value;
+          prev.value += value2;
           state.output += prev.output;
           state.globstar = true;
-          consume(value);
+          consume(value2);
           continue;
         }
-        const token = { type: "star", value, output: star };
+        const token = { type: "star", value: value2, output: star };
         if (opts.bash === true) {
           token.output = ".*?";
           if (prev.type === "bos" || prev.type === "slash") {
@@ -22209,7 +23157,7 @@ var require_parse = __commonJS({
           continue;
         }
         if (prev && (prev.type === "bracket" || prev.type === "paren") && opts.regex === true) {
-          token.output = value;
+          token.output = value2;
           push(token);
           continue;
         }
@@ -22337,10 +23285,10 @@ var require_picomatch = __commonJS({
     var parse2 = require_parse();
     var utils = require_utils2();
     var constants = require_constants();
-    var isObject = (val) => val && typeof val === "object" && !Array.isArray(val);
-    var picomatch2 = (glob, options, returnState = false) => {
+    var isObject2 = (val) => val && typeof val === "object" && !Array.isArray(val);
+    var picomatch3 = (glob, options, returnState = false) => {
       if (Array.isArray(glob)) {
-        const fns = glob.map((input) => picomatch2(input, options, returnState));
+        const fns = glob.map((input) => picomatch3(input, options, returnState));
         const arrayMatcher = (str) => {
           for (const isMatch of fns) {
             const state2 = isMatch(str);
@@ -22350,22 +23298,22 @@ var require_picomatch = __commonJS({
         };
         return arrayMatcher;
       }
-      const isState = isObject(glob) && glob.tokens && glob.input;
+      const isState = isObject2(glob) && glob.tokens && glob.input;
       if (glob === "" || typeof glob !== "string" && !isState) {
         throw new TypeError("Expected pattern to be a non-empty string");
       }
       const opts = options || {};
       const posix = opts.windows;
-      const regex = isState ? picomatch2.compileRe(glob, options) : picomatch2.makeRe(glob, options, false, true);
+      const regex = isState ? picomatch3.compileRe(glob, options) : picomatch3.makeRe(glob, options, false, true);
       const state = regex.state;
       delete regex.state;
       let isIgnored = () => false;
       if (opts.ignore) {
         const ignoreOpts = { ...options, ignore: null, onMatch: null, onResult: null };
-        isIgnored = picomatch2(opts.ignore, ignoreOpts, returnState);
+        isIgnored = picomatch3(opts.ignore, ignoreOpts, returnState);
       }
       const matcher = (input, returnObject = false) => {
-        const { isMatch, match, output } = picomatch2.test(input, regex, options, { glob, posix });
+        const { isMatch, match, output } = picomatch3.test(input, regex, options, { glob, posix });
         const result = { glob, state, regex, posix, input, output, match, isMatch };
         if (typeof opts.onResult === "function") {
           opts.onResult(result);
@@ -22391,7 +23339,7 @@ var require_picomatch = __commonJS({
       }
       return matcher;
     };
-    picomatch2.test = (input, regex, options, { glob, posix } = {}) => {
+    picomatch3.test = (input, regex, options, { glob, posix } = {}) => {
       if (typeof input !== "string") {
         throw new TypeError("Expected input to be a string");
       }
@@ -22408,24 +23356,24 @@ var require_picomatch = __commonJS({
       }
       if (match === false || opts.capture === true) {
         if (opts.matchBase === true || opts.basename === true) {
-          match = picomatch2.matchBase(input, regex, options, posix);
+          match = picomatch3.matchBase(input, regex, options, posix);
         } else {
           match = regex.exec(output);
         }
       }
       return { isMatch: Boolean(match), match, output };
     };
-    picomatch2.matchBase = (input, glob, options, posix = options && options.windows) => {
-      const regex = glob instanceof RegExp ? glob : picomatch2.makeRe(glob, options);
+    picomatch3.matchBase = (input, glob, options, posix = options && options.windows) => {
+      const regex = glob instanceof RegExp ? glob : picomatch3.makeRe(glob, options);
       return regex.test(utils.basename(input, { windows: posix }));
     };
-    picomatch2.isMatch = (str, patterns, options) => picomatch2(patterns, options)(str);
-    picomatch2.parse = (pattern, options) => {
-      if (Array.isArray(pattern)) return pattern.map((p) => picomatch2.parse(p, options));
+    picomatch3.isMatch = (str, patterns, options) => picomatch3(patterns, options)(str);
+    picomatch3.parse = (pattern, options) => {
+      if (Array.isArray(pattern)) return pattern.map((p) => picomatch3.parse(p, options));
       return parse2(pattern, { ...options, fastpaths: false });
     };
-    picomatch2.scan = (input, options) => scan(input, options);
-    picomatch2.compileRe = (state, options, returnOutput = false, returnState = false) => {
+    picomatch3.scan = (input, options) => scan(input, options);
+    picomatch3.compileRe = (state, options, returnOutput = false, returnState = false) => {
       if (returnOutput === true) {
         return state.output;
       }
@@ -22436,26 +23384,26 @@ var require_picomatch = __commonJS({
       if (state && state.negated === true) {
         source = `^(?!${source}).*$`;
       }
-      const regex = picomatch2.toRegex(source, options);
+      const regex = picomatch3.toRegex(source, options);
       if (returnState === true) {
         regex.state = state;
       }
       return regex;
     };
-    picomatch2.makeRe = (input, options = {}, returnOutput = false, returnState = false) => {
+    picomatch3.makeRe = (input, options = {}, returnOutput = false, returnState = false) => {
       if (!input || typeof input !== "string") {
         throw new TypeError("Expected a non-empty string");
       }
-      let parsed = { negated: false, fastpaths: true };
+      let parsed2 = { negated: false, fastpaths: true };
       if (options.fastpaths !== false && (input[0] === "." || input[0] === "*")) {
-        parsed.output = parse2.fastpaths(input, options);
+        parsed2.output = parse2.fastpaths(input, options);
       }
-      if (!parsed.output) {
-        parsed = parse2(input, options);
+      if (!parsed2.output) {
+        parsed2 = parse2(input, options);
       }
-      return picomatch2.compileRe(parsed, options, returnOutput, returnState);
+      return picomatch3.compileRe(parsed2, options, returnOutput, returnState);
     };
-    picomatch2.toRegex = (source, options) => {
+    picomatch3.toRegex = (source, options) => {
       try {
         const opts = options || {};
         return new RegExp(source, opts.flags || (opts.nocase ? "i" : ""));
@@ -22464,8 +23412,8 @@ var require_picomatch = __commonJS({
         return /$^/;
       }
     };
-    picomatch2.constants = constants;
-    module.exports = picomatch2;
+    picomatch3.constants = constants;
+    module.exports = picomatch3;
   }
 });
 
@@ -22475,14 +23423,14 @@ var require_picomatch2 = __commonJS({
     "use strict";
     var pico = require_picomatch();
     var utils = require_utils2();
-    function picomatch2(glob, options, returnState = false) {
+    function picomatch3(glob, options, returnState = false) {
       if (options && (options.windows === null || options.windows === void 0)) {
         options = { ...options, windows: utils.isWindows() };
       }
       return pico(glob, options, returnState);
     }
-    Object.assign(picomatch2, pico);
-    module.exports = picomatch2;
+    Object.assign(picomatch3, pico);
+    module.exports = picomatch3;
   }
 });
 
@@ -22503,12 +23451,21 @@ var init_budget = __esm({
 });
 
 // src/policy/defaults.ts
-var DEFAULT_POLICY_PATH, BUILTIN_POLICY_NAME, REGIONAL_UNTIL_KM, DEFAULT_ERROR_MULTIPLE, STARTER_POLICY;
+var DEFAULT_POLICY_PATH, BUILTIN_POLICY_NAME, CSV_DESIGN_GLOB, DEFAULT_DESIGN_GLOBS, REGIONAL_UNTIL_KM, DEFAULT_ERROR_MULTIPLE, STARTER_POLICY;
 var init_defaults = __esm({
   "src/policy/defaults.ts"() {
     "use strict";
     DEFAULT_POLICY_PATH = ".netbrace.yaml";
     BUILTIN_POLICY_NAME = "<built-in policy>";
+    CSV_DESIGN_GLOB = "**/*.csv";
+    DEFAULT_DESIGN_GLOBS = [
+      "**/*.graphml",
+      "**/*.gml",
+      "**/*.net.yaml",
+      "**/*.net.yml",
+      "**/*.net.json",
+      CSV_DESIGN_GLOB
+    ];
     REGIONAL_UNTIL_KM = 50;
     DEFAULT_ERROR_MULTIPLE = 2;
     STARTER_POLICY = `# netbrace policy: what a network design must satisfy before a change to it merges.
@@ -22520,8 +23477,10 @@ var init_defaults = __esm({
 version: 1
 
 # Which files are designs (globs from the repository root; "format" forces a format).
+# A CSV that only "**/*.csv" selects is a design when its header has source and target
+# columns; other CSV files are left alone. List CSV designs by another glob to judge them always.
 designs:
-  - paths: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json"]
+  - paths: ["**/*.graphml", "**/*.gml", "**/*.net.yaml", "**/*.net.yml", "**/*.net.json", "**/*.csv"]
 # exclude: ["archive/**"]
 
 # Seed of every random challenge: the same inputs and seed give the same report.
@@ -22562,9 +23521,12 @@ challenges:
 
 # Requirements; severity is fail (the gate fails), warn or notice.
 requirements:
-  # A change may not add a bridge or a cut node that the base did not have.
+  # A change may not add a bridge, a cut node or a shared-risk group (a duct) whose loss cuts
+  # sites off, that the base did not have. A new weak point hidden behind an element that the
+  # change marks hardened is a warning: hardening is a claim the gate cannot check.
   - kind: no-new-spof
     severity: fail
+    hardened-weak-points: warn
   # Areas under the envelopes, tracked for weakening (no floor of their own).
   - kind: area-floor
     challenge: node-failures
@@ -23186,8 +24148,8 @@ function randomOrderPlan(g, kind, params) {
   const count = unitCount(g, kind);
   const eligible = eligibleUnits(g, kind);
   const available = countOnes(eligible);
-  const stepTable = Int32Array.from(x, (xi) => stepsAt(xi, count, available));
-  const maxUnits = stepTable.length ? stepTable[stepTable.length - 1] : 0;
+  const stepTable = Float64Array.from(x, (xi) => countAt(xi, count, available));
+  const maxUnits = stepTable.length ? Math.ceil(stepTable[stepTable.length - 1]) : 0;
   const idHash = hashIds(unitKeys(g, kind));
   const seedW = seedWord(params.seed);
   const full = new Int32Array(count);
@@ -23444,6 +24406,69 @@ var init_registry2 = __esm({
   }
 });
 
+// src/policy/globs.ts
+function globProblem(glob) {
+  if (glob.trim() === "") return { message: "is empty", hint: 'write a glob such as "networks/**/*.net.yaml"' };
+  if (glob.trim() !== glob) return { message: "starts or ends with white space, which is part of the glob", hint: "remove the spaces" };
+  if (glob.startsWith("!") && !glob.startsWith("!(")) {
+    return { message: 'starts with "!", which would select every file except these', hint: 'list the files to leave out under "ignore:"' };
+  }
+  if (glob.startsWith("/") || /^[A-Za-z]:[\\/]/.test(glob)) {
+    return { message: "is an absolute path; globs are read from the repository root", hint: `write it without the leading "/": "${glob.replace(/^\/+|^[A-Za-z]:[\\/]+/, "")}"` };
+  }
+  const braces = [];
+  const parens = [];
+  for (let i = 0; i < glob.length; i++) {
+    const ch = glob[i];
+    if (ch === "\\") {
+      const next = glob[i + 1];
+      if (next === void 0 || !ESCAPABLE.has(next)) {
+        return { message: "has a backslash, which escapes the next character in a glob; it is not a path separator", hint: `use forward slashes: "${glob.replace(/\\/g, "/")}"` };
+      }
+      i++;
+    } else if (ch === "[") {
+      let j = i + 1;
+      if (glob[j] === "!") {
+        return { message: 'has "[!", which picomatch reads as the character "!", not as "none of"', hint: 'write "[^" for a class of characters to leave out' };
+      }
+      if (glob[j] === "^") j++;
+      if (glob[j] === "]") j++;
+      while (j < glob.length && glob[j] !== "]") j += glob[j] === "\\" ? 2 : 1;
+      if (j >= glob.length) return { message: 'has a "[" that is never closed', hint: 'close the character class with "]", or write "\\[" for a literal bracket' };
+      i = j;
+    } else if (ch === "{") braces.push(i);
+    else if (ch === "}") {
+      if (braces.pop() === void 0) return { message: 'has a "}" without its "{"', hint: "alternatives are written {a,b}" };
+    } else if (ch === "(") parens.push(i);
+    else if (ch === ")") {
+      if (parens.pop() === void 0) return { message: 'has a ")" without its "("', hint: "groups are written @(a|b)" };
+    }
+  }
+  if (braces.length > 0) return { message: 'has a "{" that is never closed', hint: 'close it: alternatives are written {a,b}, e.g. "**/*.{graphml,gml}"' };
+  if (parens.length > 0) return { message: 'has a "(" that is never closed', hint: "close it: groups are written @(a|b)" };
+  if (glob.endsWith("/")) return { message: 'ends with "/", so it matches directories, never files', hint: `add the files: "${glob}**"` };
+  const segments = glob.replace(/^\.\//, "").split("/");
+  if (segments.includes("..")) return { message: 'has a ".." segment; globs are read from the repository root', hint: 'write the path from the root, without ".."' };
+  if (segments.includes(".")) return { message: 'has a "." segment, which repository paths never have', hint: 'remove the "./"' };
+  if (segments.includes("")) return { message: 'has an empty segment ("//"), which repository paths never have', hint: 'write one "/"' };
+  let re;
+  try {
+    re = import_picomatch.default.makeRe(glob, { dot: true });
+  } catch (e) {
+    return { message: `cannot be read as a glob (${e instanceof Error ? e.message : String(e)})`, hint: 'see the glob syntax in the README ("Policy")' };
+  }
+  if (re.source === "$^") return { message: "cannot be read as a glob: it would match no file", hint: 'see the glob syntax in the README ("Policy")' };
+  return void 0;
+}
+var import_picomatch, ESCAPABLE;
+var init_globs = __esm({
+  "src/policy/globs.ts"() {
+    "use strict";
+    import_picomatch = __toESM(require_picomatch2(), 1);
+    ESCAPABLE = new Set("*?[]{}()!+@,\\/^$.|- ".split(""));
+  }
+});
+
 // src/policy/requirement-id.ts
 function statisticTag(s) {
   switch (s.kind) {
@@ -23466,7 +24491,7 @@ function requirementId(r) {
       return `n-1:${r.element}`;
     case "no-new-spof":
       if (r.bridges && r.cutNodes) return "no-new-spof";
-      return r.bridges ? "no-new-spof:bridges" : "no-new-spof:cut-nodes";
+      return `no-new-spof:${[r.bridges ? "bridges" : "", r.cutNodes ? "cut-nodes" : "", r.riskGroups ? "risk-groups" : ""].filter(Boolean).join("+")}`;
   }
 }
 var init_requirement_id = __esm({
@@ -23558,6 +24583,41 @@ var init_policy_schema = __esm({
         weakening: { $ref: "#/definitions/weakening" },
         "removed-designs": { $ref: "#/definitions/removedDesigns" },
         budget: { $ref: "#/definitions/budget" },
+        mend: {
+          description: 'How netbrace looks for what would mend a failing design (netbrace mend, and the "what would mend it" part of the reports). Advice only: it never changes a verdict.',
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            candidates: {
+              description: "The planner's list of candidate links (a YAML or JSON file; repository path from the root): candidates: [{between: [a, b], length_km, latency_ms, cost, risk_groups, id, note}]. Without it, site pairs within max-km are the candidates.",
+              type: "string",
+              minLength: 1
+            },
+            "route-factor": {
+              description: "Length of a generated candidate = great-circle distance × this factor (common practice: fibre follows roads and coasts). Default 1.3.",
+              type: "number",
+              minimum: 1,
+              maximum: 10
+            },
+            "max-km": {
+              description: "Generated candidates join only sites at most this far apart (great circle, km). Default: the longest span the design already has.",
+              type: "number",
+              exclusiveMinimum: 0
+            },
+            "max-links": {
+              description: "Most links one suggestion may add. Default 3, or one more than the Eswaran–Tarjan bound of the new bridges when that is larger.",
+              type: "integer",
+              minimum: 1,
+              maximum: 10
+            },
+            evaluations: {
+              description: "Most engine evaluations of mended designs per failing design (each one full evaluation under this policy); 0 turns the search off. Default: up to 10, within four times the design's budget.",
+              type: "integer",
+              minimum: 0,
+              maximum: 100
+            }
+          }
+        },
         scopes: {
           description: "Rules for some files only: they add requirements or tighten existing ones, never loosen them.",
           type: "array",
@@ -23584,7 +24644,7 @@ var init_policy_schema = __esm({
           ]
         },
         seed: { type: "integer", minimum: 0, maximum: 4294967295 },
-        weight: { description: "Weight of the metric in the mean (> 0).", type: "number", exclusiveMinimum: 0 },
+        weight: { description: "Weight of the metric in the mean, from 1e-6 to 1e6 (only the ratios between weights matter).", type: "number", exclusiveMinimum: 0 },
         severity: {
           description: "fail: the gate fails; warn: reported as a warning; notice: reported only.",
           enum: ["fail", "warn", "notice"],
@@ -23710,18 +24770,22 @@ var init_policy_schema = __esm({
               }
             },
             {
-              description: "no-new-spof: the change may not add bridges or cut nodes that the base did not have.",
+              description: "no-new-spof: the change may not add bridges, cut nodes or shared-risk groups whose loss strands sites that the base did not have.",
               type: "object",
               additionalProperties: false,
               required: ["kind"],
               properties: {
                 kind: { const: "no-new-spof" },
                 elements: {
-                  description: "Which single points of failure count (default both).",
+                  description: "Which single points of failure count (default all three): bridges (links), cut-nodes (sites), risk-groups (shared-risk groups whose loss cuts sites off).",
                   type: "array",
                   minItems: 1,
                   uniqueItems: true,
-                  items: { enum: ["bridges", "cut-nodes"] }
+                  items: { enum: ["bridges", "cut-nodes", "risk-groups"] }
+                },
+                "hardened-weak-points": {
+                  description: "What a new weak point hidden by an element the change marks hardened is: fail, warn (the default), notice or ignore. Hardening is a claim the gate cannot check.",
+                  enum: ["fail", "warn", "notice", "ignore"]
                 },
                 severity: { $ref: "#/definitions/severity" }
               }
@@ -23763,11 +24827,11 @@ function pointerSegments(pointer) {
   if (pointer === "") return [];
   return pointer.slice(1).split("/").map((s) => s.replace(/~1/g, "/").replace(/~0/g, "~")).map((s) => /^(0|[1-9][0-9]*)$/.test(s) ? Number(s) : s);
 }
-var import_yaml3, MAX_ALIAS_COUNT2, YamlSource;
+var import_yaml4, MAX_ALIAS_COUNT2, YamlSource;
 var init_yaml_source = __esm({
   "src/policy/yaml-source.ts"() {
     "use strict";
-    import_yaml3 = __toESM(require_dist(), 1);
+    import_yaml4 = __toESM(require_dist(), 1);
     init_errors();
     init_nesting();
     MAX_ALIAS_COUNT2 = 100;
@@ -23778,12 +24842,12 @@ var init_yaml_source = __esm({
       lines;
       constructor(text2, file) {
         this.file = file;
-        this.lines = new import_yaml3.LineCounter();
+        this.lines = new import_yaml4.LineCounter();
         const deep = yamlNestingExceeded(text2);
         if (deep >= 0) {
           throw new PolicyError(`the policy nests deeper than ${MAX_NESTING} levels`, { file, ...positionOf(text2, deep) }, "a policy needs a few levels of nesting; flatten this structure");
         }
-        this.doc = (0, import_yaml3.parseDocument)(text2, { lineCounter: this.lines, prettyErrors: false, uniqueKeys: true });
+        this.doc = (0, import_yaml4.parseDocument)(text2, { lineCounter: this.lines, prettyErrors: false, uniqueKeys: true });
         const problem = this.doc.errors[0];
         if (problem) {
           const where = this.offset(problem.pos[0]);
@@ -23810,24 +24874,24 @@ var init_yaml_source = __esm({
         return { file: this.file, line, column: col };
       }
       /** Location of the value at `path`, or of its key when `key` is set; the nearest existing ancestor otherwise. */
-      where(path7, key = false) {
+      where(path11, key = false) {
         let node = this.doc.contents;
         let last = { file: this.file, line: 1, column: 1 };
         if (node?.range) last = this.offset(node.range[0]);
-        for (let i = 0; i < path7.length; i++) {
-          if (node && (0, import_yaml3.isAlias)(node)) node = node.resolve(this.doc);
-          const seg = path7[i];
-          if (node && (0, import_yaml3.isMap)(node)) {
-            const pair = node.items.find((p) => (0, import_yaml3.isScalar)(p.key) && String(p.key.value) === String(seg));
-            if (!pair) return last;
-            const keyNode = pair.key;
-            const isLast = i === path7.length - 1;
+        for (let i = 0; i < path11.length; i++) {
+          if (node && (0, import_yaml4.isAlias)(node)) node = node.resolve(this.doc);
+          const seg2 = path11[i];
+          if (node && (0, import_yaml4.isMap)(node)) {
+            const pair2 = node.items.find((p) => (0, import_yaml4.isScalar)(p.key) && String(p.key.value) === String(seg2));
+            if (!pair2) return last;
+            const keyNode = pair2.key;
+            const isLast = i === path11.length - 1;
             if (isLast && key && keyNode.range) return this.offset(keyNode.range[0]);
-            node = pair.value;
+            node = pair2.value;
             if (node?.range) last = this.offset(node.range[0]);
             else if (keyNode.range) last = this.offset(keyNode.range[0]);
-          } else if (node && (0, import_yaml3.isSeq)(node)) {
-            node = node.items[Number(seg)];
+          } else if (node && (0, import_yaml4.isSeq)(node)) {
+            node = node.items[Number(seg2)];
             if (node?.range) last = this.offset(node.range[0]);
             else return last;
           } else {
@@ -23841,42 +24905,42 @@ var init_yaml_source = __esm({
 });
 
 // src/policy/schema-errors.ts
-function describePath(path7) {
-  if (path7.length === 0) return "the policy";
+function describePath(path11) {
+  if (path11.length === 0) return "the policy";
   const parts = [];
   let i = 0;
-  while (i < path7.length) {
-    const seg = path7[i];
-    const next = path7[i + 1];
-    if (seg === "requirements" && typeof next === "number") {
+  while (i < path11.length) {
+    const seg2 = path11[i];
+    const next = path11[i + 1];
+    if (seg2 === "requirements" && typeof next === "number") {
       parts.push(`requirement ${next + 1}`);
       i += 2;
-    } else if (seg === "scopes" && typeof next === "number") {
+    } else if (seg2 === "scopes" && typeof next === "number") {
       parts.push(`scope ${next + 1}`);
       i += 2;
-    } else if (seg === "designs" && typeof next === "number") {
+    } else if (seg2 === "designs" && typeof next === "number") {
       parts.push(`designs entry ${next + 1}`);
       i += 2;
-    } else if (seg === "challenges" && next !== void 0) {
+    } else if (seg2 === "challenges" && next !== void 0) {
       parts.push(`challenge "${next}"`);
       i += 2;
     } else if (typeof next === "number") {
-      parts.push(`item ${next + 1} of "${seg}"`);
+      parts.push(`item ${next + 1} of "${seg2}"`);
       i += 2;
     } else {
-      parts.push(`"${seg}"`);
+      parts.push(`"${seg2}"`);
       i += 1;
     }
   }
   return parts.join(", ");
 }
-function typeOf(value) {
-  if (value === null || value === void 0) return "empty";
-  if (Array.isArray(value)) return "a list";
-  if (typeof value === "object") return "a mapping";
-  if (typeof value === "string") return `the text "${value}"`;
-  if (typeof value === "number") return Number.isInteger(value) ? `the number ${value}` : `the number ${value}`;
-  return String(value);
+function typeOf(value2) {
+  if (value2 === null || value2 === void 0) return "empty";
+  if (Array.isArray(value2)) return "a list";
+  if (typeof value2 === "object") return "a mapping";
+  if (typeof value2 === "string") return `the text "${value2}"`;
+  if (typeof value2 === "number") return Number.isInteger(value2) ? `the number ${value2}` : `the number ${value2}`;
+  return String(value2);
 }
 function renamedKey(key, known) {
   const renamed = Object.hasOwn(RENAMED_KEYS, key) ? RENAMED_KEYS[key] : void 0;
@@ -23893,16 +24957,16 @@ function suggestion(word, candidates2, listName) {
   return c !== void 0 ? `did you mean "${c}"?` : `${listName}: ${candidates2.join(", ")}`;
 }
 function diagnose(e, src) {
-  const path7 = pointerSegments(e.instancePath);
-  const subject = describePath(path7);
+  const path11 = pointerSegments(e.instancePath);
+  const subject = describePath(path11);
   const parentSchema = e.parentSchema;
   const params = e.params;
   switch (e.keyword) {
     case "additionalProperties": {
       const key = String(params.additionalProperty);
       const known = Object.keys(parentSchema?.properties ?? {});
-      const where = src.where([...path7, key], true);
-      if (path7.length === 2 && path7[0] === "r-value" && path7[1] === "metrics") {
+      const where = src.where([...path11, key], true);
+      if (path11.length === 2 && path11[0] === "r-value" && path11[1] === "metrics") {
         return { where, message: `unknown metric "${key}"`, hint: suggestion(key, known, "known metrics") };
       }
       const renamed = renamedKey(key, known);
@@ -23911,68 +24975,68 @@ function diagnose(e, src) {
     }
     case "required": {
       const key = String(params.missingProperty);
-      return { where: src.where(path7), message: `${subject} is missing "${key}"`, hint: `add a "${key}:" line` };
+      return { where: src.where(path11), message: `${subject} is missing "${key}"`, hint: `add a "${key}:" line` };
     }
     case "type": {
       const want = String(params.type).split(",").map((t) => TYPE_WORDS2[t] ?? t).join(" or ");
-      return { where: src.where(path7), message: `${subject} must be ${want}, not ${typeOf(e.data)}`, hint: "" };
+      return { where: src.where(path11), message: `${subject} must be ${want}, not ${typeOf(e.data)}`, hint: "" };
     }
     case "enum": {
       const allowed = params.allowedValues.map(String);
       return {
-        where: src.where(path7),
+        where: src.where(path11),
         message: `${subject} cannot be ${typeOf(e.data)}; it is one of ${allowed.join(", ")}`,
         hint: suggestion(e.data, allowed, "allowed")
       };
     }
     case "const":
-      return { where: src.where(path7), message: `${subject} must be ${JSON.stringify(params.allowedValue)}`, hint: "" };
+      return { where: src.where(path11), message: `${subject} must be ${JSON.stringify(params.allowedValue)}`, hint: "" };
     case "minimum":
     case "maximum":
     case "exclusiveMinimum":
     case "exclusiveMaximum": {
       const op = { minimum: "≥", maximum: "≤", exclusiveMinimum: ">", exclusiveMaximum: "<" }[e.keyword];
-      return { where: src.where(path7), message: `${subject} must be ${op} ${String(params.limit)} (it is ${String(e.data)})`, hint: "" };
+      return { where: src.where(path11), message: `${subject} must be ${op} ${String(params.limit)} (it is ${String(e.data)})`, hint: "" };
     }
     case "minItems":
     case "maxItems": {
       const exact = parentSchema?.minItems !== void 0 && parentSchema.minItems === parentSchema.maxItems;
       const n = String(params.limit);
       const message = exact ? `${subject} must have exactly ${n} items` : e.keyword === "minItems" ? `${subject} needs at least ${n} item${n === "1" ? "" : "s"}` : `${subject} may have at most ${n} items`;
-      return { where: src.where(path7), message, hint: "" };
+      return { where: src.where(path11), message, hint: "" };
     }
     case "minProperties":
-      return { where: src.where(path7), message: `${subject} needs at least one entry`, hint: "" };
+      return { where: src.where(path11), message: `${subject} needs at least one entry`, hint: "" };
     case "minLength":
-      return { where: src.where(path7), message: `${subject} must not be empty`, hint: "" };
+      return { where: src.where(path11), message: `${subject} must not be empty`, hint: "" };
     case "uniqueItems":
-      return { where: src.where(path7), message: `${subject} lists the same item twice`, hint: "remove the repeated item" };
+      return { where: src.where(path11), message: `${subject} lists the same item twice`, hint: "remove the repeated item" };
     case "propertyNames":
       return {
-        where: src.where([...path7, String(params.propertyName)], true),
+        where: src.where([...path11, String(params.propertyName)], true),
         message: `the name "${String(params.propertyName)}" in ${subject} may use only letters, digits, "-", "_" and "."`,
         hint: ""
       };
     case "anyOf":
-      return { where: src.where(path7), message: `${subject} must be a glob or a list of globs`, hint: 'e.g. "networks/**/*.graphml"' };
+      return { where: src.where(path11), message: `${subject} must be a glob or a list of globs`, hint: 'e.g. "networks/**/*.graphml"' };
     case "discriminator": {
       if (params.error === "mapping") {
         const kinds = requirementKinds(parentSchema);
         return {
-          where: src.where([...path7, "kind"]),
+          where: src.where([...path11, "kind"]),
           message: `unknown requirement kind "${String(params.tagValue)}"`,
           hint: suggestion(params.tagValue, kinds, "kinds")
         };
       }
       const data = e.data;
       if (data === null || typeof data !== "object" || data.kind === void 0) return void 0;
-      return { where: src.where([...path7, "kind"]), message: `${subject}: "kind" must be text`, hint: "" };
+      return { where: src.where([...path11, "kind"]), message: `${subject}: "kind" must be text`, hint: "" };
     }
     // Sub-errors of propertyNames and anyOf are reported through their parent error.
     case "pattern":
       return void 0;
     default:
-      return { where: src.where(path7), message: `${subject}: ${e.message ?? "is not valid"}`, hint: "" };
+      return { where: src.where(path11), message: `${subject}: ${e.message ?? "is not valid"}`, hint: "" };
   }
 }
 function requirementKinds(schema) {
@@ -24031,29 +25095,50 @@ var init_schema_errors = __esm({
 });
 
 // src/policy/load.ts
+function firstNonNormal2(v, path11) {
+  if (typeof v === "number") {
+    const why = nonNormal(v);
+    return why ? { path: [...path11], why } : void 0;
+  }
+  if (v === null || typeof v !== "object") return void 0;
+  const entries = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
+  for (const [k, x] of entries) {
+    if (typeof x !== "number" && (x === null || typeof x !== "object")) continue;
+    path11.push(k);
+    const found = firstNonNormal2(x, path11);
+    path11.pop();
+    if (found) return found;
+  }
+  return void 0;
+}
 function validate2(data) {
   validator2 ??= new import_ajv2.Ajv({ allErrors: true, verbose: true, discriminator: true, strict: false }).compile(policy_schema_default);
   validator2(data);
   return validator2;
 }
-function globs(value) {
-  return typeof value === "string" ? [value] : value;
+function globs(value2, src, path11, what) {
+  const list2 = typeof value2 === "string" ? [value2] : value2;
+  list2.forEach((g, j) => {
+    const problem = globProblem(g);
+    if (problem) throw new PolicyError(`${what}, glob "${g}" ${problem.message}`, src.where(typeof value2 === "string" ? path11 : [...path11, j]), problem.hint);
+  });
+  return list2;
 }
-function joinRepoPath(fromFile, relative, where) {
-  if (relative.startsWith("/") || /^[A-Za-z]:[\\/]/.test(relative)) {
-    throw new PolicyError(`"inherits" must be a path inside the repository, not ${relative}`, where, "write it relative to this policy file");
+function joinRepoPath(fromFile, relative2, where) {
+  if (relative2.startsWith("/") || /^[A-Za-z]:[\\/]/.test(relative2)) {
+    throw new PolicyError(`"inherits" must be a path inside the repository, not ${relative2}`, where, "write it relative to this policy file");
   }
   const dir = fromFile.split("/").slice(0, -1);
   const parts = [...dir];
-  for (const seg of relative.replace(/\\/g, "/").split("/")) {
-    if (seg === "" || seg === ".") continue;
-    if (seg === "..") {
+  for (const seg2 of relative2.replace(/\\/g, "/").split("/")) {
+    if (seg2 === "" || seg2 === ".") continue;
+    if (seg2 === "..") {
       if (parts.length === 0) {
-        throw new PolicyError(`"inherits" leaves the repository: ${relative}`, where, "the base policy must be a file in this repository");
+        throw new PolicyError(`"inherits" leaves the repository: ${relative2}`, where, "the base policy must be a file in this repository");
       }
       parts.pop();
     } else {
-      parts.push(seg);
+      parts.push(seg2);
     }
   }
   return parts.join("/");
@@ -24064,6 +25149,8 @@ function parsePolicyFile(text2, file) {
   if (typeof data !== "object" || data === null || Array.isArray(data)) {
     throw new PolicyError("the policy must be a mapping of keys (key: value lines)", src.where([]), 'see "netbrace init" for a starter file');
   }
+  const odd = firstNonNormal2(data, []);
+  if (odd) throw new PolicyError(`${describePath(odd.path)} ${odd.why}`, src.where(odd.path), "write a plain decimal number");
   const v = validate2(data);
   if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
   const raw = data;
@@ -24076,18 +25163,28 @@ function parsePolicyFile(text2, file) {
   if (raw.designs !== void 0) {
     policy.designs = raw.designs.map(
       (d, i) => ({
-        paths: globs(d.paths),
+        paths: globs(d.paths, src, ["designs", i, "paths"], `designs entry ${i + 1}`),
         ...d.format !== void 0 ? { format: d.format } : {},
-        where: src.where(["designs", i])
+        where: src.where(["designs", i]),
+        fileWhere: typeof d.paths === "string" ? [src.where(["designs", i, "paths"])] : d.paths.map((_, j) => src.where(["designs", i, "paths", j]))
       })
     );
   }
-  if (raw.exclude !== void 0) policy.exclude = { globs: globs(raw.exclude), where: src.where(["exclude"]) };
+  if (raw.exclude !== void 0) policy.exclude = { globs: globs(raw.exclude, src, ["exclude"], "exclude"), where: src.where(["exclude"]) };
   if (raw.seed !== void 0) policy.seed = { value: raw.seed, where: src.where(["seed"]) };
   if (raw["r-value"] !== void 0) {
     const r = raw["r-value"];
+    for (const [id2, weight] of Object.entries(r.metrics)) {
+      if (weight < MIN_METRIC_WEIGHT || weight > MAX_METRIC_WEIGHT) {
+        throw new PolicyError(
+          `the weight of ${id2} in r-value.metrics is ${fmt(weight)}, outside ${fmt(MIN_METRIC_WEIGHT)} to ${fmt(MAX_METRIC_WEIGHT)}`,
+          src.where(["r-value", "metrics", id2]),
+          "weights only set the metrics against each other (R is their weighted mean): 1 and 2 say the same as 1000 and 2000"
+        );
+      }
+    }
     const spec = {
-      metrics: Object.entries(r.metrics).map(([id, weight]) => ({ id, weight })),
+      metrics: Object.entries(r.metrics).map(([id2, weight]) => ({ id: id2, weight })),
       combine: r.combine ?? "mean"
     };
     policy.rValue = { spec, where: src.where(["r-value"], true) };
@@ -24115,35 +25212,41 @@ function parsePolicyFile(text2, file) {
   if (removed) policy.removedDesigns = removed;
   const budget = b.budget(raw.budget, ["budget"]);
   if (budget) policy.budget = budget;
+  const mend = b.mend(raw.mend);
+  if (mend) policy.mend = mend;
   policy.scopes = (raw.scopes ?? []).map((o, i) => {
-    const path7 = ["scopes", i];
+    const path11 = ["scopes", i];
     const scope = {
-      paths: globs(o.paths),
-      requirements: b.requirements(o.requirements, [...path7, "requirements"]),
-      where: src.where(path7)
+      paths: globs(o.paths, src, [...path11, "paths"], `scope ${i + 1}`),
+      requirements: b.requirements(o.requirements, [...path11, "requirements"]),
+      where: src.where(path11)
     };
-    const rule = b.weakening(o.weakening, [...path7, "weakening"]);
+    const rule = b.weakening(o.weakening, [...path11, "weakening"]);
     if (rule) scope.weakening = rule;
-    const rem = b.removed(o["removed-designs"], [...path7, "removed-designs"]);
+    const rem = b.removed(o["removed-designs"], [...path11, "removed-designs"]);
     if (rem) scope.removedDesigns = rem;
-    const ob = b.budget(o.budget, [...path7, "budget"]);
+    const ob = b.budget(o.budget, [...path11, "budget"]);
     if (ob) scope.budget = ob;
     return scope;
   });
   return policy;
 }
-var import_ajv2, validator2, ENGINE, FileBuilder;
+var import_ajv2, MIN_METRIC_WEIGHT, MAX_METRIC_WEIGHT, validator2, ENGINE, FileBuilder;
 var init_load = __esm({
   "src/policy/load.ts"() {
     "use strict";
     import_ajv2 = __toESM(require_ajv(), 1);
     init_errors();
+    init_quantities();
     init_registry2();
     init_defaults();
+    init_globs();
     init_requirement_id();
     init_policy_schema();
     init_schema_errors();
     init_yaml_source();
+    MIN_METRIC_WEIGHT = 1e-6;
+    MAX_METRIC_WEIGHT = 1e6;
     ENGINE = {
       nodes: {
         random: { static: "random-nodes" },
@@ -24169,14 +25272,14 @@ var init_load = __esm({
         this.src = src;
       }
       src;
-      at(path7, key = false) {
-        return this.src.where(path7, key);
+      at(path11, key = false) {
+        return this.src.where(path11, key);
       }
-      fail(message, path7, hint = "", key = false) {
-        throw new PolicyError(message, this.at(path7, key), hint);
+      fail(message, path11, hint = "", key = false) {
+        throw new PolicyError(message, this.at(path11, key), hint);
       }
       challenge(name, raw) {
-        const path7 = ["challenges", name];
+        const path11 = ["challenges", name];
         const remove = raw.remove;
         const order = raw.order ?? "random";
         const adaptive = raw.adaptive ?? false;
@@ -24185,7 +25288,7 @@ var init_load = __esm({
         if (!entry) {
           this.fail(
             `challenge "${name}": ${remove} cannot be removed in ${order} order`,
-            [...path7, raw.order === void 0 ? "remove" : "order"],
+            [...path11, raw.order === void 0 ? "remove" : "order"],
             `orders for ${remove}: ${Object.keys(options).join(", ")}`
           );
         }
@@ -24193,20 +25296,20 @@ var init_load = __esm({
         if (!engine) {
           this.fail(
             `challenge "${name}": the ${order} order of ${remove} has no adaptive form`,
-            [...path7, "adaptive"],
+            [...path11, "adaptive"],
             order === "random" ? "adaptive applies to targeted attacks only" : 'remove "adaptive: true"'
           );
         }
         const random = order === "random";
         for (const key of ["realizations", "band"]) {
           if (!random && raw[key] !== void 0) {
-            this.fail(`challenge "${name}": "${key}" applies only to random order`, [...path7, key], "a targeted attack is one curve", true);
+            this.fail(`challenge "${name}": "${key}" applies only to random order`, [...path11, key], "a targeted attack is one curve", true);
           }
         }
         if (raw["worst-case"] !== void 0 && !(random && (remove === "nodes" || remove === "links"))) {
           this.fail(
             `challenge "${name}": "worst-case" applies only to random node or link removal`,
-            [...path7, "worst-case"],
+            [...path11, "worst-case"],
             "",
             true
           );
@@ -24215,13 +25318,13 @@ var init_load = __esm({
         if (remove !== "region" && until !== void 0 && until > 1) {
           this.fail(
             `challenge "${name}": "until" is a fraction of the ${remove} removed and must be ≤ 1 (it is ${until})`,
-            [...path7, "until"],
+            [...path11, "until"],
             "e.g. 0.5 for half of them"
           );
         }
         const band = raw.band;
         if (band && !(band[0] < band[1])) {
-          this.fail(`challenge "${name}": the band's lower quantile must be below its upper one`, [...path7, "band"], `e.g. [0.1, 0.9]`);
+          this.fail(`challenge "${name}": the band's lower quantile must be below its upper one`, [...path11, "band"], `e.g. [0.1, 0.9]`);
         }
         const params = { challenge: engine, until: until ?? (remove === "region" ? REGIONAL_UNTIL_KM : DEFAULTS.until) };
         if (random) {
@@ -24233,44 +25336,44 @@ var init_load = __esm({
           params.points = raw.points;
         }
         if (raw.seed !== void 0) params.seed = raw.seed;
-        return { name, remove, order, adaptive, engine, random, params, where: this.at(path7, true) };
+        return { name, remove, order, adaptive, engine, random, params, where: this.at(path11, true) };
       }
-      statistic(raw, path7) {
+      statistic(raw, path11) {
         const kind = raw.statistic ?? "median";
         if (raw.q !== void 0 && kind !== "quantile") {
-          this.fail(`${describePath(path7)}: "q" needs "statistic: quantile"`, [...path7, "q"], 'add "statistic: quantile" or remove "q"', true);
+          this.fail(`${describePath(path11)}: "q" needs "statistic: quantile"`, [...path11, "q"], 'add "statistic: quantile" or remove "q"', true);
         }
         if (raw.removals !== void 0 && kind !== "worst-case") {
-          this.fail(`${describePath(path7)}: "removals" needs "statistic: worst-case"`, [...path7, "removals"], "", true);
+          this.fail(`${describePath(path11)}: "removals" needs "statistic: worst-case"`, [...path11, "removals"], "", true);
         }
         if (kind === "quantile") {
-          if (raw.q === void 0) this.fail(`${describePath(path7)}: "statistic: quantile" needs "q"`, [...path7, "statistic"], 'e.g. "q: 0.1"');
+          if (raw.q === void 0) this.fail(`${describePath(path11)}: "statistic: quantile" needs "q"`, [...path11, "statistic"], 'e.g. "q: 0.1"');
           return { kind, q: raw.q };
         }
         if (kind === "worst-case") {
           if (raw.removals === void 0) {
-            this.fail(`${describePath(path7)}: "statistic: worst-case" needs "removals"`, [...path7, "statistic"], 'e.g. "removals: 2"');
+            this.fail(`${describePath(path11)}: "statistic: worst-case" needs "removals"`, [...path11, "statistic"], 'e.g. "removals: 2"');
           }
           if (raw.at !== void 0) {
-            this.fail(`${describePath(path7)}: a worst-case threshold counts "removals", not "at"`, [...path7, "at"], 'remove "at"', true);
+            this.fail(`${describePath(path11)}: a worst-case threshold counts "removals", not "at"`, [...path11, "at"], 'remove "at"', true);
           }
           return { kind, removals: raw.removals };
         }
         return { kind };
       }
-      requirement(raw, path7) {
-        const where = this.at(path7);
+      requirement(raw, path11) {
+        const where = this.at(path11);
         const severity = raw.severity ?? "fail";
         const valueKey = raw.min !== void 0 ? "min" : raw.max !== void 0 ? "max" : "kind";
-        const valueWhere = this.at([...path7, valueKey]);
+        const valueWhere = this.at([...path11, valueKey]);
         const common = { id: "", severity, where, valueWhere };
-        const ref = { challenge: raw.challenge, challengeWhere: this.at([...path7, "challenge"]) };
+        const ref = { challenge: raw.challenge, challengeWhere: this.at([...path11, "challenge"]) };
         let req;
         switch (raw.kind) {
           case "r-threshold": {
-            const statistic = this.statistic(raw, path7);
+            const statistic = this.statistic(raw, path11);
             if (statistic.kind !== "worst-case" && raw.at === void 0) {
-              this.fail(`${describePath(path7)} has no "at"`, path7, 'add "at:", the removal fraction where R is judged');
+              this.fail(`${describePath(path11)} has no "at"`, path11, 'add "at:", the removal fraction where R is judged');
             }
             req = {
               ...common,
@@ -24297,28 +25400,31 @@ var init_load = __esm({
             req = { ...common, kind: "n-1", element: raw.element ?? "link", min: raw.min };
             break;
           default: {
-            const elements = raw.elements ?? ["bridges", "cut-nodes"];
+            const elements = raw.elements ?? ["bridges", "cut-nodes", "risk-groups"];
             req = {
               ...common,
-              valueWhere: this.at([...path7, raw.elements !== void 0 ? "elements" : "kind"]),
+              valueWhere: this.at([...path11, raw.elements !== void 0 ? "elements" : "kind"]),
               kind: "no-new-spof",
               bridges: elements.includes("bridges"),
-              cutNodes: elements.includes("cut-nodes")
+              cutNodes: elements.includes("cut-nodes"),
+              riskGroups: elements.includes("risk-groups"),
+              hardenedWeakPoints: raw["hardened-weak-points"] ?? "warn",
+              ...raw["hardened-weak-points"] !== void 0 ? { hardenedWhere: this.at([...path11, "hardened-weak-points"]) } : {}
             };
           }
         }
         req.id = requirementId(req);
         return req;
       }
-      requirements(list2, path7) {
+      requirements(list2, path11) {
         if (list2 === void 0) return [];
         const out = [];
         const byId2 = /* @__PURE__ */ new Map();
         list2.forEach((raw, i) => {
-          const req = this.requirement(raw, [...path7, i]);
+          const req = this.requirement(raw, [...path11, i]);
           const twin = byId2.get(req.id);
           if (twin) {
-            throw new PolicyError(`${describePath([...path7, i])} repeats requirement ${req.id}`, req.where, "keep one of them", [
+            throw new PolicyError(`${describePath([...path11, i])} repeats requirement ${req.id}`, req.where, "keep one of them", [
               { ...twin.where, message: "first written here" }
             ]);
           }
@@ -24327,17 +25433,17 @@ var init_load = __esm({
         });
         return out;
       }
-      weakening(raw, path7) {
+      weakening(raw, path11) {
         if (raw === void 0) return void 0;
         const fieldWhere = {};
         const field = (key, name) => {
-          if (raw[key] !== void 0) fieldWhere[name] = this.at([...path7, key]);
+          if (raw[key] !== void 0) fieldWhere[name] = this.at([...path11, key]);
           return raw[key];
         };
         const rule = {
           errorMultiple: field("error-multiple", "errorMultiple") ?? DEFAULT_ERROR_MULTIPLE,
           severity: field("severity", "severity") ?? "fail",
-          where: this.at(path7, true),
+          where: this.at(path11, true),
           fieldWhere
         };
         const abs = field("allowed-drop", "allowedDrop");
@@ -24346,18 +25452,34 @@ var init_load = __esm({
         if (rel !== void 0) rule.allowedRelativeDrop = rel;
         return rule;
       }
-      budget(raw, path7) {
+      budget(raw, path11) {
         if (raw === void 0) return void 0;
-        const budget = { where: this.at(path7, true), fieldWhere: {} };
+        const budget = { where: this.at(path11, true), fieldWhere: {} };
         for (const key of ["work", "seconds"]) {
           if (raw[key] === void 0) continue;
           budget[key] = raw[key];
-          budget.fieldWhere[key] = this.at([...path7, key]);
+          budget.fieldWhere[key] = this.at([...path11, key]);
         }
         return budget;
       }
-      removed(raw, path7) {
-        return raw === void 0 ? void 0 : { severity: raw, where: this.at(path7) };
+      mend(raw) {
+        if (raw === void 0) return void 0;
+        const m = { where: this.at(["mend"], true) };
+        if (raw.candidates !== void 0) {
+          const c = String(raw.candidates).replace(/\\/g, "/");
+          if (c.startsWith("/") || /^[A-Za-z]:\//.test(c) || c.split("/").includes("..")) {
+            this.fail(`"mend.candidates" must be a path inside the repository, not ${c}`, ["mend", "candidates"], "write it from the repository root, e.g. planning/candidate-links.yaml");
+          }
+          m.candidates = c.split("/").filter((s) => s !== "" && s !== ".").join("/");
+        }
+        if (raw["route-factor"] !== void 0) m.routeFactor = raw["route-factor"];
+        if (raw["max-km"] !== void 0) m.maxKm = raw["max-km"];
+        if (raw["max-links"] !== void 0) m.maxLinks = raw["max-links"];
+        if (raw.evaluations !== void 0) m.evaluations = raw.evaluations;
+        return m;
+      }
+      removed(raw, path11) {
+        return raw === void 0 ? void 0 : { severity: raw, where: this.at(path11) };
       }
     };
   }
@@ -24376,7 +25498,7 @@ function describeValue(r) {
     case "spread-ceiling":
       return `max ${r.max}`;
     case "no-new-spof":
-      return [r.bridges ? "bridges" : "", r.cutNodes ? "cut-nodes" : ""].filter(Boolean).join(" and ");
+      return `elements ${[r.bridges ? "bridges" : "", r.cutNodes ? "cut-nodes" : "", r.riskGroups ? "risk-groups" : ""].filter(Boolean).join(", ")}`;
     case "area-floor":
       return r.min === void 0 ? "no floor" : `min ${r.min}`;
     default:
@@ -24394,7 +25516,14 @@ function loosening(prev, next) {
   let looser = false;
   if (prev.kind === "spread-ceiling" && next.kind === "spread-ceiling") looser = next.max > prev.max;
   else if (prev.kind === "no-new-spof" && next.kind === "no-new-spof") {
-    looser = prev.bridges && !next.bridges || prev.cutNodes && !next.cutNodes;
+    looser = prev.bridges && !next.bridges || prev.cutNodes && !next.cutNodes || prev.riskGroups && !next.riskGroups;
+    if (!looser && SEVERITY_RANK[next.hardenedWeakPoints] < SEVERITY_RANK[prev.hardenedWeakPoints]) {
+      return {
+        message: `lowers hardened-weak-points of ${prev.id} from ${prev.hardenedWeakPoints} to ${next.hardenedWeakPoints}`,
+        where: next.hardenedWhere ?? next.where,
+        prevWhere: prev.hardenedWhere ?? prev.where
+      };
+    }
   } else if (prev.kind === "area-floor" && next.kind === "area-floor") {
     looser = prev.min !== void 0 && (next.min === void 0 || next.min < prev.min);
   } else if ("min" in prev && "min" in next) looser = next.min < prev.min;
@@ -24430,14 +25559,14 @@ function mergeWeakening(prev, next, what) {
   for (const [field, key] of WEAKENING_FIELDS) {
     const at = next.value.fieldWhere[field];
     if (!at) continue;
-    const value = next.value[field];
+    const value2 = next.value[field];
     const before = prev.value[field] ?? 0;
     const prevAt = prev.value.fieldWhere[field] ?? prev.value.where;
-    if (value > before) {
+    if (value2 > before) {
       if (mayLoosen) continue;
-      throw loosenError(what, `loosens weakening ${key}: ${value} where ${before} is allowed`, at, prevAt);
+      throw loosenError(what, `loosens weakening ${key}: ${value2} where ${before} is allowed`, at, prevAt);
     }
-    merged[field] = value;
+    merged[field] = value2;
     merged.fieldWhere[field] = at;
   }
   const sevAt = next.value.fieldWhere.severity;
@@ -24481,9 +25610,9 @@ function describeBudget(b) {
 function mergeBudget(prev, next, what) {
   const merged = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
   for (const key of ["work", "seconds"]) {
-    const value = next.value[key];
-    if (value === void 0) continue;
-    merged[key] = value;
+    const value2 = next.value[key];
+    if (value2 === void 0) continue;
+    merged[key] = value2;
     merged.fieldWhere[key] = next.value.fieldWhere[key];
   }
   const before = budgetWork(prev.value);
@@ -24587,27 +25716,33 @@ function describeRequirementSite(file, r, scope) {
   return scope === void 0 ? req : `scope ${scope + 1}, ${req}`;
 }
 function readChain(entry, read) {
-  const chain = [];
+  const chain2 = [];
   const seen = /* @__PURE__ */ new Set();
-  let path7 = entry;
+  let path11 = entry;
   let from;
   for (; ; ) {
-    if (seen.has(path7)) {
-      throw new PolicyError(`"inherits" goes round in a circle back to ${path7}`, from ?? { file: path7 }, "remove one of the inherits lines");
+    if (seen.has(path11)) {
+      throw new PolicyError(`"inherits" goes round in a circle back to ${path11}`, from ?? { file: path11 }, "remove one of the inherits lines");
     }
-    seen.add(path7);
-    const text2 = read(path7);
+    seen.add(path11);
+    let text2;
+    try {
+      text2 = read(path11);
+    } catch (e) {
+      if (e instanceof EncodingError) throw new PolicyError(e.message, { file: e.file, line: e.line, column: e.column }, e.hint);
+      throw e;
+    }
     if (text2 === null) {
-      if (from) throw new PolicyError(`the base policy ${path7} does not exist`, from, "check the path; it is relative to this file");
-      throw new PolicyError(`the policy file ${path7} does not exist`, { file: path7 }, 'run "netbrace init" to write one');
+      if (from) throw new PolicyError(`the base policy ${path11} does not exist`, from, "check the path; it is relative to this file");
+      throw new PolicyError(`the policy file ${path11} does not exist`, { file: path11 }, 'run "netbrace init" to write one');
     }
-    const file = parsePolicyFile(text2, path7);
-    chain.unshift(file);
+    const file = parsePolicyFile(text2, path11);
+    chain2.unshift(file);
     if (!file.inherits) break;
     from = file.inherits.where;
-    path7 = file.inherits.path;
+    path11 = file.inherits.path;
   }
-  return chain;
+  return chain2;
 }
 function builtinPolicy() {
   return { ...mergeChain([builtin()]), source: "builtin", files: [] };
@@ -24615,8 +25750,8 @@ function builtinPolicy() {
 function loadPolicy(entry, read) {
   return mergeChain(readChain(entry, read));
 }
-function mergeChain(chain) {
-  const root = chain[0];
+function mergeChain(chain2) {
+  const root = chain2[0];
   const base = builtin();
   const challenges2 = /* @__PURE__ */ new Map();
   for (const c of root.challenges ?? base.challenges ?? []) challenges2.set(c.name, c);
@@ -24634,7 +25769,7 @@ function mergeChain(chain) {
   const requirements = [];
   const rootReqs = root.requirements ?? (root.challenges === void 0 ? base.requirements ?? [] : (base.requirements ?? []).filter((r) => !("challenge" in r) || challenges2.has(r.challenge)));
   for (const r of rootReqs) requirements.push({ value: r, layer: 0 });
-  chain.forEach((file, layer) => {
+  chain2.forEach((file, layer) => {
     if (layer === 0) return;
     if (file.rValue && !sameRValue(file.rValue.spec, rValue.spec)) {
       throw new PolicyError(
@@ -24677,10 +25812,10 @@ function mergeChain(chain) {
   const challengeList = [...challenges2.values()];
   const checked = requirements.map((r) => ({
     ...r,
-    value: checkRequirement(r.value, challengeList, describeRequirementSite(chain[r.layer] ?? root, r.value))
+    value: checkRequirement(r.value, challengeList, describeRequirementSite(chain2[r.layer] ?? root, r.value))
   }));
   const scopes = [];
-  chain.forEach(
+  chain2.forEach(
     (file, layer) => file.scopes.forEach((o, i) => {
       const what = (r) => describeRequirementSite(file, r, i);
       const requirementsChecked = o.requirements.map((r) => checkRequirement(r, challengeList, what(r)));
@@ -24692,9 +25827,10 @@ function mergeChain(chain) {
       scopes.push({ ...o, requirements: requirementsChecked, layer });
     })
   );
+  const mend = chain2.reduce((acc, f) => f.mend ? { ...acc, ...f.mend } : acc, void 0);
   return {
     source: "file",
-    files: chain.map((f) => f.path).reverse(),
+    files: chain2.map((f) => f.path).reverse(),
     designs,
     exclude,
     seed,
@@ -24705,40 +25841,52 @@ function mergeChain(chain) {
     removedDesigns: removed.value,
     budget: budget.value,
     scopes,
-    layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer }
+    layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer },
+    ...mend ? { mend } : {}
   };
 }
-function matches(globs2, given) {
-  const path7 = given.replace(/[\r\n\u2028\u2029]/g, "");
+function globsMatch(globs2, given) {
+  const path11 = given.replace(/[\r\n\u2028\u2029]/g, "");
   return globs2.some((g) => {
     let m = matchers.get(g);
     if (!m) {
-      m = (0, import_picomatch.default)(g, { dot: true });
+      m = (0, import_picomatch2.default)(g, { dot: true });
       matchers.set(g, m);
     }
-    return m(path7);
+    return m(path11);
   });
 }
-function isDesignPath(policy, path7) {
-  return policy.designs.some((d) => matches(d.paths, path7)) && !matches(policy.exclude, path7);
+function isDesignPath(policy, path11) {
+  return policy.designs.some((d) => globsMatch(d.paths, path11)) && !globsMatch(policy.exclude, path11);
 }
-function policyForFile(policy, path7) {
+function designNeedsHeader(policy, path11) {
+  const matching = policy.designs.flatMap((d) => d.paths.filter((g) => globsMatch([g], path11)).map((g) => ({ g, format: d.format })));
+  return matching.length > 0 && matching.every((m) => m.g === CSV_DESIGN_GLOB && m.format === void 0);
+}
+function isDesignText(policy, path11, text2) {
+  if (!isDesignPath(policy, path11)) return false;
+  return !designNeedsHeader(policy, path11) || text2 !== null && csvHasEdgeHeader(text2);
+}
+function designFormat(policy, path11) {
+  return policy.designs.find((d) => d.format !== void 0 && globsMatch(d.paths, path11))?.format;
+}
+function policyForFile(policy, path11) {
   const layers = policy.layers;
-  const requirements = policy.requirements.map((value, i) => ({ value, layer: layers.requirements[i] }));
+  const requirements = policy.requirements.map((value2, i) => ({ value: value2, layer: layers.requirements[i] }));
   let weakening = { value: policy.weakening, layer: layers.weakening };
   let removed = { value: policy.removedDesigns, layer: layers.removed };
   let budget = { value: policy.budget, layer: layers.budget };
   for (const o of policy.scopes) {
-    if (!matches(o.paths, path7)) continue;
+    if (!globsMatch(o.paths, path11)) continue;
     const { layer } = o;
-    const what = `a scope matching ${path7}`;
+    const what = `a scope matching ${path11}`;
     for (const r of o.requirements) mergeRequirement(requirements, { value: r, layer }, what);
     if (o.weakening) weakening = mergeWeakening(weakening, { value: o.weakening, layer }, `${what}:`);
     if (o.removedDesigns) removed = mergeRemoved(removed, { value: o.removedDesigns, layer }, what);
     if (o.budget) budget = mergeBudget(budget, { value: o.budget, layer }, what);
   }
   const b = budget.value;
-  const format = policy.designs.find((d) => d.format !== void 0 && matches(d.paths, path7))?.format;
+  const format = designFormat(policy, path11);
   return {
     rValue: policy.rValue,
     seed: policy.seed,
@@ -24747,19 +25895,22 @@ function policyForFile(policy, path7) {
     weakening: weakening.value,
     removedDesigns: removed.value.severity,
     budget: { ...b.work !== void 0 ? { work: b.work } : {}, ...b.seconds !== void 0 ? { seconds: b.seconds } : {}, maxWork: budgetWork(b) },
-    ...format ? { format } : {}
+    ...format ? { format } : {},
+    ...policy.mend ? { mend: policy.mend } : {}
   };
 }
-var import_picomatch, SEVERITY_RANK, builtinFile, WEAKENING_FIELDS, matchers;
+var import_picomatch2, SEVERITY_RANK, builtinFile, WEAKENING_FIELDS, matchers;
 var init_resolve = __esm({
   "src/policy/resolve.ts"() {
     "use strict";
-    import_picomatch = __toESM(require_picomatch2(), 1);
+    import_picomatch2 = __toESM(require_picomatch2(), 1);
+    init_decode();
     init_errors();
     init_registry();
     init_suggest();
     init_budget();
     init_defaults();
+    init_edgelist();
     init_load();
     init_requirement_id();
     SEVERITY_RANK = { ignore: 0, notice: 1, warn: 2, fail: 3 };
@@ -24772,15 +25923,257 @@ var init_resolve = __esm({
   }
 });
 
+// src/shell/workspace.ts
+import { existsSync, lstatSync, mkdirSync, readFileSync as readFileSync2, realpathSync, statSync as statSync2 } from "node:fs";
+import path2 from "node:path";
+function isInside(root, candidate) {
+  const rel = path2.relative(root, candidate);
+  return rel === "" || !rel.startsWith(`..${path2.sep}`) && rel !== ".." && !path2.isAbsolute(rel);
+}
+function absent(e) {
+  const code = e.code;
+  return code === "ENOENT" || code === "ENOTDIR" || code === "EISDIR";
+}
+function tooLarge(file, bytes, maxBytes, revision2 = "") {
+  const size = bytes === void 0 ? `more than ${maxBytes} bytes` : `${bytes} bytes > ${maxBytes}`;
+  return new LimitError(
+    `the file${revision2 ? ` at ${revision2}` : ""} is larger than netbrace reads (${size})`,
+    { file },
+    `design and policy files are limited to ${DEFAULT_MAX_BYTES} bytes`
+  );
+}
+function readInsideSync(root, file, maxBytes = DEFAULT_MAX_BYTES) {
+  const full = path2.resolve(root, file);
+  if (file.includes("\0") || !isInside(path2.resolve(root), full)) throw new WorkspacePathError(`${quoted(file)} is outside the repository`, "give paths inside the repository");
+  try {
+    const real = realpathSync(full);
+    if (!isInside(realpathSync(root), real)) throw new WorkspacePathError(`${quoted(file)} leads outside the repository through a symbolic link`);
+    const st = statSync2(real);
+    if (st.isDirectory()) return null;
+    if (st.size > maxBytes) throw tooLarge(file, st.size, maxBytes);
+    return decodeText(readFileSync2(real), file);
+  } catch (e) {
+    if (absent(e)) return null;
+    throw e;
+  }
+}
+async function readInside(root, file, maxBytes = DEFAULT_MAX_BYTES) {
+  return readInsideSync(root, file, maxBytes);
+}
+var WorkspacePathError, quoted;
+var init_workspace = __esm({
+  "src/shell/workspace.ts"() {
+    "use strict";
+    init_decode();
+    init_errors();
+    init_model();
+    WorkspacePathError = class extends UsageError {
+      name = "WorkspacePathError";
+    };
+    quoted = (file) => file.replace(/[\0-\x1f\x7f]/g, "?");
+  }
+});
+
+// src/shell/git.ts
+import { execFile } from "node:child_process";
+function runGit(cwd, args, timeout = 0) {
+  return execGit(cwd, args, timeout, "utf8");
+}
+function runGitBytes(cwd, args) {
+  return execGit(cwd, args, 0, "buffer");
+}
+function execGit(cwd, args, timeout, encoding) {
+  return new Promise((resolve, reject) => {
+    execFile(
+      "git",
+      args,
+      {
+        cwd,
+        maxBuffer: MAX_BUFFER,
+        timeout,
+        encoding,
+        // Never prompt for credentials (a fetch in CI would hang); stable English messages.
+        env: { ...process.env, GIT_TERMINAL_PROMPT: "0", LC_ALL: "C" }
+      },
+      (error, stdout, stderr) => {
+        if (error && typeof error.code === "string") {
+          const code = error.code;
+          reject(new GitError(code === "ENOENT" ? "git is not installed or not on PATH" : `git failed: ${error.message}`));
+          return;
+        }
+        resolve({ code: error ? error.code ?? 1 : 0, stdout, stderr: String(stderr) });
+      }
+    );
+  });
+}
+function gitReason(out) {
+  const lines = out.stderr.trim().split("\n").filter((l) => l.trim() !== "");
+  return lines.find((l) => l.startsWith("fatal:")) ?? lines[0] ?? `git exited with ${out.code}`;
+}
+function damageHint(out) {
+  return /corrupt|unable to unpack|inflate|bad object|missing blob|missing tree/i.test(out.stderr) ? 'the clone is damaged (a git object cannot be read): run "git fsck", or clone the repository again' : "";
+}
+async function git(cwd, args, what) {
+  const out = await runGit(cwd, args);
+  if (out.code !== 0) throw new GitError(`${what}: ${gitReason(out)}`, damageHint(out));
+  return out.stdout;
+}
+function checkRef(ref) {
+  if (ref === "" || ref.startsWith("-") || /[\0-\x1f\x7f\s]/.test(ref)) {
+    throw new UsageError(`"${ref.replace(/[\0-\x1f\x7f]/g, "?")}" is not a git revision`, "give a branch, tag or commit id");
+  }
+  return ref;
+}
+async function repoRoot(cwd) {
+  const out = await runGit(cwd, ["rev-parse", "--show-toplevel"]);
+  return out.code === 0 ? out.stdout.trim() : null;
+}
+async function revParse(cwd, ref) {
+  const out = await runGit(cwd, ["rev-parse", "--verify", "--quiet", "--end-of-options", `${checkRef(ref)}^{commit}`]);
+  return out.code === 0 ? out.stdout.trim() : null;
+}
+async function hasCommit(cwd, sha) {
+  return (await runGit(cwd, ["cat-file", "-e", "--end-of-options", `${checkRef(sha)}^{commit}`])).code === 0;
+}
+async function mergeBase(cwd, a, b) {
+  const out = await runGit(cwd, ["merge-base", "--end-of-options", checkRef(a), checkRef(b)]);
+  return out.code === 0 ? out.stdout.trim() : null;
+}
+async function ensureCommit(cwd, sha, remote = "origin") {
+  if (await hasCommit(cwd, sha)) return;
+  const out = await runGit(cwd, ["fetch", "--no-tags", "--no-recurse-submodules", "--depth=1", checkRef(remote), checkRef(sha)], FETCH_TIMEOUT_MS);
+  if (out.code === 0 && await hasCommit(cwd, sha)) return;
+  throw new GitError(
+    `commit ${sha} is not in this clone and could not be fetched from ${remote} (${out.stderr.trim().split("\n").pop() || `exit ${out.code}`})`,
+    'fetch the history: with actions/checkout set "fetch-depth: 0", or run "git fetch origin <base>" first'
+  );
+}
+function parseNameStatus(out) {
+  const parts = out.split("\0");
+  const files = [];
+  for (let i = 0; i + 1 < parts.length; ) {
+    const code = parts[i];
+    if (code === "") {
+      i++;
+      continue;
+    }
+    const status = STATUS[code[0]] ?? "modified";
+    if (code[0] === "R" || code[0] === "C") {
+      const [from, to] = [parts[i + 1], parts[i + 2]];
+      files.push(code[0] === "R" ? { status, path: to, previousPath: from } : { status, path: to });
+      i += 3;
+    } else {
+      files.push({ status, path: parts[i + 1] });
+      i += 2;
+    }
+  }
+  return files;
+}
+async function listChanged(cwd, base, head) {
+  const range = head === "worktree" ? [checkRef(base)] : [checkRef(base), checkRef(head)];
+  const diff = await git(cwd, ["diff", "--name-status", "-M", "-z", "--no-ext-diff", "--end-of-options", ...range, "--"], "git diff");
+  const files = parseNameStatus(diff);
+  if (head === "worktree") {
+    const untracked = await git(cwd, ["ls-files", "-z", "--others", "--exclude-standard"], "git ls-files");
+    for (const p of untracked.split("\0")) if (p) files.push({ status: "added", path: p });
+  }
+  return files;
+}
+async function showFile(cwd, rev, file) {
+  const spec = `${checkRef(rev)}:${file}`;
+  const out = await runGitBytes(cwd, ["show", "--no-textconv", "--end-of-options", spec]).catch((e) => {
+    if (e instanceof GitError && /maxBuffer/i.test(e.message)) throw tooLarge(file, void 0, MAX_BUFFER, rev.slice(0, 12));
+    throw e;
+  });
+  if (out.code === 0) return decodeText(out.stdout, file);
+  const listed = await runGit(cwd, ["ls-tree", "-z", "--end-of-options", checkRef(rev), "--", file]);
+  if (listed.code === 0 && listed.stdout === "") return null;
+  throw new GitError(`git show ${spec}: ${gitReason(out)}`, damageHint(out) || damageHint(listed));
+}
+async function readWorktree(root, file) {
+  return readInside(root, file, MAX_BUFFER);
+}
+async function listFiles(cwd, rev) {
+  const split = (out) => out.split("\0").filter(Boolean);
+  if (rev !== "worktree") {
+    return [...new Set(split(await git(cwd, ["ls-tree", "-r", "-z", "--name-only", "--end-of-options", checkRef(rev)], "git ls-tree")))].sort();
+  }
+  const all = split(await git(cwd, ["ls-files", "-z", "--cached", "--others", "--exclude-standard"], "git ls-files"));
+  const deleted = new Set(split(await git(cwd, ["ls-files", "-z", "--deleted"], "git ls-files")));
+  return [...new Set(all.filter((f) => !deleted.has(f)))].sort();
+}
+function gitDeps(root) {
+  return {
+    listChanged: (base, head) => listChanged(root, base, head),
+    readAt: (rev, file) => rev === "worktree" ? readWorktree(root, file) : showFile(root, rev, file),
+    listAll: (rev) => listFiles(root, rev),
+    readOrgPolicy: (file) => readWorktree(root, file)
+  };
+}
+var MAX_BUFFER, FETCH_TIMEOUT_MS, STATUS;
+var init_git = __esm({
+  "src/shell/git.ts"() {
+    "use strict";
+    init_decode();
+    init_errors();
+    init_workspace();
+    MAX_BUFFER = 64 * 1024 * 1024;
+    FETCH_TIMEOUT_MS = 12e4;
+    STATUS = { A: "added", M: "modified", D: "deleted", R: "renamed", T: "modified", C: "added", U: "modified" };
+  }
+});
+
+// src/shell/local-policy.ts
+import { realpathSync as realpathSync2 } from "node:fs";
+import path3 from "node:path";
+async function rootOf(cwd) {
+  try {
+    return await repoRoot(cwd) ?? realpathSync2(cwd);
+  } catch (e) {
+    if (e instanceof GitError) return realpathSync2(cwd);
+    throw e;
+  }
+}
+function fromRoot(root, cwd, given) {
+  const rel = path3.relative(root, path3.resolve(realpathSync2(cwd), given));
+  if (rel === "" || rel.startsWith("..") || path3.isAbsolute(rel)) return null;
+  return rel.split(path3.sep).join("/");
+}
+async function readLocalPolicy(io, given) {
+  const root = await rootOf(io.cwd);
+  const read = (p) => readInsideSync(root, p);
+  if (given !== void 0) {
+    const entry = fromRoot(root, io.cwd, given);
+    if (entry === null) throw new UsageError(`policy file ${given} is outside ${root === realpathSync2(io.cwd) ? "the working directory" : "the repository"}`, "a policy and the files it extends live in the repository");
+    if (read(entry) === null) throw new UsageError(`policy file ${given} not found`, "give a path relative to the working directory");
+    return { policy: loadPolicy(entry, read), source: `policy ${entry}`, root };
+  }
+  if (read(DEFAULT_POLICY_PATH) !== null) return { policy: loadPolicy(DEFAULT_POLICY_PATH, read), source: `policy ${DEFAULT_POLICY_PATH}`, root };
+  return { policy: builtinPolicy(), source: "the built-in policy", root };
+}
+function designPolicy(local, io, file) {
+  const rel = fromRoot(local.root, io.cwd, file) ?? file.split(path3.sep).join("/");
+  return policyForFile(local.policy, rel);
+}
+var init_local_policy = __esm({
+  "src/shell/local-policy.ts"() {
+    "use strict";
+    init_errors();
+    init_resolve();
+    init_git();
+    init_workspace();
+  }
+});
+
 // src/report/report.ts
 function serializeReport(report) {
   return `${JSON.stringify(
     report,
-    (_key, value) => {
-      if (typeof value !== "number") return value;
-      if (!Number.isFinite(value)) return null;
-      if (Number.isInteger(value)) return value;
-      const rounded = Number(value.toPrecision(REPORT_DIGITS));
+    (_key, value2) => {
+      if (typeof value2 !== "number") return value2;
+      if (!Number.isFinite(value2)) return null;
+      if (Number.isInteger(value2)) return value2;
+      const rounded = Number(value2.toPrecision(REPORT_DIGITS));
       return Object.is(rounded, -0) ? 0 : rounded;
     },
     2
@@ -24885,12 +26278,12 @@ function escapeMarkdown(text2, maxLength = 2e3) {
 }
 function markdownCode(text2, maxLength = 400, inTable = false) {
   const line = oneLine(text2, maxLength);
-  const value = inTable ? line.replace(/\|/g, "\\|") : line;
+  const value2 = inTable ? line.replace(/\|/g, "\\|") : line;
   let longest = 0;
-  for (const run3 of value.match(/`+/g) ?? []) longest = Math.max(longest, run3.length);
+  for (const run6 of value2.match(/`+/g) ?? []) longest = Math.max(longest, run6.length);
   const fence = "`".repeat(longest + 1);
-  const pad = value.startsWith("`") || value.endsWith("`") || value === "" ? " " : "";
-  return `${fence}${pad}${value}${pad}${fence}`;
+  const pad = value2.startsWith("`") || value2.endsWith("`") || value2 === "" ? " " : "";
+  return `${fence}${pad}${value2}${pad}${fence}`;
 }
 var INVISIBLE, CONTROL;
 var init_escape = __esm({
@@ -24945,62 +26338,182 @@ function formatFraction(x) {
 function minus(text2) {
   return text2.startsWith("-") ? `−${text2.slice(1)}` : text2;
 }
+function fileStatusWord(f) {
+  if (f.status === "error" && !f.findings.some((x) => x.rule === "parse-error") && f.findings.some((x) => x.rule === "not-computable")) return "could not be evaluated";
+  return STATUS_WORD[f.status];
+}
+function statusCounts(r) {
+  const out = [];
+  for (const [k, n] of Object.entries(r.counts)) {
+    if (n <= 0) continue;
+    if (k !== "error") {
+      out.push(`${n} ${STATUS_WORD[k]}`);
+      continue;
+    }
+    const evaluated = r.files.filter((f) => f.status === "error" && fileStatusWord(f) !== STATUS_WORD.error).length;
+    if (n - evaluated > 0) out.push(`${n - evaluated} ${STATUS_WORD.error}`);
+    if (evaluated > 0) out.push(`${evaluated} could not be evaluated`);
+  }
+  return out;
+}
+function describeNotApplicable(ev) {
+  const list2 = ev?.notApplicable ?? [];
+  if (!list2.length) return void 0;
+  return list2.map((x) => `${challengeLabel(x.challenge)} (${x.reason})`).join("; ");
+}
 function fileFails(f) {
   return f.status === "error" || f.findings.some((x) => x.severity === "fail");
 }
 function fileWarns(f) {
   return !fileFails(f) && f.findings.some((x) => x.severity === "warn");
 }
-function elementLines(f) {
-  const lines = /* @__PURE__ */ new Map();
-  const add = (id, line) => {
-    if (line > 0 && !lines.has(id)) lines.set(id, line);
+function knownElements(f) {
+  const known = /* @__PURE__ */ new Map();
+  const add = (e) => {
+    const key = `${e.kind}\0${e.id}`;
+    if (e.line > 0 && !known.has(key)) known.set(key, e);
   };
-  for (const finding2 of f.findings) for (const e of finding2.elements) add(e.id, e.line);
+  for (const finding3 of f.findings) {
+    finding3.elements.forEach(add);
+    finding3.consequence?.stranded.forEach(add);
+  }
   for (const side of [f.head, f.base]) {
     if (!side) continue;
-    for (const e of side.structure.bridges) add(e.id, e.line);
-    for (const e of side.structure.cutNodes) add(e.id, e.line);
+    side.structure.bridges.forEach(add);
+    side.structure.cutNodes.forEach(add);
+    for (const env of side.envelopes) {
+      for (const seq of [...env.weakest, ...env.worstCase ? [env.worstCase] : []]) {
+        seq.located?.forEach(add);
+        seq.consequence?.stranded.forEach(add);
+      }
+    }
   }
-  return lines;
+  f.changes?.added.forEach(add);
+  return known;
 }
-function elementWithLine(id, lines) {
-  const line = lines.get(id);
-  return line ? `${id} (line ${line})` : id;
+function knownElement(known, kind, id2) {
+  return known.get(`${kind}\0${id2}`) ?? { id: id2, kind, line: 0 };
+}
+function formatElement(e, style = {}) {
+  const id2 = style.id ?? ((x) => x);
+  const text2 = style.text ?? ((x) => x);
+  const sp = style.space ?? " ";
+  const meta = style.meta ?? ((x) => x);
+  const line = e.line > 0 ? `line${sp}${e.line}` : "";
+  if (e.label) return `${text2(e.label)}${sp}${meta(`(${e.kind}${sp}${id2(e.id)}${line ? `, ${line}` : ""})`)}`;
+  return line ? `${id2(e.id)}${sp}${meta(`(${line})`)}` : id2(e.id);
+}
+function amount(x) {
+  return String(Number(x.toPrecision(6)));
+}
+function consequenceSentence(c, subject = "Losing it", style = {}) {
+  const plural = / removals$/.test(subject);
+  const verb = (one, many) => plural ? many : one;
+  const named = c.stranded.slice(0, NAMED_STRANDED).map((e) => formatElement(e, style));
+  const more = c.strandedCount - named.length;
+  let what;
+  if (c.strandedCount === 0) what = `${verb("cuts", "cut")} no surviving site off from the largest part`;
+  else {
+    const list2 = more > 0 ? `${named.join(", ")} and ${more} more (${c.strandedCount} sites)` : named.length > 1 ? `${named.slice(0, -1).join(", ")} and ${named[named.length - 1]}` : named[0];
+    what = `${verb("cuts", "cut")} off ${list2} from the largest part`;
+  }
+  let demands = "";
+  if (c.demandsTotal !== void 0 && c.demandsLost !== void 0) {
+    const total = `${c.demandsTotal} demand${c.demandsTotal === 1 ? "" : "s"}`;
+    demands = c.demandsLost === 0 ? `; every demand keeps a path` : `; ${c.demandsLost} of ${total} (volume ${amount(c.volumeLost ?? 0)} of ${amount(c.volumeTotal ?? 0)}) ${c.demandsLost === 1 ? "loses" : "lose"} every path`;
+  }
+  return `${subject ? `${subject} ` : ""}${what}${demands}.`;
 }
 function weakestSequences(f) {
   const seen = /* @__PURE__ */ new Set();
   const out = [];
-  const add = (title, ids, values) => {
+  const known = knownElements(f);
+  const add = (title, seq) => {
+    const ids = seq.elements;
     const key = ids.join("\0");
     if (!ids.length || seen.has(key)) return;
     seen.add(key);
-    out.push(values && values.length ? { title, ids, values } : { title, ids });
+    const elements = ids.map((id2, i) => seq.located?.[i] ?? knownElement(known, seq.kind, id2));
+    const named = { title, ids, elements };
+    if (seq.values && seq.values.length) named.values = seq.values;
+    if (seq.consequence) named.consequence = seq.consequence;
+    out.push(named);
   };
   for (const env of f.head?.envelopes ?? []) {
     const wc = env.worstCase;
-    if (wc) add(`Worst case found under ${challengeLabel(env.challenge)} (${wc.method} search, ${wc.k} ${wc.k === 1 ? kindSingular(wc.kind) : kindPlural(wc.kind)})`, wc.elements, wc.values);
+    if (wc) add(`Worst case found under ${challengeLabel(env.challenge)} (${wc.method} search, ${wc.k} ${wc.k === 1 ? kindSingular(wc.kind) : kindPlural(wc.kind)})`, wc);
   }
-  for (const x of f.findings) if (x.rule === "weakest-sequence") add(x.message, x.elements.map((e) => e.id));
+  for (const x of f.findings) {
+    if (x.rule !== "weakest-sequence") continue;
+    add(x.message, { kind: x.elements[0]?.kind ?? "node", elements: x.elements.map((e) => e.id), located: x.elements, ...x.consequence ? { consequence: x.consequence } : {} });
+  }
   for (const env of f.head?.envelopes ?? []) {
     const w = env.weakest[0];
-    if (w) add(`Weakest realization${w.realization !== void 0 ? ` #${w.realization}` : ""} under ${challengeLabel(env.challenge)}`, w.elements, w.values);
+    if (w) add(`Weakest realization${w.realization !== void 0 ? ` #${w.realization}` : ""} under ${challengeLabel(env.challenge)}`, w);
   }
+  return out;
+}
+function findingTitle(x, names) {
+  const subject = SUBJECT[x.rule];
+  const kind = x.rule === "n-1" ? n1Kind(x) : void 0;
+  switch (x.status) {
+    case "within-allowance":
+      return "robustness dropped within the allowance";
+    case "within-noise":
+      return "change within Monte Carlo noise";
+    case "uncertain":
+      return x.rule === "regression" ? "change could not be judged" : `${subject ?? x.rule}${kind ?? ""} not settled`;
+    case "reduced-work":
+      return `${subject ?? x.rule}${kind ?? ""} judged on reduced work`;
+    case "not-computable":
+      return names["not-computable"];
+    default:
+      if (x.status === void 0 && x.rule === "regression" && x.severity === "notice") return "robustness changed";
+      if (kind !== void 0) return names[x.rule].replace("N−1", `N−1${kind}`);
+      return names[x.rule] ?? x.rule;
+  }
+}
+function n1Kind(x) {
+  const kind = x.requirement?.endsWith(":node") ? "node" : x.requirement?.endsWith(":link") ? "link" : x.elements[0]?.kind;
+  return kind === "node" || kind === "link" ? ` (${kindPlural(kind)})` : void 0;
+}
+function contingencyLabel(challenge, kind) {
+  return `${challenge === "n-2" ? "N−2" : "N−1"} (${kindPlural(kind)})`;
+}
+function describeModification(c) {
+  const lines = c.baseLine === c.headLine ? `line ${c.headLine}` : `base line ${c.baseLine}, head line ${c.headLine}`;
+  return `${kindSingular(c.kind)} ${c.id}: ${c.attribute} ${c.before} → ${c.after} (${lines})`;
+}
+function describeModifications(f, max = 20) {
+  const list2 = f.changes?.modified ?? [];
+  const out = list2.slice(0, max).map(describeModification);
+  if (list2.length > max) out.push(`… ${list2.length - max} more attribute changes in the JSON report`);
   return out;
 }
 function describeChanges(f, max = 4) {
   const ch = f.changes;
-  if (!ch || ch.added.length === 0 && ch.removed.length === 0) return void 0;
+  const renamed = ch?.renamed ?? [];
+  const hardened = ch?.hardened ?? [];
+  if (!ch || ch.added.length === 0 && ch.removed.length === 0 && renamed.length === 0 && hardened.length === 0) return void 0;
+  const cut = (l) => l.slice(0, max);
+  const tail = (n) => n > max ? `; … ${n - max} more` : "";
   const part = (sign2, list2, side) => {
     const byKind = ["node", "link", "group"].map((k) => list2.filter((e) => e.kind === k)).filter((l) => l.length);
     return byKind.map((l) => {
       const n = l.length;
       const noun = n === 1 ? kindSingular(l[0].kind) : kindPlural(l[0].kind);
-      const names = l.slice(0, max).map((e) => `${e.id}, ${side}line ${e.line}`).join("; ");
-      return `${sign2}${n} ${noun} (${names}${n > max ? `; … ${n - max} more` : ""})`;
+      const names = cut(l).map((e) => e.label ? `${e.label}, ${e.id}, ${side}line ${e.line}` : `${e.id}, ${side}line ${e.line}`).join("; ");
+      return `${sign2}${n} ${noun} (${names}${tail(n)})`;
     });
   };
-  return [...part("+", ch.added, ""), ...part("−", ch.removed, "base ")].join(", ");
+  const words = [...part("+", ch.added, ""), ...part("−", ch.removed, "base ")];
+  for (const r of cut(renamed)) words.push(`${r.from.kind} ${r.from.id} renamed ${r.to.id} (line ${r.to.line})`);
+  if (renamed.length > max) words.push(`… ${renamed.length - max} more renamed`);
+  for (const [flag, word] of [[true, "now hardened"], [false, "no longer hardened"]]) {
+    const l = hardened.filter((e) => e.hardened === flag);
+    if (l.length) words.push(`${word}: ${cut(l).map((e) => formatElement(e)).join(", ")}${l.length > max ? `, … ${l.length - max} more` : ""}`);
+  }
+  return words.join(", ");
 }
 function bySeverity(findings) {
   return [...findings].sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity]);
@@ -25008,18 +26521,20 @@ function bySeverity(findings) {
 function groupFindings(findings) {
   const out = [];
   for (const x of findings) {
-    const groupable = (x.rule === "new-bridge" || x.rule === "new-cut-node") && x.elements.length === 1;
+    const groupable = GROUPABLE.has(x.rule) && x.elements.length === 1;
     const prev = out[out.length - 1];
     if (groupable && prev && prev.rule === x.rule && prev.severity === x.severity && prev.elements.length >= 1 && prev.grouped) {
       prev.elements.push(...x.elements);
+      prev.members.push(x);
       continue;
     }
-    out.push(groupable ? { ...x, elements: [...x.elements], grouped: true } : x);
+    out.push(groupable ? { ...x, elements: [...x.elements], grouped: true, members: [x] } : x);
   }
   for (const x of out) {
     if (!x.grouped || x.elements.length < 2) continue;
-    const what = x.rule === "new-bridge" ? "new bridges (links whose loss alone splits the design)" : "new cut nodes (sites whose loss alone splits the design)";
-    x.message = `${x.elements.length} ${what}: ${x.elements.map((e) => `${e.id} (line ${e.line})`).join(", ")}`;
+    const what = x.rule === "new-bridge" ? "new bridges (links whose loss alone splits the design)" : x.rule === "new-cut-node" ? "new cut nodes (sites whose loss alone splits the design)" : "new weak points hidden by hardening (the change marks them hardened; hardening is a claim the gate cannot check)";
+    x.message = `${x.elements.length} ${what}: ${x.elements.map((e) => formatElement(e, { space: " " })).join(", ")}`;
+    delete x.consequence;
   }
   return out;
 }
@@ -25027,7 +26542,7 @@ function shortRevision(rev) {
   if (rev === void 0) return "–";
   return /^[0-9a-f]{40}([0-9a-f]{24})?$/.test(rev) ? rev.slice(0, 12) : rev;
 }
-var CHALLENGE_LABEL, KIND_PLURAL, STATUS_WORD, REQUIREMENT_STATUS_WORD, SEVERITY_ORDER;
+var CHALLENGE_LABEL, KIND_PLURAL, STATUS_WORD, REQUIREMENT_STATUS_WORD, NAMED_STRANDED, SUBJECT, SEVERITY_ORDER, GROUPABLE;
 var init_labels = __esm({
   "src/report/labels.ts"() {
     "use strict";
@@ -25063,9 +26578,18 @@ var init_labels = __esm({
       missed: "missed",
       regressed: "regressed",
       "within-noise": "within noise",
-      uncertain: "uncertain"
+      uncertain: "uncertain",
+      "not-applicable": "not applicable"
+    };
+    NAMED_STRANDED = 3;
+    SUBJECT = {
+      "r-threshold": "r-threshold",
+      "area-floor": "envelope area floor",
+      "spread-ceiling": "envelope spread ceiling",
+      "n-1": "N−1 rule"
     };
     SEVERITY_ORDER = { fail: 0, warn: 1, notice: 2 };
+    GROUPABLE = /* @__PURE__ */ new Set(["new-bridge", "new-cut-node", "hardened-weak-point"]);
   }
 });
 
@@ -25153,7 +26677,7 @@ function describe2(env, series, xMax) {
   return parts.join(" ");
 }
 function renderChartSvg(chart, options = {}) {
-  const id = options.idPrefix ?? "nb-chart";
+  const id2 = options.idPrefix ?? "nb-chart";
   const width2 = options.width ?? 600;
   const plotH = 240;
   const m = { left: 56, right: 20, top: 18, bottom: 48 };
@@ -25169,10 +26693,10 @@ function renderChartSvg(chart, options = {}) {
   const line = (pts) => pts.map((p) => `${num(sx(p.x))},${num(sy(p.y))}`).join(" ");
   const out = [];
   out.push(
-    `<svg xmlns="http://www.w3.org/2000/svg" class="nb-chart" viewBox="0 0 ${width2} ${height}" width="${width2}" height="${height}" role="img" aria-labelledby="${id}-title ${id}-desc" data-series-count="${chart.series.length}">`
+    `<svg xmlns="http://www.w3.org/2000/svg" class="nb-chart" viewBox="0 0 ${width2} ${height}" width="${width2}" height="${height}" role="img" aria-labelledby="${id2}-title ${id2}-desc" data-series-count="${chart.series.length}">`
   );
-  out.push(`<title id="${id}-title">${esc(chart.title)}</title>`);
-  out.push(`<desc id="${id}-desc">${esc(chart.summary)}</desc>`);
+  out.push(`<title id="${id2}-title">${esc(chart.title)}</title>`);
+  out.push(`<desc id="${id2}-desc">${esc(chart.summary)}</desc>`);
   out.push(`<rect x="${m.left}" y="${m.top}" width="${plotW}" height="${plotH}" fill="#fffdf8" stroke="${CHART_COLORS.grid}"/>`);
   out.push('<g aria-hidden="true" font-family="inherit" font-size="12" fill="' + CHART_COLORS.ink + '">');
   for (let i = 0; i <= 5; i++) {
@@ -25318,7 +26842,7 @@ function policyNotes(r) {
 function verdictLines(r, c, width2) {
   const failed = r.files.filter(fileFails).length;
   const warned = r.files.filter(fileWarns).length;
-  const counts = Object.entries(r.counts).filter(([, n]) => n > 0).map(([k, n]) => `${n} ${STATUS_WORD[k]}`).join(", ");
+  const counts = statusCounts(r).join(", ");
   const tail = `${r.files.length} design${r.files.length === 1 ? "" : "s"}${counts ? ` (${counts})` : ""}` + (failed ? `, ${failed} failing` : "") + (warned ? `, ${warned} with warnings` : "");
   const text2 = r.verdict === "fail" ? `${SYMBOL.fail} Verdict: FAIL — ${tail}` : `${SYMBOL.pass} Verdict: PASS — ${tail}`;
   const paint = r.verdict === "fail" ? c.red : c.green;
@@ -25326,21 +26850,27 @@ function verdictLines(r, c, width2) {
 }
 function renderFile(f, c, width2) {
   const out = [];
-  const fails = fileFails(f);
+  const fails2 = fileFails(f);
   const warns = fileWarns(f);
-  const mark = fails ? c.red(SYMBOL.fail) : warns ? c.yellow(SYMBOL.warn) : c.green(SYMBOL.pass);
-  const word = fails ? c.red("FAIL") : warns ? c.yellow("PASS with warnings") : c.green("PASS");
+  const mark = fails2 ? c.red(SYMBOL.fail) : warns ? c.yellow(SYMBOL.warn) : c.green(SYMBOL.pass);
+  const word = fails2 ? c.red("FAIL") : warns ? c.yellow("PASS with warnings") : c.green("PASS");
   const renamed = f.previousPath ? ` (was ${f.previousPath})` : "";
-  out.push(`${mark} ${c.bold(f.path)}${renamed} — ${word} · ${STATUS_WORD[f.status]}`);
+  out.push(`${mark} ${c.bold(f.path)}${renamed} — ${word} · ${fileStatusWord(f)}`);
   if (f.error) {
     out.push(...wrap(`${f.path}:${f.error.line || 1}:${f.error.column || 1}: ${f.error.message}`, width2 - 2).map((l) => `  ${l}`));
   }
   if (f.head) out.push(...wrap(describeEvaluation(f.head), width2 - 2).map((l) => c.dim(`  ${l}`)));
+  const notApplicable = describeNotApplicable(f.head);
+  if (notApplicable) out.push(...wrap(`not applicable: ${notApplicable}`, width2 - 2).map((l) => c.dim(`  ${l}`)));
   const changed = describeChanges(f);
   if (changed) out.push(...wrap(`changed: ${changed}`, width2 - 2).map((l) => `  ${l}`));
+  const modified = describeModifications(f);
+  if (modified.length) {
+    out.push("  changed attributes:");
+    for (const m of modified) out.push(...wrap(m, width2 - 6).map((l, i) => i === 0 ? `    • ${l}` : `      ${l}`));
+  }
   if (f.requirements.length) out.push("", ...requirementTable(f.requirements, c, width2));
-  const lines = elementLines(f);
-  const findings = f.findings.filter((x) => x.rule !== "weakest-sequence" && x.rule !== "parse-error");
+  const findings = f.findings.filter((x) => x.rule !== "weakest-sequence" && x.rule !== "parse-error" && !(f.error && x.rule === "not-computable" && x.message === f.error.message));
   if (findings.length) {
     out.push("", c.bold("  Findings"));
     for (const x of groupFindings(bySeverity(findings))) out.push(...findingLines(x, c, width2));
@@ -25349,12 +26879,12 @@ function renderFile(f, c, width2) {
   if (sequences.length) {
     out.push("", c.bold("  Weakest removal sequences"));
     for (const s of sequences) {
-      const shown = s.ids.slice(0, MAX_CHAIN);
-      const more = s.ids.length > shown.length ? ` → … (${s.ids.length - shown.length} more)` : "";
-      const chain = shown.map((id) => elementWithLine(id, lines)).join(" → ") + more;
+      const more = s.ids.length > MAX_CHAIN ? ` → … (${s.ids.length - MAX_CHAIN} more)` : "";
+      const chain2 = s.elements.slice(0, MAX_CHAIN).map((e) => formatElement(e, NBSP)).join(" → ") + more;
       const v = s.values ?? [];
       const rs = !v.length ? "" : v.length === s.ids.length && v.length <= MAX_CHAIN ? v.map(formatValue).join(" → ") : `${formatValue(v[0])} → … → ${formatValue(v[v.length - 1])}`;
-      out.push(...wrap(`${s.title}: ${chain}${rs ? ` · R ${rs}` : ""}`, width2 - 4).map((l, i) => i === 0 ? `  • ${l}` : `    ${l}`));
+      out.push(...wrap(`${s.title}: ${chain2}${rs ? ` · R ${rs}` : ""}`, width2 - 4).map((l, i) => i === 0 ? `  • ${l}` : `    ${l}`));
+      if (s.consequence) out.push(...wrap(consequenceSentence(s.consequence, "These removals", NBSP), width2 - 4).map((l) => c.dim(`    ${l}`)));
     }
   }
   const env = f.head?.envelopes[0];
@@ -25378,7 +26908,7 @@ function requirementTable(rows, c, width2) {
     const status = REQUIREMENT_STATUS_WORD[r.status];
     const bad = r.status === "missed" || r.status === "regressed";
     const sev = bad ? r.severity === "fail" ? c.red : r.severity === "warn" ? c.yellow : c.cyan : r.status === "met" ? c.green : c.dim;
-    const symbol = bad ? SYMBOL[r.severity] : r.status === "met" ? SYMBOL.pass : "~";
+    const symbol = bad ? SYMBOL[r.severity] : r.status === "met" ? SYMBOL.pass : r.status === "not-applicable" ? "–" : "~";
     const first = `  ${desc[0].padEnd(descWidth)}  ${formatRequirementValue(r, r.base).padStart(6)} → ${formatRequirementValue(r, r.head).padStart(6)}  ${delta.padEnd(17)}  ${sev(`${symbol} ${status}`)}`;
     out.push(first, ...desc.slice(1).map((l) => `  ${l}`));
   }
@@ -25388,10 +26918,14 @@ function requirementTable(rows, c, width2) {
   }
   return out;
 }
+function findingTag(x) {
+  if (x.rule === "regression" && x.status !== void 0 && x.status !== "regressed") return "change";
+  return x.rule;
+}
 function findingLines(x, c, width2) {
   const paint = x.severity === "fail" ? c.red : x.severity === "warn" ? c.yellow : c.cyan;
   const where = x.line > 0 ? `line ${x.line}` : "";
-  const head = `  ${paint(`${SYMBOL[x.severity]} ${x.severity.padEnd(6)}`)} ${x.rule.padEnd(16)} ${where.padEnd(10)} `;
+  const head = `  ${paint(`${SYMBOL[x.severity]} ${x.severity.padEnd(6)}`)} ${findingTag(x).padEnd(16)} ${where.padEnd(10)} `;
   const room = Math.max(30, width2 - 39);
   if (x.severity === "notice") {
     return [head + (x.message.length > room ? `${x.message.slice(0, room - 1)}…` : x.message)];
@@ -25399,10 +26933,19 @@ function findingLines(x, c, width2) {
   const body = wrap(x.message, room);
   const out = [head + body[0], ...body.slice(1).map((l) => " ".repeat(39) + l)];
   const named = x.elements.length === 1 && x.message.includes(x.elements[0].id);
+  const indent = " ".repeat(39);
   if (x.elements.length > 0 && !x.grouped && !named) {
-    const shown = x.elements.slice(0, MAX_ELEMENTS).map((e) => `${e.id} (line ${e.line})`);
+    const shown2 = x.elements.slice(0, MAX_ELEMENTS).map((e) => formatElement(e, NBSP));
     const more = x.elements.length > MAX_ELEMENTS ? `, … ${x.elements.length - MAX_ELEMENTS} more` : "";
-    out.push(...wrap(`at ${shown.join(", ")}${more}`, room).map((l) => " ".repeat(39) + c.dim(l)));
+    out.push(...wrap(`at ${shown2.join(", ")}${more}`, room).map((l) => indent + c.dim(l)));
+  }
+  if (x.grouped && x.members && x.members.length > 1) {
+    for (const m of x.members) {
+      if (!m.consequence) continue;
+      out.push(...wrap(`${formatElement(m.elements[0], NBSP)}: ${consequenceSentence(m.consequence, "", NBSP)}`, room).map((l) => indent + c.dim(l)));
+    }
+  } else if (x.consequence) {
+    out.push(...wrap(consequenceSentence(x.consequence, "Losing it", NBSP), room).map((l) => indent + c.dim(l)));
   }
   return out;
 }
@@ -25420,20 +26963,20 @@ function valueAt(points, x) {
 }
 function terminalChart(chart, env, c, width2) {
   const cols = Math.max(20, Math.min(64, width2 - 12));
-  const cell = Array.from(
+  const cell2 = Array.from(
     { length: ROWS },
     () => Array.from({ length: cols }, () => ({ ch: " ", paint: (s) => s, rank: 0 }))
   );
   const put = (row, col, ch, paint, rank) => {
-    if (cell[row][col].rank <= rank) cell[row][col] = { ch, paint, rank };
+    if (cell2[row][col].rank <= rank) cell2[row][col] = { ch, paint, rank };
   };
   const attackPaint = [c.yellow, c.magenta, c.blue, c.green, c.red];
-  const legend = [];
+  const legend2 = [];
   let attackNo = 0;
   for (const s of chart.series) {
     const style = seriesStyle(s, attackNo, c, attackPaint);
     if (s.role === "attack") attackNo++;
-    legend.push(`${style.paint(style.ch)} ${s.label}`);
+    legend2.push(`${style.paint(style.ch)} ${s.label}`);
     for (let col = 0; col < cols; col++) {
       const x = chart.xMax * col / (cols - 1);
       if (s.role === "band") {
@@ -25452,11 +26995,11 @@ function terminalChart(chart, env, c, width2) {
   for (let row = 0; row < ROWS; row++) {
     const label = row === 0 ? "1.0" : row === ROWS / 2 ? "0.5" : row === ROWS - 1 ? "0.0" : "";
     const axis = label ? "┤" : "│";
-    out.push(`  ${label.padStart(4)} ${axis}${cell[row].map((k) => k.paint(k.ch)).join("")}`);
+    out.push(`  ${label.padStart(4)} ${axis}${cell2[row].map((k) => k.paint(k.ch)).join("")}`);
   }
   out.push(`       └${"─".repeat(cols)}`);
   out.push(`        ${"0".padEnd(cols - xEnd.length)}${xEnd}`);
-  out.push(...pack(legend, width2 - 4).map((l) => `  ${l}`));
+  out.push(...pack(legend2, width2 - 4).map((l) => `  ${l}`));
   return out;
 }
 function seriesStyle(s, attackNo, c, attackPaint) {
@@ -25497,7 +27040,7 @@ function pack(items, width2, sep = "   ") {
   if (line) lines.push(line);
   return lines;
 }
-var import_picocolors, SYMBOL, MAX_ELEMENTS, MAX_CHAIN, ROWS, rowOf, ANSI, visible;
+var import_picocolors, SYMBOL, NBSP, MAX_ELEMENTS, MAX_CHAIN, ROWS, rowOf, ANSI, visible;
 var init_terminal = __esm({
   "src/report/terminal.ts"() {
     "use strict";
@@ -25506,62 +27049,13 @@ var init_terminal = __esm({
     init_labels();
     init_escape();
     SYMBOL = { fail: "✗", warn: "▲", notice: "i", pass: "✓" };
+    NBSP = { space: " " };
     MAX_ELEMENTS = 5;
     MAX_CHAIN = 8;
     ROWS = 10;
     rowOf = (y) => Math.min(ROWS - 1, Math.max(0, Math.floor((1 - y) * ROWS)));
     ANSI = /\u001b\[[0-9;]*m/g;
     visible = (s) => s.replace(ANSI, "").length;
-  }
-});
-
-// src/shell/workspace.ts
-import { existsSync, lstatSync, mkdirSync, readFileSync as readFileSync2, realpathSync, statSync as statSync2 } from "node:fs";
-import path2 from "node:path";
-function isInside(root, candidate) {
-  const rel = path2.relative(root, candidate);
-  return rel === "" || !rel.startsWith(`..${path2.sep}`) && rel !== ".." && !path2.isAbsolute(rel);
-}
-function absent(e) {
-  const code = e.code;
-  return code === "ENOENT" || code === "ENOTDIR" || code === "EISDIR";
-}
-function tooLarge(file, bytes, maxBytes, revision2 = "") {
-  const size = bytes === void 0 ? `more than ${maxBytes} bytes` : `${bytes} bytes > ${maxBytes}`;
-  return new LimitError(
-    `the file${revision2 ? ` at ${revision2}` : ""} is larger than netbrace reads (${size})`,
-    { file },
-    `design and policy files are limited to ${DEFAULT_MAX_BYTES} bytes`
-  );
-}
-function readInsideSync(root, file, maxBytes = DEFAULT_MAX_BYTES) {
-  const full = path2.resolve(root, file);
-  if (file.includes("\0") || !isInside(path2.resolve(root), full)) throw new WorkspacePathError(`${quoted(file)} is outside the repository`, "give paths inside the repository");
-  try {
-    const real = realpathSync(full);
-    if (!isInside(realpathSync(root), real)) throw new WorkspacePathError(`${quoted(file)} leads outside the repository through a symbolic link`);
-    const st = statSync2(real);
-    if (st.isDirectory()) return null;
-    if (st.size > maxBytes) throw tooLarge(file, st.size, maxBytes);
-    return readFileSync2(real, "utf8");
-  } catch (e) {
-    if (absent(e)) return null;
-    throw e;
-  }
-}
-async function readInside(root, file, maxBytes = DEFAULT_MAX_BYTES) {
-  return readInsideSync(root, file, maxBytes);
-}
-var WorkspacePathError, quoted;
-var init_workspace = __esm({
-  "src/shell/workspace.ts"() {
-    "use strict";
-    init_errors();
-    init_model();
-    WorkspacePathError = class extends UsageError {
-      name = "WorkspacePathError";
-    };
-    quoted = (file) => file.replace(/[\0-\x1f\x7f]/g, "?");
   }
 });
 
@@ -25624,9 +27118,8 @@ var init_color = __esm({
 });
 
 // src/shell/commands/explain.ts
-import path3 from "node:path";
 function rankSingleLosses(g, rfn, kinds = KINDS, onStep = () => {
-}) {
+}, only) {
   const mask = createMask(g);
   const intact = rfn(mask);
   const cuts = findCutElements(g);
@@ -25636,7 +27129,8 @@ function rankSingleLosses(g, rfn, kinds = KINDS, onStep = () => {
   const hardened = { node: 0, link: 0, group: 0 };
   const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
   let total = 0;
-  for (const k of kinds) for (const e of eligible.get(k)) total += e;
+  for (const k of kinds) total += only ? only.get(k)?.size ?? 0 : countOnes(eligible.get(k));
+  const byLine = nodesByLine(g, g.nodeIds.keys());
   const out = [];
   let done = 0;
   for (const kind of kinds) {
@@ -25647,11 +27141,12 @@ function rankSingleLosses(g, rfn, kinds = KINDS, onStep = () => {
         hardened[kind]++;
         continue;
       }
+      if (only && !only.get(kind)?.has(u)) continue;
       removeUnit(g, mask, kind, u);
       const r = rfn(mask);
       const comps = findComponents(g, mask);
       const cutsOff = [];
-      for (let v = 0; v < g.n; v++) if (comps.label[v] >= 0 && comps.label[v] !== comps.largest) cutsOff.push(g.nodeIds[v]);
+      for (const v of byLine) if (comps.label[v] >= 0 && comps.label[v] !== comps.largest) cutsOff.push(g.nodeIds[v]);
       restoreUnit(g, mask, kind, u);
       evaluated[kind]++;
       out.push({
@@ -25667,33 +27162,76 @@ function rankSingleLosses(g, rfn, kinds = KINDS, onStep = () => {
       onStep(++done, total);
     }
   }
-  out.sort((a, b) => a.r - b.r || a.order - b.order);
+  out.sort((a, b) => a.r - b.r || kinds.indexOf(a.kind) - kinds.indexOf(b.kind) || a.line - b.line || a.order - b.order);
   return { intact, evaluated, hardened, ranked: out.map(({ order: _order, ...rest }) => rest) };
 }
-function resolveR(file, metricIds, policyPath, io) {
-  if (metricIds.length) {
-    for (const id of metricIds) {
-      if (!isMetricId(id)) getMetric(id);
-    }
-    return {
-      spec: { metrics: metricIds.map((id) => ({ id, weight: 1 })), combine: "mean" },
-      source: metricIds.length === 1 ? "--metric" : "--metric (equal weights)"
-    };
+function metricR(metricIds) {
+  if (metricIds.length === 0) return void 0;
+  for (const id2 of metricIds) {
+    if (!isMetricId(id2)) getMetric(id2);
   }
-  const read = (p) => readInsideSync(io.cwd, p);
-  const chosen = policyPath ?? (read(DEFAULT_POLICY_PATH) !== null ? DEFAULT_POLICY_PATH : void 0);
-  if (chosen === void 0) return { spec: builtinPolicy().rValue, source: "the built-in policy" };
-  if (policyPath !== void 0 && read(policyPath) === null) {
-    throw new UsageError(`policy file ${policyPath} not found`, "give a path relative to the working directory");
-  }
-  const policy = loadPolicy(chosen, read);
-  const rel = path3.relative(io.cwd, path3.resolve(io.cwd, file)).split(path3.sep).join("/");
-  return { spec: policyForFile(policy, rel).rValue, source: `policy ${chosen}` };
+  return {
+    spec: { metrics: metricIds.map((id2) => ({ id: id2, weight: 1 })), combine: "mean" },
+    source: metricIds.length === 1 ? "--metric" : "--metric (equal weights)"
+  };
 }
-function explainDesign(t, spec, source, kinds = KINDS, progress, g = compileTopology(t)) {
+function planSingleLosses(g, spec, kinds, maxWork) {
+  const perCase = (rPasses(g, spec) + 1) * (g.n + g.m);
+  const units = /* @__PURE__ */ new Map();
+  const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
+  let total = 0;
+  for (const k of kinds) total += countOnes(eligible.get(k));
+  const work = (total + 1) * perCase;
+  const fit = Math.max(0, Math.floor(maxWork / perCase) - 1);
+  if (work <= maxWork || fit >= total) {
+    for (const k of kinds) {
+      const ok = eligible.get(k);
+      units.set(k, new Set(Array.from({ length: ok.length }, (_, u) => u).filter((u) => ok[u])));
+    }
+    return { units, perCase };
+  }
+  for (const k of kinds) units.set(k, /* @__PURE__ */ new Set());
+  let room = fit;
+  const take = (k, u) => {
+    if (room > 0 && !units.get(k).has(u)) {
+      units.get(k).add(u);
+      room--;
+    }
+  };
+  const cuts = findCutElements(g);
+  const okOf = (k) => eligible.get(k);
+  if (okOf("node")) {
+    for (const v of [...cuts.cutNodes].sort((a, b) => a - b)) if (okOf("node")[v]) take("node", v);
+  }
+  if (okOf("link")) {
+    for (const e of [...cuts.bridges].sort((a, b) => a - b)) if (okOf("link")[e]) take("link", e);
+  }
+  if (okOf("group")) {
+    for (let u = 0; u < g.groupIds.length; u++) if (okOf("group")[u]) take("group", u);
+  }
+  const degree2 = (v) => g.offsets[v + 1] - g.offsets[v];
+  const rest = /* @__PURE__ */ new Map();
+  for (const k of ["node", "link"]) {
+    const ok = okOf(k);
+    if (!ok) continue;
+    const score = k === "node" ? degree2 : (e) => degree2(g.linkSource[e]) + degree2(g.linkTarget[e]) - 2;
+    const list2 = Array.from({ length: ok.length }, (_, u) => u).filter((u) => ok[u] && !units.get(k).has(u));
+    list2.sort((a, b) => score(b) - score(a) || a - b);
+    rest.set(k, list2);
+  }
+  const left = [...rest.values()].reduce((s, l) => s + l.length, 0);
+  const budget = room;
+  for (const [k, list2] of rest) for (const u of list2.slice(0, Math.floor(budget * list2.length / Math.max(1, left)))) take(k, u);
+  for (const [k, list2] of rest) for (const u of list2) take(k, u);
+  let evaluated = 0;
+  for (const s of units.values()) evaluated += s.size;
+  return { units, perCase, reduced: { evaluated, total, maxWork, work, chosen: CHOSEN } };
+}
+function explainDesign(t, spec, source, kinds = KINDS, progress, g = compileTopology(t), maxWork = Infinity) {
   const rfn = createRValue(g, spec, t.latencyBudget !== void 0 ? { latencyBudget: t.latencyBudget } : void 0);
-  const res = rankSingleLosses(g, rfn, kinds, (done) => progress?.update(done));
-  const labels = new Map(t.nodes.filter((n) => n.label).map((n) => [n.id, n.label]));
+  const plan = planSingleLosses(g, spec, kinds, maxWork);
+  const res = rankSingleLosses(g, rfn, kinds, (done) => progress?.update(done), plan.reduced ? plan.units : void 0);
+  const labels2 = new Map(t.nodes.filter((n) => n.label).map((n) => [n.id, n.label]));
   return {
     file: t.file,
     r: spec,
@@ -25702,10 +27240,14 @@ function explainDesign(t, spec, source, kinds = KINDS, progress, g = compileTopo
     evaluated: res.evaluated,
     hardened: res.hardened,
     elements: res.ranked.map((e, i) => {
-      const label = e.kind === "node" ? labels.get(e.id) : void 0;
+      const label = e.kind === "node" ? labels2.get(e.id) : void 0;
       return { rank: i + 1, ...e, ...label !== void 0 && label !== e.id ? { label } : {} };
-    })
+    }),
+    ...plan.reduced ? { reduced: plan.reduced } : {}
   };
+}
+function visits2(n) {
+  return n >= 1e6 ? n.toExponential(1).replace("e+", "e").replace(".0e", "e") : String(n);
 }
 function formatExplanation(x, top, color, width2) {
   const c = (0, import_picocolors2.createColors)(color);
@@ -25717,13 +27259,18 @@ function formatExplanation(x, top, color, width2) {
   out.push(
     `intact R ${r4(x.intact)} · evaluated ${x.evaluated.node} sites, ${x.evaluated.link} links, ${x.evaluated.group} shared-risk groups` + (hard.length ? ` · hardened, not removed: ${hard.join(", ")}` : "")
   );
+  if (x.reduced) {
+    const r = x.reduced;
+    const line = `reduced: ${r.evaluated} of ${r.total} single losses evaluated within the work budget (${visits2(r.maxWork)} element visits; all of them need ${visits2(r.work)}): ${r.chosen}. Raise the policy's budget or give --max-work to rank them all.`;
+    for (const l of wrap(line, width2)) out.push(c.yellow(l));
+  }
   out.push("");
   const rows = x.elements.slice(0, top);
-  const shown = (e) => e.label && e.label.toLowerCase() !== e.id.toLowerCase() ? `${e.id} (${e.label})` : e.id;
-  const idW = Math.min(34, Math.max(7, ...rows.map((e) => shown(e).length)));
+  const shown2 = (e) => e.label && e.label.toLowerCase() !== e.id.toLowerCase() ? `${e.id} (${e.label})` : e.id;
+  const idW = Math.min(34, Math.max(7, ...rows.map((e) => shown2(e).length)));
   out.push(c.bold(`${"#".padStart(3)}  ${"kind".padEnd(10)}  ${"element".padEnd(idW)}  ${"line".padStart(5)}  ${"R left".padStart(7)}  ${"drop".padStart(7)}  cuts off`));
   for (const e of rows) {
-    const name = shown(e).slice(0, idW);
+    const name = shown2(e).slice(0, idW);
     const cut = e.cutsOff.length ? `${e.cutsOff.length} site${e.cutsOff.length === 1 ? "" : "s"}: ${e.cutsOff.slice(0, 6).join(", ")}${e.cutsOff.length > 6 ? ", …" : ""}` : "–";
     const prefix = `${String(e.rank).padStart(3)}  ${KIND_WORD[e.kind].padEnd(10)}  ${name.padEnd(idW)}  ${String(e.line).padStart(5)}  ${r4(e.r).padStart(7)}  ${("−" + r4(Math.max(0, e.drop))).padStart(7)}  `;
     const room = Math.max(16, width2 - prefix.length);
@@ -25737,7 +27284,7 @@ function formatExplanation(x, top, color, width2) {
   for (const l of wrap(`Caution: ${CAUTION}`, width2)) out.push(c.dim(l));
   return out.join("\n") + "\n";
 }
-var import_picocolors2, KINDS, r4, KIND_WORD, HELP2, explainCommand;
+var import_picocolors2, KINDS, CHOSEN, r4, KIND_WORD, HELP2, explainCommand;
 var init_explain = __esm({
   "src/shell/commands/explain.ts"() {
     "use strict";
@@ -25750,45 +27297,55 @@ var init_explain = __esm({
     init_units();
     init_registry();
     init_resolve();
+    init_budget();
+    init_local_policy();
     init_detect();
     init_report();
     init_terminal();
     init_read_design();
-    init_workspace();
     init_progress();
     init_color();
     import_picocolors2 = __toESM(require_picocolors(), 1);
     KINDS = ["node", "link", "group"];
+    CHOSEN = "single points of failure (cut sites, bridges) first, then shared-risk groups, then the other sites and links by the links they touch, most first (a share for each kind); the rest are not ranked, and one of them may hurt more than those shown";
     r4 = (v) => v.toFixed(4);
     KIND_WORD = { node: "site", link: "link", group: "duct/group" };
-    HELP2 = `Usage: netbrace explain FILE [--metric ID]... [--top N] [--kind K] [--policy FILE] [--json]
+    HELP2 = `Usage: netbrace explain FILE [--metric ID]... [--top N] [--kind K] [--policy FILE] [--max-work W] [--json]
 
 The planner's to-do list: removes every site, every link and every shared-risk group
 (a duct: all its links at once) on its own, computes R on what is left, and ranks them
 by the R they leave, worst first. Each row gives the element's line in FILE, the R it
 leaves, the drop from the intact R, and the sites it cuts off from the largest part.
 
-R is defined by, in this order: the --metric options (equal weights); the policy's
-r-value for FILE (--policy FILE, else ${DEFAULT_POLICY_PATH} in the working directory, if
-present); the built-in policy. Hardened elements are never removed.
+The policy is the gate's: --policy FILE, else ${DEFAULT_POLICY_PATH} at the root of the git
+repository that holds the working directory (outside git: in the working directory), else
+the built-in policy. R is the --metric options (equal weights), else the policy's r-value for
+FILE. The work is held to the policy's budget for FILE (or --max-work): on a design too big
+to rank in full, single points of failure come first, then shared-risk groups, then the
+sites and links that touch the most links, and the output says how many were left out.
+Hardened elements are never removed.
 
 Options:
   --metric ID    a metric for R (repeat for an equal-weight mean); one of:
                  ${metrics.map((m) => m.id).join(", ")}
   --top N        show the N worst rows (default 15; --json lists all)
   --kind K       node, link, group or all (default all)
-  --policy FILE  the policy file whose r-value applies (default ${DEFAULT_POLICY_PATH} if present)
+  --policy FILE  the policy file (default ${DEFAULT_POLICY_PATH} at the repository root, if present)
+  --max-work W   work budget in element visits (default: the policy's budget for FILE)
   --format F     read FILE as F (${FORMAT_CHOICES}) instead of by extension
-  --json         print the ranking as JSON: {file, r, intact, evaluated, hardened, elements}
+  --json         print the ranking as JSON: {file, r, intact, evaluated, hardened, elements,
+                 reduced (when the budget left losses out)}
 
 Examples:
   netbrace explain designs/backbone.net.yaml
   netbrace explain designs/backbone.net.yaml --metric largest_component --top 5
   netbrace explain core.graphml --kind link --json | jq '.elements[0]'
+  netbrace explain big.graphml --max-work 1e10      rank more of a big design
 
 Exit codes:
   0  the ranking was printed
-  1  FILE could not be read (the message gives file:line:col)
+  1  FILE could not be read (the message gives file:line:col), or R cannot be computed
+     on it (a metric that needs demands or link lengths the design does not have)
   2  usage or configuration error (bad option, unknown metric, broken policy)
 `;
     explainCommand = {
@@ -25796,42 +27353,80 @@ Exit codes:
       summary: "rank the sites, links and ducts whose single loss hurts R most (with their lines)",
       help: HELP2,
       async run(args, io) {
-        const parsed = parseCommandArgs("explain", args, {
+        const parsed2 = parseCommandArgs("explain", args, {
           metric: { type: "string", multiple: true },
           top: { type: "string" },
           kind: { type: "string" },
           policy: { type: "string" },
+          "max-work": { type: "string" },
           format: { type: "string" },
           json: { type: "boolean" }
         });
-        const [file, ...extra] = parsed.positionals;
+        const [file, ...extra] = parsed2.positionals;
         if (file === void 0) throw new UsageError("explain needs a design FILE", "netbrace explain designs/backbone.net.yaml");
-        if (extra.length) throw new UsageError(`explain takes one FILE, got ${parsed.positionals.length}`, "run it once per file");
-        const top = wholeNumber("--top", parsed.values.top, 1) ?? 15;
-        const kindArg = parsed.values.kind ?? "all";
+        if (extra.length) throw new UsageError(`explain takes one FILE, got ${parsed2.positionals.length}`, "run it once per file");
+        const top = wholeNumber("--top", parsed2.values.top, 1) ?? 15;
+        const kindArg = parsed2.values.kind ?? "all";
         if (!["node", "link", "group", "all"].includes(kindArg)) {
           throw new UsageError(`--kind must be node, link, group or all, not "${kindArg}"`);
         }
         const kinds = kindArg === "all" ? KINDS : [kindArg];
         const options = { cwd: io.cwd };
-        if (parsed.values.format !== void 0) options.format = parseFormatName(parsed.values.format);
-        const { spec, source } = resolveR(file, parsed.values.metric ?? [], parsed.values.policy, io);
+        if (parsed2.values.format !== void 0) options.format = parseFormatName(parsed2.values.format);
+        const maxWorkArg = finiteNumber("--max-work", parsed2.values["max-work"], (x2) => x2 > 0, "a number > 0");
+        const local = await readLocalPolicy(io, parsed2.values.policy);
+        const fp = designPolicy(local, io, file);
+        const { spec, source } = metricR(parsed2.values.metric ?? []) ?? { spec: fp.rValue, source: local.source };
+        const maxWork = maxWorkArg !== void 0 ? budgetWork({ work: maxWorkArg }) : fp.budget.maxWork;
+        if (options.format === void 0 && fp.format) options.format = fp.format;
         const t = readDesign(file, options);
         const g = compileTopology(t);
-        const total = kinds.reduce((s, k) => s + unitCount(g, k), 0);
+        const unsupported = unsupportedMetric(g, spec);
+        if (unsupported) throw new DesignError(unsupported.message, { file }, unsupported.hint);
+        const total = [...planSingleLosses(g, spec, kinds, maxWork).units.values()].reduce((s, u) => s + u.size, 0);
         const progress = createProgress(io, { label: `explain ${file}`, total });
         let x;
         try {
-          x = explainDesign(t, spec, source, kinds, progress, g);
+          x = explainDesign(t, spec, source, kinds, progress, g, maxWork);
         } finally {
           progress.finish();
         }
-        if (parsed.values.json) io.stdout(`${JSON.stringify(x, null, 2)}
+        if (parsed2.values.json) io.stdout(`${JSON.stringify(x, null, 2)}
 `);
         else io.stdout(formatExplanation(x, top, colorEnabled(io), terminalWidth(io)));
         return 0;
       }
     };
+  }
+});
+
+// src/graph/element.ts
+function reportElement(g, kind, i) {
+  if (kind === "node") {
+    const label = g.nodeLabels[i];
+    const el = { id: g.nodeIds[i], kind, line: g.nodeLine[i] };
+    if (label !== void 0 && label !== "" && label !== el.id) el.label = label;
+    return el;
+  }
+  if (kind === "link") return { id: g.linkIds[i], kind, line: g.linkLine[i] };
+  return { id: g.groupIds[i], kind, line: g.groupLine[i] };
+}
+function indexOfElement(g, kind, id2) {
+  if (kind === "node") return g.nodeIndex.get(id2) ?? -1;
+  if (kind === "link") return g.linkIndex.get(id2) ?? -1;
+  return g.groupIds.indexOf(id2);
+}
+function locateElement(el, ...graphs) {
+  for (const g of graphs) {
+    if (!g) continue;
+    const i = indexOfElement(g, el.kind, el.id);
+    if (i >= 0) return reportElement(g, el.kind, i);
+  }
+  return { id: el.id, kind: el.kind, line: 0 };
+}
+var init_element = __esm({
+  "src/graph/element.ts"() {
+    "use strict";
   }
 });
 
@@ -25867,7 +27462,7 @@ function connectivityCurve(g, kind, order, count, ws = createUnionFindWorkspace(
   const { parent, size } = ws;
   const st = { lcc: 0, pairs: 0 };
   const { offsets, neighbors, linkOf, linkSource, linkTarget } = g;
-  const addNode = (v) => {
+  const addNode2 = (v) => {
     nodeOn[v] = 1;
     if (st.lcc < 1) st.lcc = 1;
     for (let p = offsets[v]; p < offsets[v + 1]; p++) {
@@ -25895,7 +27490,7 @@ function connectivityCurve(g, kind, order, count, ws = createUnionFindWorkspace(
   out.pairs[count] = st.pairs;
   for (let i = count - 1; i >= 0; i--) {
     const u = order[i];
-    if (kind === "node") addNode(u);
+    if (kind === "node") addNode2(u);
     else if (kind === "link") addLink(u);
     else {
       for (let p = g.groupOffsets[u]; p < g.groupOffsets[u + 1]; p++) {
@@ -26008,7 +27603,7 @@ function searchWorstCase(g, kind, k, rfn, options) {
     }
     if (candidates2.length === 0) break;
     for (const c of candidates2) c.key = [...c.parent.seq, c.u].sort((x, y) => x - y).join(",");
-    candidates2.sort((x, y) => x.r - y.r || compareKeys(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u]));
+    candidates2.sort((x, y) => x.r - y.r || compareKeys2(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u]));
     const next = [];
     const seen = /* @__PURE__ */ new Set();
     for (const c of candidates2) {
@@ -26025,7 +27620,7 @@ function searchWorstCase(g, kind, k, rfn, options) {
   const best = beam[0];
   return done(best.seq, best.values, width2 > 1 ? "beam" : "greedy");
 }
-function compareKeys(a, b) {
+function compareKeys2(a, b) {
   return compareSeq(a.split(",").map(Number), b.split(",").map(Number));
 }
 function compareSeq(a, b) {
@@ -26057,12 +27652,12 @@ function evaluateContingency(g, kind, order, rfn, maxCases) {
   const worst = [];
   let evaluated = 0;
   let min = Infinity;
-  const keep = (set, value) => {
-    if (value < min) min = value;
-    if (worst.length === WORST_KEPT && value >= worst[worst.length - 1].value) return;
+  const keep = (set, value2) => {
+    if (value2 < min) min = value2;
+    if (worst.length === WORST_KEPT && value2 >= worst[worst.length - 1].value) return;
     let i = worst.length;
-    while (i > 0 && worst[i - 1].value > value) i--;
-    worst.splice(i, 0, { set, value });
+    while (i > 0 && worst[i - 1].value > value2) i--;
+    worst.splice(i, 0, { set, value: value2 });
     if (worst.length > WORST_KEPT) worst.pop();
   };
   outer: for (let i = 0; i < units.length; i++) {
@@ -26157,7 +27752,7 @@ function runTask(g, plan, task) {
     case "band": {
       const bp = bandPlan(g, params);
       const order = new Int32Array(bp.maxUnits);
-      const steps = new Int32Array(bp.x.length);
+      const steps = new Float64Array(bp.x.length);
       const values = [];
       for (let r = task.from; r < task.to; r++) {
         const len = bp.realize(r, order, steps);
@@ -26215,26 +27810,51 @@ var init_engine = __esm({
       get stepsAreFree() {
         return this.ufr !== null;
       }
-      /** R after steps[j] units of `order` are removed, for each j. */
+      /**
+       * R after steps[j] units of `order` are removed, for each j (non-decreasing). A real count c
+       * (a fraction of the units, units.ts countAt) reads R linearly between ⌊c⌋ and ⌈c⌉ removals of
+       * this same order, so `order` must hold ⌈c⌉ units; a whole count is R there exactly.
+       */
       at(kind, order, len, steps, out) {
         if (this.ufr !== null) {
           const curve = connectivityCurve(this.g, kind, order, len, this.ws);
-          for (let j = 0; j < steps.length; j++) out[j] = this.ufr(curve, steps[j]);
+          for (let j = 0; j < steps.length; j++) {
+            const c = steps[j];
+            const lo = Math.floor(c);
+            const r = this.ufr(curve, lo);
+            out[j] = c === lo ? r : lerp(r, this.ufr(curve, lo + 1), c - lo);
+          }
           return out;
         }
         const mask = this.mask;
         mask.node.fill(0);
         mask.link.fill(0);
-        let applied = 0;
+        const memo = this.memo;
+        memo.applied = 0;
+        memo.kLast = -1;
+        memo.kPrev = -1;
         for (let j = 0; j < steps.length; j++) {
-          if (j > 0 && steps[j] === steps[j - 1]) {
-            out[j] = out[j - 1];
-            continue;
-          }
-          while (applied < steps[j]) removeUnit(this.g, mask, kind, order[applied++]);
-          out[j] = this.rfn(mask);
+          const c = steps[j];
+          const lo = Math.floor(c);
+          const r = this.rAfter(kind, order, lo);
+          out[j] = c === lo ? r : lerp(r, this.rAfter(kind, order, lo + 1), c - lo);
         }
         return out;
+      }
+      memo = { applied: 0, kLast: -1, rLast: 0, kPrev: -1, rPrev: 0 };
+      /** R after k removals of `order` on the shared mask; k never below the last two asked. */
+      rAfter(kind, order, k) {
+        const memo = this.memo;
+        if (k === memo.kLast) return memo.rLast;
+        if (k === memo.kPrev) return memo.rPrev;
+        if (k < memo.applied) throw new RangeError(`removal counts must not decrease (${k} after ${memo.applied})`);
+        while (memo.applied < k) removeUnit(this.g, this.mask, kind, order[memo.applied++]);
+        const r = this.rfn(this.mask);
+        memo.kPrev = memo.kLast;
+        memo.rPrev = memo.rLast;
+        memo.kLast = k;
+        memo.rLast = r;
+        return r;
       }
       /** R after every step k = 0..len. */
       everyStep(kind, order, len) {
@@ -26388,6 +28008,15 @@ function spread(lo, hi) {
   for (let j = 0; j < lo.length; j++) w[j] = hi[j] - lo[j];
   return gridMean(w);
 }
+function attackArea(values, c) {
+  if (values.length === 0) return Number.NaN;
+  if (!(c > 0)) return values[0];
+  const lo = Math.floor(c);
+  let sum = 0;
+  for (let k = 1; k <= lo; k++) sum += values[k];
+  if (c === lo) return sum / c;
+  return (sum + (c - lo) * valueAtCount(values, c)) / c;
+}
 function attackGap(lo, attackAtGrid) {
   let sum = 0;
   let count = 0;
@@ -26403,6 +28032,7 @@ var init_summary = __esm({
   "src/envelope/summary.ts"() {
     "use strict";
     init_quantiles();
+    init_units();
   }
 });
 
@@ -26414,16 +28044,16 @@ function pairedStatistic(base, head, challenge, statistic, x) {
   const atB = base.evaluation.attacks.find((a) => a.challenge === challenge);
   const atH = head.evaluation.attacks.find((a) => a.challenge === challenge);
   if (atB && atH) {
-    const value = (a) => {
+    const value2 = (a) => {
       if (statistic.kind === "area") return a.area;
       if (statistic.kind === "spread") return 0;
       if (x === void 0) throw new RangeError(`${challenge}: the ${statistic.kind} of an attack needs x`);
       const count = a.count ?? a.values.length - 1;
-      const k = Math.round(x * count);
-      if (k >= a.values.length) throw new RangeError(`${challenge}: the attack stops before x = ${x}`);
-      return a.values[k];
+      const r = valueAtCount(a.values, countAt(x, count, count));
+      if (Number.isNaN(r)) throw new RangeError(`${challenge}: the attack stops before x = ${x}`);
+      return r;
     };
-    return deterministic(value(atB), value(atH));
+    return deterministic(value2(atB), value2(atH));
   }
   const cB = base.evaluation.contingencies.find((c) => c.challenge === challenge);
   const cH = head.evaluation.contingencies.find((c) => c.challenge === challenge);
@@ -26454,7 +28084,7 @@ function pairedBand(base, head, envB, envH, statistic, x) {
     throw new RangeError(`${envB.challenge}: base and head grids differ; area and spread are not comparable`);
   }
   const band = envB.band;
-  const stat = (s, j) => {
+  const stat2 = (s, j) => {
     switch (statistic.kind) {
       case "quantile":
         return quantileSorted(sortedColumn(s, j), statistic.q);
@@ -26477,8 +28107,8 @@ function pairedBand(base, head, envB, envH, statistic, x) {
       }
     }
   };
-  const b = stat(sb, jb);
-  const h = stat(sh, jh);
+  const b = stat2(sb, jb);
+  const h = stat2(sh, jh);
   const pairs = [];
   const lb = base.labels.get(envB.challenge);
   const lh = head.labels.get(envH.challenge);
@@ -26511,7 +28141,7 @@ function pairedBand(base, head, envB, envH, statistic, x) {
       rb[i] = sb[pb];
       rh[i] = sh[ph];
     }
-    const d = stat(rh, jh) - stat(rb, jb);
+    const d = stat2(rh, jh) - stat2(rb, jb);
     s1 += d;
     s2 += d * d;
   }
@@ -26527,6 +28157,7 @@ var init_pairing = __esm({
     init_quantiles();
     init_summary();
     init_grid();
+    init_units();
     BOOTSTRAP_ROUNDS = 400;
   }
 });
@@ -26534,7 +28165,10 @@ var init_pairing = __esm({
 // src/envelope/evaluate.ts
 function planEvaluation(g, spec) {
   validateRSpec(spec.r);
+  const unsupported = unsupportedMetric(g, spec.r);
+  if (unsupported) throw new UnsupportedMetricError(unsupported);
   const degraded = [];
+  const notApplicable = [];
   const items = [];
   const seen = /* @__PURE__ */ new Set();
   for (const p of spec.challenges) {
@@ -26543,11 +28177,11 @@ function planEvaluation(g, spec) {
     const params = resolveParams(g, p, spec.seed);
     const c = getChallenge(p.challenge);
     if (p.challenge === "regional" && sitesWithCoordinates(g).length === 0) {
-      degraded.push("regional: skipped, no site has coordinates (lat/lon)");
+      notApplicable.push({ challenge: "regional", reason: "no site has coordinates (lat/lon)" });
       continue;
     }
     if ((p.challenge === "risk-groups" || p.challenge === "risk-groups-worst") && countOnes(eligibleUnits(g, "group")) === 0) {
-      degraded.push(`${p.challenge}: skipped, the design has no shared-risk group that can fail`);
+      notApplicable.push({ challenge: p.challenge, reason: "the design has no shared-risk group that can fail" });
       continue;
     }
     if (c.type === "contingency") params.worstCase = 0;
@@ -26555,14 +28189,14 @@ function planEvaluation(g, spec) {
   }
   const maxWork = spec.budget?.maxWork ?? DEFAULT_MAX_WORK;
   if (!(maxWork > 0)) throw new RangeError(`budget.maxWork must be > 0, got ${maxWork}`);
-  const visits2 = g.n + g.m;
+  const visits3 = g.n + g.m;
   const rp = rPasses(g, spec.r);
   const free = unionFindR(g, spec.r) !== null;
   const est = items.map((it) => estimate(g, it, rp, free));
-  const total = () => est.reduce((s, e) => s + e.band + e.cases + e.fixed + e.worst, 0) * visits2;
+  const total = () => est.reduce((s, e) => s + e.band + e.cases + e.fixed + e.worst, 0) * visits3;
   if (total() > maxWork) {
     items.forEach((it, i) => {
-      if (est[i].worstExact && est[i].worst * visits2 > maxWork / 4) {
+      if (est[i].worstExact && est[i].worst * visits3 > maxWork / 4) {
         it.exactLimit = 0;
         est[i] = estimate(g, it, rp, free);
         note(it, `worst-case search greedy instead of exact (work budget ${maxWork})`);
@@ -26570,8 +28204,8 @@ function planEvaluation(g, spec) {
     });
   }
   if (total() > maxWork) {
-    const fixed = est.reduce((s, e) => s + e.fixed + e.worst, 0) * visits2;
-    const reducible = est.reduce((s, e) => s + e.band + e.cases, 0) * visits2;
+    const fixed = est.reduce((s, e) => s + e.fixed + e.worst, 0) * visits3;
+    const reducible = est.reduce((s, e) => s + e.band + e.cases, 0) * visits3;
     const scale = Math.max(0, maxWork - fixed) / reducible;
     items.forEach((it, i) => {
       if (it.type === "band" && est[i].band > 0) {
@@ -26597,7 +28231,7 @@ function planEvaluation(g, spec) {
     const e = estimate(g, it, rp, free);
     return s + e.band + e.cases + e.fixed + e.worst;
   }, 0);
-  return { r: spec.r, items, degraded, work: work * visits2 };
+  return { r: spec.r, items, degraded, ...notApplicable.length ? { notApplicable } : {}, work: work * visits3 };
 }
 function note(it, reason) {
   it.degraded = it.degraded ? `${it.degraded}; ${reason}` : reason;
@@ -26610,7 +28244,7 @@ function estimate(g, it, rp, free) {
     const m = p.challenge === "regional" ? p.epicentres ?? sitesWithCoordinates(g).length : p.realizations;
     const x = makeGrid(p.until, p.points, p.at);
     const count = unitCount(g, kind);
-    const distinct = p.challenge === "regional" ? x.length : new Set(x.map((v) => Math.round(v * count))).size;
+    const distinct = p.challenge === "regional" ? x.length : new Set(x.flatMap((v) => [Math.floor(v * count), Math.ceil(v * count)])).size;
     e.realizations = m;
     e.band = m * (free ? 2 : distinct * rp + 1);
   } else if (it.type === "attack") {
@@ -26644,20 +28278,22 @@ function structureSummary(g) {
     nodes: g.n,
     links: g.m,
     components: comps.sizes.length,
-    bridges: cuts.bridges.map((e) => ({ id: g.linkIds[e], kind: "link", line: g.linkLine[e] })),
-    cutNodes: cuts.cutNodes.map((v) => ({ id: g.nodeIds[v], kind: "node", line: g.nodeLine[v] }))
+    // Listed as the file lists them.
+    bridges: linksByLine(g, cuts.bridges).map((e) => reportElement(g, "link", e)),
+    cutNodes: nodesByLine(g, cuts.cutNodes).map((v) => reportElement(g, "node", v))
   };
 }
 function assembleEvaluation(g, plan, tasks, results) {
   const samples = /* @__PURE__ */ new Map();
-  const labels = /* @__PURE__ */ new Map();
+  const labels2 = /* @__PURE__ */ new Map();
   const evaluation = {
     r: plan.r,
     structure: structureSummary(g),
     envelopes: [],
     attacks: [],
     contingencies: [],
-    degraded: [...plan.degraded]
+    degraded: [...plan.degraded],
+    ...plan.notApplicable ? { notApplicable: plan.notApplicable.map((x) => ({ ...x })) } : {}
   };
   const envelopeOf2 = /* @__PURE__ */ new Map();
   const attackOf2 = /* @__PURE__ */ new Map();
@@ -26670,7 +28306,7 @@ function assembleEvaluation(g, plan, tasks, results) {
       const bp = bandPlan(g, p);
       const env = buildEnvelope(g, it, bp, values, ev);
       samples.set(p.challenge, values);
-      if (bp.label) labels.set(p.challenge, values.map((_, r) => bp.label(r)));
+      if (bp.label) labels2.set(p.challenge, values.map((_, r) => bp.label(r)));
       envelopeOf2.set(item, env);
       evaluation.envelopes.push(env);
     } else if (it.type === "attack") {
@@ -26680,6 +28316,7 @@ function assembleEvaluation(g, plan, tasks, results) {
       const count = unitCount(g, kind);
       const ids = unitIds(g, kind);
       const values = Array.from(res.values);
+      const until = Math.min(countAt(p.until, count, countOnes(eligibleUnits(g, kind))), res.sequence.length);
       const curve = {
         challenge: p.challenge,
         kind,
@@ -26687,7 +28324,7 @@ function assembleEvaluation(g, plan, tasks, results) {
         values,
         sequence: Array.from(res.sequence, (u) => ids[u]),
         count,
-        area: gridMean(values)
+        area: attackArea(values, until)
       };
       attackOf2.set(item, curve);
       evaluation.attacks.push(curve);
@@ -26710,14 +28347,14 @@ function assembleEvaluation(g, plan, tasks, results) {
     const count = unitCount(g, env.kind);
     const eligible = countOnes(eligibleUnits(g, env.kind));
     const atGrid = env.x.map((x) => {
-      const k = stepsAt(x, count, eligible);
-      return k < worst.values.length ? worst.values[k] : null;
+      const r = valueAtCount(worst.values, countAt(x, count, eligible));
+      return Number.isNaN(r) ? null : r;
     });
     const lo = env.quantiles[quantileKey(env.band[0])].value;
     const gap = attackGap(lo, atGrid);
     if (gap !== null) env.attackGap = { value: gap, attack: worst.challenge };
   }
-  return { evaluation, samples, labels };
+  return { evaluation, samples, labels: labels2 };
 }
 function buildEnvelope(g, it, bp, values, ev) {
   const p = it.params;
@@ -26749,14 +28386,14 @@ function weakestSequences2(g, bp, values, ev) {
   const picks = values.map((_, r) => r).sort((a, b) => score[a] - score[b] || a - b).slice(0, WEAKEST_KEPT);
   const ids = unitIds(g, bp.kind);
   const order = new Int32Array(bp.maxUnits);
-  const steps = new Int32Array(bp.x.length);
+  const steps = new Float64Array(bp.x.length);
   return picks.map((r) => {
     const len = bp.realize(r, order, steps);
     const seq = { kind: bp.kind, elements: Array.from(order.subarray(0, len), (u) => ids[u]), values: [], realization: r };
     if (bp.label) seq.label = bp.label(r);
     if (ev.stepsAreFree) {
       seq.values = Array.from(ev.everyStep(bp.kind, order, len).subarray(1));
-    } else {
+    } else if (steps.every((c) => Number.isInteger(c))) {
       const at = [];
       const vals = [];
       for (let j = 0; j < steps.length; j++) {
@@ -26766,6 +28403,12 @@ function weakestSequences2(g, bp, values, ev) {
       }
       seq.values = vals;
       seq.steps = at;
+    } else {
+      const whole = /* @__PURE__ */ new Set();
+      for (let j = 0; j < steps.length; j++) for (const k of [Math.floor(steps[j]), Math.ceil(steps[j])]) if (k > 0) whole.add(k);
+      const at = [...whole].sort((a, b) => a - b);
+      seq.values = Array.from(ev.at(bp.kind, order, len, at, new Float64Array(at.length)));
+      seq.steps = at;
     }
     return seq;
   });
@@ -26774,6 +28417,8 @@ var DEFAULT_MAX_WORK, MIN_REALIZATIONS, EXACT_LIMIT, WEAKEST_KEPT, RANKING_PASSE
 var init_evaluate = __esm({
   "src/envelope/evaluate.ts"() {
     "use strict";
+    init_compact();
+    init_element();
     init_structure();
     init_registry2();
     init_regional();
@@ -26799,1299 +28444,6 @@ var init_evaluate = __esm({
       "link-betweenness": (n) => n,
       "link-betweenness-adaptive": (n, k) => n * Math.max(1, k)
     };
-  }
-});
-
-// src/parallel/pool.ts
-import { createRequire } from "node:module";
-import { dirname, join as join2 } from "node:path";
-import { pathToFileURL } from "node:url";
-import { Worker } from "node:worker_threads";
-function workerEntry(moduleUrl = import.meta.url) {
-  if (!moduleUrl.endsWith(".ts")) return { url: new URL("./worker.js", moduleUrl) };
-  const tsx = createRequire(moduleUrl).resolve("tsx/package.json");
-  return { url: new URL("./worker.ts", moduleUrl), loader: pathToFileURL(join2(dirname(tsx), "dist", "esm", "api", "index.mjs")).href };
-}
-function startWorker(entry) {
-  let worker;
-  if (!entry.loader) worker = new Worker(entry.url);
-  else {
-    const url = JSON.stringify(entry.url.href);
-    const boot = `import(${JSON.stringify(entry.loader)}).then(({ tsImport }) => tsImport(${url}, ${url}));`;
-    worker = new Worker(boot, { eval: true });
-  }
-  const drop = () => {
-    const i = idle.indexOf(worker);
-    if (i >= 0) idle.splice(i, 1);
-  };
-  worker.on("error", drop);
-  worker.on("exit", drop);
-  return worker;
-}
-async function evaluateDesignParallel(g, spec, threads, options = {}) {
-  if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be an integer ≥ 1, got ${threads}`);
-  const plan = planEvaluation(g, spec);
-  const tasks = planTasks(plan, g);
-  const workers = plan.work < (options.minWork ?? PARALLEL_MIN_WORK) ? 1 : Math.min(threads, tasks.length);
-  const results = workers <= 1 ? tasks.map((t) => runTask(g, plan, t)) : await runOnWorkers(g, plan, tasks, workers);
-  return assembleEvaluation(g, plan, tasks, results);
-}
-function runOnWorkers(g, plan, tasks, count) {
-  const run3 = queue.then(() => runExclusive(g, plan, tasks, count));
-  queue = run3.catch(() => void 0);
-  return run3;
-}
-async function runExclusive(g, plan, tasks, count) {
-  const entry = workerEntry();
-  const pool = idle.splice(0, count);
-  while (pool.length < count) pool.push(startWorker(entry));
-  const job = ++jobs;
-  const results = new Array(tasks.length);
-  let next = 0;
-  let failed = false;
-  const listeners = [];
-  try {
-    await Promise.all(
-      pool.map(
-        (worker) => new Promise((resolve, reject) => {
-          worker.ref();
-          const feed = () => {
-            if (next >= tasks.length) {
-              resolve();
-              return;
-            }
-            const id = next++;
-            worker.postMessage({ type: "task", job, id, task: tasks[id] });
-          };
-          const onMessage = (msg) => {
-            if ("error" in msg) {
-              reject(new Error(`worker task ${msg.id} failed: ${msg.error}`));
-              return;
-            }
-            results[msg.id] = msg.result;
-            feed();
-          };
-          const onExit = (code) => reject(new Error(`worker thread stopped with exit code ${code}`));
-          worker.on("message", onMessage);
-          worker.on("error", reject);
-          worker.on("exit", onExit);
-          listeners.push(() => {
-            worker.off("message", onMessage);
-            worker.off("error", reject);
-            worker.off("exit", onExit);
-          });
-          worker.postMessage({ type: "init", job, g, plan });
-          feed();
-        })
-      )
-    );
-  } catch (error) {
-    failed = true;
-    throw error;
-  } finally {
-    listeners.forEach((off) => off());
-    if (failed) await Promise.all(pool.map((w) => w.terminate()));
-    else
-      for (const w of pool) {
-        w.unref();
-        idle.push(w);
-      }
-  }
-  return results;
-}
-var PARALLEL_MIN_WORK, idle, queue, jobs;
-var init_pool = __esm({
-  "src/parallel/pool.ts"() {
-    "use strict";
-    init_engine();
-    init_evaluate();
-    PARALLEL_MIN_WORK = 5e7;
-    idle = [];
-    queue = Promise.resolve();
-    jobs = 0;
-  }
-});
-
-// src/shell/commands/envelope.ts
-import { availableParallelism } from "node:os";
-function parseScore(text2, combine) {
-  if (combine !== void 0 && combine !== "mean" && combine !== "min") {
-    throw new UsageError(`--combine must be "mean" or "min", not "${combine}"`);
-  }
-  const parts = text2.split(",").map((p) => p.trim()).filter(Boolean);
-  if (parts.length === 0) throw new UsageError("--score needs at least one ID=WEIGHT", "e.g. --score efficiency=2,largest_component=1");
-  const list2 = parts.map((p) => {
-    const [id, w = "1"] = p.split("=");
-    if (!isMetricId(id)) throw new UsageError(`unknown metric "${id}" in --score`, `known metrics: ${metrics.map((m) => m.id).join(", ")}`);
-    const weight = Number(w);
-    if (!(weight > 0) || !Number.isFinite(weight)) throw new UsageError(`weight of ${id} must be a number > 0, not "${w}"`);
-    return { id, weight };
-  });
-  return { metrics: list2, combine: combine ?? "mean" };
-}
-function envelopeJson(file, spec, ev) {
-  const e = ev.evaluation;
-  const common = { file, r: spec.r, seed: spec.seed };
-  const worst = (w) => w ? { worst_case: { k: w.k, method: w.method, kind: w.kind, elements: w.elements, values: w.values } } : {};
-  const env = e.envelopes[0];
-  const attack = e.attacks[0];
-  const cont = e.contingencies[0];
-  let body;
-  if (env) {
-    body = {
-      challenge: env.challenge,
-      kind: env.kind,
-      x_unit: env.xUnit,
-      realizations: env.realizations,
-      band: env.band,
-      x: env.x,
-      min: env.min,
-      max: env.max,
-      mean: env.mean,
-      median: env.median,
-      quantiles: env.quantiles,
-      area: env.area,
-      spread: env.spread,
-      weakest: env.weakest,
-      ...worst(env.worstCase)
-    };
-  } else if (attack) {
-    body = {
-      challenge: attack.challenge,
-      kind: attack.kind,
-      x: attack.x,
-      values: attack.values,
-      sequence: attack.sequence,
-      area: attack.area,
-      ...worst(attack.worstCase)
-    };
-  } else {
-    body = { challenge: cont.challenge, kind: cont.kind, evaluated: cont.evaluated, total: cont.total, min: cont.min, worst: cont.worst };
-  }
-  return { ...common, ...body, degraded: e.degraded, caution: CAUTION };
-}
-function shortList(ids, limit = 10) {
-  return ids.slice(0, limit).join(", ") + (ids.length > limit ? `, … (${ids.length - limit} more)` : "");
-}
-function formatEnvelope(file, spec, ev) {
-  const e = ev.evaluation;
-  const rText = spec.r.metrics.length === 1 ? spec.r.metrics[0].id : `${spec.r.combine} of ${spec.r.metrics.map((m) => `${m.id}×${m.weight}`).join(", ")}`;
-  const lines = [];
-  const env = e.envelopes[0];
-  const attack = e.attacks[0];
-  const cont = e.contingencies[0];
-  const worstLines = (w) => {
-    if (!w) return;
-    lines.push(`  worst case (k = ${w.k}, ${w.method}): ${w.elements.join(" → ")}`);
-    lines.push(`    R after each step: ${w.values.map(f4).join(", ")}`);
-  };
-  if (env) {
-    const [lo, hi] = env.band.map(String);
-    const unit = env.xUnit === "km" ? "radius km" : `${env.kind}s removed`;
-    lines.push(`${file} — ${env.challenge}, R = ${rText}, ${env.realizations} ${env.challenge === "regional" ? "epicentres" : "realizations"}, seed ${env.seed}`);
-    lines.push(`  ${unit.padStart(15)}     min   q${lo.padEnd(4)}  median  q${hi.padEnd(4)}     max    mean`);
-    env.x.forEach((x, j) => {
-      const xs = env.xUnit === "km" ? x.toFixed(1) : `${(x * 100).toFixed(1)} %`;
-      const q = env.quantiles;
-      lines.push(`  ${xs.padStart(15)}  ${[env.min[j], q[lo].value[j], env.median[j], q[hi].value[j], env.max[j], env.mean[j]].map(f4).join("  ")}`);
-    });
-    lines.push(`  area ${f4(env.area)} (mean median R; higher is better), spread ${f4(env.spread)} (mean band width; smaller is better)`);
-    for (const w of env.weakest) {
-      lines.push(`  weak realization ${w.realization}${w.label ? ` (epicentre ${w.label})` : ""}: ${shortList(w.elements)}`);
-    }
-    worstLines(env.worstCase);
-  } else if (attack) {
-    lines.push(`${file} — ${attack.challenge} attack, R = ${rText}, ${attack.sequence.length} ${attack.kind}s removed`);
-    const K = attack.values.length - 1;
-    const shown = [...new Set(Array.from({ length: 11 }, (_, i) => Math.round(i * K / 10)))];
-    lines.push(`  ${"removed".padStart(10)}        R`);
-    for (const k of shown) lines.push(`  ${`${k} (${(attack.x[k] * 100).toFixed(1)} %)`.padStart(16)}  ${f4(attack.values[k])}`);
-    lines.push(`  area ${f4(attack.area)}; removal order: ${shortList(attack.sequence)}`);
-    worstLines(attack.worstCase);
-  } else if (cont) {
-    lines.push(`${file} — ${cont.challenge} over ${cont.kind}s, R = ${rText}: ${cont.evaluated} of ${cont.total} cases evaluated`);
-    lines.push(`  lowest R ${f4(cont.min)}`);
-    for (const w of cont.worst) lines.push(`  ${f4(w.value)}  ${w.elements.join(" + ")}`);
-  }
-  for (const d of e.degraded) lines.push(`  degraded: ${d}`);
-  lines.push("", `note: ${CAUTION}`);
-  return `${lines.join("\n")}
-`;
-}
-var width, CHALLENGE_LIST, HELP3, f4, envelopeCommand;
-var init_envelope = __esm({
-  "src/shell/commands/envelope.ts"() {
-    "use strict";
-    init_args();
-    init_errors();
-    init_compact();
-    init_detect();
-    init_registry2();
-    init_registry();
-    init_report();
-    init_evaluate();
-    init_pool();
-    init_read_design();
-    width = Math.max(...challenges.map((c) => c.name.length));
-    CHALLENGE_LIST = challenges.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`).join("\n");
-    HELP3 = `Usage: netbrace envelope FILE --challenge NAME [options] [--json]
-
-Runs one challenge against one design and reports how the robustness value R degrades:
-for a random challenge the envelope (min, max, mean, quantile band with confidence
-intervals, area, spread, the three weakest realizations), for a targeted attack its curve at
-every removal step and its removal sequence, for n-1 / n-2 the worst cases.
-
-Challenges:
-${CHALLENGE_LIST}
-
-Options:
-  --challenge NAME     the challenge (required; see the list above)
-  --metric ID          R is this one normalized metric (default largest_component)
-  --score ID=W,...     R is a weighted combination of metrics, e.g. efficiency=2,largest_component=1
-  --combine mean|min   how --score combines: weighted mean (default) or minimum
-  --realizations M     random realizations (default ${DEFAULTS.realizations}); regional uses every epicentre
-  --seed S             seed of the random orders (default 1); same seed, same result
-  --until X            end of the x axis: a fraction of nodes/links/groups (default ${DEFAULTS.until}),
-                       or a radius in km for regional (default: a quarter of the widest site distance)
-  --points K           grid points on the x axis, 0 included (default ${DEFAULTS.points})
-  --band LO,HI         quantiles of the band (default ${DEFAULTS.band.join(",")})
-  --worst-case K       also search the weakest removal sequence of length K (exact for K ≤ 2)
-  --beam B             beam width of that search beyond exact (default 1 = greedy)
-  --element node|link  what n-1 / n-2 remove (default node)
-  --threads N          worker threads (default: the machine's cores, at most 4); the result
-                       does not depend on it
-  --max-work W         work budget in element visits (default ${DEFAULT_MAX_WORK}); beyond it
-                       realizations are reduced and the output says so
-  --format F           read FILE as F (${FORMAT_CHOICES}) instead of by extension
-  --json               print one JSON object
-
-Metrics: ${metrics.map((m) => m.id).join(", ")}
-
-Examples:
-  netbrace envelope designs/core.net.yaml --challenge random-nodes --metric efficiency
-  netbrace envelope core.graphml --challenge degree-adaptive --until 0.2 --json
-  netbrace envelope core.net.yaml --challenge n-1 --element link
-  netbrace envelope core.net.yaml --challenge regional --until 300 --points 7
-
-The result informs engineering judgement under the stated model; it does not replace
-engineering studies, and local codes, standards and licensed practice decide.
-
-Exit codes: 0 evaluated, 1 the design could not be read, 2 usage error.
-`;
-    f4 = (x) => Number.isFinite(x) ? x.toFixed(4) : "  –   ";
-    envelopeCommand = {
-      name: "envelope",
-      summary: "robustness envelope, attack curve or N-1/N-2 of one design under one challenge",
-      help: HELP3,
-      async run(args, io) {
-        const parsed = parseCommandArgs("envelope", args, {
-          challenge: { type: "string" },
-          metric: { type: "string" },
-          score: { type: "string" },
-          combine: { type: "string" },
-          realizations: { type: "string" },
-          seed: { type: "string" },
-          until: { type: "string" },
-          points: { type: "string" },
-          band: { type: "string" },
-          "worst-case": { type: "string" },
-          beam: { type: "string" },
-          element: { type: "string" },
-          threads: { type: "string" },
-          "max-work": { type: "string" },
-          format: { type: "string" },
-          json: { type: "boolean" }
-        });
-        const v = parsed.values;
-        if (parsed.positionals.length !== 1) throw new UsageError("envelope needs exactly one FILE", "netbrace envelope designs/core.net.yaml --challenge random-nodes");
-        const file = parsed.positionals[0];
-        if (v.challenge === void 0) throw new UsageError("--challenge is required", `one of: ${challenges.map((c) => c.name).join(", ")}`);
-        if (!isChallengeName(v.challenge)) throw new UsageError(`unknown challenge "${v.challenge}"`, `one of: ${challenges.map((c) => c.name).join(", ")}`);
-        if (v.metric !== void 0 && v.score !== void 0) throw new UsageError("give --metric or --score, not both");
-        if (v.combine !== void 0 && v.score === void 0) throw new UsageError("--combine goes with --score");
-        let r;
-        if (v.score !== void 0) r = parseScore(v.score, v.combine);
-        else {
-          const id = v.metric ?? "largest_component";
-          if (!isMetricId(id)) throw new UsageError(`unknown metric "${id}"`, `known metrics: ${metrics.map((m) => m.id).join(", ")}`);
-          r = { metrics: [{ id, weight: 1 }], combine: "mean" };
-        }
-        const params = { challenge: v.challenge };
-        const set = (key, value) => {
-          if (value !== void 0) params[key] = value;
-        };
-        set("realizations", wholeNumber("--realizations", v.realizations, 1));
-        set("until", finiteNumber("--until", v.until, (x) => x >= 0, "a number ≥ 0"));
-        set("points", wholeNumber("--points", v.points, 2));
-        set("worstCase", wholeNumber("--worst-case", v["worst-case"], 0));
-        set("beam", wholeNumber("--beam", v.beam, 1));
-        if (v.band !== void 0) {
-          const b = v.band.split(",").map(Number);
-          if (b.length !== 2 || !(b[0] > 0 && b[0] < b[1] && b[1] < 1)) throw new UsageError(`--band must be LO,HI with 0 < LO < HI < 1, not "${v.band}"`);
-          params.band = [b[0], b[1]];
-        }
-        if (v.element !== void 0) {
-          if (v.element !== "node" && v.element !== "link") throw new UsageError(`--element must be node or link, not "${v.element}"`);
-          params.element = v.element;
-        }
-        const seed = wholeNumber("--seed", v.seed, 0) ?? 1;
-        const threads = wholeNumber("--threads", v.threads, 1) ?? Math.min(4, availableParallelism());
-        const maxWork = finiteNumber("--max-work", v["max-work"], (x) => x > 0, "a number > 0");
-        const options = { cwd: io.cwd };
-        if (v.format !== void 0) options.format = parseFormatName(v.format);
-        const g = compileTopology(readDesign(file, options));
-        const spec = { r, seed, challenges: [params], ...maxWork !== void 0 ? { budget: { maxWork } } : {} };
-        let ev;
-        try {
-          ev = await evaluateDesignParallel(g, spec, threads);
-        } catch (e2) {
-          if (e2 instanceof RangeError) throw new UsageError(e2.message);
-          throw e2;
-        }
-        const e = ev.evaluation;
-        if (e.envelopes.length + e.attacks.length + e.contingencies.length === 0) {
-          throw new UsageError(e.degraded[0] ?? `${v.challenge} produced no result`, "choose another challenge for this design");
-        }
-        io.stdout(v.json ? `${JSON.stringify(envelopeJson(file, spec, ev), null, 2)}
-` : formatEnvelope(file, spec, ev));
-        return 0;
-      }
-    };
-  }
-});
-
-// src/report/html.ts
-function renderHtml(report) {
-  const title = `netbrace report — ${report.verdict === "fail" ? "gate failed" : "gate passed"}`;
-  const parts = [];
-  parts.push("<!DOCTYPE html>");
-  parts.push('<html lang="en">');
-  parts.push("<head>");
-  parts.push('<meta charset="utf-8">');
-  parts.push(`<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`);
-  parts.push('<meta name="viewport" content="width=device-width, initial-scale=1">');
-  parts.push(`<meta name="generator" content="netbrace ${esc2(report.tool.version)}">`);
-  parts.push(`<title>${esc2(title)}</title>`);
-  parts.push(`<style>${CSS}</style>`);
-  parts.push("</head>");
-  parts.push(`<body data-report-version="${report.version}" data-verdict="${report.verdict}">`);
-  parts.push(masthead(report));
-  parts.push("<main>");
-  parts.push(
-    `<aside class="caution" role="note" aria-label="Caution"><p><strong>Caution.</strong> ${esc2(report.caution)}</p></aside>`
-  );
-  if (report.files.length > 1) parts.push(contents(report));
-  if (report.files.length === 0) parts.push("<p>No design files changed: nothing to judge.</p>");
-  report.files.forEach((f, i) => parts.push(designSection(f, i)));
-  parts.push("</main>");
-  parts.push(
-    `<footer><p>Written by netbrace ${esc2(report.tool.version)} from report format version ${report.version}. Every number here is in the JSON report of the same run. Seed ${report.seed}; the same inputs and seed give the same numbers.</p></footer>`
-  );
-  parts.push("</body>");
-  parts.push("</html>");
-  return parts.join("\n") + "\n";
-}
-function masthead(r) {
-  const failed = r.files.filter(fileFails).length;
-  const verdict = r.verdict === "fail" ? `Gate failed: ${failed} of ${r.files.length} design${r.files.length === 1 ? "" : "s"} failing` : `Gate passed${r.files.some(fileWarns) ? " with warnings" : ""}`;
-  const meta = [];
-  if (r.base || r.head) meta.push(["Compared", `base <code title="${esc2(r.base ?? "")}">${esc2(shortRevision(r.base))}</code> → head <code title="${esc2(r.head ?? "")}">${esc2(shortRevision(r.head))}</code>`]);
-  meta.push([
-    "Policy",
-    r.policy.source === "builtin" ? "no policy file: the built-in defaults for communication backbones were applied" : `<code>${esc2(r.policy.path ?? "policy file")}</code>${r.policy.revision ? ` as of <code>${esc2(shortRevision(r.policy.revision))}</code>` : ""}` + (r.policy.note ? `. ${esc2(r.policy.note)}` : r.policy.changed ? " (this change edits the policy; the proposed policy was not applied)" : "")
-  ]);
-  if (r.scope === "all") meta.push(["Scope", "every design in the repository, judged against thresholds only"]);
-  meta.push(["Mode", r.mode === "inform" ? "inform: failures are reported, the run does not fail" : "block: failures fail the check"]);
-  meta.push(["Seed", String(r.seed)]);
-  if (r.part) meta.push(["Part", `${r.part.index} of ${r.part.total}`]);
-  const counts = Object.entries(r.counts).filter(([, n]) => n > 0).map(([k, n]) => `${n} ${esc2(STATUS_WORD[k])}`).join(", ");
-  meta.push(["Designs", `${r.files.length}${counts ? ` (${counts})` : ""}`]);
-  return [
-    '<header class="mast">',
-    "<div>",
-    '<div class="brand" aria-hidden="true">netbrace</div>',
-    "<h1>Robustness report</h1>",
-    "</div>",
-    `<p class="verdict ${r.verdict}" role="status" data-verdict="${r.verdict}">${esc2(verdict)}</p>`,
-    "</header>",
-    `<dl class="meta">${meta.map(([k, v]) => `<dt>${esc2(k)}</dt><dd>${v}</dd>`).join("")}</dl>`
-  ].join("\n");
-}
-function contents(r) {
-  const items = r.files.map((f, i) => {
-    const tone = fileTone(f);
-    return `<li><a href="#design-${i}">${esc2(f.path)}</a> <span class="chip ${tone}">${esc2(toneWord(f))}</span></li>`;
-  });
-  return `<nav aria-label="Designs in this report"><h3>Designs</h3><ol>${items.join("")}</ol></nav>`;
-}
-function designSection(f, index) {
-  const tone = fileTone(f);
-  const id = `design-${index}`;
-  const out = [];
-  out.push(
-    `<section class="design ${tone}" id="${id}" aria-labelledby="${id}-h" data-path="${esc2(f.path)}" data-status="${esc2(f.status)}" data-tone="${tone}">`
-  );
-  out.push("<header>");
-  out.push(`<h2 id="${id}-h">${esc2(f.path)}</h2>`);
-  out.push(`<span class="chip ${tone}">${esc2(toneWord(f))}</span>`);
-  out.push(`<span class="chip notice">${esc2(STATUS_WORD[f.status])}</span>`);
-  out.push("</header>");
-  if (f.previousPath) out.push(`<p class="facts">Renamed from <code>${esc2(f.previousPath)}</code>; compared with its old self.</p>`);
-  if (f.error) {
-    out.push(
-      `<p class="error">Could not be read: <code>${esc2(f.path)}:${f.error.line || 1}:${f.error.column || 1}</code> ${esc2(f.error.message)}</p>`
-    );
-  }
-  if (f.head) out.push(`<p class="facts">${esc2(facts(f.head))}</p>`);
-  const changed = describeChanges(f);
-  if (changed) out.push(`<p class="facts changes"><strong>What the change does:</strong> ${esc2(changed)}</p>`);
-  const lines = elementLines(f);
-  if (f.head && f.head.envelopes.length) out.push(charts(f, id));
-  if (f.requirements.length) out.push(requirementTable2(f.requirements, id));
-  const findings = groupFindings(bySeverity(f.findings.filter((x) => x.rule !== "weakest-sequence")));
-  const work = findings.filter((x) => x.severity !== "notice");
-  const notices = findings.filter((x) => x.severity === "notice");
-  if (findings.length) out.push("<h3>Findings</h3>");
-  if (work.length) out.push(`<ul class="findings">${work.map(findingItem).join("")}</ul>`);
-  if (notices.length) {
-    out.push(
-      `<details class="notices"><summary>${notices.length} notice${notices.length === 1 ? "" : "s"} (within allowances, or context)</summary><ul class="findings">${notices.map(findingItem).join("")}</ul></details>`
-    );
-  }
-  out.push(weakest(f, lines));
-  out.push(structure(f));
-  out.push("</section>");
-  return out.filter(Boolean).join("\n");
-}
-function facts(ev) {
-  const metrics2 = ev.r.metrics.map((m) => `${m.id} (weight ${m.weight})`).join(", ");
-  const s = ev.structure;
-  const combine = ev.r.combine === "min" ? "the minimum" : "the weighted mean";
-  const text2 = `${s.nodes} sites, ${s.links} links, ${s.components} component${s.components === 1 ? "" : "s"}. R is ${combine} of ${metrics2}.`;
-  return ev.degraded.length ? `${text2} Reduced by budgets: ${ev.degraded.join("; ")}.` : text2;
-}
-function charts(f, id) {
-  const head = f.head;
-  const figs = head.envelopes.map((env, i) => {
-    const chart = envelopeChart(env, head, f.base);
-    const cid = `${id}-chart-${i}`;
-    const attacks = attacksFor(env, head).length;
-    return [
-      `<figure class="chart" data-challenge="${esc2(env.challenge)}" data-kind="${esc2(env.kind)}" data-attacks="${attacks}">`,
-      renderChartSvg(chart, { idPrefix: cid }),
-      `<figcaption>${esc2(chart.title)}: ${env.realizations} realizations, ${Math.round(env.band[0] * 100)}–${Math.round(env.band[1] * 100)} % band; area ${formatValue(env.area)}, spread ${formatValue(env.spread)}.${env.degraded ? ` Reduced: ${esc2(env.degraded)}.` : ""}</figcaption>`,
-      chartData(chart, cid),
-      "</figure>"
-    ].join("\n");
-  });
-  return `<h3>Envelopes</h3><div class="charts">${figs.join("\n")}</div>`;
-}
-function chartData(chart, id) {
-  const xs = [...new Set(chart.series.flatMap((s) => s.points.map((p) => p.x)))].sort((a, b) => a - b);
-  const lookup = (pts, x) => pts.find((p) => Math.abs(p.x - x) < 1e-12)?.y;
-  const cols = chart.series.flatMap(
-    (s) => s.role === "band" ? [
-      { name: `${s.label}, low`, pts: s.points },
-      { name: `${s.label}, high`, pts: s.upper ?? [] }
-    ] : [{ name: s.label, pts: s.points }]
-  );
-  const xName = chart.xUnit === "km" ? "radius (km)" : "removed";
-  const head = `<tr><th scope="col">${xName}</th>${cols.map((c) => `<th scope="col" class="num">${esc2(c.name)}</th>`).join("")}</tr>`;
-  const rows = xs.map((x) => {
-    const label = chart.xUnit === "km" ? String(x) : formatFraction(x);
-    return `<tr><th scope="row">${esc2(label)}</th>${cols.map((c) => `<td class="num">${esc2(formatValue(lookup(c.pts, x)))}</td>`).join("")}</tr>`;
-  });
-  return `<details><summary>Chart data</summary><table id="${id}-data"><caption>${esc2(chart.title)}: values of R</caption><thead>${head}</thead><tbody>${rows.join("")}</tbody></table></details>`;
-}
-function requirementTable2(rows, id) {
-  const body = rows.map((r) => {
-    const bad = r.status === "missed" || r.status === "regressed";
-    const cls = `st-${r.status}${bad ? ` sev-${r.severity}` : ""}`;
-    return `<tr data-requirement="${esc2(r.id)}"><th scope="row">${esc2(r.description)}<div class="rule">${esc2(r.id)}</div></th><td>${esc2(r.severity)}</td><td class="num" data-field="base" data-value="${dataValue(r.base)}">${esc2(formatRequirementValue(r, r.base))}</td><td class="num" data-field="head" data-value="${dataValue(r.head)}">${esc2(formatRequirementValue(r, r.head))}</td><td class="num" data-field="delta" data-value="${dataValue(r.delta)}">${esc2(formatRequirementDelta(r))}${formatError(r.se) ? ` <span class="line" data-field="se" data-value="${dataValue(r.se)}">${esc2(formatError(r.se))}</span>` : ""}</td><td class="num" data-field="threshold" data-value="${dataValue(r.threshold)}">${esc2(formatRequirementValue(r, r.threshold))}</td><td class="${cls}" data-field="status">${esc2(REQUIREMENT_STATUS_WORD[r.status])}</td></tr>`;
-  });
-  const noise2 = rows.some((r) => r.status === "within-noise") ? '<p class="facts">Within noise: the value dropped by less than its Monte Carlo error, which is never a failure.</p>' : "";
-  return [
-    "<h3>Requirements</h3>",
-    `<table class="requirements" id="${id}-requirements">`,
-    "<caption>Each requirement of the policy, base → head; Δ is the paired difference with its standard error.</caption>",
-    '<thead><tr><th scope="col">Requirement</th><th scope="col">Severity</th><th scope="col" class="num">Base</th><th scope="col" class="num">Head</th><th scope="col" class="num">Δ ± error</th><th scope="col" class="num">Threshold</th><th scope="col">Status</th></tr></thead>',
-    `<tbody>${body.join("")}</tbody>`,
-    "</table>",
-    noise2
-  ].join("\n");
-}
-function elementList(elements) {
-  const shown = elements.slice(0, MAX_ELEMENTS2).map((e) => `<span class="el">${esc2(e.id)}</span> <span class="line">(${esc2(e.kind)}, line ${e.line})</span>`);
-  const more = elements.length > MAX_ELEMENTS2 ? `, … ${elements.length - MAX_ELEMENTS2} more` : "";
-  return shown.join(", ") + more;
-}
-function findingItem(x) {
-  const where = x.line > 0 ? ` <span class="line">line ${x.line}${x.column ? `:${x.column}` : ""}</span>` : "";
-  const values = x.head !== void 0 && x.head !== null && !x.message.includes(formatValue(x.head)) ? ` <span class="line">(base ${esc2(formatValue(x.base))}, head ${esc2(formatValue(x.head))}${x.delta !== void 0 && x.delta !== null ? `, Δ ${esc2(`${formatDelta(x.delta)} ${formatError(x.se)}`.trim())}` : ""})</span>` : "";
-  const named = x.elements.length === 1 && x.message.includes(x.elements[0].id);
-  const els = x.elements.length && !named && !x.grouped ? `<div>${elementList(x.elements)}</div>` : "";
-  return `<li class="${x.severity}" data-rule="${esc2(x.rule)}"><span class="chip ${x.severity}">${esc2(x.severity)}</span> <span class="rule">${esc2(x.rule)}</span>${where}<div>${esc2(x.message)}${values}</div>${els}</li>`;
-}
-function weakest(f, lines) {
-  const items = weakestSequences(f).map((s) => {
-    const steps = s.ids.map((id, i) => `<li><span class="el">${esc2(id)}</span>${lines.get(id) ? ` <span class="line">line ${lines.get(id)}</span>` : ""}${s.values && s.values[i] !== void 0 ? ` — R ${esc2(formatValue(s.values[i]))}` : ""}</li>`).join("");
-    return `<div class="sequence"><p>${esc2(s.title)}</p><ol class="seq">${steps}</ol></div>`;
-  });
-  for (const c of f.head?.contingencies ?? []) {
-    const worst = c.worst[0];
-    if (worst) {
-      const what = worst.elements.map((id) => elementWithLine(id, lines)).join(" + ");
-      items.push(
-        `<div class="sequence"><p>${esc2(c.challenge === "n-1" ? "Single" : "Double")} ${esc2(c.kind)} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): <span class="el">${esc2(what)}</span> leaves R ${esc2(formatValue(worst.value))}</p></div>`
-      );
-    }
-  }
-  return items.length ? `<h3>Weakest removal sequences</h3>${items.join("")}` : "";
-}
-function structure(f) {
-  const head = f.head?.structure;
-  if (!head) return "";
-  const baseIds = new Set([...f.base?.structure.bridges ?? [], ...f.base?.structure.cutNodes ?? []].map((e) => e.id));
-  const row = (label, list2) => {
-    if (!list2.length) return `<tr><th scope="row">${esc2(label)}</th><td>none</td></tr>`;
-    const items = list2.map((e) => {
-      const isNew = f.base !== void 0 && !baseIds.has(e.id);
-      return `<span class="el">${esc2(e.id)}</span> <span class="line">line ${e.line}</span>${isNew ? ' <strong class="sev-fail">new</strong>' : ""}`;
-    });
-    return `<tr><th scope="row">${esc2(label)}</th><td>${items.join(", ")}</td></tr>`;
-  };
-  return [
-    "<h3>Structure</h3>",
-    '<table class="structure">',
-    "<caption>Single points of failure in the head design: a bridge is a link, a cut node a site, whose loss alone splits the network.</caption>",
-    "<tbody>",
-    row("Bridges", head.bridges),
-    row("Cut nodes", head.cutNodes),
-    `<tr><th scope="row">Components</th><td>${head.components}</td></tr>`,
-    "</tbody></table>"
-  ].join("\n");
-}
-var esc2, dataValue, CSS, fileTone, toneWord, MAX_ELEMENTS2;
-var init_html = __esm({
-  "src/report/html.ts"() {
-    "use strict";
-    init_chart();
-    init_labels();
-    init_escape();
-    esc2 = (s) => escapeHtml(String(s));
-    dataValue = (v) => v === null || v === void 0 ? "" : String(v);
-    CSS = `
-:root{--paper:#f6f3ec;--card:#fffdf8;--ink:#1e2a32;--muted:#5d6870;--rule:#d9d4c7;--teal:#0d4f5c;
---sea:#a9d3cb;--fail:#a4161a;--warn:#8f5200;--pass:#2d6a3e;--notice:#1d5fa3}
-*{box-sizing:border-box}
-html{background:var(--paper);color:var(--ink)}
-body{margin:0 auto;max-width:1120px;padding:24px 28px 48px;font:15px/1.5 system-ui,-apple-system,"Segoe UI",Roboto,"Noto Sans",sans-serif}
-h1,h2,h3{line-height:1.25;margin:0}
-h1{font-size:1.55rem;letter-spacing:.01em}
-h2{font-size:1.2rem;word-break:break-all}
-h3{font-size:.95rem;text-transform:uppercase;letter-spacing:.08em;color:var(--muted);margin:22px 0 8px}
-.mast{display:flex;flex-wrap:wrap;gap:18px;align-items:flex-end;justify-content:space-between;border-bottom:3px double var(--ink);padding-bottom:14px}
-.brand{font-weight:800;font-size:.8rem;letter-spacing:.32em;text-transform:uppercase;color:var(--teal)}
-.verdict{font-size:1.05rem;font-weight:700;padding:8px 16px;border:2px solid currentColor;border-radius:2px}
-.verdict.fail{color:var(--fail)}.verdict.pass{color:var(--pass)}
-dl.meta{display:grid;grid-template-columns:max-content 1fr;gap:2px 14px;margin:14px 0;font-size:.9rem}
-dl.meta dt{color:var(--muted)}dl.meta dd{margin:0}
-.caution{border-left:6px solid var(--teal);background:var(--card);padding:10px 16px;margin:18px 0;font-size:.92rem}
-.caution strong{color:var(--teal)}
-nav ol{margin:6px 0 0;padding-left:22px;columns:2;column-gap:32px}
-nav a{color:var(--ink)}
-.design{background:var(--card);border:1px solid var(--rule);border-left:8px solid var(--pass);margin:28px 0;padding:18px 22px 20px}
-.design.fail{border-left-color:var(--fail)}.design.warn{border-left-color:var(--warn)}
-.design header{display:flex;flex-wrap:wrap;gap:10px 16px;align-items:baseline}
-.chip{display:inline-block;font-size:.78rem;font-weight:700;letter-spacing:.06em;text-transform:uppercase;padding:1px 8px;border:1.5px solid currentColor}
-.chip.fail{color:var(--fail)}.chip.warn{color:var(--warn)}.chip.pass{color:var(--pass)}
-.chip.notice{color:var(--notice)}
-.facts{color:var(--muted);font-size:.9rem;margin:6px 0 0}
-.charts{display:grid;grid-template-columns:repeat(auto-fill,minmax(440px,1fr));gap:18px;margin-top:10px}
-figure{margin:0}
-figure svg{width:100%;height:auto;display:block}
-figcaption{font-size:.85rem;color:var(--muted);margin-top:4px}
-table{border-collapse:collapse;width:100%;font-size:.9rem;font-variant-numeric:tabular-nums}
-caption{text-align:left;font-size:.85rem;color:var(--muted);padding-bottom:4px}
-th,td{padding:5px 8px;border-bottom:1px solid var(--rule);text-align:left;vertical-align:top}
-th{font-weight:600;background:#efeadf}
-td.num,th.num{text-align:right;white-space:nowrap}
-.st-missed,.st-regressed{font-weight:700}
-.sev-fail{color:var(--fail)}.sev-warn{color:var(--warn)}.sev-notice{color:var(--notice)}
-.st-met{color:var(--pass)}.st-within-noise,.st-uncertain{color:var(--muted)}
-ul.findings{list-style:none;padding:0;margin:0}
-ul.findings li{padding:6px 0 6px 12px;border-left:3px solid var(--rule);margin:6px 0}
-ul.findings li.fail{border-left-color:var(--fail)}ul.findings li.warn{border-left-color:var(--warn)}
-ul.findings li.notice{border-left-color:var(--notice)}
-.rule{font-family:ui-monospace,"SFMono-Regular",Menlo,Consolas,monospace;font-size:.85em;color:var(--muted)}
-code,.el{font-family:ui-monospace,"SFMono-Regular",Menlo,Consolas,monospace;font-size:.88em}
-ol.seq{margin:4px 0 10px;padding-left:26px}
-.line{color:var(--muted);font-size:.85em}
-details{margin-top:8px;font-size:.88rem}
-summary{cursor:pointer;color:var(--teal)}
-.error{color:var(--fail);font-weight:600}
-footer{margin-top:32px;color:var(--muted);font-size:.82rem;border-top:1px solid var(--rule);padding-top:10px}
-.vh{position:absolute;width:1px;height:1px;overflow:hidden;clip:rect(0 0 0 0);white-space:nowrap}
-@media (max-width:640px){body{padding:14px}.charts{grid-template-columns:1fr}nav ol{columns:1}}
-@media print{
-html,body{background:#fff}
-body{max-width:none;padding:0;font-size:10.5pt}
-.design{border:1px solid #999;border-left-width:6px;break-inside:avoid-page;page-break-inside:avoid}
-.charts{grid-template-columns:1fr 1fr}
-nav,details{display:none}
-a{color:inherit;text-decoration:none}
-.caution{border:1px solid #999;border-left:6px solid #000}
-}
-`;
-    fileTone = (f) => fileFails(f) ? "fail" : fileWarns(f) ? "warn" : "pass";
-    toneWord = (f) => fileFails(f) ? "fail" : fileWarns(f) ? "pass, warnings" : "pass";
-    MAX_ELEMENTS2 = 8;
-  }
-});
-
-// src/report/finding-text.ts
-function findingNumbers(x, deltaWord = "Δ") {
-  const stated = x.delta !== void 0 && x.delta !== null ? formatDelta(x.delta) : x.head !== void 0 && x.head !== null ? formatValue(x.head) : void 0;
-  if (stated !== void 0 && x.message.includes(stated)) return "";
-  const parts = [];
-  if (x.base !== void 0 && x.base !== null) parts.push(`base ${formatValue(x.base)}`);
-  if (x.head !== void 0 && x.head !== null) parts.push(`head ${formatValue(x.head)}`);
-  if (x.delta !== void 0 && x.delta !== null) {
-    const err = formatError(x.se);
-    parts.push(`${deltaWord} ${formatDelta(x.delta)}${err ? ` ${err}` : ""}`);
-  }
-  return parts.length ? ` (${parts.join(", ")})` : "";
-}
-function repoPath(prefix, p) {
-  const clean = (prefix ?? "").replace(/\\/g, "/").replace(/^\.(\/|$)/, "").replace(/\/+$/, "");
-  return clean ? `${clean}/${p}` : p;
-}
-var init_finding_text = __esm({
-  "src/report/finding-text.ts"() {
-    "use strict";
-    init_labels();
-  }
-});
-
-// src/report/fingerprint.ts
-function stableHash(text2) {
-  let h = OFFSET;
-  for (const byte of new TextEncoder().encode(text2)) {
-    h ^= BigInt(byte);
-    h = h * PRIME & MASK;
-  }
-  return h.toString(16).padStart(16, "0");
-}
-var OFFSET, PRIME, MASK;
-var init_fingerprint = __esm({
-  "src/report/fingerprint.ts"() {
-    "use strict";
-    OFFSET = 0xcbf29ce484222325n;
-    PRIME = 0x100000001b3n;
-    MASK = 0xffffffffffffffffn;
-  }
-});
-
-// src/report/rank.ts
-function worstSeverity(f) {
-  let worst;
-  for (const x of f.findings) if (worst === void 0 || SEVERITY_RANK2[x.severity] < SEVERITY_RANK2[worst]) worst = x.severity;
-  return f.status === "error" ? "fail" : worst;
-}
-function countOf(f, s) {
-  let n = 0;
-  for (const x of f.findings) if (x.severity === s) n++;
-  return n;
-}
-function rankFiles(files) {
-  const rank = (f) => {
-    const w = worstSeverity(f);
-    return w === void 0 ? 3 : SEVERITY_RANK2[w];
-  };
-  return [...files].sort(
-    (a, b) => rank(a) - rank(b) || countOf(b, "fail") - countOf(a, "fail") || countOf(b, "warn") - countOf(a, "warn") || STATUS_RANK[a.status] - STATUS_RANK[b.status] || (a.path < b.path ? -1 : a.path > b.path ? 1 : 0)
-  );
-}
-function rankFindings(findings) {
-  return [...findings].sort((a, b) => SEVERITY_RANK2[a.severity] - SEVERITY_RANK2[b.severity]);
-}
-var SEVERITY_RANK2, STATUS_RANK;
-var init_rank2 = __esm({
-  "src/report/rank.ts"() {
-    "use strict";
-    SEVERITY_RANK2 = { fail: 0, warn: 1, notice: 2 };
-    STATUS_RANK = {
-      error: 0,
-      "below-threshold": 1,
-      regressed: 2,
-      removed: 3,
-      new: 4,
-      renamed: 5,
-      pass: 6
-    };
-  }
-});
-
-// src/report/markdown.ts
-function renderSummary(report, options = {}) {
-  return assemble(report, options, {
-    budget: options.budget ?? SUMMARY_BUDGET_BYTES,
-    measure: utf8Length2,
-    overviewRows: 1e3,
-    findingsFull: 200,
-    findingsCompact: 20,
-    charts: Number.MAX_SAFE_INTEGER,
-    prefix: "",
-    chartPoints: options.chartPoints ?? CHART_POINTS,
-    envelopesPerDesign: 4
-  });
-}
-function assemble(report, options, layout) {
-  const files = rankFiles(report.files);
-  const path7 = (p) => repoPath(options.pathPrefix, p);
-  const head = layout.prefix + header(report, options) + overview(files, layout.overviewRows, path7);
-  let body = "";
-  let used = layout.measure(head);
-  let charts2 = 0;
-  let omitted = 0;
-  const reserve = 2048;
-  const footerText = (note3) => footer(report, options, note3);
-  const footerSize = layout.measure(footerText(""));
-  for (const f of files) {
-    if (omitted > 0) {
-      omitted++;
-      continue;
-    }
-    let placed = false;
-    for (const detail of ["full", "compact"]) {
-      const section = fileSection(f, detail, layout, path7, detail === "full" && charts2 < layout.charts);
-      const size = layout.measure(section);
-      if (used + size + reserve + footerSize <= layout.budget) {
-        body += section;
-        used += size;
-        if (detail === "full" && charts2 < layout.charts && hasChart(f)) charts2++;
-        placed = true;
-        break;
-      }
-    }
-    if (!placed) omitted = 1;
-  }
-  const note2 = omitted > 0 ? `${ICON.notice} ${omitted} more design${omitted === 1 ? "" : "s"} (the least severe) did not fit within GitHub's size limit for this view and ${omitted === 1 ? "is" : "are"} listed only in the table above; every finding is in the JSON report and the SARIF file.
-
-` : "";
-  const text2 = head + body + footerText(note2);
-  return layout.measure(text2) <= layout.budget ? text2 : truncateTo(text2, layout);
-}
-function truncateTo(text2, layout) {
-  const tail = "\n\n… (cut to fit GitHub’s size limit; the JSON report has everything)\n";
-  let lo = 0;
-  let hi = text2.length;
-  while (lo < hi) {
-    const mid = Math.ceil((lo + hi) / 2);
-    if (layout.measure(text2.slice(0, mid) + tail) <= layout.budget) lo = mid;
-    else hi = mid - 1;
-  }
-  let cut = lo;
-  if (cut > 0 && /[\uD800-\uDBFF]/.test(text2[cut - 1] ?? "")) cut--;
-  return text2.slice(0, cut) + tail;
-}
-function header(report, options) {
-  const name = options.title ? `netbrace — ${escapeMarkdown(options.title, 120)}` : "netbrace";
-  let verdict;
-  if (report.files.length === 0) verdict = `${ICON.ok} ${name}: no design file changed — pass`;
-  else if (report.verdict === "pass") verdict = `${ICON.ok} ${name}: pass`;
-  else if (report.mode === "inform") verdict = `${ICON.warn} ${name}: would fail (inform mode, not blocking)`;
-  else verdict = `${ICON.fail} ${name}: the gate failed`;
-  const facts2 = [`${report.mode} mode`];
-  if (report.policy.source === "builtin") facts2.push("built-in default policy (no policy file)");
-  else {
-    const where = report.policy.revision ? ` at ${shortSha(report.policy.revision)}` : "";
-    facts2.push(`policy ${markdownCode(report.policy.path ?? "?")}${where}`);
-  }
-  if (report.base && report.head) facts2.push(`base ${shortSha(report.base)} → head ${shortSha(report.head)}`);
-  else if (report.head) facts2.push(`head ${shortSha(report.head)}, thresholds only (no base)`);
-  facts2.push(`seed ${report.seed}`);
-  if (report.scope === "all") facts2.push("every design, thresholds only");
-  if (report.part) facts2.push(`part ${report.part.index} of ${report.part.total}`);
-  if (report.parts) facts2.push(`joined parts ${report.parts.joined.join(", ")} of ${report.parts.total}`);
-  let text2 = `## ${verdict}
-
-${facts2.join(" · ")}
-
-`;
-  if (report.policy.changed) {
-    const said = report.policy.note ? `${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ""), 600)}.` : "The policy shown here was read from the base; the proposed policy applies once the change is merged.";
-    text2 += `> ${ICON.warn} This change modifies the policy file. ${said}
-
-`;
-  } else if (report.policy.note) {
-    text2 += `> ${ICON.notice} ${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ""), 600)}.
-
-`;
-  }
-  for (const n of options.notes ?? []) text2 += `> ${escapeMarkdown(n, 500)}
-
-`;
-  return text2;
-}
-function overview(files, maxRows, path7) {
-  if (files.length === 0) return "No design file changed between base and head, so there is nothing to judge.\n\n";
-  const counts = /* @__PURE__ */ new Map();
-  for (const f of files) counts.set(f.status, (counts.get(f.status) ?? 0) + 1);
-  const parts = [...counts.entries()].map(([s, n]) => `${n} ${STATUS_WORD[s]}`);
-  let text2 = `${files.length} design${files.length === 1 ? "" : "s"} evaluated: ${parts.join(", ")}.
-
-`;
-  text2 += "| | design | status | findings | worst finding |\n|---|---|---|---|---|\n";
-  for (const f of files.slice(0, maxRows)) {
-    const worst = rankFindings(f.findings)[0];
-    const w = worstSeverity(f);
-    const name = f.previousPath ? `${markdownCode(path7(f.previousPath), 200, true)} → ${markdownCode(path7(f.path), 200, true)}` : markdownCode(path7(f.path), 200, true);
-    const worstText = worst ? `${lineRef(worst)}${escapeMarkdown(worst.message, 160)}` : "";
-    text2 += `| ${w ? ICON[w] : ICON.ok} | ${name} | ${STATUS_WORD[f.status]} | ${findingCounts(f)} | ${worstText} |
-`;
-  }
-  if (files.length > maxRows) text2 += `
-… and ${files.length - maxRows} more designs, least severe last; see the JSON report.
-`;
-  return `${text2}
-`;
-}
-function findingCounts(f) {
-  const n = { fail: 0, warn: 0, notice: 0 };
-  for (const x of f.findings) n[x.severity]++;
-  const parts = ["fail", "warn", "notice"].filter((s) => n[s] > 0).map((s) => `${n[s]} ${SEVERITY_WORD[s]}${n[s] === 1 ? "" : "s"}`);
-  return parts.length ? parts.join(", ") : "none";
-}
-function lineRef(x) {
-  return x.line > 0 ? `line ${x.line}: ` : "";
-}
-function hasChart(f) {
-  return Boolean(f.head?.envelopes.length);
-}
-function fileSection(f, detail, layout, path7, chart) {
-  const w = worstSeverity(f);
-  const renamed = f.previousPath ? ` (renamed from ${markdownCode(path7(f.previousPath))})` : "";
-  let text2 = `### ${w ? ICON[w] : ICON.ok} ${markdownCode(path7(f.path))} — ${STATUS_WORD[f.status]}${renamed}
-
-`;
-  if (f.error) text2 += `Could not be read: line ${f.error.line}, column ${f.error.column}: ${escapeMarkdown(f.error.message, 500)}
-
-`;
-  if (f.requirements.length) text2 += requirementTable3(f.requirements);
-  const changes = describeChanges(f);
-  if (changes) text2 += `Changed: ${escapeMarkdown(changes, 1500)}
-
-`;
-  const findings = groupFindings(rankFindings(f.findings));
-  const cap = detail === "full" ? layout.findingsFull : layout.findingsCompact;
-  if (findings.length) {
-    text2 += "**Findings**, worst first:\n\n";
-    for (const x of findings.slice(0, cap)) text2 += `- ${findingLine(x)}
-`;
-    if (findings.length > cap) text2 += `- … ${findings.length - cap} more in the JSON report and the SARIF file
-`;
-    text2 += "\n";
-  }
-  if (detail === "full") {
-    if (chart) for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign)) text2 += chartSection(f, env, layout.chartPoints);
-    text2 += weakestSection(f);
-    text2 += structureSection(f);
-  }
-  return text2;
-}
-function requirementTable3(rows) {
-  let text2 = "| requirement | base | head | Δ ± error | status |\n|---|---:|---:|---:|---|\n";
-  let noise2 = false;
-  for (const r of rows) {
-    const icon = r.status === "met" ? ICON.ok : r.status === "within-noise" ? "〰️" : r.status === "uncertain" ? "❔" : ICON[r.severity];
-    if (r.status === "within-noise") noise2 = true;
-    const err = formatError(r.se);
-    const delta = r.delta === null ? "–" : `${formatRequirementDelta(r)}${err ? ` ${err}` : ""}`;
-    text2 += `| ${escapeMarkdown(r.description, 200)} | ${formatRequirementValue(r, r.base)} | ${formatRequirementValue(r, r.head)} | ${delta} | ${icon} ${REQUIREMENT_STATUS_WORD[r.status]} |
-`;
-  }
-  if (noise2) text2 += "\n〰️ *within noise*: the value dropped by less than its Monte Carlo error, which is never a failure.\n";
-  return `${text2}
-`;
-}
-function findingLine(x) {
-  const where = x.line > 0 ? ` (line ${x.line}${x.column ? `, column ${x.column}` : ""})` : "";
-  return `${ICON[x.severity]} **${RULE_WORD[x.rule] ?? escapeMarkdown(x.rule, 40)}**${where}: ${escapeMarkdown(x.message, 600)}${findingNumbers(x)}`;
-}
-function sampleIndices(length, max) {
-  if (length <= max) return Array.from({ length }, (_, i) => i);
-  const out = [];
-  for (let i = 0; i < max; i++) out.push(Math.round(i * (length - 1) / (max - 1)));
-  return [...new Set(out)];
-}
-function sparkline(values) {
-  return values.map((v) => Number.isFinite(v) ? BARS[Math.min(7, Math.max(0, Math.round(v * 7)))] : " ").join("");
-}
-function chartNumber(v) {
-  return Number.isFinite(v) ? String(Math.round(v * 1e3) / 1e3) : "0";
-}
-function chartSection(f, head, points) {
-  const base = f.base?.envelopes.find((e) => e.challenge === head.challenge && e.kind === head.kind && sameGrid(e, head));
-  const idx = sampleIndices(head.x.length, points);
-  const pick = (v) => idx.map((i) => v[i] ?? 0);
-  const [qlo, qhi] = head.band;
-  const lo = head.quantiles[String(qlo)]?.value;
-  const series = [{ name: "head median", values: pick(head.median) }];
-  if (base) series.push({ name: "base median", values: pick(base.median) });
-  if (lo) series.push({ name: `head ${Math.round(qlo * 100)} % quantile (band low)`, values: pick(lo) });
-  const hi = head.quantiles[String(qhi)]?.value;
-  if (hi) series.push({ name: `head ${Math.round(qhi * 100)} % quantile (band high)`, values: pick(hi) });
-  const xs = pick(head.x);
-  const caption = challengeLabel(head.challenge);
-  let text2 = `**Head envelope against the base** — ${caption}, R against ${xAxisLabel(head.kind, head.xUnit)}:
-
-`;
-  text2 += "```mermaid\nxychart-beta\n";
-  text2 += `  title "${mermaidSafe(caption)}"
-`;
-  text2 += `  x-axis "${mermaidSafe(xAxisLabel(head.kind, head.xUnit))}" [${xs.map((x) => `"${chartNumber(x)}"`).join(", ")}]
-`;
-  text2 += '  y-axis "R" 0 --> 1\n';
-  for (const s of series) text2 += `  line [${s.values.map(chartNumber).join(", ")}]
-`;
-  text2 += "```\n\n";
-  const end = head.x[head.x.length - 1] ?? 0;
-  const range = head.xUnit === "km" ? `0 to ${chartNumber(end)} km` : `0 to ${Math.round(end * 100)} % ${kindPlural(head.kind)} removed`;
-  text2 += `| line (in drawing order) | R over ${range} | start | end |
-|---|---|---:|---:|
-`;
-  for (const s of series) {
-    text2 += `| ${s.name} | ${sparkline(s.values)} | ${formatValue(s.values[0])} | ${formatValue(s.values[s.values.length - 1])} |
-`;
-  }
-  const areas = `area ${formatValue(head.area)}${base ? ` (base ${formatValue(base.area)})` : ""}, spread ${formatValue(head.spread)}${base ? ` (base ${formatValue(base.spread)})` : ""}`;
-  return `${text2}
-${head.realizations} realizations, seed ${head.seed}; ${areas}.
-
-`;
-}
-function sameGrid(a, b) {
-  return a.x.length === b.x.length && a.x.every((v, i) => Math.abs(v - (b.x[i] ?? NaN)) < 1e-12);
-}
-function mermaidSafe(text2) {
-  return text2.replace(/["\n\r\\`<>]/g, " ");
-}
-function elementChain(ids, lines, max = 12) {
-  const shown = ids.slice(0, max).map((id) => {
-    const line = lines.get(id);
-    return `${markdownCode(id, 120)}${line ? ` (line ${line})` : ""}`;
-  });
-  return shown.join(" → ") + (ids.length > max ? ` → … (${ids.length - max} more)` : "");
-}
-function elementList2(ids, lines, max = 20) {
-  const shown = ids.slice(0, max).map((id) => {
-    const line = lines.get(id);
-    return `${markdownCode(id, 120)}${line ? ` (line ${line})` : ""}`;
-  });
-  return shown.join(", ") + (ids.length > max ? `, … (${ids.length - max} more)` : "");
-}
-function knownLines(f) {
-  const lines = /* @__PURE__ */ new Map();
-  for (const x of f.findings) for (const e of x.elements) if (e.line > 0 && !lines.has(e.id)) lines.set(e.id, e.line);
-  for (const side of [f.head, f.base]) {
-    if (!side) continue;
-    for (const e of [...side.structure.bridges, ...side.structure.cutNodes]) if (e.line > 0 && !lines.has(e.id)) lines.set(e.id, e.line);
-  }
-  return lines;
-}
-function weakestSection(f) {
-  const head = f.head;
-  if (!head) return "";
-  const lines = knownLines(f);
-  const items = [];
-  for (const seq of weakestSequences(f).slice(0, 6)) {
-    const r = seq.values && seq.values.length ? `; R ${formatValue(seq.values[0])} → ${formatValue(seq.values[seq.values.length - 1])}` : "";
-    items.push(`- ${escapeMarkdown(seq.title, 300)}: ${elementChain(seq.ids, lines)}${r}`);
-  }
-  for (const c of head.contingencies) {
-    const worst = c.worst[0];
-    if (worst) {
-      items.push(`- ${challengeLabel(c.challenge)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList2(worst.elements, lines)}, leaves R ${formatValue(worst.value)}`);
-    }
-  }
-  if (!items.length) return "";
-  return `**Weakest removal sequences at head**:
-
-${items.join("\n")}
-
-`;
-}
-function structureSection(f) {
-  const h = f.head?.structure;
-  if (!h) return "";
-  const b = f.base?.structure;
-  const lines = knownLines(f);
-  const list2 = (els) => els.length ? elementList2(els.map((e) => e.id), lines) : "none";
-  const rows = [
-    `| sites | ${b ? b.nodes : "–"} | ${h.nodes} |`,
-    `| links | ${b ? b.links : "–"} | ${h.links} |`,
-    `| components | ${b ? b.components : "–"} | ${h.components} |`,
-    `| bridges | ${b ? b.bridges.length : "–"} | ${h.bridges.length} |`,
-    `| cut sites | ${b ? b.cutNodes.length : "–"} | ${h.cutNodes.length} |`
-  ];
-  let text2 = `<details><summary>Structure of ${escapeHtml(oneLine(f.path, 300))}</summary>
-
-| | base | head |
-|---|---:|---:|
-${rows.join("\n")}
-
-`;
-  text2 += `Bridges at head: ${list2(h.bridges)}
-
-Cut sites at head: ${list2(h.cutNodes)}
-
-`;
-  const degraded = f.head?.degraded ?? [];
-  if (degraded.length) text2 += `Reduced evaluation: ${degraded.map((d) => escapeMarkdown(d, 200)).join("; ")}
-
-`;
-  return `${text2}</details>
-
-`;
-}
-function footer(report, options, note2) {
-  let text2 = note2;
-  const artifacts = options.artifacts ?? [];
-  if (artifacts.length || options.runUrl) {
-    const list2 = artifacts.map((a) => markdownCode(a, 200)).join(", ");
-    const run3 = options.runUrl && /^https?:\/\/[^\s<>()]+$/.test(options.runUrl) ? `[the workflow run](${options.runUrl})` : "the workflow run";
-    text2 += `Full detail${list2 ? ` (${list2})` : ""} is in the artifacts of ${run3}.
-
-`;
-  }
-  text2 += `<sub>${escapeMarkdown(report.caution, 1e3)} netbrace ${escapeMarkdown(report.tool.version, 40)}.</sub>
-`;
-  return text2;
-}
-function shortSha(sha) {
-  return markdownCode(/^[0-9a-f]{40}$/i.test(sha) ? sha.slice(0, 7) : sha, 60);
-}
-function utf8Length2(s) {
-  let n = 0;
-  for (let i = 0; i < s.length; i++) {
-    const c = s.charCodeAt(i);
-    if (c < 128) n += 1;
-    else if (c < 2048) n += 2;
-    else if (c >= 55296 && c <= 56319) {
-      n += 4;
-      i++;
-    } else n += 3;
-  }
-  return n;
-}
-var SUMMARY_BUDGET_BYTES, CHART_POINTS, ICON, SEVERITY_WORD, RULE_WORD, BARS;
-var init_markdown = __esm({
-  "src/report/markdown.ts"() {
-    "use strict";
-    init_escape();
-    init_finding_text();
-    init_fingerprint();
-    init_labels();
-    init_rank2();
-    SUMMARY_BUDGET_BYTES = 900 * 1024;
-    CHART_POINTS = 21;
-    ICON = { fail: "❌", warn: "⚠️", notice: "ℹ️", ok: "✅" };
-    SEVERITY_WORD = { fail: "failure", warn: "warning", notice: "notice" };
-    RULE_WORD = {
-      "r-threshold": "r-threshold",
-      "area-floor": "area floor",
-      "spread-ceiling": "spread ceiling",
-      "n-1": "N−1 rule",
-      "new-bridge": "new bridge",
-      "new-cut-node": "new cut node",
-      regression: "regression",
-      "weakest-sequence": "weakest sequence",
-      "parse-error": "unreadable design",
-      "removed-design": "removed design",
-      "policy-changed": "policy changed",
-      degraded: "reduced evaluation"
-    };
-    BARS = "▁▂▃▄▅▆▇█";
-  }
-});
-
-// src/report/sarif.ts
-function findingFingerprint(path7, x) {
-  return stableHash([x.rule, path7, x.requirement ?? "", ...x.elements.map((e) => `${e.kind}:${e.id}`)].join("\0"));
-}
-function instanceOf(report) {
-  return (report.head ?? "worktree").replace(/[^A-Za-z0-9._-]/g, "-") || "worktree";
-}
-function uriOf(path7) {
-  return path7.split("/").map(encodeURIComponent).join("/");
-}
-function nonEmpty(text2, fallback) {
-  const t = oneLine(text2).trim();
-  return t.length ? t : fallback;
-}
-function renderSarif(report, options = {}) {
-  const category = (options.category ?? "netbrace").replace(/[^A-Za-z0-9._-]/g, "-") || "netbrace";
-  const rules = RULE_IDS.map((id) => {
-    const r = RULES[id];
-    return {
-      id,
-      name: r.name,
-      shortDescription: { text: r.short },
-      fullDescription: { text: r.full },
-      help: { text: r.help, markdown: `**${r.short}.** ${r.full}
-
-${r.help}` },
-      defaultConfiguration: { level: id === "weakest-sequence" || id === "removed-design" || id === "policy-changed" ? "note" : id === "degraded" ? "warning" : "error" },
-      properties: { tags: ["robustness", "network-design"] }
-    };
-  });
-  const results = [];
-  const seen = /* @__PURE__ */ new Map();
-  let total = 0;
-  for (const f of rankFiles(report.files)) {
-    const path7 = repoPath(options.pathPrefix, f.path);
-    const findings = rankFindings(f.findings);
-    if (f.status === "error" && f.error && !findings.some((x) => x.rule === "parse-error")) {
-      findings.unshift({ rule: "parse-error", severity: "fail", message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
-    }
-    for (const x of findings) {
-      total++;
-      if (results.length >= SARIF_MAX_RESULTS) continue;
-      const base = findingFingerprint(path7, x);
-      const occurrence = (seen.get(base) ?? 0) + 1;
-      seen.set(base, occurrence);
-      const region = { startLine: Math.max(1, Math.floor(x.line || 1)) };
-      if (x.column && x.column > 0) region.startColumn = Math.floor(x.column);
-      const properties = { fileStatus: f.status };
-      if (x.requirement) properties.requirement = x.requirement;
-      for (const k of ["base", "head", "delta", "se"]) if (typeof x[k] === "number") properties[k] = x[k];
-      if (x.elements.length) properties.elements = x.elements.map((e) => ({ id: e.id, kind: e.kind, line: e.line }));
-      results.push({
-        ruleId: x.rule,
-        ruleIndex: RULE_IDS.indexOf(x.rule),
-        level: LEVEL[x.severity],
-        message: { text: nonEmpty(`${x.message}${findingNumbers(x, "delta")}`, RULES[x.rule].short) },
-        locations: [{ physicalLocation: { artifactLocation: { uri: uriOf(path7) }, region } }],
-        // Our id is a hash of rule, path, requirement and elements, not of the line's text, so
-        // it goes under the standard `fingerprints` with a key of our own; code scanning fills
-        // partialFingerprints.primaryLocationLineHash (a hash of the line) itself.
-        fingerprints: { [FINGERPRINT_KEY]: `${base}:${occurrence}` },
-        properties
-      });
-    }
-  }
-  const runProperties = { verdict: report.verdict, mode: report.mode, seed: report.seed };
-  if (total > results.length) runProperties.resultsOmitted = total - results.length;
-  return {
-    $schema: SARIF_SCHEMA_URI,
-    version: "2.1.0",
-    runs: [
-      {
-        tool: {
-          driver: {
-            name: "netbrace",
-            version: report.tool.version,
-            semanticVersion: report.tool.version,
-            rules
-          }
-        },
-        // "category/instance" (SARIF 2.1.0 §3.17.4; code scanning reads the category as
-        // everything before the last slash): the instance is the head revision judged.
-        automationDetails: { id: `${category}/${instanceOf(report)}` },
-        results,
-        properties: runProperties
-      }
-    ]
-  };
-}
-var SARIF_SCHEMA_URI, SARIF_MAX_RESULTS, RULES, LEVEL, RULE_IDS, FINGERPRINT_KEY;
-var init_sarif = __esm({
-  "src/report/sarif.ts"() {
-    "use strict";
-    init_escape();
-    init_fingerprint();
-    init_finding_text();
-    init_rank2();
-    SARIF_SCHEMA_URI = "https://json.schemastore.org/sarif-2.1.0.json";
-    SARIF_MAX_RESULTS = 25e3;
-    RULES = {
-      "r-threshold": {
-        name: "RThreshold",
-        short: "An r-threshold of the policy is missed",
-        full: "At the stated removal fraction, the stated statistic of the robustness envelope (a quantile, the median, the minimum or the worst case) of R is below the threshold the policy requires.",
-        help: "The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by scopes but never loosened below a floor it inherits."
-      },
-      "area-floor": {
-        name: "AreaFloor",
-        short: "The envelope area is below its floor",
-        full: "The area of the robustness envelope (the mean over the removal grid of the median R) is below the floor the policy requires.",
-        help: "The design loses robustness too quickly over the whole range of removals. The weakest removal sequences show where; adding links between otherwise distant parts of the network usually raises the area most."
-      },
-      "spread-ceiling": {
-        name: "SpreadCeiling",
-        short: "The envelope spread is above its ceiling",
-        full: "The spread of the robustness envelope (the mean width of the band between its quantiles) is above the ceiling the policy allows: the outcome of a failure depends too much on which elements fail.",
-        help: "A wide band means a few elements matter far more than the rest. Look at the weakest removal sequences and give those elements alternatives."
-      },
-      "n-1": {
-        name: "NMinusOne",
-        short: "The loss of one element drops R below the N−1 floor",
-        full: "Removing the named single element (site or link) drops R below the value the N−1 rule of the policy requires.",
-        help: "The named element is critical on its own. Give the traffic it carries an alternative (a parallel link or a second path through other sites), or mark it as hardened in the design if it is engineered not to fail."
-      },
-      "new-bridge": {
-        name: "NewBridge",
-        short: "The change adds a bridge (a link whose loss splits the network)",
-        full: "At head, the named link is a bridge: removing it disconnects the network. It was not a bridge at the base, so the change adds a single point of failure.",
-        help: "Restore the redundancy that the change removed (for example the chord that made a ring), or add another link between the two sides the bridge separates."
-      },
-      "new-cut-node": {
-        name: "NewCutNode",
-        short: "The change adds a cut site (a site whose loss splits the network)",
-        full: "At head, the named site is a cut node: removing it disconnects the network. It was not one at the base, so the change adds a single point of failure.",
-        help: "Connect the part that hangs off this site to the rest of the network by a second path that avoids it."
-      },
-      regression: {
-        name: "Regression",
-        short: "A requirement’s value dropped from base to head beyond tolerance",
-        full: "The paired difference head − base of a requirement’s value is a drop larger than the tolerance in the policy and larger than its Monte Carlo error.",
-        help: "The change makes the design measurably weaker than the base. The report gives base, head, the delta and its standard error; drops within the Monte Carlo error are never reported as failures."
-      },
-      "weakest-sequence": {
-        name: "WeakestSequence",
-        short: "The weakest removal sequence found",
-        full: "The order of element removals that lowered R the most among the evaluated realizations or the worst-case search. Informational.",
-        help: "These elements, in this order, are where the design is weakest under the challenge. They are the first place to add redundancy."
-      },
-      "parse-error": {
-        name: "ParseError",
-        short: "The design file could not be read",
-        full: "The design file at head has a syntax or consistency error (for example a link naming an unknown site), so it could not be evaluated. This fails the gate.",
-        help: "Fix the file at the line and column given. The other design files were still evaluated."
-      },
-      "removed-design": {
-        name: "RemovedDesign",
-        short: "A design file was removed",
-        full: "A design file that exists at the base is deleted at head. It is reported, and fails the gate only if the policy says so.",
-        help: "Make sure removing the design is intended; the policy decides whether a removal needs a review."
-      },
-      "policy-changed": {
-        name: "PolicyChanged",
-        short: "The change modifies the policy file",
-        full: "The policy file differs between base and head. The gate applied the base policy, so a change cannot loosen the rules that judge it; the proposed policy applies after the merge.",
-        help: "Have the policy change reviewed on its own merits by the owners of the policy."
-      },
-      degraded: {
-        name: "Degraded",
-        short: "The evaluation was reduced to fit its budget",
-        full: "The evaluation of this design was reduced (fewer realizations, sampled sources, a shorter worst-case search) to stay within the configured budgets, so its results carry more uncertainty.",
-        help: "Raise the budgets in the policy, or run netbrace with more threads, for a full evaluation."
-      }
-    };
-    LEVEL = { fail: "error", warn: "warning", notice: "note" };
-    RULE_IDS = Object.keys(RULES);
-    FINGERPRINT_KEY = "netbraceFinding/v1";
   }
 });
 
@@ -28172,15 +28524,135 @@ var init_budget2 = __esm({
   }
 });
 
+// src/graph/consequence.ts
+function removalCost(g, mask, intact = findComponents(g, createMask(g))) {
+  const before = intact;
+  const after = findComponents(g, mask);
+  const stranded = [];
+  if (after.largest >= 0) {
+    let home = -1;
+    for (let v = 0; v < g.n && home < 0; v++) if (after.label[v] === after.largest) home = before.label[v];
+    for (let v = 0; v < g.n; v++) {
+      if (mask.node[v] || after.label[v] === after.largest) continue;
+      if (before.label[v] === home) stranded.push(v);
+    }
+  }
+  const demandsLost = [];
+  let volumeLost = 0;
+  let volumeTotal = 0;
+  for (let d = 0; d < g.demandSource.length; d++) {
+    const s = g.demandSource[d];
+    const t = g.demandTarget[d];
+    volumeTotal += g.demandVolume[d];
+    if (s < 0 || t < 0 || before.label[s] !== before.label[t]) continue;
+    const served = !mask.node[s] && !mask.node[t] && after.label[s] === after.label[t];
+    if (!served) {
+      demandsLost.push(d);
+      volumeLost += g.demandVolume[d];
+    }
+  }
+  return { stranded, demandsLost, volumeLost, volumeTotal };
+}
+var init_consequence = __esm({
+  "src/graph/consequence.ts"() {
+    "use strict";
+    init_mask();
+    init_structure();
+  }
+});
+
+// src/gate/consequence.ts
+function consequenceOf(g, mask, intact) {
+  const cost = removalCost(g, mask, intact);
+  const out = {
+    stranded: cost.stranded.slice(0, MAX_STRANDED).map((v) => reportElement(g, "node", v)),
+    strandedCount: cost.stranded.length
+  };
+  if (g.demandSource.length > 0) {
+    out.demandsLost = cost.demandsLost.length;
+    out.demandsTotal = g.demandSource.length;
+    out.volumeLost = cost.volumeLost;
+    out.volumeTotal = cost.volumeTotal;
+  }
+  return out;
+}
+function costOf(g, remove, intact) {
+  const mask = createMask(g);
+  remove(mask);
+  return consequenceOf(g, mask, intact);
+}
+function sequenceMask(g, seq) {
+  const mask = createMask(g);
+  for (const id2 of seq.elements) {
+    const i = indexOfElement(g, seq.kind, id2);
+    if (i >= 0) removeUnit(g, mask, seq.kind, i);
+  }
+  return mask;
+}
+function detailed(g, seq, intact) {
+  return {
+    ...seq,
+    located: seq.elements.map((id2) => locateElement({ id: id2, kind: seq.kind }, g)),
+    consequence: consequenceOf(g, sequenceMask(g, seq), intact)
+  };
+}
+function withSequenceDetails(ev, g) {
+  const intact = findComponents(g);
+  const envelopes = ev.envelopes.map((env) => {
+    const out = { ...env, weakest: env.weakest.map((s) => detailed(g, s, intact)) };
+    if (env.worstCase) out.worstCase = detailed(g, env.worstCase, intact);
+    return out;
+  });
+  const attacks = ev.attacks.map((a) => a.worstCase ? { ...a, worstCase: detailed(g, a.worstCase, intact) } : a);
+  const contingencies = ev.contingencies.map((c) => ({
+    ...c,
+    worst: c.worst.map((w) => ({ ...w, located: w.elements.map((id2) => locateElement({ id: id2, kind: c.kind }, g)) }))
+  }));
+  return { ...ev, envelopes, attacks, contingencies };
+}
+var MAX_STRANDED, MAX_COSTED;
+var init_consequence2 = __esm({
+  "src/gate/consequence.ts"() {
+    "use strict";
+    init_units();
+    init_consequence();
+    init_element();
+    init_mask();
+    init_structure();
+    MAX_STRANDED = 20;
+    MAX_COSTED = 500;
+  }
+});
+
 // src/gate/describe.ts
-function formatR(x) {
-  const s = x.toFixed(3);
+function formatR(x, decimals = 3) {
+  if (!Number.isFinite(x)) return String(x);
+  const s = x.toFixed(decimals);
   if (/^-0\.0+$/.test(s)) return s.slice(1);
   return s.replace(/^-/, "−");
 }
-function formatDelta2(delta, se) {
-  const sign2 = delta > 0 && formatR(delta) !== "0.000" ? "+" : "";
-  return `${sign2}${formatR(delta)}${se !== null && se > 0 ? ` ± ${se.toFixed(3)}` : ""}`;
+function decidingDecimals(a, b, min = 3) {
+  if (!Number.isFinite(a) || !Number.isFinite(b) || a === b) return min;
+  for (let d = min; d <= MAX_DECIMALS; d++) if (formatR(a, d) !== formatR(b, d)) return d;
+  return MAX_DECIMALS;
+}
+function changeDecimals(base, head, higherIsBetter, limit) {
+  const drop = higherIsBetter ? base - head : head - base;
+  if (![base, head, limit].every(Number.isFinite)) return 3;
+  const beyond = drop > limit;
+  for (let d = decidingDecimals(drop, limit); d <= MAX_DECIMALS; d++) {
+    const b = Number(base.toFixed(d));
+    const h = Number(head.toFixed(d));
+    const shown2 = Number((higherIsBetter ? b - h : h - b).toFixed(d));
+    const shownLimit = Number(limit.toFixed(d));
+    if (beyond ? shown2 > shownLimit : shown2 <= shownLimit) return d;
+  }
+  return MAX_DECIMALS;
+}
+function formatDelta2(delta, se, decimals = 3) {
+  const sign2 = delta > 0 && formatR(delta, decimals) !== formatR(0, decimals) ? "+" : "";
+  const err = se !== null && se > 0 ? ` ± ${Number.isFinite(se) ? se.toFixed(decimals) : "unknown"}` : "";
+  return `${sign2}${formatR(delta, decimals)}${err}`;
 }
 function percent(x) {
   return `${Number((x * 100).toFixed(6))} %`;
@@ -28202,45 +28674,479 @@ function describeRequirement(r, challenges2) {
       const on = challengeWords(c, r.challenge);
       const s = r.statistic;
       if (s.kind === "worst-case") return `R after the worst ${s.removals} removals found, ${on} ≥ ${r.min}`;
-      const stat = s.kind === "quantile" ? `${percent(s.q)} quantile of R` : s.kind === "value" ? "R" : `${s.kind} of R`;
-      return `${stat} at ${xWords(c, r.at ?? 0)}, ${on} ≥ ${r.min}`;
+      const stat2 = s.kind === "quantile" ? `${percent(s.q)} quantile of R` : s.kind === "value" ? "R" : `${s.kind} of R`;
+      return `${stat2} at ${xWords(c, r.at ?? 0)}, ${on} ≥ ${r.min}`;
     }
     case "area-floor":
       return `area of ${challengeWords(c, r.challenge)}${r.min === void 0 ? " (tracked)" : ` ≥ ${r.min}`}`;
     case "spread-ceiling":
       return `spread of ${challengeWords(c, r.challenge)} ≤ ${r.max}`;
     case "n-1":
-      return `R after any single ${r.element} removal ≥ ${r.min}`;
+      return `N−1 (${r.element}s): R after any single ${r.element} removal ≥ ${r.min}`;
     case "no-new-spof": {
-      const what = [r.bridges ? "bridges" : "", r.cutNodes ? "cut nodes" : ""].filter(Boolean).join(" or ");
+      const parts = [r.bridges ? "bridges" : "", r.cutNodes ? "cut nodes" : "", r.riskGroups ? "shared-risk groups that strand sites" : ""].filter(Boolean);
+      const what = parts.length > 1 ? `${parts.slice(0, -1).join(", ")} or ${parts[parts.length - 1]}` : parts[0];
       return `no new ${what}`;
     }
   }
 }
-var WHAT;
+function elementChanges(base, head, m) {
+  const unmatched = (g, toOther) => {
+    const out = [];
+    for (let v = 0; v < g.n; v++) if (toOther.node[v] < 0) out.push(reportElement(g, "node", v));
+    for (let e = 0; e < g.m; e++) if (toOther.link[e] < 0) out.push(reportElement(g, "link", e));
+    for (let k = 0; k < g.groupIds.length; k++) if (toOther.group[k] < 0) out.push(reportElement(g, "group", k));
+    return out.sort((a, b) => a.line - b.line);
+  };
+  const changes = {
+    added: unmatched(head, { node: m.nodeToBase, link: m.linkToBase, group: m.groupToBase }),
+    removed: unmatched(base, { node: m.nodeToHead, link: m.linkToHead, group: m.groupToHead })
+  };
+  const renamed = [
+    ...m.renamedNodes.map(([b, h]) => ({ from: reportElement(base, "node", b), to: reportElement(head, "node", h) })),
+    ...m.renamedGroups.map(([b, h]) => ({ from: reportElement(base, "group", b), to: reportElement(head, "group", h) }))
+  ];
+  if (renamed.length) changes.renamed = renamed;
+  const hardened = hardenedChanges(base, head, m);
+  if (hardened.length) changes.hardened = hardened;
+  return changes;
+}
+function hardenedChanges(base, head, m) {
+  const out = [];
+  for (let v = 0; v < head.n; v++) {
+    const b = m.nodeToBase[v];
+    if (b >= 0 && base.nodeHardened[b] !== head.nodeHardened[v]) out.push({ ...reportElement(head, "node", v), hardened: head.nodeHardened[v] === 1 });
+  }
+  for (let e = 0; e < head.m; e++) {
+    const b = m.linkToBase[e];
+    if (b >= 0 && base.linkHardened[b] !== head.linkHardened[e]) out.push({ ...reportElement(head, "link", e), hardened: head.linkHardened[e] === 1 });
+  }
+  return out.sort((a, b) => a.kind === b.kind ? a.line - b.line : a.kind === "node" ? -1 : 1);
+}
+function spofRowParts(r) {
+  const parts = [];
+  if (r.bridges) parts.push({ kind: "bridges", words: "no new bridges" });
+  if (r.cutNodes) parts.push({ kind: "cut-nodes", words: "no new cut nodes" });
+  if (r.riskGroups) parts.push({ kind: "risk-groups", words: "no new shared-risk groups that strand sites" });
+  return parts.map((p) => ({ id: parts.length > 1 ? `${r.id}/${p.kind}` : r.id, description: p.words, kind: p.kind }));
+}
+function num2(v, unit) {
+  return v === void 0 ? NONE : `${v} ${unit}`.trim();
+}
+function yesNo(v) {
+  return v ? "yes" : "no";
+}
+function place(v) {
+  return v.lat === void 0 || v.lon === void 0 ? NONE : `${v.lat}, ${v.lon}`;
+}
+function groupsOf(l) {
+  return l.riskGroups.length ? [...new Set(l.riskGroups)].sort().join(", ") : "none";
+}
+function designChanges(base, head) {
+  const added = [];
+  const removed = [];
+  const modified = [];
+  const baseNodes = new Map(base.nodes.map((v) => [v.id, v]));
+  const headNodes = new Map(head.nodes.map((v) => [v.id, v]));
+  const baseLinks = new Map(base.links.map((l) => [l.key, l]));
+  const headLinks = new Map(head.links.map((l) => [l.key, l]));
+  for (const v of head.nodes) if (!baseNodes.has(v.id)) added.push({ id: v.id, kind: "node", line: v.pos.line });
+  for (const l of head.links) if (!baseLinks.has(l.key)) added.push({ id: l.id, kind: "link", line: l.pos.line });
+  for (const v of base.nodes) if (!headNodes.has(v.id)) removed.push({ id: v.id, kind: "node", line: v.pos.line });
+  for (const l of base.links) if (!headLinks.has(l.key)) removed.push({ id: l.id, kind: "link", line: l.pos.line });
+  const baseGroups = new Set(base.riskGroups.map((x) => x.id));
+  const headGroups = new Set(head.riskGroups.map((x) => x.id));
+  for (const x of head.riskGroups) if (!baseGroups.has(x.id)) added.push({ id: x.id, kind: "group", line: x.pos.line });
+  for (const x of base.riskGroups) if (!headGroups.has(x.id)) removed.push({ id: x.id, kind: "group", line: x.pos.line });
+  for (const h of head.nodes) {
+    const b = baseNodes.get(h.id);
+    if (!b) continue;
+    for (const a of NODE_ATTRIBUTES) {
+      const before = a.value(b);
+      const after = a.value(h);
+      if (before !== after) modified.push({ id: h.id, kind: "node", attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
+    }
+  }
+  for (const h of head.links) {
+    const b = baseLinks.get(h.key);
+    if (!b) continue;
+    for (const a of LINK_ATTRIBUTES) {
+      const before = a.value(b);
+      const after = a.value(h);
+      if (before !== after) modified.push({ id: h.id, kind: "link", attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
+    }
+  }
+  if (added.length + removed.length + modified.length === 0) return void 0;
+  return modified.length ? { added, removed, modified } : { added, removed };
+}
+var WHAT, MAX_DECIMALS, NONE, NODE_ATTRIBUTES, LINK_ATTRIBUTES;
 var init_describe = __esm({
   "src/gate/describe.ts"() {
     "use strict";
+    init_element();
     WHAT = { nodes: "nodes", links: "links", "risk-groups": "risk groups", region: "region" };
+    MAX_DECIMALS = 12;
+    NONE = "–";
+    NODE_ATTRIBUTES = [
+      { attribute: "label", value: (v) => v.label ?? NONE },
+      { attribute: "kind", value: (v) => v.kind ?? NONE },
+      { attribute: "coordinates", value: place },
+      { attribute: "hardened", value: (v) => yesNo(v.hardened) }
+    ];
+    LINK_ATTRIBUTES = [
+      { attribute: "risk groups", value: groupsOf },
+      { attribute: "hardened", value: (l) => yesNo(l.hardened) },
+      { attribute: "length", value: (l) => num2(l.length, "km") },
+      { attribute: "latency", value: (l) => num2(l.latency, "ms") },
+      { attribute: "capacity", value: (l) => num2(l.capacity, "Gbit/s") },
+      { attribute: "weight", value: (l) => num2(l.weight, "") }
+    ];
+  }
+});
+
+// src/gate/rename.ts
+function identityMatching(g) {
+  const id2 = (k) => Int32Array.from({ length: k }, (_, i) => i);
+  return {
+    nodeToHead: id2(g.n),
+    nodeToBase: id2(g.n),
+    linkToHead: id2(g.m),
+    linkToBase: id2(g.m),
+    groupToHead: id2(g.groupIds.length),
+    groupToBase: id2(g.groupIds.length),
+    renamedNodes: [],
+    renamedGroups: []
+  };
+}
+function neighbourhood(g, v, map) {
+  const matched = [];
+  let unmatched = 0;
+  for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+    const w = map[g.neighbors[p]];
+    if (w < 0) unmatched++;
+    else matched.push(w);
+  }
+  matched.sort((a, b) => a - b);
+  return { matched, unmatched };
+}
+function headNeighbourhood(g, h, toBase) {
+  const matched = [];
+  let unmatched = 0;
+  for (let p = g.offsets[h]; p < g.offsets[h + 1]; p++) {
+    const w = g.neighbors[p];
+    if (toBase[w] < 0) unmatched++;
+    else matched.push(w);
+  }
+  matched.sort((a, b) => a - b);
+  return { matched, unmatched };
+}
+function addTo(map, key, value2) {
+  const list2 = map.get(key);
+  if (list2) list2.push(value2);
+  else map.set(key, [value2]);
+}
+function matchNodes(base, head) {
+  const toHead = new Int32Array(base.n).fill(-1);
+  const toBase = new Int32Array(head.n).fill(-1);
+  const byId2 = /* @__PURE__ */ new Set();
+  for (let b = 0; b < base.n; b++) {
+    const h = head.nodeIndex.get(base.nodeIds[b]);
+    if (h !== void 0) {
+      toHead[b] = h;
+      toBase[h] = b;
+      byId2.add(b);
+    }
+  }
+  for (; ; ) {
+    const baseBy = /* @__PURE__ */ new Map();
+    const headBy = /* @__PURE__ */ new Map();
+    for (let b = 0; b < base.n; b++) {
+      if (toHead[b] >= 0) continue;
+      const nb = neighbourhood(base, b, toHead);
+      if (nb.matched.length === 0) continue;
+      addTo(baseBy, signature(nb), b);
+    }
+    if (baseBy.size === 0) break;
+    for (let h = 0; h < head.n; h++) {
+      if (toBase[h] >= 0) continue;
+      const nb = headNeighbourhood(head, h, toBase);
+      if (nb.matched.length === 0) continue;
+      addTo(headBy, signature(nb), h);
+    }
+    let made = 0;
+    for (const [key, bs] of baseBy) {
+      const hs = headBy.get(key);
+      if (bs.length !== 1 || hs?.length !== 1) continue;
+      toHead[bs[0]] = hs[0];
+      toBase[hs[0]] = bs[0];
+      made++;
+    }
+    if (made === 0) break;
+  }
+  for (let changed = true; changed; ) {
+    changed = false;
+    for (let b = 0; b < base.n; b++) {
+      const h = toHead[b];
+      if (h < 0 || byId2.has(b)) continue;
+      const nb = neighbourhood(base, b, toHead);
+      const nh = headNeighbourhood(head, h, toBase);
+      if (nb.unmatched === 0 && nh.unmatched === 0 && signature(nb) === signature(nh)) continue;
+      toHead[b] = -1;
+      toBase[h] = -1;
+      changed = true;
+    }
+  }
+  return { toHead, toBase };
+}
+function linksByEnds(g, endOf) {
+  const out = /* @__PURE__ */ new Map();
+  for (let e = 0; e < g.m; e++) {
+    const a = endOf(g.linkSource[e]);
+    const b = endOf(g.linkTarget[e]);
+    if (a < 0 || b < 0) continue;
+    const key = a < b ? `${a}-${b}` : `${b}-${a}`;
+    const list2 = out.get(key);
+    if (list2) list2.push(e);
+    else out.set(key, [e]);
+  }
+  return out;
+}
+function groupMembers(g, k) {
+  return Array.from(g.groupLinks.subarray(g.groupOffsets[k], g.groupOffsets[k + 1]));
+}
+function matchDesigns(base, head) {
+  const nodes = matchNodes(base, head);
+  const linkToHead = new Int32Array(base.m).fill(-1);
+  const linkToBase = new Int32Array(head.m).fill(-1);
+  const headLinks = linksByEnds(head, (v) => v);
+  for (const [key, bs] of linksByEnds(base, (v) => nodes.toHead[v])) {
+    const hs = headLinks.get(key) ?? [];
+    for (let i = 0; i < Math.min(bs.length, hs.length); i++) {
+      linkToHead[bs[i]] = hs[i];
+      linkToBase[hs[i]] = bs[i];
+    }
+  }
+  const G = base.groupIds.length;
+  const H = head.groupIds.length;
+  const groupToHead = new Int32Array(G).fill(-1);
+  const groupToBase = new Int32Array(H).fill(-1);
+  const headGroup = new Map(head.groupIds.map((id2, k) => [id2, k]));
+  for (let k = 0; k < G; k++) {
+    const h = headGroup.get(base.groupIds[k]);
+    if (h !== void 0) {
+      groupToHead[k] = h;
+      groupToBase[h] = k;
+    }
+  }
+  const membersKey = (list2) => [...list2].sort((a, b) => a - b).join(",");
+  const baseBy = /* @__PURE__ */ new Map();
+  for (let k = 0; k < G; k++) {
+    if (groupToHead[k] >= 0) continue;
+    const mapped = groupMembers(base, k).map((e) => linkToHead[e]);
+    if (mapped.length === 0 || mapped.some((e) => e < 0)) continue;
+    addTo(baseBy, membersKey(mapped), k);
+  }
+  const headBy = /* @__PURE__ */ new Map();
+  for (let h = 0; h < H; h++) {
+    if (groupToBase[h] >= 0) continue;
+    const members = groupMembers(head, h);
+    if (members.length === 0) continue;
+    addTo(headBy, membersKey(members), h);
+  }
+  for (const [key, ks] of baseBy) {
+    const hs = headBy.get(key);
+    if (ks.length !== 1 || hs?.length !== 1) continue;
+    groupToHead[ks[0]] = hs[0];
+    groupToBase[hs[0]] = ks[0];
+  }
+  const renamedNodes = [];
+  for (let h = 0; h < head.n; h++) {
+    const b = nodes.toBase[h];
+    if (b >= 0 && base.nodeIds[b] !== head.nodeIds[h]) renamedNodes.push([b, h]);
+  }
+  const renamedGroups = [];
+  for (let h = 0; h < H; h++) {
+    const b = groupToBase[h];
+    if (b >= 0 && base.groupIds[b] !== head.groupIds[h]) renamedGroups.push([b, h]);
+  }
+  return {
+    nodeToHead: nodes.toHead,
+    nodeToBase: nodes.toBase,
+    linkToHead,
+    linkToBase,
+    groupToHead,
+    groupToBase,
+    renamedNodes,
+    renamedGroups
+  };
+}
+var signature;
+var init_rename = __esm({
+  "src/gate/rename.ts"() {
+    "use strict";
+    signature = (nb) => `${nb.matched.join(",")}|${nb.unmatched}`;
+  }
+});
+
+// src/gate/spof.ts
+function weakPoints(g, honourHardening) {
+  const cuts = findCutElements(g);
+  return {
+    bridges: new Set(cuts.bridges.filter((e) => !honourHardening || !g.linkHardened[e])),
+    cutNodes: new Set(cuts.cutNodes.filter((v) => !honourHardening || !g.nodeHardened[v])),
+    groups: new Set(findStrandingGroups(g, honourHardening, cuts))
+  };
+}
+function finding(rule, severity, message, el, requirement, consequence) {
+  const f = { rule, severity, message, elements: [el], line: el.line, requirement };
+  if (consequence) f.consequence = consequence;
+  return f;
+}
+function siteName(g, v) {
+  return g.nodeLabels[v] || g.nodeIds[v];
+}
+function linkWords(g, e) {
+  return `link ${formatElement(reportElement(g, "link", e))} between ${siteName(g, g.linkSource[e])} and ${siteName(g, g.linkTarget[e])}`;
+}
+function groupWords(g, k, honourHardening) {
+  const members = [];
+  for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) {
+    const e = g.groupLinks[p];
+    if (!honourHardening || !g.linkHardened[e]) members.push(formatElement(reportElement(g, "link", e)));
+  }
+  const list2 = members.length > 1 ? `${members.slice(0, -1).join(", ")} and ${members[members.length - 1]}` : members[0] ?? "no link";
+  return `shared-risk group ${formatElement(reportElement(g, "group", k))}, which carries ${list2},`;
+}
+function newlyHardened(flags, baseFlags, toBase, h) {
+  if (!flags[h]) return false;
+  const b = toBase[h];
+  return b < 0 || !baseFlags[b];
+}
+function judgeSpof(r, description, head, base, matching) {
+  const g = head.graph;
+  const now = weakPoints(g, true);
+  const before = base ? weakPoints(base.graph, true) : void 0;
+  const parts = spofRowParts(r);
+  const sizeOf = (s, kind) => kind === "bridges" ? s.bridges.size : kind === "cut-nodes" ? s.cutNodes.size : s.groups.size;
+  const rows = parts.map((part) => ({
+    id: part.id,
+    description: part.description,
+    severity: r.severity,
+    base: before ? sizeOf(before, part.kind) : null,
+    head: sizeOf(now, part.kind),
+    delta: before ? sizeOf(now, part.kind) - sizeOf(before, part.kind) : null,
+    se: before ? 0 : null,
+    threshold: null,
+    status: "met"
+  }));
+  const findings = [];
+  if (!base || !before || !matching) return { rows, findings };
+  const b = base.graph;
+  const isNew = (set, toBase, h, baseSet) => {
+    const k = toBase[h];
+    return set.has(h) && (k < 0 || !baseSet.has(k));
+  };
+  const intact = findComponents(g);
+  let costed = 0;
+  const cost = (remove) => costed++ < MAX_COSTED ? costOf(g, remove, intact) : void 0;
+  const linkCost = (e) => cost((m) => m.link[e] = 1);
+  const nodeCost = (v) => cost((m) => m.node[v] = 1);
+  const groupCost = (k, honour) => cost((m) => void groupLinkMask(g, k, honour, m));
+  if (r.bridges) {
+    for (const e of linksByLine(g, now.bridges)) {
+      if (!isNew(now.bridges, matching.linkToBase, e, before.bridges)) continue;
+      const message = `${linkWords(g, e)} is a new bridge: losing it splits the design, which the base did not`;
+      findings.push(finding("new-bridge", r.severity, message, reportElement(g, "link", e), r.id, linkCost(e)));
+    }
+  }
+  if (r.cutNodes) {
+    for (const v of nodesByLine(g, now.cutNodes)) {
+      if (!isNew(now.cutNodes, matching.nodeToBase, v, before.cutNodes)) continue;
+      const el = reportElement(g, "node", v);
+      const message = `site ${formatElement(el)} is a new cut node: losing it splits the design, which the base did not`;
+      findings.push(finding("new-cut-node", r.severity, message, el, r.id, nodeCost(v)));
+    }
+  }
+  if (r.riskGroups) {
+    for (const k of [...now.groups].sort((x, y) => x - y)) {
+      if (!isNew(now.groups, matching.groupToBase, k, before.groups)) continue;
+      const message = `${groupWords(g, k, true)} is a new single point of failure: losing it cuts sites off, which the base did not`;
+      findings.push(finding("new-stranding-group", r.severity, message, reportElement(g, "group", k), r.id, groupCost(k, true)));
+    }
+  }
+  if (r.hardenedWeakPoints !== "ignore") {
+    const severity = r.hardenedWeakPoints;
+    const raw = weakPoints(g, false);
+    const rawBefore = weakPoints(b, false);
+    const claim = "the change marks it hardened, so the gate does not count it; hardening is a claim the gate cannot check";
+    if (r.bridges) {
+      for (const e of linksByLine(g, raw.bridges)) {
+        if (now.bridges.has(e) || !isNew(raw.bridges, matching.linkToBase, e, rawBefore.bridges)) continue;
+        if (!newlyHardened(g.linkHardened, b.linkHardened, matching.linkToBase, e)) continue;
+        const message = `${linkWords(g, e)} would be a new bridge (losing it splits the design), but ${claim}`;
+        findings.push(finding("hardened-weak-point", severity, message, reportElement(g, "link", e), r.id, linkCost(e)));
+      }
+    }
+    if (r.cutNodes) {
+      for (const v of nodesByLine(g, raw.cutNodes)) {
+        if (now.cutNodes.has(v) || !isNew(raw.cutNodes, matching.nodeToBase, v, rawBefore.cutNodes)) continue;
+        if (!newlyHardened(g.nodeHardened, b.nodeHardened, matching.nodeToBase, v)) continue;
+        const el = reportElement(g, "node", v);
+        const message = `site ${formatElement(el)} would be a new cut node (losing it splits the design), but ${claim}`;
+        findings.push(finding("hardened-weak-point", severity, message, el, r.id, nodeCost(v)));
+      }
+    }
+    if (r.riskGroups) {
+      for (const k of [...raw.groups].sort((x, y) => x - y)) {
+        if (now.groups.has(k) || !isNew(raw.groups, matching.groupToBase, k, rawBefore.groups)) continue;
+        let hidden = false;
+        for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) {
+          if (newlyHardened(g.linkHardened, b.linkHardened, matching.linkToBase, g.groupLinks[p])) hidden = true;
+        }
+        if (!hidden) continue;
+        const message = `${groupWords(g, k, false)} would cut sites off if lost, but the change marks links of it hardened, so the gate does not count it; hardening is a claim the gate cannot check`;
+        findings.push(finding("hardened-weak-point", severity, message, reportElement(g, "group", k), r.id, groupCost(k, false)));
+      }
+    }
+  }
+  if (costed > MAX_COSTED) {
+    findings.push({
+      rule: "degraded",
+      severity: "notice",
+      message: `${description}: what losing them costs is given for the first ${MAX_COSTED} of ${costed} weak points only (work limit)`,
+      elements: [],
+      line: 0,
+      requirement: r.id
+    });
+  }
+  const partOf2 = (x) => x.rule === "new-bridge" ? "bridges" : x.rule === "new-cut-node" ? "cut-nodes" : x.rule === "new-stranding-group" ? "risk-groups" : x.elements[0]?.kind === "link" ? "bridges" : x.elements[0]?.kind === "node" ? "cut-nodes" : "risk-groups";
+  parts.forEach((part, i) => {
+    const mine = findings.filter((x) => x.rule !== "degraded" && partOf2(x) === part.kind);
+    const weakHere = mine.some((x) => x.rule !== "hardened-weak-point");
+    if (weakHere || mine.length > 0 && r.hardenedWeakPoints === "fail") rows[i].status = "regressed";
+    else if (mine.length > 0) rows[i].status = "uncertain";
+  });
+  for (const x of findings) {
+    const i = parts.findIndex((p) => p.kind === partOf2(x));
+    if (x.rule !== "degraded" && i >= 0 && parts.length > 1) x.requirement = parts[i].id;
+  }
+  return { rows, findings };
+}
+var init_spof = __esm({
+  "src/gate/spof.ts"() {
+    "use strict";
+    init_describe();
+    init_compact();
+    init_element();
+    init_structure();
+    init_labels();
+    init_consequence2();
   }
 });
 
 // src/gate/measure.ts
 function locate(el, head, base) {
-  for (const g of [head, base]) {
-    if (!g) continue;
-    if (el.kind === "node") {
-      const i = g.nodeIndex.get(el.id);
-      if (i !== void 0) return { id: el.id, kind: "node", line: g.nodeLine[i] };
-    } else if (el.kind === "link") {
-      const i = g.linkIndex.get(el.id);
-      if (i !== void 0) return { id: el.id, kind: "link", line: g.linkLine[i] };
-    } else {
-      const i = g.groupIds.indexOf(el.id);
-      if (i >= 0) return { id: el.id, kind: "group", line: g.groupLine[i] };
-    }
-  }
-  return { id: el.id, kind: el.kind, line: 0 };
+  return locateElement(el, head, base);
 }
 function envelopeOf(side, c) {
   return side.result.evaluation.envelopes.find((e) => e.challenge === c.engine);
@@ -28252,11 +29158,11 @@ function contingencyOf(side, element) {
   return side.result.evaluation.contingencies.find((x) => x.challenge === "n-1" && x.kind === element);
 }
 function removalsAt(g, kind, x) {
-  return stepsAt(x, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
+  return countAt(x, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
 }
-function sequenceElements(seq, count = MAX_ELEMENTS3) {
+function sequenceElements(seq, count = MAX_ELEMENTS2) {
   if (!seq) return [];
-  return seq.elements.slice(0, Math.min(count, MAX_ELEMENTS3)).map((id) => ({ id, kind: seq.kind }));
+  return seq.elements.slice(0, Math.min(count, MAX_ELEMENTS2)).map((id2) => ({ id: id2, kind: seq.kind }));
 }
 function gridIndex2(env, x) {
   return env.x.findIndex((v) => Math.abs(v - x) <= 1e-9 * Math.max(1, Math.abs(x)));
@@ -28301,17 +29207,24 @@ function reductionOf(c, head, env, base, baseEnv) {
   }
   return out;
 }
-function ownSe(head, env, stat, x) {
+function ownSe(head, env, stat2, x) {
   const samples = head.samples.get(env.challenge) ?? [];
   const zero = {
     evaluation: { ...head.evaluation, envelopes: [env], attacks: [], contingencies: [] },
     samples: /* @__PURE__ */ new Map([[env.challenge, samples.map((s) => new Float64Array(s.length))]]),
     labels: head.labels
   };
-  return pairedStatistic(zero, head, env.challenge, stat, x).se;
+  return pairedStatistic(zero, head, env.challenge, stat2, x).se;
 }
-function missing(reason, higherIsBetter = true) {
-  return { base: null, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason };
+function missing(reason, higherIsBetter = true, base = null, notApplicable = false) {
+  return { base, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason, ...notApplicable ? { notApplicable } : {} };
+}
+function didNotRun(side, c) {
+  const why = notApplicableReason(side, c);
+  return why !== void 0 ? `challenge "${c.name}" does not apply to this design: ${why}` : `challenge "${c.name}" did not run on this design`;
+}
+function notApplicableReason(side, c) {
+  return c ? side.result.evaluation.notApplicable?.find((x) => x.challenge === c.engine)?.reason : void 0;
 }
 function deterministic2(req, c, side) {
   if (req.kind === "n-1") {
@@ -28319,7 +29232,7 @@ function deterministic2(req, c, side) {
     if (!cont) return `the N−1 evaluation of ${req.element}s did not run`;
     if (cont.evaluated === 0) return `the design has no ${req.element} that can fail`;
     const worst = cont.worst[0];
-    const out = { value: cont.min, elements: worst ? worst.elements.map((id) => ({ id, kind: cont.kind })) : [] };
+    const out = { value: cont.min, elements: worst ? worst.elements.map((id2) => ({ id: id2, kind: cont.kind })) : [] };
     if (cont.evaluated < cont.total) out.incomplete = `only ${cont.evaluated} of ${cont.total} single ${req.element} losses were evaluated (work budget)`;
     return out;
   }
@@ -28336,37 +29249,41 @@ function deterministic2(req, c, side) {
     return out;
   }
   const curve = attackOf(side, c);
-  if (!curve) return `challenge "${c.name}" did not run on this design`;
+  if (!curve) return didNotRun(side, c);
   if (req.kind === "area-floor") return { value: curve.area, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }) };
   const t = req;
   const k = removalsAt(side.graph, curve.kind, t.at ?? 0);
-  if (k >= curve.values.length) return `the attack "${c.name}" ends before ${t.at}`;
-  return { value: curve.values[k], elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, k) };
+  const value2 = valueAtCount(curve.values, k);
+  if (Number.isNaN(value2)) return `the attack "${c.name}" ends before ${t.at}`;
+  return { value: value2, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, Math.ceil(k)) };
 }
 function measure(req, challenges2, head, base) {
   const c = "challenge" in req ? challenges2.find((x) => x.name === req.challenge) : void 0;
   const higherIsBetter = req.kind !== "spread-ceiling";
-  const stat = c?.random ? statisticOf(req) : void 0;
-  if (c?.random && stat) {
+  const stat2 = c?.random ? statisticOf(req) : void 0;
+  if (c?.random && stat2) {
     const env = envelopeOf(head, c);
-    if (!env) return missing(`challenge "${c.name}" did not run on this design`, higherIsBetter);
     const x = req.kind === "r-threshold" ? req.at : void 0;
+    const baseEnv = base ? envelopeOf(base, c) : void 0;
+    if (!env) {
+      const baseValue = baseEnv && base.result !== head.result && (x === void 0 || gridIndex2(baseEnv, x) >= 0) ? pairedStatistic(base.result, base.result, c.engine, stat2, x).base : null;
+      return missing(didNotRun(head, c), higherIsBetter, baseValue, notApplicableReason(head, c) !== void 0);
+    }
     const j = x === void 0 ? -1 : gridIndex2(env, x);
     if (x !== void 0 && j < 0) return missing(`${x} is not on the grid of "${c.name}"`, higherIsBetter);
-    const baseEnv = base ? envelopeOf(base, c) : void 0;
     const same2 = base !== void 0 && base.result === head.result;
-    const p = pairedStatistic(baseEnv ? base.result : head.result, head.result, c.engine, stat, x);
+    const p = pairedStatistic(baseEnv ? base.result : head.result, head.result, c.engine, stat2, x);
     const out = {
       base: baseEnv ? p.base : null,
       head: p.head,
       delta: baseEnv ? same2 ? 0 : p.delta : null,
       se: baseEnv ? same2 ? 0 : p.se : null,
       higherIsBetter,
-      elements: sequenceElements(env.weakest[0], x === void 0 ? MAX_ELEMENTS3 : removalsAt(head.graph, env.kind, x))
+      elements: sequenceElements(env.weakest[0], x === void 0 ? MAX_ELEMENTS2 : Math.ceil(removalsAt(head.graph, env.kind, x)))
     };
-    if (stat.kind === "quantile" && j >= 0) {
-      const band = env.quantiles[quantileKey(stat.q)];
-      const ci = band ? { lo: band.lo[j], hi: band.hi[j] } : quantileEstimate(sortedColumn(head.result.samples.get(c.engine) ?? [], j), stat.q);
+    if (stat2.kind === "quantile" && j >= 0) {
+      const band = env.quantiles[quantileKey(stat2.q)];
+      const ci = band ? { lo: band.lo[j], hi: band.hi[j] } : quantileEstimate(sortedColumn(head.result.samples.get(c.engine) ?? [], j), stat2.q);
       out.lo = ci.lo;
       out.hi = ci.hi;
     }
@@ -28374,15 +29291,15 @@ function measure(req, challenges2, head, base) {
     if (reduction.reduced !== void 0) {
       out.reduced = reduction.reduced;
       const h2 = realizationsOf(env, c, head.graph);
-      if (h2.ran < h2.asked) out.headSe = ownSe(head.result, env, stat, x);
+      if (h2.ran < h2.asked) out.headSe = ownSe(head.result, env, stat2, x);
     }
     if (reduction.unpaired !== void 0) out.unpaired = reduction.unpaired;
     return out;
   }
   const h = deterministic2(req, c, head);
-  if (typeof h === "string") return missing(h, higherIsBetter);
   const b = base ? deterministic2(req, c, base) : void 0;
   const bv = b !== void 0 && typeof b !== "string" ? b.value : null;
+  if (typeof h === "string") return missing(h, higherIsBetter, base !== void 0 && base.result !== head.result ? bv : null, notApplicableReason(head, c) !== void 0);
   const same = base !== void 0 && base.result === head.result;
   return {
     base: bv,
@@ -28394,7 +29311,7 @@ function measure(req, challenges2, head, base) {
     ...h.incomplete !== void 0 ? { incomplete: h.incomplete } : {}
   };
 }
-var MAX_ELEMENTS3;
+var MAX_ELEMENTS2;
 var init_measure = __esm({
   "src/gate/measure.ts"() {
     "use strict";
@@ -28404,13 +29321,14 @@ var init_measure = __esm({
     init_units();
     init_quantiles();
     init_summary();
-    MAX_ELEMENTS3 = 10;
+    init_element();
+    MAX_ELEMENTS2 = 10;
   }
 });
 
 // src/gate/compare.ts
-function formatSe(se) {
-  return Number.isFinite(se) ? se.toFixed(3) : "unknown";
+function milder(a, b) {
+  return GRAVITY[a] >= GRAVITY[b] ? a : b;
 }
 function uncertainSeverity(severity) {
   return severity === "notice" ? "notice" : "warn";
@@ -28418,7 +29336,7 @@ function uncertainSeverity(severity) {
 function elementsOf(list2, head, base) {
   return list2.map((e) => locate(e, head?.graph, base?.graph));
 }
-function finding(rule, severity, message, elements, extra = {}) {
+function finding2(rule, severity, message, elements, extra = {}) {
   const line = extra.line ?? elements.find((e) => e.line > 0)?.line ?? 0;
   return { rule, severity, message, ...extra, elements, line };
 }
@@ -28429,6 +29347,26 @@ function floorOf(r) {
   if (r.kind === "spread-ceiling") return r.max;
   if (r.kind === "no-new-spof") return null;
   return r.min ?? null;
+}
+function notFinite(m) {
+  const named = [
+    ["head value", m.head],
+    ["base value", m.base],
+    ["delta", m.delta]
+  ];
+  const bad = named.filter(([, v]) => v !== null && !Number.isFinite(v));
+  if (!bad.length) return void 0;
+  return `the ${bad.map(([n, v]) => `${n} is ${String(v)}`).join(" and the ")}, not a finite number`;
+}
+function classifyDrop(drop, allowance, noise2, reduced) {
+  if (reduced) {
+    if (drop > allowance + noise2) return "regressed";
+    if (drop <= allowance - noise2) return "within-allowance";
+    return "uncertain";
+  }
+  if (drop < noise2) return "within-noise";
+  if (drop <= allowance) return "within-allowance";
+  return "regressed";
 }
 function judge(r, input, description) {
   const head = input.head;
@@ -28448,219 +29386,166 @@ function judge(r, input, description) {
   };
   const findings = [];
   const elements = elementsOf(m.elements, head, input.base);
-  const extra = { requirement: r.id, ...numbers(m) };
+  const rule = THRESHOLD_RULE[r.kind];
+  const extra = { requirement: r.id, ...numbers(m), ...threshold !== null ? { threshold } : {} };
+  const result = () => ({ rows: [row], findings });
   if (m.missing !== void 0 || m.head === null) {
-    row.status = "uncertain";
-    findings.push(finding(THRESHOLD_RULE[r.kind], "warn", `${description}: could not be judged: ${m.missing}`, [], extra));
-    return { row, findings };
+    const why = m.missing ?? "no value";
+    if (m.base !== null) {
+      row.status = "missed";
+      findings.push(
+        finding2(rule, r.severity, `${description}: the head can no longer be judged, though the base could (${formatR(m.base)}): ${why}`, [], {
+          ...extra,
+          status: "missed"
+        })
+      );
+    } else if (m.notApplicable && threshold === null) {
+      row.status = "not-applicable";
+    } else {
+      row.status = "uncertain";
+      findings.push(finding2(rule, uncertainSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: "uncertain" }));
+    }
+    return result();
   }
-  const better = (a, b) => m.higherIsBetter ? a >= b : a <= b;
-  const thresholdRule = THRESHOLD_RULE[r.kind];
-  const margin = threshold === null ? 0 : m.higherIsBetter ? m.head - threshold : threshold - m.head;
-  if (threshold !== null && !better(m.head, threshold)) {
+  const broken = notFinite(m);
+  if (broken !== void 0) {
+    row.status = "uncertain";
+    findings.push(
+      finding2("not-computable", "fail", `${description}: ${broken}; a value that cannot be computed is never a pass`, elements, {
+        ...extra,
+        status: "not-computable"
+      })
+    );
+    return result();
+  }
+  const headValue = m.head;
+  const meets = (v, limit) => m.higherIsBetter ? v >= limit : v <= limit;
+  const limitWord = m.higherIsBetter ? "floor" : "ceiling";
+  const against = (v, limit) => formatR(v, decidingDecimals(v, limit));
+  if (threshold !== null && !meets(headValue, threshold)) {
     row.status = "missed";
     const relation = m.higherIsBetter ? "is below" : "is above";
-    findings.push(
-      finding(THRESHOLD_RULE[r.kind], r.severity, `${description}: ${formatR(m.head)} ${relation} ${threshold}`, elements, extra)
-    );
+    findings.push(finding2(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: "missed" }));
   } else if (threshold !== null && m.incomplete !== void 0) {
     row.status = "uncertain";
     findings.push(
-      finding(THRESHOLD_RULE[r.kind], "warn", `${description}: ${formatR(m.head)} meets it, but ${m.incomplete}`, elements, extra)
+      finding2(rule, uncertainSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
+        ...extra,
+        status: "uncertain"
+      })
     );
-  } else if (threshold !== null && m.lo !== void 0 && m.hi !== void 0 && !better(m.higherIsBetter ? m.lo : m.hi, threshold)) {
+  } else if (threshold !== null && m.lo !== void 0 && m.hi !== void 0 && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
     row.status = "uncertain";
     const edge = m.higherIsBetter ? m.lo : m.hi;
     const cut = m.reduced !== void 0 ? `; ${m.reduced}` : "";
+    const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
     findings.push(
-      finding(
-        thresholdRule,
+      finding2(
+        rule,
         m.reduced !== void 0 ? uncertainSeverity(r.severity) : "notice",
-        `${description}: ${formatR(m.head)} meets it, but its confidence interval reaches ${formatR(edge)}; more realizations would settle it${cut}`,
+        `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
         elements,
-        extra
+        { ...extra, status: "uncertain" }
       )
     );
   } else if (threshold !== null && m.headSe !== void 0 && r.kind === "r-threshold" && r.statistic.kind === "min") {
     row.status = "uncertain";
     findings.push(
-      finding(
-        thresholdRule,
+      finding2(
+        rule,
         uncertainSeverity(r.severity),
-        `${description}: ${formatR(m.head)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
+        `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
         elements,
-        extra
+        { ...extra, status: "uncertain" }
       )
     );
-  } else if (threshold !== null && m.headSe !== void 0 && !(margin > REDUCED_MARGIN_SE * m.headSe)) {
-    row.status = "uncertain";
-    findings.push(
-      finding(
-        thresholdRule,
-        uncertainSeverity(r.severity),
-        `${description}: ${formatR(m.head)} meets it, but ${m.reduced}, and it clears the ${m.higherIsBetter ? "floor" : "ceiling"} by ${formatR(margin)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} × ${formatSe(m.headSe)})`,
-        elements,
-        extra
-      )
-    );
+  } else if (threshold !== null && m.headSe !== void 0) {
+    const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
+    const needed = REDUCED_MARGIN_SE * m.headSe;
+    if (!(margin > needed)) {
+      row.status = "uncertain";
+      const d = decidingDecimals(margin, needed);
+      const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : "unknown";
+      findings.push(
+        finding2(
+          rule,
+          uncertainSeverity(r.severity),
+          `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} × ${se})`,
+          elements,
+          { ...extra, status: "uncertain" }
+        )
+      );
+    }
   }
+  const policyRule = input.policy.weakening;
+  const regressionSeverity = milder(policyRule.severity, r.severity);
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== void 0) {
     if (row.status === "met") row.status = "uncertain";
-    const weakening = input.policy.weakening;
     findings.push(
-      finding(
+      finding2(
         "regression",
-        uncertainSeverity(weakening.severity),
-        `${description}: from ${formatR(m.base)} to ${formatR(m.head)}, but ${m.unpaired}; the change cannot be judged`,
+        uncertainSeverity(regressionSeverity),
+        `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
-        extra
+        { ...extra, status: "uncertain" }
       )
     );
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
+    const base = m.base;
     const drop = m.higherIsBetter ? -m.delta : m.delta;
-    if (drop > SAME * Math.max(1, Math.abs(m.base))) {
-      const rule = input.policy.weakening;
-      const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(m.base));
-      const change = `from ${formatR(m.base)} to ${formatR(m.head)} (Δ ${formatDelta2(m.delta, m.se)})`;
-      const noise2 = rule.errorMultiple * m.se;
+    if (!(drop <= SAME * Math.max(1, Math.abs(base)))) {
+      const allowance = Math.max(policyRule.allowedDrop ?? 0, (policyRule.allowedRelativeDrop ?? 0) * Math.abs(base));
+      const noise2 = policyRule.errorMultiple * m.se;
+      const reduced = m.reduced !== void 0;
+      const outcome = classifyDrop(drop, allowance, noise2, reduced);
+      const digits = (limit) => changeDecimals(base, headValue, m.higherIsBetter, limit);
+      const d = outcome === "within-noise" ? digits(noise2) : reduced ? Math.max(digits(allowance), digits(outcome === "regressed" ? allowance + noise2 : allowance - noise2)) : digits(allowance);
       const verb = m.higherIsBetter ? "dropped" : "rose";
-      if (m.reduced !== void 0 && !(drop > allowance + noise2) && !(drop <= allowance - noise2)) {
+      const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (Δ ${formatDelta2(m.delta, m.se, d)})`;
+      const allowed = formatR(allowance, d);
+      const k = policyRule.errorMultiple;
+      const data = { ...extra, allowance, status: outcome };
+      if (outcome === "regressed") {
+        if (row.status !== "missed") row.status = "regressed";
+        const beyond = reduced ? ` by more than ${k} × its error; ${m.reduced}` : "";
+        findings.push(finding2("regression", regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
+      } else if (outcome === "uncertain") {
         if (row.status === "met") row.status = "uncertain";
         findings.push(
-          finding(
+          finding2(
             "regression",
-            uncertainSeverity(rule.severity),
-            `${description}: ${verb} ${change}, within ${rule.errorMultiple} × its error of the allowed ${formatR(allowance)}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            uncertainSeverity(regressionSeverity),
+            `${description}: ${change}, within ${k} × its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
-            extra
+            data
           )
         );
-      } else if (m.reduced !== void 0 && drop <= allowance - noise2) {
-        findings.push(
-          finding("regression", "notice", `${description}: ${verb} ${change}, within the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} × its error; ${m.reduced}`, elements, extra)
-        );
-      } else if (m.reduced !== void 0) {
-        if (row.status !== "missed") row.status = "regressed";
-        findings.push(
-          finding(
-            "regression",
-            rule.severity,
-            `${description}: ${verb} ${change}, more than the allowed ${formatR(allowance)} by more than ${rule.errorMultiple} × its error; ${m.reduced}`,
-            elements,
-            extra
-          )
-        );
-      } else if (drop < noise2) {
+      } else if (outcome === "within-noise") {
         if (row.status === "met") row.status = "within-noise";
         findings.push(
-          finding(
-            "regression",
-            "notice",
-            `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, less than ${rule.errorMultiple} × its Monte Carlo error: within noise, not a failure`,
-            elements,
-            extra
-          )
-        );
-      } else if (drop <= allowance) {
-        findings.push(
-          finding("regression", "notice", `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, within the allowed ${formatR(allowance)}`, elements, extra)
+          finding2("regression", "notice", `${description}: ${change}, less than ${k} × its Monte Carlo error (${formatR(noise2, d)}): within noise, not a failure`, elements, data)
         );
       } else {
-        if (row.status !== "missed") row.status = "regressed";
-        findings.push(
-          finding(
-            "regression",
-            rule.severity,
-            `${description}: ${m.higherIsBetter ? "dropped" : "rose"} ${change}, more than the allowed ${formatR(allowance)}`,
-            elements,
-            extra
-          )
-        );
+        const margin = reduced ? ` by more than ${k} × its error; ${m.reduced}` : "";
+        findings.push(finding2("regression", "notice", `${description}: ${change}, within the allowed ${allowed}${margin}`, elements, data));
       }
     }
   }
   const reducedWork = m.reduced ?? m.incomplete;
   if (reducedWork !== void 0 && !findings.some((f) => f.message.includes(reducedWork))) {
-    findings.push(finding(thresholdRule, "notice", `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, line: 0 }));
+    findings.push(finding2(rule, "notice", `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, status: "reduced-work", line: 0 }));
   }
-  return { row, findings };
+  return result();
 }
-function spofs(side) {
-  const g = side.graph;
-  const cuts = findCutElements(g);
-  const bridges2 = /* @__PURE__ */ new Map();
-  for (const e of cuts.bridges) if (!g.linkHardened[e]) bridges2.set(g.linkKeys[e], e);
-  const cutNodes2 = /* @__PURE__ */ new Map();
-  for (const v of cuts.cutNodes) if (!g.nodeHardened[v]) cutNodes2.set(g.nodeIds[v], v);
-  return { bridges: bridges2, cutNodes: cutNodes2 };
-}
-function judgeSpof(r, input, description) {
-  const g = input.head.graph;
-  const head = spofs(input.head);
-  const comparing = !input.thresholdsOnly && input.base !== void 0;
-  const base = comparing ? spofs(input.base) : void 0;
-  const count = (s) => (r.bridges ? s.bridges.size : 0) + (r.cutNodes ? s.cutNodes.size : 0);
-  const row = {
-    id: r.id,
-    description,
-    severity: r.severity,
-    base: base ? count(base) : null,
-    head: count(head),
-    delta: base ? count(head) - count(base) : null,
-    se: base ? 0 : null,
-    threshold: null,
-    status: "met"
-  };
-  const findings = [];
-  if (!base) return { row, findings };
-  if (r.bridges) {
-    for (const [key, e] of head.bridges) {
-      if (base.bridges.has(key)) continue;
-      const el = { id: g.linkIds[e], kind: "link", line: g.linkLine[e] };
-      const ends = `${g.nodeIds[g.linkSource[e]]}–${g.nodeIds[g.linkTarget[e]]}`;
-      findings.push(
-        finding("new-bridge", r.severity, `link ${el.id} (${ends}) is a new bridge: losing it splits the design, which the base did not`, [el], {
-          requirement: r.id
-        })
-      );
-    }
-  }
-  if (r.cutNodes) {
-    for (const [id, v] of head.cutNodes) {
-      if (base.cutNodes.has(id)) continue;
-      const el = { id, kind: "node", line: g.nodeLine[v] };
-      findings.push(
-        finding("new-cut-node", r.severity, `node ${id} is a new cut node: losing it splits the design, which the base did not`, [el], {
-          requirement: r.id
-        })
-      );
-    }
-  }
-  if (findings.length > 0) row.status = "regressed";
-  return { row, findings };
-}
-function elementChanges(base, head) {
-  const diff = (from, to) => {
-    const a = from.graph;
-    const b = to.graph;
-    const out = [];
-    a.nodeIds.forEach((id, v) => {
-      if (!b.nodeIndex.has(id)) out.push({ id, kind: "node", line: a.nodeLine[v] });
-    });
-    const keys = new Set(b.linkKeys);
-    a.linkKeys.forEach((key, e) => {
-      if (!keys.has(key)) out.push({ id: a.linkIds[e], kind: "link", line: a.linkLine[e] });
-    });
-    return out;
-  };
-  return { added: diff(head, base), removed: diff(base, head) };
+function elementChanges2(base, head, matching = matchDesigns(base.graph, head.graph)) {
+  return elementChanges(base.graph, head.graph, matching);
 }
 function fileStatus(change, findings) {
   const failing = findings.filter((f) => f.severity === "fail");
-  if (failing.some((f) => f.rule === "parse-error")) return "error";
+  if (failing.some((f) => f.rule === "parse-error" || f.rule === "not-computable")) return "error";
   const thresholdRules = new Set(Object.values(THRESHOLD_RULE));
   if (failing.some((f) => thresholdRules.has(f.rule))) return "below-threshold";
-  if (failing.some((f) => f.rule === "regression" || f.rule === "new-bridge" || f.rule === "new-cut-node")) return "regressed";
+  if (failing.some((f) => f.rule === "regression" || SPOF_RULES.has(f.rule))) return "regressed";
   if (change === "added") return "new";
   if (change === "renamed") return "renamed";
   return "pass";
@@ -28673,57 +29558,66 @@ function compareDesign(input) {
     report.status = "removed";
     const severity = input.policy.removedDesigns;
     if (severity !== "ignore") {
-      report.findings.push(finding("removed-design", severity, "the design file was deleted by this change", [], { line: 0 }));
+      report.findings.push(finding2("removed-design", severity, "the design file was deleted by this change", [], { line: 0 }));
     }
     return report;
   }
-  if (input.headError || !input.head) {
-    const e = input.headError ?? { message: "the design could not be read", line: 0, column: 0 };
+  if (input.headError || input.headUnsupported || !input.head) {
+    const e = input.headError ?? input.headUnsupported ?? { message: "the design could not be read", line: 0, column: 0 };
     report.status = "error";
     report.error = { message: e.message, line: e.line, column: e.column };
-    report.findings.push(finding("parse-error", "fail", e.message, [], { line: e.line, column: e.column }));
+    const rule = input.headUnsupported && !input.headError ? "not-computable" : "parse-error";
+    report.findings.push(finding2(rule, "fail", e.message, [], { line: e.line, column: e.column, ...rule === "not-computable" ? { status: "not-computable" } : {} }));
     return report;
   }
   const effective = input.baseError ? { ...input, base: void 0, thresholdsOnly: true } : input;
   if (input.baseError) {
     report.findings.push(
-      finding("parse-error", "notice", `the base version could not be read (${input.baseError.message}); judged on thresholds only`, [], {
+      finding2("parse-error", "notice", `the base version could not be read (${input.baseError.message}); judged on thresholds only`, [], {
         line: 0
       })
     );
   }
+  const comparing = effective.base !== void 0 && !effective.thresholdsOnly;
+  const matching = !comparing ? void 0 : effective.base.result === input.head.result ? identityMatching(input.head.graph) : matchDesigns(effective.base.graph, input.head.graph);
   for (const r of input.policy.requirements) {
     const description = describeRequirement(r, input.policy.challenges);
-    const { row, findings } = r.kind === "no-new-spof" ? judgeSpof(r, effective, description) : judge(r, effective, description);
-    report.requirements.push(row);
+    const { rows, findings } = r.kind === "no-new-spof" ? judgeSpof(r, description, input.head, comparing ? effective.base : void 0, matching) : judge(r, effective, description);
+    report.requirements.push(...rows);
     report.findings.push(...findings);
   }
   for (const reason of input.head.result.evaluation.degraded) {
-    report.findings.push(finding("degraded", "notice", `head evaluation reduced: ${reason}`, [], { line: 0 }));
+    report.findings.push(finding2("degraded", "notice", `head evaluation reduced: ${reason}`, [], { line: 0 }));
   }
   if (effective.base && !effective.thresholdsOnly && effective.base.result !== input.head.result) {
     for (const reason of effective.base.result.evaluation.degraded) {
-      report.findings.push(finding("degraded", "notice", `base evaluation reduced: ${reason}`, [], { line: 0 }));
+      report.findings.push(finding2("degraded", "notice", `base evaluation reduced: ${reason}`, [], { line: 0 }));
     }
   }
-  report.head = input.head.result.evaluation;
+  report.head = withSequenceDetails(input.head.result.evaluation, input.head.graph);
   if (effective.base && !effective.thresholdsOnly) {
-    report.base = effective.base.result.evaluation;
-    const changes = elementChanges(effective.base, input.head);
-    if (changes.added.length + changes.removed.length > 0) report.changes = changes;
+    report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.graph);
+    const changes = elementChanges2(effective.base, input.head, matching);
+    const modified = effective.base.topology && input.head.topology ? designChanges(effective.base.topology, input.head.topology)?.modified : void 0;
+    if (modified?.length) changes.modified = modified;
+    if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) + (changes.modified?.length ?? 0) > 0) report.changes = changes;
   }
   report.status = fileStatus(input.change, report.findings);
   return report;
 }
-var SAME, REDUCED_MARGIN_SE, THRESHOLD_RULE;
+var SPOF_RULES, SAME, REDUCED_MARGIN_SE, GRAVITY, THRESHOLD_RULE;
 var init_compare = __esm({
   "src/gate/compare.ts"() {
     "use strict";
-    init_structure();
+    init_consequence2();
     init_describe();
+    init_rename();
+    init_spof();
     init_measure();
+    SPOF_RULES = /* @__PURE__ */ new Set(["new-bridge", "new-cut-node", "new-stranding-group", "hardened-weak-point"]);
     SAME = 1e-12;
     REDUCED_MARGIN_SE = 2;
+    GRAVITY = { fail: 0, warn: 1, notice: 2 };
     THRESHOLD_RULE = {
       "r-threshold": "r-threshold",
       "area-floor": "area-floor",
@@ -28754,6 +29648,6668 @@ var init_verdict = __esm({
   }
 });
 
+// src/gate/pair-designs.ts
+function designStem(path11) {
+  const lower = path11.toLowerCase();
+  const ext = EXTENSIONS.find((e) => lower.endsWith(e));
+  if (ext) return path11.slice(0, -ext.length);
+  const slash = path11.lastIndexOf("/");
+  const dot2 = path11.lastIndexOf(".");
+  return dot2 > slash + 1 ? path11.slice(0, dot2) : path11;
+}
+function pairBy(deleted, added, key, by, out) {
+  const group = (list2) => {
+    const m = /* @__PURE__ */ new Map();
+    for (const d of list2) {
+      const k = key(d);
+      if (k === void 0 || k === "") continue;
+      m.set(k, [...m.get(k) ?? [], d]);
+    }
+    return m;
+  };
+  const gone = group(deleted);
+  const fresh = group(added);
+  for (const [k, before] of gone) {
+    const after = fresh.get(k);
+    if (before.length === 1 && after?.length === 1) out.push({ previousPath: before[0].path, path: after[0].path, by });
+  }
+}
+function pairDesigns(deleted, added) {
+  const pairs = [];
+  pairBy([...deleted], [...added], (d) => d.name?.trim(), "network name", pairs);
+  const used = new Set(pairs.flatMap((p) => [p.previousPath, p.path]));
+  pairBy(
+    deleted.filter((d) => !used.has(d.path)),
+    added.filter((d) => !used.has(d.path)),
+    (d) => designStem(d.path),
+    "base name",
+    pairs
+  );
+  return pairs.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
+}
+var EXTENSIONS;
+var init_pair_designs = __esm({
+  "src/gate/pair-designs.ts"() {
+    "use strict";
+    EXTENSIONS = [".net.yaml", ".net.yml", ".net.json", ".graphml", ".yaml", ".yml", ".json", ".gml", ".csv"];
+  }
+});
+
+// node_modules/graphology/dist/graphology.mjs
+import { EventEmitter } from "events";
+function assignPolyfill() {
+  const target = arguments[0];
+  for (let i = 1, l = arguments.length; i < l; i++) {
+    if (!arguments[i]) continue;
+    for (const k in arguments[i]) target[k] = arguments[i][k];
+  }
+  return target;
+}
+function getMatchingEdge(graph, source, target, type) {
+  const sourceData = graph._nodes.get(source);
+  let edge = null;
+  if (!sourceData) return edge;
+  if (type === "mixed") {
+    edge = sourceData.out && sourceData.out[target] || sourceData.undirected && sourceData.undirected[target];
+  } else if (type === "directed") {
+    edge = sourceData.out && sourceData.out[target];
+  } else {
+    edge = sourceData.undirected && sourceData.undirected[target];
+  }
+  return edge;
+}
+function isPlainObject(value2) {
+  return typeof value2 === "object" && value2 !== null;
+}
+function isEmpty(o) {
+  let k;
+  for (k in o) return false;
+  return true;
+}
+function privateProperty(target, name, value2) {
+  Object.defineProperty(target, name, {
+    enumerable: false,
+    configurable: false,
+    writable: true,
+    value: value2
+  });
+}
+function readOnlyProperty(target, name, value2) {
+  const descriptor = {
+    enumerable: true,
+    configurable: true
+  };
+  if (typeof value2 === "function") {
+    descriptor.get = value2;
+  } else {
+    descriptor.value = value2;
+    descriptor.writable = false;
+  }
+  Object.defineProperty(target, name, descriptor);
+}
+function validateHints(hints) {
+  if (!isPlainObject(hints)) return false;
+  if (hints.attributes && !Array.isArray(hints.attributes)) return false;
+  return true;
+}
+function incrementalIdStartingFromRandomByte() {
+  let i = Math.floor(Math.random() * 256) & 255;
+  return () => {
+    return i++;
+  };
+}
+function chain() {
+  const iterables = arguments;
+  let current = null;
+  let i = -1;
+  return {
+    [Symbol.iterator]() {
+      return this;
+    },
+    next() {
+      let step = null;
+      do {
+        if (current === null) {
+          i++;
+          if (i >= iterables.length) return { done: true };
+          current = iterables[i][Symbol.iterator]();
+        }
+        step = current.next();
+        if (step.done) {
+          current = null;
+          continue;
+        }
+        break;
+      } while (true);
+      return step;
+    }
+  };
+}
+function emptyIterator() {
+  return {
+    [Symbol.iterator]() {
+      return this;
+    },
+    next() {
+      return { done: true };
+    }
+  };
+}
+function MixedNodeData(key, attributes) {
+  this.key = key;
+  this.attributes = attributes;
+  this.clear();
+}
+function DirectedNodeData(key, attributes) {
+  this.key = key;
+  this.attributes = attributes;
+  this.clear();
+}
+function UndirectedNodeData(key, attributes) {
+  this.key = key;
+  this.attributes = attributes;
+  this.clear();
+}
+function EdgeData(undirected, key, source, target, attributes) {
+  this.key = key;
+  this.attributes = attributes;
+  this.undirected = undirected;
+  this.source = source;
+  this.target = target;
+}
+function findRelevantNodeData(graph, method, mode, nodeOrEdge, nameOrEdge, add1, add2) {
+  let nodeData, edgeData, arg1, arg2;
+  nodeOrEdge = "" + nodeOrEdge;
+  if (mode === NODE) {
+    nodeData = graph._nodes.get(nodeOrEdge);
+    if (!nodeData)
+      throw new NotFoundGraphError(
+        `Graph.${method}: could not find the "${nodeOrEdge}" node in the graph.`
+      );
+    arg1 = nameOrEdge;
+    arg2 = add1;
+  } else if (mode === OPPOSITE) {
+    nameOrEdge = "" + nameOrEdge;
+    edgeData = graph._edges.get(nameOrEdge);
+    if (!edgeData)
+      throw new NotFoundGraphError(
+        `Graph.${method}: could not find the "${nameOrEdge}" edge in the graph.`
+      );
+    const source = edgeData.source.key;
+    const target = edgeData.target.key;
+    if (nodeOrEdge === source) {
+      nodeData = edgeData.target;
+    } else if (nodeOrEdge === target) {
+      nodeData = edgeData.source;
+    } else {
+      throw new NotFoundGraphError(
+        `Graph.${method}: the "${nodeOrEdge}" node is not attached to the "${nameOrEdge}" edge (${source}, ${target}).`
+      );
+    }
+    arg1 = add1;
+    arg2 = add2;
+  } else {
+    edgeData = graph._edges.get(nodeOrEdge);
+    if (!edgeData)
+      throw new NotFoundGraphError(
+        `Graph.${method}: could not find the "${nodeOrEdge}" edge in the graph.`
+      );
+    if (mode === SOURCE) {
+      nodeData = edgeData.source;
+    } else {
+      nodeData = edgeData.target;
+    }
+    arg1 = nameOrEdge;
+    arg2 = add1;
+  }
+  return [nodeData, arg1, arg2];
+}
+function attachNodeAttributeGetter(Class, method, mode) {
+  Class.prototype[method] = function(nodeOrEdge, nameOrEdge, add1) {
+    const [data, name] = findRelevantNodeData(
+      this,
+      method,
+      mode,
+      nodeOrEdge,
+      nameOrEdge,
+      add1
+    );
+    return data.attributes[name];
+  };
+}
+function attachNodeAttributesGetter(Class, method, mode) {
+  Class.prototype[method] = function(nodeOrEdge, nameOrEdge) {
+    const [data] = findRelevantNodeData(
+      this,
+      method,
+      mode,
+      nodeOrEdge,
+      nameOrEdge
+    );
+    return data.attributes;
+  };
+}
+function attachNodeAttributeChecker(Class, method, mode) {
+  Class.prototype[method] = function(nodeOrEdge, nameOrEdge, add1) {
+    const [data, name] = findRelevantNodeData(
+      this,
+      method,
+      mode,
+      nodeOrEdge,
+      nameOrEdge,
+      add1
+    );
+    return data.attributes.hasOwnProperty(name);
+  };
+}
+function attachNodeAttributeSetter(Class, method, mode) {
+  Class.prototype[method] = function(nodeOrEdge, nameOrEdge, add1, add2) {
+    const [data, name, value2] = findRelevantNodeData(
+      this,
+      method,
+      mode,
+      nodeOrEdge,
+      nameOrEdge,
+      add1,
+      add2
+    );
+    data.attributes[name] = value2;
+    this.emit("nodeAttributesUpdated", {
+      key: data.key,
+      type: "set",
+      attributes: data.attributes,
+      name
+    });
+    return this;
+  };
+}
+function attachNodeAttributeUpdater(Class, method, mode) {
+  Class.prototype[method] = function(nodeOrEdge, nameOrEdge, add1, add2) {
+    const [data, name, updater] = findRelevantNodeData(
+      this,
+      method,
+      mode,
+      nodeOrEdge,
+      nameOrEdge,
+      add1,
+      add2
+    );
+    if (typeof updater !== "function")
+      throw new InvalidArgumentsGraphError(
+        `Graph.${method}: updater should be a function.`
+      );
+    const attributes = data.attributes;
+    const value2 = updater(attributes[name]);
+    attributes[name] = value2;
+    this.emit("nodeAttributesUpdated", {
+      key: data.key,
+      type: "set",
+      attributes: data.attributes,
+      name
+    });
+    return this;
+  };
+}
+function attachNodeAttributeRemover(Class, method, mode) {
+  Class.prototype[method] = function(nodeOrEdge, nameOrEdge, add1) {
+    const [data, name] = findRelevantNodeData(
+      this,
+      method,
+      mode,
+      nodeOrEdge,
+      nameOrEdge,
+      add1
+    );
+    delete data.attributes[name];
+    this.emit("nodeAttributesUpdated", {
+      key: data.key,
+      type: "remove",
+      attributes: data.attributes,
+      name
+    });
+    return this;
+  };
+}
+function attachNodeAttributesReplacer(Class, method, mode) {
+  Class.prototype[method] = function(nodeOrEdge, nameOrEdge, add1) {
+    const [data, attributes] = findRelevantNodeData(
+      this,
+      method,
+      mode,
+      nodeOrEdge,
+      nameOrEdge,
+      add1
+    );
+    if (!isPlainObject(attributes))
+      throw new InvalidArgumentsGraphError(
+        `Graph.${method}: provided attributes are not a plain object.`
+      );
+    data.attributes = attributes;
+    this.emit("nodeAttributesUpdated", {
+      key: data.key,
+      type: "replace",
+      attributes: data.attributes
+    });
+    return this;
+  };
+}
+function attachNodeAttributesMerger(Class, method, mode) {
+  Class.prototype[method] = function(nodeOrEdge, nameOrEdge, add1) {
+    const [data, attributes] = findRelevantNodeData(
+      this,
+      method,
+      mode,
+      nodeOrEdge,
+      nameOrEdge,
+      add1
+    );
+    if (!isPlainObject(attributes))
+      throw new InvalidArgumentsGraphError(
+        `Graph.${method}: provided attributes are not a plain object.`
+      );
+    assign(data.attributes, attributes);
+    this.emit("nodeAttributesUpdated", {
+      key: data.key,
+      type: "merge",
+      attributes: data.attributes,
+      data: attributes
+    });
+    return this;
+  };
+}
+function attachNodeAttributesUpdater(Class, method, mode) {
+  Class.prototype[method] = function(nodeOrEdge, nameOrEdge, add1) {
+    const [data, updater] = findRelevantNodeData(
+      this,
+      method,
+      mode,
+      nodeOrEdge,
+      nameOrEdge,
+      add1
+    );
+    if (typeof updater !== "function")
+      throw new InvalidArgumentsGraphError(
+        `Graph.${method}: provided updater is not a function.`
+      );
+    data.attributes = updater(data.attributes);
+    this.emit("nodeAttributesUpdated", {
+      key: data.key,
+      type: "update",
+      attributes: data.attributes
+    });
+    return this;
+  };
+}
+function attachNodeAttributesMethods(Graph2) {
+  NODE_ATTRIBUTES_METHODS.forEach(function({ name, attacher }) {
+    attacher(Graph2, name("Node"), NODE);
+    attacher(Graph2, name("Source"), SOURCE);
+    attacher(Graph2, name("Target"), TARGET);
+    attacher(Graph2, name("Opposite"), OPPOSITE);
+  });
+}
+function attachEdgeAttributeGetter(Class, method, type) {
+  Class.prototype[method] = function(element, name) {
+    let data;
+    if (this.type !== "mixed" && type !== "mixed" && type !== this.type)
+      throw new UsageGraphError(
+        `Graph.${method}: cannot find this type of edges in your ${this.type} graph.`
+      );
+    if (arguments.length > 2) {
+      if (this.multi)
+        throw new UsageGraphError(
+          `Graph.${method}: cannot use a {source,target} combo when asking about an edge's attributes in a MultiGraph since we cannot infer the one you want information about.`
+        );
+      const source = "" + element;
+      const target = "" + name;
+      name = arguments[2];
+      data = getMatchingEdge(this, source, target, type);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find an edge for the given path ("${source}" - "${target}").`
+        );
+    } else {
+      if (type !== "mixed")
+        throw new UsageGraphError(
+          `Graph.${method}: calling this method with only a key (vs. a source and target) does not make sense since an edge with this key could have the other type.`
+        );
+      element = "" + element;
+      data = this._edges.get(element);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find the "${element}" edge in the graph.`
+        );
+    }
+    return data.attributes[name];
+  };
+}
+function attachEdgeAttributesGetter(Class, method, type) {
+  Class.prototype[method] = function(element) {
+    let data;
+    if (this.type !== "mixed" && type !== "mixed" && type !== this.type)
+      throw new UsageGraphError(
+        `Graph.${method}: cannot find this type of edges in your ${this.type} graph.`
+      );
+    if (arguments.length > 1) {
+      if (this.multi)
+        throw new UsageGraphError(
+          `Graph.${method}: cannot use a {source,target} combo when asking about an edge's attributes in a MultiGraph since we cannot infer the one you want information about.`
+        );
+      const source = "" + element, target = "" + arguments[1];
+      data = getMatchingEdge(this, source, target, type);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find an edge for the given path ("${source}" - "${target}").`
+        );
+    } else {
+      if (type !== "mixed")
+        throw new UsageGraphError(
+          `Graph.${method}: calling this method with only a key (vs. a source and target) does not make sense since an edge with this key could have the other type.`
+        );
+      element = "" + element;
+      data = this._edges.get(element);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find the "${element}" edge in the graph.`
+        );
+    }
+    return data.attributes;
+  };
+}
+function attachEdgeAttributeChecker(Class, method, type) {
+  Class.prototype[method] = function(element, name) {
+    let data;
+    if (this.type !== "mixed" && type !== "mixed" && type !== this.type)
+      throw new UsageGraphError(
+        `Graph.${method}: cannot find this type of edges in your ${this.type} graph.`
+      );
+    if (arguments.length > 2) {
+      if (this.multi)
+        throw new UsageGraphError(
+          `Graph.${method}: cannot use a {source,target} combo when asking about an edge's attributes in a MultiGraph since we cannot infer the one you want information about.`
+        );
+      const source = "" + element;
+      const target = "" + name;
+      name = arguments[2];
+      data = getMatchingEdge(this, source, target, type);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find an edge for the given path ("${source}" - "${target}").`
+        );
+    } else {
+      if (type !== "mixed")
+        throw new UsageGraphError(
+          `Graph.${method}: calling this method with only a key (vs. a source and target) does not make sense since an edge with this key could have the other type.`
+        );
+      element = "" + element;
+      data = this._edges.get(element);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find the "${element}" edge in the graph.`
+        );
+    }
+    return data.attributes.hasOwnProperty(name);
+  };
+}
+function attachEdgeAttributeSetter(Class, method, type) {
+  Class.prototype[method] = function(element, name, value2) {
+    let data;
+    if (this.type !== "mixed" && type !== "mixed" && type !== this.type)
+      throw new UsageGraphError(
+        `Graph.${method}: cannot find this type of edges in your ${this.type} graph.`
+      );
+    if (arguments.length > 3) {
+      if (this.multi)
+        throw new UsageGraphError(
+          `Graph.${method}: cannot use a {source,target} combo when asking about an edge's attributes in a MultiGraph since we cannot infer the one you want information about.`
+        );
+      const source = "" + element;
+      const target = "" + name;
+      name = arguments[2];
+      value2 = arguments[3];
+      data = getMatchingEdge(this, source, target, type);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find an edge for the given path ("${source}" - "${target}").`
+        );
+    } else {
+      if (type !== "mixed")
+        throw new UsageGraphError(
+          `Graph.${method}: calling this method with only a key (vs. a source and target) does not make sense since an edge with this key could have the other type.`
+        );
+      element = "" + element;
+      data = this._edges.get(element);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find the "${element}" edge in the graph.`
+        );
+    }
+    data.attributes[name] = value2;
+    this.emit("edgeAttributesUpdated", {
+      key: data.key,
+      type: "set",
+      attributes: data.attributes,
+      name
+    });
+    return this;
+  };
+}
+function attachEdgeAttributeUpdater(Class, method, type) {
+  Class.prototype[method] = function(element, name, updater) {
+    let data;
+    if (this.type !== "mixed" && type !== "mixed" && type !== this.type)
+      throw new UsageGraphError(
+        `Graph.${method}: cannot find this type of edges in your ${this.type} graph.`
+      );
+    if (arguments.length > 3) {
+      if (this.multi)
+        throw new UsageGraphError(
+          `Graph.${method}: cannot use a {source,target} combo when asking about an edge's attributes in a MultiGraph since we cannot infer the one you want information about.`
+        );
+      const source = "" + element;
+      const target = "" + name;
+      name = arguments[2];
+      updater = arguments[3];
+      data = getMatchingEdge(this, source, target, type);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find an edge for the given path ("${source}" - "${target}").`
+        );
+    } else {
+      if (type !== "mixed")
+        throw new UsageGraphError(
+          `Graph.${method}: calling this method with only a key (vs. a source and target) does not make sense since an edge with this key could have the other type.`
+        );
+      element = "" + element;
+      data = this._edges.get(element);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find the "${element}" edge in the graph.`
+        );
+    }
+    if (typeof updater !== "function")
+      throw new InvalidArgumentsGraphError(
+        `Graph.${method}: updater should be a function.`
+      );
+    data.attributes[name] = updater(data.attributes[name]);
+    this.emit("edgeAttributesUpdated", {
+      key: data.key,
+      type: "set",
+      attributes: data.attributes,
+      name
+    });
+    return this;
+  };
+}
+function attachEdgeAttributeRemover(Class, method, type) {
+  Class.prototype[method] = function(element, name) {
+    let data;
+    if (this.type !== "mixed" && type !== "mixed" && type !== this.type)
+      throw new UsageGraphError(
+        `Graph.${method}: cannot find this type of edges in your ${this.type} graph.`
+      );
+    if (arguments.length > 2) {
+      if (this.multi)
+        throw new UsageGraphError(
+          `Graph.${method}: cannot use a {source,target} combo when asking about an edge's attributes in a MultiGraph since we cannot infer the one you want information about.`
+        );
+      const source = "" + element;
+      const target = "" + name;
+      name = arguments[2];
+      data = getMatchingEdge(this, source, target, type);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find an edge for the given path ("${source}" - "${target}").`
+        );
+    } else {
+      if (type !== "mixed")
+        throw new UsageGraphError(
+          `Graph.${method}: calling this method with only a key (vs. a source and target) does not make sense since an edge with this key could have the other type.`
+        );
+      element = "" + element;
+      data = this._edges.get(element);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find the "${element}" edge in the graph.`
+        );
+    }
+    delete data.attributes[name];
+    this.emit("edgeAttributesUpdated", {
+      key: data.key,
+      type: "remove",
+      attributes: data.attributes,
+      name
+    });
+    return this;
+  };
+}
+function attachEdgeAttributesReplacer(Class, method, type) {
+  Class.prototype[method] = function(element, attributes) {
+    let data;
+    if (this.type !== "mixed" && type !== "mixed" && type !== this.type)
+      throw new UsageGraphError(
+        `Graph.${method}: cannot find this type of edges in your ${this.type} graph.`
+      );
+    if (arguments.length > 2) {
+      if (this.multi)
+        throw new UsageGraphError(
+          `Graph.${method}: cannot use a {source,target} combo when asking about an edge's attributes in a MultiGraph since we cannot infer the one you want information about.`
+        );
+      const source = "" + element, target = "" + attributes;
+      attributes = arguments[2];
+      data = getMatchingEdge(this, source, target, type);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find an edge for the given path ("${source}" - "${target}").`
+        );
+    } else {
+      if (type !== "mixed")
+        throw new UsageGraphError(
+          `Graph.${method}: calling this method with only a key (vs. a source and target) does not make sense since an edge with this key could have the other type.`
+        );
+      element = "" + element;
+      data = this._edges.get(element);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find the "${element}" edge in the graph.`
+        );
+    }
+    if (!isPlainObject(attributes))
+      throw new InvalidArgumentsGraphError(
+        `Graph.${method}: provided attributes are not a plain object.`
+      );
+    data.attributes = attributes;
+    this.emit("edgeAttributesUpdated", {
+      key: data.key,
+      type: "replace",
+      attributes: data.attributes
+    });
+    return this;
+  };
+}
+function attachEdgeAttributesMerger(Class, method, type) {
+  Class.prototype[method] = function(element, attributes) {
+    let data;
+    if (this.type !== "mixed" && type !== "mixed" && type !== this.type)
+      throw new UsageGraphError(
+        `Graph.${method}: cannot find this type of edges in your ${this.type} graph.`
+      );
+    if (arguments.length > 2) {
+      if (this.multi)
+        throw new UsageGraphError(
+          `Graph.${method}: cannot use a {source,target} combo when asking about an edge's attributes in a MultiGraph since we cannot infer the one you want information about.`
+        );
+      const source = "" + element, target = "" + attributes;
+      attributes = arguments[2];
+      data = getMatchingEdge(this, source, target, type);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find an edge for the given path ("${source}" - "${target}").`
+        );
+    } else {
+      if (type !== "mixed")
+        throw new UsageGraphError(
+          `Graph.${method}: calling this method with only a key (vs. a source and target) does not make sense since an edge with this key could have the other type.`
+        );
+      element = "" + element;
+      data = this._edges.get(element);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find the "${element}" edge in the graph.`
+        );
+    }
+    if (!isPlainObject(attributes))
+      throw new InvalidArgumentsGraphError(
+        `Graph.${method}: provided attributes are not a plain object.`
+      );
+    assign(data.attributes, attributes);
+    this.emit("edgeAttributesUpdated", {
+      key: data.key,
+      type: "merge",
+      attributes: data.attributes,
+      data: attributes
+    });
+    return this;
+  };
+}
+function attachEdgeAttributesUpdater(Class, method, type) {
+  Class.prototype[method] = function(element, updater) {
+    let data;
+    if (this.type !== "mixed" && type !== "mixed" && type !== this.type)
+      throw new UsageGraphError(
+        `Graph.${method}: cannot find this type of edges in your ${this.type} graph.`
+      );
+    if (arguments.length > 2) {
+      if (this.multi)
+        throw new UsageGraphError(
+          `Graph.${method}: cannot use a {source,target} combo when asking about an edge's attributes in a MultiGraph since we cannot infer the one you want information about.`
+        );
+      const source = "" + element, target = "" + updater;
+      updater = arguments[2];
+      data = getMatchingEdge(this, source, target, type);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find an edge for the given path ("${source}" - "${target}").`
+        );
+    } else {
+      if (type !== "mixed")
+        throw new UsageGraphError(
+          `Graph.${method}: calling this method with only a key (vs. a source and target) does not make sense since an edge with this key could have the other type.`
+        );
+      element = "" + element;
+      data = this._edges.get(element);
+      if (!data)
+        throw new NotFoundGraphError(
+          `Graph.${method}: could not find the "${element}" edge in the graph.`
+        );
+    }
+    if (typeof updater !== "function")
+      throw new InvalidArgumentsGraphError(
+        `Graph.${method}: provided updater is not a function.`
+      );
+    data.attributes = updater(data.attributes);
+    this.emit("edgeAttributesUpdated", {
+      key: data.key,
+      type: "update",
+      attributes: data.attributes
+    });
+    return this;
+  };
+}
+function attachEdgeAttributesMethods(Graph2) {
+  EDGE_ATTRIBUTES_METHODS.forEach(function({ name, attacher }) {
+    attacher(Graph2, name("Edge"), "mixed");
+    attacher(Graph2, name("DirectedEdge"), "directed");
+    attacher(Graph2, name("UndirectedEdge"), "undirected");
+  });
+}
+function forEachSimple(breakable, object, callback, avoid) {
+  let shouldBreak = false;
+  for (const k in object) {
+    if (k === avoid) continue;
+    const edgeData = object[k];
+    shouldBreak = callback(
+      edgeData.key,
+      edgeData.attributes,
+      edgeData.source.key,
+      edgeData.target.key,
+      edgeData.source.attributes,
+      edgeData.target.attributes,
+      edgeData.undirected
+    );
+    if (breakable && shouldBreak) return edgeData.key;
+  }
+  return;
+}
+function forEachMulti(breakable, object, callback, avoid) {
+  let edgeData, source, target;
+  let shouldBreak = false;
+  for (const k in object) {
+    if (k === avoid) continue;
+    edgeData = object[k];
+    do {
+      source = edgeData.source;
+      target = edgeData.target;
+      shouldBreak = callback(
+        edgeData.key,
+        edgeData.attributes,
+        source.key,
+        target.key,
+        source.attributes,
+        target.attributes,
+        edgeData.undirected
+      );
+      if (breakable && shouldBreak) return edgeData.key;
+      edgeData = edgeData.next;
+    } while (edgeData !== void 0);
+  }
+  return;
+}
+function createIterator(object, avoid) {
+  const keys = Object.keys(object);
+  const l = keys.length;
+  let edgeData;
+  let i = 0;
+  return {
+    [Symbol.iterator]() {
+      return this;
+    },
+    next() {
+      do {
+        if (!edgeData) {
+          if (i >= l) return { done: true };
+          const k = keys[i++];
+          if (k === avoid) {
+            edgeData = void 0;
+            continue;
+          }
+          edgeData = object[k];
+        } else {
+          edgeData = edgeData.next;
+        }
+      } while (!edgeData);
+      return {
+        done: false,
+        value: {
+          edge: edgeData.key,
+          attributes: edgeData.attributes,
+          source: edgeData.source.key,
+          target: edgeData.target.key,
+          sourceAttributes: edgeData.source.attributes,
+          targetAttributes: edgeData.target.attributes,
+          undirected: edgeData.undirected
+        }
+      };
+    }
+  };
+}
+function forEachForKeySimple(breakable, object, k, callback) {
+  const edgeData = object[k];
+  if (!edgeData) return;
+  const sourceData = edgeData.source;
+  const targetData = edgeData.target;
+  if (callback(
+    edgeData.key,
+    edgeData.attributes,
+    sourceData.key,
+    targetData.key,
+    sourceData.attributes,
+    targetData.attributes,
+    edgeData.undirected
+  ) && breakable)
+    return edgeData.key;
+}
+function forEachForKeyMulti(breakable, object, k, callback) {
+  let edgeData = object[k];
+  if (!edgeData) return;
+  let shouldBreak = false;
+  do {
+    shouldBreak = callback(
+      edgeData.key,
+      edgeData.attributes,
+      edgeData.source.key,
+      edgeData.target.key,
+      edgeData.source.attributes,
+      edgeData.target.attributes,
+      edgeData.undirected
+    );
+    if (breakable && shouldBreak) return edgeData.key;
+    edgeData = edgeData.next;
+  } while (edgeData !== void 0);
+  return;
+}
+function createIteratorForKey(object, k) {
+  let edgeData = object[k];
+  if (edgeData.next !== void 0) {
+    return {
+      [Symbol.iterator]() {
+        return this;
+      },
+      next() {
+        if (!edgeData) return { done: true };
+        const value2 = {
+          edge: edgeData.key,
+          attributes: edgeData.attributes,
+          source: edgeData.source.key,
+          target: edgeData.target.key,
+          sourceAttributes: edgeData.source.attributes,
+          targetAttributes: edgeData.target.attributes,
+          undirected: edgeData.undirected
+        };
+        edgeData = edgeData.next;
+        return {
+          done: false,
+          value: value2
+        };
+      }
+    };
+  }
+  let done = false;
+  return {
+    [Symbol.iterator]() {
+      return this;
+    },
+    next() {
+      if (done === true) return { done: true };
+      done = true;
+      return {
+        done: false,
+        value: {
+          edge: edgeData.key,
+          attributes: edgeData.attributes,
+          source: edgeData.source.key,
+          target: edgeData.target.key,
+          sourceAttributes: edgeData.source.attributes,
+          targetAttributes: edgeData.target.attributes,
+          undirected: edgeData.undirected
+        }
+      };
+    }
+  };
+}
+function createEdgeArray(graph, type) {
+  if (graph.size === 0) return [];
+  if (type === "mixed" || type === graph.type) {
+    return Array.from(graph._edges.keys());
+  }
+  const size = type === "undirected" ? graph.undirectedSize : graph.directedSize;
+  const list2 = new Array(size), mask = type === "undirected";
+  const iterator = graph._edges.values();
+  let i = 0;
+  let step, data;
+  while (step = iterator.next(), step.done !== true) {
+    data = step.value;
+    if (data.undirected === mask) list2[i++] = data.key;
+  }
+  return list2;
+}
+function forEachEdge(breakable, graph, type, callback) {
+  if (graph.size === 0) return;
+  const shouldFilter = type !== "mixed" && type !== graph.type;
+  const mask = type === "undirected";
+  let step, data;
+  let shouldBreak = false;
+  const iterator = graph._edges.values();
+  while (step = iterator.next(), step.done !== true) {
+    data = step.value;
+    if (shouldFilter && data.undirected !== mask) continue;
+    const { key, attributes, source, target } = data;
+    shouldBreak = callback(
+      key,
+      attributes,
+      source.key,
+      target.key,
+      source.attributes,
+      target.attributes,
+      data.undirected
+    );
+    if (breakable && shouldBreak) return key;
+  }
+  return;
+}
+function createEdgeIterator(graph, type) {
+  if (graph.size === 0) return emptyIterator();
+  const shouldFilter = type !== "mixed" && type !== graph.type;
+  const mask = type === "undirected";
+  const iterator = graph._edges.values();
+  return {
+    [Symbol.iterator]() {
+      return this;
+    },
+    next() {
+      let step, data;
+      while (true) {
+        step = iterator.next();
+        if (step.done) return step;
+        data = step.value;
+        if (shouldFilter && data.undirected !== mask) continue;
+        break;
+      }
+      const value2 = {
+        edge: data.key,
+        attributes: data.attributes,
+        source: data.source.key,
+        target: data.target.key,
+        sourceAttributes: data.source.attributes,
+        targetAttributes: data.target.attributes,
+        undirected: data.undirected
+      };
+      return { value: value2, done: false };
+    }
+  };
+}
+function forEachEdgeForNode(breakable, multi, type, direction, nodeData, callback) {
+  const fn = multi ? forEachMulti : forEachSimple;
+  let found;
+  if (type !== "undirected") {
+    if (direction !== "out") {
+      found = fn(breakable, nodeData.in, callback);
+      if (breakable && found) return found;
+    }
+    if (direction !== "in") {
+      found = fn(
+        breakable,
+        nodeData.out,
+        callback,
+        !direction ? nodeData.key : void 0
+      );
+      if (breakable && found) return found;
+    }
+  }
+  if (type !== "directed") {
+    found = fn(breakable, nodeData.undirected, callback);
+    if (breakable && found) return found;
+  }
+  return;
+}
+function createEdgeArrayForNode(multi, type, direction, nodeData) {
+  const edges = [];
+  forEachEdgeForNode(false, multi, type, direction, nodeData, function(key) {
+    edges.push(key);
+  });
+  return edges;
+}
+function createEdgeIteratorForNode(type, direction, nodeData) {
+  let iterator = emptyIterator();
+  if (type !== "undirected") {
+    if (direction !== "out" && typeof nodeData.in !== "undefined")
+      iterator = chain(iterator, createIterator(nodeData.in));
+    if (direction !== "in" && typeof nodeData.out !== "undefined")
+      iterator = chain(
+        iterator,
+        createIterator(nodeData.out, !direction ? nodeData.key : void 0)
+      );
+  }
+  if (type !== "directed" && typeof nodeData.undirected !== "undefined") {
+    iterator = chain(iterator, createIterator(nodeData.undirected));
+  }
+  return iterator;
+}
+function forEachEdgeForPath(breakable, type, multi, direction, sourceData, target, callback) {
+  const fn = multi ? forEachForKeyMulti : forEachForKeySimple;
+  let found;
+  if (type !== "undirected") {
+    if (typeof sourceData.in !== "undefined" && direction !== "out") {
+      found = fn(breakable, sourceData.in, target, callback);
+      if (breakable && found) return found;
+    }
+    if (typeof sourceData.out !== "undefined" && direction !== "in" && (direction || sourceData.key !== target)) {
+      found = fn(breakable, sourceData.out, target, callback);
+      if (breakable && found) return found;
+    }
+  }
+  if (type !== "directed") {
+    if (typeof sourceData.undirected !== "undefined") {
+      found = fn(breakable, sourceData.undirected, target, callback);
+      if (breakable && found) return found;
+    }
+  }
+  return;
+}
+function createEdgeArrayForPath(type, multi, direction, sourceData, target) {
+  const edges = [];
+  forEachEdgeForPath(
+    false,
+    type,
+    multi,
+    direction,
+    sourceData,
+    target,
+    function(key) {
+      edges.push(key);
+    }
+  );
+  return edges;
+}
+function createEdgeIteratorForPath(type, direction, sourceData, target) {
+  let iterator = emptyIterator();
+  if (type !== "undirected") {
+    if (typeof sourceData.in !== "undefined" && direction !== "out" && target in sourceData.in)
+      iterator = chain(iterator, createIteratorForKey(sourceData.in, target));
+    if (typeof sourceData.out !== "undefined" && direction !== "in" && target in sourceData.out && (direction || sourceData.key !== target))
+      iterator = chain(iterator, createIteratorForKey(sourceData.out, target));
+  }
+  if (type !== "directed") {
+    if (typeof sourceData.undirected !== "undefined" && target in sourceData.undirected)
+      iterator = chain(
+        iterator,
+        createIteratorForKey(sourceData.undirected, target)
+      );
+  }
+  return iterator;
+}
+function attachEdgeArrayCreator(Class, description) {
+  const { name, type, direction } = description;
+  Class.prototype[name] = function(source, target) {
+    if (type !== "mixed" && this.type !== "mixed" && type !== this.type)
+      return [];
+    if (!arguments.length) return createEdgeArray(this, type);
+    if (arguments.length === 1) {
+      source = "" + source;
+      const nodeData = this._nodes.get(source);
+      if (typeof nodeData === "undefined")
+        throw new NotFoundGraphError(
+          `Graph.${name}: could not find the "${source}" node in the graph.`
+        );
+      return createEdgeArrayForNode(
+        this.multi,
+        type === "mixed" ? this.type : type,
+        direction,
+        nodeData
+      );
+    }
+    if (arguments.length === 2) {
+      source = "" + source;
+      target = "" + target;
+      const sourceData = this._nodes.get(source);
+      if (!sourceData)
+        throw new NotFoundGraphError(
+          `Graph.${name}:  could not find the "${source}" source node in the graph.`
+        );
+      if (!this._nodes.has(target))
+        throw new NotFoundGraphError(
+          `Graph.${name}:  could not find the "${target}" target node in the graph.`
+        );
+      return createEdgeArrayForPath(
+        type,
+        this.multi,
+        direction,
+        sourceData,
+        target
+      );
+    }
+    throw new InvalidArgumentsGraphError(
+      `Graph.${name}: too many arguments (expecting 0, 1 or 2 and got ${arguments.length}).`
+    );
+  };
+}
+function attachForEachEdge(Class, description) {
+  const { name, type, direction } = description;
+  const forEachName = "forEach" + name[0].toUpperCase() + name.slice(1, -1);
+  Class.prototype[forEachName] = function(source, target, callback) {
+    if (type !== "mixed" && this.type !== "mixed" && type !== this.type) return;
+    if (arguments.length === 1) {
+      callback = source;
+      return forEachEdge(false, this, type, callback);
+    }
+    if (arguments.length === 2) {
+      source = "" + source;
+      callback = target;
+      const nodeData = this._nodes.get(source);
+      if (typeof nodeData === "undefined")
+        throw new NotFoundGraphError(
+          `Graph.${forEachName}: could not find the "${source}" node in the graph.`
+        );
+      return forEachEdgeForNode(
+        false,
+        this.multi,
+        type === "mixed" ? this.type : type,
+        direction,
+        nodeData,
+        callback
+      );
+    }
+    if (arguments.length === 3) {
+      source = "" + source;
+      target = "" + target;
+      const sourceData = this._nodes.get(source);
+      if (!sourceData)
+        throw new NotFoundGraphError(
+          `Graph.${forEachName}:  could not find the "${source}" source node in the graph.`
+        );
+      if (!this._nodes.has(target))
+        throw new NotFoundGraphError(
+          `Graph.${forEachName}:  could not find the "${target}" target node in the graph.`
+        );
+      return forEachEdgeForPath(
+        false,
+        type,
+        this.multi,
+        direction,
+        sourceData,
+        target,
+        callback
+      );
+    }
+    throw new InvalidArgumentsGraphError(
+      `Graph.${forEachName}: too many arguments (expecting 1, 2 or 3 and got ${arguments.length}).`
+    );
+  };
+  const mapName = "map" + name[0].toUpperCase() + name.slice(1);
+  Class.prototype[mapName] = function() {
+    const args = Array.prototype.slice.call(arguments);
+    const callback = args.pop();
+    let result;
+    if (args.length === 0) {
+      let length = 0;
+      if (type !== "directed") length += this.undirectedSize;
+      if (type !== "undirected") length += this.directedSize;
+      result = new Array(length);
+      let i = 0;
+      args.push((e, ea, s, t, sa, ta, u) => {
+        result[i++] = callback(e, ea, s, t, sa, ta, u);
+      });
+    } else {
+      result = [];
+      args.push((e, ea, s, t, sa, ta, u) => {
+        result.push(callback(e, ea, s, t, sa, ta, u));
+      });
+    }
+    this[forEachName].apply(this, args);
+    return result;
+  };
+  const filterName = "filter" + name[0].toUpperCase() + name.slice(1);
+  Class.prototype[filterName] = function() {
+    const args = Array.prototype.slice.call(arguments);
+    const callback = args.pop();
+    const result = [];
+    args.push((e, ea, s, t, sa, ta, u) => {
+      if (callback(e, ea, s, t, sa, ta, u)) result.push(e);
+    });
+    this[forEachName].apply(this, args);
+    return result;
+  };
+  const reduceName = "reduce" + name[0].toUpperCase() + name.slice(1);
+  Class.prototype[reduceName] = function() {
+    let args = Array.prototype.slice.call(arguments);
+    if (args.length < 2 || args.length > 4) {
+      throw new InvalidArgumentsGraphError(
+        `Graph.${reduceName}: invalid number of arguments (expecting 2, 3 or 4 and got ${args.length}).`
+      );
+    }
+    if (typeof args[args.length - 1] === "function" && typeof args[args.length - 2] !== "function") {
+      throw new InvalidArgumentsGraphError(
+        `Graph.${reduceName}: missing initial value. You must provide it because the callback takes more than one argument and we cannot infer the initial value from the first iteration, as you could with a simple array.`
+      );
+    }
+    let callback;
+    let initialValue;
+    if (args.length === 2) {
+      callback = args[0];
+      initialValue = args[1];
+      args = [];
+    } else if (args.length === 3) {
+      callback = args[1];
+      initialValue = args[2];
+      args = [args[0]];
+    } else if (args.length === 4) {
+      callback = args[2];
+      initialValue = args[3];
+      args = [args[0], args[1]];
+    }
+    let accumulator = initialValue;
+    args.push((e, ea, s, t, sa, ta, u) => {
+      accumulator = callback(accumulator, e, ea, s, t, sa, ta, u);
+    });
+    this[forEachName].apply(this, args);
+    return accumulator;
+  };
+}
+function attachFindEdge(Class, description) {
+  const { name, type, direction } = description;
+  const findEdgeName = "find" + name[0].toUpperCase() + name.slice(1, -1);
+  Class.prototype[findEdgeName] = function(source, target, callback) {
+    if (type !== "mixed" && this.type !== "mixed" && type !== this.type)
+      return false;
+    if (arguments.length === 1) {
+      callback = source;
+      return forEachEdge(true, this, type, callback);
+    }
+    if (arguments.length === 2) {
+      source = "" + source;
+      callback = target;
+      const nodeData = this._nodes.get(source);
+      if (typeof nodeData === "undefined")
+        throw new NotFoundGraphError(
+          `Graph.${findEdgeName}: could not find the "${source}" node in the graph.`
+        );
+      return forEachEdgeForNode(
+        true,
+        this.multi,
+        type === "mixed" ? this.type : type,
+        direction,
+        nodeData,
+        callback
+      );
+    }
+    if (arguments.length === 3) {
+      source = "" + source;
+      target = "" + target;
+      const sourceData = this._nodes.get(source);
+      if (!sourceData)
+        throw new NotFoundGraphError(
+          `Graph.${findEdgeName}:  could not find the "${source}" source node in the graph.`
+        );
+      if (!this._nodes.has(target))
+        throw new NotFoundGraphError(
+          `Graph.${findEdgeName}:  could not find the "${target}" target node in the graph.`
+        );
+      return forEachEdgeForPath(
+        true,
+        type,
+        this.multi,
+        direction,
+        sourceData,
+        target,
+        callback
+      );
+    }
+    throw new InvalidArgumentsGraphError(
+      `Graph.${findEdgeName}: too many arguments (expecting 1, 2 or 3 and got ${arguments.length}).`
+    );
+  };
+  const someName = "some" + name[0].toUpperCase() + name.slice(1, -1);
+  Class.prototype[someName] = function() {
+    const args = Array.prototype.slice.call(arguments);
+    const callback = args.pop();
+    args.push((e, ea, s, t, sa, ta, u) => {
+      return callback(e, ea, s, t, sa, ta, u);
+    });
+    const found = this[findEdgeName].apply(this, args);
+    if (found) return true;
+    return false;
+  };
+  const everyName = "every" + name[0].toUpperCase() + name.slice(1, -1);
+  Class.prototype[everyName] = function() {
+    const args = Array.prototype.slice.call(arguments);
+    const callback = args.pop();
+    args.push((e, ea, s, t, sa, ta, u) => {
+      return !callback(e, ea, s, t, sa, ta, u);
+    });
+    const found = this[findEdgeName].apply(this, args);
+    if (found) return false;
+    return true;
+  };
+}
+function attachEdgeIteratorCreator(Class, description) {
+  const { name: originalName, type, direction } = description;
+  const name = originalName.slice(0, -1) + "Entries";
+  Class.prototype[name] = function(source, target) {
+    if (type !== "mixed" && this.type !== "mixed" && type !== this.type)
+      return emptyIterator();
+    if (!arguments.length) return createEdgeIterator(this, type);
+    if (arguments.length === 1) {
+      source = "" + source;
+      const sourceData = this._nodes.get(source);
+      if (!sourceData)
+        throw new NotFoundGraphError(
+          `Graph.${name}: could not find the "${source}" node in the graph.`
+        );
+      return createEdgeIteratorForNode(type, direction, sourceData);
+    }
+    if (arguments.length === 2) {
+      source = "" + source;
+      target = "" + target;
+      const sourceData = this._nodes.get(source);
+      if (!sourceData)
+        throw new NotFoundGraphError(
+          `Graph.${name}:  could not find the "${source}" source node in the graph.`
+        );
+      if (!this._nodes.has(target))
+        throw new NotFoundGraphError(
+          `Graph.${name}:  could not find the "${target}" target node in the graph.`
+        );
+      return createEdgeIteratorForPath(type, direction, sourceData, target);
+    }
+    throw new InvalidArgumentsGraphError(
+      `Graph.${name}: too many arguments (expecting 0, 1 or 2 and got ${arguments.length}).`
+    );
+  };
+}
+function attachEdgeIterationMethods(Graph2) {
+  EDGES_ITERATION.forEach((description) => {
+    attachEdgeArrayCreator(Graph2, description);
+    attachForEachEdge(Graph2, description);
+    attachFindEdge(Graph2, description);
+    attachEdgeIteratorCreator(Graph2, description);
+  });
+}
+function CompositeSetWrapper() {
+  this.A = null;
+  this.B = null;
+}
+function forEachInObjectOnce(breakable, visited, nodeData, object, callback) {
+  for (const k in object) {
+    const edgeData = object[k];
+    const sourceData = edgeData.source;
+    const targetData = edgeData.target;
+    const neighborData = sourceData === nodeData ? targetData : sourceData;
+    if (visited && visited.has(neighborData.key)) continue;
+    const shouldBreak = callback(neighborData.key, neighborData.attributes);
+    if (breakable && shouldBreak) return neighborData.key;
+  }
+  return;
+}
+function forEachNeighbor(breakable, type, direction, nodeData, callback) {
+  if (type !== "mixed") {
+    if (type === "undirected")
+      return forEachInObjectOnce(
+        breakable,
+        null,
+        nodeData,
+        nodeData.undirected,
+        callback
+      );
+    if (typeof direction === "string")
+      return forEachInObjectOnce(
+        breakable,
+        null,
+        nodeData,
+        nodeData[direction],
+        callback
+      );
+  }
+  const visited = new CompositeSetWrapper();
+  let found;
+  if (type !== "undirected") {
+    if (direction !== "out") {
+      found = forEachInObjectOnce(
+        breakable,
+        null,
+        nodeData,
+        nodeData.in,
+        callback
+      );
+      if (breakable && found) return found;
+      visited.wrap(nodeData.in);
+    }
+    if (direction !== "in") {
+      found = forEachInObjectOnce(
+        breakable,
+        visited,
+        nodeData,
+        nodeData.out,
+        callback
+      );
+      if (breakable && found) return found;
+      visited.wrap(nodeData.out);
+    }
+  }
+  if (type !== "directed") {
+    found = forEachInObjectOnce(
+      breakable,
+      visited,
+      nodeData,
+      nodeData.undirected,
+      callback
+    );
+    if (breakable && found) return found;
+  }
+  return;
+}
+function createNeighborArrayForNode(type, direction, nodeData) {
+  if (type !== "mixed") {
+    if (type === "undirected") return Object.keys(nodeData.undirected);
+    if (typeof direction === "string") return Object.keys(nodeData[direction]);
+  }
+  const neighbors = [];
+  forEachNeighbor(false, type, direction, nodeData, function(key) {
+    neighbors.push(key);
+  });
+  return neighbors;
+}
+function createDedupedObjectIterator(visited, nodeData, object) {
+  const keys = Object.keys(object);
+  const l = keys.length;
+  let i = 0;
+  return {
+    [Symbol.iterator]() {
+      return this;
+    },
+    next() {
+      let neighborData = null;
+      do {
+        if (i >= l) {
+          if (visited) visited.wrap(object);
+          return { done: true };
+        }
+        const edgeData = object[keys[i++]];
+        const sourceData = edgeData.source;
+        const targetData = edgeData.target;
+        neighborData = sourceData === nodeData ? targetData : sourceData;
+        if (visited && visited.has(neighborData.key)) {
+          neighborData = null;
+          continue;
+        }
+      } while (neighborData === null);
+      return {
+        done: false,
+        value: { neighbor: neighborData.key, attributes: neighborData.attributes }
+      };
+    }
+  };
+}
+function createNeighborIterator(type, direction, nodeData) {
+  if (type !== "mixed") {
+    if (type === "undirected")
+      return createDedupedObjectIterator(null, nodeData, nodeData.undirected);
+    if (typeof direction === "string")
+      return createDedupedObjectIterator(null, nodeData, nodeData[direction]);
+  }
+  let iterator = emptyIterator();
+  const visited = new CompositeSetWrapper();
+  if (type !== "undirected") {
+    if (direction !== "out") {
+      iterator = chain(
+        iterator,
+        createDedupedObjectIterator(visited, nodeData, nodeData.in)
+      );
+    }
+    if (direction !== "in") {
+      iterator = chain(
+        iterator,
+        createDedupedObjectIterator(visited, nodeData, nodeData.out)
+      );
+    }
+  }
+  if (type !== "directed") {
+    iterator = chain(
+      iterator,
+      createDedupedObjectIterator(visited, nodeData, nodeData.undirected)
+    );
+  }
+  return iterator;
+}
+function attachNeighborArrayCreator(Class, description) {
+  const { name, type, direction } = description;
+  Class.prototype[name] = function(node) {
+    if (type !== "mixed" && this.type !== "mixed" && type !== this.type)
+      return [];
+    node = "" + node;
+    const nodeData = this._nodes.get(node);
+    if (typeof nodeData === "undefined")
+      throw new NotFoundGraphError(
+        `Graph.${name}: could not find the "${node}" node in the graph.`
+      );
+    return createNeighborArrayForNode(
+      type === "mixed" ? this.type : type,
+      direction,
+      nodeData
+    );
+  };
+}
+function attachForEachNeighbor(Class, description) {
+  const { name, type, direction } = description;
+  const forEachName = "forEach" + name[0].toUpperCase() + name.slice(1, -1);
+  Class.prototype[forEachName] = function(node, callback) {
+    if (type !== "mixed" && this.type !== "mixed" && type !== this.type) return;
+    node = "" + node;
+    const nodeData = this._nodes.get(node);
+    if (typeof nodeData === "undefined")
+      throw new NotFoundGraphError(
+        `Graph.${forEachName}: could not find the "${node}" node in the graph.`
+      );
+    forEachNeighbor(
+      false,
+      type === "mixed" ? this.type : type,
+      direction,
+      nodeData,
+      callback
+    );
+  };
+  const mapName = "map" + name[0].toUpperCase() + name.slice(1);
+  Class.prototype[mapName] = function(node, callback) {
+    const result = [];
+    this[forEachName](node, (n, a) => {
+      result.push(callback(n, a));
+    });
+    return result;
+  };
+  const filterName = "filter" + name[0].toUpperCase() + name.slice(1);
+  Class.prototype[filterName] = function(node, callback) {
+    const result = [];
+    this[forEachName](node, (n, a) => {
+      if (callback(n, a)) result.push(n);
+    });
+    return result;
+  };
+  const reduceName = "reduce" + name[0].toUpperCase() + name.slice(1);
+  Class.prototype[reduceName] = function(node, callback, initialValue) {
+    if (arguments.length < 3)
+      throw new InvalidArgumentsGraphError(
+        `Graph.${reduceName}: missing initial value. You must provide it because the callback takes more than one argument and we cannot infer the initial value from the first iteration, as you could with a simple array.`
+      );
+    let accumulator = initialValue;
+    this[forEachName](node, (n, a) => {
+      accumulator = callback(accumulator, n, a);
+    });
+    return accumulator;
+  };
+}
+function attachFindNeighbor(Class, description) {
+  const { name, type, direction } = description;
+  const capitalizedSingular = name[0].toUpperCase() + name.slice(1, -1);
+  const findName = "find" + capitalizedSingular;
+  Class.prototype[findName] = function(node, callback) {
+    if (type !== "mixed" && this.type !== "mixed" && type !== this.type) return;
+    node = "" + node;
+    const nodeData = this._nodes.get(node);
+    if (typeof nodeData === "undefined")
+      throw new NotFoundGraphError(
+        `Graph.${findName}: could not find the "${node}" node in the graph.`
+      );
+    return forEachNeighbor(
+      true,
+      type === "mixed" ? this.type : type,
+      direction,
+      nodeData,
+      callback
+    );
+  };
+  const someName = "some" + capitalizedSingular;
+  Class.prototype[someName] = function(node, callback) {
+    const found = this[findName](node, callback);
+    if (found) return true;
+    return false;
+  };
+  const everyName = "every" + capitalizedSingular;
+  Class.prototype[everyName] = function(node, callback) {
+    const found = this[findName](node, (n, a) => {
+      return !callback(n, a);
+    });
+    if (found) return false;
+    return true;
+  };
+}
+function attachNeighborIteratorCreator(Class, description) {
+  const { name, type, direction } = description;
+  const iteratorName = name.slice(0, -1) + "Entries";
+  Class.prototype[iteratorName] = function(node) {
+    if (type !== "mixed" && this.type !== "mixed" && type !== this.type)
+      return emptyIterator();
+    node = "" + node;
+    const nodeData = this._nodes.get(node);
+    if (typeof nodeData === "undefined")
+      throw new NotFoundGraphError(
+        `Graph.${iteratorName}: could not find the "${node}" node in the graph.`
+      );
+    return createNeighborIterator(
+      type === "mixed" ? this.type : type,
+      direction,
+      nodeData
+    );
+  };
+}
+function attachNeighborIterationMethods(Graph2) {
+  NEIGHBORS_ITERATION.forEach((description) => {
+    attachNeighborArrayCreator(Graph2, description);
+    attachForEachNeighbor(Graph2, description);
+    attachFindNeighbor(Graph2, description);
+    attachNeighborIteratorCreator(Graph2, description);
+  });
+}
+function forEachAdjacency(breakable, assymetric, disconnectedNodes, graph, callback) {
+  const iterator = graph._nodes.values();
+  const type = graph.type;
+  let step, sourceData, neighbor, adj, edgeData, targetData, shouldBreak;
+  while (step = iterator.next(), step.done !== true) {
+    let hasEdges = false;
+    sourceData = step.value;
+    if (type !== "undirected") {
+      adj = sourceData.out;
+      for (neighbor in adj) {
+        edgeData = adj[neighbor];
+        do {
+          targetData = edgeData.target;
+          hasEdges = true;
+          shouldBreak = callback(
+            sourceData.key,
+            targetData.key,
+            sourceData.attributes,
+            targetData.attributes,
+            edgeData.key,
+            edgeData.attributes,
+            edgeData.undirected
+          );
+          if (breakable && shouldBreak) return edgeData;
+          edgeData = edgeData.next;
+        } while (edgeData);
+      }
+    }
+    if (type !== "directed") {
+      adj = sourceData.undirected;
+      for (neighbor in adj) {
+        if (assymetric && sourceData.key > neighbor) continue;
+        edgeData = adj[neighbor];
+        do {
+          targetData = edgeData.target;
+          if (targetData.key !== neighbor) targetData = edgeData.source;
+          hasEdges = true;
+          shouldBreak = callback(
+            sourceData.key,
+            targetData.key,
+            sourceData.attributes,
+            targetData.attributes,
+            edgeData.key,
+            edgeData.attributes,
+            edgeData.undirected
+          );
+          if (breakable && shouldBreak) return edgeData;
+          edgeData = edgeData.next;
+        } while (edgeData);
+      }
+    }
+    if (disconnectedNodes && !hasEdges) {
+      shouldBreak = callback(
+        sourceData.key,
+        null,
+        sourceData.attributes,
+        null,
+        null,
+        null,
+        null
+      );
+      if (breakable && shouldBreak) return null;
+    }
+  }
+  return;
+}
+function serializeNode(key, data) {
+  const serialized = { key };
+  if (!isEmpty(data.attributes))
+    serialized.attributes = assign({}, data.attributes);
+  return serialized;
+}
+function serializeEdge(type, key, data) {
+  const serialized = {
+    key,
+    source: data.source.key,
+    target: data.target.key
+  };
+  if (!isEmpty(data.attributes))
+    serialized.attributes = assign({}, data.attributes);
+  if (type === "mixed" && data.undirected) serialized.undirected = true;
+  return serialized;
+}
+function validateSerializedNode(value2) {
+  if (!isPlainObject(value2))
+    throw new InvalidArgumentsGraphError(
+      'Graph.import: invalid serialized node. A serialized node should be a plain object with at least a "key" property.'
+    );
+  if (!("key" in value2))
+    throw new InvalidArgumentsGraphError(
+      "Graph.import: serialized node is missing its key."
+    );
+  if ("attributes" in value2 && (!isPlainObject(value2.attributes) || value2.attributes === null))
+    throw new InvalidArgumentsGraphError(
+      "Graph.import: invalid attributes. Attributes should be a plain object, null or omitted."
+    );
+}
+function validateSerializedEdge(value2) {
+  if (!isPlainObject(value2))
+    throw new InvalidArgumentsGraphError(
+      'Graph.import: invalid serialized edge. A serialized edge should be a plain object with at least a "source" & "target" property.'
+    );
+  if (!("source" in value2))
+    throw new InvalidArgumentsGraphError(
+      "Graph.import: serialized edge is missing its source."
+    );
+  if (!("target" in value2))
+    throw new InvalidArgumentsGraphError(
+      "Graph.import: serialized edge is missing its target."
+    );
+  if ("attributes" in value2 && (!isPlainObject(value2.attributes) || value2.attributes === null))
+    throw new InvalidArgumentsGraphError(
+      "Graph.import: invalid attributes. Attributes should be a plain object, null or omitted."
+    );
+  if ("undirected" in value2 && typeof value2.undirected !== "boolean")
+    throw new InvalidArgumentsGraphError(
+      "Graph.import: invalid undirectedness information. Undirected should be boolean or omitted."
+    );
+}
+function addNode(graph, node, attributes) {
+  if (attributes && !isPlainObject(attributes))
+    throw new InvalidArgumentsGraphError(
+      `Graph.addNode: invalid attributes. Expecting an object but got "${attributes}"`
+    );
+  node = "" + node;
+  attributes = attributes || {};
+  if (graph._nodes.has(node))
+    throw new UsageGraphError(
+      `Graph.addNode: the "${node}" node already exist in the graph.`
+    );
+  const data = new graph.NodeDataClass(node, attributes);
+  graph._nodes.set(node, data);
+  graph.emit("nodeAdded", {
+    key: node,
+    attributes
+  });
+  return data;
+}
+function unsafeAddNode(graph, node, attributes) {
+  const data = new graph.NodeDataClass(node, attributes);
+  graph._nodes.set(node, data);
+  graph.emit("nodeAdded", {
+    key: node,
+    attributes
+  });
+  return data;
+}
+function addEdge(graph, name, mustGenerateKey, undirected, edge, source, target, attributes) {
+  if (!undirected && graph.type === "undirected")
+    throw new UsageGraphError(
+      `Graph.${name}: you cannot add a directed edge to an undirected graph. Use the #.addEdge or #.addUndirectedEdge instead.`
+    );
+  if (undirected && graph.type === "directed")
+    throw new UsageGraphError(
+      `Graph.${name}: you cannot add an undirected edge to a directed graph. Use the #.addEdge or #.addDirectedEdge instead.`
+    );
+  if (attributes && !isPlainObject(attributes))
+    throw new InvalidArgumentsGraphError(
+      `Graph.${name}: invalid attributes. Expecting an object but got "${attributes}"`
+    );
+  source = "" + source;
+  target = "" + target;
+  attributes = attributes || {};
+  if (!graph.allowSelfLoops && source === target)
+    throw new UsageGraphError(
+      `Graph.${name}: source & target are the same ("${source}"), thus creating a loop explicitly forbidden by this graph 'allowSelfLoops' option set to false.`
+    );
+  const sourceData = graph._nodes.get(source), targetData = graph._nodes.get(target);
+  if (!sourceData)
+    throw new NotFoundGraphError(
+      `Graph.${name}: source node "${source}" not found.`
+    );
+  if (!targetData)
+    throw new NotFoundGraphError(
+      `Graph.${name}: target node "${target}" not found.`
+    );
+  const eventData = {
+    key: null,
+    undirected,
+    source,
+    target,
+    attributes
+  };
+  if (mustGenerateKey) {
+    edge = graph._edgeKeyGenerator();
+  } else {
+    edge = "" + edge;
+    if (graph._edges.has(edge))
+      throw new UsageGraphError(
+        `Graph.${name}: the "${edge}" edge already exists in the graph.`
+      );
+  }
+  if (!graph.multi && (undirected ? typeof sourceData.undirected[target] !== "undefined" : typeof sourceData.out[target] !== "undefined")) {
+    throw new UsageGraphError(
+      `Graph.${name}: an edge linking "${source}" to "${target}" already exists. If you really want to add multiple edges linking those nodes, you should create a multi graph by using the 'multi' option.`
+    );
+  }
+  const edgeData = new EdgeData(
+    undirected,
+    edge,
+    sourceData,
+    targetData,
+    attributes
+  );
+  graph._edges.set(edge, edgeData);
+  const isSelfLoop = source === target;
+  if (undirected) {
+    sourceData.undirectedDegree++;
+    targetData.undirectedDegree++;
+    if (isSelfLoop) {
+      sourceData.undirectedLoops++;
+      graph._undirectedSelfLoopCount++;
+    }
+  } else {
+    sourceData.outDegree++;
+    targetData.inDegree++;
+    if (isSelfLoop) {
+      sourceData.directedLoops++;
+      graph._directedSelfLoopCount++;
+    }
+  }
+  if (graph.multi) edgeData.attachMulti();
+  else edgeData.attach();
+  if (undirected) graph._undirectedSize++;
+  else graph._directedSize++;
+  eventData.key = edge;
+  graph.emit("edgeAdded", eventData);
+  return edge;
+}
+function mergeEdge(graph, name, mustGenerateKey, undirected, edge, source, target, attributes, asUpdater) {
+  if (!undirected && graph.type === "undirected")
+    throw new UsageGraphError(
+      `Graph.${name}: you cannot merge/update a directed edge to an undirected graph. Use the #.mergeEdge/#.updateEdge or #.addUndirectedEdge instead.`
+    );
+  if (undirected && graph.type === "directed")
+    throw new UsageGraphError(
+      `Graph.${name}: you cannot merge/update an undirected edge to a directed graph. Use the #.mergeEdge/#.updateEdge or #.addDirectedEdge instead.`
+    );
+  if (attributes) {
+    if (asUpdater) {
+      if (typeof attributes !== "function")
+        throw new InvalidArgumentsGraphError(
+          `Graph.${name}: invalid updater function. Expecting a function but got "${attributes}"`
+        );
+    } else {
+      if (!isPlainObject(attributes))
+        throw new InvalidArgumentsGraphError(
+          `Graph.${name}: invalid attributes. Expecting an object but got "${attributes}"`
+        );
+    }
+  }
+  source = "" + source;
+  target = "" + target;
+  let updater;
+  if (asUpdater) {
+    updater = attributes;
+    attributes = void 0;
+  }
+  if (!graph.allowSelfLoops && source === target)
+    throw new UsageGraphError(
+      `Graph.${name}: source & target are the same ("${source}"), thus creating a loop explicitly forbidden by this graph 'allowSelfLoops' option set to false.`
+    );
+  let sourceData = graph._nodes.get(source);
+  let targetData = graph._nodes.get(target);
+  let edgeData;
+  let alreadyExistingEdgeData;
+  if (!mustGenerateKey) {
+    edgeData = graph._edges.get(edge);
+    if (edgeData) {
+      if (edgeData.source.key !== source || edgeData.target.key !== target) {
+        if (!undirected || edgeData.source.key !== target || edgeData.target.key !== source) {
+          throw new UsageGraphError(
+            `Graph.${name}: inconsistency detected when attempting to merge the "${edge}" edge with "${source}" source & "${target}" target vs. ("${edgeData.source.key}", "${edgeData.target.key}").`
+          );
+        }
+      }
+      alreadyExistingEdgeData = edgeData;
+    }
+  }
+  if (!alreadyExistingEdgeData && !graph.multi && sourceData) {
+    alreadyExistingEdgeData = undirected ? sourceData.undirected[target] : sourceData.out[target];
+  }
+  if (alreadyExistingEdgeData) {
+    const info = [alreadyExistingEdgeData.key, false, false, false];
+    if (asUpdater ? !updater : !attributes) return info;
+    if (asUpdater) {
+      const oldAttributes = alreadyExistingEdgeData.attributes;
+      alreadyExistingEdgeData.attributes = updater(oldAttributes);
+      graph.emit("edgeAttributesUpdated", {
+        type: "replace",
+        key: alreadyExistingEdgeData.key,
+        attributes: alreadyExistingEdgeData.attributes
+      });
+    } else {
+      assign(alreadyExistingEdgeData.attributes, attributes);
+      graph.emit("edgeAttributesUpdated", {
+        type: "merge",
+        key: alreadyExistingEdgeData.key,
+        attributes: alreadyExistingEdgeData.attributes,
+        data: attributes
+      });
+    }
+    return info;
+  }
+  attributes = attributes || {};
+  if (asUpdater && updater) attributes = updater(attributes);
+  const eventData = {
+    key: null,
+    undirected,
+    source,
+    target,
+    attributes
+  };
+  if (mustGenerateKey) {
+    edge = graph._edgeKeyGenerator();
+  } else {
+    edge = "" + edge;
+    if (graph._edges.has(edge))
+      throw new UsageGraphError(
+        `Graph.${name}: the "${edge}" edge already exists in the graph.`
+      );
+  }
+  let sourceWasAdded = false;
+  let targetWasAdded = false;
+  if (!sourceData) {
+    sourceData = unsafeAddNode(graph, source, {});
+    sourceWasAdded = true;
+    if (source === target) {
+      targetData = sourceData;
+      targetWasAdded = true;
+    }
+  }
+  if (!targetData) {
+    targetData = unsafeAddNode(graph, target, {});
+    targetWasAdded = true;
+  }
+  edgeData = new EdgeData(undirected, edge, sourceData, targetData, attributes);
+  graph._edges.set(edge, edgeData);
+  const isSelfLoop = source === target;
+  if (undirected) {
+    sourceData.undirectedDegree++;
+    targetData.undirectedDegree++;
+    if (isSelfLoop) {
+      sourceData.undirectedLoops++;
+      graph._undirectedSelfLoopCount++;
+    }
+  } else {
+    sourceData.outDegree++;
+    targetData.inDegree++;
+    if (isSelfLoop) {
+      sourceData.directedLoops++;
+      graph._directedSelfLoopCount++;
+    }
+  }
+  if (graph.multi) edgeData.attachMulti();
+  else edgeData.attach();
+  if (undirected) graph._undirectedSize++;
+  else graph._directedSize++;
+  eventData.key = edge;
+  graph.emit("edgeAdded", eventData);
+  return [edge, true, sourceWasAdded, targetWasAdded];
+}
+function dropEdgeFromData(graph, edgeData) {
+  graph._edges.delete(edgeData.key);
+  const { source: sourceData, target: targetData, attributes } = edgeData;
+  const undirected = edgeData.undirected;
+  const isSelfLoop = sourceData === targetData;
+  if (undirected) {
+    sourceData.undirectedDegree--;
+    targetData.undirectedDegree--;
+    if (isSelfLoop) {
+      sourceData.undirectedLoops--;
+      graph._undirectedSelfLoopCount--;
+    }
+  } else {
+    sourceData.outDegree--;
+    targetData.inDegree--;
+    if (isSelfLoop) {
+      sourceData.directedLoops--;
+      graph._directedSelfLoopCount--;
+    }
+  }
+  if (graph.multi) edgeData.detachMulti();
+  else edgeData.detach();
+  if (undirected) graph._undirectedSize--;
+  else graph._directedSize--;
+  graph.emit("edgeDropped", {
+    key: edgeData.key,
+    attributes,
+    source: sourceData.key,
+    target: targetData.key,
+    undirected
+  });
+}
+function attachStaticFromMethod(Class) {
+  Class.from = function(data, options) {
+    const finalOptions = assign({}, data.options, options);
+    const instance = new Class(finalOptions);
+    instance.import(data);
+    return instance;
+  };
+}
+var assign, GraphError, InvalidArgumentsGraphError, NotFoundGraphError, UsageGraphError, NODE, SOURCE, TARGET, OPPOSITE, NODE_ATTRIBUTES_METHODS, EDGE_ATTRIBUTES_METHODS, EDGES_ITERATION, NEIGHBORS_ITERATION, INSTANCE_ID, TYPES, EMITTER_PROPS, EDGE_ADD_METHODS, DEFAULTS2, Graph, DirectedGraph, UndirectedGraph, MultiGraph, MultiDirectedGraph, MultiUndirectedGraph;
+var init_graphology = __esm({
+  "node_modules/graphology/dist/graphology.mjs"() {
+    assign = assignPolyfill;
+    if (typeof Object.assign === "function") assign = Object.assign;
+    GraphError = class extends Error {
+      constructor(message) {
+        super();
+        this.name = "GraphError";
+        this.message = message;
+      }
+    };
+    InvalidArgumentsGraphError = class _InvalidArgumentsGraphError extends GraphError {
+      constructor(message) {
+        super(message);
+        this.name = "InvalidArgumentsGraphError";
+        if (typeof Error.captureStackTrace === "function")
+          Error.captureStackTrace(
+            this,
+            _InvalidArgumentsGraphError.prototype.constructor
+          );
+      }
+    };
+    NotFoundGraphError = class _NotFoundGraphError extends GraphError {
+      constructor(message) {
+        super(message);
+        this.name = "NotFoundGraphError";
+        if (typeof Error.captureStackTrace === "function")
+          Error.captureStackTrace(this, _NotFoundGraphError.prototype.constructor);
+      }
+    };
+    UsageGraphError = class _UsageGraphError extends GraphError {
+      constructor(message) {
+        super(message);
+        this.name = "UsageGraphError";
+        if (typeof Error.captureStackTrace === "function")
+          Error.captureStackTrace(this, _UsageGraphError.prototype.constructor);
+      }
+    };
+    MixedNodeData.prototype.clear = function() {
+      this.inDegree = 0;
+      this.outDegree = 0;
+      this.undirectedDegree = 0;
+      this.undirectedLoops = 0;
+      this.directedLoops = 0;
+      this.in = {};
+      this.out = {};
+      this.undirected = {};
+    };
+    DirectedNodeData.prototype.clear = function() {
+      this.inDegree = 0;
+      this.outDegree = 0;
+      this.directedLoops = 0;
+      this.in = {};
+      this.out = {};
+    };
+    UndirectedNodeData.prototype.clear = function() {
+      this.undirectedDegree = 0;
+      this.undirectedLoops = 0;
+      this.undirected = {};
+    };
+    EdgeData.prototype.attach = function() {
+      let outKey = "out";
+      let inKey = "in";
+      if (this.undirected) outKey = inKey = "undirected";
+      const source = this.source.key;
+      const target = this.target.key;
+      this.source[outKey][target] = this;
+      if (this.undirected && source === target) return;
+      this.target[inKey][source] = this;
+    };
+    EdgeData.prototype.attachMulti = function() {
+      let outKey = "out";
+      let inKey = "in";
+      const source = this.source.key;
+      const target = this.target.key;
+      if (this.undirected) outKey = inKey = "undirected";
+      const adj = this.source[outKey];
+      const head = adj[target];
+      if (typeof head === "undefined") {
+        adj[target] = this;
+        if (!(this.undirected && source === target)) {
+          this.target[inKey][source] = this;
+        }
+        return;
+      }
+      head.previous = this;
+      this.next = head;
+      adj[target] = this;
+      this.target[inKey][source] = this;
+    };
+    EdgeData.prototype.detach = function() {
+      const source = this.source.key;
+      const target = this.target.key;
+      let outKey = "out";
+      let inKey = "in";
+      if (this.undirected) outKey = inKey = "undirected";
+      delete this.source[outKey][target];
+      delete this.target[inKey][source];
+    };
+    EdgeData.prototype.detachMulti = function() {
+      const source = this.source.key;
+      const target = this.target.key;
+      let outKey = "out";
+      let inKey = "in";
+      if (this.undirected) outKey = inKey = "undirected";
+      if (this.previous === void 0) {
+        if (this.next === void 0) {
+          delete this.source[outKey][target];
+          delete this.target[inKey][source];
+        } else {
+          this.next.previous = void 0;
+          this.source[outKey][target] = this.next;
+          this.target[inKey][source] = this.next;
+        }
+      } else {
+        this.previous.next = this.next;
+        if (this.next !== void 0) {
+          this.next.previous = this.previous;
+        }
+      }
+    };
+    NODE = 0;
+    SOURCE = 1;
+    TARGET = 2;
+    OPPOSITE = 3;
+    NODE_ATTRIBUTES_METHODS = [
+      {
+        name: (element) => `get${element}Attribute`,
+        attacher: attachNodeAttributeGetter
+      },
+      {
+        name: (element) => `get${element}Attributes`,
+        attacher: attachNodeAttributesGetter
+      },
+      {
+        name: (element) => `has${element}Attribute`,
+        attacher: attachNodeAttributeChecker
+      },
+      {
+        name: (element) => `set${element}Attribute`,
+        attacher: attachNodeAttributeSetter
+      },
+      {
+        name: (element) => `update${element}Attribute`,
+        attacher: attachNodeAttributeUpdater
+      },
+      {
+        name: (element) => `remove${element}Attribute`,
+        attacher: attachNodeAttributeRemover
+      },
+      {
+        name: (element) => `replace${element}Attributes`,
+        attacher: attachNodeAttributesReplacer
+      },
+      {
+        name: (element) => `merge${element}Attributes`,
+        attacher: attachNodeAttributesMerger
+      },
+      {
+        name: (element) => `update${element}Attributes`,
+        attacher: attachNodeAttributesUpdater
+      }
+    ];
+    EDGE_ATTRIBUTES_METHODS = [
+      {
+        name: (element) => `get${element}Attribute`,
+        attacher: attachEdgeAttributeGetter
+      },
+      {
+        name: (element) => `get${element}Attributes`,
+        attacher: attachEdgeAttributesGetter
+      },
+      {
+        name: (element) => `has${element}Attribute`,
+        attacher: attachEdgeAttributeChecker
+      },
+      {
+        name: (element) => `set${element}Attribute`,
+        attacher: attachEdgeAttributeSetter
+      },
+      {
+        name: (element) => `update${element}Attribute`,
+        attacher: attachEdgeAttributeUpdater
+      },
+      {
+        name: (element) => `remove${element}Attribute`,
+        attacher: attachEdgeAttributeRemover
+      },
+      {
+        name: (element) => `replace${element}Attributes`,
+        attacher: attachEdgeAttributesReplacer
+      },
+      {
+        name: (element) => `merge${element}Attributes`,
+        attacher: attachEdgeAttributesMerger
+      },
+      {
+        name: (element) => `update${element}Attributes`,
+        attacher: attachEdgeAttributesUpdater
+      }
+    ];
+    EDGES_ITERATION = [
+      {
+        name: "edges",
+        type: "mixed"
+      },
+      {
+        name: "inEdges",
+        type: "directed",
+        direction: "in"
+      },
+      {
+        name: "outEdges",
+        type: "directed",
+        direction: "out"
+      },
+      {
+        name: "inboundEdges",
+        type: "mixed",
+        direction: "in"
+      },
+      {
+        name: "outboundEdges",
+        type: "mixed",
+        direction: "out"
+      },
+      {
+        name: "directedEdges",
+        type: "directed"
+      },
+      {
+        name: "undirectedEdges",
+        type: "undirected"
+      }
+    ];
+    NEIGHBORS_ITERATION = [
+      {
+        name: "neighbors",
+        type: "mixed"
+      },
+      {
+        name: "inNeighbors",
+        type: "directed",
+        direction: "in"
+      },
+      {
+        name: "outNeighbors",
+        type: "directed",
+        direction: "out"
+      },
+      {
+        name: "inboundNeighbors",
+        type: "mixed",
+        direction: "in"
+      },
+      {
+        name: "outboundNeighbors",
+        type: "mixed",
+        direction: "out"
+      },
+      {
+        name: "directedNeighbors",
+        type: "directed"
+      },
+      {
+        name: "undirectedNeighbors",
+        type: "undirected"
+      }
+    ];
+    CompositeSetWrapper.prototype.wrap = function(set) {
+      if (this.A === null) this.A = set;
+      else if (this.B === null) this.B = set;
+    };
+    CompositeSetWrapper.prototype.has = function(key) {
+      if (this.A !== null && key in this.A) return true;
+      if (this.B !== null && key in this.B) return true;
+      return false;
+    };
+    INSTANCE_ID = incrementalIdStartingFromRandomByte();
+    TYPES = /* @__PURE__ */ new Set(["directed", "undirected", "mixed"]);
+    EMITTER_PROPS = /* @__PURE__ */ new Set([
+      "domain",
+      "_events",
+      "_eventsCount",
+      "_maxListeners"
+    ]);
+    EDGE_ADD_METHODS = [
+      {
+        name: (verb) => `${verb}Edge`,
+        generateKey: true
+      },
+      {
+        name: (verb) => `${verb}DirectedEdge`,
+        generateKey: true,
+        type: "directed"
+      },
+      {
+        name: (verb) => `${verb}UndirectedEdge`,
+        generateKey: true,
+        type: "undirected"
+      },
+      {
+        name: (verb) => `${verb}EdgeWithKey`
+      },
+      {
+        name: (verb) => `${verb}DirectedEdgeWithKey`,
+        type: "directed"
+      },
+      {
+        name: (verb) => `${verb}UndirectedEdgeWithKey`,
+        type: "undirected"
+      }
+    ];
+    DEFAULTS2 = {
+      allowSelfLoops: true,
+      multi: false,
+      type: "mixed"
+    };
+    Graph = class _Graph extends EventEmitter {
+      constructor(options) {
+        super();
+        options = assign({}, DEFAULTS2, options);
+        if (typeof options.multi !== "boolean")
+          throw new InvalidArgumentsGraphError(
+            `Graph.constructor: invalid 'multi' option. Expecting a boolean but got "${options.multi}".`
+          );
+        if (!TYPES.has(options.type))
+          throw new InvalidArgumentsGraphError(
+            `Graph.constructor: invalid 'type' option. Should be one of "mixed", "directed" or "undirected" but got "${options.type}".`
+          );
+        if (typeof options.allowSelfLoops !== "boolean")
+          throw new InvalidArgumentsGraphError(
+            `Graph.constructor: invalid 'allowSelfLoops' option. Expecting a boolean but got "${options.allowSelfLoops}".`
+          );
+        const NodeDataClass = options.type === "mixed" ? MixedNodeData : options.type === "directed" ? DirectedNodeData : UndirectedNodeData;
+        privateProperty(this, "NodeDataClass", NodeDataClass);
+        const instancePrefix = "geid_" + INSTANCE_ID() + "_";
+        let edgeId = 0;
+        const edgeKeyGenerator = () => {
+          let availableEdgeKey;
+          do {
+            availableEdgeKey = instancePrefix + edgeId++;
+          } while (this._edges.has(availableEdgeKey));
+          return availableEdgeKey;
+        };
+        privateProperty(this, "_attributes", {});
+        privateProperty(this, "_nodes", /* @__PURE__ */ new Map());
+        privateProperty(this, "_edges", /* @__PURE__ */ new Map());
+        privateProperty(this, "_directedSize", 0);
+        privateProperty(this, "_undirectedSize", 0);
+        privateProperty(this, "_directedSelfLoopCount", 0);
+        privateProperty(this, "_undirectedSelfLoopCount", 0);
+        privateProperty(this, "_edgeKeyGenerator", edgeKeyGenerator);
+        privateProperty(this, "_options", options);
+        EMITTER_PROPS.forEach((prop) => privateProperty(this, prop, this[prop]));
+        readOnlyProperty(this, "order", () => this._nodes.size);
+        readOnlyProperty(this, "size", () => this._edges.size);
+        readOnlyProperty(this, "directedSize", () => this._directedSize);
+        readOnlyProperty(this, "undirectedSize", () => this._undirectedSize);
+        readOnlyProperty(
+          this,
+          "selfLoopCount",
+          () => this._directedSelfLoopCount + this._undirectedSelfLoopCount
+        );
+        readOnlyProperty(
+          this,
+          "directedSelfLoopCount",
+          () => this._directedSelfLoopCount
+        );
+        readOnlyProperty(
+          this,
+          "undirectedSelfLoopCount",
+          () => this._undirectedSelfLoopCount
+        );
+        readOnlyProperty(this, "multi", this._options.multi);
+        readOnlyProperty(this, "type", this._options.type);
+        readOnlyProperty(this, "allowSelfLoops", this._options.allowSelfLoops);
+        readOnlyProperty(this, "implementation", () => "graphology");
+      }
+      _resetInstanceCounters() {
+        this._directedSize = 0;
+        this._undirectedSize = 0;
+        this._directedSelfLoopCount = 0;
+        this._undirectedSelfLoopCount = 0;
+      }
+      /**---------------------------------------------------------------------------
+       * Read
+       **---------------------------------------------------------------------------
+       */
+      /**
+       * Method returning whether the given node is found in the graph.
+       *
+       * @param  {any}     node - The node.
+       * @return {boolean}
+       */
+      hasNode(node) {
+        return this._nodes.has("" + node);
+      }
+      /**
+       * Method returning whether the given directed edge is found in the graph.
+       *
+       * Arity 1:
+       * @param  {any}     edge - The edge's key.
+       *
+       * Arity 2:
+       * @param  {any}     source - The edge's source.
+       * @param  {any}     target - The edge's target.
+       *
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the arguments are invalid.
+       */
+      hasDirectedEdge(source, target) {
+        if (this.type === "undirected") return false;
+        if (arguments.length === 1) {
+          const edge = "" + source;
+          const edgeData = this._edges.get(edge);
+          return !!edgeData && !edgeData.undirected;
+        } else if (arguments.length === 2) {
+          source = "" + source;
+          target = "" + target;
+          const nodeData = this._nodes.get(source);
+          if (!nodeData) return false;
+          return nodeData.out.hasOwnProperty(target);
+        }
+        throw new InvalidArgumentsGraphError(
+          `Graph.hasDirectedEdge: invalid arity (${arguments.length}, instead of 1 or 2). You can either ask for an edge id or for the existence of an edge between a source & a target.`
+        );
+      }
+      /**
+       * Method returning whether the given undirected edge is found in the graph.
+       *
+       * Arity 1:
+       * @param  {any}     edge - The edge's key.
+       *
+       * Arity 2:
+       * @param  {any}     source - The edge's source.
+       * @param  {any}     target - The edge's target.
+       *
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the arguments are invalid.
+       */
+      hasUndirectedEdge(source, target) {
+        if (this.type === "directed") return false;
+        if (arguments.length === 1) {
+          const edge = "" + source;
+          const edgeData = this._edges.get(edge);
+          return !!edgeData && edgeData.undirected;
+        } else if (arguments.length === 2) {
+          source = "" + source;
+          target = "" + target;
+          const nodeData = this._nodes.get(source);
+          if (!nodeData) return false;
+          return nodeData.undirected.hasOwnProperty(target);
+        }
+        throw new InvalidArgumentsGraphError(
+          `Graph.hasDirectedEdge: invalid arity (${arguments.length}, instead of 1 or 2). You can either ask for an edge id or for the existence of an edge between a source & a target.`
+        );
+      }
+      /**
+       * Method returning whether the given edge is found in the graph.
+       *
+       * Arity 1:
+       * @param  {any}     edge - The edge's key.
+       *
+       * Arity 2:
+       * @param  {any}     source - The edge's source.
+       * @param  {any}     target - The edge's target.
+       *
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the arguments are invalid.
+       */
+      hasEdge(source, target) {
+        if (arguments.length === 1) {
+          const edge = "" + source;
+          return this._edges.has(edge);
+        } else if (arguments.length === 2) {
+          source = "" + source;
+          target = "" + target;
+          const nodeData = this._nodes.get(source);
+          if (!nodeData) return false;
+          return typeof nodeData.out !== "undefined" && nodeData.out.hasOwnProperty(target) || typeof nodeData.undirected !== "undefined" && nodeData.undirected.hasOwnProperty(target);
+        }
+        throw new InvalidArgumentsGraphError(
+          `Graph.hasEdge: invalid arity (${arguments.length}, instead of 1 or 2). You can either ask for an edge id or for the existence of an edge between a source & a target.`
+        );
+      }
+      /**
+       * Method returning the edge matching source & target in a directed fashion.
+       *
+       * @param  {any} source - The edge's source.
+       * @param  {any} target - The edge's target.
+       *
+       * @return {any|undefined}
+       *
+       * @throws {Error} - Will throw if the graph is multi.
+       * @throws {Error} - Will throw if source or target doesn't exist.
+       */
+      directedEdge(source, target) {
+        if (this.type === "undirected") return;
+        source = "" + source;
+        target = "" + target;
+        if (this.multi)
+          throw new UsageGraphError(
+            "Graph.directedEdge: this method is irrelevant with multigraphs since there might be multiple edges between source & target. See #.directedEdges instead."
+          );
+        const sourceData = this._nodes.get(source);
+        if (!sourceData)
+          throw new NotFoundGraphError(
+            `Graph.directedEdge: could not find the "${source}" source node in the graph.`
+          );
+        if (!this._nodes.has(target))
+          throw new NotFoundGraphError(
+            `Graph.directedEdge: could not find the "${target}" target node in the graph.`
+          );
+        const edgeData = sourceData.out && sourceData.out[target] || void 0;
+        if (edgeData) return edgeData.key;
+      }
+      /**
+       * Method returning the edge matching source & target in a undirected fashion.
+       *
+       * @param  {any} source - The edge's source.
+       * @param  {any} target - The edge's target.
+       *
+       * @return {any|undefined}
+       *
+       * @throws {Error} - Will throw if the graph is multi.
+       * @throws {Error} - Will throw if source or target doesn't exist.
+       */
+      undirectedEdge(source, target) {
+        if (this.type === "directed") return;
+        source = "" + source;
+        target = "" + target;
+        if (this.multi)
+          throw new UsageGraphError(
+            "Graph.undirectedEdge: this method is irrelevant with multigraphs since there might be multiple edges between source & target. See #.undirectedEdges instead."
+          );
+        const sourceData = this._nodes.get(source);
+        if (!sourceData)
+          throw new NotFoundGraphError(
+            `Graph.undirectedEdge: could not find the "${source}" source node in the graph.`
+          );
+        if (!this._nodes.has(target))
+          throw new NotFoundGraphError(
+            `Graph.undirectedEdge: could not find the "${target}" target node in the graph.`
+          );
+        const edgeData = sourceData.undirected && sourceData.undirected[target] || void 0;
+        if (edgeData) return edgeData.key;
+      }
+      /**
+       * Method returning the edge matching source & target in a mixed fashion.
+       *
+       * @param  {any} source - The edge's source.
+       * @param  {any} target - The edge's target.
+       *
+       * @return {any|undefined}
+       *
+       * @throws {Error} - Will throw if the graph is multi.
+       * @throws {Error} - Will throw if source or target doesn't exist.
+       */
+      edge(source, target) {
+        if (this.multi)
+          throw new UsageGraphError(
+            "Graph.edge: this method is irrelevant with multigraphs since there might be multiple edges between source & target. See #.edges instead."
+          );
+        source = "" + source;
+        target = "" + target;
+        const sourceData = this._nodes.get(source);
+        if (!sourceData)
+          throw new NotFoundGraphError(
+            `Graph.edge: could not find the "${source}" source node in the graph.`
+          );
+        if (!this._nodes.has(target))
+          throw new NotFoundGraphError(
+            `Graph.edge: could not find the "${target}" target node in the graph.`
+          );
+        const edgeData = sourceData.out && sourceData.out[target] || sourceData.undirected && sourceData.undirected[target] || void 0;
+        if (edgeData) return edgeData.key;
+      }
+      /**
+       * Method returning whether two nodes are directed neighbors.
+       *
+       * @param  {any}     node     - The node's key.
+       * @param  {any}     neighbor - The neighbor's key.
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      areDirectedNeighbors(node, neighbor) {
+        node = "" + node;
+        neighbor = "" + neighbor;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.areDirectedNeighbors: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "undirected") return false;
+        return neighbor in nodeData.in || neighbor in nodeData.out;
+      }
+      /**
+       * Method returning whether two nodes are out neighbors.
+       *
+       * @param  {any}     node     - The node's key.
+       * @param  {any}     neighbor - The neighbor's key.
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      areOutNeighbors(node, neighbor) {
+        node = "" + node;
+        neighbor = "" + neighbor;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.areOutNeighbors: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "undirected") return false;
+        return neighbor in nodeData.out;
+      }
+      /**
+       * Method returning whether two nodes are in neighbors.
+       *
+       * @param  {any}     node     - The node's key.
+       * @param  {any}     neighbor - The neighbor's key.
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      areInNeighbors(node, neighbor) {
+        node = "" + node;
+        neighbor = "" + neighbor;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.areInNeighbors: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "undirected") return false;
+        return neighbor in nodeData.in;
+      }
+      /**
+       * Method returning whether two nodes are undirected neighbors.
+       *
+       * @param  {any}     node     - The node's key.
+       * @param  {any}     neighbor - The neighbor's key.
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      areUndirectedNeighbors(node, neighbor) {
+        node = "" + node;
+        neighbor = "" + neighbor;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.areUndirectedNeighbors: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "directed") return false;
+        return neighbor in nodeData.undirected;
+      }
+      /**
+       * Method returning whether two nodes are neighbors.
+       *
+       * @param  {any}     node     - The node's key.
+       * @param  {any}     neighbor - The neighbor's key.
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      areNeighbors(node, neighbor) {
+        node = "" + node;
+        neighbor = "" + neighbor;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.areNeighbors: could not find the "${node}" node in the graph.`
+          );
+        if (this.type !== "undirected") {
+          if (neighbor in nodeData.in || neighbor in nodeData.out) return true;
+        }
+        if (this.type !== "directed") {
+          if (neighbor in nodeData.undirected) return true;
+        }
+        return false;
+      }
+      /**
+       * Method returning whether two nodes are inbound neighbors.
+       *
+       * @param  {any}     node     - The node's key.
+       * @param  {any}     neighbor - The neighbor's key.
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      areInboundNeighbors(node, neighbor) {
+        node = "" + node;
+        neighbor = "" + neighbor;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.areInboundNeighbors: could not find the "${node}" node in the graph.`
+          );
+        if (this.type !== "undirected") {
+          if (neighbor in nodeData.in) return true;
+        }
+        if (this.type !== "directed") {
+          if (neighbor in nodeData.undirected) return true;
+        }
+        return false;
+      }
+      /**
+       * Method returning whether two nodes are outbound neighbors.
+       *
+       * @param  {any}     node     - The node's key.
+       * @param  {any}     neighbor - The neighbor's key.
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      areOutboundNeighbors(node, neighbor) {
+        node = "" + node;
+        neighbor = "" + neighbor;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.areOutboundNeighbors: could not find the "${node}" node in the graph.`
+          );
+        if (this.type !== "undirected") {
+          if (neighbor in nodeData.out) return true;
+        }
+        if (this.type !== "directed") {
+          if (neighbor in nodeData.undirected) return true;
+        }
+        return false;
+      }
+      /**
+       * Method returning the given node's in degree.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's in degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      inDegree(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.inDegree: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "undirected") return 0;
+        return nodeData.inDegree;
+      }
+      /**
+       * Method returning the given node's out degree.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's in degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      outDegree(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.outDegree: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "undirected") return 0;
+        return nodeData.outDegree;
+      }
+      /**
+       * Method returning the given node's directed degree.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's in degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      directedDegree(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.directedDegree: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "undirected") return 0;
+        return nodeData.inDegree + nodeData.outDegree;
+      }
+      /**
+       * Method returning the given node's undirected degree.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's in degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      undirectedDegree(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.undirectedDegree: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "directed") return 0;
+        return nodeData.undirectedDegree;
+      }
+      /**
+       * Method returning the given node's inbound degree.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's inbound degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      inboundDegree(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.inboundDegree: could not find the "${node}" node in the graph.`
+          );
+        let degree2 = 0;
+        if (this.type !== "directed") {
+          degree2 += nodeData.undirectedDegree;
+        }
+        if (this.type !== "undirected") {
+          degree2 += nodeData.inDegree;
+        }
+        return degree2;
+      }
+      /**
+       * Method returning the given node's outbound degree.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's outbound degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      outboundDegree(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.outboundDegree: could not find the "${node}" node in the graph.`
+          );
+        let degree2 = 0;
+        if (this.type !== "directed") {
+          degree2 += nodeData.undirectedDegree;
+        }
+        if (this.type !== "undirected") {
+          degree2 += nodeData.outDegree;
+        }
+        return degree2;
+      }
+      /**
+       * Method returning the given node's directed degree.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      degree(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.degree: could not find the "${node}" node in the graph.`
+          );
+        let degree2 = 0;
+        if (this.type !== "directed") {
+          degree2 += nodeData.undirectedDegree;
+        }
+        if (this.type !== "undirected") {
+          degree2 += nodeData.inDegree + nodeData.outDegree;
+        }
+        return degree2;
+      }
+      /**
+       * Method returning the given node's in degree without considering self loops.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's in degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      inDegreeWithoutSelfLoops(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.inDegreeWithoutSelfLoops: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "undirected") return 0;
+        return nodeData.inDegree - nodeData.directedLoops;
+      }
+      /**
+       * Method returning the given node's out degree without considering self loops.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's in degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      outDegreeWithoutSelfLoops(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.outDegreeWithoutSelfLoops: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "undirected") return 0;
+        return nodeData.outDegree - nodeData.directedLoops;
+      }
+      /**
+       * Method returning the given node's directed degree without considering self loops.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's in degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      directedDegreeWithoutSelfLoops(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.directedDegreeWithoutSelfLoops: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "undirected") return 0;
+        return nodeData.inDegree + nodeData.outDegree - nodeData.directedLoops * 2;
+      }
+      /**
+       * Method returning the given node's undirected degree without considering self loops.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's in degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      undirectedDegreeWithoutSelfLoops(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.undirectedDegreeWithoutSelfLoops: could not find the "${node}" node in the graph.`
+          );
+        if (this.type === "directed") return 0;
+        return nodeData.undirectedDegree - nodeData.undirectedLoops * 2;
+      }
+      /**
+       * Method returning the given node's inbound degree without considering self loops.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's inbound degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      inboundDegreeWithoutSelfLoops(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.inboundDegreeWithoutSelfLoops: could not find the "${node}" node in the graph.`
+          );
+        let degree2 = 0;
+        let loops = 0;
+        if (this.type !== "directed") {
+          degree2 += nodeData.undirectedDegree;
+          loops += nodeData.undirectedLoops * 2;
+        }
+        if (this.type !== "undirected") {
+          degree2 += nodeData.inDegree;
+          loops += nodeData.directedLoops;
+        }
+        return degree2 - loops;
+      }
+      /**
+       * Method returning the given node's outbound degree without considering self loops.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's outbound degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      outboundDegreeWithoutSelfLoops(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.outboundDegreeWithoutSelfLoops: could not find the "${node}" node in the graph.`
+          );
+        let degree2 = 0;
+        let loops = 0;
+        if (this.type !== "directed") {
+          degree2 += nodeData.undirectedDegree;
+          loops += nodeData.undirectedLoops * 2;
+        }
+        if (this.type !== "undirected") {
+          degree2 += nodeData.outDegree;
+          loops += nodeData.directedLoops;
+        }
+        return degree2 - loops;
+      }
+      /**
+       * Method returning the given node's directed degree without considering self loops.
+       *
+       * @param  {any}     node - The node's key.
+       * @return {number}       - The node's degree.
+       *
+       * @throws {Error} - Will throw if the node isn't in the graph.
+       */
+      degreeWithoutSelfLoops(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.degreeWithoutSelfLoops: could not find the "${node}" node in the graph.`
+          );
+        let degree2 = 0;
+        let loops = 0;
+        if (this.type !== "directed") {
+          degree2 += nodeData.undirectedDegree;
+          loops += nodeData.undirectedLoops * 2;
+        }
+        if (this.type !== "undirected") {
+          degree2 += nodeData.inDegree + nodeData.outDegree;
+          loops += nodeData.directedLoops * 2;
+        }
+        return degree2 - loops;
+      }
+      /**
+       * Method returning the given edge's source.
+       *
+       * @param  {any} edge - The edge's key.
+       * @return {any}      - The edge's source.
+       *
+       * @throws {Error} - Will throw if the edge isn't in the graph.
+       */
+      source(edge) {
+        edge = "" + edge;
+        const data = this._edges.get(edge);
+        if (!data)
+          throw new NotFoundGraphError(
+            `Graph.source: could not find the "${edge}" edge in the graph.`
+          );
+        return data.source.key;
+      }
+      /**
+       * Method returning the given edge's target.
+       *
+       * @param  {any} edge - The edge's key.
+       * @return {any}      - The edge's target.
+       *
+       * @throws {Error} - Will throw if the edge isn't in the graph.
+       */
+      target(edge) {
+        edge = "" + edge;
+        const data = this._edges.get(edge);
+        if (!data)
+          throw new NotFoundGraphError(
+            `Graph.target: could not find the "${edge}" edge in the graph.`
+          );
+        return data.target.key;
+      }
+      /**
+       * Method returning the given edge's extremities.
+       *
+       * @param  {any}   edge - The edge's key.
+       * @return {array}      - The edge's extremities.
+       *
+       * @throws {Error} - Will throw if the edge isn't in the graph.
+       */
+      extremities(edge) {
+        edge = "" + edge;
+        const edgeData = this._edges.get(edge);
+        if (!edgeData)
+          throw new NotFoundGraphError(
+            `Graph.extremities: could not find the "${edge}" edge in the graph.`
+          );
+        return [edgeData.source.key, edgeData.target.key];
+      }
+      /**
+       * Given a node & an edge, returns the other extremity of the edge.
+       *
+       * @param  {any}   node - The node's key.
+       * @param  {any}   edge - The edge's key.
+       * @return {any}        - The related node.
+       *
+       * @throws {Error} - Will throw if the edge isn't in the graph or if the
+       *                   edge & node are not related.
+       */
+      opposite(node, edge) {
+        node = "" + node;
+        edge = "" + edge;
+        const data = this._edges.get(edge);
+        if (!data)
+          throw new NotFoundGraphError(
+            `Graph.opposite: could not find the "${edge}" edge in the graph.`
+          );
+        const source = data.source.key;
+        const target = data.target.key;
+        if (node === source) return target;
+        if (node === target) return source;
+        throw new NotFoundGraphError(
+          `Graph.opposite: the "${node}" node is not attached to the "${edge}" edge (${source}, ${target}).`
+        );
+      }
+      /**
+       * Returns whether the given edge has the given node as extremity.
+       *
+       * @param  {any}     edge - The edge's key.
+       * @param  {any}     node - The node's key.
+       * @return {boolean}      - The related node.
+       *
+       * @throws {Error} - Will throw if either the node or the edge isn't in the graph.
+       */
+      hasExtremity(edge, node) {
+        edge = "" + edge;
+        node = "" + node;
+        const data = this._edges.get(edge);
+        if (!data)
+          throw new NotFoundGraphError(
+            `Graph.hasExtremity: could not find the "${edge}" edge in the graph.`
+          );
+        return data.source.key === node || data.target.key === node;
+      }
+      /**
+       * Method returning whether the given edge is undirected.
+       *
+       * @param  {any}     edge - The edge's key.
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the edge isn't in the graph.
+       */
+      isUndirected(edge) {
+        edge = "" + edge;
+        const data = this._edges.get(edge);
+        if (!data)
+          throw new NotFoundGraphError(
+            `Graph.isUndirected: could not find the "${edge}" edge in the graph.`
+          );
+        return data.undirected;
+      }
+      /**
+       * Method returning whether the given edge is directed.
+       *
+       * @param  {any}     edge - The edge's key.
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the edge isn't in the graph.
+       */
+      isDirected(edge) {
+        edge = "" + edge;
+        const data = this._edges.get(edge);
+        if (!data)
+          throw new NotFoundGraphError(
+            `Graph.isDirected: could not find the "${edge}" edge in the graph.`
+          );
+        return !data.undirected;
+      }
+      /**
+       * Method returning whether the given edge is a self loop.
+       *
+       * @param  {any}     edge - The edge's key.
+       * @return {boolean}
+       *
+       * @throws {Error} - Will throw if the edge isn't in the graph.
+       */
+      isSelfLoop(edge) {
+        edge = "" + edge;
+        const data = this._edges.get(edge);
+        if (!data)
+          throw new NotFoundGraphError(
+            `Graph.isSelfLoop: could not find the "${edge}" edge in the graph.`
+          );
+        return data.source === data.target;
+      }
+      /**---------------------------------------------------------------------------
+       * Mutation
+       **---------------------------------------------------------------------------
+       */
+      /**
+       * Method used to add a node to the graph.
+       *
+       * @param  {any}    node         - The node.
+       * @param  {object} [attributes] - Optional attributes.
+       * @return {any}                 - The node.
+       *
+       * @throws {Error} - Will throw if the given node already exist.
+       * @throws {Error} - Will throw if the given attributes are not an object.
+       */
+      addNode(node, attributes) {
+        const nodeData = addNode(this, node, attributes);
+        return nodeData.key;
+      }
+      /**
+       * Method used to merge a node into the graph.
+       *
+       * @param  {any}    node         - The node.
+       * @param  {object} [attributes] - Optional attributes.
+       * @return {any}                 - The node.
+       */
+      mergeNode(node, attributes) {
+        if (attributes && !isPlainObject(attributes))
+          throw new InvalidArgumentsGraphError(
+            `Graph.mergeNode: invalid attributes. Expecting an object but got "${attributes}"`
+          );
+        node = "" + node;
+        attributes = attributes || {};
+        let data = this._nodes.get(node);
+        if (data) {
+          if (attributes) {
+            assign(data.attributes, attributes);
+            this.emit("nodeAttributesUpdated", {
+              type: "merge",
+              key: node,
+              attributes: data.attributes,
+              data: attributes
+            });
+          }
+          return [node, false];
+        }
+        data = new this.NodeDataClass(node, attributes);
+        this._nodes.set(node, data);
+        this.emit("nodeAdded", {
+          key: node,
+          attributes
+        });
+        return [node, true];
+      }
+      /**
+       * Method used to add a node if it does not exist in the graph or else to
+       * update its attributes using a function.
+       *
+       * @param  {any}      node      - The node.
+       * @param  {function} [updater] - Optional updater function.
+       * @return {any}                - The node.
+       */
+      updateNode(node, updater) {
+        if (updater && typeof updater !== "function")
+          throw new InvalidArgumentsGraphError(
+            `Graph.updateNode: invalid updater function. Expecting a function but got "${updater}"`
+          );
+        node = "" + node;
+        let data = this._nodes.get(node);
+        if (data) {
+          if (updater) {
+            const oldAttributes = data.attributes;
+            data.attributes = updater(oldAttributes);
+            this.emit("nodeAttributesUpdated", {
+              type: "replace",
+              key: node,
+              attributes: data.attributes
+            });
+          }
+          return [node, false];
+        }
+        const attributes = updater ? updater({}) : {};
+        data = new this.NodeDataClass(node, attributes);
+        this._nodes.set(node, data);
+        this.emit("nodeAdded", {
+          key: node,
+          attributes
+        });
+        return [node, true];
+      }
+      /**
+       * Method used to drop a single node & all its attached edges from the graph.
+       *
+       * @param  {any}    node - The node.
+       * @return {Graph}
+       *
+       * @throws {Error} - Will throw if the node doesn't exist.
+       */
+      dropNode(node) {
+        node = "" + node;
+        const nodeData = this._nodes.get(node);
+        if (!nodeData)
+          throw new NotFoundGraphError(
+            `Graph.dropNode: could not find the "${node}" node in the graph.`
+          );
+        let edgeData;
+        if (this.type !== "undirected") {
+          for (const neighbor in nodeData.out) {
+            edgeData = nodeData.out[neighbor];
+            do {
+              dropEdgeFromData(this, edgeData);
+              edgeData = edgeData.next;
+            } while (edgeData);
+          }
+          for (const neighbor in nodeData.in) {
+            edgeData = nodeData.in[neighbor];
+            do {
+              dropEdgeFromData(this, edgeData);
+              edgeData = edgeData.next;
+            } while (edgeData);
+          }
+        }
+        if (this.type !== "directed") {
+          for (const neighbor in nodeData.undirected) {
+            edgeData = nodeData.undirected[neighbor];
+            do {
+              dropEdgeFromData(this, edgeData);
+              edgeData = edgeData.next;
+            } while (edgeData);
+          }
+        }
+        this._nodes.delete(node);
+        this.emit("nodeDropped", {
+          key: node,
+          attributes: nodeData.attributes
+        });
+      }
+      /**
+       * Method used to drop a single edge from the graph.
+       *
+       * Arity 1:
+       * @param  {any}    edge - The edge.
+       *
+       * Arity 2:
+       * @param  {any}    source - Source node.
+       * @param  {any}    target - Target node.
+       *
+       * @return {Graph}
+       *
+       * @throws {Error} - Will throw if the edge doesn't exist.
+       */
+      dropEdge(edge) {
+        let edgeData;
+        if (arguments.length > 1) {
+          const source = "" + arguments[0];
+          const target = "" + arguments[1];
+          edgeData = getMatchingEdge(this, source, target, this.type);
+          if (!edgeData)
+            throw new NotFoundGraphError(
+              `Graph.dropEdge: could not find the "${source}" -> "${target}" edge in the graph.`
+            );
+        } else {
+          edge = "" + edge;
+          edgeData = this._edges.get(edge);
+          if (!edgeData)
+            throw new NotFoundGraphError(
+              `Graph.dropEdge: could not find the "${edge}" edge in the graph.`
+            );
+        }
+        dropEdgeFromData(this, edgeData);
+        return this;
+      }
+      /**
+       * Method used to drop a single directed edge from the graph.
+       *
+       * @param  {any}    source - Source node.
+       * @param  {any}    target - Target node.
+       *
+       * @return {Graph}
+       *
+       * @throws {Error} - Will throw if the edge doesn't exist.
+       */
+      dropDirectedEdge(source, target) {
+        if (arguments.length < 2)
+          throw new UsageGraphError(
+            "Graph.dropDirectedEdge: it does not make sense to try and drop a directed edge by key. What if the edge with this key is undirected? Use #.dropEdge for this purpose instead."
+          );
+        if (this.multi)
+          throw new UsageGraphError(
+            "Graph.dropDirectedEdge: cannot use a {source,target} combo when dropping an edge in a MultiGraph since we cannot infer the one you want to delete as there could be multiple ones."
+          );
+        source = "" + source;
+        target = "" + target;
+        const edgeData = getMatchingEdge(this, source, target, "directed");
+        if (!edgeData)
+          throw new NotFoundGraphError(
+            `Graph.dropDirectedEdge: could not find a "${source}" -> "${target}" edge in the graph.`
+          );
+        dropEdgeFromData(this, edgeData);
+        return this;
+      }
+      /**
+       * Method used to drop a single undirected edge from the graph.
+       *
+       * @param  {any}    source - Source node.
+       * @param  {any}    target - Target node.
+       *
+       * @return {Graph}
+       *
+       * @throws {Error} - Will throw if the edge doesn't exist.
+       */
+      dropUndirectedEdge(source, target) {
+        if (arguments.length < 2)
+          throw new UsageGraphError(
+            "Graph.dropUndirectedEdge: it does not make sense to drop a directed edge by key. What if the edge with this key is undirected? Use #.dropEdge for this purpose instead."
+          );
+        if (this.multi)
+          throw new UsageGraphError(
+            "Graph.dropUndirectedEdge: cannot use a {source,target} combo when dropping an edge in a MultiGraph since we cannot infer the one you want to delete as there could be multiple ones."
+          );
+        const edgeData = getMatchingEdge(this, source, target, "undirected");
+        if (!edgeData)
+          throw new NotFoundGraphError(
+            `Graph.dropUndirectedEdge: could not find a "${source}" -> "${target}" edge in the graph.`
+          );
+        dropEdgeFromData(this, edgeData);
+        return this;
+      }
+      /**
+       * Method used to remove every edge & every node from the graph.
+       *
+       * @return {Graph}
+       */
+      clear() {
+        this._edges.clear();
+        this._nodes.clear();
+        this._resetInstanceCounters();
+        this.emit("cleared");
+      }
+      /**
+       * Method used to remove every edge from the graph.
+       *
+       * @return {Graph}
+       */
+      clearEdges() {
+        const iterator = this._nodes.values();
+        let step;
+        while (step = iterator.next(), step.done !== true) {
+          step.value.clear();
+        }
+        this._edges.clear();
+        this._resetInstanceCounters();
+        this.emit("edgesCleared");
+      }
+      /**---------------------------------------------------------------------------
+       * Attributes-related methods
+       **---------------------------------------------------------------------------
+       */
+      /**
+       * Method returning the desired graph's attribute.
+       *
+       * @param  {string} name - Name of the attribute.
+       * @return {any}
+       */
+      getAttribute(name) {
+        return this._attributes[name];
+      }
+      /**
+       * Method returning the graph's attributes.
+       *
+       * @return {object}
+       */
+      getAttributes() {
+        return this._attributes;
+      }
+      /**
+       * Method returning whether the graph has the desired attribute.
+       *
+       * @param  {string}  name - Name of the attribute.
+       * @return {boolean}
+       */
+      hasAttribute(name) {
+        return this._attributes.hasOwnProperty(name);
+      }
+      /**
+       * Method setting a value for the desired graph's attribute.
+       *
+       * @param  {string}  name  - Name of the attribute.
+       * @param  {any}     value - Value for the attribute.
+       * @return {Graph}
+       */
+      setAttribute(name, value2) {
+        this._attributes[name] = value2;
+        this.emit("attributesUpdated", {
+          type: "set",
+          attributes: this._attributes,
+          name
+        });
+        return this;
+      }
+      /**
+       * Method using a function to update the desired graph's attribute's value.
+       *
+       * @param  {string}   name    - Name of the attribute.
+       * @param  {function} updater - Function use to update the attribute's value.
+       * @return {Graph}
+       */
+      updateAttribute(name, updater) {
+        if (typeof updater !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.updateAttribute: updater should be a function."
+          );
+        const value2 = this._attributes[name];
+        this._attributes[name] = updater(value2);
+        this.emit("attributesUpdated", {
+          type: "set",
+          attributes: this._attributes,
+          name
+        });
+        return this;
+      }
+      /**
+       * Method removing the desired graph's attribute.
+       *
+       * @param  {string} name  - Name of the attribute.
+       * @return {Graph}
+       */
+      removeAttribute(name) {
+        delete this._attributes[name];
+        this.emit("attributesUpdated", {
+          type: "remove",
+          attributes: this._attributes,
+          name
+        });
+        return this;
+      }
+      /**
+       * Method replacing the graph's attributes.
+       *
+       * @param  {object} attributes - New attributes.
+       * @return {Graph}
+       *
+       * @throws {Error} - Will throw if given attributes are not a plain object.
+       */
+      replaceAttributes(attributes) {
+        if (!isPlainObject(attributes))
+          throw new InvalidArgumentsGraphError(
+            "Graph.replaceAttributes: provided attributes are not a plain object."
+          );
+        this._attributes = attributes;
+        this.emit("attributesUpdated", {
+          type: "replace",
+          attributes: this._attributes
+        });
+        return this;
+      }
+      /**
+       * Method merging the graph's attributes.
+       *
+       * @param  {object} attributes - Attributes to merge.
+       * @return {Graph}
+       *
+       * @throws {Error} - Will throw if given attributes are not a plain object.
+       */
+      mergeAttributes(attributes) {
+        if (!isPlainObject(attributes))
+          throw new InvalidArgumentsGraphError(
+            "Graph.mergeAttributes: provided attributes are not a plain object."
+          );
+        assign(this._attributes, attributes);
+        this.emit("attributesUpdated", {
+          type: "merge",
+          attributes: this._attributes,
+          data: attributes
+        });
+        return this;
+      }
+      /**
+       * Method updating the graph's attributes.
+       *
+       * @param  {function} updater - Function used to update the attributes.
+       * @return {Graph}
+       *
+       * @throws {Error} - Will throw if given updater is not a function.
+       */
+      updateAttributes(updater) {
+        if (typeof updater !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.updateAttributes: provided updater is not a function."
+          );
+        this._attributes = updater(this._attributes);
+        this.emit("attributesUpdated", {
+          type: "update",
+          attributes: this._attributes
+        });
+        return this;
+      }
+      /**
+       * Method used to update each node's attributes using the given function.
+       *
+       * @param {function}  updater - Updater function to use.
+       * @param {object}    [hints] - Optional hints.
+       */
+      updateEachNodeAttributes(updater, hints) {
+        if (typeof updater !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.updateEachNodeAttributes: expecting an updater function."
+          );
+        if (hints && !validateHints(hints))
+          throw new InvalidArgumentsGraphError(
+            "Graph.updateEachNodeAttributes: invalid hints. Expecting an object having the following shape: {attributes?: [string]}"
+          );
+        const iterator = this._nodes.values();
+        let step, nodeData;
+        while (step = iterator.next(), step.done !== true) {
+          nodeData = step.value;
+          nodeData.attributes = updater(nodeData.key, nodeData.attributes);
+        }
+        this.emit("eachNodeAttributesUpdated", {
+          hints: hints ? hints : null
+        });
+      }
+      /**
+       * Method used to update each edge's attributes using the given function.
+       *
+       * @param {function}  updater - Updater function to use.
+       * @param {object}    [hints] - Optional hints.
+       */
+      updateEachEdgeAttributes(updater, hints) {
+        if (typeof updater !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.updateEachEdgeAttributes: expecting an updater function."
+          );
+        if (hints && !validateHints(hints))
+          throw new InvalidArgumentsGraphError(
+            "Graph.updateEachEdgeAttributes: invalid hints. Expecting an object having the following shape: {attributes?: [string]}"
+          );
+        const iterator = this._edges.values();
+        let step, edgeData, sourceData, targetData;
+        while (step = iterator.next(), step.done !== true) {
+          edgeData = step.value;
+          sourceData = edgeData.source;
+          targetData = edgeData.target;
+          edgeData.attributes = updater(
+            edgeData.key,
+            edgeData.attributes,
+            sourceData.key,
+            targetData.key,
+            sourceData.attributes,
+            targetData.attributes,
+            edgeData.undirected
+          );
+        }
+        this.emit("eachEdgeAttributesUpdated", {
+          hints: hints ? hints : null
+        });
+      }
+      /**---------------------------------------------------------------------------
+       * Iteration-related methods
+       **---------------------------------------------------------------------------
+       */
+      /**
+       * Method iterating over the graph's adjacency using the given callback.
+       *
+       * @param  {function}  callback - Callback to use.
+       */
+      forEachAdjacencyEntry(callback) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.forEachAdjacencyEntry: expecting a callback."
+          );
+        forEachAdjacency(false, false, false, this, callback);
+      }
+      forEachAdjacencyEntryWithOrphans(callback) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.forEachAdjacencyEntryWithOrphans: expecting a callback."
+          );
+        forEachAdjacency(false, false, true, this, callback);
+      }
+      /**
+       * Method iterating over the graph's assymetric adjacency using the given callback.
+       *
+       * @param  {function}  callback - Callback to use.
+       */
+      forEachAssymetricAdjacencyEntry(callback) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.forEachAssymetricAdjacencyEntry: expecting a callback."
+          );
+        forEachAdjacency(false, true, false, this, callback);
+      }
+      forEachAssymetricAdjacencyEntryWithOrphans(callback) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.forEachAssymetricAdjacencyEntryWithOrphans: expecting a callback."
+          );
+        forEachAdjacency(false, true, true, this, callback);
+      }
+      /**
+       * Method returning the list of the graph's nodes.
+       *
+       * @return {array} - The nodes.
+       */
+      nodes() {
+        return Array.from(this._nodes.keys());
+      }
+      /**
+       * Method iterating over the graph's nodes using the given callback.
+       *
+       * @param  {function}  callback - Callback (key, attributes, index).
+       */
+      forEachNode(callback) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.forEachNode: expecting a callback."
+          );
+        const iterator = this._nodes.values();
+        let step, nodeData;
+        while (step = iterator.next(), step.done !== true) {
+          nodeData = step.value;
+          callback(nodeData.key, nodeData.attributes);
+        }
+      }
+      /**
+       * Method iterating attempting to find a node matching the given predicate
+       * function.
+       *
+       * @param  {function}  callback - Callback (key, attributes).
+       */
+      findNode(callback) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.findNode: expecting a callback."
+          );
+        const iterator = this._nodes.values();
+        let step, nodeData;
+        while (step = iterator.next(), step.done !== true) {
+          nodeData = step.value;
+          if (callback(nodeData.key, nodeData.attributes)) return nodeData.key;
+        }
+        return;
+      }
+      /**
+       * Method mapping nodes.
+       *
+       * @param  {function}  callback - Callback (key, attributes).
+       */
+      mapNodes(callback) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.mapNode: expecting a callback."
+          );
+        const iterator = this._nodes.values();
+        let step, nodeData;
+        const result = new Array(this.order);
+        let i = 0;
+        while (step = iterator.next(), step.done !== true) {
+          nodeData = step.value;
+          result[i++] = callback(nodeData.key, nodeData.attributes);
+        }
+        return result;
+      }
+      /**
+       * Method returning whether some node verify the given predicate.
+       *
+       * @param  {function}  callback - Callback (key, attributes).
+       */
+      someNode(callback) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.someNode: expecting a callback."
+          );
+        const iterator = this._nodes.values();
+        let step, nodeData;
+        while (step = iterator.next(), step.done !== true) {
+          nodeData = step.value;
+          if (callback(nodeData.key, nodeData.attributes)) return true;
+        }
+        return false;
+      }
+      /**
+       * Method returning whether all node verify the given predicate.
+       *
+       * @param  {function}  callback - Callback (key, attributes).
+       */
+      everyNode(callback) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.everyNode: expecting a callback."
+          );
+        const iterator = this._nodes.values();
+        let step, nodeData;
+        while (step = iterator.next(), step.done !== true) {
+          nodeData = step.value;
+          if (!callback(nodeData.key, nodeData.attributes)) return false;
+        }
+        return true;
+      }
+      /**
+       * Method filtering nodes.
+       *
+       * @param  {function}  callback - Callback (key, attributes).
+       */
+      filterNodes(callback) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.filterNodes: expecting a callback."
+          );
+        const iterator = this._nodes.values();
+        let step, nodeData;
+        const result = [];
+        while (step = iterator.next(), step.done !== true) {
+          nodeData = step.value;
+          if (callback(nodeData.key, nodeData.attributes))
+            result.push(nodeData.key);
+        }
+        return result;
+      }
+      /**
+       * Method reducing nodes.
+       *
+       * @param  {function}  callback - Callback (accumulator, key, attributes).
+       */
+      reduceNodes(callback, initialValue) {
+        if (typeof callback !== "function")
+          throw new InvalidArgumentsGraphError(
+            "Graph.reduceNodes: expecting a callback."
+          );
+        if (arguments.length < 2)
+          throw new InvalidArgumentsGraphError(
+            "Graph.reduceNodes: missing initial value. You must provide it because the callback takes more than one argument and we cannot infer the initial value from the first iteration, as you could with a simple array."
+          );
+        let accumulator = initialValue;
+        const iterator = this._nodes.values();
+        let step, nodeData;
+        while (step = iterator.next(), step.done !== true) {
+          nodeData = step.value;
+          accumulator = callback(accumulator, nodeData.key, nodeData.attributes);
+        }
+        return accumulator;
+      }
+      /**
+       * Method returning an iterator over the graph's node entries.
+       *
+       * @return {Iterator}
+       */
+      nodeEntries() {
+        const iterator = this._nodes.values();
+        return {
+          [Symbol.iterator]() {
+            return this;
+          },
+          next() {
+            const step = iterator.next();
+            if (step.done) return step;
+            const data = step.value;
+            return {
+              value: { node: data.key, attributes: data.attributes },
+              done: false
+            };
+          }
+        };
+      }
+      /**---------------------------------------------------------------------------
+       * Serialization
+       **---------------------------------------------------------------------------
+       */
+      /**
+       * Method used to export the whole graph.
+       *
+       * @return {object} - The serialized graph.
+       */
+      export() {
+        const nodes = new Array(this._nodes.size);
+        let i = 0;
+        this._nodes.forEach((data, key) => {
+          nodes[i++] = serializeNode(key, data);
+        });
+        const edges = new Array(this._edges.size);
+        i = 0;
+        this._edges.forEach((data, key) => {
+          edges[i++] = serializeEdge(this.type, key, data);
+        });
+        return {
+          options: {
+            type: this.type,
+            multi: this.multi,
+            allowSelfLoops: this.allowSelfLoops
+          },
+          attributes: this.getAttributes(),
+          nodes,
+          edges
+        };
+      }
+      /**
+       * Method used to import a serialized graph.
+       *
+       * @param  {object|Graph} data  - The serialized graph.
+       * @param  {boolean}      merge - Whether to merge data.
+       * @return {Graph}              - Returns itself for chaining.
+       */
+      import(data, merge = false) {
+        if (data instanceof _Graph) {
+          data.forEachNode((n, a) => {
+            if (merge) this.mergeNode(n, a);
+            else this.addNode(n, a);
+          });
+          data.forEachEdge((e, a, s, t, _sa, _ta, u) => {
+            if (merge) {
+              if (u) this.mergeUndirectedEdgeWithKey(e, s, t, a);
+              else this.mergeDirectedEdgeWithKey(e, s, t, a);
+            } else {
+              if (u) this.addUndirectedEdgeWithKey(e, s, t, a);
+              else this.addDirectedEdgeWithKey(e, s, t, a);
+            }
+          });
+          return this;
+        }
+        if (!isPlainObject(data))
+          throw new InvalidArgumentsGraphError(
+            "Graph.import: invalid argument. Expecting a serialized graph or, alternatively, a Graph instance."
+          );
+        if (data.attributes) {
+          if (!isPlainObject(data.attributes))
+            throw new InvalidArgumentsGraphError(
+              "Graph.import: invalid attributes. Expecting a plain object."
+            );
+          if (merge) this.mergeAttributes(data.attributes);
+          else this.replaceAttributes(data.attributes);
+        }
+        let i, l, list2, node, edge;
+        if (data.nodes) {
+          list2 = data.nodes;
+          if (!Array.isArray(list2))
+            throw new InvalidArgumentsGraphError(
+              "Graph.import: invalid nodes. Expecting an array."
+            );
+          for (i = 0, l = list2.length; i < l; i++) {
+            node = list2[i];
+            validateSerializedNode(node);
+            const { key, attributes } = node;
+            if (merge) this.mergeNode(key, attributes);
+            else this.addNode(key, attributes);
+          }
+        }
+        if (data.edges) {
+          let undirectedByDefault = false;
+          if (this.type === "undirected") {
+            undirectedByDefault = true;
+          }
+          list2 = data.edges;
+          if (!Array.isArray(list2))
+            throw new InvalidArgumentsGraphError(
+              "Graph.import: invalid edges. Expecting an array."
+            );
+          for (i = 0, l = list2.length; i < l; i++) {
+            edge = list2[i];
+            validateSerializedEdge(edge);
+            const {
+              source,
+              target,
+              attributes,
+              undirected = undirectedByDefault
+            } = edge;
+            let method;
+            if ("key" in edge) {
+              method = merge ? undirected ? this.mergeUndirectedEdgeWithKey : this.mergeDirectedEdgeWithKey : undirected ? this.addUndirectedEdgeWithKey : this.addDirectedEdgeWithKey;
+              method.call(this, edge.key, source, target, attributes);
+            } else {
+              method = merge ? undirected ? this.mergeUndirectedEdge : this.mergeDirectedEdge : undirected ? this.addUndirectedEdge : this.addDirectedEdge;
+              method.call(this, source, target, attributes);
+            }
+          }
+        }
+        return this;
+      }
+      /**---------------------------------------------------------------------------
+       * Utils
+       **---------------------------------------------------------------------------
+       */
+      /**
+       * Method returning a null copy of the graph, i.e. a graph without nodes
+       * & edges but with the exact same options.
+       *
+       * @param  {object} options - Options to merge with the current ones.
+       * @return {Graph}          - The null copy.
+       */
+      nullCopy(options) {
+        const graph = new _Graph(assign({}, this._options, options));
+        graph.replaceAttributes(assign({}, this.getAttributes()));
+        return graph;
+      }
+      /**
+       * Method returning an empty copy of the graph, i.e. a graph without edges but
+       * with the exact same options.
+       *
+       * @param  {object} options - Options to merge with the current ones.
+       * @return {Graph}          - The empty copy.
+       */
+      emptyCopy(options) {
+        const graph = this.nullCopy(options);
+        this._nodes.forEach((nodeData, key) => {
+          const attributes = assign({}, nodeData.attributes);
+          nodeData = new graph.NodeDataClass(key, attributes);
+          graph._nodes.set(key, nodeData);
+        });
+        return graph;
+      }
+      /**
+       * Method returning an exact copy of the graph.
+       *
+       * @param  {object} options - Upgrade options.
+       * @return {Graph}          - The copy.
+       */
+      copy(options) {
+        options = options || {};
+        if (typeof options.type === "string" && options.type !== this.type && options.type !== "mixed")
+          throw new UsageGraphError(
+            `Graph.copy: cannot create an incompatible copy from "${this.type}" type to "${options.type}" because this would mean losing information about the current graph.`
+          );
+        if (typeof options.multi === "boolean" && options.multi !== this.multi && options.multi !== true)
+          throw new UsageGraphError(
+            "Graph.copy: cannot create an incompatible copy by downgrading a multi graph to a simple one because this would mean losing information about the current graph."
+          );
+        if (typeof options.allowSelfLoops === "boolean" && options.allowSelfLoops !== this.allowSelfLoops && options.allowSelfLoops !== true)
+          throw new UsageGraphError(
+            "Graph.copy: cannot create an incompatible copy from a graph allowing self loops to one that does not because this would mean losing information about the current graph."
+          );
+        const graph = this.emptyCopy(options);
+        const iterator = this._edges.values();
+        let step, edgeData;
+        while (step = iterator.next(), step.done !== true) {
+          edgeData = step.value;
+          addEdge(
+            graph,
+            "copy",
+            false,
+            edgeData.undirected,
+            edgeData.key,
+            edgeData.source.key,
+            edgeData.target.key,
+            assign({}, edgeData.attributes)
+          );
+        }
+        return graph;
+      }
+      /**---------------------------------------------------------------------------
+       * Known methods
+       **---------------------------------------------------------------------------
+       */
+      /**
+       * Method used by JavaScript to perform JSON serialization.
+       *
+       * @return {object} - The serialized graph.
+       */
+      toJSON() {
+        return this.export();
+      }
+      /**
+       * Method returning [object Graph].
+       */
+      toString() {
+        return "[object Graph]";
+      }
+      /**
+       * Method used internally by node's console to display a custom object.
+       *
+       * @return {object} - Formatted object representation of the graph.
+       */
+      inspect() {
+        const nodes = {};
+        this._nodes.forEach((data, key) => {
+          nodes[key] = data.attributes;
+        });
+        const edges = {}, multiIndex = {};
+        this._edges.forEach((data, key) => {
+          const direction = data.undirected ? "--" : "->";
+          let label = "";
+          let source = data.source.key;
+          let target = data.target.key;
+          let tmp;
+          if (data.undirected && source > target) {
+            tmp = source;
+            source = target;
+            target = tmp;
+          }
+          const desc = `(${source})${direction}(${target})`;
+          if (!key.startsWith("geid_")) {
+            label += `[${key}]: `;
+          } else if (this.multi) {
+            if (typeof multiIndex[desc] === "undefined") {
+              multiIndex[desc] = 0;
+            } else {
+              multiIndex[desc]++;
+            }
+            label += `${multiIndex[desc]}. `;
+          }
+          label += desc;
+          edges[label] = data.attributes;
+        });
+        const dummy = {};
+        for (const k in this) {
+          if (this.hasOwnProperty(k) && !EMITTER_PROPS.has(k) && typeof this[k] !== "function" && typeof k !== "symbol")
+            dummy[k] = this[k];
+        }
+        dummy.attributes = this._attributes;
+        dummy.nodes = nodes;
+        dummy.edges = edges;
+        privateProperty(dummy, "constructor", this.constructor);
+        return dummy;
+      }
+    };
+    if (typeof Symbol !== "undefined")
+      Graph.prototype[/* @__PURE__ */ Symbol.for("nodejs.util.inspect.custom")] = Graph.prototype.inspect;
+    EDGE_ADD_METHODS.forEach((method) => {
+      ["add", "merge", "update"].forEach((verb) => {
+        const name = method.name(verb);
+        const fn = verb === "add" ? addEdge : mergeEdge;
+        if (method.generateKey) {
+          Graph.prototype[name] = function(source, target, attributes) {
+            return fn(
+              this,
+              name,
+              true,
+              (method.type || this.type) === "undirected",
+              null,
+              source,
+              target,
+              attributes,
+              verb === "update"
+            );
+          };
+        } else {
+          Graph.prototype[name] = function(edge, source, target, attributes) {
+            return fn(
+              this,
+              name,
+              false,
+              (method.type || this.type) === "undirected",
+              edge,
+              source,
+              target,
+              attributes,
+              verb === "update"
+            );
+          };
+        }
+      });
+    });
+    attachNodeAttributesMethods(Graph);
+    attachEdgeAttributesMethods(Graph);
+    attachEdgeIterationMethods(Graph);
+    attachNeighborIterationMethods(Graph);
+    DirectedGraph = class extends Graph {
+      constructor(options) {
+        const finalOptions = assign({ type: "directed" }, options);
+        if ("multi" in finalOptions && finalOptions.multi !== false)
+          throw new InvalidArgumentsGraphError(
+            "DirectedGraph.from: inconsistent indication that the graph should be multi in given options!"
+          );
+        if (finalOptions.type !== "directed")
+          throw new InvalidArgumentsGraphError(
+            'DirectedGraph.from: inconsistent "' + finalOptions.type + '" type in given options!'
+          );
+        super(finalOptions);
+      }
+    };
+    UndirectedGraph = class extends Graph {
+      constructor(options) {
+        const finalOptions = assign({ type: "undirected" }, options);
+        if ("multi" in finalOptions && finalOptions.multi !== false)
+          throw new InvalidArgumentsGraphError(
+            "UndirectedGraph.from: inconsistent indication that the graph should be multi in given options!"
+          );
+        if (finalOptions.type !== "undirected")
+          throw new InvalidArgumentsGraphError(
+            'UndirectedGraph.from: inconsistent "' + finalOptions.type + '" type in given options!'
+          );
+        super(finalOptions);
+      }
+    };
+    MultiGraph = class extends Graph {
+      constructor(options) {
+        const finalOptions = assign({ multi: true }, options);
+        if ("multi" in finalOptions && finalOptions.multi !== true)
+          throw new InvalidArgumentsGraphError(
+            "MultiGraph.from: inconsistent indication that the graph should be simple in given options!"
+          );
+        super(finalOptions);
+      }
+    };
+    MultiDirectedGraph = class extends Graph {
+      constructor(options) {
+        const finalOptions = assign({ type: "directed", multi: true }, options);
+        if ("multi" in finalOptions && finalOptions.multi !== true)
+          throw new InvalidArgumentsGraphError(
+            "MultiDirectedGraph.from: inconsistent indication that the graph should be simple in given options!"
+          );
+        if (finalOptions.type !== "directed")
+          throw new InvalidArgumentsGraphError(
+            'MultiDirectedGraph.from: inconsistent "' + finalOptions.type + '" type in given options!'
+          );
+        super(finalOptions);
+      }
+    };
+    MultiUndirectedGraph = class extends Graph {
+      constructor(options) {
+        const finalOptions = assign({ type: "undirected", multi: true }, options);
+        if ("multi" in finalOptions && finalOptions.multi !== true)
+          throw new InvalidArgumentsGraphError(
+            "MultiUndirectedGraph.from: inconsistent indication that the graph should be simple in given options!"
+          );
+        if (finalOptions.type !== "undirected")
+          throw new InvalidArgumentsGraphError(
+            'MultiUndirectedGraph.from: inconsistent "' + finalOptions.type + '" type in given options!'
+          );
+        super(finalOptions);
+      }
+    };
+    attachStaticFromMethod(Graph);
+    attachStaticFromMethod(DirectedGraph);
+    attachStaticFromMethod(UndirectedGraph);
+    attachStaticFromMethod(MultiGraph);
+    attachStaticFromMethod(MultiDirectedGraph);
+    attachStaticFromMethod(MultiUndirectedGraph);
+    Graph.Graph = Graph;
+    Graph.DirectedGraph = DirectedGraph;
+    Graph.UndirectedGraph = UndirectedGraph;
+    Graph.MultiGraph = MultiGraph;
+    Graph.MultiDirectedGraph = MultiDirectedGraph;
+    Graph.MultiUndirectedGraph = MultiUndirectedGraph;
+    Graph.InvalidArgumentsGraphError = InvalidArgumentsGraphError;
+    Graph.NotFoundGraphError = NotFoundGraphError;
+    Graph.UsageGraphError = UsageGraphError;
+  }
+});
+
+// node_modules/graphology-utils/is-graph.js
+var require_is_graph = __commonJS({
+  "node_modules/graphology-utils/is-graph.js"(exports, module) {
+    module.exports = function isGraph(value2) {
+      return value2 !== null && typeof value2 === "object" && typeof value2.addUndirectedEdgeWithKey === "function" && typeof value2.dropNode === "function" && typeof value2.multi === "boolean";
+    };
+  }
+});
+
+// node_modules/graphology-utils/getters.js
+var require_getters = __commonJS({
+  "node_modules/graphology-utils/getters.js"(exports) {
+    function coerceWeight(value2) {
+      if (typeof value2 !== "number" || isNaN(value2)) return 1;
+      return value2;
+    }
+    function createNodeValueGetter(nameOrFunction, defaultValue) {
+      var getter = {};
+      var coerceToDefault = function(v) {
+        if (typeof v === "undefined") return defaultValue;
+        return v;
+      };
+      if (typeof defaultValue === "function") coerceToDefault = defaultValue;
+      var get = function(attributes) {
+        return coerceToDefault(attributes[nameOrFunction]);
+      };
+      var returnDefault = function() {
+        return coerceToDefault(void 0);
+      };
+      if (typeof nameOrFunction === "string") {
+        getter.fromAttributes = get;
+        getter.fromGraph = function(graph, node) {
+          return get(graph.getNodeAttributes(node));
+        };
+        getter.fromEntry = function(node, attributes) {
+          return get(attributes);
+        };
+      } else if (typeof nameOrFunction === "function") {
+        getter.fromAttributes = function() {
+          throw new Error(
+            "graphology-utils/getters/createNodeValueGetter: irrelevant usage."
+          );
+        };
+        getter.fromGraph = function(graph, node) {
+          return coerceToDefault(
+            nameOrFunction(node, graph.getNodeAttributes(node))
+          );
+        };
+        getter.fromEntry = function(node, attributes) {
+          return coerceToDefault(nameOrFunction(node, attributes));
+        };
+      } else {
+        getter.fromAttributes = returnDefault;
+        getter.fromGraph = returnDefault;
+        getter.fromEntry = returnDefault;
+      }
+      return getter;
+    }
+    function createEdgeValueGetter(nameOrFunction, defaultValue) {
+      var getter = {};
+      var coerceToDefault = function(v) {
+        if (typeof v === "undefined") return defaultValue;
+        return v;
+      };
+      if (typeof defaultValue === "function") coerceToDefault = defaultValue;
+      var get = function(attributes) {
+        return coerceToDefault(attributes[nameOrFunction]);
+      };
+      var returnDefault = function() {
+        return coerceToDefault(void 0);
+      };
+      if (typeof nameOrFunction === "string") {
+        getter.fromAttributes = get;
+        getter.fromGraph = function(graph, edge) {
+          return get(graph.getEdgeAttributes(edge));
+        };
+        getter.fromEntry = function(edge, attributes) {
+          return get(attributes);
+        };
+        getter.fromPartialEntry = getter.fromEntry;
+        getter.fromMinimalEntry = getter.fromEntry;
+      } else if (typeof nameOrFunction === "function") {
+        getter.fromAttributes = function() {
+          throw new Error(
+            "graphology-utils/getters/createEdgeValueGetter: irrelevant usage."
+          );
+        };
+        getter.fromGraph = function(graph, edge) {
+          var extremities = graph.extremities(edge);
+          return coerceToDefault(
+            nameOrFunction(
+              edge,
+              graph.getEdgeAttributes(edge),
+              extremities[0],
+              extremities[1],
+              graph.getNodeAttributes(extremities[0]),
+              graph.getNodeAttributes(extremities[1]),
+              graph.isUndirected(edge)
+            )
+          );
+        };
+        getter.fromEntry = function(e, a, s, t, sa, ta, u) {
+          return coerceToDefault(nameOrFunction(e, a, s, t, sa, ta, u));
+        };
+        getter.fromPartialEntry = function(e, a, s, t) {
+          return coerceToDefault(nameOrFunction(e, a, s, t));
+        };
+        getter.fromMinimalEntry = function(e, a) {
+          return coerceToDefault(nameOrFunction(e, a));
+        };
+      } else {
+        getter.fromAttributes = returnDefault;
+        getter.fromGraph = returnDefault;
+        getter.fromEntry = returnDefault;
+        getter.fromMinimalEntry = returnDefault;
+      }
+      return getter;
+    }
+    exports.createNodeValueGetter = createNodeValueGetter;
+    exports.createEdgeValueGetter = createEdgeValueGetter;
+    exports.createEdgeWeightGetter = function(name) {
+      return createEdgeValueGetter(name, coerceWeight);
+    };
+  }
+});
+
+// node_modules/graphology-layout-forceatlas2/iterate.js
+var require_iterate = __commonJS({
+  "node_modules/graphology-layout-forceatlas2/iterate.js"(exports, module) {
+    var NODE_X = 0;
+    var NODE_Y = 1;
+    var NODE_DX = 2;
+    var NODE_DY = 3;
+    var NODE_OLD_DX = 4;
+    var NODE_OLD_DY = 5;
+    var NODE_MASS = 6;
+    var NODE_CONVERGENCE = 7;
+    var NODE_SIZE = 8;
+    var NODE_FIXED = 9;
+    var EDGE_SOURCE = 0;
+    var EDGE_TARGET = 1;
+    var EDGE_WEIGHT = 2;
+    var REGION_NODE = 0;
+    var REGION_CENTER_X = 1;
+    var REGION_CENTER_Y = 2;
+    var REGION_SIZE = 3;
+    var REGION_NEXT_SIBLING = 4;
+    var REGION_FIRST_CHILD = 5;
+    var REGION_MASS = 6;
+    var REGION_MASS_CENTER_X = 7;
+    var REGION_MASS_CENTER_Y = 8;
+    var SUBDIVISION_ATTEMPTS = 3;
+    var PPN = 10;
+    var PPE = 3;
+    var PPR = 9;
+    var MAX_FORCE = 10;
+    module.exports = function iterate(options, NodeMatrix, EdgeMatrix) {
+      var l, r, n, n1, n2, rn, e, w, g, s;
+      var order = NodeMatrix.length, size = EdgeMatrix.length;
+      var adjustSizes = options.adjustSizes;
+      var thetaSquared = options.barnesHutTheta * options.barnesHutTheta;
+      var outboundAttCompensation, coefficient, xDist, yDist, ewc, distance, factor;
+      var RegionMatrix = [];
+      for (n = 0; n < order; n += PPN) {
+        NodeMatrix[n + NODE_OLD_DX] = NodeMatrix[n + NODE_DX];
+        NodeMatrix[n + NODE_OLD_DY] = NodeMatrix[n + NODE_DY];
+        NodeMatrix[n + NODE_DX] = 0;
+        NodeMatrix[n + NODE_DY] = 0;
+      }
+      if (options.outboundAttractionDistribution) {
+        outboundAttCompensation = 0;
+        for (n = 0; n < order; n += PPN) {
+          outboundAttCompensation += NodeMatrix[n + NODE_MASS];
+        }
+        outboundAttCompensation /= order / PPN;
+      }
+      if (options.barnesHutOptimize) {
+        var minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity, q, q2, subdivisionAttempts;
+        for (n = 0; n < order; n += PPN) {
+          minX = Math.min(minX, NodeMatrix[n + NODE_X]);
+          maxX = Math.max(maxX, NodeMatrix[n + NODE_X]);
+          minY = Math.min(minY, NodeMatrix[n + NODE_Y]);
+          maxY = Math.max(maxY, NodeMatrix[n + NODE_Y]);
+        }
+        var dx = maxX - minX, dy = maxY - minY;
+        if (dx > dy) {
+          minY -= (dx - dy) / 2;
+          maxY = minY + dx;
+        } else {
+          minX -= (dy - dx) / 2;
+          maxX = minX + dy;
+        }
+        RegionMatrix[0 + REGION_NODE] = -1;
+        RegionMatrix[0 + REGION_CENTER_X] = (minX + maxX) / 2;
+        RegionMatrix[0 + REGION_CENTER_Y] = (minY + maxY) / 2;
+        RegionMatrix[0 + REGION_SIZE] = Math.max(maxX - minX, maxY - minY);
+        RegionMatrix[0 + REGION_NEXT_SIBLING] = -1;
+        RegionMatrix[0 + REGION_FIRST_CHILD] = -1;
+        RegionMatrix[0 + REGION_MASS] = 0;
+        RegionMatrix[0 + REGION_MASS_CENTER_X] = 0;
+        RegionMatrix[0 + REGION_MASS_CENTER_Y] = 0;
+        l = 1;
+        for (n = 0; n < order; n += PPN) {
+          r = 0;
+          subdivisionAttempts = SUBDIVISION_ATTEMPTS;
+          while (true) {
+            if (RegionMatrix[r + REGION_FIRST_CHILD] >= 0) {
+              if (NodeMatrix[n + NODE_X] < RegionMatrix[r + REGION_CENTER_X]) {
+                if (NodeMatrix[n + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                  q = RegionMatrix[r + REGION_FIRST_CHILD];
+                } else {
+                  q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR;
+                }
+              } else {
+                if (NodeMatrix[n + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                  q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 2;
+                } else {
+                  q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 3;
+                }
+              }
+              RegionMatrix[r + REGION_MASS_CENTER_X] = (RegionMatrix[r + REGION_MASS_CENTER_X] * RegionMatrix[r + REGION_MASS] + NodeMatrix[n + NODE_X] * NodeMatrix[n + NODE_MASS]) / (RegionMatrix[r + REGION_MASS] + NodeMatrix[n + NODE_MASS]);
+              RegionMatrix[r + REGION_MASS_CENTER_Y] = (RegionMatrix[r + REGION_MASS_CENTER_Y] * RegionMatrix[r + REGION_MASS] + NodeMatrix[n + NODE_Y] * NodeMatrix[n + NODE_MASS]) / (RegionMatrix[r + REGION_MASS] + NodeMatrix[n + NODE_MASS]);
+              RegionMatrix[r + REGION_MASS] += NodeMatrix[n + NODE_MASS];
+              r = q;
+              continue;
+            } else {
+              if (RegionMatrix[r + REGION_NODE] < 0) {
+                RegionMatrix[r + REGION_NODE] = n;
+                break;
+              } else {
+                RegionMatrix[r + REGION_FIRST_CHILD] = l * PPR;
+                w = RegionMatrix[r + REGION_SIZE] / 2;
+                g = RegionMatrix[r + REGION_FIRST_CHILD];
+                RegionMatrix[g + REGION_NODE] = -1;
+                RegionMatrix[g + REGION_CENTER_X] = RegionMatrix[r + REGION_CENTER_X] - w;
+                RegionMatrix[g + REGION_CENTER_Y] = RegionMatrix[r + REGION_CENTER_Y] - w;
+                RegionMatrix[g + REGION_SIZE] = w;
+                RegionMatrix[g + REGION_NEXT_SIBLING] = g + PPR;
+                RegionMatrix[g + REGION_FIRST_CHILD] = -1;
+                RegionMatrix[g + REGION_MASS] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_X] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_Y] = 0;
+                g += PPR;
+                RegionMatrix[g + REGION_NODE] = -1;
+                RegionMatrix[g + REGION_CENTER_X] = RegionMatrix[r + REGION_CENTER_X] - w;
+                RegionMatrix[g + REGION_CENTER_Y] = RegionMatrix[r + REGION_CENTER_Y] + w;
+                RegionMatrix[g + REGION_SIZE] = w;
+                RegionMatrix[g + REGION_NEXT_SIBLING] = g + PPR;
+                RegionMatrix[g + REGION_FIRST_CHILD] = -1;
+                RegionMatrix[g + REGION_MASS] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_X] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_Y] = 0;
+                g += PPR;
+                RegionMatrix[g + REGION_NODE] = -1;
+                RegionMatrix[g + REGION_CENTER_X] = RegionMatrix[r + REGION_CENTER_X] + w;
+                RegionMatrix[g + REGION_CENTER_Y] = RegionMatrix[r + REGION_CENTER_Y] - w;
+                RegionMatrix[g + REGION_SIZE] = w;
+                RegionMatrix[g + REGION_NEXT_SIBLING] = g + PPR;
+                RegionMatrix[g + REGION_FIRST_CHILD] = -1;
+                RegionMatrix[g + REGION_MASS] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_X] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_Y] = 0;
+                g += PPR;
+                RegionMatrix[g + REGION_NODE] = -1;
+                RegionMatrix[g + REGION_CENTER_X] = RegionMatrix[r + REGION_CENTER_X] + w;
+                RegionMatrix[g + REGION_CENTER_Y] = RegionMatrix[r + REGION_CENTER_Y] + w;
+                RegionMatrix[g + REGION_SIZE] = w;
+                RegionMatrix[g + REGION_NEXT_SIBLING] = RegionMatrix[r + REGION_NEXT_SIBLING];
+                RegionMatrix[g + REGION_FIRST_CHILD] = -1;
+                RegionMatrix[g + REGION_MASS] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_X] = 0;
+                RegionMatrix[g + REGION_MASS_CENTER_Y] = 0;
+                l += 4;
+                if (NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_X] < RegionMatrix[r + REGION_CENTER_X]) {
+                  if (NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                    q = RegionMatrix[r + REGION_FIRST_CHILD];
+                  } else {
+                    q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR;
+                  }
+                } else {
+                  if (NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                    q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 2;
+                  } else {
+                    q = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 3;
+                  }
+                }
+                RegionMatrix[r + REGION_MASS] = NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_MASS];
+                RegionMatrix[r + REGION_MASS_CENTER_X] = NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_X];
+                RegionMatrix[r + REGION_MASS_CENTER_Y] = NodeMatrix[RegionMatrix[r + REGION_NODE] + NODE_Y];
+                RegionMatrix[q + REGION_NODE] = RegionMatrix[r + REGION_NODE];
+                RegionMatrix[r + REGION_NODE] = -1;
+                if (NodeMatrix[n + NODE_X] < RegionMatrix[r + REGION_CENTER_X]) {
+                  if (NodeMatrix[n + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                    q2 = RegionMatrix[r + REGION_FIRST_CHILD];
+                  } else {
+                    q2 = RegionMatrix[r + REGION_FIRST_CHILD] + PPR;
+                  }
+                } else {
+                  if (NodeMatrix[n + NODE_Y] < RegionMatrix[r + REGION_CENTER_Y]) {
+                    q2 = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 2;
+                  } else {
+                    q2 = RegionMatrix[r + REGION_FIRST_CHILD] + PPR * 3;
+                  }
+                }
+                if (q === q2) {
+                  if (subdivisionAttempts--) {
+                    r = q;
+                    continue;
+                  } else {
+                    subdivisionAttempts = SUBDIVISION_ATTEMPTS;
+                    break;
+                  }
+                }
+                RegionMatrix[q2 + REGION_NODE] = n;
+                break;
+              }
+            }
+          }
+        }
+      }
+      if (options.barnesHutOptimize) {
+        coefficient = options.scalingRatio;
+        for (n = 0; n < order; n += PPN) {
+          r = 0;
+          while (true) {
+            if (RegionMatrix[r + REGION_FIRST_CHILD] >= 0) {
+              distance = Math.pow(
+                NodeMatrix[n + NODE_X] - RegionMatrix[r + REGION_MASS_CENTER_X],
+                2
+              ) + Math.pow(
+                NodeMatrix[n + NODE_Y] - RegionMatrix[r + REGION_MASS_CENTER_Y],
+                2
+              );
+              s = RegionMatrix[r + REGION_SIZE];
+              if (4 * s * s / distance < thetaSquared) {
+                xDist = NodeMatrix[n + NODE_X] - RegionMatrix[r + REGION_MASS_CENTER_X];
+                yDist = NodeMatrix[n + NODE_Y] - RegionMatrix[r + REGION_MASS_CENTER_Y];
+                if (adjustSizes === true) {
+                  if (distance > 0) {
+                    factor = coefficient * NodeMatrix[n + NODE_MASS] * RegionMatrix[r + REGION_MASS] / distance;
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  } else if (distance < 0) {
+                    factor = -coefficient * NodeMatrix[n + NODE_MASS] * RegionMatrix[r + REGION_MASS] / Math.sqrt(distance);
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  }
+                } else {
+                  if (distance > 0) {
+                    factor = coefficient * NodeMatrix[n + NODE_MASS] * RegionMatrix[r + REGION_MASS] / distance;
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  }
+                }
+                r = RegionMatrix[r + REGION_NEXT_SIBLING];
+                if (r < 0) break;
+                continue;
+              } else {
+                r = RegionMatrix[r + REGION_FIRST_CHILD];
+                continue;
+              }
+            } else {
+              rn = RegionMatrix[r + REGION_NODE];
+              if (rn >= 0 && rn !== n) {
+                xDist = NodeMatrix[n + NODE_X] - NodeMatrix[rn + NODE_X];
+                yDist = NodeMatrix[n + NODE_Y] - NodeMatrix[rn + NODE_Y];
+                distance = xDist * xDist + yDist * yDist;
+                if (adjustSizes === true) {
+                  if (distance > 0) {
+                    factor = coefficient * NodeMatrix[n + NODE_MASS] * NodeMatrix[rn + NODE_MASS] / distance;
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  } else if (distance < 0) {
+                    factor = -coefficient * NodeMatrix[n + NODE_MASS] * NodeMatrix[rn + NODE_MASS] / Math.sqrt(distance);
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  }
+                } else {
+                  if (distance > 0) {
+                    factor = coefficient * NodeMatrix[n + NODE_MASS] * NodeMatrix[rn + NODE_MASS] / distance;
+                    NodeMatrix[n + NODE_DX] += xDist * factor;
+                    NodeMatrix[n + NODE_DY] += yDist * factor;
+                  }
+                }
+              }
+              r = RegionMatrix[r + REGION_NEXT_SIBLING];
+              if (r < 0) break;
+              continue;
+            }
+          }
+        }
+      } else {
+        coefficient = options.scalingRatio;
+        for (n1 = 0; n1 < order; n1 += PPN) {
+          for (n2 = 0; n2 < n1; n2 += PPN) {
+            xDist = NodeMatrix[n1 + NODE_X] - NodeMatrix[n2 + NODE_X];
+            yDist = NodeMatrix[n1 + NODE_Y] - NodeMatrix[n2 + NODE_Y];
+            if (adjustSizes === true) {
+              distance = Math.sqrt(xDist * xDist + yDist * yDist) - NodeMatrix[n1 + NODE_SIZE] - NodeMatrix[n2 + NODE_SIZE];
+              if (distance > 0) {
+                factor = coefficient * NodeMatrix[n1 + NODE_MASS] * NodeMatrix[n2 + NODE_MASS] / distance / distance;
+                NodeMatrix[n1 + NODE_DX] += xDist * factor;
+                NodeMatrix[n1 + NODE_DY] += yDist * factor;
+                NodeMatrix[n2 + NODE_DX] -= xDist * factor;
+                NodeMatrix[n2 + NODE_DY] -= yDist * factor;
+              } else if (distance < 0) {
+                factor = 100 * coefficient * NodeMatrix[n1 + NODE_MASS] * NodeMatrix[n2 + NODE_MASS];
+                NodeMatrix[n1 + NODE_DX] += xDist * factor;
+                NodeMatrix[n1 + NODE_DY] += yDist * factor;
+                NodeMatrix[n2 + NODE_DX] -= xDist * factor;
+                NodeMatrix[n2 + NODE_DY] -= yDist * factor;
+              }
+            } else {
+              distance = Math.sqrt(xDist * xDist + yDist * yDist);
+              if (distance > 0) {
+                factor = coefficient * NodeMatrix[n1 + NODE_MASS] * NodeMatrix[n2 + NODE_MASS] / distance / distance;
+                NodeMatrix[n1 + NODE_DX] += xDist * factor;
+                NodeMatrix[n1 + NODE_DY] += yDist * factor;
+                NodeMatrix[n2 + NODE_DX] -= xDist * factor;
+                NodeMatrix[n2 + NODE_DY] -= yDist * factor;
+              }
+            }
+          }
+        }
+      }
+      g = options.gravity / options.scalingRatio;
+      coefficient = options.scalingRatio;
+      for (n = 0; n < order; n += PPN) {
+        factor = 0;
+        xDist = NodeMatrix[n + NODE_X];
+        yDist = NodeMatrix[n + NODE_Y];
+        distance = Math.sqrt(Math.pow(xDist, 2) + Math.pow(yDist, 2));
+        if (options.strongGravityMode) {
+          if (distance > 0) factor = coefficient * NodeMatrix[n + NODE_MASS] * g;
+        } else {
+          if (distance > 0)
+            factor = coefficient * NodeMatrix[n + NODE_MASS] * g / distance;
+        }
+        NodeMatrix[n + NODE_DX] -= xDist * factor;
+        NodeMatrix[n + NODE_DY] -= yDist * factor;
+      }
+      coefficient = 1 * (options.outboundAttractionDistribution ? outboundAttCompensation : 1);
+      for (e = 0; e < size; e += PPE) {
+        n1 = EdgeMatrix[e + EDGE_SOURCE];
+        n2 = EdgeMatrix[e + EDGE_TARGET];
+        w = EdgeMatrix[e + EDGE_WEIGHT];
+        ewc = Math.pow(w, options.edgeWeightInfluence);
+        xDist = NodeMatrix[n1 + NODE_X] - NodeMatrix[n2 + NODE_X];
+        yDist = NodeMatrix[n1 + NODE_Y] - NodeMatrix[n2 + NODE_Y];
+        if (adjustSizes === true) {
+          distance = Math.sqrt(xDist * xDist + yDist * yDist) - NodeMatrix[n1 + NODE_SIZE] - NodeMatrix[n2 + NODE_SIZE];
+          if (options.linLogMode) {
+            if (options.outboundAttractionDistribution) {
+              if (distance > 0) {
+                factor = -coefficient * ewc * Math.log(1 + distance) / distance / NodeMatrix[n1 + NODE_MASS];
+              }
+            } else {
+              if (distance > 0) {
+                factor = -coefficient * ewc * Math.log(1 + distance) / distance;
+              }
+            }
+          } else {
+            if (options.outboundAttractionDistribution) {
+              if (distance > 0) {
+                factor = -coefficient * ewc / NodeMatrix[n1 + NODE_MASS];
+              }
+            } else {
+              if (distance > 0) {
+                factor = -coefficient * ewc;
+              }
+            }
+          }
+        } else {
+          distance = Math.sqrt(Math.pow(xDist, 2) + Math.pow(yDist, 2));
+          if (options.linLogMode) {
+            if (options.outboundAttractionDistribution) {
+              if (distance > 0) {
+                factor = -coefficient * ewc * Math.log(1 + distance) / distance / NodeMatrix[n1 + NODE_MASS];
+              }
+            } else {
+              if (distance > 0)
+                factor = -coefficient * ewc * Math.log(1 + distance) / distance;
+            }
+          } else {
+            if (options.outboundAttractionDistribution) {
+              distance = 1;
+              factor = -coefficient * ewc / NodeMatrix[n1 + NODE_MASS];
+            } else {
+              distance = 1;
+              factor = -coefficient * ewc;
+            }
+          }
+        }
+        if (distance > 0) {
+          NodeMatrix[n1 + NODE_DX] += xDist * factor;
+          NodeMatrix[n1 + NODE_DY] += yDist * factor;
+          NodeMatrix[n2 + NODE_DX] -= xDist * factor;
+          NodeMatrix[n2 + NODE_DY] -= yDist * factor;
+        }
+      }
+      var force, swinging, traction, nodespeed, newX, newY;
+      if (adjustSizes === true) {
+        for (n = 0; n < order; n += PPN) {
+          if (NodeMatrix[n + NODE_FIXED] !== 1) {
+            force = Math.sqrt(
+              Math.pow(NodeMatrix[n + NODE_DX], 2) + Math.pow(NodeMatrix[n + NODE_DY], 2)
+            );
+            if (force > MAX_FORCE) {
+              NodeMatrix[n + NODE_DX] = NodeMatrix[n + NODE_DX] * MAX_FORCE / force;
+              NodeMatrix[n + NODE_DY] = NodeMatrix[n + NODE_DY] * MAX_FORCE / force;
+            }
+            swinging = NodeMatrix[n + NODE_MASS] * Math.sqrt(
+              (NodeMatrix[n + NODE_OLD_DX] - NodeMatrix[n + NODE_DX]) * (NodeMatrix[n + NODE_OLD_DX] - NodeMatrix[n + NODE_DX]) + (NodeMatrix[n + NODE_OLD_DY] - NodeMatrix[n + NODE_DY]) * (NodeMatrix[n + NODE_OLD_DY] - NodeMatrix[n + NODE_DY])
+            );
+            traction = Math.sqrt(
+              (NodeMatrix[n + NODE_OLD_DX] + NodeMatrix[n + NODE_DX]) * (NodeMatrix[n + NODE_OLD_DX] + NodeMatrix[n + NODE_DX]) + (NodeMatrix[n + NODE_OLD_DY] + NodeMatrix[n + NODE_DY]) * (NodeMatrix[n + NODE_OLD_DY] + NodeMatrix[n + NODE_DY])
+            ) / 2;
+            nodespeed = 0.1 * Math.log(1 + traction) / (1 + Math.sqrt(swinging));
+            newX = NodeMatrix[n + NODE_X] + NodeMatrix[n + NODE_DX] * (nodespeed / options.slowDown);
+            NodeMatrix[n + NODE_X] = newX;
+            newY = NodeMatrix[n + NODE_Y] + NodeMatrix[n + NODE_DY] * (nodespeed / options.slowDown);
+            NodeMatrix[n + NODE_Y] = newY;
+          }
+        }
+      } else {
+        for (n = 0; n < order; n += PPN) {
+          if (NodeMatrix[n + NODE_FIXED] !== 1) {
+            swinging = NodeMatrix[n + NODE_MASS] * Math.sqrt(
+              (NodeMatrix[n + NODE_OLD_DX] - NodeMatrix[n + NODE_DX]) * (NodeMatrix[n + NODE_OLD_DX] - NodeMatrix[n + NODE_DX]) + (NodeMatrix[n + NODE_OLD_DY] - NodeMatrix[n + NODE_DY]) * (NodeMatrix[n + NODE_OLD_DY] - NodeMatrix[n + NODE_DY])
+            );
+            traction = Math.sqrt(
+              (NodeMatrix[n + NODE_OLD_DX] + NodeMatrix[n + NODE_DX]) * (NodeMatrix[n + NODE_OLD_DX] + NodeMatrix[n + NODE_DX]) + (NodeMatrix[n + NODE_OLD_DY] + NodeMatrix[n + NODE_DY]) * (NodeMatrix[n + NODE_OLD_DY] + NodeMatrix[n + NODE_DY])
+            ) / 2;
+            nodespeed = NodeMatrix[n + NODE_CONVERGENCE] * Math.log(1 + traction) / (1 + Math.sqrt(swinging));
+            NodeMatrix[n + NODE_CONVERGENCE] = Math.min(
+              1,
+              Math.sqrt(
+                nodespeed * (Math.pow(NodeMatrix[n + NODE_DX], 2) + Math.pow(NodeMatrix[n + NODE_DY], 2)) / (1 + Math.sqrt(swinging))
+              )
+            );
+            newX = NodeMatrix[n + NODE_X] + NodeMatrix[n + NODE_DX] * (nodespeed / options.slowDown);
+            NodeMatrix[n + NODE_X] = newX;
+            newY = NodeMatrix[n + NODE_Y] + NodeMatrix[n + NODE_DY] * (nodespeed / options.slowDown);
+            NodeMatrix[n + NODE_Y] = newY;
+          }
+        }
+      }
+      return {};
+    };
+  }
+});
+
+// node_modules/graphology-layout-forceatlas2/helpers.js
+var require_helpers = __commonJS({
+  "node_modules/graphology-layout-forceatlas2/helpers.js"(exports) {
+    var PPN = 10;
+    var PPE = 3;
+    exports.assign = function(target) {
+      target = target || {};
+      var objects = Array.prototype.slice.call(arguments).slice(1), i, k, l;
+      for (i = 0, l = objects.length; i < l; i++) {
+        if (!objects[i]) continue;
+        for (k in objects[i]) target[k] = objects[i][k];
+      }
+      return target;
+    };
+    exports.validateSettings = function(settings) {
+      if ("linLogMode" in settings && typeof settings.linLogMode !== "boolean")
+        return { message: "the `linLogMode` setting should be a boolean." };
+      if ("outboundAttractionDistribution" in settings && typeof settings.outboundAttractionDistribution !== "boolean")
+        return {
+          message: "the `outboundAttractionDistribution` setting should be a boolean."
+        };
+      if ("adjustSizes" in settings && typeof settings.adjustSizes !== "boolean")
+        return { message: "the `adjustSizes` setting should be a boolean." };
+      if ("edgeWeightInfluence" in settings && typeof settings.edgeWeightInfluence !== "number")
+        return {
+          message: "the `edgeWeightInfluence` setting should be a number."
+        };
+      if ("scalingRatio" in settings && !(typeof settings.scalingRatio === "number" && settings.scalingRatio >= 0))
+        return { message: "the `scalingRatio` setting should be a number >= 0." };
+      if ("strongGravityMode" in settings && typeof settings.strongGravityMode !== "boolean")
+        return { message: "the `strongGravityMode` setting should be a boolean." };
+      if ("gravity" in settings && !(typeof settings.gravity === "number" && settings.gravity >= 0))
+        return { message: "the `gravity` setting should be a number >= 0." };
+      if ("slowDown" in settings && !(typeof settings.slowDown === "number" || settings.slowDown >= 0))
+        return { message: "the `slowDown` setting should be a number >= 0." };
+      if ("barnesHutOptimize" in settings && typeof settings.barnesHutOptimize !== "boolean")
+        return { message: "the `barnesHutOptimize` setting should be a boolean." };
+      if ("barnesHutTheta" in settings && !(typeof settings.barnesHutTheta === "number" && settings.barnesHutTheta >= 0))
+        return { message: "the `barnesHutTheta` setting should be a number >= 0." };
+      return null;
+    };
+    exports.graphToByteArrays = function(graph, getEdgeWeight) {
+      var order = graph.order;
+      var size = graph.size;
+      var index = {};
+      var j;
+      var NodeMatrix = new Float32Array(order * PPN);
+      var EdgeMatrix = new Float32Array(size * PPE);
+      j = 0;
+      graph.forEachNode(function(node, attr) {
+        index[node] = j;
+        NodeMatrix[j] = attr.x;
+        NodeMatrix[j + 1] = attr.y;
+        NodeMatrix[j + 2] = 0;
+        NodeMatrix[j + 3] = 0;
+        NodeMatrix[j + 4] = 0;
+        NodeMatrix[j + 5] = 0;
+        NodeMatrix[j + 6] = 1;
+        NodeMatrix[j + 7] = 1;
+        NodeMatrix[j + 8] = attr.size || 1;
+        NodeMatrix[j + 9] = attr.fixed ? 1 : 0;
+        j += PPN;
+      });
+      j = 0;
+      graph.forEachEdge(function(edge, attr, source, target, sa, ta, u) {
+        var sj = index[source];
+        var tj = index[target];
+        var weight = getEdgeWeight(edge, attr, source, target, sa, ta, u);
+        NodeMatrix[sj + 6] += weight;
+        NodeMatrix[tj + 6] += weight;
+        EdgeMatrix[j] = sj;
+        EdgeMatrix[j + 1] = tj;
+        EdgeMatrix[j + 2] = weight;
+        j += PPE;
+      });
+      return {
+        nodes: NodeMatrix,
+        edges: EdgeMatrix
+      };
+    };
+    exports.assignLayoutChanges = function(graph, NodeMatrix, outputReducer) {
+      var i = 0;
+      graph.updateEachNodeAttributes(function(node, attr) {
+        attr.x = NodeMatrix[i];
+        attr.y = NodeMatrix[i + 1];
+        i += PPN;
+        return outputReducer ? outputReducer(node, attr) : attr;
+      });
+    };
+    exports.readGraphPositions = function(graph, NodeMatrix) {
+      var i = 0;
+      graph.forEachNode(function(node, attr) {
+        NodeMatrix[i] = attr.x;
+        NodeMatrix[i + 1] = attr.y;
+        i += PPN;
+      });
+    };
+    exports.collectLayoutChanges = function(graph, NodeMatrix, outputReducer) {
+      var nodes = graph.nodes(), positions = {};
+      for (var i = 0, j = 0, l = NodeMatrix.length; i < l; i += PPN) {
+        if (outputReducer) {
+          var newAttr = Object.assign({}, graph.getNodeAttributes(nodes[j]));
+          newAttr.x = NodeMatrix[i];
+          newAttr.y = NodeMatrix[i + 1];
+          newAttr = outputReducer(nodes[j], newAttr);
+          positions[nodes[j]] = {
+            x: newAttr.x,
+            y: newAttr.y
+          };
+        } else {
+          positions[nodes[j]] = {
+            x: NodeMatrix[i],
+            y: NodeMatrix[i + 1]
+          };
+        }
+        j++;
+      }
+      return positions;
+    };
+    exports.createWorker = function createWorker(fn) {
+      var xURL = window.URL || window.webkitURL;
+      var code = fn.toString();
+      var objectUrl = xURL.createObjectURL(
+        new Blob(["(" + code + ").call(this);"], { type: "text/javascript" })
+      );
+      var worker = new Worker(objectUrl);
+      xURL.revokeObjectURL(objectUrl);
+      return worker;
+    };
+  }
+});
+
+// node_modules/graphology-layout-forceatlas2/defaults.js
+var require_defaults2 = __commonJS({
+  "node_modules/graphology-layout-forceatlas2/defaults.js"(exports, module) {
+    module.exports = {
+      linLogMode: false,
+      outboundAttractionDistribution: false,
+      adjustSizes: false,
+      edgeWeightInfluence: 1,
+      scalingRatio: 1,
+      strongGravityMode: false,
+      gravity: 1,
+      slowDown: 1,
+      barnesHutOptimize: false,
+      barnesHutTheta: 0.5
+    };
+  }
+});
+
+// node_modules/graphology-layout-forceatlas2/index.js
+var require_graphology_layout_forceatlas2 = __commonJS({
+  "node_modules/graphology-layout-forceatlas2/index.js"(exports, module) {
+    var isGraph = require_is_graph();
+    var createEdgeWeightGetter = require_getters().createEdgeWeightGetter;
+    var iterate = require_iterate();
+    var helpers = require_helpers();
+    var DEFAULT_SETTINGS = require_defaults2();
+    function abstractSynchronousLayout(assign2, graph, params) {
+      if (!isGraph(graph))
+        throw new Error(
+          "graphology-layout-forceatlas2: the given graph is not a valid graphology instance."
+        );
+      if (typeof params === "number") params = { iterations: params };
+      var iterations = params.iterations;
+      if (typeof iterations !== "number")
+        throw new Error(
+          "graphology-layout-forceatlas2: invalid number of iterations."
+        );
+      if (iterations <= 0)
+        throw new Error(
+          "graphology-layout-forceatlas2: you should provide a positive number of iterations."
+        );
+      var getEdgeWeight = createEdgeWeightGetter(
+        "getEdgeWeight" in params ? params.getEdgeWeight : "weight"
+      ).fromEntry;
+      var outputReducer = typeof params.outputReducer === "function" ? params.outputReducer : null;
+      var settings = helpers.assign({}, DEFAULT_SETTINGS, params.settings);
+      var validationError = helpers.validateSettings(settings);
+      if (validationError)
+        throw new Error(
+          "graphology-layout-forceatlas2: " + validationError.message
+        );
+      var matrices = helpers.graphToByteArrays(graph, getEdgeWeight);
+      var i;
+      for (i = 0; i < iterations; i++)
+        iterate(settings, matrices.nodes, matrices.edges);
+      if (assign2) {
+        helpers.assignLayoutChanges(graph, matrices.nodes, outputReducer);
+        return;
+      }
+      return helpers.collectLayoutChanges(graph, matrices.nodes);
+    }
+    function inferSettings(graph) {
+      var order = typeof graph === "number" ? graph : graph.order;
+      return {
+        barnesHutOptimize: order > 2e3,
+        strongGravityMode: true,
+        gravity: 0.05,
+        scalingRatio: 10,
+        slowDown: 1 + Math.log(order)
+      };
+    }
+    var synchronousLayout = abstractSynchronousLayout.bind(null, false);
+    synchronousLayout.assign = abstractSynchronousLayout.bind(null, true);
+    synchronousLayout.inferSettings = inferSettings;
+    module.exports = synchronousLayout;
+  }
+});
+
+// node_modules/graphology-layout-noverlap/iterate.js
+var require_iterate2 = __commonJS({
+  "node_modules/graphology-layout-noverlap/iterate.js"(exports, module) {
+    var NODE_X = 0;
+    var NODE_Y = 1;
+    var NODE_SIZE = 2;
+    var PPN = 3;
+    function hashPair(a, b) {
+      return a + "§" + b;
+    }
+    function jitter() {
+      return 0.01 * (0.5 - Math.random());
+    }
+    module.exports = function iterate(options, NodeMatrix) {
+      var margin = options.margin;
+      var ratio = options.ratio;
+      var expansion = options.expansion;
+      var gridSize = options.gridSize;
+      var speed = options.speed;
+      var i, j, x, y, l, size;
+      var converged = true;
+      var length = NodeMatrix.length;
+      var order = length / PPN | 0;
+      var deltaX = new Float32Array(order);
+      var deltaY = new Float32Array(order);
+      var xMin = Infinity;
+      var yMin = Infinity;
+      var xMax = -Infinity;
+      var yMax = -Infinity;
+      for (i = 0; i < length; i += PPN) {
+        x = NodeMatrix[i + NODE_X];
+        y = NodeMatrix[i + NODE_Y];
+        size = NodeMatrix[i + NODE_SIZE] * ratio + margin;
+        xMin = Math.min(xMin, x - size);
+        xMax = Math.max(xMax, x + size);
+        yMin = Math.min(yMin, y - size);
+        yMax = Math.max(yMax, y + size);
+      }
+      var width2 = xMax - xMin;
+      var height = yMax - yMin;
+      var xCenter = (xMin + xMax) / 2;
+      var yCenter = (yMin + yMax) / 2;
+      xMin = xCenter - expansion * width2 / 2;
+      xMax = xCenter + expansion * width2 / 2;
+      yMin = yCenter - expansion * height / 2;
+      yMax = yCenter + expansion * height / 2;
+      var grid = new Array(gridSize * gridSize), gridLength = grid.length, c;
+      for (c = 0; c < gridLength; c++) grid[c] = [];
+      var nxMin, nxMax, nyMin, nyMax;
+      var xMinBox, xMaxBox, yMinBox, yMaxBox;
+      var col, row;
+      for (i = 0; i < length; i += PPN) {
+        x = NodeMatrix[i + NODE_X];
+        y = NodeMatrix[i + NODE_Y];
+        size = NodeMatrix[i + NODE_SIZE] * ratio + margin;
+        nxMin = x - size;
+        nxMax = x + size;
+        nyMin = y - size;
+        nyMax = y + size;
+        xMinBox = Math.floor(gridSize * (nxMin - xMin) / (xMax - xMin));
+        xMaxBox = Math.floor(gridSize * (nxMax - xMin) / (xMax - xMin));
+        yMinBox = Math.floor(gridSize * (nyMin - yMin) / (yMax - yMin));
+        yMaxBox = Math.floor(gridSize * (nyMax - yMin) / (yMax - yMin));
+        for (col = xMinBox; col <= xMaxBox; col++) {
+          for (row = yMinBox; row <= yMaxBox; row++) {
+            grid[col * gridSize + row].push(i);
+          }
+        }
+      }
+      var cell2;
+      var collisions = /* @__PURE__ */ new Set();
+      var n1, n2, x1, x2, y1, y2, s1, s2, h;
+      var xDist, yDist, dist, collision;
+      for (c = 0; c < gridLength; c++) {
+        cell2 = grid[c];
+        for (i = 0, l = cell2.length; i < l; i++) {
+          n1 = cell2[i];
+          x1 = NodeMatrix[n1 + NODE_X];
+          y1 = NodeMatrix[n1 + NODE_Y];
+          s1 = NodeMatrix[n1 + NODE_SIZE];
+          for (j = i + 1; j < l; j++) {
+            n2 = cell2[j];
+            h = hashPair(n1, n2);
+            if (gridLength > 1 && collisions.has(h)) continue;
+            if (gridLength > 1) collisions.add(h);
+            x2 = NodeMatrix[n2 + NODE_X];
+            y2 = NodeMatrix[n2 + NODE_Y];
+            s2 = NodeMatrix[n2 + NODE_SIZE];
+            xDist = x2 - x1;
+            yDist = y2 - y1;
+            dist = Math.sqrt(xDist * xDist + yDist * yDist);
+            collision = dist < s1 * ratio + margin + (s2 * ratio + margin);
+            if (collision) {
+              converged = false;
+              n2 = n2 / PPN | 0;
+              if (dist > 0) {
+                deltaX[n2] += xDist / dist * (1 + s1);
+                deltaY[n2] += yDist / dist * (1 + s1);
+              } else {
+                deltaX[n2] += width2 * jitter();
+                deltaY[n2] += height * jitter();
+              }
+            }
+          }
+        }
+      }
+      for (i = 0, j = 0; i < length; i += PPN, j++) {
+        NodeMatrix[i + NODE_X] += deltaX[j] * 0.1 * speed;
+        NodeMatrix[i + NODE_Y] += deltaY[j] * 0.1 * speed;
+      }
+      return { converged };
+    };
+  }
+});
+
+// node_modules/graphology-layout-noverlap/helpers.js
+var require_helpers2 = __commonJS({
+  "node_modules/graphology-layout-noverlap/helpers.js"(exports) {
+    var PPN = 3;
+    exports.validateSettings = function(settings) {
+      if ("gridSize" in settings && typeof settings.gridSize !== "number" || settings.gridSize <= 0)
+        return { message: "the `gridSize` setting should be a positive number." };
+      if ("margin" in settings && typeof settings.margin !== "number" || settings.margin < 0)
+        return {
+          message: "the `margin` setting should be 0 or a positive number."
+        };
+      if ("expansion" in settings && typeof settings.expansion !== "number" || settings.expansion <= 0)
+        return { message: "the `expansion` setting should be a positive number." };
+      if ("ratio" in settings && typeof settings.ratio !== "number" || settings.ratio <= 0)
+        return { message: "the `ratio` setting should be a positive number." };
+      if ("speed" in settings && typeof settings.speed !== "number" || settings.speed <= 0)
+        return { message: "the `speed` setting should be a positive number." };
+      return null;
+    };
+    exports.graphToByteArray = function(graph, reducer) {
+      var order = graph.order;
+      var matrix = new Float32Array(order * PPN);
+      var j = 0;
+      graph.forEachNode(function(node, attr) {
+        if (typeof reducer === "function") attr = reducer(node, attr);
+        matrix[j] = attr.x;
+        matrix[j + 1] = attr.y;
+        matrix[j + 2] = attr.size || 1;
+        j += PPN;
+      });
+      return matrix;
+    };
+    exports.assignLayoutChanges = function(graph, NodeMatrix, reducer) {
+      var i = 0;
+      graph.forEachNode(function(node) {
+        var pos = {
+          x: NodeMatrix[i],
+          y: NodeMatrix[i + 1]
+        };
+        if (typeof reducer === "function") pos = reducer(node, pos);
+        graph.mergeNodeAttributes(node, pos);
+        i += PPN;
+      });
+    };
+    exports.collectLayoutChanges = function(graph, NodeMatrix, reducer) {
+      var positions = {};
+      var i = 0;
+      graph.forEachNode(function(node) {
+        var pos = {
+          x: NodeMatrix[i],
+          y: NodeMatrix[i + 1]
+        };
+        if (typeof reducer === "function") pos = reducer(node, pos);
+        positions[node] = pos;
+        i += PPN;
+      });
+      return positions;
+    };
+    exports.createWorker = function createWorker(fn) {
+      var xURL = window.URL || window.webkitURL;
+      var code = fn.toString();
+      var objectUrl = xURL.createObjectURL(
+        new Blob(["(" + code + ").call(this);"], { type: "text/javascript" })
+      );
+      var worker = new Worker(objectUrl);
+      xURL.revokeObjectURL(objectUrl);
+      return worker;
+    };
+  }
+});
+
+// node_modules/graphology-layout-noverlap/defaults.js
+var require_defaults3 = __commonJS({
+  "node_modules/graphology-layout-noverlap/defaults.js"(exports, module) {
+    module.exports = {
+      gridSize: 20,
+      margin: 5,
+      expansion: 1.1,
+      ratio: 1,
+      speed: 3
+    };
+  }
+});
+
+// node_modules/graphology-layout-noverlap/index.js
+var require_graphology_layout_noverlap = __commonJS({
+  "node_modules/graphology-layout-noverlap/index.js"(exports, module) {
+    var isGraph = require_is_graph();
+    var iterate = require_iterate2();
+    var helpers = require_helpers2();
+    var DEFAULT_SETTINGS = require_defaults3();
+    var DEFAULT_MAX_ITERATIONS = 500;
+    function abstractSynchronousLayout(assign2, graph, params) {
+      if (!isGraph(graph))
+        throw new Error(
+          "graphology-layout-noverlap: the given graph is not a valid graphology instance."
+        );
+      if (typeof params === "number") params = { maxIterations: params };
+      else params = params || {};
+      var maxIterations = params.maxIterations || DEFAULT_MAX_ITERATIONS;
+      if (typeof maxIterations !== "number" || maxIterations <= 0)
+        throw new Error(
+          "graphology-layout-force: you should provide a positive number of maximum iterations."
+        );
+      var settings = Object.assign({}, DEFAULT_SETTINGS, params.settings), validationError = helpers.validateSettings(settings);
+      if (validationError)
+        throw new Error("graphology-layout-noverlap: " + validationError.message);
+      var matrix = helpers.graphToByteArray(graph, params.inputReducer), converged = false, i;
+      for (i = 0; i < maxIterations && !converged; i++)
+        converged = iterate(settings, matrix).converged;
+      if (assign2) {
+        helpers.assignLayoutChanges(graph, matrix, params.outputReducer);
+        return;
+      }
+      return helpers.collectLayoutChanges(graph, matrix, params.outputReducer);
+    }
+    var synchronousLayout = abstractSynchronousLayout.bind(null, false);
+    synchronousLayout.assign = abstractSynchronousLayout.bind(null, true);
+    module.exports = synchronousLayout;
+  }
+});
+
+// src/map/project.ts
+function round1(v) {
+  const r = Math.round(v * 10) / 10;
+  return Object.is(r, -0) ? 0 : r;
+}
+function unwrapLongitudes(lon) {
+  if (lon.length < 2) return [...lon];
+  const norm2 = lon.map((l) => ((l + 180) % 360 + 360) % 360 - 180);
+  const sorted = [...new Set(norm2)].sort((a, b) => a - b);
+  let gap = sorted[0] + 360 - sorted[sorted.length - 1];
+  let start = sorted[0];
+  for (let i = 1; i < sorted.length; i++) {
+    const d = sorted[i] - sorted[i - 1];
+    if (d > gap) {
+      gap = d;
+      start = sorted[i];
+    }
+  }
+  return norm2.map((l) => l < start ? l + 360 : l);
+}
+function fitToBox(px, py, width2 = MAP_WIDTH, maxHeight = MAP_MAX_HEIGHT, margin = MAP_MARGIN) {
+  const n = px.length;
+  let x0 = Infinity;
+  let x1 = -Infinity;
+  let y0 = Infinity;
+  let y1 = -Infinity;
+  for (let i = 0; i < n; i++) {
+    x0 = Math.min(x0, px[i]);
+    x1 = Math.max(x1, px[i]);
+    y0 = Math.min(y0, py[i]);
+    y1 = Math.max(y1, py[i]);
+  }
+  const x = new Float64Array(n);
+  const y = new Float64Array(n);
+  if (n === 0) return { x, y, width: width2, height: MAP_MIN_HEIGHT };
+  const spanX = x1 - x0;
+  const spanY = y1 - y0;
+  const innerW = width2 - 2 * margin;
+  const innerH = maxHeight - 2 * margin;
+  const s = spanX <= 0 && spanY <= 0 ? 1 : Math.min(spanX > 0 ? innerW / spanX : Infinity, spanY > 0 ? innerH / spanY : Infinity);
+  const height = Math.max(MAP_MIN_HEIGHT, Math.min(maxHeight, Math.ceil(spanY * s + 2 * margin)));
+  const offX = (width2 - spanX * s) / 2;
+  const offY = (height - spanY * s) / 2;
+  for (let i = 0; i < n; i++) {
+    x[i] = round1(offX + (px[i] - x0) * s);
+    y[i] = round1(offY + (py[i] - y0) * s);
+  }
+  return { x, y, width: width2, height };
+}
+function projectGeographic(lat, lon) {
+  const lons = unwrapLongitudes(lon);
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of lat) {
+    lo = Math.min(lo, v);
+    hi = Math.max(hi, v);
+  }
+  const phi0 = lat.length ? (lo + hi) / 2 * (Math.PI / 180) : 0;
+  const k = Math.max(0.05, Math.cos(phi0));
+  return fitToBox(
+    lons.map((l) => l * k),
+    lat.map((v) => -v)
+  );
+}
+var MAP_WIDTH, MAP_MAX_HEIGHT, MAP_MIN_HEIGHT, MAP_MARGIN;
+var init_project = __esm({
+  "src/map/project.ts"() {
+    "use strict";
+    MAP_WIDTH = 760;
+    MAP_MAX_HEIGHT = 640;
+    MAP_MIN_HEIGHT = 260;
+    MAP_MARGIN = 36;
+  }
+});
+
+// src/map/force.ts
+function iterationsFor(n) {
+  return n <= 300 ? 500 : n <= 1e3 ? 250 : 120;
+}
+function forceLayout(ids, edges, seed = LAYOUT_SEED) {
+  const n = ids.length;
+  if (n === 0) return fitToBox([], []);
+  const graph = new UndirectedGraph({ multi: false, allowSelfLoops: false });
+  const s = seedWord(seed);
+  const spread2 = 10 * Math.sqrt(n);
+  ids.forEach((id2, i) => {
+    const hx = hashString(id2, s) / 4294967296;
+    const hy = hashString(id2, s ^ 2654435769) / 4294967296;
+    graph.addNode(String(i), { x: (hx * 2 - 1) * spread2, y: (hy * 2 - 1) * spread2, size: 1 });
+  });
+  for (const [a, b] of edges) {
+    if (a === b) continue;
+    const u = String(a);
+    const v = String(b);
+    const e = graph.edge(u, v);
+    if (e === void 0) graph.addEdge(u, v, { weight: 1 });
+    else graph.updateEdgeAttribute(e, "weight", (w) => (w ?? 1) + 1);
+  }
+  if (n > 1) {
+    const settings = { ...forceAtlas2.inferSettings(n), barnesHutOptimize: n > 600 };
+    forceAtlas2.assign(graph, { iterations: iterationsFor(n), settings, getEdgeWeight: "weight" });
+    noverlap.assign(graph, { maxIterations: 80, settings: { margin: 2, ratio: 1.2 } });
+  }
+  const px = [];
+  const py = [];
+  for (let i = 0; i < n; i++) {
+    const a = graph.getNodeAttributes(String(i));
+    px.push(Number.isFinite(a.x) ? a.x : 0);
+    py.push(Number.isFinite(a.y) ? a.y : 0);
+  }
+  return fitToBox(px, py);
+}
+var import_graphology_layout_forceatlas2, import_graphology_layout_noverlap, forceAtlas2, noverlap, LAYOUT_SEED;
+var init_force = __esm({
+  "src/map/force.ts"() {
+    "use strict";
+    init_graphology();
+    import_graphology_layout_forceatlas2 = __toESM(require_graphology_layout_forceatlas2(), 1);
+    import_graphology_layout_noverlap = __toESM(require_graphology_layout_noverlap(), 1);
+    init_rng();
+    init_project();
+    forceAtlas2 = import_graphology_layout_forceatlas2.default;
+    noverlap = import_graphology_layout_noverlap.default;
+    LAYOUT_SEED = 7168368;
+  }
+});
+
+// src/map/stranding.ts
+function offMain(g, mask = createMask(g)) {
+  const c = findComponents(g, mask);
+  return c.largest < 0 ? 0 : g.n - c.sizes[c.largest];
+}
+function strandingGroups(g) {
+  const out = /* @__PURE__ */ new Map();
+  const intact = offMain(g);
+  const mask = createMask(g);
+  for (let u = 0; u < unitCount(g, "group"); u++) {
+    mask.link.fill(0);
+    removeUnit(g, mask, "group", u);
+    const strands = offMain(g, mask) - intact;
+    if (strands > 0) out.set(g.groupIds[u], strands);
+  }
+  return out;
+}
+var init_stranding = __esm({
+  "src/map/stranding.ts"() {
+    "use strict";
+    init_mask();
+    init_structure();
+    init_units();
+  }
+});
+
+// src/map/build.ts
+function buildDesignMap(head, base) {
+  const h = head.graph;
+  const b = base?.graph;
+  const nodes = [];
+  const index = /* @__PURE__ */ new Map();
+  const lat = [];
+  const lon = [];
+  const addNode2 = (g, v, side, labels2) => {
+    const id2 = g.nodeIds[v];
+    index.set(id2, nodes.length);
+    const node = { id: id2, x: 0, y: 0, line: g.nodeLine[v], side };
+    const label = labels2?.get(id2);
+    if (label !== void 0 && label !== id2) node.label = label;
+    if (g.nodeHardened[v]) node.hardened = true;
+    nodes.push(node);
+    lat.push(g.lat ? g.lat[v] : Number.NaN);
+    lon.push(g.lon ? g.lon[v] : Number.NaN);
+  };
+  for (let v = 0; v < h.n; v++) addNode2(h, v, b && !b.nodeIndex.has(h.nodeIds[v]) ? "head" : "both", head.labels);
+  if (b) {
+    for (let v = 0; v < b.n; v++) if (!h.nodeIndex.has(b.nodeIds[v])) addNode2(b, v, "base", base?.labels);
+  }
+  const links = [];
+  const edges = [];
+  const addLink = (g, e, side) => {
+    const source = g.nodeIds[g.linkSource[e]];
+    const target = g.nodeIds[g.linkTarget[e]];
+    const link = { id: g.linkIds[e], source, target, line: g.linkLine[e], side };
+    if (g.linkHardened[e]) link.hardened = true;
+    const groups = [];
+    for (let k = 0; k < g.groupIds.length; k++) {
+      for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) if (g.groupLinks[p] === e) groups.push(g.groupIds[k]);
+    }
+    if (groups.length) link.groups = groups;
+    links.push(link);
+    edges.push([index.get(source), index.get(target)]);
+  };
+  const baseKeys = new Set(b?.linkKeys ?? []);
+  const headKeys = new Set(h.linkKeys);
+  for (let e = 0; e < h.m; e++) addLink(h, e, b && !baseKeys.has(h.linkKeys[e]) ? "head" : "both");
+  if (b) {
+    for (let e = 0; e < b.m; e++) if (!headKeys.has(b.linkKeys[e])) addLink(b, e, "base");
+  }
+  if (nodes.length > MAP_MAX_NODES || links.length > MAP_MAX_LINKS) {
+    return { omitted: `${nodes.length} sites and ${links.length} links, base and head together: more than a map shows legibly (${MAP_MAX_NODES} sites, ${MAP_MAX_LINKS} links)` };
+  }
+  const located = nodes.map((_, i) => Number.isFinite(lat[i]) && Number.isFinite(lon[i]));
+  const nLocated = located.filter(Boolean).length;
+  let layout;
+  let method;
+  let width2;
+  let height;
+  if (nLocated >= 2) {
+    layout = "geographic";
+    const idx = nodes.map((_, i) => i).filter((i) => located[i]);
+    const placed = projectGeographic(idx.map((i) => lat[i]), idx.map((i) => lon[i]));
+    width2 = placed.width;
+    height = placed.height;
+    const x = new Float64Array(nodes.length).fill(Number.NaN);
+    const y = new Float64Array(nodes.length).fill(Number.NaN);
+    idx.forEach((i, k) => {
+      x[i] = placed.x[k];
+      y[i] = placed.y[k];
+    });
+    placeUnlocated(nodes.length, edges, x, y, width2, height);
+    nodes.forEach((node, i) => {
+      node.x = x[i];
+      node.y = y[i];
+      if (!located[i]) node.placed = true;
+    });
+    method = "sites at their coordinates: equirectangular projection centred on the design, fitted to its extent" + (nLocated < nodes.length ? `; ${nodes.length - nLocated} site${nodes.length - nLocated === 1 ? "" : "s"} without coordinates placed beside their neighbours` : "");
+  } else {
+    layout = "force";
+    const placed = forceLayout(nodes.map((n) => n.id), edges);
+    width2 = placed.width;
+    height = placed.height;
+    nodes.forEach((node, i) => {
+      node.x = placed.x[i];
+      node.y = placed.y[i];
+    });
+    method = "no coordinates: a seeded ForceAtlas2 layout of the links, with an anti-overlap pass (positions carry no geographic meaning)";
+  }
+  const headStrand = strandingGroups(h);
+  const baseStrand = b ? strandingGroups(b) : /* @__PURE__ */ new Map();
+  const strandingGroupsList = [...headStrand.entries()].map(([id2, strands]) => ({
+    id: id2,
+    line: h.groupLine[h.groupIds.indexOf(id2)] ?? 0,
+    strands,
+    isNew: b !== void 0 && !baseStrand.has(id2)
+  }));
+  return { layout, width: width2, height, nodes, links, strandingGroups: strandingGroupsList, method };
+}
+function placeUnlocated(n, edges, x, y, width2, height) {
+  const adj = Array.from({ length: n }, () => []);
+  for (const [a, b] of edges) {
+    adj[a].push(b);
+    adj[b].push(a);
+  }
+  for (let round = 0; round < 16; round++) {
+    let changed = false;
+    const nx = Float64Array.from(x);
+    const ny = Float64Array.from(y);
+    for (let i = 0; i < n; i++) {
+      if (Number.isFinite(x[i])) continue;
+      const near = adj[i].filter((j) => Number.isFinite(x[j]));
+      if (!near.length) continue;
+      nx[i] = round1(near.reduce((s, j) => s + x[j], 0) / near.length + 9 * Math.cos(i));
+      ny[i] = round1(near.reduce((s, j) => s + y[j], 0) / near.length + 9 * Math.sin(i));
+      changed = true;
+    }
+    x.set(nx);
+    y.set(ny);
+    if (!changed) break;
+  }
+  const rest = [];
+  for (let i = 0; i < n; i++) if (!Number.isFinite(x[i])) rest.push(i);
+  rest.forEach((i, k) => {
+    x[i] = round1(MAP_MARGIN + (width2 - 2 * MAP_MARGIN) * (k + 0.5) / rest.length);
+    y[i] = round1(height - MAP_MARGIN / 2);
+  });
+}
+var MAP_MAX_NODES, MAP_MAX_LINKS;
+var init_build = __esm({
+  "src/map/build.ts"() {
+    "use strict";
+    init_force();
+    init_project();
+    init_stranding();
+    MAP_MAX_NODES = 1e3;
+    MAP_MAX_LINKS = 4e3;
+  }
+});
+
+// src/mend/apply.ts
+function withExtraLinks(g, extra) {
+  if (extra.length === 0) return g;
+  const m = g.m + extra.length;
+  const linkSource = new Int32Array(m);
+  const linkTarget = new Int32Array(m);
+  linkSource.set(g.linkSource);
+  linkTarget.set(g.linkTarget);
+  extra.forEach(([a, b], k) => {
+    linkSource[g.m + k] = a;
+    linkTarget[g.m + k] = b;
+  });
+  const degree2 = new Int32Array(g.n);
+  for (let e = 0; e < m; e++) {
+    degree2[linkSource[e]]++;
+    degree2[linkTarget[e]]++;
+  }
+  const offsets = new Int32Array(g.n + 1);
+  for (let v = 0; v < g.n; v++) offsets[v + 1] = offsets[v] + degree2[v];
+  const neighbors = new Int32Array(2 * m);
+  const linkOf = new Int32Array(2 * m);
+  const fill = offsets.slice(0, g.n);
+  for (let e = 0; e < m; e++) {
+    const s = linkSource[e];
+    const d = linkTarget[e];
+    neighbors[fill[s]] = d;
+    linkOf[fill[s]++] = e;
+    neighbors[fill[d]] = s;
+    linkOf[fill[d]++] = e;
+  }
+  const linkHardened = new Uint8Array(m);
+  linkHardened.set(g.linkHardened);
+  const linkLine = new Int32Array(m);
+  linkLine.set(g.linkLine);
+  return {
+    ...g,
+    m,
+    offsets,
+    neighbors,
+    linkOf,
+    linkSource,
+    linkTarget,
+    linkHardened,
+    linkLine,
+    length: null,
+    latency: null,
+    weight: null,
+    linkIds: [...g.linkIds, ...extra.map((_, k) => `\0extra${k}`)],
+    linkKeys: [...g.linkKeys, ...extra.map((_, k) => `\0extra${k}`)]
+  };
+}
+function applyToTopology(t, change) {
+  const hardNodes = new Set(change.harden.filter((e) => e.kind === "node").map((e) => e.id));
+  const hardLinks = new Set(change.harden.filter((e) => e.kind === "link").map((e) => e.id));
+  const pairs = /* @__PURE__ */ new Map();
+  for (const l of t.links) {
+    const k = linkKey(l.source, l.target, 1);
+    pairs.set(k, (pairs.get(k) ?? 0) + 1);
+  }
+  const added = change.links.map((l) => {
+    const [source, target] = l.between;
+    const k = linkKey(source, target, 1);
+    const occurrence = (pairs.get(k) ?? 0) + 1;
+    pairs.set(k, occurrence);
+    const link = {
+      id: l.id,
+      key: linkKey(source, target, occurrence),
+      source,
+      target,
+      riskGroups: [...l.riskGroups ?? []],
+      hardened: false,
+      pos: { line: 0, column: 0 },
+      attrs: {}
+    };
+    if (l.lengthKm !== void 0) link.length = l.lengthKm;
+    if (l.latencyMs !== void 0) link.latency = l.latencyMs;
+    return link;
+  });
+  return {
+    ...t,
+    nodes: t.nodes.map((v) => hardNodes.has(v.id) ? { ...v, hardened: true } : v),
+    links: [...t.links.map((l) => hardLinks.has(l.id) ? { ...l, hardened: true } : l), ...added]
+  };
+}
+function linkEntry(l) {
+  const entry = { id: l.id, between: [...l.between] };
+  if (l.lengthKm !== void 0) entry.length_km = l.lengthKm;
+  if (l.latencyMs !== void 0) entry.latency_ms = l.latencyMs;
+  if (l.riskGroups && l.riskGroups.length) entry.risk_groups = [...l.riskGroups];
+  return entry;
+}
+function applyToText(text2, format, t, change) {
+  const hardNodes = new Set(change.harden.filter((e) => e.kind === "node").map((e) => e.id));
+  const hardLinks = new Set(change.harden.filter((e) => e.kind === "link").map((e) => e.id));
+  if (format === "native-json") {
+    const data = JSON.parse(text2);
+    for (const n of data.nodes) if (hardNodes.has(String(n.id))) n.hardened = true;
+    const items = data.links ?? [];
+    linkItemsOf(t, items.map((l) => l.between)).forEach((i, e) => {
+      if (hardLinks.has(t.links[e].id)) items[i].hardened = true;
+    });
+    data.links = [...items, ...change.links.map(linkEntry)];
+    return `${JSON.stringify(data, null, 2)}
+`;
+  }
+  if (format !== "native-yaml") {
+    throw new UsageError(`a ${format} design cannot be edited by netbrace`, "add the links (or the hardened flags) by hand, as the suggestion lists them");
+  }
+  const doc = (0, import_yaml5.parseDocument)(text2);
+  const nodes = doc.get("nodes", true);
+  const nodeItems = (0, import_yaml5.isSeq)(nodes) ? nodes.items : [];
+  for (const n of nodeItems) {
+    if (!(0, import_yaml5.isMap)(n)) continue;
+    const id2 = n.get("id", true);
+    if ((0, import_yaml5.isScalar)(id2) && hardNodes.has(String(id2.value))) n.set("hardened", true);
+  }
+  let links = doc.get("links", true);
+  const linkItems = (0, import_yaml5.isSeq)(links) ? links.items : [];
+  const betweens = linkItems.map((n) => (0, import_yaml5.isMap)(n) ? n.toJSON().between : void 0);
+  linkItemsOf(t, betweens).forEach((i, e) => {
+    const item = linkItems[i];
+    if (hardLinks.has(t.links[e].id) && (0, import_yaml5.isMap)(item)) item.set("hardened", true);
+  });
+  if (change.links.length > 0) {
+    if (!(0, import_yaml5.isSeq)(links)) {
+      links = doc.createNode([]);
+      doc.set("links", links);
+    }
+    for (const l of change.links) {
+      const node = doc.createNode(linkEntry(l));
+      node.get("between", true).flow = true;
+      const groups = node.get("risk_groups", true);
+      if (groups) groups.flow = true;
+      links.items.push(node);
+    }
+  }
+  return doc.toString({ flowCollectionPadding: false, lineWidth: 0 });
+}
+function linkItemsOf(t, betweens) {
+  const out = [];
+  betweens.forEach((b, i) => {
+    if (Array.isArray(b) && b.length === 2 && String(b[0]) !== String(b[1])) out.push(i);
+  });
+  return out.slice(0, t.links.length);
+}
+var import_yaml5;
+var init_apply = __esm({
+  "src/mend/apply.ts"() {
+    "use strict";
+    import_yaml5 = __toESM(require_dist(), 1);
+    init_errors();
+    init_model();
+  }
+});
+
+// src/mend/candidates.ts
+function price(c, unit) {
+  if (unit === "cost") return c.cost ?? 0;
+  if (unit === "km") return c.lengthKm ?? 0;
+  return 1;
+}
+function unitOf(list2) {
+  if (list2.length > 0 && list2.every((c) => c.cost !== void 0)) return "cost";
+  if (list2.length > 0 && list2.every((c) => c.lengthKm !== void 0)) return "km";
+  return "link";
+}
+function parseCandidateFile(text2, file, g) {
+  const lines = new import_yaml6.LineCounter();
+  const doc = (0, import_yaml6.parseDocument)(text2, { lineCounter: lines, prettyErrors: false, uniqueKeys: true });
+  const at = (node) => {
+    const p = node?.range ? lines.linePos(node.range[0]) : { line: 1, col: 1 };
+    return { file, line: p.line, column: p.col };
+  };
+  if (doc.errors.length > 0) {
+    const p = lines.linePos(doc.errors[0].pos[0]);
+    throw new PolicyError(`the candidate list is not valid YAML: ${doc.errors[0].message.split("\n")[0]}`, { file, line: p.line, column: p.col }, "check the indentation and quoting on this line");
+  }
+  const root = doc.contents;
+  const hint = 'write "candidates:" followed by a list of {between: [a, b], length_km: …}';
+  if (!(0, import_yaml6.isMap)(root)) throw new PolicyError('the candidate list must be a mapping with a "candidates" list', at(root), hint);
+  const pair2 = root.items.find((p) => (0, import_yaml6.isScalar)(p.key) && p.key.value === "candidates");
+  if (!pair2 || !(0, import_yaml6.isSeq)(pair2.value)) throw new PolicyError('the candidate list has no "candidates" list', at(pair2?.value ?? root), hint);
+  const list2 = [];
+  const notes = [];
+  const missing3 = /* @__PURE__ */ new Set();
+  pair2.value.items.forEach((item, i) => {
+    const what = `candidate ${i + 1}`;
+    if (!(0, import_yaml6.isMap)(item)) throw new PolicyError(`${what} must be a mapping`, at(item), hint);
+    const get = (k) => item.items.find((p) => (0, import_yaml6.isScalar)(p.key) && p.key.value === k);
+    for (const p of item.items) {
+      const k = (0, import_yaml6.isScalar)(p.key) ? String(p.key.value) : "";
+      if (!KEYS.has(k)) throw new PolicyError(`${what}: unknown key "${k}"`, at(p.key), `known keys: ${[...KEYS].join(", ")}`);
+    }
+    const between = get("between");
+    const ends = between && (0, import_yaml6.isSeq)(between.value) ? between.value.items : null;
+    if (!ends || ends.length !== 2 || !ends.every((e) => (0, import_yaml6.isScalar)(e) && (typeof e.value === "string" || typeof e.value === "number"))) {
+      throw new PolicyError(`${what}: "between" must list two site ids`, at(between?.value ?? item), "e.g. between: [north, south]");
+    }
+    const [s, t] = ends.map((e) => String(e.value));
+    if (s === t) throw new PolicyError(`${what}: a link from a site to itself adds nothing`, at(ends[1]), "name two different sites");
+    const num3 = (k) => {
+      const p = get(k);
+      if (!p) return void 0;
+      const v = (0, import_yaml6.isScalar)(p.value) ? p.value.value : void 0;
+      if (typeof v !== "number" || !Number.isFinite(v) || v < 0) throw new PolicyError(`${what}: "${k}" must be a number ≥ 0`, at(p.value), "");
+      return v;
+    };
+    const str = (k) => {
+      const p = get(k);
+      if (!p) return void 0;
+      const v = (0, import_yaml6.isScalar)(p.value) ? p.value.value : void 0;
+      if (typeof v !== "string" && typeof v !== "number") throw new PolicyError(`${what}: "${k}" must be text`, at(p.value), "");
+      return String(v);
+    };
+    const lengthKm = num3("length_km");
+    const cost = num3("cost");
+    if (lengthKm === void 0 && cost === void 0) throw new PolicyError(`${what} has neither "length_km" nor "cost"`, at(item), "give its length or its cost");
+    const rg = get("risk_groups");
+    let riskGroups2;
+    if (rg) {
+      if (!(0, import_yaml6.isSeq)(rg.value) || !rg.value.items.every((x) => (0, import_yaml6.isScalar)(x))) throw new PolicyError(`${what}: "risk_groups" must be a list of ids`, at(rg.value), "");
+      riskGroups2 = rg.value.items.map((x) => String(x.value));
+    }
+    const a = g.nodeIndex.get(s);
+    const b = g.nodeIndex.get(t);
+    if (a === void 0 || b === void 0) {
+      for (const id3 of [s, t]) if (!g.nodeIndex.has(id3)) missing3.add(id3);
+      return;
+    }
+    const c = { a, b, source: "list", line: at(item).line };
+    const id2 = str("id");
+    if (id2 !== void 0) c.id = id2;
+    if (lengthKm !== void 0) c.lengthKm = lengthKm;
+    const latency = num3("latency_ms");
+    if (latency !== void 0) c.latencyMs = latency;
+    if (cost !== void 0) c.cost = cost;
+    if (riskGroups2) c.riskGroups = riskGroups2;
+    const note2 = str("note");
+    if (note2 !== void 0) c.note = note2;
+    list2.push(c);
+  });
+  if (missing3.size > 0) {
+    const names = [...missing3].slice(0, 5).join(", ");
+    notes.push(`candidates naming sites this design does not have were skipped (${names}${missing3.size > 5 ? ", …" : ""})`);
+  }
+  return { list: list2, unit: unitOf(list2), source: "list", notes };
+}
+function longestSpanKm(g) {
+  let best = 0;
+  if (!g.lat || !g.lon) return 0;
+  for (let e = 0; e < g.m; e++) {
+    const s = g.linkSource[e];
+    const t = g.linkTarget[e];
+    const d = greatCircleKm(g.lat[s], g.lon[s], g.lat[t], g.lon[t]);
+    if (Number.isFinite(d) && d > best) best = d;
+  }
+  return best;
+}
+function adjacency(g) {
+  const set = /* @__PURE__ */ new Set();
+  for (let e = 0; e < g.m; e++) {
+    const s = g.linkSource[e];
+    const t = g.linkTarget[e];
+    set.add(s < t ? s * g.n + t : t * g.n + s);
+  }
+  return set;
+}
+function generateCandidates(g, options = {}) {
+  const routeFactor = options.routeFactor ?? DEFAULT_ROUTE_FACTOR;
+  const joined = adjacency(g);
+  const notes = [];
+  const list2 = [];
+  const hasCoords = (v) => g.lat !== null && g.lon !== null && Number.isFinite(g.lat[v]) && Number.isFinite(g.lon[v]);
+  const located = [];
+  for (let v = 0; v < g.n; v++) if (hasCoords(v)) located.push(v);
+  if (located.length >= 2) {
+    const maxKm = options.maxKm ?? longestSpanKm(g);
+    const consider = (a, b) => {
+      if (joined.has(a * g.n + b)) return;
+      const d = greatCircleKm(g.lat[a], g.lon[a], g.lat[b], g.lon[b]);
+      if (d <= maxKm) list2.push({ a, b, lengthKm: Math.round(d * routeFactor * 10) / 10, source: "generated" });
+    };
+    if (located.length <= GEO_ALL_PAIRS_LIMIT) {
+      for (let i = 0; i < located.length; i++) for (let j = i + 1; j < located.length; j++) consider(located[i], located[j]);
+    } else {
+      for (const [a, b] of nearPairs(g)) if (hasCoords(a) && hasCoords(b)) consider(a, b);
+      notes.push(`${located.length} located sites: only pairs within ${MAX_HOPS} hops were considered`);
+    }
+    list2.sort((x, y) => x.lengthKm - y.lengthKm || x.a - y.a || x.b - y.b);
+    if (list2.length > MAX_GENERATED) {
+      notes.push(`${list2.length} site pairs lie within ${round13(maxKm)} km; the ${MAX_GENERATED} shortest were considered`);
+      list2.length = MAX_GENERATED;
+    }
+    if (located.length < g.n) notes.push(`${g.n - located.length} sites have no coordinates and get no generated candidate`);
+    return { list: list2, unit: "km", source: "generated", routeFactor, maxKm: round13(maxKm), notes };
+  }
+  if (g.n <= ALL_PAIRS_LIMIT) {
+    for (let a = 0; a < g.n; a++) for (let b = a + 1; b < g.n; b++) if (!joined.has(a * g.n + b)) list2.push({ a, b, source: "generated" });
+    notes.push("the design has no coordinates: every pair of sites not yet joined is a candidate, and lengths are unknown");
+  } else {
+    for (const [a, b] of nearPairs(g)) list2.push({ a, b, source: "generated" });
+    notes.push(`the design has no coordinates: site pairs within ${MAX_HOPS} hops are the candidates, and lengths are unknown`);
+  }
+  return { list: list2, unit: "link", source: "generated", notes };
+}
+function nearPairs(g) {
+  const out = [];
+  const dist = new Int32Array(g.n).fill(-1);
+  const queue2 = new Int32Array(g.n);
+  for (let a = 0; a < g.n && out.length < MAX_GENERATED; a++) {
+    let head = 0;
+    let tail = 0;
+    queue2[tail++] = a;
+    dist[a] = 0;
+    while (head < tail) {
+      const v = queue2[head++];
+      if (dist[v] >= MAX_HOPS) continue;
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+        const w = g.neighbors[p];
+        if (dist[w] !== -1) continue;
+        dist[w] = dist[v] + 1;
+        queue2[tail++] = w;
+      }
+    }
+    const near = [];
+    for (let i = 0; i < tail; i++) {
+      const b = queue2[i];
+      if (b > a && dist[b] >= 2) near.push(b);
+    }
+    near.sort((x, y) => x - y);
+    for (const b of near) if (out.length < MAX_GENERATED) out.push([a, b]);
+    for (let i = 0; i < tail; i++) dist[queue2[i]] = -1;
+  }
+  return out;
+}
+function round13(x) {
+  return Math.round(x * 10) / 10;
+}
+var import_yaml6, DEFAULT_ROUTE_FACTOR, ALL_PAIRS_LIMIT, MAX_HOPS, GEO_ALL_PAIRS_LIMIT, MAX_GENERATED, KEYS;
+var init_candidates = __esm({
+  "src/mend/candidates.ts"() {
+    "use strict";
+    import_yaml6 = __toESM(require_dist(), 1);
+    init_errors();
+    init_link_cost();
+    DEFAULT_ROUTE_FACTOR = 1.3;
+    ALL_PAIRS_LIMIT = 300;
+    MAX_HOPS = 3;
+    GEO_ALL_PAIRS_LIMIT = 2e3;
+    MAX_GENERATED = 2e4;
+    KEYS = /* @__PURE__ */ new Set(["between", "id", "length_km", "latency_ms", "cost", "risk_groups", "note"]);
+  }
+});
+
+// src/mend/bridge-tree.ts
+function bridgeForest(g, cut) {
+  const isCut = new Uint8Array(g.m);
+  for (const e of cut) isCut[e] = 1;
+  const piece = new Int32Array(g.n).fill(-1);
+  const queue2 = new Int32Array(g.n);
+  let pieces = 0;
+  for (let s = 0; s < g.n; s++) {
+    if (piece[s] !== -1) continue;
+    let head = 0;
+    let tail = 0;
+    queue2[tail++] = s;
+    piece[s] = pieces;
+    while (head < tail) {
+      const v = queue2[head++];
+      for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+        if (isCut[g.linkOf[p]]) continue;
+        const w = g.neighbors[p];
+        if (piece[w] !== -1) continue;
+        piece[w] = pieces;
+        queue2[tail++] = w;
+      }
+    }
+    pieces++;
+  }
+  const degree2 = new Int32Array(pieces);
+  for (const e of cut) {
+    degree2[piece[g.linkSource[e]]]++;
+    degree2[piece[g.linkTarget[e]]]++;
+  }
+  return { piece, pieces, degree: degree2 };
+}
+function eswaranTarjanBound(g, bridges2) {
+  const all = bridges2 === void 0;
+  const cut = bridges2 ?? findCutElements(g).bridges;
+  const f = bridgeForest(g, cut);
+  let leaves = 0;
+  let isolated = 0;
+  for (let i = 0; i < f.pieces; i++) {
+    if (f.degree[i] === 1) leaves++;
+    else if (f.degree[i] === 0) isolated++;
+  }
+  if (!all) return { leaves, isolated: 0, links: Math.ceil(leaves / 2) };
+  if (f.pieces <= 1) return { leaves: 0, isolated: 0, links: 0 };
+  return { leaves, isolated, links: Math.ceil(leaves / 2) + isolated };
+}
+var init_bridge_tree = __esm({
+  "src/mend/bridge-tree.ts"() {
+    "use strict";
+    init_structure();
+  }
+});
+
+// src/mend/cover.ts
+function solveCover(p) {
+  const maxExpansions = Math.max(20, Math.min(MAX_EXPANSIONS, Math.floor(MAX_VISITS / Math.max(1, p.g.n + p.g.m))));
+  const byNode = Array.from({ length: p.g.n }, () => []);
+  p.pairs.forEach(([a, b], c) => {
+    byNode[a].push(c);
+    if (b !== a) byNode[b].push(c);
+  });
+  let expansions = 0;
+  let truncated = false;
+  let incompleteBelow = false;
+  const residual = (set) => {
+    expansions++;
+    const g = withExtraLinks(p.g, set.map((c) => p.pairs[c]));
+    const cuts = findCutElements(g);
+    const isBridge = new Set(cuts.bridges);
+    const isCut = new Set(cuts.cutNodes);
+    const bridges2 = p.bridges.filter((e) => isBridge.has(e));
+    const cutNodes2 = p.cutNodes.filter((v) => isCut.has(v));
+    let bound = 0;
+    if (bridges2.length > 0) {
+      const f = bridgeForest(g, bridges2);
+      let leaves = 0;
+      for (let i = 0; i < f.pieces; i++) if (f.degree[i] === 1) leaves++;
+      bound = Math.ceil(leaves / 2);
+    } else if (cutNodes2.length > 0) bound = 1;
+    return { bridges: bridges2, cutNodes: cutNodes2, bound, g };
+  };
+  const children = (set, r) => {
+    const used = new Set(set);
+    const order = (cands, cover) => cands.sort((a, b) => cover(b) - cover(a) || p.score[b] - p.score[a] || p.price[a] - p.price[b] || a - b);
+    if (r.bridges.length > 0) {
+      const f = bridgeForest(r.g, r.bridges);
+      const adj = Array.from({ length: f.pieces }, () => []);
+      for (const e of r.bridges) {
+        const a = f.piece[r.g.linkSource[e]];
+        const b = f.piece[r.g.linkTarget[e]];
+        adj[a].push(b);
+        adj[b].push(a);
+      }
+      const members = /* @__PURE__ */ new Map();
+      for (let v2 = 0; v2 < r.g.n; v2++) {
+        const pc = f.piece[v2];
+        if (f.degree[pc] === 1) (members.get(pc) ?? members.set(pc, []).get(pc)).push(v2);
+      }
+      const treeOf = (leaf) => {
+        const dist2 = new Int32Array(f.pieces).fill(-1);
+        const queue2 = [leaf];
+        dist2[leaf] = 0;
+        for (let h = 0; h < queue2.length; h++) for (const w of adj[queue2[h]]) if (dist2[w] === -1) dist2[w] = dist2[queue2[h]] + 1, queue2.push(w);
+        return dist2;
+      };
+      let bestLeaf = -1;
+      let bestList = [];
+      let bestDist = null;
+      for (const [leaf, nodes] of [...members.entries()].sort((a, b) => a[0] - b[0])) {
+        const dist2 = treeOf(leaf);
+        const list3 = [];
+        const seenHere = /* @__PURE__ */ new Set();
+        for (const v2 of nodes) {
+          for (const c of byNode[v2]) {
+            if (used.has(c) || seenHere.has(c)) continue;
+            seenHere.add(c);
+            const [a, b] = p.pairs[c];
+            const pa = f.piece[a];
+            const pb = f.piece[b];
+            if (pa === leaf === (pb === leaf)) continue;
+            const other = pa === leaf ? pb : pa;
+            if (dist2[other] > 0) list3.push(c);
+          }
+        }
+        list3.sort((x, y) => x - y);
+        if (bestLeaf < 0 || list3.length < bestList.length) {
+          bestLeaf = leaf;
+          bestList = list3;
+          bestDist = dist2;
+        }
+        if (list3.length === 0) break;
+      }
+      const dist = bestDist;
+      const cover = (c) => {
+        const [a, b] = p.pairs[c];
+        return Math.max(dist[f.piece[a]], dist[f.piece[b]]);
+      };
+      order(bestList, cover);
+      return { list: bestList.slice(0, BRANCH_WIDTH), cut: bestList.length > BRANCH_WIDTH };
+    }
+    const v = r.cutNodes[0];
+    const mask = createMask(r.g);
+    mask.node[v] = 1;
+    const comps = findComponents(r.g, mask);
+    const list2 = [];
+    for (let c = 0; c < p.pairs.length; c++) {
+      if (used.has(c)) continue;
+      const [a, b] = p.pairs[c];
+      if (a === v || b === v) continue;
+      if (comps.label[a] !== comps.label[b]) list2.push(c);
+    }
+    order(list2, () => 0);
+    return { list: list2.slice(0, BRANCH_WIDTH), cut: list2.length > BRANCH_WIDTH };
+  };
+  const root = residual([]);
+  const lowerBound = root.bridges.length > 0 ? root.bound : root.cutNodes.length > 0 ? 1 : 0;
+  if (root.bridges.length === 0 && root.cutNodes.length === 0) {
+    return { sets: [[]], lowerBound: 0, minimal: true, truncated: false, expansions };
+  }
+  const found = /* @__PURE__ */ new Map();
+  const priceOf = (set) => set.reduce((s, c) => s + p.price[c], 0);
+  const worstKept = () => {
+    if (found.size < p.keep) return Infinity;
+    return Math.max(...[...found.values()].map((x) => x.price));
+  };
+  let depthComplete = true;
+  let everIncomplete = false;
+  const seen = /* @__PURE__ */ new Set();
+  const dfs = (set, r, limit) => {
+    if (r.bridges.length === 0 && r.cutNodes.length === 0) {
+      const sorted = [...set].sort((a, b) => a - b);
+      const key = sorted.join(",");
+      if (!found.has(key)) {
+        found.set(key, { set: sorted, price: priceOf(sorted) });
+        if (found.size > p.keep) {
+          const worst = [...found.entries()].sort((a, b) => b[1].price - a[1].price || (a[0] < b[0] ? 1 : -1))[0][0];
+          found.delete(worst);
+        }
+      }
+      return;
+    }
+    if (set.length + r.bound > limit || set.length >= limit) return;
+    const { list: list2, cut } = children(set, r);
+    if (cut) depthComplete = false;
+    for (const c of list2) {
+      if (expansions >= maxExpansions) {
+        truncated = true;
+        depthComplete = false;
+        return;
+      }
+      const next = [...set, c];
+      const key = [...next].sort((a, b) => a - b).join(",");
+      if (seen.has(key)) continue;
+      seen.add(key);
+      if (priceOf(next) > worstKept()) continue;
+      dfs(next, residual(next), limit);
+    }
+  };
+  for (let limit = Math.max(1, lowerBound); limit <= p.maxLinks; limit++) {
+    depthComplete = true;
+    seen.clear();
+    dfs([], root, limit);
+    if (!depthComplete) everIncomplete = true;
+    if (found.size > 0) break;
+    if (!depthComplete) incompleteBelow = true;
+    if (truncated) break;
+  }
+  const sets = [...found.values()].sort((a, b) => a.price - b.price || (a.set.join(",") < b.set.join(",") ? -1 : 1)).map((x) => x.set);
+  if (sets.length === 0) {
+    const reason = truncated ? `no set of at most ${p.maxLinks} candidate links was found within the search limit (${maxExpansions} states)` : everIncomplete ? `no set of at most ${p.maxLinks} candidate links was found among the ${BRANCH_WIDTH} best-ranked choices at each step` : `no set of at most ${p.maxLinks} candidate links does it`;
+    return { sets, lowerBound, minimal: false, truncated, expansions, reason };
+  }
+  const size = sets[0].length;
+  return { sets, lowerBound, minimal: size === lowerBound || !incompleteBelow, truncated, expansions };
+}
+var BRANCH_WIDTH, MAX_EXPANSIONS, MAX_VISITS;
+var init_cover = __esm({
+  "src/mend/cover.ts"() {
+    "use strict";
+    init_mask();
+    init_structure();
+    init_apply();
+    init_bridge_tree();
+    BRANCH_WIDTH = 8;
+    MAX_EXPANSIONS = 3e3;
+    MAX_VISITS = 5e7;
+  }
+});
+
+// src/mend/fiedler.ts
+function fiedler(g, extra = []) {
+  const n = g.n;
+  if (n < 2) return { value: 0, vector: new Float64Array(n) };
+  const src = [];
+  const dst = [];
+  for (let e = 0; e < g.m; e++) {
+    src.push(g.linkSource[e]);
+    dst.push(g.linkTarget[e]);
+  }
+  for (const [a, b] of extra) {
+    src.push(a);
+    dst.push(b);
+  }
+  if (n <= DENSE_LIMIT) {
+    const a = new Float64Array(n * n);
+    for (let k = 0; k < src.length; k++) {
+      const i = src[k];
+      const j = dst[k];
+      if (i === j) continue;
+      a[i * n + i] += 1;
+      a[j * n + j] += 1;
+      a[i * n + j] -= 1;
+      a[j * n + i] -= 1;
+    }
+    const d = new Float64Array(n);
+    const e = new Float64Array(n);
+    symmetricEigen(a, n, d, e);
+    const vector = new Float64Array(n);
+    for (let i = 0; i < n; i++) vector[i] = a[i * n + 1];
+    return { value: Math.max(0, d[1]), vector };
+  }
+  const degree2 = new Float64Array(n);
+  for (let k = 0; k < src.length; k++) {
+    if (src[k] === dst[k]) continue;
+    degree2[src[k]]++;
+    degree2[dst[k]]++;
+  }
+  let maxDegree2 = 0;
+  for (let i = 0; i < n; i++) if (degree2[i] > maxDegree2) maxDegree2 = degree2[i];
+  const op = {
+    n,
+    normBound: 2 * maxDegree2,
+    apply(x, y) {
+      for (let i = 0; i < n; i++) y[i] = degree2[i] * x[i];
+      for (let k = 0; k < src.length; k++) {
+        const i = src[k];
+        const j = dst[k];
+        if (i === j) continue;
+        y[i] -= x[j];
+        y[j] -= x[i];
+      }
+    }
+  };
+  const one = new Float64Array(n).fill(1 / Math.sqrt(n));
+  const r = createLanczos(n, 1).solve(op, { which: "smallest", count: 1, deflation: one, deflationCount: 1 });
+  return { value: Math.max(0, r.values[0]), vector: r.vectors.slice(0, n) };
+}
+function ghoshBoydScore(f, a, b) {
+  const d = f.vector[a] - f.vector[b];
+  return d * d;
+}
+var DENSE_LIMIT;
+var init_fiedler = __esm({
+  "src/mend/fiedler.ts"() {
+    "use strict";
+    init_lanczos();
+    init_symmetric_eigen();
+    DENSE_LIMIT = 400;
+  }
+});
+
+// src/mend/search.ts
+function targetKey(f) {
+  if (f.rule === "new-bridge" || f.rule === "new-cut-node") return `${f.rule}|${f.elements.map((e) => e.id).join("\0")}`;
+  return `${f.rule}|${f.requirement ?? ""}`;
+}
+function mendTargets(report) {
+  const rows = new Map(report.requirements.map((r) => [r.id, r]));
+  const out = [];
+  const seen = /* @__PURE__ */ new Set();
+  for (const f of report.findings) {
+    if (f.severity === "notice" || !FIXABLE.has(f.rule)) continue;
+    if (f.rule !== "new-bridge" && f.rule !== "new-cut-node") {
+      const row = f.requirement ? rows.get(f.requirement) : void 0;
+      if (!row || row.status !== "missed" && row.status !== "regressed") continue;
+    }
+    const key = targetKey(f);
+    if (seen.has(key)) continue;
+    seen.add(key);
+    const t = { key, rule: f.rule, severity: f.severity, message: f.message, elements: f.elements, line: f.line };
+    if (f.requirement !== void 0) t.requirement = f.requirement;
+    out.push(t);
+  }
+  return out;
+}
+function meanArea(report) {
+  const head = report.head;
+  if (!head) return null;
+  const areas = head.envelopes.length > 0 ? head.envelopes.map((e) => e.area) : head.attacks.map((a) => a.area);
+  const finite = areas.filter(Number.isFinite);
+  return finite.length ? finite.reduce((s, a) => s + a, 0) / finite.length : null;
+}
+function latencyModel(t) {
+  if (t.links.length === 0 || !t.links.every((l) => l.latency !== void 0)) return null;
+  const pts = t.links.filter((l) => l.length !== void 0 && l.latency !== void 0).map((l) => [l.length, l.latency]);
+  if (pts.length < 2) return null;
+  const n = pts.length;
+  const mx = pts.reduce((s, p) => s + p[0], 0) / n;
+  const my = pts.reduce((s, p) => s + p[1], 0) / n;
+  let sxx = 0;
+  let sxy = 0;
+  for (const [x, y] of pts) {
+    sxx += (x - mx) * (x - mx);
+    sxy += (x - mx) * (y - my);
+  }
+  const slope = sxx > 0 ? Math.max(0, sxy / sxx) : 0;
+  const intercept = Math.max(0, my - slope * mx);
+  return (km) => Math.round((intercept + slope * km) * 1e3) / 1e3;
+}
+async function mendDesign(ctx) {
+  const g = ctx.graph;
+  const cand = ctx.candidates;
+  const targets = mendTargets(ctx.report);
+  const notes = [...ctx.notes ?? [], ...cand.notes];
+  const bridgeTargets = [];
+  const cutTargets = [];
+  for (const t of targets) {
+    for (const e of t.elements) {
+      if (t.rule === "new-bridge" && e.kind === "link") {
+        const i = g.linkIndex.get(e.id);
+        if (i !== void 0 && !bridgeTargets.includes(i)) bridgeTargets.push(i);
+      } else if (t.rule === "new-cut-node" && e.kind === "node") {
+        const v = g.nodeIndex.get(e.id);
+        if (v !== void 0 && !cutTargets.includes(v)) cutTargets.push(v);
+      }
+    }
+  }
+  const out = {
+    targets,
+    rDefinition: R_DEFINITION,
+    bounds: { allBridges: eswaranTarjanBound(g) },
+    candidates: {
+      source: cand.source,
+      ...ctx.candidatePath !== void 0 ? { path: ctx.candidatePath } : {},
+      count: cand.list.length,
+      ...cand.routeFactor !== void 0 ? { routeFactor: cand.routeFactor } : {},
+      ...cand.maxKm !== void 0 ? { maxKm: cand.maxKm } : {}
+    },
+    suggestions: [],
+    evaluations: 0,
+    notes
+  };
+  if (bridgeTargets.length > 0) out.bounds.newBridges = eswaranTarjanBound(g, bridgeTargets);
+  const maxLinks = ctx.maxLinks ?? Math.max(DEFAULT_MAX_LINKS, (out.bounds.newBridges?.links ?? 0) + 1);
+  if (targets.length === 0) {
+    notes.push("nothing to mend: no failing or warning finding that a change to the design can fix");
+    return out;
+  }
+  const rBefore = meanArea(ctx.report);
+  const latency = latencyModel(ctx.topology);
+  const usedIds = new Set(g.linkIds);
+  const linkFor = (c, taken) => {
+    const a = g.nodeIds[c.a];
+    const b = g.nodeIds[c.b];
+    let id2 = c.id ?? `${a}-${b}`;
+    for (let k = 2; usedIds.has(id2) || taken.has(id2); k++) id2 = `${c.id ?? `${a}-${b}`}-${k}`;
+    taken.add(id2);
+    const l = { id: id2, between: [a, b], source: c.source };
+    if (c.lengthKm !== void 0) l.lengthKm = c.lengthKm;
+    if (c.latencyMs !== void 0) l.latencyMs = c.latencyMs;
+    else if (latency && c.lengthKm !== void 0) {
+      l.latencyMs = latency(c.lengthKm);
+      l.latencyEstimated = true;
+    }
+    if (c.cost !== void 0) l.cost = c.cost;
+    if (c.riskGroups) l.riskGroups = [...c.riskGroups];
+    if (c.line !== void 0) l.line = c.line;
+    return l;
+  };
+  const changeFor = (set) => {
+    const taken = /* @__PURE__ */ new Set();
+    return { links: set.map((i) => linkFor(cand.list[i], taken)), harden: [] };
+  };
+  const cache = /* @__PURE__ */ new Map();
+  const judgeSet = async (set, change = changeFor(set)) => {
+    const key = change.links.length ? [...set].sort((a, b) => a - b).join(",") : `harden:${change.harden.map((e) => `${e.kind}:${e.id}`).join(",")}`;
+    const hit = cache.get(key);
+    if (hit) return hit;
+    if (out.evaluations >= ctx.maxEvaluations) return null;
+    out.evaluations++;
+    const judged = { report: await ctx.judge(change), change, candidates: [...set] };
+    cache.set(key, judged);
+    return judged;
+  };
+  const prices = cand.list.map((c) => price(c, cand.unit));
+  const pairs = cand.list.map((c) => [c.a, c.b]);
+  const ranked = g.n <= FIEDLER_LIMIT;
+  if (!ranked) notes.push(`more than ${FIEDLER_LIMIT} sites: candidates are not ranked by algebraic connectivity`);
+  const scoreOf = (extra) => {
+    if (!ranked) return pairs.map(() => 0);
+    const f = fiedler(g, extra.map((c) => pairs[c]));
+    return pairs.map(([a, b]) => ghoshBoydScore(f, a, b));
+  };
+  const scores = scoreOf([]);
+  const hardenTargets = hardenSet(targets);
+  const linkBudget = () => ctx.maxEvaluations - (hardenTargets.length > 0 ? 1 : 0);
+  const judgedSets = [];
+  let start = [[]];
+  let structuralMethod = "";
+  let structuralFailed = false;
+  if ((bridgeTargets.length > 0 || cutTargets.length > 0) && cand.list.length > 0) {
+    const cover = solveCover({
+      g,
+      pairs,
+      price: prices,
+      score: scores,
+      bridges: bridgeTargets,
+      cutNodes: cutTargets,
+      maxLinks,
+      keep: STRUCTURAL_KEEP
+    });
+    if (cover.sets.length === 0) {
+      notes.push(`no link suggestion removes every new bridge and cut site: ${cover.reason}`);
+      structuralFailed = true;
+    } else {
+      const size = cover.sets[0].length;
+      const bound = out.bounds.newBridges?.links;
+      structuralMethod = `removes the new single points of failure with ${size} link${size === 1 ? "" : "s"}` + (cover.minimal ? bound !== void 0 && size === bound ? `, the fewest possible (the Eswaran–Tarjan bound is ${bound})` : ", the fewest the candidates allow" : ` (the smallest found; the search stopped at its limit, the Eswaran–Tarjan bound is ${bound ?? cover.lowerBound})`);
+      start = cover.sets;
+    }
+  } else if (bridgeTargets.length > 0 || cutTargets.length > 0) {
+    notes.push("there are no candidate links to try");
+  }
+  if (cand.list.length > 0 && !structuralFailed) {
+    for (const set of start) {
+      if (set.length === 0) continue;
+      if (out.evaluations >= linkBudget()) break;
+      const j = await judgeSet(set);
+      if (j) judgedSets.push({ judged: j, method: `${structuralMethod}; judged by the engine` });
+    }
+    const better = (a, b) => compareJudged(a, b, targets, rBefore, prices, cand.unit) < 0;
+    let current = null;
+    for (const { judged } of judgedSets) if (!current || better(judged, current)) current = judged;
+    const holds = (j) => j !== null && !fails(j.report);
+    let step = 0;
+    while (!holds(current) && out.evaluations < linkBudget()) {
+      const base = current?.candidates ?? (start[0].length === 0 ? [] : start[0]);
+      if (base.length >= maxLinks) break;
+      const stepScores = base.length ? scoreOf(base) : scores;
+      const inSet = new Set(base);
+      const pool = cand.list.map((_, c) => c).filter((c) => !inSet.has(c)).map((c) => ({ c, s: stepScores[c] })).sort((x, y) => y.s - x.s || prices[x.c] - prices[y.c] || x.c - y.c).slice(0, GREEDY_POOL);
+      if (pool.length === 0) break;
+      let best = null;
+      step++;
+      for (const { c } of pool) {
+        if (out.evaluations >= linkBudget()) break;
+        const j = await judgeSet([...base, c]);
+        if (!j) break;
+        judgedSets.push({
+          judged: j,
+          method: `${base.length ? `${structuralMethod ? "the structural set" : "the set so far"} plus ` : ""}a link ranked by Ghosh–Boyd (greedy step ${step}); judged by the engine`
+        });
+        if (!best || better(j, best)) best = j;
+      }
+      if (!best || current && !better(best, current)) break;
+      current = best;
+    }
+    if (!holds(current) && out.evaluations >= linkBudget()) notes.push(`the search stopped after ${out.evaluations} engine evaluations (its limit)`);
+  } else if (targets.some((t) => t.rule !== "new-bridge" && t.rule !== "new-cut-node")) {
+    notes.push("there are no candidate links to try");
+  }
+  const suggestions = [];
+  const seenLinks = /* @__PURE__ */ new Set();
+  for (const { judged, method } of judgedSets) {
+    const key = [...judged.candidates].sort((a, b) => a - b).join(",");
+    if (seenLinks.has(key)) continue;
+    seenLinks.add(key);
+    const s = suggestion2(judged, "links", method, targets, ctx.report, rBefore, prices, cand.unit);
+    if (s.fixes.length > 0 || s.holds) suggestions.push(s);
+  }
+  suggestions.sort((a, b) => rankSuggestions(a, b));
+  out.suggestions = suggestions.slice(0, SUGGESTIONS_KEPT);
+  if (hardenTargets.length > 0) {
+    const j = await judgeSet([], { links: [], harden: hardenTargets });
+    if (j) {
+      out.suggestions.push(
+        suggestion2(j, "harden", "harden the elements of the new single points of failure (they then never fail in any challenge); judged by the engine", targets, ctx.report, rBefore, prices, cand.unit)
+      );
+    }
+  }
+  return out;
+}
+function hardenSet(targets) {
+  const out = [];
+  const seen = /* @__PURE__ */ new Set();
+  for (const t of targets) {
+    if (t.rule !== "new-bridge" && t.rule !== "new-cut-node") continue;
+    for (const e of t.elements) {
+      const k = `${e.kind}:${e.id}`;
+      if (seen.has(k)) continue;
+      seen.add(k);
+      out.push(e);
+    }
+  }
+  return out;
+}
+function fails(r) {
+  return r.status === "error" || r.findings.some((f) => f.severity === "fail");
+}
+function remaining(r, targets) {
+  const present = new Set(r.findings.filter((f) => f.severity !== "notice").map(targetKey));
+  return targets.filter((t) => present.has(t.key)).map((t) => t.key);
+}
+function failCount(r) {
+  return r.findings.filter((f) => f.severity === "fail").length;
+}
+function totalOf(set, prices, unit) {
+  if (unit === "link") return set.length;
+  return Math.round(set.reduce((s, c) => s + prices[c], 0) * 1e3) / 1e3;
+}
+function gain(r, rBefore, total) {
+  const after = meanArea(r);
+  if (after === null || rBefore === null || total === null || !(total > 0)) return null;
+  return (after - rBefore) / total;
+}
+function compareJudged(a, b, targets, rBefore, prices, unit) {
+  const fa = failCount(a.report);
+  const fb = failCount(b.report);
+  if (fa !== fb) return fa - fb;
+  const ra = remaining(a.report, targets).length;
+  const rb = remaining(b.report, targets).length;
+  if (ra !== rb) return ra - rb;
+  const ga = gain(a.report, rBefore, totalOf(a.candidates, prices, unit)) ?? -Infinity;
+  const gb = gain(b.report, rBefore, totalOf(b.candidates, prices, unit)) ?? -Infinity;
+  if (ga !== gb) return gb - ga;
+  return (totalOf(a.candidates, prices, unit) ?? 0) - (totalOf(b.candidates, prices, unit) ?? 0);
+}
+function rankSuggestions(a, b) {
+  if (a.holds !== b.holds) return a.holds ? -1 : 1;
+  if (a.fixes.length !== b.fixes.length) return b.fixes.length - a.fixes.length;
+  const ga = a.gainPerUnit ?? -Infinity;
+  const gb = b.gainPerUnit ?? -Infinity;
+  if (ga !== gb) return gb - ga;
+  if ((a.total ?? 0) !== (b.total ?? 0)) return (a.total ?? 0) - (b.total ?? 0);
+  const ka = a.links.map((l) => l.id).join(",");
+  const kb = b.links.map((l) => l.id).join(",");
+  return ka < kb ? -1 : ka > kb ? 1 : 0;
+}
+function suggestion2(j, kind, method, targets, before, rBefore, prices, unit) {
+  const left = remaining(j.report, targets);
+  const leftSet = new Set(left);
+  const total = kind === "links" ? totalOf(j.candidates, prices, unit) : j.change.harden.length;
+  const rAfter = meanArea(j.report);
+  const wanted = new Set(targets.map((t) => t.requirement).filter((r) => r !== void 0));
+  const afterRows = new Map(j.report.requirements.map((r) => [r.id, r]));
+  const requirements = before.requirements.filter((r) => wanted.has(r.id)).map((r) => {
+    const a = afterRows.get(r.id);
+    return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? "uncertain" };
+  });
+  return {
+    kind,
+    links: [...j.change.links],
+    harden: [...j.change.harden],
+    total,
+    unit: kind === "harden" ? "element" : unit,
+    fixes: targets.filter((t) => !leftSet.has(t.key)).map((t) => t.key),
+    leaves: left,
+    status: j.report.status,
+    holds: !fails(j.report),
+    rBefore,
+    rAfter,
+    gainPerUnit: rAfter !== null && rBefore !== null && total !== null && total > 0 ? (rAfter - rBefore) / total : null,
+    requirements,
+    method
+  };
+}
+var DEFAULT_MAX_LINKS, GREEDY_POOL, STRUCTURAL_KEEP, SUGGESTIONS_KEPT, FIEDLER_LIMIT, R_DEFINITION, FIXABLE;
+var init_search = __esm({
+  "src/mend/search.ts"() {
+    "use strict";
+    init_bridge_tree();
+    init_candidates();
+    init_cover();
+    init_fiedler();
+    DEFAULT_MAX_LINKS = 3;
+    GREEDY_POOL = 3;
+    STRUCTURAL_KEEP = 3;
+    SUGGESTIONS_KEPT = 5;
+    FIEDLER_LIMIT = 2e4;
+    R_DEFINITION = "R̄: the mean area of the policy’s random-failure envelopes (the mean of each median R over its grid); without envelopes, of its attack curves";
+    FIXABLE = /* @__PURE__ */ new Set(["new-bridge", "new-cut-node", "r-threshold", "area-floor", "spread-ceiling", "n-1", "regression"]);
+  }
+});
+
+// src/map-mend-step.ts
+function parsed(text2, path11, format) {
+  if (text2 === null) return null;
+  try {
+    return parseDesign(text2, path11, format ? { format } : {});
+  } catch (e) {
+    if (isNetbraceError(e)) return null;
+    throw e;
+  }
+}
+function labels(t) {
+  if (!t) return void 0;
+  return new Map(t.nodes.filter((n) => n.label !== void 0).map((n) => [n.id, n.label]));
+}
+async function addMapAndMend(report, input, ctx) {
+  if (!input.head || input.headError) return;
+  const comparing = !input.thresholdsOnly && input.base !== void 0 && !input.baseError;
+  const headTopo = parsed(await ctx.deps.readAt(ctx.head, input.path), input.path, input.policy.format);
+  if (!headTopo) return;
+  if (ctx.request.map !== false) {
+    let baseTopo = null;
+    if (comparing && input.base.graph !== input.head.graph) {
+      const basePath = input.previousPath ?? input.path;
+      baseTopo = parsed(await ctx.deps.readAt(ctx.base, basePath), basePath, input.policy.format);
+    }
+    report.map = buildDesignMap(
+      { graph: input.head.graph, labels: labels(headTopo) },
+      comparing ? { graph: input.base.graph, labels: labels(baseTopo) ?? labels(headTopo) } : void 0
+    );
+  }
+  const when = ctx.request.mend ?? "failing";
+  const failing = report.status === "error" || report.findings.some((f) => f.severity === "fail");
+  if (when === "never" || when === "failing" && !failing) return;
+  const settings = input.policy.mend ?? {};
+  if (settings.evaluations === 0) return;
+  const fp = input.policy;
+  const g = input.head.graph;
+  const notes = [];
+  let candidates2;
+  if (settings.candidates !== void 0) {
+    const text2 = await ctx.deps.readAt(ctx.head, settings.candidates);
+    if (text2 === null) {
+      notes.push(`the candidate list ${settings.candidates} named by the policy does not exist${ctx.head === "worktree" ? "" : ` at ${ctx.head}`}`);
+      candidates2 = { list: [], unit: "link", source: "list", notes: [] };
+    } else {
+      try {
+        candidates2 = parseCandidateFile(text2, settings.candidates, g);
+      } catch (e) {
+        if (!isNetbraceError(e)) throw e;
+        notes.push(`the candidate list could not be read: ${e.format().split("\n")[0]}`);
+        candidates2 = { list: [], unit: "link", source: "list", notes: [] };
+      }
+    }
+  } else {
+    candidates2 = generateCandidates(g, {
+      ...settings.routeFactor !== void 0 ? { routeFactor: settings.routeFactor } : {},
+      ...settings.maxKm !== void 0 ? { maxKm: settings.maxKm } : {}
+    });
+  }
+  const baseSide = comparing ? input.base : void 0;
+  const specs = evaluationSpecs(fp, ctx.seed);
+  const original = budgetSpecs(specs, fp.budget.maxWork, g, baseSide?.graph);
+  const work = original.head.reduce((s, spec) => s + planEvaluation(g, spec).work, 0);
+  const affordable = work > 0 ? Math.floor(MEND_BUDGET_FACTOR * fp.budget.maxWork / work) : MEND_MAX_EVALUATIONS;
+  const maxEvaluations = settings.evaluations ?? Math.max(MEND_MIN_EVALUATIONS, Math.min(MEND_MAX_EVALUATIONS, affordable));
+  const judge3 = async (change) => {
+    const mended = compileTopology(applyToTopology(headTopo, change));
+    const budgeted = budgetSpecs(specs, fp.budget.maxWork, mended, baseSide?.graph);
+    const head = await evaluateGraph(mended, void 0, budgeted.head, budgeted.cuts, ctx.request, ctx.deps);
+    let base = baseSide;
+    if (baseSide && JSON.stringify(budgeted.base) !== JSON.stringify(original.base)) {
+      base = await evaluateGraph(baseSide.graph, baseSide.topology, budgeted.base, budgeted.cuts, ctx.request, ctx.deps);
+    }
+    return compareDesign({ ...input, head, ...base ? { base } : {} });
+  };
+  report.mend = await mendDesign({
+    topology: headTopo,
+    graph: g,
+    report,
+    candidates: candidates2,
+    ...settings.maxLinks !== void 0 ? { maxLinks: settings.maxLinks } : {},
+    maxEvaluations,
+    judge: judge3,
+    ...settings.candidates !== void 0 ? { candidatePath: settings.candidates } : {},
+    notes
+  });
+}
+var MEND_MAX_EVALUATIONS, MEND_BUDGET_FACTOR, MEND_MIN_EVALUATIONS;
+var init_map_mend_step = __esm({
+  "src/map-mend-step.ts"() {
+    "use strict";
+    init_errors();
+    init_evaluate();
+    init_budget2();
+    init_compare();
+    init_compact();
+    init_build();
+    init_apply();
+    init_candidates();
+    init_search();
+    init_run_gate();
+    init_parse();
+    MEND_MAX_EVALUATIONS = 10;
+    MEND_BUDGET_FACTOR = 4;
+    MEND_MIN_EVALUATIONS = 2;
+  }
+});
+
 // src/version.ts
 var VERSION;
 var init_version = __esm({
@@ -28774,30 +36330,38 @@ var init_join = __esm({
 });
 
 // src/run-gate.ts
-function pathHash(path7) {
+function pathHash(path11) {
   let h = 2166136261;
-  const bytes = new TextEncoder().encode(path7);
+  const bytes = new TextEncoder().encode(path11);
   for (const b of bytes) {
     h ^= b;
     h = Math.imul(h, 16777619) >>> 0;
   }
   return h >>> 0;
 }
-function inPart(path7, part) {
-  return pathHash(path7) % part.total === part.index - 1;
+function inPart(path11, part) {
+  return pathHash(path11) % part.total === part.index - 1;
 }
 async function loadPolicyAt(entry, read) {
   const texts = /* @__PURE__ */ new Map();
+  const unreadable = /* @__PURE__ */ new Map();
   for (let attempt = 0; attempt < 64; attempt++) {
     try {
       const policy = loadPolicy(entry, (p) => {
+        const bad = unreadable.get(p);
+        if (bad) throw bad;
         if (!texts.has(p)) throw new NeedFile(p);
         return texts.get(p);
       });
       return { policy, texts };
     } catch (e) {
       if (!(e instanceof NeedFile)) throw e;
-      texts.set(e.path, await read(e.path));
+      try {
+        texts.set(e.path, await read(e.path));
+      } catch (r) {
+        if (!(r instanceof EncodingError)) throw r;
+        unreadable.set(e.path, r);
+      }
     }
   }
   throw new PolicyError("the policy inherits too many files", { file: entry }, "keep the chain of inherits short");
@@ -28823,7 +36387,7 @@ function requireOrgPolicy(request, entry, policy) {
   );
 }
 async function choosePolicy(request, deps, base, head) {
-  const path7 = request.policyPath ?? DEFAULT_POLICY_PATH;
+  const path11 = request.policyPath ?? DEFAULT_POLICY_PATH;
   const explicit = request.policyPath !== void 0;
   const trusted = request.policySource === "base" && base !== void 0 ? base : head;
   const other = trusted === head ? base : head;
@@ -28833,24 +36397,32 @@ async function choosePolicy(request, deps, base, head) {
   };
   const readAtRev = (rev) => async (p) => isOrgFile(request, p) ? readOrg(p) : deps.readAt(rev, p);
   const readTrusted = readAtRev(trusted);
-  const entryText = await readTrusted(path7);
-  const otherText = other !== void 0 ? await deps.readAt(other, path7) : null;
-  if (entryText === null) {
-    if (otherText !== null && other !== void 0) {
+  const exists = async (rev, p) => {
+    try {
+      return await deps.readAt(rev, p) !== null;
+    } catch (e) {
+      if (e instanceof EncodingError) return true;
+      throw e;
+    }
+  };
+  const entryExists = await exists(trusted, path11);
+  const otherExists = other !== void 0 && await exists(other, path11);
+  if (!entryExists) {
+    if (otherExists) {
       const p = builtinPolicy();
       return {
         policy: p,
         info: {
           source: "builtin",
-          path: path7,
+          path: path11,
           revision: trusted,
           changed: true,
-          note: `${path7} is added by this change; it applies once merged, and the built-in policy judges this change`
+          note: `${path11} is added by this change; it applies once merged, and the built-in policy judges this change`
         }
       };
     }
     if (explicit) {
-      throw new UsageError(`the policy file ${path7} does not exist${trusted === "worktree" ? "" : ` at ${trusted}`}`, 'check --policy, or run "netbrace init"');
+      throw new UsageError(`the policy file ${path11} does not exist${trusted === "worktree" ? "" : ` at ${trusted}`}`, 'check --policy, or run "netbrace init"');
     }
     if (request.orgPolicyPath !== void 0) {
       const org = request.orgPolicyPath;
@@ -28859,19 +36431,19 @@ async function choosePolicy(request, deps, base, head) {
     }
     return { policy: builtinPolicy(), info: { source: "builtin", revision: trusted } };
   }
-  const { policy, texts } = await loadPolicyAt(path7, readTrusted);
-  requireOrgPolicy(request, path7, policy);
-  const info = { source: "file", path: path7, revision: trusted, files: policy.files };
+  const { policy, texts } = await loadPolicyAt(path11, readTrusted);
+  requireOrgPolicy(request, path11, policy);
+  const info = { source: "file", path: path11, revision: trusted, files: policy.files };
   if (other !== void 0) {
     let changed = false;
-    for (const [p, text2] of texts) if (!isOrgFile(request, p) && await deps.readAt(other, p) !== text2) changed = true;
+    for (const [p, text2] of texts) if (!isOrgFile(request, p) && await readSide(deps, other, p) !== text2) changed = true;
     if (changed) {
       info.changed = true;
       if (trusted === base) {
         let verdict = "it applies once merged";
         try {
-          const proposed = await loadPolicyAt(path7, readAtRev(other));
-          requireOrgPolicy(request, path7, proposed.policy);
+          const proposed = await loadPolicyAt(path11, readAtRev(other));
+          requireOrgPolicy(request, path11, proposed.policy);
         } catch (e) {
           if (!isNetbraceError(e)) throw e;
           verdict = `the proposed version has an error: ${e.format().split("\n")[0]}`;
@@ -28887,25 +36459,104 @@ async function choosePolicy(request, deps, base, head) {
 async function candidates(request, deps, policy, base, head) {
   if (request.paths && request.paths.length > 0) {
     const list3 = [];
-    for (const path7 of [...new Set(request.paths.map(normalizePath))]) {
+    for (const path11 of [...new Set(request.paths.map(normalizePath))]) {
       if (base === void 0) {
-        list3.push({ path: path7, change: "unchanged" });
+        if (await deps.readAt(head, path11) === null) {
+          throw new UsageError(`${path11} does not exist${head === "worktree" ? "" : ` at ${head}`} (or is not a file)`, "give the path of a design file");
+        }
+        list3.push({ path: path11, change: "unchanged" });
         continue;
       }
-      const [h, b] = [await deps.readAt(head, path7), await deps.readAt(base, path7)];
-      const change = h === null ? "deleted" : b === null ? "added" : h === b ? "unchanged" : "modified";
-      if (h === null && b === null) throw new UsageError(`${path7} exists neither at ${head} nor at ${base}`, "give paths relative to the repository root");
-      list3.push({ path: path7, change });
+      const [h, b] = [await readSide(deps, head, path11), await readSide(deps, base, path11)];
+      const change = h === null ? "deleted" : b === null ? "added" : typeof h === "string" && h === b ? "unchanged" : "modified";
+      if (h === null && b === null) throw new UsageError(`${path11} exists neither at ${head} nor at ${base}`, "give paths relative to the repository root");
+      list3.push({ path: path11, change });
     }
     return { list: list3, scope: "paths" };
   }
   if (base === void 0 || request.eventKind === "schedule") {
     const all = await deps.listAll(head);
-    return { list: all.filter((p) => isDesignPath(policy, p)).map((path7) => ({ path: path7, change: "unchanged" })), scope: "all" };
+    const list3 = all.filter((p) => isDesignPath(policy, p)).map((path11) => ({ path: path11, change: "unchanged" }));
+    return { list: await withDesignHeaders(list3, deps, policy, void 0, head), scope: "all" };
   }
   const changed = await deps.listChanged(base, head);
-  const list2 = changed.filter((f) => isDesignPath(policy, f.path) || f.previousPath !== void 0 && isDesignPath(policy, f.previousPath)).map((f) => ({ path: f.path, change: f.status, ...f.previousPath !== void 0 ? { previousPath: f.previousPath } : {} }));
-  return { list: list2, scope: "changed" };
+  const selected = changed.filter((f) => isDesignPath(policy, f.path) || f.previousPath !== void 0 && isDesignPath(policy, f.previousPath)).map((f) => ({ path: f.path, change: f.status, ...f.previousPath !== void 0 ? { previousPath: f.previousPath } : {} }));
+  const list2 = await withDesignHeaders(selected, deps, policy, base, head);
+  const note2 = await deadGlobNote(changed, deps, policy, base, head);
+  return { list: await pairMovedDesigns(list2, deps, policy, base, head), scope: "changed", ...note2 ? { note: note2 } : {} };
+}
+async function textOrNull(deps, rev, path11) {
+  try {
+    return await deps.readAt(rev, path11);
+  } catch (e) {
+    if (e instanceof EncodingError) return null;
+    throw e;
+  }
+}
+async function hasDesignHeader(c, deps, policy, base, head) {
+  const sides = [];
+  if (c.change !== "deleted") sides.push([head, c.path]);
+  if (base !== void 0 && c.change !== "added") sides.push([base, c.previousPath ?? c.path]);
+  for (const [rev, p] of sides) if (isDesignText(policy, p, await textOrNull(deps, rev, p))) return true;
+  return false;
+}
+async function withDesignHeaders(list2, deps, policy, base, head) {
+  const kept = [];
+  for (const c of list2) {
+    const sniffed = designNeedsHeader(policy, c.path) || c.previousPath !== void 0 && designNeedsHeader(policy, c.previousPath);
+    if (!sniffed || await hasDesignHeader(c, deps, policy, base, head)) kept.push(c);
+  }
+  return kept;
+}
+function networkName(text2, path11, policy) {
+  if (text2 === null) return void 0;
+  try {
+    const format = designFormat(policy, path11);
+    const t = parseDesign(text2, path11, format ? { format } : {});
+    const name = t.name ?? t.metadata.name;
+    return typeof name === "string" ? name : void 0;
+  } catch (e) {
+    if (isNetbraceError(e)) return void 0;
+    throw e;
+  }
+}
+async function pairMovedDesigns(list2, deps, policy, base, head) {
+  const deleted = list2.filter((c) => c.change === "deleted");
+  const added = list2.filter((c) => c.change === "added");
+  if (deleted.length === 0 || added.length === 0) return list2;
+  const named = async (rev, cs) => {
+    const out = [];
+    for (const c of cs) {
+      const name = networkName(await deps.readAt(rev, c.path), c.path, policy);
+      out.push({ path: c.path, ...name !== void 0 ? { name } : {} });
+    }
+    return out;
+  };
+  const pairs = pairDesigns(await named(base, deleted), await named(head, added));
+  if (pairs.length === 0) return list2;
+  const gone = new Set(pairs.map((p) => p.previousPath));
+  const into = new Map(pairs.map((p) => [p.path, p.previousPath]));
+  return list2.filter((c) => !(c.change === "deleted" && gone.has(c.path))).map((c) => c.change === "added" && into.has(c.path) ? { path: c.path, previousPath: into.get(c.path), change: "renamed" } : c);
+}
+async function deadGlobNote(changed, deps, policy, base, head) {
+  const looksLikeDesign = (p) => globsMatch(DEFAULT_DESIGN_GLOBS, p) && !isDesignPath(policy, p) && !globsMatch(policy.exclude, p);
+  const looking = [...new Set(changed.flatMap((f) => [f.path, ...f.previousPath !== void 0 ? [f.previousPath] : []]).filter(looksLikeDesign))].sort();
+  if (looking.length === 0) return void 0;
+  const written = policy.designs.flatMap((d) => d.paths.map((glob, i) => ({ glob, where: d.fileWhere[i] ?? d.where }))).filter((g) => g.where.file !== BUILTIN_POLICY_NAME);
+  if (written.length === 0) return void 0;
+  const files = [.../* @__PURE__ */ new Set([...await deps.listAll(base), ...await deps.listAll(head)])];
+  const dead = written.filter((g) => !files.some((f) => globsMatch([g.glob], f)));
+  if (dead.length === 0) return void 0;
+  const builtin2 = builtinPolicy();
+  const unselected = [];
+  for (const p of looking) {
+    if (!designNeedsHeader(builtin2, p)) unselected.push(p);
+    else if (isDesignText(builtin2, p, await textOrNull(deps, head, p)) || isDesignText(builtin2, p, await textOrNull(deps, base, p))) unselected.push(p);
+  }
+  if (unselected.length === 0) return void 0;
+  const globs2 = dead.map((g) => `designs glob "${g.glob}" (${g.where.file}:${g.where.line}:${g.where.column})`).join(", ");
+  const shown2 = unselected.slice(0, UNSELECTED_SHOWN).join(", ") + (unselected.length > UNSELECTED_SHOWN ? `, and ${unselected.length - UNSELECTED_SHOWN} more` : "");
+  return `${globs2} ${dead.length === 1 ? "matches" : "match"} no file at the base or the head, and this change touches design files that no glob selects, so they were not judged: ${shown2}; check the glob`;
 }
 function normalizePath(p) {
   return p.replace(/\\/g, "/").replace(/^\.\//, "");
@@ -28935,29 +36586,48 @@ function joinEvaluations(parts) {
   evaluation.attacks = [...first.evaluation.attacks];
   evaluation.contingencies = [...first.evaluation.contingencies];
   evaluation.degraded = [...first.evaluation.degraded];
+  const notApplicable = [...first.evaluation.notApplicable ?? []];
   const samples = new Map(first.samples);
-  const labels = new Map(first.labels);
+  const labels2 = new Map(first.labels);
   for (const p of rest) {
     evaluation.envelopes.push(...p.evaluation.envelopes);
     evaluation.attacks.push(...p.evaluation.attacks);
     evaluation.contingencies.push(...p.evaluation.contingencies);
     evaluation.degraded.push(...p.evaluation.degraded);
+    notApplicable.push(...p.evaluation.notApplicable ?? []);
     for (const [k, v] of p.samples) samples.set(k, v);
-    for (const [k, v] of p.labels) labels.set(k, v);
+    for (const [k, v] of p.labels) labels2.set(k, v);
   }
-  return { evaluation, samples, labels };
+  if (notApplicable.length) evaluation.notApplicable = notApplicable;
+  else delete evaluation.notApplicable;
+  return { evaluation, samples, labels: labels2 };
 }
-function compileText(text2, path7, fp) {
+function problemOf(e) {
+  return { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column };
+}
+async function readSide(deps, rev, path11) {
   try {
-    return { graph: compileTopology(parseDesign(text2, path7, fp.format ? { format: fp.format } : {})) };
+    return await deps.readAt(rev, path11);
+  } catch (e) {
+    if (e instanceof EncodingError) return { error: problemOf(e) };
+    throw e;
+  }
+}
+function compileText(text2, path11, format, rValue) {
+  try {
+    const topology = parseDesign(text2, path11, format ? { format } : {});
+    const graph = compileTopology(topology);
+    const problem = unsupportedMetric(graph, rValue);
+    if (problem) return { unsupported: { message: `${problem.message} — ${problem.hint}`, line: 0, column: 0 } };
+    return { graph, topology };
   } catch (e) {
     if (isNetbraceError(e) && (e.kind === "design" || e.kind === "limit" || e.kind === "usage")) {
-      return { error: { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column } };
+      return { error: problemOf(e) };
     }
     throw e;
   }
 }
-async function evaluateGraph(g, specs, cuts, request, deps) {
+async function evaluateGraph(g, topology, specs, cuts, request, deps) {
   const evaluate = deps.evaluate ?? ((graph, spec) => evaluateDesign(graph, spec));
   const parts = [];
   for (const [i, spec] of specs.entries()) {
@@ -28965,7 +36635,7 @@ async function evaluateGraph(g, specs, cuts, request, deps) {
     notePairedCuts(part, cuts, i);
     parts.push(part);
   }
-  return { graph: g, result: joinEvaluations(parts) };
+  return { graph: g, result: joinEvaluations(parts), topology };
 }
 function validateRequest(request) {
   if (request.mode !== "block" && request.mode !== "inform") throw new UsageError(`mode must be block or inform, not ${String(request.mode)}`);
@@ -28988,7 +36658,8 @@ async function runGate(request, deps) {
   const head = request.worktree ? "worktree" : request.head ?? "HEAD";
   const base = request.eventKind === "schedule" ? void 0 : request.base;
   const { policy, info } = await choosePolicy(request, deps, base, head);
-  const { list: all, scope } = await candidates(request, deps, policy, base, head);
+  const { list: all, scope, note: note2 } = await candidates(request, deps, policy, base, head);
+  if (note2) info.note = info.note ? `${info.note}. ${note2}` : note2;
   const chosen = [...all].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0).filter((c) => !request.part || inPart(c.path, request.part));
   const rules = chosen.map((c) => policyForFile(policy, c.path));
   const seed = request.seed ?? policy.seed;
@@ -29000,34 +36671,42 @@ async function runGate(request, deps) {
     if (c.previousPath !== void 0) input.previousPath = c.previousPath;
     if (fp.format) input.format = fp.format;
     if (c.change !== "deleted") {
-      const headText = await deps.readAt(head, c.path);
+      const headText = await readSide(deps, head, c.path);
       if (headText === null) {
         input.change = "deleted";
       } else {
-        const h = compileText(headText, c.path, fp);
+        const h = typeof headText === "string" ? compileText(headText, c.path, fp.format, fp.rValue) : headText;
         if ("error" in h) input.headError = h.error;
+        else if ("unsupported" in h) input.headUnsupported = h.unsupported;
         else {
           let baseGraph;
+          let baseTopology;
           let same = false;
           if (!thresholdsOnly && c.change !== "added") {
             const basePath = c.previousPath ?? c.path;
-            const baseText = await deps.readAt(base, basePath);
+            const baseText = await readSide(deps, base, basePath);
             if (baseText === headText) {
               same = true;
             } else if (baseText !== null) {
-              const b = compileText(baseText, basePath, fp);
+              const b = typeof baseText === "string" ? compileText(baseText, basePath, basePath === c.path ? fp.format : designFormat(policy, basePath), fp.rValue) : baseText;
               if ("error" in b) input.baseError = b.error;
-              else baseGraph = b.graph;
+              else if ("unsupported" in b) input.baseError = b.unsupported;
+              else {
+                baseGraph = b.graph;
+                baseTopology = b.topology;
+              }
             }
           }
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
-          input.head = await evaluateGraph(h.graph, specs.head, specs.cuts, request, deps);
+          input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
           if (same) input.base = input.head;
-          else if (baseGraph) input.base = await evaluateGraph(baseGraph, specs.base, specs.cuts, request, deps);
+          else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology, specs.base, specs.cuts, request, deps);
         }
       }
     }
-    files.push(compareDesign(input));
+    const judged = compareDesign(input);
+    await addMapAndMend(judged, input, { request, deps, head, ...base !== void 0 ? { base } : {}, seed });
+    files.push(judged);
   }
   const report = {
     version: REPORT_VERSION,
@@ -29046,184 +36725,2013 @@ async function runGate(request, deps) {
   };
   return { report, exitCode: exitCodeOf(report) };
 }
-var NeedFile;
+var NeedFile, UNSELECTED_SHOWN;
 var init_run_gate = __esm({
   "src/run-gate.ts"() {
     "use strict";
+    init_decode();
     init_errors();
     init_evaluate();
     init_compact();
     init_budget2();
     init_compare();
     init_verdict();
+    init_pair_designs();
     init_defaults();
     init_resolve();
     init_report();
+    init_map_mend_step();
     init_parse();
+    init_r_value();
     init_version();
     init_join();
     NeedFile = class {
-      constructor(path7) {
-        this.path = path7;
+      constructor(path11) {
+        this.path = path11;
       }
       path;
+    };
+    UNSELECTED_SHOWN = 5;
+  }
+});
+
+// src/parallel/pool.ts
+import { createRequire } from "node:module";
+import { dirname, join as join2 } from "node:path";
+import { pathToFileURL } from "node:url";
+import { Worker as Worker2 } from "node:worker_threads";
+function workerEntry(moduleUrl = import.meta.url) {
+  if (!moduleUrl.endsWith(".ts")) return { url: new URL("./worker.js", moduleUrl) };
+  const tsx = createRequire(moduleUrl).resolve("tsx/package.json");
+  return { url: new URL("./worker.ts", moduleUrl), loader: pathToFileURL(join2(dirname(tsx), "dist", "esm", "api", "index.mjs")).href };
+}
+function startWorker(entry) {
+  let worker;
+  if (!entry.loader) worker = new Worker2(entry.url);
+  else {
+    const url = JSON.stringify(entry.url.href);
+    const boot = `import(${JSON.stringify(entry.loader)}).then(({ tsImport }) => tsImport(${url}, ${url}));`;
+    worker = new Worker2(boot, { eval: true });
+  }
+  const drop = () => {
+    const i = idle.indexOf(worker);
+    if (i >= 0) idle.splice(i, 1);
+  };
+  worker.on("error", drop);
+  worker.on("exit", drop);
+  return worker;
+}
+async function evaluateDesignParallel(g, spec, threads, options = {}) {
+  if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be an integer ≥ 1, got ${threads}`);
+  const plan = planEvaluation(g, spec);
+  const tasks = planTasks(plan, g);
+  const workers = plan.work < (options.minWork ?? PARALLEL_MIN_WORK) ? 1 : Math.min(threads, tasks.length);
+  const results = workers <= 1 ? tasks.map((t) => runTask(g, plan, t)) : await runOnWorkers(g, plan, tasks, workers);
+  return assembleEvaluation(g, plan, tasks, results);
+}
+function runOnWorkers(g, plan, tasks, count) {
+  const run6 = queue.then(() => runExclusive(g, plan, tasks, count));
+  queue = run6.catch(() => void 0);
+  return run6;
+}
+async function runExclusive(g, plan, tasks, count) {
+  const entry = workerEntry();
+  const pool = idle.splice(0, count);
+  while (pool.length < count) pool.push(startWorker(entry));
+  const job = ++jobs;
+  const results = new Array(tasks.length);
+  let next = 0;
+  let failed = false;
+  const listeners = [];
+  try {
+    await Promise.all(
+      pool.map(
+        (worker) => new Promise((resolve, reject) => {
+          worker.ref();
+          const feed = () => {
+            if (next >= tasks.length) {
+              resolve();
+              return;
+            }
+            const id2 = next++;
+            worker.postMessage({ type: "task", job, id: id2, task: tasks[id2] });
+          };
+          const onMessage = (msg) => {
+            if ("error" in msg) {
+              reject(new Error(`worker task ${msg.id} failed: ${msg.error}`));
+              return;
+            }
+            results[msg.id] = msg.result;
+            feed();
+          };
+          const onExit = (code) => reject(new Error(`worker thread stopped with exit code ${code}`));
+          worker.on("message", onMessage);
+          worker.on("error", reject);
+          worker.on("exit", onExit);
+          listeners.push(() => {
+            worker.off("message", onMessage);
+            worker.off("error", reject);
+            worker.off("exit", onExit);
+          });
+          worker.postMessage({ type: "init", job, g, plan });
+          feed();
+        })
+      )
+    );
+  } catch (error) {
+    failed = true;
+    throw error;
+  } finally {
+    listeners.forEach((off) => off());
+    if (failed) await Promise.all(pool.map((w) => w.terminate()));
+    else
+      for (const w of pool) {
+        w.unref();
+        idle.push(w);
+      }
+  }
+  return results;
+}
+var PARALLEL_MIN_WORK, idle, queue, jobs;
+var init_pool = __esm({
+  "src/parallel/pool.ts"() {
+    "use strict";
+    init_engine();
+    init_evaluate();
+    PARALLEL_MIN_WORK = 5e7;
+    idle = [];
+    queue = Promise.resolve();
+    jobs = 0;
+  }
+});
+
+// src/shell/commands/envelope.ts
+import { availableParallelism } from "node:os";
+function parseScore(text2, combine) {
+  if (combine !== void 0 && combine !== "mean" && combine !== "min") {
+    throw new UsageError(`--combine must be "mean" or "min", not "${combine}"`);
+  }
+  const parts = text2.split(",").map((p) => p.trim()).filter(Boolean);
+  if (parts.length === 0) throw new UsageError("--score needs at least one ID=WEIGHT", "e.g. --score efficiency=2,largest_component=1");
+  const list2 = parts.map((p) => {
+    const [id2, w = "1"] = p.split("=");
+    if (!isMetricId(id2)) throw new UsageError(`unknown metric "${id2}" in --score`, `known metrics: ${metrics.map((m) => m.id).join(", ")}`);
+    const weight = Number(w);
+    if (!(weight > 0) || !Number.isFinite(weight)) throw new UsageError(`weight of ${id2} must be a number > 0, not "${w}"`);
+    return { id: id2, weight };
+  });
+  return { metrics: list2, combine: combine ?? "mean" };
+}
+function envelopeJson(file, spec, ev, origin = {}) {
+  const e = ev.evaluation;
+  const common = {
+    file,
+    ...origin.policyChallenge !== void 0 ? { policy_challenge: origin.policyChallenge } : {},
+    r: spec.r,
+    ...origin.rSource !== void 0 ? { r_source: origin.rSource } : {},
+    seed: spec.seed
+  };
+  const worst = (w) => w ? { worst_case: { k: w.k, method: w.method, kind: w.kind, elements: w.elements, values: w.values } } : {};
+  const env = e.envelopes[0];
+  const attack = e.attacks[0];
+  const cont = e.contingencies[0];
+  let body;
+  if (env) {
+    body = {
+      challenge: env.challenge,
+      kind: env.kind,
+      x_unit: env.xUnit,
+      realizations: env.realizations,
+      band: env.band,
+      x: env.x,
+      min: env.min,
+      max: env.max,
+      mean: env.mean,
+      median: env.median,
+      quantiles: env.quantiles,
+      area: env.area,
+      spread: env.spread,
+      weakest: env.weakest,
+      ...worst(env.worstCase)
+    };
+  } else if (attack) {
+    body = {
+      challenge: attack.challenge,
+      kind: attack.kind,
+      x: attack.x,
+      values: attack.values,
+      sequence: attack.sequence,
+      area: attack.area,
+      ...worst(attack.worstCase)
+    };
+  } else {
+    body = { challenge: cont.challenge, kind: cont.kind, evaluated: cont.evaluated, total: cont.total, min: cont.min, worst: cont.worst };
+  }
+  return { ...common, ...body, degraded: e.degraded, caution: CAUTION };
+}
+function shortList(ids, limit = 10) {
+  return ids.slice(0, limit).join(", ") + (ids.length > limit ? `, … (${ids.length - limit} more)` : "");
+}
+function formatEnvelope(file, spec, ev, origin = {}) {
+  const e = ev.evaluation;
+  const rText = spec.r.metrics.length === 1 ? spec.r.metrics[0].id : `${spec.r.combine} of ${spec.r.metrics.map((m) => `${m.id}×${m.weight}`).join(", ")}`;
+  const lines = [];
+  const env = e.envelopes[0];
+  const attack = e.attacks[0];
+  const cont = e.contingencies[0];
+  const worstLines = (w) => {
+    if (!w) return;
+    lines.push(`  worst case (k = ${w.k}, ${w.method}): ${w.elements.join(" → ")}`);
+    lines.push(`    R after each step: ${w.values.map(f4).join(", ")}`);
+  };
+  if (env) {
+    const [lo, hi] = env.band.map(String);
+    const unit = env.xUnit === "km" ? "radius km" : `${env.kind}s removed`;
+    lines.push(`${file} — ${env.challenge}, R = ${rText}, ${env.realizations} ${env.challenge === "regional" ? "epicentres" : "realizations"}, seed ${env.seed}`);
+    lines.push(`  ${unit.padStart(15)}     min   q${lo.padEnd(4)}  median  q${hi.padEnd(4)}     max    mean`);
+    env.x.forEach((x, j) => {
+      const xs = env.xUnit === "km" ? x.toFixed(1) : `${(x * 100).toFixed(1)} %`;
+      const q = env.quantiles;
+      lines.push(`  ${xs.padStart(15)}  ${[env.min[j], q[lo].value[j], env.median[j], q[hi].value[j], env.max[j], env.mean[j]].map(f4).join("  ")}`);
+    });
+    lines.push(`  area ${f4(env.area)} (mean median R; higher is better), spread ${f4(env.spread)} (mean band width; smaller is better)`);
+    for (const w of env.weakest) {
+      lines.push(`  weak realization ${w.realization}${w.label ? ` (epicentre ${w.label})` : ""}: ${shortList(w.elements)}`);
+    }
+    worstLines(env.worstCase);
+  } else if (attack) {
+    lines.push(`${file} — ${attack.challenge} attack, R = ${rText}, ${attack.sequence.length} ${attack.kind}s removed`);
+    const K = attack.values.length - 1;
+    const shown2 = [...new Set(Array.from({ length: 11 }, (_, i) => Math.round(i * K / 10)))];
+    lines.push(`  ${"removed".padStart(10)}        R`);
+    for (const k of shown2) lines.push(`  ${`${k} (${(attack.x[k] * 100).toFixed(1)} %)`.padStart(16)}  ${f4(attack.values[k])}`);
+    lines.push(`  area ${f4(attack.area)}; removal order: ${shortList(attack.sequence)}`);
+    worstLines(attack.worstCase);
+  } else if (cont) {
+    lines.push(`${file} — ${cont.challenge} over ${cont.kind}s, R = ${rText}: ${cont.evaluated} of ${cont.total} cases evaluated`);
+    lines.push(`  lowest R ${f4(cont.min)}`);
+    for (const w of cont.worst) lines.push(`  ${f4(w.value)}  ${w.elements.join(" + ")}`);
+  }
+  for (const d of e.degraded) lines.push(`  degraded: ${d}`);
+  const from = [
+    origin.policyChallenge !== void 0 ? `challenge "${origin.policyChallenge}" of the policy` : "",
+    origin.rSource !== void 0 ? `R from ${origin.rSource}` : ""
+  ].filter(Boolean);
+  if (from.length) lines.push(`  ${from.join("; ")}`);
+  lines.push("", `note: ${CAUTION}`);
+  return `${lines.join("\n")}
+`;
+}
+var width, CHALLENGE_LIST, HELP3, f4, envelopeCommand;
+var init_envelope = __esm({
+  "src/shell/commands/envelope.ts"() {
+    "use strict";
+    init_args();
+    init_errors();
+    init_r_value();
+    init_compact();
+    init_detect();
+    init_registry2();
+    init_registry();
+    init_report();
+    init_budget();
+    init_defaults();
+    init_run_gate();
+    init_local_policy();
+    init_pool();
+    init_read_design();
+    width = Math.max(...challenges.map((c) => c.name.length));
+    CHALLENGE_LIST = challenges.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`).join("\n");
+    HELP3 = `Usage: netbrace envelope FILE --challenge NAME [options] [--json]
+
+Runs one challenge against one design and reports how the robustness value R degrades:
+for a random challenge the envelope (min, max, mean, quantile band with confidence
+intervals, area, spread, the three weakest realizations), for a targeted attack its curve at
+every removal step and its removal sequence, for n-1 / n-2 the worst cases.
+
+The policy is the gate's: --policy FILE, else ${DEFAULT_POLICY_PATH} at the root of the git
+repository that holds the working directory (outside git: in the working directory), else
+the built-in policy. Its r-value, seed and work budget for FILE apply unless --metric /
+--score, --seed or --max-work say otherwise, and NAME may be a challenge the policy defines
+(e.g. node-failures), run with the gate's parameters; the options below change them.
+
+Challenges (besides the policy's):
+${CHALLENGE_LIST}
+
+Options:
+  --challenge NAME     the challenge (required): one the policy defines, or one of the list
+  --policy FILE        the policy file (default ${DEFAULT_POLICY_PATH} at the repository root, if present)
+  --metric ID          R is this one normalized metric (default: the policy's r-value)
+  --score ID=W,...     R is a weighted combination of metrics, e.g. efficiency=2,largest_component=1
+  --combine mean|min   how --score combines: weighted mean (default) or minimum
+  --realizations M     random realizations (default ${DEFAULTS.realizations}); regional uses every epicentre
+  --seed S             seed of the random orders (default: the policy's); same seed, same result
+  --until X            end of the x axis: a fraction of nodes/links/groups (default ${DEFAULTS.until}),
+                       or a radius in km for regional (default ${REGIONAL_UNTIL_KM} km, the gate's)
+  --points K           grid points on the x axis, 0 included (default ${DEFAULTS.points})
+  --band LO,HI         quantiles of the band (default ${DEFAULTS.band.join(",")})
+  --worst-case K       also search the weakest removal sequence of length K (exact for K ≤ 2)
+  --beam B             beam width of that search beyond exact (default 1 = greedy)
+  --element node|link  what n-1 / n-2 remove (default node)
+  --threads N          worker threads (default: the machine's cores, at most 4); the result
+                       does not depend on it
+  --max-work W         work budget in element visits (default: the policy's budget for FILE);
+                       beyond it realizations are reduced and the output says so
+  --format F           read FILE as F (${FORMAT_CHOICES}) instead of by extension
+  --json               print one JSON object
+
+Metrics: ${metrics.map((m) => m.id).join(", ")}
+
+Examples:
+  netbrace envelope designs/core.net.yaml --challenge random-nodes --metric efficiency
+  netbrace envelope designs/core.net.yaml --challenge node-failures   a challenge of the policy
+  netbrace envelope core.graphml --challenge degree-adaptive --until 0.2 --json
+  netbrace envelope core.net.yaml --challenge n-1 --element link
+  netbrace envelope core.net.yaml --challenge regional --until 300 --points 7
+
+The result informs engineering judgement under the stated model; it does not replace
+engineering studies, and local codes, standards and licensed practice decide.
+
+Exit codes: 0 evaluated, 1 the design could not be read or R cannot be computed on it, 2 usage error.
+`;
+    f4 = (x) => Number.isFinite(x) ? x.toFixed(4) : "  –   ";
+    envelopeCommand = {
+      name: "envelope",
+      summary: "robustness envelope, attack curve or N-1/N-2 of one design under one challenge",
+      help: HELP3,
+      async run(args, io) {
+        const parsed2 = parseCommandArgs("envelope", args, {
+          challenge: { type: "string" },
+          policy: { type: "string" },
+          metric: { type: "string" },
+          score: { type: "string" },
+          combine: { type: "string" },
+          realizations: { type: "string" },
+          seed: { type: "string" },
+          until: { type: "string" },
+          points: { type: "string" },
+          band: { type: "string" },
+          "worst-case": { type: "string" },
+          beam: { type: "string" },
+          element: { type: "string" },
+          threads: { type: "string" },
+          "max-work": { type: "string" },
+          format: { type: "string" },
+          json: { type: "boolean" }
+        });
+        const v = parsed2.values;
+        if (parsed2.positionals.length !== 1) throw new UsageError("envelope needs exactly one FILE", "netbrace envelope designs/core.net.yaml --challenge random-nodes");
+        const file = parsed2.positionals[0];
+        if (v.metric !== void 0 && v.score !== void 0) throw new UsageError("give --metric or --score, not both");
+        if (v.combine !== void 0 && v.score === void 0) throw new UsageError("--combine goes with --score");
+        const local = await readLocalPolicy(io, v.policy);
+        const fp = designPolicy(local, io, file);
+        const names = [...fp.challenges.map((c) => c.name), ...challenges.map((c) => c.name).filter((n) => !fp.challenges.some((c) => c.name === n))];
+        if (v.challenge === void 0) throw new UsageError("--challenge is required", `one of: ${names.join(", ")}`);
+        const defined = fp.challenges.find((c) => c.name === v.challenge);
+        if (!defined && !isChallengeName(v.challenge)) throw new UsageError(`unknown challenge "${v.challenge}"`, `one of: ${names.join(", ")}`);
+        const origin = {};
+        let r;
+        if (v.score !== void 0) {
+          r = parseScore(v.score, v.combine);
+          origin.rSource = "--score";
+        } else if (v.metric !== void 0) {
+          if (!isMetricId(v.metric)) throw new UsageError(`unknown metric "${v.metric}"`, `known metrics: ${metrics.map((m) => m.id).join(", ")}`);
+          r = { metrics: [{ id: v.metric, weight: 1 }], combine: "mean" };
+          origin.rSource = "--metric";
+        } else {
+          r = fp.rValue;
+          origin.rSource = local.source;
+        }
+        const seed = wholeNumber("--seed", v.seed, 0) ?? fp.seed;
+        let params;
+        if (defined) {
+          const gate = evaluationSpecs(fp, seed)[0].challenges.find((c) => c.challenge === defined.engine);
+          params = { ...gate ?? defined.params };
+          origin.policyChallenge = defined.name;
+        } else {
+          params = { challenge: v.challenge };
+          if (v.challenge === "regional") params.until = REGIONAL_UNTIL_KM;
+        }
+        const set = (key, value2) => {
+          if (value2 !== void 0) params[key] = value2;
+        };
+        set("realizations", wholeNumber("--realizations", v.realizations, 1));
+        set("until", finiteNumber("--until", v.until, (x) => x >= 0, "a number ≥ 0"));
+        set("points", wholeNumber("--points", v.points, 2));
+        set("worstCase", wholeNumber("--worst-case", v["worst-case"], 0));
+        set("beam", wholeNumber("--beam", v.beam, 1));
+        if (v.band !== void 0) {
+          const b = v.band.split(",").map(Number);
+          if (b.length !== 2 || !(b[0] > 0 && b[0] < b[1] && b[1] < 1)) throw new UsageError(`--band must be LO,HI with 0 < LO < HI < 1, not "${v.band}"`);
+          params.band = [b[0], b[1]];
+        }
+        if (v.element !== void 0) {
+          if (v.element !== "node" && v.element !== "link") throw new UsageError(`--element must be node or link, not "${v.element}"`);
+          params.element = v.element;
+        }
+        if (params.at && params.until !== void 0) params.at = params.at.filter((x) => x <= params.until);
+        const threads = wholeNumber("--threads", v.threads, 1) ?? Math.min(4, availableParallelism());
+        const maxWorkArg = finiteNumber("--max-work", v["max-work"], (x) => x > 0, "a number > 0");
+        const maxWork = maxWorkArg !== void 0 ? budgetWork({ work: maxWorkArg }) : fp.budget.maxWork;
+        const options = { cwd: io.cwd };
+        if (v.format !== void 0) options.format = parseFormatName(v.format);
+        else if (fp.format) options.format = fp.format;
+        const g = compileTopology(readDesign(file, options));
+        const unsupported = unsupportedMetric(g, r);
+        if (unsupported) throw new DesignError(unsupported.message, { file }, unsupported.hint);
+        const spec = { r, seed, challenges: [params], budget: { maxWork } };
+        let ev;
+        try {
+          ev = await evaluateDesignParallel(g, spec, threads);
+        } catch (e2) {
+          if (e2 instanceof RangeError) throw new UsageError(e2.message);
+          throw e2;
+        }
+        const e = ev.evaluation;
+        if (e.envelopes.length + e.attacks.length + e.contingencies.length === 0) {
+          const na = e.notApplicable?.[0];
+          throw new UsageError(na ? `${na.challenge} does not apply to this design: ${na.reason}` : e.degraded[0] ?? `${v.challenge} produced no result`, "choose another challenge for this design");
+        }
+        io.stdout(v.json ? `${JSON.stringify(envelopeJson(file, spec, ev, origin), null, 2)}
+` : formatEnvelope(file, spec, ev, origin));
+        return 0;
+      }
     };
   }
 });
 
-// src/shell/git.ts
-import { execFile } from "node:child_process";
-function runGit(cwd, args, timeout = 0) {
-  return new Promise((resolve, reject) => {
-    execFile(
-      "git",
-      args,
-      {
-        cwd,
-        maxBuffer: MAX_BUFFER,
-        timeout,
-        encoding: "utf8",
-        // Never prompt for credentials (a fetch in CI would hang); stable English messages.
-        env: { ...process.env, GIT_TERMINAL_PROMPT: "0", LC_ALL: "C" }
-      },
-      (error, stdout, stderr) => {
-        if (error && typeof error.code === "string") {
-          const code = error.code;
-          reject(new GitError(code === "ENOENT" ? "git is not installed or not on PATH" : `git failed: ${error.message}`));
-          return;
-        }
-        resolve({ code: error ? error.code ?? 1 : 0, stdout, stderr });
-      }
-    );
-  });
-}
-function gitReason(out) {
-  const lines = out.stderr.trim().split("\n").filter((l) => l.trim() !== "");
-  return lines.find((l) => l.startsWith("fatal:")) ?? lines[0] ?? `git exited with ${out.code}`;
-}
-function damageHint(out) {
-  return /corrupt|unable to unpack|inflate|bad object|missing blob|missing tree/i.test(out.stderr) ? 'the clone is damaged (a git object cannot be read): run "git fsck", or clone the repository again' : "";
-}
-async function git(cwd, args, what) {
-  const out = await runGit(cwd, args);
-  if (out.code !== 0) throw new GitError(`${what}: ${gitReason(out)}`, damageHint(out));
-  return out.stdout;
-}
-function checkRef(ref) {
-  if (ref === "" || ref.startsWith("-") || /[\0-\x1f\x7f\s]/.test(ref)) {
-    throw new UsageError(`"${ref.replace(/[\0-\x1f\x7f]/g, "?")}" is not a git revision`, "give a branch, tag or commit id");
-  }
-  return ref;
-}
-async function repoRoot(cwd) {
-  const out = await runGit(cwd, ["rev-parse", "--show-toplevel"]);
-  return out.code === 0 ? out.stdout.trim() : null;
-}
-async function revParse(cwd, ref) {
-  const out = await runGit(cwd, ["rev-parse", "--verify", "--quiet", "--end-of-options", `${checkRef(ref)}^{commit}`]);
-  return out.code === 0 ? out.stdout.trim() : null;
-}
-async function hasCommit(cwd, sha) {
-  return (await runGit(cwd, ["cat-file", "-e", "--end-of-options", `${checkRef(sha)}^{commit}`])).code === 0;
-}
-async function mergeBase(cwd, a, b) {
-  const out = await runGit(cwd, ["merge-base", "--end-of-options", checkRef(a), checkRef(b)]);
-  return out.code === 0 ? out.stdout.trim() : null;
-}
-async function ensureCommit(cwd, sha, remote = "origin") {
-  if (await hasCommit(cwd, sha)) return;
-  const out = await runGit(cwd, ["fetch", "--no-tags", "--no-recurse-submodules", "--depth=1", checkRef(remote), checkRef(sha)], FETCH_TIMEOUT_MS);
-  if (out.code === 0 && await hasCommit(cwd, sha)) return;
-  throw new GitError(
-    `commit ${sha} is not in this clone and could not be fetched from ${remote} (${out.stderr.trim().split("\n").pop() || `exit ${out.code}`})`,
-    'fetch the history: with actions/checkout set "fetch-depth: 0", or run "git fetch origin <base>" first'
-  );
-}
-function parseNameStatus(out) {
-  const parts = out.split("\0");
-  const files = [];
-  for (let i = 0; i + 1 < parts.length; ) {
-    const code = parts[i];
-    if (code === "") {
-      i++;
-      continue;
-    }
-    const status = STATUS[code[0]] ?? "modified";
-    if (code[0] === "R" || code[0] === "C") {
-      const [from, to] = [parts[i + 1], parts[i + 2]];
-      files.push(code[0] === "R" ? { status, path: to, previousPath: from } : { status, path: to });
-      i += 3;
-    } else {
-      files.push({ status, path: parts[i + 1] });
-      i += 2;
-    }
-  }
-  return files;
-}
-async function listChanged(cwd, base, head) {
-  const range = head === "worktree" ? [checkRef(base)] : [checkRef(base), checkRef(head)];
-  const diff = await git(cwd, ["diff", "--name-status", "-M", "-z", "--no-ext-diff", "--end-of-options", ...range, "--"], "git diff");
-  const files = parseNameStatus(diff);
-  if (head === "worktree") {
-    const untracked = await git(cwd, ["ls-files", "-z", "--others", "--exclude-standard"], "git ls-files");
-    for (const p of untracked.split("\0")) if (p) files.push({ status: "added", path: p });
-  }
-  return files;
-}
-async function showFile(cwd, rev, file) {
-  const spec = `${checkRef(rev)}:${file}`;
-  const out = await runGit(cwd, ["show", "--no-textconv", "--end-of-options", spec]).catch((e) => {
-    if (e instanceof GitError && /maxBuffer/i.test(e.message)) throw tooLarge(file, void 0, MAX_BUFFER, rev.slice(0, 12));
-    throw e;
-  });
-  if (out.code === 0) return out.stdout;
-  const listed = await runGit(cwd, ["ls-tree", "-z", "--end-of-options", checkRef(rev), "--", file]);
-  if (listed.code === 0 && listed.stdout === "") return null;
-  throw new GitError(`git show ${spec}: ${gitReason(out)}`, damageHint(out) || damageHint(listed));
-}
-async function readWorktree(root, file) {
-  return readInside(root, file, MAX_BUFFER);
-}
-async function listFiles(cwd, rev) {
-  const split = (out) => out.split("\0").filter(Boolean);
-  if (rev !== "worktree") {
-    return [...new Set(split(await git(cwd, ["ls-tree", "-r", "-z", "--name-only", "--end-of-options", checkRef(rev)], "git ls-tree")))].sort();
-  }
-  const all = split(await git(cwd, ["ls-files", "-z", "--cached", "--others", "--exclude-standard"], "git ls-files"));
-  const deleted = new Set(split(await git(cwd, ["ls-files", "-z", "--deleted"], "git ls-files")));
-  return [...new Set(all.filter((f) => !deleted.has(f)))].sort();
-}
-function gitDeps(root) {
+// src/report/map-svg.ts
+function mapHighlights(f) {
+  const bridges2 = new Set((f.head?.structure.bridges ?? []).map((e) => e.id));
+  const cutNodes2 = new Set((f.head?.structure.cutNodes ?? []).map((e) => e.id));
+  const newBridges = new Set(f.findings.filter((x) => x.rule === "new-bridge").flatMap((x) => x.elements.map((e) => e.id)));
+  const newCutNodes = new Set(f.findings.filter((x) => x.rule === "new-cut-node").flatMap((x) => x.elements.map((e) => e.id)));
+  const seq = weakestSequences(f)[0];
+  const first = f.mend?.suggestions.find((s) => s.kind === "links" && s.holds) ?? f.mend?.suggestions.find((s) => s.kind === "links");
   return {
-    listChanged: (base, head) => listChanged(root, base, head),
-    readAt: (rev, file) => rev === "worktree" ? readWorktree(root, file) : showFile(root, rev, file),
-    listAll: (rev) => listFiles(root, rev),
-    readOrgPolicy: (file) => readWorktree(root, file)
+    bridges: bridges2,
+    newBridges,
+    cutNodes: cutNodes2,
+    newCutNodes,
+    weakest: seq ? seq.ids.slice(0, MAX_NUMBERED) : [],
+    ...seq ? { weakestTitle: seq.title } : {},
+    proposed: first ? first.links : []
   };
 }
-var MAX_BUFFER, FETCH_TIMEOUT_MS, STATUS;
-var init_git = __esm({
-  "src/shell/git.ts"() {
+function nodeTitle(n, h, step) {
+  const name = n.label ? `${n.label} (${n.id})` : n.id;
+  const parts = [`Site ${name}`, n.side === "base" ? `base line ${n.line}` : `line ${n.line}`];
+  if (n.side === "head") parts.push("added by the change");
+  if (n.side === "base") parts.push("removed by the change");
+  if (h.newCutNodes.has(n.id)) parts.push("new cut site: its loss alone splits the design");
+  else if (h.cutNodes.has(n.id)) parts.push("cut site: its loss alone splits the design");
+  if (n.hardened) parts.push("hardened");
+  if (n.placed) parts.push("no coordinates: placed beside its neighbours");
+  if (step !== void 0) parts.push(`step ${step} of the weakest removal sequence`);
+  return parts.join(" — ");
+}
+function linkTitle(l, h, step, stranding) {
+  const parts = [`Link ${l.id} (${l.source}–${l.target})`, l.side === "base" ? `base line ${l.line}` : `line ${l.line}`];
+  if (l.side === "head") parts.push("added by the change");
+  if (l.side === "base") parts.push("removed by the change");
+  if (h.newBridges.has(l.id)) parts.push("new bridge: its loss alone splits the design");
+  else if (h.bridges.has(l.id) && l.side !== "base") parts.push("bridge: its loss alone splits the design");
+  for (const g of l.groups ?? []) {
+    const s = stranding.get(g);
+    parts.push(s ? `in shared-risk group ${g}, whose loss strands ${s.strands} site${s.strands === 1 ? "" : "s"}${s.isNew ? " (new)" : ""}` : `in shared-risk group ${g}`);
+  }
+  if (l.hardened) parts.push("hardened");
+  if (step !== void 0) parts.push(`step ${step} of the weakest removal sequence`);
+  return parts.join(" — ");
+}
+function renderMapSvg(map, h, options = {}) {
+  const id2 = options.idPrefix ?? "nb-map";
+  const C = MAP_COLORS;
+  const pos = new Map(map.nodes.map((n) => [n.id, n]));
+  const stranding = new Map(map.strandingGroups.map((g) => [g.id, g]));
+  const step = /* @__PURE__ */ new Map();
+  h.weakest.forEach((el, i) => {
+    if (!step.has(el)) step.set(el, i + 1);
+  });
+  const used = /* @__PURE__ */ new Set();
+  const body = [];
+  for (const g of map.strandingGroups) {
+    const members = map.links.filter((l) => l.side !== "base" && (l.groups ?? []).includes(g.id));
+    if (!members.length) continue;
+    used.add(g.isNew ? "group-new" : "group");
+    const segs = members.map((l) => seg(pos.get(l.source), pos.get(l.target))).join(" ");
+    const n = step.get(g.id);
+    body.push(
+      `<g data-el="group" data-id="${esc2(g.id)}"><title>${esc2(`Shared-risk group ${g.id} (line ${g.line}): losing all its ${members.length} link${members.length === 1 ? "" : "s"} at once strands ${g.strands} site${g.strands === 1 ? "" : "s"}${g.isNew ? ", which the base did not" : ""}${n !== void 0 ? ` — step ${n} of the weakest removal sequence` : ""}`)}</title><path d="${segs}" fill="none" stroke="${g.isNew ? C.bandNew : C.band}" stroke-opacity="${g.isNew ? 0.55 : 0.4}" stroke-width="11" stroke-linecap="round"${g.isNew ? ' stroke-dasharray="14 5"' : ""}/></g>`
+    );
+  }
+  const order = [...map.links].sort((a, b) => linkRank(a, h) - linkRank(b, h));
+  for (const l of order) {
+    const a = pos.get(l.source);
+    const b = pos.get(l.target);
+    const n = step.get(l.id);
+    const title2 = `<title>${esc2(linkTitle(l, h, n, stranding))}</title>`;
+    const d = `M${a.x} ${a.y}L${b.x} ${b.y}`;
+    let shape;
+    if (l.side === "base") {
+      used.add("removed");
+      shape = `<path d="${d}" stroke="${C.link}" stroke-width="1.8" stroke-dasharray="6 4" stroke-opacity="0.85"/>`;
+    } else if (h.newBridges.has(l.id)) {
+      used.add("new-bridge");
+      const [mx, my] = mid(a, b);
+      shape = `<path d="${d}" stroke="${C.fail}" stroke-width="4.2" stroke-linecap="round"/><rect x="${r1(mx - 4)}" y="${r1(my - 4)}" width="8" height="8" fill="${C.fail}" stroke="${C.paper}" stroke-width="1.2"/>`;
+    } else if (l.side === "head") {
+      used.add("added");
+      shape = `<path d="${d}" stroke="${C.pass}" stroke-width="5"/><path d="${d}" stroke="${C.paper}" stroke-width="1.6"/>`;
+    } else if (h.bridges.has(l.id)) {
+      used.add("bridge");
+      shape = `<path d="${d}" stroke="${C.warn}" stroke-width="3"/>`;
+    } else {
+      used.add("link");
+      shape = `<path d="${d}" stroke="${C.link}" stroke-width="${l.hardened ? 2.6 : 1.6}"/>`;
+    }
+    body.push(`<g data-el="link" data-id="${esc2(l.id)}" data-side="${l.side}" fill="none">${title2}${shape}</g>`);
+  }
+  h.proposed.forEach((l, i) => {
+    const a = pos.get(l.between[0]);
+    const b = pos.get(l.between[1]);
+    if (!a || !b) return;
+    used.add("proposed");
+    const len = l.lengthKm !== void 0 ? `, ${l.lengthKm} km` : "";
+    body.push(
+      `<g data-el="proposed" data-id="${esc2(l.id)}" fill="none"><title>${esc2(`Proposed link ${l.id} (${l.between[0]}–${l.between[1]}${len}): suggestion 1 of "what would mend it"${i > 0 ? `, link ${i + 1}` : ""}`)}</title><path d="M${a.x} ${a.y}L${b.x} ${b.y}" stroke="${C.notice}" stroke-width="2.6" stroke-dasharray="1 5" stroke-linecap="round"/></g>`
+    );
+  });
+  const labelAll = map.nodes.length <= LABEL_ALL_LIMIT;
+  for (const n of map.nodes) {
+    const k = step.get(n.id);
+    const marked = h.cutNodes.has(n.id) || n.side !== "both" || k !== void 0;
+    const title2 = `<title>${esc2(nodeTitle(n, h, k))}</title>`;
+    let shape;
+    if (h.newCutNodes.has(n.id)) {
+      used.add("new-cut");
+      shape = diamond(n.x, n.y, 7, `fill="${C.fail}" stroke="${C.ink}" stroke-width="1.2"`);
+    } else if (h.cutNodes.has(n.id) && n.side !== "base") {
+      used.add("cut");
+      shape = diamond(n.x, n.y, 6.5, `fill="${C.paper}" stroke="${C.warn}" stroke-width="2.2"`);
+    } else if (n.side === "base") {
+      used.add("site-removed");
+      shape = `<circle cx="${n.x}" cy="${n.y}" r="4.5" fill="${C.paper}" stroke="${C.muted}" stroke-width="1.4" stroke-dasharray="2 2"/>`;
+    } else if (n.side === "head") {
+      used.add("site-added");
+      shape = `<circle cx="${n.x}" cy="${n.y}" r="5.5" fill="${C.paper}" stroke="${C.pass}" stroke-width="2.6"/>`;
+    } else {
+      used.add(n.hardened ? "site-hardened" : "site");
+      shape = `<circle cx="${n.x}" cy="${n.y}" r="4.2" fill="${n.hardened ? C.ink : C.paper}" stroke="${C.ink}" stroke-width="1.3"/>`;
+    }
+    const label = labelAll || marked ? `<text x="${r1(n.x + 7)}" y="${r1(n.y - 6)}" font-size="10.5" fill="${C.ink}" stroke="${C.paper}" stroke-width="3" paint-order="stroke">${esc2(short(n.label ?? n.id))}</text>` : "";
+    body.push(`<g data-el="site" data-id="${esc2(n.id)}" data-side="${n.side}">${title2}${shape}${label}</g>`);
+  }
+  const badges = [];
+  h.weakest.forEach((el, i) => {
+    if (step.get(el) !== i + 1) return;
+    let at;
+    const node = pos.get(el);
+    if (node) at = { x: node.x - 10, y: node.y + 11 };
+    else {
+      const link = map.links.find((l) => l.id === el) ?? map.links.find((l) => l.side !== "base" && (l.groups ?? []).includes(el));
+      if (link) {
+        const [mx, my] = mid(pos.get(link.source), pos.get(link.target));
+        at = { x: mx, y: my - 10 };
+      }
+    }
+    if (!at) return;
+    used.add("step");
+    badges.push(
+      `<g data-el="step" data-step="${i + 1}"><title>${esc2(`Step ${i + 1} of the weakest removal sequence: ${el}${h.weakestTitle ? ` (${h.weakestTitle})` : ""}`)}</title><circle cx="${r1(at.x)}" cy="${r1(at.y)}" r="8" fill="${C.ink}" stroke="${C.paper}" stroke-width="1.5"/><text x="${r1(at.x)}" y="${r1(at.y + 3.6)}" font-size="10" font-weight="700" text-anchor="middle" fill="${C.paper}">${i + 1}</text></g>`
+    );
+  });
+  const items = legend(C).filter((it) => used.has(it.key));
+  const perRow = 2;
+  const rows = Math.ceil(items.length / perRow);
+  const height = map.height + (rows ? rows * LEGEND_ROW + 14 : 0);
+  const colW = map.width / perRow;
+  const legendOut = items.map((it, i) => {
+    const x = 14 + i % perRow * colW;
+    const y = map.height + 12 + Math.floor(i / perRow) * LEGEND_ROW;
+    return `<g data-el="legend" data-key="${it.key}"><title>${esc2(`Legend: ${it.label}`)}</title>${it.draw(x, y + 8)}<text x="${r1(x + 40)}" y="${r1(y + 12)}" font-size="11.5" fill="${C.ink}">${esc2(it.label)}</text></g>`;
+  });
+  const title = options.title ?? `Map of the design: ${map.nodes.length} sites, ${map.links.length} links`;
+  const desc = describeMap(map, h);
+  return [
+    `<svg xmlns="http://www.w3.org/2000/svg" class="nb-map" viewBox="0 0 ${map.width} ${height}" width="${map.width}" height="${height}" role="img" aria-labelledby="${id2}-title ${id2}-desc" font-family="system-ui, -apple-system, 'Segoe UI', Roboto, sans-serif" data-layout="${map.layout}">`,
+    `<title id="${id2}-title">${esc2(title)}</title>`,
+    `<desc id="${id2}-desc">${esc2(desc)}</desc>`,
+    `<g data-el="frame"><title>${esc2(map.layout === "geographic" ? "Map area: sites at their coordinates" : "Map area: positions from a force-directed layout, not geography")}</title><rect x="0" y="0" width="${map.width}" height="${map.height}" fill="${map.layout === "geographic" ? C.sea : C.paper}" stroke="${C.muted}" stroke-width="0.8"/></g>`,
+    ...body,
+    ...badges,
+    ...legendOut,
+    "</svg>"
+  ].join("\n");
+}
+function linkRank(l, h) {
+  if (l.side === "base") return 0;
+  if (h.newBridges.has(l.id)) return 4;
+  if (h.bridges.has(l.id)) return 3;
+  if (l.side === "head") return 2;
+  return 1;
+}
+function legend(C) {
+  const line = (attrs) => (x, y) => `<path d="M${r1(x)} ${r1(y)}h30" fill="none" ${attrs}/>`;
+  return [
+    { key: "site", label: "site", draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.2" fill="${C.paper}" stroke="${C.ink}" stroke-width="1.3"/>` },
+    { key: "site-hardened", label: "hardened site", draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.2" fill="${C.ink}" stroke="${C.ink}" stroke-width="1.3"/>` },
+    { key: "site-added", label: "site added by the change", draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="5.5" fill="${C.paper}" stroke="${C.pass}" stroke-width="2.6"/>` },
+    { key: "site-removed", label: "site removed by the change", draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.5" fill="${C.paper}" stroke="${C.muted}" stroke-width="1.4" stroke-dasharray="2 2"/>` },
+    { key: "cut", label: "cut site (single point of failure)", draw: (x, y) => diamond(x + 15, y, 6.5, `fill="${C.paper}" stroke="${C.warn}" stroke-width="2.2"`) },
+    { key: "new-cut", label: "new cut site", draw: (x, y) => diamond(x + 15, y, 7, `fill="${C.fail}" stroke="${C.ink}" stroke-width="1.2"`) },
+    { key: "link", label: "link", draw: line(`stroke="${C.link}" stroke-width="1.6"`) },
+    { key: "added", label: "link added by the change", draw: (x, y) => line(`stroke="${C.pass}" stroke-width="5"`)(x, y) + line(`stroke="${C.paper}" stroke-width="1.6"`)(x, y) },
+    { key: "removed", label: "link removed by the change", draw: line(`stroke="${C.link}" stroke-width="1.8" stroke-dasharray="6 4"`) },
+    { key: "bridge", label: "bridge (single point of failure)", draw: line(`stroke="${C.warn}" stroke-width="3"`) },
+    {
+      key: "new-bridge",
+      label: "new bridge",
+      draw: (x, y) => line(`stroke="${C.fail}" stroke-width="4.2" stroke-linecap="round"`)(x, y) + `<rect x="${r1(x + 11)}" y="${r1(y - 4)}" width="8" height="8" fill="${C.fail}" stroke="${C.paper}" stroke-width="1.2"/>`
+    },
+    { key: "group", label: "shared-risk group whose loss strands sites", draw: line(`stroke="${C.band}" stroke-opacity="0.4" stroke-width="11" stroke-linecap="round"`) },
+    { key: "group-new", label: "the same, new with this change", draw: line(`stroke="${C.bandNew}" stroke-opacity="0.55" stroke-width="11" stroke-dasharray="14 5"`) },
+    { key: "proposed", label: "link the first suggestion adds", draw: line(`stroke="${C.notice}" stroke-width="2.6" stroke-dasharray="1 5" stroke-linecap="round"`) },
+    {
+      key: "step",
+      label: "weakest removal sequence, in order",
+      draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="8" fill="${C.ink}"/><text x="${r1(x + 15)}" y="${r1(y + 3.6)}" font-size="10" font-weight="700" text-anchor="middle" fill="${C.paper}">1</text>`
+    }
+  ];
+}
+function describeMap(map, h) {
+  const removed = map.links.filter((l) => l.side === "base").length;
+  const added = map.links.filter((l) => l.side === "head").length;
+  const parts = [`${map.nodes.length} sites and ${map.links.length} links (base and head together)`];
+  if (added || removed) parts.push(`${added} link${added === 1 ? "" : "s"} added and ${removed} removed by the change`);
+  if (h.newBridges.size) parts.push(`new bridges: ${[...h.newBridges].join(", ")}`);
+  if (h.newCutNodes.size) parts.push(`new cut sites: ${[...h.newCutNodes].join(", ")}`);
+  const strand = map.strandingGroups.map((g) => g.id);
+  if (strand.length) parts.push(`shared-risk groups whose loss strands sites: ${strand.join(", ")}`);
+  if (h.weakest.length) parts.push(`weakest removal sequence numbered: ${h.weakest.join(", ")}`);
+  if (h.proposed.length) parts.push(`proposed: ${h.proposed.map((l) => `${l.between[0]}–${l.between[1]}`).join(", ")}`);
+  return `${parts.join("; ")}. ${map.method}.`;
+}
+function seg(a, b) {
+  return `M${a.x} ${a.y}L${b.x} ${b.y}`;
+}
+function mid(a, b) {
+  return [(a.x + b.x) / 2, (a.y + b.y) / 2];
+}
+function diamond(x, y, r, attrs) {
+  return `<path d="M${r1(x)} ${r1(y - r)}L${r1(x + r)} ${r1(y)}L${r1(x)} ${r1(y + r)}L${r1(x - r)} ${r1(y)}Z" ${attrs}/>`;
+}
+function r1(v) {
+  const r = Math.round(v * 10) / 10;
+  return Object.is(r, -0) ? 0 : r;
+}
+function short(s) {
+  return s.length > 28 ? `${s.slice(0, 27)}…` : s;
+}
+var esc2, MAP_COLORS, MAX_NUMBERED, LABEL_ALL_LIMIT, LEGEND_ROW;
+var init_map_svg = __esm({
+  "src/report/map-svg.ts"() {
     "use strict";
-    init_errors();
-    init_workspace();
-    MAX_BUFFER = 64 * 1024 * 1024;
-    FETCH_TIMEOUT_MS = 12e4;
-    STATUS = { A: "added", M: "modified", D: "deleted", R: "renamed", T: "modified", C: "added", U: "modified" };
+    init_escape();
+    init_labels();
+    esc2 = (s) => escapeHtml(String(s));
+    MAP_COLORS = {
+      paper: "#fbf9f3",
+      ink: "#1e2a32",
+      link: "#55636c",
+      muted: "#8a949a",
+      fail: "#a4161a",
+      warn: "#8f5200",
+      pass: "#2d6a3e",
+      notice: "#1d5fa3",
+      band: "#e3b34c",
+      bandNew: "#c7741a",
+      sea: "#e4efec"
+    };
+    MAX_NUMBERED = 12;
+    LABEL_ALL_LIMIT = 60;
+    LEGEND_ROW = 22;
+  }
+});
+
+// src/report/map-html.ts
+function mapHtml(f, id2) {
+  const out = [];
+  const map = f.map;
+  if (map && "omitted" in map) {
+    out.push(`<h3>Map</h3><p class="facts">No map: ${esc3(map.omitted)}.</p>`);
+  } else if (map) {
+    const h = mapHighlights(f);
+    out.push("<h3>Map</h3>");
+    out.push(`<figure class="map" data-layout="${map.layout}" data-nodes="${map.nodes.length}" data-links="${map.links.length}">`);
+    out.push(renderMapSvg(map, h, { idPrefix: `${id2}-map`, title: `Map of ${f.path}` }));
+    const caption = [
+      map.layout === "geographic" ? "Sites at their coordinates." : "Positions from a force-directed layout: they show how sites are linked, not where they are.",
+      f.base ? "Base and head together: removed links dashed, added links doubled." : "",
+      h.weakest.length ? `Numbers: the weakest removal sequence${h.weakestTitle ? `, ${h.weakestTitle.charAt(0).toLowerCase()}${h.weakestTitle.slice(1)}` : ""}.` : "",
+      h.proposed.length ? "Dotted: the links of the first suggestion below." : "",
+      "Hover an element for its name, id and line."
+    ].filter(Boolean);
+    out.push(`<figcaption>${esc3(caption.join(" "))}</figcaption>`);
+    out.push("</figure>");
+  }
+  return out.filter(Boolean).join("\n");
+}
+var esc3;
+var init_map_html = __esm({
+  "src/report/map-html.ts"() {
+    "use strict";
+    init_escape();
+    init_map_svg();
+    esc3 = (s) => escapeHtml(String(s));
+  }
+});
+
+// src/report/mend-text.ts
+function value(id2, v) {
+  return v !== null && /spof/.test(id2) && Number.isInteger(v) ? String(v) : formatValue(v);
+}
+function unitWord(s) {
+  if (s.total === null) return "";
+  if (s.unit === "km") return `${s.total} km`;
+  if (s.unit === "cost") return `cost ${s.total}`;
+  if (s.unit === "element") return `${s.total} element${s.total === 1 ? "" : "s"}`;
+  return `${s.total} link${s.total === 1 ? "" : "s"}`;
+}
+function perUnit(s) {
+  if (s.gainPerUnit === null) return "";
+  const u = s.unit === "km" ? "km" : s.unit === "cost" ? "cost unit" : s.unit === "element" ? "element" : "link";
+  const v = s.gainPerUnit;
+  const text2 = Math.abs(v) >= 1e-3 ? v.toFixed(4) : v.toExponential(2);
+  return `${v >= 0 ? "+" : ""}${text2.replace(/^-/, "−")} R̄ per ${u}`;
+}
+function linkWords2(l) {
+  const parts = [`${l.between[0]}–${l.between[1]}`];
+  if (l.lengthKm !== void 0) parts.push(`${l.lengthKm} km`);
+  if (l.latencyMs !== void 0) parts.push(`latency ${l.latencyMs} ms${l.latencyEstimated ? " (estimated from the design’s links)" : ""}`);
+  if (l.cost !== void 0) parts.push(`cost ${l.cost}`);
+  if (l.riskGroups?.length) parts.push(`in ${l.riskGroups.join(", ")}`);
+  parts.push(l.source === "list" ? `from the candidate list${l.line ? `, line ${l.line}` : ""}` : "generated");
+  return parts.join(", ");
+}
+function linksYaml(links) {
+  return links.map((l) => `  - ${(0, import_yaml7.stringify)(linkEntry(l), { collectionStyle: "flow", flowCollectionPadding: false, lineWidth: 0 }).trim()}`).join("\n");
+}
+function targetSummary(targets) {
+  const by = (rule) => targets.filter((t) => t.rule === rule);
+  const out = [];
+  const list2 = (ts) => ts.map((t) => `${t.elements[0]?.id ?? "?"} (line ${t.elements[0]?.line ?? t.line})`).join(", ");
+  if (by("new-bridge").length) out.push(`${by("new-bridge").length} new bridge${by("new-bridge").length === 1 ? "" : "s"}: ${list2(by("new-bridge"))}`);
+  if (by("new-cut-node").length) out.push(`${by("new-cut-node").length} new cut site${by("new-cut-node").length === 1 ? "" : "s"}: ${list2(by("new-cut-node"))}`);
+  for (const t of targets) if (t.rule !== "new-bridge" && t.rule !== "new-cut-node") out.push(`${t.severity === "fail" ? "failing" : "warning"}: ${t.message}`);
+  return out;
+}
+function boundWords(m) {
+  const out = [];
+  const nb = m.bounds.newBridges;
+  if (nb) out.push(`at least ${nb.links} link${nb.links === 1 ? "" : "s"} to remove the new bridges (their bridge tree has ${nb.leaves} leaves; Eswaran & Tarjan 1976)`);
+  const ab = m.bounds.allBridges;
+  if (ab.links > 0) out.push(`at least ${ab.links} link${ab.links === 1 ? "" : "s"} to leave no bridge at all (${ab.leaves} leaves${ab.isolated ? `, ${ab.isolated} isolated parts` : ""})`);
+  return out;
+}
+function candidateWords(m) {
+  const c = m.candidates;
+  if (c.source === "list") return `${c.count} candidate link${c.count === 1 ? "" : "s"} from ${c.path ?? "the planner’s list"}`;
+  if (c.source === "generated" && c.maxKm !== void 0) {
+    return `${c.count} site pairs within ${c.maxKm} km (great circle), length = great-circle distance × ${c.routeFactor} route factor (common practice)`;
+  }
+  if (c.source === "generated") return `${c.count} site pairs (no coordinates: lengths unknown, priced per link)`;
+  return "no candidate links";
+}
+function headline(s, i) {
+  const what = s.kind === "links" ? `add ${s.links.length} link${s.links.length === 1 ? "" : "s"}${s.total !== null && s.unit !== "link" ? `, ${unitWord(s)}` : ""}` : `harden ${s.harden.length} element${s.harden.length === 1 ? "" : "s"}`;
+  const verdict = s.holds ? "holds" : `does not hold (${s.status})`;
+  const r = s.rBefore !== null && s.rAfter !== null ? `R̄ ${formatValue(s.rBefore)} → ${formatValue(s.rAfter)}` : "";
+  return `${i}. ${what} — ${verdict}${r ? `; ${r}` : ""}${perUnit(s) ? ` (${perUnit(s)})` : ""}`;
+}
+function renderMendText(f) {
+  const m = f.mend;
+  const out = [];
+  out.push(`What would mend ${plain(f.path)}`);
+  if (!m) {
+    out.push("  nothing was searched: the design does not fail, or the policy turns the search off (mend.evaluations: 0)");
+    return `${out.join("\n")}
+`;
+  }
+  if (m.targets.length) {
+    out.push(`  Targets (${m.targets.length}):`);
+    for (const t of targetSummary(m.targets)) out.push(`    - ${plain(t)}`);
+  }
+  for (const b of boundWords(m)) out.push(`  Bound: ${b}`);
+  out.push(`  Candidates: ${plain(candidateWords(m))}`);
+  out.push(`  ${m.rDefinition}; ${m.evaluations} engine evaluation${m.evaluations === 1 ? "" : "s"}`);
+  out.push("");
+  if (!m.targets.length) out.push("  Nothing to mend: no failing or warning finding that a change to the design can fix.");
+  else if (!m.suggestions.length) out.push("  No suggestion: nothing tried removes a target.");
+  m.suggestions.forEach((s, i) => {
+    out.push(`  ${plain(headline(s, i + 1))}`);
+    for (const l of s.links) out.push(`       + ${plain(l.id)}: ${plain(linkWords2(l))}`);
+    for (const e of s.harden) out.push(`       * harden ${e.kind === "node" ? "site" : e.kind} ${plain(e.id)} (line ${e.line})`);
+    out.push(`       fixes ${s.fixes.length} of ${m.targets.length} targets${s.leaves.length ? `; still there: ${plain(s.leaves.join("; ").replace(/\|/g, " "))}` : ""}`);
+    for (const r of s.requirements) {
+      out.push(`       ${plain(r.description)}: ${value(r.id, r.before)} → ${value(r.id, r.after)} (${r.status})`);
+    }
+    out.push(`       how: ${plain(s.method)}`);
+    if (s.links.length) {
+      out.push("       in the design file, under links:");
+      for (const line of linksYaml(s.links).split("\n")) out.push(`       ${oneLine(line, 400)}`);
+    }
+    out.push("");
+  });
+  for (const n of m.notes) if (m.targets.length || !n.startsWith("nothing to mend")) out.push(`  Note: ${plain(n)}`);
+  out.push(`  Caution: ${MEND_CAUTION}`);
+  return `${out.join("\n")}
+`;
+}
+function mendHtml(f, id2) {
+  const m = f.mend;
+  if (!m) return "";
+  const parts = [];
+  parts.push(`<h3 id="${id2}-mend">What would mend it</h3>`);
+  const facts2 = [...boundWords(m).map((b) => `Bound: ${b}.`), `Candidates: ${candidateWords(m)}.`, `${m.rDefinition}.`];
+  parts.push(`<p class="facts">${facts2.map(esc4).join(" ")}</p>`);
+  if (m.suggestions.length) {
+    const rows = m.suggestions.map((s, i) => {
+      const change = s.kind === "links" ? s.links.map((l) => `<span class="el">+ ${esc4(l.id)}</span> <span class="line">${esc4(linkWords2(l))}</span>`).join("<br>") : s.harden.map((e) => `<span class="el">harden ${esc4(e.id)}</span> <span class="line">(${esc4(e.kind)}, line ${e.line})</span>`).join("<br>");
+      const req = s.requirements.map((r) => `${esc4(r.description)}: ${esc4(value(r.id, r.before))} → ${esc4(value(r.id, r.after))} (${esc4(r.status)})`).join("<br>");
+      return `<tr data-suggestion="${i + 1}" data-kind="${s.kind}" data-holds="${s.holds}"><th scope="row">${i + 1}</th><td>${change}</td><td class="num">${esc4(unitWord(s) || "–")}</td><td class="num">${esc4(formatValue(s.rBefore))} → ${esc4(formatValue(s.rAfter))}${perUnit(s) ? `<div class="line">${esc4(perUnit(s))}</div>` : ""}</td><td>${s.fixes.length} of ${m.targets.length}${s.leaves.length ? `<div class="line">still: ${esc4(s.leaves.join("; ").replace(/\|/g, " "))}</div>` : ""}<div class="line">${req}</div></td><td class="${s.holds ? "st-met" : "sev-fail"}">${s.holds ? "holds" : esc4(`does not hold (${s.status})`)}</td></tr>`;
+    });
+    parts.push(
+      `<table class="mend" id="${id2}-mend-table"><caption>Each suggestion applied to the head design and judged again by the same engine, policy and seed (common random numbers with the base). Best first.</caption><thead><tr><th scope="col">#</th><th scope="col">Change</th><th scope="col" class="num">Length or cost</th><th scope="col" class="num">R̄ before → after</th><th scope="col">Fixes</th><th scope="col">Check</th></tr></thead><tbody>${rows.join("")}</tbody></table>`
+    );
+    const first = m.suggestions.find((s) => s.kind === "links");
+    if (first) {
+      parts.push(`<details><summary>Suggestion ${m.suggestions.indexOf(first) + 1} in the design file (under <code>links:</code>)</summary><pre><code>${esc4(linksYaml(first.links))}</code></pre></details>`);
+    }
+  } else {
+    parts.push('<p class="facts">No suggestion: nothing tried removes a target.</p>');
+  }
+  for (const n of m.notes) parts.push(`<p class="facts">Note: ${esc4(n)}</p>`);
+  parts.push(`<p class="facts"><strong>Caution.</strong> ${esc4(MEND_CAUTION)}</p>`);
+  return parts.join("\n");
+}
+var import_yaml7, esc4, plain, MEND_CAUTION;
+var init_mend_text = __esm({
+  "src/report/mend-text.ts"() {
+    "use strict";
+    import_yaml7 = __toESM(require_dist(), 1);
+    init_apply();
+    init_escape();
+    init_labels();
+    esc4 = (s) => escapeHtml(String(s));
+    plain = (s) => oneLine(s, 300);
+    MEND_CAUTION = "Suggestions are topology-level: generated lengths are straight-line distances times a route factor, not surveyed routes; whether a link can be built (rights of way, ducts it would share, cost) is not known to netbrace, and a hardened element still fails in reality, only not in these challenges. Check each one with an engineering study before relying on it.";
+  }
+});
+
+// src/report/html.ts
+function renderHtml(report) {
+  const title = `netbrace report — ${report.verdict === "fail" ? "gate failed" : "gate passed"}`;
+  const parts = [];
+  parts.push("<!DOCTYPE html>");
+  parts.push('<html lang="en">');
+  parts.push("<head>");
+  parts.push('<meta charset="utf-8">');
+  parts.push(`<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`);
+  parts.push('<meta name="viewport" content="width=device-width, initial-scale=1">');
+  parts.push(`<meta name="generator" content="netbrace ${esc5(report.tool.version)}">`);
+  parts.push(`<title>${esc5(title)}</title>`);
+  parts.push(`<style>${CSS}</style>`);
+  parts.push("</head>");
+  parts.push(`<body data-report-version="${report.version}" data-verdict="${report.verdict}">`);
+  parts.push(masthead(report));
+  parts.push("<main>");
+  parts.push(
+    `<aside class="caution" role="note" aria-label="Caution"><p><strong>Caution.</strong> ${esc5(report.caution)}</p></aside>`
+  );
+  if (report.files.length > 1) parts.push(contents(report));
+  if (report.files.length === 0) parts.push("<p>No design files changed: nothing to judge.</p>");
+  report.files.forEach((f, i) => parts.push(designSection(f, i)));
+  parts.push("</main>");
+  parts.push(
+    `<footer><p>Written by netbrace ${esc5(report.tool.version)} from report format version ${report.version}. Every number here is in the JSON report of the same run. Seed ${report.seed}; the same inputs and seed give the same numbers.</p></footer>`
+  );
+  parts.push("</body>");
+  parts.push("</html>");
+  return parts.join("\n") + "\n";
+}
+function masthead(r) {
+  const failed = r.files.filter(fileFails).length;
+  const verdict = r.verdict === "fail" ? `Gate failed: ${failed} of ${r.files.length} design${r.files.length === 1 ? "" : "s"} failing` : `Gate passed${r.files.some(fileWarns) ? " with warnings" : ""}`;
+  const meta = [];
+  if (r.base || r.head) meta.push(["Compared", `base <code title="${esc5(r.base ?? "")}">${esc5(shortRevision(r.base))}</code> → head <code title="${esc5(r.head ?? "")}">${esc5(shortRevision(r.head))}</code>`]);
+  meta.push([
+    "Policy",
+    r.policy.source === "builtin" ? "no policy file: the built-in defaults for communication backbones were applied" : `<code>${esc5(r.policy.path ?? "policy file")}</code>${r.policy.revision ? ` as of <code>${esc5(shortRevision(r.policy.revision))}</code>` : ""}` + (r.policy.note ? `. ${esc5(r.policy.note)}` : r.policy.changed ? " (this change edits the policy; the proposed policy was not applied)" : "")
+  ]);
+  if (r.scope === "all") meta.push(["Scope", "every design in the repository, judged against thresholds only"]);
+  meta.push(["Mode", r.mode === "inform" ? "inform: failures are reported, the run does not fail" : "block: failures fail the check"]);
+  meta.push(["Seed", String(r.seed)]);
+  if (r.part) meta.push(["Part", `${r.part.index} of ${r.part.total}`]);
+  const counts = statusCounts(r).map(esc5).join(", ");
+  meta.push(["Designs", `${r.files.length}${counts ? ` (${counts})` : ""}`]);
+  return [
+    '<header class="mast">',
+    "<div>",
+    '<div class="brand" aria-hidden="true">netbrace</div>',
+    "<h1>Robustness report</h1>",
+    "</div>",
+    `<p class="verdict ${r.verdict}" role="status" data-verdict="${r.verdict}">${esc5(verdict)}</p>`,
+    "</header>",
+    `<dl class="meta">${meta.map(([k, v]) => `<dt>${esc5(k)}</dt><dd>${v}</dd>`).join("")}</dl>`
+  ].join("\n");
+}
+function contents(r) {
+  const items = r.files.map((f, i) => {
+    const tone = fileTone(f);
+    return `<li><a href="#design-${i}">${esc5(f.path)}</a> <span class="chip ${tone}">${esc5(toneWord(f))}</span></li>`;
+  });
+  return `<nav aria-label="Designs in this report"><h3>Designs</h3><ol>${items.join("")}</ol></nav>`;
+}
+function designSection(f, index) {
+  const tone = fileTone(f);
+  const id2 = `design-${index}`;
+  const out = [];
+  out.push(
+    `<section class="design ${tone}" id="${id2}" aria-labelledby="${id2}-h" data-path="${esc5(f.path)}" data-status="${esc5(f.status)}" data-tone="${tone}">`
+  );
+  out.push("<header>");
+  out.push(`<h2 id="${id2}-h">${esc5(f.path)}</h2>`);
+  out.push(`<span class="chip ${tone}">${esc5(toneWord(f))}</span>`);
+  out.push(`<span class="chip notice">${esc5(fileStatusWord(f))}</span>`);
+  out.push("</header>");
+  if (f.previousPath) out.push(`<p class="facts">Renamed from <code>${esc5(f.previousPath)}</code>; compared with its old self.</p>`);
+  if (f.error) {
+    out.push(
+      `<p class="error">${fileStatusWord(f) === STATUS_WORD.error ? "Could not be read" : "Could not be evaluated"}: <code>${esc5(f.path)}:${f.error.line || 1}:${f.error.column || 1}</code> ${esc5(f.error.message)}</p>`
+    );
+  }
+  if (f.head) out.push(`<p class="facts">${esc5(facts(f.head))}</p>`);
+  const notApplicable = describeNotApplicable(f.head);
+  if (notApplicable) out.push(`<p class="facts not-applicable"><strong>Not applicable to this design:</strong> ${esc5(notApplicable)}</p>`);
+  const changed = describeChanges(f);
+  const modified = describeModifications(f, 200);
+  if (changed || modified.length) {
+    const items = [...changed ? [changed] : [], ...modified].map((l) => `<li>${esc5(l)}</li>`).join("");
+    out.push(`<div class="facts changes"><strong>What the change does:</strong><ul>${items}</ul></div>`);
+  }
+  if (f.head && f.head.envelopes.length) out.push(charts(f, id2));
+  out.push(mapHtml(f, id2));
+  if (f.requirements.length) out.push(requirementTable2(f.requirements, id2));
+  const findings = groupFindings(bySeverity(f.findings.filter((x) => x.rule !== "weakest-sequence")));
+  const work = findings.filter((x) => x.severity !== "notice");
+  const notices = findings.filter((x) => x.severity === "notice");
+  if (findings.length) out.push("<h3>Findings</h3>");
+  if (work.length) out.push(`<ul class="findings">${work.map(findingItem).join("")}</ul>`);
+  if (notices.length) {
+    out.push(
+      `<details class="notices"><summary>${notices.length} notice${notices.length === 1 ? "" : "s"} (within allowances, or context)</summary><ul class="findings">${notices.map(findingItem).join("")}</ul></details>`
+    );
+  }
+  out.push(weakest(f));
+  out.push(structure(f));
+  out.push(mendHtml(f, id2));
+  out.push("</section>");
+  return out.filter(Boolean).join("\n");
+}
+function facts(ev) {
+  const metrics2 = ev.r.metrics.map((m) => `${m.id} (weight ${m.weight})`).join(", ");
+  const s = ev.structure;
+  const combine = ev.r.combine === "min" ? "the minimum" : "the weighted mean";
+  const text2 = `${s.nodes} sites, ${s.links} links, ${s.components} component${s.components === 1 ? "" : "s"}. R is ${combine} of ${metrics2}.`;
+  return ev.degraded.length ? `${text2} Reduced by budgets: ${ev.degraded.join("; ")}.` : text2;
+}
+function charts(f, id2) {
+  const head = f.head;
+  const figs = head.envelopes.map((env, i) => {
+    const chart = envelopeChart(env, head, f.base);
+    const cid = `${id2}-chart-${i}`;
+    const attacks = attacksFor(env, head).length;
+    return [
+      `<figure class="chart" data-challenge="${esc5(env.challenge)}" data-kind="${esc5(env.kind)}" data-attacks="${attacks}">`,
+      renderChartSvg(chart, { idPrefix: cid }),
+      `<figcaption>${esc5(chart.title)}: ${env.realizations} realizations, ${Math.round(env.band[0] * 100)}–${Math.round(env.band[1] * 100)} % band; area ${formatValue(env.area)}, spread ${formatValue(env.spread)}.${env.degraded ? ` Reduced: ${esc5(env.degraded)}.` : ""}</figcaption>`,
+      chartData(chart, cid),
+      "</figure>"
+    ].join("\n");
+  });
+  return `<h3>Envelopes</h3><div class="charts">${figs.join("\n")}</div>`;
+}
+function chartData(chart, id2) {
+  const xs = [...new Set(chart.series.flatMap((s) => s.points.map((p) => p.x)))].sort((a, b) => a - b);
+  const lookup = (pts, x) => pts.find((p) => Math.abs(p.x - x) < 1e-12)?.y;
+  const cols = chart.series.flatMap(
+    (s) => s.role === "band" ? [
+      { name: `${s.label}, low`, pts: s.points },
+      { name: `${s.label}, high`, pts: s.upper ?? [] }
+    ] : [{ name: s.label, pts: s.points }]
+  );
+  const xName = chart.xUnit === "km" ? "radius (km)" : "removed";
+  const head = `<tr><th scope="col">${xName}</th>${cols.map((c) => `<th scope="col" class="num">${esc5(c.name)}</th>`).join("")}</tr>`;
+  const rows = xs.map((x) => {
+    const label = chart.xUnit === "km" ? String(x) : formatFraction(x);
+    return `<tr><th scope="row">${esc5(label)}</th>${cols.map((c) => `<td class="num">${esc5(formatValue(lookup(c.pts, x)))}</td>`).join("")}</tr>`;
+  });
+  return `<details><summary>Chart data</summary><table id="${id2}-data"><caption>${esc5(chart.title)}: values of R</caption><thead>${head}</thead><tbody>${rows.join("")}</tbody></table></details>`;
+}
+function requirementTable2(rows, id2) {
+  const body = rows.map((r) => {
+    const bad = r.status === "missed" || r.status === "regressed";
+    const cls = `st-${r.status}${bad ? ` sev-${r.severity}` : ""}`;
+    return `<tr data-requirement="${esc5(r.id)}"><th scope="row">${esc5(r.description)}<div class="rule">${esc5(r.id)}</div></th><td>${esc5(r.severity)}</td><td class="num" data-field="base" data-value="${dataValue(r.base)}">${esc5(formatRequirementValue(r, r.base))}</td><td class="num" data-field="head" data-value="${dataValue(r.head)}">${esc5(formatRequirementValue(r, r.head))}</td><td class="num" data-field="delta" data-value="${dataValue(r.delta)}">${esc5(formatRequirementDelta(r))}${formatError(r.se) ? ` <span class="line" data-field="se" data-value="${dataValue(r.se)}">${esc5(formatError(r.se))}</span>` : ""}</td><td class="num" data-field="threshold" data-value="${dataValue(r.threshold)}">${esc5(formatRequirementValue(r, r.threshold))}</td><td class="${cls}" data-field="status">${esc5(REQUIREMENT_STATUS_WORD[r.status])}</td></tr>`;
+  });
+  const noise2 = rows.some((r) => r.status === "within-noise") ? '<p class="facts">Within noise: the value dropped by less than its Monte Carlo error, which is never a failure.</p>' : "";
+  return [
+    "<h3>Requirements</h3>",
+    `<table class="requirements" id="${id2}-requirements">`,
+    "<caption>Each requirement of the policy, base → head; Δ is the paired difference with its standard error.</caption>",
+    '<thead><tr><th scope="col">Requirement</th><th scope="col">Severity</th><th scope="col" class="num">Base</th><th scope="col" class="num">Head</th><th scope="col" class="num">Δ ± error</th><th scope="col" class="num">Threshold</th><th scope="col">Status</th></tr></thead>',
+    `<tbody>${body.join("")}</tbody>`,
+    "</table>",
+    noise2
+  ].join("\n");
+}
+function htmlElement(e) {
+  const el = (x) => `<span class="el">${esc5(x)}</span>`;
+  return formatElement(e, { id: el, text: el, meta: (x) => `<span class="line">${x}</span>` });
+}
+function elementList(elements) {
+  const shown2 = elements.slice(0, MAX_ELEMENTS3).map(htmlElement);
+  const more = elements.length > MAX_ELEMENTS3 ? `, … ${elements.length - MAX_ELEMENTS3} more` : "";
+  return shown2.join(", ") + more;
+}
+function costItem(c, subject) {
+  return c ? `<p class="cost">${esc5(consequenceSentence(c, subject))}</p>` : "";
+}
+function findingItem(x) {
+  const where = x.line > 0 ? ` <span class="line">line ${x.line}${x.column ? `:${x.column}` : ""}</span>` : "";
+  const values = x.head !== void 0 && x.head !== null && !x.message.includes(formatValue(x.head)) ? ` <span class="line">(base ${esc5(formatValue(x.base))}, head ${esc5(formatValue(x.head))}${x.delta !== void 0 && x.delta !== null ? `, Δ ${esc5(`${formatDelta(x.delta)} ${formatError(x.se)}`.trim())}` : ""})</span>` : "";
+  const named = x.elements.length === 1 && x.message.includes(x.elements[0].id);
+  const els = x.elements.length && !named && !x.grouped ? `<div>${elementList(x.elements)}</div>` : "";
+  const members = x.grouped && x.members && x.members.length > 1 ? x.members.filter((m) => m.consequence) : [];
+  const cost = members.length ? `<ul class="costs">${members.map((m) => `<li>${htmlElement(m.elements[0])}: ${esc5(consequenceSentence(m.consequence, ""))}</li>`).join("")}</ul>` : costItem(x.consequence, "Losing it");
+  return `<li class="${x.severity}" data-rule="${esc5(x.rule)}"${x.status ? ` data-status="${esc5(x.status)}"` : ""}><span class="chip ${x.severity}">${esc5(x.severity)}</span> <span class="rule">${esc5(findingTitle(x, RULE_TITLE))}</span>${where}<div>${esc5(x.message)}${values}</div>${els}${cost}</li>`;
+}
+function weakest(f) {
+  const known = knownElements(f);
+  const items = weakestSequences(f).map((s) => {
+    const steps = s.elements.map((e, i) => `<li>${htmlElement(e)}${s.values && s.values[i] !== void 0 ? ` — R ${esc5(formatValue(s.values[i]))}` : ""}</li>`).join("");
+    return `<div class="sequence"><p>${esc5(s.title)}</p><ol class="seq">${steps}</ol>${costItem(s.consequence, "These removals")}</div>`;
+  });
+  for (const c of f.head?.contingencies ?? []) {
+    const worst = c.worst[0];
+    if (worst) {
+      const what = worst.elements.map((id2, i) => htmlElement(worst.located?.[i] ?? knownElement(known, c.kind, id2))).join(" + ");
+      items.push(
+        `<div class="sequence"><p>${esc5(contingencyLabel(c.challenge, c.kind))}: the ${esc5(c.challenge === "n-1" ? "single" : "double")} ${esc5(kindSingular(c.kind))} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): <span class="el">${esc5(what)}</span> leaves R ${esc5(formatValue(worst.value))}</p></div>`
+      );
+    }
+  }
+  return items.length ? `<h3>Weakest removal sequences</h3>${items.join("")}` : "";
+}
+function structure(f) {
+  const head = f.head?.structure;
+  if (!head) return "";
+  const baseIds = new Set([...f.base?.structure.bridges ?? [], ...f.base?.structure.cutNodes ?? []].map((e) => e.id));
+  const row = (label, list2) => {
+    if (!list2.length) return `<tr><th scope="row">${esc5(label)}</th><td>none</td></tr>`;
+    const items = list2.map((e) => {
+      const isNew = f.base !== void 0 && !baseIds.has(e.id);
+      return `${htmlElement(e)}${isNew ? ' <strong class="sev-fail">new</strong>' : ""}`;
+    });
+    return `<tr><th scope="row">${esc5(label)}</th><td>${items.join(", ")}</td></tr>`;
+  };
+  return [
+    "<h3>Structure</h3>",
+    '<table class="structure">',
+    "<caption>Single points of failure in the head design: a bridge is a link, a cut node a site, whose loss alone splits the network.</caption>",
+    "<tbody>",
+    row("Bridges", head.bridges),
+    row("Cut nodes", head.cutNodes),
+    `<tr><th scope="row">Components</th><td>${head.components}</td></tr>`,
+    "</tbody></table>"
+  ].join("\n");
+}
+var esc5, RULE_TITLE, dataValue, CSS, fileTone, toneWord, MAX_ELEMENTS3;
+var init_html = __esm({
+  "src/report/html.ts"() {
+    "use strict";
+    init_chart();
+    init_labels();
+    init_escape();
+    init_map_html();
+    init_mend_text();
+    esc5 = (s) => escapeHtml(String(s));
+    RULE_TITLE = {
+      "r-threshold": "r-threshold missed",
+      "area-floor": "area below its floor",
+      "spread-ceiling": "spread above its ceiling",
+      "n-1": "N−1 rule broken",
+      "new-bridge": "new bridge",
+      "new-cut-node": "new cut node",
+      "new-stranding-group": "new stranding shared-risk group",
+      "hardened-weak-point": "weak point hidden by hardening",
+      regression: "regression",
+      "weakest-sequence": "weakest sequence",
+      "parse-error": "unreadable design",
+      "removed-design": "removed design",
+      "policy-changed": "policy changed",
+      degraded: "reduced evaluation",
+      "not-computable": "value not computable"
+    };
+    dataValue = (v) => v === null || v === void 0 ? "" : String(v);
+    CSS = `
+:root{--paper:#f6f3ec;--card:#fffdf8;--ink:#1e2a32;--muted:#5d6870;--rule:#d9d4c7;--teal:#0d4f5c;
+--sea:#a9d3cb;--fail:#a4161a;--warn:#8f5200;--pass:#2d6a3e;--notice:#1d5fa3}
+*{box-sizing:border-box}
+html{background:var(--paper);color:var(--ink)}
+body{margin:0 auto;max-width:1120px;padding:24px 28px 48px;font:15px/1.5 system-ui,-apple-system,"Segoe UI",Roboto,"Noto Sans",sans-serif}
+h1,h2,h3{line-height:1.25;margin:0}
+h1{font-size:1.55rem;letter-spacing:.01em}
+h2{font-size:1.2rem;word-break:break-all}
+h3{font-size:.95rem;text-transform:uppercase;letter-spacing:.08em;color:var(--muted);margin:22px 0 8px}
+.mast{display:flex;flex-wrap:wrap;gap:18px;align-items:flex-end;justify-content:space-between;border-bottom:3px double var(--ink);padding-bottom:14px}
+.brand{font-weight:800;font-size:.8rem;letter-spacing:.32em;text-transform:uppercase;color:var(--teal)}
+.verdict{font-size:1.05rem;font-weight:700;padding:8px 16px;border:2px solid currentColor;border-radius:2px}
+.verdict.fail{color:var(--fail)}.verdict.pass{color:var(--pass)}
+dl.meta{display:grid;grid-template-columns:max-content 1fr;gap:2px 14px;margin:14px 0;font-size:.9rem}
+dl.meta dt{color:var(--muted)}dl.meta dd{margin:0}
+.caution{border-left:6px solid var(--teal);background:var(--card);padding:10px 16px;margin:18px 0;font-size:.92rem}
+.caution strong{color:var(--teal)}
+nav ol{margin:6px 0 0;padding-left:22px;columns:2;column-gap:32px}
+nav a{color:var(--ink)}
+.design{background:var(--card);border:1px solid var(--rule);border-left:8px solid var(--pass);margin:28px 0;padding:18px 22px 20px}
+.design.fail{border-left-color:var(--fail)}.design.warn{border-left-color:var(--warn)}
+.design header{display:flex;flex-wrap:wrap;gap:10px 16px;align-items:baseline}
+.chip{display:inline-block;font-size:.78rem;font-weight:700;letter-spacing:.06em;text-transform:uppercase;padding:1px 8px;border:1.5px solid currentColor}
+.chip.fail{color:var(--fail)}.chip.warn{color:var(--warn)}.chip.pass{color:var(--pass)}
+.chip.notice{color:var(--notice)}
+.facts{color:var(--muted);font-size:.9rem;margin:6px 0 0}
+.charts{display:grid;grid-template-columns:repeat(auto-fill,minmax(440px,1fr));gap:18px;margin-top:10px}
+figure{margin:0}
+figure svg{width:100%;height:auto;display:block}
+figcaption{font-size:.85rem;color:var(--muted);margin-top:4px}
+table{border-collapse:collapse;width:100%;font-size:.9rem;font-variant-numeric:tabular-nums}
+caption{text-align:left;font-size:.85rem;color:var(--muted);padding-bottom:4px}
+th,td{padding:5px 8px;border-bottom:1px solid var(--rule);text-align:left;vertical-align:top}
+th{font-weight:600;background:#efeadf}
+td.num,th.num{text-align:right;white-space:nowrap}
+.st-missed,.st-regressed{font-weight:700}
+.sev-fail{color:var(--fail)}.sev-warn{color:var(--warn)}.sev-notice{color:var(--notice)}
+.st-met{color:var(--pass)}.st-within-noise,.st-uncertain{color:var(--muted)}
+ul.findings{list-style:none;padding:0;margin:0}
+ul.findings li{padding:6px 0 6px 12px;border-left:3px solid var(--rule);margin:6px 0}
+ul.findings li.fail{border-left-color:var(--fail)}ul.findings li.warn{border-left-color:var(--warn)}
+ul.findings li.notice{border-left-color:var(--notice)}
+.rule{font-family:ui-monospace,"SFMono-Regular",Menlo,Consolas,monospace;font-size:.85em;color:var(--muted)}
+code,.el{font-family:ui-monospace,"SFMono-Regular",Menlo,Consolas,monospace;font-size:.88em}
+ol.seq{margin:4px 0 10px;padding-left:26px}
+.line{color:var(--muted);font-size:.85em}
+details{margin-top:8px;font-size:.88rem}
+summary{cursor:pointer;color:var(--teal)}
+.error{color:var(--fail);font-weight:600}
+footer{margin-top:32px;color:var(--muted);font-size:.82rem;border-top:1px solid var(--rule);padding-top:10px}
+.vh{position:absolute;width:1px;height:1px;overflow:hidden;clip:rect(0 0 0 0);white-space:nowrap}
+@media (max-width:640px){body{padding:14px}.charts{grid-template-columns:1fr}nav ol{columns:1}}
+@media print{
+html,body{background:#fff}
+body{max-width:none;padding:0;font-size:10.5pt}
+.design{border:1px solid #999;border-left-width:6px;break-inside:avoid-page;page-break-inside:avoid}
+.charts{grid-template-columns:1fr 1fr}
+nav,details{display:none}
+a{color:inherit;text-decoration:none}
+.caution{border:1px solid #999;border-left:6px solid #000}
+}
+`;
+    fileTone = (f) => fileFails(f) ? "fail" : fileWarns(f) ? "warn" : "pass";
+    toneWord = (f) => fileFails(f) ? "fail" : fileWarns(f) ? "pass, warnings" : "pass";
+    MAX_ELEMENTS3 = 8;
+  }
+});
+
+// src/report/finding-text.ts
+function findingNumbers(x, deltaWord = "Δ") {
+  if (x.status !== void 0) return "";
+  const stated = x.delta !== void 0 && x.delta !== null ? formatDelta(x.delta) : x.head !== void 0 && x.head !== null ? formatValue(x.head) : void 0;
+  if (stated !== void 0 && x.message.includes(stated)) return "";
+  const parts = [];
+  if (x.base !== void 0 && x.base !== null) parts.push(`base ${formatValue(x.base)}`);
+  if (x.head !== void 0 && x.head !== null) parts.push(`head ${formatValue(x.head)}`);
+  if (x.delta !== void 0 && x.delta !== null) {
+    const err = formatError(x.se);
+    parts.push(`${deltaWord} ${formatDelta(x.delta)}${err ? ` ${err}` : ""}`);
+  }
+  return parts.length ? ` (${parts.join(", ")})` : "";
+}
+function findingCost(x, style = {}) {
+  return x.consequence ? ` ${consequenceSentence(x.consequence, "Losing it", style)}` : "";
+}
+function repoPath(prefix, p) {
+  const clean = (prefix ?? "").replace(/\\/g, "/").replace(/^\.(\/|$)/, "").replace(/\/+$/, "");
+  return clean ? `${clean}/${p}` : p;
+}
+var init_finding_text = __esm({
+  "src/report/finding-text.ts"() {
+    "use strict";
+    init_labels();
+  }
+});
+
+// src/report/fingerprint.ts
+function stableHash(text2) {
+  let h = OFFSET;
+  for (const byte of new TextEncoder().encode(text2)) {
+    h ^= BigInt(byte);
+    h = h * PRIME & MASK;
+  }
+  return h.toString(16).padStart(16, "0");
+}
+var OFFSET, PRIME, MASK;
+var init_fingerprint = __esm({
+  "src/report/fingerprint.ts"() {
+    "use strict";
+    OFFSET = 0xcbf29ce484222325n;
+    PRIME = 0x100000001b3n;
+    MASK = 0xffffffffffffffffn;
+  }
+});
+
+// src/report/mermaid-map.ts
+function mermaidLabel(id2) {
+  const safe = [...id2].map((c) => /[\p{L}\p{N} ._-]/u.test(c) ? c : "_").join("").replace(/\s+/g, " ").trim();
+  const cut = safe.length > 40 ? `${safe.slice(0, 39)}_` : safe;
+  return cut || "_";
+}
+function neighbourhoodMermaid(f) {
+  const map = f.map;
+  if (!map || "omitted" in map) return "";
+  const newBridges = new Set(f.findings.filter((x) => x.rule === "new-bridge").flatMap((x) => x.elements.map((e) => e.id)));
+  const newCuts = new Set(f.findings.filter((x) => x.rule === "new-cut-node").flatMap((x) => x.elements.map((e) => e.id)));
+  const focusLinks = map.links.filter((l) => l.side !== "both" || newBridges.has(l.id));
+  const focus = /* @__PURE__ */ new Set();
+  for (const n of map.nodes) if (n.side !== "both" || newCuts.has(n.id)) focus.add(n.id);
+  for (const l of focusLinks) {
+    focus.add(l.source);
+    focus.add(l.target);
+  }
+  if (focus.size === 0) return "";
+  const linksAmong = (set) => map.links.filter((l) => set.has(l.source) && set.has(l.target));
+  if (focus.size + linksAmong(focus).length > MAX_ELEMENTS4) {
+    return `The change touches ${focus.size} sites and ${focusLinks.length} links: too many to draw legibly here. The HTML report has the map of the whole design.
+
+`;
+  }
+  const chosen = new Set(focus);
+  const adj = /* @__PURE__ */ new Map();
+  for (const l of map.links) {
+    adj.set(l.source, [...adj.get(l.source) ?? [], l.target]);
+    adj.set(l.target, [...adj.get(l.target) ?? [], l.source]);
+  }
+  let frontier = [...focus];
+  for (let ring = 0; ring < 2 && frontier.length; ring++) {
+    const next = [];
+    for (const v of frontier) {
+      for (const w of adj.get(v) ?? []) {
+        if (chosen.has(w)) continue;
+        const trial = new Set(chosen).add(w);
+        if (trial.size + linksAmong(trial).length > MAX_ELEMENTS4) continue;
+        chosen.add(w);
+        next.push(w);
+      }
+    }
+    frontier = next;
+  }
+  const nodes = map.nodes.filter((n) => chosen.has(n.id));
+  const name = new Map(nodes.map((n, i) => [n.id, `n${i}`]));
+  const lines = ["```mermaid", "graph LR"];
+  for (const n of nodes) {
+    const label = mermaidLabel(n.label ?? n.id);
+    const shape = newCuts.has(n.id) ? `{{"${label}"}}` : n.side === "head" ? `(["${label}"])` : n.side === "base" ? `[/"${label}"/]` : `("${label}")`;
+    lines.push(`  ${name.get(n.id)}${shape}`);
+  }
+  const drawn = linksAmong(chosen);
+  const styles = [];
+  drawn.forEach((l, i) => {
+    const a = name.get(l.source);
+    const b = name.get(l.target);
+    if (l.side === "base") {
+      lines.push(`  ${a} -.-|removed| ${b}`);
+      styles.push(`  linkStyle ${i} stroke:${COLORS.removed},stroke-dasharray:5 4`);
+    } else if (newBridges.has(l.id)) {
+      lines.push(`  ${a} ===|new bridge| ${b}`);
+      styles.push(`  linkStyle ${i} stroke:${COLORS.fail},stroke-width:4px`);
+    } else if (l.side === "head") {
+      lines.push(`  ${a} ---|added| ${b}`);
+      styles.push(`  linkStyle ${i} stroke:${COLORS.added},stroke-width:3px`);
+    } else {
+      lines.push(`  ${a} --- ${b}`);
+    }
+  });
+  lines.push(...styles);
+  const weak = nodes.filter((n) => newCuts.has(n.id)).map((n) => name.get(n.id));
+  if (weak.length) {
+    lines.push(`  classDef weak fill:#f8dcdc,stroke:${COLORS.fail},stroke-width:2px`);
+    lines.push(`  class ${weak.join(",")} weak`);
+  }
+  lines.push("```");
+  const more = map.nodes.length - nodes.length;
+  const legend2 = "Hexagons are new cut sites; thick links new bridges; dashed links removed, labelled ones added." + (more > 0 ? ` ${more} more sites are not drawn; the HTML report has the whole map.` : "");
+  return `**Where the change is**: the neighbourhood of the change.
+
+${lines.join("\n")}
+
+${legend2}
+
+`;
+}
+function suggestionWords(s) {
+  const what = s.kind === "links" ? `add ${s.links.map((l) => `${markdownCode(l.id, 80)} (${markdownCode(`${l.between[0]}–${l.between[1]}`, 120)}${l.lengthKm !== void 0 ? `, ${l.lengthKm} km` : ""}${l.cost !== void 0 ? `, cost ${l.cost}` : ""})`).join(" and ")}` : `harden ${s.harden.length} element${s.harden.length === 1 ? "" : "s"} (${s.harden.slice(0, 6).map((e) => markdownCode(e.id, 80)).join(", ")}${s.harden.length > 6 ? ", …" : ""})`;
+  const r = s.rBefore !== null && s.rAfter !== null ? `, R̄ ${formatValue(s.rBefore)} → ${formatValue(s.rAfter)}` : "";
+  return `${what}: ${s.holds ? "holds" : "does not hold on its own"}${r}`;
+}
+function mendMarkdown(f) {
+  const m = f.mend;
+  if (!m || m.targets.length === 0) return "";
+  const links = m.suggestions.find((s) => s.kind === "links");
+  const harden = m.suggestions.find((s) => s.kind === "harden");
+  const parts = [links ? suggestionWords(links) : "no link suggestion", ...harden ? [`or ${suggestionWords(harden)}`] : []];
+  return `**What would mend it**, each judged again by the same gate: ${parts.join("; ")}. The HTML report (or \`netbrace mend\`) has every suggestion, the YAML to add and the caution: a suggestion is a topology-level hint, not a route survey.
+
+`;
+}
+function changeMapMarkdown(f) {
+  return neighbourhoodMermaid(f) + mendMarkdown(f);
+}
+var MAX_ELEMENTS4, COLORS;
+var init_mermaid_map = __esm({
+  "src/report/mermaid-map.ts"() {
+    "use strict";
+    init_escape();
+    init_labels();
+    MAX_ELEMENTS4 = 40;
+    COLORS = { fail: "#a4161a", added: "#2d6a3e", removed: "#8a949a", cut: "#8f5200" };
+  }
+});
+
+// src/report/rank.ts
+function worstSeverity(f) {
+  let worst;
+  for (const x of f.findings) if (worst === void 0 || SEVERITY_RANK2[x.severity] < SEVERITY_RANK2[worst]) worst = x.severity;
+  return f.status === "error" ? "fail" : worst;
+}
+function countOf(f, s) {
+  let n = 0;
+  for (const x of f.findings) if (x.severity === s) n++;
+  return n;
+}
+function rankFiles(files) {
+  const rank = (f) => {
+    const w = worstSeverity(f);
+    return w === void 0 ? 3 : SEVERITY_RANK2[w];
+  };
+  return [...files].sort(
+    (a, b) => rank(a) - rank(b) || countOf(b, "fail") - countOf(a, "fail") || countOf(b, "warn") - countOf(a, "warn") || STATUS_RANK[a.status] - STATUS_RANK[b.status] || (a.path < b.path ? -1 : a.path > b.path ? 1 : 0)
+  );
+}
+function rankFindings(findings) {
+  return [...findings].sort((a, b) => SEVERITY_RANK2[a.severity] - SEVERITY_RANK2[b.severity]);
+}
+var SEVERITY_RANK2, STATUS_RANK;
+var init_rank2 = __esm({
+  "src/report/rank.ts"() {
+    "use strict";
+    SEVERITY_RANK2 = { fail: 0, warn: 1, notice: 2 };
+    STATUS_RANK = {
+      error: 0,
+      "below-threshold": 1,
+      regressed: 2,
+      removed: 3,
+      new: 4,
+      renamed: 5,
+      pass: 6
+    };
+  }
+});
+
+// src/report/markdown.ts
+function renderSummary(report, options = {}) {
+  return assemble(report, options, {
+    budget: options.budget ?? SUMMARY_BUDGET_BYTES,
+    measure: utf8Length2,
+    overviewRows: 1e3,
+    findingsFull: 200,
+    findingsCompact: 20,
+    charts: Number.MAX_SAFE_INTEGER,
+    prefix: "",
+    chartPoints: options.chartPoints ?? CHART_POINTS,
+    envelopesPerDesign: 4
+  });
+}
+function assemble(report, options, layout) {
+  const files = rankFiles(report.files);
+  const path11 = (p) => repoPath(options.pathPrefix, p);
+  const head = layout.prefix + header(report, options) + overview(files, layout.overviewRows, path11);
+  let body = "";
+  let used = layout.measure(head);
+  let charts2 = 0;
+  let omitted = 0;
+  const reserve = 2048;
+  const footerText = (note3) => footer(report, options, note3);
+  const footerSize = layout.measure(footerText(""));
+  for (const f of files) {
+    if (omitted > 0) {
+      omitted++;
+      continue;
+    }
+    let placed = false;
+    for (const detail of ["full", "compact"]) {
+      const section = fileSection(f, detail, layout, path11, detail === "full" && charts2 < layout.charts);
+      const size = layout.measure(section);
+      if (used + size + reserve + footerSize <= layout.budget) {
+        body += section;
+        used += size;
+        if (detail === "full" && charts2 < layout.charts && hasChart(f)) charts2++;
+        placed = true;
+        break;
+      }
+    }
+    if (!placed) omitted = 1;
+  }
+  const note2 = omitted > 0 ? `${ICON.notice} ${omitted} more design${omitted === 1 ? "" : "s"} (the least severe) did not fit within GitHub's size limit for this view and ${omitted === 1 ? "is" : "are"} listed only in the table above; every finding is in the JSON report and the SARIF file.
+
+` : "";
+  const text2 = head + body + footerText(note2);
+  return layout.measure(text2) <= layout.budget ? text2 : truncateTo(text2, layout);
+}
+function truncateTo(text2, layout) {
+  const tail = "\n\n… (cut to fit GitHub’s size limit; the JSON report has everything)\n";
+  let lo = 0;
+  let hi = text2.length;
+  while (lo < hi) {
+    const mid2 = Math.ceil((lo + hi) / 2);
+    if (layout.measure(text2.slice(0, mid2) + tail) <= layout.budget) lo = mid2;
+    else hi = mid2 - 1;
+  }
+  let cut = lo;
+  if (cut > 0 && /[\uD800-\uDBFF]/.test(text2[cut - 1] ?? "")) cut--;
+  return text2.slice(0, cut) + tail;
+}
+function header(report, options) {
+  const name = options.title ? `netbrace — ${escapeMarkdown(options.title, 120)}` : "netbrace";
+  let verdict;
+  if (report.files.length === 0) verdict = `${ICON.ok} ${name}: no design file changed — pass`;
+  else if (report.verdict === "pass") verdict = `${ICON.ok} ${name}: pass`;
+  else if (report.mode === "inform") verdict = `${ICON.warn} ${name}: would fail (inform mode, not blocking)`;
+  else verdict = `${ICON.fail} ${name}: the gate failed`;
+  const facts2 = [`${report.mode} mode`];
+  if (report.policy.source === "builtin") facts2.push("built-in default policy (no policy file)");
+  else {
+    const where = report.policy.revision ? ` at ${shortSha(report.policy.revision)}` : "";
+    facts2.push(`policy ${markdownCode(report.policy.path ?? "?")}${where}`);
+  }
+  if (report.base && report.head) facts2.push(`base ${shortSha(report.base)} → head ${shortSha(report.head)}`);
+  else if (report.head) facts2.push(`head ${shortSha(report.head)}, thresholds only (no base)`);
+  facts2.push(`seed ${report.seed}`);
+  if (report.scope === "all") facts2.push("every design, thresholds only");
+  if (report.part) facts2.push(`part ${report.part.index} of ${report.part.total}`);
+  if (report.parts) facts2.push(`joined parts ${report.parts.joined.join(", ")} of ${report.parts.total}`);
+  let text2 = `## ${verdict}
+
+${facts2.join(" · ")}
+
+`;
+  if (report.policy.changed) {
+    const said = report.policy.note ? `${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ""), 600)}.` : "The policy shown here was read from the base; the proposed policy applies once the change is merged.";
+    text2 += `> ${ICON.warn} This change modifies the policy file. ${said}
+
+`;
+  } else if (report.policy.note) {
+    text2 += `> ${ICON.notice} ${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ""), 600)}.
+
+`;
+  }
+  for (const n of options.notes ?? []) text2 += `> ${escapeMarkdown(n, 500)}
+
+`;
+  return text2;
+}
+function overview(files, maxRows, path11) {
+  if (files.length === 0) return "No design file changed between base and head, so there is nothing to judge.\n\n";
+  const counts = /* @__PURE__ */ new Map();
+  for (const f of files) counts.set(fileStatusWord(f), (counts.get(fileStatusWord(f)) ?? 0) + 1);
+  const parts = [...counts.entries()].map(([s, n]) => `${n} ${s}`);
+  let text2 = `${files.length} design${files.length === 1 ? "" : "s"} evaluated: ${parts.join(", ")}.
+
+`;
+  text2 += "| | design | status | findings | worst finding |\n|---|---|---|---|---|\n";
+  for (const f of files.slice(0, maxRows)) {
+    const worst = rankFindings(f.findings)[0];
+    const w = worstSeverity(f);
+    const name = f.previousPath ? `${markdownCode(path11(f.previousPath), 200, true)} → ${markdownCode(path11(f.path), 200, true)}` : markdownCode(path11(f.path), 200, true);
+    const worstText = worst ? `${lineRef(worst)}${escapeMarkdown(worst.message, 160)}` : "";
+    text2 += `| ${w ? ICON[w] : ICON.ok} | ${name} | ${fileStatusWord(f)} | ${findingCounts(f)} | ${worstText} |
+`;
+  }
+  if (files.length > maxRows) text2 += `
+… and ${files.length - maxRows} more designs, least severe last; see the JSON report.
+`;
+  return `${text2}
+`;
+}
+function findingCounts(f) {
+  const n = { fail: 0, warn: 0, notice: 0 };
+  for (const x of f.findings) n[x.severity]++;
+  const parts = ["fail", "warn", "notice"].filter((s) => n[s] > 0).map((s) => `${n[s]} ${SEVERITY_WORD[s]}${n[s] === 1 ? "" : "s"}`);
+  return parts.length ? parts.join(", ") : "none";
+}
+function lineRef(x) {
+  return x.line > 0 ? `line ${x.line}: ` : "";
+}
+function hasChart(f) {
+  return Boolean(f.head?.envelopes.length);
+}
+function fileSection(f, detail, layout, path11, chart) {
+  const w = worstSeverity(f);
+  const renamed = f.previousPath ? ` (renamed from ${markdownCode(path11(f.previousPath))})` : "";
+  let text2 = `### ${w ? ICON[w] : ICON.ok} ${markdownCode(path11(f.path))} — ${fileStatusWord(f)}${renamed}
+
+`;
+  if (f.error) {
+    const what = fileStatusWord(f) === STATUS_WORD.error ? "Could not be read" : "Could not be evaluated";
+    text2 += `${what}: line ${f.error.line}, column ${f.error.column}: ${escapeMarkdown(f.error.message, 500)}
+
+`;
+  }
+  if (f.requirements.length) text2 += requirementTable3(f.requirements);
+  const notApplicable = describeNotApplicable(f.head);
+  if (notApplicable) text2 += `Not applicable to this design: ${escapeMarkdown(notApplicable, 600)}
+
+`;
+  const changes = describeChanges(f);
+  const modified = describeModifications(f, detail === "full" ? 50 : 10);
+  if (changes || modified.length) {
+    text2 += "**What the change does**:\n\n";
+    if (changes) text2 += `- ${escapeMarkdown(changes, 1500)}
+`;
+    for (const m of modified) text2 += `- ${escapeMarkdown(m, 300)}
+`;
+    text2 += "\n";
+  }
+  const findings = groupFindings(rankFindings(f.findings));
+  const cap = detail === "full" ? layout.findingsFull : layout.findingsCompact;
+  if (findings.length) {
+    text2 += "**Findings**, worst first:\n\n";
+    for (const x of findings.slice(0, cap)) text2 += `- ${findingLine(x)}
+`;
+    if (findings.length > cap) text2 += `- … ${findings.length - cap} more in the JSON report and the SARIF file
+`;
+    text2 += "\n";
+  }
+  if (detail === "full") {
+    if (chart) for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign)) text2 += chartSection(f, env, layout.chartPoints);
+    text2 += changeMapMarkdown(f);
+    text2 += weakestSection(f);
+    text2 += structureSection(f);
+  }
+  return text2;
+}
+function requirementTable3(rows) {
+  let text2 = "| requirement | base | head | Δ ± error | status |\n|---|---:|---:|---:|---|\n";
+  let noise2 = false;
+  for (const r of rows) {
+    const icon = r.status === "met" ? ICON.ok : r.status === "within-noise" ? "〰️" : r.status === "uncertain" ? "❔" : r.status === "not-applicable" ? "➖" : ICON[r.severity];
+    if (r.status === "within-noise") noise2 = true;
+    const err = formatError(r.se);
+    const delta = r.delta === null ? "–" : `${formatRequirementDelta(r)}${err ? ` ${err}` : ""}`;
+    text2 += `| ${escapeMarkdown(r.description, 200)} | ${formatRequirementValue(r, r.base)} | ${formatRequirementValue(r, r.head)} | ${delta} | ${icon} ${REQUIREMENT_STATUS_WORD[r.status]} |
+`;
+  }
+  if (noise2) text2 += "\n〰️ *within noise*: the value dropped by less than its Monte Carlo error, which is never a failure.\n";
+  return `${text2}
+`;
+}
+function findingLine(x) {
+  const where = x.line > 0 ? ` (line ${x.line}${x.column ? `, column ${x.column}` : ""})` : "";
+  const text2 = `${ICON[x.severity]} **${RULE_WORD[x.rule] ? findingTitle(x, RULE_WORD) : escapeMarkdown(x.rule, 40)}**${where}: ${escapeMarkdown(x.message, 600)}${findingNumbers(x)}`;
+  const members = x.grouped && x.members && x.members.length > 1 ? x.members.filter((m) => m.consequence) : [];
+  const plain2 = (t) => escapeMarkdown(t, 1200);
+  if (members.length) return `${text2}
+${members.map((m) => `  - ${plain2(`${formatElement(m.elements[0])}: ${consequenceSentence(m.consequence, "")}`)}`).join("\n")}`;
+  return x.consequence ? `${text2} ${plain2(consequenceSentence(x.consequence))}` : text2;
+}
+function sampleIndices(length, max) {
+  if (length <= max) return Array.from({ length }, (_, i) => i);
+  const out = [];
+  for (let i = 0; i < max; i++) out.push(Math.round(i * (length - 1) / (max - 1)));
+  return [...new Set(out)];
+}
+function sparkline(values) {
+  return values.map((v) => Number.isFinite(v) ? BARS[Math.min(7, Math.max(0, Math.round(v * 7)))] : " ").join("");
+}
+function chartNumber(v) {
+  return Number.isFinite(v) ? String(Math.round(v * 1e3) / 1e3) : "0";
+}
+function chartSection(f, head, points) {
+  const base = f.base?.envelopes.find((e) => e.challenge === head.challenge && e.kind === head.kind && sameGrid(e, head));
+  const idx = sampleIndices(head.x.length, points);
+  const pick = (v) => idx.map((i) => v[i] ?? 0);
+  const [qlo, qhi] = head.band;
+  const lo = head.quantiles[String(qlo)]?.value;
+  const series = [{ name: "head median", values: pick(head.median) }];
+  if (base) series.push({ name: "base median", values: pick(base.median) });
+  if (lo) series.push({ name: `head ${Math.round(qlo * 100)} % quantile (band low)`, values: pick(lo) });
+  const hi = head.quantiles[String(qhi)]?.value;
+  if (hi) series.push({ name: `head ${Math.round(qhi * 100)} % quantile (band high)`, values: pick(hi) });
+  const xs = pick(head.x);
+  const caption = challengeLabel(head.challenge);
+  let text2 = `**Head envelope against the base** — ${caption}, R against ${xAxisLabel(head.kind, head.xUnit)}:
+
+`;
+  text2 += "```mermaid\nxychart-beta\n";
+  text2 += `  title "${mermaidSafe(caption)}"
+`;
+  text2 += `  x-axis "${mermaidSafe(xAxisLabel(head.kind, head.xUnit))}" [${xs.map((x) => `"${chartNumber(x)}"`).join(", ")}]
+`;
+  text2 += '  y-axis "R" 0 --> 1\n';
+  for (const s of series) text2 += `  line [${s.values.map(chartNumber).join(", ")}]
+`;
+  text2 += "```\n\n";
+  const end = head.x[head.x.length - 1] ?? 0;
+  const range = head.xUnit === "km" ? `0 to ${chartNumber(end)} km` : `0 to ${Math.round(end * 100)} % ${kindPlural(head.kind)} removed`;
+  text2 += `| line (in drawing order) | R over ${range} | start | end |
+|---|---|---:|---:|
+`;
+  for (const s of series) {
+    text2 += `| ${s.name} | ${sparkline(s.values)} | ${formatValue(s.values[0])} | ${formatValue(s.values[s.values.length - 1])} |
+`;
+  }
+  const areas = `area ${formatValue(head.area)}${base ? ` (base ${formatValue(base.area)})` : ""}, spread ${formatValue(head.spread)}${base ? ` (base ${formatValue(base.spread)})` : ""}`;
+  return `${text2}
+${head.realizations} realizations, seed ${head.seed}; ${areas}.
+
+`;
+}
+function sameGrid(a, b) {
+  return a.x.length === b.x.length && a.x.every((v, i) => Math.abs(v - (b.x[i] ?? NaN)) < 1e-12);
+}
+function mermaidSafe(text2) {
+  return text2.replace(/["\n\r\\`<>]/g, " ");
+}
+function mdElement(e) {
+  return formatElement(e, MD_STYLE);
+}
+function elementChain(elements, max = 12) {
+  const shown2 = elements.slice(0, max).map(mdElement);
+  return shown2.join(" → ") + (elements.length > max ? ` → … (${elements.length - max} more)` : "");
+}
+function elementList2(elements, max = 20) {
+  const shown2 = elements.slice(0, max).map(mdElement);
+  return shown2.join(", ") + (elements.length > max ? `, … (${elements.length - max} more)` : "");
+}
+function mdCost(c, subject) {
+  return c ? ` ${consequenceSentence(c, subject, MD_STYLE)}` : "";
+}
+function weakestSection(f) {
+  const head = f.head;
+  if (!head) return "";
+  const known = knownElements(f);
+  const items = [];
+  for (const seq of weakestSequences(f).slice(0, 6)) {
+    const r = seq.values && seq.values.length ? `; R ${formatValue(seq.values[0])} → ${formatValue(seq.values[seq.values.length - 1])}` : "";
+    items.push(`- ${escapeMarkdown(seq.title, 300)}: ${elementChain(seq.elements)}${r}.${mdCost(seq.consequence, "These removals")}`);
+  }
+  for (const c of head.contingencies) {
+    const worst = c.worst[0];
+    if (worst) {
+      items.push(`- ${contingencyLabel(c.challenge, c.kind)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList2(worst.elements.map((id2, i) => worst.located?.[i] ?? knownElement(known, c.kind, id2)))}, leaves R ${formatValue(worst.value)}`);
+    }
+  }
+  if (!items.length) return "";
+  return `**Weakest removal sequences at head**:
+
+${items.join("\n")}
+
+`;
+}
+function structureSection(f) {
+  const h = f.head?.structure;
+  if (!h) return "";
+  const b = f.base?.structure;
+  const list2 = (els) => els.length ? elementList2(els) : "none";
+  const rows = [
+    `| sites | ${b ? b.nodes : "–"} | ${h.nodes} |`,
+    `| links | ${b ? b.links : "–"} | ${h.links} |`,
+    `| components | ${b ? b.components : "–"} | ${h.components} |`,
+    `| bridges | ${b ? b.bridges.length : "–"} | ${h.bridges.length} |`,
+    `| cut sites | ${b ? b.cutNodes.length : "–"} | ${h.cutNodes.length} |`
+  ];
+  let text2 = `<details><summary>Structure of ${escapeHtml(oneLine(f.path, 300))}</summary>
+
+| | base | head |
+|---|---:|---:|
+${rows.join("\n")}
+
+`;
+  text2 += `Bridges at head: ${list2(h.bridges)}
+
+Cut sites at head: ${list2(h.cutNodes)}
+
+`;
+  const degraded = f.head?.degraded ?? [];
+  if (degraded.length) text2 += `Reduced evaluation: ${degraded.map((d) => escapeMarkdown(d, 200)).join("; ")}
+
+`;
+  return `${text2}</details>
+
+`;
+}
+function footer(report, options, note2) {
+  let text2 = note2;
+  const artifacts = options.artifacts ?? [];
+  if (artifacts.length || options.runUrl) {
+    const list2 = artifacts.map((a) => markdownCode(a, 200)).join(", ");
+    const run6 = options.runUrl && /^https?:\/\/[^\s<>()]+$/.test(options.runUrl) ? `[the workflow run](${options.runUrl})` : "the workflow run";
+    text2 += `Full detail${list2 ? ` (${list2})` : ""} is in the artifacts of ${run6}.
+
+`;
+  }
+  text2 += `<sub>${escapeMarkdown(report.caution, 1e3)} netbrace ${escapeMarkdown(report.tool.version, 40)}.</sub>
+`;
+  return text2;
+}
+function shortSha(sha) {
+  return markdownCode(/^[0-9a-f]{40}$/i.test(sha) ? sha.slice(0, 7) : sha, 60);
+}
+function utf8Length2(s) {
+  let n = 0;
+  for (let i = 0; i < s.length; i++) {
+    const c = s.charCodeAt(i);
+    if (c < 128) n += 1;
+    else if (c < 2048) n += 2;
+    else if (c >= 55296 && c <= 56319) {
+      n += 4;
+      i++;
+    } else n += 3;
+  }
+  return n;
+}
+var SUMMARY_BUDGET_BYTES, CHART_POINTS, ICON, SEVERITY_WORD, RULE_WORD, BARS, MD_STYLE;
+var init_markdown = __esm({
+  "src/report/markdown.ts"() {
+    "use strict";
+    init_escape();
+    init_finding_text();
+    init_fingerprint();
+    init_labels();
+    init_mermaid_map();
+    init_rank2();
+    SUMMARY_BUDGET_BYTES = 900 * 1024;
+    CHART_POINTS = 21;
+    ICON = { fail: "❌", warn: "⚠️", notice: "ℹ️", ok: "✅" };
+    SEVERITY_WORD = { fail: "failure", warn: "warning", notice: "notice" };
+    RULE_WORD = {
+      "r-threshold": "r-threshold",
+      "area-floor": "area floor",
+      "spread-ceiling": "spread ceiling",
+      "n-1": "N−1 rule",
+      "new-bridge": "new bridge",
+      "new-cut-node": "new cut node",
+      "new-stranding-group": "new stranding shared-risk group",
+      "hardened-weak-point": "weak point hidden by hardening",
+      regression: "regression",
+      "weakest-sequence": "weakest sequence",
+      "parse-error": "unreadable design",
+      "removed-design": "removed design",
+      "policy-changed": "policy changed",
+      degraded: "reduced evaluation",
+      "not-computable": "value not computable"
+    };
+    BARS = "▁▂▃▄▅▆▇█";
+    MD_STYLE = { id: (x) => markdownCode(x, 120), text: (x) => markdownCode(x, 120) };
+  }
+});
+
+// src/report/sarif.ts
+function findingFingerprint(path11, x) {
+  return stableHash([x.rule, path11, x.requirement ?? "", ...x.elements.map((e) => `${e.kind}:${e.id}`)].join("\0"));
+}
+function instanceOf(report) {
+  return (report.head ?? "worktree").replace(/[^A-Za-z0-9._-]/g, "-") || "worktree";
+}
+function uriOf(path11) {
+  return path11.split("/").map(encodeURIComponent).join("/");
+}
+function nonEmpty(text2, fallback) {
+  const t = oneLine(text2).trim();
+  return t.length ? t : fallback;
+}
+function renderSarif(report, options = {}) {
+  const category = (options.category ?? "netbrace").replace(/[^A-Za-z0-9._-]/g, "-") || "netbrace";
+  const rules = RULE_IDS.map((id2) => {
+    const r = RULES[id2];
+    return {
+      id: id2,
+      name: r.name,
+      shortDescription: { text: r.short },
+      fullDescription: { text: r.full },
+      help: { text: r.help, markdown: `**${r.short}.** ${r.full}
+
+${r.help}` },
+      defaultConfiguration: { level: id2 === "weakest-sequence" || id2 === "removed-design" || id2 === "policy-changed" ? "note" : id2 === "degraded" || id2 === "hardened-weak-point" ? "warning" : "error" },
+      properties: { tags: ["robustness", "network-design"] }
+    };
+  });
+  const results = [];
+  const seen = /* @__PURE__ */ new Map();
+  let total = 0;
+  for (const f of rankFiles(report.files)) {
+    const path11 = repoPath(options.pathPrefix, f.path);
+    const findings = rankFindings(f.findings);
+    if (f.status === "error" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
+      findings.unshift({ rule: "parse-error", severity: "fail", message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
+    }
+    for (const x of findings) {
+      total++;
+      if (results.length >= SARIF_MAX_RESULTS) continue;
+      const base = findingFingerprint(path11, x);
+      const occurrence = (seen.get(base) ?? 0) + 1;
+      seen.set(base, occurrence);
+      const region = { startLine: Math.max(1, Math.floor(x.line || 1)) };
+      if (x.column && x.column > 0) region.startColumn = Math.floor(x.column);
+      const properties = { fileStatus: f.status };
+      if (x.requirement) properties.requirement = x.requirement;
+      for (const k of ["base", "head", "delta", "se", "threshold", "allowance"]) if (typeof x[k] === "number") properties[k] = x[k];
+      if (x.status) properties.status = x.status;
+      if (x.elements.length) properties.elements = x.elements.map((e) => ({ id: e.id, kind: e.kind, line: e.line, ...e.label !== void 0 ? { label: e.label } : {} }));
+      if (x.consequence) properties.consequence = x.consequence;
+      results.push({
+        ruleId: x.rule,
+        ruleIndex: RULE_IDS.indexOf(x.rule),
+        level: LEVEL[x.severity],
+        message: { text: nonEmpty(`${x.message}${findingNumbers(x, "delta")}${findingCost(x)}`, RULES[x.rule].short) },
+        locations: [{ physicalLocation: { artifactLocation: { uri: uriOf(path11) }, region } }],
+        // Our id is a hash of rule, path, requirement and elements, not of the line's text, so
+        // it goes under the standard `fingerprints` with a key of our own; code scanning fills
+        // partialFingerprints.primaryLocationLineHash (a hash of the line) itself.
+        fingerprints: { [FINGERPRINT_KEY]: `${base}:${occurrence}` },
+        properties
+      });
+    }
+  }
+  const runProperties = { verdict: report.verdict, mode: report.mode, seed: report.seed };
+  if (total > results.length) runProperties.resultsOmitted = total - results.length;
+  return {
+    $schema: SARIF_SCHEMA_URI,
+    version: "2.1.0",
+    runs: [
+      {
+        tool: {
+          driver: {
+            name: "netbrace",
+            version: report.tool.version,
+            semanticVersion: report.tool.version,
+            rules
+          }
+        },
+        // "category/instance" (SARIF 2.1.0 §3.17.4; code scanning reads the category as
+        // everything before the last slash): the instance is the head revision judged.
+        automationDetails: { id: `${category}/${instanceOf(report)}` },
+        results,
+        properties: runProperties
+      }
+    ]
+  };
+}
+var SARIF_SCHEMA_URI, SARIF_MAX_RESULTS, RULES, LEVEL, RULE_IDS, FINGERPRINT_KEY;
+var init_sarif = __esm({
+  "src/report/sarif.ts"() {
+    "use strict";
+    init_escape();
+    init_fingerprint();
+    init_finding_text();
+    init_rank2();
+    SARIF_SCHEMA_URI = "https://json.schemastore.org/sarif-2.1.0.json";
+    SARIF_MAX_RESULTS = 25e3;
+    RULES = {
+      "r-threshold": {
+        name: "RThreshold",
+        short: "An r-threshold of the policy is missed",
+        full: "At the stated removal fraction, the stated statistic of the robustness envelope (a quantile, the median, the minimum or the worst case) of R is below the threshold the policy requires.",
+        help: "The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by scopes but never loosened below a floor it inherits."
+      },
+      "area-floor": {
+        name: "AreaFloor",
+        short: "The envelope area is below its floor",
+        full: "The area of the robustness envelope (the mean over the removal grid of the median R) is below the floor the policy requires.",
+        help: "The design loses robustness too quickly over the whole range of removals. The weakest removal sequences show where; adding links between otherwise distant parts of the network usually raises the area most."
+      },
+      "spread-ceiling": {
+        name: "SpreadCeiling",
+        short: "The envelope spread is above its ceiling",
+        full: "The spread of the robustness envelope (the mean width of the band between its quantiles) is above the ceiling the policy allows: the outcome of a failure depends too much on which elements fail.",
+        help: "A wide band means a few elements matter far more than the rest. Look at the weakest removal sequences and give those elements alternatives."
+      },
+      "n-1": {
+        name: "NMinusOne",
+        short: "The loss of one element drops R below the N−1 floor",
+        full: "Removing the named single element (site or link) drops R below the value the N−1 rule of the policy requires.",
+        help: "The named element is critical on its own. Give the traffic it carries an alternative (a parallel link or a second path through other sites), or mark it as hardened in the design if it is engineered not to fail."
+      },
+      "new-bridge": {
+        name: "NewBridge",
+        short: "The change adds a bridge (a link whose loss splits the network)",
+        full: "At head, the named link is a bridge: removing it disconnects the network. It was not a bridge at the base, so the change adds a single point of failure.",
+        help: "Restore the redundancy that the change removed (for example the chord that made a ring), or add another link between the two sides the bridge separates."
+      },
+      "new-cut-node": {
+        name: "NewCutNode",
+        short: "The change adds a cut site (a site whose loss splits the network)",
+        full: "At head, the named site is a cut node: removing it disconnects the network. It was not one at the base, so the change adds a single point of failure.",
+        help: "Connect the part that hangs off this site to the rest of the network by a second path that avoids it."
+      },
+      "new-stranding-group": {
+        name: "NewStrandingGroup",
+        short: "The change adds a shared-risk group whose loss cuts sites off",
+        full: "At head, losing the named shared-risk group (all of its links at once, as in a duct cut) cuts sites off from the rest of the network, through links that are not bridges on their own. The base had no such group, so the change adds a single point of failure that the bridges and cut nodes do not show.",
+        help: "Route one of the links through a different duct or path, or add a link outside the group between the parts it separates."
+      },
+      "hardened-weak-point": {
+        name: "HardenedWeakPoint",
+        short: "A weak point the change hides by marking elements hardened",
+        full: "Ignoring the hardened flags, the named element would be a new bridge, cut node or stranding shared-risk group. The change marks it (or its links) hardened, so the challenges never remove it; hardening is a claim in the design file that the gate cannot check.",
+        help: "Make sure the element really is engineered not to fail (and reviewed as such), or restore the redundancy instead. The policy key hardened-weak-points sets how this is judged."
+      },
+      regression: {
+        name: "Regression",
+        short: "A requirement’s value dropped from base to head beyond tolerance",
+        full: "The paired difference head − base of a requirement’s value is a drop larger than the tolerance in the policy and larger than its Monte Carlo error.",
+        help: "The change makes the design measurably weaker than the base. The report gives base, head, the delta and its standard error; drops within the Monte Carlo error are never reported as failures."
+      },
+      "weakest-sequence": {
+        name: "WeakestSequence",
+        short: "The weakest removal sequence found",
+        full: "The order of element removals that lowered R the most among the evaluated realizations or the worst-case search. Informational.",
+        help: "These elements, in this order, are where the design is weakest under the challenge. They are the first place to add redundancy."
+      },
+      "parse-error": {
+        name: "ParseError",
+        short: "The design file could not be read",
+        full: "The design file at head has a syntax or consistency error (for example a link naming an unknown site), so it could not be evaluated. This fails the gate.",
+        help: "Fix the file at the line and column given. The other design files were still evaluated."
+      },
+      "removed-design": {
+        name: "RemovedDesign",
+        short: "A design file was removed",
+        full: "A design file that exists at the base is deleted at head. It is reported, and fails the gate only if the policy says so.",
+        help: "Make sure removing the design is intended; the policy decides whether a removal needs a review."
+      },
+      "policy-changed": {
+        name: "PolicyChanged",
+        short: "The change modifies the policy file",
+        full: "The policy file differs between base and head. The gate applied the base policy, so a change cannot loosen the rules that judge it; the proposed policy applies after the merge.",
+        help: "Have the policy change reviewed on its own merits by the owners of the policy."
+      },
+      degraded: {
+        name: "Degraded",
+        short: "The evaluation was reduced to fit its budget",
+        full: "The evaluation of this design was reduced (fewer realizations, sampled sources, a shorter worst-case search) to stay within the configured budgets, so its results carry more uncertainty.",
+        help: "Raise the budgets in the policy, or run netbrace with more threads, for a full evaluation."
+      },
+      "not-computable": {
+        name: "NotComputable",
+        short: "A value the gate needs could not be computed",
+        full: "R, or a requirement’s value, could not be computed on this design: a metric of R does not apply to it (demand_served on a design without demands, weighted_efficiency without link lengths or latencies), or the value came out NaN or infinite. A value that cannot be computed is never a pass, so this fails the gate.",
+        help: "Give the design what the metric needs (the message says what), or define R in the policy with metrics the design supports."
+      }
+    };
+    LEVEL = { fail: "error", warn: "warning", notice: "note" };
+    RULE_IDS = Object.keys(RULES);
+    FINGERPRINT_KEY = "netbraceFinding/v1";
   }
 });
 
 // src/shell/commands/check.ts
-import { mkdir, writeFile } from "node:fs/promises";
+import { mkdir, stat, writeFile } from "node:fs/promises";
 import path4 from "node:path";
 function parse(args) {
   return parseCommandArgs("check", args, OPTIONS);
 }
-function partOf(value) {
-  if (value === void 0) return void 0;
-  const m = /^([0-9]+)\/([0-9]+)$/.exec(value);
+function partOf(value2) {
+  if (value2 === void 0) return void 0;
+  const m = /^([0-9]+)\/([0-9]+)$/.exec(value2);
   const [k, n] = m ? [Number(m[1]), Number(m[2])] : [0, 0];
-  if (!m || k < 1 || n < 1 || k > n) throw new UsageError(`--part must be K/N with 1 ≤ K ≤ N, not "${value}"`, "e.g. --part 2/4");
+  if (!m || k < 1 || n < 1 || k > n) throw new UsageError(`--part must be K/N with 1 ≤ K ≤ N, not "${value2}"`, "e.g. --part 2/4");
   return { index: k, total: n };
 }
 function repoPath2(root, cwd, p) {
@@ -29285,30 +38793,67 @@ async function buildRequest(v, positionals, io) {
   if (v["org-policy"] !== void 0) request.orgPolicyPath = repoPath2(root, io.cwd, v["org-policy"]);
   return { request, deps: { ...gitDeps(root), ...evaluate ? { evaluate } : {} } };
 }
-async function writeOut(io, file, text2) {
+async function ensureDirectory(dir) {
+  const missing3 = [];
+  for (let d = dir; ; d = path4.dirname(d)) {
+    try {
+      if (!(await stat(d)).isDirectory()) throw Object.assign(new Error(`${d} is not a directory`), { code: "ENOTDIR" });
+      break;
+    } catch (e) {
+      if (e.code !== "ENOENT" || path4.dirname(d) === d) throw e;
+      missing3.push(d);
+    }
+  }
+  for (const d of missing3.reverse()) {
+    try {
+      await mkdir(d);
+    } catch (e) {
+      if (e.code !== "EEXIST") throw e;
+    }
+  }
+}
+async function writeOut(io, option, file, text2) {
   const full = path4.resolve(io.cwd, file);
-  await mkdir(path4.dirname(full), { recursive: true });
-  await writeFile(full, text2);
+  try {
+    await ensureDirectory(path4.dirname(full));
+    await writeFile(full, text2);
+    return void 0;
+  } catch (e) {
+    const code = e.code ?? "";
+    const why = WRITE_PROBLEM[code] ?? (e instanceof Error ? e.message : String(e));
+    return `${file}: cannot write the ${option} report: ${why}${code ? ` (${code})` : ""} — give ${option} a file in a writable directory`;
+  }
 }
 async function writeReports(v, report, io) {
-  if (v.json !== void 0) await writeOut(io, v.json, serializeReport(report));
-  if (v.summary !== void 0) await writeOut(io, v.summary, renderSummary(report));
-  if (v.html !== void 0) await writeOut(io, v.html, renderHtml(report));
-  if (v.sarif !== void 0) await writeOut(io, v.sarif, `${JSON.stringify(renderSarif(report), null, 2)}
-`);
+  const outputs = [
+    ["--json", v.json, () => serializeReport(report)],
+    ["--summary", v.summary, () => renderSummary(report)],
+    ["--html", v.html, () => renderHtml(report)],
+    ["--sarif", v.sarif, () => `${JSON.stringify(renderSarif(report), null, 2)}
+`]
+  ];
+  const problems = [];
+  for (const [option, file, render] of outputs) {
+    if (file === void 0) continue;
+    const problem = await writeOut(io, option, file, render());
+    if (problem) problems.push(problem);
+  }
+  return problems;
 }
 async function run(args, io) {
   const { values, positionals } = parse(args);
   const format = choice("--format", values.format, ["text", "markdown", "json"], "text");
   const { request, deps } = await buildRequest(values, positionals, io);
   const { report, exitCode } = await runGate(request, deps);
-  await writeReports(values, report, io);
   if (format === "json") io.stdout(serializeReport(report));
   else if (format === "markdown") io.stdout(renderSummary(report));
   else io.stdout(renderTerminal(report, { color: colorEnabled(io), width: terminalWidth(io) }));
-  return exitCode;
+  const problems = await writeReports(values, report, io);
+  for (const p of problems) io.stderr(`${p}
+`);
+  return problems.length ? 2 : exitCode;
 }
-var HELP4, OPTIONS, checkCommand;
+var HELP4, OPTIONS, WRITE_PROBLEM, checkCommand;
 var init_check = __esm({
   "src/shell/commands/check.ts"() {
     "use strict";
@@ -29328,7 +38873,9 @@ var init_check = __esm({
 
 Judge network designs against the policy: every design file that changed between two
 revisions (or the PATHs given), at the head and at the base, with the same rules the
-GitHub Action applies.
+GitHub Action applies. A design deleted and added again under another file (a change of
+format, say) is judged as renamed: paired by its network name, else by its base name in the
+same directory. A PATH that exists at neither side is a usage error.
 
 Revisions:
   --base REF             compare with REF (default: HEAD for --worktree, else the head's
@@ -29368,7 +38915,9 @@ netbrace informs engineering judgement; it does not replace engineering studies.
 Exit codes:
   0  pass (or nothing to judge, or --mode inform)
   1  the gate failed: a requirement was broken or a design could not be read
-  2  usage or configuration error (bad option, broken policy); nothing was evaluated
+  2  usage or configuration error (bad option, broken policy); nothing was evaluated;
+     or a report file (--json, --summary, --html, --sarif) could not be written, after
+     the verdict was printed
 `;
     OPTIONS = {
       base: { type: "string" },
@@ -29386,6 +38935,16 @@ Exit codes:
       summary: { type: "string" },
       html: { type: "string" },
       sarif: { type: "string" }
+    };
+    WRITE_PROBLEM = {
+      ENOENT: "its directory does not exist and cannot be created",
+      ENOTDIR: "a part of the path is not a directory",
+      EISDIR: "it is a directory",
+      EACCES: "permission denied",
+      EPERM: "permission denied",
+      EROFS: "the file system is read-only",
+      ENOSPC: "no space left on the device",
+      EIO: "the file system refused the write"
     };
     checkCommand = {
       name: "check",
@@ -29459,14 +39018,14 @@ var init_workflow_template = __esm({
 import { writeFile as writeFile2 } from "node:fs/promises";
 import path5 from "node:path";
 import { mkdir as mkdir2 } from "node:fs/promises";
-async function create(target, text2, shown) {
+async function create(target, text2, shown2) {
   try {
     await writeFile2(target, text2, { flag: "wx" });
     return true;
   } catch (e) {
     const code = e.code;
     if (code === "EEXIST") return false;
-    if (code === "ENOENT") throw new UsageError(`cannot write ${shown}: its folder does not exist`);
+    if (code === "ENOENT") throw new UsageError(`cannot write ${shown2}: its folder does not exist`);
     throw e;
   }
 }
@@ -29488,16 +39047,16 @@ async function run2(args, io) {
   for (const o of owners ?? []) if (!OWNER.test(o)) throw new UsageError(`--owners: "${o}" is not @user, @org/team or an e-mail address`);
   const root = await repoRoot(io.cwd) ?? io.cwd;
   const target = values.policy !== void 0 ? path5.resolve(io.cwd, values.policy) : path5.join(root, DEFAULT_POLICY_PATH);
-  const shown = path5.relative(io.cwd, target) || target;
-  if (!await create(target, STARTER_POLICY, shown)) {
-    if (!values.workflow) throw new UsageError(`${shown} exists already; netbrace init never overwrites a policy`, "edit it, or give another --policy FILE");
-    io.stdout(`kept ${shown}: it exists already (never overwritten)
+  const shown2 = path5.relative(io.cwd, target) || target;
+  if (!await create(target, STARTER_POLICY, shown2)) {
+    if (!values.workflow) throw new UsageError(`${shown2} exists already; netbrace init never overwrites a policy`, "edit it, or give another --policy FILE");
+    io.stdout(`kept ${shown2}: it exists already (never overwritten)
 `);
-  } else io.stdout(`wrote ${shown}: the built-in policy, commented. Set the floors for your network, then run "netbrace check".
+  } else io.stdout(`wrote ${shown2}: the built-in policy, commented. Set the floors for your network, then run "netbrace check".
 `);
   if (!values.workflow) return 0;
   const policyPath = path5.relative(root, target).split(path5.sep).join("/");
-  if (policyPath.startsWith("..")) throw new UsageError(`the policy ${shown} is outside the repository`, "the workflow reads it from the repository");
+  if (policyPath.startsWith("..")) throw new UsageError(`the policy ${shown2} is outside the repository`, "the workflow reads it from the repository");
   const wfTarget = path5.join(root, WORKFLOW_PATH);
   const wfShown = path5.relative(io.cwd, wfTarget) || wfTarget;
   await mkdir2(path5.dirname(wfTarget), { recursive: true });
@@ -29602,7 +39161,7 @@ function judge2(report) {
   const warnings = report.files.reduce((n, f) => n + f.findings.filter((x) => x.severity === "warn").length, 0);
   return { verdict: report.verdict, warnings };
 }
-function matches2(expect, verdict, warnings) {
+function matches(expect, verdict, warnings) {
   if (expect === "fail") return verdict === "fail";
   if (expect === "pass") return verdict === "pass" && warnings === 0;
   return verdict === "pass" && warnings > 0;
@@ -29653,8 +39212,8 @@ async function runDemo(io, options) {
         const r = path6.relative(io.cwd, a);
         return r && !r.startsWith("..") && !path6.isAbsolute(r) ? r : a;
       };
-      const shown = args.map((a) => a.startsWith(out) ? rel(a) : a);
-      io.stdout(`$ netbrace ${shown.join(" ")}
+      const shown2 = args.map((a) => a.startsWith(out) ? rel(a) : a);
+      io.stdout(`$ netbrace ${shown2.join(" ")}
 
 `);
       const printed = [];
@@ -29672,7 +39231,7 @@ async function runDemo(io, options) {
       let warnings = 0;
       if (existsSync2(files.json)) ({ verdict, warnings } = judge2(JSON.parse(readFileSync3(files.json, "utf8"))));
       git2("checkout", "-q", "main");
-      outcomes.push({ change, exitCode, verdict, warnings, files, asExpected: exitCode !== 2 && matches2(change.expect, verdict, warnings) });
+      outcomes.push({ change, exitCode, verdict, warnings, files, asExpected: exitCode !== 2 && matches(change.expect, verdict, warnings) });
     }
   } finally {
     if (!options.keep) rmSync(repo, { recursive: true, force: true });
@@ -29752,11 +39311,11 @@ Exit codes:
       summary: "run the gate on an invented backbone and three proposed changes; write all reports",
       help: HELP6,
       async run(args, io) {
-        const parsed = parseCommandArgs("demo", args, { out: { type: "string" }, keep: { type: "boolean" } }, false);
-        const out = parsed.values.out ?? path6.join(".netbrace-out", "demo");
+        const parsed2 = parseCommandArgs("demo", args, { out: { type: "string" }, keep: { type: "boolean" } }, false);
+        const out = parsed2.values.out ?? path6.join(".netbrace-out", "demo");
         let result;
         try {
-          result = await runDemo(io, { out, keep: parsed.values.keep ?? false });
+          result = await runDemo(io, { out, keep: parsed2.values.keep ?? false });
         } catch (e) {
           const err = e;
           if (err.code === "ENOENT" && /git/.test(String(err.path ?? err.message))) {
@@ -29775,7 +39334,7 @@ Reports written to ${dir}
 `);
         for (const o of outcomes) io.stdout(`  ${path6.basename(o.files.html)}  ${path6.basename(o.files.json)}  ${path6.basename(o.files.markdown)}  ${path6.basename(o.files.sarif)}
 `);
-        if (parsed.values.keep) io.stdout(`Scratch repository kept at ${repo}
+        if (parsed2.values.keep) io.stdout(`Scratch repository kept at ${repo}
 `);
         if (outcomes.some((o) => o.exitCode === 2)) return 2;
         return outcomes.every((o) => o.asExpected) ? 0 : 1;
@@ -29801,7 +39360,7 @@ function formatNumber(x) {
   return Number(x.toPrecision(6)).toString();
 }
 function formatMetricsTable(file, r, skipped) {
-  const rows = Object.entries(r.metrics).map(([id, v]) => [id, formatNumber(v.value), v.normalized.toFixed(4)]);
+  const rows = Object.entries(r.metrics).map(([id2, v]) => [id2, formatNumber(v.value), v.normalized.toFixed(4)]);
   const head = ["metric", "value", "score"];
   const w = head.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));
   const line = (cells) => `  ${cells[0].padEnd(w[0])}  ${cells[1].padStart(w[1])}  ${cells[2].padStart(w[2])}`;
@@ -29810,9 +39369,9 @@ function formatMetricsTable(file, r, skipped) {
   return `${text2.join("\n")}
 `;
 }
-function missing2(id) {
-  if (id === "weighted_efficiency") return "needs latency, length or weight on every link";
-  if (id === "demand_served") return "needs traffic demands";
+function missing2(id2) {
+  if (id2 === "weighted_efficiency") return "needs latency, length or weight on every link";
+  if (id2 === "demand_served") return "needs traffic demands";
   return "not applicable";
 }
 var HELP7, NOTE2, metricsCommand;
@@ -29859,41 +39418,1038 @@ Exit codes: 0 computed, 1 the design could not be read, 2 usage error.
       summary: "compute the robustness metrics of one design (raw and normalised)",
       help: HELP7,
       async run(args, io) {
-        const parsed = parseCommandArgs("metrics", args, {
+        const parsed2 = parseCommandArgs("metrics", args, {
           only: { type: "string" },
           json: { type: "boolean" },
           format: { type: "string" },
           "latency-budget": { type: "string" }
         });
-        if (parsed.positionals.length !== 1) {
+        if (parsed2.positionals.length !== 1) {
           throw new UsageError("metrics needs exactly one FILE", "netbrace metrics designs/core.net.yaml");
         }
-        const file = parsed.positionals[0];
-        const requested = parsed.values.only === void 0 ? metrics : parsed.values.only.split(",").map((s) => s.trim()).filter(Boolean).map((id) => getMetric(id));
+        const file = parsed2.positionals[0];
+        const requested = parsed2.values.only === void 0 ? metrics : parsed2.values.only.split(",").map((s) => s.trim()).filter(Boolean).map((id2) => getMetric(id2));
         if (requested.length === 0) throw new UsageError("--only needs at least one metric id", `known metrics: ${metrics.map((m) => m.id).join(", ")}`);
         const options = {};
-        const budget = parsed.values["latency-budget"];
+        const budget = parsed2.values["latency-budget"];
         if (budget !== void 0) {
           const b = Number(budget);
           if (!(b > 0) || !Number.isFinite(b)) throw new UsageError(`--latency-budget must be a positive number, not "${budget}"`, "e.g. --latency-budget 1.5");
           options.latencyBudget = b;
         }
         const read = { cwd: io.cwd };
-        if (parsed.values.format !== void 0) read.format = parseFormatName(parsed.values.format);
+        if (parsed2.values.format !== void 0) read.format = parseFormatName(parsed2.values.format);
         const g = compileTopology(readDesign(file, read));
         const applicable = requested.filter((m) => m.appliesTo(g));
         const skipped = requested.filter((m) => !m.appliesTo(g)).map((m) => m.id);
-        if (parsed.values.only !== void 0) {
-          for (const id of skipped) io.stderr(`netbrace: ${id} does not apply to ${file}: ${missing2(id)}
+        if (parsed2.values.only !== void 0) {
+          for (const id2 of skipped) io.stderr(`netbrace: ${id2} does not apply to ${file}: ${missing2(id2)}
 `);
         }
         const result = computeMetrics(g, applicable, options);
-        if (parsed.values.json) io.stdout(`${JSON.stringify(result, null, 2)}
+        if (parsed2.values.json) io.stdout(`${JSON.stringify(result, null, 2)}
 `);
         else io.stdout(`${formatMetricsTable(file, result, skipped)}
 ${NOTE2}`);
         return 0;
       }
+    };
+  }
+});
+
+// src/shell/one-design.ts
+import path7 from "node:path";
+function relative(from, cwd, p) {
+  const rel = path7.relative(from, path7.resolve(cwd, p));
+  if (rel === "" || rel.startsWith("..") || path7.isAbsolute(rel)) throw new UsageError(`${p} is not inside ${from === cwd ? "the working directory" : "the repository"}`);
+  return rel.split(path7.sep).join("/");
+}
+async function commit(root, ref) {
+  if (/^[0-9a-f]{40}$/.test(ref) && !await revParse(root, ref)) await ensureCommit(root, ref);
+  const sha = await revParse(root, ref);
+  if (!sha) throw new UsageError(`"${ref}" is not a commit in this repository`, "check the ref (git fetch it first if it is remote)");
+  return sha;
+}
+async function judgeOneDesign(file, v, io, views) {
+  const threads = wholeNumber("--threads", v.threads, 1, 256);
+  const seed = wholeNumber("--seed", v.seed, 0, 4294967295);
+  const request = { policySource: "base", mode: "block", eventKind: "local", worktree: true, ...views };
+  if (seed !== void 0) request.seed = seed;
+  if (threads !== void 0) request.threads = threads;
+  const evaluate = threads !== void 0 && threads > 1 ? (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) : void 0;
+  const root = await repoRoot(io.cwd);
+  let deps;
+  let top;
+  if (root === null) {
+    if (v.base !== void 0) throw new UsageError("--base needs a git repository", "run it inside the repository, or leave --base out");
+    top = io.cwd;
+    deps = { listChanged: () => [], listAll: () => [], readAt: (_rev, p) => readInside(io.cwd, p) };
+  } else {
+    top = root;
+    deps = gitDeps(root);
+    const headSha = await revParse(root, "HEAD");
+    if (v.base !== void 0) {
+      const b = await commit(root, v.base);
+      request.base = (headSha && await mergeBase(root, b, headSha)) ?? b;
+    } else if (headSha) request.base = headSha;
+  }
+  if (evaluate) deps = { ...deps, evaluate };
+  const rel = relative(top, io.cwd, file);
+  request.paths = [rel];
+  if (v.policy !== void 0) request.policyPath = relative(top, io.cwd, v.policy);
+  const { report } = await runGate(request, deps);
+  const f = report.files.find((x) => x.path === rel);
+  if (!f) throw new UsageError(`${file} was not judged`, "give the path of a design file");
+  return { report, file: f, full: path7.resolve(io.cwd, file) };
+}
+var ONE_DESIGN_OPTIONS;
+var init_one_design = __esm({
+  "src/shell/one-design.ts"() {
+    "use strict";
+    init_errors();
+    init_pool();
+    init_run_gate();
+    init_git();
+    init_workspace();
+    init_args();
+    ONE_DESIGN_OPTIONS = {
+      base: { type: "string" },
+      policy: { type: "string" },
+      seed: { type: "string" },
+      threads: { type: "string" }
+    };
+  }
+});
+
+// src/shell/commands/map.ts
+import { mkdir as mkdir3, writeFile as writeFile3 } from "node:fs/promises";
+import path8 from "node:path";
+async function run3(args, io) {
+  const { values, positionals } = parseCommandArgs("map", args, { ...ONE_DESIGN_OPTIONS, svg: { type: "string" } });
+  const [file, ...extra] = positionals;
+  if (file === void 0) throw new UsageError("map needs a design FILE", "netbrace map designs/backbone.net.yaml --svg backbone.svg");
+  if (extra.length) throw new UsageError(`map takes one FILE, got ${positionals.length}`, "run it once per file");
+  if (values.svg === void 0) throw new UsageError("map needs --svg OUT, the file to write", "e.g. --svg backbone.svg");
+  const { file: f } = await judgeOneDesign(file, values, io, { map: true, mend: "failing" });
+  if (f.error) {
+    io.stderr(`${oneLine(file)}:${f.error.line || 1}:${f.error.column || 1}: ${oneLine(f.error.message)}
+`);
+    return 1;
+  }
+  const map = f.map;
+  if (!map || "omitted" in map) {
+    io.stderr(`netbrace map: no map of ${oneLine(file)}: ${map ? oneLine(map.omitted) : "the design could not be drawn"}
+`);
+    return 1;
+  }
+  const svg = `<?xml version="1.0" encoding="UTF-8"?>
+${renderMapSvg(map, mapHighlights(f), { idPrefix: "nb-map", title: `Map of ${f.path}` })}
+`;
+  const out = path8.resolve(io.cwd, values.svg);
+  await mkdir3(path8.dirname(out), { recursive: true });
+  await writeFile3(out, svg);
+  const changed = map.links.filter((l) => l.side !== "both").length + map.nodes.filter((n) => n.side !== "both").length;
+  io.stdout(
+    `map of ${oneLine(f.path)}: ${map.nodes.length} sites, ${map.links.length} links (${map.layout === "geographic" ? "at their coordinates" : "force-directed layout"})${changed ? `, ${changed} element${changed === 1 ? "" : "s"} changed` : ""}; written to ${oneLine(values.svg)}
+`
+  );
+  return 0;
+}
+var HELP8, mapCommand;
+var init_map = __esm({
+  "src/shell/commands/map.ts"() {
+    "use strict";
+    init_errors();
+    init_map_svg();
+    init_escape();
+    init_args();
+    init_one_design();
+    HELP8 = `Usage: netbrace map FILE --svg OUT [--base REF] [options]
+
+Draws one design as a map and writes it as SVG: sites at their coordinates (a projection
+fitted to the design's extent) or, without coordinates, a seeded force-directed layout.
+Against the base: removed links dashed, added links doubled, new bridges thick and marked,
+cut sites as diamonds (new ones filled), shared-risk groups whose loss strands sites under
+a wide band, the weakest removal sequence numbered, and the links of the first "what would
+mend it" suggestion dotted. Every element has a title (name, id, line). The file has no
+script and loads nothing; the same inputs give the same bytes.
+
+The design is judged as "netbrace check FILE" judges it: in a git repository the file on
+disk against HEAD (or against where it left --base REF), under the policy; outside one,
+on its own.
+
+Options:
+  --svg OUT        where the SVG goes (required)
+  --base REF       compare with REF (default: HEAD in a git repository; none outside)
+  --policy FILE    the policy (default .netbrace.yaml at the repository root, else built-in)
+  --seed S         seed of the random challenges (default: the policy's)
+  --threads N      worker threads (results do not depend on N)
+
+Examples:
+  netbrace map designs/backbone.net.yaml --svg backbone.svg
+  netbrace map designs/backbone.net.yaml --base main --svg change.svg
+  netbrace map lab.graphml --svg lab.svg --threads 2
+
+Exit codes:
+  0  the map was written
+  1  FILE could not be read (the message gives file:line:col), or it is too large to draw
+  2  usage or configuration error (bad option, broken policy); nothing was written
+`;
+    mapCommand = {
+      name: "map",
+      summary: "draw one design as an SVG map: the change, its weak points, and what would mend it",
+      help: HELP8,
+      run: run3
+    };
+  }
+});
+
+// src/shell/commands/mend.ts
+import { mkdir as mkdir4, readFile, writeFile as writeFile4 } from "node:fs/promises";
+import path9 from "node:path";
+function reportNumber(_key, value2) {
+  if (typeof value2 !== "number") return value2;
+  if (!Number.isFinite(value2)) return null;
+  if (Number.isInteger(value2)) return value2;
+  const rounded = Number(value2.toPrecision(REPORT_DIGITS));
+  return Object.is(rounded, -0) ? 0 : rounded;
+}
+async function run4(args, io) {
+  const { values, positionals } = parseCommandArgs("mend", args, {
+    ...ONE_DESIGN_OPTIONS,
+    json: { type: "boolean" },
+    apply: { type: "string" },
+    out: { type: "string" }
+  });
+  const [file, ...extra] = positionals;
+  if (file === void 0) throw new UsageError("mend needs a design FILE", "netbrace mend designs/backbone.net.yaml --base main");
+  if (extra.length) throw new UsageError(`mend takes one FILE, got ${positionals.length}`, "run it once per file");
+  const apply = wholeNumber("--apply", values.apply, 1);
+  if (apply === void 0 !== (values.out === void 0)) throw new UsageError("--apply N and --out FILE go together", "e.g. --apply 1 --out mended.net.yaml");
+  const { file: f, full } = await judgeOneDesign(file, values, io, { map: false, mend: "always" });
+  if (f.error) {
+    io.stderr(`${oneLine(file)}:${f.error.line || 1}:${f.error.column || 1}: ${oneLine(f.error.message)}
+`);
+    return 1;
+  }
+  const m = f.mend;
+  if (values.json) io.stdout(`${JSON.stringify(m ?? null, reportNumber, 2)}
+`);
+  else io.stdout(renderMendText(f));
+  if (!m) return 0;
+  const holdsAlready = m.targets.length === 0 && !f.findings.some((x) => x.severity === "fail");
+  if (apply !== void 0) {
+    const s = m.suggestions[apply - 1];
+    if (!s) throw new UsageError(`there is no suggestion ${apply}`, m.suggestions.length ? `choose 1 to ${m.suggestions.length}` : "there are no suggestions");
+    const text2 = await readFile(full, "utf8");
+    const format = f.format;
+    const t = parseDesign(text2, f.path, format ? { format } : {});
+    const out = path9.resolve(io.cwd, values.out);
+    const edited = applyToText(text2, t.format, t, s);
+    await mkdir4(path9.dirname(out), { recursive: true });
+    await writeFile4(out, edited);
+    io.stderr(`suggestion ${apply} applied: ${oneLine(values.out)} written${s.holds ? "" : " (it does not hold on its own)"}
+`);
+    return s.holds ? 0 : 1;
+  }
+  return holdsAlready || m.suggestions.some((s) => s.holds) ? 0 : 1;
+}
+var HELP9, mendCommand;
+var init_mend = __esm({
+  "src/shell/commands/mend.ts"() {
+    "use strict";
+    init_errors();
+    init_apply();
+    init_escape();
+    init_mend_text();
+    init_report();
+    init_parse();
+    init_args();
+    init_one_design();
+    HELP9 = `Usage: netbrace mend FILE [--base REF] [--json] [--apply N --out FILE2] [options]
+
+What would mend a design: the smallest, cheapest sets of added links (and, as the
+alternative, elements to harden) that remove its new single points of failure and lift
+its missed floors and regressions back within the policy. Each suggestion says what it
+fixes, its length or cost, and R̄ (the mean area of the policy's envelopes) before and
+after, and is judged again by the same engine, policy and seed as "check" (common random
+numbers with the base), so "holds" means check passes once it is applied.
+
+Candidate links come from the list the policy names (mend.candidates), else from site
+pairs within mend.max-km, length = great-circle distance × mend.route-factor (1.3 by
+default, common practice). Methods: the Eswaran–Tarjan lower bound on the links needed
+(bridge-tree leaves), an exact search for the fewest links that remove the new bridges
+and cut sites, candidates ranked by Ghosh & Boyd's algebraic-connectivity gradient, and
+a greedy search on R̄ per km judged by the engine.
+
+The design is judged as "netbrace check FILE" judges it: in a git repository the file on
+disk against HEAD (or against where it left --base REF); outside one, on its own.
+
+Options:
+  --base REF       compare with REF (default: HEAD in a git repository; none outside)
+  --policy FILE    the policy (default .netbrace.yaml at the repository root, else built-in)
+  --seed S         seed of the random challenges (default: the policy's)
+  --threads N      worker threads (results do not depend on N)
+  --json           print the mend part of the JSON report ({targets, bounds, candidates,
+                   suggestions, ...}) instead of text
+  --apply N        write the design with suggestion N applied to --out (our formats only)
+  --out FILE2      where --apply writes (never the design itself unless you name it)
+
+Examples:
+  netbrace mend designs/backbone.net.yaml --base main
+  netbrace mend designs/backbone.net.yaml --base main --json | jq '.suggestions[0]'
+  netbrace mend designs/backbone.net.yaml --base main --apply 1 --out designs/backbone.net.yaml
+
+netbrace informs engineering judgement; a suggestion is a topology-level hint, not a route
+survey or a cost estimate.
+
+Exit codes:
+  0  the design holds already, or a suggestion that holds was found (and written, with --apply)
+  1  no suggestion holds, or FILE could not be read (the message gives file:line:col)
+  2  usage or configuration error (bad option, broken policy, --apply on another format)
+`;
+    mendCommand = {
+      name: "mend",
+      summary: "what would mend a design: added links or hardened elements, each judged again",
+      help: HELP9,
+      run: run4
+    };
+  }
+});
+
+// src/topology/write-shared.ts
+function designLosses(t, losses, has = {}) {
+  if (!has.demands && t.demands.length > 0) losses.add("demands", "demand", t.demands.length);
+  if (!has.groups) {
+    const described = t.riskGroups.filter((g) => g.description !== void 0).length;
+    losses.add("risk group descriptions", "group", described);
+  }
+  if (!has.budget && t.latencyBudget !== void 0) losses.add(`the latency budget (${t.latencyBudget})`);
+  if (!has.metadata && Object.keys(t.metadata).length > 0) losses.add("the design’s metadata", "key", Object.keys(t.metadata).length);
+  if (!has.name && t.name !== void 0) losses.add(`the network’s name ("${t.name}")`);
+  if (!has.name && t.description !== void 0) losses.add("the network’s description");
+}
+function derivedIds(t) {
+  const seen = /* @__PURE__ */ new Map();
+  return t.links.map((l) => {
+    const pair2 = l.source <= l.target ? `${l.source}\0${l.target}` : `${l.target}\0${l.source}`;
+    const k = (seen.get(pair2) ?? 0) + 1;
+    seen.set(pair2, k);
+    const base = `${l.source}—${l.target}`;
+    return l.id === (k > 1 ? `${base}#${k}` : base);
+  });
+}
+function valueKind(v) {
+  if (typeof v === "boolean") return "boolean";
+  if (typeof v === "number") return Number.isSafeInteger(v) ? "integer" : "number";
+  if (typeof v === "string") return "string";
+  return "other";
+}
+function attributeColumns(rows) {
+  const columns = /* @__PURE__ */ new Map();
+  for (const r of rows) {
+    for (const [k, v] of Object.entries(r)) {
+      const kinds = columns.get(k) ?? /* @__PURE__ */ new Set();
+      kinds.add(valueKind(v));
+      columns.set(k, kinds);
+    }
+  }
+  return columns;
+}
+function numberText(n) {
+  return Object.is(n, -0) ? "0" : String(n);
+}
+var Losses;
+var init_write_shared = __esm({
+  "src/topology/write-shared.ts"() {
+    "use strict";
+    Losses = class {
+      counts = /* @__PURE__ */ new Map();
+      /** `what` is counted `n` times; `unit` names one of what is counted (for the sentence). */
+      add(what, unit = "", n = 1) {
+        if (n <= 0) return;
+        const c = this.counts.get(what);
+        if (c) c.n += n;
+        else this.counts.set(what, { n, unit });
+      }
+      list() {
+        return [...this.counts].map(([what, { n, unit }]) => unit ? `${what} (${n} ${unit}${n === 1 ? "" : "s"})` : what);
+      }
+    };
+  }
+});
+
+// src/topology/write-csv.ts
+function cell(v) {
+  const s = typeof v === "number" ? numberText(v) : typeof v === "boolean" ? v ? "true" : "false" : String(v);
+  return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+function writeCsv(t) {
+  const losses = new Losses();
+  designLosses(t, losses);
+  const linked = new Set(t.links.flatMap((l) => [l.source, l.target]));
+  losses.add("nodes without links", "node", t.nodes.filter((n) => !linked.has(n.id)).length);
+  losses.add("node labels", "node", t.nodes.filter((n) => n.label !== void 0).length);
+  losses.add("node kinds", "node", t.nodes.filter((n) => n.kind !== void 0).length);
+  losses.add("site coordinates", "node", t.nodes.filter((n) => n.lat !== void 0).length);
+  losses.add("hardened nodes", "node", t.nodes.filter((n) => n.hardened).length);
+  losses.add("node attributes", "node", t.nodes.filter((n) => Object.keys(n.attrs).length > 0).length);
+  const order = firstAppearance(t);
+  const kept = t.nodes.filter((n) => linked.has(n.id));
+  if (kept.some((n, i) => n.id !== order[i])) losses.add("the order of the nodes (read back in order of first appearance)");
+  for (const n of t.nodes) {
+    if (n.id !== n.id.trim() || n.id === "") losses.add("node ids with spaces at either end (trimmed when read back)", "node");
+  }
+  const derived = derivedIds(t);
+  const fixed = [];
+  const col = (name, get) => {
+    if (t.links.some((_, i) => get(i) !== void 0)) fixed.push([name, get]);
+  };
+  col("id", (i) => derived[i] ? void 0 : t.links[i].id);
+  col("length_km", (i) => t.links[i].length);
+  col("latency_ms", (i) => t.links[i].latency);
+  col("capacity_gbps", (i) => t.links[i].capacity);
+  col("weight", (i) => t.links[i].weight);
+  col("risk_groups", (i) => t.links[i].riskGroups.length > 0 ? t.links[i].riskGroups.join(";") : void 0);
+  col("hardened", (i) => t.links[i].hardened ? "true" : void 0);
+  for (const l of t.links) if (l.riskGroups.some((g) => g.includes(";"))) losses.add('risk group ids that hold ";" (split when read back)', "link");
+  const taken = /* @__PURE__ */ new Set(["source", "target", ...fixed.map(([n]) => n)]);
+  const extra = [];
+  for (const l of t.links) {
+    for (const [k, v] of Object.entries(l.attrs)) {
+      if (extra.includes(k)) continue;
+      if (v !== null && typeof v === "object") continue;
+      if (taken.has(k.toLowerCase())) continue;
+      taken.add(k.toLowerCase());
+      extra.push(k);
+    }
+  }
+  let typed2 = false;
+  for (const l of t.links) {
+    for (const [k, v] of Object.entries(l.attrs)) {
+      if (v !== null && typeof v === "object") losses.add(`link attribute "${k}" (a list or map)`, "link");
+      else if (!extra.includes(k)) losses.add(`link attribute "${k}" (the name of a column netbrace writes)`, "link");
+      else if (typeof v !== "string") typed2 = true;
+    }
+  }
+  if (typed2) losses.add("the types of link attributes (every cell is text)");
+  const header2 = ["source", "target", ...fixed.map(([n]) => n), ...extra];
+  const rows = [header2.map(cell).join(",")];
+  t.links.forEach((l, i) => {
+    const cells = [l.source, l.target, ...fixed.map(([, get]) => get(i)), ...extra.map((k) => l.attrs[k])];
+    rows.push(cells.map((v) => v === void 0 || v === null ? "" : cell(v)).join(","));
+  });
+  return { text: `${rows.join("\n")}
+`, lost: losses.list() };
+}
+function firstAppearance(t) {
+  const seen = /* @__PURE__ */ new Set();
+  for (const l of t.links) for (const e of [l.source, l.target]) seen.add(e);
+  return [...seen];
+}
+var init_write_csv = __esm({
+  "src/topology/write-csv.ts"() {
+    "use strict";
+    init_write_shared();
+  }
+});
+
+// src/topology/write-geojson.ts
+function routeOf(v) {
+  if (v === null || typeof v !== "object") return void 0;
+  const g = v;
+  const line = (c) => Array.isArray(c) && c.length >= 2 && c.every(isPosition);
+  if (g.type === "LineString" && line(g.coordinates)) return { type: "LineString", coordinates: g.coordinates };
+  if (g.type === "MultiLineString" && Array.isArray(g.coordinates) && g.coordinates.length > 0 && g.coordinates.every(line)) return { type: "MultiLineString", coordinates: g.coordinates };
+  return void 0;
+}
+function writeGeojson(t) {
+  const missing3 = t.nodes.filter((n) => n.lat === void 0 || n.lon === void 0);
+  if (missing3.length > 0) {
+    const shown2 = missing3.slice(0, 5).map((n) => `"${n.id}"`).join(", ") + (missing3.length > 5 ? `, and ${missing3.length - 5} more` : "");
+    throw new DesignError(
+      `cannot write GeoJSON: ${missing3.length} of ${t.nodes.length} node${t.nodes.length === 1 ? "" : "s"} ha${missing3.length === 1 ? "s" : "ve"} no coordinates (${shown2})`,
+      { file: t.file, line: missing3[0].pos.line, column: missing3[0].pos.column },
+      "GeoJSON places every site on the map: give each node a site (lat, lon; Latitude/Longitude in GraphML and GML), or convert to another format"
+    );
+  }
+  const losses = new Losses();
+  designLosses(t, losses, { metadata: true, name: true });
+  const where = new Map(t.nodes.map((n) => [n.id, [n.lon, n.lat]]));
+  const features = [];
+  const feature = (id2, properties, geometry) => features.push(`    {"type": "Feature", ${id2 !== void 0 ? `"id": ${JSON.stringify(id2)}, ` : ""}"properties": ${JSON.stringify(properties)},
+     "geometry": ${JSON.stringify(geometry)}}`);
+  for (const n of t.nodes) {
+    const p = {};
+    if (n.label !== void 0) p.label = n.label;
+    if (n.kind !== void 0) p.kind = n.kind;
+    if (n.hardened) p.hardened = true;
+    for (const [k, v] of Object.entries(n.attrs)) {
+      if (NODE_RESERVED.has(k.toLowerCase()) || k.toLowerCase() === "name" && n.label === void 0) losses.add(`node attribute "${k}" (a name the GeoJSON reader takes for a field)`, "node");
+      else p[k] = v;
+    }
+    feature(n.id, p, { type: "Point", coordinates: where.get(n.id) });
+  }
+  const derived = derivedIds(t);
+  let straight = 0;
+  t.links.forEach((l, i) => {
+    const p = {};
+    if (!derived[i]) p.id = l.id;
+    p.source = l.source;
+    p.target = l.target;
+    if (l.length !== void 0) p.length_km = l.length;
+    if (l.latency !== void 0) p.latency_ms = l.latency;
+    if (l.capacity !== void 0) p.capacity_gbps = l.capacity;
+    if (l.weight !== void 0) p.weight = l.weight;
+    if (l.riskGroups.length > 0) p.risk_groups = [...l.riskGroups];
+    if (l.hardened) p.hardened = true;
+    for (const [k, v] of Object.entries(l.attrs)) {
+      if (k === "route" || k === "route_km") continue;
+      if (linkReserved(k)) losses.add(`link attribute "${k}" (a name the GeoJSON reader takes for a field)`, "link");
+      else p[k] = v;
+    }
+    const route = routeOf(l.attrs.route);
+    if (route === void 0) {
+      straight++;
+      p[ROUTE_KNOWN] = false;
+    }
+    feature(void 0, p, route ?? { type: "LineString", coordinates: [where.get(l.source), where.get(l.target)] });
+    if (l.length === void 0) losses.add("unknown lengths (the reader measures every line: a link without a length gets the length of its line)", "link");
+  });
+  const notes = straight > 0 ? [`${straight} link${straight === 1 ? " is" : "s are"} drawn as straight lines between their sites (no route was known): they do not show where the cables run, are marked ${ROUTE_KNOWN}: false and take no part in the search for shared corridors`] : [];
+  const head = ["{", '  "type": "FeatureCollection",'];
+  if (t.name !== void 0) head.push(`  "name": ${JSON.stringify(t.name)},`);
+  if (t.description !== void 0) head.push(`  "description": ${JSON.stringify(t.description)},`);
+  if (Object.keys(t.metadata).length > 0) head.push(`  "metadata": ${JSON.stringify(t.metadata)},`);
+  const text2 = `${head.join("\n")}
+  "features": [
+${features.join(",\n")}
+  ]
+}
+`;
+  return { text: text2, lost: losses.list(), notes };
+}
+var NODE_RESERVED, LINK_RESERVED, linkReserved, isPosition;
+var init_write_geojson = __esm({
+  "src/topology/write-geojson.ts"() {
+    "use strict";
+    init_errors();
+    init_attributes();
+    init_geojson();
+    init_write_shared();
+    NODE_RESERVED = /* @__PURE__ */ new Set(["id", "label", "type", "kind", "hardened"]);
+    LINK_RESERVED = /* @__PURE__ */ new Set(["id", "source", "target", "from", "to"]);
+    linkReserved = (k) => LINK_RESERVED.has(k.toLowerCase()) || isLinkField(k) && k.toLowerCase() !== "linkspeedraw";
+    isPosition = (p) => Array.isArray(p) && p.length >= 2 && typeof p[0] === "number" && typeof p[1] === "number" && Math.abs(p[0]) <= 180 && Math.abs(p[1]) <= 90;
+  }
+});
+
+// src/topology/write-gml.ts
+function gmlString(s) {
+  let out = '"';
+  for (const ch of s) {
+    const c = ch.codePointAt(0);
+    if (ch === "&") out += "&amp;";
+    else if (ch === '"') out += "&quot;";
+    else if (c < 32 || c >= 127) out += `&#${c};`;
+    else out += ch;
+  }
+  return `${out}"`;
+}
+function pair(key, v, indent, depth = 0) {
+  if (!KEY2.test(key)) return { why: "a name GML keys cannot have" };
+  if (typeof v === "number") return { lines: [`${indent}${key} ${numberText(v)}`] };
+  if (typeof v === "string") return { lines: [`${indent}${key} ${gmlString(v)}`] };
+  if (typeof v === "boolean") return { lines: [`${indent}${key} ${v ? 1 : 0}`] };
+  if (Array.isArray(v)) {
+    if (v.length < 2) return { why: "a list of fewer than two values" };
+    const lines = [];
+    for (const x of v) {
+      if (Array.isArray(x)) return { why: "a list of lists" };
+      const p = pair(key, x, indent, depth);
+      if ("why" in p) return p;
+      lines.push(...p.lines);
+    }
+    return { lines };
+  }
+  if (v !== null && typeof v === "object") {
+    if (key === "graph" || depth > 20) return { why: "a nested graph" };
+    const lines = [`${indent}${key} [`];
+    for (const [k, x] of Object.entries(v)) {
+      if (k === "graph") return { why: "a nested graph" };
+      const p = pair(k, x, `${indent}  `, depth + 1);
+      if ("why" in p) return p;
+      lines.push(...p.lines);
+    }
+    lines.push(`${indent}]`);
+    return { lines };
+  }
+  return { why: "an empty value" };
+}
+function writeGml(t) {
+  const losses = new Losses();
+  designLosses(t, losses, { metadata: true, name: true });
+  const out = ["graph ["];
+  const flagsAsNumbers = /* @__PURE__ */ new Set();
+  const put = (key, v, indent, what, written, mapped) => {
+    if (written.has(key.toLowerCase())) return void losses.add(`${what} attribute "${key}" (the name of a field netbrace writes)`, what);
+    if (Array.isArray(v) && mapped(key)) return void losses.add(`${what} attribute "${key}" (a list under a name netbrace reads)`, what);
+    const p = pair(key, v, indent);
+    if ("why" in p) return void losses.add(`${what} attribute "${key}" (${p.why})`, what);
+    if (typeof v === "boolean") flagsAsNumbers.add(`${what} attribute "${key}"`);
+    written.add(key.toLowerCase());
+    out.push(...p.lines);
+  };
+  const pairs = new Set(t.links.map((l) => l.source <= l.target ? `${l.source}\0${l.target}` : `${l.target}\0${l.source}`));
+  if (pairs.size < t.links.length) out.push("  multigraph 1");
+  const graphKeys = /* @__PURE__ */ new Set(["node", "edge", "directed", "multigraph"]);
+  if (t.name !== void 0) {
+    out.push(`  label ${gmlString(t.name)}`);
+    graphKeys.add("label");
+  }
+  if (t.description !== void 0) {
+    out.push(`  description ${gmlString(t.description)}`);
+    graphKeys.add("description");
+  }
+  for (const [k, v] of Object.entries(t.metadata)) {
+    if (graphKeys.has(k.toLowerCase())) {
+      if (!(k === "label" && v === t.name) && !(k === "description" && v === t.description)) losses.add(`design metadata "${k}" (a key GML uses itself)`);
+      continue;
+    }
+    put(k, v, "  ", "design metadata", graphKeys, () => false);
+  }
+  for (const n of t.nodes) {
+    out.push("  node [", `    id ${id(n.id)}`);
+    const written = /* @__PURE__ */ new Set(["id"]);
+    const field = (k, line) => {
+      written.add(k.toLowerCase());
+      out.push(`    ${line}`);
+    };
+    if (n.label !== void 0) field("label", `label ${gmlString(n.label)}`);
+    if (n.kind !== void 0) {
+      field("type", `type ${gmlString(n.kind)}`);
+      written.add("kind");
+    }
+    if (n.lat !== void 0 && n.lon !== void 0) {
+      field("Latitude", `Latitude ${numberText(n.lat)}`);
+      field("Longitude", `Longitude ${numberText(n.lon)}`);
+    }
+    if (n.hardened) field("hardened", "hardened 1");
+    for (const [k, v] of Object.entries(n.attrs)) put(k, v, "    ", "node", written, isNodeField);
+    out.push("  ]");
+  }
+  const derived = derivedIds(t);
+  t.links.forEach((l, i) => {
+    out.push("  edge [");
+    const written = /* @__PURE__ */ new Set(["id", "source", "target"]);
+    if (!derived[i]) out.push(`    id ${id(l.id)}`);
+    out.push(`    source ${id(l.source)}`, `    target ${id(l.target)}`);
+    const field = (k, v) => {
+      written.add(k.toLowerCase());
+      out.push(`    ${k} ${v}`);
+    };
+    if (l.length !== void 0) field("length_km", numberText(l.length));
+    if (l.latency !== void 0) field("latency_ms", numberText(l.latency));
+    if (l.capacity !== void 0) field("capacity_gbps", numberText(l.capacity));
+    if (l.weight !== void 0) field("weight", numberText(l.weight));
+    if (l.riskGroups.length > 0) {
+      field("risk_groups", gmlString(l.riskGroups.join(";")));
+      if (l.riskGroups.some((g) => g.includes(";"))) losses.add('risk group ids that hold ";" (split when read back)', "link");
+    }
+    if (l.hardened) field("hardened", "1");
+    for (const [k, v] of Object.entries(l.attrs)) put(k, v, "    ", "link", written, (k2) => isLinkField(k2) || k2 === "id" || k2 === "source" || k2 === "target");
+    out.push("  ]");
+  });
+  out.push("]", "");
+  for (const f of flagsAsNumbers) losses.add(`true/false of ${f} (written as 1/0)`);
+  return { text: out.join("\n"), lost: losses.list() };
+}
+var KEY2, WHOLE2, id;
+var init_write_gml = __esm({
+  "src/topology/write-gml.ts"() {
+    "use strict";
+    init_attributes();
+    init_write_shared();
+    KEY2 = /^[A-Za-z_][A-Za-z0-9_]*$/;
+    WHOLE2 = /^(0|[1-9][0-9]{0,14})$/;
+    id = (s) => WHOLE2.test(s) ? s : gmlString(s);
+  }
+});
+
+// src/topology/write-graphml.ts
+function esc6(s) {
+  return s.replace(/[&<>"'\r\n\t]/g, (c) => XML_ESCAPES[c] ?? `&#${c.charCodeAt(0)};`);
+}
+function attrType(kinds) {
+  if ([...kinds].every((k) => k === "boolean")) return "boolean";
+  if ([...kinds].every((k) => k === "integer")) return "long";
+  if ([...kinds].every((k) => k === "integer" || k === "number")) return "double";
+  return "string";
+}
+function valueText(v) {
+  return typeof v === "number" ? numberText(v) : String(v);
+}
+function writeGraphml(t) {
+  const losses = new Losses();
+  designLosses(t, losses, { metadata: true, name: true });
+  const plain2 = (v) => v === null || typeof v !== "object" && typeof v !== "function";
+  const nodeRows = t.nodes.map((n) => {
+    const row = {};
+    if (n.label !== void 0) row.label = n.label;
+    if (n.kind !== void 0) row.type = n.kind;
+    if (n.lat !== void 0 && n.lon !== void 0) [row.Latitude, row.Longitude] = [n.lat, n.lon];
+    if (n.hardened) row.hardened = true;
+    return row;
+  });
+  const linkRows = t.links.map((l) => {
+    const row = {};
+    if (l.length !== void 0) row.length_km = l.length;
+    if (l.latency !== void 0) row.latency_ms = l.latency;
+    if (l.capacity !== void 0) row.capacity_gbps = l.capacity;
+    if (l.weight !== void 0) row.weight = l.weight;
+    if (l.riskGroups.length > 0) row.risk_groups = l.riskGroups.join(";");
+    if (l.hardened) row.hardened = true;
+    return row;
+  });
+  const addAttrs = (rows, attrs, what) => {
+    rows.forEach((row, i) => {
+      const taken = new Set(Object.keys(row).map((k) => k.toLowerCase()));
+      if (what === "node" && "type" in row) taken.add("kind");
+      for (const [k, v] of Object.entries(attrs[i])) {
+        if (!plain2(v)) losses.add(`${what} attribute "${k}" (a list or map)`, what);
+        else if (v === null) losses.add(`${what} attribute "${k}" (empty)`, what);
+        else if (taken.has(k.toLowerCase())) losses.add(`${what} attribute "${k}" (the name of a field netbrace writes)`, what);
+        else row[k] = v;
+      }
+    });
+  };
+  addAttrs(nodeRows, t.nodes.map((n) => n.attrs), "node");
+  addAttrs(linkRows, t.links.map((l) => l.attrs), "link");
+  for (const l of t.links) if (l.riskGroups.some((g) => g.includes(";"))) losses.add('risk group ids that hold ";" (split when read back)', "link");
+  const graphRow = {};
+  if (t.name !== void 0) graphRow.label = t.name;
+  if (t.description !== void 0) graphRow.description = t.description;
+  for (const [k, v] of Object.entries(t.metadata)) {
+    if (!plain2(v) || v === null) losses.add(`design metadata "${k}" (a list or map)`);
+    else if (k in graphRow) {
+      if (graphRow[k] !== v) losses.add(`design metadata "${k}" (the network's ${k === "label" ? "name" : k} is written there)`);
+    } else graphRow[k] = v;
+  }
+  const keys = [];
+  const columns = (domain, prefix, rows) => [...attributeColumns(rows)].map(([name, kinds], i) => {
+    const c = { id: `${prefix}${i}`, name, type: attrType(kinds) };
+    keys.push(`  <key id="${c.id}" for="${domain}" attr.name="${esc6(name)}" attr.type="${c.type}"/>`);
+    if (c.type === "string" && [...kinds].some((k) => k !== "string")) losses.add(`the type of ${domain} attribute "${name}" (numbers and text mixed: all written as text)`);
+    return c;
+  });
+  const gCols = columns("graph", "g", [graphRow]);
+  const nCols = columns("node", "n", nodeRows);
+  const eCols = columns("edge", "e", linkRows);
+  const body = [];
+  const data = (cols, row, indent) => {
+    for (const c of cols) {
+      if (!(c.name in row)) continue;
+      const text3 = valueText(row[c.name]);
+      if (NOT_XML.test(text3)) {
+        losses.add(`values with control characters XML cannot hold`, "value");
+        continue;
+      }
+      body.push(`${indent}<data key="${c.id}">${esc6(text3)}</data>`);
+    }
+  };
+  const header2 = `<graph edgedefault="undirected">`;
+  data(gCols, graphRow, "    ");
+  t.nodes.forEach((n, i) => {
+    const inner = [];
+    const mark = body.length;
+    data(nCols, nodeRows[i], "      ");
+    inner.push(...body.splice(mark));
+    body.push(inner.length > 0 ? `    <node id="${esc6(n.id)}">
+${inner.join("\n")}
+    </node>` : `    <node id="${esc6(n.id)}"/>`);
+  });
+  const derived = derivedIds(t);
+  t.links.forEach((l, i) => {
+    const mark = body.length;
+    data(eCols, linkRows[i], "      ");
+    const inner = body.splice(mark);
+    const open = `    <edge${derived[i] ? "" : ` id="${esc6(l.id)}"`} source="${esc6(l.source)}" target="${esc6(l.target)}"`;
+    body.push(inner.length > 0 ? `${open}>
+${inner.join("\n")}
+    </edge>` : `${open}/>`);
+  });
+  const text2 = [
+    '<?xml version="1.0" encoding="UTF-8"?>',
+    '<graphml xmlns="http://graphml.graphdrawing.org/xmlns" xmlns:xsi="http://www.w3.org/2001/XMLSchema-instance" xsi:schemaLocation="http://graphml.graphdrawing.org/xmlns http://graphml.graphdrawing.org/xmlns/1.0/graphml.xsd">',
+    ...keys,
+    `  ${header2}`,
+    ...body,
+    "  </graph>",
+    "</graphml>",
+    ""
+  ].join("\n");
+  return { text: text2, lost: losses.list() };
+}
+var XML_ESCAPES, NOT_XML;
+var init_write_graphml = __esm({
+  "src/topology/write-graphml.ts"() {
+    "use strict";
+    init_write_shared();
+    XML_ESCAPES = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&apos;" };
+    NOT_XML = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]/;
+  }
+});
+
+// src/topology/write-native.ts
+function nativeDocument(t) {
+  const doc = {};
+  if (t.name !== void 0 || t.description !== void 0) {
+    doc.network = { ...t.name !== void 0 ? { name: t.name } : {}, ...t.description !== void 0 ? { description: t.description } : {} };
+  }
+  if (t.latencyBudget !== void 0) doc.latency_budget = t.latencyBudget;
+  doc.nodes = t.nodes.map((n) => ({
+    id: n.id,
+    ...n.label !== void 0 ? { label: n.label } : {},
+    ...n.kind !== void 0 ? { kind: n.kind } : {},
+    ...n.lat !== void 0 && n.lon !== void 0 ? { site: { lat: n.lat, lon: n.lon } } : {},
+    ...n.hardened ? { hardened: true } : {},
+    ...Object.keys(n.attrs).length > 0 ? { attributes: n.attrs } : {}
+  }));
+  doc.links = t.links.map((l) => ({
+    between: [l.source, l.target],
+    id: l.id,
+    ...l.length !== void 0 ? { length_km: l.length } : {},
+    ...l.latency !== void 0 ? { latency_ms: l.latency } : {},
+    ...l.capacity !== void 0 ? { capacity_gbps: l.capacity } : {},
+    ...l.weight !== void 0 ? { weight: l.weight } : {},
+    ...l.riskGroups.length > 0 ? { risk_groups: [...l.riskGroups] } : {},
+    ...l.hardened ? { hardened: true } : {},
+    ...Object.keys(l.attrs).length > 0 ? { attributes: l.attrs } : {}
+  }));
+  if (t.riskGroups.length > 0) doc.risk_groups = t.riskGroups.map((r) => ({ id: r.id, ...r.description !== void 0 ? { description: r.description } : {} }));
+  if (t.demands.length > 0) doc.demands = t.demands.map((d) => ({ between: [d.source, d.target], volume: d.volume }));
+  if (Object.keys(t.metadata).length > 0) doc.metadata = t.metadata;
+  return doc;
+}
+function writeNativeJson(t) {
+  return `${JSON.stringify(nativeDocument(t), null, 2)}
+`;
+}
+function writeNativeYaml(t, comment) {
+  const doc = new import_yaml8.Document(nativeDocument(t));
+  (0, import_yaml8.visit)(doc, {
+    Pair(_, pair2) {
+      if ((0, import_yaml8.isPair)(pair2) && (0, import_yaml8.isScalar)(pair2.key) && pair2.key.value === "site" && (0, import_yaml8.isMap)(pair2.value)) pair2.value.flow = true;
+    },
+    Seq(_, seq) {
+      if (seq.items.length <= 16 && seq.items.every((i) => (0, import_yaml8.isScalar)(i) || (0, import_yaml8.isSeq)(i) && i.items.every((j) => (0, import_yaml8.isScalar)(j)))) seq.flow = true;
+    }
+  });
+  if (comment !== void 0) doc.commentBefore = comment.split("\n").map((s) => ` ${s}`).join("\n");
+  return doc.toString({ lineWidth: 0, flowCollectionPadding: false });
+}
+var import_yaml8;
+var init_write_native = __esm({
+  "src/topology/write-native.ts"() {
+    "use strict";
+    import_yaml8 = __toESM(require_dist(), 1);
+  }
+});
+
+// src/topology/convert.ts
+function estimateLengths(t) {
+  const at = new Map(t.nodes.map((n) => [n.id, n]));
+  let estimated = 0;
+  let unestimated = 0;
+  let overWeight = 0;
+  const links = t.links.map((l) => {
+    if (l.length !== void 0) return l;
+    const [a, b] = [at.get(l.source), at.get(l.target)];
+    if (a.lat === void 0 || a.lon === void 0 || b.lat === void 0 || b.lon === void 0) {
+      unestimated++;
+      return l;
+    }
+    estimated++;
+    if (l.weight !== void 0) overWeight++;
+    const km = Math.round(greatCircleKm(a.lat, a.lon, b.lat, b.lon) * 1e3) / 1e3;
+    return { ...l, length: km, attrs: { ...l.attrs, [LENGTH_ESTIMATED]: true } };
+  });
+  return { topology: { ...t, links }, estimated, unestimated, overWeight };
+}
+function writeDesign(t, format) {
+  switch (format) {
+    case "native-yaml":
+      return { text: writeNativeYaml(t, `netbrace design, converted from ${t.file}`), lost: [] };
+    case "native-json":
+      return { text: writeNativeJson(t), lost: [] };
+    case "graphml":
+      return writeGraphml(t);
+    case "gml":
+      return writeGml(t);
+    case "csv":
+      return writeCsv(t);
+    case "geojson":
+      return writeGeojson(t);
+  }
+}
+function convertDesign(t, format, options = {}) {
+  const { topology, ...counts } = options.estimateLengths === false ? { topology: t, estimated: 0, unestimated: 0, overWeight: 0 } : estimateLengths(t);
+  return { ...writeDesign(topology, format), ...counts };
+}
+var LENGTH_ESTIMATED;
+var init_convert = __esm({
+  "src/topology/convert.ts"() {
+    "use strict";
+    init_geodesy();
+    init_write_csv();
+    init_write_geojson();
+    init_write_gml();
+    init_write_graphml();
+    init_write_native();
+    LENGTH_ESTIMATED = "length_estimated";
+  }
+});
+
+// src/shell/commands/convert.ts
+import { writeFile as writeFile5 } from "node:fs/promises";
+import path10 from "node:path";
+async function run5(args, io) {
+  const { values, positionals } = parseCommandArgs("convert", args, {
+    to: { type: "string" },
+    out: { type: "string" },
+    force: { type: "boolean" },
+    "no-estimate": { type: "boolean" },
+    format: { type: "string" },
+    "max-bytes": { type: "string" },
+    "max-elements": { type: "string" }
+  });
+  if (positionals.length !== 1) throw new UsageError(positionals.length === 0 ? "convert needs a FILE" : "convert takes one FILE", "netbrace convert designs/core.gml --to yaml");
+  const file = positionals[0];
+  const implied = values.out !== void 0 ? detectFormat(values.out) : void 0;
+  const to = values.to !== void 0 ? parseFormatName(values.to) : implied;
+  if (to === void 0) {
+    throw new UsageError(values.out !== void 0 ? `cannot tell the format from --out ${values.out}` : "convert needs --to FORMAT", `give --to (${FORMAT_CHOICES})`);
+  }
+  if (implied !== void 0 && !compatible(to, implied)) {
+    throw new UsageError(`--out ${values.out} would be read as ${NAME[implied]}, not ${NAME[to]}`, "give the file the extension of its format (.net.yaml, .net.json, .graphml, .gml, .csv, .geojson)");
+  }
+  const options = { cwd: io.cwd };
+  if (values.format !== void 0) options.format = parseFormatName(values.format);
+  const maxBytes = wholeNumber("--max-bytes", values["max-bytes"], 1);
+  if (maxBytes !== void 0) options.maxBytes = maxBytes;
+  const maxElements = wholeNumber("--max-elements", values["max-elements"], 1);
+  if (maxElements !== void 0) options.maxElements = maxElements;
+  let t;
+  let result;
+  try {
+    t = readDesign(file, options);
+    result = convertDesign(t, to, { estimateLengths: !values["no-estimate"] });
+  } catch (e) {
+    if (!isNetbraceError(e) || e.kind !== "design" && e.kind !== "limit") throw e;
+    io.stderr(`${formatDiagnostic(e)}
+`);
+    return 1;
+  }
+  const report = [];
+  const say = (line) => report.push(line);
+  for (const w of t.warnings.slice(0, 12)) say(`warning: ${formatDiagnostic(w)}`);
+  if (t.warnings.length > 12) say(`warning: … and ${t.warnings.length - 12} more (netbrace inspect --json lists all)`);
+  if (result.estimated > 0) {
+    say(
+      `${result.estimated} link length${result.estimated === 1 ? "" : "s"} estimated from the sites' coordinates (great-circle distance, a lower bound of the route; marked ${LENGTH_ESTIMATED}: true)`
+    );
+  }
+  if (result.overWeight > 0) say(`  ${result.overWeight} of them had only a weight: the weighted metrics now use these lengths instead`);
+  if (result.unestimated > 0) say(`${result.unestimated} link${result.unestimated === 1 ? "" : "s"} left without a length: a site has no coordinates`);
+  if (result.lost.length > 0) say(`not kept by ${NAME[to]}: ${result.lost.join("; ")}`);
+  for (const n of result.notes ?? []) say(`note: ${n}`);
+  if (values.out === void 0) {
+    io.stdout(result.text);
+    if (report.length > 0) io.stderr(`${report.join("\n")}
+`);
+    return 0;
+  }
+  const target = path10.resolve(io.cwd, values.out);
+  try {
+    await writeFile5(target, result.text, { flag: values.force ? "w" : "wx" });
+  } catch (e) {
+    const code = e.code;
+    if (code === "EEXIST") throw new UsageError(`${values.out} exists already; convert never overwrites a file`, "give another --out FILE, or add --force");
+    if (code === "ENOENT") throw new UsageError(`cannot write ${values.out}: its folder does not exist`);
+    if (code === "EISDIR") throw new UsageError(`cannot write ${values.out}: it is a folder`);
+    throw e;
+  }
+  io.stdout(`wrote ${values.out} (${NAME[to]}): ${t.nodes.length} node${t.nodes.length === 1 ? "" : "s"}, ${t.links.length} link${t.links.length === 1 ? "" : "s"}
+`);
+  if (report.length > 0) io.stdout(`${report.join("\n")}
+`);
+  return 0;
+}
+var NAME, HELP10, compatible, convertCommand;
+var init_convert2 = __esm({
+  "src/shell/commands/convert.ts"() {
+    "use strict";
+    init_errors();
+    init_convert();
+    init_detect();
+    init_args();
+    init_read_design();
+    NAME = {
+      "native-yaml": "netbrace design (YAML)",
+      "native-json": "netbrace design (JSON)",
+      graphml: "GraphML",
+      gml: "GML",
+      csv: "CSV edge list",
+      geojson: "GeoJSON"
+    };
+    HELP10 = `Usage: netbrace convert FILE --to FORMAT [--out FILE] [--force] [--no-estimate]
+                        [--format F] [--max-bytes N] [--max-elements N]
+
+Writes the design in FILE in another format netbrace reads (${FORMAT_CHOICES}): to
+standard output, or to --out FILE (then --to may be left out: the extension tells). Ids,
+labels, kinds, coordinates (the Topology Zoo's Latitude/Longitude included), hardened flags,
+risk groups, lengths, latencies, capacities, weights and other attributes are kept where the
+format can hold them, and the command says what it could not keep:
+
+  yaml, json  everything (other attributes under "attributes:")
+  graphml     no demands, risk group descriptions or latency budget; attributes that
+              are lists or maps (a GeoJSON route) are left out
+  gml         as GraphML; flags become 1/0, attribute names must be letters, digits and _
+  csv         links only: no node labels, kinds, coordinates or attributes, no nodes
+              without links, no demands, name or metadata; every cell is text
+  geojson     needs coordinates on every node (refused otherwise); no demands, risk group
+              descriptions or latency budget; links without a drawn route become straight
+              lines between their sites, which say nothing about where the cables run
+
+A link without a length gets the great-circle distance between its sites, marked with the
+attribute ${LENGTH_ESTIMATED}: true, and the command says how many. That is the shortest
+possible path: real routes are longer, so check estimated lengths before relying on them.
+
+Options:
+  --to FORMAT       the format to write: ${FORMAT_CHOICES}
+  --out FILE        write FILE instead of standard output; never overwrites a file
+  --force           overwrite --out FILE if it exists
+  --no-estimate     leave missing lengths missing
+  --format F        read FILE as F instead of by its extension
+  --max-bytes N     refuse files larger than N bytes (default 20971520 = 20 MB)
+  --max-elements N  refuse designs with more than N nodes + links (default 2000000)
+
+Examples:
+  netbrace convert zoo/Abilene.gml --out designs/abilene.net.yaml
+  netbrace convert designs/core.net.yaml --to geojson --out core.geojson
+  netbrace convert links.csv --to graphml > links.graphml
+
+Exit codes:
+  0  written
+  1  FILE could not be read, or FORMAT cannot hold the design (GeoJSON without coordinates)
+  2  usage error, or --out FILE exists (use --force)
+`;
+    compatible = (a, b) => a === b || a === "native-json" && b === "native-yaml";
+    convertCommand = {
+      name: "convert",
+      summary: "write a design in another format (YAML/JSON, GraphML, GML, CSV, GeoJSON)",
+      help: HELP10,
+      run: run5
     };
   }
 });
@@ -29910,7 +40466,10 @@ var init_commands = __esm({
     init_init();
     init_demo();
     init_metrics();
-    commands = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand, metricsCommand];
+    init_map();
+    init_mend();
+    init_convert2();
+    commands = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand, metricsCommand, mapCommand, mendCommand, convertCommand];
   }
 });
 

@@ -78,8 +78,16 @@ function removeUnit(g, mask, kind, u) {
     }
   }
 }
+function countAt(x, count, eligible) {
+  const c = Math.min(x * count, eligible);
+  const whole = Math.round(c);
+  return Math.abs(c - whole) <= 1e-9 * Math.max(1, whole) ? whole : c;
+}
 function stepsAt(x, count, eligible) {
-  return Math.min(Math.round(x * count), eligible);
+  return Math.ceil(countAt(x, count, eligible));
+}
+function lerp(a, b, w) {
+  return w === 0 || a === b ? a : a + w * (b - a);
 }
 function countOnes(a) {
   let c = 0;
@@ -530,8 +538,8 @@ function randomOrderPlan(g, kind, params) {
   const count = unitCount(g, kind);
   const eligible = eligibleUnits(g, kind);
   const available = countOnes(eligible);
-  const stepTable = Int32Array.from(x, (xi) => stepsAt(xi, count, available));
-  const maxUnits = stepTable.length ? stepTable[stepTable.length - 1] : 0;
+  const stepTable = Float64Array.from(x, (xi) => countAt(xi, count, available));
+  const maxUnits = stepTable.length ? Math.ceil(stepTable[stepTable.length - 1]) : 0;
   const idHash = hashIds(unitKeys(g, kind));
   const seedW = seedWord(params.seed);
   const full = new Int32Array(count);
@@ -1953,6 +1961,15 @@ function createDijkstra(capacity) {
   };
 }
 
+// src/topology/geodesy.ts
+function greatCircleKm(lat1, lon1, lat2, lon2) {
+  const rad = Math.PI / 180;
+  const dLat = (lat2 - lat1) * rad;
+  const dLon = (lon2 - lon1) * rad;
+  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
+  return 2 * 6371.0088 * Math.asin(Math.min(1, Math.sqrt(a)));
+}
+
 // src/metrics/kernels/link-cost.ts
 function complete(values) {
   if (!values || values.length === 0) return false;
@@ -1967,13 +1984,6 @@ function chooseLinkCost(g) {
     return { kind, unit, values, min };
   };
   return pick("latency", "ms", g.latency) ?? pick("length", "km", g.length) ?? pick("weight", "", g.weight);
-}
-function greatCircleKm(lat1, lon1, lat2, lon2) {
-  const rad = Math.PI / 180;
-  const dLat = (lat2 - lat1) * rad;
-  const dLon = (lon2 - lon1) * rad;
-  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
-  return 2 * 6371.0088 * Math.asin(Math.min(1, Math.sqrt(a)));
 }
 var FIBRE_MS_PER_KM = 49e-4;
 
@@ -1991,6 +2001,7 @@ var demandServed = {
   normalization: "served volume / total demand volume; raw = served volume.",
   cost: "linear",
   appliesTo: (g) => totalVolume(g) > 0,
+  needs: { what: "demands", hint: "declare demands (a volume > 0 between two sites) in the design, or take demand_served out of the r-value" },
   create(g, options = {}) {
     const total = totalVolume(g);
     const budget = options.latencyBudget ?? g.latencyBudget;
@@ -2756,6 +2767,7 @@ var weightedEfficiency = {
   normalization: "E_w / E_ideal, ideal = every pair joined directly (great-circle distance, at least the cheapest link).",
   cost: "all-pairs",
   appliesTo: (g) => chooseLinkCost(g) !== null,
+  needs: { what: "a latency, length or weight > 0 on every link", hint: "give every link latency_ms or length_km, or take weighted_efficiency out of the r-value" },
   create(g) {
     const cost = chooseLinkCost(g);
     if (!cost) throw new RangeError("weighted_efficiency needs latency, length or weight on every link");
@@ -2829,8 +2841,26 @@ function combineR(spec, values) {
   }
   return sum / weight;
 }
+function unsupportedMetric(g, spec) {
+  for (const m of spec.metrics) {
+    const metric = getMetric(m.id);
+    if (metric.appliesTo(g)) continue;
+    const needs = metric.needs ?? { what: "data this design does not have", hint: `take ${m.id} out of the r-value` };
+    return { id: m.id, message: `metric ${m.id} needs ${needs.what}`, hint: needs.hint };
+  }
+  return void 0;
+}
+var UnsupportedMetricError = class extends RangeError {
+  constructor(problem) {
+    super(`${problem.message} — ${problem.hint}`);
+    this.problem = problem;
+  }
+  problem;
+};
 function createRValue(g, spec, options) {
   validateRSpec(spec);
+  const problem = unsupportedMetric(g, spec);
+  if (problem) throw new UnsupportedMetricError(problem);
   const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, options));
   const values = new Float64Array(evaluators.length);
   return (mask) => {
@@ -3141,26 +3171,51 @@ var StepEvaluator = class {
   get stepsAreFree() {
     return this.ufr !== null;
   }
-  /** R after steps[j] units of `order` are removed, for each j. */
+  /**
+   * R after steps[j] units of `order` are removed, for each j (non-decreasing). A real count c
+   * (a fraction of the units, units.ts countAt) reads R linearly between ⌊c⌋ and ⌈c⌉ removals of
+   * this same order, so `order` must hold ⌈c⌉ units; a whole count is R there exactly.
+   */
   at(kind, order, len, steps, out) {
     if (this.ufr !== null) {
       const curve = connectivityCurve(this.g, kind, order, len, this.ws);
-      for (let j = 0; j < steps.length; j++) out[j] = this.ufr(curve, steps[j]);
+      for (let j = 0; j < steps.length; j++) {
+        const c = steps[j];
+        const lo = Math.floor(c);
+        const r = this.ufr(curve, lo);
+        out[j] = c === lo ? r : lerp(r, this.ufr(curve, lo + 1), c - lo);
+      }
       return out;
     }
     const mask = this.mask;
     mask.node.fill(0);
     mask.link.fill(0);
-    let applied = 0;
+    const memo = this.memo;
+    memo.applied = 0;
+    memo.kLast = -1;
+    memo.kPrev = -1;
     for (let j = 0; j < steps.length; j++) {
-      if (j > 0 && steps[j] === steps[j - 1]) {
-        out[j] = out[j - 1];
-        continue;
-      }
-      while (applied < steps[j]) removeUnit(this.g, mask, kind, order[applied++]);
-      out[j] = this.rfn(mask);
+      const c = steps[j];
+      const lo = Math.floor(c);
+      const r = this.rAfter(kind, order, lo);
+      out[j] = c === lo ? r : lerp(r, this.rAfter(kind, order, lo + 1), c - lo);
     }
     return out;
+  }
+  memo = { applied: 0, kLast: -1, rLast: 0, kPrev: -1, rPrev: 0 };
+  /** R after k removals of `order` on the shared mask; k never below the last two asked. */
+  rAfter(kind, order, k) {
+    const memo = this.memo;
+    if (k === memo.kLast) return memo.rLast;
+    if (k === memo.kPrev) return memo.rPrev;
+    if (k < memo.applied) throw new RangeError(`removal counts must not decrease (${k} after ${memo.applied})`);
+    while (memo.applied < k) removeUnit(this.g, this.mask, kind, order[memo.applied++]);
+    const r = this.rfn(this.mask);
+    memo.kPrev = memo.kLast;
+    memo.rPrev = memo.rLast;
+    memo.kLast = k;
+    memo.rLast = r;
+    return r;
   }
   /** R after every step k = 0..len. */
   everyStep(kind, order, len) {
@@ -3177,7 +3232,7 @@ function runTask(g, plan, task) {
     case "band": {
       const bp = bandPlan(g, params);
       const order = new Int32Array(bp.maxUnits);
-      const steps = new Int32Array(bp.x.length);
+      const steps = new Float64Array(bp.x.length);
       const values = [];
       for (let r = task.from; r < task.to; r++) {
         const len = bp.realize(r, order, steps);

@@ -1,7 +1,10 @@
 import { type DesignEvaluation, type EvaluationSpec } from './envelope/evaluate.js';
 import { type CompactGraph } from './graph/compact.js';
+import { type PairedCut } from './gate/budget.js';
+import { type DesignSide } from './gate/compare.js';
 import type { FilePolicy } from './policy/types.js';
 import { type Report } from './report/report.js';
+import type { Topology } from './topology/model.js';
 export { joinReports } from './gate/join.js';
 /** A revision as git names it, or "worktree" for the files on disk. */
 export type Revision = string;
@@ -54,6 +57,9 @@ export interface GateRequest {
     };
     /** Scheduled runs judge every design against thresholds only. */
     eventKind?: 'pull-request' | 'push' | 'schedule' | 'local';
+    /** Draw each design's map (default true), and search what would mend a design: when it fails (default), always, or never. */
+    map?: boolean;
+    mend?: 'failing' | 'always' | 'never';
 }
 export interface GateResult {
     report: Report;
@@ -72,4 +78,5 @@ export declare function inPart(path: string, part: {
  * design and pairs it across base and head: gate/budget.ts).
  */
 export declare function evaluationSpecs(fp: FilePolicy, seed: number): EvaluationSpec[];
+export declare function evaluateGraph(g: CompactGraph, topology: Topology | undefined, specs: EvaluationSpec[], cuts: readonly PairedCut[], request: GateRequest, deps: GateDeps): Promise<DesignSide>;
 export declare function runGate(request: GateRequest, deps: GateDeps): Promise<GateResult>;

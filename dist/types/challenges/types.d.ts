@@ -17,9 +17,11 @@ export interface BandPlan {
     maxUnits: number;
     /**
      * Writes realization r's removal order (unit indices) into `order` and, for each grid point j,
-     * the number of units removed there into `steps[j]` (non-decreasing). Returns the order length.
+     * the number of units removed there into `steps[j]` (non-decreasing). A count may be real (a
+     * fraction x of N units is x·N, units.ts countAt): the engine then reads R between the two
+     * neighbouring whole counts, which the order must both hold. Returns the order length.
      */
-    realize(r: number, order: Int32Array, steps: Int32Array): number;
+    realize(r: number, order: Int32Array, steps: Float64Array): number;
     /** What one realization stands for when reported, e.g. the epicentre's id. */
     label?(r: number): string;
 }

@@ -1,6 +1,6 @@
 import type { CompactGraph } from '../graph/compact.js';
 import type { BandPlan, ResolvedParams } from '../challenges/types.js';
-import type { Contingency, ElementKind, RValueSpec, WorstCase } from './types.js';
+import type { ChallengeName, Contingency, ElementKind, RValueSpec, WorstCase } from './types.js';
 import { type RFunction } from './r-value.js';
 /**
  * Realizations per band task: about 32 tasks per band (so two or four threads stay evenly
@@ -22,8 +22,13 @@ export interface PlannedChallenge {
 export interface EvaluationPlan {
     r: RValueSpec;
     items: PlannedChallenge[];
-    /** Reasons the evaluation as a whole was reduced or challenges skipped. */
+    /** Reasons the evaluation as a whole was reduced. */
     degraded: string[];
+    /** Challenges left out because the design lacks what they need (coordinates, risk groups). */
+    notApplicable?: {
+        challenge: ChallengeName;
+        reason: string;
+    }[];
     /** Estimated work in element visits after any reduction (see evaluate.ts). */
     work: number;
 }
@@ -62,7 +67,7 @@ export declare function realizationCount(g: CompactGraph, it: PlannedChallenge):
 export declare function bandPlan(g: CompactGraph, params: ResolvedParams): BandPlan;
 /** The unit kind a challenge removes. */
 export declare function challengeKind(g: CompactGraph, params: ResolvedParams): ElementKind;
-/** Steps of an attack: round(until · count), capped by what may be removed. */
+/** Steps of an attack: ⌈until · count⌉ (R at `until` may be read between two steps), capped by what may be removed. */
 export declare function attackSteps(g: CompactGraph, kind: ElementKind, until: number): number;
 /** Evaluates R along one removal order at the given step counts (non-decreasing). */
 export declare class StepEvaluator {
@@ -75,8 +80,15 @@ export declare class StepEvaluator {
     get r(): RFunction;
     /** True when every step is free (union–find curve). */
     get stepsAreFree(): boolean;
-    /** R after steps[j] units of `order` are removed, for each j. */
+    /**
+     * R after steps[j] units of `order` are removed, for each j (non-decreasing). A real count c
+     * (a fraction of the units, units.ts countAt) reads R linearly between ⌊c⌋ and ⌈c⌉ removals of
+     * this same order, so `order` must hold ⌈c⌉ units; a whole count is R there exactly.
+     */
     at(kind: ElementKind, order: ArrayLike<number>, len: number, steps: ArrayLike<number>, out: Float64Array): Float64Array;
+    private readonly memo;
+    /** R after k removals of `order` on the shared mask; k never below the last two asked. */
+    private rAfter;
     /** R after every step k = 0..len. */
     everyStep(kind: ElementKind, order: ArrayLike<number>, len: number): Float64Array;
 }

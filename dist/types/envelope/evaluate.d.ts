@@ -1,4 +1,4 @@
-import type { CompactGraph } from '../graph/compact.js';
+import { type CompactGraph } from '../graph/compact.js';
 import type { Evaluation, StructureSummary } from '../report/report.js';
 import type { ChallengeName, ChallengeParams, RValueSpec } from './types.js';
 import { type EvaluationPlan, type Task, type TaskResult } from './engine.js';

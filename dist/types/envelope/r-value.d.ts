@@ -1,12 +1,29 @@
 import type { CompactGraph } from '../graph/compact.js';
 import type { Mask } from '../graph/mask.js';
-import type { MetricOptions } from '../metrics/types.js';
+import type { MetricId, MetricOptions } from '../metrics/types.js';
 import type { RValueSpec } from './types.js';
 import type { ConnectivityCurve } from './union-find.js';
 export type RFunction = (mask: Mask) => number;
 export declare function validateRSpec(spec: RValueSpec): void;
 /** Combines normalized values in spec order; the one formula every path uses, so results agree bit for bit. */
 export declare function combineR(spec: RValueSpec, values: ArrayLike<number>): number;
+/** A metric of R that this design cannot support: its id, what it needs and how to fix it. */
+export interface UnsupportedMetric {
+    id: MetricId;
+    message: string;
+    hint: string;
+}
+/**
+ * The first metric of R that does not apply to the design (Metric.appliesTo), in spec order;
+ * undefined when R can be computed. A metric that does not apply would score 0 on every state,
+ * which reads as "no robustness" rather than "cannot be computed", so callers refuse instead.
+ */
+export declare function unsupportedMetric(g: CompactGraph, spec: RValueSpec): UnsupportedMetric | undefined;
+/** Thrown by createRValue for a design one of R's metrics does not apply to. */
+export declare class UnsupportedMetricError extends RangeError {
+    readonly problem: UnsupportedMetric;
+    constructor(problem: UnsupportedMetric);
+}
 export declare function createRValue(g: CompactGraph, spec: RValueSpec, options?: MetricOptions): RFunction;
 /**
  * When R uses only largest_component and pair_connectivity, R after k removals follows from a

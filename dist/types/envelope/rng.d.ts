@@ -18,7 +18,7 @@ export interface OrderWorkspace {
 export declare function createOrderWorkspace(capacity: number): OrderWorkspace;
 /**
  * The random removal order of one realization: the eligible elements (eligible[i] === 1, or all
- * when `eligible` is null) in ascending key order; equal keys (a 2^-32 event) keep file order.
+ * when `eligible` is null) in ascending key order; equal keys (a 2^-32 event) keep index (canonical id) order.
  * Writes into `out` and returns how many elements it holds. A stable LSD radix sort (11, 11 and
  * 10 bits) keeps the cost linear: O(n) per realization instead of O(n log n).
  */

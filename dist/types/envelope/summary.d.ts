@@ -15,5 +15,13 @@ export declare function gridStats(samples: readonly Float64Array[], points: numb
 export declare function gridMean(values: ArrayLike<number>): number;
 export declare function area(median: ArrayLike<number>): number;
 export declare function spread(lo: ArrayLike<number>, hi: ArrayLike<number>): number;
+/**
+ * Area of an attack curve (values[k] = R after k removals) up to a real count c of removals:
+ * the right-endpoint sum Σ_{k=1..⌊c⌋} R(k) + (c − ⌊c⌋)·R(c), over c, with R(c) interpolated
+ * between ⌊c⌋ and ⌈c⌉. For whole c it is the mean of values[1..c] (Schneider's R when c = N and
+ * R is the LCC share: Schneider et al., PNAS 108:3838, 2011); between whole counts it moves
+ * continuously with c instead of jumping by a whole step. c = 0: R of the intact design.
+ */
+export declare function attackArea(values: ArrayLike<number>, c: number): number;
 /** Attack gap over the grid points x_1..x_K the attack reaches: mean of q_lo − R_attack. */
 export declare function attackGap(lo: ArrayLike<number>, attackAtGrid: ArrayLike<number | null>): number | null;

@@ -1,4 +1,5 @@
 import type { MetricId } from '../metrics/types.js';
+import type { Consequence, ReportElement } from '../report/report.js';
 /** How normalized metrics combine into R. */
 export interface RValueSpec {
     metrics: {
@@ -44,6 +45,10 @@ export interface RemovalSequence {
     realization?: number;
     /** What the realization stands for, e.g. the epicentre site of a regional failure. */
     label?: string;
+    /** The elements with their lines and labels (added by the gate for the report). */
+    located?: ReportElement[];
+    /** What the whole sequence costs (added by the gate for the report). */
+    consequence?: Consequence;
 }
 export interface WorstCase extends RemovalSequence {
     k: number;
@@ -95,13 +100,17 @@ export interface Envelope {
 export interface AttackCurve {
     challenge: ChallengeName;
     kind: ElementKind;
-    /** x = k / N (or L, or groups) for k = 0..K. */
+    /** x = k / N (or L, or groups) for k = 0..K, K = ⌈until·N⌉ (values at a fraction in between are interpolated). */
     x: number[];
     values: number[];
     sequence: string[];
     /** Units the x axis divides by: N, L or the number of groups (always set by the engine). */
     count?: number;
-    /** Mean of values[1..K] (Schneider's R when the attack runs to the end and R is the LCC share). */
+    /**
+     * Mean of values[1..K] up to `until`·count removals (Schneider's R when the attack runs to the
+     * end and R is the LCC share); when until·count is not whole, the last step counts with its
+     * fraction and R there is interpolated (summary.ts attackArea).
+     */
     area: number;
     worstCase?: WorstCase;
 }
@@ -112,10 +121,11 @@ export interface Contingency {
     /** Cases evaluated and cases that exist. */
     evaluated: number;
     total: number;
-    /** The worst cases, ascending by R. */
+    /** The worst cases, ascending by R (`located`: the elements with lines and labels, added by the gate). */
     worst: {
         elements: string[];
         value: number;
+        located?: ReportElement[];
     }[];
     /** Lowest R over evaluated cases. */
     min: number;

@@ -1,5 +1,7 @@
-import type { Finding, FileReport, FileStatus, ReportElement } from '../report/report.js';
+import type { Finding, FileReport, FileStatus } from '../report/report.js';
 import type { FilePolicy } from '../policy/types.js';
+import { type ElementChanges } from './describe.js';
+import { type Matching } from './rename.js';
 import { type DesignSide } from './measure.js';
 export type { DesignSide };
 export interface LocatedProblem {
@@ -19,7 +21,9 @@ export interface CompareInput {
     base?: DesignSide;
     /** The head could not be read (parse error): the file fails with this line. */
     headError?: LocatedProblem;
-    /** The base could not be read: the head is judged on thresholds only. */
+    /** The head was read, but R cannot be computed on it (a metric of R does not apply): the file fails. */
+    headUnsupported?: LocatedProblem;
+    /** The base could not be read (or R cannot be computed on it): the head is judged on thresholds only. */
     baseError?: LocatedProblem;
 }
 /**
@@ -28,11 +32,8 @@ export interface CompareInput {
  * approximation; common practice).
  */
 export declare const REDUCED_MARGIN_SE = 2;
-/** Nodes (by id) and links (by stable key) that the change added or removed. */
-export declare function elementChanges(base: DesignSide, head: DesignSide): {
-    added: ReportElement[];
-    removed: ReportElement[];
-};
+/** Nodes, links and shared-risk groups that the change added, removed, renamed or (un)hardened. */
+export declare function elementChanges(base: DesignSide, head: DesignSide, matching?: Matching): ElementChanges;
 /** Which status a judged file has, from its findings (only fail-severity findings change it). */
 export declare function fileStatus(change: CompareInput['change'], findings: readonly Finding[]): FileStatus;
 export declare function compareDesign(input: CompareInput): FileReport;

@@ -3,10 +3,13 @@ import type { ElementKind } from '../envelope/types.js';
 import type { CompactGraph } from '../graph/compact.js';
 import type { ReportElement } from '../report/report.js';
 import type { ChallengeDef, Requirement } from '../policy/types.js';
+import type { Topology } from '../topology/model.js';
 /** One side of a comparison: the compiled design and what the engine made of it. */
 export interface DesignSide {
     graph: CompactGraph;
     result: DesignEvaluation;
+    /** The parsed design, for what the change does to its attributes (labels, lengths...). */
+    topology?: Topology;
 }
 export interface Measured {
     base: number | null;
@@ -25,6 +28,8 @@ export interface Measured {
     }[];
     /** Set when the value could not be computed (challenge skipped, too few steps...). */
     missing?: string;
+    /** Set with `missing` when the head lacks what the challenge needs (coordinates, risk groups). */
+    notApplicable?: boolean;
     /**
      * Set when the value comes from incomplete work (N−1 cases or an exact worst-case search
      * cut by the work budget): it may be higher than the true value, so a floor it meets is
@@ -44,7 +49,7 @@ export interface Measured {
 }
 /** Most elements a finding lists. */
 export declare const MAX_ELEMENTS = 10;
-/** Line of an element in the head design, else in the base design, else 0. */
+/** Line (and label) of an element in the head design, else in the base design, else 0. */
 export declare function locate(el: {
     id: string;
     kind: ElementKind;

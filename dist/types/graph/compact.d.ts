@@ -25,10 +25,12 @@ export interface CompactGraph {
     /** Site coordinates in degrees (NaN where unknown), or null when no node has both. */
     readonly lat: Float64Array | null;
     readonly lon: Float64Array | null;
-    /** Element ids in file order; index i ↔ id. */
+    /** Element ids in canonical order (canonical.ts: natural id order); index i ↔ id. */
     readonly nodeIds: readonly string[];
+    /** Human labels of nodes (GraphML/GML `label` or `name`, our format's `label`), else undefined. */
+    readonly nodeLabels: readonly (string | undefined)[];
     readonly linkIds: readonly string[];
-    /** Stable link keys (see TopoLink.key) used to seed random orders. */
+    /** Stable link keys (TopoLink.key; parallel links share theirs out in canonical order) that seed random orders. */
     readonly linkKeys: readonly string[];
     readonly nodeIndex: ReadonlyMap<string, number>;
     readonly linkIndex: ReadonlyMap<string, number>;
@@ -47,7 +49,18 @@ export interface CompactGraph {
     /** Latency budget factor for demand_served, if the design sets one. */
     readonly latencyBudget: number | undefined;
 }
-/** Compile a parsed design into its compact graph. Node and link order follow the file. */
+/**
+ * Compile a parsed design into its compact graph. Nodes, links, groups and demands are numbered
+ * in canonical order (canonical.ts), not file order: the same topology listed in another order
+ * compiles to the same graph, so every result is the same. Lines stay with their elements.
+ */
 export declare function compileTopology(t: Topology): CompactGraph;
 /** Build a compact graph straight from an edge list (tests, generators, benchmarks). */
 export declare function graphFromEdges(n: number, edges: readonly (readonly [number, number])[]): CompactGraph;
+/**
+ * Node indices in the order the file lists them (by source line, then index): for lists a
+ * person reads next to the file. Computations use the canonical index order instead.
+ */
+export declare function nodesByLine(g: CompactGraph, nodes: Iterable<number>): number[];
+/** Link indices in the order the file lists them (by source line, then index). */
+export declare function linksByLine(g: CompactGraph, links: Iterable<number>): number[];

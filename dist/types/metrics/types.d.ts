@@ -47,5 +47,10 @@ export interface Metric {
     readonly cost: CostClass;
     /** False when the design lacks what the metric needs (weights, demands). */
     appliesTo(g: CompactGraph): boolean;
+    /** What appliesTo checks, in words, for the error a design it does not apply to gets. */
+    readonly needs?: {
+        what: string;
+        hint: string;
+    };
     create(g: CompactGraph, options?: MetricOptions): MetricEvaluator;
 }

@@ -80,6 +80,12 @@ export interface SpofRequirement extends RequirementBase {
     kind: 'no-new-spof';
     bridges: boolean;
     cutNodes: boolean;
+    /** Shared-risk groups whose loss strands sites (default on). */
+    riskGroups: boolean;
+    /** What a new weak point hidden by a newly hardened element is (default warn). */
+    hardenedWeakPoints: RemovedSeverity;
+    /** Where hardened-weak-points was written (for loosening errors). */
+    hardenedWhere?: Where;
 }
 export type Requirement = ThresholdRequirement | AreaRequirement | SpreadRequirement | ContingencyRequirement | SpofRequirement;
 export type RequirementKind = Requirement['kind'];
@@ -100,6 +106,8 @@ export interface DesignGlob {
     paths: string[];
     format?: DesignFormat;
     where: Where;
+    /** Where each of `paths` was written (the built-in policy's globs included). */
+    fileWhere: Where[];
 }
 /**
  * The work budget of each design evaluation (head and base alike). Not a floor of the design,
@@ -131,6 +139,20 @@ export interface Scope {
     budget?: Budget;
     where: Where;
 }
+/** How to look for what would mend a failing design (advice only; never changes a verdict). */
+export interface MendSettings {
+    /** Repository path of the planner's candidate-link file. */
+    candidates?: string;
+    /** Generated candidates: great-circle distance × this factor. */
+    routeFactor?: number;
+    /** Generated candidates: most great-circle km between the two sites. */
+    maxKm?: number;
+    /** Most links one suggestion adds. */
+    maxLinks?: number;
+    /** Most engine evaluations per failing design; 0: no search. */
+    evaluations?: number;
+    where?: Where;
+}
 /** One policy file as written (before `inherits` and scopes are applied). */
 export interface PolicyFile {
     path: string;
@@ -161,6 +183,7 @@ export interface PolicyFile {
         where: Where;
     };
     budget?: Budget;
+    mend?: MendSettings;
     scopes: Scope[];
 }
 /** The policy after `inherits` is resolved; scopes still apply per file. */
@@ -181,6 +204,8 @@ export interface Policy {
         where?: Where;
     };
     budget: Budget;
+    /** Mend settings, the inheriting file's keys over the inherited file's. */
+    mend?: MendSettings;
     /** Scopes of every file of the chain, the most basic file's first. */
     scopes: PolicyScope[];
     /** Depth of the file each definition came from (0 = the most basic): a definition may
@@ -205,4 +230,5 @@ export interface FilePolicy {
     removedDesigns: RemovedSeverity;
     budget: ResolvedBudget;
     format?: DesignFormat;
+    mend?: MendSettings;
 }

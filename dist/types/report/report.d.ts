@@ -1,4 +1,6 @@
-import type { AttackCurve, Contingency, Envelope, RValueSpec } from '../envelope/types.js';
+import type { AttackCurve, ChallengeName, Contingency, Envelope, RValueSpec } from '../envelope/types.js';
+import type { DesignMap, OmittedMap } from '../map/types.js';
+import type { MendReport } from '../mend/types.js';
 export declare const REPORT_VERSION = 1;
 export type FileStatus = 'pass' | 'regressed' | 'below-threshold' | 'new' | 'removed' | 'renamed' | 'error';
 export type Severity = 'fail' | 'warn' | 'notice';
@@ -7,6 +9,25 @@ export interface ReportElement {
     kind: 'node' | 'link' | 'group';
     /** 1-based line in the design file (head side unless the element only exists at base). */
     line: number;
+    /** The site's name in the design (GraphML/GML `label` or `name`, our `label`), when it has one. */
+    label?: string;
+}
+/**
+ * What losing an element (or a whole removal sequence) costs, on connectivity alone: the
+ * surviving sites cut off from the largest part and, when the design has demands, the demands
+ * whose two ends no longer share a part (latency budgets are not considered here).
+ */
+export interface Consequence {
+    /** Surviving sites cut off from the largest part, in file order (at most MAX_STRANDED listed). */
+    stranded: ReportElement[];
+    /** How many sites are cut off (the list may be shorter). */
+    strandedCount: number;
+    /** Demands that were connected and lose every path, and how many demands the design has. */
+    demandsLost?: number;
+    demandsTotal?: number;
+    /** Their volume, and the volume of all demands (the design's own unit). */
+    volumeLost?: number;
+    volumeTotal?: number;
 }
 /** One requirement of the policy, judged on one file: the rows of the requirement table. */
 export interface RequirementResult {
@@ -25,25 +46,58 @@ export interface RequirementResult {
     threshold: number | null;
     /** met: fine; missed: below threshold; regressed: dropped beyond tolerance;
      *  within-noise: dropped, but by less than the Monte Carlo error; uncertain: could not be
-     *  judged with enough confidence (never reported as met). */
-    status: 'met' | 'missed' | 'regressed' | 'within-noise' | 'uncertain';
+     *  judged with enough confidence (never reported as met); not-applicable: a tracked value
+     *  (no floor) whose challenge does not apply to the design on either side (no risk groups). */
+    status: 'met' | 'missed' | 'regressed' | 'within-noise' | 'uncertain' | 'not-applicable';
 }
 export interface Finding {
     /** Finding kind; also the SARIF rule id (stable). */
-    rule: 'r-threshold' | 'area-floor' | 'spread-ceiling' | 'n-1' | 'new-bridge' | 'new-cut-node' | 'regression' | 'weakest-sequence' | 'parse-error' | 'removed-design' | 'policy-changed' | 'degraded';
+    rule: 'r-threshold' | 'area-floor' | 'spread-ceiling' | 'n-1' | 'new-bridge' | 'new-cut-node' | 'new-stranding-group' | 'hardened-weak-point' | 'regression' | 'weakest-sequence' | 'parse-error' | 'removed-design' | 'policy-changed' | 'degraded' | 'not-computable';
     /** The requirement id this finding is about, when there is one. */
     requirement?: string;
+    /** The requirement's severity, capped by the regression rule's for a regression. */
     severity: Severity;
+    /**
+     * What the judging found, for a finding about a requirement's value: views title the
+     * finding by it (a drop within the allowance is not "regressed").
+     */
+    status?: FindingStatus;
     message: string;
     base?: number | null;
     head?: number | null;
     delta?: number | null;
     se?: number | null;
+    /** The floor (or ceiling) the head value was judged against. */
+    threshold?: number;
+    /** The drop the regression rule allows for this requirement (head − base beyond it regresses). */
+    allowance?: number;
     /** Elements that cause the finding, in order (a weakest sequence is ordered). */
     elements: ReportElement[];
     /** Line to annotate: the first element's, or the error's. */
     line: number;
     column?: number;
+    /** For a weak point: what losing it costs at head. */
+    consequence?: Consequence;
+}
+/**
+ * missed: the head misses its floor (or can no longer be judged though the base could);
+ * regressed: a drop beyond the allowance; within-allowance / within-noise: a drop that is not a
+ * failure; uncertain: neither proven nor refuted; reduced-work: judged on work the budget cut;
+ * not-computable: a value that is not a finite number.
+ */
+export type FindingStatus = 'missed' | 'regressed' | 'within-allowance' | 'within-noise' | 'uncertain' | 'reduced-work' | 'not-computable';
+/** An attribute of a node or link that the change altered (see FileReport.changes). */
+export interface AttributeChange {
+    id: string;
+    kind: 'node' | 'link' | 'group';
+    /** e.g. "risk groups", "hardened", "length (km)", "latency (ms)", "capacity (Gbit/s)", "coordinates", "label". */
+    attribute: string;
+    /** The value at base and at head, as plain text ("–" when absent). */
+    before: string;
+    after: string;
+    /** 1-based lines of the element at base and at head. */
+    baseLine: number;
+    headLine: number;
 }
 export interface StructureSummary {
     nodes: number;
@@ -61,6 +115,11 @@ export interface Evaluation {
     contingencies: Contingency[];
     /** Reasons the evaluation was reduced by budgets; empty when it ran in full. */
     degraded: string[];
+    /** Challenges that do not apply to this design (it lacks coordinates, risk groups...), with why; absent when all applied. */
+    notApplicable?: {
+        challenge: ChallengeName;
+        reason: string;
+    }[];
 }
 export interface FileReport {
     path: string;
@@ -78,11 +137,28 @@ export interface FileReport {
         line: number;
         column: number;
     };
-    /** Elements added and removed by the change (nodes by id, links by their ends), head lines for added, base lines for removed. */
+    /**
+     * What the change does: elements added and removed (nodes by id or, renamed, by neighbourhood;
+     * links by their ends; shared-risk groups by id or members; head lines for added, base lines
+     * for removed), renamed elements (base → head), elements whose hardened flag the change set or
+     * cleared (head side), and attributes changed on elements both sides have.
+     */
     changes?: {
         added: ReportElement[];
         removed: ReportElement[];
+        renamed?: {
+            from: ReportElement;
+            to: ReportElement;
+        }[];
+        hardened?: (ReportElement & {
+            hardened: boolean;
+        })[];
+        modified?: AttributeChange[];
     };
+    /** Where each site and link is drawn, base and head together (src/map/). */
+    map?: DesignMap | OmittedMap;
+    /** For a failing design: what would mend it (src/mend/). */
+    mend?: MendReport;
 }
 export interface Report {
     version: typeof REPORT_VERSION;
@@ -117,6 +193,22 @@ export interface Report {
     parts?: {
         total: number;
         joined: number[];
+    };
+    /**
+     * The change edits the gate's own configuration: the workflow that runs netbrace (settings
+     * compared with the base's; a weakening fails the check unless the base already allowed it).
+     */
+    configuration?: {
+        workflow: string;
+        changes: {
+            setting: string;
+            base: string;
+            head: string;
+            weakens: boolean;
+            line: number;
+            message: string;
+            severity: Severity;
+        }[];
     };
     /** What the run judged: the changed designs, the given paths, or every design (thresholds only). */
     scope?: 'changed' | 'paths' | 'all';

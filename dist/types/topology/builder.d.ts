@@ -28,6 +28,11 @@ export interface LinkInput {
     riskGroups?: string[];
     hardened?: boolean;
     attrs?: Record<string, unknown>;
+    /**
+     * A directed arc source → target (GraphML `directed`, GML `directed 1`). Links are
+     * undirected: an arc and a later arc the other way between the same nodes are one link.
+     */
+    arc?: boolean;
 }
 export interface BuilderOptions {
     maxElements?: number;
@@ -59,6 +64,10 @@ export declare class TopologyBuilder {
     private readonly riskGroups;
     private readonly riskGroupPos;
     private readonly demands;
+    /** Arcs not yet paired with a reverse arc, by `source\0target`, oldest first. */
+    private readonly openArcs;
+    private directedAt;
+    private mergedArcs;
     constructor(file: string, format: DesignFormat, options?: BuilderOptions);
     get nodeCount(): number;
     hasNode(id: string): boolean;
@@ -70,8 +79,19 @@ export declare class TopologyBuilder {
     private countElement;
     addNode(input: NodeInput): void;
     private requireNode;
-    /** Adds a link; returns false when it was dropped (a self-loop). */
+    /**
+     * Says the file declares direction (`how`, e.g. `edgedefault="directed"`), once; finish()
+     * warns that direction is ignored and how many reverse arcs were merged.
+     */
+    directed(pos: SourcePos, how: string): void;
+    /**
+     * Adds a link; returns false when it was dropped (a self-loop) or merged into the link of
+     * the reverse arc. Arcs pair up in file order, so the links between two nodes are as many
+     * as the arcs in the more frequent direction: u→v with v→u is one link, u→v twice is two.
+     */
     addLink(input: LinkInput): boolean;
+    /** The reverse arc joins its partner's link; values that differ are reported, the first kept. */
+    private mergeArc;
     addRiskGroup(group: RiskGroup): void;
     addDemand(source: string, target: string, volume: number, pos: SourcePos, endPos?: [SourcePos, SourcePos], what?: string): void;
     finish(extra?: {

@@ -16,5 +16,11 @@ export declare function readCsv(text: string, b: TopologyBuilder): Row[];
  * builder's element limit stops the read where it is crossed.
  */
 export declare function csvRows(text: string, b: TopologyBuilder): Generator<Row>;
+/**
+ * Whether a CSV text is an edge list: its first row (the header) names a `source` and a
+ * `target` column (ignoring case and spaces around names), as parseEdgeList requires. A text
+ * whose first row cannot be read as CSV is not one. Reads the first row only.
+ */
+export declare function csvHasEdgeHeader(text: string): boolean;
 export declare function parseEdgeList(text: string, file: string, options?: BuilderOptions, format?: DesignFormat): Topology;
 export {};

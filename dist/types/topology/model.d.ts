@@ -1,5 +1,5 @@
 import type { Diagnostic } from '../errors.js';
-export type DesignFormat = 'native-yaml' | 'native-json' | 'graphml' | 'gml' | 'csv';
+export type DesignFormat = 'native-yaml' | 'native-json' | 'graphml' | 'gml' | 'csv' | 'geojson';
 export interface SourcePos {
     /** 1-based line of the element in the design file. */
     line: number;
@@ -8,7 +8,7 @@ export interface SourcePos {
 }
 export interface TopoNode {
     id: string;
-    /** Human label when the file has one (GraphML/GML `label`), else undefined. */
+    /** Human label when the file has one (ours: `label`; GraphML/GML: `label`, else `name`; CSV has none). */
     label?: string;
     kind?: string;
     lat?: number;

@@ -1,0 +1,2 @@
+/** Great-circle distance in km between two points given in degrees (haversine, mean Earth radius 6,371.0088 km, IUGG). */
+export declare function greatCircleKm(lat1: number, lon1: number, lat2: number, lon2: number): number;
