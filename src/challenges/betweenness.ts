@@ -2,7 +2,7 @@
 // Static: ranked once on the intact design ("IB"); adaptive: recomputed after every removal
 // ("RB"; Holme, Kim, Yoon & Han, PRE 65:056109, 2002). After a removal only the component
 // that held the removed node is recomputed — every other component's scores are exactly
-// unchanged — and components of two nodes or fewer have no betweenness at all (SCIENCE.md §6).
+// unchanged — and components of two nodes or fewer have no betweenness at all (docs/METHODS.md §8.3).
 // Cost: O(N·L) static; adaptive at most O(K·N·L) for K steps.
 
 import type { CompactGraph } from '../graph/compact.js';

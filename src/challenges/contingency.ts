@@ -1,6 +1,6 @@
 // N−1 and N−2 contingencies: every single element, and every pair, of one kind (nodes or links)
 // is removed in turn and R is taken on what is left — the planners' N−1 / N−2 criterion (common
-// practice; e.g. NERC TPL-001 for transmission planning, SCIENCE.md §7). Cases run in
+// practice; e.g. NERC TPL-001 for transmission planning, docs/METHODS.md §6.5). Cases run in
 // lexicographic index order; when a budget stops the enumeration, the cases evaluated and the
 // cases that exist are both reported. Hardened elements are never removed. The evaluation
 // itself lives in envelope/contingency.ts.

@@ -6,7 +6,7 @@
 // order statistics, so on discrete values (an LCC moves in steps of 1/N) it may return a value
 // between two observed ones; the interval below is always made of observed values.
 //
-// Confidence interval (SCIENCE.md §8): the order statistics [X_(r), X_(s)] cover the true
+// Confidence interval (docs/METHODS.md §7.2): the order statistics [X_(r), X_(s)] cover the true
 // p-quantile with probability Σ_{i=r}^{s−1} C(n,i) p^i (1−p)^{n−i}, whatever the distribution
 // (for discrete distributions this is a lower bound). Ranks start at r, s = np ∓ z·√(np(1−p))
 // (+1 for s) and are widened until the exact binomial coverage reaches the level. Where a rank

@@ -1,5 +1,5 @@
 // The R-value: one number in [0, 1] per state of the design, combining normalized metrics
-// (SCIENCE.md §2, the R-model: R = Σ s_i t_i with weights s_i summing to 1) either as their
+// (docs/METHODS.md §4, the R-model: R = Σ s_i t_i with weights s_i summing to 1) either as their
 // weighted mean or as their minimum (a "weakest aspect" score; weights only select metrics).
 // One metric alone is the common case.
 

@@ -2,7 +2,7 @@
 // - element keys: key = hash(seed, realization, stable element id). A random removal order is
 //   the eligible elements sorted by key, so two versions of a design (base and head) give the
 //   elements they share the same relative order in every realization (common random numbers,
-//   SCIENCE.md §8), and the order never depends on the thread that computes it.
+//   docs/METHODS.md §7.4), and the order never depends on the thread that computes it.
 // - a small generator (xoshiro128**, Blackman & Vigna, "Scrambled linear pseudorandom number
 //   generators", ACM TOMS 47:36, 2021) seeded from (seed, stream) through the murmur3
 //   finaliser, for the few places that need a stream of numbers (bootstrap resampling).

@@ -1,4 +1,4 @@
-// Statistics of an envelope at each grid point, and netbrace's own summaries (SCIENCE.md §2 —
+// Statistics of an envelope at each grid point, and netbrace's own summaries (docs/METHODS.md §5.4 —
 // these are netbrace's definitions, not published indices). With grid points x_0 = 0 < x_1 <
 // … < x_K the summaries average over x_1..x_K (the intact point is left out, as in Schneider's
 // R = (1/N) Σ_{Q=1..N} s(Q)):

@@ -1,5 +1,5 @@
 // The weakest removal sequence of length k against R — the bottom contour of the envelope.
-// Minimising R over k-sets is NP-hard in general (the critical node problem, SCIENCE.md §6), so:
+// Minimising R over k-sets is NP-hard in general (the critical node problem, docs/METHODS.md §6.6), so:
 // - exact: k ≤ 2 and C(E, k) within the limit — every single element / pair is evaluated;
 // - beam: width B > 1 — the B best partial sequences are extended by every element each step;
 // - greedy: adaptive greedy — each step removes the element whose loss leaves the lowest R.

@@ -1,5 +1,5 @@
 // algebraic_connectivity: the Fiedler value a = μ₂, the second-smallest eigenvalue of the
-// Laplacian of the SURVIVING graph (Fiedler, Czech. Math. J. 23:298, 1973; SCIENCE.md §1).
+// Laplacian of the SURVIVING graph (Fiedler, Czech. Math. J. 23:298, 1973; docs/METHODS.md §3.1).
 // Taken on the whole survivor graph, so it is 0 as soon as the survivors are disconnected;
 // that is detected by counting components, never read off a tiny eigenvalue. The simple
 // graph is used (parallel links merged). Normalisation: a / N0 (a ≤ N' ≤ N0, with a = N

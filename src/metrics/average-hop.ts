@@ -1,5 +1,5 @@
 // average_hop: the mean hop count H between the ordered node pairs of the LARGEST
-// component of the surviving graph (SCIENCE.md §1, "report over connected pairs"); the
+// component of the surviving graph (docs/METHODS.md §3.2, "report over connected pairs"); the
 // normalisation is 1/H, which is 1 for a complete graph and falls as paths lengthen.
 // Deviation, on purpose: H is taken on the largest component instead of over all pairs,
 // because H over disconnected pairs is infinite. It therefore says nothing about how

@@ -2,7 +2,7 @@
 // never bridges: their twin carries on). raw = how many there are.
 // Normalisation, our own and deliberately not 1 − bridges/links: that would score a
 // network with every link cut as 1 (no links, no bridges), which breaks "0 = no
-// robustness left" (SCIENCE.md §0). Instead the score is the share of the ORIGINAL node
+// robustness left" (docs/METHODS.md §2.3). Instead the score is the share of the ORIGINAL node
 // pairs that stay connected after ANY single link failure — Σ over 2-link-connected
 // components of C(|C|, 2) / C(N0, 2). It is 1 for a 2-link-connected design and 0 for a
 // tree, and it never rises as links or nodes are removed (a removal cannot create cycles);

@@ -3,7 +3,7 @@
 // when a latency budget b is set (options.latencyBudget, else the design's latencyBudget),
 // only when its cheapest surviving path costs at most b × its cost in the intact design.
 // This is the service view (in the spirit of the service-specific weights of the R-model,
-// SCIENCE.md §2; the definition here is ours). Path cost: latency if every link has one,
+// docs/METHODS.md §4; the definition here is ours). Path cost: latency if every link has one,
 // else length, else weight (kernels/link-cost.ts), else hop count. The intact costs are
 // computed once in create(). A demand that the intact design cannot carry is never served;
 // a demand from a site to itself is served while the site survives. Comparisons allow a

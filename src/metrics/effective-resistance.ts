@@ -1,6 +1,6 @@
 // effective_resistance: the effective graph resistance (Kirchhoff index) of the SURVIVING
 // graph, R_G = Σ_{i<j} ω_ij = N' Σ_{i≥2} 1/μ_i = N'·tr(L⁺) (Klein & Randić, J. Math. Chem.
-// 12:81, 1993; Ellens et al., Linear Algebra Appl. 435:2491, 2011; SCIENCE.md §1), simple
+// 12:81, 1993; Ellens et al., Linear Algebra Appl. 435:2491, 2011; docs/METHODS.md §3.1), simple
 // graph (parallel links merged). Normalisation (N' − 1)/R_G ∈ (0, 1], 1 only for the
 // complete graph (R_G ≥ N' − 1 by AM–HM). Here N' must be the survivor count: with N0 a
 // complete survivor could score above 1. Disconnected survivors: R_G = ∞, score 0
@@ -13,7 +13,7 @@
 // exact at any size. Otherwise (expander-like graphs: b = 638 for a 1,000-node
 // Barabási–Albert graph) tr(L⁺) is ESTIMATED by stochastic Lanczos quadrature of 1/x on the
 // Laplacian with the constant vector deflated — the Lanczos form of CG + Hutchinson
-// (SCIENCE.md §6) — 32 fixed Rademacher probes keyed by node id, each run until its Gauss
+// (docs/METHODS.md §8.5) — 32 fixed Rademacher probes keyed by node id, each run until its Gauss
 // quadrature settles to 1e-9 (at most 120 steps). Measured relative error of the estimate:
 // 2.0e-3 on that BA graph, up to about 1e-2 on random graphs of a few hundred nodes
 // (test/metrics/spectral.test.ts checks 2e-2). Deflating the smallest eigenpairs first, as

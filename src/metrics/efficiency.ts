@@ -1,6 +1,6 @@
 // efficiency: global efficiency by hop count, E = 1/(N0(N0−1)) Σ_{i≠j} 1/d_ij (Latora &
 // Marchiori, PRL 87:198701, 2001), with unreachable pairs contributing 1/∞ = 0 and the
-// ORIGINAL node count N0 in the denominator so that removals never raise it (SCIENCE.md §0).
+// ORIGINAL node count N0 in the denominator so that removals never raise it (docs/METHODS.md §2.2).
 // Parallel links do not change hop distances. Cost: all-pairs bit-parallel BFS,
 // O(N/32 · levels · (N + L)) word operations per evaluation.
 

@@ -1,5 +1,5 @@
 // largest_component: the share of the ORIGINAL nodes that sit in the largest connected
-// component of the surviving graph, S = |C_max| / N0 (SCIENCE.md §1; the usual giant-
+// component of the surviving graph, S = |C_max| / N0 (docs/METHODS.md §3.1; the usual giant-
 // component fraction of percolation studies, e.g. Callaway et al., PRL 85:5468, 2000).
 // Cost: one union–find pass over the links, O((N + L)·α(N)).
 

@@ -4,7 +4,7 @@
 // shared-risk challenge's business, not this metric's). Unit-capacity max-flow with early
 // exit (kernels/connectivity-counts.ts); 0 when the survivors are disconnected or fewer
 // than two. Normalisation λ / (N0 − 1), capped at 1 because parallel links can push λ past
-// N − 1 (SCIENCE.md §1 normalises the simple-graph λ ≤ N − 1 the same way).
+// N − 1 (docs/METHODS.md §3.1 normalises the simple-graph λ ≤ N − 1 the same way).
 // Cost: N' − 1 capped max-flows, O(N · λ · L).
 
 import { createConnectivityCounter } from './kernels/connectivity-counts.js';

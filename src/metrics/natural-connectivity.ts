@@ -1,5 +1,5 @@
 // natural_connectivity: λ̄ = ln((1/N') Σ_i e^{λ_i}) over the adjacency eigenvalues of the
-// SURVIVING graph (Wu et al., Chin. Phys. Lett. 27:078902, 2010; SCIENCE.md §1), simple
+// SURVIVING graph (Wu et al., Chin. Phys. Lett. 27:078902, 2010; docs/METHODS.md §3.1), simple
 // graph (parallel links merged). Computed in log space per component — λ̄ = ln Σ_c Σ_i
 // e^{λ_i} − ln N' with each component's sum scaled by its own e^{λ₁} — so nothing
 // overflows for large N. Isolated survivors contribute e⁰ = 1 each. Normalisation:
@@ -8,7 +8,7 @@
 // Solvers: components of up to `denseLimit` nodes (default 300) get the exact dense
 // spectrum. Larger ones: the top 8 eigenpairs by thick-restart Lanczos, added exactly, and
 // the remaining trace Σ e^{λ_i − λ₁} by stochastic Lanczos quadrature on the deflated
-// operator (SCIENCE.md §6), 32 fixed Rademacher probes keyed by node id, of up to 40
+// operator (docs/METHODS.md §8.5), 32 fixed Rademacher probes keyed by node id, of up to 40
 // steps. This is an ESTIMATE: measured relative error of λ̄ 9.7e-5 on a 1,000-node
 // Barabási–Albert graph (a few dominant eigenvalues, which the deflation takes exactly) but
 // up to about 1e-2 on Erdős–Rényi graphs of a few hundred nodes, whose flat spectrum leaves

@@ -2,7 +2,7 @@
 // leaves one node), of the simple survivor graph. Computed by unit-capacity max-flow on the
 // node-split network with early exit (kernels/connectivity-counts.ts); 0 when the
 // survivors are disconnected or fewer than two. Normalisation κ / (N0 − 1) (Whitney:
-// κ ≤ δ_min ≤ N' − 1 ≤ N0 − 1, equality only for the complete graph; SCIENCE.md §1).
+// κ ≤ δ_min ≤ N' − 1 ≤ N0 − 1, equality only for the complete graph; docs/METHODS.md §3.1).
 // Cost: O(N · κ · L) in the worst case; usually far less because of the caps.
 
 import { createConnectivityCounter } from './kernels/connectivity-counts.js';

@@ -1,8 +1,8 @@
 // pair_connectivity: the fraction of the ORIGINAL node pairs that can still reach each
 // other, P = Σ_C C(|C|, 2) / C(N0, 2) (pairwise connectivity of the critical-node problem,
-// Arulselvan et al., Comput. Oper. Res. 36:2193, 2009 — from memory, see SCIENCE.md §1).
+// Arulselvan et al., Comput. Oper. Res. 36:2193, 2009 — from memory, see docs/METHODS.md §3.1).
 // Cost: one union–find pass, O((N + L)·α(N)). A design with fewer than two nodes has no
-// pairs and scores 0 (SCIENCE.md §0: an empty graph scores 0).
+// pairs and scores 0 (docs/METHODS.md §2.3: an empty graph scores 0).
 
 import { createComponentCounter } from './kernels/union-find.js';
 import type { Metric } from './types.js';

@@ -1,5 +1,5 @@
 // spectral_radius: λ₁, the largest adjacency eigenvalue of the SURVIVING graph (simple,
-// parallel links merged) — the maximum over its components (SCIENCE.md §1). Normalisation
+// parallel links merged) — the maximum over its components (docs/METHODS.md §3.1). Normalisation
 // λ₁ / (N0 − 1): λ₁ ≤ N' − 1 ≤ N0 − 1 with equality only for the complete graph.
 // Components that cannot beat the best so far (size − 1 or their largest degree is no
 // more than it) are skipped. Solvers: dense for components of up to `denseLimit` nodes

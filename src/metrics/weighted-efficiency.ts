@@ -1,14 +1,14 @@
 // weighted_efficiency: global efficiency with link costs, E_w = 1/(N0(N0−1)) Σ_{i≠j} 1/d_ij
 // where d_ij is the cheapest path by latency (ms) if every link has one, else by length
 // (km), else by the generic weight (Latora & Marchiori, PRL 87:198701, 2001, and
-// EPJ B 32:249, 2003; SCIENCE.md §1). Applies only when one of those columns is complete
+// EPJ B 32:249, 2003; docs/METHODS.md §3.1). Applies only when one of those columns is complete
 // and positive (kernels/link-cost.ts). Unreachable pairs add 0; N0 is the original count.
 // Normalisation E_w / E_ideal, with E_ideal the efficiency of the ideal complete graph in
 // which each pair is joined directly at cost δ_ij = max(ℓ_min, direct_ij): direct_ij is the
 // great-circle distance between the two sites when both have coordinates (converted to ms
 // at 0.0049 ms/km, light in fibre, for latency; coordinates are not used for a generic
 // weight), and ℓ_min, the cheapest link of the intact design, bounds every path from
-// below. So without coordinates the score is ℓ_min·E_w, SCIENCE.md's suggestion. When link
+// below. So without coordinates the score is ℓ_min·E_w, netbrace's own fallback (docs/METHODS.md §3.2). When link
 // costs are at least the straight-line cost, d_ij ≥ δ_ij and the score is in [0, 1]; data
 // that breaks this (a link shorter than its great circle) is clamped to 1.
 // Cost: one Dijkstra per surviving node, O(N (N + L) log N) per evaluation; E_ideal is an

@@ -227,7 +227,7 @@ export const CAUTION =
   'power systems especially.';
 
 /** Significant digits kept in the JSON report: enough for any R, few enough that engines that
- *  differ in the last bits of Math.exp/log still write the same bytes (SCIENCE.md §8). */
+ *  differ in the last bits of Math.exp/log still write the same bytes (docs/METHODS.md §7.5). */
 export const REPORT_DIGITS = 12;
 
 /** The report as JSON: stable key order (construction order), numbers rounded to REPORT_DIGITS

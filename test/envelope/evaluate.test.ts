@@ -250,7 +250,7 @@ describe('paired comparison with common random numbers', () => {
     expect(() => pairedStatistic(a, b, 'random-nodes', { kind: 'mean' }, 0.21)).toThrow(/not a grid point/);
   });
 
-  it('karate plus link (11, 33), 7 nodes removed, 4,000 realizations: SD of the LCC difference ≈ 0.0103 paired vs 0.0986 unpaired (SCIENCE.md §8, V)', async () => {
+  it('karate plus link (11, 33), 7 nodes removed, 4,000 realizations: SD of the LCC difference ≈ 0.0103 paired vs 0.0986 unpaired (docs/METHODS.md §7.4, V)', async () => {
     const { readFileSync } = await import('node:fs');
     const ref = JSON.parse(readFileSync(new URL('../reference/envelope.json', import.meta.url), 'utf8'));
     const edges = ref.graphs[0].edges as [number, number][];

@@ -22,7 +22,7 @@ describe('Erdős–Rényi random node failure vs Callaway, Newman, Strogatz & Wa
   const env = ev.evaluation.envelopes[0];
   const samples = ev.samples.get('random-nodes')!;
 
-  it('matches P∞(f) = (1 − f)·S, S = 1 − exp(−c(1 − f)S), at f = 0, 0.25, 0.5, 0.6 (SCIENCE.md §5: 0.980173, 0.705360, 0.398406, 0.256793)', () => {
+  it('matches P∞(f) = (1 − f)·S, S = 1 − exp(−c(1 − f)S), at f = 0, 0.25, 0.5, 0.6 (docs/METHODS.md §11.1: 0.980173, 0.705360, 0.398406, 0.256793)', () => {
     expect(callaway(4, 0)).toBeCloseTo(0.980173, 6);
     expect(callaway(4, 0.5)).toBeCloseTo(0.398406, 6);
     for (const f of [0, 0.25, 0.5, 0.6]) {

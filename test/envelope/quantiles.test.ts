@@ -12,7 +12,7 @@ describe('type 7 quantiles (Hyndman & Fan 1996)', () => {
   });
 });
 
-describe('order-statistic confidence intervals (SCIENCE.md §8, V)', () => {
+describe('order-statistic confidence intervals (docs/METHODS.md §7.2, V)', () => {
   it('give ranks [81, 120] with coverage 0.960 for n = 1000, p = 0.1', () => {
     const { r, s, coverage } = quantileRanks(1000, 0.1);
     expect([r, s]).toEqual([81, 120]);

@@ -268,7 +268,7 @@ describe('a threshold on a known attack curve (karate club, static degree attack
 
   it('the worst-case and N−1 floors see the brute-force worst removals of the reference', async () => {
     // test/reference/envelope.json, karate "worst": exhaustive search with networkx 2.8.8;
-    // also SCIENCE.md §4 (k=1: 27/34 removing node 0; k=2: 24/34 removing nodes 0 and 1).
+    // also docs/METHODS.md §10.3 (k=1: 27/34 removing node 0; k=2: 24/34 removing nodes 0 and 1).
     const worst = karate.worst.largest_component;
     const strict = [
       'r-value:',

@@ -1,4 +1,4 @@
-// Closed-form values from ../shared SCIENCE.md §3 (the table's tags: "M" = standard result
+// Closed-form values from docs/METHODS.md §9 (the table's tags: "M" = standard result
 // quoted from memory there, "derived" = derived in that table, "V" = checked numerically
 // there). Each check names its source; all agree to 1e-9 relative.
 
@@ -34,7 +34,7 @@ const paths: [string, MetricOptions][] = [
   ['Lanczos', { denseLimit: 0 }],
 ];
 
-describe('algebraic connectivity (SCIENCE.md §3; Fiedler 1973, standard spectra, M)', () => {
+describe('algebraic connectivity (docs/METHODS.md §9.1; Fiedler 1973, standard spectra, M)', () => {
   for (const [name, opt] of paths) {
     it(`${name}: paths 2(1−cos(π/n)), cycles 2(1−cos(2π/n)), K_n = n (M)`, () => {
       expectRelative(raw('algebraic_connectivity', path(5), opt), 0.381966011, 1e-8);
@@ -61,7 +61,7 @@ describe('algebraic connectivity (SCIENCE.md §3; Fiedler 1973, standard spectra
   }
 });
 
-describe('spectral radius (SCIENCE.md §3, M)', () => {
+describe('spectral radius (docs/METHODS.md §9.4, M)', () => {
   for (const [name, opt] of paths) {
     it(`${name}: K_N, star, P_N, C_N, K_{m,n}, Q_d`, () => {
       for (const n of [3, 10, 70]) expectRelative(raw('spectral_radius', complete(n), opt), n - 1);
@@ -77,7 +77,7 @@ describe('spectral radius (SCIENCE.md §3, M)', () => {
   }
 });
 
-describe('effective graph resistance R_G (SCIENCE.md §3)', () => {
+describe('effective graph resistance R_G (docs/METHODS.md §9.3)', () => {
   it('K_N = N−1 (Ellens 2011, S); P_N = (N³−N)/6 (Klein–Randić, M); C_N = (N³−N)/12 (M); star (N−1)² (M)', () => {
     expectRelative(raw('effective_resistance', complete(10)), 9);
     expectRelative(raw('effective_resistance', path(10)), 165);
@@ -102,7 +102,7 @@ describe('effective graph resistance R_G (SCIENCE.md §3)', () => {
   });
 });
 
-describe('natural connectivity (SCIENCE.md §3, derived; Wu et al. 2010)', () => {
+describe('natural connectivity (docs/METHODS.md §9.4, derived; Wu et al. 2010)', () => {
   it('K_N = ln((e^{N−1}+(N−1)e^{−1})/N), star = ln((2cosh√(N−1)+N−2)/N)', () => {
     expectRelative(raw('natural_connectivity', complete(10)), 6.697823423, 1e-9);
     expectRelative(raw('natural_connectivity', complete(5)), 2.417157073, 1e-9);
@@ -118,7 +118,7 @@ describe('natural connectivity (SCIENCE.md §3, derived; Wu et al. 2010)', () =>
   });
 });
 
-describe('hop metrics (SCIENCE.md §3, derived)', () => {
+describe('hop metrics (docs/METHODS.md §9.2, derived)', () => {
   it('average hop H: P_N (N+1)/3, star 2(N−1)/N, C_N odd (N+1)/4, even N²/(4(N−1))', () => {
     for (const n of [2, 9, 40]) expectRelative(raw('average_hop', path(n)), (n + 1) / 3);
     for (const n of [3, 10, 50]) expectRelative(raw('average_hop', star(n)), (2 * (n - 1)) / n);
@@ -136,7 +136,7 @@ describe('hop metrics (SCIENCE.md §3, derived)', () => {
   });
 });
 
-describe('node and link connectivity (SCIENCE.md §3, M; Whitney κ ≤ λ ≤ δ)', () => {
+describe('node and link connectivity (docs/METHODS.md §9.5, M; Whitney κ ≤ λ ≤ δ)', () => {
   it('κ: K_N N−1, Q_d d, Petersen 3, C_N 2, K_{m,n} min(m,n); λ(Q4) = 4', () => {
     for (const n of [2, 6, 25]) expectRelative(raw('node_connectivity', complete(n)), n - 1);
     for (const d of [2, 3, 4, 5]) expectRelative(raw('node_connectivity', hypercube(d)), d);

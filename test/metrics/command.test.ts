@@ -36,7 +36,7 @@ describe('netbrace metrics', () => {
       expect(v.normalized).toBeLessThanOrEqual(1);
     }
     // A 4-cycle plus a parallel link; by hops it is C4: each node sees two nodes at 1 hop and
-    // one at 2, so E = (1 + 1 + 1/2)/3 = 5/6 (SCIENCE.md §3, C_N even form).
+    // one at 2, so E = (1 + 1 + 1/2)/3 = 5/6 (docs/METHODS.md §9.2, C_N even form).
     expect(j.metrics.efficiency.value).toBeCloseTo(5 / 6, 12);
     expect(j.metrics.bridges.value).toBe(0);
     expect(j.metrics.demand_served.normalized).toBe(1);

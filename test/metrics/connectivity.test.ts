@@ -15,7 +15,7 @@ describe('largest_component and pair_connectivity', () => {
     expect(pairs.create(g)(createMask(g))).toEqual({ raw: 15, normalized: 1 });
   });
 
-  it('use the original node count N0 (SCIENCE.md §0)', () => {
+  it('use the original node count N0 (docs/METHODS.md §2.2)', () => {
     // Removing the centre of a 10-node star leaves 9 isolated nodes.
     const g = star(10);
     const mask = createMask(g);

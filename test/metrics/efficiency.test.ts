@@ -27,29 +27,29 @@ function bruteEfficiency(n: number, edges: [number, number][], dead: Set<number>
   return sum / (n * (n - 1));
 }
 
-describe('efficiency closed forms (SCIENCE.md §3; Latora & Marchiori, PRL 87:198701, 2001)', () => {
+describe('efficiency closed forms (docs/METHODS.md §9.2; Latora & Marchiori, PRL 87:198701, 2001)', () => {
   it('K_n = 1', () => {
     for (const n of [2, 5, 40]) expectRelative(value(complete(n)), 1);
   });
-  it('star on N nodes = (N+2)/(2N) (derived in SCIENCE.md §3)', () => {
+  it('star on N nodes = (N+2)/(2N) (derived in docs/METHODS.md §9.2)', () => {
     for (const n of [3, 10, 70]) expectRelative(value(star(n)), (n + 2) / (2 * n));
   });
-  it('path P_N = 2H_{N-1}/(N-1) - 2/N (derived in SCIENCE.md §3)', () => {
+  it('path P_N = 2H_{N-1}/(N-1) - 2/N (derived in docs/METHODS.md §9.2)', () => {
     expectRelative(value(path(10)), 0.428659612, 1e-8);
     for (const n of [2, 7, 33, 100]) expectRelative(value(path(n)), (2 * harmonic(n - 1)) / (n - 1) - 2 / n);
   });
-  it('cycle C_N, odd and even forms (derived in SCIENCE.md §3)', () => {
+  it('cycle C_N, odd and even forms (derived in docs/METHODS.md §9.2)', () => {
     expectRelative(value(cycle(10)), 0.485185185, 1e-8);
     for (const n of [7, 31, 65]) expectRelative(value(cycle(n)), (2 * harmonic((n - 1) / 2)) / (n - 1));
     for (const n of [10, 32, 64]) expectRelative(value(cycle(n)), (2 * harmonic(n / 2 - 1) + 2 / n) / (n - 1));
   });
-  it('Petersen = 2/3 (SCIENCE.md §3, V)', () => {
+  it('Petersen = 2/3 (docs/METHODS.md §9.2, V)', () => {
     expectRelative(value(petersen()), 2 / 3);
   });
 });
 
 describe('efficiency under removal', () => {
-  it('uses N0: P5 minus an end node gives 0.433333, not 0.722222 (SCIENCE.md §0, V)', () => {
+  it('uses N0: P5 minus an end node gives 0.433333, not 0.722222 (docs/METHODS.md §2.2, V)', () => {
     const g = path(5);
     const mask = createMask(g);
     expectRelative(value(g, mask), 0.641667, 1e-6);

@@ -1,4 +1,4 @@
-// Graph families with known closed forms (SCIENCE.md §3) and a seeded random generator,
+// Graph families with known closed forms (docs/METHODS.md §9) and a seeded random generator,
 // built straight into compact graphs.
 
 import { graphFromEdges, type CompactGraph } from '../../src/graph/compact.js';

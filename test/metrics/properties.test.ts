@@ -1,5 +1,5 @@
 // Property tests (fast-check, seeded, bounded run counts): monotonicity facts from
-// SCIENCE.md §1 and "a mask is the same as rebuilding the graph without the element".
+// docs/METHODS.md §3.3 and "a mask is the same as rebuilding the graph without the element".
 
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
@@ -59,7 +59,7 @@ const specArb = fc.integer({ min: 2, max: 22 }).chain((n) =>
 const applicable = (g: CompactGraph) => metrics.filter((m) => m.appliesTo(g));
 
 describe('removing a link never raises a metric', () => {
-  // SCIENCE.md §1: efficiency and LCC/pair fractions with N0 (§0); Fiedler (adding a link never
+  // docs/METHODS.md §3.3: efficiency and LCC/pair fractions with N0 (§2.2); Fiedler (adding a link never
   // lowers a); Rayleigh monotonicity for R_G, so (N−1)/R_G; Wu et al. for natural connectivity;
   // Perron–Frobenius for λ₁ (common practice); connectivity counts; our bridge/cut-node
   // pair shares (a removal cannot create a cycle); served demand.

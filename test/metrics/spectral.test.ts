@@ -106,7 +106,7 @@ describe('thick-restart Lanczos (algebraic connectivity, spectral radius)', () =
 });
 
 describe('exact effective resistance of long sparse graphs above the dense limit (banded LDLᵀ + Takahashi)', () => {
-  it('C_1000 = (N³−N)/12 (SCIENCE.md §3, M) and the 20×30 grid from its Laplacian spectrum λ_i(P_20)+λ_j(P_30) (Cartesian-product spectra, standard, M)', () => {
+  it('C_1000 = (N³−N)/12 (docs/METHODS.md §9.3, M) and the 20×30 grid from its Laplacian spectrum λ_i(P_20)+λ_j(P_30) (Cartesian-product spectra, standard, M)', () => {
     const c = graphFromEdges(1000, Array.from({ length: 1000 }, (_, i): Edge => [i, (i + 1) % 1000]));
     expectRelative(getMetric('effective_resistance').create(c)(createMask(c)).raw, (1000 ** 3 - 1000) / 12);
     const rows = 20;

@@ -52,7 +52,7 @@ const we = getMetric('weighted_efficiency');
 const ds = getMetric('demand_served');
 
 describe('weighted_efficiency', () => {
-  it('triangle with lengths 1, 1, 3: E_w = (1 + 1 + 1/2)/3 (SCIENCE.md §3, hand check); score ℓ_min·E_w without coordinates', () => {
+  it('triangle with lengths 1, 1, 3: E_w = (1 + 1 + 1/2)/3 (docs/METHODS.md §9.2, hand check); score ℓ_min·E_w without coordinates', () => {
     const g = design(['a', 'b', 'c'], [{ a: 'a', b: 'b', length: 1 }, { a: 'b', b: 'c', length: 1 }, { a: 'a', b: 'c', length: 3 }]);
     const v = we.create(g)(createMask(g));
     expectRelative(v.raw, 0.833333333333, 1e-9);

@@ -21,7 +21,7 @@ under netbrace's definitions (README "Metrics"), each computed here by the named
   natural connectivity and spectral radius.
 
 Graphs: the karate club, Les Misérables and Florentine families graphs shipped with
-networkx (weights stripped: SCIENCE.md §4's pitfall), networks of the Internet Topology Zoo
+networkx (weights stripped: docs/METHODS.md §10.1's pitfall), networks of the Internet Topology Zoo
 (S. Knight et al., IEEE JSAC 29(9):1765, 2011, CC BY 4.0) read from
 fixtures/topology-zoo/gml (copied from the dataset, CC BY 4.0) and collapsed to simple graphs (parallel links merged,
 self-loops dropped: netbrace's spectral and hop metrics use the simple graph), and seeded

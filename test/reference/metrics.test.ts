@@ -101,7 +101,7 @@ describe(`metrics against ${libs} (test/reference/metrics.json)`, () => {
     expect(names).toEqual(expect.arrayContaining(['karate', 'les_miserables', 'florentine']));
     expect(names.filter((n) => n.startsWith('zoo:')).length).toBeGreaterThanOrEqual(40);
     for (const prefix of ['er_', 'ba_', 'ws_', 'rgg_']) expect(names.some((n) => n.startsWith(prefix))).toBe(true);
-    // SCIENCE.md §4 (networkx, V): the unweighted karate club.
+    // docs/METHODS.md §10.2 (networkx, V): the unweighted karate club.
     const karate = ref.graphs.find((g) => g.name === 'karate')!.values;
     expect(karate.algebraic_connectivity.value).toBeCloseTo(0.468525226701, 9);
     expect(karate.effective_resistance.value).toBeCloseTo(470.268185, 5);

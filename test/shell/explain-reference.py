@@ -5,7 +5,7 @@ Removes every site (except hardened ones), every link and every shared-risk grou
 links) on its own and computes, with networkx, the two metrics of the built-in policy's R:
 - pair connectivity: sum over components C of C(|C|, 2), divided by C(N0, 2);
 - global efficiency with the ORIGINAL node count: sum over ordered pairs of 1/d, divided by
-  N0 (N0 - 1) (Latora & Marchiori, PRL 87:198701, 2001; N0 as in netbrace's SCIENCE notes).
+  N0 (N0 - 1) (Latora & Marchiori, PRL 87:198701, 2001; N0 as in docs/METHODS.md §2.2).
 R is their mean (weights 1 and 1). The design is read with PyYAML as plain data.
 
 Run from the repository root with Debian's python3-networkx and python3-yaml:

@@ -57,7 +57,7 @@ export interface WorstCase extends RemovalSequence {
 export interface QuantileBand {
     /** Point estimate at each grid point. */
     value: number[];
-    /** Distribution-free confidence interval from order statistics (SCIENCE.md §8). */
+    /** Distribution-free confidence interval from order statistics (docs/METHODS.md §7.2). */
     lo: number[];
     hi: number[];
     /** Standard error of the estimate at each grid point. */
@@ -79,14 +79,14 @@ export interface Envelope {
     median: number[];
     /** Keyed by the quantile as written, e.g. "0.1", "0.5", "0.9". */
     quantiles: Record<string, QuantileBand>;
-    /** netbrace's own summaries (SCIENCE.md §2): mean of the median; mean band width. */
+    /** netbrace's own summaries (docs/METHODS.md §5.4): mean of the median; mean band width. */
     area: number;
     spread: number;
     /** The three weakest realizations with their removal sequences. */
     weakest: RemovalSequence[];
     worstCase?: WorstCase;
     /**
-     * netbrace's attack gap (SCIENCE.md §2): mean over the grid of q_lo − R of the most harmful
+     * netbrace's attack gap (docs/METHODS.md §5.4): mean over the grid of q_lo − R of the most harmful
      * targeted attack of the same element kind in this evaluation; absent without such an attack.
      */
     attackGap?: {

@@ -219,7 +219,7 @@ export interface Report {
 }
 export declare const CAUTION: string;
 /** Significant digits kept in the JSON report: enough for any R, few enough that engines that
- *  differ in the last bits of Math.exp/log still write the same bytes (SCIENCE.md §8). */
+ *  differ in the last bits of Math.exp/log still write the same bytes (docs/METHODS.md §7.5). */
 export declare const REPORT_DIGITS = 12;
 /** The report as JSON: stable key order (construction order), numbers rounded to REPORT_DIGITS
  *  significant digits, non-finite numbers as null, two-space indent, final newline. */

@@ -2,7 +2,7 @@
 // Laplacian or the spectral radius λ₁ of its adjacency matrix — by the dense values-only
 // solver up to `denseLimit` nodes and by thick-restart Lanczos above (the Laplacian's
 // constant null vector deflated). With `warmStart`, Lanczos starts from the previous call's
-// eigenvector restricted to the surviving nodes (SCIENCE.md §6's warm start).
+// eigenvector restricted to the surviving nodes (docs/METHODS.md §8.4's warm start).
 
 import type { CompactGraph } from '../../graph/compact.js';
 import { createDenseSpectrum } from './dense-spectrum.js';

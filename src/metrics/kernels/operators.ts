@@ -1,6 +1,6 @@
 // Matrix-free Laplacian and adjacency operators over a local (simple) graph, plus the
 // dense forms used below the dense-size limit. Simple graph: parallel links are merged by
-// the survivor builder, so every entry of A is 0 or 1 (SCIENCE.md §0).
+// the survivor builder, so every entry of A is 0 or 1 (docs/METHODS.md §2.1).
 
 import type { SymmetricOperator } from './lanczos.js';
 import type { LocalGraph } from './subgraph.js';

@@ -1,6 +1,6 @@
 // Stochastic Lanczos quadrature for tr f(A) on the orthogonal complement of a deflation
 // space (Ubaru, Chen & Saad, SIAM J. Matrix Anal. Appl. 38:1075, 2017 — from memory, see
-// SCIENCE.md §6): each Rademacher probe z (Hutchinson, Commun. Stat. Simul. 18:1059, 1989)
+// docs/METHODS.md §8.5): each Rademacher probe z (Hutchinson, Commun. Stat. Simul. 18:1059, 1989)
 // is projected off the deflation space, and zᵀf(A)z is the Gauss quadrature of the
 // Lanczos tridiagonal matrix T_k started from z: ‖z‖² Σ_j τ_j² f(θ_j), with τ_j the first
 // components of T_k's eigenvectors (Golub & Welsch). The probes are fixed functions of the

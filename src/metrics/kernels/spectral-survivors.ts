@@ -1,5 +1,5 @@
 // What the spectral metrics share: the surviving graph as a simple local graph (parallel
-// links merged, SCIENCE.md §0), its connected components, and each component as its own
+// links merged, docs/METHODS.md §2.1), its connected components, and each component as its own
 // local graph; plus the choice between the dense solver (components up to `denseLimit`
 // nodes) and the iterative kernels above it. All scratch is allocated once per graph.
 

@@ -37,7 +37,7 @@ export function allocateLocalGraph(nodeCapacity: number, entryCapacity: number):
 
 /**
  * A builder of the surviving graph. With `simple`, parallel links collapse into one
- * adjacency entry (what the simple-graph definitions of SCIENCE.md §0 need).
+ * adjacency entry (what the simple-graph definitions of docs/METHODS.md §2.1 need).
  */
 export function createSurvivorBuilder(g: CompactGraph, simple: boolean): (mask: Mask) => LocalGraph {
   const out = allocateLocalGraph(g.n, 2 * g.m);

@@ -19,7 +19,7 @@ export interface LocalGraph {
 export declare function allocateLocalGraph(nodeCapacity: number, entryCapacity: number): LocalGraph;
 /**
  * A builder of the surviving graph. With `simple`, parallel links collapse into one
- * adjacency entry (what the simple-graph definitions of SCIENCE.md §0 need).
+ * adjacency entry (what the simple-graph definitions of docs/METHODS.md §2.1 need).
  */
 export declare function createSurvivorBuilder(g: CompactGraph, simple: boolean): (mask: Mask) => LocalGraph;
 /**
