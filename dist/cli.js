@@ -26542,6 +26542,20 @@ function shortRevision(rev) {
   if (rev === void 0) return "–";
   return /^[0-9a-f]{40}([0-9a-f]{24})?$/.test(rev) ? rev.slice(0, 12) : rev;
 }
+function configurationNotes(r) {
+  const out = [];
+  const c = r.configuration;
+  if (c) {
+    for (const x of c.changes) {
+      const tail = x.weakens ? "; it would weaken the check, so the base’s setting applies and this fails" : "";
+      out.push({ text: `this change edits the workflow that runs netbrace (${c.workflow}, line ${x.line}): ${x.message}${tail}`, weakens: x.weakens, file: c.workflow, line: x.line });
+    }
+  }
+  if (r.policy.changed && r.policy.path) {
+    out.push({ text: `this change edits the policy (${(r.policy.files ?? [r.policy.path]).join(", ")}); ${r.policy.note ?? "the base’s version judges it"}`, weakens: false, file: r.policy.path, line: 1 });
+  }
+  return out;
+}
 var CHALLENGE_LABEL, KIND_PLURAL, STATUS_WORD, REQUIREMENT_STATUS_WORD, NAMED_STRANDED, SUBJECT, SEVERITY_ORDER, GROUPABLE;
 var init_labels = __esm({
   "src/report/labels.ts"() {
@@ -26833,8 +26847,9 @@ function policyNotes(r) {
   const notes = [];
   if (r.policy.source === "builtin") notes.push("policy: none found — the built-in defaults for communication backbones were applied");
   else notes.push(`policy: ${r.policy.path ?? "(file)"}${r.policy.revision ? ` as of ${shortRevision(r.policy.revision)}` : ""}`);
-  if (r.policy.note) notes.push(`policy: ${r.policy.note}`);
-  else if (r.policy.changed) notes.push("policy: this change edits the policy; the proposed policy was not applied to judge it");
+  if (r.policy.note && !r.policy.changed) notes.push(`policy: ${r.policy.note}`);
+  else if (r.policy.changed && !r.policy.path) notes.push("policy: this change edits the policy; the proposed policy was not applied to judge it");
+  for (const n of configurationNotes(r)) notes.push(`configuration: ${n.text}`);
   if (r.scope === "all") notes.push("scope: every design in the repository, judged against thresholds only");
   if (r.mode === "inform") notes.push("mode: inform — failures are reported but do not fail the run");
   return notes;
@@ -37635,6 +37650,8 @@ function masthead(r) {
     "Policy",
     r.policy.source === "builtin" ? "no policy file: the built-in defaults for communication backbones were applied" : `<code>${esc5(r.policy.path ?? "policy file")}</code>${r.policy.revision ? ` as of <code>${esc5(shortRevision(r.policy.revision))}</code>` : ""}` + (r.policy.note ? `. ${esc5(r.policy.note)}` : r.policy.changed ? " (this change edits the policy; the proposed policy was not applied)" : "")
   ]);
+  const own = configurationNotes(r).filter((x) => x.file !== r.policy.path);
+  if (own.length) meta.push(["Configuration", own.map((x) => `${x.weakens ? "<strong>" : ""}${esc5(x.text)}${x.weakens ? "</strong>" : ""}`).join("<br>")]);
   if (r.scope === "all") meta.push(["Scope", "every design in the repository, judged against thresholds only"]);
   meta.push(["Mode", r.mode === "inform" ? "inform: failures are reported, the run does not fail" : "block: failures fail the check"]);
   meta.push(["Seed", String(r.seed)]);
@@ -38218,6 +38235,11 @@ ${facts2.join(" · ")}
 `;
   } else if (report.policy.note) {
     text2 += `> ${ICON.notice} ${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ""), 600)}.
+
+`;
+  }
+  for (const n of configurationNotes(report).filter((x) => x.file !== report.policy.path)) {
+    text2 += `> ${n.weakens ? ICON.fail : ICON.notice} ${escapeMarkdown(n.text, 600)}.
 
 `;
   }

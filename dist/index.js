@@ -45412,6 +45412,20 @@ function shortRevision(rev) {
   if (rev === void 0) return "–";
   return /^[0-9a-f]{40}([0-9a-f]{24})?$/.test(rev) ? rev.slice(0, 12) : rev;
 }
+function configurationNotes(r) {
+  const out = [];
+  const c = r.configuration;
+  if (c) {
+    for (const x of c.changes) {
+      const tail = x.weakens ? "; it would weaken the check, so the base’s setting applies and this fails" : "";
+      out.push({ text: `this change edits the workflow that runs netbrace (${c.workflow}, line ${x.line}): ${x.message}${tail}`, weakens: x.weakens, file: c.workflow, line: x.line });
+    }
+  }
+  if (r.policy.changed && r.policy.path) {
+    out.push({ text: `this change edits the policy (${(r.policy.files ?? [r.policy.path]).join(", ")}); ${r.policy.note ?? "the base’s version judges it"}`, weakens: false, file: r.policy.path, line: 1 });
+  }
+  return out;
+}
 
 // src/report/chart.ts
 var zip = (x, y) => x.map((xi, i) => ({ x: xi, y: y[i] })).filter((p) => Number.isFinite(p.y));
@@ -46200,6 +46214,8 @@ function masthead(r) {
     "Policy",
     r.policy.source === "builtin" ? "no policy file: the built-in defaults for communication backbones were applied" : `<code>${esc5(r.policy.path ?? "policy file")}</code>${r.policy.revision ? ` as of <code>${esc5(shortRevision(r.policy.revision))}</code>` : ""}` + (r.policy.note ? `. ${esc5(r.policy.note)}` : r.policy.changed ? " (this change edits the policy; the proposed policy was not applied)" : "")
   ]);
+  const own = configurationNotes(r).filter((x) => x.file !== r.policy.path);
+  if (own.length) meta.push(["Configuration", own.map((x) => `${x.weakens ? "<strong>" : ""}${esc5(x.text)}${x.weakens ? "</strong>" : ""}`).join("<br>")]);
   if (r.scope === "all") meta.push(["Scope", "every design in the repository, judged against thresholds only"]);
   meta.push(["Mode", r.mode === "inform" ? "inform: failures are reported, the run does not fail" : "block: failures fail the check"]);
   meta.push(["Seed", String(r.seed)]);
@@ -57188,6 +57204,19 @@ function annotationsOf(report, options = {}) {
       });
     }
   }
+  for (const n of configurationNotes(report)) {
+    const file = repoPath(options.pathPrefix, n.file);
+    const startLine = Math.max(1, n.line);
+    out.push({
+      level: n.weakens ? "error" : "notice",
+      file,
+      startLine,
+      title: n.weakens ? "netbrace: the change weakens netbrace’s own settings" : n.file === report.policy.path ? "netbrace: policy changed (applies after merge)" : "netbrace: the change edits netbrace’s workflow",
+      message: logText(n.text),
+      rule: n.file === report.policy.path ? "policy-changed" : "own-settings",
+      inDiff: options.changedLines?.get(file)?.has(startLine) ?? false
+    });
+  }
   const rank = (a) => SEVERITY_RANK2[a.level === "error" ? "fail" : a.level === "warning" ? "warn" : "notice"];
   return out.sort((a, b) => rank(a) - rank(b) || Number(b.inDiff) - Number(a.inDiff));
 }
@@ -57568,6 +57597,11 @@ ${facts2.join(" · ")}
 `;
   } else if (report.policy.note) {
     text2 += `> ${ICON.notice} ${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ""), 600)}.
+
+`;
+  }
+  for (const n of configurationNotes(report).filter((x) => x.file !== report.policy.path)) {
+    text2 += `> ${n.weakens ? ICON.fail : ICON.notice} ${escapeMarkdown(n.text, 600)}.
 
 `;
   }

@@ -7,7 +7,7 @@
 
 import { logText, oneLine } from './escape.js';
 import { findingCost, findingNumbers, repoPath } from './finding-text.js';
-import { findingTitle } from './labels.js';
+import { configurationNotes, findingTitle } from './labels.js';
 import { SEVERITY_RANK, rankFiles } from './rank.js';
 import type { Finding, Report, Severity } from './report.js';
 
@@ -22,7 +22,7 @@ export interface Annotation {
   title: string;
   message: string;
   /** The finding kind; "more" for the closing notice about findings left out. */
-  rule: Finding['rule'] | 'more';
+  rule: Finding['rule'] | 'more' | 'own-settings';
   /** Whether the line is one the change touched (annotations show inline only there). */
   inDiff: boolean;
 }
@@ -97,6 +97,20 @@ export function annotationsOf(report: Report, options: AnnotationOptions = {}): 
         inDiff: touched ? touched.has(startLine) : false,
       });
     }
+  }
+  // The gate's own configuration, edited by the change: on the workflow and the policy files.
+  for (const n of configurationNotes(report)) {
+    const file = repoPath(options.pathPrefix, n.file);
+    const startLine = Math.max(1, n.line);
+    out.push({
+      level: n.weakens ? 'error' : 'notice',
+      file,
+      startLine,
+      title: n.weakens ? 'netbrace: the change weakens netbrace\u2019s own settings' : n.file === report.policy.path ? 'netbrace: policy changed (applies after merge)' : 'netbrace: the change edits netbrace\u2019s workflow',
+      message: logText(n.text),
+      rule: n.file === report.policy.path ? 'policy-changed' : 'own-settings',
+      inDiff: options.changedLines?.get(file)?.has(startLine) ?? false,
+    });
   }
   const rank = (a: Annotation) => SEVERITY_RANK[a.level === 'error' ? 'fail' : a.level === 'warning' ? 'warn' : 'notice'];
   // Stable sort: within a severity, touched lines first, then the files' worst-first order.

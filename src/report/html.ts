@@ -6,6 +6,7 @@
 
 import { attacksFor, envelopeChart, renderChartSvg, type EnvelopeChart } from './chart.js';
 import {
+  configurationNotes,
   consequenceSentence,
   contingencyLabel,
   describeChanges,
@@ -174,6 +175,8 @@ function masthead(r: Report): string {
       : `<code>${esc(r.policy.path ?? 'policy file')}</code>${r.policy.revision ? ` as of <code>${esc(shortRevision(r.policy.revision))}</code>` : ''}` +
         (r.policy.note ? `. ${esc(r.policy.note)}` : r.policy.changed ? ' (this change edits the policy; the proposed policy was not applied)' : ''),
   ]);
+  const own = configurationNotes(r).filter((x) => x.file !== r.policy.path);
+  if (own.length) meta.push(['Configuration', own.map((x) => `${x.weakens ? '<strong>' : ''}${esc(x.text)}${x.weakens ? '</strong>' : ''}`).join('<br>')]);
   if (r.scope === 'all') meta.push(['Scope', 'every design in the repository, judged against thresholds only']);
   meta.push(['Mode', r.mode === 'inform' ? 'inform: failures are reported, the run does not fail' : 'block: failures fail the check']);
   meta.push(['Seed', String(r.seed)]);

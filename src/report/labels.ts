@@ -2,7 +2,7 @@
 // a number is written, and where an element's line is found. Pure; no colour, no markup.
 
 import type { ChallengeName, ElementKind } from '../envelope/types.js';
-import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, RequirementResult } from './report.js';
+import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, Report, RequirementResult } from './report.js';
 
 
 const CHALLENGE_LABEL: Record<ChallengeName, string> = {
@@ -413,4 +413,23 @@ export function groupFindings(findings: readonly Finding[]): GroupedFinding[] {
 export function shortRevision(rev: string | undefined): string {
   if (rev === undefined) return '\u2013';
   return /^[0-9a-f]{40}([0-9a-f]{24})?$/.test(rev) ? rev.slice(0, 12) : rev;
+}
+
+/**
+ * The change edits the gate's own configuration: one sentence per setting of the workflow that
+ * runs netbrace, and one for the policy files; shown at the top of every view.
+ */
+export function configurationNotes(r: Report): { text: string; weakens: boolean; file: string; line: number }[] {
+  const out: { text: string; weakens: boolean; file: string; line: number }[] = [];
+  const c = r.configuration;
+  if (c) {
+    for (const x of c.changes) {
+      const tail = x.weakens ? '; it would weaken the check, so the base\u2019s setting applies and this fails' : '';
+      out.push({ text: `this change edits the workflow that runs netbrace (${c.workflow}, line ${x.line}): ${x.message}${tail}`, weakens: x.weakens, file: c.workflow, line: x.line });
+    }
+  }
+  if (r.policy.changed && r.policy.path) {
+    out.push({ text: `this change edits the policy (${(r.policy.files ?? [r.policy.path]).join(', ')}); ${r.policy.note ?? 'the base\u2019s version judges it'}`, weakens: false, file: r.policy.path, line: 1 });
+  }
+  return out;
 }

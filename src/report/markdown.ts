@@ -16,6 +16,7 @@ import {
   REQUIREMENT_STATUS_WORD,
   STATUS_WORD,
   challengeLabel,
+  configurationNotes,
   consequenceSentence,
   contingencyLabel,
   describeChanges,
@@ -249,6 +250,9 @@ function header(report: Report, options: MarkdownOptions): string {
     text += `> ${ICON.warn} This change modifies the policy file. ${said}\n\n`;
   } else if (report.policy.note) {
     text += `> ${ICON.notice} ${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ''), 600)}.\n\n`;
+  }
+  for (const n of configurationNotes(report).filter((x) => x.file !== report.policy.path)) {
+    text += `> ${n.weakens ? ICON.fail : ICON.notice} ${escapeMarkdown(n.text, 600)}.\n\n`;
   }
   for (const n of options.notes ?? []) text += `> ${escapeMarkdown(n, 500)}\n\n`;
   return text;

@@ -7,6 +7,7 @@ import type { Colors } from 'picocolors/types.js';
 import type { Envelope } from '../envelope/types.js';
 import { envelopeChart, type ChartSeries, type EnvelopeChart } from './chart.js';
 import {
+  configurationNotes,
   consequenceSentence,
   describeChanges,
   describeModifications,
@@ -72,8 +73,9 @@ function policyNotes(r: Report): string[] {
   const notes: string[] = [];
   if (r.policy.source === 'builtin') notes.push('policy: none found \u2014 the built-in defaults for communication backbones were applied');
   else notes.push(`policy: ${r.policy.path ?? '(file)'}${r.policy.revision ? ` as of ${shortRevision(r.policy.revision)}` : ''}`);
-  if (r.policy.note) notes.push(`policy: ${r.policy.note}`);
-  else if (r.policy.changed) notes.push('policy: this change edits the policy; the proposed policy was not applied to judge it');
+  if (r.policy.note && !r.policy.changed) notes.push(`policy: ${r.policy.note}`);
+  else if (r.policy.changed && !r.policy.path) notes.push('policy: this change edits the policy; the proposed policy was not applied to judge it');
+  for (const n of configurationNotes(r)) notes.push(`configuration: ${n.text}`);
   if (r.scope === 'all') notes.push('scope: every design in the repository, judged against thresholds only');
   if (r.mode === 'inform') notes.push('mode: inform \u2014 failures are reported but do not fail the run');
   return notes;

@@ -13,6 +13,7 @@ import { parse as parseYaml } from 'yaml';
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { commentMarker } from '../../src/report/markdown.js';
 import { workflowText } from '../../src/policy/workflow-template.js';
+import type { Report } from '../../src/report/report.js';
 import { inPart } from '../../src/run-gate.js';
 import { startFakeApi, type FakeApi } from './fake-api.js';
 import { execFileSync } from 'node:child_process';
@@ -394,6 +395,51 @@ describe('errors', () => {
     expect(onPolicy).toHaveLength(1);
     expect(Number(onPolicy[0].props.line)).toBe(POLICY.split('\n').findIndex((l) => l.includes('realizations')) + 1);
     expect(r.stderr).not.toMatch(/at .*\.js:\d+/); // no stack trace
+  }, 30_000);
+});
+
+describe('a pull request that edits the workflow running netbrace', () => {
+  const WORKFLOW = '.github/workflows/netbrace.yml';
+  const workflow = (settings: string) =>
+    `name: netbrace\non: [pull_request]\npermissions:\n  contents: read\n  pull-requests: write\njobs:\n  netbrace:\n    name: netbrace\n    runs-on: ubuntu-latest\n    steps:\n      - uses: actions/checkout@v5\n        with:\n          fetch-depth: 0\n      - uses: acme/netbrace@${'c'.repeat(40)}\n        with:\n${settings}`;
+
+  it('taking the policy from the head in inform mode is reported on the workflow file and, the base being in block mode, fails', async () => {
+    const author = path.join(work, 'author');
+    git(work, 'clone', '-q', `file://${scenario.origin}`, author);
+    const base = commit(author, 'the gate in block mode', { [WORKFLOW]: workflow('          mode: block\n') });
+    // The change weakens the design and, to get away with it, the workflow and the policy.
+    const head = commit(author, 'chain, and a friendlier gate', {
+      [DESIGN]: ring([], CHAIN_DROP),
+      '.netbrace.yaml': 'requirements: []\n',
+      [WORKFLOW]: workflow('          mode: inform\n          policy-source: head\n'),
+    });
+    // The runner hands the Action the head's inputs: what the edited workflow says.
+    const inputs = prInputs({ mode: 'inform', 'policy-source': 'head' });
+    const r = await runAction({
+      workspace: author,
+      runnerTemp: path.join(work, 'runner-temp'),
+      eventName: 'pull_request',
+      event: prEvent(base, head),
+      inputs,
+      apiUrl: api.url,
+      sha: head,
+      extraEnv: { GITHUB_WORKFLOW_REF: `acme/backbone/${WORKFLOW}@refs/pull/7/merge`, GITHUB_JOB: 'netbrace' },
+    });
+    expect(r.code, r.stdout + r.stderr).toBe(1);
+    expect(r.outputs.verdict).toBe('fail');
+    expect(failedMessages(r)[0]).toContain(`the change weakens netbrace's own settings in ${WORKFLOW}`);
+    const onWorkflow = commands(r.stdout, 'error').filter((c) => c.props.file === WORKFLOW);
+    expect(onWorkflow.map((c) => c.message).join('\n')).toMatch(/mode block → inform/);
+    expect(onWorkflow.map((c) => c.message).join('\n')).toMatch(/policy-source base → head/);
+    const report = JSON.parse(readFileSync(path.join(author, r.outputs.report), 'utf8')) as Report;
+    expect(report.configuration?.workflow).toBe(WORKFLOW);
+    expect(report.configuration?.changes.filter((c) => c.weakens).map((c) => c.setting).sort()).toEqual(['mode', 'policy-source']);
+    // The base's settings stayed in force: the base's policy judged the change, the head's
+    // (`requirements: []`) is only reported.
+    expect(report.policy.revision).toBe(base);
+    expect(report.policy.changed).toBe(true);
+    expect(report.mode).toBe('block');
+    expect(r.summary).toContain('this change edits the workflow that runs netbrace');
   }, 30_000);
 });
 

@@ -1,5 +1,5 @@
 import type { ChallengeName, ElementKind } from '../envelope/types.js';
-import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, RequirementResult } from './report.js';
+import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, Report, RequirementResult } from './report.js';
 export declare function challengeLabel(c: ChallengeName): string;
 export declare function kindPlural(k: ElementKind): string;
 export declare function kindSingular(k: ElementKind): string;
@@ -106,3 +106,13 @@ export declare function bySeverity<T extends Finding>(findings: readonly T[]): T
 export declare function groupFindings(findings: readonly Finding[]): GroupedFinding[];
 /** A revision for display: a full commit id shortened to 12 hex digits, anything else as given. */
 export declare function shortRevision(rev: string | undefined): string;
+/**
+ * The change edits the gate's own configuration: one sentence per setting of the workflow that
+ * runs netbrace, and one for the policy files; shown at the top of every view.
+ */
+export declare function configurationNotes(r: Report): {
+    text: string;
+    weakens: boolean;
+    file: string;
+    line: number;
+}[];
