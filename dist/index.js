@@ -46624,6 +46624,223 @@ function notePairedCuts(result, cuts, spec) {
   }
 }
 
+// src/gate/rename.ts
+function identityMatching(g) {
+  const id = (k) => Int32Array.from({ length: k }, (_, i) => i);
+  return {
+    nodeToHead: id(g.n),
+    nodeToBase: id(g.n),
+    linkToHead: id(g.m),
+    linkToBase: id(g.m),
+    groupToHead: id(g.groupIds.length),
+    groupToBase: id(g.groupIds.length),
+    renamedNodes: [],
+    renamedGroups: []
+  };
+}
+function neighbourhood(g, v, map) {
+  const matched = [];
+  let unmatched = 0;
+  for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
+    const w = map[g.neighbors[p]];
+    if (w < 0) unmatched++;
+    else matched.push(w);
+  }
+  matched.sort((a, b) => a - b);
+  return { matched, unmatched };
+}
+function headNeighbourhood(g, h, toBase) {
+  const matched = [];
+  let unmatched = 0;
+  for (let p = g.offsets[h]; p < g.offsets[h + 1]; p++) {
+    const w = g.neighbors[p];
+    if (toBase[w] < 0) unmatched++;
+    else matched.push(w);
+  }
+  matched.sort((a, b) => a - b);
+  return { matched, unmatched };
+}
+var signature = (nb) => `${nb.matched.join(",")}|${nb.unmatched}`;
+function addTo(map, key, value2) {
+  const list = map.get(key);
+  if (list) list.push(value2);
+  else map.set(key, [value2]);
+}
+function matchNodes(base, head) {
+  const toHead = new Int32Array(base.n).fill(-1);
+  const toBase = new Int32Array(head.n).fill(-1);
+  const byId2 = /* @__PURE__ */ new Set();
+  for (let b = 0; b < base.n; b++) {
+    const h = head.nodeIndex.get(base.nodeIds[b]);
+    if (h !== void 0) {
+      toHead[b] = h;
+      toBase[h] = b;
+      byId2.add(b);
+    }
+  }
+  for (; ; ) {
+    const baseBy = /* @__PURE__ */ new Map();
+    const headBy = /* @__PURE__ */ new Map();
+    for (let b = 0; b < base.n; b++) {
+      if (toHead[b] >= 0) continue;
+      const nb = neighbourhood(base, b, toHead);
+      if (nb.matched.length === 0) continue;
+      addTo(baseBy, signature(nb), b);
+    }
+    if (baseBy.size === 0) break;
+    for (let h = 0; h < head.n; h++) {
+      if (toBase[h] >= 0) continue;
+      const nb = headNeighbourhood(head, h, toBase);
+      if (nb.matched.length === 0) continue;
+      addTo(headBy, signature(nb), h);
+    }
+    let made = 0;
+    for (const [key, bs] of baseBy) {
+      const hs = headBy.get(key);
+      if (bs.length !== 1 || hs?.length !== 1) continue;
+      toHead[bs[0]] = hs[0];
+      toBase[hs[0]] = bs[0];
+      made++;
+    }
+    if (made === 0) break;
+  }
+  for (let changed = true; changed; ) {
+    changed = false;
+    for (let b = 0; b < base.n; b++) {
+      const h = toHead[b];
+      if (h < 0 || byId2.has(b)) continue;
+      const nb = neighbourhood(base, b, toHead);
+      const nh = headNeighbourhood(head, h, toBase);
+      if (nb.unmatched === 0 && nh.unmatched === 0 && signature(nb) === signature(nh)) continue;
+      toHead[b] = -1;
+      toBase[h] = -1;
+      changed = true;
+    }
+  }
+  return { toHead, toBase };
+}
+function linksByEnds(g, endOf) {
+  const out = /* @__PURE__ */ new Map();
+  for (let e = 0; e < g.m; e++) {
+    const a = endOf(g.linkSource[e]);
+    const b = endOf(g.linkTarget[e]);
+    if (a < 0 || b < 0) continue;
+    const key = a < b ? `${a}-${b}` : `${b}-${a}`;
+    const list = out.get(key);
+    if (list) list.push(e);
+    else out.set(key, [e]);
+  }
+  return out;
+}
+function groupMembers(g, k) {
+  return Array.from(g.groupLinks.subarray(g.groupOffsets[k], g.groupOffsets[k + 1]));
+}
+function matchDesigns(base, head) {
+  const nodes = matchNodes(base, head);
+  const linkToHead = new Int32Array(base.m).fill(-1);
+  const linkToBase = new Int32Array(head.m).fill(-1);
+  const headLinks = linksByEnds(head, (v) => v);
+  for (const [key, bs] of linksByEnds(base, (v) => nodes.toHead[v])) {
+    const hs = headLinks.get(key) ?? [];
+    for (let i = 0; i < Math.min(bs.length, hs.length); i++) {
+      linkToHead[bs[i]] = hs[i];
+      linkToBase[hs[i]] = bs[i];
+    }
+  }
+  const G = base.groupIds.length;
+  const H = head.groupIds.length;
+  const groupToHead = new Int32Array(G).fill(-1);
+  const groupToBase = new Int32Array(H).fill(-1);
+  const headGroup = new Map(head.groupIds.map((id, k) => [id, k]));
+  for (let k = 0; k < G; k++) {
+    const h = headGroup.get(base.groupIds[k]);
+    if (h !== void 0) {
+      groupToHead[k] = h;
+      groupToBase[h] = k;
+    }
+  }
+  const membersKey = (list) => [...list].sort((a, b) => a - b).join(",");
+  const baseBy = /* @__PURE__ */ new Map();
+  for (let k = 0; k < G; k++) {
+    if (groupToHead[k] >= 0) continue;
+    const mapped = groupMembers(base, k).map((e) => linkToHead[e]);
+    if (mapped.length === 0 || mapped.some((e) => e < 0)) continue;
+    addTo(baseBy, membersKey(mapped), k);
+  }
+  const headBy = /* @__PURE__ */ new Map();
+  for (let h = 0; h < H; h++) {
+    if (groupToBase[h] >= 0) continue;
+    const members = groupMembers(head, h);
+    if (members.length === 0) continue;
+    addTo(headBy, membersKey(members), h);
+  }
+  for (const [key, ks] of baseBy) {
+    const hs = headBy.get(key);
+    if (ks.length !== 1 || hs?.length !== 1) continue;
+    groupToHead[ks[0]] = hs[0];
+    groupToBase[hs[0]] = ks[0];
+  }
+  const renamedNodes = [];
+  for (let h = 0; h < head.n; h++) {
+    const b = nodes.toBase[h];
+    if (b >= 0 && base.nodeIds[b] !== head.nodeIds[h]) renamedNodes.push([b, h]);
+  }
+  const renamedGroups = [];
+  for (let h = 0; h < H; h++) {
+    const b = groupToBase[h];
+    if (b >= 0 && base.groupIds[b] !== head.groupIds[h]) renamedGroups.push([b, h]);
+  }
+  return {
+    nodeToHead: nodes.toHead,
+    nodeToBase: nodes.toBase,
+    linkToHead,
+    linkToBase,
+    groupToHead,
+    groupToBase,
+    renamedNodes,
+    renamedGroups
+  };
+}
+function sameValue(a, i, b, j) {
+  const x = a ? a[i] : Number.NaN;
+  const y = b ? b[j] : Number.NaN;
+  return Object.is(x, y) || Number.isNaN(x) && Number.isNaN(y);
+}
+function sameDesign(base, head, m) {
+  if (base.n !== head.n || base.m !== head.m || base.groupIds.length !== head.groupIds.length) return false;
+  if (base.demandVolume.length !== head.demandVolume.length || !Object.is(base.latencyBudget, head.latencyBudget)) return false;
+  for (let v = 0; v < base.n; v++) {
+    const h = m.nodeToHead[v];
+    if (h < 0 || base.nodeHardened[v] !== head.nodeHardened[h]) return false;
+    if (!sameValue(base.lat, v, head.lat, h) || !sameValue(base.lon, v, head.lon, h)) return false;
+  }
+  const groupsOf2 = (g) => {
+    const out = Array.from({ length: g.m }, () => []);
+    for (let k = 0; k < g.groupIds.length; k++) for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) out[g.groupLinks[p]].push(k);
+    return out;
+  };
+  const bg = groupsOf2(base);
+  const hg = groupsOf2(head);
+  for (let e = 0; e < base.m; e++) {
+    const f = m.linkToHead[e];
+    if (f < 0 || base.linkHardened[e] !== head.linkHardened[f]) return false;
+    const a = [m.nodeToHead[base.linkSource[e]], m.nodeToHead[base.linkTarget[e]]].sort((x, y) => x - y);
+    const b = [head.linkSource[f], head.linkTarget[f]].sort((x, y) => x - y);
+    if (a[0] !== b[0] || a[1] !== b[1]) return false;
+    if (!sameValue(base.length, e, head.length, f) || !sameValue(base.latency, e, head.latency, f) || !sameValue(base.weight, e, head.weight, f)) return false;
+    const ga = bg[e].map((k) => m.groupToHead[k]).sort((x, y) => x - y);
+    const gb = [...hg[f]].sort((x, y) => x - y);
+    if (ga.length !== gb.length || ga.some((k, i) => k !== gb[i])) return false;
+  }
+  const demands = (g, map) => Array.from(g.demandVolume, (vol, d) => {
+    const [s, t] = [map(g.demandSource[d]), map(g.demandTarget[d])].sort((x, y) => x - y);
+    return `${s} ${t} ${vol}`;
+  }).sort();
+  const da = demands(base, (v) => m.nodeToHead[v]);
+  const db = demands(head, (v) => v);
+  return da.every((x, i) => x === db[i]);
+}
+
 // src/graph/consequence.ts
 function removalCost(g, mask, intact = findComponents(g, createMask(g))) {
   const before = intact;
@@ -46877,184 +47094,6 @@ function designChanges(base, head) {
   }
   if (added.length + removed.length + modified.length === 0) return void 0;
   return modified.length ? { added, removed, modified } : { added, removed };
-}
-
-// src/gate/rename.ts
-function identityMatching(g) {
-  const id = (k) => Int32Array.from({ length: k }, (_, i) => i);
-  return {
-    nodeToHead: id(g.n),
-    nodeToBase: id(g.n),
-    linkToHead: id(g.m),
-    linkToBase: id(g.m),
-    groupToHead: id(g.groupIds.length),
-    groupToBase: id(g.groupIds.length),
-    renamedNodes: [],
-    renamedGroups: []
-  };
-}
-function neighbourhood(g, v, map) {
-  const matched = [];
-  let unmatched = 0;
-  for (let p = g.offsets[v]; p < g.offsets[v + 1]; p++) {
-    const w = map[g.neighbors[p]];
-    if (w < 0) unmatched++;
-    else matched.push(w);
-  }
-  matched.sort((a, b) => a - b);
-  return { matched, unmatched };
-}
-function headNeighbourhood(g, h, toBase) {
-  const matched = [];
-  let unmatched = 0;
-  for (let p = g.offsets[h]; p < g.offsets[h + 1]; p++) {
-    const w = g.neighbors[p];
-    if (toBase[w] < 0) unmatched++;
-    else matched.push(w);
-  }
-  matched.sort((a, b) => a - b);
-  return { matched, unmatched };
-}
-var signature = (nb) => `${nb.matched.join(",")}|${nb.unmatched}`;
-function addTo(map, key, value2) {
-  const list = map.get(key);
-  if (list) list.push(value2);
-  else map.set(key, [value2]);
-}
-function matchNodes(base, head) {
-  const toHead = new Int32Array(base.n).fill(-1);
-  const toBase = new Int32Array(head.n).fill(-1);
-  const byId2 = /* @__PURE__ */ new Set();
-  for (let b = 0; b < base.n; b++) {
-    const h = head.nodeIndex.get(base.nodeIds[b]);
-    if (h !== void 0) {
-      toHead[b] = h;
-      toBase[h] = b;
-      byId2.add(b);
-    }
-  }
-  for (; ; ) {
-    const baseBy = /* @__PURE__ */ new Map();
-    const headBy = /* @__PURE__ */ new Map();
-    for (let b = 0; b < base.n; b++) {
-      if (toHead[b] >= 0) continue;
-      const nb = neighbourhood(base, b, toHead);
-      if (nb.matched.length === 0) continue;
-      addTo(baseBy, signature(nb), b);
-    }
-    if (baseBy.size === 0) break;
-    for (let h = 0; h < head.n; h++) {
-      if (toBase[h] >= 0) continue;
-      const nb = headNeighbourhood(head, h, toBase);
-      if (nb.matched.length === 0) continue;
-      addTo(headBy, signature(nb), h);
-    }
-    let made = 0;
-    for (const [key, bs] of baseBy) {
-      const hs = headBy.get(key);
-      if (bs.length !== 1 || hs?.length !== 1) continue;
-      toHead[bs[0]] = hs[0];
-      toBase[hs[0]] = bs[0];
-      made++;
-    }
-    if (made === 0) break;
-  }
-  for (let changed = true; changed; ) {
-    changed = false;
-    for (let b = 0; b < base.n; b++) {
-      const h = toHead[b];
-      if (h < 0 || byId2.has(b)) continue;
-      const nb = neighbourhood(base, b, toHead);
-      const nh = headNeighbourhood(head, h, toBase);
-      if (nb.unmatched === 0 && nh.unmatched === 0 && signature(nb) === signature(nh)) continue;
-      toHead[b] = -1;
-      toBase[h] = -1;
-      changed = true;
-    }
-  }
-  return { toHead, toBase };
-}
-function linksByEnds(g, endOf) {
-  const out = /* @__PURE__ */ new Map();
-  for (let e = 0; e < g.m; e++) {
-    const a = endOf(g.linkSource[e]);
-    const b = endOf(g.linkTarget[e]);
-    if (a < 0 || b < 0) continue;
-    const key = a < b ? `${a}-${b}` : `${b}-${a}`;
-    const list = out.get(key);
-    if (list) list.push(e);
-    else out.set(key, [e]);
-  }
-  return out;
-}
-function groupMembers(g, k) {
-  return Array.from(g.groupLinks.subarray(g.groupOffsets[k], g.groupOffsets[k + 1]));
-}
-function matchDesigns(base, head) {
-  const nodes = matchNodes(base, head);
-  const linkToHead = new Int32Array(base.m).fill(-1);
-  const linkToBase = new Int32Array(head.m).fill(-1);
-  const headLinks = linksByEnds(head, (v) => v);
-  for (const [key, bs] of linksByEnds(base, (v) => nodes.toHead[v])) {
-    const hs = headLinks.get(key) ?? [];
-    for (let i = 0; i < Math.min(bs.length, hs.length); i++) {
-      linkToHead[bs[i]] = hs[i];
-      linkToBase[hs[i]] = bs[i];
-    }
-  }
-  const G = base.groupIds.length;
-  const H = head.groupIds.length;
-  const groupToHead = new Int32Array(G).fill(-1);
-  const groupToBase = new Int32Array(H).fill(-1);
-  const headGroup = new Map(head.groupIds.map((id, k) => [id, k]));
-  for (let k = 0; k < G; k++) {
-    const h = headGroup.get(base.groupIds[k]);
-    if (h !== void 0) {
-      groupToHead[k] = h;
-      groupToBase[h] = k;
-    }
-  }
-  const membersKey = (list) => [...list].sort((a, b) => a - b).join(",");
-  const baseBy = /* @__PURE__ */ new Map();
-  for (let k = 0; k < G; k++) {
-    if (groupToHead[k] >= 0) continue;
-    const mapped = groupMembers(base, k).map((e) => linkToHead[e]);
-    if (mapped.length === 0 || mapped.some((e) => e < 0)) continue;
-    addTo(baseBy, membersKey(mapped), k);
-  }
-  const headBy = /* @__PURE__ */ new Map();
-  for (let h = 0; h < H; h++) {
-    if (groupToBase[h] >= 0) continue;
-    const members = groupMembers(head, h);
-    if (members.length === 0) continue;
-    addTo(headBy, membersKey(members), h);
-  }
-  for (const [key, ks] of baseBy) {
-    const hs = headBy.get(key);
-    if (ks.length !== 1 || hs?.length !== 1) continue;
-    groupToHead[ks[0]] = hs[0];
-    groupToBase[hs[0]] = ks[0];
-  }
-  const renamedNodes = [];
-  for (let h = 0; h < head.n; h++) {
-    const b = nodes.toBase[h];
-    if (b >= 0 && base.nodeIds[b] !== head.nodeIds[h]) renamedNodes.push([b, h]);
-  }
-  const renamedGroups = [];
-  for (let h = 0; h < H; h++) {
-    const b = groupToBase[h];
-    if (b >= 0 && base.groupIds[b] !== head.groupIds[h]) renamedGroups.push([b, h]);
-  }
-  return {
-    nodeToHead: nodes.toHead,
-    nodeToBase: nodes.toBase,
-    linkToHead,
-    linkToBase,
-    groupToHead,
-    groupToBase,
-    renamedNodes,
-    renamedGroups
-  };
 }
 
 // src/gate/spof.ts
@@ -47634,7 +47673,7 @@ function compareDesign(input) {
     );
   }
   const comparing = effective.base !== void 0 && !effective.thresholdsOnly;
-  const matching = !comparing ? void 0 : effective.base.result === input.head.result ? identityMatching(input.head.graph) : matchDesigns(effective.base.graph, input.head.graph);
+  const matching = !comparing ? void 0 : effective.base.graph === input.head.graph ? identityMatching(input.head.graph) : matchDesigns(effective.base.graph, input.head.graph);
   for (const r of input.policy.requirements) {
     const description = describeRequirement(r, input.policy.challenges);
     const { rows, findings } = r.kind === "no-new-spof" ? judgeSpof(r, description, input.head, comparing ? effective.base : void 0, matching) : judge(r, effective, description);
@@ -47651,7 +47690,7 @@ function compareDesign(input) {
   }
   report.head = withSequenceDetails(input.head.result.evaluation, input.head.graph);
   if (effective.base && !effective.thresholdsOnly) {
-    report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.graph);
+    report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.result === input.head.result ? input.head.graph : effective.base.graph);
     const changes = elementChanges2(effective.base, input.head, matching);
     const modified = effective.base.topology && input.head.topology ? designChanges(effective.base.topology, input.head.topology)?.modified : void 0;
     if (modified?.length) changes.modified = modified;
@@ -48688,7 +48727,7 @@ var policy_schema_default = {
         paths: { description: "Globs of design files (relative to the repository root).", $ref: "#/definitions/globs" },
         format: {
           description: "The format of the matched files, where the extension does not say it.",
-          enum: ["native-yaml", "native-json", "graphml", "gml", "csv"]
+          enum: ["native-yaml", "native-json", "graphml", "gml", "csv", "geojson"]
         }
       }
     },
@@ -57074,7 +57113,9 @@ async function runGate(request2, deps) {
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
           input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request2, deps);
           if (same) input.base = input.head;
-          else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology, specs.base, specs.cuts, request2, deps);
+          else if (baseGraph && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) {
+            input.base = { graph: baseGraph, topology: baseTopology, result: input.head.result };
+          } else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology, specs.base, specs.cuts, request2, deps);
         }
       }
     }

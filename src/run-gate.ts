@@ -22,6 +22,7 @@ import { evaluateDesign, type DesignEvaluation, type EvaluationSpec } from './en
 import type { ChallengeParams } from './envelope/types.js';
 import { compileTopology, type CompactGraph } from './graph/compact.js';
 import { budgetSpecs, notePairedCuts, type PairedCut } from './gate/budget.js';
+import { matchDesigns, sameDesign } from './gate/rename.js';
 import { compareDesign, type CompareInput, type DesignSide } from './gate/compare.js';
 import { countStatuses, exitCodeOf, verdictOf } from './gate/verdict.js';
 import { pairDesigns, type UnpairedDesign } from './gate/pair-designs.js';
@@ -600,7 +601,11 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
           input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
           if (same) input.base = input.head;
-          else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
+          else if (baseGraph && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) {
+            // Only ids are spelt differently: one evaluation judges both sides (delta exactly 0),
+            // and the base keeps its own graph so that the renames are still listed.
+            input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
+          } else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
         }
       }
     }

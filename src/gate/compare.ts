@@ -406,7 +406,7 @@ export function compareDesign(input: CompareInput): FileReport {
     );
   }
   const comparing = effective.base !== undefined && !effective.thresholdsOnly;
-  const matching = !comparing ? undefined : effective.base!.result === input.head.result ? identityMatching(input.head.graph) : matchDesigns(effective.base!.graph, input.head.graph);
+  const matching = !comparing ? undefined : effective.base!.graph === input.head.graph ? identityMatching(input.head.graph) : matchDesigns(effective.base!.graph, input.head.graph);
   for (const r of input.policy.requirements) {
     const description = describeRequirement(r, input.policy.challenges);
     const { rows, findings } =
@@ -424,7 +424,7 @@ export function compareDesign(input: CompareInput): FileReport {
   }
   report.head = withSequenceDetails(input.head.result.evaluation, input.head.graph);
   if (effective.base && !effective.thresholdsOnly) {
-    report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.graph);
+    report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.result === input.head.result ? input.head.graph : effective.base.graph);
     const changes = elementChanges(effective.base, input.head, matching);
     // Attributes changed on elements both sides have (by id and link key), with both lines.
     const modified = effective.base.topology && input.head.topology ? designChanges(effective.base.topology, input.head.topology)?.modified : undefined;

@@ -221,3 +221,52 @@ export function matchDesigns(base: CompactGraph, head: CompactGraph): Matching {
     renamedGroups,
   };
 }
+
+/** Equal numbers, or both unknown (NaN), or both columns absent. */
+function sameValue(a: Float64Array | null, i: number, b: Float64Array | null, j: number): boolean {
+  const x = a ? a[i] : Number.NaN;
+  const y = b ? b[j] : Number.NaN;
+  return Object.is(x, y) || (Number.isNaN(x) && Number.isNaN(y));
+}
+
+/**
+ * Whether base and head are the same design once renamed ids are read through the matching:
+ * every node, link and shared-risk group matched, with the same ends, flags, coordinates,
+ * lengths, latencies, weights and group memberships, and the same demands. Such a change only
+ * spells ids differently, so it is judged on one evaluation (every delta exactly 0).
+ */
+export function sameDesign(base: CompactGraph, head: CompactGraph, m: Matching): boolean {
+  if (base.n !== head.n || base.m !== head.m || base.groupIds.length !== head.groupIds.length) return false;
+  if (base.demandVolume.length !== head.demandVolume.length || !Object.is(base.latencyBudget, head.latencyBudget)) return false;
+  for (let v = 0; v < base.n; v++) {
+    const h = m.nodeToHead[v];
+    if (h < 0 || base.nodeHardened[v] !== head.nodeHardened[h]) return false;
+    if (!sameValue(base.lat, v, head.lat, h) || !sameValue(base.lon, v, head.lon, h)) return false;
+  }
+  const groupsOf = (g: CompactGraph) => {
+    const out: number[][] = Array.from({ length: g.m }, () => []);
+    for (let k = 0; k < g.groupIds.length; k++) for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) out[g.groupLinks[p]].push(k);
+    return out;
+  };
+  const bg = groupsOf(base);
+  const hg = groupsOf(head);
+  for (let e = 0; e < base.m; e++) {
+    const f = m.linkToHead[e];
+    if (f < 0 || base.linkHardened[e] !== head.linkHardened[f]) return false;
+    const a = [m.nodeToHead[base.linkSource[e]], m.nodeToHead[base.linkTarget[e]]].sort((x, y) => x - y);
+    const b = [head.linkSource[f], head.linkTarget[f]].sort((x, y) => x - y);
+    if (a[0] !== b[0] || a[1] !== b[1]) return false;
+    if (!sameValue(base.length, e, head.length, f) || !sameValue(base.latency, e, head.latency, f) || !sameValue(base.weight, e, head.weight, f)) return false;
+    const ga = bg[e].map((k) => m.groupToHead[k]).sort((x, y) => x - y);
+    const gb = [...hg[f]].sort((x, y) => x - y);
+    if (ga.length !== gb.length || ga.some((k, i) => k !== gb[i])) return false;
+  }
+  const demands = (g: CompactGraph, map: (v: number) => number) =>
+    Array.from(g.demandVolume, (vol, d) => {
+      const [s, t] = [map(g.demandSource[d]), map(g.demandTarget[d])].sort((x, y) => x - y);
+      return `${s} ${t} ${vol}`;
+    }).sort();
+  const da = demands(base, (v) => m.nodeToHead[v]);
+  const db = demands(head, (v) => v);
+  return da.every((x, i) => x === db[i]);
+}
