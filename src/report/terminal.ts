@@ -261,10 +261,11 @@ export function terminalChart(chart: EnvelopeChart, env: Envelope, c: Colors, wi
   const out = wrap(`${chart.title} (${chart.xLabel}, 0 to ${xEnd}; ${env.realizations} realizations)`, width - 2).map((l) => `  ${l}`);
   for (let row = 0; row < ROWS; row++) {
     const label = row === 0 ? '1.0' : row === ROWS / 2 ? '0.5' : row === ROWS - 1 ? '0.0' : '';
-    const axis = label ? '\u2524' : '\u2502';
+    // Our own frame: a dashed rail on the left (a dot marks the labelled rows) and a dotted floor.
+    const axis = label ? '\u2022' : '\u254e';
     out.push(`  ${label.padStart(4)} ${axis}${cell[row].map((k) => k.paint(k.ch)).join('')}`);
   }
-  out.push(`       \u2514${'\u2500'.repeat(cols)}`);
+  out.push(`       \u2575${'\u2508'.repeat(cols)}`);
   out.push(`        ${'0'.padEnd(cols - xEnd.length)}${xEnd}`);
   out.push(...pack(legend, width - 4).map((l) => `  ${l}`));
   return out;

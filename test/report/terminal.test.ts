@@ -43,8 +43,8 @@ describe('renderTerminal', () => {
     const top = lines.findIndex((l) => l.includes('R under random site failures'));
     const grid = lines.slice(top + 1, top + 11).join('\n');
     for (const ch of ['\u2591', '\u25cf', '1', '2', '\u00d7', '\u00b7']) expect(grid).toContain(ch);
-    expect(lines[top + 1]).toMatch(/^\s+1\.0 \u2524/);
-    expect(lines[top + 10]).toMatch(/^\s+0\.0 \u2524/);
+    expect(lines[top + 1]).toMatch(/^\s+1\.0 \u2022/);
+    expect(lines[top + 10]).toMatch(/^\s+0\.0 \u2022/);
     const legend = lines.slice(top + 13, top + 16).join(' ');
     expect(legend).toContain('\u2591 10\u201390 % band');
     expect(legend).toContain('1 degree attack');
@@ -58,7 +58,7 @@ describe('renderTerminal', () => {
     const top = lines.findIndex((l) => l.includes('R under random site failures'));
     // head median at x = 0 is 0.794, which lies in the row for [0.7, 0.8): the third grid row.
     const third = lines[top + 3];
-    const firstCell = third.slice(third.indexOf('\u2502') + 1, third.indexOf('\u2502') + 2);
+    const firstCell = third.slice(third.indexOf('\u254e') + 1, third.indexOf('\u254e') + 2);
     expect(firstCell).toBe('\u25cf');
   });
 
