@@ -94,7 +94,7 @@ export function judgeSpof(
     delta: before ? sizeOf(now, part.kind) - sizeOf(before, part.kind) : null,
     se: before ? 0 : null,
     threshold: null,
-    status: 'met',
+    status: 'holds',
   }));
   const findings: Finding[] = [];
   if (!base || !before || !matching) return { rows, findings };
@@ -186,8 +186,8 @@ export function judgeSpof(
   parts.forEach((part, i) => {
     const mine = findings.filter((x) => x.rule !== 'degraded' && partOf(x) === part.kind);
     const weakHere = mine.some((x) => x.rule !== 'hardened-weak-point');
-    if (weakHere || (mine.length > 0 && r.hardenedWeakPoints === 'fail')) rows[i].status = 'regressed';
-    else if (mine.length > 0) rows[i].status = 'uncertain';
+    if (weakHere || (mine.length > 0 && r.hardenedWeakPoints === 'fail')) rows[i].status = 'weakened';
+    else if (mine.length > 0) rows[i].status = 'unsettled';
   });
   for (const x of findings) {
     const i = parts.findIndex((p) => p.kind === partOf(x));

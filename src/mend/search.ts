@@ -80,7 +80,7 @@ export function mendTargets(report: FileReport): MendTarget[] {
     if (f.severity === 'notice' || !FIXABLE.has(f.rule)) continue;
     if (f.rule !== 'new-bridge' && f.rule !== 'new-cut-node') {
       const row = f.requirement ? rows.get(f.requirement) : undefined;
-      if (!row || (row.status !== 'missed' && row.status !== 'regressed')) continue;
+      if (!row || (row.status !== 'short' && row.status !== 'weakened')) continue;
     }
     const key = targetKey(f);
     if (seen.has(key)) continue;
@@ -338,7 +338,7 @@ function hardenSet(targets: readonly MendTarget[]): ReportElement[] {
 }
 
 function fails(r: FileReport): boolean {
-  return r.status === 'error' || r.findings.some((f) => f.severity === 'fail');
+  return r.status === 'unreadable' || r.findings.some((f) => f.severity === 'fail');
 }
 
 function remaining(r: FileReport, targets: readonly MendTarget[]): string[] {
@@ -407,7 +407,7 @@ function suggestion(
     .filter((r) => wanted.has(r.id))
     .map((r) => {
       const a = afterRows.get(r.id);
-      return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? 'uncertain' };
+      return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? 'unsettled' };
     });
   return {
     kind,

@@ -199,7 +199,7 @@ function describeBudget(b: Budget): string {
 
 /**
  * Apply the keys `next` sets on top of `prev`. A budget is not a floor, but it is the effort
- * that judges the floors: what a smaller one cannot settle is "uncertain" (a warning), so a
+ * that judges the floors: what a smaller one cannot settle is "unsettled" (a warning), so a
  * derived file or a scope may raise it, never lower it.
  */
 function mergeBudget(prev: Layered<Budget>, next: Layered<Budget>, what: string): Layered<Budget> {

@@ -188,7 +188,7 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
   for (const f of rankFiles(report.files)) {
     const path = repoPath(options.pathPrefix, f.path);
     const findings = rankFindings(f.findings);
-    if (f.status === 'error' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
+    if (f.status === 'unreadable' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
       findings.unshift({ rule: 'parse-error', severity: 'fail', message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
     }
     for (const x of findings) {

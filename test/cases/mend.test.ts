@@ -21,7 +21,7 @@ describe('mending the demo change 1 through the CLI', () => {
     const run = await runCase('mend-demo-change-1');
     expect(run.code, run.out + run.err).toBe(1);
     const failing = run.report!.files[0];
-    expect(failing.status).toBe('regressed');
+    expect(failing.status).toBe('weakened');
     const mend = failing.mend!;
     expect(mend.suggestions.length).toBeGreaterThan(0);
     const first = mend.suggestions[0];

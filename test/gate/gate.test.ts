@@ -21,7 +21,7 @@ describe('gate decisions on fixture pairs', () => {
     expect(exitCode).toBe(1);
     expect(report.verdict).toBe('fail');
     const f = fileOf(report);
-    expect(f.status).toBe('regressed');
+    expect(f.status).toBe('weakened');
     const head = gateFixture('ring-to-chain/head.net.yaml');
     // Every link of a path is a bridge and every inner node a cut node (common practice, textbook fact).
     const bridges = f.findings.filter((x) => x.rule === 'new-bridge');
@@ -34,9 +34,9 @@ describe('gate decisions on fixture pairs', () => {
     // Bridges and cut nodes are counted in rows of their own, never added together.
     const rows = f.requirements.filter((r) => r.id.startsWith('no-new-spof')).map((r) => [r.id, r.description, r.base, r.head, r.status]);
     expect(rows).toEqual([
-      ['no-new-spof/bridges', 'no new bridges', 0, 5, 'regressed'],
-      ['no-new-spof/cut-nodes', 'no new cut nodes', 0, 4, 'regressed'],
-      ['no-new-spof/risk-groups', 'no new shared-risk groups that strand sites', 0, 0, 'met'],
+      ['no-new-spof/bridges', 'no new bridges', 0, 5, 'weakened'],
+      ['no-new-spof/cut-nodes', 'no new cut nodes', 0, 4, 'weakened'],
+      ['no-new-spof/risk-groups', 'no new shared-risk groups that strand sites', 0, 0, 'holds'],
     ]);
     // The removed span is listed with its line in the base.
     expect(f.changes?.removed).toEqual([
@@ -96,7 +96,7 @@ describe('gate decisions on fixture pairs', () => {
     const strict = gateFixture('policy.yaml').replace('allowed-drop: 0.05', 'allowed-drop: 0');
     const { report } = await gate(pairRepo('removed-node', FILE, strict));
     const f = fileOf(report);
-    const noisy = f.requirements.filter((r) => r.status === 'within-noise');
+    const noisy = f.requirements.filter((r) => r.status === 'inside-error');
     expect(noisy.length).toBeGreaterThan(0);
     for (const r of noisy) expect(-r.delta!).toBeLessThan(2 * r.se!);
     for (const r of noisy) {
@@ -104,7 +104,7 @@ describe('gate decisions on fixture pairs', () => {
       expect([x.severity, /within noise, not a failure/.test(x.message)]).toEqual(['notice', true]);
     }
     // Drops beyond the noise with no allowance are regressions.
-    const regressed = f.requirements.filter((r) => r.status === 'regressed');
+    const regressed = f.requirements.filter((r) => r.status === 'weakened');
     for (const r of regressed) expect(-r.delta!).toBeGreaterThanOrEqual(2 * r.se!);
     expect(report.verdict).toBe(regressed.length > 0 ? 'fail' : 'pass');
   });
@@ -194,9 +194,9 @@ describe('envelope floors read the engine\'s envelope', () => {
     expect(j).toBeGreaterThan(0); // 0, 1/6, 1/3, 1/2 plus the threshold's 0.2
     const [q, spread] = f.requirements;
     expect(q.head).toBe(env.quantiles['0.1'].value[j]);
-    expect(q.status).toBe('missed');
+    expect(q.status).toBe('short');
     expect(spread.head).toBe(env.spread);
-    expect(spread.status).toBe(env.spread > 0.0001 ? 'missed' : 'met');
+    expect(spread.status).toBe(env.spread > 0.0001 ? 'short' : 'holds');
     // 0.2 of 11 nodes is 2.2 removals: R is read between 2 and 3, so 3 elements stand behind it.
     expect(f.findings.find((x) => x.rule === 'r-threshold')!.elements.length).toBe(Math.ceil(0.2 * 11));
   });
@@ -207,7 +207,7 @@ describe('envelope floors read the engine\'s envelope', () => {
     const j = env.x.indexOf(0.2);
     const band = env.quantiles['0.1'];
     const f = fileOf((await run(band.value[j])).report);
-    expect(f.requirements[0].status).toBe(band.lo[j] < band.value[j] ? 'uncertain' : 'met');
+    expect(f.requirements[0].status).toBe(band.lo[j] < band.value[j] ? 'unsettled' : 'holds');
     expect(band.lo[j]).toBeLessThan(band.value[j]); // this design's band is wide enough to show it
   });
 });
@@ -254,12 +254,12 @@ describe('a threshold on a known attack curve (karate club, static degree attack
     const f = fileOf(report, 'karate.net.yaml');
     const [met, missed] = f.requirements;
     expect(met.id).toBe('r-threshold:hubs@0.06:value');
-    expect(met.status).toBe('met');
+    expect(met.status).toBe('holds');
     // R at 0.06 · 34 = 2.04 and 0.12 · 34 = 4.08 removals, linear between the reference's steps.
     expect(met.head).toBeCloseTo(curve[2] + 0.04 * (curve[3] - curve[2]), 12);
-    expect(missed.status).toBe('missed');
+    expect(missed.status).toBe('short');
     expect(missed.head).toBeCloseTo(curve[4] + 0.08 * (curve[5] - curve[4]), 12);
-    expect(f.status).toBe('below-threshold');
+    expect(f.status).toBe('below-floor');
     expect(exitCode).toBe(1);
     const finding = f.findings.find((x) => x.rule === 'r-threshold')!;
     expect(finding.elements.map((e) => e.id)).toEqual(sequence.slice(0, 5).map(String));
@@ -296,9 +296,9 @@ describe('a threshold on a known attack curve (karate club, static degree attack
     const { report } = await runGate({ head: 'head', policySource: 'head', mode: 'block', paths: ['karate.net.yaml'] }, memoryDeps(repo));
     const f = fileOf(report, 'karate.net.yaml');
     const [wc, n1] = f.requirements;
-    expect([wc.id, wc.status]).toEqual(['r-threshold:failures:worst-case\u00d72', 'missed']);
+    expect([wc.id, wc.status]).toEqual(['r-threshold:failures:worst-case\u00d72', 'short']);
     expect(wc.head).toBeCloseTo(worst['2'].value, 12);
-    expect([n1.id, n1.status]).toEqual(['n-1:node', 'missed']);
+    expect([n1.id, n1.status]).toEqual(['n-1:node', 'short']);
     expect(n1.head).toBeCloseTo(worst['1'].value, 12);
     const byReq = (id: string) => f.findings.find((x) => x.requirement === id)!;
     expect(byReq(wc.id).elements.map((e) => e.id).sort()).toEqual(worst['2'].set.map(String).sort());

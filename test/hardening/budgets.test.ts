@@ -119,7 +119,7 @@ describe('the report marks a reduced evaluation, in every view', () => {
     const reqs = threshold('median', 0.01) + threshold('mean', 0.01) + '  - kind: area-floor\n    challenge: failures\n    min: 0.01\n  - kind: no-new-spof\n';
     const f = await judge(policy(reqs), 2 * VISITS * 40);
     const touched = f.requirements.filter((r) => !r.id.startsWith('no-new-spof'));
-    expect(touched.map((r) => r.status)).toEqual(['met', 'met', 'met']);
+    expect(touched.map((r) => r.status)).toEqual(['holds', 'holds', 'holds']);
     for (const r of touched) {
       const own = f.findings.filter((x) => x.requirement === r.id);
       expect(own.map((x) => [x.severity, x.message.endsWith('judged on reduced work, the work budget left 40 of the 400 realizations')])).toEqual([['notice', true]]);
@@ -132,10 +132,10 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
   it('an N−1 floor that the evaluated cases meet, with cases left out by the budget', async () => {
     const req = '  - kind: n-1\n    element: link\n    min: 0.5\n';
     const full = await judge(policy(req));
-    expect(full.requirements[0]).toMatchObject({ status: 'met' });
+    expect(full.requirements[0]).toMatchObject({ status: 'holds' });
     const cut = await judge(policy(req), VISITS * 368);
     expect(cut.head!.contingencies[0].evaluated).toBeLessThan(cut.head!.contingencies[0].total);
-    expect(cut.requirements[0].status).toBe('uncertain');
+    expect(cut.requirements[0].status).toBe('unsettled');
     uncertain++;
     const why = cut.findings.find((x) => x.rule === 'n-1')!;
     expect(why.severity).toBe('warn');
@@ -146,8 +146,8 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
   it('an N−1 floor that an evaluated case already breaks is missed, budget or not', async () => {
     const cut = await judge(policy('  - kind: n-1\n    element: node\n    min: 0.95\n'), VISITS * 368);
     expect(cut.head!.contingencies[0].evaluated).toBeLessThan(cut.head!.contingencies[0].total);
-    expect(cut.requirements[0].status).toBe('missed');
-    expect(cut.status).toBe('below-threshold');
+    expect(cut.requirements[0].status).toBe('short');
+    expect(cut.status).toBe('below-floor');
   });
 
   it('a worst-case floor met by a greedy search that the budget put in place of the exact one', async () => {
@@ -155,11 +155,11 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
     const req = '  - kind: r-threshold\n    challenge: failures\n    statistic: worst-case\n    removals: 2\n    min: 0.5\n';
     const full = await judge(policy(req, challenge));
     expect(full.head!.envelopes[0].worstCase?.method).toBe('exact');
-    expect(full.requirements[0].status).toBe('met');
+    expect(full.requirements[0].status).toBe('holds');
     // Band 50 × 2 passes + exact pairs C(11, 2) + 11 = 166 passes is over 150; the greedy search (22) fits.
     const cut = await judge(policy(req, challenge), 150 * VISITS);
     expect(cut.head!.envelopes[0].worstCase?.method).toBe('greedy');
-    expect(cut.requirements[0].status).toBe('uncertain');
+    expect(cut.requirements[0].status).toBe('unsettled');
     uncertain++;
     expect(cut.findings.find((x) => x.rule === 'r-threshold')!.message).toMatch(/searched greedily/);
   });
@@ -173,7 +173,7 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
     const band = env.quantiles['0.1'];
     expect(band.lo[j]).toBeLessThan(band.value[j]);
     const cut = await judge(policy(at(band.value[j])), 2 * VISITS * 12);
-    expect(cut.requirements[0]).toMatchObject({ status: 'uncertain', head: band.value[j] });
+    expect(cut.requirements[0]).toMatchObject({ status: 'unsettled', head: band.value[j] });
     uncertain++;
     expect(cut.findings.find((x) => x.rule === 'r-threshold')).toMatchObject({ severity: 'warn' });
   });
@@ -195,13 +195,13 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
       const ceiling = s.name.includes('ceiling');
       const edge = Number((ceiling ? v + 0.001 : v - 0.001).toFixed(6));
       const cut = await judge(policy(s.req(edge)), 2 * VISITS * 12);
-      expect(cut.requirements[0].status).toBe('uncertain');
+      expect(cut.requirements[0].status).toBe('unsettled');
       uncertain++;
       const why = cut.findings.find((x) => x.requirement === cut.requirements[0].id && x.severity === 'warn')!;
       expect(why.message).toMatch(/meets it, but the work budget left 12 of the 400 realizations, and it clears the (floor|ceiling) by 0\.001, not by more than 2 standard errors \(2 × 0\.\d{3}\)/);
       // All 400 realizations: the same floor is judged on its value alone (this one meets it).
       const full = await judge(policy(s.req(ceiling ? 0.99 : 0.01)));
-      expect(full.requirements[0].status).toBe('met');
+      expect(full.requirements[0].status).toBe('holds');
     });
   }
 
@@ -216,15 +216,15 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
     const cut = await judge(policy(threshold('min', floor, 0.5)), 2 * VISITS * 12);
     const cutEnv = cut.head!.envelopes[0];
     expect(cutEnv.min[j]).toBeGreaterThan(env.min[j]);
-    expect(cut.requirements[0].status).toBe('uncertain');
+    expect(cut.requirements[0].status).toBe('unsettled');
     uncertain++;
     expect(cut.findings.find((x) => x.rule === 'r-threshold')!.message).toMatch(/the minimum of fewer realizations can only be higher than that of all of them$/);
-    expect((await judge(policy(threshold('min', floor, 0.5)))).requirements[0].status).toBe('missed');
+    expect((await judge(policy(threshold('min', floor, 0.5)))).requirements[0].status).toBe('short');
   });
 
   it('a requirement whose challenge the design cannot run is uncertain with a warning, not met', async () => {
     const f = await judge(policy('  - kind: area-floor\n    challenge: quakes\n    min: 0.1\n', '  quakes:\n    remove: region\n    until: 50\n    points: 6\n'));
-    expect(f.requirements[0].status).toBe('uncertain');
+    expect(f.requirements[0].status).toBe('unsettled');
     uncertain++;
     expect(f.findings.some((x) => x.severity === 'warn' && /could not be judged/.test(x.message))).toBe(true);
   });
@@ -264,24 +264,24 @@ describe('base and head: one budget, paired realizations', () => {
     const regressionOf = (f: FileReport) =>f.findings.find((x) => x.rule === 'regression')!;
 
     const near = await at(drop);
-    expect(near.requirements[0].status).toBe('uncertain');
+    expect(near.requirements[0].status).toBe('unsettled');
     uncertain++;
     expect(regressionOf(near).severity).toBe('warn');
     expect(regressionOf(near).message).toMatch(/so it cannot be told whether it is beyond it: the work budget left 40 of the 400 realizations on head and base$/);
     expect(near.report.verdict).toBe('pass');
 
     const beyond = await at(drop - 2 * noise);
-    expect(beyond.requirements[0].status).toBe('regressed');
+    expect(beyond.requirements[0].status).toBe('weakened');
     expect(regressionOf(beyond).severity).toBe('fail');
     expect(beyond.report.verdict).toBe('fail');
 
     const inside = await at(drop + 2 * noise);
-    expect(inside.requirements[0].status).toBe('met');
+    expect(inside.requirements[0].status).toBe('holds');
     expect(regressionOf(inside).severity).toBe('notice');
 
     // The same allowance as "near" on all 400 realizations: judged on the value alone.
     const full = (await compareIsolated(policy(mean, FAILURES, rest(Number(drop.toFixed(6)))))).requirements[0];
-    expect(full.status).not.toBe('uncertain');
+    expect(full.status).not.toBe('unsettled');
   });
 
   it('base and head cut differently do not pair: the change is uncertain, whatever its sign', async () => {
@@ -290,7 +290,7 @@ describe('base and head: one budget, paired realizations', () => {
     const f = await compare(policy(area, FAILURES, rest(0.5)), 2 * VISITS * 40, { evaluate: skewed });
     const [nb, nh] = [f.base!.envelopes[0].realizations, f.head!.envelopes[0].realizations];
     expect(nb).not.toBe(nh);
-    expect(f.requirements[0].status).toBe('uncertain');
+    expect(f.requirements[0].status).toBe('unsettled');
     uncertain++;
     const why = f.findings.find((x) => x.rule === 'regression')!;
     expect(why.severity).toBe('warn');

@@ -207,7 +207,7 @@ describe('Action inputs never reach outside the workspace', () => {
     mkdirSync(parts);
     const r = sampleReport();
     writeFileSync(path.join(parts, 'a.json'), JSON.stringify(r));
-    writeFileSync(path.join(outside, 'b.json'), JSON.stringify({ ...r, files: [{ path: SECRET, status: 'error', findings: [], requirements: [] }] }));
+    writeFileSync(path.join(outside, 'b.json'), JSON.stringify({ ...r, files: [{ path: SECRET, status: 'unreadable', findings: [], requirements: [] }] }));
     symlinkSync(path.join(outside, 'b.json'), path.join(parts, 'b.json'));
     symlinkSync(outside, path.join(parts, 'more'));
     const summaries: string[] = [];

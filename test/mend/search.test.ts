@@ -17,7 +17,7 @@ describe('mending a ring that became a chain', () => {
   it('suggests the one link that closes the ring again: the Eswaran–Tarjan bound, and it holds', async () => {
     const { report } = await runGate(request, memoryDeps(pairRepo('ring-to-chain')));
     const f = report.files[0];
-    expect(f.status).toBe('regressed');
+    expect(f.status).toBe('weakened');
     const m = f.mend!;
     expect(m.targets.filter((t) => t.rule === 'new-bridge')).toHaveLength(5);
     // A chain's bridge tree is the chain: two leaves, one link (Eswaran & Tarjan 1976).
@@ -86,7 +86,7 @@ describe('mending a ring that became a chain', () => {
   it('searches nothing with mend.evaluations: 0, or for a design that passes', async () => {
     const policy = `${gateFixture('policy.yaml')}mend:\n  evaluations: 0\n`;
     const off = (await runGate(request, memoryDeps(pairRepo('ring-to-chain', FILE, policy)))).report.files[0];
-    expect(off.status).toBe('regressed');
+    expect(off.status).toBe('weakened');
     expect(off.mend).toBeUndefined();
     const passing = (await runGate(request, memoryDeps(pairRepo('redundant-link')))).report.files[0];
     expect(passing.status).toBe('pass');

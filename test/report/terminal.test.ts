@@ -93,7 +93,7 @@ describe('renderTerminal', () => {
     r.policy = { source: 'builtin' };
     r.files = [];
     r.verdict = 'pass';
-    r.counts = { pass: 0, regressed: 0, 'below-threshold': 0, new: 0, removed: 0, renamed: 0, error: 0 };
+    r.counts = { holds: 0, weakened: 0, 'below-floor': 0, new: 0, removed: 0, renamed: 0, unreadable: 0 };
     const text = renderTerminal(r, { color: false, width: 100 });
     expect(text).toContain('the built-in defaults for communication backbones were applied');
     expect(text).toContain('No design files changed: nothing to judge.');

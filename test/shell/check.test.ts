@@ -73,7 +73,7 @@ describe('netbrace check in a git repository', () => {
     expect([report.base, report.head, report.verdict]).toEqual([base, head, 'fail']);
     expect(report.policy).toMatchObject({ source: 'file', path: '.netbrace.yaml', revision: base });
     const f = report.files[0];
-    expect([f.path, f.status]).toEqual([DESIGN, 'regressed']);
+    expect([f.path, f.status]).toEqual([DESIGN, 'weakened']);
     expect(f.findings.filter((x) => x.rule === 'new-bridge').map((x) => x.line)).toEqual([12, 13, 14, 15, 16]);
   });
 
