@@ -106,7 +106,7 @@ describe('which designs are judged', () => {
     expect(report.base).toBeUndefined();
     // The two-node design misses the N−1 floor (losing its one link leaves R = 0).
     expect(report.files.map((f) => [f.path, f.status])).toEqual([
-      [FILE, 'pass'],
+      [FILE, 'holds'],
       ['other.gml', 'below-floor'],
     ]);
     expect(report.files[1].requirements.find((r) => r.id === 'n-1:link')).toMatchObject({ head: 0, status: 'short' });
@@ -191,7 +191,7 @@ describe('determinism, parts and joining', () => {
     const joined = joinReports([old, failing]);
     expect(joined.version).toBe(REPORT_VERSION);
     expect(joined.files.map((f) => f.path)).toEqual(['a.gml', 'b.gml']);
-    expect(joined.counts).toMatchObject({ pass: 1, error: 1 });
+    expect(joined.counts).toMatchObject({ holds: 1, unreadable: 1 });
     expect(joined.verdict).toBe('fail');
     expect(joined.caution.length).toBeGreaterThan(0);
     expect(() => joinReports([{ ...old, version: REPORT_VERSION + 1 }])).toThrow(UsageError);

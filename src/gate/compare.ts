@@ -4,27 +4,27 @@
 //
 // Judging a value (higher is better, except spread):
 //   not-computable  the value (head, base or delta) is NaN or infinite    → failure, whatever the severity
-//   missed        the head misses the floor (or ceiling), or the head can no longer be judged
+//   short         the head misses the floor (or ceiling), or the head can no longer be judged
 //                 while the base could (the change removed the coordinates, risk groups...
 //                 the requirement needs)                                → finding at the requirement's severity
-//   uncertain     the head meets it, but the confidence interval of the quantile reaches past it,
+//   unsettled     the head meets it, but the confidence interval of the quantile reaches past it,
 //                 or the work behind it was cut by the budget (N−1 cases left out, a greedy
 //                 worst case instead of the exact one), or the budget cut the realizations and
 //                 the value clears the floor by no more than REDUCED_MARGIN_SE standard errors
 //                 of its own (a minimum over cut realizations: always, since the minimum of
 //                 fewer can only be higher), or the value could not be computed on either side
 //                                                                       → notice / warning, never "holds"
-//   regressed     it dropped from base by more than the allowance, and by at least
+//   weakened      it dropped from base by more than the allowance, and by at least
 //                 error-multiple × se                                     → finding at the weakening severity,
 //                                                                         never graver than the requirement's
-//   within-noise  it dropped, but by less than error-multiple × se        → notice: Monte Carlo noise, not a failure
+//   inside-error  it dropped, but by less than error-multiple × se        → notice: Monte Carlo noise, not a failure
 //   not-applicable  a tracked value (no floor) whose challenge the design gives no data for on
 //                 either side (no risk groups, no coordinates)            → no finding: nothing is required
-//   met           otherwise; a drop inside the allowance is a notice, a change of exactly 0 says nothing
-// On realizations cut by the budget a drop is judged both ways: regressed only when it exceeds
+//   holds         otherwise; a drop inside the allowance is a notice, a change of exactly 0 says nothing
+// On realizations cut by the budget a drop is judged both ways: weakened only when it exceeds
 // the allowance by more than error-multiple × se, a notice when it stays below the allowance by
-// more than that, and uncertain in between; when the budget cut base and head differently
-// their realizations do not pair, and the change is uncertain whatever its sign. Every
+// more than that, and unsettled in between; when the budget cut base and head differently
+// their realizations do not pair, and the change is unsettled whatever its sign. Every
 // requirement whose value rests on reduced work says so in a finding of its own.
 // Every comparison is written so that a NaN falls to the failing side (`!(x <= limit)`, not
 // `x > limit`), and messages print the digits that decide (describe.ts, decidingDecimals).
@@ -102,7 +102,7 @@ function milder(a: Severity, b: Severity): Severity {
   return GRAVITY[a] >= GRAVITY[b] ? a : b;
 }
 
-/** An uncertain judgement is a warning, or a notice where the rule itself is only a notice. */
+/** An unsettled judgement is a warning, or a notice where the rule itself is only a notice. */
 function uncertainSeverity(severity: Severity): Severity {
   return severity === 'notice' ? 'notice' : 'warn';
 }

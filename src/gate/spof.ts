@@ -180,7 +180,7 @@ export function judgeSpof(
     });
   }
   // Each finding marks the row of its kind. Hidden weak points cannot be judged (the claim is
-  // unchecked): uncertain, unless the policy fails them.
+  // unchecked): unsettled, unless the policy fails them.
   const partOf = (x: Finding): SpofPart =>
     x.rule === 'new-bridge' ? 'bridges' : x.rule === 'new-cut-node' ? 'cut-nodes' : x.rule === 'new-stranding-group' ? 'risk-groups' : x.elements[0]?.kind === 'link' ? 'bridges' : x.elements[0]?.kind === 'node' ? 'cut-nodes' : 'risk-groups';
   parts.forEach((part, i) => {

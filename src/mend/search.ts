@@ -71,7 +71,7 @@ export function targetKey(f: Pick<Finding, 'rule' | 'requirement' | 'elements'>)
   return `${f.rule}|${f.requirement ?? ''}`;
 }
 
-/** The findings a change to the design can fix: severity fail or warn, on a requirement that was missed or regressed. */
+/** The findings a change to the design can fix: severity fail or warn, on a requirement that fell short or weakened. */
 export function mendTargets(report: FileReport): MendTarget[] {
   const rows = new Map(report.requirements.map((r) => [r.id, r]));
   const out: MendTarget[] = [];

@@ -219,7 +219,7 @@ function mergeBudget(prev: Layered<Budget>, next: Layered<Budget>, what: string)
   throw new PolicyError(
     `${what} lowers the budget to ${visits(after)} element visits (${describeBudget(merged)}) where ${visits(before)} (${describeBudget(prev.value)}) is in force`,
     (at && merged.fieldWhere[at]) || next.value.where,
-    'an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements uncertain',
+    'an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements unsettled',
     [related((prevAt && prev.value.fieldWhere[prevAt]) || prev.value.where, 'the budget in force')],
   );
 }

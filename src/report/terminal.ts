@@ -147,7 +147,7 @@ function describeEvaluation(ev: Evaluation): string {
 function requirementTable(rows: RequirementResult[], c: Colors, width: number): string[] {
   // indent, gaps and the base → head, delta and status columns ("x short of its floor" is 20 wide)
   const fixed = 2 + 2 + 6 + 3 + 6 + 2 + 17 + 2 + 20;
-  const descWidth = Math.max(24, Math.min(56, width - fixed));
+  const descWidth = Math.max(20, Math.min(56, width - fixed));
   const header = `  ${'Requirement'.padEnd(descWidth)}  ${'base'.padStart(6)}   ${'head'.padStart(6)}  ${'\u0394 \u00b1 error'.padEnd(17)}  status`;
   const out = [c.bold(header)];
   for (const r of rows) {

@@ -156,7 +156,7 @@ describe('a NaN or infinite value is never a pass', () => {
       );
       const f = only(report);
       expect(exitCode).toBe(1);
-      expect(f.status).toBe('error');
+      expect(f.status).toBe('unreadable');
       const broken = f.findings.filter((x) => x.rule === 'not-computable');
       expect(broken.find((x) => x.requirement === 'area-floor:site-failures')?.severity).toBe('fail');
       for (const x of broken) expect(x.message).toMatch(/is (NaN|-?Infinity)(,| and)/);
@@ -182,7 +182,7 @@ describe('views title and word findings by what the judging found', () => {
     const report = run.report!;
     const about = (challenge: string) =>
       planAnnotations(report).annotations.find((a) => a.rule === 'regression' && a.message.startsWith(`area of "${challenge}"`));
-    expect(about('link-failures')?.title).toBe('netbrace: robustness regressed');
+    expect(about('link-failures')?.title).toBe('netbrace: robustness weakened');
     expect(about('site-failures')?.title).toBe('netbrace: robustness dropped within the allowance');
     expect(about('site-failures')?.level).toBe('notice');
     // Markdown escapes brackets; compare the text a reader sees.

@@ -140,7 +140,7 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
     const why = cut.findings.find((x) => x.rule === 'n-1')!;
     expect(why.severity).toBe('warn');
     expect(why.message).toMatch(/only \d+ of 17 single link losses were evaluated/);
-    expect(renderSummary(cut.report)).toMatch(/uncertain/);
+    expect(renderSummary(cut.report)).toMatch(/unsettled/);
   });
 
   it('an N−1 floor that an evaluated case already breaks is missed, budget or not', async () => {

@@ -256,7 +256,7 @@ describe('the gate on the command line', () => {
     const r = await cli(repo, 'check', '--head', head, '--format', 'json');
     const report = JSON.parse(r.out) as Report;
     const f = report.files.find((x) => x.path === 'designs/committed.net.yaml')!;
-    expect(f.status).toBe('error');
+    expect(f.status).toBe('unreadable');
     expect(r.out + r.err).not.toContain(SECRET);
     commitFiles(repo, { 'designs/committed.net.yaml': null }, 'remove the link');
   });
