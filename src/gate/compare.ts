@@ -103,7 +103,7 @@ function milder(a: Severity, b: Severity): Severity {
 }
 
 /** An unsettled judgement is a warning, or a notice where the rule itself is only a notice. */
-function uncertainSeverity(severity: Severity): Severity {
+function unsettledSeverity(severity: Severity): Severity {
   return severity === 'notice' ? 'notice' : 'warn';
 }
 
@@ -204,7 +204,7 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     } else {
       // A floor the policy sets cannot be judged: never "holds".
       row.status = 'unsettled';
-      findings.push(finding(rule, uncertainSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: 'unsettled' }));
+      findings.push(finding(rule, unsettledSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: 'unsettled' }));
     }
     return result();
   }
@@ -236,7 +236,7 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     // Met by incomplete work: not proven, so not "holds".
     row.status = 'unsettled';
     findings.push(
-      finding(rule, uncertainSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
+      finding(rule, unsettledSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
         ...extra,
         status: 'unsettled',
       }),
@@ -249,7 +249,7 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     findings.push(
       finding(
         rule,
-        m.reduced !== undefined ? uncertainSeverity(r.severity) : 'notice',
+        m.reduced !== undefined ? unsettledSeverity(r.severity) : 'notice',
         `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
         elements,
         { ...extra, status: 'unsettled' },
@@ -261,7 +261,7 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     findings.push(
       finding(
         rule,
-        uncertainSeverity(r.severity),
+        unsettledSeverity(r.severity),
         `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
         elements,
         { ...extra, status: 'unsettled' },
@@ -278,7 +278,7 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
       findings.push(
         finding(
           rule,
-          uncertainSeverity(r.severity),
+          unsettledSeverity(r.severity),
           `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} \u00d7 ${se})`,
           elements,
           { ...extra, status: 'unsettled' },
@@ -295,7 +295,7 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     findings.push(
       finding(
         'regression',
-        uncertainSeverity(regressionSeverity),
+        unsettledSeverity(regressionSeverity),
         `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
         { ...extra, status: 'unsettled' },
@@ -333,7 +333,7 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
         findings.push(
           finding(
             'regression',
-            uncertainSeverity(regressionSeverity),
+            unsettledSeverity(regressionSeverity),
             `${description}: ${change}, within ${k} \u00d7 its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
             data,

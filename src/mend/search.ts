@@ -2,7 +2,7 @@
 // alternative, elements to harden) that remove the design's failing and warning findings,
 // each judged by the policy's own engine on the mended design.
 //
-//   1. Targets: new bridges and cut nodes, missed floors and regressions (severity fail or
+//   1. Targets: new bridges and cut nodes, floors fallen short and weakenings (severity fail or
 //      warn) — what a change to the design can fix.
 //   2. Bounds: the Eswaran–Tarjan number of links (bridge-tree.ts), for the new bridges and
 //      for every bridge of the design.

@@ -55,7 +55,7 @@ export const ANNOTATIONS_PER_LEVEL = 10;
 const LEVEL: Record<Severity, AnnotationLevel> = { fail: 'error', warn: 'warning', notice: 'notice' };
 
 const TITLE: Record<Finding['rule'], string> = {
-  'r-threshold': 'r-threshold missed',
+  'r-threshold': 'r-threshold not held',
   'area-floor': 'envelope area below its floor',
   'spread-ceiling': 'envelope spread above its ceiling',
   'n-1': 'N\u22121 rule broken',

@@ -44,7 +44,7 @@ const esc = (s: string | number) => escapeHtml(String(s));
 
 /** A finding's title by rule, refined by its status (labels.ts, findingTitle). */
 const RULE_TITLE: Record<Finding['rule'], string> = {
-  'r-threshold': 'r-threshold missed',
+  'r-threshold': 'r-threshold not held',
   'area-floor': 'area below its floor',
   'spread-ceiling': 'spread above its ceiling',
   'n-1': 'N\u22121 rule broken',

@@ -36,7 +36,7 @@ interface RuleText {
 const RULES: Record<RuleId, RuleText> = {
   'r-threshold': {
     name: 'RThreshold',
-    short: 'An r-threshold of the policy is missed',
+    short: 'An r-threshold of the policy is not held',
     full: 'At the stated removal fraction, the stated statistic of the robustness envelope (a quantile, the median, the minimum or the worst case) of R is below the threshold the policy requires.',
     help: 'The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by scopes but never loosened below a floor it inherits.',
   },

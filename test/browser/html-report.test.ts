@@ -106,7 +106,7 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
         expect(chart.height).toBeGreaterThan(200);
       });
     });
-    // The regressed design's first chart: band, median, 2 node attacks, worst case, base median.
+    // The weakened design's first chart: band, median, 2 node attacks, worst case, base median.
     expect(sections[0].charts[0].series).toBe(6);
   });
 

@@ -94,7 +94,7 @@ describe('mending a ring that became a chain', () => {
     expect(passing.map).toBeDefined();
   });
 
-  it('without a base, aims at the missed floors', async () => {
+  it('without a base, aims at the floors it falls short of', async () => {
     const policy = 'requirements:\n  - kind: n-1\n    element: link\n    min: 0.7\n';
     const repo = { base: {}, head: { '.netbrace.yaml': policy, [FILE]: gateFixture('ring-to-chain/head.net.yaml') } };
     const { report } = await runGate({ head: 'head', paths: [FILE], policySource: 'head', mode: 'block', mend: 'always' }, memoryDeps(repo));

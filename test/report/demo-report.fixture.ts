@@ -1,5 +1,5 @@
 // An input fixture for the report views: a realistic Report of the shape the gate produces
-// for the demo's cost-saving change (one regressed design, one new design, one unreadable
+// for the demo's cost-saving change (one weakened design, one new design, one unreadable
 // file). The numbers are made up to look like an evaluation; they are not a result.
 
 import type { AttackCurve, Envelope, QuantileBand, WorstCase } from '../../src/envelope/types.js';
