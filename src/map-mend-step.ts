@@ -65,7 +65,7 @@ export async function addMapAndMend(report: FileReport, input: CompareInput, ctx
     );
   }
   const when = ctx.request.mend ?? 'failing';
-  const failing = report.status === 'error' || report.findings.some((f) => f.severity === 'fail');
+  const failing = report.status === 'unreadable' || report.findings.some((f) => f.severity === 'fail');
   if (when === 'never' || (when === 'failing' && !failing)) return;
   const settings = input.policy.mend ?? {};
   if (settings.evaluations === 0) return;

@@ -106,10 +106,10 @@ describe('which designs are judged', () => {
     expect(report.base).toBeUndefined();
     // The two-node design misses the N−1 floor (losing its one link leaves R = 0).
     expect(report.files.map((f) => [f.path, f.status])).toEqual([
-      [FILE, 'pass'],
-      ['other.gml', 'below-threshold'],
+      [FILE, 'holds'],
+      ['other.gml', 'below-floor'],
     ]);
-    expect(report.files[1].requirements.find((r) => r.id === 'n-1:link')).toMatchObject({ head: 0, status: 'missed' });
+    expect(report.files[1].requirements.find((r) => r.id === 'n-1:link')).toMatchObject({ head: 0, status: 'short' });
     expect(report.files.every((f) => f.requirements.every((r) => r.base === null))).toBe(true);
     expect(exitCode).toBe(1);
   });
@@ -185,13 +185,13 @@ describe('determinism, parts and joining', () => {
       mode: 'block',
       policy: { source: 'builtin' },
       seed: 1,
-      files: [{ path: 'a.gml', status: 'pass', findings: [], requirements: [] }],
+      files: [{ path: 'a.gml', status: 'holds', findings: [], requirements: [] }],
     };
-    const failing = { ...old, files: [{ path: 'b.gml', status: 'error', findings: [{ rule: 'parse-error', severity: 'fail', message: 'x', elements: [], line: 3 }] }] };
+    const failing = { ...old, files: [{ path: 'b.gml', status: 'unreadable', findings: [{ rule: 'parse-error', severity: 'fail', message: 'x', elements: [], line: 3 }] }] };
     const joined = joinReports([old, failing]);
     expect(joined.version).toBe(REPORT_VERSION);
     expect(joined.files.map((f) => f.path)).toEqual(['a.gml', 'b.gml']);
-    expect(joined.counts).toMatchObject({ pass: 1, error: 1 });
+    expect(joined.counts).toMatchObject({ holds: 1, unreadable: 1 });
     expect(joined.verdict).toBe('fail');
     expect(joined.caution.length).toBeGreaterThan(0);
     expect(() => joinReports([{ ...old, version: REPORT_VERSION + 1 }])).toThrow(UsageError);

@@ -4,27 +4,27 @@
 //
 // Judging a value (higher is better, except spread):
 //   not-computable  the value (head, base or delta) is NaN or infinite    → failure, whatever the severity
-//   missed        the head misses the floor (or ceiling), or the head can no longer be judged
+//   short         the head misses the floor (or ceiling), or the head can no longer be judged
 //                 while the base could (the change removed the coordinates, risk groups...
 //                 the requirement needs)                                → finding at the requirement's severity
-//   uncertain     the head meets it, but the confidence interval of the quantile reaches past it,
+//   unsettled     the head meets it, but the confidence interval of the quantile reaches past it,
 //                 or the work behind it was cut by the budget (N−1 cases left out, a greedy
 //                 worst case instead of the exact one), or the budget cut the realizations and
 //                 the value clears the floor by no more than REDUCED_MARGIN_SE standard errors
 //                 of its own (a minimum over cut realizations: always, since the minimum of
 //                 fewer can only be higher), or the value could not be computed on either side
-//                                                                       → notice / warning, never "met"
-//   regressed     it dropped from base by more than the allowance, and by at least
+//                                                                       → notice / warning, never "holds"
+//   weakened      it dropped from base by more than the allowance, and by at least
 //                 error-multiple × se                                     → finding at the weakening severity,
 //                                                                         never graver than the requirement's
-//   within-noise  it dropped, but by less than error-multiple × se        → notice: Monte Carlo noise, not a failure
+//   inside-error  it dropped, but by less than error-multiple × se        → notice: Monte Carlo noise, not a failure
 //   not-applicable  a tracked value (no floor) whose challenge the design gives no data for on
 //                 either side (no risk groups, no coordinates)            → no finding: nothing is required
-//   met           otherwise; a drop inside the allowance is a notice, a change of exactly 0 says nothing
-// On realizations cut by the budget a drop is judged both ways: regressed only when it exceeds
+//   holds         otherwise; a drop inside the allowance is a notice, a change of exactly 0 says nothing
+// On realizations cut by the budget a drop is judged both ways: weakened only when it exceeds
 // the allowance by more than error-multiple × se, a notice when it stays below the allowance by
-// more than that, and uncertain in between; when the budget cut base and head differently
-// their realizations do not pair, and the change is uncertain whatever its sign. Every
+// more than that, and unsettled in between; when the budget cut base and head differently
+// their realizations do not pair, and the change is unsettled whatever its sign. Every
 // requirement whose value rests on reduced work says so in a finding of its own.
 // Every comparison is written so that a NaN falls to the failing side (`!(x <= limit)`, not
 // `x > limit`), and messages print the digits that decide (describe.ts, decidingDecimals).
@@ -50,7 +50,7 @@ import {
 import { identityMatching, matchDesigns, type Matching } from './rename.js';
 import { judgeSpof } from './spof.js';
 
-/** Finding rules of new single points of failure (a failing one makes the file "regressed"). */
+/** Finding rules of new single points of failure (a failing one makes the file "weakened"). */
 const SPOF_RULES = new Set<Finding['rule']>(['new-bridge', 'new-cut-node', 'new-stranding-group', 'hardened-weak-point']);
 
 /** A standard error in findings: three decimals, or "unknown" when it cannot be estimated. */
@@ -102,8 +102,8 @@ function milder(a: Severity, b: Severity): Severity {
   return GRAVITY[a] >= GRAVITY[b] ? a : b;
 }
 
-/** An uncertain judgement is a warning, or a notice where the rule itself is only a notice. */
-function uncertainSeverity(severity: Severity): Severity {
+/** An unsettled judgement is a warning, or a notice where the rule itself is only a notice. */
+function unsettledSeverity(severity: Severity): Severity {
   return severity === 'notice' ? 'notice' : 'warn';
 }
 
@@ -151,16 +151,16 @@ function notFinite(m: Measured): string | undefined {
   return `the ${bad.map(([n, v]) => `${n} is ${String(v)}`).join(' and the ')}, not a finite number`;
 }
 
-/** How a drop from base to head is judged (see the header); NaN falls to "regressed" or "uncertain". */
-function classifyDrop(drop: number, allowance: number, noise: number, reduced: boolean): Exclude<FindingStatus, 'missed' | 'reduced-work' | 'not-computable'> {
+/** How a drop from base to head is judged (see the header); NaN falls to "weakened" or "unsettled". */
+function classifyDrop(drop: number, allowance: number, noise: number, reduced: boolean): Exclude<FindingStatus, 'short' | 'reduced-work' | 'not-computable'> {
   if (reduced) {
-    if (drop > allowance + noise) return 'regressed';
+    if (drop > allowance + noise) return 'weakened';
     if (drop <= allowance - noise) return 'within-allowance';
-    return 'uncertain';
+    return 'unsettled';
   }
-  if (drop < noise) return 'within-noise';
+  if (drop < noise) return 'inside-error';
   if (drop <= allowance) return 'within-allowance';
-  return 'regressed';
+  return 'weakened';
 }
 
 type Judged = { rows: RequirementResult[]; findings: Finding[] };
@@ -179,7 +179,7 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     delta: m.delta,
     se: m.se,
     threshold,
-    status: 'met',
+    status: 'holds',
   };
   const findings: Finding[] = [];
   const elements = elementsOf(m.elements, head, input.base);
@@ -191,27 +191,27 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     const why = m.missing ?? 'no value';
     if (m.base !== null) {
       // The base could be judged and the head cannot: the change took away what the requirement needs.
-      row.status = 'missed';
+      row.status = 'short';
       findings.push(
         finding(rule, r.severity, `${description}: the head can no longer be judged, though the base could (${formatR(m.base)}): ${why}`, [], {
           ...extra,
-          status: 'missed',
+          status: 'short',
         }),
       );
     } else if (m.notApplicable && threshold === null) {
       // A tracked value (no floor) on a challenge the design gives no data for: nothing is required.
       row.status = 'not-applicable';
     } else {
-      // A floor the policy sets cannot be judged: never "met".
-      row.status = 'uncertain';
-      findings.push(finding(rule, uncertainSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: 'uncertain' }));
+      // A floor the policy sets cannot be judged: never "holds".
+      row.status = 'unsettled';
+      findings.push(finding(rule, unsettledSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: 'unsettled' }));
     }
     return result();
   }
   const broken = notFinite(m);
   if (broken !== undefined) {
     // A NaN or infinite R says the computation failed, not that the design is robust.
-    row.status = 'uncertain';
+    row.status = 'unsettled';
     findings.push(
       finding('not-computable', 'fail', `${description}: ${broken}; a value that cannot be computed is never a pass`, elements, {
         ...extra,
@@ -229,42 +229,42 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
   const against = (v: number, limit: number) => formatR(v, decidingDecimals(v, limit));
 
   if (threshold !== null && !meets(headValue, threshold)) {
-    row.status = 'missed';
+    row.status = 'short';
     const relation = m.higherIsBetter ? 'is below' : 'is above';
-    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'missed' }));
+    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short' }));
   } else if (threshold !== null && m.incomplete !== undefined) {
-    // Met by incomplete work: not proven, so not "met".
-    row.status = 'uncertain';
+    // Met by incomplete work: not proven, so not "holds".
+    row.status = 'unsettled';
     findings.push(
-      finding(rule, uncertainSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
+      finding(rule, unsettledSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
         ...extra,
-        status: 'uncertain',
+        status: 'unsettled',
       }),
     );
   } else if (threshold !== null && m.lo !== undefined && m.hi !== undefined && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
-    row.status = 'uncertain';
+    row.status = 'unsettled';
     const edge = m.higherIsBetter ? m.lo : m.hi;
     const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
     const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
     findings.push(
       finding(
         rule,
-        m.reduced !== undefined ? uncertainSeverity(r.severity) : 'notice',
+        m.reduced !== undefined ? unsettledSeverity(r.severity) : 'notice',
         `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
         elements,
-        { ...extra, status: 'uncertain' },
+        { ...extra, status: 'unsettled' },
       ),
     );
   } else if (threshold !== null && m.headSe !== undefined && r.kind === 'r-threshold' && r.statistic.kind === 'min') {
     // The least of fewer realizations is never below the least of all of them: not proven.
-    row.status = 'uncertain';
+    row.status = 'unsettled';
     findings.push(
       finding(
         rule,
-        uncertainSeverity(r.severity),
+        unsettledSeverity(r.severity),
         `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
         elements,
-        { ...extra, status: 'uncertain' },
+        { ...extra, status: 'unsettled' },
       ),
     );
   } else if (threshold !== null && m.headSe !== undefined) {
@@ -272,16 +272,16 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     const needed = REDUCED_MARGIN_SE * m.headSe;
     if (!(margin > needed)) {
       // Met on realizations the budget cut, by a margin their own error does not clear.
-      row.status = 'uncertain';
+      row.status = 'unsettled';
       const d = decidingDecimals(margin, needed);
       const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : 'unknown';
       findings.push(
         finding(
           rule,
-          uncertainSeverity(r.severity),
+          unsettledSeverity(r.severity),
           `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} \u00d7 ${se})`,
           elements,
-          { ...extra, status: 'uncertain' },
+          { ...extra, status: 'unsettled' },
         ),
       );
     }
@@ -291,14 +291,14 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
   const regressionSeverity = milder(policyRule.severity, r.severity);
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== undefined) {
     // Reduced differently on the two sides: the realizations do not pair, so no delta is judged.
-    if (row.status === 'met') row.status = 'uncertain';
+    if (row.status === 'holds') row.status = 'unsettled';
     findings.push(
       finding(
         'regression',
-        uncertainSeverity(regressionSeverity),
+        unsettledSeverity(regressionSeverity),
         `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
-        { ...extra, status: 'uncertain' },
+        { ...extra, status: 'unsettled' },
       ),
     );
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
@@ -313,36 +313,36 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
       // The digits that decide: the drop against the allowance (and the noise band around it).
       const digits = (limit: number) => changeDecimals(base, headValue, m.higherIsBetter, limit);
       const d =
-        outcome === 'within-noise'
+        outcome === 'inside-error'
           ? digits(noise)
           : reduced
-            ? Math.max(digits(allowance), digits(outcome === 'regressed' ? allowance + noise : allowance - noise))
+            ? Math.max(digits(allowance), digits(outcome === 'weakened' ? allowance + noise : allowance - noise))
             : digits(allowance);
       const verb = m.higherIsBetter ? 'dropped' : 'rose';
       const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (\u0394 ${formatDelta(m.delta, m.se, d)})`;
       const allowed = formatR(allowance, d);
       const k = policyRule.errorMultiple;
       const data = { ...extra, allowance, status: outcome };
-      if (outcome === 'regressed') {
-        if (row.status !== 'missed') row.status = 'regressed';
+      if (outcome === 'weakened') {
+        if (row.status !== 'short') row.status = 'weakened';
         const beyond = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
         findings.push(finding('regression', regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
-      } else if (outcome === 'uncertain') {
+      } else if (outcome === 'unsettled') {
         // On cut realizations the drop is within error-multiple × se of the allowance: either side of it.
-        if (row.status === 'met') row.status = 'uncertain';
+        if (row.status === 'holds') row.status = 'unsettled';
         findings.push(
           finding(
             'regression',
-            uncertainSeverity(regressionSeverity),
+            unsettledSeverity(regressionSeverity),
             `${description}: ${change}, within ${k} \u00d7 its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
             data,
           ),
         );
-      } else if (outcome === 'within-noise') {
-        if (row.status === 'met') row.status = 'within-noise';
+      } else if (outcome === 'inside-error') {
+        if (row.status === 'holds') row.status = 'inside-error';
         findings.push(
-          finding('regression', 'notice', `${description}: ${change}, less than ${k} \u00d7 its Monte Carlo error (${formatR(noise, d)}): within noise, not a failure`, elements, data),
+          finding('regression', 'notice', `${description}: ${change}, less than ${k} \u00d7 its Monte Carlo error (${formatR(noise, d)}): inside the error, not a failure`, elements, data),
         );
       } else {
         const margin = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
@@ -366,17 +366,17 @@ export function elementChanges(base: DesignSide, head: DesignSide, matching: Mat
 /** Which status a judged file has, from its findings (only fail-severity findings change it). */
 export function fileStatus(change: CompareInput['change'], findings: readonly Finding[]): FileStatus {
   const failing = findings.filter((f) => f.severity === 'fail');
-  if (failing.some((f) => f.rule === 'parse-error' || f.rule === 'not-computable')) return 'error';
+  if (failing.some((f) => f.rule === 'parse-error' || f.rule === 'not-computable')) return 'unreadable';
   const thresholdRules = new Set<Finding['rule']>(Object.values(THRESHOLD_RULE));
-  if (failing.some((f) => thresholdRules.has(f.rule))) return 'below-threshold';
-  if (failing.some((f) => f.rule === 'regression' || SPOF_RULES.has(f.rule))) return 'regressed';
+  if (failing.some((f) => thresholdRules.has(f.rule))) return 'below-floor';
+  if (failing.some((f) => f.rule === 'regression' || SPOF_RULES.has(f.rule))) return 'weakened';
   if (change === 'added') return 'new';
   if (change === 'renamed') return 'renamed';
-  return 'pass';
+  return 'holds';
 }
 
 export function compareDesign(input: CompareInput): FileReport {
-  const report: FileReport = { path: input.path, status: 'pass', findings: [], requirements: [] };
+  const report: FileReport = { path: input.path, status: 'holds', findings: [], requirements: [] };
   if (input.previousPath !== undefined) report.previousPath = input.previousPath;
   if (input.format !== undefined) report.format = input.format;
 
@@ -390,7 +390,7 @@ export function compareDesign(input: CompareInput): FileReport {
   }
   if (input.headError || input.headUnsupported || !input.head) {
     const e = input.headError ?? input.headUnsupported ?? { message: 'the design could not be read', line: 0, column: 0 };
-    report.status = 'error';
+    report.status = 'unreadable';
     report.error = { message: e.message, line: e.line, column: e.column };
     const rule = input.headUnsupported && !input.headError ? 'not-computable' : 'parse-error';
     report.findings.push(finding(rule, 'fail', e.message, [], { line: e.line, column: e.column, ...(rule === 'not-computable' ? { status: 'not-computable' as const } : {}) }));

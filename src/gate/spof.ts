@@ -94,7 +94,7 @@ export function judgeSpof(
     delta: before ? sizeOf(now, part.kind) - sizeOf(before, part.kind) : null,
     se: before ? 0 : null,
     threshold: null,
-    status: 'met',
+    status: 'holds',
   }));
   const findings: Finding[] = [];
   if (!base || !before || !matching) return { rows, findings };
@@ -180,14 +180,14 @@ export function judgeSpof(
     });
   }
   // Each finding marks the row of its kind. Hidden weak points cannot be judged (the claim is
-  // unchecked): uncertain, unless the policy fails them.
+  // unchecked): unsettled, unless the policy fails them.
   const partOf = (x: Finding): SpofPart =>
     x.rule === 'new-bridge' ? 'bridges' : x.rule === 'new-cut-node' ? 'cut-nodes' : x.rule === 'new-stranding-group' ? 'risk-groups' : x.elements[0]?.kind === 'link' ? 'bridges' : x.elements[0]?.kind === 'node' ? 'cut-nodes' : 'risk-groups';
   parts.forEach((part, i) => {
     const mine = findings.filter((x) => x.rule !== 'degraded' && partOf(x) === part.kind);
     const weakHere = mine.some((x) => x.rule !== 'hardened-weak-point');
-    if (weakHere || (mine.length > 0 && r.hardenedWeakPoints === 'fail')) rows[i].status = 'regressed';
-    else if (mine.length > 0) rows[i].status = 'uncertain';
+    if (weakHere || (mine.length > 0 && r.hardenedWeakPoints === 'fail')) rows[i].status = 'weakened';
+    else if (mine.length > 0) rows[i].status = 'unsettled';
   });
   for (const x of findings) {
     const i = parts.findIndex((p) => p.kind === partOf(x));

@@ -5,7 +5,7 @@
 
 import type { FileReport, FileStatus, Report } from '../report/report.js';
 
-export const FILE_STATUSES: readonly FileStatus[] = ['pass', 'regressed', 'below-threshold', 'new', 'removed', 'renamed', 'error'];
+export const FILE_STATUSES: readonly FileStatus[] = ['holds', 'weakened', 'below-floor', 'new', 'removed', 'renamed', 'unreadable'];
 
 export function countStatuses(files: readonly FileReport[]): Record<FileStatus, number> {
   const counts = Object.fromEntries(FILE_STATUSES.map((s) => [s, 0])) as Record<FileStatus, number>;
@@ -14,7 +14,7 @@ export function countStatuses(files: readonly FileReport[]): Record<FileStatus, 
 }
 
 export function verdictOf(files: readonly FileReport[]): 'pass' | 'fail' {
-  const failed = files.some((f) => f.status === 'error' || f.findings.some((x) => x.severity === 'fail'));
+  const failed = files.some((f) => f.status === 'unreadable' || f.findings.some((x) => x.severity === 'fail'));
   return failed ? 'fail' : 'pass';
 }
 

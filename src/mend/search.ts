@@ -2,7 +2,7 @@
 // alternative, elements to harden) that remove the design's failing and warning findings,
 // each judged by the policy's own engine on the mended design.
 //
-//   1. Targets: new bridges and cut nodes, missed floors and regressions (severity fail or
+//   1. Targets: new bridges and cut nodes, floors fallen short and weakenings (severity fail or
 //      warn) — what a change to the design can fix.
 //   2. Bounds: the Eswaran–Tarjan number of links (bridge-tree.ts), for the new bridges and
 //      for every bridge of the design.
@@ -71,7 +71,7 @@ export function targetKey(f: Pick<Finding, 'rule' | 'requirement' | 'elements'>)
   return `${f.rule}|${f.requirement ?? ''}`;
 }
 
-/** The findings a change to the design can fix: severity fail or warn, on a requirement that was missed or regressed. */
+/** The findings a change to the design can fix: severity fail or warn, on a requirement that fell short or weakened. */
 export function mendTargets(report: FileReport): MendTarget[] {
   const rows = new Map(report.requirements.map((r) => [r.id, r]));
   const out: MendTarget[] = [];
@@ -80,7 +80,7 @@ export function mendTargets(report: FileReport): MendTarget[] {
     if (f.severity === 'notice' || !FIXABLE.has(f.rule)) continue;
     if (f.rule !== 'new-bridge' && f.rule !== 'new-cut-node') {
       const row = f.requirement ? rows.get(f.requirement) : undefined;
-      if (!row || (row.status !== 'missed' && row.status !== 'regressed')) continue;
+      if (!row || (row.status !== 'short' && row.status !== 'weakened')) continue;
     }
     const key = targetKey(f);
     if (seen.has(key)) continue;
@@ -338,7 +338,7 @@ function hardenSet(targets: readonly MendTarget[]): ReportElement[] {
 }
 
 function fails(r: FileReport): boolean {
-  return r.status === 'error' || r.findings.some((f) => f.severity === 'fail');
+  return r.status === 'unreadable' || r.findings.some((f) => f.severity === 'fail');
 }
 
 function remaining(r: FileReport, targets: readonly MendTarget[]): string[] {
@@ -407,7 +407,7 @@ function suggestion(
     .filter((r) => wanted.has(r.id))
     .map((r) => {
       const a = afterRows.get(r.id);
-      return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? 'uncertain' };
+      return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? 'unsettled' };
     });
   return {
     kind,

@@ -122,7 +122,7 @@ removed-designs: notice
 
 # Work each evaluation of a design may take (head and base each). Beyond it the engine runs
 # fewer realizations or N-1 cases and the report marks the result as reduced; what the reduced
-# work cannot settle is "uncertain", never a pass. Seconds are converted to work at a fixed
+# work cannot settle is "unsettled", never a pass. Seconds are converted to work at a fixed
 # rate (5e7 element visits per second), so a report never depends on the machine's speed.
 budget:
   seconds: 60              # about a minute for a 1,000-node design under this policy

@@ -199,7 +199,7 @@ function describeBudget(b: Budget): string {
 
 /**
  * Apply the keys `next` sets on top of `prev`. A budget is not a floor, but it is the effort
- * that judges the floors: what a smaller one cannot settle is "uncertain" (a warning), so a
+ * that judges the floors: what a smaller one cannot settle is "unsettled" (a warning), so a
  * derived file or a scope may raise it, never lower it.
  */
 function mergeBudget(prev: Layered<Budget>, next: Layered<Budget>, what: string): Layered<Budget> {
@@ -219,7 +219,7 @@ function mergeBudget(prev: Layered<Budget>, next: Layered<Budget>, what: string)
   throw new PolicyError(
     `${what} lowers the budget to ${visits(after)} element visits (${describeBudget(merged)}) where ${visits(before)} (${describeBudget(prev.value)}) is in force`,
     (at && merged.fieldWhere[at]) || next.value.where,
-    'an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements uncertain',
+    'an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements unsettled',
     [related((prevAt && prev.value.fieldWhere[prevAt]) || prev.value.where, 'the budget in force')],
   );
 }

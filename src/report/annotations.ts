@@ -55,7 +55,7 @@ export const ANNOTATIONS_PER_LEVEL = 10;
 const LEVEL: Record<Severity, AnnotationLevel> = { fail: 'error', warn: 'warning', notice: 'notice' };
 
 const TITLE: Record<Finding['rule'], string> = {
-  'r-threshold': 'r-threshold missed',
+  'r-threshold': 'r-threshold not held',
   'area-floor': 'envelope area below its floor',
   'spread-ceiling': 'envelope spread above its ceiling',
   'n-1': 'N\u22121 rule broken',
@@ -63,7 +63,7 @@ const TITLE: Record<Finding['rule'], string> = {
   'new-cut-node': 'new single point of failure (cut site)',
   'new-stranding-group': 'new single point of failure (shared-risk group)',
   'hardened-weak-point': 'new weak point hidden by hardening',
-  regression: 'robustness regressed',
+  regression: 'robustness weakened',
   'weakest-sequence': 'weakest removal sequence',
   'parse-error': 'design could not be read',
   'removed-design': 'design removed',
@@ -81,7 +81,7 @@ export function annotationsOf(report: Report, options: AnnotationOptions = {}): 
     const file = repoPath(options.pathPrefix, f.path);
     const touched = options.changedLines?.get(file);
     const findings = [...f.findings];
-    if (f.status === 'error' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
+    if (f.status === 'unreadable' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
       findings.push({ rule: 'parse-error', severity: 'fail', message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
     }
     for (const x of findings) {

@@ -44,7 +44,7 @@ const esc = (s: string | number) => escapeHtml(String(s));
 
 /** A finding's title by rule, refined by its status (labels.ts, findingTitle). */
 const RULE_TITLE: Record<Finding['rule'], string> = {
-  'r-threshold': 'r-threshold missed',
+  'r-threshold': 'r-threshold not held',
   'area-floor': 'area below its floor',
   'spread-ceiling': 'spread above its ceiling',
   'n-1': 'N\u22121 rule broken',
@@ -100,9 +100,9 @@ caption{text-align:left;font-size:.85rem;color:var(--muted);padding-bottom:4px}
 th,td{padding:5px 8px;border-bottom:1px solid var(--rule);text-align:left;vertical-align:top}
 th{font-weight:600;background:#efeadf}
 td.num,th.num{text-align:right;white-space:nowrap}
-.st-missed,.st-regressed{font-weight:700}
+.st-short,.st-weakened{font-weight:700}
 .sev-fail{color:var(--fail)}.sev-warn{color:var(--warn)}.sev-notice{color:var(--notice)}
-.st-met{color:var(--pass)}.st-within-noise,.st-uncertain{color:var(--muted)}
+.st-holds{color:var(--pass)}.st-inside-error,.st-unsettled{color:var(--muted)}
 ul.findings{list-style:none;padding:0;margin:0}
 ul.findings li{padding:6px 0 6px 12px;border-left:3px solid var(--rule);margin:6px 0}
 ul.findings li.fail{border-left-color:var(--fail)}ul.findings li.warn{border-left-color:var(--warn)}
@@ -221,7 +221,7 @@ function designSection(f: FileReport, index: number): string {
   if (f.previousPath) out.push(`<p class="facts">Renamed from <code>${esc(f.previousPath)}</code>; compared with its old self.</p>`);
   if (f.error) {
     out.push(
-      `<p class="error">${fileStatusWord(f) === STATUS_WORD.error ? 'Could not be read' : 'Could not be evaluated'}: <code>${esc(f.path)}:${f.error.line || 1}:${f.error.column || 1}</code> ${esc(f.error.message)}</p>`,
+      `<p class="error">${fileStatusWord(f) === STATUS_WORD.unreadable ? 'Could not be read' : 'Could not be evaluated'}: <code>${esc(f.path)}:${f.error.line || 1}:${f.error.column || 1}</code> ${esc(f.error.message)}</p>`,
     );
   }
   if (f.head) out.push(`<p class="facts">${esc(facts(f.head))}</p>`);
@@ -302,7 +302,7 @@ function chartData(chart: EnvelopeChart, id: string): string {
 
 function requirementTable(rows: RequirementResult[], id: string): string {
   const body = rows.map((r) => {
-    const bad = r.status === 'missed' || r.status === 'regressed';
+    const bad = r.status === 'short' || r.status === 'weakened';
     const cls = `st-${r.status}${bad ? ` sev-${r.severity}` : ''}`;
     return (
       `<tr data-requirement="${esc(r.id)}">` +
@@ -317,8 +317,8 @@ function requirementTable(rows: RequirementResult[], id: string): string {
       '</tr>'
     );
   });
-  const noise = rows.some((r) => r.status === 'within-noise')
-    ? '<p class="facts">Within noise: the value dropped by less than its Monte Carlo error, which is never a failure.</p>'
+  const noise = rows.some((r) => r.status === 'inside-error')
+    ? '<p class="facts">Inside the error: the value dropped by less than its Monte Carlo error, which is never a failure.</p>'
     : '';
   return [
     '<h3>Requirements</h3>',

@@ -88,27 +88,27 @@ function minus(text: string): string {
 }
 
 export const STATUS_WORD: Record<FileStatus, string> = {
-  pass: 'pass',
-  regressed: 'regressed',
-  'below-threshold': 'below threshold',
+  holds: 'holds',
+  weakened: 'weakened',
+  'below-floor': 'below its floor',
   new: 'new design',
   removed: 'removed',
   renamed: 'renamed',
-  error: 'could not be read',
+  unreadable: 'could not be read',
 };
 
 export const REQUIREMENT_STATUS_WORD: Record<RequirementResult['status'], string> = {
-  met: 'met',
-  missed: 'missed',
-  regressed: 'regressed',
-  'within-noise': 'within noise',
-  uncertain: 'uncertain',
+  holds: 'holds',
+  short: 'short of its floor',
+  weakened: 'weakened',
+  'inside-error': 'inside the error',
+  unsettled: 'unsettled',
   'not-applicable': 'not applicable',
 };
 
 /** A file's status in words; an error whose R cannot be computed is not "could not be read". */
 export function fileStatusWord(f: FileReport): string {
-  if (f.status === 'error' && !f.findings.some((x) => x.rule === 'parse-error') && f.findings.some((x) => x.rule === 'not-computable')) return 'could not be evaluated';
+  if (f.status === 'unreadable' && !f.findings.some((x) => x.rule === 'parse-error') && f.findings.some((x) => x.rule === 'not-computable')) return 'could not be evaluated';
   return STATUS_WORD[f.status];
 }
 
@@ -117,12 +117,12 @@ export function statusCounts(r: { counts: Record<FileStatus, number>; files: Fil
   const out: string[] = [];
   for (const [k, n] of Object.entries(r.counts) as [FileStatus, number][]) {
     if (n <= 0) continue;
-    if (k !== 'error') {
+    if (k !== 'unreadable') {
       out.push(`${n} ${STATUS_WORD[k]}`);
       continue;
     }
-    const evaluated = r.files.filter((f) => f.status === 'error' && fileStatusWord(f) !== STATUS_WORD.error).length;
-    if (n - evaluated > 0) out.push(`${n - evaluated} ${STATUS_WORD.error}`);
+    const evaluated = r.files.filter((f) => f.status === 'unreadable' && fileStatusWord(f) !== STATUS_WORD.unreadable).length;
+    if (n - evaluated > 0) out.push(`${n - evaluated} ${STATUS_WORD.unreadable}`);
     if (evaluated > 0) out.push(`${evaluated} could not be evaluated`);
   }
   return out;
@@ -137,7 +137,7 @@ export function describeNotApplicable(ev: { notApplicable?: { challenge: Challen
 
 /** Whether a file, on its own, fails the gate: any fail-severity finding, or an error. */
 export function fileFails(f: FileReport): boolean {
-  return f.status === 'error' || f.findings.some((x) => x.severity === 'fail');
+  return f.status === 'unreadable' || f.findings.some((x) => x.severity === 'fail');
 }
 
 /** Whether a file has warnings (and no failure). */
@@ -286,7 +286,7 @@ export function weakestSequences(f: FileReport): NamedSequence[] {
 
 /**
  * How a finding is titled, from its rule and what the judging found: a drop within the
- * allowance is not "regressed", a floor that was not settled is not "missed". `names` gives
+ * allowance is not "weakened", a floor that was not settled is not "short". `names` gives
  * the view's word for each rule when the finding is what the rule is about.
  */
 export function findingTitle(x: Finding, names: Readonly<Record<Finding['rule'], string>>): string {
@@ -295,9 +295,9 @@ export function findingTitle(x: Finding, names: Readonly<Record<Finding['rule'],
   switch (x.status) {
     case 'within-allowance':
       return 'robustness dropped within the allowance';
-    case 'within-noise':
+    case 'inside-error':
       return 'change within Monte Carlo noise';
-    case 'uncertain':
+    case 'unsettled':
       return x.rule === 'regression' ? 'change could not be judged' : `${subject ?? x.rule}${kind ?? ''} not settled`;
     case 'reduced-work':
       return `${subject ?? x.rule}${kind ?? ''} judged on reduced work`;

@@ -296,7 +296,7 @@ function fileSection(f: FileReport, detail: Detail, layout: Layout, path: (p: st
   const renamed = f.previousPath ? ` (renamed from ${markdownCode(path(f.previousPath))})` : '';
   let text = `### ${w ? ICON[w] : ICON.ok} ${markdownCode(path(f.path))} \u2014 ${fileStatusWord(f)}${renamed}\n\n`;
   if (f.error) {
-    const what = fileStatusWord(f) === STATUS_WORD.error ? 'Could not be read' : 'Could not be evaluated';
+    const what = fileStatusWord(f) === STATUS_WORD.unreadable ? 'Could not be read' : 'Could not be evaluated';
     text += `${what}: line ${f.error.line}, column ${f.error.column}: ${escapeMarkdown(f.error.message, 500)}\n\n`;
   }
   if (f.requirements.length) text += requirementTable(f.requirements);
@@ -333,13 +333,13 @@ function requirementTable(rows: RequirementResult[]): string {
   let noise = false;
   for (const r of rows) {
     const icon =
-      r.status === 'met' ? ICON.ok : r.status === 'within-noise' ? '\u3030\uFE0F' : r.status === 'uncertain' ? '\u2754' : r.status === 'not-applicable' ? '\u2796' : ICON[r.severity];
-    if (r.status === 'within-noise') noise = true;
+      r.status === 'holds' ? ICON.ok : r.status === 'inside-error' ? '\u3030\uFE0F' : r.status === 'unsettled' ? '\u2754' : r.status === 'not-applicable' ? '\u2796' : ICON[r.severity];
+    if (r.status === 'inside-error') noise = true;
     const err = formatError(r.se);
     const delta = r.delta === null ? '\u2013' : `${formatRequirementDelta(r)}${err ? ` ${err}` : ''}`;
     text += `| ${escapeMarkdown(r.description, 200)} | ${formatRequirementValue(r, r.base)} | ${formatRequirementValue(r, r.head)} | ${delta} | ${icon} ${REQUIREMENT_STATUS_WORD[r.status]} |\n`;
   }
-  if (noise) text += '\n\u3030\uFE0F *within noise*: the value dropped by less than its Monte Carlo error, which is never a failure.\n';
+  if (noise) text += '\n\u3030\uFE0F *inside the error*: the value dropped by less than its Monte Carlo error, which is never a failure.\n';
   return `${text}\n`;
 }
 

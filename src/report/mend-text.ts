@@ -157,7 +157,7 @@ export function mendHtml(f: FileReport, id: string): string {
         `<td class="num">${esc(unitWord(s) || '\u2013')}</td>` +
         `<td class="num">${esc(formatValue(s.rBefore))} \u2192 ${esc(formatValue(s.rAfter))}${perUnit(s) ? `<div class="line">${esc(perUnit(s))}</div>` : ''}</td>` +
         `<td>${s.fixes.length} of ${m.targets.length}${s.leaves.length ? `<div class="line">still: ${esc(s.leaves.join('; ').replace(/\|/g, ' '))}</div>` : ''}<div class="line">${req}</div></td>` +
-        `<td class="${s.holds ? 'st-met' : 'sev-fail'}">${s.holds ? 'holds' : esc(`does not hold (${s.status})`)}</td>` +
+        `<td class="${s.holds ? 'st-holds' : 'sev-fail'}">${s.holds ? 'holds' : esc(`does not hold (${s.status})`)}</td>` +
         '</tr>'
       );
     });

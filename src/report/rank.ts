@@ -6,20 +6,20 @@ import type { FileReport, FileStatus, Finding, Severity } from './report.js';
 export const SEVERITY_RANK: Record<Severity, number> = { fail: 0, warn: 1, notice: 2 };
 
 const STATUS_RANK: Record<FileStatus, number> = {
-  error: 0,
-  'below-threshold': 1,
-  regressed: 2,
+  unreadable: 0,
+  'below-floor': 1,
+  weakened: 2,
   removed: 3,
   new: 4,
   renamed: 5,
-  pass: 6,
+  holds: 6,
 };
 
 /** The most severe finding's severity, or undefined for a file without findings. */
 export function worstSeverity(f: FileReport): Severity | undefined {
   let worst: Severity | undefined;
   for (const x of f.findings) if (worst === undefined || SEVERITY_RANK[x.severity] < SEVERITY_RANK[worst]) worst = x.severity;
-  return f.status === 'error' ? 'fail' : worst;
+  return f.status === 'unreadable' ? 'fail' : worst;
 }
 
 function countOf(f: FileReport, s: Severity): number {

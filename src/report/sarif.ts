@@ -36,7 +36,7 @@ interface RuleText {
 const RULES: Record<RuleId, RuleText> = {
   'r-threshold': {
     name: 'RThreshold',
-    short: 'An r-threshold of the policy is missed',
+    short: 'An r-threshold of the policy is not held',
     full: 'At the stated removal fraction, the stated statistic of the robustness envelope (a quantile, the median, the minimum or the worst case) of R is below the threshold the policy requires.',
     help: 'The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by scopes but never loosened below a floor it inherits.',
   },
@@ -188,7 +188,7 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
   for (const f of rankFiles(report.files)) {
     const path = repoPath(options.pathPrefix, f.path);
     const findings = rankFindings(f.findings);
-    if (f.status === 'error' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
+    if (f.status === 'unreadable' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
       findings.unshift({ rule: 'parse-error', severity: 'fail', message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
     }
     for (const x of findings) {

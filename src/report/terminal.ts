@@ -145,23 +145,23 @@ function describeEvaluation(ev: Evaluation): string {
 }
 
 function requirementTable(rows: RequirementResult[], c: Colors, width: number): string[] {
-  // indent, gaps and the base → head, delta and status columns ("~ within noise" is 14 wide)
-  const fixed = 2 + 2 + 6 + 3 + 6 + 2 + 17 + 2 + 14;
-  const descWidth = Math.max(24, Math.min(56, width - fixed));
+  // indent, gaps and the base → head, delta and status columns ("x short of its floor" is 20 wide)
+  const fixed = 2 + 2 + 6 + 3 + 6 + 2 + 17 + 2 + 20;
+  const descWidth = Math.max(20, Math.min(56, width - fixed));
   const header = `  ${'Requirement'.padEnd(descWidth)}  ${'base'.padStart(6)}   ${'head'.padStart(6)}  ${'\u0394 \u00b1 error'.padEnd(17)}  status`;
   const out = [c.bold(header)];
   for (const r of rows) {
     const desc = wrap(r.description, descWidth);
     const delta = `${formatRequirementDelta(r)} ${formatError(r.se)}`.trim();
     const status = REQUIREMENT_STATUS_WORD[r.status];
-    const bad = r.status === 'missed' || r.status === 'regressed';
-    const sev = bad ? (r.severity === 'fail' ? c.red : r.severity === 'warn' ? c.yellow : c.cyan) : r.status === 'met' ? c.green : c.dim;
-    const symbol = bad ? SYMBOL[r.severity] : r.status === 'met' ? SYMBOL.pass : r.status === 'not-applicable' ? '\u2013' : '~';
+    const bad = r.status === 'short' || r.status === 'weakened';
+    const sev = bad ? (r.severity === 'fail' ? c.red : r.severity === 'warn' ? c.yellow : c.cyan) : r.status === 'holds' ? c.green : c.dim;
+    const symbol = bad ? SYMBOL[r.severity] : r.status === 'holds' ? SYMBOL.pass : r.status === 'not-applicable' ? '\u2013' : '~';
     const first = `  ${desc[0].padEnd(descWidth)}  ${formatRequirementValue(r, r.base).padStart(6)} \u2192 ${formatRequirementValue(r, r.head).padStart(6)}  ${delta.padEnd(17)}  ${sev(`${symbol} ${status}`)}`;
     out.push(first, ...desc.slice(1).map((l) => `  ${l}`));
   }
-  if (rows.some((r) => r.status === 'within-noise')) {
-    const note = 'within noise: the value dropped by less than its Monte Carlo error, which is never a failure';
+  if (rows.some((r) => r.status === 'inside-error')) {
+    const note = 'inside the error: the value dropped by less than its Monte Carlo error, which is never a failure';
     out.push(...wrap(note, width - 2).map((l) => c.dim(`  ${l}`)));
   }
   return out;
@@ -171,7 +171,7 @@ function requirementTable(rows: RequirementResult[], c: Colors, width: number): 
 const NBSP = { space: '\u00a0' };
 /** The finding's kind in the findings list: a drop that is not a regression is a "change". */
 function findingTag(x: GroupedFinding): string {
-  if (x.rule === 'regression' && x.status !== undefined && x.status !== 'regressed') return 'change';
+  if (x.rule === 'regression' && x.status !== undefined && x.status !== 'weakened') return 'change';
   return x.rule;
 }
 

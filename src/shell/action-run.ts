@@ -417,7 +417,7 @@ async function postComment(deps: ActionDeps, env: Env, inputs: ActionInputs, tar
 // ---------------------------------------------------------------------------------------------
 // The run
 
-const STATUSES: FileStatus[] = ['pass', 'regressed', 'below-threshold', 'new', 'removed', 'renamed', 'error'];
+const STATUSES: FileStatus[] = ['holds', 'weakened', 'below-floor', 'new', 'removed', 'renamed', 'unreadable'];
 
 function runUrl(env: Env): string | undefined {
   const server = env.GITHUB_SERVER_URL || 'https://github.com';
@@ -426,7 +426,7 @@ function runUrl(env: Env): string | undefined {
 }
 
 function emptyCounts(): Record<FileStatus, number> {
-  return { pass: 0, regressed: 0, 'below-threshold': 0, new: 0, removed: 0, renamed: 0, error: 0 };
+  return { holds: 0, weakened: 0, 'below-floor': 0, new: 0, removed: 0, renamed: 0, unreadable: 0 };
 }
 
 export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
@@ -603,7 +603,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       return { exitCode: 0, verdict, comment };
     }
     if (verdict === 'fail' && inputs.mode === 'block') {
-      const n = report.files.filter((f) => f.status === 'error' || f.findings.some((x) => x.severity === 'fail')).length;
+      const n = report.files.filter((f) => f.status === 'unreadable' || f.findings.some((x) => x.severity === 'fail')).length;
       const own = report.configuration?.changes.filter((c) => c.weakens).length ?? 0;
       const what = [
         ...(n > 0 ? [`${n} design${n === 1 ? '' : 's'} with failures`] : []),

@@ -256,7 +256,7 @@ describe('pull requests', () => {
     expect(errors.some((e) => /single point of failure/.test(e.props.title))).toBe(true);
     // Outputs.
     expect(r1.outputs).toMatchObject({ verdict: 'fail', designs: '1', report: '.netbrace-out/netbrace-report.json', sarif: '.netbrace-out/netbrace.sarif', html: '.netbrace-out/netbrace-report.html' });
-    expect(Number(r1.outputs['count-regressed']) + Number(r1.outputs['count-below-threshold'])).toBe(1);
+    expect(Number(r1.outputs['count-weakened']) + Number(r1.outputs['count-below-floor'])).toBe(1);
     expect(Object.keys(r1.outputs).sort()).toEqual(Object.keys(actionOutputs()).sort());
     // Summary.
     expect(r1.summary).toMatch(/^## \u274C netbrace: the gate failed/);

@@ -12,7 +12,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { renderHtml } from '../../src/report/html.js';
 import { envelopeChart } from '../../src/report/chart.js';
-import { formatRequirementDelta, formatRequirementValue } from '../../src/report/labels.js';
+import { formatRequirementDelta, formatRequirementValue, REQUIREMENT_STATUS_WORD } from '../../src/report/labels.js';
 import type { Report } from '../../src/report/report.js';
 import { demoReport } from '../report/demo-report.fixture.js';
 import { repoRoot } from '../topology/helpers.js';
@@ -106,7 +106,7 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
         expect(chart.height).toBeGreaterThan(200);
       });
     });
-    // The regressed design's first chart: band, median, 2 node attacks, worst case, base median.
+    // The weakened design's first chart: band, median, 2 node attacks, worst case, base median.
     expect(sections[0].charts[0].series).toBe(6);
   });
 
@@ -133,7 +133,7 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
         expect(shown.base).toEqual([json(r.base), formatRequirementValue(r, r.base)]);
         expect(shown.head).toEqual([json(r.head), formatRequirementValue(r, r.head)]);
         expect(shown.delta).toEqual([json(r.delta), formatRequirementDelta(r)]);
-        expect(shown.status).toBe(r.status.replace('-', ' '));
+        expect(shown.status).toBe(REQUIREMENT_STATUS_WORD[r.status]);
       });
     });
     // and spot-check against the raw JSON, not our own formatter

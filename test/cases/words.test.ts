@@ -156,7 +156,7 @@ describe('a NaN or infinite value is never a pass', () => {
       );
       const f = only(report);
       expect(exitCode).toBe(1);
-      expect(f.status).toBe('error');
+      expect(f.status).toBe('unreadable');
       const broken = f.findings.filter((x) => x.rule === 'not-computable');
       expect(broken.find((x) => x.requirement === 'area-floor:site-failures')?.severity).toBe('fail');
       for (const x of broken) expect(x.message).toMatch(/is (NaN|-?Infinity)(,| and)/);
@@ -165,14 +165,14 @@ describe('a NaN or infinite value is never a pass', () => {
       // base could): a failure either way.
       const attack = f.findings.filter((x) => x.requirement === 'r-threshold:hub-attack@0.2:value');
       expect(attack.map((x) => x.severity)).toEqual(['fail']);
-      expect(f.requirements.every((r) => r.status !== 'met')).toBe(true);
+      expect(f.requirements.every((r) => r.status !== 'holds')).toBe(true);
     });
   }
 
   it('the same run without poison passes (the fixture itself is fine)', async () => {
     const { report, exitCode } = await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'block', paths: ['ring.net.yaml'] }, memoryDeps(repo));
     expect(exitCode).toBe(0);
-    expect(only(report).requirements.map((r) => r.status)).toEqual(['met', 'met']);
+    expect(only(report).requirements.map((r) => r.status)).toEqual(['holds', 'holds']);
   });
 });
 
@@ -182,7 +182,7 @@ describe('views title and word findings by what the judging found', () => {
     const report = run.report!;
     const about = (challenge: string) =>
       planAnnotations(report).annotations.find((a) => a.rule === 'regression' && a.message.startsWith(`area of "${challenge}"`));
-    expect(about('link-failures')?.title).toBe('netbrace: robustness regressed');
+    expect(about('link-failures')?.title).toBe('netbrace: robustness weakened');
     expect(about('site-failures')?.title).toBe('netbrace: robustness dropped within the allowance');
     expect(about('site-failures')?.level).toBe('notice');
     // Markdown escapes brackets; compare the text a reader sees.
@@ -191,8 +191,8 @@ describe('views title and word findings by what the judging found', () => {
     // The deciding digits, and no three-decimal restatement beside them that would contradict them.
     expect(md).toContain('(\u0394 \u22120.02983 \u00b1 0.00153), more than the allowed 0.02980\n');
     // The numbers travel as data too: the allowance each drop was judged against.
-    const regressed = only(report).findings.find((x) => x.requirement === 'area-floor:link-failures' && x.rule === 'regression')!;
-    expect([regressed.status, regressed.allowance]).toEqual(['regressed', 0.0298]);
+    const weakened = only(report).findings.find((x) => x.requirement === 'area-floor:link-failures' && x.rule === 'regression')!;
+    expect([weakened.status, weakened.allowance]).toEqual(['weakened', 0.0298]);
     const sarif = JSON.stringify(renderSarif(report));
     expect(sarif).toContain('"allowance":0.0298');
     expect(renderHtml(report)).toContain('data-status="within-allowance"');

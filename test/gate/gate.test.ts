@@ -21,7 +21,7 @@ describe('gate decisions on fixture pairs', () => {
     expect(exitCode).toBe(1);
     expect(report.verdict).toBe('fail');
     const f = fileOf(report);
-    expect(f.status).toBe('regressed');
+    expect(f.status).toBe('weakened');
     const head = gateFixture('ring-to-chain/head.net.yaml');
     // Every link of a path is a bridge and every inner node a cut node (common practice, textbook fact).
     const bridges = f.findings.filter((x) => x.rule === 'new-bridge');
@@ -34,9 +34,9 @@ describe('gate decisions on fixture pairs', () => {
     // Bridges and cut nodes are counted in rows of their own, never added together.
     const rows = f.requirements.filter((r) => r.id.startsWith('no-new-spof')).map((r) => [r.id, r.description, r.base, r.head, r.status]);
     expect(rows).toEqual([
-      ['no-new-spof/bridges', 'no new bridges', 0, 5, 'regressed'],
-      ['no-new-spof/cut-nodes', 'no new cut nodes', 0, 4, 'regressed'],
-      ['no-new-spof/risk-groups', 'no new shared-risk groups that strand sites', 0, 0, 'met'],
+      ['no-new-spof/bridges', 'no new bridges', 0, 5, 'weakened'],
+      ['no-new-spof/cut-nodes', 'no new cut nodes', 0, 4, 'weakened'],
+      ['no-new-spof/risk-groups', 'no new shared-risk groups that strand sites', 0, 0, 'holds'],
     ]);
     // The removed span is listed with its line in the base.
     expect(f.changes?.removed).toEqual([
@@ -48,7 +48,7 @@ describe('gate decisions on fixture pairs', () => {
     const { report, exitCode } = await gate(pairRepo('redundant-link'));
     expect(exitCode).toBe(0);
     const f = fileOf(report);
-    expect(f.status).toBe('pass');
+    expect(f.status).toBe('holds');
     expect(f.findings.filter((x) => x.severity !== 'notice')).toEqual([]);
     // Node failures use the same node keys on both sides, so every realization removes the same
     // nodes; a link more never lowers pair connectivity or efficiency: the delta cannot be negative.
@@ -72,7 +72,7 @@ describe('gate decisions on fixture pairs', () => {
   it('a reworded comment (same topology, different text) also gives exactly 0: common random numbers', async () => {
     const { report } = await gate(pairRepo('unchanged'));
     const f = fileOf(report);
-    expect(f.status).toBe('pass');
+    expect(f.status).toBe('holds');
     expect(f.findings).toEqual([]);
     for (const r of f.requirements) expect([r.delta, r.se]).toEqual([0, 0]);
   });
@@ -81,32 +81,32 @@ describe('gate decisions on fixture pairs', () => {
     const { report, exitCode } = await gate(pairRepo('removed-node'));
     expect(exitCode).toBe(0);
     const f = fileOf(report);
-    expect(f.status).toBe('pass');
+    expect(f.status).toBe('holds');
     const notices = f.findings.filter((x) => x.rule === 'regression');
     expect(notices.length).toBeGreaterThan(0);
     expect(notices.every((x) => x.severity === 'notice')).toBe(true);
-    expect(notices.some((x) => /within the allowed 0\.050|within noise/.test(x.message))).toBe(true);
+    expect(notices.some((x) => /within the allowed 0\.050|inside the error/.test(x.message))).toBe(true);
     const dropped = f.requirements.filter((r) => r.delta !== null && r.delta < 0);
     expect(dropped.length).toBeGreaterThan(0);
     for (const r of dropped) expect(-r.delta!).toBeLessThanOrEqual(0.05);
     expect(f.changes?.removed.filter((e) => e.kind === 'node').map((e) => e.id)).toEqual(['annex']);
   });
 
-  it('a drop below error-multiple × se is within noise, never a failure, even with no allowance', async () => {
+  it('a drop below error-multiple × se is inside the error, never a failure, even with no allowance', async () => {
     const strict = gateFixture('policy.yaml').replace('allowed-drop: 0.05', 'allowed-drop: 0');
     const { report } = await gate(pairRepo('removed-node', FILE, strict));
     const f = fileOf(report);
-    const noisy = f.requirements.filter((r) => r.status === 'within-noise');
+    const noisy = f.requirements.filter((r) => r.status === 'inside-error');
     expect(noisy.length).toBeGreaterThan(0);
     for (const r of noisy) expect(-r.delta!).toBeLessThan(2 * r.se!);
     for (const r of noisy) {
       const x = f.findings.find((y) => y.requirement === r.id && y.rule === 'regression')!;
-      expect([x.severity, /within noise, not a failure/.test(x.message)]).toEqual(['notice', true]);
+      expect([x.severity, /inside the error, not a failure/.test(x.message)]).toEqual(['notice', true]);
     }
     // Drops beyond the noise with no allowance are regressions.
-    const regressed = f.requirements.filter((r) => r.status === 'regressed');
-    for (const r of regressed) expect(-r.delta!).toBeGreaterThanOrEqual(2 * r.se!);
-    expect(report.verdict).toBe(regressed.length > 0 ? 'fail' : 'pass');
+    const weakened = f.requirements.filter((r) => r.status === 'weakened');
+    for (const r of weakened) expect(-r.delta!).toBeGreaterThanOrEqual(2 * r.se!);
+    expect(report.verdict).toBe(weakened.length > 0 ? 'fail' : 'pass');
   });
 
   it('a head that does not parse fails with its line; the other designs are still judged', async () => {
@@ -116,11 +116,11 @@ describe('gate decisions on fixture pairs', () => {
     const { report, exitCode } = await gate(repo);
     expect(exitCode).toBe(1);
     const broken = fileOf(report, 'networks/broken.net.yaml');
-    expect(broken.status).toBe('error');
+    expect(broken.status).toBe('unreadable');
     expect(broken.error?.line).toBe(4);
     expect(broken.findings[0]).toMatchObject({ rule: 'parse-error', severity: 'fail', line: 4 });
-    expect(fileOf(report).status).toBe('pass');
-    expect(report.counts).toMatchObject({ error: 1, pass: 1 });
+    expect(fileOf(report).status).toBe('holds');
+    expect(report.counts).toMatchObject({ unreadable: 1, holds: 1 });
   });
 
   it('a deleted design is reported; it fails only when the policy says so', async () => {
@@ -194,20 +194,20 @@ describe('envelope floors read the engine\'s envelope', () => {
     expect(j).toBeGreaterThan(0); // 0, 1/6, 1/3, 1/2 plus the threshold's 0.2
     const [q, spread] = f.requirements;
     expect(q.head).toBe(env.quantiles['0.1'].value[j]);
-    expect(q.status).toBe('missed');
+    expect(q.status).toBe('short');
     expect(spread.head).toBe(env.spread);
-    expect(spread.status).toBe(env.spread > 0.0001 ? 'missed' : 'met');
+    expect(spread.status).toBe(env.spread > 0.0001 ? 'short' : 'holds');
     // 0.2 of 11 nodes is 2.2 removals: R is read between 2 and 3, so 3 elements stand behind it.
     expect(f.findings.find((x) => x.rule === 'r-threshold')!.elements.length).toBe(Math.ceil(0.2 * 11));
   });
 
-  it('a floor met by the estimate but not by its confidence interval is uncertain, not met', async () => {
+  it('a floor met by the estimate but not by its confidence interval is unsettled, does not hold', async () => {
     const first = fileOf((await run(0.99)).report);
     const env = first.head!.envelopes[0];
     const j = env.x.indexOf(0.2);
     const band = env.quantiles['0.1'];
     const f = fileOf((await run(band.value[j])).report);
-    expect(f.requirements[0].status).toBe(band.lo[j] < band.value[j] ? 'uncertain' : 'met');
+    expect(f.requirements[0].status).toBe(band.lo[j] < band.value[j] ? 'unsettled' : 'holds');
     expect(band.lo[j]).toBeLessThan(band.value[j]); // this design's band is wide enough to show it
   });
 });
@@ -254,12 +254,12 @@ describe('a threshold on a known attack curve (karate club, static degree attack
     const f = fileOf(report, 'karate.net.yaml');
     const [met, missed] = f.requirements;
     expect(met.id).toBe('r-threshold:hubs@0.06:value');
-    expect(met.status).toBe('met');
+    expect(met.status).toBe('holds');
     // R at 0.06 · 34 = 2.04 and 0.12 · 34 = 4.08 removals, linear between the reference's steps.
     expect(met.head).toBeCloseTo(curve[2] + 0.04 * (curve[3] - curve[2]), 12);
-    expect(missed.status).toBe('missed');
+    expect(missed.status).toBe('short');
     expect(missed.head).toBeCloseTo(curve[4] + 0.08 * (curve[5] - curve[4]), 12);
-    expect(f.status).toBe('below-threshold');
+    expect(f.status).toBe('below-floor');
     expect(exitCode).toBe(1);
     const finding = f.findings.find((x) => x.rule === 'r-threshold')!;
     expect(finding.elements.map((e) => e.id)).toEqual(sequence.slice(0, 5).map(String));
@@ -296,9 +296,9 @@ describe('a threshold on a known attack curve (karate club, static degree attack
     const { report } = await runGate({ head: 'head', policySource: 'head', mode: 'block', paths: ['karate.net.yaml'] }, memoryDeps(repo));
     const f = fileOf(report, 'karate.net.yaml');
     const [wc, n1] = f.requirements;
-    expect([wc.id, wc.status]).toEqual(['r-threshold:failures:worst-case\u00d72', 'missed']);
+    expect([wc.id, wc.status]).toEqual(['r-threshold:failures:worst-case\u00d72', 'short']);
     expect(wc.head).toBeCloseTo(worst['2'].value, 12);
-    expect([n1.id, n1.status]).toEqual(['n-1:node', 'missed']);
+    expect([n1.id, n1.status]).toEqual(['n-1:node', 'short']);
     expect(n1.head).toBeCloseTo(worst['1'].value, 12);
     const byReq = (id: string) => f.findings.find((x) => x.requirement === id)!;
     expect(byReq(wc.id).elements.map((e) => e.id).sort()).toEqual(worst['2'].set.map(String).sort());

@@ -25,7 +25,7 @@ describe('report schema', () => {
     repo.renames = { 'new.net.yaml': 'old.net.yaml' };
     const request = { base: 'base', head: 'head', policySource: 'base' as const, mode: 'inform' as const };
     const whole = await runGate(request, memoryDeps(repo));
-    expect(whole.report.files.map((f) => f.status).sort()).toEqual(['error', 'regressed', 'removed', 'renamed']);
+    expect(whole.report.files.map((f) => f.status).sort()).toEqual(['removed', 'renamed', 'unreadable', 'weakened']);
     // Through JSON, as every reader sees it (non-finite numbers become null).
     check(JSON.parse(serializeReport(whole.report)));
     const parts = await Promise.all([1, 2].map((index) => runGate({ ...request, part: { index, total: 2 } }, memoryDeps(repo))));

@@ -3,7 +3,7 @@
 // greedy; then band realizations and contingency cases are scaled by one factor, never below 10
 // realizations or one case), says so in `degraded`, and the report marks the file and every
 // requirement the cut touches; a requirement that the reduced work cannot settle is reported as
-// uncertain — never as met (the rules: src/gate/compare.ts). Base and head get the same budget
+// unsettled — never as met (the rules: src/gate/compare.ts). Base and head get the same budget
 // and run the same number of realizations, so that they stay paired (src/gate/budget.ts).
 //
 // The expected counts below come from the documented estimate (evaluate.ts header): with a
@@ -101,7 +101,7 @@ async function compare(policyText: string, work?: number, deps: Partial<GateDeps
 
 const threshold = (statistic: string, min: number, at = 0.2) => `  - kind: r-threshold\n    challenge: failures\n    at: ${at}\n    statistic: ${statistic}\n    min: ${min}\n`;
 
-let uncertain = 0;
+let unsettled = 0;
 
 describe('the report marks a reduced evaluation, in every view', () => {
   it('a degraded finding with the reason; the summary, annotations and terminal say it too', async () => {
@@ -119,7 +119,7 @@ describe('the report marks a reduced evaluation, in every view', () => {
     const reqs = threshold('median', 0.01) + threshold('mean', 0.01) + '  - kind: area-floor\n    challenge: failures\n    min: 0.01\n  - kind: no-new-spof\n';
     const f = await judge(policy(reqs), 2 * VISITS * 40);
     const touched = f.requirements.filter((r) => !r.id.startsWith('no-new-spof'));
-    expect(touched.map((r) => r.status)).toEqual(['met', 'met', 'met']);
+    expect(touched.map((r) => r.status)).toEqual(['holds', 'holds', 'holds']);
     for (const r of touched) {
       const own = f.findings.filter((x) => x.requirement === r.id);
       expect(own.map((x) => [x.severity, x.message.endsWith('judged on reduced work, the work budget left 40 of the 400 realizations')])).toEqual([['notice', true]]);
@@ -128,26 +128,26 @@ describe('the report marks a reduced evaluation, in every view', () => {
   });
 });
 
-describe('what the reduced work cannot settle is uncertain, never met', () => {
+describe('what the reduced work cannot settle is unsettled, never met', () => {
   it('an N−1 floor that the evaluated cases meet, with cases left out by the budget', async () => {
     const req = '  - kind: n-1\n    element: link\n    min: 0.5\n';
     const full = await judge(policy(req));
-    expect(full.requirements[0]).toMatchObject({ status: 'met' });
+    expect(full.requirements[0]).toMatchObject({ status: 'holds' });
     const cut = await judge(policy(req), VISITS * 368);
     expect(cut.head!.contingencies[0].evaluated).toBeLessThan(cut.head!.contingencies[0].total);
-    expect(cut.requirements[0].status).toBe('uncertain');
-    uncertain++;
+    expect(cut.requirements[0].status).toBe('unsettled');
+    unsettled++;
     const why = cut.findings.find((x) => x.rule === 'n-1')!;
     expect(why.severity).toBe('warn');
     expect(why.message).toMatch(/only \d+ of 17 single link losses were evaluated/);
-    expect(renderSummary(cut.report)).toMatch(/uncertain/);
+    expect(renderSummary(cut.report)).toMatch(/unsettled/);
   });
 
   it('an N−1 floor that an evaluated case already breaks is missed, budget or not', async () => {
     const cut = await judge(policy('  - kind: n-1\n    element: node\n    min: 0.95\n'), VISITS * 368);
     expect(cut.head!.contingencies[0].evaluated).toBeLessThan(cut.head!.contingencies[0].total);
-    expect(cut.requirements[0].status).toBe('missed');
-    expect(cut.status).toBe('below-threshold');
+    expect(cut.requirements[0].status).toBe('short');
+    expect(cut.status).toBe('below-floor');
   });
 
   it('a worst-case floor met by a greedy search that the budget put in place of the exact one', async () => {
@@ -155,12 +155,12 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
     const req = '  - kind: r-threshold\n    challenge: failures\n    statistic: worst-case\n    removals: 2\n    min: 0.5\n';
     const full = await judge(policy(req, challenge));
     expect(full.head!.envelopes[0].worstCase?.method).toBe('exact');
-    expect(full.requirements[0].status).toBe('met');
+    expect(full.requirements[0].status).toBe('holds');
     // Band 50 × 2 passes + exact pairs C(11, 2) + 11 = 166 passes is over 150; the greedy search (22) fits.
     const cut = await judge(policy(req, challenge), 150 * VISITS);
     expect(cut.head!.envelopes[0].worstCase?.method).toBe('greedy');
-    expect(cut.requirements[0].status).toBe('uncertain');
-    uncertain++;
+    expect(cut.requirements[0].status).toBe('unsettled');
+    unsettled++;
     expect(cut.findings.find((x) => x.rule === 'r-threshold')!.message).toMatch(/searched greedily/);
   });
 
@@ -173,13 +173,13 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
     const band = env.quantiles['0.1'];
     expect(band.lo[j]).toBeLessThan(band.value[j]);
     const cut = await judge(policy(at(band.value[j])), 2 * VISITS * 12);
-    expect(cut.requirements[0]).toMatchObject({ status: 'uncertain', head: band.value[j] });
-    uncertain++;
+    expect(cut.requirements[0]).toMatchObject({ status: 'unsettled', head: band.value[j] });
+    unsettled++;
     expect(cut.findings.find((x) => x.rule === 'r-threshold')).toMatchObject({ severity: 'warn' });
   });
 
   // Mean, area and spread on 12 of 400 realizations: a floor just under the value (within 2 of
-  // the value's own standard errors) is uncertain; a clear floor on all 400 is met. (At 40 %
+  // the value's own standard errors) is unsettled; a clear floor on all 400 is met. (At 40 %
   // removed the realizations differ; at 20 % all twelve give the same R, so their standard
   // error is 0 — a limit of the rule, written down in the README.)
   const statistics: { name: string; req: (v: number) => string; value: (e: FileReport['head']) => number }[] = [
@@ -195,17 +195,17 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
       const ceiling = s.name.includes('ceiling');
       const edge = Number((ceiling ? v + 0.001 : v - 0.001).toFixed(6));
       const cut = await judge(policy(s.req(edge)), 2 * VISITS * 12);
-      expect(cut.requirements[0].status).toBe('uncertain');
-      uncertain++;
+      expect(cut.requirements[0].status).toBe('unsettled');
+      unsettled++;
       const why = cut.findings.find((x) => x.requirement === cut.requirements[0].id && x.severity === 'warn')!;
       expect(why.message).toMatch(/meets it, but the work budget left 12 of the 400 realizations, and it clears the (floor|ceiling) by 0\.001, not by more than 2 standard errors \(2 × 0\.\d{3}\)/);
       // All 400 realizations: the same floor is judged on its value alone (this one meets it).
       const full = await judge(policy(s.req(ceiling ? 0.99 : 0.01)));
-      expect(full.requirements[0].status).toBe('met');
+      expect(full.requirements[0].status).toBe('holds');
     });
   }
 
-  it('a min floor met by the few realizations left, which more realizations break: uncertain, then missed', async () => {
+  it('a min floor met by the few realizations left, which more realizations break: unsettled, then missed', async () => {
     // The minimum over fewer realizations can only be higher: on 12 it meets a floor that 400
     // miss. (Its bootstrap error does not show it: at 50 % removed, the 12 clear this floor by
     // more than 2 standard errors; so a min floor on cut realizations is never met.)
@@ -216,16 +216,16 @@ describe('what the reduced work cannot settle is uncertain, never met', () => {
     const cut = await judge(policy(threshold('min', floor, 0.5)), 2 * VISITS * 12);
     const cutEnv = cut.head!.envelopes[0];
     expect(cutEnv.min[j]).toBeGreaterThan(env.min[j]);
-    expect(cut.requirements[0].status).toBe('uncertain');
-    uncertain++;
+    expect(cut.requirements[0].status).toBe('unsettled');
+    unsettled++;
     expect(cut.findings.find((x) => x.rule === 'r-threshold')!.message).toMatch(/the minimum of fewer realizations can only be higher than that of all of them$/);
-    expect((await judge(policy(threshold('min', floor, 0.5)))).requirements[0].status).toBe('missed');
+    expect((await judge(policy(threshold('min', floor, 0.5)))).requirements[0].status).toBe('short');
   });
 
-  it('a requirement whose challenge the design cannot run is uncertain with a warning, not met', async () => {
+  it('a requirement whose challenge the design cannot run is unsettled with a warning, not met', async () => {
     const f = await judge(policy('  - kind: area-floor\n    challenge: quakes\n    min: 0.1\n', '  quakes:\n    remove: region\n    until: 50\n    points: 6\n'));
-    expect(f.requirements[0].status).toBe('uncertain');
-    uncertain++;
+    expect(f.requirements[0].status).toBe('unsettled');
+    unsettled++;
     expect(f.findings.some((x) => x.severity === 'warn' && /could not be judged/.test(x.message))).toBe(true);
   });
 });
@@ -247,7 +247,7 @@ describe('base and head: one budget, paired realizations', () => {
     expect(f.findings.filter((x) => x.rule === 'degraded').map((x) => x.message)).toEqual([`head evaluation reduced: ${reason}`, `base evaluation reduced: ${reason}`]);
   });
 
-  it('a drop judged on cut realizations: regressed only clearly beyond the allowance, uncertain near it, a notice clearly inside', async () => {
+  it('a drop judged on cut realizations: regressed only clearly beyond the allowance, unsettled near it, a notice clearly inside', async () => {
     // The mean of R at 20 % removed: the annex site cut off from the mesh (its two links gone,
     // the site kept, so both sides count 11 sites) lowers it on nearly every realization.
     const isolated = MESH.replace('  - between: [annex, s0]\n', '').replace('  - between: [annex, s5]\n', '');
@@ -264,38 +264,38 @@ describe('base and head: one budget, paired realizations', () => {
     const regressionOf = (f: FileReport) =>f.findings.find((x) => x.rule === 'regression')!;
 
     const near = await at(drop);
-    expect(near.requirements[0].status).toBe('uncertain');
-    uncertain++;
+    expect(near.requirements[0].status).toBe('unsettled');
+    unsettled++;
     expect(regressionOf(near).severity).toBe('warn');
     expect(regressionOf(near).message).toMatch(/so it cannot be told whether it is beyond it: the work budget left 40 of the 400 realizations on head and base$/);
     expect(near.report.verdict).toBe('pass');
 
     const beyond = await at(drop - 2 * noise);
-    expect(beyond.requirements[0].status).toBe('regressed');
+    expect(beyond.requirements[0].status).toBe('weakened');
     expect(regressionOf(beyond).severity).toBe('fail');
     expect(beyond.report.verdict).toBe('fail');
 
     const inside = await at(drop + 2 * noise);
-    expect(inside.requirements[0].status).toBe('met');
+    expect(inside.requirements[0].status).toBe('holds');
     expect(regressionOf(inside).severity).toBe('notice');
 
     // The same allowance as "near" on all 400 realizations: judged on the value alone.
     const full = (await compareIsolated(policy(mean, FAILURES, rest(Number(drop.toFixed(6)))))).requirements[0];
-    expect(full.status).not.toBe('uncertain');
+    expect(full.status).not.toBe('unsettled');
   });
 
-  it('base and head cut differently do not pair: the change is uncertain, whatever its sign', async () => {
+  it('base and head cut differently do not pair: the change is unsettled, whatever its sign', async () => {
     // An engine that gives the head half the work it was handed: its count then differs.
     const skewed: GateDeps['evaluate'] = (graph, s) => evaluateDesign(graph, graph.n === 10 ? { ...s, budget: { maxWork: Math.floor(s.budget!.maxWork! / 2) } } : s);
     const f = await compare(policy(area, FAILURES, rest(0.5)), 2 * VISITS * 40, { evaluate: skewed });
     const [nb, nh] = [f.base!.envelopes[0].realizations, f.head!.envelopes[0].realizations];
     expect(nb).not.toBe(nh);
-    expect(f.requirements[0].status).toBe('uncertain');
-    uncertain++;
+    expect(f.requirements[0].status).toBe('unsettled');
+    unsettled++;
     const why = f.findings.find((x) => x.rule === 'regression')!;
     expect(why.severity).toBe('warn');
     expect(why.message).toContain(`the budget cut base and head to different numbers of realizations (${nb} and ${nh}), so they do not pair; the change cannot be judged`);
-    reportCount('budgets', 'uncertain requirements shown', uncertain);
+    reportCount('budgets', 'unsettled requirements shown', unsettled);
   });
 });
 

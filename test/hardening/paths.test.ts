@@ -207,7 +207,7 @@ describe('Action inputs never reach outside the workspace', () => {
     mkdirSync(parts);
     const r = sampleReport();
     writeFileSync(path.join(parts, 'a.json'), JSON.stringify(r));
-    writeFileSync(path.join(outside, 'b.json'), JSON.stringify({ ...r, files: [{ path: SECRET, status: 'error', findings: [], requirements: [] }] }));
+    writeFileSync(path.join(outside, 'b.json'), JSON.stringify({ ...r, files: [{ path: SECRET, status: 'unreadable', findings: [], requirements: [] }] }));
     symlinkSync(path.join(outside, 'b.json'), path.join(parts, 'b.json'));
     symlinkSync(outside, path.join(parts, 'more'));
     const summaries: string[] = [];
@@ -256,7 +256,7 @@ describe('the gate on the command line', () => {
     const r = await cli(repo, 'check', '--head', head, '--format', 'json');
     const report = JSON.parse(r.out) as Report;
     const f = report.files.find((x) => x.path === 'designs/committed.net.yaml')!;
-    expect(f.status).toBe('error');
+    expect(f.status).toBe('unreadable');
     expect(r.out + r.err).not.toContain(SECRET);
     commitFiles(repo, { 'designs/committed.net.yaml': null }, 'remove the link');
   });

@@ -166,7 +166,7 @@ describe('the SVG map', () => {
   const map = buildDesignMap({ graph: head, labels: new Map(headT.nodes.map((n) => [n.id, n.label ?? n.id])) }, { graph: base }) as DesignMap;
   const report: FileReport = {
     path: 'designs/lunmere-backbone.net.yaml',
-    status: 'regressed',
+    status: 'weakened',
     requirements: [],
     findings: [
       { rule: 'new-bridge', severity: 'fail', message: 'x', elements: [{ id: 'kaskeld-ibberlin', kind: 'link', line: 303 }], line: 303 },
@@ -219,7 +219,7 @@ describe('the SVG map', () => {
   it('escapes hostile ids', () => {
     const t = parseDesign('nodes: [{id: "<script>x</script>"}, {id: "a&b\\"c"}]\nlinks: [{between: ["<script>x</script>", "a&b\\"c"], id: "</title><g onload=1>"}]\n', 'h.net.yaml');
     const m = buildDesignMap({ graph: compileTopology(t) }) as DesignMap;
-    const out = renderMapSvg(m, mapHighlights({ path: 'h', status: 'pass', findings: [], requirements: [] }));
+    const out = renderMapSvg(m, mapHighlights({ path: 'h', status: 'holds', findings: [], requirements: [] }));
     expect(out).not.toContain('<script>');
     expect(out).not.toContain('<g onload');
     const titles = walk(parseSvg(out)).filter((e) => e.name === 'title').map((e) => e.text);

@@ -17,7 +17,7 @@ describe('mending a ring that became a chain', () => {
   it('suggests the one link that closes the ring again: the Eswaran–Tarjan bound, and it holds', async () => {
     const { report } = await runGate(request, memoryDeps(pairRepo('ring-to-chain')));
     const f = report.files[0];
-    expect(f.status).toBe('regressed');
+    expect(f.status).toBe('weakened');
     const m = f.mend!;
     expect(m.targets.filter((t) => t.rule === 'new-bridge')).toHaveLength(5);
     // A chain's bridge tree is the chain: two leaves, one link (Eswaran & Tarjan 1976).
@@ -27,7 +27,7 @@ describe('mending a ring that became a chain', () => {
     expect(first.kind).toBe('links');
     expect(first.links.map((l) => [...l.between].sort())).toEqual([['harbour', 'orchard']]);
     expect(first.holds).toBe(true);
-    expect(first.status).toBe('pass');
+    expect(first.status).toBe('holds');
     expect(first.fixes).toHaveLength(m.targets.length);
     expect(first.method).toContain('the Eswaran\u2013Tarjan bound is 1');
     expect(first.rAfter!).toBeGreaterThan(first.rBefore!);
@@ -86,15 +86,15 @@ describe('mending a ring that became a chain', () => {
   it('searches nothing with mend.evaluations: 0, or for a design that passes', async () => {
     const policy = `${gateFixture('policy.yaml')}mend:\n  evaluations: 0\n`;
     const off = (await runGate(request, memoryDeps(pairRepo('ring-to-chain', FILE, policy)))).report.files[0];
-    expect(off.status).toBe('regressed');
+    expect(off.status).toBe('weakened');
     expect(off.mend).toBeUndefined();
     const passing = (await runGate(request, memoryDeps(pairRepo('redundant-link')))).report.files[0];
-    expect(passing.status).toBe('pass');
+    expect(passing.status).toBe('holds');
     expect(passing.mend).toBeUndefined();
     expect(passing.map).toBeDefined();
   });
 
-  it('without a base, aims at the missed floors', async () => {
+  it('without a base, aims at the floors it falls short of', async () => {
     const policy = 'requirements:\n  - kind: n-1\n    element: link\n    min: 0.7\n';
     const repo = { base: {}, head: { '.netbrace.yaml': policy, [FILE]: gateFixture('ring-to-chain/head.net.yaml') } };
     const { report } = await runGate({ head: 'head', paths: [FILE], policySource: 'head', mode: 'block', mend: 'always' }, memoryDeps(repo));

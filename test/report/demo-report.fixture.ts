@@ -1,5 +1,5 @@
 // An input fixture for the report views: a realistic Report of the shape the gate produces
-// for the demo's cost-saving change (one regressed design, one new design, one unreadable
+// for the demo's cost-saving change (one weakened design, one new design, one unreadable
 // file). The numbers are made up to look like an evaluation; they are not a result.
 
 import type { AttackCurve, Envelope, QuantileBand, WorstCase } from '../../src/envelope/types.js';
@@ -148,7 +148,7 @@ const headBackbone: Evaluation = {
 
 const backbone: FileReport = {
   path: 'designs/lunmere-backbone.net.yaml',
-  status: 'regressed',
+  status: 'weakened',
   format: 'native-yaml',
   requirements: [
     {
@@ -160,7 +160,7 @@ const backbone: FileReport = {
       delta: -0.077,
       se: 0.006,
       threshold: 0.45,
-      status: 'missed',
+      status: 'short',
     },
     {
       id: 'area:random-nodes',
@@ -171,7 +171,7 @@ const backbone: FileReport = {
       delta: -0.047,
       se: 0.002,
       threshold: 0.55,
-      status: 'regressed',
+      status: 'weakened',
     },
     {
       id: 'n-1:node',
@@ -182,7 +182,7 @@ const backbone: FileReport = {
       delta: -0.047,
       se: 0,
       threshold: 0.6,
-      status: 'met',
+      status: 'holds',
     },
     {
       id: 'spread:random-links',
@@ -193,7 +193,7 @@ const backbone: FileReport = {
       delta: 0.0002,
       se: 0.0003,
       threshold: 0.12,
-      status: 'within-noise',
+      status: 'inside-error',
     },
     {
       id: 'no-new-spof',
@@ -204,7 +204,7 @@ const backbone: FileReport = {
       delta: 2,
       se: 0,
       threshold: null,
-      status: 'missed',
+      status: 'short',
     },
   ],
   findings: [
@@ -285,7 +285,7 @@ const metro: FileReport = {
       delta: null,
       se: null,
       threshold: 0.45,
-      status: 'met',
+      status: 'holds',
     },
   ],
   findings: [
@@ -302,7 +302,7 @@ const metro: FileReport = {
 
 const broken: FileReport = {
   path: 'designs/lab.graphml',
-  status: 'error',
+  status: 'unreadable',
   format: 'graphml',
   requirements: [],
   findings: [
@@ -328,7 +328,7 @@ export function demoReport(): Report {
     base: '3f9c2e1',
     head: '8a41d07',
     seed: 7,
-    counts: { pass: 0, regressed: 1, 'below-threshold': 0, new: 1, removed: 0, renamed: 0, error: 1 },
+    counts: { holds: 0, weakened: 1, 'below-floor': 0, new: 1, removed: 0, renamed: 0, unreadable: 1 },
     files: [structuredClone(backbone), structuredClone(metro), structuredClone(broken)],
     caution: CAUTION,
   };

@@ -49,7 +49,7 @@ describe('renderHtml', () => {
     expect(row).toContain(`data-field="head" data-value="${r.head}">0.421<`);
     expect(row).toContain(`data-field="delta" data-value="${r.delta}">\u22120.077`);
     expect(row).toContain(`data-value="${r.se}">\u00b1 0.006<`);
-    expect(row).toContain('data-field="status">missed<');
+    expect(row).toContain('data-field="status">short of its floor<');
   });
 
   it('escapes every string from the report', () => {

@@ -43,8 +43,8 @@ describe('job summary', () => {
   it('has a requirement table with base, head, delta \u00b1 error and status', () => {
     const md = renderSummary(sampleReport());
     expect(md).toContain('| requirement | base | head | \u0394 \u00b1 error | status |');
-    expect(md).toMatch(/\| 0\.742 \| 0\.680 \| \u22120\.062 \u00b1 0\.004 \| \u274C regressed \|/);
-    expect(md).toContain('within noise');
+    expect(md).toMatch(/\| 0\.742 \| 0\.680 \| \u22120\.062 \u00b1 0\.004 \| \u274C weakened \|/);
+    expect(md).toContain('inside the error');
     expect(md).toContain('never a failure');
   });
 

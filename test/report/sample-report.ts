@@ -70,7 +70,7 @@ function evaluation(median: number[], bridges: { id: string; line: number }[], w
 }
 
 function req(partial: Partial<RequirementResult> & Pick<RequirementResult, 'id' | 'description'>): RequirementResult {
-  return { severity: 'fail', base: null, head: null, delta: null, se: 0, threshold: null, status: 'met', ...partial };
+  return { severity: 'fail', base: null, head: null, delta: null, se: 0, threshold: null, status: 'holds', ...partial };
 }
 
 export function sampleReport(): Report {
@@ -109,11 +109,11 @@ export function sampleReport(): Report {
   ];
   const core: FileReport = {
     path: 'backbone/core.net.yaml',
-    status: 'regressed',
+    status: 'weakened',
     format: 'native-yaml',
     findings: coreFindings,
     requirements: [
-      req({ id: 'no-new-spof', description: 'no new bridges or cut nodes', base: 0, head: 1, delta: 1, status: 'missed' }),
+      req({ id: 'no-new-spof', description: 'no new bridges or cut nodes', base: 0, head: 1, delta: 1, status: 'short' }),
       req({
         id: 'area:random-nodes',
         description: 'area of the random site failure envelope may drop by at most 0.020',
@@ -122,7 +122,7 @@ export function sampleReport(): Report {
         delta: -0.062,
         se: 0.004,
         threshold: 0.722,
-        status: 'regressed',
+        status: 'weakened',
       }),
       req({
         id: 'threshold:random-nodes@0.2:q0.1',
@@ -133,7 +133,7 @@ export function sampleReport(): Report {
         delta: -0.065,
         se: 0.005,
         threshold: 0.5,
-        status: 'met',
+        status: 'holds',
       }),
     ],
     base: evaluation(curve(1, 0.9, 0.4), [], ['kaskeld', 'ostmark', 'brenna']),
@@ -141,7 +141,7 @@ export function sampleReport(): Report {
   };
   const metro: FileReport = {
     path: 'metro/north.graphml',
-    status: 'below-threshold',
+    status: 'below-floor',
     format: 'graphml',
     findings: [
       {
@@ -176,7 +176,7 @@ export function sampleReport(): Report {
         delta: -0.008,
         se: 0.006,
         threshold: 0.6,
-        status: 'within-noise',
+        status: 'inside-error',
       }),
     ],
     base: evaluation(curve(1, 1.2, 0.3), [], ['hub-3', 'hub-1']),
@@ -184,11 +184,11 @@ export function sampleReport(): Report {
   };
   const fabric: FileReport = {
     path: 'dc/fabric.gml',
-    status: 'pass',
+    status: 'holds',
     format: 'gml',
     findings: [],
     requirements: [
-      req({ id: 'area:random-links', description: 'area of the random link failure envelope may drop by at most 0.020', base: 0.91, head: 0.915, delta: 0.005, se: 0.002, status: 'met' }),
+      req({ id: 'area:random-links', description: 'area of the random link failure envelope may drop by at most 0.020', base: 0.91, head: 0.915, delta: 0.005, se: 0.002, status: 'holds' }),
     ],
     base: evaluation(curve(1, 0.2, 0.1), [], ['spine-1', 'spine-2']),
     head: evaluation(curve(1, 0.19, 0.1), [], ['spine-1', 'spine-2']),
@@ -203,7 +203,7 @@ export function sampleReport(): Report {
   };
   const broken: FileReport = {
     path: 'edge/west.net.yaml',
-    status: 'error',
+    status: 'unreadable',
     format: 'native-yaml',
     findings: [
       {
@@ -227,7 +227,7 @@ export function sampleReport(): Report {
     base: 'b1e5c0ffee00000000000000000000000000abcd',
     head: 'feedface0000000000000000000000000000beef',
     seed: 7,
-    counts: { pass: 1, regressed: 1, 'below-threshold': 1, new: 0, removed: 1, renamed: 0, error: 1 },
+    counts: { holds: 1, weakened: 1, 'below-floor': 1, new: 0, removed: 1, renamed: 0, unreadable: 1 },
     files: [fabric, core, removed, metro, broken],
     caution: CAUTION,
   };
@@ -238,7 +238,7 @@ export function emptyReport(): Report {
   const r = sampleReport();
   r.verdict = 'pass';
   r.files = [];
-  r.counts = { pass: 0, regressed: 0, 'below-threshold': 0, new: 0, removed: 0, renamed: 0, error: 0 };
+  r.counts = { holds: 0, weakened: 0, 'below-floor': 0, new: 0, removed: 0, renamed: 0, unreadable: 0 };
   return r;
 }
 
@@ -265,6 +265,6 @@ export function hugeReport(designs: number, findingsEach: number): Report {
     }
     r.files.push({ ...template, path: `region-${String(d).padStart(3, '0')}/site.net.yaml`, findings });
   }
-  r.counts = { pass: 0, regressed: designs, 'below-threshold': 0, new: 0, removed: 0, renamed: 0, error: 0 };
+  r.counts = { holds: 0, weakened: designs, 'below-floor': 0, new: 0, removed: 0, renamed: 0, unreadable: 0 };
   return r;
 }

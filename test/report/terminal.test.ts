@@ -10,23 +10,23 @@ const plain = (width = 100) => renderTerminal(demoReport(), { color: false, widt
 describe('renderTerminal', () => {
   it('gives a verdict per design and overall', () => {
     const text = plain();
-    expect(text).toMatch(/\u2717 designs\/lunmere-backbone\.net\.yaml \u2014 FAIL \u00b7 regressed/);
+    expect(text).toMatch(/\u2717 designs\/lunmere-backbone\.net\.yaml \u2014 FAIL \u00b7 weakened/);
     expect(text).toMatch(/\u2713 designs\/metro\/<west> & "ring"\.net\.yaml \u2014 PASS \u00b7 new design/);
     expect(text).toMatch(/\u2717 designs\/lab\.graphml \u2014 FAIL \u00b7 could not be read/);
     expect(text).toContain('designs/lab.graphml:41:5: link e7 refers to node n99');
-    expect(text).toMatch(/Verdict: FAIL \u2014 3 designs \(1 regressed, 1 new design, 1 could not be read\), 2 failing/);
+    expect(text).toMatch(/Verdict: FAIL \u2014 3 designs \(1 weakened, 1 new design, 1 could not be read\), 2 failing/);
   });
 
   it('shows each requirement as base \u2192 head with the delta and its error', () => {
     const text = plain(140);
     const row = text.split('\n').find((l) => l.includes('10 % quantile of R at 20 % sites removed \u2265 0.45') && l.includes('\u2192'))!;
-    expect(row).toMatch(/0\.498 \u2192\s+0\.421\s+\u22120\.077 \u00b1 0\.006\s+\u2717 missed/);
+    expect(row).toMatch(/0\.498 \u2192\s+0\.421\s+\u22120\.077 \u00b1 0\.006\s+\u2717 short of its floor/);
     // deterministic values carry no error term; counts are whole numbers
     const n1 = text.split('\n').find((l) => l.includes('no single site loss'))!;
-    expect(n1).toMatch(/0\.702 \u2192\s+0\.655\s+\u22120\.047\s+\u2713 met/);
+    expect(n1).toMatch(/0\.702 \u2192\s+0\.655\s+\u22120\.047\s+\u2713 holds/);
     const spof = text.split('\n').find((l) => l.includes('no new bridges or cut nodes'))!;
-    expect(spof).toMatch(/\s1 \u2192\s+3\s+\+2\s+\u2717 missed/);
-    expect(text).toContain('within noise: the value dropped by less than its Monte Carlo error');
+    expect(spof).toMatch(/\s1 \u2192\s+3\s+\+2\s+\u2717 short of its floor/);
+    expect(text).toContain('inside the error: the value dropped by less than its Monte Carlo error');
   });
 
   it('names the weakest sequences by element and line, and the new bridges with their lines', () => {
@@ -93,7 +93,7 @@ describe('renderTerminal', () => {
     r.policy = { source: 'builtin' };
     r.files = [];
     r.verdict = 'pass';
-    r.counts = { pass: 0, regressed: 0, 'below-threshold': 0, new: 0, removed: 0, renamed: 0, error: 0 };
+    r.counts = { holds: 0, weakened: 0, 'below-floor': 0, new: 0, removed: 0, renamed: 0, unreadable: 0 };
     const text = renderTerminal(r, { color: false, width: 100 });
     expect(text).toContain('the built-in defaults for communication backbones were applied');
     expect(text).toContain('No design files changed: nothing to judge.');

@@ -73,7 +73,7 @@ describe('netbrace check in a git repository', () => {
     expect([report.base, report.head, report.verdict]).toEqual([base, head, 'fail']);
     expect(report.policy).toMatchObject({ source: 'file', path: '.netbrace.yaml', revision: base });
     const f = report.files[0];
-    expect([f.path, f.status]).toEqual([DESIGN, 'regressed']);
+    expect([f.path, f.status]).toEqual([DESIGN, 'weakened']);
     expect(f.findings.filter((x) => x.rule === 'new-bridge').map((x) => x.line)).toEqual([12, 13, 14, 15, 16]);
   });
 
@@ -85,7 +85,7 @@ describe('netbrace check in a git repository', () => {
     const report = JSON.parse(r.out) as Report;
     expect(report.head).toBe('worktree');
     expect(report.policy.source).toBe('builtin');
-    expect(report.files.map((f) => [f.path, f.status])).toEqual([[DESIGN, 'pass']]);
+    expect(report.files.map((f) => [f.path, f.status])).toEqual([[DESIGN, 'holds']]);
     expect(report.files[0].requirements.find((x) => x.id === 'area-floor:node-failures')!.delta).toBeGreaterThan(0);
   });
 
@@ -190,7 +190,7 @@ describe('netbrace check in a git repository', () => {
     writeFileSync(path.join(dir, 'chain.net.yaml'), gateFixture('ring-to-chain/head.net.yaml'));
     const r = await check(dir, 'check', 'chain.net.yaml', '--format', 'json');
     const report = JSON.parse(r.out) as Report;
-    expect([r.code, report.base, report.files[0].status]).toEqual([0, undefined, 'pass']);
+    expect([r.code, report.base, report.files[0].status]).toEqual([0, undefined, 'holds']);
     expect((await check(dir, 'check')).code).toBe(2);
   });
 });

@@ -20,7 +20,7 @@ const HELP = `Usage: netbrace mend FILE [--base REF] [--json] [--apply N --out F
 
 What would mend a design: the smallest, cheapest sets of added links (and, as the
 alternative, elements to harden) that remove its new single points of failure and lift
-its missed floors and regressions back within the policy. Each suggestion says what it
+the floors it falls short of and its weakenings back within the policy. Each suggestion says what it
 fixes, its length or cost, and R\u0304 (the mean area of the policy's envelopes) before and
 after, and is judged again by the same engine, policy and seed as "check" (common random
 numbers with the base), so "holds" means check passes once it is applied.
