@@ -19056,7 +19056,7 @@ removed-designs: notice
 
 # Work each evaluation of a design may take (head and base each). Beyond it the engine runs
 # fewer realizations or N-1 cases and the report marks the result as reduced; what the reduced
-# work cannot settle is "uncertain", never a pass. Seconds are converted to work at a fixed
+# work cannot settle is "unsettled", never a pass. Seconds are converted to work at a fixed
 # rate (5e7 element visits per second), so a report never depends on the machine's speed.
 budget:
   seconds: 60              # about a minute for a 1,000-node design under this policy
@@ -24004,7 +24004,7 @@ function judgeSpof(r, description, head, base, matching) {
     delta: before ? sizeOf(now, part.kind) - sizeOf(before, part.kind) : null,
     se: before ? 0 : null,
     threshold: null,
-    status: "met"
+    status: "holds"
   }));
   const findings = [];
   if (!base || !before || !matching) return { rows, findings };
@@ -24090,8 +24090,8 @@ function judgeSpof(r, description, head, base, matching) {
   parts.forEach((part, i) => {
     const mine = findings.filter((x) => x.rule !== "degraded" && partOf(x) === part.kind);
     const weakHere = mine.some((x) => x.rule !== "hardened-weak-point");
-    if (weakHere || mine.length > 0 && r.hardenedWeakPoints === "fail") rows[i].status = "regressed";
-    else if (mine.length > 0) rows[i].status = "uncertain";
+    if (weakHere || mine.length > 0 && r.hardenedWeakPoints === "fail") rows[i].status = "weakened";
+    else if (mine.length > 0) rows[i].status = "unsettled";
   });
   for (const x of findings) {
     const i = parts.findIndex((p) => p.kind === partOf(x));
@@ -24277,7 +24277,7 @@ var GRAVITY = { fail: 0, warn: 1, notice: 2 };
 function milder(a, b) {
   return GRAVITY[a] >= GRAVITY[b] ? a : b;
 }
-function uncertainSeverity(severity) {
+function unsettledSeverity(severity) {
   return severity === "notice" ? "notice" : "warn";
 }
 var THRESHOLD_RULE = {
@@ -24313,13 +24313,13 @@ function notFinite(m) {
 }
 function classifyDrop(drop, allowance, noise2, reduced) {
   if (reduced) {
-    if (drop > allowance + noise2) return "regressed";
+    if (drop > allowance + noise2) return "weakened";
     if (drop <= allowance - noise2) return "within-allowance";
-    return "uncertain";
+    return "unsettled";
   }
-  if (drop < noise2) return "within-noise";
+  if (drop < noise2) return "inside-error";
   if (drop <= allowance) return "within-allowance";
-  return "regressed";
+  return "weakened";
 }
 function judge(r, input, description) {
   const head = input.head;
@@ -24335,7 +24335,7 @@ function judge(r, input, description) {
     delta: m.delta,
     se: m.se,
     threshold,
-    status: "met"
+    status: "holds"
   };
   const findings = [];
   const elements = elementsOf(m.elements, head, input.base);
@@ -24345,24 +24345,24 @@ function judge(r, input, description) {
   if (m.missing !== void 0 || m.head === null) {
     const why = m.missing ?? "no value";
     if (m.base !== null) {
-      row.status = "missed";
+      row.status = "short";
       findings.push(
         finding2(rule, r.severity, `${description}: the head can no longer be judged, though the base could (${formatR(m.base)}): ${why}`, [], {
           ...extra,
-          status: "missed"
+          status: "short"
         })
       );
     } else if (m.notApplicable && threshold === null) {
       row.status = "not-applicable";
     } else {
-      row.status = "uncertain";
-      findings.push(finding2(rule, uncertainSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: "uncertain" }));
+      row.status = "unsettled";
+      findings.push(finding2(rule, unsettledSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: "unsettled" }));
     }
     return result();
   }
   const broken = notFinite(m);
   if (broken !== void 0) {
-    row.status = "uncertain";
+    row.status = "unsettled";
     findings.push(
       finding2("not-computable", "fail", `${description}: ${broken}; a value that cannot be computed is never a pass`, elements, {
         ...extra,
@@ -24376,56 +24376,56 @@ function judge(r, input, description) {
   const limitWord = m.higherIsBetter ? "floor" : "ceiling";
   const against = (v, limit) => formatR(v, decidingDecimals(v, limit));
   if (threshold !== null && !meets(headValue, threshold)) {
-    row.status = "missed";
+    row.status = "short";
     const relation = m.higherIsBetter ? "is below" : "is above";
-    findings.push(finding2(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: "missed" }));
+    findings.push(finding2(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: "short" }));
   } else if (threshold !== null && m.incomplete !== void 0) {
-    row.status = "uncertain";
+    row.status = "unsettled";
     findings.push(
-      finding2(rule, uncertainSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
+      finding2(rule, unsettledSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
         ...extra,
-        status: "uncertain"
+        status: "unsettled"
       })
     );
   } else if (threshold !== null && m.lo !== void 0 && m.hi !== void 0 && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
-    row.status = "uncertain";
+    row.status = "unsettled";
     const edge = m.higherIsBetter ? m.lo : m.hi;
     const cut = m.reduced !== void 0 ? `; ${m.reduced}` : "";
     const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
     findings.push(
       finding2(
         rule,
-        m.reduced !== void 0 ? uncertainSeverity(r.severity) : "notice",
+        m.reduced !== void 0 ? unsettledSeverity(r.severity) : "notice",
         `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
         elements,
-        { ...extra, status: "uncertain" }
+        { ...extra, status: "unsettled" }
       )
     );
   } else if (threshold !== null && m.headSe !== void 0 && r.kind === "r-threshold" && r.statistic.kind === "min") {
-    row.status = "uncertain";
+    row.status = "unsettled";
     findings.push(
       finding2(
         rule,
-        uncertainSeverity(r.severity),
+        unsettledSeverity(r.severity),
         `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
         elements,
-        { ...extra, status: "uncertain" }
+        { ...extra, status: "unsettled" }
       )
     );
   } else if (threshold !== null && m.headSe !== void 0) {
     const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
     const needed = REDUCED_MARGIN_SE * m.headSe;
     if (!(margin > needed)) {
-      row.status = "uncertain";
+      row.status = "unsettled";
       const d = decidingDecimals(margin, needed);
       const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : "unknown";
       findings.push(
         finding2(
           rule,
-          uncertainSeverity(r.severity),
+          unsettledSeverity(r.severity),
           `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} × ${se})`,
           elements,
-          { ...extra, status: "uncertain" }
+          { ...extra, status: "unsettled" }
         )
       );
     }
@@ -24433,14 +24433,14 @@ function judge(r, input, description) {
   const policyRule = input.policy.weakening;
   const regressionSeverity = milder(policyRule.severity, r.severity);
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== void 0) {
-    if (row.status === "met") row.status = "uncertain";
+    if (row.status === "holds") row.status = "unsettled";
     findings.push(
       finding2(
         "regression",
-        uncertainSeverity(regressionSeverity),
+        unsettledSeverity(regressionSeverity),
         `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
-        { ...extra, status: "uncertain" }
+        { ...extra, status: "unsettled" }
       )
     );
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
@@ -24452,31 +24452,31 @@ function judge(r, input, description) {
       const reduced = m.reduced !== void 0;
       const outcome = classifyDrop(drop, allowance, noise2, reduced);
       const digits = (limit) => changeDecimals(base, headValue, m.higherIsBetter, limit);
-      const d = outcome === "within-noise" ? digits(noise2) : reduced ? Math.max(digits(allowance), digits(outcome === "regressed" ? allowance + noise2 : allowance - noise2)) : digits(allowance);
+      const d = outcome === "inside-error" ? digits(noise2) : reduced ? Math.max(digits(allowance), digits(outcome === "weakened" ? allowance + noise2 : allowance - noise2)) : digits(allowance);
       const verb = m.higherIsBetter ? "dropped" : "rose";
       const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (Δ ${formatDelta(m.delta, m.se, d)})`;
       const allowed = formatR(allowance, d);
       const k = policyRule.errorMultiple;
       const data = { ...extra, allowance, status: outcome };
-      if (outcome === "regressed") {
-        if (row.status !== "missed") row.status = "regressed";
+      if (outcome === "weakened") {
+        if (row.status !== "short") row.status = "weakened";
         const beyond = reduced ? ` by more than ${k} × its error; ${m.reduced}` : "";
         findings.push(finding2("regression", regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
-      } else if (outcome === "uncertain") {
-        if (row.status === "met") row.status = "uncertain";
+      } else if (outcome === "unsettled") {
+        if (row.status === "holds") row.status = "unsettled";
         findings.push(
           finding2(
             "regression",
-            uncertainSeverity(regressionSeverity),
+            unsettledSeverity(regressionSeverity),
             `${description}: ${change}, within ${k} × its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
             data
           )
         );
-      } else if (outcome === "within-noise") {
-        if (row.status === "met") row.status = "within-noise";
+      } else if (outcome === "inside-error") {
+        if (row.status === "holds") row.status = "inside-error";
         findings.push(
-          finding2("regression", "notice", `${description}: ${change}, less than ${k} × its Monte Carlo error (${formatR(noise2, d)}): within noise, not a failure`, elements, data)
+          finding2("regression", "notice", `${description}: ${change}, less than ${k} × its Monte Carlo error (${formatR(noise2, d)}): inside the error, not a failure`, elements, data)
         );
       } else {
         const margin = reduced ? ` by more than ${k} × its error; ${m.reduced}` : "";
@@ -24495,16 +24495,16 @@ function elementChanges2(base, head, matching = matchDesigns(base.graph, head.gr
 }
 function fileStatus(change, findings) {
   const failing = findings.filter((f) => f.severity === "fail");
-  if (failing.some((f) => f.rule === "parse-error" || f.rule === "not-computable")) return "error";
+  if (failing.some((f) => f.rule === "parse-error" || f.rule === "not-computable")) return "unreadable";
   const thresholdRules = new Set(Object.values(THRESHOLD_RULE));
-  if (failing.some((f) => thresholdRules.has(f.rule))) return "below-threshold";
-  if (failing.some((f) => f.rule === "regression" || SPOF_RULES.has(f.rule))) return "regressed";
+  if (failing.some((f) => thresholdRules.has(f.rule))) return "below-floor";
+  if (failing.some((f) => f.rule === "regression" || SPOF_RULES.has(f.rule))) return "weakened";
   if (change === "added") return "new";
   if (change === "renamed") return "renamed";
-  return "pass";
+  return "holds";
 }
 function compareDesign(input) {
-  const report = { path: input.path, status: "pass", findings: [], requirements: [] };
+  const report = { path: input.path, status: "holds", findings: [], requirements: [] };
   if (input.previousPath !== void 0) report.previousPath = input.previousPath;
   if (input.format !== void 0) report.format = input.format;
   if (input.change === "deleted") {
@@ -24517,7 +24517,7 @@ function compareDesign(input) {
   }
   if (input.headError || input.headUnsupported || !input.head) {
     const e = input.headError ?? input.headUnsupported ?? { message: "the design could not be read", line: 0, column: 0 };
-    report.status = "error";
+    report.status = "unreadable";
     report.error = { message: e.message, line: e.line, column: e.column };
     const rule = input.headUnsupported && !input.headError ? "not-computable" : "parse-error";
     report.findings.push(finding2(rule, "fail", e.message, [], { line: e.line, column: e.column, ...rule === "not-computable" ? { status: "not-computable" } : {} }));
@@ -24560,14 +24560,14 @@ function compareDesign(input) {
 }
 
 // src/gate/verdict.ts
-var FILE_STATUSES = ["pass", "regressed", "below-threshold", "new", "removed", "renamed", "error"];
+var FILE_STATUSES = ["holds", "weakened", "below-floor", "new", "removed", "renamed", "unreadable"];
 function countStatuses(files) {
   const counts = Object.fromEntries(FILE_STATUSES.map((s) => [s, 0]));
   for (const f of files) counts[f.status]++;
   return counts;
 }
 function verdictOf(files) {
-  const failed = files.some((f) => f.status === "error" || f.findings.some((x) => x.severity === "fail"));
+  const failed = files.some((f) => f.status === "unreadable" || f.findings.some((x) => x.severity === "fail"));
   return failed ? "fail" : "pass";
 }
 function exitCodeOf(report) {
@@ -25621,7 +25621,7 @@ var policy_schema_default = {
       }
     },
     budget: {
-      description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is uncertain, never met. Default: seconds 60. An inheriting policy or a scope may raise it, never lower it.",
+      description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is unsettled, never holds. Default: seconds 60. An inheriting policy or a scope may raise it, never lower it.",
       type: "object",
       additionalProperties: false,
       minProperties: 1,
@@ -26486,7 +26486,7 @@ function mergeBudget(prev, next, what) {
   throw new PolicyError(
     `${what} lowers the budget to ${visits(after)} element visits (${describeBudget(merged)}) where ${visits(before)} (${describeBudget(prev.value)}) is in force`,
     at && merged.fieldWhere[at] || next.value.where,
-    "an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements uncertain",
+    "an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements unsettled",
     [related(prevAt && prev.value.fieldWhere[prevAt] || prev.value.where, "the budget in force")]
   );
 }
@@ -27614,7 +27614,7 @@ function mendTargets(report) {
     if (f.severity === "notice" || !FIXABLE.has(f.rule)) continue;
     if (f.rule !== "new-bridge" && f.rule !== "new-cut-node") {
       const row = f.requirement ? rows.get(f.requirement) : void 0;
-      if (!row || row.status !== "missed" && row.status !== "regressed") continue;
+      if (!row || row.status !== "short" && row.status !== "weakened") continue;
     }
     const key = targetKey(f);
     if (seen.has(key)) continue;
@@ -27837,7 +27837,7 @@ function hardenSet(targets) {
   return out;
 }
 function fails(r) {
-  return r.status === "error" || r.findings.some((f) => f.severity === "fail");
+  return r.status === "unreadable" || r.findings.some((f) => f.severity === "fail");
 }
 function remaining(r, targets) {
   const present = new Set(r.findings.filter((f) => f.severity !== "notice").map(targetKey));
@@ -27887,7 +27887,7 @@ function suggestion2(j, kind, method, targets, before, rBefore, prices, unit) {
   const afterRows = new Map(j.report.requirements.map((r) => [r.id, r]));
   const requirements = before.requirements.filter((r) => wanted.has(r.id)).map((r) => {
     const a = afterRows.get(r.id);
-    return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? "uncertain" };
+    return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? "unsettled" };
   });
   return {
     kind,
@@ -29227,7 +29227,7 @@ async function addMapAndMend(report, input, ctx) {
     );
   }
   const when = ctx.request.mend ?? "failing";
-  const failing = report.status === "error" || report.findings.some((f) => f.severity === "fail");
+  const failing = report.status === "unreadable" || report.findings.some((f) => f.severity === "fail");
   if (when === "never" || when === "failing" && !failing) return;
   const settings = input.policy.mend ?? {};
   if (settings.evaluations === 0) return;

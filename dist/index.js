@@ -45183,36 +45183,36 @@ function minus(text2) {
   return text2.startsWith("-") ? `−${text2.slice(1)}` : text2;
 }
 var STATUS_WORD = {
-  pass: "pass",
-  regressed: "regressed",
-  "below-threshold": "below threshold",
+  holds: "holds",
+  weakened: "weakened",
+  "below-floor": "below its floor",
   new: "new design",
   removed: "removed",
   renamed: "renamed",
-  error: "could not be read"
+  unreadable: "could not be read"
 };
 var REQUIREMENT_STATUS_WORD = {
-  met: "met",
-  missed: "missed",
-  regressed: "regressed",
-  "within-noise": "within noise",
-  uncertain: "uncertain",
+  holds: "holds",
+  short: "short of its floor",
+  weakened: "weakened",
+  "inside-error": "inside the error",
+  unsettled: "unsettled",
   "not-applicable": "not applicable"
 };
 function fileStatusWord(f) {
-  if (f.status === "error" && !f.findings.some((x) => x.rule === "parse-error") && f.findings.some((x) => x.rule === "not-computable")) return "could not be evaluated";
+  if (f.status === "unreadable" && !f.findings.some((x) => x.rule === "parse-error") && f.findings.some((x) => x.rule === "not-computable")) return "could not be evaluated";
   return STATUS_WORD[f.status];
 }
 function statusCounts(r) {
   const out = [];
   for (const [k, n] of Object.entries(r.counts)) {
     if (n <= 0) continue;
-    if (k !== "error") {
+    if (k !== "unreadable") {
       out.push(`${n} ${STATUS_WORD[k]}`);
       continue;
     }
-    const evaluated = r.files.filter((f) => f.status === "error" && fileStatusWord(f) !== STATUS_WORD.error).length;
-    if (n - evaluated > 0) out.push(`${n - evaluated} ${STATUS_WORD.error}`);
+    const evaluated = r.files.filter((f) => f.status === "unreadable" && fileStatusWord(f) !== STATUS_WORD.unreadable).length;
+    if (n - evaluated > 0) out.push(`${n - evaluated} ${STATUS_WORD.unreadable}`);
     if (evaluated > 0) out.push(`${evaluated} could not be evaluated`);
   }
   return out;
@@ -45223,7 +45223,7 @@ function describeNotApplicable(ev) {
   return list.map((x) => `${challengeLabel(x.challenge)} (${x.reason})`).join("; ");
 }
 function fileFails(f) {
-  return f.status === "error" || f.findings.some((x) => x.severity === "fail");
+  return f.status === "unreadable" || f.findings.some((x) => x.severity === "fail");
 }
 function fileWarns(f) {
   return !fileFails(f) && f.findings.some((x) => x.severity === "warn");
@@ -45321,9 +45321,9 @@ function findingTitle(x, names) {
   switch (x.status) {
     case "within-allowance":
       return "robustness dropped within the allowance";
-    case "within-noise":
+    case "inside-error":
       return "change within Monte Carlo noise";
-    case "uncertain":
+    case "unsettled":
       return x.rule === "regression" ? "change could not be judged" : `${subject ?? x.rule}${kind ?? ""} not settled`;
     case "reduced-work":
       return `${subject ?? x.rule}${kind ?? ""} judged on reduced work`;
@@ -46075,7 +46075,7 @@ function mendHtml(f, id) {
     const rows = m.suggestions.map((s, i) => {
       const change = s.kind === "links" ? s.links.map((l) => `<span class="el">+ ${esc4(l.id)}</span> <span class="line">${esc4(linkWords(l))}</span>`).join("<br>") : s.harden.map((e) => `<span class="el">harden ${esc4(e.id)}</span> <span class="line">(${esc4(e.kind)}, line ${e.line})</span>`).join("<br>");
       const req = s.requirements.map((r) => `${esc4(r.description)}: ${esc4(value(r.id, r.before))} → ${esc4(value(r.id, r.after))} (${esc4(r.status)})`).join("<br>");
-      return `<tr data-suggestion="${i + 1}" data-kind="${s.kind}" data-holds="${s.holds}"><th scope="row">${i + 1}</th><td>${change}</td><td class="num">${esc4(unitWord(s) || "–")}</td><td class="num">${esc4(formatValue(s.rBefore))} → ${esc4(formatValue(s.rAfter))}${perUnit(s) ? `<div class="line">${esc4(perUnit(s))}</div>` : ""}</td><td>${s.fixes.length} of ${m.targets.length}${s.leaves.length ? `<div class="line">still: ${esc4(s.leaves.join("; ").replace(/\|/g, " "))}</div>` : ""}<div class="line">${req}</div></td><td class="${s.holds ? "st-met" : "sev-fail"}">${s.holds ? "holds" : esc4(`does not hold (${s.status})`)}</td></tr>`;
+      return `<tr data-suggestion="${i + 1}" data-kind="${s.kind}" data-holds="${s.holds}"><th scope="row">${i + 1}</th><td>${change}</td><td class="num">${esc4(unitWord(s) || "–")}</td><td class="num">${esc4(formatValue(s.rBefore))} → ${esc4(formatValue(s.rAfter))}${perUnit(s) ? `<div class="line">${esc4(perUnit(s))}</div>` : ""}</td><td>${s.fixes.length} of ${m.targets.length}${s.leaves.length ? `<div class="line">still: ${esc4(s.leaves.join("; ").replace(/\|/g, " "))}</div>` : ""}<div class="line">${req}</div></td><td class="${s.holds ? "st-holds" : "sev-fail"}">${s.holds ? "holds" : esc4(`does not hold (${s.status})`)}</td></tr>`;
     });
     parts.push(
       `<table class="mend" id="${id}-mend-table"><caption>Each suggestion applied to the head design and judged again by the same engine, policy and seed (common random numbers with the base). Best first.</caption><thead><tr><th scope="col">#</th><th scope="col">Change</th><th scope="col" class="num">Length or cost</th><th scope="col" class="num">R̄ before → after</th><th scope="col">Fixes</th><th scope="col">Check</th></tr></thead><tbody>${rows.join("")}</tbody></table>`
@@ -46095,7 +46095,7 @@ function mendHtml(f, id) {
 // src/report/html.ts
 var esc5 = (s) => escapeHtml(String(s));
 var RULE_TITLE = {
-  "r-threshold": "r-threshold missed",
+  "r-threshold": "r-threshold not held",
   "area-floor": "area below its floor",
   "spread-ceiling": "spread above its ceiling",
   "n-1": "N−1 rule broken",
@@ -46148,9 +46148,9 @@ caption{text-align:left;font-size:.85rem;color:var(--muted);padding-bottom:4px}
 th,td{padding:5px 8px;border-bottom:1px solid var(--rule);text-align:left;vertical-align:top}
 th{font-weight:600;background:#efeadf}
 td.num,th.num{text-align:right;white-space:nowrap}
-.st-missed,.st-regressed{font-weight:700}
+.st-short,.st-weakened{font-weight:700}
 .sev-fail{color:var(--fail)}.sev-warn{color:var(--warn)}.sev-notice{color:var(--notice)}
-.st-met{color:var(--pass)}.st-within-noise,.st-uncertain{color:var(--muted)}
+.st-holds{color:var(--pass)}.st-inside-error,.st-unsettled{color:var(--muted)}
 ul.findings{list-style:none;padding:0;margin:0}
 ul.findings li{padding:6px 0 6px 12px;border-left:3px solid var(--rule);margin:6px 0}
 ul.findings li.fail{border-left-color:var(--fail)}ul.findings li.warn{border-left-color:var(--warn)}
@@ -46257,7 +46257,7 @@ function designSection(f, index) {
   if (f.previousPath) out.push(`<p class="facts">Renamed from <code>${esc5(f.previousPath)}</code>; compared with its old self.</p>`);
   if (f.error) {
     out.push(
-      `<p class="error">${fileStatusWord(f) === STATUS_WORD.error ? "Could not be read" : "Could not be evaluated"}: <code>${esc5(f.path)}:${f.error.line || 1}:${f.error.column || 1}</code> ${esc5(f.error.message)}</p>`
+      `<p class="error">${fileStatusWord(f) === STATUS_WORD.unreadable ? "Could not be read" : "Could not be evaluated"}: <code>${esc5(f.path)}:${f.error.line || 1}:${f.error.column || 1}</code> ${esc5(f.error.message)}</p>`
     );
   }
   if (f.head) out.push(`<p class="facts">${esc5(facts(f.head))}</p>`);
@@ -46330,11 +46330,11 @@ function chartData(chart, id) {
 }
 function requirementTable(rows, id) {
   const body = rows.map((r) => {
-    const bad = r.status === "missed" || r.status === "regressed";
+    const bad = r.status === "short" || r.status === "weakened";
     const cls = `st-${r.status}${bad ? ` sev-${r.severity}` : ""}`;
     return `<tr data-requirement="${esc5(r.id)}"><th scope="row">${esc5(r.description)}<div class="rule">${esc5(r.id)}</div></th><td>${esc5(r.severity)}</td><td class="num" data-field="base" data-value="${dataValue(r.base)}">${esc5(formatRequirementValue(r, r.base))}</td><td class="num" data-field="head" data-value="${dataValue(r.head)}">${esc5(formatRequirementValue(r, r.head))}</td><td class="num" data-field="delta" data-value="${dataValue(r.delta)}">${esc5(formatRequirementDelta(r))}${formatError(r.se) ? ` <span class="line" data-field="se" data-value="${dataValue(r.se)}">${esc5(formatError(r.se))}</span>` : ""}</td><td class="num" data-field="threshold" data-value="${dataValue(r.threshold)}">${esc5(formatRequirementValue(r, r.threshold))}</td><td class="${cls}" data-field="status">${esc5(REQUIREMENT_STATUS_WORD[r.status])}</td></tr>`;
   });
-  const noise2 = rows.some((r) => r.status === "within-noise") ? '<p class="facts">Within noise: the value dropped by less than its Monte Carlo error, which is never a failure.</p>' : "";
+  const noise2 = rows.some((r) => r.status === "inside-error") ? '<p class="facts">Inside the error: the value dropped by less than its Monte Carlo error, which is never a failure.</p>' : "";
   return [
     "<h3>Requirements</h3>",
     `<table class="requirements" id="${id}-requirements">`,
@@ -47145,7 +47145,7 @@ function judgeSpof(r, description, head, base, matching) {
     delta: before ? sizeOf(now, part.kind) - sizeOf(before, part.kind) : null,
     se: before ? 0 : null,
     threshold: null,
-    status: "met"
+    status: "holds"
   }));
   const findings = [];
   if (!base || !before || !matching) return { rows, findings };
@@ -47231,8 +47231,8 @@ function judgeSpof(r, description, head, base, matching) {
   parts.forEach((part, i) => {
     const mine = findings.filter((x) => x.rule !== "degraded" && partOf(x) === part.kind);
     const weakHere = mine.some((x) => x.rule !== "hardened-weak-point");
-    if (weakHere || mine.length > 0 && r.hardenedWeakPoints === "fail") rows[i].status = "regressed";
-    else if (mine.length > 0) rows[i].status = "uncertain";
+    if (weakHere || mine.length > 0 && r.hardenedWeakPoints === "fail") rows[i].status = "weakened";
+    else if (mine.length > 0) rows[i].status = "unsettled";
   });
   for (const x of findings) {
     const i = parts.findIndex((p) => p.kind === partOf(x));
@@ -47418,7 +47418,7 @@ var GRAVITY = { fail: 0, warn: 1, notice: 2 };
 function milder(a, b) {
   return GRAVITY[a] >= GRAVITY[b] ? a : b;
 }
-function uncertainSeverity(severity) {
+function unsettledSeverity(severity) {
   return severity === "notice" ? "notice" : "warn";
 }
 var THRESHOLD_RULE = {
@@ -47454,13 +47454,13 @@ function notFinite(m) {
 }
 function classifyDrop(drop, allowance, noise2, reduced) {
   if (reduced) {
-    if (drop > allowance + noise2) return "regressed";
+    if (drop > allowance + noise2) return "weakened";
     if (drop <= allowance - noise2) return "within-allowance";
-    return "uncertain";
+    return "unsettled";
   }
-  if (drop < noise2) return "within-noise";
+  if (drop < noise2) return "inside-error";
   if (drop <= allowance) return "within-allowance";
-  return "regressed";
+  return "weakened";
 }
 function judge(r, input, description) {
   const head = input.head;
@@ -47476,7 +47476,7 @@ function judge(r, input, description) {
     delta: m.delta,
     se: m.se,
     threshold,
-    status: "met"
+    status: "holds"
   };
   const findings = [];
   const elements = elementsOf(m.elements, head, input.base);
@@ -47486,24 +47486,24 @@ function judge(r, input, description) {
   if (m.missing !== void 0 || m.head === null) {
     const why = m.missing ?? "no value";
     if (m.base !== null) {
-      row.status = "missed";
+      row.status = "short";
       findings.push(
         finding2(rule, r.severity, `${description}: the head can no longer be judged, though the base could (${formatR(m.base)}): ${why}`, [], {
           ...extra,
-          status: "missed"
+          status: "short"
         })
       );
     } else if (m.notApplicable && threshold === null) {
       row.status = "not-applicable";
     } else {
-      row.status = "uncertain";
-      findings.push(finding2(rule, uncertainSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: "uncertain" }));
+      row.status = "unsettled";
+      findings.push(finding2(rule, unsettledSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: "unsettled" }));
     }
     return result();
   }
   const broken = notFinite(m);
   if (broken !== void 0) {
-    row.status = "uncertain";
+    row.status = "unsettled";
     findings.push(
       finding2("not-computable", "fail", `${description}: ${broken}; a value that cannot be computed is never a pass`, elements, {
         ...extra,
@@ -47517,56 +47517,56 @@ function judge(r, input, description) {
   const limitWord = m.higherIsBetter ? "floor" : "ceiling";
   const against = (v, limit) => formatR(v, decidingDecimals(v, limit));
   if (threshold !== null && !meets(headValue, threshold)) {
-    row.status = "missed";
+    row.status = "short";
     const relation = m.higherIsBetter ? "is below" : "is above";
-    findings.push(finding2(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: "missed" }));
+    findings.push(finding2(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: "short" }));
   } else if (threshold !== null && m.incomplete !== void 0) {
-    row.status = "uncertain";
+    row.status = "unsettled";
     findings.push(
-      finding2(rule, uncertainSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
+      finding2(rule, unsettledSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
         ...extra,
-        status: "uncertain"
+        status: "unsettled"
       })
     );
   } else if (threshold !== null && m.lo !== void 0 && m.hi !== void 0 && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
-    row.status = "uncertain";
+    row.status = "unsettled";
     const edge = m.higherIsBetter ? m.lo : m.hi;
     const cut = m.reduced !== void 0 ? `; ${m.reduced}` : "";
     const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
     findings.push(
       finding2(
         rule,
-        m.reduced !== void 0 ? uncertainSeverity(r.severity) : "notice",
+        m.reduced !== void 0 ? unsettledSeverity(r.severity) : "notice",
         `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
         elements,
-        { ...extra, status: "uncertain" }
+        { ...extra, status: "unsettled" }
       )
     );
   } else if (threshold !== null && m.headSe !== void 0 && r.kind === "r-threshold" && r.statistic.kind === "min") {
-    row.status = "uncertain";
+    row.status = "unsettled";
     findings.push(
       finding2(
         rule,
-        uncertainSeverity(r.severity),
+        unsettledSeverity(r.severity),
         `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
         elements,
-        { ...extra, status: "uncertain" }
+        { ...extra, status: "unsettled" }
       )
     );
   } else if (threshold !== null && m.headSe !== void 0) {
     const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
     const needed = REDUCED_MARGIN_SE * m.headSe;
     if (!(margin > needed)) {
-      row.status = "uncertain";
+      row.status = "unsettled";
       const d = decidingDecimals(margin, needed);
       const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : "unknown";
       findings.push(
         finding2(
           rule,
-          uncertainSeverity(r.severity),
+          unsettledSeverity(r.severity),
           `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} × ${se})`,
           elements,
-          { ...extra, status: "uncertain" }
+          { ...extra, status: "unsettled" }
         )
       );
     }
@@ -47574,14 +47574,14 @@ function judge(r, input, description) {
   const policyRule = input.policy.weakening;
   const regressionSeverity = milder(policyRule.severity, r.severity);
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== void 0) {
-    if (row.status === "met") row.status = "uncertain";
+    if (row.status === "holds") row.status = "unsettled";
     findings.push(
       finding2(
         "regression",
-        uncertainSeverity(regressionSeverity),
+        unsettledSeverity(regressionSeverity),
         `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
         elements,
-        { ...extra, status: "uncertain" }
+        { ...extra, status: "unsettled" }
       )
     );
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
@@ -47593,31 +47593,31 @@ function judge(r, input, description) {
       const reduced = m.reduced !== void 0;
       const outcome = classifyDrop(drop, allowance, noise2, reduced);
       const digits = (limit) => changeDecimals(base, headValue, m.higherIsBetter, limit);
-      const d = outcome === "within-noise" ? digits(noise2) : reduced ? Math.max(digits(allowance), digits(outcome === "regressed" ? allowance + noise2 : allowance - noise2)) : digits(allowance);
+      const d = outcome === "inside-error" ? digits(noise2) : reduced ? Math.max(digits(allowance), digits(outcome === "weakened" ? allowance + noise2 : allowance - noise2)) : digits(allowance);
       const verb = m.higherIsBetter ? "dropped" : "rose";
       const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (Δ ${formatDelta2(m.delta, m.se, d)})`;
       const allowed = formatR(allowance, d);
       const k = policyRule.errorMultiple;
       const data = { ...extra, allowance, status: outcome };
-      if (outcome === "regressed") {
-        if (row.status !== "missed") row.status = "regressed";
+      if (outcome === "weakened") {
+        if (row.status !== "short") row.status = "weakened";
         const beyond = reduced ? ` by more than ${k} × its error; ${m.reduced}` : "";
         findings.push(finding2("regression", regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
-      } else if (outcome === "uncertain") {
-        if (row.status === "met") row.status = "uncertain";
+      } else if (outcome === "unsettled") {
+        if (row.status === "holds") row.status = "unsettled";
         findings.push(
           finding2(
             "regression",
-            uncertainSeverity(regressionSeverity),
+            unsettledSeverity(regressionSeverity),
             `${description}: ${change}, within ${k} × its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
             elements,
             data
           )
         );
-      } else if (outcome === "within-noise") {
-        if (row.status === "met") row.status = "within-noise";
+      } else if (outcome === "inside-error") {
+        if (row.status === "holds") row.status = "inside-error";
         findings.push(
-          finding2("regression", "notice", `${description}: ${change}, less than ${k} × its Monte Carlo error (${formatR(noise2, d)}): within noise, not a failure`, elements, data)
+          finding2("regression", "notice", `${description}: ${change}, less than ${k} × its Monte Carlo error (${formatR(noise2, d)}): inside the error, not a failure`, elements, data)
         );
       } else {
         const margin = reduced ? ` by more than ${k} × its error; ${m.reduced}` : "";
@@ -47636,16 +47636,16 @@ function elementChanges2(base, head, matching = matchDesigns(base.graph, head.gr
 }
 function fileStatus(change, findings) {
   const failing = findings.filter((f) => f.severity === "fail");
-  if (failing.some((f) => f.rule === "parse-error" || f.rule === "not-computable")) return "error";
+  if (failing.some((f) => f.rule === "parse-error" || f.rule === "not-computable")) return "unreadable";
   const thresholdRules = new Set(Object.values(THRESHOLD_RULE));
-  if (failing.some((f) => thresholdRules.has(f.rule))) return "below-threshold";
-  if (failing.some((f) => f.rule === "regression" || SPOF_RULES.has(f.rule))) return "regressed";
+  if (failing.some((f) => thresholdRules.has(f.rule))) return "below-floor";
+  if (failing.some((f) => f.rule === "regression" || SPOF_RULES.has(f.rule))) return "weakened";
   if (change === "added") return "new";
   if (change === "renamed") return "renamed";
-  return "pass";
+  return "holds";
 }
 function compareDesign(input) {
-  const report = { path: input.path, status: "pass", findings: [], requirements: [] };
+  const report = { path: input.path, status: "holds", findings: [], requirements: [] };
   if (input.previousPath !== void 0) report.previousPath = input.previousPath;
   if (input.format !== void 0) report.format = input.format;
   if (input.change === "deleted") {
@@ -47658,7 +47658,7 @@ function compareDesign(input) {
   }
   if (input.headError || input.headUnsupported || !input.head) {
     const e = input.headError ?? input.headUnsupported ?? { message: "the design could not be read", line: 0, column: 0 };
-    report.status = "error";
+    report.status = "unreadable";
     report.error = { message: e.message, line: e.line, column: e.column };
     const rule = input.headUnsupported && !input.headError ? "not-computable" : "parse-error";
     report.findings.push(finding2(rule, "fail", e.message, [], { line: e.line, column: e.column, ...rule === "not-computable" ? { status: "not-computable" } : {} }));
@@ -47701,14 +47701,14 @@ function compareDesign(input) {
 }
 
 // src/gate/verdict.ts
-var FILE_STATUSES = ["pass", "regressed", "below-threshold", "new", "removed", "renamed", "error"];
+var FILE_STATUSES = ["holds", "weakened", "below-floor", "new", "removed", "renamed", "unreadable"];
 function countStatuses(files) {
   const counts = Object.fromEntries(FILE_STATUSES.map((s) => [s, 0]));
   for (const f of files) counts[f.status]++;
   return counts;
 }
 function verdictOf(files) {
-  const failed = files.some((f) => f.status === "error" || f.findings.some((x) => x.severity === "fail"));
+  const failed = files.some((f) => f.status === "unreadable" || f.findings.some((x) => x.severity === "fail"));
   return failed ? "fail" : "pass";
 }
 function exitCodeOf(report) {
@@ -47858,7 +47858,7 @@ removed-designs: notice
 
 # Work each evaluation of a design may take (head and base each). Beyond it the engine runs
 # fewer realizations or N-1 cases and the report marks the result as reduced; what the reduced
-# work cannot settle is "uncertain", never a pass. Seconds are converted to work at a fixed
+# work cannot settle is "unsettled", never a pass. Seconds are converted to work at a fixed
 # rate (5e7 element visits per second), so a report never depends on the machine's speed.
 budget:
   seconds: 60              # about a minute for a 1,000-node design under this policy
@@ -48872,7 +48872,7 @@ var policy_schema_default = {
       }
     },
     budget: {
-      description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is uncertain, never met. Default: seconds 60. An inheriting policy or a scope may raise it, never lower it.",
+      description: "Work each evaluation of a design (head and base alike) may take. Beyond it the engine runs fewer realizations or N-1 cases and the report says so; what the reduced work cannot settle is unsettled, never holds. Default: seconds 60. An inheriting policy or a scope may raise it, never lower it.",
       type: "object",
       additionalProperties: false,
       minProperties: 1,
@@ -49737,7 +49737,7 @@ function mergeBudget(prev, next, what) {
   throw new PolicyError(
     `${what} lowers the budget to ${visits(after)} element visits (${describeBudget(merged)}) where ${visits(before)} (${describeBudget(prev.value)}) is in force`,
     at && merged.fieldWhere[at] || next.value.where,
-    "an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements uncertain",
+    "an inheriting policy or a scope may raise the budget, never lower it: a smaller budget leaves requirements unsettled",
     [related(prevAt && prev.value.fieldWhere[prevAt] || prev.value.where, "the budget in force")]
   );
 }
@@ -55016,7 +55016,7 @@ function mendTargets(report) {
     if (f.severity === "notice" || !FIXABLE.has(f.rule)) continue;
     if (f.rule !== "new-bridge" && f.rule !== "new-cut-node") {
       const row = f.requirement ? rows.get(f.requirement) : void 0;
-      if (!row || row.status !== "missed" && row.status !== "regressed") continue;
+      if (!row || row.status !== "short" && row.status !== "weakened") continue;
     }
     const key = targetKey(f);
     if (seen.has(key)) continue;
@@ -55239,7 +55239,7 @@ function hardenSet(targets) {
   return out;
 }
 function fails(r) {
-  return r.status === "error" || r.findings.some((f) => f.severity === "fail");
+  return r.status === "unreadable" || r.findings.some((f) => f.severity === "fail");
 }
 function remaining(r, targets) {
   const present = new Set(r.findings.filter((f) => f.severity !== "notice").map(targetKey));
@@ -55289,7 +55289,7 @@ function suggestion2(j, kind, method, targets, before, rBefore, prices, unit) {
   const afterRows = new Map(j.report.requirements.map((r) => [r.id, r]));
   const requirements = before.requirements.filter((r) => wanted.has(r.id)).map((r) => {
     const a = afterRows.get(r.id);
-    return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? "uncertain" };
+    return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? "unsettled" };
   });
   return {
     kind,
@@ -56629,7 +56629,7 @@ async function addMapAndMend(report, input, ctx) {
     );
   }
   const when = ctx.request.mend ?? "failing";
-  const failing = report.status === "error" || report.findings.some((f) => f.severity === "fail");
+  const failing = report.status === "unreadable" || report.findings.some((f) => f.severity === "fail");
   if (when === "never" || when === "failing" && !failing) return;
   const settings = input.policy.mend ?? {};
   if (settings.evaluations === 0) return;
@@ -57171,18 +57171,18 @@ function repoPath(prefix, p) {
 // src/report/rank.ts
 var SEVERITY_RANK2 = { fail: 0, warn: 1, notice: 2 };
 var STATUS_RANK = {
-  error: 0,
-  "below-threshold": 1,
-  regressed: 2,
+  unreadable: 0,
+  "below-floor": 1,
+  weakened: 2,
   removed: 3,
   new: 4,
   renamed: 5,
-  pass: 6
+  holds: 6
 };
 function worstSeverity(f) {
   let worst;
   for (const x of f.findings) if (worst === void 0 || SEVERITY_RANK2[x.severity] < SEVERITY_RANK2[worst]) worst = x.severity;
-  return f.status === "error" ? "fail" : worst;
+  return f.status === "unreadable" ? "fail" : worst;
 }
 function countOf(f, s) {
   let n = 0;
@@ -57206,7 +57206,7 @@ function rankFindings(findings) {
 var ANNOTATIONS_PER_LEVEL = 10;
 var LEVEL = { fail: "error", warn: "warning", notice: "notice" };
 var TITLE = {
-  "r-threshold": "r-threshold missed",
+  "r-threshold": "r-threshold not held",
   "area-floor": "envelope area below its floor",
   "spread-ceiling": "envelope spread above its ceiling",
   "n-1": "N−1 rule broken",
@@ -57214,7 +57214,7 @@ var TITLE = {
   "new-cut-node": "new single point of failure (cut site)",
   "new-stranding-group": "new single point of failure (shared-risk group)",
   "hardened-weak-point": "new weak point hidden by hardening",
-  regression: "robustness regressed",
+  regression: "robustness weakened",
   "weakest-sequence": "weakest removal sequence",
   "parse-error": "design could not be read",
   "removed-design": "design removed",
@@ -57228,7 +57228,7 @@ function annotationsOf(report, options = {}) {
     const file = repoPath(options.pathPrefix, f.path);
     const touched = options.changedLines?.get(file);
     const findings = [...f.findings];
-    if (f.status === "error" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
+    if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
       findings.push({ rule: "parse-error", severity: "fail", message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
     }
     for (const x of findings) {
@@ -57693,7 +57693,7 @@ function fileSection(f, detail, layout, path3, chart) {
 
 `;
   if (f.error) {
-    const what = fileStatusWord(f) === STATUS_WORD.error ? "Could not be read" : "Could not be evaluated";
+    const what = fileStatusWord(f) === STATUS_WORD.unreadable ? "Could not be read" : "Could not be evaluated";
     text2 += `${what}: line ${f.error.line}, column ${f.error.column}: ${escapeMarkdown(f.error.message, 500)}
 
 `;
@@ -57735,14 +57735,14 @@ function requirementTable2(rows) {
   let text2 = "| requirement | base | head | Δ ± error | status |\n|---|---:|---:|---:|---|\n";
   let noise2 = false;
   for (const r of rows) {
-    const icon = r.status === "met" ? ICON.ok : r.status === "within-noise" ? "〰️" : r.status === "uncertain" ? "❔" : r.status === "not-applicable" ? "➖" : ICON[r.severity];
-    if (r.status === "within-noise") noise2 = true;
+    const icon = r.status === "holds" ? ICON.ok : r.status === "inside-error" ? "〰️" : r.status === "unsettled" ? "❔" : r.status === "not-applicable" ? "➖" : ICON[r.severity];
+    if (r.status === "inside-error") noise2 = true;
     const err = formatError(r.se);
     const delta = r.delta === null ? "–" : `${formatRequirementDelta(r)}${err ? ` ${err}` : ""}`;
     text2 += `| ${escapeMarkdown(r.description, 200)} | ${formatRequirementValue(r, r.base)} | ${formatRequirementValue(r, r.head)} | ${delta} | ${icon} ${REQUIREMENT_STATUS_WORD[r.status]} |
 `;
   }
-  if (noise2) text2 += "\n〰️ *within noise*: the value dropped by less than its Monte Carlo error, which is never a failure.\n";
+  if (noise2) text2 += "\n〰️ *inside the error*: the value dropped by less than its Monte Carlo error, which is never a failure.\n";
   return `${text2}
 `;
 }
@@ -57920,7 +57920,7 @@ var SARIF_MAX_RESULTS = 25e3;
 var RULES = {
   "r-threshold": {
     name: "RThreshold",
-    short: "An r-threshold of the policy is missed",
+    short: "An r-threshold of the policy is not held",
     full: "At the stated removal fraction, the stated statistic of the robustness envelope (a quantile, the median, the minimum or the worst case) of R is below the threshold the policy requires.",
     help: "The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by scopes but never loosened below a floor it inherits."
   },
@@ -58047,7 +58047,7 @@ ${r.help}` },
   for (const f of rankFiles(report.files)) {
     const path3 = repoPath(options.pathPrefix, f.path);
     const findings = rankFindings(f.findings);
-    if (f.status === "error" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
+    if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
       findings.unshift({ rule: "parse-error", severity: "fail", message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
     }
     for (const x of findings) {
@@ -63056,14 +63056,14 @@ async function postComment(deps, env, inputs, target, report, body) {
     return "failed";
   }
 }
-var STATUSES = ["pass", "regressed", "below-threshold", "new", "removed", "renamed", "error"];
+var STATUSES = ["holds", "weakened", "below-floor", "new", "removed", "renamed", "unreadable"];
 function runUrl(env) {
   const server = env.GITHUB_SERVER_URL || "https://github.com";
   if (!env.GITHUB_REPOSITORY || !env.GITHUB_RUN_ID) return void 0;
   return `${server}/${env.GITHUB_REPOSITORY}/actions/runs/${env.GITHUB_RUN_ID}`;
 }
 function emptyCounts() {
-  return { pass: 0, regressed: 0, "below-threshold": 0, new: 0, removed: 0, renamed: 0, error: 0 };
+  return { holds: 0, weakened: 0, "below-floor": 0, new: 0, removed: 0, renamed: 0, unreadable: 0 };
 }
 async function run(env, deps) {
   let failed = false;
@@ -63220,7 +63220,7 @@ async function run(env, deps) {
       return { exitCode: 0, verdict, comment };
     }
     if (verdict === "fail" && inputs.mode === "block") {
-      const n = report.files.filter((f) => f.status === "error" || f.findings.some((x) => x.severity === "fail")).length;
+      const n = report.files.filter((f) => f.status === "unreadable" || f.findings.some((x) => x.severity === "fail")).length;
       const own = report.configuration?.changes.filter((c) => c.weakens).length ?? 0;
       const what = [
         ...n > 0 ? [`${n} design${n === 1 ? "" : "s"} with failures`] : [],

@@ -34,7 +34,7 @@ export interface MendContext {
 }
 /** A finding's stable key: spof findings by element, value findings by requirement. */
 export declare function targetKey(f: Pick<Finding, 'rule' | 'requirement' | 'elements'>): string;
-/** The findings a change to the design can fix: severity fail or warn, on a requirement that was missed or regressed. */
+/** The findings a change to the design can fix: severity fail or warn, on a requirement that fell short or weakened. */
 export declare function mendTargets(report: FileReport): MendTarget[];
 /** R̄ of a judged design (see the header); null when the policy evaluates neither envelopes nor attacks. */
 export declare function meanArea(report: FileReport): number | null;

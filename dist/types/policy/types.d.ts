@@ -112,7 +112,7 @@ export interface DesignGlob {
 /**
  * The work budget of each design evaluation (head and base alike). Not a floor of the design,
  * but the effort that judges the floors: an inheriting policy or a scope may raise it,
- * never lower it (a smaller budget turns judgements into "uncertain").
+ * never lower it (a smaller budget turns judgements into "unsettled").
  */
 export interface Budget {
     /** Element visits (the engine's unit of work). */

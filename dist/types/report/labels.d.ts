@@ -83,7 +83,7 @@ export interface NamedSequence {
 export declare function weakestSequences(f: FileReport): NamedSequence[];
 /**
  * How a finding is titled, from its rule and what the judging found: a drop within the
- * allowance is not "regressed", a floor that was not settled is not "missed". `names` gives
+ * allowance is not "weakened", a floor that was not settled is not "short". `names` gives
  * the view's word for each rule when the finding is what the rule is about.
  */
 export declare function findingTitle(x: Finding, names: Readonly<Record<Finding['rule'], string>>): string;

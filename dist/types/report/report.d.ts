@@ -2,7 +2,7 @@ import type { AttackCurve, ChallengeName, Contingency, Envelope, RValueSpec } fr
 import type { DesignMap, OmittedMap } from '../map/types.js';
 import type { MendReport } from '../mend/types.js';
 export declare const REPORT_VERSION = 1;
-export type FileStatus = 'pass' | 'regressed' | 'below-threshold' | 'new' | 'removed' | 'renamed' | 'error';
+export type FileStatus = 'holds' | 'weakened' | 'below-floor' | 'new' | 'removed' | 'renamed' | 'unreadable';
 export type Severity = 'fail' | 'warn' | 'notice';
 export interface ReportElement {
     id: string;
@@ -44,11 +44,11 @@ export interface RequirementResult {
     se: number | null;
     /** The floor (or ceiling) the head must respect, when the requirement has one. */
     threshold: number | null;
-    /** met: fine; missed: below threshold; regressed: dropped beyond tolerance;
-     *  within-noise: dropped, but by less than the Monte Carlo error; uncertain: could not be
-     *  judged with enough confidence (never reported as met); not-applicable: a tracked value
+    /** holds: fine; short: below its floor; weakened: dropped beyond tolerance;
+     *  inside-error: dropped, but by less than the Monte Carlo error; unsettled: could not be
+     *  judged with enough confidence (never reported as holds); not-applicable: a tracked value
      *  (no floor) whose challenge does not apply to the design on either side (no risk groups). */
-    status: 'met' | 'missed' | 'regressed' | 'within-noise' | 'uncertain' | 'not-applicable';
+    status: 'holds' | 'short' | 'weakened' | 'inside-error' | 'unsettled' | 'not-applicable';
 }
 export interface Finding {
     /** Finding kind; also the SARIF rule id (stable). */
@@ -59,7 +59,7 @@ export interface Finding {
     severity: Severity;
     /**
      * What the judging found, for a finding about a requirement's value: views title the
-     * finding by it (a drop within the allowance is not "regressed").
+     * finding by it (a drop within the allowance is not "weakened").
      */
     status?: FindingStatus;
     message: string;
@@ -80,12 +80,12 @@ export interface Finding {
     consequence?: Consequence;
 }
 /**
- * missed: the head misses its floor (or can no longer be judged though the base could);
- * regressed: a drop beyond the allowance; within-allowance / within-noise: a drop that is not a
- * failure; uncertain: neither proven nor refuted; reduced-work: judged on work the budget cut;
+ * short: the head falls short of its floor (or can no longer be judged though the base could);
+ * weakened: a drop beyond the allowance; within-allowance / inside-error: a drop that is not a
+ * failure; unsettled: neither proven nor refuted; reduced-work: judged on work the budget cut;
  * not-computable: a value that is not a finite number.
  */
-export type FindingStatus = 'missed' | 'regressed' | 'within-allowance' | 'within-noise' | 'uncertain' | 'reduced-work' | 'not-computable';
+export type FindingStatus = 'short' | 'weakened' | 'within-allowance' | 'inside-error' | 'unsettled' | 'reduced-work' | 'not-computable';
 /** An attribute of a node or link that the change altered (see FileReport.changes). */
 export interface AttributeChange {
     id: string;
@@ -131,7 +131,7 @@ export interface FileReport {
     requirements: RequirementResult[];
     head?: Evaluation;
     base?: Evaluation;
-    /** For status "error": what could not be read. */
+    /** For status "unreadable": what could not be read. */
     error?: {
         message: string;
         line: number;
