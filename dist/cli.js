@@ -321,6 +321,23 @@ var init_canonical = __esm({
 });
 
 // src/graph/compact.ts
+function adjacency(n, linkSource, linkTarget, degree2) {
+  const m = linkSource.length;
+  const offsets = new Int32Array(n + 1);
+  for (let v = 0; v < n; v++) offsets[v + 1] = offsets[v] + degree2[v];
+  const neighbors = new Int32Array(2 * m);
+  const linkOf = new Int32Array(2 * m);
+  const fill = offsets.slice(0, n);
+  for (let e = 0; e < m; e++) {
+    const s = linkSource[e];
+    const d = linkTarget[e];
+    neighbors[fill[s]] = d;
+    linkOf[fill[s]++] = e;
+    neighbors[fill[d]] = s;
+    linkOf[fill[d]++] = e;
+  }
+  return { offsets, neighbors, linkOf };
+}
 function compileTopology(t) {
   const order = canonicalOrder(t);
   const nodes = order.nodes.map((i) => t.nodes[i]);
@@ -357,19 +374,7 @@ function compileTopology(t) {
     hasLatency ||= link.latency !== void 0;
     hasWeight ||= link.weight !== void 0;
   }
-  const offsets = new Int32Array(n + 1);
-  for (let v = 0; v < n; v++) offsets[v + 1] = offsets[v] + degree2[v];
-  const neighbors = new Int32Array(2 * m);
-  const linkOf = new Int32Array(2 * m);
-  const fill = offsets.slice(0, n);
-  for (let e = 0; e < m; e++) {
-    const s = linkSource[e];
-    const d = linkTarget[e];
-    neighbors[fill[s]] = d;
-    linkOf[fill[s]++] = e;
-    neighbors[fill[d]] = s;
-    linkOf[fill[d]++] = e;
-  }
+  const { offsets, neighbors, linkOf } = adjacency(n, linkSource, linkTarget, degree2);
   const column = (pick, present, count) => {
     if (!present) return null;
     const a = new Float64Array(count);
@@ -15408,6 +15413,23 @@ function nonNormal(n) {
   if (n !== 0 && Math.abs(n) < MIN_NORMAL) return "is so close to 0 that it cannot be computed with (a subnormal number)";
   return void 0;
 }
+function firstNonNormal(v, path11, skip) {
+  if (typeof v === "number") {
+    const why = nonNormal(v);
+    return why ? { path: [...path11], why } : void 0;
+  }
+  if (v === null || typeof v !== "object") return void 0;
+  const entries = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
+  for (const [k, x] of entries) {
+    if (typeof x !== "number" && (x === null || typeof x !== "object")) continue;
+    if (path11.length === 0 && typeof k === "string" && skip?.has(k)) continue;
+    path11.push(k);
+    const found = firstNonNormal(x, path11);
+    path11.pop();
+    if (found) return found;
+  }
+  return void 0;
+}
 function quantityProblem(kind, value2, written) {
   const as = written !== void 0 && written.trim() !== String(value2) && written.trim() !== fmt(value2) ? ` (written ${written.trim()})` : "";
   const bad = nonNormal(value2);
@@ -15516,23 +15538,6 @@ var init_nesting = __esm({
 function validate() {
   validator ??= new Ajv({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true }).compile(design_schema_default);
   return validator;
-}
-function firstNonNormal(v, path11) {
-  if (typeof v === "number") {
-    const why = nonNormal(v);
-    return why ? { path: [...path11], why } : void 0;
-  }
-  if (v === null || typeof v !== "object") return void 0;
-  const entries = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
-  for (const [k, x] of entries) {
-    if (typeof x !== "number" && (x === null || typeof x !== "object")) continue;
-    if (path11.length === 0 && k === "metadata") continue;
-    path11.push(k);
-    const found = firstNonNormal(x, path11);
-    path11.pop();
-    if (found) return found;
-  }
-  return void 0;
 }
 function pathText(path11) {
   let s = "";
@@ -15651,7 +15656,7 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
   if (data === null || data === void 0) {
     throw new DesignError(`the ${kindWord} design is empty`, { file, line: 1, column: 1 }, "a design needs at least `nodes:`");
   }
-  const odd = firstNonNormal(data, []);
+  const odd = firstNonNormal(data, [], /* @__PURE__ */ new Set(["metadata"]));
   if (odd) {
     throw new DesignError(`${pathText(odd.path)} ${odd.why}${loc.written(odd.path, " (written ", ")")}`, { file, ...loc.pos(odd.path) }, "write a plain decimal number");
   }
@@ -18520,11 +18525,13 @@ function greatCircleKm(lat1, lon1, lat2, lon2) {
   const dLat = (lat2 - lat1) * rad;
   const dLon = (lon2 - lon1) * rad;
   const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
-  return 2 * 6371.0088 * Math.asin(Math.min(1, Math.sqrt(a)));
+  return 2 * EARTH_RADIUS_KM * Math.asin(Math.min(1, Math.sqrt(a)));
 }
+var EARTH_RADIUS_KM;
 var init_geodesy = __esm({
   "src/topology/geodesy.ts"() {
     "use strict";
+    EARTH_RADIUS_KM = 6371.0088;
   }
 });
 
@@ -18611,7 +18618,7 @@ var init_corridors = __esm({
   "src/topology/corridors.ts"() {
     "use strict";
     init_geodesy();
-    EARTH_M = 63710088e-1;
+    EARTH_M = EARTH_RADIUS_KM * 1e3;
     RAD = Math.PI / 180;
     overlaps = (a, b) => a.minX <= b.maxX && b.minX <= a.maxX && a.minY <= b.maxY && b.minY <= a.maxY;
   }
@@ -24200,13 +24207,6 @@ var init_random_links = __esm({
 });
 
 // src/challenges/regional.ts
-function haversineKm(lat1, lon1, lat2, lon2) {
-  const rad = Math.PI / 180;
-  const dLat = (lat2 - lat1) * rad;
-  const dLon = (lon2 - lon1) * rad;
-  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
-  return 2 * EARTH_RADIUS_KM * Math.asin(Math.min(1, Math.sqrt(a)));
-}
 function sitesWithCoordinates(g) {
   const sites = [];
   if (g.lat === null || g.lon === null) return sites;
@@ -24218,18 +24218,18 @@ function defaultRegionalUntil(g) {
   let max = 0;
   for (let i = 0; i < sites.length; i++) {
     for (let j = i + 1; j < sites.length; j++) {
-      const d = haversineKm(g.lat[sites[i]], g.lon[sites[i]], g.lat[sites[j]], g.lon[sites[j]]);
+      const d = greatCircleKm(g.lat[sites[i]], g.lon[sites[i]], g.lat[sites[j]], g.lon[sites[j]]);
       if (d > max) max = d;
     }
   }
   return max > 0 ? Number((max / 4).toPrecision(2)) : 0;
 }
-var EARTH_RADIUS_KM, regional;
+var regional;
 var init_regional = __esm({
   "src/challenges/regional.ts"() {
     "use strict";
     init_grid();
-    EARTH_RADIUS_KM = 6371.0088;
+    init_geodesy();
     regional = {
       name: "regional",
       type: "band",
@@ -24252,7 +24252,7 @@ var init_regional = __esm({
           realize(r, order, steps) {
             const c = sites[r];
             for (let i = 0; i < removable.length; i++) {
-              dist[i] = haversineKm(g.lat[c], g.lon[c], g.lat[removable[i]], g.lon[removable[i]]);
+              dist[i] = greatCircleKm(g.lat[c], g.lon[c], g.lat[removable[i]], g.lon[removable[i]]);
             }
             idx.sort((a, b) => dist[a] - dist[b] || a - b);
             let k = 0;
@@ -25095,22 +25095,6 @@ var init_schema_errors = __esm({
 });
 
 // src/policy/load.ts
-function firstNonNormal2(v, path11) {
-  if (typeof v === "number") {
-    const why = nonNormal(v);
-    return why ? { path: [...path11], why } : void 0;
-  }
-  if (v === null || typeof v !== "object") return void 0;
-  const entries = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
-  for (const [k, x] of entries) {
-    if (typeof x !== "number" && (x === null || typeof x !== "object")) continue;
-    path11.push(k);
-    const found = firstNonNormal2(x, path11);
-    path11.pop();
-    if (found) return found;
-  }
-  return void 0;
-}
 function validate2(data) {
   validator2 ??= new import_ajv2.Ajv({ allErrors: true, verbose: true, discriminator: true, strict: false }).compile(policy_schema_default);
   validator2(data);
@@ -25149,7 +25133,7 @@ function parsePolicyFile(text2, file) {
   if (typeof data !== "object" || data === null || Array.isArray(data)) {
     throw new PolicyError("the policy must be a mapping of keys (key: value lines)", src.where([]), 'see "netbrace init" for a starter file');
   }
-  const odd = firstNonNormal2(data, []);
+  const odd = firstNonNormal(data, []);
   if (odd) throw new PolicyError(`${describePath(odd.path)} ${odd.why}`, src.where(odd.path), "write a plain decimal number");
   const v = validate2(data);
   if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
@@ -28650,6 +28634,15 @@ function groupMembers(g, k) {
   return Array.from(g.groupLinks.subarray(g.groupOffsets[k], g.groupOffsets[k + 1]));
 }
 function matchDesigns(base, head) {
+  let byHead = matchings.get(base);
+  if (!byHead) matchings.set(base, byHead = /* @__PURE__ */ new WeakMap());
+  const hit = byHead.get(head);
+  if (hit) return hit;
+  const m = computeMatching(base, head);
+  byHead.set(head, m);
+  return m;
+}
+function computeMatching(base, head) {
   const nodes = matchNodes(base, head);
   const linkToHead = new Int32Array(base.m).fill(-1);
   const linkToBase = new Int32Array(head.m).fill(-1);
@@ -28754,11 +28747,12 @@ function sameDesign(base, head, m) {
   const db = demands(head, (v) => v);
   return da.every((x, i) => x === db[i]);
 }
-var signature;
+var signature, matchings;
 var init_rename = __esm({
   "src/gate/rename.ts"() {
     "use strict";
     signature = (nb) => `${nb.matched.join(",")}|${nb.unmatched}`;
+    matchings = /* @__PURE__ */ new WeakMap();
   }
 });
 
@@ -28980,22 +28974,10 @@ function place(v) {
 function groupsOf(l) {
   return l.riskGroups.length ? [...new Set(l.riskGroups)].sort().join(", ") : "none";
 }
-function designChanges(base, head) {
-  const added = [];
-  const removed = [];
+function attributeChanges(base, head) {
   const modified = [];
   const baseNodes = new Map(base.nodes.map((v) => [v.id, v]));
-  const headNodes = new Map(head.nodes.map((v) => [v.id, v]));
   const baseLinks = new Map(base.links.map((l) => [l.key, l]));
-  const headLinks = new Map(head.links.map((l) => [l.key, l]));
-  for (const v of head.nodes) if (!baseNodes.has(v.id)) added.push({ id: v.id, kind: "node", line: v.pos.line });
-  for (const l of head.links) if (!baseLinks.has(l.key)) added.push({ id: l.id, kind: "link", line: l.pos.line });
-  for (const v of base.nodes) if (!headNodes.has(v.id)) removed.push({ id: v.id, kind: "node", line: v.pos.line });
-  for (const l of base.links) if (!headLinks.has(l.key)) removed.push({ id: l.id, kind: "link", line: l.pos.line });
-  const baseGroups = new Set(base.riskGroups.map((x) => x.id));
-  const headGroups = new Set(head.riskGroups.map((x) => x.id));
-  for (const x of head.riskGroups) if (!baseGroups.has(x.id)) added.push({ id: x.id, kind: "group", line: x.pos.line });
-  for (const x of base.riskGroups) if (!headGroups.has(x.id)) removed.push({ id: x.id, kind: "group", line: x.pos.line });
   for (const h of head.nodes) {
     const b = baseNodes.get(h.id);
     if (!b) continue;
@@ -29014,8 +28996,7 @@ function designChanges(base, head) {
       if (before !== after) modified.push({ id: h.id, kind: "link", attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
     }
   }
-  if (added.length + removed.length + modified.length === 0) return void 0;
-  return modified.length ? { added, removed, modified } : { added, removed };
+  return modified;
 }
 var WHAT, MAX_DECIMALS, NONE, NODE_ATTRIBUTES, LINK_ATTRIBUTES;
 var init_describe = __esm({
@@ -29591,9 +29572,6 @@ function judge(r, input, description) {
   }
   return result();
 }
-function elementChanges2(base, head, matching = matchDesigns(base.graph, head.graph)) {
-  return elementChanges(base.graph, head.graph, matching);
-}
 function fileStatus(change, findings) {
   const failing = findings.filter((f) => f.severity === "fail");
   if (failing.some((f) => f.rule === "parse-error" || f.rule === "not-computable")) return "unreadable";
@@ -29651,8 +29629,8 @@ function compareDesign(input) {
   report.head = withSequenceDetails(input.head.result.evaluation, input.head.graph);
   if (effective.base && !effective.thresholdsOnly) {
     report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.result === input.head.result ? input.head.graph : effective.base.graph);
-    const changes = elementChanges2(effective.base, input.head, matching);
-    const modified = effective.base.topology && input.head.topology ? designChanges(effective.base.topology, input.head.topology)?.modified : void 0;
+    const changes = elementChanges(effective.base.graph, input.head.graph, matching);
+    const modified = effective.base.topology && input.head.topology ? attributeChanges(effective.base.topology, input.head.topology) : void 0;
     if (modified?.length) changes.modified = modified;
     if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) + (changes.modified?.length ?? 0) > 0) report.changes = changes;
   }
@@ -35295,19 +35273,7 @@ function withExtraLinks(g, extra) {
     degree2[linkSource[e]]++;
     degree2[linkTarget[e]]++;
   }
-  const offsets = new Int32Array(g.n + 1);
-  for (let v = 0; v < g.n; v++) offsets[v + 1] = offsets[v] + degree2[v];
-  const neighbors = new Int32Array(2 * m);
-  const linkOf = new Int32Array(2 * m);
-  const fill = offsets.slice(0, g.n);
-  for (let e = 0; e < m; e++) {
-    const s = linkSource[e];
-    const d = linkTarget[e];
-    neighbors[fill[s]] = d;
-    linkOf[fill[s]++] = e;
-    neighbors[fill[d]] = s;
-    linkOf[fill[d]++] = e;
-  }
+  const { offsets, neighbors, linkOf } = adjacency(g.n, linkSource, linkTarget, degree2);
   const linkHardened = new Uint8Array(m);
   linkHardened.set(g.linkHardened);
   const linkLine = new Int32Array(m);
@@ -35429,6 +35395,7 @@ var init_apply = __esm({
     "use strict";
     import_yaml5 = __toESM(require_dist(), 1);
     init_errors();
+    init_compact();
     init_model();
   }
 });
@@ -35536,7 +35503,7 @@ function longestSpanKm(g) {
   }
   return best;
 }
-function adjacency(g) {
+function adjacency2(g) {
   const set = /* @__PURE__ */ new Set();
   for (let e = 0; e < g.m; e++) {
     const s = g.linkSource[e];
@@ -35547,7 +35514,7 @@ function adjacency(g) {
 }
 function generateCandidates(g, options = {}) {
   const routeFactor = options.routeFactor ?? DEFAULT_ROUTE_FACTOR;
-  const joined = adjacency(g);
+  const joined = adjacency2(g);
   const notes = [];
   const list2 = [];
   const hasCoords = (v) => g.lat !== null && g.lon !== null && Number.isFinite(g.lat[v]) && Number.isFinite(g.lon[v]);
@@ -36754,9 +36721,10 @@ async function runGate(request, deps) {
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
           input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
           if (same) input.base = input.head;
-          else if (baseGraph && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) {
-            input.base = { graph: baseGraph, topology: baseTopology, result: input.head.result };
-          } else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology, specs.base, specs.cuts, request, deps);
+          else if (baseGraph) {
+            if (sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) input.base = { graph: baseGraph, topology: baseTopology, result: input.head.result };
+            else input.base = await evaluateGraph(baseGraph, baseTopology, specs.base, specs.cuts, request, deps);
+          }
         }
       }
     }

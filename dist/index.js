@@ -41275,15 +41275,17 @@ var randomLinks = {
   plan: (g, params) => randomOrderPlan(g, "link", params)
 };
 
-// src/challenges/regional.ts
+// src/topology/geodesy.ts
 var EARTH_RADIUS_KM = 6371.0088;
-function haversineKm(lat1, lon1, lat2, lon2) {
+function greatCircleKm(lat1, lon1, lat2, lon2) {
   const rad = Math.PI / 180;
   const dLat = (lat2 - lat1) * rad;
   const dLon = (lon2 - lon1) * rad;
   const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
   return 2 * EARTH_RADIUS_KM * Math.asin(Math.min(1, Math.sqrt(a)));
 }
+
+// src/challenges/regional.ts
 function sitesWithCoordinates(g) {
   const sites = [];
   if (g.lat === null || g.lon === null) return sites;
@@ -41295,7 +41297,7 @@ function defaultRegionalUntil(g) {
   let max = 0;
   for (let i = 0; i < sites.length; i++) {
     for (let j = i + 1; j < sites.length; j++) {
-      const d = haversineKm(g.lat[sites[i]], g.lon[sites[i]], g.lat[sites[j]], g.lon[sites[j]]);
+      const d = greatCircleKm(g.lat[sites[i]], g.lon[sites[i]], g.lat[sites[j]], g.lon[sites[j]]);
       if (d > max) max = d;
     }
   }
@@ -41323,7 +41325,7 @@ var regional = {
       realize(r, order, steps) {
         const c = sites[r];
         for (let i = 0; i < removable.length; i++) {
-          dist[i] = haversineKm(g.lat[c], g.lon[c], g.lat[removable[i]], g.lon[removable[i]]);
+          dist[i] = greatCircleKm(g.lat[c], g.lon[c], g.lat[removable[i]], g.lon[removable[i]]);
         }
         idx.sort((a, b) => dist[a] - dist[b] || a - b);
         let k = 0;
@@ -42743,15 +42745,6 @@ function createDijkstra(capacity) {
       shortestPaths(g, cost, source, dist, heap, pos, visit2);
     }
   };
-}
-
-// src/topology/geodesy.ts
-function greatCircleKm(lat1, lon1, lat2, lon2) {
-  const rad = Math.PI / 180;
-  const dLat = (lat2 - lat1) * rad;
-  const dLon = (lon2 - lon1) * rad;
-  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
-  return 2 * 6371.0088 * Math.asin(Math.min(1, Math.sqrt(a)));
 }
 
 // src/metrics/kernels/link-cost.ts
@@ -44191,6 +44184,23 @@ function stableJson(value2) {
 }
 
 // src/graph/compact.ts
+function adjacency(n, linkSource, linkTarget, degree2) {
+  const m = linkSource.length;
+  const offsets = new Int32Array(n + 1);
+  for (let v = 0; v < n; v++) offsets[v + 1] = offsets[v] + degree2[v];
+  const neighbors = new Int32Array(2 * m);
+  const linkOf = new Int32Array(2 * m);
+  const fill = offsets.slice(0, n);
+  for (let e = 0; e < m; e++) {
+    const s = linkSource[e];
+    const d = linkTarget[e];
+    neighbors[fill[s]] = d;
+    linkOf[fill[s]++] = e;
+    neighbors[fill[d]] = s;
+    linkOf[fill[d]++] = e;
+  }
+  return { offsets, neighbors, linkOf };
+}
 function compileTopology(t) {
   const order = canonicalOrder(t);
   const nodes = order.nodes.map((i) => t.nodes[i]);
@@ -44227,19 +44237,7 @@ function compileTopology(t) {
     hasLatency ||= link.latency !== void 0;
     hasWeight ||= link.weight !== void 0;
   }
-  const offsets = new Int32Array(n + 1);
-  for (let v = 0; v < n; v++) offsets[v + 1] = offsets[v] + degree2[v];
-  const neighbors = new Int32Array(2 * m);
-  const linkOf = new Int32Array(2 * m);
-  const fill = offsets.slice(0, n);
-  for (let e = 0; e < m; e++) {
-    const s = linkSource[e];
-    const d = linkTarget[e];
-    neighbors[fill[s]] = d;
-    linkOf[fill[s]++] = e;
-    neighbors[fill[d]] = s;
-    linkOf[fill[d]++] = e;
-  }
+  const { offsets, neighbors, linkOf } = adjacency(n, linkSource, linkTarget, degree2);
   const column = (pick, present, count) => {
     if (!present) return null;
     const a = new Float64Array(count);
@@ -45940,19 +45938,7 @@ function withExtraLinks(g, extra) {
     degree2[linkSource[e]]++;
     degree2[linkTarget[e]]++;
   }
-  const offsets = new Int32Array(g.n + 1);
-  for (let v = 0; v < g.n; v++) offsets[v + 1] = offsets[v] + degree2[v];
-  const neighbors = new Int32Array(2 * m);
-  const linkOf = new Int32Array(2 * m);
-  const fill = offsets.slice(0, g.n);
-  for (let e = 0; e < m; e++) {
-    const s = linkSource[e];
-    const d = linkTarget[e];
-    neighbors[fill[s]] = d;
-    linkOf[fill[s]++] = e;
-    neighbors[fill[d]] = s;
-    linkOf[fill[d]++] = e;
-  }
+  const { offsets, neighbors, linkOf } = adjacency(g.n, linkSource, linkTarget, degree2);
   const linkHardened = new Uint8Array(m);
   linkHardened.set(g.linkHardened);
   const linkLine = new Int32Array(m);
@@ -46735,7 +46721,17 @@ function linksByEnds(g, endOf) {
 function groupMembers(g, k) {
   return Array.from(g.groupLinks.subarray(g.groupOffsets[k], g.groupOffsets[k + 1]));
 }
+var matchings = /* @__PURE__ */ new WeakMap();
 function matchDesigns(base, head) {
+  let byHead = matchings.get(base);
+  if (!byHead) matchings.set(base, byHead = /* @__PURE__ */ new WeakMap());
+  const hit = byHead.get(head);
+  if (hit) return hit;
+  const m = computeMatching(base, head);
+  byHead.set(head, m);
+  return m;
+}
+function computeMatching(base, head) {
   const nodes = matchNodes(base, head);
   const linkToHead = new Int32Array(base.m).fill(-1);
   const linkToBase = new Int32Array(head.m).fill(-1);
@@ -47058,22 +47054,10 @@ var LINK_ATTRIBUTES = [
   { attribute: "capacity", value: (l) => num2(l.capacity, "Gbit/s") },
   { attribute: "weight", value: (l) => num2(l.weight, "") }
 ];
-function designChanges(base, head) {
-  const added = [];
-  const removed = [];
+function attributeChanges(base, head) {
   const modified = [];
   const baseNodes = new Map(base.nodes.map((v) => [v.id, v]));
-  const headNodes = new Map(head.nodes.map((v) => [v.id, v]));
   const baseLinks = new Map(base.links.map((l) => [l.key, l]));
-  const headLinks = new Map(head.links.map((l) => [l.key, l]));
-  for (const v of head.nodes) if (!baseNodes.has(v.id)) added.push({ id: v.id, kind: "node", line: v.pos.line });
-  for (const l of head.links) if (!baseLinks.has(l.key)) added.push({ id: l.id, kind: "link", line: l.pos.line });
-  for (const v of base.nodes) if (!headNodes.has(v.id)) removed.push({ id: v.id, kind: "node", line: v.pos.line });
-  for (const l of base.links) if (!headLinks.has(l.key)) removed.push({ id: l.id, kind: "link", line: l.pos.line });
-  const baseGroups = new Set(base.riskGroups.map((x) => x.id));
-  const headGroups = new Set(head.riskGroups.map((x) => x.id));
-  for (const x of head.riskGroups) if (!baseGroups.has(x.id)) added.push({ id: x.id, kind: "group", line: x.pos.line });
-  for (const x of base.riskGroups) if (!headGroups.has(x.id)) removed.push({ id: x.id, kind: "group", line: x.pos.line });
   for (const h of head.nodes) {
     const b = baseNodes.get(h.id);
     if (!b) continue;
@@ -47092,8 +47076,7 @@ function designChanges(base, head) {
       if (before !== after) modified.push({ id: h.id, kind: "link", attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
     }
   }
-  if (added.length + removed.length + modified.length === 0) return void 0;
-  return modified.length ? { added, removed, modified } : { added, removed };
+  return modified;
 }
 
 // src/gate/spof.ts
@@ -47631,9 +47614,6 @@ function judge(r, input, description) {
   }
   return result();
 }
-function elementChanges2(base, head, matching = matchDesigns(base.graph, head.graph)) {
-  return elementChanges(base.graph, head.graph, matching);
-}
 function fileStatus(change, findings) {
   const failing = findings.filter((f) => f.severity === "fail");
   if (failing.some((f) => f.rule === "parse-error" || f.rule === "not-computable")) return "unreadable";
@@ -47691,8 +47671,8 @@ function compareDesign(input) {
   report.head = withSequenceDetails(input.head.result.evaluation, input.head.graph);
   if (effective.base && !effective.thresholdsOnly) {
     report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.result === input.head.result ? input.head.graph : effective.base.graph);
-    const changes = elementChanges2(effective.base, input.head, matching);
-    const modified = effective.base.topology && input.head.topology ? designChanges(effective.base.topology, input.head.topology)?.modified : void 0;
+    const changes = elementChanges(effective.base.graph, input.head.graph, matching);
+    const modified = effective.base.topology && input.head.topology ? attributeChanges(effective.base.topology, input.head.topology) : void 0;
     if (modified?.length) changes.modified = modified;
     if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) + (changes.modified?.length ?? 0) > 0) report.changes = changes;
   }
@@ -48168,6 +48148,23 @@ function nonNormal(n) {
   if (Number.isNaN(n)) return "is not a number (NaN)";
   if (!Number.isFinite(n)) return "is infinite (or too large for a number)";
   if (n !== 0 && Math.abs(n) < MIN_NORMAL) return "is so close to 0 that it cannot be computed with (a subnormal number)";
+  return void 0;
+}
+function firstNonNormal(v, path3, skip) {
+  if (typeof v === "number") {
+    const why = nonNormal(v);
+    return why ? { path: [...path3], why } : void 0;
+  }
+  if (v === null || typeof v !== "object") return void 0;
+  const entries = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
+  for (const [k, x] of entries) {
+    if (typeof x !== "number" && (x === null || typeof x !== "object")) continue;
+    if (path3.length === 0 && typeof k === "string" && skip?.has(k)) continue;
+    path3.push(k);
+    const found = firstNonNormal(x, path3);
+    path3.pop();
+    if (found) return found;
+  }
   return void 0;
 }
 var fmt = (n) => Math.abs(n) >= 1e5 || n !== 0 && Math.abs(n) < 1e-3 ? n.toExponential().replace("e+", "e") : String(n);
@@ -49218,22 +49215,6 @@ function throwSchemaErrors(errors, src) {
 // src/policy/load.ts
 var MIN_METRIC_WEIGHT = 1e-6;
 var MAX_METRIC_WEIGHT = 1e6;
-function firstNonNormal(v, path3) {
-  if (typeof v === "number") {
-    const why = nonNormal(v);
-    return why ? { path: [...path3], why } : void 0;
-  }
-  if (v === null || typeof v !== "object") return void 0;
-  const entries = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
-  for (const [k, x] of entries) {
-    if (typeof x !== "number" && (x === null || typeof x !== "object")) continue;
-    path3.push(k);
-    const found = firstNonNormal(x, path3);
-    path3.pop();
-    if (found) return found;
-  }
-  return void 0;
-}
 var validator;
 function validate(data) {
   validator ??= new import_ajv.Ajv({ allErrors: true, verbose: true, discriminator: true, strict: false }).compile(policy_schema_default);
@@ -54638,7 +54619,7 @@ function longestSpanKm(g) {
   }
   return best;
 }
-function adjacency(g) {
+function adjacency2(g) {
   const set = /* @__PURE__ */ new Set();
   for (let e = 0; e < g.m; e++) {
     const s = g.linkSource[e];
@@ -54649,7 +54630,7 @@ function adjacency(g) {
 }
 function generateCandidates(g, options = {}) {
   const routeFactor = options.routeFactor ?? DEFAULT_ROUTE_FACTOR;
-  const joined = adjacency(g);
+  const joined = adjacency2(g);
   const notes = [];
   const list = [];
   const hasCoords = (v) => g.lat !== null && g.lon !== null && Number.isFinite(g.lat[v]) && Number.isFinite(g.lon[v]);
@@ -55535,23 +55516,6 @@ var Locator = class {
     return this.pos(path3);
   }
 };
-function firstNonNormal2(v, path3) {
-  if (typeof v === "number") {
-    const why = nonNormal(v);
-    return why ? { path: [...path3], why } : void 0;
-  }
-  if (v === null || typeof v !== "object") return void 0;
-  const entries = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
-  for (const [k, x] of entries) {
-    if (typeof x !== "number" && (x === null || typeof x !== "object")) continue;
-    if (path3.length === 0 && k === "metadata") continue;
-    path3.push(k);
-    const found = firstNonNormal2(x, path3);
-    path3.pop();
-    if (found) return found;
-  }
-  return void 0;
-}
 function pathText(path3) {
   let s = "";
   for (const k of path3) s += typeof k === "number" ? `[${k}]` : s === "" ? k : `.${k}`;
@@ -55678,7 +55642,7 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
   if (data === null || data === void 0) {
     throw new DesignError(`the ${kindWord} design is empty`, { file, line: 1, column: 1 }, "a design needs at least `nodes:`");
   }
-  const odd = firstNonNormal2(data, []);
+  const odd = firstNonNormal(data, [], /* @__PURE__ */ new Set(["metadata"]));
   if (odd) {
     throw new DesignError(`${pathText(odd.path)} ${odd.why}${loc.written(odd.path, " (written ", ")")}`, { file, ...loc.pos(odd.path) }, "write a plain decimal number");
   }
@@ -56215,7 +56179,7 @@ function localName(qname) {
 var import_yaml7 = __toESM(require_dist(), 1);
 
 // src/topology/corridors.ts
-var EARTH_M = 63710088e-1;
+var EARTH_M = EARTH_RADIUS_KM * 1e3;
 var RAD = Math.PI / 180;
 function routeKm(route) {
   let km = 0;
@@ -57113,9 +57077,10 @@ async function runGate(request2, deps) {
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
           input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request2, deps);
           if (same) input.base = input.head;
-          else if (baseGraph && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) {
-            input.base = { graph: baseGraph, topology: baseTopology, result: input.head.result };
-          } else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology, specs.base, specs.cuts, request2, deps);
+          else if (baseGraph) {
+            if (sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) input.base = { graph: baseGraph, topology: baseTopology, result: input.head.result };
+            else input.base = await evaluateGraph(baseGraph, baseTopology, specs.base, specs.cuts, request2, deps);
+          }
         }
       }
     }

@@ -573,15 +573,17 @@ var randomLinks = {
   plan: (g, params) => randomOrderPlan(g, "link", params)
 };
 
-// src/challenges/regional.ts
+// src/topology/geodesy.ts
 var EARTH_RADIUS_KM = 6371.0088;
-function haversineKm(lat1, lon1, lat2, lon2) {
+function greatCircleKm(lat1, lon1, lat2, lon2) {
   const rad = Math.PI / 180;
   const dLat = (lat2 - lat1) * rad;
   const dLon = (lon2 - lon1) * rad;
   const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
   return 2 * EARTH_RADIUS_KM * Math.asin(Math.min(1, Math.sqrt(a)));
 }
+
+// src/challenges/regional.ts
 function sitesWithCoordinates(g) {
   const sites = [];
   if (g.lat === null || g.lon === null) return sites;
@@ -610,7 +612,7 @@ var regional = {
       realize(r, order, steps) {
         const c = sites[r];
         for (let i = 0; i < removable.length; i++) {
-          dist[i] = haversineKm(g.lat[c], g.lon[c], g.lat[removable[i]], g.lon[removable[i]]);
+          dist[i] = greatCircleKm(g.lat[c], g.lon[c], g.lat[removable[i]], g.lon[removable[i]]);
         }
         idx.sort((a, b) => dist[a] - dist[b] || a - b);
         let k = 0;
@@ -1959,15 +1961,6 @@ function createDijkstra(capacity) {
       shortestPaths(g, cost, source, dist, heap, pos, visit);
     }
   };
-}
-
-// src/topology/geodesy.ts
-function greatCircleKm(lat1, lon1, lat2, lon2) {
-  const rad = Math.PI / 180;
-  const dLat = (lat2 - lat1) * rad;
-  const dLon = (lon2 - lon1) * rad;
-  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
-  return 2 * 6371.0088 * Math.asin(Math.min(1, Math.sqrt(a)));
 }
 
 // src/metrics/kernels/link-cost.ts

@@ -601,11 +601,12 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
           input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
           if (same) input.base = input.head;
-          else if (baseGraph && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) {
-            // Only ids are spelt differently: one evaluation judges both sides (delta exactly 0),
-            // and the base keeps its own graph so that the renames are still listed.
-            input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
-          } else if (baseGraph) input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
+          else if (baseGraph) {
+            // Only ids spelt differently: one evaluation judges both sides (delta exactly 0), and
+            // the base keeps its own graph so that the renames are still listed.
+            if (sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
+            else input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
+          }
         }
       }
     }

@@ -12,17 +12,8 @@
 import type { CompactGraph } from '../graph/compact.js';
 import type { BandChallenge } from './types.js';
 import { makeGrid } from './grid.js';
+import { greatCircleKm } from '../topology/geodesy.js';
 
-export const EARTH_RADIUS_KM = 6371.0088;
-
-/** Great-circle distance in km between two points given in degrees (haversine). */
-export function haversineKm(lat1: number, lon1: number, lat2: number, lon2: number): number {
-  const rad = Math.PI / 180;
-  const dLat = (lat2 - lat1) * rad;
-  const dLon = (lon2 - lon1) * rad;
-  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
-  return 2 * EARTH_RADIUS_KM * Math.asin(Math.min(1, Math.sqrt(a)));
-}
 
 /** Indices of nodes with both coordinates, in index (natural id) order. */
 export function sitesWithCoordinates(g: CompactGraph): number[] {
@@ -38,7 +29,7 @@ export function defaultRegionalUntil(g: CompactGraph): number {
   let max = 0;
   for (let i = 0; i < sites.length; i++) {
     for (let j = i + 1; j < sites.length; j++) {
-      const d = haversineKm(g.lat![sites[i]], g.lon![sites[i]], g.lat![sites[j]], g.lon![sites[j]]);
+      const d = greatCircleKm(g.lat![sites[i]], g.lon![sites[i]], g.lat![sites[j]], g.lon![sites[j]]);
       if (d > max) max = d;
     }
   }
@@ -68,7 +59,7 @@ export const regional: BandChallenge = {
       realize(r, order, steps) {
         const c = sites[r];
         for (let i = 0; i < removable.length; i++) {
-          dist[i] = haversineKm(g.lat![c], g.lon![c], g.lat![removable[i]], g.lon![removable[i]]);
+          dist[i] = greatCircleKm(g.lat![c], g.lon![c], g.lat![removable[i]], g.lon![removable[i]]);
         }
         idx.sort((a, b) => dist[a] - dist[b] || a - b);
         // Sorted by distance; steps[j] counts sites strictly inside radius x[j].

@@ -41,8 +41,8 @@ import {
   changeDecimals,
   decidingDecimals,
   describeRequirement,
-  designChanges,
-  elementChanges as describeElementChanges,
+  attributeChanges,
+  elementChanges,
   formatDelta,
   formatR,
   type ElementChanges,
@@ -358,11 +358,6 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
   return result();
 }
 
-/** Nodes, links and shared-risk groups that the change added, removed, renamed or (un)hardened. */
-export function elementChanges(base: DesignSide, head: DesignSide, matching: Matching = matchDesigns(base.graph, head.graph)): ElementChanges {
-  return describeElementChanges(base.graph, head.graph, matching);
-}
-
 /** Which status a judged file has, from its findings (only fail-severity findings change it). */
 export function fileStatus(change: CompareInput['change'], findings: readonly Finding[]): FileStatus {
   const failing = findings.filter((f) => f.severity === 'fail');
@@ -425,9 +420,9 @@ export function compareDesign(input: CompareInput): FileReport {
   report.head = withSequenceDetails(input.head.result.evaluation, input.head.graph);
   if (effective.base && !effective.thresholdsOnly) {
     report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.result === input.head.result ? input.head.graph : effective.base.graph);
-    const changes = elementChanges(effective.base, input.head, matching);
+    const changes = elementChanges(effective.base.graph, input.head.graph, matching!);
     // Attributes changed on elements both sides have (by id and link key), with both lines.
-    const modified = effective.base.topology && input.head.topology ? designChanges(effective.base.topology, input.head.topology)?.modified : undefined;
+    const modified = effective.base.topology && input.head.topology ? attributeChanges(effective.base.topology, input.head.topology) : undefined;
     if (modified?.length) changes.modified = modified;
     if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) + (changes.modified?.length ?? 0) > 0) report.changes = changes;
   }

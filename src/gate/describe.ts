@@ -202,30 +202,15 @@ const LINK_ATTRIBUTES: { attribute: string; value: (l: TopoLink) => string }[] =
 ];
 
 /**
- * Everything the change does to a design, base against head: nodes (by id), links (by stable
- * key: their ends) and shared-risk groups (by id) added and removed, and, on nodes and links
- * both sides have, every attribute
- * the gate or a planner reads — labels, kinds, coordinates, hardening, risk-group membership,
- * lengths, latencies, capacities, weights — with the element's line on each side. Undefined
- * when the two sides describe the same design.
+ * The attributes the change alters on nodes (by id) and links (by stable key: their ends) that
+ * both sides have — labels, kinds, coordinates, hardening, risk-group membership, lengths,
+ * latencies, capacities, weights — with the element's line on each side. Elements added,
+ * removed or renamed are elementChanges' part.
  */
-export function designChanges(base: Topology, head: Topology): FileReport['changes'] {
-  const added: ReportElement[] = [];
-  const removed: ReportElement[] = [];
+export function attributeChanges(base: Topology, head: Topology): AttributeChange[] {
   const modified: AttributeChange[] = [];
   const baseNodes = new Map(base.nodes.map((v) => [v.id, v]));
-  const headNodes = new Map(head.nodes.map((v) => [v.id, v]));
   const baseLinks = new Map(base.links.map((l) => [l.key, l]));
-  const headLinks = new Map(head.links.map((l) => [l.key, l]));
-  for (const v of head.nodes) if (!baseNodes.has(v.id)) added.push({ id: v.id, kind: 'node', line: v.pos.line });
-  for (const l of head.links) if (!baseLinks.has(l.key)) added.push({ id: l.id, kind: 'link', line: l.pos.line });
-  for (const v of base.nodes) if (!headNodes.has(v.id)) removed.push({ id: v.id, kind: 'node', line: v.pos.line });
-  for (const l of base.links) if (!headLinks.has(l.key)) removed.push({ id: l.id, kind: 'link', line: l.pos.line });
-  // Shared-risk groups declared (or first named) on one side only.
-  const baseGroups = new Set(base.riskGroups.map((x) => x.id));
-  const headGroups = new Set(head.riskGroups.map((x) => x.id));
-  for (const x of head.riskGroups) if (!baseGroups.has(x.id)) added.push({ id: x.id, kind: 'group', line: x.pos.line });
-  for (const x of base.riskGroups) if (!headGroups.has(x.id)) removed.push({ id: x.id, kind: 'group', line: x.pos.line });
   for (const h of head.nodes) {
     const b = baseNodes.get(h.id);
     if (!b) continue;
@@ -244,6 +229,5 @@ export function designChanges(base: Topology, head: Topology): FileReport['chang
       if (before !== after) modified.push({ id: h.id, kind: 'link', attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
     }
   }
-  if (added.length + removed.length + modified.length === 0) return undefined;
-  return modified.length ? { added, removed, modified } : { added, removed };
+  return modified;
 }

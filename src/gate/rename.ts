@@ -153,7 +153,21 @@ function groupMembers(g: CompactGraph, k: number): number[] {
   return Array.from(g.groupLinks.subarray(g.groupOffsets[k], g.groupOffsets[k + 1]));
 }
 
+// The gate asks for the same pair twice (is it the same design? then what changed?): the
+// matching is a pure function of the two graphs, kept while both live.
+const matchings = new WeakMap<CompactGraph, WeakMap<CompactGraph, Matching>>();
+
 export function matchDesigns(base: CompactGraph, head: CompactGraph): Matching {
+  let byHead = matchings.get(base);
+  if (!byHead) matchings.set(base, (byHead = new WeakMap()));
+  const hit = byHead.get(head);
+  if (hit) return hit;
+  const m = computeMatching(base, head);
+  byHead.set(head, m);
+  return m;
+}
+
+function computeMatching(base: CompactGraph, head: CompactGraph): Matching {
   const nodes = matchNodes(base, head);
   const linkToHead = new Int32Array(base.m).fill(-1);
   const linkToBase = new Int32Array(head.m).fill(-1);

@@ -56,6 +56,30 @@ export interface CompactGraph {
   readonly latencyBudget: number | undefined;
 }
 
+/** The CSR adjacency of links given by their ends (each link listed at both ends, in link order). */
+export function adjacency(
+  n: number,
+  linkSource: Int32Array,
+  linkTarget: Int32Array,
+  degree: Int32Array,
+): { offsets: Int32Array; neighbors: Int32Array; linkOf: Int32Array } {
+  const m = linkSource.length;
+  const offsets = new Int32Array(n + 1);
+  for (let v = 0; v < n; v++) offsets[v + 1] = offsets[v] + degree[v];
+  const neighbors = new Int32Array(2 * m);
+  const linkOf = new Int32Array(2 * m);
+  const fill = offsets.slice(0, n);
+  for (let e = 0; e < m; e++) {
+    const s = linkSource[e];
+    const d = linkTarget[e];
+    neighbors[fill[s]] = d;
+    linkOf[fill[s]++] = e;
+    neighbors[fill[d]] = s;
+    linkOf[fill[d]++] = e;
+  }
+  return { offsets, neighbors, linkOf };
+}
+
 /**
  * Compile a parsed design into its compact graph. Nodes, links, groups and demands are numbered
  * in canonical order (canonical.ts), not file order: the same topology listed in another order
@@ -101,19 +125,7 @@ export function compileTopology(t: Topology): CompactGraph {
     hasWeight ||= link.weight !== undefined;
   }
 
-  const offsets = new Int32Array(n + 1);
-  for (let v = 0; v < n; v++) offsets[v + 1] = offsets[v] + degree[v];
-  const neighbors = new Int32Array(2 * m);
-  const linkOf = new Int32Array(2 * m);
-  const fill = offsets.slice(0, n);
-  for (let e = 0; e < m; e++) {
-    const s = linkSource[e];
-    const d = linkTarget[e];
-    neighbors[fill[s]] = d;
-    linkOf[fill[s]++] = e;
-    neighbors[fill[d]] = s;
-    linkOf[fill[d]++] = e;
-  }
+  const { offsets, neighbors, linkOf } = adjacency(n, linkSource, linkTarget, degree);
 
   const column = (pick: (i: number) => number | undefined, present: boolean, count: number) => {
     if (!present) return null;

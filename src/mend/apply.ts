@@ -6,7 +6,7 @@
 
 import { isMap, isScalar, isSeq, parseDocument, type Node, type YAMLMap, type YAMLSeq } from 'yaml';
 import { UsageError } from '../errors.js';
-import type { CompactGraph } from '../graph/compact.js';
+import { adjacency, type CompactGraph } from '../graph/compact.js';
 import type { ReportElement } from '../report/report.js';
 import { linkKey, type DesignFormat, type TopoLink, type Topology } from '../topology/model.js';
 import type { MendLink } from './types.js';
@@ -33,19 +33,7 @@ export function withExtraLinks(g: CompactGraph, extra: readonly (readonly [numbe
     degree[linkSource[e]]++;
     degree[linkTarget[e]]++;
   }
-  const offsets = new Int32Array(g.n + 1);
-  for (let v = 0; v < g.n; v++) offsets[v + 1] = offsets[v] + degree[v];
-  const neighbors = new Int32Array(2 * m);
-  const linkOf = new Int32Array(2 * m);
-  const fill = offsets.slice(0, g.n);
-  for (let e = 0; e < m; e++) {
-    const s = linkSource[e];
-    const d = linkTarget[e];
-    neighbors[fill[s]] = d;
-    linkOf[fill[s]++] = e;
-    neighbors[fill[d]] = s;
-    linkOf[fill[d]++] = e;
-  }
+  const { offsets, neighbors, linkOf } = adjacency(g.n, linkSource, linkTarget, degree);
   const linkHardened = new Uint8Array(m);
   linkHardened.set(g.linkHardened);
   const linkLine = new Int32Array(m);

@@ -8,7 +8,7 @@ import { PolicyError } from '../errors.js';
 import type { ChallengeName, ChallengeParams, RValueSpec } from '../envelope/types.js';
 import type { MetricId } from '../metrics/types.js';
 import type { DesignFormat } from '../topology/model.js';
-import { fmt, nonNormal } from '../topology/quantities.js';
+import { firstNonNormal, fmt } from '../topology/quantities.js';
 import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
 import { DEFAULT_ERROR_MULTIPLE, REGIONAL_UNTIL_KM } from './defaults.js';
 import { globProblem } from './globs.js';
@@ -41,24 +41,6 @@ import { type Segment, YamlSource } from './yaml-source.js';
 export const MIN_METRIC_WEIGHT = 1e-6;
 export const MAX_METRIC_WEIGHT = 1e6;
 
-/** The first number of a policy that is NaN, infinite or subnormal, with where it is. */
-function firstNonNormal(v: unknown, path: Segment[]): { path: Segment[]; why: string } | undefined {
-  // One path array, extended and shortened in place: a large design has many numbers.
-  if (typeof v === 'number') {
-    const why = nonNormal(v);
-    return why ? { path: [...path], why } : undefined;
-  }
-  if (v === null || typeof v !== 'object') return undefined;
-  const entries: [string | number, unknown][] = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
-  for (const [k, x] of entries) {
-    if (typeof x !== 'number' && (x === null || typeof x !== 'object')) continue;
-    path.push(k);
-    const found = firstNonNormal(x, path);
-    path.pop();
-    if (found) return found;
-  }
-  return undefined;
-}
 
 let validator: ValidateFunction | undefined;
 

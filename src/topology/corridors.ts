@@ -6,10 +6,10 @@
 // great-circle (haversine) segment lengths; "side by side" is tested on points sampled along
 // one route every `stepM` metres, measuring the distance to the other route's segments in a
 // local equirectangular projection (accurate to well under 1 % at these distances: common
-// practice for sub-kilometre offsets). A grid over the sampled points keeps it near linear in
-// the number of points.
+// practice for sub-kilometre offsets). Only pairs of routes whose padded bounding boxes
+// overlap are compared.
 
-import { greatCircleKm } from './geodesy.js';
+import { EARTH_RADIUS_KM, greatCircleKm } from './geodesy.js';
 
 /** A route: [lon, lat] points in degrees (GeoJSON order). */
 export type Route = readonly (readonly [number, number])[];
@@ -34,7 +34,7 @@ export interface SharedCorridor {
   to: readonly [number, number];
 }
 
-const EARTH_M = 6_371_008.8;
+const EARTH_M = EARTH_RADIUS_KM * 1000;
 const RAD = Math.PI / 180;
 
 /** Length of a route along the sphere, km. */

@@ -12,7 +12,7 @@ import { DesignError } from '../errors.js';
 import type { DesignFormat, SourcePos, Topology } from './model.js';
 import { TopologyBuilder, type BuilderOptions } from './builder.js';
 import { didYouMean } from './suggest.js';
-import { nonNormal, quantityProblem, type Quantity } from './quantities.js';
+import { firstNonNormal, quantityProblem, type Quantity } from './quantities.js';
 import { MAX_NESTING, positionOf, yamlNestingExceeded } from './nesting.js';
 
 /**
@@ -108,28 +108,6 @@ class Locator {
   }
 }
 
-/**
- * The first number in the design (outside free-form `metadata`) that no computation can use:
- * NaN, ±Infinity (`.inf`, or a numeral too large such as 1e400) or a subnormal (1e-310).
- */
-function firstNonNormal(v: unknown, path: Path): { path: Path; why: string } | undefined {
-  // One path array, extended and shortened in place: a large design has many numbers.
-  if (typeof v === 'number') {
-    const why = nonNormal(v);
-    return why ? { path: [...path], why } : undefined;
-  }
-  if (v === null || typeof v !== 'object') return undefined;
-  const entries: [string | number, unknown][] = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
-  for (const [k, x] of entries) {
-    if (typeof x !== 'number' && (x === null || typeof x !== 'object')) continue;
-    if (path.length === 0 && k === 'metadata') continue;
-    path.push(k);
-    const found = firstNonNormal(x, path);
-    path.pop();
-    if (found) return found;
-  }
-  return undefined;
-}
 
 /** `links[2].length_km` from ajv's `/links/2/length_km`. */
 function pathText(path: Path): string {
@@ -294,7 +272,7 @@ export function parseNative(text: string, file: string, options: BuilderOptions 
   }
 
   // Before the schema, which would call Infinity "not a number" without saying why.
-  const odd = firstNonNormal(data, []);
+  const odd = firstNonNormal(data, [], new Set(['metadata']));
   if (odd) {
     throw new DesignError(`${pathText(odd.path)} ${odd.why}${loc.written(odd.path, ' (written ', ')')}`, { file, ...loc.pos(odd.path) }, 'write a plain decimal number');
   }

@@ -47,6 +47,29 @@ export function nonNormal(n: number): string | undefined {
 }
 
 /** 1e9 rather than 1000000000, 0.5 as it is. */
+/**
+ * The first number in a parsed document (design or policy) that is NaN, infinite or
+ * subnormal, with its path; top-level keys in `skip` (free-form metadata) are not searched.
+ */
+export function firstNonNormal(v: unknown, path: (string | number)[], skip?: ReadonlySet<string>): { path: (string | number)[]; why: string } | undefined {
+  // One path array, extended and shortened in place: a large design has many numbers.
+  if (typeof v === 'number') {
+    const why = nonNormal(v);
+    return why ? { path: [...path], why } : undefined;
+  }
+  if (v === null || typeof v !== 'object') return undefined;
+  const entries: [string | number, unknown][] = Array.isArray(v) ? v.map((x, i) => [i, x]) : Object.entries(v);
+  for (const [k, x] of entries) {
+    if (typeof x !== 'number' && (x === null || typeof x !== 'object')) continue;
+    if (path.length === 0 && typeof k === 'string' && skip?.has(k)) continue;
+    path.push(k);
+    const found = firstNonNormal(x, path);
+    path.pop();
+    if (found) return found;
+  }
+  return undefined;
+}
+
 export const fmt = (n: number): string => (Math.abs(n) >= 1e5 || (n !== 0 && Math.abs(n) < 1e-3) ? n.toExponential().replace('e+', 'e') : String(n));
 const shown = (n: number, unit: string) => `${fmt(n)}${unit ? ` ${unit}` : ''}`;
 

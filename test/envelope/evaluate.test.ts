@@ -5,7 +5,7 @@ import { getMetric } from '../../src/metrics/registry.js';
 import { evaluateDesign, pairedStatistic, planEvaluation, type EvaluationSpec } from '../../src/envelope/evaluate.js';
 import { bandPlan } from '../../src/envelope/engine.js';
 import { resolveParams } from '../../src/challenges/registry.js';
-import { haversineKm } from '../../src/challenges/regional.js';
+import { greatCircleKm as haversineKm } from '../../src/topology/geodesy.js';
 import { removeUnit } from '../../src/challenges/units.js';
 import type { MetricId } from '../../src/metrics/types.js';
 import { design, preferentialGraph, randomGraph } from './graphs.js';

@@ -1,7 +1,5 @@
 import type { Finding, FileReport, FileStatus } from '../report/report.js';
 import type { FilePolicy } from '../policy/types.js';
-import { type ElementChanges } from './describe.js';
-import { type Matching } from './rename.js';
 import { type DesignSide } from './measure.js';
 export type { DesignSide };
 export interface LocatedProblem {
@@ -32,8 +30,6 @@ export interface CompareInput {
  * approximation; common practice).
  */
 export declare const REDUCED_MARGIN_SE = 2;
-/** Nodes, links and shared-risk groups that the change added, removed, renamed or (un)hardened. */
-export declare function elementChanges(base: DesignSide, head: DesignSide, matching?: Matching): ElementChanges;
 /** Which status a judged file has, from its findings (only fail-severity findings change it). */
 export declare function fileStatus(change: CompareInput['change'], findings: readonly Finding[]): FileStatus;
 export declare function compareDesign(input: CompareInput): FileReport;

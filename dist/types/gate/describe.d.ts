@@ -1,6 +1,6 @@
 import type { CompactGraph } from '../graph/compact.js';
 import type { ChallengeDef, Requirement } from '../policy/types.js';
-import type { FileReport, ReportElement } from '../report/report.js';
+import type { AttributeChange, FileReport, ReportElement } from '../report/report.js';
 import type { Topology } from '../topology/model.js';
 import type { Matching } from './rename.js';
 /** R values and deltas: three decimals (or more when asked), a true minus sign, no "-0.000". */
@@ -50,11 +50,9 @@ export declare function spofRowParts(r: Requirement & {
     kind: SpofPart;
 }[];
 /**
- * Everything the change does to a design, base against head: nodes (by id), links (by stable
- * key: their ends) and shared-risk groups (by id) added and removed, and, on nodes and links
- * both sides have, every attribute
- * the gate or a planner reads — labels, kinds, coordinates, hardening, risk-group membership,
- * lengths, latencies, capacities, weights — with the element's line on each side. Undefined
- * when the two sides describe the same design.
+ * The attributes the change alters on nodes (by id) and links (by stable key: their ends) that
+ * both sides have — labels, kinds, coordinates, hardening, risk-group membership, lengths,
+ * latencies, capacities, weights — with the element's line on each side. Elements added,
+ * removed or renamed are elementChanges' part.
  */
-export declare function designChanges(base: Topology, head: Topology): FileReport['changes'];
+export declare function attributeChanges(base: Topology, head: Topology): AttributeChange[];

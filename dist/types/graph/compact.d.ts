@@ -49,6 +49,12 @@ export interface CompactGraph {
     /** Latency budget factor for demand_served, if the design sets one. */
     readonly latencyBudget: number | undefined;
 }
+/** The CSR adjacency of links given by their ends (each link listed at both ends, in link order). */
+export declare function adjacency(n: number, linkSource: Int32Array, linkTarget: Int32Array, degree: Int32Array): {
+    offsets: Int32Array;
+    neighbors: Int32Array;
+    linkOf: Int32Array;
+};
 /**
  * Compile a parsed design into its compact graph. Nodes, links, groups and demands are numbered
  * in canonical order (canonical.ts), not file order: the same topology listed in another order

@@ -1,4 +1,4 @@
-import type { CompactGraph } from '../graph/compact.js';
+import { type CompactGraph } from '../graph/compact.js';
 import type { ReportElement } from '../report/report.js';
 import { type DesignFormat, type Topology } from '../topology/model.js';
 import type { MendLink } from './types.js';

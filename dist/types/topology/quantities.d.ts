@@ -11,6 +11,14 @@ export declare const QUANTITY_RANGE: Readonly<Record<Quantity, QuantityRange>>;
 /** Why `n` is not a number anyone computes with (non-finite or subnormal), else undefined. */
 export declare function nonNormal(n: number): string | undefined;
 /** 1e9 rather than 1000000000, 0.5 as it is. */
+/**
+ * The first number in a parsed document (design or policy) that is NaN, infinite or
+ * subnormal, with its path; top-level keys in `skip` (free-form metadata) are not searched.
+ */
+export declare function firstNonNormal(v: unknown, path: (string | number)[], skip?: ReadonlySet<string>): {
+    path: (string | number)[];
+    why: string;
+} | undefined;
 export declare const fmt: (n: number) => string;
 /**
  * What is wrong with `value` as a `kind` (a sentence starting after its name, with a hint), or
