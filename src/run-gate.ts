@@ -24,18 +24,17 @@ import { compileTopology, type CompactGraph } from './graph/compact.js';
 import { budgetSpecs, notePairedCuts, type PairedCut } from './gate/budget.js';
 import { matchDesigns, sameDesign } from './gate/rename.js';
 import { compareDesign, type CompareInput, type DesignSide } from './gate/compare.js';
-import { countStatuses, exitCodeOf, verdictOf } from './gate/verdict.js';
+import { assembleReport, exitCodeOf } from './gate/verdict.js';
 import { pairDesigns, type UnpairedDesign } from './gate/pair-designs.js';
 import { BUILTIN_POLICY_NAME, DEFAULT_DESIGN_GLOBS, DEFAULT_POLICY_PATH } from './policy/defaults.js';
 import { builtinPolicy, designFormat, designNeedsHeader, globsMatch, isDesignPath, isDesignText, loadPolicy, policyForFile } from './policy/resolve.js';
 import type { FilePolicy, Policy } from './policy/types.js';
-import { CAUTION, REPORT_VERSION, type FileReport, type Report } from './report/report.js';
+import type { FileReport, Report } from './report/report.js';
 import type { DesignFormat } from './topology/model.js';
 import { addMapAndMend } from './map-mend-step.js';
 import { parseDesign } from './topology/parse.js';
 import type { Topology } from './topology/model.js';
 import { unsupportedMetric } from './envelope/r-value.js';
-import { VERSION } from './version.js';
 
 export { joinReports } from './gate/join.js';
 
@@ -128,7 +127,7 @@ interface LoadedPolicy {
 }
 
 /** Load a policy through an async reader: the loader is pure and synchronous, so files are fetched on demand and the load retried. */
-async function loadPolicyAt(entry: string, read: (path: string) => Promise<string | null>): Promise<LoadedPolicy> {
+export async function loadPolicyAt(entry: string, read: (path: string) => Promise<string | null>): Promise<LoadedPolicy> {
   const texts = new Map<string, string | null>();
   // A file that is not text is an error of the policy that names it (readChain says where).
   const unreadable = new Map<string, EncodingError>();
@@ -615,20 +614,6 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
     files.push(judged);
   }
 
-  const report: Report = {
-    version: REPORT_VERSION,
-    tool: { name: 'netbrace', version: VERSION },
-    verdict: verdictOf(files),
-    mode: request.mode,
-    policy: info,
-    ...(base !== undefined ? { base } : {}),
-    head,
-    seed,
-    ...(request.part ? { part: { index: request.part.index, total: request.part.total } } : {}),
-    scope,
-    counts: countStatuses(files),
-    files,
-    caution: CAUTION,
-  };
+  const report = assembleReport({ mode: request.mode, policy: info, ...(base !== undefined ? { base } : {}), head, seed, ...(request.part ? { part: request.part } : {}), scope }, files);
   return { report, exitCode: exitCodeOf(report) };
 }
