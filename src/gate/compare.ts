@@ -33,8 +33,9 @@
 // neighbourhood (spof.ts, rename.ts); hardened elements never count, but weak points hidden
 // by newly hardened ones are findings of their own. Each kind is a row of its own.
 
-import type { ElementKind } from '../envelope/types.js';
-import type { Finding, FileReport, FileStatus, FindingStatus, ReportElement, RequirementResult, Severity } from '../report/report.js';
+import type { ElementKind } from '../graph/element.js';
+import type { Finding, FileReport, FileStatus, FindingStatus, RequirementResult, Severity } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
 import type { FilePolicy, Requirement, WeakeningRule } from '../policy/types.js';
 import { withSequenceDetails } from './consequence.js';
 import {
