@@ -32,6 +32,7 @@ import type { FilePolicy, Policy } from './policy/types.js';
 import type { FileReport, Report } from './report/report.js';
 import type { DesignFormat } from './topology/model.js';
 import { addMapAndMend } from './map-mend-step.js';
+import { fnv1a32 } from './random.js';
 import { evaluateGraph, evaluationSpecs, type ChangedFile, type GateDeps, type GateRequest, type GateResult, type Revision } from './gate-request.js';
 
 export type { ChangedFile, GateDeps, GateRequest, GateResult, Revision };
@@ -41,20 +42,9 @@ import { unsupportedMetric } from './envelope/r-value.js';
 
 export { joinReports } from './gate/join.js';
 
-/** FNV-1a 32-bit hash of a path (Fowler, Noll, Vo; common practice for stable bucketing). */
-export function pathHash(path: string): number {
-  let h = 0x811c9dc5;
-  const bytes = new TextEncoder().encode(path);
-  for (const b of bytes) {
-    h ^= b;
-    h = Math.imul(h, 0x01000193) >>> 0;
-  }
-  return h >>> 0;
-}
-
 /** Whether a path belongs to part `index` (1-based) of `total`. */
 export function inPart(path: string, part: { index: number; total: number }): boolean {
-  return pathHash(path) % part.total === part.index - 1;
+  return fnv1a32(path) % part.total === part.index - 1;
 }
 
 /** Signals that the synchronous policy loader needs a file that has not been read yet. */

@@ -3,7 +3,8 @@
 import { describe, expect, it, vi } from 'vitest';
 import { PolicyError, UsageError } from '../src/errors.js';
 import { evaluateDesign } from '../src/envelope/evaluate.js';
-import { joinReports, runGate, inPart, pathHash, type GateRequest } from '../src/run-gate.js';
+import { joinReports, runGate, inPart, type GateRequest } from '../src/run-gate.js';
+import { fnv1a32 as pathHash } from '../src/random.js';
 import { REPORT_VERSION, serializeReport, type Report } from '../src/report/report.js';
 import { gateFixture, memoryDeps, pairRepo, type MemoryRepo } from './gate/memory-repo.js';
 

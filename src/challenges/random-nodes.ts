@@ -1,12 +1,12 @@
 // Random node failures: each realization removes the nodes that are not hardened in the order
-// of their keys hash(seed, realization, node id) (envelope/rng.ts), so versions of a design
+// of their keys hash(seed, realization, node id) (src/random.ts), so versions of a design
 // share the dice for the nodes they have in common. x = fraction of the original node count;
 // x·N nodes are removed at grid point x (a fixed count, "microcanonical"); when x·N is not whole,
 // R there is interpolated between ⌊x·N⌋ and ⌈x·N⌉ removals of the same realization (units.ts).
 
 import type { CompactGraph } from '../graph/compact.js';
 import type { ElementKind } from '../graph/element.js';
-import { createOrderWorkspace, hashIds, randomOrder, seedWord } from '../envelope/rng.js';
+import { createOrderWorkspace, hashIds, randomOrder, seedWord } from '../random.js';
 import type { BandChallenge, BandPlan, ResolvedParams } from './types.js';
 import { makeGrid } from './grid.js';
 import { countAt, countOnes, eligibleUnits, unitCount, unitKeys } from './units.js';

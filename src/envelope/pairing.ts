@@ -1,5 +1,5 @@
 // Paired comparison of two evaluations of a design (base and head) with common random numbers:
-// realization i of both used the same keys for the elements they share (rng.ts), so the
+// realization i of both used the same keys for the elements they share (src/random.ts), so the
 // difference of a statistic measures the change, not the dice. An unchanged design gives
 // exactly equal samples, hence delta = 0 and se = 0.
 // Standard errors:
@@ -15,7 +15,7 @@
 // themselves are taken on each side's full sample, so they equal the envelope's numbers.
 // Deterministic challenges (attacks, N−1/N−2) have se = 0.
 
-import { Xoshiro128, hashString } from './rng.js';
+import { Xoshiro128, hashString } from '../random.js';
 import { quantileSorted } from './quantiles.js';
 import { gridMean, sortedColumn } from './summary.js';
 import type { Envelope } from './types.js';

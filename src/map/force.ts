@@ -2,7 +2,7 @@
 // Bastian, PLoS ONE 9:e98679, 2014) as graphology-layout-forceatlas2 implements it, then
 // graphology-layout-noverlap's anti-overlap pass so no two sites sit on each other.
 // Deterministic: each site starts at a position hashed from (seed, its id) with our own
-// hash (src/envelope/rng.ts), so a site keeps its start between base and head; the iteration
+// hash (src/random.ts), so a site keeps its start between base and head; the iteration
 // counts are fixed (no convergence test, no clock), the library draws no random numbers, and
 // the result is rounded to 0.1 drawing units. Parallel links are one edge of weight = their
 // number.
@@ -10,7 +10,7 @@
 import { UndirectedGraph } from 'graphology';
 import forceAtlas2Module from 'graphology-layout-forceatlas2';
 import noverlapModule from 'graphology-layout-noverlap';
-import { hashString, seedWord } from '../envelope/rng.js';
+import { hashString, seedWord } from '../random.js';
 import { fitToBox, type Placed } from './project.js';
 
 // Both layout packages are CommonJS whose module.exports is the layout function; their type

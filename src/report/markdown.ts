@@ -11,7 +11,7 @@
 import type { Envelope } from '../envelope/types.js';
 import { escapeHtml, escapeMarkdown, markdownCode, markerValue, oneLine } from './escape.js';
 import { findingNumbers, repoPath } from './finding-text.js';
-import { stableHash } from './fingerprint.js';
+import { stableHash } from '../random.js';
 import {
   REQUIREMENT_STATUS_WORD,
   STATUS_WORD,

@@ -5,7 +5,7 @@
 // closing and reopening. Pure: report in, plain object out (the shell serialises it).
 
 import { oneLine } from './escape.js';
-import { stableHash } from './fingerprint.js';
+import { stableHash } from '../random.js';
 import { findingCost, findingNumbers, repoPath } from './finding-text.js';
 import { rankFiles, rankFindings } from './rank.js';
 import type { Finding, Report, Severity } from './report.js';

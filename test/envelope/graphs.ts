@@ -1,7 +1,7 @@
 // Seeded graph generators for the engine's tests (not a reference: the outside checks use
 // networkx's own graphs, committed under test/reference/).
 import { compileTopology, graphFromEdges, type CompactGraph } from '../../src/graph/compact.js';
-import { Xoshiro128 } from '../../src/envelope/rng.js';
+import { Xoshiro128 } from '../../src/random.js';
 
 /** G(n, L): L distinct links chosen uniformly. */
 export function randomGraph(n: number, links: number, seed: number): CompactGraph {

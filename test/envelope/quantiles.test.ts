@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { binomialPmf, normalQuantile, quantileEstimate, quantileRanks, quantileSorted } from '../../src/envelope/quantiles.js';
-import { Xoshiro128 } from '../../src/envelope/rng.js';
+import { Xoshiro128 } from '../../src/random.js';
 
 describe('type 7 quantiles (Hyndman & Fan 1996)', () => {
   it('match numpy.quantile (method "linear", NumPy 1.24.2) on 1..10', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { elementKey, hashIds, hashString, randomOrder, seedWord, Xoshiro128 } from '../../src/envelope/rng.js';
+import { elementKey, hashIds, hashString, randomOrder, seedWord, Xoshiro128 } from '../../src/random.js';
 
 describe('element keys and random orders', () => {
   it('are a pure function of (seed, realization, id)', () => {

@@ -7,7 +7,7 @@ import { createMask, type Mask } from '../../src/graph/mask.js';
 import { getMetric } from '../../src/metrics/registry.js';
 import { connectivityCurve } from '../../src/envelope/union-find.js';
 import { unionFindR } from '../../src/envelope/r-value.js';
-import { hashIds, randomOrder, seedWord } from '../../src/envelope/rng.js';
+import { hashIds, randomOrder, seedWord } from '../../src/random.js';
 import { removeUnit, unitCount } from '../../src/challenges/units.js';
 import type { ElementKind } from '../../src/graph/element.js';
 import { randomGraph } from './graphs.js';

@@ -9,7 +9,7 @@ import { graphFromEdges, type CompactGraph } from '../../src/graph/compact.js';
 import { findCutElements } from '../../src/graph/structure.js';
 import { withExtraLinks } from '../../src/mend/apply.js';
 import { eswaranTarjanBound } from '../../src/mend/bridge-tree.js';
-import { Xoshiro128 } from '../../src/envelope/rng.js';
+import { Xoshiro128 } from '../../src/random.js';
 
 const path = (n: number) => graphFromEdges(n, Array.from({ length: n - 1 }, (_, i) => [i, i + 1] as [number, number]));
 const star = (k: number) => graphFromEdges(k + 1, Array.from({ length: k }, (_, i) => [0, i + 1] as [number, number]));

@@ -11,7 +11,7 @@ import {
   oneLine,
   plainText,
 } from '../../src/report/escape.js';
-import { stableHash } from '../../src/report/fingerprint.js';
+import { stableHash } from '../../src/random.js';
 
 describe('stableHash (FNV-1a 64)', () => {
   it('matches the FNV reference test vectors', () => {

@@ -1,4 +1,9 @@
-// Seeded randomness for the envelope engine. Two pieces:
+// Every hash and every random number of netbrace, in one bottom-layer module (pure, no imports):
+// - mix32, murmur3's finaliser, and hash32 (two words → one), behind the seeded keys below and
+//   the start and probe vectors of the spectral kernels (metrics/kernels/hash-noise.ts);
+// - fnv1a32 and stableHash (FNV-1a over UTF-8 bytes, 32 and 64 bit): parts by path, report
+//   fingerprints and digests;
+// and, for the envelope engine:
 // - element keys: key = hash(seed, realization, stable element id). A random removal order is
 //   the eligible elements sorted by key, so two versions of a design (base and head) give the
 //   elements they share the same relative order in every realization (common random numbers,
@@ -8,9 +13,50 @@
 //   finaliser, for the few places that need a stream of numbers (bootstrap resampling).
 // All arithmetic is 32-bit integer (Math.imul, >>>), so results are identical on every engine.
 
-import { mix32 } from '../metrics/kernels/hash-noise.js';
+/** murmur3's 32-bit finaliser (Appleby, MurmurHash3, public domain): a bijective avalanche mix. */
+export function mix32(h: number): number {
+  h ^= h >>> 16;
+  h = Math.imul(h, 0x85ebca6b);
+  h ^= h >>> 13;
+  h = Math.imul(h, 0xc2b2ae35);
+  h ^= h >>> 16;
+  return h >>> 0;
+}
 
-export { mix32 };
+/** Two 32-bit words mixed into one (keys of the spectral kernels' pseudo-random vectors). */
+export function hash32(a: number, b: number): number {
+  return mix32(Math.imul(a ^ 0x9e3779b9, 0x85ebca6b) ^ Math.imul(b + 0x632be5ab, 0xc2b2ae35));
+}
+
+/** FNV-1a 32-bit hash of a text's UTF-8 bytes (Fowler, Noll, Vo; common practice for stable bucketing). */
+export function fnv1a32(text: string): number {
+  let h = 0x811c9dc5;
+  const bytes = new TextEncoder().encode(text);
+  for (const b of bytes) {
+    h ^= b;
+    h = Math.imul(h, 0x01000193) >>> 0;
+  }
+  return h >>> 0;
+}
+
+const FNV64_OFFSET = 0xcbf29ce484222325n;
+const FNV64_PRIME = 0x100000001b3n;
+const MASK64 = 0xffffffffffffffffn;
+
+/**
+ * A short stable hash for fingerprints and digests, 16 lowercase hex digits: FNV-1a, 64 bit,
+ * over the UTF-8 bytes (parameters from the published FNV reference: offset basis
+ * 0xcbf29ce484222325, prime 0x100000001b3). Not cryptographic: it only has to be the same on
+ * every machine and every run for the same text.
+ */
+export function stableHash(text: string): string {
+  let h = FNV64_OFFSET;
+  for (const byte of new TextEncoder().encode(text)) {
+    h ^= BigInt(byte);
+    h = (h * FNV64_PRIME) & MASK64;
+  }
+  return h.toString(16).padStart(16, '0');
+}
 
 /** A 32-bit hash of a string's UTF-16 code units (murmur3-style body, mix32 finaliser). */
 export function hashString(s: string, seed: number): number {
