@@ -4,6 +4,7 @@
 
 import { oneLine } from '../report/escape.js';
 import type { Env } from './action-deps.js';
+import { MODE, PART, SEED, THREADS, type SharedOption } from './shared-options.js';
 import { repositoryPath } from './workspace.js';
 
 export class InputError extends Error {
@@ -68,22 +69,21 @@ function optionalInt(env: Env, name: string, min: number, max: number): number |
   return Number(v);
 }
 
+/** An input the Action shares with the CLI (shared-options.ts), or undefined when not given. */
+function sharedInput<T>(env: Env, name: string, option: SharedOption<T>, example = ''): T | undefined {
+  const v = getInput(env, name);
+  if (v === '') return undefined;
+  const read = option.read(v);
+  if (read === undefined) throw new InputError(`input "${name}" is "${oneLine(v, 60)}"; use ${option.expected}${example}`);
+  return read;
+}
+
 const KEY_RE = /^[A-Za-z0-9._/-]{1,64}$/;
 const REF_RE = /^(?!-)(?!.*\.\.)[A-Za-z0-9._/@^~-]{1,200}$/;
 
 export function readInputs(env: Env): ActionInputs {
   const workingDirectory = relativePath(env, 'working-directory', '.');
-  const partText = getInput(env, 'part');
-  let part: ActionInputs['part'];
-  if (partText) {
-    const m = /^(\d+)\s*\/\s*(\d+)$/.exec(partText);
-    const index = m ? Number(m[1]) : NaN;
-    const total = m ? Number(m[2]) : NaN;
-    if (!m || index < 1 || total < 1 || index > total || total > 256) {
-      throw new InputError(`input "part" is "${oneLine(partText, 40)}"; write k/n with 1 \u2264 k \u2264 n \u2264 256, e.g. 2/4 (use the matrix: part: \${{ matrix.part }}/4)`);
-    }
-    part = { index, total };
-  }
+  const part = sharedInput(env, 'part', PART, ', e.g. 2/4 (use the matrix: part: ${{ matrix.part }}/4)');
   const defaultKey = workingDirectory === '.' || workingDirectory === '' ? 'default' : workingDirectory.replace(/[^A-Za-z0-9._/-]/g, '-').slice(0, 64);
   const commentKey = getInput(env, 'comment-key') || defaultKey;
   if (!KEY_RE.test(commentKey)) throw new InputError(`input "comment-key" may use letters, digits, ".", "_", "/" and "-" (at most 64)`);
@@ -97,7 +97,7 @@ export function readInputs(env: Env): ActionInputs {
     orgPolicy: repositoryInput(relativePath(env, 'org-policy', ''), 'org-policy'),
     policySource: oneOf(env, 'policy-source', ['base', 'head'] as const, 'base'),
     token: getInput(env, 'token'),
-    mode: oneOf(env, 'mode', ['block', 'inform'] as const, 'block'),
+    mode: sharedInput(env, 'mode', MODE) ?? 'block',
     comment: oneOf(env, 'comment', ['every-run', 'when-changed', 'when-failing', 'off'] as const, 'when-changed'),
     commentKey,
     report: relativePath(env, 'report', '.netbrace-out/netbrace-report.json'),
@@ -109,8 +109,8 @@ export function readInputs(env: Env): ActionInputs {
     joinParts,
     workingDirectory,
     title: oneLine(getInput(env, 'title'), 120),
-    seed: optionalInt(env, 'seed', 0, 2 ** 32 - 1),
-    threads: optionalInt(env, 'threads', 1, 256),
+    seed: sharedInput(env, 'seed', SEED),
+    threads: sharedInput(env, 'threads', THREADS),
     pullRequest: optionalInt(env, 'pull-request', 1, 2 ** 31 - 1),
   };
 }

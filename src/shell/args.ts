@@ -4,6 +4,7 @@
 
 import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { UsageError } from '../errors.js';
+import type { SharedOption } from './shared-options.js';
 
 type Options = NonNullable<ParseArgsConfig['options']>;
 
@@ -40,4 +41,12 @@ export function choice<T extends string>(name: string, value: string | undefined
   if (value === undefined) return fallback;
   if (!(allowed as readonly string[]).includes(value)) throw new UsageError(`${name} must be ${allowed.join(', ')}, not "${value}"`);
   return value as T;
+}
+
+/** An option the CLI shares with the Action (shared-options.ts), or undefined when absent. */
+export function sharedOption<T>(name: string, value: string | undefined, option: SharedOption<T>, hint?: string): T | undefined {
+  if (value === undefined) return undefined;
+  const read = option.read(value);
+  if (read === undefined) throw new UsageError(`${name} must be ${option.expected}, not "${value}"`, hint);
+  return read;
 }

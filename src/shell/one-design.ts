@@ -10,7 +10,8 @@ import { runGate, type GateDeps, type GateRequest } from '../run-gate.js';
 import { ensureCommit, gitDeps, mergeBase, repoRoot, revParse } from './git.js';
 import type { CommandIO } from './io.js';
 import { readInside } from './workspace.js';
-import { wholeNumber } from './args.js';
+import { sharedOption } from './args.js';
+import { SEED, THREADS } from './shared-options.js';
 
 export const ONE_DESIGN_OPTIONS = {
   base: { type: 'string' },
@@ -48,8 +49,8 @@ async function commit(root: string, ref: string): Promise<string> {
 
 /** Judge FILE through the gate, with the map and the mend search as asked. */
 export async function judgeOneDesign(file: string, v: OneDesignValues, io: CommandIO, views: Pick<GateRequest, 'map' | 'mend'>): Promise<OneDesign> {
-  const threads = wholeNumber('--threads', v.threads, 1, 256);
-  const seed = wholeNumber('--seed', v.seed, 0, 0xffffffff);
+  const threads = sharedOption('--threads', v.threads, THREADS);
+  const seed = sharedOption('--seed', v.seed, SEED);
   const request: GateRequest = { policySource: 'base', mode: 'block', eventKind: 'local', worktree: true, ...views };
   if (seed !== undefined) request.seed = seed;
   if (threads !== undefined) request.threads = threads;

@@ -127,7 +127,7 @@ describe('inputs', () => {
     const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
     const declared = Object.keys((parseYaml(readFileSync(path.join(root, 'action.yml'), 'utf8')) as { inputs: object }).inputs).sort();
     const source = readFileSync(path.join(root, 'src', 'shell', 'action-inputs.ts'), 'utf8');
-    const read = [...new Set([...source.matchAll(/(?:getInput|oneOf|relativePath|optionalInt)\(env, '([a-z-]+)'/g)].map((m) => m[1]))].sort();
+    const read = [...new Set([...source.matchAll(/(?:getInput|oneOf|relativePath|optionalInt|sharedInput)\(env, '([a-z-]+)'/g)].map((m) => m[1]))].sort();
     expect(read).toEqual(declared);
   });
 

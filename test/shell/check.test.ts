@@ -173,8 +173,8 @@ describe('netbrace check in a git repository', () => {
   it('the former option names and mode values are refused, naming what to use', async () => {
     const dir = newRepo({ [DESIGN]: gateFixture('unchanged/base.net.yaml') });
     for (const [args, message] of [
-      [['--mode', 'enforce'], '--mode must be block, inform, not "enforce"'],
-      [['--mode', 'advise'], '--mode must be block, inform, not "advise"'],
+      [['--mode', 'enforce'], '--mode must be one of: block, inform, not "enforce"'],
+      [['--mode', 'advise'], '--mode must be one of: block, inform, not "advise"'],
       [['--shard', '1/2'], "Unknown option '--shard'"],
     ] as const) {
       const r = await check(dir, 'check', ...args);

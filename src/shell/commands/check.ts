@@ -16,7 +16,8 @@ import { colorEnabled, terminalWidth } from '../color.js';
 import { ensureCommit, gitDeps, mergeBase, repoRoot, revParse } from '../git.js';
 import type { Command, CommandIO } from '../io.js';
 import { readInside } from '../workspace.js';
-import { choice, parseCommandArgs, wholeNumber } from '../args.js';
+import { choice, parseCommandArgs, sharedOption } from '../args.js';
+import { MODE, PART, SEED, THREADS } from '../shared-options.js';
 
 const HELP = `Usage: netbrace check [options] [PATH...]
 
@@ -93,14 +94,6 @@ function parse(args: string[]) {
   return parseCommandArgs('check', args, OPTIONS);
 }
 
-function partOf(value: string | undefined): GateRequest['part'] {
-  if (value === undefined) return undefined;
-  const m = /^([0-9]+)\/([0-9]+)$/.exec(value);
-  const [k, n] = m ? [Number(m[1]), Number(m[2])] : [0, 0];
-  if (!m || k < 1 || n < 1 || k > n) throw new UsageError(`--part must be K/N with 1 ≤ K ≤ N, not "${value}"`, 'e.g. --part 2/4');
-  return { index: k, total: n };
-}
-
 /** A path the user typed (relative to where they are) as a repository path. */
 function repoPath(root: string, cwd: string, p: string): string {
   const rel = path.relative(root, path.resolve(cwd, p));
@@ -128,16 +121,16 @@ function plainDeps(cwd: string): Pick<GateDeps, 'listChanged' | 'readAt' | 'list
 
 async function buildRequest(v: Values, positionals: string[], io: CommandIO): Promise<{ request: GateRequest; deps: GateDeps }> {
   if (v.head !== undefined && v.worktree) throw new UsageError('--head and --worktree exclude each other', 'judge a commit or the files on disk');
-  const threads = wholeNumber('--threads', v.threads, 1, 256);
+  const threads = sharedOption('--threads', v.threads, THREADS);
   const request: GateRequest = {
     policySource: choice('--policy-source', v['policy-source'], ['base', 'head'] as const, 'base'),
-    mode: choice('--mode', v.mode, ['block', 'inform'] as const, 'block'),
+    mode: sharedOption('--mode', v.mode, MODE) ?? 'block',
     eventKind: 'local',
   };
-  const seed = wholeNumber('--seed', v.seed, 0, 0xffffffff);
+  const seed = sharedOption('--seed', v.seed, SEED);
   if (seed !== undefined) request.seed = seed;
   if (threads !== undefined) request.threads = threads;
-  const part = partOf(v.part);
+  const part = sharedOption('--part', v.part, PART, 'e.g. --part 2/4');
   if (part) request.part = part;
   const evaluate: GateDeps['evaluate'] = threads !== undefined && threads > 1 ? (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) : undefined;
 
