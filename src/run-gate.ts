@@ -18,12 +18,10 @@
 
 import { EncodingError } from './decode.js';
 import { isNetbraceError, PolicyError, UsageError, type NetbraceError } from './errors.js';
-import { evaluateDesign, type DesignEvaluation, type EvaluationSpec } from './envelope/evaluate.js';
-import type { ChallengeParams } from './challenges/types.js';
 import { compileTopology, type CompactGraph } from './graph/compact.js';
-import { budgetSpecs, notePairedCuts, type PairedCut } from './gate/budget.js';
+import { budgetSpecs } from './gate/budget.js';
 import { matchDesigns, sameDesign } from './gate/rename.js';
-import { compareDesign, type CompareInput, type DesignSide } from './gate/compare.js';
+import { compareDesign, type CompareInput } from './gate/compare.js';
 import { assembleReport, exitCodeOf } from './gate/verdict.js';
 import { pairDesigns, type UnpairedDesign } from './gate/pair-designs.js';
 import { BUILTIN_POLICY_NAME, DEFAULT_DESIGN_GLOBS, DEFAULT_POLICY_PATH } from './policy/defaults.js';

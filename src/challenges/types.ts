@@ -45,7 +45,6 @@ export interface ChallengeParams {
   beam?: number;
   /** For n-1 / n-2: which kind of element. */
   element?: 'node' | 'link';
-  threads?: number;
   /** x values that must be grid points (policy thresholds), merged into the grid. */
   at?: number[];
 }

@@ -112,11 +112,6 @@ export interface Contingency {
   min: number;
 }
 
-/** A paired difference head − base with its standard error. */
-export interface PairedDelta {
-  delta: number;
-  se: number;
-}
 
 export interface StructureSummary {
   nodes: number;

@@ -46,18 +46,13 @@ import {
   elementChanges,
   formatDelta,
   formatR,
-  type ElementChanges,
 } from './describe.js';
-import { identityMatching, matchDesigns, type Matching } from './rename.js';
+import { identityMatching, matchDesigns } from './rename.js';
 import { judgeSpof } from './spof.js';
 
 /** Finding rules of new single points of failure (a failing one makes the file "weakened"). */
 const SPOF_RULES = new Set<Finding['rule']>(['new-bridge', 'new-cut-node', 'new-stranding-group', 'hardened-weak-point']);
 
-/** A standard error in findings: three decimals, or "unknown" when it cannot be estimated. */
-function formatSe(se: number): string {
-  return Number.isFinite(se) ? se.toFixed(3) : 'unknown';
-}
 import { type DesignSide, locate, measure, type Measured } from './measure.js';
 
 export type { DesignSide };

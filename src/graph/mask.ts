@@ -14,11 +14,6 @@ export function createMask(g: CompactGraph): Mask {
   return { node: new Uint8Array(g.n), link: new Uint8Array(g.m) };
 }
 
-export function clearMask(mask: Mask): void {
-  mask.node.fill(0);
-  mask.link.fill(0);
-}
-
 export function copyMask(from: Mask, to: Mask): void {
   to.node.set(from.node);
   to.link.set(from.link);
@@ -27,16 +22,4 @@ export function copyMask(from: Mask, to: Mask): void {
 /** A link carries traffic iff it and both of its ends are present. */
 export function isLinkAlive(g: CompactGraph, mask: Mask, e: number): boolean {
   return mask.link[e] === 0 && mask.node[g.linkSource[e]] === 0 && mask.node[g.linkTarget[e]] === 0;
-}
-
-export function countAliveNodes(mask: Mask): number {
-  let alive = 0;
-  for (let i = 0; i < mask.node.length; i++) alive += mask.node[i] ^ 1;
-  return alive;
-}
-
-export function countAliveLinks(g: CompactGraph, mask: Mask): number {
-  let alive = 0;
-  for (let e = 0; e < g.m; e++) if (isLinkAlive(g, mask, e)) alive++;
-  return alive;
 }

@@ -103,8 +103,6 @@ export type Requirement =
   | ContingencyRequirement
   | SpofRequirement;
 
-export type RequirementKind = Requirement['kind'];
-
 export interface WeakeningRule {
   /** Largest drop tolerated, in units of R (absolute). */
   allowedDrop?: number;

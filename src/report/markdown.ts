@@ -39,7 +39,7 @@ import {
 } from './labels.js';
 import { changeMapMarkdown } from './mermaid-map.js';
 import { rankFiles, rankFindings, worstSeverity } from './rank.js';
-import type { Consequence, FileReport, FileStatus, Finding, Report, ReportElement, RequirementResult, Severity } from './report.js';
+import type { Consequence, FileReport, Finding, Report, ReportElement, RequirementResult, Severity } from './report.js';
 
 /** GitHub refuses a step summary over 1 MiB; stay well below (bytes of UTF-8). */
 export const SUMMARY_BUDGET_BYTES = 900 * 1024;

@@ -2,10 +2,9 @@
 // summary, PR comment, annotations, SARIF, HTML). Versioned; `join` must keep reading
 // reports of older versions. Keep it deterministic: no timings, no absolute paths, no dates.
 
-import type { ChallengeName } from '../challenges/types.js';
 import type { Consequence } from '../graph/consequence.js';
 import type { ReportElement } from '../graph/element.js';
-import type { AttackCurve, Contingency, Envelope, Evaluation, RValueSpec, StructureSummary } from '../envelope/types.js';
+import type { Evaluation, StructureSummary } from '../envelope/types.js';
 import type { DesignMap, OmittedMap } from '../map/types.js';
 import type { MendReport } from '../mend/types.js';
 

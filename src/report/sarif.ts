@@ -129,11 +129,6 @@ const RULES: Record<RuleId, RuleText> = {
 const LEVEL: Record<Severity, 'error' | 'warning' | 'note'> = { fail: 'error', warn: 'warning', notice: 'note' };
 const RULE_IDS = Object.keys(RULES) as RuleId[];
 
-/** The published text of every rule: used by the SARIF view and the README's rule table. */
-export function ruleText(id: RuleId): RuleText {
-  return RULES[id];
-}
-
 /**
  * The stable fingerprint of a finding: rule, repository-relative path, requirement and
  * element ids. Not the line: editing lines above an unchanged finding keeps the same alert.

@@ -29,7 +29,7 @@ import {
   weakestSequences,
   type GroupedFinding,
 } from './labels.js';
-import type { Evaluation, FileReport, Finding, Report, RequirementResult } from './report.js';
+import type { Evaluation, FileReport, Report, RequirementResult } from './report.js';
 import { oneLine } from './escape.js';
 
 export interface TerminalOptions {

@@ -225,12 +225,6 @@ export async function pullRequestHead(client: Client, ref: IssueRef): Promise<st
   return res.data.head.sha;
 }
 
-/** HTTP status of an Octokit error, if it has one. */
-export function statusOf(error: unknown): number | undefined {
-  const s = (error as { status?: unknown } | null)?.status;
-  return typeof s === 'number' ? s : undefined;
-}
-
 /**
  * Whether an API error means "this token may not write here": a pull request from a fork
  * (GitHub answers 403 "Resource not accessible by integration"), or a token without

@@ -19,11 +19,6 @@ interface Row {
   end: SourcePos;
 }
 
-/** Splits RFC 4180 text into rows of located cells; blank lines are skipped. */
-export function readCsv(text: string, b: TopologyBuilder): Row[] {
-  return [...csvRows(text, b)];
-}
-
 /**
  * The rows one at a time, so that a file with millions of rows is never held as rows: the
  * builder's element limit stops the read where it is crossed.

@@ -67,7 +67,7 @@ describe('link connectivity counts parallel links', () => {
 describe('node and link connectivity against brute force', () => {
   /** Smallest set of nodes (or links) whose removal disconnects the survivors, by enumeration. */
   function brute(n: number, edges: [number, number][], nodes: boolean): number {
-    const connected = (deadNode: number, deadLinks: Set<number>, deadNodes: Set<number>) => {
+    const connected = (_deadNode: number, deadLinks: Set<number>, deadNodes: Set<number>) => {
       const alive = [...Array(n).keys()].filter((v) => !deadNodes.has(v));
       if (alive.length < 2) return true;
       const seen = new Set([alive[0]]);
