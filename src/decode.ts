@@ -65,7 +65,6 @@ export function firstInvalidUtf8(b: Uint8Array, from = 0): number {
  * Latin-1 but letters and quotes (€, “ ”, Œ) in Windows-1252.
  */
 function guessEncoding(b: Uint8Array): string {
-  let stray = 0;
   let c1 = false;
   let utf8 = false;
   for (let i = 0; i < b.length; ) {
@@ -79,7 +78,6 @@ function guessEncoding(b: Uint8Array): string {
       i += len;
       continue;
     }
-    stray++;
     if (b[i] <= 0x9f) c1 = true;
     i++;
   }

@@ -117,7 +117,13 @@ export function solveCover(p: CoverProblem): CoverResult {
         const dist = new Int32Array(f.pieces).fill(-1);
         const queue = [leaf];
         dist[leaf] = 0;
-        for (let h = 0; h < queue.length; h++) for (const w of adj[queue[h]]) if (dist[w] === -1) (dist[w] = dist[queue[h]] + 1), queue.push(w);
+        for (let h = 0; h < queue.length; h++) {
+          for (const w of adj[queue[h]]) {
+            if (dist[w] !== -1) continue;
+            dist[w] = dist[queue[h]] + 1;
+            queue.push(w);
+          }
+        }
         return dist;
       };
       let bestLeaf = -1;
@@ -184,7 +190,7 @@ export function solveCover(p: CoverProblem): CoverResult {
     return Math.max(...[...found.values()].map((x) => x.price));
   };
 
-  let depthComplete = true;
+  let depthComplete: boolean;
   let everIncomplete = false;
   const seen = new Set<string>();
   const dfs = (set: number[], r: Residual, limit: number) => {

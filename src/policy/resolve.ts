@@ -365,7 +365,7 @@ function mergeChain(chain: PolicyFile[]): Policy {
   const challenges = new Map<string, ChallengeDef>();
   for (const c of root.challenges ?? base.challenges ?? []) challenges.set(c.name, c);
 
-  let rValue = { spec: (root.rValue ?? base.rValue)!.spec, where: (root.rValue ?? base.rValue)!.where };
+  const rValue = { spec: (root.rValue ?? base.rValue)!.spec, where: (root.rValue ?? base.rValue)!.where };
   checkMetrics(rValue.spec, rValue.where);
   let designs = root.designs ?? base.designs ?? [];
   const exclude = [...(root.exclude?.globs ?? [])];

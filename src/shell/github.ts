@@ -64,7 +64,7 @@ function timedFetch(inner: FetchLike, timeoutMs: number): FetchLike {
     try {
       return await inner(url, { ...init, signal: timer });
     } catch (error) {
-      if (timer.aborted) throw new TypeError(`no answer within ${timeoutMs} ms`);
+      if (timer.aborted) throw new TypeError(`no answer within ${timeoutMs} ms`, { cause: error });
       throw error;
     }
   };

@@ -77,8 +77,9 @@ class Locator {
 
   /** The source text of the plain scalar at `path` (a number as written), if there is one. */
   source(path: Path): string | undefined {
-    let { node, exact } = this.node(path);
-    if (!exact) return undefined;
+    const found = this.node(path);
+    let node = found.node;
+    if (!found.exact) return undefined;
     if (isAlias(node)) node = node.resolve(this.doc) as YamlNode | undefined;
     return isScalar(node) && typeof node.source === 'string' ? node.source : undefined;
   }

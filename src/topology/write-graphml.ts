@@ -10,7 +10,6 @@ import { attributeColumns, derivedIds, designLosses, Losses, numberText, type Va
 
 const XML_ESCAPES: Readonly<Record<string, string>> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' };
 /** Characters XML 1.0 cannot hold at all, even escaped (§2.2). */
-// eslint-disable-next-line no-control-regex
 const NOT_XML = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]/;
 
 /** Text for element content or an attribute value (where XML turns raw line breaks and tabs into spaces). */

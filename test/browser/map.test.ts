@@ -41,7 +41,10 @@ async function demoReport(): Promise<Report> {
   let block: string[] = [];
   for (const line of [...patch.split('\n'), '']) {
     if (line.startsWith('-') && !line.startsWith('---')) block.push(line.slice(1));
-    else if (block.length) (head = head.replace(`${block.join('\n')}\n`, '')), (block = []);
+    else if (block.length) {
+      head = head.replace(`${block.join('\n')}\n`, '');
+      block = [];
+    }
   }
   const policy = readFileSync(path.join(demo, 'policy.yaml'), 'utf8');
   const repo = { base: { '.netbrace.yaml': policy, [DESIGN]: base }, head: { '.netbrace.yaml': policy, [DESIGN]: head } };

@@ -62,7 +62,7 @@ export function attempt<T>(fn: () => T): Outcome<T> {
   } catch (e) {
     if (isNetbraceError(e)) return { ok: false, error: e, ms: performance.now() - t0 };
     const err = e instanceof Error ? e : new Error(String(e));
-    throw new Error(`not a NetbraceError: ${err.name}: ${err.message}\n${err.stack ?? ''}`);
+    throw new Error(`not a NetbraceError: ${err.name}: ${err.message}\n${err.stack ?? ''}`, { cause: e });
   }
 }
 

@@ -25,7 +25,10 @@ function change1(): string {
   let cur: string[] | undefined;
   for (const line of patch.split('\n')) {
     if (line.startsWith('-') && !line.startsWith('---')) (cur ??= []).push(line.slice(1));
-    else if (cur) blocks.push(`${cur.join('\n')}\n`), (cur = undefined);
+    else if (cur) {
+      blocks.push(`${cur.join('\n')}\n`);
+      cur = undefined;
+    }
   }
   let out = DEMO;
   for (const b of blocks) out = out.replace(b, '');

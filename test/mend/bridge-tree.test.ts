@@ -39,7 +39,11 @@ function bruteForce(g: CompactGraph, max = 4): number {
       const v = stack.pop()!;
       for (let p = h.offsets[v]; p < h.offsets[v + 1]; p++) {
         const w = h.neighbors[p];
-        if (!seen[w]) (seen[w] = 1), count++, stack.push(w);
+        if (!seen[w]) {
+          seen[w] = 1;
+          count++;
+          stack.push(w);
+        }
       }
     }
     return count === h.n;

@@ -50,7 +50,7 @@ describe('the Mermaid neighbourhood of the change', () => {
     expect(block.match(/===\|new bridge\|/g)).toHaveLength(5);
     expect(block.match(/-\.-\|removed\|/g)).toHaveLength(1);
     expect(block.match(/\{\{"/g)).toHaveLength(4); // four new cut sites as hexagons
-    expect(block).toMatch(/\n  class n\d+,n\d+,n\d+,n\d+ weak\n/); // the four new cut sites
+    expect(block).toMatch(/\n {2}class n\d+,n\d+,n\d+,n\d+ weak\n/); // the four new cut sites
     const nodes = block.split('\n').filter((l) => /^ {2}n\d+[({[]/.test(l)).length;
     const links = block.split('\n').filter((l) => /^ {2}n\d+ (---|-\.-|===)/.test(l)).length;
     expect(nodes + links).toBeLessThanOrEqual(MAX_ELEMENTS);
