@@ -182,7 +182,7 @@ describe('views title and word findings by what the judging found', () => {
     const report = run.report!;
     const about = (challenge: string) =>
       planAnnotations(report).annotations.find((a) => a.rule === 'regression' && a.message.startsWith(`area of "${challenge}"`));
-    expect(about('link-failures')?.title).toBe('netbrace: robustness weakened');
+    expect(about('link-failures')?.title).toBe('netbrace: requirement weakened');
     expect(about('site-failures')?.title).toBe('netbrace: robustness dropped within the allowance');
     expect(about('site-failures')?.level).toBe('notice');
     // The summary words each requirement from the report's numbers: the drop within the
