@@ -239,7 +239,7 @@ describe('pull requests', () => {
     const ws = checkout(scenario.fail, { shallow: false });
     const r1 = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs());
     expect(r1.code, r1.stdout + r1.stderr).toBe(1);
-    expect(failedMessages(r1)).toEqual([expect.stringMatching(/^netbrace: the gate failed: 1 design with failures/)]);
+    expect(failedMessages(r1)).toEqual([expect.stringMatching(/^netbrace blocks this merge: 1 design (weakened|below a floor)/)]);
     // Annotations: errors on the design file, at lines of the ring's elements.
     const errors = commands(r1.stdout, 'error').filter((c) => c.props.file);
     expect(errors.length).toBeGreaterThan(0);
