@@ -253,7 +253,7 @@ describe('pull requests', () => {
       expect(line).toBeGreaterThanOrEqual(1);
       expect(lines[line - 1]).toMatch(/^ {2}- (id|between): /);
     }
-    expect(errors.some((e) => /single point of failure/.test(e.props.title))).toBe(true);
+    expect(errors.some((e) => /^netbrace: new (bridge|cut node)$/.test(e.props.title))).toBe(true);
     // Outputs.
     expect(r1.outputs).toMatchObject({ verdict: 'fail', designs: '1', report: '.netbrace-out/netbrace-report.json', sarif: '.netbrace-out/netbrace.sarif', html: '.netbrace-out/netbrace-report.html' });
     expect(Number(r1.outputs['count-weakened']) + Number(r1.outputs['count-below-floor'])).toBe(1);
@@ -427,7 +427,7 @@ describe('a pull request that edits the workflow running netbrace', () => {
     });
     expect(r.code, r.stdout + r.stderr).toBe(1);
     expect(r.outputs.verdict).toBe('fail');
-    expect(failedMessages(r)[0]).toContain(`the change weakens netbrace's own settings in ${WORKFLOW}`);
+    expect(failedMessages(r)[0]).toContain(`the change weakens netbrace\u2019s own settings in ${WORKFLOW}`);
     const onWorkflow = commands(r.stdout, 'error').filter((c) => c.props.file === WORKFLOW);
     expect(onWorkflow.map((c) => c.message).join('\n')).toMatch(/mode block → inform/);
     expect(onWorkflow.map((c) => c.message).join('\n')).toMatch(/policy-source base → head/);
