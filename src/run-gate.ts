@@ -24,6 +24,7 @@ import { matchDesigns, sameDesign } from './gate/rename.js';
 import { compareDesign, type CompareInput } from './gate/compare.js';
 import { assembleReport, exitCodeOf } from './gate/verdict.js';
 import { pairDesigns, type UnpairedDesign } from './gate/pair-designs.js';
+import { policyChanges } from './policy/compare.js';
 import { BUILTIN_POLICY_NAME, DEFAULT_DESIGN_GLOBS, DEFAULT_POLICY_PATH } from './policy/defaults.js';
 import { builtinPolicy, designFormat, designNeedsHeader, globsMatch, isDesignPath, isDesignText, loadPolicy, policyForFile } from './policy/resolve.js';
 import type { FilePolicy, Policy } from './policy/types.js';
@@ -170,15 +171,20 @@ async function choosePolicy(request: GateRequest, deps: GateDeps, base: Revision
     for (const [p, text] of texts) if (!isOrgFile(request, p) && (await readSide(deps, other, p)) !== text) changed = true;
     if (changed) {
       info.changed = true;
+      // The other side's policy, to say what the head's would loosen or tighten (policy/compare.ts).
+      let otherPolicy: Policy | undefined;
+      let otherError: string | undefined;
+      try {
+        const loaded = await loadPolicyAt(path, readAtRev(other));
+        requireOrgPolicy(request, path, loaded.policy);
+        otherPolicy = loaded.policy;
+      } catch (e) {
+        if (!isNetbraceError(e)) throw e;
+        otherError = e.format().split('\n')[0];
+      }
+      if (otherPolicy) info.changes = trusted === base ? policyChanges(policy, otherPolicy) : policyChanges(otherPolicy, policy);
       if (trusted === base) {
-        let verdict = 'it applies once merged';
-        try {
-          const proposed = await loadPolicyAt(path, readAtRev(other));
-          requireOrgPolicy(request, path, proposed.policy);
-        } catch (e) {
-          if (!isNetbraceError(e)) throw e;
-          verdict = `the proposed version has an error: ${e.format().split('\n')[0]}`;
-        }
+        const verdict = otherError === undefined ? 'it applies once merged' : `the proposed version has an error: ${otherError}`;
         info.note = `this change modifies the policy; the version at the base judges it (${verdict})`;
       } else {
         info.note = 'this change modifies the policy, and the policy of the head applies (policy-source: head)';

@@ -34,9 +34,9 @@
 // by newly hardened ones are findings of their own. Each kind is a row of its own.
 
 import type { ElementKind } from '../graph/element.js';
-import type { Finding, FileReport, FileStatus, FindingStatus, RequirementResult, Severity } from '../report/report.js';
+import type { Finding, FileReport, FileStatus, FindingStatus, RequirementResult, RequirementSubject, Severity } from '../report/report.js';
 import type { ReportElement } from '../graph/element.js';
-import type { FilePolicy, Requirement, WeakeningRule } from '../policy/types.js';
+import type { ChallengeDef, FilePolicy, Requirement, WeakeningRule } from '../policy/types.js';
 import { withSequenceDetails } from './consequence.js';
 import {
   changeDecimals,
@@ -129,6 +129,29 @@ function numbers(m: Measured): Pick<Finding, 'base' | 'head' | 'delta' | 'se'> {
   return { base: m.base, head: m.head, delta: m.delta, se: m.se };
 }
 
+/** What a requirement measures, as data for the views (RequirementResult.subject). */
+function subjectOf(r: Requirement, challenges: readonly ChallengeDef[], higherIsBetter: boolean): RequirementSubject {
+  const subject: RequirementSubject = { kind: r.kind, higherIsBetter };
+  if (r.kind === 'n-1') {
+    subject.remove = r.element === 'node' ? 'nodes' : 'links';
+    return subject;
+  }
+  if (!('challenge' in r)) return subject;
+  subject.challenge = r.challenge;
+  const c = challenges.find((x) => x.name === r.challenge);
+  if (c) {
+    subject.remove = c.remove;
+    subject.order = c.random ? 'random' : c.order;
+    if (c.adaptive) subject.adaptive = true;
+  }
+  if (r.kind === 'r-threshold') {
+    if (r.at !== undefined) subject.at = r.at;
+    const st = r.statistic;
+    subject.statistic = st.kind === 'quantile' ? { kind: 'quantile', q: st.q } : st.kind === 'worst-case' ? { kind: 'worst-case', removals: st.removals } : { kind: st.kind };
+  }
+  return subject;
+}
+
 function floorOf(r: Requirement): number | null {
   if (r.kind === 'spread-ceiling') return r.max;
   if (r.kind === 'no-new-spof') return null;
@@ -191,7 +214,8 @@ export function judgeFloor(j: Judging): { status: RowStatus; findings: Finding[]
   if (threshold !== null && !meets(headValue, threshold)) {
     status = 'short';
     const relation = m.higherIsBetter ? 'is below' : 'is above';
-    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short' }));
+    const d = decidingDecimals(headValue, threshold);
+    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short', ...(d > 3 ? { decimals: d } : {}) }));
   } else if (threshold !== null && m.incomplete !== undefined) {
     // Met by incomplete work: not proven, so not "holds".
     status = 'unsettled';
@@ -293,7 +317,7 @@ export function judgeWeakening(j: Judging, policyRule: WeakeningRule, floorStatu
       const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (\u0394 ${formatDelta(m.delta, m.se, d)})`;
       const allowed = formatR(allowance, d);
       const k = policyRule.errorMultiple;
-      const data = { ...extra, allowance, status: outcome };
+      const data = { ...extra, allowance, status: outcome, ...(d > 3 ? { decimals: d } : {}) };
       if (outcome === 'weakened') {
         if (status !== 'short') status = 'weakened';
         const beyond = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
@@ -339,6 +363,7 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     se: m.se,
     threshold,
     status: 'holds',
+    subject: subjectOf(r, input.policy.challenges, m.higherIsBetter),
   };
   const findings: Finding[] = [];
   const elements = elementsOf(m.elements, head, input.base);
@@ -385,6 +410,9 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
   const weakening = judgeWeakening(j, input.policy.weakening, floor.status);
   row.status = weakening.status;
   findings.push(...floor.findings, ...weakening.findings);
+  // The digits the judging was stated at, for views that word the row themselves.
+  const decimals = Math.max(3, ...findings.map((f) => f.decimals ?? 3));
+  if (decimals > 3) row.decimals = decimals;
   // Every requirement judged on reduced work says so, once.
   const reducedWork = m.reduced ?? m.incomplete;
   if (reducedWork !== undefined && !findings.some((f) => f.message.includes(reducedWork))) {

@@ -4,6 +4,14 @@
 import type { ChallengeName } from '../challenges/types.js';
 import type { ElementKind } from '../graph/element.js';
 import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, Report, RequirementResult } from './report.js';
+import { FILE_STATUS_WORD } from './vocabulary.js';
+import { formatDelta, formatValue } from './format.js';
+import { plainSentence, policyChangeSentence } from './story.js';
+
+// The shared words and numbers live in vocabulary.ts and format.ts; re-exported for the views.
+export { formatDelta, formatError, formatValue, shortRevision } from './format.js';
+export { REQUIREMENT_STATUS_WORD, fileFails, fileWarns } from './vocabulary.js';
+export const STATUS_WORD = FILE_STATUS_WORD;
 
 
 const CHALLENGE_LABEL: Record<ChallengeName, string> = {
@@ -43,12 +51,6 @@ export function xAxisLabel(kind: ElementKind, xUnit: 'fraction' | 'km'): string 
   return xUnit === 'km' ? 'outage radius (km)' : `fraction of ${kindPlural(kind)} removed`;
 }
 
-/** A value of R or a metric: three decimals, a real minus sign, "–" when absent. */
-export function formatValue(v: number | null | undefined): string {
-  if (v === null || v === undefined || Number.isNaN(v)) return '\u2013';
-  return minus(v.toFixed(3));
-}
-
 /** Whether a requirement counts things (bridges, cut nodes): shown as whole numbers. */
 export function isCountRequirement(r: RequirementResult): boolean {
   const vals = [r.base, r.head, r.delta, r.threshold].filter((v): v is number => v !== null);
@@ -66,46 +68,9 @@ export function formatRequirementDelta(r: RequirementResult): string {
   return r.delta > 0 ? `+${r.delta}` : r.delta < 0 ? `\u2212${-r.delta}` : '0';
 }
 
-/** A signed delta: "+0.012", "\u22120.040", "0.000" for an exact zero (never "\u22120.000"). */
-export function formatDelta(v: number | null | undefined): string {
-  if (v === null || v === undefined || Number.isNaN(v)) return '\u2013';
-  const text = Math.abs(v).toFixed(3);
-  if (Number(text) === 0) return '0.000';
-  return (v > 0 ? '+' : '\u2212') + text;
-}
-
-/** "\u00b1 0.004" for a Monte Carlo error; empty for deterministic values (se 0) and absent ones. */
-export function formatError(se: number | null | undefined): string {
-  if (se === null || se === undefined || Number.isNaN(se) || se === 0) return '';
-  return `\u00b1 ${se < 0.0005 ? '<0.001' : se.toFixed(3)}`;
-}
-
 export function formatFraction(x: number): string {
   return `${Math.round(x * 1000) / 10} %`;
 }
-
-function minus(text: string): string {
-  return text.startsWith('-') ? `\u2212${text.slice(1)}` : text;
-}
-
-export const STATUS_WORD: Record<FileStatus, string> = {
-  holds: 'holds',
-  weakened: 'weakened',
-  'below-floor': 'below its floor',
-  new: 'new design',
-  removed: 'removed',
-  renamed: 'renamed',
-  unreadable: 'could not be read',
-};
-
-export const REQUIREMENT_STATUS_WORD: Record<RequirementResult['status'], string> = {
-  holds: 'holds',
-  short: 'short of its floor',
-  weakened: 'weakened',
-  'inside-error': 'inside the error',
-  unsettled: 'unsettled',
-  'not-applicable': 'not applicable',
-};
 
 /** A file's status in words; an error whose R cannot be computed is not "could not be read". */
 export function fileStatusWord(f: FileReport): string {
@@ -134,16 +99,6 @@ export function describeNotApplicable(ev: { notApplicable?: { challenge: Challen
   const list = ev?.notApplicable ?? [];
   if (!list.length) return undefined;
   return list.map((x) => `${challengeLabel(x.challenge)} (${x.reason})`).join('; ');
-}
-
-/** Whether a file, on its own, fails the gate: any fail-severity finding, or an error. */
-export function fileFails(f: FileReport): boolean {
-  return f.status === 'unreadable' || f.findings.some((x) => x.severity === 'fail');
-}
-
-/** Whether a file has warnings (and no failure). */
-export function fileWarns(f: FileReport): boolean {
-  return !fileFails(f) && f.findings.some((x) => x.severity === 'warn');
 }
 
 /**
@@ -410,12 +365,6 @@ export function groupFindings(findings: readonly Finding[]): GroupedFinding[] {
   return out;
 }
 
-/** A revision for display: a full commit id shortened to 12 hex digits, anything else as given. */
-export function shortRevision(rev: string | undefined): string {
-  if (rev === undefined) return '\u2013';
-  return /^[0-9a-f]{40}([0-9a-f]{24})?$/.test(rev) ? rev.slice(0, 12) : rev;
-}
-
 /**
  * The change edits the gate's own configuration: one sentence per setting of the workflow that
  * runs netbrace, and one for the policy files; shown at the top of every view.
@@ -429,8 +378,12 @@ export function configurationNotes(r: Report): { text: string; weakens: boolean;
       out.push({ text: `this change edits the workflow that runs netbrace (${c.workflow}, line ${x.line}): ${x.message}${tail}`, weakens: x.weakens, file: c.workflow, line: x.line });
     }
   }
-  if (r.policy.changed && r.policy.path) {
-    out.push({ text: `this change edits the policy (${(r.policy.files ?? [r.policy.path]).join(', ')}); ${r.policy.note ?? 'the base\u2019s version judges it'}`, weakens: false, file: r.policy.path, line: 1 });
+  const policy = policyChangeSentence(r);
+  if (policy && r.policy.path) {
+    // One sentence (story.ts), on the first line the head's policy changes, else its first line.
+    const path = r.policy.path;
+    const first = r.policy.changes?.find((c) => c.line > 0 && c.file === path);
+    out.push({ text: plainSentence(policy).replace(/\.$/, ''), weakens: false, file: path, line: first?.line ?? 1 });
   }
   return out;
 }

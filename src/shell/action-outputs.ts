@@ -107,6 +107,18 @@ export function runUrl(env: Env): string | undefined {
   return `${server}/${env.GITHUB_REPOSITORY}/actions/runs/${env.GITHUB_RUN_ID}`;
 }
 
+/**
+ * netbrace's own README at the revision the workflow runs (GITHUB_ACTION_REPOSITORY and
+ * GITHUB_ACTION_REF, set for a `uses:` step), which the views' definitions link to.
+ */
+export function readmeUrl(env: Env): string | undefined {
+  const server = env.GITHUB_SERVER_URL || 'https://github.com';
+  const repo = env.GITHUB_ACTION_REPOSITORY ?? '';
+  const ref = env.GITHUB_ACTION_REF ?? '';
+  if (!/^[A-Za-z0-9_.-]+\/[A-Za-z0-9_.-]+$/.test(repo) || !/^[A-Za-z0-9_.\/-]+$/.test(ref) || ref.includes('..')) return undefined;
+  return `${server}/${repo}/blob/${ref}/README.md`;
+}
+
 /** @actions/core behind the ActionOutput seam; the summary goes to GITHUB_STEP_SUMMARY. */
 export function coreOutput(env: Env): ActionOutput {
   return {

@@ -12,12 +12,13 @@ import { realpathSync, statSync } from 'node:fs';
 import { formatDiagnostic, isNetbraceError } from '../errors.js';
 import { logText } from '../report/escape.js';
 import { renderComment, renderSummary } from '../report/markdown.js';
+import { plainSentence, verdictStory } from '../report/story.js';
 import type { Report } from '../report/report.js';
 import type { ActionDeps, Env, GateRequestLike, RunOutcome } from './action-deps.js';
 import { postComment, trustedPullRequest } from './action-comment.js';
 import { FETCH_DEPTH_HINT, SHA_RE, designsAmong, ensureCommit, prFilesFallback, readTarget } from './action-event.js';
 import { InputError, readInputs } from './action-inputs.js';
-import { annotate, changedLines, emptyReport, runUrl, setOutputs, writeArtifacts } from './action-outputs.js';
+import { annotate, changedLines, emptyReport, readmeUrl, runUrl, setOutputs, writeArtifacts } from './action-outputs.js';
 import { joinPartReports } from './action-parts.js';
 import { applyBaseSettings, attachSettings, ownSettingChanges, type OwnSettings } from './action-settings.js';
 import { WorkspacePathError, resolveInWorkspace } from './workspace.js';
@@ -129,7 +130,8 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     // The comment, then the summary (which mentions what happened to the comment).
     let comment: RunOutcome['comment'] = 'not-applicable';
     const url = runUrl(env);
-    const viewOptions = { ...(url ? { runUrl: url } : {}), artifacts: files.written, ...(inputs.title ? { title: inputs.title } : {}) };
+    const readme = readmeUrl(env);
+    const viewOptions = { ...(url ? { runUrl: url } : {}), ...(readme ? { readmeUrl: readme } : {}), artifacts: files.written, ...(inputs.title ? { title: inputs.title } : {}) };
     if (!partJob && !target.pr && inputs.pullRequest) {
       target.pr = await trustedPullRequest(deps, env, inputs, target, inputs.pullRequest);
     }
@@ -146,16 +148,12 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       deps.out.info(`netbrace: part ${inputs.part!.index}/${inputs.part!.total} ${verdict === 'fail' ? 'has failures' : 'passes'}; the join job decides`);
       return { exitCode: 0, verdict, comment };
     }
+    // The verdict in the same sentence the summary and the comment open with (story.ts).
+    const sentence = plainSentence(verdictStory(report).sentence);
     if (verdict === 'fail' && inputs.mode === 'block') {
-      const n = report.files.filter((f) => f.status === 'unreadable' || f.findings.some((x) => x.severity === 'fail')).length;
-      const own = report.configuration?.changes.filter((c) => c.weakens).length ?? 0;
-      const what = [
-        ...(n > 0 ? [`${n} design${n === 1 ? '' : 's'} with failures`] : []),
-        ...(own > 0 ? [`the change weakens netbrace's own settings in ${report.configuration!.workflow}`] : []),
-      ].join('; ');
-      return { ...fail(`netbrace: the gate failed: ${what} (see the annotations and the job summary)`, 1), verdict, comment };
+      return { ...fail(`${sentence} (see the annotations and the job summary)`, 1), verdict, comment };
     }
-    if (verdict === 'fail') deps.out.warning('netbrace: the gate would fail; inform mode reports without failing the step');
+    if (verdict === 'fail') deps.out.warning(sentence);
     return { exitCode: 0, verdict, comment };
   } catch (error) {
     if (isNetbraceError(error)) {

@@ -267,10 +267,10 @@ describe('verdict and comment', () => {
     const { d, rec } = deps(sampleReport());
     const out = await run(env(), d);
     expect(out).toMatchObject({ exitCode: 1, verdict: 'fail' });
-    expect(rec.failed).toEqual(['netbrace: the gate failed: 2 designs with failures (see the annotations and the job summary)']);
+    expect(rec.failed).toEqual(['netbrace blocks this merge: 1 design weakened, 1 design could not be read (see the annotations and the job summary)']);
     expect(rec.outputs).toMatchObject({ verdict: 'fail', 'count-weakened': '1', 'count-unreadable': '1', designs: '5', report: '.netbrace-out/netbrace-report.json', sarif: '.netbrace-out/netbrace.sarif' });
     expect(rec.annotations[0]).toMatchObject({ level: 'error', file: 'backbone/core.net.yaml', startLine: 42 });
-    expect(rec.summary).toContain('the gate failed');
+    expect(rec.summary).toContain('netbrace blocks this merge: 1 design weakened, 1 design could not be read');
     const written = JSON.parse(readFileSync(path.join(dir, 'ws', '.netbrace-out', 'netbrace-report.json'), 'utf8'));
     expect(written.verdict).toBe('fail');
   });

@@ -191,9 +191,10 @@ describe('hostile ids in a real gate run', () => {
     }
   });
 
-  it('job summary and PR comment: no HTML, links, mentions, broken tables or forged lines', () => {
+  it('job summary and PR comment: no HTML, links, mentions, broken tables or forged lines', async () => {
     const summary = renderSummary(report, { runUrl: 'https://github.com/acme/net/actions/runs/1' });
     const comment = renderComment(report, { key: 'default' });
+    if (process.env.DUMP_MD) (await import('node:fs')).writeFileSync(process.env.DUMP_MD, summary);
     expect(markdownProblems(summary, 'summary')).toEqual([]);
     expect(markdownProblems(comment, 'comment')).toEqual([]);
     expect(summary).toContain('bold'); // shown, as text
