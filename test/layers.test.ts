@@ -19,9 +19,22 @@ export const LAYERS: readonly { name: string; paths: readonly string[] }[] = [
   { name: 'challenges', paths: ['challenges/'] },
   { name: 'envelope', paths: ['envelope/'] },
   { name: 'parallel', paths: ['parallel/'] },
-  // The report's data: what every view reads and the gate, map and mend steps write. The map
-  // and mend parts of a file report are declared beside the code that computes them.
-  { name: 'report contract', paths: ['report/report.ts', 'report/labels.ts', 'map/types.ts', 'mend/types.ts'] },
+  // The report's data and its words: what every view reads and the gate, map and mend steps
+  // write, and how a status, a rule, a number or a consequence is said (no markup). The map and
+  // mend parts of a file report are declared beside the code that computes them.
+  {
+    name: 'report contract',
+    paths: [
+      'report/report.ts',
+      'report/labels.ts',
+      'report/vocabulary.ts',
+      'report/format.ts',
+      'report/story.ts',
+      'report/rank.ts',
+      'map/types.ts',
+      'mend/types.ts',
+    ],
+  },
   { name: 'policy', paths: ['policy/'] },
   { name: 'map', paths: ['map/'] },
   { name: 'mend', paths: ['mend/'] },

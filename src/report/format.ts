@@ -2,20 +2,9 @@
 // fixed decimals with a real minus sign, signed deltas, the Monte Carlo error, short
 // revisions, UTF-8 sizes. Pure.
 
-/** The length of `text` in UTF-8 bytes (GitHub's summary limit and the design size limit count bytes). */
-export function utf8Length(text: string): number {
-  let n = 0;
-  for (let i = 0; i < text.length; i++) {
-    const c = text.charCodeAt(i);
-    if (c < 0x80) n += 1;
-    else if (c < 0x800) n += 2;
-    else if (c >= 0xd800 && c <= 0xdbff && i + 1 < text.length && (text.charCodeAt(i + 1) & 0xfc00) === 0xdc00) {
-      n += 4;
-      i++;
-    } else n += 3;
-  }
-  return n;
-}
+// Counting UTF-8 bytes lives at the bottom layer (the design reader needs it too).
+export { utf8Length } from '../decode.js';
+
 
 /** `x` at `decimals` decimals with a real minus sign and no "−0.000". */
 export function formatFixed(x: number, decimals = 3): string {

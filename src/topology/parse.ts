@@ -2,7 +2,7 @@
 // Pure: the shell reads the file (src/shell/read-design.ts) and hands us the text.
 
 import { DesignError, LimitError } from '../errors.js';
-import { utf8Length } from '../report/format.js';
+import { utf8Length } from '../decode.js';
 import { DEFAULT_MAX_BYTES, DEFAULT_MAX_ELEMENTS, type DesignFormat, type ParseOptions, type Topology } from './model.js';
 import { detectFormat, FORMAT_CHOICES } from './detect.js';
 import { parseNative } from './native.js';
