@@ -18,10 +18,22 @@
 
 import { EncodingError } from './decode.js';
 import { isNetbraceError, PolicyError, UsageError, type NetbraceError } from './errors.js';
-import { evaluateDesign, type DesignEvaluation, type EvaluationSpec } from './envelope/evaluate.js';
+import {
+  evaluateDesign,
+  pendingTasks,
+  snapshotEvaluation,
+  stageEvaluation,
+  stagedMaximum,
+  type DesignEvaluation,
+  type EvaluationSpec,
+  type StagedEvaluation,
+} from './envelope/evaluate.js';
+import { BATCH, runTask, type EvaluationPlan, type Task, type TaskResult } from './envelope/engine.js';
+import { decide, isOpen } from './gate/decide.js';
+import { measure } from './gate/measure.js';
 import type { ChallengeParams } from './envelope/types.js';
 import { compileTopology, type CompactGraph } from './graph/compact.js';
-import { budgetSpecs, notePairedCuts, type PairedCut } from './gate/budget.js';
+import { budgetSpecs, notePairedCuts, type BudgetedSpecs, type PairedCut } from './gate/budget.js';
 import { matchDesigns, sameDesign } from './gate/rename.js';
 import { compareDesign, type CompareInput, type DesignSide } from './gate/compare.js';
 import { countStatuses, exitCodeOf, verdictOf } from './gate/verdict.js';
@@ -60,8 +72,13 @@ export interface GateDeps {
   listAll(rev: Revision): MaybePromise<string[]>;
   /** A file of the organisation policy's folder (request.orgPolicyPath), outside the history. */
   readOrgPolicy?: (path: string) => MaybePromise<string | null>;
-  /** The envelope engine; defaults to evaluateDesign on this thread. */
+  /**
+   * A whole evaluation in one go, replacing the engine (tests that alter results). When set, the
+   * gate runs every realization the budget allows, without the sequential stopping rule.
+   */
   evaluate?: (g: CompactGraph, spec: EvaluationSpec, threads?: number) => MaybePromise<DesignEvaluation>;
+  /** Runs engine tasks (worker threads: parallel/pool.ts runTasksParallel); defaults to this thread. */
+  runTasks?: (g: CompactGraph, plan: EvaluationPlan, tasks: Task[], threads?: number) => MaybePromise<TaskResult[]>;
 }
 
 export interface GateRequest {
@@ -532,6 +549,81 @@ export async function evaluateGraph(
   return { graph: g, result: joinEvaluations(parts), topology };
 }
 
+/**
+ * The sequential stopping rule (docs/METHODS.md §7.6): head and base run their random bands in
+ * batches of BATCH realizations (by index, the same on both sides and for any thread count),
+ * and after each batch every requirement on a random challenge is decided by confidence
+ * sequences (gate/decide.ts); the run stops when none is open, or at the most realizations the
+ * policy and the budget allow. Attacks, N−1 and worst cases run once, in the first batch.
+ */
+async function evaluateSequentially(
+  fp: FilePolicy,
+  head: { graph: CompactGraph; topology: Topology },
+  base: { graph: CompactGraph; topology: Topology } | undefined,
+  specs: BudgetedSpecs,
+  comparing: boolean,
+  request: GateRequest,
+  deps: GateDeps,
+): Promise<{ head: DesignSide; base?: DesignSide }> {
+  const run = deps.runTasks ?? ((g: CompactGraph, plan: EvaluationPlan, tasks: Task[]) => tasks.map((t) => runTask(g, plan, t)));
+  const stagesOf = (g: CompactGraph, list: EvaluationSpec[]) => list.map((spec) => stageEvaluation(g, spec));
+  const headStages = stagesOf(head.graph, specs.head);
+  const baseStages = base ? stagesOf(base.graph, specs.base!) : [];
+  const most = Math.max(0, ...[...headStages, ...baseStages].map(stagedMaximum));
+  const needed = new Map<string, number>();
+  const snapshot = (stages: StagedEvaluation[], upto: number): DesignEvaluation => {
+    const joined = joinEvaluations(
+      stages.map((st, i) => {
+        const e = snapshotEvaluation(st, upto);
+        notePairedCuts(e, specs.cuts, i);
+        return e;
+      }),
+    );
+    return { ...joined, sequential: { needed } };
+  };
+  for (let upto = Math.min(BATCH, most); ; upto = Math.min(upto + BATCH, most)) {
+    for (const st of [...headStages, ...baseStages]) {
+      const pending = pendingTasks(st, upto);
+      if (pending.length === 0) continue;
+      const results = await run(st.g, st.plan, pending.map((i) => st.tasks[i]), request.threads);
+      pending.forEach((i, k) => (st.results[i] = results[k]));
+    }
+    const headSide: DesignSide = { graph: head.graph, result: snapshot(headStages, upto), topology: head.topology };
+    const baseSide: DesignSide | undefined = base ? { graph: base.graph, result: snapshot(baseStages, upto), topology: base.topology } : comparing ? headSide : undefined;
+    let open = false;
+    for (const r of fp.requirements) {
+      if (r.kind === 'no-new-spof' || r.kind === 'n-1') continue;
+      const c = fp.challenges.find((x) => x.name === r.challenge);
+      if (!c?.random || c.engine === 'regional') continue;
+      const m = measure(r, fp.challenges, headSide, comparing ? baseSide : undefined);
+      if (m.missing !== undefined || m.head === null) continue;
+      const threshold = r.kind === 'spread-ceiling' ? r.max : (r.min ?? null);
+      const withBase = comparing && baseSide !== undefined && m.base !== null && m.unpaired === undefined;
+      const d = decide({
+        requirement: r,
+        challenge: c,
+        head: headSide.result,
+        ...(withBase ? { base: baseSide.result } : {}),
+        weakening: fp.weakening,
+        baseValue: withBase ? m.base : null,
+        threshold,
+        higherIsBetter: m.higherIsBetter,
+      });
+      if (!d) continue;
+      // A minimum waits for every realization unless the head is already below its floor.
+      const waiting = isOpen(d) || (d.needsAll === true && !(d.floor === 'below' && d.weakening === undefined));
+      if (waiting) {
+        open = true;
+        needed.delete(r.id);
+      } else if (!needed.has(r.id)) needed.set(r.id, upto);
+    }
+    if (!open || upto >= most) {
+      for (const r of fp.requirements) if (!needed.has(r.id) && 'challenge' in r && fp.challenges.find((x) => x.name === r.challenge)?.random) needed.set(r.id, upto);
+      return { head: headSide, ...(base ? { base: baseSide } : {}) };
+    }
+  }
+}
+
 function validateRequest(request: GateRequest): void {
   if (request.mode !== 'block' && request.mode !== 'inform') throw new UsageError(`mode must be block or inform, not ${String(request.mode)}`);
   if (request.policySource !== 'base' && request.policySource !== 'head') {
@@ -598,14 +690,22 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
               }
             }
           }
-          const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
-          input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
-          if (same) input.base = input.head;
-          else if (baseGraph) {
-            // Only ids spelt differently: one evaluation judges both sides (delta exactly 0), and
-            // the base keeps its own graph so that the renames are still listed.
-            if (sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
-            else input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
+          // Only ids spelt differently: one evaluation judges both sides (delta exactly 0), and
+          // the base keeps its own graph so that the renames are still listed.
+          const oneEvaluation = same || (baseGraph !== undefined && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph)));
+          const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, oneEvaluation ? undefined : baseGraph);
+          if (!deps.evaluate) {
+            const sides = await evaluateSequentially(fp, { graph: h.graph, topology: h.topology }, oneEvaluation ? undefined : baseGraph && { graph: baseGraph, topology: baseTopology! }, specs, !thresholdsOnly && (same || baseGraph !== undefined), request, deps);
+            input.head = sides.head;
+            if (same) input.base = input.head;
+            else if (baseGraph) input.base = oneEvaluation ? { graph: baseGraph, topology: baseTopology!, result: input.head.result } : sides.base!;
+          } else {
+            input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
+            if (same) input.base = input.head;
+            else if (baseGraph) {
+              if (oneEvaluation) input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
+              else input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
+            }
           }
         }
       }

@@ -58,6 +58,7 @@ function formatSe(se: number): string {
   return Number.isFinite(se) ? se.toFixed(3) : 'unknown';
 }
 import { type DesignSide, locate, measure, type Measured } from './measure.js';
+import { decide, type Decision } from './decide.js';
 
 export type { DesignSide };
 
@@ -182,6 +183,14 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     status: 'holds',
   };
   const findings: Finding[] = [];
+  // A sequential run: the random requirements are decided by confidence sequences (decide.ts).
+  const decision = m.missing === undefined && m.head !== null ? sequentialDecision(r, input, m, threshold) : undefined;
+  if (decision) {
+    const needed = head.result.sequential!.needed.get(r.id);
+    if (needed !== undefined) row.realizations = needed;
+    row.bounds = { head: decision.head, ...(decision.delta ? { delta: decision.delta } : {}) };
+  }
+  const byCs = decision !== undefined && !decision.needsAll;
   const elements = elementsOf(m.elements, head, input.base);
   const rule = THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE];
   const extra = { requirement: r.id, ...numbers(m), ...(threshold !== null ? { threshold } : {}) };
@@ -232,6 +241,23 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     row.status = 'short';
     const relation = m.higherIsBetter ? 'is below' : 'is above';
     findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short' }));
+  } else if (threshold !== null && byCs) {
+    if (decision!.floor === 'open') {
+      // Met by the estimate, but the confidence sequence still reaches past the limit at the most realizations allowed.
+      row.status = 'unsettled';
+      const edge = m.higherIsBetter ? decision!.head.lo : decision!.head.hi;
+      const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
+      const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
+      findings.push(
+        finding(
+          rule,
+          unsettledSeverity(r.severity),
+          `${description}: ${formatR(headValue, d)} meets it, but after ${ranOf(input, r)} realizations its confidence sequence still reaches ${formatR(edge, d)}, so it is not settled${cut}`,
+          elements,
+          { ...extra, status: 'unsettled' },
+        ),
+      );
+    }
   } else if (threshold !== null && m.incomplete !== undefined) {
     // Met by incomplete work: not proven, so not "holds".
     row.status = 'unsettled';
@@ -301,6 +327,8 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
         { ...extra, status: 'unsettled' },
       ),
     );
+  } else if (m.base !== null && m.delta !== null && m.se !== null && byCs && decision!.weakening !== undefined) {
+    judgeWeakeningByCs(m, decision!, { description, elements, extra, row, findings, severity: regressionSeverity, policy: input.policy, ran: ranOf(input, r) });
   } else if (m.base !== null && m.delta !== null && m.se !== null) {
     const base = m.base;
     const drop = m.higherIsBetter ? -m.delta : m.delta;
@@ -356,6 +384,87 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     findings.push(finding(rule, 'notice', `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, status: 'reduced-work', line: 0 }));
   }
   return result();
+}
+
+/** The confidence-sequence decisions of a requirement in a sequential run, else undefined. */
+function sequentialDecision(r: Requirement, input: CompareInput, m: Measured, threshold: number | null): Decision | undefined {
+  const head = input.head!;
+  if (!head.result.sequential) return undefined;
+  const comparing = !input.thresholdsOnly && input.base !== undefined && m.base !== null && m.unpaired === undefined;
+  const challenge = 'challenge' in r ? input.policy.challenges.find((x) => x.name === r.challenge) : undefined;
+  return decide({
+    requirement: r,
+    challenge,
+    head: head.result,
+    ...(comparing ? { base: input.base!.result } : {}),
+    weakening: input.policy.weakening,
+    baseValue: comparing ? m.base : null,
+    threshold,
+    higherIsBetter: m.higherIsBetter,
+  });
+}
+
+/** Realizations the head's envelope of a requirement's challenge ran. */
+function ranOf(input: CompareInput, r: Requirement): number {
+  const c = 'challenge' in r ? input.policy.challenges.find((x) => x.name === r.challenge) : undefined;
+  return input.head!.result.evaluation.envelopes.find((e) => e.challenge === c?.engine)?.realizations ?? 0;
+}
+
+interface CsContext {
+  description: string;
+  elements: ReportElement[];
+  extra: Partial<Finding>;
+  row: RequirementResult;
+  findings: Finding[];
+  severity: Severity;
+  policy: FilePolicy;
+  ran: number;
+}
+
+/** A drop judged by the confidence sequence of the change: beyond, within, or (at the most realizations allowed) not settled. */
+function judgeWeakeningByCs(m: Measured, d: Decision, c: CsContext): void {
+  const base = m.base!;
+  const headValue = m.head!;
+  const drop = m.higherIsBetter ? -m.delta! : m.delta!;
+  if (drop <= SAME * Math.max(1, Math.abs(base)) && d.weakening !== 'beyond') return;
+  const rule = c.policy.weakening;
+  const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(base));
+  const noise = rule.errorMultiple * m.se!;
+  const dropLo = m.higherIsBetter ? -d.delta!.hi : d.delta!.lo;
+  const dropHi = m.higherIsBetter ? -d.delta!.lo : d.delta!.hi;
+  const digits = (limit: number) => changeDecimals(base, headValue, m.higherIsBetter, limit);
+  const dd = Math.max(digits(allowance), digits(dropLo), digits(dropHi));
+  const verb = m.higherIsBetter ? 'dropped' : 'rose';
+  const change = `${verb} from ${formatR(base, dd)} to ${formatR(headValue, dd)} (\u0394 ${formatDelta(m.delta!, m.se, dd)})`;
+  const allowed = formatR(allowance, dd);
+  const range = `its confidence sequence puts the drop between ${formatR(dropLo, dd)} and ${formatR(dropHi, dd)} after ${c.ran} realizations`;
+  if (d.weakening === 'beyond') {
+    if (c.row.status !== 'short') c.row.status = 'weakened';
+    c.findings.push(finding('regression', c.severity, `${c.description}: ${change}, more than the allowed ${allowed}: ${range}`, c.elements, { ...c.extra, allowance, status: 'weakened' }));
+  } else if (d.weakening === 'open') {
+    if (c.row.status === 'holds') c.row.status = 'unsettled';
+    const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
+    c.findings.push(
+      finding(
+        'regression',
+        unsettledSeverity(c.severity),
+        `${c.description}: ${change}; ${range}, on both sides of the allowed ${allowed}, so it is not settled${cut}`,
+        c.elements,
+        { ...c.extra, allowance, status: 'unsettled' },
+      ),
+    );
+  } else if (drop < noise) {
+    if (c.row.status === 'holds') c.row.status = 'inside-error';
+    c.findings.push(
+      finding('regression', 'notice', `${c.description}: ${change}, less than ${rule.errorMultiple} \u00d7 its Monte Carlo error (${formatR(noise, dd)}): inside the error, not a failure; ${range}`, c.elements, {
+        ...c.extra,
+        allowance,
+        status: 'inside-error',
+      }),
+    );
+  } else {
+    c.findings.push(finding('regression', 'notice', `${c.description}: ${change}, within the allowed ${allowed}: ${range}`, c.elements, { ...c.extra, allowance, status: 'within-allowance' }));
+  }
 }
 
 /** Which status a judged file has, from its findings (only fail-severity findings change it). */
