@@ -19,8 +19,10 @@
 import { EncodingError } from './decode.js';
 import { isNetbraceError, PolicyError, UsageError, type NetbraceError } from './errors.js';
 import {
+  assembleEvaluation,
   evaluateDesign,
   pendingTasks,
+  planEvaluation,
   snapshotEvaluation,
   stageEvaluation,
   stagedMaximum,
@@ -108,6 +110,11 @@ export interface GateRequest {
   part?: { index: number; total: number };
   /** Scheduled runs judge every design against thresholds only. */
   eventKind?: 'pull-request' | 'push' | 'schedule' | 'local';
+  /**
+   * Run random bands in batches under the sequential stopping rule (true), or every realization
+   * at once (false); left out: by the design's size (SEQUENTIAL_MIN_WORK).
+   */
+  sequential?: boolean;
   /** Draw each design's map (default true), and search what would mend a design: when it fails (default), always, or never. */
   map?: boolean;
   mend?: 'failing' | 'always' | 'never';
@@ -539,7 +546,16 @@ export async function evaluateGraph(
   request: GateRequest,
   deps: GateDeps,
 ): Promise<DesignSide> {
-  const evaluate = deps.evaluate ?? ((graph: CompactGraph, spec: EvaluationSpec) => evaluateDesign(graph, spec));
+  const runTasks = deps.runTasks;
+  const evaluate =
+    deps.evaluate ??
+    (runTasks
+      ? async (graph: CompactGraph, spec: EvaluationSpec, threads?: number) => {
+          const st = stageEvaluation(graph, spec);
+          const results = await runTasks(graph, st.plan, st.tasks, threads);
+          return assembleEvaluation(graph, st.plan, st.tasks, results);
+        }
+      : (graph: CompactGraph, spec: EvaluationSpec) => evaluateDesign(graph, spec));
   const parts: DesignEvaluation[] = [];
   for (const [i, spec] of specs.entries()) {
     const part = await evaluate(g, spec, request.threads);
@@ -547,6 +563,22 @@ export async function evaluateGraph(
     parts.push(part);
   }
   return { graph: g, result: joinEvaluations(parts), topology };
+}
+
+/**
+ * Estimated work (element visits, unreduced) above which a design runs sequentially: about 20 s
+ * at the budget's fixed rate (policy/budget.ts). Below it every realization the policy asks
+ * for is cheap, so all of them run and are judged as one fixed sample (§7.3–7.4); above it,
+ * batches with confidence sequences (§7.6), so that large designs stop as soon as they are
+ * decided instead of running into the budget.
+ */
+export const SEQUENTIAL_MIN_WORK = 1e9;
+
+/** Whether a design runs in batches under the sequential stopping rule (request.sequential overrides). */
+function sequentialRun(request: GateRequest, specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): boolean {
+  if (request.sequential !== undefined) return request.sequential;
+  const work = (g: CompactGraph) => specs.reduce((s, spec) => s + planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work, 0);
+  return Math.max(work(head), base ? work(base) : 0) > SEQUENTIAL_MIN_WORK;
 }
 
 /**
@@ -694,7 +726,7 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
           // the base keeps its own graph so that the renames are still listed.
           const oneEvaluation = same || (baseGraph !== undefined && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph)));
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, oneEvaluation ? undefined : baseGraph);
-          if (!deps.evaluate) {
+          if (!deps.evaluate && sequentialRun(request, specs.head, h.graph, oneEvaluation ? undefined : baseGraph)) {
             const sides = await evaluateSequentially(fp, { graph: h.graph, topology: h.topology }, oneEvaluation ? undefined : baseGraph && { graph: baseGraph, topology: baseTopology! }, specs, !thresholdsOnly && (same || baseGraph !== undefined), request, deps);
             input.head = sides.head;
             if (same) input.base = input.head;
