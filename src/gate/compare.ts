@@ -33,9 +33,10 @@
 // neighbourhood (spof.ts, rename.ts); hardened elements never count, but weak points hidden
 // by newly hardened ones are findings of their own. Each kind is a row of its own.
 
-import type { ElementKind } from '../envelope/types.js';
-import type { Finding, FileReport, FileStatus, FindingStatus, ReportElement, RequirementResult, Severity } from '../report/report.js';
-import type { FilePolicy, Requirement } from '../policy/types.js';
+import type { ElementKind } from '../graph/element.js';
+import type { Finding, FileReport, FileStatus, FindingStatus, RequirementResult, Severity } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
+import type { FilePolicy, Requirement, WeakeningRule } from '../policy/types.js';
 import { withSequenceDetails } from './consequence.js';
 import {
   changeDecimals,
@@ -165,6 +166,169 @@ function classifyDrop(drop: number, allowance: number, noise: number, reduced: b
 }
 
 type Judged = { rows: RequirementResult[]; findings: Finding[] };
+type RowStatus = RequirementResult['status'];
+
+/** What the floor and the weakening judgement of one requirement share. */
+export interface Judging {
+  r: Requirement;
+  m: Measured;
+  /** The head value, known to be finite (judge() has dealt with a missing or broken one). */
+  headValue: number;
+  description: string;
+  /** The floor (or ceiling) the requirement sets; null for a tracked value. */
+  threshold: number | null;
+  rule: Finding['rule'];
+  elements: ReportElement[];
+  /** The fields every finding of this requirement carries. */
+  extra: Partial<Finding>;
+}
+
+/** The head against the floor (or ceiling): short, unsettled (interval, cut work, thin margin) or holds. */
+export function judgeFloor(j: Judging): { status: RowStatus; findings: Finding[] } {
+  const { r, m, headValue, description, threshold, rule, elements, extra } = j;
+  let status: RowStatus = 'holds';
+  const findings: Finding[] = [];
+  // Meets the limit, with a NaN on either side counting as not meeting it.
+  const meets = (v: number, limit: number) => (m.higherIsBetter ? v >= limit : v <= limit);
+  const limitWord = m.higherIsBetter ? 'floor' : 'ceiling';
+  /** A value beside the limit it is judged against, at the digits that tell them apart. */
+  const against = (v: number, limit: number) => formatR(v, decidingDecimals(v, limit));
+
+  if (threshold !== null && !meets(headValue, threshold)) {
+    status = 'short';
+    const relation = m.higherIsBetter ? 'is below' : 'is above';
+    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short' }));
+  } else if (threshold !== null && m.incomplete !== undefined) {
+    // Met by incomplete work: not proven, so not "holds".
+    status = 'unsettled';
+    findings.push(
+      finding(rule, unsettledSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
+        ...extra,
+        status: 'unsettled',
+      }),
+    );
+  } else if (threshold !== null && m.lo !== undefined && m.hi !== undefined && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
+    status = 'unsettled';
+    const edge = m.higherIsBetter ? m.lo : m.hi;
+    const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
+    const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
+    findings.push(
+      finding(
+        rule,
+        m.reduced !== undefined ? unsettledSeverity(r.severity) : 'notice',
+        `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
+        elements,
+        { ...extra, status: 'unsettled' },
+      ),
+    );
+  } else if (threshold !== null && m.headSe !== undefined && r.kind === 'r-threshold' && r.statistic.kind === 'min') {
+    // The least of fewer realizations is never below the least of all of them: not proven.
+    status = 'unsettled';
+    findings.push(
+      finding(
+        rule,
+        unsettledSeverity(r.severity),
+        `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
+        elements,
+        { ...extra, status: 'unsettled' },
+      ),
+    );
+  } else if (threshold !== null && m.headSe !== undefined) {
+    const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
+    const needed = REDUCED_MARGIN_SE * m.headSe;
+    if (!(margin > needed)) {
+      // Met on realizations the budget cut, by a margin their own error does not clear.
+      status = 'unsettled';
+      const d = decidingDecimals(margin, needed);
+      const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : 'unknown';
+      findings.push(
+        finding(
+          rule,
+          unsettledSeverity(r.severity),
+          `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} \u00d7 ${se})`,
+          elements,
+          { ...extra, status: 'unsettled' },
+        ),
+      );
+    }
+  }
+
+  return { status, findings };
+}
+
+/**
+ * Base against head under the policy's weakening rule: weakened, unsettled, inside the error,
+ * within the allowance, or nothing (a rise or no change). `status` is the floor's verdict; a
+ * "short" is never softened.
+ */
+export function judgeWeakening(j: Judging, policyRule: WeakeningRule, floorStatus: RowStatus): { status: RowStatus; findings: Finding[] } {
+  const { r, m, headValue, description, elements, extra } = j;
+  let status = floorStatus;
+  const findings: Finding[] = [];
+  const regressionSeverity = milder(policyRule.severity, r.severity);
+  if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== undefined) {
+    // Reduced differently on the two sides: the realizations do not pair, so no delta is judged.
+    if (status === 'holds') status = 'unsettled';
+    findings.push(
+      finding(
+        'regression',
+        unsettledSeverity(regressionSeverity),
+        `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
+        elements,
+        { ...extra, status: 'unsettled' },
+      ),
+    );
+  } else if (m.base !== null && m.delta !== null && m.se !== null) {
+    const base = m.base;
+    const drop = m.higherIsBetter ? -m.delta : m.delta;
+    // A rise, no change, or a drop within rounding says nothing (written so that NaN does not pass).
+    if (!(drop <= SAME * Math.max(1, Math.abs(base)))) {
+      const allowance = Math.max(policyRule.allowedDrop ?? 0, (policyRule.allowedRelativeDrop ?? 0) * Math.abs(base));
+      const noise = policyRule.errorMultiple * m.se;
+      const reduced = m.reduced !== undefined;
+      const outcome = classifyDrop(drop, allowance, noise, reduced);
+      // The digits that decide: the drop against the allowance (and the noise band around it).
+      const digits = (limit: number) => changeDecimals(base, headValue, m.higherIsBetter, limit);
+      const d =
+        outcome === 'inside-error'
+          ? digits(noise)
+          : reduced
+            ? Math.max(digits(allowance), digits(outcome === 'weakened' ? allowance + noise : allowance - noise))
+            : digits(allowance);
+      const verb = m.higherIsBetter ? 'dropped' : 'rose';
+      const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (\u0394 ${formatDelta(m.delta, m.se, d)})`;
+      const allowed = formatR(allowance, d);
+      const k = policyRule.errorMultiple;
+      const data = { ...extra, allowance, status: outcome };
+      if (outcome === 'weakened') {
+        if (status !== 'short') status = 'weakened';
+        const beyond = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
+        findings.push(finding('regression', regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
+      } else if (outcome === 'unsettled') {
+        // On cut realizations the drop is within error-multiple × se of the allowance: either side of it.
+        if (status === 'holds') status = 'unsettled';
+        findings.push(
+          finding(
+            'regression',
+            unsettledSeverity(regressionSeverity),
+            `${description}: ${change}, within ${k} \u00d7 its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            elements,
+            data,
+          ),
+        );
+      } else if (outcome === 'inside-error') {
+        if (status === 'holds') status = 'inside-error';
+        findings.push(
+          finding('regression', 'notice', `${description}: ${change}, less than ${k} \u00d7 its Monte Carlo error (${formatR(noise, d)}): inside the error, not a failure`, elements, data),
+        );
+      } else {
+        const margin = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
+        findings.push(finding('regression', 'notice', `${description}: ${change}, within the allowed ${allowed}${margin}`, elements, data));
+      }
+    }
+  }
+  return { status, findings };
+}
 
 function judge(r: Requirement, input: CompareInput, description: string): Judged {
   const head = input.head!;
@@ -230,154 +394,15 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     return result();
   }
 
-  const headValue = m.head;
-  // Meets the limit, with a NaN on either side counting as not meeting it.
-  const meets = (v: number, limit: number) => (m.higherIsBetter ? v >= limit : v <= limit);
-  const limitWord = m.higherIsBetter ? 'floor' : 'ceiling';
-  /** A value beside the limit it is judged against, at the digits that tell them apart. */
-  const against = (v: number, limit: number) => formatR(v, decidingDecimals(v, limit));
-
-  if (threshold !== null && !meets(headValue, threshold)) {
-    row.status = 'short';
-    const relation = m.higherIsBetter ? 'is below' : 'is above';
-    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short' }));
-  } else if (threshold !== null && byCs) {
-    if (decision!.floor === 'open') {
-      // Met by the estimate, but the confidence sequence still reaches past the limit at the most realizations allowed.
-      row.status = 'unsettled';
-      const edge = m.higherIsBetter ? decision!.head.lo : decision!.head.hi;
-      const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
-      const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
-      findings.push(
-        finding(
-          rule,
-          unsettledSeverity(r.severity),
-          `${description}: ${formatR(headValue, d)} meets it, but after ${ranOf(input, r)} realizations its confidence sequence still reaches ${formatR(edge, d)}, so it is not settled${cut}`,
-          elements,
-          { ...extra, status: 'unsettled' },
-        ),
-      );
-    }
-  } else if (threshold !== null && m.incomplete !== undefined) {
-    // Met by incomplete work: not proven, so not "holds".
-    row.status = 'unsettled';
-    findings.push(
-      finding(rule, unsettledSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
-        ...extra,
-        status: 'unsettled',
-      }),
-    );
-  } else if (threshold !== null && m.lo !== undefined && m.hi !== undefined && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
-    row.status = 'unsettled';
-    const edge = m.higherIsBetter ? m.lo : m.hi;
-    const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
-    const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
-    findings.push(
-      finding(
-        rule,
-        m.reduced !== undefined ? unsettledSeverity(r.severity) : 'notice',
-        `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
-        elements,
-        { ...extra, status: 'unsettled' },
-      ),
-    );
-  } else if (threshold !== null && m.headSe !== undefined && r.kind === 'r-threshold' && r.statistic.kind === 'min') {
-    // The least of fewer realizations is never below the least of all of them: not proven.
-    row.status = 'unsettled';
-    findings.push(
-      finding(
-        rule,
-        unsettledSeverity(r.severity),
-        `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
-        elements,
-        { ...extra, status: 'unsettled' },
-      ),
-    );
-  } else if (threshold !== null && m.headSe !== undefined) {
-    const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
-    const needed = REDUCED_MARGIN_SE * m.headSe;
-    if (!(margin > needed)) {
-      // Met on realizations the budget cut, by a margin their own error does not clear.
-      row.status = 'unsettled';
-      const d = decidingDecimals(margin, needed);
-      const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : 'unknown';
-      findings.push(
-        finding(
-          rule,
-          unsettledSeverity(r.severity),
-          `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} \u00d7 ${se})`,
-          elements,
-          { ...extra, status: 'unsettled' },
-        ),
-      );
-    }
-  }
-
-  const policyRule = input.policy.weakening;
-  const regressionSeverity = milder(policyRule.severity, r.severity);
-  if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== undefined) {
-    // Reduced differently on the two sides: the realizations do not pair, so no delta is judged.
-    if (row.status === 'holds') row.status = 'unsettled';
-    findings.push(
-      finding(
-        'regression',
-        unsettledSeverity(regressionSeverity),
-        `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
-        elements,
-        { ...extra, status: 'unsettled' },
-      ),
-    );
-  } else if (m.base !== null && m.delta !== null && m.se !== null && byCs && decision!.weakening !== undefined) {
-    judgeWeakeningByCs(m, decision!, { description, elements, extra, row, findings, severity: regressionSeverity, policy: input.policy, ran: ranOf(input, r) });
-  } else if (m.base !== null && m.delta !== null && m.se !== null) {
-    const base = m.base;
-    const drop = m.higherIsBetter ? -m.delta : m.delta;
-    // A rise, no change, or a drop within rounding says nothing (written so that NaN does not pass).
-    if (!(drop <= SAME * Math.max(1, Math.abs(base)))) {
-      const allowance = Math.max(policyRule.allowedDrop ?? 0, (policyRule.allowedRelativeDrop ?? 0) * Math.abs(base));
-      const noise = policyRule.errorMultiple * m.se;
-      const reduced = m.reduced !== undefined;
-      const outcome = classifyDrop(drop, allowance, noise, reduced);
-      // The digits that decide: the drop against the allowance (and the noise band around it).
-      const digits = (limit: number) => changeDecimals(base, headValue, m.higherIsBetter, limit);
-      const d =
-        outcome === 'inside-error'
-          ? digits(noise)
-          : reduced
-            ? Math.max(digits(allowance), digits(outcome === 'weakened' ? allowance + noise : allowance - noise))
-            : digits(allowance);
-      const verb = m.higherIsBetter ? 'dropped' : 'rose';
-      const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (\u0394 ${formatDelta(m.delta, m.se, d)})`;
-      const allowed = formatR(allowance, d);
-      const k = policyRule.errorMultiple;
-      const data = { ...extra, allowance, status: outcome };
-      if (outcome === 'weakened') {
-        if (row.status !== 'short') row.status = 'weakened';
-        const beyond = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
-        findings.push(finding('regression', regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
-      } else if (outcome === 'unsettled') {
-        // On cut realizations the drop is within error-multiple × se of the allowance: either side of it.
-        if (row.status === 'holds') row.status = 'unsettled';
-        findings.push(
-          finding(
-            'regression',
-            unsettledSeverity(regressionSeverity),
-            `${description}: ${change}, within ${k} \u00d7 its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
-            elements,
-            data,
-          ),
-        );
-      } else if (outcome === 'inside-error') {
-        if (row.status === 'holds') row.status = 'inside-error';
-        findings.push(
-          finding('regression', 'notice', `${description}: ${change}, less than ${k} \u00d7 its Monte Carlo error (${formatR(noise, d)}): inside the error, not a failure`, elements, data),
-        );
-      } else {
-        const margin = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
-        findings.push(finding('regression', 'notice', `${description}: ${change}, within the allowed ${allowed}${margin}`, elements, data));
-      }
-    }
-  }
+  const j: Judging = { r, m, headValue: m.head, description, threshold, rule, elements, extra };
+  const floor = byCs && threshold !== null ? judgeFloorByCs(j, decision!, ranOf(input, r)) : judgeFloor(j);
+  const paired = m.base !== null && m.delta !== null && m.se !== null && m.unpaired === undefined;
+  const weakening =
+    byCs && paired && decision!.weakening !== undefined
+      ? judgeWeakeningByCs(m, decision!, { description, elements, extra, status: floor.status, severity: milder(input.policy.weakening.severity, r.severity), policy: input.policy, ran: ranOf(input, r) })
+      : judgeWeakening(j, input.policy.weakening, floor.status);
+  row.status = weakening.status;
+  findings.push(...floor.findings, ...weakening.findings);
   // Every requirement judged on reduced work says so, once.
   const reducedWork = m.reduced ?? m.incomplete;
   if (reducedWork !== undefined && !findings.some((f) => f.message.includes(reducedWork))) {
@@ -414,19 +439,44 @@ interface CsContext {
   description: string;
   elements: ReportElement[];
   extra: Partial<Finding>;
-  row: RequirementResult;
-  findings: Finding[];
+  /** The floor's verdict; a "short" is never softened. */
+  status: RowStatus;
   severity: Severity;
   policy: FilePolicy;
   ran: number;
 }
 
+/** The head against its floor in a sequential run: short by the estimate, unsettled while the confidence sequence reaches past it, else holds. */
+function judgeFloorByCs(j: Judging, d: Decision, ran: number): { status: RowStatus; findings: Finding[] } {
+  const { r, m, headValue, description, threshold, rule, elements, extra } = j;
+  const meets = m.higherIsBetter ? headValue >= threshold! : headValue <= threshold!;
+  if (!meets || d.needsAll) return judgeFloor(j);
+  if (d.floor !== 'open') return { status: 'holds', findings: [] };
+  // Met by the estimate, but the confidence sequence still reaches past the limit at the most realizations allowed.
+  const edge = m.higherIsBetter ? d.head.lo : d.head.hi;
+  const dd = Math.max(decidingDecimals(headValue, threshold!), decidingDecimals(edge, threshold!));
+  const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
+  return {
+    status: 'unsettled',
+    findings: [
+      finding(
+        rule,
+        unsettledSeverity(r.severity),
+        `${description}: ${formatR(headValue, dd)} meets it, but after ${ran} realizations its confidence sequence still reaches ${formatR(edge, dd)}, so it is not settled${cut}`,
+        elements,
+        { ...extra, status: 'unsettled' },
+      ),
+    ],
+  };
+}
+
 /** A drop judged by the confidence sequence of the change: beyond, within, or (at the most realizations allowed) not settled. */
-function judgeWeakeningByCs(m: Measured, d: Decision, c: CsContext): void {
+function judgeWeakeningByCs(m: Measured, d: Decision, c: CsContext): { status: RowStatus; findings: Finding[] } {
+  const out = { status: c.status, findings: [] as Finding[] };
   const base = m.base!;
   const headValue = m.head!;
   const drop = m.higherIsBetter ? -m.delta! : m.delta!;
-  if (drop <= SAME * Math.max(1, Math.abs(base)) && d.weakening !== 'beyond') return;
+  if (drop <= SAME * Math.max(1, Math.abs(base)) && d.weakening !== 'beyond') return out;
   const rule = c.policy.weakening;
   const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(base));
   const noise = rule.errorMultiple * m.se!;
@@ -439,12 +489,12 @@ function judgeWeakeningByCs(m: Measured, d: Decision, c: CsContext): void {
   const allowed = formatR(allowance, dd);
   const range = `its confidence sequence puts the drop between ${formatR(dropLo, dd)} and ${formatR(dropHi, dd)} after ${c.ran} realizations`;
   if (d.weakening === 'beyond') {
-    if (c.row.status !== 'short') c.row.status = 'weakened';
-    c.findings.push(finding('regression', c.severity, `${c.description}: ${change}, more than the allowed ${allowed}: ${range}`, c.elements, { ...c.extra, allowance, status: 'weakened' }));
+    if (out.status !== 'short') out.status = 'weakened';
+    out.findings.push(finding('regression', c.severity, `${c.description}: ${change}, more than the allowed ${allowed}: ${range}`, c.elements, { ...c.extra, allowance, status: 'weakened' }));
   } else if (d.weakening === 'open') {
-    if (c.row.status === 'holds') c.row.status = 'unsettled';
+    if (out.status === 'holds') out.status = 'unsettled';
     const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
-    c.findings.push(
+    out.findings.push(
       finding(
         'regression',
         unsettledSeverity(c.severity),
@@ -454,8 +504,8 @@ function judgeWeakeningByCs(m: Measured, d: Decision, c: CsContext): void {
       ),
     );
   } else if (drop < noise) {
-    if (c.row.status === 'holds') c.row.status = 'inside-error';
-    c.findings.push(
+    if (out.status === 'holds') out.status = 'inside-error';
+    out.findings.push(
       finding('regression', 'notice', `${c.description}: ${change}, less than ${rule.errorMultiple} \u00d7 its Monte Carlo error (${formatR(noise, dd)}): inside the error, not a failure; ${range}`, c.elements, {
         ...c.extra,
         allowance,
@@ -463,8 +513,9 @@ function judgeWeakeningByCs(m: Measured, d: Decision, c: CsContext): void {
       }),
     );
   } else {
-    c.findings.push(finding('regression', 'notice', `${c.description}: ${change}, within the allowed ${allowed}: ${range}`, c.elements, { ...c.extra, allowance, status: 'within-allowance' }));
+    out.findings.push(finding('regression', 'notice', `${c.description}: ${change}, within the allowed ${allowed}: ${range}`, c.elements, { ...c.extra, allowance, status: 'within-allowance' }));
   }
+  return out;
 }
 
 /** Which status a judged file has, from its findings (only fail-severity findings change it). */

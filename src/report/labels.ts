@@ -1,7 +1,8 @@
 // Words and numbers shared by the human views (terminal, HTML): how a challenge, a status or
 // a number is written, and where an element's line is found. Pure; no colour, no markup.
 
-import type { ChallengeName, ElementKind } from '../envelope/types.js';
+import type { ChallengeName } from '../challenges/types.js';
+import type { ElementKind } from '../graph/element.js';
 import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, Report, RequirementResult } from './report.js';
 
 

@@ -15,7 +15,7 @@ import schema from '../../src/report/report.schema.json' with { type: 'json' };
 import { serializeReport, type FileReport, type Report } from '../../src/report/report.js';
 import { renderSarif } from '../../src/report/sarif.js';
 import { runGate, type GateDeps } from '../../src/run-gate.js';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import { memoryDeps } from '../gate/memory-repo.js';
 import { recordIO } from '../shell/helpers-io.js';
 import { caseNames, cleanupCases, runCase } from './harness.js';

@@ -15,7 +15,8 @@ import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from
 import { joinReports } from '../../src/gate/join.js';
 import type { Report } from '../../src/report/report.js';
 import { runGate } from '../../src/run-gate.js';
-import { run, type ActionDeps, type RunOutcome } from '../../src/shell/action-run.js';
+import type { ActionDeps, RunOutcome } from '../../src/shell/action-deps.js';
+import { run } from '../../src/shell/action-run.js';
 import { gitDeps, runGit } from '../../src/shell/git.js';
 import { createClient } from '../../src/shell/github.js';
 import { startFakeApi, type FakeApi } from '../action/fake-api.js';

@@ -8,7 +8,7 @@ import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync 
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import { DEMO_CHANGES } from '../../src/shell/commands/demo.js';
 import type { Report } from '../../src/report/report.js';
 import { CAUTION } from '../../src/report/report.js';
