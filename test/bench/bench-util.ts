@@ -98,17 +98,18 @@ export interface ProcessRun {
 }
 
 /** Runs a command to its end; wall time and the child's peak RSS (GNU time, else unknown). */
-export function runProcess(cmd: string, args: string[], cwd = repo): ProcessRun {
+export function runProcess(cmd: string, args: string[], cwd = repo, timeoutMs?: number): ProcessRun & { timedOut: boolean } {
   const t = performance.now();
-  const r = spawnSync('/usr/bin/time', ['-f', '%M', cmd, ...args], { cwd, encoding: 'utf8', maxBuffer: 256 * 2 ** 20 });
+  const r = spawnSync('/usr/bin/time', ['-f', '%M', cmd, ...args], { cwd, encoding: 'utf8', maxBuffer: 256 * 2 ** 20, ...(timeoutMs ? { timeout: timeoutMs, killSignal: 'SIGKILL' as const } : {}) });
+  if (r.signal) return { seconds: (performance.now() - t) / 1000, maxRssMb: Number.NaN, status: null, stdout: r.stdout ?? '', stderr: r.stderr ?? '', timedOut: true };
   const seconds = (performance.now() - t) / 1000;
   if (r.error) {
     const plain = spawnSync(cmd, args, { cwd, encoding: 'utf8', maxBuffer: 256 * 2 ** 20 });
-    return { seconds: (performance.now() - t) / 1000, maxRssMb: Number.NaN, status: plain.status, stdout: plain.stdout, stderr: plain.stderr };
+    return { seconds: (performance.now() - t) / 1000, maxRssMb: Number.NaN, status: plain.status, stdout: plain.stdout, stderr: plain.stderr, timedOut: false };
   }
   const lines = r.stderr.trimEnd().split('\n');
   const kb = Number(lines.pop());
-  return { seconds, maxRssMb: kb / 1024, status: r.status, stdout: r.stdout, stderr: lines.join('\n') };
+  return { seconds, maxRssMb: kb / 1024, status: r.status, stdout: r.stdout, stderr: lines.join('\n'), timedOut: false };
 }
 
 /** Best of `times` runs (wall time), with the largest peak RSS seen. */
