@@ -14,6 +14,9 @@
 //                     a head already below its floor stays below, anything else waits for all
 // The change: [head.lo − base.hi, head.hi − base.lo] with each side at α/2, unpaired and
 // therefore conservative; exactly [0, 0] when both sides are one evaluation (an unchanged design).
+// Seam: every realization's R is taken as exact. An R estimated from sampled sources (the
+// metrics' `sources` option and MetricValue.se) would need each side's bounds widened by that
+// estimate's own error before it could be used here; the gate does not yet ask for sampling.
 
 import { meanBounds, quantileBounds, type Bounds } from '../envelope/confidence-sequence.js';
 import type { DesignEvaluation } from '../envelope/evaluate.js';
