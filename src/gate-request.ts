@@ -2,10 +2,24 @@
 // of one design: shared by runGate (run-gate.ts) and the map-and-mend step, which judges
 // mended designs with the same specs and the same engine.
 
-import { evaluateDesign, type DesignEvaluation, type EvaluationSpec } from './envelope/evaluate.js';
+import {
+  assembleEvaluation,
+  evaluateDesign,
+  pendingTasks,
+  planEvaluation,
+  snapshotEvaluation,
+  stageEvaluation,
+  stagedMaximum,
+  type DesignEvaluation,
+  type EvaluationSpec,
+  type StagedEvaluation,
+} from './envelope/evaluate.js';
+import { BATCH, runTask, type EvaluationPlan, type Task, type TaskResult } from './envelope/engine.js';
+import { decide, isOpen } from './gate/decide.js';
+import { measure } from './gate/measure.js';
 import type { ChallengeParams } from './challenges/types.js';
 import type { CompactGraph } from './graph/compact.js';
-import { notePairedCuts, type PairedCut } from './gate/budget.js';
+import { notePairedCuts, type BudgetedSpecs, type PairedCut } from './gate/budget.js';
 import type { DesignSide } from './gate/compare.js';
 import type { FilePolicy } from './policy/types.js';
 import type { Report } from './report/report.js';
@@ -32,8 +46,13 @@ export interface GateDeps {
   listAll(rev: Revision): MaybePromise<string[]>;
   /** A file of the organisation policy's folder (request.orgPolicyPath), outside the history. */
   readOrgPolicy?: (path: string) => MaybePromise<string | null>;
-  /** The envelope engine; defaults to evaluateDesign on this thread. */
+  /**
+   * A whole evaluation in one go, replacing the engine (tests that alter results). When set, the
+   * gate runs every realization the budget allows, without the sequential stopping rule.
+   */
   evaluate?: (g: CompactGraph, spec: EvaluationSpec, threads?: number) => MaybePromise<DesignEvaluation>;
+  /** Runs engine tasks (worker threads: parallel/pool.ts threadedGate); defaults to this thread. */
+  runTasks?: (g: CompactGraph, plan: EvaluationPlan, tasks: Task[], threads?: number) => MaybePromise<TaskResult[]>;
 }
 
 export interface GateRequest {
@@ -63,6 +82,11 @@ export interface GateRequest {
   part?: { index: number; total: number };
   /** Scheduled runs judge every design against thresholds only. */
   eventKind?: 'pull-request' | 'push' | 'schedule' | 'local';
+  /**
+   * Run random bands in batches under the sequential stopping rule (true), or every realization
+   * at once (false); left out: by the design's size (SEQUENTIAL_MIN_WORK).
+   */
+  sequential?: boolean;
   /** Draw each design's map (default true), and search what would mend a design: when it fails (default), always, or never. */
   map?: boolean;
   mend?: 'failing' | 'always' | 'never';
@@ -133,7 +157,16 @@ export async function evaluateGraph(
   request: GateRequest,
   deps: GateDeps,
 ): Promise<DesignSide> {
-  const evaluate = deps.evaluate ?? ((graph: CompactGraph, spec: EvaluationSpec) => evaluateDesign(graph, spec));
+  const runTasks = deps.runTasks;
+  const evaluate =
+    deps.evaluate ??
+    (runTasks
+      ? async (graph: CompactGraph, spec: EvaluationSpec, threads?: number) => {
+          const st = stageEvaluation(graph, spec);
+          const results = await runTasks(graph, st.plan, st.tasks, threads);
+          return assembleEvaluation(graph, st.plan, st.tasks, results);
+        }
+      : (graph: CompactGraph, spec: EvaluationSpec) => evaluateDesign(graph, spec));
   const parts: DesignEvaluation[] = [];
   for (const [i, spec] of specs.entries()) {
     const part = await evaluate(g, spec, request.threads);
@@ -141,5 +174,96 @@ export async function evaluateGraph(
     parts.push(part);
   }
   return { graph: g, result: joinEvaluations(parts), topology };
+}
+
+/**
+ * Estimated work (element visits, unreduced) above which a design runs sequentially: about 20 s
+ * at the budget's fixed rate (policy/budget.ts). Below it every realization the policy asks
+ * for is cheap, so all of them run and are judged as one fixed sample (§7.3–7.4); above it,
+ * batches with confidence sequences (§7.6), so that large designs stop as soon as they are
+ * decided instead of running into the budget.
+ */
+export const SEQUENTIAL_MIN_WORK = 1e9;
+
+/** Whether a design runs in batches under the sequential stopping rule (request.sequential overrides). */
+export function sequentialRun(request: GateRequest, specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): boolean {
+  if (request.sequential !== undefined) return request.sequential;
+  const work = (g: CompactGraph) => specs.reduce((s, spec) => s + planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work, 0);
+  return Math.max(work(head), base ? work(base) : 0) > SEQUENTIAL_MIN_WORK;
+}
+
+/**
+ * The sequential stopping rule (docs/METHODS.md §7.6): head and base run their random bands in
+ * batches of BATCH realizations (by index, the same on both sides and for any thread count),
+ * and after each batch every requirement on a random challenge is decided by confidence
+ * sequences (gate/decide.ts); the run stops when none is open, or at the most realizations the
+ * policy and the budget allow. Attacks, N−1 and worst cases run once, in the first batch.
+ */
+export async function evaluateSequentially(
+  fp: FilePolicy,
+  head: { graph: CompactGraph; topology: Topology },
+  base: { graph: CompactGraph; topology: Topology } | undefined,
+  specs: BudgetedSpecs,
+  comparing: boolean,
+  request: GateRequest,
+  deps: GateDeps,
+): Promise<{ head: DesignSide; base?: DesignSide }> {
+  const run = deps.runTasks ?? ((g: CompactGraph, plan: EvaluationPlan, tasks: Task[]) => tasks.map((t) => runTask(g, plan, t)));
+  const stagesOf = (g: CompactGraph, list: EvaluationSpec[]) => list.map((spec) => stageEvaluation(g, spec));
+  const headStages = stagesOf(head.graph, specs.head);
+  const baseStages = base ? stagesOf(base.graph, specs.base!) : [];
+  const most = Math.max(0, ...[...headStages, ...baseStages].map(stagedMaximum));
+  const needed = new Map<string, number>();
+  const snapshot = (stages: StagedEvaluation[], upto: number): DesignEvaluation => {
+    const joined = joinEvaluations(
+      stages.map((st, i) => {
+        const e = snapshotEvaluation(st, upto);
+        notePairedCuts(e, specs.cuts, i);
+        return e;
+      }),
+    );
+    return { ...joined, sequential: { needed } };
+  };
+  for (let upto = Math.min(BATCH, most); ; upto = Math.min(upto + BATCH, most)) {
+    for (const st of [...headStages, ...baseStages]) {
+      const pending = pendingTasks(st, upto);
+      if (pending.length === 0) continue;
+      const results = await run(st.g, st.plan, pending.map((i) => st.tasks[i]), request.threads);
+      pending.forEach((i, k) => (st.results[i] = results[k]));
+    }
+    const headSide: DesignSide = { graph: head.graph, result: snapshot(headStages, upto), topology: head.topology };
+    const baseSide: DesignSide | undefined = base ? { graph: base.graph, result: snapshot(baseStages, upto), topology: base.topology } : comparing ? headSide : undefined;
+    let open = false;
+    for (const r of fp.requirements) {
+      if (r.kind === 'no-new-spof' || r.kind === 'n-1') continue;
+      const c = fp.challenges.find((x) => x.name === r.challenge);
+      if (!c?.random || c.engine === 'regional') continue;
+      const m = measure(r, fp.challenges, headSide, comparing ? baseSide : undefined);
+      if (m.missing !== undefined || m.head === null) continue;
+      const threshold = r.kind === 'spread-ceiling' ? r.max : (r.min ?? null);
+      const withBase = comparing && baseSide !== undefined && m.base !== null && m.unpaired === undefined;
+      const d = decide({
+        requirement: r,
+        challenge: c,
+        head: headSide.result,
+        ...(withBase ? { base: baseSide.result } : {}),
+        weakening: fp.weakening,
+        baseValue: withBase ? m.base : null,
+        threshold,
+        higherIsBetter: m.higherIsBetter,
+      });
+      if (!d) continue;
+      // A minimum waits for every realization unless the head is already below its floor.
+      const waiting = isOpen(d) || (d.needsAll === true && !(d.floor === 'below' && d.weakening === undefined));
+      if (waiting) {
+        open = true;
+        needed.delete(r.id);
+      } else if (!needed.has(r.id)) needed.set(r.id, upto);
+    }
+    if (!open || upto >= most) {
+      for (const r of fp.requirements) if (!needed.has(r.id) && 'challenge' in r && fp.challenges.find((x) => x.name === r.challenge)?.random) needed.set(r.id, upto);
+      return { head: headSide, ...(base ? { base: baseSide } : {}) };
+    }
+  }
 }
 

@@ -32,7 +32,7 @@ import type { FileReport, Report } from './report/report.js';
 import type { DesignFormat } from './topology/model.js';
 import { addMapAndMend } from './map-mend-step.js';
 import { fnv1a32 } from './random.js';
-import { evaluateGraph, evaluationSpecs, type ChangedFile, type GateDeps, type GateRequest, type GateResult, type Revision } from './gate-request.js';
+import { evaluateGraph, evaluateSequentially, evaluationSpecs, sequentialRun, type ChangedFile, type GateDeps, type GateRequest, type GateResult, type Revision } from './gate-request.js';
 
 export type { ChangedFile, GateDeps, GateRequest, GateResult, Revision };
 import { parseDesign } from './topology/parse.js';
@@ -462,14 +462,22 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
               }
             }
           }
-          const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
-          input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
-          if (same) input.base = input.head;
-          else if (baseGraph) {
-            // Only ids spelt differently: one evaluation judges both sides (delta exactly 0), and
-            // the base keeps its own graph so that the renames are still listed.
-            if (sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
-            else input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
+          // Only ids spelt differently: one evaluation judges both sides (delta exactly 0), and
+          // the base keeps its own graph so that the renames are still listed.
+          const oneEvaluation = same || (baseGraph !== undefined && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph)));
+          const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, oneEvaluation ? undefined : baseGraph);
+          if (!deps.evaluate && sequentialRun(request, specs.head, h.graph, oneEvaluation ? undefined : baseGraph)) {
+            const sides = await evaluateSequentially(fp, { graph: h.graph, topology: h.topology }, oneEvaluation ? undefined : baseGraph && { graph: baseGraph, topology: baseTopology! }, specs, !thresholdsOnly && (same || baseGraph !== undefined), request, deps);
+            input.head = sides.head;
+            if (same) input.base = input.head;
+            else if (baseGraph) input.base = oneEvaluation ? { graph: baseGraph, topology: baseTopology!, result: input.head.result } : sides.base!;
+          } else {
+            input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
+            if (same) input.base = input.head;
+            else if (baseGraph) {
+              if (oneEvaluation) input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
+              else input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
+            }
           }
         }
       }

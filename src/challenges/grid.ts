@@ -17,3 +17,11 @@ export function makeGrid(until: number, points: number, at: readonly number[] = 
 export function round12(x: number): number {
   return Number(x.toFixed(12));
 }
+
+/**
+ * Index of x on a grid made by makeGrid, or −1: x is rounded as the grid's values were, then
+ * matched exactly (the one lookup that pairing, measuring and deciding share).
+ */
+export function gridIndex(grid: readonly number[], x: number): number {
+  return grid.indexOf(round12(x));
+}

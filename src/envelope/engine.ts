@@ -28,6 +28,14 @@ export function chunkSize(realizations: number): number {
   return Math.min(16, Math.max(1, Math.ceil(realizations / 32)));
 }
 
+/**
+ * Realizations per batch of a sequential run (the gate adds batches until its decisions are
+ * settled, gate/sequential.ts). Band tasks are also cut at every multiple of BATCH, so a
+ * realization's value depends on its index and the policy's count alone, never on how many
+ * batches ran.
+ */
+export const BATCH = 32;
+
 export interface PlannedChallenge {
   params: ResolvedParams;
   type: 'band' | 'attack' | 'contingency';
@@ -69,7 +77,11 @@ export function planTasks(plan: EvaluationPlan, g: CompactGraph): Task[] {
     if (it.type === 'band') {
       const m = realizationCount(g, it);
       const chunk = chunkSize(m);
-      for (let from = 0; from < m; from += chunk) tasks.push({ type: 'band', item, from, to: Math.min(m, from + chunk) });
+      for (let from = 0; from < m; ) {
+        const to = Math.min(m, from + chunk - (from % chunk), BATCH * (Math.floor(from / BATCH) + 1));
+        tasks.push({ type: 'band', item, from, to });
+        from = to;
+      }
     } else if (it.type === 'attack') tasks.push({ type: 'attack', item });
     else tasks.push({ type: 'contingency', item });
     if (it.params.worstCase > 0) tasks.push({ type: 'worst', item });

@@ -56,6 +56,12 @@ export interface DesignEvaluation {
   samples: Map<ChallengeName, Float64Array[]>;
   /** What each realization stands for when it is not its index (regional: epicentre ids). */
   labels: Map<ChallengeName, string[]>;
+  /**
+   * Set by a sequential run (the gate's stopping rule): its random requirements are judged by
+   * confidence sequences, and `needed` holds, by requirement id, the realizations after which
+   * each decision stayed settled.
+   */
+  sequential?: { needed: Map<string, number> };
 }
 
 /** Default work budget in element visits (see above); about a minute of engine time. */
@@ -203,6 +209,78 @@ export function evaluateDesign(g: CompactGraph, spec: EvaluationSpec): DesignEva
   const plan = planEvaluation(g, spec);
   const tasks = planTasks(plan, g);
   return assembleEvaluation(g, plan, tasks, tasks.map((t) => runTask(g, plan, t)));
+}
+
+/**
+ * An evaluation run in stages: the first stage runs every task but the random bands beyond the
+ * first batch; later stages add band realizations by index range (engine.ts BATCH), so the
+ * realizations a snapshot holds are exactly those of a full run with the same plan. Regional
+ * bands (one realization per epicentre) run whole in the first stage.
+ */
+export interface StagedEvaluation {
+  g: CompactGraph;
+  plan: EvaluationPlan;
+  tasks: Task[];
+  results: (TaskResult | undefined)[];
+}
+
+export function stageEvaluation(g: CompactGraph, spec: EvaluationSpec): StagedEvaluation {
+  const plan = planEvaluation(g, spec);
+  const tasks = planTasks(plan, g);
+  return { g, plan, tasks, results: new Array(tasks.length).fill(undefined) };
+}
+
+function staged(it: PlannedChallenge): boolean {
+  return it.type === 'band' && it.params.challenge !== 'regional';
+}
+
+/** Most realizations a staged band of this evaluation runs (0 when it has none). */
+export function stagedMaximum(st: StagedEvaluation): number {
+  return Math.max(0, ...st.plan.items.filter(staged).map((it) => it.params.realizations));
+}
+
+/** Indices of the tasks not yet run that realizations below `upto` need (and every other task). */
+export function pendingTasks(st: StagedEvaluation, upto: number): number[] {
+  const out: number[] = [];
+  st.tasks.forEach((t, i) => {
+    if (st.results[i] !== undefined) return;
+    if (t.type === 'band' && staged(st.plan.items[t.item]) && t.from >= upto) return;
+    out.push(i);
+  });
+  return out;
+}
+
+/**
+ * The evaluation of the realizations below `upto` (all tasks it needs must have run). A band
+ * stopped before the count its plan allows records that count as `maxRealizations`, and loses
+ * the note that the budget reduced it: the budget did not decide where it stopped.
+ */
+export function snapshotEvaluation(st: StagedEvaluation, upto: number): DesignEvaluation {
+  const items = st.plan.items.map((it) => {
+    if (!staged(it) || it.params.realizations <= upto) return it;
+    const degraded = (it.degraded ?? '').split('; ').filter((d) => d !== '' && !d.startsWith('realizations reduced from')).join('; ');
+    const out: PlannedChallenge = { ...it, params: { ...it.params, realizations: upto } };
+    if (degraded) out.degraded = degraded;
+    else delete out.degraded;
+    return out;
+  });
+  const plan: EvaluationPlan = { ...st.plan, items, degraded: items.flatMap((it) => (it.degraded ? [`${it.params.challenge}: ${it.degraded}`] : [])) };
+  const keep = st.tasks.map((_t, i) => i).filter((i) => {
+    const t = st.tasks[i];
+    return !(t.type === 'band' && staged(st.plan.items[t.item]) && t.from >= upto);
+  });
+  const results = keep.map((i) => {
+    const r = st.results[i];
+    if (r === undefined) throw new Error(`task ${i} has not run`);
+    return r;
+  });
+  const out = assembleEvaluation(st.g, plan, keep.map((i) => st.tasks[i]), results);
+  st.plan.items.forEach((it, i) => {
+    if (items[i] === it) return;
+    const env = out.evaluation.envelopes.find((e) => e.challenge === it.params.challenge);
+    if (env) env.maxRealizations = it.params.realizations;
+  });
+  return out;
 }
 
 export function structureSummary(g: CompactGraph): StructureSummary {

@@ -21,7 +21,7 @@ import { gridMean, sortedColumn } from './summary.js';
 import type { Envelope } from './types.js';
 import type { ChallengeName } from '../challenges/types.js';
 import type { DesignEvaluation } from './evaluate.js';
-import { round12 } from '../challenges/grid.js';
+import { gridIndex as indexOnGrid } from '../challenges/grid.js';
 import { countAt, valueAtCount } from '../challenges/units.js';
 
 export type Statistic = { kind: 'quantile'; q: number } | { kind: 'mean' } | { kind: 'min' } | { kind: 'area' } | { kind: 'spread' };
@@ -75,7 +75,7 @@ function deterministic(base: number, head: number): PairedStatistic {
 
 function gridIndex(env: Envelope, x: number | undefined, what: string): number {
   if (x === undefined) throw new RangeError(`${env.challenge}: the ${what} needs x`);
-  const j = env.x.indexOf(round12(x));
+  const j = indexOnGrid(env.x, x);
   if (j < 0) throw new RangeError(`${env.challenge}: x = ${x} is not a grid point (grid: ${env.x.join(', ')}); add it to the challenge's "at"`);
   return j;
 }

@@ -57,6 +57,8 @@ export interface Envelope {
   xUnit: 'fraction' | 'km';
   x: number[];
   realizations: number;
+  /** Set when a sequential run stopped before the realizations its plan allowed: that count. */
+  maxRealizations?: number;
   seed: number;
   band: [number, number];
   min: number[];

@@ -103,7 +103,8 @@ export function notePairedCuts(result: DesignEvaluation, cuts: readonly PairedCu
   for (const cut of cuts) {
     if (cut.spec !== spec) continue;
     const env = result.evaluation.envelopes.find((e) => e.challenge === cut.challenge);
-    if (!env || env.realizations >= cut.from) continue;
+    // Stopped early by its decisions (maxRealizations): the budget did not decide the count.
+    if (!env || env.realizations >= cut.from || env.maxRealizations !== undefined) continue;
     const reason =
       `realizations reduced from ${cut.from} to ${env.realizations} by the work budget (${cut.maxWork} element visits), ` +
       'on base and head alike so that they stay paired';

@@ -54,6 +54,7 @@ import { judgeSpof } from './spof.js';
 const SPOF_RULES = new Set<Finding['rule']>(['new-bridge', 'new-cut-node', 'new-stranding-group', 'hardened-weak-point']);
 
 import { type DesignSide, locate, measure, type Measured } from './measure.js';
+import { decide, type Decision } from './decide.js';
 
 export type { DesignSide };
 
@@ -366,6 +367,14 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     subject: subjectOf(r, input.policy.challenges, m.higherIsBetter),
   };
   const findings: Finding[] = [];
+  // A sequential run: the random requirements are decided by confidence sequences (decide.ts).
+  const decision = m.missing === undefined && m.head !== null ? sequentialDecision(r, input, m, threshold) : undefined;
+  if (decision) {
+    const needed = head.result.sequential!.needed.get(r.id);
+    if (needed !== undefined) row.realizations = needed;
+    row.bounds = { head: decision.head, ...(decision.delta ? { delta: decision.delta } : {}) };
+  }
+  const byCs = decision !== undefined && !decision.needsAll;
   const elements = elementsOf(m.elements, head, input.base);
   const rule = THRESHOLD_RULE[r.kind as keyof typeof THRESHOLD_RULE];
   const extra = { requirement: r.id, ...numbers(m), ...(threshold !== null ? { threshold } : {}) };
@@ -406,8 +415,12 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
   }
 
   const j: Judging = { r, m, headValue: m.head, description, threshold, rule, elements, extra };
-  const floor = judgeFloor(j);
-  const weakening = judgeWeakening(j, input.policy.weakening, floor.status);
+  const floor = byCs && threshold !== null ? judgeFloorByCs(j, decision!, ranOf(input, r)) : judgeFloor(j);
+  const paired = m.base !== null && m.delta !== null && m.se !== null && m.unpaired === undefined;
+  const weakening =
+    byCs && paired && decision!.weakening !== undefined
+      ? judgeWeakeningByCs(m, decision!, { description, elements, extra, status: floor.status, severity: milder(input.policy.weakening.severity, r.severity), policy: input.policy, ran: ranOf(input, r) })
+      : judgeWeakening(j, input.policy.weakening, floor.status);
   row.status = weakening.status;
   findings.push(...floor.findings, ...weakening.findings);
   // The digits the judging was stated at, for views that word the row themselves.
@@ -419,6 +432,113 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     findings.push(finding(rule, 'notice', `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, status: 'reduced-work', line: 0 }));
   }
   return result();
+}
+
+/** The confidence-sequence decisions of a requirement in a sequential run, else undefined. */
+function sequentialDecision(r: Requirement, input: CompareInput, m: Measured, threshold: number | null): Decision | undefined {
+  const head = input.head!;
+  if (!head.result.sequential) return undefined;
+  const comparing = !input.thresholdsOnly && input.base !== undefined && m.base !== null && m.unpaired === undefined;
+  const challenge = 'challenge' in r ? input.policy.challenges.find((x) => x.name === r.challenge) : undefined;
+  return decide({
+    requirement: r,
+    challenge,
+    head: head.result,
+    ...(comparing ? { base: input.base!.result } : {}),
+    weakening: input.policy.weakening,
+    baseValue: comparing ? m.base : null,
+    threshold,
+    higherIsBetter: m.higherIsBetter,
+  });
+}
+
+/** Realizations the head's envelope of a requirement's challenge ran. */
+function ranOf(input: CompareInput, r: Requirement): number {
+  const c = 'challenge' in r ? input.policy.challenges.find((x) => x.name === r.challenge) : undefined;
+  return input.head!.result.evaluation.envelopes.find((e) => e.challenge === c?.engine)?.realizations ?? 0;
+}
+
+interface CsContext {
+  description: string;
+  elements: ReportElement[];
+  extra: Partial<Finding>;
+  /** The floor's verdict; a "short" is never softened. */
+  status: RowStatus;
+  severity: Severity;
+  policy: FilePolicy;
+  ran: number;
+}
+
+/** The head against its floor in a sequential run: short by the estimate, unsettled while the confidence sequence reaches past it, else holds. */
+function judgeFloorByCs(j: Judging, d: Decision, ran: number): { status: RowStatus; findings: Finding[] } {
+  const { r, m, headValue, description, threshold, rule, elements, extra } = j;
+  const meets = m.higherIsBetter ? headValue >= threshold! : headValue <= threshold!;
+  if (!meets || d.needsAll) return judgeFloor(j);
+  if (d.floor !== 'open') return { status: 'holds', findings: [] };
+  // Met by the estimate, but the confidence sequence still reaches past the limit at the most realizations allowed.
+  const edge = m.higherIsBetter ? d.head.lo : d.head.hi;
+  const dd = Math.max(decidingDecimals(headValue, threshold!), decidingDecimals(edge, threshold!));
+  const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
+  return {
+    status: 'unsettled',
+    findings: [
+      finding(
+        rule,
+        unsettledSeverity(r.severity),
+        `${description}: ${formatR(headValue, dd)} meets it, but after ${ran} realizations its confidence sequence still reaches ${formatR(edge, dd)}, so it is not settled${cut}`,
+        elements,
+        { ...extra, status: 'unsettled' },
+      ),
+    ],
+  };
+}
+
+/** A drop judged by the confidence sequence of the change: beyond, within, or (at the most realizations allowed) not settled. */
+function judgeWeakeningByCs(m: Measured, d: Decision, c: CsContext): { status: RowStatus; findings: Finding[] } {
+  const out = { status: c.status, findings: [] as Finding[] };
+  const base = m.base!;
+  const headValue = m.head!;
+  const drop = m.higherIsBetter ? -m.delta! : m.delta!;
+  if (drop <= SAME * Math.max(1, Math.abs(base)) && d.weakening !== 'beyond') return out;
+  const rule = c.policy.weakening;
+  const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(base));
+  const noise = rule.errorMultiple * m.se!;
+  const dropLo = m.higherIsBetter ? -d.delta!.hi : d.delta!.lo;
+  const dropHi = m.higherIsBetter ? -d.delta!.lo : d.delta!.hi;
+  const digits = (limit: number) => changeDecimals(base, headValue, m.higherIsBetter, limit);
+  const dd = Math.max(digits(allowance), digits(dropLo), digits(dropHi));
+  const verb = m.higherIsBetter ? 'dropped' : 'rose';
+  const change = `${verb} from ${formatR(base, dd)} to ${formatR(headValue, dd)} (\u0394 ${formatDelta(m.delta!, m.se, dd)})`;
+  const allowed = formatR(allowance, dd);
+  const range = `its confidence sequence puts the drop between ${formatR(dropLo, dd)} and ${formatR(dropHi, dd)} after ${c.ran} realizations`;
+  if (d.weakening === 'beyond') {
+    if (out.status !== 'short') out.status = 'weakened';
+    out.findings.push(finding('regression', c.severity, `${c.description}: ${change}, more than the allowed ${allowed}: ${range}`, c.elements, { ...c.extra, allowance, status: 'weakened' }));
+  } else if (d.weakening === 'open') {
+    if (out.status === 'holds') out.status = 'unsettled';
+    const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
+    out.findings.push(
+      finding(
+        'regression',
+        unsettledSeverity(c.severity),
+        `${c.description}: ${change}; ${range}, on both sides of the allowed ${allowed}, so it is not settled${cut}`,
+        c.elements,
+        { ...c.extra, allowance, status: 'unsettled' },
+      ),
+    );
+  } else if (drop < noise) {
+    if (out.status === 'holds') out.status = 'inside-error';
+    out.findings.push(
+      finding('regression', 'notice', `${c.description}: ${change}, less than ${rule.errorMultiple} \u00d7 its Monte Carlo error (${formatR(noise, dd)}): inside the error, not a failure; ${range}`, c.elements, {
+        ...c.extra,
+        allowance,
+        status: 'inside-error',
+      }),
+    );
+  } else {
+    out.findings.push(finding('regression', 'notice', `${c.description}: ${change}, within the allowed ${allowed}: ${range}`, c.elements, { ...c.extra, allowance, status: 'within-allowance' }));
+  }
+  return out;
 }
 
 /** Which status a judged file has, from its findings (only fail-severity findings change it). */

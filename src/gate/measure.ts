@@ -11,6 +11,7 @@ import { pairedStatistic, type Statistic } from '../envelope/pairing.js';
 import type { AttackCurve, Contingency, Envelope, RemovalSequence } from '../envelope/types.js';
 import type { ElementKind } from '../graph/element.js';
 import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
+import { gridIndex as indexOnGrid } from '../challenges/grid.js';
 import { sitesWithCoordinates } from '../challenges/regional.js';
 import { countAt, countOnes, eligibleUnits, unitCount, valueAtCount } from '../challenges/units.js';
 import { quantileEstimate } from '../envelope/quantiles.js';
@@ -94,7 +95,7 @@ function sequenceElements(seq: RemovalSequence | undefined, count = MAX_ELEMENTS
 }
 
 function gridIndex(env: Envelope, x: number): number {
-  return env.x.findIndex((v) => Math.abs(v - x) <= 1e-9 * Math.max(1, Math.abs(x)));
+  return indexOnGrid(env.x, x);
 }
 
 /** The engine's statistic for an envelope requirement. */
@@ -126,8 +127,10 @@ function realizationsOf(env: Envelope, c: ChallengeDef, g: CompactGraph): { ran:
 function reductionOf(c: ChallengeDef, head: DesignSide, env: Envelope, base?: DesignSide, baseEnv?: Envelope): Pick<Measured, 'reduced' | 'unpaired'> {
   const h = realizationsOf(env, c, head.graph);
   const b = base && baseEnv ? realizationsOf(baseEnv, c, base.graph) : undefined;
-  const headCut = h.ran < h.asked;
-  const baseCut = b !== undefined && b.ran < b.asked;
+  // A sequential run that stopped before the budget's count (maxRealizations) was settled by
+  // its decisions, not cut by the budget.
+  const headCut = env.maxRealizations === undefined && h.ran < h.asked;
+  const baseCut = b !== undefined && baseEnv!.maxRealizations === undefined && b.ran < b.asked;
   if (!headCut && !baseCut) return {};
   const out: Pick<Measured, 'reduced' | 'unpaired'> = {};
   if (b === undefined) out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations`;

@@ -73,6 +73,26 @@ export async function evaluateDesignParallel(
   return assembleEvaluation(g, plan, tasks, results);
 }
 
+/**
+ * Runs some of a plan's tasks (a batch of a sequential run, gate/sequential stopping in
+ * run-gate.ts) on up to `threads` worker threads, results in the order given; inline when the
+ * plan is small or one thread is asked.
+ */
+export async function runTasksParallel(g: CompactGraph, plan: EvaluationPlan, tasks: Task[], threads: number, options: ParallelOptions = {}): Promise<TaskResult[]> {
+  if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be an integer ≥ 1, got ${threads}`);
+  const workers = plan.work < (options.minWork ?? PARALLEL_MIN_WORK) ? 1 : Math.min(threads, tasks.length);
+  return workers <= 1 ? tasks.map((t) => runTask(g, plan, t)) : runOnWorkers(g, plan, tasks, workers);
+}
+
+/**
+ * The one wiring of worker threads into the gate (check, the Action, explain/map/mend): the
+ * gate's task runner on `threads` threads, or nothing (this thread) for one thread or none.
+ */
+export function threadedGate(threads: number | undefined): { runTasks?: (g: CompactGraph, plan: EvaluationPlan, tasks: Task[], n?: number) => Promise<TaskResult[]> } {
+  if (threads === undefined || threads <= 1) return {};
+  return { runTasks: (g, plan, tasks, n) => runTasksParallel(g, plan, tasks, n ?? threads) };
+}
+
 // Idle workers are kept between evaluations (a gate evaluates many designs), unreferenced so
 // that they never keep the process alive; one evaluation uses them at a time.
 const idle: Worker[] = [];

@@ -35,6 +35,10 @@ export interface RequirementResult {
    *  judged with enough confidence (never reported as holds); not-applicable: a tracked value
    *  (no floor) whose challenge does not apply to the design on either side (no risk groups). */
   status: 'holds' | 'short' | 'weakened' | 'inside-error' | 'unsettled' | 'not-applicable';
+  /** Realizations the decision needed (sequential runs, random challenges): see docs/METHODS.md §7.6. */
+  realizations?: number;
+  /** Confidence-sequence bounds of the head value and of the change after the realizations that ran. */
+  bounds?: { head?: { lo: number; hi: number }; delta?: { lo: number; hi: number } };
   /** What the requirement measures, as data, so that views word it themselves. */
   subject?: RequirementSubject;
   /** Decimals at which base, head and delta decide the judging (at least 3); absent: 3. */

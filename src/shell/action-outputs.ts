@@ -115,7 +115,7 @@ export function readmeUrl(env: Env): string | undefined {
   const server = env.GITHUB_SERVER_URL || 'https://github.com';
   const repo = env.GITHUB_ACTION_REPOSITORY ?? '';
   const ref = env.GITHUB_ACTION_REF ?? '';
-  if (!/^[A-Za-z0-9_.-]+\/[A-Za-z0-9_.-]+$/.test(repo) || !/^[A-Za-z0-9_.\/-]+$/.test(ref) || ref.includes('..')) return undefined;
+  if (!/^[A-Za-z0-9_.-]+\/[A-Za-z0-9_.-]+$/.test(repo) || !/^[A-Za-z0-9_./-]+$/.test(ref) || ref.includes('..')) return undefined;
   return `${server}/${repo}/blob/${ref}/README.md`;
 }
 

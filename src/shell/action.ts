@@ -2,7 +2,7 @@
 // whose run() turns every error into one setFailed; the catch here is the last resort.
 import { availableParallelism } from 'node:os';
 import * as core from '@actions/core';
-import { evaluateDesignParallel } from '../parallel/pool.js';
+import { threadedGate } from '../parallel/pool.js';
 import { renderHtml } from '../report/html.js';
 import { joinReports, runGate } from '../run-gate.js';
 import { defaultGithub } from './action-comment.js';
@@ -14,7 +14,7 @@ run(process.env, {
   gate: (request, root) => {
     // Worker threads on every core the runner gives (the result does not depend on the count).
     const threads = request.threads ?? availableParallelism();
-    return runGate(request, { ...gitDeps(root), ...(threads > 1 ? { evaluate: (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) } : {}) });
+    return runGate(request, { ...gitDeps(root), ...threadedGate(threads) });
   },
   join: joinReports,
   git: (args, cwd) => runGit(cwd, args),

@@ -4,7 +4,7 @@
 
 import path from 'node:path';
 import { UsageError } from '../errors.js';
-import { evaluateDesignParallel } from '../parallel/pool.js';
+import { threadedGate } from '../parallel/pool.js';
 import type { FileReport, Report } from '../report/report.js';
 import { runGate, type GateDeps, type GateRequest } from '../run-gate.js';
 import { ensureCommit, gitDeps, mergeBase, repoRoot, revParse } from './git.js';
@@ -54,7 +54,7 @@ export async function judgeOneDesign(file: string, v: OneDesignValues, io: Comma
   const request: GateRequest = { policySource: 'base', mode: 'block', eventKind: 'local', worktree: true, ...views };
   if (seed !== undefined) request.seed = seed;
   if (threads !== undefined) request.threads = threads;
-  const evaluate: GateDeps['evaluate'] = threads !== undefined && threads > 1 ? (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) : undefined;
+  const threaded = threadedGate(threads);
   const root = await repoRoot(io.cwd);
   let deps: GateDeps;
   let top: string;
@@ -71,7 +71,7 @@ export async function judgeOneDesign(file: string, v: OneDesignValues, io: Comma
       request.base = (headSha && (await mergeBase(root, b, headSha))) ?? b;
     } else if (headSha) request.base = headSha;
   }
-  if (evaluate) deps = { ...deps, evaluate };
+  deps = { ...deps, ...threaded };
   const rel = relative(top, io.cwd, file);
   request.paths = [rel];
   if (v.policy !== undefined) request.policyPath = relative(top, io.cwd, v.policy);

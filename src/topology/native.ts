@@ -14,6 +14,7 @@ import { TopologyBuilder, type BuilderOptions } from './builder.js';
 import { didYouMean } from './suggest.js';
 import { firstNonNormal, quantityProblem, type Quantity } from './quantities.js';
 import { MAX_NESTING, positionOf, yamlNestingExceeded } from './nesting.js';
+import { lineColumn, readFastYaml, type FastYaml } from './fast-yaml.js';
 
 /**
  * Aliases a document may expand. Real designs rarely use anchors at all; the yaml package's
@@ -35,8 +36,54 @@ function validate(): ValidateFunction {
 
 type Path = (string | number)[];
 
+/** What the design reader asks of either YAML reader about where things are written. */
+interface Positions {
+  pos(path: Path): SourcePos;
+  keyPos(path: Path, name: string): SourcePos;
+  source(path: Path): string | undefined;
+  written(path: Path, prefix: string, suffix: string): string;
+}
+
+/** Positions from the fast reader's offsets (paths that exist; errors go to the full reader). */
+class FastLocator implements Positions {
+  constructor(private readonly y: FastYaml) {}
+
+  /** The parent collection of the value at `path` and the child's index in its offsets. */
+  private slot(path: Path): { at: number; src: string | undefined } | undefined {
+    let cur: unknown = this.y.data;
+    let found: { at: number; src: string | undefined } | undefined;
+    for (const key of path) {
+      if (cur === null || typeof cur !== 'object') return undefined;
+      found = this.y.child(cur, key);
+      if (!found) return undefined;
+      cur = (cur as Record<string | number, unknown>)[key];
+    }
+    return found;
+  }
+
+  pos(path: Path): SourcePos {
+    const s = this.slot(path);
+    if (s) return lineColumn(this.y.lineStarts, s.at);
+    const w = path.length === 0 && typeof this.y.data === 'object' && this.y.data ? this.y.start(this.y.data) : undefined;
+    return w !== undefined ? lineColumn(this.y.lineStarts, w) : { line: 1, column: 1 };
+  }
+
+  keyPos(path: Path): SourcePos {
+    return this.pos(path);
+  }
+
+  source(path: Path): string | undefined {
+    return this.slot(path)?.src;
+  }
+
+  written(path: Path, prefix: string, suffix: string): string {
+    const s = this.source(path);
+    return s === undefined ? '' : `${prefix}${s}${suffix}`;
+  }
+}
+
 /** Finds source positions in the parsed YAML document. */
-class Locator {
+class Locator implements Positions {
   constructor(
     private readonly doc: Document,
     private readonly lines: LineCounter,
@@ -145,7 +192,7 @@ const TYPE_WORDS: Readonly<Record<string, string>> = {
 };
 
 /** One ajv error as a located DesignError. */
-function toDesignError(e: ErrorObject, file: string, loc: Locator): DesignError {
+function toDesignError(e: ErrorObject, file: string, loc: Positions): DesignError {
   const path = splitPointer(e.instancePath);
   const where = (pos: SourcePos) => ({ file, line: pos.line, column: pos.column });
   const what = pathText(path);
@@ -199,7 +246,7 @@ function toDesignError(e: ErrorObject, file: string, loc: Locator): DesignError 
 }
 
 /** The error a user should fix first: the earliest in the file. */
-function firstError(errors: readonly ErrorObject[], file: string, loc: Locator): DesignError {
+function firstError(errors: readonly ErrorObject[], file: string, loc: Positions): DesignError {
   const located = errors.map((e) => toDesignError(e, file, loc));
   located.sort((a, b) => a.line - b.line || a.column - b.column);
   return located[0];
@@ -225,7 +272,20 @@ interface NativeDesign {
   metadata?: Record<string, unknown>;
 }
 
-export function parseNative(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'native-yaml'): Topology {
+export function parseNative(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'native-yaml', fast = true): Topology {
+  // The fast reader first (fast-yaml.ts); it declines what it does not cover. Anything the
+  // design gets wrong is then reported by the full reader below, so every message and
+  // position a user sees comes from one place.
+  if (fast && format === 'native-yaml') {
+    const read = readFastYaml(text);
+    if (read) {
+      try {
+        return buildDesign(read.data, new FastLocator(read), [], file, options, format);
+      } catch {
+        // fall through: the full reader gives the located message
+      }
+    }
+  }
   const kindWord = format === 'native-json' ? 'JSON' : 'YAML';
   const deep = yamlNestingExceeded(text);
   if (deep >= 0) {
@@ -271,7 +331,19 @@ export function parseNative(text: string, file: string, options: BuilderOptions 
   if (data === null || data === undefined) {
     throw new DesignError(`the ${kindWord} design is empty`, { file, line: 1, column: 1 }, 'a design needs at least `nodes:`');
   }
+  return buildDesign(data, loc, doc.warnings.map((w) => ({ message: w.message, pos: loc.at(w.pos[0]) })), file, options, format);
+}
 
+/** The plain values of a design (from either reader) → its Topology, or a located error. */
+function buildDesign(
+  data: unknown,
+  loc: Positions,
+  warnings: readonly { message: string; pos: SourcePos }[],
+  file: string,
+  options: BuilderOptions,
+  format: DesignFormat,
+): Topology {
+  const kindWord = format === 'native-json' ? 'JSON' : 'YAML';
   // Before the schema, which would call Infinity "not a number" without saying why.
   const odd = firstNonNormal(data, [], new Set(['metadata']));
   if (odd) {
@@ -291,7 +363,7 @@ export function parseNative(text: string, file: string, options: BuilderOptions 
   };
 
   const b = new TopologyBuilder(file, format, { ...options, duplicateLinkIds: 'error' });
-  for (const w of doc.warnings) b.warn(`${kindWord}: ${w.message.split('\n')[0]}`, loc.at(w.pos[0]));
+  for (const w of warnings) b.warn(`${kindWord}: ${w.message.split('\n')[0]}`, w.pos);
 
   d.nodes.forEach((n, i) => {
     b.addNode({

@@ -7,7 +7,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { evaluateDesign } from '../../src/envelope/evaluate.js';
 import { compileTopology } from '../../src/graph/compact.js';
-import { closeWorkers, evaluateDesignParallel } from '../../src/parallel/pool.js';
+import { closeWorkers, evaluateDesignParallel, runTasksParallel } from '../../src/parallel/pool.js';
 import { loadPolicy, policyForFile } from '../../src/policy/resolve.js';
 import { serializeReport } from '../../src/report/report.js';
 import { evaluationSpecs } from '../../src/gate-request.js';
@@ -45,7 +45,8 @@ function applyRemovals(text: string, patch: string): string {
 }
 
 /** The engine on worker threads, always (no inline shortcut for small work). */
-const threaded: GateDeps['evaluate'] = (g, spec, n) => evaluateDesignParallel(g, spec, n ?? 1, { minWork: 0 });
+// The gate's batches of a sequential run, on worker threads even when the work is small.
+const threaded: GateDeps['runTasks'] = (g, plan, tasks, n) => runTasksParallel(g, plan, tasks, n ?? 1, { minWork: 0 });
 
 let compared = 0;
 
@@ -77,7 +78,7 @@ describe('the gate', () => {
     const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block' };
     const reports: string[] = [];
     for (const threads of [1, 2, 4]) {
-      const { report } = await runGate({ ...request, threads }, memoryDeps(repo, { evaluate: threaded }));
+      const { report } = await runGate({ ...request, threads }, memoryDeps(repo, { runTasks: threaded }));
       reports.push(serializeReport(report));
       compared++;
     }
@@ -92,7 +93,7 @@ describe('the gate', () => {
     const repo = pairRepo('removed-node');
     const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block' };
     const threads = [1, 2, 4, 1, 2, 4, 1, 2, 4, 2];
-    const runs = await Promise.all(threads.map((n) => runGate({ ...request, threads: n }, memoryDeps(repo, { evaluate: threaded }))));
+    const runs = await Promise.all(threads.map((n) => runGate({ ...request, threads: n }, memoryDeps(repo, { runTasks: threaded }))));
     const bytes = runs.map((r) => serializeReport(r.report));
     for (const b of bytes) expect(b).toBe(bytes[0]);
     compared += bytes.length;

@@ -5,7 +5,7 @@
 import { mkdir, stat, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { UsageError } from '../../errors.js';
-import { evaluateDesignParallel } from '../../parallel/pool.js';
+import { threadedGate } from '../../parallel/pool.js';
 import { renderHtml } from '../../report/html.js';
 import { renderSummary } from '../../report/markdown.js';
 import { serializeReport, type Report } from '../../report/report.js';
@@ -132,7 +132,7 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
   if (threads !== undefined) request.threads = threads;
   const part = sharedOption('--part', v.part, PART, 'e.g. --part 2/4');
   if (part) request.part = part;
-  const evaluate: GateDeps['evaluate'] = threads !== undefined && threads > 1 ? (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) : undefined;
+  const threaded = threadedGate(threads);
 
   const root = await repoRoot(io.cwd);
   if (root === null) {
@@ -141,7 +141,7 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
     request.worktree = true;
     request.paths = positionals.map((p) => path.relative(io.cwd, path.resolve(io.cwd, p)).split(path.sep).join('/'));
     if (v.policy !== undefined) request.policyPath = path.relative(io.cwd, path.resolve(io.cwd, v.policy)).split(path.sep).join('/');
-    return { request, deps: { ...plainDeps(io.cwd), ...(evaluate ? { evaluate } : {}) } };
+    return { request, deps: { ...plainDeps(io.cwd), ...threaded } };
   }
 
   const worktree = v.head === undefined;
@@ -160,7 +160,7 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
   if (positionals.length > 0) request.paths = positionals.map((p) => repoPath(root, io.cwd, p));
   if (v.policy !== undefined) request.policyPath = repoPath(root, io.cwd, v.policy);
   if (v['org-policy'] !== undefined) request.orgPolicyPath = repoPath(root, io.cwd, v['org-policy']);
-  return { request, deps: { ...gitDeps(root), ...(evaluate ? { evaluate } : {}) } };
+  return { request, deps: { ...gitDeps(root), ...threaded } };
 }
 
 /**

@@ -1,0 +1,15 @@
+import { preferentialGraph } from '../envelope/graphs.js';
+import { createMask } from '../../src/graph/mask.js';
+import { efficiency } from '../../src/metrics/efficiency.js';
+const g = preferentialGraph(1000, 2, 1);
+const mask = createMask(g);
+const ev = efficiency.create(g);
+for (let i = 0; i < 20; i++) ev(mask);
+let t = performance.now();
+const N = 50; let v = 0;
+for (let i = 0; i < N; i++) v = ev(mask).raw;
+console.log('n', g.n, 'm', g.m, 'ms/eval intact', ((performance.now() - t) / N).toFixed(2), v);
+for (let e = 0; e < g.m; e += 2) mask.link[e] = 1;
+t = performance.now();
+for (let i = 0; i < N; i++) v = ev(mask).raw;
+console.log('ms/eval half links', ((performance.now() - t) / N).toFixed(2), v);
