@@ -15,6 +15,7 @@ import { compileTopology, graphFromEdges, type CompactGraph } from '../../src/gr
 import { createMask } from '../../src/graph/mask.js';
 import { getMetric } from '../../src/metrics/registry.js';
 import { EXTREMAL_DENSE_LIMIT, TRACE_DENSE_LIMIT } from '../../src/metrics/kernels/spectral-survivors.js';
+import { NATURAL_DENSE_LIMIT } from '../../src/metrics/natural-connectivity.js';
 import type { MetricOptions } from '../../src/metrics/types.js';
 import type { Topology } from '../../src/topology/model.js';
 
@@ -91,7 +92,8 @@ function close(actual: number, expected: number | null, tol: number, what: strin
 /** Which tolerance applies to a metric on a graph of n nodes with default options. */
 function tolerance(id: string, n: number): number | 'estimate' {
   if ((id === 'algebraic_connectivity' || id === 'spectral_radius') && n > EXTREMAL_DENSE_LIMIT) return 1e-6;
-  if ((id === 'effective_resistance' || id === 'natural_connectivity') && n > TRACE_DENSE_LIMIT) return 'estimate';
+  if (id === 'effective_resistance' && n > TRACE_DENSE_LIMIT) return 'estimate';
+  if (id === 'natural_connectivity' && n > NATURAL_DENSE_LIMIT) return 'estimate';
   return 1e-9;
 }
 

@@ -41,8 +41,16 @@ export interface HopHistogram {
   maxDistance: number;
 }
 
-/** From this eccentricity of the first source on, searches run one source at a time. */
+/**
+ * Searches run one source at a time in a component where the first source's eccentricity is
+ * at least LONG_GRAPH_ECCENTRICITY and its levels are thin: fewer than THIN_LEVEL nodes each
+ * on average (component size < THIN_LEVEL · (eccentricity + 1)). Measured crossovers: rings
+ * and 10×100 grids favour one source at a time, a 30×30 grid (eccentricity 58) and
+ * Barabási–Albert graphs with 60 % of their links cut (eccentricity 19) favour the batches,
+ * by 2.5× and 13× — eccentricity alone was the wrong test.
+ */
 export const LONG_GRAPH_ECCENTRICITY = 12;
+export const THIN_LEVEL = 12;
 
 /** Bit planes of the per-source counters: counts up to 2^PLANES − 1 targets per level. */
 const PLANES = 24;
@@ -56,9 +64,9 @@ export interface HopKernel {
 }
 
 /** A histogram kernel for graphs of up to `capacity` nodes. */
-export function createHopHistogram(capacity: number): HopKernel {
+export function createHopHistogram(capacity: number, longEccentricity = LONG_GRAPH_ECCENTRICITY): HopKernel {
   const cap = Math.max(1, capacity);
-  const k = new BfsScratch(cap);
+  const k = new BfsScratch(cap, longEccentricity);
   return { run: (graph, sources, count, perSource) => k.run(graph, sources, count, perSource) };
 }
 
@@ -88,7 +96,10 @@ class BfsScratch {
   readonly full = new Uint32Array(8);
   readonly result: HopHistogram;
 
-  constructor(cap: number) {
+  constructor(
+    cap: number,
+    private readonly longEccentricity: number,
+  ) {
     this.newOf = new Int32Array(cap);
     this.order = new Int32Array(cap);
     this.compStart = new Int32Array(cap + 1);
@@ -125,11 +136,10 @@ class BfsScratch {
       const lo = this.compStart[c];
       const hi = this.compStart[c + 1];
       if (hi - lo < 2) continue;
-      // A level sweep costs the whole component; on long, thin ones (many levels) one plain
-      // BFS per source is cheaper. The first source's eccentricity decides (a rough crossover
-      // seen on zoo networks).
+      // A level sweep costs the whole component; on long, thin ones (many levels of few
+      // nodes) one plain BFS per source is cheaper. The first source's search decides.
       const ecc = this.single(this.srcSorted[s0], perSource, this.srcIndex[s0]);
-      if (ecc >= LONG_GRAPH_ECCENTRICITY) {
+      if (ecc >= this.longEccentricity && hi - lo < THIN_LEVEL * (ecc + 1)) {
         for (let i = s0 + 1; i < s1; i++) this.single(this.srcSorted[i], perSource, this.srcIndex[i]);
         continue;
       }

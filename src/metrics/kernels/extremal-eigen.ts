@@ -10,6 +10,9 @@ import { createLanczos } from './lanczos.js';
 import { createAdjacencyOperator, createLaplacianOperator } from './operators.js';
 import type { LocalGraph } from './subgraph.js';
 
+/** Lanczos basis size for the Fiedler value (see below). */
+export const FIEDLER_BASIS = 48;
+
 export function createExtremalSolver(
   g: CompactGraph,
   kind: 'fiedler' | 'radius',
@@ -19,7 +22,11 @@ export function createExtremalSolver(
   const limit = Math.min(g.n, denseLimit);
   const fiedler = kind === 'fiedler';
   const dense = createDenseSpectrum(limit);
-  const lanczos = createLanczos(g.n, 1);
+  // The Fiedler value sits in the clustered low end of the Laplacian spectrum: a basis of 48
+  // restarts far less often there (operator applications on a 20,000-node Barabási–Albert
+  // graph: 10,284 with 24, 2,664 with 48; modelled work, reorthogonalisation included, halves).
+  // λ₁ is well separated and converges with the default 24.
+  const lanczos = createLanczos(g.n, 1, fiedler ? FIEDLER_BASIS : undefined);
   const op = fiedler ? createLaplacianOperator() : createAdjacencyOperator();
   const one = new Float64Array(fiedler ? g.n : 0);
   const previous = new Float64Array(warmStart ? g.n : 0);

@@ -14,7 +14,14 @@ import type { SymmetricOperator } from './lanczos.js';
 import { tridiagonalEigen } from './symmetric-eigen.js';
 
 export interface TraceOptions {
+  /** Probes (the fixed count; with `targetSe`, the least). */
   probes: number;
+  /**
+   * With it, probes continue in blocks of `probes` until the standard error of the mean is at
+   * most targetSe(mean so far) (in the trace's units) or `maxProbes` is reached.
+   */
+  targetSe?: (mean: number) => number;
+  maxProbes?: number;
   /** Most Lanczos steps per probe. */
   steps: number;
   /** Stop a probe when the quadrature changes by less than this, relatively. */
@@ -61,16 +68,40 @@ export function createTraceEstimator(capacity: number, maxSteps: number) {
       dc: number,
       opts: TraceOptions,
     ): number {
+      return this.estimateWithError(op, f, keys, defl, dc, opts).mean;
+    },
+
+    /**
+     * The estimate and its standard error: the probes' sample standard deviation over √probes
+     * (each probe is an unbiased Hutchinson sample of the trace, up to the quadrature's error,
+     * which `tol` keeps far below it).
+     */
+    estimateWithError(
+      op: SymmetricOperator,
+      f: (x: number) => number,
+      keys: Int32Array,
+      defl: Float64Array,
+      dc: number,
+      opts: TraceOptions,
+    ): { mean: number; se: number; probes: number } {
       const n = op.n;
-      if (n - dc <= 0) return 0;
+      if (n - dc <= 0) return { mean: 0, se: 0, probes: 0 };
       const steps = Math.min(opts.steps, maxSteps, n - dc);
+      const most = opts.targetSe !== undefined ? Math.max(opts.probes, opts.maxProbes ?? opts.probes) : opts.probes;
       let total = 0;
-      for (let p = 0; p < opts.probes; p++) {
+      let squares = 0;
+      let p = 0;
+      for (; p < most; p++) {
+        if (opts.targetSe !== undefined && p >= opts.probes && p % opts.probes === 0) {
+          const mean = total / p;
+          const se = Math.sqrt(Math.max(0, squares / p - mean * mean) / (p - 1));
+          if (se <= opts.targetSe(mean)) break;
+        }
         for (let i = 0; i < n; i++) q[i] = sign(keys[i], 0x51a7 + p);
         deflate(q, n, defl, dc);
         let nz2 = 0;
         for (let i = 0; i < n; i++) nz2 += q[i] * q[i];
-        if (nz2 === 0) continue;
+        if (nz2 === 0) continue; // counts as a sample of 0
         const inv = 1 / Math.sqrt(nz2);
         for (let i = 0; i < n; i++) {
           q[i] *= inv;
@@ -108,8 +139,11 @@ export function createTraceEstimator(capacity: number, maxSteps: number) {
           betaPrev = beta;
         }
         total += nz2 * estimate;
+        squares += (nz2 * estimate) ** 2;
       }
-      return total / opts.probes;
+      const mean = total / p;
+      const se = p > 1 ? Math.sqrt((Math.max(0, squares / p - mean * mean) * p) / (p - 1) / p) : Number.POSITIVE_INFINITY;
+      return { mean, se, probes: p };
     },
   };
 }
