@@ -34,8 +34,8 @@
 // by newly hardened ones are findings of their own. Each kind is a row of its own.
 
 import type { ElementKind } from '../envelope/types.js';
-import type { Finding, FileReport, FileStatus, FindingStatus, ReportElement, RequirementResult, Severity } from '../report/report.js';
-import type { FilePolicy, Requirement } from '../policy/types.js';
+import type { Finding, FileReport, FileStatus, FindingStatus, ReportElement, RequirementResult, RequirementSubject, Severity } from '../report/report.js';
+import type { ChallengeDef, FilePolicy, Requirement } from '../policy/types.js';
 import { withSequenceDetails } from './consequence.js';
 import {
   changeDecimals,
@@ -133,6 +133,29 @@ function numbers(m: Measured): Pick<Finding, 'base' | 'head' | 'delta' | 'se'> {
   return { base: m.base, head: m.head, delta: m.delta, se: m.se };
 }
 
+/** What a requirement measures, as data for the views (RequirementResult.subject). */
+function subjectOf(r: Requirement, challenges: readonly ChallengeDef[], higherIsBetter: boolean): RequirementSubject {
+  const subject: RequirementSubject = { kind: r.kind, higherIsBetter };
+  if (r.kind === 'n-1') {
+    subject.remove = r.element === 'node' ? 'nodes' : 'links';
+    return subject;
+  }
+  if (!('challenge' in r)) return subject;
+  subject.challenge = r.challenge;
+  const c = challenges.find((x) => x.name === r.challenge);
+  if (c) {
+    subject.remove = c.remove;
+    subject.order = c.random ? 'random' : c.order;
+    if (c.adaptive) subject.adaptive = true;
+  }
+  if (r.kind === 'r-threshold') {
+    if (r.at !== undefined) subject.at = r.at;
+    const st = r.statistic;
+    subject.statistic = st.kind === 'quantile' ? { kind: 'quantile', q: st.q } : st.kind === 'worst-case' ? { kind: 'worst-case', removals: st.removals } : { kind: st.kind };
+  }
+  return subject;
+}
+
 function floorOf(r: Requirement): number | null {
   if (r.kind === 'spread-ceiling') return r.max;
   if (r.kind === 'no-new-spof') return null;
@@ -180,6 +203,7 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     se: m.se,
     threshold,
     status: 'holds',
+    subject: subjectOf(r, input.policy.challenges, m.higherIsBetter),
   };
   const findings: Finding[] = [];
   const elements = elementsOf(m.elements, head, input.base);
@@ -231,7 +255,9 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
   if (threshold !== null && !meets(headValue, threshold)) {
     row.status = 'short';
     const relation = m.higherIsBetter ? 'is below' : 'is above';
-    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short' }));
+    const d = decidingDecimals(headValue, threshold);
+    if (d > 3) row.decimals = d;
+    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short', ...(d > 3 ? { decimals: d } : {}) }));
   } else if (threshold !== null && m.incomplete !== undefined) {
     // Met by incomplete work: not proven, so not "holds".
     row.status = 'unsettled';
@@ -322,7 +348,8 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
       const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (\u0394 ${formatDelta(m.delta, m.se, d)})`;
       const allowed = formatR(allowance, d);
       const k = policyRule.errorMultiple;
-      const data = { ...extra, allowance, status: outcome };
+      const data = { ...extra, allowance, status: outcome, ...(d > 3 ? { decimals: d } : {}) };
+      if (d > 3) row.decimals = Math.max(row.decimals ?? 3, d);
       if (outcome === 'weakened') {
         if (row.status !== 'short') row.status = 'weakened';
         const beyond = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';

@@ -3,6 +3,7 @@
 // attributes changed on elements both sides have.
 
 import type { CompactGraph } from '../graph/compact.js';
+import { formatDelta, formatFixed } from '../report/format.js';
 import { reportElement } from '../graph/element.js';
 import type { ChallengeDef, Requirement } from '../policy/types.js';
 import type { AttributeChange, FileReport, ReportElement } from '../report/report.js';
@@ -15,12 +16,7 @@ const WHAT: Record<string, string> = { nodes: 'nodes', links: 'links', 'risk-gro
 const MAX_DECIMALS = 12;
 
 /** R values and deltas: three decimals (or more when asked), a true minus sign, no "-0.000". */
-export function formatR(x: number, decimals = 3): string {
-  if (!Number.isFinite(x)) return String(x);
-  const s = x.toFixed(decimals);
-  if (/^-0\.0+$/.test(s)) return s.slice(1);
-  return s.replace(/^-/, '\u2212');
-}
+export const formatR = formatFixed;
 
 /**
  * The fewest decimals (at least `min`) at which `a` and `b` print differently, so that a message
@@ -54,12 +50,8 @@ export function changeDecimals(base: number, head: number, higherIsBetter: boole
   return MAX_DECIMALS;
 }
 
-/** A signed delta with its standard error, both at `decimals` decimals: "−0.0104 ± 0.0020". */
-export function formatDelta(delta: number, se: number | null, decimals = 3): string {
-  const sign = delta > 0 && formatR(delta, decimals) !== formatR(0, decimals) ? '+' : '';
-  const err = se !== null && se > 0 ? ` \u00b1 ${Number.isFinite(se) ? se.toFixed(decimals) : 'unknown'}` : '';
-  return `${sign}${formatR(delta, decimals)}${err}`;
-}
+/** A signed delta with its standard error, both at `decimals` decimals: "−0.0104 ± 0.0020" (report/format.ts). */
+export { formatDelta };
 
 function percent(x: number): string {
   return `${Number((x * 100).toFixed(6))} %`;

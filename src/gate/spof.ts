@@ -95,6 +95,7 @@ export function judgeSpof(
     se: before ? 0 : null,
     threshold: null,
     status: 'holds',
+    subject: { kind: 'no-new-spof', higherIsBetter: false },
   }));
   const findings: Finding[] = [];
   if (!base || !before || !matching) return { rows, findings };

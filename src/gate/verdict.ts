@@ -4,8 +4,9 @@
 // the exit code is 0.
 
 import type { FileReport, FileStatus, Report } from '../report/report.js';
+import { FILE_STATUSES, fileFails } from '../report/vocabulary.js';
 
-export const FILE_STATUSES: readonly FileStatus[] = ['holds', 'weakened', 'below-floor', 'new', 'removed', 'renamed', 'unreadable'];
+export { FILE_STATUSES };
 
 export function countStatuses(files: readonly FileReport[]): Record<FileStatus, number> {
   const counts = Object.fromEntries(FILE_STATUSES.map((s) => [s, 0])) as Record<FileStatus, number>;
@@ -14,7 +15,7 @@ export function countStatuses(files: readonly FileReport[]): Record<FileStatus, 
 }
 
 export function verdictOf(files: readonly FileReport[]): 'pass' | 'fail' {
-  const failed = files.some((f) => f.status === 'unreadable' || f.findings.some((x) => x.severity === 'fail'));
+  const failed = files.some(fileFails);
   return failed ? 'fail' : 'pass';
 }
 

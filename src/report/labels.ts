@@ -3,6 +3,13 @@
 
 import type { ChallengeName, ElementKind } from '../envelope/types.js';
 import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, Report, RequirementResult } from './report.js';
+import { FILE_STATUS_WORD } from './vocabulary.js';
+import { formatDelta, formatValue } from './format.js';
+
+// The shared words and numbers live in vocabulary.ts and format.ts; re-exported for the views.
+export { formatDelta, formatError, formatValue, shortRevision } from './format.js';
+export { REQUIREMENT_STATUS_WORD, fileFails, fileWarns } from './vocabulary.js';
+export const STATUS_WORD = FILE_STATUS_WORD;
 
 
 const CHALLENGE_LABEL: Record<ChallengeName, string> = {
@@ -42,12 +49,6 @@ export function xAxisLabel(kind: ElementKind, xUnit: 'fraction' | 'km'): string 
   return xUnit === 'km' ? 'outage radius (km)' : `fraction of ${kindPlural(kind)} removed`;
 }
 
-/** A value of R or a metric: three decimals, a real minus sign, "–" when absent. */
-export function formatValue(v: number | null | undefined): string {
-  if (v === null || v === undefined || Number.isNaN(v)) return '\u2013';
-  return minus(v.toFixed(3));
-}
-
 /** Whether a requirement counts things (bridges, cut nodes): shown as whole numbers. */
 export function isCountRequirement(r: RequirementResult): boolean {
   const vals = [r.base, r.head, r.delta, r.threshold].filter((v): v is number => v !== null);
@@ -65,46 +66,9 @@ export function formatRequirementDelta(r: RequirementResult): string {
   return r.delta > 0 ? `+${r.delta}` : r.delta < 0 ? `\u2212${-r.delta}` : '0';
 }
 
-/** A signed delta: "+0.012", "\u22120.040", "0.000" for an exact zero (never "\u22120.000"). */
-export function formatDelta(v: number | null | undefined): string {
-  if (v === null || v === undefined || Number.isNaN(v)) return '\u2013';
-  const text = Math.abs(v).toFixed(3);
-  if (Number(text) === 0) return '0.000';
-  return (v > 0 ? '+' : '\u2212') + text;
-}
-
-/** "\u00b1 0.004" for a Monte Carlo error; empty for deterministic values (se 0) and absent ones. */
-export function formatError(se: number | null | undefined): string {
-  if (se === null || se === undefined || Number.isNaN(se) || se === 0) return '';
-  return `\u00b1 ${se < 0.0005 ? '<0.001' : se.toFixed(3)}`;
-}
-
 export function formatFraction(x: number): string {
   return `${Math.round(x * 1000) / 10} %`;
 }
-
-function minus(text: string): string {
-  return text.startsWith('-') ? `\u2212${text.slice(1)}` : text;
-}
-
-export const STATUS_WORD: Record<FileStatus, string> = {
-  holds: 'holds',
-  weakened: 'weakened',
-  'below-floor': 'below its floor',
-  new: 'new design',
-  removed: 'removed',
-  renamed: 'renamed',
-  unreadable: 'could not be read',
-};
-
-export const REQUIREMENT_STATUS_WORD: Record<RequirementResult['status'], string> = {
-  holds: 'holds',
-  short: 'short of its floor',
-  weakened: 'weakened',
-  'inside-error': 'inside the error',
-  unsettled: 'unsettled',
-  'not-applicable': 'not applicable',
-};
 
 /** A file's status in words; an error whose R cannot be computed is not "could not be read". */
 export function fileStatusWord(f: FileReport): string {
@@ -133,16 +97,6 @@ export function describeNotApplicable(ev: { notApplicable?: { challenge: Challen
   const list = ev?.notApplicable ?? [];
   if (!list.length) return undefined;
   return list.map((x) => `${challengeLabel(x.challenge)} (${x.reason})`).join('; ');
-}
-
-/** Whether a file, on its own, fails the gate: any fail-severity finding, or an error. */
-export function fileFails(f: FileReport): boolean {
-  return f.status === 'unreadable' || f.findings.some((x) => x.severity === 'fail');
-}
-
-/** Whether a file has warnings (and no failure). */
-export function fileWarns(f: FileReport): boolean {
-  return !fileFails(f) && f.findings.some((x) => x.severity === 'warn');
 }
 
 /**
@@ -407,12 +361,6 @@ export function groupFindings(findings: readonly Finding[]): GroupedFinding[] {
     delete x.consequence;
   }
   return out;
-}
-
-/** A revision for display: a full commit id shortened to 12 hex digits, anything else as given. */
-export function shortRevision(rev: string | undefined): string {
-  if (rev === undefined) return '\u2013';
-  return /^[0-9a-f]{40}([0-9a-f]{24})?$/.test(rev) ? rev.slice(0, 12) : rev;
 }
 
 /**

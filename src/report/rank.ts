@@ -1,19 +1,12 @@
 // The one order in which every view lists things: worst first. Shared so that the summary,
 // the PR comment and the annotations agree on what "the worst findings" are. Pure.
 
-import type { FileReport, FileStatus, Finding, Severity } from './report.js';
+import type { FileReport, Finding, Severity } from './report.js';
+import { FILE_STATUS_RANK } from './vocabulary.js';
 
 export const SEVERITY_RANK: Record<Severity, number> = { fail: 0, warn: 1, notice: 2 };
 
-const STATUS_RANK: Record<FileStatus, number> = {
-  unreadable: 0,
-  'below-floor': 1,
-  weakened: 2,
-  removed: 3,
-  new: 4,
-  renamed: 5,
-  holds: 6,
-};
+const STATUS_RANK = FILE_STATUS_RANK;
 
 /** The most severe finding's severity, or undefined for a file without findings. */
 export function worstSeverity(f: FileReport): Severity | undefined {

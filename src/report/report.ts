@@ -58,6 +58,28 @@ export interface RequirementResult {
    *  judged with enough confidence (never reported as holds); not-applicable: a tracked value
    *  (no floor) whose challenge does not apply to the design on either side (no risk groups). */
   status: 'holds' | 'short' | 'weakened' | 'inside-error' | 'unsettled' | 'not-applicable';
+  /** What the requirement measures, as data, so that views word it themselves. */
+  subject?: RequirementSubject;
+  /** Decimals at which base, head and delta decide the judging (at least 3); absent: 3. */
+  decimals?: number;
+}
+
+/** What a requirement measures: the parts its words are made from. */
+export interface RequirementSubject {
+  kind: 'r-threshold' | 'area-floor' | 'spread-ceiling' | 'n-1' | 'no-new-spof';
+  /** What the challenge removes (for N−1: the element kind, as "nodes" or "links"). */
+  remove?: 'nodes' | 'links' | 'risk-groups' | 'region';
+  /** The policy's name for the challenge. */
+  challenge?: string;
+  /** "random", or the order of a targeted attack ("degree", "betweenness", …). */
+  order?: string;
+  adaptive?: boolean;
+  /** The removal fraction (or radius in km for regions) the value is read at. */
+  at?: number;
+  /** Which statistic of the envelope: a quantile q, the median, mean, minimum, worst case of k removals, or the one value of a curve. */
+  statistic?: { kind: 'quantile' | 'median' | 'mean' | 'min' | 'worst-case' | 'value'; q?: number; removals?: number };
+  /** Whether a higher value is better (false for a spread ceiling and for counts of weak points). */
+  higherIsBetter: boolean;
 }
 
 export interface Finding {
@@ -96,6 +118,8 @@ export interface Finding {
   threshold?: number;
   /** The drop the regression rule allows for this requirement (head − base beyond it regresses). */
   allowance?: number;
+  /** Decimals at which the numbers above decide the judging (at least 3); absent: 3. */
+  decimals?: number;
   /** Elements that cause the finding, in order (a weakest sequence is ordered). */
   elements: ReportElement[];
   /** Line to annotate: the first element's, or the error's. */
@@ -196,6 +220,8 @@ export interface Report {
     files?: string[];
     /** A plain sentence about the policy, e.g. why a changed policy was not applied. */
     note?: string;
+    /** What the head's policy would judge differently, when the change modifies the policy. */
+    changes?: PolicyChange[];
   };
   base?: string;
   head?: string;
@@ -218,6 +244,21 @@ export interface Report {
   files: FileReport[];
   /** The plain statement that the tool informs engineering judgement and does not replace it. */
   caution: string;
+}
+
+/** One way the head's policy differs from the policy that judged the change. */
+export interface PolicyChange {
+  /** A requirement's id, or "weakening" (the rule for drops) or "removed-designs". */
+  subject: string;
+  /** The key that differs: "min", "max", "severity", "allowed-drop", "allowed-relative-drop", "error-multiple", "requirement" (added or dropped), … */
+  key: string;
+  effect: 'loosens' | 'tightens';
+  /** The value in the judging policy and in the head's (null: absent). */
+  base: string | number | null;
+  head: string | number | null;
+  /** Where the head's value is written (the policy file and line; line 0 when it was dropped). */
+  file: string;
+  line: number;
 }
 
 export const CAUTION =

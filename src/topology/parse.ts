@@ -2,6 +2,7 @@
 // Pure: the shell reads the file (src/shell/read-design.ts) and hands us the text.
 
 import { DesignError, LimitError } from '../errors.js';
+import { utf8Length } from '../report/format.js';
 import { DEFAULT_MAX_BYTES, DEFAULT_MAX_ELEMENTS, type DesignFormat, type ParseOptions, type Topology } from './model.js';
 import { detectFormat, FORMAT_CHOICES } from './detect.js';
 import { parseNative } from './native.js';
@@ -10,20 +11,8 @@ import { parseGraphml } from './graphml.js';
 import { parseEdgeList } from './edgelist.js';
 import { parseGeojson } from './geojson.js';
 
-/** UTF-8 byte length without allocating an encoded copy. */
-export function utf8Length(text: string): number {
-  let bytes = 0;
-  for (let i = 0; i < text.length; i++) {
-    const c = text.charCodeAt(i);
-    if (c < 0x80) bytes += 1;
-    else if (c < 0x800) bytes += 2;
-    else if (c >= 0xd800 && c <= 0xdbff && i + 1 < text.length) {
-      bytes += 4;
-      i++;
-    } else bytes += 3;
-  }
-  return bytes;
-}
+// UTF-8 byte length without allocating an encoded copy: one definition for readers and views.
+export { utf8Length };
 
 /** Refuses text over the byte limit (cheap bounds first: each UTF-16 unit is 1–3 bytes). */
 export function checkSize(text: string, file: string, maxBytes = DEFAULT_MAX_BYTES): void {
