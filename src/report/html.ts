@@ -33,6 +33,7 @@ import {
   CAUTION_LINE,
   README_ANCHOR,
   designStories,
+  numbersOnly,
   plainSentence,
   policyChangeSentence,
   verdictStory,
@@ -208,7 +209,7 @@ function designSection(d: DesignStory, index: number): string {
   // 1. What weakened: the consequences, worst first.
   out.push(`<div class="part consequences" data-part="consequences"><h3 id="${id}-weakened">What weakened</h3>`);
   if (d.weakened.length) out.push(`<ul class="weakened">${d.weakened.map(weakenedItem).join('')}</ul>`);
-  else out.push('<p class="facts">Nothing weakened.</p>');
+  else out.push(`<p class="facts">${esc(numbersOnlyHtml(d))}</p>`);
   out.push('</div>');
 
   // 2. How much: one line per requirement, and the words those lines use.
@@ -235,6 +236,10 @@ function designSection(d: DesignStory, index: number): string {
   // 3. The detail: what the change does, charts, map, sequences, structure, notices, mending.
   out.push(`<div class="part detail" data-part="detail"><h3 id="${id}-detail">Detail</h3>`);
   if (f.head) out.push(`<p class="facts">${esc(facts(f.head))}</p>`);
+  if (f.warnings?.length) {
+    const items = f.warnings.map((w) => `<li><code>${esc(`${f.path}:${w.line || 1}:${w.column || 1}`)}</code> ${esc(w.message)}${w.hint ? ` \u2014 ${esc(w.hint)}` : ''}</li>`);
+    out.push(`<div class="facts design-warnings"><strong>What reading the design warned of:</strong><ul>${items.join('')}</ul></div>`);
+  }
   const notApplicable = describeNotApplicable(f.head);
   if (notApplicable) out.push(`<p class="facts not-applicable"><strong>Not applicable to this design:</strong> ${esc(notApplicable)}</p>`);
   const changed = describeChanges(f);
@@ -257,6 +262,11 @@ function designSection(d: DesignStory, index: number): string {
   out.push('</div>');
   out.push('</section>');
   return out.filter(Boolean).join('\n');
+}
+
+function numbersOnlyHtml(d: DesignStory): string {
+  const said = numbersOnly(d);
+  return said ? `${said.charAt(0).toUpperCase()}${said.slice(1)}.` : 'Nothing weakened.';
 }
 
 /** The requirement line's leading status word ("weakened · …") set in bold. */

@@ -56,13 +56,14 @@ describe('single points of failure: costs, labels, renames, hardening', () => {
     expect(f.changes?.added).toEqual([{ id: 'towpath', kind: 'group', line: 31 }]);
     // Every view says it in one sentence.
     const sentence = 'cuts off Old Mill (node mill, line 7), Quarry Hill (node quarry, line 9) and Ridgeway (node ridge, line 11) from the largest part; 1 of 3 demands (volume 10 of 17) loses every path.';
-    expect(run.out.replace(/\s+/g, ' ').replace(/\u00a0/g, ' ')).toContain(`Losing it ${sentence}`);
+    const told = 'cuts off Old Mill (site mill, line 7), Quarry Hill (site quarry, line 9) and Ridgeway (site ridge, line 11) from the largest part; 1 of 3 demands (volume 10 of 17) loses every path.';
+    expect(run.out.replace(/\s+/g, ' ').replace(/\u00a0/g, ' ')).toContain(`losing it ${told}`);
     const md = renderSummary(run.report!);
     // After a finding's (escaped) message the sentence is escaped text; a sequence names sites in code.
     expect(md).toContain('Losing it cuts off Old Mill \\(node mill, line 7\\)');
     expect(md).toContain('These removals cut off `Old Mill` (node `mill`, line 7)');
     expect(md).toContain('loses every path.');
-    expect(renderHtml(run.report!)).toContain('<p class="cost">Losing it cuts off Old Mill (node mill, line 7)');
+    expect(renderHtml(run.report!)).toContain('losing it cuts off Old Mill (site <code>mill</code>, line 7)');
   });
 
   it('a renamed cut node is listed as a rename, with its label, and nothing is added or removed', async () => {

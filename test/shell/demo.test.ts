@@ -90,9 +90,10 @@ describe('netbrace demo', () => {
     // the terminal report printed for change 1
     const one = stdout.slice(stdout.indexOf('Change 1 of 3'), stdout.indexOf('Change 2 of 3'));
     expect(one).toContain('$ netbrace check --base main --head change/1-retire-east-chord --json');
-    expect(one).toMatch(/\u2717 designs\/lunmere-backbone\.net\.yaml \u2014 FAIL/);
-    expect(one).toMatch(/4 new bridges \(links whose loss alone splits the design\)/);
-    expect(one).toContain('Weakest removal sequences');
+    expect(one).toContain('\u25A0 netbrace blocks this merge: 1 design weakened');
+    expect(one).toMatch(/\u25A0 designs\/lunmere-backbone\.net\.yaml \u2014 weakened \u00b7 4 new bridges, 4 new cut nodes/);
+    expect(one).toContain('\u25A0 new bridge (line 298): Link tessaway-kaskeld (line 298) is a new bridge');
+    expect(one).toContain('weakest removal sequences:');
     expect(one.replace(/\s+/g, ' ')).toContain(`Caution: ${CAUTION}`);
   });
 
@@ -122,7 +123,7 @@ describe('netbrace demo', () => {
       expect(html).toContain('<svg');
       expect(html).not.toMatch(/<script/i);
       const text = readFileSync(path.join(out, `${c.id}.txt`), 'utf8');
-      expect(text).toContain('Verdict:');
+      expect(text).toMatch(/^(\u25A0 netbrace blocks this merge: |\u25A1 netbrace: no design )/);
       expect(text).not.toMatch(/\u001b\[/);
     }
   });
