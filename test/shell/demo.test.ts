@@ -113,6 +113,19 @@ describe('netbrace demo', () => {
     expect(f.findings.filter((x) => x.rule === 'new-bridge')).toEqual([]);
   });
 
+  it('prints for change 1 exactly the terminal lines the README shows', () => {
+    const readme = readFileSync(path.join(repoRoot, 'README.md'), 'utf8');
+    const start = readme.indexOf('here for the demo\'s first change');
+    const open = readme.indexOf('```text\n', start) + '```text\n'.length;
+    const shown = readme.slice(open, readme.indexOf('  ```', open)).split('\n').map((l) => l.replace(/^ {2}/, ''));
+    const text = readFileSync(path.join(out, '1-retire-east-chord.txt'), 'utf8');
+    // The README leaves parts out with a line "…": each run of lines between them is printed as it stands.
+    const runs = shown.join('\n').split(/\n\s*\u2026\n/).map((r) => r.replace(/\n+$/, ''));
+    expect(runs.length).toBeGreaterThan(2);
+    expect(text.startsWith(runs[0])).toBe(true);
+    for (const r of runs) expect(text).toContain(r);
+  });
+
   it('writes the JSON report, summary markdown, SARIF, HTML and terminal text for each change', () => {
     for (const c of DEMO_CHANGES) {
       const md = readFileSync(path.join(out, `${c.id}.summary.md`), 'utf8');
