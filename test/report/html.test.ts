@@ -164,6 +164,15 @@ describe('renderHtml', () => {
     expect(html).toContain('@media print');
   });
 
+  it('shows what reading a design warned of, at its line, in the detail', () => {
+    const r = demoReport();
+    r.files[0].warnings = [{ message: 'self-loop on node "kaskeld" dropped', line: 40, column: 5, hint: 'a link from a node to itself adds no connectivity' }];
+    const s = renderHtml(r).split('<section ')[1];
+    const at = s.indexOf('class="facts design-warnings"');
+    expect(at).toBeGreaterThan(s.indexOf('data-part="detail"'));
+    expect(s).toContain('<code>designs/lunmere-backbone.net.yaml:40:5</code> self-loop on node &quot;kaskeld&quot; dropped \u2014 a link from a node to itself adds no connectivity');
+  });
+
   it('shows a passing design with notices as passing, and folds its notices into the detail', () => {
     const s = sections()[2];
     expect(s).toContain('data-outcome="holds"');
