@@ -15,7 +15,7 @@ import { applyToTopology, type Change } from './mend/apply.js';
 import { generateCandidates, parseCandidateFile, type CandidateSet } from './mend/candidates.js';
 import { mendDesign } from './mend/search.js';
 import type { FileReport } from './report/report.js';
-import { evaluateGraph, evaluationSpecs, type GateDeps, type GateRequest, type Revision } from './run-gate.js';
+import { evaluateGraph, evaluationSpecs, type GateDeps, type GateRequest, type Revision } from './gate-request.js';
 import { parseDesign } from './topology/parse.js';
 import type { Topology } from './topology/model.js';
 

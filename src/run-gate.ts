@@ -19,87 +19,28 @@
 import { EncodingError } from './decode.js';
 import { isNetbraceError, PolicyError, UsageError, type Diagnostic, type NetbraceError } from './errors.js';
 import { evaluateDesign, type DesignEvaluation, type EvaluationSpec } from './envelope/evaluate.js';
-import type { ChallengeParams } from './envelope/types.js';
+import type { ChallengeParams } from './challenges/types.js';
 import { compileTopology, type CompactGraph } from './graph/compact.js';
 import { budgetSpecs, notePairedCuts, type PairedCut } from './gate/budget.js';
 import { matchDesigns, sameDesign } from './gate/rename.js';
 import { compareDesign, type CompareInput, type DesignSide } from './gate/compare.js';
-import { countStatuses, exitCodeOf, verdictOf } from './gate/verdict.js';
+import { assembleReport, exitCodeOf } from './gate/verdict.js';
 import { pairDesigns, type UnpairedDesign } from './gate/pair-designs.js';
+import { policyChanges } from './policy/compare.js';
 import { BUILTIN_POLICY_NAME, DEFAULT_DESIGN_GLOBS, DEFAULT_POLICY_PATH } from './policy/defaults.js';
 import { builtinPolicy, designFormat, designNeedsHeader, globsMatch, isDesignPath, isDesignText, loadPolicy, policyForFile } from './policy/resolve.js';
 import type { FilePolicy, Policy } from './policy/types.js';
-import { CAUTION, DESIGN_WARNINGS_KEPT, REPORT_VERSION, type FileReport, type Report } from './report/report.js';
+import { DESIGN_WARNINGS_KEPT, type FileReport, type Report } from './report/report.js';
 import type { DesignFormat } from './topology/model.js';
 import { addMapAndMend } from './map-mend-step.js';
+import { evaluateGraph, evaluationSpecs, type ChangedFile, type GateDeps, type GateRequest, type GateResult, type Revision } from './gate-request.js';
+
+export type { ChangedFile, GateDeps, GateRequest, GateResult, Revision };
 import { parseDesign } from './topology/parse.js';
 import type { Topology } from './topology/model.js';
 import { unsupportedMetric } from './envelope/r-value.js';
-import { VERSION } from './version.js';
 
 export { joinReports } from './gate/join.js';
-
-/** A revision as git names it, or "worktree" for the files on disk. */
-export type Revision = string;
-
-export interface ChangedFile {
-  status: 'added' | 'modified' | 'deleted' | 'renamed';
-  path: string;
-  /** For renames: the path at base. */
-  previousPath?: string;
-}
-
-type MaybePromise<T> = T | Promise<T>;
-
-export interface GateDeps {
-  /** Files changed between two revisions (head may be "worktree"), with rename detection. */
-  listChanged(base: Revision, head: Revision): MaybePromise<ChangedFile[]>;
-  /** A file's text at a revision; null when it does not exist there. */
-  readAt(rev: Revision, path: string): MaybePromise<string | null>;
-  /** Every file at a revision (for scheduled runs over all designs). */
-  listAll(rev: Revision): MaybePromise<string[]>;
-  /** A file of the organisation policy's folder (request.orgPolicyPath), outside the history. */
-  readOrgPolicy?: (path: string) => MaybePromise<string | null>;
-  /** The envelope engine; defaults to evaluateDesign on this thread. */
-  evaluate?: (g: CompactGraph, spec: EvaluationSpec, threads?: number) => MaybePromise<DesignEvaluation>;
-}
-
-export interface GateRequest {
-  /** Base revision; absent: no comparison, thresholds only. */
-  base?: Revision;
-  /** Head revision; ignored when `worktree` is set. */
-  head?: Revision;
-  /** Judge the files on disk instead of a head commit. */
-  worktree?: boolean;
-  /** Judge these repository paths instead of the changed files. */
-  paths?: string[];
-  /** Repository path of the policy file (default .netbrace.yaml; missing then means the built-in policy). */
-  policyPath?: string;
-  /** Where the policy is read: the base (trusted, the default) or the head. */
-  policySource: 'base' | 'head';
-  /**
-   * The organisation's policy, which the repository's policy must inherit (and may only
-   * tighten): its path as the repository's policy names it in `inherits`. Its files are read
-   * with `GateDeps.readOrgPolicy` (a second checkout), never from the change under review.
-   */
-  orgPolicyPath?: string;
-  mode: 'block' | 'inform';
-  /** Overrides the policy's seed. */
-  seed?: number;
-  threads?: number;
-  /** Evaluate part `index` (1-based) of `total`: a deterministic slice by path hash. */
-  part?: { index: number; total: number };
-  /** Scheduled runs judge every design against thresholds only. */
-  eventKind?: 'pull-request' | 'push' | 'schedule' | 'local';
-  /** Draw each design's map (default true), and search what would mend a design: when it fails (default), always, or never. */
-  map?: boolean;
-  mend?: 'failing' | 'always' | 'never';
-}
-
-export interface GateResult {
-  report: Report;
-  exitCode: 0 | 1;
-}
 
 /** FNV-1a 32-bit hash of a path (Fowler, Noll, Vo; common practice for stable bucketing). */
 export function pathHash(path: string): number {
@@ -128,7 +69,7 @@ interface LoadedPolicy {
 }
 
 /** Load a policy through an async reader: the loader is pure and synchronous, so files are fetched on demand and the load retried. */
-async function loadPolicyAt(entry: string, read: (path: string) => Promise<string | null>): Promise<LoadedPolicy> {
+export async function loadPolicyAt(entry: string, read: (path: string) => Promise<string | null>): Promise<LoadedPolicy> {
   const texts = new Map<string, string | null>();
   // A file that is not text is an error of the policy that names it (readChain says where).
   const unreadable = new Map<string, EncodingError>();
@@ -242,15 +183,20 @@ async function choosePolicy(request: GateRequest, deps: GateDeps, base: Revision
     for (const [p, text] of texts) if (!isOrgFile(request, p) && (await readSide(deps, other, p)) !== text) changed = true;
     if (changed) {
       info.changed = true;
+      // The other side's policy, to say what the head's would loosen or tighten (policy/compare.ts).
+      let otherPolicy: Policy | undefined;
+      let otherError: string | undefined;
+      try {
+        const loaded = await loadPolicyAt(path, readAtRev(other));
+        requireOrgPolicy(request, path, loaded.policy);
+        otherPolicy = loaded.policy;
+      } catch (e) {
+        if (!isNetbraceError(e)) throw e;
+        otherError = e.format().split('\n')[0];
+      }
+      if (otherPolicy) info.changes = trusted === base ? policyChanges(policy, otherPolicy) : policyChanges(otherPolicy, policy);
       if (trusted === base) {
-        let verdict = 'it applies once merged';
-        try {
-          const proposed = await loadPolicyAt(path, readAtRev(other));
-          requireOrgPolicy(request, path, proposed.policy);
-        } catch (e) {
-          if (!isNetbraceError(e)) throw e;
-          verdict = `the proposed version has an error: ${e.format().split('\n')[0]}`;
-        }
+        const verdict = otherError === undefined ? 'it applies once merged' : `the proposed version has an error: ${otherError}`;
         info.note = `this change modifies the policy; the version at the base judges it (${verdict})`;
       } else {
         info.note = 'this change modifies the policy, and the policy of the head applies (policy-source: head)';
@@ -419,58 +365,6 @@ function normalizePath(p: string): string {
   return p.replace(/\\/g, '/').replace(/^\.\//, '');
 }
 
-/**
- * The engine request for one file: its challenges, every threshold's x on the grid, N−1 where
- * required, and the policy's work budget (runGate shares it out between the requests of a
- * design and pairs it across base and head: gate/budget.ts).
- */
-export function evaluationSpecs(fp: FilePolicy, seed: number): EvaluationSpec[] {
-  const challenges: ChallengeParams[] = fp.challenges.map((c) => {
-    const at = fp.requirements
-      .filter((r) => r.kind === 'r-threshold' && r.challenge === c.name && r.at !== undefined)
-      .map((r) => (r.kind === 'r-threshold' ? r.at! : 0));
-    const params: ChallengeParams = { ...c.params };
-    if (c.random && at.length > 0) params.at = [...new Set(at)].sort((a, b) => a - b);
-    return params;
-  });
-  const elements = [...new Set(fp.requirements.flatMap((r) => (r.kind === 'n-1' ? [r.element] : [])))].sort();
-  // The engine runs each challenge once per evaluation: N−1 of a second element kind gets its own.
-  const budget = { maxWork: fp.budget.maxWork };
-  const specs: EvaluationSpec[] = [{ r: fp.rValue, challenges, seed, budget }];
-  elements.forEach((element, i) => {
-    const n1: ChallengeParams = { challenge: 'n-1', element };
-    if (i === 0) specs[0].challenges.push(n1);
-    else specs.push({ r: fp.rValue, challenges: [n1], seed, budget });
-  });
-  return specs;
-}
-
-/** Join the evaluations of several specs on the same graph. */
-function joinEvaluations(parts: DesignEvaluation[]): DesignEvaluation {
-  if (parts.length === 1) return parts[0];
-  const [first, ...rest] = parts;
-  const evaluation = { ...first.evaluation };
-  evaluation.envelopes = [...first.evaluation.envelopes];
-  evaluation.attacks = [...first.evaluation.attacks];
-  evaluation.contingencies = [...first.evaluation.contingencies];
-  evaluation.degraded = [...first.evaluation.degraded];
-  const notApplicable = [...(first.evaluation.notApplicable ?? [])];
-  const samples = new Map(first.samples);
-  const labels = new Map(first.labels);
-  for (const p of rest) {
-    evaluation.envelopes.push(...p.evaluation.envelopes);
-    evaluation.attacks.push(...p.evaluation.attacks);
-    evaluation.contingencies.push(...p.evaluation.contingencies);
-    evaluation.degraded.push(...p.evaluation.degraded);
-    notApplicable.push(...(p.evaluation.notApplicable ?? []));
-    for (const [k, v] of p.samples) samples.set(k, v);
-    for (const [k, v] of p.labels) labels.set(k, v);
-  }
-  if (notApplicable.length) evaluation.notApplicable = notApplicable;
-  else delete evaluation.notApplicable;
-  return { evaluation, samples, labels };
-}
-
 /** A design error as the located problem the report shows. */
 function problemOf(e: NetbraceError): NonNullable<CompareInput['headError']> {
   return { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column };
@@ -512,24 +406,6 @@ function compileText(
     }
     throw e;
   }
-}
-
-export async function evaluateGraph(
-  g: CompactGraph,
-  topology: Topology | undefined,
-  specs: EvaluationSpec[],
-  cuts: readonly PairedCut[],
-  request: GateRequest,
-  deps: GateDeps,
-): Promise<DesignSide> {
-  const evaluate = deps.evaluate ?? ((graph: CompactGraph, spec: EvaluationSpec) => evaluateDesign(graph, spec));
-  const parts: DesignEvaluation[] = [];
-  for (const [i, spec] of specs.entries()) {
-    const part = await evaluate(g, spec, request.threads);
-    notePairedCuts(part, cuts, i);
-    parts.push(part);
-  }
-  return { graph: g, result: joinEvaluations(parts), topology };
 }
 
 function validateRequest(request: GateRequest): void {
@@ -620,20 +496,6 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
     files.push(judged);
   }
 
-  const report: Report = {
-    version: REPORT_VERSION,
-    tool: { name: 'netbrace', version: VERSION },
-    verdict: verdictOf(files),
-    mode: request.mode,
-    policy: info,
-    ...(base !== undefined ? { base } : {}),
-    head,
-    seed,
-    ...(request.part ? { part: { index: request.part.index, total: request.part.total } } : {}),
-    scope,
-    counts: countStatuses(files),
-    files,
-    caution: CAUTION,
-  };
+  const report = assembleReport({ mode: request.mode, policy: info, ...(base !== undefined ? { base } : {}), head, seed, ...(request.part ? { part: request.part } : {}), scope }, files);
   return { report, exitCode: exitCodeOf(report) };
 }

@@ -5,7 +5,7 @@
 // R there is interpolated between ⌊x·N⌋ and ⌈x·N⌉ removals of the same realization (units.ts).
 
 import type { CompactGraph } from '../graph/compact.js';
-import type { ElementKind } from '../envelope/types.js';
+import type { ElementKind } from '../graph/element.js';
 import { createOrderWorkspace, hashIds, randomOrder, seedWord } from '../envelope/rng.js';
 import type { BandChallenge, BandPlan, ResolvedParams } from './types.js';
 import { makeGrid } from './grid.js';

@@ -1,7 +1,7 @@
 // Every challenge by name, with its one-line description, and the defaults of its parameters.
 
 import type { CompactGraph } from '../graph/compact.js';
-import type { ChallengeName, ChallengeParams } from '../envelope/types.js';
+import type { ChallengeName, ChallengeParams } from './types.js';
 import type { Challenge, ResolvedParams } from './types.js';
 import { betweenness, betweennessAdaptive } from './betweenness.js';
 import { closeness } from './closeness.js';

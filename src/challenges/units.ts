@@ -4,7 +4,7 @@
 
 import type { CompactGraph } from '../graph/compact.js';
 import type { Mask } from '../graph/mask.js';
-import type { ElementKind } from '../envelope/types.js';
+import type { ElementKind } from '../graph/element.js';
 
 export function unitCount(g: CompactGraph, kind: ElementKind): number {
   return kind === 'node' ? g.n : kind === 'link' ? g.m : g.groupIds.length;

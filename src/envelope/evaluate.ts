@@ -19,12 +19,13 @@
 import { linksByLine, nodesByLine, type CompactGraph } from '../graph/compact.js';
 import { reportElement } from '../graph/element.js';
 import { findComponents, findCutElements } from '../graph/structure.js';
-import type { Evaluation, StructureSummary } from '../report/report.js';
+import type { Evaluation, StructureSummary } from './types.js';
 import { getChallenge, resolveParams } from '../challenges/registry.js';
 import { sitesWithCoordinates } from '../challenges/regional.js';
 import { countAt, countOnes, eligibleUnits, unitCount, unitIds, valueAtCount } from '../challenges/units.js';
 import { makeGrid } from '../challenges/grid.js';
-import type { AttackCurve, ChallengeName, ChallengeParams, Contingency, Envelope, RValueSpec, RemovalSequence, WorstCase } from './types.js';
+import type { AttackCurve, Contingency, Envelope, RValueSpec, RemovalSequence, WorstCase } from './types.js';
+import type { ChallengeName, ChallengeParams } from '../challenges/types.js';
 import { rPasses, unionFindR, unsupportedMetric, UnsupportedMetricError, validateRSpec } from './r-value.js';
 import {
   attackSteps,
@@ -41,8 +42,6 @@ import {
 import { contingencyTotal } from './contingency.js';
 import { subsets } from './worst-case.js';
 import { area, attackArea, attackGap, gridMean, gridStats, quantileKey, spread } from './summary.js';
-
-export { pairedStatistic, type PairedStatistic, type Statistic } from './pairing.js';
 
 export interface EvaluationSpec {
   r: RValueSpec;

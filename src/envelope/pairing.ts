@@ -18,7 +18,8 @@
 import { Xoshiro128, hashString } from './rng.js';
 import { quantileSorted } from './quantiles.js';
 import { gridMean, sortedColumn } from './summary.js';
-import type { ChallengeName, Envelope } from './types.js';
+import type { Envelope } from './types.js';
+import type { ChallengeName } from '../challenges/types.js';
 import type { DesignEvaluation } from './evaluate.js';
 import { round12 } from '../challenges/grid.js';
 import { countAt, valueAtCount } from '../challenges/units.js';

@@ -6,7 +6,7 @@
 
 import type { CompactGraph } from '../graph/compact.js';
 import { findRoot } from '../metrics/kernels/union-find.js';
-import type { ElementKind } from './types.js';
+import type { ElementKind } from '../graph/element.js';
 
 export interface ConnectivityCurve {
   /** Size of the largest component after k removals, k = 0..K. */

@@ -11,7 +11,8 @@
 import type { CompactGraph } from '../graph/compact.js';
 import { copyMask, createMask, type Mask } from '../graph/mask.js';
 import { eligibleUnits, removeUnit, unitIds } from '../challenges/units.js';
-import type { ElementKind, WorstCase } from './types.js';
+import type { WorstCase } from './types.js';
+import type { ElementKind } from '../graph/element.js';
 import type { RFunction } from './r-value.js';
 
 export interface WorstCaseOptions {

@@ -14,7 +14,7 @@
 // policy's count, on both sides.
 
 import { planEvaluation, type DesignEvaluation, type EvaluationSpec } from '../envelope/evaluate.js';
-import type { ChallengeName } from '../envelope/types.js';
+import type { ChallengeName } from '../challenges/types.js';
 import type { CompactGraph } from '../graph/compact.js';
 
 /** A random challenge both sides run with fewer realizations than asked. */

@@ -33,9 +33,10 @@
 // neighbourhood (spof.ts, rename.ts); hardened elements never count, but weak points hidden
 // by newly hardened ones are findings of their own. Each kind is a row of its own.
 
-import type { ElementKind } from '../envelope/types.js';
-import type { Finding, FileReport, FileStatus, FindingStatus, ReportElement, RequirementResult, RequirementSubject, Severity } from '../report/report.js';
-import type { ChallengeDef, FilePolicy, Requirement } from '../policy/types.js';
+import type { ElementKind } from '../graph/element.js';
+import type { Finding, FileReport, FileStatus, FindingStatus, RequirementResult, RequirementSubject, Severity } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
+import type { ChallengeDef, FilePolicy, Requirement, WeakeningRule } from '../policy/types.js';
 import { withSequenceDetails } from './consequence.js';
 import {
   changeDecimals,
@@ -187,6 +188,170 @@ function classifyDrop(drop: number, allowance: number, noise: number, reduced: b
 }
 
 type Judged = { rows: RequirementResult[]; findings: Finding[] };
+type RowStatus = RequirementResult['status'];
+
+/** What the floor and the weakening judgement of one requirement share. */
+export interface Judging {
+  r: Requirement;
+  m: Measured;
+  /** The head value, known to be finite (judge() has dealt with a missing or broken one). */
+  headValue: number;
+  description: string;
+  /** The floor (or ceiling) the requirement sets; null for a tracked value. */
+  threshold: number | null;
+  rule: Finding['rule'];
+  elements: ReportElement[];
+  /** The fields every finding of this requirement carries. */
+  extra: Partial<Finding>;
+}
+
+/** The head against the floor (or ceiling): short, unsettled (interval, cut work, thin margin) or holds. */
+export function judgeFloor(j: Judging): { status: RowStatus; findings: Finding[] } {
+  const { r, m, headValue, description, threshold, rule, elements, extra } = j;
+  let status: RowStatus = 'holds';
+  const findings: Finding[] = [];
+  // Meets the limit, with a NaN on either side counting as not meeting it.
+  const meets = (v: number, limit: number) => (m.higherIsBetter ? v >= limit : v <= limit);
+  const limitWord = m.higherIsBetter ? 'floor' : 'ceiling';
+  /** A value beside the limit it is judged against, at the digits that tell them apart. */
+  const against = (v: number, limit: number) => formatR(v, decidingDecimals(v, limit));
+
+  if (threshold !== null && !meets(headValue, threshold)) {
+    status = 'short';
+    const relation = m.higherIsBetter ? 'is below' : 'is above';
+    const d = decidingDecimals(headValue, threshold);
+    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short', ...(d > 3 ? { decimals: d } : {}) }));
+  } else if (threshold !== null && m.incomplete !== undefined) {
+    // Met by incomplete work: not proven, so not "holds".
+    status = 'unsettled';
+    findings.push(
+      finding(rule, unsettledSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
+        ...extra,
+        status: 'unsettled',
+      }),
+    );
+  } else if (threshold !== null && m.lo !== undefined && m.hi !== undefined && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
+    status = 'unsettled';
+    const edge = m.higherIsBetter ? m.lo : m.hi;
+    const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
+    const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
+    findings.push(
+      finding(
+        rule,
+        m.reduced !== undefined ? unsettledSeverity(r.severity) : 'notice',
+        `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
+        elements,
+        { ...extra, status: 'unsettled' },
+      ),
+    );
+  } else if (threshold !== null && m.headSe !== undefined && r.kind === 'r-threshold' && r.statistic.kind === 'min') {
+    // The least of fewer realizations is never below the least of all of them: not proven.
+    status = 'unsettled';
+    findings.push(
+      finding(
+        rule,
+        unsettledSeverity(r.severity),
+        `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
+        elements,
+        { ...extra, status: 'unsettled' },
+      ),
+    );
+  } else if (threshold !== null && m.headSe !== undefined) {
+    const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
+    const needed = REDUCED_MARGIN_SE * m.headSe;
+    if (!(margin > needed)) {
+      // Met on realizations the budget cut, by a margin their own error does not clear.
+      status = 'unsettled';
+      const d = decidingDecimals(margin, needed);
+      const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : 'unknown';
+      findings.push(
+        finding(
+          rule,
+          unsettledSeverity(r.severity),
+          `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} \u00d7 ${se})`,
+          elements,
+          { ...extra, status: 'unsettled' },
+        ),
+      );
+    }
+  }
+
+  return { status, findings };
+}
+
+/**
+ * Base against head under the policy's weakening rule: weakened, unsettled, inside the error,
+ * within the allowance, or nothing (a rise or no change). `status` is the floor's verdict; a
+ * "short" is never softened.
+ */
+export function judgeWeakening(j: Judging, policyRule: WeakeningRule, floorStatus: RowStatus): { status: RowStatus; findings: Finding[] } {
+  const { r, m, headValue, description, elements, extra } = j;
+  let status = floorStatus;
+  const findings: Finding[] = [];
+  const regressionSeverity = milder(policyRule.severity, r.severity);
+  if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== undefined) {
+    // Reduced differently on the two sides: the realizations do not pair, so no delta is judged.
+    if (status === 'holds') status = 'unsettled';
+    findings.push(
+      finding(
+        'regression',
+        unsettledSeverity(regressionSeverity),
+        `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
+        elements,
+        { ...extra, status: 'unsettled' },
+      ),
+    );
+  } else if (m.base !== null && m.delta !== null && m.se !== null) {
+    const base = m.base;
+    const drop = m.higherIsBetter ? -m.delta : m.delta;
+    // A rise, no change, or a drop within rounding says nothing (written so that NaN does not pass).
+    if (!(drop <= SAME * Math.max(1, Math.abs(base)))) {
+      const allowance = Math.max(policyRule.allowedDrop ?? 0, (policyRule.allowedRelativeDrop ?? 0) * Math.abs(base));
+      const noise = policyRule.errorMultiple * m.se;
+      const reduced = m.reduced !== undefined;
+      const outcome = classifyDrop(drop, allowance, noise, reduced);
+      // The digits that decide: the drop against the allowance (and the noise band around it).
+      const digits = (limit: number) => changeDecimals(base, headValue, m.higherIsBetter, limit);
+      const d =
+        outcome === 'inside-error'
+          ? digits(noise)
+          : reduced
+            ? Math.max(digits(allowance), digits(outcome === 'weakened' ? allowance + noise : allowance - noise))
+            : digits(allowance);
+      const verb = m.higherIsBetter ? 'dropped' : 'rose';
+      const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (\u0394 ${formatDelta(m.delta, m.se, d)})`;
+      const allowed = formatR(allowance, d);
+      const k = policyRule.errorMultiple;
+      const data = { ...extra, allowance, status: outcome, ...(d > 3 ? { decimals: d } : {}) };
+      if (outcome === 'weakened') {
+        if (status !== 'short') status = 'weakened';
+        const beyond = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
+        findings.push(finding('regression', regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
+      } else if (outcome === 'unsettled') {
+        // On cut realizations the drop is within error-multiple × se of the allowance: either side of it.
+        if (status === 'holds') status = 'unsettled';
+        findings.push(
+          finding(
+            'regression',
+            unsettledSeverity(regressionSeverity),
+            `${description}: ${change}, within ${k} \u00d7 its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
+            elements,
+            data,
+          ),
+        );
+      } else if (outcome === 'inside-error') {
+        if (status === 'holds') status = 'inside-error';
+        findings.push(
+          finding('regression', 'notice', `${description}: ${change}, less than ${k} \u00d7 its Monte Carlo error (${formatR(noise, d)}): inside the error, not a failure`, elements, data),
+        );
+      } else {
+        const margin = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
+        findings.push(finding('regression', 'notice', `${description}: ${change}, within the allowed ${allowed}${margin}`, elements, data));
+      }
+    }
+  }
+  return { status, findings };
+}
 
 function judge(r: Requirement, input: CompareInput, description: string): Judged {
   const head = input.head!;
@@ -245,138 +410,14 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     return result();
   }
 
-  const headValue = m.head;
-  // Meets the limit, with a NaN on either side counting as not meeting it.
-  const meets = (v: number, limit: number) => (m.higherIsBetter ? v >= limit : v <= limit);
-  const limitWord = m.higherIsBetter ? 'floor' : 'ceiling';
-  /** A value beside the limit it is judged against, at the digits that tell them apart. */
-  const against = (v: number, limit: number) => formatR(v, decidingDecimals(v, limit));
-
-  if (threshold !== null && !meets(headValue, threshold)) {
-    row.status = 'short';
-    const relation = m.higherIsBetter ? 'is below' : 'is above';
-    const d = decidingDecimals(headValue, threshold);
-    if (d > 3) row.decimals = d;
-    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short', ...(d > 3 ? { decimals: d } : {}) }));
-  } else if (threshold !== null && m.incomplete !== undefined) {
-    // Met by incomplete work: not proven, so not "holds".
-    row.status = 'unsettled';
-    findings.push(
-      finding(rule, unsettledSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
-        ...extra,
-        status: 'unsettled',
-      }),
-    );
-  } else if (threshold !== null && m.lo !== undefined && m.hi !== undefined && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
-    row.status = 'unsettled';
-    const edge = m.higherIsBetter ? m.lo : m.hi;
-    const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
-    const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
-    findings.push(
-      finding(
-        rule,
-        m.reduced !== undefined ? unsettledSeverity(r.severity) : 'notice',
-        `${description}: ${formatR(headValue, d)} meets it, but its confidence interval reaches ${formatR(edge, d)}; more realizations would settle it${cut}`,
-        elements,
-        { ...extra, status: 'unsettled' },
-      ),
-    );
-  } else if (threshold !== null && m.headSe !== undefined && r.kind === 'r-threshold' && r.statistic.kind === 'min') {
-    // The least of fewer realizations is never below the least of all of them: not proven.
-    row.status = 'unsettled';
-    findings.push(
-      finding(
-        rule,
-        unsettledSeverity(r.severity),
-        `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
-        elements,
-        { ...extra, status: 'unsettled' },
-      ),
-    );
-  } else if (threshold !== null && m.headSe !== undefined) {
-    const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
-    const needed = REDUCED_MARGIN_SE * m.headSe;
-    if (!(margin > needed)) {
-      // Met on realizations the budget cut, by a margin their own error does not clear.
-      row.status = 'unsettled';
-      const d = decidingDecimals(margin, needed);
-      const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : 'unknown';
-      findings.push(
-        finding(
-          rule,
-          unsettledSeverity(r.severity),
-          `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors (${REDUCED_MARGIN_SE} \u00d7 ${se})`,
-          elements,
-          { ...extra, status: 'unsettled' },
-        ),
-      );
-    }
-  }
-
-  const policyRule = input.policy.weakening;
-  const regressionSeverity = milder(policyRule.severity, r.severity);
-  if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== undefined) {
-    // Reduced differently on the two sides: the realizations do not pair, so no delta is judged.
-    if (row.status === 'holds') row.status = 'unsettled';
-    findings.push(
-      finding(
-        'regression',
-        unsettledSeverity(regressionSeverity),
-        `${description}: from ${formatR(m.base)} to ${formatR(headValue)}, but ${m.unpaired}; the change cannot be judged`,
-        elements,
-        { ...extra, status: 'unsettled' },
-      ),
-    );
-  } else if (m.base !== null && m.delta !== null && m.se !== null) {
-    const base = m.base;
-    const drop = m.higherIsBetter ? -m.delta : m.delta;
-    // A rise, no change, or a drop within rounding says nothing (written so that NaN does not pass).
-    if (!(drop <= SAME * Math.max(1, Math.abs(base)))) {
-      const allowance = Math.max(policyRule.allowedDrop ?? 0, (policyRule.allowedRelativeDrop ?? 0) * Math.abs(base));
-      const noise = policyRule.errorMultiple * m.se;
-      const reduced = m.reduced !== undefined;
-      const outcome = classifyDrop(drop, allowance, noise, reduced);
-      // The digits that decide: the drop against the allowance (and the noise band around it).
-      const digits = (limit: number) => changeDecimals(base, headValue, m.higherIsBetter, limit);
-      const d =
-        outcome === 'inside-error'
-          ? digits(noise)
-          : reduced
-            ? Math.max(digits(allowance), digits(outcome === 'weakened' ? allowance + noise : allowance - noise))
-            : digits(allowance);
-      const verb = m.higherIsBetter ? 'dropped' : 'rose';
-      const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (\u0394 ${formatDelta(m.delta, m.se, d)})`;
-      const allowed = formatR(allowance, d);
-      const k = policyRule.errorMultiple;
-      const data = { ...extra, allowance, status: outcome, ...(d > 3 ? { decimals: d } : {}) };
-      if (d > 3) row.decimals = Math.max(row.decimals ?? 3, d);
-      if (outcome === 'weakened') {
-        if (row.status !== 'short') row.status = 'weakened';
-        const beyond = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
-        findings.push(finding('regression', regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
-      } else if (outcome === 'unsettled') {
-        // On cut realizations the drop is within error-multiple × se of the allowance: either side of it.
-        if (row.status === 'holds') row.status = 'unsettled';
-        findings.push(
-          finding(
-            'regression',
-            unsettledSeverity(regressionSeverity),
-            `${description}: ${change}, within ${k} \u00d7 its error of the allowed ${allowed}, so it cannot be told whether it is beyond it: ${m.reduced}`,
-            elements,
-            data,
-          ),
-        );
-      } else if (outcome === 'inside-error') {
-        if (row.status === 'holds') row.status = 'inside-error';
-        findings.push(
-          finding('regression', 'notice', `${description}: ${change}, less than ${k} \u00d7 its Monte Carlo error (${formatR(noise, d)}): inside the error, not a failure`, elements, data),
-        );
-      } else {
-        const margin = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
-        findings.push(finding('regression', 'notice', `${description}: ${change}, within the allowed ${allowed}${margin}`, elements, data));
-      }
-    }
-  }
+  const j: Judging = { r, m, headValue: m.head, description, threshold, rule, elements, extra };
+  const floor = judgeFloor(j);
+  const weakening = judgeWeakening(j, input.policy.weakening, floor.status);
+  row.status = weakening.status;
+  findings.push(...floor.findings, ...weakening.findings);
+  // The digits the judging was stated at, for views that word the row themselves.
+  const decimals = Math.max(3, ...findings.map((f) => f.decimals ?? 3));
+  if (decimals > 3) row.decimals = decimals;
   // Every requirement judged on reduced work says so, once.
   const reducedWork = m.reduced ?? m.incomplete;
   if (reducedWork !== undefined && !findings.some((f) => f.message.includes(reducedWork))) {

@@ -11,7 +11,8 @@ import { indexOfElement, locateElement, reportElement } from '../graph/element.j
 import { createMask, type Mask } from '../graph/mask.js';
 import { findComponents, type Components } from '../graph/structure.js';
 import type { AttackCurve, Contingency, Envelope, RemovalSequence } from '../envelope/types.js';
-import type { Consequence, Evaluation } from '../report/report.js';
+import type { Consequence } from '../graph/consequence.js';
+import type { Evaluation } from '../envelope/types.js';
 
 /** Sites a consequence lists by name; the count says how many there are in all. */
 export const MAX_STRANDED = 20;

@@ -6,7 +6,8 @@ import type { CompactGraph } from '../graph/compact.js';
 import { formatDelta, formatFixed } from '../report/format.js';
 import { reportElement } from '../graph/element.js';
 import type { ChallengeDef, Requirement } from '../policy/types.js';
-import type { AttributeChange, FileReport, ReportElement } from '../report/report.js';
+import type { AttributeChange, FileReport } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
 import type { TopoLink, TopoNode, Topology } from '../topology/model.js';
 import type { Matching } from './rename.js';
 

@@ -6,8 +6,10 @@
 // so (`reduced`), carries the standard error of the head's own statistic (`headSe`) for the
 // judging in compare.ts, and says when base and head were cut differently (`unpaired`).
 
-import { pairedStatistic, type DesignEvaluation, type Statistic } from '../envelope/evaluate.js';
-import type { AttackCurve, Contingency, ElementKind, Envelope, RemovalSequence } from '../envelope/types.js';
+import type { DesignEvaluation } from '../envelope/evaluate.js';
+import { pairedStatistic, type Statistic } from '../envelope/pairing.js';
+import type { AttackCurve, Contingency, Envelope, RemovalSequence } from '../envelope/types.js';
+import type { ElementKind } from '../graph/element.js';
 import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
 import { sitesWithCoordinates } from '../challenges/regional.js';
 import { countAt, countOnes, eligibleUnits, unitCount, valueAtCount } from '../challenges/units.js';
@@ -15,7 +17,7 @@ import { quantileEstimate } from '../envelope/quantiles.js';
 import { quantileKey, sortedColumn } from '../envelope/summary.js';
 import type { CompactGraph } from '../graph/compact.js';
 import { locateElement } from '../graph/element.js';
-import type { ReportElement } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
 import type { ChallengeDef, Requirement, ThresholdRequirement } from '../policy/types.js';
 import type { Topology } from '../topology/model.js';
 

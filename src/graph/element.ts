@@ -2,9 +2,20 @@
 // have one, the label the design gives them. Every place that turns an index (or an id) into
 // a ReportElement goes through here, so labels and lines are never forgotten in one view.
 
-import type { ElementKind } from '../envelope/types.js';
-import type { ReportElement } from '../report/report.js';
 import type { CompactGraph } from './compact.js';
+
+/** The three kinds of element a challenge removes and a report names. */
+export type ElementKind = 'node' | 'link' | 'group';
+
+/** An element as the report names it. */
+export interface ReportElement {
+  id: string;
+  kind: ElementKind;
+  /** 1-based line in the design file (head side unless the element only exists at base). */
+  line: number;
+  /** The site's name in the design (GraphML/GML `label` or `name`, our `label`), when it has one. */
+  label?: string;
+}
 
 /** Element `i` of the given kind (node, link or shared-risk group index). */
 export function reportElement(g: CompactGraph, kind: ElementKind, i: number): ReportElement {

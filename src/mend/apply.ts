@@ -7,7 +7,7 @@
 import { isMap, isScalar, isSeq, parseDocument, type Node, type YAMLMap, type YAMLSeq } from 'yaml';
 import { UsageError } from '../errors.js';
 import { adjacency, type CompactGraph } from '../graph/compact.js';
-import type { ReportElement } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
 import { linkKey, type DesignFormat, type TopoLink, type Topology } from '../topology/model.js';
 import type { MendLink } from './types.js';
 

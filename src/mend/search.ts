@@ -22,7 +22,8 @@
 // km (or cost unit, or link). Deterministic: every step is ordered, ties go to the lower index.
 
 import type { CompactGraph } from '../graph/compact.js';
-import type { FileReport, Finding, ReportElement } from '../report/report.js';
+import type { FileReport, Finding } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
 import type { Topology } from '../topology/model.js';
 import type { Change } from './apply.js';
 import { eswaranTarjanBound } from './bridge-tree.js';

@@ -1,7 +1,8 @@
 // What would mend a design: the part of the JSON report (FileReport.mend) that `netbrace mend`
 // prints and the HTML report shows for a failing design. Data only; src/mend/search.ts fills it.
 
-import type { FileStatus, Finding, ReportElement, RequirementResult } from '../report/report.js';
+import type { FileStatus, Finding, RequirementResult } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
 
 /** A finding the suggestions aim to remove, named so that two runs can be compared. */
 export interface MendTarget {

@@ -5,7 +5,8 @@
 
 import { Ajv, type ValidateFunction } from 'ajv';
 import { PolicyError } from '../errors.js';
-import type { ChallengeName, ChallengeParams, RValueSpec } from '../envelope/types.js';
+import type { RValueSpec } from '../envelope/types.js';
+import type { ChallengeName, ChallengeParams } from '../challenges/types.js';
 import type { MetricId } from '../metrics/types.js';
 import type { DesignFormat } from '../topology/model.js';
 import { firstNonNormal, fmt } from '../topology/quantities.js';

@@ -4,7 +4,8 @@
 // that a conflict can name the lines involved.
 
 import type { SourceLocation } from '../errors.js';
-import type { ChallengeName, ChallengeParams, RValueSpec } from '../envelope/types.js';
+import type { RValueSpec } from '../envelope/types.js';
+import type { ChallengeName, ChallengeParams } from '../challenges/types.js';
 import type { Severity } from '../report/report.js';
 import type { DesignFormat } from '../topology/model.js';
 

@@ -8,6 +8,7 @@
 import { logText, oneLine } from './escape.js';
 import { findingCost, findingNumbers, repoPath } from './finding-text.js';
 import { configurationNotes, findingTitle } from './labels.js';
+import { RULE_TITLE } from './vocabulary.js';
 import { SEVERITY_RANK, rankFiles } from './rank.js';
 import type { Finding, Report, Severity } from './report.js';
 
@@ -54,26 +55,6 @@ export const ANNOTATIONS_PER_LEVEL = 10;
 
 const LEVEL: Record<Severity, AnnotationLevel> = { fail: 'error', warn: 'warning', notice: 'notice' };
 
-const TITLE: Record<Finding['rule'], string> = {
-  'r-threshold': 'r-threshold not held',
-  'area-floor': 'envelope area below its floor',
-  'spread-ceiling': 'envelope spread above its ceiling',
-  'n-1': 'N\u22121 rule broken',
-  'new-bridge': 'new single point of failure (bridge)',
-  'new-cut-node': 'new single point of failure (cut site)',
-  'new-stranding-group': 'new single point of failure (shared-risk group)',
-  'hardened-weak-point': 'new weak point hidden by hardening',
-  regression: 'robustness weakened',
-  'weakest-sequence': 'weakest removal sequence',
-  'parse-error': 'design could not be read',
-  'removed-design': 'design removed',
-  'policy-changed': 'policy changed (applies after merge)',
-  degraded: 'evaluation reduced by budget',
-  'not-computable': 'value could not be computed',
-};
-
-
-
 /** Every finding as an annotation, ranked, before the budget is applied. */
 export function annotationsOf(report: Report, options: AnnotationOptions = {}): Annotation[] {
   const out: Annotation[] = [];
@@ -91,7 +72,7 @@ export function annotationsOf(report: Report, options: AnnotationOptions = {}): 
         file,
         startLine,
         ...(x.column && x.column > 0 ? { startColumn: Math.floor(x.column) } : {}),
-        title: oneLine(`netbrace: ${findingTitle(x, TITLE)}`, 200),
+        title: oneLine(`netbrace: ${findingTitle(x, RULE_TITLE)}`, 200),
         message: logText(`${x.message}${findingNumbers(x)}${findingCost(x)}`),
         rule: x.rule,
         inDiff: touched ? touched.has(startLine) : false,
@@ -99,16 +80,19 @@ export function annotationsOf(report: Report, options: AnnotationOptions = {}): 
     }
   }
   // The gate's own configuration, edited by the change: on the workflow and the policy files.
+  // The policy's note is one sentence (story.ts); a change that would loosen it is a warning.
+  const loosens = report.policy.changes?.some((c) => c.effect === 'loosens') ?? false;
   for (const n of configurationNotes(report)) {
     const file = repoPath(options.pathPrefix, n.file);
     const startLine = Math.max(1, n.line);
+    const policy = n.file === report.policy.path;
     out.push({
-      level: n.weakens ? 'error' : 'notice',
+      level: n.weakens ? 'error' : policy && loosens ? 'warning' : 'notice',
       file,
       startLine,
-      title: n.weakens ? 'netbrace: the change weakens netbrace\u2019s own settings' : n.file === report.policy.path ? 'netbrace: policy changed (applies after merge)' : 'netbrace: the change edits netbrace\u2019s workflow',
-      message: logText(n.text),
-      rule: n.file === report.policy.path ? 'policy-changed' : 'own-settings',
+      title: n.weakens ? 'netbrace: the change weakens netbrace\u2019s own settings' : policy ? `netbrace: ${RULE_TITLE['policy-changed']}` : 'netbrace: the change edits netbrace\u2019s workflow',
+      message: logText(policy ? `${n.text}.` : n.text),
+      rule: policy ? 'policy-changed' : 'own-settings',
       inDiff: options.changedLines?.get(file)?.has(startLine) ?? false,
     });
   }

@@ -57,6 +57,25 @@ export function escapeMarkdown(text: string, maxLength = 2000): string {
 }
 
 /**
+ * Running Markdown prose in the middle of a line (never at its start: callers begin lines
+ * with our own words), escaped only as far as it must be so that the raw text stays readable:
+ * `<` and `&` become entities where they could start a tag or an entity (`"`, `>` and
+ * `< 0.001` stay: harmless in the middle of a line outside attributes);
+ * emphasis, code, link and image brackets, strikethrough, math and table bars are
+ * backslash-escaped; emoji short codes and URL autolinks are broken at their colon or dot;
+ * `@` gets a word joiner so that nobody is notified; line breaks become spaces.
+ */
+export function escapeProse(text: string, maxLength = 2000): string {
+  return oneLine(text, maxLength)
+    .replace(/&(?=[A-Za-z#])/g, '&amp;')
+    .replace(/<(?=[A-Za-z/!?])/g, '&lt;')
+    .replace(/[\\`*_[\]|~$]/g, (c) => `\\${c}`)
+    .replace(/:(?=\/\/|[A-Za-z0-9_+-]+:)/g, '\\:')
+    .replace(/(www)\./gi, '$1\\.')
+    .replace(/@/g, '@\u2060');
+}
+
+/**
  * Text inside a Markdown inline code span: shown verbatim, in monospace. The span is fenced
  * with more backticks than the text contains; in a table `|` is escaped because GitHub ends
  * a cell at it even inside code; HTML is not interpreted inside code, so nothing else is needed.

@@ -1,18 +1,18 @@
 // Small text helpers the GitHub views share: a finding's numbers in words and the
 // repository-relative path of a report path. Pure.
 
-import { consequenceSentence, formatDelta, formatError, formatValue, type ElementStyle } from './labels.js';
+import { consequenceSentence, type ElementStyle } from './labels.js';
+import { formatDelta, formatError, formatValue } from './format.js';
 import type { Finding } from './report.js';
 
 /**
- * " (base 0.742, head 0.680, Δ −0.062 ± 0.004)", or "" when the finding has no numbers or its
- * message already states them: a judged finding (one with a status) states the numbers that
- * decide, at the digits that decide, and three decimals beside them would contradict it.
+ * " (base 0.742, head 0.680, Δ −0.062 ± 0.004)" for a finding whose message does not state its
+ * numbers, "" otherwise. A judged finding (one with a status) states the numbers that decide, at
+ * the digits that decide (its `decimals`), so three decimals beside them would contradict it.
+ * Decided on the finding's data, never by reading its message.
  */
 export function findingNumbers(x: Finding, deltaWord = '\u0394'): string {
   if (x.status !== undefined) return '';
-  const stated = x.delta !== undefined && x.delta !== null ? formatDelta(x.delta) : x.head !== undefined && x.head !== null ? formatValue(x.head) : undefined;
-  if (stated !== undefined && x.message.includes(stated)) return '';
   const parts: string[] = [];
   if (x.base !== undefined && x.base !== null) parts.push(`base ${formatValue(x.base)}`);
   if (x.head !== undefined && x.head !== null) parts.push(`head ${formatValue(x.head)}`);

@@ -117,7 +117,13 @@ function sentenceHtml(s: Sentence): string {
 
 const markHtml = (mark: string) => `<span class="mark" aria-hidden="true">${esc(mark)}</span>`;
 
-export function renderHtml(report: Report): string {
+export interface HtmlOptions {
+  /** netbrace's README (http or https), which the definitions link to ("Reading the report"); without it the section is named. */
+  readmeUrl?: string;
+}
+
+export function renderHtml(report: Report, options: HtmlOptions = {}): string {
+  const readme = options.readmeUrl && /^https?:\/\//.test(options.readmeUrl) ? `${options.readmeUrl}#${README_ANCHOR}` : undefined;
   const verdict = verdictStory(report);
   const stories = designStories(report);
   const parts: string[] = [];
@@ -141,7 +147,7 @@ export function renderHtml(report: Report): string {
   parts.push('<main>');
   if (stories.length > 1) parts.push(contents(stories));
   if (stories.length === 0) parts.push('<p>No design files changed: nothing to judge.</p>');
-  stories.forEach((d, i) => parts.push(designSection(d, i)));
+  stories.forEach((d, i) => parts.push(designSection(d, i, readme)));
   parts.push(`<aside class="caution" id="caution" role="note" aria-label="Caution"><h2>Caution</h2><p>${esc(report.caution)}</p></aside>`);
   parts.push('</main>');
   parts.push(
@@ -193,7 +199,7 @@ function weakenedItem(x: WeakenedItem): string {
   );
 }
 
-function designSection(d: DesignStory, index: number): string {
+function designSection(d: DesignStory, index: number, readme: string | undefined): string {
   const f = d.file;
   const id = `design-${index}`;
   const out: string[] = [];
@@ -226,7 +232,7 @@ function designSection(d: DesignStory, index: number): string {
     out.push('</ul>');
     if (d.definitions.length) {
       const defs = d.definitions.map(
-        (x) => `<dt>${esc(x.term)}</dt><dd data-term="${esc(x.term)}">${sentenceHtml(x.sentence)} <a href="#${id}-about-${README_ANCHOR}" class="more">More in the README</a></dd>`,
+        (x) => `<dt>${esc(x.term)}</dt><dd data-term="${esc(x.term)}">${sentenceHtml(x.sentence)} <a href="${esc(readme ?? `#${id}-about-${README_ANCHOR}`)}" class="more">More in the README</a></dd>`,
       );
       out.push(`<dl class="definitions" aria-label="What these words mean">${defs.join('')}</dl>`);
     }
@@ -258,7 +264,7 @@ function designSection(d: DesignStory, index: number): string {
     );
   }
   out.push(mendHtml(f, id));
-  if (d.definitions.length) out.push(readmePointer(`${id}-about-${README_ANCHOR}`));
+  if (d.definitions.length && !readme) out.push(readmePointer(`${id}-about-${README_ANCHOR}`));
   out.push('</div>');
   out.push('</section>');
   return out.filter(Boolean).join('\n');

@@ -1,10 +1,12 @@
 // Words and numbers shared by the human views (terminal, HTML): how a challenge, a status or
 // a number is written, and where an element's line is found. Pure; no colour, no markup.
 
-import type { ChallengeName, ElementKind } from '../envelope/types.js';
+import type { ChallengeName } from '../challenges/types.js';
+import type { ElementKind } from '../graph/element.js';
 import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, Report, RequirementResult } from './report.js';
 import { FILE_STATUS_WORD } from './vocabulary.js';
 import { formatDelta, formatValue } from './format.js';
+import { plainSentence, policyChangeSentence } from './story.js';
 
 // The shared words and numbers live in vocabulary.ts and format.ts; re-exported for the views.
 export { formatDelta, formatError, formatValue, shortRevision } from './format.js';
@@ -376,8 +378,12 @@ export function configurationNotes(r: Report): { text: string; weakens: boolean;
       out.push({ text: `this change edits the workflow that runs netbrace (${c.workflow}, line ${x.line}): ${x.message}${tail}`, weakens: x.weakens, file: c.workflow, line: x.line });
     }
   }
-  if (r.policy.changed && r.policy.path) {
-    out.push({ text: `this change edits the policy (${(r.policy.files ?? [r.policy.path]).join(', ')}); ${r.policy.note ?? 'the base\u2019s version judges it'}`, weakens: false, file: r.policy.path, line: 1 });
+  const policy = policyChangeSentence(r);
+  if (policy && r.policy.path) {
+    // One sentence (story.ts), on the first line the head's policy changes, else its first line.
+    const path = r.policy.path;
+    const first = r.policy.changes?.find((c) => c.line > 0 && c.file === path);
+    out.push({ text: plainSentence(policy).replace(/\.$/, ''), weakens: false, file: path, line: first?.line ?? 1 });
   }
   return out;
 }

@@ -1,55 +1,46 @@
 // The report as GitHub-flavoured Markdown: the job summary and the body of the one living PR
-// comment. Pure: report in, string out. Both have hard size limits on GitHub (the summary is
-// refused whole above 1 MiB, a comment above 65,536 characters), so both are assembled
-// against a budget: worst designs first, each at the most detail that still fits, and a note
-// saying what was left out and where it is. Charts are Mermaid `xychart-beta` blocks (which
-// GitHub renders in summaries and comments) with a Unicode sparkline table beside them, since
-// GitHub Markdown allows neither inline SVG nor data: images. No user-controlled text enters
-// Mermaid except the change's neighbourhood graph's labels, reduced to letters, digits and
-// ". _ -" (mermaid-map.ts); everything user-controlled goes through escape.ts.
+// comment. Pure: report in, string out. The order is the story's (story.ts): the verdict in one
+// sentence, the caution in one line, then per design what weakened, how much, and the detail
+// folded away (chart, removal sequences, structure). Both views have hard size limits on
+// GitHub (the summary is refused whole above 1 MiB, a comment above 65,536 characters), so
+// both are assembled against a budget: worst designs first, each at the most detail that still
+// fits, and a note saying what was left out and where it is. Charts are text: one named row of
+// Unicode bars per line, in a code block, since GitHub Markdown allows neither inline SVG nor
+// data: images. Ids go into code spans (shown verbatim); other user text is escaped prose.
+// No user-controlled text enters Mermaid except the change's neighbourhood graph's labels,
+// reduced to letters, digits and ". _ -" (mermaid-map.ts).
 
 import type { Envelope } from '../envelope/types.js';
-import { escapeHtml, escapeMarkdown, markdownCode, markerValue, oneLine } from './escape.js';
-import { findingNumbers, repoPath } from './finding-text.js';
+import { escapeProse, markdownCode, markerValue, oneLine } from './escape.js';
+import { repoPath } from './finding-text.js';
 import { stableHash } from './fingerprint.js';
+import { formatValue, shortRevision, utf8Length } from './format.js';
+import { challengeLabel, configurationNotes, contingencyLabel, describeNotApplicable, kindPlural, knownElement, knownElements, weakestSequences, xAxisLabel } from './labels.js';
+import { changeMapMarkdown, mendMarkdown } from './mermaid-map.js';
+import type { FileReport, Report, ReportElement } from './report.js';
 import {
-  REQUIREMENT_STATUS_WORD,
-  STATUS_WORD,
-  challengeLabel,
-  configurationNotes,
-  consequenceSentence,
-  contingencyLabel,
-  describeChanges,
-  describeModifications,
-  describeNotApplicable,
-  fileStatusWord,
-  findingTitle,
-  formatElement,
-  formatError,
-  formatRequirementDelta,
-  formatRequirementValue,
-  formatValue,
-  groupFindings,
-  kindPlural,
-  knownElement,
-  knownElements,
-  type GroupedFinding,
-  weakestSequences,
-  xAxisLabel,
-} from './labels.js';
-import { changeMapMarkdown } from './mermaid-map.js';
-import { rankFiles, rankFindings, worstSeverity } from './rank.js';
-import type { Consequence, FileReport, FileStatus, Finding, Report, ReportElement, RequirementResult, Severity } from './report.js';
+  CAUTION_LINE,
+  changeSentence,
+  costSentence,
+  designStories,
+  elementSentence,
+  modificationSentence,
+  policyChangeSentence,
+  verdictStory,
+  type DesignStory,
+  type Sentence,
+} from './story.js';
+import { MARK } from './vocabulary.js';
 
 /** GitHub refuses a step summary over 1 MiB; stay well below (bytes of UTF-8). */
 export const SUMMARY_BUDGET_BYTES = 900 * 1024;
 /** GitHub refuses a comment body over 65,536 characters; keep a margin. */
 export const COMMENT_BUDGET_CHARS = 60_000;
-/** Points per Mermaid line (Mermaid refuses sources over 50,000 characters; keep charts small). */
+/** Points per chart line. */
 export const CHART_POINTS = 21;
 
 export interface MarkdownOptions {
-  /** Shown in the heading, e.g. the project of a monorepo ("netbrace — metro"). Plain text. */
+  /** Shown in the verdict sentence, e.g. the project of a monorepo ("netbrace (metro)"). Plain text. */
   title?: string;
   /** The workflow run, where the artifacts (JSON, SARIF, HTML) can be downloaded. */
   runUrl?: string;
@@ -59,36 +50,18 @@ export interface MarkdownOptions {
   budget?: number;
   /** Maximum points per chart line. */
   chartPoints?: number;
-  /** Artifact files this run wrote (repository-relative names), listed in the footer. */
+  /** Artifact files this run wrote (repository-relative names), listed at the end. */
   artifacts?: string[];
   /** Extra lines (plain text) the shell wants the reader to see, e.g. "comment skipped". */
   notes?: string[];
+  /** netbrace's README (http or https), which the definitions link to ("Reading the report"). */
+  readmeUrl?: string;
 }
 
 export interface CommentOptions extends MarkdownOptions {
   /** The comment key (so several jobs keep separate comments). */
   key: string;
 }
-
-const ICON: Record<Severity | 'ok', string> = { fail: '\u274C', warn: '\u26A0\uFE0F', notice: '\u2139\uFE0F', ok: '\u2705' };
-const SEVERITY_WORD: Record<Severity, string> = { fail: 'failure', warn: 'warning', notice: 'notice' };
-const RULE_WORD: Record<Finding['rule'], string> = {
-  'r-threshold': 'r-threshold',
-  'area-floor': 'area floor',
-  'spread-ceiling': 'spread ceiling',
-  'n-1': 'N\u22121 rule',
-  'new-bridge': 'new bridge',
-  'new-cut-node': 'new cut node',
-  'new-stranding-group': 'new stranding shared-risk group',
-  'hardened-weak-point': 'weak point hidden by hardening',
-  regression: 'regression',
-  'weakest-sequence': 'weakest sequence',
-  'parse-error': 'unreadable design',
-  'removed-design': 'removed design',
-  'policy-changed': 'policy changed',
-  degraded: 'reduced evaluation',
-  'not-computable': 'value not computable',
-};
 
 /** The hidden line that identifies the living comment of one key. */
 export function commentMarker(key: string): string {
@@ -127,13 +100,16 @@ export function renderSummary(report: Report, options: MarkdownOptions = {}): st
   return assemble(report, options, {
     budget: options.budget ?? SUMMARY_BUDGET_BYTES,
     measure: utf8Length,
-    overviewRows: 1000,
-    findingsFull: 200,
-    findingsCompact: 20,
+    itemsFull: 200,
+    itemsCompact: 20,
     charts: Number.MAX_SAFE_INTEGER,
     prefix: '',
     chartPoints: options.chartPoints ?? CHART_POINTS,
     envelopesPerDesign: 4,
+    sequences: 6,
+    chain: 12,
+    structure: true,
+    map: true,
   });
 }
 
@@ -143,72 +119,108 @@ export function renderComment(report: Report, options: CommentOptions): string {
   return assemble(report, options, {
     budget: Math.min(options.budget ?? COMMENT_BUDGET_CHARS, 65_000),
     measure: (s) => s.length,
-    overviewRows: 100,
-    findingsFull: 25,
-    findingsCompact: 5,
+    itemsFull: 25,
+    itemsCompact: 5,
     charts: 3,
     prefix,
     chartPoints: options.chartPoints ?? CHART_POINTS,
     envelopesPerDesign: 1,
+    sequences: 1,
+    chain: 5,
+    structure: false,
+    map: false,
   });
 }
 
 interface Layout {
   budget: number;
   measure: (s: string) => number;
-  overviewRows: number;
-  findingsFull: number;
-  findingsCompact: number;
+  /** Consequences listed per design at full and at compact detail. */
+  itemsFull: number;
+  itemsCompact: number;
   /** How many designs get a chart at full detail. */
   charts: number;
   prefix: string;
   chartPoints: number;
   /** Envelopes charted per design at full detail. */
   envelopesPerDesign: number;
+  /** Removal sequences listed per design at full detail. */
+  sequences: number;
+  /** Elements named per removal sequence before "… N more". */
+  chain: number;
+  /** The structure table (sites, links, bridges, cut sites at base and head). */
+  structure: boolean;
+  /** The Mermaid neighbourhood of the change (the mend line is always given). */
+  map: boolean;
 }
 
 type Detail = 'full' | 'compact';
 
+/* ------------------------------------------------------------------ Markdown of a sentence */
+
+/**
+ * A sentence as Markdown: ids and code in code spans (user text never leaves them), the rest
+ * escaped prose. Text with a backtick of its own goes into a code span too, so that a line
+ * never holds an escaped backtick beside a code span that a lenient reader could pair it with.
+ */
+function md(s: Sentence, max = 600): string {
+  return s.map((x) => (x.kind === 'text' && !(x.user && x.text.includes('`')) ? escapeProse(x.text, max) : markdownCode(x.text, x.kind === 'text' ? max : 160))).join('');
+}
+
+function mdElement(e: ReportElement): string {
+  return md(elementSentence(e));
+}
+
+function definitionsUrl(options: MarkdownOptions): string | undefined {
+  const url = options.readmeUrl;
+  return url && /^https?:\/\/[^\s<>()]+$/.test(url) ? `${url.replace(/#.*$/, '')}#reading-the-report` : undefined;
+}
+
+/* ------------------------------------------------------------------ the whole view */
+
 function assemble(report: Report, options: MarkdownOptions, layout: Layout): string {
-  const files = rankFiles(report.files);
   const path = (p: string) => repoPath(options.pathPrefix, p);
-  const head = layout.prefix + header(report, options) + overview(files, layout.overviewRows, path);
+  const stories = designStories(report);
+  const head = layout.prefix + header(report, options);
+  if (report.part) return fit(head + partBody(stories, path) + footer(report, options, ''), layout);
   let body = '';
   let used = layout.measure(head);
   let charts = 0;
-  let omitted = 0;
-  const reserve = 2048; // the footer, the truncation note and a margin
-  const footerText = (note: string) => footer(report, options, note);
-  const footerSize = layout.measure(footerText(''));
-  for (const f of files) {
-    if (omitted > 0) {
-      omitted++;
+  let omitted: DesignStory[] = [];
+  const reserve = 4096; // the end, the note on what was left out (at most 10 names) and a margin
+  const footerSize = layout.measure(footer(report, options, ''));
+  for (const s of stories) {
+    if (omitted.length > 0) {
+      omitted.push(s);
       continue;
     }
     let placed = false;
     for (const detail of ['full', 'compact'] as Detail[]) {
-      const section = fileSection(f, detail, layout, path, detail === 'full' && charts < layout.charts);
+      const chart = detail === 'full' && charts < layout.charts;
+      const section = designSection(s, detail, layout, path, chart, options);
       const size = layout.measure(section);
       if (used + size + reserve + footerSize <= layout.budget) {
         body += section;
         used += size;
-        if (detail === 'full' && charts < layout.charts && hasChart(f)) charts++;
+        if (chart && s.file.head?.envelopes.length) charts++;
         placed = true;
         break;
       }
     }
-    if (!placed) omitted = 1;
+    if (!placed) omitted = [s];
   }
-  const note =
-    omitted > 0
-      ? `${ICON.notice} ${omitted} more design${omitted === 1 ? '' : 's'} (the least severe) did not fit within GitHub's size limit for this view and ${omitted === 1 ? 'is' : 'are'} listed only in the table above; every finding is in the JSON report and the SARIF file.\n\n`
-      : '';
-  const text = head + body + footerText(note);
-  // The budget reserve covers the footer; a pathological title or notes list cannot overflow.
-  return layout.measure(text) <= layout.budget ? text : truncateTo(text, layout);
+  let note = '';
+  if (omitted.length > 0) {
+    const n = omitted.length;
+    const list = omitted.slice(0, 10).map((s) => `- ${s.mark} ${s.statusWord} \u00b7 ${markdownCode(path(s.file.path), 200)}`).join('\n');
+    note = `${MARK.notice} ${n} more design${n === 1 ? '' : 's'} (the least severe) did not fit within GitHub\u2019s size limit for this view; every finding is in the JSON report and the SARIF file:\n\n${list}${n > 10 ? `\n- \u2026 ${n - 10} more` : ''}\n\n`;
+  }
+  return fit(head + body + footer(report, options, note), layout);
 }
 
-function truncateTo(text: string, layout: Layout): string {
+/** The text itself when it fits (the reserve covers the end); a pathological title or notes list is cut. */
+function fit(text: string, layout: Layout): string {
+  if (layout.measure(text) <= layout.budget) return text;
   const tail = '\n\n\u2026 (cut to fit GitHub\u2019s size limit; the JSON report has everything)\n';
   let lo = 0;
   let hi = text.length;
@@ -224,134 +236,107 @@ function truncateTo(text: string, layout: Layout): string {
 }
 
 function header(report: Report, options: MarkdownOptions): string {
-  const name = options.title ? `netbrace \u2014 ${escapeMarkdown(options.title, 120)}` : 'netbrace';
-  let verdict: string;
-  if (report.files.length === 0) verdict = `${ICON.ok} ${name}: no design file changed \u2014 pass`;
-  else if (report.verdict === 'pass') verdict = `${ICON.ok} ${name}: pass`;
-  else if (report.mode === 'inform') verdict = `${ICON.warn} ${name}: would fail (inform mode, not blocking)`;
-  else verdict = `${ICON.fail} ${name}: the gate failed`;
+  const verdict = verdictStory(report, options.title ? oneLine(options.title, 120) : undefined);
+  let text = `## ${verdict.mark} ${md(verdict.sentence, 400)}\n\n${escapeProse(CAUTION_LINE)}\n\n`;
   const facts: string[] = [`${report.mode} mode`];
   if (report.policy.source === 'builtin') facts.push('built-in default policy (no policy file)');
-  else {
-    const where = report.policy.revision ? ` at ${shortSha(report.policy.revision)}` : '';
-    facts.push(`policy ${markdownCode(report.policy.path ?? '?')}${where}`);
-  }
-  if (report.base && report.head) facts.push(`base ${shortSha(report.base)} \u2192 head ${shortSha(report.head)}`);
-  else if (report.head) facts.push(`head ${shortSha(report.head)}, thresholds only (no base)`);
+  else facts.push(`policy ${markdownCode(report.policy.path ?? '?')}${report.policy.revision ? ` at ${rev(report.policy.revision)}` : ''}`);
+  if (report.base && report.head) facts.push(`base ${rev(report.base)} \u2192 head ${rev(report.head)}`);
+  else if (report.head) facts.push(`head ${rev(report.head)}, thresholds only (no base)`);
   facts.push(`seed ${report.seed}`);
   if (report.scope === 'all') facts.push('every design, thresholds only');
   if (report.part) facts.push(`part ${report.part.index} of ${report.part.total}`);
   if (report.parts) facts.push(`joined parts ${report.parts.joined.join(', ')} of ${report.parts.total}`);
-  let text = `## ${verdict}\n\n${facts.join(' \u00b7 ')}\n\n`;
-  if (report.policy.changed) {
-    const said = report.policy.note
-      ? `${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ''), 600)}.`
-      : 'The policy shown here was read from the base; the proposed policy applies once the change is merged.';
-    text += `> ${ICON.warn} This change modifies the policy file. ${said}\n\n`;
-  } else if (report.policy.note) {
-    text += `> ${ICON.notice} ${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ''), 600)}.\n\n`;
-  }
+  facts.push(`netbrace ${escapeProse(report.tool.version, 40)}`);
+  text += `${facts.join(' \u00b7 ')}\n\n`;
+  const policy = policyChangeSentence(report);
+  if (policy) text += `${MARK.warn} ${md(policy, 1200)}\n\n`;
+  else if (report.policy.note) text += `${MARK.notice} Policy: ${escapeProse(report.policy.note.replace(/\.\s*$/, ''), 600)}.\n\n`;
   for (const n of configurationNotes(report).filter((x) => x.file !== report.policy.path)) {
-    text += `> ${n.weakens ? ICON.fail : ICON.notice} ${escapeMarkdown(n.text, 600)}.\n\n`;
+    text += `${n.weakens ? MARK.fail : MARK.notice} Settings: ${escapeProse(n.text, 600)}.\n\n`;
   }
-  for (const n of options.notes ?? []) text += `> ${escapeMarkdown(n, 500)}\n\n`;
+  for (const n of options.notes ?? []) text += `${MARK.notice} Note: ${escapeProse(n, 500)}\n\n`;
+  if (report.files.length === 0) text += 'No design file changed between base and head, so there is nothing to judge.\n\n';
   return text;
 }
 
-function overview(files: FileReport[], maxRows: number, path: (p: string) => string): string {
-  if (files.length === 0) return 'No design file changed between base and head, so there is nothing to judge.\n\n';
-  const counts = new Map<string, number>();
-  for (const f of files) counts.set(fileStatusWord(f), (counts.get(fileStatusWord(f)) ?? 0) + 1);
-  const parts = [...counts.entries()].map(([s, n]) => `${n} ${s}`);
-  let text = `${files.length} design${files.length === 1 ? '' : 's'} evaluated: ${parts.join(', ')}.\n\n`;
-  text += '| | design | status | findings | worst finding |\n|---|---|---|---|---|\n';
-  for (const f of files.slice(0, maxRows)) {
-    const worst = rankFindings(f.findings)[0];
-    const w = worstSeverity(f);
-    const name = f.previousPath ? `${markdownCode(path(f.previousPath), 200, true)} \u2192 ${markdownCode(path(f.path), 200, true)}` : markdownCode(path(f.path), 200, true);
-    const worstText = worst ? `${lineRef(worst)}${escapeMarkdown(worst.message, 160)}` : '';
-    text += `| ${w ? ICON[w] : ICON.ok} | ${name} | ${fileStatusWord(f)} | ${findingCounts(f)} | ${worstText} |\n`;
-  }
-  if (files.length > maxRows) text += `\n\u2026 and ${files.length - maxRows} more designs, least severe last; see the JSON report.\n`;
-  return `${text}\n`;
+function rev(sha: string): string {
+  return markdownCode(shortRevision(sha), 60);
 }
 
-function findingCounts(f: FileReport): string {
-  const n = { fail: 0, warn: 0, notice: 0 };
-  for (const x of f.findings) n[x.severity]++;
-  const parts = (['fail', 'warn', 'notice'] as Severity[]).filter((s) => n[s] > 0).map((s) => `${n[s]} ${SEVERITY_WORD[s]}${n[s] === 1 ? '' : 's'}`);
-  return parts.length ? parts.join(', ') : 'none';
+/** A part's summary: one line per design; the joined summary carries the detail, once. */
+function partBody(stories: DesignStory[], path: (p: string) => string): string {
+  if (!stories.length) return '';
+  const lines = stories.slice(0, 500).map((s) => `- ${s.mark} ${s.statusWord} \u00b7 ${markdownCode(path(s.file.path), 200)}: ${escapeProse(s.headline, 300)}`);
+  const more = stories.length > 500 ? `\n- \u2026 ${stories.length - 500} more` : '';
+  return `${lines.join('\n')}${more}\n\nThis part\u2019s designs in one line each; the joined summary tells what weakened and how much.\n\n`;
 }
 
-function lineRef(x: Finding): string {
-  return x.line > 0 ? `line ${x.line}: ` : '';
-}
+/* ------------------------------------------------------------------ one design */
 
-function hasChart(f: FileReport): boolean {
-  return Boolean(f.head?.envelopes.length);
-}
+const OUTCOME_WORD: Record<'fail' | 'warn' | 'notice', string> = { fail: 'fails', warn: 'warns', notice: 'note' };
 
-function fileSection(f: FileReport, detail: Detail, layout: Layout, path: (p: string) => string, chart: boolean): string {
-  const w = worstSeverity(f);
+function designSection(s: DesignStory, detail: Detail, layout: Layout, path: (p: string) => string, chart: boolean, options: MarkdownOptions): string {
+  const f = s.file;
   const renamed = f.previousPath ? ` (renamed from ${markdownCode(path(f.previousPath))})` : '';
-  let text = `### ${w ? ICON[w] : ICON.ok} ${markdownCode(path(f.path))} \u2014 ${fileStatusWord(f)}${renamed}\n\n`;
-  if (f.error) {
-    const what = fileStatusWord(f) === STATUS_WORD.unreadable ? 'Could not be read' : 'Could not be evaluated';
-    text += `${what}: line ${f.error.line}, column ${f.error.column}: ${escapeMarkdown(f.error.message, 500)}\n\n`;
+  let text = `### ${s.mark} ${s.statusWord} \u00b7 ${markdownCode(path(f.path))}${renamed}\n\n`;
+  if (f.error && !s.weakened.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
+    const what = s.statusWord === 'could not be evaluated' ? 'Could not be evaluated' : 'Could not be read';
+    text += `${what}: line ${f.error.line}, column ${f.error.column}: ${escapeProse(f.error.message, 500)}\n\n`;
   }
-  if (f.requirements.length) text += requirementTable(f.requirements);
+  const cap = detail === 'full' ? layout.itemsFull : layout.itemsCompact;
+  if (s.weakened.length) {
+    text += '**What weakened**, worst first:\n\n';
+    for (const x of s.weakened.slice(0, cap)) text += `- ${x.severity === 'fail' ? MARK.fail : MARK.warn} ${OUTCOME_WORD[x.severity]}: ${md(x.sentence)}\n`;
+    if (s.weakened.length > cap) text += `- \u2026 ${s.weakened.length - cap} more in the JSON report and the SARIF file\n`;
+    text += '\n';
+  } else if (f.requirements.length) {
+    text += `**What weakened**: ${s.outcome === 'holds' && !s.howMuch.some((l) => l.requirement.status === 'weakened' || l.requirement.status === 'short') ? 'nothing; every requirement holds' : 'no single element stands out; see the numbers below'}.\n\n`;
+  }
+  if (s.howMuch.length) {
+    text += '**How much**, one line per requirement:\n\n';
+    for (const l of s.howMuch) text += `- ${l.mark} ${md(l.sentence, 400)}\n`;
+    text += '\n';
+    const url = definitionsUrl(options);
+    // Each definition on its own line (a hard line break), with the link; without a link the README's section is named once.
+    const lines = s.definitions.map((d) => `${MARK.notice} ${md(d.sentence)}${url ? ` [more](${url})` : ''}`);
+    if (lines.length) text += `${lines.join('\\\n')}${url ? '' : ' The README\u2019s \u201cReading the report\u201d says more.'}\n\n`;
+  }
   const notApplicable = describeNotApplicable(f.head);
-  if (notApplicable) text += `Not applicable to this design: ${escapeMarkdown(notApplicable, 600)}\n\n`;
-  const changes = describeChanges(f);
-  const modified = describeModifications(f, detail === 'full' ? 50 : 10);
-  if (changes || modified.length) {
-    text += '**What the change does**:\n\n';
-    if (changes) text += `- ${escapeMarkdown(changes, 1500)}\n`;
-    for (const m of modified) text += `- ${escapeMarkdown(m, 300)}\n`;
-    text += '\n';
-  }
-  // New bridges and cut nodes of one severity read best as one line each.
-  const findings = groupFindings(rankFindings(f.findings));
-  const cap = detail === 'full' ? layout.findingsFull : layout.findingsCompact;
-  if (findings.length) {
-    text += '**Findings**, worst first:\n\n';
-    for (const x of findings.slice(0, cap)) text += `- ${findingLine(x)}\n`;
-    if (findings.length > cap) text += `- \u2026 ${findings.length - cap} more in the JSON report and the SARIF file\n`;
-    text += '\n';
-  }
-  if (detail === 'full') {
-    if (chart) for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign)) text += chartSection(f, env, layout.chartPoints);
-    text += changeMapMarkdown(f);
-    text += weakestSection(f);
-    text += structureSection(f);
-  }
+  if (notApplicable) text += `Not applicable to this design: ${escapeProse(notApplicable, 600)}\n\n`;
+  const change = changeSentence(f);
+  if (change) text += `**The change**: ${md(change, 1500)}\n\n`;
+  if (detail === 'full') text += folded(s, layout, chart);
   return text;
 }
 
-function requirementTable(rows: RequirementResult[]): string {
-  let text = '| requirement | base | head | \u0394 \u00b1 error | status |\n|---|---:|---:|---:|---|\n';
-  let noise = false;
-  for (const r of rows) {
-    const icon =
-      r.status === 'holds' ? ICON.ok : r.status === 'inside-error' ? '\u3030\uFE0F' : r.status === 'unsettled' ? '\u2754' : r.status === 'not-applicable' ? '\u2796' : ICON[r.severity];
-    if (r.status === 'inside-error') noise = true;
-    const err = formatError(r.se);
-    const delta = r.delta === null ? '\u2013' : `${formatRequirementDelta(r)}${err ? ` ${err}` : ''}`;
-    text += `| ${escapeMarkdown(r.description, 200)} | ${formatRequirementValue(r, r.base)} | ${formatRequirementValue(r, r.head)} | ${delta} | ${icon} ${REQUIREMENT_STATUS_WORD[r.status]} |\n`;
+/** Charts, sequences, structure, attribute changes and notices, behind one <details>. */
+function folded(s: DesignStory, layout: Layout, chart: boolean): string {
+  const f = s.file;
+  let inner = '';
+  const modified = f.changes?.modified ?? [];
+  if (modified.length) {
+    const max = layout.structure ? 50 : 10;
+    inner += `**Attributes the change altered**:\n\n${modified.slice(0, max).map((c) => `- ${md(modificationSentence(c), 300)}`).join('\n')}\n`;
+    inner += modified.length > max ? `- \u2026 ${modified.length - max} more attribute changes in the JSON report\n\n` : '\n';
   }
-  if (noise) text += '\n\u3030\uFE0F *inside the error*: the value dropped by less than its Monte Carlo error, which is never a failure.\n';
-  return `${text}\n`;
-}
-
-function findingLine(x: GroupedFinding): string {
-  const where = x.line > 0 ? ` (line ${x.line}${x.column ? `, column ${x.column}` : ''})` : '';
-  const text = `${ICON[x.severity]} **${RULE_WORD[x.rule] ? findingTitle(x, RULE_WORD) : escapeMarkdown(x.rule, 40)}**${where}: ${escapeMarkdown(x.message, 600)}${findingNumbers(x)}`;
-  // What each weak point costs: one sentence, or one sub-item per member of a merged finding
-  // (escaped as plain text, like the message it follows).
-  const members = x.grouped && x.members && x.members.length > 1 ? x.members.filter((m) => m.consequence) : [];
-  const plain = (t: string) => escapeMarkdown(t, 1200);
-  if (members.length) return `${text}\n${members.map((m) => `  - ${plain(`${formatElement(m.elements[0])}: ${consequenceSentence(m.consequence!, '')}`)}`).join('\n')}`;
-  return x.consequence ? `${text} ${plain(consequenceSentence(x.consequence))}` : text;
+  if (chart) for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign)) inner += chartSection(f, env, layout.chartPoints);
+  inner += layout.map ? changeMapMarkdown(f) : mendMarkdown(f);
+  inner += sequencesSection(f, layout.sequences, layout.chain);
+  if (layout.structure) inner += structureSection(f);
+  if (s.notices.length) {
+    inner += `**Notices**:\n\n${s.notices.slice(0, layout.itemsFull).map((x) => `- ${MARK.notice} ${md(x.sentence)}`).join('\n')}\n`;
+    inner += s.notices.length > layout.itemsFull ? `- \u2026 ${s.notices.length - layout.itemsFull} more in the JSON report\n\n` : '\n';
+  }
+  if (!inner) return '';
+  const what = [
+    chart && f.head?.envelopes.length ? 'chart' : '',
+    weakestSequences(f).length || f.head?.contingencies.length ? 'removal sequences' : '',
+    layout.structure && f.head ? 'structure' : '',
+    s.notices.length ? `${s.notices.length} notice${s.notices.length === 1 ? '' : 's'}` : '',
+  ].filter(Boolean);
+  // One line: a line break (a blank line above all) would end the HTML block early.
+  return `<details><summary>Detail${what.length ? `: ${what.join(', ')}` : ''}</summary>\n\n${inner}</details>\n\n`;
 }
 
 /** Evenly spaced indices, first and last included, at most `max` of them. */
@@ -371,56 +356,34 @@ export function sparkline(values: readonly number[]): string {
     .join('');
 }
 
-function chartNumber(v: number): string {
-  return Number.isFinite(v) ? String(Math.round(v * 1000) / 1000) : '0';
-}
-
+/**
+ * One envelope as a text chart: each line is a named row of bars on the same 0–1 scale, with
+ * its first and last value, so every line is named where it is drawn. Our words and numbers only.
+ */
 function chartSection(f: FileReport, head: Envelope, points: number): string {
   const base = f.base?.envelopes.find((e) => e.challenge === head.challenge && e.kind === head.kind && sameGrid(e, head));
   const idx = sampleIndices(head.x.length, points);
   const pick = (v: readonly number[]) => idx.map((i) => v[i] ?? 0);
   const [qlo, qhi] = head.band;
-  const lo = head.quantiles[String(qlo)]?.value;
-  const series: { name: string; values: number[] }[] = [{ name: 'head median', values: pick(head.median) }];
-  if (base) series.push({ name: 'base median', values: pick(base.median) });
-  if (lo) series.push({ name: `head ${Math.round(qlo * 100)} % quantile (band low)`, values: pick(lo) });
+  const series: { name: string; values: number[] }[] = [];
   const hi = head.quantiles[String(qhi)]?.value;
-  if (hi) series.push({ name: `head ${Math.round(qhi * 100)} % quantile (band high)`, values: pick(hi) });
-  const xs = pick(head.x);
-  const caption = challengeLabel(head.challenge);
-  // Only our own words and numbers enter Mermaid: no user-controlled text.
-  let text = `**Head envelope against the base** \u2014 ${caption}, R against ${xAxisLabel(head.kind, head.xUnit)}:\n\n`;
-  text += '```mermaid\nxychart-beta\n';
-  text += `  title "${mermaidSafe(caption)}"\n`;
-  text += `  x-axis "${mermaidSafe(xAxisLabel(head.kind, head.xUnit))}" [${xs.map((x) => `"${chartNumber(x)}"`).join(', ')}]\n`;
-  text += '  y-axis "R" 0 --> 1\n';
-  for (const s of series) text += `  line [${s.values.map(chartNumber).join(', ')}]\n`;
-  text += '```\n\n';
+  if (hi) series.push({ name: `head ${Math.round(qhi * 100)} % quantile`, values: pick(hi) });
+  series.push({ name: 'head median', values: pick(head.median) });
+  if (base) series.push({ name: 'base median', values: pick(base.median) });
+  const lo = head.quantiles[String(qlo)]?.value;
+  if (lo) series.push({ name: `head ${Math.round(qlo * 100)} % quantile`, values: pick(lo) });
   const end = head.x[head.x.length - 1] ?? 0;
-  const range = head.xUnit === 'km' ? `0 to ${chartNumber(end)} km` : `0 to ${Math.round(end * 100)} % ${kindPlural(head.kind)} removed`;
-  text += `| line (in drawing order) | R over ${range} | start | end |\n|---|---|---:|---:|\n`;
-  for (const s of series) {
-    text += `| ${s.name} | ${sparkline(s.values)} | ${formatValue(s.values[0])} | ${formatValue(s.values[s.values.length - 1])} |\n`;
-  }
+  const range = head.xUnit === 'km' ? `0 to ${formatValue(end)} km` : `0 to ${Math.round(end * 100)} % ${kindPlural(head.kind)} removed`;
+  const width = Math.max(...series.map((s) => s.name.length));
+  let text = `**${challengeLabel(head.challenge)}**: R (bars on a 0\u20131 scale) against ${xAxisLabel(head.kind, head.xUnit)}, ${range}:\n\n\`\`\`text\n`;
+  for (const s of series) text += `${s.name.padEnd(width)}  ${sparkline(s.values)}  ${formatValue(s.values[0])} \u2192 ${formatValue(s.values[s.values.length - 1])}\n`;
+  text += '```\n\n';
   const areas = `area ${formatValue(head.area)}${base ? ` (base ${formatValue(base.area)})` : ''}, spread ${formatValue(head.spread)}${base ? ` (base ${formatValue(base.spread)})` : ''}`;
-  return `${text}\n${head.realizations} realizations, seed ${head.seed}; ${areas}.\n\n`;
+  return `${text}${head.realizations} realizations, seed ${head.seed}; ${areas}.\n\n`;
 }
 
 function sameGrid(a: Envelope, b: Envelope): boolean {
   return a.x.length === b.x.length && a.x.every((v, i) => Math.abs(v - (b.x[i] ?? NaN)) < 1e-12);
-}
-
-function mermaidSafe(text: string): string {
-  return text.replace(/["\n\r\\`<>]/g, ' ');
-}
-
-/**
- * An element as Markdown names it: formatElement with its id and label in code spans. A line
- * holds user text either in code spans or escaped, never both, so no escaped backtick of one
- * can be read as pairing with a code span of the other.
- */
-function mdElement(e: ReportElement): string {
-  return formatElement(e, MD_STYLE);
 }
 
 function elementChain(elements: readonly ReportElement[], max = 12): string {
@@ -433,20 +396,15 @@ function elementList(elements: readonly ReportElement[], max = 20): string {
   return shown.join(', ') + (elements.length > max ? `, \u2026 (${elements.length - max} more)` : '');
 }
 
-function mdCost(c: Consequence | undefined, subject: string): string {
-  return c ? ` ${consequenceSentence(c, subject, MD_STYLE)}` : '';
-}
-
-const MD_STYLE = { id: (x: string) => markdownCode(x, 120), text: (x: string) => markdownCode(x, 120) };
-
-function weakestSection(f: FileReport): string {
+function sequencesSection(f: FileReport, max: number, chain: number): string {
   const head = f.head;
   if (!head) return '';
   const known = knownElements(f);
   const items: string[] = [];
-  for (const seq of weakestSequences(f).slice(0, 6)) {
+  for (const seq of weakestSequences(f).slice(0, max)) {
     const r = seq.values && seq.values.length ? `; R ${formatValue(seq.values[0])} \u2192 ${formatValue(seq.values[seq.values.length - 1])}` : '';
-    items.push(`- ${escapeMarkdown(seq.title, 300)}: ${elementChain(seq.elements)}${r}.${mdCost(seq.consequence, 'These removals')}`);
+    const cost = seq.consequence ? ` These removals ${md(costSentence(seq.consequence, true))}.` : '';
+    items.push(`- ${escapeProse(seq.title, 300)}: ${elementChain(seq.elements, chain)}${r}.${cost}`);
   }
   for (const c of head.contingencies) {
     const worst = c.worst[0];
@@ -470,12 +428,11 @@ function structureSection(f: FileReport): string {
     `| bridges | ${b ? b.bridges.length : '\u2013'} | ${h.bridges.length} |`,
     `| cut sites | ${b ? b.cutNodes.length : '\u2013'} | ${h.cutNodes.length} |`,
   ];
-  // One line: a line break (a blank line above all) would end the HTML block early.
-  let text = `<details><summary>Structure of ${escapeHtml(oneLine(f.path, 300))}</summary>\n\n| | base | head |\n|---|---:|---:|\n${rows.join('\n')}\n\n`;
+  let text = `**Structure** of ${markdownCode(f.path, 300)}:\n\n| | base | head |\n|---|---:|---:|\n${rows.join('\n')}\n\n`;
   text += `Bridges at head: ${list(h.bridges)}\n\nCut sites at head: ${list(h.cutNodes)}\n\n`;
   const degraded = f.head?.degraded ?? [];
-  if (degraded.length) text += `Reduced evaluation: ${degraded.map((d) => escapeMarkdown(d, 200)).join('; ')}\n\n`;
-  return `${text}</details>\n\n`;
+  if (degraded.length) text += `Reduced evaluation: ${degraded.map((d) => escapeProse(d, 200)).join('; ')}\n\n`;
+  return text;
 }
 
 function footer(report: Report, options: MarkdownOptions, note: string): string {
@@ -486,25 +443,6 @@ function footer(report: Report, options: MarkdownOptions, note: string): string 
     const run = options.runUrl && /^https?:\/\/[^\s<>()]+$/.test(options.runUrl) ? `[the workflow run](${options.runUrl})` : 'the workflow run';
     text += `Full detail${list ? ` (${list})` : ''} is in the artifacts of ${run}.\n\n`;
   }
-  text += `<sub>${escapeMarkdown(report.caution, 1000)} netbrace ${escapeMarkdown(report.tool.version, 40)}.</sub>\n`;
+  text += `**Caution.** ${escapeProse(report.caution, 1000)}\n`;
   return text;
-}
-
-function shortSha(sha: string): string {
-  return markdownCode(/^[0-9a-f]{40}$/i.test(sha) ? sha.slice(0, 7) : sha, 60);
-}
-
-
-function utf8Length(s: string): number {
-  let n = 0;
-  for (let i = 0; i < s.length; i++) {
-    const c = s.charCodeAt(i);
-    if (c < 0x80) n += 1;
-    else if (c < 0x800) n += 2;
-    else if (c >= 0xd800 && c <= 0xdbff) {
-      n += 4;
-      i++;
-    } else n += 3;
-  }
-  return n;
 }

@@ -2,41 +2,19 @@
 // summary, PR comment, annotations, SARIF, HTML). Versioned; `join` must keep reading
 // reports of older versions. Keep it deterministic: no timings, no absolute paths, no dates.
 
-import type { AttackCurve, ChallengeName, Contingency, Envelope, RValueSpec } from '../envelope/types.js';
+import type { ChallengeName } from '../challenges/types.js';
+import type { Consequence } from '../graph/consequence.js';
+import type { ReportElement } from '../graph/element.js';
+import type { AttackCurve, Contingency, Envelope, Evaluation, RValueSpec, StructureSummary } from '../envelope/types.js';
 import type { DesignMap, OmittedMap } from '../map/types.js';
 import type { MendReport } from '../mend/types.js';
 
+// The report is made of these; they live with the code that produces them.
+export type { Consequence, Evaluation, ReportElement, StructureSummary };
 export const REPORT_VERSION = 1;
 
 export type FileStatus = 'holds' | 'weakened' | 'below-floor' | 'new' | 'removed' | 'renamed' | 'unreadable';
 export type Severity = 'fail' | 'warn' | 'notice';
-
-export interface ReportElement {
-  id: string;
-  kind: 'node' | 'link' | 'group';
-  /** 1-based line in the design file (head side unless the element only exists at base). */
-  line: number;
-  /** The site's name in the design (GraphML/GML `label` or `name`, our `label`), when it has one. */
-  label?: string;
-}
-
-/**
- * What losing an element (or a whole removal sequence) costs, on connectivity alone: the
- * surviving sites cut off from the largest part and, when the design has demands, the demands
- * whose two ends no longer share a part (latency budgets are not considered here).
- */
-export interface Consequence {
-  /** Surviving sites cut off from the largest part, in file order (at most MAX_STRANDED listed). */
-  stranded: ReportElement[];
-  /** How many sites are cut off (the list may be shorter). */
-  strandedCount: number;
-  /** Demands that were connected and lose every path, and how many demands the design has. */
-  demandsLost?: number;
-  demandsTotal?: number;
-  /** Their volume, and the volume of all demands (the design's own unit). */
-  volumeLost?: number;
-  volumeTotal?: number;
-}
 
 /** One requirement of the policy, judged on one file: the rows of the requirement table. */
 export interface RequirementResult {
@@ -149,27 +127,6 @@ export interface AttributeChange {
   /** 1-based lines of the element at base and at head. */
   baseLine: number;
   headLine: number;
-}
-
-export interface StructureSummary {
-  nodes: number;
-  links: number;
-  components: number;
-  bridges: ReportElement[];
-  cutNodes: ReportElement[];
-}
-
-/** Everything evaluated on one side (base or head) of one design. */
-export interface Evaluation {
-  r: RValueSpec;
-  structure: StructureSummary;
-  envelopes: Envelope[];
-  attacks: AttackCurve[];
-  contingencies: Contingency[];
-  /** Reasons the evaluation was reduced by budgets; empty when it ran in full. */
-  degraded: string[];
-  /** Challenges that do not apply to this design (it lacks coordinates, risk groups...), with why; absent when all applied. */
-  notApplicable?: { challenge: ChallengeName; reason: string }[];
 }
 
 export interface FileReport {

@@ -7,7 +7,9 @@
 import { oneLine } from './escape.js';
 import { stableHash } from './fingerprint.js';
 import { findingCost, findingNumbers, repoPath } from './finding-text.js';
+import { configurationNotes } from './labels.js';
 import { rankFiles, rankFindings } from './rank.js';
+import { RULE_TITLE } from './vocabulary.js';
 import type { Finding, Report, Severity } from './report.js';
 
 export const SARIF_SCHEMA_URI = 'https://json.schemastore.org/sarif-2.1.0.json';
@@ -28,6 +30,7 @@ type RuleId = Finding['rule'];
 
 interface RuleText {
   name: string;
+  /** The help's lead sentence; the rule's short description is its title (vocabulary.ts). */
   short: string;
   full: string;
   help: string;
@@ -175,7 +178,7 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
     return {
       id,
       name: r.name,
-      shortDescription: { text: r.short },
+      shortDescription: { text: RULE_TITLE[id] },
       fullDescription: { text: r.full },
       help: { text: r.help, markdown: `**${r.short}.** ${r.full}\n\n${r.help}` },
       defaultConfiguration: { level: id === 'weakest-sequence' || id === 'removed-design' || id === 'policy-changed' ? 'note' : id === 'degraded' || id === 'hardened-weak-point' ? 'warning' : 'error' },
@@ -218,6 +221,23 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
         properties,
       });
     }
+  }
+  // The policy change: one sentence on the policy file (a warning when it would loosen it).
+  const policyNote = configurationNotes(report).find((n) => n.file === report.policy.path && report.policy.changed);
+  if (policyNote && results.length < SARIF_MAX_RESULTS) {
+    total++;
+    const path = repoPath(options.pathPrefix, policyNote.file);
+    const changes = report.policy.changes ?? [];
+    const x: Finding = { rule: 'policy-changed', severity: 'notice', message: policyNote.text, elements: [], line: policyNote.line };
+    results.push({
+      ruleId: 'policy-changed',
+      ruleIndex: RULE_IDS.indexOf('policy-changed'),
+      level: changes.some((c) => c.effect === 'loosens') ? 'warning' : 'note',
+      message: { text: nonEmpty(`${policyNote.text}.`, RULES['policy-changed'].short) },
+      locations: [{ physicalLocation: { artifactLocation: { uri: uriOf(path) }, region: { startLine: Math.max(1, policyNote.line) } } }],
+      fingerprints: { [FINGERPRINT_KEY]: `${findingFingerprint(path, x)}:1` },
+      properties: { changes },
+    });
   }
   const runProperties: Record<string, unknown> = { verdict: report.verdict, mode: report.mode, seed: report.seed };
   if (total > results.length) runProperties.resultsOmitted = total - results.length;

@@ -15,11 +15,14 @@ export type SegmentKind = 'text' | 'code' | 'id';
 export interface Segment {
   kind: SegmentKind;
   text: string;
+  /** Text from a design or a message (a label, a reason): never merged with our words, so a view may set it apart. */
+  user?: boolean;
 }
 export type Sentence = Segment[];
 
 export const seg = {
   text: (text: string): Segment => ({ kind: 'text', text }),
+  user: (text: string): Segment => ({ kind: 'text', text, user: true }),
   code: (text: string): Segment => ({ kind: 'code', text }),
   id: (text: string): Segment => ({ kind: 'id', text }),
 };
@@ -35,7 +38,7 @@ export function compact(s: Sentence): Sentence {
   for (const x of s) {
     if (x.text === '') continue;
     const last = out[out.length - 1];
-    if (last && last.kind === 'text' && x.kind === 'text') last.text += x.text;
+    if (last && last.kind === 'text' && x.kind === 'text' && !last.user && !x.user) last.text += x.text;
     else out.push({ ...x });
   }
   return out;
@@ -102,10 +105,10 @@ export const CAUTION_LINE =
 
 const KIND_WORD: Record<ReportElement['kind'], string> = { node: 'site', link: 'link', group: 'shared-risk group' };
 
-/** "Kaskeld (site `kaskeld`, line 58)", "link `a-b` (line 12)", "site `x`" when the line is unknown. */
+/** "Kaskeld (`kaskeld`, line 58)", "link `a-b` (line 12)", "site `x`" when the line is unknown. */
 export function elementSentence(e: Pick<ReportElement, 'id' | 'kind' | 'line' | 'label'>): Sentence {
   const line = e.line > 0 ? `, line ${e.line}` : '';
-  if (e.label) return [seg.text(`${e.label} (${KIND_WORD[e.kind]} `), seg.id(e.id), seg.text(`${line})`)];
+  if (e.label) return [seg.user(e.label), seg.text(' ('), seg.id(e.id), seg.text(`${line})`)];
   return [seg.text(`${KIND_WORD[e.kind]} `), seg.id(e.id), seg.text(e.line > 0 ? ` (line ${e.line})` : '')];
 }
 
@@ -169,7 +172,7 @@ const WEAK_POINT: Partial<Record<Finding['rule'], string>> = {
 
 function capitalized(s: Sentence): Sentence {
   const first = s[0];
-  if (!first || first.kind !== 'text') return s;
+  if (!first || first.kind !== 'text' || first.user) return s;
   return [{ ...first, text: first.text.charAt(0).toUpperCase() + first.text.slice(1) }, ...s.slice(1)];
 }
 
@@ -185,9 +188,9 @@ function itemSentence(x: Finding): Sentence {
     const cost = x.consequence ? [seg.text('; it '), ...costSentence(x.consequence)] : [];
     return compact([seg.text('Losing '), ...elementSentence(el), seg.text(` alone leaves R at ${formatFixed(x.head, d)}, below the N\u22121 floor ${x.threshold}`), ...cost, seg.text('.')]);
   }
-  if (x.rule === 'parse-error' && x.line > 0) return compact([seg.text(`Line ${x.line}${x.column ? `, column ${x.column}` : ''}: `), seg.text(x.message), seg.text('.')]);
+  if (x.rule === 'parse-error' && x.severity === 'fail') return compact([seg.text(`Could not be read${x.line > 0 ? ` at line ${x.line}${x.column ? `, column ${x.column}` : ''}` : ''}: `), seg.user(x.message.replace(/\.\s*$/, '')), seg.text('.')]);
   const cost = x.consequence ? [seg.text('; losing it '), ...costSentence(x.consequence)] : [];
-  return compact(capitalized([seg.text(x.message.replace(/\.\s*$/, '')), ...cost, seg.text('.')]));
+  return compact(capitalized([seg.user(x.message.replace(/\.\s*$/, '')), ...cost, seg.text('.')]));
 }
 
 /** How much an item costs, for worst-first order within a severity: demands, volume, sites. */
@@ -302,7 +305,7 @@ export function requirementLine(r: RequirementResult, findings: readonly Finding
 /* ------------------------------------------------------------------ definitions */
 
 export interface Definition {
-  term: 'R' | 'area' | 'spread' | '\u00b1';
+  term: 'R' | 'area' | 'spread' | '\u00b1' | 'inside-error';
   sentence: Sentence;
   /** The README section that says more (README_ANCHOR). */
   anchor: string;
@@ -333,6 +336,9 @@ export function definitions(f: FileReport): Definition[] {
   }
   if (f.requirements.some((r) => (r.se ?? 0) > 0)) {
     out.push({ term: '\u00b1', anchor: README_ANCHOR, sentence: [seg.text('\u00b1: one standard error of the change, from the same random removals on base and head (paired Monte Carlo).')] });
+  }
+  if (f.requirements.some((r) => r.status === 'inside-error')) {
+    out.push({ term: 'inside-error', anchor: README_ANCHOR, sentence: [seg.text('inside-error: the value dropped by less than its Monte Carlo error, which is never a failure.')] });
   }
   return out;
 }
@@ -382,6 +388,8 @@ export function designStory(f: FileReport): DesignStory {
   }
   for (const x of findings) {
     if (isNumberFinding(x, f)) continue;
+    // A weakest sequence that is only context is told with the other sequences (detail).
+    if (x.rule === 'weakest-sequence' && x.severity === 'notice') continue;
     const item: WeakenedItem = { severity: x.severity, rule: x.rule, title: RULE_TITLE[x.rule] ?? x.rule, line: x.line, elements: x.elements, sentence: itemSentence(x), finding: x };
     (x.severity === 'notice' ? notices : items).push(item);
   }
@@ -452,7 +460,7 @@ export function policyChangeSentence(report: Pick<Report, 'policy' | 'base'>): S
   if (!p.changed) return undefined;
   const judgedByBase = p.revision !== undefined && p.revision === report.base;
   const tail = judgedByBase ? '; the base\u2019s version judges this change, and the head\u2019s applies once merged.' : '; the head\u2019s version judges this change (policy-source: head).';
-  if (!p.changes) return [seg.text(`This change edits the policy${p.note ? ` (${p.note.replace(/\.\s*$/, '')})` : ''}.`)];
+  if (!p.changes) return p.note ? [seg.text('Policy: '), seg.user(p.note.replace(/\.\s*$/, '')), seg.text('.')] : [seg.text(`This change edits the policy${tail}`)];
   const would = judgedByBase ? 'would ' : '';
   const loosen = p.changes.filter((c) => c.effect === 'loosens').map(changePart);
   const tighten = p.changes.filter((c) => c.effect === 'tightens').map(changePart);
@@ -462,4 +470,51 @@ export function policyChangeSentence(report: Pick<Report, 'policy' | 'base'>): S
   if (!clauses.length) return compact([seg.text('This change edits the policy without changing any floor or rule'), seg.text(tail)]);
   const both = clauses.length === 2 ? [...clauses[0], seg.text(', and '), ...clauses[1]] : clauses[0];
   return compact([seg.text('This change edits the policy: the head\u2019s version '), ...both, seg.text(tail)]);
+}
+
+/* ------------------------------------------------------------------ what the change does */
+
+function plural(kind: ReportElement['kind'], n: number): string {
+  const w = KIND_WORD[kind];
+  return n === 1 ? w : kind === 'group' ? 'shared-risk groups' : `${w}s`;
+}
+
+/**
+ * "+1 site (Saltmarrow, `saltmarrow`, line 210); −2 links (`a-b`, base line 214; …); site `a`
+ * renamed `b` (line 3); now hardened: …": what the change did to the design's elements.
+ */
+export function changeSentence(f: FileReport, max = 4): Sentence | undefined {
+  const ch = f.changes;
+  const renamed = ch?.renamed ?? [];
+  const hardened = ch?.hardened ?? [];
+  if (!ch || (ch.added.length === 0 && ch.removed.length === 0 && renamed.length === 0 && hardened.length === 0)) return undefined;
+  const parts: Sentence[] = [];
+  const side = (sign: string, list: readonly ReportElement[], where: string) => {
+    for (const kind of ['node', 'link', 'group'] as const) {
+      const l = list.filter((e) => e.kind === kind);
+      if (!l.length) continue;
+      const items = l.slice(0, max).map((e): Sentence => [...(e.label ? [seg.user(e.label), seg.text(', ')] : []), seg.id(e.id), seg.text(`, ${where}line ${e.line}`)]);
+      const out: Sentence = [seg.text(`${sign}${l.length} ${plural(kind, l.length)} (`)];
+      items.forEach((x, i) => out.push(...(i ? [seg.text('; ')] : []), ...x));
+      out.push(seg.text(`${l.length > max ? `; \u2026 ${l.length - max} more` : ''})`));
+      parts.push(out);
+    }
+  };
+  side('+', ch.added, '');
+  side('\u2212', ch.removed, 'base ');
+  for (const r of renamed.slice(0, max)) parts.push([seg.text(`${KIND_WORD[r.from.kind]} `), seg.id(r.from.id), seg.text(' renamed '), seg.id(r.to.id), seg.text(` (line ${r.to.line})`)]);
+  if (renamed.length > max) parts.push([seg.text(`\u2026 ${renamed.length - max} more renamed`)]);
+  for (const [flag, word] of [[true, 'now hardened: '], [false, 'no longer hardened: ']] as const) {
+    const l = hardened.filter((e) => e.hardened === flag);
+    if (l.length) parts.push([seg.text(word), ...joinList(l.slice(0, max).map(elementSentence), 'and'), seg.text(l.length > max ? `, \u2026 ${l.length - max} more` : '')]);
+  }
+  const out: Sentence = [];
+  parts.forEach((p, i) => out.push(...(i ? [seg.text('; ')] : []), ...p));
+  return compact(out);
+}
+
+/** "link `a—b`: length 24 km → 30 km (base line 12, head line 13)": one attribute the change altered. */
+export function modificationSentence(c: NonNullable<NonNullable<FileReport['changes']>['modified']>[number]): Sentence {
+  const lines = c.baseLine === c.headLine ? `line ${c.headLine}` : `base line ${c.baseLine}, head line ${c.headLine}`;
+  return [seg.text(`${KIND_WORD[c.kind]} `), seg.id(c.id), seg.text(`: ${c.attribute} `), seg.user(c.before), seg.text(' \u2192 '), seg.user(c.after), seg.text(` (${lines})`)];
 }

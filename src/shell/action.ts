@@ -5,7 +5,9 @@ import * as core from '@actions/core';
 import { evaluateDesignParallel } from '../parallel/pool.js';
 import { renderHtml } from '../report/html.js';
 import { joinReports, runGate } from '../run-gate.js';
-import { coreOutput, defaultGithub, run } from './action-run.js';
+import { defaultGithub } from './action-comment.js';
+import { coreOutput } from './action-outputs.js';
+import { run } from './action-run.js';
 import { gitDeps, runGit } from './git.js';
 
 run(process.env, {

@@ -239,7 +239,7 @@ describe('pull requests', () => {
     const ws = checkout(scenario.fail, { shallow: false });
     const r1 = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs());
     expect(r1.code, r1.stdout + r1.stderr).toBe(1);
-    expect(failedMessages(r1)).toEqual([expect.stringMatching(/^netbrace: the gate failed: 1 design with failures/)]);
+    expect(failedMessages(r1)).toEqual([expect.stringMatching(/^netbrace blocks this merge: 1 design (weakened|below a floor)/)]);
     // Annotations: errors on the design file, at lines of the ring's elements.
     const errors = commands(r1.stdout, 'error').filter((c) => c.props.file);
     expect(errors.length).toBeGreaterThan(0);
@@ -259,8 +259,8 @@ describe('pull requests', () => {
     expect(Number(r1.outputs['count-weakened']) + Number(r1.outputs['count-below-floor'])).toBe(1);
     expect(Object.keys(r1.outputs).sort()).toEqual(Object.keys(actionOutputs()).sort());
     // Summary.
-    expect(r1.summary).toMatch(/^## \u274C netbrace: the gate failed/);
-    expect(r1.summary).toContain('```mermaid\nxychart-beta');
+    expect(r1.summary).toMatch(/^## \u25A0 netbrace blocks this merge: 1 design/);
+    expect(r1.summary).toMatch(/```text\nhead 90 % quantile +[▁-█]+/);
     expect(r1.summary).toContain('`nets/ring.net.yaml`');
     // Files.
     const report = JSON.parse(readFileSync(path.join(ws, r1.outputs.report), 'utf8'));
@@ -287,7 +287,7 @@ describe('pull requests', () => {
     expect(r2.outputs.verdict).toBe('pass');
     expect(api.comments).toHaveLength(1);
     expect(api.comments[0].id).toBe(created);
-    expect(api.comments[0].body).toMatch(/netbrace: pass/);
+    expect(api.comments[0].body).toMatch(/netbrace: no design (weakened|fails its policy)/);
     expect(api.requests.filter((q) => q.method === 'POST')).toHaveLength(1);
     expect(api.requests.filter((q) => q.method === 'PATCH')).toHaveLength(1);
     expect(api.requests.every((q) => q.authorization === `token ${TOKEN}`)).toBe(true);
@@ -301,7 +301,7 @@ describe('pull requests', () => {
     expect(failedMessages(r)).toEqual([]);
     expect(commands(r.stdout, 'error').filter((c) => c.props.file).length).toBeGreaterThan(0);
     expect(commands(r.stdout, 'warning').some((c) => /inform mode/.test(c.message))).toBe(true);
-    expect(r.summary).toContain('would fail (inform mode, not blocking)');
+    expect(r.summary).toContain('inform mode, so the merge is not blocked');
   }, 30_000);
 
   it('fork: the read-only token\u2019s 403 is a warning; summary, annotations and verdict stand', async () => {
@@ -334,7 +334,7 @@ describe('pull requests', () => {
     const r = await runAction({ workspace: second, runnerTemp: path.join(work, 'rt-comment'), eventName: 'workflow_run', event, inputs, apiUrl: api.url });
     expect(r.code, r.stdout + r.stderr).toBe(0); // inform: the first run decided
     expect(api.comments).toHaveLength(1);
-    expect(api.comments[0].body).toContain('the gate failed');
+    expect(api.comments[0].body).toMatch(/netbrace blocks this merge|inform mode, so the merge is not blocked/);
     expect(api.requests.some((q) => q.method === 'GET' && q.path === '/repos/acme/backbone/pulls/7')).toBe(true);
     // A report about another commit is not posted.
     api.comments.length = 0;

@@ -12,15 +12,11 @@ import type { Annotation } from '../../src/report/annotations.js';
 import { commentMarker, renderComment } from '../../src/report/markdown.js';
 import type { Report } from '../../src/report/report.js';
 import { Ajv } from 'ajv';
-import {
-  emptyReport as emptyRunReport,
-  readInputs,
-  run,
-  shouldWriteComment,
-  type ActionDeps,
-  type GateRequestLike,
-  type GitResult,
-} from '../../src/shell/action-run.js';
+import type { ActionDeps, GateRequestLike, GitResult } from '../../src/shell/action-deps.js';
+import { shouldWriteComment } from '../../src/shell/action-comment.js';
+import { readInputs } from '../../src/shell/action-inputs.js';
+import { emptyReport as emptyRunReport } from '../../src/shell/action-outputs.js';
+import { run } from '../../src/shell/action-run.js';
 import { createClient } from '../../src/shell/github.js';
 import { joinReports } from '../../src/gate/join.js';
 import { startFakeApi, type FakeApi } from './fake-api.js';
@@ -130,7 +126,7 @@ describe('inputs', () => {
   it('reads exactly the inputs action.yml declares', () => {
     const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
     const declared = Object.keys((parseYaml(readFileSync(path.join(root, 'action.yml'), 'utf8')) as { inputs: object }).inputs).sort();
-    const source = readFileSync(path.join(root, 'src', 'shell', 'action-run.ts'), 'utf8');
+    const source = readFileSync(path.join(root, 'src', 'shell', 'action-inputs.ts'), 'utf8');
     const read = [...new Set([...source.matchAll(/(?:getInput|oneOf|relativePath|optionalInt)\(env, '([a-z-]+)'/g)].map((m) => m[1]))].sort();
     expect(read).toEqual(declared);
   });
@@ -215,6 +211,11 @@ describe('events', () => {
     expect(out).toMatchObject({ exitCode: 0, verdict: 'pass' });
     expect(rec.gateCalls.length).toBe(0);
     expect(rec.summary).toContain('no design file changed');
+    // Put together as a run's report is: the seed is the one the gate would have used (the
+    // built-in policy's), the keys in the same order.
+    const written = JSON.parse(readFileSync(path.join(dir, 'ws', '.netbrace-out', 'netbrace-report.json'), 'utf8'));
+    expect(written.seed).toBe(1);
+    expect(Object.keys(written)).toEqual(['version', 'tool', 'verdict', 'mode', 'policy', 'seed', 'counts', 'files', 'caution']);
   });
 
   it('a missing base that cannot be fetched stops with the checkout fix', async () => {
@@ -235,6 +236,29 @@ describe('events', () => {
     expect(rec.gateCalls).toEqual([]);
     expect(rec.summary).toContain('no design file changed');
     expect(api.requests.some((r) => r.path.endsWith('/pulls/12/files'))).toBe(true);
+    // The head's policy is read through the Action's git, like every other git command.
+    expect(rec.gitCalls).toContainEqual(['show', '--no-textconv', '--end-of-options', `${HEAD}:.netbrace.yaml`]);
+  });
+
+  it('a missing base: the head policy (read through the Action\u2019s git) decides which of the pull request\u2019s files are designs', async () => {
+    api.prFiles.push({ filename: 'README.md', status: 'modified' });
+    const policy = 'designs:\n  - paths: ["README.md"]\n';
+    const { d, rec } = deps(sampleReport(), (args) =>
+      args[0] === 'cat-file' && args[2].startsWith(BASE)
+        ? { code: 1, stdout: '', stderr: '' }
+        : args[0] === 'fetch'
+          ? { code: 128, stdout: '', stderr: 'fatal' }
+          : args[0] === 'show'
+            ? args[3] === `${HEAD}:.netbrace.yaml`
+              ? { code: 0, stdout: policy, stderr: '' }
+              : { code: 128, stdout: '', stderr: 'fatal: path does not exist' }
+            : { code: 0, stdout: '', stderr: '' },
+    );
+    const out = await run(env(), d);
+    // README.md is a design by that policy: no "nothing to judge", the base is needed.
+    expect(out.exitCode).toBe(2);
+    expect(rec.gateCalls).toEqual([]);
+    expect(rec.failed[0]).toContain('fetch-depth: 0');
   });
 });
 
@@ -243,10 +267,10 @@ describe('verdict and comment', () => {
     const { d, rec } = deps(sampleReport());
     const out = await run(env(), d);
     expect(out).toMatchObject({ exitCode: 1, verdict: 'fail' });
-    expect(rec.failed).toEqual(['netbrace: the gate failed: 2 designs with failures (see the annotations and the job summary)']);
+    expect(rec.failed).toEqual(['netbrace blocks this merge: 1 design weakened, 1 design could not be read (see the annotations and the job summary)']);
     expect(rec.outputs).toMatchObject({ verdict: 'fail', 'count-weakened': '1', 'count-unreadable': '1', designs: '5', report: '.netbrace-out/netbrace-report.json', sarif: '.netbrace-out/netbrace.sarif' });
     expect(rec.annotations[0]).toMatchObject({ level: 'error', file: 'backbone/core.net.yaml', startLine: 42 });
-    expect(rec.summary).toContain('the gate failed');
+    expect(rec.summary).toContain('netbrace blocks this merge: 1 design weakened, 1 design could not be read');
     const written = JSON.parse(readFileSync(path.join(dir, 'ws', '.netbrace-out', 'netbrace-report.json'), 'utf8'));
     expect(written.verdict).toBe('fail');
   });

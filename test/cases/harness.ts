@@ -7,7 +7,7 @@ import { cpSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, 
 import os from 'node:os';
 import path from 'node:path';
 import YAML from 'yaml';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import type { Report } from '../../src/report/report.js';
 import { recordIO } from '../shell/helpers-io.js';
 

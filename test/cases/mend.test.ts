@@ -6,7 +6,7 @@ import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import type { MendReport } from '../../src/mend/types.js';
 import type { Report } from '../../src/report/report.js';
 import { recordIO } from '../shell/helpers-io.js';

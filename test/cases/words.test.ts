@@ -15,7 +15,7 @@ import schema from '../../src/report/report.schema.json' with { type: 'json' };
 import { serializeReport, type FileReport, type Report } from '../../src/report/report.js';
 import { renderSarif } from '../../src/report/sarif.js';
 import { runGate, type GateDeps } from '../../src/run-gate.js';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import { memoryDeps } from '../gate/memory-repo.js';
 import { recordIO } from '../shell/helpers-io.js';
 import { caseNames, cleanupCases, runCase } from './harness.js';
@@ -182,14 +182,14 @@ describe('views title and word findings by what the judging found', () => {
     const report = run.report!;
     const about = (challenge: string) =>
       planAnnotations(report).annotations.find((a) => a.rule === 'regression' && a.message.startsWith(`area of "${challenge}"`));
-    expect(about('link-failures')?.title).toBe('netbrace: robustness weakened');
+    expect(about('link-failures')?.title).toBe('netbrace: requirement weakened');
     expect(about('site-failures')?.title).toBe('netbrace: robustness dropped within the allowance');
     expect(about('site-failures')?.level).toBe('notice');
-    // Markdown escapes brackets; compare the text a reader sees.
-    const md = renderSummary(report).replace(/\\/g, '');
-    expect(md).toContain('**robustness dropped within the allowance**');
-    // The deciding digits, and no three-decimal restatement beside them that would contradict them.
-    expect(md).toContain('(\u0394 \u22120.02983 \u00b1 0.00153), more than the allowed 0.02980\n');
+    // The summary words each requirement from the report's numbers: the drop within the
+    // allowance holds, the one beyond it is weakened, at the deciding digits the gate recorded.
+    const md = renderSummary(report);
+    expect(md).toContain('- \u25A1 holds \u00b7 area, random site removals 0.291 \u2192 0.277 (\u22120.014 \u00b1 0.002), tracked (no floor), allowed drop 0.030\n');
+    expect(md).toContain('- \u25A0 weakened \u00b7 area, random link removals 0.46767 \u2192 0.43784 (\u22120.02983 \u00b1 0.00153), tracked (no floor), allowed drop 0.02980\n');
     // The numbers travel as data too: the allowance each drop was judged against.
     const weakened = only(report).findings.find((x) => x.requirement === 'area-floor:link-failures' && x.rule === 'regression')!;
     expect([weakened.status, weakened.allowance]).toEqual(['weakened', 0.0298]);
@@ -219,9 +219,9 @@ describe('views title and word findings by what the judging found', () => {
       'link ferry\u2014mudflat risk groups: sea-wall \u2192 none',
     ]);
     const line = 'link quay\u2014saltings: length 12 km \u2192 12.5 km (base line 18, head line 19)';
-    const md = renderSummary(run.report!).replace(/\\/g, '');
-    expect(md).toContain('**What the change does**');
-    expect(md).toContain(line);
+    const md = renderSummary(run.report!);
+    expect(md).toContain('**Attributes the change altered**');
+    expect(md).toContain('- link `quay\u2014saltings`: length 12 km \u2192 12.5 km (base line 18, head line 19)\n');
     expect(md).toContain('N\u22121 (links), 5 of 5 cases');
     expect(renderHtml(run.report!)).toContain(line);
   });

@@ -1,6 +1,6 @@
 // `netbrace envelope` end to end through main(), on the committed fixtures.
 import { describe, expect, it } from 'vitest';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import { challenges } from '../../src/challenges/registry.js';
 import { recordIO } from '../shell/helpers-io.js';
 

@@ -10,7 +10,8 @@
 //   and the largest component after k of them is 6 − k.
 import { describe, expect, it } from 'vitest';
 import { graphFromEdges } from '../../src/graph/compact.js';
-import { evaluateDesign, pairedStatistic, type EvaluationSpec } from '../../src/envelope/evaluate.js';
+import { evaluateDesign, type EvaluationSpec } from '../../src/envelope/evaluate.js';
+import { pairedStatistic } from '../../src/envelope/pairing.js';
 import { bandPlan } from '../../src/envelope/engine.js';
 import { resolveParams } from '../../src/challenges/registry.js';
 import { countAt } from '../../src/challenges/units.js';

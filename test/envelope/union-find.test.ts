@@ -9,7 +9,7 @@ import { connectivityCurve } from '../../src/envelope/union-find.js';
 import { unionFindR } from '../../src/envelope/r-value.js';
 import { hashIds, randomOrder, seedWord } from '../../src/envelope/rng.js';
 import { removeUnit, unitCount } from '../../src/challenges/units.js';
-import type { ElementKind } from '../../src/envelope/types.js';
+import type { ElementKind } from '../../src/graph/element.js';
 import { randomGraph } from './graphs.js';
 
 function checkCurve(g: CompactGraph, kind: ElementKind, seed: number): void {

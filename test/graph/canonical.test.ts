@@ -8,7 +8,7 @@ import { compareCodePoints, compareIds } from '../../src/graph/canonical.js';
 import { compileTopology, graphFromEdges } from '../../src/graph/compact.js';
 import { evaluateDesign, type EvaluationSpec } from '../../src/envelope/evaluate.js';
 import { Xoshiro128 } from '../../src/envelope/rng.js';
-import type { ChallengeName } from '../../src/envelope/types.js';
+import type { ChallengeName } from '../../src/challenges/types.js';
 import { parseDesign } from '../../src/topology/parse.js';
 import type { Topology } from '../../src/topology/model.js';
 

@@ -15,7 +15,8 @@ import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from
 import { joinReports } from '../../src/gate/join.js';
 import type { Report } from '../../src/report/report.js';
 import { runGate } from '../../src/run-gate.js';
-import { run, type ActionDeps, type RunOutcome } from '../../src/shell/action-run.js';
+import type { ActionDeps, RunOutcome } from '../../src/shell/action-deps.js';
+import { run } from '../../src/shell/action-run.js';
 import { gitDeps, runGit } from '../../src/shell/git.js';
 import { createClient } from '../../src/shell/github.js';
 import { startFakeApi, type FakeApi } from '../action/fake-api.js';
@@ -179,7 +180,7 @@ describe('REST API faults: the verdict is that of a healthy run; the step says w
       try {
         const r = await runWith(sampleReport(), server.url);
         expect(r.out).toMatchObject({ exitCode: 1, verdict: 'fail', comment: 'failed' });
-        expect(r.rec.failed).toEqual(['netbrace: the gate failed: 2 designs with failures (see the annotations and the job summary)']);
+        expect(r.rec.failed).toEqual(['netbrace blocks this merge: 1 design weakened, 1 design could not be read (see the annotations and the job summary)']);
         expect(r.rec.warnings[0]).toMatch(/could not write the pull-request comment/);
         expect(server.hits()).toBeGreaterThan(0);
         produced.push(`${what}: exit 1, ${r.rec.warnings[0].slice(0, 90)}…`);

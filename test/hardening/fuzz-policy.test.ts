@@ -13,7 +13,7 @@ import { graphFromEdges } from '../../src/graph/compact.js';
 import { STARTER_POLICY } from '../../src/policy/defaults.js';
 import { isDesignPath, loadPolicy, policyForFile } from '../../src/policy/resolve.js';
 import type { Policy } from '../../src/policy/types.js';
-import { evaluationSpecs } from '../../src/run-gate.js';
+import { evaluationSpecs } from '../../src/gate-request.js';
 import { attempt, fixtureText, locationProblems, reportCount, SEED, Tally } from './support.js';
 
 const HANG_MS = 10_000;

@@ -18,7 +18,8 @@ import type { Report } from '../../src/report/report.js';
 import { renderSarif } from '../../src/report/sarif.js';
 import { renderTerminal } from '../../src/report/terminal.js';
 import { runGate } from '../../src/run-gate.js';
-import { coreOutput, run } from '../../src/shell/action-run.js';
+import { coreOutput } from '../../src/shell/action-outputs.js';
+import { run } from '../../src/shell/action-run.js';
 import { createClient } from '../../src/shell/github.js';
 import { startFakeApi, type FakeApi } from '../action/fake-api.js';
 import { memoryDeps, type MemoryRepo } from '../gate/memory-repo.js';
@@ -190,9 +191,10 @@ describe('hostile ids in a real gate run', () => {
     }
   });
 
-  it('job summary and PR comment: no HTML, links, mentions, broken tables or forged lines', () => {
+  it('job summary and PR comment: no HTML, links, mentions, broken tables or forged lines', async () => {
     const summary = renderSummary(report, { runUrl: 'https://github.com/acme/net/actions/runs/1' });
     const comment = renderComment(report, { key: 'default' });
+    if (process.env.DUMP_MD) (await import('node:fs')).writeFileSync(process.env.DUMP_MD, summary);
     expect(markdownProblems(summary, 'summary')).toEqual([]);
     expect(markdownProblems(comment, 'comment')).toEqual([]);
     expect(summary).toContain('bold'); // shown, as text

@@ -7,8 +7,8 @@ import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, wr
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { isNetbraceError, type NetbraceError } from '../../src/errors.js';
-import type { GitResult } from '../../src/shell/action-run.js';
-import { main } from '../../src/shell/cli.js';
+import type { GitResult } from '../../src/shell/action-deps.js';
+import { main } from '../../src/shell/dispatch.js';
 
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 

@@ -1,6 +1,6 @@
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import type { CommandIO } from '../../src/shell/io.js';
 
 const root = path.resolve(__dirname, '..', '..');

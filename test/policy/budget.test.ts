@@ -6,7 +6,7 @@ import { PolicyError } from '../../src/errors.js';
 import { budgetWork, DEFAULT_BUDGET_SECONDS, ENGINE_VISITS_PER_SECOND } from '../../src/policy/budget.js';
 import { REGIONAL_UNTIL_KM } from '../../src/policy/defaults.js';
 import { builtinPolicy, loadPolicy, policyForFile } from '../../src/policy/resolve.js';
-import { evaluationSpecs } from '../../src/run-gate.js';
+import { evaluationSpecs } from '../../src/gate-request.js';
 
 const repo = (files: Record<string, string>) => (p: string) => files[p] ?? null;
 const budgetOf = (files: Record<string, string>, path = 'a.graphml') => policyForFile(loadPolicy('p.yaml', repo(files)), path).budget;

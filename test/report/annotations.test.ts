@@ -7,7 +7,7 @@ describe('annotations', () => {
     const all = annotationsOf(sampleReport());
     const bridge = all.find((a) => a.rule === 'new-bridge')!;
     expect(bridge).toMatchObject({ level: 'error', file: 'backbone/core.net.yaml', startLine: 42 });
-    expect(bridge.title).toBe('netbrace: new single point of failure (bridge)');
+    expect(bridge.title).toBe('netbrace: new bridge');
     const regression = all.find((a) => a.rule === 'regression')!;
     expect(regression.message).toContain('(base 0.742, head 0.680, \u0394 \u22120.062 \u00b1 0.004)');
     const parse = all.find((a) => a.rule === 'parse-error')!;
@@ -68,5 +68,23 @@ describe('annotations', () => {
     const a = annotationsOf(r).find((x) => x.rule === 'new-bridge')!;
     expect(a.message.split('\n').some((l) => l.startsWith('::'))).toBe(false);
     expect(a.message).not.toContain('\u202E');
+  });
+});
+
+describe('the policy change as an annotation', () => {
+  it('is one sentence on the policy file, at the first line the head changes, a warning when it would loosen', () => {
+    const r = sampleReport();
+    r.policy.changed = true;
+    r.policy.changes = [
+      { subject: 'threshold:random-nodes@0.2:q0.1', key: 'min', effect: 'loosens', base: 0.5, head: 0.45, file: 'netbrace.policy.yaml', line: 9 },
+      { subject: 'weakening', key: 'allowed-drop', effect: 'tightens', base: 0.02, head: 0.01, file: 'netbrace.policy.yaml', line: 14 },
+    ];
+    const a = planAnnotations(r).annotations.find((x) => x.rule === 'policy-changed')!;
+    expect(a).toMatchObject({ level: 'warning', file: 'netbrace.policy.yaml', startLine: 9, title: 'netbrace: policy changed' });
+    expect(a.message).toBe(
+      'This change edits the policy: the head\u2019s version would loosen the floor of threshold:random-nodes@0.2:q0.1 from 0.5 to 0.45, and tighten the allowed drop from 0.02 to 0.01; the base\u2019s version judges this change, and the head\u2019s applies once merged.',
+    );
+    r.policy.changes = r.policy.changes.filter((c) => c.effect === 'tightens');
+    expect(planAnnotations(r).annotations.find((x) => x.rule === 'policy-changed')).toMatchObject({ level: 'notice', startLine: 14 });
   });
 });

@@ -164,6 +164,15 @@ describe('renderHtml', () => {
     expect(html).toContain('@media print');
   });
 
+  it('links the definitions to netbrace\u2019s README when its address is known', () => {
+    const withLink = renderHtml(report, { readmeUrl: 'https://github.com/acme/netbrace/blob/v1/README.md' });
+    const s = withLink.split('<section ')[1];
+    expect(s).toContain('<a href="https://github.com/acme/netbrace/blob/v1/README.md#reading-the-report" class="more">More in the README</a>');
+    expect(s).not.toContain('-about-reading-the-report');
+    // anything but an http(s) address is not a link
+    expect(renderHtml(report, { readmeUrl: 'javascript:alert(1)' })).not.toContain('javascript:');
+  });
+
   it('shows what reading a design warned of, at its line, in the detail', () => {
     const r = demoReport();
     r.files[0].warnings = [{ message: 'self-loop on node "kaskeld" dropped', line: 40, column: 5, hint: 'a link from a node to itself adds no connectivity' }];

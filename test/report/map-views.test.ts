@@ -56,8 +56,10 @@ describe('the Mermaid neighbourhood of the change', () => {
     const links = block.split('\n').filter((l) => /^ {2}n\d+ (---|-\.-|===)/.test(l)).length;
     expect(nodes + links).toBeLessThanOrEqual(MAX_ELEMENTS);
     expect(nodes).toBe(6);
-    // The comment has it too (full detail for the worst design).
-    expect(renderComment(report, { key: 'k' })).toContain('**Where the change is**');
+    // The comment stays short: it gives what would mend it and leaves the drawing to the summary.
+    const comment = renderComment(report, { key: 'k' });
+    expect(comment).not.toContain('**Where the change is**');
+    expect(comment).toContain('**What would mend it**');
   });
 
   it('names the first suggestion and the hardening alternative below the graph', () => {

@@ -10,6 +10,7 @@ import {
   sampleIndices,
   sparkline,
 } from '../../src/report/markdown.js';
+import { CAUTION } from '../../src/report/report.js';
 import { emptyReport, hugeReport, sampleReport } from './sample-report.js';
 
 const bytes = (s: string) => Buffer.byteLength(s, 'utf8');
@@ -19,14 +20,17 @@ function withoutCodeSpans(md: string): string {
   return md.replace(/(`+)(?!`)[\s\S]*?[^`]\1(?!`)/g, '');
 }
 
-function mermaidBlocks(md: string): string[] {
-  return [...md.matchAll(/```mermaid\n([\s\S]*?)```/g)].map((m) => m[1]);
+function textBlocks(md: string): string[] {
+  return [...md.matchAll(/```text\n([\s\S]*?)```/g)].map((m) => m[1]);
 }
 
 describe('job summary', () => {
-  it('states the verdict and lists designs worst first', () => {
+  it('states the verdict first, then per design what weakened before how much, worst designs first', () => {
     const md = renderSummary(sampleReport());
-    expect(md.split('\n')[0]).toBe('## \u274C netbrace: the gate failed');
+    expect(md.split('\n')[0]).toBe('## \u25A0 netbrace blocks this merge: 1 design weakened, 1 design could not be read');
+    // The caution as one line right under the verdict, and in full at the very end.
+    expect(md.split('\n')[2]).toContain('does not replace engineering studies');
+    expect(md.trimEnd().endsWith(CAUTION)).toBe(true);
     const headings = [...md.matchAll(/^### .*?`([^`]+)`/gm)].map((m) => m[1]);
     expect(headings).toEqual([
       'backbone/core.net.yaml',
@@ -35,30 +39,41 @@ describe('job summary', () => {
       'legacy/ring-old.net.yaml',
       'dc/fabric.gml',
     ]);
-    // Within a design, failures before notices.
-    const core = md.slice(md.indexOf('### \u274C `backbone/core.net.yaml`'), md.indexOf('### \u274C `edge/west.net.yaml`'));
-    expect(core.indexOf('**new bridge** (line 42)')).toBeLessThan(core.indexOf('**weakest sequence**'));
+    // Within a design: consequences, then numbers, then the folded detail.
+    const core = md.slice(md.indexOf('### \u25A0 weakened \u00b7 `backbone/core.net.yaml`'), md.indexOf('`edge/west.net.yaml`'));
+    const order = ['**What weakened**', 'Link `l-kas-ost` (line 42) is a new bridge', '**How much**', '<details>', 'weakest removal sequence'].map((t) => core.indexOf(t));
+    expect(order.every((i) => i >= 0)).toBe(true);
+    expect([...order].sort((a, b) => a - b)).toEqual(order);
   });
 
-  it('has a requirement table with base, head, delta \u00b1 error and status', () => {
+  it('gives each requirement one line: status, what, base \u2192 head (\u0394 \u00b1 error), floor', () => {
     const md = renderSummary(sampleReport());
-    expect(md).toContain('| requirement | base | head | \u0394 \u00b1 error | status |');
-    expect(md).toMatch(/\| 0\.742 \| 0\.680 \| \u22120\.062 \u00b1 0\.004 \| \u274C weakened \|/);
-    expect(md).toContain('inside the error');
-    expect(md).toContain('never a failure');
+    expect(md).toContain('- \u25A0 weakened \u00b7 area of the random site failure envelope may drop by at most 0.020 0.742 \u2192 0.680 (\u22120.062 \u00b1 0.004), floor 0.722\n');
+    expect(md).toContain('- \u25CC inside-error \u00b7 median R at 30 % sites removed \u2265 0.60 0.556 \u2192 0.548 (\u22120.008 \u00b1 0.006), floor 0.6\n');
+    expect(md).toContain('inside-error: the value dropped by less than its Monte Carlo error, which is never a failure.');
+    // No requirement table and no per-design table of worst findings.
+    expect(md).not.toMatch(/\| requirement \|/);
+    expect(md).not.toMatch(/worst finding/);
   });
 
-  it('draws head against base as a Mermaid xychart with a sparkline table', () => {
+  it('defines R, area, spread and \u00b1 in one line each, linked to the README when its address is known', () => {
+    const md = renderSummary(sampleReport(), { readmeUrl: 'https://example.org/netbrace/README.md' });
+    expect(md).toContain('\u00b7 R: the weighted mean of `efficiency` 1, each metric scaled to 0\u20131 with 1 the intact design. [more](https://example.org/netbrace/README.md#reading-the-report)');
+    expect(renderSummary(sampleReport())).toContain('The README\u2019s \u201cReading the report\u201d says more.');
+  });
+
+  it('draws head against base as text rows, each line named where it is drawn', () => {
     const md = renderSummary(sampleReport());
-    const charts = mermaidBlocks(md);
+    const charts = textBlocks(md);
     expect(charts.length).toBe(3);
-    expect(charts[0]).toMatch(/^xychart-beta\n/);
-    expect(charts[0].match(/^ {2}line \[/gm)?.length).toBe(4);
-    expect(md).toContain('| head median | \u2588\u2588\u2587\u2587\u2586\u2586\u2585\u2585\u2584\u2584\u2583 |');
-    expect(md).toContain('`kaskeld` (line 12) \u2192 `ostmark` (line 15) \u2192 `brenna` (line 9)');
+    const rows = charts[0].trimEnd().split('\n');
+    expect(rows.map((r) => r.split(/\s{2,}/)[0])).toEqual(['head 90 % quantile', 'head median', 'base median', 'head 10 % quantile']);
+    expect(md).toContain('head median         \u2588\u2588\u2587\u2587\u2586\u2586\u2585\u2585\u2584\u2584\u2583  1.000 \u2192 0.325');
+    expect(md).not.toContain('drawing order');
+    expect(md).toContain('site `kaskeld` (line 12) \u2192 site `ostmark` (line 15) \u2192 site `brenna` (line 9)');
   });
 
-  it('caps chart points and keeps Mermaid sources small', () => {
+  it('caps chart points and keeps the last grid point', () => {
     const r = sampleReport();
     const env = r.files[1].head!.envelopes[0];
     const n = 401;
@@ -67,31 +82,32 @@ describe('job summary', () => {
     env.quantiles['0.1'].value = env.x.map((x) => 0.9 - x);
     env.quantiles['0.9'].value = env.x.map((x) => 1 - x / 2);
     const md = renderSummary(r, { chartPoints: 21 });
-    const chart = mermaidBlocks(md)[0];
-    for (const line of chart.split('\n').filter((l) => l.trim().startsWith('line ['))) {
-      expect(line.split(',').length).toBeLessThanOrEqual(21);
-    }
-    expect(chart.length).toBeLessThan(50_000);
-    expect(chart).toContain('"1"'); // the last grid point is kept
+    const chart = textBlocks(md)[0];
+    for (const row of chart.trimEnd().split('\n')) expect(row.split(/\s{2,}/)[1].length).toBeLessThanOrEqual(21);
+    expect(md).toContain('0 to 100 % sites removed');
+    expect(chart).toContain('head median         \u2588');
+    expect(chart).toMatch(/head median .*1\.000 \u2192 0\.000/);
   });
 
   it('says so when no design changed', () => {
     const md = renderSummary(emptyReport());
-    expect(md).toContain('no design file changed');
+    expect(md.split('\n')[0]).toBe('## \u25A1 netbrace: no design file changed, nothing to judge');
     expect(md).toContain('nothing to judge');
   });
 
-  it('inform mode says it would fail without blocking', () => {
+  it('inform mode says what weakened without saying the merge is blocked', () => {
     const r = sampleReport();
     r.mode = 'inform';
-    expect(renderSummary(r).split('\n')[0]).toContain('would fail (inform mode, not blocking)');
+    const first = renderSummary(r).split('\n')[0];
+    expect(first).toContain('inform mode, so the merge is not blocked');
+    expect(first).not.toContain('blocks this merge');
   });
 
-  it('reports a changed policy as proposed and carries the caution', () => {
+  it('reports a changed policy in one sentence and carries the caution', () => {
     const r = sampleReport();
     r.policy.changed = true;
     const md = renderSummary(r);
-    expect(md).toContain('This change modifies the policy file');
+    expect(md).toContain('\u25B2 This change edits the policy; the base\u2019s version judges this change, and the head\u2019s applies once merged.\n');
     expect(md).toContain('informs engineering judgement');
   });
 
@@ -102,7 +118,7 @@ describe('job summary', () => {
     r.scope = 'all';
     r.parts = { total: 3, joined: [1, 2, 3] };
     const md = renderSummary(r);
-    expect(md).toContain('This change modifies the policy file. this change modifies the policy; the version at the base judges it \\(it applies once merged\\).');
+    expect(md).toContain('Policy: this change modifies the policy; the version at the base judges it (it applies once merged).');
     expect(md).toContain('every design, thresholds only');
     expect(md).toContain('joined parts 1, 2, 3 of 3');
   });
@@ -112,7 +128,7 @@ describe('job summary', () => {
     const md = renderSummary(r);
     expect(bytes(md)).toBeLessThanOrEqual(SUMMARY_BUDGET_BYTES);
     expect(md).toMatch(/\d+ more designs \(the least severe\) did not fit/);
-    expect(md.trimEnd().endsWith('</sub>')).toBe(true);
+    expect(md.trimEnd().endsWith(CAUTION)).toBe(true);
   });
 
   it('honours a small budget exactly', () => {
@@ -151,8 +167,8 @@ describe('PR comment', () => {
     const md = renderComment(r, { key: 'k' });
     expect(md.length).toBeLessThanOrEqual(COMMENT_BUDGET_CHARS);
     expect(md.length).toBeLessThan(65_536);
-    const firstFinding = /^- (\S+) \*\*/m.exec(md.slice(md.indexOf('**Findings**')));
-    expect(firstFinding?.[1]).toBe('\u274C');
+    const firstItem = /^- (\S+) (\w+):/m.exec(md.slice(md.indexOf('**What weakened**')));
+    expect(firstItem?.slice(1)).toEqual(['\u25A0', 'fails']);
     expect(md).toContain('did not fit');
     expect(md).toContain('more in the JSON report and the SARIF file');
   });
@@ -188,5 +204,77 @@ describe('chart helpers', () => {
     expect(idx[0]).toBe(0);
     expect(idx[20]).toBe(400);
     expect(sampleIndices(5, 21)).toEqual([0, 1, 2, 3, 4]);
+  });
+});
+
+describe('our own look and words', () => {
+  const TRAFFIC_LIGHTS = /[\u2705\u274C\u26A0\u2139\u2754\u2796\u3030\u{1F534}\u{1F7E2}\u{1F7E1}]/u;
+
+  it('uses our marks beside words, never traffic-light emoji, and no version footer', () => {
+    for (const md of [renderSummary(sampleReport()), renderComment(sampleReport(), { key: 'k' })]) {
+      expect(md).not.toMatch(TRAFFIC_LIGHTS);
+      expect(md).not.toContain('<sub>');
+      expect(md).not.toMatch(/the gate/);
+      // Every mark at the start of a list item is followed by a word.
+      for (const m of md.matchAll(/^- ([\u25A0\u25B2\u25A1\u25CC\u00B7]) (\S+)/gm)) expect(m[2]).toMatch(/^[a-z]/);
+    }
+  });
+
+  it('puts ids in code spans: no backslash escapes or &quot; in the raw text of a sentence about them', () => {
+    const r = sampleReport();
+    r.files[1].findings[0].elements[0] = { id: 'l_kas*ost"1', kind: 'link', line: 42, label: 'Kaskeld "east" span' };
+    const md = renderComment(r, { key: 'k' });
+    const line = md.split('\n').find((l) => l.includes('is a new bridge'))!;
+    expect(line).toBe('- \u25A0 fails: Kaskeld "east" span (`l_kas*ost"1`, line 42) is a new bridge; losing it splits the design.');
+    expect(md).not.toContain('&quot;');
+  });
+
+  it('keeps a hostile label with backticks in a code span of its own, never touching the id\u2019s', () => {
+    const r = sampleReport();
+    r.files[1].findings[0].elements[0] = { id: '`x`', kind: 'link', line: 42, label: '``` `y' };
+    const line = renderSummary(r).split('\n').find((l) => l.includes('is a new bridge'))!;
+    expect(line).toBe('- \u25A0 fails: ```` ``` `y ```` (`` `x` ``, line 42) is a new bridge; losing it splits the design.');
+  });
+
+  it('a passing design with notices shows as passing', () => {
+    const r = sampleReport();
+    const fabric = r.files[0];
+    fabric.findings = [{ rule: 'degraded', severity: 'notice', message: 'head evaluation reduced: realizations reduced from 400 to 200', elements: [], line: 0 }];
+    r.files = [fabric];
+    r.verdict = 'pass';
+    const md = renderSummary(r);
+    expect(md.split('\n')[0]).toBe('## \u25A1 netbrace: no design weakened');
+    expect(md).toContain('### \u25A1 holds \u00b7 `dc/fabric.gml`');
+    expect(md).toContain('**What weakened**: nothing; every requirement holds.');
+    // The notice is kept, folded.
+    expect(md.indexOf('- \u00b7 head evaluation reduced')).toBeGreaterThan(md.indexOf('<details>'));
+  });
+
+  it('a part\u2019s summary does not say the merge is blocked and leaves the detail to the joined summary', () => {
+    const r = sampleReport();
+    r.part = { index: 1, total: 2 };
+    const md = renderSummary(r);
+    expect(md.split('\n')[0]).toBe('## \u25B2 netbrace, part 1 of 2: 1 design weakened, 1 design could not be read in this part; the joined report decides the merge');
+    expect(md).not.toContain('blocks this merge');
+    expect(md).toContain('- \u25A0 weakened \u00b7 `backbone/core.net.yaml`: 1 new bridge; 2 requirements weakened or short');
+    expect(md).toContain('the joined summary tells what weakened and how much');
+    expect(md).not.toContain('**How much**');
+    // The joined report tells it once, in full.
+    const joined = sampleReport();
+    joined.parts = { total: 2, joined: [1, 2] };
+    expect(renderSummary(joined).split('**How much**').length - 1).toBe(3);
+  });
+
+  it('says in one sentence which floors and rules the head\u2019s policy would loosen or tighten', () => {
+    const r = sampleReport();
+    r.policy.changed = true;
+    r.policy.changes = [
+      { subject: 'threshold:random-nodes@0.2:q0.1', key: 'min', effect: 'loosens', base: 0.5, head: 0.45, file: 'netbrace.policy.yaml', line: 9 },
+      { subject: 'weakening', key: 'allowed-drop', effect: 'tightens', base: 0.02, head: 0.01, file: 'netbrace.policy.yaml', line: 14 },
+    ];
+    const md = renderSummary(r);
+    expect(md).toContain(
+      '\u25B2 This change edits the policy: the head\u2019s version would loosen the floor of `threshold:random-nodes@0.2:q0.1` from 0.5 to 0.45, and tighten the allowed drop from 0.02 to 0.01; the base\u2019s version judges this change, and the head\u2019s applies once merged.\n',
+    );
   });
 });

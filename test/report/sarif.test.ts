@@ -119,4 +119,24 @@ describe('SARIF 2.1.0', () => {
     expect(validate(big)).toBe(true);
     expect(big.runs[0].results.length).toBe(2000);
   });
+
+  it('gives the policy change as one result on the policy file, valid against the schema', () => {
+    const r = sampleReport();
+    r.policy.changed = true;
+    r.policy.changes = [{ subject: 'n-1:node', key: 'severity', effect: 'loosens', base: 'fail', head: 'warn', file: 'netbrace.policy.yaml', line: 21 }];
+    const log = renderSarif(r);
+    const policy = results(log).filter((x) => x.ruleId === 'policy-changed');
+    expect(policy).toHaveLength(1);
+    expect(policy[0].level).toBe('warning');
+    expect(policy[0].locations[0].physicalLocation).toEqual({ artifactLocation: { uri: 'netbrace.policy.yaml' }, region: { startLine: 21 } });
+    expect(policy[0].message.text).toBe(
+      'This change edits the policy: the head\u2019s version would loosen the severity of n-1:node from fail to warn; the base\u2019s version judges this change, and the head\u2019s applies once merged.',
+    );
+    expect(validate(JSON.parse(JSON.stringify(log)))).toBe(true);
+    // Rules are titled with the words every view uses.
+    const rules = (log.runs[0] as any).tool.driver.rules as { id: string; shortDescription: { text: string } }[];
+    expect(rules.find((x) => x.id === 'regression')?.shortDescription.text).toBe('requirement weakened');
+    r.policy.changed = false;
+    expect(results(renderSarif(r)).some((x) => x.ruleId === 'policy-changed')).toBe(false);
+  });
 });

@@ -100,7 +100,7 @@ describe('what weakened', () => {
     const s = designStory(file([bridge('a-b', 10, 1), bridge('c-d', 20, 3)]));
     expect(s.weakened.map((x) => x.elements[0].id)).toEqual(['c-d', 'a-b']);
     const first = s.weakened[0].sentence;
-    expect(plainSentence(first)).toBe('Link c-d (line 20) is a new bridge; losing it cuts off Kaskeld (site kaskeld, line 58) from the largest part; 3 of 47 demands (volume 30 of 1096) lose every path.');
+    expect(plainSentence(first)).toBe('Link c-d (line 20) is a new bridge; losing it cuts off Kaskeld (kaskeld, line 58) from the largest part; 3 of 47 demands (volume 30 of 1096) lose every path.');
     expect(first.filter((x) => x.kind === 'id').map((x) => x.text)).toEqual(['c-d', 'kaskeld']);
     expect(s.headline).toBe('2 new bridges');
     expect(s.outcome).toBe('fails');
@@ -118,12 +118,14 @@ describe('what weakened', () => {
     const s = designStory({ ...file([note], [q10]), status: 'holds' });
     expect(s.outcome).toBe('holds');
     expect(s.weakened).toEqual([]);
-    expect(s.notices.map((x) => plainSentence(x.sentence))).toEqual(['Head evaluation reduced: fewer realizations.']);
+    expect(s.notices.map((x) => plainSentence(x.sentence))).toEqual(['head evaluation reduced: fewer realizations.']);
     expect(s.headline).toBe('every requirement holds');
   });
 
   it('an element without a label or line is its id alone', () => {
     expect(elementSentence({ id: 'x`y', kind: 'node', line: 0 })).toEqual([{ kind: 'text', text: 'site ' }, { kind: 'id', text: 'x`y' }, { kind: 'text', text: '' }]);
+    // A label is user text of its own: never merged with our words, never recased.
+    expect(elementSentence({ id: 'a', kind: 'node', line: 3, label: 'a|b' })).toEqual([{ kind: 'text', text: 'a|b', user: true }, { kind: 'text', text: ' (' }, { kind: 'id', text: 'a' }, { kind: 'text', text: ', line 3)' }]);
   });
 });
 

@@ -6,7 +6,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { Ajv } from 'ajv';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import { STARTER_POLICY } from '../../src/policy/defaults.js';
 import schema from '../../src/report/report.schema.json' with { type: 'json' };
 import type { Report } from '../../src/report/report.js';

@@ -8,10 +8,11 @@ import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync 
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import { DEMO_CHANGES } from '../../src/shell/commands/demo.js';
 import type { Report } from '../../src/report/report.js';
 import { CAUTION } from '../../src/report/report.js';
+import { renderComment } from '../../src/report/markdown.js';
 import { repoRoot } from '../topology/helpers.js';
 import { recordIO } from './helpers-io.js';
 
@@ -124,6 +125,31 @@ describe('netbrace demo', () => {
     expect(runs.length).toBeGreaterThan(2);
     expect(text.startsWith(runs[0])).toBe(true);
     for (const r of runs) expect(text).toContain(r);
+  });
+
+  it('the PR comment of each change stays under 6,000 characters, verdict first and consequences before numbers', () => {
+    // The bound is our own (a comment a reviewer reads in one screenful or two); the options
+    // are those the Action passes (run link, artifact names, README link).
+    const options = {
+      key: 'default',
+      runUrl: 'https://github.com/acme/lunmere/actions/runs/1',
+      artifacts: ['netbrace-report.json', 'netbrace.sarif', 'netbrace-report.html'],
+      readmeUrl: 'https://github.com/acme/netbrace/blob/v1/README.md',
+    };
+    for (const c of DEMO_CHANGES) {
+      const md = renderComment(reports.get(c.id)!, options);
+      expect(md.length, c.id).toBeLessThan(6000);
+      const lines = md.split('\n');
+      expect(lines[2], c.id).toMatch(/^## . netbrace(: no design| blocks this merge: 1 design weakened)/);
+    }
+    const first = renderComment(reports.get('1-retire-east-chord')!, options);
+    expect(first.split('\n')[2]).toBe('## \u25A0 netbrace blocks this merge: 1 design weakened');
+    const at = (t: string) => first.indexOf(t);
+    expect(at('**What weakened**')).toBeGreaterThan(0);
+    expect(at('Link `tessaway-kaskeld` (line 298) is a new bridge')).toBeGreaterThan(at('**What weakened**'));
+    expect(at('**How much**')).toBeGreaterThan(at('Link `tessaway-kaskeld` (line 298) is a new bridge'));
+    expect(first).toContain('- \u25A0 weakened \u00b7 R at 10 % sites removed (q10) 0.464 \u2192 0.450 (\u22120.013 \u00b1 0.005), floor 0.42, allowed drop 0.010\n');
+    expect(at('<details>')).toBeGreaterThan(at('**How much**'));
   });
 
   it('writes the JSON report, summary markdown, SARIF, HTML and terminal text for each change', () => {

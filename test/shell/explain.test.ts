@@ -5,7 +5,7 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import { explainDesign, rankSingleLosses, type Explanation } from '../../src/shell/commands/explain.js';
 import { compileTopology, graphFromEdges } from '../../src/graph/compact.js';
 import { createRValue } from '../../src/envelope/r-value.js';

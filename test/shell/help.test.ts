@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import { commands } from '../../src/shell/commands/index.js';
 import { recordIO } from './helpers-io.js';
 

@@ -6,7 +6,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { parse as parseYaml } from 'yaml';
 import { afterAll, describe, expect, it } from 'vitest';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import { recordIO } from './helpers-io.js';
 
 const repoRoot = path.resolve(import.meta.dirname, '..', '..');

@@ -7,7 +7,7 @@ import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { main } from '../../src/shell/cli.js';
+import { main } from '../../src/shell/dispatch.js';
 import type { Report } from '../../src/report/report.js';
 import { REGIONAL_UNTIL_KM } from '../../src/policy/defaults.js';
 import { compileTopology } from '../../src/graph/compact.js';

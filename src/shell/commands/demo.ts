@@ -1,8 +1,8 @@
 // `netbrace demo [--out DIR]`: the whole check on the invented scenario in fixtures/demo/.
 // Builds a scratch git repository, commits the base design and the policy, commits each
 // proposed change on its own branch, runs `netbrace check` on each exactly as a user would
-// (the same main() and command), prints the terminal report, and writes the JSON report,
-// summary markdown, SARIF and HTML of each change into one folder.
+// (the same command through the same runCommand), prints the terminal report, and writes the
+// JSON report, summary markdown, SARIF and HTML of each change into one folder.
 
 import { execFileSync } from 'node:child_process';
 import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -11,6 +11,8 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Command, CommandIO } from '../io.js';
 import { parseCommandArgs } from '../args.js';
+import { runCommand } from '../run-command.js';
+import { checkCommand } from './check.js';
 import { UsageError } from '../../errors.js';
 import type { Report } from '../../report/report.js';
 
@@ -60,15 +62,6 @@ export function findDemoFixtures(from = path.dirname(fileURLToPath(import.meta.u
   throw new UsageError('the demo scenario (fixtures/demo/) is not where netbrace expects it', 'run the demo from a netbrace checkout or an installed package');
 }
 
-/** Runs `netbrace <args>` in-process, through the same dispatcher a user's command line uses. */
-export type RunCli = (args: string[], io: CommandIO) => Promise<number>;
-
-const defaultRunCli: RunCli = async (args, io) => {
-  // Imported when the demo runs, not when this module loads: cli.ts imports the command table.
-  const { main } = await import('../cli.js');
-  return main(args, io);
-};
-
 export interface DemoOutcome {
   change: DemoChange;
   exitCode: number;
@@ -113,12 +106,10 @@ export interface DemoOptions {
   out: string;
   keep: boolean;
   fixtures?: string;
-  runCli?: RunCli;
 }
 
 export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ outcomes: DemoOutcome[]; repo: string; out: string }> {
   const fixtures = options.fixtures ?? findDemoFixtures();
-  const runCli = options.runCli ?? defaultRunCli;
   const out = path.resolve(io.cwd, options.out);
   mkdirSync(out, { recursive: true });
   const repo = mkdtempSync(path.join(tmpdir(), 'netbrace-demo-'));
@@ -151,7 +142,7 @@ export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ ou
         html: path.join(out, `${change.id}.html`),
         text: path.join(out, `${change.id}.txt`),
       };
-      const args = ['check', '--base', 'main', '--head', branch, '--json', files.json, '--summary', files.markdown, '--sarif', files.sarif, '--html', files.html];
+      const args = ['--base', 'main', '--head', branch, '--json', files.json, '--summary', files.markdown, '--sarif', files.sarif, '--html', files.html];
       io.stdout(`\n\u2500\u2500 Change ${i + 1} of ${DEMO_CHANGES.length}: ${change.title}\n`);
       io.stdout(`   ${branch}: ${git('log', '-1', '--format=%h')} \u00b7 expected: ${EXPECT_WORD[change.expect]}\n`);
       const rel = (a: string) => {
@@ -159,7 +150,7 @@ export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ ou
         return r && !r.startsWith('..') && !path.isAbsolute(r) ? r : a;
       };
       const shown = args.map((a) => (a.startsWith(out) ? rel(a) : a));
-      io.stdout(`$ netbrace ${shown.join(' ')}\n\n`);
+      io.stdout(`$ netbrace check ${shown.join(' ')}\n\n`);
       const printed: string[] = [];
       const childIO: CommandIO = {
         ...io,
@@ -169,7 +160,7 @@ export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ ou
           io.stdout(t);
         },
       };
-      const exitCode = await runCli(args, childIO);
+      const exitCode = await runCommand(checkCommand, args, childIO);
       writeFileSync(files.text, printed.join('').replace(/\u001b\[[0-9;]*m/g, ''));
       let verdict: DemoOutcome['verdict'] = 'error';
       let warnings = 0;

@@ -3,7 +3,7 @@
 // the N−1 / N−2 table — with the weakest sequences and, on request, the worst-case search.
 // The policy is the gate's (local-policy.ts): its R, seed and work budget apply unless an
 // option says otherwise, and a challenge it defines can be named as the policy names it, to
-// run with the parameters the gate gives it (evaluationSpecs in run-gate.ts).
+// run with the parameters the gate gives it (evaluationSpecs in gate-request.ts).
 
 import { availableParallelism } from 'node:os';
 import type { Command, CommandIO } from '../io.js';
@@ -18,10 +18,11 @@ import { CAUTION } from '../../report/report.js';
 import type { DesignEvaluation, EvaluationSpec } from '../../envelope/evaluate.js';
 import { budgetWork } from '../../policy/budget.js';
 import { DEFAULT_POLICY_PATH, REGIONAL_UNTIL_KM } from '../../policy/defaults.js';
-import { evaluationSpecs } from '../../run-gate.js';
+import { evaluationSpecs } from '../../gate-request.js';
 import { designPolicy, readLocalPolicy } from '../local-policy.js';
 import { evaluateDesignParallel } from '../../parallel/pool.js';
-import type { AttackCurve, ChallengeParams, Contingency, Envelope, RValueSpec, WorstCase } from '../../envelope/types.js';
+import type { AttackCurve, Contingency, Envelope, RValueSpec, WorstCase } from '../../envelope/types.js';
+import type { ChallengeParams } from '../../challenges/types.js';
 import type { MetricId } from '../../metrics/types.js';
 import { readDesign, type ReadDesignOptions } from '../read-design.js';
 

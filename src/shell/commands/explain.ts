@@ -14,7 +14,8 @@ import { compileTopology, nodesByLine, type CompactGraph } from '../../graph/com
 import { createMask } from '../../graph/mask.js';
 import { findComponents, findCutElements } from '../../graph/structure.js';
 import { createRValue, rPasses, unsupportedMetric, type RFunction } from '../../envelope/r-value.js';
-import type { ElementKind, RValueSpec } from '../../envelope/types.js';
+import type { RValueSpec } from '../../envelope/types.js';
+import type { ElementKind } from '../../graph/element.js';
 import { countOnes, eligibleUnits, removeUnit, restoreUnit, unitCount, unitIds } from '../../challenges/units.js';
 import { getMetric, isMetricId, metrics as knownMetrics } from '../../metrics/registry.js';
 import { DEFAULT_POLICY_PATH } from '../../policy/resolve.js';
