@@ -240,7 +240,7 @@ function designSection(d: DesignStory, index: number, readme: string | undefined
   }
 
   // 3. The detail: what the change does, charts, map, sequences, structure, notices, mending.
-  out.push(`<div class="part detail" data-part="detail"><h3 id="${id}-detail">Detail</h3>`);
+  const detailAt = out.length;
   if (f.head) out.push(`<p class="facts">${esc(facts(f.head))}</p>`);
   if (f.warnings?.length) {
     const items = f.warnings.map((w) => `<li><code>${esc(`${f.path}:${w.line || 1}:${w.column || 1}`)}</code> ${esc(w.message)}${w.hint ? ` \u2014 ${esc(w.hint)}` : ''}</li>`);
@@ -265,7 +265,11 @@ function designSection(d: DesignStory, index: number, readme: string | undefined
   }
   out.push(mendHtml(f, id));
   if (d.definitions.length && !readme) out.push(readmePointer(`${id}-about-${README_ANCHOR}`));
-  out.push('</div>');
+  // The detail part only when there is detail (an unreadable file has none).
+  if (out.slice(detailAt).some(Boolean)) {
+    out.splice(detailAt, 0, `<div class="part detail" data-part="detail"><h3 id="${id}-detail">Detail</h3>`);
+    out.push('</div>');
+  }
   out.push('</section>');
   return out.filter(Boolean).join('\n');
 }
