@@ -17,7 +17,7 @@
 // a failed gate is a result (exit 1).
 
 import { EncodingError } from './decode.js';
-import { isNetbraceError, PolicyError, UsageError, type NetbraceError } from './errors.js';
+import { isNetbraceError, PolicyError, UsageError, type Diagnostic, type NetbraceError } from './errors.js';
 import { compileTopology, type CompactGraph } from './graph/compact.js';
 import { budgetSpecs } from './gate/budget.js';
 import { matchDesigns, sameDesign } from './gate/rename.js';
@@ -28,7 +28,7 @@ import { policyChanges } from './policy/compare.js';
 import { BUILTIN_POLICY_NAME, DEFAULT_DESIGN_GLOBS, DEFAULT_POLICY_PATH } from './policy/defaults.js';
 import { builtinPolicy, designFormat, designNeedsHeader, globsMatch, isDesignPath, isDesignText, loadPolicy, policyForFile } from './policy/resolve.js';
 import type { FilePolicy, Policy } from './policy/types.js';
-import type { FileReport, Report } from './report/report.js';
+import { DESIGN_WARNINGS_KEPT, type FileReport, type Report } from './report/report.js';
 import type { DesignFormat } from './topology/model.js';
 import { addMapAndMend } from './map-mend-step.js';
 import { fnv1a32 } from './random.js';
@@ -434,12 +434,14 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
     const input: CompareInput = { path: c.path, change: c.change, policy: fp, thresholdsOnly };
     if (c.previousPath !== undefined) input.previousPath = c.previousPath;
     if (fp.format) input.format = fp.format;
+    let headWarnings: readonly Diagnostic[] = [];
     if (c.change !== 'deleted') {
       const headText = await readSide(deps, head, c.path);
       if (headText === null) {
         input.change = 'deleted';
       } else {
         const h = typeof headText === 'string' ? compileText(headText, c.path, fp.format, fp.rValue) : headText;
+        if ('topology' in h) headWarnings = h.topology.warnings;
         if ('error' in h) input.headError = h.error;
         else if ('unsupported' in h) input.headUnsupported = h.unsupported;
         else {
@@ -483,6 +485,9 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
       }
     }
     const judged = compareDesign(input);
+    if (headWarnings.length) {
+      judged.warnings = headWarnings.slice(0, DESIGN_WARNINGS_KEPT).map((w) => ({ message: w.message, line: w.line, column: w.column, ...(w.hint ? { hint: w.hint } : {}) }));
+    }
     await addMapAndMend(judged, input, { request, deps, head, ...(base !== undefined ? { base } : {}), seed });
     files.push(judged);
   }

@@ -243,13 +243,14 @@ export function renderChartSvg(chart: EnvelopeChart, options: SvgOptions = {}): 
     });
   }
 
-  // Legend, in series order, two columns under the axis label.
+  // The chart's own legend names every line, in series order, two columns under the axis label.
   out.push(`<g class="nb-legend" aria-hidden="true" font-size="12.5" fill="${CHART_COLORS.ink}">`);
   const colW = plotW / legendCols;
   chart.series.forEach((s, i) => {
     const st = styles[i];
     const x = m.left + (i % legendCols) * colW;
     const y = m.top + plotH + m.bottom + Math.floor(i / legendCols) * legendRowH + 4;
+    out.push(`<g data-legend="${esc(s.id)}">`);
     if (s.role === 'band') {
       out.push(`<rect x="${x}" y="${y}" width="26" height="10" fill="${CHART_COLORS.band}" stroke="${st.stroke}" stroke-width="0.8"/>`);
     } else {
@@ -259,6 +260,7 @@ export function renderChartSvg(chart: EnvelopeChart, options: SvgOptions = {}): 
       if (s.role === 'worst-case') out.push(`<rect x="${x + 10}" y="${y + 2}" width="6" height="6" fill="${st.stroke}"/>`);
     }
     out.push(`<text x="${x + 34}" y="${y + 9}">${esc(s.label)}</text>`);
+    out.push('</g>');
   });
   out.push('</g>');
   out.push('</svg>');

@@ -1,8 +1,11 @@
 // The HTML report: one self-contained file (inline CSS and SVG; no scripts, no fonts, no
-// fetches — a Content-Security-Policy meta tag forbids them) with, per design, the envelope
-// charts, the requirement table, findings, weakest sequences and structural findings.
-// Built for print and screen readers: landmarks, captions, scoped headers, chart titles and
-// descriptions, and a data table behind every chart. Every string from the report is escaped.
+// fetches — a Content-Security-Policy meta tag forbids them). It tells what story.ts tells, in
+// the same order as every view: the verdict sentence and the caution in one line; then per
+// design, worst first, what weakened (the consequences), how much (one line per requirement,
+// with the definitions of R, area, spread and ±), and the detail (charts, map, sequences,
+// structure, mending); the caution in full at the end. Built for print and screen readers:
+// landmarks, chart titles and descriptions, a data table behind every chart. Every string
+// from the report is escaped.
 
 import { attacksFor, envelopeChart, renderChartSvg, type EnvelopeChart } from './chart.js';
 import {
@@ -12,85 +15,73 @@ import {
   describeChanges,
   describeModifications,
   describeNotApplicable,
-  fileStatusWord,
   statusCounts,
-  findingTitle,
   formatElement,
   kindSingular,
   knownElement,
   knownElements,
-  fileFails,
-  fileWarns,
-  formatDelta,
-  formatError,
   formatFraction,
-  formatRequirementDelta,
-  formatRequirementValue,
   formatValue,
-  REQUIREMENT_STATUS_WORD,
-  STATUS_WORD,
-  bySeverity,
-  groupFindings,
   shortRevision,
   weakestSequences,
-  type GroupedFinding,
 } from './labels.js';
-import type { Consequence, Evaluation, FileReport, Finding, Report, ReportElement, RequirementResult } from './report.js';
+import type { Consequence, Evaluation, FileReport, Report, ReportElement } from './report.js';
 import { escapeHtml } from './escape.js';
 import { mapHtml } from './map-html.js';
 import { mendHtml } from './mend-text.js';
+import {
+  CAUTION_LINE,
+  README_ANCHOR,
+  designStories,
+  numbersOnly,
+  plainSentence,
+  policyChangeSentence,
+  verdictStory,
+  type DesignStory,
+  type Sentence,
+  type WeakenedItem,
+} from './story.js';
+import { MARK, SEVERITY_WORD } from './vocabulary.js';
 
 const esc = (s: string | number) => escapeHtml(String(s));
-
-/** A finding's title by rule, refined by its status (labels.ts, findingTitle). */
-const RULE_TITLE: Record<Finding['rule'], string> = {
-  'r-threshold': 'r-threshold not held',
-  'area-floor': 'area below its floor',
-  'spread-ceiling': 'spread above its ceiling',
-  'n-1': 'N\u22121 rule broken',
-  'new-bridge': 'new bridge',
-  'new-cut-node': 'new cut node',
-  'new-stranding-group': 'new stranding shared-risk group',
-  'hardened-weak-point': 'weak point hidden by hardening',
-  regression: 'regression',
-  'weakest-sequence': 'weakest sequence',
-  'parse-error': 'unreadable design',
-  'removed-design': 'removed design',
-  'policy-changed': 'policy changed',
-  degraded: 'reduced evaluation',
-  'not-computable': 'value not computable',
-};
 
 /** A JSON number as an attribute value (exact, so tests can compare with the report). */
 const dataValue = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));
 
 const CSS = `
 :root{--paper:#f6f3ec;--card:#fffdf8;--ink:#1e2a32;--muted:#5d6870;--rule:#d9d4c7;--teal:#0d4f5c;
---sea:#a9d3cb;--fail:#a4161a;--warn:#8f5200;--pass:#2d6a3e;--notice:#1d5fa3}
+--fail:#a4161a;--warn:#8f5200;--holds:#2f5d73;--notice:#5d6870}
 *{box-sizing:border-box}
 html{background:var(--paper);color:var(--ink)}
 body{margin:0 auto;max-width:1120px;padding:24px 28px 48px;font:15px/1.5 system-ui,-apple-system,"Segoe UI",Roboto,"Noto Sans",sans-serif}
 h1,h2,h3{line-height:1.25;margin:0}
-h1{font-size:1.55rem;letter-spacing:.01em}
+h1{font-size:1.45rem}
 h2{font-size:1.2rem;word-break:break-all}
-h3{font-size:.95rem;text-transform:uppercase;letter-spacing:.08em;color:var(--muted);margin:22px 0 8px}
-.mast{display:flex;flex-wrap:wrap;gap:18px;align-items:flex-end;justify-content:space-between;border-bottom:3px double var(--ink);padding-bottom:14px}
-.brand{font-weight:800;font-size:.8rem;letter-spacing:.32em;text-transform:uppercase;color:var(--teal)}
-.verdict{font-size:1.05rem;font-weight:700;padding:8px 16px;border:2px solid currentColor;border-radius:2px}
-.verdict.fail{color:var(--fail)}.verdict.pass{color:var(--pass)}
-dl.meta{display:grid;grid-template-columns:max-content 1fr;gap:2px 14px;margin:14px 0;font-size:.9rem}
+h3{font-size:.95rem;letter-spacing:.04em;color:var(--teal);margin:20px 0 6px}
+.mast{border-bottom:3px double var(--ink);padding-bottom:12px}
+.brand{font-weight:800;font-size:.78rem;letter-spacing:.3em;text-transform:uppercase;color:var(--teal);margin-bottom:6px}
+.mark{margin-right:.35em}
+.verdict.blocks .mark{color:var(--fail)}.verdict.informs .mark,.verdict.part .mark{color:var(--warn)}.verdict.clear .mark{color:var(--holds)}
+.caution-line{margin:6px 0 0;color:var(--muted);font-size:.92rem}
+dl.meta{display:grid;grid-template-columns:max-content 1fr;gap:2px 14px;margin:12px 0 0;font-size:.88rem}
 dl.meta dt{color:var(--muted)}dl.meta dd{margin:0}
-.caution{border-left:6px solid var(--teal);background:var(--card);padding:10px 16px;margin:18px 0;font-size:.92rem}
-.caution strong{color:var(--teal)}
 nav ol{margin:6px 0 0;padding-left:22px;columns:2;column-gap:32px}
 nav a{color:var(--ink)}
-.design{background:var(--card);border:1px solid var(--rule);border-left:8px solid var(--pass);margin:28px 0;padding:18px 22px 20px}
-.design.fail{border-left-color:var(--fail)}.design.warn{border-left-color:var(--warn)}
-.design header{display:flex;flex-wrap:wrap;gap:10px 16px;align-items:baseline}
-.chip{display:inline-block;font-size:.78rem;font-weight:700;letter-spacing:.06em;text-transform:uppercase;padding:1px 8px;border:1.5px solid currentColor}
-.chip.fail{color:var(--fail)}.chip.warn{color:var(--warn)}.chip.pass{color:var(--pass)}
-.chip.notice{color:var(--notice)}
+.design{background:var(--card);border:1px solid var(--rule);border-top:5px solid var(--holds);margin:28px 0;padding:16px 22px 20px}
+.design.fails{border-top-color:var(--fail)}.design.warns{border-top-color:var(--warn)}
+.outcome{margin:4px 0 0;font-weight:600}
+.mark{font-family:ui-monospace,"SFMono-Regular",Menlo,Consolas,monospace}
+.sev-fail .mark,.outcome.fails .mark{color:var(--fail)}.sev-warn .mark,.outcome.warns .mark{color:var(--warn)}
+.sev-notice .mark{color:var(--notice)}.outcome.holds .mark,.st-holds .mark{color:var(--holds)}
 .facts{color:var(--muted);font-size:.9rem;margin:6px 0 0}
+ul.weakened,ul.how-much{list-style:none;padding:0;margin:0}
+ul.weakened li{padding:4px 0 4px 10px;border-left:3px solid var(--rule);margin:4px 0}
+ul.weakened li.sev-fail{border-left-color:var(--fail)}ul.weakened li.sev-warn{border-left-color:var(--warn)}
+ul.how-much li{padding:3px 0;font-variant-numeric:tabular-nums}
+ul.how-much .status{font-weight:700}
+.title{font-weight:600}
+dl.definitions{margin:10px 0 0;font-size:.86rem;color:var(--muted)}
+dl.definitions dt{display:none}dl.definitions dd{margin:0}
 .charts{display:grid;grid-template-columns:repeat(auto-fill,minmax(440px,1fr));gap:18px;margin-top:10px}
 figure{margin:0}
 figure svg{width:100%;height:auto;display:block}
@@ -100,36 +91,41 @@ caption{text-align:left;font-size:.85rem;color:var(--muted);padding-bottom:4px}
 th,td{padding:5px 8px;border-bottom:1px solid var(--rule);text-align:left;vertical-align:top}
 th{font-weight:600;background:#efeadf}
 td.num,th.num{text-align:right;white-space:nowrap}
-.st-short,.st-weakened{font-weight:700}
-.sev-fail{color:var(--fail)}.sev-warn{color:var(--warn)}.sev-notice{color:var(--notice)}
-.st-holds{color:var(--pass)}.st-inside-error,.st-unsettled{color:var(--muted)}
-ul.findings{list-style:none;padding:0;margin:0}
-ul.findings li{padding:6px 0 6px 12px;border-left:3px solid var(--rule);margin:6px 0}
-ul.findings li.fail{border-left-color:var(--fail)}ul.findings li.warn{border-left-color:var(--warn)}
-ul.findings li.notice{border-left-color:var(--notice)}
-.rule{font-family:ui-monospace,"SFMono-Regular",Menlo,Consolas,monospace;font-size:.85em;color:var(--muted)}
+.sev-fail{color:var(--fail)}
 code,.el{font-family:ui-monospace,"SFMono-Regular",Menlo,Consolas,monospace;font-size:.88em}
 ol.seq{margin:4px 0 10px;padding-left:26px}
 .line{color:var(--muted);font-size:.85em}
 details{margin-top:8px;font-size:.88rem}
 summary{cursor:pointer;color:var(--teal)}
-.error{color:var(--fail);font-weight:600}
-footer{margin-top:32px;color:var(--muted);font-size:.82rem;border-top:1px solid var(--rule);padding-top:10px}
-.vh{position:absolute;width:1px;height:1px;overflow:hidden;clip:rect(0 0 0 0);white-space:nowrap}
+.caution{border-top:1px solid var(--rule);margin:28px 0 0;padding-top:10px;font-size:.92rem}
+footer{margin-top:18px;color:var(--muted);font-size:.82rem}
 @media (max-width:640px){body{padding:14px}.charts{grid-template-columns:1fr}nav ol{columns:1}}
 @media print{
 html,body{background:#fff}
 body{max-width:none;padding:0;font-size:10.5pt}
-.design{border:1px solid #999;border-left-width:6px;break-inside:avoid-page;page-break-inside:avoid}
+.design{border:1px solid #999;border-top-width:5px;break-inside:avoid-page;page-break-inside:avoid}
 .charts{grid-template-columns:1fr 1fr}
 nav,details{display:none}
 a{color:inherit;text-decoration:none}
-.caution{border:1px solid #999;border-left:6px solid #000}
 }
 `;
 
-export function renderHtml(report: Report): string {
-  const title = `netbrace report \u2014 ${report.verdict === 'fail' ? 'gate failed' : 'gate passed'}`;
+/** A story sentence as HTML: our words and user text escaped, ids and code in monospace. */
+function sentenceHtml(s: Sentence): string {
+  return s.map((x) => (x.kind === 'text' ? esc(x.text) : `<code>${esc(x.text)}</code>`)).join('');
+}
+
+const markHtml = (mark: string) => `<span class="mark" aria-hidden="true">${esc(mark)}</span>`;
+
+export interface HtmlOptions {
+  /** netbrace's README (http or https), which the definitions link to ("Reading the report"); without it the section is named. */
+  readmeUrl?: string;
+}
+
+export function renderHtml(report: Report, options: HtmlOptions = {}): string {
+  const readme = options.readmeUrl && /^https?:\/\//.test(options.readmeUrl) ? `${options.readmeUrl}#${README_ANCHOR}` : undefined;
+  const verdict = verdictStory(report);
+  const stories = designStories(report);
   const parts: string[] = [];
   parts.push('<!DOCTYPE html>');
   parts.push('<html lang="en">');
@@ -138,93 +134,118 @@ export function renderHtml(report: Report): string {
   parts.push(`<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`);
   parts.push('<meta name="viewport" content="width=device-width, initial-scale=1">');
   parts.push(`<meta name="generator" content="netbrace ${esc(report.tool.version)}">`);
-  parts.push(`<title>${esc(title)}</title>`);
+  parts.push(`<title>${esc(`netbrace report \u2014 ${plainSentence(verdict.sentence)}`)}</title>`);
   parts.push(`<style>${CSS}</style>`);
   parts.push('</head>');
   parts.push(`<body data-report-version="${report.version}" data-verdict="${report.verdict}">`);
-  parts.push(masthead(report));
+  parts.push('<header class="mast">');
+  parts.push('<div class="brand" aria-hidden="true">netbrace \u00b7 robustness report</div>');
+  parts.push(`<h1 class="verdict ${verdict.tone}" id="verdict" role="status" data-tone="${verdict.tone}">${markHtml(verdict.mark)}${sentenceHtml(verdict.sentence)}</h1>`);
+  parts.push(`<p class="caution-line" id="caution-line">${esc(CAUTION_LINE.replace(/ \(the full caution is at the end\)\./, ''))} (<a href="#caution">the full caution is at the end</a>).</p>`);
+  parts.push(meta(report));
+  parts.push('</header>');
   parts.push('<main>');
-  parts.push(
-    `<aside class="caution" role="note" aria-label="Caution"><p><strong>Caution.</strong> ${esc(report.caution)}</p></aside>`,
-  );
-  if (report.files.length > 1) parts.push(contents(report));
-  if (report.files.length === 0) parts.push('<p>No design files changed: nothing to judge.</p>');
-  report.files.forEach((f, i) => parts.push(designSection(f, i)));
+  if (stories.length > 1) parts.push(contents(stories));
+  if (stories.length === 0) parts.push('<p>No design files changed: nothing to judge.</p>');
+  stories.forEach((d, i) => parts.push(designSection(d, i, readme)));
+  parts.push(`<aside class="caution" id="caution" role="note" aria-label="Caution"><h2>Caution</h2><p>${esc(report.caution)}</p></aside>`);
   parts.push('</main>');
   parts.push(
     `<footer><p>Written by netbrace ${esc(report.tool.version)} from report format version ${report.version}. ` +
-      `Every number here is in the JSON report of the same run. Seed ${report.seed}; the same inputs and seed give the same numbers.</p></footer>`,
+      `Every number here is in the JSON report of the same run. Seed ${report.seed}; the same inputs and seed give the same numbers. ` +
+      `The words R, area, spread and \u00b1 are defined beside the numbers that use them, and in netbrace\u2019s README, section \u201cReading the report\u201d.</p></footer>`,
   );
   parts.push('</body>');
   parts.push('</html>');
   return parts.join('\n') + '\n';
 }
 
-function masthead(r: Report): string {
-  const failed = r.files.filter(fileFails).length;
-  const verdict =
-    r.verdict === 'fail'
-      ? `Gate failed: ${failed} of ${r.files.length} design${r.files.length === 1 ? '' : 's'} failing`
-      : `Gate passed${r.files.some(fileWarns) ? ' with warnings' : ''}`;
-  const meta: [string, string][] = [];
-  if (r.base || r.head) meta.push(['Compared', `base <code title="${esc(r.base ?? '')}">${esc(shortRevision(r.base))}</code> \u2192 head <code title="${esc(r.head ?? '')}">${esc(shortRevision(r.head))}</code>`]);
-  meta.push([
+function meta(r: Report): string {
+  const rows: [string, string][] = [];
+  if (r.base || r.head) rows.push(['Compared', `base <code title="${esc(r.base ?? '')}">${esc(shortRevision(r.base))}</code> \u2192 head <code title="${esc(r.head ?? '')}">${esc(shortRevision(r.head))}</code>`]);
+  const change = policyChangeSentence(r);
+  rows.push([
     'Policy',
-    r.policy.source === 'builtin'
+    (r.policy.source === 'builtin'
       ? 'no policy file: the built-in defaults for communication backbones were applied'
       : `<code>${esc(r.policy.path ?? 'policy file')}</code>${r.policy.revision ? ` as of <code>${esc(shortRevision(r.policy.revision))}</code>` : ''}` +
-        (r.policy.note ? `. ${esc(r.policy.note)}` : r.policy.changed ? ' (this change edits the policy; the proposed policy was not applied)' : ''),
+        (r.policy.note && !change ? `. ${esc(r.policy.note)}` : '')) + (change ? `. ${sentenceHtml(change)}` : ''),
   ]);
   const own = configurationNotes(r).filter((x) => x.file !== r.policy.path);
-  if (own.length) meta.push(['Configuration', own.map((x) => `${x.weakens ? '<strong>' : ''}${esc(x.text)}${x.weakens ? '</strong>' : ''}`).join('<br>')]);
-  if (r.scope === 'all') meta.push(['Scope', 'every design in the repository, judged against thresholds only']);
-  meta.push(['Mode', r.mode === 'inform' ? 'inform: failures are reported, the run does not fail' : 'block: failures fail the check']);
-  meta.push(['Seed', String(r.seed)]);
-  if (r.part) meta.push(['Part', `${r.part.index} of ${r.part.total}`]);
+  if (own.length) rows.push(['Configuration', own.map((x) => `${x.weakens ? '<strong>' : ''}${esc(x.text)}${x.weakens ? '</strong>' : ''}`).join('<br>')]);
+  if (r.scope === 'all') rows.push(['Scope', 'every design in the repository, judged against thresholds only']);
+  rows.push(['Mode', r.mode === 'inform' ? 'inform: failures are reported, the run does not fail' : 'block: failures fail the check']);
+  rows.push(['Seed', String(r.seed)]);
+  if (r.part) rows.push(['Part', `${r.part.index} of ${r.part.total}`]);
   const counts = statusCounts(r).map(esc).join(', ');
-  meta.push(['Designs', `${r.files.length}${counts ? ` (${counts})` : ''}`]);
-  return [
-    '<header class="mast">',
-    '<div>',
-    '<div class="brand" aria-hidden="true">netbrace</div>',
-    '<h1>Robustness report</h1>',
-    '</div>',
-    `<p class="verdict ${r.verdict}" role="status" data-verdict="${r.verdict}">${esc(verdict)}</p>`,
-    '</header>',
-    `<dl class="meta">${meta.map(([k, v]) => `<dt>${esc(k)}</dt><dd>${v}</dd>`).join('')}</dl>`,
-  ].join('\n');
+  rows.push(['Designs', `${r.files.length}${counts ? ` (${counts})` : ''}`]);
+  return `<dl class="meta">${rows.map(([k, v]) => `<dt>${esc(k)}</dt><dd>${v}</dd>`).join('')}</dl>`;
 }
 
-function contents(r: Report): string {
-  const items = r.files.map((f, i) => {
-    const tone = fileTone(f);
-    return `<li><a href="#design-${i}">${esc(f.path)}</a> <span class="chip ${tone}">${esc(toneWord(f))}</span></li>`;
-  });
-  return `<nav aria-label="Designs in this report"><h3>Designs</h3><ol>${items.join('')}</ol></nav>`;
+function contents(stories: DesignStory[]): string {
+  const items = stories.map(
+    (d, i) => `<li><a href="#design-${i}">${esc(d.file.path)}</a> <span class="outcome ${d.outcome}">${markHtml(d.mark)}${esc(d.statusWord)}</span></li>`,
+  );
+  return `<nav aria-label="Designs in this report"><h3>Designs, worst first</h3><ol>${items.join('')}</ol></nav>`;
 }
 
-const fileTone = (f: FileReport) => (fileFails(f) ? 'fail' : fileWarns(f) ? 'warn' : 'pass');
-const toneWord = (f: FileReport) => (fileFails(f) ? 'fail' : fileWarns(f) ? 'pass, warnings' : 'pass');
+function weakenedItem(x: WeakenedItem): string {
+  const mark = x.severity === 'fail' ? MARK.fail : x.severity === 'warn' ? MARK.warn : MARK.notice;
+  const where = x.line > 0 ? ` <span class="line">line ${x.line}</span>` : '';
+  return (
+    `<li class="sev-${x.severity}" data-rule="${esc(x.rule)}" data-severity="${x.severity}">` +
+    `${markHtml(mark)}<span class="title">${esc(x.title)}</span> <span class="line">(${esc(SEVERITY_WORD[x.severity])})</span>${where}` +
+    `<div>${sentenceHtml(x.sentence)}</div></li>`
+  );
+}
 
-function designSection(f: FileReport, index: number): string {
-  const tone = fileTone(f);
+function designSection(d: DesignStory, index: number, readme: string | undefined): string {
+  const f = d.file;
   const id = `design-${index}`;
   const out: string[] = [];
   out.push(
-    `<section class="design ${tone}" id="${id}" aria-labelledby="${id}-h" data-path="${esc(f.path)}" data-status="${esc(f.status)}" data-tone="${tone}">`,
+    `<section class="design ${d.outcome}" id="${id}" aria-labelledby="${id}-h" data-path="${esc(f.path)}" data-status="${esc(f.status)}" data-outcome="${d.outcome}">`,
   );
   out.push('<header>');
   out.push(`<h2 id="${id}-h">${esc(f.path)}</h2>`);
-  out.push(`<span class="chip ${tone}">${esc(toneWord(f))}</span>`);
-  out.push(`<span class="chip notice">${esc(fileStatusWord(f))}</span>`);
-  out.push('</header>');
+  out.push(`<p class="outcome ${d.outcome}">${markHtml(d.mark)}${esc(d.statusWord)} \u2014 ${esc(d.headline)}</p>`);
   if (f.previousPath) out.push(`<p class="facts">Renamed from <code>${esc(f.previousPath)}</code>; compared with its old self.</p>`);
-  if (f.error) {
-    out.push(
-      `<p class="error">${fileStatusWord(f) === STATUS_WORD.unreadable ? 'Could not be read' : 'Could not be evaluated'}: <code>${esc(f.path)}:${f.error.line || 1}:${f.error.column || 1}</code> ${esc(f.error.message)}</p>`,
-    );
+  out.push('</header>');
+
+  // 1. What weakened: the consequences, worst first.
+  out.push(`<div class="part consequences" data-part="consequences"><h3 id="${id}-weakened">What weakened</h3>`);
+  if (d.weakened.length) out.push(`<ul class="weakened">${d.weakened.map(weakenedItem).join('')}</ul>`);
+  else out.push(`<p class="facts">${esc(numbersOnlyHtml(d))}</p>`);
+  out.push('</div>');
+
+  // 2. How much: one line per requirement, and the words those lines use.
+  if (d.howMuch.length) {
+    out.push(`<div class="part numbers" data-part="numbers"><h3 id="${id}-how-much">How much</h3><ul class="how-much">`);
+    for (const l of d.howMuch) {
+      const r = l.requirement;
+      const sev = r.status === 'short' || r.status === 'weakened' ? ` sev-${r.severity}` : '';
+      out.push(
+        `<li class="st-${r.status}${sev}" data-requirement="${esc(r.id)}" data-status="${r.status}" data-base="${dataValue(r.base)}" data-head="${dataValue(r.head)}" data-delta="${dataValue(r.delta)}" data-se="${dataValue(r.se)}" data-threshold="${dataValue(r.threshold)}">` +
+          `${markHtml(l.mark)}${statusFirst(sentenceHtml(l.sentence))}</li>`,
+      );
+    }
+    out.push('</ul>');
+    if (d.definitions.length) {
+      const defs = d.definitions.map(
+        (x) => `<dt>${esc(x.term)}</dt><dd data-term="${esc(x.term)}">${sentenceHtml(x.sentence)} <a href="${esc(readme ?? `#${id}-about-${README_ANCHOR}`)}" class="more">More in the README</a></dd>`,
+      );
+      out.push(`<dl class="definitions" aria-label="What these words mean">${defs.join('')}</dl>`);
+    }
+    out.push('</div>');
   }
+
+  // 3. The detail: what the change does, charts, map, sequences, structure, notices, mending.
+  const detailAt = out.length;
   if (f.head) out.push(`<p class="facts">${esc(facts(f.head))}</p>`);
+  if (f.warnings?.length) {
+    const items = f.warnings.map((w) => `<li><code>${esc(`${f.path}:${w.line || 1}:${w.column || 1}`)}</code> ${esc(w.message)}${w.hint ? ` \u2014 ${esc(w.hint)}` : ''}</li>`);
+    out.push(`<div class="facts design-warnings"><strong>What reading the design warned of:</strong><ul>${items.join('')}</ul></div>`);
+  }
   const notApplicable = describeNotApplicable(f.head);
   if (notApplicable) out.push(`<p class="facts not-applicable"><strong>Not applicable to this design:</strong> ${esc(notApplicable)}</p>`);
   const changed = describeChanges(f);
@@ -235,22 +256,38 @@ function designSection(f: FileReport, index: number): string {
   }
   if (f.head && f.head.envelopes.length) out.push(charts(f, id));
   out.push(mapHtml(f, id));
-  if (f.requirements.length) out.push(requirementTable(f.requirements, id));
-  const findings = groupFindings(bySeverity(f.findings.filter((x) => x.rule !== 'weakest-sequence')));
-  const work = findings.filter((x) => x.severity !== 'notice');
-  const notices = findings.filter((x) => x.severity === 'notice');
-  if (findings.length) out.push('<h3>Findings</h3>');
-  if (work.length) out.push(`<ul class="findings">${work.map(findingItem).join('')}</ul>`);
-  if (notices.length) {
-    out.push(
-      `<details class="notices"><summary>${notices.length} notice${notices.length === 1 ? '' : 's'} (within allowances, or context)</summary><ul class="findings">${notices.map(findingItem).join('')}</ul></details>`,
-    );
-  }
   out.push(weakest(f));
   out.push(structure(f));
+  if (d.notices.length) {
+    out.push(
+      `<details class="notices"><summary>${d.notices.length} notice${d.notices.length === 1 ? '' : 's'} (context, within allowances)</summary><ul class="weakened">${d.notices.map(weakenedItem).join('')}</ul></details>`,
+    );
+  }
   out.push(mendHtml(f, id));
+  if (d.definitions.length && !readme) out.push(readmePointer(`${id}-about-${README_ANCHOR}`));
+  // The detail part only when there is detail (an unreadable file has none).
+  if (out.slice(detailAt).some(Boolean)) {
+    out.splice(detailAt, 0, `<div class="part detail" data-part="detail"><h3 id="${id}-detail">Detail</h3>`);
+    out.push('</div>');
+  }
   out.push('</section>');
   return out.filter(Boolean).join('\n');
+}
+
+function numbersOnlyHtml(d: DesignStory): string {
+  const said = numbersOnly(d);
+  return said ? `${said.charAt(0).toUpperCase()}${said.slice(1)}.` : 'Nothing weakened.';
+}
+
+/** The requirement line's leading status word ("weakened · …") set in bold. */
+function statusFirst(html: string): string {
+  const i = html.indexOf(' \u00b7 ');
+  return i > 0 ? `<span class="status">${html.slice(0, i)}</span>${html.slice(i)}` : html;
+}
+
+/** Where the definitions point: the README section, named (the report is read offline, away from any repository). */
+function readmePointer(anchor: string): string {
+  return `<p class="facts" id="${anchor}">More on R, area, spread and \u00b1: netbrace\u2019s README, section \u201cReading the report\u201d (<code>README.md#${esc(README_ANCHOR)}</code>).</p>`;
 }
 
 function facts(ev: Evaluation): string {
@@ -300,69 +337,14 @@ function chartData(chart: EnvelopeChart, id: string): string {
   return `<details><summary>Chart data</summary><table id="${id}-data"><caption>${esc(chart.title)}: values of R</caption><thead>${head}</thead><tbody>${rows.join('')}</tbody></table></details>`;
 }
 
-function requirementTable(rows: RequirementResult[], id: string): string {
-  const body = rows.map((r) => {
-    const bad = r.status === 'short' || r.status === 'weakened';
-    const cls = `st-${r.status}${bad ? ` sev-${r.severity}` : ''}`;
-    return (
-      `<tr data-requirement="${esc(r.id)}">` +
-      `<th scope="row">${esc(r.description)}<div class="rule">${esc(r.id)}</div></th>` +
-      `<td>${esc(r.severity)}</td>` +
-      `<td class="num" data-field="base" data-value="${dataValue(r.base)}">${esc(formatRequirementValue(r, r.base))}</td>` +
-      `<td class="num" data-field="head" data-value="${dataValue(r.head)}">${esc(formatRequirementValue(r, r.head))}</td>` +
-      `<td class="num" data-field="delta" data-value="${dataValue(r.delta)}">${esc(formatRequirementDelta(r))}` +
-      `${formatError(r.se) ? ` <span class="line" data-field="se" data-value="${dataValue(r.se)}">${esc(formatError(r.se))}</span>` : ''}</td>` +
-      `<td class="num" data-field="threshold" data-value="${dataValue(r.threshold)}">${esc(formatRequirementValue(r, r.threshold))}</td>` +
-      `<td class="${cls}" data-field="status">${esc(REQUIREMENT_STATUS_WORD[r.status])}</td>` +
-      '</tr>'
-    );
-  });
-  const noise = rows.some((r) => r.status === 'inside-error')
-    ? '<p class="facts">Inside the error: the value dropped by less than its Monte Carlo error, which is never a failure.</p>'
-    : '';
-  return [
-    '<h3>Requirements</h3>',
-    `<table class="requirements" id="${id}-requirements">`,
-    '<caption>Each requirement of the policy, base \u2192 head; \u0394 is the paired difference with its standard error.</caption>',
-    '<thead><tr><th scope="col">Requirement</th><th scope="col">Severity</th><th scope="col" class="num">Base</th><th scope="col" class="num">Head</th><th scope="col" class="num">\u0394 \u00b1 error</th><th scope="col" class="num">Threshold</th><th scope="col">Status</th></tr></thead>',
-    `<tbody>${body.join('')}</tbody>`,
-    '</table>',
-    noise,
-  ].join('\n');
-}
-
-const MAX_ELEMENTS = 8;
-
 /** An element as the HTML names it: formatElement with its label and id marked up, the parenthesis muted. */
 function htmlElement(e: ReportElement): string {
   const el = (x: string) => `<span class="el">${esc(x)}</span>`;
   return formatElement(e, { id: el, text: el, meta: (x) => `<span class="line">${x}</span>` });
 }
 
-function elementList(elements: ReportElement[]): string {
-  const shown = elements.slice(0, MAX_ELEMENTS).map(htmlElement);
-  const more = elements.length > MAX_ELEMENTS ? `, \u2026 ${elements.length - MAX_ELEMENTS} more` : '';
-  return shown.join(', ') + more;
-}
-
 function costItem(c: Consequence | undefined, subject: string): string {
   return c ? `<p class="cost">${esc(consequenceSentence(c, subject))}</p>` : '';
-}
-
-function findingItem(x: GroupedFinding): string {
-  const where = x.line > 0 ? ` <span class="line">line ${x.line}${x.column ? `:${x.column}` : ''}</span>` : '';
-  // The gate's messages usually state the values already; repeat them only when they do not.
-  const values =
-    x.head !== undefined && x.head !== null && !x.message.includes(formatValue(x.head))
-      ? ` <span class="line">(base ${esc(formatValue(x.base))}, head ${esc(formatValue(x.head))}${x.delta !== undefined && x.delta !== null ? `, \u0394 ${esc(`${formatDelta(x.delta)} ${formatError(x.se)}`.trim())}` : ''})</span>`
-      : '';
-  const named = x.elements.length === 1 && x.message.includes(x.elements[0].id);
-  const els = x.elements.length && !named && !x.grouped ? `<div>${elementList(x.elements)}</div>` : '';
-  const members = x.grouped && x.members && x.members.length > 1 ? x.members.filter((m) => m.consequence) : [];
-  const cost = members.length
-    ? `<ul class="costs">${members.map((m) => `<li>${htmlElement(m.elements[0])}: ${esc(consequenceSentence(m.consequence!, ''))}</li>`).join('')}</ul>`
-    : costItem(x.consequence, 'Losing it');
-  return `<li class="${x.severity}" data-rule="${esc(x.rule)}"${x.status ? ` data-status="${esc(x.status)}"` : ''}><span class="chip ${x.severity}">${esc(x.severity)}</span> <span class="rule">${esc(findingTitle(x, RULE_TITLE))}</span>${where}<div>${esc(x.message)}${values}</div>${els}${cost}</li>`;
 }
 
 function weakest(f: FileReport): string {
@@ -378,7 +360,7 @@ function weakest(f: FileReport): string {
     if (worst) {
       const what = worst.elements.map((id, i) => htmlElement(worst.located?.[i] ?? knownElement(known, c.kind, id))).join(' + ');
       items.push(
-        `<div class="sequence"><p>${esc(contingencyLabel(c.challenge, c.kind))}: the ${esc(c.challenge === 'n-1' ? 'single' : 'double')} ${esc(kindSingular(c.kind))} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): <span class="el">${esc(what)}</span> leaves R ${esc(formatValue(worst.value))}</p></div>`,
+        `<div class="sequence"><p>${esc(contingencyLabel(c.challenge, c.kind))}: the ${esc(c.challenge === 'n-1' ? 'single' : 'double')} ${esc(kindSingular(c.kind))} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): ${what} leaves R ${esc(formatValue(worst.value))}</p></div>`,
       );
     }
   }

@@ -144,6 +144,8 @@ export interface FileReport {
   base?: Evaluation;
   /** For status "unreadable": what could not be read. */
   error?: { message: string; line: number; column: number };
+  /** What reading the head design warned of, at its line (the first DESIGN_WARNINGS_KEPT). */
+  warnings?: { message: string; line: number; column: number; hint?: string }[];
   /**
    * What the change does: elements added and removed (nodes by id or, renamed, by neighbourhood;
    * links by their ends; shared-risk groups by id or members; head lines for added, base lines
@@ -220,6 +222,9 @@ export interface PolicyChange {
   file: string;
   line: number;
 }
+
+/** Design warnings a file report keeps; `netbrace inspect` lists them all. */
+export const DESIGN_WARNINGS_KEPT = 50;
 
 export const CAUTION =
   'netbrace evaluates topology-level robustness under the stated assumptions (the metrics, challenges ' +

@@ -411,6 +411,12 @@ export function designStory(f: FileReport): DesignStory {
   };
 }
 
+/** For a design with no element to name whose requirements fell: what "what weakened" says instead of "nothing". */
+export function numbersOnly(d: Pick<DesignStory, 'howMuch'>): string | undefined {
+  const bad = d.howMuch.filter((l) => l.requirement.status === 'short' || l.requirement.status === 'weakened').length;
+  return bad ? `no single element to name; ${bad} requirement${bad === 1 ? '' : 's'} weakened or short (how much, below)` : undefined;
+}
+
 /** Every design's story, worst first (rank.ts). */
 export function designStories(report: Pick<Report, 'files'>): DesignStory[] {
   return rankFiles(report.files).map(designStory);

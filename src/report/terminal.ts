@@ -1,6 +1,9 @@
-// The terminal view of a report: the verdict per design, the requirement table (base → head,
-// delta ± error), the findings, the weakest removal sequences by element and line, a compact
-// Unicode envelope chart and the caution. Pure: colour is on or off by the caller's choice.
+// The terminal view of a report, in the order every view tells it (story.ts): the verdict
+// sentence and the caution in one line; the run's facts; then per design, worst first, what
+// weakened (the consequences, worst first), how much (one line per requirement, with R, area,
+// spread and ± defined), and the detail (the design's own warnings, what the change does,
+// weakest removal sequences, a compact envelope chart, notices); the caution in full last.
+// Pure: colour is on or off by the caller's choice.
 
 import { createColors } from 'picocolors';
 import type { Colors } from 'picocolors/types.js';
@@ -13,24 +16,16 @@ import {
   describeModifications,
   describeNotApplicable,
   statusCounts,
-  fileStatusWord,
-  fileFails,
   formatElement,
-  fileWarns,
-  formatError,
   formatFraction,
-  formatRequirementDelta,
-  formatRequirementValue,
   formatValue,
-  REQUIREMENT_STATUS_WORD,
-  bySeverity,
-  groupFindings,
   shortRevision,
   weakestSequences,
-  type GroupedFinding,
 } from './labels.js';
-import type { Evaluation, FileReport, Report, RequirementResult } from './report.js';
+import type { Evaluation, Report } from './report.js';
 import { oneLine } from './escape.js';
+import { CAUTION_LINE, designStories, numbersOnly, plainSentence, policyChangeSentence, verdictStory, type DesignStory, type WeakenedItem } from './story.js';
+import { MARK } from './vocabulary.js';
 
 export interface TerminalOptions {
   /** ANSI colour (the shell decides: NO_COLOR, TTY, FORCE_COLOR). */
@@ -38,8 +33,6 @@ export interface TerminalOptions {
   /** Terminal width in columns; lines are kept within it where possible. */
   width: number;
 }
-
-const SYMBOL = { fail: '\u2717', warn: '\u25b2', notice: 'i', pass: '\u2713' } as const;
 
 export function renderTerminal(input: Report, options: TerminalOptions): string {
   // Every string in a report may come from a design file (ids, paths, messages): strip control
@@ -49,32 +42,36 @@ export function renderTerminal(input: Report, options: TerminalOptions): string 
   const c = createColors(options.color);
   const width = Math.max(60, Math.min(options.width || 100, 160));
   const out: string[] = [];
-  out.push(headerLine(report, c));
+  out.push(...verdictLines(report, c, width));
+  out.push(...wrap(CAUTION_LINE, width - 2).map((l) => c.dim(`  ${l}`)));
+  out.push('', ...wrap(headerLine(report), width).map((l) => c.dim(l)));
   for (const note of policyNotes(report)) out.push(c.dim(note));
   if (report.files.length === 0) out.push('', 'No design files changed: nothing to judge.');
-  for (const f of report.files) out.push('', ...renderFile(f, c, width));
-  out.push('', ...verdictLines(report, c, width));
-  out.push(...wrap(`Caution: ${report.caution}`, width).map((l) => c.dim(l)));
+  for (const d of designStories(report)) out.push('', ...renderDesign(d, c, width));
+  out.push('', ...wrap(`Caution: ${report.caution}`, width).map((l) => c.dim(l)));
   // The terminal view is also a CI log: the runner reads `::` at a line start as a workflow
   // command, and wrapping can put an id's `::` there (after spaces or colour codes). Defuse
   // it as logText() does.
   return `${out.join('\n')}\n`.replace(/(^|\n)((?:\s|\u001b\[[0-9;]*m)*)::/g, '$1$2:\u200A:');
 }
 
-function headerLine(r: Report, c: Colors): string {
+function headerLine(r: Report): string {
   const parts = [`netbrace ${r.tool.version}`];
   if (r.base || r.head) parts.push(`base ${shortRevision(r.base)} \u2192 head ${shortRevision(r.head)}`);
   parts.push(`seed ${r.seed}`);
   if (r.part) parts.push(`part ${r.part.index}/${r.part.total}`);
-  return c.bold(parts.join(' \u00b7 '));
+  const counts = statusCounts(r).join(', ');
+  parts.push(`${r.files.length} design${r.files.length === 1 ? '' : 's'}${counts ? ` (${counts})` : ''}`);
+  return parts.join(' \u00b7 ');
 }
 
 function policyNotes(r: Report): string[] {
   const notes: string[] = [];
   if (r.policy.source === 'builtin') notes.push('policy: none found \u2014 the built-in defaults for communication backbones were applied');
   else notes.push(`policy: ${r.policy.path ?? '(file)'}${r.policy.revision ? ` as of ${shortRevision(r.policy.revision)}` : ''}`);
-  if (r.policy.note && !r.policy.changed) notes.push(`policy: ${r.policy.note}`);
-  else if (r.policy.changed && !r.policy.path) notes.push('policy: this change edits the policy; the proposed policy was not applied to judge it');
+  const change = policyChangeSentence(r);
+  if (change) notes.push(`policy: ${plainSentence(change)}`);
+  else if (r.policy.note) notes.push(`policy: ${r.policy.note}`);
   for (const n of configurationNotes(r)) notes.push(`configuration: ${n.text}`);
   if (r.scope === 'all') notes.push('scope: every design in the repository, judged against thresholds only');
   if (r.mode === 'inform') notes.push('mode: inform \u2014 failures are reported but do not fail the run');
@@ -82,58 +79,99 @@ function policyNotes(r: Report): string[] {
 }
 
 function verdictLines(r: Report, c: Colors, width: number): string[] {
-  const failed = r.files.filter(fileFails).length;
-  const warned = r.files.filter(fileWarns).length;
-  const counts = statusCounts(r).join(', ');
-  const tail = `${r.files.length} design${r.files.length === 1 ? '' : 's'}${counts ? ` (${counts})` : ''}` +
-    (failed ? `, ${failed} failing` : '') + (warned ? `, ${warned} with warnings` : '');
-  const text = r.verdict === 'fail' ? `${SYMBOL.fail} Verdict: FAIL \u2014 ${tail}` : `${SYMBOL.pass} Verdict: PASS \u2014 ${tail}`;
-  const paint = r.verdict === 'fail' ? c.red : c.green;
-  return wrap(text, width).map((l) => c.bold(paint(l)));
+  const v = verdictStory(r);
+  const paint = v.tone === 'blocks' ? c.red : v.tone === 'clear' ? c.cyan : c.yellow;
+  return wrap(`${v.mark} ${plainSentence(v.sentence)}`, width).map((l) => c.bold(paint(l)));
 }
 
-function renderFile(f: FileReport, c: Colors, width: number): string[] {
+const severityPaint = (c: Colors, severity: 'fail' | 'warn' | 'notice') => (severity === 'fail' ? c.red : severity === 'warn' ? c.yellow : c.dim);
+const severityMark = (severity: 'fail' | 'warn' | 'notice') => (severity === 'fail' ? MARK.fail : severity === 'warn' ? MARK.warn : MARK.notice);
+
+function renderDesign(d: DesignStory, c: Colors, width: number): string[] {
+  const f = d.file;
   const out: string[] = [];
-  const fails = fileFails(f);
-  const warns = fileWarns(f);
-  const mark = fails ? c.red(SYMBOL.fail) : warns ? c.yellow(SYMBOL.warn) : c.green(SYMBOL.pass);
-  const word = fails ? c.red('FAIL') : warns ? c.yellow('PASS with warnings') : c.green('PASS');
+  const paint = d.outcome === 'fails' ? c.red : d.outcome === 'warns' ? c.yellow : c.cyan;
   const renamed = f.previousPath ? ` (was ${f.previousPath})` : '';
-  out.push(`${mark} ${c.bold(f.path)}${renamed} \u2014 ${word} \u00b7 ${fileStatusWord(f)}`);
+  out.push(...wrap(`${d.mark} ${f.path}${renamed} \u2014 ${d.statusWord} \u00b7 ${d.headline}`, width - 2).map((l, i) => (i === 0 ? c.bold(paint(l)) : c.bold(`  ${l}`))));
+
+  // 1. What weakened: the consequences, worst first.
+  out.push(c.bold('  What weakened'));
+  // A file that could not be read or evaluated says where, as every located error does: file:line:col.
+  const located = (x: WeakenedItem) => f.error !== undefined && (x.rule === 'parse-error' || (x.rule === 'not-computable' && x.finding.message === f.error.message));
   if (f.error) {
-    out.push(...wrap(`${f.path}:${f.error.line || 1}:${f.error.column || 1}: ${f.error.message}`, width - 2).map((l) => `  ${l}`));
+    const e = f.error;
+    out.push(...wrap(`${d.statusWord}: ${f.path}:${e.line || 1}:${e.column || 1}: ${e.message}`, width - 6).map((l, i) => (i === 0 ? `    ${c.red(MARK.fail)} ${l}` : `      ${l}`)));
   }
-  if (f.head) out.push(...wrap(describeEvaluation(f.head), width - 2).map((l) => c.dim(`  ${l}`)));
+  const items = d.weakened.filter((x) => !located(x));
+  if (!items.length && !f.error) out.push(`    ${numbersOnly(d) ?? 'nothing weakened'}`);
+  for (const x of items) out.push(...itemLines(x, c, width));
+
+  // 2. How much: one line per requirement, then the words those lines use.
+  if (d.howMuch.length) {
+    out.push(c.bold('  How much'));
+    for (const l of d.howMuch) {
+      const r = l.requirement;
+      const bad = r.status === 'short' || r.status === 'weakened';
+      const tone = bad ? severityPaint(c, r.severity) : r.status === 'holds' ? c.cyan : c.dim;
+      const lines = wrap(plainSentence(l.sentence), width - 6);
+      out.push(`    ${tone(l.mark)} ${lines[0]}`, ...lines.slice(1).map((x) => `      ${x}`));
+    }
+    for (const def of d.definitions) out.push(...wrap(plainSentence(def.sentence), width - 4).map((x) => c.dim(`    ${x}`)));
+    if (d.definitions.length) out.push(c.dim('    (README: "Reading the report")'));
+  }
+
+  // 3. The detail.
+  const detail = detailLines(d, c, width);
+  if (detail.length) out.push(c.bold('  Detail'), ...detail);
+  return out;
+}
+
+function itemLines(x: WeakenedItem, c: Colors, width: number): string[] {
+  const where = x.line > 0 ? ` (line ${x.line})` : '';
+  const body = wrap(`${x.title}${where}: ${plainSentence(x.sentence)}`, width - 6);
+  return [`    ${severityPaint(c, x.severity)(severityMark(x.severity))} ${body[0]}`, ...body.slice(1).map((l) => `      ${l}`)];
+}
+
+function detailLines(d: DesignStory, c: Colors, width: number): string[] {
+  const f = d.file;
+  const out: string[] = [];
+  const indent = (lines: string[], paint: (s: string) => string = (s) => s) => lines.map((l) => paint(`    ${l}`));
+  if (f.head) out.push(...indent(wrap(describeEvaluation(f.head), width - 4), c.dim));
+  for (const w of f.warnings ?? []) {
+    out.push(...wrap(`design warning: ${f.path}:${w.line || 1}:${w.column || 1}: ${w.message}${w.hint ? ` \u2014 ${w.hint}` : ''}`, width - 6).map((l, i) => (i === 0 ? `    ${c.yellow(MARK.warn)} ${l}` : `      ${l}`)));
+  }
   const notApplicable = describeNotApplicable(f.head);
-  if (notApplicable) out.push(...wrap(`not applicable: ${notApplicable}`, width - 2).map((l) => c.dim(`  ${l}`)));
+  if (notApplicable) out.push(...indent(wrap(`not applicable: ${notApplicable}`, width - 4), c.dim));
   const changed = describeChanges(f);
-  if (changed) out.push(...wrap(`changed: ${changed}`, width - 2).map((l) => `  ${l}`));
+  if (changed) out.push(...indent(wrap(`changed: ${changed}`, width - 4)));
   const modified = describeModifications(f);
   if (modified.length) {
-    out.push('  changed attributes:');
-    for (const m of modified) out.push(...wrap(m, width - 6).map((l, i) => (i === 0 ? `    \u2022 ${l}` : `      ${l}`)));
-  }
-  if (f.requirements.length) out.push('', ...requirementTable(f.requirements, c, width));
-  // The file's error is printed above: its finding is not repeated.
-  const findings = f.findings.filter((x) => x.rule !== 'weakest-sequence' && x.rule !== 'parse-error' && !(f.error && x.rule === 'not-computable' && x.message === f.error.message));
-  if (findings.length) {
-    out.push('', c.bold('  Findings'));
-    for (const x of groupFindings(bySeverity(findings))) out.push(...findingLines(x, c, width));
+    out.push('    changed attributes:');
+    for (const m of modified) out.push(...wrap(m, width - 8).map((l, i) => (i === 0 ? `      \u2022 ${l}` : `        ${l}`)));
   }
   const sequences = weakestSequences(f);
   if (sequences.length) {
-    out.push('', c.bold('  Weakest removal sequences'));
+    out.push('    weakest removal sequences:');
     for (const s of sequences) {
       const more = s.ids.length > MAX_CHAIN ? ` \u2192 \u2026 (${s.ids.length - MAX_CHAIN} more)` : '';
       const chain = s.elements.slice(0, MAX_CHAIN).map((e) => formatElement(e, NBSP)).join(' \u2192 ') + more;
       const v = s.values ?? [];
       const rs = !v.length ? '' : v.length === s.ids.length && v.length <= MAX_CHAIN ? v.map(formatValue).join(' \u2192 ') : `${formatValue(v[0])} \u2192 \u2026 \u2192 ${formatValue(v[v.length - 1])}`;
-      out.push(...wrap(`${s.title}: ${chain}${rs ? ` \u00b7 R ${rs}` : ''}`, width - 4).map((l, i) => (i === 0 ? `  \u2022 ${l}` : `    ${l}`)));
-      if (s.consequence) out.push(...wrap(consequenceSentence(s.consequence, 'These removals', NBSP), width - 4).map((l) => c.dim(`    ${l}`)));
+      out.push(...wrap(`${s.title}: ${chain}${rs ? ` \u00b7 R ${rs}` : ''}`, width - 8).map((l, i) => (i === 0 ? `      \u2022 ${l}` : `        ${l}`)));
+      if (s.consequence) out.push(...wrap(consequenceSentence(s.consequence, 'These removals', NBSP), width - 8).map((l) => c.dim(`        ${l}`)));
     }
   }
   const env = f.head?.envelopes[0];
   if (env && f.head) out.push('', ...terminalChart(envelopeChart(env, f.head, f.base), env, c, width));
+  if (d.notices.length) {
+    out.push(`    notices (context, within allowances):`);
+    const room = width - 8;
+    for (const x of d.notices) {
+      // Notices are context, not work: one line each.
+      const t = `${x.title}${x.line > 0 ? ` (line ${x.line})` : ''}: ${plainSentence(x.sentence)}`;
+      out.push(`    ${c.dim(MARK.notice)} ${t.length > room ? `${t.slice(0, room - 1)}\u2026` : t}`);
+    }
+  }
   return out;
 }
 
@@ -144,70 +182,10 @@ function describeEvaluation(ev: Evaluation): string {
   return `R = ${ev.r.combine === 'min' ? 'minimum' : 'weighted mean'} of ${metrics} \u00b7 ${s.nodes} sites, ${s.links} links, ${spof}`;
 }
 
-function requirementTable(rows: RequirementResult[], c: Colors, width: number): string[] {
-  // indent, gaps and the base → head, delta and status columns ("x short of its floor" is 20 wide)
-  const fixed = 2 + 2 + 6 + 3 + 6 + 2 + 17 + 2 + 20;
-  const descWidth = Math.max(20, Math.min(56, width - fixed));
-  const header = `  ${'Requirement'.padEnd(descWidth)}  ${'base'.padStart(6)}   ${'head'.padStart(6)}  ${'\u0394 \u00b1 error'.padEnd(17)}  status`;
-  const out = [c.bold(header)];
-  for (const r of rows) {
-    const desc = wrap(r.description, descWidth);
-    const delta = `${formatRequirementDelta(r)} ${formatError(r.se)}`.trim();
-    const status = REQUIREMENT_STATUS_WORD[r.status];
-    const bad = r.status === 'short' || r.status === 'weakened';
-    const sev = bad ? (r.severity === 'fail' ? c.red : r.severity === 'warn' ? c.yellow : c.cyan) : r.status === 'holds' ? c.green : c.dim;
-    const symbol = bad ? SYMBOL[r.severity] : r.status === 'holds' ? SYMBOL.pass : r.status === 'not-applicable' ? '\u2013' : '~';
-    const first = `  ${desc[0].padEnd(descWidth)}  ${formatRequirementValue(r, r.base).padStart(6)} \u2192 ${formatRequirementValue(r, r.head).padStart(6)}  ${delta.padEnd(17)}  ${sev(`${symbol} ${status}`)}`;
-    out.push(first, ...desc.slice(1).map((l) => `  ${l}`));
-  }
-  if (rows.some((r) => r.status === 'inside-error')) {
-    const note = 'inside the error: the value dropped by less than its Monte Carlo error, which is never a failure';
-    out.push(...wrap(note, width - 2).map((l) => c.dim(`  ${l}`)));
-  }
-  return out;
-}
-
 /** Element names keep "(line 14)" together when lines wrap. */
 const NBSP = { space: '\u00a0' };
-/** The finding's kind in the findings list: a drop that is not a regression is a "change". */
-function findingTag(x: GroupedFinding): string {
-  if (x.rule === 'regression' && x.status !== undefined && x.status !== 'weakened') return 'change';
-  return x.rule;
-}
-
-/** Elements shown under a finding, and steps of a sequence, before "… N more". */
-const MAX_ELEMENTS = 5;
+/** Steps of a sequence shown before "… N more". */
 const MAX_CHAIN = 8;
-
-function findingLines(x: GroupedFinding, c: Colors, width: number): string[] {
-  const paint = x.severity === 'fail' ? c.red : x.severity === 'warn' ? c.yellow : c.cyan;
-  const where = x.line > 0 ? `line ${x.line}` : '';
-  const head = `  ${paint(`${SYMBOL[x.severity]} ${x.severity.padEnd(6)}`)} ${findingTag(x).padEnd(16)} ${where.padEnd(10)} `;
-  const room = Math.max(30, width - 39);
-  if (x.severity === 'notice') {
-    // Notices are context, not work: one line each.
-    return [head + (x.message.length > room ? `${x.message.slice(0, room - 1)}\u2026` : x.message)];
-  }
-  const body = wrap(x.message, room);
-  const out = [head + body[0], ...body.slice(1).map((l) => ' '.repeat(39) + l)];
-  const named = x.elements.length === 1 && x.message.includes(x.elements[0].id);
-  const indent = ' '.repeat(39);
-  if (x.elements.length > 0 && !x.grouped && !named) {
-    const shown = x.elements.slice(0, MAX_ELEMENTS).map((e) => formatElement(e, NBSP));
-    const more = x.elements.length > MAX_ELEMENTS ? `, \u2026 ${x.elements.length - MAX_ELEMENTS} more` : '';
-    out.push(...wrap(`at ${shown.join(', ')}${more}`, room).map((l) => indent + c.dim(l)));
-  }
-  // What each weak point costs: one sentence, or one line per member of a merged finding.
-  if (x.grouped && x.members && x.members.length > 1) {
-    for (const m of x.members) {
-      if (!m.consequence) continue;
-      out.push(...wrap(`${formatElement(m.elements[0], NBSP)}: ${consequenceSentence(m.consequence, '', NBSP)}`, room).map((l) => indent + c.dim(l)));
-    }
-  } else if (x.consequence) {
-    out.push(...wrap(consequenceSentence(x.consequence, 'Losing it', NBSP), room).map((l) => indent + c.dim(l)));
-  }
-  return out;
-}
 
 // --- the chart ------------------------------------------------------------------------
 

@@ -8,13 +8,13 @@ import { VERSION } from '../version.js';
 
 export const EXIT_CODES_HELP = `Exit codes:
   0  pass (or nothing to judge)
-  1  the gate failed: a requirement was broken or a design could not be read
+  1  the check failed: a design weakened or fell short of a floor, or could not be read
   2  usage or configuration error (bad option, broken policy); nothing was evaluated`;
 
 export function generalHelp(): string {
   const width = Math.max(...commands.map((c) => c.name.length), 4);
   const list = commands.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`).join('\n');
-  return `netbrace ${VERSION} — robustness gate for network designs kept in git
+  return `netbrace ${VERSION} — robustness check for network designs kept in git
 
 Usage: netbrace <command> [options]
 
@@ -25,7 +25,7 @@ Run "netbrace <command> --help" (or "netbrace help <command>") for a command's o
 and examples; "netbrace --version" prints the version.
 
 Examples:
-  netbrace demo                                   the whole gate on an invented backbone
+  netbrace demo                                   the whole check on an invented backbone
   netbrace check --base main                      judge the designs changed since main
   netbrace explain designs/core.net.yaml          which single losses hurt R most
   netbrace inspect designs/core.net.yaml          counts, bridges and cut nodes

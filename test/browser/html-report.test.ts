@@ -1,7 +1,9 @@
 // The HTML report in a real browser: Debian's chromium, headless, driven by playwright-core.
 // Opens the report from file://, refuses every request that is not the file itself (the
 // report must be self-contained), checks the DOM against the JSON report it was built from,
-// and saves a screenshot under test/artifacts/ (gitignored; CI keeps it as an artifact).
+// checks the order a reader meets (the verdict sentence, then per design what weakened, how
+// much, and the charts, by position in the rendered page), and saves a screenshot under
+// test/artifacts/ (gitignored; CI keeps it as an artifact).
 // Without chromium the test fails with a clear message in CI, and is skipped elsewhere.
 
 import { existsSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -12,8 +14,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { renderHtml } from '../../src/report/html.js';
 import { envelopeChart } from '../../src/report/chart.js';
-import { formatRequirementDelta, formatRequirementValue, REQUIREMENT_STATUS_WORD } from '../../src/report/labels.js';
 import type { Report } from '../../src/report/report.js';
+import { CAUTION_LINE, designStories, plainSentence, requirementLine, verdictStory } from '../../src/report/story.js';
 import { demoReport } from '../report/demo-report.fixture.js';
 import { repoRoot } from '../topology/helpers.js';
 
@@ -92,8 +94,9 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
         })),
       })),
     );
-    expect(sections.map((s) => s.path)).toEqual(report.files.map((f) => f.path));
-    report.files.forEach((f, i) => {
+    const shown = designStories(report).map((d) => d.file);
+    expect(sections.map((s) => s.path)).toEqual(shown.map((f) => f.path));
+    shown.forEach((f, i) => {
       const envs = f.head?.envelopes ?? [];
       expect(sections[i].charts).toHaveLength(envs.length);
       envs.forEach((env, j) => {
@@ -110,41 +113,101 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
     expect(sections[0].charts[0].series).toBe(6);
   });
 
-  it('shows the requirement numbers of the JSON report', async () => {
+  it('shows one line per requirement with the numbers of the JSON report', async () => {
     const rows = await page.$$eval('section.design', (els) =>
       els.map((s) =>
-        [...s.querySelectorAll('table.requirements tbody tr')].map((tr) => {
-          const cell = (f: string) => tr.querySelector(`[data-field="${f}"]`);
-          return {
-            id: tr.getAttribute('data-requirement'),
-            base: [cell('base')?.getAttribute('data-value'), cell('base')?.textContent],
-            head: [cell('head')?.getAttribute('data-value'), cell('head')?.textContent],
-            delta: [cell('delta')?.getAttribute('data-value'), cell('delta')?.firstChild?.textContent?.trim()],
-            status: cell('status')?.textContent,
-          };
-        }),
+        [...s.querySelectorAll('ul.how-much li')].map((li) => ({
+          id: li.getAttribute('data-requirement'),
+          base: li.getAttribute('data-base'),
+          head: li.getAttribute('data-head'),
+          delta: li.getAttribute('data-delta'),
+          status: li.getAttribute('data-status'),
+          text: (li as unknown as { innerText: string }).innerText,
+        })),
       ),
     );
-    report.files.forEach((f, i) => {
+    designStories(report).forEach((d, i) => {
+      const f = d.file;
       expect(rows[i].map((r) => r.id)).toEqual(f.requirements.map((r) => r.id));
       f.requirements.forEach((r, j) => {
-        const shown = rows[i][j];
         const json = (v: number | null) => (v === null ? '' : String(v));
-        expect(shown.base).toEqual([json(r.base), formatRequirementValue(r, r.base)]);
-        expect(shown.head).toEqual([json(r.head), formatRequirementValue(r, r.head)]);
-        expect(shown.delta).toEqual([json(r.delta), formatRequirementDelta(r)]);
-        expect(shown.status).toBe(REQUIREMENT_STATUS_WORD[r.status]);
+        const line = requirementLine(r, f.findings);
+        expect(rows[i][j]).toMatchObject({ base: json(r.base), head: json(r.head), delta: json(r.delta), status: r.status });
+        expect(rows[i][j].text).toBe(`${line.mark}${plainSentence(line.sentence)}`);
       });
     });
-    // and spot-check against the raw JSON, not our own formatter
-    expect(rows[0][0].head).toEqual(['0.421', '0.421']);
-    expect(rows[0][0].delta).toEqual(['-0.077', '\u22120.077']);
+    // and spot-checked against the raw JSON, not our own formatter
+    expect(rows[0][0]).toMatchObject({ head: '0.421', delta: '-0.077' });
+    expect(rows[0][0].text).toContain('0.498 \u2192 0.421 (\u22120.077 \u00b1 0.006), floor 0.45');
   });
 
-  it('states the verdict and the caution in text', async () => {
-    expect(await page.textContent('[role="status"]')).toBe('Gate failed: 2 of 3 designs failing');
-    expect(await page.textContent('aside.caution')).toContain(report.caution);
-    expect(await page.title()).toBe('netbrace report \u2014 gate failed');
+  it('reads in order: verdict, then per design what weakened, how much, and the charts', async () => {
+    // Positions in the rendered page (top of each block's box), not in the source text.
+    const layout = await page.$eval('body', (body) => {
+      const document = body.ownerDocument;
+      const scrollY = document.defaultView!.scrollY;
+      const top = (e: { getBoundingClientRect(): { top: number } } | null) => (e ? e.getBoundingClientRect().top + scrollY : null);
+      return {
+        verdict: top(document.querySelector('#verdict')),
+        cautionLine: top(document.querySelector('#caution-line')),
+        cautionFull: top(document.querySelector('aside#caution')),
+        designs: [...document.querySelectorAll('section.design')].map((s) => ({
+          start: top(s),
+          consequences: top(s.querySelector('[data-part="consequences"]')),
+          numbers: top(s.querySelector('[data-part="numbers"]')),
+          firstChart: top(s.querySelector('figure.chart')),
+          end: s.getBoundingClientRect().bottom + scrollY,
+        })),
+      };
+    });
+    expect(layout.verdict).not.toBeNull();
+    expect(layout.cautionLine!).toBeGreaterThan(layout.verdict!);
+    expect(layout.designs.length).toBe(report.files.length);
+    expect(layout.designs[0].start!).toBeGreaterThan(layout.cautionLine!);
+    for (const d of layout.designs) {
+      expect(d.consequences!).toBeGreaterThan(d.start!);
+      if (d.numbers !== null) expect(d.numbers).toBeGreaterThan(d.consequences!);
+      if (d.firstChart !== null) expect(d.firstChart).toBeGreaterThan(d.numbers ?? d.consequences!);
+    }
+    // the first design has all three, so the order is checked there for certain
+    expect(layout.designs[0].numbers).not.toBeNull();
+    expect(layout.designs[0].firstChart).not.toBeNull();
+    // the full caution closes the page, after every design
+    expect(layout.cautionFull!).toBeGreaterThan(Math.max(...layout.designs.map((d) => d.end)));
+  });
+
+  it('states the verdict as a plain sentence, not a badge, with the caution in one line under it', async () => {
+    const sentence = plainSentence(verdictStory(report).sentence);
+    expect(sentence).toBe('netbrace blocks this merge: 1 design weakened, 1 design could not be read');
+    expect(await page.innerText('#verdict')).toBe(`\u25A0${sentence}`);
+    expect(await page.innerText('#caution-line')).toBe(CAUTION_LINE);
+    expect(await page.textContent('aside#caution')).toContain(report.caution);
+    expect(await page.title()).toBe(`netbrace report \u2014 ${sentence}`);
+    // no border around it, and not pushed into a corner: it starts at the left edge of the page's content
+    const box = await page.$eval('#verdict', (h) => {
+      const cs = h.ownerDocument.defaultView!.getComputedStyle(h);
+      const r = h.getBoundingClientRect();
+      const main = h.ownerDocument.querySelector('main')!.getBoundingClientRect();
+      return { border: [cs.borderTopWidth, cs.borderRightWidth, cs.borderBottomWidth, cs.borderLeftWidth], left: r.left, mainLeft: main.left };
+    });
+    expect(box.border).toEqual(['0px', '0px', '0px', '0px']);
+    expect(Math.abs(box.left - box.mainLeft)).toBeLessThan(2);
+    expect(await page.locator('text=/gate (passed|failed)/i').count()).toBe(0);
+  });
+
+  it('names every line of every chart in the chart\u2019s own legend', async () => {
+    const charts = await page.$$eval('svg.nb-chart', (svgs) =>
+      svgs.map((svg) => ({
+        drawn: [...svg.querySelectorAll('[data-series]')].map((e) => [e.getAttribute('data-id'), e.getAttribute('aria-label')]),
+        legend: [...svg.querySelectorAll('.nb-legend [data-legend]')].map((g) => [g.getAttribute('data-legend'), g.querySelector('text')?.textContent ?? '']),
+        visible: [...svg.querySelectorAll('.nb-legend [data-legend] text')].every((t) => (t as unknown as { getBBox(): { width: number } }).getBBox().width > 10),
+      })),
+    );
+    expect(charts.length).toBeGreaterThan(0);
+    for (const c of charts) {
+      expect([...c.legend].sort()).toEqual([...c.drawn].sort());
+      expect(c.visible).toBe(true);
+    }
   });
 
   it('exposes each chart to assistive technology as an image with a name and description', async () => {

@@ -98,6 +98,16 @@ describe('renderChartSvg', () => {
     expect(attrs[0]['data-series-count']).toBe('6');
   });
 
+  it('names every drawn line in its own legend, with the label the series carries', () => {
+    for (const env of head.envelopes) {
+      const chart = envelopeChart(env, head, base);
+      const svg = renderChartSvg(chart, { idPrefix: 'c2' });
+      const legend = svg.slice(svg.indexOf('<g class="nb-legend"'));
+      const entries = [...legend.matchAll(/<g data-legend="([^"]+)">[\s\S]*?<text[^>]*>([^<]*)<\/text>\s*<\/g>/g)].map((m) => [m[1], m[2]]);
+      expect(entries).toEqual(chart.series.map((s) => [s.id, s.label]));
+    }
+  });
+
   it('maps R = 1 to the top and R = 0 to the bottom of the plot', () => {
     const chart = {
       title: 't',

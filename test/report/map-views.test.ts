@@ -36,8 +36,9 @@ describe('the HTML report', () => {
     expect(html).toContain('harbour');
     expect(html).not.toMatch(/<script|\son[a-z]+=/i);
     expect(html).toContain(`content="default-src 'none'; style-src 'unsafe-inline'; img-src data:"`);
-    // The map precedes the requirement table, the mend part closes the section.
-    expect(html.indexOf('class="map"')).toBeLessThan(html.indexOf('class="requirements"'));
+    // The map is detail: after the requirement lines; the mend part closes the section.
+    expect(html.indexOf('class="map"')).toBeGreaterThan(html.indexOf('class="how-much"'));
+    expect(html.indexOf('class="map"')).toBeGreaterThan(html.indexOf('data-part="detail"'));
     expect(html.indexOf('What would mend it')).toBeGreaterThan(html.indexOf('<h3>Structure</h3>'));
   });
 });

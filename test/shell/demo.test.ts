@@ -91,9 +91,10 @@ describe('netbrace demo', () => {
     // the terminal report printed for change 1
     const one = stdout.slice(stdout.indexOf('Change 1 of 3'), stdout.indexOf('Change 2 of 3'));
     expect(one).toContain('$ netbrace check --base main --head change/1-retire-east-chord --json');
-    expect(one).toMatch(/\u2717 designs\/lunmere-backbone\.net\.yaml \u2014 FAIL/);
-    expect(one).toMatch(/4 new bridges \(links whose loss alone splits the design\)/);
-    expect(one).toContain('Weakest removal sequences');
+    expect(one).toContain('\u25A0 netbrace blocks this merge: 1 design weakened');
+    expect(one).toMatch(/\u25A0 designs\/lunmere-backbone\.net\.yaml \u2014 weakened \u00b7 4 new bridges, 4 new cut nodes/);
+    expect(one).toContain('\u25A0 new bridge (line 298): Link tessaway-kaskeld (line 298) is a new bridge');
+    expect(one).toContain('weakest removal sequences:');
     expect(one.replace(/\s+/g, ' ')).toContain(`Caution: ${CAUTION}`);
   });
 
@@ -111,6 +112,19 @@ describe('netbrace demo', () => {
     const warns = f.findings.filter((x) => x.severity === 'warn');
     expect(warns.map((x) => [x.rule, x.elements.map((e) => e.id)])).toEqual([['new-cut-node', ['gantrevel']]]);
     expect(f.findings.filter((x) => x.rule === 'new-bridge')).toEqual([]);
+  });
+
+  it('prints for change 1 exactly the terminal lines the README shows', () => {
+    const readme = readFileSync(path.join(repoRoot, 'README.md'), 'utf8');
+    const start = readme.indexOf('here for the demo\'s first change');
+    const open = readme.indexOf('```text\n', start) + '```text\n'.length;
+    const shown = readme.slice(open, readme.indexOf('  ```', open)).split('\n').map((l) => l.replace(/^ {2}/, ''));
+    const text = readFileSync(path.join(out, '1-retire-east-chord.txt'), 'utf8');
+    // The README leaves parts out with a line "…": each run of lines between them is printed as it stands.
+    const runs = shown.join('\n').split(/\n\s*\u2026\n/).map((r) => r.replace(/\n+$/, ''));
+    expect(runs.length).toBeGreaterThan(2);
+    expect(text.startsWith(runs[0])).toBe(true);
+    for (const r of runs) expect(text).toContain(r);
   });
 
   it('the PR comment of each change stays under 6,000 characters, verdict first and consequences before numbers', () => {
@@ -148,7 +162,7 @@ describe('netbrace demo', () => {
       expect(html).toContain('<svg');
       expect(html).not.toMatch(/<script/i);
       const text = readFileSync(path.join(out, `${c.id}.txt`), 'utf8');
-      expect(text).toContain('Verdict:');
+      expect(text).toMatch(/^(\u25A0 netbrace blocks this merge: |\u25A1 netbrace: no design )/);
       expect(text).not.toMatch(/\u001b\[/);
     }
   });

@@ -1,4 +1,4 @@
-// `netbrace check`: the gate on the command line. Finds the design files that changed between
+// `netbrace check`: the robustness check on the command line. Finds the design files that changed between
 // two revisions (or takes the given paths), evaluates both sides under the policy, prints the
 // verdict and writes the report files. The same runGate the GitHub Action calls.
 
@@ -44,7 +44,7 @@ Policy:
 Evaluation:
   --seed S               seed of the random challenges (default: the policy's)
   --threads N            worker threads (results do not depend on N)
-  --mode MODE            block (default): exit 1 when the gate fails; inform: exit 0
+  --mode MODE            block (default): exit 1 when the check fails; inform: exit 0
   --part K/N             judge only slice K of N of the designs (by path hash)
 
 Output:
@@ -64,7 +64,7 @@ netbrace informs engineering judgement; it does not replace engineering studies.
 
 Exit codes:
   0  pass (or nothing to judge, or --mode inform)
-  1  the gate failed: a requirement was broken or a design could not be read
+  1  the check failed: a design weakened or fell short of a floor, or could not be read
   2  usage or configuration error (bad option, broken policy); nothing was evaluated;
      or a report file (--json, --summary, --html, --sarif) could not be written, after
      the verdict was printed
@@ -246,7 +246,7 @@ async function run(args: string[], io: CommandIO): Promise<number> {
 
 export const checkCommand: Command = {
   name: 'check',
-  summary: 'judge the designs a change touches against the policy (the gate)',
+  summary: 'judge the designs a change touches against the policy',
   help: HELP,
   run,
 };

@@ -1,4 +1,4 @@
-// `netbrace demo [--out DIR]`: the whole gate on the invented scenario in fixtures/demo/.
+// `netbrace demo [--out DIR]`: the whole check on the invented scenario in fixtures/demo/.
 // Builds a scratch git repository, commits the base design and the policy, commits each
 // proposed change on its own branch, runs `netbrace check` on each exactly as a user would
 // (the same command through the same runCommand), prints the terminal report, and writes the
@@ -184,7 +184,7 @@ function summaryLines(outcomes: DemoOutcome[]): string[] {
 
 const HELP = `Usage: netbrace demo [--out DIR] [--keep]
 
-Runs the whole gate on an invented example: the Lunmere Basin backbone of Tidewater
+Runs the whole check on an invented example: the Lunmere Basin backbone of Tidewater
 Lantern Networks (50 sites, 82 links, 8 shared ducts, 47 traffic demands; every name and
 number is made up). The demo builds a scratch git repository, commits the base design and
 the policy (.netbrace.yaml), commits three proposed changes on their own branches, and runs
@@ -214,7 +214,7 @@ Exit codes:
 
 export const demoCommand: Command = {
   name: 'demo',
-  summary: 'run the gate on an invented backbone and three proposed changes; write all reports',
+  summary: 'run the check on an invented backbone and three proposed changes; write all reports',
   help: HELP,
   async run(args: string[], io: CommandIO): Promise<number> {
     const parsed = parseCommandArgs('demo', args, { out: { type: 'string' }, keep: { type: 'boolean' } }, false);

@@ -36,11 +36,11 @@ for a random challenge the envelope (min, max, mean, quantile band with confiden
 intervals, area, spread, the three weakest realizations), for a targeted attack its curve at
 every removal step and its removal sequence, for n-1 / n-2 the worst cases.
 
-The policy is the gate's: --policy FILE, else ${DEFAULT_POLICY_PATH} at the root of the git
+The policy is check's: --policy FILE, else ${DEFAULT_POLICY_PATH} at the root of the git
 repository that holds the working directory (outside git: in the working directory), else
 the built-in policy. Its r-value, seed and work budget for FILE apply unless --metric /
 --score, --seed or --max-work say otherwise, and NAME may be a challenge the policy defines
-(e.g. node-failures), run with the gate's parameters; the options below change them.
+(e.g. node-failures), run with the parameters "check" gives it; the options below change them.
 
 Challenges (besides the policy's):
 ${CHALLENGE_LIST}
@@ -54,7 +54,7 @@ Options:
   --realizations M     random realizations (default ${DEFAULTS.realizations}); regional uses every epicentre
   --seed S             seed of the random orders (default: the policy's); same seed, same result
   --until X            end of the x axis: a fraction of nodes/links/groups (default ${DEFAULTS.until}),
-                       or a radius in km for regional (default ${REGIONAL_UNTIL_KM} km, the gate's)
+                       or a radius in km for regional (default ${REGIONAL_UNTIL_KM} km, as in check)
   --points K           grid points on the x axis, 0 included (default ${DEFAULTS.points})
   --band LO,HI         quantiles of the band (default ${DEFAULTS.band.join(',')})
   --worst-case K       also search the weakest removal sequence of length K (exact for K ≤ 2)

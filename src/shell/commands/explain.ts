@@ -301,7 +301,7 @@ The planner's to-do list: removes every site, every link and every shared-risk g
 by the R they leave, worst first. Each row gives the element's line in FILE, the R it
 leaves, the drop from the intact R, and the sites it cuts off from the largest part.
 
-The policy is the gate's: --policy FILE, else ${DEFAULT_POLICY_PATH} at the root of the git
+The policy is check's: --policy FILE, else ${DEFAULT_POLICY_PATH} at the root of the git
 repository that holds the working directory (outside git: in the working directory), else
 the built-in policy. R is the --metric options (equal weights), else the policy's r-value for
 FILE. The work is held to the policy's budget for FILE (or --max-work): on a design too big
