@@ -35,7 +35,7 @@ export interface ActionDeps {
   /** Every git command of the Action goes through here (argument arrays, never a shell). */
   git(args: string[], cwd: string): Promise<GitResult>;
   github(options: ClientOptions): Client;
-  renderHtml?(report: Report): string;
+  renderHtml?(report: Report, options?: { readmeUrl?: string }): string;
   out: ActionOutput;
 }
 

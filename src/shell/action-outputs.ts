@@ -60,7 +60,7 @@ export interface Artifacts {
 }
 
 /** The JSON report (every job), SARIF and HTML (not a part job: the join job writes those). */
-export function writeArtifacts(deps: ActionDeps, workspace: string, inputs: ActionInputs, report: Report, partJob: boolean): Artifacts {
+export function writeArtifacts(deps: ActionDeps, workspace: string, inputs: ActionInputs, report: Report, partJob: boolean, readme?: string): Artifacts {
   const written: string[] = [];
   const write = (input: string, given: string, text: string): string => {
     const full = prepareWrite(workspace, workspace, given, input);
@@ -74,7 +74,7 @@ export function writeArtifacts(deps: ActionDeps, workspace: string, inputs: Acti
   let htmlPath = '';
   if (!partJob) {
     if (inputs.sarif) sarifPath = write('sarif', inputs.sarif, `${JSON.stringify(renderSarif(report, { category: inputs.sarifCategory }), null, 2)}\n`);
-    if (inputs.html && deps.renderHtml) htmlPath = write('html', inputs.html, deps.renderHtml(report));
+    if (inputs.html && deps.renderHtml) htmlPath = write('html', inputs.html, deps.renderHtml(report, readme ? { readmeUrl: readme } : {}));
   }
   return { written, report: reportPath, sarif: sarifPath, html: htmlPath };
 }

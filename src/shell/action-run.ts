@@ -124,7 +124,7 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     }
 
     const partJob = Boolean(inputs.part);
-    const files = writeArtifacts(deps, workspace, inputs, report, partJob);
+    const files = writeArtifacts(deps, workspace, inputs, report, partJob, readmeUrl(env));
     if (!partJob) annotate(deps, report, lines, files.sarif);
 
     // The comment, then the summary (which mentions what happened to the comment).
