@@ -4,7 +4,7 @@
 import type { ChallengeName } from '../challenges/types.js';
 import type { ElementKind } from '../graph/element.js';
 import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, Report, RequirementResult } from './report.js';
-import { FILE_STATUS_WORD } from './vocabulary.js';
+import { FILE_STATUS_WORD, JUDGED_TITLE } from './vocabulary.js';
 import { formatDelta, formatValue } from './format.js';
 import { plainSentence, policyChangeSentence } from './story.js';
 
@@ -250,9 +250,8 @@ export function findingTitle(x: Finding, names: Readonly<Record<Finding['rule'],
   const kind = x.rule === 'n-1' ? n1Kind(x) : undefined;
   switch (x.status) {
     case 'within-allowance':
-      return 'robustness dropped within the allowance';
     case 'inside-error':
-      return 'change within Monte Carlo noise';
+      return JUDGED_TITLE[x.status];
     case 'unsettled':
       return x.rule === 'regression' ? 'change could not be judged' : `${subject ?? x.rule}${kind ?? ''} not settled`;
     case 'reduced-work':

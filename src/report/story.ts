@@ -8,7 +8,7 @@
 import { formatDelta, formatError, formatFixed, formatValueAt } from './format.js';
 import { rankFiles, SEVERITY_RANK } from './rank.js';
 import type { Consequence, FileReport, Finding, PolicyChange, Report, ReportElement, RequirementResult, Severity } from './report.js';
-import { FILE_STATUS_WORD, MARK, RULE_TITLE, fileFails, fileWarns, requirementMark } from './vocabulary.js';
+import { FILE_STATUS_WORD, MARK, fileFails, fileWarns, judgedTitle, requirementMark } from './vocabulary.js';
 
 /** text: our words or user text to escape; code: shown verbatim in monospace; id: an element's or requirement's id (monospace). */
 export type SegmentKind = 'text' | 'code' | 'id';
@@ -390,7 +390,7 @@ export function designStory(f: FileReport): DesignStory {
     if (isNumberFinding(x, f)) continue;
     // A weakest sequence that is only context is told with the other sequences (detail).
     if (x.rule === 'weakest-sequence' && x.severity === 'notice') continue;
-    const item: WeakenedItem = { severity: x.severity, rule: x.rule, title: RULE_TITLE[x.rule] ?? x.rule, line: x.line, elements: x.elements, sentence: itemSentence(x), finding: x };
+    const item: WeakenedItem = { severity: x.severity, rule: x.rule, title: judgedTitle(x), line: x.line, elements: x.elements, sentence: itemSentence(x), finding: x };
     (x.severity === 'notice' ? notices : items).push(item);
   }
   const order = items.map((x, i) => ({ x, i, w: weight(x.finding) }));

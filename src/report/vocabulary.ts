@@ -58,6 +58,20 @@ export const RULE_TITLE: Record<Finding['rule'], string> = {
   'not-computable': 'value not computable',
 };
 
+/** A finding's title when its judging status says more than its rule (a drop the policy allows). */
+export const JUDGED_TITLE = {
+  'within-allowance': 'robustness dropped within the allowance',
+  'inside-error': 'change inside the Monte Carlo error',
+} as const;
+
+/** The title of one finding: its judging status's where that is milder than the rule's. */
+export function judgedTitle(x: Pick<Finding, 'rule' | 'status' | 'severity'>): string {
+  if (x.status === 'within-allowance' || x.status === 'inside-error') return JUDGED_TITLE[x.status];
+  // A notice about a drop with no judging status weakened nothing.
+  if (x.status === undefined && x.rule === 'regression' && x.severity === 'notice') return 'robustness changed';
+  return RULE_TITLE[x.rule] ?? x.rule;
+}
+
 export const SEVERITY_WORD: Record<Severity, string> = { fail: 'failure', warn: 'warning', notice: 'notice' };
 
 /**

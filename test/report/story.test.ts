@@ -15,7 +15,7 @@ import {
   requirementLine,
   verdictStory,
 } from '../../src/report/story.js';
-import { RULE_TITLE, fileFails } from '../../src/report/vocabulary.js';
+import { RULE_TITLE, fileFails, judgedTitle } from '../../src/report/vocabulary.js';
 import { emptyReport, sampleReport } from './sample-report.js';
 
 const q10: RequirementResult = {
@@ -180,5 +180,14 @@ describe('shared vocabulary and formats', () => {
     expect(Object.keys(RULE_TITLE).length).toBe(15);
     expect(fileFails({ status: 'unreadable', findings: [] })).toBe(true);
     expect(fileFails({ status: 'holds', findings: [{ rule: 'degraded', severity: 'notice', message: 'm', elements: [], line: 0 }] })).toBe(false);
+  });
+});
+
+describe('a finding is titled by what its judging found', () => {
+  it('a drop the policy allows, or one inside the error, is never titled as a weakening', () => {
+    expect(judgedTitle({ rule: 'regression', severity: 'notice', status: 'within-allowance' })).toBe('robustness dropped within the allowance');
+    expect(judgedTitle({ rule: 'regression', severity: 'notice', status: 'inside-error' })).toBe('change inside the Monte Carlo error');
+    expect(judgedTitle({ rule: 'regression', severity: 'notice' })).toBe('robustness changed');
+    expect(judgedTitle({ rule: 'regression', severity: 'fail', status: 'weakened' })).toBe(RULE_TITLE.regression);
   });
 });

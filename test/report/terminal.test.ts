@@ -157,7 +157,7 @@ describe('renderTerminal', () => {
     expect(lines[i + 1]).toBe('    \u25A0 new bridge (line 14): Link c-d (line 14) is a new bridge; losing it splits the design.');
     expect(lines[i + 2]).toBe('    \u25B2 new bridge (line 10): Link a-b (line 10) is a new bridge; losing it splits the design.');
     expect(lines[i + 3]).toBe('    \u25B2 new bridge (line 12): Link b-c (line 12) is a new bridge; losing it splits the design.');
-    const n = lines.findIndex((l) => /^ {4}\u00b7 requirement weakened \(line 3\): [xX] x /.test(l));
+    const n = lines.findIndex((l) => /^ {4}\u00b7 robustness changed \(line 3\): [xX] x /.test(l));
     expect(n).toBeGreaterThan(lines.indexOf('  Detail'));
     expect(lines[n]).toMatch(/\u2026$/);
     expect(lines[n].length).toBeLessThanOrEqual(100);
