@@ -140,7 +140,7 @@ export function judgeSpof(
     const severity = r.hardenedWeakPoints;
     const raw = weakPoints(g, false);
     const rawBefore = weakPoints(b, false);
-    const claim = 'the change marks it hardened, so the gate does not count it; hardening is a claim the gate cannot check';
+    const claim = 'the change marks it hardened, so netbrace does not count it; hardening is a claim netbrace cannot verify';
     if (r.bridges) {
       for (const e of linksByLine(g, raw.bridges)) {
         if (now.bridges.has(e) || !isNew(raw.bridges, matching.linkToBase, e, rawBefore.bridges)) continue;
@@ -166,7 +166,7 @@ export function judgeSpof(
           if (newlyHardened(g.linkHardened, b.linkHardened, matching.linkToBase, g.groupLinks[p])) hidden = true;
         }
         if (!hidden) continue;
-        const message = `${groupWords(g, k, false)} would cut sites off if lost, but the change marks links of it hardened, so the gate does not count it; hardening is a claim the gate cannot check`;
+        const message = `${groupWords(g, k, false)} would cut sites off if lost, but the change marks links of it hardened, so netbrace does not count it; hardening is a claim netbrace cannot verify`;
         findings.push(finding('hardened-weak-point', severity, message, reportElement(g, 'group', k), r.id, groupCost(k, false)));
       }
     }

@@ -85,11 +85,11 @@ challenges:
     adaptive: true
     until: 0.2
 
-# Requirements; severity is fail (the gate fails), warn or notice.
+# Requirements; severity is fail (the check fails), warn or notice.
 requirements:
   # A change may not add a bridge, a cut node or a shared-risk group (a duct) whose loss cuts
   # sites off, that the base did not have. A new weak point hidden behind an element that the
-  # change marks hardened is a warning: hardening is a claim the gate cannot check.
+  # change marks hardened is a warning: hardening is a claim netbrace cannot verify.
   - kind: no-new-spof
     severity: fail
     hardened-weak-points: warn

@@ -357,7 +357,7 @@ export function groupFindings(findings: readonly Finding[]): GroupedFinding[] {
         ? 'new bridges (links whose loss alone splits the design)'
         : x.rule === 'new-cut-node'
           ? 'new cut nodes (sites whose loss alone splits the design)'
-          : 'new weak points hidden by hardening (the change marks them hardened; hardening is a claim the gate cannot check)';
+          : 'new weak points hidden by hardening (the change marks them hardened; hardening is a claim netbrace cannot verify)';
     x.message = `${x.elements.length} ${what}: ${x.elements.map((e) => formatElement(e, { space: '\u00a0' })).join(', ')}`;
     delete x.consequence;
   }

@@ -126,7 +126,7 @@ export function mendMarkdown(f: FileReport): string {
   const harden = m.suggestions.find((s) => s.kind === 'harden');
   const parts = [links ? suggestionWords(links) : 'no link suggestion', ...(harden ? [`or ${suggestionWords(harden)}`] : [])];
   return (
-    `**What would mend it**, each judged again by the same gate: ${parts.join('; ')}. ` +
+    `**What would mend it**, each judged again by the same check: ${parts.join('; ')}. ` +
     'The HTML report (or `netbrace mend`) has every suggestion, the YAML to add and the caution: a suggestion is a topology-level hint, not a route survey.\n\n'
   );
 }

@@ -82,7 +82,7 @@ const RULES: Record<RuleId, RuleText> = {
   'hardened-weak-point': {
     name: 'HardenedWeakPoint',
     short: 'A weak point the change hides by marking elements hardened',
-    full: 'Ignoring the hardened flags, the named element would be a new bridge, cut node or stranding shared-risk group. The change marks it (or its links) hardened, so the challenges never remove it; hardening is a claim in the design file that the gate cannot check.',
+    full: 'Ignoring the hardened flags, the named element would be a new bridge, cut node or stranding shared-risk group. The change marks it (or its links) hardened, so the challenges never remove it; hardening is a claim in the design file that netbrace cannot verify.',
     help: 'Make sure the element really is engineered not to fail (and reviewed as such), or restore the redundancy instead. The policy key hardened-weak-points sets how this is judged.',
   },
   regression: {
@@ -100,19 +100,19 @@ const RULES: Record<RuleId, RuleText> = {
   'parse-error': {
     name: 'ParseError',
     short: 'The design file could not be read',
-    full: 'The design file at head has a syntax or consistency error (for example a link naming an unknown site), so it could not be evaluated. This fails the gate.',
+    full: 'The design file at head has a syntax or consistency error (for example a link naming an unknown site), so it could not be evaluated. This fails the check.',
     help: 'Fix the file at the line and column given. The other design files were still evaluated.',
   },
   'removed-design': {
     name: 'RemovedDesign',
     short: 'A design file was removed',
-    full: 'A design file that exists at the base is deleted at head. It is reported, and fails the gate only if the policy says so.',
+    full: 'A design file that exists at the base is deleted at head. It is reported, and fails the check only if the policy says so.',
     help: 'Make sure removing the design is intended; the policy decides whether a removal needs a review.',
   },
   'policy-changed': {
     name: 'PolicyChanged',
     short: 'The change modifies the policy file',
-    full: 'The policy file differs between base and head. The gate applied the base policy, so a change cannot loosen the rules that judge it; the proposed policy applies after the merge.',
+    full: 'The policy file differs between base and head. netbrace applied the base policy, so a change cannot loosen the rules that judge it; the proposed policy applies after the merge.',
     help: 'Have the policy change reviewed on its own merits by the owners of the policy.',
   },
   degraded: {
@@ -123,8 +123,8 @@ const RULES: Record<RuleId, RuleText> = {
   },
   'not-computable': {
     name: 'NotComputable',
-    short: 'A value the gate needs could not be computed',
-    full: 'R, or a requirement\u2019s value, could not be computed on this design: a metric of R does not apply to it (demand_served on a design without demands, weighted_efficiency without link lengths or latencies), or the value came out NaN or infinite. A value that cannot be computed is never a pass, so this fails the gate.',
+    short: 'A value the check needs could not be computed',
+    full: 'R, or a requirement\u2019s value, could not be computed on this design: a metric of R does not apply to it (demand_served on a design without demands, weighted_efficiency without link lengths or latencies), or the value came out NaN or infinite. A value that cannot be computed is never a pass, so this fails the check.',
     help: 'Give the design what the metric needs (the message says what), or define R in the policy with metrics the design supports.',
   },
 };
