@@ -39,6 +39,20 @@ export function fnv1a32(text: string): number {
   return h >>> 0;
 }
 
+/**
+ * FNV-1a 32-bit over a text's UTF-16 code units, as a signed 32-bit integer: the spectral
+ * kernels' start and probe vectors are keyed by it (differs from fnv1a32 only beyond ASCII;
+ * kept so their values stay the same).
+ */
+export function fnv1a32CodeUnits(text: string): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < text.length; i++) {
+    h ^= text.charCodeAt(i);
+    h = Math.imul(h, 0x01000193);
+  }
+  return h | 0;
+}
+
 const FNV64_OFFSET = 0xcbf29ce484222325n;
 const FNV64_PRIME = 0x100000001b3n;
 const MASK64 = 0xffffffffffffffffn;

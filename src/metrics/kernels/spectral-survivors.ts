@@ -6,6 +6,7 @@
 import type { CompactGraph } from '../../graph/compact.js';
 import type { Mask } from '../../graph/mask.js';
 import { allocateLocalGraph, createSurvivorBuilder, inducedSubgraph, type LocalGraph } from './subgraph.js';
+import { fnv1a32CodeUnits } from '../../random.js';
 
 /** Default dense-size limits: extremal eigenvalues (a, λ₁) and whole-spectrum traces. */
 export const EXTREMAL_DENSE_LIMIT = 48;
@@ -28,7 +29,7 @@ export function createSpectralSurvivors(g: CompactGraph) {
   // Start and probe vectors are keyed by a hash of each node's id, not its index, so a
   // node keeps its random entries when a change renumbers the design (base vs head).
   const idKey = new Int32Array(g.n);
-  for (let i = 0; i < g.n; i++) idKey[i] = fnv1a(g.nodeIds[i] ?? String(i));
+  for (let i = 0; i < g.n; i++) idKey[i] = fnv1a32CodeUnits(g.nodeIds[i] ?? String(i));
   const keys = new Int32Array(g.n);
 
   return {
@@ -75,12 +76,3 @@ export function createSpectralSurvivors(g: CompactGraph) {
   };
 }
 
-/** 32-bit FNV-1a hash of a string (Fowler, Noll & Vo; common practice). */
-function fnv1a(s: string): number {
-  let h = 0x811c9dc5;
-  for (let i = 0; i < s.length; i++) {
-    h ^= s.charCodeAt(i);
-    h = Math.imul(h, 0x01000193);
-  }
-  return h | 0;
-}
