@@ -32,9 +32,15 @@ export function decodeValues(text: string, rows: number, points: number, name: s
   } catch {
     throw new UsageError(`${name} holds samples that are not base64`, 'pass the part reports as netbrace wrote them');
   }
-  if (binary.length !== rows * points * 8) throw new UsageError(`${name} holds ${binary.length / 8} sample values where ${rows * points} belong`, 'pass the part reports as netbrace wrote them');
+  if (binary.length !== rows * points * 8)
+    throw new UsageError(
+      `${name} holds ${binary.length / 8} sample values where ${rows * points} belong`,
+      'pass the part reports as netbrace wrote them',
+    );
   const view = new DataView(Uint8Array.from(binary, (c) => c.charCodeAt(0)).buffer);
-  return Array.from({ length: rows }, (_, r) => Float64Array.from({ length: points }, (_, j) => view.getFloat64((r * points + j) * 8, true)));
+  return Array.from({ length: rows }, (_, r) =>
+    Float64Array.from({ length: points }, (_, j) => view.getFloat64((r * points + j) * 8, true)),
+  );
 }
 
 export function sampleKey(path: string, side: 'head' | 'base', challenge: string, from: number, to: number): string {
@@ -52,20 +58,36 @@ export interface JoinInput {
 
 /** The part reports as a join input; a missing or repeated part is a UsageError naming it. */
 export function joinInput(reports: readonly Report[]): JoinInput {
-  if (reports.length === 0) throw new UsageError('there are no part reports to join', 'pass the JSON report of every part');
+  if (reports.length === 0)
+    throw new UsageError('there are no part reports to join', 'pass the JSON report of every part');
   const totals = new Set<number>();
   const seen = new Map<number, number>();
   reports.forEach((r, i) => {
-    if (!r.part) throw new UsageError(`report ${i + 1} is not a part report (it has no part k/n)`, 'join only the reports of "netbrace check --part K/N"');
+    if (!r.part)
+      throw new UsageError(
+        `report ${i + 1} is not a part report (it has no part k/n)`,
+        'join only the reports of "netbrace check --part K/N"',
+      );
     totals.add(r.part.total);
-    if (seen.has(r.part.index)) throw new UsageError(`part ${r.part.index}/${r.part.total} is given twice (reports ${seen.get(r.part.index)! + 1} and ${i + 1})`, 'pass each part once');
+    if (seen.has(r.part.index))
+      throw new UsageError(
+        `part ${r.part.index}/${r.part.total} is given twice (reports ${seen.get(r.part.index)! + 1} and ${i + 1})`,
+        'pass each part once',
+      );
     seen.set(r.part.index, i);
   });
-  if (totals.size > 1) throw new UsageError(`the part reports are of different splits (${[...totals].sort((a, b) => a - b).join(', ')} parts)`, 'join the parts of one run');
+  if (totals.size > 1)
+    throw new UsageError(
+      `the part reports are of different splits (${[...totals].sort((a, b) => a - b).join(', ')} parts)`,
+      'join the parts of one run',
+    );
   const total = [...totals][0];
   const missing = Array.from({ length: total }, (_, k) => k + 1).filter((k) => !seen.has(k));
   if (missing.length) {
-    throw new UsageError(`part ${missing.map((k) => `${k}/${total}`).join(', ')} ${missing.length === 1 ? 'is' : 'are'} missing`, 'pass the report of every part: each judges designs no other part judges');
+    throw new UsageError(
+      `part ${missing.map((k) => `${k}/${total}`).join(', ')} ${missing.length === 1 ? 'is' : 'are'} missing`,
+      'pass the report of every part: each judges designs no other part judges',
+    );
   }
   const files = new Map<string, Report['files'][number]>();
   const split = new Set<string>();
@@ -74,7 +96,12 @@ export function joinInput(reports: readonly Report[]): JoinInput {
     for (const f of r.files) if (!files.has(f.path)) files.set(f.path, f);
     for (const d of r.split ?? []) {
       split.add(d.path);
-      for (const s of d.samples) samples.set(sampleKey(d.path, s.side, s.challenge, s.from, s.to), { values: s.values, points: s.points, part: r.part!.index });
+      for (const s of d.samples)
+        samples.set(sampleKey(d.path, s.side, s.challenge, s.from, s.to), {
+          values: s.values,
+          points: s.points,
+          part: r.part!.index,
+        });
     }
   }
   return { total, files, split, samples, reports };

@@ -11,6 +11,10 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Report } from '../../src/report/report.js';
+import { serializeReport } from '../../src/report/report.js';
+import { runGate, type GateRequest } from '../../src/run-gate.js';
+import { joinInput } from '../../src/gate/split.js';
+import { memoryDeps } from '../gate/memory-repo.js';
 import { casesRoot, cleanupCases, runCase, type CaseRun } from './harness.js';
 import { partsVariants } from './parts-design.js';
 
@@ -26,7 +30,11 @@ afterAll(() => {
 const reportText = (run: CaseRun) => readFileSync(path.join(run.dir, '.out', 'report.json'), 'utf8');
 
 /** Run part k/n and keep its report (the case's folder is removed after the test). */
-async function part(k: number, n: number, extra: string[] = []): Promise<{ file: string; report: Report; summary: string }> {
+async function part(
+  k: number,
+  n: number,
+  extra: string[] = [],
+): Promise<{ file: string; report: Report; summary: string }> {
   const run = await runCase(CASE, ['--part', `${k}/${n}`, '--summary', '.out/summary.md', ...extra]);
   expect(run.code, run.out + run.err).toBe(0);
   const file = path.join(keep, `part-${k}-of-${n}.json`);
@@ -52,7 +60,12 @@ describe('one design split across parts', () => {
   it('2 parts: each runs its batches of the grid, the summary says so, and the join is the one run byte for byte', async () => {
     const v = partsVariants();
     const read = (side: string, file: string) => readFileSync(path.join(casesRoot, CASE, side, file), 'utf8');
-    expect([read('base', GRID), read('head', GRID), read('base', RING), read('head', RING)]).toEqual([v.gridBase, v.gridHead, v.ringBase, v.ringHead]);
+    expect([read('base', GRID), read('head', GRID), read('base', RING), read('head', RING)]).toEqual([
+      v.gridBase,
+      v.gridHead,
+      v.ringBase,
+      v.ringHead,
+    ]);
     const env = wholeReport.files.find((f) => f.path === GRID)!.head!.envelopes[0];
     expect(env.maxRealizations).toBeGreaterThan(env.realizations);
     expect(wholeReport.split).toBeUndefined();
@@ -63,7 +76,9 @@ describe('one design split across parts', () => {
       // Batch b (realizations 32b … 32b + 31) belongs to part b mod 2 + 1.
       for (const s of share.samples) expect(Math.floor(s.from / 32) % 2).toBe(k);
       expect(new Set(share.samples.map((s) => s.side))).toEqual(new Set(['head', 'base']));
-      expect(p.summary).toMatch(/`networks\/grid\.csv` is split across the parts: this part ran realizations [0-9–, ]+ of \d+, and the join judges it/);
+      expect(p.summary).toMatch(
+        /`networks\/grid\.csv` is split across the parts: this part ran realizations [0-9–, ]+ of \d+, and the join judges it/,
+      );
     }
     // The ring is judged whole, by exactly one part.
     expect([p1, p2].filter((p) => p.report.files.some((f) => f.path === RING))).toHaveLength(1);
@@ -73,7 +88,11 @@ describe('one design split across parts', () => {
   }, 120_000);
 
   it('3 parts on 2 threads, joined on 1 (and in another order): the one run byte for byte', async () => {
-    const parts = [await part(1, 3, ['--threads', '2']), await part(2, 3, ['--threads', '2']), await part(3, 3, ['--threads', '2'])];
+    const parts = [
+      await part(1, 3, ['--threads', '2']),
+      await part(2, 3, ['--threads', '2']),
+      await part(3, 3, ['--threads', '2']),
+    ];
     const joined = await runCase(CASE, ['--threads', '1', ...joinArgs([parts[2].file, parts[0].file, parts[1].file])]);
     expect(joined.code, joined.out + joined.err).toBe(0);
     expect(reportText(joined)).toBe(whole);
@@ -82,9 +101,42 @@ describe('one design split across parts', () => {
   }, 180_000);
 
   it('a missing part is an error of the join that names it, and nothing is judged', async () => {
-    const run = await runCase(CASE, joinArgs([path.join(keep, 'part-1-of-3.json'), path.join(keep, 'part-3-of-3.json')]));
+    const run = await runCase(
+      CASE,
+      joinArgs([path.join(keep, 'part-1-of-3.json'), path.join(keep, 'part-3-of-3.json')]),
+    );
     expect(run.code).toBe(2);
     expect(run.err).toContain('part 2/3 is missing');
     expect(run.report).toBeNull();
   }, 60_000);
+});
+
+// The fixed-sample path (every realization the budget allows, no stopping rule): the command
+// line has no switch for it, so through runGate with `sequential: false`.
+describe('one design split across parts, fixed sample', () => {
+  it('2 parts joined give the one run byte for byte, and the samples hold every realization', async () => {
+    const v = partsVariants();
+    const policy = readFileSync(path.join(casesRoot, CASE, 'base', '.netbrace.yaml'), 'utf8');
+    const deps = memoryDeps({
+      base: { '.netbrace.yaml': policy, [GRID]: v.gridBase },
+      head: { '.netbrace.yaml': policy, [GRID]: v.gridHead },
+    });
+    const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block', sequential: false };
+    const one = await runGate(request, deps);
+    const env = one.report.files[0].head!.envelopes[0];
+    expect(env.maxRealizations).toBeUndefined();
+    const parts = [
+      await runGate({ ...request, part: { index: 1, total: 2 } }, deps),
+      await runGate({ ...request, part: { index: 2, total: 2 } }, deps),
+    ];
+    const held = parts.flatMap((p) =>
+      p.report.split![0].samples.filter((s) => s.side === 'head').map((s) => s.to - s.from),
+    );
+    expect(held.reduce((a, b) => a + b, 0)).toBe(env.realizations);
+    // Through JSON, as the reports travel.
+    const reports = parts.map((p) => JSON.parse(serializeReport(p.report)) as Report);
+    const joined = await runGate({ ...request, join: joinInput(reports) }, deps);
+    expect(serializeReport(joined.report)).toBe(serializeReport(one.report));
+    expect(joined.exitCode).toBe(one.exitCode);
+  }, 120_000);
 });
