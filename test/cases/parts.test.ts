@@ -9,6 +9,7 @@
 import { copyFileSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { Ajv } from 'ajv';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Report } from '../../src/report/report.js';
 import { serializeReport } from '../../src/report/report.js';
@@ -80,6 +81,13 @@ describe('one design split across parts', () => {
         /`networks\/grid\.csv` is split across the parts: this part ran realizations [0-9–, ]+ of \d+, and the join judges it/,
       );
     }
+    // The part reports, `split` included, are reports of the published schema.
+    const validate = new Ajv({ allErrors: true, strict: false }).compile(
+      JSON.parse(
+        readFileSync(path.join(import.meta.dirname, '..', '..', 'src', 'report', 'report.schema.json'), 'utf8'),
+      ),
+    );
+    for (const p of [p1, p2]) expect(validate(p.report), JSON.stringify(validate.errors)).toBe(true);
     // The ring is judged whole, by exactly one part.
     expect([p1, p2].filter((p) => p.report.files.some((f) => f.path === RING))).toHaveLength(1);
     const joined = await runCase(CASE, joinArgs([p1.file, p2.file]));
