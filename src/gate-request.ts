@@ -24,6 +24,9 @@ import type { DesignSide } from './gate/compare.js';
 import type { FilePolicy } from './policy/types.js';
 import type { Report } from './report/report.js';
 import type { Topology } from './topology/model.js';
+import { UsageError } from './errors.js';
+import { batchOwner, decodeValues, encodeValues, sampleKey, type JoinInput } from './gate/split.js';
+import type { SplitDesign } from './report/report.js';
 
 /** A revision as git names it, or "worktree" for the files on disk. */
 export type Revision = string;
@@ -87,6 +90,12 @@ export interface GateRequest {
    * at once (false); left out: by the design's size (SEQUENTIAL_MIN_WORK).
    */
   sequential?: boolean;
+  /**
+   * Join part reports instead of evaluating every design (gate/split.ts): files the parts
+   * judged whole are taken as they are; designs split across the parts are judged here from
+   * the parts' samples, with the same code a single run uses. Excludes `part`.
+   */
+  join?: JoinInput;
   /** Draw each design's map (default true), and search what would mend a design: when it fails (default), always, or never. */
   map?: boolean;
   mend?: 'failing' | 'always' | 'never';
@@ -185,11 +194,92 @@ export async function evaluateGraph(
  */
 export const SEQUENTIAL_MIN_WORK = 1e9;
 
+/** The larger side's work estimate, unreduced by the budget. */
+function unreducedWork(specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): number {
+  const work = (g: CompactGraph) => specs.reduce((s, spec) => s + planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work, 0);
+  return Math.max(work(head), base ? work(base) : 0);
+}
+
 /** Whether a design runs in batches under the sequential stopping rule (request.sequential overrides). */
 export function sequentialRun(request: GateRequest, specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): boolean {
   if (request.sequential !== undefined) return request.sequential;
-  const work = (g: CompactGraph) => specs.reduce((s, spec) => s + planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work, 0);
-  return Math.max(work(head), base ? work(base) : 0) > SEQUENTIAL_MIN_WORK;
+  return unreducedWork(specs, head, base) > SEQUENTIAL_MIN_WORK;
+}
+
+/**
+ * Whether a design's realizations are split across the parts of a run: with more than one
+ * part, when its unreduced work estimate exceeds SEQUENTIAL_MIN_WORK (the designs that run in
+ * batches: a minute-scale evaluation, where a part's time matters) and its bands run more than
+ * one batch. Smaller designs stay whole, in the part their path hashes to: splitting costs
+ * every part a parse, and parts cannot stop early (none sees the others' samples).
+ */
+export function splitAcrossParts(total: number, specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): boolean {
+  if (total < 2) return false;
+  const most = Math.max(0, ...[head, ...(base ? [base] : [])].flatMap((g) => specs.map((spec) => stagedMaximum(stageEvaluation(g, spec)))));
+  return most > BATCH && unreducedWork(specs, head, base) > SEQUENTIAL_MIN_WORK;
+}
+
+type RunTasks = NonNullable<GateDeps['runTasks']>;
+
+function localTasks(g: CompactGraph, plan: EvaluationPlan, tasks: Task[]): TaskResult[] {
+  return tasks.map((t) => runTask(g, plan, t));
+}
+
+/** A part's share of a split design: the band tasks of the batches it owns, on each side evaluated. */
+export async function splitShare(
+  path: string,
+  part: { index: number; total: number },
+  sides: { side: 'head' | 'base'; graph: CompactGraph; specs: EvaluationSpec[] }[],
+  request: GateRequest,
+  deps: GateDeps,
+): Promise<SplitDesign> {
+  const run: RunTasks = deps.runTasks ?? localTasks;
+  const out: SplitDesign = { path, realizations: 0, samples: [] };
+  for (const { side, graph, specs } of sides) {
+    for (const spec of specs) {
+      const st = stageEvaluation(graph, spec);
+      out.realizations = Math.max(out.realizations, stagedMaximum(st));
+      const mine = st.tasks.filter((t): t is Extract<Task, { type: 'band' }> => t.type === 'band' && batchOwner(t.from, part.total) === part.index);
+      if (mine.length === 0) continue;
+      const results = await run(graph, st.plan, mine, request.threads);
+      mine.forEach((t, k) => {
+        const res = results[k];
+        if (res.type !== 'band') throw new TypeError('a band task returned another result');
+        const points = res.values.length ? res.values[0].length : 0;
+        out.samples.push({ side, challenge: st.plan.items[t.item].params.challenge, from: t.from, to: t.to, points, values: encodeValues(res.values) });
+      });
+    }
+  }
+  return out;
+}
+
+/**
+ * The engine of a join for one split design: its band tasks on head and base are answered from
+ * the parts' samples (a task no part holds names the part that should have run it); every other
+ * task, and every other graph (mended designs), runs as in a single run.
+ */
+export function servedTasks(join: JoinInput, path: string, head: CompactGraph, base: CompactGraph | undefined, deps: GateDeps): RunTasks {
+  const run: RunTasks = deps.runTasks ?? localTasks;
+  return async (g, plan, tasks, threads) => {
+    const side = g === head ? 'head' : base !== undefined && g === base ? 'base' : undefined;
+    if (side === undefined) return run(g, plan, tasks, threads);
+    const out: (TaskResult | undefined)[] = tasks.map((t) => {
+      if (t.type !== 'band') return undefined;
+      const found = join.samples.get(sampleKey(path, side, plan.items[t.item].params.challenge, t.from, t.to));
+      if (!found) {
+        const owner = batchOwner(t.from, join.total);
+        throw new UsageError(
+          `part ${owner}/${join.total} holds no realizations ${t.from + 1}–${t.to} of ${path} (${side})`,
+          'join the part reports of one run: the same revisions, policy and seed',
+        );
+      }
+      return { type: 'band', values: decodeValues(found.values, t.to - t.from, found.points, `part ${found.part}/${join.total}`) };
+    });
+    const rest = tasks.filter((_t, i) => out[i] === undefined);
+    const computed = rest.length ? await run(g, plan, rest, threads) : [];
+    let k = 0;
+    return out.map((r) => r ?? computed[k++]);
+  };
 }
 
 /**

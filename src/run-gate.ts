@@ -28,11 +28,11 @@ import { policyChanges } from './policy/compare.js';
 import { BUILTIN_POLICY_NAME, DEFAULT_DESIGN_GLOBS, DEFAULT_POLICY_PATH } from './policy/defaults.js';
 import { builtinPolicy, designFormat, designNeedsHeader, globsMatch, isDesignPath, isDesignText, loadPolicy, policyForFile } from './policy/resolve.js';
 import type { FilePolicy, Policy } from './policy/types.js';
-import { DESIGN_WARNINGS_KEPT, type FileReport, type Report } from './report/report.js';
+import { DESIGN_WARNINGS_KEPT, type FileReport, type Report, type SplitDesign } from './report/report.js';
 import type { DesignFormat } from './topology/model.js';
 import { addMapAndMend } from './map-mend-step.js';
 import { fnv1a32 } from './random.js';
-import { evaluateGraph, evaluateSequentially, evaluationSpecs, sequentialRun, type ChangedFile, type GateDeps, type GateRequest, type GateResult, type Revision } from './gate-request.js';
+import { evaluateGraph, evaluateSequentially, evaluationSpecs, sequentialRun, servedTasks, splitAcrossParts, splitShare, type ChangedFile, type GateDeps, type GateRequest, type GateResult, type Revision } from './gate-request.js';
 
 export type { ChangedFile, GateDeps, GateRequest, GateResult, Revision };
 import { parseDesign } from './topology/parse.js';
@@ -44,6 +44,17 @@ export { joinReports } from './gate/join.js';
 /** Whether a path belongs to part `index` (1-based) of `total`. */
 export function inPart(path: string, part: { index: number; total: number }): boolean {
   return fnv1a32(path) % part.total === part.index - 1;
+}
+
+/** The part reports were made by runs of this one: the same revisions and seed. */
+function checkJoin(join: NonNullable<GateRequest['join']>, base: Revision | undefined, head: Revision, seed: number): void {
+  for (const r of join.reports) {
+    const name = `part ${r.part!.index}/${r.part!.total}`;
+    if (r.head !== head || r.base !== base) {
+      throw new UsageError(`${name} judged ${r.base ?? '(no base)'} → ${r.head ?? '?'}, not ${base ?? '(no base)'} → ${head}`, 'join with the same --base and --head the parts ran with');
+    }
+    if (r.seed !== seed) throw new UsageError(`${name} ran with seed ${r.seed}, not ${seed}`, 'join with the seed the parts ran with');
+  }
 }
 
 /** Signals that the synchronous policy loader needs a file that has not been read yet. */
@@ -401,6 +412,7 @@ function validateRequest(request: GateRequest): void {
   if (request.policySource !== 'base' && request.policySource !== 'head') {
     throw new UsageError(`policy-source must be base or head, not ${String(request.policySource)}`);
   }
+  if (request.part && request.join) throw new UsageError('a join judges no part of its own', 'leave out --part when joining part reports');
   const s = request.part;
   if (s && !(Number.isInteger(s.index) && Number.isInteger(s.total) && s.total >= 1 && s.index >= 1 && s.index <= s.total)) {
     throw new UsageError(`part ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, 'e.g. 2/4 for the second of four parts');
@@ -421,20 +433,38 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
   const { policy, info } = await choosePolicy(request, deps, base, head);
   const { list: all, scope, note } = await candidates(request, deps, policy, base, head);
   if (note) info.note = info.note ? `${info.note}. ${note}` : note;
-  const chosen = [...all].sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0)).filter((c) => !request.part || inPart(c.path, request.part));
+  // A part keeps every design in view: one whose path hashes elsewhere may be large enough to be
+  // split across the parts (splitAcrossParts), and then this part runs its share of it.
+  const part = request.part && request.part.total > 1 ? request.part : undefined;
+  const sorted = [...all].sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
+  const chosen = sorted.filter((c) => !request.part || part !== undefined || inPart(c.path, request.part));
 
   // Every file's rules before any evaluation: configuration errors stop the run here.
   const rules = chosen.map((c) => policyForFile(policy, c.path));
   const seed = request.seed ?? policy.seed;
+  const join = request.join;
+  if (join) checkJoin(join, base, head, seed);
 
   const files: FileReport[] = [];
+  const split: SplitDesign[] = [];
   for (const [i, c] of chosen.entries()) {
     const fp = rules[i];
+    const home = !part || inPart(c.path, part);
+    const fromPart = join?.files.get(c.path);
+    if (fromPart) {
+      files.push(fromPart);
+      continue;
+    }
+    // Judged whole by its own part; here only when it turns out to be split.
+    const onlyIfSplit = !home || join !== undefined;
     const thresholdsOnly = base === undefined || scope === 'all';
     const input: CompareInput = { path: c.path, change: c.change, policy: fp, thresholdsOnly };
     if (c.previousPath !== undefined) input.previousPath = c.previousPath;
     if (fp.format) input.format = fp.format;
     let headWarnings: readonly Diagnostic[] = [];
+    let fileDeps = deps;
+    let share: SplitDesign | undefined;
+    let evaluated = false;
     if (c.change !== 'deleted') {
       const headText = await readSide(deps, head, c.path);
       if (headText === null) {
@@ -468,30 +498,54 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
           // the base keeps its own graph so that the renames are still listed.
           const oneEvaluation = same || (baseGraph !== undefined && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph)));
           const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, oneEvaluation ? undefined : baseGraph);
-          if (!deps.evaluate && sequentialRun(request, specs.head, h.graph, oneEvaluation ? undefined : baseGraph)) {
-            const sides = await evaluateSequentially(fp, { graph: h.graph, topology: h.topology }, oneEvaluation ? undefined : baseGraph && { graph: baseGraph, topology: baseTopology! }, specs, !thresholdsOnly && (same || baseGraph !== undefined), request, deps);
-            input.head = sides.head;
-            if (same) input.base = input.head;
-            else if (baseGraph) input.base = oneEvaluation ? { graph: baseGraph, topology: baseTopology!, result: input.head.result } : sides.base!;
-          } else {
-            input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, deps);
-            if (same) input.base = input.head;
-            else if (baseGraph) {
-              if (oneEvaluation) input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
-              else input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, deps);
+          const otherGraph = oneEvaluation ? undefined : baseGraph;
+          const isSplit = !deps.evaluate && splitAcrossParts(part?.total ?? join?.total ?? 1, specs.head, h.graph, otherGraph);
+          if (join && isSplit !== join.split.has(c.path)) {
+            throw new UsageError(
+              `${c.path} was ${isSplit ? 'not ' : ''}split across the parts, and would be ${isSplit ? '' : 'not '}here`,
+              'join the part reports of one run: the same revisions, policy, seed and netbrace version',
+            );
+          }
+          if (part && isSplit) {
+            const sides = [{ side: 'head' as const, graph: h.graph, specs: specs.head }, ...(otherGraph ? [{ side: 'base' as const, graph: otherGraph, specs: specs.base! }] : [])];
+            share = await splitShare(c.path, part, sides, request, deps);
+          } else if (!onlyIfSplit || isSplit) {
+            evaluated = true;
+            if (join && isSplit) fileDeps = { ...deps, runTasks: servedTasks(join, c.path, h.graph, otherGraph, deps) };
+            if (!fileDeps.evaluate && sequentialRun(request, specs.head, h.graph, otherGraph)) {
+              const sides = await evaluateSequentially(fp, { graph: h.graph, topology: h.topology }, otherGraph && { graph: otherGraph, topology: baseTopology! }, specs, !thresholdsOnly && (same || baseGraph !== undefined), request, fileDeps);
+              input.head = sides.head;
+              if (same) input.base = input.head;
+              else if (baseGraph) input.base = oneEvaluation ? { graph: baseGraph, topology: baseTopology!, result: input.head.result } : sides.base!;
+            } else {
+              input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, fileDeps);
+              if (same) input.base = input.head;
+              else if (baseGraph) {
+                if (oneEvaluation) input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
+                else input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, fileDeps);
+              }
             }
           }
         }
       }
     }
+    if (share) {
+      split.push(share);
+      continue;
+    }
+    if (onlyIfSplit && !evaluated) {
+      if (!join) continue;
+      throw new UsageError(`no part report judges ${c.path} (part ${(fnv1a32(c.path) % join.total) + 1}/${join.total} would)`, 'join the part reports of one run: the same revisions, policy and seed');
+    }
     const judged = compareDesign(input);
     if (headWarnings.length) {
       judged.warnings = headWarnings.slice(0, DESIGN_WARNINGS_KEPT).map((w) => ({ message: w.message, line: w.line, column: w.column, ...(w.hint ? { hint: w.hint } : {}) }));
     }
-    await addMapAndMend(judged, input, { request, deps, head, ...(base !== undefined ? { base } : {}), seed });
+    await addMapAndMend(judged, input, { request, deps: fileDeps, head, ...(base !== undefined ? { base } : {}), seed });
     files.push(judged);
   }
 
   const report = assembleReport({ mode: request.mode, policy: info, ...(base !== undefined ? { base } : {}), head, seed, ...(request.part ? { part: request.part } : {}), scope }, files);
+  if (split.length) report.split = split;
   return { report, exitCode: exitCodeOf(report) };
 }

@@ -28,6 +28,13 @@ export function upgradeReport(value: unknown, name = 'report'): Report {
 export function joinReports(reports: readonly unknown[]): Report {
   if (reports.length === 0) throw new UsageError('there are no reports to join', 'check the folder of part reports');
   const list = reports.map((r, i) => upgradeReport(r, `report ${i + 1}`));
+  const split = list.find((r) => r.split?.length);
+  if (split) {
+    throw new UsageError(
+      `${split.split![0].path} was split across the parts by realizations, and a join of reports alone cannot judge it`,
+      'join in a checkout with "netbrace check --join", which judges it from the parts\' samples',
+    );
+  }
   const first = list[0];
   const byPath = new Map<string, FileReport>();
   for (const r of list) for (const f of r.files) if (!byPath.has(f.path)) byPath.set(f.path, f);

@@ -15,6 +15,7 @@ import { escapeProse, markdownCode, markerValue, oneLine } from './escape.js';
 import { repoPath } from './finding-text.js';
 import { stableHash } from '../random.js';
 import { formatValue, shortRevision, utf8Length } from './format.js';
+import { rangesText } from '../gate/split.js';
 import { challengeLabel, configurationNotes, contingencyLabel, describeNotApplicable, kindPlural, knownElement, knownElements, weakestSequences, xAxisLabel } from './labels.js';
 import { changeMapMarkdown, mendMarkdown } from './mermaid-map.js';
 import type { FileReport, Report, ReportElement } from './report.js';
@@ -256,6 +257,9 @@ function header(report: Report, options: MarkdownOptions): string {
     text += `${n.weakens ? MARK.fail : MARK.notice} Settings: ${escapeProse(n.text, 600)}.\n\n`;
   }
   for (const n of options.notes ?? []) text += `${MARK.notice} Note: ${escapeProse(n, 500)}\n\n`;
+  for (const d of report.split ?? []) {
+    text += `${MARK.notice} ${markdownCode(d.path)} is split across the parts: this part ran realizations ${escapeProse(rangesText(d), 200)} of ${d.realizations}, and the join judges it.\n\n`;
+  }
   if (report.files.length === 0) text += 'No design file changed between base and head, so there is nothing to judge.\n\n';
   return text;
 }

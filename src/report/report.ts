@@ -193,6 +193,11 @@ export interface Report {
   /** Set by joinReports: the parts joined into this report (1-based), out of `total`. */
   parts?: { total: number; joined: number[] };
   /**
+   * A part run's share of the designs split across the parts (gate/split.ts): the realizations
+   * it ran, for the join to judge them. Never in a whole run's or a joined report.
+   */
+  split?: SplitDesign[];
+  /**
    * The change edits the gate's own configuration: the workflow that runs netbrace (settings
    * compared with the base's; a weakening fails the check unless the base already allowed it).
    */
@@ -250,4 +255,12 @@ export function serializeReport(report: Report): string {
     },
     2,
   )}\n`;
+}
+
+/** One design split across parts: this part's band realizations, exact (float64 LE, base64). */
+export interface SplitDesign {
+  path: string;
+  /** Realizations of its largest band in all parts together. */
+  realizations: number;
+  samples: { side: 'head' | 'base'; challenge: string; from: number; to: number; points: number; values: string }[];
 }

@@ -5,6 +5,8 @@ import { lstatSync, readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import { isNetbraceError } from '../errors.js';
 import type { Report } from '../report/report.js';
+import { upgradeReport } from '../gate/join.js';
+import { joinInput, type JoinInput } from '../gate/split.js';
 import type { ActionDeps } from './action-deps.js';
 import { InputError } from './action-inputs.js';
 
@@ -64,4 +66,17 @@ export function joinPartReports(deps: ActionDeps, folder: string, given: string,
   }
   notes.push(`Joined from ${names.length} part report${names.length === 1 ? '' : 's'}.`);
   return { report };
+}
+
+/**
+ * When a part report holds a design split across the parts by realizations, the join judges
+ * that design itself (in the checkout, from the parts' samples: gate/split.ts), so the join job
+ * runs the gate with this input; undefined when every design was judged whole.
+ */
+export function splitJoinInput(folder: string): JoinInput | undefined {
+  const { reports, names } = readPartReports(folder);
+  // Any other report (a broken one included) is left to joinPartReports, which names its problem.
+  if (!reports.some((r) => r !== null && typeof r === 'object' && Array.isArray((r as { split?: unknown }).split))) return undefined;
+  const checked = reports.map((r, i) => upgradeReport(r, `part report ${path.basename(names[i])}`));
+  return checked.some((r) => r.split?.length) ? joinInput(checked) : undefined;
 }

@@ -19,7 +19,7 @@ import { postComment, trustedPullRequest } from './action-comment.js';
 import { FETCH_DEPTH_HINT, SHA_RE, designsAmong, ensureCommit, prFilesFallback, readTarget } from './action-event.js';
 import { InputError, readInputs } from './action-inputs.js';
 import { annotate, changedLines, emptyReport, readmeUrl, runUrl, setOutputs, writeArtifacts } from './action-outputs.js';
-import { joinPartReports } from './action-parts.js';
+import { joinPartReports, splitJoinInput } from './action-parts.js';
 import { applyBaseSettings, attachSettings, ownSettingChanges, type OwnSettings } from './action-settings.js';
 import { WorkspacePathError, resolveInWorkspace } from './workspace.js';
 
@@ -52,9 +52,11 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
 
     let report: Report;
     let lines = new Map<string, Set<number>>();
-    if (inputs.joinParts) {
-      const folder = resolveInWorkspace(workspace, workspace, inputs.joinParts, 'join-parts');
-      const joined = joinPartReports(deps, folder, inputs.joinParts, notes);
+    // Part reports of a design split by realizations are joined by the gate itself, in the checkout.
+    const joinFolder = inputs.joinParts ? resolveInWorkspace(workspace, workspace, inputs.joinParts, 'join-parts') : undefined;
+    const splitJoin = joinFolder !== undefined ? splitJoinInput(joinFolder) : undefined;
+    if (joinFolder !== undefined && !splitJoin) {
+      const joined = joinPartReports(deps, joinFolder, inputs.joinParts, notes);
       if ('failure' in joined) return fail(joined.failure, 2);
       report = joined.report;
     } else if (target.kind === 'nothing') {
@@ -111,8 +113,10 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
         ...(inputs.seed !== undefined ? { seed: inputs.seed } : {}),
         ...(inputs.threads !== undefined ? { threads: inputs.threads } : {}),
         ...(inputs.part ? { part: inputs.part } : {}),
+        ...(splitJoin ? { join: splitJoin } : {}),
         eventKind: kind,
       };
+      if (splitJoin) notes.push(`Joined from ${splitJoin.reports.length} part reports; designs split across the parts were judged here from their samples.`);
       if (paths && paths.length === 0) {
         report = emptyReport(inputs, target);
       } else {

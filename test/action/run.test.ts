@@ -404,4 +404,32 @@ describe('parts', () => {
     expect(out2.exitCode).toBe(2);
     expect(bad.rec.failed[0]).toMatch(/part report c\.json: .*not a netbrace report/);
   });
+
+  it('a design split across the parts is judged by the join job in its checkout, from the parts\u2019 samples', async () => {
+    const parts = path.join(dir, 'ws', 'parts');
+    mkdirSync(parts);
+    const reports = [1, 2].map((k) => {
+      const r = sampleReport();
+      r.files = k === 1 ? r.files.slice(0, 2) : r.files.slice(2);
+      r.part = { index: k, total: 2 };
+      r.split = [{ path: 'big.graphml', realizations: 64, samples: [{ side: 'head', challenge: 'random-nodes', from: (k - 1) * 32, to: k * 32, points: 0, values: '' }] }];
+      writeFileSync(path.join(parts, `part-${k}.json`), JSON.stringify(r));
+      return r;
+    });
+    const { d, rec } = deps(sampleReport());
+    await run(env({ 'INPUT_JOIN-PARTS': 'parts' }), d);
+    expect(rec.gateCalls).toHaveLength(1);
+    const join = rec.gateCalls[0].join!;
+    expect(join.total).toBe(2);
+    expect([...join.split]).toEqual(['big.graphml']);
+    expect([...join.files.keys()].sort()).toEqual(reports.flatMap((r) => r.files.map((f) => f.path)).sort());
+    expect(rec.gateCalls[0].part).toBeUndefined();
+    expect(rec.summary).toContain('judged here from their samples');
+    // Part 2 missing: the join names it and judges nothing.
+    rmSync(path.join(parts, 'part-2.json'));
+    const gap = deps(sampleReport());
+    expect((await run(env({ 'INPUT_JOIN-PARTS': 'parts' }), gap.d)).exitCode).toBe(2);
+    expect(gap.rec.gateCalls).toEqual([]);
+    expect(gap.rec.failed.join('\n')).toContain('part 2/2 is missing');
+  });
 });

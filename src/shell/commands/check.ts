@@ -2,7 +2,7 @@
 // two revisions (or takes the given paths), evaluates both sides under the policy, prints the
 // verdict and writes the report files. The same runGate the GitHub Action calls.
 
-import { mkdir, stat, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, readdir, stat, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { UsageError } from '../../errors.js';
 import { threadedGate } from '../../parallel/pool.js';
@@ -18,6 +18,8 @@ import type { Command, CommandIO } from '../io.js';
 import { readInside } from '../workspace.js';
 import { choice, parseCommandArgs, sharedOption } from '../args.js';
 import { MODE, PART, SEED, THREADS } from '../shared-options.js';
+import { upgradeReport } from '../../gate/join.js';
+import { joinInput } from '../../gate/split.js';
 
 const HELP = `Usage: netbrace check [options] [PATH...]
 
@@ -45,7 +47,10 @@ Evaluation:
   --seed S               seed of the random challenges (default: the policy's)
   --threads N            worker threads (results do not depend on N)
   --mode MODE            block (default): exit 1 when the check fails; inform: exit 0
-  --part K/N             judge only slice K of N of the designs (by path hash)
+  --part K/N             judge only slice K of N of the designs (by path hash); a large
+                         design is split by realizations across all N parts instead
+  --join REPORT          join part reports (files or folders of *.json; repeat the option)
+                         into the report of one run: give the options the parts ran with
 
 Output:
   --format FORMAT        text (default), markdown or json, on standard output
@@ -81,6 +86,7 @@ const OPTIONS = {
   threads: { type: 'string' },
   mode: { type: 'string' },
   part: { type: 'string' },
+  join: { type: 'string', multiple: true },
   format: { type: 'string' },
   json: { type: 'string' },
   summary: { type: 'string' },
@@ -109,6 +115,33 @@ async function revision(root: string, ref: string): Promise<string> {
   return sha;
 }
 
+/** The part reports named by --join (files, or the *.json files of folders), checked as reports. */
+async function readReports(given: string[], io: CommandIO): Promise<Report[]> {
+  const files: string[] = [];
+  for (const g of given) {
+    const full = path.resolve(io.cwd, g);
+    let isDir: boolean;
+    try {
+      isDir = (await stat(full)).isDirectory();
+    } catch {
+      throw new UsageError(`${g}: no such part report`, 'give the JSON reports the parts wrote (--json), or their folder');
+    }
+    if (!isDir) files.push(g);
+    else for (const name of (await readdir(full)).filter((n) => n.endsWith('.json')).sort()) files.push(path.join(g, name));
+  }
+  const reports: Report[] = [];
+  for (const f of files) {
+    let value: unknown;
+    try {
+      value = JSON.parse(await readFile(path.resolve(io.cwd, f), 'utf8'));
+    } catch {
+      throw new UsageError(`${f}: not a JSON report`, 'give the JSON reports the parts wrote (--json)');
+    }
+    reports.push(upgradeReport(value, f));
+  }
+  return reports;
+}
+
 /** Readers for designs outside any git repository: the files on disk, no base. */
 function plainDeps(cwd: string): Pick<GateDeps, 'listChanged' | 'readAt' | 'listAll'> {
   return {
@@ -132,6 +165,10 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
   if (threads !== undefined) request.threads = threads;
   const part = sharedOption('--part', v.part, PART, 'e.g. --part 2/4');
   if (part) request.part = part;
+  if (v.join !== undefined) {
+    if (part) throw new UsageError('--part and --join exclude each other', 'join in a job of its own, after every part');
+    request.join = joinInput(await readReports(v.join, io));
+  }
   const threaded = threadedGate(threads);
 
   const root = await repoRoot(io.cwd);
