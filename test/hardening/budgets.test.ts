@@ -8,11 +8,12 @@
 //
 // The expected counts below come from the documented estimate (evaluate.ts header): with a
 // union–find R, a band costs 2 graph passes per realization, an N−1 case one R pass, and a
-// pass visits N + L elements.
+// pass costs passCost(g) units (envelope/cost.ts).
 
 import { describe, expect, it } from 'vitest';
 import { evaluateDesign, MIN_REALIZATIONS, planEvaluation, type EvaluationSpec } from '../../src/envelope/evaluate.js';
 import { budgetWork } from '../../src/policy/budget.js';
+import { passCost } from '../../src/envelope/cost.js';
 import { compileTopology } from '../../src/graph/compact.js';
 import { planAnnotations } from '../../src/report/annotations.js';
 import { renderSummary } from '../../src/report/markdown.js';
@@ -26,7 +27,7 @@ import { reportCount } from './support.js';
 
 const MESH = gateFixture('removed-node/base.net.yaml'); // 11 sites, 17 links
 const g = compileTopology(parseDesign(MESH, 'mesh.net.yaml'));
-const VISITS = g.n + g.m;
+const VISITS = passCost(g);
 const R = { metrics: [{ id: 'largest_component' as const, weight: 1 }], combine: 'mean' as const };
 
 function spec(challenges: EvaluationSpec['challenges'], maxWork?: number): EvaluationSpec {
