@@ -26,13 +26,15 @@ import type { MetricId } from '../metrics/types.js';
 import type { RValueSpec } from './types.js';
 
 /** Units per node or adjacency entry a plain pass touches (a queue search, a scan, a build). */
-export const PLAIN_VISIT = 0.5;
+export const PLAIN_VISIT = 0.35;
 /** Units per node or entry a bit-parallel level sweep touches, per 32-bit word of sources. */
 export const WORD_VISIT = 0.18;
 /** Level sweeps of one batch per level of the first source's eccentricity (+1). */
 export const LEVELS_PER_ECCENTRICITY = 1;
 /** Fixed units of one evaluation of an all-pairs metric (scratch resets, histogram). */
 export const ALL_PAIRS_OVERHEAD = 2000;
+/** Plain passes of every evaluation's structure summary (components, bridges and cut nodes). */
+export const STRUCTURE_PASSES = 4;
 /** Sparse products of a spectral metric's iterative solver, each over every adjacency entry. */
 export const SPECTRAL_PRODUCTS = 50;
 

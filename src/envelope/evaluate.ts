@@ -9,12 +9,13 @@
 // Estimated work per challenge:
 //   band         M · (2 passes on the union–find path | Σ over the distinct grid steps of R on
 //                the survivors of the plan's first removal orders + 1 pass)
-//   attack       ranking (passes: degree 1–2, eigenvector 200; searches from every node:
+//   attack       ranking (passes: degree 1, adaptive 2 + log2 N, eigenvector 200; searches from every node:
 //                betweenness/closeness N, adaptive K·N; worst-first groups G(G+1)/2 · R) + curve
 //                (1 pass | R along the attack's own sequence for degree attacks, else along the
 //                design's degree order, sampled at ATTACK_SAMPLES steps)
 //   contingency  cases · R (intact)
 //   worst case   exact: C(E, k) (+E for k = 2) · R; greedy/beam: k · E · width · R (intact)
+// plus STRUCTURE_PASSES passes for the structure summary (fixed, not reduced).
 // When the estimate exceeds maxWork (default DEFAULT_MAX_WORK): first, exact worst-case
 // searches switch to greedy; if that is not enough, every band's realizations and every
 // contingency's cases are scaled by the same factor s = (maxWork − fixed work) / reducible
@@ -44,7 +45,7 @@ import {
   type TaskResult,
 } from './engine.js';
 import { contingencyTotal } from './contingency.js';
-import { passCost, rCost, survivorShape } from './cost.js';
+import { passCost, rCost, STRUCTURE_PASSES, survivorShape } from './cost.js';
 import { createMask } from '../graph/mask.js';
 import type { ElementKind } from '../graph/element.js';
 import { subsets } from './worst-case.js';
@@ -83,7 +84,8 @@ export const WEAKEST_KEPT = 3;
 /** Ranking work of an attack, in plain passes (`n`: searches from every node; `k`: steps). */
 const RANKING_PASSES: Partial<Record<ChallengeName, (n: number, k: number) => number>> = {
   degree: () => 1,
-  'degree-adaptive': () => 2,
+  // Bucket peeling with a heap per degree: O((N + L) log N).
+  'degree-adaptive': (n) => 2 + Math.log2(Math.max(2, n)),
   betweenness: (n) => n,
   'betweenness-adaptive': (n, k) => n * Math.max(1, k),
   eigenvector: () => 200,
@@ -166,7 +168,9 @@ export function planEvaluation(g: CompactGraph, spec: EvaluationSpec): Evaluatio
     const e = estimate(g, it, costs);
     return s + e.band + e.cases + e.fixed + e.worst;
   }, 0);
-  return { r: spec.r, items, degraded, ...(notApplicable.length ? { notApplicable } : {}), work };
+  // The structure summary every evaluation reports (components, bridges, cut nodes).
+  const structure = STRUCTURE_PASSES * costs.pass;
+  return { r: spec.r, items, degraded, ...(notApplicable.length ? { notApplicable } : {}), work: work + structure };
 }
 
 function note(it: PlannedChallenge, reason: string): void {
