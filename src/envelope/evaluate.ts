@@ -7,9 +7,10 @@
 // core of the machine the rates were measured on); cost.ts says what one evaluation of R costs
 // on a given survivor (rCost) and what one plain pass over the design costs (passCost).
 // Estimated work per challenge:
-//   band         M · (2 passes on the union–find path | Σ over the distinct grid steps of R on
-//                the survivors of the plan's first removal orders + 1 pass)
-//   attack       ranking (passes: degree 1, adaptive 2 + log2 N, eigenvector 200; searches from every node:
+//   band         M · (order + 1 pass on the union–find path | Σ over the distinct grid steps of
+//                R on the survivors of the plan's first removal orders + order), where order,
+//                the seeded removal order, costs log2(units)/2 passes (one pass for regional)
+//   attack       ranking (passes: degree 1, adaptive 2 + 5 log2 N, eigenvector 200; searches from every node:
 //                betweenness/closeness N, adaptive K·N; worst-first groups G(G+1)/2 · R) + curve
 //                (1 pass | R along the attack's own sequence for degree attacks, else along the
 //                design's degree order, sampled at ATTACK_SAMPLES steps)
@@ -45,7 +46,7 @@ import {
   type TaskResult,
 } from './engine.js';
 import { contingencyTotal } from './contingency.js';
-import { passCost, rCost, STRUCTURE_PASSES, survivorShape } from './cost.js';
+import { orderCost, passCost, rCost, STRUCTURE_PASSES, survivorShape } from './cost.js';
 import { createMask } from '../graph/mask.js';
 import type { ElementKind } from '../graph/element.js';
 import { subsets } from './worst-case.js';
@@ -84,8 +85,8 @@ export const WEAKEST_KEPT = 3;
 /** Ranking work of an attack, in plain passes (`n`: searches from every node; `k`: steps). */
 const RANKING_PASSES: Partial<Record<ChallengeName, (n: number, k: number) => number>> = {
   degree: () => 1,
-  // Bucket peeling with a heap per degree: O((N + L) log N).
-  'degree-adaptive': (n) => 2 + Math.log2(Math.max(2, n)),
+  // Bucket peeling with a heap per degree: O((N + L) log N), with a constant fitted to time.
+  'degree-adaptive': (n) => 2 + 5 * Math.log2(Math.max(2, n)),
   betweenness: (n) => n,
   'betweenness-adaptive': (n, k) => n * Math.max(1, k),
   eigenvector: () => 200,
@@ -283,7 +284,9 @@ function estimate(g: CompactGraph, it: PlannedChallenge, c: CostModel): Estimate
   if (it.type === 'band') {
     const m = p.challenge === 'regional' ? (p.epicentres ?? sitesWithCoordinates(g).length) : p.realizations;
     e.realizations = m;
-    e.band = m * (free ? 2 * c.pass : bandRealizationCost(c, p) + c.pass);
+    // Each realization draws its order, then takes R (one union–find pass on the free path).
+    const order = p.challenge === 'regional' ? c.pass : orderCost(g, unitCount(g, kind));
+    e.band = m * ((free ? c.pass : bandRealizationCost(c, p)) + order);
   } else if (it.type === 'attack') {
     const k = attackSteps(g, kind, p.until);
     const groups = g.groupIds.length;

@@ -6,7 +6,9 @@
 // small-world graph searched 256 sources at a time) fails here before it misleads a budget.
 // The counted operations are weighted with the same unit costs the estimate uses (PLAIN_VISIT,
 // WORD_VISIT), so the test checks which searches, levels and survivors the model predicts;
-// the unit costs themselves were fitted to time (cost.ts says on what).
+// the unit costs themselves were fitted to time (cost.ts says on what). Drawing removal orders
+// and the adaptive degree ranking are estimated from time and not counted, which the upper end
+// of the range leaves room for.
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -23,7 +25,7 @@ import { preferentialGraph, randomGraph } from './graphs.js';
 
 /** Estimate ÷ counted work must lie in this range on every family and challenge. */
 const LOW = 0.6;
-const HIGH = 1.7;
+const HIGH = 2;
 
 const counted = () => PLAIN_VISIT * kernelWork.visits + WORD_VISIT * kernelWork.wordVisits;
 const zoo = (name: string) => {
