@@ -25,12 +25,8 @@ import { getMetric } from '../metrics/registry.js';
 import type { MetricId } from '../metrics/types.js';
 import type { RValueSpec } from './types.js';
 
-/**
- * Units per node or adjacency entry a plain pass touches (a queue search, a scan, a build).
- * Measured 0.25–0.35 on rings and grids (neighbours close in memory) and about 0.7 on what an
- * adaptive degree attack leaves of a preferential-attachment graph: the middle is taken.
- */
-export const PLAIN_VISIT = 0.45;
+/** Units per node or adjacency entry a plain pass touches (a queue search, a scan, a build). */
+export const PLAIN_VISIT = 0.35;
 /** Units per node or entry a bit-parallel level sweep touches, per 32-bit word of sources. */
 export const WORD_VISIT = 0.18;
 /** Level sweeps of one batch per level of the first source's eccentricity (+1). */
