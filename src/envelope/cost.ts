@@ -17,7 +17,7 @@
 //   Barabási–Albert 250–4,000 nodes, G(n, L) 1,000/2,000, 32 × 32 grid, ring of 1,000, and the
 //   Topology Zoo's Kdl, Cogentco and Colt (Knight et al., IEEE JSAC 2011), intact and with a
 //   fifth of the sites removed. test/bench/budget.bench.ts prints estimate against time. The
-//   same machine idle runs the engine about 1.3–1.6× faster than under that load, so the
+//   same machine idle runs the engine about 2× faster than under that load, so the
 //   estimate reads high there; the weights sit between the two.
 
 import type { CompactGraph } from '../graph/compact.js';
