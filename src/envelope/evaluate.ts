@@ -3,13 +3,20 @@
 // Pure, synchronous and deterministic: the same graph and spec give byte-identical JSON, and
 // evaluateDesignParallel (src/parallel/) runs the very same tasks on worker threads.
 //
-// Work budget. The unit is one element visit; one "graph pass" visits N + L elements, and R
-// costs rPasses() passes per evaluation (r-value.ts). Estimated work per challenge:
-//   band         M · (2 passes on the union–find path | distinct grid steps · R passes + 1)
-//   attack       ranking passes (degree 1–2, betweenness/closeness N, adaptive betweenness K·N,
-//                eigenvector 200, worst-first groups G(G+1)/2 · R) + curve (1 | (K + 1) · R)
-//   contingency  cases · R passes
-//   worst case   exact: C(E, k) (+E for k = 2) · R; greedy/beam: k · E · width · R passes
+// Work budget. The unit is the budget's (policy/budget.ts: about 1/5e7 s of engine time on one
+// core of the machine the rates were measured on); cost.ts says what one evaluation of R costs
+// on a given survivor (rCost) and what one plain pass over the design costs (passCost).
+// Estimated work per challenge:
+//   band         M · (order + 1 pass on the union–find path | Σ over the distinct grid steps of
+//                R on the survivors of the plan's first removal orders + order), where order,
+//                the seeded removal order, costs log2(units)/2 passes (one pass for regional)
+//   attack       ranking (passes: degree 1, adaptive 2 + 5 log2 N, eigenvector 200; searches from every node:
+//                betweenness/closeness N, adaptive K·N; worst-first groups G(G+1)/2 · R) + curve
+//                (1 pass | R along the attack's own sequence for degree attacks, else along the
+//                design's degree order, sampled at ATTACK_SAMPLES steps)
+//   contingency  cases · R (intact)
+//   worst case   exact: C(E, k) (+E for k = 2) · R; greedy/beam: k · E · width · R (intact)
+// plus STRUCTURE_PASSES passes for the structure summary (fixed, not reduced).
 // When the estimate exceeds maxWork (default DEFAULT_MAX_WORK): first, exact worst-case
 // searches switch to greedy; if that is not enough, every band's realizations and every
 // contingency's cases are scaled by the same factor s = (maxWork − fixed work) / reducible
@@ -22,11 +29,10 @@ import { findComponents, findCutElements } from '../graph/structure.js';
 import type { Evaluation, StructureSummary } from './types.js';
 import { getChallenge, resolveParams } from '../challenges/registry.js';
 import { sitesWithCoordinates } from '../challenges/regional.js';
-import { countAt, countOnes, eligibleUnits, unitCount, unitIds, valueAtCount } from '../challenges/units.js';
-import { makeGrid } from '../challenges/grid.js';
+import { countAt, countOnes, eligibleUnits, removeUnit, unitCount, unitIds, valueAtCount } from '../challenges/units.js';
 import type { AttackCurve, Contingency, Envelope, RValueSpec, RemovalSequence, WorstCase } from './types.js';
 import type { ChallengeName, ChallengeParams } from '../challenges/types.js';
-import { rPasses, unionFindR, unsupportedMetric, UnsupportedMetricError, validateRSpec } from './r-value.js';
+import { unionFindR, unsupportedMetric, UnsupportedMetricError, validateRSpec } from './r-value.js';
 import {
   attackSteps,
   bandPlan,
@@ -40,6 +46,9 @@ import {
   type TaskResult,
 } from './engine.js';
 import { contingencyTotal } from './contingency.js';
+import { orderCost, passCost, rCost, STRUCTURE_PASSES, survivorShape } from './cost.js';
+import { createMask } from '../graph/mask.js';
+import type { ElementKind } from '../graph/element.js';
 import { subsets } from './worst-case.js';
 import { area, attackArea, attackGap, gridMean, gridStats, quantileKey, spread } from './summary.js';
 
@@ -64,7 +73,7 @@ export interface DesignEvaluation {
   sequential?: { needed: Map<string, number> };
 }
 
-/** Default work budget in element visits (see above); about a minute of engine time. */
+/** Work budget when a spec sets none (see above): 200 s at the budget's rate (policy/budget.ts). */
 export const DEFAULT_MAX_WORK = 1e10;
 /** Fewest realizations a budget may leave a band with. */
 export const MIN_REALIZATIONS = 10;
@@ -73,9 +82,11 @@ export const EXACT_LIMIT = 1_000_000;
 /** How many of the weakest realizations an envelope keeps. */
 export const WEAKEST_KEPT = 3;
 
+/** Ranking work of an attack, in plain passes (`n`: searches from every node; `k`: steps). */
 const RANKING_PASSES: Partial<Record<ChallengeName, (n: number, k: number) => number>> = {
   degree: () => 1,
-  'degree-adaptive': () => 2,
+  // Bucket peeling with a heap per degree: O((N + L) log N), with a constant fitted to time.
+  'degree-adaptive': (n) => 2 + 5 * Math.log2(Math.max(2, n)),
   betweenness: (n) => n,
   'betweenness-adaptive': (n, k) => n * Math.max(1, k),
   eigenvector: () => 200,
@@ -83,6 +94,11 @@ const RANKING_PASSES: Partial<Record<ChallengeName, (n: number, k: number) => nu
   'link-betweenness': (n) => n,
   'link-betweenness-adaptive': (n, k) => n * Math.max(1, k),
 };
+
+/** Steps of an attack curve at which R's cost is taken (the rest interpolated). */
+export const ATTACK_SAMPLES = 9;
+/** Removal orders of a band whose survivors are costed (their mean stands for every realization). */
+export const BAND_SAMPLES = 2;
 
 /** Resolves parameters, skips challenges the design cannot support, and applies the budget. */
 export function planEvaluation(g: CompactGraph, spec: EvaluationSpec): EvaluationPlan {
@@ -112,24 +128,22 @@ export function planEvaluation(g: CompactGraph, spec: EvaluationSpec): Evaluatio
   }
   const maxWork = spec.budget?.maxWork ?? DEFAULT_MAX_WORK;
   if (!(maxWork > 0)) throw new RangeError(`budget.maxWork must be > 0, got ${maxWork}`);
-  const visits = g.n + g.m;
-  const rp = rPasses(g, spec.r);
-  const free = unionFindR(g, spec.r) !== null;
-  const est = items.map((it) => estimate(g, it, rp, free));
-  const total = () => est.reduce((s, e) => s + e.band + e.cases + e.fixed + e.worst, 0) * visits;
+  const costs = costModel(g, spec.r);
+  const est = items.map((it) => estimate(g, it, costs));
+  const total = () => est.reduce((s, e) => s + e.band + e.cases + e.fixed + e.worst, 0);
 
   if (total() > maxWork) {
     items.forEach((it, i) => {
-      if (est[i].worstExact && est[i].worst * visits > maxWork / 4) {
+      if (est[i].worstExact && est[i].worst > maxWork / 4) {
         it.exactLimit = 0;
-        est[i] = estimate(g, it, rp, free);
+        est[i] = estimate(g, it, costs);
         note(it, `worst-case search greedy instead of exact (work budget ${maxWork})`);
       }
     });
   }
   if (total() > maxWork) {
-    const fixed = est.reduce((s, e) => s + e.fixed + e.worst, 0) * visits;
-    const reducible = est.reduce((s, e) => s + e.band + e.cases, 0) * visits;
+    const fixed = est.reduce((s, e) => s + e.fixed + e.worst, 0);
+    const reducible = est.reduce((s, e) => s + e.band + e.cases, 0);
     const scale = Math.max(0, maxWork - fixed) / reducible;
     items.forEach((it, i) => {
       if (it.type === 'band' && est[i].band > 0) {
@@ -152,10 +166,12 @@ export function planEvaluation(g: CompactGraph, spec: EvaluationSpec): Evaluatio
   }
   for (const it of items) if (it.degraded) degraded.push(`${it.params.challenge}: ${it.degraded}`);
   const work = items.reduce((s, it) => {
-    const e = estimate(g, it, rp, free);
+    const e = estimate(g, it, costs);
     return s + e.band + e.cases + e.fixed + e.worst;
   }, 0);
-  return { r: spec.r, items, degraded, ...(notApplicable.length ? { notApplicable } : {}), work: work * visits };
+  // The structure summary every evaluation reports (components, bridges, cut nodes).
+  const structure = STRUCTURE_PASSES * costs.pass;
+  return { r: spec.r, items, degraded, ...(notApplicable.length ? { notApplicable } : {}), work: work + structure };
 }
 
 function note(it: PlannedChallenge, reason: string): void {
@@ -172,35 +188,121 @@ interface Estimate {
   totalCases: number;
 }
 
-/** Work estimate of one challenge in graph passes (see the header). */
-function estimate(g: CompactGraph, it: PlannedChallenge, rp: number, free: boolean): Estimate {
+/** The costs an estimate is made of, for one graph and R (see cost.ts). */
+interface CostModel {
+  g: CompactGraph;
+  r: RValueSpec;
+  /** True when R follows from union–find curves (every step free). */
+  free: boolean;
+  /** One plain pass over the design. */
+  pass: number;
+  /** R on the intact design. */
+  intact: number;
+  /** R after the first k units of `order` are removed. */
+  along(kind: ElementKind, order: ArrayLike<number>, k: number): number;
+}
+
+/** Costs of R along removal orders, by graph and key; plans are asked for again and again. */
+const costCache = new WeakMap<CompactGraph, Map<string, number>>();
+
+function costModel(g: CompactGraph, r: RValueSpec): CostModel {
+  const mask = createMask(g);
+  return {
+    g,
+    r,
+    free: unionFindR(g, r) !== null,
+    pass: passCost(g),
+    intact: rCost(g, r, survivorShape(g)),
+    along(kind, order, k) {
+      mask.node.fill(0);
+      mask.link.fill(0);
+      for (let i = 0; i < k; i++) removeUnit(g, mask, kind, order[i]);
+      return rCost(g, r, survivorShape(g, mask));
+    },
+  };
+}
+
+function cached(g: CompactGraph, key: string, compute: () => number): number {
+  let byKey = costCache.get(g);
+  if (!byKey) costCache.set(g, (byKey = new Map()));
+  const hit = byKey.get(key);
+  if (hit !== undefined) return hit;
+  const value = compute();
+  if (byKey.size > 256) byKey.clear();
+  byKey.set(key, value);
+  return value;
+}
+
+/** Work of one realization of a band: R at each distinct whole count its grid needs, on the survivors of the first orders. */
+function bandRealizationCost(c: CostModel, p: PlannedChallenge['params']): number {
+  return cached(c.g, JSON.stringify(['band', c.r, p.challenge, p.until, p.points, p.at, p.seed]), () => {
+    const bp = bandPlan(c.g, p);
+    const order = new Int32Array(bp.maxUnits);
+    const steps = new Float64Array(bp.x.length);
+    const m = p.challenge === 'regional' ? (p.epicentres ?? sitesWithCoordinates(c.g).length) : p.realizations;
+    const samples = Math.max(1, Math.min(BAND_SAMPLES, m));
+    let sum = 0;
+    for (let r = 0; r < samples; r++) {
+      const len = bp.realize(r, order, steps);
+      // A real count x·N costs R at both neighbouring whole counts.
+      const counts = new Set(Array.from(steps).flatMap((v) => [Math.floor(v), Math.ceil(v)].map((k) => Math.min(k, len))));
+      for (const k of counts) sum += c.along(bp.kind, order, k);
+    }
+    return sum / samples;
+  });
+}
+
+/** Work of an attack curve: R after every step 0..K along its sequence (sampled, interpolated). */
+function attackCurveCost(c: CostModel, p: PlannedChallenge['params'], kind: ElementKind, k: number): number {
+  return cached(c.g, JSON.stringify(['attack', c.r, p.challenge, k]), () => {
+    let order: ArrayLike<number> | undefined;
+    const ch = getChallenge(p.challenge);
+    if ((p.challenge === 'degree' || p.challenge === 'degree-adaptive') && ch.type === 'attack') {
+      order = ch.sequence(c.g, k, { rvalue: () => 0 });
+    } else if (kind === 'node') {
+      // Other node attacks: highest degree first stands in for their order.
+      const deg = (v: number) => c.g.offsets[v + 1] - c.g.offsets[v];
+      order = Array.from({ length: c.g.n }, (_, v) => v).sort((a, b) => deg(b) - deg(a) || a - b);
+    }
+    if (!order) return (k + 1) * c.intact;
+    const len = Math.min(k, order.length);
+    const at = [...new Set(Array.from({ length: ATTACK_SAMPLES }, (_, i) => Math.round((i * len) / (ATTACK_SAMPLES - 1))))];
+    const cost = at.map((s) => c.along(kind, order, s));
+    // Trapezoids between the sampled steps: every step 0..len is one evaluation.
+    let sum = cost[0];
+    for (let i = 1; i < at.length; i++) sum += ((cost[i - 1] + cost[i]) / 2) * (at[i] - at[i - 1]);
+    return sum + (k - len) * cost[cost.length - 1];
+  });
+}
+
+/** Work estimate of one challenge in units (see the header and cost.ts). */
+function estimate(g: CompactGraph, it: PlannedChallenge, c: CostModel): Estimate {
   const p = it.params;
   const e: Estimate = { band: 0, cases: 0, fixed: 0, worst: 0, worstExact: false, realizations: 0, totalCases: 0 };
   const kind = challengeKind(g, p);
+  const free = c.free;
   if (it.type === 'band') {
     const m = p.challenge === 'regional' ? (p.epicentres ?? sitesWithCoordinates(g).length) : p.realizations;
-    const x = makeGrid(p.until, p.points, p.at);
-    const count = unitCount(g, kind);
-    // A real count x·N costs R at both neighbouring whole counts.
-    const distinct = p.challenge === 'regional' ? x.length : new Set(x.flatMap((v) => [Math.floor(v * count), Math.ceil(v * count)])).size;
     e.realizations = m;
-    e.band = m * (free ? 2 : distinct * rp + 1);
+    // Each realization draws its order, then takes R (one union–find pass on the free path).
+    const order = p.challenge === 'regional' ? c.pass : orderCost(g, unitCount(g, kind));
+    e.band = m * ((free ? c.pass : bandRealizationCost(c, p)) + order);
   } else if (it.type === 'attack') {
     const k = attackSteps(g, kind, p.until);
     const groups = g.groupIds.length;
-    const ranking = p.challenge === 'risk-groups-worst' ? ((groups * (groups + 1)) / 2) * rp : RANKING_PASSES[p.challenge]!(g.n, k);
-    e.fixed = ranking + (free ? 1 : (k + 1) * rp);
+    const ranking = p.challenge === 'risk-groups-worst' ? ((groups * (groups + 1)) / 2) * c.intact : RANKING_PASSES[p.challenge]!(g.n, k) * c.pass;
+    e.fixed = ranking + (free ? c.pass : attackCurveCost(c, p, kind, k));
   } else {
     const order = p.challenge === 'n-2' ? 2 : 1;
     e.totalCases = contingencyTotal(g, p.element, order);
-    e.cases = Math.min(e.totalCases, it.maxCases) * rp;
+    e.cases = Math.min(e.totalCases, it.maxCases) * c.intact;
   }
   if (p.worstCase > 0) {
     const units = countOnes(eligibleUnits(g, kind));
     const k = Math.min(p.worstCase, units);
     const exactCases = subsets(units, k);
     e.worstExact = k <= 2 && exactCases <= it.exactLimit;
-    e.worst = (e.worstExact ? exactCases + (k === 2 ? units : 0) : k * units * Math.max(1, it.beam)) * rp;
+    e.worst = (e.worstExact ? exactCases + (k === 2 ? units : 0) : k * units * Math.max(1, it.beam)) * c.intact;
   }
   return e;
 }

@@ -6,6 +6,7 @@
 
 import type { CompactGraph } from '../graph/compact.js';
 import { findRoot } from '../metrics/kernels/union-find.js';
+import { kernelWork } from '../metrics/kernels/work-count.js';
 import type { ElementKind } from '../graph/element.js';
 
 export interface ConnectivityCurve {
@@ -114,6 +115,7 @@ export function connectivityCurve(
     out.lcc[i] = st.lcc;
     out.pairs[i] = st.pairs;
   }
+  kernelWork.visits += 2 * g.n + g.m + count;
   return out;
 }
 

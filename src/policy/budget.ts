@@ -4,30 +4,24 @@
 // function of its inputs and seed (byte for byte on any machine): the budget is a ration of
 // work, and `seconds` is only the unit people think in.
 //
-// The rate. Measured on 2026-12-01 on the development machine (one core of a 2-core AMD EPYC
-// virtual machine, Node 20, shared with other jobs: load average 2–3), the built-in policy's
-// evaluation of each design with no budget, planned work divided by wall time (best of two):
-//   topology-zoo designs (Knight et al., IEEE JSAC 2011, CC BY 4.0):
-//     Kdl (754 sites, 899 links)        2.69e9 visits in 55.9 s   4.8e7 visits/s
-//     Cogentco (197, 245)               1.79e8 in 1.84 s          9.7e7
-//     Colt, Interoute, Deltacom, Ion, TataNld, GtsCe, UsCarrier, DialtelecomCz (110–193 sites)
-//                                                                 8.7e7 – 1.3e8
-//     Pern (127, 129)                                             2.4e8
-//   seeded synthetic graphs (test/envelope/graphs.ts):
-//     preferential attachment, 100–1000 nodes, 2 links per node   3.2e8 – 4.1e8
-//     32 × 32 grid (1024 nodes) under a 3e9 budget: 2.98e9 in 41.7 s   7.2e7
-// The estimate counts every all-pairs metric as N searches per R, but the searches run 32
-// sources at a time and their cost grows with the design's diameter, so the true rate spreads
-// over almost a factor of ten between designs. A budget is a cap, so the conversion uses the
-// slow end, the largest real design measured (rounded up): a budget of S seconds is about S
-// seconds of engine time here on designs like Kdl, and less on most others.
+// The rate. One unit of work ("element visit") is about 1/5e7 s of engine time on one core of
+// the development machine (a 2-core AMD EPYC virtual machine, Node 20, shared with other jobs:
+// load average 2–7). Until 2026-12 the estimate counted every all-pairs metric as N plain
+// searches per R, which the bit-parallel search (256 sources per sweep) and survivors that fall
+// into pieces made from 0.07 to 8.8 times the real time. The estimate now follows what each
+// kernel does on the survivors (envelope/cost.ts), with unit costs fitted to time on
+// preferential-attachment graphs (250–4,000 nodes), G(n, L), a grid, a ring and Topology Zoo
+// designs (Knight et al., IEEE JSAC 2011, CC BY 4.0); test/bench/budget.bench.ts prints
+// estimate against time per design and challenge, and for the envelope and explain commands.
+// The rate itself is unchanged, so a budget of S seconds is still about S seconds of engine
+// time here, now within about 2× on every design measured instead of up to 9×.
 export const ENGINE_VISITS_PER_SECOND = 5e7;
 
 /**
  * The default budget: 60 s, i.e. 3e9 element visits. The built-in policy on a 1,000-node
- * design needs about 6.6e9 (a preferential-attachment graph, 17 s uncut here); under the
- * default it runs 79 of its 200 realizations in 11 s, and a 32 × 32 grid 76 in 42 s: within
- * about a minute on one CI core, for head and base each.
+ * preferential-attachment design needs about 5.7e8 (11 s) and runs whole; a 32 × 32 grid needs
+ * 5.6e9 and runs 103 of its 200 realizations; a 4,000-node one runs 10 (the least) and its
+ * adaptive degree attack alone, which is not reduced, is estimated at about 100 s.
  */
 export const DEFAULT_BUDGET_SECONDS = 60;
 

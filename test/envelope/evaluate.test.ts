@@ -123,7 +123,7 @@ describe('evaluateDesign', () => {
   });
 
   it('switches an exact worst-case search to greedy when the budget is too small, and says so', () => {
-    const spec: EvaluationSpec = { r: single('efficiency'), seed: 1, challenges: [{ challenge: 'random-nodes', realizations: 10, worstCase: 2 }], budget: { maxWork: 2e7 } };
+    const spec: EvaluationSpec = { r: single('efficiency'), seed: 1, challenges: [{ challenge: 'random-nodes', realizations: 10, worstCase: 2 }], budget: { maxWork: 2e6 } };
     const ev = evaluateDesign(g, spec);
     expect(ev.evaluation.envelopes[0].worstCase!.method).toBe('greedy');
     expect(ev.evaluation.degraded.join()).toMatch(/worst-case search greedy instead of exact/);

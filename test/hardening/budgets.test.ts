@@ -7,12 +7,13 @@
 // and run the same number of realizations, so that they stay paired (src/gate/budget.ts).
 //
 // The expected counts below come from the documented estimate (evaluate.ts header): with a
-// union–find R, a band costs 2 graph passes per realization, an N−1 case one R pass, and a
-// pass visits N + L elements.
+// union–find R, a band realization costs its removal order and one graph pass, an N−1 case one
+// R pass, and a pass costs passCost(g) units (envelope/cost.ts).
 
 import { describe, expect, it } from 'vitest';
 import { evaluateDesign, MIN_REALIZATIONS, planEvaluation, type EvaluationSpec } from '../../src/envelope/evaluate.js';
 import { budgetWork } from '../../src/policy/budget.js';
+import { orderCost, passCost } from '../../src/envelope/cost.js';
 import { compileTopology } from '../../src/graph/compact.js';
 import { planAnnotations } from '../../src/report/annotations.js';
 import { renderSummary } from '../../src/report/markdown.js';
@@ -26,7 +27,9 @@ import { reportCount } from './support.js';
 
 const MESH = gateFixture('removed-node/base.net.yaml'); // 11 sites, 17 links
 const g = compileTopology(parseDesign(MESH, 'mesh.net.yaml'));
-const VISITS = g.n + g.m;
+const VISITS = passCost(g);
+/** One realization of a random-nodes band with a union–find R. */
+const REALIZATION = VISITS + orderCost(g, g.n);
 const R = { metrics: [{ id: 'largest_component' as const, weight: 1 }], combine: 'mean' as const };
 
 function spec(challenges: EvaluationSpec['challenges'], maxWork?: number): EvaluationSpec {
@@ -35,12 +38,12 @@ function spec(challenges: EvaluationSpec['challenges'], maxWork?: number): Evalu
 
 describe('the engine reduces work the documented way', () => {
   it('band realizations scale to the budget: 500 requested, work for 37 → 37, with the reason', () => {
-    const s = spec([{ challenge: 'random-nodes', realizations: 500, until: 0.5, points: 6 }], 2 * VISITS * 37);
+    const s = spec([{ challenge: 'random-nodes', realizations: 500, until: 0.5, points: 6 }], REALIZATION * 37);
     const plan = planEvaluation(g, s);
     expect(plan.items[0].params.realizations).toBe(37);
     const ev = evaluateDesign(g, s).evaluation;
     expect(ev.envelopes[0].realizations).toBe(37);
-    const reason = `realizations reduced from 500 to 37 by the work budget (${2 * VISITS * 37} element visits)`;
+    const reason = `realizations reduced from 500 to 37 by the work budget (${REALIZATION * 37} element visits)`;
     expect(ev.envelopes[0].degraded).toBe(reason);
     expect(ev.degraded).toEqual([`random-nodes: ${reason}`]);
   });
@@ -61,7 +64,7 @@ describe('the engine reduces work the documented way', () => {
     const full = evaluateDesign(g, spec([{ challenge: 'random-nodes', realizations: 50, until: 0.5, points: 6, worstCase: 2 }])).evaluation;
     expect(full.envelopes[0].worstCase?.method).toBe('exact');
     expect(full.degraded).toEqual([]);
-    const cut = evaluateDesign(g, spec([{ challenge: 'random-nodes', realizations: 50, until: 0.5, points: 6, worstCase: 2 }], 2 * VISITS * 50 + 1)).evaluation;
+    const cut = evaluateDesign(g, spec([{ challenge: 'random-nodes', realizations: 50, until: 0.5, points: 6, worstCase: 2 }], REALIZATION * 50 + 1)).evaluation;
     expect(cut.envelopes[0].worstCase?.method).toBe('greedy');
     expect(cut.degraded[0]).toMatch(/^random-nodes: worst-case search greedy instead of exact \(work budget \d+\)/);
   });
@@ -105,7 +108,7 @@ let unsettled = 0;
 
 describe('the report marks a reduced evaluation, in every view', () => {
   it('a degraded finding with the reason; the summary, annotations and terminal say it too', async () => {
-    const f = await judge(policy('  - kind: area-floor\n    challenge: failures\n'), 2 * VISITS * 40);
+    const f = await judge(policy('  - kind: area-floor\n    challenge: failures\n'), REALIZATION * 40);
     expect(f.head!.degraded).toEqual([expect.stringMatching(/^random-nodes: realizations reduced from 400 to \d+ by the work budget/)]);
     const d = f.findings.find((x) => x.rule === 'degraded')!;
     expect(d.severity).toBe('notice');
@@ -117,7 +120,7 @@ describe('the report marks a reduced evaluation, in every view', () => {
 
   it('and in each requirement the cut touches: one finding of its own, also when the value is clear', async () => {
     const reqs = threshold('median', 0.01) + threshold('mean', 0.01) + '  - kind: area-floor\n    challenge: failures\n    min: 0.01\n  - kind: no-new-spof\n';
-    const f = await judge(policy(reqs), 2 * VISITS * 40);
+    const f = await judge(policy(reqs), REALIZATION * 40);
     const touched = f.requirements.filter((r) => !r.id.startsWith('no-new-spof'));
     expect(touched.map((r) => r.status)).toEqual(['holds', 'holds', 'holds']);
     for (const r of touched) {
@@ -156,8 +159,9 @@ describe('what the reduced work cannot settle is unsettled, never met', () => {
     const full = await judge(policy(req, challenge));
     expect(full.head!.envelopes[0].worstCase?.method).toBe('exact');
     expect(full.requirements[0].status).toBe('holds');
-    // Band 50 × 2 passes + exact pairs C(11, 2) + 11 = 166 passes is over 150; the greedy search (22) fits.
-    const cut = await judge(policy(req, challenge), 150 * VISITS);
+    // Band 50 realizations + exact pairs C(11, 2) + 11 = 66 passes is over the budget, and the
+    // exact search over a quarter of it; the band with the greedy search (22 passes) fits.
+    const cut = await judge(policy(req, challenge), 50 * REALIZATION + 30 * VISITS);
     expect(cut.head!.envelopes[0].worstCase?.method).toBe('greedy');
     expect(cut.requirements[0].status).toBe('unsettled');
     unsettled++;
@@ -166,13 +170,13 @@ describe('what the reduced work cannot settle is unsettled, never met', () => {
 
   it('a quantile floor whose confidence interval, wide with the few realizations left, reaches below it', async () => {
     const at = (min: number) => `  - kind: r-threshold\n    challenge: failures\n    at: 0.2\n    statistic: quantile\n    q: 0.1\n    min: ${min}\n`;
-    const probe = await judge(policy(at(0.01)), 2 * VISITS * 12);
+    const probe = await judge(policy(at(0.01)), REALIZATION * 12);
     const env = probe.head!.envelopes[0];
     expect(env.realizations).toBe(12);
     const j = env.x.indexOf(0.2);
     const band = env.quantiles['0.1'];
     expect(band.lo[j]).toBeLessThan(band.value[j]);
-    const cut = await judge(policy(at(band.value[j])), 2 * VISITS * 12);
+    const cut = await judge(policy(at(band.value[j])), REALIZATION * 12);
     expect(cut.requirements[0]).toMatchObject({ status: 'unsettled', head: band.value[j] });
     unsettled++;
     expect(cut.findings.find((x) => x.rule === 'r-threshold')).toMatchObject({ severity: 'warn' });
@@ -189,12 +193,12 @@ describe('what the reduced work cannot settle is unsettled, never met', () => {
   ];
   for (const s of statistics) {
     it(`${s.name} met by less than 2 standard errors on realizations cut by the budget`, async () => {
-      const probe = await judge(policy(s.req(0.5)), 2 * VISITS * 12);
+      const probe = await judge(policy(s.req(0.5)), REALIZATION * 12);
       expect(probe.head!.envelopes[0].realizations).toBe(12);
       const v = s.value(probe.head);
       const ceiling = s.name.includes('ceiling');
       const edge = Number((ceiling ? v + 0.001 : v - 0.001).toFixed(6));
-      const cut = await judge(policy(s.req(edge)), 2 * VISITS * 12);
+      const cut = await judge(policy(s.req(edge)), REALIZATION * 12);
       expect(cut.requirements[0].status).toBe('unsettled');
       unsettled++;
       const why = cut.findings.find((x) => x.requirement === cut.requirements[0].id && x.severity === 'warn')!;
@@ -213,7 +217,7 @@ describe('what the reduced work cannot settle is unsettled, never met', () => {
     const env = probe.head!.envelopes[0];
     const j = env.x.indexOf(0.5);
     const floor = Number((env.min[j] + 1e-6).toFixed(9));
-    const cut = await judge(policy(threshold('min', floor, 0.5)), 2 * VISITS * 12);
+    const cut = await judge(policy(threshold('min', floor, 0.5)), REALIZATION * 12);
     const cutEnv = cut.head!.envelopes[0];
     expect(cutEnv.min[j]).toBeGreaterThan(env.min[j]);
     expect(cut.requirements[0].status).toBe('unsettled');
@@ -235,7 +239,7 @@ describe('base and head: one budget, paired realizations', () => {
   const rest = (drop: number) => `weakening:\n  allowed-drop: ${drop}\n  error-multiple: 2\n`;
 
   it('the budget cuts both sides to the same count, where the engine alone would not', async () => {
-    const work = 2 * VISITS * 40;
+    const work = REALIZATION * 40;
     const gHead = compileTopology(parseDesign(HEAD, 'head.net.yaml'));
     const alone = [g, gHead].map((graph) => planEvaluation(graph, spec([{ challenge: 'random-nodes', realizations: 400, until: 0.5, points: 6 }], work)).items[0].params.realizations);
     expect(alone[0]).not.toBe(alone[1]); // 40 for the mesh, more for the smaller head
@@ -253,7 +257,7 @@ describe('base and head: one budget, paired realizations', () => {
     const isolated = MESH.replace('  - between: [annex, s0]\n', '').replace('  - between: [annex, s5]\n', '');
     expect(isolated).not.toContain('[annex,');
     const mean = threshold('mean', 0);
-    const work = 2 * VISITS * 40;
+    const work = REALIZATION * 40;
     const compareIsolated = (text: string, w?: number) => compare(text, w, {}, isolated);
     const probe = (await compareIsolated(policy(mean, FAILURES, rest(0)), work)).requirements[0];
     const drop = -probe.delta!;
@@ -287,7 +291,7 @@ describe('base and head: one budget, paired realizations', () => {
   it('base and head cut differently do not pair: the change is unsettled, whatever its sign', async () => {
     // An engine that gives the head half the work it was handed: its count then differs.
     const skewed: GateDeps['evaluate'] = (graph, s) => evaluateDesign(graph, graph.n === 10 ? { ...s, budget: { maxWork: Math.floor(s.budget!.maxWork! / 2) } } : s);
-    const f = await compare(policy(area, FAILURES, rest(0.5)), 2 * VISITS * 40, { evaluate: skewed });
+    const f = await compare(policy(area, FAILURES, rest(0.5)), REALIZATION * 40, { evaluate: skewed });
     const [nb, nh] = [f.base!.envelopes[0].realizations, f.head!.envelopes[0].realizations];
     expect(nb).not.toBe(nh);
     expect(f.requirements[0].status).toBe('unsettled');
@@ -313,7 +317,7 @@ describe('the budget in the policy', () => {
   });
 
   it('a scope raises the budget for its files only', async () => {
-    const text = `${policy('  - kind: area-floor\n    challenge: failures\n')}budget:\n  work: ${2 * VISITS * 20}\nscopes:\n  - paths: "networks/core/**"\n    budget:\n      work: 1e9\n`;
+    const text = `${policy('  - kind: area-floor\n    challenge: failures\n')}budget:\n  work: ${REALIZATION * 20}\nscopes:\n  - paths: "networks/core/**"\n    budget:\n      work: 1e9\n`;
     const core = 'networks/core/mesh.net.yaml';
     const { report } = await runGate(
       { head: 'head', policySource: 'head', mode: 'block', paths: [FILE, core] },

@@ -25,6 +25,7 @@
 // Scratch is allocated once per capacity.
 
 import type { LocalGraph } from './subgraph.js';
+import { kernelWork } from './work-count.js';
 
 /** Population count of a 32-bit word (Hacker's Delight, §5-1). */
 export function popcount32(x: number): number {
@@ -200,6 +201,7 @@ class BfsScratch {
       for (let p = offsets[v]; p < offsets[v + 1]; p++) rn[k++] = newOf[neighbors[p]];
     }
     ro[n] = k;
+    kernelWork.visits += n + k;
     return c;
   }
 
@@ -233,9 +235,11 @@ class BfsScratch {
     let tail = 1;
     let ecc = 0;
     let inv = 0;
+    let scanned = 0;
     while (head < tail) {
       const v = queue[head++];
       const dv = dist[v] + 1;
+      scanned += ro[v + 1] - ro[v];
       for (let p = ro[v]; p < ro[v + 1]; p++) {
         const w = rn[p];
         if (dist[w] >= 0) continue;
@@ -247,6 +251,7 @@ class BfsScratch {
       }
     }
     for (let i = 0; i < tail; i++) dist[queue[i]] = -1;
+    kernelWork.visits += tail + scanned;
     if (perSource) perSource[index] = inv;
     if (ecc > this.result.maxDistance) this.result.maxDistance = ecc;
     return ecc;
@@ -292,6 +297,7 @@ class BfsScratch {
       let reached = 0;
       let nextCount = 0;
       if (counting) planes.fill(0);
+      kernelWork.wordVisits += 2 * (4 * frontierWork < sweepWork ? activeCount + frontierWork : sweepWork);
       if (4 * frontierWork < sweepWork) {
         // Push: OR each frontier node's bits into its neighbours.
         for (let i = 0; i < activeCount; i++) {
@@ -423,6 +429,7 @@ class BfsScratch {
       let reached = 0;
       let nextCount = 0;
       if (counting) planes.fill(0);
+      kernelWork.wordVisits += 8 * (4 * frontierWork < sweepWork ? activeCount + frontierWork : sweepWork);
       if (4 * frontierWork < sweepWork) {
         for (let i = 0; i < activeCount; i++) {
           const v = active[i];

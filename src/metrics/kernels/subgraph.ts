@@ -5,6 +5,7 @@
 
 import type { CompactGraph } from '../../graph/compact.js';
 import type { Mask } from '../../graph/mask.js';
+import { kernelWork } from './work-count.js';
 
 export interface LocalGraph {
   /** Nodes in the local graph. */
@@ -75,6 +76,7 @@ export function createSurvivorBuilder(g: CompactGraph, simple: boolean): (mask: 
     out.offsets[n] = k;
     out.n = n;
     out.entries = k;
+    kernelWork.visits += g.n + offsets[g.n];
     return out;
   };
 }

@@ -4,6 +4,7 @@
 
 import type { CompactGraph } from '../../graph/compact.js';
 import type { Mask } from '../../graph/mask.js';
+import { kernelWork } from './work-count.js';
 
 /** Root of i's set, halving the path on the way (module-level so every caller stays monomorphic). */
 export function findRoot(parent: Int32Array, i: number): number {
@@ -105,6 +106,7 @@ export function createComponentCounter(g: CompactGraph): {
       summary.largest = largest;
       summary.largestRoot = largestRoot;
       summary.connectedPairs = pairs;
+      kernelWork.visits += 2 * n + g.m;
       return summary;
     },
   };

@@ -13,7 +13,8 @@ import { DesignError, UsageError } from '../../errors.js';
 import { compileTopology, nodesByLine, type CompactGraph } from '../../graph/compact.js';
 import { createMask } from '../../graph/mask.js';
 import { findComponents, findCutElements } from '../../graph/structure.js';
-import { createRValue, rPasses, unsupportedMetric, type RFunction } from '../../envelope/r-value.js';
+import { createRValue, unsupportedMetric, type RFunction } from '../../envelope/r-value.js';
+import { passCost, rCost, survivorShape } from '../../envelope/cost.js';
 import type { RValueSpec } from '../../envelope/types.js';
 import type { ElementKind } from '../../graph/element.js';
 import { countOnes, eligibleUnits, removeUnit, restoreUnit, unitCount, unitIds } from '../../challenges/units.js';
@@ -158,15 +159,15 @@ const CHOSEN =
   'by the links they touch, most first (a share for each kind); the rest are not ranked, and one of them may hurt more than those shown';
 
 /**
- * Which single losses to evaluate within `maxWork` element visits. One loss costs R (rPasses
- * graph passes, the engine's estimate: envelope/evaluate.ts) plus one pass for the components,
- * each pass visiting every node and link; the intact R costs one more. When all of them do not
+ * Which single losses to evaluate within `maxWork` element visits. One loss costs R on the
+ * intact design (the engine's estimate, envelope/cost.ts: one element barely changes the
+ * survivor) plus one pass for the components; the intact R costs one more. When all of them do not
  * fit, the order of CHOSEN is our own heuristic (not a published rule): elements that cut sites
  * off are the ones a planner must see, a duct fails many links at once, and an element that
  * touches more links tends to leave a lower R. Ties go to file order. Pure.
  */
 export function planSingleLosses(g: CompactGraph, spec: RValueSpec, kinds: readonly ElementKind[], maxWork: number): SingleLossPlan {
-  const perCase = (rPasses(g, spec) + 1) * (g.n + g.m);
+  const perCase = rCost(g, spec, survivorShape(g)) + passCost(g);
   const units = new Map<ElementKind, Set<number>>();
   const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
   let total = 0;
