@@ -47,7 +47,7 @@ function sequenceLength(b: Uint8Array, i: number): number {
 
 /** Offset of the first byte that does not start a well-formed UTF-8 sequence, or -1. */
 export function firstInvalidUtf8(b: Uint8Array, from = 0): number {
-  for (let i = from; i < b.length; ) {
+  for (let i = from; i < b.length;) {
     if (b[i] < 0x80) {
       i++;
       continue;
@@ -67,7 +67,7 @@ export function firstInvalidUtf8(b: Uint8Array, from = 0): number {
 function guessEncoding(b: Uint8Array): string {
   let c1 = false;
   let utf8 = false;
-  for (let i = 0; i < b.length; ) {
+  for (let i = 0; i < b.length;) {
     if (b[i] < 0x80) {
       i++;
       continue;
@@ -133,10 +133,12 @@ function decodeUtf16(bytes: Uint8Array, littleEndian: boolean, file: string): st
     const code = littleEndian ? bytes[p] | (bytes[p + 1] << 8) : (bytes[p] << 8) | bytes[p + 1];
     if (code >= 0xd800 && code <= 0xdbff) {
       const q = p + 2;
-      const next = q + 1 < bytes.length ? (littleEndian ? bytes[q] | (bytes[q + 1] << 8) : (bytes[q] << 8) | bytes[q + 1]) : -1;
+      const next =
+        q + 1 < bytes.length ? (littleEndian ? bytes[q] | (bytes[q + 1] << 8) : (bytes[q] << 8) | bytes[q + 1]) : -1;
       if (!(next >= 0xdc00 && next <= 0xdfff)) fail(`a lone surrogate 0x${code.toString(16).toUpperCase()}`, u);
     } else if (code >= 0xdc00 && code <= 0xdfff) {
-      const prev = u > 0 ? (littleEndian ? bytes[p - 2] | (bytes[p - 1] << 8) : (bytes[p - 2] << 8) | bytes[p - 1]) : -1;
+      const prev =
+        u > 0 ? (littleEndian ? bytes[p - 2] | (bytes[p - 1] << 8) : (bytes[p - 2] << 8) | bytes[p - 1]) : -1;
       if (!(prev >= 0xd800 && prev <= 0xdbff)) fail(`a lone surrogate 0x${code.toString(16).toUpperCase()}`, u);
     }
     buf[u % CHUNK] = code;
@@ -145,7 +147,11 @@ function decodeUtf16(bytes: Uint8Array, littleEndian: boolean, file: string): st
   if (units % CHUNK !== 0) chunks.push(String.fromCharCode(...buf.slice(0, units % CHUNK)));
   const text = chunks.join('');
   if ((bytes.length & 1) === 1) {
-    throw new EncodingError('not valid UTF-16: the file ends in the middle of a character (an odd number of bytes)', { file, ...textPosition(text, text.length) }, HINT);
+    throw new EncodingError(
+      'not valid UTF-16: the file ends in the middle of a character (an odd number of bytes)',
+      { file, ...textPosition(text, text.length) },
+      HINT,
+    );
   }
   return text;
 }
@@ -158,9 +164,17 @@ function decodeUtf16(bytes: Uint8Array, littleEndian: boolean, file: string): st
 export function decodeText(bytes: Uint8Array, file: string): string {
   let text: string;
   if (bytes[0] === 0xff && bytes[1] === 0xfe && bytes[2] === 0 && bytes[3] === 0) {
-    throw new EncodingError('not UTF-8: the file starts with a UTF-32 byte-order mark', { file, line: 1, column: 1 }, HINT);
+    throw new EncodingError(
+      'not UTF-8: the file starts with a UTF-32 byte-order mark',
+      { file, line: 1, column: 1 },
+      HINT,
+    );
   } else if (bytes[0] === 0 && bytes[1] === 0 && bytes[2] === 0xfe && bytes[3] === 0xff) {
-    throw new EncodingError('not UTF-8: the file starts with a UTF-32 byte-order mark', { file, line: 1, column: 1 }, HINT);
+    throw new EncodingError(
+      'not UTF-8: the file starts with a UTF-32 byte-order mark',
+      { file, line: 1, column: 1 },
+      HINT,
+    );
   } else if (bytes[0] === 0xff && bytes[1] === 0xfe) {
     text = decodeUtf16(bytes, true, file);
   } else if (bytes[0] === 0xfe && bytes[1] === 0xff) {
@@ -176,8 +190,15 @@ export function decodeText(bytes: Uint8Array, file: string): string {
     const sample = bytes.subarray(0, 4096);
     let zeros = 0;
     for (const x of sample) if (x === 0) zeros++;
-    const looks = zeros * 4 >= sample.length ? 'it looks like UTF-16 without a byte-order mark' : 'it looks like a binary file, not text';
-    throw new EncodingError(`not UTF-8 text: a NUL character at line ${line}, column ${column}; ${looks}`, { file, line, column }, HINT);
+    const looks =
+      zeros * 4 >= sample.length
+        ? 'it looks like UTF-16 without a byte-order mark'
+        : 'it looks like a binary file, not text';
+    throw new EncodingError(
+      `not UTF-8 text: a NUL character at line ${line}, column ${column}; ${looks}`,
+      { file, line, column },
+      HINT,
+    );
   }
   return text;
 }

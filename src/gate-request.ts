@@ -196,12 +196,18 @@ export const SEQUENTIAL_MIN_WORK = 1e9;
 
 /** The larger side's work estimate, unreduced by the budget. */
 function unreducedWork(specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): number {
-  const work = (g: CompactGraph) => specs.reduce((s, spec) => s + planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work, 0);
+  const work = (g: CompactGraph) =>
+    specs.reduce((s, spec) => s + planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work, 0);
   return Math.max(work(head), base ? work(base) : 0);
 }
 
 /** Whether a design runs in batches under the sequential stopping rule (request.sequential overrides). */
-export function sequentialRun(request: GateRequest, specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): boolean {
+export function sequentialRun(
+  request: GateRequest,
+  specs: readonly EvaluationSpec[],
+  head: CompactGraph,
+  base: CompactGraph | undefined,
+): boolean {
   if (request.sequential !== undefined) return request.sequential;
   return unreducedWork(specs, head, base) > SEQUENTIAL_MIN_WORK;
 }
@@ -213,9 +219,17 @@ export function sequentialRun(request: GateRequest, specs: readonly EvaluationSp
  * one batch. Smaller designs stay whole, in the part their path hashes to: splitting costs
  * every part a parse, and parts cannot stop early (none sees the others' samples).
  */
-export function splitAcrossParts(total: number, specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): boolean {
+export function splitAcrossParts(
+  total: number,
+  specs: readonly EvaluationSpec[],
+  head: CompactGraph,
+  base: CompactGraph | undefined,
+): boolean {
   if (total < 2) return false;
-  const most = Math.max(0, ...[head, ...(base ? [base] : [])].flatMap((g) => specs.map((spec) => stagedMaximum(stageEvaluation(g, spec)))));
+  const most = Math.max(
+    0,
+    ...[head, ...(base ? [base] : [])].flatMap((g) => specs.map((spec) => stagedMaximum(stageEvaluation(g, spec)))),
+  );
   return most > BATCH && unreducedWork(specs, head, base) > SEQUENTIAL_MIN_WORK;
 }
 
@@ -239,14 +253,23 @@ export async function splitShare(
     for (const spec of specs) {
       const st = stageEvaluation(graph, spec);
       out.realizations = Math.max(out.realizations, stagedMaximum(st));
-      const mine = st.tasks.filter((t): t is Extract<Task, { type: 'band' }> => t.type === 'band' && batchOwner(t.from, part.total) === part.index);
+      const mine = st.tasks.filter(
+        (t): t is Extract<Task, { type: 'band' }> => t.type === 'band' && batchOwner(t.from, part.total) === part.index,
+      );
       if (mine.length === 0) continue;
       const results = await run(graph, st.plan, mine, request.threads);
       mine.forEach((t, k) => {
         const res = results[k];
         if (res.type !== 'band') throw new TypeError('a band task returned another result');
         const points = res.values.length ? res.values[0].length : 0;
-        out.samples.push({ side, challenge: st.plan.items[t.item].params.challenge, from: t.from, to: t.to, points, values: encodeValues(res.values) });
+        out.samples.push({
+          side,
+          challenge: st.plan.items[t.item].params.challenge,
+          from: t.from,
+          to: t.to,
+          points,
+          values: encodeValues(res.values),
+        });
       });
     }
   }
@@ -258,7 +281,13 @@ export async function splitShare(
  * the parts' samples (a task no part holds names the part that should have run it); every other
  * task, and every other graph (mended designs), runs as in a single run.
  */
-export function servedTasks(join: JoinInput, path: string, head: CompactGraph, base: CompactGraph | undefined, deps: GateDeps): RunTasks {
+export function servedTasks(
+  join: JoinInput,
+  path: string,
+  head: CompactGraph,
+  base: CompactGraph | undefined,
+  deps: GateDeps,
+): RunTasks {
   const run: RunTasks = deps.runTasks ?? localTasks;
   return async (g, plan, tasks, threads) => {
     const side = g === head ? 'head' : base !== undefined && g === base ? 'base' : undefined;
@@ -273,7 +302,10 @@ export function servedTasks(join: JoinInput, path: string, head: CompactGraph, b
           'join the part reports of one run: the same revisions, policy and seed',
         );
       }
-      return { type: 'band', values: decodeValues(found.values, t.to - t.from, found.points, `part ${found.part}/${join.total}`) };
+      return {
+        type: 'band',
+        values: decodeValues(found.values, t.to - t.from, found.points, `part ${found.part}/${join.total}`),
+      };
     });
     const rest = tasks.filter((_t, i) => out[i] === undefined);
     const computed = rest.length ? await run(g, plan, rest, threads) : [];
@@ -298,7 +330,8 @@ export async function evaluateSequentially(
   request: GateRequest,
   deps: GateDeps,
 ): Promise<{ head: DesignSide; base?: DesignSide }> {
-  const run = deps.runTasks ?? ((g: CompactGraph, plan: EvaluationPlan, tasks: Task[]) => tasks.map((t) => runTask(g, plan, t)));
+  const run =
+    deps.runTasks ?? ((g: CompactGraph, plan: EvaluationPlan, tasks: Task[]) => tasks.map((t) => runTask(g, plan, t)));
   const stagesOf = (g: CompactGraph, list: EvaluationSpec[]) => list.map((spec) => stageEvaluation(g, spec));
   const headStages = stagesOf(head.graph, specs.head);
   const baseStages = base ? stagesOf(base.graph, specs.base!) : [];
@@ -318,11 +351,20 @@ export async function evaluateSequentially(
     for (const st of [...headStages, ...baseStages]) {
       const pending = pendingTasks(st, upto);
       if (pending.length === 0) continue;
-      const results = await run(st.g, st.plan, pending.map((i) => st.tasks[i]), request.threads);
+      const results = await run(
+        st.g,
+        st.plan,
+        pending.map((i) => st.tasks[i]),
+        request.threads,
+      );
       pending.forEach((i, k) => (st.results[i] = results[k]));
     }
     const headSide: DesignSide = { graph: head.graph, result: snapshot(headStages, upto), topology: head.topology };
-    const baseSide: DesignSide | undefined = base ? { graph: base.graph, result: snapshot(baseStages, upto), topology: base.topology } : comparing ? headSide : undefined;
+    const baseSide: DesignSide | undefined = base
+      ? { graph: base.graph, result: snapshot(baseStages, upto), topology: base.topology }
+      : comparing
+        ? headSide
+        : undefined;
     let open = false;
     for (const r of fp.requirements) {
       if (r.kind === 'no-new-spof' || r.kind === 'n-1') continue;
@@ -351,9 +393,10 @@ export async function evaluateSequentially(
       } else if (!needed.has(r.id)) needed.set(r.id, upto);
     }
     if (!open || upto >= most) {
-      for (const r of fp.requirements) if (!needed.has(r.id) && 'challenge' in r && fp.challenges.find((x) => x.name === r.challenge)?.random) needed.set(r.id, upto);
+      for (const r of fp.requirements)
+        if (!needed.has(r.id) && 'challenge' in r && fp.challenges.find((x) => x.name === r.challenge)?.random)
+          needed.set(r.id, upto);
       return { head: headSide, ...(base ? { base: baseSide } : {}) };
     }
   }
 }
-

@@ -77,7 +77,9 @@ export async function addMapAndMend(report: FileReport, input: CompareInput, ctx
   if (settings.candidates !== undefined) {
     const text = await ctx.deps.readAt(ctx.head, settings.candidates);
     if (text === null) {
-      notes.push(`the candidate list ${settings.candidates} named by the policy does not exist${ctx.head === 'worktree' ? '' : ` at ${ctx.head}`}`);
+      notes.push(
+        `the candidate list ${settings.candidates} named by the policy does not exist${ctx.head === 'worktree' ? '' : ` at ${ctx.head}`}`,
+      );
       candidates = { list: [], unit: 'link', source: 'list', notes: [] };
     } else {
       try {
@@ -100,7 +102,8 @@ export async function addMapAndMend(report: FileReport, input: CompareInput, ctx
   const original = budgetSpecs(specs, fp.budget.maxWork, g, baseSide?.graph);
   const work = original.head.reduce((s, spec) => s + planEvaluation(g, spec).work, 0);
   const affordable = work > 0 ? Math.floor((MEND_BUDGET_FACTOR * fp.budget.maxWork) / work) : MEND_MAX_EVALUATIONS;
-  const maxEvaluations = settings.evaluations ?? Math.max(MEND_MIN_EVALUATIONS, Math.min(MEND_MAX_EVALUATIONS, affordable));
+  const maxEvaluations =
+    settings.evaluations ?? Math.max(MEND_MIN_EVALUATIONS, Math.min(MEND_MAX_EVALUATIONS, affordable));
 
   const judge = async (change: Change): Promise<FileReport> => {
     const mended: CompactGraph = compileTopology(applyToTopology(headTopo, change));
@@ -108,7 +111,14 @@ export async function addMapAndMend(report: FileReport, input: CompareInput, ctx
     const head = await evaluateGraph(mended, undefined, budgeted.head, budgeted.cuts, ctx.request, ctx.deps);
     let base = baseSide;
     if (baseSide && JSON.stringify(budgeted.base) !== JSON.stringify(original.base)) {
-      base = await evaluateGraph(baseSide.graph, baseSide.topology, budgeted.base!, budgeted.cuts, ctx.request, ctx.deps);
+      base = await evaluateGraph(
+        baseSide.graph,
+        baseSide.topology,
+        budgeted.base!,
+        budgeted.cuts,
+        ctx.request,
+        ctx.deps,
+      );
     }
     return compareDesign({ ...input, head, ...(base ? { base } : {}) });
   };

@@ -26,13 +26,35 @@ import { assembleReport, exitCodeOf } from './gate/verdict.js';
 import { pairDesigns, type UnpairedDesign } from './gate/pair-designs.js';
 import { policyChanges } from './policy/compare.js';
 import { BUILTIN_POLICY_NAME, DEFAULT_DESIGN_GLOBS, DEFAULT_POLICY_PATH } from './policy/defaults.js';
-import { builtinPolicy, designFormat, designNeedsHeader, globsMatch, isDesignPath, isDesignText, loadPolicy, policyForFile } from './policy/resolve.js';
+import {
+  builtinPolicy,
+  designFormat,
+  designNeedsHeader,
+  globsMatch,
+  isDesignPath,
+  isDesignText,
+  loadPolicy,
+  policyForFile,
+} from './policy/resolve.js';
 import type { FilePolicy, Policy } from './policy/types.js';
 import { DESIGN_WARNINGS_KEPT, type FileReport, type Report, type SplitDesign } from './report/report.js';
 import type { DesignFormat } from './topology/model.js';
 import { addMapAndMend } from './map-mend-step.js';
 import { fnv1a32 } from './random.js';
-import { evaluateGraph, evaluateSequentially, evaluationSpecs, sequentialRun, servedTasks, splitAcrossParts, splitShare, type ChangedFile, type GateDeps, type GateRequest, type GateResult, type Revision } from './gate-request.js';
+import {
+  evaluateGraph,
+  evaluateSequentially,
+  evaluationSpecs,
+  sequentialRun,
+  servedTasks,
+  splitAcrossParts,
+  splitShare,
+  type ChangedFile,
+  type GateDeps,
+  type GateRequest,
+  type GateResult,
+  type Revision,
+} from './gate-request.js';
 
 export type { ChangedFile, GateDeps, GateRequest, GateResult, Revision };
 import { parseDesign } from './topology/parse.js';
@@ -47,13 +69,22 @@ export function inPart(path: string, part: { index: number; total: number }): bo
 }
 
 /** The part reports were made by runs of this one: the same revisions and seed. */
-function checkJoin(join: NonNullable<GateRequest['join']>, base: Revision | undefined, head: Revision, seed: number): void {
+function checkJoin(
+  join: NonNullable<GateRequest['join']>,
+  base: Revision | undefined,
+  head: Revision,
+  seed: number,
+): void {
   for (const r of join.reports) {
     const name = `part ${r.part!.index}/${r.part!.total}`;
     if (r.head !== head || r.base !== base) {
-      throw new UsageError(`${name} judged ${r.base ?? '(no base)'} → ${r.head ?? '?'}, not ${base ?? '(no base)'} → ${head}`, 'join with the same --base and --head the parts ran with');
+      throw new UsageError(
+        `${name} judged ${r.base ?? '(no base)'} → ${r.head ?? '?'}, not ${base ?? '(no base)'} → ${head}`,
+        'join with the same --base and --head the parts ran with',
+      );
     }
-    if (r.seed !== seed) throw new UsageError(`${name} ran with seed ${r.seed}, not ${seed}`, 'join with the seed the parts ran with');
+    if (r.seed !== seed)
+      throw new UsageError(`${name} ran with seed ${r.seed}, not ${seed}`, 'join with the seed the parts ran with');
   }
 }
 
@@ -68,7 +99,10 @@ interface LoadedPolicy {
 }
 
 /** Load a policy through an async reader: the loader is pure and synchronous, so files are fetched on demand and the load retried. */
-export async function loadPolicyAt(entry: string, read: (path: string) => Promise<string | null>): Promise<LoadedPolicy> {
+export async function loadPolicyAt(
+  entry: string,
+  read: (path: string) => Promise<string | null>,
+): Promise<LoadedPolicy> {
   const texts = new Map<string, string | null>();
   // A file that is not text is an error of the policy that names it (readChain says where).
   const unreadable = new Map<string, EncodingError>();
@@ -124,13 +158,19 @@ function requireOrgPolicy(request: GateRequest, entry: string, policy: Policy): 
   );
 }
 
-async function choosePolicy(request: GateRequest, deps: GateDeps, base: Revision | undefined, head: Revision): Promise<PolicyChoice> {
+async function choosePolicy(
+  request: GateRequest,
+  deps: GateDeps,
+  base: Revision | undefined,
+  head: Revision,
+): Promise<PolicyChoice> {
   const path = request.policyPath ?? DEFAULT_POLICY_PATH;
   const explicit = request.policyPath !== undefined;
   const trusted = request.policySource === 'base' && base !== undefined ? base : head;
   const other = trusted === head ? base : head;
   const readOrg = async (p: string): Promise<string | null> => {
-    if (!deps.readOrgPolicy) throw new UsageError(`the organisation policy ${p} cannot be read here`, 'give the path of its checkout');
+    if (!deps.readOrgPolicy)
+      throw new UsageError(`the organisation policy ${p} cannot be read here`, 'give the path of its checkout');
     return deps.readOrgPolicy(p);
   };
   const readAtRev = (rev: Revision) => async (p: string) => (isOrgFile(request, p) ? readOrg(p) : deps.readAt(rev, p));
@@ -163,13 +203,24 @@ async function choosePolicy(request: GateRequest, deps: GateDeps, base: Revision
       };
     }
     if (explicit) {
-      throw new UsageError(`the policy file ${path} does not exist${trusted === 'worktree' ? '' : ` at ${trusted}`}`, 'check --policy, or run "netbrace init"');
+      throw new UsageError(
+        `the policy file ${path} does not exist${trusted === 'worktree' ? '' : ` at ${trusted}`}`,
+        'check --policy, or run "netbrace init"',
+      );
     }
     if (request.orgPolicyPath !== undefined) {
       // No policy of its own: the organisation's applies as it is.
       const org = request.orgPolicyPath;
       const { policy } = await loadPolicyAt(org, readOrg);
-      return { policy, info: { source: 'file', path: org, files: policy.files, note: `the repository has no policy; the organisation policy ${org} applies` } };
+      return {
+        policy,
+        info: {
+          source: 'file',
+          path: org,
+          files: policy.files,
+          note: `the repository has no policy; the organisation policy ${org} applies`,
+        },
+      };
     }
     return { policy: builtinPolicy(), info: { source: 'builtin', revision: trusted } };
   }
@@ -179,7 +230,8 @@ async function choosePolicy(request: GateRequest, deps: GateDeps, base: Revision
   const info: Report['policy'] = { source: 'file', path, revision: trusted, files: policy.files };
   if (other !== undefined) {
     let changed = false;
-    for (const [p, text] of texts) if (!isOrgFile(request, p) && (await readSide(deps, other, p)) !== text) changed = true;
+    for (const [p, text] of texts)
+      if (!isOrgFile(request, p) && (await readSide(deps, other, p)) !== text) changed = true;
     if (changed) {
       info.changed = true;
       // The other side's policy, to say what the head's would loosen or tighten (policy/compare.ts).
@@ -193,9 +245,11 @@ async function choosePolicy(request: GateRequest, deps: GateDeps, base: Revision
         if (!isNetbraceError(e)) throw e;
         otherError = e.format().split('\n')[0];
       }
-      if (otherPolicy) info.changes = trusted === base ? policyChanges(policy, otherPolicy) : policyChanges(otherPolicy, policy);
+      if (otherPolicy)
+        info.changes = trusted === base ? policyChanges(policy, otherPolicy) : policyChanges(otherPolicy, policy);
       if (trusted === base) {
-        const verdict = otherError === undefined ? 'it applies once merged' : `the proposed version has an error: ${otherError}`;
+        const verdict =
+          otherError === undefined ? 'it applies once merged' : `the proposed version has an error: ${otherError}`;
         info.note = `this change modifies the policy; the version at the base judges it (${verdict})`;
       } else {
         info.note = 'this change modifies the policy, and the policy of the head applies (policy-source: head)';
@@ -218,21 +272,35 @@ interface Candidates {
   note?: string;
 }
 
-async function candidates(request: GateRequest, deps: GateDeps, policy: Policy, base: Revision | undefined, head: Revision): Promise<Candidates> {
+async function candidates(
+  request: GateRequest,
+  deps: GateDeps,
+  policy: Policy,
+  base: Revision | undefined,
+  head: Revision,
+): Promise<Candidates> {
   if (request.paths && request.paths.length > 0) {
     const list: Candidate[] = [];
     for (const path of [...new Set(request.paths.map(normalizePath))]) {
       if (base === undefined) {
         // A path that is not there is a typing mistake, not a design to report as removed.
         if ((await deps.readAt(head, path)) === null) {
-          throw new UsageError(`${path} does not exist${head === 'worktree' ? '' : ` at ${head}`} (or is not a file)`, 'give the path of a design file');
+          throw new UsageError(
+            `${path} does not exist${head === 'worktree' ? '' : ` at ${head}`} (or is not a file)`,
+            'give the path of a design file',
+          );
         }
         list.push({ path, change: 'unchanged' });
         continue;
       }
       const [h, b] = [await readSide(deps, head, path), await readSide(deps, base, path)];
-      const change: Candidate['change'] = h === null ? 'deleted' : b === null ? 'added' : typeof h === 'string' && h === b ? 'unchanged' : 'modified';
-      if (h === null && b === null) throw new UsageError(`${path} exists neither at ${head} nor at ${base}`, 'give paths relative to the repository root');
+      const change: Candidate['change'] =
+        h === null ? 'deleted' : b === null ? 'added' : typeof h === 'string' && h === b ? 'unchanged' : 'modified';
+      if (h === null && b === null)
+        throw new UsageError(
+          `${path} exists neither at ${head} nor at ${base}`,
+          'give paths relative to the repository root',
+        );
       list.push({ path, change });
     }
     return { list, scope: 'paths' };
@@ -244,8 +312,14 @@ async function candidates(request: GateRequest, deps: GateDeps, policy: Policy, 
   }
   const changed = await deps.listChanged(base, head);
   const selected = changed
-    .filter((f) => isDesignPath(policy, f.path) || (f.previousPath !== undefined && isDesignPath(policy, f.previousPath)))
-    .map((f): Candidate => ({ path: f.path, change: f.status, ...(f.previousPath !== undefined ? { previousPath: f.previousPath } : {}) }));
+    .filter(
+      (f) => isDesignPath(policy, f.path) || (f.previousPath !== undefined && isDesignPath(policy, f.previousPath)),
+    )
+    .map((f): Candidate => ({
+      path: f.path,
+      change: f.status,
+      ...(f.previousPath !== undefined ? { previousPath: f.previousPath } : {}),
+    }));
   const list = await withDesignHeaders(selected, deps, policy, base, head);
   const note = await deadGlobNote(changed, deps, policy, base, head);
   return { list: await pairMovedDesigns(list, deps, policy, base, head), scope: 'changed', ...(note ? { note } : {}) };
@@ -262,7 +336,13 @@ async function textOrNull(deps: GateDeps, rev: Revision, path: string): Promise<
 }
 
 /** Whether a file is a CSV design by its header, at the head or at the base of the change. */
-async function hasDesignHeader(c: Candidate, deps: GateDeps, policy: Policy, base: Revision | undefined, head: Revision): Promise<boolean> {
+async function hasDesignHeader(
+  c: Candidate,
+  deps: GateDeps,
+  policy: Policy,
+  base: Revision | undefined,
+  head: Revision,
+): Promise<boolean> {
   const sides: [Revision, string][] = [];
   if (c.change !== 'deleted') sides.push([head, c.path]);
   if (base !== undefined && c.change !== 'added') sides.push([base, c.previousPath ?? c.path]);
@@ -275,10 +355,17 @@ async function hasDesignHeader(c: Candidate, deps: GateDeps, policy: Policy, bas
  * and target columns, on either side of the change (csvHasEdgeHeader); any other CSV — a
  * spreadsheet of something else — is not a design and is left out without a word.
  */
-async function withDesignHeaders(list: Candidate[], deps: GateDeps, policy: Policy, base: Revision | undefined, head: Revision): Promise<Candidate[]> {
+async function withDesignHeaders(
+  list: Candidate[],
+  deps: GateDeps,
+  policy: Policy,
+  base: Revision | undefined,
+  head: Revision,
+): Promise<Candidate[]> {
   const kept: Candidate[] = [];
   for (const c of list) {
-    const sniffed = designNeedsHeader(policy, c.path) || (c.previousPath !== undefined && designNeedsHeader(policy, c.previousPath));
+    const sniffed =
+      designNeedsHeader(policy, c.path) || (c.previousPath !== undefined && designNeedsHeader(policy, c.previousPath));
     if (!sniffed || (await hasDesignHeader(c, deps, policy, base, head))) kept.push(c);
   }
   return kept;
@@ -303,7 +390,13 @@ function networkName(text: string | null, path: string, policy: Policy): string 
  * usually converted to another format): judged as renamed, base against head
  * (gate/pair-designs.ts says how they are paired).
  */
-async function pairMovedDesigns(list: Candidate[], deps: GateDeps, policy: Policy, base: Revision, head: Revision): Promise<Candidate[]> {
+async function pairMovedDesigns(
+  list: Candidate[],
+  deps: GateDeps,
+  policy: Policy,
+  base: Revision,
+  head: Revision,
+): Promise<Candidate[]> {
   const deleted = list.filter((c) => c.change === 'deleted');
   const added = list.filter((c) => c.change === 'added');
   if (deleted.length === 0 || added.length === 0) return list;
@@ -321,7 +414,11 @@ async function pairMovedDesigns(list: Candidate[], deps: GateDeps, policy: Polic
   const into = new Map(pairs.map((p) => [p.path, p.previousPath]));
   return list
     .filter((c) => !(c.change === 'deleted' && gone.has(c.path)))
-    .map((c) => (c.change === 'added' && into.has(c.path) ? { path: c.path, previousPath: into.get(c.path)!, change: 'renamed' as const } : c));
+    .map((c) =>
+      c.change === 'added' && into.has(c.path)
+        ? { path: c.path, previousPath: into.get(c.path)!, change: 'renamed' as const }
+        : c,
+    );
 }
 
 /** Shown at most this many design files that no glob selects. */
@@ -335,11 +432,26 @@ const UNSELECTED_SHOWN = 5;
  * a design-looking file outside the globs may be left out on purpose. Globs of the built-in
  * policy are never named (a repository rarely has every format).
  */
-async function deadGlobNote(changed: readonly ChangedFile[], deps: GateDeps, policy: Policy, base: Revision, head: Revision): Promise<string | undefined> {
-  const looksLikeDesign = (p: string) => globsMatch(DEFAULT_DESIGN_GLOBS, p) && !isDesignPath(policy, p) && !globsMatch(policy.exclude, p);
-  const looking = [...new Set(changed.flatMap((f) => [f.path, ...(f.previousPath !== undefined ? [f.previousPath] : [])]).filter(looksLikeDesign))].sort();
+async function deadGlobNote(
+  changed: readonly ChangedFile[],
+  deps: GateDeps,
+  policy: Policy,
+  base: Revision,
+  head: Revision,
+): Promise<string | undefined> {
+  const looksLikeDesign = (p: string) =>
+    globsMatch(DEFAULT_DESIGN_GLOBS, p) && !isDesignPath(policy, p) && !globsMatch(policy.exclude, p);
+  const looking = [
+    ...new Set(
+      changed
+        .flatMap((f) => [f.path, ...(f.previousPath !== undefined ? [f.previousPath] : [])])
+        .filter(looksLikeDesign),
+    ),
+  ].sort();
   if (looking.length === 0) return undefined;
-  const written = policy.designs.flatMap((d) => d.paths.map((glob: string, i: number) => ({ glob, where: d.fileWhere[i] ?? d.where }))).filter((g) => g.where.file !== BUILTIN_POLICY_NAME);
+  const written = policy.designs
+    .flatMap((d) => d.paths.map((glob: string, i: number) => ({ glob, where: d.fileWhere[i] ?? d.where })))
+    .filter((g) => g.where.file !== BUILTIN_POLICY_NAME);
   if (written.length === 0) return undefined;
   const files = [...new Set([...(await deps.listAll(base)), ...(await deps.listAll(head))])];
   const dead = written.filter((g) => !files.some((f) => globsMatch([g.glob], f)));
@@ -349,11 +461,19 @@ async function deadGlobNote(changed: readonly ChangedFile[], deps: GateDeps, pol
   const unselected: string[] = [];
   for (const p of looking) {
     if (!designNeedsHeader(builtin, p)) unselected.push(p);
-    else if (isDesignText(builtin, p, await textOrNull(deps, head, p)) || isDesignText(builtin, p, await textOrNull(deps, base, p))) unselected.push(p);
+    else if (
+      isDesignText(builtin, p, await textOrNull(deps, head, p)) ||
+      isDesignText(builtin, p, await textOrNull(deps, base, p))
+    )
+      unselected.push(p);
   }
   if (unselected.length === 0) return undefined;
-  const globs = dead.map((g) => `designs glob "${g.glob}" (${g.where.file}:${g.where.line}:${g.where.column})`).join(', ');
-  const shown = unselected.slice(0, UNSELECTED_SHOWN).join(', ') + (unselected.length > UNSELECTED_SHOWN ? `, and ${unselected.length - UNSELECTED_SHOWN} more` : '');
+  const globs = dead
+    .map((g) => `designs glob "${g.glob}" (${g.where.file}:${g.where.line}:${g.where.column})`)
+    .join(', ');
+  const shown =
+    unselected.slice(0, UNSELECTED_SHOWN).join(', ') +
+    (unselected.length > UNSELECTED_SHOWN ? `, and ${unselected.length - UNSELECTED_SHOWN} more` : '');
   return (
     `${globs} ${dead.length === 1 ? 'matches' : 'match'} no file at the base or the head, and this change touches design files that no glob ` +
     `selects, so they were not judged: ${shown}; check the glob`
@@ -373,7 +493,11 @@ function problemOf(e: NetbraceError): NonNullable<CompareInput['headError']> {
  * A file's text at a revision; null when absent. A file that cannot be read as text (not UTF-8,
  * decode.ts) is that file's located problem, so the other files are still judged.
  */
-async function readSide(deps: GateDeps, rev: Revision, path: string): Promise<string | null | { error: NonNullable<CompareInput['headError']> }> {
+async function readSide(
+  deps: GateDeps,
+  rev: Revision,
+  path: string,
+): Promise<string | null | { error: NonNullable<CompareInput['headError']> }> {
   try {
     return await deps.readAt(rev, path);
   } catch (e) {
@@ -392,7 +516,10 @@ function compileText(
   path: string,
   format: DesignFormat | undefined,
   rValue: FilePolicy['rValue'],
-): { graph: CompactGraph; topology: Topology } | { error: NonNullable<CompareInput['headError']> } | { unsupported: NonNullable<CompareInput['headUnsupported']> } {
+):
+  | { graph: CompactGraph; topology: Topology }
+  | { error: NonNullable<CompareInput['headError']> }
+  | { unsupported: NonNullable<CompareInput['headUnsupported']> } {
   try {
     const topology = parseDesign(text, path, format ? { format } : {});
     const graph = compileTopology(topology);
@@ -408,16 +535,27 @@ function compileText(
 }
 
 function validateRequest(request: GateRequest): void {
-  if (request.mode !== 'block' && request.mode !== 'inform') throw new UsageError(`mode must be block or inform, not ${String(request.mode)}`);
+  if (request.mode !== 'block' && request.mode !== 'inform')
+    throw new UsageError(`mode must be block or inform, not ${String(request.mode)}`);
   if (request.policySource !== 'base' && request.policySource !== 'head') {
     throw new UsageError(`policy-source must be base or head, not ${String(request.policySource)}`);
   }
-  if (request.part && request.join) throw new UsageError('a join judges no part of its own', 'leave out --part when joining part reports');
+  if (request.part && request.join)
+    throw new UsageError('a join judges no part of its own', 'leave out --part when joining part reports');
   const s = request.part;
-  if (s && !(Number.isInteger(s.index) && Number.isInteger(s.total) && s.total >= 1 && s.index >= 1 && s.index <= s.total)) {
-    throw new UsageError(`part ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, 'e.g. 2/4 for the second of four parts');
+  if (
+    s &&
+    !(Number.isInteger(s.index) && Number.isInteger(s.total) && s.total >= 1 && s.index >= 1 && s.index <= s.total)
+  ) {
+    throw new UsageError(
+      `part ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`,
+      'e.g. 2/4 for the second of four parts',
+    );
   }
-  if (request.seed !== undefined && !(Number.isInteger(request.seed) && request.seed >= 0 && request.seed <= 0xffffffff)) {
+  if (
+    request.seed !== undefined &&
+    !(Number.isInteger(request.seed) && request.seed >= 0 && request.seed <= 0xffffffff)
+  ) {
     throw new UsageError(`seed must be a whole number from 0 to 4294967295, not ${request.seed}`);
   }
   if (request.threads !== undefined && !(Number.isInteger(request.threads) && request.threads >= 1)) {
@@ -485,7 +623,15 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
               same = true; // identical text: the same evaluation, delta exactly 0
             } else if (baseText !== null) {
               // The base may be another file in another format (a design moved and converted).
-              const b = typeof baseText === 'string' ? compileText(baseText, basePath, basePath === c.path ? fp.format : designFormat(policy, basePath), fp.rValue) : baseText;
+              const b =
+                typeof baseText === 'string'
+                  ? compileText(
+                      baseText,
+                      basePath,
+                      basePath === c.path ? fp.format : designFormat(policy, basePath),
+                      fp.rValue,
+                    )
+                  : baseText;
               if ('error' in b) input.baseError = b.error;
               else if ('unsupported' in b) input.baseError = b.unsupported;
               else {
@@ -496,10 +642,17 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
           }
           // Only ids spelt differently: one evaluation judges both sides (delta exactly 0), and
           // the base keeps its own graph so that the renames are still listed.
-          const oneEvaluation = same || (baseGraph !== undefined && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph)));
-          const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, oneEvaluation ? undefined : baseGraph);
+          const oneEvaluation =
+            same || (baseGraph !== undefined && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph)));
+          const specs = budgetSpecs(
+            evaluationSpecs(fp, seed),
+            fp.budget.maxWork,
+            h.graph,
+            oneEvaluation ? undefined : baseGraph,
+          );
           const otherGraph = oneEvaluation ? undefined : baseGraph;
-          const isSplit = !deps.evaluate && splitAcrossParts(part?.total ?? join?.total ?? 1, specs.head, h.graph, otherGraph);
+          const isSplit =
+            !deps.evaluate && splitAcrossParts(part?.total ?? join?.total ?? 1, specs.head, h.graph, otherGraph);
           if (join && isSplit !== join.split.has(c.path)) {
             throw new UsageError(
               `${c.path} was ${isSplit ? 'not ' : ''}split across the parts, and would be ${isSplit ? '' : 'not '}here`,
@@ -507,22 +660,45 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
             );
           }
           if (part && isSplit) {
-            const sides = [{ side: 'head' as const, graph: h.graph, specs: specs.head }, ...(otherGraph ? [{ side: 'base' as const, graph: otherGraph, specs: specs.base! }] : [])];
+            const sides = [
+              { side: 'head' as const, graph: h.graph, specs: specs.head },
+              ...(otherGraph ? [{ side: 'base' as const, graph: otherGraph, specs: specs.base! }] : []),
+            ];
             share = await splitShare(c.path, part, sides, request, deps);
           } else if (!onlyIfSplit || isSplit) {
             evaluated = true;
             if (join && isSplit) fileDeps = { ...deps, runTasks: servedTasks(join, c.path, h.graph, otherGraph, deps) };
             if (!fileDeps.evaluate && sequentialRun(request, specs.head, h.graph, otherGraph)) {
-              const sides = await evaluateSequentially(fp, { graph: h.graph, topology: h.topology }, otherGraph && { graph: otherGraph, topology: baseTopology! }, specs, !thresholdsOnly && (same || baseGraph !== undefined), request, fileDeps);
+              const sides = await evaluateSequentially(
+                fp,
+                { graph: h.graph, topology: h.topology },
+                otherGraph && { graph: otherGraph, topology: baseTopology! },
+                specs,
+                !thresholdsOnly && (same || baseGraph !== undefined),
+                request,
+                fileDeps,
+              );
               input.head = sides.head;
               if (same) input.base = input.head;
-              else if (baseGraph) input.base = oneEvaluation ? { graph: baseGraph, topology: baseTopology!, result: input.head.result } : sides.base!;
+              else if (baseGraph)
+                input.base = oneEvaluation
+                  ? { graph: baseGraph, topology: baseTopology!, result: input.head.result }
+                  : sides.base!;
             } else {
               input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request, fileDeps);
               if (same) input.base = input.head;
               else if (baseGraph) {
-                if (oneEvaluation) input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
-                else input.base = await evaluateGraph(baseGraph, baseTopology!, specs.base!, specs.cuts, request, fileDeps);
+                if (oneEvaluation)
+                  input.base = { graph: baseGraph, topology: baseTopology!, result: input.head.result };
+                else
+                  input.base = await evaluateGraph(
+                    baseGraph,
+                    baseTopology!,
+                    specs.base!,
+                    specs.cuts,
+                    request,
+                    fileDeps,
+                  );
               }
             }
           }
@@ -535,17 +711,39 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
     }
     if (onlyIfSplit && !evaluated) {
       if (!join) continue;
-      throw new UsageError(`no part report judges ${c.path} (part ${(fnv1a32(c.path) % join.total) + 1}/${join.total} would)`, 'join the part reports of one run: the same revisions, policy and seed');
+      throw new UsageError(
+        `no part report judges ${c.path} (part ${(fnv1a32(c.path) % join.total) + 1}/${join.total} would)`,
+        'join the part reports of one run: the same revisions, policy and seed',
+      );
     }
     const judged = compareDesign(input);
     if (headWarnings.length) {
-      judged.warnings = headWarnings.slice(0, DESIGN_WARNINGS_KEPT).map((w) => ({ message: w.message, line: w.line, column: w.column, ...(w.hint ? { hint: w.hint } : {}) }));
+      judged.warnings = headWarnings
+        .slice(0, DESIGN_WARNINGS_KEPT)
+        .map((w) => ({ message: w.message, line: w.line, column: w.column, ...(w.hint ? { hint: w.hint } : {}) }));
     }
-    await addMapAndMend(judged, input, { request, deps: fileDeps, head, ...(base !== undefined ? { base } : {}), seed });
+    await addMapAndMend(judged, input, {
+      request,
+      deps: fileDeps,
+      head,
+      ...(base !== undefined ? { base } : {}),
+      seed,
+    });
     files.push(judged);
   }
 
-  const report = assembleReport({ mode: request.mode, policy: info, ...(base !== undefined ? { base } : {}), head, seed, ...(request.part ? { part: request.part } : {}), scope }, files);
+  const report = assembleReport(
+    {
+      mode: request.mode,
+      policy: info,
+      ...(base !== undefined ? { base } : {}),
+      head,
+      seed,
+      ...(request.part ? { part: request.part } : {}),
+      scope,
+    },
+    files,
+  );
   if (split.length) report.split = split;
   return { report, exitCode: exitCodeOf(report) };
 }

@@ -14,7 +14,8 @@ import { readDesign } from '../src/shell/read-design.js';
 import { readInsideSync } from '../src/shell/workspace.js';
 
 const enc = new TextEncoder();
-const bytes = (...parts: (string | number[])[]) => new Uint8Array(parts.flatMap((p) => (typeof p === 'string' ? [...enc.encode(p)] : p)));
+const bytes = (...parts: (string | number[])[]) =>
+  new Uint8Array(parts.flatMap((p) => (typeof p === 'string' ? [...enc.encode(p)] : p)));
 /** ISO 8859-1 maps each character U+0000–U+00FF to the byte of the same value. */
 const latin1 = (s: string) => new Uint8Array([...s].map((c) => c.charCodeAt(0)));
 function utf16(s: string, littleEndian: boolean): Uint8Array {
@@ -49,13 +50,17 @@ describe('decodeText', () => {
   it('Latin-1: refused at the first byte that is not UTF-8, with line, column and the encoding named', () => {
     const e = refusal(latin1(DESIGN));
     // "Mühle": ü is 0xFC in ISO 8859-1, on line 3 after "    label: M" (12 characters).
-    expect(e.format()).toBe('net/a.net.yaml:3:13: not UTF-8: byte 0xFC at line 3, column 13; it looks like Latin-1 (ISO 8859-1) — save the file as UTF-8');
+    expect(e.format()).toBe(
+      'net/a.net.yaml:3:13: not UTF-8: byte 0xFC at line 3, column 13; it looks like Latin-1 (ISO 8859-1) — save the file as UTF-8',
+    );
     expect(e.kind).toBe('design');
   });
 
   it('Windows-1252 (bytes 0x80–0x9F used for quotes and €) and files that mix in UTF-8 are named as such', () => {
     // “ and ” are 0x93 and 0x94 in Windows-1252 (its code page table); € is 0x80.
-    expect(refusal(bytes('label: ', [0x93], 'quoted', [0x94], '\n')).message).toBe('not UTF-8: byte 0x93 at line 1, column 8; it looks like Windows-1252');
+    expect(refusal(bytes('label: ', [0x93], 'quoted', [0x94], '\n')).message).toBe(
+      'not UTF-8: byte 0x93 at line 1, column 8; it looks like Windows-1252',
+    );
     const mixed = refusal(bytes('a: é\nb: ', [0xe9], '\n'));
     expect([mixed.line, mixed.column]).toEqual([2, 4]);
     expect(mixed.message).toContain('it mixes UTF-8 with another encoding, which looks like Latin-1 (ISO 8859-1)');
@@ -73,22 +78,44 @@ describe('decodeText', () => {
     expect(refusal(new Uint8Array([...utf16('ab\nc', true), 0x00, 0xd8, 0x41, 0x00])).format()).toBe(
       'net/a.net.yaml:2:2: not valid UTF-16: a lone surrogate 0xD800 — save the file as UTF-8',
     );
-    expect(refusal(new Uint8Array([...utf16('ab', true), 0x41])).message).toBe('not valid UTF-16: the file ends in the middle of a character (an odd number of bytes)');
+    expect(refusal(new Uint8Array([...utf16('ab', true), 0x41])).message).toBe(
+      'not valid UTF-16: the file ends in the middle of a character (an odd number of bytes)',
+    );
     expect(refusal(new Uint8Array([0x61, 0, 0x62, 0, 0x0a, 0])).message).toBe(
       'not UTF-8 text: a NUL character at line 1, column 2; it looks like UTF-16 without a byte-order mark',
     );
-    expect(refusal(new Uint8Array([0xff, 0xfe, 0, 0, 0x61, 0, 0, 0])).message).toBe('not UTF-8: the file starts with a UTF-32 byte-order mark');
-    expect(refusal(bytes('nodes: [', Array(40).fill(0x41), [0])).message).toContain('a NUL character at line 1, column 49; it looks like a binary file');
+    expect(refusal(new Uint8Array([0xff, 0xfe, 0, 0, 0x61, 0, 0, 0])).message).toBe(
+      'not UTF-8: the file starts with a UTF-32 byte-order mark',
+    );
+    expect(refusal(bytes('nodes: [', Array(40).fill(0x41), [0])).message).toContain(
+      'a NUL character at line 1, column 49; it looks like a binary file',
+    );
   });
 
   it('RFC 3629 §3–4 edge cases: overlong forms, surrogates, past U+10FFFF, truncated sequences', () => {
     // Well-formed boundaries: U+007F, U+0080, U+07FF, U+0800, U+FFFF, U+10000, U+10FFFF.
-    for (const ok of [[0x7f], [0xc2, 0x80], [0xdf, 0xbf], [0xe0, 0xa0, 0x80], [0xef, 0xbf, 0xbf], [0xf0, 0x90, 0x80, 0x80], [0xf4, 0x8f, 0xbf, 0xbf]]) {
+    for (const ok of [
+      [0x7f],
+      [0xc2, 0x80],
+      [0xdf, 0xbf],
+      [0xe0, 0xa0, 0x80],
+      [0xef, 0xbf, 0xbf],
+      [0xf0, 0x90, 0x80, 0x80],
+      [0xf4, 0x8f, 0xbf, 0xbf],
+    ]) {
       expect(firstInvalidUtf8(new Uint8Array(ok)), ok.join(',')).toBe(-1);
     }
     // Overlong "/" (C0 AF), overlong U+0000 (E0 80 80), a surrogate (ED A0 80), U+110000 (F4 90 80 80),
     // F5, a lone continuation byte, and a sequence cut off by the end of the file.
-    for (const bad of [[0xc0, 0xaf], [0xe0, 0x80, 0x80], [0xed, 0xa0, 0x80], [0xf4, 0x90, 0x80, 0x80], [0xf5, 0x80, 0x80, 0x80], [0x80], [0xe2, 0x82]]) {
+    for (const bad of [
+      [0xc0, 0xaf],
+      [0xe0, 0x80, 0x80],
+      [0xed, 0xa0, 0x80],
+      [0xf4, 0x90, 0x80, 0x80],
+      [0xf5, 0x80, 0x80, 0x80],
+      [0x80],
+      [0xe2, 0x82],
+    ]) {
       expect(firstInvalidUtf8(new Uint8Array([0x61, ...bad])), bad.join(',')).toBe(1);
     }
   });
@@ -127,7 +154,9 @@ describe('every file reader decodes the same way', () => {
   };
   const git = (cwd: string, ...args: string[]) => execFileSync('git', args, { cwd, encoding: 'utf8' }).trim();
   const expectRefusal = (e: unknown, file: string) => {
-    expect(isNetbraceError(e) && e.format()).toBe(`${file}:3:13: not UTF-8: byte 0xFC at line 3, column 13; it looks like Latin-1 (ISO 8859-1) — save the file as UTF-8`);
+    expect(isNetbraceError(e) && e.format()).toBe(
+      `${file}:3:13: not UTF-8: byte 0xFC at line 3, column 13; it looks like Latin-1 (ISO 8859-1) — save the file as UTF-8`,
+    );
   };
 
   it('git (a commit), the working tree and readDesign refuse a Latin-1 file and read UTF-16', async () => {

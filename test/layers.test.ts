@@ -71,7 +71,8 @@ export function importsOf(source: string, file: string): Import[] {
     const to = path.posix.normalize(path.posix.join(path.posix.dirname(file), spec)).replace(/\.js$/, '.ts');
     found.push({ from: file, to, typeOnly, line: text.slice(0, index).split('\n').length });
   };
-  for (const m of text.matchAll(/\b(import|export)\s+(type\s+)?(?:[\w*{}\s,$]*?\s+from\s+)?['"]([^'"]+)['"]/g)) add(m[3], Boolean(m[2]), m.index ?? 0);
+  for (const m of text.matchAll(/\b(import|export)\s+(type\s+)?(?:[\w*{}\s,$]*?\s+from\s+)?['"]([^'"]+)['"]/g))
+    add(m[3], Boolean(m[2]), m.index ?? 0);
   for (const m of text.matchAll(/\bimport\s*\(\s*['"]([^'"]+)['"]\s*\)/g)) add(m[1], false, m.index ?? 0);
   return found;
 }
@@ -96,7 +97,10 @@ export function layerOf(file: string, layers = LAYERS): number {
 export function upwardImports(imports: readonly Import[], layers = LAYERS): string[] {
   return imports
     .filter((i) => i.to.endsWith('.ts') && layerOf(i.to, layers) > layerOf(i.from, layers))
-    .map((i) => `${i.from}:${i.line} (${layers[layerOf(i.from, layers)].name}) imports ${i.to} (${layers[layerOf(i.to, layers)].name})`);
+    .map(
+      (i) =>
+        `${i.from}:${i.line} (${layers[layerOf(i.from, layers)].name}) imports ${i.to} (${layers[layerOf(i.to, layers)].name})`,
+    );
 }
 
 /** The circles among the files (strongly connected components of more than one file, or a self-import). */
@@ -161,12 +165,16 @@ describe('layers', () => {
   });
 
   it('no import circle among the files', () => {
-    const allowed = (i: Import) => i.typeOnly && TYPE_CYCLES_ALLOWED.some(([a, b]) => (i.from === a && i.to === b) || (i.from === b && i.to === a));
+    const allowed = (i: Import) =>
+      i.typeOnly && TYPE_CYCLES_ALLOWED.some(([a, b]) => (i.from === a && i.to === b) || (i.from === b && i.to === a));
     expect(cycles(imports.filter((i) => !allowed(i)))).toEqual([]);
     // The exception stays what it says: type-only imports, both ways.
     for (const [a, b] of TYPE_CYCLES_ALLOWED) {
       const between = imports.filter((i) => (i.from === a && i.to === b) || (i.from === b && i.to === a));
-      expect(between.every((i) => i.typeOnly), JSON.stringify(between)).toBe(true);
+      expect(
+        between.every((i) => i.typeOnly),
+        JSON.stringify(between),
+      ).toBe(true);
     }
   });
 

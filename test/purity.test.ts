@@ -22,7 +22,9 @@ export function violations(source: string, relPath: string): string[] {
   const found: string[] = [];
   const lines = stripComments(source).split('\n');
   lines.forEach((line, i) => {
-    const specifiers = [...line.matchAll(/(?:\bfrom\s*|\bimport\s*\(\s*|\bimport\s+|\brequire\s*\(\s*)['"]([^'"]+)['"]/g)].map((m) => m[1]);
+    const specifiers = [
+      ...line.matchAll(/(?:\bfrom\s*|\bimport\s*\(\s*|\bimport\s+|\brequire\s*\(\s*)['"]([^'"]+)['"]/g),
+    ].map((m) => m[1]);
     for (const spec of specifiers) {
       if (!FORBIDDEN_MODULES.some((re) => re.test(spec))) continue;
       if (inParallel && PARALLEL_ALLOWED.some((re) => re.test(spec))) continue;
@@ -54,7 +56,7 @@ describe('the core is pure', () => {
       "import { Worker } from 'node:worker_threads';",
       "import * as core from '@actions/core';",
       'const home = process.env.HOME;',
-      "const x = globalThis.process;",
+      'const x = globalThis.process;',
       "const y = require('fs');",
     ];
     bad.forEach((line) => expect(violations(line, 'src/metrics/x.ts'), line).toHaveLength(1));
@@ -66,7 +68,9 @@ describe('the core is pure', () => {
       "import { tmpdir } from 'node:os';",
     ];
     fine.forEach((line) => expect(violations(line, 'src/metrics/x.ts'), line).toEqual([]));
-    expect(violations("import { Worker } from 'node:worker_threads';\nimport os from 'node:os';", 'src/parallel/pool.ts')).toEqual([]);
+    expect(
+      violations("import { Worker } from 'node:worker_threads';\nimport os from 'node:os';", 'src/parallel/pool.ts'),
+    ).toEqual([]);
     expect(violations("import fs from 'node:fs';\nprocess.cwd();", 'src/parallel/pool.ts')).toHaveLength(2);
   });
 
@@ -74,7 +78,9 @@ describe('the core is pure', () => {
     const src = path.join(repoRoot, 'src');
     const files = sourceFiles(src).filter((f) => !path.relative(src, f).startsWith(`shell${path.sep}`));
     expect(files.length).toBeGreaterThan(10);
-    const found = files.flatMap((f) => violations(readFileSync(f, 'utf8'), path.relative(repoRoot, f).split(path.sep).join('/')));
+    const found = files.flatMap((f) =>
+      violations(readFileSync(f, 'utf8'), path.relative(repoRoot, f).split(path.sep).join('/')),
+    );
     expect(found).toEqual([]);
   });
 });

@@ -55,7 +55,9 @@ describe('trusted policy', () => {
   });
 
   it('a missing explicit policy file is a usage error', async () => {
-    await expect(runGate({ ...request, policyPath: 'nope.yaml' }, memoryDeps(pairRepo('unchanged')))).rejects.toBeInstanceOf(UsageError);
+    await expect(
+      runGate({ ...request, policyPath: 'nope.yaml' }, memoryDeps(pairRepo('unchanged'))),
+    ).rejects.toBeInstanceOf(UsageError);
   });
 
   it('a scope that loosens an inherited floor stops the run with both lines, before any evaluation', async () => {
@@ -69,7 +71,9 @@ describe('trusted policy', () => {
     const e = error as PolicyError;
     expect([e.file, e.line]).toEqual(['.netbrace.yaml', 8]);
     expect(e.related.map((r) => [r.file, r.line])).toEqual([['org.yaml', 5]]);
-    expect(e.format()).toMatch(/^\.netbrace\.yaml:8:14: scope 1, requirement 1 loosens n-1:link: min 0\.5 where min 0\.7 is required/);
+    expect(e.format()).toMatch(
+      /^\.netbrace\.yaml:8:14: scope 1, requirement 1 loosens n-1:link: min 0\.5 where min 0\.7 is required/,
+    );
     expect(evaluate).not.toHaveBeenCalled();
   });
 
@@ -77,7 +81,11 @@ describe('trusted policy', () => {
     const repo = pairRepo('redundant-link');
     repo.base['.netbrace.yaml'] = 'seed: -1\n';
     const evaluate = spy();
-    await expect(runGate(request, memoryDeps(repo, { evaluate }))).rejects.toMatchObject({ kind: 'policy', line: 1, column: 7 });
+    await expect(runGate(request, memoryDeps(repo, { evaluate }))).rejects.toMatchObject({
+      kind: 'policy',
+      line: 1,
+      column: 7,
+    });
     expect(evaluate).not.toHaveBeenCalled();
   });
 });
@@ -154,7 +162,9 @@ describe('determinism, parts and joining', () => {
   it('parts are a deterministic partition by path hash, and joined they give the report of the whole', async () => {
     const repo = manyDesigns();
     const whole = await runGate(request, memoryDeps(repo));
-    const parts = await Promise.all([1, 2, 3].map((index) => runGate({ ...request, part: { index, total: 3 } }, memoryDeps(repo))));
+    const parts = await Promise.all(
+      [1, 2, 3].map((index) => runGate({ ...request, part: { index, total: 3 } }, memoryDeps(repo))),
+    );
     const paths = parts.map((s) => s.report.files.map((f) => f.path));
     expect(paths.flat().sort()).toEqual(whole.report.files.map((f) => f.path));
     expect(new Set(paths.flat()).size).toBe(paths.flat().length);
@@ -188,7 +198,16 @@ describe('determinism, parts and joining', () => {
       seed: 1,
       files: [{ path: 'a.gml', status: 'holds', findings: [], requirements: [] }],
     };
-    const failing = { ...old, files: [{ path: 'b.gml', status: 'unreadable', findings: [{ rule: 'parse-error', severity: 'fail', message: 'x', elements: [], line: 3 }] }] };
+    const failing = {
+      ...old,
+      files: [
+        {
+          path: 'b.gml',
+          status: 'unreadable',
+          findings: [{ rule: 'parse-error', severity: 'fail', message: 'x', elements: [], line: 3 }],
+        },
+      ],
+    };
     const joined = joinReports([old, failing]);
     expect(joined.version).toBe(REPORT_VERSION);
     expect(joined.files.map((f) => f.path)).toEqual(['a.gml', 'b.gml']);

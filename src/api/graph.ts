@@ -47,7 +47,9 @@ export type DesignGraph = MultiUndirectedGraph<NodeAttributes, LinkAttributes, D
 
 /** The design as a graphology multigraph: node keys are ids, edge keys are stable link keys. */
 export function toGraph(t: Topology): DesignGraph {
-  const g: DesignGraph = new MultiUndirectedGraph<NodeAttributes, LinkAttributes, DesignAttributes>({ allowSelfLoops: false });
+  const g: DesignGraph = new MultiUndirectedGraph<NodeAttributes, LinkAttributes, DesignAttributes>({
+    allowSelfLoops: false,
+  });
   const attributes: DesignAttributes = {
     file: t.file,
     format: t.format,
@@ -68,7 +70,13 @@ export function toGraph(t: Topology): DesignGraph {
     g.addNode(n.id, a);
   }
   for (const l of t.links) {
-    const a: LinkAttributes = { id: l.id, risk_groups: [...l.riskGroups], hardened: l.hardened, line: l.pos.line, attrs: { ...l.attrs } };
+    const a: LinkAttributes = {
+      id: l.id,
+      risk_groups: [...l.riskGroups],
+      hardened: l.hardened,
+      line: l.pos.line,
+      attrs: { ...l.attrs },
+    };
     if (l.length !== undefined) a.length_km = l.length;
     if (l.latency !== undefined) a.latency_ms = l.latency;
     if (l.capacity !== undefined) a.capacity_gbps = l.capacity;
@@ -126,7 +134,17 @@ export function fromGraph(g: AnyGraph, options: FromGraphOptions = {}): Topology
   });
   g.forEachEdge((key: string, raw: Loose, source: string, target: string) => {
     const a = raw as unknown as Loose;
-    const known = new Set(['id', 'length_km', 'latency_ms', 'capacity_gbps', 'weight', 'risk_groups', 'hardened', 'line', 'attrs']);
+    const known = new Set([
+      'id',
+      'length_km',
+      'latency_ms',
+      'capacity_gbps',
+      'weight',
+      'risk_groups',
+      'hardened',
+      'line',
+      'attrs',
+    ]);
     const attrs: Loose = { ...((a.attrs as Loose | undefined) ?? {}) };
     for (const [k, v] of Object.entries(a)) if (!known.has(k)) attrs[k] = v;
     i++;
@@ -150,9 +168,17 @@ export function fromGraph(g: AnyGraph, options: FromGraphOptions = {}): Topology
       what: `edge "${key}"`,
     });
   });
-  for (const r of ga.riskGroups ?? []) b.addRiskGroup({ id: String(r.id), ...(r.description !== undefined ? { description: r.description } : {}), pos: r.pos ?? { line: 1, column: 1 } });
-  for (const d of ga.demands ?? []) b.addDemand(String(d.source), String(d.target), d.volume, d.pos ?? { line: 1, column: 1 });
-  const extra: { name?: string; latencyBudget?: number; metadata?: Record<string, unknown> } = { metadata: { ...(ga.metadata ?? {}) } };
+  for (const r of ga.riskGroups ?? [])
+    b.addRiskGroup({
+      id: String(r.id),
+      ...(r.description !== undefined ? { description: r.description } : {}),
+      pos: r.pos ?? { line: 1, column: 1 },
+    });
+  for (const d of ga.demands ?? [])
+    b.addDemand(String(d.source), String(d.target), d.volume, d.pos ?? { line: 1, column: 1 });
+  const extra: { name?: string; latencyBudget?: number; metadata?: Record<string, unknown> } = {
+    metadata: { ...(ga.metadata ?? {}) },
+  };
   if (ga.name !== undefined) extra.name = ga.name;
   if (ga.latencyBudget !== undefined) extra.latencyBudget = ga.latencyBudget;
   const t = b.finish(extra);

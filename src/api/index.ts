@@ -15,7 +15,15 @@ import type { ParseOptions, Topology } from '../topology/model.js';
 import { parseDesign } from '../topology/parse.js';
 import { writeNativeJson } from '../topology/write-native.js';
 
-export { toGraph, fromGraph, type DesignGraph, type NodeAttributes, type LinkAttributes, type DesignAttributes, type FromGraphOptions } from './graph.js';
+export {
+  toGraph,
+  fromGraph,
+  type DesignGraph,
+  type NodeAttributes,
+  type LinkAttributes,
+  type DesignAttributes,
+  type FromGraphOptions,
+} from './graph.js';
 export type { Topology, TopoNode, TopoLink, RiskGroup, Demand, DesignFormat } from '../topology/model.js';
 export type { Report, FileReport, Finding, RequirementResult, Evaluation } from '../report/report.js';
 export { serializeReport } from '../report/report.js';
@@ -56,7 +64,10 @@ export interface CheckResult {
   exitCode: 0 | 1;
 }
 
-function memoryRepo(files: Record<string, DesignInput> | undefined, policy: Record<string, string>): Map<string, string> {
+function memoryRepo(
+  files: Record<string, DesignInput> | undefined,
+  policy: Record<string, string>,
+): Map<string, string> {
   const out = new Map<string, string>(Object.entries(policy));
   for (const [p, d] of Object.entries(files ?? {})) {
     const { path, text } = asText(p, d);

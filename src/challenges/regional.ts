@@ -14,7 +14,6 @@ import type { BandChallenge } from './types.js';
 import { makeGrid } from './grid.js';
 import { greatCircleKm } from '../topology/geodesy.js';
 
-
 /** Indices of nodes with both coordinates, in index (natural id) order. */
 export function sitesWithCoordinates(g: CompactGraph): number[] {
   const sites: number[] = [];
@@ -45,7 +44,8 @@ export const regional: BandChallenge = {
     const all = sitesWithCoordinates(g);
     // A work budget may cap the epicentres: then they are spread evenly over the sites in id order.
     const cap = params.epicentres ?? all.length;
-    const sites = cap >= all.length ? all : Array.from({ length: cap }, (_, r) => all[Math.floor((r * all.length) / cap)]);
+    const sites =
+      cap >= all.length ? all : Array.from({ length: cap }, (_, r) => all[Math.floor((r * all.length) / cap)]);
     const removable = all.filter((v) => g.nodeHardened[v] === 0);
     const dist = new Float64Array(removable.length);
     const idx = removable.map((_, i) => i);

@@ -58,10 +58,13 @@ export function resolveParams(g: CompactGraph, p: ChallengeParams, seed: number)
   const until = p.until ?? (p.challenge === 'regional' ? defaultRegionalUntil(g) : DEFAULTS.until);
   const fraction = p.challenge !== 'regional';
   if (!Number.isFinite(until) || until < 0 || (fraction && until > 1)) {
-    throw new RangeError(`${p.challenge}: until must be ${fraction ? 'a fraction in [0, 1]' : 'a radius ≥ 0 km'}, got ${until}`);
+    throw new RangeError(
+      `${p.challenge}: until must be ${fraction ? 'a fraction in [0, 1]' : 'a radius ≥ 0 km'}, got ${until}`,
+    );
   }
   const points = p.points ?? DEFAULTS.points;
-  if (!Number.isInteger(points) || points < 2) throw new RangeError(`${p.challenge}: points must be an integer ≥ 2, got ${points}`);
+  if (!Number.isInteger(points) || points < 2)
+    throw new RangeError(`${p.challenge}: points must be an integer ≥ 2, got ${points}`);
   const realizations = p.realizations ?? DEFAULTS.realizations;
   if (!Number.isInteger(realizations) || realizations < 1) {
     throw new RangeError(`${p.challenge}: realizations must be an integer ≥ 1, got ${realizations}`);
@@ -71,11 +74,14 @@ export function resolveParams(g: CompactGraph, p: ChallengeParams, seed: number)
     throw new RangeError(`${p.challenge}: band must be two quantiles 0 < lo < hi < 1, got ${band.join(',')}`);
   }
   const worstCase = p.worstCase ?? DEFAULTS.worstCase;
-  if (!Number.isInteger(worstCase) || worstCase < 0) throw new RangeError(`${p.challenge}: worstCase must be an integer ≥ 0`);
-  if (p.beam !== undefined && (!Number.isInteger(p.beam) || p.beam < 1)) throw new RangeError(`${p.challenge}: beam must be an integer ≥ 1`);
+  if (!Number.isInteger(worstCase) || worstCase < 0)
+    throw new RangeError(`${p.challenge}: worstCase must be an integer ≥ 0`);
+  if (p.beam !== undefined && (!Number.isInteger(p.beam) || p.beam < 1))
+    throw new RangeError(`${p.challenge}: beam must be an integer ≥ 1`);
   const at = p.at ?? [];
   for (const x of at) {
-    if (!Number.isFinite(x) || x < 0 || (fraction && x > 1)) throw new RangeError(`${p.challenge}: grid point ${x} is out of range`);
+    if (!Number.isFinite(x) || x < 0 || (fraction && x > 1))
+      throw new RangeError(`${p.challenge}: grid point ${x} is out of range`);
   }
   return {
     challenge: p.challenge,

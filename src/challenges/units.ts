@@ -31,7 +31,8 @@ export function eligibleUnits(g: CompactGraph, kind: ElementKind): Uint8Array {
 export function isEligible(g: CompactGraph, kind: ElementKind, u: number): boolean {
   if (kind === 'node') return g.nodeHardened[u] === 0;
   if (kind === 'link') return g.linkHardened[u] === 0;
-  for (let p = g.groupOffsets[u]; p < g.groupOffsets[u + 1]; p++) if (g.linkHardened[g.groupLinks[p]] === 0) return true;
+  for (let p = g.groupOffsets[u]; p < g.groupOffsets[u + 1]; p++)
+    if (g.linkHardened[g.groupLinks[p]] === 0) return true;
   return false;
 }
 

@@ -15,7 +15,12 @@ import type { Contingency, RValueSpec, WorstCase } from './types.js';
 import type { ChallengeName } from '../challenges/types.js';
 import type { ElementKind } from '../graph/element.js';
 import { createRValue, unionFindR, type RFunction } from './r-value.js';
-import { connectivityCurve, createUnionFindWorkspace, type ConnectivityCurve, type UnionFindWorkspace } from './union-find.js';
+import {
+  connectivityCurve,
+  createUnionFindWorkspace,
+  type ConnectivityCurve,
+  type UnionFindWorkspace,
+} from './union-find.js';
 import { evaluateContingency } from './contingency.js';
 import { searchWorstCase } from './worst-case.js';
 
@@ -77,7 +82,7 @@ export function planTasks(plan: EvaluationPlan, g: CompactGraph): Task[] {
     if (it.type === 'band') {
       const m = realizationCount(g, it);
       const chunk = chunkSize(m);
-      for (let from = 0; from < m; ) {
+      for (let from = 0; from < m;) {
         const to = Math.min(m, from + chunk - (from % chunk), BATCH * (Math.floor(from / BATCH) + 1));
         tasks.push({ type: 'band', item, from, to });
         from = to;
@@ -158,7 +163,13 @@ export class StepEvaluator {
    * (a fraction of the units, units.ts countAt) reads R linearly between ⌊c⌋ and ⌈c⌉ removals of
    * this same order, so `order` must hold ⌈c⌉ units; a whole count is R there exactly.
    */
-  at(kind: ElementKind, order: ArrayLike<number>, len: number, steps: ArrayLike<number>, out: Float64Array): Float64Array {
+  at(
+    kind: ElementKind,
+    order: ArrayLike<number>,
+    len: number,
+    steps: ArrayLike<number>,
+    out: Float64Array,
+  ): Float64Array {
     if (this.ufr !== null) {
       // One curve gives every whole count; a real count costs one more lookup.
       const curve = connectivityCurve(this.g, kind, order, len, this.ws!);

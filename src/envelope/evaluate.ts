@@ -29,7 +29,15 @@ import { findComponents, findCutElements } from '../graph/structure.js';
 import type { Evaluation, StructureSummary } from './types.js';
 import { getChallenge, resolveParams } from '../challenges/registry.js';
 import { sitesWithCoordinates } from '../challenges/regional.js';
-import { countAt, countOnes, eligibleUnits, removeUnit, unitCount, unitIds, valueAtCount } from '../challenges/units.js';
+import {
+  countAt,
+  countOnes,
+  eligibleUnits,
+  removeUnit,
+  unitCount,
+  unitIds,
+  valueAtCount,
+} from '../challenges/units.js';
 import type { AttackCurve, Contingency, Envelope, RValueSpec, RemovalSequence, WorstCase } from './types.js';
 import type { ChallengeName, ChallengeParams } from '../challenges/types.js';
 import { unionFindR, unsupportedMetric, UnsupportedMetricError, validateRSpec } from './r-value.js';
@@ -119,7 +127,10 @@ export function planEvaluation(g: CompactGraph, spec: EvaluationSpec): Evaluatio
       notApplicable.push({ challenge: 'regional', reason: 'no site has coordinates (lat/lon)' });
       continue;
     }
-    if ((p.challenge === 'risk-groups' || p.challenge === 'risk-groups-worst') && countOnes(eligibleUnits(g, 'group')) === 0) {
+    if (
+      (p.challenge === 'risk-groups' || p.challenge === 'risk-groups-worst') &&
+      countOnes(eligibleUnits(g, 'group')) === 0
+    ) {
       notApplicable.push({ challenge: p.challenge, reason: 'the design has no shared-risk group that can fail' });
       continue;
     }
@@ -245,7 +256,9 @@ function bandRealizationCost(c: CostModel, p: PlannedChallenge['params']): numbe
     for (let r = 0; r < samples; r++) {
       const len = bp.realize(r, order, steps);
       // A real count x·N costs R at both neighbouring whole counts.
-      const counts = new Set(Array.from(steps).flatMap((v) => [Math.floor(v), Math.ceil(v)].map((k) => Math.min(k, len))));
+      const counts = new Set(
+        Array.from(steps).flatMap((v) => [Math.floor(v), Math.ceil(v)].map((k) => Math.min(k, len))),
+      );
       for (const k of counts) sum += c.along(bp.kind, order, k);
     }
     return sum / samples;
@@ -266,7 +279,9 @@ function attackCurveCost(c: CostModel, p: PlannedChallenge['params'], kind: Elem
     }
     if (!order) return (k + 1) * c.intact;
     const len = Math.min(k, order.length);
-    const at = [...new Set(Array.from({ length: ATTACK_SAMPLES }, (_, i) => Math.round((i * len) / (ATTACK_SAMPLES - 1))))];
+    const at = [
+      ...new Set(Array.from({ length: ATTACK_SAMPLES }, (_, i) => Math.round((i * len) / (ATTACK_SAMPLES - 1)))),
+    ];
     const cost = at.map((s) => c.along(kind, order, s));
     // Trapezoids between the sampled steps: every step 0..len is one evaluation.
     let sum = cost[0];
@@ -290,7 +305,10 @@ function estimate(g: CompactGraph, it: PlannedChallenge, c: CostModel): Estimate
   } else if (it.type === 'attack') {
     const k = attackSteps(g, kind, p.until);
     const groups = g.groupIds.length;
-    const ranking = p.challenge === 'risk-groups-worst' ? ((groups * (groups + 1)) / 2) * c.intact : RANKING_PASSES[p.challenge]!(g.n, k) * c.pass;
+    const ranking =
+      p.challenge === 'risk-groups-worst'
+        ? ((groups * (groups + 1)) / 2) * c.intact
+        : RANKING_PASSES[p.challenge]!(g.n, k) * c.pass;
     e.fixed = ranking + (free ? c.pass : attackCurveCost(c, p, kind, k));
   } else {
     const order = p.challenge === 'n-2' ? 2 : 1;
@@ -310,7 +328,12 @@ function estimate(g: CompactGraph, it: PlannedChallenge, c: CostModel): Estimate
 export function evaluateDesign(g: CompactGraph, spec: EvaluationSpec): DesignEvaluation {
   const plan = planEvaluation(g, spec);
   const tasks = planTasks(plan, g);
-  return assembleEvaluation(g, plan, tasks, tasks.map((t) => runTask(g, plan, t)));
+  return assembleEvaluation(
+    g,
+    plan,
+    tasks,
+    tasks.map((t) => runTask(g, plan, t)),
+  );
 }
 
 /**
@@ -360,23 +383,37 @@ export function pendingTasks(st: StagedEvaluation, upto: number): number[] {
 export function snapshotEvaluation(st: StagedEvaluation, upto: number): DesignEvaluation {
   const items = st.plan.items.map((it) => {
     if (!staged(it) || it.params.realizations <= upto) return it;
-    const degraded = (it.degraded ?? '').split('; ').filter((d) => d !== '' && !d.startsWith('realizations reduced from')).join('; ');
+    const degraded = (it.degraded ?? '')
+      .split('; ')
+      .filter((d) => d !== '' && !d.startsWith('realizations reduced from'))
+      .join('; ');
     const out: PlannedChallenge = { ...it, params: { ...it.params, realizations: upto } };
     if (degraded) out.degraded = degraded;
     else delete out.degraded;
     return out;
   });
-  const plan: EvaluationPlan = { ...st.plan, items, degraded: items.flatMap((it) => (it.degraded ? [`${it.params.challenge}: ${it.degraded}`] : [])) };
-  const keep = st.tasks.map((_t, i) => i).filter((i) => {
-    const t = st.tasks[i];
-    return !(t.type === 'band' && staged(st.plan.items[t.item]) && t.from >= upto);
-  });
+  const plan: EvaluationPlan = {
+    ...st.plan,
+    items,
+    degraded: items.flatMap((it) => (it.degraded ? [`${it.params.challenge}: ${it.degraded}`] : [])),
+  };
+  const keep = st.tasks
+    .map((_t, i) => i)
+    .filter((i) => {
+      const t = st.tasks[i];
+      return !(t.type === 'band' && staged(st.plan.items[t.item]) && t.from >= upto);
+    });
   const results = keep.map((i) => {
     const r = st.results[i];
     if (r === undefined) throw new Error(`task ${i} has not run`);
     return r;
   });
-  const out = assembleEvaluation(st.g, plan, keep.map((i) => st.tasks[i]), results);
+  const out = assembleEvaluation(
+    st.g,
+    plan,
+    keep.map((i) => st.tasks[i]),
+    results,
+  );
   st.plan.items.forEach((it, i) => {
     if (items[i] === it) return;
     const env = out.evaluation.envelopes.find((e) => e.challenge === it.params.challenge);
@@ -399,7 +436,12 @@ export function structureSummary(g: CompactGraph): StructureSummary {
 }
 
 /** Merges task results (in task order) into the evaluation. */
-export function assembleEvaluation(g: CompactGraph, plan: EvaluationPlan, tasks: Task[], results: TaskResult[]): DesignEvaluation {
+export function assembleEvaluation(
+  g: CompactGraph,
+  plan: EvaluationPlan,
+  tasks: Task[],
+  results: TaskResult[],
+): DesignEvaluation {
   const samples = new Map<ChallengeName, Float64Array[]>();
   const labels = new Map<ChallengeName, string[]>();
   const evaluation: Evaluation = {
@@ -423,7 +465,11 @@ export function assembleEvaluation(g: CompactGraph, plan: EvaluationPlan, tasks:
       const bp = bandPlan(g, p);
       const env = buildEnvelope(g, it, bp, values, ev);
       samples.set(p.challenge, values);
-      if (bp.label) labels.set(p.challenge, values.map((_, r) => bp.label!(r)));
+      if (bp.label)
+        labels.set(
+          p.challenge,
+          values.map((_, r) => bp.label!(r)),
+        );
       envelopeOf.set(item, env);
       evaluation.envelopes.push(env);
     } else if (it.type === 'attack') {
@@ -446,10 +492,14 @@ export function assembleEvaluation(g: CompactGraph, plan: EvaluationPlan, tasks:
       attackOf.set(item, curve);
       evaluation.attacks.push(curve);
     } else {
-      const res = mine.find(({ res }) => res.type === 'contingency')!.res as Extract<TaskResult, { type: 'contingency' }>;
+      const res = mine.find(({ res }) => res.type === 'contingency')!.res as Extract<
+        TaskResult,
+        { type: 'contingency' }
+      >;
       evaluation.contingencies.push(res.result as Contingency);
     }
-    const worst = mine.find(({ res }) => res.type === 'worst')?.res as Extract<TaskResult, { type: 'worst' }> | undefined;
+    const worst = mine.find(({ res }) => res.type === 'worst')?.res as
+      Extract<TaskResult, { type: 'worst' }> | undefined;
     if (worst) {
       const target = envelopeOf.get(item) ?? attackOf.get(item);
       if (target) target.worstCase = worst.result as WorstCase;
@@ -509,7 +559,12 @@ function buildEnvelope(
 }
 
 /** The realizations with the lowest mean R over the grid (ties: lower index), with their sequences. */
-function weakestSequences(g: CompactGraph, bp: ReturnType<typeof bandPlan>, values: Float64Array[], ev: StepEvaluator): RemovalSequence[] {
+function weakestSequences(
+  g: CompactGraph,
+  bp: ReturnType<typeof bandPlan>,
+  values: Float64Array[],
+  ev: StepEvaluator,
+): RemovalSequence[] {
   const score = values.map((v) => gridMean(v));
   const picks = values
     .map((_, r) => r)
@@ -520,7 +575,12 @@ function weakestSequences(g: CompactGraph, bp: ReturnType<typeof bandPlan>, valu
   const steps = new Float64Array(bp.x.length);
   return picks.map((r) => {
     const len = bp.realize(r, order, steps);
-    const seq: RemovalSequence = { kind: bp.kind, elements: Array.from(order.subarray(0, len), (u) => ids[u]), values: [], realization: r };
+    const seq: RemovalSequence = {
+      kind: bp.kind,
+      elements: Array.from(order.subarray(0, len), (u) => ids[u]),
+      values: [],
+      realization: r,
+    };
     if (bp.label) seq.label = bp.label(r);
     if (ev.stepsAreFree) {
       seq.values = Array.from(ev.everyStep(bp.kind, order, len).subarray(1));
@@ -539,7 +599,8 @@ function weakestSequences(g: CompactGraph, bp: ReturnType<typeof bandPlan>, valu
       // Some grid values lie between two whole counts (x·N is not whole): R at those whole
       // counts, recomputed for these few sequences, so the steps stay removal counts.
       const whole = new Set<number>();
-      for (let j = 0; j < steps.length; j++) for (const k of [Math.floor(steps[j]), Math.ceil(steps[j])]) if (k > 0) whole.add(k);
+      for (let j = 0; j < steps.length; j++)
+        for (const k of [Math.floor(steps[j]), Math.ceil(steps[j])]) if (k > 0) whole.add(k);
       const at = [...whole].sort((a, b) => a - b);
       seq.values = Array.from(ev.at(bp.kind, order, len, at, new Float64Array(at.length)));
       seq.steps = at;

@@ -24,7 +24,8 @@ import type { DesignEvaluation } from './evaluate.js';
 import { gridIndex as indexOnGrid } from '../challenges/grid.js';
 import { countAt, valueAtCount } from '../challenges/units.js';
 
-export type Statistic = { kind: 'quantile'; q: number } | { kind: 'mean' } | { kind: 'min' } | { kind: 'area' } | { kind: 'spread' };
+export type Statistic =
+  { kind: 'quantile'; q: number } | { kind: 'mean' } | { kind: 'min' } | { kind: 'area' } | { kind: 'spread' };
 
 export interface PairedStatistic {
   base: number;
@@ -76,7 +77,10 @@ function deterministic(base: number, head: number): PairedStatistic {
 function gridIndex(env: Envelope, x: number | undefined, what: string): number {
   if (x === undefined) throw new RangeError(`${env.challenge}: the ${what} needs x`);
   const j = indexOnGrid(env.x, x);
-  if (j < 0) throw new RangeError(`${env.challenge}: x = ${x} is not a grid point (grid: ${env.x.join(', ')}); add it to the challenge's "at"`);
+  if (j < 0)
+    throw new RangeError(
+      `${env.challenge}: x = ${x} is not a grid point (grid: ${env.x.join(', ')}); add it to the challenge's "at"`,
+    );
   return j;
 }
 
@@ -118,7 +122,9 @@ function pairedBand(
         for (let k = 0; k < points; k++) {
           const col = sortedColumn(s, k);
           curve[k] =
-            statistic.kind === 'area' ? quantileSorted(col, 0.5) : quantileSorted(col, band[1]) - quantileSorted(col, band[0]);
+            statistic.kind === 'area'
+              ? quantileSorted(col, 0.5)
+              : quantileSorted(col, band[1]) - quantileSorted(col, band[0]);
         }
         return gridMean(curve);
       }
@@ -169,4 +175,3 @@ function pairedBand(
   const se = Math.sqrt(Math.max(0, s2 / BOOTSTRAP_ROUNDS - mean * mean) * (BOOTSTRAP_ROUNDS / (BOOTSTRAP_ROUNDS - 1)));
   return { base: b, head: h, delta: h - b, se };
 }
-

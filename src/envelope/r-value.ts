@@ -15,7 +15,8 @@ export type RFunction = (mask: Mask) => number;
 export function validateRSpec(spec: RValueSpec): void {
   if (spec.metrics.length === 0) throw new RangeError('the R-value needs at least one metric');
   for (const m of spec.metrics) {
-    if (!(m.weight > 0) || !Number.isFinite(m.weight)) throw new RangeError(`metric ${m.id}: weight must be > 0, got ${m.weight}`);
+    if (!(m.weight > 0) || !Number.isFinite(m.weight))
+      throw new RangeError(`metric ${m.id}: weight must be > 0, got ${m.weight}`);
   }
   if (spec.combine !== 'mean' && spec.combine !== 'min') throw new RangeError(`combine must be "mean" or "min"`);
 }
@@ -84,7 +85,10 @@ const UNION_FIND_METRICS: ReadonlySet<MetricId> = new Set(['largest_component', 
  * union–find curve (union-find.ts) with no per-step recomputation: returns that mapping, with
  * exactly the normalisations of the registry metrics. Otherwise null.
  */
-export function unionFindR(g: CompactGraph, spec: RValueSpec): ((curve: ConnectivityCurve, k: number) => number) | null {
+export function unionFindR(
+  g: CompactGraph,
+  spec: RValueSpec,
+): ((curve: ConnectivityCurve, k: number) => number) | null {
   if (!spec.metrics.every((m) => UNION_FIND_METRICS.has(m.id))) return null;
   const n = g.n;
   const allPairs = (n * (n - 1)) / 2;
@@ -93,13 +97,7 @@ export function unionFindR(g: CompactGraph, spec: RValueSpec): ((curve: Connecti
   return (curve, k) => {
     for (let i = 0; i < ids.length; i++) {
       values[i] =
-        ids[i] === 'largest_component'
-          ? n > 0
-            ? curve.lcc[k] / n
-            : 0
-          : allPairs > 0
-            ? curve.pairs[k] / allPairs
-            : 0;
+        ids[i] === 'largest_component' ? (n > 0 ? curve.lcc[k] / n : 0) : allPairs > 0 ? curve.pairs[k] / allPairs : 0;
     }
     return combineR(spec, values);
   };
@@ -111,7 +109,12 @@ export function unionFindR(g: CompactGraph, spec: RValueSpec): ((curve: Connecti
  * sparse products), flow N. The engine's budget multiplies passes by N + L.
  */
 export function rPasses(g: CompactGraph, spec: RValueSpec): number {
-  const passes: Record<CostClass, number> = { linear: 1, 'all-pairs': Math.max(1, g.n), spectral: 50, flow: Math.max(1, g.n) };
+  const passes: Record<CostClass, number> = {
+    linear: 1,
+    'all-pairs': Math.max(1, g.n),
+    spectral: 50,
+    flow: Math.max(1, g.n),
+  };
   let total = 0;
   for (const m of spec.metrics) total += passes[getMetric(m.id).cost];
   return total;

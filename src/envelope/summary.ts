@@ -26,12 +26,20 @@ export function quantileKey(q: number): string {
 }
 
 /** Column j of the realizations' grid values, sorted ascending. */
-export function sortedColumn(samples: readonly Float64Array[], j: number, out = new Float64Array(samples.length)): Float64Array {
+export function sortedColumn(
+  samples: readonly Float64Array[],
+  j: number,
+  out = new Float64Array(samples.length),
+): Float64Array {
   for (let i = 0; i < samples.length; i++) out[i] = samples[i][j];
   return out.sort();
 }
 
-export function gridStats(samples: readonly Float64Array[], points: number, band: readonly [number, number]): GridStats {
+export function gridStats(
+  samples: readonly Float64Array[],
+  points: number,
+  band: readonly [number, number],
+): GridStats {
   const qs = [...new Set([band[0], 0.5, band[1]])].sort((a, b) => a - b);
   const stats: GridStats = { min: [], max: [], mean: [], median: [], quantiles: {} };
   for (const q of qs) stats.quantiles[quantileKey(q)] = { value: [], lo: [], hi: [], se: [] };

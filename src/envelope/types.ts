@@ -114,7 +114,6 @@ export interface Contingency {
   min: number;
 }
 
-
 export interface StructureSummary {
   nodes: number;
   links: number;

@@ -117,7 +117,9 @@ export function searchWorstCase(
     // Lowest R first; then the lexicographically smallest set, so equal sets reached in
     // different orders are kept once and ties go to the lowest indices (natural id order).
     for (const c of candidates) c.key = [...c.parent.seq, c.u].sort((x, y) => x - y).join(',');
-    candidates.sort((x, y) => x.r - y.r || compareKeys(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u]));
+    candidates.sort(
+      (x, y) => x.r - y.r || compareKeys(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u]),
+    );
     const next: State[] = [];
     const seen = new Set<string>();
     for (const c of candidates) {

@@ -42,8 +42,14 @@ function withBudget(spec: EvaluationSpec, maxWork: number): EvaluationSpec {
 }
 
 /** Each run's share of a design's budget (see the file comment). */
-export function shareBudget(specs: readonly EvaluationSpec[], maxWork: number, graphs: readonly CompactGraph[]): number[] {
-  const need = specs.map((spec) => Math.max(...graphs.map((g) => planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work)));
+export function shareBudget(
+  specs: readonly EvaluationSpec[],
+  maxWork: number,
+  graphs: readonly CompactGraph[],
+): number[] {
+  const need = specs.map((spec) =>
+    Math.max(...graphs.map((g) => planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work)),
+  );
   const total = need.reduce((a, b) => a + b, 0);
   if (total <= maxWork) return specs.map(() => maxWork);
   return need.map((w) => Math.max(1, Math.floor((maxWork * w) / total)));
@@ -59,7 +65,12 @@ function bandCounts(g: CompactGraph, spec: EvaluationSpec): Map<ChallengeName, n
 }
 
 /** The engine requests for one design under a budget of `maxWork` element visits, paired across base and head. */
-export function budgetSpecs(specs: readonly EvaluationSpec[], maxWork: number, head: CompactGraph, base?: CompactGraph): BudgetedSpecs {
+export function budgetSpecs(
+  specs: readonly EvaluationSpec[],
+  maxWork: number,
+  head: CompactGraph,
+  base?: CompactGraph,
+): BudgetedSpecs {
   const shares = shareBudget(specs, maxWork, base ? [head, base] : [head]);
   const headSpecs = specs.map((s, i) => withBudget(s, shares[i]));
   if (!base) return { head: headSpecs, cuts: [] };
@@ -108,7 +119,9 @@ export function notePairedCuts(result: DesignEvaluation, cuts: readonly PairedCu
     const reason =
       `realizations reduced from ${cut.from} to ${env.realizations} by the work budget (${cut.maxWork} element visits), ` +
       'on base and head alike so that they stay paired';
-    const others = (env.degraded ?? '').split('; ').filter((part) => part !== '' && !part.startsWith('realizations reduced from'));
+    const others = (env.degraded ?? '')
+      .split('; ')
+      .filter((part) => part !== '' && !part.startsWith('realizations reduced from'));
     env.degraded = [reason, ...others].join('; ');
     const prefix = `${cut.challenge}: `;
     const line = `${prefix}${env.degraded}`;

@@ -34,7 +34,15 @@
 // by newly hardened ones are findings of their own. Each kind is a row of its own.
 
 import type { ElementKind } from '../graph/element.js';
-import type { Finding, FileReport, FileStatus, FindingStatus, RequirementResult, RequirementSubject, Severity } from '../report/report.js';
+import type {
+  Finding,
+  FileReport,
+  FileStatus,
+  FindingStatus,
+  RequirementResult,
+  RequirementSubject,
+  Severity,
+} from '../report/report.js';
 import type { ReportElement } from '../graph/element.js';
 import type { ChallengeDef, FilePolicy, Requirement, WeakeningRule } from '../policy/types.js';
 import { withSequenceDetails } from './consequence.js';
@@ -51,7 +59,12 @@ import { identityMatching, matchDesigns } from './rename.js';
 import { judgeSpof } from './spof.js';
 
 /** Finding rules of new single points of failure (a failing one makes the file "weakened"). */
-const SPOF_RULES = new Set<Finding['rule']>(['new-bridge', 'new-cut-node', 'new-stranding-group', 'hardened-weak-point']);
+const SPOF_RULES = new Set<Finding['rule']>([
+  'new-bridge',
+  'new-cut-node',
+  'new-stranding-group',
+  'hardened-weak-point',
+]);
 
 import { type DesignSide, locate, measure, type Measured } from './measure.js';
 import { decide, type Decision } from './decide.js';
@@ -148,7 +161,12 @@ function subjectOf(r: Requirement, challenges: readonly ChallengeDef[], higherIs
   if (r.kind === 'r-threshold') {
     if (r.at !== undefined) subject.at = r.at;
     const st = r.statistic;
-    subject.statistic = st.kind === 'quantile' ? { kind: 'quantile', q: st.q } : st.kind === 'worst-case' ? { kind: 'worst-case', removals: st.removals } : { kind: st.kind };
+    subject.statistic =
+      st.kind === 'quantile'
+        ? { kind: 'quantile', q: st.q }
+        : st.kind === 'worst-case'
+          ? { kind: 'worst-case', removals: st.removals }
+          : { kind: st.kind };
   }
   return subject;
 }
@@ -172,7 +190,12 @@ function notFinite(m: Measured): string | undefined {
 }
 
 /** How a drop from base to head is judged (see the header); NaN falls to "weakened" or "unsettled". */
-function classifyDrop(drop: number, allowance: number, noise: number, reduced: boolean): Exclude<FindingStatus, 'short' | 'reduced-work' | 'not-computable'> {
+function classifyDrop(
+  drop: number,
+  allowance: number,
+  noise: number,
+  reduced: boolean,
+): Exclude<FindingStatus, 'short' | 'reduced-work' | 'not-computable'> {
   if (reduced) {
     if (drop > allowance + noise) return 'weakened';
     if (drop <= allowance - noise) return 'within-allowance';
@@ -216,17 +239,34 @@ export function judgeFloor(j: Judging): { status: RowStatus; findings: Finding[]
     status = 'short';
     const relation = m.higherIsBetter ? 'is below' : 'is above';
     const d = decidingDecimals(headValue, threshold);
-    findings.push(finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: 'short', ...(d > 3 ? { decimals: d } : {}) }));
+    findings.push(
+      finding(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, {
+        ...extra,
+        status: 'short',
+        ...(d > 3 ? { decimals: d } : {}),
+      }),
+    );
   } else if (threshold !== null && m.incomplete !== undefined) {
     // Met by incomplete work: not proven, so not "holds".
     status = 'unsettled';
     findings.push(
-      finding(rule, unsettledSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
-        ...extra,
-        status: 'unsettled',
-      }),
+      finding(
+        rule,
+        unsettledSeverity(r.severity),
+        `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`,
+        elements,
+        {
+          ...extra,
+          status: 'unsettled',
+        },
+      ),
     );
-  } else if (threshold !== null && m.lo !== undefined && m.hi !== undefined && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
+  } else if (
+    threshold !== null &&
+    m.lo !== undefined &&
+    m.hi !== undefined &&
+    !meets(m.higherIsBetter ? m.lo : m.hi, threshold)
+  ) {
     status = 'unsettled';
     const edge = m.higherIsBetter ? m.lo : m.hi;
     const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
@@ -280,7 +320,11 @@ export function judgeFloor(j: Judging): { status: RowStatus; findings: Finding[]
  * within the allowance, or nothing (a rise or no change). `status` is the floor's verdict; a
  * "short" is never softened.
  */
-export function judgeWeakening(j: Judging, policyRule: WeakeningRule, floorStatus: RowStatus): { status: RowStatus; findings: Finding[] } {
+export function judgeWeakening(
+  j: Judging,
+  policyRule: WeakeningRule,
+  floorStatus: RowStatus,
+): { status: RowStatus; findings: Finding[] } {
   const { r, m, headValue, description, elements, extra } = j;
   let status = floorStatus;
   const findings: Finding[] = [];
@@ -322,7 +366,15 @@ export function judgeWeakening(j: Judging, policyRule: WeakeningRule, floorStatu
       if (outcome === 'weakened') {
         if (status !== 'short') status = 'weakened';
         const beyond = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
-        findings.push(finding('regression', regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
+        findings.push(
+          finding(
+            'regression',
+            regressionSeverity,
+            `${description}: ${change}, more than the allowed ${allowed}${beyond}`,
+            elements,
+            data,
+          ),
+        );
       } else if (outcome === 'unsettled') {
         // On cut realizations the drop is within error-multiple × se of the allowance: either side of it.
         if (status === 'holds') status = 'unsettled';
@@ -338,11 +390,25 @@ export function judgeWeakening(j: Judging, policyRule: WeakeningRule, floorStatu
       } else if (outcome === 'inside-error') {
         if (status === 'holds') status = 'inside-error';
         findings.push(
-          finding('regression', 'notice', `${description}: ${change}, less than ${k} \u00d7 its Monte Carlo error (${formatR(noise, d)}): inside the error, not a failure`, elements, data),
+          finding(
+            'regression',
+            'notice',
+            `${description}: ${change}, less than ${k} \u00d7 its Monte Carlo error (${formatR(noise, d)}): inside the error, not a failure`,
+            elements,
+            data,
+          ),
         );
       } else {
         const margin = reduced ? ` by more than ${k} \u00d7 its error; ${m.reduced}` : '';
-        findings.push(finding('regression', 'notice', `${description}: ${change}, within the allowed ${allowed}${margin}`, elements, data));
+        findings.push(
+          finding(
+            'regression',
+            'notice',
+            `${description}: ${change}, within the allowed ${allowed}${margin}`,
+            elements,
+            data,
+          ),
+        );
       }
     }
   }
@@ -386,10 +452,16 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
       // The base could be judged and the head cannot: the change took away what the requirement needs.
       row.status = 'short';
       findings.push(
-        finding(rule, r.severity, `${description}: the head can no longer be judged, though the base could (${formatR(m.base)}): ${why}`, [], {
-          ...extra,
-          status: 'short',
-        }),
+        finding(
+          rule,
+          r.severity,
+          `${description}: the head can no longer be judged, though the base could (${formatR(m.base)}): ${why}`,
+          [],
+          {
+            ...extra,
+            status: 'short',
+          },
+        ),
       );
     } else if (m.notApplicable && threshold === null) {
       // A tracked value (no floor) on a challenge the design gives no data for: nothing is required.
@@ -397,7 +469,12 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     } else {
       // A floor the policy sets cannot be judged: never "holds".
       row.status = 'unsettled';
-      findings.push(finding(rule, unsettledSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: 'unsettled' }));
+      findings.push(
+        finding(rule, unsettledSeverity(r.severity), `${description}: could not be judged: ${why}`, [], {
+          ...extra,
+          status: 'unsettled',
+        }),
+      );
     }
     return result();
   }
@@ -406,10 +483,16 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
     // A NaN or infinite R says the computation failed, not that the design is robust.
     row.status = 'unsettled';
     findings.push(
-      finding('not-computable', 'fail', `${description}: ${broken}; a value that cannot be computed is never a pass`, elements, {
-        ...extra,
-        status: 'not-computable',
-      }),
+      finding(
+        'not-computable',
+        'fail',
+        `${description}: ${broken}; a value that cannot be computed is never a pass`,
+        elements,
+        {
+          ...extra,
+          status: 'not-computable',
+        },
+      ),
     );
     return result();
   }
@@ -419,7 +502,15 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
   const paired = m.base !== null && m.delta !== null && m.se !== null && m.unpaired === undefined;
   const weakening =
     byCs && paired && decision!.weakening !== undefined
-      ? judgeWeakeningByCs(m, decision!, { description, elements, extra, status: floor.status, severity: milder(input.policy.weakening.severity, r.severity), policy: input.policy, ran: ranOf(input, r) })
+      ? judgeWeakeningByCs(m, decision!, {
+          description,
+          elements,
+          extra,
+          status: floor.status,
+          severity: milder(input.policy.weakening.severity, r.severity),
+          policy: input.policy,
+          ran: ranOf(input, r),
+        })
       : judgeWeakening(j, input.policy.weakening, floor.status);
   row.status = weakening.status;
   findings.push(...floor.findings, ...weakening.findings);
@@ -429,13 +520,24 @@ function judge(r: Requirement, input: CompareInput, description: string): Judged
   // Every requirement judged on reduced work says so, once.
   const reducedWork = m.reduced ?? m.incomplete;
   if (reducedWork !== undefined && !findings.some((f) => f.message.includes(reducedWork))) {
-    findings.push(finding(rule, 'notice', `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, status: 'reduced-work', line: 0 }));
+    findings.push(
+      finding(rule, 'notice', `${description}: judged on reduced work, ${reducedWork}`, [], {
+        requirement: r.id,
+        status: 'reduced-work',
+        line: 0,
+      }),
+    );
   }
   return result();
 }
 
 /** The confidence-sequence decisions of a requirement in a sequential run, else undefined. */
-function sequentialDecision(r: Requirement, input: CompareInput, m: Measured, threshold: number | null): Decision | undefined {
+function sequentialDecision(
+  r: Requirement,
+  input: CompareInput,
+  m: Measured,
+  threshold: number | null,
+): Decision | undefined {
   const head = input.head!;
   if (!head.result.sequential) return undefined;
   const comparing = !input.thresholdsOnly && input.base !== undefined && m.base !== null && m.unpaired === undefined;
@@ -513,7 +615,15 @@ function judgeWeakeningByCs(m: Measured, d: Decision, c: CsContext): { status: R
   const range = `its confidence sequence puts the drop between ${formatR(dropLo, dd)} and ${formatR(dropHi, dd)} after ${c.ran} realizations`;
   if (d.weakening === 'beyond') {
     if (out.status !== 'short') out.status = 'weakened';
-    out.findings.push(finding('regression', c.severity, `${c.description}: ${change}, more than the allowed ${allowed}: ${range}`, c.elements, { ...c.extra, allowance, status: 'weakened' }));
+    out.findings.push(
+      finding(
+        'regression',
+        c.severity,
+        `${c.description}: ${change}, more than the allowed ${allowed}: ${range}`,
+        c.elements,
+        { ...c.extra, allowance, status: 'weakened' },
+      ),
+    );
   } else if (d.weakening === 'open') {
     if (out.status === 'holds') out.status = 'unsettled';
     const cut = m.reduced !== undefined ? `; ${m.reduced}` : '';
@@ -529,14 +639,28 @@ function judgeWeakeningByCs(m: Measured, d: Decision, c: CsContext): { status: R
   } else if (drop < noise) {
     if (out.status === 'holds') out.status = 'inside-error';
     out.findings.push(
-      finding('regression', 'notice', `${c.description}: ${change}, less than ${rule.errorMultiple} \u00d7 its Monte Carlo error (${formatR(noise, dd)}): inside the error, not a failure; ${range}`, c.elements, {
-        ...c.extra,
-        allowance,
-        status: 'inside-error',
-      }),
+      finding(
+        'regression',
+        'notice',
+        `${c.description}: ${change}, less than ${rule.errorMultiple} \u00d7 its Monte Carlo error (${formatR(noise, dd)}): inside the error, not a failure; ${range}`,
+        c.elements,
+        {
+          ...c.extra,
+          allowance,
+          status: 'inside-error',
+        },
+      ),
     );
   } else {
-    out.findings.push(finding('regression', 'notice', `${c.description}: ${change}, within the allowed ${allowed}: ${range}`, c.elements, { ...c.extra, allowance, status: 'within-allowance' }));
+    out.findings.push(
+      finding(
+        'regression',
+        'notice',
+        `${c.description}: ${change}, within the allowed ${allowed}: ${range}`,
+        c.elements,
+        { ...c.extra, allowance, status: 'within-allowance' },
+      ),
+    );
   }
   return out;
 }
@@ -562,33 +686,54 @@ export function compareDesign(input: CompareInput): FileReport {
     report.status = 'removed';
     const severity = input.policy.removedDesigns;
     if (severity !== 'ignore') {
-      report.findings.push(finding('removed-design', severity, 'the design file was deleted by this change', [], { line: 0 }));
+      report.findings.push(
+        finding('removed-design', severity, 'the design file was deleted by this change', [], { line: 0 }),
+      );
     }
     return report;
   }
   if (input.headError || input.headUnsupported || !input.head) {
-    const e = input.headError ?? input.headUnsupported ?? { message: 'the design could not be read', line: 0, column: 0 };
+    const e = input.headError ??
+      input.headUnsupported ?? { message: 'the design could not be read', line: 0, column: 0 };
     report.status = 'unreadable';
     report.error = { message: e.message, line: e.line, column: e.column };
     const rule = input.headUnsupported && !input.headError ? 'not-computable' : 'parse-error';
-    report.findings.push(finding(rule, 'fail', e.message, [], { line: e.line, column: e.column, ...(rule === 'not-computable' ? { status: 'not-computable' as const } : {}) }));
+    report.findings.push(
+      finding(rule, 'fail', e.message, [], {
+        line: e.line,
+        column: e.column,
+        ...(rule === 'not-computable' ? { status: 'not-computable' as const } : {}),
+      }),
+    );
     return report;
   }
 
   const effective: CompareInput = input.baseError ? { ...input, base: undefined, thresholdsOnly: true } : input;
   if (input.baseError) {
     report.findings.push(
-      finding('parse-error', 'notice', `the base version could not be read (${input.baseError.message}); judged on thresholds only`, [], {
-        line: 0,
-      }),
+      finding(
+        'parse-error',
+        'notice',
+        `the base version could not be read (${input.baseError.message}); judged on thresholds only`,
+        [],
+        {
+          line: 0,
+        },
+      ),
     );
   }
   const comparing = effective.base !== undefined && !effective.thresholdsOnly;
-  const matching = !comparing ? undefined : effective.base!.graph === input.head.graph ? identityMatching(input.head.graph) : matchDesigns(effective.base!.graph, input.head.graph);
+  const matching = !comparing
+    ? undefined
+    : effective.base!.graph === input.head.graph
+      ? identityMatching(input.head.graph)
+      : matchDesigns(effective.base!.graph, input.head.graph);
   for (const r of input.policy.requirements) {
     const description = describeRequirement(r, input.policy.challenges);
     const { rows, findings } =
-      r.kind === 'no-new-spof' ? judgeSpof(r, description, input.head, comparing ? effective.base : undefined, matching) : judge(r, effective, description);
+      r.kind === 'no-new-spof'
+        ? judgeSpof(r, description, input.head, comparing ? effective.base : undefined, matching)
+        : judge(r, effective, description);
     report.requirements.push(...rows);
     report.findings.push(...findings);
   }
@@ -602,12 +747,26 @@ export function compareDesign(input: CompareInput): FileReport {
   }
   report.head = withSequenceDetails(input.head.result.evaluation, input.head.graph);
   if (effective.base && !effective.thresholdsOnly) {
-    report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.result === input.head.result ? input.head.graph : effective.base.graph);
+    report.base = withSequenceDetails(
+      effective.base.result.evaluation,
+      effective.base.result === input.head.result ? input.head.graph : effective.base.graph,
+    );
     const changes = elementChanges(effective.base.graph, input.head.graph, matching!);
     // Attributes changed on elements both sides have (by id and link key), with both lines.
-    const modified = effective.base.topology && input.head.topology ? attributeChanges(effective.base.topology, input.head.topology) : undefined;
+    const modified =
+      effective.base.topology && input.head.topology
+        ? attributeChanges(effective.base.topology, input.head.topology)
+        : undefined;
     if (modified?.length) changes.modified = modified;
-    if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) + (changes.modified?.length ?? 0) > 0) report.changes = changes;
+    if (
+      changes.added.length +
+        changes.removed.length +
+        (changes.renamed?.length ?? 0) +
+        (changes.hardened?.length ?? 0) +
+        (changes.modified?.length ?? 0) >
+      0
+    )
+      report.changes = changes;
   }
   report.status = fileStatus(input.change, report.findings);
   return report;

@@ -78,7 +78,9 @@ export function withSequenceDetails(ev: Evaluation, g: CompactGraph): Evaluation
     if (env.worstCase) out.worstCase = detailed(g, env.worstCase, intact);
     return out;
   });
-  const attacks = ev.attacks.map((a): AttackCurve => (a.worstCase ? { ...a, worstCase: detailed(g, a.worstCase, intact) } : a));
+  const attacks = ev.attacks.map((a): AttackCurve =>
+    a.worstCase ? { ...a, worstCase: detailed(g, a.worstCase, intact) } : a,
+  );
   const contingencies = ev.contingencies.map((c): Contingency => ({
     ...c,
     worst: c.worst.map((w) => ({ ...w, located: w.elements.map((id) => locateElement({ id, kind: c.kind }, g)) })),

@@ -41,7 +41,12 @@ export interface Decision {
 }
 
 /** The statistic of a random-challenge requirement, as the bounds need it; undefined for others. */
-type Stat = { kind: 'quantile'; q: number; x: number } | { kind: 'mean'; x: number } | { kind: 'min'; x: number } | { kind: 'area' } | { kind: 'spread' };
+type Stat =
+  | { kind: 'quantile'; q: number; x: number }
+  | { kind: 'mean'; x: number }
+  | { kind: 'min'; x: number }
+  | { kind: 'area' }
+  | { kind: 'spread' };
 
 function statOf(r: Requirement): Stat | undefined {
   if (r.kind === 'area-floor') return { kind: 'area' };
@@ -56,7 +61,12 @@ function statOf(r: Requirement): Stat | undefined {
 }
 
 /** Bounds of the statistic on one side; undefined when the side lacks the envelope or the grid point. */
-export function sideBounds(stat: Stat, env: Envelope, samples: readonly Float64Array[], alpha: number): Bounds | undefined {
+export function sideBounds(
+  stat: Stat,
+  env: Envelope,
+  samples: readonly Float64Array[],
+  alpha: number,
+): Bounds | undefined {
   const points = env.x.length;
   if (stat.kind === 'area' || stat.kind === 'spread') {
     const k = points - 1;

@@ -89,7 +89,11 @@ export function describeRequirement(r: Requirement, challenges: readonly Challen
     case 'n-1':
       return `N\u22121 (${r.element}s): R after any single ${r.element} removal \u2265 ${r.min}`;
     case 'no-new-spof': {
-      const parts = [r.bridges ? 'bridges' : '', r.cutNodes ? 'cut nodes' : '', r.riskGroups ? 'shared-risk groups that strand sites' : ''].filter(Boolean);
+      const parts = [
+        r.bridges ? 'bridges' : '',
+        r.cutNodes ? 'cut nodes' : '',
+        r.riskGroups ? 'shared-risk groups that strand sites' : '',
+      ].filter(Boolean);
       const what = parts.length > 1 ? `${parts.slice(0, -1).join(', ')} or ${parts[parts.length - 1]}` : parts[0];
       return `no new ${what}`;
     }
@@ -105,7 +109,10 @@ export type ElementChanges = NonNullable<FileReport['changes']>;
  * hardened flag changed are listed with the flag they have now (see hardenedChanges).
  */
 export function elementChanges(base: CompactGraph, head: CompactGraph, m: Matching): ElementChanges {
-  const unmatched = (g: CompactGraph, toOther: { node: Int32Array; link: Int32Array; group: Int32Array }): ReportElement[] => {
+  const unmatched = (
+    g: CompactGraph,
+    toOther: { node: Int32Array; link: Int32Array; group: Int32Array },
+  ): ReportElement[] => {
     const out: ReportElement[] = [];
     for (let v = 0; v < g.n; v++) if (toOther.node[v] < 0) out.push(reportElement(g, 'node', v));
     for (let e = 0; e < g.m; e++) if (toOther.link[e] < 0) out.push(reportElement(g, 'link', e));
@@ -119,7 +126,10 @@ export function elementChanges(base: CompactGraph, head: CompactGraph, m: Matchi
   };
   const renamed = [
     ...m.renamedNodes.map(([b, h]) => ({ from: reportElement(base, 'node', b), to: reportElement(head, 'node', h) })),
-    ...m.renamedGroups.map(([b, h]) => ({ from: reportElement(base, 'group', b), to: reportElement(head, 'group', h) })),
+    ...m.renamedGroups.map(([b, h]) => ({
+      from: reportElement(base, 'group', b),
+      to: reportElement(head, 'group', h),
+    })),
   ];
   if (renamed.length) changes.renamed = renamed;
   const hardened = hardenedChanges(base, head, m);
@@ -132,15 +142,21 @@ export function elementChanges(base: CompactGraph, head: CompactGraph, m: Matchi
  * (nodes, then links), each with the flag it has at head. Hardening changes what the
  * challenges may remove, so it is a change to the design even when no element moved.
  */
-export function hardenedChanges(base: CompactGraph, head: CompactGraph, m: Matching): (ReportElement & { hardened: boolean })[] {
+export function hardenedChanges(
+  base: CompactGraph,
+  head: CompactGraph,
+  m: Matching,
+): (ReportElement & { hardened: boolean })[] {
   const out: (ReportElement & { hardened: boolean })[] = [];
   for (let v = 0; v < head.n; v++) {
     const b = m.nodeToBase[v];
-    if (b >= 0 && base.nodeHardened[b] !== head.nodeHardened[v]) out.push({ ...reportElement(head, 'node', v), hardened: head.nodeHardened[v] === 1 });
+    if (b >= 0 && base.nodeHardened[b] !== head.nodeHardened[v])
+      out.push({ ...reportElement(head, 'node', v), hardened: head.nodeHardened[v] === 1 });
   }
   for (let e = 0; e < head.m; e++) {
     const b = m.linkToBase[e];
-    if (b >= 0 && base.linkHardened[b] !== head.linkHardened[e]) out.push({ ...reportElement(head, 'link', e), hardened: head.linkHardened[e] === 1 });
+    if (b >= 0 && base.linkHardened[b] !== head.linkHardened[e])
+      out.push({ ...reportElement(head, 'link', e), hardened: head.linkHardened[e] === 1 });
   }
   // Sites first, then links, each as the file lists them.
   return out.sort((a, b) => (a.kind === b.kind ? a.line - b.line : a.kind === 'node' ? -1 : 1));
@@ -150,7 +166,9 @@ export function hardenedChanges(base: CompactGraph, head: CompactGraph, m: Match
 export type SpofPart = 'bridges' | 'cut-nodes' | 'risk-groups';
 
 /** The rows of a no-new-spof requirement: bridges, cut nodes and stranding groups are counted apart, never added. */
-export function spofRowParts(r: Requirement & { kind: 'no-new-spof' }): { id: string; description: string; kind: SpofPart }[] {
+export function spofRowParts(
+  r: Requirement & { kind: 'no-new-spof' },
+): { id: string; description: string; kind: SpofPart }[] {
   const parts: { kind: SpofPart; words: string }[] = [];
   if (r.bridges) parts.push({ kind: 'bridges', words: 'no new bridges' });
   if (r.cutNodes) parts.push({ kind: 'cut-nodes', words: 'no new cut nodes' });
@@ -210,7 +228,16 @@ export function attributeChanges(base: Topology, head: Topology): AttributeChang
     for (const a of NODE_ATTRIBUTES) {
       const before = a.value(b);
       const after = a.value(h);
-      if (before !== after) modified.push({ id: h.id, kind: 'node', attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
+      if (before !== after)
+        modified.push({
+          id: h.id,
+          kind: 'node',
+          attribute: a.attribute,
+          before,
+          after,
+          baseLine: b.pos.line,
+          headLine: h.pos.line,
+        });
     }
   }
   for (const h of head.links) {
@@ -219,7 +246,16 @@ export function attributeChanges(base: Topology, head: Topology): AttributeChang
     for (const a of LINK_ATTRIBUTES) {
       const before = a.value(b);
       const after = a.value(h);
-      if (before !== after) modified.push({ id: h.id, kind: 'link', attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
+      if (before !== after)
+        modified.push({
+          id: h.id,
+          kind: 'link',
+          attribute: a.attribute,
+          before,
+          after,
+          baseLine: b.pos.line,
+          headLine: h.pos.line,
+        });
     }
   }
   return modified;

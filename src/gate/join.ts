@@ -10,12 +10,22 @@ import { countStatuses, verdictOf } from './verdict.js';
 export function upgradeReport(value: unknown, name = 'report'): Report {
   const r = value as Partial<Report> | null;
   if (r === null || typeof r !== 'object' || typeof r.version !== 'number' || !Array.isArray(r.files)) {
-    throw new UsageError(`${name} is not a netbrace report`, 'pass the JSON files written by "netbrace check --json" or the action');
+    throw new UsageError(
+      `${name} is not a netbrace report`,
+      'pass the JSON files written by "netbrace check --json" or the action',
+    );
   }
   if (r.version > REPORT_VERSION) {
-    throw new UsageError(`${name} has report version ${r.version}, newer than this netbrace (${REPORT_VERSION})`, 'join with the newest netbrace');
+    throw new UsageError(
+      `${name} has report version ${r.version}, newer than this netbrace (${REPORT_VERSION})`,
+      'join with the newest netbrace',
+    );
   }
-  const files = r.files.map((f: FileReport) => ({ ...f, findings: f.findings ?? [], requirements: f.requirements ?? [] }));
+  const files = r.files.map((f: FileReport) => ({
+    ...f,
+    findings: f.findings ?? [],
+    requirements: f.requirements ?? [],
+  }));
   return {
     ...(r as Report),
     version: REPORT_VERSION,
@@ -55,7 +65,10 @@ export function joinReports(reports: readonly unknown[]): Report {
   };
   const parts = list.map((r) => r.part).filter((s): s is NonNullable<Report['part']> => s !== undefined);
   if (parts.length > 0) {
-    joined.parts = { total: Math.max(...parts.map((s) => s.total)), joined: [...new Set(parts.map((s) => s.index))].sort((a, b) => a - b) };
+    joined.parts = {
+      total: Math.max(...parts.map((s) => s.total)),
+      joined: [...new Set(parts.map((s) => s.index))].sort((a, b) => a - b),
+    };
   }
   return joined;
 }

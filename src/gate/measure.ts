@@ -119,12 +119,21 @@ function statisticOf(req: Requirement): Statistic | undefined {
 
 /** Realizations a random challenge ran on one side, against those the policy asks for there. */
 function realizationsOf(env: Envelope, c: ChallengeDef, g: CompactGraph): { ran: number; asked: number } {
-  const asked = c.engine === 'regional' ? sitesWithCoordinates(g).length : (c.params.realizations ?? CHALLENGE_DEFAULTS.realizations);
+  const asked =
+    c.engine === 'regional'
+      ? sitesWithCoordinates(g).length
+      : (c.params.realizations ?? CHALLENGE_DEFAULTS.realizations);
   return { ran: env.realizations, asked };
 }
 
 /** What the budget did to a challenge on both sides: how many realizations ran, and whether they pair. */
-function reductionOf(c: ChallengeDef, head: DesignSide, env: Envelope, base?: DesignSide, baseEnv?: Envelope): Pick<Measured, 'reduced' | 'unpaired'> {
+function reductionOf(
+  c: ChallengeDef,
+  head: DesignSide,
+  env: Envelope,
+  base?: DesignSide,
+  baseEnv?: Envelope,
+): Pick<Measured, 'reduced' | 'unpaired'> {
   const h = realizationsOf(env, c, head.graph);
   const b = base && baseEnv ? realizationsOf(baseEnv, c, base.graph) : undefined;
   // A sequential run that stopped before the budget's count (maxRealizations) was settled by
@@ -134,13 +143,17 @@ function reductionOf(c: ChallengeDef, head: DesignSide, env: Envelope, base?: De
   if (!headCut && !baseCut) return {};
   const out: Pick<Measured, 'reduced' | 'unpaired'> = {};
   if (b === undefined) out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations`;
-  else if (h.ran === b.ran && h.asked === b.asked) out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on head and base`;
-  else out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on the head and ${b.ran} of ${b.asked} on the base`;
+  else if (h.ran === b.ran && h.asked === b.asked)
+    out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on head and base`;
+  else
+    out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on the head and ${b.ran} of ${b.asked} on the base`;
   if (b !== undefined && base!.result !== head.result) {
     const lh = head.result.labels.get(c.engine);
     const lb = base!.result.labels.get(c.engine);
-    const sameLabels = lh === undefined || lb === undefined || (lh.length === lb.length && lh.every((l, i) => l === lb[i]));
-    if (h.ran !== b.ran) out.unpaired = `the budget cut base and head to different numbers of realizations (${b.ran} and ${h.ran}), so they do not pair`;
+    const sameLabels =
+      lh === undefined || lb === undefined || (lh.length === lb.length && lh.every((l, i) => l === lb[i]));
+    if (h.ran !== b.ran)
+      out.unpaired = `the budget cut base and head to different numbers of realizations (${b.ran} and ${h.ran}), so they do not pair`;
     else if (!sameLabels) out.unpaired = 'the budget cut base and head to different epicentres, so they do not pair';
   }
   return out;
@@ -163,13 +176,24 @@ function ownSe(head: DesignEvaluation, env: Envelope, stat: Statistic, x: number
 
 /** The head cannot give the value; the base's value, when the base could, says the head lost what it needs. */
 function missing(reason: string, higherIsBetter = true, base: number | null = null, notApplicable = false): Measured {
-  return { base, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason, ...(notApplicable ? { notApplicable } : {}) };
+  return {
+    base,
+    head: null,
+    delta: null,
+    se: null,
+    higherIsBetter,
+    elements: [],
+    missing: reason,
+    ...(notApplicable ? { notApplicable } : {}),
+  };
 }
 
 /** Why a challenge has no result on this side: it does not apply (and why), or it did not run. */
 function didNotRun(side: DesignSide, c: ChallengeDef): string {
   const why = notApplicableReason(side, c);
-  return why !== undefined ? `challenge "${c.name}" does not apply to this design: ${why}` : `challenge "${c.name}" did not run on this design`;
+  return why !== undefined
+    ? `challenge "${c.name}" does not apply to this design: ${why}`
+    : `challenge "${c.name}" did not run on this design`;
 }
 
 function notApplicableReason(side: DesignSide, c: ChallengeDef | undefined): string | undefined {
@@ -185,8 +209,12 @@ function deterministic(req: Requirement, c: ChallengeDef | undefined, side: Desi
     if (!cont) return `the N\u22121 evaluation of ${req.element}s did not run`;
     if (cont.evaluated === 0) return `the design has no ${req.element} that can fail`;
     const worst = cont.worst[0];
-    const out: Value = { value: cont.min, elements: worst ? worst.elements.map((id) => ({ id, kind: cont.kind })) : [] };
-    if (cont.evaluated < cont.total) out.incomplete = `only ${cont.evaluated} of ${cont.total} single ${req.element} losses were evaluated (work budget)`;
+    const out: Value = {
+      value: cont.min,
+      elements: worst ? worst.elements.map((id) => ({ id, kind: cont.kind })) : [],
+    };
+    if (cont.evaluated < cont.total)
+      out.incomplete = `only ${cont.evaluated} of ${cont.total} single ${req.element} losses were evaluated (work budget)`;
     return out;
   }
   if (!c) return 'no challenge';
@@ -199,22 +227,35 @@ function deterministic(req: Requirement, c: ChallengeDef | undefined, side: Desi
     if (i < 0 || i >= wc.values.length) return `the worst-case search of "${c.name}" stopped before ${k} removals`;
     const out: Value = { value: wc.values[i], elements: sequenceElements(wc, k) };
     // Up to two removals the search is exact unless the budget (or the subset limit) forbade it.
-    if (k <= 2 && wc.method !== 'exact') out.incomplete = `the worst case was searched greedily, not exhaustively (work budget), so the true worst case may be lower`;
+    if (k <= 2 && wc.method !== 'exact')
+      out.incomplete = `the worst case was searched greedily, not exhaustively (work budget), so the true worst case may be lower`;
     return out;
   }
   const curve = attackOf(side, c);
   if (!curve) return didNotRun(side, c);
-  if (req.kind === 'area-floor') return { value: curve.area, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }) };
+  if (req.kind === 'area-floor')
+    return {
+      value: curve.area,
+      elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }),
+    };
   const t = req as ThresholdRequirement;
   // R at x·N removals: between the two neighbouring steps when x·N is not whole.
   const k = removalsAt(side.graph, curve.kind, t.at ?? 0);
   const value = valueAtCount(curve.values, k);
   if (Number.isNaN(value)) return `the attack "${c.name}" ends before ${t.at}`;
-  return { value, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, Math.ceil(k)) };
+  return {
+    value,
+    elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, Math.ceil(k)),
+  };
 }
 
 /** Measure one requirement (not no-new-spof) on head, and on base when there is one. */
-export function measure(req: Requirement, challenges: readonly ChallengeDef[], head: DesignSide, base?: DesignSide): Measured {
+export function measure(
+  req: Requirement,
+  challenges: readonly ChallengeDef[],
+  head: DesignSide,
+  base?: DesignSide,
+): Measured {
   const c = 'challenge' in req ? challenges.find((x) => x.name === req.challenge) : undefined;
   const higherIsBetter = req.kind !== 'spread-ceiling';
   const stat = c?.random ? statisticOf(req) : undefined;
@@ -241,12 +282,17 @@ export function measure(req: Requirement, challenges: readonly ChallengeDef[], h
       delta: baseEnv ? (same ? 0 : p.delta) : null,
       se: baseEnv ? (same ? 0 : p.se) : null,
       higherIsBetter,
-      elements: sequenceElements(env.weakest[0], x === undefined ? MAX_ELEMENTS : Math.ceil(removalsAt(head.graph, env.kind, x))),
+      elements: sequenceElements(
+        env.weakest[0],
+        x === undefined ? MAX_ELEMENTS : Math.ceil(removalsAt(head.graph, env.kind, x)),
+      ),
     };
     if (stat.kind === 'quantile' && j >= 0) {
       // The band's quantiles carry their interval; any other q gets the same order-statistic one.
       const band = env.quantiles[quantileKey(stat.q)];
-      const ci = band ? { lo: band.lo[j], hi: band.hi[j] } : quantileEstimate(sortedColumn(head.result.samples.get(c.engine) ?? [], j), stat.q);
+      const ci = band
+        ? { lo: band.lo[j], hi: band.hi[j] }
+        : quantileEstimate(sortedColumn(head.result.samples.get(c.engine) ?? [], j), stat.q);
       out.lo = ci.lo;
       out.hi = ci.hi;
     }
@@ -263,7 +309,13 @@ export function measure(req: Requirement, challenges: readonly ChallengeDef[], h
   const h = deterministic(req, c, head);
   const b = base ? deterministic(req, c, base) : undefined;
   const bv = b !== undefined && typeof b !== 'string' ? b.value : null;
-  if (typeof h === 'string') return missing(h, higherIsBetter, base !== undefined && base.result !== head.result ? bv : null, notApplicableReason(head, c) !== undefined);
+  if (typeof h === 'string')
+    return missing(
+      h,
+      higherIsBetter,
+      base !== undefined && base.result !== head.result ? bv : null,
+      notApplicableReason(head, c) !== undefined,
+    );
   const same = base !== undefined && base.result === head.result;
   return {
     base: bv,

@@ -50,7 +50,17 @@ function lineOf(text: string, needle: RegExp, from: number): number {
 
 /** The settings of the job's netbrace step (the first, when a job has several). */
 export function stepSettings(text: string | null, job: string | undefined): StepSettings {
-  const none: StepSettings = { present: false, mode: '', policySource: '', policy: '', orgPolicy: '', continueOnError: '', condition: '', line: 1, lines: {} };
+  const none: StepSettings = {
+    present: false,
+    mode: '',
+    policySource: '',
+    policy: '',
+    orgPolicy: '',
+    continueOnError: '',
+    condition: '',
+    line: 1,
+    lines: {},
+  };
   if (text === null) return none;
   let wf: unknown;
   try {
@@ -80,32 +90,91 @@ export function stepSettings(text: string | null, job: string | undefined): Step
       continueOnError: str(step['continue-on-error']) || jobContinue,
       condition: str(step.if),
       line: stepLine,
-      lines: { mode: at('mode'), 'policy-source': at('policy-source'), policy: at('policy'), 'org-policy': at('org-policy'), 'continue-on-error': at('continue-on-error'), if: at('if') },
+      lines: {
+        mode: at('mode'),
+        'policy-source': at('policy-source'),
+        policy: at('policy'),
+        'org-policy': at('org-policy'),
+        'continue-on-error': at('continue-on-error'),
+        if: at('if'),
+      },
     };
   }
   return none;
 }
 
 /** What the head's workflow changes in the job's netbrace step, weakenings first. */
-export function compareSettings(baseText: string | null, headText: string | null, job: string | undefined): SettingChange[] {
+export function compareSettings(
+  baseText: string | null,
+  headText: string | null,
+  job: string | undefined,
+): SettingChange[] {
   const b = stepSettings(baseText, job);
   const h = stepSettings(headText, job);
   if (!b.present && !h.present) return [];
   const out: SettingChange[] = [];
   if (b.present && !h.present) {
-    out.push({ setting: 'the netbrace step', base: 'present', head: 'removed', weakens: true, line: 1, message: 'the change removes the netbrace step (or its job) from the workflow: the check would no longer run' });
+    out.push({
+      setting: 'the netbrace step',
+      base: 'present',
+      head: 'removed',
+      weakens: true,
+      line: 1,
+      message: 'the change removes the netbrace step (or its job) from the workflow: the check would no longer run',
+    });
     return out;
   }
-  if (!b.present) return [{ setting: 'the netbrace step', base: 'absent', head: 'added', weakens: false, line: h.line, message: 'the change adds the netbrace step to the workflow' }];
+  if (!b.present)
+    return [
+      {
+        setting: 'the netbrace step',
+        base: 'absent',
+        head: 'added',
+        weakens: false,
+        line: h.line,
+        message: 'the change adds the netbrace step to the workflow',
+      },
+    ];
   const add = (setting: string, base: string, head: string, weakens: boolean, why: string) => {
     if (base === head) return;
-    out.push({ setting, base: base || '(unset)', head: head || '(unset)', weakens, line: h.lines[setting] ?? h.line, message: `${setting} ${base || '(unset)'} → ${head || '(unset)'}: ${why}` });
+    out.push({
+      setting,
+      base: base || '(unset)',
+      head: head || '(unset)',
+      weakens,
+      line: h.lines[setting] ?? h.line,
+      message: `${setting} ${base || '(unset)'} → ${head || '(unset)'}: ${why}`,
+    });
   };
-  add('mode', b.mode, h.mode, b.mode === 'block' && h.mode !== 'block', h.mode === 'inform' ? 'the check would report but never fail' : 'how the check ends');
-  add('policy-source', b.policySource, h.policySource, b.policySource === 'base' && h.policySource !== 'base', 'the pull request would choose the rules that judge it');
+  add(
+    'mode',
+    b.mode,
+    h.mode,
+    b.mode === 'block' && h.mode !== 'block',
+    h.mode === 'inform' ? 'the check would report but never fail' : 'how the check ends',
+  );
+  add(
+    'policy-source',
+    b.policySource,
+    h.policySource,
+    b.policySource === 'base' && h.policySource !== 'base',
+    'the pull request would choose the rules that judge it',
+  );
   add('policy', b.policy, h.policy, true, 'another policy file would judge the change');
-  add('org-policy', b.orgPolicy, h.orgPolicy, b.orgPolicy !== '' && h.orgPolicy !== b.orgPolicy, h.orgPolicy === '' ? 'the organisation floors would no longer be required' : 'another organisation policy');
-  add('continue-on-error', b.continueOnError, h.continueOnError, h.continueOnError !== '' && h.continueOnError !== 'false', 'a failing check would no longer fail the job');
+  add(
+    'org-policy',
+    b.orgPolicy,
+    h.orgPolicy,
+    b.orgPolicy !== '' && h.orgPolicy !== b.orgPolicy,
+    h.orgPolicy === '' ? 'the organisation floors would no longer be required' : 'another organisation policy',
+  );
+  add(
+    'continue-on-error',
+    b.continueOnError,
+    h.continueOnError,
+    h.continueOnError !== '' && h.continueOnError !== 'false',
+    'a failing check would no longer fail the job',
+  );
   add('if', b.condition, h.condition, h.condition !== '', 'the step would run only when the condition holds');
   return out.sort((x, y) => Number(y.weakens) - Number(x.weakens));
 }

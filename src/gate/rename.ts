@@ -118,7 +118,7 @@ function matchNodes(base: CompactGraph, head: CompactGraph): { toHead: Int32Arra
     if (made === 0) break;
   }
   // Keep only renames whose whole neighbourhood is identical under the final matching.
-  for (let changed = true; changed; ) {
+  for (let changed = true; changed;) {
     changed = false;
     for (let b = 0; b < base.n; b++) {
       const h = toHead[b];
@@ -251,7 +251,8 @@ function sameValue(a: Float64Array | null, i: number, b: Float64Array | null, j:
  */
 export function sameDesign(base: CompactGraph, head: CompactGraph, m: Matching): boolean {
   if (base.n !== head.n || base.m !== head.m || base.groupIds.length !== head.groupIds.length) return false;
-  if (base.demandVolume.length !== head.demandVolume.length || !Object.is(base.latencyBudget, head.latencyBudget)) return false;
+  if (base.demandVolume.length !== head.demandVolume.length || !Object.is(base.latencyBudget, head.latencyBudget))
+    return false;
   for (let v = 0; v < base.n; v++) {
     const h = m.nodeToHead[v];
     if (h < 0 || base.nodeHardened[v] !== head.nodeHardened[h]) return false;
@@ -259,7 +260,8 @@ export function sameDesign(base: CompactGraph, head: CompactGraph, m: Matching):
   }
   const groupsOf = (g: CompactGraph) => {
     const out: number[][] = Array.from({ length: g.m }, () => []);
-    for (let k = 0; k < g.groupIds.length; k++) for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) out[g.groupLinks[p]].push(k);
+    for (let k = 0; k < g.groupIds.length; k++)
+      for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) out[g.groupLinks[p]].push(k);
     return out;
   };
   const bg = groupsOf(base);
@@ -270,7 +272,12 @@ export function sameDesign(base: CompactGraph, head: CompactGraph, m: Matching):
     const a = [m.nodeToHead[base.linkSource[e]], m.nodeToHead[base.linkTarget[e]]].sort((x, y) => x - y);
     const b = [head.linkSource[f], head.linkTarget[f]].sort((x, y) => x - y);
     if (a[0] !== b[0] || a[1] !== b[1]) return false;
-    if (!sameValue(base.length, e, head.length, f) || !sameValue(base.latency, e, head.latency, f) || !sameValue(base.weight, e, head.weight, f)) return false;
+    if (
+      !sameValue(base.length, e, head.length, f) ||
+      !sameValue(base.latency, e, head.latency, f) ||
+      !sameValue(base.weight, e, head.weight, f)
+    )
+      return false;
     const ga = bg[e].map((k) => m.groupToHead[k]).sort((x, y) => x - y);
     const gb = [...hg[f]].sort((x, y) => x - y);
     if (ga.length !== gb.length || ga.some((k, i) => k !== gb[i])) return false;

@@ -41,7 +41,14 @@ export function weakPoints(g: CompactGraph, honourHardening: boolean): WeakPoint
   };
 }
 
-function finding(rule: Finding['rule'], severity: Severity, message: string, el: ReportElement, requirement: string, consequence: Finding['consequence']): Finding {
+function finding(
+  rule: Finding['rule'],
+  severity: Severity,
+  message: string,
+  el: ReportElement,
+  requirement: string,
+  consequence: Finding['consequence'],
+): Finding {
   const f: Finding = { rule, severity, message, elements: [el], line: el.line, requirement };
   if (consequence) f.consequence = consequence;
   return f;
@@ -62,7 +69,10 @@ function groupWords(g: CompactGraph, k: number, honourHardening: boolean): strin
     const e = g.groupLinks[p];
     if (!honourHardening || !g.linkHardened[e]) members.push(formatElement(reportElement(g, 'link', e)));
   }
-  const list = members.length > 1 ? `${members.slice(0, -1).join(', ')} and ${members[members.length - 1]}` : (members[0] ?? 'no link');
+  const list =
+    members.length > 1
+      ? `${members.slice(0, -1).join(', ')} and ${members[members.length - 1]}`
+      : (members[0] ?? 'no link');
   return `shared-risk group ${formatElement(reportElement(g, 'group', k))}, which carries ${list},`;
 }
 
@@ -85,7 +95,8 @@ export function judgeSpof(
   const before = base ? weakPoints(base.graph, true) : undefined;
   // One row per kind of weak point: a count of bridges and a count of cut nodes are never added.
   const parts = spofRowParts(r);
-  const sizeOf = (s: WeakPoints, kind: SpofPart) => (kind === 'bridges' ? s.bridges.size : kind === 'cut-nodes' ? s.cutNodes.size : s.groups.size);
+  const sizeOf = (s: WeakPoints, kind: SpofPart) =>
+    kind === 'bridges' ? s.bridges.size : kind === 'cut-nodes' ? s.cutNodes.size : s.groups.size;
   const rows: RequirementResult[] = parts.map((part) => ({
     id: part.id,
     description: part.description,
@@ -131,7 +142,9 @@ export function judgeSpof(
     for (const k of [...now.groups].sort((x, y) => x - y)) {
       if (!isNew(now.groups, matching.groupToBase, k, before.groups)) continue;
       const message = `${groupWords(g, k, true)} is a new single point of failure: losing it cuts sites off, which the base did not`;
-      findings.push(finding('new-stranding-group', r.severity, message, reportElement(g, 'group', k), r.id, groupCost(k, true)));
+      findings.push(
+        finding('new-stranding-group', r.severity, message, reportElement(g, 'group', k), r.id, groupCost(k, true)),
+      );
     }
   }
 
@@ -140,13 +153,16 @@ export function judgeSpof(
     const severity = r.hardenedWeakPoints;
     const raw = weakPoints(g, false);
     const rawBefore = weakPoints(b, false);
-    const claim = 'the change marks it hardened, so netbrace does not count it; hardening is a claim netbrace cannot verify';
+    const claim =
+      'the change marks it hardened, so netbrace does not count it; hardening is a claim netbrace cannot verify';
     if (r.bridges) {
       for (const e of linksByLine(g, raw.bridges)) {
         if (now.bridges.has(e) || !isNew(raw.bridges, matching.linkToBase, e, rawBefore.bridges)) continue;
         if (!newlyHardened(g.linkHardened, b.linkHardened, matching.linkToBase, e)) continue;
         const message = `${linkWords(g, e)} would be a new bridge (losing it splits the design), but ${claim}`;
-        findings.push(finding('hardened-weak-point', severity, message, reportElement(g, 'link', e), r.id, linkCost(e)));
+        findings.push(
+          finding('hardened-weak-point', severity, message, reportElement(g, 'link', e), r.id, linkCost(e)),
+        );
       }
     }
     if (r.cutNodes) {
@@ -167,7 +183,9 @@ export function judgeSpof(
         }
         if (!hidden) continue;
         const message = `${groupWords(g, k, false)} would cut sites off if lost, but the change marks links of it hardened, so netbrace does not count it; hardening is a claim netbrace cannot verify`;
-        findings.push(finding('hardened-weak-point', severity, message, reportElement(g, 'group', k), r.id, groupCost(k, false)));
+        findings.push(
+          finding('hardened-weak-point', severity, message, reportElement(g, 'group', k), r.id, groupCost(k, false)),
+        );
       }
     }
   }
@@ -184,7 +202,17 @@ export function judgeSpof(
   // Each finding marks the row of its kind. Hidden weak points cannot be judged (the claim is
   // unchecked): unsettled, unless the policy fails them.
   const partOf = (x: Finding): SpofPart =>
-    x.rule === 'new-bridge' ? 'bridges' : x.rule === 'new-cut-node' ? 'cut-nodes' : x.rule === 'new-stranding-group' ? 'risk-groups' : x.elements[0]?.kind === 'link' ? 'bridges' : x.elements[0]?.kind === 'node' ? 'cut-nodes' : 'risk-groups';
+    x.rule === 'new-bridge'
+      ? 'bridges'
+      : x.rule === 'new-cut-node'
+        ? 'cut-nodes'
+        : x.rule === 'new-stranding-group'
+          ? 'risk-groups'
+          : x.elements[0]?.kind === 'link'
+            ? 'bridges'
+            : x.elements[0]?.kind === 'node'
+              ? 'cut-nodes'
+              : 'risk-groups';
   parts.forEach((part, i) => {
     const mine = findings.filter((x) => x.rule !== 'degraded' && partOf(x) === part.kind);
     const weakHere = mine.some((x) => x.rule !== 'hardened-weak-point');

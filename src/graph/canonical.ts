@@ -35,7 +35,9 @@ function compareParsed(a: string, da: string | null, b: string, db: string | nul
 /** Indices of `ids` in natural order (ties: lower index first); each id is parsed once. */
 export function naturalOrder(ids: readonly string[]): number[] {
   const digits = ids.map((id) => (WHOLE.test(id) ? stripZeros(id) : null));
-  return ids.map((_, i) => i).sort((a, b) => (ids[a] === ids[b] ? 0 : compareParsed(ids[a], digits[a], ids[b], digits[b])) || a - b);
+  return ids
+    .map((_, i) => i)
+    .sort((a, b) => (ids[a] === ids[b] ? 0 : compareParsed(ids[a], digits[a], ids[b], digits[b])) || a - b);
 }
 
 function stripZeros(s: string): string {
@@ -106,7 +108,8 @@ export function canonicalOrder(t: Topology): CanonicalOrder {
   const fill = start.slice(0, buckets);
   const order = new Int32Array(m);
   for (let e = 0; e < m; e++) order[fill[lo[e] + 1]++] = e;
-  const cmp = (x: number, y: number) => hi[x] - hi[y] || (hi[x] === hi[y] && lo[x] === lo[y] ? compareParallel(t.links[x], t.links[y]) : 0) || x - y;
+  const cmp = (x: number, y: number) =>
+    hi[x] - hi[y] || (hi[x] === hi[y] && lo[x] === lo[y] ? compareParallel(t.links[x], t.links[y]) : 0) || x - y;
   for (let b = 0; b < buckets; b++) {
     const from = start[b];
     const to = start[b + 1];
@@ -126,7 +129,7 @@ export function canonicalOrder(t: Topology): CanonicalOrder {
   }
   const links = Array.from(order);
   const keys = links.map((e) => t.links[e].key);
-  for (let i = 0; i < links.length; ) {
+  for (let i = 0; i < links.length;) {
     let j = i + 1;
     while (j < links.length && lo[links[j]] === lo[links[i]] && hi[links[j]] === hi[links[i]]) j++;
     if (j - i > 1) keys.splice(i, j - i, ...keys.slice(i, j).sort(compareKeys));
@@ -138,7 +141,12 @@ export function canonicalOrder(t: Topology): CanonicalOrder {
     .sort((a, b) => {
       const x = t.demands[a];
       const y = t.demands[b];
-      return demandEnd(x, 'source') - demandEnd(y, 'source') || demandEnd(x, 'target') - demandEnd(y, 'target') || x.volume - y.volume || a - b;
+      return (
+        demandEnd(x, 'source') - demandEnd(y, 'source') ||
+        demandEnd(x, 'target') - demandEnd(y, 'target') ||
+        x.volume - y.volume ||
+        a - b
+      );
     });
   return { nodes, links, keys, demands, lo, hi };
 }

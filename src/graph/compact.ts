@@ -146,7 +146,8 @@ export function compileTopology(t: Topology): CompactGraph {
   // description's, else that of the first link in the file that names it.
   const groupLineOf = new Map<string, number>();
   for (const g of t.riskGroups) if (!groupLineOf.has(g.id)) groupLineOf.set(g.id, g.pos.line);
-  for (const link of t.links) for (const gid of link.riskGroups) if (!groupLineOf.has(gid)) groupLineOf.set(gid, link.pos.line);
+  for (const link of t.links)
+    for (const gid of link.riskGroups) if (!groupLineOf.has(gid)) groupLineOf.set(gid, link.pos.line);
   const groupIds = [...groupLineOf.keys()].sort(compareIds);
   const groupPos = new Map<string, number>();
   groupIds.forEach((id, g) => groupPos.set(id, g));

@@ -42,7 +42,11 @@ export interface RemovalCost {
 }
 
 /** The cost of the removal `mask` against the intact design (`intact`: its components, when the caller has them). */
-export function removalCost(g: CompactGraph, mask: Mask, intact: Components = findComponents(g, createMask(g))): RemovalCost {
+export function removalCost(
+  g: CompactGraph,
+  mask: Mask,
+  intact: Components = findComponents(g, createMask(g)),
+): RemovalCost {
   const before = intact;
   const after = findComponents(g, mask);
   const stranded: number[] = [];

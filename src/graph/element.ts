@@ -37,7 +37,10 @@ export function indexOfElement(g: CompactGraph, kind: ElementKind, id: string): 
 }
 
 /** The element with this id in the first design that has it, else the bare id at line 0. */
-export function locateElement(el: { id: string; kind: ElementKind }, ...graphs: (CompactGraph | undefined)[]): ReportElement {
+export function locateElement(
+  el: { id: string; kind: ElementKind },
+  ...graphs: (CompactGraph | undefined)[]
+): ReportElement {
   for (const g of graphs) {
     if (!g) continue;
     const i = indexOfElement(g, el.kind, el.id);

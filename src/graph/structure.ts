@@ -120,7 +120,11 @@ export function groupLinkMask(g: CompactGraph, k: number, honourHardening: boole
  * not lost (as the challenges treat them) and hardened bridges are not counted as bridges.
  * O(groups × (n + m)).
  */
-export function findStrandingGroups(g: CompactGraph, honourHardening: boolean, cuts: CutElements = findCutElements(g)): number[] {
+export function findStrandingGroups(
+  g: CompactGraph,
+  honourHardening: boolean,
+  cuts: CutElements = findCutElements(g),
+): number[] {
   const isBridge = new Uint8Array(g.m);
   for (const e of cuts.bridges) if (!honourHardening || g.linkHardened[e] === 0) isBridge[e] = 1;
   const intact = findComponents(g).sizes.length;

@@ -51,7 +51,8 @@ export function buildDesignMap(head: MapSideInput, base?: MapSideInput): DesignM
     if (g.linkHardened[e]) link.hardened = true;
     const groups: string[] = [];
     for (let k = 0; k < g.groupIds.length; k++) {
-      for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) if (g.groupLinks[p] === e) groups.push(g.groupIds[k]);
+      for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++)
+        if (g.groupLinks[p] === e) groups.push(g.groupIds[k]);
     }
     if (groups.length) link.groups = groups;
     links.push(link);
@@ -63,7 +64,9 @@ export function buildDesignMap(head: MapSideInput, base?: MapSideInput): DesignM
   if (b) for (let e = 0; e < b.m; e++) if (!headKeys.has(b.linkKeys[e])) addLink(b, e, 'base');
 
   if (nodes.length > MAP_MAX_NODES || links.length > MAP_MAX_LINKS) {
-    return { omitted: `${nodes.length} sites and ${links.length} links, base and head together: more than a map shows legibly (${MAP_MAX_NODES} sites, ${MAP_MAX_LINKS} links)` };
+    return {
+      omitted: `${nodes.length} sites and ${links.length} links, base and head together: more than a map shows legibly (${MAP_MAX_NODES} sites, ${MAP_MAX_LINKS} links)`,
+    };
   }
 
   const located = nodes.map((_, i) => Number.isFinite(lat[i]) && Number.isFinite(lon[i]));
@@ -75,7 +78,10 @@ export function buildDesignMap(head: MapSideInput, base?: MapSideInput): DesignM
   if (nLocated >= 2) {
     layout = 'geographic';
     const idx = nodes.map((_, i) => i).filter((i) => located[i]);
-    const placed = projectGeographic(idx.map((i) => lat[i]), idx.map((i) => lon[i]));
+    const placed = projectGeographic(
+      idx.map((i) => lat[i]),
+      idx.map((i) => lon[i]),
+    );
     width = placed.width;
     height = placed.height;
     const x = new Float64Array(nodes.length).fill(Number.NaN);
@@ -92,17 +98,23 @@ export function buildDesignMap(head: MapSideInput, base?: MapSideInput): DesignM
     });
     method =
       'sites at their coordinates: equirectangular projection centred on the design, fitted to its extent' +
-      (nLocated < nodes.length ? `; ${nodes.length - nLocated} site${nodes.length - nLocated === 1 ? '' : 's'} without coordinates placed beside their neighbours` : '');
+      (nLocated < nodes.length
+        ? `; ${nodes.length - nLocated} site${nodes.length - nLocated === 1 ? '' : 's'} without coordinates placed beside their neighbours`
+        : '');
   } else {
     layout = 'force';
-    const placed = forceLayout(nodes.map((n) => n.id), edges);
+    const placed = forceLayout(
+      nodes.map((n) => n.id),
+      edges,
+    );
     width = placed.width;
     height = placed.height;
     nodes.forEach((node, i) => {
       node.x = placed.x[i];
       node.y = placed.y[i];
     });
-    method = 'no coordinates: a seeded ForceAtlas2 layout of the links, with an anti-overlap pass (positions carry no geographic meaning)';
+    method =
+      'no coordinates: a seeded ForceAtlas2 layout of the links, with an anti-overlap pass (positions carry no geographic meaning)';
   }
 
   const headStrand = strandingGroups(h);
@@ -117,7 +129,14 @@ export function buildDesignMap(head: MapSideInput, base?: MapSideInput): DesignM
 }
 
 /** Sites without coordinates: the mean of their placed neighbours (a few rounds), the rest along the bottom edge. */
-function placeUnlocated(n: number, edges: readonly [number, number][], x: Float64Array, y: Float64Array, width: number, height: number): void {
+function placeUnlocated(
+  n: number,
+  edges: readonly [number, number][],
+  x: Float64Array,
+  y: Float64Array,
+  width: number,
+  height: number,
+): void {
   const adj: number[][] = Array.from({ length: n }, () => []);
   for (const [a, b] of edges) {
     adj[a].push(b);

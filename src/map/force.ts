@@ -26,7 +26,11 @@ export function iterationsFor(n: number): number {
   return n <= 300 ? 500 : n <= 1000 ? 250 : 120;
 }
 
-export function forceLayout(ids: readonly string[], edges: readonly (readonly [number, number])[], seed = LAYOUT_SEED): Placed {
+export function forceLayout(
+  ids: readonly string[],
+  edges: readonly (readonly [number, number])[],
+  seed = LAYOUT_SEED,
+): Placed {
   const n = ids.length;
   if (n === 0) return fitToBox([], []);
   const graph = new UndirectedGraph({ multi: false, allowSelfLoops: false });

@@ -41,7 +41,13 @@ export function unwrapLongitudes(lon: readonly number[]): number[] {
 }
 
 /** Fit plane coordinates into the drawing (y down), aspect kept, centred; rounded. */
-export function fitToBox(px: readonly number[], py: readonly number[], width = MAP_WIDTH, maxHeight = MAP_MAX_HEIGHT, margin = MAP_MARGIN): Placed {
+export function fitToBox(
+  px: readonly number[],
+  py: readonly number[],
+  width = MAP_WIDTH,
+  maxHeight = MAP_MAX_HEIGHT,
+  margin = MAP_MARGIN,
+): Placed {
   const n = px.length;
   let x0 = Infinity;
   let x1 = -Infinity;
@@ -60,7 +66,10 @@ export function fitToBox(px: readonly number[], py: readonly number[], width = M
   const spanY = y1 - y0;
   const innerW = width - 2 * margin;
   const innerH = maxHeight - 2 * margin;
-  const s = spanX <= 0 && spanY <= 0 ? 1 : Math.min(spanX > 0 ? innerW / spanX : Infinity, spanY > 0 ? innerH / spanY : Infinity);
+  const s =
+    spanX <= 0 && spanY <= 0
+      ? 1
+      : Math.min(spanX > 0 ? innerW / spanX : Infinity, spanY > 0 ? innerH / spanY : Infinity);
   const height = Math.max(MAP_MIN_HEIGHT, Math.min(maxHeight, Math.ceil(spanY * s + 2 * margin)));
   const offX = (width - spanX * s) / 2;
   const offY = (height - spanY * s) / 2;

@@ -113,14 +113,20 @@ export function applyToText(text: string, format: DesignFormat, t: Topology, cha
     const data = JSON.parse(text) as { nodes: Record<string, unknown>[]; links?: Record<string, unknown>[] };
     for (const n of data.nodes) if (hardNodes.has(String(n.id))) n.hardened = true;
     const items = data.links ?? [];
-    linkItemsOf(t, items.map((l) => l.between)).forEach((i, e) => {
+    linkItemsOf(
+      t,
+      items.map((l) => l.between),
+    ).forEach((i, e) => {
       if (hardLinks.has(t.links[e].id)) items[i].hardened = true;
     });
     data.links = [...items, ...change.links.map(linkEntry)];
     return `${JSON.stringify(data, null, 2)}\n`;
   }
   if (format !== 'native-yaml') {
-    throw new UsageError(`a ${format} design cannot be edited by netbrace`, 'add the links (or the hardened flags) by hand, as the suggestion lists them');
+    throw new UsageError(
+      `a ${format} design cannot be edited by netbrace`,
+      'add the links (or the hardened flags) by hand, as the suggestion lists them',
+    );
   }
   const doc = parseDocument(text);
   const nodes = doc.get('nodes', true);

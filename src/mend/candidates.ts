@@ -86,13 +86,19 @@ export function parseCandidateFile(text: string, file: string, g: CompactGraph):
   };
   if (doc.errors.length > 0) {
     const p = lines.linePos(doc.errors[0].pos[0]);
-    throw new PolicyError(`the candidate list is not valid YAML: ${doc.errors[0].message.split('\n')[0]}`, { file, line: p.line, column: p.col }, 'check the indentation and quoting on this line');
+    throw new PolicyError(
+      `the candidate list is not valid YAML: ${doc.errors[0].message.split('\n')[0]}`,
+      { file, line: p.line, column: p.col },
+      'check the indentation and quoting on this line',
+    );
   }
   const root = doc.contents as Node | null;
   const hint = 'write "candidates:" followed by a list of {between: [a, b], length_km: …}';
-  if (!isMap(root)) throw new PolicyError('the candidate list must be a mapping with a "candidates" list', at(root), hint);
+  if (!isMap(root))
+    throw new PolicyError('the candidate list must be a mapping with a "candidates" list', at(root), hint);
   const pair = root.items.find((p) => isScalar(p.key) && p.key.value === 'candidates');
-  if (!pair || !isSeq(pair.value)) throw new PolicyError('the candidate list has no "candidates" list', at(pair?.value as Node ?? root), hint);
+  if (!pair || !isSeq(pair.value))
+    throw new PolicyError('the candidate list has no "candidates" list', at((pair?.value as Node) ?? root), hint);
   const list: Candidate[] = [];
   const notes: string[] = [];
   const missing = new Set<string>();
@@ -102,36 +108,54 @@ export function parseCandidateFile(text: string, file: string, g: CompactGraph):
     const get = (k: string) => item.items.find((p) => isScalar(p.key) && p.key.value === k);
     for (const p of item.items) {
       const k = isScalar(p.key) ? String(p.key.value) : '';
-      if (!KEYS.has(k)) throw new PolicyError(`${what}: unknown key "${k}"`, at(p.key as Node), `known keys: ${[...KEYS].join(', ')}`);
+      if (!KEYS.has(k))
+        throw new PolicyError(`${what}: unknown key "${k}"`, at(p.key as Node), `known keys: ${[...KEYS].join(', ')}`);
     }
     const between = get('between');
     const ends = between && isSeq(between.value) ? (between.value.items as Node[]) : null;
-    if (!ends || ends.length !== 2 || !ends.every((e) => isScalar(e) && (typeof e.value === 'string' || typeof e.value === 'number'))) {
-      throw new PolicyError(`${what}: "between" must list two site ids`, at((between?.value as Node) ?? item), 'e.g. between: [north, south]');
+    if (
+      !ends ||
+      ends.length !== 2 ||
+      !ends.every((e) => isScalar(e) && (typeof e.value === 'string' || typeof e.value === 'number'))
+    ) {
+      throw new PolicyError(
+        `${what}: "between" must list two site ids`,
+        at((between?.value as Node) ?? item),
+        'e.g. between: [north, south]',
+      );
     }
     const [s, t] = ends.map((e) => String((e as { value: unknown }).value));
-    if (s === t) throw new PolicyError(`${what}: a link from a site to itself adds nothing`, at(ends[1]), 'name two different sites');
+    if (s === t)
+      throw new PolicyError(
+        `${what}: a link from a site to itself adds nothing`,
+        at(ends[1]),
+        'name two different sites',
+      );
     const num = (k: string): number | undefined => {
       const p = get(k);
       if (!p) return undefined;
       const v = isScalar(p.value) ? p.value.value : undefined;
-      if (typeof v !== 'number' || !Number.isFinite(v) || v < 0) throw new PolicyError(`${what}: "${k}" must be a number ≥ 0`, at(p.value as Node), '');
+      if (typeof v !== 'number' || !Number.isFinite(v) || v < 0)
+        throw new PolicyError(`${what}: "${k}" must be a number ≥ 0`, at(p.value as Node), '');
       return v;
     };
     const str = (k: string): string | undefined => {
       const p = get(k);
       if (!p) return undefined;
       const v = isScalar(p.value) ? p.value.value : undefined;
-      if (typeof v !== 'string' && typeof v !== 'number') throw new PolicyError(`${what}: "${k}" must be text`, at(p.value as Node), '');
+      if (typeof v !== 'string' && typeof v !== 'number')
+        throw new PolicyError(`${what}: "${k}" must be text`, at(p.value as Node), '');
       return String(v);
     };
     const lengthKm = num('length_km');
     const cost = num('cost');
-    if (lengthKm === undefined && cost === undefined) throw new PolicyError(`${what} has neither "length_km" nor "cost"`, at(item), 'give its length or its cost');
+    if (lengthKm === undefined && cost === undefined)
+      throw new PolicyError(`${what} has neither "length_km" nor "cost"`, at(item), 'give its length or its cost');
     const rg = get('risk_groups');
     let riskGroups: string[] | undefined;
     if (rg) {
-      if (!isSeq(rg.value) || !(rg.value.items as Node[]).every((x) => isScalar(x))) throw new PolicyError(`${what}: "risk_groups" must be a list of ids`, at(rg.value as Node), '');
+      if (!isSeq(rg.value) || !(rg.value.items as Node[]).every((x) => isScalar(x)))
+        throw new PolicyError(`${what}: "risk_groups" must be a list of ids`, at(rg.value as Node), '');
       riskGroups = (rg.value.items as Node[]).map((x) => String((x as { value: unknown }).value));
     }
     const a = g.nodeIndex.get(s);
@@ -154,7 +178,9 @@ export function parseCandidateFile(text: string, file: string, g: CompactGraph):
   });
   if (missing.size > 0) {
     const names = [...missing].slice(0, 5).join(', ');
-    notes.push(`candidates naming sites this design does not have were skipped (${names}${missing.size > 5 ? ', …' : ''})`);
+    notes.push(
+      `candidates naming sites this design does not have were skipped (${names}${missing.size > 5 ? ', …' : ''})`,
+    );
   }
   return { list, unit: unitOf(list), source: 'list', notes };
 }
@@ -194,7 +220,8 @@ export function generateCandidates(g: CompactGraph, options: CandidateOptions = 
   const joined = adjacency(g);
   const notes: string[] = [];
   const list: Candidate[] = [];
-  const hasCoords = (v: number) => g.lat !== null && g.lon !== null && Number.isFinite(g.lat[v]) && Number.isFinite(g.lon[v]);
+  const hasCoords = (v: number) =>
+    g.lat !== null && g.lon !== null && Number.isFinite(g.lat[v]) && Number.isFinite(g.lon[v]);
   const located: number[] = [];
   for (let v = 0; v < g.n; v++) if (hasCoords(v)) located.push(v);
   if (located.length >= 2) {
@@ -205,26 +232,35 @@ export function generateCandidates(g: CompactGraph, options: CandidateOptions = 
       if (d <= maxKm) list.push({ a, b, lengthKm: Math.round(d * routeFactor * 10) / 10, source: 'generated' });
     };
     if (located.length <= GEO_ALL_PAIRS_LIMIT) {
-      for (let i = 0; i < located.length; i++) for (let j = i + 1; j < located.length; j++) consider(located[i], located[j]);
+      for (let i = 0; i < located.length; i++)
+        for (let j = i + 1; j < located.length; j++) consider(located[i], located[j]);
     } else {
       for (const [a, b] of nearPairs(g)) if (hasCoords(a) && hasCoords(b)) consider(a, b);
       notes.push(`${located.length} located sites: only pairs within ${MAX_HOPS} hops were considered`);
     }
     list.sort((x, y) => x.lengthKm! - y.lengthKm! || x.a - y.a || x.b - y.b);
     if (list.length > MAX_GENERATED) {
-      notes.push(`${list.length} site pairs lie within ${round1(maxKm)} km; the ${MAX_GENERATED} shortest were considered`);
+      notes.push(
+        `${list.length} site pairs lie within ${round1(maxKm)} km; the ${MAX_GENERATED} shortest were considered`,
+      );
       list.length = MAX_GENERATED;
     }
-    if (located.length < g.n) notes.push(`${g.n - located.length} sites have no coordinates and get no generated candidate`);
+    if (located.length < g.n)
+      notes.push(`${g.n - located.length} sites have no coordinates and get no generated candidate`);
     return { list, unit: 'km', source: 'generated', routeFactor, maxKm: round1(maxKm), notes };
   }
   // No coordinates: lengths are unknown, every suggestion is priced per link.
   if (g.n <= ALL_PAIRS_LIMIT) {
-    for (let a = 0; a < g.n; a++) for (let b = a + 1; b < g.n; b++) if (!joined.has(a * g.n + b)) list.push({ a, b, source: 'generated' });
-    notes.push('the design has no coordinates: every pair of sites not yet joined is a candidate, and lengths are unknown');
+    for (let a = 0; a < g.n; a++)
+      for (let b = a + 1; b < g.n; b++) if (!joined.has(a * g.n + b)) list.push({ a, b, source: 'generated' });
+    notes.push(
+      'the design has no coordinates: every pair of sites not yet joined is a candidate, and lengths are unknown',
+    );
   } else {
     for (const [a, b] of nearPairs(g)) list.push({ a, b, source: 'generated' });
-    notes.push(`the design has no coordinates: site pairs within ${MAX_HOPS} hops are the candidates, and lengths are unknown`);
+    notes.push(
+      `the design has no coordinates: site pairs within ${MAX_HOPS} hops are the candidates, and lengths are unknown`,
+    );
   }
   return { list, unit: 'link', source: 'generated', notes };
 }

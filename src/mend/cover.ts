@@ -76,7 +76,10 @@ export function solveCover(p: CoverProblem): CoverResult {
 
   const residual = (set: readonly number[]): Residual => {
     expansions++;
-    const g = withExtraLinks(p.g, set.map((c) => p.pairs[c]));
+    const g = withExtraLinks(
+      p.g,
+      set.map((c) => p.pairs[c]),
+    );
     const cuts = findCutElements(g);
     const isBridge = new Set(cuts.bridges);
     const isCut = new Set(cuts.cutNodes);
@@ -234,7 +237,9 @@ export function solveCover(p: CoverProblem): CoverResult {
     if (!depthComplete) incompleteBelow = true;
     if (truncated) break;
   }
-  const sets = [...found.values()].sort((a, b) => a.price - b.price || (a.set.join(',') < b.set.join(',') ? -1 : 1)).map((x) => x.set);
+  const sets = [...found.values()]
+    .sort((a, b) => a.price - b.price || (a.set.join(',') < b.set.join(',') ? -1 : 1))
+    .map((x) => x.set);
   if (sets.length === 0) {
     const reason = truncated
       ? `no set of at most ${p.maxLinks} candidate links was found within the search limit (${maxExpansions} states)`

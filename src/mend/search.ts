@@ -46,7 +46,15 @@ export const FIEDLER_LIMIT = 20_000;
 export const R_DEFINITION =
   'R\u0304: the mean area of the policy\u2019s random-failure envelopes (the mean of each median R over its grid); without envelopes, of its attack curves';
 
-const FIXABLE = new Set<Finding['rule']>(['new-bridge', 'new-cut-node', 'r-threshold', 'area-floor', 'spread-ceiling', 'n-1', 'regression']);
+const FIXABLE = new Set<Finding['rule']>([
+  'new-bridge',
+  'new-cut-node',
+  'r-threshold',
+  'area-floor',
+  'spread-ceiling',
+  'n-1',
+  'regression',
+]);
 
 export interface MendContext {
   /** The head design as parsed, and compiled. */
@@ -68,7 +76,8 @@ export interface MendContext {
 
 /** A finding's stable key: spof findings by element, value findings by requirement. */
 export function targetKey(f: Pick<Finding, 'rule' | 'requirement' | 'elements'>): string {
-  if (f.rule === 'new-bridge' || f.rule === 'new-cut-node') return `${f.rule}|${f.elements.map((e) => e.id).join('\u0000')}`;
+  if (f.rule === 'new-bridge' || f.rule === 'new-cut-node')
+    return `${f.rule}|${f.elements.map((e) => e.id).join('\u0000')}`;
   return `${f.rule}|${f.requirement ?? ''}`;
 }
 
@@ -86,7 +95,14 @@ export function mendTargets(report: FileReport): MendTarget[] {
     const key = targetKey(f);
     if (seen.has(key)) continue;
     seen.add(key);
-    const t: MendTarget = { key, rule: f.rule, severity: f.severity, message: f.message, elements: f.elements, line: f.line };
+    const t: MendTarget = {
+      key,
+      rule: f.rule,
+      severity: f.severity,
+      message: f.message,
+      elements: f.elements,
+      line: f.line,
+    };
     if (f.requirement !== undefined) t.requirement = f.requirement;
     out.push(t);
   }
@@ -105,7 +121,9 @@ export function meanArea(report: FileReport): number | null {
 /** Latency of a new link from the design's own links: a least-squares line through latency against length. */
 export function latencyModel(t: Topology): ((km: number) => number) | null {
   if (t.links.length === 0 || !t.links.every((l) => l.latency !== undefined)) return null;
-  const pts = t.links.filter((l) => l.length !== undefined && l.latency !== undefined).map((l) => [l.length!, l.latency!] as const);
+  const pts = t.links
+    .filter((l) => l.length !== undefined && l.latency !== undefined)
+    .map((l) => [l.length!, l.latency!] as const);
   if (pts.length < 2) return null;
   const n = pts.length;
   const mx = pts.reduce((s, p) => s + p[0], 0) / n;
@@ -195,7 +213,9 @@ export async function mendDesign(ctx: MendContext): Promise<MendReport> {
 
   const cache = new Map<string, Judged>();
   const judgeSet = async (set: number[], change: Change = changeFor(set)): Promise<Judged | null> => {
-    const key = change.links.length ? [...set].sort((a, b) => a - b).join(',') : `harden:${change.harden.map((e) => `${e.kind}:${e.id}`).join(',')}`;
+    const key = change.links.length
+      ? [...set].sort((a, b) => a - b).join(',')
+      : `harden:${change.harden.map((e) => `${e.kind}:${e.id}`).join(',')}`;
     const hit = cache.get(key);
     if (hit) return hit;
     if (out.evaluations >= ctx.maxEvaluations) return null;
@@ -211,7 +231,10 @@ export async function mendDesign(ctx: MendContext): Promise<MendReport> {
   if (!ranked) notes.push(`more than ${FIEDLER_LIMIT} sites: candidates are not ranked by algebraic connectivity`);
   const scoreOf = (extra: readonly number[]) => {
     if (!ranked) return pairs.map(() => 0);
-    const f = fiedler(g, extra.map((c) => pairs[c]));
+    const f = fiedler(
+      g,
+      extra.map((c) => pairs[c]),
+    );
     return pairs.map(([a, b]) => ghoshBoydScore(f, a, b));
   };
   const scores = scoreOf([]);
@@ -294,7 +317,8 @@ export async function mendDesign(ctx: MendContext): Promise<MendReport> {
       if (!best || (current && !better(best, current))) break;
       current = best;
     }
-    if (!holds(current) && out.evaluations >= linkBudget()) notes.push(`the search stopped after ${out.evaluations} engine evaluations (its limit)`);
+    if (!holds(current) && out.evaluations >= linkBudget())
+      notes.push(`the search stopped after ${out.evaluations} engine evaluations (its limit)`);
   } else if (targets.some((t) => t.rule !== 'new-bridge' && t.rule !== 'new-cut-node')) {
     notes.push('there are no candidate links to try');
   }
@@ -315,7 +339,16 @@ export async function mendDesign(ctx: MendContext): Promise<MendReport> {
     const j = await judgeSet([], { links: [], harden: hardenTargets });
     if (j) {
       out.suggestions.push(
-        suggestion(j, 'harden', 'harden the elements of the new single points of failure (they then never fail in any challenge); judged by the engine', targets, ctx.report, rBefore, prices, cand.unit),
+        suggestion(
+          j,
+          'harden',
+          'harden the elements of the new single points of failure (they then never fail in any challenge); judged by the engine',
+          targets,
+          ctx.report,
+          rBefore,
+          prices,
+          cand.unit,
+        ),
       );
     }
   }
@@ -363,7 +396,14 @@ function gain(r: FileReport, rBefore: number | null, total: number | null): numb
 }
 
 /** Negative when a is the better step: fewer failures, fewer targets left, more R̄ per unit, cheaper. */
-function compareJudged(a: Judged, b: Judged, targets: readonly MendTarget[], rBefore: number | null, prices: readonly number[], unit: CandidateSet['unit']): number {
+function compareJudged(
+  a: Judged,
+  b: Judged,
+  targets: readonly MendTarget[],
+  rBefore: number | null,
+  prices: readonly number[],
+  unit: CandidateSet['unit'],
+): number {
   const fa = failCount(a.report);
   const fb = failCount(b.report);
   if (fa !== fb) return fa - fb;
@@ -408,7 +448,13 @@ function suggestion(
     .filter((r) => wanted.has(r.id))
     .map((r) => {
       const a = afterRows.get(r.id);
-      return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? 'unsettled' };
+      return {
+        id: r.id,
+        description: r.description,
+        before: r.head,
+        after: a?.head ?? null,
+        status: a?.status ?? 'unsettled',
+      };
     });
   return {
     kind,

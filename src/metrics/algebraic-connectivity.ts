@@ -21,7 +21,12 @@ export const algebraicConnectivity: Metric = {
   appliesTo: () => true,
   create(g, options = {}) {
     const spectral = createSpectralSurvivors(g);
-    const solve = createExtremalSolver(g, 'fiedler', options.denseLimit ?? EXTREMAL_DENSE_LIMIT, options.warmStart ?? false);
+    const solve = createExtremalSolver(
+      g,
+      'fiedler',
+      options.denseLimit ?? EXTREMAL_DENSE_LIMIT,
+      options.warmStart ?? false,
+    );
     return (mask) => {
       const local = spectral.survivors(mask);
       if (local.n < 2 || spectral.components(local).count > 1) return { raw: 0, normalized: 0 };

@@ -30,11 +30,15 @@ function totalVolume(g: CompactGraph): number {
 
 export const demandServed: Metric = {
   id: 'demand_served',
-  description: 'Share of traffic demand volume whose ends are still connected (within the latency budget, if one is set).',
+  description:
+    'Share of traffic demand volume whose ends are still connected (within the latency budget, if one is set).',
   normalization: 'served volume / total demand volume; raw = served volume.',
   cost: 'linear',
   appliesTo: (g) => totalVolume(g) > 0,
-  needs: { what: 'demands', hint: 'declare demands (a volume > 0 between two sites) in the design, or take demand_served out of the r-value' },
+  needs: {
+    what: 'demands',
+    hint: 'declare demands (a volume > 0 between two sites) in the design, or take demand_served out of the r-value',
+  },
   create(g, options = {}) {
     const total = totalVolume(g);
     const budget = options.latencyBudget ?? g.latencyBudget;

@@ -18,7 +18,12 @@ export const spectralRadius: Metric = {
   appliesTo: () => true,
   create(g, options = {}) {
     const spectral = createSpectralSurvivors(g);
-    const solve = createExtremalSolver(g, 'radius', options.denseLimit ?? EXTREMAL_DENSE_LIMIT, options.warmStart ?? false);
+    const solve = createExtremalSolver(
+      g,
+      'radius',
+      options.denseLimit ?? EXTREMAL_DENSE_LIMIT,
+      options.warmStart ?? false,
+    );
     return (mask) => {
       const local = spectral.survivors(mask);
       const comps = spectral.components(local);

@@ -41,11 +41,16 @@ function idealInverseSum(g: CompactGraph, kind: 'latency' | 'length' | 'weight',
 
 export const weightedEfficiency: Metric = {
   id: 'weighted_efficiency',
-  description: 'Global efficiency by latency (else length, else weight): mean inverse cheapest-path cost over original pairs.',
-  normalization: 'E_w / E_ideal, ideal = every pair joined directly (great-circle distance, at least the cheapest link).',
+  description:
+    'Global efficiency by latency (else length, else weight): mean inverse cheapest-path cost over original pairs.',
+  normalization:
+    'E_w / E_ideal, ideal = every pair joined directly (great-circle distance, at least the cheapest link).',
   cost: 'all-pairs',
   appliesTo: (g) => chooseLinkCost(g) !== null,
-  needs: { what: 'a latency, length or weight > 0 on every link', hint: 'give every link latency_ms or length_km, or take weighted_efficiency out of the r-value' },
+  needs: {
+    what: 'a latency, length or weight > 0 on every link',
+    hint: 'give every link latency_ms or length_km, or take weighted_efficiency out of the r-value',
+  },
   create(g) {
     const cost = chooseLinkCost(g);
     if (!cost) throw new RangeError('weighted_efficiency needs latency, length or weight on every link');

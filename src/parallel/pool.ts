@@ -14,7 +14,12 @@ import { pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { CompactGraph } from '../graph/compact.js';
 import { planTasks, runTask, type EvaluationPlan, type Task, type TaskResult } from '../envelope/engine.js';
-import { assembleEvaluation, planEvaluation, type DesignEvaluation, type EvaluationSpec } from '../envelope/evaluate.js';
+import {
+  assembleEvaluation,
+  planEvaluation,
+  type DesignEvaluation,
+  type EvaluationSpec,
+} from '../envelope/evaluate.js';
 import type { ResultMessage } from './protocol.js';
 
 /** Below this estimated work (element visits, about 0.1 s of engine time) no thread is started. */
@@ -30,7 +35,10 @@ export interface WorkerEntry {
 export function workerEntry(moduleUrl: string = import.meta.url): WorkerEntry {
   if (!moduleUrl.endsWith('.ts')) return { url: new URL('./worker.js', moduleUrl) };
   const tsx = createRequire(moduleUrl).resolve('tsx/package.json');
-  return { url: new URL('./worker.ts', moduleUrl), loader: pathToFileURL(join(dirname(tsx), 'dist', 'esm', 'api', 'index.mjs')).href };
+  return {
+    url: new URL('./worker.ts', moduleUrl),
+    loader: pathToFileURL(join(dirname(tsx), 'dist', 'esm', 'api', 'index.mjs')).href,
+  };
 }
 
 /** A thread running the worker; from source it loads worker.ts through tsx. */
@@ -78,7 +86,13 @@ export async function evaluateDesignParallel(
  * run-gate.ts) on up to `threads` worker threads, results in the order given; inline when the
  * plan is small or one thread is asked.
  */
-export async function runTasksParallel(g: CompactGraph, plan: EvaluationPlan, tasks: Task[], threads: number, options: ParallelOptions = {}): Promise<TaskResult[]> {
+export async function runTasksParallel(
+  g: CompactGraph,
+  plan: EvaluationPlan,
+  tasks: Task[],
+  threads: number,
+  options: ParallelOptions = {},
+): Promise<TaskResult[]> {
   if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be an integer ≥ 1, got ${threads}`);
   const workers = plan.work < (options.minWork ?? PARALLEL_MIN_WORK) ? 1 : Math.min(threads, tasks.length);
   return workers <= 1 ? tasks.map((t) => runTask(g, plan, t)) : runOnWorkers(g, plan, tasks, workers);
@@ -88,7 +102,9 @@ export async function runTasksParallel(g: CompactGraph, plan: EvaluationPlan, ta
  * The one wiring of worker threads into the gate (check, the Action, explain/map/mend): the
  * gate's task runner on `threads` threads, or nothing (this thread) for one thread or none.
  */
-export function threadedGate(threads: number | undefined): { runTasks?: (g: CompactGraph, plan: EvaluationPlan, tasks: Task[], n?: number) => Promise<TaskResult[]> } {
+export function threadedGate(threads: number | undefined): {
+  runTasks?: (g: CompactGraph, plan: EvaluationPlan, tasks: Task[], n?: number) => Promise<TaskResult[]>;
+} {
   if (threads === undefined || threads <= 1) return {};
   return { runTasks: (g, plan, tasks, n) => runTasksParallel(g, plan, tasks, n ?? threads) };
 }
@@ -111,7 +127,12 @@ function runOnWorkers(g: CompactGraph, plan: EvaluationPlan, tasks: Task[], coun
   return run;
 }
 
-async function runExclusive(g: CompactGraph, plan: EvaluationPlan, tasks: Task[], count: number): Promise<TaskResult[]> {
+async function runExclusive(
+  g: CompactGraph,
+  plan: EvaluationPlan,
+  tasks: Task[],
+  count: number,
+): Promise<TaskResult[]> {
   const entry = workerEntry();
   const pool = idle.splice(0, count);
   while (pool.length < count) pool.push(startWorker(entry));

@@ -13,8 +13,23 @@ const RANK: Record<RemovedSeverity, number> = { ignore: 0, notice: 1, warn: 2, f
 /** `judging` → `proposed`: every difference that loosens or tightens, in the proposed file's order. */
 export function policyChanges(judging: Policy, proposed: Policy): PolicyChange[] {
   const out: PolicyChange[] = [];
-  const add = (subject: string, key: string, loosens: boolean, base: string | number | null, head: string | number | null, where: Where | undefined) =>
-    out.push({ subject, key, effect: loosens ? 'loosens' : 'tightens', base, head, file: where?.file ?? proposed.files[0] ?? '', line: where?.line ?? 0 });
+  const add = (
+    subject: string,
+    key: string,
+    loosens: boolean,
+    base: string | number | null,
+    head: string | number | null,
+    where: Where | undefined,
+  ) =>
+    out.push({
+      subject,
+      key,
+      effect: loosens ? 'loosens' : 'tightens',
+      base,
+      head,
+      file: where?.file ?? proposed.files[0] ?? '',
+      line: where?.line ?? 0,
+    });
   const before = new Map(judging.requirements.map((r) => [r.id, r]));
   const after = new Map(proposed.requirements.map((r) => [r.id, r]));
   for (const next of proposed.requirements) {
@@ -23,11 +38,17 @@ export function policyChanges(judging: Policy, proposed: Policy): PolicyChange[]
       add(next.id, 'requirement', false, null, next.severity, next.where);
       continue;
     }
-    if (prev.severity !== next.severity) add(next.id, 'severity', RANK[next.severity] < RANK[prev.severity], prev.severity, next.severity, next.where);
+    if (prev.severity !== next.severity)
+      add(next.id, 'severity', RANK[next.severity] < RANK[prev.severity], prev.severity, next.severity, next.where);
     compareValues(prev, next, add);
   }
   for (const prev of judging.requirements) {
-    if (!after.has(prev.id)) add(prev.id, 'requirement', true, prev.severity, null, { file: proposed.files[0] ?? prev.where.file, line: 0, column: 0 });
+    if (!after.has(prev.id))
+      add(prev.id, 'requirement', true, prev.severity, null, {
+        file: proposed.files[0] ?? prev.where.file,
+        line: 0,
+        column: 0,
+      });
   }
   const a = judging.weakening;
   const b = proposed.weakening;
@@ -39,14 +60,30 @@ export function policyChanges(judging: Policy, proposed: Policy): PolicyChange[]
   num('allowed-drop', a.allowedDrop, b.allowedDrop, 'allowedDrop');
   num('allowed-relative-drop', a.allowedRelativeDrop, b.allowedRelativeDrop, 'allowedRelativeDrop');
   num('error-multiple', a.errorMultiple, b.errorMultiple, 'errorMultiple');
-  if (a.severity !== b.severity) add('weakening', 'severity', RANK[b.severity] < RANK[a.severity], a.severity, b.severity, b.fieldWhere.severity ?? b.where);
+  if (a.severity !== b.severity)
+    add(
+      'weakening',
+      'severity',
+      RANK[b.severity] < RANK[a.severity],
+      a.severity,
+      b.severity,
+      b.fieldWhere.severity ?? b.where,
+    );
   const ra = judging.removedDesigns;
   const rb = proposed.removedDesigns;
-  if (ra.severity !== rb.severity) add('removed-designs', 'severity', RANK[rb.severity] < RANK[ra.severity], ra.severity, rb.severity, rb.where);
+  if (ra.severity !== rb.severity)
+    add('removed-designs', 'severity', RANK[rb.severity] < RANK[ra.severity], ra.severity, rb.severity, rb.where);
   return out;
 }
 
-type Add = (subject: string, key: string, loosens: boolean, base: string | number | null, head: string | number | null, where: Where | undefined) => void;
+type Add = (
+  subject: string,
+  key: string,
+  loosens: boolean,
+  base: string | number | null,
+  head: string | number | null,
+  where: Where | undefined,
+) => void;
 
 function compareValues(prev: Requirement, next: Requirement, add: Add): void {
   if (prev.kind === 'spread-ceiling' && next.kind === 'spread-ceiling') {
@@ -62,7 +99,14 @@ function compareValues(prev: Requirement, next: Requirement, add: Add): void {
       if (x !== y) add(next.id, key, x && !y, x ? 'on' : 'off', y ? 'on' : 'off', next.where);
     }
     if (prev.hardenedWeakPoints !== next.hardenedWeakPoints) {
-      add(next.id, 'hardened-weak-points', RANK[next.hardenedWeakPoints] < RANK[prev.hardenedWeakPoints], prev.hardenedWeakPoints, next.hardenedWeakPoints, next.hardenedWhere ?? next.where);
+      add(
+        next.id,
+        'hardened-weak-points',
+        RANK[next.hardenedWeakPoints] < RANK[prev.hardenedWeakPoints],
+        prev.hardenedWeakPoints,
+        next.hardenedWeakPoints,
+        next.hardenedWhere ?? next.where,
+      );
     }
     return;
   }

@@ -42,7 +42,6 @@ import { type Segment, YamlSource } from './yaml-source.js';
 export const MIN_METRIC_WEIGHT = 1e-6;
 export const MAX_METRIC_WEIGHT = 1e6;
 
-
 let validator: ValidateFunction | undefined;
 
 function validate(data: unknown): ValidateFunction {
@@ -52,7 +51,10 @@ function validate(data: unknown): ValidateFunction {
 }
 
 /** Which engine challenge a (remove, order, adaptive) triple is; undefined when it does not exist. */
-const ENGINE: Record<RemoveWhat, Partial<Record<RemovalOrder, { static?: ChallengeName; adaptive?: ChallengeName }>>> = {
+const ENGINE: Record<
+  RemoveWhat,
+  Partial<Record<RemovalOrder, { static?: ChallengeName; adaptive?: ChallengeName }>>
+> = {
   nodes: {
     random: { static: 'random-nodes' },
     degree: { static: 'degree', adaptive: 'degree-adaptive' },
@@ -83,7 +85,12 @@ function globs(value: unknown, src: YamlSource, path: readonly Segment[], what: 
   const list = typeof value === 'string' ? [value] : (value as string[]);
   list.forEach((g, j) => {
     const problem = globProblem(g);
-    if (problem) throw new PolicyError(`${what}, glob "${g}" ${problem.message}`, src.where(typeof value === 'string' ? path : [...path, j]), problem.hint);
+    if (problem)
+      throw new PolicyError(
+        `${what}, glob "${g}" ${problem.message}`,
+        src.where(typeof value === 'string' ? path : [...path, j]),
+        problem.hint,
+      );
   });
   return list;
 }
@@ -124,7 +131,12 @@ class FileBuilder {
     const random = order === 'random';
     for (const key of ['realizations', 'band'] as const) {
       if (!random && raw[key] !== undefined) {
-        this.fail(`challenge "${name}": "${key}" applies only to random order`, [...path, key], 'a targeted attack is one curve', true);
+        this.fail(
+          `challenge "${name}": "${key}" applies only to random order`,
+          [...path, key],
+          'a targeted attack is one curve',
+          true,
+        );
       }
     }
     if (raw['worst-case'] !== undefined && !(random && (remove === 'nodes' || remove === 'links'))) {
@@ -145,12 +157,19 @@ class FileBuilder {
     }
     const band = raw.band as [number, number] | undefined;
     if (band && !(band[0] < band[1])) {
-      this.fail(`challenge "${name}": the band's lower quantile must be below its upper one`, [...path, 'band'], `e.g. [0.1, 0.9]`);
+      this.fail(
+        `challenge "${name}": the band's lower quantile must be below its upper one`,
+        [...path, 'band'],
+        `e.g. [0.1, 0.9]`,
+      );
     }
     // The engine's defaults, written out, so that reports say exactly what ran. A region's
     // radius is fixed here too (the engine would derive one from each design's extent, so base
     // and head could get different grids, whose areas and spreads do not compare).
-    const params: ChallengeParams = { challenge: engine, until: until ?? (remove === 'region' ? REGIONAL_UNTIL_KM : CHALLENGE_DEFAULTS.until) };
+    const params: ChallengeParams = {
+      challenge: engine,
+      until: until ?? (remove === 'region' ? REGIONAL_UNTIL_KM : CHALLENGE_DEFAULTS.until),
+    };
     if (random) {
       params.points = (raw.points as number | undefined) ?? CHALLENGE_DEFAULTS.points;
       params.realizations = (raw.realizations as number | undefined) ?? CHALLENGE_DEFAULTS.realizations;
@@ -166,21 +185,36 @@ class FileBuilder {
   statistic(raw: Obj, path: readonly Segment[]): ThresholdStatistic {
     const kind = (raw.statistic as ThresholdStatistic['kind'] | undefined) ?? 'median';
     if (raw.q !== undefined && kind !== 'quantile') {
-      this.fail(`${describe(path)}: "q" needs "statistic: quantile"`, [...path, 'q'], 'add "statistic: quantile" or remove "q"', true);
+      this.fail(
+        `${describe(path)}: "q" needs "statistic: quantile"`,
+        [...path, 'q'],
+        'add "statistic: quantile" or remove "q"',
+        true,
+      );
     }
     if (raw.removals !== undefined && kind !== 'worst-case') {
       this.fail(`${describe(path)}: "removals" needs "statistic: worst-case"`, [...path, 'removals'], '', true);
     }
     if (kind === 'quantile') {
-      if (raw.q === undefined) this.fail(`${describe(path)}: "statistic: quantile" needs "q"`, [...path, 'statistic'], 'e.g. "q: 0.1"');
+      if (raw.q === undefined)
+        this.fail(`${describe(path)}: "statistic: quantile" needs "q"`, [...path, 'statistic'], 'e.g. "q: 0.1"');
       return { kind, q: raw.q as number };
     }
     if (kind === 'worst-case') {
       if (raw.removals === undefined) {
-        this.fail(`${describe(path)}: "statistic: worst-case" needs "removals"`, [...path, 'statistic'], 'e.g. "removals: 2"');
+        this.fail(
+          `${describe(path)}: "statistic: worst-case" needs "removals"`,
+          [...path, 'statistic'],
+          'e.g. "removals: 2"',
+        );
       }
       if (raw.at !== undefined) {
-        this.fail(`${describe(path)}: a worst-case threshold counts "removals", not "at"`, [...path, 'at'], 'remove "at"', true);
+        this.fail(
+          `${describe(path)}: a worst-case threshold counts "removals", not "at"`,
+          [...path, 'at'],
+          'remove "at"',
+          true,
+        );
       }
       return { kind, removals: raw.removals as number };
     }
@@ -223,7 +257,12 @@ class FileBuilder {
         req = { ...common, kind: 'spread-ceiling', ...ref, max: raw.max as number };
         break;
       case 'n-1':
-        req = { ...common, kind: 'n-1', element: (raw.element as 'node' | 'link' | undefined) ?? 'link', min: raw.min as number };
+        req = {
+          ...common,
+          kind: 'n-1',
+          element: (raw.element as 'node' | 'link' | undefined) ?? 'link',
+          min: raw.min as number,
+        };
         break;
       default: {
         const elements = (raw.elements as string[] | undefined) ?? ['bridges', 'cut-nodes', 'risk-groups'];
@@ -235,7 +274,9 @@ class FileBuilder {
           cutNodes: elements.includes('cut-nodes'),
           riskGroups: elements.includes('risk-groups'),
           hardenedWeakPoints: (raw['hardened-weak-points'] as RemovedSeverity | undefined) ?? 'warn',
-          ...(raw['hardened-weak-points'] !== undefined ? { hardenedWhere: this.at([...path, 'hardened-weak-points']) } : {}),
+          ...(raw['hardened-weak-points'] !== undefined
+            ? { hardenedWhere: this.at([...path, 'hardened-weak-points']) }
+            : {}),
         };
       }
     }
@@ -251,9 +292,12 @@ class FileBuilder {
       const req = this.requirement(raw, [...path, i]);
       const twin = byId.get(req.id);
       if (twin) {
-        throw new PolicyError(`${describe([...path, i])} repeats requirement ${req.id}`, req.where, 'keep one of them', [
-          { ...twin.where, message: 'first written here' },
-        ]);
+        throw new PolicyError(
+          `${describe([...path, i])} repeats requirement ${req.id}`,
+          req.where,
+          'keep one of them',
+          [{ ...twin.where, message: 'first written here' }],
+        );
       }
       byId.set(req.id, req);
       out.push(req);
@@ -298,9 +342,16 @@ class FileBuilder {
     if (raw.candidates !== undefined) {
       const c = String(raw.candidates).replace(/\\/g, '/');
       if (c.startsWith('/') || /^[A-Za-z]:\//.test(c) || c.split('/').includes('..')) {
-        this.fail(`"mend.candidates" must be a path inside the repository, not ${c}`, ['mend', 'candidates'], 'write it from the repository root, e.g. planning/candidate-links.yaml');
+        this.fail(
+          `"mend.candidates" must be a path inside the repository, not ${c}`,
+          ['mend', 'candidates'],
+          'write it from the repository root, e.g. planning/candidate-links.yaml',
+        );
       }
-      m.candidates = c.split('/').filter((s) => s !== '' && s !== '.').join('/');
+      m.candidates = c
+        .split('/')
+        .filter((s) => s !== '' && s !== '.')
+        .join('/');
     }
     if (raw['route-factor'] !== undefined) m.routeFactor = raw['route-factor'] as number;
     if (raw['max-km'] !== undefined) m.maxKm = raw['max-km'] as number;
@@ -317,7 +368,11 @@ class FileBuilder {
 /** Normalise a repository path: forward slashes, no "." segments; PolicyError if it leaves the repository. */
 export function joinRepoPath(fromFile: string, relative: string, where: Where): string {
   if (relative.startsWith('/') || /^[A-Za-z]:[\\/]/.test(relative)) {
-    throw new PolicyError(`"inherits" must be a path inside the repository, not ${relative}`, where, 'write it relative to this policy file');
+    throw new PolicyError(
+      `"inherits" must be a path inside the repository, not ${relative}`,
+      where,
+      'write it relative to this policy file',
+    );
   }
   const dir = fromFile.split('/').slice(0, -1);
   const parts = [...dir];
@@ -325,7 +380,11 @@ export function joinRepoPath(fromFile: string, relative: string, where: Where): 
     if (seg === '' || seg === '.') continue;
     if (seg === '..') {
       if (parts.length === 0) {
-        throw new PolicyError(`"inherits" leaves the repository: ${relative}`, where, 'the base policy must be a file in this repository');
+        throw new PolicyError(
+          `"inherits" leaves the repository: ${relative}`,
+          where,
+          'the base policy must be a file in this repository',
+        );
       }
       parts.pop();
     } else {
@@ -340,11 +399,16 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   const src = new YamlSource(text, file);
   const data = (src.data ?? {}) as unknown;
   if (typeof data !== 'object' || data === null || Array.isArray(data)) {
-    throw new PolicyError('the policy must be a mapping of keys (key: value lines)', src.where([]), 'see "netbrace init" for a starter file');
+    throw new PolicyError(
+      'the policy must be a mapping of keys (key: value lines)',
+      src.where([]),
+      'see "netbrace init" for a starter file',
+    );
   }
   // Before the schema, which would call .inf or 1e400 "not a number" without saying why.
   const odd = firstNonNormal(data, []);
-  if (odd) throw new PolicyError(`${describe(odd.path)} ${odd.why}`, src.where(odd.path), 'write a plain decimal number');
+  if (odd)
+    throw new PolicyError(`${describe(odd.path)} ${odd.why}`, src.where(odd.path), 'write a plain decimal number');
   const v = validate(data);
   if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
 
@@ -357,16 +421,18 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
     policy.inherits = { path: joinRepoPath(file, raw.inherits as string, where), where };
   }
   if (raw.designs !== undefined) {
-    policy.designs = (raw.designs as Obj[]).map(
-      (d, i): DesignGlob => ({
-        paths: globs(d.paths, src, ['designs', i, 'paths'], `designs entry ${i + 1}`),
-        ...(d.format !== undefined ? { format: d.format as DesignFormat } : {}),
-        where: src.where(['designs', i]),
-        fileWhere: typeof d.paths === 'string' ? [src.where(['designs', i, 'paths'])] : (d.paths as string[]).map((_, j) => src.where(['designs', i, 'paths', j])),
-      }),
-    );
+    policy.designs = (raw.designs as Obj[]).map((d, i): DesignGlob => ({
+      paths: globs(d.paths, src, ['designs', i, 'paths'], `designs entry ${i + 1}`),
+      ...(d.format !== undefined ? { format: d.format as DesignFormat } : {}),
+      where: src.where(['designs', i]),
+      fileWhere:
+        typeof d.paths === 'string'
+          ? [src.where(['designs', i, 'paths'])]
+          : (d.paths as string[]).map((_, j) => src.where(['designs', i, 'paths', j])),
+    }));
   }
-  if (raw.exclude !== undefined) policy.exclude = { globs: globs(raw.exclude, src, ['exclude'], 'exclude'), where: src.where(['exclude']) };
+  if (raw.exclude !== undefined)
+    policy.exclude = { globs: globs(raw.exclude, src, ['exclude'], 'exclude'), where: src.where(['exclude']) };
   if (raw.seed !== undefined) policy.seed = { value: raw.seed as number, where: src.where(['seed']) };
   if (raw['r-value'] !== undefined) {
     const r = raw['r-value'] as Obj;
@@ -380,7 +446,10 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
       }
     }
     const spec: RValueSpec = {
-      metrics: Object.entries(r.metrics as Record<string, number>).map(([id, weight]) => ({ id: id as MetricId, weight })),
+      metrics: Object.entries(r.metrics as Record<string, number>).map(([id, weight]) => ({
+        id: id as MetricId,
+        weight,
+      })),
       combine: (r.combine as 'mean' | 'min' | undefined) ?? 'mean',
     };
     policy.rValue = { spec, where: src.where(['r-value'], true) };

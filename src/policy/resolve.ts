@@ -69,7 +69,10 @@ function describeValue(r: Requirement): string {
 }
 
 /** Why `next` is looser than `prev` (same id), or undefined when it is at least as tight. */
-function loosening(prev: Requirement, next: Requirement): { message: string; where: Where; prevWhere: Where } | undefined {
+function loosening(
+  prev: Requirement,
+  next: Requirement,
+): { message: string; where: Where; prevWhere: Where } | undefined {
   if (SEVERITY_RANK[next.severity] < SEVERITY_RANK[prev.severity]) {
     return {
       message: `lowers the severity of ${prev.id} from ${prev.severity} to ${next.severity}`,
@@ -80,7 +83,8 @@ function loosening(prev: Requirement, next: Requirement): { message: string; whe
   let looser = false;
   if (prev.kind === 'spread-ceiling' && next.kind === 'spread-ceiling') looser = next.max > prev.max;
   else if (prev.kind === 'no-new-spof' && next.kind === 'no-new-spof') {
-    looser = (prev.bridges && !next.bridges) || (prev.cutNodes && !next.cutNodes) || (prev.riskGroups && !next.riskGroups);
+    looser =
+      (prev.bridges && !next.bridges) || (prev.cutNodes && !next.cutNodes) || (prev.riskGroups && !next.riskGroups);
     if (!looser && SEVERITY_RANK[next.hardenedWeakPoints] < SEVERITY_RANK[prev.hardenedWeakPoints]) {
       return {
         message: `lowers hardened-weak-points of ${prev.id} from ${prev.hardenedWeakPoints} to ${next.hardenedWeakPoints}`,
@@ -100,9 +104,12 @@ function loosening(prev: Requirement, next: Requirement): { message: string; whe
 }
 
 function loosenError(what: string, why: string, where: Where, prevWhere: Where): PolicyError {
-  return new PolicyError(`${what} ${why}`, where, 'an inheriting policy or a scope may tighten a floor, never loosen it', [
-    related(prevWhere, 'the floor it would loosen'),
-  ]);
+  return new PolicyError(
+    `${what} ${why}`,
+    where,
+    'an inheriting policy or a scope may tighten a floor, never loosen it',
+    [related(prevWhere, 'the floor it would loosen')],
+  );
 }
 
 /** Merge `next` into the list; tighten-only, see the file comment. */
@@ -122,9 +129,7 @@ function mergeRequirement(list: Layered<Requirement>[], next: Layered<Requiremen
   // A more basic file's looser floor: the tighter one from a derived file holds.
 }
 
-type WeakeningField =
-  | 'allowedDrop'   | 'allowedRelativeDrop'
-  | 'errorMultiple';
+type WeakeningField = 'allowedDrop' | 'allowedRelativeDrop' | 'errorMultiple';
 const WEAKENING_FIELDS: readonly [WeakeningField, string][] = [
   ['allowedDrop', 'allowed-drop'],
   ['allowedRelativeDrop', 'allowed-relative-drop'],
@@ -132,7 +137,11 @@ const WEAKENING_FIELDS: readonly [WeakeningField, string][] = [
 ];
 
 /** Apply the fields `next` sets on top of `prev`, refusing to loosen any of them. */
-function mergeWeakening(prev: Layered<WeakeningRule>, next: Layered<WeakeningRule>, what: string): Layered<WeakeningRule> {
+function mergeWeakening(
+  prev: Layered<WeakeningRule>,
+  next: Layered<WeakeningRule>,
+  what: string,
+): Layered<WeakeningRule> {
   const merged: WeakeningRule = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
   const mayLoosen = next.layer < prev.layer;
   for (const [field, key] of WEAKENING_FIELDS) {
@@ -189,12 +198,15 @@ function visits(n: number): string {
 
 /** The key of a budget that sets its element visits (the smaller limit), for naming its line. */
 function bindingKey(b: Budget): 'work' | 'seconds' | undefined {
-  if (b.seconds !== undefined && (b.work === undefined || b.seconds * ENGINE_VISITS_PER_SECOND <= b.work)) return 'seconds';
+  if (b.seconds !== undefined && (b.work === undefined || b.seconds * ENGINE_VISITS_PER_SECOND <= b.work))
+    return 'seconds';
   return b.work !== undefined ? 'work' : undefined;
 }
 
 function describeBudget(b: Budget): string {
-  return [b.work !== undefined ? `work ${visits(b.work)}` : '', b.seconds !== undefined ? `seconds ${b.seconds}` : ''].filter(Boolean).join(', ');
+  return [b.work !== undefined ? `work ${visits(b.work)}` : '', b.seconds !== undefined ? `seconds ${b.seconds}` : '']
+    .filter(Boolean)
+    .join(', ');
 }
 
 /**
@@ -237,7 +249,10 @@ function checkRequirement(r: Requirement, challenges: readonly ChallengeDef[], w
   if (r.kind === 'n-1' || r.kind === 'no-new-spof') return r;
   const c = challenges.find((x) => x.name === r.challenge);
   if (!c) {
-    const near = closest(r.challenge, challenges.map((x) => x.name));
+    const near = closest(
+      r.challenge,
+      challenges.map((x) => x.name),
+    );
     throw new PolicyError(
       `${what} refers to challenge "${r.challenge}", which the policy does not define`,
       r.challengeWhere,
@@ -325,7 +340,11 @@ function readChain(entry: string, read: ReadFile): PolicyFile[] {
   let from: Where | undefined;
   for (;;) {
     if (seen.has(path)) {
-      throw new PolicyError(`"inherits" goes round in a circle back to ${path}`, from ?? { file: path }, 'remove one of the inherits lines');
+      throw new PolicyError(
+        `"inherits" goes round in a circle back to ${path}`,
+        from ?? { file: path },
+        'remove one of the inherits lines',
+      );
     }
     seen.add(path);
     let text: string | null;
@@ -333,12 +352,22 @@ function readChain(entry: string, read: ReadFile): PolicyFile[] {
       text = read(path);
     } catch (e) {
       // Bytes that are not text (decode.ts): the same located message, as a policy problem.
-      if (e instanceof EncodingError) throw new PolicyError(e.message, { file: e.file, line: e.line, column: e.column }, e.hint);
+      if (e instanceof EncodingError)
+        throw new PolicyError(e.message, { file: e.file, line: e.line, column: e.column }, e.hint);
       throw e;
     }
     if (text === null) {
-      if (from) throw new PolicyError(`the base policy ${path} does not exist`, from, 'check the path; it is relative to this file');
-      throw new PolicyError(`the policy file ${path} does not exist`, { file: path }, 'run "netbrace init" to write one');
+      if (from)
+        throw new PolicyError(
+          `the base policy ${path} does not exist`,
+          from,
+          'check the path; it is relative to this file',
+        );
+      throw new PolicyError(
+        `the policy file ${path} does not exist`,
+        { file: path },
+        'run "netbrace init" to write one',
+      );
     }
     const file = parsePolicyFile(text, path);
     chain.unshift(file);
@@ -464,7 +493,12 @@ function mergeChain(chain: PolicyFile[]): Policy {
     removedDesigns: removed.value,
     budget: budget.value,
     scopes,
-    layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer },
+    layers: {
+      requirements: checked.map((r) => r.layer),
+      weakening: weakening.layer,
+      removed: removed.layer,
+      budget: budget.layer,
+    },
     ...(mend ? { mend } : {}),
   };
 }
@@ -498,7 +532,9 @@ export function isDesignPath(policy: Policy, path: string): boolean {
  * (`isDesignText`). A CSV that any other glob selects is judged whatever it holds.
  */
 export function designNeedsHeader(policy: Policy, path: string): boolean {
-  const matching = policy.designs.flatMap((d) => d.paths.filter((g: string) => globsMatch([g], path)).map((g: string) => ({ g, format: d.format })));
+  const matching = policy.designs.flatMap((d) =>
+    d.paths.filter((g: string) => globsMatch([g], path)).map((g: string) => ({ g, format: d.format })),
+  );
   return matching.length > 0 && matching.every((m) => m.g === CSV_DESIGN_GLOB && m.format === undefined);
 }
 
@@ -516,9 +552,15 @@ export function designFormat(policy: Policy, path: string): DesignFormat | undef
 /** The rules for one design file: the policy with its matching scopes applied. Throws PolicyError. */
 export function policyForFile(policy: Policy, path: string): FilePolicy {
   const layers = policy.layers;
-  const requirements: Layered<Requirement>[] = policy.requirements.map((value, i) => ({ value, layer: layers.requirements[i] }));
+  const requirements: Layered<Requirement>[] = policy.requirements.map((value, i) => ({
+    value,
+    layer: layers.requirements[i],
+  }));
   let weakening: Layered<WeakeningRule> = { value: policy.weakening, layer: layers.weakening };
-  let removed: Layered<{ severity: RemovedSeverity; where?: Where }> = { value: policy.removedDesigns, layer: layers.removed };
+  let removed: Layered<{ severity: RemovedSeverity; where?: Where }> = {
+    value: policy.removedDesigns,
+    layer: layers.removed,
+  };
   let budget: Layered<Budget> = { value: policy.budget, layer: layers.budget };
   for (const o of policy.scopes) {
     if (!globsMatch(o.paths, path)) continue;
@@ -538,7 +580,11 @@ export function policyForFile(policy: Policy, path: string): FilePolicy {
     requirements: requirements.map((r) => r.value),
     weakening: weakening.value,
     removedDesigns: removed.value.severity,
-    budget: { ...(b.work !== undefined ? { work: b.work } : {}), ...(b.seconds !== undefined ? { seconds: b.seconds } : {}), maxWork: budgetWork(b) },
+    budget: {
+      ...(b.work !== undefined ? { work: b.work } : {}),
+      ...(b.seconds !== undefined ? { seconds: b.seconds } : {}),
+      maxWork: budgetWork(b),
+    },
     ...(format ? { format } : {}),
     ...(policy.mend ? { mend: policy.mend } : {}),
   };

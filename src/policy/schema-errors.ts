@@ -68,11 +68,11 @@ function typeOf(value: unknown): string {
  * error names the new one wherever the new one is a known key.
  */
 const RENAMED_KEYS: Readonly<Record<string, string>> = {
-  'extends': 'inherits',
-  'ignore': 'exclude',
-  'files': 'paths',
-  'overrides': 'scopes',
-  'regression': 'weakening',
+  extends: 'inherits',
+  ignore: 'exclude',
+  files: 'paths',
+  overrides: 'scopes',
+  regression: 'weakening',
   'noise-factor': 'error-multiple',
 };
 
@@ -85,7 +85,9 @@ function renamedKey(key: string, known: readonly string[]): string | undefined {
 /** "path\0new name" for each key written under its former name. */
 function renamedAt(e: ErrorObject): string | undefined {
   if (e.keyword !== 'additionalProperties') return undefined;
-  const known = Object.keys(((e.parentSchema as Record<string, unknown> | undefined)?.properties as object | undefined) ?? {});
+  const known = Object.keys(
+    ((e.parentSchema as Record<string, unknown> | undefined)?.properties as object | undefined) ?? {},
+  );
   const renamed = renamedKey(String((e.params as Record<string, unknown>).additionalProperty), known);
   return renamed === undefined ? undefined : `${e.instancePath}\0${renamed}`;
 }
@@ -138,7 +140,11 @@ function diagnose(e: ErrorObject, src: YamlSource): Diagnosed | undefined {
     case 'exclusiveMinimum':
     case 'exclusiveMaximum': {
       const op = { minimum: '≥', maximum: '≤', exclusiveMinimum: '>', exclusiveMaximum: '<' }[e.keyword];
-      return { where: src.where(path), message: `${subject} must be ${op} ${String(params.limit)} (it is ${String(e.data)})`, hint: '' };
+      return {
+        where: src.where(path),
+        message: `${subject} must be ${op} ${String(params.limit)} (it is ${String(e.data)})`,
+        hint: '',
+      };
     }
     case 'minItems':
     case 'maxItems': {
@@ -156,7 +162,11 @@ function diagnose(e: ErrorObject, src: YamlSource): Diagnosed | undefined {
     case 'minLength':
       return { where: src.where(path), message: `${subject} must not be empty`, hint: '' };
     case 'uniqueItems':
-      return { where: src.where(path), message: `${subject} lists the same item twice`, hint: 'remove the repeated item' };
+      return {
+        where: src.where(path),
+        message: `${subject} lists the same item twice`,
+        hint: 'remove the repeated item',
+      };
     case 'propertyNames':
       return {
         where: src.where([...path, String(params.propertyName)], true),
@@ -164,7 +174,11 @@ function diagnose(e: ErrorObject, src: YamlSource): Diagnosed | undefined {
         hint: '',
       };
     case 'anyOf':
-      return { where: src.where(path), message: `${subject} must be a glob or a list of globs`, hint: 'e.g. "networks/**/*.graphml"' };
+      return {
+        where: src.where(path),
+        message: `${subject} must be a glob or a list of globs`,
+        hint: 'e.g. "networks/**/*.graphml"',
+      };
     case 'discriminator': {
       if (params.error === 'mapping') {
         const kinds = requirementKinds(parentSchema);
@@ -200,9 +214,11 @@ export function throwSchemaErrors(errors: readonly ErrorObject[], src: YamlSourc
   const renamed = new Set(errors.map(renamedAt).filter((r) => r !== undefined));
   const kept = errors.filter(
     (e) =>
-      (e.keyword === 'anyOf' ||
-        !anyOfPaths.some((p) => e.instancePath === p || e.instancePath.startsWith(`${p}/`))) &&
-      !(e.keyword === 'required' && renamed.has(`${e.instancePath}\0${String((e.params as Record<string, unknown>).missingProperty)}`)),
+      (e.keyword === 'anyOf' || !anyOfPaths.some((p) => e.instancePath === p || e.instancePath.startsWith(`${p}/`))) &&
+      !(
+        e.keyword === 'required' &&
+        renamed.has(`${e.instancePath}\0${String((e.params as Record<string, unknown>).missingProperty)}`)
+      ),
   );
   const seen = new Set<string>();
   const list: Diagnosed[] = [];

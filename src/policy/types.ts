@@ -97,11 +97,7 @@ export interface SpofRequirement extends RequirementBase {
 }
 
 export type Requirement =
-  | ThresholdRequirement
-  | AreaRequirement
-  | SpreadRequirement
-  | ContingencyRequirement
-  | SpofRequirement;
+  ThresholdRequirement | AreaRequirement | SpreadRequirement | ContingencyRequirement | SpofRequirement;
 
 export interface WeakeningRule {
   /** Largest drop tolerated, in units of R (absolute). */

@@ -24,7 +24,11 @@ export class YamlSource {
     // Measured before parsing: the yaml package recurses once per level (see nesting.ts).
     const deep = yamlNestingExceeded(text);
     if (deep >= 0) {
-      throw new PolicyError(`the policy nests deeper than ${MAX_NESTING} levels`, { file, ...positionOf(text, deep) }, 'a policy needs a few levels of nesting; flatten this structure');
+      throw new PolicyError(
+        `the policy nests deeper than ${MAX_NESTING} levels`,
+        { file, ...positionOf(text, deep) },
+        'a policy needs a few levels of nesting; flatten this structure',
+      );
     }
     this.doc = parseDocument(text, { lineCounter: this.lines, prettyErrors: false, uniqueKeys: true });
     const problem = this.doc.errors[0];

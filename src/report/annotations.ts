@@ -62,8 +62,19 @@ export function annotationsOf(report: Report, options: AnnotationOptions = {}): 
     const file = repoPath(options.pathPrefix, f.path);
     const touched = options.changedLines?.get(file);
     const findings = [...f.findings];
-    if (f.status === 'unreadable' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
-      findings.push({ rule: 'parse-error', severity: 'fail', message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
+    if (
+      f.status === 'unreadable' &&
+      f.error &&
+      !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')
+    ) {
+      findings.push({
+        rule: 'parse-error',
+        severity: 'fail',
+        message: f.error.message,
+        elements: [],
+        line: f.error.line,
+        column: f.error.column,
+      });
     }
     for (const x of findings) {
       const startLine = Math.max(1, Math.floor(x.line || 1));
@@ -90,13 +101,18 @@ export function annotationsOf(report: Report, options: AnnotationOptions = {}): 
       level: n.weakens ? 'error' : policy && loosens ? 'warning' : 'notice',
       file,
       startLine,
-      title: n.weakens ? 'netbrace: the change weakens netbrace\u2019s own settings' : policy ? `netbrace: ${RULE_TITLE['policy-changed']}` : 'netbrace: the change edits netbrace\u2019s workflow',
+      title: n.weakens
+        ? 'netbrace: the change weakens netbrace\u2019s own settings'
+        : policy
+          ? `netbrace: ${RULE_TITLE['policy-changed']}`
+          : 'netbrace: the change edits netbrace\u2019s workflow',
       message: logText(policy ? `${n.text}.` : n.text),
       rule: policy ? 'policy-changed' : 'own-settings',
       inDiff: options.changedLines?.get(file)?.has(startLine) ?? false,
     });
   }
-  const rank = (a: Annotation) => SEVERITY_RANK[a.level === 'error' ? 'fail' : a.level === 'warning' ? 'warn' : 'notice'];
+  const rank = (a: Annotation) =>
+    SEVERITY_RANK[a.level === 'error' ? 'fail' : a.level === 'warning' ? 'warn' : 'notice'];
   // Stable sort: within a severity, touched lines first, then the files' worst-first order.
   return out.sort((a, b) => rank(a) - rank(b) || Number(b.inDiff) - Number(a.inDiff));
 }
@@ -110,8 +126,14 @@ export function planAnnotations(report: Report, options: AnnotationOptions = {})
   // If anything is left out, the last notice slot is the closing notice.
   const errorCap = Math.max(0, perLevel - (options.reservedErrors ?? 0));
   const capOf = (l: AnnotationLevel) => (l === 'error' ? errorCap : perLevel);
-  const fitsAll = (['error', 'warning', 'notice'] as AnnotationLevel[]).every((l) => all.filter((a) => a.level === l).length <= capOf(l));
-  const cap: Record<AnnotationLevel, number> = { error: errorCap, warning: perLevel, notice: fitsAll ? perLevel : perLevel - 1 };
+  const fitsAll = (['error', 'warning', 'notice'] as AnnotationLevel[]).every(
+    (l) => all.filter((a) => a.level === l).length <= capOf(l),
+  );
+  const cap: Record<AnnotationLevel, number> = {
+    error: errorCap,
+    warning: perLevel,
+    notice: fitsAll ? perLevel : perLevel - 1,
+  };
   for (const a of all) {
     if (used[a.level] < cap[a.level]) {
       taken.push(a);

@@ -87,7 +87,12 @@ export function envelopeChart(env: Envelope, head: Evaluation, base?: Evaluation
   series.push({ role: 'band', id: 'band', label: bandName, points: zip(env.x, lo), upper: zip(env.x, hi) });
   series.push({ role: 'median', id: 'median', label: 'median', points: zip(env.x, env.median) });
   for (const a of attacksFor(env, head)) {
-    series.push({ role: 'attack', id: `attack:${a.challenge}`, label: challengeLabel(a.challenge), points: clip(zip(a.x, a.values), xMax) });
+    series.push({
+      role: 'attack',
+      id: `attack:${a.challenge}`,
+      label: challengeLabel(a.challenge),
+      points: clip(zip(a.x, a.values), xMax),
+    });
   }
   const wc = env.worstCase;
   const count = elementCount(head, env);
@@ -103,7 +108,12 @@ export function envelopeChart(env: Envelope, head: Evaluation, base?: Evaluation
   }
   const baseEnv = base?.envelopes.find((b) => b.challenge === env.challenge && b.kind === env.kind);
   if (baseEnv) {
-    series.push({ role: 'base-median', id: 'base-median', label: 'base median', points: clip(zip(baseEnv.x, baseEnv.median), xMax) });
+    series.push({
+      role: 'base-median',
+      id: 'base-median',
+      label: 'base median',
+      points: clip(zip(baseEnv.x, baseEnv.median), xMax),
+    });
   }
   return {
     title: `R under ${challengeLabel(env.challenge)}`,
@@ -180,22 +190,32 @@ export function renderChartSvg(chart: EnvelopeChart, options: SvgOptions = {}): 
   );
   out.push(`<title id="${id}-title">${esc(chart.title)}</title>`);
   out.push(`<desc id="${id}-desc">${esc(chart.summary)}</desc>`);
-  out.push(`<rect x="${m.left}" y="${m.top}" width="${plotW}" height="${plotH}" fill="#fffdf8" stroke="${CHART_COLORS.grid}"/>`);
+  out.push(
+    `<rect x="${m.left}" y="${m.top}" width="${plotW}" height="${plotH}" fill="#fffdf8" stroke="${CHART_COLORS.grid}"/>`,
+  );
 
   // Grid and ticks (decorative for assistive technology: the desc says what matters).
   out.push('<g aria-hidden="true" font-family="inherit" font-size="12" fill="' + CHART_COLORS.ink + '">');
   for (let i = 0; i <= 5; i++) {
     const y = i / 5;
-    out.push(`<line x1="${m.left}" x2="${m.left + plotW}" y1="${num(sy(y))}" y2="${num(sy(y))}" stroke="${CHART_COLORS.grid}" stroke-width="${i === 0 ? 1.2 : 0.6}"/>`);
+    out.push(
+      `<line x1="${m.left}" x2="${m.left + plotW}" y1="${num(sy(y))}" y2="${num(sy(y))}" stroke="${CHART_COLORS.grid}" stroke-width="${i === 0 ? 1.2 : 0.6}"/>`,
+    );
     out.push(`<text x="${m.left - 8}" y="${num(sy(y) + 4)}" text-anchor="end">${y.toFixed(1)}</text>`);
   }
   for (const x of niceTicks(xMax)) {
-    out.push(`<line x1="${num(sx(x))}" x2="${num(sx(x))}" y1="${m.top}" y2="${m.top + plotH}" stroke="${CHART_COLORS.grid}" stroke-width="0.6"/>`);
+    out.push(
+      `<line x1="${num(sx(x))}" x2="${num(sx(x))}" y1="${m.top}" y2="${m.top + plotH}" stroke="${CHART_COLORS.grid}" stroke-width="0.6"/>`,
+    );
     const label = chart.xUnit === 'km' ? `${num(x)}` : `${Math.round(x * 100)} %`;
     out.push(`<text x="${num(sx(x))}" y="${m.top + plotH + 16}" text-anchor="middle">${label}</text>`);
   }
-  out.push(`<text x="${m.left + plotW / 2}" y="${m.top + plotH + 36}" text-anchor="middle" font-size="13">${esc(chart.xLabel)}</text>`);
-  out.push(`<text transform="translate(16 ${m.top + plotH / 2}) rotate(-90)" text-anchor="middle" font-size="13">R (robustness value, 0\u20131)</text>`);
+  out.push(
+    `<text x="${m.left + plotW / 2}" y="${m.top + plotH + 36}" text-anchor="middle" font-size="13">${esc(chart.xLabel)}</text>`,
+  );
+  out.push(
+    `<text transform="translate(16 ${m.top + plotH / 2}) rotate(-90)" text-anchor="middle" font-size="13">R (robustness value, 0\u20131)</text>`,
+  );
   out.push('</g>');
 
   let attackIndex = 0;
@@ -209,7 +229,11 @@ export function renderChartSvg(chart: EnvelopeChart, options: SvgOptions = {}): 
         return { stroke: CHART_COLORS.worst, dash: '', width: 1.8 };
       case 'attack': {
         const i = attackIndex++;
-        return { stroke: CHART_COLORS.attacks[i % CHART_COLORS.attacks.length], dash: ATTACK_DASH[i % ATTACK_DASH.length], width: 1.8 };
+        return {
+          stroke: CHART_COLORS.attacks[i % CHART_COLORS.attacks.length],
+          dash: ATTACK_DASH[i % ATTACK_DASH.length],
+          width: 1.8,
+        };
       }
       default:
         return { stroke: CHART_COLORS.bandEdge, dash: '', width: 0.8 };
@@ -227,7 +251,9 @@ export function renderChartSvg(chart: EnvelopeChart, options: SvgOptions = {}): 
       if (s.role === 'band') {
         const upper = s.upper ?? [];
         const d = `M${line(upper).replace(/ /g, ' L')} L${line([...s.points].reverse()).replace(/ /g, ' L')} Z`;
-        out.push(`<path ${attrs} d="${d}" fill="${CHART_COLORS.band}" fill-opacity="0.75" stroke="${st.stroke}" stroke-width="${st.width}"/>`);
+        out.push(
+          `<path ${attrs} d="${d}" fill="${CHART_COLORS.band}" fill-opacity="0.75" stroke="${st.stroke}" stroke-width="${st.width}"/>`,
+        );
         return;
       }
       out.push(`<g ${attrs}>`);
@@ -252,12 +278,15 @@ export function renderChartSvg(chart: EnvelopeChart, options: SvgOptions = {}): 
     const y = m.top + plotH + m.bottom + Math.floor(i / legendCols) * legendRowH + 4;
     out.push(`<g data-legend="${esc(s.id)}">`);
     if (s.role === 'band') {
-      out.push(`<rect x="${x}" y="${y}" width="26" height="10" fill="${CHART_COLORS.band}" stroke="${st.stroke}" stroke-width="0.8"/>`);
+      out.push(
+        `<rect x="${x}" y="${y}" width="26" height="10" fill="${CHART_COLORS.band}" stroke="${st.stroke}" stroke-width="0.8"/>`,
+      );
     } else {
       out.push(
         `<line x1="${x}" x2="${x + 26}" y1="${y + 5}" y2="${y + 5}" stroke="${st.stroke}" stroke-width="${st.width}"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`,
       );
-      if (s.role === 'worst-case') out.push(`<rect x="${x + 10}" y="${y + 2}" width="6" height="6" fill="${st.stroke}"/>`);
+      if (s.role === 'worst-case')
+        out.push(`<rect x="${x + 10}" y="${y + 2}" width="6" height="6" fill="${st.stroke}"/>`);
     }
     out.push(`<text x="${x + 34}" y="${y + 9}">${esc(s.label)}</text>`);
     out.push('</g>');

@@ -97,7 +97,9 @@ export function markdownCode(text: string, maxLength = 400, inTable = false): st
  */
 export function markerValue(text: string): string {
   const encoded = Array.from(String(text), (c) =>
-    /[A-Za-z0-9._/]/.test(c) || c === '-' ? c : Array.from(new TextEncoder().encode(c), (b) => `%${b.toString(16).toUpperCase().padStart(2, '0')}`).join(''),
+    /[A-Za-z0-9._/]/.test(c) || c === '-'
+      ? c
+      : Array.from(new TextEncoder().encode(c), (b) => `%${b.toString(16).toUpperCase().padStart(2, '0')}`).join(''),
   ).join('');
   return encoded.replace(/--/g, '-%2D');
 }

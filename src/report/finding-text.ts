@@ -30,6 +30,9 @@ export function findingCost(x: Finding, style: ElementStyle = {}): string {
 
 /** `prefix/p` with forward slashes; the prefix is the working directory within the repository. */
 export function repoPath(prefix: string | undefined, p: string): string {
-  const clean = (prefix ?? '').replace(/\\/g, '/').replace(/^\.(\/|$)/, '').replace(/\/+$/, '');
+  const clean = (prefix ?? '')
+    .replace(/\\/g, '/')
+    .replace(/^\.(\/|$)/, '')
+    .replace(/\/+$/, '');
   return clean ? `${clean}/${p}` : p;
 }

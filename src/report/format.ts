@@ -5,7 +5,6 @@
 // Counting UTF-8 bytes lives at the bottom layer (the design reader needs it too).
 export { utf8Length } from '../decode.js';
 
-
 /** `x` at `decimals` decimals with a real minus sign and no "−0.000". */
 export function formatFixed(x: number, decimals = 3): string {
   if (!Number.isFinite(x)) return String(x);

@@ -123,7 +123,8 @@ export interface HtmlOptions {
 }
 
 export function renderHtml(report: Report, options: HtmlOptions = {}): string {
-  const readme = options.readmeUrl && /^https?:\/\//.test(options.readmeUrl) ? `${options.readmeUrl}#${README_ANCHOR}` : undefined;
+  const readme =
+    options.readmeUrl && /^https?:\/\//.test(options.readmeUrl) ? `${options.readmeUrl}#${README_ANCHOR}` : undefined;
   const verdict = verdictStory(report);
   const stories = designStories(report);
   const parts: string[] = [];
@@ -131,7 +132,9 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
   parts.push('<html lang="en">');
   parts.push('<head>');
   parts.push('<meta charset="utf-8">');
-  parts.push(`<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`);
+  parts.push(
+    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`,
+  );
   parts.push('<meta name="viewport" content="width=device-width, initial-scale=1">');
   parts.push(`<meta name="generator" content="netbrace ${esc(report.tool.version)}">`);
   parts.push(`<title>${esc(`netbrace report \u2014 ${plainSentence(verdict.sentence)}`)}</title>`);
@@ -140,15 +143,21 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
   parts.push(`<body data-report-version="${report.version}" data-verdict="${report.verdict}">`);
   parts.push('<header class="mast">');
   parts.push('<div class="brand" aria-hidden="true">netbrace \u00b7 robustness report</div>');
-  parts.push(`<h1 class="verdict ${verdict.tone}" id="verdict" role="status" data-tone="${verdict.tone}">${markHtml(verdict.mark)}${sentenceHtml(verdict.sentence)}</h1>`);
-  parts.push(`<p class="caution-line" id="caution-line">${esc(CAUTION_LINE.replace(/ \(the full caution is at the end\)\./, ''))} (<a href="#caution">the full caution is at the end</a>).</p>`);
+  parts.push(
+    `<h1 class="verdict ${verdict.tone}" id="verdict" role="status" data-tone="${verdict.tone}">${markHtml(verdict.mark)}${sentenceHtml(verdict.sentence)}</h1>`,
+  );
+  parts.push(
+    `<p class="caution-line" id="caution-line">${esc(CAUTION_LINE.replace(/ \(the full caution is at the end\)\./, ''))} (<a href="#caution">the full caution is at the end</a>).</p>`,
+  );
   parts.push(meta(report));
   parts.push('</header>');
   parts.push('<main>');
   if (stories.length > 1) parts.push(contents(stories));
   if (stories.length === 0) parts.push('<p>No design files changed: nothing to judge.</p>');
   stories.forEach((d, i) => parts.push(designSection(d, i, readme)));
-  parts.push(`<aside class="caution" id="caution" role="note" aria-label="Caution"><h2>Caution</h2><p>${esc(report.caution)}</p></aside>`);
+  parts.push(
+    `<aside class="caution" id="caution" role="note" aria-label="Caution"><h2>Caution</h2><p>${esc(report.caution)}</p></aside>`,
+  );
   parts.push('</main>');
   parts.push(
     `<footer><p>Written by netbrace ${esc(report.tool.version)} from report format version ${report.version}. ` +
@@ -162,7 +171,11 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
 
 function meta(r: Report): string {
   const rows: [string, string][] = [];
-  if (r.base || r.head) rows.push(['Compared', `base <code title="${esc(r.base ?? '')}">${esc(shortRevision(r.base))}</code> \u2192 head <code title="${esc(r.head ?? '')}">${esc(shortRevision(r.head))}</code>`]);
+  if (r.base || r.head)
+    rows.push([
+      'Compared',
+      `base <code title="${esc(r.base ?? '')}">${esc(shortRevision(r.base))}</code> \u2192 head <code title="${esc(r.head ?? '')}">${esc(shortRevision(r.head))}</code>`,
+    ]);
   const change = policyChangeSentence(r);
   rows.push([
     'Policy',
@@ -172,9 +185,16 @@ function meta(r: Report): string {
         (r.policy.note && !change ? `. ${esc(r.policy.note)}` : '')) + (change ? `. ${sentenceHtml(change)}` : ''),
   ]);
   const own = configurationNotes(r).filter((x) => x.file !== r.policy.path);
-  if (own.length) rows.push(['Configuration', own.map((x) => `${x.weakens ? '<strong>' : ''}${esc(x.text)}${x.weakens ? '</strong>' : ''}`).join('<br>')]);
+  if (own.length)
+    rows.push([
+      'Configuration',
+      own.map((x) => `${x.weakens ? '<strong>' : ''}${esc(x.text)}${x.weakens ? '</strong>' : ''}`).join('<br>'),
+    ]);
   if (r.scope === 'all') rows.push(['Scope', 'every design in the repository, judged against thresholds only']);
-  rows.push(['Mode', r.mode === 'inform' ? 'inform: failures are reported, the run does not fail' : 'block: failures fail the check']);
+  rows.push([
+    'Mode',
+    r.mode === 'inform' ? 'inform: failures are reported, the run does not fail' : 'block: failures fail the check',
+  ]);
   rows.push(['Seed', String(r.seed)]);
   if (r.part) rows.push(['Part', `${r.part.index} of ${r.part.total}`]);
   const counts = statusCounts(r).map(esc).join(', ');
@@ -184,7 +204,8 @@ function meta(r: Report): string {
 
 function contents(stories: DesignStory[]): string {
   const items = stories.map(
-    (d, i) => `<li><a href="#design-${i}">${esc(d.file.path)}</a> <span class="outcome ${d.outcome}">${markHtml(d.mark)}${esc(d.statusWord)}</span></li>`,
+    (d, i) =>
+      `<li><a href="#design-${i}">${esc(d.file.path)}</a> <span class="outcome ${d.outcome}">${markHtml(d.mark)}${esc(d.statusWord)}</span></li>`,
   );
   return `<nav aria-label="Designs in this report"><h3>Designs, worst first</h3><ol>${items.join('')}</ol></nav>`;
 }
@@ -209,7 +230,8 @@ function designSection(d: DesignStory, index: number, readme: string | undefined
   out.push('<header>');
   out.push(`<h2 id="${id}-h">${esc(f.path)}</h2>`);
   out.push(`<p class="outcome ${d.outcome}">${markHtml(d.mark)}${esc(d.statusWord)} \u2014 ${esc(d.headline)}</p>`);
-  if (f.previousPath) out.push(`<p class="facts">Renamed from <code>${esc(f.previousPath)}</code>; compared with its old self.</p>`);
+  if (f.previousPath)
+    out.push(`<p class="facts">Renamed from <code>${esc(f.previousPath)}</code>; compared with its old self.</p>`);
   out.push('</header>');
 
   // 1. What weakened: the consequences, worst first.
@@ -220,7 +242,9 @@ function designSection(d: DesignStory, index: number, readme: string | undefined
 
   // 2. How much: one line per requirement, and the words those lines use.
   if (d.howMuch.length) {
-    out.push(`<div class="part numbers" data-part="numbers"><h3 id="${id}-how-much">How much</h3><ul class="how-much">`);
+    out.push(
+      `<div class="part numbers" data-part="numbers"><h3 id="${id}-how-much">How much</h3><ul class="how-much">`,
+    );
     for (const l of d.howMuch) {
       const r = l.requirement;
       const sev = r.status === 'short' || r.status === 'weakened' ? ` sev-${r.severity}` : '';
@@ -232,7 +256,8 @@ function designSection(d: DesignStory, index: number, readme: string | undefined
     out.push('</ul>');
     if (d.definitions.length) {
       const defs = d.definitions.map(
-        (x) => `<dt>${esc(x.term)}</dt><dd data-term="${esc(x.term)}">${sentenceHtml(x.sentence)} <a href="${esc(readme ?? `#${id}-about-${README_ANCHOR}`)}" class="more">More in the README</a></dd>`,
+        (x) =>
+          `<dt>${esc(x.term)}</dt><dd data-term="${esc(x.term)}">${sentenceHtml(x.sentence)} <a href="${esc(readme ?? `#${id}-about-${README_ANCHOR}`)}" class="more">More in the README</a></dd>`,
       );
       out.push(`<dl class="definitions" aria-label="What these words mean">${defs.join('')}</dl>`);
     }
@@ -243,11 +268,19 @@ function designSection(d: DesignStory, index: number, readme: string | undefined
   const detailAt = out.length;
   if (f.head) out.push(`<p class="facts">${esc(facts(f.head))}</p>`);
   if (f.warnings?.length) {
-    const items = f.warnings.map((w) => `<li><code>${esc(`${f.path}:${w.line || 1}:${w.column || 1}`)}</code> ${esc(w.message)}${w.hint ? ` \u2014 ${esc(w.hint)}` : ''}</li>`);
-    out.push(`<div class="facts design-warnings"><strong>What reading the design warned of:</strong><ul>${items.join('')}</ul></div>`);
+    const items = f.warnings.map(
+      (w) =>
+        `<li><code>${esc(`${f.path}:${w.line || 1}:${w.column || 1}`)}</code> ${esc(w.message)}${w.hint ? ` \u2014 ${esc(w.hint)}` : ''}</li>`,
+    );
+    out.push(
+      `<div class="facts design-warnings"><strong>What reading the design warned of:</strong><ul>${items.join('')}</ul></div>`,
+    );
   }
   const notApplicable = describeNotApplicable(f.head);
-  if (notApplicable) out.push(`<p class="facts not-applicable"><strong>Not applicable to this design:</strong> ${esc(notApplicable)}</p>`);
+  if (notApplicable)
+    out.push(
+      `<p class="facts not-applicable"><strong>Not applicable to this design:</strong> ${esc(notApplicable)}</p>`,
+    );
   const changed = describeChanges(f);
   const modified = describeModifications(f, 200);
   if (changed || modified.length) {
@@ -351,14 +384,19 @@ function weakest(f: FileReport): string {
   const known = knownElements(f);
   const items = weakestSequences(f).map((s) => {
     const steps = s.elements
-      .map((e, i) => `<li>${htmlElement(e)}${s.values && s.values[i] !== undefined ? ` \u2014 R ${esc(formatValue(s.values[i]))}` : ''}</li>`)
+      .map(
+        (e, i) =>
+          `<li>${htmlElement(e)}${s.values && s.values[i] !== undefined ? ` \u2014 R ${esc(formatValue(s.values[i]))}` : ''}</li>`,
+      )
       .join('');
     return `<div class="sequence"><p>${esc(s.title)}</p><ol class="seq">${steps}</ol>${costItem(s.consequence, 'These removals')}</div>`;
   });
   for (const c of f.head?.contingencies ?? []) {
     const worst = c.worst[0];
     if (worst) {
-      const what = worst.elements.map((id, i) => htmlElement(worst.located?.[i] ?? knownElement(known, c.kind, id))).join(' + ');
+      const what = worst.elements
+        .map((id, i) => htmlElement(worst.located?.[i] ?? knownElement(known, c.kind, id)))
+        .join(' + ');
       items.push(
         `<div class="sequence"><p>${esc(contingencyLabel(c.challenge, c.kind))}: the ${esc(c.challenge === 'n-1' ? 'single' : 'double')} ${esc(kindSingular(c.kind))} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): ${what} leaves R ${esc(formatValue(worst.value))}</p></div>`,
       );
@@ -370,7 +408,9 @@ function weakest(f: FileReport): string {
 function structure(f: FileReport): string {
   const head = f.head?.structure;
   if (!head) return '';
-  const baseIds = new Set([...(f.base?.structure.bridges ?? []), ...(f.base?.structure.cutNodes ?? [])].map((e) => e.id));
+  const baseIds = new Set(
+    [...(f.base?.structure.bridges ?? []), ...(f.base?.structure.cutNodes ?? [])].map((e) => e.id),
+  );
   const row = (label: string, list: ReportElement[]) => {
     if (!list.length) return `<tr><th scope="row">${esc(label)}</th><td>none</td></tr>`;
     const items = list.map((e) => {

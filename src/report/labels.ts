@@ -3,7 +3,16 @@
 
 import type { ChallengeName } from '../challenges/types.js';
 import type { ElementKind } from '../graph/element.js';
-import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, Report, RequirementResult } from './report.js';
+import type {
+  AttributeChange,
+  Consequence,
+  FileReport,
+  FileStatus,
+  Finding,
+  ReportElement,
+  Report,
+  RequirementResult,
+} from './report.js';
 import { FILE_STATUS_WORD, JUDGED_TITLE } from './vocabulary.js';
 import { formatDelta, formatValue } from './format.js';
 import { plainSentence, policyChangeSentence } from './story.js';
@@ -12,7 +21,6 @@ import { plainSentence, policyChangeSentence } from './story.js';
 export { formatDelta, formatError, formatValue, shortRevision } from './format.js';
 export { REQUIREMENT_STATUS_WORD, fileFails, fileWarns } from './vocabulary.js';
 export const STATUS_WORD = FILE_STATUS_WORD;
-
 
 const CHALLENGE_LABEL: Record<ChallengeName, string> = {
   'random-nodes': 'random site failures',
@@ -54,7 +62,9 @@ export function xAxisLabel(kind: ElementKind, xUnit: 'fraction' | 'km'): string 
 /** Whether a requirement counts things (bridges, cut nodes): shown as whole numbers. */
 export function isCountRequirement(r: RequirementResult): boolean {
   const vals = [r.base, r.head, r.delta, r.threshold].filter((v): v is number => v !== null);
-  return r.se === 0 && vals.every(Number.isInteger) && (/spof|bridge|cut/.test(r.id) || vals.some((v) => Math.abs(v) > 1));
+  return (
+    r.se === 0 && vals.every(Number.isInteger) && (/spof|bridge|cut/.test(r.id) || vals.some((v) => Math.abs(v) > 1))
+  );
 }
 
 /** A requirement's value: whole numbers for counts, else as formatValue. */
@@ -74,7 +84,12 @@ export function formatFraction(x: number): string {
 
 /** A file's status in words; an error whose R cannot be computed is not "could not be read". */
 export function fileStatusWord(f: FileReport): string {
-  if (f.status === 'unreadable' && !f.findings.some((x) => x.rule === 'parse-error') && f.findings.some((x) => x.rule === 'not-computable')) return 'could not be evaluated';
+  if (
+    f.status === 'unreadable' &&
+    !f.findings.some((x) => x.rule === 'parse-error') &&
+    f.findings.some((x) => x.rule === 'not-computable')
+  )
+    return 'could not be evaluated';
   return STATUS_WORD[f.status];
 }
 
@@ -87,7 +102,9 @@ export function statusCounts(r: { counts: Record<FileStatus, number>; files: Fil
       out.push(`${n} ${STATUS_WORD[k]}`);
       continue;
     }
-    const evaluated = r.files.filter((f) => f.status === 'unreadable' && fileStatusWord(f) !== STATUS_WORD.unreadable).length;
+    const evaluated = r.files.filter(
+      (f) => f.status === 'unreadable' && fileStatusWord(f) !== STATUS_WORD.unreadable,
+    ).length;
     if (n - evaluated > 0) out.push(`${n - evaluated} ${STATUS_WORD.unreadable}`);
     if (evaluated > 0) out.push(`${evaluated} could not be evaluated`);
   }
@@ -95,7 +112,9 @@ export function statusCounts(r: { counts: Record<FileStatus, number>; files: Fil
 }
 
 /** "regional (no site has coordinates (lat/lon))": the challenges that do not apply to a side. */
-export function describeNotApplicable(ev: { notApplicable?: { challenge: ChallengeName; reason: string }[] } | undefined): string | undefined {
+export function describeNotApplicable(
+  ev: { notApplicable?: { challenge: ChallengeName; reason: string }[] } | undefined,
+): string | undefined {
   const list = ev?.notApplicable ?? [];
   if (!list.length) return undefined;
   return list.map((x) => `${challengeLabel(x.challenge)} (${x.reason})`).join('; ');
@@ -131,7 +150,11 @@ export function knownElements(f: FileReport): Map<string, ReportElement> {
 }
 
 /** The element of this kind and id as the report names it, else the bare id (line 0). */
-export function knownElement(known: ReadonlyMap<string, ReportElement>, kind: ReportElement['kind'], id: string): ReportElement {
+export function knownElement(
+  known: ReadonlyMap<string, ReportElement>,
+  kind: ReportElement['kind'],
+  id: string,
+): ReportElement {
   return known.get(`${kind}\u0000${id}`) ?? { id, kind, line: 0 };
 }
 
@@ -148,7 +171,10 @@ export interface ElementStyle {
  * The one way an element is named in every view and message: "Bratislava (node 8, line 93)"
  * for a site with a label, "kaskeld (line 14)" without one, the bare id when the line is unknown.
  */
-export function formatElement(e: Pick<ReportElement, 'id' | 'kind' | 'line' | 'label'>, style: ElementStyle = {}): string {
+export function formatElement(
+  e: Pick<ReportElement, 'id' | 'kind' | 'line' | 'label'>,
+  style: ElementStyle = {},
+): string {
   const id = style.id ?? ((x: string) => x);
   const text = style.text ?? ((x: string) => x);
   const sp = style.space ?? ' ';
@@ -179,7 +205,12 @@ export function consequenceSentence(c: Consequence, subject = 'Losing it', style
   let what: string;
   if (c.strandedCount === 0) what = `${verb('cuts', 'cut')} no surviving site off from the largest part`;
   else {
-    const list = more > 0 ? `${named.join(', ')} and ${more} more (${c.strandedCount} sites)` : named.length > 1 ? `${named.slice(0, -1).join(', ')} and ${named[named.length - 1]}` : named[0];
+    const list =
+      more > 0
+        ? `${named.join(', ')} and ${more} more (${c.strandedCount} sites)`
+        : named.length > 1
+          ? `${named.slice(0, -1).join(', ')} and ${named[named.length - 1]}`
+          : named[0];
     what = `${verb('cuts', 'cut')} off ${list} from the largest part`;
   }
   let demands = '';
@@ -214,7 +245,16 @@ export function weakestSequences(f: FileReport): NamedSequence[] {
   const seen = new Set<string>();
   const out: NamedSequence[] = [];
   const known = knownElements(f);
-  const add = (title: string, seq: { kind: ReportElement['kind']; elements: string[]; values?: number[]; located?: ReportElement[]; consequence?: Consequence }) => {
+  const add = (
+    title: string,
+    seq: {
+      kind: ReportElement['kind'];
+      elements: string[];
+      values?: number[];
+      located?: ReportElement[];
+      consequence?: Consequence;
+    },
+  ) => {
     const ids = seq.elements;
     const key = ids.join('\u0000');
     if (!ids.length || seen.has(key)) return;
@@ -227,15 +267,28 @@ export function weakestSequences(f: FileReport): NamedSequence[] {
   };
   for (const env of f.head?.envelopes ?? []) {
     const wc = env.worstCase;
-    if (wc) add(`Worst case found under ${challengeLabel(env.challenge)} (${wc.method} search, ${wc.k} ${wc.k === 1 ? kindSingular(wc.kind) : kindPlural(wc.kind)})`, wc);
+    if (wc)
+      add(
+        `Worst case found under ${challengeLabel(env.challenge)} (${wc.method} search, ${wc.k} ${wc.k === 1 ? kindSingular(wc.kind) : kindPlural(wc.kind)})`,
+        wc,
+      );
   }
   for (const x of f.findings) {
     if (x.rule !== 'weakest-sequence') continue;
-    add(x.message, { kind: x.elements[0]?.kind ?? 'node', elements: x.elements.map((e) => e.id), located: x.elements, ...(x.consequence ? { consequence: x.consequence } : {}) });
+    add(x.message, {
+      kind: x.elements[0]?.kind ?? 'node',
+      elements: x.elements.map((e) => e.id),
+      located: x.elements,
+      ...(x.consequence ? { consequence: x.consequence } : {}),
+    });
   }
   for (const env of f.head?.envelopes ?? []) {
     const w = env.weakest[0];
-    if (w) add(`Weakest realization${w.realization !== undefined ? ` #${w.realization}` : ''} under ${challengeLabel(env.challenge)}`, w);
+    if (w)
+      add(
+        `Weakest realization${w.realization !== undefined ? ` #${w.realization}` : ''} under ${challengeLabel(env.challenge)}`,
+        w,
+      );
   }
   return out;
 }
@@ -275,7 +328,11 @@ const SUBJECT = {
 
 /** " (links)" or " (sites)" for an N−1 finding, from its requirement id or its elements. */
 function n1Kind(x: Finding): string | undefined {
-  const kind = x.requirement?.endsWith(':node') ? 'node' : x.requirement?.endsWith(':link') ? 'link' : x.elements[0]?.kind;
+  const kind = x.requirement?.endsWith(':node')
+    ? 'node'
+    : x.requirement?.endsWith(':link')
+      ? 'link'
+      : x.elements[0]?.kind;
   return kind === 'node' || kind === 'link' ? ` (${kindPlural(kind)})` : undefined;
 }
 
@@ -303,24 +360,37 @@ export function describeChanges(f: FileReport, max = 4): string | undefined {
   const ch = f.changes;
   const renamed = ch?.renamed ?? [];
   const hardened = ch?.hardened ?? [];
-  if (!ch || (ch.added.length === 0 && ch.removed.length === 0 && renamed.length === 0 && hardened.length === 0)) return undefined;
+  if (!ch || (ch.added.length === 0 && ch.removed.length === 0 && renamed.length === 0 && hardened.length === 0))
+    return undefined;
   const cut = <T>(l: readonly T[]) => l.slice(0, max);
   const tail = (n: number) => (n > max ? `; \u2026 ${n - max} more` : '');
   const part = (sign: string, list: typeof ch.added, side: string) => {
-    const byKind = (['node', 'link', 'group'] as const).map((k) => list.filter((e) => e.kind === k)).filter((l) => l.length);
+    const byKind = (['node', 'link', 'group'] as const)
+      .map((k) => list.filter((e) => e.kind === k))
+      .filter((l) => l.length);
     return byKind.map((l) => {
       const n = l.length;
       const noun = n === 1 ? kindSingular(l[0].kind) : kindPlural(l[0].kind);
-      const names = cut(l).map((e) => (e.label ? `${e.label}, ${e.id}, ${side}line ${e.line}` : `${e.id}, ${side}line ${e.line}`)).join('; ');
+      const names = cut(l)
+        .map((e) => (e.label ? `${e.label}, ${e.id}, ${side}line ${e.line}` : `${e.id}, ${side}line ${e.line}`))
+        .join('; ');
       return `${sign}${n} ${noun} (${names}${tail(n)})`;
     });
   };
   const words = [...part('+', ch.added, ''), ...part('\u2212', ch.removed, 'base ')];
   for (const r of cut(renamed)) words.push(`${r.from.kind} ${r.from.id} renamed ${r.to.id} (line ${r.to.line})`);
   if (renamed.length > max) words.push(`\u2026 ${renamed.length - max} more renamed`);
-  for (const [flag, word] of [[true, 'now hardened'], [false, 'no longer hardened']] as const) {
+  for (const [flag, word] of [
+    [true, 'now hardened'],
+    [false, 'no longer hardened'],
+  ] as const) {
     const l = hardened.filter((e) => e.hardened === flag);
-    if (l.length) words.push(`${word}: ${cut(l).map((e) => formatElement(e)).join(', ')}${l.length > max ? `, \u2026 ${l.length - max} more` : ''}`);
+    if (l.length)
+      words.push(
+        `${word}: ${cut(l)
+          .map((e) => formatElement(e))
+          .join(', ')}${l.length > max ? `, \u2026 ${l.length - max} more` : ''}`,
+      );
   }
   return words.join(', ');
 }
@@ -343,7 +413,14 @@ export function groupFindings(findings: readonly Finding[]): GroupedFinding[] {
   for (const x of findings) {
     const groupable = GROUPABLE.has(x.rule) && x.elements.length === 1;
     const prev = out[out.length - 1];
-    if (groupable && prev && prev.rule === x.rule && prev.severity === x.severity && prev.elements.length >= 1 && prev.grouped) {
+    if (
+      groupable &&
+      prev &&
+      prev.rule === x.rule &&
+      prev.severity === x.severity &&
+      prev.elements.length >= 1 &&
+      prev.grouped
+    ) {
       prev.elements.push(...x.elements);
       prev.members!.push(x);
       continue;
@@ -374,7 +451,12 @@ export function configurationNotes(r: Report): { text: string; weakens: boolean;
   if (c) {
     for (const x of c.changes) {
       const tail = x.weakens ? '; it would weaken the check, so the base\u2019s setting applies and this fails' : '';
-      out.push({ text: `this change edits the workflow that runs netbrace (${c.workflow}, line ${x.line}): ${x.message}${tail}`, weakens: x.weakens, file: c.workflow, line: x.line });
+      out.push({
+        text: `this change edits the workflow that runs netbrace (${c.workflow}, line ${x.line}): ${x.message}${tail}`,
+        weakens: x.weakens,
+        file: c.workflow,
+        line: x.line,
+      });
     }
   }
   const policy = policyChangeSentence(r);

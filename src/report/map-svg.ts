@@ -53,10 +53,16 @@ export const LABEL_ALL_LIMIT = 60;
 export function mapHighlights(f: FileReport): MapHighlights {
   const bridges = new Set((f.head?.structure.bridges ?? []).map((e) => e.id));
   const cutNodes = new Set((f.head?.structure.cutNodes ?? []).map((e) => e.id));
-  const newBridges = new Set(f.findings.filter((x) => x.rule === 'new-bridge').flatMap((x) => x.elements.map((e) => e.id)));
-  const newCutNodes = new Set(f.findings.filter((x) => x.rule === 'new-cut-node').flatMap((x) => x.elements.map((e) => e.id)));
+  const newBridges = new Set(
+    f.findings.filter((x) => x.rule === 'new-bridge').flatMap((x) => x.elements.map((e) => e.id)),
+  );
+  const newCutNodes = new Set(
+    f.findings.filter((x) => x.rule === 'new-cut-node').flatMap((x) => x.elements.map((e) => e.id)),
+  );
   const seq = weakestSequences(f)[0];
-  const first = f.mend?.suggestions.find((s) => s.kind === 'links' && s.holds) ?? f.mend?.suggestions.find((s) => s.kind === 'links');
+  const first =
+    f.mend?.suggestions.find((s) => s.kind === 'links' && s.holds) ??
+    f.mend?.suggestions.find((s) => s.kind === 'links');
   return {
     bridges,
     newBridges,
@@ -81,15 +87,27 @@ function nodeTitle(n: MapNode, h: MapHighlights, step: number | undefined): stri
   return parts.join(' \u2014 ');
 }
 
-function linkTitle(l: MapLink, h: MapHighlights, step: number | undefined, stranding: ReadonlyMap<string, { strands: number; isNew: boolean }>): string {
-  const parts = [`Link ${l.id} (${l.source}\u2013${l.target})`, l.side === 'base' ? `base line ${l.line}` : `line ${l.line}`];
+function linkTitle(
+  l: MapLink,
+  h: MapHighlights,
+  step: number | undefined,
+  stranding: ReadonlyMap<string, { strands: number; isNew: boolean }>,
+): string {
+  const parts = [
+    `Link ${l.id} (${l.source}\u2013${l.target})`,
+    l.side === 'base' ? `base line ${l.line}` : `line ${l.line}`,
+  ];
   if (l.side === 'head') parts.push('added by the change');
   if (l.side === 'base') parts.push('removed by the change');
   if (h.newBridges.has(l.id)) parts.push('new bridge: its loss alone splits the design');
   else if (h.bridges.has(l.id) && l.side !== 'base') parts.push('bridge: its loss alone splits the design');
   for (const g of l.groups ?? []) {
     const s = stranding.get(g);
-    parts.push(s ? `in shared-risk group ${g}, whose loss strands ${s.strands} site${s.strands === 1 ? '' : 's'}${s.isNew ? ' (new)' : ''}` : `in shared-risk group ${g}`);
+    parts.push(
+      s
+        ? `in shared-risk group ${g}, whose loss strands ${s.strands} site${s.strands === 1 ? '' : 's'}${s.isNew ? ' (new)' : ''}`
+        : `in shared-risk group ${g}`,
+    );
   }
   if (l.hardened) parts.push('hardened');
   if (step !== undefined) parts.push(`step ${step} of the weakest removal sequence`);
@@ -105,7 +123,11 @@ interface LegendItem {
 }
 
 /** The map as a standalone SVG element. `idPrefix` keeps element ids unique within an HTML page. */
-export function renderMapSvg(map: DesignMap, h: MapHighlights, options: { idPrefix?: string; title?: string } = {}): string {
+export function renderMapSvg(
+  map: DesignMap,
+  h: MapHighlights,
+  options: { idPrefix?: string; title?: string } = {},
+): string {
   const id = options.idPrefix ?? 'nb-map';
   const C = MAP_COLORS;
   const pos = new Map(map.nodes.map((n) => [n.id, n]));
@@ -210,7 +232,8 @@ export function renderMapSvg(map: DesignMap, h: MapHighlights, options: { idPref
     const node = pos.get(el);
     if (node) at = { x: node.x - 10, y: node.y + 11 };
     else {
-      const link = map.links.find((l) => l.id === el) ?? map.links.find((l) => l.side !== 'base' && (l.groups ?? []).includes(el));
+      const link =
+        map.links.find((l) => l.id === el) ?? map.links.find((l) => l.side !== 'base' && (l.groups ?? []).includes(el));
       if (link) {
         const [mx, my] = mid(pos.get(link.source)!, pos.get(link.target)!);
         at = { x: mx, y: my - 10 };
@@ -262,28 +285,80 @@ function linkRank(l: MapLink, h: MapHighlights): number {
 function legend(C: typeof MAP_COLORS): LegendItem[] {
   const line = (attrs: string) => (x: number, y: number) => `<path d="M${r1(x)} ${r1(y)}h30" fill="none" ${attrs}/>`;
   return [
-    { key: 'site', label: 'site', draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.2" fill="${C.paper}" stroke="${C.ink}" stroke-width="1.3"/>` },
-    { key: 'site-hardened', label: 'hardened site', draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.2" fill="${C.ink}" stroke="${C.ink}" stroke-width="1.3"/>` },
-    { key: 'site-added', label: 'site added by the change', draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="5.5" fill="${C.paper}" stroke="${C.pass}" stroke-width="2.6"/>` },
-    { key: 'site-removed', label: 'site removed by the change', draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.5" fill="${C.paper}" stroke="${C.muted}" stroke-width="1.4" stroke-dasharray="2 2"/>` },
-    { key: 'cut', label: 'cut site (single point of failure)', draw: (x, y) => diamond(x + 15, y, 6.5, `fill="${C.paper}" stroke="${C.warn}" stroke-width="2.2"`) },
-    { key: 'new-cut', label: 'new cut site', draw: (x, y) => diamond(x + 15, y, 7, `fill="${C.fail}" stroke="${C.ink}" stroke-width="1.2"`) },
+    {
+      key: 'site',
+      label: 'site',
+      draw: (x, y) =>
+        `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.2" fill="${C.paper}" stroke="${C.ink}" stroke-width="1.3"/>`,
+    },
+    {
+      key: 'site-hardened',
+      label: 'hardened site',
+      draw: (x, y) =>
+        `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.2" fill="${C.ink}" stroke="${C.ink}" stroke-width="1.3"/>`,
+    },
+    {
+      key: 'site-added',
+      label: 'site added by the change',
+      draw: (x, y) =>
+        `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="5.5" fill="${C.paper}" stroke="${C.pass}" stroke-width="2.6"/>`,
+    },
+    {
+      key: 'site-removed',
+      label: 'site removed by the change',
+      draw: (x, y) =>
+        `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.5" fill="${C.paper}" stroke="${C.muted}" stroke-width="1.4" stroke-dasharray="2 2"/>`,
+    },
+    {
+      key: 'cut',
+      label: 'cut site (single point of failure)',
+      draw: (x, y) => diamond(x + 15, y, 6.5, `fill="${C.paper}" stroke="${C.warn}" stroke-width="2.2"`),
+    },
+    {
+      key: 'new-cut',
+      label: 'new cut site',
+      draw: (x, y) => diamond(x + 15, y, 7, `fill="${C.fail}" stroke="${C.ink}" stroke-width="1.2"`),
+    },
     { key: 'link', label: 'link', draw: line(`stroke="${C.link}" stroke-width="1.6"`) },
-    { key: 'added', label: 'link added by the change', draw: (x, y) => line(`stroke="${C.pass}" stroke-width="5"`)(x, y) + line(`stroke="${C.paper}" stroke-width="1.6"`)(x, y) },
-    { key: 'removed', label: 'link removed by the change', draw: line(`stroke="${C.link}" stroke-width="1.8" stroke-dasharray="6 4"`) },
+    {
+      key: 'added',
+      label: 'link added by the change',
+      draw: (x, y) =>
+        line(`stroke="${C.pass}" stroke-width="5"`)(x, y) + line(`stroke="${C.paper}" stroke-width="1.6"`)(x, y),
+    },
+    {
+      key: 'removed',
+      label: 'link removed by the change',
+      draw: line(`stroke="${C.link}" stroke-width="1.8" stroke-dasharray="6 4"`),
+    },
     { key: 'bridge', label: 'bridge (single point of failure)', draw: line(`stroke="${C.warn}" stroke-width="3"`) },
     {
       key: 'new-bridge',
       label: 'new bridge',
-      draw: (x, y) => line(`stroke="${C.fail}" stroke-width="4.2" stroke-linecap="round"`)(x, y) + `<rect x="${r1(x + 11)}" y="${r1(y - 4)}" width="8" height="8" fill="${C.fail}" stroke="${C.paper}" stroke-width="1.2"/>`,
+      draw: (x, y) =>
+        line(`stroke="${C.fail}" stroke-width="4.2" stroke-linecap="round"`)(x, y) +
+        `<rect x="${r1(x + 11)}" y="${r1(y - 4)}" width="8" height="8" fill="${C.fail}" stroke="${C.paper}" stroke-width="1.2"/>`,
     },
-    { key: 'group', label: 'shared-risk group whose loss strands sites', draw: line(`stroke="${C.band}" stroke-opacity="0.4" stroke-width="11" stroke-linecap="round"`) },
-    { key: 'group-new', label: 'the same, new with this change', draw: line(`stroke="${C.bandNew}" stroke-opacity="0.55" stroke-width="11" stroke-dasharray="14 5"`) },
-    { key: 'proposed', label: 'link the first suggestion adds', draw: line(`stroke="${C.notice}" stroke-width="2.6" stroke-dasharray="1 5" stroke-linecap="round"`) },
+    {
+      key: 'group',
+      label: 'shared-risk group whose loss strands sites',
+      draw: line(`stroke="${C.band}" stroke-opacity="0.4" stroke-width="11" stroke-linecap="round"`),
+    },
+    {
+      key: 'group-new',
+      label: 'the same, new with this change',
+      draw: line(`stroke="${C.bandNew}" stroke-opacity="0.55" stroke-width="11" stroke-dasharray="14 5"`),
+    },
+    {
+      key: 'proposed',
+      label: 'link the first suggestion adds',
+      draw: line(`stroke="${C.notice}" stroke-width="2.6" stroke-dasharray="1 5" stroke-linecap="round"`),
+    },
     {
       key: 'step',
       label: 'weakest removal sequence, in order',
-      draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="8" fill="${C.ink}"/><text x="${r1(x + 15)}" y="${r1(y + 3.6)}" font-size="10" font-weight="700" text-anchor="middle" fill="${C.paper}">1</text>`,
+      draw: (x, y) =>
+        `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="8" fill="${C.ink}"/><text x="${r1(x + 15)}" y="${r1(y + 3.6)}" font-size="10" font-weight="700" text-anchor="middle" fill="${C.paper}">1</text>`,
     },
   ];
 }
@@ -299,7 +374,8 @@ export function describeMap(map: DesignMap, h: MapHighlights): string {
   const strand = map.strandingGroups.map((g) => g.id);
   if (strand.length) parts.push(`shared-risk groups whose loss strands sites: ${strand.join(', ')}`);
   if (h.weakest.length) parts.push(`weakest removal sequence numbered: ${h.weakest.join(', ')}`);
-  if (h.proposed.length) parts.push(`proposed: ${h.proposed.map((l) => `${l.between[0]}\u2013${l.between[1]}`).join(', ')}`);
+  if (h.proposed.length)
+    parts.push(`proposed: ${h.proposed.map((l) => `${l.between[0]}\u2013${l.between[1]}`).join(', ')}`);
   return `${parts.join('; ')}. ${map.method}.`;
 }
 

@@ -16,7 +16,17 @@ import { repoPath } from './finding-text.js';
 import { stableHash } from '../random.js';
 import { formatValue, shortRevision, utf8Length } from './format.js';
 import { rangesText } from '../gate/split.js';
-import { challengeLabel, configurationNotes, contingencyLabel, describeNotApplicable, kindPlural, knownElement, knownElements, weakestSequences, xAxisLabel } from './labels.js';
+import {
+  challengeLabel,
+  configurationNotes,
+  contingencyLabel,
+  describeNotApplicable,
+  kindPlural,
+  knownElement,
+  knownElements,
+  weakestSequences,
+  xAxisLabel,
+} from './labels.js';
 import { changeMapMarkdown, mendMarkdown } from './mermaid-map.js';
 import type { FileReport, Report, ReportElement } from './report.js';
 import {
@@ -165,7 +175,13 @@ type Detail = 'full' | 'compact';
  * never holds an escaped backtick beside a code span that a lenient reader could pair it with.
  */
 function md(s: Sentence, max = 600): string {
-  return s.map((x) => (x.kind === 'text' && !(x.user && x.text.includes('`')) ? escapeProse(x.text, max) : markdownCode(x.text, x.kind === 'text' ? max : 160))).join('');
+  return s
+    .map((x) =>
+      x.kind === 'text' && !(x.user && x.text.includes('`'))
+        ? escapeProse(x.text, max)
+        : markdownCode(x.text, x.kind === 'text' ? max : 160),
+    )
+    .join('');
 }
 
 function mdElement(e: ReportElement): string {
@@ -213,7 +229,10 @@ function assemble(report: Report, options: MarkdownOptions, layout: Layout): str
   let note = '';
   if (omitted.length > 0) {
     const n = omitted.length;
-    const list = omitted.slice(0, 10).map((s) => `- ${s.mark} ${s.statusWord} \u00b7 ${markdownCode(path(s.file.path), 200)}`).join('\n');
+    const list = omitted
+      .slice(0, 10)
+      .map((s) => `- ${s.mark} ${s.statusWord} \u00b7 ${markdownCode(path(s.file.path), 200)}`)
+      .join('\n');
     note = `${MARK.notice} ${n} more design${n === 1 ? '' : 's'} (the least severe) did not fit within GitHub\u2019s size limit for this view; every finding is in the JSON report and the SARIF file:\n\n${list}${n > 10 ? `\n- \u2026 ${n - 10} more` : ''}\n\n`;
   }
   return fit(head + body + footer(report, options, note), layout);
@@ -241,7 +260,10 @@ function header(report: Report, options: MarkdownOptions): string {
   let text = `## ${verdict.mark} ${md(verdict.sentence, 400)}\n\n${escapeProse(CAUTION_LINE)}\n\n`;
   const facts: string[] = [`${report.mode} mode`];
   if (report.policy.source === 'builtin') facts.push('built-in default policy (no policy file)');
-  else facts.push(`policy ${markdownCode(report.policy.path ?? '?')}${report.policy.revision ? ` at ${rev(report.policy.revision)}` : ''}`);
+  else
+    facts.push(
+      `policy ${markdownCode(report.policy.path ?? '?')}${report.policy.revision ? ` at ${rev(report.policy.revision)}` : ''}`,
+    );
   if (report.base && report.head) facts.push(`base ${rev(report.base)} \u2192 head ${rev(report.head)}`);
   else if (report.head) facts.push(`head ${rev(report.head)}, thresholds only (no base)`);
   facts.push(`seed ${report.seed}`);
@@ -252,7 +274,8 @@ function header(report: Report, options: MarkdownOptions): string {
   text += `${facts.join(' \u00b7 ')}\n\n`;
   const policy = policyChangeSentence(report);
   if (policy) text += `${MARK.warn} ${md(policy, 1200)}\n\n`;
-  else if (report.policy.note) text += `${MARK.notice} Policy: ${escapeProse(report.policy.note.replace(/\.\s*$/, ''), 600)}.\n\n`;
+  else if (report.policy.note)
+    text += `${MARK.notice} Policy: ${escapeProse(report.policy.note.replace(/\.\s*$/, ''), 600)}.\n\n`;
   for (const n of configurationNotes(report).filter((x) => x.file !== report.policy.path)) {
     text += `${n.weakens ? MARK.fail : MARK.notice} Settings: ${escapeProse(n.text, 600)}.\n\n`;
   }
@@ -260,7 +283,8 @@ function header(report: Report, options: MarkdownOptions): string {
   for (const d of report.split ?? []) {
     text += `${MARK.notice} ${markdownCode(d.path)} is split across the parts: this part ran realizations ${escapeProse(rangesText(d), 200)} of ${d.realizations}, and the join judges it.\n\n`;
   }
-  if (report.files.length === 0) text += 'No design file changed between base and head, so there is nothing to judge.\n\n';
+  if (report.files.length === 0)
+    text += 'No design file changed between base and head, so there is nothing to judge.\n\n';
   return text;
 }
 
@@ -271,7 +295,12 @@ function rev(sha: string): string {
 /** A part's summary: one line per design; the joined summary carries the detail, once. */
 function partBody(stories: DesignStory[], path: (p: string) => string): string {
   if (!stories.length) return '';
-  const lines = stories.slice(0, 500).map((s) => `- ${s.mark} ${s.statusWord} \u00b7 ${markdownCode(path(s.file.path), 200)}: ${escapeProse(s.headline, 300)}`);
+  const lines = stories
+    .slice(0, 500)
+    .map(
+      (s) =>
+        `- ${s.mark} ${s.statusWord} \u00b7 ${markdownCode(path(s.file.path), 200)}: ${escapeProse(s.headline, 300)}`,
+    );
   const more = stories.length > 500 ? `\n- \u2026 ${stories.length - 500} more` : '';
   return `${lines.join('\n')}${more}\n\nThis part\u2019s designs in one line each; the joined summary tells what weakened and how much.\n\n`;
 }
@@ -280,7 +309,14 @@ function partBody(stories: DesignStory[], path: (p: string) => string): string {
 
 const OUTCOME_WORD: Record<'fail' | 'warn' | 'notice', string> = { fail: 'fails', warn: 'warns', notice: 'note' };
 
-function designSection(s: DesignStory, detail: Detail, layout: Layout, path: (p: string) => string, chart: boolean, options: MarkdownOptions): string {
+function designSection(
+  s: DesignStory,
+  detail: Detail,
+  layout: Layout,
+  path: (p: string) => string,
+  chart: boolean,
+  options: MarkdownOptions,
+): string {
   const f = s.file;
   const renamed = f.previousPath ? ` (renamed from ${markdownCode(path(f.previousPath))})` : '';
   let text = `### ${s.mark} ${s.statusWord} \u00b7 ${markdownCode(path(f.path))}${renamed}\n\n`;
@@ -291,8 +327,10 @@ function designSection(s: DesignStory, detail: Detail, layout: Layout, path: (p:
   const cap = detail === 'full' ? layout.itemsFull : layout.itemsCompact;
   if (s.weakened.length) {
     text += '**What weakened**, worst first:\n\n';
-    for (const x of s.weakened.slice(0, cap)) text += `- ${x.severity === 'fail' ? MARK.fail : MARK.warn} ${OUTCOME_WORD[x.severity]}: ${md(x.sentence)}\n`;
-    if (s.weakened.length > cap) text += `- \u2026 ${s.weakened.length - cap} more in the JSON report and the SARIF file\n`;
+    for (const x of s.weakened.slice(0, cap))
+      text += `- ${x.severity === 'fail' ? MARK.fail : MARK.warn} ${OUTCOME_WORD[x.severity]}: ${md(x.sentence)}\n`;
+    if (s.weakened.length > cap)
+      text += `- \u2026 ${s.weakened.length - cap} more in the JSON report and the SARIF file\n`;
     text += '\n';
   } else if (f.requirements.length) {
     text += `**What weakened**: ${s.outcome === 'holds' && !s.howMuch.some((l) => l.requirement.status === 'weakened' || l.requirement.status === 'short') ? 'nothing; every requirement holds' : 'no single element stands out; see the numbers below'}.\n\n`;
@@ -304,7 +342,8 @@ function designSection(s: DesignStory, detail: Detail, layout: Layout, path: (p:
     const url = definitionsUrl(options);
     // Each definition on its own line (a hard line break), with the link; without a link the README's section is named once.
     const lines = s.definitions.map((d) => `${MARK.notice} ${md(d.sentence)}${url ? ` [more](${url})` : ''}`);
-    if (lines.length) text += `${lines.join('\\\n')}${url ? '' : ' The README\u2019s \u201cReading the report\u201d says more.'}\n\n`;
+    if (lines.length)
+      text += `${lines.join('\\\n')}${url ? '' : ' The README\u2019s \u201cReading the report\u201d says more.'}\n\n`;
   }
   const notApplicable = describeNotApplicable(f.head);
   if (notApplicable) text += `Not applicable to this design: ${escapeProse(notApplicable, 600)}\n\n`;
@@ -321,16 +360,28 @@ function folded(s: DesignStory, layout: Layout, chart: boolean): string {
   const modified = f.changes?.modified ?? [];
   if (modified.length) {
     const max = layout.structure ? 50 : 10;
-    inner += `**Attributes the change altered**:\n\n${modified.slice(0, max).map((c) => `- ${md(modificationSentence(c), 300)}`).join('\n')}\n`;
-    inner += modified.length > max ? `- \u2026 ${modified.length - max} more attribute changes in the JSON report\n\n` : '\n';
+    inner += `**Attributes the change altered**:\n\n${modified
+      .slice(0, max)
+      .map((c) => `- ${md(modificationSentence(c), 300)}`)
+      .join('\n')}\n`;
+    inner +=
+      modified.length > max ? `- \u2026 ${modified.length - max} more attribute changes in the JSON report\n\n` : '\n';
   }
-  if (chart) for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign)) inner += chartSection(f, env, layout.chartPoints);
+  if (chart)
+    for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign))
+      inner += chartSection(f, env, layout.chartPoints);
   inner += layout.map ? changeMapMarkdown(f) : mendMarkdown(f);
   inner += sequencesSection(f, layout.sequences, layout.chain);
   if (layout.structure) inner += structureSection(f);
   if (s.notices.length) {
-    inner += `**Notices**:\n\n${s.notices.slice(0, layout.itemsFull).map((x) => `- ${MARK.notice} ${md(x.sentence)}`).join('\n')}\n`;
-    inner += s.notices.length > layout.itemsFull ? `- \u2026 ${s.notices.length - layout.itemsFull} more in the JSON report\n\n` : '\n';
+    inner += `**Notices**:\n\n${s.notices
+      .slice(0, layout.itemsFull)
+      .map((x) => `- ${MARK.notice} ${md(x.sentence)}`)
+      .join('\n')}\n`;
+    inner +=
+      s.notices.length > layout.itemsFull
+        ? `- \u2026 ${s.notices.length - layout.itemsFull} more in the JSON report\n\n`
+        : '\n';
   }
   if (!inner) return '';
   const what = [
@@ -355,9 +406,7 @@ const BARS = '\u2581\u2582\u2583\u2584\u2585\u2586\u2587\u2588';
 
 /** Unicode sparkline of values in [0, 1] on a fixed scale, so two lines compare by eye. */
 export function sparkline(values: readonly number[]): string {
-  return values
-    .map((v) => (Number.isFinite(v) ? BARS[Math.min(7, Math.max(0, Math.round(v * 7)))] : ' '))
-    .join('');
+  return values.map((v) => (Number.isFinite(v) ? BARS[Math.min(7, Math.max(0, Math.round(v * 7)))] : ' ')).join('');
 }
 
 /**
@@ -365,7 +414,9 @@ export function sparkline(values: readonly number[]): string {
  * its first and last value, so every line is named where it is drawn. Our words and numbers only.
  */
 function chartSection(f: FileReport, head: Envelope, points: number): string {
-  const base = f.base?.envelopes.find((e) => e.challenge === head.challenge && e.kind === head.kind && sameGrid(e, head));
+  const base = f.base?.envelopes.find(
+    (e) => e.challenge === head.challenge && e.kind === head.kind && sameGrid(e, head),
+  );
   const idx = sampleIndices(head.x.length, points);
   const pick = (v: readonly number[]) => idx.map((i) => v[i] ?? 0);
   const [qlo, qhi] = head.band;
@@ -377,10 +428,14 @@ function chartSection(f: FileReport, head: Envelope, points: number): string {
   const lo = head.quantiles[String(qlo)]?.value;
   if (lo) series.push({ name: `head ${Math.round(qlo * 100)} % quantile`, values: pick(lo) });
   const end = head.x[head.x.length - 1] ?? 0;
-  const range = head.xUnit === 'km' ? `0 to ${formatValue(end)} km` : `0 to ${Math.round(end * 100)} % ${kindPlural(head.kind)} removed`;
+  const range =
+    head.xUnit === 'km'
+      ? `0 to ${formatValue(end)} km`
+      : `0 to ${Math.round(end * 100)} % ${kindPlural(head.kind)} removed`;
   const width = Math.max(...series.map((s) => s.name.length));
   let text = `**${challengeLabel(head.challenge)}**: R (bars on a 0\u20131 scale) against ${xAxisLabel(head.kind, head.xUnit)}, ${range}:\n\n\`\`\`text\n`;
-  for (const s of series) text += `${s.name.padEnd(width)}  ${sparkline(s.values)}  ${formatValue(s.values[0])} \u2192 ${formatValue(s.values[s.values.length - 1])}\n`;
+  for (const s of series)
+    text += `${s.name.padEnd(width)}  ${sparkline(s.values)}  ${formatValue(s.values[0])} \u2192 ${formatValue(s.values[s.values.length - 1])}\n`;
   text += '```\n\n';
   const areas = `area ${formatValue(head.area)}${base ? ` (base ${formatValue(base.area)})` : ''}, spread ${formatValue(head.spread)}${base ? ` (base ${formatValue(base.spread)})` : ''}`;
   return `${text}${head.realizations} realizations, seed ${head.seed}; ${areas}.\n\n`;
@@ -406,14 +461,19 @@ function sequencesSection(f: FileReport, max: number, chain: number): string {
   const known = knownElements(f);
   const items: string[] = [];
   for (const seq of weakestSequences(f).slice(0, max)) {
-    const r = seq.values && seq.values.length ? `; R ${formatValue(seq.values[0])} \u2192 ${formatValue(seq.values[seq.values.length - 1])}` : '';
+    const r =
+      seq.values && seq.values.length
+        ? `; R ${formatValue(seq.values[0])} \u2192 ${formatValue(seq.values[seq.values.length - 1])}`
+        : '';
     const cost = seq.consequence ? ` These removals ${md(costSentence(seq.consequence, true))}.` : '';
     items.push(`- ${escapeProse(seq.title, 300)}: ${elementChain(seq.elements, chain)}${r}.${cost}`);
   }
   for (const c of head.contingencies) {
     const worst = c.worst[0];
     if (worst) {
-      items.push(`- ${contingencyLabel(c.challenge, c.kind)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList(worst.elements.map((id, i) => worst.located?.[i] ?? knownElement(known, c.kind, id)))}, leaves R ${formatValue(worst.value)}`);
+      items.push(
+        `- ${contingencyLabel(c.challenge, c.kind)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList(worst.elements.map((id, i) => worst.located?.[i] ?? knownElement(known, c.kind, id)))}, leaves R ${formatValue(worst.value)}`,
+      );
     }
   }
   if (!items.length) return '';
@@ -444,7 +504,10 @@ function footer(report: Report, options: MarkdownOptions, note: string): string 
   const artifacts = options.artifacts ?? [];
   if (artifacts.length || options.runUrl) {
     const list = artifacts.map((a) => markdownCode(a, 200)).join(', ');
-    const run = options.runUrl && /^https?:\/\/[^\s<>()]+$/.test(options.runUrl) ? `[the workflow run](${options.runUrl})` : 'the workflow run';
+    const run =
+      options.runUrl && /^https?:\/\/[^\s<>()]+$/.test(options.runUrl)
+        ? `[the workflow run](${options.runUrl})`
+        : 'the workflow run';
     text += `Full detail${list ? ` (${list})` : ''} is in the artifacts of ${run}.\n\n`;
   }
   text += `**Caution.** ${escapeProse(report.caution, 1000)}\n`;

@@ -43,7 +43,8 @@ function perUnit(s: MendSuggestion): string {
 function linkWords(l: MendLink): string {
   const parts = [`${l.between[0]}\u2013${l.between[1]}`];
   if (l.lengthKm !== undefined) parts.push(`${l.lengthKm} km`);
-  if (l.latencyMs !== undefined) parts.push(`latency ${l.latencyMs} ms${l.latencyEstimated ? ' (estimated from the design\u2019s links)' : ''}`);
+  if (l.latencyMs !== undefined)
+    parts.push(`latency ${l.latencyMs} ms${l.latencyEstimated ? ' (estimated from the design\u2019s links)' : ''}`);
   if (l.cost !== undefined) parts.push(`cost ${l.cost}`);
   if (l.riskGroups?.length) parts.push(`in ${l.riskGroups.join(', ')}`);
   parts.push(l.source === 'list' ? `from the candidate list${l.line ? `, line ${l.line}` : ''}` : 'generated');
@@ -53,32 +54,51 @@ function linkWords(l: MendLink): string {
 /** The YAML a planner adds under `links:` of a design in our format. */
 export function linksYaml(links: readonly MendLink[]): string {
   return links
-    .map((l) => `  - ${stringify(linkEntry(l), { collectionStyle: 'flow', flowCollectionPadding: false, lineWidth: 0 }).trim()}`)
+    .map(
+      (l) =>
+        `  - ${stringify(linkEntry(l), { collectionStyle: 'flow', flowCollectionPadding: false, lineWidth: 0 }).trim()}`,
+    )
     .join('\n');
 }
 
 function targetSummary(targets: readonly MendTarget[]): string[] {
   const by = (rule: string) => targets.filter((t) => t.rule === rule);
   const out: string[] = [];
-  const list = (ts: MendTarget[]) => ts.map((t) => `${t.elements[0]?.id ?? '?'} (line ${t.elements[0]?.line ?? t.line})`).join(', ');
-  if (by('new-bridge').length) out.push(`${by('new-bridge').length} new bridge${by('new-bridge').length === 1 ? '' : 's'}: ${list(by('new-bridge'))}`);
-  if (by('new-cut-node').length) out.push(`${by('new-cut-node').length} new cut site${by('new-cut-node').length === 1 ? '' : 's'}: ${list(by('new-cut-node'))}`);
-  for (const t of targets) if (t.rule !== 'new-bridge' && t.rule !== 'new-cut-node') out.push(`${t.severity === 'fail' ? 'failing' : 'warning'}: ${t.message}`);
+  const list = (ts: MendTarget[]) =>
+    ts.map((t) => `${t.elements[0]?.id ?? '?'} (line ${t.elements[0]?.line ?? t.line})`).join(', ');
+  if (by('new-bridge').length)
+    out.push(
+      `${by('new-bridge').length} new bridge${by('new-bridge').length === 1 ? '' : 's'}: ${list(by('new-bridge'))}`,
+    );
+  if (by('new-cut-node').length)
+    out.push(
+      `${by('new-cut-node').length} new cut site${by('new-cut-node').length === 1 ? '' : 's'}: ${list(by('new-cut-node'))}`,
+    );
+  for (const t of targets)
+    if (t.rule !== 'new-bridge' && t.rule !== 'new-cut-node')
+      out.push(`${t.severity === 'fail' ? 'failing' : 'warning'}: ${t.message}`);
   return out;
 }
 
 function boundWords(m: MendReport): string[] {
   const out: string[] = [];
   const nb = m.bounds.newBridges;
-  if (nb) out.push(`at least ${nb.links} link${nb.links === 1 ? '' : 's'} to remove the new bridges (their bridge tree has ${nb.leaves} leaves; Eswaran & Tarjan 1976)`);
+  if (nb)
+    out.push(
+      `at least ${nb.links} link${nb.links === 1 ? '' : 's'} to remove the new bridges (their bridge tree has ${nb.leaves} leaves; Eswaran & Tarjan 1976)`,
+    );
   const ab = m.bounds.allBridges;
-  if (ab.links > 0) out.push(`at least ${ab.links} link${ab.links === 1 ? '' : 's'} to leave no bridge at all (${ab.leaves} leaves${ab.isolated ? `, ${ab.isolated} isolated parts` : ''})`);
+  if (ab.links > 0)
+    out.push(
+      `at least ${ab.links} link${ab.links === 1 ? '' : 's'} to leave no bridge at all (${ab.leaves} leaves${ab.isolated ? `, ${ab.isolated} isolated parts` : ''})`,
+    );
   return out;
 }
 
 function candidateWords(m: MendReport): string {
   const c = m.candidates;
-  if (c.source === 'list') return `${c.count} candidate link${c.count === 1 ? '' : 's'} from ${c.path ?? 'the planner\u2019s list'}`;
+  if (c.source === 'list')
+    return `${c.count} candidate link${c.count === 1 ? '' : 's'} from ${c.path ?? 'the planner\u2019s list'}`;
   if (c.source === 'generated' && c.maxKm !== undefined) {
     return `${c.count} site pairs within ${c.maxKm} km (great circle), length = great-circle distance \u00d7 ${c.routeFactor} route factor (common practice)`;
   }
@@ -92,7 +112,8 @@ function headline(s: MendSuggestion, i: number): string {
       ? `add ${s.links.length} link${s.links.length === 1 ? '' : 's'}${s.total !== null && s.unit !== 'link' ? `, ${unitWord(s)}` : ''}`
       : `harden ${s.harden.length} element${s.harden.length === 1 ? '' : 's'}`;
   const verdict = s.holds ? 'holds' : `does not hold (${s.status})`;
-  const r = s.rBefore !== null && s.rAfter !== null ? `R\u0304 ${formatValue(s.rBefore)} \u2192 ${formatValue(s.rAfter)}` : '';
+  const r =
+    s.rBefore !== null && s.rAfter !== null ? `R\u0304 ${formatValue(s.rBefore)} \u2192 ${formatValue(s.rAfter)}` : '';
   return `${i}. ${what} \u2014 ${verdict}${r ? `; ${r}` : ''}${perUnit(s) ? ` (${perUnit(s)})` : ''}`;
 }
 
@@ -102,7 +123,9 @@ export function renderMendText(f: FileReport): string {
   const out: string[] = [];
   out.push(`What would mend ${plain(f.path)}`);
   if (!m) {
-    out.push('  nothing was searched: the design does not fail, or the policy turns the search off (mend.evaluations: 0)');
+    out.push(
+      '  nothing was searched: the design does not fail, or the policy turns the search off (mend.evaluations: 0)',
+    );
     return `${out.join('\n')}\n`;
   }
   if (m.targets.length) {
@@ -113,13 +136,17 @@ export function renderMendText(f: FileReport): string {
   out.push(`  Candidates: ${plain(candidateWords(m))}`);
   out.push(`  ${m.rDefinition}; ${m.evaluations} engine evaluation${m.evaluations === 1 ? '' : 's'}`);
   out.push('');
-  if (!m.targets.length) out.push('  Nothing to mend: no failing or warning finding that a change to the design can fix.');
+  if (!m.targets.length)
+    out.push('  Nothing to mend: no failing or warning finding that a change to the design can fix.');
   else if (!m.suggestions.length) out.push('  No suggestion: nothing tried removes a target.');
   m.suggestions.forEach((s, i) => {
     out.push(`  ${plain(headline(s, i + 1))}`);
     for (const l of s.links) out.push(`       + ${plain(l.id)}: ${plain(linkWords(l))}`);
-    for (const e of s.harden) out.push(`       * harden ${e.kind === 'node' ? 'site' : e.kind} ${plain(e.id)} (line ${e.line})`);
-    out.push(`       fixes ${s.fixes.length} of ${m.targets.length} targets${s.leaves.length ? `; still there: ${plain(s.leaves.join('; ').replace(/\|/g, ' '))}` : ''}`);
+    for (const e of s.harden)
+      out.push(`       * harden ${e.kind === 'node' ? 'site' : e.kind} ${plain(e.id)} (line ${e.line})`);
+    out.push(
+      `       fixes ${s.fixes.length} of ${m.targets.length} targets${s.leaves.length ? `; still there: ${plain(s.leaves.join('; ').replace(/\|/g, ' '))}` : ''}`,
+    );
     for (const r of s.requirements) {
       out.push(`       ${plain(r.description)}: ${value(r.id, r.before)} \u2192 ${value(r.id, r.after)} (${r.status})`);
     }
@@ -147,9 +174,21 @@ export function mendHtml(f: FileReport, id: string): string {
     const rows = m.suggestions.map((s, i) => {
       const change =
         s.kind === 'links'
-          ? s.links.map((l) => `<span class="el">+ ${esc(l.id)}</span> <span class="line">${esc(linkWords(l))}</span>`).join('<br>')
-          : s.harden.map((e) => `<span class="el">harden ${esc(e.id)}</span> <span class="line">(${esc(e.kind)}, line ${e.line})</span>`).join('<br>');
-      const req = s.requirements.map((r) => `${esc(r.description)}: ${esc(value(r.id, r.before))} \u2192 ${esc(value(r.id, r.after))} (${esc(r.status)})`).join('<br>');
+          ? s.links
+              .map((l) => `<span class="el">+ ${esc(l.id)}</span> <span class="line">${esc(linkWords(l))}</span>`)
+              .join('<br>')
+          : s.harden
+              .map(
+                (e) =>
+                  `<span class="el">harden ${esc(e.id)}</span> <span class="line">(${esc(e.kind)}, line ${e.line})</span>`,
+              )
+              .join('<br>');
+      const req = s.requirements
+        .map(
+          (r) =>
+            `${esc(r.description)}: ${esc(value(r.id, r.before))} \u2192 ${esc(value(r.id, r.after))} (${esc(r.status)})`,
+        )
+        .join('<br>');
       return (
         `<tr data-suggestion="${i + 1}" data-kind="${s.kind}" data-holds="${s.holds}">` +
         `<th scope="row">${i + 1}</th>` +
@@ -168,7 +207,9 @@ export function mendHtml(f: FileReport, id: string): string {
     );
     const first = m.suggestions.find((s) => s.kind === 'links');
     if (first) {
-      parts.push(`<details><summary>Suggestion ${m.suggestions.indexOf(first) + 1} in the design file (under <code>links:</code>)</summary><pre><code>${esc(linksYaml(first.links))}</code></pre></details>`);
+      parts.push(
+        `<details><summary>Suggestion ${m.suggestions.indexOf(first) + 1} in the design file (under <code>links:</code>)</summary><pre><code>${esc(linksYaml(first.links))}</code></pre></details>`,
+      );
     }
   } else {
     parts.push('<p class="facts">No suggestion: nothing tried removes a target.</p>');

@@ -32,8 +32,12 @@ export function mermaidLabel(id: string): string {
 export function neighbourhoodMermaid(f: FileReport): string {
   const map = f.map;
   if (!map || 'omitted' in map) return '';
-  const newBridges = new Set(f.findings.filter((x) => x.rule === 'new-bridge').flatMap((x) => x.elements.map((e) => e.id)));
-  const newCuts = new Set(f.findings.filter((x) => x.rule === 'new-cut-node').flatMap((x) => x.elements.map((e) => e.id)));
+  const newBridges = new Set(
+    f.findings.filter((x) => x.rule === 'new-bridge').flatMap((x) => x.elements.map((e) => e.id)),
+  );
+  const newCuts = new Set(
+    f.findings.filter((x) => x.rule === 'new-cut-node').flatMap((x) => x.elements.map((e) => e.id)),
+  );
   const focusLinks = map.links.filter((l) => l.side !== 'both' || newBridges.has(l.id));
   const focus = new Set<string>();
   for (const n of map.nodes) if (n.side !== 'both' || newCuts.has(n.id)) focus.add(n.id);
@@ -72,7 +76,13 @@ export function neighbourhoodMermaid(f: FileReport): string {
   const lines: string[] = ['```mermaid', 'graph LR'];
   for (const n of nodes) {
     const label = mermaidLabel(n.label ?? n.id);
-    const shape = newCuts.has(n.id) ? `{{"${label}"}}` : n.side === 'head' ? `(["${label}"])` : n.side === 'base' ? `[/"${label}"/]` : `("${label}")`;
+    const shape = newCuts.has(n.id)
+      ? `{{"${label}"}}`
+      : n.side === 'head'
+        ? `(["${label}"])`
+        : n.side === 'base'
+          ? `[/"${label}"/]`
+          : `("${label}")`;
     lines.push(`  ${name.get(n.id)}${shape}`);
   }
   const drawn: MapLink[] = linksAmong(chosen);
@@ -111,10 +121,19 @@ function suggestionWords(s: MendSuggestion): string {
   const what =
     s.kind === 'links'
       ? `add ${s.links
-          .map((l) => `${markdownCode(l.id, 80)} (${markdownCode(`${l.between[0]}\u2013${l.between[1]}`, 120)}${l.lengthKm !== undefined ? `, ${l.lengthKm} km` : ''}${l.cost !== undefined ? `, cost ${l.cost}` : ''})`)
+          .map(
+            (l) =>
+              `${markdownCode(l.id, 80)} (${markdownCode(`${l.between[0]}\u2013${l.between[1]}`, 120)}${l.lengthKm !== undefined ? `, ${l.lengthKm} km` : ''}${l.cost !== undefined ? `, cost ${l.cost}` : ''})`,
+          )
           .join(' and ')}`
-      : `harden ${s.harden.length} element${s.harden.length === 1 ? '' : 's'} (${s.harden.slice(0, 6).map((e) => markdownCode(e.id, 80)).join(', ')}${s.harden.length > 6 ? ', \u2026' : ''})`;
-  const r = s.rBefore !== null && s.rAfter !== null ? `, R\u0304 ${formatValue(s.rBefore)} \u2192 ${formatValue(s.rAfter)}` : '';
+      : `harden ${s.harden.length} element${s.harden.length === 1 ? '' : 's'} (${s.harden
+          .slice(0, 6)
+          .map((e) => markdownCode(e.id, 80))
+          .join(', ')}${s.harden.length > 6 ? ', \u2026' : ''})`;
+  const r =
+    s.rBefore !== null && s.rAfter !== null
+      ? `, R\u0304 ${formatValue(s.rBefore)} \u2192 ${formatValue(s.rAfter)}`
+      : '';
   return `${what}: ${s.holds ? 'holds' : 'does not hold on its own'}${r}`;
 }
 
@@ -124,7 +143,10 @@ export function mendMarkdown(f: FileReport): string {
   if (!m || m.targets.length === 0) return '';
   const links = m.suggestions.find((s) => s.kind === 'links');
   const harden = m.suggestions.find((s) => s.kind === 'harden');
-  const parts = [links ? suggestionWords(links) : 'no link suggestion', ...(harden ? [`or ${suggestionWords(harden)}`] : [])];
+  const parts = [
+    links ? suggestionWords(links) : 'no link suggestion',
+    ...(harden ? [`or ${suggestionWords(harden)}`] : []),
+  ];
   return (
     `**What would mend it**, each judged again by the same check: ${parts.join('; ')}. ` +
     'The HTML report (or `netbrace mend`) has every suggestion, the YAML to add and the caution: a suggestion is a topology-level hint, not a route survey.\n\n'

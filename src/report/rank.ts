@@ -11,7 +11,8 @@ const STATUS_RANK = FILE_STATUS_RANK;
 /** The most severe finding's severity, or undefined for a file without findings. */
 export function worstSeverity(f: FileReport): Severity | undefined {
   let worst: Severity | undefined;
-  for (const x of f.findings) if (worst === undefined || SEVERITY_RANK[x.severity] < SEVERITY_RANK[worst]) worst = x.severity;
+  for (const x of f.findings)
+    if (worst === undefined || SEVERITY_RANK[x.severity] < SEVERITY_RANK[worst]) worst = x.severity;
   return f.status === 'unreadable' ? 'fail' : worst;
 }
 

@@ -116,7 +116,8 @@ export interface Finding {
  * failure; unsettled: neither proven nor refuted; reduced-work: judged on work the budget cut;
  * not-computable: a value that is not a finite number.
  */
-export type FindingStatus = 'short' | 'weakened' | 'within-allowance' | 'inside-error' | 'unsettled' | 'reduced-work' | 'not-computable';
+export type FindingStatus =
+  'short' | 'weakened' | 'within-allowance' | 'inside-error' | 'unsettled' | 'reduced-work' | 'not-computable';
 
 /** An attribute of a node or link that the change altered (see FileReport.changes). */
 export interface AttributeChange {
@@ -203,7 +204,15 @@ export interface Report {
    */
   configuration?: {
     workflow: string;
-    changes: { setting: string; base: string; head: string; weakens: boolean; line: number; message: string; severity: Severity }[];
+    changes: {
+      setting: string;
+      base: string;
+      head: string;
+      weakens: boolean;
+      line: number;
+      message: string;
+      severity: Severity;
+    }[];
   };
   /** What the run judged: the changed designs, the given paths, or every design (thresholds only). */
   scope?: 'changed' | 'paths' | 'all';

@@ -140,7 +140,6 @@ export function findingFingerprint(path: string, x: Finding): string {
   return stableHash([x.rule, path, x.requirement ?? '', ...x.elements.map((e) => `${e.kind}:${e.id}`)].join('\u0000'));
 }
 
-
 /** The key our finding ids carry under a result's `fingerprints` (versioned, our own). */
 export const FINGERPRINT_KEY = 'netbraceFinding/v1';
 
@@ -157,7 +156,6 @@ function nonEmpty(text: string, fallback: string): string {
   const t = oneLine(text).trim();
   return t.length ? t : fallback;
 }
-
 
 export interface SarifLog {
   $schema: string;
@@ -176,7 +174,14 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
       shortDescription: { text: RULE_TITLE[id] },
       fullDescription: { text: r.full },
       help: { text: r.help, markdown: `**${r.short}.** ${r.full}\n\n${r.help}` },
-      defaultConfiguration: { level: id === 'weakest-sequence' || id === 'removed-design' || id === 'policy-changed' ? 'note' : id === 'degraded' || id === 'hardened-weak-point' ? 'warning' : 'error' },
+      defaultConfiguration: {
+        level:
+          id === 'weakest-sequence' || id === 'removed-design' || id === 'policy-changed'
+            ? 'note'
+            : id === 'degraded' || id === 'hardened-weak-point'
+              ? 'warning'
+              : 'error',
+      },
       properties: { tags: ['robustness', 'network-design'] },
     };
   });
@@ -186,8 +191,19 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
   for (const f of rankFiles(report.files)) {
     const path = repoPath(options.pathPrefix, f.path);
     const findings = rankFindings(f.findings);
-    if (f.status === 'unreadable' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
-      findings.unshift({ rule: 'parse-error', severity: 'fail', message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
+    if (
+      f.status === 'unreadable' &&
+      f.error &&
+      !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')
+    ) {
+      findings.unshift({
+        rule: 'parse-error',
+        severity: 'fail',
+        message: f.error.message,
+        elements: [],
+        line: f.error.line,
+        column: f.error.column,
+      });
     }
     for (const x of findings) {
       total++;
@@ -199,9 +215,16 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
       if (x.column && x.column > 0) region.startColumn = Math.floor(x.column);
       const properties: Record<string, unknown> = { fileStatus: f.status };
       if (x.requirement) properties.requirement = x.requirement;
-      for (const k of ['base', 'head', 'delta', 'se', 'threshold', 'allowance'] as const) if (typeof x[k] === 'number') properties[k] = x[k];
+      for (const k of ['base', 'head', 'delta', 'se', 'threshold', 'allowance'] as const)
+        if (typeof x[k] === 'number') properties[k] = x[k];
       if (x.status) properties.status = x.status;
-      if (x.elements.length) properties.elements = x.elements.map((e) => ({ id: e.id, kind: e.kind, line: e.line, ...(e.label !== undefined ? { label: e.label } : {}) }));
+      if (x.elements.length)
+        properties.elements = x.elements.map((e) => ({
+          id: e.id,
+          kind: e.kind,
+          line: e.line,
+          ...(e.label !== undefined ? { label: e.label } : {}),
+        }));
       if (x.consequence) properties.consequence = x.consequence;
       results.push({
         ruleId: x.rule,
@@ -223,13 +246,26 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
     total++;
     const path = repoPath(options.pathPrefix, policyNote.file);
     const changes = report.policy.changes ?? [];
-    const x: Finding = { rule: 'policy-changed', severity: 'notice', message: policyNote.text, elements: [], line: policyNote.line };
+    const x: Finding = {
+      rule: 'policy-changed',
+      severity: 'notice',
+      message: policyNote.text,
+      elements: [],
+      line: policyNote.line,
+    };
     results.push({
       ruleId: 'policy-changed',
       ruleIndex: RULE_IDS.indexOf('policy-changed'),
       level: changes.some((c) => c.effect === 'loosens') ? 'warning' : 'note',
       message: { text: nonEmpty(`${policyNote.text}.`, RULES['policy-changed'].short) },
-      locations: [{ physicalLocation: { artifactLocation: { uri: uriOf(path) }, region: { startLine: Math.max(1, policyNote.line) } } }],
+      locations: [
+        {
+          physicalLocation: {
+            artifactLocation: { uri: uriOf(path) },
+            region: { startLine: Math.max(1, policyNote.line) },
+          },
+        },
+      ],
       fingerprints: { [FINGERPRINT_KEY]: `${findingFingerprint(path, x)}:1` },
       properties: { changes },
     });

@@ -7,7 +7,16 @@
 
 import { formatDelta, formatError, formatFixed, formatValueAt } from './format.js';
 import { rankFiles, SEVERITY_RANK } from './rank.js';
-import type { Consequence, FileReport, Finding, PolicyChange, Report, ReportElement, RequirementResult, Severity } from './report.js';
+import type {
+  Consequence,
+  FileReport,
+  Finding,
+  PolicyChange,
+  Report,
+  ReportElement,
+  RequirementResult,
+  Severity,
+} from './report.js';
 import { FILE_STATUS_WORD, MARK, fileFails, fileWarns, judgedTitle, requirementMark } from './vocabulary.js';
 
 /** text: our words or user text to escape; code: shown verbatim in monospace; id: an element's or requirement's id (monospace). */
@@ -67,7 +76,10 @@ const FAIL_WORD: Partial<Record<FileReport['status'], [string, string]>> = {
 export function failingCounts(files: readonly FileReport[]): string[] {
   const counts = new Map<string, number>();
   for (const f of files.filter(fileFails)) {
-    const unevaluated = f.status === 'unreadable' && !f.findings.some((x) => x.rule === 'parse-error') && f.findings.some((x) => x.rule === 'not-computable');
+    const unevaluated =
+      f.status === 'unreadable' &&
+      !f.findings.some((x) => x.rule === 'parse-error') &&
+      f.findings.some((x) => x.rule === 'not-computable');
     const word = unevaluated ? 'could not be evaluated' : (FAIL_WORD[f.status]?.[0] ?? 'failing');
     counts.set(word, (counts.get(word) ?? 0) + 1);
   }
@@ -78,7 +90,8 @@ export function failingCounts(files: readonly FileReport[]): string[] {
 export function verdictStory(report: Report, title?: string): VerdictStory {
   const name = title ? `netbrace (${title})` : 'netbrace';
   const parts = failingCounts(report.files);
-  if (report.configuration?.changes.some((c) => c.weakens)) parts.push(`the change weakens netbrace\u2019s own settings in ${report.configuration.workflow}`);
+  if (report.configuration?.changes.some((c) => c.weakens))
+    parts.push(`the change weakens netbrace\u2019s own settings in ${report.configuration.workflow}`);
   const what = parts.join(', ');
   const warned = report.files.filter(fileWarns).length;
   const warnTail = warned ? ` (${warned} with warnings)` : '';
@@ -90,10 +103,28 @@ export function verdictStory(report: Report, title?: string): VerdictStory {
         : `${where}: no design fails its policy in this part${warnTail}`;
     return { tone: 'part', mark: report.verdict === 'fail' ? MARK.warn : MARK.holds, sentence: [seg.text(sentence)] };
   }
-  if (report.verdict === 'fail' && report.mode === 'block') return { tone: 'blocks', mark: MARK.fail, sentence: [seg.text(`${name} blocks this merge: ${what}`)] };
-  if (report.verdict === 'fail') return { tone: 'informs', mark: MARK.warn, sentence: [seg.text(`${name}: ${what}; inform mode, so the merge is not blocked`)] };
-  if (report.files.length === 0) return { tone: 'clear', mark: MARK.holds, sentence: [seg.text(`${name}: no design file changed, nothing to judge`)] };
-  if (warned) return { tone: 'clear', mark: MARK.holds, sentence: [seg.text(`${name}: no design fails its policy; ${warned} design${warned === 1 ? ' has' : 's have'} warnings`)] };
+  if (report.verdict === 'fail' && report.mode === 'block')
+    return { tone: 'blocks', mark: MARK.fail, sentence: [seg.text(`${name} blocks this merge: ${what}`)] };
+  if (report.verdict === 'fail')
+    return {
+      tone: 'informs',
+      mark: MARK.warn,
+      sentence: [seg.text(`${name}: ${what}; inform mode, so the merge is not blocked`)],
+    };
+  if (report.files.length === 0)
+    return {
+      tone: 'clear',
+      mark: MARK.holds,
+      sentence: [seg.text(`${name}: no design file changed, nothing to judge`)],
+    };
+  if (warned)
+    return {
+      tone: 'clear',
+      mark: MARK.holds,
+      sentence: [
+        seg.text(`${name}: no design fails its policy; ${warned} design${warned === 1 ? ' has' : 's have'} warnings`),
+      ],
+    };
   return { tone: 'clear', mark: MARK.holds, sentence: [seg.text(`${name}: no design weakened`)] };
 }
 
@@ -143,7 +174,11 @@ export function costSentence(c: Consequence, plural = false): Sentence {
     if (c.demandsLost === 0) out.push(seg.text('; every demand keeps a path'));
     else {
       const total = `${c.demandsTotal} demand${c.demandsTotal === 1 ? '' : 's'}`;
-      out.push(seg.text(`; ${c.demandsLost} of ${total} (volume ${amount(c.volumeLost ?? 0)} of ${amount(c.volumeTotal ?? 0)}) ${c.demandsLost === 1 ? 'loses' : 'lose'} every path`));
+      out.push(
+        seg.text(
+          `; ${c.demandsLost} of ${total} (volume ${amount(c.volumeLost ?? 0)} of ${amount(c.volumeTotal ?? 0)}) ${c.demandsLost === 1 ? 'loses' : 'lose'} every path`,
+        ),
+      );
     }
   }
   return out;
@@ -186,9 +221,20 @@ function itemSentence(x: Finding): Sentence {
   if (x.rule === 'n-1' && el && x.status === 'short' && typeof x.head === 'number' && typeof x.threshold === 'number') {
     const d = x.decimals ?? 3;
     const cost = x.consequence ? [seg.text('; it '), ...costSentence(x.consequence)] : [];
-    return compact([seg.text('Losing '), ...elementSentence(el), seg.text(` alone leaves R at ${formatFixed(x.head, d)}, below the N\u22121 floor ${x.threshold}`), ...cost, seg.text('.')]);
+    return compact([
+      seg.text('Losing '),
+      ...elementSentence(el),
+      seg.text(` alone leaves R at ${formatFixed(x.head, d)}, below the N\u22121 floor ${x.threshold}`),
+      ...cost,
+      seg.text('.'),
+    ]);
   }
-  if (x.rule === 'parse-error' && x.severity === 'fail') return compact([seg.text(`Could not be read${x.line > 0 ? ` at line ${x.line}${x.column ? `, column ${x.column}` : ''}` : ''}: `), seg.user(x.message.replace(/\.\s*$/, '')), seg.text('.')]);
+  if (x.rule === 'parse-error' && x.severity === 'fail')
+    return compact([
+      seg.text(`Could not be read${x.line > 0 ? ` at line ${x.line}${x.column ? `, column ${x.column}` : ''}` : ''}: `),
+      seg.user(x.message.replace(/\.\s*$/, '')),
+      seg.text('.'),
+    ]);
   const cost = x.consequence ? [seg.text('; losing it '), ...costSentence(x.consequence)] : [];
   return compact(capitalized([seg.user(x.message.replace(/\.\s*$/, '')), ...cost, seg.text('.')]));
 }
@@ -201,7 +247,13 @@ function weight(x: Finding): number[] {
 
 /** Findings that are numbers of a requirement (told by its "how much" line), not consequences. */
 function isNumberFinding(x: Finding, f: FileReport): boolean {
-  if (x.rule === 'regression' || x.rule === 'r-threshold' || x.rule === 'area-floor' || x.rule === 'spread-ceiling' || (x.rule === 'n-1' && x.status !== 'short')) {
+  if (
+    x.rule === 'regression' ||
+    x.rule === 'r-threshold' ||
+    x.rule === 'area-floor' ||
+    x.rule === 'spread-ceiling' ||
+    (x.rule === 'n-1' && x.status !== 'short')
+  ) {
     return x.requirement !== undefined && f.requirements.some((r) => r.id === x.requirement);
   }
   return false;
@@ -251,9 +303,11 @@ export function requirementLabel(r: RequirementResult): Sentence {
       const st = s.statistic ?? { kind: 'value' as const };
       const what = REMOVE_WORD[s.remove ?? 'nodes'] ?? ['element', 'elements'];
       const attack = s.order && s.order !== 'random' ? `, ${s.adaptive ? 'adaptive ' : ''}${s.order} attack` : '';
-      if (st.kind === 'worst-case') return [seg.text(`R after the worst ${st.removals ?? '?'} ${what[0]} removals found`)];
+      if (st.kind === 'worst-case')
+        return [seg.text(`R after the worst ${st.removals ?? '?'} ${what[0]} removals found`)];
       const where = s.remove === 'region' ? `at radius ${s.at ?? 0} km` : `at ${percent(s.at ?? 0)} ${what[1]} removed`;
-      const lead = st.kind === 'median' ? 'median R' : st.kind === 'mean' ? 'mean R' : st.kind === 'min' ? 'least R' : 'R';
+      const lead =
+        st.kind === 'median' ? 'median R' : st.kind === 'mean' ? 'mean R' : st.kind === 'min' ? 'least R' : 'R';
       const tag = st.kind === 'quantile' ? ` (q${Number(((st.q ?? 0) * 100).toFixed(4))})` : '';
       return [seg.text(`${lead} ${where}${tag}${attack}`)];
     }
@@ -269,7 +323,12 @@ export function requirementLabel(r: RequirementResult): Sentence {
 }
 
 function isCount(r: RequirementResult): boolean {
-  return r.subject?.kind === 'no-new-spof' || (r.se === 0 && [r.base, r.head, r.delta].every((v) => v === null || Number.isInteger(v)) && /spof|bridge|cut/.test(r.id));
+  return (
+    r.subject?.kind === 'no-new-spof' ||
+    (r.se === 0 &&
+      [r.base, r.head, r.delta].every((v) => v === null || Number.isInteger(v)) &&
+      /spof|bridge|cut/.test(r.id))
+  );
 }
 
 /** "0.464 → 0.450 (−0.013 ± 0.005), floor 0.42, allowed drop 0.010". */
@@ -279,7 +338,13 @@ export function requirementNumbers(r: RequirementResult, allowance?: number): st
   const v = (x: number | null) => (x === null ? '\u2013' : count ? String(x) : formatValueAt(x, d));
   let text = r.base !== null ? `${v(r.base)} \u2192 ${v(r.head)}` : v(r.head);
   if (r.delta !== null && r.base !== null) {
-    const delta = count ? (r.delta > 0 ? `+${r.delta}` : r.delta < 0 ? `\u2212${-r.delta}` : '0') : formatDelta(r.delta, null, d);
+    const delta = count
+      ? r.delta > 0
+        ? `+${r.delta}`
+        : r.delta < 0
+          ? `\u2212${-r.delta}`
+          : '0'
+      : formatDelta(r.delta, null, d);
     const err = count ? '' : formatError(r.se, d);
     text += ` (${delta}${err ? ` ${err}` : ''})`;
   }
@@ -287,7 +352,8 @@ export function requirementNumbers(r: RequirementResult, allowance?: number): st
   if (r.threshold !== null) text += `, ${higher ? 'floor' : 'ceiling'} ${r.threshold}`;
   else if (r.subject?.kind === 'no-new-spof') text += ', no new one allowed';
   else text += ', tracked (no floor)';
-  if (allowance !== undefined && allowance > 0) text += `, allowed ${higher ? 'drop' : 'rise'} ${formatFixed(allowance, d)}`;
+  if (allowance !== undefined && allowance > 0)
+    text += `, allowed ${higher ? 'drop' : 'rise'} ${formatFixed(allowance, d)}`;
   return text;
 }
 
@@ -323,22 +389,53 @@ export function definitions(f: FileReport): Definition[] {
       metrics.push(seg.code(m.id), seg.text(ev.r.combine === 'min' ? '' : ` ${m.weight}`));
     });
     const how = ev.r.combine === 'min' ? 'the least of ' : 'the weighted mean of ';
-    out.push({ term: 'R', anchor: README_ANCHOR, sentence: compact([seg.text(`R: ${how}`), ...metrics, seg.text(', each metric scaled to 0\u20131 with 1 the intact design.')]) });
+    out.push({
+      term: 'R',
+      anchor: README_ANCHOR,
+      sentence: compact([
+        seg.text(`R: ${how}`),
+        ...metrics,
+        seg.text(', each metric scaled to 0\u20131 with 1 the intact design.'),
+      ]),
+    });
   }
-  if (kinds.has('area-floor')) out.push({ term: 'area', anchor: README_ANCHOR, sentence: [seg.text('area: the mean of the median R over the removal grid (netbrace\u2019s own summary).')] });
+  if (kinds.has('area-floor'))
+    out.push({
+      term: 'area',
+      anchor: README_ANCHOR,
+      sentence: [seg.text('area: the mean of the median R over the removal grid (netbrace\u2019s own summary).')],
+    });
   if (kinds.has('spread-ceiling')) {
     const band = ev?.envelopes[0]?.band ?? [0.1, 0.9];
     out.push({
       term: 'spread',
       anchor: README_ANCHOR,
-      sentence: [seg.text(`spread: the mean width of the band between the ${percent(band[0])} and ${percent(band[1])} quantiles of R (netbrace\u2019s own summary).`)],
+      sentence: [
+        seg.text(
+          `spread: the mean width of the band between the ${percent(band[0])} and ${percent(band[1])} quantiles of R (netbrace\u2019s own summary).`,
+        ),
+      ],
     });
   }
   if (f.requirements.some((r) => (r.se ?? 0) > 0)) {
-    out.push({ term: '\u00b1', anchor: README_ANCHOR, sentence: [seg.text('\u00b1: one standard error of the change, from the same random removals on base and head (paired Monte Carlo).')] });
+    out.push({
+      term: '\u00b1',
+      anchor: README_ANCHOR,
+      sentence: [
+        seg.text(
+          '\u00b1: one standard error of the change, from the same random removals on base and head (paired Monte Carlo).',
+        ),
+      ],
+    });
   }
   if (f.requirements.some((r) => r.status === 'inside-error')) {
-    out.push({ term: 'inside-error', anchor: README_ANCHOR, sentence: [seg.text('inside-error: the value dropped by less than its Monte Carlo error, which is never a failure.')] });
+    out.push({
+      term: 'inside-error',
+      anchor: README_ANCHOR,
+      sentence: [
+        seg.text('inside-error: the value dropped by less than its Monte Carlo error, which is never a failure.'),
+      ],
+    });
   }
   return out;
 }
@@ -364,14 +461,24 @@ export interface DesignStory {
 }
 
 function statusWord(f: FileReport): string {
-  if (f.status === 'unreadable' && !f.findings.some((x) => x.rule === 'parse-error') && f.findings.some((x) => x.rule === 'not-computable')) return 'could not be evaluated';
+  if (
+    f.status === 'unreadable' &&
+    !f.findings.some((x) => x.rule === 'parse-error') &&
+    f.findings.some((x) => x.rule === 'not-computable')
+  )
+    return 'could not be evaluated';
   return FILE_STATUS_WORD[f.status];
 }
 
 function headlineOf(items: readonly WeakenedItem[], lines: readonly RequirementLine[]): string {
   const counts = new Map<string, number>();
   for (const x of items) counts.set(x.title, (counts.get(x.title) ?? 0) + 1);
-  const plural: Record<string, string> = { 'new bridge': 'new bridges', 'new cut node': 'new cut nodes', 'weak point hidden by hardening': 'weak points hidden by hardening', 'new stranding shared-risk group': 'new stranding shared-risk groups' };
+  const plural: Record<string, string> = {
+    'new bridge': 'new bridges',
+    'new cut node': 'new cut nodes',
+    'weak point hidden by hardening': 'weak points hidden by hardening',
+    'new stranding shared-risk group': 'new stranding shared-risk groups',
+  };
   const parts = [...counts].map(([t, n]) => (n === 1 ? `1 ${t}` : `${n} ${plural[t] ?? t}`));
   const bad = lines.filter((l) => l.requirement.status === 'short' || l.requirement.status === 'weakened').length;
   const worse = bad ? [`${bad} requirement${bad === 1 ? '' : 's'} weakened or short`] : [];
@@ -383,18 +490,44 @@ export function designStory(f: FileReport): DesignStory {
   const items: WeakenedItem[] = [];
   const notices: WeakenedItem[] = [];
   const findings = [...f.findings];
-  if (f.status === 'unreadable' && f.error && !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) {
-    findings.push({ rule: 'parse-error', severity: 'fail', message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
+  if (
+    f.status === 'unreadable' &&
+    f.error &&
+    !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')
+  ) {
+    findings.push({
+      rule: 'parse-error',
+      severity: 'fail',
+      message: f.error.message,
+      elements: [],
+      line: f.error.line,
+      column: f.error.column,
+    });
   }
   for (const x of findings) {
     if (isNumberFinding(x, f)) continue;
     // A weakest sequence that is only context is told with the other sequences (detail).
     if (x.rule === 'weakest-sequence' && x.severity === 'notice') continue;
-    const item: WeakenedItem = { severity: x.severity, rule: x.rule, title: judgedTitle(x), line: x.line, elements: x.elements, sentence: itemSentence(x), finding: x };
+    const item: WeakenedItem = {
+      severity: x.severity,
+      rule: x.rule,
+      title: judgedTitle(x),
+      line: x.line,
+      elements: x.elements,
+      sentence: itemSentence(x),
+      finding: x,
+    };
     (x.severity === 'notice' ? notices : items).push(item);
   }
   const order = items.map((x, i) => ({ x, i, w: weight(x.finding) }));
-  order.sort((a, b) => SEVERITY_RANK[a.x.severity] - SEVERITY_RANK[b.x.severity] || b.w[0] - a.w[0] || b.w[1] - a.w[1] || b.w[2] - a.w[2] || a.i - b.i);
+  order.sort(
+    (a, b) =>
+      SEVERITY_RANK[a.x.severity] - SEVERITY_RANK[b.x.severity] ||
+      b.w[0] - a.w[0] ||
+      b.w[1] - a.w[1] ||
+      b.w[2] - a.w[2] ||
+      a.i - b.i,
+  );
   const weakened = order.map((o) => o.x);
   const howMuch = f.requirements.map((r) => requirementLine(r, f.findings));
   const outcome = fileFails(f) ? 'fails' : fileWarns(f) ? 'warns' : 'holds';
@@ -414,7 +547,9 @@ export function designStory(f: FileReport): DesignStory {
 /** For a design with no element to name whose requirements fell: what "what weakened" says instead of "nothing". */
 export function numbersOnly(d: Pick<DesignStory, 'howMuch'>): string | undefined {
   const bad = d.howMuch.filter((l) => l.requirement.status === 'short' || l.requirement.status === 'weakened').length;
-  return bad ? `no single element to name; ${bad} requirement${bad === 1 ? '' : 's'} weakened or short (how much, below)` : undefined;
+  return bad
+    ? `no single element to name; ${bad} requirement${bad === 1 ? '' : 's'} weakened or short (how much, below)`
+    : undefined;
 }
 
 /** Every design's story, worst first (rank.ts). */
@@ -443,7 +578,8 @@ const RULE_KEY_WORD: Record<string, string> = {
 
 function changePart(c: PolicyChange): Sentence {
   const value = (v: string | number | null) => (v === null ? 'none' : String(v));
-  if (c.key === 'requirement') return c.head === null ? [seg.text('drop '), seg.id(c.subject)] : [seg.text('add '), seg.id(c.subject)];
+  if (c.key === 'requirement')
+    return c.head === null ? [seg.text('drop '), seg.id(c.subject)] : [seg.text('add '), seg.id(c.subject)];
   const fromTo = seg.text(` from ${value(c.base)} to ${value(c.head)}`);
   if (c.subject === 'weakening') return [seg.text(RULE_KEY_WORD[c.key] ?? c.key), fromTo];
   if (c.subject === 'removed-designs') return [seg.text('the severity of removed designs'), fromTo];
@@ -459,15 +595,21 @@ export function policyChangeSentence(report: Pick<Report, 'policy' | 'base'>): S
   const p = report.policy;
   if (!p.changed) return undefined;
   const judgedByBase = p.revision !== undefined && p.revision === report.base;
-  const tail = judgedByBase ? '; the base\u2019s version judges this change, and the head\u2019s applies once merged.' : '; the head\u2019s version judges this change (policy-source: head).';
-  if (!p.changes) return p.note ? [seg.text('Policy: '), seg.user(p.note.replace(/\.\s*$/, '')), seg.text('.')] : [seg.text(`This change edits the policy${tail}`)];
+  const tail = judgedByBase
+    ? '; the base\u2019s version judges this change, and the head\u2019s applies once merged.'
+    : '; the head\u2019s version judges this change (policy-source: head).';
+  if (!p.changes)
+    return p.note
+      ? [seg.text('Policy: '), seg.user(p.note.replace(/\.\s*$/, '')), seg.text('.')]
+      : [seg.text(`This change edits the policy${tail}`)];
   const would = judgedByBase ? 'would ' : '';
   const loosen = p.changes.filter((c) => c.effect === 'loosens').map(changePart);
   const tighten = p.changes.filter((c) => c.effect === 'tightens').map(changePart);
   const clauses: Sentence[] = [];
   if (loosen.length) clauses.push([seg.text(`${would}loosen `), ...joinList(loosen)]);
   if (tighten.length) clauses.push([seg.text(`${loosen.length ? '' : would}tighten `), ...joinList(tighten)]);
-  if (!clauses.length) return compact([seg.text('This change edits the policy without changing any floor or rule'), seg.text(tail)]);
+  if (!clauses.length)
+    return compact([seg.text('This change edits the policy without changing any floor or rule'), seg.text(tail)]);
   const both = clauses.length === 2 ? [...clauses[0], seg.text(', and '), ...clauses[1]] : clauses[0];
   return compact([seg.text('This change edits the policy: the head\u2019s version '), ...both, seg.text(tail)]);
 }
@@ -487,13 +629,20 @@ export function changeSentence(f: FileReport, max = 4): Sentence | undefined {
   const ch = f.changes;
   const renamed = ch?.renamed ?? [];
   const hardened = ch?.hardened ?? [];
-  if (!ch || (ch.added.length === 0 && ch.removed.length === 0 && renamed.length === 0 && hardened.length === 0)) return undefined;
+  if (!ch || (ch.added.length === 0 && ch.removed.length === 0 && renamed.length === 0 && hardened.length === 0))
+    return undefined;
   const parts: Sentence[] = [];
   const side = (sign: string, list: readonly ReportElement[], where: string) => {
     for (const kind of ['node', 'link', 'group'] as const) {
       const l = list.filter((e) => e.kind === kind);
       if (!l.length) continue;
-      const items = l.slice(0, max).map((e): Sentence => [...(e.label ? [seg.user(e.label), seg.text(', ')] : []), seg.id(e.id), seg.text(`, ${where}line ${e.line}`)]);
+      const items = l
+        .slice(0, max)
+        .map((e): Sentence => [
+          ...(e.label ? [seg.user(e.label), seg.text(', ')] : []),
+          seg.id(e.id),
+          seg.text(`, ${where}line ${e.line}`),
+        ]);
       const out: Sentence = [seg.text(`${sign}${l.length} ${plural(kind, l.length)} (`)];
       items.forEach((x, i) => out.push(...(i ? [seg.text('; ')] : []), ...x));
       out.push(seg.text(`${l.length > max ? `; \u2026 ${l.length - max} more` : ''})`));
@@ -502,11 +651,26 @@ export function changeSentence(f: FileReport, max = 4): Sentence | undefined {
   };
   side('+', ch.added, '');
   side('\u2212', ch.removed, 'base ');
-  for (const r of renamed.slice(0, max)) parts.push([seg.text(`${KIND_WORD[r.from.kind]} `), seg.id(r.from.id), seg.text(' renamed '), seg.id(r.to.id), seg.text(` (line ${r.to.line})`)]);
+  for (const r of renamed.slice(0, max))
+    parts.push([
+      seg.text(`${KIND_WORD[r.from.kind]} `),
+      seg.id(r.from.id),
+      seg.text(' renamed '),
+      seg.id(r.to.id),
+      seg.text(` (line ${r.to.line})`),
+    ]);
   if (renamed.length > max) parts.push([seg.text(`\u2026 ${renamed.length - max} more renamed`)]);
-  for (const [flag, word] of [[true, 'now hardened: '], [false, 'no longer hardened: ']] as const) {
+  for (const [flag, word] of [
+    [true, 'now hardened: '],
+    [false, 'no longer hardened: '],
+  ] as const) {
     const l = hardened.filter((e) => e.hardened === flag);
-    if (l.length) parts.push([seg.text(word), ...joinList(l.slice(0, max).map(elementSentence), 'and'), seg.text(l.length > max ? `, \u2026 ${l.length - max} more` : '')]);
+    if (l.length)
+      parts.push([
+        seg.text(word),
+        ...joinList(l.slice(0, max).map(elementSentence), 'and'),
+        seg.text(l.length > max ? `, \u2026 ${l.length - max} more` : ''),
+      ]);
   }
   const out: Sentence = [];
   parts.forEach((p, i) => out.push(...(i ? [seg.text('; ')] : []), ...p));
@@ -516,5 +680,13 @@ export function changeSentence(f: FileReport, max = 4): Sentence | undefined {
 /** "link `a—b`: length 24 km → 30 km (base line 12, head line 13)": one attribute the change altered. */
 export function modificationSentence(c: NonNullable<NonNullable<FileReport['changes']>['modified']>[number]): Sentence {
   const lines = c.baseLine === c.headLine ? `line ${c.headLine}` : `base line ${c.baseLine}, head line ${c.headLine}`;
-  return [seg.text(`${KIND_WORD[c.kind]} `), seg.id(c.id), seg.text(`: ${c.attribute} `), seg.user(c.before), seg.text(' \u2192 '), seg.user(c.after), seg.text(` (${lines})`)];
+  return [
+    seg.text(`${KIND_WORD[c.kind]} `),
+    seg.id(c.id),
+    seg.text(`: ${c.attribute} `),
+    seg.user(c.before),
+    seg.text(' \u2192 '),
+    seg.user(c.after),
+    seg.text(` (${lines})`),
+  ];
 }

@@ -24,7 +24,16 @@ import {
 } from './labels.js';
 import type { Evaluation, Report } from './report.js';
 import { oneLine } from './escape.js';
-import { CAUTION_LINE, designStories, numbersOnly, plainSentence, policyChangeSentence, verdictStory, type DesignStory, type WeakenedItem } from './story.js';
+import {
+  CAUTION_LINE,
+  designStories,
+  numbersOnly,
+  plainSentence,
+  policyChangeSentence,
+  verdictStory,
+  type DesignStory,
+  type WeakenedItem,
+} from './story.js';
 import { MARK } from './vocabulary.js';
 
 export interface TerminalOptions {
@@ -38,7 +47,9 @@ export function renderTerminal(input: Report, options: TerminalOptions): string 
   // Every string in a report may come from a design file (ids, paths, messages): strip control
   // characters and invisible reordering ones before any of it reaches a terminal, so a crafted
   // id cannot move the cursor, recolour or hide text.
-  const report = JSON.parse(JSON.stringify(input), (_key, v: unknown) => (typeof v === 'string' ? oneLine(v) : v)) as Report;
+  const report = JSON.parse(JSON.stringify(input), (_key, v: unknown) =>
+    typeof v === 'string' ? oneLine(v) : v,
+  ) as Report;
   const c = createColors(options.color);
   const width = Math.max(60, Math.min(options.width || 100, 160));
   const out: string[] = [];
@@ -67,8 +78,12 @@ function headerLine(r: Report): string {
 
 function policyNotes(r: Report): string[] {
   const notes: string[] = [];
-  if (r.policy.source === 'builtin') notes.push('policy: none found \u2014 the built-in defaults for communication backbones were applied');
-  else notes.push(`policy: ${r.policy.path ?? '(file)'}${r.policy.revision ? ` as of ${shortRevision(r.policy.revision)}` : ''}`);
+  if (r.policy.source === 'builtin')
+    notes.push('policy: none found \u2014 the built-in defaults for communication backbones were applied');
+  else
+    notes.push(
+      `policy: ${r.policy.path ?? '(file)'}${r.policy.revision ? ` as of ${shortRevision(r.policy.revision)}` : ''}`,
+    );
   const change = policyChangeSentence(r);
   if (change) notes.push(`policy: ${plainSentence(change)}`);
   else if (r.policy.note) notes.push(`policy: ${r.policy.note}`);
@@ -84,23 +99,35 @@ function verdictLines(r: Report, c: Colors, width: number): string[] {
   return wrap(`${v.mark} ${plainSentence(v.sentence)}`, width).map((l) => c.bold(paint(l)));
 }
 
-const severityPaint = (c: Colors, severity: 'fail' | 'warn' | 'notice') => (severity === 'fail' ? c.red : severity === 'warn' ? c.yellow : c.dim);
-const severityMark = (severity: 'fail' | 'warn' | 'notice') => (severity === 'fail' ? MARK.fail : severity === 'warn' ? MARK.warn : MARK.notice);
+const severityPaint = (c: Colors, severity: 'fail' | 'warn' | 'notice') =>
+  severity === 'fail' ? c.red : severity === 'warn' ? c.yellow : c.dim;
+const severityMark = (severity: 'fail' | 'warn' | 'notice') =>
+  severity === 'fail' ? MARK.fail : severity === 'warn' ? MARK.warn : MARK.notice;
 
 function renderDesign(d: DesignStory, c: Colors, width: number): string[] {
   const f = d.file;
   const out: string[] = [];
   const paint = d.outcome === 'fails' ? c.red : d.outcome === 'warns' ? c.yellow : c.cyan;
   const renamed = f.previousPath ? ` (was ${f.previousPath})` : '';
-  out.push(...wrap(`${d.mark} ${f.path}${renamed} \u2014 ${d.statusWord} \u00b7 ${d.headline}`, width - 2).map((l, i) => (i === 0 ? c.bold(paint(l)) : c.bold(`  ${l}`))));
+  out.push(
+    ...wrap(`${d.mark} ${f.path}${renamed} \u2014 ${d.statusWord} \u00b7 ${d.headline}`, width - 2).map((l, i) =>
+      i === 0 ? c.bold(paint(l)) : c.bold(`  ${l}`),
+    ),
+  );
 
   // 1. What weakened: the consequences, worst first.
   out.push(c.bold('  What weakened'));
   // A file that could not be read or evaluated says where, as every located error does: file:line:col.
-  const located = (x: WeakenedItem) => f.error !== undefined && (x.rule === 'parse-error' || (x.rule === 'not-computable' && x.finding.message === f.error.message));
+  const located = (x: WeakenedItem) =>
+    f.error !== undefined &&
+    (x.rule === 'parse-error' || (x.rule === 'not-computable' && x.finding.message === f.error.message));
   if (f.error) {
     const e = f.error;
-    out.push(...wrap(`${d.statusWord}: ${f.path}:${e.line || 1}:${e.column || 1}: ${e.message}`, width - 6).map((l, i) => (i === 0 ? `    ${c.red(MARK.fail)} ${l}` : `      ${l}`)));
+    out.push(
+      ...wrap(`${d.statusWord}: ${f.path}:${e.line || 1}:${e.column || 1}: ${e.message}`, width - 6).map((l, i) =>
+        i === 0 ? `    ${c.red(MARK.fail)} ${l}` : `      ${l}`,
+      ),
+    );
   }
   const items = d.weakened.filter((x) => !located(x));
   if (!items.length && !f.error) out.push(`    ${numbersOnly(d) ?? 'nothing weakened'}`);
@@ -116,7 +143,8 @@ function renderDesign(d: DesignStory, c: Colors, width: number): string[] {
       const lines = wrap(plainSentence(l.sentence), width - 6);
       out.push(`    ${tone(l.mark)} ${lines[0]}`, ...lines.slice(1).map((x) => `      ${x}`));
     }
-    for (const def of d.definitions) out.push(...wrap(plainSentence(def.sentence), width - 4).map((x) => c.dim(`    ${x}`)));
+    for (const def of d.definitions)
+      out.push(...wrap(plainSentence(def.sentence), width - 4).map((x) => c.dim(`    ${x}`)));
     if (d.definitions.length) out.push(c.dim('    (README: "Reading the report")'));
   }
 
@@ -129,7 +157,10 @@ function renderDesign(d: DesignStory, c: Colors, width: number): string[] {
 function itemLines(x: WeakenedItem, c: Colors, width: number): string[] {
   const where = x.line > 0 ? ` (line ${x.line})` : '';
   const body = wrap(`${x.title}${where}: ${plainSentence(x.sentence)}`, width - 6);
-  return [`    ${severityPaint(c, x.severity)(severityMark(x.severity))} ${body[0]}`, ...body.slice(1).map((l) => `      ${l}`)];
+  return [
+    `    ${severityPaint(c, x.severity)(severityMark(x.severity))} ${body[0]}`,
+    ...body.slice(1).map((l) => `      ${l}`),
+  ];
 }
 
 function detailLines(d: DesignStory, c: Colors, width: number): string[] {
@@ -138,7 +169,12 @@ function detailLines(d: DesignStory, c: Colors, width: number): string[] {
   const indent = (lines: string[], paint: (s: string) => string = (s) => s) => lines.map((l) => paint(`    ${l}`));
   if (f.head) out.push(...indent(wrap(describeEvaluation(f.head), width - 4), c.dim));
   for (const w of f.warnings ?? []) {
-    out.push(...wrap(`design warning: ${f.path}:${w.line || 1}:${w.column || 1}: ${w.message}${w.hint ? ` \u2014 ${w.hint}` : ''}`, width - 6).map((l, i) => (i === 0 ? `    ${c.yellow(MARK.warn)} ${l}` : `      ${l}`)));
+    out.push(
+      ...wrap(
+        `design warning: ${f.path}:${w.line || 1}:${w.column || 1}: ${w.message}${w.hint ? ` \u2014 ${w.hint}` : ''}`,
+        width - 6,
+      ).map((l, i) => (i === 0 ? `    ${c.yellow(MARK.warn)} ${l}` : `      ${l}`)),
+    );
   }
   const notApplicable = describeNotApplicable(f.head);
   if (notApplicable) out.push(...indent(wrap(`not applicable: ${notApplicable}`, width - 4), c.dim));
@@ -147,18 +183,36 @@ function detailLines(d: DesignStory, c: Colors, width: number): string[] {
   const modified = describeModifications(f);
   if (modified.length) {
     out.push('    changed attributes:');
-    for (const m of modified) out.push(...wrap(m, width - 8).map((l, i) => (i === 0 ? `      \u2022 ${l}` : `        ${l}`)));
+    for (const m of modified)
+      out.push(...wrap(m, width - 8).map((l, i) => (i === 0 ? `      \u2022 ${l}` : `        ${l}`)));
   }
   const sequences = weakestSequences(f);
   if (sequences.length) {
     out.push('    weakest removal sequences:');
     for (const s of sequences) {
       const more = s.ids.length > MAX_CHAIN ? ` \u2192 \u2026 (${s.ids.length - MAX_CHAIN} more)` : '';
-      const chain = s.elements.slice(0, MAX_CHAIN).map((e) => formatElement(e, NBSP)).join(' \u2192 ') + more;
+      const chain =
+        s.elements
+          .slice(0, MAX_CHAIN)
+          .map((e) => formatElement(e, NBSP))
+          .join(' \u2192 ') + more;
       const v = s.values ?? [];
-      const rs = !v.length ? '' : v.length === s.ids.length && v.length <= MAX_CHAIN ? v.map(formatValue).join(' \u2192 ') : `${formatValue(v[0])} \u2192 \u2026 \u2192 ${formatValue(v[v.length - 1])}`;
-      out.push(...wrap(`${s.title}: ${chain}${rs ? ` \u00b7 R ${rs}` : ''}`, width - 8).map((l, i) => (i === 0 ? `      \u2022 ${l}` : `        ${l}`)));
-      if (s.consequence) out.push(...wrap(consequenceSentence(s.consequence, 'These removals', NBSP), width - 8).map((l) => c.dim(`        ${l}`)));
+      const rs = !v.length
+        ? ''
+        : v.length === s.ids.length && v.length <= MAX_CHAIN
+          ? v.map(formatValue).join(' \u2192 ')
+          : `${formatValue(v[0])} \u2192 \u2026 \u2192 ${formatValue(v[v.length - 1])}`;
+      out.push(
+        ...wrap(`${s.title}: ${chain}${rs ? ` \u00b7 R ${rs}` : ''}`, width - 8).map((l, i) =>
+          i === 0 ? `      \u2022 ${l}` : `        ${l}`,
+        ),
+      );
+      if (s.consequence)
+        out.push(
+          ...wrap(consequenceSentence(s.consequence, 'These removals', NBSP), width - 8).map((l) =>
+            c.dim(`        ${l}`),
+          ),
+        );
     }
   }
   const env = f.head?.envelopes[0];
@@ -236,7 +290,9 @@ export function terminalChart(chart: EnvelopeChart, env: Envelope, c: Colors, wi
     }
   }
   const xEnd = chart.xUnit === 'km' ? `${chart.xMax} km` : formatFraction(chart.xMax);
-  const out = wrap(`${chart.title} (${chart.xLabel}, 0 to ${xEnd}; ${env.realizations} realizations)`, width - 2).map((l) => `  ${l}`);
+  const out = wrap(`${chart.title} (${chart.xLabel}, 0 to ${xEnd}; ${env.realizations} realizations)`, width - 2).map(
+    (l) => `  ${l}`,
+  );
   for (let row = 0; row < ROWS; row++) {
     const label = row === 0 ? '1.0' : row === ROWS / 2 ? '0.5' : row === ROWS - 1 ? '0.0' : '';
     // Our own frame: a dashed rail on the left (a dot marks the labelled rows) and a dotted floor.

@@ -5,7 +5,15 @@
 import type { FileReport, FileStatus, Finding, RequirementResult, Severity } from './report.js';
 
 /** Every file status, in the order counts are listed (report.counts, outputs). */
-export const FILE_STATUSES: readonly FileStatus[] = ['holds', 'weakened', 'below-floor', 'new', 'removed', 'renamed', 'unreadable'];
+export const FILE_STATUSES: readonly FileStatus[] = [
+  'holds',
+  'weakened',
+  'below-floor',
+  'new',
+  'removed',
+  'renamed',
+  'unreadable',
+];
 
 /** A file status in words. */
 export const FILE_STATUS_WORD: Record<FileStatus, string> = {
@@ -94,7 +102,8 @@ export const MARK = {
 /** The mark of a requirement line, by its status and severity. */
 export function requirementMark(r: Pick<RequirementResult, 'status' | 'severity'>): string {
   if (r.status === 'holds') return MARK.holds;
-  if (r.status === 'short' || r.status === 'weakened') return r.severity === 'fail' ? MARK.fail : r.severity === 'warn' ? MARK.warn : MARK.notice;
+  if (r.status === 'short' || r.status === 'weakened')
+    return r.severity === 'fail' ? MARK.fail : r.severity === 'warn' ? MARK.warn : MARK.notice;
   return MARK.open;
 }
 

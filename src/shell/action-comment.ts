@@ -8,7 +8,16 @@ import type { Report } from '../report/report.js';
 import type { ActionDeps, Env, RunOutcome } from './action-deps.js';
 import type { Target } from './action-event.js';
 import type { ActionInputs, CommentMode } from './action-inputs.js';
-import { createClient, httpSettingsFromEnv, isPermissionError, pullRequestHead, upsertComment, type Client, type ClientOptions, type FoundComment } from './github.js';
+import {
+  createClient,
+  httpSettingsFromEnv,
+  isPermissionError,
+  pullRequestHead,
+  upsertComment,
+  type Client,
+  type ClientOptions,
+  type FoundComment,
+} from './github.js';
 
 /** Whether to write the comment, given the mode, the report and the comment that exists. */
 export function shouldWriteComment(mode: CommentMode, report: Report, existing: FoundComment | undefined): boolean {
@@ -21,7 +30,14 @@ export function shouldWriteComment(mode: CommentMode, report: Report, existing: 
   return failing || report.files.some((f) => f.findings.length > 0);
 }
 
-export async function postComment(deps: ActionDeps, env: Env, inputs: ActionInputs, target: Target, report: Report, body: string): Promise<RunOutcome['comment']> {
+export async function postComment(
+  deps: ActionDeps,
+  env: Env,
+  inputs: ActionInputs,
+  target: Target,
+  report: Report,
+  body: string,
+): Promise<RunOutcome['comment']> {
   if (!target.pr || inputs.comment === 'off') return 'not-applicable';
   if (!inputs.token) {
     deps.out.warning('netbrace: no token, so no pull-request comment (set the "token" input, default github.token)');
@@ -29,9 +45,16 @@ export async function postComment(deps: ActionDeps, env: Env, inputs: ActionInpu
   }
   const apiUrl = env.GITHUB_API_URL || 'https://api.github.com';
   try {
-    const client = deps.github({ token: inputs.token, baseUrl: apiUrl, ...httpSettingsFromEnv(env), log: (m) => deps.out.info(`netbrace: ${logText(m, 500)}`) });
+    const client = deps.github({
+      token: inputs.token,
+      baseUrl: apiUrl,
+      ...httpSettingsFromEnv(env),
+      log: (m) => deps.out.info(`netbrace: ${logText(m, 500)}`),
+    });
     const ref = { owner: target.pr.owner, repo: target.pr.repo, issueNumber: target.pr.number };
-    const result = await upsertComment(client, ref, commentMarker(inputs.commentKey), body, (existing) => shouldWriteComment(inputs.comment, report, existing));
+    const result = await upsertComment(client, ref, commentMarker(inputs.commentKey), body, (existing) =>
+      shouldWriteComment(inputs.comment, report, existing),
+    );
     deps.out.info(`netbrace: pull-request comment ${result.action}${result.url ? ` (${result.url})` : ''}`);
     return result;
   } catch (error) {
@@ -44,7 +67,9 @@ export async function postComment(deps: ActionDeps, env: Env, inputs: ActionInpu
             : 'Grant `pull-requests: write` in the workflow\u2019s permissions.'),
       );
     } else {
-      deps.out.warning(`netbrace: could not write the pull-request comment (${oneLine(why, 200)}); the verdict is unaffected`);
+      deps.out.warning(
+        `netbrace: could not write the pull-request comment (${oneLine(why, 200)}); the verdict is unaffected`,
+      );
     }
     return 'failed';
   }
@@ -55,21 +80,37 @@ export async function postComment(deps: ActionDeps, env: Env, inputs: ActionInpu
  * of a pull-request run (a fork's), the number comes from an artifact, which is untrusted: it
  * is used only if the pull request's head is the commit that run evaluated.
  */
-export async function trustedPullRequest(deps: ActionDeps, env: Env, inputs: ActionInputs, target: Target, number: number): Promise<Target['pr']> {
+export async function trustedPullRequest(
+  deps: ActionDeps,
+  env: Env,
+  inputs: ActionInputs,
+  target: Target,
+  number: number,
+): Promise<Target['pr']> {
   const [owner = '', repo = ''] = (env.GITHUB_REPOSITORY ?? '').split('/');
   const pr = { owner, repo, number, fork: false };
   if (target.eventName !== 'workflow_run') return pr;
   if (!target.runHeadSha || !inputs.token) {
-    deps.out.warning('netbrace: no comment: the workflow_run payload has no head commit to check the pull request against');
+    deps.out.warning(
+      'netbrace: no comment: the workflow_run payload has no head commit to check the pull request against',
+    );
     return undefined;
   }
   try {
-    const client = deps.github({ token: inputs.token, baseUrl: env.GITHUB_API_URL || 'https://api.github.com', ...httpSettingsFromEnv(env) });
+    const client = deps.github({
+      token: inputs.token,
+      baseUrl: env.GITHUB_API_URL || 'https://api.github.com',
+      ...httpSettingsFromEnv(env),
+    });
     const head = await pullRequestHead(client, { owner, repo, issueNumber: number });
     if (head === target.runHeadSha) return pr;
-    deps.out.warning(`netbrace: no comment: pull request #${number} is at ${head.slice(0, 12)}, not at ${target.runHeadSha.slice(0, 12)} which the report is about`);
+    deps.out.warning(
+      `netbrace: no comment: pull request #${number} is at ${head.slice(0, 12)}, not at ${target.runHeadSha.slice(0, 12)} which the report is about`,
+    );
   } catch (error) {
-    deps.out.warning(`netbrace: no comment: could not read pull request #${number} (${oneLine(error instanceof Error ? error.message : String(error), 200)})`);
+    deps.out.warning(
+      `netbrace: no comment: could not read pull request #${number} (${oneLine(error instanceof Error ? error.message : String(error), 200)})`,
+    );
   }
   return undefined;
 }

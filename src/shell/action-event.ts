@@ -30,7 +30,8 @@ export interface Target {
 }
 
 function sha(value: unknown, what: string): string {
-  if (typeof value !== 'string' || !SHA_RE.test(value)) throw new InputError(`the event payload has no valid ${what} (got ${oneLine(String(value), 60)})`);
+  if (typeof value !== 'string' || !SHA_RE.test(value))
+    throw new InputError(`the event payload has no valid ${what} (got ${oneLine(String(value), 60)})`);
   return value;
 }
 
@@ -56,23 +57,34 @@ export function readTarget(env: Env): Target {
       kind: 'pull-request',
       base: sha(pr.base?.sha, 'pull_request.base.sha'),
       head: sha(pr.head?.sha, 'pull_request.head.sha'),
-      pr: { owner, repo, number: Number(pr.number ?? payload.number), fork: Boolean(pr.head?.repo?.fork) || (headRepo !== undefined && headRepo !== baseRepo) || pr.head?.repo === null },
+      pr: {
+        owner,
+        repo,
+        number: Number(pr.number ?? payload.number),
+        fork:
+          Boolean(pr.head?.repo?.fork) || (headRepo !== undefined && headRepo !== baseRepo) || pr.head?.repo === null,
+      },
     };
   }
   if (eventName === 'push') {
     const after = String(payload.after ?? env.GITHUB_SHA ?? '');
-    if (payload.deleted === true || ZERO_RE.test(after)) return { eventName, kind: 'nothing', reason: 'the push deleted a branch or tag' };
+    if (payload.deleted === true || ZERO_RE.test(after))
+      return { eventName, kind: 'nothing', reason: 'the push deleted a branch or tag' };
     const before = String(payload.before ?? '');
-    if (ZERO_RE.test(before) || before === '') return { eventName, kind: 'push', head: sha(after, 'after'), newBranch: true };
+    if (ZERO_RE.test(before) || before === '')
+      return { eventName, kind: 'push', head: sha(after, 'after'), newBranch: true };
     return { eventName, kind: 'push', base: sha(before, 'before'), head: sha(after, 'after') };
   }
   // workflow_dispatch, schedule and anything else: every design, thresholds only.
   const head = env.GITHUB_SHA && SHA_RE.test(env.GITHUB_SHA) ? env.GITHUB_SHA : undefined;
   const runHead = payload.workflow_run?.head_sha;
-  return { eventName, kind: 'full', ...(head ? { head } : {}), ...(typeof runHead === 'string' && SHA_RE.test(runHead) ? { runHeadSha: runHead } : {}) };
+  return {
+    eventName,
+    kind: 'full',
+    ...(head ? { head } : {}),
+    ...(typeof runHead === 'string' && SHA_RE.test(runHead) ? { runHeadSha: runHead } : {}),
+  };
 }
-
-
 
 async function hasCommit(deps: ActionDeps, cwd: string, commit: string): Promise<boolean> {
   return (await deps.git(['cat-file', '-e', `${commit}^{commit}`], cwd)).code === 0;
@@ -82,9 +94,16 @@ export const FETCH_DEPTH_HINT =
   'add `fetch-depth: 0` to the actions/checkout step (under `with:`), so that the base commit is in the clone';
 
 /** Make sure the commit is in the clone: fetch exactly that one commit when it is missing. */
-export async function ensureCommit(deps: ActionDeps, cwd: string, commit: string, what: string): Promise<string | undefined> {
+export async function ensureCommit(
+  deps: ActionDeps,
+  cwd: string,
+  commit: string,
+  what: string,
+): Promise<string | undefined> {
   if (await hasCommit(deps, cwd, commit)) return undefined;
-  deps.out.info(`netbrace: the ${what} commit ${commit.slice(0, 12)} is not in the clone (shallow checkout); fetching that one commit`);
+  deps.out.info(
+    `netbrace: the ${what} commit ${commit.slice(0, 12)} is not in the clone (shallow checkout); fetching that one commit`,
+  );
   const fetched = await deps.git(['fetch', '--no-tags', '--no-recurse-submodules', '--depth=1', 'origin', commit], cwd);
   if (fetched.code === 0 && (await hasCommit(deps, cwd, commit))) return undefined;
   return `the ${what} commit ${commit} is not in the clone and could not be fetched (git fetch: ${oneLine(fetched.stderr, 300) || `exit ${fetched.code}`})`;
@@ -95,7 +114,13 @@ export async function ensureCommit(deps: ActionDeps, cwd: string, commit: string
  * policy at head. Trusted only when the pull request leaves the policy files alone (then the
  * head's policy is the base's); a changed policy counts as "there may be designs".
  */
-export async function designsAmong(deps: ActionDeps, root: string, head: string, policyPath: string, changed: string[]): Promise<number> {
+export async function designsAmong(
+  deps: ActionDeps,
+  root: string,
+  head: string,
+  policyPath: string,
+  changed: string[],
+): Promise<number> {
   let unsure = false;
   const read = async (p: string): Promise<string | null> => {
     const r = await deps.git(['show', '--no-textconv', '--end-of-options', `${head}:${p}`], root);
@@ -124,11 +149,24 @@ export async function designsAmong(deps: ActionDeps, root: string, head: string,
 }
 
 /** The pull request's changed files from the REST API, or undefined when the list is incomplete or untrusted. */
-export async function prFilesFallback(deps: ActionDeps, env: Env, inputs: ActionInputs, target: Target): Promise<string[] | undefined> {
+export async function prFilesFallback(
+  deps: ActionDeps,
+  env: Env,
+  inputs: ActionInputs,
+  target: Target,
+): Promise<string[] | undefined> {
   if (!target.pr || !inputs.token) return undefined;
   try {
-    const client = deps.github({ token: inputs.token, baseUrl: env.GITHUB_API_URL || 'https://api.github.com', ...httpSettingsFromEnv(env) });
-    const { files, truncated } = await listPullRequestFiles(client, { owner: target.pr.owner, repo: target.pr.repo, issueNumber: target.pr.number });
+    const client = deps.github({
+      token: inputs.token,
+      baseUrl: env.GITHUB_API_URL || 'https://api.github.com',
+      ...httpSettingsFromEnv(env),
+    });
+    const { files, truncated } = await listPullRequestFiles(client, {
+      owner: target.pr.owner,
+      repo: target.pr.repo,
+      issueNumber: target.pr.number,
+    });
     if (truncated) return undefined;
     const names = files.filter((f) => f.status !== 'D').map((f) => f.path);
     // The names are data from the API: one that is not a plain repository path makes the list untrusted.
@@ -141,7 +179,9 @@ export async function prFilesFallback(deps: ActionDeps, env: Env, inputs: Action
     };
     return names.every(plain) ? names : undefined;
   } catch (error) {
-    deps.out.warning(`netbrace: could not list the pull request\u2019s files (${oneLine(error instanceof Error ? error.message : String(error), 200)})`);
+    deps.out.warning(
+      `netbrace: could not list the pull request\u2019s files (${oneLine(error instanceof Error ? error.message : String(error), 200)})`,
+    );
     return undefined;
   }
 }

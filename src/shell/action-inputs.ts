@@ -65,7 +65,8 @@ function repositoryInput(value: string, name: string): string {
 function optionalInt(env: Env, name: string, min: number, max: number): number | undefined {
   const v = getInput(env, name);
   if (v === '') return undefined;
-  if (!/^\d+$/.test(v) || Number(v) < min || Number(v) > max) throw new InputError(`input "${name}" is "${oneLine(v, 40)}"; give a whole number from ${min} to ${max}`);
+  if (!/^\d+$/.test(v) || Number(v) < min || Number(v) > max)
+    throw new InputError(`input "${name}" is "${oneLine(v, 40)}"; give a whole number from ${min} to ${max}`);
   return Number(v);
 }
 
@@ -74,7 +75,8 @@ function sharedInput<T>(env: Env, name: string, option: SharedOption<T>, example
   const v = getInput(env, name);
   if (v === '') return undefined;
   const read = option.read(v);
-  if (read === undefined) throw new InputError(`input "${name}" is "${oneLine(v, 60)}"; use ${option.expected}${example}`);
+  if (read === undefined)
+    throw new InputError(`input "${name}" is "${oneLine(v, 60)}"; use ${option.expected}${example}`);
   return read;
 }
 
@@ -84,14 +86,22 @@ const REF_RE = /^(?!-)(?!.*\.\.)[A-Za-z0-9._/@^~-]{1,200}$/;
 export function readInputs(env: Env): ActionInputs {
   const workingDirectory = relativePath(env, 'working-directory', '.');
   const part = sharedInput(env, 'part', PART, ', e.g. 2/4 (use the matrix: part: ${{ matrix.part }}/4)');
-  const defaultKey = workingDirectory === '.' || workingDirectory === '' ? 'default' : workingDirectory.replace(/[^A-Za-z0-9._/-]/g, '-').slice(0, 64);
+  const defaultKey =
+    workingDirectory === '.' || workingDirectory === ''
+      ? 'default'
+      : workingDirectory.replace(/[^A-Za-z0-9._/-]/g, '-').slice(0, 64);
   const commentKey = getInput(env, 'comment-key') || defaultKey;
-  if (!KEY_RE.test(commentKey)) throw new InputError(`input "comment-key" may use letters, digits, ".", "_", "/" and "-" (at most 64)`);
+  if (!KEY_RE.test(commentKey))
+    throw new InputError(`input "comment-key" may use letters, digits, ".", "_", "/" and "-" (at most 64)`);
   const base = getInput(env, 'base');
   if (base && !REF_RE.test(base)) throw new InputError(`input "base" is not a valid git ref or commit id`);
   const joinParts = relativePath(env, 'join-parts', '');
-  if (joinParts && part) throw new InputError('inputs "join-parts" and "part" exclude each other: parts evaluate, the join job combines their reports');
-  const category = getInput(env, 'sarif-category') || (commentKey === 'default' ? 'netbrace' : `netbrace-${commentKey}`);
+  if (joinParts && part)
+    throw new InputError(
+      'inputs "join-parts" and "part" exclude each other: parts evaluate, the join job combines their reports',
+    );
+  const category =
+    getInput(env, 'sarif-category') || (commentKey === 'default' ? 'netbrace' : `netbrace-${commentKey}`);
   return {
     policy: repositoryInput(relativePath(env, 'policy', ''), 'policy'),
     orgPolicy: repositoryInput(relativePath(env, 'org-policy', ''), 'org-policy'),

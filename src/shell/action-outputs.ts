@@ -14,7 +14,10 @@ import type { ActionInputs } from './action-inputs.js';
 import { prepareWrite, workspaceRelative } from './workspace.js';
 
 /** The report of a run with nothing to judge: a pass that says so, put together as a run's report is. */
-export function emptyReport(inputs: Pick<ActionInputs, 'mode' | 'policy' | 'seed'>, target: Pick<Target, 'base' | 'head'>): Report {
+export function emptyReport(
+  inputs: Pick<ActionInputs, 'mode' | 'policy' | 'seed'>,
+  target: Pick<Target, 'base' | 'head'>,
+): Report {
   return assembleReport(
     {
       mode: inputs.mode,
@@ -29,9 +32,29 @@ export function emptyReport(inputs: Pick<ActionInputs, 'mode' | 'policy' | 'seed
 }
 
 /** Lines touched at head per repository-relative path, from `git diff -U0`. */
-export async function changedLines(deps: ActionDeps, cwd: string, base: string, head: string): Promise<Map<string, Set<number>>> {
+export async function changedLines(
+  deps: ActionDeps,
+  cwd: string,
+  base: string,
+  head: string,
+): Promise<Map<string, Set<number>>> {
   const out = new Map<string, Set<number>>();
-  const diff = await deps.git(['-c', 'core.quotePath=false', 'diff', '-U0', '--no-color', '--no-ext-diff', '-M', '--end-of-options', base, head, '--'], cwd);
+  const diff = await deps.git(
+    [
+      '-c',
+      'core.quotePath=false',
+      'diff',
+      '-U0',
+      '--no-color',
+      '--no-ext-diff',
+      '-M',
+      '--end-of-options',
+      base,
+      head,
+      '--',
+    ],
+    cwd,
+  );
   if (diff.code !== 0) return out;
   let current: Set<number> | undefined;
   for (const line of diff.stdout.split('\n')) {
@@ -60,7 +83,14 @@ export interface Artifacts {
 }
 
 /** The JSON report (every job), SARIF and HTML (not a part job: the join job writes those). */
-export function writeArtifacts(deps: ActionDeps, workspace: string, inputs: ActionInputs, report: Report, partJob: boolean, readme?: string): Artifacts {
+export function writeArtifacts(
+  deps: ActionDeps,
+  workspace: string,
+  inputs: ActionInputs,
+  report: Report,
+  partJob: boolean,
+  readme?: string,
+): Artifacts {
   const written: string[] = [];
   const write = (input: string, given: string, text: string): string => {
     const full = prepareWrite(workspace, workspace, given, input);
@@ -73,8 +103,14 @@ export function writeArtifacts(deps: ActionDeps, workspace: string, inputs: Acti
   let sarifPath = '';
   let htmlPath = '';
   if (!partJob) {
-    if (inputs.sarif) sarifPath = write('sarif', inputs.sarif, `${JSON.stringify(renderSarif(report, { category: inputs.sarifCategory }), null, 2)}\n`);
-    if (inputs.html && deps.renderHtml) htmlPath = write('html', inputs.html, deps.renderHtml(report, readme ? { readmeUrl: readme } : {}));
+    if (inputs.sarif)
+      sarifPath = write(
+        'sarif',
+        inputs.sarif,
+        `${JSON.stringify(renderSarif(report, { category: inputs.sarifCategory }), null, 2)}\n`,
+      );
+    if (inputs.html && deps.renderHtml)
+      htmlPath = write('html', inputs.html, deps.renderHtml(report, readme ? { readmeUrl: readme } : {}));
   }
   return { written, report: reportPath, sarif: sarifPath, html: htmlPath };
 }
@@ -115,7 +151,8 @@ export function readmeUrl(env: Env): string | undefined {
   const server = env.GITHUB_SERVER_URL || 'https://github.com';
   const repo = env.GITHUB_ACTION_REPOSITORY ?? '';
   const ref = env.GITHUB_ACTION_REF ?? '';
-  if (!/^[A-Za-z0-9_.-]+\/[A-Za-z0-9_.-]+$/.test(repo) || !/^[A-Za-z0-9_./-]+$/.test(ref) || ref.includes('..')) return undefined;
+  if (!/^[A-Za-z0-9_.-]+\/[A-Za-z0-9_.-]+$/.test(repo) || !/^[A-Za-z0-9_./-]+$/.test(ref) || ref.includes('..'))
+    return undefined;
   return `${server}/${repo}/blob/${ref}/README.md`;
 }
 
@@ -123,7 +160,14 @@ export function readmeUrl(env: Env): string | undefined {
 export function coreOutput(env: Env): ActionOutput {
   return {
     annotate(a) {
-      const props = a.file ? { title: a.title, file: a.file, startLine: a.startLine, ...(a.startColumn ? { startColumn: a.startColumn } : {}) } : { title: a.title };
+      const props = a.file
+        ? {
+            title: a.title,
+            file: a.file,
+            startLine: a.startLine,
+            ...(a.startColumn ? { startColumn: a.startColumn } : {}),
+          }
+        : { title: a.title };
       if (a.level === 'error') core.error(a.message, props);
       else if (a.level === 'warning') core.warning(a.message, props);
       else core.notice(a.message, props);

@@ -36,12 +36,20 @@ export function readPartReports(folder: string): { reports: unknown[]; names: st
     }
     reports.push(parsed);
   }
-  if (!reports.length) throw new InputError(`input "join-parts": no part report (*.json) in ${path.basename(folder)}; download the parts' artifacts there first`);
+  if (!reports.length)
+    throw new InputError(
+      `input "join-parts": no part report (*.json) in ${path.basename(folder)}; download the parts' artifacts there first`,
+    );
   return { reports, names };
 }
 
 /** The joined report, or why the step fails (a part is missing). */
-export function joinPartReports(deps: ActionDeps, folder: string, given: string, notes: string[]): { report: Report } | { failure: string } {
+export function joinPartReports(
+  deps: ActionDeps,
+  folder: string,
+  given: string,
+  notes: string[],
+): { report: Report } | { failure: string } {
   const { reports, names } = readPartReports(folder);
   deps.out.info(`netbrace: joining ${reports.length} part reports`);
   let report: Report;
@@ -50,7 +58,10 @@ export function joinPartReports(deps: ActionDeps, folder: string, given: string,
   } catch (error) {
     // Name the file: the join numbers reports in the order they were read.
     const m = /^report (\d+)/.exec(error instanceof Error ? error.message : '');
-    if (m && isNetbraceError(error)) throw new InputError(`part report ${path.basename(names[Number(m[1]) - 1] ?? '?')}: ${error.message.replace(/^report \d+ /, '')}`);
+    if (m && isNetbraceError(error))
+      throw new InputError(
+        `part report ${path.basename(names[Number(m[1]) - 1] ?? '?')}: ${error.message.replace(/^report \d+ /, '')}`,
+      );
     throw error;
   }
   // The report keeps the mode its runs had (what the comment says); whether this step
@@ -76,7 +87,8 @@ export function joinPartReports(deps: ActionDeps, folder: string, given: string,
 export function splitJoinInput(folder: string): JoinInput | undefined {
   const { reports, names } = readPartReports(folder);
   // Any other report (a broken one included) is left to joinPartReports, which names its problem.
-  if (!reports.some((r) => r !== null && typeof r === 'object' && Array.isArray((r as { split?: unknown }).split))) return undefined;
+  if (!reports.some((r) => r !== null && typeof r === 'object' && Array.isArray((r as { split?: unknown }).split)))
+    return undefined;
   const checked = reports.map((r, i) => upgradeReport(r, `part report ${path.basename(names[i])}`));
   return checked.some((r) => r.split?.length) ? joinInput(checked) : undefined;
 }

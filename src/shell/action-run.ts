@@ -18,7 +18,15 @@ import type { ActionDeps, Env, GateRequestLike, RunOutcome } from './action-deps
 import { postComment, trustedPullRequest } from './action-comment.js';
 import { FETCH_DEPTH_HINT, SHA_RE, designsAmong, ensureCommit, prFilesFallback, readTarget } from './action-event.js';
 import { InputError, readInputs } from './action-inputs.js';
-import { annotate, changedLines, emptyReport, readmeUrl, runUrl, setOutputs, writeArtifacts } from './action-outputs.js';
+import {
+  annotate,
+  changedLines,
+  emptyReport,
+  readmeUrl,
+  runUrl,
+  setOutputs,
+  writeArtifacts,
+} from './action-outputs.js';
 import { joinPartReports, splitJoinInput } from './action-parts.js';
 import { applyBaseSettings, attachSettings, ownSettingChanges, type OwnSettings } from './action-settings.js';
 import { WorkspacePathError, resolveInWorkspace } from './workspace.js';
@@ -35,14 +43,17 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     const workspaceGiven = env.GITHUB_WORKSPACE || process.cwd();
     const workspace = realpathSync(workspaceGiven);
     const workdir = resolveInWorkspace(workspace, workspace, inputs.workingDirectory || '.', 'working-directory');
-    if (!statSync(workdir).isDirectory()) throw new InputError(`input "working-directory" (${inputs.workingDirectory}) is not a directory`);
+    if (!statSync(workdir).isDirectory())
+      throw new InputError(`input "working-directory" (${inputs.workingDirectory}) is not a directory`);
     // The gate works at the repository's top level (report paths are repository paths, as
     // annotations and SARIF want them); working-directory only says where the checkout is.
     // A join job reads reports only and needs no checkout.
     const repositoryRoot = async (): Promise<string> => {
       const top = await deps.git(['rev-parse', '--show-toplevel'], workdir);
       if (top.code !== 0 || top.stdout.trim() === '') {
-        throw new InputError(`input "working-directory" (${inputs.workingDirectory}) is not inside a git repository; run actions/checkout before netbrace`);
+        throw new InputError(
+          `input "working-directory" (${inputs.workingDirectory}) is not inside a git repository; run actions/checkout before netbrace`,
+        );
       }
       return resolveInWorkspace(workspace, workspace, top.stdout.trim(), 'working-directory');
     };
@@ -53,7 +64,9 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     let report: Report;
     let lines = new Map<string, Set<number>>();
     // Part reports of a design split by realizations are joined by the gate itself, in the checkout.
-    const joinFolder = inputs.joinParts ? resolveInWorkspace(workspace, workspace, inputs.joinParts, 'join-parts') : undefined;
+    const joinFolder = inputs.joinParts
+      ? resolveInWorkspace(workspace, workspace, inputs.joinParts, 'join-parts')
+      : undefined;
     const splitJoin = joinFolder !== undefined ? splitJoinInput(joinFolder) : undefined;
     if (joinFolder !== undefined && !splitJoin) {
       const joined = joinPartReports(deps, joinFolder, inputs.joinParts, notes);
@@ -67,8 +80,12 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       let base = inputs.base || target.base;
       const head = target.head;
       if (inputs.base && !SHA_RE.test(inputs.base)) {
-        const resolved = await deps.git(['rev-parse', '--verify', '--quiet', '--end-of-options', `${inputs.base}^{commit}`], root);
-        if (resolved.code !== 0) throw new InputError(`input "base" (${inputs.base}) is not a commit in the clone; ${FETCH_DEPTH_HINT}`);
+        const resolved = await deps.git(
+          ['rev-parse', '--verify', '--quiet', '--end-of-options', `${inputs.base}^{commit}`],
+          root,
+        );
+        if (resolved.code !== 0)
+          throw new InputError(`input "base" (${inputs.base}) is not a commit in the clone; ${FETCH_DEPTH_HINT}`);
         base = resolved.stdout.trim();
       }
       if (target.newBranch && !inputs.base && head) {
@@ -80,7 +97,11 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
       }
       if (head) {
         const missing = await ensureCommit(deps, root, head, 'head');
-        if (missing) return fail(`netbrace: ${missing}. For pull_request_target, check out the pull request head (ref: \${{ github.event.pull_request.head.sha }}) or ${FETCH_DEPTH_HINT}.`, 2);
+        if (missing)
+          return fail(
+            `netbrace: ${missing}. For pull_request_target, check out the pull request head (ref: \${{ github.event.pull_request.head.sha }}) or ${FETCH_DEPTH_HINT}.`,
+            2,
+          );
       }
       let kind: GateRequestLike['eventKind'] = target.kind === 'full' || !base ? 'schedule' : target.kind;
       let paths: string[] | undefined;
@@ -92,7 +113,9 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
           const fromApi = target.pr && head ? await prFilesFallback(deps, env, inputs, target) : undefined;
           if (fromApi && head && (await designsAmong(deps, root, head, inputs.policy, fromApi)) === 0) paths = [];
           if (paths === undefined) return fail(`netbrace: ${missing}. To fix it, ${FETCH_DEPTH_HINT}.`, 2);
-          notes.push('The base commit could not be fetched; the pull request\u2019s file list (REST API) shows that no design file changed.');
+          notes.push(
+            'The base commit could not be fetched; the pull request\u2019s file list (REST API) shows that no design file changed.',
+          );
           base = undefined;
           kind = 'schedule';
         }
@@ -116,7 +139,10 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
         ...(splitJoin ? { join: splitJoin } : {}),
         eventKind: kind,
       };
-      if (splitJoin) notes.push(`Joined from ${splitJoin.reports.length} part reports; designs split across the parts were judged here from their samples.`);
+      if (splitJoin)
+        notes.push(
+          `Joined from ${splitJoin.reports.length} part reports; designs split across the parts were judged here from their samples.`,
+        );
       if (paths && paths.length === 0) {
         report = emptyReport(inputs, target);
       } else {
@@ -135,21 +161,31 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
     let comment: RunOutcome['comment'] = 'not-applicable';
     const url = runUrl(env);
     const readme = readmeUrl(env);
-    const viewOptions = { ...(url ? { runUrl: url } : {}), ...(readme ? { readmeUrl: readme } : {}), artifacts: files.written, ...(inputs.title ? { title: inputs.title } : {}) };
+    const viewOptions = {
+      ...(url ? { runUrl: url } : {}),
+      ...(readme ? { readmeUrl: readme } : {}),
+      artifacts: files.written,
+      ...(inputs.title ? { title: inputs.title } : {}),
+    };
     if (!partJob && !target.pr && inputs.pullRequest) {
       target.pr = await trustedPullRequest(deps, env, inputs, target, inputs.pullRequest);
     }
     if (!partJob) {
       const body = renderComment(report, { ...viewOptions, key: inputs.commentKey });
       comment = await postComment(deps, env, inputs, target, report, body);
-      if (comment === 'failed') notes.push('The pull-request comment could not be written (see the warning in the log); this does not change the verdict.');
+      if (comment === 'failed')
+        notes.push(
+          'The pull-request comment could not be written (see the warning in the log); this does not change the verdict.',
+        );
     }
     deps.out.appendSummary(renderSummary(report, { ...viewOptions, notes }));
     setOutputs(deps.out, report, files, comment);
 
     const verdict = report.verdict;
     if (partJob) {
-      deps.out.info(`netbrace: part ${inputs.part!.index}/${inputs.part!.total} ${verdict === 'fail' ? 'has failures' : 'passes'}; the join job decides`);
+      deps.out.info(
+        `netbrace: part ${inputs.part!.index}/${inputs.part!.total} ${verdict === 'fail' ? 'has failures' : 'passes'}; the join job decides`,
+      );
       return { exitCode: 0, verdict, comment };
     }
     // The verdict in the same sentence the summary and the comment open with (story.ts).
@@ -162,11 +198,21 @@ export async function run(env: Env, deps: ActionDeps): Promise<RunOutcome> {
   } catch (error) {
     if (isNetbraceError(error)) {
       if (error.file && error.line > 0) {
-        deps.out.annotate({ level: 'error', file: error.file, startLine: error.line, ...(error.column > 0 ? { startColumn: error.column } : {}), title: 'netbrace: configuration error', message: logText(error.message), rule: 'parse-error', inDiff: false });
+        deps.out.annotate({
+          level: 'error',
+          file: error.file,
+          startLine: error.line,
+          ...(error.column > 0 ? { startColumn: error.column } : {}),
+          title: 'netbrace: configuration error',
+          message: logText(error.message),
+          rule: 'parse-error',
+          inDiff: false,
+        });
       }
       return fail(`netbrace: ${formatDiagnostic(error)}`, error.kind === 'design' ? 1 : 2);
     }
-    if (error instanceof InputError || error instanceof WorkspacePathError) return fail(`netbrace: ${error.message}`, 2);
+    if (error instanceof InputError || error instanceof WorkspacePathError)
+      return fail(`netbrace: ${error.message}`, 2);
     const message = error instanceof Error ? error.message : String(error);
     return fail(`netbrace: internal error: ${message} \u2014 please report this with the workflow run`, 2);
   }

@@ -29,7 +29,13 @@ async function showAt(deps: ActionDeps, cwd: string, rev: string, file: string):
 }
 
 /** The settings of this job's netbrace step that the change edits, when it edits its workflow. */
-export async function ownSettingChanges(deps: ActionDeps, env: Env, root: string, base: string, head: string): Promise<OwnSettings | undefined> {
+export async function ownSettingChanges(
+  deps: ActionDeps,
+  env: Env,
+  root: string,
+  base: string,
+  head: string,
+): Promise<OwnSettings | undefined> {
   const workflow = workflowPathOf(env);
   if (!workflow) return undefined;
   const [b, h] = [await showAt(deps, root, base, workflow), await showAt(deps, root, head, workflow)];
@@ -46,12 +52,17 @@ export function applyBaseSettings(inputs: ActionInputs, changes: readonly Settin
     else if (c.setting === 'policy-source' && base === 'base') inputs.policySource = 'base';
     else if (c.setting === 'policy') inputs.policy = base;
     else if (c.setting === 'org-policy') inputs.orgPolicy = base;
-    deps.out.warning(`netbrace: this change edits its own workflow: ${c.message}; the base's setting (${c.base}) applies`);
+    deps.out.warning(
+      `netbrace: this change edits its own workflow: ${c.message}; the base's setting (${c.base}) applies`,
+    );
   }
 }
 
 export function attachSettings(report: Report, own: OwnSettings, mode: ActionInputs['mode']): void {
-  report.configuration = { workflow: own.workflow, changes: own.changes.map((c) => ({ ...c, severity: c.weakens ? 'fail' : 'notice' })) };
+  report.configuration = {
+    workflow: own.workflow,
+    changes: own.changes.map((c) => ({ ...c, severity: c.weakens ? 'fail' : 'notice' })),
+  };
   if (own.changes.some((c) => c.weakens)) {
     report.verdict = 'fail';
     report.mode = mode;

@@ -21,4 +21,6 @@ run(process.env, {
   github: defaultGithub,
   renderHtml,
   out: coreOutput(process.env),
-}).catch((error: unknown) => core.setFailed(`netbrace: internal error: ${error instanceof Error ? error.message : String(error)}`));
+}).catch((error: unknown) =>
+  core.setFailed(`netbrace: internal error: ${error instanceof Error ? error.message : String(error)}`),
+);

@@ -52,7 +52,9 @@ function execGit<E extends 'utf8' | 'buffer'>(
         if (error && typeof (error as NodeJS.ErrnoException).code === 'string') {
           // ENOENT (no git) or ENOBUFS: not an answer of git's.
           const code = (error as NodeJS.ErrnoException).code;
-          reject(new GitError(code === 'ENOENT' ? 'git is not installed or not on PATH' : `git failed: ${error.message}`));
+          reject(
+            new GitError(code === 'ENOENT' ? 'git is not installed or not on PATH' : `git failed: ${error.message}`),
+          );
           return;
         }
         resolve({ code: error ? ((error as { code?: number }).code ?? 1) : 0, stdout, stderr: String(stderr) } as Out);
@@ -63,7 +65,10 @@ function execGit<E extends 'utf8' | 'buffer'>(
 
 /** git's own reason, in one line: its `fatal:` line when it has one (the first lines are often detail). */
 function gitReason(out: GitOutput<unknown>): string {
-  const lines = out.stderr.trim().split('\n').filter((l) => l.trim() !== '');
+  const lines = out.stderr
+    .trim()
+    .split('\n')
+    .filter((l) => l.trim() !== '');
   return lines.find((l) => l.startsWith('fatal:')) ?? lines[0] ?? `git exited with ${out.code}`;
 }
 
@@ -83,7 +88,10 @@ async function git(cwd: string, args: readonly string[], what: string): Promise<
 /** Refuse refs that git could read as options or that carry control characters. */
 export function checkRef(ref: string): string {
   if (ref === '' || ref.startsWith('-') || /[\0-\x1f\x7f\s]/.test(ref)) {
-    throw new UsageError(`"${ref.replace(/[\0-\x1f\x7f]/g, '?')}" is not a git revision`, 'give a branch, tag or commit id');
+    throw new UsageError(
+      `"${ref.replace(/[\0-\x1f\x7f]/g, '?')}" is not a git revision`,
+      'give a branch, tag or commit id',
+    );
   }
   return ref;
 }
@@ -116,7 +124,11 @@ export async function mergeBase(cwd: string, a: string, b: string): Promise<stri
  */
 export async function ensureCommit(cwd: string, sha: string, remote = 'origin'): Promise<void> {
   if (await hasCommit(cwd, sha)) return;
-  const out = await runGit(cwd, ['fetch', '--no-tags', '--no-recurse-submodules', '--depth=1', checkRef(remote), checkRef(sha)], FETCH_TIMEOUT_MS);
+  const out = await runGit(
+    cwd,
+    ['fetch', '--no-tags', '--no-recurse-submodules', '--depth=1', checkRef(remote), checkRef(sha)],
+    FETCH_TIMEOUT_MS,
+  );
   if (out.code === 0 && (await hasCommit(cwd, sha))) return;
   throw new GitError(
     `commit ${sha} is not in this clone and could not be fetched from ${remote} (${out.stderr.trim().split('\n').pop() || `exit ${out.code}`})`,
@@ -124,13 +136,21 @@ export async function ensureCommit(cwd: string, sha: string, remote = 'origin'):
   );
 }
 
-const STATUS: Record<string, ChangedFile['status']> = { A: 'added', M: 'modified', D: 'deleted', R: 'renamed', T: 'modified', C: 'added', U: 'modified' };
+const STATUS: Record<string, ChangedFile['status']> = {
+  A: 'added',
+  M: 'modified',
+  D: 'deleted',
+  R: 'renamed',
+  T: 'modified',
+  C: 'added',
+  U: 'modified',
+};
 
 /** Parse `git diff --name-status -z` output. */
 export function parseNameStatus(out: string): ChangedFile[] {
   const parts = out.split('\0');
   const files: ChangedFile[] = [];
-  for (let i = 0; i + 1 < parts.length; ) {
+  for (let i = 0; i + 1 < parts.length;) {
     const code = parts[i];
     if (code === '') {
       i++;
@@ -152,7 +172,11 @@ export function parseNameStatus(out: string): ChangedFile[] {
 /** Files changed from base to head (a commit, or "worktree" with untracked files as added), renames detected. */
 export async function listChanged(cwd: string, base: Revision, head: Revision): Promise<ChangedFile[]> {
   const range = head === 'worktree' ? [checkRef(base)] : [checkRef(base), checkRef(head)];
-  const diff = await git(cwd, ['diff', '--name-status', '-M', '-z', '--no-ext-diff', '--end-of-options', ...range, '--'], 'git diff');
+  const diff = await git(
+    cwd,
+    ['diff', '--name-status', '-M', '-z', '--no-ext-diff', '--end-of-options', ...range, '--'],
+    'git diff',
+  );
   const files = parseNameStatus(diff);
   if (head === 'worktree') {
     const untracked = await git(cwd, ['ls-files', '-z', '--others', '--exclude-standard'], 'git ls-files');
@@ -166,7 +190,8 @@ export async function showFile(cwd: string, rev: string, file: string): Promise<
   const spec = `${checkRef(rev)}:${file}`;
   const out = await runGitBytes(cwd, ['show', '--no-textconv', '--end-of-options', spec]).catch((e: unknown) => {
     // A blob over the output buffer: say which file, not what the buffer is called.
-    if (e instanceof GitError && /maxBuffer/i.test(e.message)) throw tooLarge(file, undefined, MAX_BUFFER, rev.slice(0, 12));
+    if (e instanceof GitError && /maxBuffer/i.test(e.message))
+      throw tooLarge(file, undefined, MAX_BUFFER, rev.slice(0, 12));
     throw e;
   });
   if (out.code === 0) return decodeText(out.stdout, file);
@@ -188,7 +213,11 @@ export async function readWorktree(root: string, file: string): Promise<string |
 export async function listFiles(cwd: string, rev: Revision): Promise<string[]> {
   const split = (out: string) => out.split('\0').filter(Boolean);
   if (rev !== 'worktree') {
-    return [...new Set(split(await git(cwd, ['ls-tree', '-r', '-z', '--name-only', '--end-of-options', checkRef(rev)], 'git ls-tree')))].sort();
+    return [
+      ...new Set(
+        split(await git(cwd, ['ls-tree', '-r', '-z', '--name-only', '--end-of-options', checkRef(rev)], 'git ls-tree')),
+      ),
+    ].sort();
   }
   const all = split(await git(cwd, ['ls-files', '-z', '--cached', '--others', '--exclude-standard'], 'git ls-files'));
   const deleted = new Set(split(await git(cwd, ['ls-files', '-z', '--deleted'], 'git ls-files')));

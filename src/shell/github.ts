@@ -36,7 +36,9 @@ export interface ClientOptions {
  * against a loopback server and must finish in seconds), not for users.
  * NETBRACE_HTTP_RETRIES, NETBRACE_HTTP_BACKOFF_MS, NETBRACE_HTTP_TIMEOUT_MS.
  */
-export function httpSettingsFromEnv(env: Readonly<Record<string, string | undefined>>): Pick<ClientOptions, 'retries' | 'backoffMs' | 'timeoutMs'> {
+export function httpSettingsFromEnv(
+  env: Readonly<Record<string, string | undefined>>,
+): Pick<ClientOptions, 'retries' | 'backoffMs' | 'timeoutMs'> {
   const num = (name: string): number | undefined => {
     const raw = env[name];
     if (raw === undefined || raw.trim() === '') return undefined;
@@ -79,15 +81,18 @@ export function createClient(options: ClientOptions): Client {
   const timeoutMs = options.timeoutMs ?? 20_000;
   const maxWait = options.maxRateLimitWaitS ?? 60;
   const log = options.log ?? (() => {});
-  const inner = ((actionsDefaults.request as { fetch?: FetchLike } | undefined)?.fetch ?? (fetch as unknown as FetchLike));
-  const onLimit = (kind: string) => (retryAfter: number, request: { method: string; url: string }, _octokit: unknown, retryCount: number) => {
-    if (retryCount < retries && retryAfter <= maxWait) {
-      log(`GitHub API ${kind} on ${request.method} ${request.url}: retrying in ${retryAfter} s`);
-      return true;
-    }
-    log(`GitHub API ${kind} on ${request.method} ${request.url}: giving up (reset in ${retryAfter} s)`);
-    return false;
-  };
+  const inner =
+    (actionsDefaults.request as { fetch?: FetchLike } | undefined)?.fetch ?? (fetch as unknown as FetchLike);
+  const onLimit =
+    (kind: string) =>
+    (retryAfter: number, request: { method: string; url: string }, _octokit: unknown, retryCount: number) => {
+      if (retryCount < retries && retryAfter <= maxWait) {
+        log(`GitHub API ${kind} on ${request.method} ${request.url}: retrying in ${retryAfter} s`);
+        return true;
+      }
+      log(`GitHub API ${kind} on ${request.method} ${request.url}: giving up (reset in ${retryAfter} s)`);
+      return false;
+    };
   return getOctokit(
     options.token,
     {
@@ -147,7 +152,12 @@ export async function tokenLogin(client: Client): Promise<string> {
  * of their own; such a comment is never adopted, so it is never edited. The token's identity
  * is asked for only when some comment carries the marker.
  */
-export async function findComment(client: Client, ref: IssueRef, marker: string, login?: () => Promise<string>): Promise<FoundComment | undefined> {
+export async function findComment(
+  client: Client,
+  ref: IssueRef,
+  marker: string,
+  login?: () => Promise<string>,
+): Promise<FoundComment | undefined> {
   const iterator = client.paginate.iterator(client.rest.issues.listComments, {
     owner: ref.owner,
     repo: ref.repo,
@@ -190,10 +200,20 @@ export async function upsertComment(
   if (!decide(existing)) return { action: 'skipped', ...(existing ? { id: existing.id, url: existing.url } : {}) };
   if (existing) {
     if (existing.body === body) return { action: 'unchanged', id: existing.id, url: existing.url };
-    const res = await client.rest.issues.updateComment({ owner: ref.owner, repo: ref.repo, comment_id: existing.id, body });
+    const res = await client.rest.issues.updateComment({
+      owner: ref.owner,
+      repo: ref.repo,
+      comment_id: existing.id,
+      body,
+    });
     return { action: 'updated', id: res.data.id, url: res.data.html_url };
   }
-  const res = await client.rest.issues.createComment({ owner: ref.owner, repo: ref.repo, issue_number: ref.issueNumber, body });
+  const res = await client.rest.issues.createComment({
+    owner: ref.owner,
+    repo: ref.repo,
+    issue_number: ref.issueNumber,
+    body,
+  });
   return { action: 'created', id: res.data.id, url: res.data.html_url };
 }
 
@@ -208,7 +228,10 @@ export interface ChangedFile {
 export const PR_FILES_LIMIT = 3000;
 
 /** The files a pull request changes, from the REST API (paginated, 100 per page). */
-export async function listPullRequestFiles(client: Client, ref: IssueRef): Promise<{ files: ChangedFile[]; truncated: boolean }> {
+export async function listPullRequestFiles(
+  client: Client,
+  ref: IssueRef,
+): Promise<{ files: ChangedFile[]; truncated: boolean }> {
   const raw = await client.paginate(client.rest.pulls.listFiles, {
     owner: ref.owner,
     repo: ref.repo,
@@ -234,7 +257,11 @@ export async function pullRequestHead(client: Client, ref: IssueRef): Promise<st
  * `pull-requests: write`. Rate limits (403 with x-ratelimit-remaining: 0) are not this.
  */
 export function isPermissionError(error: unknown): boolean {
-  const e = error as { status?: number; response?: { headers?: Record<string, string | undefined> }; message?: string } | null;
+  const e = error as {
+    status?: number;
+    response?: { headers?: Record<string, string | undefined> };
+    message?: string;
+  } | null;
   if (!e || (e.status !== 403 && e.status !== 404)) return false;
   if (e.response?.headers?.['x-ratelimit-remaining'] === '0') return false;
   if (/rate limit/i.test(e.message ?? '')) return false;

@@ -45,11 +45,17 @@ export async function readLocalPolicy(io: CommandIO, given: string | undefined):
   const read = (p: string) => readInsideSync(root, p);
   if (given !== undefined) {
     const entry = fromRoot(root, io.cwd, given);
-    if (entry === null) throw new UsageError(`policy file ${given} is outside ${root === realpathSync(io.cwd) ? 'the working directory' : 'the repository'}`, 'a policy and the files it extends live in the repository');
-    if (read(entry) === null) throw new UsageError(`policy file ${given} not found`, 'give a path relative to the working directory');
+    if (entry === null)
+      throw new UsageError(
+        `policy file ${given} is outside ${root === realpathSync(io.cwd) ? 'the working directory' : 'the repository'}`,
+        'a policy and the files it extends live in the repository',
+      );
+    if (read(entry) === null)
+      throw new UsageError(`policy file ${given} not found`, 'give a path relative to the working directory');
     return { policy: loadPolicy(entry, read), source: `policy ${entry}`, root };
   }
-  if (read(DEFAULT_POLICY_PATH) !== null) return { policy: loadPolicy(DEFAULT_POLICY_PATH, read), source: `policy ${DEFAULT_POLICY_PATH}`, root };
+  if (read(DEFAULT_POLICY_PATH) !== null)
+    return { policy: loadPolicy(DEFAULT_POLICY_PATH, read), source: `policy ${DEFAULT_POLICY_PATH}`, root };
   return { policy: builtinPolicy(), source: 'the built-in policy', root };
 }
 

@@ -36,19 +36,29 @@ export interface OneDesign {
 
 function relative(from: string, cwd: string, p: string): string {
   const rel = path.relative(from, path.resolve(cwd, p));
-  if (rel === '' || rel.startsWith('..') || path.isAbsolute(rel)) throw new UsageError(`${p} is not inside ${from === cwd ? 'the working directory' : 'the repository'}`);
+  if (rel === '' || rel.startsWith('..') || path.isAbsolute(rel))
+    throw new UsageError(`${p} is not inside ${from === cwd ? 'the working directory' : 'the repository'}`);
   return rel.split(path.sep).join('/');
 }
 
 async function commit(root: string, ref: string): Promise<string> {
   if (/^[0-9a-f]{40}$/.test(ref) && !(await revParse(root, ref))) await ensureCommit(root, ref);
   const sha = await revParse(root, ref);
-  if (!sha) throw new UsageError(`"${ref}" is not a commit in this repository`, 'check the ref (git fetch it first if it is remote)');
+  if (!sha)
+    throw new UsageError(
+      `"${ref}" is not a commit in this repository`,
+      'check the ref (git fetch it first if it is remote)',
+    );
   return sha;
 }
 
 /** Judge FILE through the gate, with the map and the mend search as asked. */
-export async function judgeOneDesign(file: string, v: OneDesignValues, io: CommandIO, views: Pick<GateRequest, 'map' | 'mend'>): Promise<OneDesign> {
+export async function judgeOneDesign(
+  file: string,
+  v: OneDesignValues,
+  io: CommandIO,
+  views: Pick<GateRequest, 'map' | 'mend'>,
+): Promise<OneDesign> {
   const threads = sharedOption('--threads', v.threads, THREADS);
   const seed = sharedOption('--seed', v.seed, SEED);
   const request: GateRequest = { policySource: 'base', mode: 'block', eventKind: 'local', worktree: true, ...views };
@@ -59,7 +69,8 @@ export async function judgeOneDesign(file: string, v: OneDesignValues, io: Comma
   let deps: GateDeps;
   let top: string;
   if (root === null) {
-    if (v.base !== undefined) throw new UsageError('--base needs a git repository', 'run it inside the repository, or leave --base out');
+    if (v.base !== undefined)
+      throw new UsageError('--base needs a git repository', 'run it inside the repository, or leave --base out');
     top = io.cwd;
     deps = { listChanged: () => [], listAll: () => [], readAt: (_rev, p) => readInside(io.cwd, p) };
   } else {

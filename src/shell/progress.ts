@@ -30,7 +30,10 @@ export function progressAllowed(io: Pick<CommandIO, 'stderrIsTTY' | 'env'>): boo
   return io.stderrIsTTY && (ci === undefined || ci === '' || ci === '0' || ci.toLowerCase() === 'false');
 }
 
-export function createProgress(io: Pick<CommandIO, 'stderr' | 'stderrIsTTY' | 'env'>, options: ProgressOptions): Progress {
+export function createProgress(
+  io: Pick<CommandIO, 'stderr' | 'stderrIsTTY' | 'env'>,
+  options: ProgressOptions,
+): Progress {
   if (!progressAllowed(io) || options.total <= 0) return SILENT;
   const now = options.now ?? Date.now;
   const cells = options.width ?? 24;

@@ -24,13 +24,20 @@ export function readDesign(file: string, options: ReadDesignOptions = {}): Topol
   let text: string;
   try {
     const stat = statSync(full);
-    if (stat.isDirectory()) throw new DesignError('is a directory, not a design file', { file: shown }, 'name a design file inside it');
+    if (stat.isDirectory())
+      throw new DesignError('is a directory, not a design file', { file: shown }, 'name a design file inside it');
     if (stat.size > maxBytes) throw sizeError(shown, stat.size, maxBytes);
     text = decodeText(readFileSync(full), shown);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    if (code === 'ENOENT') throw new DesignError('no such file', { file: shown }, 'check the path (it is read relative to the working directory)');
-    if (code === 'EACCES' || code === 'EPERM') throw new DesignError('permission denied reading the file', { file: shown });
+    if (code === 'ENOENT')
+      throw new DesignError(
+        'no such file',
+        { file: shown },
+        'check the path (it is read relative to the working directory)',
+      );
+    if (code === 'EACCES' || code === 'EPERM')
+      throw new DesignError('permission denied reading the file', { file: shown });
     if (code !== undefined) throw new DesignError(`cannot read the file (${code})`, { file: shown });
     throw e;
   }

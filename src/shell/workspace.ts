@@ -56,12 +56,18 @@ export function resolveInWorkspace(workspace: string, base: string, given: strin
   const root = realpathSync(workspace);
   const full = path.resolve(base, given);
   if (!isInside(root, full) && !isInside(path.resolve(workspace), full)) {
-    throw new WorkspacePathError(`${named(label, given)} points outside the workspace`, 'give a path inside the repository');
+    throw new WorkspacePathError(
+      `${named(label, given)} points outside the workspace`,
+      'give a path inside the repository',
+    );
   }
   const existing = nearestExisting(full);
   const real = realpathSync(existing);
   if (!isInside(root, real)) {
-    throw new WorkspacePathError(`${named(label, given)} leads outside the workspace through a symbolic link`, 'give a path inside the repository');
+    throw new WorkspacePathError(
+      `${named(label, given)} leads outside the workspace through a symbolic link`,
+      'give a path inside the repository',
+    );
   }
   return path.join(real, path.relative(existing, full));
 }
@@ -77,7 +83,8 @@ export function prepareWrite(workspace: string, base: string, given: string, inp
   } catch {
     st = undefined;
   }
-  if (st?.isSymbolicLink()) throw new WorkspacePathError(`${named(label, given)} is a symbolic link; netbrace does not write through links`);
+  if (st?.isSymbolicLink())
+    throw new WorkspacePathError(`${named(label, given)} is a symbolic link; netbrace does not write through links`);
   if (st?.isDirectory()) throw new WorkspacePathError(`${named(label, given)} is a directory; name a file`);
   mkdirSync(path.dirname(full), { recursive: true });
   // The directories just created are inside; check the parent once more in case one of them
@@ -103,13 +110,20 @@ export function repositoryPath(given: string, what: string): string {
   if (given.includes('\0')) throw new WorkspacePathError(`${what} contains a NUL character`);
   const slashed = given.replace(/\\/g, '/');
   if (slashed.startsWith('/') || /^[A-Za-z]:\//.test(slashed)) {
-    throw new WorkspacePathError(`${named(what, given)} is an absolute path`, 'give a path relative to the repository root');
+    throw new WorkspacePathError(
+      `${named(what, given)} is an absolute path`,
+      'give a path relative to the repository root',
+    );
   }
   const parts: string[] = [];
   for (const seg of slashed.split('/')) {
     if (seg === '' || seg === '.') continue;
     if (seg === '..') {
-      if (parts.length === 0) throw new WorkspacePathError(`${named(what, given)} points outside the repository`, 'give a path inside the repository');
+      if (parts.length === 0)
+        throw new WorkspacePathError(
+          `${named(what, given)} points outside the repository`,
+          'give a path inside the repository',
+        );
       parts.pop();
     } else parts.push(seg);
   }
@@ -140,10 +154,12 @@ export function tooLarge(file: string, bytes: number | undefined, maxBytes: numb
  */
 export function readInsideSync(root: string, file: string, maxBytes = DEFAULT_MAX_BYTES): string | null {
   const full = path.resolve(root, file);
-  if (file.includes('\0') || !isInside(path.resolve(root), full)) throw new WorkspacePathError(`${quoted(file)} is outside the repository`, 'give paths inside the repository');
+  if (file.includes('\0') || !isInside(path.resolve(root), full))
+    throw new WorkspacePathError(`${quoted(file)} is outside the repository`, 'give paths inside the repository');
   try {
     const real = realpathSync(full);
-    if (!isInside(realpathSync(root), real)) throw new WorkspacePathError(`${quoted(file)} leads outside the repository through a symbolic link`);
+    if (!isInside(realpathSync(root), real))
+      throw new WorkspacePathError(`${quoted(file)} leads outside the repository through a symbolic link`);
     const st = statSync(real);
     if (st.isDirectory()) return null;
     if (st.size > maxBytes) throw tooLarge(file, st.size, maxBytes);

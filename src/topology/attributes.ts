@@ -24,7 +24,9 @@ const NODE_FIELDS: Readonly<Record<string, 'label' | 'kind' | 'lat' | 'lon' | 'x
   hardened: 'hardened',
 };
 
-const LINK_FIELDS: Readonly<Record<string, 'length' | 'latency' | 'capacity' | 'weight' | 'bitrate' | 'riskGroups' | 'hardened'>> = {
+const LINK_FIELDS: Readonly<
+  Record<string, 'length' | 'latency' | 'capacity' | 'weight' | 'bitrate' | 'riskGroups' | 'hardened'>
+> = {
   weight: 'weight',
   cost: 'weight',
   length: 'length',
@@ -146,7 +148,12 @@ export function mapNodeAttributes(
     } else if (field === 'lat' || field === 'lon' || field === 'x' || field === 'y') {
       const n = numeral(value);
       const bad = n === undefined ? undefined : nonNormal(n);
-      if (bad) throw b.error(`node coordinate "${name}" ${bad} ("${written(name, value)}")`, posOf(name), 'write a plain decimal number of degrees');
+      if (bad)
+        throw b.error(
+          `node coordinate "${name}" ${bad} ("${written(name, value)}")`,
+          posOf(name),
+          'write a plain decimal number of degrees',
+        );
       if (n === undefined) {
         b.warn(`node coordinate "${name}" is not a number ("${text(value)}"); ignored`, posOf(name));
         out.attrs[name] = value;
@@ -172,7 +179,10 @@ export function mapNodeAttributes(
       out.lat = lat[0];
       out.lon = lon[0];
     } else {
-      b.warn(`coordinates ${lat[1]}=${lat[0]}, ${lon[1]}=${lon[0]} are not a latitude/longitude; ignored`, posOf(lat[1]));
+      b.warn(
+        `coordinates ${lat[1]}=${lat[0]}, ${lon[1]}=${lon[0]} are not a latitude/longitude; ignored`,
+        posOf(lat[1]),
+      );
       out.attrs[lat[1]] = lat[0];
       out.attrs[lon[1]] = lon[0];
     }
@@ -218,11 +228,16 @@ export function mapLinkAttributes(
       // Informational; a malformed or out-of-range speed is kept as written rather than refused.
       const gbps = n === undefined ? undefined : n / 1e9;
       if (gbps !== undefined && quantityProblem('capacity', gbps) === undefined) out.capacity ??= gbps;
-      else b.warn(`link ${name} "${as}" is not a speed in bit/s that netbrace accepts; not read as the capacity`, posOf(name));
+      else
+        b.warn(
+          `link ${name} "${as}" is not a speed in bit/s that netbrace accepts; not read as the capacity`,
+          posOf(name),
+        );
       out.attrs[name] = value;
       continue;
     }
-    if (n === undefined) throw b.error(`link ${name} must be a number, not "${as}"`, posOf(name), 'write a plain decimal number');
+    if (n === undefined)
+      throw b.error(`link ${name} must be a number, not "${as}"`, posOf(name), 'write a plain decimal number');
     const problem = quantityProblem(field, n, as);
     if (problem) throw b.error(`link ${name} ${problem.message}`, posOf(name), problem.hint);
     if (field === 'capacity') out.capacity = n;

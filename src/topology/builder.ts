@@ -149,11 +149,20 @@ export class TopologyBuilder {
     this.checkId(input.id, 'a node id', input.pos);
     const first = this.nodeLine.get(input.id);
     if (first !== undefined) {
-      throw this.error(`duplicate node id "${input.id}"`, input.pos, `first defined on line ${first.line}; node ids must be unique`);
+      throw this.error(
+        `duplicate node id "${input.id}"`,
+        input.pos,
+        `first defined on line ${first.line}; node ids must be unique`,
+      );
     }
     this.countElement(input.pos);
     this.nodeLine.set(input.id, input.pos);
-    const node: TopoNode = { id: input.id, hardened: input.hardened ?? false, pos: input.pos, attrs: input.attrs ?? {} };
+    const node: TopoNode = {
+      id: input.id,
+      hardened: input.hardened ?? false,
+      pos: input.pos,
+      attrs: input.attrs ?? {},
+    };
     if (input.label !== undefined) node.label = input.label;
     if (input.kind !== undefined) node.kind = input.kind;
     if (input.lat !== undefined && input.lon !== undefined) {
@@ -193,7 +202,11 @@ export class TopologyBuilder {
     this.requireNode(input.source, input.sourcePos ?? input.pos, what);
     this.requireNode(input.target, input.targetPos ?? input.pos, what);
     if (input.source === input.target) {
-      this.warn(`self-loop on node "${input.source}" dropped`, input.pos, 'a link from a node to itself adds no connectivity');
+      this.warn(
+        `self-loop on node "${input.source}" dropped`,
+        input.pos,
+        'a link from a node to itself adds no connectivity',
+      );
       return false;
     }
     if (input.arc) {
@@ -205,7 +218,8 @@ export class TopologyBuilder {
       }
     }
     this.countElement(input.pos);
-    const pairKey = input.source <= input.target ? `${input.source}\u0000${input.target}` : `${input.target}\u0000${input.source}`;
+    const pairKey =
+      input.source <= input.target ? `${input.source}\u0000${input.target}` : `${input.target}\u0000${input.source}`;
     const occurrence = (this.pairCount.get(pairKey) ?? 0) + 1;
     this.pairCount.set(pairKey, occurrence);
 
@@ -214,9 +228,16 @@ export class TopologyBuilder {
       const first = this.linkIds.get(id);
       if (first !== undefined) {
         if (this.duplicateLinkIds === 'error') {
-          throw this.error(`duplicate link id "${id}"`, input.pos, `first used on line ${first.line}; link ids must be unique`);
+          throw this.error(
+            `duplicate link id "${id}"`,
+            input.pos,
+            `first used on line ${first.line}; link ids must be unique`,
+          );
         }
-        this.warn(`duplicate link id "${id}" (first on line ${first.line}); the link is named by its ends instead`, input.pos);
+        this.warn(
+          `duplicate link id "${id}" (first on line ${first.line}); the link is named by its ends instead`,
+          input.pos,
+        );
         id = undefined;
       }
     }
@@ -259,9 +280,11 @@ export class TopologyBuilder {
     for (const k of ['length', 'latency', 'capacity', 'weight'] as const) {
       if (arc[k] !== link[k]) differs.push(`${k} ${link[k] ?? 'unset'} vs ${arc[k] ?? 'unset'}`);
     }
-    if ((arc.hardened ?? false) !== link.hardened) differs.push(`hardened ${link.hardened} vs ${arc.hardened ?? false}`);
+    if ((arc.hardened ?? false) !== link.hardened)
+      differs.push(`hardened ${link.hardened} vs ${arc.hardened ?? false}`);
     const groups = (g: readonly string[]) => [...new Set(g)].sort().join(';');
-    if (groups(arc.riskGroups ?? []) !== groups(link.riskGroups)) differs.push(`risk groups "${groups(link.riskGroups)}" vs "${groups(arc.riskGroups ?? [])}"`);
+    if (groups(arc.riskGroups ?? []) !== groups(link.riskGroups))
+      differs.push(`risk groups "${groups(link.riskGroups)}" vs "${groups(arc.riskGroups ?? [])}"`);
     if (differs.length > 0) {
       this.warn(
         `the arc ${arc.source} → ${arc.target} is merged with the reverse arc on line ${link.pos.line}, which says otherwise (${differs.join(', ')}); the first arc's values are kept`,
@@ -274,15 +297,24 @@ export class TopologyBuilder {
   addRiskGroup(group: RiskGroup): void {
     this.checkId(group.id, 'a risk group id', group.pos);
     const first = this.riskGroupPos.get(group.id);
-    if (first) throw this.error(`duplicate risk group id "${group.id}"`, group.pos, `first described on line ${first.line}`);
+    if (first)
+      throw this.error(`duplicate risk group id "${group.id}"`, group.pos, `first described on line ${first.line}`);
     this.riskGroupPos.set(group.id, group.pos);
     this.riskGroups.push(group);
   }
 
-  addDemand(source: string, target: string, volume: number, pos: SourcePos, endPos?: [SourcePos, SourcePos], what = 'demand'): void {
+  addDemand(
+    source: string,
+    target: string,
+    volume: number,
+    pos: SourcePos,
+    endPos?: [SourcePos, SourcePos],
+    what = 'demand',
+  ): void {
     this.requireNode(source, endPos?.[0] ?? pos, what);
     this.requireNode(target, endPos?.[1] ?? pos, what);
-    if (source === target) throw this.error(`${what} goes from node "${source}" to itself`, pos, 'a demand needs two different ends');
+    if (source === target)
+      throw this.error(`${what} goes from node "${source}" to itself`, pos, 'a demand needs two different ends');
     this.demands.push({ source, target, volume, pos });
   }
 
@@ -296,7 +328,9 @@ export class TopologyBuilder {
         severity: 'warning',
         message:
           `the graph is directed (${this.directedAt.how}); direction is ignored and links are read as undirected` +
-          (merged > 0 ? `: ${merged} pair${merged === 1 ? '' : 's'} of reverse arcs (u → v and v → u) merged into one link each` : ''),
+          (merged > 0
+            ? `: ${merged} pair${merged === 1 ? '' : 's'} of reverse arcs (u → v and v → u) merged into one link each`
+            : ''),
       });
     }
     const t: Topology = {

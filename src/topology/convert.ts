@@ -33,7 +33,12 @@ export interface Converted extends Written {
  * sites (rounded to the metre), marked `length_estimated: true`. The great circle is the
  * shortest possible path: a real route is longer, so an estimated length is a lower bound.
  */
-export function estimateLengths(t: Topology): { topology: Topology; estimated: number; unestimated: number; overWeight: number } {
+export function estimateLengths(t: Topology): {
+  topology: Topology;
+  estimated: number;
+  unestimated: number;
+  overWeight: number;
+} {
   const at = new Map(t.nodes.map((n) => [n.id, n]));
   let estimated = 0;
   let unestimated = 0;
@@ -73,6 +78,9 @@ export function writeDesign(t: Topology, format: DesignFormat): Written {
 
 /** Convert a parsed design to `format`. Throws DesignError when the format cannot hold it at all. */
 export function convertDesign(t: Topology, format: DesignFormat, options: ConvertOptions = {}): Converted {
-  const { topology, ...counts } = options.estimateLengths === false ? { topology: t, estimated: 0, unestimated: 0, overWeight: 0 } : estimateLengths(t);
+  const { topology, ...counts } =
+    options.estimateLengths === false
+      ? { topology: t, estimated: 0, unestimated: 0, overWeight: 0 }
+      : estimateLengths(t);
   return { ...writeDesign(topology, format), ...counts };
 }

@@ -40,7 +40,8 @@ const RAD = Math.PI / 180;
 /** Length of a route along the sphere, km. */
 export function routeKm(route: Route): number {
   let km = 0;
-  for (let i = 1; i < route.length; i++) km += greatCircleKm(route[i - 1][1], route[i - 1][0], route[i][1], route[i][0]);
+  for (let i = 1; i < route.length; i++)
+    km += greatCircleKm(route[i - 1][1], route[i - 1][0], route[i][1], route[i][0]);
   return km;
 }
 
@@ -61,7 +62,11 @@ function sample(route: Route, stepM: number): { p: [number, number]; m: number }
 }
 
 /** Distance in metres from point p to segment q0–q1 (local equirectangular projection at p). */
-function pointSegmentM(p: readonly [number, number], q0: readonly [number, number], q1: readonly [number, number]): number {
+function pointSegmentM(
+  p: readonly [number, number],
+  q0: readonly [number, number],
+  q1: readonly [number, number],
+): number {
   const kx = Math.cos(p[1] * RAD) * RAD * EARTH_M;
   const ky = RAD * EARTH_M;
   const ax = (q0[0] - p[0]) * kx;
@@ -107,7 +112,7 @@ export function sharedCorridors(routes: readonly Route[], options: CorridorOptio
   const withinM = options.withinM ?? 50;
   const minKm = options.minKm ?? 1;
   const stepM = options.stepM ?? 25;
-  const padDeg = (withinM / EARTH_M) / RAD;
+  const padDeg = withinM / EARTH_M / RAD;
   const boxes = routes.map((r) => boxOf(r, padDeg));
   // Sampled only when a route has a partner to compare with: a long route has many samples.
   const samples: ({ p: [number, number]; m: number }[] | undefined)[] = [];
@@ -125,7 +130,8 @@ export function sharedCorridors(routes: readonly Route[], options: CorridorOptio
         // Outside route b's box (padded by withinM) no segment of b can be near.
         if (s.p[0] < box.minX || s.p[0] > box.maxX || s.p[1] < box.minY || s.p[1] > box.maxY) continue;
         let near = false;
-        for (let i = 1; i < routes[b].length && !near; i++) near = pointSegmentM(s.p, routes[b][i - 1], routes[b][i]) <= withinM;
+        for (let i = 1; i < routes[b].length && !near; i++)
+          near = pointSegmentM(s.p, routes[b][i - 1], routes[b][i]) <= withinM;
         if (near) {
           m += s.m;
           from ??= s.p;

@@ -37,7 +37,12 @@ export function* csvRows(text: string, b: TopologyBuilder): Generator<Row> {
       if (text[i] === '"') {
         i++;
         for (;;) {
-          if (i >= n) throw b.error('unterminated quoted field', pos, 'close the field with a double quote (write "" for a quote inside it)');
+          if (i >= n)
+            throw b.error(
+              'unterminated quoted field',
+              pos,
+              'close the field with a double quote (write "" for a quote inside it)',
+            );
           const c = text[i];
           if (c === '"') {
             if (text[i + 1] === '"') {
@@ -56,13 +61,22 @@ export function* csvRows(text: string, b: TopologyBuilder): Generator<Row> {
           i++;
         }
         if (i < n && text[i] !== ',' && text[i] !== '\n' && text[i] !== '\r') {
-          throw b.error('text after a closing quote', { line, column: i - lineStart + 1 }, 'a quoted field must end at a comma or the end of the line');
+          throw b.error(
+            'text after a closing quote',
+            { line, column: i - lineStart + 1 },
+            'a quoted field must end at a comma or the end of the line',
+          );
         }
       } else {
         const start = i;
         while (i < n && text[i] !== ',' && text[i] !== '\n' && text[i] !== '\r') i++;
         value = text.slice(start, i);
-        if (value.includes('"')) throw b.error('a double quote inside an unquoted field', pos, 'quote the whole field and double the quote: "a ""b"""');
+        if (value.includes('"'))
+          throw b.error(
+            'a double quote inside an unquoted field',
+            pos,
+            'quote the whole field and double the quote: "a ""b"""',
+          );
       }
       cells.push({ text: value, pos });
       if (i < n && text[i] === ',') {
@@ -97,24 +111,43 @@ export function csvHasEdgeHeader(text: string): boolean {
   }
 }
 
-export function parseEdgeList(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'csv'): Topology {
+export function parseEdgeList(
+  text: string,
+  file: string,
+  options: BuilderOptions = {},
+  format: DesignFormat = 'csv',
+): Topology {
   const b = new TopologyBuilder(file, format, options);
   const rows = csvRows(text, b);
   const first = rows.next();
-  if (first.done) throw b.error('the CSV file is empty', { line: 1, column: 1 }, 'the first line must be a header with source,target');
+  if (first.done)
+    throw b.error(
+      'the CSV file is empty',
+      { line: 1, column: 1 },
+      'the first line must be a header with source,target',
+    );
   const headerCells = first.value.cells;
   const header = headerCells.map((c) => c.text.trim());
   const lower = header.map((h) => h.toLowerCase());
   for (const need of ['source', 'target']) {
     if (!lower.includes(need)) {
-      throw b.error(`the CSV header has no "${need}" column`, headerCells[0].pos, 'the first line must name the columns, e.g. source,target,length');
+      throw b.error(
+        `the CSV header has no "${need}" column`,
+        headerCells[0].pos,
+        'the first line must name the columns, e.g. source,target,length',
+      );
     }
   }
   const seen = new Map<string, number>();
   lower.forEach((h, k) => {
     if (h === '') throw b.error(`column ${k + 1} of the header has no name`, headerCells[k].pos);
     const earlier = seen.get(h);
-    if (earlier !== undefined) throw b.error(`column "${header[k]}" appears twice in the header`, headerCells[k].pos, `first as column ${earlier + 1}`);
+    if (earlier !== undefined)
+      throw b.error(
+        `column "${header[k]}" appears twice in the header`,
+        headerCells[k].pos,
+        `first as column ${earlier + 1}`,
+      );
     seen.set(h, k);
   });
   const src = lower.indexOf('source');
@@ -125,7 +158,10 @@ export function parseEdgeList(text: string, file: string, options: BuilderOption
   for (const { cells, end } of rows) {
     r++;
     if (cells.length < header.length) {
-      const missing = header.slice(cells.length).map((h) => `"${h}"`).join(', ');
+      const missing = header
+        .slice(cells.length)
+        .map((h) => `"${h}"`)
+        .join(', ');
       throw b.error(
         `row has ${cells.length} of the header's ${header.length} columns (missing ${missing})`,
         end,
@@ -133,13 +169,18 @@ export function parseEdgeList(text: string, file: string, options: BuilderOption
       );
     }
     if (cells.length > header.length) {
-      throw b.error(`row has ${cells.length} columns but the header has ${header.length}`, cells[header.length].pos, 'quote values that contain commas');
+      throw b.error(
+        `row has ${cells.length} columns but the header has ${header.length}`,
+        cells[header.length].pos,
+        'quote values that contain commas',
+      );
     }
     const pos = cells[0].pos;
     const ends = [cells[src], cells[dst]];
     for (const c of ends) {
       const id = c.text.trim();
-      if (id === '') throw b.error(`empty ${c === cells[src] ? 'source' : 'target'}`, c.pos, 'every row needs both link ends');
+      if (id === '')
+        throw b.error(`empty ${c === cells[src] ? 'source' : 'target'}`, c.pos, 'every row needs both link ends');
       if (!b.hasNode(id)) b.addNode({ id, pos: c.pos });
     }
     const raw: Record<string, unknown> = {};

@@ -246,14 +246,14 @@ class Reader {
         const next = this.lines.get(this.i, 1);
         if (!next || next.indent <= indent) return decline(); // an empty item
         w.at.push(next.content);
-                out.push(this.block(next.indent, depth + 1));
+        out.push(this.block(next.indent, depth + 1));
         continue;
       }
       if (this.isItem(c, line.end)) decline(); // `- - x`
       if (this.keyAt(c, line.end) >= 0) {
         // `- key: value`: a mapping whose keys line up with this one.
         w.at.push(c);
-                out.push(this.mapping(c - line.begin, c, depth + 1));
+        out.push(this.mapping(c - line.begin, c, depth + 1));
         continue;
       }
       this.i++;
@@ -303,10 +303,10 @@ class Reader {
         const next = this.lines.get(this.i, 1);
         if (next && (next.indent > indent || (next.indent === indent && this.isItem(next.content, next.end)))) {
           w.at.push(next.content);
-                    out[key] = this.block(next.indent, depth + 1);
+          out[key] = this.block(next.indent, depth + 1);
         } else {
           w.at.push(colon + 1);
-                    out[key] = null;
+          out[key] = null;
         }
       } else {
         const val = this.inline(v, line.end);
@@ -402,7 +402,13 @@ class Reader {
           const s = k;
           while (k < end && t.charCodeAt(k) !== 58 && t.charCodeAt(k) !== 44 && t.charCodeAt(k) !== close) k++;
           key = t.slice(s, k).trimEnd();
-          if (t.charCodeAt(k) !== 58 || !KEY.test(key) || NOT_KEYS.has(key) || Object.prototype.hasOwnProperty.call(map, key)) decline();
+          if (
+            t.charCodeAt(k) !== 58 ||
+            !KEY.test(key) ||
+            NOT_KEYS.has(key) ||
+            Object.prototype.hasOwnProperty.call(map, key)
+          )
+            decline();
           k++;
           if (t.charCodeAt(k) !== 32) decline();
           skip();

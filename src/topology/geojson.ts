@@ -84,30 +84,48 @@ function crsProblem(crs: Json | undefined): string | undefined {
 
 export function parseGeojson(text: string, file: string, options: BuilderOptions = {}): Topology {
   const deep = yamlNestingExceeded(text);
-  if (deep >= 0) throw new DesignError(`the GeoJSON nests deeper than ${MAX_NESTING} levels`, { file, ...positionOf(text, deep) }, 'a FeatureCollection needs a few levels only');
+  if (deep >= 0)
+    throw new DesignError(
+      `the GeoJSON nests deeper than ${MAX_NESTING} levels`,
+      { file, ...positionOf(text, deep) },
+      'a FeatureCollection needs a few levels only',
+    );
   const lines = new LineCounter();
   const doc = parseDocument(text, { lineCounter: lines, uniqueKeys: true, prettyErrors: false });
   const at = (offset: number): SourcePos => {
     const p = lines.linePos(offset);
     return { line: p.line, column: p.col };
   };
-  const where = (n: YamlNode | null | undefined, fallback: SourcePos = { line: 1, column: 1 }): SourcePos => (n?.range ? at(n.range[0]) : fallback);
+  const where = (n: YamlNode | null | undefined, fallback: SourcePos = { line: 1, column: 1 }): SourcePos =>
+    n?.range ? at(n.range[0]) : fallback;
   if (doc.errors.length > 0) {
     const e = doc.errors[0];
-    throw new DesignError(`GeoJSON syntax error: ${e.message.split('\n')[0]}`, { file, ...at(e.pos[0]) }, 'fix the JSON at this point');
+    throw new DesignError(
+      `GeoJSON syntax error: ${e.message.split('\n')[0]}`,
+      { file, ...at(e.pos[0]) },
+      'fix the JSON at this point',
+    );
   }
   const root = doc.toJS({ maxAliasCount: 0 }) as Json;
   const b = new TopologyBuilder(file, 'geojson', options);
-  const fail = (pos: SourcePos) => (message: string, hint = ''): never => {
-    throw b.error(message, pos, hint);
-  };
+  const fail =
+    (pos: SourcePos) =>
+    (message: string, hint = ''): never => {
+      throw b.error(message, pos, hint);
+    };
   if (!isObject(root) || root.type !== 'FeatureCollection' || !Array.isArray(root.features)) {
-    fail({ line: 1, column: 1 })('a GeoJSON design is a FeatureCollection with a "features" list', 'points are sites, lines are links');
+    fail({ line: 1, column: 1 })(
+      'a GeoJSON design is a FeatureCollection with a "features" list',
+      'points are sites, lines are links',
+    );
   }
   const rootMap = root as { [k: string]: Json };
   const crs = crsProblem(rootMap.crs);
   if (crs !== undefined) {
-    fail(where(nodeAt(doc.contents, ['crs'])))(`the coordinates are in another reference system (${crs.slice(0, 80)})`, 'RFC 7946 GeoJSON is WGS 84 longitude/latitude: export the layer as EPSG:4326');
+    fail(where(nodeAt(doc.contents, ['crs'])))(
+      `the coordinates are in another reference system (${crs.slice(0, 80)})`,
+      'RFC 7946 GeoJSON is WGS 84 longitude/latitude: export the layer as EPSG:4326',
+    );
   }
   const featureNodes = nodeAt(doc.contents, ['features']);
   const features: Feature[] = (rootMap.features as Json[]).map((f, i) => {
@@ -115,7 +133,11 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
     const pos = where(node);
     if (!isObject(f) || f.type !== 'Feature') fail(pos)(`features[${i}] is not a Feature`);
     const g = (f as { geometry?: Json }).geometry;
-    if (g !== null && !(isObject(g) && typeof g.type === 'string')) fail(pos)(`features[${i}] has no geometry object`, 'a Feature has "geometry": a Point (a site) or a LineString (a link)');
+    if (g !== null && !(isObject(g) && typeof g.type === 'string'))
+      fail(pos)(
+        `features[${i}] has no geometry object`,
+        'a Feature has "geometry": a Point (a site) or a LineString (a link)',
+      );
     const props = (f as { properties?: Json }).properties;
     return {
       geometry: g as Feature['geometry'],
@@ -148,7 +170,10 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
     const bad = nonNormal(lon) ?? nonNormal(lat);
     if (bad) here(`${what} ${bad}`, 'write plain decimal degrees');
     if (lon < -180 || lon > 180 || lat < -90 || lat > 90) {
-      here(`${what} [${lon}, ${lat}] is outside longitude −180…180 / latitude −90…90`, 'GeoJSON writes longitude first, in degrees of WGS 84 (RFC 7946 §3.1.1)');
+      here(
+        `${what} [${lon}, ${lat}] is outside longitude −180…180 / latitude −90…90`,
+        'GeoJSON writes longitude first, in degrees of WGS 84 (RFC 7946 §3.1.1)',
+      );
     }
     return [lon, lat];
   };
@@ -172,7 +197,10 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
       if (COORDINATE_NAMES.has(k.toLowerCase())) asWritten[k] = v;
       else rest[k] = v;
     }
-    const mapped = mapNodeAttributes(rest, b, { pos: (k) => where(nodeAt(f.node, ['properties', k]), f.pos), text: (k) => (typeof rest[k] === 'number' ? written(f, ['properties', k], rest[k]) : undefined) });
+    const mapped = mapNodeAttributes(rest, b, {
+      pos: (k) => where(nodeAt(f.node, ['properties', k]), f.pos),
+      text: (k) => (typeof rest[k] === 'number' ? written(f, ['properties', k], rest[k]) : undefined),
+    });
     b.addNode({ id: id!, pos: f.pos, ...mapped, attrs: { ...mapped.attrs, ...asWritten }, lat, lon });
     sites.push({ id: id!, lon, lat });
   });
@@ -197,7 +225,10 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
     const type = f.geometry.type;
     const here = fail(f.pos);
     if (type !== 'LineString' && type !== 'MultiLineString') {
-      here(`features[${i}] is a ${type}: only Point (sites) and LineString or MultiLineString (links) are read`, 'keep areas and other shapes in another file');
+      here(
+        `features[${i}] is a ${type}: only Point (sites) and LineString or MultiLineString (links) are read`,
+        'keep areas and other shapes in another file',
+      );
     }
     const coords = f.geometry.coordinates;
     const partList: Json[] = type === 'LineString' ? [coords] : Array.isArray(coords) ? coords : [];
@@ -205,7 +236,10 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
     const parts: [number, number][][] = partList.map((part, k) => {
       const base: Path = type === 'LineString' ? ['geometry', 'coordinates'] : ['geometry', 'coordinates', k];
       if (!Array.isArray(part) || part.length < 2) {
-        fail(where(nodeAt(f.node, base), f.pos))(`link features[${i}] has a line with fewer than two positions`, 'a line needs at least its two ends');
+        fail(where(nodeAt(f.node, base), f.pos))(
+          `link features[${i}] has a line with fewer than two positions`,
+          'a line needs at least its two ends',
+        );
       }
       return (part as Json[]).map((p, j) => position(f, [...base, j], p, `position ${j} of link features[${i}]`));
     });
@@ -240,7 +274,12 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
     }
     // Named ends whose line runs between two other sites: most likely a copied line.
     const drawn = [nearest(first), nearest(last)];
-    if (named('source', 'from') && named('target', 'to') && drawn.every((d) => d !== undefined) && [...drawn].sort().join('\0') !== [...ends].sort().join('\0')) {
+    if (
+      named('source', 'from') &&
+      named('target', 'to') &&
+      drawn.every((d) => d !== undefined) &&
+      [...drawn].sort().join('\0') !== [...ends].sort().join('\0')
+    ) {
       b.warn(
         `link features[${i}] names the sites "${ends[0]}" and "${ends[1]}", but its line is drawn between "${drawn[0]}" and "${drawn[1]}"; the named sites are used`,
         f.pos,
@@ -249,11 +288,16 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
     }
     // A list of risk groups is read item by item (ids as written); a string is split at ";".
     const { source: _s, target: _t, from: _f, to: _to, id: _id, risk_groups: groupsRaw, ...rest } = raw;
-    const listedGroups = Array.isArray(groupsRaw) ? groupsRaw.map((g, k) => written(f, ['properties', 'risk_groups', k], g)).filter((g) => g !== '') : undefined;
+    const listedGroups = Array.isArray(groupsRaw)
+      ? groupsRaw.map((g, k) => written(f, ['properties', 'risk_groups', k], g)).filter((g) => g !== '')
+      : undefined;
     const mapped = mapLinkAttributes(
       listedGroups === undefined && groupsRaw !== undefined ? { ...rest, risk_groups: groupsRaw } : rest,
       b,
-      { pos: (k) => where(nodeAt(f.node, ['properties', k]), f.pos), text: (k) => (typeof raw[k] === 'number' ? written(f, ['properties', k], raw[k]) : undefined) },
+      {
+        pos: (k) => where(nodeAt(f.node, ['properties', k]), f.pos),
+        text: (k) => (typeof raw[k] === 'number' ? written(f, ['properties', k], raw[k]) : undefined),
+      },
     );
     if (listedGroups !== undefined) mapped.riskGroups = listedGroups;
     const measured = parts.reduce((s, p) => s + routeKm(p), 0);
@@ -269,11 +313,16 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
       pos: f.pos,
       ...mapped,
       ...(mapped.length === undefined ? { length: measured } : {}),
-      attrs: { ...mapped.attrs, route_km: Math.round(measured * 1000) / 1000, route: { type, coordinates: type === 'LineString' ? parts[0] : parts } },
+      attrs: {
+        ...mapped.attrs,
+        route_km: Math.round(measured * 1000) / 1000,
+        route: { type, coordinates: type === 'LineString' ? parts[0] : parts },
+      },
       what: `link features[${i}]`,
     });
     // A line drawn only to join two sites (route_known: false) says nothing about where the cable runs.
-    if (added && mapped.attrs[ROUTE_KNOWN] !== false) routes.push({ parts, linkIndex: linkCount, groups: mapped.riskGroups ?? [], pos: f.pos });
+    if (added && mapped.attrs[ROUTE_KNOWN] !== false)
+      routes.push({ parts, linkIndex: linkCount, groups: mapped.riskGroups ?? [], pos: f.pos });
     if (added) linkCount++;
   });
 
@@ -294,7 +343,10 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
       owner.push(k);
     }
   });
-  const seen = new Map<string, { a: number; b: number; km: number; from: readonly [number, number]; to: readonly [number, number] }>();
+  const seen = new Map<
+    string,
+    { a: number; b: number; km: number; from: readonly [number, number]; to: readonly [number, number] }
+  >();
   for (const c of sharedCorridors(flat, { withinM: CORRIDOR_WITHIN_M, minKm: 0 })) {
     const [a, z] = [owner[c.a], owner[c.b]];
     if (a === z) continue;
@@ -303,7 +355,9 @@ export function parseGeojson(text: string, file: string, options: BuilderOptions
     if (prev) prev.km += c.km;
     else seen.set(key, { a, b: z, km: c.km, from: c.from, to: c.to });
   }
-  const found = [...seen.values()].filter((c) => c.km > CORRIDOR_MIN_KM).sort((x, y) => y.km - x.km || x.a - y.a || x.b - y.b);
+  const found = [...seen.values()]
+    .filter((c) => c.km > CORRIDOR_MIN_KM)
+    .sort((x, y) => y.km - x.km || x.a - y.a || x.b - y.b);
   for (const c of found) {
     const [ra, rb] = [routes[c.a], routes[c.b]];
     if (ra.groups.some((g) => rb.groups.includes(g))) continue;

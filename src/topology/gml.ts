@@ -80,7 +80,11 @@ class GmlReader {
       this.skip();
       if (this.i >= t.length) {
         if (open) {
-          throw this.b.error('unclosed "[": the list is never closed with "]"', open, 'add the missing "]" (check the brackets above the end of the file)');
+          throw this.b.error(
+            'unclosed "[": the list is never closed with "]"',
+            open,
+            'add the missing "]" (check the brackets above the end of the file)',
+          );
         }
         return pairs;
       }
@@ -94,7 +98,12 @@ class GmlReader {
       const pos = this.here();
       KEY.lastIndex = this.i;
       const key = KEY.exec(t);
-      if (!key) throw this.b.error(`expected a key, found "${t[this.i]}"`, pos, 'GML is a list of `key value` pairs; keys are letters, digits and _');
+      if (!key)
+        throw this.b.error(
+          `expected a key, found "${t[this.i]}"`,
+          pos,
+          'GML is a list of `key value` pairs; keys are letters, digits and _',
+        );
       this.i += key[0].length;
       this.skip();
       pairs.push(this.readValue(key[0], pos));
@@ -104,11 +113,16 @@ class GmlReader {
   private readValue(key: string, pos: SourcePos): GmlPair {
     const t = this.text;
     const vpos = this.here();
-    if (this.i >= t.length) throw this.b.error(`key "${key}" has no value`, pos, 'give a number, a "string" or a [ list ]');
+    if (this.i >= t.length)
+      throw this.b.error(`key "${key}" has no value`, pos, 'give a number, a "string" or a [ list ]');
     const c = t[this.i];
     if (c === '[') {
       if (++this.depth > MAX_NESTING) {
-        throw this.b.error(`lists nest deeper than ${MAX_NESTING} levels`, vpos, 'a GML design needs a few levels (graph, node, graphics); flatten this structure');
+        throw this.b.error(
+          `lists nest deeper than ${MAX_NESTING} levels`,
+          vpos,
+          'a GML design needs a few levels (graph, node, graphics); flatten this structure',
+        );
       }
       this.i++;
       const value = this.readList(vpos);
@@ -157,13 +171,22 @@ function scalarId(p: GmlPair): string | undefined {
   return typeof p.value === 'number' ? p.raw : p.value;
 }
 
-export function parseGml(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'gml'): Topology {
+export function parseGml(
+  text: string,
+  file: string,
+  options: BuilderOptions = {},
+  format: DesignFormat = 'gml',
+): Topology {
   const b = new TopologyBuilder(file, format, options);
   const top = new GmlReader(text, b).readList();
   const graphs = top.filter((p) => p.key === 'graph');
   const graph = graphs[0];
   if (!graph || !Array.isArray(graph.value)) {
-    throw b.error('no "graph [ ... ]" list in this file', top[0]?.pos ?? { line: 1, column: 1 }, 'a GML design is `graph [ node [ id 1 ] ... edge [ source 1 target 2 ] ]`');
+    throw b.error(
+      'no "graph [ ... ]" list in this file',
+      top[0]?.pos ?? { line: 1, column: 1 },
+      'a GML design is `graph [ node [ id 1 ] ... edge [ source 1 target 2 ] ]`',
+    );
   }
   if (graphs.length > 1) {
     throw b.error(
@@ -208,7 +231,11 @@ function refuseNestedGraphs(pairs: GmlPair[], b: TopologyBuilder): void {
   for (const p of pairs) {
     if (!Array.isArray(p.value)) continue;
     if (p.key === 'graph') {
-      throw b.error('a nested graph: netbrace reads one flat graph per file', p.pos, 'list its nodes and edges in the top-level graph (node ids must stay unique)');
+      throw b.error(
+        'a nested graph: netbrace reads one flat graph per file',
+        p.pos,
+        'list its nodes and edges in the top-level graph (node ids must stay unique)',
+      );
     }
     refuseNestedGraphs(p.value, b);
   }
@@ -230,7 +257,11 @@ function bodyAttributes(body: GmlPair[], what: string, b: TopologyBuilder, read:
     const earlier = first.get(p.key);
     if (earlier !== undefined) {
       if (read(p.key)) {
-        throw b.error(`${what} has "${p.key}" twice (lines ${earlier.pos.line} and ${p.pos.line})`, p.pos, `keep one; the first is on line ${earlier.pos.line}`);
+        throw b.error(
+          `${what} has "${p.key}" twice (lines ${earlier.pos.line} and ${p.pos.line})`,
+          p.pos,
+          `keep one; the first is on line ${earlier.pos.line}`,
+        );
       }
       raw[p.key] = repeated.has(p.key) ? [...(raw[p.key] as unknown[]), value] : [raw[p.key], value];
       repeated.add(p.key);
@@ -245,7 +276,12 @@ function bodyAttributes(body: GmlPair[], what: string, b: TopologyBuilder, read:
 }
 
 function readNode(node: GmlPair, body: GmlPair[], b: TopologyBuilder): void {
-  const { raw, where, written, first } = bodyAttributes(body, `the node on line ${node.pos.line}`, b, (k) => k === 'id' || isNodeField(k));
+  const { raw, where, written, first } = bodyAttributes(
+    body,
+    `the node on line ${node.pos.line}`,
+    b,
+    (k) => k === 'id' || isNodeField(k),
+  );
   const idPair = first.get('id');
   if (idPair === undefined) throw b.error('node without "id"', node.pos, 'every GML node needs `id N`');
   const id = scalarId(idPair);
@@ -257,7 +293,12 @@ function readNode(node: GmlPair, body: GmlPair[], b: TopologyBuilder): void {
 
 function readEdge(edge: GmlPair, body: GmlPair[], b: TopologyBuilder, directed: boolean): void {
   const ends = (k: string) => k === 'id' || k === 'source' || k === 'target';
-  const { raw, where, written, first } = bodyAttributes(body, `the edge on line ${edge.pos.line}`, b, (k) => ends(k) || isLinkField(k));
+  const { raw, where, written, first } = bodyAttributes(
+    body,
+    `the edge on line ${edge.pos.line}`,
+    b,
+    (k) => ends(k) || isLinkField(k),
+  );
   const source = first.get('source');
   const target = first.get('target');
   const idPair = first.get('id');
@@ -267,7 +308,11 @@ function readEdge(edge: GmlPair, body: GmlPair[], b: TopologyBuilder, directed: 
   delete raw.source;
   delete raw.target;
   if (!source || !target) {
-    throw b.error(`edge without "${source ? 'target' : 'source'}"`, edge.pos, 'every GML edge needs `source N target M`');
+    throw b.error(
+      `edge without "${source ? 'target' : 'source'}"`,
+      edge.pos,
+      'every GML edge needs `source N target M`',
+    );
   }
   const s = scalarId(source);
   const d = scalarId(target);

@@ -44,7 +44,12 @@ function typed(text: string, type: string): unknown {
   }
 }
 
-export function parseGraphml(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'graphml'): Topology {
+export function parseGraphml(
+  text: string,
+  file: string,
+  options: BuilderOptions = {},
+  format: DesignFormat = 'graphml',
+): Topology {
   const b = new TopologyBuilder(file, format, options);
   const parser = new SaxesParser({ xmlns: false, position: true });
   const keys = new Map<string, KeyDef>();
@@ -96,7 +101,11 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
     const pos = tagStart;
     stack.push(name);
     if (stack.length > MAX_NESTING) {
-      throw b.error(`elements nest deeper than ${MAX_NESTING} levels`, pos, 'GraphML needs a few levels (graphml, graph, node, data); flatten this structure');
+      throw b.error(
+        `elements nest deeper than ${MAX_NESTING} levels`,
+        pos,
+        'GraphML needs a few levels (graphml, graph, node, data); flatten this structure',
+      );
     }
     if (dataKey !== undefined) {
       dataNested = true; // markup inside <data> (drawing tools): keep only plain text values
@@ -109,7 +118,11 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
       case 'key': {
         const id = attrs.id;
         if (id === undefined) throw b.error('<key> without an "id"', pos);
-        currentKey = { name: attrs['attr.name'] ?? id, domain: attrs.for ?? 'all', type: attrs['attr.type'] ?? 'string' };
+        currentKey = {
+          name: attrs['attr.name'] ?? id,
+          domain: attrs.for ?? 'all',
+          type: attrs['attr.type'] ?? 'string',
+        };
         keys.set(id, currentKey);
         break;
       }
@@ -133,7 +146,11 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
         break;
       case 'edge':
         if (attrs.source === undefined || attrs.target === undefined) {
-          throw b.error(`<edge> without a "${attrs.source === undefined ? 'source' : 'target'}"`, pos, 'every GraphML edge needs source="..." and target="..."');
+          throw b.error(
+            `<edge> without a "${attrs.source === undefined ? 'source' : 'target'}"`,
+            pos,
+            'every GraphML edge needs source="..." and target="..."',
+          );
         }
         if (attrs.directed === 'true') b.directed(pos, 'an edge has directed="true"');
         current = {
@@ -142,7 +159,9 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
           data: {},
           dataPos: new Map(),
           dataText: new Map(),
-          arc: attrs.directed === 'true' || (attrs.directed !== 'false' && directedGraphs[directedGraphs.length - 1] === true),
+          arc:
+            attrs.directed === 'true' ||
+            (attrs.directed !== 'false' && directedGraphs[directedGraphs.length - 1] === true),
         };
         edges.push(current);
         break;
@@ -206,7 +225,8 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
   });
 
   parser.write(text).close();
-  if (!sawRoot) throw b.error('no <graphml> element in this file', { line: 1, column: 1 }, 'is this really a GraphML file?');
+  if (!sawRoot)
+    throw b.error('no <graphml> element in this file', { line: 1, column: 1 }, 'is this really a GraphML file?');
 
   // Defaults from <key><default>, for elements that do not set the attribute themselves.
   const defaults = (domain: string) =>
@@ -221,7 +241,10 @@ export function parseGraphml(text: string, file: string, options: BuilderOptions
     }
     return el.data;
   };
-  const sourceOf = (el: Element) => ({ pos: (k: string) => el.dataPos.get(k) ?? el.pos, text: (k: string) => el.dataText.get(k) });
+  const sourceOf = (el: Element) => ({
+    pos: (k: string) => el.dataPos.get(k) ?? el.pos,
+    text: (k: string) => el.dataText.get(k),
+  });
 
   for (const n of nodes) {
     const mapped = mapNodeAttributes(withDefaults(n, nodeDefaults), b, sourceOf(n));

@@ -6,7 +6,18 @@
 // schema cannot say (ids unique, link and demand ends declared).
 
 import AjvModule, { type ErrorObject, type ValidateFunction } from 'ajv';
-import { isAlias, isCollection, isMap, isPair, isScalar, LineCounter, parseDocument, visit, type Document, type Node as YamlNode } from 'yaml';
+import {
+  isAlias,
+  isCollection,
+  isMap,
+  isPair,
+  isScalar,
+  LineCounter,
+  parseDocument,
+  visit,
+  type Document,
+  type Node as YamlNode,
+} from 'yaml';
 import schema from './design.schema.json' with { type: 'json' };
 import { DesignError } from '../errors.js';
 import type { DesignFormat, SourcePos, Topology } from './model.js';
@@ -64,7 +75,8 @@ class FastLocator implements Positions {
   pos(path: Path): SourcePos {
     const s = this.slot(path);
     if (s) return lineColumn(this.y.lineStarts, s.at);
-    const w = path.length === 0 && typeof this.y.data === 'object' && this.y.data ? this.y.start(this.y.data) : undefined;
+    const w =
+      path.length === 0 && typeof this.y.data === 'object' && this.y.data ? this.y.start(this.y.data) : undefined;
     return w !== undefined ? lineColumn(this.y.lineStarts, w) : { line: 1, column: 1 };
   }
 
@@ -156,7 +168,6 @@ class Locator implements Positions {
   }
 }
 
-
 /** `links[2].length_km` from ajv's `/links/2/length_km`. */
 function pathText(path: Path): string {
   let s = '';
@@ -210,13 +221,21 @@ function toDesignError(e: ErrorObject, file: string, loc: Positions): DesignErro
     case 'required': {
       const key = String(params.missingProperty);
       if (key === 'between' && path[0] === 'links') {
-        return new DesignError(`${what} has no ends: "between" is missing`, where(loc.pos(path)), 'write between: [node-a, node-b]');
+        return new DesignError(
+          `${what} has no ends: "between" is missing`,
+          where(loc.pos(path)),
+          'write between: [node-a, node-b]',
+        );
       }
       return new DesignError(`${what} is missing the required key "${key}"`, where(loc.pos(path)));
     }
     case 'type': {
       const want = TYPE_WORDS[String(params.type)] ?? String(params.type);
-      return new DesignError(`${what} must be ${want}, not ${describe(e.data)}`, where(loc.pos(path)), e.data === null ? 'give a value after the colon, or remove the key' : '');
+      return new DesignError(
+        `${what} must be ${want}, not ${describe(e.data)}`,
+        where(loc.pos(path)),
+        e.data === null ? 'give a value after the colon, or remove the key' : '',
+      );
     }
     case 'minItems':
     case 'maxItems': {
@@ -225,7 +244,9 @@ function toDesignError(e: ErrorObject, file: string, loc: Positions): DesignErro
         return new DesignError(
           `${what} needs exactly two node ids, found ${n}`,
           where(loc.pos(path)),
-          n < 2 ? 'a link end is missing: write between: [node-a, node-b]' : 'a link joins two nodes; write one link per pair',
+          n < 2
+            ? 'a link end is missing: write between: [node-a, node-b]'
+            : 'a link joins two nodes; write one link per pair',
         );
       }
       return new DesignError(`${what} ${e.message ?? 'has the wrong number of items'}`, where(loc.pos(path)));
@@ -233,11 +254,17 @@ function toDesignError(e: ErrorObject, file: string, loc: Positions): DesignErro
     case 'minimum':
     case 'exclusiveMinimum': {
       const limit = Number(params.limit);
-      const message = limit === 0 ? `${what} must not be negative (found ${String(e.data)})` : `${what} must be at least ${limit} (found ${String(e.data)})`;
+      const message =
+        limit === 0
+          ? `${what} must not be negative (found ${String(e.data)})`
+          : `${what} must be at least ${limit} (found ${String(e.data)})`;
       return new DesignError(message, where(loc.pos(path)));
     }
     case 'maximum':
-      return new DesignError(`${what} must be at most ${String(params.limit)} (found ${String(e.data)})`, where(loc.pos(path)));
+      return new DesignError(
+        `${what} must be at most ${String(params.limit)} (found ${String(e.data)})`,
+        where(loc.pos(path)),
+      );
     case 'minLength':
       return new DesignError(`${what} must not be empty`, where(loc.pos(path)));
     default:
@@ -254,7 +281,14 @@ function firstError(errors: readonly ErrorObject[], file: string, loc: Positions
 
 interface NativeDesign {
   network?: { name?: string; description?: string };
-  nodes: { id: string | number; label?: string; kind?: string; site?: { lat: number; lon: number }; hardened?: boolean; attributes?: Record<string, unknown> }[];
+  nodes: {
+    id: string | number;
+    label?: string;
+    kind?: string;
+    site?: { lat: number; lon: number };
+    hardened?: boolean;
+    attributes?: Record<string, unknown>;
+  }[];
   links?: {
     id?: string | number;
     between: [string | number, string | number];
@@ -272,7 +306,13 @@ interface NativeDesign {
   metadata?: Record<string, unknown>;
 }
 
-export function parseNative(text: string, file: string, options: BuilderOptions = {}, format: DesignFormat = 'native-yaml', fast = true): Topology {
+export function parseNative(
+  text: string,
+  file: string,
+  options: BuilderOptions = {},
+  format: DesignFormat = 'native-yaml',
+  fast = true,
+): Topology {
   // The fast reader first (fast-yaml.ts); it declines what it does not cover. Anything the
   // design gets wrong is then reported by the full reader below, so every message and
   // position a user sees comes from one place.
@@ -301,10 +341,18 @@ export function parseNative(text: string, file: string, options: BuilderOptions 
   if (doc.errors.length > 0) {
     const e = doc.errors[0];
     if (e.code === 'DUPLICATE_KEY') {
-      throw new DesignError(`${kindWord}: a key appears twice in the same mapping`, { file, ...loc.at(e.pos[0]) }, 'keep one of them');
+      throw new DesignError(
+        `${kindWord}: a key appears twice in the same mapping`,
+        { file, ...loc.at(e.pos[0]) },
+        'keep one of them',
+      );
     }
     const message = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
-    throw new DesignError(`${kindWord} syntax error: ${message}`, { file, ...loc.at(e.pos[0]) }, 'fix the syntax at this point (check indentation, colons and quotes)');
+    throw new DesignError(
+      `${kindWord} syntax error: ${message}`,
+      { file, ...loc.at(e.pos[0]) },
+      'fix the syntax at this point (check indentation, colons and quotes)',
+    );
   }
 
   let data: unknown;
@@ -329,9 +377,20 @@ export function parseNative(text: string, file: string, options: BuilderOptions 
     throw e;
   }
   if (data === null || data === undefined) {
-    throw new DesignError(`the ${kindWord} design is empty`, { file, line: 1, column: 1 }, 'a design needs at least `nodes:`');
+    throw new DesignError(
+      `the ${kindWord} design is empty`,
+      { file, line: 1, column: 1 },
+      'a design needs at least `nodes:`',
+    );
   }
-  return buildDesign(data, loc, doc.warnings.map((w) => ({ message: w.message, pos: loc.at(w.pos[0]) })), file, options, format);
+  return buildDesign(
+    data,
+    loc,
+    doc.warnings.map((w) => ({ message: w.message, pos: loc.at(w.pos[0]) })),
+    file,
+    options,
+    format,
+  );
 }
 
 /** The plain values of a design (from either reader) → its Topology, or a located error. */
@@ -347,18 +406,24 @@ function buildDesign(
   // Before the schema, which would call Infinity "not a number" without saying why.
   const odd = firstNonNormal(data, [], new Set(['metadata']));
   if (odd) {
-    throw new DesignError(`${pathText(odd.path)} ${odd.why}${loc.written(odd.path, ' (written ', ')')}`, { file, ...loc.pos(odd.path) }, 'write a plain decimal number');
+    throw new DesignError(
+      `${pathText(odd.path)} ${odd.why}${loc.written(odd.path, ' (written ', ')')}`,
+      { file, ...loc.pos(odd.path) },
+      'write a plain decimal number',
+    );
   }
   const check = validate();
   if (!check(data)) throw firstError(check.errors ?? [], file, loc);
   const d = data as NativeDesign;
   /** An id as written: `0x10` and `16` are two ids, and 12345678901234567890 keeps its digits. */
-  const idAt = (path: Path, v: string | number): string => (typeof v === 'string' ? v : (loc.source(path) ?? String(v)));
+  const idAt = (path: Path, v: string | number): string =>
+    typeof v === 'string' ? v : (loc.source(path) ?? String(v));
   /** A measured quantity, refused at its line when it is out of range (quantities.ts). */
   const quantity = (kind: Quantity, path: Path, v: number | undefined): number | undefined => {
     if (v === undefined) return undefined;
     const problem = quantityProblem(kind, v, loc.source(path));
-    if (problem) throw new DesignError(`${pathText(path)} ${problem.message}`, { file, ...loc.pos(path) }, problem.hint);
+    if (problem)
+      throw new DesignError(`${pathText(path)} ${problem.message}`, { file, ...loc.pos(path) }, problem.hint);
     return v;
   };
 
@@ -377,7 +442,11 @@ function buildDesign(
     });
   });
   (d.risk_groups ?? []).forEach((g, i) => {
-    b.addRiskGroup({ id: idAt(['risk_groups', i, 'id'], g.id), pos: loc.pos(['risk_groups', i]), ...(g.description !== undefined ? { description: g.description } : {}) });
+    b.addRiskGroup({
+      id: idAt(['risk_groups', i, 'id'], g.id),
+      pos: loc.pos(['risk_groups', i]),
+      ...(g.description !== undefined ? { description: g.description } : {}),
+    });
   });
   (d.links ?? []).forEach((l, i) => {
     const at = ['links', i];
@@ -406,10 +475,14 @@ function buildDesign(
   (d.demands ?? []).forEach((dm, i) => {
     const at = ['demands', i];
     const volume = quantity('volume', [...at, 'volume'], dm.volume)!;
-    b.addDemand(idAt([...at, 'between', 0], dm.between[0]), idAt([...at, 'between', 1], dm.between[1]), volume, loc.pos(at), [
-      loc.pos([...at, 'between', 0]),
-      loc.pos([...at, 'between', 1]),
-    ], `demands[${i}]`);
+    b.addDemand(
+      idAt([...at, 'between', 0], dm.between[0]),
+      idAt([...at, 'between', 1], dm.between[1]),
+      volume,
+      loc.pos(at),
+      [loc.pos([...at, 'between', 0]), loc.pos([...at, 'between', 1])],
+      `demands[${i}]`,
+    );
   });
 
   const t = b.finish({

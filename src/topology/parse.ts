@@ -3,7 +3,13 @@
 
 import { DesignError, LimitError } from '../errors.js';
 import { utf8Length } from '../decode.js';
-import { DEFAULT_MAX_BYTES, DEFAULT_MAX_ELEMENTS, type DesignFormat, type ParseOptions, type Topology } from './model.js';
+import {
+  DEFAULT_MAX_BYTES,
+  DEFAULT_MAX_ELEMENTS,
+  type DesignFormat,
+  type ParseOptions,
+  type Topology,
+} from './model.js';
 import { detectFormat, FORMAT_CHOICES } from './detect.js';
 import { parseNative } from './native.js';
 import { parseGml } from './gml.js';

@@ -42,7 +42,8 @@ export const QUANTITY_RANGE: Readonly<Record<Quantity, QuantityRange>> = {
 export function nonNormal(n: number): string | undefined {
   if (Number.isNaN(n)) return 'is not a number (NaN)';
   if (!Number.isFinite(n)) return 'is infinite (or too large for a number)';
-  if (n !== 0 && Math.abs(n) < MIN_NORMAL) return 'is so close to 0 that it cannot be computed with (a subnormal number)';
+  if (n !== 0 && Math.abs(n) < MIN_NORMAL)
+    return 'is so close to 0 that it cannot be computed with (a subnormal number)';
   return undefined;
 }
 
@@ -51,7 +52,11 @@ export function nonNormal(n: number): string | undefined {
  * The first number in a parsed document (design or policy) that is NaN, infinite or
  * subnormal, with its path; top-level keys in `skip` (free-form metadata) are not searched.
  */
-export function firstNonNormal(v: unknown, path: (string | number)[], skip?: ReadonlySet<string>): { path: (string | number)[]; why: string } | undefined {
+export function firstNonNormal(
+  v: unknown,
+  path: (string | number)[],
+  skip?: ReadonlySet<string>,
+): { path: (string | number)[]; why: string } | undefined {
   // One path array, extended and shortened in place: a large design has many numbers.
   if (typeof v === 'number') {
     const why = nonNormal(v);
@@ -70,21 +75,41 @@ export function firstNonNormal(v: unknown, path: (string | number)[], skip?: Rea
   return undefined;
 }
 
-export const fmt = (n: number): string => (Math.abs(n) >= 1e5 || (n !== 0 && Math.abs(n) < 1e-3) ? n.toExponential().replace('e+', 'e') : String(n));
+export const fmt = (n: number): string =>
+  Math.abs(n) >= 1e5 || (n !== 0 && Math.abs(n) < 1e-3) ? n.toExponential().replace('e+', 'e') : String(n);
 const shown = (n: number, unit: string) => `${fmt(n)}${unit ? ` ${unit}` : ''}`;
 
 /**
  * What is wrong with `value` as a `kind` (a sentence starting after its name, with a hint), or
  * undefined when it is fine. Negative values are refused; 0 is accepted.
  */
-export function quantityProblem(kind: Quantity, value: number, written?: string): { message: string; hint: string } | undefined {
-  const as = written !== undefined && written.trim() !== String(value) && written.trim() !== fmt(value) ? ` (written ${written.trim()})` : '';
+export function quantityProblem(
+  kind: Quantity,
+  value: number,
+  written?: string,
+): { message: string; hint: string } | undefined {
+  const as =
+    written !== undefined && written.trim() !== String(value) && written.trim() !== fmt(value)
+      ? ` (written ${written.trim()})`
+      : '';
   const bad = nonNormal(value);
   const r = QUANTITY_RANGE[kind];
   const range = `netbrace accepts 0 or ${shown(r.min, r.unit)} to ${shown(r.max, r.unit)}`;
-  if (bad) return { message: `${bad}${as}`, hint: Number.isFinite(value) ? `${range}; write 0 for none` : `${range}; check the unit` };
+  if (bad)
+    return {
+      message: `${bad}${as}`,
+      hint: Number.isFinite(value) ? `${range}; write 0 for none` : `${range}; check the unit`,
+    };
   if (value < 0) return { message: `must not be negative (${value})`, hint: range };
-  if (value > r.max) return { message: `is ${fmt(value)}${as}, above the limit of ${shown(r.max, r.unit)}`, hint: `${range}; check the unit` };
-  if (value > 0 && value < r.min) return { message: `is ${fmt(value)}${as}, below the smallest value accepted (${shown(r.min, r.unit)})`, hint: `${range}; write 0 for none` };
+  if (value > r.max)
+    return {
+      message: `is ${fmt(value)}${as}, above the limit of ${shown(r.max, r.unit)}`,
+      hint: `${range}; check the unit`,
+    };
+  if (value > 0 && value < r.min)
+    return {
+      message: `is ${fmt(value)}${as}, below the smallest value accepted (${shown(r.min, r.unit)})`,
+      hint: `${range}; write 0 for none`,
+    };
   return undefined;
 }

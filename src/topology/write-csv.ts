@@ -26,9 +26,11 @@ export function writeCsv(t: Topology): Written {
   losses.add('node attributes', 'node', t.nodes.filter((n) => Object.keys(n.attrs).length > 0).length);
   const order = firstAppearance(t);
   const kept = t.nodes.filter((n) => linked.has(n.id));
-  if (kept.some((n, i) => n.id !== order[i])) losses.add('the order of the nodes (read back in order of first appearance)');
+  if (kept.some((n, i) => n.id !== order[i]))
+    losses.add('the order of the nodes (read back in order of first appearance)');
   for (const n of t.nodes) {
-    if (n.id !== n.id.trim() || n.id === '') losses.add('node ids with spaces at either end (trimmed when read back)', 'node');
+    if (n.id !== n.id.trim() || n.id === '')
+      losses.add('node ids with spaces at either end (trimmed when read back)', 'node');
   }
 
   const derived = derivedIds(t);
@@ -43,7 +45,9 @@ export function writeCsv(t: Topology): Written {
   col('weight', (i) => t.links[i].weight);
   col('risk_groups', (i) => (t.links[i].riskGroups.length > 0 ? t.links[i].riskGroups.join(';') : undefined));
   col('hardened', (i) => (t.links[i].hardened ? 'true' : undefined));
-  for (const l of t.links) if (l.riskGroups.some((g) => g.includes(';'))) losses.add('risk group ids that hold ";" (split when read back)', 'link');
+  for (const l of t.links)
+    if (l.riskGroups.some((g) => g.includes(';')))
+      losses.add('risk group ids that hold ";" (split when read back)', 'link');
 
   // Attribute columns: plain values only, one column per name (header names are matched
   // without case, so a second spelling of a name is left out).

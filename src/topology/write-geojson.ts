@@ -19,10 +19,16 @@ type Position = [number, number];
 const NODE_RESERVED = new Set(['id', 'label', 'type', 'kind', 'hardened']);
 const LINK_RESERVED = new Set(['id', 'source', 'target', 'from', 'to']);
 /** A link attribute the reader would take for a field (the zoo's raw speed stays beside its capacity). */
-const linkReserved = (k: string) => LINK_RESERVED.has(k.toLowerCase()) || (isLinkField(k) && k.toLowerCase() !== 'linkspeedraw');
+const linkReserved = (k: string) =>
+  LINK_RESERVED.has(k.toLowerCase()) || (isLinkField(k) && k.toLowerCase() !== 'linkspeedraw');
 
 const isPosition = (p: unknown): p is Position =>
-  Array.isArray(p) && p.length >= 2 && typeof p[0] === 'number' && typeof p[1] === 'number' && Math.abs(p[0]) <= 180 && Math.abs(p[1]) <= 90;
+  Array.isArray(p) &&
+  p.length >= 2 &&
+  typeof p[0] === 'number' &&
+  typeof p[1] === 'number' &&
+  Math.abs(p[0]) <= 180 &&
+  Math.abs(p[1]) <= 90;
 
 /** A link's drawn route (a LineString or MultiLineString geometry), if it has a usable one. */
 function routeOf(v: unknown): { type: string; coordinates: unknown } | undefined {
@@ -30,14 +36,24 @@ function routeOf(v: unknown): { type: string; coordinates: unknown } | undefined
   const g = v as { type?: unknown; coordinates?: unknown };
   const line = (c: unknown) => Array.isArray(c) && c.length >= 2 && c.every(isPosition);
   if (g.type === 'LineString' && line(g.coordinates)) return { type: 'LineString', coordinates: g.coordinates };
-  if (g.type === 'MultiLineString' && Array.isArray(g.coordinates) && g.coordinates.length > 0 && g.coordinates.every(line)) return { type: 'MultiLineString', coordinates: g.coordinates };
+  if (
+    g.type === 'MultiLineString' &&
+    Array.isArray(g.coordinates) &&
+    g.coordinates.length > 0 &&
+    g.coordinates.every(line)
+  )
+    return { type: 'MultiLineString', coordinates: g.coordinates };
   return undefined;
 }
 
 export function writeGeojson(t: Topology): Written {
   const missing = t.nodes.filter((n) => n.lat === undefined || n.lon === undefined);
   if (missing.length > 0) {
-    const shown = missing.slice(0, 5).map((n) => `"${n.id}"`).join(', ') + (missing.length > 5 ? `, and ${missing.length - 5} more` : '');
+    const shown =
+      missing
+        .slice(0, 5)
+        .map((n) => `"${n.id}"`)
+        .join(', ') + (missing.length > 5 ? `, and ${missing.length - 5} more` : '');
     throw new DesignError(
       `cannot write GeoJSON: ${missing.length} of ${t.nodes.length} node${t.nodes.length === 1 ? '' : 's'} ha${missing.length === 1 ? 's' : 've'} no coordinates (${shown})`,
       { file: t.file, line: missing[0].pos.line, column: missing[0].pos.column },
@@ -49,7 +65,9 @@ export function writeGeojson(t: Topology): Written {
   const where = new Map(t.nodes.map((n) => [n.id, [n.lon!, n.lat!] as Position]));
   const features: string[] = [];
   const feature = (id: string | undefined, properties: Record<string, unknown>, geometry: object) =>
-    features.push(`    {"type": "Feature", ${id !== undefined ? `"id": ${JSON.stringify(id)}, ` : ''}"properties": ${JSON.stringify(properties)},\n     "geometry": ${JSON.stringify(geometry)}}`);
+    features.push(
+      `    {"type": "Feature", ${id !== undefined ? `"id": ${JSON.stringify(id)}, ` : ''}"properties": ${JSON.stringify(properties)},\n     "geometry": ${JSON.stringify(geometry)}}`,
+    );
 
   for (const n of t.nodes) {
     const p: Record<string, unknown> = {};
@@ -57,7 +75,8 @@ export function writeGeojson(t: Topology): Written {
     if (n.kind !== undefined) p.kind = n.kind;
     if (n.hardened) p.hardened = true;
     for (const [k, v] of Object.entries(n.attrs)) {
-      if (NODE_RESERVED.has(k.toLowerCase()) || (k.toLowerCase() === 'name' && n.label === undefined)) losses.add(`node attribute "${k}" (a name the GeoJSON reader takes for a field)`, 'node');
+      if (NODE_RESERVED.has(k.toLowerCase()) || (k.toLowerCase() === 'name' && n.label === undefined))
+        losses.add(`node attribute "${k}" (a name the GeoJSON reader takes for a field)`, 'node');
       else p[k] = v;
     }
     feature(n.id, p, { type: 'Point', coordinates: where.get(n.id) });
@@ -86,9 +105,18 @@ export function writeGeojson(t: Topology): Written {
       p[ROUTE_KNOWN] = false;
     }
     feature(undefined, p, route ?? { type: 'LineString', coordinates: [where.get(l.source), where.get(l.target)] });
-    if (l.length === undefined) losses.add('unknown lengths (the reader measures every line: a link without a length gets the length of its line)', 'link');
+    if (l.length === undefined)
+      losses.add(
+        'unknown lengths (the reader measures every line: a link without a length gets the length of its line)',
+        'link',
+      );
   });
-  const notes = straight > 0 ? [`${straight} link${straight === 1 ? ' is' : 's are'} drawn as straight lines between their sites (no route was known): they do not show where the cables run, are marked ${ROUTE_KNOWN}: false and take no part in the search for shared corridors`] : [];
+  const notes =
+    straight > 0
+      ? [
+          `${straight} link${straight === 1 ? ' is' : 's are'} drawn as straight lines between their sites (no route was known): they do not show where the cables run, are marked ${ROUTE_KNOWN}: false and take no part in the search for shared corridors`,
+        ]
+      : [];
 
   const head: string[] = ['{', '  "type": "FeatureCollection",'];
   if (t.name !== undefined) head.push(`  "name": ${JSON.stringify(t.name)},`);

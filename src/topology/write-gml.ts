@@ -66,10 +66,19 @@ export function writeGml(t: Topology): Written {
   designLosses(t, losses, { metadata: true, name: true });
   const out: string[] = ['graph ['];
   const flagsAsNumbers = new Set<string>();
-  const put = (key: string, v: unknown, indent: string, what: string, written: Set<string>, mapped: (k: string) => boolean) => {
-    if (written.has(key.toLowerCase())) return void losses.add(`${what} attribute "${key}" (the name of a field netbrace writes)`, what);
+  const put = (
+    key: string,
+    v: unknown,
+    indent: string,
+    what: string,
+    written: Set<string>,
+    mapped: (k: string) => boolean,
+  ) => {
+    if (written.has(key.toLowerCase()))
+      return void losses.add(`${what} attribute "${key}" (the name of a field netbrace writes)`, what);
     // A repeated key that the reader maps would be refused there.
-    if (Array.isArray(v) && mapped(key)) return void losses.add(`${what} attribute "${key}" (a list under a name netbrace reads)`, what);
+    if (Array.isArray(v) && mapped(key))
+      return void losses.add(`${what} attribute "${key}" (a list under a name netbrace reads)`, what);
     const p = pair(key, v, indent);
     if ('why' in p) return void losses.add(`${what} attribute "${key}" (${p.why})`, what);
     if (typeof v === 'boolean') flagsAsNumbers.add(`${what} attribute "${key}"`);
@@ -78,7 +87,9 @@ export function writeGml(t: Topology): Written {
   };
 
   // Readers that build simple graphs drop parallel links unless the file says it has them.
-  const pairs = new Set(t.links.map((l) => (l.source <= l.target ? `${l.source}\u0000${l.target}` : `${l.target}\u0000${l.source}`)));
+  const pairs = new Set(
+    t.links.map((l) => (l.source <= l.target ? `${l.source}\u0000${l.target}` : `${l.target}\u0000${l.source}`)),
+  );
   if (pairs.size < t.links.length) out.push('  multigraph 1');
   const graphKeys = new Set(['node', 'edge', 'directed', 'multigraph']);
   if (t.name !== undefined) {
@@ -91,7 +102,8 @@ export function writeGml(t: Topology): Written {
   }
   for (const [k, v] of Object.entries(t.metadata)) {
     if (graphKeys.has(k.toLowerCase())) {
-      if (!(k === 'label' && v === t.name) && !(k === 'description' && v === t.description)) losses.add(`design metadata "${k}" (a key GML uses itself)`);
+      if (!(k === 'label' && v === t.name) && !(k === 'description' && v === t.description))
+        losses.add(`design metadata "${k}" (a key GML uses itself)`);
       continue;
     }
     put(k, v, '  ', 'design metadata', graphKeys, () => false);
@@ -133,10 +145,12 @@ export function writeGml(t: Topology): Written {
     if (l.weight !== undefined) field('weight', numberText(l.weight));
     if (l.riskGroups.length > 0) {
       field('risk_groups', gmlString(l.riskGroups.join(';')));
-      if (l.riskGroups.some((g) => g.includes(';'))) losses.add('risk group ids that hold ";" (split when read back)', 'link');
+      if (l.riskGroups.some((g) => g.includes(';')))
+        losses.add('risk group ids that hold ";" (split when read back)', 'link');
     }
     if (l.hardened) field('hardened', '1');
-    for (const [k, v] of Object.entries(l.attrs)) put(k, v, '    ', 'link', written, (k) => isLinkField(k) || k === 'id' || k === 'source' || k === 'target');
+    for (const [k, v] of Object.entries(l.attrs))
+      put(k, v, '    ', 'link', written, (k) => isLinkField(k) || k === 'id' || k === 'source' || k === 'target');
     out.push('  ]');
   });
   out.push(']', '');

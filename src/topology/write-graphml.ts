@@ -6,9 +6,23 @@
 // left out, and so are demands, risk group descriptions and the latency budget.
 
 import type { Topology } from './model.js';
-import { attributeColumns, derivedIds, designLosses, Losses, numberText, type ValueKind, type Written } from './write-shared.js';
+import {
+  attributeColumns,
+  derivedIds,
+  designLosses,
+  Losses,
+  numberText,
+  type ValueKind,
+  type Written,
+} from './write-shared.js';
 
-const XML_ESCAPES: Readonly<Record<string, string>> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' };
+const XML_ESCAPES: Readonly<Record<string, string>> = {
+  '&': '&amp;',
+  '<': '&lt;',
+  '>': '&gt;',
+  '"': '&quot;',
+  "'": '&apos;',
+};
 /** Characters XML 1.0 cannot hold at all, even escaped (§2.2). */
 const NOT_XML = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]/;
 
@@ -65,14 +79,25 @@ export function writeGraphml(t: Topology): Written {
       for (const [k, v] of Object.entries(attrs[i])) {
         if (!plain(v)) losses.add(`${what} attribute "${k}" (a list or map)`, what);
         else if (v === null) losses.add(`${what} attribute "${k}" (empty)`, what);
-        else if (taken.has(k.toLowerCase())) losses.add(`${what} attribute "${k}" (the name of a field netbrace writes)`, what);
+        else if (taken.has(k.toLowerCase()))
+          losses.add(`${what} attribute "${k}" (the name of a field netbrace writes)`, what);
         else row[k] = v;
       }
     });
   };
-  addAttrs(nodeRows, t.nodes.map((n) => n.attrs), 'node');
-  addAttrs(linkRows, t.links.map((l) => l.attrs), 'link');
-  for (const l of t.links) if (l.riskGroups.some((g) => g.includes(';'))) losses.add('risk group ids that hold ";" (split when read back)', 'link');
+  addAttrs(
+    nodeRows,
+    t.nodes.map((n) => n.attrs),
+    'node',
+  );
+  addAttrs(
+    linkRows,
+    t.links.map((l) => l.attrs),
+    'link',
+  );
+  for (const l of t.links)
+    if (l.riskGroups.some((g) => g.includes(';')))
+      losses.add('risk group ids that hold ";" (split when read back)', 'link');
 
   const graphRow: Record<string, unknown> = {};
   if (t.name !== undefined) graphRow.label = t.name;
@@ -80,7 +105,8 @@ export function writeGraphml(t: Topology): Written {
   for (const [k, v] of Object.entries(t.metadata)) {
     if (!plain(v) || v === null) losses.add(`design metadata "${k}" (a list or map)`);
     else if (k in graphRow) {
-      if (graphRow[k] !== v) losses.add(`design metadata "${k}" (the network's ${k === 'label' ? 'name' : k} is written there)`);
+      if (graphRow[k] !== v)
+        losses.add(`design metadata "${k}" (the network's ${k === 'label' ? 'name' : k} is written there)`);
     } else graphRow[k] = v;
   }
 
@@ -89,7 +115,8 @@ export function writeGraphml(t: Topology): Written {
     [...attributeColumns(rows)].map(([name, kinds], i) => {
       const c = { id: `${prefix}${i}`, name, type: attrType(kinds) };
       keys.push(`  <key id="${c.id}" for="${domain}" attr.name="${esc(name)}" attr.type="${c.type}"/>`);
-      if (c.type === 'string' && [...kinds].some((k) => k !== 'string')) losses.add(`the type of ${domain} attribute "${name}" (numbers and text mixed: all written as text)`);
+      if (c.type === 'string' && [...kinds].some((k) => k !== 'string'))
+        losses.add(`the type of ${domain} attribute "${name}" (numbers and text mixed: all written as text)`);
       return c;
     });
   const gCols = columns('graph', 'g', [graphRow]);
@@ -115,7 +142,11 @@ export function writeGraphml(t: Topology): Written {
     const mark = body.length;
     data(nCols, nodeRows[i], '      ');
     inner.push(...body.splice(mark));
-    body.push(inner.length > 0 ? `    <node id="${esc(n.id)}">\n${inner.join('\n')}\n    </node>` : `    <node id="${esc(n.id)}"/>`);
+    body.push(
+      inner.length > 0
+        ? `    <node id="${esc(n.id)}">\n${inner.join('\n')}\n    </node>`
+        : `    <node id="${esc(n.id)}"/>`,
+    );
   });
   const derived = derivedIds(t);
   t.links.forEach((l, i) => {

@@ -12,7 +12,10 @@ import type { Topology } from './model.js';
 export function nativeDocument(t: Topology): Record<string, unknown> {
   const doc: Record<string, unknown> = {};
   if (t.name !== undefined || t.description !== undefined) {
-    doc.network = { ...(t.name !== undefined ? { name: t.name } : {}), ...(t.description !== undefined ? { description: t.description } : {}) };
+    doc.network = {
+      ...(t.name !== undefined ? { name: t.name } : {}),
+      ...(t.description !== undefined ? { description: t.description } : {}),
+    };
   }
   if (t.latencyBudget !== undefined) doc.latency_budget = t.latencyBudget;
   doc.nodes = t.nodes.map((n) => ({
@@ -34,7 +37,11 @@ export function nativeDocument(t: Topology): Record<string, unknown> {
     ...(l.hardened ? { hardened: true } : {}),
     ...(Object.keys(l.attrs).length > 0 ? { attributes: l.attrs } : {}),
   }));
-  if (t.riskGroups.length > 0) doc.risk_groups = t.riskGroups.map((r) => ({ id: r.id, ...(r.description !== undefined ? { description: r.description } : {}) }));
+  if (t.riskGroups.length > 0)
+    doc.risk_groups = t.riskGroups.map((r) => ({
+      id: r.id,
+      ...(r.description !== undefined ? { description: r.description } : {}),
+    }));
   if (t.demands.length > 0) doc.demands = t.demands.map((d) => ({ between: [d.source, d.target], volume: d.volume }));
   if (Object.keys(t.metadata).length > 0) doc.metadata = t.metadata;
   return doc;
@@ -56,9 +63,17 @@ export function writeNativeYaml(t: Topology, comment?: string): string {
       if (isPair(pair) && isScalar(pair.key) && pair.key.value === 'site' && isMap(pair.value)) pair.value.flow = true;
     },
     Seq(_, seq) {
-      if (seq.items.length <= 16 && seq.items.every((i) => isScalar(i) || (isSeq(i) && i.items.every((j) => isScalar(j))))) seq.flow = true;
+      if (
+        seq.items.length <= 16 &&
+        seq.items.every((i) => isScalar(i) || (isSeq(i) && i.items.every((j) => isScalar(j))))
+      )
+        seq.flow = true;
     },
   });
-  if (comment !== undefined) doc.commentBefore = comment.split('\n').map((s) => ` ${s}`).join('\n');
+  if (comment !== undefined)
+    doc.commentBefore = comment
+      .split('\n')
+      .map((s) => ` ${s}`)
+      .join('\n');
   return doc.toString({ lineWidth: 0, flowCollectionPadding: false });
 }

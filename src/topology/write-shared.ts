@@ -31,14 +31,19 @@ export class Losses {
 }
 
 /** The design-level things only our own format holds, as losses for a format without them. */
-export function designLosses(t: Topology, losses: Losses, has: { demands?: boolean; groups?: boolean; budget?: boolean; metadata?: boolean; name?: boolean } = {}): void {
+export function designLosses(
+  t: Topology,
+  losses: Losses,
+  has: { demands?: boolean; groups?: boolean; budget?: boolean; metadata?: boolean; name?: boolean } = {},
+): void {
   if (!has.demands && t.demands.length > 0) losses.add('demands', 'demand', t.demands.length);
   if (!has.groups) {
     const described = t.riskGroups.filter((g) => g.description !== undefined).length;
     losses.add('risk group descriptions', 'group', described);
   }
   if (!has.budget && t.latencyBudget !== undefined) losses.add(`the latency budget (${t.latencyBudget})`);
-  if (!has.metadata && Object.keys(t.metadata).length > 0) losses.add('the design\u2019s metadata', 'key', Object.keys(t.metadata).length);
+  if (!has.metadata && Object.keys(t.metadata).length > 0)
+    losses.add('the design\u2019s metadata', 'key', Object.keys(t.metadata).length);
   if (!has.name && t.name !== undefined) losses.add(`the network\u2019s name ("${t.name}")`);
   if (!has.name && t.description !== undefined) losses.add('the network\u2019s description');
 }

@@ -135,11 +135,18 @@ beforeAll(() => {
   git(author, 'checkout', '-q', '--detach', base);
   const parts = commit(author, 'retire one span in every design', {
     [DESIGN]: ring([], CHAIN_DROP),
-    'nets/metro-a.net.yaml': ring([['harbour', 'weir'], ['mill', 'moor']]),
-    'nets/metro-b.net.yaml': ring([['mill', 'orchard'], ['quarry', 'ferry']]),
+    'nets/metro-a.net.yaml': ring([
+      ['harbour', 'weir'],
+      ['mill', 'moor'],
+    ]),
+    'nets/metro-b.net.yaml': ring([
+      ['mill', 'orchard'],
+      ['quarry', 'ferry'],
+    ]),
     'nets/metro-c.net.yaml': ring([['quarry', 'moor']], CHAIN_DROP),
   });
-  for (const [name, sha] of Object.entries({ fail, pass, readme, parts })) git(author, 'push', '-q', origin, `${sha}:refs/heads/${name}`);
+  for (const [name, sha] of Object.entries({ fail, pass, readme, parts }))
+    git(author, 'push', '-q', origin, `${sha}:refs/heads/${name}`);
   scenario = { root, origin, base, fail, pass, readme, parts };
 }, 120_000);
 
@@ -184,22 +191,40 @@ function prInputs(over: Record<string, string> = {}): Record<string, string> {
   return { ...actionDefaults(TOKEN), ...netbraceInputs('pull-request', 'netbrace'), ...over };
 }
 
-function run(ws: string, eventName: string, event: unknown, inputs: Record<string, string>, sha?: string): Promise<RunResult> {
-  return runAction({ workspace: ws, runnerTemp: path.join(work, 'runner-temp'), eventName, event, inputs, apiUrl: api.url, ...(sha ? { sha } : {}) });
+function run(
+  ws: string,
+  eventName: string,
+  event: unknown,
+  inputs: Record<string, string>,
+  sha?: string,
+): Promise<RunResult> {
+  return runAction({
+    workspace: ws,
+    runnerTemp: path.join(work, 'runner-temp'),
+    eventName,
+    event,
+    inputs,
+    apiUrl: api.url,
+    ...(sha ? { sha } : {}),
+  });
 }
 
 function actionOutputs(): Record<string, unknown> {
-  return (parseYaml(readFileSync(path.join(repoRoot, 'action.yml'), 'utf8')) as { outputs: Record<string, unknown> }).outputs;
+  return (parseYaml(readFileSync(path.join(repoRoot, 'action.yml'), 'utf8')) as { outputs: Record<string, unknown> })
+    .outputs;
 }
 
 function failedMessages(r: RunResult): string[] {
   // core.setFailed writes one ::error:: without properties.
-  return commands(r.stdout, 'error').filter((c) => Object.keys(c.props).length === 0).map((c) => c.message);
+  return commands(r.stdout, 'error')
+    .filter((c) => Object.keys(c.props).length === 0)
+    .map((c) => c.message);
 }
 
 describe('the runtime', () => {
   it('the bundle runs under the Node.js action.yml declares when CI provides it, else under this process\u2019s', () => {
-    const declared = (parseYaml(readFileSync(path.join(repoRoot, 'action.yml'), 'utf8')) as { runs: { using: string } }).runs.using;
+    const declared = (parseYaml(readFileSync(path.join(repoRoot, 'action.yml'), 'utf8')) as { runs: { using: string } })
+      .runs.using;
     const version = execFileSync(actionNode(), ['--version'], { encoding: 'utf8' }).trim();
     if (process.env.NETBRACE_ACTION_NODE) expect(`node${version.replace(/^v(\d+).*$/, '$1')}`).toBe(declared);
     else expect(version).toBe(process.version);
@@ -215,20 +240,30 @@ describe('the README workflow is what the Action accepts', () => {
       ['parts', 'part', { 'matrix.part': '1' }],
       ['parts', 'decide', {}],
     ] as const) {
-      for (const name of Object.keys(netbraceInputs(wf, job, values))) expect(declared.has(name), `${wf}/${job}: ${name}`).toBe(true);
+      for (const name of Object.keys(netbraceInputs(wf, job, values)))
+        expect(declared.has(name), `${wf}/${job}: ${name}`).toBe(true);
     }
-    expect(readmeWorkflow('pull-request').permissions).toEqual({ contents: 'read', 'pull-requests': 'write', 'security-events': 'write' });
+    expect(readmeWorkflow('pull-request').permissions).toEqual({
+      contents: 'read',
+      'pull-requests': 'write',
+      'security-events': 'write',
+    });
     expect(readmeWorkflow('fork-comment').permissions).toEqual({ actions: 'read', 'pull-requests': 'write' });
   });
 });
 
 describe('pull requests', () => {
   it('the workflow "netbrace init --workflow" writes blocks a weakening pull request', async () => {
-    const wf = parseYaml(workflowText({ action: `acme/netbrace@${'b'.repeat(40)}`, version: 'v0', policyPath: '.netbrace.yaml' })) as {
+    const wf = parseYaml(
+      workflowText({ action: `acme/netbrace@${'b'.repeat(40)}`, version: 'v0', policyPath: '.netbrace.yaml' }),
+    ) as {
       jobs: { netbrace: { steps: { uses?: string; with?: Record<string, unknown> }[] } };
     };
     const step = wf.jobs.netbrace.steps.find((s) => s.uses?.includes('/netbrace@'))!;
-    const inputs = { ...actionDefaults(TOKEN), ...Object.fromEntries(Object.entries(step.with ?? {}).map(([k, v]) => [k, String(v)])) };
+    const inputs = {
+      ...actionDefaults(TOKEN),
+      ...Object.fromEntries(Object.entries(step.with ?? {}).map(([k, v]) => [k, String(v)])),
+    };
     const ws = checkout(scenario.fail, { shallow: false }); // the workflow's fetch-depth: 0
     const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), inputs);
     expect(r.code, r.stdout + r.stderr).toBe(1);
@@ -239,7 +274,9 @@ describe('pull requests', () => {
     const ws = checkout(scenario.fail, { shallow: false });
     const r1 = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs());
     expect(r1.code, r1.stdout + r1.stderr).toBe(1);
-    expect(failedMessages(r1)).toEqual([expect.stringMatching(/^netbrace blocks this merge: 1 design (weakened|below a floor)/)]);
+    expect(failedMessages(r1)).toEqual([
+      expect.stringMatching(/^netbrace blocks this merge: 1 design (weakened|below a floor)/),
+    ]);
     // Annotations: errors on the design file, at lines of the ring's elements.
     const errors = commands(r1.stdout, 'error').filter((c) => c.props.file);
     expect(errors.length).toBeGreaterThan(0);
@@ -255,7 +292,13 @@ describe('pull requests', () => {
     }
     expect(errors.some((e) => /^netbrace: new (bridge|cut node)$/.test(e.props.title))).toBe(true);
     // Outputs.
-    expect(r1.outputs).toMatchObject({ verdict: 'fail', designs: '1', report: '.netbrace-out/netbrace-report.json', sarif: '.netbrace-out/netbrace.sarif', html: '.netbrace-out/netbrace-report.html' });
+    expect(r1.outputs).toMatchObject({
+      verdict: 'fail',
+      designs: '1',
+      report: '.netbrace-out/netbrace-report.json',
+      sarif: '.netbrace-out/netbrace.sarif',
+      html: '.netbrace-out/netbrace-report.html',
+    });
     expect(Number(r1.outputs['count-weakened']) + Number(r1.outputs['count-below-floor'])).toBe(1);
     expect(Object.keys(r1.outputs).sort()).toEqual(Object.keys(actionOutputs()).sort());
     // Summary.
@@ -282,7 +325,14 @@ describe('pull requests', () => {
     const ws2 = path.join(work, 'ws2');
     git(work, 'clone', '-q', `file://${scenario.origin}`, ws2);
     git(ws2, 'checkout', '-q', '--detach', scenario.pass);
-    const r2 = await runAction({ workspace: ws2, runnerTemp: path.join(work, 'rt2'), eventName: 'pull_request', event: prEvent(scenario.base, scenario.pass), inputs: prInputs(), apiUrl: api.url });
+    const r2 = await runAction({
+      workspace: ws2,
+      runnerTemp: path.join(work, 'rt2'),
+      eventName: 'pull_request',
+      event: prEvent(scenario.base, scenario.pass),
+      inputs: prInputs(),
+      apiUrl: api.url,
+    });
     expect(r2.code, r2.stdout + r2.stderr).toBe(0);
     expect(r2.outputs.verdict).toBe('pass');
     expect(api.comments).toHaveLength(1);
@@ -307,7 +357,12 @@ describe('pull requests', () => {
   it('fork: the read-only token\u2019s 403 is a warning; summary, annotations and verdict stand', async () => {
     api.writes = 'forbidden';
     const ws = checkout(scenario.fail, { shallow: false });
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'every-run' }));
+    const r = await run(
+      ws,
+      'pull_request',
+      prEvent(scenario.base, scenario.fail, true),
+      prInputs({ comment: 'every-run' }),
+    );
     expect(r.code).toBe(1);
     expect(r.outputs.verdict).toBe('fail');
     expect(failedMessages(r)).toHaveLength(1);
@@ -319,7 +374,12 @@ describe('pull requests', () => {
 
   it('fork, two workflows: the pull_request run uploads the report, the workflow_run run posts it', async () => {
     const ws = checkout(scenario.fail, { shallow: false });
-    const first = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail, true), prInputs({ comment: 'off' }));
+    const first = await run(
+      ws,
+      'pull_request',
+      prEvent(scenario.base, scenario.fail, true),
+      prInputs({ comment: 'off' }),
+    );
     expect(first.code).toBe(1);
     expect(api.requests).toEqual([]);
     // upload-artifact / download-artifact: the .netbrace-out folder, plus the pr-number file.
@@ -327,11 +387,23 @@ describe('pull requests', () => {
     const second = path.join(work, 'comment-ws');
     cpSync(path.join(ws, '.netbrace-out'), path.join(second, 'netbrace-untrusted'), { recursive: true });
     writeFileSync(path.join(second, 'netbrace-untrusted', 'pr-number'), '7\n');
-    const number = readFileSync(path.join(second, 'netbrace-untrusted', 'pr-number'), 'utf8').slice(0, 16).replace(/[^0-9]/g, '');
+    const number = readFileSync(path.join(second, 'netbrace-untrusted', 'pr-number'), 'utf8')
+      .slice(0, 16)
+      .replace(/[^0-9]/g, '');
     api.prHeadSha = scenario.fail;
-    const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('fork-comment', 'comment', { 'steps.pr.outputs.number': number }) };
+    const inputs = {
+      ...actionDefaults(TOKEN),
+      ...netbraceInputs('fork-comment', 'comment', { 'steps.pr.outputs.number': number }),
+    };
     const event = { workflow_run: { id: 99, event: 'pull_request', head_sha: scenario.fail } };
-    const r = await runAction({ workspace: second, runnerTemp: path.join(work, 'rt-comment'), eventName: 'workflow_run', event, inputs, apiUrl: api.url });
+    const r = await runAction({
+      workspace: second,
+      runnerTemp: path.join(work, 'rt-comment'),
+      eventName: 'workflow_run',
+      event,
+      inputs,
+      apiUrl: api.url,
+    });
     expect(r.code, r.stdout + r.stderr).toBe(0); // inform: the first run decided
     expect(api.comments).toHaveLength(1);
     expect(api.comments[0].body).toMatch(/netbrace blocks this merge|inform mode, so the merge is not blocked/);
@@ -339,7 +411,14 @@ describe('pull requests', () => {
     // A report about another commit is not posted.
     api.comments.length = 0;
     api.prHeadSha = scenario.pass;
-    const r2 = await runAction({ workspace: second, runnerTemp: path.join(work, 'rt-comment2'), eventName: 'workflow_run', event, inputs, apiUrl: api.url });
+    const r2 = await runAction({
+      workspace: second,
+      runnerTemp: path.join(work, 'rt-comment2'),
+      eventName: 'workflow_run',
+      event,
+      inputs,
+      apiUrl: api.url,
+    });
     expect(r2.code).toBe(0);
     expect(api.comments).toHaveLength(0);
     expect(commands(r2.stdout, 'warning').some((c) => /no comment: pull request #7 is at/.test(c.message))).toBe(true);
@@ -384,7 +463,9 @@ describe('errors', () => {
   it('a broken policy: one failure message with its line, an annotation on the policy, in inform mode too', async () => {
     const author = path.join(work, 'broken-policy');
     git(work, 'clone', '-q', `file://${scenario.origin}`, author);
-    const base = commit(author, 'typo in the policy', { '.netbrace.yaml': POLICY.replace('realizations: 40', 'realisations: 40') });
+    const base = commit(author, 'typo in the policy', {
+      '.netbrace.yaml': POLICY.replace('realizations: 40', 'realisations: 40'),
+    });
     const head = commit(author, 'chain', { [DESIGN]: ring([], CHAIN_DROP) });
     const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ mode: 'inform' }));
     expect(r.code).toBe(1);
@@ -433,7 +514,12 @@ describe('a pull request that edits the workflow running netbrace', () => {
     expect(onWorkflow.map((c) => c.message).join('\n')).toMatch(/policy-source base → head/);
     const report = JSON.parse(readFileSync(path.join(author, r.outputs.report), 'utf8')) as Report;
     expect(report.configuration?.workflow).toBe(WORKFLOW);
-    expect(report.configuration?.changes.filter((c) => c.weakens).map((c) => c.setting).sort()).toEqual(['mode', 'policy-source']);
+    expect(
+      report.configuration?.changes
+        .filter((c) => c.weakens)
+        .map((c) => c.setting)
+        .sort(),
+    ).toEqual(['mode', 'policy-source']);
     // The base's settings stayed in force: the base's policy judged the change, the head's
     // (`requirements: []`) is only reported.
     expect(report.policy.revision).toBe(base);
@@ -445,7 +531,10 @@ describe('a pull request that edits the workflow running netbrace', () => {
 
 describe('the organisation policy from a second checkout', () => {
   // The organisation's policy: the tests' policy plus an N−1 floor of its own.
-  const ORG_TEXT = POLICY.replace('    challenge: node-failures\n', '    challenge: node-failures\n  - kind: n-1\n    element: link\n    min: 0.2\n');
+  const ORG_TEXT = POLICY.replace(
+    '    challenge: node-failures\n',
+    '    challenge: node-failures\n  - kind: n-1\n    element: link\n    min: 0.2\n',
+  );
   function withOrg(ws: string): void {
     mkdirSync(path.join(ws, 'org-policy'), { recursive: true });
     writeFileSync(path.join(ws, 'org-policy', 'org.yaml'), ORG_TEXT);
@@ -454,21 +543,33 @@ describe('the organisation policy from a second checkout', () => {
   it('a team policy that does not inherit it fails the step, naming both files', async () => {
     const ws = checkout(scenario.fail, { shallow: false });
     withOrg(ws);
-    const r = await run(ws, 'pull_request', prEvent(scenario.base, scenario.fail), prInputs({ 'org-policy': 'org-policy/org.yaml' }));
+    const r = await run(
+      ws,
+      'pull_request',
+      prEvent(scenario.base, scenario.fail),
+      prInputs({ 'org-policy': 'org-policy/org.yaml' }),
+    );
     expect(r.code).not.toBe(0);
-    expect(failedMessages(r)[0]).toContain('.netbrace.yaml does not inherit the organisation policy org-policy/org.yaml');
+    expect(failedMessages(r)[0]).toContain(
+      '.netbrace.yaml does not inherit the organisation policy org-policy/org.yaml',
+    );
   });
 
   it('a team policy that inherits it is judged under the organisation\u2019s floor too', async () => {
     const author = path.join(work, 'author');
     git(work, 'clone', '-q', `file://${scenario.origin}`, author);
-    const base = commit(author, 'inherit the organisation policy', { '.netbrace.yaml': 'inherits: org-policy/org.yaml\nrequirements:\n  - kind: no-new-spof\n' });
+    const base = commit(author, 'inherit the organisation policy', {
+      '.netbrace.yaml': 'inherits: org-policy/org.yaml\nrequirements:\n  - kind: no-new-spof\n',
+    });
     const head = commit(author, 'chain', { [DESIGN]: ring([], CHAIN_DROP) });
     withOrg(author);
     const r = await run(author, 'pull_request', prEvent(base, head), prInputs({ 'org-policy': 'org-policy/org.yaml' }));
     expect(r.code, r.stdout + r.stderr).not.toBe(2);
     expect(r.outputs.report, r.stdout + r.stderr).toBeTruthy();
-    const report = JSON.parse(readFileSync(path.join(author, r.outputs.report), 'utf8')) as { policy: { files: string[] }; files: { requirements: { id: string; threshold: number | null }[] }[] };
+    const report = JSON.parse(readFileSync(path.join(author, r.outputs.report), 'utf8')) as {
+      policy: { files: string[] };
+      files: { requirements: { id: string; threshold: number | null }[] }[];
+    };
     expect(report.policy.files).toEqual(['.netbrace.yaml', 'org-policy/org.yaml']);
     expect(report.files[0].requirements.some((q) => q.id.startsWith('n-1') && q.threshold === 0.2)).toBe(true);
   }, 30_000);
@@ -478,8 +579,17 @@ describe('hostile element ids', () => {
   it('cannot forge workflow commands, markup or mentions in any view', async () => {
     const ids = ['::warning::forged', '<img src=x onerror=alert(1)>', '@acme/admins', 'pct%0A::error::x', '</details>'];
     const design = (closed: boolean) =>
-      ['network:', '  name: hostile', 'nodes:', ...ids.map((id) => `  - id: ${JSON.stringify(id)}`), 'links:',
-        ...ids.slice(0, closed ? ids.length : -1).map((id, i) => `  - between: [${JSON.stringify(id)}, ${JSON.stringify(ids[(i + 1) % ids.length])}]`), ''].join('\n');
+      [
+        'network:',
+        '  name: hostile',
+        'nodes:',
+        ...ids.map((id) => `  - id: ${JSON.stringify(id)}`),
+        'links:',
+        ...ids
+          .slice(0, closed ? ids.length : -1)
+          .map((id, i) => `  - between: [${JSON.stringify(id)}, ${JSON.stringify(ids[(i + 1) % ids.length])}]`),
+        '',
+      ].join('\n');
     const author = path.join(work, 'hostile');
     git(work, 'clone', '-q', `file://${scenario.origin}`, author);
     const base = commit(author, 'hostile ring', { 'nets/hostile.net.yaml': design(true) });
@@ -511,7 +621,9 @@ describe('an unreliable API never changes the verdict', () => {
     expect(r.code).toBe(1);
     expect(r.outputs.verdict).toBe('fail');
     expect(failedMessages(r)).toHaveLength(1);
-    expect(commands(r.stdout, 'warning').some((c) => /could not write the pull-request comment/.test(c.message))).toBe(true);
+    expect(commands(r.stdout, 'warning').some((c) => /could not write the pull-request comment/.test(c.message))).toBe(
+      true,
+    );
     expect(api.requests.length).toBe(3); // one listing, retried twice (NETBRACE_HTTP_RETRIES=2)
     expect(r.ms).toBeLessThan(15_000);
   }, 30_000);
@@ -540,7 +652,13 @@ describe('an unreliable API never changes the verdict', () => {
 describe('other events', () => {
   it('push: compares the commit before the push with the pushed head', async () => {
     const ws = checkout(scenario.pass, { shallow: false });
-    const r = await run(ws, 'push', { before: scenario.base, after: scenario.pass, ref: 'refs/heads/main' }, prInputs(), scenario.pass);
+    const r = await run(
+      ws,
+      'push',
+      { before: scenario.base, after: scenario.pass, ref: 'refs/heads/main' },
+      prInputs(),
+      scenario.pass,
+    );
     expect(r.code, r.stdout + r.stderr).toBe(0);
     const report = JSON.parse(readFileSync(path.join(ws, r.outputs.report), 'utf8'));
     expect(report).toMatchObject({ base: scenario.base, head: scenario.pass, verdict: 'pass' });
@@ -549,7 +667,13 @@ describe('other events', () => {
 
   it('push of a new branch (all-zero before): compared with the head\u2019s parent', async () => {
     const ws = checkout(scenario.fail);
-    const r = await run(ws, 'push', { before: '0'.repeat(40), after: scenario.fail, created: true }, prInputs(), scenario.fail);
+    const r = await run(
+      ws,
+      'push',
+      { before: '0'.repeat(40), after: scenario.fail, created: true },
+      prInputs(),
+      scenario.fail,
+    );
     expect(r.code, r.stdout + r.stderr).toBe(1);
     const report = JSON.parse(readFileSync(path.join(ws, r.outputs.report), 'utf8'));
     expect(report.base).toBe(scenario.base);
@@ -576,7 +700,14 @@ describe('parts', () => {
       const ws = path.join(work, `leg-${k}`);
       git(work, 'clone', '-q', '--depth=1', '--branch', 'parts', `file://${scenario.origin}`, ws);
       const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('parts', 'part', { 'matrix.part': k }) };
-      const r = await runAction({ workspace: ws, runnerTemp: path.join(work, `rt-${k}`), eventName: 'pull_request', event: prEvent(scenario.base, scenario.parts), inputs, apiUrl: api.url });
+      const r = await runAction({
+        workspace: ws,
+        runnerTemp: path.join(work, `rt-${k}`),
+        eventName: 'pull_request',
+        event: prEvent(scenario.base, scenario.parts),
+        inputs,
+        apiUrl: api.url,
+      });
       expect(r.code, r.stdout + r.stderr).toBe(0); // part legs never decide
       expect(commands(r.stdout, 'error')).toEqual([]);
       const file = path.join(ws, r.outputs.report);
@@ -592,12 +723,20 @@ describe('parts', () => {
     }
     const all = ['nets/metro-a.net.yaml', 'nets/metro-b.net.yaml', 'nets/metro-c.net.yaml', DESIGN];
     expect([...perPart.flat()].sort()).toEqual(all);
-    for (const [i, files] of perPart.entries()) for (const f of files) expect(inPart(f, { index: i + 1, total: 2 })).toBe(true);
+    for (const [i, files] of perPart.entries())
+      for (const f of files) expect(inPart(f, { index: i + 1, total: 2 })).toBe(true);
     expect(api.requests).toEqual([]); // legs write no comment
 
     const decide = path.join(work, 'decide-ws');
     const inputs = { ...actionDefaults(TOKEN), ...netbraceInputs('parts', 'decide') };
-    const r = await runAction({ workspace: decide, runnerTemp: path.join(work, 'rt-decide'), eventName: 'pull_request', event: prEvent(scenario.base, scenario.parts), inputs, apiUrl: api.url });
+    const r = await runAction({
+      workspace: decide,
+      runnerTemp: path.join(work, 'rt-decide'),
+      eventName: 'pull_request',
+      event: prEvent(scenario.base, scenario.parts),
+      inputs,
+      apiUrl: api.url,
+    });
     expect(r.code, r.stdout + r.stderr).toBe(1);
     expect(r.outputs).toMatchObject({ verdict: 'fail', designs: '4' });
     expect(r.summary).toContain('joined parts 1, 2 of 2');

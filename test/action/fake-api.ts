@@ -77,7 +77,12 @@ export async function startFakeApi(): Promise<FakeApi> {
     if (kind === 'error500') send(res, 500, { message: 'Server Error' });
     else if (kind === 'rateLimit') {
       const reset = Math.floor(Date.now() / 1000) + 1;
-      send(res, 403, { message: 'API rate limit exceeded for installation.' }, { 'x-ratelimit-remaining': '0', 'x-ratelimit-limit': '1000', 'x-ratelimit-reset': String(reset) });
+      send(
+        res,
+        403,
+        { message: 'API rate limit exceeded for installation.' },
+        { 'x-ratelimit-remaining': '0', 'x-ratelimit-limit': '1000', 'x-ratelimit-reset': String(reset) },
+      );
     } else if (kind === 'forbidden') send(res, 403, { message: 'Resource not accessible by integration' });
     return true;
   };
@@ -102,7 +107,13 @@ export async function startFakeApi(): Promise<FakeApi> {
       const query = Object.fromEntries(u.searchParams.entries());
       const text = Buffer.concat(chunks).toString('utf8');
       const body = text ? (JSON.parse(text) as unknown) : undefined;
-      api.requests.push({ method: req.method ?? '', path: u.pathname, query, body, authorization: req.headers.authorization });
+      api.requests.push({
+        method: req.method ?? '',
+        path: u.pathname,
+        query,
+        body,
+        authorization: req.headers.authorization,
+      });
       const write = req.method === 'POST' || req.method === 'PATCH';
       if (fail(res, write ? api.writes : api.reads)) return;
       let m: RegExpMatchArray | null;
@@ -113,7 +124,14 @@ export async function startFakeApi(): Promise<FakeApi> {
       if ((m = u.pathname.match(/^\/repos\/[^/]+\/[^/]+\/issues\/(\d+)\/comments$/))) {
         if (req.method === 'GET') return paginate(req, res, api.comments, query);
         if (req.method === 'POST') {
-          const c = { id: nextId++, body: String((body as { body: string }).body), user: api.tokenUser !== undefined ? { login: api.tokenUser, type: 'User' } : { login: 'github-actions[bot]', type: 'Bot' } };
+          const c = {
+            id: nextId++,
+            body: String((body as { body: string }).body),
+            user:
+              api.tokenUser !== undefined
+                ? { login: api.tokenUser, type: 'User' }
+                : { login: 'github-actions[bot]', type: 'Bot' },
+          };
           api.comments.push(c);
           return send(res, 201, { ...c, html_url: `${api.url}/comment/${c.id}` });
         }

@@ -44,7 +44,12 @@ const GIT_ENV = {
 };
 
 export function git(cwd: string, ...args: string[]): string {
-  return execFileSync('git', args, { cwd, encoding: 'utf8', env: { ...process.env, ...GIT_ENV }, stdio: ['ignore', 'pipe', 'pipe'] }).trim();
+  return execFileSync('git', args, {
+    cwd,
+    encoding: 'utf8',
+    env: { ...process.env, ...GIT_ENV },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  }).trim();
 }
 
 /** Write files (path → text; null deletes) and commit them; returns the commit id. */
@@ -71,7 +76,10 @@ export interface Step {
 }
 
 /** The YAML block after `<!-- netbrace-workflow: NAME -->` in the README, parsed. */
-export function readmeWorkflow(name: string): { jobs: Record<string, { steps: Step[]; strategy?: { matrix?: Record<string, unknown[]> } }>; permissions?: Record<string, string> } {
+export function readmeWorkflow(name: string): {
+  jobs: Record<string, { steps: Step[]; strategy?: { matrix?: Record<string, unknown[]> } }>;
+  permissions?: Record<string, string>;
+} {
   const readme = readFileSync(path.join(repoRoot, 'README.md'), 'utf8');
   const at = readme.indexOf(`<!-- netbrace-workflow: ${name} -->`);
   if (at < 0) throw new Error(`README has no workflow "${name}"`);
@@ -97,7 +105,9 @@ export function netbraceInputs(name: string, job: string, values: Record<string,
 
 /** Every input of action.yml with its default, as the runner passes them. */
 export function actionDefaults(token: string): Record<string, string> {
-  const action = parseYaml(readFileSync(path.join(repoRoot, 'action.yml'), 'utf8')) as { inputs: Record<string, { default?: string }> };
+  const action = parseYaml(readFileSync(path.join(repoRoot, 'action.yml'), 'utf8')) as {
+    inputs: Record<string, { default?: string }>;
+  };
   const out: Record<string, string> = {};
   for (const [name, spec] of Object.entries(action.inputs)) {
     out[name] = String(spec.default ?? '').replace('${{ github.token }}', token);
@@ -217,7 +227,10 @@ export function runAction(o: RunOptions): Promise<RunResult> {
 }
 
 /** The workflow commands in stdout: `::name props::message`. */
-export function commands(stdout: string, name?: string): { name: string; props: Record<string, string>; message: string }[] {
+export function commands(
+  stdout: string,
+  name?: string,
+): { name: string; props: Record<string, string>; message: string }[] {
   const out: { name: string; props: Record<string, string>; message: string }[] = [];
   for (const line of stdout.split('\n')) {
     const m = /^::([a-z-]+)(?: ([^:]*))?::(.*)$/.exec(line);

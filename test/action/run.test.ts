@@ -78,8 +78,8 @@ function env(over: Record<string, string> = {}): Record<string, string> {
     GITHUB_REPOSITORY: 'acme/net',
     GITHUB_API_URL: api.url,
     GITHUB_RUN_ID: '99',
-    'INPUT_TOKEN': 'tok',
-    'INPUT_COMMENT': 'every-run',
+    INPUT_TOKEN: 'tok',
+    INPUT_COMMENT: 'every-run',
     NETBRACE_HTTP_RETRIES: '1',
     NETBRACE_HTTP_BACKOFF_MS: '5',
     NETBRACE_HTTP_TIMEOUT_MS: '300',
@@ -87,8 +87,20 @@ function env(over: Record<string, string> = {}): Record<string, string> {
   };
 }
 
-function deps(report: Report | ((r: GateRequestLike) => Report), git: (args: string[]) => GitResult = () => ({ code: 0, stdout: '', stderr: '' })) {
-  const rec: Recorder = { annotations: [], warnings: [], infos: [], outputs: {}, failed: [], summary: '', gateCalls: [], gitCalls: [] };
+function deps(
+  report: Report | ((r: GateRequestLike) => Report),
+  git: (args: string[]) => GitResult = () => ({ code: 0, stdout: '', stderr: '' }),
+) {
+  const rec: Recorder = {
+    annotations: [],
+    warnings: [],
+    infos: [],
+    outputs: {},
+    failed: [],
+    summary: '',
+    gateCalls: [],
+    gitCalls: [],
+  };
   const d: ActionDeps = {
     gate: async (request) => {
       rec.gateCalls.push(request);
@@ -99,7 +111,8 @@ function deps(report: Report | ((r: GateRequestLike) => Report), git: (args: str
     join: joinReports,
     git: async (args) => {
       rec.gitCalls.push(args);
-      if (args[0] === 'rev-parse' && args[1] === '--show-toplevel') return { code: 0, stdout: `${path.join(dir, 'ws')}\n`, stderr: '' };
+      if (args[0] === 'rev-parse' && args[1] === '--show-toplevel')
+        return { code: 0, stdout: `${path.join(dir, 'ws')}\n`, stderr: '' };
       return git(args);
     },
     // Throttling is off here only for speed (it spaces writes 3 s apart); rate limits are
@@ -125,15 +138,34 @@ function deps(report: Report | ((r: GateRequestLike) => Report), git: (args: str
 describe('inputs', () => {
   it('reads exactly the inputs action.yml declares', () => {
     const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
-    const declared = Object.keys((parseYaml(readFileSync(path.join(root, 'action.yml'), 'utf8')) as { inputs: object }).inputs).sort();
+    const declared = Object.keys(
+      (parseYaml(readFileSync(path.join(root, 'action.yml'), 'utf8')) as { inputs: object }).inputs,
+    ).sort();
     const source = readFileSync(path.join(root, 'src', 'shell', 'action-inputs.ts'), 'utf8');
-    const read = [...new Set([...source.matchAll(/(?:getInput|oneOf|relativePath|optionalInt|sharedInput)\(env, '([a-z-]+)'/g)].map((m) => m[1]))].sort();
+    const read = [
+      ...new Set(
+        [...source.matchAll(/(?:getInput|oneOf|relativePath|optionalInt|sharedInput)\(env, '([a-z-]+)'/g)].map(
+          (m) => m[1],
+        ),
+      ),
+    ].sort();
     expect(read).toEqual(declared);
   });
 
   it('reads the runner\u2019s INPUT_ names (upper case, dashes kept) and validates them', () => {
-    const i = readInputs({ 'INPUT_COMMENT-KEY': 'metro', 'INPUT_POLICY-SOURCE': 'head', INPUT_PART: '2/4', INPUT_MODE: 'inform' });
-    expect(i).toMatchObject({ commentKey: 'metro', policySource: 'head', part: { index: 2, total: 4 }, mode: 'inform', comment: 'when-changed' });
+    const i = readInputs({
+      'INPUT_COMMENT-KEY': 'metro',
+      'INPUT_POLICY-SOURCE': 'head',
+      INPUT_PART: '2/4',
+      INPUT_MODE: 'inform',
+    });
+    expect(i).toMatchObject({
+      commentKey: 'metro',
+      policySource: 'head',
+      part: { index: 2, total: 4 },
+      mode: 'inform',
+      comment: 'when-changed',
+    });
     expect(() => readInputs({ INPUT_MODE: 'strict' })).toThrow(/input "mode" is "strict"; use one of: block, inform/);
     expect(() => readInputs({ INPUT_PART: '5/4' })).toThrow(/input "part"/);
     expect(() => readInputs({ 'INPUT_COMMENT-KEY': 'a b' })).toThrow(/comment-key/);
@@ -146,7 +178,9 @@ describe('inputs', () => {
       expect(() => readInputs({ INPUT_MODE: old })).toThrow(`input "mode" is "${old}"; use one of: block, inform`);
     }
     for (const old of ['always', 'on-change', 'on-failure', 'never']) {
-      expect(() => readInputs({ INPUT_COMMENT: old })).toThrow(`input "comment" is "${old}"; use one of: every-run, when-changed, when-failing, off`);
+      expect(() => readInputs({ INPUT_COMMENT: old })).toThrow(
+        `input "comment" is "${old}"; use one of: every-run, when-changed, when-failing, off`,
+      );
     }
   });
 
@@ -154,7 +188,9 @@ describe('inputs', () => {
     const { d, rec } = deps(sampleReport());
     const out = await run(env({ INPUT_COMMENT: 'sometimes' }), d);
     expect(out.exitCode).toBe(2);
-    expect(rec.failed).toEqual(['netbrace: input "comment" is "sometimes"; use one of: every-run, when-changed, when-failing, off']);
+    expect(rec.failed).toEqual([
+      'netbrace: input "comment" is "sometimes"; use one of: every-run, when-changed, when-failing, off',
+    ]);
     expect(rec.gateCalls.length).toBe(0);
   });
 
@@ -175,7 +211,13 @@ describe('events', () => {
   it('pull_request: compares the payload\u2019s base and head, never GITHUB_SHA', async () => {
     const { d, rec } = deps(sampleReport());
     await run(env(), d);
-    expect(rec.gateCalls[0]).toMatchObject({ base: BASE, head: HEAD, policySource: 'base', mode: 'block', eventKind: 'pull-request' });
+    expect(rec.gateCalls[0]).toMatchObject({
+      base: BASE,
+      head: HEAD,
+      policySource: 'base',
+      mode: 'block',
+      eventKind: 'pull-request',
+    });
     expect(JSON.stringify(rec.gateCalls)).not.toContain(MERGE_SHA);
   });
 
@@ -183,7 +225,9 @@ describe('events', () => {
     const event = path.join(dir, 'push.json');
     writeFileSync(event, JSON.stringify({ before: '0'.repeat(40), after: HEAD }));
     const parent = 'd'.repeat(40);
-    const { d, rec } = deps(sampleReport(), (args) => (args[0] === 'rev-parse' ? { code: 0, stdout: `${parent}\n`, stderr: '' } : { code: 0, stdout: '', stderr: '' }));
+    const { d, rec } = deps(sampleReport(), (args) =>
+      args[0] === 'rev-parse' ? { code: 0, stdout: `${parent}\n`, stderr: '' } : { code: 0, stdout: '', stderr: '' },
+    );
     await run(env({ GITHUB_EVENT_NAME: 'push', GITHUB_EVENT_PATH: event }), d);
     expect(rec.gateCalls[0]).toMatchObject({ base: parent, head: HEAD, eventKind: 'push' });
   });
@@ -197,8 +241,13 @@ describe('events', () => {
 
   it('the report of a run with nothing to judge follows the published report schema', () => {
     const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
-    const validate = new Ajv({ allErrors: true, strict: false }).compile(JSON.parse(readFileSync(path.join(root, 'src', 'report', 'report.schema.json'), 'utf8')));
-    for (const r of [emptyRunReport({ mode: 'inform', policy: '', seed: undefined }, {}), emptyRunReport({ mode: 'block', policy: 'p.yaml', seed: 3 }, { base: BASE, head: HEAD })]) {
+    const validate = new Ajv({ allErrors: true, strict: false }).compile(
+      JSON.parse(readFileSync(path.join(root, 'src', 'report', 'report.schema.json'), 'utf8')),
+    );
+    for (const r of [
+      emptyRunReport({ mode: 'inform', policy: '', seed: undefined }, {}),
+      emptyRunReport({ mode: 'block', policy: 'p.yaml', seed: 3 }, { base: BASE, head: HEAD }),
+    ]) {
       expect(validate(JSON.parse(JSON.stringify(r))), JSON.stringify(validate.errors)).toBe(true);
     }
   });
@@ -215,12 +264,28 @@ describe('events', () => {
     // built-in policy's), the keys in the same order.
     const written = JSON.parse(readFileSync(path.join(dir, 'ws', '.netbrace-out', 'netbrace-report.json'), 'utf8'));
     expect(written.seed).toBe(1);
-    expect(Object.keys(written)).toEqual(['version', 'tool', 'verdict', 'mode', 'policy', 'seed', 'counts', 'files', 'caution']);
+    expect(Object.keys(written)).toEqual([
+      'version',
+      'tool',
+      'verdict',
+      'mode',
+      'policy',
+      'seed',
+      'counts',
+      'files',
+      'caution',
+    ]);
   });
 
   it('a missing base that cannot be fetched stops with the checkout fix', async () => {
     api.reads = 'error500';
-    const { d, rec } = deps(sampleReport(), (args) => (args[0] === 'cat-file' && args[2].startsWith(BASE) ? { code: 1, stdout: '', stderr: '' } : args[0] === 'fetch' ? { code: 128, stdout: '', stderr: 'fatal: no such commit' } : { code: 0, stdout: '', stderr: '' }));
+    const { d, rec } = deps(sampleReport(), (args) =>
+      args[0] === 'cat-file' && args[2].startsWith(BASE)
+        ? { code: 1, stdout: '', stderr: '' }
+        : args[0] === 'fetch'
+          ? { code: 128, stdout: '', stderr: 'fatal: no such commit' }
+          : { code: 0, stdout: '', stderr: '' },
+    );
     const out = await run(env(), d);
     expect(out.exitCode).toBe(2);
     expect(rec.failed).toHaveLength(1);
@@ -230,7 +295,15 @@ describe('events', () => {
 
   it('a missing base with no design among the pull request\u2019s files (REST fallback) passes', async () => {
     api.prFiles.push({ filename: 'README.md', status: 'modified' });
-    const { d, rec } = deps((r) => (r.paths ? emptyReport() : sampleReport()), (args) => (args[0] === 'cat-file' && args[2].startsWith(BASE) ? { code: 1, stdout: '', stderr: '' } : args[0] === 'fetch' ? { code: 128, stdout: '', stderr: 'fatal' } : { code: 0, stdout: '', stderr: '' }));
+    const { d, rec } = deps(
+      (r) => (r.paths ? emptyReport() : sampleReport()),
+      (args) =>
+        args[0] === 'cat-file' && args[2].startsWith(BASE)
+          ? { code: 1, stdout: '', stderr: '' }
+          : args[0] === 'fetch'
+            ? { code: 128, stdout: '', stderr: 'fatal' }
+            : { code: 0, stdout: '', stderr: '' },
+    );
     const out = await run(env(), d);
     expect(out).toMatchObject({ exitCode: 0, verdict: 'pass' });
     expect(rec.gateCalls).toEqual([]);
@@ -267,8 +340,17 @@ describe('verdict and comment', () => {
     const { d, rec } = deps(sampleReport());
     const out = await run(env(), d);
     expect(out).toMatchObject({ exitCode: 1, verdict: 'fail' });
-    expect(rec.failed).toEqual(['netbrace blocks this merge: 1 design weakened, 1 design could not be read (see the annotations and the job summary)']);
-    expect(rec.outputs).toMatchObject({ verdict: 'fail', 'count-weakened': '1', 'count-unreadable': '1', designs: '5', report: '.netbrace-out/netbrace-report.json', sarif: '.netbrace-out/netbrace.sarif' });
+    expect(rec.failed).toEqual([
+      'netbrace blocks this merge: 1 design weakened, 1 design could not be read (see the annotations and the job summary)',
+    ]);
+    expect(rec.outputs).toMatchObject({
+      verdict: 'fail',
+      'count-weakened': '1',
+      'count-unreadable': '1',
+      designs: '5',
+      report: '.netbrace-out/netbrace-report.json',
+      sarif: '.netbrace-out/netbrace.sarif',
+    });
     expect(rec.annotations[0]).toMatchObject({ level: 'error', file: 'backbone/core.net.yaml', startLine: 42 });
     expect(rec.summary).toContain('netbrace blocks this merge: 1 design weakened, 1 design could not be read');
     const written = JSON.parse(readFileSync(path.join(dir, 'ws', '.netbrace-out', 'netbrace-report.json'), 'utf8'));
@@ -300,7 +382,10 @@ describe('verdict and comment', () => {
   it('fork pull request: the 403 is a warning; the verdict stands', async () => {
     api.writes = 'forbidden';
     const { d, rec } = deps(sampleReport());
-    const out = await run(env({ GITHUB_EVENT_PATH: prEvent({ head: { sha: HEAD, repo: { full_name: 'someone/net', fork: true } } }) }), d);
+    const out = await run(
+      env({ GITHUB_EVENT_PATH: prEvent({ head: { sha: HEAD, repo: { full_name: 'someone/net', fork: true } } }) }),
+      d,
+    );
     expect(out).toMatchObject({ exitCode: 1, verdict: 'fail', comment: 'failed' });
     expect(rec.warnings).toEqual([expect.stringMatching(/fork.*two-workflow/)]);
     expect(rec.failed).toHaveLength(1);
@@ -348,7 +433,16 @@ describe('workflow_run (posting a fork\u2019s report)', () => {
     partsDir();
     api.prHeadSha = HEAD;
     const { d, rec } = deps(sampleReport());
-    const out = await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), 'INPUT_JOIN-PARTS': 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'inform' }), d);
+    const out = await run(
+      env({
+        GITHUB_EVENT_NAME: 'workflow_run',
+        GITHUB_EVENT_PATH: runEvent(HEAD),
+        'INPUT_JOIN-PARTS': 'in',
+        'INPUT_PULL-REQUEST': '12',
+        INPUT_MODE: 'inform',
+      }),
+      d,
+    );
     expect(out).toMatchObject({ exitCode: 0, verdict: 'fail' });
     expect(rec.gateCalls).toEqual([]);
     expect(api.comments).toHaveLength(1);
@@ -359,7 +453,16 @@ describe('workflow_run (posting a fork\u2019s report)', () => {
     partsDir();
     api.prHeadSha = 'e'.repeat(40);
     const { d, rec } = deps(sampleReport());
-    await run(env({ GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: runEvent(HEAD), 'INPUT_JOIN-PARTS': 'in', 'INPUT_PULL-REQUEST': '12', INPUT_MODE: 'inform' }), d);
+    await run(
+      env({
+        GITHUB_EVENT_NAME: 'workflow_run',
+        GITHUB_EVENT_PATH: runEvent(HEAD),
+        'INPUT_JOIN-PARTS': 'in',
+        'INPUT_PULL-REQUEST': '12',
+        INPUT_MODE: 'inform',
+      }),
+      d,
+    );
     expect(api.comments).toHaveLength(0);
     expect(rec.warnings.some((w) => /not at bbbbbbbbbbbb/.test(w))).toBe(true);
   });
@@ -412,7 +515,13 @@ describe('parts', () => {
       const r = sampleReport();
       r.files = k === 1 ? r.files.slice(0, 2) : r.files.slice(2);
       r.part = { index: k, total: 2 };
-      r.split = [{ path: 'big.graphml', realizations: 64, samples: [{ side: 'head', challenge: 'random-nodes', from: (k - 1) * 32, to: k * 32, points: 0, values: '' }] }];
+      r.split = [
+        {
+          path: 'big.graphml',
+          realizations: 64,
+          samples: [{ side: 'head', challenge: 'random-nodes', from: (k - 1) * 32, to: k * 32, points: 0, values: '' }],
+        },
+      ];
       writeFileSync(path.join(parts, `part-${k}.json`), JSON.stringify(r));
       return r;
     });

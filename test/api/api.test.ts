@@ -13,7 +13,18 @@ function essentials(t: Topology) {
   return {
     name: t.name,
     nodes: t.nodes.map((n) => [n.id, n.label, n.kind, n.lat, n.lon, n.hardened]),
-    links: t.links.map((l) => [l.key, l.id, l.source, l.target, l.length, l.latency, l.capacity, l.weight, l.riskGroups, l.hardened]),
+    links: t.links.map((l) => [
+      l.key,
+      l.id,
+      l.source,
+      l.target,
+      l.length,
+      l.latency,
+      l.capacity,
+      l.weight,
+      l.riskGroups,
+      l.hardened,
+    ]),
     groups: t.riskGroups.map((r) => r.id),
     demands: t.demands.map((d) => [d.source, d.target, d.volume]),
   };
@@ -32,7 +43,8 @@ describe('readDesign, toGraph, fromGraph', () => {
       expect(g.getEdgeAttribute(l.key, 'line')).toBe(l.pos.line);
     }
     // graphology's own degree counts parallel links, as netbrace's structure does.
-    for (const n of t.nodes) expect(g.degree(n.id)).toBe(t.links.filter((l) => l.source === n.id || l.target === n.id).length);
+    for (const n of t.nodes)
+      expect(g.degree(n.id)).toBe(t.links.filter((l) => l.source === n.id || l.target === n.id).length);
   });
 
   it('fromGraph(toGraph(t)) keeps ids, labels, coordinates, lengths, groups and demands', () => {
@@ -49,14 +61,18 @@ describe('readDesign, toGraph, fromGraph', () => {
     g.addEdge('b', 'c');
     const t = fromGraph(g, { file: 'scripted' });
     expect(t.nodes.map((n) => n.label)).toEqual(['A', 'B', 'C']);
-    expect(t.links.map((l) => [l.source, l.target, l.length])).toEqual([['a', 'b', 3], ['b', 'c', undefined]]);
+    expect(t.links.map((l) => [l.source, l.target, l.length])).toEqual([
+      ['a', 'b', 3],
+      ['b', 'c', undefined],
+    ]);
     expect([...t.nodes, ...t.links].map((e) => e.pos.line)).toEqual([1, 2, 3, 4, 5]);
   });
 });
 
 function ringGraph(n: number): MultiUndirectedGraph {
   const g = new MultiUndirectedGraph();
-  for (let i = 0; i < n; i++) g.addNode(`s${i}`, { lat: 10 + Math.cos((2 * Math.PI * i) / n), lon: 20 + Math.sin((2 * Math.PI * i) / n) });
+  for (let i = 0; i < n; i++)
+    g.addNode(`s${i}`, { lat: 10 + Math.cos((2 * Math.PI * i) / n), lon: 20 + Math.sin((2 * Math.PI * i) / n) });
   for (let i = 0; i < n; i++) g.addEdge(`s${i}`, `s${(i + 1) % n}`, { length_km: 10 });
   return g;
 }
@@ -66,13 +82,19 @@ describe('check and evaluate', () => {
     const base = fromGraph(ringGraph(8), { file: 'ring' });
     const chain = ringGraph(8);
     chain.dropEdge(chain.edges('s0', 's7')[0]);
-    const failing = await check({ base: { 'nets/ring.net.json': base }, head: { 'nets/ring.net.json': fromGraph(chain) } });
+    const failing = await check({
+      base: { 'nets/ring.net.json': base },
+      head: { 'nets/ring.net.json': fromGraph(chain) },
+    });
     expect(failing.exitCode).toBe(1);
     expect(failing.report.verdict).toBe('fail');
     const f = failing.report.files[0];
     expect(f.path).toBe('nets/ring.net.json');
     expect(f.findings.filter((x) => x.rule === 'new-bridge').length).toBeGreaterThan(0);
-    const same = await check({ base: { 'nets/ring.net.json': base }, head: { 'nets/ring.net.json': fromGraph(ringGraph(8)) } });
+    const same = await check({
+      base: { 'nets/ring.net.json': base },
+      head: { 'nets/ring.net.json': fromGraph(ringGraph(8)) },
+    });
     expect(same.exitCode).toBe(0);
     expect(same.report.files).toEqual([]); // identical text: nothing changed, nothing to judge
   });

@@ -27,10 +27,13 @@ describe("import from 'netbrace'", () => {
   });
 
   it('ships type declarations for every exported name', () => {
-    const pkg = JSON.parse(readFileSync(path.join(root, 'package.json'), 'utf8')) as { exports: Record<string, { types: string; import: string }> };
+    const pkg = JSON.parse(readFileSync(path.join(root, 'package.json'), 'utf8')) as {
+      exports: Record<string, { types: string; import: string }>;
+    };
     const types = path.join(root, pkg.exports['.'].types);
     expect(existsSync(types)).toBe(true);
     const text = readFileSync(types, 'utf8');
-    for (const name of ['readDesign', 'toGraph', 'fromGraph', 'evaluate', 'check']) expect(text).toMatch(new RegExp(`\\b${name}\\b`));
+    for (const name of ['readDesign', 'toGraph', 'fromGraph', 'evaluate', 'check'])
+      expect(text).toMatch(new RegExp(`\\b${name}\\b`));
   });
 });

@@ -23,7 +23,9 @@ export const bundleOptions = {
   target: 'node20',
   logLevel: 'warning' as const,
   charset: 'utf8' as const,
-  banner: { js: "import { createRequire as __nbCreateRequire } from 'node:module';\nconst require = __nbCreateRequire(import.meta.url);" },
+  banner: {
+    js: "import { createRequire as __nbCreateRequire } from 'node:module';\nconst require = __nbCreateRequire(import.meta.url);",
+  },
 };
 
 export async function bundleCli(dir: string): Promise<string> {
@@ -34,10 +36,16 @@ export async function bundleCli(dir: string): Promise<string> {
     target: 'node20',
     logLevel: 'warning' as const,
     charset: 'utf8' as const,
-    banner: { js: "import { createRequire as __nbCreateRequire } from 'node:module';\nconst require = __nbCreateRequire(import.meta.url);" },
+    banner: {
+      js: "import { createRequire as __nbCreateRequire } from 'node:module';\nconst require = __nbCreateRequire(import.meta.url);",
+    },
   };
   await build({ ...options, entryPoints: [path.join(repo, 'src/shell/cli.ts')], outfile: path.join(dir, 'cli.js') });
-  await build({ ...options, entryPoints: [path.join(repo, 'src/parallel/worker.ts')], outfile: path.join(dir, 'worker.js') });
+  await build({
+    ...options,
+    entryPoints: [path.join(repo, 'src/parallel/worker.ts')],
+    outfile: path.join(dir, 'worker.js'),
+  });
   return path.join(dir, 'cli.js');
 }
 
@@ -83,7 +91,12 @@ export function designYaml(n: number, edges: readonly (readonly [number, number]
   return out.join('\n') + '\n';
 }
 
-export function writeDesign(dir: string, file: string, n: number, edges: readonly (readonly [number, number])[]): string {
+export function writeDesign(
+  dir: string,
+  file: string,
+  n: number,
+  edges: readonly (readonly [number, number])[],
+): string {
   const p = path.join(dir, file);
   writeFileSync(p, designYaml(n, edges, file));
   return p;
@@ -98,18 +111,50 @@ export interface ProcessRun {
 }
 
 /** Runs a command to its end; wall time and the child's peak RSS (GNU time, else unknown). */
-export function runProcess(cmd: string, args: string[], cwd = repo, timeoutMs?: number): ProcessRun & { timedOut: boolean } {
+export function runProcess(
+  cmd: string,
+  args: string[],
+  cwd = repo,
+  timeoutMs?: number,
+): ProcessRun & { timedOut: boolean } {
   const t = performance.now();
-  const r = spawnSync('/usr/bin/time', ['-f', '%M', cmd, ...args], { cwd, encoding: 'utf8', maxBuffer: 256 * 2 ** 20, ...(timeoutMs ? { timeout: timeoutMs, killSignal: 'SIGKILL' as const } : {}) });
-  if (r.signal) return { seconds: (performance.now() - t) / 1000, maxRssMb: Number.NaN, status: null, stdout: r.stdout ?? '', stderr: r.stderr ?? '', timedOut: true };
+  const r = spawnSync('/usr/bin/time', ['-f', '%M', cmd, ...args], {
+    cwd,
+    encoding: 'utf8',
+    maxBuffer: 256 * 2 ** 20,
+    ...(timeoutMs ? { timeout: timeoutMs, killSignal: 'SIGKILL' as const } : {}),
+  });
+  if (r.signal)
+    return {
+      seconds: (performance.now() - t) / 1000,
+      maxRssMb: Number.NaN,
+      status: null,
+      stdout: r.stdout ?? '',
+      stderr: r.stderr ?? '',
+      timedOut: true,
+    };
   const seconds = (performance.now() - t) / 1000;
   if (r.error) {
     const plain = spawnSync(cmd, args, { cwd, encoding: 'utf8', maxBuffer: 256 * 2 ** 20 });
-    return { seconds: (performance.now() - t) / 1000, maxRssMb: Number.NaN, status: plain.status, stdout: plain.stdout, stderr: plain.stderr, timedOut: false };
+    return {
+      seconds: (performance.now() - t) / 1000,
+      maxRssMb: Number.NaN,
+      status: plain.status,
+      stdout: plain.stdout,
+      stderr: plain.stderr,
+      timedOut: false,
+    };
   }
   const lines = r.stderr.trimEnd().split('\n');
   const kb = Number(lines.pop());
-  return { seconds, maxRssMb: kb / 1024, status: r.status, stdout: r.stdout, stderr: lines.join('\n'), timedOut: false };
+  return {
+    seconds,
+    maxRssMb: kb / 1024,
+    status: r.status,
+    stdout: r.stdout,
+    stderr: lines.join('\n'),
+    timedOut: false,
+  };
 }
 
 /** Best of `times` runs (wall time), with the largest peak RSS seen. */
@@ -128,7 +173,10 @@ export function bestRun(cmd: string, args: string[], times: number, cwd = repo):
 /** Runs a python peer with /usr/bin/python3; undefined (and a note) when it cannot run. */
 export function pythonPeer(script: string, args: string[]): { out: unknown; seconds: number } | undefined {
   const t = performance.now();
-  const r = spawnSync('/usr/bin/python3', [path.join(repo, 'test/bench', script), ...args], { encoding: 'utf8', maxBuffer: 64 * 2 ** 20 });
+  const r = spawnSync('/usr/bin/python3', [path.join(repo, 'test/bench', script), ...args], {
+    encoding: 'utf8',
+    maxBuffer: 64 * 2 ** 20,
+  });
   const seconds = (performance.now() - t) / 1000;
   if (r.error || r.status !== 0) {
     console.log(`peer unavailable (${script}): ${(r.error?.message ?? r.stderr).trim().split('\n').pop()}`);
@@ -138,7 +186,13 @@ export function pythonPeer(script: string, args: string[]): { out: unknown; seco
 }
 
 /** One line of a targets table: what is aimed at, what was measured, the peer, met or not. */
-export function targetLine(what: string, target: string, measured: string, peer: string, met: boolean | undefined): string {
+export function targetLine(
+  what: string,
+  target: string,
+  measured: string,
+  peer: string,
+  met: boolean | undefined,
+): string {
   const mark = met === undefined ? 'n/a   ' : met ? 'met   ' : 'MISSED';
   return `${mark}  ${what.padEnd(44)} target ${target.padEnd(16)} measured ${measured.padEnd(18)} peer ${peer}`;
 }

@@ -32,19 +32,34 @@ const jobs: Job[] = [
   {
     name: 'a',
     g: preferentialGraph(1000, 3, 1),
-    spec: { r: metric('efficiency'), seed: 1, budget, challenges: [{ challenge: 'random-links', realizations: 20, until: 0.5, points: 11 }] },
+    spec: {
+      r: metric('efficiency'),
+      seed: 1,
+      budget,
+      challenges: [{ challenge: 'random-links', realizations: 20, until: 0.5, points: 11 }],
+    },
     extra: { realizations: 20, until: 0.5, points: 11, networkx_realizations: 2 },
   },
   {
     name: 'b',
     g: randomGraph(20_000, 40_000, 2),
-    spec: { r: metric('largest_component'), seed: 1, budget, challenges: [{ challenge: 'random-nodes', realizations: 200, until: 0.5, points: 11 }] },
+    spec: {
+      r: metric('largest_component'),
+      seed: 1,
+      budget,
+      challenges: [{ challenge: 'random-nodes', realizations: 200, until: 0.5, points: 11 }],
+    },
     extra: { realizations: 200, until: 0.5, points: 11, networkx_realizations: 20 },
   },
   {
     name: 'c',
     g: preferentialGraph(5000, 2, 3),
-    spec: { r: metric('largest_component'), seed: 1, budget, challenges: [{ challenge: 'degree-adaptive', until: 0.2 }] },
+    spec: {
+      r: metric('largest_component'),
+      seed: 1,
+      budget,
+      challenges: [{ challenge: 'degree-adaptive', until: 0.2 }],
+    },
     extra: { until: 0.2 },
   },
 ];
@@ -52,9 +67,23 @@ const jobs: Job[] = [
 const dir = mkdtempSync(join(tmpdir(), 'netbrace-bench-'));
 // The parallel path is measured as it ships: the pool and its worker bundled by esbuild (as
 // .ci/build.mjs does for dist/), so worker threads start without compiling TypeScript.
-const bundleOptions = { bundle: true, platform: 'node' as const, format: 'esm' as const, target: 'node20', logLevel: 'warning' as const };
-await build({ ...bundleOptions, entryPoints: [new URL('../../src/parallel/pool.ts', import.meta.url).pathname], outfile: join(dir, 'pool.js') });
-await build({ ...bundleOptions, entryPoints: [new URL('../../src/parallel/worker.ts', import.meta.url).pathname], outfile: join(dir, 'worker.js') });
+const bundleOptions = {
+  bundle: true,
+  platform: 'node' as const,
+  format: 'esm' as const,
+  target: 'node20',
+  logLevel: 'warning' as const,
+};
+await build({
+  ...bundleOptions,
+  entryPoints: [new URL('../../src/parallel/pool.ts', import.meta.url).pathname],
+  outfile: join(dir, 'pool.js'),
+});
+await build({
+  ...bundleOptions,
+  entryPoints: [new URL('../../src/parallel/worker.ts', import.meta.url).pathname],
+  outfile: join(dir, 'worker.js'),
+});
 const { evaluateDesignParallel } = (await import(join(dir, 'pool.js'))) as typeof import('../../src/parallel/pool.js');
 const engine: Record<string, { one: number; two: number; sequence?: string[] }> = {};
 let peakRss = 0;
@@ -73,7 +102,8 @@ for (const job of jobs) {
   const par = await evaluateDesignParallel(job.g, job.spec, 2);
   const two = (performance.now() - t) / 1000;
   sample();
-  if (JSON.stringify(par.evaluation) !== JSON.stringify(ev.evaluation)) throw new Error(`job ${job.name}: 1 and 2 threads differ`);
+  if (JSON.stringify(par.evaluation) !== JSON.stringify(ev.evaluation))
+    throw new Error(`job ${job.name}: 1 and 2 threads differ`);
   engine[job.name] = { one, two, sequence: ev.evaluation.attacks[0]?.sequence };
   console.log(`engine (${job.name}): ${one.toFixed(3)} s on 1 thread, ${two.toFixed(3)} s on 2 threads`);
 }
@@ -97,22 +127,31 @@ const peers = JSON.parse(py.stdout) as {
 // Same tie rule on both sides: the adaptive degree sequences must agree.
 for (const lib of ['igraph', 'networkx'] as const) {
   const seq = peers[lib].c?.sequence;
-  if (seq && seq.join() !== engine.c.sequence!.join()) console.log(`warning: ${lib}'s adaptive degree sequence differs from netbrace's`);
+  if (seq && seq.join() !== engine.c.sequence!.join())
+    console.log(`warning: ${lib}'s adaptive degree sequence differs from netbrace's`);
   else if (seq) console.log(`(c) ${lib}'s adaptive degree sequence equals netbrace's (${seq.length} removals)`);
 }
 
 const fmt = (s: number) => (s >= 100 ? s.toFixed(0) : s >= 10 ? s.toFixed(1) : s.toFixed(3));
 console.log(`\nseconds (lower is better); ratio = peer time / netbrace time on 1 thread [2 threads]`);
-console.log(`job  netbrace 1t  netbrace 2t    igraph ${peers.igraph.version}  ratio          networkx ${peers.networkx.version}  ratio`);
+console.log(
+  `job  netbrace 1t  netbrace 2t    igraph ${peers.igraph.version}  ratio          networkx ${peers.networkx.version}  ratio`,
+);
 for (const name of ['a', 'b', 'c']) {
   const e = engine[name];
   const ig = peers.igraph[name];
   const nx = peers.networkx[name];
   const r = (p: number) => `${(p / e.one).toFixed(1)}× [${(p / e.two).toFixed(1)}×]`;
-  const nxText = nx ? `${fmt(nx.seconds)}${nx.extrapolated ? ` (extrapolated ×${nx.factor} from ${fmt(nx.measured!)} s)` : ''}  ${r(nx.seconds)}` : 'skipped';
-  console.log(`(${name})  ${fmt(e.one).padStart(10)}  ${fmt(e.two).padStart(11)}  ${fmt(ig.seconds).padStart(15)}  ${r(ig.seconds).padEnd(13)}  ${nxText}`);
+  const nxText = nx
+    ? `${fmt(nx.seconds)}${nx.extrapolated ? ` (extrapolated ×${nx.factor} from ${fmt(nx.measured!)} s)` : ''}  ${r(nx.seconds)}`
+    : 'skipped';
+  console.log(
+    `(${name})  ${fmt(e.one).padStart(10)}  ${fmt(e.two).padStart(11)}  ${fmt(ig.seconds).padStart(15)}  ${r(ig.seconds).padEnd(13)}  ${nxText}`,
+  );
 }
-console.log(`peak memory: netbrace process ${engineRss.toFixed(0)} MB (RSS); python peers ${peers.peak_rss_mb.toFixed(0)} MB (max RSS)`);
+console.log(
+  `peak memory: netbrace process ${engineRss.toFixed(0)} MB (RSS); python peers ${peers.peak_rss_mb.toFixed(0)} MB (max RSS)`,
+);
 
 const checks: [string, boolean][] = [
   ['(a) at least 5× faster than igraph (1 thread)', peers.igraph.a.seconds / engine.a.one >= 5],

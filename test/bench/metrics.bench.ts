@@ -64,7 +64,11 @@ function barabasiAlbert(n: number, m: number, r: () => number): [number, number]
 }
 
 /** Simple edge list without self-loops, nodes renumbered by first appearance in `keep`. */
-function simpleEdges(n: number, edges: readonly (readonly [number, number])[], keep?: (v: number) => boolean): BenchGraph {
+function simpleEdges(
+  n: number,
+  edges: readonly (readonly [number, number])[],
+  keep?: (v: number) => boolean,
+): BenchGraph {
   const index = new Int32Array(n).fill(-1);
   let k = 0;
   for (let v = 0; v < n; v++) if (!keep || keep(v)) index[v] = k++;
@@ -110,7 +114,11 @@ function zoo(file: string): BenchGraph {
       return Number.isFinite(km) ? Math.max(0.1, km) : 1;
     });
     const r = mulberry32(11);
-    s.demands = Array.from({ length: 60 }, (): [number, number, number] => [Math.floor(r() * s.n), Math.floor(r() * s.n), 1 + Math.floor(r() * 9)]);
+    s.demands = Array.from({ length: 60 }, (): [number, number, number] => [
+      Math.floor(r() * s.n),
+      Math.floor(r() * s.n),
+      1 + Math.floor(r() * 9),
+    ]);
     s.budget = 1.5;
   }
   return s;
@@ -170,7 +178,11 @@ function bestTime(fn: () => unknown, budgetMs = 300): number {
 const r = mulberry32(20240601);
 const ba = simpleEdges(1000, barabasiAlbert(1000, 3, r));
 ba.weights = ba.edges.map(() => 1 + 99 * r());
-ba.demands = Array.from({ length: 200 }, (): [number, number, number] => [Math.floor(r() * 1000), Math.floor(r() * 1000), 1 + Math.floor(r() * 9)]);
+ba.demands = Array.from({ length: 200 }, (): [number, number, number] => [
+  Math.floor(r() * 1000),
+  Math.floor(r() * 1000),
+  1 + Math.floor(r() * 9),
+]);
 ba.budget = 1.5;
 const graphs: Record<string, BenchGraph> = { 'BA(1000,3)': ba };
 for (const f of ['Cogentco.gml', 'Kdl.gml', 'Interoute.gml']) graphs[`zoo:${f.replace('.gml', '')}`] = zoo(f);
@@ -208,9 +220,21 @@ if (peer.status !== 0) {
 }
 const peerOut = JSON.parse(peer.stdout) as {
   versions: Record<string, string>;
-  results: { metric: string; graph: string; networkx: number; networkxCapped: boolean; peer: number; peerCapped: boolean; peerLabel: string }[];
+  results: {
+    metric: string;
+    graph: string;
+    networkx: number;
+    networkxCapped: boolean;
+    peer: number;
+    peerCapped: boolean;
+    peerLabel: string;
+  }[];
 };
-console.log(`peer done in ${((performance.now() - t0) / 1000).toFixed(1)} s; ${Object.entries(peerOut.versions).map(([k, v]) => `${k} ${v}`).join(', ')}`);
+console.log(
+  `peer done in ${((performance.now() - t0) / 1000).toFixed(1)} s; ${Object.entries(peerOut.versions)
+    .map(([k, v]) => `${k} ${v}`)
+    .join(', ')}`,
+);
 
 const compact = new Map(Object.entries(graphs).map(([k, b]) => [k, toCompact(b)]));
 const fmt = (s: number) => (s * 1000 >= 100 ? (s * 1000).toFixed(0) : (s * 1000).toPrecision(3));
@@ -238,13 +262,19 @@ for (const p of peerOut.results) {
     capPeer[1] + ratio(ours, p.peer),
     p.peerLabel,
   ]);
-  if (vsNx > 1 / 20) verdicts.push(`below target: ${p.metric} on ${p.graph} is ${(1 / vsNx).toFixed(1)}× networkx (target ≥ 20×)`);
-  if (p.metric === 'efficiency' && vsPeer > 1 / 5) verdicts.push(`below target: efficiency on ${p.graph} is ${(1 / vsPeer).toFixed(1)}× igraph (target ≥ 5×)`);
-  if (p.graph.startsWith('ER') && vsPeer > 1) verdicts.push(`below target: ${p.metric} on ${p.graph} is ${vsPeer.toFixed(2)}× the time of ${p.peerLabel} (target ≤ 1×)`);
+  if (vsNx > 1 / 20)
+    verdicts.push(`below target: ${p.metric} on ${p.graph} is ${(1 / vsNx).toFixed(1)}× networkx (target ≥ 20×)`);
+  if (p.metric === 'efficiency' && vsPeer > 1 / 5)
+    verdicts.push(`below target: efficiency on ${p.graph} is ${(1 / vsPeer).toFixed(1)}× igraph (target ≥ 5×)`);
+  if (p.graph.startsWith('ER') && vsPeer > 1)
+    verdicts.push(
+      `below target: ${p.metric} on ${p.graph} is ${vsPeer.toFixed(2)}× the time of ${p.peerLabel} (target ≤ 1×)`,
+    );
 }
 const head = ['metric', 'graph', 'netbrace ms', 'networkx ms', 'nb/nx', 'peer ms', 'nb/peer', 'peer'];
 const width = head.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));
-const line = (cells: string[]) => cells.map((c, i) => (i < 2 || i === 7 ? c.padEnd(width[i]) : c.padStart(width[i]))).join('  ');
+const line = (cells: string[]) =>
+  cells.map((c, i) => (i < 2 || i === 7 ? c.padEnd(width[i]) : c.padStart(width[i]))).join('  ');
 console.log(`\n${line(head)}\n${width.map((w) => '-'.repeat(w)).join('  ')}`);
 for (const row of rows) console.log(line(row));
 
@@ -253,7 +283,11 @@ const gBA = compact.get('BA(1000,3)')!;
 for (const id of ['effective_resistance', 'natural_connectivity']) {
   const est = getMetric(id).create(gBA)(createMask(gBA)).raw;
   const exact = getMetric(id).create(gBA, { denseLimit: Infinity })(createMask(gBA)).raw;
-  console.log(`${id} estimate on BA(1000,3): ${est.toPrecision(8)} vs exact ${exact.toPrecision(8)} (relative error ${(Math.abs(est - exact) / exact).toExponential(1)})`);
+  console.log(
+    `${id} estimate on BA(1000,3): ${est.toPrecision(8)} vs exact ${exact.toPrecision(8)} (relative error ${(Math.abs(est - exact) / exact).toExponential(1)})`,
+  );
 }
-console.log(`\nTargets: every metric ≥ 20× networkx (nb/nx ≤ 0.05); efficiency ≥ 5× igraph (nb/peer ≤ 0.2); largest_component and algebraic_connectivity on ER 1k–20k no slower than the peer (nb/peer ≤ 1).`);
+console.log(
+  `\nTargets: every metric ≥ 20× networkx (nb/nx ≤ 0.05); efficiency ≥ 5× igraph (nb/peer ≤ 0.2); largest_component and algebraic_connectivity on ER 1k–20k no slower than the peer (nb/peer ≤ 1).`,
+);
 console.log(verdicts.length ? verdicts.join('\n') : 'all targets met in this run');

@@ -42,10 +42,26 @@ for (const n of sizes) {
   git(repoDir, 'add', '.');
   git(repoDir, 'commit', '-qm', 'base');
   // The head: three links removed, spread over the design (never the seed clique's).
-  const cut = new Set([Math.floor(edges.length * 0.25), Math.floor(edges.length * 0.5), Math.floor(edges.length * 0.75)]);
-  writeFileSync(path.join(repoDir, 'core.net.yaml'), designYaml(n, edges.filter((_, i) => !cut.has(i)), `scaling ${n}`));
+  const cut = new Set([
+    Math.floor(edges.length * 0.25),
+    Math.floor(edges.length * 0.5),
+    Math.floor(edges.length * 0.75),
+  ]);
+  writeFileSync(
+    path.join(repoDir, 'core.net.yaml'),
+    designYaml(
+      n,
+      edges.filter((_, i) => !cut.has(i)),
+      `scaling ${n}`,
+    ),
+  );
   const report = path.join(repoDir, 'report.json');
-  const run = runProcess(process.execPath, [cli, 'check', '--threads', '1', '--mode', 'inform', '--json', report], repoDir, limit * 1000);
+  const run = runProcess(
+    process.execPath,
+    [cli, 'check', '--threads', '1', '--mode', 'inform', '--json', report],
+    repoDir,
+    limit * 1000,
+  );
   let realizations = '–';
   let verdict = run.timedOut ? 'stopped' : 'error';
   if (!run.timedOut && run.status === 0) {
@@ -76,8 +92,15 @@ if (done.length >= 2) {
 console.log('\n| nodes | time | realizations (head envelopes) | verdict, status | peak RSS |');
 console.log('|---:|---:|---|---|---:|');
 for (const r of rows) {
-  console.log(`| ${r.n.toLocaleString('en')} | ${r.timedOut ? `> ${limit} s` : `${r.seconds.toFixed(1)} s`} | ${r.realizations} | ${r.verdict} | ${Number.isFinite(r.rss) ? `${r.rss.toFixed(0)} MB` : '–'} |`);
+  console.log(
+    `| ${r.n.toLocaleString('en')} | ${r.timedOut ? `> ${limit} s` : `${r.seconds.toFixed(1)} s`} | ${r.realizations} | ${r.verdict} | ${Number.isFinite(r.rss) ? `${r.rss.toFixed(0)} MB` : '–'} |`,
+  );
 }
-console.log(`\nlog-log slope of time over n: ${Number.isFinite(slope) ? slope.toFixed(2) : 'n/a'} (over ${done.length} finished sizes)`);
+console.log(
+  `\nlog-log slope of time over n: ${Number.isFinite(slope) ? slope.toFixed(2) : 'n/a'} (over ${done.length} finished sizes)`,
+);
 const ten = rows.find((r) => r.n === 10_000);
-if (ten) console.log(`${ten.timedOut || ten.verdict === 'error' ? 'MISSED' : 'see   '}  10,000 nodes decided within the default budget on one core: ${ten.timedOut ? `stopped after ${limit} s` : `${ten.seconds.toFixed(1)} s, ${ten.realizations}`}`);
+if (ten)
+  console.log(
+    `${ten.timedOut || ten.verdict === 'error' ? 'MISSED' : 'see   '}  10,000 nodes decided within the default budget on one core: ${ten.timedOut ? `stopped after ${limit} s` : `${ten.seconds.toFixed(1)} s, ${ten.realizations}`}`,
+  );

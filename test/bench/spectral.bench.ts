@@ -37,7 +37,10 @@ function erLcc(n: number, seed: number): { n: number; edges: [number, number][] 
   const index = new Int32Array(n).fill(-1);
   let k = 0;
   for (let v = 0; v < n; v++) if (c.label[v] === c.largest) index[v] = k++;
-  return { n: k, edges: edges.filter(([a, b]) => index[a] >= 0 && index[b] >= 0).map(([a, b]) => [index[a], index[b]]) };
+  return {
+    n: k,
+    edges: edges.filter(([a, b]) => index[a] >= 0 && index[b] >= 0).map(([a, b]) => [index[a], index[b]]),
+  };
 }
 
 type Spec = { n: number; edges: [number, number][]; fiedler?: boolean; dense?: boolean };
@@ -46,7 +49,8 @@ for (const n of sizes) {
   graphs[`BA(${n / 1000}k, m=2)`] = { n, edges: barabasiAlbert(n, 2, n), fiedler: true };
   graphs[`ER-LCC(${n / 1000}k)`] = { ...erLcc(n, n), fiedler: true };
 }
-for (const n of [1000, 2000]) graphs[`BA(${n / 1000}k, m=2) natural`] = { n, edges: barabasiAlbert(n, 2, n + 1), dense: true };
+for (const n of [1000, 2000])
+  graphs[`BA(${n / 1000}k, m=2) natural`] = { n, edges: barabasiAlbert(n, 2, n + 1), dense: true };
 for (const n of [5000]) graphs[`BA(${n / 1000}k, m=2) natural`] = { n, edges: barabasiAlbert(n, 2, n + 1) };
 
 const dir = tempDir();
@@ -54,7 +58,16 @@ const specFile = path.join(dir, 'graphs.json');
 writeFileSync(specFile, JSON.stringify(graphs));
 console.log('peer: /usr/bin/python3 test/bench/spectral_peer.py …');
 const peer = pythonPeer('spectral_peer.py', [specFile]) as
-  | { out: { scipy: string; numpy: string; graphs: Record<string, { fiedler?: number; fiedler_seconds?: number; natural?: number; natural_seconds?: number }> } }
+  | {
+      out: {
+        scipy: string;
+        numpy: string;
+        graphs: Record<
+          string,
+          { fiedler?: number; fiedler_seconds?: number; natural?: number; natural_seconds?: number }
+        >;
+      };
+    }
   | undefined;
 rmSync(dir, { recursive: true, force: true });
 
@@ -91,8 +104,25 @@ for (const [name, spec] of Object.entries(graphs)) {
     lines.push(
       `${name.padEnd(22)} λ̄ = ${v.raw.toPrecision(10)}  netbrace ${seconds.toFixed(2)} s (${v.se === undefined ? 'exact' : `estimate, stated error ${stated.toExponential(1)}`})  NumPy eigvalsh ${p?.natural_seconds?.toFixed(2) ?? '–'} s${Number.isFinite(err) ? `  actual error ${err.toExponential(1)}` : ''}`,
     );
-    if (v.se !== undefined) lines.push(targetLine(`natural connectivity stated error, ${name}`, '≤ 1e-3', stated.toExponential(1), 'no peer estimate', stated <= 1e-3));
+    if (v.se !== undefined)
+      lines.push(
+        targetLine(
+          `natural connectivity stated error, ${name}`,
+          '≤ 1e-3',
+          stated.toExponential(1),
+          'no peer estimate',
+          stated <= 1e-3,
+        ),
+      );
   }
 }
 console.log(`SciPy ${peer?.out.scipy ?? '–'}, NumPy ${peer?.out.numpy ?? '–'}\n${lines.join('\n')}\n`);
-console.log(targetLine('algebraic connectivity vs eigsh(SM)', 'no slower', fiedlerAny ? (fiedlerAllMet ? 'all sizes' : 'slower on some') : '–', peer ? 'eigsh SM tol 1e-10' : 'peer unavailable', fiedlerAny ? fiedlerAllMet : undefined));
+console.log(
+  targetLine(
+    'algebraic connectivity vs eigsh(SM)',
+    'no slower',
+    fiedlerAny ? (fiedlerAllMet ? 'all sizes' : 'slower on some') : '–',
+    peer ? 'eigsh SM tol 1e-10' : 'peer unavailable',
+    fiedlerAny ? fiedlerAllMet : undefined,
+  ),
+);

@@ -30,7 +30,24 @@ const N = 1000;
 const edges = barabasiAlbert(N, 2, 1);
 const design = writeDesign(dir, 'ba1000.net.yaml', N, edges);
 const job = { realizations: 20, points: 11, until: 0.5 };
-const envelopeArgs = [cli, 'envelope', design, '--challenge', 'random-links', '--metric', 'efficiency', '--realizations', String(job.realizations), '--points', String(job.points), '--until', String(job.until), '--threads', '1', '--json'];
+const envelopeArgs = [
+  cli,
+  'envelope',
+  design,
+  '--challenge',
+  'random-links',
+  '--metric',
+  'efficiency',
+  '--realizations',
+  String(job.realizations),
+  '--points',
+  String(job.points),
+  '--until',
+  String(job.until),
+  '--threads',
+  '1',
+  '--json',
+];
 
 const version = bestRun(process.execPath, [cli, '--version'], 5);
 const whole = bestRun(process.execPath, envelopeArgs, 3);
@@ -119,20 +136,66 @@ const kernelMs = kernelSum / sampled;
 const edgesFile = path.join(dir, 'edges.json');
 writeFileSync(edgesFile, JSON.stringify({ n: N, edges, ...job }));
 const peerT = performance.now();
-const peer = pythonPeer('efficiency_peer.py', [edgesFile]) as { out: { version: string; compute_seconds: number; evaluations: number } } | undefined;
+const peer = pythonPeer('efficiency_peer.py', [edgesFile]) as
+  { out: { version: string; compute_seconds: number; evaluations: number } } | undefined;
 const peerWhole = (performance.now() - peerT) / 1000;
 rmSync(dir, { recursive: true, force: true });
 
 const s = (x: number) => `${x.toFixed(3)} s`;
 const ms = (x: number) => `${x.toFixed(2)} ms`;
-console.log(`design: Barabási–Albert, ${N} nodes, ${edges.length} links; random-links, efficiency, ${job.realizations} realizations × ${job.points} points to ${job.until * 100} %, 1 thread`);
-console.log(`netbrace: whole process ${s(whole.seconds)} (peak RSS ${whole.maxRssMb.toFixed(0)} MB); in process the engine took ${ms(engineMs)} for ${evaluations} evaluations`);
-console.log(`  (${evaluations} = realizations × grid points with a real removal count read between ⌊c⌋ and ⌈c⌉ removals: two evaluations per such point, engine.ts)`);
-console.log(`  time inside the metric ${ms(inMetric)} = ${ms(perEvalMs)} per evaluation; fixed cost of the run ${s(whole.seconds - inMetric / 1000)} (start-up, reading, planning, report)`);
-console.log(`  bit-parallel bound on ${sampled} of those masks: ${ms(boundMs)} per evaluation (⌈N'/64⌉ · D · measured 64-lane sweep); kernel on the same masks ${ms(kernelMs)}`);
-if (peer) console.log(`python-igraph ${peer.out.version}: whole process ${s(peerWhole)}, of which compute ${s(peer.out.compute_seconds)} for ${peer.out.evaluations} evaluations (${ms((1000 * peer.out.compute_seconds) / peer.out.evaluations)} each)`);
+console.log(
+  `design: Barabási–Albert, ${N} nodes, ${edges.length} links; random-links, efficiency, ${job.realizations} realizations × ${job.points} points to ${job.until * 100} %, 1 thread`,
+);
+console.log(
+  `netbrace: whole process ${s(whole.seconds)} (peak RSS ${whole.maxRssMb.toFixed(0)} MB); in process the engine took ${ms(engineMs)} for ${evaluations} evaluations`,
+);
+console.log(
+  `  (${evaluations} = realizations × grid points with a real removal count read between ⌊c⌋ and ⌈c⌉ removals: two evaluations per such point, engine.ts)`,
+);
+console.log(
+  `  time inside the metric ${ms(inMetric)} = ${ms(perEvalMs)} per evaluation; fixed cost of the run ${s(whole.seconds - inMetric / 1000)} (start-up, reading, planning, report)`,
+);
+console.log(
+  `  bit-parallel bound on ${sampled} of those masks: ${ms(boundMs)} per evaluation (⌈N'/64⌉ · D · measured 64-lane sweep); kernel on the same masks ${ms(kernelMs)}`,
+);
+if (peer)
+  console.log(
+    `python-igraph ${peer.out.version}: whole process ${s(peerWhole)}, of which compute ${s(peer.out.compute_seconds)} for ${peer.out.evaluations} evaluations (${ms((1000 * peer.out.compute_seconds) / peer.out.evaluations)} each)`,
+  );
 console.log('');
-console.log(targetLine('whole process vs python-igraph (whole process)', '≤ 0.1×', `${s(whole.seconds)}${peer ? ` = ${(whole.seconds / peerWhole).toFixed(2)}×` : ''}`, peer ? s(peerWhole) : 'peer unavailable', peer ? whole.seconds <= 0.1 * peerWhole : undefined));
-console.log(targetLine('per evaluation vs bit-parallel bound', '≤ 2×', `${ms(kernelMs)} = ${(kernelMs / boundMs).toFixed(2)}×`, `bound ${ms(boundMs)}`, kernelMs <= 2 * boundMs));
-console.log(targetLine('start-up (node cli.js --version)', '< 0.2 s', s(version.seconds), `bare node ${s(bestRun(process.execPath, ['-e', '0'], 5).seconds)}`, version.seconds < 0.2));
-console.log(targetLine('fixed cost of the evaluation run', '< 0.2 s', s(whole.seconds - inMetric / 1000), '', whole.seconds - inMetric / 1000 < 0.2));
+console.log(
+  targetLine(
+    'whole process vs python-igraph (whole process)',
+    '≤ 0.1×',
+    `${s(whole.seconds)}${peer ? ` = ${(whole.seconds / peerWhole).toFixed(2)}×` : ''}`,
+    peer ? s(peerWhole) : 'peer unavailable',
+    peer ? whole.seconds <= 0.1 * peerWhole : undefined,
+  ),
+);
+console.log(
+  targetLine(
+    'per evaluation vs bit-parallel bound',
+    '≤ 2×',
+    `${ms(kernelMs)} = ${(kernelMs / boundMs).toFixed(2)}×`,
+    `bound ${ms(boundMs)}`,
+    kernelMs <= 2 * boundMs,
+  ),
+);
+console.log(
+  targetLine(
+    'start-up (node cli.js --version)',
+    '< 0.2 s',
+    s(version.seconds),
+    `bare node ${s(bestRun(process.execPath, ['-e', '0'], 5).seconds)}`,
+    version.seconds < 0.2,
+  ),
+);
+console.log(
+  targetLine(
+    'fixed cost of the evaluation run',
+    '< 0.2 s',
+    s(whole.seconds - inMetric / 1000),
+    '',
+    whole.seconds - inMetric / 1000 < 0.2,
+  ),
+);

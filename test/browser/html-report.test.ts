@@ -27,7 +27,9 @@ const haveChromium = existsSync(CHROMIUM);
 if (!haveChromium && inCI) {
   describe('HTML report in chromium', () => {
     it('needs chromium', () => {
-      throw new Error(`chromium is missing at ${CHROMIUM}: install Debian's package (apt-get install chromium); the browser test cannot run without it`);
+      throw new Error(
+        `chromium is missing at ${CHROMIUM}: install Debian's package (apt-get install chromium); the browser test cannot run without it`,
+      );
     });
   });
 }
@@ -132,7 +134,12 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
       f.requirements.forEach((r, j) => {
         const json = (v: number | null) => (v === null ? '' : String(v));
         const line = requirementLine(r, f.findings);
-        expect(rows[i][j]).toMatchObject({ base: json(r.base), head: json(r.head), delta: json(r.delta), status: r.status });
+        expect(rows[i][j]).toMatchObject({
+          base: json(r.base),
+          head: json(r.head),
+          delta: json(r.delta),
+          status: r.status,
+        });
         expect(rows[i][j].text).toBe(`${line.mark}${plainSentence(line.sentence)}`);
       });
     });
@@ -146,7 +153,8 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
     const layout = await page.$eval('body', (body) => {
       const document = body.ownerDocument;
       const scrollY = document.defaultView!.scrollY;
-      const top = (e: { getBoundingClientRect(): { top: number } } | null) => (e ? e.getBoundingClientRect().top + scrollY : null);
+      const top = (e: { getBoundingClientRect(): { top: number } } | null) =>
+        e ? e.getBoundingClientRect().top + scrollY : null;
       return {
         verdict: top(document.querySelector('#verdict')),
         cautionLine: top(document.querySelector('#caution-line')),
@@ -188,7 +196,11 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
       const cs = h.ownerDocument.defaultView!.getComputedStyle(h);
       const r = h.getBoundingClientRect();
       const main = h.ownerDocument.querySelector('main')!.getBoundingClientRect();
-      return { border: [cs.borderTopWidth, cs.borderRightWidth, cs.borderBottomWidth, cs.borderLeftWidth], left: r.left, mainLeft: main.left };
+      return {
+        border: [cs.borderTopWidth, cs.borderRightWidth, cs.borderBottomWidth, cs.borderLeftWidth],
+        left: r.left,
+        mainLeft: main.left,
+      };
     });
     expect(box.border).toEqual(['0px', '0px', '0px', '0px']);
     expect(Math.abs(box.left - box.mainLeft)).toBeLessThan(2);
@@ -198,9 +210,17 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
   it('names every line of every chart in the chart\u2019s own legend', async () => {
     const charts = await page.$$eval('svg.nb-chart', (svgs) =>
       svgs.map((svg) => ({
-        drawn: [...svg.querySelectorAll('[data-series]')].map((e) => [e.getAttribute('data-id'), e.getAttribute('aria-label')]),
-        legend: [...svg.querySelectorAll('.nb-legend [data-legend]')].map((g) => [g.getAttribute('data-legend'), g.querySelector('text')?.textContent ?? '']),
-        visible: [...svg.querySelectorAll('.nb-legend [data-legend] text')].every((t) => (t as unknown as { getBBox(): { width: number } }).getBBox().width > 10),
+        drawn: [...svg.querySelectorAll('[data-series]')].map((e) => [
+          e.getAttribute('data-id'),
+          e.getAttribute('aria-label'),
+        ]),
+        legend: [...svg.querySelectorAll('.nb-legend [data-legend]')].map((g) => [
+          g.getAttribute('data-legend'),
+          g.querySelector('text')?.textContent ?? '',
+        ]),
+        visible: [...svg.querySelectorAll('.nb-legend [data-legend] text')].every(
+          (t) => (t as unknown as { getBBox(): { width: number } }).getBBox().width > 10,
+        ),
       })),
     );
     expect(charts.length).toBeGreaterThan(0);
@@ -214,7 +234,11 @@ describe.skipIf(!haveChromium)('HTML report in chromium', () => {
     const charts = await page.$$eval('svg.nb-chart', (svgs) =>
       svgs.map((svg) => {
         const [t, d] = (svg.getAttribute('aria-labelledby') ?? '').split(' ');
-        return { role: svg.getAttribute('role'), title: svg.ownerDocument.getElementById(t)?.textContent, desc: svg.ownerDocument.getElementById(d)?.textContent };
+        return {
+          role: svg.getAttribute('role'),
+          title: svg.ownerDocument.getElementById(t)?.textContent,
+          desc: svg.ownerDocument.getElementById(d)?.textContent,
+        };
       }),
     );
     expect(charts.length).toBeGreaterThan(0);

@@ -47,7 +47,10 @@ async function demoReport(): Promise<Report> {
     }
   }
   const policy = readFileSync(path.join(demo, 'policy.yaml'), 'utf8');
-  const repo = { base: { '.netbrace.yaml': policy, [DESIGN]: base }, head: { '.netbrace.yaml': policy, [DESIGN]: head } };
+  const repo = {
+    base: { '.netbrace.yaml': policy, [DESIGN]: base },
+    head: { '.netbrace.yaml': policy, [DESIGN]: head },
+  };
   return (await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'block' }, memoryDeps(repo))).report;
 }
 
@@ -66,7 +69,16 @@ describe.skipIf(!haveChromium)('map in chromium', () => {
     context = await chromium.launchPersistentContext(path.join(dir, 'profile'), {
       executablePath: CHROMIUM,
       headless: true,
-      args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      args: [
+        '--headless',
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-quic',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
       viewport: { width: 1200, height: 900 },
       deviceScaleFactor: 1,
     });
@@ -92,7 +104,12 @@ describe.skipIf(!haveChromium)('map in chromium', () => {
   it('draws every site and link of the report, each with a title naming it and its line', async () => {
     const map = report.files[0].map as DesignMap;
     const drawn = await page.$$eval('figure.map svg [data-el]', (els) =>
-      els.map((e) => ({ el: e.getAttribute('data-el'), id: e.getAttribute('data-id'), side: e.getAttribute('data-side'), title: e.querySelector(':scope > title')?.textContent ?? null })),
+      els.map((e) => ({
+        el: e.getAttribute('data-el'),
+        id: e.getAttribute('data-id'),
+        side: e.getAttribute('data-side'),
+        title: e.querySelector(':scope > title')?.textContent ?? null,
+      })),
     );
     const sites = drawn.filter((d) => d.el === 'site');
     const links = drawn.filter((d) => d.el === 'link');
@@ -105,7 +122,10 @@ describe.skipIf(!haveChromium)('map in chromium', () => {
       expect(title).toContain(`line ${n.line}`);
       if (n.label) expect(title).toContain(n.label);
     }
-    const removed = links.filter((l) => l.side === 'base').map((l) => l.id).sort();
+    const removed = links
+      .filter((l) => l.side === 'base')
+      .map((l) => l.id)
+      .sort();
     expect(removed).toEqual(['ibberlin-tarnquist', 'kaskeld-fenwhistle']);
     // The new bridges and cut sites are titled as such; the weakest sequence is numbered.
     for (const f of report.files[0].findings.filter((x) => x.rule === 'new-bridge')) {
@@ -113,14 +133,24 @@ describe.skipIf(!haveChromium)('map in chromium', () => {
     }
     expect(drawn.filter((d) => d.el === 'step').length).toBeGreaterThan(0);
     expect(drawn.some((d) => d.el === 'proposed')).toBe(true);
-    const svg = await page.$eval('figure.map svg', (s) => ({ w: s.getBoundingClientRect().width, h: s.getBoundingClientRect().height, title: s.querySelector('title')?.textContent }));
+    const svg = await page.$eval('figure.map svg', (s) => ({
+      w: s.getBoundingClientRect().width,
+      h: s.getBoundingClientRect().height,
+      title: s.querySelector('title')?.textContent,
+    }));
     expect(svg.w).toBeGreaterThan(500);
     expect(svg.h).toBeGreaterThan(400);
     expect(svg.title).toBe(`Map of ${DESIGN}`);
   });
 
   it('lists the suggestions of the report, and the first holds', async () => {
-    const rows = await page.$$eval('table.mend tbody tr', (trs) => trs.map((tr) => ({ kind: tr.getAttribute('data-kind'), holds: tr.getAttribute('data-holds'), text: tr.textContent ?? '' })));
+    const rows = await page.$$eval('table.mend tbody tr', (trs) =>
+      trs.map((tr) => ({
+        kind: tr.getAttribute('data-kind'),
+        holds: tr.getAttribute('data-holds'),
+        text: tr.textContent ?? '',
+      })),
+    );
     const mend = report.files[0].mend!;
     expect(rows.map((r) => r.kind)).toEqual(mend.suggestions.map((s) => s.kind));
     expect(rows[0].holds).toBe('true');

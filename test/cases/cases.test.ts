@@ -22,14 +22,22 @@ describe('fixture cases through netbrace check', () => {
         if (fx.status) expect(f.status, JSON.stringify(f.findings.map((x) => x.message))).toBe(fx.status);
         const rules = f.findings.map((x) => `${x.rule}:${x.severity}`);
         for (const want of fx.findings ?? []) {
-          expect(rules.some((r) => r === want || r.startsWith(`${want}:`)), `${want} among ${rules.join(', ')}`).toBe(true);
+          expect(
+            rules.some((r) => r === want || r.startsWith(`${want}:`)),
+            `${want} among ${rules.join(', ')}`,
+          ).toBe(true);
         }
         for (const not of fx.noFindings ?? []) {
-          expect(rules.some((r) => r === not || r.startsWith(`${not}:`)), `${not} not among ${rules.join(', ')}`).toBe(false);
+          expect(
+            rules.some((r) => r === not || r.startsWith(`${not}:`)),
+            `${not} not among ${rules.join(', ')}`,
+          ).toBe(false);
         }
         for (const m of fx.messages ?? []) expect(f.findings.map((x) => x.message).join('\n')).toContain(m);
         if (fx.deltaZero) {
-          const withBoth = f.requirements.filter((r) => r.base !== null && r.head !== null && !(fx.deltaZeroExcept ?? []).includes(r.id));
+          const withBoth = f.requirements.filter(
+            (r) => r.base !== null && r.head !== null && !(fx.deltaZeroExcept ?? []).includes(r.id),
+          );
           expect(withBoth.length).toBeGreaterThan(0);
           for (const r of withBoth) expect(r.delta, r.id).toBe(0);
         }

@@ -20,7 +20,11 @@ function withoutLines(value: unknown): unknown {
   }
   if (Array.isArray(value)) return value.map(withoutLines);
   if (value !== null && typeof value === 'object') {
-    return Object.fromEntries(Object.entries(value).filter(([k]) => k !== 'line').map(([k, v]) => [k, withoutLines(v)]));
+    return Object.fromEntries(
+      Object.entries(value)
+        .filter(([k]) => k !== 'line')
+        .map(([k, v]) => [k, withoutLines(v)]),
+    );
   }
   return value;
 }
@@ -37,7 +41,8 @@ describe('a reordered design evaluates exactly as the original', () => {
       expect(head!.envelopes.length + head!.attacks.length + head!.contingencies.length).toBeGreaterThan(2);
       const comparable = (ev: typeof head) => {
         const out = withoutLines(ev) as { structure: { bridges: { id: string }[]; cutNodes: { id: string }[] } };
-        for (const list of [out.structure.bridges, out.structure.cutNodes]) list.sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+        for (const list of [out.structure.bridges, out.structure.cutNodes])
+          list.sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
         return out;
       };
       expect(comparable(head)).toEqual(comparable(base));

@@ -12,16 +12,26 @@ import { sparseVariants } from './sparse-design.js';
 
 afterAll(cleanupCases);
 
-const read = (name: string, side: string) => readFileSync(path.join(casesRoot, name, side, 'networks', 'torus.csv'), 'utf8');
+const read = (name: string, side: string) =>
+  readFileSync(path.join(casesRoot, name, side, 'networks', 'torus.csv'), 'utf8');
 
 describe('the generated sparse design', () => {
   it('the fixture files are the generator output (1,000 sites, small enough to keep)', () => {
     const v = sparseVariants();
-    for (const name of ['engine-sparse-benign', 'engine-sparse-harmful', 'engine-sparse-unchanged']) expect(read(name, 'base')).toBe(v.base);
+    for (const name of ['engine-sparse-benign', 'engine-sparse-harmful', 'engine-sparse-unchanged'])
+      expect(read(name, 'base')).toBe(v.base);
     expect(read('engine-sparse-benign', 'head')).toBe(v.benign);
     expect(read('engine-sparse-harmful', 'head')).toBe(v.harmful);
     expect(read('engine-sparse-unchanged', 'head')).toBe(v.reordered);
-    expect(new Set(v.base.split('\n').slice(1).flatMap((l) => l.split(',')).filter(Boolean)).size).toBe(1000);
+    expect(
+      new Set(
+        v.base
+          .split('\n')
+          .slice(1)
+          .flatMap((l) => l.split(','))
+          .filter(Boolean),
+      ).size,
+    ).toBe(1000);
     expect(v.base.length).toBeLessThan(300_000);
   });
 });
@@ -40,7 +50,9 @@ describe('decided in batches within the default budget', () => {
         expect(env.realizations).toBeLessThan(200);
         expect(env.maxRealizations).toBeGreaterThan(env.realizations);
       }
-      const random = f.requirements.filter((r) => r.id === 'area-floor:node-failures' || r.id === 'area-floor:link-failures');
+      const random = f.requirements.filter(
+        (r) => r.id === 'area-floor:node-failures' || r.id === 'area-floor:link-failures',
+      );
       expect(random).toHaveLength(2);
       for (const r of random) {
         expect(r.status).toBe(status);

@@ -3,7 +3,17 @@
 // removed) and what `netbrace check` must answer (expect.yaml). runCase builds a scratch git
 // repository from it and runs the real command, as a user would.
 import { execFileSync } from 'node:child_process';
-import { cpSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import {
+  cpSync,
+  existsSync,
+  mkdirSync,
+  mkdtempSync,
+  readdirSync,
+  readFileSync,
+  rmSync,
+  statSync,
+  writeFileSync,
+} from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import YAML from 'yaml';
@@ -76,7 +86,9 @@ function overlay(from: string, to: string): void {
 }
 
 export function caseNames(): string[] {
-  return readdirSync(casesRoot).filter((n) => existsSync(path.join(casesRoot, n, 'expect.yaml'))).sort();
+  return readdirSync(casesRoot)
+    .filter((n) => existsSync(path.join(casesRoot, n, 'expect.yaml')))
+    .sort();
 }
 
 export function readExpectation(name: string): CaseExpectation {
@@ -101,7 +113,17 @@ export async function runCase(name: string, extraArgs: string[] = []): Promise<C
   git(dir, 'commit', '-q', '--allow-empty', '-m', 'change');
   const expectation = readExpectation(name);
   const io = recordIO(dir, { NO_COLOR: '1' });
-  const args = ['check', '--base', 'main', '--head', 'change', '--json', '.out/report.json', ...(expectation.args ?? []), ...extraArgs];
+  const args = [
+    'check',
+    '--base',
+    'main',
+    '--head',
+    'change',
+    '--json',
+    '.out/report.json',
+    ...(expectation.args ?? []),
+    ...extraArgs,
+  ];
   const code = await main(args, io);
   const reportPath = path.join(dir, '.out', 'report.json');
   const report = existsSync(reportPath) ? (JSON.parse(readFileSync(reportPath, 'utf8')) as Report) : null;

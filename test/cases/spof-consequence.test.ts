@@ -55,11 +55,14 @@ describe('single points of failure: costs, labels, renames, hardening', () => {
     expect(worst.consequence).toEqual(duct.consequence);
     expect(f.changes?.added).toEqual([{ id: 'towpath', kind: 'group', line: 31 }]);
     // Every view says it in one sentence.
-    const told = 'cuts off Old Mill (mill, line 7), Quarry Hill (quarry, line 9) and Ridgeway (ridge, line 11) from the largest part; 1 of 3 demands (volume 10 of 17) loses every path.';
+    const told =
+      'cuts off Old Mill (mill, line 7), Quarry Hill (quarry, line 9) and Ridgeway (ridge, line 11) from the largest part; 1 of 3 demands (volume 10 of 17) loses every path.';
     expect(run.out.replace(/\s+/g, ' ').replace(/\u00a0/g, ' ')).toContain(`losing it ${told}`);
     const md = renderSummary(run.report!);
     // The summary words it from the consequence: labels as text, ids in code spans.
-    expect(md).toContain('losing it cuts off Old Mill (`mill`, line 7), Quarry Hill (`quarry`, line 9) and Ridgeway (`ridge`, line 11) from the largest part; 1 of 3 demands (volume 10 of 17) loses every path.');
+    expect(md).toContain(
+      'losing it cuts off Old Mill (`mill`, line 7), Quarry Hill (`quarry`, line 9) and Ridgeway (`ridge`, line 11) from the largest part; 1 of 3 demands (volume 10 of 17) loses every path.',
+    );
     expect(md).toContain('These removals cut off Old Mill (`mill`, line 7)');
     expect(renderHtml(run.report!)).toContain('losing it cuts off Old Mill (<code>mill</code>, line 7)');
   });
@@ -70,7 +73,12 @@ describe('single points of failure: costs, labels, renames, hardening', () => {
     expect(f.changes).toEqual({
       added: [],
       removed: [],
-      renamed: [{ from: { id: 'weir', kind: 'node', line: 9, label: 'Weir Lane' }, to: { id: 'weir-lane', kind: 'node', line: 9, label: 'Weir Lane' } }],
+      renamed: [
+        {
+          from: { id: 'weir', kind: 'node', line: 9, label: 'Weir Lane' },
+          to: { id: 'weir-lane', kind: 'node', line: 9, label: 'Weir Lane' },
+        },
+      ],
     });
     // Bridges and cut nodes in rows of their own: 4 weak points on each side, none new.
     const spof = f.requirements.filter((r) => r.id.startsWith('no-new-spof/'));
@@ -85,15 +93,31 @@ describe('single points of failure: costs, labels, renames, hardening', () => {
     const f = fileOf(run.report);
     const hardened = f.changes?.hardened ?? [];
     expect(hardened.map((e) => e.id)).toEqual([
-      'harbour', 'mill', 'quarry', 'ridge', 'weir', 'orchard',
-      'harbour\u2014mill', 'mill\u2014quarry', 'quarry\u2014ridge', 'ridge\u2014weir', 'weir\u2014orchard',
+      'harbour',
+      'mill',
+      'quarry',
+      'ridge',
+      'weir',
+      'orchard',
+      'harbour\u2014mill',
+      'mill\u2014quarry',
+      'quarry\u2014ridge',
+      'ridge\u2014weir',
+      'weir\u2014orchard',
     ]);
     expect(hardened.every((e) => e.hardened)).toBe(true);
     const hidden = f.findings.filter((x) => x.rule === 'hardened-weak-point');
     // A path of six sites: five links are bridges and the four inner sites cut nodes (textbook fact).
     expect(hidden.map((x) => x.elements[0].id)).toEqual([
-      'harbour\u2014mill', 'mill\u2014quarry', 'quarry\u2014ridge', 'ridge\u2014weir', 'weir\u2014orchard',
-      'mill', 'quarry', 'ridge', 'weir',
+      'harbour\u2014mill',
+      'mill\u2014quarry',
+      'quarry\u2014ridge',
+      'ridge\u2014weir',
+      'weir\u2014orchard',
+      'mill',
+      'quarry',
+      'ridge',
+      'weir',
     ]);
     expect(hidden.every((x) => x.severity === 'warn')).toBe(true);
     // Losing the middle link quarry–ridge leaves 3 | 3: ridge, weir and orchard are cut off.

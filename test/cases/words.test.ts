@@ -35,7 +35,11 @@ function only(report: Report | null): FileReport {
 describe('report files that cannot be written', () => {
   // Each is a path the user named; the verdict is printed before the error, and the run exits 2.
   const targets: [string, string, RegExp][] = [
-    ['a directory that cannot be created', '/proc/netbrace-none/report.json', /its directory does not exist and cannot be created \(ENOENT\)/],
+    [
+      'a directory that cannot be created',
+      '/proc/netbrace-none/report.json',
+      /its directory does not exist and cannot be created \(ENOENT\)/,
+    ],
     ['an existing directory', '.', /it is a directory \(EISDIR\)/],
     ['a path below a regular file', '.netbrace.yaml/report.json', /a part of the path is not a directory \(ENOTDIR\)/],
     ['a read-only pseudo file', '/proc/version', /\((EIO|EACCES|EPERM|EROFS)\)/],
@@ -65,12 +69,27 @@ describe('a metric the design cannot support is an error naming the design and t
   const dir = mkdtempSync(path.join(os.tmpdir(), 'netbrace-words-'));
   scratch.push(dir);
   // Invented triangle with no demands and no link lengths.
-  writeFileSync(path.join(dir, 'moor.net.yaml'), 'nodes:\n  - id: cairn\n  - id: tarn\n  - id: heath\nlinks:\n  - between: [cairn, tarn]\n  - between: [tarn, heath]\n  - between: [heath, cairn]\n');
+  writeFileSync(
+    path.join(dir, 'moor.net.yaml'),
+    'nodes:\n  - id: cairn\n  - id: tarn\n  - id: heath\nlinks:\n  - between: [cairn, tarn]\n  - between: [tarn, heath]\n  - between: [heath, cairn]\n',
+  );
 
   const cases: [string, string[], string][] = [
-    ['explain --metric demand_served', ['explain', 'moor.net.yaml', '--metric', 'demand_served'], 'metric demand_served needs demands \u2014 '],
-    ['explain --metric weighted_efficiency', ['explain', 'moor.net.yaml', '--metric', 'weighted_efficiency'], 'metric weighted_efficiency needs a latency, length or weight > 0 on every link \u2014 '],
-    ['envelope --metric demand_served', ['envelope', 'moor.net.yaml', '--metric', 'demand_served', '--challenge', 'random-nodes'], 'metric demand_served needs demands \u2014 '],
+    [
+      'explain --metric demand_served',
+      ['explain', 'moor.net.yaml', '--metric', 'demand_served'],
+      'metric demand_served needs demands \u2014 ',
+    ],
+    [
+      'explain --metric weighted_efficiency',
+      ['explain', 'moor.net.yaml', '--metric', 'weighted_efficiency'],
+      'metric weighted_efficiency needs a latency, length or weight > 0 on every link \u2014 ',
+    ],
+    [
+      'envelope --metric demand_served',
+      ['envelope', 'moor.net.yaml', '--metric', 'demand_served', '--challenge', 'random-nodes'],
+      'metric demand_served needs demands \u2014 ',
+    ],
     [
       'envelope --score with demand_served',
       ['envelope', 'moor.net.yaml', '--score', 'largest_component=1,demand_served=1', '--challenge', 'degree'],
@@ -170,7 +189,10 @@ describe('a NaN or infinite value is never a pass', () => {
   }
 
   it('the same run without poison passes (the fixture itself is fine)', async () => {
-    const { report, exitCode } = await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'block', paths: ['ring.net.yaml'] }, memoryDeps(repo));
+    const { report, exitCode } = await runGate(
+      { base: 'base', head: 'head', policySource: 'base', mode: 'block', paths: ['ring.net.yaml'] },
+      memoryDeps(repo),
+    );
     expect(exitCode).toBe(0);
     expect(only(report).requirements.map((r) => r.status)).toEqual(['holds', 'holds']);
   });
@@ -181,17 +203,25 @@ describe('views title and word findings by what the judging found', () => {
     const run = await runCase('words-deciding-digits');
     const report = run.report!;
     const about = (challenge: string) =>
-      planAnnotations(report).annotations.find((a) => a.rule === 'regression' && a.message.startsWith(`area of "${challenge}"`));
+      planAnnotations(report).annotations.find(
+        (a) => a.rule === 'regression' && a.message.startsWith(`area of "${challenge}"`),
+      );
     expect(about('link-failures')?.title).toBe('netbrace: requirement weakened');
     expect(about('site-failures')?.title).toBe('netbrace: robustness dropped within the allowance');
     expect(about('site-failures')?.level).toBe('notice');
     // The summary words each requirement from the report's numbers: the drop within the
     // allowance holds, the one beyond it is weakened, at the deciding digits the gate recorded.
     const md = renderSummary(report);
-    expect(md).toContain('- \u25A1 holds \u00b7 area, random site removals 0.291 \u2192 0.277 (\u22120.014 \u00b1 0.002), tracked (no floor), allowed drop 0.030\n');
-    expect(md).toContain('- \u25A0 weakened \u00b7 area, random link removals 0.46767 \u2192 0.43784 (\u22120.02983 \u00b1 0.00153), tracked (no floor), allowed drop 0.02980\n');
+    expect(md).toContain(
+      '- \u25A1 holds \u00b7 area, random site removals 0.291 \u2192 0.277 (\u22120.014 \u00b1 0.002), tracked (no floor), allowed drop 0.030\n',
+    );
+    expect(md).toContain(
+      '- \u25A0 weakened \u00b7 area, random link removals 0.46767 \u2192 0.43784 (\u22120.02983 \u00b1 0.00153), tracked (no floor), allowed drop 0.02980\n',
+    );
     // The numbers travel as data too: the allowance each drop was judged against.
-    const weakened = only(report).findings.find((x) => x.requirement === 'area-floor:link-failures' && x.rule === 'regression')!;
+    const weakened = only(report).findings.find(
+      (x) => x.requirement === 'area-floor:link-failures' && x.rule === 'regression',
+    )!;
     expect([weakened.status, weakened.allowance]).toEqual(['weakened', 0.0298]);
     const sarif = JSON.stringify(renderSarif(report));
     expect(sarif).toContain('"allowance":0.0298');

@@ -49,7 +49,11 @@ function naiveAdaptive(g: CompactGraph, kind: 'node' | 'link', steps: number): n
   return out;
 }
 
-const graphArb = fc.record({ n: fc.integer({ min: 1, max: 30 }), l: fc.integer({ min: 0, max: 70 }), seed: fc.nat(10_000) });
+const graphArb = fc.record({
+  n: fc.integer({ min: 1, max: 30 }),
+  l: fc.integer({ min: 0, max: 70 }),
+  seed: fc.nat(10_000),
+});
 
 describe('targeted attack kernels', () => {
   it('adaptive degree with buckets equals recomputing every degree at each step', () => {
@@ -84,14 +88,23 @@ describe('targeted attack kernels', () => {
 
   it('break ties to the element first in the file and never remove hardened nodes', () => {
     // A 4-cycle: every node has degree 2 and the same betweenness.
-    const c4 = graphFromEdges(4, [[0, 1], [1, 2], [2, 3], [3, 0]]);
+    const c4 = graphFromEdges(4, [
+      [0, 1],
+      [1, 2],
+      [2, 3],
+      [3, 0],
+    ]);
     expect(Array.from(staticDegreeOrder(c4, 4))).toEqual([0, 1, 2, 3]);
     // After node 0 goes, node 2 is the only one left with degree 2.
     expect(Array.from(adaptiveDegreeOrder(c4, 4))).toEqual([0, 2, 1, 3]);
     const bc = nodeBetweenness(c4);
     expect(bc[0]).toBeCloseTo(bc[1], 12);
     // Star with a hardened hub: the hub never goes.
-    const star = graphFromEdges(4, [[0, 1], [0, 2], [0, 3]]);
+    const star = graphFromEdges(4, [
+      [0, 1],
+      [0, 2],
+      [0, 3],
+    ]);
     const hardened = { ...star, nodeHardened: Uint8Array.from([1, 0, 0, 0]) };
     expect(Array.from(adaptiveDegreeOrder(hardened, 4))).toEqual([1, 2, 3]);
     expect(Array.from(adaptiveBetweennessOrder(hardened, 4))).toEqual([1, 2, 3]);

@@ -21,10 +21,24 @@ describe('netbrace envelope', () => {
   });
 
   it('prints the envelope JSON fields, worst case included when asked', async () => {
-    const { code, out } = await run(design, '--challenge', 'random-links', '--metric', 'largest_component', '--realizations', '30', '--worst-case', '2', '--json', '--threads', '1');
+    const { code, out } = await run(
+      design,
+      '--challenge',
+      'random-links',
+      '--metric',
+      'largest_component',
+      '--realizations',
+      '30',
+      '--worst-case',
+      '2',
+      '--json',
+      '--threads',
+      '1',
+    );
     expect(code).toBe(0);
     const j = JSON.parse(out);
-    for (const key of ['challenge', 'x', 'min', 'max', 'mean', 'quantiles', 'area', 'spread', 'weakest', 'worst_case']) expect(j).toHaveProperty(key);
+    for (const key of ['challenge', 'x', 'min', 'max', 'mean', 'quantiles', 'area', 'spread', 'weakest', 'worst_case'])
+      expect(j).toHaveProperty(key);
     expect(j.challenge).toBe('random-links');
     expect(Object.keys(j.quantiles)).toEqual(['0.1', '0.5', '0.9']);
     expect(j.quantiles['0.1']).toHaveProperty('lo');
@@ -36,7 +50,16 @@ describe('netbrace envelope', () => {
   });
 
   it('gives a targeted attack its curve at every removal step and its sequence', async () => {
-    const { code, out } = await run(design, '--challenge', 'degree', '--metric', 'largest_component', '--until', '0.2', '--json');
+    const { code, out } = await run(
+      design,
+      '--challenge',
+      'degree',
+      '--metric',
+      'largest_component',
+      '--until',
+      '0.2',
+      '--json',
+    );
     expect(code).toBe(0);
     const j = JSON.parse(out);
     expect(j.values.length).toBe(j.sequence.length + 1);
@@ -53,10 +76,22 @@ describe('netbrace envelope', () => {
   });
 
   it('accepts a weighted score and reports N−1 on links', async () => {
-    const { code, out } = await run(design, '--challenge', 'n-1', '--element', 'link', '--score', 'efficiency=2,largest_component=1', '--json');
+    const { code, out } = await run(
+      design,
+      '--challenge',
+      'n-1',
+      '--element',
+      'link',
+      '--score',
+      'efficiency=2,largest_component=1',
+      '--json',
+    );
     expect(code).toBe(0);
     const j = JSON.parse(out);
-    expect(j.r.metrics).toEqual([{ id: 'efficiency', weight: 2 }, { id: 'largest_component', weight: 1 }]);
+    expect(j.r.metrics).toEqual([
+      { id: 'efficiency', weight: 2 },
+      { id: 'largest_component', weight: 1 },
+    ]);
     expect(j.evaluated).toBe(j.total);
     expect(j.worst[0].elements).toHaveLength(1);
   });

@@ -2,7 +2,13 @@
 // normal-mixture boundary of Robbins (1970) in the form of Howard, Ramdas, McAuliffe & Sekhon
 // (Ann. Statist. 49(2):1055–1080, 2021), and its time-uniform coverage checked by simulation.
 import { describe, expect, it } from 'vitest';
-import { meanBounds, meanRadius, mixingPrecision, mixtureBoundary, quantileBounds } from '../../src/envelope/confidence-sequence.js';
+import {
+  meanBounds,
+  meanRadius,
+  mixingPrecision,
+  mixtureBoundary,
+  quantileBounds,
+} from '../../src/envelope/confidence-sequence.js';
 import { Xoshiro128 } from '../../src/random.js';
 
 describe('the normal-mixture boundary', () => {
@@ -30,7 +36,13 @@ describe('the normal-mixture boundary', () => {
 });
 
 /** Fraction of seeded streams whose running estimate ever leaves its bounds at a batch end. */
-function everMissed(streams: number, batches: number, draw: (rng: Xoshiro128) => number, bounds: (xs: number[]) => { lo: number; hi: number }, truth: number): number {
+function everMissed(
+  streams: number,
+  batches: number,
+  draw: (rng: Xoshiro128) => number,
+  bounds: (xs: number[]) => { lo: number; hi: number },
+  truth: number,
+): number {
   let missed = 0;
   for (let s = 0; s < streams; s++) {
     const rng = new Xoshiro128(1234, s);
@@ -56,12 +68,18 @@ describe('time-uniform coverage (simulated, 400 seeded streams of 16 batches of 
     expect(cs).toBeLessThanOrEqual(0.05);
     // A fixed-sample 95 % normal interval looked at after every batch leaves the truth far more
     // often than 5 % (optional stopping; Armitage, McPherson & Rowe, J. R. Stat. Soc. A 132:235, 1969, M).
-    const naive = everMissed(400, 16, bern, (xs) => {
-      const n = xs.length;
-      const m = xs.reduce((a, b) => a + b, 0) / n;
-      const h = 1.96 * Math.sqrt((m * (1 - m)) / n);
-      return { lo: m - h, hi: m + h };
-    }, 0.3);
+    const naive = everMissed(
+      400,
+      16,
+      bern,
+      (xs) => {
+        const n = xs.length;
+        const m = xs.reduce((a, b) => a + b, 0) / n;
+        const h = 1.96 * Math.sqrt((m * (1 - m)) / n);
+        return { lo: m - h, hi: m + h };
+      },
+      0.3,
+    );
     expect(naive).toBeGreaterThan(0.08);
   });
 

@@ -17,7 +17,11 @@ describe('evaluateDesign', () => {
   const g = randomGraph(60, 120, 3);
 
   it('stores each realization at each grid point exactly as the metric gives it on that mask', () => {
-    const spec: EvaluationSpec = { r: single('largest_component'), seed: 5, challenges: [{ challenge: 'random-nodes', realizations: 12 }] };
+    const spec: EvaluationSpec = {
+      r: single('largest_component'),
+      seed: 5,
+      challenges: [{ challenge: 'random-nodes', realizations: 12 }],
+    };
     const ev = evaluateDesign(g, spec);
     const params = resolveParams(g, spec.challenges[0], spec.seed);
     const bp = bandPlan(g, params);
@@ -54,7 +58,11 @@ describe('evaluateDesign', () => {
   });
 
   it('puts the requested x values on the grid (policy thresholds are exact grid points)', () => {
-    const ev = evaluateDesign(g, { r: single('largest_component'), seed: 1, challenges: [{ challenge: 'random-links', realizations: 5, at: [0.33, 0.1] }] });
+    const ev = evaluateDesign(g, {
+      r: single('largest_component'),
+      seed: 1,
+      challenges: [{ challenge: 'random-links', realizations: 5, at: [0.33, 0.1] }],
+    });
     expect(ev.evaluation.envelopes[0].x).toContain(0.33);
     expect(ev.evaluation.envelopes[0].x.filter((x) => x === 0.1)).toHaveLength(1);
   });
@@ -63,7 +71,10 @@ describe('evaluateDesign', () => {
     const ev = evaluateDesign(g, {
       r: single('efficiency'),
       seed: 1,
-      challenges: [{ challenge: 'random-links', realizations: 4, points: 3 }, { challenge: 'degree', until: 0.2 }],
+      challenges: [
+        { challenge: 'random-links', realizations: 4, points: 3 },
+        { challenge: 'degree', until: 0.2 },
+      ],
     });
     const w = ev.evaluation.envelopes[0].weakest[0];
     expect(w.steps).toEqual([30, 60]);
@@ -123,32 +134,48 @@ describe('evaluateDesign', () => {
   });
 
   it('switches an exact worst-case search to greedy when the budget is too small, and says so', () => {
-    const spec: EvaluationSpec = { r: single('efficiency'), seed: 1, challenges: [{ challenge: 'random-nodes', realizations: 10, worstCase: 2 }], budget: { maxWork: 2e6 } };
+    const spec: EvaluationSpec = {
+      r: single('efficiency'),
+      seed: 1,
+      challenges: [{ challenge: 'random-nodes', realizations: 10, worstCase: 2 }],
+      budget: { maxWork: 2e6 },
+    };
     const ev = evaluateDesign(g, spec);
     expect(ev.evaluation.envelopes[0].worstCase!.method).toBe('greedy');
     expect(ev.evaluation.degraded.join()).toMatch(/worst-case search greedy instead of exact/);
     const full = evaluateDesign(g, { ...spec, budget: undefined });
     expect(full.evaluation.envelopes[0].worstCase!.method).toBe('exact');
-    expect(full.evaluation.envelopes[0].worstCase!.values[1]).toBeLessThanOrEqual(ev.evaluation.envelopes[0].worstCase!.values[1]);
+    expect(full.evaluation.envelopes[0].worstCase!.values[1]).toBeLessThanOrEqual(
+      ev.evaluation.envelopes[0].worstCase!.values[1],
+    );
   });
 
   it('measures the attack gap against the most harmful attack of the same kind', () => {
     const ev = evaluateDesign(g, {
       r: single('largest_component'),
       seed: 1,
-      challenges: [{ challenge: 'random-nodes', realizations: 50 }, { challenge: 'degree', until: 0.5 }, { challenge: 'betweenness-adaptive', until: 0.5 }],
+      challenges: [
+        { challenge: 'random-nodes', realizations: 50 },
+        { challenge: 'degree', until: 0.5 },
+        { challenge: 'betweenness-adaptive', until: 0.5 },
+      ],
     });
     const env = ev.evaluation.envelopes[0];
     const worst = [...ev.evaluation.attacks].sort((a, b) => a.area - b.area)[0];
     expect(env.attackGap!.attack).toBe(worst.challenge);
     const lo = env.quantiles['0.1'].value;
-    const expected = env.x.slice(1).reduce((s, x, i) => s + lo[i + 1] - worst.values[Math.round(x * 60)], 0) / (env.x.length - 1);
+    const expected =
+      env.x.slice(1).reduce((s, x, i) => s + lo[i + 1] - worst.values[Math.round(x * 60)], 0) / (env.x.length - 1);
     expect(env.attackGap!.value).toBeCloseTo(expected, 12);
     expect(env.attackGap!.value).toBeGreaterThan(0);
   });
 
   it('skips challenges the design cannot support as not applicable, with a reason, not as a reduction', () => {
-    const ev = evaluateDesign(g, { r: single('largest_component'), seed: 1, challenges: [{ challenge: 'regional' }, { challenge: 'risk-groups' }] });
+    const ev = evaluateDesign(g, {
+      r: single('largest_component'),
+      seed: 1,
+      challenges: [{ challenge: 'regional' }, { challenge: 'risk-groups' }],
+    });
     expect(ev.evaluation.envelopes).toHaveLength(0);
     expect(ev.evaluation.degraded).toEqual([]);
     expect(ev.evaluation.notApplicable).toEqual([
@@ -158,7 +185,11 @@ describe('evaluateDesign', () => {
   });
 
   it('reports the structure of the intact design', () => {
-    const path = graphFromEdges(4, [[0, 1], [1, 2], [2, 3]]);
+    const path = graphFromEdges(4, [
+      [0, 1],
+      [1, 2],
+      [2, 3],
+    ]);
     const s = evaluateDesign(path, { r: single('largest_component'), seed: 1, challenges: [] }).evaluation.structure;
     expect(s).toMatchObject({ nodes: 4, links: 3, components: 1 });
     expect(s.bridges.map((b) => b.id)).toEqual(['e0', 'e1', 'e2']);
@@ -210,7 +241,11 @@ describe('shared-risk groups', () => {
   const d = design(nodes, links);
 
   it('worst first takes the group whose loss hurts most', () => {
-    const ev = evaluateDesign(d, { r: single('pair_connectivity'), seed: 1, challenges: [{ challenge: 'risk-groups-worst', until: 1 }] });
+    const ev = evaluateDesign(d, {
+      r: single('pair_connectivity'),
+      seed: 1,
+      challenges: [{ challenge: 'risk-groups-worst', until: 1 }],
+    });
     const a = ev.evaluation.attacks[0];
     // duct-2 cuts b-c and c-d: c is isolated (3 of 6 pairs left); duct-3 isolates d the same way;
     // the tie goes to duct-2, first in the file.
@@ -220,7 +255,11 @@ describe('shared-risk groups', () => {
   });
 
   it('random groups give a band over realizations on the group axis', () => {
-    const ev = evaluateDesign(d, { r: single('largest_component'), seed: 1, challenges: [{ challenge: 'risk-groups', realizations: 50, until: 1, points: 4 }] });
+    const ev = evaluateDesign(d, {
+      r: single('largest_component'),
+      seed: 1,
+      challenges: [{ challenge: 'risk-groups', realizations: 50, until: 1, points: 4 }],
+    });
     const env = ev.evaluation.envelopes[0];
     expect(env.kind).toBe('group');
     expect(env.max[3]).toBe(0.25);
@@ -232,21 +271,44 @@ describe('paired comparison with common random numbers', () => {
   const spec: EvaluationSpec = {
     r: single('largest_component'),
     seed: 4,
-    challenges: [{ challenge: 'random-nodes', realizations: 60 }, { challenge: 'degree', until: 0.3 }, { challenge: 'n-1' }],
+    challenges: [
+      { challenge: 'random-nodes', realizations: 60 },
+      { challenge: 'degree', until: 0.3 },
+      { challenge: 'n-1' },
+    ],
   };
   const g = preferentialGraph(80, 2, 9);
 
   it('an identical design evaluated twice gives delta exactly 0 and se 0 for every statistic', () => {
     const a = evaluateDesign(g, spec);
-    const b = evaluateDesign(graphFromEdges(g.n, Array.from({ length: g.m }, (_, e) => [g.linkSource[e], g.linkTarget[e]] as [number, number])), spec);
-    for (const st of [{ kind: 'quantile', q: 0.1 }, { kind: 'mean' }, { kind: 'min' }, { kind: 'area' }, { kind: 'spread' }] as const) {
+    const b = evaluateDesign(
+      graphFromEdges(
+        g.n,
+        Array.from({ length: g.m }, (_, e) => [g.linkSource[e], g.linkTarget[e]] as [number, number]),
+      ),
+      spec,
+    );
+    for (const st of [
+      { kind: 'quantile', q: 0.1 },
+      { kind: 'mean' },
+      { kind: 'min' },
+      { kind: 'area' },
+      { kind: 'spread' },
+    ] as const) {
       const p = pairedStatistic(a, b, 'random-nodes', st, 0.2);
       expect(p.delta).toBe(0);
       expect(p.se).toBe(0);
       expect(p.base).toBe(p.head);
     }
-    expect(pairedStatistic(a, b, 'random-nodes', { kind: 'quantile', q: 0.1 }, 0.2).base).toBe(a.evaluation.envelopes[0].quantiles['0.1'].value[4]);
-    expect(pairedStatistic(a, b, 'degree', { kind: 'mean' }, 0.1)).toEqual({ base: a.evaluation.attacks[0].values[8], head: a.evaluation.attacks[0].values[8], delta: 0, se: 0 });
+    expect(pairedStatistic(a, b, 'random-nodes', { kind: 'quantile', q: 0.1 }, 0.2).base).toBe(
+      a.evaluation.envelopes[0].quantiles['0.1'].value[4],
+    );
+    expect(pairedStatistic(a, b, 'degree', { kind: 'mean' }, 0.1)).toEqual({
+      base: a.evaluation.attacks[0].values[8],
+      head: a.evaluation.attacks[0].values[8],
+      delta: 0,
+      se: 0,
+    });
     expect(pairedStatistic(a, b, 'n-1', { kind: 'min' }).delta).toBe(0);
     expect(() => pairedStatistic(a, b, 'random-nodes', { kind: 'mean' }, 0.21)).toThrow(/not a grid point/);
   });
@@ -257,7 +319,11 @@ describe('paired comparison with common random numbers', () => {
     const edges = ref.graphs[0].edges as [number, number][];
     const base = graphFromEdges(34, edges);
     const head = graphFromEdges(34, [...edges, [11, 33]]);
-    const s: EvaluationSpec = { r: single('largest_component'), seed: 8, challenges: [{ challenge: 'random-nodes', realizations: 4000, until: 7 / 34, points: 2 }] };
+    const s: EvaluationSpec = {
+      r: single('largest_component'),
+      seed: 8,
+      challenges: [{ challenge: 'random-nodes', realizations: 4000, until: 7 / 34, points: 2 }],
+    };
     const eb = evaluateDesign(base, s);
     const eh = evaluateDesign(head, s);
     const sb = eb.samples.get('random-nodes')!;
@@ -288,8 +354,15 @@ describe('paired regional comparison', () => {
     const links = nodes.slice(1).map((v, i) => ({ a: nodes[i].id, b: v.id }));
     const base = design(nodes, [...links, { a: 'c0', b: 'c4' }]);
     // The new site's id comes first in id order, so epicentre indices shift between the sides.
-    const head = design([...nodes, { id: 'a-new', lat: 50.1, lon: 9 }], [...links, { a: 'c0', b: 'c4' }, { a: 'a-new', b: 'c2' }]);
-    const spec: EvaluationSpec = { r: single('largest_component'), seed: 1, challenges: [{ challenge: 'regional', until: 60, points: 4 }] };
+    const head = design(
+      [...nodes, { id: 'a-new', lat: 50.1, lon: 9 }],
+      [...links, { a: 'c0', b: 'c4' }, { a: 'a-new', b: 'c2' }],
+    );
+    const spec: EvaluationSpec = {
+      r: single('largest_component'),
+      seed: 1,
+      challenges: [{ challenge: 'regional', until: 60, points: 4 }],
+    };
     const eb = evaluateDesign(base, spec);
     const eh = evaluateDesign(head, spec);
     expect(eh.labels.get('regional')![0]).toBe('a-new');

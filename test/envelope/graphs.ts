@@ -54,7 +54,14 @@ export function design(nodes: SketchNode[], links: SketchLink[]): CompactGraph {
   return compileTopology({
     file: 'sketch.yaml',
     format: 'native-yaml',
-    nodes: nodes.map((v, i) => ({ id: v.id, lat: v.lat, lon: v.lon, hardened: v.hardened ?? false, pos: { line: i + 2, column: 1 }, attrs: {} })),
+    nodes: nodes.map((v, i) => ({
+      id: v.id,
+      lat: v.lat,
+      lon: v.lon,
+      hardened: v.hardened ?? false,
+      pos: { line: i + 2, column: 1 },
+      attrs: {},
+    })),
     links: links.map((l, e) => ({
       id: `${l.a}-${l.b}`,
       key: l.a < l.b ? `${l.a}-${l.b}` : `${l.b}-${l.a}`,

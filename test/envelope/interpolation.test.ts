@@ -18,7 +18,10 @@ import { countAt } from '../../src/challenges/units.js';
 import type { MetricId } from '../../src/metrics/types.js';
 
 const N = 7;
-const star = graphFromEdges(N, [1, 2, 3, 4, 5, 6].map((leaf) => [0, leaf] as [number, number]));
+const star = graphFromEdges(
+  N,
+  [1, 2, 3, 4, 5, 6].map((leaf) => [0, leaf] as [number, number]),
+);
 
 /** R of the star after the first k nodes of `order` are removed (closed forms above). */
 function starR(metric: 'largest_component' | 'efficiency', order: ArrayLike<number>, k: number): number {
@@ -56,7 +59,8 @@ describe('R at a fraction of nodes removed', () => {
         counts.forEach((c, j) => {
           const lo = Math.floor(c);
           const w = c - lo;
-          const expected = w === 0 ? starR(metric, order, lo) : (1 - w) * starR(metric, order, lo) + w * starR(metric, order, lo + 1);
+          const expected =
+            w === 0 ? starR(metric, order, lo) : (1 - w) * starR(metric, order, lo) + w * starR(metric, order, lo + 1);
           if (w === 0) expect(samples[r][j]).toBe(expected);
           else expect(Math.abs(samples[r][j] - expected)).toBeLessThan(1e-15);
           if (starR(metric, order, lo) !== starR(metric, order, Math.ceil(c))) between++;
@@ -72,7 +76,10 @@ describe('R at a fraction of nodes removed', () => {
   }
 
   it('an attack curve keeps a value per step, and is read between two steps at a fraction (path, degree attack)', () => {
-    const path = graphFromEdges(7, [0, 1, 2, 3, 4, 5].map((i) => [i, i + 1] as [number, number]));
+    const path = graphFromEdges(
+      7,
+      [0, 1, 2, 3, 4, 5].map((i) => [i, i + 1] as [number, number]),
+    );
     const ev = evaluateDesign(path, {
       r: { metrics: [{ id: 'largest_component', weight: 1 }], combine: 'mean' },
       seed: 1,

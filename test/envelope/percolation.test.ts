@@ -18,7 +18,11 @@ describe('Erdős–Rényi random node failure vs Callaway, Newman, Strogatz & Wa
   const c = 4;
   const M = 40;
   const g = randomGraph(N, (c * N) / 2, 2000);
-  const ev = evaluateDesign(g, { r: lcc, seed: 3, challenges: [{ challenge: 'random-nodes', realizations: M, until: 0.6, points: 13 }] });
+  const ev = evaluateDesign(g, {
+    r: lcc,
+    seed: 3,
+    challenges: [{ challenge: 'random-nodes', realizations: M, until: 0.6, points: 13 }],
+  });
   const env = ev.evaluation.envelopes[0];
   const samples = ev.samples.get('random-nodes')!;
 
@@ -36,7 +40,10 @@ describe('Erdős–Rényi random node failure vs Callaway, Newman, Strogatz & Wa
       const mean = col.reduce((a, v) => a + v, 0) / M;
       const sd = Math.sqrt(col.reduce((a, v) => a + (v - mean) ** 2, 0) / (M - 1));
       const tol = 4 * ((1.2533 * sd) / Math.sqrt(M)) + 2 / Math.sqrt(N);
-      expect(Math.abs(env.median[j] - theory), `f=${f}: median ${env.median[j]} vs theory ${theory} (tolerance ${tol})`).toBeLessThan(tol);
+      expect(
+        Math.abs(env.median[j] - theory),
+        `f=${f}: median ${env.median[j]} vs theory ${theory} (tolerance ${tol})`,
+      ).toBeLessThan(tol);
     }
   });
 

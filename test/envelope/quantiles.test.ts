@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { binomialPmf, normalQuantile, quantileEstimate, quantileRanks, quantileSorted } from '../../src/envelope/quantiles.js';
+import {
+  binomialPmf,
+  normalQuantile,
+  quantileEstimate,
+  quantileRanks,
+  quantileSorted,
+} from '../../src/envelope/quantiles.js';
 import { Xoshiro128 } from '../../src/random.js';
 
 describe('type 7 quantiles (Hyndman & Fan 1996)', () => {
@@ -49,28 +55,33 @@ describe('order-statistic confidence intervals (docs/METHODS.md §7.2, V)', () =
     [200, 0.1, true],
     [200, 0.5, true],
     [50, 0.9, false],
-  ])('cover the true quantile of Uniform(0,1) in at least 93.5 percent of 2000 trials (n = %i, p = %s)', (n, p, checkSe) => {
-    const rng = new Xoshiro128(2024, n * 10 + p * 10);
-    const sample = new Float64Array(n);
-    let covered = 0;
-    let seSum = 0;
-    const trials = 2000;
-    for (let t = 0; t < trials; t++) {
-      for (let i = 0; i < n; i++) sample[i] = rng.nextFloat();
-      sample.sort();
-      const est = quantileEstimate(sample, p);
-      if (est.lo <= p && p <= est.hi) covered++;
-      seSum += est.se;
-    }
-    const coverage = covered / trials;
-    expect(coverage, `observed coverage ${coverage}`).toBeGreaterThanOrEqual(0.95 - 3 * 0.0049);
-    expect(coverage, `observed coverage ${coverage}`).toBeLessThanOrEqual(0.995);
-    // The SE from the interval width agrees with the asymptotic √(p(1−p)/n)/f(x_p), f = 1, within
-    // 15 % (only where both ranks fall inside the sample; at n = 50, p = 0.9 the upper end is R's bound).
-    if (!checkSe) return;
-    const asymptotic = Math.sqrt((p * (1 - p)) / n);
-    expect(Math.abs(seSum / trials / asymptotic - 1), `mean SE ${seSum / trials} vs ${asymptotic}`).toBeLessThan(0.15);
-  });
+  ])(
+    'cover the true quantile of Uniform(0,1) in at least 93.5 percent of 2000 trials (n = %i, p = %s)',
+    (n, p, checkSe) => {
+      const rng = new Xoshiro128(2024, n * 10 + p * 10);
+      const sample = new Float64Array(n);
+      let covered = 0;
+      let seSum = 0;
+      const trials = 2000;
+      for (let t = 0; t < trials; t++) {
+        for (let i = 0; i < n; i++) sample[i] = rng.nextFloat();
+        sample.sort();
+        const est = quantileEstimate(sample, p);
+        if (est.lo <= p && p <= est.hi) covered++;
+        seSum += est.se;
+      }
+      const coverage = covered / trials;
+      expect(coverage, `observed coverage ${coverage}`).toBeGreaterThanOrEqual(0.95 - 3 * 0.0049);
+      expect(coverage, `observed coverage ${coverage}`).toBeLessThanOrEqual(0.995);
+      // The SE from the interval width agrees with the asymptotic √(p(1−p)/n)/f(x_p), f = 1, within
+      // 15 % (only where both ranks fall inside the sample; at n = 50, p = 0.9 the upper end is R's bound).
+      if (!checkSe) return;
+      const asymptotic = Math.sqrt((p * (1 - p)) / n);
+      expect(Math.abs(seSum / trials / asymptotic - 1), `mean SE ${seSum / trials} vs ${asymptotic}`).toBeLessThan(
+        0.15,
+      );
+    },
+  );
 
   it('stay conservative on a discrete distribution with ties (LCC-like values in steps of 1/34)', () => {
     // Binomial(34, 0.8)/34: the true 0.1-quantile is the smallest v with F(v) ≥ 0.1.

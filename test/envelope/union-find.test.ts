@@ -50,8 +50,24 @@ describe('reverse union–find curves (Newman & Ziff 2000)', () => {
   });
 
   it('handle parallel links and the empty graph', () => {
-    checkCurve(graphFromEdges(3, [[0, 1], [0, 1], [1, 2]]), 'link', 3);
-    checkCurve(graphFromEdges(3, [[0, 1], [0, 1], [1, 2]]), 'node', 3);
+    checkCurve(
+      graphFromEdges(3, [
+        [0, 1],
+        [0, 1],
+        [1, 2],
+      ]),
+      'link',
+      3,
+    );
+    checkCurve(
+      graphFromEdges(3, [
+        [0, 1],
+        [0, 1],
+        [1, 2],
+      ]),
+      'node',
+      3,
+    );
     checkCurve(graphFromEdges(0, []), 'node', 1);
   });
 
@@ -69,11 +85,23 @@ describe('reverse union–find curves (Newman & Ziff 2000)', () => {
       [7, 0, ['duct-d', 'duct-b'], false],
     ];
     const g = compileTopology({
-      file: 'x', format: 'native-yaml', nodes,
+      file: 'x',
+      format: 'native-yaml',
+      nodes,
       links: ends.map(([a, b, groups, hardened], e) => ({
-        id: `l${e}`, key: `s${a}-s${b}`, source: `s${a}`, target: `s${b}`, riskGroups: groups, hardened, pos, attrs: {},
+        id: `l${e}`,
+        key: `s${a}-s${b}`,
+        source: `s${a}`,
+        target: `s${b}`,
+        riskGroups: groups,
+        hardened,
+        pos,
+        attrs: {},
       })),
-      riskGroups: [], demands: [], metadata: {}, warnings: [],
+      riskGroups: [],
+      demands: [],
+      metadata: {},
+      warnings: [],
     });
     expect(g.groupIds.length).toBe(4);
     for (const seed of [1, 2, 3, 4, 5]) checkCurve(g, 'group', seed);

@@ -27,12 +27,16 @@ describe('gate decisions on fixture pairs', () => {
     const bridges = f.findings.filter((x) => x.rule === 'new-bridge');
     const chain = ['harbour, mill', 'mill, quarry', 'quarry, ridge', 'ridge, weir', 'weir, orchard'];
     expect(bridges.map((b) => b.line)).toEqual(chain.map((l) => lineOf(head, `between: [${l}]`)));
-    expect(bridges.every((b) => b.severity === 'fail' && b.elements[0].kind === 'link' && b.elements[0].line === b.line)).toBe(true);
+    expect(
+      bridges.every((b) => b.severity === 'fail' && b.elements[0].kind === 'link' && b.elements[0].line === b.line),
+    ).toBe(true);
     const cuts = f.findings.filter((x) => x.rule === 'new-cut-node');
     expect(cuts.map((c) => c.elements[0].id)).toEqual(['mill', 'quarry', 'ridge', 'weir']);
     expect(cuts.map((c) => c.line)).toEqual(['mill', 'quarry', 'ridge', 'weir'].map((n) => lineOf(head, `id: ${n}`)));
     // Bridges and cut nodes are counted in rows of their own, never added together.
-    const rows = f.requirements.filter((r) => r.id.startsWith('no-new-spof')).map((r) => [r.id, r.description, r.base, r.head, r.status]);
+    const rows = f.requirements
+      .filter((r) => r.id.startsWith('no-new-spof'))
+      .map((r) => [r.id, r.description, r.base, r.head, r.status]);
     expect(rows).toEqual([
       ['no-new-spof/bridges', 'no new bridges', 0, 5, 'weakened'],
       ['no-new-spof/cut-nodes', 'no new cut nodes', 0, 4, 'weakened'],
@@ -40,7 +44,11 @@ describe('gate decisions on fixture pairs', () => {
     ]);
     // The removed span is listed with its line in the base.
     expect(f.changes?.removed).toEqual([
-      { id: 'orchard\u2014harbour', kind: 'link', line: lineOf(gateFixture('ring-to-chain/base.net.yaml'), 'between: [orchard, harbour]') },
+      {
+        id: 'orchard\u2014harbour',
+        kind: 'link',
+        line: lineOf(gateFixture('ring-to-chain/base.net.yaml'), 'between: [orchard, harbour]'),
+      },
     ]);
   });
 
@@ -62,7 +70,10 @@ describe('gate decisions on fixture pairs', () => {
   it('an unchanged design gives a delta of exactly 0 and no finding', async () => {
     const same = gateFixture('unchanged/base.net.yaml');
     const policy = gateFixture('policy.yaml');
-    const repo: MemoryRepo = { base: { '.netbrace.yaml': policy, [FILE]: same }, head: { '.netbrace.yaml': policy, [FILE]: same } };
+    const repo: MemoryRepo = {
+      base: { '.netbrace.yaml': policy, [FILE]: same },
+      head: { '.netbrace.yaml': policy, [FILE]: same },
+    };
     const { report } = await gate(repo, { paths: [FILE] });
     const f = fileOf(report);
     expect(f.findings).toEqual([]);
@@ -127,7 +138,10 @@ describe('gate decisions on fixture pairs', () => {
     const repo = pairRepo('unchanged');
     delete repo.head[FILE];
     const soft = await gate(repo);
-    expect(fileOf(soft.report)).toMatchObject({ status: 'removed', findings: [{ rule: 'removed-design', severity: 'notice' }] });
+    expect(fileOf(soft.report)).toMatchObject({
+      status: 'removed',
+      findings: [{ rule: 'removed-design', severity: 'notice' }],
+    });
     expect(soft.exitCode).toBe(0);
     const strict = gateFixture('policy.yaml').replace('removed-designs: notice', 'removed-designs: fail');
     repo.base['.netbrace.yaml'] = strict;
@@ -159,7 +173,7 @@ describe('gate decisions on fixture pairs', () => {
   });
 });
 
-describe('envelope floors read the engine\'s envelope', () => {
+describe("envelope floors read the engine's envelope", () => {
   const policy = (min: number) =>
     [
       'challenges:',
@@ -183,10 +197,13 @@ describe('envelope floors read the engine\'s envelope', () => {
   const run = (min: number) =>
     runGate(
       { head: 'head', policySource: 'head', mode: 'block', paths: [FILE] },
-      memoryDeps({ base: {}, head: { '.netbrace.yaml': policy(min), [FILE]: gateFixture('removed-node/base.net.yaml') } }),
+      memoryDeps({
+        base: {},
+        head: { '.netbrace.yaml': policy(min), [FILE]: gateFixture('removed-node/base.net.yaml') },
+      }),
     );
 
-  it('a quantile threshold off the regular grid is put on it, and judged on the envelope\'s value', async () => {
+  it("a quantile threshold off the regular grid is put on it, and judged on the envelope's value", async () => {
     const { report } = await run(0.99);
     const f = fileOf(report);
     const env = f.head!.envelopes[0];
@@ -293,7 +310,10 @@ describe('a threshold on a known attack curve (karate club, static degree attack
       '',
     ].join('\n');
     const repo: MemoryRepo = { base: {}, head: { '.netbrace.yaml': strict, 'karate.net.yaml': design } };
-    const { report } = await runGate({ head: 'head', policySource: 'head', mode: 'block', paths: ['karate.net.yaml'] }, memoryDeps(repo));
+    const { report } = await runGate(
+      { head: 'head', policySource: 'head', mode: 'block', paths: ['karate.net.yaml'] },
+      memoryDeps(repo),
+    );
     const f = fileOf(report, 'karate.net.yaml');
     const [wc, n1] = f.requirements;
     expect([wc.id, wc.status]).toEqual(['r-threshold:failures:worst-case\u00d72', 'short']);
@@ -301,7 +321,11 @@ describe('a threshold on a known attack curve (karate club, static degree attack
     expect([n1.id, n1.status]).toEqual(['n-1:node', 'short']);
     expect(n1.head).toBeCloseTo(worst['1'].value, 12);
     const byReq = (id: string) => f.findings.find((x) => x.requirement === id)!;
-    expect(byReq(wc.id).elements.map((e) => e.id).sort()).toEqual(worst['2'].set.map(String).sort());
+    expect(
+      byReq(wc.id)
+        .elements.map((e) => e.id)
+        .sort(),
+    ).toEqual(worst['2'].set.map(String).sort());
     expect(byReq(n1.id).elements.map((e) => e.id)).toEqual(worst['1'].set.map(String));
     expect(byReq(n1.id).line).toBe(lineOf(design, 'id: "0"'));
   });

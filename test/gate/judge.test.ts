@@ -12,13 +12,34 @@ import type { Requirement, WeakeningRule } from '../../src/policy/types.js';
 const where = { file: '.netbrace.yaml', line: 3, column: 5 };
 
 function requirement(over: Partial<Extract<Requirement, { kind: 'r-threshold' }>> = {}): Requirement {
-  return { kind: 'r-threshold', id: 'r@0.2', severity: 'fail', where, valueWhere: where, challenge: 'random-nodes', challengeWhere: where, at: 0.2, statistic: { kind: 'quantile', q: 0.05 }, min: 0.5, ...over };
+  return {
+    kind: 'r-threshold',
+    id: 'r@0.2',
+    severity: 'fail',
+    where,
+    valueWhere: where,
+    challenge: 'random-nodes',
+    challengeWhere: where,
+    at: 0.2,
+    statistic: { kind: 'quantile', q: 0.05 },
+    min: 0.5,
+    ...over,
+  };
 }
 
 function judging(m: Partial<Measured>, r: Requirement = requirement()): Judging {
   const measured: Measured = { base: null, head: 0.7, delta: null, se: null, higherIsBetter: true, elements: [], ...m };
   const threshold = r.kind === 'r-threshold' ? r.min : null;
-  return { r, m: measured, headValue: measured.head!, description: 'R at 20 %', threshold, rule: 'r-threshold', elements: [], extra: { requirement: r.id } };
+  return {
+    r,
+    m: measured,
+    headValue: measured.head!,
+    description: 'R at 20 %',
+    threshold,
+    rule: 'r-threshold',
+    elements: [],
+    extra: { requirement: r.id },
+  };
 }
 
 const rule: WeakeningRule = { allowedDrop: 0.02, errorMultiple: 2, severity: 'fail', where, fieldWhere: {} };
@@ -37,7 +58,16 @@ describe('judgeFloor', () => {
   });
 
   it('a ceiling (lower is better) is short when the head is above it', () => {
-    const r: Requirement = { kind: 'spread-ceiling', id: 'spread', severity: 'warn', where, valueWhere: where, challenge: 'random-nodes', challengeWhere: where, max: 0.1 };
+    const r: Requirement = {
+      kind: 'spread-ceiling',
+      id: 'spread',
+      severity: 'warn',
+      where,
+      valueWhere: where,
+      challenge: 'random-nodes',
+      challengeWhere: where,
+      max: 0.1,
+    };
     const j = { ...judging({ head: 0.15, higherIsBetter: false }, r), threshold: 0.1, rule: 'spread-ceiling' as const };
     const { status, findings } = judgeFloor(j);
     expect(status).toBe('short');
@@ -67,7 +97,9 @@ describe('judgeFloor', () => {
 
   it('a minimum over cut realizations is never proven', () => {
     const r = requirement({ statistic: { kind: 'min' } });
-    const { status, findings } = judgeFloor(judging({ head: 0.9, headSe: 0.001, reduced: 'the budget ran 10 of 400 realizations' }, r));
+    const { status, findings } = judgeFloor(
+      judging({ head: 0.9, headSe: 0.001, reduced: 'the budget ran 10 of 400 realizations' }, r),
+    );
     expect(status).toBe('unsettled');
     expect(findings[0].message).toContain('the minimum of fewer realizations can only be higher');
   });
@@ -79,7 +111,8 @@ describe('judgeFloor', () => {
 });
 
 describe('judgeWeakening', () => {
-  const paired = (base: number, head: number, se: number, over: Partial<Measured> = {}) => judging({ base, head, delta: head - base, se, ...over });
+  const paired = (base: number, head: number, se: number, over: Partial<Measured> = {}) =>
+    judging({ base, head, delta: head - base, se, ...over });
 
   it('a drop beyond the allowance and beyond error-multiple × se weakens, at the milder severity', () => {
     const { status, findings } = judgeWeakening(paired(0.8, 0.7, 0.01), { ...rule, severity: 'warn' }, 'holds');
@@ -111,7 +144,10 @@ describe('judgeWeakening', () => {
 
   it('unpaired realizations (cut differently on each side): unsettled whatever the sign', () => {
     const unpaired = 'the budget cut base and head differently';
-    for (const [b, h] of [[0.8, 0.7], [0.7, 0.8]]) {
+    for (const [b, h] of [
+      [0.8, 0.7],
+      [0.7, 0.8],
+    ]) {
       const { status, findings } = judgeWeakening(paired(b, h, 0.01, { unpaired }), rule, 'holds');
       expect(status).toBe('unsettled');
       expect(findings[0]).toMatchObject({ status: 'unsettled', severity: 'warn' });
@@ -120,7 +156,11 @@ describe('judgeWeakening', () => {
 
   it('on cut realizations, a drop within error-multiple × se of the allowance is unsettled', () => {
     // drop 0.03, allowance 0.02, noise 2 × 0.01 = 0.02: 0.03 is neither above 0.04 nor at most 0.0.
-    const { status } = judgeWeakening(paired(0.8, 0.77, 0.01, { reduced: 'the budget ran 100 of 400 realizations' }), rule, 'holds');
+    const { status } = judgeWeakening(
+      paired(0.8, 0.77, 0.01, { reduced: 'the budget ran 100 of 400 realizations' }),
+      rule,
+      'holds',
+    );
     expect(status).toBe('unsettled');
   });
 

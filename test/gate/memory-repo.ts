@@ -25,7 +25,8 @@ export function memoryDeps(repo: MemoryRepo, extra: Partial<GateDeps> = {}): Gat
         else if (!(path in b)) out.push({ status: 'added', path });
         else if (b[path] !== h[path]) out.push({ status: 'modified', path });
       }
-      for (const path of Object.keys(b)) if (!(path in h) && !renamedFrom.has(path)) out.push({ status: 'deleted', path });
+      for (const path of Object.keys(b))
+        if (!(path in h) && !renamedFrom.has(path)) out.push({ status: 'deleted', path });
       return out;
     },
     readAt(rev, path) {
@@ -57,7 +58,11 @@ export function lineOf(text: string, needle: string): number {
 }
 
 /** Base and head of a fixture pair as one design file, with the fixtures' policy on both sides. */
-export function pairRepo(pair: string, file = 'networks/site.net.yaml', policy = gateFixture('policy.yaml')): MemoryRepo {
+export function pairRepo(
+  pair: string,
+  file = 'networks/site.net.yaml',
+  policy = gateFixture('policy.yaml'),
+): MemoryRepo {
   return {
     base: { '.netbrace.yaml': policy, [file]: gateFixture(`${pair}/base.net.yaml`) },
     head: { '.netbrace.yaml': policy, [file]: gateFixture(`${pair}/head.net.yaml`) },

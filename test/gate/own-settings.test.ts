@@ -26,14 +26,22 @@ describe('own settings', () => {
   it('dropping the step, continue-on-error and a condition weaken; tightening does not', () => {
     const base = wf(step('          mode: inform\n'));
     expect(compareSettings(base, wf(''), 'gate')[0]).toMatchObject({ setting: 'the netbrace step', weakens: true });
-    expect(compareSettings(base, wf(step('          mode: inform\n', '        continue-on-error: true\n')), 'gate')[0]).toMatchObject({ setting: 'continue-on-error', weakens: true });
-    expect(compareSettings(base, wf(step('          mode: inform\n', "        if: github.actor != 'me'\n")), 'gate')[0]).toMatchObject({ setting: 'if', weakens: true });
-    expect(compareSettings(base, wf(step('          mode: block\n')), 'gate')).toEqual([expect.objectContaining({ setting: 'mode', weakens: false })]);
+    expect(
+      compareSettings(base, wf(step('          mode: inform\n', '        continue-on-error: true\n')), 'gate')[0],
+    ).toMatchObject({ setting: 'continue-on-error', weakens: true });
+    expect(
+      compareSettings(base, wf(step('          mode: inform\n', "        if: github.actor != 'me'\n")), 'gate')[0],
+    ).toMatchObject({ setting: 'if', weakens: true });
+    expect(compareSettings(base, wf(step('          mode: block\n')), 'gate')).toEqual([
+      expect.objectContaining({ setting: 'mode', weakens: false }),
+    ]);
     expect(compareSettings(base, base, 'gate')).toEqual([]);
   });
 
   it('continue-on-error on the job counts like on the step', () => {
     const base = wf(step('          mode: block\n'));
-    expect(compareSettings(base, wf(step('          mode: block\n'), '    continue-on-error: true\n'), 'gate')[0]).toMatchObject({ setting: 'continue-on-error', weakens: true });
+    expect(
+      compareSettings(base, wf(step('          mode: block\n'), '    continue-on-error: true\n'), 'gate')[0],
+    ).toMatchObject({ setting: 'continue-on-error', weakens: true });
   });
 });

@@ -60,7 +60,11 @@ const POLICY = [
 
 describe('regional challenges on base and head', () => {
   it('left to the engine, the radius follows the extent, and the two grids (and their areas) do not compare', () => {
-    const spec = { r: { metrics: [{ id: 'pair_connectivity' as const, weight: 1 }], combine: 'mean' as const }, seed: 4, challenges: [{ challenge: 'regional' as const, points: 6 }] };
+    const spec = {
+      r: { metrics: [{ id: 'pair_connectivity' as const, weight: 1 }], combine: 'mean' as const },
+      seed: 4,
+      challenges: [{ challenge: 'regional' as const, points: 6 }],
+    };
     const base = evaluateDesign(compileTopology(parseDesign(designText(false), FILE)), spec);
     const head = evaluateDesign(compileTopology(parseDesign(designText(true), FILE)), spec);
     const xb = base.evaluation.envelopes[0].x;
@@ -71,8 +75,14 @@ describe('regional challenges on base and head', () => {
   });
 
   it('under the policy both sides run to 50 km on the same grid, and every requirement is paired', async () => {
-    const repo = { base: { '.netbrace.yaml': POLICY, [FILE]: designText(false) }, head: { '.netbrace.yaml': POLICY, [FILE]: designText(true) } };
-    const { report } = await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'block' }, memoryDeps(repo));
+    const repo = {
+      base: { '.netbrace.yaml': POLICY, [FILE]: designText(false) },
+      head: { '.netbrace.yaml': POLICY, [FILE]: designText(true) },
+    };
+    const { report } = await runGate(
+      { base: 'base', head: 'head', policySource: 'base', mode: 'block' },
+      memoryDeps(repo),
+    );
     const f = report.files[0];
     const [eb, eh] = [f.base!.envelopes[0], f.head!.envelopes[0]];
     expect(eb.x).toEqual([0, 10, 20, 30, 40, 50]);

@@ -21,7 +21,12 @@ const renamedPairs = (base: CompactGraph, head: CompactGraph) =>
 
 describe('matchDesigns', () => {
   const ring = ['a', 'b', 'c', 'd'];
-  const ringLinks: [string, string][] = [['a', 'b'], ['b', 'c'], ['c', 'd'], ['d', 'a']];
+  const ringLinks: [string, string][] = [
+    ['a', 'b'],
+    ['b', 'c'],
+    ['c', 'd'],
+    ['d', 'a'],
+  ];
 
   it('a renamed node with the same neighbours is matched, and so are its links', () => {
     const base = design([...ring, 'x'], [...ringLinks, ['c', 'x']]);
@@ -35,7 +40,10 @@ describe('matchDesigns', () => {
   it('two adjacent renamed nodes are matched in two rounds', () => {
     const base = design([...ring, 'x', 'y'], [...ringLinks, ['c', 'x'], ['x', 'y']]);
     const head = design([...ring, 'x2', 'y2'], [...ringLinks, ['c', 'x2'], ['x2', 'y2']]);
-    expect(renamedPairs(base, head)).toEqual([['x', 'x2'], ['y', 'y2']]);
+    expect(renamedPairs(base, head)).toEqual([
+      ['x', 'x2'],
+      ['y', 'y2'],
+    ]);
   });
 
   it('a renamed node that also gained a neighbour is not a rename', () => {
@@ -60,19 +68,47 @@ describe('matchDesigns', () => {
   });
 
   it('a renamed shared-risk group with the same links is matched; a regrouped one is not', () => {
-    const base = design(ring, [['a', 'b', ['duct-1']], ['b', 'c'], ['c', 'd', ['duct-1']], ['d', 'a', ['duct-2']]]);
-    const renamed = design(ring, [['a', 'b', ['canal']], ['b', 'c'], ['c', 'd', ['canal']], ['d', 'a', ['duct-2']]]);
+    const base = design(ring, [
+      ['a', 'b', ['duct-1']],
+      ['b', 'c'],
+      ['c', 'd', ['duct-1']],
+      ['d', 'a', ['duct-2']],
+    ]);
+    const renamed = design(ring, [
+      ['a', 'b', ['canal']],
+      ['b', 'c'],
+      ['c', 'd', ['canal']],
+      ['d', 'a', ['duct-2']],
+    ]);
     const m = matchDesigns(base, renamed);
     expect(m.renamedGroups.map(([b, h]) => [base.groupIds[b], renamed.groupIds[h]])).toEqual([['duct-1', 'canal']]);
-    const regrouped = design(ring, [['a', 'b', ['canal']], ['b', 'c', ['canal']], ['c', 'd'], ['d', 'a', ['duct-2']]]);
+    const regrouped = design(ring, [
+      ['a', 'b', ['canal']],
+      ['b', 'c', ['canal']],
+      ['c', 'd'],
+      ['d', 'a', ['duct-2']],
+    ]);
     const r = matchDesigns(base, regrouped);
     expect(r.renamedGroups).toEqual([]);
     expect(r.groupToHead[base.groupIds.indexOf('duct-1')]).toBe(-1);
   });
 
   it('parallel links are matched in file order, and a third one at head is added', () => {
-    const base = design(['a', 'b'], [['a', 'b'], ['a', 'b']]);
-    const head = design(['a', 'b'], [['a', 'b'], ['a', 'b'], ['a', 'b']]);
+    const base = design(
+      ['a', 'b'],
+      [
+        ['a', 'b'],
+        ['a', 'b'],
+      ],
+    );
+    const head = design(
+      ['a', 'b'],
+      [
+        ['a', 'b'],
+        ['a', 'b'],
+        ['a', 'b'],
+      ],
+    );
     const m = matchDesigns(base, head);
     expect([...m.linkToHead]).toEqual([0, 1]);
     expect([...m.linkToBase]).toEqual([0, 1, -1]);

@@ -28,7 +28,9 @@ describe('report schema', () => {
     expect(whole.report.files.map((f) => f.status).sort()).toEqual(['removed', 'renamed', 'unreadable', 'weakened']);
     // Through JSON, as every reader sees it (non-finite numbers become null).
     check(JSON.parse(serializeReport(whole.report)));
-    const parts = await Promise.all([1, 2].map((index) => runGate({ ...request, part: { index, total: 2 } }, memoryDeps(repo))));
+    const parts = await Promise.all(
+      [1, 2].map((index) => runGate({ ...request, part: { index, total: 2 } }, memoryDeps(repo))),
+    );
     for (const s of parts) check(JSON.parse(serializeReport(s.report)));
     check(JSON.parse(serializeReport(joinReports(parts.map((s) => JSON.parse(serializeReport(s.report)))))));
   });

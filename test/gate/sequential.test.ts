@@ -35,9 +35,12 @@ describe('a sequential run', () => {
   });
 
   it('gives the same report, byte for byte, on 1, 2 and 4 threads', async () => {
-    const threaded = memoryDeps(pairRepo('removed-node'), { runTasks: (g, plan, tasks, n) => runTasksParallel(g, plan, tasks, n ?? 1, { minWork: 0 }) });
+    const threaded = memoryDeps(pairRepo('removed-node'), {
+      runTasks: (g, plan, tasks, n) => runTasksParallel(g, plan, tasks, n ?? 1, { minWork: 0 }),
+    });
     const bytes: string[] = [];
-    for (const threads of [1, 2, 4]) bytes.push(serializeReport((await runGate({ ...request, threads }, threaded)).report));
+    for (const threads of [1, 2, 4])
+      bytes.push(serializeReport((await runGate({ ...request, threads }, threaded)).report));
     bytes.push(serializeReport((await runGate(request, memoryDeps(pairRepo('removed-node')))).report));
     for (const b of bytes) expect(b).toBe(bytes[0]);
   }, 60_000);
@@ -62,8 +65,16 @@ describe('a sequential run', () => {
       '',
     ].join('\n');
   const floorRun = async (min: number) => {
-    const repo = { base: {}, head: { '.netbrace.yaml': policy(min), [FILE]: gateFixture('removed-node/base.net.yaml') } };
-    const f = (await runGate({ head: 'head', policySource: 'head', mode: 'block', paths: [FILE], sequential: true }, memoryDeps(repo))).report.files[0];
+    const repo = {
+      base: {},
+      head: { '.netbrace.yaml': policy(min), [FILE]: gateFixture('removed-node/base.net.yaml') },
+    };
+    const f = (
+      await runGate(
+        { head: 'head', policySource: 'head', mode: 'block', paths: [FILE], sequential: true },
+        memoryDeps(repo),
+      )
+    ).report.files[0];
     const env = f.head!.envelopes[0];
     return { f, env, value: env.quantiles['0.1'].value[env.x.indexOf(0.2)] };
   };
@@ -81,6 +92,8 @@ describe('a sequential run', () => {
     expect(q.status).toBe('unsettled');
     expect(q.realizations).toBe(160);
     expect(q.bounds!.head!.lo).toBeLessThan(full.value);
-    expect(at.f.findings.find((x) => x.rule === 'r-threshold')!.message).toContain('after 160 realizations its confidence sequence still reaches');
+    expect(at.f.findings.find((x) => x.rule === 'r-threshold')!.message).toContain(
+      'after 160 realizations its confidence sequence still reaches',
+    );
   });
 });

@@ -11,18 +11,34 @@ const request: GateRequest = { base: 'base', head: 'head', policySource: 'base',
 
 /** A four-site ring a–b–c–d; `extra[i]` is appended to link i (a–b, b–c, c–d, d–a). */
 function ring(extra: Record<number, string> = {}): string {
-  const ends = [['a', 'b'], ['b', 'c'], ['c', 'd'], ['d', 'a']];
-  return ['nodes: [{id: a}, {id: b}, {id: c}, {id: d}]', 'links:', ...ends.map(([x, y], i) => `  - {between: [${x}, ${y}]${extra[i] ? `, ${extra[i]}` : ''}}`)].join('\n') + '\n';
+  const ends = [
+    ['a', 'b'],
+    ['b', 'c'],
+    ['c', 'd'],
+    ['d', 'a'],
+  ];
+  return (
+    [
+      'nodes: [{id: a}, {id: b}, {id: c}, {id: d}]',
+      'links:',
+      ...ends.map(([x, y], i) => `  - {between: [${x}, ${y}]${extra[i] ? `, ${extra[i]}` : ''}}`),
+    ].join('\n') + '\n'
+  );
 }
 
 async function findings(base: string, head: string, policy = POLICY) {
-  const { report } = await runGate(request, memoryDeps({ base: { '.netbrace.yaml': policy, [FILE]: base }, head: { '.netbrace.yaml': policy, [FILE]: head } }));
+  const { report } = await runGate(
+    request,
+    memoryDeps({ base: { '.netbrace.yaml': policy, [FILE]: base }, head: { '.netbrace.yaml': policy, [FILE]: head } }),
+  );
   return report.files[0].findings.map((x) => `${x.rule}:${x.severity}:${x.elements.map((e) => e.id).join(',')}`);
 }
 
 describe('no-new-spof and shared-risk groups', () => {
   it('two opposite links of a ring in one group: a new stranding group', async () => {
-    expect(await findings(ring(), ring({ 0: 'risk_groups: [duct]', 2: 'risk_groups: [duct]' }))).toEqual(['new-stranding-group:fail:duct']);
+    expect(await findings(ring(), ring({ 0: 'risk_groups: [duct]', 2: 'risk_groups: [duct]' }))).toEqual([
+      'new-stranding-group:fail:duct',
+    ]);
   });
 
   it('a group of one link, or of links that leave a path around, strands nothing', async () => {
@@ -35,7 +51,8 @@ describe('no-new-spof and shared-risk groups', () => {
   });
 
   it('a group hidden by a newly hardened member is a warning; one hardened at base already is not', async () => {
-    const grouped = (hard: boolean) => ring({ 0: `risk_groups: [duct]${hard ? ', hardened: true' : ''}`, 2: 'risk_groups: [duct]' });
+    const grouped = (hard: boolean) =>
+      ring({ 0: `risk_groups: [duct]${hard ? ', hardened: true' : ''}`, 2: 'risk_groups: [duct]' });
     expect(await findings(ring(), grouped(true))).toEqual(['hardened-weak-point:warn:duct']);
     expect(await findings(ring({ 0: 'hardened: true' }), grouped(true))).toEqual([]);
   });
@@ -43,7 +60,9 @@ describe('no-new-spof and shared-risk groups', () => {
   it('hardened-weak-points: ignore drops the finding; fail makes it fail', async () => {
     const head = ring({ 0: 'risk_groups: [duct], hardened: true', 2: 'risk_groups: [duct]' });
     expect(await findings(ring(), head, `${POLICY}    hardened-weak-points: ignore\n`)).toEqual([]);
-    expect(await findings(ring(), head, `${POLICY}    hardened-weak-points: fail\n`)).toEqual(['hardened-weak-point:fail:duct']);
+    expect(await findings(ring(), head, `${POLICY}    hardened-weak-points: fail\n`)).toEqual([
+      'hardened-weak-point:fail:duct',
+    ]);
   });
 });
 
@@ -56,8 +75,15 @@ describe('what weak points cost, on a large change', () => {
         .slice(0, closed ? n : n - 1)
         .map((id, i) => `  - {between: [${id}, ${ids[(i + 1) % n]}]}`)
         .join('\n')}\n`;
-    const policy = 'challenges:\n  few:\n    remove: nodes\n    until: 0.01\n    points: 2\n    realizations: 2\nrequirements:\n  - kind: no-new-spof\n';
-    const { report } = await runGate(request, memoryDeps({ base: { '.netbrace.yaml': policy, [FILE]: design(true) }, head: { '.netbrace.yaml': policy, [FILE]: design(false) } }));
+    const policy =
+      'challenges:\n  few:\n    remove: nodes\n    until: 0.01\n    points: 2\n    realizations: 2\nrequirements:\n  - kind: no-new-spof\n';
+    const { report } = await runGate(
+      request,
+      memoryDeps({
+        base: { '.netbrace.yaml': policy, [FILE]: design(true) },
+        head: { '.netbrace.yaml': policy, [FILE]: design(false) },
+      }),
+    );
     const f = report.files[0];
     const weak = f.findings.filter((x) => x.rule === 'new-bridge' || x.rule === 'new-cut-node');
     // A path of 400 sites: 399 bridges and 398 cut nodes (textbook fact).

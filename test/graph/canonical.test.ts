@@ -17,7 +17,16 @@ const repoRoot = path.resolve(import.meta.dirname, '..', '..');
 describe('natural order of ids', () => {
   it('whole numbers by value, beyond 2^53 too; leading zeros tie-broken by code point', () => {
     const ids = ['10', '2', '9007199254740993', '9007199254740992', '007', '7', '100000000000000000000', '1'];
-    expect([...ids].sort(compareIds)).toEqual(['1', '2', '007', '7', '10', '9007199254740992', '9007199254740993', '100000000000000000000']);
+    expect([...ids].sort(compareIds)).toEqual([
+      '1',
+      '2',
+      '007',
+      '7',
+      '10',
+      '9007199254740992',
+      '9007199254740993',
+      '100000000000000000000',
+    ]);
   });
 
   it('other ids by code point, after the whole numbers', () => {
@@ -32,7 +41,12 @@ describe('natural order of ids', () => {
   });
 
   it('generated graphs with ids 0…n−1 keep their node order; links follow their ends', () => {
-    const g = graphFromEdges(12, [[11, 10], [0, 11], [2, 1], [10, 2]]);
+    const g = graphFromEdges(12, [
+      [11, 10],
+      [0, 11],
+      [2, 1],
+      [10, 2],
+    ]);
     expect(g.nodeIds).toEqual(Array.from({ length: 12 }, (_, i) => String(i)));
     expect(Array.from(g.linkSource)).toEqual([0, 1, 2, 10]);
     expect(Array.from(g.linkTarget)).toEqual([11, 2, 10, 11]);
@@ -66,7 +80,11 @@ function reordered(t: Topology, seed: number): Topology {
 function withoutLines(value: unknown): unknown {
   if (Array.isArray(value)) return value.map(withoutLines);
   if (value !== null && typeof value === 'object') {
-    return Object.fromEntries(Object.entries(value).filter(([k]) => k !== 'line').map(([k, v]) => [k, withoutLines(v)]));
+    return Object.fromEntries(
+      Object.entries(value)
+        .filter(([k]) => k !== 'line')
+        .map(([k, v]) => [k, withoutLines(v)]),
+    );
   }
   return value;
 }
@@ -116,7 +134,12 @@ describe('a design listed in another order', () => {
     const a = compileTopology(t);
     const ref = evaluateDesign(a, spec);
     const kinds = ref.evaluation;
-    expect(kinds.envelopes.map((e) => e.challenge)).toEqual(['random-nodes', 'random-links', 'risk-groups', 'regional']);
+    expect(kinds.envelopes.map((e) => e.challenge)).toEqual([
+      'random-nodes',
+      'random-links',
+      'risk-groups',
+      'regional',
+    ]);
     expect(kinds.attacks).toHaveLength(9);
     expect(kinds.contingencies).toHaveLength(2);
     for (const seed of [1, 2]) {

@@ -4,8 +4,16 @@ import { createMask } from '../../src/graph/mask.js';
 import { findComponents, findCutElements, findStrandingGroups } from '../../src/graph/structure.js';
 import { parseDesign } from '../../src/topology/parse.js';
 
-const path = (n: number) => graphFromEdges(n, Array.from({ length: n - 1 }, (_, i) => [i, i + 1] as const));
-const cycle = (n: number) => graphFromEdges(n, Array.from({ length: n }, (_, i) => [i, (i + 1) % n] as const));
+const path = (n: number) =>
+  graphFromEdges(
+    n,
+    Array.from({ length: n - 1 }, (_, i) => [i, i + 1] as const),
+  );
+const cycle = (n: number) =>
+  graphFromEdges(
+    n,
+    Array.from({ length: n }, (_, i) => [i, (i + 1) % n] as const),
+  );
 
 describe('structure', () => {
   // Textbook facts (common practice): every link of a tree is a bridge, every inner node of a path is a cut node.
@@ -20,7 +28,11 @@ describe('structure', () => {
   });
 
   it('a parallel link is redundancy, not a bridge', () => {
-    const g = graphFromEdges(3, [[0, 1], [0, 1], [1, 2]]);
+    const g = graphFromEdges(3, [
+      [0, 1],
+      [0, 1],
+      [1, 2],
+    ]);
     expect(findCutElements(g)).toEqual({ bridges: [2], cutNodes: [1] });
   });
 
@@ -85,9 +97,18 @@ describe('stranding shared-risk groups', () => {
   });
 
   it('parallel twins in one duct are one point of failure', () => {
-    const spurTwins = graphFromEdges(3, [[0, 1], [1, 2], [1, 2]]);
+    const spurTwins = graphFromEdges(3, [
+      [0, 1],
+      [1, 2],
+      [1, 2],
+    ]);
     expect(findStrandingGroups(spurTwins, false)).toEqual([]); // no group at all
-    const t = compileTopology(parseDesign('nodes: [{id: a}, {id: b}, {id: c}]\nlinks:\n  - {between: [a, b]}\n  - {between: [b, c], risk_groups: [d]}\n  - {between: [b, c], risk_groups: [d]}\n', 't.net.yaml'));
+    const t = compileTopology(
+      parseDesign(
+        'nodes: [{id: a}, {id: b}, {id: c}]\nlinks:\n  - {between: [a, b]}\n  - {between: [b, c], risk_groups: [d]}\n  - {between: [b, c], risk_groups: [d]}\n',
+        't.net.yaml',
+      ),
+    );
     expect(findStrandingGroups(t, false)).toEqual([0]);
   });
 });

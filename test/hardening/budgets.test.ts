@@ -49,7 +49,10 @@ describe('the engine reduces work the documented way', () => {
   });
 
   it(`never below ${MIN_REALIZATIONS} realizations, however small the budget`, () => {
-    const ev = evaluateDesign(g, spec([{ challenge: 'random-links', realizations: 300, until: 0.5, points: 6 }], 1)).evaluation;
+    const ev = evaluateDesign(
+      g,
+      spec([{ challenge: 'random-links', realizations: 300, until: 0.5, points: 6 }], 1),
+    ).evaluation;
     expect(ev.envelopes[0].realizations).toBe(MIN_REALIZATIONS);
     expect(ev.degraded[0]).toMatch(/^random-links: realizations reduced from 300 to 10/);
   });
@@ -61,10 +64,19 @@ describe('the engine reduces work the documented way', () => {
   });
 
   it('an exact worst-case search goes greedy first, and says so', () => {
-    const full = evaluateDesign(g, spec([{ challenge: 'random-nodes', realizations: 50, until: 0.5, points: 6, worstCase: 2 }])).evaluation;
+    const full = evaluateDesign(
+      g,
+      spec([{ challenge: 'random-nodes', realizations: 50, until: 0.5, points: 6, worstCase: 2 }]),
+    ).evaluation;
     expect(full.envelopes[0].worstCase?.method).toBe('exact');
     expect(full.degraded).toEqual([]);
-    const cut = evaluateDesign(g, spec([{ challenge: 'random-nodes', realizations: 50, until: 0.5, points: 6, worstCase: 2 }], REALIZATION * 50 + 1)).evaluation;
+    const cut = evaluateDesign(
+      g,
+      spec(
+        [{ challenge: 'random-nodes', realizations: 50, until: 0.5, points: 6, worstCase: 2 }],
+        REALIZATION * 50 + 1,
+      ),
+    ).evaluation;
     expect(cut.envelopes[0].worstCase?.method).toBe('greedy');
     expect(cut.degraded[0]).toMatch(/^random-nodes: worst-case search greedy instead of exact \(work budget \d+\)/);
   });
@@ -84,7 +96,11 @@ function policy(requirements: string, challenge = FAILURES, rest = ''): string {
 const withBudget = (text: string, work?: number) => (work === undefined ? text : `${text}budget:\n  work: ${work}\n`);
 
 /** The mesh alone (thresholds only) under a policy, with a budget of `work` element visits. */
-async function judge(policyText: string, work?: number, deps: Partial<GateDeps> = {}): Promise<FileReport & { report: Report }> {
+async function judge(
+  policyText: string,
+  work?: number,
+  deps: Partial<GateDeps> = {},
+): Promise<FileReport & { report: Report }> {
   const { report } = await runGate(
     { head: 'head', policySource: 'head', mode: 'block', paths: [FILE] },
     memoryDeps({ base: {}, head: { '.netbrace.yaml': withBudget(policyText, work), [FILE]: MESH } }, deps),
@@ -93,39 +109,60 @@ async function judge(policyText: string, work?: number, deps: Partial<GateDeps> 
 }
 
 /** The mesh (base) against the mesh without its annex (head), or another head. */
-async function compare(policyText: string, work?: number, deps: Partial<GateDeps> = {}, head = HEAD): Promise<FileReport & { report: Report }> {
+async function compare(
+  policyText: string,
+  work?: number,
+  deps: Partial<GateDeps> = {},
+  head = HEAD,
+): Promise<FileReport & { report: Report }> {
   const text = withBudget(policyText, work);
   const { report } = await runGate(
     { base: 'base', head: 'head', policySource: 'base', mode: 'block', paths: [FILE] },
-    memoryDeps({ base: { '.netbrace.yaml': text, [FILE]: MESH }, head: { '.netbrace.yaml': text, [FILE]: head } }, deps),
+    memoryDeps(
+      { base: { '.netbrace.yaml': text, [FILE]: MESH }, head: { '.netbrace.yaml': text, [FILE]: head } },
+      deps,
+    ),
   );
   return { ...report.files[0], report };
 }
 
-const threshold = (statistic: string, min: number, at = 0.2) => `  - kind: r-threshold\n    challenge: failures\n    at: ${at}\n    statistic: ${statistic}\n    min: ${min}\n`;
+const threshold = (statistic: string, min: number, at = 0.2) =>
+  `  - kind: r-threshold\n    challenge: failures\n    at: ${at}\n    statistic: ${statistic}\n    min: ${min}\n`;
 
 let unsettled = 0;
 
 describe('the report marks a reduced evaluation, in every view', () => {
   it('a degraded finding with the reason; the summary, annotations and terminal say it too', async () => {
     const f = await judge(policy('  - kind: area-floor\n    challenge: failures\n'), REALIZATION * 40);
-    expect(f.head!.degraded).toEqual([expect.stringMatching(/^random-nodes: realizations reduced from 400 to \d+ by the work budget/)]);
+    expect(f.head!.degraded).toEqual([
+      expect.stringMatching(/^random-nodes: realizations reduced from 400 to \d+ by the work budget/),
+    ]);
     const d = f.findings.find((x) => x.rule === 'degraded')!;
     expect(d.severity).toBe('notice');
     expect(d.message).toMatch(/^head evaluation reduced: random-nodes: realizations reduced from 400 to/);
     expect(renderSummary(f.report)).toMatch(/realizations reduced from 400 to/);
-    expect(planAnnotations(f.report).annotations.some((a) => a.rule === 'degraded' && /reduced/.test(a.message))).toBe(true);
+    expect(planAnnotations(f.report).annotations.some((a) => a.rule === 'degraded' && /reduced/.test(a.message))).toBe(
+      true,
+    );
     expect(renderTerminal(f.report, { color: false, width: 120 })).toMatch(/realizations reduced from 400/);
   });
 
   it('and in each requirement the cut touches: one finding of its own, also when the value is clear', async () => {
-    const reqs = threshold('median', 0.01) + threshold('mean', 0.01) + '  - kind: area-floor\n    challenge: failures\n    min: 0.01\n  - kind: no-new-spof\n';
+    const reqs =
+      threshold('median', 0.01) +
+      threshold('mean', 0.01) +
+      '  - kind: area-floor\n    challenge: failures\n    min: 0.01\n  - kind: no-new-spof\n';
     const f = await judge(policy(reqs), REALIZATION * 40);
     const touched = f.requirements.filter((r) => !r.id.startsWith('no-new-spof'));
     expect(touched.map((r) => r.status)).toEqual(['holds', 'holds', 'holds']);
     for (const r of touched) {
       const own = f.findings.filter((x) => x.requirement === r.id);
-      expect(own.map((x) => [x.severity, x.message.endsWith('judged on reduced work, the work budget left 40 of the 400 realizations')])).toEqual([['notice', true]]);
+      expect(
+        own.map((x) => [
+          x.severity,
+          x.message.endsWith('judged on reduced work, the work budget left 40 of the 400 realizations'),
+        ]),
+      ).toEqual([['notice', true]]);
     }
     expect(f.findings.some((x) => x.requirement === 'no-new-spof')).toBe(false);
   });
@@ -154,8 +191,10 @@ describe('what the reduced work cannot settle is unsettled, never met', () => {
   });
 
   it('a worst-case floor met by a greedy search that the budget put in place of the exact one', async () => {
-    const challenge = '  failures:\n    remove: nodes\n    until: 0.5\n    points: 6\n    realizations: 50\n    worst-case: 2\n';
-    const req = '  - kind: r-threshold\n    challenge: failures\n    statistic: worst-case\n    removals: 2\n    min: 0.5\n';
+    const challenge =
+      '  failures:\n    remove: nodes\n    until: 0.5\n    points: 6\n    realizations: 50\n    worst-case: 2\n';
+    const req =
+      '  - kind: r-threshold\n    challenge: failures\n    statistic: worst-case\n    removals: 2\n    min: 0.5\n';
     const full = await judge(policy(req, challenge));
     expect(full.head!.envelopes[0].worstCase?.method).toBe('exact');
     expect(full.requirements[0].status).toBe('holds');
@@ -169,7 +208,8 @@ describe('what the reduced work cannot settle is unsettled, never met', () => {
   });
 
   it('a quantile floor whose confidence interval, wide with the few realizations left, reaches below it', async () => {
-    const at = (min: number) => `  - kind: r-threshold\n    challenge: failures\n    at: 0.2\n    statistic: quantile\n    q: 0.1\n    min: ${min}\n`;
+    const at = (min: number) =>
+      `  - kind: r-threshold\n    challenge: failures\n    at: 0.2\n    statistic: quantile\n    q: 0.1\n    min: ${min}\n`;
     const probe = await judge(policy(at(0.01)), REALIZATION * 12);
     const env = probe.head!.envelopes[0];
     expect(env.realizations).toBe(12);
@@ -187,9 +227,21 @@ describe('what the reduced work cannot settle is unsettled, never met', () => {
   // removed the realizations differ; at 20 % all twelve give the same R, so their standard
   // error is 0 — a limit of the rule, written down in the README.)
   const statistics: { name: string; req: (v: number) => string; value: (e: FileReport['head']) => number }[] = [
-    { name: 'a mean floor', req: (v) => threshold('mean', v, 0.4), value: (e) => e!.envelopes[0].mean[e!.envelopes[0].x.indexOf(0.4)] },
-    { name: 'an area floor', req: (v) => `  - kind: area-floor\n    challenge: failures\n    min: ${v}\n`, value: (e) => e!.envelopes[0].area },
-    { name: 'a spread ceiling', req: (v) => `  - kind: spread-ceiling\n    challenge: failures\n    max: ${v}\n`, value: (e) => e!.envelopes[0].spread },
+    {
+      name: 'a mean floor',
+      req: (v) => threshold('mean', v, 0.4),
+      value: (e) => e!.envelopes[0].mean[e!.envelopes[0].x.indexOf(0.4)],
+    },
+    {
+      name: 'an area floor',
+      req: (v) => `  - kind: area-floor\n    challenge: failures\n    min: ${v}\n`,
+      value: (e) => e!.envelopes[0].area,
+    },
+    {
+      name: 'a spread ceiling',
+      req: (v) => `  - kind: spread-ceiling\n    challenge: failures\n    max: ${v}\n`,
+      value: (e) => e!.envelopes[0].spread,
+    },
   ];
   for (const s of statistics) {
     it(`${s.name} met by less than 2 standard errors on realizations cut by the budget`, async () => {
@@ -202,7 +254,9 @@ describe('what the reduced work cannot settle is unsettled, never met', () => {
       expect(cut.requirements[0].status).toBe('unsettled');
       unsettled++;
       const why = cut.findings.find((x) => x.requirement === cut.requirements[0].id && x.severity === 'warn')!;
-      expect(why.message).toMatch(/meets it, but the work budget left 12 of the 400 realizations, and it clears the (floor|ceiling) by 0\.001, not by more than 2 standard errors \(2 × 0\.\d{3}\)/);
+      expect(why.message).toMatch(
+        /meets it, but the work budget left 12 of the 400 realizations, and it clears the (floor|ceiling) by 0\.001, not by more than 2 standard errors \(2 × 0\.\d{3}\)/,
+      );
       // All 400 realizations: the same floor is judged on its value alone (this one meets it).
       const full = await judge(policy(s.req(ceiling ? 0.99 : 0.01)));
       expect(full.requirements[0].status).toBe('holds');
@@ -222,12 +276,19 @@ describe('what the reduced work cannot settle is unsettled, never met', () => {
     expect(cutEnv.min[j]).toBeGreaterThan(env.min[j]);
     expect(cut.requirements[0].status).toBe('unsettled');
     unsettled++;
-    expect(cut.findings.find((x) => x.rule === 'r-threshold')!.message).toMatch(/the minimum of fewer realizations can only be higher than that of all of them$/);
+    expect(cut.findings.find((x) => x.rule === 'r-threshold')!.message).toMatch(
+      /the minimum of fewer realizations can only be higher than that of all of them$/,
+    );
     expect((await judge(policy(threshold('min', floor, 0.5)))).requirements[0].status).toBe('short');
   });
 
   it('a requirement whose challenge the design cannot run is unsettled with a warning, not met', async () => {
-    const f = await judge(policy('  - kind: area-floor\n    challenge: quakes\n    min: 0.1\n', '  quakes:\n    remove: region\n    until: 50\n    points: 6\n'));
+    const f = await judge(
+      policy(
+        '  - kind: area-floor\n    challenge: quakes\n    min: 0.1\n',
+        '  quakes:\n    remove: region\n    until: 50\n    points: 6\n',
+      ),
+    );
     expect(f.requirements[0].status).toBe('unsettled');
     unsettled++;
     expect(f.findings.some((x) => x.severity === 'warn' && /could not be judged/.test(x.message))).toBe(true);
@@ -241,14 +302,21 @@ describe('base and head: one budget, paired realizations', () => {
   it('the budget cuts both sides to the same count, where the engine alone would not', async () => {
     const work = REALIZATION * 40;
     const gHead = compileTopology(parseDesign(HEAD, 'head.net.yaml'));
-    const alone = [g, gHead].map((graph) => planEvaluation(graph, spec([{ challenge: 'random-nodes', realizations: 400, until: 0.5, points: 6 }], work)).items[0].params.realizations);
+    const alone = [g, gHead].map(
+      (graph) =>
+        planEvaluation(graph, spec([{ challenge: 'random-nodes', realizations: 400, until: 0.5, points: 6 }], work))
+          .items[0].params.realizations,
+    );
     expect(alone[0]).not.toBe(alone[1]); // 40 for the mesh, more for the smaller head
     const f = await compare(policy(area, FAILURES, rest(0.02)), work);
     expect([f.base!.envelopes[0].realizations, f.head!.envelopes[0].realizations]).toEqual([40, 40]);
     const reason = `random-nodes: realizations reduced from 400 to 40 by the work budget (${work} element visits), on base and head alike so that they stay paired`;
     expect(f.base!.degraded).toEqual([reason]);
     expect(f.head!.degraded).toEqual([reason]);
-    expect(f.findings.filter((x) => x.rule === 'degraded').map((x) => x.message)).toEqual([`head evaluation reduced: ${reason}`, `base evaluation reduced: ${reason}`]);
+    expect(f.findings.filter((x) => x.rule === 'degraded').map((x) => x.message)).toEqual([
+      `head evaluation reduced: ${reason}`,
+      `base evaluation reduced: ${reason}`,
+    ]);
   });
 
   it('a drop judged on cut realizations: regressed only clearly beyond the allowance, unsettled near it, a notice clearly inside', async () => {
@@ -264,14 +332,17 @@ describe('base and head: one budget, paired realizations', () => {
     const noise = 2 * probe.se!;
     expect(noise).toBeGreaterThan(0);
     expect(drop).toBeGreaterThan(2 * noise); // so that "clearly beyond" below has a positive allowance
-    const at = async (allowance: number) => compareIsolated(policy(mean, FAILURES, rest(Number(allowance.toFixed(6)))), work);
-    const regressionOf = (f: FileReport) =>f.findings.find((x) => x.rule === 'regression')!;
+    const at = async (allowance: number) =>
+      compareIsolated(policy(mean, FAILURES, rest(Number(allowance.toFixed(6)))), work);
+    const regressionOf = (f: FileReport) => f.findings.find((x) => x.rule === 'regression')!;
 
     const near = await at(drop);
     expect(near.requirements[0].status).toBe('unsettled');
     unsettled++;
     expect(regressionOf(near).severity).toBe('warn');
-    expect(regressionOf(near).message).toMatch(/so it cannot be told whether it is beyond it: the work budget left 40 of the 400 realizations on head and base$/);
+    expect(regressionOf(near).message).toMatch(
+      /so it cannot be told whether it is beyond it: the work budget left 40 of the 400 realizations on head and base$/,
+    );
     expect(near.report.verdict).toBe('pass');
 
     const beyond = await at(drop - 2 * noise);
@@ -290,7 +361,8 @@ describe('base and head: one budget, paired realizations', () => {
 
   it('base and head cut differently do not pair: the change is unsettled, whatever its sign', async () => {
     // An engine that gives the head half the work it was handed: its count then differs.
-    const skewed: GateDeps['evaluate'] = (graph, s) => evaluateDesign(graph, graph.n === 10 ? { ...s, budget: { maxWork: Math.floor(s.budget!.maxWork! / 2) } } : s);
+    const skewed: GateDeps['evaluate'] = (graph, s) =>
+      evaluateDesign(graph, graph.n === 10 ? { ...s, budget: { maxWork: Math.floor(s.budget!.maxWork! / 2) } } : s);
     const f = await compare(policy(area, FAILURES, rest(0.5)), REALIZATION * 40, { evaluate: skewed });
     const [nb, nh] = [f.base!.envelopes[0].realizations, f.head!.envelopes[0].realizations];
     expect(nb).not.toBe(nh);
@@ -298,7 +370,9 @@ describe('base and head: one budget, paired realizations', () => {
     unsettled++;
     const why = f.findings.find((x) => x.rule === 'regression')!;
     expect(why.severity).toBe('warn');
-    expect(why.message).toContain(`the budget cut base and head to different numbers of realizations (${nb} and ${nh}), so they do not pair; the change cannot be judged`);
+    expect(why.message).toContain(
+      `the budget cut base and head to different numbers of realizations (${nb} and ${nh}), so they do not pair; the change cannot be judged`,
+    );
     reportCount('budgets', 'unsettled requirements shown', unsettled);
   });
 });
@@ -309,7 +383,8 @@ describe('the budget in the policy', () => {
     const seconds = 0.0001;
     const work = budgetWork({ seconds });
     expect(work).toBe(5000);
-    const bySeconds = async () => serializeReport((await judge(`${policy(reqs)}budget:\n  seconds: ${seconds}\n`)).report);
+    const bySeconds = async () =>
+      serializeReport((await judge(`${policy(reqs)}budget:\n  seconds: ${seconds}\n`)).report);
     const first = await bySeconds();
     expect(await bySeconds()).toBe(first);
     expect(serializeReport((await judge(policy(reqs), work)).report)).toBe(first);

@@ -32,7 +32,8 @@ function applyRemovals(text: string, patch: string): string {
       blocks.push(current);
       current = undefined;
     }
-    if (line.startsWith('+') && !line.startsWith('+++')) throw new Error('the patch adds lines; this helper only removes');
+    if (line.startsWith('+') && !line.startsWith('+++'))
+      throw new Error('the patch adds lines; this helper only removes');
   }
   if (current) blocks.push(current);
   let out = text;
@@ -53,7 +54,10 @@ let compared = 0;
 describe('the engine', () => {
   it('the demo backbone under the demo policy: byte-identical with 1, 2 and 4 threads, and inline', async () => {
     const g = compileTopology(parseDesign(base, DESIGN));
-    const fp = policyForFile(loadPolicy('.netbrace.yaml', () => policyText), DESIGN);
+    const fp = policyForFile(
+      loadPolicy('.netbrace.yaml', () => policyText),
+      DESIGN,
+    );
     const specs = evaluationSpecs(fp, fp.seed);
     for (const spec of specs) {
       const inline = JSON.stringify(evaluateDesign(g, spec).evaluation);
@@ -74,7 +78,10 @@ describe('the engine', () => {
 describe('the gate', () => {
   it('the demo change judged with 1, 2 and 4 threads gives the same JSON report, byte for byte', async () => {
     const head = applyRemovals(base, fixtureText('demo', 'changes', '1-retire-east-chord.patch'));
-    const repo = { base: { '.netbrace.yaml': policyText, [DESIGN]: base }, head: { '.netbrace.yaml': policyText, [DESIGN]: head } };
+    const repo = {
+      base: { '.netbrace.yaml': policyText, [DESIGN]: base },
+      head: { '.netbrace.yaml': policyText, [DESIGN]: head },
+    };
     const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block' };
     const reports: string[] = [];
     for (const threads of [1, 2, 4]) {
@@ -93,7 +100,9 @@ describe('the gate', () => {
     const repo = pairRepo('removed-node');
     const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block' };
     const threads = [1, 2, 4, 1, 2, 4, 1, 2, 4, 2];
-    const runs = await Promise.all(threads.map((n) => runGate({ ...request, threads: n }, memoryDeps(repo, { runTasks: threaded }))));
+    const runs = await Promise.all(
+      threads.map((n) => runGate({ ...request, threads: n }, memoryDeps(repo, { runTasks: threaded }))),
+    );
     const bytes = runs.map((r) => serializeReport(r.report));
     for (const b of bytes) expect(b).toBe(bytes[0]);
     compared += bytes.length;

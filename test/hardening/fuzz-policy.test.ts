@@ -23,33 +23,127 @@ const ENTRY = 'policies/team.yaml';
 const BASE = 'policies/base.yaml';
 
 const SEEDS: { name: string; text: string; base?: string }[] = [
-  { name: 'fixtures/policy/full.yaml', text: fixtureText('policy', 'full.yaml'), base: fixtureText('policy', 'base.yaml') },
+  {
+    name: 'fixtures/policy/full.yaml',
+    text: fixtureText('policy', 'full.yaml'),
+    base: fixtureText('policy', 'base.yaml'),
+  },
   { name: 'fixtures/policy/base.yaml', text: fixtureText('policy', 'base.yaml') },
   { name: 'fixtures/gate/policy.yaml', text: fixtureText('gate', 'policy.yaml') },
-  { name: 'fixtures/gate/inherits/team.yaml', text: fixtureText('gate', 'inherits', 'team.yaml'), base: fixtureText('gate', 'inherits', 'org.yaml') },
+  {
+    name: 'fixtures/gate/inherits/team.yaml',
+    text: fixtureText('gate', 'inherits', 'team.yaml'),
+    base: fixtureText('gate', 'inherits', 'org.yaml'),
+  },
   { name: 'fixtures/demo/policy.yaml', text: fixtureText('demo', 'policy.yaml') },
   { name: 'STARTER_POLICY', text: STARTER_POLICY },
 ];
 
 const TOKENS = [
-  'version: 1', 'version: 2', 'inherits: base.yaml', 'inherits: team.yaml', 'inherits: ../../../etc/passwd', 'inherits: /etc/passwd', 'inherits: ""',
-  'designs:', '  - paths: "../**"', '  - paths: "/etc/*"', '  - paths: "**/*"', '    format: graphml', '    format: exe', 'exclude: ["**"]',
-  'seed: -1', 'seed: 4294967296', 'seed: 1e20', 'seed: .nan', 'r-value:', '  metrics:', '    efficiency: 0', '    efficiency: -1',
-  '    pair_connectivity: 1e999', '    bogus_metric: 1', '  combine: min', 'challenges:', '  c1:', '    remove: nodes', '    remove: region',
-  '    remove: risk-groups', '    order: worst-first', '    order: sideways', '    adaptive: true', '    until: 0', '    until: 1e999',
-  '    until: 1.5', '    points: 1', '    points: 1001', '    realizations: 0', '    realizations: 1000000', '    band: [0.9, 0.1]',
-  '    band: [0, 1]', '    worst-case: 10', '    beam: 0', 'requirements:', '  - kind: r-threshold', '  - kind: n-1', '  - kind: no-new-spof',
-  '    challenge: c1', '    challenge: missing', '    at: 0.1', '    at: 99', '    statistic: quantile', '    statistic: worst-case', '    q: 0',
-  '    q: 1', '    removals: 11', '    min: 2', '    min: -1', '    max: 0', '    element: group', '    severity: fatal', '    elements: [bridges]',
-  'weakening:', '  allowed-drop: -1', '  error-multiple: 1e999', 'removed-designs: ignore', 'scopes:', '  - paths: "networks/core/**"',
-  '    requirements: []', '&a ', '*a', '<<: *a', '!!binary', '? ', '- ', '{', '}', '[', ']', '"', "'", '|', '>', '---', '...', '__proto__:',
-  'constructor:', '\t', '\n', '  ', '#', ': ', ',', '~', '\u2028', '\uFEFF',
+  'version: 1',
+  'version: 2',
+  'inherits: base.yaml',
+  'inherits: team.yaml',
+  'inherits: ../../../etc/passwd',
+  'inherits: /etc/passwd',
+  'inherits: ""',
+  'designs:',
+  '  - paths: "../**"',
+  '  - paths: "/etc/*"',
+  '  - paths: "**/*"',
+  '    format: graphml',
+  '    format: exe',
+  'exclude: ["**"]',
+  'seed: -1',
+  'seed: 4294967296',
+  'seed: 1e20',
+  'seed: .nan',
+  'r-value:',
+  '  metrics:',
+  '    efficiency: 0',
+  '    efficiency: -1',
+  '    pair_connectivity: 1e999',
+  '    bogus_metric: 1',
+  '  combine: min',
+  'challenges:',
+  '  c1:',
+  '    remove: nodes',
+  '    remove: region',
+  '    remove: risk-groups',
+  '    order: worst-first',
+  '    order: sideways',
+  '    adaptive: true',
+  '    until: 0',
+  '    until: 1e999',
+  '    until: 1.5',
+  '    points: 1',
+  '    points: 1001',
+  '    realizations: 0',
+  '    realizations: 1000000',
+  '    band: [0.9, 0.1]',
+  '    band: [0, 1]',
+  '    worst-case: 10',
+  '    beam: 0',
+  'requirements:',
+  '  - kind: r-threshold',
+  '  - kind: n-1',
+  '  - kind: no-new-spof',
+  '    challenge: c1',
+  '    challenge: missing',
+  '    at: 0.1',
+  '    at: 99',
+  '    statistic: quantile',
+  '    statistic: worst-case',
+  '    q: 0',
+  '    q: 1',
+  '    removals: 11',
+  '    min: 2',
+  '    min: -1',
+  '    max: 0',
+  '    element: group',
+  '    severity: fatal',
+  '    elements: [bridges]',
+  'weakening:',
+  '  allowed-drop: -1',
+  '  error-multiple: 1e999',
+  'removed-designs: ignore',
+  'scopes:',
+  '  - paths: "networks/core/**"',
+  '    requirements: []',
+  '&a ',
+  '*a',
+  '<<: *a',
+  '!!binary',
+  '? ',
+  '- ',
+  '{',
+  '}',
+  '[',
+  ']',
+  '"',
+  "'",
+  '|',
+  '>',
+  '---',
+  '...',
+  '__proto__:',
+  'constructor:',
+  '\t',
+  '\n',
+  '  ',
+  '#',
+  ': ',
+  ',',
+  '~',
+  '\u2028',
+  '\uFEFF',
 ];
 
 type Edit =
   | { op: 'insert'; at: number; s: string }
   | { op: 'replace'; at: number; s: string }
-  | { op: 'delete'; at: number; len: number } | { op: 'line'; at: number; to: number; dup: boolean };
+  | { op: 'delete'; at: number; len: number }
+  | { op: 'line'; at: number; to: number; dup: boolean };
 
 function applyEdit(text: string, e: Edit): string {
   const at = (f: number, n: number) => Math.min(n, Math.floor(f * (n + 1)));
@@ -72,19 +166,39 @@ function applyEdit(text: string, e: Edit): string {
 const frac = fc.double({ min: 0, max: 1, noNaN: true });
 const piece = fc.oneof(fc.constantFrom(...TOKENS), fc.string({ unit: 'binary', maxLength: 6 }));
 const edit: fc.Arbitrary<Edit> = fc.oneof(
-  fc.record({ op: fc.constantFrom('insert' as const, 'replace' as const), at: frac, s: fc.oneof(piece, piece.map((p) => `\n${p}`)) }),
+  fc.record({
+    op: fc.constantFrom('insert' as const, 'replace' as const),
+    at: frac,
+    s: fc.oneof(
+      piece,
+      piece.map((p) => `\n${p}`),
+    ),
+  }),
   fc.record({ op: fc.constant('delete' as const), at: frac, len: fc.integer({ min: 1, max: 60 }) }),
   fc.record({ op: fc.constant('line' as const), at: frac, to: frac, dup: fc.boolean() }),
 );
 
 /** A policy drawn from the policy's keys with values that are often out of range. */
-const NUMBER = fc.oneof(fc.constantFrom(0, 1, -1, 0.5, 2, 1001, 1e6, Number.POSITIVE_INFINITY, Number.NaN), fc.double({ noNaN: false }));
+const NUMBER = fc.oneof(
+  fc.constantFrom(0, 1, -1, 0.5, 2, 1001, 1e6, Number.POSITIVE_INFINITY, Number.NaN),
+  fc.double({ noNaN: false }),
+);
 const drawnPolicy = fc
   .record(
     {
       version: fc.constantFrom(1, 2, '1'),
       seed: NUMBER,
-      'r-value': fc.record({ metrics: fc.dictionary(fc.constantFrom('efficiency', 'pair_connectivity', 'largest_component', 'bogus'), NUMBER, { maxKeys: 3 }), combine: fc.constantFrom('mean', 'min', 'max') }, { requiredKeys: ['metrics'] }),
+      'r-value': fc.record(
+        {
+          metrics: fc.dictionary(
+            fc.constantFrom('efficiency', 'pair_connectivity', 'largest_component', 'bogus'),
+            NUMBER,
+            { maxKeys: 3 },
+          ),
+          combine: fc.constantFrom('mean', 'min', 'max'),
+        },
+        { requiredKeys: ['metrics'] },
+      ),
       challenges: fc.dictionary(
         fc.constantFrom('c1', 'c2', '__proto__', 'a b'),
         fc.record(
@@ -122,7 +236,15 @@ const drawnPolicy = fc
         ),
         { maxLength: 3 },
       ),
-      weakening: fc.record({ 'allowed-drop': NUMBER, 'allowed-relative-drop': NUMBER, 'error-multiple': NUMBER, severity: fc.constantFrom('fail', 'warn') }, { requiredKeys: [] }),
+      weakening: fc.record(
+        {
+          'allowed-drop': NUMBER,
+          'allowed-relative-drop': NUMBER,
+          'error-multiple': NUMBER,
+          severity: fc.constantFrom('fail', 'warn'),
+        },
+        { requiredKeys: [] },
+      ),
       'removed-designs': fc.constantFrom('fail', 'warn', 'notice', 'ignore', 'never'),
       inherits: fc.constantFrom('base.yaml', 'team.yaml', '../../x.yaml', '/etc/passwd'),
     },
@@ -139,19 +261,40 @@ const cases: fc.Arbitrary<Case> = fc.oneof(
   {
     weight: 6,
     arbitrary: fc
-      .record({ seed: fc.integer({ min: 0, max: SEEDS.length - 1 }), edits: fc.array(edit, { minLength: 1, maxLength: 3 }), baseEdits: fc.array(edit, { maxLength: 2 }) })
+      .record({
+        seed: fc.integer({ min: 0, max: SEEDS.length - 1 }),
+        edits: fc.array(edit, { minLength: 1, maxLength: 3 }),
+        baseEdits: fc.array(edit, { maxLength: 2 }),
+      })
       .map(({ seed, edits, baseEdits }) => {
         const s = SEEDS[seed];
-        const entry = edits.reduce(applyEdit, s.base !== undefined ? s.text.replace(/^inherits: .*$/m, 'inherits: base.yaml') : s.text);
+        const entry = edits.reduce(
+          applyEdit,
+          s.base !== undefined ? s.text.replace(/^inherits: .*$/m, 'inherits: base.yaml') : s.text,
+        );
         return { entry, base: s.base !== undefined ? baseEdits.reduce(applyEdit, s.base) : undefined };
       }),
   },
   { weight: 3, arbitrary: fc.record({ entry: drawnPolicy, base: fc.option(drawnPolicy, { nil: undefined }) }) },
-  { weight: 1, arbitrary: fc.record({ entry: fc.array(piece, { maxLength: 40 }).map((p) => p.join('')), base: fc.constant(undefined) }) },
+  {
+    weight: 1,
+    arbitrary: fc.record({
+      entry: fc.array(piece, { maxLength: 40 }).map((p) => p.join('')),
+      base: fc.constant(undefined),
+    }),
+  },
 );
 
 /** A ring of six sites, to plan the policy's challenges on. */
-const RING = graphFromEdges(6, [[0, 1], [1, 2], [2, 3], [3, 4], [4, 5], [5, 0], [0, 3]]);
+const RING = graphFromEdges(6, [
+  [0, 1],
+  [1, 2],
+  [2, 3],
+  [3, 4],
+  [4, 5],
+  [5, 0],
+  [0, 3],
+]);
 
 /** What a loaded policy must allow without an exception other than PolicyError. */
 function usePolicy(policy: Policy): void {

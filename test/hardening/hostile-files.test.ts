@@ -104,7 +104,12 @@ describe('YAML aliases', () => {
   /** Nine levels of nine aliases each: 9^9 ≈ 387 million strings if expanded. */
   const bomb = (top: string) => {
     const lines = ['a0: &a0 ["lol", "lol", "lol", "lol", "lol", "lol", "lol", "lol", "lol"]'];
-    for (let i = 1; i <= 8; i++) lines.push(`a${i}: &a${i} [${Array(9).fill(`*a${i - 1}`).join(', ')}]`);
+    for (let i = 1; i <= 8; i++)
+      lines.push(
+        `a${i}: &a${i} [${Array(9)
+          .fill(`*a${i - 1}`)
+          .join(', ')}]`,
+      );
     lines.push(`${top}: *a8`);
     return `${lines.join('\n')}\n`;
   };
@@ -140,10 +145,30 @@ describe('nesting 100,000 levels deep', () => {
   const cases: [string, string, string, number][] = [
     ['YAML flow sequences', 'evil/deep.net.yaml', `nodes: [{id: a}]\nmetadata: ${'['.repeat(D)}${']'.repeat(D)}\n`, 2],
     ['YAML block sequences', 'evil/deep-block.net.yaml', `nodes: [{id: a}]\nmetadata:\n  x: ${'- '.repeat(D)}a\n`, 3],
-    ['YAML block mappings by indentation', 'evil/deep-indent.net.yaml', `nodes: [{id: a}]\nmetadata:\n${Array.from({ length: 2_000 }, (_, i) => `${' '.repeat(i + 2)}k:`).join('\n')} 1\n`, 101],
-    ['JSON arrays', 'evil/deep.net.json', `{"nodes": [{"id": "a"}],\n "metadata": {"x": ${'['.repeat(D)}${']'.repeat(D)}}}`, 2],
-    ['JSON objects', 'evil/deep-obj.net.json', `{"nodes": [{"id": "a"}],\n "metadata": ${'{"a":'.repeat(D)}1${'}'.repeat(D)}}`, 2],
-    ['XML elements', 'evil/deep.graphml', `<graphml>\n<graph>\n${'<g>'.repeat(D)}${'</g>'.repeat(D)}\n</graph></graphml>\n`, 3],
+    [
+      'YAML block mappings by indentation',
+      'evil/deep-indent.net.yaml',
+      `nodes: [{id: a}]\nmetadata:\n${Array.from({ length: 2_000 }, (_, i) => `${' '.repeat(i + 2)}k:`).join('\n')} 1\n`,
+      101,
+    ],
+    [
+      'JSON arrays',
+      'evil/deep.net.json',
+      `{"nodes": [{"id": "a"}],\n "metadata": {"x": ${'['.repeat(D)}${']'.repeat(D)}}}`,
+      2,
+    ],
+    [
+      'JSON objects',
+      'evil/deep-obj.net.json',
+      `{"nodes": [{"id": "a"}],\n "metadata": ${'{"a":'.repeat(D)}1${'}'.repeat(D)}}`,
+      2,
+    ],
+    [
+      'XML elements',
+      'evil/deep.graphml',
+      `<graphml>\n<graph>\n${'<g>'.repeat(D)}${'</g>'.repeat(D)}\n</graph></graphml>\n`,
+      3,
+    ],
     ['GML lists', 'evil/deep.gml', `graph [\n node [ id 1 ]\n x ${'[ a '.repeat(D)}${']'.repeat(D)}\n]\n`, 3],
   ];
   for (const [what, file, text, line] of cases) {
@@ -170,8 +195,11 @@ describe('nesting 100,000 levels deep', () => {
   });
 
   it('ordinary nesting is untouched: every fixture and the demo design still parse', () => {
-    for (const f of ['ring.net.yaml', 'ring.net.json', 'ring.gml', 'ring.graphml']) expect(parseDesign(fixtureText('designs', f), f).nodes.length).toBe(4);
-    expect(parseDesign(fixtureText('demo', 'base', 'designs', 'lunmere-backbone.net.yaml'), 'lunmere.net.yaml').nodes.length).toBe(50);
+    for (const f of ['ring.net.yaml', 'ring.net.json', 'ring.gml', 'ring.graphml'])
+      expect(parseDesign(fixtureText('designs', f), f).nodes.length).toBe(4);
+    expect(
+      parseDesign(fixtureText('demo', 'base', 'designs', 'lunmere-backbone.net.yaml'), 'lunmere.net.yaml').nodes.length,
+    ).toBe(50);
   });
 });
 
@@ -210,7 +238,10 @@ describe('size and element limits', () => {
     truncateSync(file, 64 * 2 ** 30); // no disk used; reading it would fail (ERR_FS_FILE_TOO_LARGE) or take minutes
     const o = attempt(() => readDesign(file));
     expect(o.ok).toBe(false);
-    if (!o.ok) expect(o.error.message).toBe(`the design file is larger than the limit (${64 * 2 ** 30} bytes > ${DEFAULT_MAX_BYTES})`);
+    if (!o.ok)
+      expect(o.error.message).toBe(
+        `the design file is larger than the limit (${64 * 2 ** 30} bytes > ${DEFAULT_MAX_BYTES})`,
+      );
     expect(o.ms).toBeLessThan(HANG_MS);
   });
 
@@ -240,8 +271,16 @@ describe(`a node id 1 MB long (the limit is ${MAX_ID_LENGTH} characters)`, () =>
   const big = 'n'.repeat(2 ** 20);
   const cases: [string, string, number][] = [
     ['evil/long.net.yaml', `nodes:\n  - id: b\n  - id: ${big}\nlinks:\n  - between: [b, ${big}]\n`, 3],
-    ['evil/long.net.json', `{"nodes": [{"id": "b"},\n {"id": "${big}"}],\n "links": [{"between": ["b", "${big}"]}]}`, 2],
-    ['evil/long.graphml', `<graphml><graph>\n<node id="b"/>\n<node id="${big}"/>\n<edge source="b" target="${big}"/>\n</graph></graphml>\n`, 3],
+    [
+      'evil/long.net.json',
+      `{"nodes": [{"id": "b"},\n {"id": "${big}"}],\n "links": [{"between": ["b", "${big}"]}]}`,
+      2,
+    ],
+    [
+      'evil/long.graphml',
+      `<graphml><graph>\n<node id="b"/>\n<node id="${big}"/>\n<edge source="b" target="${big}"/>\n</graph></graphml>\n`,
+      3,
+    ],
     ['evil/long.gml', `graph [\n node [ id "b" ]\n node [ id "${big}" ]\n edge [ source "b" target "${big}" ]\n]\n`, 3],
     ['evil/long.csv', `source,target\nb,c\nb,${big}\n`, 3],
     ['evil/long-link-end.net.yaml', `nodes:\n  - id: b\nlinks:\n  - between: [b, ${big}x]\n`, 4],
@@ -250,7 +289,11 @@ describe(`a node id 1 MB long (the limit is ${MAX_ID_LENGTH} characters)`, () =>
     it(`${path.extname(file)}${file.includes('link-end') ? ' (unknown link end)' : ''}: refused at line ${line} with a short message`, () => {
       const e = refused(text, file, 'limit');
       expect(e.line).toBe(line);
-      expect(e.message).toMatch(new RegExp(`${2 ** 20 + (file.includes('link-end') ? 1 : 0)} characters long; netbrace accepts ids of at most ${MAX_ID_LENGTH}`));
+      expect(e.message).toMatch(
+        new RegExp(
+          `${2 ** 20 + (file.includes('link-end') ? 1 : 0)} characters long; netbrace accepts ids of at most ${MAX_ID_LENGTH}`,
+        ),
+      );
       expect(e.format().length).toBeLessThan(300);
     });
   }
@@ -272,11 +315,26 @@ describe('bytes that are not UTF-8 text', () => {
 
   const cases: [string, () => Uint8Array, number, RegExp][] = [
     // 5 MB of plain text, then one Latin-1 byte on the last line: found, not decoded with U+FFFD.
-    ['late-latin1.csv', () => new Uint8Array([...ascii('source,target\n'), ...new Uint8Array(5_000_000).fill(0x61), 0x2c, 0xe9, 0x0a]), 2, /^not UTF-8: byte 0xE9 at line 2, column 5000002; it looks like Latin-1/],
+    [
+      'late-latin1.csv',
+      () => new Uint8Array([...ascii('source,target\n'), ...new Uint8Array(5_000_000).fill(0x61), 0x2c, 0xe9, 0x0a]),
+      2,
+      /^not UTF-8: byte 0xE9 at line 2, column 5000002; it looks like Latin-1/,
+    ],
     // A PNG signature under a design name.
-    ['image.gml', () => new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d]), 1, /^not UTF-8: byte 0x89 at line 1, column 1/],
+    [
+      'image.gml',
+      () => new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d]),
+      1,
+      /^not UTF-8: byte 0x89 at line 1, column 1/,
+    ],
     // UTF-16 with a mark, then a high surrogate with no low one.
-    ['lone.net.yaml', () => new Uint8Array([0xff, 0xfe, 0x61, 0, 0x0a, 0, 0x00, 0xd8, 0x62, 0]), 2, /^not valid UTF-16: a lone surrogate 0xD800/],
+    [
+      'lone.net.yaml',
+      () => new Uint8Array([0xff, 0xfe, 0x61, 0, 0x0a, 0, 0x00, 0xd8, 0x62, 0]),
+      2,
+      /^not valid UTF-16: a lone surrogate 0xD800/,
+    ],
     ['nul.csv', () => ascii('source,target\na\u0000,b\n'), 2, /^not UTF-8 text: a NUL character at line 2, column 2/],
   ];
   for (const [name, make, line, message] of cases) {
@@ -313,7 +371,10 @@ describe('through the gate', () => {
     const good = fixtureText('designs', 'ring.net.yaml');
     const policy = 'designs:\n  - paths: ["designs/**"]\n';
     const head = { ...hostile, 'designs/ring.net.yaml': good, '.netbrace.yaml': policy };
-    const { report, exitCode } = await runGate({ policySource: 'base', mode: 'block', eventKind: 'schedule', head: 'head' }, memoryDeps({ base: head, head }));
+    const { report, exitCode } = await runGate(
+      { policySource: 'base', mode: 'block', eventKind: 'schedule', head: 'head' },
+      memoryDeps({ base: head, head }),
+    );
     expect(exitCode).toBe(1);
     const byPath = new Map(report.files.map((f) => [f.path, f]));
     for (const p of Object.keys(hostile)) {
@@ -323,7 +384,12 @@ describe('through the gate', () => {
       expect(f.findings.map((x) => x.rule)).toEqual(['parse-error']);
     }
     expect(byPath.get('designs/ring.net.yaml')!.status).not.toBe('unreadable');
-    reportCount('hostile', 'gate run over hostile designs', report.files.length, report.files.map((f) => `${f.path}: ${f.status}${f.error ? ` at line ${f.error.line}` : ''}`).join('; '));
+    reportCount(
+      'hostile',
+      'gate run over hostile designs',
+      report.files.length,
+      report.files.map((f) => `${f.path}: ${f.status}${f.error ? ` at line ${f.error.line}` : ''}`).join('; '),
+    );
   });
 });
 

@@ -48,8 +48,31 @@ const ALL = Object.values(IDS);
 /** Sites named by the hostile ids, in a chain between two plain ends; the base closes it into a
  *  ring and has one more site. So at head every hostile site is a new cut node, every link a new
  *  bridge (named by a hostile id), and the extra site is removed by the change. */
-const SITES = [IDS.script, IDS.img, IDS.markdown, IDS.pipes, IDS.code, IDS.mention, IDS.ansi, IDS.command, IDS.bidi, IDS.comment];
-const LINKS = [IDS.setOutput, IDS.percent, IDS.crlf, IDS.newline, IDS.expr, `${IDS.script} l`, `${IDS.ansi} l`, `${IDS.command} l`, `${IDS.bidi} l`, `${IDS.comment} l`, `${IDS.markdown} l`];
+const SITES = [
+  IDS.script,
+  IDS.img,
+  IDS.markdown,
+  IDS.pipes,
+  IDS.code,
+  IDS.mention,
+  IDS.ansi,
+  IDS.command,
+  IDS.bidi,
+  IDS.comment,
+];
+const LINKS = [
+  IDS.setOutput,
+  IDS.percent,
+  IDS.crlf,
+  IDS.newline,
+  IDS.expr,
+  `${IDS.script} l`,
+  `${IDS.ansi} l`,
+  `${IDS.command} l`,
+  `${IDS.bidi} l`,
+  `${IDS.comment} l`,
+  `${IDS.markdown} l`,
+];
 const REMOVED = `${IDS.newline} site`;
 /** The design's file name is the pull request's too: table pipes, a line break and a command in it. */
 const PATH = `designs/${IDS.pipes}\r\n::error::path-injected ${IDS.script}.net.yaml`;
@@ -66,7 +89,10 @@ function repo(): MemoryRepo {
     });
   const policy = 'designs:\n  - paths: ["**/*.net.yaml"]\n';
   const file = PATH;
-  return { base: { '.netbrace.yaml': policy, [file]: design(true) }, head: { '.netbrace.yaml': policy, [file]: design(false) } };
+  return {
+    base: { '.netbrace.yaml': policy, [file]: design(true) },
+    head: { '.netbrace.yaml': policy, [file]: design(false) },
+  };
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -78,7 +104,8 @@ function controlProblems(text: string, where: string, allowSgr = false): string[
   const problems: string[] = [];
   const stripped = allowSgr ? text.replace(/\u001b\[[0-9;]*m/g, '') : text;
   if (stripped.includes('\u001b')) problems.push(`${where}: an ESC byte`);
-  if (/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/.test(stripped.replace(/\u001b/g, ''))) problems.push(`${where}: a control character`);
+  if (/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/.test(stripped.replace(/\u001b/g, '')))
+    problems.push(`${where}: a control character`);
   if (BIDI.test(text)) problems.push(`${where}: a bidirectional or zero-width character`);
   return problems;
 }
@@ -127,7 +154,8 @@ function markdownProblems(md: string, where: string): string[] {
   if (/(^|[^\\])!\[i\\?\]/.test(prose)) problems.push(`${where}: an image from an id`);
   if (/@(everyone|acme)/.test(prose)) problems.push(`${where}: a live @-mention`);
   const count = (re: RegExp) => (prose.match(re) ?? []).length;
-  if (count(/<!--/g) !== count(/-->/g)) problems.push(`${where}: ${count(/<!--/g)} comment openers, ${count(/-->/g)} closers`);
+  if (count(/<!--/g) !== count(/-->/g))
+    problems.push(`${where}: ${count(/<!--/g)} comment openers, ${count(/-->/g)} closers`);
   if (count(/<details/g) !== count(/<\/details>/g)) problems.push(`${where}: <details> unbalanced`);
   // Tables: every row has as many cells as its header. GitHub splits cells at every unescaped
   // |, code spans included, so the raw line is what counts.
@@ -137,7 +165,10 @@ function markdownProblems(md: string, where: string): string[] {
     const cells = (l: string) => l.replace(/\\\\/g, '').split(/(?<!\\)\|/).length;
     const want = cells(lines[i]);
     for (let j = i + 2; j < lines.length && lines[j].startsWith('|'); j++) {
-      if (cells(lines[j]) !== want) problems.push(`${where}: table row ${j + 1} has ${cells(lines[j]) - 2} cells, the header ${want - 2}: ${lines[j].slice(0, 120)}`);
+      if (cells(lines[j]) !== want)
+        problems.push(
+          `${where}: table row ${j + 1} has ${cells(lines[j]) - 2} cells, the header ${want - 2}: ${lines[j].slice(0, 120)}`,
+        );
     }
   }
   return problems;
@@ -157,7 +188,10 @@ let dir: string;
 let api: FakeApi;
 
 beforeAll(async () => {
-  const { report: r } = await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'block' }, memoryDeps(repo()));
+  const { report: r } = await runGate(
+    { base: 'base', head: 'head', policySource: 'base', mode: 'block' },
+    memoryDeps(repo()),
+  );
   report = r;
   dir = mkdtempSync(path.join(tmpdir(), 'nb-ids-'));
   api = await startFakeApi();
@@ -206,7 +240,13 @@ describe('hostile ids in a real gate run', () => {
     expect(JSON.parse(text)).toEqual(sarif);
     const messages = (sarif.runs[0] as { results: { message: { text: string } }[] }).results.map((r) => r.message.text);
     expect(messages.length).toBeGreaterThan(0);
-    expect(messages.flatMap((m, i) => [...controlProblems(m, `result ${i}`), ...commandLines(m, `result ${i}`), ...forgedLines(m, `result ${i}`)])).toEqual([]);
+    expect(
+      messages.flatMap((m, i) => [
+        ...controlProblems(m, `result ${i}`),
+        ...commandLines(m, `result ${i}`),
+        ...forgedLines(m, `result ${i}`),
+      ]),
+    ).toEqual([]);
   });
 
   it('HTML: every id escaped; no script, no element or comment from an id', () => {
@@ -225,7 +265,17 @@ describe('hostile ids through the Action, as the runner sees its output', () => 
     const event = path.join(dir, 'event.json');
     const BASE = 'a'.repeat(40);
     const HEAD = 'b'.repeat(40);
-    writeFileSync(event, JSON.stringify({ number: 5, pull_request: { number: 5, base: { sha: BASE, repo: { full_name: 'acme/net' } }, head: { sha: HEAD, repo: { full_name: 'acme/net', fork: false } } } }));
+    writeFileSync(
+      event,
+      JSON.stringify({
+        number: 5,
+        pull_request: {
+          number: 5,
+          base: { sha: BASE, repo: { full_name: 'acme/net' } },
+          head: { sha: HEAD, repo: { full_name: 'acme/net', fork: false } },
+        },
+      }),
+    );
     const summaryFile = path.join(dir, 'summary.md');
     const outputFile = path.join(dir, 'output.txt');
     writeFileSync(summaryFile, '');
@@ -269,7 +319,10 @@ describe('hostile ids through the Action, as the runner sees its output', () => 
       else process.env.GITHUB_OUTPUT = savedOutput;
       process.exitCode = savedExit;
     }
-    expect(outcome, written.filter((w) => w.startsWith('::error')).join('')).toMatchObject({ exitCode: 1, verdict: 'fail' });
+    expect(outcome, written.filter((w) => w.startsWith('::error')).join('')).toMatchObject({
+      exitCode: 1,
+      verdict: 'fail',
+    });
     const stdout = written.join('');
     // Every line that starts a workflow command is one of ours; payloads never start one.
     const commands = stdout.split('\n').filter((l) => l.startsWith('::'));
@@ -277,7 +330,8 @@ describe('hostile ids through the Action, as the runner sees its output', () => 
     for (const c of commands) expect(c).toMatch(/^::(error|warning|notice)( [^:]*)?::/);
     // The runner decodes a command's data (%25 → %, %0D → CR, %0A → LF) into the message it
     // shows; no line of it may start a command either, and a "%0A" in an id stays text.
-    const decode = (d: string) => d.replace(/%0D/g, '\r').replace(/%0A/g, '\n').replace(/%3A/g, ':').replace(/%2C/g, ',').replace(/%25/g, '%');
+    const decode = (d: string) =>
+      d.replace(/%0D/g, '\r').replace(/%0A/g, '\n').replace(/%3A/g, ':').replace(/%2C/g, ',').replace(/%25/g, '%');
     for (const c of commands) {
       const [, , props = '', data] = /^::(\w+)( [^:]*)?::(.*)$/.exec(c)!;
       expect(commandLines(decode(data), 'annotation message')).toEqual([]);
@@ -300,6 +354,11 @@ describe('hostile ids through the Action, as the runner sees its output', () => 
     expect(html).not.toMatch(/<(script|img)\b/i);
     const json = JSON.parse(readFileSync(path.join(ws, '.netbrace-out', 'netbrace-report.json'), 'utf8'));
     expect(strings(json)).toEqual(expect.arrayContaining([...SITES, ...LINKS]));
-    reportCount('hostile', 'ids through every output', ALL.length, `${commands.length} workflow commands, ${comment.length}-character comment`);
+    reportCount(
+      'hostile',
+      'ids through every output',
+      ALL.length,
+      `${commands.length} workflow commands, ${comment.length}-character comment`,
+    );
   }, 30_000);
 });

@@ -28,15 +28,29 @@ function repo() {
   const chain = ['end-a', ...HOSTILE, 'end-b'];
   const links = chain.slice(1).map((b, i) => ({ id: `${HOSTILE[i % HOSTILE.length]} l${i}`, between: [chain[i], b] }));
   const design = (ring: boolean) =>
-    stringify({ nodes: chain.map((id) => ({ id, label: HOSTILE[0] })), links: ring ? [...links, { between: ['end-b', 'end-a'] }] : links });
+    stringify({
+      nodes: chain.map((id) => ({ id, label: HOSTILE[0] })),
+      links: ring ? [...links, { between: ['end-b', 'end-a'] }] : links,
+    });
   const policy = 'designs:\n  - paths: ["**/*.net.yaml"]\nmend:\n  candidates: plan.yaml\n';
-  const plan = stringify({ candidates: [{ between: ['end-a', 'end-b'], cost: 5, id: HOSTILE[2], note: HOSTILE[1] }, { between: [HOSTILE[0], 'end-b'], cost: 9, id: HOSTILE[6] }] });
-  return { base: { '.netbrace.yaml': policy, 'd.net.yaml': design(true) }, head: { '.netbrace.yaml': policy, 'd.net.yaml': design(false), 'plan.yaml': plan } };
+  const plan = stringify({
+    candidates: [
+      { between: ['end-a', 'end-b'], cost: 5, id: HOSTILE[2], note: HOSTILE[1] },
+      { between: [HOSTILE[0], 'end-b'], cost: 9, id: HOSTILE[6] },
+    ],
+  });
+  return {
+    base: { '.netbrace.yaml': policy, 'd.net.yaml': design(true) },
+    head: { '.netbrace.yaml': policy, 'd.net.yaml': design(false), 'plan.yaml': plan },
+  };
 }
 
 describe('hostile ids through the map and the mend views', () => {
   it('text, SVG and Mermaid stay inert', async () => {
-    const { report } = await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'block' }, memoryDeps(repo()));
+    const { report } = await runGate(
+      { base: 'base', head: 'head', policySource: 'base', mode: 'block' },
+      memoryDeps(repo()),
+    );
     const f = report.files[0];
     const m = f.mend!;
     expect(m.suggestions[0].links[0].id).toBe(HOSTILE[2]);

@@ -4,7 +4,16 @@
 // Action's inputs, the names the REST API returns, part report folders, `netbrace check`
 // paths and --policy, a policy's `inherits` and design globs, and designs that are links.
 
-import { existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync, symlinkSync, truncateSync, writeFileSync } from 'node:fs';
+import {
+  existsSync,
+  mkdirSync,
+  mkdtempSync,
+  readdirSync,
+  rmSync,
+  symlinkSync,
+  truncateSync,
+  writeFileSync,
+} from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -14,7 +23,14 @@ import type { Report } from '../../src/report/report.js';
 import type { ActionDeps, GitResult } from '../../src/shell/action-deps.js';
 import { run } from '../../src/shell/action-run.js';
 import { createClient } from '../../src/shell/github.js';
-import { prepareWrite, readInside, readInsideSync, repositoryPath, resolveInWorkspace, WorkspacePathError } from '../../src/shell/workspace.js';
+import {
+  prepareWrite,
+  readInside,
+  readInsideSync,
+  repositoryPath,
+  resolveInWorkspace,
+  WorkspacePathError,
+} from '../../src/shell/workspace.js';
 import { startFakeApi, type FakeApi } from '../action/fake-api.js';
 import { sampleReport } from '../report/sample-report.js';
 import { cli, commitFiles, fakeGit, fixtureText, reportCount, scratchRepo } from './support.js';
@@ -56,11 +72,15 @@ function refusedWith(fn: () => unknown, pattern: RegExp): void {
 
 describe('workspace.ts: the one place that decides', () => {
   it('resolveInWorkspace refuses ../, absolute paths, NUL and links out, and accepts what stays inside', () => {
-    for (const bad of ['../x.json', 'inner/../../x.json', path.join(outside, 'x.json'), '/etc/passwd']) refusedWith(() => resolveInWorkspace(ws, ws, bad, 'report'), /input "report" .*points outside the workspace/);
-    for (const bad of ['escape/x.json', 'escape/new/dir/x.json', 'secret-link.net.yaml']) refusedWith(() => resolveInWorkspace(ws, ws, bad, 'sarif'), /input "sarif" .*through a symbolic link/);
+    for (const bad of ['../x.json', 'inner/../../x.json', path.join(outside, 'x.json'), '/etc/passwd'])
+      refusedWith(() => resolveInWorkspace(ws, ws, bad, 'report'), /input "report" .*points outside the workspace/);
+    for (const bad of ['escape/x.json', 'escape/new/dir/x.json', 'secret-link.net.yaml'])
+      refusedWith(() => resolveInWorkspace(ws, ws, bad, 'sarif'), /input "sarif" .*through a symbolic link/);
     refusedWith(() => resolveInWorkspace(ws, ws, 'a\0b', 'html'), /NUL/);
     expect(resolveInWorkspace(ws, ws, 'inner-link/ok.txt', 'report')).toBe(path.join(ws, 'inner', 'ok.txt'));
-    expect(resolveInWorkspace(ws, path.join(ws, 'inner'), '../out/r.json', 'report')).toBe(path.join(ws, 'out', 'r.json'));
+    expect(resolveInWorkspace(ws, path.join(ws, 'inner'), '../out/r.json', 'report')).toBe(
+      path.join(ws, 'out', 'r.json'),
+    );
   });
 
   it('prepareWrite never writes through a link, not even one that points inside', () => {
@@ -75,8 +95,10 @@ describe('workspace.ts: the one place that decides', () => {
   it('repositoryPath normalises repository paths and refuses the rest (no file system)', () => {
     expect(repositoryPath('./designs//core.net.yaml', 'x')).toBe('designs/core.net.yaml');
     expect(repositoryPath('a\\b\\..\\c.gml', 'x')).toBe('a/c.gml');
-    for (const bad of ['/etc/passwd', 'C:/Windows/x', 'C:\\Windows\\x']) refusedWith(() => repositoryPath(bad, 'input "policy"'), /input "policy" .*absolute path/);
-    for (const bad of ['..', '../x.yaml', 'a/../../x.yaml', '..\\x']) refusedWith(() => repositoryPath(bad, 'input "policy"'), /points outside the repository/);
+    for (const bad of ['/etc/passwd', 'C:/Windows/x', 'C:\\Windows\\x'])
+      refusedWith(() => repositoryPath(bad, 'input "policy"'), /input "policy" .*absolute path/);
+    for (const bad of ['..', '../x.yaml', 'a/../../x.yaml', '..\\x'])
+      refusedWith(() => repositoryPath(bad, 'input "policy"'), /points outside the repository/);
   });
 
   it('readInside: null for what is absent, refusal for what is outside or too large (before reading)', async () => {
@@ -97,7 +119,9 @@ describe('workspace.ts: the one place that decides', () => {
     writeFileSync(path.join(ws, 'huge.gml'), '');
     truncateSync(path.join(ws, 'huge.gml'), 2 ** 40); // 1 TiB, sparse: reading it is impossible
     refusals++;
-    await expect(readInside(ws, 'huge.gml', 1024)).rejects.toThrow(`the file is larger than netbrace reads (${2 ** 40} bytes > 1024)`);
+    await expect(readInside(ws, 'huge.gml', 1024)).rejects.toThrow(
+      `the file is larger than netbrace reads (${2 ** 40} bytes > 1024)`,
+    );
     rmSync(path.join(ws, 'huge.gml'));
   });
 });
@@ -127,7 +151,14 @@ function actionDeps(git: (args: string[]) => GitResult = fakeGit(ws)): { d: Acti
     git: async (args) => git(args),
     github: (o) => createClient(o),
     renderHtml: () => '<!doctype html><title>r</title>',
-    out: { annotate: () => {}, info: () => {}, warning: (m) => rec.warnings.push(m), setOutput: () => {}, setFailed: (m) => rec.failed.push(m), appendSummary: () => {} },
+    out: {
+      annotate: () => {},
+      info: () => {},
+      warning: (m) => rec.warnings.push(m),
+      setOutput: () => {},
+      setFailed: (m) => rec.failed.push(m),
+      appendSummary: () => {},
+    },
   };
   return { d, rec };
 }
@@ -140,7 +171,17 @@ afterAll(() => api.close());
 
 function actionEnv(over: Record<string, string> = {}): Record<string, string> {
   const event = path.join(tmp, 'event.json');
-  writeFileSync(event, JSON.stringify({ number: 3, pull_request: { number: 3, base: { sha: BASE, repo: { full_name: 'acme/net' } }, head: { sha: HEAD, repo: { full_name: 'acme/net', fork: false } } } }));
+  writeFileSync(
+    event,
+    JSON.stringify({
+      number: 3,
+      pull_request: {
+        number: 3,
+        base: { sha: BASE, repo: { full_name: 'acme/net' } },
+        head: { sha: HEAD, repo: { full_name: 'acme/net', fork: false } },
+      },
+    }),
+  );
   return {
     GITHUB_WORKSPACE: ws,
     GITHUB_EVENT_NAME: 'pull_request',
@@ -157,7 +198,11 @@ function actionEnv(over: Record<string, string> = {}): Record<string, string> {
 
 describe('Action inputs never reach outside the workspace', () => {
   const cases: [string, string, RegExp][] = [
-    ['POLICY', '../outside/policy.yaml', /input "policy" \(\.\.\/outside\/policy\.yaml\) points outside the repository/],
+    [
+      'POLICY',
+      '../outside/policy.yaml',
+      /input "policy" \(\.\.\/outside\/policy\.yaml\) points outside the repository/,
+    ],
     ['POLICY', '@outside/policy.yaml', /input "policy" .* is an absolute path/],
     ['REPORT', '../outside/r.json', /input "report" .* points outside the workspace/],
     ['REPORT', 'escape/r.json', /input "report" .* through a symbolic link/],
@@ -188,7 +233,10 @@ describe('Action inputs never reach outside the workspace', () => {
   it('file names from the REST API are data: one that climbs out makes the list untrusted (no pass on it)', async () => {
     refusals++;
     api.prFiles.length = 0;
-    api.prFiles.push({ filename: 'README.md', status: 'modified' }, { filename: '../../outside/secret.net.yaml', status: 'added' });
+    api.prFiles.push(
+      { filename: 'README.md', status: 'modified' },
+      { filename: '../../outside/secret.net.yaml', status: 'added' },
+    );
     const missingBase = fakeGit(ws, BASE);
     const { d, rec } = actionDeps(missingBase);
     const outcome = await run(actionEnv({ INPUT_COMMENT: 'off' }), d);
@@ -208,7 +256,10 @@ describe('Action inputs never reach outside the workspace', () => {
     mkdirSync(parts);
     const r = sampleReport();
     writeFileSync(path.join(parts, 'a.json'), JSON.stringify(r));
-    writeFileSync(path.join(outside, 'b.json'), JSON.stringify({ ...r, files: [{ path: SECRET, status: 'unreadable', findings: [], requirements: [] }] }));
+    writeFileSync(
+      path.join(outside, 'b.json'),
+      JSON.stringify({ ...r, files: [{ path: SECRET, status: 'unreadable', findings: [], requirements: [] }] }),
+    );
     symlinkSync(path.join(outside, 'b.json'), path.join(parts, 'b.json'));
     symlinkSync(outside, path.join(parts, 'more'));
     const summaries: string[] = [];
@@ -231,7 +282,11 @@ describe('the gate on the command line', () => {
   });
 
   it('PATH and --policy arguments outside the repository are refused (exit 2)', async () => {
-    for (const args of [['check', '../outside/secret.net.yaml'], ['check', path.join(outside, 'secret.net.yaml')], ['check', '--policy', '../outside/policy.yaml']]) {
+    for (const args of [
+      ['check', '../outside/secret.net.yaml'],
+      ['check', path.join(outside, 'secret.net.yaml')],
+      ['check', '--policy', '../outside/policy.yaml'],
+    ]) {
       refusals++;
       const r = await cli(repo, ...args);
       expect(r.code, r.err).toBe(2);
@@ -283,16 +338,45 @@ describe('the gate on the command line', () => {
     // Such a glob can match no repository path: it is a policy error at its line (policy/globs.ts).
     for (const glob of ['../**', `${outside}/**`, '/**/*.net.yaml']) {
       commitFiles(repo, { '.netbrace.yaml': `designs:\n  - paths: ["**/*.net.yaml", "${glob}"]\n` }, 'globs');
-      const r = await cli(repo, 'check', '--worktree', '--policy-source', 'head', '--format', 'json', 'designs/ring.net.yaml');
+      const r = await cli(
+        repo,
+        'check',
+        '--worktree',
+        '--policy-source',
+        'head',
+        '--format',
+        'json',
+        'designs/ring.net.yaml',
+      );
       expect([glob, r.code, r.out]).toEqual([glob, 2, '']);
       expect(r.err).toMatch(/^\.netbrace\.yaml:2:30: designs entry 1, glob "/);
       expect(r.err).not.toContain(SECRET);
     }
     commitFiles(repo, { '.netbrace.yaml': 'designs:\n  - paths: ["**/*.net.yaml"]\n' }, 'globs');
-    const r = await cli(repo, 'check', '--worktree', '--policy-source', 'head', '--format', 'json', 'designs/ring.net.yaml');
+    const r = await cli(
+      repo,
+      'check',
+      '--worktree',
+      '--policy-source',
+      'head',
+      '--format',
+      'json',
+      'designs/ring.net.yaml',
+    );
     expect(r.code, r.err).toBeLessThan(2);
     // (the base's policy is the refused one: the head's judges)
-    const all = await cli(repo, 'check', '--head', 'HEAD', '--base', 'HEAD~1', '--policy-source', 'head', '--format', 'json');
+    const all = await cli(
+      repo,
+      'check',
+      '--head',
+      'HEAD',
+      '--base',
+      'HEAD~1',
+      '--policy-source',
+      'head',
+      '--format',
+      'json',
+    );
     for (const out of [r.out, all.out]) {
       const report = JSON.parse(out) as Report;
       for (const f of report.files) expect(f.path.startsWith('..') || path.isAbsolute(f.path)).toBe(false);

@@ -110,7 +110,10 @@ export class Tally {
   }
 
   summary(): string {
-    const kinds = [...this.kinds].sort().map(([k, n]) => `${k} ${n}`).join(', ');
+    const kinds = [...this.kinds]
+      .sort()
+      .map(([k, n]) => `${k} ${n}`)
+      .join(', ');
     return `${this.parsed} parsed, ${this.refused} refused${kinds ? ` [${kinds}]` : ''}, slowest ${this.slowestMs.toFixed(0)} ms`;
   }
 }
@@ -127,7 +130,12 @@ export function scratchRepo(root: string, files: Record<string, string>): string
 }
 
 export function git(cwd: string, ...args: string[]): string {
-  return execFileSync('git', args, { cwd, encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'], env: { ...process.env, GIT_AUTHOR_DATE: '2001-01-01T00:00:00Z', GIT_COMMITTER_DATE: '2001-01-01T00:00:00Z' } }).trim();
+  return execFileSync('git', args, {
+    cwd,
+    encoding: 'utf8',
+    stdio: ['ignore', 'pipe', 'pipe'],
+    env: { ...process.env, GIT_AUTHOR_DATE: '2001-01-01T00:00:00Z', GIT_COMMITTER_DATE: '2001-01-01T00:00:00Z' },
+  }).trim();
 }
 
 /** Writes the files (null deletes) and commits everything; returns the commit id. */
@@ -165,10 +173,15 @@ export async function cli(cwd: string, ...args: string[]): Promise<{ code: numbe
  * succeeds, except that commit `missing` (a base a shallow clone lacks) is absent and cannot be
  * fetched.
  */
-export function fakeGit(toplevel: string, missing?: string, fetchError = 'fatal: remote error: upload-pack: not our ref'): (args: string[]) => GitResult {
+export function fakeGit(
+  toplevel: string,
+  missing?: string,
+  fetchError = 'fatal: remote error: upload-pack: not our ref',
+): (args: string[]) => GitResult {
   return (args) => {
     if (args.includes('--show-toplevel')) return { code: 0, stdout: `${toplevel}\n`, stderr: '' };
-    if (missing && args[0] === 'cat-file' && args.some((a) => a.startsWith(missing))) return { code: 1, stdout: '', stderr: '' };
+    if (missing && args[0] === 'cat-file' && args.some((a) => a.startsWith(missing)))
+      return { code: 1, stdout: '', stderr: '' };
     if (missing && args[0] === 'fetch') return { code: 128, stdout: '', stderr: fetchError };
     return { code: 0, stdout: '', stderr: '' };
   };

@@ -16,7 +16,10 @@ import type { FileReport } from '../../src/report/report.js';
 import { parseDesign } from '../../src/topology/parse.js';
 import { repoRoot } from '../topology/helpers.js';
 
-const DEMO = readFileSync(path.join(repoRoot, 'fixtures', 'demo', 'base', 'designs', 'lunmere-backbone.net.yaml'), 'utf8');
+const DEMO = readFileSync(
+  path.join(repoRoot, 'fixtures', 'demo', 'base', 'designs', 'lunmere-backbone.net.yaml'),
+  'utf8',
+);
 const demoTopology = () => parseDesign(DEMO, 'designs/lunmere-backbone.net.yaml');
 /** The demo's first change: the two links it retires, cut out. */
 function change1(): string {
@@ -111,7 +114,12 @@ describe('the map of a change', () => {
     expect(m.layout).toBe('geographic');
     expect(m.nodes).toHaveLength(50);
     expect(m.links).toHaveLength(82);
-    expect(m.links.filter((l) => l.side === 'base').map((l) => l.id).sort()).toEqual(['ibberlin-tarnquist', 'kaskeld-fenwhistle']);
+    expect(
+      m.links
+        .filter((l) => l.side === 'base')
+        .map((l) => l.id)
+        .sort(),
+    ).toEqual(['ibberlin-tarnquist', 'kaskeld-fenwhistle']);
     expect(m.links.filter((l) => l.side === 'head')).toEqual([]);
     for (const n of m.nodes) expect(n.line).toBeGreaterThan(0);
   });
@@ -127,7 +135,10 @@ describe('the map of a change', () => {
 
   it('says why there is no map of a design too large to draw', () => {
     const n = MAP_MAX_NODES + 1;
-    const big = graphFromEdges(n, Array.from({ length: n - 1 }, (_, i) => [i, i + 1] as [number, number]));
+    const big = graphFromEdges(
+      n,
+      Array.from({ length: n - 1 }, (_, i) => [i, i + 1] as [number, number]),
+    );
     const m = buildDesignMap({ graph: big });
     expect('omitted' in m && m.omitted).toContain('more than a map shows legibly');
   });
@@ -166,15 +177,39 @@ describe('the SVG map', () => {
   const base = compileTopology(demoTopology());
   const headT = parseDesign(change1(), 'designs/lunmere-backbone.net.yaml');
   const head = compileTopology(headT);
-  const map = buildDesignMap({ graph: head, labels: new Map(headT.nodes.map((n) => [n.id, n.label ?? n.id])) }, { graph: base }) as DesignMap;
+  const map = buildDesignMap(
+    { graph: head, labels: new Map(headT.nodes.map((n) => [n.id, n.label ?? n.id])) },
+    { graph: base },
+  ) as DesignMap;
   const report: FileReport = {
     path: 'designs/lunmere-backbone.net.yaml',
     status: 'weakened',
     requirements: [],
     findings: [
-      { rule: 'new-bridge', severity: 'fail', message: 'x', elements: [{ id: 'kaskeld-ibberlin', kind: 'link', line: 303 }], line: 303 },
-      { rule: 'new-cut-node', severity: 'warn', message: 'x', elements: [{ id: 'kaskeld', kind: 'node', line: 58 }], line: 58 },
-      { rule: 'weakest-sequence', severity: 'notice', message: 'weakest', elements: [{ id: 'yarlsquay', kind: 'node', line: 38 }, { id: 'orrowin', kind: 'node', line: 22 }], line: 38 },
+      {
+        rule: 'new-bridge',
+        severity: 'fail',
+        message: 'x',
+        elements: [{ id: 'kaskeld-ibberlin', kind: 'link', line: 303 }],
+        line: 303,
+      },
+      {
+        rule: 'new-cut-node',
+        severity: 'warn',
+        message: 'x',
+        elements: [{ id: 'kaskeld', kind: 'node', line: 58 }],
+        line: 58,
+      },
+      {
+        rule: 'weakest-sequence',
+        severity: 'notice',
+        message: 'weakest',
+        elements: [
+          { id: 'yarlsquay', kind: 'node', line: 38 },
+          { id: 'orrowin', kind: 'node', line: 22 },
+        ],
+        line: 38,
+      },
     ],
     map,
   };
@@ -220,12 +255,17 @@ describe('the SVG map', () => {
   });
 
   it('escapes hostile ids', () => {
-    const t = parseDesign('nodes: [{id: "<script>x</script>"}, {id: "a&b\\"c"}]\nlinks: [{between: ["<script>x</script>", "a&b\\"c"], id: "</title><g onload=1>"}]\n', 'h.net.yaml');
+    const t = parseDesign(
+      'nodes: [{id: "<script>x</script>"}, {id: "a&b\\"c"}]\nlinks: [{between: ["<script>x</script>", "a&b\\"c"], id: "</title><g onload=1>"}]\n',
+      'h.net.yaml',
+    );
     const m = buildDesignMap({ graph: compileTopology(t) }) as DesignMap;
     const out = renderMapSvg(m, mapHighlights({ path: 'h', status: 'holds', findings: [], requirements: [] }));
     expect(out).not.toContain('<script>');
     expect(out).not.toContain('<g onload');
-    const titles = walk(parseSvg(out)).filter((e) => e.name === 'title').map((e) => e.text);
+    const titles = walk(parseSvg(out))
+      .filter((e) => e.name === 'title')
+      .map((e) => e.text);
     expect(titles.some((x) => x.includes('</title><g onload=1>'))).toBe(true);
   });
 });

@@ -52,7 +52,9 @@ describe('applying a suggestion', () => {
     const text = applyToText(YAML_DESIGN, 'native-yaml', t, change);
     expect(text).toContain('# a small design, comments kept');
     expect(text).toContain('# a parallel twin');
-    expect(text).toContain('  - id: ac\n    between: [a, c]\n    length_km: 7.5\n    latency_ms: 0.14\n    risk_groups: [duct-9]\n');
+    expect(text).toContain(
+      '  - id: ac\n    between: [a, c]\n    length_km: 7.5\n    latency_ms: 0.14\n    risk_groups: [duct-9]\n',
+    );
     const edited = compileTopology(parseDesign(text, 'd.net.yaml'));
     const judged = compileTopology(applyToTopology(t, change));
     expect(facts(edited)).toEqual(facts(judged));
@@ -66,11 +68,17 @@ describe('applying a suggestion', () => {
   it('JSON: the same', () => {
     const json = JSON.stringify({
       nodes: [{ id: 'a' }, { id: 'b' }, { id: 'c' }],
-      links: [{ between: ['a', 'b'] }, { id: 'bc', between: ['b', 'c'], length_km: 5, latency_ms: 0.1 }, { between: ['a', 'b'] }],
+      links: [
+        { between: ['a', 'b'] },
+        { id: 'bc', between: ['b', 'c'], length_km: 5, latency_ms: 0.1 },
+        { between: ['a', 'b'] },
+      ],
     });
     const t = parseDesign(json, 'd.net.json');
     const text = applyToText(json, 'native-json', t, change);
-    expect(facts(compileTopology(parseDesign(text, 'd.net.json')))).toEqual(facts(compileTopology(applyToTopology(t, change))));
+    expect(facts(compileTopology(parseDesign(text, 'd.net.json')))).toEqual(
+      facts(compileTopology(applyToTopology(t, change))),
+    );
   });
 
   it('refuses formats it cannot edit, with a hint', () => {

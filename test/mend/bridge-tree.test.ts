@@ -11,8 +11,16 @@ import { withExtraLinks } from '../../src/mend/apply.js';
 import { eswaranTarjanBound } from '../../src/mend/bridge-tree.js';
 import { Xoshiro128 } from '../../src/random.js';
 
-const path = (n: number) => graphFromEdges(n, Array.from({ length: n - 1 }, (_, i) => [i, i + 1] as [number, number]));
-const star = (k: number) => graphFromEdges(k + 1, Array.from({ length: k }, (_, i) => [0, i + 1] as [number, number]));
+const path = (n: number) =>
+  graphFromEdges(
+    n,
+    Array.from({ length: n - 1 }, (_, i) => [i, i + 1] as [number, number]),
+  );
+const star = (k: number) =>
+  graphFromEdges(
+    k + 1,
+    Array.from({ length: k }, (_, i) => [0, i + 1] as [number, number]),
+  );
 const twoTrianglesBridge = () =>
   graphFromEdges(6, [
     [0, 1],

@@ -13,7 +13,10 @@ import { DEFAULT_ROUTE_FACTOR, generateCandidates, parseCandidateFile } from '..
 import { parseDesign } from '../../src/topology/parse.js';
 import { repoRoot } from '../topology/helpers.js';
 
-const DEMO = readFileSync(path.join(repoRoot, 'fixtures', 'demo', 'base', 'designs', 'lunmere-backbone.net.yaml'), 'utf8');
+const DEMO = readFileSync(
+  path.join(repoRoot, 'fixtures', 'demo', 'base', 'designs', 'lunmere-backbone.net.yaml'),
+  'utf8',
+);
 
 describe('generated candidates', () => {
   const full = parseDesign(DEMO, 'd.net.yaml');
@@ -27,7 +30,9 @@ describe('generated candidates', () => {
     expect(set.unit).toBe('km');
     for (const id of retired) {
       const link = full.links.find((l) => l.id === id)!;
-      const c = set.list.find((x) => [head.nodeIds[x.a], head.nodeIds[x.b]].sort().join() === [link.source, link.target].sort().join());
+      const c = set.list.find(
+        (x) => [head.nodeIds[x.a], head.nodeIds[x.b]].sort().join() === [link.source, link.target].sort().join(),
+      );
       expect(c, id).toBeDefined();
       expect(c!.lengthKm).toBe(link.length);
     }
@@ -51,12 +56,20 @@ describe('generated candidates', () => {
       expect(c.lengthKm! / 1.3).toBeLessThanOrEqual(longest + 0.1);
     }
     // Shortest first.
-    for (let i = 1; i < set.list.length; i++) expect(set.list[i].lengthKm!).toBeGreaterThanOrEqual(set.list[i - 1].lengthKm!);
-    expect(generateCandidates(head, { maxKm: 30, routeFactor: 1.5 }).list.every((c) => c.lengthKm! <= 30 * 1.5 + 0.05)).toBe(true);
+    for (let i = 1; i < set.list.length; i++)
+      expect(set.list[i].lengthKm!).toBeGreaterThanOrEqual(set.list[i - 1].lengthKm!);
+    expect(
+      generateCandidates(head, { maxKm: 30, routeFactor: 1.5 }).list.every((c) => c.lengthKm! <= 30 * 1.5 + 0.05),
+    ).toBe(true);
   });
 
   it('without coordinates: every pair not yet joined, priced per link', () => {
-    const g = compileTopology(parseDesign('nodes: [{id: a}, {id: b}, {id: c}, {id: d}]\nlinks: [{between: [a, b]}, {between: [b, c]}]\n', 'x.net.yaml'));
+    const g = compileTopology(
+      parseDesign(
+        'nodes: [{id: a}, {id: b}, {id: c}, {id: d}]\nlinks: [{between: [a, b]}, {between: [b, c]}]\n',
+        'x.net.yaml',
+      ),
+    );
     const s = generateCandidates(g);
     expect(s.unit).toBe('link');
     expect(s.list.map((c) => [g.nodeIds[c.a], g.nodeIds[c.b]].join('-'))).toEqual(['a-c', 'a-d', 'b-d', 'c-d']);
@@ -64,7 +77,9 @@ describe('generated candidates', () => {
 });
 
 describe("the planner's candidate list", () => {
-  const g = compileTopology(parseDesign('nodes: [{id: a}, {id: b}, {id: c}]\nlinks: [{between: [a, b]}]\n', 'x.net.yaml'));
+  const g = compileTopology(
+    parseDesign('nodes: [{id: a}, {id: b}, {id: c}]\nlinks: [{between: [a, b]}]\n', 'x.net.yaml'),
+  );
 
   it('reads links with lengths, costs, latencies and ducts; a site the design lacks is skipped with a note', () => {
     const text = [

@@ -37,7 +37,10 @@ function nonAdjacent(g: CompactGraph): [number, number][] {
 
 const GRAPHS: Record<string, CompactGraph> = {
   // A path of 7: μ₂ is simple; joining the ends (a ring) raises it most.
-  'path-7': graphFromEdges(7, Array.from({ length: 6 }, (_, i) => [i, i + 1] as [number, number])),
+  'path-7': graphFromEdges(
+    7,
+    Array.from({ length: 6 }, (_, i) => [i, i + 1] as [number, number]),
+  ),
   // Two triangles joined by a bridge.
   'two-triangles-bridge': graphFromEdges(6, [
     [0, 1],

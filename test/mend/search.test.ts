@@ -11,7 +11,10 @@ afterAll(() => closeWorkers());
 
 const request: GateRequest = { base: 'base', head: 'head', policySource: 'base', mode: 'block' };
 const FILE = 'networks/site.net.yaml';
-const threaded = (n: number): GateDeps['evaluate'] => (g, spec) => evaluateDesignParallel(g, spec, n, { minWork: 0 });
+const threaded =
+  (n: number): GateDeps['evaluate'] =>
+  (g, spec) =>
+    evaluateDesignParallel(g, spec, n, { minWork: 0 });
 
 describe('mending a ring that became a chain', () => {
   it('suggests the one link that closes the ring again: the Eswaran–Tarjan bound, and it holds', async () => {
@@ -36,14 +39,27 @@ describe('mending a ring that became a chain', () => {
     expect(first.rAfter).toBeCloseTo(baseAreas.reduce((s, a) => s + a, 0) / baseAreas.length, 12);
     // The alternative: harden the new single points of failure.
     const harden = m.suggestions.find((s) => s.kind === 'harden')!;
-    expect(harden.harden.map((e) => e.kind).sort()).toEqual(['link', 'link', 'link', 'link', 'link', 'node', 'node', 'node', 'node']);
+    expect(harden.harden.map((e) => e.kind).sort()).toEqual([
+      'link',
+      'link',
+      'link',
+      'link',
+      'link',
+      'node',
+      'node',
+      'node',
+      'node',
+    ]);
     expect(harden.fixes.filter((k) => k.startsWith('new-'))).toHaveLength(9);
   });
 
   it('gives the same suggestions on every run and with 1, 2 or 4 worker threads', async () => {
     const runs: string[] = [];
     for (const evaluate of [undefined, threaded(1), threaded(2), threaded(4)]) {
-      const { report } = await runGate({ ...request, threads: 2 }, memoryDeps(pairRepo('ring-to-chain'), evaluate ? { evaluate } : {}));
+      const { report } = await runGate(
+        { ...request, threads: 2 },
+        memoryDeps(pairRepo('ring-to-chain'), evaluate ? { evaluate } : {}),
+      );
       runs.push(serializeReport(report));
     }
     const again = await runGate(request, memoryDeps(pairRepo('ring-to-chain')));
@@ -65,7 +81,9 @@ describe('mending a ring that became a chain', () => {
     const m = (await runGate(request, memoryDeps(repo))).report.files[0].mend!;
     expect(m.candidates).toEqual({ source: 'list', path: 'planning/links.yaml', count: 3 });
     const first = m.suggestions[0];
-    expect(first.links).toEqual([{ id: 'harbour-orchard-lease', between: ['harbour', 'orchard'], cost: 10, source: 'list', line: 4 }]);
+    expect(first.links).toEqual([
+      { id: 'harbour-orchard-lease', between: ['harbour', 'orchard'], cost: 10, source: 'list', line: 4 },
+    ]);
     expect(first.unit).toBe('cost');
     expect(first.total).toBe(10);
     expect(first.holds).toBe(true);
@@ -97,7 +115,10 @@ describe('mending a ring that became a chain', () => {
   it('without a base, aims at the floors it falls short of', async () => {
     const policy = 'requirements:\n  - kind: n-1\n    element: link\n    min: 0.7\n';
     const repo = { base: {}, head: { '.netbrace.yaml': policy, [FILE]: gateFixture('ring-to-chain/head.net.yaml') } };
-    const { report } = await runGate({ head: 'head', paths: [FILE], policySource: 'head', mode: 'block', mend: 'always' }, memoryDeps(repo));
+    const { report } = await runGate(
+      { head: 'head', paths: [FILE], policySource: 'head', mode: 'block', mend: 'always' },
+      memoryDeps(repo),
+    );
     const m = report.files[0].mend!;
     expect(m.targets.map((t) => t.key)).toEqual(['n-1|n-1:link']);
     expect(m.suggestions.length).toBeGreaterThan(0);

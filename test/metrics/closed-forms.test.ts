@@ -21,7 +21,8 @@ import {
   wheel,
 } from './families.js';
 
-const raw = (id: string, g: CompactGraph, options?: MetricOptions) => getMetric(id).create(g, options)(createMask(g)).raw;
+const raw = (id: string, g: CompactGraph, options?: MetricOptions) =>
+  getMetric(id).create(g, options)(createMask(g)).raw;
 const binom = (n: number, k: number) => {
   let r = 1;
   for (let i = 1; i <= k; i++) r = (r * (n - k + i)) / i;
@@ -39,9 +40,11 @@ describe('algebraic connectivity (docs/METHODS.md §9.1; Fiedler 1973, standard 
     it(`${name}: paths 2(1−cos(π/n)), cycles 2(1−cos(2π/n)), K_n = n (M)`, () => {
       expectRelative(raw('algebraic_connectivity', path(5), opt), 0.381966011, 1e-8);
       expectRelative(raw('algebraic_connectivity', path(10), opt), 0.097886967, 1e-8);
-      for (const n of [3, 7, 30, 90]) expectRelative(raw('algebraic_connectivity', path(n), opt), 2 * (1 - Math.cos(Math.PI / n)));
+      for (const n of [3, 7, 30, 90])
+        expectRelative(raw('algebraic_connectivity', path(n), opt), 2 * (1 - Math.cos(Math.PI / n)));
       expectRelative(raw('algebraic_connectivity', cycle(10), opt), 0.381966011, 1e-8);
-      for (const n of [5, 64, 101]) expectRelative(raw('algebraic_connectivity', cycle(n), opt), 2 * (1 - Math.cos((2 * Math.PI) / n)));
+      for (const n of [5, 64, 101])
+        expectRelative(raw('algebraic_connectivity', cycle(n), opt), 2 * (1 - Math.cos((2 * Math.PI) / n)));
       for (const n of [2, 10, 60]) expectRelative(raw('algebraic_connectivity', complete(n), opt), n);
     });
     it(`${name}: star 1, hypercube Q_d 2, K_{m,n} min(m,n), Petersen 2 (M)`, () => {
@@ -53,7 +56,8 @@ describe('algebraic connectivity (docs/METHODS.md §9.1; Fiedler 1973, standard 
     });
     it(`${name}: wheel 1+2(1−cos(2π/(n−1))) (derived), grid min(a(P_m), a(P_k)) (M), dodecahedron 3−√5 (V)`, () => {
       expectRelative(raw('algebraic_connectivity', wheel(8), opt), 1.753020396, 1e-8);
-      for (const n of [6, 50]) expectRelative(raw('algebraic_connectivity', wheel(n), opt), 1 + 2 * (1 - Math.cos((2 * Math.PI) / (n - 1))));
+      for (const n of [6, 50])
+        expectRelative(raw('algebraic_connectivity', wheel(n), opt), 1 + 2 * (1 - Math.cos((2 * Math.PI) / (n - 1))));
       expectRelative(raw('algebraic_connectivity', grid(4, 6), opt), 0.267949192, 1e-8);
       expectRelative(raw('algebraic_connectivity', grid(9, 13), opt), 2 * (1 - Math.cos(Math.PI / 13)));
       expectRelative(raw('algebraic_connectivity', dodecahedron(), opt), 3 - Math.sqrt(5));
@@ -114,7 +118,10 @@ describe('natural connectivity (docs/METHODS.md §9.4, derived; Wu et al. 2010)'
     const n = 720;
     // The iterative path: the top eigenpair is deflated and the rest of K_N's spectrum is flat
     // (all −1), so the quadrature is exact here whatever the probes.
-    expectRelative(raw('natural_connectivity', complete(n), { denseLimit: 0 }), n - 1 + Math.log1p((n - 1) * Math.exp(-n)) - Math.log(n));
+    expectRelative(
+      raw('natural_connectivity', complete(n), { denseLimit: 0 }),
+      n - 1 + Math.log1p((n - 1) * Math.exp(-n)) - Math.log(n),
+    );
   });
 });
 

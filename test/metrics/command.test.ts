@@ -43,7 +43,13 @@ describe('netbrace metrics', () => {
   });
 
   it('--only restricts the set, keeps the order given, and says on stderr what does not apply', async () => {
-    const r = await run(['metrics', 'fixtures/designs/ring.csv', '--json', '--only', 'diameter,efficiency,demand_served']);
+    const r = await run([
+      'metrics',
+      'fixtures/designs/ring.csv',
+      '--json',
+      '--only',
+      'diameter,efficiency,demand_served',
+    ]);
     expect(r.code).toBe(0);
     expect(Object.keys(JSON.parse(r.out).metrics)).toEqual(['diameter', 'efficiency']);
     expect(r.err).toMatch(/demand_served does not apply/);

@@ -23,13 +23,24 @@ describe('bridges and cut_nodes', () => {
     expect(value('cut_nodes', g, mask)).toEqual({ raw: 0, normalized: 0 });
   });
   it('a parallel link is never a bridge', () => {
-    const g = graphFromEdges(3, [[0, 1], [0, 1], [1, 2]]);
+    const g = graphFromEdges(3, [
+      [0, 1],
+      [0, 1],
+      [1, 2],
+    ]);
     expect(value('bridges', g).raw).toBe(1);
     // {0,1} is 2-link-connected: 1 of 3 pairs survives any single link failure.
     expectRelative(value('bridges', g).normalized, 1 / 3);
   });
   it('two triangles sharing a node: one cut node, blocks of 3 and 3 → 6 of 10 pairs', () => {
-    const g = graphFromEdges(5, [[0, 1], [1, 2], [2, 0], [2, 3], [3, 4], [4, 2]]);
+    const g = graphFromEdges(5, [
+      [0, 1],
+      [1, 2],
+      [2, 0],
+      [2, 3],
+      [3, 4],
+      [4, 2],
+    ]);
     expect(value('cut_nodes', g).raw).toBe(1);
     expectRelative(value('cut_nodes', g).normalized, 6 / 10);
     expect(value('bridges', g)).toEqual({ raw: 0, normalized: 1 });
@@ -54,12 +65,31 @@ describe('bridges and cut_nodes', () => {
 
 describe('link connectivity counts parallel links', () => {
   it('three parallel links: λ = 3 (score capped at 1); a cycle with one doubled link: λ = 2; κ ignores parallels', () => {
-    const triple = graphFromEdges(2, [[0, 1], [0, 1], [0, 1]]);
+    const triple = graphFromEdges(2, [
+      [0, 1],
+      [0, 1],
+      [0, 1],
+    ]);
     expect(value('link_connectivity', triple)).toEqual({ raw: 3, normalized: 1 });
     expect(value('node_connectivity', triple).raw).toBe(1);
-    const ring = graphFromEdges(5, [[0, 1], [1, 2], [2, 3], [3, 4], [4, 0], [0, 1]]);
+    const ring = graphFromEdges(5, [
+      [0, 1],
+      [1, 2],
+      [2, 3],
+      [3, 4],
+      [4, 0],
+      [0, 1],
+    ]);
     expect(value('link_connectivity', ring).raw).toBe(2);
-    const chain = graphFromEdges(4, [[0, 1], [0, 1], [1, 2], [1, 2], [2, 3], [2, 3], [2, 3]]);
+    const chain = graphFromEdges(4, [
+      [0, 1],
+      [0, 1],
+      [1, 2],
+      [1, 2],
+      [2, 3],
+      [2, 3],
+      [2, 3],
+    ]);
     expect(value('link_connectivity', chain).raw).toBe(2);
   });
 });
@@ -77,7 +107,7 @@ describe('node and link connectivity against brute force', () => {
         edges.forEach(([a, b], e) => {
           if (deadLinks.has(e) || deadNodes.has(a) || deadNodes.has(b)) return;
           const w = a === v ? b : b === v ? a : -1;
-          if (w >= 0 && !seen.has(w)) seen.add(w), stack.push(w);
+          if (w >= 0 && !seen.has(w)) (seen.add(w), stack.push(w));
         });
       }
       return seen.size === alive.length;

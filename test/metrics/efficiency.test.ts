@@ -21,7 +21,8 @@ function bruteEfficiency(n: number, edges: [number, number][], dead: Set<number>
     const dist = new Array<number>(n).fill(-1);
     dist[s] = 0;
     const q = [s];
-    for (let h = 0; h < q.length; h++) for (const w of adj[q[h]]) if (dist[w] < 0) (dist[w] = dist[q[h]] + 1), q.push(w);
+    for (let h = 0; h < q.length; h++)
+      for (const w of adj[q[h]]) if (dist[w] < 0) ((dist[w] = dist[q[h]] + 1), q.push(w));
     for (let t = 0; t < n; t++) if (t !== s && dist[t] > 0) sum += 1 / dist[t];
   }
   return sum / (n * (n - 1));
@@ -67,7 +68,12 @@ describe('efficiency under removal', () => {
     expect(value(graphFromEdges(0, []))).toBe(0);
   });
   it('ignores parallel links and self-loops', () => {
-    const g = graphFromEdges(3, [[0, 1], [0, 1], [1, 2], [2, 2]]);
+    const g = graphFromEdges(3, [
+      [0, 1],
+      [0, 1],
+      [1, 2],
+      [2, 2],
+    ]);
     expectRelative(value(g), value(path(3)));
   });
   it('matches single-source BFS on long thin graphs (the one-source-at-a-time path) and under masks', () => {
@@ -91,7 +97,13 @@ describe('efficiency under removal', () => {
   });
   it('matches single-source BFS on random graphs and masks across batch widths (32..256 sources)', () => {
     const r = rng(11);
-    for (const [n, m] of [[20, 30], [45, 60], [130, 260], [300, 500], [700, 1400]] as const) {
+    for (const [n, m] of [
+      [20, 30],
+      [45, 60],
+      [130, 260],
+      [300, 500],
+      [700, 1400],
+    ] as const) {
       const edges = randomEdges(n, m, n);
       const g = graphFromEdges(n, edges);
       const evaluate = eff.create(g);

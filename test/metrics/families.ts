@@ -6,10 +6,16 @@ import { graphFromEdges, type CompactGraph } from '../../src/graph/compact.js';
 export type Edge = [number, number];
 
 export const path = (n: number): CompactGraph =>
-  graphFromEdges(n, Array.from({ length: n - 1 }, (_, i): Edge => [i, i + 1]));
+  graphFromEdges(
+    n,
+    Array.from({ length: n - 1 }, (_, i): Edge => [i, i + 1]),
+  );
 
 export const cycle = (n: number): CompactGraph =>
-  graphFromEdges(n, Array.from({ length: n }, (_, i): Edge => [i, (i + 1) % n]));
+  graphFromEdges(
+    n,
+    Array.from({ length: n }, (_, i): Edge => [i, (i + 1) % n]),
+  );
 
 export function complete(n: number): CompactGraph {
   const e: Edge[] = [];
@@ -19,7 +25,10 @@ export function complete(n: number): CompactGraph {
 
 /** Star on n nodes: centre 0. */
 export const star = (n: number): CompactGraph =>
-  graphFromEdges(n, Array.from({ length: n - 1 }, (_, i): Edge => [0, i + 1]));
+  graphFromEdges(
+    n,
+    Array.from({ length: n - 1 }, (_, i): Edge => [0, i + 1]),
+  );
 
 export function hypercube(d: number): CompactGraph {
   const n = 1 << d;
@@ -117,6 +126,8 @@ export function harmonic(k: number): number {
 export function expectRelative(actual: number, expected: number, tol = 1e-9): void {
   const scale = Math.max(Math.abs(expected), 1e-300);
   if (!(Math.abs(actual - expected) <= tol * scale || Math.abs(actual - expected) <= 1e-300)) {
-    throw new Error(`expected ${expected}, got ${actual} (relative error ${Math.abs(actual - expected) / scale}, tolerance ${tol})`);
+    throw new Error(
+      `expected ${expected}, got ${actual} (relative error ${Math.abs(actual - expected) / scale}, tolerance ${tol})`,
+    );
   }
 }

@@ -16,7 +16,11 @@ interface Spec {
 }
 
 /** A design with link lengths and a few demands, node ids "v0".."v{n-1}". */
-function design(s: Spec, keepNode: (i: number) => boolean = () => true, keepLink: (e: number) => boolean = () => true): CompactGraph {
+function design(
+  s: Spec,
+  keepNode: (i: number) => boolean = () => true,
+  keepLink: (e: number) => boolean = () => true,
+): CompactGraph {
   const pos = { line: 0, column: 0 };
   const t: Topology = {
     file: 'prop',
@@ -32,9 +36,20 @@ function design(s: Spec, keepNode: (i: number) => boolean = () => true, keepLink
   for (let i = 0; i < s.n; i++) if (keepNode(i)) t.nodes.push({ id: `v${i}`, hardened: false, pos, attrs: {} });
   s.edges.forEach(([a, b], e) => {
     if (!keepLink(e) || !keepNode(a) || !keepNode(b)) return;
-    t.links.push({ id: `e${e}`, key: `e${e}`, source: `v${a}`, target: `v${b}`, length: s.lengths[e], riskGroups: [], hardened: false, pos, attrs: {} });
+    t.links.push({
+      id: `e${e}`,
+      key: `e${e}`,
+      source: `v${a}`,
+      target: `v${b}`,
+      length: s.lengths[e],
+      riskGroups: [],
+      hardened: false,
+      pos,
+      attrs: {},
+    });
   });
-  for (const [a, b, v] of s.demands) if (keepNode(a) && keepNode(b)) t.demands.push({ source: `v${a}`, target: `v${b}`, volume: v, pos });
+  for (const [a, b, v] of s.demands)
+    if (keepNode(a) && keepNode(b)) t.demands.push({ source: `v${a}`, target: `v${b}`, volume: v, pos });
   return compileTopology(t);
 }
 
@@ -42,16 +57,29 @@ function design(s: Spec, keepNode: (i: number) => boolean = () => true, keepLink
 // exact path and any difference is a real one.
 const specArb = fc.integer({ min: 2, max: 22 }).chain((n) =>
   fc
-    .array(fc.tuple(fc.integer({ min: 0, max: n - 1 }), fc.integer({ min: 0, max: n - 1 })), { minLength: 1, maxLength: 3 * n })
+    .array(fc.tuple(fc.integer({ min: 0, max: n - 1 }), fc.integer({ min: 0, max: n - 1 })), {
+      minLength: 1,
+      maxLength: 3 * n,
+    })
     .chain((edges) =>
       fc.record({
         n: fc.constant(n),
         edges: fc.constant(edges as [number, number][]),
-        lengths: fc.array(fc.double({ min: 0.5, max: 20, noNaN: true }), { minLength: edges.length, maxLength: edges.length }),
-        demands: fc.array(fc.tuple(fc.integer({ min: 0, max: n - 1 }), fc.integer({ min: 0, max: n - 1 }), fc.integer({ min: 1, max: 9 })), {
-          minLength: 1,
-          maxLength: 6,
+        lengths: fc.array(fc.double({ min: 0.5, max: 20, noNaN: true }), {
+          minLength: edges.length,
+          maxLength: edges.length,
         }),
+        demands: fc.array(
+          fc.tuple(
+            fc.integer({ min: 0, max: n - 1 }),
+            fc.integer({ min: 0, max: n - 1 }),
+            fc.integer({ min: 1, max: 9 }),
+          ),
+          {
+            minLength: 1,
+            maxLength: 6,
+          },
+        ),
       }),
     ),
 );
@@ -128,7 +156,11 @@ describe('a mask equals rebuilding the graph without the element', () => {
         drop.forEach((d, e) => {
           if (d && e < g.m) mask.link[index(e)] = 1;
         });
-        const rebuilt = design(spec, () => true, (e) => !mask.link[index(e)]);
+        const rebuilt = design(
+          spec,
+          () => true,
+          (e) => !mask.link[index(e)],
+        );
         for (const m of applicable(g)) {
           // weighted_efficiency's ideal uses the intact design's cheapest link (ℓ_min), and
           // demand_served's budget the intact paths: both are defined against the intact

@@ -40,7 +40,8 @@ function bruteSums(g: CompactGraph, mask: Mask): Float64Array {
     const dist = new Int32Array(g.n).fill(-1);
     dist[s] = 0;
     const q = [s];
-    for (let h = 0; h < q.length; h++) for (const w of adj[q[h]]) if (dist[w] < 0) (dist[w] = dist[q[h]] + 1), q.push(w);
+    for (let h = 0; h < q.length; h++)
+      for (const w of adj[q[h]]) if (dist[w] < 0) ((dist[w] = dist[q[h]] + 1), q.push(w));
     for (let t = 0; t < g.n; t++) if (dist[t] > 0) out[s] += 1 / dist[t];
   }
   return out;
@@ -59,7 +60,10 @@ describe('bit-parallel BFS, per-source sums', () => {
     const graphs: CompactGraph[] = [
       graphFromEdges(700, randomEdges(700, 1100, 3)), // one large component, batches of 256 and 64
       graphFromEdges(300, randomEdges(300, 260, 4)), // many small components
-      graphFromEdges(90, Array.from({ length: 90 }, (_, i) => [i, (i + 1) % 90] as [number, number])), // long: one source at a time
+      graphFromEdges(
+        90,
+        Array.from({ length: 90 }, (_, i) => [i, (i + 1) % 90] as [number, number]),
+      ), // long: one source at a time
     ];
     for (const [gi, g] of graphs.entries()) {
       for (const [mi, mask] of [createMask(g), randomMask(g, 0.1, 0.2, 10 + gi)].entries()) {
@@ -76,7 +80,9 @@ describe('bit-parallel BFS, per-source sums', () => {
         let total = 0;
         for (let i = 0; i < sources.length; i++) {
           const want = expected[local.toOriginal[sources[i]]];
-          expect(Math.abs(sums[i] - want), `graph ${gi} mask ${mi} source ${i}`).toBeLessThanOrEqual(1e-9 * Math.max(1, want));
+          expect(Math.abs(sums[i] - want), `graph ${gi} mask ${mi} source ${i}`).toBeLessThanOrEqual(
+            1e-9 * Math.max(1, want),
+          );
           total += want;
         }
         expect(Math.abs(histSum - total)).toBeLessThanOrEqual(1e-9 * Math.max(1, total));
@@ -104,7 +110,10 @@ describe('seeded source samples', () => {
   it('give the same estimate, se included, for the same design listed in another order', () => {
     const edges = randomEdges(400, 800, 21);
     const a = graphFromEdges(400, edges);
-    const b = graphFromEdges(400, [...edges].reverse().map(([x, y]) => [y, x] as [number, number]));
+    const b = graphFromEdges(
+      400,
+      [...edges].reverse().map(([x, y]) => [y, x] as [number, number]),
+    );
     const va = eff.create(a, { sources: 50, sourceSeed: 3 })(createMask(a));
     const vb = eff.create(b, { sources: 50, sourceSeed: 3 })(createMask(b));
     expect(vb).toEqual(va);
@@ -131,8 +140,18 @@ describe('sampled efficiency against the exact value', () => {
   //   sd √(0.95·0.05/120) ≈ 0.02, so 88 % is more than 3 sd below, allowing for se's own error).
   const cases: { name: string; g: () => CompactGraph; k: number; mask: (g: CompactGraph) => Mask }[] = [
     { name: 'zoo Cogentco', g: () => zoo('Cogentco'), k: 40, mask: (g) => createMask(g) },
-    { name: 'zoo Kdl, 10 % nodes and 10 % links removed', g: () => zoo('Kdl'), k: 60, mask: (g) => randomMask(g, 0.1, 0.1, 5) },
-    { name: 'random G(n, L), 600 nodes', g: () => graphFromEdges(600, randomEdges(600, 1500, 9)), k: 50, mask: (g) => randomMask(g, 0.05, 0.3, 6) },
+    {
+      name: 'zoo Kdl, 10 % nodes and 10 % links removed',
+      g: () => zoo('Kdl'),
+      k: 60,
+      mask: (g) => randomMask(g, 0.1, 0.1, 5),
+    },
+    {
+      name: 'random G(n, L), 600 nodes',
+      g: () => graphFromEdges(600, randomEdges(600, 1500, 9)),
+      k: 50,
+      mask: (g) => randomMask(g, 0.05, 0.3, 6),
+    },
   ];
   for (const c of cases) {
     it(`is unbiased and its se is calibrated: ${c.name}`, () => {

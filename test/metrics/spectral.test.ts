@@ -48,7 +48,7 @@ describe('dense values-only solver', () => {
     const r = rng(5);
     for (const n of [1, 2, 7, 40, 90]) {
       const a = Matrix.zeros(n, n);
-      for (let i = 0; i < n; i++) for (let j = 0; j <= i; j++) a.set(i, j, r() - 0.5), a.set(j, i, a.get(i, j));
+      for (let i = 0; i < n; i++) for (let j = 0; j <= i; j++) (a.set(i, j, r() - 0.5), a.set(j, i, a.get(i, j)));
       const expected = new EigenvalueDecomposition(a, { assumeSymmetric: true }).realEigenvalues.sort((x, y) => x - y);
       const flat = Float64Array.from(a.to1DArray());
       const d = new Float64Array(n);
@@ -70,7 +70,10 @@ describe('dense values-only solver', () => {
 });
 
 describe('thick-restart Lanczos (algebraic connectivity, spectral radius)', () => {
-  for (const [name, g] of [['ER(420, 1260)', er], ['BA(520, 3)', ba]] as const) {
+  for (const [name, g] of [
+    ['ER(420, 1260)', er],
+    ['BA(520, 3)', ba],
+  ] as const) {
     it(`${name}: agrees with the dense path to 1e-9`, () => {
       const mask = lccMask(g);
       for (const id of ['algebraic_connectivity', 'spectral_radius']) {
@@ -107,7 +110,10 @@ describe('thick-restart Lanczos (algebraic connectivity, spectral radius)', () =
 
 describe('exact effective resistance of long sparse graphs above the dense limit (banded LDLᵀ + Takahashi)', () => {
   it('C_1000 = (N³−N)/12 (docs/METHODS.md §9.3, M) and the 20×30 grid from its Laplacian spectrum λ_i(P_20)+λ_j(P_30) (Cartesian-product spectra, standard, M)', () => {
-    const c = graphFromEdges(1000, Array.from({ length: 1000 }, (_, i): Edge => [i, (i + 1) % 1000]));
+    const c = graphFromEdges(
+      1000,
+      Array.from({ length: 1000 }, (_, i): Edge => [i, (i + 1) % 1000]),
+    );
     expectRelative(getMetric('effective_resistance').create(c)(createMask(c)).raw, (1000 ** 3 - 1000) / 12);
     const rows = 20;
     const cols = 30;
@@ -132,7 +138,10 @@ describe('seeded trace estimators above the dense limit (effective resistance, n
   // The documented accuracy (see the metric files): the estimate is within these bounds of
   // the exact value on these seeded graphs; measured values are printed by the bench.
   const bounds: Record<string, number> = { effective_resistance: 2e-2, natural_connectivity: 2e-2 };
-  for (const [name, g] of [['ER(420, 1260)', er], ['BA(520, 3)', ba]] as const) {
+  for (const [name, g] of [
+    ['ER(420, 1260)', er],
+    ['BA(520, 3)', ba],
+  ] as const) {
     it(`${name}: within the documented error of the exact value, and deterministic`, () => {
       const mask = lccMask(g);
       for (const id of Object.keys(bounds)) {

@@ -6,7 +6,13 @@ import { preferentialGraph } from '../envelope/graphs.js';
 describe('deterministic parallel realizations', () => {
   const g = preferentialGraph(120, 2, 5);
   const spec: EvaluationSpec = {
-    r: { metrics: [{ id: 'efficiency', weight: 2 }, { id: 'largest_component', weight: 1 }], combine: 'mean' },
+    r: {
+      metrics: [
+        { id: 'efficiency', weight: 2 },
+        { id: 'largest_component', weight: 1 },
+      ],
+      combine: 'mean',
+    },
     seed: 77,
     challenges: [
       { challenge: 'random-links', realizations: 40, until: 0.5, worstCase: 3 },
@@ -18,9 +24,18 @@ describe('deterministic parallel realizations', () => {
   // Warm-started Lanczos (algebraic connectivity on a component above the dense limit) must
   // not make the result depend on the thread count either.
   const spectral: EvaluationSpec = {
-    r: { metrics: [{ id: 'algebraic_connectivity', weight: 1 }, { id: 'largest_component', weight: 1 }], combine: 'min' },
+    r: {
+      metrics: [
+        { id: 'algebraic_connectivity', weight: 1 },
+        { id: 'largest_component', weight: 1 },
+      ],
+      combine: 'min',
+    },
     seed: 3,
-    challenges: [{ challenge: 'random-links', realizations: 12, until: 0.1, points: 3 }, { challenge: 'betweenness', until: 0.02 }],
+    challenges: [
+      { challenge: 'random-links', realizations: 12, until: 0.1, points: 3 },
+      { challenge: 'betweenness', until: 0.02 },
+    ],
   };
 
   it('gives byte-identical JSON for 1 and 2 worker threads, and equals the synchronous evaluation', async () => {
@@ -30,7 +45,9 @@ describe('deterministic parallel realizations', () => {
     const json = JSON.stringify(one.evaluation);
     expect(JSON.stringify(two.evaluation)).toBe(json);
     expect(JSON.stringify(sync.evaluation)).toBe(json);
-    expect(two.samples.get('random-links')!.map((a) => Array.from(a))).toEqual(one.samples.get('random-links')!.map((a) => Array.from(a)));
+    expect(two.samples.get('random-links')!.map((a) => Array.from(a))).toEqual(
+      one.samples.get('random-links')!.map((a) => Array.from(a)),
+    );
     expect(one.evaluation.envelopes[0].realizations).toBe(40);
   });
 
@@ -66,7 +83,9 @@ describe('deterministic parallel realizations', () => {
     const small = { ...spec, challenges: [{ challenge: 'random-nodes' as const, realizations: 5 }] };
     const plan = planEvaluation(g, small);
     expect(plan.work).toBeLessThan(PARALLEL_MIN_WORK);
-    expect(JSON.stringify((await evaluateDesignParallel(g, small, 2)).evaluation)).toBe(JSON.stringify(evaluateDesign(g, small).evaluation));
+    expect(JSON.stringify((await evaluateDesignParallel(g, small, 2)).evaluation)).toBe(
+      JSON.stringify(evaluateDesign(g, small).evaluation),
+    );
   });
 
   it('rejects a thread count that is not a positive integer', async () => {

@@ -34,7 +34,13 @@ export const BROKEN: BrokenCase[] = [
     line: 2,
     column: 1,
   },
-  { name: 'duplicate key', policy: 'seed: 1\nseed: 2\n', message: 'a key appears twice in the same mapping', line: 2, column: 1 },
+  {
+    name: 'duplicate key',
+    policy: 'seed: 1\nseed: 2\n',
+    message: 'a key appears twice in the same mapping',
+    line: 2,
+    column: 1,
+  },
   {
     name: 'not a mapping',
     policy: '- seed: 1\n',
@@ -273,7 +279,8 @@ export const BROKEN: BrokenCase[] = [
   {
     name: 'quantile of a targeted attack',
     policy: `${ATTACK}requirements:\n  - kind: r-threshold\n    challenge: hubs\n    at: 0.1\n    statistic: quantile\n    q: 0.1\n    min: 0.2\n`,
-    message: 'requirement 1: challenge "hubs" is a targeted attack (one curve); "statistic: quantile" needs a random challenge',
+    message:
+      'requirement 1: challenge "hubs" is a targeted attack (one curve); "statistic: quantile" needs a random challenge',
     line: 6,
     column: 5,
   },
@@ -359,7 +366,8 @@ export const BROKEN: BrokenCase[] = [
   {
     name: 'an unknown judgement of weak points hidden by hardening',
     policy: 'requirements:\n  - kind: no-new-spof\n    hardened-weak-points: sometimes\n',
-    message: 'requirement 1, "hardened-weak-points" cannot be the text "sometimes"; it is one of fail, warn, notice, ignore',
+    message:
+      'requirement 1, "hardened-weak-points" cannot be the text "sometimes"; it is one of fail, warn, notice, ignore',
     line: 3,
     column: 27,
   },
@@ -376,7 +384,8 @@ export const BROKEN: BrokenCase[] = [
     name: 'risk groups left out of an inherited no-new-spof',
     policy: 'inherits: org.yaml\nrequirements:\n  - kind: no-new-spof\n    elements: [bridges, cut-nodes]\n',
     files: { 'org.yaml': 'requirements:\n  - kind: no-new-spof\n' },
-    message: 'requirement 1 loosens no-new-spof: elements bridges, cut-nodes where elements bridges, cut-nodes, risk-groups is required',
+    message:
+      'requirement 1 loosens no-new-spof: elements bridges, cut-nodes where elements bridges, cut-nodes, risk-groups is required',
     line: 4,
     column: 15,
     related: [{ file: 'org.yaml', line: 2 }],
@@ -392,7 +401,8 @@ export const BROKEN: BrokenCase[] = [
   },
   {
     name: 'a scope that loosens a floor of its own file',
-    policy: 'requirements:\n  - kind: n-1\n    min: 0.8\nscopes:\n  - paths: "edge/**"\n    requirements:\n      - kind: n-1\n        min: 0.6\n',
+    policy:
+      'requirements:\n  - kind: n-1\n    min: 0.8\nscopes:\n  - paths: "edge/**"\n    requirements:\n      - kind: n-1\n        min: 0.6\n',
     message: 'scope 1, requirement 1 loosens n-1:link: min 0.6 where min 0.8 is required',
     line: 8,
     column: 14,
@@ -498,7 +508,7 @@ export const BROKEN: BrokenCase[] = [
   },
   {
     name: 'a glob with backslash separators',
-    policy: 'designs:\n  - paths: \'networks\\core.net.yaml\'\n',
+    policy: "designs:\n  - paths: 'networks\\core.net.yaml'\n",
     message: 'has a backslash, which escapes the next character in a glob',
     hint: 'use forward slashes: "networks/core.net.yaml"',
     line: 2,

@@ -9,7 +9,8 @@ import { builtinPolicy, loadPolicy, policyForFile } from '../../src/policy/resol
 import { evaluationSpecs } from '../../src/gate-request.js';
 
 const repo = (files: Record<string, string>) => (p: string) => files[p] ?? null;
-const budgetOf = (files: Record<string, string>, path = 'a.graphml') => policyForFile(loadPolicy('p.yaml', repo(files)), path).budget;
+const budgetOf = (files: Record<string, string>, path = 'a.graphml') =>
+  policyForFile(loadPolicy('p.yaml', repo(files)), path).budget;
 
 describe('seconds become work at one fixed rate', () => {
   it('the rate is the documented 5e7 element visits per second', () => {
@@ -40,7 +41,18 @@ describe('the default budget and the engine request', () => {
   it(`the built-in policy allows ${DEFAULT_BUDGET_SECONDS} s, i.e. 3e9 element visits, and every engine request carries it`, () => {
     const fp = policyForFile(builtinPolicy(), 'x.graphml');
     expect(fp.budget).toEqual({ seconds: 60, maxWork: 3e9 });
-    const n1 = { ...fp, requirements: [...fp.requirements, ...loadPolicy('p.yaml', repo({ 'p.yaml': 'requirements:\n  - kind: n-1\n    element: node\n    min: 0.1\n  - kind: n-1\n    min: 0.1\n' })).requirements] };
+    const n1 = {
+      ...fp,
+      requirements: [
+        ...fp.requirements,
+        ...loadPolicy(
+          'p.yaml',
+          repo({
+            'p.yaml': 'requirements:\n  - kind: n-1\n    element: node\n    min: 0.1\n  - kind: n-1\n    min: 0.1\n',
+          }),
+        ).requirements,
+      ],
+    };
     const specs = evaluationSpecs(n1, 1);
     expect(specs.length).toBe(2);
     for (const spec of specs) expect(spec.budget).toEqual({ maxWork: 3e9 });
@@ -76,7 +88,9 @@ describe('scopes and inheriting policies may raise the budget, never lower it', 
   });
 
   it('lowering it for some files is a policy error naming both lines, whether or not a file matches', () => {
-    const files = { 'p.yaml': 'budget:\n  seconds: 60\nscopes:\n  - paths: "lab/**"\n    budget:\n      seconds: 10\n' };
+    const files = {
+      'p.yaml': 'budget:\n  seconds: 60\nscopes:\n  - paths: "lab/**"\n    budget:\n      seconds: 10\n',
+    };
     let error: unknown;
     try {
       loadPolicy('p.yaml', repo(files));
@@ -85,7 +99,9 @@ describe('scopes and inheriting policies may raise the budget, never lower it', 
     }
     expect(error).toBeInstanceOf(PolicyError);
     const e = error as PolicyError;
-    expect(e.message).toBe('scope 1 lowers the budget to 5e8 element visits (seconds 10) where 3e9 (seconds 60) is in force');
+    expect(e.message).toBe(
+      'scope 1 lowers the budget to 5e8 element visits (seconds 10) where 3e9 (seconds 60) is in force',
+    );
     expect([e.line, e.column]).toEqual([6, 16]);
     expect(e.related.map((r) => [r.file, r.line, r.column])).toEqual([['p.yaml', 2, 12]]);
   });
@@ -101,7 +117,10 @@ describe('regional challenges share one grid', () => {
   it('an explicit "until" is kept, and a threshold beyond the default radius is refused', () => {
     const p = loadPolicy('p.yaml', repo({ 'p.yaml': 'challenges:\n  quakes:\n    remove: region\n    until: 120\n' }));
     expect(p.challenges[0].params.until).toBe(120);
-    const beyond = 'challenges:\n  quakes:\n    remove: region\nrequirements:\n  - kind: r-threshold\n    challenge: quakes\n    at: 80\n    min: 0.5\n';
-    expect(() => loadPolicy('p.yaml', repo({ 'p.yaml': beyond }))).toThrow(/judges R at 80, beyond the end of challenge "quakes" \(until 50\)/);
+    const beyond =
+      'challenges:\n  quakes:\n    remove: region\nrequirements:\n  - kind: r-threshold\n    challenge: quakes\n    at: 80\n    min: 0.5\n';
+    expect(() => loadPolicy('p.yaml', repo({ 'p.yaml': beyond }))).toThrow(
+      /judges R at 80, beyond the end of challenge "quakes" \(until 50\)/,
+    );
   });
 });

@@ -29,7 +29,9 @@ describe('policyChanges', () => {
   });
 
   it('tells loosening from tightening, with the head file\u2019s lines', () => {
-    const head = BASE.replace('min: 0.5', 'min: 0.4').replace('elements: [bridges, cut-nodes]', 'elements: [bridges]').replace('error-multiple: 2', 'error-multiple: 1.5');
+    const head = BASE.replace('min: 0.5', 'min: 0.4')
+      .replace('elements: [bridges, cut-nodes]', 'elements: [bridges]')
+      .replace('error-multiple: 2', 'error-multiple: 1.5');
     const changes = policyChanges(load(BASE), load(head));
     expect(changes.map((c) => [c.subject, c.key, c.effect, c.base, c.head])).toEqual([
       ['r-threshold:sites@0.2:median', 'min', 'loosens', 0.5, 0.4],

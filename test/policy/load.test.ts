@@ -25,11 +25,20 @@ describe('broken policies are reported at their line', () => {
       const e = errorOf(c.policy, c.files);
       expect(e.kind).toBe('policy');
       expect(e.message).toContain(c.message);
-      expect({ file: e.file, line: e.line, column: e.column }).toEqual({ file: c.file ?? 'policy.yaml', line: c.line, column: c.column });
+      expect({ file: e.file, line: e.line, column: e.column }).toEqual({
+        file: c.file ?? 'policy.yaml',
+        line: c.line,
+        column: c.column,
+      });
       if (c.hint) expect(e.hint).toContain(c.hint);
       if (c.related) expect(e.related.map((r) => ({ file: r.file, line: r.line }))).toEqual(c.related);
       // The one format every shell prints.
-      expect(e.format().split('\n')[0].startsWith(`${c.file ?? 'policy.yaml'}:${c.line}:${c.column}: `)).toBe(true);
+      expect(
+        e
+          .format()
+          .split('\n')[0]
+          .startsWith(`${c.file ?? 'policy.yaml'}:${c.line}:${c.column}: `),
+      ).toBe(true);
     });
   }
 });

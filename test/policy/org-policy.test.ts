@@ -16,7 +16,10 @@ const request: GateRequest = { base: 'base', head: 'head', policySource: 'base',
 const orgReader = (files: Record<string, string>) => ({ readOrgPolicy: (p: string) => files[p] ?? null });
 
 async function error(p: Promise<unknown>): Promise<PolicyError> {
-  const e = await p.then(() => undefined, (x: unknown) => x);
+  const e = await p.then(
+    () => undefined,
+    (x: unknown) => x,
+  );
   expect(e).toBeInstanceOf(PolicyError);
   return e as PolicyError;
 }
@@ -25,7 +28,9 @@ describe('organisation policy', () => {
   it('a team policy that does not inherit it is refused, naming both files', async () => {
     const repo = pairRepo('ring-to-chain');
     const e = await error(runGate(request, memoryDeps(repo, orgReader({ [ORG]: ORG_TEXT }))));
-    expect(e.format()).toContain('.netbrace.yaml:1:1: .netbrace.yaml does not inherit the organisation policy org-policy/org.yaml');
+    expect(e.format()).toContain(
+      '.netbrace.yaml:1:1: .netbrace.yaml does not inherit the organisation policy org-policy/org.yaml',
+    );
     expect(e.related.map((r) => r.file)).toEqual([ORG]);
   });
 

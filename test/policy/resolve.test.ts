@@ -2,7 +2,14 @@ import { describe, expect, it } from 'vitest';
 import { PolicyError } from '../../src/errors.js';
 import { BUILTIN_POLICY_NAME, STARTER_POLICY } from '../../src/policy/defaults.js';
 import { parsePolicyFile } from '../../src/policy/load.js';
-import { builtinPolicy, designNeedsHeader, isDesignPath, isDesignText, loadPolicy, policyForFile } from '../../src/policy/resolve.js';
+import {
+  builtinPolicy,
+  designNeedsHeader,
+  isDesignPath,
+  isDesignText,
+  loadPolicy,
+  policyForFile,
+} from '../../src/policy/resolve.js';
 import type { Requirement } from '../../src/policy/types.js';
 
 const repo = (files: Record<string, string>) => (p: string) => files[p] ?? null;
@@ -36,7 +43,8 @@ describe('built-in policy', () => {
     for (const f of ['a.graphml', 'x/y/b.gml', 'c.net.yaml', 'd/e.net.yml', 'f.net.json', '.hidden/g.gml']) {
       expect(isDesignPath(p, f)).toBe(true);
     }
-    for (const f of ['a.yaml', 'policy.json', 'README.md', 'a.graphml.bak', 'net.yaml']) expect(isDesignPath(p, f)).toBe(false);
+    for (const f of ['a.yaml', 'policy.json', 'README.md', 'a.graphml.bak', 'net.yaml'])
+      expect(isDesignPath(p, f)).toBe(false);
   });
 
   it('a CSV that only the built-in glob selects is a design when its header has source and target', () => {
@@ -48,8 +56,15 @@ describe('built-in policy', () => {
     expect(isDesignText(p, 'budget.csv', 'item,quantity\nducts,4\n')).toBe(false);
     expect(isDesignText(p, 'budget.csv', null)).toBe(false);
     // Listed by a glob of its own (or with a format forced), a CSV is judged whatever its header says.
-    const listed = loadPolicy('p.yaml', repo({ 'p.yaml': 'designs:\n  - paths: ["**/*.csv", "links/*.csv"]\n  - paths: "raw/**"\n    format: csv\n' }));
-    expect([designNeedsHeader(listed, 'links/a.csv'), designNeedsHeader(listed, 'other/a.csv'), designNeedsHeader(listed, 'raw/a.csv')]).toEqual([false, true, false]);
+    const listed = loadPolicy(
+      'p.yaml',
+      repo({ 'p.yaml': 'designs:\n  - paths: ["**/*.csv", "links/*.csv"]\n  - paths: "raw/**"\n    format: csv\n' }),
+    );
+    expect([
+      designNeedsHeader(listed, 'links/a.csv'),
+      designNeedsHeader(listed, 'other/a.csv'),
+      designNeedsHeader(listed, 'raw/a.csv'),
+    ]).toEqual([false, true, false]);
     expect(isDesignText(listed, 'links/a.csv', 'item,quantity\n')).toBe(true);
   });
 
@@ -112,22 +127,32 @@ describe('inherits and scopes', () => {
   ].join('\n');
 
   it('a tightened floor replaces the base one', () => {
-    const team = 'inherits: ../org.yaml\nrequirements:\n  - kind: r-threshold\n    challenge: fail\n    at: 0.2\n    statistic: quantile\n    q: 0.1\n    min: 0.55\n';
+    const team =
+      'inherits: ../org.yaml\nrequirements:\n  - kind: r-threshold\n    challenge: fail\n    at: 0.2\n    statistic: quantile\n    q: 0.1\n    min: 0.55\n';
     const p = loadPolicy('team/p.yaml', repo({ 'org.yaml': org, 'team/p.yaml': team }));
     expect(p.files).toEqual(['team/p.yaml', 'org.yaml']);
     expect(floor(p.requirements, 'r-threshold:fail@0.2:q0.1')).toBe(0.55);
-    expect(p.requirements.find((r) => r.id === 'r-threshold:fail@0.2:q0.1')!.valueWhere).toEqual({ file: 'team/p.yaml', line: 8, column: 10 });
+    expect(p.requirements.find((r) => r.id === 'r-threshold:fail@0.2:q0.1')!.valueWhere).toEqual({
+      file: 'team/p.yaml',
+      line: 8,
+      column: 10,
+    });
   });
 
   it('a requirement written as the median of a targeted attack is its value', () => {
-    const p = loadPolicy('p.yaml', repo({
-      'p.yaml': 'challenges:\n  hubs:\n    remove: nodes\n    order: degree\nrequirements:\n  - kind: r-threshold\n    challenge: hubs\n    at: 0.1\n    min: 0.3\n',
-    }));
+    const p = loadPolicy(
+      'p.yaml',
+      repo({
+        'p.yaml':
+          'challenges:\n  hubs:\n    remove: nodes\n    order: degree\nrequirements:\n  - kind: r-threshold\n    challenge: hubs\n    at: 0.1\n    min: 0.3\n',
+      }),
+    );
     expect(p.requirements.map((r) => r.id)).toEqual(['r-threshold:hubs@0.1:value']);
   });
 
   it('scopes apply only to the files they match, and may tighten', () => {
-    const team = 'inherits: org.yaml\nscopes:\n  - paths: "core/metro/**"\n    requirements:\n      - kind: n-1\n        min: 0.7\n';
+    const team =
+      'inherits: org.yaml\nscopes:\n  - paths: "core/metro/**"\n    requirements:\n      - kind: n-1\n        min: 0.7\n';
     const p = loadPolicy('p.yaml', repo({ 'org.yaml': org, 'p.yaml': team }));
     expect(floor(policyForFile(p, 'edge/a.graphml').requirements, 'n-1:link')).toBeUndefined();
     expect(floor(policyForFile(p, 'core/a.graphml').requirements, 'n-1:link')).toBe(0.6);
@@ -135,7 +160,8 @@ describe('inherits and scopes', () => {
   });
 
   it('a scope that loosens a base scope on the same file is an error naming both lines', () => {
-    const team = 'inherits: org.yaml\nscopes:\n  - paths: "core/metro/**"\n    requirements:\n      - kind: n-1\n        min: 0.4\n';
+    const team =
+      'inherits: org.yaml\nscopes:\n  - paths: "core/metro/**"\n    requirements:\n      - kind: n-1\n        min: 0.4\n';
     const p = loadPolicy('p.yaml', repo({ 'org.yaml': org, 'p.yaml': team }));
     expect(() => policyForFile(p, 'edge/a.graphml')).not.toThrow();
     let error: PolicyError | undefined;
@@ -158,9 +184,12 @@ describe('inherits and scopes', () => {
   });
 
   it('a format hint applies to the files of its glob', () => {
-    const p = loadPolicy('p.yaml', repo({
-      'p.yaml': 'designs:\n  - paths: "**/*.graphml"\n  - paths: "legacy/*.xml"\n    format: graphml\n',
-    }));
+    const p = loadPolicy(
+      'p.yaml',
+      repo({
+        'p.yaml': 'designs:\n  - paths: "**/*.graphml"\n  - paths: "legacy/*.xml"\n    format: graphml\n',
+      }),
+    );
     expect(isDesignPath(p, 'legacy/a.xml')).toBe(true);
     expect(policyForFile(p, 'legacy/a.xml').format).toBe('graphml');
     expect(policyForFile(p, 'x.graphml').format).toBeUndefined();
@@ -174,8 +203,21 @@ describe('inherits and scopes', () => {
   });
 
   it('challenge parameters left out take the documented defaults', () => {
-    const p = loadPolicy('p.yaml', repo({ 'p.yaml': 'challenges:\n  fail:\n    remove: links\n  hubs:\n    remove: nodes\n    order: betweenness\n    adaptive: true\n' }));
-    expect(p.challenges[0].params).toEqual({ challenge: 'random-links', until: 0.5, points: 11, realizations: 200, band: [0.1, 0.9], worstCase: 0 });
+    const p = loadPolicy(
+      'p.yaml',
+      repo({
+        'p.yaml':
+          'challenges:\n  fail:\n    remove: links\n  hubs:\n    remove: nodes\n    order: betweenness\n    adaptive: true\n',
+      }),
+    );
+    expect(p.challenges[0].params).toEqual({
+      challenge: 'random-links',
+      until: 0.5,
+      points: 11,
+      realizations: 200,
+      band: [0.1, 0.9],
+      worstCase: 0,
+    });
     expect(p.challenges[1].params).toEqual({ challenge: 'betweenness-adaptive', until: 0.5 });
   });
 });

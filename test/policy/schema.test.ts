@@ -80,7 +80,9 @@ describe('policy schema', () => {
 
   it('every metric of the registry can be named in r-value', () => {
     const names = Object.keys(((((schema as S).properties as S)['r-value'] as S).properties as S).metrics as S);
-    const listed = Object.keys((((((schema as S).properties as S)['r-value'] as S).properties as S).metrics as S).properties as S);
+    const listed = Object.keys(
+      (((((schema as S).properties as S)['r-value'] as S).properties as S).metrics as S).properties as S,
+    );
     expect(names.length).toBeGreaterThan(0);
     for (const m of metrics) expect(listed).toContain(m.id);
   });

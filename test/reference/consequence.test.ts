@@ -23,7 +23,10 @@ interface Case {
   removals: { nodes: number[]; links: number[]; stranded: number[]; demands_lost: number[] }[];
 }
 
-const ref = JSON.parse(readFileSync(path.join(repoRoot, 'test', 'reference', 'consequence.json'), 'utf8')) as { library: string; cases: Case[] };
+const ref = JSON.parse(readFileSync(path.join(repoRoot, 'test', 'reference', 'consequence.json'), 'utf8')) as {
+  library: string;
+  cases: Case[];
+};
 
 /** The generated graph as a design: nodes "0".."n-1", links in order, group g<k>, demands of volume d + 1. */
 function design(c: Case): CompactGraph {
@@ -39,7 +42,16 @@ function design(c: Case): CompactGraph {
       const base = linkKey(String(a), String(b), 1);
       const k = (seen.get(base) ?? 0) + 1;
       seen.set(base, k);
-      return { id: `e${e}`, key: linkKey(String(a), String(b), k), source: String(a), target: String(b), riskGroups: groupsOf[e], hardened: false, pos, attrs: {} };
+      return {
+        id: `e${e}`,
+        key: linkKey(String(a), String(b), k),
+        source: String(a),
+        target: String(b),
+        riskGroups: groupsOf[e],
+        hardened: false,
+        pos,
+        attrs: {},
+      };
     }),
     riskGroups: c.groups.map((_, k) => ({ id: `g${k}`, pos })),
     demands: c.demands.map(([s, t], d) => ({ source: String(s), target: String(t), volume: d + 1, pos })),
@@ -53,7 +65,9 @@ describe(`weak-point costs agree with ${ref.library}`, () => {
     expect(ref.library).toMatch(/^networkx /);
     expect(ref.cases.length).toBeGreaterThanOrEqual(4);
     expect(ref.cases.reduce((s, c) => s + c.stranding_groups.length, 0)).toBeGreaterThanOrEqual(5);
-    expect(ref.cases.reduce((s, c) => s + c.removals.filter((r) => r.stranded.length > 0).length, 0)).toBeGreaterThanOrEqual(30);
+    expect(
+      ref.cases.reduce((s, c) => s + c.removals.filter((r) => r.stranded.length > 0).length, 0),
+    ).toBeGreaterThanOrEqual(30);
   });
 
   for (const c of ref.cases) {
@@ -66,7 +80,9 @@ describe(`weak-point costs agree with ${ref.library}`, () => {
       const groupRef = (k: number) => Number(g.groupIds[k].slice(1));
       const demandRef = (d: number) => g.demandVolume[d] - 1;
       const sorted = (l: number[]) => [...l].sort((a, b) => a - b);
-      expect(sorted(findStrandingGroups(g, false).map(groupRef)), 'stranding groups').toEqual(sorted(c.stranding_groups));
+      expect(sorted(findStrandingGroups(g, false).map(groupRef)), 'stranding groups').toEqual(
+        sorted(c.stranding_groups),
+      );
       for (const r of c.removals) {
         const mask = createMask(g);
         for (const v of r.nodes) mask.node[v] = 1;

@@ -47,7 +47,9 @@ describe(`targeted attacks agree with networkx ${ref.networkx} (test/reference/e
           const got = new StepEvaluator(g, single(id)).everyStep(c.kind, seq, seq.length);
           if (id === 'efficiency') {
             // Sums of 1/d in a different order: relative 1e-9 (docs/METHODS.md §7.5 on golden tests).
-            got.forEach((v, k) => expect(Math.abs(v - expected[k])).toBeLessThanOrEqual(1e-9 * Math.max(1e-300, Math.abs(expected[k]))));
+            got.forEach((v, k) =>
+              expect(Math.abs(v - expected[k])).toBeLessThanOrEqual(1e-9 * Math.max(1e-300, Math.abs(expected[k]))),
+            );
           } else {
             expect(Array.from(got)).toEqual(expected);
           }
@@ -76,7 +78,10 @@ describe('karate club check values (docs/METHODS.md §10.3, V)', () => {
     const ev = evaluateDesign(g, {
       r: single('largest_component'),
       seed: 1,
-      challenges: ['degree', 'betweenness', 'degree-adaptive', 'betweenness-adaptive'].map((c) => ({ challenge: c as never, until: 1 })),
+      challenges: ['degree', 'betweenness', 'degree-adaptive', 'betweenness-adaptive'].map((c) => ({
+        challenge: c as never,
+        until: 1,
+      })),
     });
     const area = Object.fromEntries(ev.evaluation.attacks.map((a) => [a.challenge, a.area]));
     expect(area.degree).toBeCloseTo(0.141869, 6);

@@ -27,7 +27,10 @@ interface RefGraph {
   best: { links: number; total: number; set: number[] };
 }
 
-const ref = JSON.parse(readFileSync(path.join(repoRoot, 'test', 'reference', 'mend.json'), 'utf8')) as { library: string; graphs: RefGraph[] };
+const ref = JSON.parse(readFileSync(path.join(repoRoot, 'test', 'reference', 'mend.json'), 'utf8')) as {
+  library: string;
+  graphs: RefGraph[];
+};
 
 describe(`mend search against exhaustive search (${ref.library})`, () => {
   it('covers the graphs it should', () => {

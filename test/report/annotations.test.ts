@@ -18,7 +18,9 @@ describe('annotations', () => {
     const changed = new Map([['metro/north.graphml', new Set([88])]]);
     const all = annotationsOf(sampleReport(), { changedLines: changed });
     const levels = all.map((a) => a.level);
-    expect(levels).toEqual([...levels].sort((a, b) => ['error', 'warning', 'notice'].indexOf(a) - ['error', 'warning', 'notice'].indexOf(b)));
+    expect(levels).toEqual(
+      [...levels].sort((a, b) => ['error', 'warning', 'notice'].indexOf(a) - ['error', 'warning', 'notice'].indexOf(b)),
+    );
     const warnings = all.filter((a) => a.level === 'warning');
     expect(warnings[0]).toMatchObject({ file: 'metro/north.graphml', startLine: 88, inDiff: true });
     expect(warnings[1].inDiff).toBe(false);
@@ -76,15 +78,39 @@ describe('the policy change as an annotation', () => {
     const r = sampleReport();
     r.policy.changed = true;
     r.policy.changes = [
-      { subject: 'threshold:random-nodes@0.2:q0.1', key: 'min', effect: 'loosens', base: 0.5, head: 0.45, file: 'netbrace.policy.yaml', line: 9 },
-      { subject: 'weakening', key: 'allowed-drop', effect: 'tightens', base: 0.02, head: 0.01, file: 'netbrace.policy.yaml', line: 14 },
+      {
+        subject: 'threshold:random-nodes@0.2:q0.1',
+        key: 'min',
+        effect: 'loosens',
+        base: 0.5,
+        head: 0.45,
+        file: 'netbrace.policy.yaml',
+        line: 9,
+      },
+      {
+        subject: 'weakening',
+        key: 'allowed-drop',
+        effect: 'tightens',
+        base: 0.02,
+        head: 0.01,
+        file: 'netbrace.policy.yaml',
+        line: 14,
+      },
     ];
     const a = planAnnotations(r).annotations.find((x) => x.rule === 'policy-changed')!;
-    expect(a).toMatchObject({ level: 'warning', file: 'netbrace.policy.yaml', startLine: 9, title: 'netbrace: policy changed' });
+    expect(a).toMatchObject({
+      level: 'warning',
+      file: 'netbrace.policy.yaml',
+      startLine: 9,
+      title: 'netbrace: policy changed',
+    });
     expect(a.message).toBe(
       'This change edits the policy: the head\u2019s version would loosen the floor of threshold:random-nodes@0.2:q0.1 from 0.5 to 0.45, and tighten the allowed drop from 0.02 to 0.01; the base\u2019s version judges this change, and the head\u2019s applies once merged.',
     );
     r.policy.changes = r.policy.changes.filter((c) => c.effect === 'tightens');
-    expect(planAnnotations(r).annotations.find((x) => x.rule === 'policy-changed')).toMatchObject({ level: 'notice', startLine: 14 });
+    expect(planAnnotations(r).annotations.find((x) => x.rule === 'policy-changed')).toMatchObject({
+      level: 'notice',
+      startLine: 14,
+    });
   });
 });

@@ -74,7 +74,9 @@ describe('envelopeChart', () => {
   it('summarises the chart in words with the median end points', () => {
     const env = head.envelopes[0];
     const chart = envelopeChart(env, head, base);
-    expect(chart.summary).toContain(`Median R falls from ${env.median[0].toFixed(3)} to ${env.median[env.median.length - 1].toFixed(3)}`);
+    expect(chart.summary).toContain(
+      `Median R falls from ${env.median[0].toFixed(3)} to ${env.median[env.median.length - 1].toFixed(3)}`,
+    );
     expect(chart.summary).toContain('Worst case found (exact, 3 sites)');
   });
 });
@@ -103,7 +105,9 @@ describe('renderChartSvg', () => {
       const chart = envelopeChart(env, head, base);
       const svg = renderChartSvg(chart, { idPrefix: 'c2' });
       const legend = svg.slice(svg.indexOf('<g class="nb-legend"'));
-      const entries = [...legend.matchAll(/<g data-legend="([^"]+)">[\s\S]*?<text[^>]*>([^<]*)<\/text>\s*<\/g>/g)].map((m) => [m[1], m[2]]);
+      const entries = [...legend.matchAll(/<g data-legend="([^"]+)">[\s\S]*?<text[^>]*>([^<]*)<\/text>\s*<\/g>/g)].map(
+        (m) => [m[1], m[2]],
+      );
       expect(entries).toEqual(chart.series.map((s) => [s.id, s.label]));
     }
   });
@@ -115,7 +119,17 @@ describe('renderChartSvg', () => {
       xUnit: 'fraction' as const,
       xMax: 1,
       summary: 's',
-      series: [{ role: 'median' as const, id: 'median', label: 'median', points: [{ x: 0, y: 1 }, { x: 1, y: 0 }] }],
+      series: [
+        {
+          role: 'median' as const,
+          id: 'median',
+          label: 'median',
+          points: [
+            { x: 0, y: 1 },
+            { x: 1, y: 0 },
+          ],
+        },
+      ],
     };
     const svg = renderChartSvg(chart, { width: 640 });
     // margins: left 56, right 20, top 18, plot height 240

@@ -6,7 +6,8 @@ import type { AttackCurve, Envelope, QuantileBand, WorstCase } from '../../src/e
 import { CAUTION, REPORT_VERSION, type Evaluation, type FileReport, type Report } from '../../src/report/report.js';
 
 const round = (v: number) => Math.round(v * 1e6) / 1e6;
-const grid = (until: number, points: number) => Array.from({ length: points }, (_, i) => round((until * i) / (points - 1)));
+const grid = (until: number, points: number) =>
+  Array.from({ length: points }, (_, i) => round((until * i) / (points - 1)));
 
 function band(values: number[], se: number): QuantileBand {
   return {
@@ -57,7 +58,14 @@ function envelope(opts: {
   };
 }
 
-function attack(challenge: AttackCurve['challenge'], kind: AttackCurve['kind'], count: number, r0: number, speed: number, sequence: string[]): AttackCurve {
+function attack(
+  challenge: AttackCurve['challenge'],
+  kind: AttackCurve['kind'],
+  count: number,
+  r0: number,
+  speed: number,
+  sequence: string[],
+): AttackCurve {
   const steps = Math.round(count * 0.4);
   const x = Array.from({ length: steps + 1 }, (_, k) => round(k / count));
   const values = x.map((v) => round(Math.max(0, r0 * Math.exp(-speed * v) - 0.15 * v)));
@@ -92,7 +100,14 @@ const baseBackbone: Evaluation = {
     attack('link-betweenness', 'link', 71, 0.812, 2.2, ['lunmere-quarnell', 'tessaway-orrowin']),
   ],
   contingencies: [
-    { challenge: 'n-1', kind: 'node', evaluated: 52, total: 52, worst: [{ elements: ['lunmere'], value: 0.702 }], min: 0.702 },
+    {
+      challenge: 'n-1',
+      kind: 'node',
+      evaluated: 52,
+      total: 52,
+      worst: [{ elements: ['lunmere'], value: 0.702 }],
+      min: 0.702,
+    },
   ],
   degraded: [],
 };
@@ -131,7 +146,9 @@ const headBackbone: Evaluation = {
       width: 0.15,
       until: 0.3,
       worstCase: headWorst,
-      weakest: [{ kind: 'node', elements: ['kaskeld', 'fenwhistle', 'lunmere'], values: [0.66, 0.6, 0.49], realization: 213 }],
+      weakest: [
+        { kind: 'node', elements: ['kaskeld', 'fenwhistle', 'lunmere'], values: [0.66, 0.6, 0.49], realization: 213 },
+      ],
     }),
     envelope({ challenge: 'random-links', kind: 'link', r0: 0.794, a: 0.8, b: 0.9, width: 0.1, until: 0.3 }),
   ],
@@ -141,7 +158,14 @@ const headBackbone: Evaluation = {
     attack('link-betweenness', 'link', 71, 0.794, 2.9, ['lunmere-kaskeld', 'tessaway-orrowin']),
   ],
   contingencies: [
-    { challenge: 'n-1', kind: 'node', evaluated: 52, total: 52, worst: [{ elements: ['kaskeld'], value: 0.655 }], min: 0.655 },
+    {
+      challenge: 'n-1',
+      kind: 'node',
+      evaluated: 52,
+      total: 52,
+      worst: [{ elements: ['kaskeld'], value: 0.655 }],
+      min: 0.655,
+    },
   ],
   degraded: [],
 };
@@ -265,7 +289,9 @@ const backbone: FileReport = {
 const metroHead: Evaluation = {
   r: rSpec,
   structure: { nodes: 12, links: 16, components: 1, bridges: [], cutNodes: [] },
-  envelopes: [envelope({ challenge: 'random-nodes', kind: 'node', r0: 0.702, a: 1.2, b: 1.4, width: 0.13, until: 0.3 })],
+  envelopes: [
+    envelope({ challenge: 'random-nodes', kind: 'node', r0: 0.702, a: 1.2, b: 1.4, width: 0.13, until: 0.3 }),
+  ],
   attacks: [attack('degree', 'node', 12, 0.702, 3.8, ['ardlenoth', 'brisselholt'])],
   contingencies: [],
   degraded: ['betweenness attacks skipped: budget of 2 s per design reached'],

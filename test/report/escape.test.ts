@@ -56,7 +56,9 @@ describe('workflow command escaping', () => {
 
 describe('markdown and HTML escaping', () => {
   it('renders HTML, links, images and emphasis literally', () => {
-    const out = escapeMarkdown('<img src=x onerror=alert(1)> [click](javascript:alert(1)) ![i](http://x/y.png) **b** _i_ `c` | cell');
+    const out = escapeMarkdown(
+      '<img src=x onerror=alert(1)> [click](javascript:alert(1)) ![i](http://x/y.png) **b** _i_ `c` | cell',
+    );
     expect(out).not.toMatch(/<img/);
     expect(out).not.toContain('](');
     expect(out).not.toContain('**');
@@ -81,7 +83,9 @@ describe('markdown and HTML escaping', () => {
   });
 
   it('escapes HTML', () => {
-    expect(escapeHtml(`<a href="x" onclick='y'>&</a>`)).toBe('&lt;a href=&quot;x&quot; onclick=&#39;y&#39;&gt;&amp;&lt;/a&gt;');
+    expect(escapeHtml(`<a href="x" onclick='y'>&</a>`)).toBe(
+      '&lt;a href=&quot;x&quot; onclick=&#39;y&#39;&gt;&amp;&lt;/a&gt;',
+    );
   });
 
   it('fences code spans longer than any backtick run', () => {

@@ -39,7 +39,9 @@ describe('renderHtml', () => {
     const body = html.slice(html.indexOf('<body'));
     const h1 = /<h1 class="verdict blocks" id="verdict" role="status" data-tone="blocks">([\s\S]*?)<\/h1>/.exec(body)!;
     expect(text(h1[1])).toBe('\u25A0netbrace blocks this merge: 1 design weakened, 1 design could not be read');
-    expect(plainSentence(verdictStory(report).sentence)).toBe('netbrace blocks this merge: 1 design weakened, 1 design could not be read');
+    expect(plainSentence(verdictStory(report).sentence)).toBe(
+      'netbrace blocks this merge: 1 design weakened, 1 design could not be read',
+    );
     // the caution line comes right after the verdict; the full caution closes the page
     const after = body.slice(body.indexOf('</h1>'));
     expect(after.indexOf('class="caution-line"')).toBeGreaterThan(0);
@@ -69,7 +71,8 @@ describe('renderHtml', () => {
     for (const s of sections()) {
       const at = (needle: string) => s.indexOf(needle);
       expect(at('data-part="consequences"')).toBeGreaterThan(0);
-      if (s.includes('data-part="numbers"')) expect(at('data-part="numbers"')).toBeGreaterThan(at('data-part="consequences"'));
+      if (s.includes('data-part="numbers"'))
+        expect(at('data-part="numbers"')).toBeGreaterThan(at('data-part="consequences"'));
       if (s.includes('<figure class="chart"')) {
         expect(at('<figure class="chart"')).toBeGreaterThan(at('data-part="detail"'));
         expect(at('data-part="detail"')).toBeGreaterThan(at('data-part="numbers"'));
@@ -80,7 +83,11 @@ describe('renderHtml', () => {
   it('says what weakened in sentences, worst first, each element with id and line', () => {
     const s = sections()[0];
     const part = s.slice(s.indexOf('data-part="consequences"'), s.indexOf('data-part="numbers"'));
-    const items = [...part.matchAll(/<li class="sev-(\w+)" data-rule="([^"]+)"[^>]*>([\s\S]*?)<\/li>/g)].map((m) => ({ sev: m[1], rule: m[2], text: text(m[3]) }));
+    const items = [...part.matchAll(/<li class="sev-(\w+)" data-rule="([^"]+)"[^>]*>([\s\S]*?)<\/li>/g)].map((m) => ({
+      sev: m[1],
+      rule: m[2],
+      text: text(m[3]),
+    }));
     const story = designStories(report)[0];
     expect(items.map((x) => x.rule)).toEqual(story.weakened.map((x) => x.rule));
     items.forEach((x, i) => expect(x.text).toContain(plainSentence(story.weakened[i].sentence)));
@@ -106,7 +113,9 @@ describe('renderHtml', () => {
     const r = f.requirements[0];
     const row = html.slice(html.indexOf(`data-requirement="${r.id}"`)).split('</li>')[0];
     expect(row).toContain(`data-base="${r.base}" data-head="${r.head}" data-delta="${r.delta}" data-se="${r.se}"`);
-    expect(text(row.slice(row.indexOf('>') + 1))).toBe(`\u25A0${plainSentence(requirementLine(r, f.findings).sentence)}`);
+    expect(text(row.slice(row.indexOf('>') + 1))).toBe(
+      `\u25A0${plainSentence(requirementLine(r, f.findings).sentence)}`,
+    );
     // spot-checked against the raw numbers, not our own formatter
     expect(text(row)).toContain('short \u00b7 ');
     expect(text(row)).toContain('0.498 \u2192 0.421 (\u22120.077 \u00b1 0.006), floor 0.45');
@@ -119,7 +128,9 @@ describe('renderHtml', () => {
     expect(numbers).toContain('data-term="\u00b1"');
     const link = /<a href="#([^"]+)" class="more">/.exec(numbers)![1];
     expect(s).toContain(`id="${link}"`);
-    expect(text(s.slice(s.indexOf(`id="${link}"`)))).toMatch(/README, section \u201cReading the report\u201d \(README\.md#reading-the-report\)/);
+    expect(text(s.slice(s.indexOf(`id="${link}"`)))).toMatch(
+      /README, section \u201cReading the report\u201d \(README\.md#reading-the-report\)/,
+    );
   });
 
   it('escapes every string from the report', () => {
@@ -155,7 +166,9 @@ describe('renderHtml', () => {
     const s = sections()[0];
     expect(s).toContain('Worst case found under random site failures (exact search, 3 sites)');
     expect(s).toMatch(/<span class="el">kaskeld<\/span> <span class="line">\(line 31\)<\/span> \u2014 R 0\.655/);
-    expect(s).toMatch(/lunmere-kaskeld<\/span> <span class="line">\(line 197\)<\/span> <strong class="sev-fail">new<\/strong>/);
+    expect(s).toMatch(
+      /lunmere-kaskeld<\/span> <span class="line">\(line 197\)<\/span> <strong class="sev-fail">new<\/strong>/,
+    );
     expect(s).not.toMatch(/wendlequist-yarlsquay<\/span> <span class="line">\(line 268\)<\/span> <strong/);
   });
 
@@ -167,7 +180,9 @@ describe('renderHtml', () => {
   it('links the definitions to netbrace\u2019s README when its address is known', () => {
     const withLink = renderHtml(report, { readmeUrl: 'https://github.com/acme/netbrace/blob/v1/README.md' });
     const s = withLink.split('<section ')[1];
-    expect(s).toContain('<a href="https://github.com/acme/netbrace/blob/v1/README.md#reading-the-report" class="more">More in the README</a>');
+    expect(s).toContain(
+      '<a href="https://github.com/acme/netbrace/blob/v1/README.md#reading-the-report" class="more">More in the README</a>',
+    );
     expect(s).not.toContain('-about-reading-the-report');
     // anything but an http(s) address is not a link
     expect(renderHtml(report, { readmeUrl: 'javascript:alert(1)' })).not.toContain('javascript:');
@@ -175,19 +190,32 @@ describe('renderHtml', () => {
 
   it('shows what reading a design warned of, at its line, in the detail', () => {
     const r = demoReport();
-    r.files[0].warnings = [{ message: 'self-loop on node "kaskeld" dropped', line: 40, column: 5, hint: 'a link from a node to itself adds no connectivity' }];
+    r.files[0].warnings = [
+      {
+        message: 'self-loop on node "kaskeld" dropped',
+        line: 40,
+        column: 5,
+        hint: 'a link from a node to itself adds no connectivity',
+      },
+    ];
     const s = renderHtml(r).split('<section ')[1];
     const at = s.indexOf('class="facts design-warnings"');
     expect(at).toBeGreaterThan(s.indexOf('data-part="detail"'));
-    expect(s).toContain('<code>designs/lunmere-backbone.net.yaml:40:5</code> self-loop on node &quot;kaskeld&quot; dropped \u2014 a link from a node to itself adds no connectivity');
+    expect(s).toContain(
+      '<code>designs/lunmere-backbone.net.yaml:40:5</code> self-loop on node &quot;kaskeld&quot; dropped \u2014 a link from a node to itself adds no connectivity',
+    );
   });
 
   it('shows a passing design with notices as passing, and folds its notices into the detail', () => {
     const s = sections()[2];
     expect(s).toContain('data-outcome="holds"');
-    expect(text(/<p class="outcome holds">([\s\S]*?)<\/p>/.exec(s)![1])).toBe('\u25A1new design \u2014 every requirement holds');
+    expect(text(/<p class="outcome holds">([\s\S]*?)<\/p>/.exec(s)![1])).toBe(
+      '\u25A1new design \u2014 every requirement holds',
+    );
     expect(s).toContain('<p class="facts">Nothing weakened.</p>');
-    expect(s).toMatch(/<details class="notices"><summary>1 notice \(context, within allowances\)<\/summary><ul class="weakened"><li class="sev-notice" data-rule="degraded"/);
+    expect(s).toMatch(
+      /<details class="notices"><summary>1 notice \(context, within allowances\)<\/summary><ul class="weakened"><li class="sev-notice" data-rule="degraded"/,
+    );
     expect(s.indexOf('<details class="notices">')).toBeGreaterThan(s.indexOf('data-part="detail"'));
   });
 });

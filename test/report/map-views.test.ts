@@ -15,7 +15,12 @@ let report: Report;
 let file: FileReport;
 
 beforeAll(async () => {
-  report = (await runGate({ base: 'base', head: 'head', policySource: 'base', mode: 'block' }, memoryDeps(pairRepo('ring-to-chain')))).report;
+  report = (
+    await runGate(
+      { base: 'base', head: 'head', policySource: 'base', mode: 'block' },
+      memoryDeps(pairRepo('ring-to-chain')),
+    )
+  ).report;
   file = report.files[0];
 });
 
@@ -66,7 +71,9 @@ describe('the Mermaid neighbourhood of the change', () => {
     const md = renderSummary(report);
     const line = md.split('\n').find((l) => l.startsWith('**What would mend it**'))!;
     expect(line).toBeDefined();
-    expect(line).toMatch(/add `[^`]+` \(`(harbour–orchard|orchard–harbour)`\): holds, R̄ \d\.\d{3} → \d\.\d{3}; or harden 9 elements/);
+    expect(line).toMatch(
+      /add `[^`]+` \(`(harbour–orchard|orchard–harbour)`\): holds, R̄ \d\.\d{3} → \d\.\d{3}; or harden 9 elements/,
+    );
     expect(line).toContain('not a route survey');
   });
 
@@ -79,16 +86,30 @@ describe('the Mermaid neighbourhood of the change', () => {
       method: 'm',
       strandingGroups: [],
       nodes: Array.from({ length: n }, (_, i) => ({ id: `s${i}`, x: i, y: i, line: i + 1, side: 'head' as const })),
-      links: Array.from({ length: n - 1 }, (_, i) => ({ id: `l${i}`, source: `s${i}`, target: `s${i + 1}`, line: 1, side: 'head' as const })),
+      links: Array.from({ length: n - 1 }, (_, i) => ({
+        id: `l${i}`,
+        source: `s${i}`,
+        target: `s${i + 1}`,
+        line: 1,
+        side: 'head' as const,
+      })),
     };
     const text = neighbourhoodMermaid({ path: 'x', status: 'new', findings: [], requirements: [], map });
     expect(text).not.toContain('```mermaid');
-    expect(text).toContain('The change touches 30 sites and 29 links: too many to draw legibly here. The HTML report has the map');
+    expect(text).toContain(
+      'The change touches 30 sites and 29 links: too many to draw legibly here. The HTML report has the map',
+    );
     expect(neighbourhoodMermaid({ ...file, map: { omitted: 'too big' } })).toBe('');
   });
 
   it('lets no id become Mermaid syntax', () => {
-    for (const hostile of ['a"] --> b["x', 'x\n%%{init: {}}%%', 'click n0 "https://evil.example"', '<img src=x>', 'a|b;c{d}']) {
+    for (const hostile of [
+      'a"] --> b["x',
+      'x\n%%{init: {}}%%',
+      'click n0 "https://evil.example"',
+      '<img src=x>',
+      'a|b;c{d}',
+    ]) {
       const label = mermaidLabel(hostile);
       expect(label).toMatch(/^[\p{L}\p{N} ._-]+$/u);
     }
@@ -102,7 +123,9 @@ describe('the text of netbrace mend', () => {
     const text = renderMendText(file);
     expect(text).toContain('What would mend networks/site.net.yaml');
     expect(text).toContain('5 new bridges');
-    expect(text).toContain('Bound: at least 1 link to remove the new bridges (their bridge tree has 2 leaves; Eswaran & Tarjan 1976)');
+    expect(text).toContain(
+      'Bound: at least 1 link to remove the new bridges (their bridge tree has 2 leaves; Eswaran & Tarjan 1976)',
+    );
     expect(text).toMatch(/1\. add 1 link — holds; R̄ \d\.\d{3} → \d\.\d{3}/);
     expect(text).toMatch(/fixes (\d+) of \1 targets/);
     expect(text).toContain('in the design file, under links:');

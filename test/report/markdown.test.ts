@@ -27,7 +27,9 @@ function textBlocks(md: string): string[] {
 describe('job summary', () => {
   it('states the verdict first, then per design what weakened before how much, worst designs first', () => {
     const md = renderSummary(sampleReport());
-    expect(md.split('\n')[0]).toBe('## \u25A0 netbrace blocks this merge: 1 design weakened, 1 design could not be read');
+    expect(md.split('\n')[0]).toBe(
+      '## \u25A0 netbrace blocks this merge: 1 design weakened, 1 design could not be read',
+    );
     // The caution as one line right under the verdict, and in full at the very end.
     expect(md.split('\n')[2]).toContain('does not replace engineering studies');
     expect(md.trimEnd().endsWith(CAUTION)).toBe(true);
@@ -40,17 +42,32 @@ describe('job summary', () => {
       'dc/fabric.gml',
     ]);
     // Within a design: consequences, then numbers, then the folded detail.
-    const core = md.slice(md.indexOf('### \u25A0 weakened \u00b7 `backbone/core.net.yaml`'), md.indexOf('`edge/west.net.yaml`'));
-    const order = ['**What weakened**', 'Link `l-kas-ost` (line 42) is a new bridge', '**How much**', '<details>', 'weakest removal sequence'].map((t) => core.indexOf(t));
+    const core = md.slice(
+      md.indexOf('### \u25A0 weakened \u00b7 `backbone/core.net.yaml`'),
+      md.indexOf('`edge/west.net.yaml`'),
+    );
+    const order = [
+      '**What weakened**',
+      'Link `l-kas-ost` (line 42) is a new bridge',
+      '**How much**',
+      '<details>',
+      'weakest removal sequence',
+    ].map((t) => core.indexOf(t));
     expect(order.every((i) => i >= 0)).toBe(true);
     expect([...order].sort((a, b) => a - b)).toEqual(order);
   });
 
   it('gives each requirement one line: status, what, base \u2192 head (\u0394 \u00b1 error), floor', () => {
     const md = renderSummary(sampleReport());
-    expect(md).toContain('- \u25A0 weakened \u00b7 area of the random site failure envelope may drop by at most 0.020 0.742 \u2192 0.680 (\u22120.062 \u00b1 0.004), floor 0.722\n');
-    expect(md).toContain('- \u25CC inside-error \u00b7 median R at 30 % sites removed \u2265 0.60 0.556 \u2192 0.548 (\u22120.008 \u00b1 0.006), floor 0.6\n');
-    expect(md).toContain('inside-error: the value dropped by less than its Monte Carlo error, which is never a failure.');
+    expect(md).toContain(
+      '- \u25A0 weakened \u00b7 area of the random site failure envelope may drop by at most 0.020 0.742 \u2192 0.680 (\u22120.062 \u00b1 0.004), floor 0.722\n',
+    );
+    expect(md).toContain(
+      '- \u25CC inside-error \u00b7 median R at 30 % sites removed \u2265 0.60 0.556 \u2192 0.548 (\u22120.008 \u00b1 0.006), floor 0.6\n',
+    );
+    expect(md).toContain(
+      'inside-error: the value dropped by less than its Monte Carlo error, which is never a failure.',
+    );
     // No requirement table and no per-design table of worst findings.
     expect(md).not.toMatch(/\| requirement \|/);
     expect(md).not.toMatch(/worst finding/);
@@ -58,7 +75,9 @@ describe('job summary', () => {
 
   it('defines R, area, spread and \u00b1 in one line each, linked to the README when its address is known', () => {
     const md = renderSummary(sampleReport(), { readmeUrl: 'https://example.org/netbrace/README.md' });
-    expect(md).toContain('\u00b7 R: the weighted mean of `efficiency` 1, each metric scaled to 0\u20131 with 1 the intact design. [more](https://example.org/netbrace/README.md#reading-the-report)');
+    expect(md).toContain(
+      '\u00b7 R: the weighted mean of `efficiency` 1, each metric scaled to 0\u20131 with 1 the intact design. [more](https://example.org/netbrace/README.md#reading-the-report)',
+    );
     expect(renderSummary(sampleReport())).toContain('The README\u2019s \u201cReading the report\u201d says more.');
   });
 
@@ -67,8 +86,15 @@ describe('job summary', () => {
     const charts = textBlocks(md);
     expect(charts.length).toBe(3);
     const rows = charts[0].trimEnd().split('\n');
-    expect(rows.map((r) => r.split(/\s{2,}/)[0])).toEqual(['head 90 % quantile', 'head median', 'base median', 'head 10 % quantile']);
-    expect(md).toContain('head median         \u2588\u2588\u2587\u2587\u2586\u2586\u2585\u2585\u2584\u2584\u2583  1.000 \u2192 0.325');
+    expect(rows.map((r) => r.split(/\s{2,}/)[0])).toEqual([
+      'head 90 % quantile',
+      'head median',
+      'base median',
+      'head 10 % quantile',
+    ]);
+    expect(md).toContain(
+      'head median         \u2588\u2588\u2587\u2587\u2586\u2586\u2585\u2585\u2584\u2584\u2583  1.000 \u2192 0.325',
+    );
     expect(md).not.toContain('drawing order');
     expect(md).toContain('site `kaskeld` (line 12) \u2192 site `ostmark` (line 15) \u2192 site `brenna` (line 9)');
   });
@@ -107,7 +133,9 @@ describe('job summary', () => {
     const r = sampleReport();
     r.policy.changed = true;
     const md = renderSummary(r);
-    expect(md).toContain('\u25B2 This change edits the policy; the base\u2019s version judges this change, and the head\u2019s applies once merged.\n');
+    expect(md).toContain(
+      '\u25B2 This change edits the policy; the base\u2019s version judges this change, and the head\u2019s applies once merged.\n',
+    );
     expect(md).toContain('informs engineering judgement');
   });
 
@@ -118,7 +146,9 @@ describe('job summary', () => {
     r.scope = 'all';
     r.parts = { total: 3, joined: [1, 2, 3] };
     const md = renderSummary(r);
-    expect(md).toContain('Policy: this change modifies the policy; the version at the base judges it (it applies once merged).');
+    expect(md).toContain(
+      'Policy: this change modifies the policy; the version at the base judges it (it applies once merged).',
+    );
     expect(md).toContain('every design, thresholds only');
     expect(md).toContain('joined parts 1, 2, 3 of 3');
   });
@@ -225,21 +255,35 @@ describe('our own look and words', () => {
     r.files[1].findings[0].elements[0] = { id: 'l_kas*ost"1', kind: 'link', line: 42, label: 'Kaskeld "east" span' };
     const md = renderComment(r, { key: 'k' });
     const line = md.split('\n').find((l) => l.includes('is a new bridge'))!;
-    expect(line).toBe('- \u25A0 fails: Kaskeld "east" span (`l_kas*ost"1`, line 42) is a new bridge; losing it splits the design.');
+    expect(line).toBe(
+      '- \u25A0 fails: Kaskeld "east" span (`l_kas*ost"1`, line 42) is a new bridge; losing it splits the design.',
+    );
     expect(md).not.toContain('&quot;');
   });
 
   it('keeps a hostile label with backticks in a code span of its own, never touching the id\u2019s', () => {
     const r = sampleReport();
     r.files[1].findings[0].elements[0] = { id: '`x`', kind: 'link', line: 42, label: '``` `y' };
-    const line = renderSummary(r).split('\n').find((l) => l.includes('is a new bridge'))!;
-    expect(line).toBe('- \u25A0 fails: ```` ``` `y ```` (`` `x` ``, line 42) is a new bridge; losing it splits the design.');
+    const line = renderSummary(r)
+      .split('\n')
+      .find((l) => l.includes('is a new bridge'))!;
+    expect(line).toBe(
+      '- \u25A0 fails: ```` ``` `y ```` (`` `x` ``, line 42) is a new bridge; losing it splits the design.',
+    );
   });
 
   it('a passing design with notices shows as passing', () => {
     const r = sampleReport();
     const fabric = r.files[0];
-    fabric.findings = [{ rule: 'degraded', severity: 'notice', message: 'head evaluation reduced: realizations reduced from 400 to 200', elements: [], line: 0 }];
+    fabric.findings = [
+      {
+        rule: 'degraded',
+        severity: 'notice',
+        message: 'head evaluation reduced: realizations reduced from 400 to 200',
+        elements: [],
+        line: 0,
+      },
+    ];
     r.files = [fabric];
     r.verdict = 'pass';
     const md = renderSummary(r);
@@ -254,9 +298,13 @@ describe('our own look and words', () => {
     const r = sampleReport();
     r.part = { index: 1, total: 2 };
     const md = renderSummary(r);
-    expect(md.split('\n')[0]).toBe('## \u25B2 netbrace, part 1 of 2: 1 design weakened, 1 design could not be read in this part; the joined report decides the merge');
+    expect(md.split('\n')[0]).toBe(
+      '## \u25B2 netbrace, part 1 of 2: 1 design weakened, 1 design could not be read in this part; the joined report decides the merge',
+    );
     expect(md).not.toContain('blocks this merge');
-    expect(md).toContain('- \u25A0 weakened \u00b7 `backbone/core.net.yaml`: 1 new bridge; 2 requirements weakened or short');
+    expect(md).toContain(
+      '- \u25A0 weakened \u00b7 `backbone/core.net.yaml`: 1 new bridge; 2 requirements weakened or short',
+    );
     expect(md).toContain('the joined summary tells what weakened and how much');
     expect(md).not.toContain('**How much**');
     // The joined report tells it once, in full.
@@ -269,8 +317,24 @@ describe('our own look and words', () => {
     const r = sampleReport();
     r.policy.changed = true;
     r.policy.changes = [
-      { subject: 'threshold:random-nodes@0.2:q0.1', key: 'min', effect: 'loosens', base: 0.5, head: 0.45, file: 'netbrace.policy.yaml', line: 9 },
-      { subject: 'weakening', key: 'allowed-drop', effect: 'tightens', base: 0.02, head: 0.01, file: 'netbrace.policy.yaml', line: 14 },
+      {
+        subject: 'threshold:random-nodes@0.2:q0.1',
+        key: 'min',
+        effect: 'loosens',
+        base: 0.5,
+        head: 0.45,
+        file: 'netbrace.policy.yaml',
+        line: 9,
+      },
+      {
+        subject: 'weakening',
+        key: 'allowed-drop',
+        effect: 'tightens',
+        base: 0.02,
+        head: 0.01,
+        file: 'netbrace.policy.yaml',
+        line: 14,
+      },
     ];
     const md = renderSummary(r);
     expect(md).toContain(

@@ -36,7 +36,12 @@ function envelope(median: number[], width: number, weakest: string[]): Envelope 
     area: median.slice(1).reduce((a, b) => a + b, 0) / (median.length - 1),
     spread: width * 1.5,
     weakest: [
-      { kind: 'node', elements: weakest, values: weakest.map((_, i) => Math.round((0.8 - 0.15 * i) * 1000) / 1000), realization: 17 },
+      {
+        kind: 'node',
+        elements: weakest,
+        values: weakest.map((_, i) => Math.round((0.8 - 0.15 * i) * 1000) / 1000),
+        realization: 17,
+      },
     ],
   };
 }
@@ -63,7 +68,14 @@ function evaluation(median: number[], bridges: { id: string; line: number }[], w
       },
     ],
     contingencies: [
-      { challenge: 'n-1', kind: 'link', evaluated: 14, total: 14, worst: [{ elements: ['l-kas-ost'], value: 0.61 }], min: 0.61 },
+      {
+        challenge: 'n-1',
+        kind: 'link',
+        evaluated: 14,
+        total: 14,
+        worst: [{ elements: ['l-kas-ost'], value: 0.61 }],
+        min: 0.61,
+      },
     ],
     degraded: [],
   };
@@ -113,7 +125,14 @@ export function sampleReport(): Report {
     format: 'native-yaml',
     findings: coreFindings,
     requirements: [
-      req({ id: 'no-new-spof', description: 'no new bridges or cut nodes', base: 0, head: 1, delta: 1, status: 'short' }),
+      req({
+        id: 'no-new-spof',
+        description: 'no new bridges or cut nodes',
+        base: 0,
+        head: 1,
+        delta: 1,
+        status: 'short',
+      }),
       req({
         id: 'area:random-nodes',
         description: 'area of the random site failure envelope may drop by at most 0.020',
@@ -188,7 +207,15 @@ export function sampleReport(): Report {
     format: 'gml',
     findings: [],
     requirements: [
-      req({ id: 'area:random-links', description: 'area of the random link failure envelope may drop by at most 0.020', base: 0.91, head: 0.915, delta: 0.005, se: 0.002, status: 'holds' }),
+      req({
+        id: 'area:random-links',
+        description: 'area of the random link failure envelope may drop by at most 0.020',
+        base: 0.91,
+        head: 0.915,
+        delta: 0.005,
+        se: 0.002,
+        status: 'holds',
+      }),
     ],
     base: evaluation(curve(1, 0.2, 0.1), [], ['spine-1', 'spine-2']),
     head: evaluation(curve(1, 0.19, 0.1), [], ['spine-1', 'spine-2']),
@@ -223,7 +250,12 @@ export function sampleReport(): Report {
     tool: { name: 'netbrace', version: '0.1.0' },
     verdict: 'fail',
     mode: 'block',
-    policy: { source: 'file', path: 'netbrace.policy.yaml', revision: 'b1e5c0ffee00000000000000000000000000abcd', changed: false },
+    policy: {
+      source: 'file',
+      path: 'netbrace.policy.yaml',
+      revision: 'b1e5c0ffee00000000000000000000000000abcd',
+      changed: false,
+    },
     base: 'b1e5c0ffee00000000000000000000000000abcd',
     head: 'feedface0000000000000000000000000000beef',
     seed: 7,

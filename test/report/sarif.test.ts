@@ -91,10 +91,11 @@ describe('SARIF 2.1.0', () => {
   it('fingerprints survive moved lines but not a different element, file or rule', () => {
     const a = sampleReport();
     const b = sampleReport();
-    for (const f of b.files) for (const x of f.findings) {
-      x.line += 10;
-      for (const e of x.elements) e.line += 10;
-    }
+    for (const f of b.files)
+      for (const x of f.findings) {
+        x.line += 10;
+        for (const e of x.elements) e.line += 10;
+      }
     const fa = results(renderSarif(a)).map((r) => r.fingerprints['netbraceFinding/v1']);
     const fb = results(renderSarif(b)).map((r) => r.fingerprints['netbraceFinding/v1']);
     expect(fb).toEqual(fa);
@@ -102,7 +103,9 @@ describe('SARIF 2.1.0', () => {
     const x = a.files[1].findings[0];
     const base = findingFingerprint('backbone/core.net.yaml', x);
     expect(findingFingerprint('backbone/other.net.yaml', x)).not.toBe(base);
-    expect(findingFingerprint('backbone/core.net.yaml', { ...x, elements: [{ id: 'l-other', kind: 'link', line: 42 }] })).not.toBe(base);
+    expect(
+      findingFingerprint('backbone/core.net.yaml', { ...x, elements: [{ id: 'l-other', kind: 'link', line: 42 }] }),
+    ).not.toBe(base);
     expect(findingFingerprint('backbone/core.net.yaml', { ...x, rule: 'new-cut-node' })).not.toBe(base);
   });
 
@@ -113,7 +116,9 @@ describe('SARIF 2.1.0', () => {
     const log = JSON.parse(JSON.stringify(renderSarif(r, { pathPrefix: 'nets' })));
     expect(validate(log)).toBe(true);
     const res = log.runs[0].results.find((x: any) => x.ruleId === 'new-bridge');
-    expect(res.locations[0].physicalLocation.artifactLocation.uri).toBe('nets/dir%20with%20space/%3Cx%3E%2520%22q%22%23frag%3F.net.yaml');
+    expect(res.locations[0].physicalLocation.artifactLocation.uri).toBe(
+      'nets/dir%20with%20space/%3Cx%3E%2520%22q%22%23frag%3F.net.yaml',
+    );
     expect(res.message.text.length).toBeGreaterThan(0);
     const big = JSON.parse(JSON.stringify(renderSarif(hugeReport(40, 50))));
     expect(validate(big)).toBe(true);
@@ -123,12 +128,25 @@ describe('SARIF 2.1.0', () => {
   it('gives the policy change as one result on the policy file, valid against the schema', () => {
     const r = sampleReport();
     r.policy.changed = true;
-    r.policy.changes = [{ subject: 'n-1:node', key: 'severity', effect: 'loosens', base: 'fail', head: 'warn', file: 'netbrace.policy.yaml', line: 21 }];
+    r.policy.changes = [
+      {
+        subject: 'n-1:node',
+        key: 'severity',
+        effect: 'loosens',
+        base: 'fail',
+        head: 'warn',
+        file: 'netbrace.policy.yaml',
+        line: 21,
+      },
+    ];
     const log = renderSarif(r);
     const policy = results(log).filter((x) => x.ruleId === 'policy-changed');
     expect(policy).toHaveLength(1);
     expect(policy[0].level).toBe('warning');
-    expect(policy[0].locations[0].physicalLocation).toEqual({ artifactLocation: { uri: 'netbrace.policy.yaml' }, region: { startLine: 21 } });
+    expect(policy[0].locations[0].physicalLocation).toEqual({
+      artifactLocation: { uri: 'netbrace.policy.yaml' },
+      region: { startLine: 21 },
+    });
     expect(policy[0].message.text).toBe(
       'This change edits the policy: the head\u2019s version would loosen the severity of n-1:node from fail to warn; the base\u2019s version judges this change, and the head\u2019s applies once merged.',
     );

@@ -12,7 +12,12 @@ describe('renderTerminal', () => {
   it('opens with the verdict sentence and the caution in one line, and ends with the full caution', () => {
     const lines = plain().split('\n');
     expect(lines[0]).toBe('\u25A0 netbrace blocks this merge: 1 design weakened, 1 design could not be read');
-    expect(lines.slice(1, 3).map((l) => l.trim()).join(' ')).toBe(CAUTION_LINE);
+    expect(
+      lines
+        .slice(1, 3)
+        .map((l) => l.trim())
+        .join(' '),
+    ).toBe(CAUTION_LINE);
     expect(plain()).not.toMatch(/\bgate\b|Verdict: |PASS|FAIL/);
   });
 
@@ -22,8 +27,12 @@ describe('renderTerminal', () => {
     const starts = order.map((p) => text.indexOf(` ${p} \u2014 `));
     expect(starts.every((x) => x > 0)).toBe(true);
     expect([...starts].sort((a, b) => a - b)).toEqual(starts);
-    expect(text).toContain('\u25A0 designs/lunmere-backbone.net.yaml \u2014 weakened \u00b7 1 new bridge, 1 new cut node; 3 requirements weakened or short');
-    expect(text).toContain('\u25A1 designs/metro/<west> & "ring".net.yaml \u2014 new design \u00b7 every requirement holds');
+    expect(text).toContain(
+      '\u25A0 designs/lunmere-backbone.net.yaml \u2014 weakened \u00b7 1 new bridge, 1 new cut node; 3 requirements weakened or short',
+    );
+    expect(text).toContain(
+      '\u25A1 designs/metro/<west> & "ring".net.yaml \u2014 new design \u00b7 every requirement holds',
+    );
     expect(text).toContain('\u25A0 designs/lab.graphml \u2014 could not be read');
     expect(text).toContain('\u25A0 could not be read: designs/lab.graphml:41:5: link e7 refers to node n99');
     const first = text.slice(starts[0], starts[1]);
@@ -44,15 +53,21 @@ describe('renderTerminal', () => {
       expect(at).toBeGreaterThan(last);
       last = at;
     }
-    expect(part).toContain('\u25A0 new cut node (line 31): Site kaskeld (line 31) is a new cut node; losing it splits the design.');
+    expect(part).toContain(
+      '\u25A0 new cut node (line 31): Site kaskeld (line 31) is a new cut node; losing it splits the design.',
+    );
   });
 
   it('gives each requirement one line: status, what, base \u2192 head (\u0394 \u00b1 error), floor', () => {
     const text = plain(140);
     const lines = text.split('\n');
-    expect(lines).toContain('    \u25A0 short \u00b7 10 % quantile of R at 20 % sites removed \u2265 0.45 0.498 \u2192 0.421 (\u22120.077 \u00b1 0.006), floor 0.45');
+    expect(lines).toContain(
+      '    \u25A0 short \u00b7 10 % quantile of R at 20 % sites removed \u2265 0.45 0.498 \u2192 0.421 (\u22120.077 \u00b1 0.006), floor 0.45',
+    );
     // deterministic values carry no error term; counts are whole numbers
-    expect(lines).toContain('    \u25A1 holds \u00b7 no single site loss leaves R below 0.60 0.702 \u2192 0.655 (\u22120.047), floor 0.6');
+    expect(lines).toContain(
+      '    \u25A1 holds \u00b7 no single site loss leaves R below 0.60 0.702 \u2192 0.655 (\u22120.047), floor 0.6',
+    );
     expect(lines).toContain('    \u25A0 short \u00b7 no new bridges or cut nodes 1 \u2192 3 (+2), tracked (no floor)');
     // and the words those lines use, defined once under them
     const numbers = text.slice(text.indexOf('  How much'), text.indexOf('  Detail'));
@@ -95,7 +110,9 @@ describe('renderTerminal', () => {
   });
 
   it('says what the change added and removed, with lines', () => {
-    expect(plain(160)).toContain('changed: \u22122 links (kaskeld-fenwhistle, base line 214; ibberlin-tarnquist, base line 205)');
+    expect(plain(160)).toContain(
+      'changed: \u22122 links (kaskeld-fenwhistle, base line 214; ibberlin-tarnquist, base line 205)',
+    );
   });
 
   it('ends with the caution', () => {
@@ -151,12 +168,31 @@ describe('renderTerminal', () => {
       elements: [{ id, kind: 'link' as const, line }],
       line,
     });
-    f.findings = [one('a-b', 10), one('b-c', 12), { ...one('c-d', 14), severity: 'fail' }, { rule: 'regression', severity: 'notice', message: 'x '.repeat(200), elements: [{ id: 'n', kind: 'node', line: 3 }], line: 3 }];
-    const lines = renderTerminal(r, { color: false, width: 100 }).replace(/\u00a0/g, ' ').split('\n');
+    f.findings = [
+      one('a-b', 10),
+      one('b-c', 12),
+      { ...one('c-d', 14), severity: 'fail' },
+      {
+        rule: 'regression',
+        severity: 'notice',
+        message: 'x '.repeat(200),
+        elements: [{ id: 'n', kind: 'node', line: 3 }],
+        line: 3,
+      },
+    ];
+    const lines = renderTerminal(r, { color: false, width: 100 })
+      .replace(/\u00a0/g, ' ')
+      .split('\n');
     const i = lines.indexOf('  What weakened');
-    expect(lines[i + 1]).toBe('    \u25A0 new bridge (line 14): Link c-d (line 14) is a new bridge; losing it splits the design.');
-    expect(lines[i + 2]).toBe('    \u25B2 new bridge (line 10): Link a-b (line 10) is a new bridge; losing it splits the design.');
-    expect(lines[i + 3]).toBe('    \u25B2 new bridge (line 12): Link b-c (line 12) is a new bridge; losing it splits the design.');
+    expect(lines[i + 1]).toBe(
+      '    \u25A0 new bridge (line 14): Link c-d (line 14) is a new bridge; losing it splits the design.',
+    );
+    expect(lines[i + 2]).toBe(
+      '    \u25B2 new bridge (line 10): Link a-b (line 10) is a new bridge; losing it splits the design.',
+    );
+    expect(lines[i + 3]).toBe(
+      '    \u25B2 new bridge (line 12): Link b-c (line 12) is a new bridge; losing it splits the design.',
+    );
     const n = lines.findIndex((l) => /^ {4}\u00b7 robustness changed \(line 3\): [xX] x /.test(l));
     expect(n).toBeGreaterThan(lines.indexOf('  Detail'));
     expect(lines[n]).toMatch(/\u2026$/);
@@ -175,10 +211,13 @@ describe('renderTerminal', () => {
 
   it('shows what reading a design warned of, at its line', () => {
     const r = demoReport();
-    r.files[0].warnings = [{ message: 'self-loop at kaskeld dropped', line: 40, column: 5, hint: 'a link needs two different ends' }];
+    r.files[0].warnings = [
+      { message: 'self-loop at kaskeld dropped', line: 40, column: 5, hint: 'a link needs two different ends' },
+    ];
     const text = renderTerminal(r, { color: false, width: 140 });
     const detail = text.slice(text.indexOf('  Detail'));
-    expect(detail).toContain('\u25B2 design warning: designs/lunmere-backbone.net.yaml:40:5: self-loop at kaskeld dropped \u2014 a link needs two different ends');
+    expect(detail).toContain(
+      '\u25B2 design warning: designs/lunmere-backbone.net.yaml:40:5: self-loop at kaskeld dropped \u2014 a link needs two different ends',
+    );
   });
-
 });

@@ -56,11 +56,19 @@ describe('check with a path that does not exist', () => {
     git('add', '-A');
     git('commit', '-q', '-m', 'base');
     git('commit', '-q', '--allow-empty', '-m', 'head');
-    for (const args of [['missing.net.yaml'], ['--head', 'HEAD', 'missing.net.yaml'], ['--head', 'HEAD^', 'missing.net.yaml']]) {
+    for (const args of [
+      ['missing.net.yaml'],
+      ['--head', 'HEAD', 'missing.net.yaml'],
+      ['--head', 'HEAD^', 'missing.net.yaml'],
+    ]) {
       const r = await check(dir, ...args);
       expect([args, r.code, r.out]).toEqual([args, 2, '']);
       // HEAD^ is the first commit: no parent to compare with, so the head alone is asked.
-      expect(r.err).toMatch(args.includes('HEAD^') ? /^missing\.net\.yaml does not exist at [0-9a-f]{40} / : /^missing\.net\.yaml exists neither at /);
+      expect(r.err).toMatch(
+        args.includes('HEAD^')
+          ? /^missing\.net\.yaml does not exist at [0-9a-f]{40} /
+          : /^missing\.net\.yaml exists neither at /,
+      );
     }
   });
 

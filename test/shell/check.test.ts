@@ -19,7 +19,11 @@ afterAll(() => {
 });
 
 function git(cwd: string, ...args: string[]): string {
-  return execFileSync('git', args, { cwd, encoding: 'utf8', env: { ...process.env, GIT_AUTHOR_DATE: '2001-01-01T00:00:00Z', GIT_COMMITTER_DATE: '2001-01-01T00:00:00Z' } }).trim();
+  return execFileSync('git', args, {
+    cwd,
+    encoding: 'utf8',
+    env: { ...process.env, GIT_AUTHOR_DATE: '2001-01-01T00:00:00Z', GIT_COMMITTER_DATE: '2001-01-01T00:00:00Z' },
+  }).trim();
 }
 
 function newRepo(files: Record<string, string>): string {
@@ -62,7 +66,10 @@ const validate = new Ajv({ strict: false }).compile(schema);
 
 describe('netbrace check in a git repository', () => {
   it('a committed change that makes a chain of a ring fails, with the bridges and their lines in the JSON report', async () => {
-    const dir = newRepo({ [DESIGN]: gateFixture('ring-to-chain/base.net.yaml'), '.netbrace.yaml': gateFixture('policy.yaml') });
+    const dir = newRepo({
+      [DESIGN]: gateFixture('ring-to-chain/base.net.yaml'),
+      '.netbrace.yaml': gateFixture('policy.yaml'),
+    });
     const base = git(dir, 'rev-parse', 'HEAD');
     const head = commit(dir, { [DESIGN]: gateFixture('ring-to-chain/head.net.yaml') }, 'retire the orchard span');
     const r = await check(dir, 'check', '--head', 'HEAD', '--json', 'out/report.json');
@@ -110,13 +117,22 @@ describe('netbrace check in a git repository', () => {
     const r = await check(dir, 'check', '--base', 'main', '--head', 'HEAD', '--format', 'json');
     expect(r.code).toBe(0);
     const report = JSON.parse(r.out) as Report;
-    expect(report.files.map((f) => [f.path, f.status, f.previousPath])).toEqual([[DESIGN, 'renamed', 'old/metro.net.yaml']]);
+    expect(report.files.map((f) => [f.path, f.status, f.previousPath])).toEqual([
+      [DESIGN, 'renamed', 'old/metro.net.yaml'],
+    ]);
     for (const x of report.files[0].requirements) expect(x.delta).toBe(0);
   });
 
   it('a policy loosened by the change itself is reported and not applied', async () => {
-    const dir = newRepo({ [DESIGN]: gateFixture('ring-to-chain/base.net.yaml'), '.netbrace.yaml': gateFixture('policy.yaml') });
-    commit(dir, { [DESIGN]: gateFixture('ring-to-chain/head.net.yaml'), '.netbrace.yaml': 'requirements: []\n' }, 'sneaky');
+    const dir = newRepo({
+      [DESIGN]: gateFixture('ring-to-chain/base.net.yaml'),
+      '.netbrace.yaml': gateFixture('policy.yaml'),
+    });
+    commit(
+      dir,
+      { [DESIGN]: gateFixture('ring-to-chain/head.net.yaml'), '.netbrace.yaml': 'requirements: []\n' },
+      'sneaky',
+    );
     const r = await check(dir, 'check', '--head', 'HEAD', '--format', 'json');
     expect(r.code).toBe(1);
     expect((JSON.parse(r.out) as Report).policy.changed).toBe(true);
@@ -127,7 +143,20 @@ describe('netbrace check in a git repository', () => {
   it('inform mode reports the failure and exits 0; markdown goes to stdout; files are written', async () => {
     const dir = newRepo({ [DESIGN]: gateFixture('ring-to-chain/base.net.yaml') });
     put(dir, { [DESIGN]: gateFixture('ring-to-chain/head.net.yaml') });
-    const r = await check(dir, 'check', '--mode', 'inform', '--format', 'markdown', '--summary', 's.md', '--sarif', 'r.sarif', '--html', 'r.html');
+    const r = await check(
+      dir,
+      'check',
+      '--mode',
+      'inform',
+      '--format',
+      'markdown',
+      '--summary',
+      's.md',
+      '--sarif',
+      'r.sarif',
+      '--html',
+      'r.html',
+    );
     expect(r.code).toBe(0);
     expect(r.out).toContain('metro.net.yaml');
     expect(readFileSync(path.join(dir, 's.md'), 'utf8')).toBe(r.out);
@@ -144,7 +173,10 @@ describe('netbrace check in a git repository', () => {
   });
 
   it('a broken policy stops with file:line:col and exit 2 before anything is judged', async () => {
-    const dir = newRepo({ [DESIGN]: gateFixture('unchanged/base.net.yaml'), '.netbrace.yaml': 'requirements:\n  - kind: n-1\n    min: 2\n' });
+    const dir = newRepo({
+      [DESIGN]: gateFixture('unchanged/base.net.yaml'),
+      '.netbrace.yaml': 'requirements:\n  - kind: n-1\n    min: 2\n',
+    });
     put(dir, { [DESIGN]: gateFixture('ring-to-chain/head.net.yaml') });
     const r = await check(dir, 'check', '--json', 'never.json');
     expect(r.code).toBe(2);

@@ -30,7 +30,9 @@ describe('netbrace convert', () => {
       ['south', undefined, 46.85],
       ['west', 'West exchange', 47],
     ]);
-    expect(err).toBe('not kept by GML: demands (1 demand); risk group descriptions (1 group); the latency budget (1.5)\n');
+    expect(err).toBe(
+      'not kept by GML: demands (1 demand); risk group descriptions (1 group); the latency budget (1.5)\n',
+    );
   });
 
   it('--out writes the file (the format from its extension), estimates missing lengths and says so', async () => {
@@ -51,7 +53,9 @@ describe('netbrace convert', () => {
     writeFileSync(path.join(dir, 'kept.graphml'), 'mine');
     const refused = await run(ring, '--out', 'kept.graphml');
     expect(refused.code).toBe(2);
-    expect(refused.err).toBe('kept.graphml exists already; convert never overwrites a file — give another --out FILE, or add --force\n');
+    expect(refused.err).toBe(
+      'kept.graphml exists already; convert never overwrites a file — give another --out FILE, or add --force\n',
+    );
     expect(readFileSync(path.join(dir, 'kept.graphml'), 'utf8')).toBe('mine');
     expect((await run(ring, '--out', 'kept.graphml', '--force')).code).toBe(0);
     expect(parseDesign(readFileSync(path.join(dir, 'kept.graphml'), 'utf8'), 'kept.graphml').links).toHaveLength(5);
@@ -67,7 +71,10 @@ describe('netbrace convert', () => {
   });
 
   it('usage errors: no --to, an extension of another format, a design that cannot be read', async () => {
-    expect(await run(ring)).toMatchObject({ code: 2, err: 'convert needs --to FORMAT — give --to (yaml, json, graphml, gml, csv, geojson)\n' });
+    expect(await run(ring)).toMatchObject({
+      code: 2,
+      err: 'convert needs --to FORMAT — give --to (yaml, json, graphml, gml, csv, geojson)\n',
+    });
     expect(await run(ring, '--to', 'gml', '--out', 'x.graphml')).toMatchObject({
       code: 2,
       err: '--out x.graphml would be read as GraphML, not GML — give the file the extension of its format (.net.yaml, .net.json, .graphml, .gml, .csv, .geojson)\n',
@@ -75,7 +82,9 @@ describe('netbrace convert', () => {
     expect(await run(ring, '--to', 'dot')).toMatchObject({ code: 2 });
     const missing = await run('nope.gml', '--to', 'yaml');
     expect(missing.code).toBe(1);
-    expect(missing.err).toBe('nope.gml:1:1: no such file — check the path (it is read relative to the working directory)\n');
+    expect(missing.err).toBe(
+      'nope.gml:1:1: no such file — check the path (it is read relative to the working directory)\n',
+    );
   });
 
   it('--no-estimate leaves missing lengths missing', async () => {

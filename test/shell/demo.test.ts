@@ -81,9 +81,16 @@ describe('netbrace demo', () => {
     const f = reports.get('1-retire-east-chord')!.files[0];
     expect(f.path).toBe('designs/lunmere-backbone.net.yaml');
     const bridges = f.findings.filter((x) => x.rule === 'new-bridge').flatMap((x) => x.elements);
-    expect(bridges.map((e) => e.id).sort()).toEqual(['fenwhistle-orrowin', 'kaskeld-ibberlin', 'tarnquist-fenwhistle', 'tessaway-kaskeld']);
+    expect(bridges.map((e) => e.id).sort()).toEqual([
+      'fenwhistle-orrowin',
+      'kaskeld-ibberlin',
+      'tarnquist-fenwhistle',
+      'tessaway-kaskeld',
+    ]);
     // The demo policy blocks new bridges (fail) and only flags new cut sites (warn).
-    expect(new Set(f.findings.filter((x) => x.rule === 'new-bridge').map((x) => x.severity))).toEqual(new Set(['fail']));
+    expect(new Set(f.findings.filter((x) => x.rule === 'new-bridge').map((x) => x.severity))).toEqual(
+      new Set(['fail']),
+    );
     const head = headText('1-retire-east-chord').split('\n');
     for (const e of bridges) expect(head[e.line - 1], e.id).toBe(`  - id: ${e.id}`);
     expect(f.findings.some((x) => x.severity === 'fail')).toBe(true);
@@ -92,7 +99,9 @@ describe('netbrace demo', () => {
     const one = stdout.slice(stdout.indexOf('Change 1 of 3'), stdout.indexOf('Change 2 of 3'));
     expect(one).toContain('$ netbrace check --base main --head change/1-retire-east-chord --json');
     expect(one).toContain('\u25A0 netbrace blocks this merge: 1 design weakened');
-    expect(one).toMatch(/\u25A0 designs\/lunmere-backbone\.net\.yaml \u2014 weakened \u00b7 4 new bridges, 4 new cut nodes/);
+    expect(one).toMatch(
+      /\u25A0 designs\/lunmere-backbone\.net\.yaml \u2014 weakened \u00b7 4 new bridges, 4 new cut nodes/,
+    );
     expect(one).toContain('\u25A0 new bridge (line 298): Link tessaway-kaskeld (line 298) is a new bridge');
     expect(one).toContain('weakest removal sequences:');
     expect(one.replace(/\s+/g, ' ')).toContain(`Caution: ${CAUTION}`);
@@ -101,7 +110,9 @@ describe('netbrace demo', () => {
   it('change 2 passes with a positive delta and no bridge left', () => {
     const f = reports.get('2-close-west-ring')!.files[0];
     expect(f.status).toBe('holds');
-    const deltas = f.requirements.filter((r) => !r.id.startsWith('no-new-spof') && r.delta !== null).map((r) => r.delta!);
+    const deltas = f.requirements
+      .filter((r) => !r.id.startsWith('no-new-spof') && r.delta !== null)
+      .map((r) => r.delta!);
     expect(deltas.length).toBeGreaterThan(0);
     expect(deltas.some((d) => d > 0)).toBe(true);
     expect(f.head!.structure.bridges).toEqual([]);
@@ -116,12 +127,18 @@ describe('netbrace demo', () => {
 
   it('prints for change 1 exactly the terminal lines the README shows', () => {
     const readme = readFileSync(path.join(repoRoot, 'README.md'), 'utf8');
-    const start = readme.indexOf('here for the demo\'s first change');
+    const start = readme.indexOf("here for the demo's first change");
     const open = readme.indexOf('```text\n', start) + '```text\n'.length;
-    const shown = readme.slice(open, readme.indexOf('  ```', open)).split('\n').map((l) => l.replace(/^ {2}/, ''));
+    const shown = readme
+      .slice(open, readme.indexOf('  ```', open))
+      .split('\n')
+      .map((l) => l.replace(/^ {2}/, ''));
     const text = readFileSync(path.join(out, '1-retire-east-chord.txt'), 'utf8');
     // The README leaves parts out with a line "…": each run of lines between them is printed as it stands.
-    const runs = shown.join('\n').split(/\n\s*\u2026\n/).map((r) => r.replace(/\n+$/, ''));
+    const runs = shown
+      .join('\n')
+      .split(/\n\s*\u2026\n/)
+      .map((r) => r.replace(/\n+$/, ''));
     expect(runs.length).toBeGreaterThan(2);
     expect(text.startsWith(runs[0])).toBe(true);
     for (const r of runs) expect(text).toContain(r);
@@ -148,7 +165,9 @@ describe('netbrace demo', () => {
     expect(at('**What weakened**')).toBeGreaterThan(0);
     expect(at('Link `tessaway-kaskeld` (line 298) is a new bridge')).toBeGreaterThan(at('**What weakened**'));
     expect(at('**How much**')).toBeGreaterThan(at('Link `tessaway-kaskeld` (line 298) is a new bridge'));
-    expect(first).toContain('- \u25A0 weakened \u00b7 R at 10 % sites removed (q10) 0.464 \u2192 0.450 (\u22120.013 \u00b1 0.005), floor 0.42, allowed drop 0.010\n');
+    expect(first).toContain(
+      '- \u25A0 weakened \u00b7 R at 10 % sites removed (q10) 0.464 \u2192 0.450 (\u22120.013 \u00b1 0.005), floor 0.42, allowed drop 0.010\n',
+    );
     expect(at('<details>')).toBeGreaterThan(at('**How much**'));
   });
 
@@ -156,7 +175,10 @@ describe('netbrace demo', () => {
     for (const c of DEMO_CHANGES) {
       const md = readFileSync(path.join(out, `${c.id}.summary.md`), 'utf8');
       expect(md.length).toBeGreaterThan(200);
-      const sarif = JSON.parse(readFileSync(path.join(out, `${c.id}.sarif`), 'utf8')) as { version: string; runs: unknown[] };
+      const sarif = JSON.parse(readFileSync(path.join(out, `${c.id}.sarif`), 'utf8')) as {
+        version: string;
+        runs: unknown[];
+      };
       expect(sarif.version).toBe('2.1.0');
       const html = readFileSync(path.join(out, `${c.id}.html`), 'utf8');
       expect(html).toContain('<svg');
@@ -173,7 +195,10 @@ function headText(change: string): string {
   const dir = mkdtempSync(path.join(tmpdir(), 'nb-demo-head-'));
   try {
     mkdirSync(path.join(dir, 'designs'));
-    copyFileSync(path.join(repoRoot, 'fixtures', 'demo', 'base', 'designs', 'lunmere-backbone.net.yaml'), path.join(dir, 'designs', 'lunmere-backbone.net.yaml'));
+    copyFileSync(
+      path.join(repoRoot, 'fixtures', 'demo', 'base', 'designs', 'lunmere-backbone.net.yaml'),
+      path.join(dir, 'designs', 'lunmere-backbone.net.yaml'),
+    );
     execFileSync('git', ['apply', path.join(repoRoot, 'fixtures', 'demo', 'changes', `${change}.patch`)], { cwd: dir });
     return readFileSync(path.join(dir, 'designs', 'lunmere-backbone.net.yaml'), 'utf8');
   } finally {

@@ -56,32 +56,55 @@ describe('netbrace explain', () => {
   it('names the west chain first, with lines, and the sites each loss cuts off', async () => {
     const x = await explainJson([]);
     const [first] = x.elements;
-    expect(first).toMatchObject({ kind: 'node', id: 'yarlsquay', label: 'Yarlsquay', cutsOff: ['wendlequist', 'mirrowath', 'culvenbrae'], singlePointOfFailure: true });
+    expect(first).toMatchObject({
+      kind: 'node',
+      id: 'yarlsquay',
+      label: 'Yarlsquay',
+      cutsOff: ['wendlequist', 'mirrowath', 'culvenbrae'],
+      singlePointOfFailure: true,
+    });
     const text = readFileSync(path.join(BASE, FILE), 'utf8').split('\n');
     for (const e of x.elements) {
       // sites, links and groups alike: the line is the one their list entry starts on
       expect(text[e.line - 1], `${e.kind} ${e.id}`).toBe(`  - id: ${e.id}`);
     }
     const bridge = x.elements.find((e) => e.id === 'yarlsquay-wendlequist')!;
-    expect(bridge).toMatchObject({ kind: 'link', singlePointOfFailure: true, cutsOff: ['wendlequist', 'mirrowath', 'culvenbrae'] });
+    expect(bridge).toMatchObject({
+      kind: 'link',
+      singlePointOfFailure: true,
+      cutsOff: ['wendlequist', 'mirrowath', 'culvenbrae'],
+    });
   });
 
   it('agrees with the envelope engine\u2019s N\u22121 contingency on the worst cases', () => {
     const t = parseDesign(readFileSync(path.join(BASE, FILE), 'utf8'), FILE);
     const g = compileTopology(t);
-    const spec = { metrics: [{ id: 'pair_connectivity' as const, weight: 1 }, { id: 'efficiency' as const, weight: 1 }], combine: 'mean' as const };
+    const spec = {
+      metrics: [
+        { id: 'pair_connectivity' as const, weight: 1 },
+        { id: 'efficiency' as const, weight: 1 },
+      ],
+      combine: 'mean' as const,
+    };
     const rfn = createRValue(g, spec);
     for (const kind of ['node', 'link'] as const) {
       const c = evaluateContingency(g, kind, 1, rfn, Number.MAX_SAFE_INTEGER);
       const mine = rankSingleLosses(g, rfn, [kind]).ranked;
       expect(mine[0].r).toBe(c.min);
-      expect(mine.slice(0, c.worst.length).map((e) => [e.id, e.r])).toEqual(c.worst.map((w) => [w.elements[0], w.value]));
+      expect(mine.slice(0, c.worst.length).map((e) => [e.id, e.r])).toEqual(
+        c.worst.map((w) => [w.elements[0], w.value]),
+      );
     }
   });
 
   it('ranks a path by hand: the middle node of P5 hurts most under largest_component', () => {
     // P5, remove node 2: components {0,1} and {3,4}, LCC/N0 = 2/5 (hand check)
-    const g = graphFromEdges(5, [[0, 1], [1, 2], [2, 3], [3, 4]]);
+    const g = graphFromEdges(5, [
+      [0, 1],
+      [1, 2],
+      [2, 3],
+      [3, 4],
+    ]);
     const rfn = createRValue(g, { metrics: [{ id: 'largest_component', weight: 1 }], combine: 'mean' });
     const res = rankSingleLosses(g, rfn, ['node']);
     expect(res.intact).toBe(1);
@@ -97,7 +120,9 @@ describe('netbrace explain', () => {
     const text = io.out.join('');
     const lines = text.split('\n');
     const header = lines.findIndex((l) => l.includes('R left'));
-    expect(lines[header + 1]).toMatch(/^\s+1\s+link\s+yarlsquay-wendlequist\s+538\s+0\.6042\s+\u22120\.0717\s+3 sites: wendlequist, mirrowath, culvenbrae$/);
+    expect(lines[header + 1]).toMatch(
+      /^\s+1\s+link\s+yarlsquay-wendlequist\s+538\s+0\.6042\s+\u22120\.0717\s+3 sites: wendlequist, mirrowath, culvenbrae$/,
+    );
     expect(lines[header + 4]).toMatch(/\u2026 79 more \(--top N shows more\)/);
     expect(text.replace(/\n/g, ' ')).toContain(`Caution: ${CAUTION}`);
     expect(text).toContain('R = weighted mean of pair_connectivity 1, efficiency 1 (from --metric (equal weights))');
@@ -139,8 +164,13 @@ describe('netbrace explain', () => {
   });
 
   it('carries labels for sites only when they differ from the id', () => {
-    const t = parseDesign('nodes:\n  - {id: a, label: Alpha}\n  - {id: b}\nlinks:\n  - {between: [a, b]}\n', 'x.net.yaml');
-    const x = explainDesign(t, { metrics: [{ id: 'largest_component', weight: 1 }], combine: 'mean' }, 'test', ['node']);
+    const t = parseDesign(
+      'nodes:\n  - {id: a, label: Alpha}\n  - {id: b}\nlinks:\n  - {between: [a, b]}\n',
+      'x.net.yaml',
+    );
+    const x = explainDesign(t, { metrics: [{ id: 'largest_component', weight: 1 }], combine: 'mean' }, 'test', [
+      'node',
+    ]);
     expect(x.elements.map((e) => [e.id, e.label])).toEqual([
       ['a', 'Alpha'],
       ['b', undefined],

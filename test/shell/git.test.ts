@@ -6,7 +6,17 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { GitError, UsageError } from '../../src/errors.js';
-import { checkRef, ensureCommit, gitDeps, hasCommit, listChanged, listFiles, parseNameStatus, revParse, showFile } from '../../src/shell/git.js';
+import {
+  checkRef,
+  ensureCommit,
+  gitDeps,
+  hasCommit,
+  listChanged,
+  listFiles,
+  parseNameStatus,
+  revParse,
+  showFile,
+} from '../../src/shell/git.js';
 
 const scratch: string[] = [];
 afterAll(() => {
@@ -25,14 +35,18 @@ function repo(): string {
   return dir;
 }
 
-const RING = 'graph [\n  node [ id 1 ]\n  node [ id 2 ]\n  node [ id 3 ]\n  edge [ source 1 target 2 ]\n  edge [ source 2 target 3 ]\n  edge [ source 3 target 1 ]\n]\n';
+const RING =
+  'graph [\n  node [ id 1 ]\n  node [ id 2 ]\n  node [ id 3 ]\n  edge [ source 1 target 2 ]\n  edge [ source 2 target 3 ]\n  edge [ source 3 target 1 ]\n]\n';
 
 describe('git', () => {
   it('lists changes with renames, odd names and the untracked files of the working tree', async () => {
     const dir = repo();
     mkdirSync(path.join(dir, 'net'));
     writeFileSync(path.join(dir, 'net', 'old name.gml'), RING);
-    writeFileSync(path.join(dir, 'net', 'gone.gml'), RING.replace('id 3', 'id 4').replace(/target 3|source 3/g, (m) => m.replace('3', '4')));
+    writeFileSync(
+      path.join(dir, 'net', 'gone.gml'),
+      RING.replace('id 3', 'id 4').replace(/target 3|source 3/g, (m) => m.replace('3', '4')),
+    );
     writeFileSync(path.join(dir, 'net', 'edit.gml'), RING);
     git(dir, 'add', '-A');
     git(dir, 'commit', '-q', '-m', 'base');

@@ -1,5 +1,12 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { createClient, findComment, httpSettingsFromEnv, isPermissionError, listPullRequestFiles, upsertComment } from '../../src/shell/github.js';
+import {
+  createClient,
+  findComment,
+  httpSettingsFromEnv,
+  isPermissionError,
+  listPullRequestFiles,
+  upsertComment,
+} from '../../src/shell/github.js';
 import { startFakeApi, type FakeApi } from '../action/fake-api.js';
 
 const ref = { owner: 'acme', repo: 'net', issueNumber: 7 };
@@ -8,7 +15,15 @@ let api: FakeApi;
 const logs: string[] = [];
 
 const client = (over: Partial<Parameters<typeof createClient>[0]> = {}) =>
-  createClient({ token: 't0k', baseUrl: api.url, retries: 2, backoffMs: 10, timeoutMs: 300, log: (m) => logs.push(m), ...over });
+  createClient({
+    token: 't0k',
+    baseUrl: api.url,
+    retries: 2,
+    backoffMs: 10,
+    timeoutMs: 300,
+    log: (m) => logs.push(m),
+    ...over,
+  });
 
 beforeEach(async () => {
   api = await startFakeApi();
@@ -57,7 +72,11 @@ describe('the living comment', () => {
 
   it('with a personal token, adopts the comment of the user GET /user names', async () => {
     api.tokenUser = 'planner-bot';
-    api.comments.push({ id: 1, body: `${marker}\nby the workflow token`, user: { login: 'github-actions[bot]', type: 'Bot' } });
+    api.comments.push({
+      id: 1,
+      body: `${marker}\nby the workflow token`,
+      user: { login: 'github-actions[bot]', type: 'Bot' },
+    });
     api.comments.push({ id: 2, body: `${marker}\nours`, user: { login: 'planner-bot', type: 'User' } });
     expect((await findComment(client(), ref, marker))?.id).toBe(2);
   });
@@ -120,7 +139,13 @@ describe('reliability', () => {
   });
 
   it('reads its test knobs from the environment', () => {
-    expect(httpSettingsFromEnv({ NETBRACE_HTTP_RETRIES: '1', NETBRACE_HTTP_BACKOFF_MS: '5', NETBRACE_HTTP_TIMEOUT_MS: '250' })).toEqual({ retries: 1, backoffMs: 5, timeoutMs: 250 });
+    expect(
+      httpSettingsFromEnv({
+        NETBRACE_HTTP_RETRIES: '1',
+        NETBRACE_HTTP_BACKOFF_MS: '5',
+        NETBRACE_HTTP_TIMEOUT_MS: '250',
+      }),
+    ).toEqual({ retries: 1, backoffMs: 5, timeoutMs: 250 });
     expect(httpSettingsFromEnv({ NETBRACE_HTTP_RETRIES: 'lots' })).toEqual({});
   });
 });

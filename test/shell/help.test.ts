@@ -8,7 +8,8 @@ describe('help', () => {
     const io = recordIO('.');
     expect(await main(['--help'], io)).toBe(0);
     const text = io.out.join('');
-    for (const c of commands) expect(text).toMatch(new RegExp(`^  ${c.name}\\s+${c.summary.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`, 'm'));
+    for (const c of commands)
+      expect(text).toMatch(new RegExp(`^  ${c.name}\\s+${c.summary.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`, 'm'));
     expect(text).toContain('Examples:');
     expect(text).toMatch(/Exit codes:\n {2}0 .*\n {2}1 .*\n {2}2 /);
     expect(text).toContain('does\nnot replace engineering studies');

@@ -52,9 +52,14 @@ describe('netbrace init --workflow', () => {
     const step = job.steps.find((s) => s.uses?.includes('/netbrace@'))!;
     expect(step.uses).toBe(`acme/netbrace@${SHA}`);
     expect(step.with).toMatchObject({ mode: 'block' });
-    const declared = Object.keys((parseYaml(readFileSync(path.join(repoRoot, 'action.yml'), 'utf8')) as { inputs: Record<string, unknown> }).inputs);
+    const declared = Object.keys(
+      (parseYaml(readFileSync(path.join(repoRoot, 'action.yml'), 'utf8')) as { inputs: Record<string, unknown> })
+        .inputs,
+    );
     for (const k of Object.keys(step.with ?? {})) expect(declared).toContain(k);
-    expect(readFileSync(path.join(dir, '.github/CODEOWNERS'), 'utf8')).toContain('/.netbrace.yaml @acme/planning\n/.github/workflows/netbrace.yml @acme/planning\n');
+    expect(readFileSync(path.join(dir, '.github/CODEOWNERS'), 'utf8')).toContain(
+      '/.netbrace.yaml @acme/planning\n/.github/workflows/netbrace.yml @acme/planning\n',
+    );
     expect(r.out).toContain('Require status checks to pass');
     expect(r.out).toContain('"netbrace"');
   });

@@ -66,7 +66,9 @@ describe('netbrace inspect', () => {
       isolated: ['f'],
       degree: { min: 0, mean: 1.667, max: 3 },
     });
-    expect(out.warnings).toEqual([{ line: 14, column: 5, message: 'self-loop on node "e" dropped', hint: expect.any(String) }]);
+    expect(out.warnings).toEqual([
+      { line: 14, column: 5, message: 'self-loop on node "e" dropped', hint: expect.any(String) },
+    ]);
   });
 
   it('prints a readable summary with the caution note', async () => {
@@ -81,17 +83,36 @@ describe('netbrace inspect', () => {
     for (const f of ['ring.net.yaml', 'ring.net.json', 'ring.gml', 'ring.graphml', 'ring.csv']) {
       const { code, stdout } = await run('inspect', '--json', `fixtures/designs/${f}`);
       expect(code, f).toBe(0);
-      expect(JSON.parse(stdout), f).toMatchObject({ nodes: 4, links: 5, parallel_links: 2, components: 1, bridges: [], cut_nodes: [] });
+      expect(JSON.parse(stdout), f).toMatchObject({
+        nodes: 4,
+        links: 5,
+        parallel_links: 2,
+        components: 1,
+        bridges: [],
+        cut_nodes: [],
+      });
     }
   });
 
   it('several files: a bad one is reported and does not stop the others; exit 1', async () => {
     const bad = write('bad.gml', 'graph [\n  node [ id 1 ]\n');
-    const { code, stdout, stderr } = await run('inspect', '--json', 'fixtures/designs/ring.csv', bad, 'no/such.gml', 'fixtures/designs/ring.gml');
+    const { code, stdout, stderr } = await run(
+      'inspect',
+      '--json',
+      'fixtures/designs/ring.csv',
+      bad,
+      'no/such.gml',
+      'fixtures/designs/ring.gml',
+    );
     expect(code).toBe(1);
     const out = JSON.parse(stdout);
-    expect(out.files.map((f: { nodes?: number; error?: { line: number } }) => f.nodes ?? `error@${f.error?.line}`)).toEqual([4, 'error@1', 'error@0', 4]);
-    expect(out.files[1].error).toMatchObject({ kind: 'design', message: 'unclosed "[": the list is never closed with "]"' });
+    expect(
+      out.files.map((f: { nodes?: number; error?: { line: number } }) => f.nodes ?? `error@${f.error?.line}`),
+    ).toEqual([4, 'error@1', 'error@0', 4]);
+    expect(out.files[1].error).toMatchObject({
+      kind: 'design',
+      message: 'unclosed "[": the list is never closed with "]"',
+    });
     expect(stderr).toBe(
       `${bad}:1:7: unclosed "[": the list is never closed with "]" — add the missing "]" (check the brackets above the end of the file)\n` +
         'no/such.gml:1:1: no such file — check the path (it is read relative to the working directory)\n',
@@ -100,10 +121,15 @@ describe('netbrace inspect', () => {
 
   it('--format forces a reader; --max-bytes refuses a large file before reading it', async () => {
     const txt = write('links.txt', 'source,target\nx,y\n');
-    expect(JSON.parse((await run('inspect', '--json', '--format', 'csv', txt)).stdout)).toMatchObject({ format: 'csv', nodes: 2 });
+    expect(JSON.parse((await run('inspect', '--json', '--format', 'csv', txt)).stdout)).toMatchObject({
+      format: 'csv',
+      nodes: 2,
+    });
     const big = await run('inspect', '--max-bytes', '10', txt);
     expect(big.code).toBe(1);
-    expect(big.stderr).toBe(`${txt}:1:1: the design file is larger than the limit (18 bytes > 10) — raise the limit (for the CLI: --max-bytes) if a file this large is intended\n`);
+    expect(big.stderr).toBe(
+      `${txt}:1:1: the design file is larger than the limit (18 bytes > 10) — raise the limit (for the CLI: --max-bytes) if a file this large is intended\n`,
+    );
   });
 
   it('the default 20 MB limit refuses a larger file from its size alone', async () => {
@@ -116,7 +142,9 @@ describe('netbrace inspect', () => {
 
   it('usage errors exit 2', async () => {
     expect((await run('inspect')).code).toBe(2);
-    expect((await run('inspect', '--format', 'dot', 'x.gml')).stderr).toBe('unknown design format "dot" — use one of yaml, json, graphml, gml, csv, geojson\n');
+    expect((await run('inspect', '--format', 'dot', 'x.gml')).stderr).toBe(
+      'unknown design format "dot" — use one of yaml, json, graphml, gml, csv, geojson\n',
+    );
     expect((await run('inspect', '--max-bytes', 'lots', 'x.gml')).code).toBe(2);
     expect((await run('inspect', '--colour', 'x.gml')).code).toBe(2);
   });

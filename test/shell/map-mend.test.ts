@@ -27,12 +27,19 @@ function folder(files: Record<string, string>): string {
 }
 
 function git(cwd: string, ...args: string[]): string {
-  return execFileSync('git', args, { cwd, encoding: 'utf8', env: { ...process.env, GIT_AUTHOR_DATE: '2001-01-01T00:00:00Z', GIT_COMMITTER_DATE: '2001-01-01T00:00:00Z' } }).trim();
+  return execFileSync('git', args, {
+    cwd,
+    encoding: 'utf8',
+    env: { ...process.env, GIT_AUTHOR_DATE: '2001-01-01T00:00:00Z', GIT_COMMITTER_DATE: '2001-01-01T00:00:00Z' },
+  }).trim();
 }
 
 /** A repository whose main holds the ring; the working tree holds the chain (one span retired). */
 function ringRepo(): string {
-  const dir = folder({ '.netbrace.yaml': gateFixture('policy.yaml'), 'net/metro.net.yaml': gateFixture('ring-to-chain/base.net.yaml') });
+  const dir = folder({
+    '.netbrace.yaml': gateFixture('policy.yaml'),
+    'net/metro.net.yaml': gateFixture('ring-to-chain/base.net.yaml'),
+  });
   git(dir, 'init', '-q', '-b', 'main');
   git(dir, 'config', 'user.email', 'planner@example.invalid');
   git(dir, 'config', 'user.name', 'Planner');
@@ -55,7 +62,9 @@ describe('netbrace map', () => {
     expect(a.code, a.err).toBe(0);
     expect(a.out).toContain('map of ring.net.yaml: 6 sites, 6 links (force-directed layout); written to out/a.svg');
     const svg = readFileSync(path.join(dir, 'out/a.svg'), 'utf8');
-    expect(svg.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
+    expect(svg.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg xmlns="http://www.w3.org/2000/svg"')).toBe(
+      true,
+    );
     expect(svg).not.toMatch(/<script/i);
     expect((await cli(dir, 'map', 'ring.net.yaml', '--svg', 'b.svg', '--threads', '2')).code).toBe(0);
     expect(readFileSync(path.join(dir, 'b.svg'), 'utf8')).toBe(svg);
@@ -80,7 +89,9 @@ describe('netbrace map', () => {
     expect((await cli(dir, 'map', 'bad.net.yaml')).err).toContain('map needs --svg OUT');
     expect((await cli(dir, 'map', '--svg', 'x.svg')).code).toBe(2);
     expect((await cli(dir, 'map', 'a', 'b', '--svg', 'x.svg')).code).toBe(2);
-    expect((await cli(dir, 'map', 'bad.net.yaml', '--svg', 'x.svg', '--base', 'main')).err).toContain('--base needs a git repository');
+    expect((await cli(dir, 'map', 'bad.net.yaml', '--svg', 'x.svg', '--base', 'main')).err).toContain(
+      '--base needs a git repository',
+    );
   });
 });
 
@@ -93,11 +104,15 @@ describe('netbrace mend', () => {
     expect(r.out).toMatch(/1\. add 1 link — holds/);
     const json = await cli(dir, 'mend', 'net/metro.net.yaml', '--json');
     const m = JSON.parse(json.out);
-    expect(m.suggestions[0].links.map((l: { between: string[] }) => [...l.between].sort())).toEqual([['harbour', 'orchard']]);
+    expect(m.suggestions[0].links.map((l: { between: string[] }) => [...l.between].sort())).toEqual([
+      ['harbour', 'orchard'],
+    ]);
     const applied = await cli(dir, 'mend', 'net/metro.net.yaml', '--apply', '1', '--out', 'net/mended.net.yaml');
     expect(applied.code).toBe(0);
     const text = readFileSync(path.join(dir, 'net/mended.net.yaml'), 'utf8');
-    expect(text).toContain(`  - id: ${m.suggestions[0].links[0].id}\n    between: [${m.suggestions[0].links[0].between.join(', ')}]\n`);
+    expect(text).toContain(
+      `  - id: ${m.suggestions[0].links[0].id}\n    between: [${m.suggestions[0].links[0].between.join(', ')}]\n`,
+    );
     // The original stays as it was; the mended copy holds against the ring.
     expect(readFileSync(path.join(dir, 'net/metro.net.yaml'), 'utf8')).toBe(gateFixture('ring-to-chain/head.net.yaml'));
     writeFileSync(path.join(dir, 'net/metro.net.yaml'), text);
@@ -105,14 +120,19 @@ describe('netbrace mend', () => {
   });
 
   it('says there is nothing to mend for a design that holds (exit 0), and refuses what it cannot do (exit 2)', async () => {
-    const dir = folder({ 'ring.net.yaml': gateFixture('ring-to-chain/base.net.yaml'), 'chain.csv': 'source,target\na,b\nb,c\n' });
+    const dir = folder({
+      'ring.net.yaml': gateFixture('ring-to-chain/base.net.yaml'),
+      'chain.csv': 'source,target\na,b\nb,c\n',
+    });
     const ok = await cli(dir, 'mend', 'ring.net.yaml');
     expect(ok.code).toBe(0);
     expect(ok.out).toContain('Nothing to mend');
     const none = await cli(dir, 'mend', 'ring.net.yaml', '--apply', '1', '--out', 'x.net.yaml');
     expect(none.code).toBe(2);
     expect(none.err).toContain('there is no suggestion 1');
-    expect((await cli(dir, 'mend', 'ring.net.yaml', '--apply', '1')).err).toContain('--apply N and --out FILE go together');
+    expect((await cli(dir, 'mend', 'ring.net.yaml', '--apply', '1')).err).toContain(
+      '--apply N and --out FILE go together',
+    );
     expect((await cli(dir, 'mend')).code).toBe(2);
   });
 });

@@ -35,7 +35,10 @@ function circleDesign(): string {
   const lines = ['network:', '  name: Invented circle', 'nodes:'];
   for (let i = 0; i < 10; i++) {
     const a = (2 * Math.PI * i) / 10;
-    lines.push(`  - id: s${i}`, `    site: {lat: ${(46 + 1.5 * Math.cos(a)).toFixed(4)}, lon: ${(8 + 2.2 * Math.sin(a)).toFixed(4)}}`);
+    lines.push(
+      `  - id: s${i}`,
+      `    site: {lat: ${(46 + 1.5 * Math.cos(a)).toFixed(4)}, lon: ${(8 + 2.2 * Math.sin(a)).toFixed(4)}}`,
+    );
   }
   lines.push('  - id: spur', '    site: {lat: 46.1, lon: 8.1}', 'links:');
   for (let i = 0; i < 10; i++) lines.push(`  - between: [s${i}, s${(i + 1) % 10}]`);
@@ -102,13 +105,22 @@ describe('explain and envelope under the repository policy', () => {
 
   it('the gate used R = efficiency, so there is something to agree with', () => {
     expect(gateHead().r).toEqual({ metrics: [{ id: 'efficiency', weight: 1 }], combine: 'mean' });
-    expect(gateHead().envelopes.map((e) => e.challenge).sort()).toEqual(['random-nodes', 'regional']);
+    expect(
+      gateHead()
+        .envelopes.map((e) => e.challenge)
+        .sort(),
+    ).toEqual(['random-nodes', 'regional']);
   });
 
   it('explain, run from a subfolder, takes R from the repository policy: its N−1 link values are the gate\u2019s', async () => {
     const r = await run(sub(), 'explain', 'circle.net.yaml', '--kind', 'link', '--json');
     expect(r.code, r.err).toBe(0);
-    const x = JSON.parse(r.out) as { r: unknown; rSource: string; intact: number; elements: { id: string; r: number }[] };
+    const x = JSON.parse(r.out) as {
+      r: unknown;
+      rSource: string;
+      intact: number;
+      elements: { id: string; r: number }[];
+    };
     expect(x.r).toEqual(gateHead().r);
     expect(x.rSource).toBe('policy .netbrace.yaml');
     const n1 = gateHead().contingencies.find((c) => c.challenge === 'n-1' && c.kind === 'link')!;
@@ -124,7 +136,16 @@ describe('explain and envelope under the repository policy', () => {
   });
 
   it('envelope --challenge node-failures (the policy\u2019s name) gives the gate\u2019s envelope: grid, seed, R, values', async () => {
-    const r = await run(sub(), 'envelope', 'circle.net.yaml', '--challenge', 'node-failures', '--json', '--threads', '1');
+    const r = await run(
+      sub(),
+      'envelope',
+      'circle.net.yaml',
+      '--challenge',
+      'node-failures',
+      '--json',
+      '--threads',
+      '1',
+    );
     expect(r.code, r.err).toBe(0);
     const j = JSON.parse(r.out);
     const env = gateHead().envelopes.find((e) => e.challenge === 'random-nodes')!;
@@ -135,7 +156,20 @@ describe('explain and envelope under the repository policy', () => {
     expect((j.median as number[]).map(sig)).toEqual(env.median);
     expect(sig(j.area)).toBe(env.area);
     // --metric still wins over the policy
-    const lc = JSON.parse((await run(sub(), 'envelope', 'circle.net.yaml', '--challenge', 'node-failures', '--metric', 'largest_component', '--json')).out);
+    const lc = JSON.parse(
+      (
+        await run(
+          sub(),
+          'envelope',
+          'circle.net.yaml',
+          '--challenge',
+          'node-failures',
+          '--metric',
+          'largest_component',
+          '--json',
+        )
+      ).out,
+    );
     expect(lc.r.metrics).toEqual([{ id: 'largest_component', weight: 1 }]);
   });
 
@@ -149,7 +183,9 @@ describe('explain and envelope under the repository policy', () => {
     // quarter of the widest site distance, which differs here).
     const g = compileTopology(parseDesign(circleDesign(), 'circle.net.yaml'));
     expect(defaultRegionalUntil(g)).not.toBe(REGIONAL_UNTIL_KM);
-    const plain = JSON.parse((await run(sub(), 'envelope', 'circle.net.yaml', '--challenge', 'regional', '--json')).out);
+    const plain = JSON.parse(
+      (await run(sub(), 'envelope', 'circle.net.yaml', '--challenge', 'regional', '--json')).out,
+    );
     expect(plain.x[plain.x.length - 1]).toBe(REGIONAL_UNTIL_KM);
   });
 
@@ -158,8 +194,19 @@ describe('explain and envelope under the repository policy', () => {
     const r = await run(sub(), 'explain', 'circle.net.yaml', '--policy', 'lc.yaml', '--json', '--kind', 'node');
     expect(JSON.parse(r.out).rSource).toBe('policy networks/lc.yaml');
     expect(JSON.parse(r.out).r.metrics).toEqual([{ id: 'largest_component', weight: 1 }]);
-    const missing = await run(sub(), 'envelope', 'circle.net.yaml', '--challenge', 'node-failures', '--policy', 'nope.yaml');
-    expect([missing.code, missing.err]).toEqual([2, 'policy file nope.yaml not found — give a path relative to the working directory\n']);
+    const missing = await run(
+      sub(),
+      'envelope',
+      'circle.net.yaml',
+      '--challenge',
+      'node-failures',
+      '--policy',
+      'nope.yaml',
+    );
+    expect([missing.code, missing.err]).toEqual([
+      2,
+      'policy file nope.yaml not found — give a path relative to the working directory\n',
+    ]);
     const unknown = await run(sub(), 'envelope', 'circle.net.yaml', '--challenge', 'node-failure');
     expect(unknown.code).toBe(2);
     expect(unknown.err).toContain('one of: node-failures, quake, random-nodes');
@@ -169,7 +216,7 @@ describe('explain and envelope under the repository policy', () => {
 /** Invented, seeded: a ring of `n` sites with chords, and a spur of three sites off site 0. */
 function bigDesign(n: number): string {
   let s = 12345;
-  const rnd = () => ((s = (Math.imul(s, 1103515245) + 12345) >>> 0) / 2 ** 32);
+  const rnd = () => (s = (Math.imul(s, 1103515245) + 12345) >>> 0) / 2 ** 32;
   const lines = ['nodes:'];
   for (let i = 0; i < n; i++) lines.push(`  - id: n${i}`);
   lines.push('  - id: spur1', '  - id: spur2', '  - id: spur3', 'links:');
@@ -192,7 +239,13 @@ describe('explain under a work budget', () => {
     const dir = newRepo({ '.netbrace.yaml': `budget:\n  work: ${budget}\n`, 'big.net.yaml': text });
     // What the whole ranking would need under the built-in R, by the engine's estimate.
     const g = compileTopology(parseDesign(text, 'big.net.yaml'));
-    const rSpec = { metrics: [{ id: 'pair_connectivity' as const, weight: 1 }, { id: 'efficiency' as const, weight: 1 }], combine: 'mean' as const };
+    const rSpec = {
+      metrics: [
+        { id: 'pair_connectivity' as const, weight: 1 },
+        { id: 'efficiency' as const, weight: 1 },
+      ],
+      combine: 'mean' as const,
+    };
     const cases = g.n + g.m;
     const need = (cases + 1) * (rCost(g, rSpec, survivorShape(g)) + passCost(g));
     expect(need).toBeGreaterThan(20 * budget);
@@ -213,16 +266,29 @@ describe('explain under a work budget', () => {
     expect(cuts.bridges.length).toBe(3);
 
     const shown = await run(dir, 'explain', 'big.net.yaml');
-    expect(shown.out.replace(/\s+/g, ' ')).toContain(`reduced: ${x.reduced.evaluated} of ${cases} single losses evaluated within the work budget (100000 element visits`);
+    expect(shown.out.replace(/\s+/g, ' ')).toContain(
+      `reduced: ${x.reduced.evaluated} of ${cases} single losses evaluated within the work budget (100000 element visits`,
+    );
   });
 
   it('--max-work raises it: everything ranked, nothing said', async () => {
     const dir = newRepo({ '.netbrace.yaml': `budget:\n  work: ${budget}\n`, 'big.net.yaml': text });
-    const r = await run(dir, 'explain', 'big.net.yaml', '--json', '--max-work', '1e12', '--metric', 'largest_component');
+    const r = await run(
+      dir,
+      'explain',
+      'big.net.yaml',
+      '--json',
+      '--max-work',
+      '1e12',
+      '--metric',
+      'largest_component',
+    );
     const x = JSON.parse(r.out);
     expect(x.reduced).toBeUndefined();
     expect(x.elements).toHaveLength(N + 3 + N + Math.floor(N / 2) + 3);
-    const small = JSON.parse((await run(dir, 'explain', 'big.net.yaml', '--json', '--max-work', '5e4', '--metric', 'largest_component')).out);
+    const small = JSON.parse(
+      (await run(dir, 'explain', 'big.net.yaml', '--json', '--max-work', '5e4', '--metric', 'largest_component')).out,
+    );
     expect(small.reduced.maxWork).toBe(5e4);
     expect((await run(dir, 'explain', 'big.net.yaml', '--max-work', '0')).code).toBe(2);
   });

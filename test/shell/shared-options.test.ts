@@ -36,7 +36,9 @@ describe('the options the CLI and the Action share', () => {
       for (const text of texts) {
         const cli = viaCli(name, option, text) as { ok?: unknown; refused?: string };
         const action = viaAction(name, text) as { ok?: unknown; refused?: string };
-        expect('ok' in action, `${name} "${text}": CLI ${JSON.stringify(cli)}, Action ${JSON.stringify(action)}`).toBe('ok' in cli);
+        expect('ok' in action, `${name} "${text}": CLI ${JSON.stringify(cli)}, Action ${JSON.stringify(action)}`).toBe(
+          'ok' in cli,
+        );
         if ('ok' in cli) expect(action.ok).toEqual(cli.ok);
         else {
           expect(cli.refused).toContain(`--${name} must be ${option.expected}, not "${text}"`);

@@ -9,15 +9,25 @@ const degOfM = (m: number) => (m / (R_KM * 1000)) * (180 / Math.PI);
 
 describe('route length', () => {
   it('an arc of the equator is R·Δλ (closed form)', () => {
-    const route: Route = [[0, 0], [0.5, 0], [1, 0]];
+    const route: Route = [
+      [0, 0],
+      [0.5, 0],
+      [1, 0],
+    ];
     expect(routeKm(route)).toBeCloseTo((R_KM * Math.PI) / 180, 6);
   });
 });
 
 describe('shared corridors', () => {
   // Two routes along the equator, 5 km long, 20 m apart: one shared stretch of ~5 km.
-  const along: Route = [[0, 0], [degOfM(5000), 0]];
-  const beside: Route = [[0, degOfM(20)], [degOfM(5000), degOfM(20)]];
+  const along: Route = [
+    [0, 0],
+    [degOfM(5000), 0],
+  ];
+  const beside: Route = [
+    [0, degOfM(20)],
+    [degOfM(5000), degOfM(20)],
+  ];
 
   it('finds two routes 20 m apart for 5 km, with the length they share', () => {
     const c = sharedCorridors([along, beside]);
@@ -28,17 +38,30 @@ describe('shared corridors', () => {
   });
 
   it('ignores routes 200 m apart, and stretches shorter than the minimum', () => {
-    const far: Route = [[0, degOfM(200)], [degOfM(5000), degOfM(200)]];
+    const far: Route = [
+      [0, degOfM(200)],
+      [degOfM(5000), degOfM(200)],
+    ];
     expect(sharedCorridors([along, far])).toEqual([]);
     // Together for 600 m only, then diverging at right angles.
-    const short: Route = [[0, degOfM(10)], [degOfM(600), degOfM(10)], [degOfM(600), degOfM(3000)]];
+    const short: Route = [
+      [0, degOfM(10)],
+      [degOfM(600), degOfM(10)],
+      [degOfM(600), degOfM(3000)],
+    ];
     expect(sharedCorridors([along, short])).toEqual([]);
     expect(sharedCorridors([along, short], { minKm: 0.5 })).toHaveLength(1);
   });
 
   it('two links that only meet at a shared site do not share a corridor', () => {
-    const east: Route = [[0, 0], [degOfM(5000), 0]];
-    const north: Route = [[0, 0], [0, degOfM(5000)]];
+    const east: Route = [
+      [0, 0],
+      [degOfM(5000), 0],
+    ];
+    const north: Route = [
+      [0, 0],
+      [0, degOfM(5000)],
+    ];
     expect(sharedCorridors([east, north])).toEqual([]);
   });
 });

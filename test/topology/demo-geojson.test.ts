@@ -16,7 +16,9 @@ const RAD = Math.PI / 180;
 
 /** Haversine distance, written out here rather than taken from the code under test. */
 function km(a: readonly [number, number], b: readonly [number, number]): number {
-  const h = Math.sin(((b[1] - a[1]) * RAD) / 2) ** 2 + Math.cos(a[1] * RAD) * Math.cos(b[1] * RAD) * Math.sin(((b[0] - a[0]) * RAD) / 2) ** 2;
+  const h =
+    Math.sin(((b[1] - a[1]) * RAD) / 2) ** 2 +
+    Math.cos(a[1] * RAD) * Math.cos(b[1] * RAD) * Math.sin(((b[0] - a[0]) * RAD) / 2) ** 2;
   return 2 * R_KM * Math.asin(Math.sqrt(h));
 }
 
@@ -25,7 +27,9 @@ describe('the demo backbone as GeoJSON', () => {
   const geo = parseDesign(demo(GEO), GEO);
 
   it('is the same network as the YAML design', () => {
-    expect(geo.nodes.map((n) => [n.id, n.label, n.kind, n.lat, n.lon, n.hardened])).toEqual(yaml.nodes.map((n) => [n.id, n.label, n.kind, n.lat, n.lon, n.hardened]));
+    expect(geo.nodes.map((n) => [n.id, n.label, n.kind, n.lat, n.lon, n.hardened])).toEqual(
+      yaml.nodes.map((n) => [n.id, n.label, n.kind, n.lat, n.lon, n.hardened]),
+    );
     expect(geo.links.map((l) => [l.id, l.key, l.length, l.latency, l.capacity, l.riskGroups, l.hardened])).toEqual(
       yaml.links.map((l) => [l.id, l.key, l.length, l.latency, l.capacity, l.riskGroups, l.hardened]),
     );
@@ -36,12 +40,19 @@ describe('the demo backbone as GeoJSON', () => {
     };
     expect(cuts(geo)).toEqual(cuts(yaml));
     // Four links have drawn routes; the other 78 are straight lines that say so.
-    expect(geo.links.filter((l) => l.attrs.route_known !== false).map((l) => l.id)).toEqual(['tessaway-orrowin', 'orrowin-velmoss', 'lunmere-quarnell', 'lunmere-hesketter']);
+    expect(geo.links.filter((l) => l.attrs.route_known !== false).map((l) => l.id)).toEqual([
+      'tessaway-orrowin',
+      'orrowin-velmoss',
+      'lunmere-quarnell',
+      'lunmere-hesketter',
+    ]);
   });
 
   it('reports one shared corridor: Lunmere–Quarnell and Lunmere–Hesketter up the north road', () => {
     const corridors = geo.warnings.filter((w) => w.message.includes('run within'));
-    expect(corridors.map((w) => [w.line, /^links "([^"]+)" \(line \d+\) and "([^"]+)"/.exec(w.message)!.slice(1)])).toEqual([[121, ['lunmere-quarnell', 'lunmere-hesketter']]]);
+    expect(
+      corridors.map((w) => [w.line, /^links "([^"]+)" \(line \d+\) and "([^"]+)"/.exec(w.message)!.slice(1)]),
+    ).toEqual([[121, ['lunmere-quarnell', 'lunmere-hesketter']]]);
     // The stretch they share, Lunmere to the fork at 45.49° N, 35.21° W, by the haversine
     // formula (closed form on the sphere): 4.52 km; the lines stay within 50 m a little past it.
     const shared = km([-35.2, 45.45], [-35.205, 45.47]) + km([-35.205, 45.47], [-35.21, 45.49]);

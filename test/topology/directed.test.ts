@@ -26,32 +26,72 @@ describe('directed files: reverse arcs are one link', () => {
     expect(keys(graphml('directed', [arc('a', 'b'), arc('b', 'a')]), 'd.graphml')).toEqual(['a\u2014b']);
     expect(keys(graphml('directed', [arc('a', 'b'), arc('a', 'b')]), 'd.graphml')).toEqual(['a\u2014b', 'a\u2014b#2']);
     // Arcs pair up in file order: as many links as arcs in the busier direction.
-    expect(keys(graphml('directed', [arc('a', 'b'), arc('a', 'b'), arc('b', 'a')]), 'd.graphml')).toEqual(['a\u2014b', 'a\u2014b#2']);
-    expect(keys(graphml('directed', [arc('a', 'b'), arc('b', 'a'), arc('b', 'a'), arc('a', 'b')]), 'd.graphml')).toEqual(['a\u2014b', 'a\u2014b#2']);
-  });
-
-  it('GraphML: the edge\'s own directed attribute decides, over the graph default', () => {
-    // In an undirected graph, two edges marked directed="true" the two ways are one link.
-    expect(keys(graphml('undirected', [arc('a', 'b', ' directed="true"'), arc('b', 'a', ' directed="true"')]), 'd.graphml')).toEqual(['a\u2014b']);
-    // Undirected edges are never merged, even in a directed graph: two of them are two links.
-    expect(keys(graphml('directed', [arc('a', 'b', ' directed="false"'), arc('b', 'a', ' directed="false"')]), 'd.graphml')).toEqual([
+    expect(keys(graphml('directed', [arc('a', 'b'), arc('a', 'b'), arc('b', 'a')]), 'd.graphml')).toEqual([
       'a\u2014b',
       'a\u2014b#2',
     ]);
+    expect(
+      keys(graphml('directed', [arc('a', 'b'), arc('b', 'a'), arc('b', 'a'), arc('a', 'b')]), 'd.graphml'),
+    ).toEqual(['a\u2014b', 'a\u2014b#2']);
+  });
+
+  it("GraphML: the edge's own directed attribute decides, over the graph default", () => {
+    // In an undirected graph, two edges marked directed="true" the two ways are one link.
+    expect(
+      keys(graphml('undirected', [arc('a', 'b', ' directed="true"'), arc('b', 'a', ' directed="true"')]), 'd.graphml'),
+    ).toEqual(['a\u2014b']);
+    // Undirected edges are never merged, even in a directed graph: two of them are two links.
+    expect(
+      keys(graphml('directed', [arc('a', 'b', ' directed="false"'), arc('b', 'a', ' directed="false"')]), 'd.graphml'),
+    ).toEqual(['a\u2014b', 'a\u2014b#2']);
     // An undirected edge and an arc: two links (only arcs pair up).
-    expect(keys(graphml('directed', [arc('a', 'b', ' directed="false"'), arc('b', 'a')]), 'd.graphml')).toEqual(['a\u2014b', 'a\u2014b#2']);
+    expect(keys(graphml('directed', [arc('a', 'b', ' directed="false"'), arc('b', 'a')]), 'd.graphml')).toEqual([
+      'a\u2014b',
+      'a\u2014b#2',
+    ]);
     // Undirected files are unchanged: a→b and b→a are two parallel links, as written.
-    expect(keys(graphml('undirected', [arc('a', 'b'), arc('b', 'a')]), 'd.graphml')).toEqual(['a\u2014b', 'a\u2014b#2']);
+    expect(keys(graphml('undirected', [arc('a', 'b'), arc('b', 'a')]), 'd.graphml')).toEqual([
+      'a\u2014b',
+      'a\u2014b#2',
+    ]);
   });
 
   it('GML "directed 1" follows the same rule; without it, both edges stay', () => {
-    expect(keys(gml(true, [[1, 2], [2, 1], [2, 3]]), 'd.gml')).toEqual(['1\u20142', '2\u20143']);
-    expect(keys(gml(true, [[1, 2], [1, 2]]), 'd.gml')).toEqual(['1\u20142', '1\u20142#2']);
-    expect(keys(gml(false, [[1, 2], [2, 1]]), 'd.gml')).toEqual(['1\u20142', '1\u20142#2']);
+    expect(
+      keys(
+        gml(true, [
+          [1, 2],
+          [2, 1],
+          [2, 3],
+        ]),
+        'd.gml',
+      ),
+    ).toEqual(['1\u20142', '2\u20143']);
+    expect(
+      keys(
+        gml(true, [
+          [1, 2],
+          [1, 2],
+        ]),
+        'd.gml',
+      ),
+    ).toEqual(['1\u20142', '1\u20142#2']);
+    expect(
+      keys(
+        gml(false, [
+          [1, 2],
+          [2, 1],
+        ]),
+        'd.gml',
+      ),
+    ).toEqual(['1\u20142', '1\u20142#2']);
   });
 
   it('one warning, at the declaration, says direction is ignored and how many arcs were merged', () => {
-    const t = parseDesign(graphml('directed', [arc('a', 'b'), arc('b', 'a'), arc('b', 'c'), arc('c', 'b'), arc('a', 'c')]), 'd.graphml');
+    const t = parseDesign(
+      graphml('directed', [arc('a', 'b'), arc('b', 'a'), arc('b', 'c'), arc('c', 'b'), arc('a', 'c')]),
+      'd.graphml',
+    );
     expect(t.links).toHaveLength(3);
     expect(t.warnings).toEqual([
       expect.objectContaining({
@@ -68,7 +108,14 @@ describe('directed files: reverse arcs are one link', () => {
     const spans = sites.map((s, i) => [s, sites[(i + 1) % 4]] as const);
     const both = (list: readonly (readonly [string, string])[]) => list.flatMap(([s, t]) => [arc(s, t), arc(t, s)]);
     const ringDirected = parseDesign(graphml('directed', both(spans), sites), 'ring.graphml');
-    const ringUndirected = parseDesign(graphml('undirected', spans.map(([s, t]) => arc(s, t)), sites), 'ring.graphml');
+    const ringUndirected = parseDesign(
+      graphml(
+        'undirected',
+        spans.map(([s, t]) => arc(s, t)),
+        sites,
+      ),
+      'ring.graphml',
+    );
     // Same stable keys, so base and head share their random removal orders (delta 0 for the same design).
     expect(ringDirected.links.map((l) => l.key)).toEqual(ringUndirected.links.map((l) => l.key));
     expect(findCutElements(compileTopology(ringDirected)).bridges.length).toBe(0);
@@ -78,7 +125,7 @@ describe('directed files: reverse arcs are one link', () => {
     expect(findCutElements(compileTopology(chain)).bridges.length).toBe(3);
   });
 
-  it('reverse arcs that disagree: the first arc\'s values are kept, with a warning at the second', () => {
+  it("reverse arcs that disagree: the first arc's values are kept, with a warning at the second", () => {
     const text =
       `${HEAD}<key id="w" for="edge" attr.name="weight" attr.type="double"/>\n<graph edgedefault="directed">\n<node id="a"/><node id="b"/>\n` +
       '<edge source="a" target="b"><data key="w">3</data></edge>\n<edge source="b" target="a"><data key="w">5</data></edge>\n</graph>\n</graphml>\n';
@@ -86,7 +133,8 @@ describe('directed files: reverse arcs are one link', () => {
     expect(t.links.map((l) => [l.key, l.weight])).toEqual([['a\u2014b', 3]]);
     expect(t.warnings[1]).toMatchObject({
       line: 7,
-      message: 'the arc b \u2192 a is merged with the reverse arc on line 6, which says otherwise (weight 3 vs 5); the first arc\'s values are kept',
+      message:
+        "the arc b \u2192 a is merged with the reverse arc on line 6, which says otherwise (weight 3 vs 5); the first arc's values are kept",
     });
   });
 });

@@ -48,11 +48,17 @@ describe('CSV edge list', () => {
   });
 
   it('too many columns, unterminated quotes, stray quotes, empty ends, bad numbers', () => {
-    expect(caught(csv('source,target\na,b,c\n')).format()).toBe('links.csv:2:5: row has 3 columns but the header has 2 — quote values that contain commas');
+    expect(caught(csv('source,target\na,b,c\n')).format()).toBe(
+      'links.csv:2:5: row has 3 columns but the header has 2 — quote values that contain commas',
+    );
     expect(caught(csv('source,target\n"a,b\n')).message).toBe('unterminated quoted field');
     expect(caught(csv('source,target\na"x,b\n')).message).toBe('a double quote inside an unquoted field');
-    expect(caught(csv('source,target\na,\n')).format()).toBe('links.csv:2:3: empty target — every row needs both link ends');
-    expect(caught(csv('source,target,latency\na,b,slow\n')).format()).toBe('links.csv:2:5: link latency must be a number, not "slow" — write a plain decimal number');
+    expect(caught(csv('source,target\na,\n')).format()).toBe(
+      'links.csv:2:3: empty target — every row needs both link ends',
+    );
+    expect(caught(csv('source,target,latency\na,b,slow\n')).format()).toBe(
+      'links.csv:2:5: link latency must be a number, not "slow" — write a plain decimal number',
+    );
     expect(caught(csv('source,target,length\na,b,-1\n')).message).toBe('link length must not be negative (-1)');
     expect(caught(csv('source,target,source\na,b,c\n')).message).toBe('column "source" appears twice in the header');
     expect(caught(csv('')).message).toBe('the CSV file is empty');
@@ -67,6 +73,7 @@ describe('is it an edge list? (the header decides)', () => {
   });
 
   it('anything else is not: other columns, one of the two, an empty file, a broken first line', () => {
-    for (const text of ['item,quantity\nducts,4\n', 'source,length\n', '', '"source,target\n', 'from,to\na,b\n']) expect(csvHasEdgeHeader(text), text).toBe(false);
+    for (const text of ['item,quantity\nducts,4\n', 'source,length\n', '', '"source,target\n', 'from,to\na,b\n'])
+      expect(csvHasEdgeHeader(text), text).toBe(false);
   });
 });

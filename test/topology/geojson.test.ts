@@ -19,8 +19,17 @@ const read = (text: string, file = 'plan.geojson') => parseDesign(text, file);
 function collection(...features: object[]): string {
   return `{"type": "FeatureCollection",\n "features": [\n${features.map((f) => `  ${JSON.stringify(f)}`).join(',\n')}\n]}\n`;
 }
-const site = (id: string, lon: number, lat: number, properties: object = {}) => ({ type: 'Feature', id, geometry: { type: 'Point', coordinates: [lon, lat] }, properties });
-const line = (coordinates: number[][], properties: object = {}) => ({ type: 'Feature', geometry: { type: 'LineString', coordinates }, properties });
+const site = (id: string, lon: number, lat: number, properties: object = {}) => ({
+  type: 'Feature',
+  id,
+  geometry: { type: 'Point', coordinates: [lon, lat] },
+  properties,
+});
+const line = (coordinates: number[][], properties: object = {}) => ({
+  type: 'Feature',
+  geometry: { type: 'LineString', coordinates },
+  properties,
+});
 
 describe('GeoJSON: the invented fjord network', () => {
   const t = read(fixture(FJORD), FJORD);
@@ -76,7 +85,9 @@ describe('GeoJSON: the invented fjord network', () => {
     // a routed line is longer than the great-circle chord between its ends (triangle inequality)
     const chord = (a: number, b: number) => {
       const [p, q] = [t.nodes[a], t.nodes[b]];
-      const h = Math.sin(((q.lat! - p.lat!) * RAD) / 2) ** 2 + Math.cos(p.lat! * RAD) * Math.cos(q.lat! * RAD) * Math.sin(((q.lon! - p.lon!) * RAD) / 2) ** 2;
+      const h =
+        Math.sin(((q.lat! - p.lat!) * RAD) / 2) ** 2 +
+        Math.cos(p.lat! * RAD) * Math.cos(q.lat! * RAD) * Math.sin(((q.lon! - p.lon!) * RAD) / 2) ** 2;
       return 2 * R_KM * Math.asin(Math.sqrt(h));
     };
     expect(t.links[3].length!).toBeGreaterThan(chord(0, 3));
@@ -87,7 +98,9 @@ describe('GeoJSON: the invented fjord network', () => {
     expect(corridors).toHaveLength(1);
     const w = corridors[0];
     expect([w.file, w.line, w.column]).toEqual([FJORD, 24, 5]);
-    expect(w.message).toMatch(/^links "hv-ma" \(line 24\) and "qu-tu" \(line 26\) run within 50 m of each other for (\d+\.\d) km, from \[-22\.56\d+, -38\.42\d+\] to \[-22\.5\d+, -38\.43\d+\]: a possible shared-risk group the design does not declare$/);
+    expect(w.message).toMatch(
+      /^links "hv-ma" \(line 24\) and "qu-tu" \(line 26\) run within 50 m of each other for (\d+\.\d) km, from \[-22\.56\d+, -38\.42\d+\] to \[-22\.5\d+, -38\.43\d+\]: a possible shared-risk group the design does not declare$/,
+    );
     // The causeway is 0.04° of longitude at 38.43° S: R·cos φ·Δλ = 3.48 km (an arc of a parallel,
     // which the straight causeway follows to 1 m); the lines converge a little before it.
     const km = Number(/for (\d+\.\d) km/.exec(w.message)![1]);
@@ -99,7 +112,9 @@ describe('GeoJSON: the invented fjord network', () => {
   });
 
   it('reports the duct pair once the shared group is taken away', () => {
-    const text = fixture(FJORD).replace('"risk_groups": ["duct-harbour"]', '"risk_groups": []').replace('"duct-harbour;bridge-9"', '"bridge-9"');
+    const text = fixture(FJORD)
+      .replace('"risk_groups": ["duct-harbour"]', '"risk_groups": []')
+      .replace('"duct-harbour;bridge-9"', '"bridge-9"');
     const corridors = read(text, FJORD).warnings.filter((w) => w.message.includes('run within'));
     expect(corridors.map((w) => /links "([^"]+)".*"([^"]+)" \(line/.exec(w.message)!.slice(1))).toEqual([
       ['ma-sa-1', 'ma-sa-2'],
@@ -112,22 +127,65 @@ describe('GeoJSON: the invented fjord network', () => {
 
 describe('GeoJSON: lengths along the geometry', () => {
   it('an arc of the equator is R·Δλ', () => {
-    const t = read(collection(site('a', 10, 0), site('b', 12, 0), line([[10, 0], [11, 0], [12, 0]])));
+    const t = read(
+      collection(
+        site('a', 10, 0),
+        site('b', 12, 0),
+        line([
+          [10, 0],
+          [11, 0],
+          [12, 0],
+        ]),
+      ),
+    );
     expect(t.links[0].length).toBeCloseTo(R_KM * 2 * RAD, 9);
   });
 
   it('a MultiLineString counts its lines and not the gap between them (with a warning)', () => {
-    const multi = { type: 'Feature', geometry: { type: 'MultiLineString', coordinates: [[[5, 40], [5, 40.5]], [[5.2, 40.7], [5.2, 41]]] }, properties: { id: 'm' } };
+    const multi = {
+      type: 'Feature',
+      geometry: {
+        type: 'MultiLineString',
+        coordinates: [
+          [
+            [5, 40],
+            [5, 40.5],
+          ],
+          [
+            [5.2, 40.7],
+            [5.2, 41],
+          ],
+        ],
+      },
+      properties: { id: 'm' },
+    };
     const t = read(collection(site('a', 5, 40), site('b', 5.2, 41), multi));
     // two meridian arcs, 0.5° and 0.3°: R·0.8°
     expect(t.links[0].length).toBeCloseTo(R_KM * 0.8 * RAD, 9);
     expect(t.warnings.map((w) => [w.line, w.message])).toEqual([
-      [5, expect.stringMatching(/^link features\[2\] has a gap of 2\d\.\d{3} km between lines 1 and 2 of its MultiLineString; the length counts the lines only$/)],
+      [
+        5,
+        expect.stringMatching(
+          /^link features\[2\] has a gap of 2\d\.\d{3} km between lines 1 and 2 of its MultiLineString; the length counts the lines only$/,
+        ),
+      ],
     ]);
   });
 
   it('a length in the properties wins over the geometry (which stays in route_km)', () => {
-    const t = read(collection(site('a', 10, 0), site('b', 11, 0), line([[10, 0], [11, 0]], { length_km: 140 })));
+    const t = read(
+      collection(
+        site('a', 10, 0),
+        site('b', 11, 0),
+        line(
+          [
+            [10, 0],
+            [11, 0],
+          ],
+          { length_km: 140 },
+        ),
+      ),
+    );
     expect(t.links[0].length).toBe(140);
     expect(t.links[0].attrs.route_km).toBe(Math.round(R_KM * RAD * 1000) / 1000);
   });
@@ -141,19 +199,43 @@ describe('GeoJSON: ids, ends and odd features', () => {
   {"type": "Feature", "geometry": {"type": "LineString", "coordinates": [[0, 0], [1, 0]]}, "properties": {"source": 1.0, "target": 12345678901234567890, "risk_groups": [10, "d"]}}
 ]}`);
     expect(t.nodes.map((n) => n.id)).toEqual(['1.0', '12345678901234567890']);
-    expect([t.links[0].source, t.links[0].target, t.links[0].riskGroups]).toEqual(['1.0', '12345678901234567890', ['10', 'd']]);
+    expect([t.links[0].source, t.links[0].target, t.links[0].riskGroups]).toEqual([
+      '1.0',
+      '12345678901234567890',
+      ['10', 'd'],
+    ]);
   });
 
   it('a feature without geometry is skipped with a warning at its line', () => {
     const t = read(collection(site('a', 0, 0), { type: 'Feature', geometry: null, properties: { id: 'b' } }));
     expect(t.nodes).toHaveLength(1);
-    expect(t.warnings.map((w) => [w.line, w.column, w.message])).toEqual([[4, 3, 'features[1] has no geometry (null); skipped']]);
+    expect(t.warnings.map((w) => [w.line, w.column, w.message])).toEqual([
+      [4, 3, 'features[1] has no geometry (null); skipped'],
+    ]);
   });
 
   it('warns when the named sites are not the ones the line is drawn between', () => {
-    const t = read(collection(site('a', 0, 0), site('b', 1, 0), site('c', 2, 0), line([[0, 0], [1, 0]], { source: 'a', target: 'c' })));
+    const t = read(
+      collection(
+        site('a', 0, 0),
+        site('b', 1, 0),
+        site('c', 2, 0),
+        line(
+          [
+            [0, 0],
+            [1, 0],
+          ],
+          { source: 'a', target: 'c' },
+        ),
+      ),
+    );
     expect([t.links[0].source, t.links[0].target]).toEqual(['a', 'c']);
-    expect(t.warnings.map((w) => [w.line, w.message])).toEqual([[6, 'link features[3] names the sites "a" and "c", but its line is drawn between "a" and "b"; the named sites are used']]);
+    expect(t.warnings.map((w) => [w.line, w.message])).toEqual([
+      [
+        6,
+        'link features[3] names the sites "a" and "c", but its line is drawn between "a" and "b"; the named sites are used',
+      ],
+    ]);
   });
 });
 
@@ -162,13 +244,38 @@ describe('GeoJSON: errors point at the line to fix', () => {
 
   it('a line that ends far from every site', () => {
     // 0.01° of latitude is 1.1 km from site b
-    expect(fails(collection(site('a', 0, 0), site('b', 0, 1), line([[0, 0], [0, 0.99]])))).toBe(
+    expect(
+      fails(
+        collection(
+          site('a', 0, 0),
+          site('b', 0, 1),
+          line([
+            [0, 0],
+            [0, 0.99],
+          ]),
+        ),
+      ),
+    ).toBe(
       'plan.geojson:5:3: link features[2] ends at [0, 0.99], more than 100 m from every site — move the line\u2019s end onto its site, or name the sites in properties.source and properties.target',
     );
   });
 
   it('a Polygon', () => {
-    const area = { type: 'Feature', geometry: { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] }, properties: {} };
+    const area = {
+      type: 'Feature',
+      geometry: {
+        type: 'Polygon',
+        coordinates: [
+          [
+            [0, 0],
+            [1, 0],
+            [1, 1],
+            [0, 0],
+          ],
+        ],
+      },
+      properties: {},
+    };
     expect(fails(collection(site('a', 0, 0), area))).toBe(
       'plan.geojson:4:3: features[1] is a Polygon: only Point (sites) and LineString or MultiLineString (links) are read — keep areas and other shapes in another file',
     );
@@ -195,17 +302,33 @@ describe('GeoJSON: errors point at the line to fix', () => {
     ["0.5", 0],
     [1, 0]]}}
 ]}`;
-    expect(fails(text)).toBe('plan.geojson:6:5: position 1 of link features[2] is not a [longitude, latitude] position — a position is two numbers, e.g. [-35.2, 45.45]');
+    expect(fails(text)).toBe(
+      'plan.geojson:6:5: position 1 of link features[2] is not a [longitude, latitude] position — a position is two numbers, e.g. [-35.2, 45.45]',
+    );
   });
 
   it('a line with one position, a site without id, an unknown named site, a projected file', () => {
-    expect(fails(collection(site('a', 0, 0), line([[0, 0]])))).toBe('plan.geojson:4:67: link features[1] has a line with fewer than two positions — a line needs at least its two ends');
-    expect(fails(collection({ type: 'Feature', geometry: { type: 'Point', coordinates: [0, 0] }, properties: {} }))).toBe(
-      'plan.geojson:3:3: site features[0] has no id — give the feature an "id", or properties.id',
+    expect(fails(collection(site('a', 0, 0), line([[0, 0]])))).toBe(
+      'plan.geojson:4:67: link features[1] has a line with fewer than two positions — a line needs at least its two ends',
     );
-    expect(fails(collection(site('a', 0, 0), site('b', 1, 0), line([[0, 0], [1, 0]], { source: 'a', target: 'bb' })))).toBe(
-      'plan.geojson:5:3: link features[2] refers to unknown node "bb" — did you mean "b"?',
-    );
+    expect(
+      fails(collection({ type: 'Feature', geometry: { type: 'Point', coordinates: [0, 0] }, properties: {} })),
+    ).toBe('plan.geojson:3:3: site features[0] has no id — give the feature an "id", or properties.id');
+    expect(
+      fails(
+        collection(
+          site('a', 0, 0),
+          site('b', 1, 0),
+          line(
+            [
+              [0, 0],
+              [1, 0],
+            ],
+            { source: 'a', target: 'bb' },
+          ),
+        ),
+      ),
+    ).toBe('plan.geojson:5:3: link features[2] refers to unknown node "bb" — did you mean "b"?');
     const projected = `{"type": "FeatureCollection",\n "crs": {"type": "name", "properties": {"name": "urn:ogc:def:crs:EPSG::3857"}},\n "features": []}`;
     expect(fails(projected)).toBe(
       'plan.geojson:2:9: the coordinates are in another reference system (urn:ogc:def:crs:EPSG::3857) — RFC 7946 GeoJSON is WGS 84 longitude/latitude: export the layer as EPSG:4326',
@@ -214,7 +337,11 @@ describe('GeoJSON: errors point at the line to fix', () => {
   });
 
   it('not a FeatureCollection, and broken JSON', () => {
-    expect(fails('{"type": "Feature"}')).toBe('plan.geojson:1:1: a GeoJSON design is a FeatureCollection with a "features" list — points are sites, lines are links');
-    expect(fails('{"type": "FeatureCollection",\n "features": [}')).toMatch(/^plan\.geojson:2:\d+: GeoJSON syntax error: /);
+    expect(fails('{"type": "Feature"}')).toBe(
+      'plan.geojson:1:1: a GeoJSON design is a FeatureCollection with a "features" list — points are sites, lines are links',
+    );
+    expect(fails('{"type": "FeatureCollection",\n "features": [}')).toMatch(
+      /^plan\.geojson:2:\d+: GeoJSON syntax error: /,
+    );
   });
 });

@@ -18,13 +18,19 @@ describe('GML', () => {
     expect(t.nodes[0]).toMatchObject({ lat: 47.1, lon: 8.3, pos: { line: 4, column: 3 } });
     expect(t.nodes[2].kind).toBe('datacentre');
     expect(t.links).toHaveLength(5);
-    expect(t.links[0]).toMatchObject({ id: '1\u20142', length: 24, latency: 0.15, attrs: { LinkLabel: '100G' }, pos: { line: 29, column: 3 } });
+    expect(t.links[0]).toMatchObject({
+      id: '1\u20142',
+      length: 24,
+      latency: 0.15,
+      attrs: { LinkLabel: '100G' },
+      pos: { line: 29, column: 3 },
+    });
     expect(t.links.map((l) => l.key)).toEqual(['1\u20142', '2\u20143', '3\u20144', '3\u20144#2', '1\u20144']);
     expect(t.links[3].id).toBe('3\u20144#2');
     expect(t.warnings).toEqual([expect.objectContaining({ line: 56, message: 'self-loop on node "2" dropped' })]);
   });
 
-  it('keeps the file\'s edge id, string ids, entities and nested lists', () => {
+  it("keeps the file's edge id, string ids, entities and nested lists", () => {
     const t = parseDesign(
       'graph [\n  node [ id "a" label "A &amp; B" graphics [ x 1.5 y 2 ] ]\n  node [ id "b" ]\n  edge [ id "e7" source "a" target "b" LinkSpeed "10" ]\n]\n',
       'x.gml',
@@ -34,9 +40,16 @@ describe('GML', () => {
   });
 
   it('reads a directed graph as undirected, with a warning', () => {
-    const t = parseDesign('graph [\n  directed 1\n  node [ id 1 ]\n  node [ id 2 ]\n  edge [ source 2 target 1 ]\n]\n', 'd.gml');
+    const t = parseDesign(
+      'graph [\n  directed 1\n  node [ id 1 ]\n  node [ id 2 ]\n  edge [ source 2 target 1 ]\n]\n',
+      'd.gml',
+    );
     expect(t.links).toHaveLength(1);
-    expect(t.warnings[0]).toMatchObject({ line: 2, column: 3, message: 'the graph is directed ("directed 1"); direction is ignored and links are read as undirected' });
+    expect(t.warnings[0]).toMatchObject({
+      line: 2,
+      column: 3,
+      message: 'the graph is directed ("directed 1"); direction is ignored and links are read as undirected',
+    });
   });
 
   it('skips # comments', () => {
@@ -52,7 +65,9 @@ describe('GML', () => {
   });
 
   it('a stray "]"', () => {
-    expect(caught(gml('graph [ node [ id 1 ] ]\n]\n')).format()).toBe('wan.gml:2:1: unexpected "]" with no open "[" — remove it, or add the "[" it closes');
+    expect(caught(gml('graph [ node [ id 1 ] ]\n]\n')).format()).toBe(
+      'wan.gml:2:1: unexpected "]" with no open "[" — remove it, or add the "[" it closes',
+    );
   });
 
   it('edge to a missing node', () => {
@@ -74,13 +89,19 @@ describe('GML', () => {
 
   it('node without id, unterminated string, bad value, no graph', () => {
     expect(caught(gml('graph [\n  node [ label "x" ]\n]\n')).message).toBe('node without "id"');
-    expect(caught(gml('graph [\n  label "oops\n]\n')).format()).toMatch(/^wan\.gml:2:9: unterminated string for key "label"/);
-    expect(caught(gml('graph [\n  weight @\n]\n')).format()).toMatch(/^wan\.gml:2:10: value of "weight" is not a number/);
+    expect(caught(gml('graph [\n  label "oops\n]\n')).format()).toMatch(
+      /^wan\.gml:2:9: unterminated string for key "label"/,
+    );
+    expect(caught(gml('graph [\n  weight @\n]\n')).format()).toMatch(
+      /^wan\.gml:2:10: value of "weight" is not a number/,
+    );
     expect(caught(gml('Creator "me"\n')).message).toBe('no "graph [ ... ]" list in this file');
   });
 
   it('a non-numeric length is refused where it is written', () => {
-    const e = caught(gml('graph [\n  node [ id 1 ]\n  node [ id 2 ]\n  edge [ source 1 target 2\n    length "far" ]\n]\n'));
+    const e = caught(
+      gml('graph [\n  node [ id 1 ]\n  node [ id 2 ]\n  edge [ source 1 target 2\n    length "far" ]\n]\n'),
+    );
     expect(e.format()).toBe('wan.gml:5:5: link length must be a number, not "far" — write a plain decimal number');
   });
 
@@ -91,9 +112,14 @@ describe('GML', () => {
   });
 
   it('a nested graph is refused where it begins, in the graph or inside a node', () => {
-    const msg = 'a nested graph: netbrace reads one flat graph per file — list its nodes and edges in the top-level graph (node ids must stay unique)';
-    expect(caught(gml('graph [\n  node [ id 1 ]\n  graph [\n    node [ id 2 ]\n  ]\n]\n')).format()).toBe(`wan.gml:3:3: ${msg}`);
-    expect(caught(gml('graph [\n  node [\n    id 1\n    graph [ node [ id 2 ] ]\n  ]\n]\n')).format()).toBe(`wan.gml:4:5: ${msg}`);
+    const msg =
+      'a nested graph: netbrace reads one flat graph per file — list its nodes and edges in the top-level graph (node ids must stay unique)';
+    expect(caught(gml('graph [\n  node [ id 1 ]\n  graph [\n    node [ id 2 ]\n  ]\n]\n')).format()).toBe(
+      `wan.gml:3:3: ${msg}`,
+    );
+    expect(caught(gml('graph [\n  node [\n    id 1\n    graph [ node [ id 2 ] ]\n  ]\n]\n')).format()).toBe(
+      `wan.gml:4:5: ${msg}`,
+    );
     // A key that merely says "graph" in a drawing block is a value, not a graph.
     expect(parseDesign('graph [\n  node [ id 1 graphics [ graph "x" ] ]\n]\n', 'g.gml').nodes).toHaveLength(1);
   });
@@ -109,8 +135,12 @@ describe('GML', () => {
     expect(caught(gml(`${two}  edge [ source 1 target 2\n    target 3 ]\n]\n`)).format()).toBe(
       'wan.gml:6:5: the edge on line 5 has "target" twice (lines 5 and 6) — keep one; the first is on line 5',
     );
-    expect(caught(gml(`${two}  edge [\n    source 1\n    source 3\n    target 2 ]\n]\n`)).message).toBe('the edge on line 5 has "source" twice (lines 6 and 7)');
-    expect(caught(gml(`${two}  edge [ source 1 target 2 length 3\n    length 4 ]\n]\n`)).message).toBe('the edge on line 5 has "length" twice (lines 5 and 6)');
+    expect(caught(gml(`${two}  edge [\n    source 1\n    source 3\n    target 2 ]\n]\n`)).message).toBe(
+      'the edge on line 5 has "source" twice (lines 6 and 7)',
+    );
+    expect(caught(gml(`${two}  edge [ source 1 target 2 length 3\n    length 4 ]\n]\n`)).message).toBe(
+      'the edge on line 5 has "length" twice (lines 5 and 6)',
+    );
   });
 
   it('other repeated keys are all kept, as a list', () => {

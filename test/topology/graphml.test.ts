@@ -28,7 +28,9 @@ describe('GraphML', () => {
     ]);
     expect(t.links[0].latency).toBe(0.15); // attr.name "LinkLatency"
     expect(t.links[2].pos).toEqual({ line: 19, column: 5 });
-    expect(t.warnings).toEqual([expect.objectContaining({ line: 22, column: 5, message: 'self-loop on node "east" dropped' })]);
+    expect(t.warnings).toEqual([
+      expect.objectContaining({ line: 22, column: 5, message: 'self-loop on node "east" dropped' }),
+    ]);
   });
 
   it('reads the zoo\'s layout: edge id from a data key named "id", LinkSpeedRaw as capacity in Gbit/s', () => {
@@ -67,19 +69,29 @@ describe('GraphML', () => {
   });
 
   it('edge to a missing node', () => {
-    const e = caught(graphml(`${HEAD}  <graph>\n    <node id="a"/>\n    <edge id="e1" source="a" target="b"/>\n  </graph>\n</graphml>\n`));
-    expect(e.format()).toBe('wan.graphml:5:5: edge "e1" refers to unknown node "b" — declare the node first, or fix the id');
+    const e = caught(
+      graphml(
+        `${HEAD}  <graph>\n    <node id="a"/>\n    <edge id="e1" source="a" target="b"/>\n  </graph>\n</graphml>\n`,
+      ),
+    );
+    expect(e.format()).toBe(
+      'wan.graphml:5:5: edge "e1" refers to unknown node "b" — declare the node first, or fix the id',
+    );
   });
 
   it('malformed XML', () => {
     const e = caught(graphml(`${HEAD}  <graph>\n    <node id="a">\n  </graph>\n</graphml>\n`));
     expect(e.name).toBe('DesignError');
-    expect(e.format()).toBe('wan.graphml:5:11: malformed XML: unexpected close tag — the file is not well-formed XML; check the tag at this point');
+    expect(e.format()).toBe(
+      'wan.graphml:5:11: malformed XML: unexpected close tag — the file is not well-formed XML; check the tag at this point',
+    );
   });
 
   it('a truncated file and an undefined entity are malformed XML too', () => {
     expect(caught(graphml(`${HEAD}<graph><node id="a"`)).message).toBe('malformed XML: unclosed tag: graph');
-    expect(caught(graphml(`${HEAD}<graph><node id="&foo;"/></graph></graphml>`)).message).toBe('malformed XML: undefined entity');
+    expect(caught(graphml(`${HEAD}<graph><node id="&foo;"/></graph></graphml>`)).message).toBe(
+      'malformed XML: undefined entity',
+    );
   });
 
   it('billion laughs is refused at the DOCTYPE, fast and without growing memory', () => {
@@ -98,7 +110,11 @@ describe('GraphML', () => {
   });
 
   it('an external entity is refused the same way (nothing is fetched or read)', () => {
-    const e = caught(graphml('<?xml version="1.0"?>\n<!DOCTYPE g [<!ENTITY x SYSTEM "file:///etc/passwd">]>\n<graphml><graph><node id="&x;"/></graph></graphml>\n'));
+    const e = caught(
+      graphml(
+        '<?xml version="1.0"?>\n<!DOCTYPE g [<!ENTITY x SYSTEM "file:///etc/passwd">]>\n<graphml><graph><node id="&x;"/></graph></graphml>\n',
+      ),
+    );
     expect([e.line, e.message]).toEqual([2, 'the XML declares entities in a DOCTYPE, which netbrace refuses']);
   });
 
@@ -106,13 +122,17 @@ describe('GraphML', () => {
     expect(caught(graphml(`${HEAD}<graph>\n<node/>\n</graph></graphml>`)).format()).toBe(
       'wan.graphml:4:1: <node> without an "id" — every GraphML node needs id="..."',
     );
-    expect(caught(graphml(`${HEAD}<graph><node id="a"/>\n<edge source="a"/>\n</graph></graphml>`)).message).toBe('<edge> without a "target"');
+    expect(caught(graphml(`${HEAD}<graph><node id="a"/>\n<edge source="a"/>\n</graph></graphml>`)).message).toBe(
+      '<edge> without a "target"',
+    );
     expect(caught(graphml('<?xml version="1.0"?>\n<graph/>\n')).message).toBe('no <graphml> element in this file');
   });
 
   it('a non-numeric length is refused at its <data>', () => {
     const e = caught(
-      graphml(`${HEAD}<key id="l" for="edge" attr.name="length"/>\n<graph><node id="a"/><node id="b"/>\n<edge source="a" target="b">\n  <data key="l">far</data></edge></graph></graphml>`),
+      graphml(
+        `${HEAD}<key id="l" for="edge" attr.name="length"/>\n<graph><node id="a"/><node id="b"/>\n<edge source="a" target="b">\n  <data key="l">far</data></edge></graph></graphml>`,
+      ),
     );
     expect(e.format()).toBe('wan.graphml:6:3: link length must be a number, not "far" — write a plain decimal number');
   });

@@ -44,7 +44,9 @@ describe('number-like ids stay as written', () => {
   });
 
   it('YAML: an id still must be text or a whole number (a fraction is refused)', () => {
-    expect(() => parseDesign('nodes:\n  - id: 1.5\n', 'f.net.yaml')).toThrow('nodes[0].id must be an id (text or a whole number), not number 1.5');
+    expect(() => parseDesign('nodes:\n  - id: 1.5\n', 'f.net.yaml')).toThrow(
+      'nodes[0].id must be an id (text or a whole number), not number 1.5',
+    );
   });
 
   it('JSON: 20-digit and exponent ids keep their digits', () => {
@@ -59,7 +61,8 @@ describe('number-like ids stay as written', () => {
 
   it('GML: integer ids keep their text (007 and 7, 1e3 and 1000 are different nodes), ends too', () => {
     const ids = ['007', '7', '1e3', '1000', '12345678901234567890', '12345678901234567891'];
-    const text = `graph [\n${ids.map((id) => `  node [ id ${id} ]`).join('\n')}\n  node [ id "0x10" ]\n  node [ id 16 ]\n` +
+    const text =
+      `graph [\n${ids.map((id) => `  node [ id ${id} ]`).join('\n')}\n  node [ id "0x10" ]\n  node [ id 16 ]\n` +
       '  edge [ source 007 target 7 ]\n  edge [ source 12345678901234567890 target 12345678901234567891 ]\n  edge [ source "0x10" target 16 id 0010 ]\n]\n';
     const t = parseDesign(text, 'ids.gml');
     expect(t.nodes.map((n) => n.id)).toEqual([...ids, '0x10', '16']);

@@ -11,16 +11,23 @@ const HEAD = '<?xml version="1.0"?>\n<graphml xmlns="http://graphml.graphdrawing
 
 describe('labels', () => {
   it('our format: label (YAML and JSON)', () => {
-    expect(parseDesign('nodes:\n  - id: a\n    label: Harbour exchange\n', 'l.net.yaml').nodes[0].label).toBe('Harbour exchange');
-    expect(parseDesign('{"nodes": [{"id": "a", "label": "Harbour exchange"}]}', 'l.net.json').nodes[0].label).toBe('Harbour exchange');
+    expect(parseDesign('nodes:\n  - id: a\n    label: Harbour exchange\n', 'l.net.yaml').nodes[0].label).toBe(
+      'Harbour exchange',
+    );
+    expect(parseDesign('{"nodes": [{"id": "a", "label": "Harbour exchange"}]}', 'l.net.json').nodes[0].label).toBe(
+      'Harbour exchange',
+    );
   });
 
-  it('GraphML: a key named label (the zoo\'s spelling) or name; label wins when both are there', () => {
+  it("GraphML: a key named label (the zoo's spelling) or name; label wins when both are there", () => {
     const doc = (keys: string[], data: string) =>
       `${HEAD}${keys.map((k, i) => `<key id="d${i}" for="node" attr.name="${k}" attr.type="string"/>`).join('')}\n<graph>\n<node id="a">${data}</node>\n</graph>\n</graphml>\n`;
     expect(parseDesign(doc(['label'], '<data key="d0">Harbour</data>'), 'l.graphml').nodes[0].label).toBe('Harbour');
     expect(parseDesign(doc(['name'], '<data key="d0">Harbour</data>'), 'l.graphml').nodes[0].label).toBe('Harbour');
-    for (const data of ['<data key="d0">Harbour</data><data key="d1">hbr-01</data>', '<data key="d1">hbr-01</data><data key="d0">Harbour</data>']) {
+    for (const data of [
+      '<data key="d0">Harbour</data><data key="d1">hbr-01</data>',
+      '<data key="d1">hbr-01</data><data key="d0">Harbour</data>',
+    ]) {
       const n = parseDesign(doc(['label', 'name'], data), 'l.graphml').nodes[0];
       expect([n.label, n.attrs]).toEqual(['Harbour', { name: 'hbr-01' }]);
     }
@@ -30,7 +37,10 @@ describe('labels', () => {
     const node = (body: string) => parseDesign(`graph [\n  node [ id 1 ${body} ]\n]\n`, 'l.gml').nodes[0];
     expect(node('label "Harbour"').label).toBe('Harbour');
     expect(node('name "Harbour"').label).toBe('Harbour');
-    expect([node('name "hbr-01" label "Harbour"').label, node('name "hbr-01" label "Harbour"').attrs]).toEqual(['Harbour', { name: 'hbr-01' }]);
+    expect([node('name "hbr-01" label "Harbour"').label, node('name "hbr-01" label "Harbour"').attrs]).toEqual([
+      'Harbour',
+      { name: 'hbr-01' },
+    ]);
     expect(node('label 007').label).toBe('007');
   });
 
@@ -42,8 +52,17 @@ describe('labels', () => {
 /** What the rest of netbrace reads from a design, format aside. */
 function projection(t: Topology, withNodes = true) {
   return {
-    nodes: withNodes ? t.nodes.map((n) => ({ id: n.id, label: n.label, hardened: n.hardened, lat: n.lat, lon: n.lon })) : t.nodes.map((n) => n.id),
-    links: t.links.map((l) => ({ key: l.key, length: l.length, latency: l.latency, capacity: l.capacity, riskGroups: l.riskGroups, hardened: l.hardened })),
+    nodes: withNodes
+      ? t.nodes.map((n) => ({ id: n.id, label: n.label, hardened: n.hardened, lat: n.lat, lon: n.lon }))
+      : t.nodes.map((n) => n.id),
+    links: t.links.map((l) => ({
+      key: l.key,
+      length: l.length,
+      latency: l.latency,
+      capacity: l.capacity,
+      riskGroups: l.riskGroups,
+      hardened: l.hardened,
+    })),
   };
 }
 
@@ -76,7 +95,14 @@ describe('attributes survive parsing in every format', () => {
       { id: 'edge', label: 'Edge', site: { lat: -33.9, lon: 151.2 } },
     ],
     links: [
-      { between: ['hub', 'edge'], length_km: 12.5, latency_ms: 0.07, capacity_gbps: 400, risk_groups: ['duct-1', 'duct-2'], hardened: true },
+      {
+        between: ['hub', 'edge'],
+        length_km: 12.5,
+        latency_ms: 0.07,
+        capacity_gbps: 400,
+        risk_groups: ['duct-1', 'duct-2'],
+        hardened: true,
+      },
       { between: ['edge', 'hub'], length_km: 0, risk_groups: ['duct-1'] },
     ],
   });
@@ -93,7 +119,8 @@ describe('attributes survive parsing in every format', () => {
     'graph [\n  node [ id "hub" label "Hub" hardened 1 Latitude 46.5 Longitude 7.25 ]\n  node [ id "edge" label "Edge" Latitude -33.9 Longitude 151.2 ]\n' +
     '  edge [ source "hub" target "edge" length 12.5 latency 0.07 capacity 400 risk_groups "duct-1;duct-2" hardened 1 ]\n' +
     '  edge [ source "edge" target "hub" length 0 risk_groups "duct-1" ]\n]\n';
-  const csv = 'source,target,length,latency,capacity,risk_groups,hardened\nhub,edge,12.5,0.07,400,duct-1;duct-2,yes\nedge,hub,0,,,duct-1,\n';
+  const csv =
+    'source,target,length,latency,capacity,risk_groups,hardened\nhub,edge,12.5,0.07,400,duct-1;duct-2,yes\nedge,hub,0,,,duct-1,\n';
 
   const expected = projection(parseDesign(yaml, 'd.net.yaml'));
 
@@ -104,8 +131,22 @@ describe('attributes survive parsing in every format', () => {
         { id: 'edge', label: 'Edge', hardened: false, lat: -33.9, lon: 151.2 },
       ],
       links: [
-        { key: 'edge\u2014hub', length: 12.5, latency: 0.07, capacity: 400, riskGroups: ['duct-1', 'duct-2'], hardened: true },
-        { key: 'edge\u2014hub#2', length: 0, latency: undefined, capacity: undefined, riskGroups: ['duct-1'], hardened: false },
+        {
+          key: 'edge\u2014hub',
+          length: 12.5,
+          latency: 0.07,
+          capacity: 400,
+          riskGroups: ['duct-1', 'duct-2'],
+          hardened: true,
+        },
+        {
+          key: 'edge\u2014hub#2',
+          length: 0,
+          latency: undefined,
+          capacity: undefined,
+          riskGroups: ['duct-1'],
+          hardened: false,
+        },
       ],
     });
   });

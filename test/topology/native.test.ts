@@ -14,7 +14,13 @@ describe('our design format (YAML)', () => {
     expect(t.name).toBe('Lakeside regional ring');
     expect(t.description).toBe('Invented example for tests and docs.');
     expect(t.nodes.map((n) => n.id)).toEqual(['north', 'east', 'south', 'west']);
-    expect(t.nodes[0]).toMatchObject({ kind: 'pop', lat: 47.1, lon: 8.3, hardened: false, pos: { line: 6, column: 5 } });
+    expect(t.nodes[0]).toMatchObject({
+      kind: 'pop',
+      lat: 47.1,
+      lon: 8.3,
+      hardened: false,
+      pos: { line: 6, column: 5 },
+    });
     expect(t.nodes[2].hardened).toBe(true);
     expect(t.nodes[3].label).toBe('West exchange');
     expect(t.links).toHaveLength(5);
@@ -30,7 +36,9 @@ describe('our design format (YAML)', () => {
     // Parallel links are kept, each with its own id and stable key.
     expect(t.links[2]).toMatchObject({ id: 'south-west-1', key: 'south\u2014west' });
     expect(t.links[3]).toMatchObject({ id: 'south-west-2', key: 'south\u2014west#2', hardened: true });
-    expect(t.riskGroups).toEqual([{ id: 'duct-lake-road', description: 'Shared duct along the lake road', pos: { line: 39, column: 5 } }]);
+    expect(t.riskGroups).toEqual([
+      { id: 'duct-lake-road', description: 'Shared duct along the lake road', pos: { line: 39, column: 5 } },
+    ]);
     expect(t.demands).toEqual([{ source: 'north', target: 'south', volume: 40, pos: { line: 42, column: 5 } }]);
     expect(t.latencyBudget).toBe(1.5);
     expect(t.metadata).toEqual({ owner: 'planning team' });
@@ -63,7 +71,9 @@ describe('our design format (YAML)', () => {
   it('drops a self-loop with a located warning', () => {
     const t = parseDesign(`${twoNodes}links:\n  - between: [a, b]\n  - between: [b, b]\n`, 'x.net.yaml');
     expect(t.links).toHaveLength(1);
-    expect(t.warnings).toEqual([expect.objectContaining({ severity: 'warning', line: 6, message: 'self-loop on node "b" dropped' })]);
+    expect(t.warnings).toEqual([
+      expect.objectContaining({ severity: 'warning', line: 6, message: 'self-loop on node "b" dropped' }),
+    ]);
   });
 });
 
@@ -100,7 +110,9 @@ describe('our design format: bad input is located', () => {
 
   it('duplicate node id names the first definition', () => {
     const e = caught(yaml(`${twoNodes}  - id: a\n`));
-    expect(e.format()).toBe('net/core.net.yaml:4:5: duplicate node id "a" — first defined on line 2; node ids must be unique');
+    expect(e.format()).toBe(
+      'net/core.net.yaml:4:5: duplicate node id "a" — first defined on line 2; node ids must be unique',
+    );
   });
 
   it('missing link end', () => {
@@ -112,7 +124,9 @@ describe('our design format: bad input is located', () => {
 
   it('link with no ends at all', () => {
     const e = caught(yaml('nodes:\n  - id: a\nlinks:\n  - length_km: 3\n'));
-    expect(e.format()).toBe('net/core.net.yaml:4:5: links[0] has no ends: "between" is missing — write between: [node-a, node-b]');
+    expect(e.format()).toBe(
+      'net/core.net.yaml:4:5: links[0] has no ends: "between" is missing — write between: [node-a, node-b]',
+    );
   });
 
   it('non-numeric length', () => {
@@ -127,12 +141,16 @@ describe('our design format: bad input is located', () => {
 
   it('demand to an unknown node', () => {
     const e = caught(yaml(`${twoNodes}demands:\n  - between: [a, cc]\n    volume: 3\n`));
-    expect(e.format()).toBe('net/core.net.yaml:5:18: demands[0] refers to unknown node "cc" — declare the node first, or fix the id');
+    expect(e.format()).toBe(
+      'net/core.net.yaml:5:18: demands[0] refers to unknown node "cc" — declare the node first, or fix the id',
+    );
   });
 
   it('duplicate link id', () => {
     const e = caught(yaml(`${twoNodes}links:\n  - {id: x, between: [a, b]}\n  - {id: x, between: [b, a]}\n`));
-    expect(e.format()).toBe('net/core.net.yaml:6:5: duplicate link id "x" — first used on line 5; link ids must be unique');
+    expect(e.format()).toBe(
+      'net/core.net.yaml:6:5: duplicate link id "x" — first used on line 5; link ids must be unique',
+    );
   });
 
   it('a key given twice', () => {
@@ -147,7 +165,12 @@ describe('our design format: bad input is located', () => {
   it('an alias bomb fails fast at the first alias', () => {
     // Nine levels of nine-fold aliases would expand to 9^9 ≈ 3.9e8 items.
     const levels = ['a0: &a0 [x, x, x, x, x, x, x, x, x]'];
-    for (let k = 1; k < 9; k++) levels.push(`a${k}: &a${k} [${Array(9).fill(`*a${k - 1}`).join(', ')}]`);
+    for (let k = 1; k < 9; k++)
+      levels.push(
+        `a${k}: &a${k} [${Array(9)
+          .fill(`*a${k - 1}`)
+          .join(', ')}]`,
+      );
     const text = `metadata:\n  ${levels.join('\n  ')}\nnodes: []\n`;
     const started = performance.now();
     const e = caught(yaml(text));
@@ -175,8 +198,11 @@ describe('the README example', () => {
 });
 
 describe('attributes and weights in our format', () => {
-  it('keeps a node\'s and a link\'s attributes, and reads a weight', () => {
-    const t = parseDesign(`${twoNodes}  - id: c\n    attributes: {Country: Norway, Internal: 1}\nlinks:\n  - between: [a, c]\n    weight: 12\n    attributes: {LinkLabel: 10G, length_estimated: true}\n`, 'a.net.yaml');
+  it("keeps a node's and a link's attributes, and reads a weight", () => {
+    const t = parseDesign(
+      `${twoNodes}  - id: c\n    attributes: {Country: Norway, Internal: 1}\nlinks:\n  - between: [a, c]\n    weight: 12\n    attributes: {LinkLabel: 10G, length_estimated: true}\n`,
+      'a.net.yaml',
+    );
     expect(t.nodes[2].attrs).toEqual({ Country: 'Norway', Internal: 1 });
     expect(t.links[0]).toMatchObject({ weight: 12, attrs: { LinkLabel: '10G', length_estimated: true } });
   });
@@ -185,6 +211,8 @@ describe('attributes and weights in our format', () => {
     expect(caught(yaml(`${twoNodes}links:\n  - between: [a, b]\n    weight: 1e12\n`)).format()).toBe(
       'net/core.net.yaml:6:13: links[0].weight must be at most 1000000000 (found 1000000000000)',
     );
-    expect(caught(yaml(`${twoNodes}    attributes: [x]\n`)).format()).toBe('net/core.net.yaml:4:17: nodes[1].attributes must be a mapping (key: value), not a list');
+    expect(caught(yaml(`${twoNodes}    attributes: [x]\n`)).format()).toBe(
+      'net/core.net.yaml:4:17: nodes[1].attributes must be a mapping (key: value), not a list',
+    );
   });
 });

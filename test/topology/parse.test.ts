@@ -6,8 +6,30 @@ import { caught, fixture } from './helpers.js';
 describe('format detection', () => {
   it('maps extensions to formats, ours first', () => {
     expect(
-      ['a.net.yaml', 'a.net.yml', 'A.NET.JSON', 'b.yaml', 'b.yml', 'b.json', 'c.graphml', 'd.gml', 'e.csv', 'f.txt'].map(detectFormat),
-    ).toEqual(['native-yaml', 'native-yaml', 'native-json', 'native-yaml', 'native-yaml', 'native-json', 'graphml', 'gml', 'csv', undefined]);
+      [
+        'a.net.yaml',
+        'a.net.yml',
+        'A.NET.JSON',
+        'b.yaml',
+        'b.yml',
+        'b.json',
+        'c.graphml',
+        'd.gml',
+        'e.csv',
+        'f.txt',
+      ].map(detectFormat),
+    ).toEqual([
+      'native-yaml',
+      'native-yaml',
+      'native-json',
+      'native-yaml',
+      'native-yaml',
+      'native-json',
+      'graphml',
+      'gml',
+      'csv',
+      undefined,
+    ]);
   });
 
   it('names accepted by --format', () => {
@@ -19,7 +41,9 @@ describe('format detection', () => {
       'csv',
       'native-yaml',
     ]);
-    expect(caught(() => parseFormatName('dot')).format()).toBe('unknown design format "dot" — use one of yaml, json, graphml, gml, csv, geojson');
+    expect(caught(() => parseFormatName('dot')).format()).toBe(
+      'unknown design format "dot" — use one of yaml, json, graphml, gml, csv, geojson',
+    );
   });
 
   it('options.format overrides the extension', () => {
@@ -74,6 +98,7 @@ describe('the five formats agree', () => {
       return t.links.map((l) => [name.get(l.source), name.get(l.target), l.length]);
     };
     const expected = ends('ring.net.yaml');
-    for (const f of ['ring.net.json', 'ring.gml', 'ring.graphml', 'ring.csv', 'ring.geojson']) expect(ends(f), f).toEqual(expected);
+    for (const f of ['ring.net.json', 'ring.gml', 'ring.graphml', 'ring.csv', 'ring.geojson'])
+      expect(ends(f), f).toEqual(expected);
   });
 });

@@ -29,18 +29,24 @@ const FORMATS = Object.keys(FILE) as DesignFormat[];
 
 /** Every 12th network (23 of 276), GML from the first, GraphML from the seventh, plus a few chosen for what they hold. */
 function sample(format: 'gml' | 'graphml'): string[] {
-  const all = readdirSync(path.join(ZOO, format)).filter((f) => f.endsWith(`.${format}`)).sort();
+  const all = readdirSync(path.join(ZOO, format))
+    .filter((f) => f.endsWith(`.${format}`))
+    .sort();
   const picked = all.filter((_, i) => i % 12 === (format === 'gml' ? 0 : 6));
   // Kdl: the largest; Cogentco: parallel links and nodes without coordinates; Abilene: every site placed.
-  for (const extra of ['Kdl', 'Cogentco', 'Abilene']) if (!picked.includes(`${extra}.${format}`)) picked.push(`${extra}.${format}`);
+  for (const extra of ['Kdl', 'Cogentco', 'Abilene'])
+    if (!picked.includes(`${extra}.${format}`)) picked.push(`${extra}.${format}`);
   return picked;
 }
 
-const zoo = (format: 'gml' | 'graphml', name: string) => parseDesign(readFileSync(path.join(ZOO, format, name), 'utf8'), name);
+const zoo = (format: 'gml' | 'graphml', name: string) =>
+  parseDesign(readFileSync(path.join(ZOO, format, name), 'utf8'), name);
 
 /** Attribute names a writer says it left out (or changed the type of). */
 function lostNames(lost: readonly string[]): Set<string> {
-  return new Set(lost.flatMap((s) => [...s.matchAll(/attribute "([^"]+)"|metadata "([^"]+)"/g)].map((m) => m[1] ?? m[2])));
+  return new Set(
+    lost.flatMap((s) => [...s.matchAll(/attribute "([^"]+)"|metadata "([^"]+)"/g)].map((m) => m[1] ?? m[2])),
+  );
 }
 
 function without(attrs: Readonly<Record<string, unknown>>, drop: ReadonlySet<string>): Record<string, unknown> {
@@ -49,7 +55,15 @@ function without(attrs: Readonly<Record<string, unknown>>, drop: ReadonlySet<str
 
 /** What a Topology says, without where it was read from. */
 function nodesOf(t: Topology, drop: ReadonlySet<string> = new Set()) {
-  return t.nodes.map((n) => ({ id: n.id, label: n.label, kind: n.kind, lat: n.lat, lon: n.lon, hardened: n.hardened, attrs: without(n.attrs, drop) }));
+  return t.nodes.map((n) => ({
+    id: n.id,
+    label: n.label,
+    kind: n.kind,
+    lat: n.lat,
+    lon: n.lon,
+    hardened: n.hardened,
+    attrs: without(n.attrs, drop),
+  }));
 }
 function linksOf(t: Topology, drop: ReadonlySet<string> = new Set()) {
   return t.links.map((l) => ({
@@ -66,7 +80,14 @@ function linksOf(t: Topology, drop: ReadonlySet<string> = new Set()) {
   }));
 }
 function designOf(t: Topology) {
-  return { name: t.name, description: t.description, metadata: t.metadata, riskGroups: t.riskGroups.map((g) => [g.id, g.description]), demands: t.demands.map((d) => [d.source, d.target, d.volume]), budget: t.latencyBudget };
+  return {
+    name: t.name,
+    description: t.description,
+    metadata: t.metadata,
+    riskGroups: t.riskGroups.map((g) => [g.id, g.description]),
+    demands: t.demands.map((d) => [d.source, d.target, d.volume]),
+    budget: t.latencyBudget,
+  };
 }
 function structureOf(t: Topology) {
   const g = compileTopology(t);
@@ -75,16 +96,31 @@ function structureOf(t: Topology) {
 }
 
 /** Compares `back` (read from `format`) with `source`, as far as `format` holds things. */
-function expectHeld(source: Topology, back: Topology, format: DesignFormat, lost: readonly string[], what: string): void {
+function expectHeld(
+  source: Topology,
+  back: Topology,
+  format: DesignFormat,
+  lost: readonly string[],
+  what: string,
+): void {
   const drop = lostNames(lost);
   expect(structureOf(back), `${what}: structure`).toEqual(structureOf(source));
   if (format === 'csv') {
     // Links only, every cell text; a link without an attribute reads back as an empty one.
-    const text = (a: Record<string, unknown>, names: string[]) => Object.fromEntries(names.map((k) => [k, a[k] === undefined ? '' : String(a[k])]));
+    const text = (a: Record<string, unknown>, names: string[]) =>
+      Object.fromEntries(names.map((k) => [k, a[k] === undefined ? '' : String(a[k])]));
     const names = [...new Set(source.links.flatMap((l) => Object.keys(l.attrs)))].filter((k) => !drop.has(k));
-    expect(linksOf(back).map((l) => ({ ...l, attrs: text(l.attrs, names) })), `${what}: links`).toEqual(linksOf(source).map((l) => ({ ...l, attrs: text(l.attrs, names) })));
+    expect(
+      linksOf(back).map((l) => ({ ...l, attrs: text(l.attrs, names) })),
+      `${what}: links`,
+    ).toEqual(linksOf(source).map((l) => ({ ...l, attrs: text(l.attrs, names) })));
     const linked = new Set(source.links.flatMap((l) => [l.source, l.target]));
-    expect(back.nodes.map((n) => n.id).sort(), `${what}: nodes`).toEqual(source.nodes.filter((n) => linked.has(n.id)).map((n) => n.id).sort());
+    expect(back.nodes.map((n) => n.id).sort(), `${what}: nodes`).toEqual(
+      source.nodes
+        .filter((n) => linked.has(n.id))
+        .map((n) => n.id)
+        .sort(),
+    );
     return;
   }
   expect(nodesOf(back, drop), `${what}: nodes`).toEqual(nodesOf(source, drop));
@@ -92,11 +128,18 @@ function expectHeld(source: Topology, back: Topology, format: DesignFormat, lost
     // GeoJSON draws every link and so measures it: a length the source lacked is the line's;
     // a link without a route is drawn straight and marked so.
     const route = new Set([...drop, 'route', 'route_km', 'route_known']);
-    expect(linksOf(back, route).map((l, i) => ({ ...l, length: source.links[i].length === undefined ? undefined : l.length })), `${what}: links`).toEqual(linksOf(source, route));
+    expect(
+      linksOf(back, route).map((l, i) => ({
+        ...l,
+        length: source.links[i].length === undefined ? undefined : l.length,
+      })),
+      `${what}: links`,
+    ).toEqual(linksOf(source, route));
   } else {
     expect(linksOf(back, drop), `${what}: links`).toEqual(linksOf(source, drop));
   }
-  if (format === 'native-yaml' || format === 'native-json') expect(designOf(back), `${what}: design`).toEqual(designOf(source));
+  if (format === 'native-yaml' || format === 'native-json')
+    expect(designOf(back), `${what}: design`).toEqual(designOf(source));
   else {
     expect(back.name, `${what}: name`).toBe(source.name);
     expect(without(back.metadata, drop), `${what}: metadata`).toEqual(without(source.metadata, drop));
@@ -121,7 +164,10 @@ describe.each(['gml', 'graphml'] as const)('zoo %s networks through every format
       if (format === 'geojson' && !placed) {
         const missing = t0.nodes.filter((n) => n.lat === undefined);
         expect(caught(() => writeDesign(t0, format)).message, name).toBe(
-          `cannot write GeoJSON: ${missing.length} of ${t0.nodes.length} nodes ha${missing.length === 1 ? 's' : 've'} no coordinates (${missing.slice(0, 5).map((n) => `"${n.id}"`).join(', ')}${missing.length > 5 ? `, and ${missing.length - 5} more` : ''})`,
+          `cannot write GeoJSON: ${missing.length} of ${t0.nodes.length} nodes ha${missing.length === 1 ? 's' : 've'} no coordinates (${missing
+            .slice(0, 5)
+            .map((n) => `"${n.id}"`)
+            .join(', ')}${missing.length > 5 ? `, and ${missing.length - 5} more` : ''})`,
         );
         continue;
       }
@@ -129,21 +175,31 @@ describe.each(['gml', 'graphml'] as const)('zoo %s networks through every format
       const t1 = reads(there.text, format);
       expectHeld(t0, t1, format, there.lost, `${name} → ${format}`);
       // The zoo knows no routes: every link is drawn straight, and says so.
-      if (format === 'geojson') expect(t1.links.filter((l) => l.attrs.route_known !== false), name).toEqual([]);
+      if (format === 'geojson')
+        expect(
+          t1.links.filter((l) => l.attrs.route_known !== false),
+          name,
+        ).toEqual([]);
       // And back into the source's format: what the first step kept comes back unchanged.
       const back = writeDesign(t1, srcFormat);
       const t2 = reads(back.text, srcFormat);
       expectHeld(t0, t2, format, [...there.lost, ...back.lost], `${name} → ${format} → ${source}`);
       // Through a format that holds everything, the source's format is written byte for byte the same.
-      if (format === 'native-yaml' || format === 'native-json' || format === srcFormat) expect(back.text, `${name} → ${format} → ${source}`).toBe(sourceText);
+      if (format === 'native-yaml' || format === 'native-json' || format === srcFormat)
+        expect(back.text, `${name} → ${format} → ${source}`).toBe(sourceText);
     }
   });
 });
 
 describe('our own format loses nothing', () => {
   const designs: [string, string][] = [
-    ...['ring.net.yaml', 'ring.net.json', 'ring.gml', 'ring.graphml', 'ring.csv', 'corrowen-fjord.geojson'].map((f): [string, string] => [f, fixture(f)]),
-    ['lunmere-backbone.net.yaml', readFileSync(path.join(repoRoot, 'fixtures', 'demo', 'base', 'designs', 'lunmere-backbone.net.yaml'), 'utf8')],
+    ...['ring.net.yaml', 'ring.net.json', 'ring.gml', 'ring.graphml', 'ring.csv', 'corrowen-fjord.geojson'].map(
+      (f): [string, string] => [f, fixture(f)],
+    ),
+    [
+      'lunmere-backbone.net.yaml',
+      readFileSync(path.join(repoRoot, 'fixtures', 'demo', 'base', 'designs', 'lunmere-backbone.net.yaml'), 'utf8'),
+    ],
   ];
 
   it.each(designs)('readDesign → writeNativeJson → readDesign: %s', (file, text) => {
@@ -166,7 +222,10 @@ describe('our own format loses nothing', () => {
 describe('estimated lengths', () => {
   it('a link without a length gets the great-circle distance, marked, and the others keep theirs', () => {
     // Two sites on the equator 1° apart: R·Δλ = 111.195 km (R = 6,371.0088 km, IUGG mean radius, from memory).
-    const t = parseDesign('nodes:\n  - {id: a, site: {lat: 0, lon: 0}}\n  - {id: b, site: {lat: 0, lon: 1}}\n  - {id: c}\nlinks:\n  - {between: [a, b]}\n  - {between: [b, c]}\n  - {between: [a, b], length_km: 130}\n', 'e.net.yaml');
+    const t = parseDesign(
+      'nodes:\n  - {id: a, site: {lat: 0, lon: 0}}\n  - {id: b, site: {lat: 0, lon: 1}}\n  - {id: c}\nlinks:\n  - {between: [a, b]}\n  - {between: [b, c]}\n  - {between: [a, b], length_km: 130}\n',
+      'e.net.yaml',
+    );
     const out = convertDesign(t, 'native-yaml');
     expect([out.estimated, out.unestimated]).toEqual([1, 1]);
     const back = parseDesign(out.text, 'e.net.yaml');
@@ -185,14 +244,22 @@ describe('awkward text survives every writer', () => {
   const ids = ['a"b', '<x&y>', '&amp;', 'semi;colon', 'com,ma', 'line\nbreak', 'é€😀', '007', '1e3', 'tab\there'];
   const text = `nodes:\n${ids.map((id, i) => `  - {id: ${JSON.stringify(id)}, label: ${JSON.stringify(`«${id}»`)}, site: {lat: ${i}, lon: ${-i}}, attributes: {note: ${JSON.stringify(`${id}'s`)}}}`).join('\n')}\nlinks:\n${ids
     .slice(1)
-    .map((id, i) => `  - {between: [${JSON.stringify(ids[i])}, ${JSON.stringify(id)}], id: ${JSON.stringify(`L ${id}`)}, attributes: {tag: ${JSON.stringify(`<${id}>`)}}}`)
+    .map(
+      (id, i) =>
+        `  - {between: [${JSON.stringify(ids[i])}, ${JSON.stringify(id)}], id: ${JSON.stringify(`L ${id}`)}, attributes: {tag: ${JSON.stringify(`<${id}>`)}}}`,
+    )
     .join('\n')}\n`;
   const t0 = parseDesign(text, 'awkward.net.yaml');
 
   it.each(FORMATS)('%s', (format) => {
     const written = writeDesign(t0, format);
     const t1 = reads(written.text, format);
-    expect(t1.links.map((l) => [l.id, l.source, l.target, l.attrs.tag])).toEqual(t0.links.map((l) => [l.id, l.source, l.target, l.attrs.tag]));
-    if (format !== 'csv') expect(t1.nodes.map((n) => [n.id, n.label, n.attrs.note])).toEqual(t0.nodes.map((n) => [n.id, n.label, n.attrs.note]));
+    expect(t1.links.map((l) => [l.id, l.source, l.target, l.attrs.tag])).toEqual(
+      t0.links.map((l) => [l.id, l.source, l.target, l.attrs.tag]),
+    );
+    if (format !== 'csv')
+      expect(t1.nodes.map((n) => [n.id, n.label, n.attrs.note])).toEqual(
+        t0.nodes.map((n) => [n.id, n.label, n.attrs.note]),
+      );
   });
 });

@@ -65,7 +65,8 @@ export function createBandedResistance(capacity: number) {
       const n = g.n;
       // A pseudo-peripheral start: two sweeps from a minimum-degree node (George & Liu).
       let start = 0;
-      for (let v = 1; v < n; v++) if (g.offsets[v + 1] - g.offsets[v] < g.offsets[start + 1] - g.offsets[start]) start = v;
+      for (let v = 1; v < n; v++)
+        if (g.offsets[v + 1] - g.offsets[v] < g.offsets[start + 1] - g.offsets[start]) start = v;
       start = cuthillMcKee(g, start);
       cuthillMcKee(g, start);
       for (let i = 0; i < n; i++) order[i] = queue[n - 1 - i]; // reversed

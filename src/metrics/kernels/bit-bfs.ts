@@ -147,7 +147,7 @@ class BfsScratch {
       // The first source is done; the batches take the rest.
       // Wide batches (256 sources, eight words per node) load each neighbour index once for
       // eight words; narrow ones (64) waste no words on a few sources.
-      for (let b = s0 + 1; b < s1; ) {
+      for (let b = s0 + 1; b < s1;) {
         const left = s1 - b;
         if (left > 64) {
           const width = Math.min(256, left);
@@ -403,7 +403,14 @@ class BfsScratch {
       const bits = width - 32 * w;
       full[w] = bits >= 32 ? 0xffffffff : bits <= 0 ? 0 : ((1 << bits) - 1) >>> 0;
     }
-    const f0 = full[0], f1 = full[1], f2 = full[2], f3 = full[3], f4 = full[4], f5 = full[5], f6 = full[6], f7 = full[7];
+    const f0 = full[0],
+      f1 = full[1],
+      f2 = full[2],
+      f3 = full[3],
+      f4 = full[4],
+      f5 = full[5],
+      f6 = full[6],
+      f7 = full[7];
     seen.fill(0, 8 * lo, 8 * hi);
     frontier.fill(0, 8 * lo, 8 * hi);
     next.fill(0, 8 * lo, 8 * hi);
@@ -491,7 +498,14 @@ class BfsScratch {
       } else {
         for (let v = lo; v < hi; v++) {
           if (done[v]) continue;
-          let a0 = 0, a1 = 0, a2 = 0, a3 = 0, a4 = 0, a5 = 0, a6 = 0, a7 = 0;
+          let a0 = 0,
+            a1 = 0,
+            a2 = 0,
+            a3 = 0,
+            a4 = 0,
+            a5 = 0,
+            a6 = 0,
+            a7 = 0;
           for (let p = ro[v]; p < ro[v + 1]; p++) {
             const u = 8 * rn[p];
             a0 |= frontier[u + 0];
@@ -537,10 +551,19 @@ class BfsScratch {
           seen[vb + 5] = t5;
           seen[vb + 6] = t6;
           seen[vb + 7] = t7;
-          reached += popcount32(x0) + popcount32(x1) + popcount32(x2) + popcount32(x3) + popcount32(x4) + popcount32(x5) + popcount32(x6) + popcount32(x7);
+          reached +=
+            popcount32(x0) +
+            popcount32(x1) +
+            popcount32(x2) +
+            popcount32(x3) +
+            popcount32(x4) +
+            popcount32(x5) +
+            popcount32(x6) +
+            popcount32(x7);
           if (counting) addBits8(planes, next, vb);
           nextActive[nextCount++] = v;
-          if (t0 === f0 && t1 === f1 && t2 === f2 && t3 === f3 && t4 === f4 && t5 === f5 && t6 === f6 && t7 === f7) done[v] = 1;
+          if (t0 === f0 && t1 === f1 && t2 === f2 && t3 === f3 && t4 === f4 && t5 === f5 && t6 === f6 && t7 === f7)
+            done[v] = 1;
         }
       }
       if (reached > 0) {

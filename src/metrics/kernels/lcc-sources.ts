@@ -7,7 +7,9 @@ import { createHopHistogram, type HopHistogram } from './bit-bfs.js';
 import { createSurvivorBuilder, type LocalGraph } from './subgraph.js';
 import { createComponentCounter, findRoot } from './union-find.js';
 
-export function createLargestComponentSources(g: CompactGraph): (mask: Mask, local: LocalGraph) => { sources: Int32Array; count: number } {
+export function createLargestComponentSources(
+  g: CompactGraph,
+): (mask: Mask, local: LocalGraph) => { sources: Int32Array; count: number } {
   const counter = createComponentCounter(g);
   const sources = new Int32Array(g.n);
   const out = { sources, count: 0 };

@@ -66,7 +66,8 @@ export function createFlowNetwork(nodeCapacity: number, entryCapacity: number): 
         if (split) addPair(2 * v, 2 * v + 1, 1, 0);
         for (let p = graph.offsets[v]; p < graph.offsets[v + 1]; p++) {
           const w = graph.neighbors[p];
-          if (split) addPair(2 * v + 1, 2 * w, 1, 0); // v_out → w_in; w's entry adds w_out → v_in
+          if (split)
+            addPair(2 * v + 1, 2 * w, 1, 0); // v_out → w_in; w's entry adds w_out → v_in
           else if (v < w) addPair(v, w, 1, 1); // one pair per link serves both directions
         }
       }
@@ -99,7 +100,7 @@ export function createFlowNetwork(nodeCapacity: number, entryCapacity: number): 
           }
         }
         if (!found) break;
-        for (let v = sink; v !== source; ) {
+        for (let v = sink; v !== source;) {
           const a = parentArc[v];
           cap[a]--;
           cap[rev[a]]++;

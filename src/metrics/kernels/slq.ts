@@ -142,7 +142,8 @@ export function createTraceEstimator(capacity: number, maxSteps: number) {
         squares += (nz2 * estimate) ** 2;
       }
       const mean = total / p;
-      const se = p > 1 ? Math.sqrt((Math.max(0, squares / p - mean * mean) * p) / (p - 1) / p) : Number.POSITIVE_INFINITY;
+      const se =
+        p > 1 ? Math.sqrt((Math.max(0, squares / p - mean * mean) * p) / (p - 1) / p) : Number.POSITIVE_INFINITY;
       return { mean, se, probes: p };
     },
   };

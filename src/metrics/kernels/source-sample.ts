@@ -34,9 +34,14 @@ export function sourceHash(id: string, seed: number): number {
  * The k sampled sources among nodes with these ids (indices into `ids`, ascending), or null
  * when `choice` asks for all of them or k ≥ the node count (the exact value is then cheaper).
  */
-export function sampleSources(ids: readonly string[], choice: SourceChoice | undefined, seed: number): Int32Array | null {
+export function sampleSources(
+  ids: readonly string[],
+  choice: SourceChoice | undefined,
+  seed: number,
+): Int32Array | null {
   if (choice === undefined || choice === 'all') return null;
-  if (!Number.isInteger(choice) || choice < 1) throw new RangeError(`sources must be a whole number of at least 1 or 'all', got ${String(choice)}`);
+  if (!Number.isInteger(choice) || choice < 1)
+    throw new RangeError(`sources must be a whole number of at least 1 or 'all', got ${String(choice)}`);
   if (choice >= ids.length) return null;
   const keys = new Uint32Array(ids.length);
   for (let i = 0; i < ids.length; i++) keys[i] = sourceHash(ids[i], seed);

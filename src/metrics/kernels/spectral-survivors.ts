@@ -75,4 +75,3 @@ export function createSpectralSurvivors(g: CompactGraph) {
     },
   };
 }
-

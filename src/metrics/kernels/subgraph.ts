@@ -87,7 +87,13 @@ export function createSurvivorBuilder(g: CompactGraph, simple: boolean): (mask: 
  * `out.toLocal` (sized to the original graph) maps original indices into `out` until the
  * next call.
  */
-export function inducedSubgraph(src: LocalGraph, nodes: Int32Array, from: number, count: number, out: LocalGraph): LocalGraph {
+export function inducedSubgraph(
+  src: LocalGraph,
+  nodes: Int32Array,
+  from: number,
+  count: number,
+  out: LocalGraph,
+): LocalGraph {
   const position = out.toLocal;
   for (let i = 0; i < out.n; i++) position[out.toOriginal[i]] = -1;
   for (let i = 0; i < count; i++) {

@@ -103,7 +103,8 @@ function parse(args: string[]) {
 /** A path the user typed (relative to where they are) as a repository path. */
 function repoPath(root: string, cwd: string, p: string): string {
   const rel = path.relative(root, path.resolve(cwd, p));
-  if (rel === '' || rel.startsWith('..') || path.isAbsolute(rel)) throw new UsageError(`${p} is not inside the repository`);
+  if (rel === '' || rel.startsWith('..') || path.isAbsolute(rel))
+    throw new UsageError(`${p} is not inside the repository`);
   return rel.split(path.sep).join('/');
 }
 
@@ -111,7 +112,11 @@ async function revision(root: string, ref: string): Promise<string> {
   // A full commit id missing from a shallow clone is fetched (that one commit only).
   if (/^[0-9a-f]{40}$/.test(ref) && !(await revParse(root, ref))) await ensureCommit(root, ref);
   const sha = await revParse(root, ref);
-  if (!sha) throw new UsageError(`"${ref}" is not a commit in this repository`, 'check the ref (git fetch it first if it is remote)');
+  if (!sha)
+    throw new UsageError(
+      `"${ref}" is not a commit in this repository`,
+      'check the ref (git fetch it first if it is remote)',
+    );
   return sha;
 }
 
@@ -124,10 +129,15 @@ async function readReports(given: string[], io: CommandIO): Promise<Report[]> {
     try {
       isDir = (await stat(full)).isDirectory();
     } catch {
-      throw new UsageError(`${g}: no such part report`, 'give the JSON reports the parts wrote (--json), or their folder');
+      throw new UsageError(
+        `${g}: no such part report`,
+        'give the JSON reports the parts wrote (--json), or their folder',
+      );
     }
     if (!isDir) files.push(g);
-    else for (const name of (await readdir(full)).filter((n) => n.endsWith('.json')).sort()) files.push(path.join(g, name));
+    else
+      for (const name of (await readdir(full)).filter((n) => n.endsWith('.json')).sort())
+        files.push(path.join(g, name));
   }
   const reports: Report[] = [];
   for (const f of files) {
@@ -152,8 +162,13 @@ function plainDeps(cwd: string): Pick<GateDeps, 'listChanged' | 'readAt' | 'list
   };
 }
 
-async function buildRequest(v: Values, positionals: string[], io: CommandIO): Promise<{ request: GateRequest; deps: GateDeps }> {
-  if (v.head !== undefined && v.worktree) throw new UsageError('--head and --worktree exclude each other', 'judge a commit or the files on disk');
+async function buildRequest(
+  v: Values,
+  positionals: string[],
+  io: CommandIO,
+): Promise<{ request: GateRequest; deps: GateDeps }> {
+  if (v.head !== undefined && v.worktree)
+    throw new UsageError('--head and --worktree exclude each other', 'judge a commit or the files on disk');
   const threads = sharedOption('--threads', v.threads, THREADS);
   const request: GateRequest = {
     policySource: choice('--policy-source', v['policy-source'], ['base', 'head'] as const, 'base'),
@@ -166,18 +181,21 @@ async function buildRequest(v: Values, positionals: string[], io: CommandIO): Pr
   const part = sharedOption('--part', v.part, PART, 'e.g. --part 2/4');
   if (part) request.part = part;
   if (v.join !== undefined) {
-    if (part) throw new UsageError('--part and --join exclude each other', 'join in a job of its own, after every part');
+    if (part)
+      throw new UsageError('--part and --join exclude each other', 'join in a job of its own, after every part');
     request.join = joinInput(await readReports(v.join, io));
   }
   const threaded = threadedGate(threads);
 
   const root = await repoRoot(io.cwd);
   if (root === null) {
-    if (positionals.length === 0) throw new UsageError('this is not a git repository', 'give the design files to judge as paths');
+    if (positionals.length === 0)
+      throw new UsageError('this is not a git repository', 'give the design files to judge as paths');
     if (v.base !== undefined || v.head !== undefined) throw new UsageError('--base and --head need a git repository');
     request.worktree = true;
     request.paths = positionals.map((p) => path.relative(io.cwd, path.resolve(io.cwd, p)).split(path.sep).join('/'));
-    if (v.policy !== undefined) request.policyPath = path.relative(io.cwd, path.resolve(io.cwd, v.policy)).split(path.sep).join('/');
+    if (v.policy !== undefined)
+      request.policyPath = path.relative(io.cwd, path.resolve(io.cwd, v.policy)).split(path.sep).join('/');
     return { request, deps: { ...plainDeps(io.cwd), ...threaded } };
   }
 
@@ -208,7 +226,8 @@ async function ensureDirectory(dir: string): Promise<void> {
   const missing: string[] = [];
   for (let d = dir; ; d = path.dirname(d)) {
     try {
-      if (!(await stat(d)).isDirectory()) throw Object.assign(new Error(`${d} is not a directory`), { code: 'ENOTDIR' });
+      if (!(await stat(d)).isDirectory())
+        throw Object.assign(new Error(`${d} is not a directory`), { code: 'ENOTDIR' });
       break;
     } catch (e) {
       if ((e as NodeJS.ErrnoException).code !== 'ENOENT' || path.dirname(d) === d) throw e;

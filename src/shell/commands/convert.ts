@@ -77,15 +77,25 @@ async function run(args: string[], io: CommandIO): Promise<number> {
     'max-bytes': { type: 'string' },
     'max-elements': { type: 'string' },
   });
-  if (positionals.length !== 1) throw new UsageError(positionals.length === 0 ? 'convert needs a FILE' : 'convert takes one FILE', 'netbrace convert designs/core.gml --to yaml');
+  if (positionals.length !== 1)
+    throw new UsageError(
+      positionals.length === 0 ? 'convert needs a FILE' : 'convert takes one FILE',
+      'netbrace convert designs/core.gml --to yaml',
+    );
   const file = positionals[0];
   const implied = values.out !== undefined ? detectFormat(values.out) : undefined;
   const to = values.to !== undefined ? parseFormatName(values.to) : implied;
   if (to === undefined) {
-    throw new UsageError(values.out !== undefined ? `cannot tell the format from --out ${values.out}` : 'convert needs --to FORMAT', `give --to (${FORMAT_CHOICES})`);
+    throw new UsageError(
+      values.out !== undefined ? `cannot tell the format from --out ${values.out}` : 'convert needs --to FORMAT',
+      `give --to (${FORMAT_CHOICES})`,
+    );
   }
   if (implied !== undefined && !compatible(to, implied)) {
-    throw new UsageError(`--out ${values.out} would be read as ${NAME[implied]}, not ${NAME[to]}`, 'give the file the extension of its format (.net.yaml, .net.json, .graphml, .gml, .csv, .geojson)');
+    throw new UsageError(
+      `--out ${values.out} would be read as ${NAME[implied]}, not ${NAME[to]}`,
+      'give the file the extension of its format (.net.yaml, .net.json, .graphml, .gml, .csv, .geojson)',
+    );
   }
   const options: ReadDesignOptions = { cwd: io.cwd };
   if (values.format !== undefined) options.format = parseFormatName(values.format);
@@ -116,8 +126,12 @@ async function run(args: string[], io: CommandIO): Promise<number> {
         `a lower bound of the route; marked ${LENGTH_ESTIMATED}: true)`,
     );
   }
-  if (result.overWeight > 0) say(`  ${result.overWeight} of them had only a weight: the weighted metrics now use these lengths instead`);
-  if (result.unestimated > 0) say(`${result.unestimated} link${result.unestimated === 1 ? '' : 's'} left without a length: a site has no coordinates`);
+  if (result.overWeight > 0)
+    say(`  ${result.overWeight} of them had only a weight: the weighted metrics now use these lengths instead`);
+  if (result.unestimated > 0)
+    say(
+      `${result.unestimated} link${result.unestimated === 1 ? '' : 's'} left without a length: a site has no coordinates`,
+    );
   if (result.lost.length > 0) say(`not kept by ${NAME[to]}: ${result.lost.join('; ')}`);
   for (const n of result.notes ?? []) say(`note: ${n}`);
 
@@ -132,12 +146,18 @@ async function run(args: string[], io: CommandIO): Promise<number> {
     await writeFile(target, result.text, { flag: values.force ? 'w' : 'wx' });
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    if (code === 'EEXIST') throw new UsageError(`${values.out} exists already; convert never overwrites a file`, 'give another --out FILE, or add --force');
+    if (code === 'EEXIST')
+      throw new UsageError(
+        `${values.out} exists already; convert never overwrites a file`,
+        'give another --out FILE, or add --force',
+      );
     if (code === 'ENOENT') throw new UsageError(`cannot write ${values.out}: its folder does not exist`);
     if (code === 'EISDIR') throw new UsageError(`cannot write ${values.out}: it is a folder`);
     throw e;
   }
-  io.stdout(`wrote ${values.out} (${NAME[to]}): ${t.nodes.length} node${t.nodes.length === 1 ? '' : 's'}, ${t.links.length} link${t.links.length === 1 ? '' : 's'}\n`);
+  io.stdout(
+    `wrote ${values.out} (${NAME[to]}): ${t.nodes.length} node${t.nodes.length === 1 ? '' : 's'}, ${t.links.length} link${t.links.length === 1 ? '' : 's'}\n`,
+  );
   if (report.length > 0) io.stdout(`${report.join('\n')}\n`);
   return 0;
 }

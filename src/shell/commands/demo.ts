@@ -59,7 +59,10 @@ export function findDemoFixtures(from = path.dirname(fileURLToPath(import.meta.u
     if (up === dir) break;
     dir = up;
   }
-  throw new UsageError('the demo scenario (fixtures/demo/) is not where netbrace expects it', 'run the demo from a netbrace checkout or an installed package');
+  throw new UsageError(
+    'the demo scenario (fixtures/demo/) is not where netbrace expects it',
+    'run the demo from a netbrace checkout or an installed package',
+  );
 }
 
 export interface DemoOutcome {
@@ -108,7 +111,10 @@ export interface DemoOptions {
   fixtures?: string;
 }
 
-export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ outcomes: DemoOutcome[]; repo: string; out: string }> {
+export async function runDemo(
+  io: CommandIO,
+  options: DemoOptions,
+): Promise<{ outcomes: DemoOutcome[]; repo: string; out: string }> {
   const fixtures = options.fixtures ?? findDemoFixtures();
   const out = path.resolve(io.cwd, options.out);
   mkdirSync(out, { recursive: true });
@@ -142,7 +148,20 @@ export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ ou
         html: path.join(out, `${change.id}.html`),
         text: path.join(out, `${change.id}.txt`),
       };
-      const args = ['--base', 'main', '--head', branch, '--json', files.json, '--summary', files.markdown, '--sarif', files.sarif, '--html', files.html];
+      const args = [
+        '--base',
+        'main',
+        '--head',
+        branch,
+        '--json',
+        files.json,
+        '--summary',
+        files.markdown,
+        '--sarif',
+        files.sarif,
+        '--html',
+        files.html,
+      ];
       io.stdout(`\n\u2500\u2500 Change ${i + 1} of ${DEMO_CHANGES.length}: ${change.title}\n`);
       io.stdout(`   ${branch}: ${git('log', '-1', '--format=%h')} \u00b7 expected: ${EXPECT_WORD[change.expect]}\n`);
       const rel = (a: string) => {
@@ -164,9 +183,17 @@ export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ ou
       writeFileSync(files.text, printed.join('').replace(/\u001b\[[0-9;]*m/g, ''));
       let verdict: DemoOutcome['verdict'] = 'error';
       let warnings = 0;
-      if (existsSync(files.json)) ({ verdict, warnings } = judge(JSON.parse(readFileSync(files.json, 'utf8')) as Report));
+      if (existsSync(files.json))
+        ({ verdict, warnings } = judge(JSON.parse(readFileSync(files.json, 'utf8')) as Report));
       git('checkout', '-q', 'main');
-      outcomes.push({ change, exitCode, verdict, warnings, files, asExpected: exitCode !== 2 && matches(change.expect, verdict, warnings) });
+      outcomes.push({
+        change,
+        exitCode,
+        verdict,
+        warnings,
+        files,
+        asExpected: exitCode !== 2 && matches(change.expect, verdict, warnings),
+      });
     }
   } finally {
     if (!options.keep) rmSync(repo, { recursive: true, force: true });
@@ -176,7 +203,14 @@ export async function runDemo(io: CommandIO, options: DemoOptions): Promise<{ ou
 
 function summaryLines(outcomes: DemoOutcome[]): string[] {
   return outcomes.map((o, i) => {
-    const said = o.verdict === 'error' ? 'no report' : o.verdict === 'fail' ? 'FAIL' : o.warnings > 0 ? `PASS with ${o.warnings} warning${o.warnings === 1 ? '' : 's'}` : 'PASS';
+    const said =
+      o.verdict === 'error'
+        ? 'no report'
+        : o.verdict === 'fail'
+          ? 'FAIL'
+          : o.warnings > 0
+            ? `PASS with ${o.warnings} warning${o.warnings === 1 ? '' : 's'}`
+            : 'PASS';
     const mark = o.asExpected ? '\u2713' : '\u2717';
     return `  ${mark} ${i + 1}. ${o.change.id.padEnd(22)} ${said.padEnd(22)} (expected ${EXPECT_WORD[o.change.expect]}, exit ${o.exitCode})`;
   });
@@ -227,13 +261,17 @@ export const demoCommand: Command = {
       if (err.code === 'ENOENT' && /git/.test(String(err.path ?? err.message))) {
         throw new UsageError('the demo needs git on the PATH', 'install git and run it again');
       }
-      if (err.stderr !== undefined) throw new UsageError(`git failed while setting up the demo: ${String(err.stderr).trim()}`);
+      if (err.stderr !== undefined)
+        throw new UsageError(`git failed while setting up the demo: ${String(err.stderr).trim()}`);
       throw e;
     }
     const { outcomes, repo, out: dir } = result;
     io.stdout(`\nDemo summary\n${summaryLines(outcomes).join('\n')}\n`);
     io.stdout(`\nReports written to ${dir}\n`);
-    for (const o of outcomes) io.stdout(`  ${path.basename(o.files.html)}  ${path.basename(o.files.json)}  ${path.basename(o.files.markdown)}  ${path.basename(o.files.sarif)}\n`);
+    for (const o of outcomes)
+      io.stdout(
+        `  ${path.basename(o.files.html)}  ${path.basename(o.files.json)}  ${path.basename(o.files.markdown)}  ${path.basename(o.files.sarif)}\n`,
+      );
     if (parsed.values.keep) io.stdout(`Scratch repository kept at ${repo}\n`);
     if (outcomes.some((o) => o.exitCode === 2)) return 2;
     return outcomes.every((o) => o.asExpected) ? 0 : 1;

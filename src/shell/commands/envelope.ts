@@ -86,13 +86,22 @@ export function parseScore(text: string, combine: string | undefined): RValueSpe
   if (combine !== undefined && combine !== 'mean' && combine !== 'min') {
     throw new UsageError(`--combine must be "mean" or "min", not "${combine}"`);
   }
-  const parts = text.split(',').map((p) => p.trim()).filter(Boolean);
-  if (parts.length === 0) throw new UsageError('--score needs at least one ID=WEIGHT', 'e.g. --score efficiency=2,largest_component=1');
+  const parts = text
+    .split(',')
+    .map((p) => p.trim())
+    .filter(Boolean);
+  if (parts.length === 0)
+    throw new UsageError('--score needs at least one ID=WEIGHT', 'e.g. --score efficiency=2,largest_component=1');
   const list = parts.map((p) => {
     const [id, w = '1'] = p.split('=');
-    if (!isMetricId(id)) throw new UsageError(`unknown metric "${id}" in --score`, `known metrics: ${metrics.map((m) => m.id).join(', ')}`);
+    if (!isMetricId(id))
+      throw new UsageError(
+        `unknown metric "${id}" in --score`,
+        `known metrics: ${metrics.map((m) => m.id).join(', ')}`,
+      );
     const weight = Number(w);
-    if (!(weight > 0) || !Number.isFinite(weight)) throw new UsageError(`weight of ${id} must be a number > 0, not "${w}"`);
+    if (!(weight > 0) || !Number.isFinite(weight))
+      throw new UsageError(`weight of ${id} must be a number > 0, not "${w}"`);
     return { id: id as MetricId, weight };
   });
   return { metrics: list, combine: (combine ?? 'mean') as 'mean' | 'min' };
@@ -107,7 +116,12 @@ export interface EnvelopeOrigin {
 }
 
 /** The command's JSON: one object per run (snake_case, as the CLI's other outputs). */
-export function envelopeJson(file: string, spec: EvaluationSpec, ev: DesignEvaluation, origin: EnvelopeOrigin = {}): Record<string, unknown> {
+export function envelopeJson(
+  file: string,
+  spec: EvaluationSpec,
+  ev: DesignEvaluation,
+  origin: EnvelopeOrigin = {},
+): Record<string, unknown> {
   const e = ev.evaluation;
   const common = {
     file,
@@ -116,7 +130,8 @@ export function envelopeJson(file: string, spec: EvaluationSpec, ev: DesignEvalu
     ...(origin.rSource !== undefined ? { r_source: origin.rSource } : {}),
     seed: spec.seed,
   };
-  const worst = (w: WorstCase | undefined) => (w ? { worst_case: { k: w.k, method: w.method, kind: w.kind, elements: w.elements, values: w.values } } : {});
+  const worst = (w: WorstCase | undefined) =>
+    w ? { worst_case: { k: w.k, method: w.method, kind: w.kind, elements: w.elements, values: w.values } } : {};
   const env: Envelope | undefined = e.envelopes[0];
   const attack: AttackCurve | undefined = e.attacks[0];
   const cont: Contingency | undefined = e.contingencies[0];
@@ -150,7 +165,14 @@ export function envelopeJson(file: string, spec: EvaluationSpec, ev: DesignEvalu
       ...worst(attack.worstCase),
     };
   } else {
-    body = { challenge: cont.challenge, kind: cont.kind, evaluated: cont.evaluated, total: cont.total, min: cont.min, worst: cont.worst };
+    body = {
+      challenge: cont.challenge,
+      kind: cont.kind,
+      evaluated: cont.evaluated,
+      total: cont.total,
+      min: cont.min,
+      worst: cont.worst,
+    };
   }
   return { ...common, ...body, degraded: e.degraded, caution: CAUTION };
 }
@@ -162,9 +184,17 @@ function shortList(ids: readonly string[], limit = 10): string {
 }
 
 /** The human view. */
-export function formatEnvelope(file: string, spec: EvaluationSpec, ev: DesignEvaluation, origin: EnvelopeOrigin = {}): string {
+export function formatEnvelope(
+  file: string,
+  spec: EvaluationSpec,
+  ev: DesignEvaluation,
+  origin: EnvelopeOrigin = {},
+): string {
   const e = ev.evaluation;
-  const rText = spec.r.metrics.length === 1 ? spec.r.metrics[0].id : `${spec.r.combine} of ${spec.r.metrics.map((m) => `${m.id}×${m.weight}`).join(', ')}`;
+  const rText =
+    spec.r.metrics.length === 1
+      ? spec.r.metrics[0].id
+      : `${spec.r.combine} of ${spec.r.metrics.map((m) => `${m.id}×${m.weight}`).join(', ')}`;
   const lines: string[] = [];
   const env = e.envelopes[0];
   const attack = e.attacks[0];
@@ -177,16 +207,24 @@ export function formatEnvelope(file: string, spec: EvaluationSpec, ev: DesignEva
   if (env) {
     const [lo, hi] = env.band.map(String);
     const unit = env.xUnit === 'km' ? 'radius km' : `${env.kind}s removed`;
-    lines.push(`${file} — ${env.challenge}, R = ${rText}, ${env.realizations} ${env.challenge === 'regional' ? 'epicentres' : 'realizations'}, seed ${env.seed}`);
+    lines.push(
+      `${file} — ${env.challenge}, R = ${rText}, ${env.realizations} ${env.challenge === 'regional' ? 'epicentres' : 'realizations'}, seed ${env.seed}`,
+    );
     lines.push(`  ${unit.padStart(15)}     min   q${lo.padEnd(4)}  median  q${hi.padEnd(4)}     max    mean`);
     env.x.forEach((x, j) => {
       const xs = env.xUnit === 'km' ? x.toFixed(1) : `${(x * 100).toFixed(1)} %`;
       const q = env.quantiles;
-      lines.push(`  ${xs.padStart(15)}  ${[env.min[j], q[lo].value[j], env.median[j], q[hi].value[j], env.max[j], env.mean[j]].map(f4).join('  ')}`);
+      lines.push(
+        `  ${xs.padStart(15)}  ${[env.min[j], q[lo].value[j], env.median[j], q[hi].value[j], env.max[j], env.mean[j]].map(f4).join('  ')}`,
+      );
     });
-    lines.push(`  area ${f4(env.area)} (mean median R; higher is better), spread ${f4(env.spread)} (mean band width; smaller is better)`);
+    lines.push(
+      `  area ${f4(env.area)} (mean median R; higher is better), spread ${f4(env.spread)} (mean band width; smaller is better)`,
+    );
     for (const w of env.weakest) {
-      lines.push(`  weak realization ${w.realization}${w.label ? ` (epicentre ${w.label})` : ''}: ${shortList(w.elements)}`);
+      lines.push(
+        `  weak realization ${w.realization}${w.label ? ` (epicentre ${w.label})` : ''}: ${shortList(w.elements)}`,
+      );
     }
     worstLines(env.worstCase);
   } else if (attack) {
@@ -194,11 +232,14 @@ export function formatEnvelope(file: string, spec: EvaluationSpec, ev: DesignEva
     const K = attack.values.length - 1;
     const shown = [...new Set(Array.from({ length: 11 }, (_, i) => Math.round((i * K) / 10)))];
     lines.push(`  ${'removed'.padStart(10)}        R`);
-    for (const k of shown) lines.push(`  ${`${k} (${(attack.x[k] * 100).toFixed(1)} %)`.padStart(16)}  ${f4(attack.values[k])}`);
+    for (const k of shown)
+      lines.push(`  ${`${k} (${(attack.x[k] * 100).toFixed(1)} %)`.padStart(16)}  ${f4(attack.values[k])}`);
     lines.push(`  area ${f4(attack.area)}; removal order: ${shortList(attack.sequence)}`);
     worstLines(attack.worstCase);
   } else if (cont) {
-    lines.push(`${file} — ${cont.challenge} over ${cont.kind}s, R = ${rText}: ${cont.evaluated} of ${cont.total} cases evaluated`);
+    lines.push(
+      `${file} — ${cont.challenge} over ${cont.kind}s, R = ${rText}: ${cont.evaluated} of ${cont.total} cases evaluated`,
+    );
     lines.push(`  lowest R ${f4(cont.min)}`);
     for (const w of cont.worst) lines.push(`  ${f4(w.value)}  ${w.elements.join(' + ')}`);
   }
@@ -237,23 +278,32 @@ export const envelopeCommand: Command = {
       json: { type: 'boolean' },
     });
     const v = parsed.values;
-    if (parsed.positionals.length !== 1) throw new UsageError('envelope needs exactly one FILE', 'netbrace envelope designs/core.net.yaml --challenge random-nodes');
+    if (parsed.positionals.length !== 1)
+      throw new UsageError(
+        'envelope needs exactly one FILE',
+        'netbrace envelope designs/core.net.yaml --challenge random-nodes',
+      );
     const file = parsed.positionals[0];
     if (v.metric !== undefined && v.score !== undefined) throw new UsageError('give --metric or --score, not both');
     if (v.combine !== undefined && v.score === undefined) throw new UsageError('--combine goes with --score');
     const local = await readLocalPolicy(io, v.policy);
     const fp = designPolicy(local, io, file);
-    const names = [...fp.challenges.map((c) => c.name), ...challenges.map((c) => c.name).filter((n) => !fp.challenges.some((c) => c.name === n))];
+    const names = [
+      ...fp.challenges.map((c) => c.name),
+      ...challenges.map((c) => c.name).filter((n) => !fp.challenges.some((c) => c.name === n)),
+    ];
     if (v.challenge === undefined) throw new UsageError('--challenge is required', `one of: ${names.join(', ')}`);
     const defined = fp.challenges.find((c) => c.name === v.challenge);
-    if (!defined && !isChallengeName(v.challenge)) throw new UsageError(`unknown challenge "${v.challenge}"`, `one of: ${names.join(', ')}`);
+    if (!defined && !isChallengeName(v.challenge))
+      throw new UsageError(`unknown challenge "${v.challenge}"`, `one of: ${names.join(', ')}`);
     const origin: EnvelopeOrigin = {};
     let r: RValueSpec;
     if (v.score !== undefined) {
       r = parseScore(v.score, v.combine);
       origin.rSource = '--score';
     } else if (v.metric !== undefined) {
-      if (!isMetricId(v.metric)) throw new UsageError(`unknown metric "${v.metric}"`, `known metrics: ${metrics.map((m) => m.id).join(', ')}`);
+      if (!isMetricId(v.metric))
+        throw new UsageError(`unknown metric "${v.metric}"`, `known metrics: ${metrics.map((m) => m.id).join(', ')}`);
       r = { metrics: [{ id: v.metric, weight: 1 }], combine: 'mean' };
       origin.rSource = '--metric';
     } else {
@@ -276,17 +326,22 @@ export const envelopeCommand: Command = {
       if (value !== undefined) params[key] = value;
     };
     set('realizations', wholeNumber('--realizations', v.realizations, 1));
-    set('until', finiteNumber('--until', v.until, (x) => x >= 0, 'a number ≥ 0'));
+    set(
+      'until',
+      finiteNumber('--until', v.until, (x) => x >= 0, 'a number ≥ 0'),
+    );
     set('points', wholeNumber('--points', v.points, 2));
     set('worstCase', wholeNumber('--worst-case', v['worst-case'], 0));
     set('beam', wholeNumber('--beam', v.beam, 1));
     if (v.band !== undefined) {
       const b = v.band.split(',').map(Number);
-      if (b.length !== 2 || !(b[0] > 0 && b[0] < b[1] && b[1] < 1)) throw new UsageError(`--band must be LO,HI with 0 < LO < HI < 1, not "${v.band}"`);
+      if (b.length !== 2 || !(b[0] > 0 && b[0] < b[1] && b[1] < 1))
+        throw new UsageError(`--band must be LO,HI with 0 < LO < HI < 1, not "${v.band}"`);
       params.band = [b[0], b[1]];
     }
     if (v.element !== undefined) {
-      if (v.element !== 'node' && v.element !== 'link') throw new UsageError(`--element must be node or link, not "${v.element}"`);
+      if (v.element !== 'node' && v.element !== 'link')
+        throw new UsageError(`--element must be node or link, not "${v.element}"`);
       params.element = v.element;
     }
     // A threshold's x beyond a changed --until is not on the grid any more.
@@ -314,9 +369,18 @@ export const envelopeCommand: Command = {
     const e = ev.evaluation;
     if (e.envelopes.length + e.attacks.length + e.contingencies.length === 0) {
       const na = e.notApplicable?.[0];
-      throw new UsageError(na ? `${na.challenge} does not apply to this design: ${na.reason}` : (e.degraded[0] ?? `${v.challenge} produced no result`), 'choose another challenge for this design');
+      throw new UsageError(
+        na
+          ? `${na.challenge} does not apply to this design: ${na.reason}`
+          : (e.degraded[0] ?? `${v.challenge} produced no result`),
+        'choose another challenge for this design',
+      );
     }
-    io.stdout(v.json ? `${JSON.stringify(envelopeJson(file, spec, ev, origin), null, 2)}\n` : formatEnvelope(file, spec, ev, origin));
+    io.stdout(
+      v.json
+        ? `${JSON.stringify(envelopeJson(file, spec, ev, origin), null, 2)}\n`
+        : formatEnvelope(file, spec, ev, origin),
+    );
     return 0;
   },
 };

@@ -94,7 +94,12 @@ export function rankSingleLosses(
   kinds: readonly ElementKind[] = KINDS,
   onStep: (done: number, total: number) => void = () => {},
   only?: ReadonlyMap<ElementKind, ReadonlySet<number>>,
-): { intact: number; evaluated: Record<ElementKind, number>; hardened: Record<ElementKind, number>; ranked: Omit<SingleLoss, 'rank' | 'label'>[] } {
+): {
+  intact: number;
+  evaluated: Record<ElementKind, number>;
+  hardened: Record<ElementKind, number>;
+  ranked: Omit<SingleLoss, 'rank' | 'label'>[];
+} {
   const mask = createMask(g);
   const intact = rfn(mask);
   const cuts = findCutElements(g);
@@ -138,7 +143,9 @@ export function rankSingleLosses(
       onStep(++done, total);
     }
   }
-  out.sort((a, b) => a.r - b.r || kinds.indexOf(a.kind) - kinds.indexOf(b.kind) || a.line - b.line || a.order - b.order);
+  out.sort(
+    (a, b) => a.r - b.r || kinds.indexOf(a.kind) - kinds.indexOf(b.kind) || a.line - b.line || a.order - b.order,
+  );
   return { intact, evaluated, hardened, ranked: out.map(({ order: _order, ...rest }) => rest) };
 }
 
@@ -149,7 +156,10 @@ function metricR(metricIds: string[]): { spec: RValueSpec; source: string } | un
     if (!isMetricId(id)) getMetric(id); // throws the UsageError that lists the known ids
   }
   return {
-    spec: { metrics: metricIds.map((id) => ({ id: id as RValueSpec['metrics'][number]['id'], weight: 1 })), combine: 'mean' },
+    spec: {
+      metrics: metricIds.map((id) => ({ id: id as RValueSpec['metrics'][number]['id'], weight: 1 })),
+      combine: 'mean',
+    },
     source: metricIds.length === 1 ? '--metric' : '--metric (equal weights)',
   };
 }
@@ -166,7 +176,12 @@ const CHOSEN =
  * off are the ones a planner must see, a duct fails many links at once, and an element that
  * touches more links tends to leave a lower R. Ties go to file order. Pure.
  */
-export function planSingleLosses(g: CompactGraph, spec: RValueSpec, kinds: readonly ElementKind[], maxWork: number): SingleLossPlan {
+export function planSingleLosses(
+  g: CompactGraph,
+  spec: RValueSpec,
+  kinds: readonly ElementKind[],
+  maxWork: number,
+): SingleLossPlan {
   const perCase = rCost(g, spec, survivorShape(g)) + passCost(g);
   const units = new Map<ElementKind, Set<number>>();
   const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
@@ -208,7 +223,8 @@ export function planSingleLosses(g: CompactGraph, spec: RValueSpec, kinds: reado
   }
   const left = [...rest.values()].reduce((s, l) => s + l.length, 0);
   const budget = room;
-  for (const [k, list] of rest) for (const u of list.slice(0, Math.floor((budget * list.length) / Math.max(1, left)))) take(k, u);
+  for (const [k, list] of rest)
+    for (const u of list.slice(0, Math.floor((budget * list.length) / Math.max(1, left)))) take(k, u);
   for (const [k, list] of rest) for (const u of list) take(k, u); // what rounding left over, in kind order
   let evaluated = 0;
   for (const s of units.values()) evaluated += s.size;
@@ -257,8 +273,14 @@ export function formatExplanation(x: Explanation, top: number, color: boolean, w
   const metrics = x.r.metrics.map((m) => `${m.id}${x.r.metrics.length > 1 ? ` ${m.weight}` : ''}`).join(', ');
   const out: string[] = [];
   out.push(c.bold(`${x.file} \u2014 single losses ranked by the R they leave`));
-  out.push(c.dim(`R = ${x.r.combine === 'min' ? 'minimum' : x.r.metrics.length > 1 ? 'weighted mean' : 'normalized'} of ${metrics} (from ${x.rSource})`));
-  const hard = KINDS.filter((k) => x.hardened[k] > 0).map((k) => `${x.hardened[k]} ${KIND_WORD[k]}${x.hardened[k] === 1 ? '' : 's'}`);
+  out.push(
+    c.dim(
+      `R = ${x.r.combine === 'min' ? 'minimum' : x.r.metrics.length > 1 ? 'weighted mean' : 'normalized'} of ${metrics} (from ${x.rSource})`,
+    ),
+  );
+  const hard = KINDS.filter((k) => x.hardened[k] > 0).map(
+    (k) => `${x.hardened[k]} ${KIND_WORD[k]}${x.hardened[k] === 1 ? '' : 's'}`,
+  );
   out.push(
     `intact R ${r4(x.intact)} \u00b7 evaluated ${x.evaluated.node} sites, ${x.evaluated.link} links, ${x.evaluated.group} shared-risk groups` +
       (hard.length ? ` \u00b7 hardened, not removed: ${hard.join(', ')}` : ''),
@@ -272,9 +294,14 @@ export function formatExplanation(x: Explanation, top: number, color: boolean, w
   }
   out.push('');
   const rows = x.elements.slice(0, top);
-  const shown = (e: SingleLoss) => (e.label && e.label.toLowerCase() !== e.id.toLowerCase() ? `${e.id} (${e.label})` : e.id);
+  const shown = (e: SingleLoss) =>
+    e.label && e.label.toLowerCase() !== e.id.toLowerCase() ? `${e.id} (${e.label})` : e.id;
   const idW = Math.min(34, Math.max(7, ...rows.map((e) => shown(e).length)));
-  out.push(c.bold(`${'#'.padStart(3)}  ${'kind'.padEnd(10)}  ${'element'.padEnd(idW)}  ${'line'.padStart(5)}  ${'R left'.padStart(7)}  ${'drop'.padStart(7)}  cuts off`));
+  out.push(
+    c.bold(
+      `${'#'.padStart(3)}  ${'kind'.padEnd(10)}  ${'element'.padEnd(idW)}  ${'line'.padStart(5)}  ${'R left'.padStart(7)}  ${'drop'.padStart(7)}  cuts off`,
+    ),
+  );
   for (const e of rows) {
     const name = shown(e).slice(0, idW);
     const cut = e.cutsOff.length
@@ -285,7 +312,8 @@ export function formatExplanation(x: Explanation, top: number, color: boolean, w
     const line = prefix + (cut.length > room ? `${cut.slice(0, room - 1)}\u2026` : cut);
     out.push(e.cutsOff.length ? c.red(line) : e.drop > 0 ? line : c.dim(line));
   }
-  if (x.elements.length > rows.length) out.push(c.dim(`  \u2026 ${x.elements.length - rows.length} more (--top N shows more)`));
+  if (x.elements.length > rows.length)
+    out.push(c.dim(`  \u2026 ${x.elements.length - rows.length} more (--top N shows more)`));
   out.push('');
   const note =
     'Start at the top: each row is one element whose loss alone costs the most R. A row that cuts sites off ' +
@@ -349,8 +377,10 @@ export const explainCommand: Command = {
       json: { type: 'boolean' },
     });
     const [file, ...extra] = parsed.positionals;
-    if (file === undefined) throw new UsageError('explain needs a design FILE', 'netbrace explain designs/backbone.net.yaml');
-    if (extra.length) throw new UsageError(`explain takes one FILE, got ${parsed.positionals.length}`, 'run it once per file');
+    if (file === undefined)
+      throw new UsageError('explain needs a design FILE', 'netbrace explain designs/backbone.net.yaml');
+    if (extra.length)
+      throw new UsageError(`explain takes one FILE, got ${parsed.positionals.length}`, 'run it once per file');
     const top = wholeNumber('--top', parsed.values.top, 1) ?? 15;
     const kindArg = parsed.values.kind ?? 'all';
     if (!['node', 'link', 'group', 'all'].includes(kindArg)) {

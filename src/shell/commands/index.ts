@@ -12,4 +12,15 @@ import { mapCommand } from './map.js';
 import { mendCommand } from './mend.js';
 import { convertCommand } from './convert.js';
 
-export const commands: Command[] = [inspectCommand, explainCommand, envelopeCommand, checkCommand, initCommand, demoCommand, metricsCommand, mapCommand, mendCommand, convertCommand];
+export const commands: Command[] = [
+  inspectCommand,
+  explainCommand,
+  envelopeCommand,
+  checkCommand,
+  initCommand,
+  demoCommand,
+  metricsCommand,
+  mapCommand,
+  mendCommand,
+  convertCommand,
+];

@@ -7,7 +7,14 @@ import path from 'node:path';
 import { UsageError } from '../../errors.js';
 import { mkdir } from 'node:fs/promises';
 import { DEFAULT_POLICY_PATH, STARTER_POLICY } from '../../policy/defaults.js';
-import { ACTION_PLACEHOLDER, CODEOWNERS_PATH, codeownersText, requiredCheckSteps, WORKFLOW_PATH, workflowText } from '../../policy/workflow-template.js';
+import {
+  ACTION_PLACEHOLDER,
+  CODEOWNERS_PATH,
+  codeownersText,
+  requiredCheckSteps,
+  WORKFLOW_PATH,
+  workflowText,
+} from '../../policy/workflow-template.js';
 import { VERSION } from '../../version.js';
 import { repoRoot } from '../git.js';
 import type { Command, CommandIO } from '../io.js';
@@ -58,7 +65,12 @@ async function run(args: string[], io: CommandIO): Promise<number> {
   const { values } = parseCommandArgs(
     'init',
     args,
-    { policy: { type: 'string' }, workflow: { type: 'boolean' }, action: { type: 'string' }, owners: { type: 'string' } },
+    {
+      policy: { type: 'string' },
+      workflow: { type: 'boolean' },
+      action: { type: 'string' },
+      owners: { type: 'string' },
+    },
     false,
   );
   if (!values.workflow && (values.action !== undefined || values.owners !== undefined)) {
@@ -66,35 +78,52 @@ async function run(args: string[], io: CommandIO): Promise<number> {
   }
   const action = values.action ?? ACTION_PLACEHOLDER;
   if (values.action !== undefined && !/^[A-Za-z0-9_.-]+\/[A-Za-z0-9_.-]+@[0-9a-f]{40}$/.test(values.action)) {
-    throw new UsageError(`--action ${values.action} is not OWNER/REPO@<40-character commit SHA>`, 'pin by the full commit: tags can be moved (README, "Pinning")');
+    throw new UsageError(
+      `--action ${values.action} is not OWNER/REPO@<40-character commit SHA>`,
+      'pin by the full commit: tags can be moved (README, "Pinning")',
+    );
   }
   const owners = values.owners?.trim().split(/\s+/).filter(Boolean);
-  for (const o of owners ?? []) if (!OWNER.test(o)) throw new UsageError(`--owners: "${o}" is not @user, @org/team or an e-mail address`);
+  for (const o of owners ?? [])
+    if (!OWNER.test(o)) throw new UsageError(`--owners: "${o}" is not @user, @org/team or an e-mail address`);
 
   const root = (await repoRoot(io.cwd)) ?? io.cwd;
-  const target = values.policy !== undefined ? path.resolve(io.cwd, values.policy) : path.join(root, DEFAULT_POLICY_PATH);
+  const target =
+    values.policy !== undefined ? path.resolve(io.cwd, values.policy) : path.join(root, DEFAULT_POLICY_PATH);
   const shown = path.relative(io.cwd, target) || target;
   if (!(await create(target, STARTER_POLICY, shown))) {
-    if (!values.workflow) throw new UsageError(`${shown} exists already; netbrace init never overwrites a policy`, 'edit it, or give another --policy FILE');
+    if (!values.workflow)
+      throw new UsageError(
+        `${shown} exists already; netbrace init never overwrites a policy`,
+        'edit it, or give another --policy FILE',
+      );
     io.stdout(`kept ${shown}: it exists already (never overwritten)\n`);
-  } else io.stdout(`wrote ${shown}: the built-in policy, commented. Set the floors for your network, then run "netbrace check".\n`);
+  } else
+    io.stdout(
+      `wrote ${shown}: the built-in policy, commented. Set the floors for your network, then run "netbrace check".\n`,
+    );
   if (!values.workflow) return 0;
 
   const policyPath = path.relative(root, target).split(path.sep).join('/');
-  if (policyPath.startsWith('..')) throw new UsageError(`the policy ${shown} is outside the repository`, 'the workflow reads it from the repository');
+  if (policyPath.startsWith('..'))
+    throw new UsageError(`the policy ${shown} is outside the repository`, 'the workflow reads it from the repository');
   const wfTarget = path.join(root, WORKFLOW_PATH);
   const wfShown = path.relative(io.cwd, wfTarget) || wfTarget;
   await mkdir(path.dirname(wfTarget), { recursive: true });
   if (await create(wfTarget, workflowText({ action, version: `v${VERSION}`, policyPath }), wfShown)) {
     io.stdout(`wrote ${wfShown}: the check "netbrace" on every pull request, in block mode\n`);
-    if (action === ACTION_PLACEHOLDER) io.stdout(`  replace ${ACTION_PLACEHOLDER} by the repository and commit you take netbrace from (README, "Pinning")\n`);
+    if (action === ACTION_PLACEHOLDER)
+      io.stdout(
+        `  replace ${ACTION_PLACEHOLDER} by the repository and commit you take netbrace from (README, "Pinning")\n`,
+      );
   } else io.stdout(`kept ${wfShown}: it exists already (never overwritten); compare it with "netbrace init --help"\n`);
 
   const ownersText = owners && owners.length > 0 ? codeownersText(owners.join(' '), policyPath) : undefined;
   if (ownersText) {
     const coTarget = path.join(root, CODEOWNERS_PATH);
     const coShown = path.relative(io.cwd, coTarget) || coTarget;
-    if (await create(coTarget, ownersText, coShown)) io.stdout(`wrote ${coShown}: the policy and the workflow need their owners' review\n`);
+    if (await create(coTarget, ownersText, coShown))
+      io.stdout(`wrote ${coShown}: the policy and the workflow need their owners' review\n`);
     else io.stdout(`kept ${coShown}: it exists already (never overwritten); add these lines:\n${ownersText}`);
   }
   io.stdout(`\n${requiredCheckSteps(ownersText ? owners!.join(' ') : undefined)}\n`);

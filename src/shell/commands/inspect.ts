@@ -81,7 +81,10 @@ export function summarize(t: Topology): InspectSummary {
     // Listed as the file lists them.
     bridges: linksByLine(g, cuts.bridges).map((e) => g.linkIds[e]),
     cut_nodes: nodesByLine(g, cuts.cutNodes).map((v) => g.nodeIds[v]),
-    isolated: nodesByLine(g, isolated.map((id) => g.nodeIndex.get(id)!)).map((v) => g.nodeIds[v]),
+    isolated: nodesByLine(
+      g,
+      isolated.map((id) => g.nodeIndex.get(id)!),
+    ).map((v) => g.nodeIds[v]),
     warnings: t.warnings.map((w: Diagnostic) => ({
       line: w.line,
       column: w.column,
@@ -170,7 +173,8 @@ export const inspectCommand: Command = {
       'max-elements': { type: 'string' },
     });
     const files = parsed.positionals;
-    if (files.length === 0) throw new UsageError('inspect needs at least one FILE', 'netbrace inspect designs/core.net.yaml');
+    if (files.length === 0)
+      throw new UsageError('inspect needs at least one FILE', 'netbrace inspect designs/core.net.yaml');
     const options: ReadDesignOptions = { cwd: io.cwd };
     if (parsed.values.format !== undefined) options.format = parseFormatName(parsed.values.format);
     const maxBytes = wholeNumber('--max-bytes', parsed.values['max-bytes'], 1);
@@ -191,7 +195,9 @@ export const inspectCommand: Command = {
         failed++;
         results.push(errorJson(file, e));
         // A broken file is reported at once (stderr), whatever the output mode.
-        io.stderr(`${isNetbraceError(e) ? formatDiagnostic(e) : `${file}: internal error: ${e instanceof Error ? e.message : String(e)}`}\n`);
+        io.stderr(
+          `${isNetbraceError(e) ? formatDiagnostic(e) : `${file}: internal error: ${e instanceof Error ? e.message : String(e)}`}\n`,
+        );
       }
     }
     if (parsed.values.json) {

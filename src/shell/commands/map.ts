@@ -45,9 +45,11 @@ Exit codes:
 async function run(args: string[], io: CommandIO): Promise<number> {
   const { values, positionals } = parseCommandArgs('map', args, { ...ONE_DESIGN_OPTIONS, svg: { type: 'string' } });
   const [file, ...extra] = positionals;
-  if (file === undefined) throw new UsageError('map needs a design FILE', 'netbrace map designs/backbone.net.yaml --svg backbone.svg');
+  if (file === undefined)
+    throw new UsageError('map needs a design FILE', 'netbrace map designs/backbone.net.yaml --svg backbone.svg');
   if (extra.length) throw new UsageError(`map takes one FILE, got ${positionals.length}`, 'run it once per file');
-  if (values.svg === undefined) throw new UsageError('map needs --svg OUT, the file to write', 'e.g. --svg backbone.svg');
+  if (values.svg === undefined)
+    throw new UsageError('map needs --svg OUT, the file to write', 'e.g. --svg backbone.svg');
   const { file: f } = await judgeOneDesign(file, values, io, { map: true, mend: 'failing' });
   if (f.error) {
     io.stderr(`${oneLine(file)}:${f.error.line || 1}:${f.error.column || 1}: ${oneLine(f.error.message)}\n`);
@@ -55,7 +57,9 @@ async function run(args: string[], io: CommandIO): Promise<number> {
   }
   const map = f.map;
   if (!map || 'omitted' in map) {
-    io.stderr(`netbrace map: no map of ${oneLine(file)}: ${map ? oneLine(map.omitted) : 'the design could not be drawn'}\n`);
+    io.stderr(
+      `netbrace map: no map of ${oneLine(file)}: ${map ? oneLine(map.omitted) : 'the design could not be drawn'}\n`,
+    );
     return 1;
   }
   const svg = `<?xml version="1.0" encoding="UTF-8"?>\n${renderMapSvg(map, mapHighlights(f), { idPrefix: 'nb-map', title: `Map of ${f.path}` })}\n`;

@@ -76,10 +76,12 @@ async function run(args: string[], io: CommandIO): Promise<number> {
     out: { type: 'string' },
   });
   const [file, ...extra] = positionals;
-  if (file === undefined) throw new UsageError('mend needs a design FILE', 'netbrace mend designs/backbone.net.yaml --base main');
+  if (file === undefined)
+    throw new UsageError('mend needs a design FILE', 'netbrace mend designs/backbone.net.yaml --base main');
   if (extra.length) throw new UsageError(`mend takes one FILE, got ${positionals.length}`, 'run it once per file');
   const apply = wholeNumber('--apply', values.apply, 1);
-  if ((apply === undefined) !== (values.out === undefined)) throw new UsageError('--apply N and --out FILE go together', 'e.g. --apply 1 --out mended.net.yaml');
+  if ((apply === undefined) !== (values.out === undefined))
+    throw new UsageError('--apply N and --out FILE go together', 'e.g. --apply 1 --out mended.net.yaml');
   const { file: f, full } = await judgeOneDesign(file, values, io, { map: false, mend: 'always' });
   if (f.error) {
     io.stderr(`${oneLine(file)}:${f.error.line || 1}:${f.error.column || 1}: ${oneLine(f.error.message)}\n`);
@@ -92,7 +94,11 @@ async function run(args: string[], io: CommandIO): Promise<number> {
   const holdsAlready = m.targets.length === 0 && !f.findings.some((x) => x.severity === 'fail');
   if (apply !== undefined) {
     const s = m.suggestions[apply - 1];
-    if (!s) throw new UsageError(`there is no suggestion ${apply}`, m.suggestions.length ? `choose 1 to ${m.suggestions.length}` : 'there are no suggestions');
+    if (!s)
+      throw new UsageError(
+        `there is no suggestion ${apply}`,
+        m.suggestions.length ? `choose 1 to ${m.suggestions.length}` : 'there are no suggestions',
+      );
     const text = await readFile(full, 'utf8');
     const format = f.format as DesignFormat | undefined;
     const t = parseDesign(text, f.path, format ? { format } : {});
@@ -100,7 +106,9 @@ async function run(args: string[], io: CommandIO): Promise<number> {
     const edited = applyToText(text, t.format, t, s);
     await mkdir(path.dirname(out), { recursive: true });
     await writeFile(out, edited);
-    io.stderr(`suggestion ${apply} applied: ${oneLine(values.out!)} written${s.holds ? '' : ' (it does not hold on its own)'}\n`);
+    io.stderr(
+      `suggestion ${apply} applied: ${oneLine(values.out!)} written${s.holds ? '' : ' (it does not hold on its own)'}\n`,
+    );
     return s.holds ? 0 : 1;
   }
   return holdsAlready || m.suggestions.some((s) => s.holds) ? 0 : 1;

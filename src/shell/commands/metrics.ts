@@ -49,7 +49,11 @@ export interface MetricsResult {
 }
 
 /** Evaluate `selected` on the intact design (pure). */
-export function computeMetrics(g: CompactGraph, selected: readonly Metric[], options: MetricOptions = {}): MetricsResult {
+export function computeMetrics(
+  g: CompactGraph,
+  selected: readonly Metric[],
+  options: MetricOptions = {},
+): MetricsResult {
   const mask = createMask(g);
   const out: MetricsResult = { nodes: g.n, links: g.m, metrics: {} };
   for (const m of selected) {
@@ -71,7 +75,8 @@ export function formatMetricsTable(file: string, r: MetricsResult, skipped: read
   const rows = Object.entries(r.metrics).map(([id, v]) => [id, formatNumber(v.value), v.normalized.toFixed(4)]);
   const head = ['metric', 'value', 'score'];
   const w = head.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));
-  const line = (cells: string[]) => `  ${cells[0].padEnd(w[0])}  ${cells[1].padStart(w[1])}  ${cells[2].padStart(w[2])}`;
+  const line = (cells: string[]) =>
+    `  ${cells[0].padEnd(w[0])}  ${cells[1].padStart(w[1])}  ${cells[2].padStart(w[2])}`;
   const text = [`${file} — ${r.nodes} nodes, ${r.links} links`, line(head), ...rows.map(line)];
   if (skipped.length) text.push(`  not applicable: ${skipped.join(', ')}`);
   return `${text.join('\n')}\n`;
@@ -107,12 +112,20 @@ export const metricsCommand: Command = {
             .map((s) => s.trim())
             .filter(Boolean)
             .map((id) => getMetric(id));
-    if (requested.length === 0) throw new UsageError('--only needs at least one metric id', `known metrics: ${metrics.map((m) => m.id).join(', ')}`);
+    if (requested.length === 0)
+      throw new UsageError(
+        '--only needs at least one metric id',
+        `known metrics: ${metrics.map((m) => m.id).join(', ')}`,
+      );
     const options: MetricOptions = {};
     const budget = parsed.values['latency-budget'];
     if (budget !== undefined) {
       const b = Number(budget);
-      if (!(b > 0) || !Number.isFinite(b)) throw new UsageError(`--latency-budget must be a positive number, not "${budget}"`, 'e.g. --latency-budget 1.5');
+      if (!(b > 0) || !Number.isFinite(b))
+        throw new UsageError(
+          `--latency-budget must be a positive number, not "${budget}"`,
+          'e.g. --latency-budget 1.5',
+        );
       options.latencyBudget = b;
     }
     const read: ReadDesignOptions = { cwd: io.cwd };
