@@ -186,13 +186,13 @@ export async function evaluateGraph(
 }
 
 /**
- * Estimated work (element visits, unreduced) above which a design runs sequentially: about 20 s
+ * Estimated work (element visits, unreduced) above which a design runs sequentially: about 10 s
  * at the budget's fixed rate (policy/budget.ts). Below it every realization the policy asks
  * for is cheap, so all of them run and are judged as one fixed sample (§7.3–7.4); above it,
  * batches with confidence sequences (§7.6), so that large designs stop as soon as they are
  * decided instead of running into the budget.
  */
-export const SEQUENTIAL_MIN_WORK = 1e9;
+export const SEQUENTIAL_MIN_WORK = 5e8;
 
 /** The larger side's work estimate, unreduced by the budget. */
 function unreducedWork(specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): number {

@@ -22,7 +22,7 @@
 
 import type { CompactGraph } from '../graph/compact.js';
 import type { Mask } from '../graph/mask.js';
-import { LONG_GRAPH_ECCENTRICITY } from '../metrics/kernels/bit-bfs.js';
+import { LONG_GRAPH_ECCENTRICITY, THIN_LEVEL } from '../metrics/kernels/bit-bfs.js';
 import { getMetric } from '../metrics/registry.js';
 import type { MetricId } from '../metrics/types.js';
 import type { RValueSpec } from './types.js';
@@ -101,7 +101,9 @@ export function hopSearchCost(shape: SurvivorShape): number {
     plain += sweep; // renumbering
     if (n < 2) continue;
     plain += sweep; // the first source's plain search
-    if (shape.eccentricities[c] >= LONG_GRAPH_ECCENTRICITY) {
+    // The kernel's own test (bit-bfs.ts): one source at a time only on long, thin components.
+    const ecc = shape.eccentricities[c];
+    if (ecc >= LONG_GRAPH_ECCENTRICITY && n < THIN_LEVEL * (ecc + 1)) {
       plain += (n - 1) * sweep;
       continue;
     }

@@ -1,5 +1,5 @@
 // Parts of one design, through `netbrace check`: the fixture case parts-split-design holds a
-// 100-site grid whose unreduced work estimate puts it in batches (docs/METHODS.md §7.6), so
+// 400-site grid whose unreduced work estimate puts it in batches (docs/METHODS.md §7.6), so
 // `--part K/N` splits its realizations across the N parts (batch b to part b mod N + 1), and a
 // five-site ring that stays whole in the part its path hashes to. Joining the part reports
 // (`--join`) must give the report of one run byte for byte, whatever the number of parts and
