@@ -3669,8 +3669,8 @@ var require_webidl = __commonJS({
       return new TypeError(`${message.header}: ${message.message}`);
     };
     webidl.errors.conversionFailed = function(context3) {
-      const plural = context3.types.length === 1 ? "" : " one of";
-      const message = `${context3.argument} could not be converted to${plural}: ${context3.types.join(", ")}.`;
+      const plural2 = context3.types.length === 1 ? "" : " one of";
+      const message = `${context3.argument} could not be converted to${plural2}: ${context3.types.join(", ")}.`;
       return webidl.errors.exception({
         header: context3.prefix,
         message
@@ -11233,9 +11233,9 @@ var require_pluralizer = __commonJS({
       this: "these"
     };
     module.exports = class Pluralizer {
-      constructor(singular, plural) {
+      constructor(singular, plural2) {
         this.singular = singular;
-        this.plural = plural;
+        this.plural = plural2;
       }
       pluralize(count) {
         const one = count === 1;
@@ -11808,8 +11808,8 @@ var require_dns = __commonJS({
         }
         this.#records.set(origin.hostname, records);
       }
-      getHandler(meta, opts) {
-        return new DNSDispatchHandler(this, meta, opts);
+      getHandler(meta2, opts) {
+        return new DNSDispatchHandler(this, meta2, opts);
       }
     };
     var DNSDispatchHandler = class extends DecoratorHandler {
@@ -32276,12 +32276,12 @@ var require_fast_uri = __commonJS({
     }
     function hasMalformedPercentEncoding(component) {
       if (component === void 0) return false;
-      let percent2 = component.indexOf("%");
-      while (percent2 !== -1) {
-        if (percent2 + 2 >= component.length || !/^[\da-f]{2}$/iu.test(component.slice(percent2 + 1, percent2 + 3))) {
+      let percent3 = component.indexOf("%");
+      while (percent3 !== -1) {
+        if (percent3 + 2 >= component.length || !/^[\da-f]{2}$/iu.test(component.slice(percent3 + 1, percent3 + 3))) {
           return true;
         }
-        percent2 = component.indexOf("%", percent2 + 3);
+        percent3 = component.indexOf("%", percent3 + 3);
       }
       return false;
     }
@@ -32653,19 +32653,19 @@ var require_core = __commonJS({
         this.addKeyword("$async");
       }
       _addDefaultMetaSchema() {
-        const { $data, meta, schemaId } = this.opts;
+        const { $data, meta: meta2, schemaId } = this.opts;
         let _dataRefSchema = $dataRefSchema;
         if (schemaId === "id") {
           _dataRefSchema = { ...$dataRefSchema };
           _dataRefSchema.id = _dataRefSchema.$id;
           delete _dataRefSchema.$id;
         }
-        if (meta && $data)
+        if (meta2 && $data)
           this.addMetaSchema(_dataRefSchema, _dataRefSchema[schemaId], false);
       }
       defaultMeta() {
-        const { meta, schemaId } = this.opts;
-        return this.opts.defaultMeta = typeof meta == "object" ? meta[schemaId] || meta : void 0;
+        const { meta: meta2, schemaId } = this.opts;
+        return this.opts.defaultMeta = typeof meta2 == "object" ? meta2[schemaId] || meta2 : void 0;
       }
       validate(schemaKeyRef, data) {
         let v;
@@ -32685,12 +32685,12 @@ var require_core = __commonJS({
         const sch = this._addSchema(schema, _meta);
         return sch.validate || this._compileSchemaEnv(sch);
       }
-      compileAsync(schema, meta) {
+      compileAsync(schema, meta2) {
         if (typeof this.opts.loadSchema != "function") {
           throw new Error("options.loadSchema should be a function");
         }
         const { loadSchema } = this.opts;
-        return runCompileAsync.call(this, schema, meta);
+        return runCompileAsync.call(this, schema, meta2);
         async function runCompileAsync(_schema, _meta) {
           await loadMetaSchema.call(this, _schema.$schema);
           const sch = this._addSchema(_schema, _meta);
@@ -32722,7 +32722,7 @@ var require_core = __commonJS({
           if (!this.refs[ref])
             await loadMetaSchema.call(this, _schema.$schema);
           if (!this.refs[ref])
-            this.addSchema(_schema, ref, meta);
+            this.addSchema(_schema, ref, meta2);
         }
         async function _loadSchema(ref) {
           const p = this._loading[ref];
@@ -32842,8 +32842,8 @@ var require_core = __commonJS({
         }
       }
       // add "vocabulary" - a collection of keywords
-      addVocabulary(definitions) {
-        for (const def of definitions)
+      addVocabulary(definitions2) {
+        for (const def of definitions2)
           this.addKeyword(def);
         return this;
       }
@@ -32912,8 +32912,8 @@ var require_core = __commonJS({
         for (const jsonPointer of keywordsJsonPointers) {
           const segments = jsonPointer.split("/").slice(1);
           let keywords = metaSchema;
-          for (const seg2 of segments)
-            keywords = keywords[seg2];
+          for (const seg3 of segments)
+            keywords = keywords[seg3];
           for (const key in rules) {
             const rule = rules[key];
             if (typeof rule != "object")
@@ -32939,7 +32939,7 @@ var require_core = __commonJS({
           }
         }
       }
-      _addSchema(schema, meta, baseId, validateSchema = this.opts.validateSchema, addSchema = this.opts.addUsedSchema) {
+      _addSchema(schema, meta2, baseId, validateSchema = this.opts.validateSchema, addSchema = this.opts.addUsedSchema) {
         let id;
         const { schemaId } = this.opts;
         if (typeof schema == "object") {
@@ -32955,7 +32955,7 @@ var require_core = __commonJS({
           return sch;
         baseId = (0, resolve_1.normalizeId)(id || baseId);
         const localRefs = resolve_1.getSchemaRefs.call(this, schema, baseId);
-        sch = new compile_1.SchemaEnv({ schema, schemaId, meta, baseId, localRefs });
+        sch = new compile_1.SchemaEnv({ schema, schemaId, meta: meta2, baseId, localRefs });
         this._cache.set(sch.schema, sch);
         if (addSchema && !baseId.startsWith("#")) {
           if (baseId)
@@ -35780,12 +35780,12 @@ var require_helpers = __commonJS({
       graph.forEachEdge(function(edge, attr, source, target, sa, ta, u) {
         var sj = index[source];
         var tj = index[target];
-        var weight = getEdgeWeight(edge, attr, source, target, sa, ta, u);
-        NodeMatrix[sj + 6] += weight;
-        NodeMatrix[tj + 6] += weight;
+        var weight2 = getEdgeWeight(edge, attr, source, target, sa, ta, u);
+        NodeMatrix[sj + 6] += weight2;
+        NodeMatrix[tj + 6] += weight2;
         EdgeMatrix[j] = sj;
         EdgeMatrix[j + 1] = tj;
-        EdgeMatrix[j + 2] = weight;
+        EdgeMatrix[j + 2] = weight2;
         j += PPE;
       });
       return {
@@ -39258,7 +39258,7 @@ var require_light = __commonJS({
           var base;
           if (this.heartbeat == null && (this.storeOptions.reservoirRefreshInterval != null && this.storeOptions.reservoirRefreshAmount != null || this.storeOptions.reservoirIncreaseInterval != null && this.storeOptions.reservoirIncreaseAmount != null)) {
             return typeof (base = this.heartbeat = setInterval(() => {
-              var amount2, incr, maximum, now, reservoir;
+              var amount3, incr, maximum, now, reservoir;
               now = Date.now();
               if (this.storeOptions.reservoirRefreshInterval != null && now >= this._lastReservoirRefresh + this.storeOptions.reservoirRefreshInterval) {
                 this._lastReservoirRefresh = now;
@@ -39267,12 +39267,12 @@ var require_light = __commonJS({
               }
               if (this.storeOptions.reservoirIncreaseInterval != null && now >= this._lastReservoirIncrease + this.storeOptions.reservoirIncreaseInterval) {
                 ({
-                  reservoirIncreaseAmount: amount2,
+                  reservoirIncreaseAmount: amount3,
                   reservoirIncreaseMaximum: maximum,
                   reservoir
                 } = this.storeOptions);
                 this._lastReservoirIncrease = now;
-                incr = maximum != null ? Math.min(amount2, maximum - reservoir) : amount2;
+                incr = maximum != null ? Math.min(amount3, maximum - reservoir) : amount3;
                 if (incr > 0) {
                   this.storeOptions.reservoir += incr;
                   return this.instance._drainAll(this.computeCapacity());
@@ -39337,10 +39337,10 @@ var require_light = __commonJS({
             return null;
           }
         }
-        conditionsCheck(weight) {
+        conditionsCheck(weight2) {
           var capacity;
           capacity = this.computeCapacity();
-          return capacity == null || weight <= capacity;
+          return capacity == null || weight2 <= capacity;
         }
         async __incrementReservoir__(incr) {
           var reservoir;
@@ -39356,23 +39356,23 @@ var require_light = __commonJS({
         isBlocked(now) {
           return this._unblockTime >= now;
         }
-        check(weight, now) {
-          return this.conditionsCheck(weight) && this._nextRequest - now <= 0;
+        check(weight2, now) {
+          return this.conditionsCheck(weight2) && this._nextRequest - now <= 0;
         }
-        async __check__(weight) {
+        async __check__(weight2) {
           var now;
           await this.yieldLoop();
           now = Date.now();
-          return this.check(weight, now);
+          return this.check(weight2, now);
         }
-        async __register__(index, weight, expiration) {
+        async __register__(index, weight2, expiration) {
           var now, wait;
           await this.yieldLoop();
           now = Date.now();
-          if (this.conditionsCheck(weight)) {
-            this._running += weight;
+          if (this.conditionsCheck(weight2)) {
+            this._running += weight2;
             if (this.storeOptions.reservoir != null) {
-              this.storeOptions.reservoir -= weight;
+              this.storeOptions.reservoir -= weight2;
             }
             wait = Math.max(this._nextRequest - now, 0);
             this._nextRequest = now + wait + this.storeOptions.minTime;
@@ -39390,14 +39390,14 @@ var require_light = __commonJS({
         strategyIsBlock() {
           return this.storeOptions.strategy === 3;
         }
-        async __submit__(queueLength, weight) {
+        async __submit__(queueLength, weight2) {
           var blocked, now, reachedHWM;
           await this.yieldLoop();
-          if (this.storeOptions.maxConcurrent != null && weight > this.storeOptions.maxConcurrent) {
-            throw new BottleneckError$2(`Impossible to add a job having a weight of ${weight} to a limiter having a maxConcurrent setting of ${this.storeOptions.maxConcurrent}`);
+          if (this.storeOptions.maxConcurrent != null && weight2 > this.storeOptions.maxConcurrent) {
+            throw new BottleneckError$2(`Impossible to add a job having a weight of ${weight2} to a limiter having a maxConcurrent setting of ${this.storeOptions.maxConcurrent}`);
           }
           now = Date.now();
-          reachedHWM = this.storeOptions.highWater != null && queueLength === this.storeOptions.highWater && !this.check(weight, now);
+          reachedHWM = this.storeOptions.highWater != null && queueLength === this.storeOptions.highWater && !this.check(weight2, now);
           blocked = this.strategyIsBlock() && (reachedHWM || this.isBlocked(now));
           if (blocked) {
             this._unblockTime = now + this.computePenalty();
@@ -39410,10 +39410,10 @@ var require_light = __commonJS({
             strategy: this.storeOptions.strategy
           };
         }
-        async __free__(index, weight) {
+        async __free__(index, weight2) {
           await this.yieldLoop();
-          this._running -= weight;
-          this._done += weight;
+          this._running -= weight2;
+          this._done += weight2;
           this.instance._drainAll(this.computeCapacity());
           return {
             running: this._running
@@ -39833,8 +39833,8 @@ var require_light = __commonJS({
           _randomIndex() {
             return Math.random().toString(36).slice(2);
           }
-          check(weight = 1) {
-            return this._store.__check__(weight);
+          check(weight2 = 1) {
+            return this._store.__check__(weight2);
           }
           _clearGlobalState(index) {
             if (this._scheduled[index] != null) {
@@ -40720,7 +40720,8 @@ function eligibleUnits(g, kind) {
 function isEligible(g, kind, u) {
   if (kind === "node") return g.nodeHardened[u] === 0;
   if (kind === "link") return g.linkHardened[u] === 0;
-  for (let p = g.groupOffsets[u]; p < g.groupOffsets[u + 1]; p++) if (g.linkHardened[g.groupLinks[p]] === 0) return true;
+  for (let p = g.groupOffsets[u]; p < g.groupOffsets[u + 1]; p++)
+    if (g.linkHardened[g.groupLinks[p]] === 0) return true;
   return false;
 }
 function removeUnit(g, mask, kind, u) {
@@ -40735,8 +40736,8 @@ function removeUnit(g, mask, kind, u) {
 }
 function countAt(x, count, eligible) {
   const c = Math.min(x * count, eligible);
-  const whole = Math.round(c);
-  return Math.abs(c - whole) <= 1e-9 * Math.max(1, whole) ? whole : c;
+  const whole2 = Math.round(c);
+  return Math.abs(c - whole2) <= 1e-9 * Math.max(1, whole2) ? whole2 : c;
 }
 function stepsAt(x, count, eligible) {
   return Math.ceil(countAt(x, count, eligible));
@@ -41086,7 +41087,7 @@ var linkBetweennessAdaptive = {
   sequence: (g, steps) => adaptiveLinkBetweennessOrder(g, steps)
 };
 
-// src/metrics/kernels/hash-noise.ts
+// src/random.ts
 function mix32(h) {
   h ^= h >>> 16;
   h = Math.imul(h, 2246822507);
@@ -41098,14 +41099,34 @@ function mix32(h) {
 function hash32(a, b) {
   return mix32(Math.imul(a ^ 2654435769, 2246822507) ^ Math.imul(b + 1663821227, 3266489909));
 }
-function noise(a, b) {
-  return hash32(a, b) / 2147483648 - 1;
+function fnv1a32(text2) {
+  let h = 2166136261;
+  const bytes = new TextEncoder().encode(text2);
+  for (const b of bytes) {
+    h ^= b;
+    h = Math.imul(h, 16777619) >>> 0;
+  }
+  return h >>> 0;
 }
-function sign(a, b) {
-  return hash32(a, b) & 1 ? 1 : -1;
+function fnv1a32CodeUnits(text2) {
+  let h = 2166136261;
+  for (let i = 0; i < text2.length; i++) {
+    h ^= text2.charCodeAt(i);
+    h = Math.imul(h, 16777619);
+  }
+  return h | 0;
 }
-
-// src/envelope/rng.ts
+var FNV64_OFFSET = 0xcbf29ce484222325n;
+var FNV64_PRIME = 0x100000001b3n;
+var MASK64 = 0xffffffffffffffffn;
+function stableHash(text2) {
+  let h = FNV64_OFFSET;
+  for (const byte of new TextEncoder().encode(text2)) {
+    h ^= BigInt(byte);
+    h = h * FNV64_PRIME & MASK64;
+  }
+  return h.toString(16).padStart(16, "0");
+}
 function hashString(s, seed) {
   let h = seed >>> 0;
   for (let i = 0; i < s.length; i++) {
@@ -41232,6 +41253,9 @@ function makeGrid(until, points, at = []) {
 }
 function round12(x) {
   return Number(x.toFixed(12));
+}
+function gridIndex(grid, x) {
+  return grid.indexOf(round12(x));
 }
 
 // src/challenges/random-nodes.ts
@@ -41416,10 +41440,13 @@ function resolveParams(g, p, seed) {
   const until = p.until ?? (p.challenge === "regional" ? defaultRegionalUntil(g) : DEFAULTS.until);
   const fraction = p.challenge !== "regional";
   if (!Number.isFinite(until) || until < 0 || fraction && until > 1) {
-    throw new RangeError(`${p.challenge}: until must be ${fraction ? "a fraction in [0, 1]" : "a radius ≥ 0 km"}, got ${until}`);
+    throw new RangeError(
+      `${p.challenge}: until must be ${fraction ? "a fraction in [0, 1]" : "a radius ≥ 0 km"}, got ${until}`
+    );
   }
   const points = p.points ?? DEFAULTS.points;
-  if (!Number.isInteger(points) || points < 2) throw new RangeError(`${p.challenge}: points must be an integer ≥ 2, got ${points}`);
+  if (!Number.isInteger(points) || points < 2)
+    throw new RangeError(`${p.challenge}: points must be an integer ≥ 2, got ${points}`);
   const realizations = p.realizations ?? DEFAULTS.realizations;
   if (!Number.isInteger(realizations) || realizations < 1) {
     throw new RangeError(`${p.challenge}: realizations must be an integer ≥ 1, got ${realizations}`);
@@ -41429,11 +41456,14 @@ function resolveParams(g, p, seed) {
     throw new RangeError(`${p.challenge}: band must be two quantiles 0 < lo < hi < 1, got ${band.join(",")}`);
   }
   const worstCase = p.worstCase ?? DEFAULTS.worstCase;
-  if (!Number.isInteger(worstCase) || worstCase < 0) throw new RangeError(`${p.challenge}: worstCase must be an integer ≥ 0`);
-  if (p.beam !== void 0 && (!Number.isInteger(p.beam) || p.beam < 1)) throw new RangeError(`${p.challenge}: beam must be an integer ≥ 1`);
+  if (!Number.isInteger(worstCase) || worstCase < 0)
+    throw new RangeError(`${p.challenge}: worstCase must be an integer ≥ 0`);
+  if (p.beam !== void 0 && (!Number.isInteger(p.beam) || p.beam < 1))
+    throw new RangeError(`${p.challenge}: beam must be an integer ≥ 1`);
   const at = p.at ?? [];
   for (const x of at) {
-    if (!Number.isFinite(x) || x < 0 || fraction && x > 1) throw new RangeError(`${p.challenge}: grid point ${x} is out of range`);
+    if (!Number.isFinite(x) || x < 0 || fraction && x > 1)
+      throw new RangeError(`${p.challenge}: grid point ${x} is out of range`);
   }
   return {
     challenge: p.challenge,
@@ -41843,6 +41873,14 @@ function createDenseSpectrum(limit) {
   };
 }
 
+// src/metrics/kernels/hash-noise.ts
+function noise(a, b) {
+  return hash32(a, b) / 2147483648 - 1;
+}
+function sign(a, b) {
+  return hash32(a, b) & 1 ? 1 : -1;
+}
+
 // src/metrics/kernels/lanczos.ts
 function dot(a, ao, b, bo, n) {
   let s = 0;
@@ -41903,7 +41941,7 @@ function createLanczos(capacity, maxCount, basis = 24) {
   const H = new Float64Array(m0 * m0);
   const Y = new Float64Array(m0 * m0);
   const theta = new Float64Array(m0);
-  const scratch = new Float64Array(m0);
+  const scratch2 = new Float64Array(m0);
   const h = new Float64Array(m0);
   const views = Array.from({ length: m0 }, (_, i) => V.subarray(i * stride, (i + 1) * stride));
   const result = {
@@ -41990,7 +42028,7 @@ function createLanczos(capacity, maxCount, basis = 24) {
           }
         }
         Y.set(H.subarray(0, m * m));
-        symmetricEigen(Y, m, theta, scratch);
+        symmetricEigen(Y, m, theta, scratch2);
         const exact = m === space;
         let allConverged = true;
         for (let k = 0; k < count; k++) {
@@ -42051,11 +42089,12 @@ function createLanczos(capacity, maxCount, basis = 24) {
 }
 
 // src/metrics/kernels/extremal-eigen.ts
+var FIEDLER_BASIS = 48;
 function createExtremalSolver(g, kind, denseLimit, warmStart) {
   const limit = Math.min(g.n, denseLimit);
   const fiedler2 = kind === "fiedler";
   const dense = createDenseSpectrum(limit);
-  const lanczos = createLanczos(g.n, 1);
+  const lanczos = createLanczos(g.n, 1, fiedler2 ? FIEDLER_BASIS : void 0);
   const op = fiedler2 ? createLaplacianOperator() : createAdjacencyOperator();
   const one = new Float64Array(fiedler2 ? g.n : 0);
   const previous = new Float64Array(warmStart ? g.n : 0);
@@ -42087,6 +42126,9 @@ function createExtremalSolver(g, kind, denseLimit, warmStart) {
     return r.values[0];
   };
 }
+
+// src/metrics/kernels/work-count.ts
+var kernelWork = { visits: 0, wordVisits: 0 };
 
 // src/metrics/kernels/subgraph.ts
 function allocateLocalGraph(nodeCapacity, entryCapacity) {
@@ -42136,6 +42178,7 @@ function createSurvivorBuilder(g, simple) {
     out.offsets[n] = k;
     out.n = n;
     out.entries = k;
+    kernelWork.visits += g.n + offsets[g.n];
     return out;
   };
 }
@@ -42175,7 +42218,7 @@ function createSpectralSurvivors(g) {
   const list = { count: 0, order, start };
   const part = allocateLocalGraph(g.n, 2 * g.m);
   const idKey = new Int32Array(g.n);
-  for (let i = 0; i < g.n; i++) idKey[i] = fnv1a(g.nodeIds[i] ?? String(i));
+  for (let i = 0; i < g.n; i++) idKey[i] = fnv1a32CodeUnits(g.nodeIds[i] ?? String(i));
   const keys = new Int32Array(g.n);
   return {
     survivors(mask) {
@@ -42220,14 +42263,6 @@ function createSpectralSurvivors(g) {
     }
   };
 }
-function fnv1a(s) {
-  let h = 2166136261;
-  for (let i = 0; i < s.length; i++) {
-    h ^= s.charCodeAt(i);
-    h = Math.imul(h, 16777619);
-  }
-  return h | 0;
-}
 
 // src/metrics/algebraic-connectivity.ts
 var algebraicConnectivity = {
@@ -42238,7 +42273,12 @@ var algebraicConnectivity = {
   appliesTo: () => true,
   create(g, options = {}) {
     const spectral = createSpectralSurvivors(g);
-    const solve = createExtremalSolver(g, "fiedler", options.denseLimit ?? EXTREMAL_DENSE_LIMIT, options.warmStart ?? false);
+    const solve = createExtremalSolver(
+      g,
+      "fiedler",
+      options.denseLimit ?? EXTREMAL_DENSE_LIMIT,
+      options.warmStart ?? false
+    );
     return (mask) => {
       const local = spectral.survivors(mask);
       if (local.n < 2 || spectral.components(local).count > 1) return { raw: 0, normalized: 0 };
@@ -42256,174 +42296,523 @@ function popcount32(x) {
   return Math.imul(x, 16843009) >>> 24;
 }
 var LONG_GRAPH_ECCENTRICITY = 12;
-function wordsFor(sources) {
-  return Math.max(1, Math.min(8, Math.ceil(sources / 32)));
+var THIN_LEVEL = 12;
+var PLANES = 24;
+function createHopHistogram(capacity, longEccentricity = LONG_GRAPH_ECCENTRICITY) {
+  const cap = Math.max(1, capacity);
+  const k = new BfsScratch(cap, longEccentricity);
+  return { run: (graph, sources, count, perSource) => k.run(graph, sources, count, perSource) };
 }
-function createHopHistogram(capacity) {
-  const maxWords = wordsFor(capacity);
-  const size = Math.max(1, capacity * maxWords);
-  const seen = new Uint32Array(size);
-  let frontier = new Uint32Array(size);
-  let next = new Uint32Array(size);
-  const done = new Uint8Array(Math.max(1, capacity));
-  const listed = new Uint8Array(Math.max(1, capacity));
-  let active = new Int32Array(Math.max(1, capacity));
-  let nextActive = new Int32Array(Math.max(1, capacity));
-  const full = new Uint32Array(maxWords);
-  const acc = new Uint32Array(maxWords);
-  const result = { hist: new Float64Array(capacity + 1), maxDistance: 0 };
-  const dist = new Int32Array(Math.max(1, capacity));
-  const queue2 = new Int32Array(Math.max(1, capacity));
-  function single(graph, s) {
-    const { offsets, neighbors } = graph;
-    dist.fill(-1, 0, graph.n);
+var BfsScratch = class {
+  constructor(cap, longEccentricity) {
+    this.longEccentricity = longEccentricity;
+    this.newOf = new Int32Array(cap);
+    this.order = new Int32Array(cap);
+    this.compStart = new Int32Array(cap + 1);
+    this.compOf = new Int32Array(cap);
+    this.ro = new Int32Array(cap + 1);
+    this.rn = new Int32Array(16);
+    this.srcSorted = new Int32Array(cap);
+    this.srcIndex = new Int32Array(cap);
+    this.compSrcStart = new Int32Array(cap + 1);
+    this.seen = new Uint32Array(8 * cap);
+    this.frontier = new Uint32Array(8 * cap);
+    this.next = new Uint32Array(8 * cap);
+    this.done = new Uint8Array(cap);
+    this.listed = new Uint8Array(cap);
+    this.active = new Int32Array(cap);
+    this.nextActive = new Int32Array(cap);
+    this.dist = new Int32Array(cap).fill(-1);
+    this.queue = new Int32Array(cap);
+    this.result = { hist: new Float64Array(cap + 1), maxDistance: 0 };
+  }
+  longEccentricity;
+  // Renumbered graph (breadth-first, component by component).
+  newOf;
+  order;
+  compStart;
+  compOf;
+  ro;
+  rn;
+  // Sources grouped by component.
+  srcSorted;
+  srcIndex;
+  compSrcStart;
+  // Two words per node.
+  seen;
+  frontier;
+  next;
+  done;
+  listed;
+  active;
+  nextActive;
+  dist;
+  queue;
+  planes = new Uint32Array(8 * PLANES);
+  full = new Uint32Array(8);
+  result;
+  run(graph, sources, count, perSource) {
+    const result = this.result;
+    result.hist.fill(0, 0, result.maxDistance + 1);
+    result.maxDistance = 0;
+    if (perSource) perSource.fill(0, 0, count);
+    if (count === 0 || graph.n === 0) return result;
+    const comps = this.renumber(graph);
+    this.groupSources(sources, count, comps);
+    for (let c = 0; c < comps; c++) {
+      const s0 = this.compSrcStart[c];
+      const s1 = this.compSrcStart[c + 1];
+      if (s0 === s1) continue;
+      const lo = this.compStart[c];
+      const hi = this.compStart[c + 1];
+      if (hi - lo < 2) continue;
+      const ecc = this.single(this.srcSorted[s0], perSource, this.srcIndex[s0]);
+      if (ecc >= this.longEccentricity && hi - lo < THIN_LEVEL * (ecc + 1)) {
+        for (let i = s0 + 1; i < s1; i++) this.single(this.srcSorted[i], perSource, this.srcIndex[i]);
+        continue;
+      }
+      for (let b = s0 + 1; b < s1; ) {
+        const left = s1 - b;
+        if (left > 64) {
+          const width = Math.min(256, left);
+          this.batch8(b, width, lo, hi, perSource);
+          b += width;
+        } else {
+          this.batch(b, left, lo, hi, perSource);
+          b += left;
+        }
+      }
+    }
+    return result;
+  }
+  /** Breadth-first renumbering, component by component; returns the component count. */
+  renumber(g) {
+    const n = g.n;
+    const { offsets, neighbors } = g;
+    const newOf = this.newOf;
+    const order = this.order;
+    newOf.fill(-1, 0, n);
+    let tail = 0;
+    let c = 0;
+    for (let s = 0; s < n; s++) {
+      if (newOf[s] >= 0) continue;
+      this.compStart[c] = tail;
+      newOf[s] = tail;
+      order[tail++] = s;
+      for (let head = this.compStart[c]; head < tail; head++) {
+        const v = order[head];
+        for (let p = offsets[v]; p < offsets[v + 1]; p++) {
+          const w = neighbors[p];
+          if (newOf[w] < 0) {
+            newOf[w] = tail;
+            order[tail++] = w;
+          }
+        }
+      }
+      for (let i = this.compStart[c]; i < tail; i++) this.compOf[i] = c;
+      c++;
+    }
+    this.compStart[c] = tail;
+    const entries = offsets[n];
+    if (this.rn.length < entries) this.rn = new Int32Array(Math.max(entries, 2 * this.rn.length));
+    const rn = this.rn;
+    const ro = this.ro;
+    let k = 0;
+    for (let i = 0; i < n; i++) {
+      ro[i] = k;
+      const v = order[i];
+      for (let p = offsets[v]; p < offsets[v + 1]; p++) rn[k++] = newOf[neighbors[p]];
+    }
+    ro[n] = k;
+    kernelWork.visits += n + k;
+    return c;
+  }
+  /** Sources by component (counting sort), renumbered, each with its position in the input. */
+  groupSources(sources, count, comps) {
+    const start = this.compSrcStart;
+    start.fill(0, 0, comps + 1);
+    for (let i = 0; i < count; i++) start[this.compOf[this.newOf[sources[i]]] + 1]++;
+    for (let c = 0; c < comps; c++) start[c + 1] += start[c];
+    const cursor = this.queue;
+    for (let c = 0; c < comps; c++) cursor[c] = start[c];
+    for (let i = 0; i < count; i++) {
+      const v = this.newOf[sources[i]];
+      const at = cursor[this.compOf[v]]++;
+      this.srcSorted[at] = v;
+      this.srcIndex[at] = i;
+    }
+  }
+  /** Plain BFS from s (renumbered), adding its distances; returns the eccentricity. */
+  single(s, perSource, index) {
+    const ro = this.ro;
+    const rn = this.rn;
+    const dist = this.dist;
+    const queue2 = this.queue;
+    const hist = this.result.hist;
     dist[s] = 0;
     queue2[0] = s;
     let head = 0;
     let tail = 1;
     let ecc = 0;
-    const hist = result.hist;
+    let inv = 0;
+    let scanned = 0;
     while (head < tail) {
       const v = queue2[head++];
       const dv = dist[v] + 1;
-      for (let p = offsets[v]; p < offsets[v + 1]; p++) {
-        const w = neighbors[p];
+      scanned += ro[v + 1] - ro[v];
+      for (let p = ro[v]; p < ro[v + 1]; p++) {
+        const w = rn[p];
         if (dist[w] >= 0) continue;
         dist[w] = dv;
         queue2[tail++] = w;
         hist[dv]++;
+        inv += 1 / dv;
         if (dv > ecc) ecc = dv;
       }
     }
-    if (ecc > result.maxDistance) result.maxDistance = ecc;
+    for (let i = 0; i < tail; i++) dist[queue2[i]] = -1;
+    kernelWork.visits += tail + scanned;
+    if (perSource) perSource[index] = inv;
+    if (ecc > this.result.maxDistance) this.result.maxDistance = ecc;
     return ecc;
   }
-  return {
-    run(graph, sources, count) {
-      const n = graph.n;
-      const { offsets, neighbors } = graph;
-      const hist = result.hist;
-      hist.fill(0, 0, result.maxDistance + 1);
-      result.maxDistance = 0;
-      if (count === 0) return result;
-      const ecc = single(graph, sources[0]);
-      if (ecc >= LONG_GRAPH_ECCENTRICITY) {
-        for (let i = 1; i < count; i++) single(graph, sources[i]);
-        return result;
+  /** One batch of up to 64 sources (srcSorted[from .. from+width)) in the node range [lo, hi). */
+  batch(from, width, lo, hi, perSource) {
+    const ro = this.ro;
+    const rn = this.rn;
+    const seen = this.seen;
+    const done = this.done;
+    const listed = this.listed;
+    const hist = this.result.hist;
+    const planes = this.planes;
+    let frontier = this.frontier;
+    let next = this.next;
+    let active = this.active;
+    let nextActive = this.nextActive;
+    const f0 = width >= 32 ? 4294967295 : (1 << width) - 1 >>> 0;
+    const f1 = width >= 64 ? 4294967295 : width <= 32 ? 0 : (1 << width - 32) - 1 >>> 0;
+    seen.fill(0, 2 * lo, 2 * hi);
+    frontier.fill(0, 2 * lo, 2 * hi);
+    next.fill(0, 2 * lo, 2 * hi);
+    done.fill(0, lo, hi);
+    let activeCount = 0;
+    for (let i = 0; i < width; i++) {
+      const s = this.srcSorted[from + i];
+      const at = 2 * s + (i >>> 5);
+      const bit = 1 << (i & 31);
+      seen[at] |= bit;
+      frontier[at] |= bit;
+      if (!listed[s]) {
+        listed[s] = 1;
+        active[activeCount++] = s;
       }
-      hist.fill(0, 0, result.maxDistance + 1);
-      result.maxDistance = 0;
-      const W = wordsFor(count);
-      const batch = 32 * W;
-      const sweepWork = n + offsets[n];
-      for (let start = 0; start < count; start += batch) {
-        const width = Math.min(batch, count - start);
-        const used = n * W;
-        seen.fill(0, 0, used);
-        frontier.fill(0, 0, used);
-        next.fill(0, 0, used);
-        done.fill(0, 0, n);
-        for (let w = 0; w < W; w++) {
-          const bits = width - 32 * w;
-          full[w] = bits >= 32 ? 4294967295 : bits <= 0 ? 0 : (1 << bits) - 1 >>> 0;
-        }
-        let activeCount = 0;
-        for (let i = 0; i < width; i++) {
-          const s = sources[start + i];
-          const at = s * W + (i >>> 5);
-          const bit = 1 << (i & 31);
-          seen[at] |= bit;
-          frontier[at] |= bit;
-          if (!listed[s]) {
-            listed[s] = 1;
-            active[activeCount++] = s;
-          }
-        }
-        for (let i = 0; i < activeCount; i++) listed[active[i]] = 0;
-        for (let d = 1; activeCount > 0; d++) {
-          let frontierWork = 0;
-          for (let i = 0; i < activeCount; i++) frontierWork += offsets[active[i] + 1] - offsets[active[i]];
-          let reached = 0;
-          let nextCount = 0;
-          if (4 * frontierWork < sweepWork) {
-            for (let i = 0; i < activeCount; i++) {
-              const v = active[i];
-              const vb = v * W;
-              for (let p = offsets[v]; p < offsets[v + 1]; p++) {
-                const u = neighbors[p];
-                if (done[u]) continue;
-                const ub = u * W;
-                let any = 0;
-                for (let w = 0; w < W; w++) {
-                  const x = frontier[vb + w] & ~seen[ub + w];
-                  next[ub + w] |= x;
-                  any |= x;
-                }
-                if (any !== 0 && !listed[u]) {
-                  listed[u] = 1;
-                  nextActive[nextCount++] = u;
-                }
-              }
-            }
-            for (let i = 0; i < nextCount; i++) {
-              const u = nextActive[i];
-              listed[u] = 0;
-              const ub = u * W;
-              let complete2 = true;
-              for (let w = 0; w < W; w++) {
-                const x = next[ub + w];
-                reached += popcount32(x);
-                const t = (seen[ub + w] | x) >>> 0;
-                seen[ub + w] = t;
-                if (t !== full[w]) complete2 = false;
-              }
-              if (complete2) done[u] = 1;
-            }
-          } else {
-            for (let v = 0; v < n; v++) {
-              if (done[v]) continue;
-              const base = v * W;
-              for (let w = 0; w < W; w++) acc[w] = 0;
-              for (let p = offsets[v]; p < offsets[v + 1]; p++) {
-                const ub = neighbors[p] * W;
-                for (let w = 0; w < W; w++) acc[w] |= frontier[ub + w];
-              }
-              let any = 0;
-              let complete2 = true;
-              for (let w = 0; w < W; w++) {
-                const s = seen[base + w];
-                const x = acc[w] & ~s;
-                next[base + w] = x;
-                any |= x;
-                const t = (s | x) >>> 0;
-                seen[base + w] = t;
-                if (t !== full[w]) complete2 = false;
-                if (x !== 0) reached += popcount32(x);
-              }
-              if (any !== 0) nextActive[nextCount++] = v;
-              if (complete2) done[v] = 1;
-            }
-          }
-          if (reached > 0) {
-            hist[d] += reached;
-            if (d > result.maxDistance) result.maxDistance = d;
-          }
-          for (let i = 0; i < activeCount; i++) {
-            const vb = active[i] * W;
-            for (let w = 0; w < W; w++) frontier[vb + w] = 0;
-          }
-          const f = frontier;
-          frontier = next;
-          next = f;
-          const a = active;
-          active = nextActive;
-          nextActive = a;
-          activeCount = nextCount;
-        }
-      }
-      return result;
     }
-  };
+    for (let i = 0; i < activeCount; i++) listed[active[i]] = 0;
+    const sweepWork = hi - lo + (ro[hi] - ro[lo]);
+    const counting = perSource !== void 0;
+    for (let d = 1; activeCount > 0; d++) {
+      let frontierWork = 0;
+      for (let i = 0; i < activeCount; i++) frontierWork += ro[active[i] + 1] - ro[active[i]];
+      let reached = 0;
+      let nextCount = 0;
+      if (counting) planes.fill(0);
+      kernelWork.wordVisits += 2 * (4 * frontierWork < sweepWork ? activeCount + frontierWork : sweepWork);
+      if (4 * frontierWork < sweepWork) {
+        for (let i = 0; i < activeCount; i++) {
+          const v = active[i];
+          const a0 = frontier[2 * v];
+          const a1 = frontier[2 * v + 1];
+          for (let p = ro[v]; p < ro[v + 1]; p++) {
+            const u = rn[p];
+            if (done[u]) continue;
+            const x0 = a0 & ~seen[2 * u];
+            const x1 = a1 & ~seen[2 * u + 1];
+            if ((x0 | x1) === 0) continue;
+            next[2 * u] |= x0;
+            next[2 * u + 1] |= x1;
+            if (!listed[u]) {
+              listed[u] = 1;
+              nextActive[nextCount++] = u;
+            }
+          }
+        }
+        for (let i = 0; i < nextCount; i++) {
+          const u = nextActive[i];
+          listed[u] = 0;
+          const x0 = next[2 * u];
+          const x1 = next[2 * u + 1];
+          reached += popcount32(x0) + popcount32(x1);
+          if (counting) addBits(planes, x0, x1);
+          const t0 = (seen[2 * u] | x0) >>> 0;
+          const t1 = (seen[2 * u + 1] | x1) >>> 0;
+          seen[2 * u] = t0;
+          seen[2 * u + 1] = t1;
+          if (t0 === f0 && t1 === f1) done[u] = 1;
+        }
+      } else {
+        for (let v = lo; v < hi; v++) {
+          if (done[v]) continue;
+          let a0 = 0;
+          let a1 = 0;
+          for (let p = ro[v]; p < ro[v + 1]; p++) {
+            const u = 2 * rn[p];
+            a0 |= frontier[u];
+            a1 |= frontier[u + 1];
+          }
+          const s0 = seen[2 * v];
+          const s1 = seen[2 * v + 1];
+          const x0 = a0 & ~s0;
+          const x1 = a1 & ~s1;
+          next[2 * v] = x0;
+          next[2 * v + 1] = x1;
+          if ((x0 | x1) === 0) continue;
+          const t0 = (s0 | x0) >>> 0;
+          const t1 = (s1 | x1) >>> 0;
+          seen[2 * v] = t0;
+          seen[2 * v + 1] = t1;
+          reached += popcount32(x0) + popcount32(x1);
+          if (counting) addBits(planes, x0, x1);
+          nextActive[nextCount++] = v;
+          if (t0 === f0 && t1 === f1) done[v] = 1;
+        }
+      }
+      if (reached > 0) {
+        hist[d] += reached;
+        if (d > this.result.maxDistance) this.result.maxDistance = d;
+        if (counting) this.drainPlanes(perSource, from, width, 1 / d, 2);
+      }
+      for (let i = 0; i < activeCount; i++) {
+        const v = active[i];
+        frontier[2 * v] = 0;
+        frontier[2 * v + 1] = 0;
+      }
+      const f = frontier;
+      frontier = next;
+      next = f;
+      const a = active;
+      active = nextActive;
+      nextActive = a;
+      activeCount = nextCount;
+    }
+    this.frontier = frontier;
+    this.next = next;
+    this.active = active;
+    this.nextActive = nextActive;
+  }
+  /** One batch of up to 256 sources, eight words per node, unrolled (see batch()). */
+  batch8(from, width, lo, hi, perSource) {
+    const ro = this.ro;
+    const rn = this.rn;
+    const seen = this.seen;
+    const done = this.done;
+    const listed = this.listed;
+    const hist = this.result.hist;
+    const planes = this.planes;
+    const full = this.full;
+    let frontier = this.frontier;
+    let next = this.next;
+    let active = this.active;
+    let nextActive = this.nextActive;
+    for (let w = 0; w < 8; w++) {
+      const bits = width - 32 * w;
+      full[w] = bits >= 32 ? 4294967295 : bits <= 0 ? 0 : (1 << bits) - 1 >>> 0;
+    }
+    const f0 = full[0], f1 = full[1], f2 = full[2], f3 = full[3], f4 = full[4], f5 = full[5], f6 = full[6], f7 = full[7];
+    seen.fill(0, 8 * lo, 8 * hi);
+    frontier.fill(0, 8 * lo, 8 * hi);
+    next.fill(0, 8 * lo, 8 * hi);
+    done.fill(0, lo, hi);
+    let activeCount = 0;
+    for (let i = 0; i < width; i++) {
+      const s = this.srcSorted[from + i];
+      const at = 8 * s + (i >>> 5);
+      const bit = 1 << (i & 31);
+      seen[at] |= bit;
+      frontier[at] |= bit;
+      if (!listed[s]) {
+        listed[s] = 1;
+        active[activeCount++] = s;
+      }
+    }
+    for (let i = 0; i < activeCount; i++) listed[active[i]] = 0;
+    const sweepWork = hi - lo + (ro[hi] - ro[lo]);
+    const counting = perSource !== void 0;
+    for (let d = 1; activeCount > 0; d++) {
+      let frontierWork = 0;
+      for (let i = 0; i < activeCount; i++) frontierWork += ro[active[i] + 1] - ro[active[i]];
+      let reached = 0;
+      let nextCount = 0;
+      if (counting) planes.fill(0);
+      kernelWork.wordVisits += 8 * (4 * frontierWork < sweepWork ? activeCount + frontierWork : sweepWork);
+      if (4 * frontierWork < sweepWork) {
+        for (let i = 0; i < activeCount; i++) {
+          const v = active[i];
+          const vb = 8 * v;
+          const a0 = frontier[vb + 0];
+          const a1 = frontier[vb + 1];
+          const a2 = frontier[vb + 2];
+          const a3 = frontier[vb + 3];
+          const a4 = frontier[vb + 4];
+          const a5 = frontier[vb + 5];
+          const a6 = frontier[vb + 6];
+          const a7 = frontier[vb + 7];
+          for (let p = ro[v]; p < ro[v + 1]; p++) {
+            const u = rn[p];
+            if (done[u]) continue;
+            const ub = 8 * u;
+            const x0 = a0 & ~seen[ub + 0];
+            const x1 = a1 & ~seen[ub + 1];
+            const x2 = a2 & ~seen[ub + 2];
+            const x3 = a3 & ~seen[ub + 3];
+            const x4 = a4 & ~seen[ub + 4];
+            const x5 = a5 & ~seen[ub + 5];
+            const x6 = a6 & ~seen[ub + 6];
+            const x7 = a7 & ~seen[ub + 7];
+            if ((x0 | x1 | x2 | x3 | x4 | x5 | x6 | x7) === 0) continue;
+            next[ub + 0] |= x0;
+            next[ub + 1] |= x1;
+            next[ub + 2] |= x2;
+            next[ub + 3] |= x3;
+            next[ub + 4] |= x4;
+            next[ub + 5] |= x5;
+            next[ub + 6] |= x6;
+            next[ub + 7] |= x7;
+            if (!listed[u]) {
+              listed[u] = 1;
+              nextActive[nextCount++] = u;
+            }
+          }
+        }
+        for (let i = 0; i < nextCount; i++) {
+          const u = nextActive[i];
+          listed[u] = 0;
+          const ub = 8 * u;
+          let complete2 = true;
+          for (let w = 0; w < 8; w++) {
+            const x = next[ub + w];
+            if (x === 0) {
+              if (seen[ub + w] !== full[w]) complete2 = false;
+              continue;
+            }
+            reached += popcount32(x);
+            const t = (seen[ub + w] | x) >>> 0;
+            seen[ub + w] = t;
+            if (t !== full[w]) complete2 = false;
+          }
+          if (counting) addBits8(planes, next, ub);
+          if (complete2) done[u] = 1;
+        }
+      } else {
+        for (let v = lo; v < hi; v++) {
+          if (done[v]) continue;
+          let a0 = 0, a1 = 0, a2 = 0, a3 = 0, a4 = 0, a5 = 0, a6 = 0, a7 = 0;
+          for (let p = ro[v]; p < ro[v + 1]; p++) {
+            const u = 8 * rn[p];
+            a0 |= frontier[u + 0];
+            a1 |= frontier[u + 1];
+            a2 |= frontier[u + 2];
+            a3 |= frontier[u + 3];
+            a4 |= frontier[u + 4];
+            a5 |= frontier[u + 5];
+            a6 |= frontier[u + 6];
+            a7 |= frontier[u + 7];
+          }
+          const vb = 8 * v;
+          const x0 = a0 & ~seen[vb + 0];
+          const x1 = a1 & ~seen[vb + 1];
+          const x2 = a2 & ~seen[vb + 2];
+          const x3 = a3 & ~seen[vb + 3];
+          const x4 = a4 & ~seen[vb + 4];
+          const x5 = a5 & ~seen[vb + 5];
+          const x6 = a6 & ~seen[vb + 6];
+          const x7 = a7 & ~seen[vb + 7];
+          next[vb + 0] = x0;
+          next[vb + 1] = x1;
+          next[vb + 2] = x2;
+          next[vb + 3] = x3;
+          next[vb + 4] = x4;
+          next[vb + 5] = x5;
+          next[vb + 6] = x6;
+          next[vb + 7] = x7;
+          if ((x0 | x1 | x2 | x3 | x4 | x5 | x6 | x7) === 0) continue;
+          const t0 = (seen[vb + 0] | x0) >>> 0;
+          const t1 = (seen[vb + 1] | x1) >>> 0;
+          const t2 = (seen[vb + 2] | x2) >>> 0;
+          const t3 = (seen[vb + 3] | x3) >>> 0;
+          const t4 = (seen[vb + 4] | x4) >>> 0;
+          const t5 = (seen[vb + 5] | x5) >>> 0;
+          const t6 = (seen[vb + 6] | x6) >>> 0;
+          const t7 = (seen[vb + 7] | x7) >>> 0;
+          seen[vb + 0] = t0;
+          seen[vb + 1] = t1;
+          seen[vb + 2] = t2;
+          seen[vb + 3] = t3;
+          seen[vb + 4] = t4;
+          seen[vb + 5] = t5;
+          seen[vb + 6] = t6;
+          seen[vb + 7] = t7;
+          reached += popcount32(x0) + popcount32(x1) + popcount32(x2) + popcount32(x3) + popcount32(x4) + popcount32(x5) + popcount32(x6) + popcount32(x7);
+          if (counting) addBits8(planes, next, vb);
+          nextActive[nextCount++] = v;
+          if (t0 === f0 && t1 === f1 && t2 === f2 && t3 === f3 && t4 === f4 && t5 === f5 && t6 === f6 && t7 === f7)
+            done[v] = 1;
+        }
+      }
+      if (reached > 0) {
+        hist[d] += reached;
+        if (d > this.result.maxDistance) this.result.maxDistance = d;
+        if (counting) this.drainPlanes(perSource, from, width, 1 / d, 8);
+      }
+      for (let i = 0; i < activeCount; i++) {
+        const vb = 8 * active[i];
+        for (let w = 0; w < 8; w++) frontier[vb + w] = 0;
+      }
+      const f = frontier;
+      frontier = next;
+      next = f;
+      const a = active;
+      active = nextActive;
+      nextActive = a;
+      activeCount = nextCount;
+    }
+    this.frontier = frontier;
+    this.next = next;
+    this.active = active;
+    this.nextActive = nextActive;
+  }
+  /** Per-source counts of this level (bit-sliced) → perSource += count / d. */
+  drainPlanes(perSource, from, width, inv, words) {
+    const planes = this.planes;
+    for (let i = 0; i < width; i++) {
+      const word = i >>> 5;
+      const bit = i & 31;
+      let c = 0;
+      for (let p = 0; p < PLANES; p++) c += (planes[words * p + word] >>> bit & 1) * (1 << p);
+      if (c > 0) perSource[this.srcIndex[from + i]] += c * inv;
+    }
+  }
+};
+function addBits8(planes, next, at) {
+  for (let w = 0; w < 8; w++) {
+    let c = next[at + w];
+    for (let p = 0; p < PLANES && c !== 0; p++) {
+      const q = planes[8 * p + w];
+      planes[8 * p + w] = q ^ c;
+      c &= q;
+    }
+  }
+}
+function addBits(planes, x0, x1) {
+  let c0 = x0;
+  let c1 = x1;
+  for (let p = 0; p < PLANES && (c0 | c1) !== 0; p++) {
+    const q0 = planes[2 * p];
+    const q1 = planes[2 * p + 1];
+    planes[2 * p] = q0 ^ c0;
+    planes[2 * p + 1] = q1 ^ c1;
+    c0 &= q0;
+    c1 &= q1;
+  }
 }
 
 // src/metrics/kernels/union-find.ts
@@ -42492,6 +42881,7 @@ function createComponentCounter(g) {
       summary2.largest = largest;
       summary2.largestRoot = largestRoot;
       summary2.connectedPairs = pairs;
+      kernelWork.visits += 2 * n + g.m;
       return summary2;
     }
   };
@@ -42778,7 +43168,10 @@ var demandServed = {
   normalization: "served volume / total demand volume; raw = served volume.",
   cost: "linear",
   appliesTo: (g) => totalVolume(g) > 0,
-  needs: { what: "demands", hint: "declare demands (a volume > 0 between two sites) in the design, or take demand_served out of the r-value" },
+  needs: {
+    what: "demands",
+    hint: "declare demands (a volume > 0 between two sites) in the design, or take demand_served out of the r-value"
+  },
   create(g, options = {}) {
     const total = totalVolume(g);
     const budget = options.latencyBudget ?? g.latencyBudget;
@@ -42914,7 +43307,8 @@ function createBandedResistance(capacity) {
     prepare(g) {
       const n = g.n;
       let start = 0;
-      for (let v = 1; v < n; v++) if (g.offsets[v + 1] - g.offsets[v] < g.offsets[start + 1] - g.offsets[start]) start = v;
+      for (let v = 1; v < n; v++)
+        if (g.offsets[v + 1] - g.offsets[v] < g.offsets[start + 1] - g.offsets[start]) start = v;
       start = cuthillMcKee(g, start);
       cuthillMcKee(g, start);
       for (let i = 0; i < n; i++) order[i] = queue2[n - 1 - i];
@@ -43032,11 +43426,27 @@ function createTraceEstimator(capacity, maxSteps) {
      * the `dc` orthonormal vectors in `defl` (packed with stride op.n).
      */
     estimate(op, f, keys, defl, dc, opts) {
+      return this.estimateWithError(op, f, keys, defl, dc, opts).mean;
+    },
+    /**
+     * The estimate and its standard error: the probes' sample standard deviation over √probes
+     * (each probe is an unbiased Hutchinson sample of the trace, up to the quadrature's error,
+     * which `tol` keeps far below it).
+     */
+    estimateWithError(op, f, keys, defl, dc, opts) {
       const n = op.n;
-      if (n - dc <= 0) return 0;
+      if (n - dc <= 0) return { mean: 0, se: 0, probes: 0 };
       const steps = Math.min(opts.steps, maxSteps, n - dc);
+      const most = opts.targetSe !== void 0 ? Math.max(opts.probes, opts.maxProbes ?? opts.probes) : opts.probes;
       let total = 0;
-      for (let p = 0; p < opts.probes; p++) {
+      let squares = 0;
+      let p = 0;
+      for (; p < most; p++) {
+        if (opts.targetSe !== void 0 && p >= opts.probes && p % opts.probes === 0) {
+          const mean2 = total / p;
+          const se2 = Math.sqrt(Math.max(0, squares / p - mean2 * mean2) / (p - 1));
+          if (se2 <= opts.targetSe(mean2)) break;
+        }
         for (let i = 0; i < n; i++) q[i] = sign(keys[i], 20903 + p);
         deflate(q, n, defl, dc);
         let nz2 = 0;
@@ -43079,8 +43489,11 @@ function createTraceEstimator(capacity, maxSteps) {
           betaPrev = beta;
         }
         total += nz2 * estimate2;
+        squares += (nz2 * estimate2) ** 2;
       }
-      return total / opts.probes;
+      const mean = total / p;
+      const se = p > 1 ? Math.sqrt(Math.max(0, squares / p - mean * mean) * p / (p - 1) / p) : Number.POSITIVE_INFINITY;
+      return { mean, se, probes: p };
     }
   };
 }
@@ -43129,6 +43542,153 @@ var effectiveResistance = {
   }
 };
 
+// src/graph/canonical.ts
+var WHOLE = /^[0-9]+$/;
+function compareIds(a, b) {
+  if (a === b) return 0;
+  return compareParsed(a, WHOLE.test(a) ? stripZeros(a) : null, b, WHOLE.test(b) ? stripZeros(b) : null);
+}
+function compareParsed(a, da, b, db) {
+  if (da !== null && db !== null) {
+    if (da.length !== db.length) return da.length - db.length;
+    if (da !== db) return da < db ? -1 : 1;
+  } else if (da !== null || db !== null) return da !== null ? -1 : 1;
+  return compareCodePoints(a, b);
+}
+function naturalOrder(ids) {
+  const digits = ids.map((id) => WHOLE.test(id) ? stripZeros(id) : null);
+  return ids.map((_, i) => i).sort((a, b) => (ids[a] === ids[b] ? 0 : compareParsed(ids[a], digits[a], ids[b], digits[b])) || a - b);
+}
+function stripZeros(s) {
+  let i = 0;
+  while (i < s.length - 1 && s.charCodeAt(i) === 48) i++;
+  return s.slice(i);
+}
+function compareCodePoints(a, b) {
+  const n = Math.min(a.length, b.length);
+  for (let i = 0; i < n; i++) {
+    const x = a.charCodeAt(i);
+    const y = b.charCodeAt(i);
+    if (x !== y) return unitRank(x) - unitRank(y);
+  }
+  return a.length - b.length;
+}
+function unitRank(u) {
+  if (u >= 55296 && u <= 57343) return u + 8192;
+  if (u >= 57344) return u - 2048;
+  return u;
+}
+function canonicalOrder(t) {
+  const nodes = naturalOrder(t.nodes.map((v) => v.id));
+  const rank = /* @__PURE__ */ new Map();
+  nodes.forEach((i, r) => rank.set(t.nodes[i].id, r));
+  const m = t.links.length;
+  const lo = new Int32Array(m);
+  const hi = new Int32Array(m);
+  t.links.forEach((l, e) => {
+    const s = rank.get(l.source) ?? -1;
+    const d = rank.get(l.target) ?? -1;
+    lo[e] = Math.min(s, d);
+    hi[e] = Math.max(s, d);
+  });
+  const buckets = nodes.length + 1;
+  const start = new Int32Array(buckets + 1);
+  for (let e = 0; e < m; e++) start[lo[e] + 2]++;
+  for (let b = 0; b < buckets; b++) start[b + 1] += start[b];
+  const fill = start.slice(0, buckets);
+  const order = new Int32Array(m);
+  for (let e = 0; e < m; e++) order[fill[lo[e] + 1]++] = e;
+  const cmp = (x, y) => hi[x] - hi[y] || (hi[x] === hi[y] && lo[x] === lo[y] ? compareParallel(t.links[x], t.links[y]) : 0) || x - y;
+  for (let b = 0; b < buckets; b++) {
+    const from = start[b];
+    const to = start[b + 1];
+    if (to - from < 2) continue;
+    if (to - from <= 16) {
+      for (let i = from + 1; i < to; i++) {
+        const e = order[i];
+        let j = i - 1;
+        while (j >= from && cmp(order[j], e) > 0) {
+          order[j + 1] = order[j];
+          j--;
+        }
+        order[j + 1] = e;
+      }
+    } else order.subarray(from, to).sort(cmp);
+  }
+  const links = Array.from(order);
+  const keys = links.map((e) => t.links[e].key);
+  for (let i = 0; i < links.length; ) {
+    let j = i + 1;
+    while (j < links.length && lo[links[j]] === lo[links[i]] && hi[links[j]] === hi[links[i]]) j++;
+    if (j - i > 1) keys.splice(i, j - i, ...keys.slice(i, j).sort(compareKeys));
+    i = j;
+  }
+  const demandEnd = (d, which2) => rank.get(d[which2]) ?? -1;
+  const demands = t.demands.map((_, i) => i).sort((a, b) => {
+    const x = t.demands[a];
+    const y = t.demands[b];
+    return demandEnd(x, "source") - demandEnd(y, "source") || demandEnd(x, "target") - demandEnd(y, "target") || x.volume - y.volume || a - b;
+  });
+  return { nodes, links, keys, demands, lo, hi };
+}
+function compareKeys(a, b) {
+  return a.length - b.length || compareCodePoints(a, b);
+}
+function compareParallel(a, b) {
+  return compareOptional(a.length, b.length) || compareOptional(a.latency, b.latency) || compareOptional(a.weight, b.weight) || compareOptional(a.capacity, b.capacity) || Number(a.hardened) - Number(b.hardened) || compareCodePoints(groupsKey(a), groupsKey(b)) || compareCodePoints(stableJson(a.attrs), stableJson(b.attrs)) || compareIds(a.id, b.id);
+}
+function compareOptional(a, b) {
+  if (a === b) return 0;
+  if (a === void 0) return -1;
+  if (b === void 0) return 1;
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+function groupsKey(l) {
+  return [...new Set(l.riskGroups)].sort(compareIds).join("\0");
+}
+function stableJson(value2) {
+  if (Array.isArray(value2)) return `[${value2.map(stableJson).join(",")}]`;
+  if (value2 !== null && typeof value2 === "object") {
+    const entries = Object.keys(value2).sort(compareCodePoints).map((k) => `${JSON.stringify(k)}:${stableJson(value2[k])}`);
+    return `{${entries.join(",")}}`;
+  }
+  return JSON.stringify(value2) ?? "null";
+}
+
+// src/metrics/kernels/source-sample.ts
+function sourceHash(id, seed) {
+  let h = mix32((Math.floor(seed / 4294967296) ^ 1936684402) >>> 0) ^ seed >>> 0;
+  for (let i = 0; i < id.length; i++) {
+    let k = Math.imul(id.charCodeAt(i), 3432918353);
+    k = k << 15 | k >>> 17;
+    h ^= Math.imul(k, 461845907);
+    h = h << 13 | h >>> 19;
+    h = Math.imul(h, 5) + 3864292196 | 0;
+  }
+  return mix32(h ^ id.length);
+}
+function sampleSources(ids, choice, seed) {
+  if (choice === void 0 || choice === "all") return null;
+  if (!Number.isInteger(choice) || choice < 1)
+    throw new RangeError(`sources must be a whole number of at least 1 or 'all', got ${String(choice)}`);
+  if (choice >= ids.length) return null;
+  const keys = new Uint32Array(ids.length);
+  for (let i = 0; i < ids.length; i++) keys[i] = sourceHash(ids[i], seed);
+  const order = Array.from({ length: ids.length }, (_, i) => i);
+  order.sort((a, b) => keys[a] - keys[b] || compareIds(ids[a], ids[b]));
+  return Int32Array.from(order.slice(0, choice)).sort();
+}
+function sampleMean(y, k, population) {
+  let sum = 0;
+  for (let i = 0; i < k; i++) sum += y[i];
+  const mean = sum / k;
+  if (k < 2) return { mean, se: Number.POSITIVE_INFINITY };
+  let ss = 0;
+  for (let i = 0; i < k; i++) ss += (y[i] - mean) * (y[i] - mean);
+  const variance = ss / (k - 1);
+  return { mean, se: Math.sqrt(Math.max(0, 1 - k / population) * (variance / k)) };
+}
+
 // src/metrics/efficiency.ts
 var efficiency = {
   id: "efficiency",
@@ -43136,12 +43696,36 @@ var efficiency = {
   normalization: "Already in [0, 1] with N0 in the denominator; 1 only for a complete graph.",
   cost: "all-pairs",
   appliesTo: () => true,
-  create(g) {
+  create(g, options = {}) {
     const survivors = createSurvivorBuilder(g, true);
     const bfs = createHopHistogram(g.n);
+    const pairs = g.n * (g.n - 1);
+    const sample2 = sampleSources(g.nodeIds, options.sources, options.sourceSeed ?? 0);
+    if (sample2) {
+      const k = sample2.length;
+      const local = new Int32Array(k);
+      const at = new Int32Array(k);
+      const sums = new Float64Array(k);
+      const y = new Float64Array(k);
+      return (mask) => {
+        const graph = survivors(mask);
+        let alive = 0;
+        for (let i = 0; i < k; i++) {
+          const v = graph.toLocal[sample2[i]];
+          if (v >= 0) {
+            local[alive] = v;
+            at[alive++] = i;
+          }
+        }
+        y.fill(0);
+        bfs.run(graph, local, alive, sums);
+        for (let i = 0; i < alive; i++) y[at[i]] = sums[i] / (g.n - 1);
+        const { mean, se } = sampleMean(y, k, g.n);
+        return { raw: mean, normalized: Math.min(1, Math.max(0, mean)), se };
+      };
+    }
     const sources = new Int32Array(g.n);
     for (let i = 0; i < g.n; i++) sources[i] = i;
-    const pairs = g.n * (g.n - 1);
     return (mask) => {
       if (pairs === 0) return { raw: 0, normalized: 0 };
       const local = survivors(mask);
@@ -43176,7 +43760,7 @@ function createFlowNetwork(nodeCapacity, entryCapacity) {
   const maxArcs = 2 * entryCapacity + 2 * nodeCapacity;
   const start = new Int32Array(maxNodes + 1);
   const head = new Int32Array(maxArcs);
-  const rev = new Int32Array(maxArcs);
+  const rev2 = new Int32Array(maxArcs);
   const cap0 = new Int8Array(maxArcs);
   const cap = new Int8Array(maxArcs);
   const fill = new Int32Array(maxNodes);
@@ -43190,10 +43774,10 @@ function createFlowNetwork(nodeCapacity, entryCapacity) {
     const y = fill[b]++;
     head[x] = b;
     cap0[x] = capAB;
-    rev[x] = y;
+    rev2[x] = y;
     head[y] = a;
     cap0[y] = capBA;
-    rev[y] = x;
+    rev2[y] = x;
   }
   return {
     build(graph, split) {
@@ -43217,7 +43801,8 @@ function createFlowNetwork(nodeCapacity, entryCapacity) {
         if (split) addPair(2 * v, 2 * v + 1, 1, 0);
         for (let p = graph.offsets[v]; p < graph.offsets[v + 1]; p++) {
           const w = graph.neighbors[p];
-          if (split) addPair(2 * v + 1, 2 * w, 1, 0);
+          if (split)
+            addPair(2 * v + 1, 2 * w, 1, 0);
           else if (v < w) addPair(v, w, 1, 1);
         }
       }
@@ -43253,8 +43838,8 @@ function createFlowNetwork(nodeCapacity, entryCapacity) {
         for (let v = sink; v !== source; ) {
           const a = parentArc[v];
           cap[a]--;
-          cap[rev[a]]++;
-          v = head[rev[a]];
+          cap[rev2[a]]++;
+          v = head[rev2[a]];
         }
         total++;
       }
@@ -43383,7 +43968,10 @@ var linkConnectivity = {
 // src/metrics/natural-connectivity.ts
 var DEFLATE = 8;
 var PROBES2 = 32;
+var MAX_PROBES = 256;
+var NATURAL_DENSE_LIMIT = 2e3;
 var STEPS2 = 40;
+var STATED_ERROR = 1e-3;
 function naturalConnectivityOfComplete(n) {
   if (n <= 1) return 0;
   return n - 1 + Math.log1p((n - 1) * Math.exp(-n)) - Math.log(n);
@@ -43401,7 +43989,7 @@ var naturalConnectivity = {
   cost: "spectral",
   appliesTo: () => true,
   create(g, options = {}) {
-    const limit = Math.min(g.n, options.denseLimit ?? TRACE_DENSE_LIMIT);
+    const limit = Math.min(g.n, options.denseLimit ?? NATURAL_DENSE_LIMIT);
     const spectral = createSpectralSurvivors(g);
     const dense = createDenseSpectrum(limit);
     const big = g.n > limit;
@@ -43410,12 +43998,15 @@ var naturalConnectivity = {
     const op = createAdjacencyOperator();
     const deflation = big ? new Float64Array(DEFLATE * g.n) : new Float64Array(0);
     const best = naturalConnectivityOfComplete(g.n);
+    const relSe = new Float64Array(big ? g.n : 0);
+    const logOf = new Float64Array(big ? g.n : 0);
     return (mask) => {
       const local = spectral.survivors(mask);
       if (local.n === 0) return { raw: 0, normalized: 0 };
       const comps = spectral.components(local);
       let logTotal = -Infinity;
       let isolated = 0;
+      let estimated = 0;
       for (let c = 0; c < comps.count; c++) {
         const size = comps.start[c + 1] - comps.start[c];
         if (size === 1) {
@@ -43440,18 +44031,32 @@ var naturalConnectivity = {
             s += Math.exp(r.values[j] - top);
             deflation.set(r.vectors.subarray(j * r.stride, j * r.stride + size), j * size);
           }
-          s += slq.estimate(op, (x) => Math.exp(x - top), spectral.keysOf(part), deflation, r.found, {
+          const exact = s;
+          const est = slq.estimateWithError(op, (x) => Math.exp(x - top), spectral.keysOf(part), deflation, r.found, {
             probes: PROBES2,
+            maxProbes: MAX_PROBES,
             steps: STEPS2,
-            tol: 1e-10
+            tol: 1e-10,
+            targetSe: (mean) => {
+              const sum = exact + mean;
+              const guess = Math.max(1e-6, top + Math.log(sum) - Math.log(local.n));
+              return STATED_ERROR / 2 * guess * sum;
+            }
           });
+          s += est.mean;
           logPart = top + Math.log(s);
+          relSe[estimated] = est.se / s;
+          logOf[estimated++] = logPart;
         }
         logTotal = logAdd(logTotal, logPart);
       }
       if (isolated > 0) logTotal = logAdd(logTotal, Math.log(isolated));
       const lambda = Math.max(0, logTotal - Math.log(local.n));
-      return { raw: lambda, normalized: best > 0 ? Math.min(1, lambda / best) : 0 };
+      const normalized = best > 0 ? Math.min(1, lambda / best) : 0;
+      if (estimated === 0) return { raw: lambda, normalized };
+      let v = 0;
+      for (let i = 0; i < estimated; i++) v += (Math.exp(logOf[i] - logTotal) * relSe[i]) ** 2;
+      return { raw: lambda, normalized, se: Math.sqrt(v) };
     };
   }
 };
@@ -43502,7 +44107,12 @@ var spectralRadius = {
   appliesTo: () => true,
   create(g, options = {}) {
     const spectral = createSpectralSurvivors(g);
-    const solve = createExtremalSolver(g, "radius", options.denseLimit ?? EXTREMAL_DENSE_LIMIT, options.warmStart ?? false);
+    const solve = createExtremalSolver(
+      g,
+      "radius",
+      options.denseLimit ?? EXTREMAL_DENSE_LIMIT,
+      options.warmStart ?? false
+    );
     return (mask) => {
       const local = spectral.survivors(mask);
       const comps = spectral.components(local);
@@ -43544,7 +44154,10 @@ var weightedEfficiency = {
   normalization: "E_w / E_ideal, ideal = every pair joined directly (great-circle distance, at least the cheapest link).",
   cost: "all-pairs",
   appliesTo: (g) => chooseLinkCost(g) !== null,
-  needs: { what: "a latency, length or weight > 0 on every link", hint: "give every link latency_ms or length_km, or take weighted_efficiency out of the r-value" },
+  needs: {
+    what: "a latency, length or weight > 0 on every link",
+    hint: "give every link latency_ms or length_km, or take weighted_efficiency out of the r-value"
+  },
   create(g) {
     const cost = chooseLinkCost(g);
     if (!cost) throw new RangeError("weighted_efficiency needs latency, length or weight on every link");
@@ -43603,7 +44216,8 @@ function getMetric(id) {
 function validateRSpec(spec) {
   if (spec.metrics.length === 0) throw new RangeError("the R-value needs at least one metric");
   for (const m of spec.metrics) {
-    if (!(m.weight > 0) || !Number.isFinite(m.weight)) throw new RangeError(`metric ${m.id}: weight must be > 0, got ${m.weight}`);
+    if (!(m.weight > 0) || !Number.isFinite(m.weight))
+      throw new RangeError(`metric ${m.id}: weight must be > 0, got ${m.weight}`);
   }
   if (spec.combine !== "mean" && spec.combine !== "min") throw new RangeError(`combine must be "mean" or "min"`);
 }
@@ -43614,12 +44228,12 @@ function combineR(spec, values) {
     return r;
   }
   let sum = 0;
-  let weight = 0;
+  let weight2 = 0;
   for (let i = 0; i < values.length; i++) {
     sum += spec.metrics[i].weight * values[i];
-    weight += spec.metrics[i].weight;
+    weight2 += spec.metrics[i].weight;
   }
-  return sum / weight;
+  return sum / weight2;
 }
 function unsupportedMetric(g, spec) {
   for (const m of spec.metrics) {
@@ -43661,12 +44275,6 @@ function unionFindR(g, spec) {
     }
     return combineR(spec, values);
   };
-}
-function rPasses(g, spec) {
-  const passes = { linear: 1, "all-pairs": Math.max(1, g.n), spectral: 50, flow: Math.max(1, g.n) };
-  let total = 0;
-  for (const m of spec.metrics) total += passes[getMetric(m.id).cost];
-  return total;
 }
 
 // src/envelope/union-find.ts
@@ -43740,6 +44348,7 @@ function connectivityCurve(g, kind, order, count, ws = createUnionFindWorkspace(
     out.lcc[i] = st.lcc;
     out.pairs[i] = st.pairs;
   }
+  kernelWork.visits += 2 * g.n + g.m + count;
   return out;
 }
 function join(st, parent, size, a, b) {
@@ -43836,7 +44445,9 @@ function searchWorstCase(g, kind, k, rfn, options) {
     }
     if (candidates2.length === 0) break;
     for (const c of candidates2) c.key = [...c.parent.seq, c.u].sort((x, y) => x - y).join(",");
-    candidates2.sort((x, y) => x.r - y.r || compareKeys(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u]));
+    candidates2.sort(
+      (x, y) => x.r - y.r || compareKeys2(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u])
+    );
     const next = [];
     const seen = /* @__PURE__ */ new Set();
     for (const c of candidates2) {
@@ -43853,7 +44464,7 @@ function searchWorstCase(g, kind, k, rfn, options) {
   const best = beam[0];
   return done(best.seq, best.values, width > 1 ? "beam" : "greedy");
 }
-function compareKeys(a, b) {
+function compareKeys2(a, b) {
   return compareSeq(a.split(",").map(Number), b.split(",").map(Number));
 }
 function compareSeq(a, b) {
@@ -43923,13 +44534,18 @@ function evaluateContingency(g, kind, order, rfn, maxCases) {
 function chunkSize(realizations) {
   return Math.min(16, Math.max(1, Math.ceil(realizations / 32)));
 }
+var BATCH = 32;
 function planTasks(plan, g) {
   const tasks = [];
   plan.items.forEach((it, item) => {
     if (it.type === "band") {
       const m = realizationCount(g, it);
       const chunk = chunkSize(m);
-      for (let from = 0; from < m; from += chunk) tasks.push({ type: "band", item, from, to: Math.min(m, from + chunk) });
+      for (let from = 0; from < m; ) {
+        const to = Math.min(m, from + chunk - from % chunk, BATCH * (Math.floor(from / BATCH) + 1));
+        tasks.push({ type: "band", item, from, to });
+        from = to;
+      }
     } else if (it.type === "attack") tasks.push({ type: "attack", item });
     else tasks.push({ type: "contingency", item });
     if (it.params.worstCase > 0) tasks.push({ type: "worst", item });
@@ -44070,119 +44686,6 @@ function runTask(g, plan, task) {
   }
 }
 
-// src/graph/canonical.ts
-var WHOLE = /^[0-9]+$/;
-function compareIds(a, b) {
-  if (a === b) return 0;
-  return compareParsed(a, WHOLE.test(a) ? stripZeros(a) : null, b, WHOLE.test(b) ? stripZeros(b) : null);
-}
-function compareParsed(a, da, b, db) {
-  if (da !== null && db !== null) {
-    if (da.length !== db.length) return da.length - db.length;
-    if (da !== db) return da < db ? -1 : 1;
-  } else if (da !== null || db !== null) return da !== null ? -1 : 1;
-  return compareCodePoints(a, b);
-}
-function naturalOrder(ids) {
-  const digits = ids.map((id) => WHOLE.test(id) ? stripZeros(id) : null);
-  return ids.map((_, i) => i).sort((a, b) => (ids[a] === ids[b] ? 0 : compareParsed(ids[a], digits[a], ids[b], digits[b])) || a - b);
-}
-function stripZeros(s) {
-  let i = 0;
-  while (i < s.length - 1 && s.charCodeAt(i) === 48) i++;
-  return s.slice(i);
-}
-function compareCodePoints(a, b) {
-  const n = Math.min(a.length, b.length);
-  for (let i = 0; i < n; i++) {
-    const x = a.charCodeAt(i);
-    const y = b.charCodeAt(i);
-    if (x !== y) return unitRank(x) - unitRank(y);
-  }
-  return a.length - b.length;
-}
-function unitRank(u) {
-  if (u >= 55296 && u <= 57343) return u + 8192;
-  if (u >= 57344) return u - 2048;
-  return u;
-}
-function canonicalOrder(t) {
-  const nodes = naturalOrder(t.nodes.map((v) => v.id));
-  const rank = /* @__PURE__ */ new Map();
-  nodes.forEach((i, r) => rank.set(t.nodes[i].id, r));
-  const m = t.links.length;
-  const lo = new Int32Array(m);
-  const hi = new Int32Array(m);
-  t.links.forEach((l, e) => {
-    const s = rank.get(l.source) ?? -1;
-    const d = rank.get(l.target) ?? -1;
-    lo[e] = Math.min(s, d);
-    hi[e] = Math.max(s, d);
-  });
-  const buckets = nodes.length + 1;
-  const start = new Int32Array(buckets + 1);
-  for (let e = 0; e < m; e++) start[lo[e] + 2]++;
-  for (let b = 0; b < buckets; b++) start[b + 1] += start[b];
-  const fill = start.slice(0, buckets);
-  const order = new Int32Array(m);
-  for (let e = 0; e < m; e++) order[fill[lo[e] + 1]++] = e;
-  const cmp = (x, y) => hi[x] - hi[y] || (hi[x] === hi[y] && lo[x] === lo[y] ? compareParallel(t.links[x], t.links[y]) : 0) || x - y;
-  for (let b = 0; b < buckets; b++) {
-    const from = start[b];
-    const to = start[b + 1];
-    if (to - from < 2) continue;
-    if (to - from <= 16) {
-      for (let i = from + 1; i < to; i++) {
-        const e = order[i];
-        let j = i - 1;
-        while (j >= from && cmp(order[j], e) > 0) {
-          order[j + 1] = order[j];
-          j--;
-        }
-        order[j + 1] = e;
-      }
-    } else order.subarray(from, to).sort(cmp);
-  }
-  const links = Array.from(order);
-  const keys = links.map((e) => t.links[e].key);
-  for (let i = 0; i < links.length; ) {
-    let j = i + 1;
-    while (j < links.length && lo[links[j]] === lo[links[i]] && hi[links[j]] === hi[links[i]]) j++;
-    if (j - i > 1) keys.splice(i, j - i, ...keys.slice(i, j).sort(compareKeys2));
-    i = j;
-  }
-  const demandEnd = (d, which2) => rank.get(d[which2]) ?? -1;
-  const demands = t.demands.map((_, i) => i).sort((a, b) => {
-    const x = t.demands[a];
-    const y = t.demands[b];
-    return demandEnd(x, "source") - demandEnd(y, "source") || demandEnd(x, "target") - demandEnd(y, "target") || x.volume - y.volume || a - b;
-  });
-  return { nodes, links, keys, demands, lo, hi };
-}
-function compareKeys2(a, b) {
-  return a.length - b.length || compareCodePoints(a, b);
-}
-function compareParallel(a, b) {
-  return compareOptional(a.length, b.length) || compareOptional(a.latency, b.latency) || compareOptional(a.weight, b.weight) || compareOptional(a.capacity, b.capacity) || Number(a.hardened) - Number(b.hardened) || compareCodePoints(groupsKey(a), groupsKey(b)) || compareCodePoints(stableJson(a.attrs), stableJson(b.attrs)) || compareIds(a.id, b.id);
-}
-function compareOptional(a, b) {
-  if (a === b) return 0;
-  if (a === void 0) return -1;
-  if (b === void 0) return 1;
-  return a < b ? -1 : a > b ? 1 : 0;
-}
-function groupsKey(l) {
-  return [...new Set(l.riskGroups)].sort(compareIds).join("\0");
-}
-function stableJson(value2) {
-  if (Array.isArray(value2)) return `[${value2.map(stableJson).join(",")}]`;
-  if (value2 !== null && typeof value2 === "object") {
-    const entries = Object.keys(value2).sort(compareCodePoints).map((k) => `${JSON.stringify(k)}:${stableJson(value2[k])}`);
-    return `{${entries.join(",")}}`;
-  }
-  return JSON.stringify(value2) ?? "null";
-}
-
 // src/graph/compact.ts
 function adjacency(n, linkSource, linkTarget, degree2) {
   const m = linkSource.length;
@@ -44253,7 +44756,8 @@ function compileTopology(t) {
   });
   const groupLineOf = /* @__PURE__ */ new Map();
   for (const g of t.riskGroups) if (!groupLineOf.has(g.id)) groupLineOf.set(g.id, g.pos.line);
-  for (const link of t.links) for (const gid of link.riskGroups) if (!groupLineOf.has(gid)) groupLineOf.set(gid, link.pos.line);
+  for (const link of t.links)
+    for (const gid of link.riskGroups) if (!groupLineOf.has(gid)) groupLineOf.set(gid, link.pos.line);
   const groupIds = [...groupLineOf.keys()].sort(compareIds);
   const groupPos = /* @__PURE__ */ new Map();
   groupIds.forEach((id, g) => groupPos.set(id, g));
@@ -44446,6 +44950,92 @@ function findStrandingGroups(g, honourHardening, cuts = findCutElements(g)) {
   return out;
 }
 
+// src/envelope/cost.ts
+var PLAIN_VISIT = 0.35;
+var WORD_VISIT = 0.18;
+var LEVELS_PER_ECCENTRICITY = 1;
+var ALL_PAIRS_OVERHEAD = 2e3;
+var STRUCTURE_PASSES = 4;
+var SPECTRAL_PRODUCTS = 50;
+var HOP_METRICS = /* @__PURE__ */ new Set(["efficiency", "average_hop", "diameter"]);
+var scratch = /* @__PURE__ */ new WeakMap();
+function survivorShape(g, mask) {
+  let s = scratch.get(g);
+  if (!s) scratch.set(g, s = { dist: new Int32Array(g.n), queue: new Int32Array(g.n) });
+  const { dist, queue: queue2 } = s;
+  dist.fill(-1);
+  const deadNode = mask?.node;
+  const deadLink = mask?.link;
+  const { offsets, neighbors, linkOf } = g;
+  const out = { designEntries: g.n + offsets[g.n], sizes: [], entries: [], eccentricities: [] };
+  for (let root = 0; root < g.n; root++) {
+    if (dist[root] >= 0 || deadNode && deadNode[root]) continue;
+    dist[root] = 0;
+    queue2[0] = root;
+    let tail = 1;
+    let entries = 0;
+    let ecc = 0;
+    for (let head = 0; head < tail; head++) {
+      const v = queue2[head];
+      for (let p = offsets[v]; p < offsets[v + 1]; p++) {
+        const w = neighbors[p];
+        if (w === v || deadNode && deadNode[w] || deadLink && deadLink[linkOf[p]]) continue;
+        entries++;
+        if (dist[w] >= 0) continue;
+        dist[w] = dist[v] + 1;
+        if (dist[w] > ecc) ecc = dist[w];
+        queue2[tail++] = w;
+      }
+    }
+    out.sizes.push(tail);
+    out.entries.push(entries);
+    out.eccentricities.push(ecc);
+  }
+  return out;
+}
+function hopSearchCost(shape) {
+  let plain = shape.designEntries;
+  let words = 0;
+  for (let c = 0; c < shape.sizes.length; c++) {
+    const n = shape.sizes[c];
+    const sweep = n + shape.entries[c];
+    plain += sweep;
+    if (n < 2) continue;
+    plain += sweep;
+    const ecc = shape.eccentricities[c];
+    if (ecc >= LONG_GRAPH_ECCENTRICITY && n < THIN_LEVEL * (ecc + 1)) {
+      plain += (n - 1) * sweep;
+      continue;
+    }
+    const levels = LEVELS_PER_ECCENTRICITY * (shape.eccentricities[c] + 1);
+    let left = n - 1;
+    while (left > 0) {
+      const width = left > 64 ? Math.min(256, left) : left;
+      words += (width > 64 ? 8 : 2) * levels * sweep;
+      left -= width;
+    }
+  }
+  return Math.ceil(ALL_PAIRS_OVERHEAD + PLAIN_VISIT * plain + WORD_VISIT * words);
+}
+function rCost(g, spec, shape) {
+  const scan = passCost(g);
+  let total = 0;
+  for (const m of spec.metrics) {
+    const cost = getMetric(m.id).cost;
+    if (HOP_METRICS.has(m.id)) total += hopSearchCost(shape);
+    else if (cost === "linear") total += scan;
+    else if (cost === "spectral") total += scan * SPECTRAL_PRODUCTS;
+    else total += scan * Math.max(1, g.n);
+  }
+  return total;
+}
+function orderCost(g, units) {
+  return Math.ceil(passCost(g) * Math.log2(Math.max(2, units)) / 2);
+}
+function passCost(g) {
+  return Math.ceil(PLAIN_VISIT * (g.n + g.offsets[g.n]));
+}
+
 // src/envelope/quantiles.ts
 var DEFAULT_CONFIDENCE = 0.95;
 function quantileSorted(sorted, p) {
@@ -44515,9 +45105,23 @@ function binomialPmf(n, p) {
 }
 function normalQuantile(p) {
   if (!(p > 0 && p < 1)) throw new RangeError(`normal quantile needs p in (0, 1), got ${p}`);
-  const a = [-39.69683028665376, 220.9460984245205, -275.9285104469687, 138.357751867269, -30.66479806614716, 2.506628277459239];
+  const a = [
+    -39.69683028665376,
+    220.9460984245205,
+    -275.9285104469687,
+    138.357751867269,
+    -30.66479806614716,
+    2.506628277459239
+  ];
   const b = [-54.47609879822406, 161.5858368580409, -155.6989798598866, 66.80131188771972, -13.28068155288572];
-  const c = [-0.007784894002430293, -0.3223964580411365, -2.400758277161838, -2.549732539343734, 4.374664141464968, 2.938163982698783];
+  const c = [
+    -0.007784894002430293,
+    -0.3223964580411365,
+    -2.400758277161838,
+    -2.549732539343734,
+    4.374664141464968,
+    2.938163982698783
+  ];
   const d = [0.007784695709041462, 0.3224671290700398, 2.445134137142996, 3.754408661907416];
   const plow = 0.02425;
   let x;
@@ -44603,121 +45207,6 @@ function attackGap(lo, attackAtGrid) {
   return count > 0 ? sum / count : null;
 }
 
-// src/envelope/pairing.ts
-var BOOTSTRAP_ROUNDS = 400;
-function pairedStatistic(base, head, challenge, statistic, x) {
-  const envB = base.evaluation.envelopes.find((e) => e.challenge === challenge);
-  const envH = head.evaluation.envelopes.find((e) => e.challenge === challenge);
-  if (envB && envH) return pairedBand(base, head, envB, envH, statistic, x);
-  const atB = base.evaluation.attacks.find((a) => a.challenge === challenge);
-  const atH = head.evaluation.attacks.find((a) => a.challenge === challenge);
-  if (atB && atH) {
-    const value2 = (a) => {
-      if (statistic.kind === "area") return a.area;
-      if (statistic.kind === "spread") return 0;
-      if (x === void 0) throw new RangeError(`${challenge}: the ${statistic.kind} of an attack needs x`);
-      const count = a.count ?? a.values.length - 1;
-      const r = valueAtCount(a.values, countAt(x, count, count));
-      if (Number.isNaN(r)) throw new RangeError(`${challenge}: the attack stops before x = ${x}`);
-      return r;
-    };
-    return deterministic(value2(atB), value2(atH));
-  }
-  const cB = base.evaluation.contingencies.find((c) => c.challenge === challenge);
-  const cH = head.evaluation.contingencies.find((c) => c.challenge === challenge);
-  if (cB && cH) {
-    if (statistic.kind !== "min") throw new RangeError(`${challenge}: only the min of a contingency can be compared`);
-    return deterministic(cB.min, cH.min);
-  }
-  throw new RangeError(`challenge ${challenge} was not evaluated on both sides`);
-}
-function deterministic(base, head) {
-  return { base, head, delta: head - base, se: 0 };
-}
-function gridIndex(env, x, what) {
-  if (x === void 0) throw new RangeError(`${env.challenge}: the ${what} needs x`);
-  const j = env.x.indexOf(round12(x));
-  if (j < 0) throw new RangeError(`${env.challenge}: x = ${x} is not a grid point (grid: ${env.x.join(", ")}); add it to the challenge's "at"`);
-  return j;
-}
-function pairedBand(base, head, envB, envH, statistic, x) {
-  const sb = base.samples.get(envB.challenge);
-  const sh = head.samples.get(envH.challenge);
-  let jb = -1;
-  let jh = -1;
-  if (statistic.kind === "quantile" || statistic.kind === "mean" || statistic.kind === "min") {
-    jb = gridIndex(envB, x, statistic.kind);
-    jh = gridIndex(envH, x, statistic.kind);
-  } else if (envB.x.join() !== envH.x.join()) {
-    throw new RangeError(`${envB.challenge}: base and head grids differ; area and spread are not comparable`);
-  }
-  const band = envB.band;
-  const stat2 = (s, j) => {
-    switch (statistic.kind) {
-      case "quantile":
-        return quantileSorted(sortedColumn(s, j), statistic.q);
-      case "mean": {
-        let sum = 0;
-        for (let i = 0; i < s.length; i++) sum += s[i][j];
-        return sum / s.length;
-      }
-      case "min":
-        return sortedColumn(s, j)[0];
-      case "area":
-      case "spread": {
-        const points = s[0]?.length ?? 0;
-        const curve = new Float64Array(points);
-        for (let k = 0; k < points; k++) {
-          const col = sortedColumn(s, k);
-          curve[k] = statistic.kind === "area" ? quantileSorted(col, 0.5) : quantileSorted(col, band[1]) - quantileSorted(col, band[0]);
-        }
-        return gridMean(curve);
-      }
-    }
-  };
-  const b = stat2(sb, jb);
-  const h = stat2(sh, jh);
-  const pairs = [];
-  const lb = base.labels.get(envB.challenge);
-  const lh = head.labels.get(envH.challenge);
-  if (lb && lh) {
-    const where = new Map(lb.map((label, i) => [label, i]));
-    lh.forEach((label, i) => {
-      const k = where.get(label);
-      if (k !== void 0) pairs.push([k, i]);
-    });
-  } else {
-    for (let i = 0; i < Math.min(sb.length, sh.length); i++) pairs.push([i, i]);
-  }
-  const n = pairs.length;
-  if (n < 2) return { base: b, head: h, delta: h - b, se: Number.NaN };
-  if (statistic.kind === "mean") {
-    const d = pairs.map(([i, k]) => sh[k][jh] - sb[i][jb]);
-    const mean2 = d.reduce((s, v) => s + v, 0) / n;
-    const variance = d.reduce((s, v) => s + (v - mean2) ** 2, 0) / (n - 1);
-    return { base: b, head: h, delta: h - b, se: Math.sqrt(variance / n) };
-  }
-  const seedText = `${envB.challenge}|${JSON.stringify(statistic)}|${x ?? ""}`;
-  const rng = new Xoshiro128(hashString(seedText, 721013), 0);
-  const rb = new Array(n);
-  const rh = new Array(n);
-  let s1 = 0;
-  let s2 = 0;
-  for (let round = 0; round < BOOTSTRAP_ROUNDS; round++) {
-    for (let i = 0; i < n; i++) {
-      const [pb, ph] = pairs[rng.nextInt(n)];
-      rb[i] = sb[pb];
-      rh[i] = sh[ph];
-    }
-    const d = stat2(rh, jh) - stat2(rb, jb);
-    s1 += d;
-    s2 += d * d;
-  }
-  const mean = s1 / BOOTSTRAP_ROUNDS;
-  const se = Math.sqrt(Math.max(0, s2 / BOOTSTRAP_ROUNDS - mean * mean) * (BOOTSTRAP_ROUNDS / (BOOTSTRAP_ROUNDS - 1)));
-  return { base: b, head: h, delta: h - b, se };
-}
-
 // src/envelope/evaluate.ts
 var DEFAULT_MAX_WORK = 1e10;
 var MIN_REALIZATIONS = 10;
@@ -44725,7 +45214,8 @@ var EXACT_LIMIT = 1e6;
 var WEAKEST_KEPT = 3;
 var RANKING_PASSES = {
   degree: () => 1,
-  "degree-adaptive": () => 2,
+  // Bucket peeling with a heap per degree: O((N + L) log N), with a constant fitted to time.
+  "degree-adaptive": (n) => 2 + 5 * Math.log2(Math.max(2, n)),
   betweenness: (n) => n,
   "betweenness-adaptive": (n, k) => n * Math.max(1, k),
   eigenvector: () => 200,
@@ -44733,6 +45223,8 @@ var RANKING_PASSES = {
   "link-betweenness": (n) => n,
   "link-betweenness-adaptive": (n, k) => n * Math.max(1, k)
 };
+var ATTACK_SAMPLES = 9;
+var BAND_SAMPLES = 2;
 function planEvaluation(g, spec) {
   validateRSpec(spec.r);
   const unsupported = unsupportedMetric(g, spec.r);
@@ -44759,23 +45251,21 @@ function planEvaluation(g, spec) {
   }
   const maxWork = spec.budget?.maxWork ?? DEFAULT_MAX_WORK;
   if (!(maxWork > 0)) throw new RangeError(`budget.maxWork must be > 0, got ${maxWork}`);
-  const visits2 = g.n + g.m;
-  const rp = rPasses(g, spec.r);
-  const free = unionFindR(g, spec.r) !== null;
-  const est = items.map((it) => estimate(g, it, rp, free));
-  const total = () => est.reduce((s, e) => s + e.band + e.cases + e.fixed + e.worst, 0) * visits2;
+  const costs = costModel(g, spec.r);
+  const est = items.map((it) => estimate(g, it, costs));
+  const total = () => est.reduce((s, e) => s + e.band + e.cases + e.fixed + e.worst, 0);
   if (total() > maxWork) {
     items.forEach((it, i) => {
-      if (est[i].worstExact && est[i].worst * visits2 > maxWork / 4) {
+      if (est[i].worstExact && est[i].worst > maxWork / 4) {
         it.exactLimit = 0;
-        est[i] = estimate(g, it, rp, free);
+        est[i] = estimate(g, it, costs);
         note(it, `worst-case search greedy instead of exact (work budget ${maxWork})`);
       }
     });
   }
   if (total() > maxWork) {
-    const fixed = est.reduce((s, e) => s + e.fixed + e.worst, 0) * visits2;
-    const reducible = est.reduce((s, e) => s + e.band + e.cases, 0) * visits2;
+    const fixed = est.reduce((s, e) => s + e.fixed + e.worst, 0);
+    const reducible = est.reduce((s, e) => s + e.band + e.cases, 0);
     const scale = Math.max(0, maxWork - fixed) / reducible;
     items.forEach((it, i) => {
       if (it.type === "band" && est[i].band > 0) {
@@ -44798,48 +45288,175 @@ function planEvaluation(g, spec) {
   }
   for (const it of items) if (it.degraded) degraded.push(`${it.params.challenge}: ${it.degraded}`);
   const work = items.reduce((s, it) => {
-    const e = estimate(g, it, rp, free);
+    const e = estimate(g, it, costs);
     return s + e.band + e.cases + e.fixed + e.worst;
   }, 0);
-  return { r: spec.r, items, degraded, ...notApplicable.length ? { notApplicable } : {}, work: work * visits2 };
+  const structure2 = STRUCTURE_PASSES * costs.pass;
+  return { r: spec.r, items, degraded, ...notApplicable.length ? { notApplicable } : {}, work: work + structure2 };
 }
 function note(it, reason) {
   it.degraded = it.degraded ? `${it.degraded}; ${reason}` : reason;
 }
-function estimate(g, it, rp, free) {
+var costCache = /* @__PURE__ */ new WeakMap();
+function costModel(g, r) {
+  const mask = createMask(g);
+  return {
+    g,
+    r,
+    free: unionFindR(g, r) !== null,
+    pass: passCost(g),
+    intact: rCost(g, r, survivorShape(g)),
+    along(kind, order, k) {
+      mask.node.fill(0);
+      mask.link.fill(0);
+      for (let i = 0; i < k; i++) removeUnit(g, mask, kind, order[i]);
+      return rCost(g, r, survivorShape(g, mask));
+    }
+  };
+}
+function cached(g, key, compute) {
+  let byKey = costCache.get(g);
+  if (!byKey) costCache.set(g, byKey = /* @__PURE__ */ new Map());
+  const hit = byKey.get(key);
+  if (hit !== void 0) return hit;
+  const value2 = compute();
+  if (byKey.size > 256) byKey.clear();
+  byKey.set(key, value2);
+  return value2;
+}
+function bandRealizationCost(c, p) {
+  return cached(c.g, JSON.stringify(["band", c.r, p.challenge, p.until, p.points, p.at, p.seed]), () => {
+    const bp = bandPlan(c.g, p);
+    const order = new Int32Array(bp.maxUnits);
+    const steps = new Float64Array(bp.x.length);
+    const m = p.challenge === "regional" ? p.epicentres ?? sitesWithCoordinates(c.g).length : p.realizations;
+    const samples = Math.max(1, Math.min(BAND_SAMPLES, m));
+    let sum = 0;
+    for (let r = 0; r < samples; r++) {
+      const len = bp.realize(r, order, steps);
+      const counts = new Set(
+        Array.from(steps).flatMap((v) => [Math.floor(v), Math.ceil(v)].map((k) => Math.min(k, len)))
+      );
+      for (const k of counts) sum += c.along(bp.kind, order, k);
+    }
+    return sum / samples;
+  });
+}
+function attackCurveCost(c, p, kind, k) {
+  return cached(c.g, JSON.stringify(["attack", c.r, p.challenge, k]), () => {
+    let order;
+    const ch = getChallenge(p.challenge);
+    if ((p.challenge === "degree" || p.challenge === "degree-adaptive") && ch.type === "attack") {
+      order = ch.sequence(c.g, k, { rvalue: () => 0 });
+    } else if (kind === "node") {
+      const deg = (v) => c.g.offsets[v + 1] - c.g.offsets[v];
+      order = Array.from({ length: c.g.n }, (_, v) => v).sort((a, b) => deg(b) - deg(a) || a - b);
+    }
+    if (!order) return (k + 1) * c.intact;
+    const len = Math.min(k, order.length);
+    const at = [
+      ...new Set(Array.from({ length: ATTACK_SAMPLES }, (_, i) => Math.round(i * len / (ATTACK_SAMPLES - 1))))
+    ];
+    const cost = at.map((s) => c.along(kind, order, s));
+    let sum = cost[0];
+    for (let i = 1; i < at.length; i++) sum += (cost[i - 1] + cost[i]) / 2 * (at[i] - at[i - 1]);
+    return sum + (k - len) * cost[cost.length - 1];
+  });
+}
+function estimate(g, it, c) {
   const p = it.params;
   const e = { band: 0, cases: 0, fixed: 0, worst: 0, worstExact: false, realizations: 0, totalCases: 0 };
   const kind = challengeKind(g, p);
+  const free = c.free;
   if (it.type === "band") {
     const m = p.challenge === "regional" ? p.epicentres ?? sitesWithCoordinates(g).length : p.realizations;
-    const x = makeGrid(p.until, p.points, p.at);
-    const count = unitCount(g, kind);
-    const distinct = p.challenge === "regional" ? x.length : new Set(x.flatMap((v) => [Math.floor(v * count), Math.ceil(v * count)])).size;
     e.realizations = m;
-    e.band = m * (free ? 2 : distinct * rp + 1);
+    const order = p.challenge === "regional" ? c.pass : orderCost(g, unitCount(g, kind));
+    e.band = m * ((free ? c.pass : bandRealizationCost(c, p)) + order);
   } else if (it.type === "attack") {
     const k = attackSteps(g, kind, p.until);
     const groups2 = g.groupIds.length;
-    const ranking = p.challenge === "risk-groups-worst" ? groups2 * (groups2 + 1) / 2 * rp : RANKING_PASSES[p.challenge](g.n, k);
-    e.fixed = ranking + (free ? 1 : (k + 1) * rp);
+    const ranking = p.challenge === "risk-groups-worst" ? groups2 * (groups2 + 1) / 2 * c.intact : RANKING_PASSES[p.challenge](g.n, k) * c.pass;
+    e.fixed = ranking + (free ? c.pass : attackCurveCost(c, p, kind, k));
   } else {
     const order = p.challenge === "n-2" ? 2 : 1;
     e.totalCases = contingencyTotal(g, p.element, order);
-    e.cases = Math.min(e.totalCases, it.maxCases) * rp;
+    e.cases = Math.min(e.totalCases, it.maxCases) * c.intact;
   }
   if (p.worstCase > 0) {
     const units = countOnes(eligibleUnits(g, kind));
     const k = Math.min(p.worstCase, units);
     const exactCases = subsets(units, k);
     e.worstExact = k <= 2 && exactCases <= it.exactLimit;
-    e.worst = (e.worstExact ? exactCases + (k === 2 ? units : 0) : k * units * Math.max(1, it.beam)) * rp;
+    e.worst = (e.worstExact ? exactCases + (k === 2 ? units : 0) : k * units * Math.max(1, it.beam)) * c.intact;
   }
   return e;
 }
 function evaluateDesign(g, spec) {
   const plan = planEvaluation(g, spec);
   const tasks = planTasks(plan, g);
-  return assembleEvaluation(g, plan, tasks, tasks.map((t) => runTask(g, plan, t)));
+  return assembleEvaluation(
+    g,
+    plan,
+    tasks,
+    tasks.map((t) => runTask(g, plan, t))
+  );
+}
+function stageEvaluation(g, spec) {
+  const plan = planEvaluation(g, spec);
+  const tasks = planTasks(plan, g);
+  return { g, plan, tasks, results: new Array(tasks.length).fill(void 0) };
+}
+function staged(it) {
+  return it.type === "band" && it.params.challenge !== "regional";
+}
+function stagedMaximum(st) {
+  return Math.max(0, ...st.plan.items.filter(staged).map((it) => it.params.realizations));
+}
+function pendingTasks(st, upto) {
+  const out = [];
+  st.tasks.forEach((t, i) => {
+    if (st.results[i] !== void 0) return;
+    if (t.type === "band" && staged(st.plan.items[t.item]) && t.from >= upto) return;
+    out.push(i);
+  });
+  return out;
+}
+function snapshotEvaluation(st, upto) {
+  const items = st.plan.items.map((it) => {
+    if (!staged(it) || it.params.realizations <= upto) return it;
+    const degraded = (it.degraded ?? "").split("; ").filter((d) => d !== "" && !d.startsWith("realizations reduced from")).join("; ");
+    const out2 = { ...it, params: { ...it.params, realizations: upto } };
+    if (degraded) out2.degraded = degraded;
+    else delete out2.degraded;
+    return out2;
+  });
+  const plan = {
+    ...st.plan,
+    items,
+    degraded: items.flatMap((it) => it.degraded ? [`${it.params.challenge}: ${it.degraded}`] : [])
+  };
+  const keep = st.tasks.map((_t, i) => i).filter((i) => {
+    const t = st.tasks[i];
+    return !(t.type === "band" && staged(st.plan.items[t.item]) && t.from >= upto);
+  });
+  const results = keep.map((i) => {
+    const r = st.results[i];
+    if (r === void 0) throw new Error(`task ${i} has not run`);
+    return r;
+  });
+  const out = assembleEvaluation(
+    st.g,
+    plan,
+    keep.map((i) => st.tasks[i]),
+    results
+  );
+  st.plan.items.forEach((it, i) => {
+    if (items[i] === it) return;
+    const env = out.evaluation.envelopes.find((e) => e.challenge === it.params.challenge);
+    if (env) env.maxRealizations = it.params.realizations;
+  });
+  return out;
 }
 function structureSummary(g) {
   const comps = findComponents(g);
@@ -44876,7 +45493,11 @@ function assembleEvaluation(g, plan, tasks, results) {
       const bp = bandPlan(g, p);
       const env = buildEnvelope(g, it, bp, values, ev);
       samples.set(p.challenge, values);
-      if (bp.label) labels2.set(p.challenge, values.map((_, r) => bp.label(r)));
+      if (bp.label)
+        labels2.set(
+          p.challenge,
+          values.map((_, r) => bp.label(r))
+        );
       envelopeOf2.set(item, env);
       evaluation.envelopes.push(env);
     } else if (it.type === "attack") {
@@ -44959,7 +45580,12 @@ function weakestSequences(g, bp, values, ev) {
   const steps = new Float64Array(bp.x.length);
   return picks.map((r) => {
     const len = bp.realize(r, order, steps);
-    const seq = { kind: bp.kind, elements: Array.from(order.subarray(0, len), (u) => ids[u]), values: [], realization: r };
+    const seq = {
+      kind: bp.kind,
+      elements: Array.from(order.subarray(0, len), (u) => ids[u]),
+      values: [],
+      realization: r
+    };
     if (bp.label) seq.label = bp.label(r);
     if (ev.stepsAreFree) {
       seq.values = Array.from(ev.everyStep(bp.kind, order, len).subarray(1));
@@ -44974,9 +45600,10 @@ function weakestSequences(g, bp, values, ev) {
       seq.values = vals;
       seq.steps = at;
     } else {
-      const whole = /* @__PURE__ */ new Set();
-      for (let j = 0; j < steps.length; j++) for (const k of [Math.floor(steps[j]), Math.ceil(steps[j])]) if (k > 0) whole.add(k);
-      const at = [...whole].sort((a, b) => a - b);
+      const whole2 = /* @__PURE__ */ new Set();
+      for (let j = 0; j < steps.length; j++)
+        for (const k of [Math.floor(steps[j]), Math.ceil(steps[j])]) if (k > 0) whole2.add(k);
+      const at = [...whole2].sort((a, b) => a - b);
       seq.values = Array.from(ev.at(bp.kind, order, len, at, new Float64Array(at.length)));
       seq.steps = at;
     }
@@ -44989,7 +45616,10 @@ var PARALLEL_MIN_WORK = 5e7;
 function workerEntry(moduleUrl = import.meta.url) {
   if (!moduleUrl.endsWith(".ts")) return { url: new URL("./worker.js", moduleUrl) };
   const tsx = createRequire(moduleUrl).resolve("tsx/package.json");
-  return { url: new URL("./worker.ts", moduleUrl), loader: pathToFileURL(join2(dirname(tsx), "dist", "esm", "api", "index.mjs")).href };
+  return {
+    url: new URL("./worker.ts", moduleUrl),
+    loader: pathToFileURL(join2(dirname(tsx), "dist", "esm", "api", "index.mjs")).href
+  };
 }
 function startWorker(entry) {
   let worker;
@@ -45007,13 +45637,14 @@ function startWorker(entry) {
   worker.on("exit", drop);
   return worker;
 }
-async function evaluateDesignParallel(g, spec, threads, options = {}) {
+async function runTasksParallel(g, plan, tasks, threads, options = {}) {
   if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be an integer ≥ 1, got ${threads}`);
-  const plan = planEvaluation(g, spec);
-  const tasks = planTasks(plan, g);
   const workers = plan.work < (options.minWork ?? PARALLEL_MIN_WORK) ? 1 : Math.min(threads, tasks.length);
-  const results = workers <= 1 ? tasks.map((t) => runTask(g, plan, t)) : await runOnWorkers(g, plan, tasks, workers);
-  return assembleEvaluation(g, plan, tasks, results);
+  return workers <= 1 ? tasks.map((t) => runTask(g, plan, t)) : runOnWorkers(g, plan, tasks, workers);
+}
+function threadedGate(threads) {
+  if (threads === void 0 || threads <= 1) return {};
+  return { runTasks: (g, plan, tasks, n) => runTasksParallel(g, plan, tasks, n ?? threads) };
 }
 var idle = [];
 var queue = Promise.resolve();
@@ -45095,8 +45726,8 @@ function oneLine(text2, maxLength = 2e3) {
 function escapeHtml(text2) {
   return plainText(text2, Number.MAX_SAFE_INTEGER).replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
 }
-function escapeMarkdown(text2, maxLength = 2e3) {
-  return oneLine(text2, maxLength).replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/[\\`*_{}[\]()#!|~:$]/g, (c) => `\\${c}`).replace(/(www)\./gi, "$1\\.").replace(/^([-+=>])/, "\\$1").replace(/^(\d+)([.)])/, "$1\\$2").replace(/@/g, "@⁠");
+function escapeProse(text2, maxLength = 2e3) {
+  return oneLine(text2, maxLength).replace(/&(?=[A-Za-z#])/g, "&amp;").replace(/<(?=[A-Za-z/!?])/g, "&lt;").replace(/[\\`*_[\]|~$]/g, (c) => `\\${c}`).replace(/:(?=\/\/|[A-Za-z0-9_+-]+:)/g, "\\:").replace(/(www)\./gi, "$1\\.").replace(/@/g, "@⁠");
 }
 function markdownCode(text2, maxLength = 400, inTable = false) {
   const line = oneLine(text2, maxLength);
@@ -45118,7 +45749,803 @@ function logText(text2, maxLength = 4e3) {
   return plainText(text2, maxLength).replace(/(^|[\r\n])(\s*)::/g, "$1$2: :");
 }
 
+// src/report/vocabulary.ts
+var FILE_STATUSES = [
+  "holds",
+  "weakened",
+  "below-floor",
+  "new",
+  "removed",
+  "renamed",
+  "unreadable"
+];
+var FILE_STATUS_WORD = {
+  holds: "holds",
+  weakened: "weakened",
+  "below-floor": "below its floor",
+  new: "new design",
+  removed: "removed",
+  renamed: "renamed",
+  unreadable: "could not be read"
+};
+var FILE_STATUS_RANK = {
+  unreadable: 0,
+  "below-floor": 1,
+  weakened: 2,
+  removed: 3,
+  new: 4,
+  renamed: 5,
+  holds: 6
+};
+var RULE_TITLE = {
+  "r-threshold": "r-threshold not held",
+  "area-floor": "area below its floor",
+  "spread-ceiling": "spread above its ceiling",
+  "n-1": "N−1 rule broken",
+  "new-bridge": "new bridge",
+  "new-cut-node": "new cut node",
+  "new-stranding-group": "new stranding shared-risk group",
+  "hardened-weak-point": "weak point hidden by hardening",
+  regression: "requirement weakened",
+  "weakest-sequence": "weakest sequence",
+  "parse-error": "unreadable design",
+  "removed-design": "removed design",
+  "policy-changed": "policy changed",
+  degraded: "reduced evaluation",
+  "not-computable": "value not computable"
+};
+var JUDGED_TITLE = {
+  "within-allowance": "robustness dropped within the allowance",
+  "inside-error": "change inside the Monte Carlo error"
+};
+function judgedTitle(x) {
+  if (x.status === "within-allowance" || x.status === "inside-error") return JUDGED_TITLE[x.status];
+  if (x.status === void 0 && x.rule === "regression" && x.severity === "notice") return "robustness changed";
+  return RULE_TITLE[x.rule] ?? x.rule;
+}
+var SEVERITY_WORD = { fail: "failure", warn: "warning", notice: "notice" };
+var MARK = {
+  /** fails: a failure, or a design that blocks */
+  fail: "■",
+  /** a warning */
+  warn: "▲",
+  /** a notice, context only */
+  notice: "·",
+  /** holds */
+  holds: "□",
+  /** inside the error, unsettled, not applicable */
+  open: "◌"
+};
+function requirementMark(r) {
+  if (r.status === "holds") return MARK.holds;
+  if (r.status === "short" || r.status === "weakened")
+    return r.severity === "fail" ? MARK.fail : r.severity === "warn" ? MARK.warn : MARK.notice;
+  return MARK.open;
+}
+function fileFails(f) {
+  return f.status === "unreadable" || f.findings.some((x) => x.severity === "fail");
+}
+function fileWarns(f) {
+  return !fileFails(f) && f.findings.some((x) => x.severity === "warn");
+}
+
+// src/decode.ts
+var EncodingError = class extends DesignError {
+  name = "EncodingError";
+};
+var HINT = "save the file as UTF-8";
+function sequenceLength(b, i) {
+  const c = b[i];
+  if (c < 128) return 1;
+  let need;
+  let lo = 128;
+  let hi = 191;
+  if (c >= 194 && c <= 223) need = 1;
+  else if (c === 224) [need, lo] = [2, 160];
+  else if (c === 237) [need, hi] = [2, 159];
+  else if (c >= 225 && c <= 239) need = 2;
+  else if (c === 240) [need, lo] = [3, 144];
+  else if (c === 244) [need, hi] = [3, 143];
+  else if (c >= 241 && c <= 243) need = 3;
+  else return 0;
+  if (i + need >= b.length) return 0;
+  const b1 = b[i + 1];
+  if (b1 < lo || b1 > hi) return 0;
+  for (let k = 2; k <= need; k++) {
+    const x = b[i + k];
+    if (x < 128 || x > 191) return 0;
+  }
+  return need + 1;
+}
+function firstInvalidUtf8(b, from = 0) {
+  for (let i = from; i < b.length; ) {
+    if (b[i] < 128) {
+      i++;
+      continue;
+    }
+    const len = sequenceLength(b, i);
+    if (len === 0) return i;
+    i += len;
+  }
+  return -1;
+}
+function guessEncoding(b) {
+  let c1 = false;
+  let utf8 = false;
+  for (let i = 0; i < b.length; ) {
+    if (b[i] < 128) {
+      i++;
+      continue;
+    }
+    const len = sequenceLength(b, i);
+    if (len > 0) {
+      utf8 = true;
+      i += len;
+      continue;
+    }
+    if (b[i] <= 159) c1 = true;
+    i++;
+  }
+  const page = c1 ? "Windows-1252" : "Latin-1 (ISO 8859-1)";
+  return utf8 ? `it mixes UTF-8 with another encoding, which looks like ${page}` : `it looks like ${page}`;
+}
+function textPosition(text2, at) {
+  let line = 1;
+  let start = 0;
+  for (let i = text2.indexOf("\n"); i >= 0 && i < at; i = text2.indexOf("\n", i + 1)) {
+    line++;
+    start = i + 1;
+  }
+  return { line, column: at - start + 1 };
+}
+var utf8Decoder = new TextDecoder("utf-8", { fatal: true, ignoreBOM: true });
+function decodeUtf8(bytes, start, file) {
+  const bad = firstInvalidUtf8(bytes, start);
+  if (bad >= 0) {
+    let lineStart = bad;
+    let line = 1;
+    while (lineStart > start && bytes[lineStart - 1] !== 10) lineStart--;
+    for (let i = start; i < lineStart; i++) if (bytes[i] === 10) line++;
+    const column = utf8Decoder.decode(bytes.subarray(lineStart, bad)).length + 1;
+    const hex = bytes[bad].toString(16).toUpperCase().padStart(2, "0");
+    throw new EncodingError(
+      `not UTF-8: byte 0x${hex} at line ${line}, column ${column}; ${guessEncoding(bytes.subarray(start))}`,
+      { file, line, column },
+      HINT
+    );
+  }
+  return utf8Decoder.decode(bytes.subarray(start));
+}
+function decodeUtf16(bytes, littleEndian, file) {
+  const units = bytes.length - 2 >> 1;
+  const chunks = [];
+  const CHUNK = 8192;
+  const buf = new Array(CHUNK);
+  let decoded = "";
+  const fail = (message, unitIndex) => {
+    decoded = chunks.join("") + String.fromCharCode(...buf.slice(0, unitIndex % CHUNK));
+    throw new EncodingError(`not valid UTF-16: ${message}`, { file, ...textPosition(decoded, decoded.length) }, HINT);
+  };
+  for (let u = 0; u < units; u++) {
+    const p = 2 + 2 * u;
+    const code = littleEndian ? bytes[p] | bytes[p + 1] << 8 : bytes[p] << 8 | bytes[p + 1];
+    if (code >= 55296 && code <= 56319) {
+      const q = p + 2;
+      const next = q + 1 < bytes.length ? littleEndian ? bytes[q] | bytes[q + 1] << 8 : bytes[q] << 8 | bytes[q + 1] : -1;
+      if (!(next >= 56320 && next <= 57343)) fail(`a lone surrogate 0x${code.toString(16).toUpperCase()}`, u);
+    } else if (code >= 56320 && code <= 57343) {
+      const prev = u > 0 ? littleEndian ? bytes[p - 2] | bytes[p - 1] << 8 : bytes[p - 2] << 8 | bytes[p - 1] : -1;
+      if (!(prev >= 55296 && prev <= 56319)) fail(`a lone surrogate 0x${code.toString(16).toUpperCase()}`, u);
+    }
+    buf[u % CHUNK] = code;
+    if (u % CHUNK === CHUNK - 1) chunks.push(String.fromCharCode(...buf));
+  }
+  if (units % CHUNK !== 0) chunks.push(String.fromCharCode(...buf.slice(0, units % CHUNK)));
+  const text2 = chunks.join("");
+  if ((bytes.length & 1) === 1) {
+    throw new EncodingError(
+      "not valid UTF-16: the file ends in the middle of a character (an odd number of bytes)",
+      { file, ...textPosition(text2, text2.length) },
+      HINT
+    );
+  }
+  return text2;
+}
+function decodeText(bytes, file) {
+  let text2;
+  if (bytes[0] === 255 && bytes[1] === 254 && bytes[2] === 0 && bytes[3] === 0) {
+    throw new EncodingError(
+      "not UTF-8: the file starts with a UTF-32 byte-order mark",
+      { file, line: 1, column: 1 },
+      HINT
+    );
+  } else if (bytes[0] === 0 && bytes[1] === 0 && bytes[2] === 254 && bytes[3] === 255) {
+    throw new EncodingError(
+      "not UTF-8: the file starts with a UTF-32 byte-order mark",
+      { file, line: 1, column: 1 },
+      HINT
+    );
+  } else if (bytes[0] === 255 && bytes[1] === 254) {
+    text2 = decodeUtf16(bytes, true, file);
+  } else if (bytes[0] === 254 && bytes[1] === 255) {
+    text2 = decodeUtf16(bytes, false, file);
+  } else {
+    const bom = bytes[0] === 239 && bytes[1] === 187 && bytes[2] === 191 ? 3 : 0;
+    text2 = decodeUtf8(bytes, bom, file);
+  }
+  const nul = text2.indexOf("\0");
+  if (nul >= 0) {
+    const { line, column } = textPosition(text2, nul);
+    const sample2 = bytes.subarray(0, 4096);
+    let zeros = 0;
+    for (const x of sample2) if (x === 0) zeros++;
+    const looks = zeros * 4 >= sample2.length ? "it looks like UTF-16 without a byte-order mark" : "it looks like a binary file, not text";
+    throw new EncodingError(
+      `not UTF-8 text: a NUL character at line ${line}, column ${column}; ${looks}`,
+      { file, line, column },
+      HINT
+    );
+  }
+  return text2;
+}
+function utf8Length(text2) {
+  let n = 0;
+  for (let i = 0; i < text2.length; i++) {
+    const c = text2.charCodeAt(i);
+    if (c < 128) n += 1;
+    else if (c < 2048) n += 2;
+    else if (c >= 55296 && c <= 56319 && i + 1 < text2.length && (text2.charCodeAt(i + 1) & 64512) === 56320) {
+      n += 4;
+      i++;
+    } else n += 3;
+  }
+  return n;
+}
+
+// src/report/format.ts
+function formatFixed(x, decimals = 3) {
+  if (!Number.isFinite(x)) return String(x);
+  const s = x.toFixed(decimals);
+  if (/^-0\.?0*$/.test(s)) return s.slice(1);
+  return s.replace(/^-/, "−");
+}
+function formatValue(v) {
+  return formatValueAt(v, 3);
+}
+function formatValueAt(v, decimals) {
+  if (v === null || v === void 0 || Number.isNaN(v)) return "–";
+  return formatFixed(v, decimals);
+}
+function formatDelta(delta, se = null, decimals = 3) {
+  if (delta === null || delta === void 0 || Number.isNaN(delta)) return "–";
+  const text2 = formatFixed(delta, decimals);
+  const zero = formatFixed(0, decimals);
+  const sign2 = delta > 0 && text2 !== zero ? "+" : "";
+  const err = se !== null && se > 0 ? ` ± ${Number.isFinite(se) ? se.toFixed(decimals) : "unknown"}` : "";
+  return `${sign2}${text2 === `−${zero}` ? zero : text2}${err}`;
+}
+function formatError(se, decimals = 3) {
+  if (se === null || se === void 0 || Number.isNaN(se) || se === 0) return "";
+  const floor = 0.5 * 10 ** -decimals;
+  return `± ${se < floor ? `<${(10 ** -decimals).toFixed(decimals)}` : se.toFixed(decimals)}`;
+}
+var REVISION_DIGITS = 12;
+function shortRevision(rev2) {
+  if (rev2 === void 0) return "–";
+  return /^[0-9a-f]{40}([0-9a-f]{24})?$/i.test(rev2) ? rev2.slice(0, REVISION_DIGITS) : rev2;
+}
+
+// src/report/rank.ts
+var SEVERITY_RANK = { fail: 0, warn: 1, notice: 2 };
+var STATUS_RANK = FILE_STATUS_RANK;
+function worstSeverity(f) {
+  let worst;
+  for (const x of f.findings)
+    if (worst === void 0 || SEVERITY_RANK[x.severity] < SEVERITY_RANK[worst]) worst = x.severity;
+  return f.status === "unreadable" ? "fail" : worst;
+}
+function countOf(f, s) {
+  let n = 0;
+  for (const x of f.findings) if (x.severity === s) n++;
+  return n;
+}
+function rankFiles(files) {
+  const rank = (f) => {
+    const w = worstSeverity(f);
+    return w === void 0 ? 3 : SEVERITY_RANK[w];
+  };
+  return [...files].sort(
+    (a, b) => rank(a) - rank(b) || countOf(b, "fail") - countOf(a, "fail") || countOf(b, "warn") - countOf(a, "warn") || STATUS_RANK[a.status] - STATUS_RANK[b.status] || (a.path < b.path ? -1 : a.path > b.path ? 1 : 0)
+  );
+}
+function rankFindings(findings) {
+  return [...findings].sort((a, b) => SEVERITY_RANK[a.severity] - SEVERITY_RANK[b.severity]);
+}
+
+// src/report/story.ts
+var seg = {
+  text: (text2) => ({ kind: "text", text: text2 }),
+  user: (text2) => ({ kind: "text", text: text2, user: true }),
+  code: (text2) => ({ kind: "code", text: text2 }),
+  id: (text2) => ({ kind: "id", text: text2 })
+};
+function plainSentence(s) {
+  return s.map((x) => x.text).join("");
+}
+function compact(s) {
+  const out = [];
+  for (const x of s) {
+    if (x.text === "") continue;
+    const last = out[out.length - 1];
+    if (last && last.kind === "text" && x.kind === "text" && !last.user && !x.user) last.text += x.text;
+    else out.push({ ...x });
+  }
+  return out;
+}
+var README_ANCHOR = "reading-the-report";
+var FAIL_WORD = {
+  weakened: ["weakened", "weakened"],
+  "below-floor": ["below a floor", "below a floor"],
+  unreadable: ["could not be read", "could not be read"],
+  removed: ["removed", "removed"]
+};
+function failingCounts(files) {
+  const counts = /* @__PURE__ */ new Map();
+  for (const f of files.filter(fileFails)) {
+    const unevaluated = f.status === "unreadable" && !f.findings.some((x) => x.rule === "parse-error") && f.findings.some((x) => x.rule === "not-computable");
+    const word = unevaluated ? "could not be evaluated" : FAIL_WORD[f.status]?.[0] ?? "failing";
+    counts.set(word, (counts.get(word) ?? 0) + 1);
+  }
+  return [...counts].map(([word, n]) => `${n} design${n === 1 ? "" : "s"} ${word}`);
+}
+function verdictStory(report, title) {
+  const name = title ? `netbrace (${title})` : "netbrace";
+  const parts = failingCounts(report.files);
+  if (report.configuration?.changes.some((c) => c.weakens))
+    parts.push(`the change weakens netbrace’s own settings in ${report.configuration.workflow}`);
+  const what = parts.join(", ");
+  const warned = report.files.filter(fileWarns).length;
+  const warnTail = warned ? ` (${warned} with warnings)` : "";
+  if (report.part) {
+    const where = `${name}, part ${report.part.index} of ${report.part.total}`;
+    const sentence = report.verdict === "fail" ? `${where}: ${what} in this part; the joined report decides the merge` : `${where}: no design fails its policy in this part${warnTail}`;
+    return { tone: "part", mark: report.verdict === "fail" ? MARK.warn : MARK.holds, sentence: [seg.text(sentence)] };
+  }
+  if (report.verdict === "fail" && report.mode === "block")
+    return { tone: "blocks", mark: MARK.fail, sentence: [seg.text(`${name} blocks this merge: ${what}`)] };
+  if (report.verdict === "fail")
+    return {
+      tone: "informs",
+      mark: MARK.warn,
+      sentence: [seg.text(`${name}: ${what}; inform mode, so the merge is not blocked`)]
+    };
+  if (report.files.length === 0)
+    return {
+      tone: "clear",
+      mark: MARK.holds,
+      sentence: [seg.text(`${name}: no design file changed, nothing to judge`)]
+    };
+  if (warned)
+    return {
+      tone: "clear",
+      mark: MARK.holds,
+      sentence: [
+        seg.text(`${name}: no design fails its policy; ${warned} design${warned === 1 ? " has" : "s have"} warnings`)
+      ]
+    };
+  return { tone: "clear", mark: MARK.holds, sentence: [seg.text(`${name}: no design weakened`)] };
+}
+var CAUTION_LINE = "netbrace informs engineering judgement under the stated assumptions; it does not replace engineering studies (the full caution is at the end).";
+var KIND_WORD = { node: "site", link: "link", group: "shared-risk group" };
+function elementSentence(e) {
+  const line = e.line > 0 ? `, line ${e.line}` : "";
+  if (e.label) return [seg.user(e.label), seg.text(" ("), seg.id(e.id), seg.text(`${line})`)];
+  return [seg.text(`${KIND_WORD[e.kind]} `), seg.id(e.id), seg.text(e.line > 0 ? ` (line ${e.line})` : "")];
+}
+function joinList(items, last = "and") {
+  const out = [];
+  items.forEach((s, i) => {
+    if (i > 0) out.push(seg.text(i === items.length - 1 ? ` ${last} ` : ", "));
+    out.push(...s);
+  });
+  return out;
+}
+var NAMED = 3;
+function amount(x) {
+  return String(Number(x.toPrecision(6)));
+}
+function costSentence(c, plural2 = false) {
+  const verb = plural2 ? "cut" : "cuts";
+  const out = [];
+  if (c.strandedCount === 0) out.push(seg.text(`${verb} no surviving site off from the largest part`));
+  else {
+    const named2 = c.stranded.slice(0, NAMED).map(elementSentence);
+    const more = c.strandedCount - named2.length;
+    if (more > 0) named2.push([seg.text(`${more} more (${c.strandedCount} sites)`)]);
+    out.push(seg.text(`${verb} off `), ...joinList(named2), seg.text(" from the largest part"));
+  }
+  if (c.demandsTotal !== void 0 && c.demandsLost !== void 0) {
+    if (c.demandsLost === 0) out.push(seg.text("; every demand keeps a path"));
+    else {
+      const total = `${c.demandsTotal} demand${c.demandsTotal === 1 ? "" : "s"}`;
+      out.push(
+        seg.text(
+          `; ${c.demandsLost} of ${total} (volume ${amount(c.volumeLost ?? 0)} of ${amount(c.volumeTotal ?? 0)}) ${c.demandsLost === 1 ? "loses" : "lose"} every path`
+        )
+      );
+    }
+  }
+  return out;
+}
+var WEAK_POINT = {
+  "new-bridge": " is a new bridge; losing it ",
+  "new-cut-node": " is a new cut node; losing it ",
+  "new-stranding-group": " is a new shared-risk group whose loss strands sites; losing it ",
+  "hardened-weak-point": " would be a new weak point, but the change marks it hardened; losing it "
+};
+function capitalized(s) {
+  const first = s[0];
+  if (!first || first.kind !== "text" || first.user) return s;
+  return [{ ...first, text: first.text.charAt(0).toUpperCase() + first.text.slice(1) }, ...s.slice(1)];
+}
+function itemSentence(x) {
+  const el = x.elements[0];
+  const weak = WEAK_POINT[x.rule];
+  if (weak && el && x.elements.length === 1) {
+    const cost2 = x.consequence ? costSentence(x.consequence) : [seg.text("splits the design")];
+    return compact(capitalized([...elementSentence(el), seg.text(weak), ...cost2, seg.text(".")]));
+  }
+  if (x.rule === "n-1" && el && x.status === "short" && typeof x.head === "number" && typeof x.threshold === "number") {
+    const d = x.decimals ?? 3;
+    const cost2 = x.consequence ? [seg.text("; it "), ...costSentence(x.consequence)] : [];
+    return compact([
+      seg.text("Losing "),
+      ...elementSentence(el),
+      seg.text(` alone leaves R at ${formatFixed(x.head, d)}, below the N−1 floor ${x.threshold}`),
+      ...cost2,
+      seg.text(".")
+    ]);
+  }
+  if (x.rule === "parse-error" && x.severity === "fail")
+    return compact([
+      seg.text(`Could not be read${x.line > 0 ? ` at line ${x.line}${x.column ? `, column ${x.column}` : ""}` : ""}: `),
+      seg.user(x.message.replace(/\.\s*$/, "")),
+      seg.text(".")
+    ]);
+  const cost = x.consequence ? [seg.text("; losing it "), ...costSentence(x.consequence)] : [];
+  return compact(capitalized([seg.user(x.message.replace(/\.\s*$/, "")), ...cost, seg.text(".")]));
+}
+function weight(x) {
+  const c = x.consequence;
+  return c ? [c.demandsLost ?? 0, c.volumeLost ?? 0, c.strandedCount] : [0, 0, 0];
+}
+function isNumberFinding(x, f) {
+  if (x.rule === "regression" || x.rule === "r-threshold" || x.rule === "area-floor" || x.rule === "spread-ceiling" || x.rule === "n-1" && x.status !== "short") {
+    return x.requirement !== void 0 && f.requirements.some((r) => r.id === x.requirement);
+  }
+  return false;
+}
+var REMOVE_WORD = {
+  nodes: ["site", "sites"],
+  links: ["link", "links"],
+  "risk-groups": ["shared-risk group", "shared-risk groups"],
+  region: ["region", "regions"]
+};
+function percent(x) {
+  return `${Number((x * 100).toFixed(4))} %`;
+}
+function removals(s) {
+  const what = REMOVE_WORD[s.remove ?? "nodes"] ?? ["element", "elements"];
+  if (s.order && s.order !== "random") return `${s.adaptive ? "adaptive " : ""}${s.order} attack on ${what[1]}`;
+  return s.remove === "region" ? "regional outages" : `random ${what[0]} removals`;
+}
+var SPOF_WORD = {
+  "no-new-spof": "bridges and cut nodes",
+  "no-new-spof:bridges": "bridges",
+  "no-new-spof:cut-nodes": "cut nodes",
+  "no-new-spof:risk-groups": "stranding shared-risk groups"
+};
+function requirementLabel(r) {
+  const s = r.subject;
+  if (!s) return [seg.text(r.description)];
+  switch (s.kind) {
+    case "r-threshold": {
+      const st = s.statistic ?? { kind: "value" };
+      const what = REMOVE_WORD[s.remove ?? "nodes"] ?? ["element", "elements"];
+      const attack = s.order && s.order !== "random" ? `, ${s.adaptive ? "adaptive " : ""}${s.order} attack` : "";
+      if (st.kind === "worst-case")
+        return [seg.text(`R after the worst ${st.removals ?? "?"} ${what[0]} removals found`)];
+      const where = s.remove === "region" ? `at radius ${s.at ?? 0} km` : `at ${percent(s.at ?? 0)} ${what[1]} removed`;
+      const lead = st.kind === "median" ? "median R" : st.kind === "mean" ? "mean R" : st.kind === "min" ? "least R" : "R";
+      const tag = st.kind === "quantile" ? ` (q${Number(((st.q ?? 0) * 100).toFixed(4))})` : "";
+      return [seg.text(`${lead} ${where}${tag}${attack}`)];
+    }
+    case "area-floor":
+      return [seg.text(`area, ${removals(s)}`)];
+    case "spread-ceiling":
+      return [seg.text(`spread, ${removals(s)}`)];
+    case "n-1":
+      return [seg.text(`R after any single ${s.remove === "nodes" ? "site" : "link"} loss (N−1)`)];
+    case "no-new-spof":
+      return [seg.text(SPOF_WORD[r.id] ?? r.description)];
+  }
+}
+function isCount(r) {
+  return r.subject?.kind === "no-new-spof" || r.se === 0 && [r.base, r.head, r.delta].every((v) => v === null || Number.isInteger(v)) && /spof|bridge|cut/.test(r.id);
+}
+function requirementNumbers(r, allowance) {
+  const count = isCount(r);
+  const d = r.decimals ?? 3;
+  const v = (x) => x === null ? "–" : count ? String(x) : formatValueAt(x, d);
+  let text2 = r.base !== null ? `${v(r.base)} → ${v(r.head)}` : v(r.head);
+  if (r.delta !== null && r.base !== null) {
+    const delta = count ? r.delta > 0 ? `+${r.delta}` : r.delta < 0 ? `−${-r.delta}` : "0" : formatDelta(r.delta, null, d);
+    const err = count ? "" : formatError(r.se, d);
+    text2 += ` (${delta}${err ? ` ${err}` : ""})`;
+  }
+  const higher = r.subject?.higherIsBetter ?? !/spread/.test(r.id);
+  if (r.threshold !== null) text2 += `, ${higher ? "floor" : "ceiling"} ${r.threshold}`;
+  else if (r.subject?.kind === "no-new-spof") text2 += ", no new one allowed";
+  else text2 += ", tracked (no floor)";
+  if (allowance !== void 0 && allowance > 0)
+    text2 += `, allowed ${higher ? "drop" : "rise"} ${formatFixed(allowance, d)}`;
+  return text2;
+}
+function requirementLine(r, findings = []) {
+  const allowance = findings.find((x) => x.requirement === r.id && x.allowance !== void 0)?.allowance;
+  const label = requirementLabel(r);
+  return {
+    requirement: r,
+    mark: requirementMark(r),
+    label,
+    sentence: compact([seg.text(`${r.status} · `), ...label, seg.text(` ${requirementNumbers(r, allowance)}`)])
+  };
+}
+function definitions(f) {
+  const out = [];
+  const ev = f.head ?? f.base;
+  const kinds = new Set(f.requirements.map((r) => r.subject?.kind ?? r.id.split(":")[0]));
+  if (ev && f.requirements.some((r) => r.subject?.kind !== "no-new-spof" && !r.id.startsWith("no-new-spof"))) {
+    const metrics2 = [];
+    ev.r.metrics.forEach((m, i) => {
+      if (i > 0) metrics2.push(seg.text(", "));
+      metrics2.push(seg.code(m.id), seg.text(ev.r.combine === "min" ? "" : ` ${m.weight}`));
+    });
+    const how = ev.r.combine === "min" ? "the least of " : "the weighted mean of ";
+    out.push({
+      term: "R",
+      anchor: README_ANCHOR,
+      sentence: compact([
+        seg.text(`R: ${how}`),
+        ...metrics2,
+        seg.text(", each metric scaled to 0–1 with 1 the intact design.")
+      ])
+    });
+  }
+  if (kinds.has("area-floor"))
+    out.push({
+      term: "area",
+      anchor: README_ANCHOR,
+      sentence: [seg.text("area: the mean of the median R over the removal grid (netbrace’s own summary).")]
+    });
+  if (kinds.has("spread-ceiling")) {
+    const band = ev?.envelopes[0]?.band ?? [0.1, 0.9];
+    out.push({
+      term: "spread",
+      anchor: README_ANCHOR,
+      sentence: [
+        seg.text(
+          `spread: the mean width of the band between the ${percent(band[0])} and ${percent(band[1])} quantiles of R (netbrace’s own summary).`
+        )
+      ]
+    });
+  }
+  if (f.requirements.some((r) => (r.se ?? 0) > 0)) {
+    out.push({
+      term: "±",
+      anchor: README_ANCHOR,
+      sentence: [
+        seg.text(
+          "±: one standard error of the change, from the same random removals on base and head (paired Monte Carlo)."
+        )
+      ]
+    });
+  }
+  if (f.requirements.some((r) => r.status === "inside-error")) {
+    out.push({
+      term: "inside-error",
+      anchor: README_ANCHOR,
+      sentence: [
+        seg.text("inside-error: the value dropped by less than its Monte Carlo error, which is never a failure.")
+      ]
+    });
+  }
+  return out;
+}
+function statusWord(f) {
+  if (f.status === "unreadable" && !f.findings.some((x) => x.rule === "parse-error") && f.findings.some((x) => x.rule === "not-computable"))
+    return "could not be evaluated";
+  return FILE_STATUS_WORD[f.status];
+}
+function headlineOf(items, lines) {
+  const counts = /* @__PURE__ */ new Map();
+  for (const x of items) counts.set(x.title, (counts.get(x.title) ?? 0) + 1);
+  const plural2 = {
+    "new bridge": "new bridges",
+    "new cut node": "new cut nodes",
+    "weak point hidden by hardening": "weak points hidden by hardening",
+    "new stranding shared-risk group": "new stranding shared-risk groups"
+  };
+  const parts = [...counts].map(([t, n]) => n === 1 ? `1 ${t}` : `${n} ${plural2[t] ?? t}`);
+  const bad = lines.filter((l) => l.requirement.status === "short" || l.requirement.status === "weakened").length;
+  const worse = bad ? [`${bad} requirement${bad === 1 ? "" : "s"} weakened or short`] : [];
+  if (!parts.length && !worse.length) return lines.length ? "every requirement holds" : "nothing to judge";
+  return [parts.join(", "), ...worse].filter(Boolean).join("; ");
+}
+function designStory(f) {
+  const items = [];
+  const notices = [];
+  const findings = [...f.findings];
+  if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
+    findings.push({
+      rule: "parse-error",
+      severity: "fail",
+      message: f.error.message,
+      elements: [],
+      line: f.error.line,
+      column: f.error.column
+    });
+  }
+  for (const x of findings) {
+    if (isNumberFinding(x, f)) continue;
+    if (x.rule === "weakest-sequence" && x.severity === "notice") continue;
+    const item = {
+      severity: x.severity,
+      rule: x.rule,
+      title: judgedTitle(x),
+      line: x.line,
+      elements: x.elements,
+      sentence: itemSentence(x),
+      finding: x
+    };
+    (x.severity === "notice" ? notices : items).push(item);
+  }
+  const order = items.map((x, i) => ({ x, i, w: weight(x.finding) }));
+  order.sort(
+    (a, b) => SEVERITY_RANK[a.x.severity] - SEVERITY_RANK[b.x.severity] || b.w[0] - a.w[0] || b.w[1] - a.w[1] || b.w[2] - a.w[2] || a.i - b.i
+  );
+  const weakened = order.map((o) => o.x);
+  const howMuch = f.requirements.map((r) => requirementLine(r, f.findings));
+  const outcome = fileFails(f) ? "fails" : fileWarns(f) ? "warns" : "holds";
+  return {
+    file: f,
+    outcome,
+    mark: outcome === "fails" ? MARK.fail : outcome === "warns" ? MARK.warn : MARK.holds,
+    statusWord: statusWord(f),
+    headline: headlineOf(weakened, howMuch),
+    weakened,
+    notices,
+    howMuch,
+    definitions: definitions(f)
+  };
+}
+function numbersOnly(d) {
+  const bad = d.howMuch.filter((l) => l.requirement.status === "short" || l.requirement.status === "weakened").length;
+  return bad ? `no single element to name; ${bad} requirement${bad === 1 ? "" : "s"} weakened or short (how much, below)` : void 0;
+}
+function designStories(report) {
+  return rankFiles(report.files).map(designStory);
+}
+var KEY_WORD = {
+  min: "the floor of",
+  max: "the ceiling of",
+  severity: "the severity of",
+  "hardened-weak-points": "hardened weak points of",
+  bridges: "the bridge rule of",
+  "cut-nodes": "the cut-node rule of",
+  "risk-groups": "the shared-risk-group rule of"
+};
+var RULE_KEY_WORD = {
+  "allowed-drop": "the allowed drop",
+  "allowed-relative-drop": "the allowed relative drop",
+  "error-multiple": "the error multiple",
+  severity: "the severity of a weakening"
+};
+function changePart(c) {
+  const value2 = (v) => v === null ? "none" : String(v);
+  if (c.key === "requirement")
+    return c.head === null ? [seg.text("drop "), seg.id(c.subject)] : [seg.text("add "), seg.id(c.subject)];
+  const fromTo = seg.text(` from ${value2(c.base)} to ${value2(c.head)}`);
+  if (c.subject === "weakening") return [seg.text(RULE_KEY_WORD[c.key] ?? c.key), fromTo];
+  if (c.subject === "removed-designs") return [seg.text("the severity of removed designs"), fromTo];
+  return [seg.text(`${KEY_WORD[c.key] ?? `${c.key} of`} `), seg.id(c.subject), fromTo];
+}
+function policyChangeSentence(report) {
+  const p = report.policy;
+  if (!p.changed) return void 0;
+  const judgedByBase = p.revision !== void 0 && p.revision === report.base;
+  const tail = judgedByBase ? "; the base’s version judges this change, and the head’s applies once merged." : "; the head’s version judges this change (policy-source: head).";
+  if (!p.changes)
+    return p.note ? [seg.text("Policy: "), seg.user(p.note.replace(/\.\s*$/, "")), seg.text(".")] : [seg.text(`This change edits the policy${tail}`)];
+  const would = judgedByBase ? "would " : "";
+  const loosen = p.changes.filter((c) => c.effect === "loosens").map(changePart);
+  const tighten = p.changes.filter((c) => c.effect === "tightens").map(changePart);
+  const clauses = [];
+  if (loosen.length) clauses.push([seg.text(`${would}loosen `), ...joinList(loosen)]);
+  if (tighten.length) clauses.push([seg.text(`${loosen.length ? "" : would}tighten `), ...joinList(tighten)]);
+  if (!clauses.length)
+    return compact([seg.text("This change edits the policy without changing any floor or rule"), seg.text(tail)]);
+  const both = clauses.length === 2 ? [...clauses[0], seg.text(", and "), ...clauses[1]] : clauses[0];
+  return compact([seg.text("This change edits the policy: the head’s version "), ...both, seg.text(tail)]);
+}
+function plural(kind, n) {
+  const w = KIND_WORD[kind];
+  return n === 1 ? w : kind === "group" ? "shared-risk groups" : `${w}s`;
+}
+function changeSentence(f, max = 4) {
+  const ch = f.changes;
+  const renamed = ch?.renamed ?? [];
+  const hardened = ch?.hardened ?? [];
+  if (!ch || ch.added.length === 0 && ch.removed.length === 0 && renamed.length === 0 && hardened.length === 0)
+    return void 0;
+  const parts = [];
+  const side = (sign2, list, where) => {
+    for (const kind of ["node", "link", "group"]) {
+      const l = list.filter((e) => e.kind === kind);
+      if (!l.length) continue;
+      const items = l.slice(0, max).map((e) => [
+        ...e.label ? [seg.user(e.label), seg.text(", ")] : [],
+        seg.id(e.id),
+        seg.text(`, ${where}line ${e.line}`)
+      ]);
+      const out2 = [seg.text(`${sign2}${l.length} ${plural(kind, l.length)} (`)];
+      items.forEach((x, i) => out2.push(...i ? [seg.text("; ")] : [], ...x));
+      out2.push(seg.text(`${l.length > max ? `; … ${l.length - max} more` : ""})`));
+      parts.push(out2);
+    }
+  };
+  side("+", ch.added, "");
+  side("−", ch.removed, "base ");
+  for (const r of renamed.slice(0, max))
+    parts.push([
+      seg.text(`${KIND_WORD[r.from.kind]} `),
+      seg.id(r.from.id),
+      seg.text(" renamed "),
+      seg.id(r.to.id),
+      seg.text(` (line ${r.to.line})`)
+    ]);
+  if (renamed.length > max) parts.push([seg.text(`… ${renamed.length - max} more renamed`)]);
+  for (const [flag, word] of [
+    [true, "now hardened: "],
+    [false, "no longer hardened: "]
+  ]) {
+    const l = hardened.filter((e) => e.hardened === flag);
+    if (l.length)
+      parts.push([
+        seg.text(word),
+        ...joinList(l.slice(0, max).map(elementSentence), "and"),
+        seg.text(l.length > max ? `, … ${l.length - max} more` : "")
+      ]);
+  }
+  const out = [];
+  parts.forEach((p, i) => out.push(...i ? [seg.text("; ")] : [], ...p));
+  return compact(out);
+}
+function modificationSentence(c) {
+  const lines = c.baseLine === c.headLine ? `line ${c.headLine}` : `base line ${c.baseLine}, head line ${c.headLine}`;
+  return [
+    seg.text(`${KIND_WORD[c.kind]} `),
+    seg.id(c.id),
+    seg.text(`: ${c.attribute} `),
+    seg.user(c.before),
+    seg.text(" → "),
+    seg.user(c.after),
+    seg.text(` (${lines})`)
+  ];
+}
+
 // src/report/labels.ts
+var STATUS_WORD = FILE_STATUS_WORD;
 var CHALLENGE_LABEL = {
   "random-nodes": "random site failures",
   "random-links": "random link failures",
@@ -45149,56 +46576,12 @@ function kindSingular(k) {
 function xAxisLabel(kind, xUnit) {
   return xUnit === "km" ? "outage radius (km)" : `fraction of ${kindPlural(kind)} removed`;
 }
-function formatValue(v) {
-  if (v === null || v === void 0 || Number.isNaN(v)) return "–";
-  return minus(v.toFixed(3));
-}
-function isCountRequirement(r) {
-  const vals = [r.base, r.head, r.delta, r.threshold].filter((v) => v !== null);
-  return r.se === 0 && vals.every(Number.isInteger) && (/spof|bridge|cut/.test(r.id) || vals.some((v) => Math.abs(v) > 1));
-}
-function formatRequirementValue(r, v) {
-  return v !== null && isCountRequirement(r) ? String(v) : formatValue(v);
-}
-function formatRequirementDelta(r) {
-  if (r.delta === null || !isCountRequirement(r)) return formatDelta(r.delta);
-  return r.delta > 0 ? `+${r.delta}` : r.delta < 0 ? `−${-r.delta}` : "0";
-}
-function formatDelta(v) {
-  if (v === null || v === void 0 || Number.isNaN(v)) return "–";
-  const text2 = Math.abs(v).toFixed(3);
-  if (Number(text2) === 0) return "0.000";
-  return (v > 0 ? "+" : "−") + text2;
-}
-function formatError(se) {
-  if (se === null || se === void 0 || Number.isNaN(se) || se === 0) return "";
-  return `± ${se < 5e-4 ? "<0.001" : se.toFixed(3)}`;
-}
 function formatFraction(x) {
   return `${Math.round(x * 1e3) / 10} %`;
 }
-function minus(text2) {
-  return text2.startsWith("-") ? `−${text2.slice(1)}` : text2;
-}
-var STATUS_WORD = {
-  holds: "holds",
-  weakened: "weakened",
-  "below-floor": "below its floor",
-  new: "new design",
-  removed: "removed",
-  renamed: "renamed",
-  unreadable: "could not be read"
-};
-var REQUIREMENT_STATUS_WORD = {
-  holds: "holds",
-  short: "short of its floor",
-  weakened: "weakened",
-  "inside-error": "inside the error",
-  unsettled: "unsettled",
-  "not-applicable": "not applicable"
-};
 function fileStatusWord(f) {
-  if (f.status === "unreadable" && !f.findings.some((x) => x.rule === "parse-error") && f.findings.some((x) => x.rule === "not-computable")) return "could not be evaluated";
+  if (f.status === "unreadable" && !f.findings.some((x) => x.rule === "parse-error") && f.findings.some((x) => x.rule === "not-computable"))
+    return "could not be evaluated";
   return STATUS_WORD[f.status];
 }
 function statusCounts(r) {
@@ -45209,7 +46592,9 @@ function statusCounts(r) {
       out.push(`${n} ${STATUS_WORD[k]}`);
       continue;
     }
-    const evaluated = r.files.filter((f) => f.status === "unreadable" && fileStatusWord(f) !== STATUS_WORD.unreadable).length;
+    const evaluated = r.files.filter(
+      (f) => f.status === "unreadable" && fileStatusWord(f) !== STATUS_WORD.unreadable
+    ).length;
     if (n - evaluated > 0) out.push(`${n - evaluated} ${STATUS_WORD.unreadable}`);
     if (evaluated > 0) out.push(`${evaluated} could not be evaluated`);
   }
@@ -45219,12 +46604,6 @@ function describeNotApplicable(ev) {
   const list = ev?.notApplicable ?? [];
   if (!list.length) return void 0;
   return list.map((x) => `${challengeLabel(x.challenge)} (${x.reason})`).join("; ");
-}
-function fileFails(f) {
-  return f.status === "unreadable" || f.findings.some((x) => x.severity === "fail");
-}
-function fileWarns(f) {
-  return !fileFails(f) && f.findings.some((x) => x.severity === "warn");
 }
 function knownElements(f) {
   const known = /* @__PURE__ */ new Map();
@@ -45257,18 +46636,18 @@ function formatElement(e, style = {}) {
   const id = style.id ?? ((x) => x);
   const text2 = style.text ?? ((x) => x);
   const sp = style.space ?? " ";
-  const meta = style.meta ?? ((x) => x);
+  const meta2 = style.meta ?? ((x) => x);
   const line = e.line > 0 ? `line${sp}${e.line}` : "";
-  if (e.label) return `${text2(e.label)}${sp}${meta(`(${e.kind}${sp}${id(e.id)}${line ? `, ${line}` : ""})`)}`;
-  return line ? `${id(e.id)}${sp}${meta(`(${line})`)}` : id(e.id);
+  if (e.label) return `${text2(e.label)}${sp}${meta2(`(${e.kind}${sp}${id(e.id)}${line ? `, ${line}` : ""})`)}`;
+  return line ? `${id(e.id)}${sp}${meta2(`(${line})`)}` : id(e.id);
 }
-function amount(x) {
+function amount2(x) {
   return String(Number(x.toPrecision(6)));
 }
 var NAMED_STRANDED = 3;
 function consequenceSentence(c, subject = "Losing it", style = {}) {
-  const plural = / removals$/.test(subject);
-  const verb = (one, many) => plural ? many : one;
+  const plural2 = / removals$/.test(subject);
+  const verb = (one, many) => plural2 ? many : one;
   const named2 = c.stranded.slice(0, NAMED_STRANDED).map((e) => formatElement(e, style));
   const more = c.strandedCount - named2.length;
   let what;
@@ -45280,7 +46659,7 @@ function consequenceSentence(c, subject = "Losing it", style = {}) {
   let demands = "";
   if (c.demandsTotal !== void 0 && c.demandsLost !== void 0) {
     const total = `${c.demandsTotal} demand${c.demandsTotal === 1 ? "" : "s"}`;
-    demands = c.demandsLost === 0 ? `; every demand keeps a path` : `; ${c.demandsLost} of ${total} (volume ${amount(c.volumeLost ?? 0)} of ${amount(c.volumeTotal ?? 0)}) ${c.demandsLost === 1 ? "loses" : "lose"} every path`;
+    demands = c.demandsLost === 0 ? `; every demand keeps a path` : `; ${c.demandsLost} of ${total} (volume ${amount2(c.volumeLost ?? 0)} of ${amount2(c.volumeTotal ?? 0)}) ${c.demandsLost === 1 ? "loses" : "lose"} every path`;
   }
   return `${subject ? `${subject} ` : ""}${what}${demands}.`;
 }
@@ -45301,15 +46680,28 @@ function weakestSequences2(f) {
   };
   for (const env of f.head?.envelopes ?? []) {
     const wc = env.worstCase;
-    if (wc) add(`Worst case found under ${challengeLabel(env.challenge)} (${wc.method} search, ${wc.k} ${wc.k === 1 ? kindSingular(wc.kind) : kindPlural(wc.kind)})`, wc);
+    if (wc)
+      add(
+        `Worst case found under ${challengeLabel(env.challenge)} (${wc.method} search, ${wc.k} ${wc.k === 1 ? kindSingular(wc.kind) : kindPlural(wc.kind)})`,
+        wc
+      );
   }
   for (const x of f.findings) {
     if (x.rule !== "weakest-sequence") continue;
-    add(x.message, { kind: x.elements[0]?.kind ?? "node", elements: x.elements.map((e) => e.id), located: x.elements, ...x.consequence ? { consequence: x.consequence } : {} });
+    add(x.message, {
+      kind: x.elements[0]?.kind ?? "node",
+      elements: x.elements.map((e) => e.id),
+      located: x.elements,
+      ...x.consequence ? { consequence: x.consequence } : {}
+    });
   }
   for (const env of f.head?.envelopes ?? []) {
     const w = env.weakest[0];
-    if (w) add(`Weakest realization${w.realization !== void 0 ? ` #${w.realization}` : ""} under ${challengeLabel(env.challenge)}`, w);
+    if (w)
+      add(
+        `Weakest realization${w.realization !== void 0 ? ` #${w.realization}` : ""} under ${challengeLabel(env.challenge)}`,
+        w
+      );
   }
   return out;
 }
@@ -45318,9 +46710,8 @@ function findingTitle(x, names) {
   const kind = x.rule === "n-1" ? n1Kind(x) : void 0;
   switch (x.status) {
     case "within-allowance":
-      return "robustness dropped within the allowance";
     case "inside-error":
-      return "change within Monte Carlo noise";
+      return JUDGED_TITLE[x.status];
     case "unsettled":
       return x.rule === "regression" ? "change could not be judged" : `${subject ?? x.rule}${kind ?? ""} not settled`;
     case "reduced-work":
@@ -45360,7 +46751,8 @@ function describeChanges(f, max = 4) {
   const ch = f.changes;
   const renamed = ch?.renamed ?? [];
   const hardened = ch?.hardened ?? [];
-  if (!ch || ch.added.length === 0 && ch.removed.length === 0 && renamed.length === 0 && hardened.length === 0) return void 0;
+  if (!ch || ch.added.length === 0 && ch.removed.length === 0 && renamed.length === 0 && hardened.length === 0)
+    return void 0;
   const cut = (l) => l.slice(0, max);
   const tail = (n) => n > max ? `; … ${n - max} more` : "";
   const part = (sign2, list, side) => {
@@ -45375,40 +46767,17 @@ function describeChanges(f, max = 4) {
   const words = [...part("+", ch.added, ""), ...part("−", ch.removed, "base ")];
   for (const r of cut(renamed)) words.push(`${r.from.kind} ${r.from.id} renamed ${r.to.id} (line ${r.to.line})`);
   if (renamed.length > max) words.push(`… ${renamed.length - max} more renamed`);
-  for (const [flag, word] of [[true, "now hardened"], [false, "no longer hardened"]]) {
+  for (const [flag, word] of [
+    [true, "now hardened"],
+    [false, "no longer hardened"]
+  ]) {
     const l = hardened.filter((e) => e.hardened === flag);
-    if (l.length) words.push(`${word}: ${cut(l).map((e) => formatElement(e)).join(", ")}${l.length > max ? `, … ${l.length - max} more` : ""}`);
+    if (l.length)
+      words.push(
+        `${word}: ${cut(l).map((e) => formatElement(e)).join(", ")}${l.length > max ? `, … ${l.length - max} more` : ""}`
+      );
   }
   return words.join(", ");
-}
-var SEVERITY_ORDER = { fail: 0, warn: 1, notice: 2 };
-function bySeverity(findings) {
-  return [...findings].sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity]);
-}
-var GROUPABLE = /* @__PURE__ */ new Set(["new-bridge", "new-cut-node", "hardened-weak-point"]);
-function groupFindings(findings) {
-  const out = [];
-  for (const x of findings) {
-    const groupable = GROUPABLE.has(x.rule) && x.elements.length === 1;
-    const prev = out[out.length - 1];
-    if (groupable && prev && prev.rule === x.rule && prev.severity === x.severity && prev.elements.length >= 1 && prev.grouped) {
-      prev.elements.push(...x.elements);
-      prev.members.push(x);
-      continue;
-    }
-    out.push(groupable ? { ...x, elements: [...x.elements], grouped: true, members: [x] } : x);
-  }
-  for (const x of out) {
-    if (!x.grouped || x.elements.length < 2) continue;
-    const what = x.rule === "new-bridge" ? "new bridges (links whose loss alone splits the design)" : x.rule === "new-cut-node" ? "new cut nodes (sites whose loss alone splits the design)" : "new weak points hidden by hardening (the change marks them hardened; hardening is a claim the gate cannot check)";
-    x.message = `${x.elements.length} ${what}: ${x.elements.map((e) => formatElement(e, { space: " " })).join(", ")}`;
-    delete x.consequence;
-  }
-  return out;
-}
-function shortRevision(rev) {
-  if (rev === void 0) return "–";
-  return /^[0-9a-f]{40}([0-9a-f]{24})?$/.test(rev) ? rev.slice(0, 12) : rev;
 }
 function configurationNotes(r) {
   const out = [];
@@ -45416,11 +46785,19 @@ function configurationNotes(r) {
   if (c) {
     for (const x of c.changes) {
       const tail = x.weakens ? "; it would weaken the check, so the base’s setting applies and this fails" : "";
-      out.push({ text: `this change edits the workflow that runs netbrace (${c.workflow}, line ${x.line}): ${x.message}${tail}`, weakens: x.weakens, file: c.workflow, line: x.line });
+      out.push({
+        text: `this change edits the workflow that runs netbrace (${c.workflow}, line ${x.line}): ${x.message}${tail}`,
+        weakens: x.weakens,
+        file: c.workflow,
+        line: x.line
+      });
     }
   }
-  if (r.policy.changed && r.policy.path) {
-    out.push({ text: `this change edits the policy (${(r.policy.files ?? [r.policy.path]).join(", ")}); ${r.policy.note ?? "the base’s version judges it"}`, weakens: false, file: r.policy.path, line: 1 });
+  const policy = policyChangeSentence(r);
+  if (policy && r.policy.path) {
+    const path3 = r.policy.path;
+    const first = r.policy.changes?.find((c2) => c2.line > 0 && c2.file === path3);
+    out.push({ text: plainSentence(policy).replace(/\.$/, ""), weakens: false, file: path3, line: first?.line ?? 1 });
   }
   return out;
 }
@@ -45467,7 +46844,12 @@ function envelopeChart(env, head, base) {
   series.push({ role: "band", id: "band", label: bandName, points: zip(env.x, lo), upper: zip(env.x, hi) });
   series.push({ role: "median", id: "median", label: "median", points: zip(env.x, env.median) });
   for (const a of attacksFor(env, head)) {
-    series.push({ role: "attack", id: `attack:${a.challenge}`, label: challengeLabel(a.challenge), points: clip(zip(a.x, a.values), xMax) });
+    series.push({
+      role: "attack",
+      id: `attack:${a.challenge}`,
+      label: challengeLabel(a.challenge),
+      points: clip(zip(a.x, a.values), xMax)
+    });
   }
   const wc = env.worstCase;
   const count = elementCount(head, env);
@@ -45483,7 +46865,12 @@ function envelopeChart(env, head, base) {
   }
   const baseEnv = base?.envelopes.find((b) => b.challenge === env.challenge && b.kind === env.kind);
   if (baseEnv) {
-    series.push({ role: "base-median", id: "base-median", label: "base median", points: clip(zip(baseEnv.x, baseEnv.median), xMax) });
+    series.push({
+      role: "base-median",
+      id: "base-median",
+      label: "base median",
+      points: clip(zip(baseEnv.x, baseEnv.median), xMax)
+    });
   }
   return {
     title: `R under ${challengeLabel(env.challenge)}`,
@@ -45544,20 +46931,30 @@ function renderChartSvg(chart, options = {}) {
   );
   out.push(`<title id="${id}-title">${esc(chart.title)}</title>`);
   out.push(`<desc id="${id}-desc">${esc(chart.summary)}</desc>`);
-  out.push(`<rect x="${m.left}" y="${m.top}" width="${plotW}" height="${plotH}" fill="#fffdf8" stroke="${CHART_COLORS.grid}"/>`);
+  out.push(
+    `<rect x="${m.left}" y="${m.top}" width="${plotW}" height="${plotH}" fill="#fffdf8" stroke="${CHART_COLORS.grid}"/>`
+  );
   out.push('<g aria-hidden="true" font-family="inherit" font-size="12" fill="' + CHART_COLORS.ink + '">');
   for (let i = 0; i <= 5; i++) {
     const y = i / 5;
-    out.push(`<line x1="${m.left}" x2="${m.left + plotW}" y1="${num(sy(y))}" y2="${num(sy(y))}" stroke="${CHART_COLORS.grid}" stroke-width="${i === 0 ? 1.2 : 0.6}"/>`);
+    out.push(
+      `<line x1="${m.left}" x2="${m.left + plotW}" y1="${num(sy(y))}" y2="${num(sy(y))}" stroke="${CHART_COLORS.grid}" stroke-width="${i === 0 ? 1.2 : 0.6}"/>`
+    );
     out.push(`<text x="${m.left - 8}" y="${num(sy(y) + 4)}" text-anchor="end">${y.toFixed(1)}</text>`);
   }
   for (const x of niceTicks(xMax)) {
-    out.push(`<line x1="${num(sx(x))}" x2="${num(sx(x))}" y1="${m.top}" y2="${m.top + plotH}" stroke="${CHART_COLORS.grid}" stroke-width="0.6"/>`);
+    out.push(
+      `<line x1="${num(sx(x))}" x2="${num(sx(x))}" y1="${m.top}" y2="${m.top + plotH}" stroke="${CHART_COLORS.grid}" stroke-width="0.6"/>`
+    );
     const label = chart.xUnit === "km" ? `${num(x)}` : `${Math.round(x * 100)} %`;
     out.push(`<text x="${num(sx(x))}" y="${m.top + plotH + 16}" text-anchor="middle">${label}</text>`);
   }
-  out.push(`<text x="${m.left + plotW / 2}" y="${m.top + plotH + 36}" text-anchor="middle" font-size="13">${esc(chart.xLabel)}</text>`);
-  out.push(`<text transform="translate(16 ${m.top + plotH / 2}) rotate(-90)" text-anchor="middle" font-size="13">R (robustness value, 0–1)</text>`);
+  out.push(
+    `<text x="${m.left + plotW / 2}" y="${m.top + plotH + 36}" text-anchor="middle" font-size="13">${esc(chart.xLabel)}</text>`
+  );
+  out.push(
+    `<text transform="translate(16 ${m.top + plotH / 2}) rotate(-90)" text-anchor="middle" font-size="13">R (robustness value, 0–1)</text>`
+  );
   out.push("</g>");
   let attackIndex = 0;
   const styleOf = (s) => {
@@ -45570,7 +46967,11 @@ function renderChartSvg(chart, options = {}) {
         return { stroke: CHART_COLORS.worst, dash: "", width: 1.8 };
       case "attack": {
         const i = attackIndex++;
-        return { stroke: CHART_COLORS.attacks[i % CHART_COLORS.attacks.length], dash: ATTACK_DASH[i % ATTACK_DASH.length], width: 1.8 };
+        return {
+          stroke: CHART_COLORS.attacks[i % CHART_COLORS.attacks.length],
+          dash: ATTACK_DASH[i % ATTACK_DASH.length],
+          width: 1.8
+        };
       }
       default:
         return { stroke: CHART_COLORS.bandEdge, dash: "", width: 0.8 };
@@ -45586,7 +46987,9 @@ function renderChartSvg(chart, options = {}) {
       if (s.role === "band") {
         const upper = s.upper ?? [];
         const d = `M${line(upper).replace(/ /g, " L")} L${line([...s.points].reverse()).replace(/ /g, " L")} Z`;
-        out.push(`<path ${attrs} d="${d}" fill="${CHART_COLORS.band}" fill-opacity="0.75" stroke="${st.stroke}" stroke-width="${st.width}"/>`);
+        out.push(
+          `<path ${attrs} d="${d}" fill="${CHART_COLORS.band}" fill-opacity="0.75" stroke="${st.stroke}" stroke-width="${st.width}"/>`
+        );
         return;
       }
       out.push(`<g ${attrs}>`);
@@ -45607,15 +47010,20 @@ function renderChartSvg(chart, options = {}) {
     const st = styles[i];
     const x = m.left + i % legendCols * colW;
     const y = m.top + plotH + m.bottom + Math.floor(i / legendCols) * legendRowH + 4;
+    out.push(`<g data-legend="${esc(s.id)}">`);
     if (s.role === "band") {
-      out.push(`<rect x="${x}" y="${y}" width="26" height="10" fill="${CHART_COLORS.band}" stroke="${st.stroke}" stroke-width="0.8"/>`);
+      out.push(
+        `<rect x="${x}" y="${y}" width="26" height="10" fill="${CHART_COLORS.band}" stroke="${st.stroke}" stroke-width="0.8"/>`
+      );
     } else {
       out.push(
         `<line x1="${x}" x2="${x + 26}" y1="${y + 5}" y2="${y + 5}" stroke="${st.stroke}" stroke-width="${st.width}"${st.dash ? ` stroke-dasharray="${st.dash}"` : ""}/>`
       );
-      if (s.role === "worst-case") out.push(`<rect x="${x + 10}" y="${y + 2}" width="6" height="6" fill="${st.stroke}"/>`);
+      if (s.role === "worst-case")
+        out.push(`<rect x="${x + 10}" y="${y + 2}" width="6" height="6" fill="${st.stroke}"/>`);
     }
     out.push(`<text x="${x + 34}" y="${y + 9}">${esc(s.label)}</text>`);
+    out.push("</g>");
   });
   out.push("</g>");
   out.push("</svg>");
@@ -45651,8 +47059,12 @@ var LABEL_ALL_LIMIT = 60;
 function mapHighlights(f) {
   const bridges2 = new Set((f.head?.structure.bridges ?? []).map((e) => e.id));
   const cutNodes2 = new Set((f.head?.structure.cutNodes ?? []).map((e) => e.id));
-  const newBridges = new Set(f.findings.filter((x) => x.rule === "new-bridge").flatMap((x) => x.elements.map((e) => e.id)));
-  const newCutNodes = new Set(f.findings.filter((x) => x.rule === "new-cut-node").flatMap((x) => x.elements.map((e) => e.id)));
+  const newBridges = new Set(
+    f.findings.filter((x) => x.rule === "new-bridge").flatMap((x) => x.elements.map((e) => e.id))
+  );
+  const newCutNodes = new Set(
+    f.findings.filter((x) => x.rule === "new-cut-node").flatMap((x) => x.elements.map((e) => e.id))
+  );
   const seq = weakestSequences2(f)[0];
   const first = f.mend?.suggestions.find((s) => s.kind === "links" && s.holds) ?? f.mend?.suggestions.find((s) => s.kind === "links");
   return {
@@ -45678,14 +47090,19 @@ function nodeTitle(n, h, step) {
   return parts.join(" — ");
 }
 function linkTitle(l, h, step, stranding) {
-  const parts = [`Link ${l.id} (${l.source}–${l.target})`, l.side === "base" ? `base line ${l.line}` : `line ${l.line}`];
+  const parts = [
+    `Link ${l.id} (${l.source}–${l.target})`,
+    l.side === "base" ? `base line ${l.line}` : `line ${l.line}`
+  ];
   if (l.side === "head") parts.push("added by the change");
   if (l.side === "base") parts.push("removed by the change");
   if (h.newBridges.has(l.id)) parts.push("new bridge: its loss alone splits the design");
   else if (h.bridges.has(l.id) && l.side !== "base") parts.push("bridge: its loss alone splits the design");
   for (const g of l.groups ?? []) {
     const s = stranding.get(g);
-    parts.push(s ? `in shared-risk group ${g}, whose loss strands ${s.strands} site${s.strands === 1 ? "" : "s"}${s.isNew ? " (new)" : ""}` : `in shared-risk group ${g}`);
+    parts.push(
+      s ? `in shared-risk group ${g}, whose loss strands ${s.strands} site${s.strands === 1 ? "" : "s"}${s.isNew ? " (new)" : ""}` : `in shared-risk group ${g}`
+    );
   }
   if (l.hardened) parts.push("hardened");
   if (step !== void 0) parts.push(`step ${step} of the weakest removal sequence`);
@@ -45707,7 +47124,7 @@ function renderMapSvg(map, h, options = {}) {
     const members = map.links.filter((l) => l.side !== "base" && (l.groups ?? []).includes(g.id));
     if (!members.length) continue;
     used.add(g.isNew ? "group-new" : "group");
-    const segs = members.map((l) => seg(pos.get(l.source), pos.get(l.target))).join(" ");
+    const segs = members.map((l) => seg2(pos.get(l.source), pos.get(l.target))).join(" ");
     const n = step.get(g.id);
     body.push(
       `<g data-el="group" data-id="${esc2(g.id)}"><title>${esc2(`Shared-risk group ${g.id} (line ${g.line}): losing all its ${members.length} link${members.length === 1 ? "" : "s"} at once strands ${g.strands} site${g.strands === 1 ? "" : "s"}${g.isNew ? ", which the base did not" : ""}${n !== void 0 ? ` — step ${n} of the weakest removal sequence` : ""}`)}</title><path d="${segs}" fill="none" stroke="${g.isNew ? C.bandNew : C.band}" stroke-opacity="${g.isNew ? 0.55 : 0.4}" stroke-width="11" stroke-linecap="round"${g.isNew ? ' stroke-dasharray="14 5"' : ""}/></g>`
@@ -45827,24 +47244,68 @@ function linkRank(l, h) {
 function legend(C) {
   const line = (attrs) => (x, y) => `<path d="M${r1(x)} ${r1(y)}h30" fill="none" ${attrs}/>`;
   return [
-    { key: "site", label: "site", draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.2" fill="${C.paper}" stroke="${C.ink}" stroke-width="1.3"/>` },
-    { key: "site-hardened", label: "hardened site", draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.2" fill="${C.ink}" stroke="${C.ink}" stroke-width="1.3"/>` },
-    { key: "site-added", label: "site added by the change", draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="5.5" fill="${C.paper}" stroke="${C.pass}" stroke-width="2.6"/>` },
-    { key: "site-removed", label: "site removed by the change", draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.5" fill="${C.paper}" stroke="${C.muted}" stroke-width="1.4" stroke-dasharray="2 2"/>` },
-    { key: "cut", label: "cut site (single point of failure)", draw: (x, y) => diamond(x + 15, y, 6.5, `fill="${C.paper}" stroke="${C.warn}" stroke-width="2.2"`) },
-    { key: "new-cut", label: "new cut site", draw: (x, y) => diamond(x + 15, y, 7, `fill="${C.fail}" stroke="${C.ink}" stroke-width="1.2"`) },
+    {
+      key: "site",
+      label: "site",
+      draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.2" fill="${C.paper}" stroke="${C.ink}" stroke-width="1.3"/>`
+    },
+    {
+      key: "site-hardened",
+      label: "hardened site",
+      draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.2" fill="${C.ink}" stroke="${C.ink}" stroke-width="1.3"/>`
+    },
+    {
+      key: "site-added",
+      label: "site added by the change",
+      draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="5.5" fill="${C.paper}" stroke="${C.pass}" stroke-width="2.6"/>`
+    },
+    {
+      key: "site-removed",
+      label: "site removed by the change",
+      draw: (x, y) => `<circle cx="${r1(x + 15)}" cy="${r1(y)}" r="4.5" fill="${C.paper}" stroke="${C.muted}" stroke-width="1.4" stroke-dasharray="2 2"/>`
+    },
+    {
+      key: "cut",
+      label: "cut site (single point of failure)",
+      draw: (x, y) => diamond(x + 15, y, 6.5, `fill="${C.paper}" stroke="${C.warn}" stroke-width="2.2"`)
+    },
+    {
+      key: "new-cut",
+      label: "new cut site",
+      draw: (x, y) => diamond(x + 15, y, 7, `fill="${C.fail}" stroke="${C.ink}" stroke-width="1.2"`)
+    },
     { key: "link", label: "link", draw: line(`stroke="${C.link}" stroke-width="1.6"`) },
-    { key: "added", label: "link added by the change", draw: (x, y) => line(`stroke="${C.pass}" stroke-width="5"`)(x, y) + line(`stroke="${C.paper}" stroke-width="1.6"`)(x, y) },
-    { key: "removed", label: "link removed by the change", draw: line(`stroke="${C.link}" stroke-width="1.8" stroke-dasharray="6 4"`) },
+    {
+      key: "added",
+      label: "link added by the change",
+      draw: (x, y) => line(`stroke="${C.pass}" stroke-width="5"`)(x, y) + line(`stroke="${C.paper}" stroke-width="1.6"`)(x, y)
+    },
+    {
+      key: "removed",
+      label: "link removed by the change",
+      draw: line(`stroke="${C.link}" stroke-width="1.8" stroke-dasharray="6 4"`)
+    },
     { key: "bridge", label: "bridge (single point of failure)", draw: line(`stroke="${C.warn}" stroke-width="3"`) },
     {
       key: "new-bridge",
       label: "new bridge",
       draw: (x, y) => line(`stroke="${C.fail}" stroke-width="4.2" stroke-linecap="round"`)(x, y) + `<rect x="${r1(x + 11)}" y="${r1(y - 4)}" width="8" height="8" fill="${C.fail}" stroke="${C.paper}" stroke-width="1.2"/>`
     },
-    { key: "group", label: "shared-risk group whose loss strands sites", draw: line(`stroke="${C.band}" stroke-opacity="0.4" stroke-width="11" stroke-linecap="round"`) },
-    { key: "group-new", label: "the same, new with this change", draw: line(`stroke="${C.bandNew}" stroke-opacity="0.55" stroke-width="11" stroke-dasharray="14 5"`) },
-    { key: "proposed", label: "link the first suggestion adds", draw: line(`stroke="${C.notice}" stroke-width="2.6" stroke-dasharray="1 5" stroke-linecap="round"`) },
+    {
+      key: "group",
+      label: "shared-risk group whose loss strands sites",
+      draw: line(`stroke="${C.band}" stroke-opacity="0.4" stroke-width="11" stroke-linecap="round"`)
+    },
+    {
+      key: "group-new",
+      label: "the same, new with this change",
+      draw: line(`stroke="${C.bandNew}" stroke-opacity="0.55" stroke-width="11" stroke-dasharray="14 5"`)
+    },
+    {
+      key: "proposed",
+      label: "link the first suggestion adds",
+      draw: line(`stroke="${C.notice}" stroke-width="2.6" stroke-dasharray="1 5" stroke-linecap="round"`)
+    },
     {
       key: "step",
       label: "weakest removal sequence, in order",
@@ -45862,10 +47323,11 @@ function describeMap(map, h) {
   const strand = map.strandingGroups.map((g) => g.id);
   if (strand.length) parts.push(`shared-risk groups whose loss strands sites: ${strand.join(", ")}`);
   if (h.weakest.length) parts.push(`weakest removal sequence numbered: ${h.weakest.join(", ")}`);
-  if (h.proposed.length) parts.push(`proposed: ${h.proposed.map((l) => `${l.between[0]}–${l.between[1]}`).join(", ")}`);
+  if (h.proposed.length)
+    parts.push(`proposed: ${h.proposed.map((l) => `${l.between[0]}–${l.between[1]}`).join(", ")}`);
   return `${parts.join("; ")}. ${map.method}.`;
 }
-function seg(a, b) {
+function seg2(a, b) {
   return `M${a.x} ${a.y}L${b.x} ${b.y}`;
 }
 function mid(a, b) {
@@ -45892,7 +47354,9 @@ function mapHtml(f, id) {
   } else if (map) {
     const h = mapHighlights(f);
     out.push("<h3>Map</h3>");
-    out.push(`<figure class="map" data-layout="${map.layout}" data-nodes="${map.nodes.length}" data-links="${map.links.length}">`);
+    out.push(
+      `<figure class="map" data-layout="${map.layout}" data-nodes="${map.nodes.length}" data-links="${map.links.length}">`
+    );
     out.push(renderMapSvg(map, h, { idPrefix: `${id}-map`, title: `Map of ${f.path}` }));
     const caption = [
       map.layout === "geographic" ? "Sites at their coordinates." : "Positions from a force-directed layout: they show how sites are linked, not where they are.",
@@ -46024,26 +47488,36 @@ function perUnit(s) {
 function linkWords(l) {
   const parts = [`${l.between[0]}–${l.between[1]}`];
   if (l.lengthKm !== void 0) parts.push(`${l.lengthKm} km`);
-  if (l.latencyMs !== void 0) parts.push(`latency ${l.latencyMs} ms${l.latencyEstimated ? " (estimated from the design’s links)" : ""}`);
+  if (l.latencyMs !== void 0)
+    parts.push(`latency ${l.latencyMs} ms${l.latencyEstimated ? " (estimated from the design’s links)" : ""}`);
   if (l.cost !== void 0) parts.push(`cost ${l.cost}`);
   if (l.riskGroups?.length) parts.push(`in ${l.riskGroups.join(", ")}`);
   parts.push(l.source === "list" ? `from the candidate list${l.line ? `, line ${l.line}` : ""}` : "generated");
   return parts.join(", ");
 }
 function linksYaml(links) {
-  return links.map((l) => `  - ${(0, import_yaml2.stringify)(linkEntry(l), { collectionStyle: "flow", flowCollectionPadding: false, lineWidth: 0 }).trim()}`).join("\n");
+  return links.map(
+    (l) => `  - ${(0, import_yaml2.stringify)(linkEntry(l), { collectionStyle: "flow", flowCollectionPadding: false, lineWidth: 0 }).trim()}`
+  ).join("\n");
 }
 function boundWords(m) {
   const out = [];
   const nb = m.bounds.newBridges;
-  if (nb) out.push(`at least ${nb.links} link${nb.links === 1 ? "" : "s"} to remove the new bridges (their bridge tree has ${nb.leaves} leaves; Eswaran & Tarjan 1976)`);
+  if (nb)
+    out.push(
+      `at least ${nb.links} link${nb.links === 1 ? "" : "s"} to remove the new bridges (their bridge tree has ${nb.leaves} leaves; Eswaran & Tarjan 1976)`
+    );
   const ab = m.bounds.allBridges;
-  if (ab.links > 0) out.push(`at least ${ab.links} link${ab.links === 1 ? "" : "s"} to leave no bridge at all (${ab.leaves} leaves${ab.isolated ? `, ${ab.isolated} isolated parts` : ""})`);
+  if (ab.links > 0)
+    out.push(
+      `at least ${ab.links} link${ab.links === 1 ? "" : "s"} to leave no bridge at all (${ab.leaves} leaves${ab.isolated ? `, ${ab.isolated} isolated parts` : ""})`
+    );
   return out;
 }
 function candidateWords(m) {
   const c = m.candidates;
-  if (c.source === "list") return `${c.count} candidate link${c.count === 1 ? "" : "s"} from ${c.path ?? "the planner’s list"}`;
+  if (c.source === "list")
+    return `${c.count} candidate link${c.count === 1 ? "" : "s"} from ${c.path ?? "the planner’s list"}`;
   if (c.source === "generated" && c.maxKm !== void 0) {
     return `${c.count} site pairs within ${c.maxKm} km (great circle), length = great-circle distance × ${c.routeFactor} route factor (common practice)`;
   }
@@ -46059,8 +47533,12 @@ function mendHtml(f, id) {
   parts.push(`<p class="facts">${facts2.map(esc4).join(" ")}</p>`);
   if (m.suggestions.length) {
     const rows = m.suggestions.map((s, i) => {
-      const change = s.kind === "links" ? s.links.map((l) => `<span class="el">+ ${esc4(l.id)}</span> <span class="line">${esc4(linkWords(l))}</span>`).join("<br>") : s.harden.map((e) => `<span class="el">harden ${esc4(e.id)}</span> <span class="line">(${esc4(e.kind)}, line ${e.line})</span>`).join("<br>");
-      const req = s.requirements.map((r) => `${esc4(r.description)}: ${esc4(value(r.id, r.before))} → ${esc4(value(r.id, r.after))} (${esc4(r.status)})`).join("<br>");
+      const change = s.kind === "links" ? s.links.map((l) => `<span class="el">+ ${esc4(l.id)}</span> <span class="line">${esc4(linkWords(l))}</span>`).join("<br>") : s.harden.map(
+        (e) => `<span class="el">harden ${esc4(e.id)}</span> <span class="line">(${esc4(e.kind)}, line ${e.line})</span>`
+      ).join("<br>");
+      const req = s.requirements.map(
+        (r) => `${esc4(r.description)}: ${esc4(value(r.id, r.before))} → ${esc4(value(r.id, r.after))} (${esc4(r.status)})`
+      ).join("<br>");
       return `<tr data-suggestion="${i + 1}" data-kind="${s.kind}" data-holds="${s.holds}"><th scope="row">${i + 1}</th><td>${change}</td><td class="num">${esc4(unitWord(s) || "–")}</td><td class="num">${esc4(formatValue(s.rBefore))} → ${esc4(formatValue(s.rAfter))}${perUnit(s) ? `<div class="line">${esc4(perUnit(s))}</div>` : ""}</td><td>${s.fixes.length} of ${m.targets.length}${s.leaves.length ? `<div class="line">still: ${esc4(s.leaves.join("; ").replace(/\|/g, " "))}</div>` : ""}<div class="line">${req}</div></td><td class="${s.holds ? "st-holds" : "sev-fail"}">${s.holds ? "holds" : esc4(`does not hold (${s.status})`)}</td></tr>`;
     });
     parts.push(
@@ -46068,7 +47546,9 @@ function mendHtml(f, id) {
     );
     const first = m.suggestions.find((s) => s.kind === "links");
     if (first) {
-      parts.push(`<details><summary>Suggestion ${m.suggestions.indexOf(first) + 1} in the design file (under <code>links:</code>)</summary><pre><code>${esc4(linksYaml(first.links))}</code></pre></details>`);
+      parts.push(
+        `<details><summary>Suggestion ${m.suggestions.indexOf(first) + 1} in the design file (under <code>links:</code>)</summary><pre><code>${esc4(linksYaml(first.links))}</code></pre></details>`
+      );
     }
   } else {
     parts.push('<p class="facts">No suggestion: nothing tried removes a target.</p>');
@@ -46080,51 +47560,41 @@ function mendHtml(f, id) {
 
 // src/report/html.ts
 var esc5 = (s) => escapeHtml(String(s));
-var RULE_TITLE = {
-  "r-threshold": "r-threshold not held",
-  "area-floor": "area below its floor",
-  "spread-ceiling": "spread above its ceiling",
-  "n-1": "N−1 rule broken",
-  "new-bridge": "new bridge",
-  "new-cut-node": "new cut node",
-  "new-stranding-group": "new stranding shared-risk group",
-  "hardened-weak-point": "weak point hidden by hardening",
-  regression: "regression",
-  "weakest-sequence": "weakest sequence",
-  "parse-error": "unreadable design",
-  "removed-design": "removed design",
-  "policy-changed": "policy changed",
-  degraded: "reduced evaluation",
-  "not-computable": "value not computable"
-};
 var dataValue = (v) => v === null || v === void 0 ? "" : String(v);
 var CSS = `
 :root{--paper:#f6f3ec;--card:#fffdf8;--ink:#1e2a32;--muted:#5d6870;--rule:#d9d4c7;--teal:#0d4f5c;
---sea:#a9d3cb;--fail:#a4161a;--warn:#8f5200;--pass:#2d6a3e;--notice:#1d5fa3}
+--fail:#a4161a;--warn:#8f5200;--holds:#2f5d73;--notice:#5d6870}
 *{box-sizing:border-box}
 html{background:var(--paper);color:var(--ink)}
 body{margin:0 auto;max-width:1120px;padding:24px 28px 48px;font:15px/1.5 system-ui,-apple-system,"Segoe UI",Roboto,"Noto Sans",sans-serif}
 h1,h2,h3{line-height:1.25;margin:0}
-h1{font-size:1.55rem;letter-spacing:.01em}
+h1{font-size:1.45rem}
 h2{font-size:1.2rem;word-break:break-all}
-h3{font-size:.95rem;text-transform:uppercase;letter-spacing:.08em;color:var(--muted);margin:22px 0 8px}
-.mast{display:flex;flex-wrap:wrap;gap:18px;align-items:flex-end;justify-content:space-between;border-bottom:3px double var(--ink);padding-bottom:14px}
-.brand{font-weight:800;font-size:.8rem;letter-spacing:.32em;text-transform:uppercase;color:var(--teal)}
-.verdict{font-size:1.05rem;font-weight:700;padding:8px 16px;border:2px solid currentColor;border-radius:2px}
-.verdict.fail{color:var(--fail)}.verdict.pass{color:var(--pass)}
-dl.meta{display:grid;grid-template-columns:max-content 1fr;gap:2px 14px;margin:14px 0;font-size:.9rem}
+h3{font-size:.95rem;letter-spacing:.04em;color:var(--teal);margin:20px 0 6px}
+.mast{border-bottom:3px double var(--ink);padding-bottom:12px}
+.brand{font-weight:800;font-size:.78rem;letter-spacing:.3em;text-transform:uppercase;color:var(--teal);margin-bottom:6px}
+.mark{margin-right:.35em}
+.verdict.blocks .mark{color:var(--fail)}.verdict.informs .mark,.verdict.part .mark{color:var(--warn)}.verdict.clear .mark{color:var(--holds)}
+.caution-line{margin:6px 0 0;color:var(--muted);font-size:.92rem}
+dl.meta{display:grid;grid-template-columns:max-content 1fr;gap:2px 14px;margin:12px 0 0;font-size:.88rem}
 dl.meta dt{color:var(--muted)}dl.meta dd{margin:0}
-.caution{border-left:6px solid var(--teal);background:var(--card);padding:10px 16px;margin:18px 0;font-size:.92rem}
-.caution strong{color:var(--teal)}
 nav ol{margin:6px 0 0;padding-left:22px;columns:2;column-gap:32px}
 nav a{color:var(--ink)}
-.design{background:var(--card);border:1px solid var(--rule);border-left:8px solid var(--pass);margin:28px 0;padding:18px 22px 20px}
-.design.fail{border-left-color:var(--fail)}.design.warn{border-left-color:var(--warn)}
-.design header{display:flex;flex-wrap:wrap;gap:10px 16px;align-items:baseline}
-.chip{display:inline-block;font-size:.78rem;font-weight:700;letter-spacing:.06em;text-transform:uppercase;padding:1px 8px;border:1.5px solid currentColor}
-.chip.fail{color:var(--fail)}.chip.warn{color:var(--warn)}.chip.pass{color:var(--pass)}
-.chip.notice{color:var(--notice)}
+.design{background:var(--card);border:1px solid var(--rule);border-top:5px solid var(--holds);margin:28px 0;padding:16px 22px 20px}
+.design.fails{border-top-color:var(--fail)}.design.warns{border-top-color:var(--warn)}
+.outcome{margin:4px 0 0;font-weight:600}
+.mark{font-family:ui-monospace,"SFMono-Regular",Menlo,Consolas,monospace}
+.sev-fail .mark,.outcome.fails .mark{color:var(--fail)}.sev-warn .mark,.outcome.warns .mark{color:var(--warn)}
+.sev-notice .mark{color:var(--notice)}.outcome.holds .mark,.st-holds .mark{color:var(--holds)}
 .facts{color:var(--muted);font-size:.9rem;margin:6px 0 0}
+ul.weakened,ul.how-much{list-style:none;padding:0;margin:0}
+ul.weakened li{padding:4px 0 4px 10px;border-left:3px solid var(--rule);margin:4px 0}
+ul.weakened li.sev-fail{border-left-color:var(--fail)}ul.weakened li.sev-warn{border-left-color:var(--warn)}
+ul.how-much li{padding:3px 0;font-variant-numeric:tabular-nums}
+ul.how-much .status{font-weight:700}
+.title{font-weight:600}
+dl.definitions{margin:10px 0 0;font-size:.86rem;color:var(--muted)}
+dl.definitions dt{display:none}dl.definitions dd{margin:0}
 .charts{display:grid;grid-template-columns:repeat(auto-fill,minmax(440px,1fr));gap:18px;margin-top:10px}
 figure{margin:0}
 figure svg{width:100%;height:auto;display:block}
@@ -46134,121 +47604,163 @@ caption{text-align:left;font-size:.85rem;color:var(--muted);padding-bottom:4px}
 th,td{padding:5px 8px;border-bottom:1px solid var(--rule);text-align:left;vertical-align:top}
 th{font-weight:600;background:#efeadf}
 td.num,th.num{text-align:right;white-space:nowrap}
-.st-short,.st-weakened{font-weight:700}
-.sev-fail{color:var(--fail)}.sev-warn{color:var(--warn)}.sev-notice{color:var(--notice)}
-.st-holds{color:var(--pass)}.st-inside-error,.st-unsettled{color:var(--muted)}
-ul.findings{list-style:none;padding:0;margin:0}
-ul.findings li{padding:6px 0 6px 12px;border-left:3px solid var(--rule);margin:6px 0}
-ul.findings li.fail{border-left-color:var(--fail)}ul.findings li.warn{border-left-color:var(--warn)}
-ul.findings li.notice{border-left-color:var(--notice)}
-.rule{font-family:ui-monospace,"SFMono-Regular",Menlo,Consolas,monospace;font-size:.85em;color:var(--muted)}
+.sev-fail{color:var(--fail)}
 code,.el{font-family:ui-monospace,"SFMono-Regular",Menlo,Consolas,monospace;font-size:.88em}
 ol.seq{margin:4px 0 10px;padding-left:26px}
 .line{color:var(--muted);font-size:.85em}
 details{margin-top:8px;font-size:.88rem}
 summary{cursor:pointer;color:var(--teal)}
-.error{color:var(--fail);font-weight:600}
-footer{margin-top:32px;color:var(--muted);font-size:.82rem;border-top:1px solid var(--rule);padding-top:10px}
-.vh{position:absolute;width:1px;height:1px;overflow:hidden;clip:rect(0 0 0 0);white-space:nowrap}
+.caution{border-top:1px solid var(--rule);margin:28px 0 0;padding-top:10px;font-size:.92rem}
+footer{margin-top:18px;color:var(--muted);font-size:.82rem}
 @media (max-width:640px){body{padding:14px}.charts{grid-template-columns:1fr}nav ol{columns:1}}
 @media print{
 html,body{background:#fff}
 body{max-width:none;padding:0;font-size:10.5pt}
-.design{border:1px solid #999;border-left-width:6px;break-inside:avoid-page;page-break-inside:avoid}
+.design{border:1px solid #999;border-top-width:5px;break-inside:avoid-page;page-break-inside:avoid}
 .charts{grid-template-columns:1fr 1fr}
 nav,details{display:none}
 a{color:inherit;text-decoration:none}
-.caution{border:1px solid #999;border-left:6px solid #000}
 }
 `;
-function renderHtml(report) {
-  const title = `netbrace report — ${report.verdict === "fail" ? "gate failed" : "gate passed"}`;
+function sentenceHtml(s) {
+  return s.map((x) => x.kind === "text" ? esc5(x.text) : `<code>${esc5(x.text)}</code>`).join("");
+}
+var markHtml = (mark) => `<span class="mark" aria-hidden="true">${esc5(mark)}</span>`;
+function renderHtml(report, options = {}) {
+  const readme = options.readmeUrl && /^https?:\/\//.test(options.readmeUrl) ? `${options.readmeUrl}#${README_ANCHOR}` : void 0;
+  const verdict = verdictStory(report);
+  const stories = designStories(report);
   const parts = [];
   parts.push("<!DOCTYPE html>");
   parts.push('<html lang="en">');
   parts.push("<head>");
   parts.push('<meta charset="utf-8">');
-  parts.push(`<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`);
+  parts.push(
+    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`
+  );
   parts.push('<meta name="viewport" content="width=device-width, initial-scale=1">');
   parts.push(`<meta name="generator" content="netbrace ${esc5(report.tool.version)}">`);
-  parts.push(`<title>${esc5(title)}</title>`);
+  parts.push(`<title>${esc5(`netbrace report — ${plainSentence(verdict.sentence)}`)}</title>`);
   parts.push(`<style>${CSS}</style>`);
   parts.push("</head>");
   parts.push(`<body data-report-version="${report.version}" data-verdict="${report.verdict}">`);
-  parts.push(masthead(report));
-  parts.push("<main>");
+  parts.push('<header class="mast">');
+  parts.push('<div class="brand" aria-hidden="true">netbrace · robustness report</div>');
   parts.push(
-    `<aside class="caution" role="note" aria-label="Caution"><p><strong>Caution.</strong> ${esc5(report.caution)}</p></aside>`
+    `<h1 class="verdict ${verdict.tone}" id="verdict" role="status" data-tone="${verdict.tone}">${markHtml(verdict.mark)}${sentenceHtml(verdict.sentence)}</h1>`
   );
-  if (report.files.length > 1) parts.push(contents(report));
-  if (report.files.length === 0) parts.push("<p>No design files changed: nothing to judge.</p>");
-  report.files.forEach((f, i) => parts.push(designSection(f, i)));
+  parts.push(
+    `<p class="caution-line" id="caution-line">${esc5(CAUTION_LINE.replace(/ \(the full caution is at the end\)\./, ""))} (<a href="#caution">the full caution is at the end</a>).</p>`
+  );
+  parts.push(meta(report));
+  parts.push("</header>");
+  parts.push("<main>");
+  if (stories.length > 1) parts.push(contents(stories));
+  if (stories.length === 0) parts.push("<p>No design files changed: nothing to judge.</p>");
+  stories.forEach((d, i) => parts.push(designSection(d, i, readme)));
+  parts.push(
+    `<aside class="caution" id="caution" role="note" aria-label="Caution"><h2>Caution</h2><p>${esc5(report.caution)}</p></aside>`
+  );
   parts.push("</main>");
   parts.push(
-    `<footer><p>Written by netbrace ${esc5(report.tool.version)} from report format version ${report.version}. Every number here is in the JSON report of the same run. Seed ${report.seed}; the same inputs and seed give the same numbers.</p></footer>`
+    `<footer><p>Written by netbrace ${esc5(report.tool.version)} from report format version ${report.version}. Every number here is in the JSON report of the same run. Seed ${report.seed}; the same inputs and seed give the same numbers. The words R, area, spread and ± are defined beside the numbers that use them, and in netbrace’s README, section “Reading the report”.</p></footer>`
   );
   parts.push("</body>");
   parts.push("</html>");
   return parts.join("\n") + "\n";
 }
-function masthead(r) {
-  const failed = r.files.filter(fileFails).length;
-  const verdict = r.verdict === "fail" ? `Gate failed: ${failed} of ${r.files.length} design${r.files.length === 1 ? "" : "s"} failing` : `Gate passed${r.files.some(fileWarns) ? " with warnings" : ""}`;
-  const meta = [];
-  if (r.base || r.head) meta.push(["Compared", `base <code title="${esc5(r.base ?? "")}">${esc5(shortRevision(r.base))}</code> → head <code title="${esc5(r.head ?? "")}">${esc5(shortRevision(r.head))}</code>`]);
-  meta.push([
+function meta(r) {
+  const rows = [];
+  if (r.base || r.head)
+    rows.push([
+      "Compared",
+      `base <code title="${esc5(r.base ?? "")}">${esc5(shortRevision(r.base))}</code> → head <code title="${esc5(r.head ?? "")}">${esc5(shortRevision(r.head))}</code>`
+    ]);
+  const change = policyChangeSentence(r);
+  rows.push([
     "Policy",
-    r.policy.source === "builtin" ? "no policy file: the built-in defaults for communication backbones were applied" : `<code>${esc5(r.policy.path ?? "policy file")}</code>${r.policy.revision ? ` as of <code>${esc5(shortRevision(r.policy.revision))}</code>` : ""}` + (r.policy.note ? `. ${esc5(r.policy.note)}` : r.policy.changed ? " (this change edits the policy; the proposed policy was not applied)" : "")
+    (r.policy.source === "builtin" ? "no policy file: the built-in defaults for communication backbones were applied" : `<code>${esc5(r.policy.path ?? "policy file")}</code>${r.policy.revision ? ` as of <code>${esc5(shortRevision(r.policy.revision))}</code>` : ""}` + (r.policy.note && !change ? `. ${esc5(r.policy.note)}` : "")) + (change ? `. ${sentenceHtml(change)}` : "")
   ]);
   const own = configurationNotes(r).filter((x) => x.file !== r.policy.path);
-  if (own.length) meta.push(["Configuration", own.map((x) => `${x.weakens ? "<strong>" : ""}${esc5(x.text)}${x.weakens ? "</strong>" : ""}`).join("<br>")]);
-  if (r.scope === "all") meta.push(["Scope", "every design in the repository, judged against thresholds only"]);
-  meta.push(["Mode", r.mode === "inform" ? "inform: failures are reported, the run does not fail" : "block: failures fail the check"]);
-  meta.push(["Seed", String(r.seed)]);
-  if (r.part) meta.push(["Part", `${r.part.index} of ${r.part.total}`]);
+  if (own.length)
+    rows.push([
+      "Configuration",
+      own.map((x) => `${x.weakens ? "<strong>" : ""}${esc5(x.text)}${x.weakens ? "</strong>" : ""}`).join("<br>")
+    ]);
+  if (r.scope === "all") rows.push(["Scope", "every design in the repository, judged against thresholds only"]);
+  rows.push([
+    "Mode",
+    r.mode === "inform" ? "inform: failures are reported, the run does not fail" : "block: failures fail the check"
+  ]);
+  rows.push(["Seed", String(r.seed)]);
+  if (r.part) rows.push(["Part", `${r.part.index} of ${r.part.total}`]);
   const counts = statusCounts(r).map(esc5).join(", ");
-  meta.push(["Designs", `${r.files.length}${counts ? ` (${counts})` : ""}`]);
-  return [
-    '<header class="mast">',
-    "<div>",
-    '<div class="brand" aria-hidden="true">netbrace</div>',
-    "<h1>Robustness report</h1>",
-    "</div>",
-    `<p class="verdict ${r.verdict}" role="status" data-verdict="${r.verdict}">${esc5(verdict)}</p>`,
-    "</header>",
-    `<dl class="meta">${meta.map(([k, v]) => `<dt>${esc5(k)}</dt><dd>${v}</dd>`).join("")}</dl>`
-  ].join("\n");
+  rows.push(["Designs", `${r.files.length}${counts ? ` (${counts})` : ""}`]);
+  return `<dl class="meta">${rows.map(([k, v]) => `<dt>${esc5(k)}</dt><dd>${v}</dd>`).join("")}</dl>`;
 }
-function contents(r) {
-  const items = r.files.map((f, i) => {
-    const tone = fileTone(f);
-    return `<li><a href="#design-${i}">${esc5(f.path)}</a> <span class="chip ${tone}">${esc5(toneWord(f))}</span></li>`;
-  });
-  return `<nav aria-label="Designs in this report"><h3>Designs</h3><ol>${items.join("")}</ol></nav>`;
+function contents(stories) {
+  const items = stories.map(
+    (d, i) => `<li><a href="#design-${i}">${esc5(d.file.path)}</a> <span class="outcome ${d.outcome}">${markHtml(d.mark)}${esc5(d.statusWord)}</span></li>`
+  );
+  return `<nav aria-label="Designs in this report"><h3>Designs, worst first</h3><ol>${items.join("")}</ol></nav>`;
 }
-var fileTone = (f) => fileFails(f) ? "fail" : fileWarns(f) ? "warn" : "pass";
-var toneWord = (f) => fileFails(f) ? "fail" : fileWarns(f) ? "pass, warnings" : "pass";
-function designSection(f, index) {
-  const tone = fileTone(f);
+function weakenedItem(x) {
+  const mark = x.severity === "fail" ? MARK.fail : x.severity === "warn" ? MARK.warn : MARK.notice;
+  const where = x.line > 0 ? ` <span class="line">line ${x.line}</span>` : "";
+  return `<li class="sev-${x.severity}" data-rule="${esc5(x.rule)}" data-severity="${x.severity}">${markHtml(mark)}<span class="title">${esc5(x.title)}</span> <span class="line">(${esc5(SEVERITY_WORD[x.severity])})</span>${where}<div>${sentenceHtml(x.sentence)}</div></li>`;
+}
+function designSection(d, index, readme) {
+  const f = d.file;
   const id = `design-${index}`;
   const out = [];
   out.push(
-    `<section class="design ${tone}" id="${id}" aria-labelledby="${id}-h" data-path="${esc5(f.path)}" data-status="${esc5(f.status)}" data-tone="${tone}">`
+    `<section class="design ${d.outcome}" id="${id}" aria-labelledby="${id}-h" data-path="${esc5(f.path)}" data-status="${esc5(f.status)}" data-outcome="${d.outcome}">`
   );
   out.push("<header>");
   out.push(`<h2 id="${id}-h">${esc5(f.path)}</h2>`);
-  out.push(`<span class="chip ${tone}">${esc5(toneWord(f))}</span>`);
-  out.push(`<span class="chip notice">${esc5(fileStatusWord(f))}</span>`);
+  out.push(`<p class="outcome ${d.outcome}">${markHtml(d.mark)}${esc5(d.statusWord)} — ${esc5(d.headline)}</p>`);
+  if (f.previousPath)
+    out.push(`<p class="facts">Renamed from <code>${esc5(f.previousPath)}</code>; compared with its old self.</p>`);
   out.push("</header>");
-  if (f.previousPath) out.push(`<p class="facts">Renamed from <code>${esc5(f.previousPath)}</code>; compared with its old self.</p>`);
-  if (f.error) {
+  out.push(`<div class="part consequences" data-part="consequences"><h3 id="${id}-weakened">What weakened</h3>`);
+  if (d.weakened.length) out.push(`<ul class="weakened">${d.weakened.map(weakenedItem).join("")}</ul>`);
+  else out.push(`<p class="facts">${esc5(numbersOnlyHtml(d))}</p>`);
+  out.push("</div>");
+  if (d.howMuch.length) {
     out.push(
-      `<p class="error">${fileStatusWord(f) === STATUS_WORD.unreadable ? "Could not be read" : "Could not be evaluated"}: <code>${esc5(f.path)}:${f.error.line || 1}:${f.error.column || 1}</code> ${esc5(f.error.message)}</p>`
+      `<div class="part numbers" data-part="numbers"><h3 id="${id}-how-much">How much</h3><ul class="how-much">`
+    );
+    for (const l of d.howMuch) {
+      const r = l.requirement;
+      const sev = r.status === "short" || r.status === "weakened" ? ` sev-${r.severity}` : "";
+      out.push(
+        `<li class="st-${r.status}${sev}" data-requirement="${esc5(r.id)}" data-status="${r.status}" data-base="${dataValue(r.base)}" data-head="${dataValue(r.head)}" data-delta="${dataValue(r.delta)}" data-se="${dataValue(r.se)}" data-threshold="${dataValue(r.threshold)}">${markHtml(l.mark)}${statusFirst(sentenceHtml(l.sentence))}</li>`
+      );
+    }
+    out.push("</ul>");
+    if (d.definitions.length) {
+      const defs = d.definitions.map(
+        (x) => `<dt>${esc5(x.term)}</dt><dd data-term="${esc5(x.term)}">${sentenceHtml(x.sentence)} <a href="${esc5(readme ?? `#${id}-about-${README_ANCHOR}`)}" class="more">More in the README</a></dd>`
+      );
+      out.push(`<dl class="definitions" aria-label="What these words mean">${defs.join("")}</dl>`);
+    }
+    out.push("</div>");
+  }
+  const detailAt = out.length;
+  if (f.head) out.push(`<p class="facts">${esc5(facts(f.head))}</p>`);
+  if (f.warnings?.length) {
+    const items = f.warnings.map(
+      (w) => `<li><code>${esc5(`${f.path}:${w.line || 1}:${w.column || 1}`)}</code> ${esc5(w.message)}${w.hint ? ` — ${esc5(w.hint)}` : ""}</li>`
+    );
+    out.push(
+      `<div class="facts design-warnings"><strong>What reading the design warned of:</strong><ul>${items.join("")}</ul></div>`
     );
   }
-  if (f.head) out.push(`<p class="facts">${esc5(facts(f.head))}</p>`);
   const notApplicable = describeNotApplicable(f.head);
-  if (notApplicable) out.push(`<p class="facts not-applicable"><strong>Not applicable to this design:</strong> ${esc5(notApplicable)}</p>`);
+  if (notApplicable)
+    out.push(
+      `<p class="facts not-applicable"><strong>Not applicable to this design:</strong> ${esc5(notApplicable)}</p>`
+    );
   const changed = describeChanges(f);
   const modified = describeModifications(f, 200);
   if (changed || modified.length) {
@@ -46257,22 +47769,32 @@ function designSection(f, index) {
   }
   if (f.head && f.head.envelopes.length) out.push(charts(f, id));
   out.push(mapHtml(f, id));
-  if (f.requirements.length) out.push(requirementTable(f.requirements, id));
-  const findings = groupFindings(bySeverity(f.findings.filter((x) => x.rule !== "weakest-sequence")));
-  const work = findings.filter((x) => x.severity !== "notice");
-  const notices = findings.filter((x) => x.severity === "notice");
-  if (findings.length) out.push("<h3>Findings</h3>");
-  if (work.length) out.push(`<ul class="findings">${work.map(findingItem).join("")}</ul>`);
-  if (notices.length) {
-    out.push(
-      `<details class="notices"><summary>${notices.length} notice${notices.length === 1 ? "" : "s"} (within allowances, or context)</summary><ul class="findings">${notices.map(findingItem).join("")}</ul></details>`
-    );
-  }
   out.push(weakest(f));
   out.push(structure(f));
+  if (d.notices.length) {
+    out.push(
+      `<details class="notices"><summary>${d.notices.length} notice${d.notices.length === 1 ? "" : "s"} (context, within allowances)</summary><ul class="weakened">${d.notices.map(weakenedItem).join("")}</ul></details>`
+    );
+  }
   out.push(mendHtml(f, id));
+  if (d.definitions.length && !readme) out.push(readmePointer(`${id}-about-${README_ANCHOR}`));
+  if (out.slice(detailAt).some(Boolean)) {
+    out.splice(detailAt, 0, `<div class="part detail" data-part="detail"><h3 id="${id}-detail">Detail</h3>`);
+    out.push("</div>");
+  }
   out.push("</section>");
   return out.filter(Boolean).join("\n");
+}
+function numbersOnlyHtml(d) {
+  const said = numbersOnly(d);
+  return said ? `${said.charAt(0).toUpperCase()}${said.slice(1)}.` : "Nothing weakened.";
+}
+function statusFirst(html) {
+  const i = html.indexOf(" · ");
+  return i > 0 ? `<span class="status">${html.slice(0, i)}</span>${html.slice(i)}` : html;
+}
+function readmePointer(anchor) {
+  return `<p class="facts" id="${anchor}">More on R, area, spread and ±: netbrace’s README, section “Reading the report” (<code>README.md#${esc5(README_ANCHOR)}</code>).</p>`;
 }
 function facts(ev) {
   const metrics2 = ev.r.metrics.map((m) => `${m.id} (weight ${m.weight})`).join(", ");
@@ -46314,49 +47836,19 @@ function chartData(chart, id) {
   });
   return `<details><summary>Chart data</summary><table id="${id}-data"><caption>${esc5(chart.title)}: values of R</caption><thead>${head}</thead><tbody>${rows.join("")}</tbody></table></details>`;
 }
-function requirementTable(rows, id) {
-  const body = rows.map((r) => {
-    const bad = r.status === "short" || r.status === "weakened";
-    const cls = `st-${r.status}${bad ? ` sev-${r.severity}` : ""}`;
-    return `<tr data-requirement="${esc5(r.id)}"><th scope="row">${esc5(r.description)}<div class="rule">${esc5(r.id)}</div></th><td>${esc5(r.severity)}</td><td class="num" data-field="base" data-value="${dataValue(r.base)}">${esc5(formatRequirementValue(r, r.base))}</td><td class="num" data-field="head" data-value="${dataValue(r.head)}">${esc5(formatRequirementValue(r, r.head))}</td><td class="num" data-field="delta" data-value="${dataValue(r.delta)}">${esc5(formatRequirementDelta(r))}${formatError(r.se) ? ` <span class="line" data-field="se" data-value="${dataValue(r.se)}">${esc5(formatError(r.se))}</span>` : ""}</td><td class="num" data-field="threshold" data-value="${dataValue(r.threshold)}">${esc5(formatRequirementValue(r, r.threshold))}</td><td class="${cls}" data-field="status">${esc5(REQUIREMENT_STATUS_WORD[r.status])}</td></tr>`;
-  });
-  const noise2 = rows.some((r) => r.status === "inside-error") ? '<p class="facts">Inside the error: the value dropped by less than its Monte Carlo error, which is never a failure.</p>' : "";
-  return [
-    "<h3>Requirements</h3>",
-    `<table class="requirements" id="${id}-requirements">`,
-    "<caption>Each requirement of the policy, base → head; Δ is the paired difference with its standard error.</caption>",
-    '<thead><tr><th scope="col">Requirement</th><th scope="col">Severity</th><th scope="col" class="num">Base</th><th scope="col" class="num">Head</th><th scope="col" class="num">Δ ± error</th><th scope="col" class="num">Threshold</th><th scope="col">Status</th></tr></thead>',
-    `<tbody>${body.join("")}</tbody>`,
-    "</table>",
-    noise2
-  ].join("\n");
-}
-var MAX_ELEMENTS = 8;
 function htmlElement(e) {
   const el = (x) => `<span class="el">${esc5(x)}</span>`;
   return formatElement(e, { id: el, text: el, meta: (x) => `<span class="line">${x}</span>` });
 }
-function elementList(elements) {
-  const shown2 = elements.slice(0, MAX_ELEMENTS).map(htmlElement);
-  const more = elements.length > MAX_ELEMENTS ? `, … ${elements.length - MAX_ELEMENTS} more` : "";
-  return shown2.join(", ") + more;
-}
 function costItem(c, subject) {
   return c ? `<p class="cost">${esc5(consequenceSentence(c, subject))}</p>` : "";
-}
-function findingItem(x) {
-  const where = x.line > 0 ? ` <span class="line">line ${x.line}${x.column ? `:${x.column}` : ""}</span>` : "";
-  const values = x.head !== void 0 && x.head !== null && !x.message.includes(formatValue(x.head)) ? ` <span class="line">(base ${esc5(formatValue(x.base))}, head ${esc5(formatValue(x.head))}${x.delta !== void 0 && x.delta !== null ? `, Δ ${esc5(`${formatDelta(x.delta)} ${formatError(x.se)}`.trim())}` : ""})</span>` : "";
-  const named2 = x.elements.length === 1 && x.message.includes(x.elements[0].id);
-  const els = x.elements.length && !named2 && !x.grouped ? `<div>${elementList(x.elements)}</div>` : "";
-  const members = x.grouped && x.members && x.members.length > 1 ? x.members.filter((m) => m.consequence) : [];
-  const cost = members.length ? `<ul class="costs">${members.map((m) => `<li>${htmlElement(m.elements[0])}: ${esc5(consequenceSentence(m.consequence, ""))}</li>`).join("")}</ul>` : costItem(x.consequence, "Losing it");
-  return `<li class="${x.severity}" data-rule="${esc5(x.rule)}"${x.status ? ` data-status="${esc5(x.status)}"` : ""}><span class="chip ${x.severity}">${esc5(x.severity)}</span> <span class="rule">${esc5(findingTitle(x, RULE_TITLE))}</span>${where}<div>${esc5(x.message)}${values}</div>${els}${cost}</li>`;
 }
 function weakest(f) {
   const known = knownElements(f);
   const items = weakestSequences2(f).map((s) => {
-    const steps = s.elements.map((e, i) => `<li>${htmlElement(e)}${s.values && s.values[i] !== void 0 ? ` — R ${esc5(formatValue(s.values[i]))}` : ""}</li>`).join("");
+    const steps = s.elements.map(
+      (e, i) => `<li>${htmlElement(e)}${s.values && s.values[i] !== void 0 ? ` — R ${esc5(formatValue(s.values[i]))}` : ""}</li>`
+    ).join("");
     return `<div class="sequence"><p>${esc5(s.title)}</p><ol class="seq">${steps}</ol>${costItem(s.consequence, "These removals")}</div>`;
   });
   for (const c of f.head?.contingencies ?? []) {
@@ -46364,7 +47856,7 @@ function weakest(f) {
     if (worst) {
       const what = worst.elements.map((id, i) => htmlElement(worst.located?.[i] ?? knownElement(known, c.kind, id))).join(" + ");
       items.push(
-        `<div class="sequence"><p>${esc5(contingencyLabel(c.challenge, c.kind))}: the ${esc5(c.challenge === "n-1" ? "single" : "double")} ${esc5(kindSingular(c.kind))} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): <span class="el">${esc5(what)}</span> leaves R ${esc5(formatValue(worst.value))}</p></div>`
+        `<div class="sequence"><p>${esc5(contingencyLabel(c.challenge, c.kind))}: the ${esc5(c.challenge === "n-1" ? "single" : "double")} ${esc5(kindSingular(c.kind))} loss that hurts most (${c.evaluated} of ${c.total} cases evaluated): ${what} leaves R ${esc5(formatValue(worst.value))}</p></div>`
       );
     }
   }
@@ -46373,7 +47865,9 @@ function weakest(f) {
 function structure(f) {
   const head = f.head?.structure;
   if (!head) return "";
-  const baseIds = new Set([...f.base?.structure.bridges ?? [], ...f.base?.structure.cutNodes ?? []].map((e) => e.id));
+  const baseIds = new Set(
+    [...f.base?.structure.bridges ?? [], ...f.base?.structure.cutNodes ?? []].map((e) => e.id)
+  );
   const row = (label, list) => {
     if (!list.length) return `<tr><th scope="row">${esc5(label)}</th><td>none</td></tr>`;
     const items = list.map((e) => {
@@ -46394,159 +47888,15 @@ function structure(f) {
   ].join("\n");
 }
 
-// src/decode.ts
-var EncodingError = class extends DesignError {
-  name = "EncodingError";
-};
-var HINT = "save the file as UTF-8";
-function sequenceLength(b, i) {
-  const c = b[i];
-  if (c < 128) return 1;
-  let need;
-  let lo = 128;
-  let hi = 191;
-  if (c >= 194 && c <= 223) need = 1;
-  else if (c === 224) [need, lo] = [2, 160];
-  else if (c === 237) [need, hi] = [2, 159];
-  else if (c >= 225 && c <= 239) need = 2;
-  else if (c === 240) [need, lo] = [3, 144];
-  else if (c === 244) [need, hi] = [3, 143];
-  else if (c >= 241 && c <= 243) need = 3;
-  else return 0;
-  if (i + need >= b.length) return 0;
-  const b1 = b[i + 1];
-  if (b1 < lo || b1 > hi) return 0;
-  for (let k = 2; k <= need; k++) {
-    const x = b[i + k];
-    if (x < 128 || x > 191) return 0;
-  }
-  return need + 1;
-}
-function firstInvalidUtf8(b, from = 0) {
-  for (let i = from; i < b.length; ) {
-    if (b[i] < 128) {
-      i++;
-      continue;
-    }
-    const len = sequenceLength(b, i);
-    if (len === 0) return i;
-    i += len;
-  }
-  return -1;
-}
-function guessEncoding(b) {
-  let stray = 0;
-  let c1 = false;
-  let utf8 = false;
-  for (let i = 0; i < b.length; ) {
-    if (b[i] < 128) {
-      i++;
-      continue;
-    }
-    const len = sequenceLength(b, i);
-    if (len > 0) {
-      utf8 = true;
-      i += len;
-      continue;
-    }
-    stray++;
-    if (b[i] <= 159) c1 = true;
-    i++;
-  }
-  const page = c1 ? "Windows-1252" : "Latin-1 (ISO 8859-1)";
-  return utf8 ? `it mixes UTF-8 with another encoding, which looks like ${page}` : `it looks like ${page}`;
-}
-function textPosition(text2, at) {
-  let line = 1;
-  let start = 0;
-  for (let i = text2.indexOf("\n"); i >= 0 && i < at; i = text2.indexOf("\n", i + 1)) {
-    line++;
-    start = i + 1;
-  }
-  return { line, column: at - start + 1 };
-}
-var utf8Decoder = new TextDecoder("utf-8", { fatal: true, ignoreBOM: true });
-function decodeUtf8(bytes, start, file) {
-  const bad = firstInvalidUtf8(bytes, start);
-  if (bad >= 0) {
-    let lineStart = bad;
-    let line = 1;
-    while (lineStart > start && bytes[lineStart - 1] !== 10) lineStart--;
-    for (let i = start; i < lineStart; i++) if (bytes[i] === 10) line++;
-    const column = utf8Decoder.decode(bytes.subarray(lineStart, bad)).length + 1;
-    const hex = bytes[bad].toString(16).toUpperCase().padStart(2, "0");
-    throw new EncodingError(
-      `not UTF-8: byte 0x${hex} at line ${line}, column ${column}; ${guessEncoding(bytes.subarray(start))}`,
-      { file, line, column },
-      HINT
-    );
-  }
-  return utf8Decoder.decode(bytes.subarray(start));
-}
-function decodeUtf16(bytes, littleEndian, file) {
-  const units = bytes.length - 2 >> 1;
-  const chunks = [];
-  const CHUNK = 8192;
-  const buf = new Array(CHUNK);
-  let decoded = "";
-  const fail = (message, unitIndex) => {
-    decoded = chunks.join("") + String.fromCharCode(...buf.slice(0, unitIndex % CHUNK));
-    throw new EncodingError(`not valid UTF-16: ${message}`, { file, ...textPosition(decoded, decoded.length) }, HINT);
-  };
-  for (let u = 0; u < units; u++) {
-    const p = 2 + 2 * u;
-    const code = littleEndian ? bytes[p] | bytes[p + 1] << 8 : bytes[p] << 8 | bytes[p + 1];
-    if (code >= 55296 && code <= 56319) {
-      const q = p + 2;
-      const next = q + 1 < bytes.length ? littleEndian ? bytes[q] | bytes[q + 1] << 8 : bytes[q] << 8 | bytes[q + 1] : -1;
-      if (!(next >= 56320 && next <= 57343)) fail(`a lone surrogate 0x${code.toString(16).toUpperCase()}`, u);
-    } else if (code >= 56320 && code <= 57343) {
-      const prev = u > 0 ? littleEndian ? bytes[p - 2] | bytes[p - 1] << 8 : bytes[p - 2] << 8 | bytes[p - 1] : -1;
-      if (!(prev >= 55296 && prev <= 56319)) fail(`a lone surrogate 0x${code.toString(16).toUpperCase()}`, u);
-    }
-    buf[u % CHUNK] = code;
-    if (u % CHUNK === CHUNK - 1) chunks.push(String.fromCharCode(...buf));
-  }
-  if (units % CHUNK !== 0) chunks.push(String.fromCharCode(...buf.slice(0, units % CHUNK)));
-  const text2 = chunks.join("");
-  if ((bytes.length & 1) === 1) {
-    throw new EncodingError("not valid UTF-16: the file ends in the middle of a character (an odd number of bytes)", { file, ...textPosition(text2, text2.length) }, HINT);
-  }
-  return text2;
-}
-function decodeText(bytes, file) {
-  let text2;
-  if (bytes[0] === 255 && bytes[1] === 254 && bytes[2] === 0 && bytes[3] === 0) {
-    throw new EncodingError("not UTF-8: the file starts with a UTF-32 byte-order mark", { file, line: 1, column: 1 }, HINT);
-  } else if (bytes[0] === 0 && bytes[1] === 0 && bytes[2] === 254 && bytes[3] === 255) {
-    throw new EncodingError("not UTF-8: the file starts with a UTF-32 byte-order mark", { file, line: 1, column: 1 }, HINT);
-  } else if (bytes[0] === 255 && bytes[1] === 254) {
-    text2 = decodeUtf16(bytes, true, file);
-  } else if (bytes[0] === 254 && bytes[1] === 255) {
-    text2 = decodeUtf16(bytes, false, file);
-  } else {
-    const bom = bytes[0] === 239 && bytes[1] === 187 && bytes[2] === 191 ? 3 : 0;
-    text2 = decodeUtf8(bytes, bom, file);
-  }
-  const nul = text2.indexOf("\0");
-  if (nul >= 0) {
-    const { line, column } = textPosition(text2, nul);
-    const sample2 = bytes.subarray(0, 4096);
-    let zeros = 0;
-    for (const x of sample2) if (x === 0) zeros++;
-    const looks = zeros * 4 >= sample2.length ? "it looks like UTF-16 without a byte-order mark" : "it looks like a binary file, not text";
-    throw new EncodingError(`not UTF-8 text: a NUL character at line ${line}, column ${column}; ${looks}`, { file, line, column }, HINT);
-  }
-  return text2;
-}
-
 // src/gate/budget.ts
 var PAIRING_ROUNDS = 8;
 function withBudget(spec, maxWork) {
   return { ...spec, challenges: spec.challenges.map((c) => ({ ...c })), budget: { maxWork } };
 }
 function shareBudget(specs, maxWork, graphs) {
-  const need = specs.map((spec) => Math.max(...graphs.map((g) => planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work)));
+  const need = specs.map(
+    (spec) => Math.max(...graphs.map((g) => planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work))
+  );
   const total = need.reduce((a, b) => a + b, 0);
   if (total <= maxWork) return specs.map(() => maxWork);
   return need.map((w) => Math.max(1, Math.floor(maxWork * w / total)));
@@ -46597,7 +47947,7 @@ function notePairedCuts(result, cuts, spec) {
   for (const cut of cuts) {
     if (cut.spec !== spec) continue;
     const env = result.evaluation.envelopes.find((e) => e.challenge === cut.challenge);
-    if (!env || env.realizations >= cut.from) continue;
+    if (!env || env.realizations >= cut.from || env.maxRealizations !== void 0) continue;
     const reason = `realizations reduced from ${cut.from} to ${env.realizations} by the work budget (${cut.maxWork} element visits), on base and head alike so that they stay paired`;
     const others = (env.degraded ?? "").split("; ").filter((part) => part !== "" && !part.startsWith("realizations reduced from"));
     env.degraded = [reason, ...others].join("; ");
@@ -46804,7 +48154,8 @@ function sameValue(a, i, b, j) {
 }
 function sameDesign(base, head, m) {
   if (base.n !== head.n || base.m !== head.m || base.groupIds.length !== head.groupIds.length) return false;
-  if (base.demandVolume.length !== head.demandVolume.length || !Object.is(base.latencyBudget, head.latencyBudget)) return false;
+  if (base.demandVolume.length !== head.demandVolume.length || !Object.is(base.latencyBudget, head.latencyBudget))
+    return false;
   for (let v = 0; v < base.n; v++) {
     const h = m.nodeToHead[v];
     if (h < 0 || base.nodeHardened[v] !== head.nodeHardened[h]) return false;
@@ -46812,7 +48163,8 @@ function sameDesign(base, head, m) {
   }
   const groupsOf2 = (g) => {
     const out = Array.from({ length: g.m }, () => []);
-    for (let k = 0; k < g.groupIds.length; k++) for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) out[g.groupLinks[p]].push(k);
+    for (let k = 0; k < g.groupIds.length; k++)
+      for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) out[g.groupLinks[p]].push(k);
     return out;
   };
   const bg = groupsOf2(base);
@@ -46823,7 +48175,8 @@ function sameDesign(base, head, m) {
     const a = [m.nodeToHead[base.linkSource[e]], m.nodeToHead[base.linkTarget[e]]].sort((x, y) => x - y);
     const b = [head.linkSource[f], head.linkTarget[f]].sort((x, y) => x - y);
     if (a[0] !== b[0] || a[1] !== b[1]) return false;
-    if (!sameValue(base.length, e, head.length, f) || !sameValue(base.latency, e, head.latency, f) || !sameValue(base.weight, e, head.weight, f)) return false;
+    if (!sameValue(base.length, e, head.length, f) || !sameValue(base.latency, e, head.latency, f) || !sameValue(base.weight, e, head.weight, f))
+      return false;
     const ga = bg[e].map((k) => m.groupToHead[k]).sort((x, y) => x - y);
     const gb = [...hg[f]].sort((x, y) => x - y);
     if (ga.length !== gb.length || ga.some((k, i) => k !== gb[i])) return false;
@@ -46911,7 +48264,9 @@ function withSequenceDetails(ev, g) {
     if (env.worstCase) out.worstCase = detailed(g, env.worstCase, intact);
     return out;
   });
-  const attacks = ev.attacks.map((a) => a.worstCase ? { ...a, worstCase: detailed(g, a.worstCase, intact) } : a);
+  const attacks = ev.attacks.map(
+    (a) => a.worstCase ? { ...a, worstCase: detailed(g, a.worstCase, intact) } : a
+  );
   const contingencies = ev.contingencies.map((c) => ({
     ...c,
     worst: c.worst.map((w) => ({ ...w, located: w.elements.map((id) => locateElement({ id, kind: c.kind }, g)) }))
@@ -46922,12 +48277,7 @@ function withSequenceDetails(ev, g) {
 // src/gate/describe.ts
 var WHAT = { nodes: "nodes", links: "links", "risk-groups": "risk groups", region: "region" };
 var MAX_DECIMALS = 12;
-function formatR(x, decimals = 3) {
-  if (!Number.isFinite(x)) return String(x);
-  const s = x.toFixed(decimals);
-  if (/^-0\.0+$/.test(s)) return s.slice(1);
-  return s.replace(/^-/, "−");
-}
+var formatR = formatFixed;
 function decidingDecimals(a, b, min = 3) {
   if (!Number.isFinite(a) || !Number.isFinite(b) || a === b) return min;
   for (let d = min; d <= MAX_DECIMALS; d++) if (formatR(a, d) !== formatR(b, d)) return d;
@@ -46946,18 +48296,13 @@ function changeDecimals(base, head, higherIsBetter, limit) {
   }
   return MAX_DECIMALS;
 }
-function formatDelta2(delta, se, decimals = 3) {
-  const sign2 = delta > 0 && formatR(delta, decimals) !== formatR(0, decimals) ? "+" : "";
-  const err = se !== null && se > 0 ? ` ± ${Number.isFinite(se) ? se.toFixed(decimals) : "unknown"}` : "";
-  return `${sign2}${formatR(delta, decimals)}${err}`;
-}
-function percent(x) {
+function percent2(x) {
   return `${Number((x * 100).toFixed(6))} %`;
 }
 function xWords(c, x) {
   if (!c) return String(x);
   if (c.remove === "region") return `radius ${x} km`;
-  return `${percent(x)} of ${WHAT[c.remove]} removed`;
+  return `${percent2(x)} of ${WHAT[c.remove]} removed`;
 }
 function challengeWords(c, name) {
   if (!c) return `"${name}"`;
@@ -46971,7 +48316,7 @@ function describeRequirement(r, challenges2) {
       const on = challengeWords(c, r.challenge);
       const s = r.statistic;
       if (s.kind === "worst-case") return `R after the worst ${s.removals} removals found, ${on} ≥ ${r.min}`;
-      const stat2 = s.kind === "quantile" ? `${percent(s.q)} quantile of R` : s.kind === "value" ? "R" : `${s.kind} of R`;
+      const stat2 = s.kind === "quantile" ? `${percent2(s.q)} quantile of R` : s.kind === "value" ? "R" : `${s.kind} of R`;
       return `${stat2} at ${xWords(c, r.at ?? 0)}, ${on} ≥ ${r.min}`;
     }
     case "area-floor":
@@ -46981,7 +48326,11 @@ function describeRequirement(r, challenges2) {
     case "n-1":
       return `N−1 (${r.element}s): R after any single ${r.element} removal ≥ ${r.min}`;
     case "no-new-spof": {
-      const parts = [r.bridges ? "bridges" : "", r.cutNodes ? "cut nodes" : "", r.riskGroups ? "shared-risk groups that strand sites" : ""].filter(Boolean);
+      const parts = [
+        r.bridges ? "bridges" : "",
+        r.cutNodes ? "cut nodes" : "",
+        r.riskGroups ? "shared-risk groups that strand sites" : ""
+      ].filter(Boolean);
       const what = parts.length > 1 ? `${parts.slice(0, -1).join(", ")} or ${parts[parts.length - 1]}` : parts[0];
       return `no new ${what}`;
     }
@@ -47001,7 +48350,10 @@ function elementChanges(base, head, m) {
   };
   const renamed = [
     ...m.renamedNodes.map(([b, h]) => ({ from: reportElement(base, "node", b), to: reportElement(head, "node", h) })),
-    ...m.renamedGroups.map(([b, h]) => ({ from: reportElement(base, "group", b), to: reportElement(head, "group", h) }))
+    ...m.renamedGroups.map(([b, h]) => ({
+      from: reportElement(base, "group", b),
+      to: reportElement(head, "group", h)
+    }))
   ];
   if (renamed.length) changes.renamed = renamed;
   const hardened = hardenedChanges(base, head, m);
@@ -47012,11 +48364,13 @@ function hardenedChanges(base, head, m) {
   const out = [];
   for (let v = 0; v < head.n; v++) {
     const b = m.nodeToBase[v];
-    if (b >= 0 && base.nodeHardened[b] !== head.nodeHardened[v]) out.push({ ...reportElement(head, "node", v), hardened: head.nodeHardened[v] === 1 });
+    if (b >= 0 && base.nodeHardened[b] !== head.nodeHardened[v])
+      out.push({ ...reportElement(head, "node", v), hardened: head.nodeHardened[v] === 1 });
   }
   for (let e = 0; e < head.m; e++) {
     const b = m.linkToBase[e];
-    if (b >= 0 && base.linkHardened[b] !== head.linkHardened[e]) out.push({ ...reportElement(head, "link", e), hardened: head.linkHardened[e] === 1 });
+    if (b >= 0 && base.linkHardened[b] !== head.linkHardened[e])
+      out.push({ ...reportElement(head, "link", e), hardened: head.linkHardened[e] === 1 });
   }
   return out.sort((a, b) => a.kind === b.kind ? a.line - b.line : a.kind === "node" ? -1 : 1);
 }
@@ -47064,7 +48418,16 @@ function attributeChanges(base, head) {
     for (const a of NODE_ATTRIBUTES) {
       const before = a.value(b);
       const after = a.value(h);
-      if (before !== after) modified.push({ id: h.id, kind: "node", attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
+      if (before !== after)
+        modified.push({
+          id: h.id,
+          kind: "node",
+          attribute: a.attribute,
+          before,
+          after,
+          baseLine: b.pos.line,
+          headLine: h.pos.line
+        });
     }
   }
   for (const h of head.links) {
@@ -47073,7 +48436,16 @@ function attributeChanges(base, head) {
     for (const a of LINK_ATTRIBUTES) {
       const before = a.value(b);
       const after = a.value(h);
-      if (before !== after) modified.push({ id: h.id, kind: "link", attribute: a.attribute, before, after, baseLine: b.pos.line, headLine: h.pos.line });
+      if (before !== after)
+        modified.push({
+          id: h.id,
+          kind: "link",
+          attribute: a.attribute,
+          before,
+          after,
+          baseLine: b.pos.line,
+          headLine: h.pos.line
+        });
     }
   }
   return modified;
@@ -47128,7 +48500,8 @@ function judgeSpof(r, description, head, base, matching) {
     delta: before ? sizeOf(now, part.kind) - sizeOf(before, part.kind) : null,
     se: before ? 0 : null,
     threshold: null,
-    status: "holds"
+    status: "holds",
+    subject: { kind: "no-new-spof", higherIsBetter: false }
   }));
   const findings = [];
   if (!base || !before || !matching) return { rows, findings };
@@ -47162,20 +48535,24 @@ function judgeSpof(r, description, head, base, matching) {
     for (const k of [...now.groups].sort((x, y) => x - y)) {
       if (!isNew(now.groups, matching.groupToBase, k, before.groups)) continue;
       const message = `${groupWords(g, k, true)} is a new single point of failure: losing it cuts sites off, which the base did not`;
-      findings.push(finding("new-stranding-group", r.severity, message, reportElement(g, "group", k), r.id, groupCost(k, true)));
+      findings.push(
+        finding("new-stranding-group", r.severity, message, reportElement(g, "group", k), r.id, groupCost(k, true))
+      );
     }
   }
   if (r.hardenedWeakPoints !== "ignore") {
     const severity = r.hardenedWeakPoints;
     const raw = weakPoints(g, false);
     const rawBefore = weakPoints(b, false);
-    const claim = "the change marks it hardened, so the gate does not count it; hardening is a claim the gate cannot check";
+    const claim = "the change marks it hardened, so netbrace does not count it; hardening is a claim netbrace cannot verify";
     if (r.bridges) {
       for (const e of linksByLine(g, raw.bridges)) {
         if (now.bridges.has(e) || !isNew(raw.bridges, matching.linkToBase, e, rawBefore.bridges)) continue;
         if (!newlyHardened(g.linkHardened, b.linkHardened, matching.linkToBase, e)) continue;
         const message = `${linkWords2(g, e)} would be a new bridge (losing it splits the design), but ${claim}`;
-        findings.push(finding("hardened-weak-point", severity, message, reportElement(g, "link", e), r.id, linkCost(e)));
+        findings.push(
+          finding("hardened-weak-point", severity, message, reportElement(g, "link", e), r.id, linkCost(e))
+        );
       }
     }
     if (r.cutNodes) {
@@ -47195,8 +48572,10 @@ function judgeSpof(r, description, head, base, matching) {
           if (newlyHardened(g.linkHardened, b.linkHardened, matching.linkToBase, g.groupLinks[p])) hidden = true;
         }
         if (!hidden) continue;
-        const message = `${groupWords(g, k, false)} would cut sites off if lost, but the change marks links of it hardened, so the gate does not count it; hardening is a claim the gate cannot check`;
-        findings.push(finding("hardened-weak-point", severity, message, reportElement(g, "group", k), r.id, groupCost(k, false)));
+        const message = `${groupWords(g, k, false)} would cut sites off if lost, but the change marks links of it hardened, so netbrace does not count it; hardening is a claim netbrace cannot verify`;
+        findings.push(
+          finding("hardened-weak-point", severity, message, reportElement(g, "group", k), r.id, groupCost(k, false))
+        );
       }
     }
   }
@@ -47224,8 +48603,126 @@ function judgeSpof(r, description, head, base, matching) {
   return { rows, findings };
 }
 
+// src/envelope/pairing.ts
+var BOOTSTRAP_ROUNDS = 400;
+function pairedStatistic(base, head, challenge, statistic, x) {
+  const envB = base.evaluation.envelopes.find((e) => e.challenge === challenge);
+  const envH = head.evaluation.envelopes.find((e) => e.challenge === challenge);
+  if (envB && envH) return pairedBand(base, head, envB, envH, statistic, x);
+  const atB = base.evaluation.attacks.find((a) => a.challenge === challenge);
+  const atH = head.evaluation.attacks.find((a) => a.challenge === challenge);
+  if (atB && atH) {
+    const value2 = (a) => {
+      if (statistic.kind === "area") return a.area;
+      if (statistic.kind === "spread") return 0;
+      if (x === void 0) throw new RangeError(`${challenge}: the ${statistic.kind} of an attack needs x`);
+      const count = a.count ?? a.values.length - 1;
+      const r = valueAtCount(a.values, countAt(x, count, count));
+      if (Number.isNaN(r)) throw new RangeError(`${challenge}: the attack stops before x = ${x}`);
+      return r;
+    };
+    return deterministic(value2(atB), value2(atH));
+  }
+  const cB = base.evaluation.contingencies.find((c) => c.challenge === challenge);
+  const cH = head.evaluation.contingencies.find((c) => c.challenge === challenge);
+  if (cB && cH) {
+    if (statistic.kind !== "min") throw new RangeError(`${challenge}: only the min of a contingency can be compared`);
+    return deterministic(cB.min, cH.min);
+  }
+  throw new RangeError(`challenge ${challenge} was not evaluated on both sides`);
+}
+function deterministic(base, head) {
+  return { base, head, delta: head - base, se: 0 };
+}
+function gridIndex2(env, x, what) {
+  if (x === void 0) throw new RangeError(`${env.challenge}: the ${what} needs x`);
+  const j = gridIndex(env.x, x);
+  if (j < 0)
+    throw new RangeError(
+      `${env.challenge}: x = ${x} is not a grid point (grid: ${env.x.join(", ")}); add it to the challenge's "at"`
+    );
+  return j;
+}
+function pairedBand(base, head, envB, envH, statistic, x) {
+  const sb = base.samples.get(envB.challenge);
+  const sh = head.samples.get(envH.challenge);
+  let jb = -1;
+  let jh = -1;
+  if (statistic.kind === "quantile" || statistic.kind === "mean" || statistic.kind === "min") {
+    jb = gridIndex2(envB, x, statistic.kind);
+    jh = gridIndex2(envH, x, statistic.kind);
+  } else if (envB.x.join() !== envH.x.join()) {
+    throw new RangeError(`${envB.challenge}: base and head grids differ; area and spread are not comparable`);
+  }
+  const band = envB.band;
+  const stat2 = (s, j) => {
+    switch (statistic.kind) {
+      case "quantile":
+        return quantileSorted(sortedColumn(s, j), statistic.q);
+      case "mean": {
+        let sum = 0;
+        for (let i = 0; i < s.length; i++) sum += s[i][j];
+        return sum / s.length;
+      }
+      case "min":
+        return sortedColumn(s, j)[0];
+      case "area":
+      case "spread": {
+        const points = s[0]?.length ?? 0;
+        const curve = new Float64Array(points);
+        for (let k = 0; k < points; k++) {
+          const col = sortedColumn(s, k);
+          curve[k] = statistic.kind === "area" ? quantileSorted(col, 0.5) : quantileSorted(col, band[1]) - quantileSorted(col, band[0]);
+        }
+        return gridMean(curve);
+      }
+    }
+  };
+  const b = stat2(sb, jb);
+  const h = stat2(sh, jh);
+  const pairs = [];
+  const lb = base.labels.get(envB.challenge);
+  const lh = head.labels.get(envH.challenge);
+  if (lb && lh) {
+    const where = new Map(lb.map((label, i) => [label, i]));
+    lh.forEach((label, i) => {
+      const k = where.get(label);
+      if (k !== void 0) pairs.push([k, i]);
+    });
+  } else {
+    for (let i = 0; i < Math.min(sb.length, sh.length); i++) pairs.push([i, i]);
+  }
+  const n = pairs.length;
+  if (n < 2) return { base: b, head: h, delta: h - b, se: Number.NaN };
+  if (statistic.kind === "mean") {
+    const d = pairs.map(([i, k]) => sh[k][jh] - sb[i][jb]);
+    const mean2 = d.reduce((s, v) => s + v, 0) / n;
+    const variance = d.reduce((s, v) => s + (v - mean2) ** 2, 0) / (n - 1);
+    return { base: b, head: h, delta: h - b, se: Math.sqrt(variance / n) };
+  }
+  const seedText = `${envB.challenge}|${JSON.stringify(statistic)}|${x ?? ""}`;
+  const rng = new Xoshiro128(hashString(seedText, 721013), 0);
+  const rb = new Array(n);
+  const rh = new Array(n);
+  let s1 = 0;
+  let s2 = 0;
+  for (let round = 0; round < BOOTSTRAP_ROUNDS; round++) {
+    for (let i = 0; i < n; i++) {
+      const [pb, ph] = pairs[rng.nextInt(n)];
+      rb[i] = sb[pb];
+      rh[i] = sh[ph];
+    }
+    const d = stat2(rh, jh) - stat2(rb, jb);
+    s1 += d;
+    s2 += d * d;
+  }
+  const mean = s1 / BOOTSTRAP_ROUNDS;
+  const se = Math.sqrt(Math.max(0, s2 / BOOTSTRAP_ROUNDS - mean * mean) * (BOOTSTRAP_ROUNDS / (BOOTSTRAP_ROUNDS - 1)));
+  return { base: b, head: h, delta: h - b, se };
+}
+
 // src/gate/measure.ts
-var MAX_ELEMENTS2 = 10;
+var MAX_ELEMENTS = 10;
 function locate(el, head, base) {
   return locateElement(el, head, base);
 }
@@ -47241,12 +48738,12 @@ function contingencyOf(side, element) {
 function removalsAt(g, kind, x) {
   return countAt(x, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
 }
-function sequenceElements(seq, count = MAX_ELEMENTS2) {
+function sequenceElements(seq, count = MAX_ELEMENTS) {
   if (!seq) return [];
-  return seq.elements.slice(0, Math.min(count, MAX_ELEMENTS2)).map((id) => ({ id, kind: seq.kind }));
+  return seq.elements.slice(0, Math.min(count, MAX_ELEMENTS)).map((id) => ({ id, kind: seq.kind }));
 }
-function gridIndex2(env, x) {
-  return env.x.findIndex((v) => Math.abs(v - x) <= 1e-9 * Math.max(1, Math.abs(x)));
+function gridIndex3(env, x) {
+  return gridIndex(env.x, x);
 }
 function statisticOf(req) {
   if (req.kind === "area-floor") return { kind: "area" };
@@ -47272,18 +48769,21 @@ function realizationsOf(env, c, g) {
 function reductionOf(c, head, env, base, baseEnv) {
   const h = realizationsOf(env, c, head.graph);
   const b = base && baseEnv ? realizationsOf(baseEnv, c, base.graph) : void 0;
-  const headCut = h.ran < h.asked;
-  const baseCut = b !== void 0 && b.ran < b.asked;
+  const headCut = env.maxRealizations === void 0 && h.ran < h.asked;
+  const baseCut = b !== void 0 && baseEnv.maxRealizations === void 0 && b.ran < b.asked;
   if (!headCut && !baseCut) return {};
   const out = {};
   if (b === void 0) out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations`;
-  else if (h.ran === b.ran && h.asked === b.asked) out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on head and base`;
-  else out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on the head and ${b.ran} of ${b.asked} on the base`;
+  else if (h.ran === b.ran && h.asked === b.asked)
+    out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on head and base`;
+  else
+    out.reduced = `the work budget left ${h.ran} of the ${h.asked} realizations on the head and ${b.ran} of ${b.asked} on the base`;
   if (b !== void 0 && base.result !== head.result) {
     const lh = head.result.labels.get(c.engine);
     const lb = base.result.labels.get(c.engine);
     const sameLabels = lh === void 0 || lb === void 0 || lh.length === lb.length && lh.every((l, i) => l === lb[i]);
-    if (h.ran !== b.ran) out.unpaired = `the budget cut base and head to different numbers of realizations (${b.ran} and ${h.ran}), so they do not pair`;
+    if (h.ran !== b.ran)
+      out.unpaired = `the budget cut base and head to different numbers of realizations (${b.ran} and ${h.ran}), so they do not pair`;
     else if (!sameLabels) out.unpaired = "the budget cut base and head to different epicentres, so they do not pair";
   }
   return out;
@@ -47298,7 +48798,16 @@ function ownSe(head, env, stat2, x) {
   return pairedStatistic(zero, head, env.challenge, stat2, x).se;
 }
 function missing(reason, higherIsBetter = true, base = null, notApplicable = false) {
-  return { base, head: null, delta: null, se: null, higherIsBetter, elements: [], missing: reason, ...notApplicable ? { notApplicable } : {} };
+  return {
+    base,
+    head: null,
+    delta: null,
+    se: null,
+    higherIsBetter,
+    elements: [],
+    missing: reason,
+    ...notApplicable ? { notApplicable } : {}
+  };
 }
 function didNotRun(side, c) {
   const why = notApplicableReason(side, c);
@@ -47313,8 +48822,12 @@ function deterministic2(req, c, side) {
     if (!cont) return `the N−1 evaluation of ${req.element}s did not run`;
     if (cont.evaluated === 0) return `the design has no ${req.element} that can fail`;
     const worst = cont.worst[0];
-    const out = { value: cont.min, elements: worst ? worst.elements.map((id) => ({ id, kind: cont.kind })) : [] };
-    if (cont.evaluated < cont.total) out.incomplete = `only ${cont.evaluated} of ${cont.total} single ${req.element} losses were evaluated (work budget)`;
+    const out = {
+      value: cont.min,
+      elements: worst ? worst.elements.map((id) => ({ id, kind: cont.kind })) : []
+    };
+    if (cont.evaluated < cont.total)
+      out.incomplete = `only ${cont.evaluated} of ${cont.total} single ${req.element} losses were evaluated (work budget)`;
     return out;
   }
   if (!c) return "no challenge";
@@ -47326,17 +48839,25 @@ function deterministic2(req, c, side) {
     const i = wc.steps ? wc.steps.indexOf(k2) : k2 - 1;
     if (i < 0 || i >= wc.values.length) return `the worst-case search of "${c.name}" stopped before ${k2} removals`;
     const out = { value: wc.values[i], elements: sequenceElements(wc, k2) };
-    if (k2 <= 2 && wc.method !== "exact") out.incomplete = `the worst case was searched greedily, not exhaustively (work budget), so the true worst case may be lower`;
+    if (k2 <= 2 && wc.method !== "exact")
+      out.incomplete = `the worst case was searched greedily, not exhaustively (work budget), so the true worst case may be lower`;
     return out;
   }
   const curve = attackOf(side, c);
   if (!curve) return didNotRun(side, c);
-  if (req.kind === "area-floor") return { value: curve.area, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }) };
+  if (req.kind === "area-floor")
+    return {
+      value: curve.area,
+      elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] })
+    };
   const t = req;
   const k = removalsAt(side.graph, curve.kind, t.at ?? 0);
   const value2 = valueAtCount(curve.values, k);
   if (Number.isNaN(value2)) return `the attack "${c.name}" ends before ${t.at}`;
-  return { value: value2, elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, Math.ceil(k)) };
+  return {
+    value: value2,
+    elements: sequenceElements({ kind: curve.kind, elements: curve.sequence, values: [] }, Math.ceil(k))
+  };
 }
 function measure(req, challenges2, head, base) {
   const c = "challenge" in req ? challenges2.find((x) => x.name === req.challenge) : void 0;
@@ -47347,10 +48868,10 @@ function measure(req, challenges2, head, base) {
     const x = req.kind === "r-threshold" ? req.at : void 0;
     const baseEnv = base ? envelopeOf(base, c) : void 0;
     if (!env) {
-      const baseValue = baseEnv && base.result !== head.result && (x === void 0 || gridIndex2(baseEnv, x) >= 0) ? pairedStatistic(base.result, base.result, c.engine, stat2, x).base : null;
+      const baseValue = baseEnv && base.result !== head.result && (x === void 0 || gridIndex3(baseEnv, x) >= 0) ? pairedStatistic(base.result, base.result, c.engine, stat2, x).base : null;
       return missing(didNotRun(head, c), higherIsBetter, baseValue, notApplicableReason(head, c) !== void 0);
     }
-    const j = x === void 0 ? -1 : gridIndex2(env, x);
+    const j = x === void 0 ? -1 : gridIndex3(env, x);
     if (x !== void 0 && j < 0) return missing(`${x} is not on the grid of "${c.name}"`, higherIsBetter);
     const same2 = base !== void 0 && base.result === head.result;
     const p = pairedStatistic(baseEnv ? base.result : head.result, head.result, c.engine, stat2, x);
@@ -47360,7 +48881,10 @@ function measure(req, challenges2, head, base) {
       delta: baseEnv ? same2 ? 0 : p.delta : null,
       se: baseEnv ? same2 ? 0 : p.se : null,
       higherIsBetter,
-      elements: sequenceElements(env.weakest[0], x === void 0 ? MAX_ELEMENTS2 : Math.ceil(removalsAt(head.graph, env.kind, x)))
+      elements: sequenceElements(
+        env.weakest[0],
+        x === void 0 ? MAX_ELEMENTS : Math.ceil(removalsAt(head.graph, env.kind, x))
+      )
     };
     if (stat2.kind === "quantile" && j >= 0) {
       const band = env.quantiles[quantileKey(stat2.q)];
@@ -47380,7 +48904,13 @@ function measure(req, challenges2, head, base) {
   const h = deterministic2(req, c, head);
   const b = base ? deterministic2(req, c, base) : void 0;
   const bv = b !== void 0 && typeof b !== "string" ? b.value : null;
-  if (typeof h === "string") return missing(h, higherIsBetter, base !== void 0 && base.result !== head.result ? bv : null, notApplicableReason(head, c) !== void 0);
+  if (typeof h === "string")
+    return missing(
+      h,
+      higherIsBetter,
+      base !== void 0 && base.result !== head.result ? bv : null,
+      notApplicableReason(head, c) !== void 0
+    );
   const same = base !== void 0 && base.result === head.result;
   return {
     base: bv,
@@ -47393,8 +48923,128 @@ function measure(req, challenges2, head, base) {
   };
 }
 
+// src/envelope/confidence-sequence.ts
+var TIGHT_AT = 64;
+function mixingPrecision(alpha, v = TIGHT_AT / 4) {
+  const l = Math.log(1 / alpha);
+  return v / (2 * l + Math.log(1 + 2 * l));
+}
+function mixtureBoundary(v, alpha, rho = mixingPrecision(alpha)) {
+  if (!(alpha > 0 && alpha < 1)) throw new RangeError(`alpha must be in (0, 1), got ${alpha}`);
+  return Math.sqrt((v + rho) * Math.log((v + rho) / (rho * alpha * alpha)));
+}
+function meanRadius(t, alpha) {
+  if (t <= 0) return Infinity;
+  return mixtureBoundary(t / 4, alpha) / t;
+}
+function meanBounds(values, alpha) {
+  const t = values.length;
+  if (t === 0) return { lo: 0, hi: 1 };
+  let sum = 0;
+  for (let i = 0; i < t; i++) sum += values[i];
+  const r = meanRadius(t, alpha);
+  return { lo: Math.max(0, sum / t - r), hi: Math.min(1, sum / t + r) };
+}
+function quantileBounds(sorted, p, alpha) {
+  const t = sorted.length;
+  const r = meanRadius(t, alpha);
+  const kLo = Math.ceil(t * (p - r) - 1e-12);
+  const kHi = Math.floor(t * (p + r) + 1e-12) + 1;
+  return { lo: kLo >= 1 ? sorted[kLo - 1] : 0, hi: kHi <= t ? sorted[kHi - 1] : 1 };
+}
+
+// src/gate/decide.ts
+var DECISION_ALPHA = 0.05;
+function statOf(r) {
+  if (r.kind === "area-floor") return { kind: "area" };
+  if (r.kind === "spread-ceiling") return { kind: "spread" };
+  if (r.kind !== "r-threshold" || r.at === void 0) return void 0;
+  const s = r.statistic;
+  if (s.kind === "quantile") return { kind: "quantile", q: s.q, x: r.at };
+  if (s.kind === "median") return { kind: "quantile", q: 0.5, x: r.at };
+  if (s.kind === "mean") return { kind: "mean", x: r.at };
+  if (s.kind === "min") return { kind: "min", x: r.at };
+  return void 0;
+}
+function sideBounds(stat2, env, samples, alpha) {
+  const points = env.x.length;
+  if (stat2.kind === "area" || stat2.kind === "spread") {
+    const k = points - 1;
+    if (k < 1) return void 0;
+    let lo = 0;
+    let hi = 0;
+    for (let j2 = 1; j2 < points; j2++) {
+      const col2 = sortedColumn(samples, j2);
+      if (stat2.kind === "area") {
+        const b = quantileBounds(col2, 0.5, alpha / k);
+        lo += b.lo;
+        hi += b.hi;
+      } else {
+        const a = quantileBounds(col2, env.band[0], alpha / (2 * k));
+        const b = quantileBounds(col2, env.band[1], alpha / (2 * k));
+        lo += Math.max(0, b.lo - a.hi);
+        hi += b.hi - a.lo;
+      }
+    }
+    return { lo: lo / k, hi: hi / k };
+  }
+  const j = gridIndex(env.x, stat2.x);
+  if (j < 0) return void 0;
+  const col = sortedColumn(samples, j);
+  if (stat2.kind === "quantile") return quantileBounds(col, stat2.q, alpha);
+  if (stat2.kind === "mean") return meanBounds(col, alpha);
+  return { lo: 0, hi: col.length ? col[0] : 1 };
+}
+function allowanceOf(weakening, base) {
+  return Math.max(weakening.allowedDrop ?? 0, (weakening.allowedRelativeDrop ?? 0) * Math.abs(base));
+}
+function decide(input) {
+  const { requirement: r, challenge: c } = input;
+  if (!c?.random) return void 0;
+  const stat2 = statOf(r);
+  if (!stat2) return void 0;
+  const env = input.head.evaluation.envelopes.find((e) => e.challenge === c.engine);
+  const samples = input.head.samples.get(c.engine);
+  if (!env || !samples) return void 0;
+  const head = sideBounds(stat2, env, samples, DECISION_ALPHA);
+  if (!head) return void 0;
+  const out = { head };
+  if (stat2.kind === "min") out.needsAll = true;
+  const t = input.threshold;
+  if (t !== null) {
+    const clear = input.higherIsBetter ? head.lo >= t : head.hi <= t;
+    const missed = input.higherIsBetter ? head.hi < t : head.lo > t;
+    out.floor = missed ? "below" : clear && stat2.kind !== "min" ? "above" : "open";
+  }
+  const base = input.base;
+  if (base && input.baseValue !== null) {
+    const baseEnv = base.evaluation.envelopes.find((e) => e.challenge === c.engine);
+    const baseSamples = base.samples.get(c.engine);
+    if (base === input.head) out.delta = { lo: 0, hi: 0 };
+    else if (baseEnv && baseSamples && stat2.kind !== "min") {
+      const h = sideBounds(stat2, env, samples, DECISION_ALPHA / 2);
+      const b = sideBounds(stat2, baseEnv, baseSamples, DECISION_ALPHA / 2);
+      if (h && b) out.delta = { lo: h.lo - b.hi, hi: h.hi - b.lo };
+    }
+    if (out.delta) {
+      const allowance = allowanceOf(input.weakening, input.baseValue);
+      const drop = input.higherIsBetter ? { lo: -out.delta.hi, hi: -out.delta.lo } : out.delta;
+      out.weakening = drop.lo > allowance ? "beyond" : drop.hi <= allowance ? "within" : "open";
+    } else out.weakening = "open";
+  }
+  return out;
+}
+function isOpen(d) {
+  return d.floor === "open" || d.weakening === "open";
+}
+
 // src/gate/compare.ts
-var SPOF_RULES = /* @__PURE__ */ new Set(["new-bridge", "new-cut-node", "new-stranding-group", "hardened-weak-point"]);
+var SPOF_RULES = /* @__PURE__ */ new Set([
+  "new-bridge",
+  "new-cut-node",
+  "new-stranding-group",
+  "hardened-weak-point"
+]);
 var SAME = 1e-12;
 var REDUCED_MARGIN_SE = 2;
 var GRAVITY = { fail: 0, warn: 1, notice: 2 };
@@ -47419,6 +49069,27 @@ function finding2(rule, severity, message, elements, extra = {}) {
 }
 function numbers(m) {
   return { base: m.base, head: m.head, delta: m.delta, se: m.se };
+}
+function subjectOf(r, challenges2, higherIsBetter) {
+  const subject = { kind: r.kind, higherIsBetter };
+  if (r.kind === "n-1") {
+    subject.remove = r.element === "node" ? "nodes" : "links";
+    return subject;
+  }
+  if (!("challenge" in r)) return subject;
+  subject.challenge = r.challenge;
+  const c = challenges2.find((x) => x.name === r.challenge);
+  if (c) {
+    subject.remove = c.remove;
+    subject.order = c.random ? "random" : c.order;
+    if (c.adaptive) subject.adaptive = true;
+  }
+  if (r.kind === "r-threshold") {
+    if (r.at !== void 0) subject.at = r.at;
+    const st = r.statistic;
+    subject.statistic = st.kind === "quantile" ? { kind: "quantile", q: st.q } : st.kind === "worst-case" ? { kind: "worst-case", removals: st.removals } : { kind: st.kind };
+  }
+  return subject;
 }
 function floorOf(r) {
   if (r.kind === "spread-ceiling") return r.max;
@@ -47445,74 +49116,40 @@ function classifyDrop(drop, allowance, noise2, reduced) {
   if (drop <= allowance) return "within-allowance";
   return "weakened";
 }
-function judge(r, input, description) {
-  const head = input.head;
-  const comparing = !input.thresholdsOnly && input.base !== void 0;
-  const m = measure(r, input.policy.challenges, head, comparing ? input.base : void 0);
-  const threshold = floorOf(r);
-  const row = {
-    id: r.id,
-    description,
-    severity: r.severity,
-    base: m.base,
-    head: m.head,
-    delta: m.delta,
-    se: m.se,
-    threshold,
-    status: "holds"
-  };
+function judgeFloor(j) {
+  const { r, m, headValue, description, threshold, rule, elements, extra } = j;
+  let status = "holds";
   const findings = [];
-  const elements = elementsOf(m.elements, head, input.base);
-  const rule = THRESHOLD_RULE[r.kind];
-  const extra = { requirement: r.id, ...numbers(m), ...threshold !== null ? { threshold } : {} };
-  const result = () => ({ rows: [row], findings });
-  if (m.missing !== void 0 || m.head === null) {
-    const why = m.missing ?? "no value";
-    if (m.base !== null) {
-      row.status = "short";
-      findings.push(
-        finding2(rule, r.severity, `${description}: the head can no longer be judged, though the base could (${formatR(m.base)}): ${why}`, [], {
-          ...extra,
-          status: "short"
-        })
-      );
-    } else if (m.notApplicable && threshold === null) {
-      row.status = "not-applicable";
-    } else {
-      row.status = "unsettled";
-      findings.push(finding2(rule, unsettledSeverity(r.severity), `${description}: could not be judged: ${why}`, [], { ...extra, status: "unsettled" }));
-    }
-    return result();
-  }
-  const broken = notFinite(m);
-  if (broken !== void 0) {
-    row.status = "unsettled";
-    findings.push(
-      finding2("not-computable", "fail", `${description}: ${broken}; a value that cannot be computed is never a pass`, elements, {
-        ...extra,
-        status: "not-computable"
-      })
-    );
-    return result();
-  }
-  const headValue = m.head;
   const meets = (v, limit) => m.higherIsBetter ? v >= limit : v <= limit;
   const limitWord = m.higherIsBetter ? "floor" : "ceiling";
   const against = (v, limit) => formatR(v, decidingDecimals(v, limit));
   if (threshold !== null && !meets(headValue, threshold)) {
-    row.status = "short";
+    status = "short";
     const relation = m.higherIsBetter ? "is below" : "is above";
-    findings.push(finding2(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, { ...extra, status: "short" }));
-  } else if (threshold !== null && m.incomplete !== void 0) {
-    row.status = "unsettled";
+    const d = decidingDecimals(headValue, threshold);
     findings.push(
-      finding2(rule, unsettledSeverity(r.severity), `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`, elements, {
+      finding2(rule, r.severity, `${description}: ${against(headValue, threshold)} ${relation} ${threshold}`, elements, {
         ...extra,
-        status: "unsettled"
+        status: "short",
+        ...d > 3 ? { decimals: d } : {}
       })
     );
+  } else if (threshold !== null && m.incomplete !== void 0) {
+    status = "unsettled";
+    findings.push(
+      finding2(
+        rule,
+        unsettledSeverity(r.severity),
+        `${description}: ${against(headValue, threshold)} meets it, but ${m.incomplete}`,
+        elements,
+        {
+          ...extra,
+          status: "unsettled"
+        }
+      )
+    );
   } else if (threshold !== null && m.lo !== void 0 && m.hi !== void 0 && !meets(m.higherIsBetter ? m.lo : m.hi, threshold)) {
-    row.status = "unsettled";
+    status = "unsettled";
     const edge = m.higherIsBetter ? m.lo : m.hi;
     const cut = m.reduced !== void 0 ? `; ${m.reduced}` : "";
     const d = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
@@ -47526,7 +49163,7 @@ function judge(r, input, description) {
       )
     );
   } else if (threshold !== null && m.headSe !== void 0 && r.kind === "r-threshold" && r.statistic.kind === "min") {
-    row.status = "unsettled";
+    status = "unsettled";
     findings.push(
       finding2(
         rule,
@@ -47540,7 +49177,7 @@ function judge(r, input, description) {
     const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
     const needed = REDUCED_MARGIN_SE * m.headSe;
     if (!(margin > needed)) {
-      row.status = "unsettled";
+      status = "unsettled";
       const d = decidingDecimals(margin, needed);
       const se = Number.isFinite(m.headSe) ? formatR(m.headSe, d) : "unknown";
       findings.push(
@@ -47554,10 +49191,15 @@ function judge(r, input, description) {
       );
     }
   }
-  const policyRule = input.policy.weakening;
+  return { status, findings };
+}
+function judgeWeakening(j, policyRule, floorStatus) {
+  const { r, m, headValue, description, elements, extra } = j;
+  let status = floorStatus;
+  const findings = [];
   const regressionSeverity = milder(policyRule.severity, r.severity);
   if (m.base !== null && m.delta !== null && m.se !== null && m.unpaired !== void 0) {
-    if (row.status === "holds") row.status = "unsettled";
+    if (status === "holds") status = "unsettled";
     findings.push(
       finding2(
         "regression",
@@ -47578,16 +49220,24 @@ function judge(r, input, description) {
       const digits = (limit) => changeDecimals(base, headValue, m.higherIsBetter, limit);
       const d = outcome === "inside-error" ? digits(noise2) : reduced ? Math.max(digits(allowance), digits(outcome === "weakened" ? allowance + noise2 : allowance - noise2)) : digits(allowance);
       const verb = m.higherIsBetter ? "dropped" : "rose";
-      const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (Δ ${formatDelta2(m.delta, m.se, d)})`;
+      const change = `${verb} from ${formatR(base, d)} to ${formatR(headValue, d)} (Δ ${formatDelta(m.delta, m.se, d)})`;
       const allowed = formatR(allowance, d);
       const k = policyRule.errorMultiple;
-      const data = { ...extra, allowance, status: outcome };
+      const data = { ...extra, allowance, status: outcome, ...d > 3 ? { decimals: d } : {} };
       if (outcome === "weakened") {
-        if (row.status !== "short") row.status = "weakened";
+        if (status !== "short") status = "weakened";
         const beyond = reduced ? ` by more than ${k} × its error; ${m.reduced}` : "";
-        findings.push(finding2("regression", regressionSeverity, `${description}: ${change}, more than the allowed ${allowed}${beyond}`, elements, data));
+        findings.push(
+          finding2(
+            "regression",
+            regressionSeverity,
+            `${description}: ${change}, more than the allowed ${allowed}${beyond}`,
+            elements,
+            data
+          )
+        );
       } else if (outcome === "unsettled") {
-        if (row.status === "holds") row.status = "unsettled";
+        if (status === "holds") status = "unsettled";
         findings.push(
           finding2(
             "regression",
@@ -47598,21 +49248,243 @@ function judge(r, input, description) {
           )
         );
       } else if (outcome === "inside-error") {
-        if (row.status === "holds") row.status = "inside-error";
+        if (status === "holds") status = "inside-error";
         findings.push(
-          finding2("regression", "notice", `${description}: ${change}, less than ${k} × its Monte Carlo error (${formatR(noise2, d)}): inside the error, not a failure`, elements, data)
+          finding2(
+            "regression",
+            "notice",
+            `${description}: ${change}, less than ${k} × its Monte Carlo error (${formatR(noise2, d)}): inside the error, not a failure`,
+            elements,
+            data
+          )
         );
       } else {
         const margin = reduced ? ` by more than ${k} × its error; ${m.reduced}` : "";
-        findings.push(finding2("regression", "notice", `${description}: ${change}, within the allowed ${allowed}${margin}`, elements, data));
+        findings.push(
+          finding2(
+            "regression",
+            "notice",
+            `${description}: ${change}, within the allowed ${allowed}${margin}`,
+            elements,
+            data
+          )
+        );
       }
     }
   }
+  return { status, findings };
+}
+function judge(r, input, description) {
+  const head = input.head;
+  const comparing = !input.thresholdsOnly && input.base !== void 0;
+  const m = measure(r, input.policy.challenges, head, comparing ? input.base : void 0);
+  const threshold = floorOf(r);
+  const row = {
+    id: r.id,
+    description,
+    severity: r.severity,
+    base: m.base,
+    head: m.head,
+    delta: m.delta,
+    se: m.se,
+    threshold,
+    status: "holds",
+    subject: subjectOf(r, input.policy.challenges, m.higherIsBetter)
+  };
+  const findings = [];
+  const decision = m.missing === void 0 && m.head !== null ? sequentialDecision(r, input, m, threshold) : void 0;
+  if (decision) {
+    const needed = head.result.sequential.needed.get(r.id);
+    if (needed !== void 0) row.realizations = needed;
+    row.bounds = { head: decision.head, ...decision.delta ? { delta: decision.delta } : {} };
+  }
+  const byCs = decision !== void 0 && !decision.needsAll;
+  const elements = elementsOf(m.elements, head, input.base);
+  const rule = THRESHOLD_RULE[r.kind];
+  const extra = { requirement: r.id, ...numbers(m), ...threshold !== null ? { threshold } : {} };
+  const result = () => ({ rows: [row], findings });
+  if (m.missing !== void 0 || m.head === null) {
+    const why = m.missing ?? "no value";
+    if (m.base !== null) {
+      row.status = "short";
+      findings.push(
+        finding2(
+          rule,
+          r.severity,
+          `${description}: the head can no longer be judged, though the base could (${formatR(m.base)}): ${why}`,
+          [],
+          {
+            ...extra,
+            status: "short"
+          }
+        )
+      );
+    } else if (m.notApplicable && threshold === null) {
+      row.status = "not-applicable";
+    } else {
+      row.status = "unsettled";
+      findings.push(
+        finding2(rule, unsettledSeverity(r.severity), `${description}: could not be judged: ${why}`, [], {
+          ...extra,
+          status: "unsettled"
+        })
+      );
+    }
+    return result();
+  }
+  const broken = notFinite(m);
+  if (broken !== void 0) {
+    row.status = "unsettled";
+    findings.push(
+      finding2(
+        "not-computable",
+        "fail",
+        `${description}: ${broken}; a value that cannot be computed is never a pass`,
+        elements,
+        {
+          ...extra,
+          status: "not-computable"
+        }
+      )
+    );
+    return result();
+  }
+  const j = { r, m, headValue: m.head, description, threshold, rule, elements, extra };
+  const floor = byCs && threshold !== null ? judgeFloorByCs(j, decision, ranOf(input, r)) : judgeFloor(j);
+  const paired = m.base !== null && m.delta !== null && m.se !== null && m.unpaired === void 0;
+  const weakening = byCs && paired && decision.weakening !== void 0 ? judgeWeakeningByCs(m, decision, {
+    description,
+    elements,
+    extra,
+    status: floor.status,
+    severity: milder(input.policy.weakening.severity, r.severity),
+    policy: input.policy,
+    ran: ranOf(input, r)
+  }) : judgeWeakening(j, input.policy.weakening, floor.status);
+  row.status = weakening.status;
+  findings.push(...floor.findings, ...weakening.findings);
+  const decimals = Math.max(3, ...findings.map((f) => f.decimals ?? 3));
+  if (decimals > 3) row.decimals = decimals;
   const reducedWork = m.reduced ?? m.incomplete;
   if (reducedWork !== void 0 && !findings.some((f) => f.message.includes(reducedWork))) {
-    findings.push(finding2(rule, "notice", `${description}: judged on reduced work, ${reducedWork}`, [], { requirement: r.id, status: "reduced-work", line: 0 }));
+    findings.push(
+      finding2(rule, "notice", `${description}: judged on reduced work, ${reducedWork}`, [], {
+        requirement: r.id,
+        status: "reduced-work",
+        line: 0
+      })
+    );
   }
   return result();
+}
+function sequentialDecision(r, input, m, threshold) {
+  const head = input.head;
+  if (!head.result.sequential) return void 0;
+  const comparing = !input.thresholdsOnly && input.base !== void 0 && m.base !== null && m.unpaired === void 0;
+  const challenge = "challenge" in r ? input.policy.challenges.find((x) => x.name === r.challenge) : void 0;
+  return decide({
+    requirement: r,
+    challenge,
+    head: head.result,
+    ...comparing ? { base: input.base.result } : {},
+    weakening: input.policy.weakening,
+    baseValue: comparing ? m.base : null,
+    threshold,
+    higherIsBetter: m.higherIsBetter
+  });
+}
+function ranOf(input, r) {
+  const c = "challenge" in r ? input.policy.challenges.find((x) => x.name === r.challenge) : void 0;
+  return input.head.result.evaluation.envelopes.find((e) => e.challenge === c?.engine)?.realizations ?? 0;
+}
+function judgeFloorByCs(j, d, ran) {
+  const { r, m, headValue, description, threshold, rule, elements, extra } = j;
+  const meets = m.higherIsBetter ? headValue >= threshold : headValue <= threshold;
+  if (!meets || d.needsAll) return judgeFloor(j);
+  if (d.floor !== "open") return { status: "holds", findings: [] };
+  const edge = m.higherIsBetter ? d.head.lo : d.head.hi;
+  const dd = Math.max(decidingDecimals(headValue, threshold), decidingDecimals(edge, threshold));
+  const cut = m.reduced !== void 0 ? `; ${m.reduced}` : "";
+  return {
+    status: "unsettled",
+    findings: [
+      finding2(
+        rule,
+        unsettledSeverity(r.severity),
+        `${description}: ${formatR(headValue, dd)} meets it, but after ${ran} realizations its confidence sequence still reaches ${formatR(edge, dd)}, so it is not settled${cut}`,
+        elements,
+        { ...extra, status: "unsettled" }
+      )
+    ]
+  };
+}
+function judgeWeakeningByCs(m, d, c) {
+  const out = { status: c.status, findings: [] };
+  const base = m.base;
+  const headValue = m.head;
+  const drop = m.higherIsBetter ? -m.delta : m.delta;
+  if (drop <= SAME * Math.max(1, Math.abs(base)) && d.weakening !== "beyond") return out;
+  const rule = c.policy.weakening;
+  const allowance = Math.max(rule.allowedDrop ?? 0, (rule.allowedRelativeDrop ?? 0) * Math.abs(base));
+  const noise2 = rule.errorMultiple * m.se;
+  const dropLo = m.higherIsBetter ? -d.delta.hi : d.delta.lo;
+  const dropHi = m.higherIsBetter ? -d.delta.lo : d.delta.hi;
+  const digits = (limit) => changeDecimals(base, headValue, m.higherIsBetter, limit);
+  const dd = Math.max(digits(allowance), digits(dropLo), digits(dropHi));
+  const verb = m.higherIsBetter ? "dropped" : "rose";
+  const change = `${verb} from ${formatR(base, dd)} to ${formatR(headValue, dd)} (Δ ${formatDelta(m.delta, m.se, dd)})`;
+  const allowed = formatR(allowance, dd);
+  const range = `its confidence sequence puts the drop between ${formatR(dropLo, dd)} and ${formatR(dropHi, dd)} after ${c.ran} realizations`;
+  if (d.weakening === "beyond") {
+    if (out.status !== "short") out.status = "weakened";
+    out.findings.push(
+      finding2(
+        "regression",
+        c.severity,
+        `${c.description}: ${change}, more than the allowed ${allowed}: ${range}`,
+        c.elements,
+        { ...c.extra, allowance, status: "weakened" }
+      )
+    );
+  } else if (d.weakening === "open") {
+    if (out.status === "holds") out.status = "unsettled";
+    const cut = m.reduced !== void 0 ? `; ${m.reduced}` : "";
+    out.findings.push(
+      finding2(
+        "regression",
+        unsettledSeverity(c.severity),
+        `${c.description}: ${change}; ${range}, on both sides of the allowed ${allowed}, so it is not settled${cut}`,
+        c.elements,
+        { ...c.extra, allowance, status: "unsettled" }
+      )
+    );
+  } else if (drop < noise2) {
+    if (out.status === "holds") out.status = "inside-error";
+    out.findings.push(
+      finding2(
+        "regression",
+        "notice",
+        `${c.description}: ${change}, less than ${rule.errorMultiple} × its Monte Carlo error (${formatR(noise2, dd)}): inside the error, not a failure; ${range}`,
+        c.elements,
+        {
+          ...c.extra,
+          allowance,
+          status: "inside-error"
+        }
+      )
+    );
+  } else {
+    out.findings.push(
+      finding2(
+        "regression",
+        "notice",
+        `${c.description}: ${change}, within the allowed ${allowed}: ${range}`,
+        c.elements,
+        { ...c.extra, allowance, status: "within-allowance" }
+      )
+    );
+  }
+  return out;
 }
 function fileStatus(change, findings) {
   const failing = findings.filter((f) => f.severity === "fail");
@@ -47632,7 +49504,9 @@ function compareDesign(input) {
     report.status = "removed";
     const severity = input.policy.removedDesigns;
     if (severity !== "ignore") {
-      report.findings.push(finding2("removed-design", severity, "the design file was deleted by this change", [], { line: 0 }));
+      report.findings.push(
+        finding2("removed-design", severity, "the design file was deleted by this change", [], { line: 0 })
+      );
     }
     return report;
   }
@@ -47641,15 +49515,27 @@ function compareDesign(input) {
     report.status = "unreadable";
     report.error = { message: e.message, line: e.line, column: e.column };
     const rule = input.headUnsupported && !input.headError ? "not-computable" : "parse-error";
-    report.findings.push(finding2(rule, "fail", e.message, [], { line: e.line, column: e.column, ...rule === "not-computable" ? { status: "not-computable" } : {} }));
+    report.findings.push(
+      finding2(rule, "fail", e.message, [], {
+        line: e.line,
+        column: e.column,
+        ...rule === "not-computable" ? { status: "not-computable" } : {}
+      })
+    );
     return report;
   }
   const effective = input.baseError ? { ...input, base: void 0, thresholdsOnly: true } : input;
   if (input.baseError) {
     report.findings.push(
-      finding2("parse-error", "notice", `the base version could not be read (${input.baseError.message}); judged on thresholds only`, [], {
-        line: 0
-      })
+      finding2(
+        "parse-error",
+        "notice",
+        `the base version could not be read (${input.baseError.message}); judged on thresholds only`,
+        [],
+        {
+          line: 0
+        }
+      )
     );
   }
   const comparing = effective.base !== void 0 && !effective.thresholdsOnly;
@@ -47670,29 +49556,72 @@ function compareDesign(input) {
   }
   report.head = withSequenceDetails(input.head.result.evaluation, input.head.graph);
   if (effective.base && !effective.thresholdsOnly) {
-    report.base = withSequenceDetails(effective.base.result.evaluation, effective.base.result === input.head.result ? input.head.graph : effective.base.graph);
+    report.base = withSequenceDetails(
+      effective.base.result.evaluation,
+      effective.base.result === input.head.result ? input.head.graph : effective.base.graph
+    );
     const changes = elementChanges(effective.base.graph, input.head.graph, matching);
     const modified = effective.base.topology && input.head.topology ? attributeChanges(effective.base.topology, input.head.topology) : void 0;
     if (modified?.length) changes.modified = modified;
-    if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) + (changes.modified?.length ?? 0) > 0) report.changes = changes;
+    if (changes.added.length + changes.removed.length + (changes.renamed?.length ?? 0) + (changes.hardened?.length ?? 0) + (changes.modified?.length ?? 0) > 0)
+      report.changes = changes;
   }
   report.status = fileStatus(input.change, report.findings);
   return report;
 }
 
+// src/report/report.ts
+var REPORT_VERSION = 1;
+var DESIGN_WARNINGS_KEPT = 50;
+var CAUTION = "netbrace evaluates topology-level robustness under the stated assumptions (the metrics, challenges and removal models in the policy). It informs engineering judgement; it does not replace engineering studies. Local codes, regulators’ standards and licensed practice decide for real infrastructure, power systems especially.";
+var REPORT_DIGITS = 12;
+function serializeReport(report) {
+  return `${JSON.stringify(
+    report,
+    (_key, value2) => {
+      if (typeof value2 !== "number") return value2;
+      if (!Number.isFinite(value2)) return null;
+      if (Number.isInteger(value2)) return value2;
+      const rounded = Number(value2.toPrecision(REPORT_DIGITS));
+      return Object.is(rounded, -0) ? 0 : rounded;
+    },
+    2
+  )}
+`;
+}
+
+// src/version.ts
+var VERSION = "0.1.0";
+
 // src/gate/verdict.ts
-var FILE_STATUSES = ["holds", "weakened", "below-floor", "new", "removed", "renamed", "unreadable"];
 function countStatuses(files) {
   const counts = Object.fromEntries(FILE_STATUSES.map((s) => [s, 0]));
   for (const f of files) counts[f.status]++;
   return counts;
 }
 function verdictOf(files) {
-  const failed = files.some((f) => f.status === "unreadable" || f.findings.some((x) => x.severity === "fail"));
+  const failed = files.some(fileFails);
   return failed ? "fail" : "pass";
 }
 function exitCodeOf(report) {
   return report.verdict === "fail" && report.mode === "block" ? 1 : 0;
+}
+function assembleReport(header2, files) {
+  return {
+    version: REPORT_VERSION,
+    tool: { name: "netbrace", version: VERSION },
+    verdict: verdictOf(files),
+    mode: header2.mode,
+    policy: header2.policy,
+    ...header2.base !== void 0 ? { base: header2.base } : {},
+    ...header2.head !== void 0 ? { head: header2.head } : {},
+    seed: header2.seed,
+    ...header2.part ? { part: { index: header2.part.index, total: header2.part.total } } : {},
+    ...header2.scope !== void 0 ? { scope: header2.scope } : {},
+    counts: countStatuses(files),
+    files,
+    caution: CAUTION
+  };
 }
 
 // src/gate/pair-designs.ts
@@ -47734,6 +49663,95 @@ function pairDesigns(deleted, added) {
     pairs
   );
   return pairs.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
+}
+
+// src/policy/compare.ts
+var RANK = { ignore: 0, notice: 1, warn: 2, fail: 3 };
+function policyChanges(judging, proposed) {
+  const out = [];
+  const add = (subject, key, loosens, base, head, where) => out.push({
+    subject,
+    key,
+    effect: loosens ? "loosens" : "tightens",
+    base,
+    head,
+    file: where?.file ?? proposed.files[0] ?? "",
+    line: where?.line ?? 0
+  });
+  const before = new Map(judging.requirements.map((r) => [r.id, r]));
+  const after = new Map(proposed.requirements.map((r) => [r.id, r]));
+  for (const next of proposed.requirements) {
+    const prev = before.get(next.id);
+    if (!prev) {
+      add(next.id, "requirement", false, null, next.severity, next.where);
+      continue;
+    }
+    if (prev.severity !== next.severity)
+      add(next.id, "severity", RANK[next.severity] < RANK[prev.severity], prev.severity, next.severity, next.where);
+    compareValues(prev, next, add);
+  }
+  for (const prev of judging.requirements) {
+    if (!after.has(prev.id))
+      add(prev.id, "requirement", true, prev.severity, null, {
+        file: proposed.files[0] ?? prev.where.file,
+        line: 0,
+        column: 0
+      });
+  }
+  const a = judging.weakening;
+  const b = proposed.weakening;
+  const num3 = (key, x, y, field) => {
+    if (x === y) return;
+    add("weakening", key, (y ?? 0) > (x ?? 0), x ?? null, y ?? null, b.fieldWhere[field] ?? b.where);
+  };
+  num3("allowed-drop", a.allowedDrop, b.allowedDrop, "allowedDrop");
+  num3("allowed-relative-drop", a.allowedRelativeDrop, b.allowedRelativeDrop, "allowedRelativeDrop");
+  num3("error-multiple", a.errorMultiple, b.errorMultiple, "errorMultiple");
+  if (a.severity !== b.severity)
+    add(
+      "weakening",
+      "severity",
+      RANK[b.severity] < RANK[a.severity],
+      a.severity,
+      b.severity,
+      b.fieldWhere.severity ?? b.where
+    );
+  const ra = judging.removedDesigns;
+  const rb = proposed.removedDesigns;
+  if (ra.severity !== rb.severity)
+    add("removed-designs", "severity", RANK[rb.severity] < RANK[ra.severity], ra.severity, rb.severity, rb.where);
+  return out;
+}
+function compareValues(prev, next, add) {
+  if (prev.kind === "spread-ceiling" && next.kind === "spread-ceiling") {
+    if (prev.max !== next.max) add(next.id, "max", next.max > prev.max, prev.max, next.max, next.valueWhere);
+    return;
+  }
+  if (prev.kind === "no-new-spof" && next.kind === "no-new-spof") {
+    for (const [key, x2, y2] of [
+      ["bridges", prev.bridges, next.bridges],
+      ["cut-nodes", prev.cutNodes, next.cutNodes],
+      ["risk-groups", prev.riskGroups, next.riskGroups]
+    ]) {
+      if (x2 !== y2) add(next.id, key, x2 && !y2, x2 ? "on" : "off", y2 ? "on" : "off", next.where);
+    }
+    if (prev.hardenedWeakPoints !== next.hardenedWeakPoints) {
+      add(
+        next.id,
+        "hardened-weak-points",
+        RANK[next.hardenedWeakPoints] < RANK[prev.hardenedWeakPoints],
+        prev.hardenedWeakPoints,
+        next.hardenedWeakPoints,
+        next.hardenedWhere ?? next.where
+      );
+    }
+    return;
+  }
+  const floor = (r) => "min" in r ? r.min : void 0;
+  const x = floor(prev);
+  const y = floor(next);
+  if (x === y) return;
+  add(next.id, "min", y === void 0 || x !== void 0 && y < x, x ?? null, y ?? null, next.valueWhere);
 }
 
 // src/policy/defaults.ts
@@ -47801,11 +49819,11 @@ challenges:
     adaptive: true
     until: 0.2
 
-# Requirements; severity is fail (the gate fails), warn or notice.
+# Requirements; severity is fail (the check fails), warn or notice.
 requirements:
   # A change may not add a bridge, a cut node or a shared-risk group (a duct) whose loss cuts
   # sites off, that the base did not have. A new weak point hidden behind an element that the
-  # change marks hardened is a warning: hardening is a claim the gate cannot check.
+  # change marks hardened is a warning: hardening is a claim netbrace cannot verify.
   - kind: no-new-spof
     severity: fail
     hardened-weak-points: warn
@@ -47841,7 +49859,7 @@ removed-designs: notice
 # work cannot settle is "unsettled", never a pass. Seconds are converted to work at a fixed
 # rate (5e7 element visits per second), so a report never depends on the machine's speed.
 budget:
-  seconds: 60              # about a minute for a 1,000-node design under this policy
+  seconds: 60              # at most a minute; a 1,000-node design needs about 10 s here
   # work: 3e9              # the same in element visits; with both, the smaller applies
 
 # Rules for some files only; they may add or tighten requirements, never loosen them
@@ -47981,11 +49999,20 @@ var TopologyBuilder = class {
     this.checkId(input.id, "a node id", input.pos);
     const first = this.nodeLine.get(input.id);
     if (first !== void 0) {
-      throw this.error(`duplicate node id "${input.id}"`, input.pos, `first defined on line ${first.line}; node ids must be unique`);
+      throw this.error(
+        `duplicate node id "${input.id}"`,
+        input.pos,
+        `first defined on line ${first.line}; node ids must be unique`
+      );
     }
     this.countElement(input.pos);
     this.nodeLine.set(input.id, input.pos);
-    const node = { id: input.id, hardened: input.hardened ?? false, pos: input.pos, attrs: input.attrs ?? {} };
+    const node = {
+      id: input.id,
+      hardened: input.hardened ?? false,
+      pos: input.pos,
+      attrs: input.attrs ?? {}
+    };
     if (input.label !== void 0) node.label = input.label;
     if (input.kind !== void 0) node.kind = input.kind;
     if (input.lat !== void 0 && input.lon !== void 0) {
@@ -48022,7 +50049,11 @@ var TopologyBuilder = class {
     this.requireNode(input.source, input.sourcePos ?? input.pos, what);
     this.requireNode(input.target, input.targetPos ?? input.pos, what);
     if (input.source === input.target) {
-      this.warn(`self-loop on node "${input.source}" dropped`, input.pos, "a link from a node to itself adds no connectivity");
+      this.warn(
+        `self-loop on node "${input.source}" dropped`,
+        input.pos,
+        "a link from a node to itself adds no connectivity"
+      );
       return false;
     }
     if (input.arc) {
@@ -48042,9 +50073,16 @@ var TopologyBuilder = class {
       const first = this.linkIds.get(id);
       if (first !== void 0) {
         if (this.duplicateLinkIds === "error") {
-          throw this.error(`duplicate link id "${id}"`, input.pos, `first used on line ${first.line}; link ids must be unique`);
+          throw this.error(
+            `duplicate link id "${id}"`,
+            input.pos,
+            `first used on line ${first.line}; link ids must be unique`
+          );
         }
-        this.warn(`duplicate link id "${id}" (first on line ${first.line}); the link is named by its ends instead`, input.pos);
+        this.warn(
+          `duplicate link id "${id}" (first on line ${first.line}); the link is named by its ends instead`,
+          input.pos
+        );
         id = void 0;
       }
     }
@@ -48084,9 +50122,11 @@ var TopologyBuilder = class {
     for (const k of ["length", "latency", "capacity", "weight"]) {
       if (arc[k] !== link[k]) differs.push(`${k} ${link[k] ?? "unset"} vs ${arc[k] ?? "unset"}`);
     }
-    if ((arc.hardened ?? false) !== link.hardened) differs.push(`hardened ${link.hardened} vs ${arc.hardened ?? false}`);
+    if ((arc.hardened ?? false) !== link.hardened)
+      differs.push(`hardened ${link.hardened} vs ${arc.hardened ?? false}`);
     const groups2 = (g) => [...new Set(g)].sort().join(";");
-    if (groups2(arc.riskGroups ?? []) !== groups2(link.riskGroups)) differs.push(`risk groups "${groups2(link.riskGroups)}" vs "${groups2(arc.riskGroups ?? [])}"`);
+    if (groups2(arc.riskGroups ?? []) !== groups2(link.riskGroups))
+      differs.push(`risk groups "${groups2(link.riskGroups)}" vs "${groups2(arc.riskGroups ?? [])}"`);
     if (differs.length > 0) {
       this.warn(
         `the arc ${arc.source} → ${arc.target} is merged with the reverse arc on line ${link.pos.line}, which says otherwise (${differs.join(", ")}); the first arc's values are kept`,
@@ -48098,14 +50138,16 @@ var TopologyBuilder = class {
   addRiskGroup(group) {
     this.checkId(group.id, "a risk group id", group.pos);
     const first = this.riskGroupPos.get(group.id);
-    if (first) throw this.error(`duplicate risk group id "${group.id}"`, group.pos, `first described on line ${first.line}`);
+    if (first)
+      throw this.error(`duplicate risk group id "${group.id}"`, group.pos, `first described on line ${first.line}`);
     this.riskGroupPos.set(group.id, group.pos);
     this.riskGroups.push(group);
   }
   addDemand(source, target, volume, pos, endPos, what = "demand") {
     this.requireNode(source, endPos?.[0] ?? pos, what);
     this.requireNode(target, endPos?.[1] ?? pos, what);
-    if (source === target) throw this.error(`${what} goes from node "${source}" to itself`, pos, "a demand needs two different ends");
+    if (source === target)
+      throw this.error(`${what} goes from node "${source}" to itself`, pos, "a demand needs two different ends");
     this.demands.push({ source, target, volume, pos });
   }
   finish(extra = {}) {
@@ -48147,7 +50189,8 @@ var QUANTITY_RANGE = {
 function nonNormal(n) {
   if (Number.isNaN(n)) return "is not a number (NaN)";
   if (!Number.isFinite(n)) return "is infinite (or too large for a number)";
-  if (n !== 0 && Math.abs(n) < MIN_NORMAL) return "is so close to 0 that it cannot be computed with (a subnormal number)";
+  if (n !== 0 && Math.abs(n) < MIN_NORMAL)
+    return "is so close to 0 that it cannot be computed with (a subnormal number)";
   return void 0;
 }
 function firstNonNormal(v, path3, skip) {
@@ -48174,10 +50217,22 @@ function quantityProblem(kind, value2, written) {
   const bad = nonNormal(value2);
   const r = QUANTITY_RANGE[kind];
   const range = `netbrace accepts 0 or ${shown(r.min, r.unit)} to ${shown(r.max, r.unit)}`;
-  if (bad) return { message: `${bad}${as}`, hint: Number.isFinite(value2) ? `${range}; write 0 for none` : `${range}; check the unit` };
+  if (bad)
+    return {
+      message: `${bad}${as}`,
+      hint: Number.isFinite(value2) ? `${range}; write 0 for none` : `${range}; check the unit`
+    };
   if (value2 < 0) return { message: `must not be negative (${value2})`, hint: range };
-  if (value2 > r.max) return { message: `is ${fmt(value2)}${as}, above the limit of ${shown(r.max, r.unit)}`, hint: `${range}; check the unit` };
-  if (value2 > 0 && value2 < r.min) return { message: `is ${fmt(value2)}${as}, below the smallest value accepted (${shown(r.min, r.unit)})`, hint: `${range}; write 0 for none` };
+  if (value2 > r.max)
+    return {
+      message: `is ${fmt(value2)}${as}, above the limit of ${shown(r.max, r.unit)}`,
+      hint: `${range}; check the unit`
+    };
+  if (value2 > 0 && value2 < r.min)
+    return {
+      message: `is ${fmt(value2)}${as}, below the smallest value accepted (${shown(r.min, r.unit)})`,
+      hint: `${range}; write 0 for none`
+    };
   return void 0;
 }
 
@@ -48273,7 +50328,12 @@ function mapNodeAttributes(raw, b, where) {
     } else if (field === "lat" || field === "lon" || field === "x" || field === "y") {
       const n = numeral(value2);
       const bad = n === void 0 ? void 0 : nonNormal(n);
-      if (bad) throw b.error(`node coordinate "${name}" ${bad} ("${written(name, value2)}")`, posOf(name), "write a plain decimal number of degrees");
+      if (bad)
+        throw b.error(
+          `node coordinate "${name}" ${bad} ("${written(name, value2)}")`,
+          posOf(name),
+          "write a plain decimal number of degrees"
+        );
       if (n === void 0) {
         b.warn(`node coordinate "${name}" is not a number ("${text(value2)}"); ignored`, posOf(name));
         out.attrs[name] = value2;
@@ -48298,7 +50358,10 @@ function mapNodeAttributes(raw, b, where) {
       out.lat = lat[0];
       out.lon = lon[0];
     } else {
-      b.warn(`coordinates ${lat[1]}=${lat[0]}, ${lon[1]}=${lon[0]} are not a latitude/longitude; ignored`, posOf(lat[1]));
+      b.warn(
+        `coordinates ${lat[1]}=${lat[0]}, ${lon[1]}=${lon[0]} are not a latitude/longitude; ignored`,
+        posOf(lat[1])
+      );
       out.attrs[lat[1]] = lat[0];
       out.attrs[lon[1]] = lon[0];
     }
@@ -48334,11 +50397,16 @@ function mapLinkAttributes(raw, b, where) {
     if (field === "bitrate") {
       const gbps = n === void 0 ? void 0 : n / 1e9;
       if (gbps !== void 0 && quantityProblem("capacity", gbps) === void 0) out.capacity ??= gbps;
-      else b.warn(`link ${name} "${as}" is not a speed in bit/s that netbrace accepts; not read as the capacity`, posOf(name));
+      else
+        b.warn(
+          `link ${name} "${as}" is not a speed in bit/s that netbrace accepts; not read as the capacity`,
+          posOf(name)
+        );
       out.attrs[name] = value2;
       continue;
     }
-    if (n === void 0) throw b.error(`link ${name} must be a number, not "${as}"`, posOf(name), "write a plain decimal number");
+    if (n === void 0)
+      throw b.error(`link ${name} must be a number, not "${as}"`, posOf(name), "write a plain decimal number");
     const problem = quantityProblem(field, n, as);
     if (problem) throw b.error(`link ${name} ${problem.message}`, posOf(name), problem.hint);
     if (field === "capacity") out.capacity = n;
@@ -48362,7 +50430,12 @@ function* csvRows(text2, b) {
       if (text2[i] === '"') {
         i++;
         for (; ; ) {
-          if (i >= n) throw b.error("unterminated quoted field", pos, 'close the field with a double quote (write "" for a quote inside it)');
+          if (i >= n)
+            throw b.error(
+              "unterminated quoted field",
+              pos,
+              'close the field with a double quote (write "" for a quote inside it)'
+            );
           const c = text2[i];
           if (c === '"') {
             if (text2[i + 1] === '"') {
@@ -48381,13 +50454,22 @@ function* csvRows(text2, b) {
           i++;
         }
         if (i < n && text2[i] !== "," && text2[i] !== "\n" && text2[i] !== "\r") {
-          throw b.error("text after a closing quote", { line, column: i - lineStart + 1 }, "a quoted field must end at a comma or the end of the line");
+          throw b.error(
+            "text after a closing quote",
+            { line, column: i - lineStart + 1 },
+            "a quoted field must end at a comma or the end of the line"
+          );
         }
       } else {
         const start = i;
         while (i < n && text2[i] !== "," && text2[i] !== "\n" && text2[i] !== "\r") i++;
         value2 = text2.slice(start, i);
-        if (value2.includes('"')) throw b.error("a double quote inside an unquoted field", pos, 'quote the whole field and double the quote: "a ""b"""');
+        if (value2.includes('"'))
+          throw b.error(
+            "a double quote inside an unquoted field",
+            pos,
+            'quote the whole field and double the quote: "a ""b"""'
+          );
       }
       cells.push({ text: value2, pos });
       if (i < n && text2[i] === ",") {
@@ -48419,20 +50501,34 @@ function parseEdgeList(text2, file, options = {}, format = "csv") {
   const b = new TopologyBuilder(file, format, options);
   const rows = csvRows(text2, b);
   const first = rows.next();
-  if (first.done) throw b.error("the CSV file is empty", { line: 1, column: 1 }, "the first line must be a header with source,target");
+  if (first.done)
+    throw b.error(
+      "the CSV file is empty",
+      { line: 1, column: 1 },
+      "the first line must be a header with source,target"
+    );
   const headerCells = first.value.cells;
   const header2 = headerCells.map((c) => c.text.trim());
   const lower = header2.map((h) => h.toLowerCase());
   for (const need of ["source", "target"]) {
     if (!lower.includes(need)) {
-      throw b.error(`the CSV header has no "${need}" column`, headerCells[0].pos, "the first line must name the columns, e.g. source,target,length");
+      throw b.error(
+        `the CSV header has no "${need}" column`,
+        headerCells[0].pos,
+        "the first line must name the columns, e.g. source,target,length"
+      );
     }
   }
   const seen = /* @__PURE__ */ new Map();
   lower.forEach((h, k) => {
     if (h === "") throw b.error(`column ${k + 1} of the header has no name`, headerCells[k].pos);
     const earlier = seen.get(h);
-    if (earlier !== void 0) throw b.error(`column "${header2[k]}" appears twice in the header`, headerCells[k].pos, `first as column ${earlier + 1}`);
+    if (earlier !== void 0)
+      throw b.error(
+        `column "${header2[k]}" appears twice in the header`,
+        headerCells[k].pos,
+        `first as column ${earlier + 1}`
+      );
     seen.set(h, k);
   });
   const src = lower.indexOf("source");
@@ -48450,13 +50546,18 @@ function parseEdgeList(text2, file, options = {}, format = "csv") {
       );
     }
     if (cells.length > header2.length) {
-      throw b.error(`row has ${cells.length} columns but the header has ${header2.length}`, cells[header2.length].pos, "quote values that contain commas");
+      throw b.error(
+        `row has ${cells.length} columns but the header has ${header2.length}`,
+        cells[header2.length].pos,
+        "quote values that contain commas"
+      );
     }
     const pos = cells[0].pos;
     const ends = [cells[src], cells[dst]];
     for (const c of ends) {
       const id2 = c.text.trim();
-      if (id2 === "") throw b.error(`empty ${c === cells[src] ? "source" : "target"}`, c.pos, "every row needs both link ends");
+      if (id2 === "")
+        throw b.error(`empty ${c === cells[src] ? "source" : "target"}`, c.pos, "every row needs both link ends");
       if (!b.hasNode(id2)) b.addNode({ id: id2, pos: c.pos });
     }
     const raw = {};
@@ -48490,12 +50591,19 @@ var import_picomatch = __toESM(require_picomatch2(), 1);
 var ESCAPABLE = new Set("*?[]{}()!+@,\\/^$.|- ".split(""));
 function globProblem(glob) {
   if (glob.trim() === "") return { message: "is empty", hint: 'write a glob such as "networks/**/*.net.yaml"' };
-  if (glob.trim() !== glob) return { message: "starts or ends with white space, which is part of the glob", hint: "remove the spaces" };
+  if (glob.trim() !== glob)
+    return { message: "starts or ends with white space, which is part of the glob", hint: "remove the spaces" };
   if (glob.startsWith("!") && !glob.startsWith("!(")) {
-    return { message: 'starts with "!", which would select every file except these', hint: 'list the files to leave out under "ignore:"' };
+    return {
+      message: 'starts with "!", which would select every file except these',
+      hint: 'list the files to leave out under "ignore:"'
+    };
   }
   if (glob.startsWith("/") || /^[A-Za-z]:[\\/]/.test(glob)) {
-    return { message: "is an absolute path; globs are read from the repository root", hint: `write it without the leading "/": "${glob.replace(/^\/+|^[A-Za-z]:[\\/]+/, "")}"` };
+    return {
+      message: "is an absolute path; globs are read from the repository root",
+      hint: `write it without the leading "/": "${glob.replace(/^\/+|^[A-Za-z]:[\\/]+/, "")}"`
+    };
   }
   const braces = [];
   const parens = [];
@@ -48504,41 +50612,72 @@ function globProblem(glob) {
     if (ch === "\\") {
       const next = glob[i + 1];
       if (next === void 0 || !ESCAPABLE.has(next)) {
-        return { message: "has a backslash, which escapes the next character in a glob; it is not a path separator", hint: `use forward slashes: "${glob.replace(/\\/g, "/")}"` };
+        return {
+          message: "has a backslash, which escapes the next character in a glob; it is not a path separator",
+          hint: `use forward slashes: "${glob.replace(/\\/g, "/")}"`
+        };
       }
       i++;
     } else if (ch === "[") {
       let j = i + 1;
       if (glob[j] === "!") {
-        return { message: 'has "[!", which picomatch reads as the character "!", not as "none of"', hint: 'write "[^" for a class of characters to leave out' };
+        return {
+          message: 'has "[!", which picomatch reads as the character "!", not as "none of"',
+          hint: 'write "[^" for a class of characters to leave out'
+        };
       }
       if (glob[j] === "^") j++;
       if (glob[j] === "]") j++;
       while (j < glob.length && glob[j] !== "]") j += glob[j] === "\\" ? 2 : 1;
-      if (j >= glob.length) return { message: 'has a "[" that is never closed', hint: 'close the character class with "]", or write "\\[" for a literal bracket' };
+      if (j >= glob.length)
+        return {
+          message: 'has a "[" that is never closed',
+          hint: 'close the character class with "]", or write "\\[" for a literal bracket'
+        };
       i = j;
     } else if (ch === "{") braces.push(i);
     else if (ch === "}") {
-      if (braces.pop() === void 0) return { message: 'has a "}" without its "{"', hint: "alternatives are written {a,b}" };
+      if (braces.pop() === void 0)
+        return { message: 'has a "}" without its "{"', hint: "alternatives are written {a,b}" };
     } else if (ch === "(") parens.push(i);
     else if (ch === ")") {
-      if (parens.pop() === void 0) return { message: 'has a ")" without its "("', hint: "groups are written @(a|b)" };
+      if (parens.pop() === void 0)
+        return { message: 'has a ")" without its "("', hint: "groups are written @(a|b)" };
     }
   }
-  if (braces.length > 0) return { message: 'has a "{" that is never closed', hint: 'close it: alternatives are written {a,b}, e.g. "**/*.{graphml,gml}"' };
-  if (parens.length > 0) return { message: 'has a "(" that is never closed', hint: "close it: groups are written @(a|b)" };
-  if (glob.endsWith("/")) return { message: 'ends with "/", so it matches directories, never files', hint: `add the files: "${glob}**"` };
+  if (braces.length > 0)
+    return {
+      message: 'has a "{" that is never closed',
+      hint: 'close it: alternatives are written {a,b}, e.g. "**/*.{graphml,gml}"'
+    };
+  if (parens.length > 0)
+    return { message: 'has a "(" that is never closed', hint: "close it: groups are written @(a|b)" };
+  if (glob.endsWith("/"))
+    return { message: 'ends with "/", so it matches directories, never files', hint: `add the files: "${glob}**"` };
   const segments = glob.replace(/^\.\//, "").split("/");
-  if (segments.includes("..")) return { message: 'has a ".." segment; globs are read from the repository root', hint: 'write the path from the root, without ".."' };
-  if (segments.includes(".")) return { message: 'has a "." segment, which repository paths never have', hint: 'remove the "./"' };
-  if (segments.includes("")) return { message: 'has an empty segment ("//"), which repository paths never have', hint: 'write one "/"' };
+  if (segments.includes(".."))
+    return {
+      message: 'has a ".." segment; globs are read from the repository root',
+      hint: 'write the path from the root, without ".."'
+    };
+  if (segments.includes("."))
+    return { message: 'has a "." segment, which repository paths never have', hint: 'remove the "./"' };
+  if (segments.includes(""))
+    return { message: 'has an empty segment ("//"), which repository paths never have', hint: 'write one "/"' };
   let re;
   try {
     re = import_picomatch.default.makeRe(glob, { dot: true });
   } catch (e) {
-    return { message: `cannot be read as a glob (${e instanceof Error ? e.message : String(e)})`, hint: 'see the glob syntax in the README ("Policy")' };
+    return {
+      message: `cannot be read as a glob (${e instanceof Error ? e.message : String(e)})`,
+      hint: 'see the glob syntax in the README ("Policy")'
+    };
   }
-  if (re.source === "$^") return { message: "cannot be read as a glob: it would match no file", hint: 'see the glob syntax in the README ("Policy")' };
+  if (re.source === "$^")
+    return {
+      message: "cannot be read as a glob: it would match no file",
+      hint: 'see the glob syntax in the README ("Policy")'
+    };
   return void 0;
 }
 
@@ -48709,9 +50848,13 @@ var policy_schema_default = {
       ]
     },
     seed: { type: "integer", minimum: 0, maximum: 4294967295 },
-    weight: { description: "Weight of the metric in the mean, from 1e-6 to 1e6 (only the ratios between weights matter).", type: "number", exclusiveMinimum: 0 },
+    weight: {
+      description: "Weight of the metric in the mean, from 1e-6 to 1e6 (only the ratios between weights matter).",
+      type: "number",
+      exclusiveMinimum: 0
+    },
     severity: {
-      description: "fail: the gate fails; warn: reported as a warning; notice: reported only.",
+      description: "fail: the check fails; warn: reported as a warning; notice: reported only.",
       enum: ["fail", "warn", "notice"],
       default: "fail"
     },
@@ -48721,7 +50864,10 @@ var policy_schema_default = {
       additionalProperties: false,
       required: ["paths"],
       properties: {
-        paths: { description: "Globs of design files (relative to the repository root).", $ref: "#/definitions/globs" },
+        paths: {
+          description: "Globs of design files (relative to the repository root).",
+          $ref: "#/definitions/globs"
+        },
         format: {
           description: "The format of the matched files, where the extension does not say it.",
           enum: ["native-yaml", "native-json", "graphml", "gml", "csv", "geojson"]
@@ -48752,8 +50898,18 @@ var policy_schema_default = {
           type: "number",
           exclusiveMinimum: 0
         },
-        points: { description: "Grid points on the x axis, 0 included.", type: "integer", minimum: 2, maximum: 1001 },
-        realizations: { description: "Monte Carlo realizations (random order only).", type: "integer", minimum: 1, maximum: 1e6 },
+        points: {
+          description: "Grid points on the x axis, 0 included.",
+          type: "integer",
+          minimum: 2,
+          maximum: 1001
+        },
+        realizations: {
+          description: "Monte Carlo realizations (random order only).",
+          type: "integer",
+          minimum: 1,
+          maximum: 1e6
+        },
         band: {
           description: "Lower and upper quantile of the envelope's band, e.g. [0.1, 0.9].",
           type: "array",
@@ -48787,13 +50943,27 @@ var policy_schema_default = {
           properties: {
             kind: { const: "r-threshold" },
             challenge: { description: "Name of a challenge under `challenges:`.", type: "string" },
-            at: { description: "Removal fraction (or km for region) where R is judged; put on the grid.", type: "number", minimum: 0 },
+            at: {
+              description: "Removal fraction (or km for region) where R is judged; put on the grid.",
+              type: "number",
+              minimum: 0
+            },
             statistic: {
               description: "quantile (with q), median, mean, min (over realizations), worst-case (with removals), value (targeted attacks). Default: median for random challenges, value otherwise.",
               enum: ["quantile", "median", "mean", "min", "worst-case", "value"]
             },
-            q: { description: "The quantile for statistic: quantile, e.g. 0.1.", type: "number", exclusiveMinimum: 0, exclusiveMaximum: 1 },
-            removals: { description: "For statistic: worst-case, how many removals (≤ the challenge's worst-case depth).", type: "integer", minimum: 1, maximum: 10 },
+            q: {
+              description: "The quantile for statistic: quantile, e.g. 0.1.",
+              type: "number",
+              exclusiveMinimum: 0,
+              exclusiveMaximum: 1
+            },
+            removals: {
+              description: "For statistic: worst-case, how many removals (≤ the challenge's worst-case depth).",
+              type: "integer",
+              minimum: 1,
+              maximum: 10
+            },
             min: { description: "The floor: R must be at least this.", $ref: "#/definitions/r" },
             severity: { $ref: "#/definitions/severity" }
           }
@@ -48849,7 +51019,7 @@ var policy_schema_default = {
               items: { enum: ["bridges", "cut-nodes", "risk-groups"] }
             },
             "hardened-weak-points": {
-              description: "What a new weak point hidden by an element the change marks hardened is: fail, warn (the default), notice or ignore. Hardening is a claim the gate cannot check.",
+              description: "What a new weak point hidden by an element the change marks hardened is: fail, warn (the default), notice or ignore. Hardening is a claim netbrace cannot verify.",
               enum: ["fail", "warn", "notice", "ignore"]
             },
             severity: { $ref: "#/definitions/severity" }
@@ -48863,8 +51033,17 @@ var policy_schema_default = {
       additionalProperties: false,
       properties: {
         "allowed-drop": { description: "Largest tolerated drop, in units of R.", type: "number", minimum: 0 },
-        "allowed-relative-drop": { description: "Largest tolerated drop as a fraction of the base value (0.05 = 5 %). With allowed-drop too, the larger allowance applies.", type: "number", minimum: 0, maximum: 1 },
-        "error-multiple": { description: "A drop below error-multiple × se is Monte Carlo noise (default 2).", type: "number", minimum: 0 },
+        "allowed-relative-drop": {
+          description: "Largest tolerated drop as a fraction of the base value (0.05 = 5 %). With allowed-drop too, the larger allowance applies.",
+          type: "number",
+          minimum: 0,
+          maximum: 1
+        },
+        "error-multiple": {
+          description: "A drop below error-multiple × se is Monte Carlo noise (default 2).",
+          type: "number",
+          minimum: 0
+        },
         severity: { $ref: "#/definitions/severity" }
       }
     },
@@ -48874,8 +51053,16 @@ var policy_schema_default = {
       additionalProperties: false,
       minProperties: 1,
       properties: {
-        work: { description: "Element visits (one graph pass visits every node and link once). With seconds too, the smaller applies.", type: "number", exclusiveMinimum: 0 },
-        seconds: { description: "Seconds of engine time, converted to work at a fixed rate of 5e7 element visits per second, so results never depend on the machine's speed.", type: "number", exclusiveMinimum: 0 }
+        work: {
+          description: "Element visits (one graph pass visits every node and link once). With seconds too, the smaller applies.",
+          type: "number",
+          exclusiveMinimum: 0
+        },
+        seconds: {
+          description: "Seconds of engine time, converted to work at a fixed rate of 5e7 element visits per second, so results never depend on the machine's speed.",
+          type: "number",
+          exclusiveMinimum: 0
+        }
       }
     },
     removedDesigns: {
@@ -48970,7 +51157,11 @@ var YamlSource = class {
     this.lines = new import_yaml4.LineCounter();
     const deep = yamlNestingExceeded(text2);
     if (deep >= 0) {
-      throw new PolicyError(`the policy nests deeper than ${MAX_NESTING} levels`, { file, ...positionOf(text2, deep) }, "a policy needs a few levels of nesting; flatten this structure");
+      throw new PolicyError(
+        `the policy nests deeper than ${MAX_NESTING} levels`,
+        { file, ...positionOf(text2, deep) },
+        "a policy needs a few levels of nesting; flatten this structure"
+      );
     }
     this.doc = (0, import_yaml4.parseDocument)(text2, { lineCounter: this.lines, prettyErrors: false, uniqueKeys: true });
     const problem = this.doc.errors[0];
@@ -49005,9 +51196,9 @@ var YamlSource = class {
     if (node?.range) last = this.offset(node.range[0]);
     for (let i = 0; i < path3.length; i++) {
       if (node && (0, import_yaml4.isAlias)(node)) node = node.resolve(this.doc);
-      const seg2 = path3[i];
+      const seg3 = path3[i];
       if (node && (0, import_yaml4.isMap)(node)) {
-        const pair = node.items.find((p) => (0, import_yaml4.isScalar)(p.key) && String(p.key.value) === String(seg2));
+        const pair = node.items.find((p) => (0, import_yaml4.isScalar)(p.key) && String(p.key.value) === String(seg3));
         if (!pair) return last;
         const keyNode = pair.key;
         const isLast = i === path3.length - 1;
@@ -49016,7 +51207,7 @@ var YamlSource = class {
         if (node?.range) last = this.offset(node.range[0]);
         else if (keyNode.range) last = this.offset(keyNode.range[0]);
       } else if (node && (0, import_yaml4.isSeq)(node)) {
-        node = node.items[Number(seg2)];
+        node = node.items[Number(seg3)];
         if (node?.range) last = this.offset(node.range[0]);
         else return last;
       } else {
@@ -49037,25 +51228,25 @@ function describePath(path3) {
   const parts = [];
   let i = 0;
   while (i < path3.length) {
-    const seg2 = path3[i];
+    const seg3 = path3[i];
     const next = path3[i + 1];
-    if (seg2 === "requirements" && typeof next === "number") {
+    if (seg3 === "requirements" && typeof next === "number") {
       parts.push(`requirement ${next + 1}`);
       i += 2;
-    } else if (seg2 === "scopes" && typeof next === "number") {
+    } else if (seg3 === "scopes" && typeof next === "number") {
       parts.push(`scope ${next + 1}`);
       i += 2;
-    } else if (seg2 === "designs" && typeof next === "number") {
+    } else if (seg3 === "designs" && typeof next === "number") {
       parts.push(`designs entry ${next + 1}`);
       i += 2;
-    } else if (seg2 === "challenges" && next !== void 0) {
+    } else if (seg3 === "challenges" && next !== void 0) {
       parts.push(`challenge "${next}"`);
       i += 2;
     } else if (typeof next === "number") {
-      parts.push(`item ${next + 1} of "${seg2}"`);
+      parts.push(`item ${next + 1} of "${seg3}"`);
       i += 2;
     } else {
-      parts.push(`"${seg2}"`);
+      parts.push(`"${seg3}"`);
       i += 1;
     }
   }
@@ -49078,11 +51269,11 @@ function typeOf(value2) {
   return String(value2);
 }
 var RENAMED_KEYS = {
-  "extends": "inherits",
-  "ignore": "exclude",
-  "files": "paths",
-  "overrides": "scopes",
-  "regression": "weakening",
+  extends: "inherits",
+  ignore: "exclude",
+  files: "paths",
+  overrides: "scopes",
+  regression: "weakening",
   "noise-factor": "error-multiple"
 };
 function renamedKey(key, known) {
@@ -49091,7 +51282,9 @@ function renamedKey(key, known) {
 }
 function renamedAt(e) {
   if (e.keyword !== "additionalProperties") return void 0;
-  const known = Object.keys(e.parentSchema?.properties ?? {});
+  const known = Object.keys(
+    e.parentSchema?.properties ?? {}
+  );
   const renamed = renamedKey(String(e.params.additionalProperty), known);
   return renamed === void 0 ? void 0 : `${e.instancePath}\0${renamed}`;
 }
@@ -49139,7 +51332,11 @@ function diagnose(e, src) {
     case "exclusiveMinimum":
     case "exclusiveMaximum": {
       const op = { minimum: "≥", maximum: "≤", exclusiveMinimum: ">", exclusiveMaximum: "<" }[e.keyword];
-      return { where: src.where(path3), message: `${subject} must be ${op} ${String(params.limit)} (it is ${String(e.data)})`, hint: "" };
+      return {
+        where: src.where(path3),
+        message: `${subject} must be ${op} ${String(params.limit)} (it is ${String(e.data)})`,
+        hint: ""
+      };
     }
     case "minItems":
     case "maxItems": {
@@ -49153,7 +51350,11 @@ function diagnose(e, src) {
     case "minLength":
       return { where: src.where(path3), message: `${subject} must not be empty`, hint: "" };
     case "uniqueItems":
-      return { where: src.where(path3), message: `${subject} lists the same item twice`, hint: "remove the repeated item" };
+      return {
+        where: src.where(path3),
+        message: `${subject} lists the same item twice`,
+        hint: "remove the repeated item"
+      };
     case "propertyNames":
       return {
         where: src.where([...path3, String(params.propertyName)], true),
@@ -49161,7 +51362,11 @@ function diagnose(e, src) {
         hint: ""
       };
     case "anyOf":
-      return { where: src.where(path3), message: `${subject} must be a glob or a list of globs`, hint: 'e.g. "networks/**/*.graphml"' };
+      return {
+        where: src.where(path3),
+        message: `${subject} must be a glob or a list of globs`,
+        hint: 'e.g. "networks/**/*.graphml"'
+      };
     case "discriminator": {
       if (params.error === "mapping") {
         const kinds = requirementKinds(parentSchema);
@@ -49245,7 +51450,12 @@ function globs(value2, src, path3, what) {
   const list = typeof value2 === "string" ? [value2] : value2;
   list.forEach((g, j) => {
     const problem = globProblem(g);
-    if (problem) throw new PolicyError(`${what}, glob "${g}" ${problem.message}`, src.where(typeof value2 === "string" ? path3 : [...path3, j]), problem.hint);
+    if (problem)
+      throw new PolicyError(
+        `${what}, glob "${g}" ${problem.message}`,
+        src.where(typeof value2 === "string" ? path3 : [...path3, j]),
+        problem.hint
+      );
   });
   return list;
 }
@@ -49285,7 +51495,12 @@ var FileBuilder = class {
     const random = order === "random";
     for (const key of ["realizations", "band"]) {
       if (!random && raw[key] !== void 0) {
-        this.fail(`challenge "${name}": "${key}" applies only to random order`, [...path3, key], "a targeted attack is one curve", true);
+        this.fail(
+          `challenge "${name}": "${key}" applies only to random order`,
+          [...path3, key],
+          "a targeted attack is one curve",
+          true
+        );
       }
     }
     if (raw["worst-case"] !== void 0 && !(random && (remove === "nodes" || remove === "links"))) {
@@ -49306,9 +51521,16 @@ var FileBuilder = class {
     }
     const band = raw.band;
     if (band && !(band[0] < band[1])) {
-      this.fail(`challenge "${name}": the band's lower quantile must be below its upper one`, [...path3, "band"], `e.g. [0.1, 0.9]`);
+      this.fail(
+        `challenge "${name}": the band's lower quantile must be below its upper one`,
+        [...path3, "band"],
+        `e.g. [0.1, 0.9]`
+      );
     }
-    const params = { challenge: engine, until: until ?? (remove === "region" ? REGIONAL_UNTIL_KM : DEFAULTS.until) };
+    const params = {
+      challenge: engine,
+      until: until ?? (remove === "region" ? REGIONAL_UNTIL_KM : DEFAULTS.until)
+    };
     if (random) {
       params.points = raw.points ?? DEFAULTS.points;
       params.realizations = raw.realizations ?? DEFAULTS.realizations;
@@ -49323,21 +51545,36 @@ var FileBuilder = class {
   statistic(raw, path3) {
     const kind = raw.statistic ?? "median";
     if (raw.q !== void 0 && kind !== "quantile") {
-      this.fail(`${describePath(path3)}: "q" needs "statistic: quantile"`, [...path3, "q"], 'add "statistic: quantile" or remove "q"', true);
+      this.fail(
+        `${describePath(path3)}: "q" needs "statistic: quantile"`,
+        [...path3, "q"],
+        'add "statistic: quantile" or remove "q"',
+        true
+      );
     }
     if (raw.removals !== void 0 && kind !== "worst-case") {
       this.fail(`${describePath(path3)}: "removals" needs "statistic: worst-case"`, [...path3, "removals"], "", true);
     }
     if (kind === "quantile") {
-      if (raw.q === void 0) this.fail(`${describePath(path3)}: "statistic: quantile" needs "q"`, [...path3, "statistic"], 'e.g. "q: 0.1"');
+      if (raw.q === void 0)
+        this.fail(`${describePath(path3)}: "statistic: quantile" needs "q"`, [...path3, "statistic"], 'e.g. "q: 0.1"');
       return { kind, q: raw.q };
     }
     if (kind === "worst-case") {
       if (raw.removals === void 0) {
-        this.fail(`${describePath(path3)}: "statistic: worst-case" needs "removals"`, [...path3, "statistic"], 'e.g. "removals: 2"');
+        this.fail(
+          `${describePath(path3)}: "statistic: worst-case" needs "removals"`,
+          [...path3, "statistic"],
+          'e.g. "removals: 2"'
+        );
       }
       if (raw.at !== void 0) {
-        this.fail(`${describePath(path3)}: a worst-case threshold counts "removals", not "at"`, [...path3, "at"], 'remove "at"', true);
+        this.fail(
+          `${describePath(path3)}: a worst-case threshold counts "removals", not "at"`,
+          [...path3, "at"],
+          'remove "at"',
+          true
+        );
       }
       return { kind, removals: raw.removals };
     }
@@ -49379,7 +51616,12 @@ var FileBuilder = class {
         req = { ...common, kind: "spread-ceiling", ...ref, max: raw.max };
         break;
       case "n-1":
-        req = { ...common, kind: "n-1", element: raw.element ?? "link", min: raw.min };
+        req = {
+          ...common,
+          kind: "n-1",
+          element: raw.element ?? "link",
+          min: raw.min
+        };
         break;
       default: {
         const elements = raw.elements ?? ["bridges", "cut-nodes", "risk-groups"];
@@ -49406,9 +51648,12 @@ var FileBuilder = class {
       const req = this.requirement(raw, [...path3, i]);
       const twin = byId2.get(req.id);
       if (twin) {
-        throw new PolicyError(`${describePath([...path3, i])} repeats requirement ${req.id}`, req.where, "keep one of them", [
-          { ...twin.where, message: "first written here" }
-        ]);
+        throw new PolicyError(
+          `${describePath([...path3, i])} repeats requirement ${req.id}`,
+          req.where,
+          "keep one of them",
+          [{ ...twin.where, message: "first written here" }]
+        );
       }
       byId2.set(req.id, req);
       out.push(req);
@@ -49450,7 +51695,11 @@ var FileBuilder = class {
     if (raw.candidates !== void 0) {
       const c = String(raw.candidates).replace(/\\/g, "/");
       if (c.startsWith("/") || /^[A-Za-z]:\//.test(c) || c.split("/").includes("..")) {
-        this.fail(`"mend.candidates" must be a path inside the repository, not ${c}`, ["mend", "candidates"], "write it from the repository root, e.g. planning/candidate-links.yaml");
+        this.fail(
+          `"mend.candidates" must be a path inside the repository, not ${c}`,
+          ["mend", "candidates"],
+          "write it from the repository root, e.g. planning/candidate-links.yaml"
+        );
       }
       m.candidates = c.split("/").filter((s) => s !== "" && s !== ".").join("/");
     }
@@ -49466,19 +51715,27 @@ var FileBuilder = class {
 };
 function joinRepoPath(fromFile, relative, where) {
   if (relative.startsWith("/") || /^[A-Za-z]:[\\/]/.test(relative)) {
-    throw new PolicyError(`"inherits" must be a path inside the repository, not ${relative}`, where, "write it relative to this policy file");
+    throw new PolicyError(
+      `"inherits" must be a path inside the repository, not ${relative}`,
+      where,
+      "write it relative to this policy file"
+    );
   }
   const dir = fromFile.split("/").slice(0, -1);
   const parts = [...dir];
-  for (const seg2 of relative.replace(/\\/g, "/").split("/")) {
-    if (seg2 === "" || seg2 === ".") continue;
-    if (seg2 === "..") {
+  for (const seg3 of relative.replace(/\\/g, "/").split("/")) {
+    if (seg3 === "" || seg3 === ".") continue;
+    if (seg3 === "..") {
       if (parts.length === 0) {
-        throw new PolicyError(`"inherits" leaves the repository: ${relative}`, where, "the base policy must be a file in this repository");
+        throw new PolicyError(
+          `"inherits" leaves the repository: ${relative}`,
+          where,
+          "the base policy must be a file in this repository"
+        );
       }
       parts.pop();
     } else {
-      parts.push(seg2);
+      parts.push(seg3);
     }
   }
   return parts.join("/");
@@ -49487,10 +51744,15 @@ function parsePolicyFile(text2, file) {
   const src = new YamlSource(text2, file);
   const data = src.data ?? {};
   if (typeof data !== "object" || data === null || Array.isArray(data)) {
-    throw new PolicyError("the policy must be a mapping of keys (key: value lines)", src.where([]), 'see "netbrace init" for a starter file');
+    throw new PolicyError(
+      "the policy must be a mapping of keys (key: value lines)",
+      src.where([]),
+      'see "netbrace init" for a starter file'
+    );
   }
   const odd = firstNonNormal(data, []);
-  if (odd) throw new PolicyError(`${describePath(odd.path)} ${odd.why}`, src.where(odd.path), "write a plain decimal number");
+  if (odd)
+    throw new PolicyError(`${describePath(odd.path)} ${odd.why}`, src.where(odd.path), "write a plain decimal number");
   const v = validate(data);
   if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
   const raw = data;
@@ -49501,30 +51763,32 @@ function parsePolicyFile(text2, file) {
     policy.inherits = { path: joinRepoPath(file, raw.inherits, where), where };
   }
   if (raw.designs !== void 0) {
-    policy.designs = raw.designs.map(
-      (d, i) => ({
-        paths: globs(d.paths, src, ["designs", i, "paths"], `designs entry ${i + 1}`),
-        ...d.format !== void 0 ? { format: d.format } : {},
-        where: src.where(["designs", i]),
-        fileWhere: typeof d.paths === "string" ? [src.where(["designs", i, "paths"])] : d.paths.map((_, j) => src.where(["designs", i, "paths", j]))
-      })
-    );
+    policy.designs = raw.designs.map((d, i) => ({
+      paths: globs(d.paths, src, ["designs", i, "paths"], `designs entry ${i + 1}`),
+      ...d.format !== void 0 ? { format: d.format } : {},
+      where: src.where(["designs", i]),
+      fileWhere: typeof d.paths === "string" ? [src.where(["designs", i, "paths"])] : d.paths.map((_, j) => src.where(["designs", i, "paths", j]))
+    }));
   }
-  if (raw.exclude !== void 0) policy.exclude = { globs: globs(raw.exclude, src, ["exclude"], "exclude"), where: src.where(["exclude"]) };
+  if (raw.exclude !== void 0)
+    policy.exclude = { globs: globs(raw.exclude, src, ["exclude"], "exclude"), where: src.where(["exclude"]) };
   if (raw.seed !== void 0) policy.seed = { value: raw.seed, where: src.where(["seed"]) };
   if (raw["r-value"] !== void 0) {
     const r = raw["r-value"];
-    for (const [id, weight] of Object.entries(r.metrics)) {
-      if (weight < MIN_METRIC_WEIGHT || weight > MAX_METRIC_WEIGHT) {
+    for (const [id, weight2] of Object.entries(r.metrics)) {
+      if (weight2 < MIN_METRIC_WEIGHT || weight2 > MAX_METRIC_WEIGHT) {
         throw new PolicyError(
-          `the weight of ${id} in r-value.metrics is ${fmt(weight)}, outside ${fmt(MIN_METRIC_WEIGHT)} to ${fmt(MAX_METRIC_WEIGHT)}`,
+          `the weight of ${id} in r-value.metrics is ${fmt(weight2)}, outside ${fmt(MIN_METRIC_WEIGHT)} to ${fmt(MAX_METRIC_WEIGHT)}`,
           src.where(["r-value", "metrics", id]),
           "weights only set the metrics against each other (R is their weighted mean): 1 and 2 say the same as 1000 and 2000"
         );
       }
     }
     const spec = {
-      metrics: Object.entries(r.metrics).map(([id, weight]) => ({ id, weight })),
+      metrics: Object.entries(r.metrics).map(([id, weight2]) => ({
+        id,
+        weight: weight2
+      })),
       combine: r.combine ?? "mean"
     };
     policy.rValue = { spec, where: src.where(["r-value"], true) };
@@ -49573,7 +51837,7 @@ function parsePolicyFile(text2, file) {
 }
 
 // src/policy/resolve.ts
-var SEVERITY_RANK = { ignore: 0, notice: 1, warn: 2, fail: 3 };
+var SEVERITY_RANK2 = { ignore: 0, notice: 1, warn: 2, fail: 3 };
 var builtinFile;
 function builtin() {
   builtinFile ??= parsePolicyFile(STARTER_POLICY, BUILTIN_POLICY_NAME);
@@ -49595,7 +51859,7 @@ function describeValue(r) {
   }
 }
 function loosening(prev, next) {
-  if (SEVERITY_RANK[next.severity] < SEVERITY_RANK[prev.severity]) {
+  if (SEVERITY_RANK2[next.severity] < SEVERITY_RANK2[prev.severity]) {
     return {
       message: `lowers the severity of ${prev.id} from ${prev.severity} to ${next.severity}`,
       where: next.where,
@@ -49606,7 +51870,7 @@ function loosening(prev, next) {
   if (prev.kind === "spread-ceiling" && next.kind === "spread-ceiling") looser = next.max > prev.max;
   else if (prev.kind === "no-new-spof" && next.kind === "no-new-spof") {
     looser = prev.bridges && !next.bridges || prev.cutNodes && !next.cutNodes || prev.riskGroups && !next.riskGroups;
-    if (!looser && SEVERITY_RANK[next.hardenedWeakPoints] < SEVERITY_RANK[prev.hardenedWeakPoints]) {
+    if (!looser && SEVERITY_RANK2[next.hardenedWeakPoints] < SEVERITY_RANK2[prev.hardenedWeakPoints]) {
       return {
         message: `lowers hardened-weak-points of ${prev.id} from ${prev.hardenedWeakPoints} to ${next.hardenedWeakPoints}`,
         where: next.hardenedWhere ?? next.where,
@@ -49624,9 +51888,12 @@ function loosening(prev, next) {
   };
 }
 function loosenError(what, why, where, prevWhere) {
-  return new PolicyError(`${what} ${why}`, where, "an inheriting policy or a scope may tighten a floor, never loosen it", [
-    related(prevWhere, "the floor it would loosen")
-  ]);
+  return new PolicyError(
+    `${what} ${why}`,
+    where,
+    "an inheriting policy or a scope may tighten a floor, never loosen it",
+    [related(prevWhere, "the floor it would loosen")]
+  );
 }
 function mergeRequirement(list, next, what) {
   const i = list.findIndex((r) => r.value.id === next.value.id);
@@ -49665,7 +51932,7 @@ function mergeWeakening(prev, next, what) {
   }
   const sevAt = next.value.fieldWhere.severity;
   if (sevAt) {
-    if (SEVERITY_RANK[next.value.severity] < SEVERITY_RANK[prev.value.severity]) {
+    if (SEVERITY_RANK2[next.value.severity] < SEVERITY_RANK2[prev.value.severity]) {
       if (!mayLoosen) {
         throw loosenError(
           what,
@@ -49682,7 +51949,7 @@ function mergeWeakening(prev, next, what) {
   return { value: merged, layer: Math.max(prev.layer, next.layer) };
 }
 function mergeRemoved(prev, next, what) {
-  if (SEVERITY_RANK[next.value.severity] >= SEVERITY_RANK[prev.value.severity]) return next;
+  if (SEVERITY_RANK2[next.value.severity] >= SEVERITY_RANK2[prev.value.severity]) return next;
   if (next.layer < prev.layer) return prev;
   throw loosenError(
     what,
@@ -49695,7 +51962,8 @@ function visits(n) {
   return n >= 1e6 ? n.toExponential().replace("e+", "e") : String(n);
 }
 function bindingKey(b) {
-  if (b.seconds !== void 0 && (b.work === void 0 || b.seconds * ENGINE_VISITS_PER_SECOND <= b.work)) return "seconds";
+  if (b.seconds !== void 0 && (b.work === void 0 || b.seconds * ENGINE_VISITS_PER_SECOND <= b.work))
+    return "seconds";
   return b.work !== void 0 ? "work" : void 0;
 }
 function describeBudget(b) {
@@ -49732,7 +52000,10 @@ function checkRequirement(r, challenges2, what) {
   if (r.kind === "n-1" || r.kind === "no-new-spof") return r;
   const c = challenges2.find((x) => x.name === r.challenge);
   if (!c) {
-    const near = closest(r.challenge, challenges2.map((x) => x.name));
+    const near = closest(
+      r.challenge,
+      challenges2.map((x) => x.name)
+    );
     throw new PolicyError(
       `${what} refers to challenge "${r.challenge}", which the policy does not define`,
       r.challengeWhere,
@@ -49816,19 +52087,33 @@ function readChain(entry, read) {
   let from;
   for (; ; ) {
     if (seen.has(path3)) {
-      throw new PolicyError(`"inherits" goes round in a circle back to ${path3}`, from ?? { file: path3 }, "remove one of the inherits lines");
+      throw new PolicyError(
+        `"inherits" goes round in a circle back to ${path3}`,
+        from ?? { file: path3 },
+        "remove one of the inherits lines"
+      );
     }
     seen.add(path3);
     let text2;
     try {
       text2 = read(path3);
     } catch (e) {
-      if (e instanceof EncodingError) throw new PolicyError(e.message, { file: e.file, line: e.line, column: e.column }, e.hint);
+      if (e instanceof EncodingError)
+        throw new PolicyError(e.message, { file: e.file, line: e.line, column: e.column }, e.hint);
       throw e;
     }
     if (text2 === null) {
-      if (from) throw new PolicyError(`the base policy ${path3} does not exist`, from, "check the path; it is relative to this file");
-      throw new PolicyError(`the policy file ${path3} does not exist`, { file: path3 }, 'run "netbrace init" to write one');
+      if (from)
+        throw new PolicyError(
+          `the base policy ${path3} does not exist`,
+          from,
+          "check the path; it is relative to this file"
+        );
+      throw new PolicyError(
+        `the policy file ${path3} does not exist`,
+        { file: path3 },
+        'run "netbrace init" to write one'
+      );
     }
     const file = parsePolicyFile(text2, path3);
     chain2.unshift(file);
@@ -49849,7 +52134,7 @@ function mergeChain(chain2) {
   const base = builtin();
   const challenges2 = /* @__PURE__ */ new Map();
   for (const c of root.challenges ?? base.challenges ?? []) challenges2.set(c.name, c);
-  let rValue = { spec: (root.rValue ?? base.rValue).spec, where: (root.rValue ?? base.rValue).where };
+  const rValue = { spec: (root.rValue ?? base.rValue).spec, where: (root.rValue ?? base.rValue).where };
   checkMetrics(rValue.spec, rValue.where);
   let designs = root.designs ?? base.designs ?? [];
   const exclude = [...root.exclude?.globs ?? []];
@@ -49913,8 +52198,8 @@ function mergeChain(chain2) {
     (file, layer) => file.scopes.forEach((o, i) => {
       const what = (r) => describeRequirementSite(file, r, i);
       const requirementsChecked = o.requirements.map((r) => checkRequirement(r, challengeList, what(r)));
-      const scratch = checked.map((r) => ({ ...r }));
-      for (const r of requirementsChecked) mergeRequirement(scratch, { value: r, layer }, what(r));
+      const scratch2 = checked.map((r) => ({ ...r }));
+      for (const r of requirementsChecked) mergeRequirement(scratch2, { value: r, layer }, what(r));
       if (o.weakening) mergeWeakening(weakening, { value: o.weakening, layer }, `scope ${i + 1}, weakening`);
       if (o.removedDesigns) mergeRemoved(removed, { value: o.removedDesigns, layer }, `scope ${i + 1}`);
       if (o.budget) mergeBudget(budget, { value: o.budget, layer }, `scope ${i + 1}`);
@@ -49935,7 +52220,12 @@ function mergeChain(chain2) {
     removedDesigns: removed.value,
     budget: budget.value,
     scopes,
-    layers: { requirements: checked.map((r) => r.layer), weakening: weakening.layer, removed: removed.layer, budget: budget.layer },
+    layers: {
+      requirements: checked.map((r) => r.layer),
+      weakening: weakening.layer,
+      removed: removed.layer,
+      budget: budget.layer
+    },
     ...mend ? { mend } : {}
   };
 }
@@ -49955,7 +52245,9 @@ function isDesignPath(policy, path3) {
   return policy.designs.some((d) => globsMatch(d.paths, path3)) && !globsMatch(policy.exclude, path3);
 }
 function designNeedsHeader(policy, path3) {
-  const matching = policy.designs.flatMap((d) => d.paths.filter((g) => globsMatch([g], path3)).map((g) => ({ g, format: d.format })));
+  const matching = policy.designs.flatMap(
+    (d) => d.paths.filter((g) => globsMatch([g], path3)).map((g) => ({ g, format: d.format }))
+  );
   return matching.length > 0 && matching.every((m) => m.g === CSV_DESIGN_GLOB && m.format === void 0);
 }
 function isDesignText(policy, path3, text2) {
@@ -49967,9 +52259,15 @@ function designFormat(policy, path3) {
 }
 function policyForFile(policy, path3) {
   const layers = policy.layers;
-  const requirements = policy.requirements.map((value2, i) => ({ value: value2, layer: layers.requirements[i] }));
+  const requirements = policy.requirements.map((value2, i) => ({
+    value: value2,
+    layer: layers.requirements[i]
+  }));
   let weakening = { value: policy.weakening, layer: layers.weakening };
-  let removed = { value: policy.removedDesigns, layer: layers.removed };
+  let removed = {
+    value: policy.removedDesigns,
+    layer: layers.removed
+  };
   let budget = { value: policy.budget, layer: layers.budget };
   for (const o of policy.scopes) {
     if (!globsMatch(o.paths, path3)) continue;
@@ -49989,29 +52287,14 @@ function policyForFile(policy, path3) {
     requirements: requirements.map((r) => r.value),
     weakening: weakening.value,
     removedDesigns: removed.value.severity,
-    budget: { ...b.work !== void 0 ? { work: b.work } : {}, ...b.seconds !== void 0 ? { seconds: b.seconds } : {}, maxWork: budgetWork(b) },
+    budget: {
+      ...b.work !== void 0 ? { work: b.work } : {},
+      ...b.seconds !== void 0 ? { seconds: b.seconds } : {},
+      maxWork: budgetWork(b)
+    },
     ...format ? { format } : {},
     ...policy.mend ? { mend: policy.mend } : {}
   };
-}
-
-// src/report/report.ts
-var REPORT_VERSION = 1;
-var CAUTION = "netbrace evaluates topology-level robustness under the stated assumptions (the metrics, challenges and removal models in the policy). It informs engineering judgement; it does not replace engineering studies. Local codes, regulators’ standards and licensed practice decide for real infrastructure, power systems especially.";
-var REPORT_DIGITS = 12;
-function serializeReport(report) {
-  return `${JSON.stringify(
-    report,
-    (_key, value2) => {
-      if (typeof value2 !== "number") return value2;
-      if (!Number.isFinite(value2)) return null;
-      if (Number.isInteger(value2)) return value2;
-      const rounded = Number(value2.toPrecision(REPORT_DIGITS));
-      return Object.is(rounded, -0) ? 0 : rounded;
-    },
-    2
-  )}
-`;
 }
 
 // node_modules/graphology/dist/graphology.mjs
@@ -54418,7 +56701,8 @@ function buildDesignMap(head, base) {
     if (g.linkHardened[e]) link.hardened = true;
     const groups2 = [];
     for (let k = 0; k < g.groupIds.length; k++) {
-      for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++) if (g.groupLinks[p] === e) groups2.push(g.groupIds[k]);
+      for (let p = g.groupOffsets[k]; p < g.groupOffsets[k + 1]; p++)
+        if (g.groupLinks[p] === e) groups2.push(g.groupIds[k]);
     }
     if (groups2.length) link.groups = groups2;
     links.push(link);
@@ -54431,7 +56715,9 @@ function buildDesignMap(head, base) {
     for (let e = 0; e < b.m; e++) if (!headKeys.has(b.linkKeys[e])) addLink(b, e, "base");
   }
   if (nodes.length > MAP_MAX_NODES || links.length > MAP_MAX_LINKS) {
-    return { omitted: `${nodes.length} sites and ${links.length} links, base and head together: more than a map shows legibly (${MAP_MAX_NODES} sites, ${MAP_MAX_LINKS} links)` };
+    return {
+      omitted: `${nodes.length} sites and ${links.length} links, base and head together: more than a map shows legibly (${MAP_MAX_NODES} sites, ${MAP_MAX_LINKS} links)`
+    };
   }
   const located = nodes.map((_, i) => Number.isFinite(lat[i]) && Number.isFinite(lon[i]));
   const nLocated = located.filter(Boolean).length;
@@ -54442,7 +56728,10 @@ function buildDesignMap(head, base) {
   if (nLocated >= 2) {
     layout = "geographic";
     const idx = nodes.map((_, i) => i).filter((i) => located[i]);
-    const placed = projectGeographic(idx.map((i) => lat[i]), idx.map((i) => lon[i]));
+    const placed = projectGeographic(
+      idx.map((i) => lat[i]),
+      idx.map((i) => lon[i])
+    );
     width = placed.width;
     height = placed.height;
     const x = new Float64Array(nodes.length).fill(Number.NaN);
@@ -54460,7 +56749,10 @@ function buildDesignMap(head, base) {
     method = "sites at their coordinates: equirectangular projection centred on the design, fitted to its extent" + (nLocated < nodes.length ? `; ${nodes.length - nLocated} site${nodes.length - nLocated === 1 ? "" : "s"} without coordinates placed beside their neighbours` : "");
   } else {
     layout = "force";
-    const placed = forceLayout(nodes.map((n) => n.id), edges);
+    const placed = forceLayout(
+      nodes.map((n) => n.id),
+      edges
+    );
     width = placed.width;
     height = placed.height;
     nodes.forEach((node, i) => {
@@ -54536,13 +56828,19 @@ function parseCandidateFile(text2, file, g) {
   };
   if (doc.errors.length > 0) {
     const p = lines.linePos(doc.errors[0].pos[0]);
-    throw new PolicyError(`the candidate list is not valid YAML: ${doc.errors[0].message.split("\n")[0]}`, { file, line: p.line, column: p.col }, "check the indentation and quoting on this line");
+    throw new PolicyError(
+      `the candidate list is not valid YAML: ${doc.errors[0].message.split("\n")[0]}`,
+      { file, line: p.line, column: p.col },
+      "check the indentation and quoting on this line"
+    );
   }
   const root = doc.contents;
   const hint = 'write "candidates:" followed by a list of {between: [a, b], length_km: …}';
-  if (!(0, import_yaml5.isMap)(root)) throw new PolicyError('the candidate list must be a mapping with a "candidates" list', at(root), hint);
+  if (!(0, import_yaml5.isMap)(root))
+    throw new PolicyError('the candidate list must be a mapping with a "candidates" list', at(root), hint);
   const pair = root.items.find((p) => (0, import_yaml5.isScalar)(p.key) && p.key.value === "candidates");
-  if (!pair || !(0, import_yaml5.isSeq)(pair.value)) throw new PolicyError('the candidate list has no "candidates" list', at(pair?.value ?? root), hint);
+  if (!pair || !(0, import_yaml5.isSeq)(pair.value))
+    throw new PolicyError('the candidate list has no "candidates" list', at(pair?.value ?? root), hint);
   const list = [];
   const notes = [];
   const missing2 = /* @__PURE__ */ new Set();
@@ -54552,36 +56850,50 @@ function parseCandidateFile(text2, file, g) {
     const get = (k) => item.items.find((p) => (0, import_yaml5.isScalar)(p.key) && p.key.value === k);
     for (const p of item.items) {
       const k = (0, import_yaml5.isScalar)(p.key) ? String(p.key.value) : "";
-      if (!KEYS.has(k)) throw new PolicyError(`${what}: unknown key "${k}"`, at(p.key), `known keys: ${[...KEYS].join(", ")}`);
+      if (!KEYS.has(k))
+        throw new PolicyError(`${what}: unknown key "${k}"`, at(p.key), `known keys: ${[...KEYS].join(", ")}`);
     }
     const between = get("between");
     const ends = between && (0, import_yaml5.isSeq)(between.value) ? between.value.items : null;
     if (!ends || ends.length !== 2 || !ends.every((e) => (0, import_yaml5.isScalar)(e) && (typeof e.value === "string" || typeof e.value === "number"))) {
-      throw new PolicyError(`${what}: "between" must list two site ids`, at(between?.value ?? item), "e.g. between: [north, south]");
+      throw new PolicyError(
+        `${what}: "between" must list two site ids`,
+        at(between?.value ?? item),
+        "e.g. between: [north, south]"
+      );
     }
     const [s, t] = ends.map((e) => String(e.value));
-    if (s === t) throw new PolicyError(`${what}: a link from a site to itself adds nothing`, at(ends[1]), "name two different sites");
+    if (s === t)
+      throw new PolicyError(
+        `${what}: a link from a site to itself adds nothing`,
+        at(ends[1]),
+        "name two different sites"
+      );
     const num3 = (k) => {
       const p = get(k);
       if (!p) return void 0;
       const v = (0, import_yaml5.isScalar)(p.value) ? p.value.value : void 0;
-      if (typeof v !== "number" || !Number.isFinite(v) || v < 0) throw new PolicyError(`${what}: "${k}" must be a number ≥ 0`, at(p.value), "");
+      if (typeof v !== "number" || !Number.isFinite(v) || v < 0)
+        throw new PolicyError(`${what}: "${k}" must be a number ≥ 0`, at(p.value), "");
       return v;
     };
     const str = (k) => {
       const p = get(k);
       if (!p) return void 0;
       const v = (0, import_yaml5.isScalar)(p.value) ? p.value.value : void 0;
-      if (typeof v !== "string" && typeof v !== "number") throw new PolicyError(`${what}: "${k}" must be text`, at(p.value), "");
+      if (typeof v !== "string" && typeof v !== "number")
+        throw new PolicyError(`${what}: "${k}" must be text`, at(p.value), "");
       return String(v);
     };
     const lengthKm = num3("length_km");
     const cost = num3("cost");
-    if (lengthKm === void 0 && cost === void 0) throw new PolicyError(`${what} has neither "length_km" nor "cost"`, at(item), "give its length or its cost");
+    if (lengthKm === void 0 && cost === void 0)
+      throw new PolicyError(`${what} has neither "length_km" nor "cost"`, at(item), "give its length or its cost");
     const rg = get("risk_groups");
     let riskGroups2;
     if (rg) {
-      if (!(0, import_yaml5.isSeq)(rg.value) || !rg.value.items.every((x) => (0, import_yaml5.isScalar)(x))) throw new PolicyError(`${what}: "risk_groups" must be a list of ids`, at(rg.value), "");
+      if (!(0, import_yaml5.isSeq)(rg.value) || !rg.value.items.every((x) => (0, import_yaml5.isScalar)(x)))
+        throw new PolicyError(`${what}: "risk_groups" must be a list of ids`, at(rg.value), "");
       riskGroups2 = rg.value.items.map((x) => String(x.value));
     }
     const a = g.nodeIndex.get(s);
@@ -54604,7 +56916,9 @@ function parseCandidateFile(text2, file, g) {
   });
   if (missing2.size > 0) {
     const names = [...missing2].slice(0, 5).join(", ");
-    notes.push(`candidates naming sites this design does not have were skipped (${names}${missing2.size > 5 ? ", …" : ""})`);
+    notes.push(
+      `candidates naming sites this design does not have were skipped (${names}${missing2.size > 5 ? ", …" : ""})`
+    );
   }
   return { list, unit: unitOf(list), source: "list", notes };
 }
@@ -54644,25 +56958,34 @@ function generateCandidates(g, options = {}) {
       if (d <= maxKm) list.push({ a, b, lengthKm: Math.round(d * routeFactor * 10) / 10, source: "generated" });
     };
     if (located.length <= GEO_ALL_PAIRS_LIMIT) {
-      for (let i = 0; i < located.length; i++) for (let j = i + 1; j < located.length; j++) consider(located[i], located[j]);
+      for (let i = 0; i < located.length; i++)
+        for (let j = i + 1; j < located.length; j++) consider(located[i], located[j]);
     } else {
       for (const [a, b] of nearPairs(g)) if (hasCoords(a) && hasCoords(b)) consider(a, b);
       notes.push(`${located.length} located sites: only pairs within ${MAX_HOPS} hops were considered`);
     }
     list.sort((x, y) => x.lengthKm - y.lengthKm || x.a - y.a || x.b - y.b);
     if (list.length > MAX_GENERATED) {
-      notes.push(`${list.length} site pairs lie within ${round13(maxKm)} km; the ${MAX_GENERATED} shortest were considered`);
+      notes.push(
+        `${list.length} site pairs lie within ${round13(maxKm)} km; the ${MAX_GENERATED} shortest were considered`
+      );
       list.length = MAX_GENERATED;
     }
-    if (located.length < g.n) notes.push(`${g.n - located.length} sites have no coordinates and get no generated candidate`);
+    if (located.length < g.n)
+      notes.push(`${g.n - located.length} sites have no coordinates and get no generated candidate`);
     return { list, unit: "km", source: "generated", routeFactor, maxKm: round13(maxKm), notes };
   }
   if (g.n <= ALL_PAIRS_LIMIT) {
-    for (let a = 0; a < g.n; a++) for (let b = a + 1; b < g.n; b++) if (!joined.has(a * g.n + b)) list.push({ a, b, source: "generated" });
-    notes.push("the design has no coordinates: every pair of sites not yet joined is a candidate, and lengths are unknown");
+    for (let a = 0; a < g.n; a++)
+      for (let b = a + 1; b < g.n; b++) if (!joined.has(a * g.n + b)) list.push({ a, b, source: "generated" });
+    notes.push(
+      "the design has no coordinates: every pair of sites not yet joined is a candidate, and lengths are unknown"
+    );
   } else {
     for (const [a, b] of nearPairs(g)) list.push({ a, b, source: "generated" });
-    notes.push(`the design has no coordinates: site pairs within ${MAX_HOPS} hops are the candidates, and lengths are unknown`);
+    notes.push(
+      `the design has no coordinates: site pairs within ${MAX_HOPS} hops are the candidates, and lengths are unknown`
+    );
   }
   return { list, unit: "link", source: "generated", notes };
 }
@@ -54763,7 +57086,10 @@ function solveCover(p) {
   let incompleteBelow = false;
   const residual = (set) => {
     expansions++;
-    const g = withExtraLinks(p.g, set.map((c) => p.pairs[c]));
+    const g = withExtraLinks(
+      p.g,
+      set.map((c) => p.pairs[c])
+    );
     const cuts = findCutElements(g);
     const isBridge = new Set(cuts.bridges);
     const isCut = new Set(cuts.cutNodes);
@@ -54799,7 +57125,13 @@ function solveCover(p) {
         const dist2 = new Int32Array(f.pieces).fill(-1);
         const queue2 = [leaf];
         dist2[leaf] = 0;
-        for (let h = 0; h < queue2.length; h++) for (const w of adj[queue2[h]]) if (dist2[w] === -1) dist2[w] = dist2[queue2[h]] + 1, queue2.push(w);
+        for (let h = 0; h < queue2.length; h++) {
+          for (const w of adj[queue2[h]]) {
+            if (dist2[w] !== -1) continue;
+            dist2[w] = dist2[queue2[h]] + 1;
+            queue2.push(w);
+          }
+        }
         return dist2;
       };
       let bestLeaf = -1;
@@ -54862,7 +57194,7 @@ function solveCover(p) {
     if (found.size < p.keep) return Infinity;
     return Math.max(...[...found.values()].map((x) => x.price));
   };
-  let depthComplete = true;
+  let depthComplete;
   let everIncomplete = false;
   const seen = /* @__PURE__ */ new Set();
   const dfs = (set, r, limit) => {
@@ -54984,9 +57316,18 @@ var STRUCTURAL_KEEP = 3;
 var SUGGESTIONS_KEPT = 5;
 var FIEDLER_LIMIT = 2e4;
 var R_DEFINITION = "R̄: the mean area of the policy’s random-failure envelopes (the mean of each median R over its grid); without envelopes, of its attack curves";
-var FIXABLE = /* @__PURE__ */ new Set(["new-bridge", "new-cut-node", "r-threshold", "area-floor", "spread-ceiling", "n-1", "regression"]);
+var FIXABLE = /* @__PURE__ */ new Set([
+  "new-bridge",
+  "new-cut-node",
+  "r-threshold",
+  "area-floor",
+  "spread-ceiling",
+  "n-1",
+  "regression"
+]);
 function targetKey(f) {
-  if (f.rule === "new-bridge" || f.rule === "new-cut-node") return `${f.rule}|${f.elements.map((e) => e.id).join("\0")}`;
+  if (f.rule === "new-bridge" || f.rule === "new-cut-node")
+    return `${f.rule}|${f.elements.map((e) => e.id).join("\0")}`;
   return `${f.rule}|${f.requirement ?? ""}`;
 }
 function mendTargets(report) {
@@ -55002,7 +57343,14 @@ function mendTargets(report) {
     const key = targetKey(f);
     if (seen.has(key)) continue;
     seen.add(key);
-    const t = { key, rule: f.rule, severity: f.severity, message: f.message, elements: f.elements, line: f.line };
+    const t = {
+      key,
+      rule: f.rule,
+      severity: f.severity,
+      message: f.message,
+      elements: f.elements,
+      line: f.line
+    };
     if (f.requirement !== void 0) t.requirement = f.requirement;
     out.push(t);
   }
@@ -55113,7 +57461,10 @@ async function mendDesign(ctx) {
   if (!ranked) notes.push(`more than ${FIEDLER_LIMIT} sites: candidates are not ranked by algebraic connectivity`);
   const scoreOf = (extra) => {
     if (!ranked) return pairs.map(() => 0);
-    const f = fiedler(g, extra.map((c) => pairs[c]));
+    const f = fiedler(
+      g,
+      extra.map((c) => pairs[c])
+    );
     return pairs.map(([a, b]) => ghoshBoydScore(f, a, b));
   };
   const scores = scoreOf([]);
@@ -55180,7 +57531,8 @@ async function mendDesign(ctx) {
       if (!best || current && !better(best, current)) break;
       current = best;
     }
-    if (!holds(current) && out.evaluations >= linkBudget()) notes.push(`the search stopped after ${out.evaluations} engine evaluations (its limit)`);
+    if (!holds(current) && out.evaluations >= linkBudget())
+      notes.push(`the search stopped after ${out.evaluations} engine evaluations (its limit)`);
   } else if (targets.some((t) => t.rule !== "new-bridge" && t.rule !== "new-cut-node")) {
     notes.push("there are no candidate links to try");
   }
@@ -55199,7 +57551,16 @@ async function mendDesign(ctx) {
     const j = await judgeSet([], { links: [], harden: hardenTargets });
     if (j) {
       out.suggestions.push(
-        suggestion2(j, "harden", "harden the elements of the new single points of failure (they then never fail in any challenge); judged by the engine", targets, ctx.report, rBefore, prices, cand.unit)
+        suggestion2(
+          j,
+          "harden",
+          "harden the elements of the new single points of failure (they then never fail in any challenge); judged by the engine",
+          targets,
+          ctx.report,
+          rBefore,
+          prices,
+          cand.unit
+        )
       );
     }
   }
@@ -55270,7 +57631,13 @@ function suggestion2(j, kind, method, targets, before, rBefore, prices, unit) {
   const afterRows = new Map(j.report.requirements.map((r) => [r.id, r]));
   const requirements = before.requirements.filter((r) => wanted.has(r.id)).map((r) => {
     const a = afterRows.get(r.id);
-    return { id: r.id, description: r.description, before: r.head, after: a?.head ?? null, status: a?.status ?? "unsettled" };
+    return {
+      id: r.id,
+      description: r.description,
+      before: r.head,
+      after: a?.head ?? null,
+      status: a?.status ?? "unsettled"
+    };
   });
   return {
     kind,
@@ -55288,6 +57655,298 @@ function suggestion2(j, kind, method, targets, before, rBefore, prices, unit) {
     requirements,
     method
   };
+}
+
+// src/gate/split.ts
+function batchOwner(from, total) {
+  return Math.floor(from / BATCH) % total + 1;
+}
+function encodeValues(values) {
+  const points = values.length ? values[0].length : 0;
+  const bytes = new Uint8Array(values.length * points * 8);
+  const view = new DataView(bytes.buffer);
+  values.forEach((row, r) => row.forEach((v, j) => view.setFloat64((r * points + j) * 8, v, true)));
+  let text2 = "";
+  for (let i = 0; i < bytes.length; i += 32768) text2 += String.fromCharCode(...bytes.subarray(i, i + 32768));
+  return btoa(text2);
+}
+function decodeValues(text2, rows, points, name) {
+  let binary;
+  try {
+    binary = atob(text2);
+  } catch {
+    throw new UsageError(`${name} holds samples that are not base64`, "pass the part reports as netbrace wrote them");
+  }
+  if (binary.length !== rows * points * 8)
+    throw new UsageError(
+      `${name} holds ${binary.length / 8} sample values where ${rows * points} belong`,
+      "pass the part reports as netbrace wrote them"
+    );
+  const view = new DataView(Uint8Array.from(binary, (c) => c.charCodeAt(0)).buffer);
+  return Array.from(
+    { length: rows },
+    (_, r) => Float64Array.from({ length: points }, (_2, j) => view.getFloat64((r * points + j) * 8, true))
+  );
+}
+function sampleKey(path3, side, challenge, from, to) {
+  return `${path3}\0${side}\0${challenge}\0${from}\0${to}`;
+}
+function joinInput(reports) {
+  if (reports.length === 0)
+    throw new UsageError("there are no part reports to join", "pass the JSON report of every part");
+  const totals = /* @__PURE__ */ new Set();
+  const seen = /* @__PURE__ */ new Map();
+  reports.forEach((r, i) => {
+    if (!r.part)
+      throw new UsageError(
+        `report ${i + 1} is not a part report (it has no part k/n)`,
+        'join only the reports of "netbrace check --part K/N"'
+      );
+    totals.add(r.part.total);
+    if (seen.has(r.part.index))
+      throw new UsageError(
+        `part ${r.part.index}/${r.part.total} is given twice (reports ${seen.get(r.part.index) + 1} and ${i + 1})`,
+        "pass each part once"
+      );
+    seen.set(r.part.index, i);
+  });
+  if (totals.size > 1)
+    throw new UsageError(
+      `the part reports are of different splits (${[...totals].sort((a, b) => a - b).join(", ")} parts)`,
+      "join the parts of one run"
+    );
+  const total = [...totals][0];
+  const missing2 = Array.from({ length: total }, (_, k) => k + 1).filter((k) => !seen.has(k));
+  if (missing2.length) {
+    throw new UsageError(
+      `part ${missing2.map((k) => `${k}/${total}`).join(", ")} ${missing2.length === 1 ? "is" : "are"} missing`,
+      "pass the report of every part: each judges designs no other part judges"
+    );
+  }
+  const files = /* @__PURE__ */ new Map();
+  const split = /* @__PURE__ */ new Set();
+  const samples = /* @__PURE__ */ new Map();
+  for (const r of reports) {
+    for (const f of r.files) if (!files.has(f.path)) files.set(f.path, f);
+    for (const d of r.split ?? []) {
+      split.add(d.path);
+      for (const s of d.samples)
+        samples.set(sampleKey(d.path, s.side, s.challenge, s.from, s.to), {
+          values: s.values,
+          points: s.points,
+          part: r.part.index
+        });
+    }
+  }
+  return { total, files, split, samples, reports };
+}
+function rangesText(d) {
+  const spans = [...new Set(d.samples.filter((s) => s.side === "head").map((s) => `${s.from}:${s.to}`))].map((s) => s.split(":").map(Number)).sort((a, b) => a[0] - b[0]);
+  const merged = [];
+  for (const [a, b] of spans) {
+    const last = merged[merged.length - 1];
+    if (last && last[1] === a) last[1] = b;
+    else merged.push([a, b]);
+  }
+  return merged.map(([a, b]) => `${a + 1}–${b}`).join(", ");
+}
+
+// src/gate-request.ts
+function evaluationSpecs(fp, seed) {
+  const challenges2 = fp.challenges.map((c) => {
+    const at = fp.requirements.filter((r) => r.kind === "r-threshold" && r.challenge === c.name && r.at !== void 0).map((r) => r.kind === "r-threshold" ? r.at : 0);
+    const params = { ...c.params };
+    if (c.random && at.length > 0) params.at = [...new Set(at)].sort((a, b) => a - b);
+    return params;
+  });
+  const elements = [...new Set(fp.requirements.flatMap((r) => r.kind === "n-1" ? [r.element] : []))].sort();
+  const budget = { maxWork: fp.budget.maxWork };
+  const specs = [{ r: fp.rValue, challenges: challenges2, seed, budget }];
+  elements.forEach((element, i) => {
+    const n1 = { challenge: "n-1", element };
+    if (i === 0) specs[0].challenges.push(n1);
+    else specs.push({ r: fp.rValue, challenges: [n1], seed, budget });
+  });
+  return specs;
+}
+function joinEvaluations(parts) {
+  if (parts.length === 1) return parts[0];
+  const [first, ...rest] = parts;
+  const evaluation = { ...first.evaluation };
+  evaluation.envelopes = [...first.evaluation.envelopes];
+  evaluation.attacks = [...first.evaluation.attacks];
+  evaluation.contingencies = [...first.evaluation.contingencies];
+  evaluation.degraded = [...first.evaluation.degraded];
+  const notApplicable = [...first.evaluation.notApplicable ?? []];
+  const samples = new Map(first.samples);
+  const labels2 = new Map(first.labels);
+  for (const p of rest) {
+    evaluation.envelopes.push(...p.evaluation.envelopes);
+    evaluation.attacks.push(...p.evaluation.attacks);
+    evaluation.contingencies.push(...p.evaluation.contingencies);
+    evaluation.degraded.push(...p.evaluation.degraded);
+    notApplicable.push(...p.evaluation.notApplicable ?? []);
+    for (const [k, v] of p.samples) samples.set(k, v);
+    for (const [k, v] of p.labels) labels2.set(k, v);
+  }
+  if (notApplicable.length) evaluation.notApplicable = notApplicable;
+  else delete evaluation.notApplicable;
+  return { evaluation, samples, labels: labels2 };
+}
+async function evaluateGraph(g, topology, specs, cuts, request2, deps) {
+  const runTasks = deps.runTasks;
+  const evaluate = deps.evaluate ?? (runTasks ? async (graph, spec, threads) => {
+    const st = stageEvaluation(graph, spec);
+    const results = await runTasks(graph, st.plan, st.tasks, threads);
+    return assembleEvaluation(graph, st.plan, st.tasks, results);
+  } : (graph, spec) => evaluateDesign(graph, spec));
+  const parts = [];
+  for (const [i, spec] of specs.entries()) {
+    const part = await evaluate(g, spec, request2.threads);
+    notePairedCuts(part, cuts, i);
+    parts.push(part);
+  }
+  return { graph: g, result: joinEvaluations(parts), topology };
+}
+var SEQUENTIAL_MIN_WORK = 5e8;
+function unreducedWork(specs, head, base) {
+  const work = (g) => specs.reduce((s, spec) => s + planEvaluation(g, { ...spec, budget: { maxWork: Infinity } }).work, 0);
+  return Math.max(work(head), base ? work(base) : 0);
+}
+function sequentialRun(request2, specs, head, base) {
+  if (request2.sequential !== void 0) return request2.sequential;
+  return unreducedWork(specs, head, base) > SEQUENTIAL_MIN_WORK;
+}
+function splitAcrossParts(total, specs, head, base) {
+  if (total < 2) return false;
+  const most = Math.max(
+    0,
+    ...[head, ...base ? [base] : []].flatMap((g) => specs.map((spec) => stagedMaximum(stageEvaluation(g, spec))))
+  );
+  return most > BATCH && unreducedWork(specs, head, base) > SEQUENTIAL_MIN_WORK;
+}
+function localTasks(g, plan, tasks) {
+  return tasks.map((t) => runTask(g, plan, t));
+}
+async function splitShare(path3, part, sides, request2, deps) {
+  const run2 = deps.runTasks ?? localTasks;
+  const out = { path: path3, realizations: 0, samples: [] };
+  for (const { side, graph, specs } of sides) {
+    for (const spec of specs) {
+      const st = stageEvaluation(graph, spec);
+      out.realizations = Math.max(out.realizations, stagedMaximum(st));
+      const mine = st.tasks.filter(
+        (t) => t.type === "band" && batchOwner(t.from, part.total) === part.index
+      );
+      if (mine.length === 0) continue;
+      const results = await run2(graph, st.plan, mine, request2.threads);
+      mine.forEach((t, k) => {
+        const res = results[k];
+        if (res.type !== "band") throw new TypeError("a band task returned another result");
+        const points = res.values.length ? res.values[0].length : 0;
+        out.samples.push({
+          side,
+          challenge: st.plan.items[t.item].params.challenge,
+          from: t.from,
+          to: t.to,
+          points,
+          values: encodeValues(res.values)
+        });
+      });
+    }
+  }
+  return out;
+}
+function servedTasks(join3, path3, head, base, deps) {
+  const run2 = deps.runTasks ?? localTasks;
+  return async (g, plan, tasks, threads) => {
+    const side = g === head ? "head" : base !== void 0 && g === base ? "base" : void 0;
+    if (side === void 0) return run2(g, plan, tasks, threads);
+    const out = tasks.map((t) => {
+      if (t.type !== "band") return void 0;
+      const found = join3.samples.get(sampleKey(path3, side, plan.items[t.item].params.challenge, t.from, t.to));
+      if (!found) {
+        const owner = batchOwner(t.from, join3.total);
+        throw new UsageError(
+          `part ${owner}/${join3.total} holds no realizations ${t.from + 1}–${t.to} of ${path3} (${side})`,
+          "join the part reports of one run: the same revisions, policy and seed"
+        );
+      }
+      return {
+        type: "band",
+        values: decodeValues(found.values, t.to - t.from, found.points, `part ${found.part}/${join3.total}`)
+      };
+    });
+    const rest = tasks.filter((_t, i) => out[i] === void 0);
+    const computed = rest.length ? await run2(g, plan, rest, threads) : [];
+    let k = 0;
+    return out.map((r) => r ?? computed[k++]);
+  };
+}
+async function evaluateSequentially(fp, head, base, specs, comparing, request2, deps) {
+  const run2 = deps.runTasks ?? ((g, plan, tasks) => tasks.map((t) => runTask(g, plan, t)));
+  const stagesOf = (g, list) => list.map((spec) => stageEvaluation(g, spec));
+  const headStages = stagesOf(head.graph, specs.head);
+  const baseStages = base ? stagesOf(base.graph, specs.base) : [];
+  const most = Math.max(0, ...[...headStages, ...baseStages].map(stagedMaximum));
+  const needed = /* @__PURE__ */ new Map();
+  const snapshot = (stages, upto) => {
+    const joined = joinEvaluations(
+      stages.map((st, i) => {
+        const e = snapshotEvaluation(st, upto);
+        notePairedCuts(e, specs.cuts, i);
+        return e;
+      })
+    );
+    return { ...joined, sequential: { needed } };
+  };
+  for (let upto = Math.min(BATCH, most); ; upto = Math.min(upto + BATCH, most)) {
+    for (const st of [...headStages, ...baseStages]) {
+      const pending = pendingTasks(st, upto);
+      if (pending.length === 0) continue;
+      const results = await run2(
+        st.g,
+        st.plan,
+        pending.map((i) => st.tasks[i]),
+        request2.threads
+      );
+      pending.forEach((i, k) => st.results[i] = results[k]);
+    }
+    const headSide = { graph: head.graph, result: snapshot(headStages, upto), topology: head.topology };
+    const baseSide = base ? { graph: base.graph, result: snapshot(baseStages, upto), topology: base.topology } : comparing ? headSide : void 0;
+    let open2 = false;
+    for (const r of fp.requirements) {
+      if (r.kind === "no-new-spof" || r.kind === "n-1") continue;
+      const c = fp.challenges.find((x) => x.name === r.challenge);
+      if (!c?.random || c.engine === "regional") continue;
+      const m = measure(r, fp.challenges, headSide, comparing ? baseSide : void 0);
+      if (m.missing !== void 0 || m.head === null) continue;
+      const threshold = r.kind === "spread-ceiling" ? r.max : r.min ?? null;
+      const withBase = comparing && baseSide !== void 0 && m.base !== null && m.unpaired === void 0;
+      const d = decide({
+        requirement: r,
+        challenge: c,
+        head: headSide.result,
+        ...withBase ? { base: baseSide.result } : {},
+        weakening: fp.weakening,
+        baseValue: withBase ? m.base : null,
+        threshold,
+        higherIsBetter: m.higherIsBetter
+      });
+      if (!d) continue;
+      const waiting = isOpen(d) || d.needsAll === true && !(d.floor === "below" && d.weakening === void 0);
+      if (waiting) {
+        open2 = true;
+        needed.delete(r.id);
+      } else if (!needed.has(r.id)) needed.set(r.id, upto);
+    }
+    if (!open2 || upto >= most) {
+      for (const r of fp.requirements)
+        if (!needed.has(r.id) && "challenge" in r && fp.challenges.find((x) => x.name === r.challenge)?.random)
+          needed.set(r.id, upto);
+      return { head: headSide, ...base ? { base: baseSide } : {} };
+    }
+  }
 }
 
 // src/topology/detect.ts
@@ -55389,7 +58048,10 @@ var design_schema_default = {
           }
         },
         hardened: { description: "Never removed by a challenge.", type: "boolean" },
-        attributes: { description: "Anything else known about the node (kept through conversions, e.g. a GraphML or GML attribute); netbrace ignores it otherwise.", type: "object" }
+        attributes: {
+          description: "Anything else known about the node (kept through conversions, e.g. a GraphML or GML attribute); netbrace ignores it otherwise.",
+          type: "object"
+        }
       }
     },
     link: {
@@ -55405,17 +58067,40 @@ var design_schema_default = {
           minItems: 2,
           maxItems: 2
         },
-        length_km: { description: "Length in km: 0, or from 1e-6 (1 mm) to 1e6 (25 times around the Earth).", type: "number", minimum: 0, maximum: 1e6 },
-        latency_ms: { description: "Latency in ms: 0, or from 1e-6 (1 ns) to 1e6 (1,000 s).", type: "number", minimum: 0, maximum: 1e6 },
-        capacity_gbps: { description: "Capacity in Gbit/s, informational: 0, or from 1e-9 (1 bit/s) to 1e9.", type: "number", minimum: 0, maximum: 1e9 },
-        weight: { description: "A routing weight without unit (e.g. an OSPF cost), the link's cost where it has no latency and no length: 0, or from 1e-9 to 1e9.", type: "number", minimum: 0, maximum: 1e9 },
+        length_km: {
+          description: "Length in km: 0, or from 1e-6 (1 mm) to 1e6 (25 times around the Earth).",
+          type: "number",
+          minimum: 0,
+          maximum: 1e6
+        },
+        latency_ms: {
+          description: "Latency in ms: 0, or from 1e-6 (1 ns) to 1e6 (1,000 s).",
+          type: "number",
+          minimum: 0,
+          maximum: 1e6
+        },
+        capacity_gbps: {
+          description: "Capacity in Gbit/s, informational: 0, or from 1e-9 (1 bit/s) to 1e9.",
+          type: "number",
+          minimum: 0,
+          maximum: 1e9
+        },
+        weight: {
+          description: "A routing weight without unit (e.g. an OSPF cost), the link's cost where it has no latency and no length: 0, or from 1e-9 to 1e9.",
+          type: "number",
+          minimum: 0,
+          maximum: 1e9
+        },
         risk_groups: {
           description: "Ids of the shared-risk link groups this link belongs to.",
           type: "array",
           items: { $ref: "#/definitions/id" }
         },
         hardened: { description: "Never removed by a challenge.", type: "boolean" },
-        attributes: { description: "Anything else known about the link (kept through conversions; `length_estimated: true` marks a length computed from the sites' coordinates); netbrace ignores it otherwise.", type: "object" }
+        attributes: {
+          description: "Anything else known about the link (kept through conversions; `length_estimated: true` marks a length computed from the sites' coordinates); netbrace ignores it otherwise.",
+          type: "object"
+        }
       }
     },
     riskGroup: {
@@ -55438,11 +58123,405 @@ var design_schema_default = {
           minItems: 2,
           maxItems: 2
         },
-        volume: { description: "Traffic volume in any consistent unit: 0, or from 1e-12 to 1e15.", type: "number", minimum: 0, maximum: 1e15 }
+        volume: {
+          description: "Traffic volume in any consistent unit: 0, or from 1e-12 to 1e15.",
+          type: "number",
+          minimum: 0,
+          maximum: 1e15
+        }
       }
     }
   }
 };
+
+// src/topology/fast-yaml.ts
+var Packed = class {
+  data = new Int32Array(1 << 16);
+  used = 0;
+  base = /* @__PURE__ */ new Map();
+  keyLists = [];
+  keyIds = /* @__PURE__ */ new Map();
+  sources = /* @__PURE__ */ new Map();
+  add(value2, w) {
+    const need = 3 + w.at.length;
+    if (this.used + need > this.data.length) {
+      const bigger = new Int32Array(Math.max(this.data.length * 2, this.used + need));
+      bigger.set(this.data.subarray(0, this.used));
+      this.data = bigger;
+    }
+    const b = this.used;
+    this.data[b] = w.start;
+    this.data[b + 1] = w.keys ? this.keyId(w.keys) : -1;
+    this.data[b + 2] = w.at.length;
+    for (let k = 0; k < w.at.length; k++) this.data[b + 3 + k] = w.at[k];
+    this.used += need;
+    this.base.set(value2, b);
+    if (w.src) this.sources.set(value2, w.src);
+  }
+  keyId(keys) {
+    const id = keys.join("\n");
+    let k = this.keyIds.get(id);
+    if (k === void 0) {
+      k = this.keyLists.length;
+      this.keyLists.push(keys);
+      this.keyIds.set(id, k);
+    }
+    return k;
+  }
+  child(container, key) {
+    const b = this.base.get(container);
+    if (b === void 0) return void 0;
+    const list = this.data[b + 1];
+    const k = list >= 0 ? this.keyLists[list].indexOf(String(key)) : typeof key === "number" ? key : -1;
+    if (k < 0 || k >= this.data[b + 2]) return void 0;
+    return { at: this.data[b + 3 + k], src: this.sources.get(container)?.[k] };
+  }
+  start(container) {
+    const b = this.base.get(container);
+    return b === void 0 ? void 0 : this.data[b];
+  }
+};
+var Decline = class extends Error {
+};
+function setSrc(w, k, src) {
+  (w.src ??= [])[k] = src;
+}
+var decline = () => {
+  throw new Decline();
+};
+var MAX_DEPTH = 24;
+var KEY = /^[A-Za-z_][A-Za-z0-9_-]*$/;
+var DECIMAL = /^-?(?:0|[1-9][0-9]*)(?:\.[0-9]+)?(?:[eE][-+]?[0-9]+)?$/;
+var SPECIAL = {
+  null: null,
+  Null: null,
+  NULL: null,
+  "~": null,
+  true: true,
+  True: true,
+  TRUE: true,
+  false: false,
+  False: false,
+  FALSE: false
+};
+var NOT_KEYS = /* @__PURE__ */ new Set([...Object.keys(SPECIAL), "__proto__"]);
+var Lines = class {
+  count = 0;
+  begin = new Int32Array(1024);
+  content = new Int32Array(1024);
+  end = new Int32Array(1024);
+  views = [
+    { begin: 0, content: 0, end: 0, indent: 0 },
+    { begin: 0, content: 0, end: 0, indent: 0 }
+  ];
+  push(begin, content, end) {
+    if (this.count === this.begin.length) {
+      const grow = (a) => {
+        const b = new Int32Array(a.length * 2);
+        b.set(a);
+        return b;
+      };
+      this.begin = grow(this.begin);
+      this.content = grow(this.content);
+      this.end = grow(this.end);
+    }
+    this.begin[this.count] = begin;
+    this.content[this.count] = content;
+    this.end[this.count++] = end;
+  }
+  /** Line i in view `slot` (0 or 1: two lines may be looked at together), or undefined. */
+  get(i, slot) {
+    if (i >= this.count) return void 0;
+    const v = this.views[slot];
+    v.begin = this.begin[i];
+    v.content = this.content[i];
+    v.end = this.end[i];
+    v.indent = v.content - v.begin;
+    return v;
+  }
+};
+function readFastYaml(text2) {
+  try {
+    return new Reader(text2).read();
+  } catch (e) {
+    if (e instanceof Decline) return void 0;
+    throw e;
+  }
+}
+var Reader = class {
+  constructor(text2) {
+    this.text = text2;
+  }
+  text;
+  lines = new Lines();
+  i = 0;
+  packed = new Packed();
+  starts = [];
+  read() {
+    const t = this.text;
+    let begin = 0;
+    while (begin <= t.length) {
+      let end = t.indexOf("\n", begin);
+      if (end < 0) end = t.length;
+      this.starts.push(begin);
+      let stop = end;
+      if (stop > begin && t.charCodeAt(stop - 1) === 13) stop--;
+      let c = begin;
+      while (c < stop && t.charCodeAt(c) === 32) c++;
+      if (c < stop) {
+        const ch = t.charCodeAt(c);
+        if (ch === 9) decline();
+        if (ch !== 35) {
+          if (c === begin && (t.startsWith("---", c) || t.startsWith("...", c) || ch === 37)) decline();
+          this.lines.push(begin, c, stop);
+        }
+      }
+      if (end === t.length) break;
+      begin = end + 1;
+    }
+    const first = this.lines.get(0, 0);
+    if (!first || first.indent !== 0) decline();
+    const data = this.block(0, 0);
+    if (this.i < this.lines.count) decline();
+    const packed = this.packed;
+    return {
+      data,
+      lineStarts: Int32Array.from(this.starts),
+      child: (c, k) => packed.child(c, k),
+      start: (c) => packed.start(c)
+    };
+  }
+  /** A block collection whose lines start at `indent`. */
+  block(indent, depth) {
+    if (depth > MAX_DEPTH) decline();
+    const line = this.lines.get(this.i, 0);
+    if (this.isItem(line.content, line.end)) return this.sequence(indent, depth);
+    return this.mapping(indent, line.content, depth);
+  }
+  isItem(c, end) {
+    return this.text.charCodeAt(c) === 45 && (c + 1 === end || this.text.charCodeAt(c + 1) === 32);
+  }
+  sequence(indent, depth) {
+    const out = [];
+    const w = { start: this.lines.get(this.i, 0).content, keys: null, at: [], src: null };
+    while (this.i < this.lines.count) {
+      const line = this.lines.get(this.i, 0);
+      if (line.indent !== indent || !this.isItem(line.content, line.end)) break;
+      let c = line.content + 1;
+      while (c < line.end && this.text.charCodeAt(c) === 32) c++;
+      if (c >= line.end || this.text.charCodeAt(c) === 35) {
+        this.i++;
+        const next = this.lines.get(this.i, 1);
+        if (!next || next.indent <= indent) return decline();
+        w.at.push(next.content);
+        out.push(this.block(next.indent, depth + 1));
+        continue;
+      }
+      if (this.isItem(c, line.end)) decline();
+      if (this.keyAt(c, line.end) >= 0) {
+        w.at.push(c);
+        out.push(this.mapping(c - line.begin, c, depth + 1));
+        continue;
+      }
+      this.i++;
+      const v = this.inline(c, line.end);
+      w.at.push(c);
+      if (v.src !== void 0) setSrc(w, w.at.length - 1, v.src);
+      out.push(v.value);
+    }
+    this.packed.add(out, w);
+    return out;
+  }
+  /** End of a `key:` at c (the offset of the colon), or -1 when the line is no mapping entry. */
+  keyAt(c, end) {
+    const t = this.text;
+    let k = c;
+    while (k < end) {
+      const ch = t.charCodeAt(k);
+      if (ch === 58) break;
+      if (ch === 32 || ch === 35 || ch === 44 || ch === 91 || ch === 93 || ch === 123 || ch === 125) return -1;
+      k++;
+    }
+    if (k >= end || k === c) return -1;
+    if (k + 1 < end && t.charCodeAt(k + 1) !== 32) return -1;
+    const key = t.slice(c, k);
+    if (!KEY.test(key)) decline();
+    return k;
+  }
+  /** A block mapping; its first key is at offset `first` (column `indent`). */
+  mapping(indent, first, depth) {
+    if (depth > MAX_DEPTH) decline();
+    const out = {};
+    const w = { start: first, keys: [], at: [], src: null };
+    let c = first;
+    for (; ; ) {
+      const line = this.lines.get(this.i, 0);
+      const colon = this.keyAt(c, line.end);
+      if (colon < 0) decline();
+      const key = this.text.slice(c, colon);
+      if (NOT_KEYS.has(key) || Object.prototype.hasOwnProperty.call(out, key)) decline();
+      let v = colon + 1;
+      while (v < line.end && this.text.charCodeAt(v) === 32) v++;
+      this.i++;
+      w.keys.push(key);
+      if (v >= line.end || this.text.charCodeAt(v) === 35) {
+        const next2 = this.lines.get(this.i, 1);
+        if (next2 && (next2.indent > indent || next2.indent === indent && this.isItem(next2.content, next2.end))) {
+          w.at.push(next2.content);
+          out[key] = this.block(next2.indent, depth + 1);
+        } else {
+          w.at.push(colon + 1);
+          out[key] = null;
+        }
+      } else {
+        const val = this.inline(v, line.end);
+        w.at.push(v);
+        if (val.src !== void 0) setSrc(w, w.at.length - 1, val.src);
+        out[key] = val.value;
+      }
+      const next = this.lines.get(this.i, 1);
+      if (!next || next.indent < indent) break;
+      if (next.indent > indent) decline();
+      if (this.isItem(next.content, next.end)) break;
+      c = next.content;
+    }
+    this.packed.add(out, w);
+    return out;
+  }
+  /** A value written on the rest of one line, then nothing but a comment. */
+  inline(c, end) {
+    const t = this.text;
+    const ch = t.charCodeAt(c);
+    let r;
+    if (ch === 91 || ch === 123) {
+      const f = this.flow(c, end, 0);
+      r = { value: f.value, src: void 0, next: f.next };
+    } else if (ch === 34 || ch === 39) r = this.quoted(c, end);
+    else {
+      let e = c;
+      while (e < end) {
+        const x = t.charCodeAt(e);
+        if (x === 35 && t.charCodeAt(e - 1) === 32) break;
+        if (x === 58 && (e + 1 === end || t.charCodeAt(e + 1) === 32)) decline();
+        if (x === 9) decline();
+        e++;
+      }
+      let s = e;
+      while (s > c && t.charCodeAt(s - 1) === 32) s--;
+      const p = this.plain(t.slice(c, s), false);
+      return p;
+    }
+    let k = r.next;
+    while (k < end && t.charCodeAt(k) === 32) k++;
+    if (k < end && !(t.charCodeAt(k) === 35 && k > r.next)) decline();
+    return { value: r.value, src: r.src };
+  }
+  quoted(c, end) {
+    const t = this.text;
+    const q = t.charCodeAt(c);
+    const close = t.indexOf(q === 34 ? '"' : "'", c + 1);
+    if (close < 0 || close >= end) decline();
+    if (q === 34 && t.lastIndexOf("\\", close) > c) decline();
+    if (q === 39 && t.charCodeAt(close + 1) === 39) decline();
+    return { value: t.slice(c + 1, close), src: void 0, next: close + 1 };
+  }
+  /** A plain scalar's value by the core schema, for the forms this reader is sure of. */
+  plain(s, flow) {
+    if (s === "") decline();
+    const c0 = s.charCodeAt(0);
+    if (Object.prototype.hasOwnProperty.call(SPECIAL, s)) return { value: SPECIAL[s], src: void 0 };
+    if (DECIMAL.test(s)) return { value: Number(s), src: s };
+    if ("-?:,[]{}#&*!|>'\"%@`+.~".includes(s[0]) || c0 >= 48 && c0 <= 57) decline();
+    if (flow && /[,[\]{}#:]/.test(s)) decline();
+    if (s.includes(" #") || s.includes("	")) decline();
+    return { value: s, src: void 0 };
+  }
+  /** A one-line flow list or mapping at c; `next` is the offset after its closing bracket. */
+  flow(c, end, depth) {
+    if (depth > MAX_DEPTH) decline();
+    const t = this.text;
+    const isMap6 = t.charCodeAt(c) === 123;
+    const close = isMap6 ? 125 : 93;
+    const list = [];
+    const map = {};
+    const w = { start: c, keys: isMap6 ? [] : null, at: [], src: null };
+    let k = c + 1;
+    const skip = () => {
+      while (k < end && t.charCodeAt(k) === 32) k++;
+    };
+    skip();
+    if (t.charCodeAt(k) === close) {
+      k++;
+    } else {
+      for (; ; ) {
+        skip();
+        if (k >= end) decline();
+        let key = "";
+        if (isMap6) {
+          const s = k;
+          while (k < end && t.charCodeAt(k) !== 58 && t.charCodeAt(k) !== 44 && t.charCodeAt(k) !== close) k++;
+          key = t.slice(s, k).trimEnd();
+          if (t.charCodeAt(k) !== 58 || !KEY.test(key) || NOT_KEYS.has(key) || Object.prototype.hasOwnProperty.call(map, key))
+            decline();
+          k++;
+          if (t.charCodeAt(k) !== 32) decline();
+          skip();
+        }
+        const at = k;
+        const ch = t.charCodeAt(k);
+        let value3;
+        let src;
+        if (ch === 91 || ch === 123) {
+          const f = this.flow(k, end, depth + 1);
+          value3 = f.value;
+          k = f.next;
+        } else if (ch === 34 || ch === 39) {
+          const q = this.quoted(k, end);
+          value3 = q.value;
+          k = q.next;
+        } else {
+          const s = k;
+          while (k < end && t.charCodeAt(k) !== 44 && t.charCodeAt(k) !== close) k++;
+          const p = this.plain(t.slice(s, k).trimEnd(), true);
+          value3 = p.value;
+          src = p.src;
+        }
+        w.at.push(at);
+        if (src !== void 0) setSrc(w, w.at.length - 1, src);
+        if (isMap6) {
+          w.keys.push(key);
+          map[key] = value3;
+        } else list.push(value3);
+        skip();
+        const x = t.charCodeAt(k);
+        if (x === 44) {
+          k++;
+          skip();
+          if (t.charCodeAt(k) === close) decline();
+          continue;
+        }
+        if (x === close) {
+          k++;
+          break;
+        }
+        decline();
+      }
+    }
+    const value2 = isMap6 ? map : list;
+    this.packed.add(value2, w);
+    return { value: value2, next: k };
+  }
+};
+function lineColumn(lineStarts, offset) {
+  let lo = 0;
+  let hi = lineStarts.length - 1;
+  while (lo < hi) {
+    const mid2 = lo + hi + 1 >> 1;
+    if (lineStarts[mid2] <= offset) lo = mid2;
+    else hi = mid2 - 1;
+  }
+  return { line: lo + 1, column: offset - lineStarts[lo] + 1 };
+}
 
 // src/topology/native.ts
 var MAX_ALIAS_COUNT2 = 50;
@@ -55452,6 +58531,40 @@ function validate2() {
   validator2 ??= new Ajv2({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true }).compile(design_schema_default);
   return validator2;
 }
+var FastLocator = class {
+  constructor(y) {
+    this.y = y;
+  }
+  y;
+  /** The parent collection of the value at `path` and the child's index in its offsets. */
+  slot(path3) {
+    let cur = this.y.data;
+    let found;
+    for (const key of path3) {
+      if (cur === null || typeof cur !== "object") return void 0;
+      found = this.y.child(cur, key);
+      if (!found) return void 0;
+      cur = cur[key];
+    }
+    return found;
+  }
+  pos(path3) {
+    const s = this.slot(path3);
+    if (s) return lineColumn(this.y.lineStarts, s.at);
+    const w = path3.length === 0 && typeof this.y.data === "object" && this.y.data ? this.y.start(this.y.data) : void 0;
+    return w !== void 0 ? lineColumn(this.y.lineStarts, w) : { line: 1, column: 1 };
+  }
+  keyPos(path3) {
+    return this.pos(path3);
+  }
+  source(path3) {
+    return this.slot(path3)?.src;
+  }
+  written(path3, prefix, suffix) {
+    const s = this.source(path3);
+    return s === void 0 ? "" : `${prefix}${s}${suffix}`;
+  }
+};
 var Locator = class {
   constructor(doc, lines) {
     this.doc = doc;
@@ -55489,8 +58602,9 @@ var Locator = class {
   }
   /** The source text of the plain scalar at `path` (a number as written), if there is one. */
   source(path3) {
-    let { node, exact } = this.node(path3);
-    if (!exact) return void 0;
+    const found = this.node(path3);
+    let node = found.node;
+    if (!found.exact) return void 0;
     if ((0, import_yaml6.isAlias)(node)) node = node.resolve(this.doc);
     return (0, import_yaml6.isScalar)(node) && typeof node.source === "string" ? node.source : void 0;
   }
@@ -55523,7 +58637,7 @@ function pathText(path3) {
 }
 function splitPointer(pointer) {
   if (pointer === "") return [];
-  return pointer.slice(1).split("/").map((seg2) => seg2.replace(/~1/g, "/").replace(/~0/g, "~")).map((seg2) => /^\d+$/.test(seg2) ? Number(seg2) : seg2);
+  return pointer.slice(1).split("/").map((seg3) => seg3.replace(/~1/g, "/").replace(/~0/g, "~")).map((seg3) => /^\d+$/.test(seg3) ? Number(seg3) : seg3);
 }
 function describe2(v) {
   if (v === null) return "empty (null)";
@@ -55559,13 +58673,21 @@ function toDesignError(e, file, loc) {
     case "required": {
       const key = String(params.missingProperty);
       if (key === "between" && path3[0] === "links") {
-        return new DesignError(`${what} has no ends: "between" is missing`, where(loc.pos(path3)), "write between: [node-a, node-b]");
+        return new DesignError(
+          `${what} has no ends: "between" is missing`,
+          where(loc.pos(path3)),
+          "write between: [node-a, node-b]"
+        );
       }
       return new DesignError(`${what} is missing the required key "${key}"`, where(loc.pos(path3)));
     }
     case "type": {
       const want = TYPE_WORDS2[String(params.type)] ?? String(params.type);
-      return new DesignError(`${what} must be ${want}, not ${describe2(e.data)}`, where(loc.pos(path3)), e.data === null ? "give a value after the colon, or remove the key" : "");
+      return new DesignError(
+        `${what} must be ${want}, not ${describe2(e.data)}`,
+        where(loc.pos(path3)),
+        e.data === null ? "give a value after the colon, or remove the key" : ""
+      );
     }
     case "minItems":
     case "maxItems": {
@@ -55586,7 +58708,10 @@ function toDesignError(e, file, loc) {
       return new DesignError(message, where(loc.pos(path3)));
     }
     case "maximum":
-      return new DesignError(`${what} must be at most ${String(params.limit)} (found ${String(e.data)})`, where(loc.pos(path3)));
+      return new DesignError(
+        `${what} must be at most ${String(params.limit)} (found ${String(e.data)})`,
+        where(loc.pos(path3))
+      );
     case "minLength":
       return new DesignError(`${what} must not be empty`, where(loc.pos(path3)));
     default:
@@ -55598,7 +58723,16 @@ function firstError(errors, file, loc) {
   located.sort((a, b) => a.line - b.line || a.column - b.column);
   return located[0];
 }
-function parseNative(text2, file, options = {}, format = "native-yaml") {
+function parseNative(text2, file, options = {}, format = "native-yaml", fast = true) {
+  if (fast && format === "native-yaml") {
+    const read = readFastYaml(text2);
+    if (read) {
+      try {
+        return buildDesign(read.data, new FastLocator(read), [], file, options, format);
+      } catch {
+      }
+    }
+  }
   const kindWord = format === "native-json" ? "JSON" : "YAML";
   const deep = yamlNestingExceeded(text2);
   if (deep >= 0) {
@@ -55614,10 +58748,18 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
   if (doc.errors.length > 0) {
     const e = doc.errors[0];
     if (e.code === "DUPLICATE_KEY") {
-      throw new DesignError(`${kindWord}: a key appears twice in the same mapping`, { file, ...loc.at(e.pos[0]) }, "keep one of them");
+      throw new DesignError(
+        `${kindWord}: a key appears twice in the same mapping`,
+        { file, ...loc.at(e.pos[0]) },
+        "keep one of them"
+      );
     }
     const message = e.message.split("\n")[0].replace(/ at line \d+, column \d+:?$/, "");
-    throw new DesignError(`${kindWord} syntax error: ${message}`, { file, ...loc.at(e.pos[0]) }, "fix the syntax at this point (check indentation, colons and quotes)");
+    throw new DesignError(
+      `${kindWord} syntax error: ${message}`,
+      { file, ...loc.at(e.pos[0]) },
+      "fix the syntax at this point (check indentation, colons and quotes)"
+    );
   }
   let data;
   try {
@@ -55640,11 +58782,30 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
     throw e;
   }
   if (data === null || data === void 0) {
-    throw new DesignError(`the ${kindWord} design is empty`, { file, line: 1, column: 1 }, "a design needs at least `nodes:`");
+    throw new DesignError(
+      `the ${kindWord} design is empty`,
+      { file, line: 1, column: 1 },
+      "a design needs at least `nodes:`"
+    );
   }
+  return buildDesign(
+    data,
+    loc,
+    doc.warnings.map((w) => ({ message: w.message, pos: loc.at(w.pos[0]) })),
+    file,
+    options,
+    format
+  );
+}
+function buildDesign(data, loc, warnings, file, options, format) {
+  const kindWord = format === "native-json" ? "JSON" : "YAML";
   const odd = firstNonNormal(data, [], /* @__PURE__ */ new Set(["metadata"]));
   if (odd) {
-    throw new DesignError(`${pathText(odd.path)} ${odd.why}${loc.written(odd.path, " (written ", ")")}`, { file, ...loc.pos(odd.path) }, "write a plain decimal number");
+    throw new DesignError(
+      `${pathText(odd.path)} ${odd.why}${loc.written(odd.path, " (written ", ")")}`,
+      { file, ...loc.pos(odd.path) },
+      "write a plain decimal number"
+    );
   }
   const check = validate2();
   if (!check(data)) throw firstError(check.errors ?? [], file, loc);
@@ -55653,11 +58814,12 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
   const quantity = (kind, path3, v) => {
     if (v === void 0) return void 0;
     const problem = quantityProblem(kind, v, loc.source(path3));
-    if (problem) throw new DesignError(`${pathText(path3)} ${problem.message}`, { file, ...loc.pos(path3) }, problem.hint);
+    if (problem)
+      throw new DesignError(`${pathText(path3)} ${problem.message}`, { file, ...loc.pos(path3) }, problem.hint);
     return v;
   };
   const b = new TopologyBuilder(file, format, { ...options, duplicateLinkIds: "error" });
-  for (const w of doc.warnings) b.warn(`${kindWord}: ${w.message.split("\n")[0]}`, loc.at(w.pos[0]));
+  for (const w of warnings) b.warn(`${kindWord}: ${w.message.split("\n")[0]}`, w.pos);
   d.nodes.forEach((n, i) => {
     b.addNode({
       id: idAt(["nodes", i, "id"], n.id),
@@ -55670,7 +58832,11 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
     });
   });
   (d.risk_groups ?? []).forEach((g, i) => {
-    b.addRiskGroup({ id: idAt(["risk_groups", i, "id"], g.id), pos: loc.pos(["risk_groups", i]), ...g.description !== void 0 ? { description: g.description } : {} });
+    b.addRiskGroup({
+      id: idAt(["risk_groups", i, "id"], g.id),
+      pos: loc.pos(["risk_groups", i]),
+      ...g.description !== void 0 ? { description: g.description } : {}
+    });
   });
   (d.links ?? []).forEach((l, i) => {
     const at = ["links", i];
@@ -55678,7 +58844,7 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
     const length = quantity("length", [...at, "length_km"], l.length_km);
     const latency = quantity("latency", [...at, "latency_ms"], l.latency_ms);
     const capacity = quantity("capacity", [...at, "capacity_gbps"], l.capacity_gbps);
-    const weight = quantity("weight", [...at, "weight"], l.weight);
+    const weight2 = quantity("weight", [...at, "weight"], l.weight);
     b.addLink({
       what: id !== void 0 ? `link "${id}" (links[${i}])` : `links[${i}]`,
       ...id !== void 0 ? { id } : {},
@@ -55690,7 +58856,7 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
       ...length !== void 0 ? { length } : {},
       ...latency !== void 0 ? { latency } : {},
       ...capacity !== void 0 ? { capacity } : {},
-      ...weight !== void 0 ? { weight } : {},
+      ...weight2 !== void 0 ? { weight: weight2 } : {},
       riskGroups: (l.risk_groups ?? []).map((g, k) => idAt([...at, "risk_groups", k], g)),
       hardened: l.hardened ?? false,
       ...l.attributes ? { attrs: l.attributes } : {}
@@ -55699,10 +58865,14 @@ function parseNative(text2, file, options = {}, format = "native-yaml") {
   (d.demands ?? []).forEach((dm, i) => {
     const at = ["demands", i];
     const volume = quantity("volume", [...at, "volume"], dm.volume);
-    b.addDemand(idAt([...at, "between", 0], dm.between[0]), idAt([...at, "between", 1], dm.between[1]), volume, loc.pos(at), [
-      loc.pos([...at, "between", 0]),
-      loc.pos([...at, "between", 1])
-    ], `demands[${i}]`);
+    b.addDemand(
+      idAt([...at, "between", 0], dm.between[0]),
+      idAt([...at, "between", 1], dm.between[1]),
+      volume,
+      loc.pos(at),
+      [loc.pos([...at, "between", 0]), loc.pos([...at, "between", 1])],
+      `demands[${i}]`
+    );
   });
   const t = b.finish({
     ...d.network?.name !== void 0 ? { name: d.network.name } : {},
@@ -55725,7 +58895,7 @@ function unescape(s) {
     return ENTITIES[body] ?? m;
   });
 }
-var KEY = /[A-Za-z_][A-Za-z0-9_]*/y;
+var KEY2 = /[A-Za-z_][A-Za-z0-9_]*/y;
 var NUMBER = /[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?/y;
 var GmlReader = class {
   constructor(text2, b) {
@@ -55768,7 +58938,11 @@ var GmlReader = class {
       this.skip();
       if (this.i >= t.length) {
         if (open2) {
-          throw this.b.error('unclosed "[": the list is never closed with "]"', open2, 'add the missing "]" (check the brackets above the end of the file)');
+          throw this.b.error(
+            'unclosed "[": the list is never closed with "]"',
+            open2,
+            'add the missing "]" (check the brackets above the end of the file)'
+          );
         }
         return pairs;
       }
@@ -55780,9 +58954,14 @@ var GmlReader = class {
         throw this.b.error('unexpected "]" with no open "["', this.here(), 'remove it, or add the "[" it closes');
       }
       const pos = this.here();
-      KEY.lastIndex = this.i;
-      const key = KEY.exec(t);
-      if (!key) throw this.b.error(`expected a key, found "${t[this.i]}"`, pos, "GML is a list of `key value` pairs; keys are letters, digits and _");
+      KEY2.lastIndex = this.i;
+      const key = KEY2.exec(t);
+      if (!key)
+        throw this.b.error(
+          `expected a key, found "${t[this.i]}"`,
+          pos,
+          "GML is a list of `key value` pairs; keys are letters, digits and _"
+        );
       this.i += key[0].length;
       this.skip();
       pairs.push(this.readValue(key[0], pos));
@@ -55791,11 +58970,16 @@ var GmlReader = class {
   readValue(key, pos) {
     const t = this.text;
     const vpos = this.here();
-    if (this.i >= t.length) throw this.b.error(`key "${key}" has no value`, pos, 'give a number, a "string" or a [ list ]');
+    if (this.i >= t.length)
+      throw this.b.error(`key "${key}" has no value`, pos, 'give a number, a "string" or a [ list ]');
     const c = t[this.i];
     if (c === "[") {
       if (++this.depth > MAX_NESTING) {
-        throw this.b.error(`lists nest deeper than ${MAX_NESTING} levels`, vpos, "a GML design needs a few levels (graph, node, graphics); flatten this structure");
+        throw this.b.error(
+          `lists nest deeper than ${MAX_NESTING} levels`,
+          vpos,
+          "a GML design needs a few levels (graph, node, graphics); flatten this structure"
+        );
       }
       this.i++;
       const value2 = this.readList(vpos);
@@ -55846,7 +59030,11 @@ function parseGml(text2, file, options = {}, format = "gml") {
   const graphs = top.filter((p) => p.key === "graph");
   const graph = graphs[0];
   if (!graph || !Array.isArray(graph.value)) {
-    throw b.error('no "graph [ ... ]" list in this file', top[0]?.pos ?? { line: 1, column: 1 }, "a GML design is `graph [ node [ id 1 ] ... edge [ source 1 target 2 ] ]`");
+    throw b.error(
+      'no "graph [ ... ]" list in this file',
+      top[0]?.pos ?? { line: 1, column: 1 },
+      "a GML design is `graph [ node [ id 1 ] ... edge [ source 1 target 2 ] ]`"
+    );
   }
   if (graphs.length > 1) {
     throw b.error(
@@ -55884,7 +59072,11 @@ function refuseNestedGraphs(pairs, b) {
   for (const p of pairs) {
     if (!Array.isArray(p.value)) continue;
     if (p.key === "graph") {
-      throw b.error("a nested graph: netbrace reads one flat graph per file", p.pos, "list its nodes and edges in the top-level graph (node ids must stay unique)");
+      throw b.error(
+        "a nested graph: netbrace reads one flat graph per file",
+        p.pos,
+        "list its nodes and edges in the top-level graph (node ids must stay unique)"
+      );
     }
     refuseNestedGraphs(p.value, b);
   }
@@ -55900,7 +59092,11 @@ function bodyAttributes(body, what, b, read) {
     const earlier = first.get(p.key);
     if (earlier !== void 0) {
       if (read(p.key)) {
-        throw b.error(`${what} has "${p.key}" twice (lines ${earlier.pos.line} and ${p.pos.line})`, p.pos, `keep one; the first is on line ${earlier.pos.line}`);
+        throw b.error(
+          `${what} has "${p.key}" twice (lines ${earlier.pos.line} and ${p.pos.line})`,
+          p.pos,
+          `keep one; the first is on line ${earlier.pos.line}`
+        );
       }
       raw[p.key] = repeated.has(p.key) ? [...raw[p.key], value2] : [raw[p.key], value2];
       repeated.add(p.key);
@@ -55914,7 +59110,12 @@ function bodyAttributes(body, what, b, read) {
   return { raw, where, written, first };
 }
 function readNode(node, body, b) {
-  const { raw, where, written, first } = bodyAttributes(body, `the node on line ${node.pos.line}`, b, (k) => k === "id" || isNodeField(k));
+  const { raw, where, written, first } = bodyAttributes(
+    body,
+    `the node on line ${node.pos.line}`,
+    b,
+    (k) => k === "id" || isNodeField(k)
+  );
   const idPair = first.get("id");
   if (idPair === void 0) throw b.error('node without "id"', node.pos, "every GML node needs `id N`");
   const id = scalarId(idPair);
@@ -55925,7 +59126,12 @@ function readNode(node, body, b) {
 }
 function readEdge(edge, body, b, directed) {
   const ends = (k) => k === "id" || k === "source" || k === "target";
-  const { raw, where, written, first } = bodyAttributes(body, `the edge on line ${edge.pos.line}`, b, (k) => ends(k) || isLinkField(k));
+  const { raw, where, written, first } = bodyAttributes(
+    body,
+    `the edge on line ${edge.pos.line}`,
+    b,
+    (k) => ends(k) || isLinkField(k)
+  );
   const source = first.get("source");
   const target = first.get("target");
   const idPair = first.get("id");
@@ -55934,7 +59140,11 @@ function readEdge(edge, body, b, directed) {
   delete raw.source;
   delete raw.target;
   if (!source || !target) {
-    throw b.error(`edge without "${source ? "target" : "source"}"`, edge.pos, "every GML edge needs `source N target M`");
+    throw b.error(
+      `edge without "${source ? "target" : "source"}"`,
+      edge.pos,
+      "every GML edge needs `source N target M`"
+    );
   }
   const s = scalarId(source);
   const d = scalarId(target);
@@ -56013,7 +59223,11 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
     const pos = tagStart;
     stack.push(name2);
     if (stack.length > MAX_NESTING) {
-      throw b.error(`elements nest deeper than ${MAX_NESTING} levels`, pos, "GraphML needs a few levels (graphml, graph, node, data); flatten this structure");
+      throw b.error(
+        `elements nest deeper than ${MAX_NESTING} levels`,
+        pos,
+        "GraphML needs a few levels (graphml, graph, node, data); flatten this structure"
+      );
     }
     if (dataKey !== void 0) {
       dataNested = true;
@@ -56026,7 +59240,11 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
       case "key": {
         const id = attrs.id;
         if (id === void 0) throw b.error('<key> without an "id"', pos);
-        currentKey = { name: attrs["attr.name"] ?? id, domain: attrs.for ?? "all", type: attrs["attr.type"] ?? "string" };
+        currentKey = {
+          name: attrs["attr.name"] ?? id,
+          domain: attrs.for ?? "all",
+          type: attrs["attr.type"] ?? "string"
+        };
         keys.set(id, currentKey);
         break;
       }
@@ -56050,7 +59268,11 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
         break;
       case "edge":
         if (attrs.source === void 0 || attrs.target === void 0) {
-          throw b.error(`<edge> without a "${attrs.source === void 0 ? "source" : "target"}"`, pos, 'every GraphML edge needs source="..." and target="..."');
+          throw b.error(
+            `<edge> without a "${attrs.source === void 0 ? "source" : "target"}"`,
+            pos,
+            'every GraphML edge needs source="..." and target="..."'
+          );
         }
         if (attrs.directed === "true") b.directed(pos, 'an edge has directed="true"');
         current = {
@@ -56122,7 +59344,8 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
     }
   });
   parser.write(text2).close();
-  if (!sawRoot) throw b.error("no <graphml> element in this file", { line: 1, column: 1 }, "is this really a GraphML file?");
+  if (!sawRoot)
+    throw b.error("no <graphml> element in this file", { line: 1, column: 1 }, "is this really a GraphML file?");
   const defaults2 = (domain) => [...keys.values()].filter((k) => k.default !== void 0 && (k.domain === domain || k.domain === "all"));
   const nodeDefaults = defaults2("node");
   const edgeDefaults = defaults2("edge");
@@ -56134,7 +59357,10 @@ function parseGraphml(text2, file, options = {}, format = "graphml") {
     }
     return el.data;
   };
-  const sourceOf2 = (el) => ({ pos: (k) => el.dataPos.get(k) ?? el.pos, text: (k) => el.dataText.get(k) });
+  const sourceOf2 = (el) => ({
+    pos: (k) => el.dataPos.get(k) ?? el.pos,
+    text: (k) => el.dataText.get(k)
+  });
   for (const n of nodes) {
     const mapped = mapNodeAttributes(withDefaults4(n, nodeDefaults), b, sourceOf2(n));
     b.addNode({ id: n.attrs.id, pos: n.pos, ...mapped });
@@ -56183,7 +59409,8 @@ var EARTH_M = EARTH_RADIUS_KM * 1e3;
 var RAD = Math.PI / 180;
 function routeKm(route) {
   let km = 0;
-  for (let i = 1; i < route.length; i++) km += greatCircleKm(route[i - 1][1], route[i - 1][0], route[i][1], route[i][0]);
+  for (let i = 1; i < route.length; i++)
+    km += greatCircleKm(route[i - 1][1], route[i - 1][0], route[i][1], route[i][0]);
   return km;
 }
 function sample(route, stepM) {
@@ -56247,7 +59474,8 @@ function sharedCorridors(routes, options = {}) {
       for (const s of samplesOf(a)) {
         if (s.p[0] < box.minX || s.p[0] > box.maxX || s.p[1] < box.minY || s.p[1] > box.maxY) continue;
         let near = false;
-        for (let i = 1; i < routes[b].length && !near; i++) near = pointSegmentM(s.p, routes[b][i - 1], routes[b][i]) <= withinM;
+        for (let i = 1; i < routes[b].length && !near; i++)
+          near = pointSegmentM(s.p, routes[b][i - 1], routes[b][i]) <= withinM;
         if (near) {
           m += s.m;
           from ??= s.p;
@@ -56287,7 +59515,12 @@ function crsProblem(crs) {
 }
 function parseGeojson(text2, file, options = {}) {
   const deep = yamlNestingExceeded(text2);
-  if (deep >= 0) throw new DesignError(`the GeoJSON nests deeper than ${MAX_NESTING} levels`, { file, ...positionOf(text2, deep) }, "a FeatureCollection needs a few levels only");
+  if (deep >= 0)
+    throw new DesignError(
+      `the GeoJSON nests deeper than ${MAX_NESTING} levels`,
+      { file, ...positionOf(text2, deep) },
+      "a FeatureCollection needs a few levels only"
+    );
   const lines = new import_yaml7.LineCounter();
   const doc = (0, import_yaml7.parseDocument)(text2, { lineCounter: lines, uniqueKeys: true, prettyErrors: false });
   const at = (offset) => {
@@ -56297,7 +59530,11 @@ function parseGeojson(text2, file, options = {}) {
   const where = (n, fallback = { line: 1, column: 1 }) => n?.range ? at(n.range[0]) : fallback;
   if (doc.errors.length > 0) {
     const e = doc.errors[0];
-    throw new DesignError(`GeoJSON syntax error: ${e.message.split("\n")[0]}`, { file, ...at(e.pos[0]) }, "fix the JSON at this point");
+    throw new DesignError(
+      `GeoJSON syntax error: ${e.message.split("\n")[0]}`,
+      { file, ...at(e.pos[0]) },
+      "fix the JSON at this point"
+    );
   }
   const root = doc.toJS({ maxAliasCount: 0 });
   const b = new TopologyBuilder(file, "geojson", options);
@@ -56305,12 +59542,18 @@ function parseGeojson(text2, file, options = {}) {
     throw b.error(message, pos, hint);
   };
   if (!isObject(root) || root.type !== "FeatureCollection" || !Array.isArray(root.features)) {
-    fail({ line: 1, column: 1 })('a GeoJSON design is a FeatureCollection with a "features" list', "points are sites, lines are links");
+    fail({ line: 1, column: 1 })(
+      'a GeoJSON design is a FeatureCollection with a "features" list',
+      "points are sites, lines are links"
+    );
   }
   const rootMap = root;
   const crs = crsProblem(rootMap.crs);
   if (crs !== void 0) {
-    fail(where(nodeAt(doc.contents, ["crs"])))(`the coordinates are in another reference system (${crs.slice(0, 80)})`, "RFC 7946 GeoJSON is WGS 84 longitude/latitude: export the layer as EPSG:4326");
+    fail(where(nodeAt(doc.contents, ["crs"])))(
+      `the coordinates are in another reference system (${crs.slice(0, 80)})`,
+      "RFC 7946 GeoJSON is WGS 84 longitude/latitude: export the layer as EPSG:4326"
+    );
   }
   const featureNodes = nodeAt(doc.contents, ["features"]);
   const features = rootMap.features.map((f, i) => {
@@ -56318,7 +59561,11 @@ function parseGeojson(text2, file, options = {}) {
     const pos = where(node);
     if (!isObject(f) || f.type !== "Feature") fail(pos)(`features[${i}] is not a Feature`);
     const g = f.geometry;
-    if (g !== null && !(isObject(g) && typeof g.type === "string")) fail(pos)(`features[${i}] has no geometry object`, 'a Feature has "geometry": a Point (a site) or a LineString (a link)');
+    if (g !== null && !(isObject(g) && typeof g.type === "string"))
+      fail(pos)(
+        `features[${i}] has no geometry object`,
+        'a Feature has "geometry": a Point (a site) or a LineString (a link)'
+      );
     const props = f.properties;
     return {
       geometry: g,
@@ -56347,7 +59594,10 @@ function parseGeojson(text2, file, options = {}) {
     const bad = nonNormal(lon) ?? nonNormal(lat);
     if (bad) here(`${what} ${bad}`, "write plain decimal degrees");
     if (lon < -180 || lon > 180 || lat < -90 || lat > 90) {
-      here(`${what} [${lon}, ${lat}] is outside longitude −180…180 / latitude −90…90`, "GeoJSON writes longitude first, in degrees of WGS 84 (RFC 7946 §3.1.1)");
+      here(
+        `${what} [${lon}, ${lat}] is outside longitude −180…180 / latitude −90…90`,
+        "GeoJSON writes longitude first, in degrees of WGS 84 (RFC 7946 §3.1.1)"
+      );
     }
     return [lon, lat];
   };
@@ -56368,7 +59618,10 @@ function parseGeojson(text2, file, options = {}) {
       if (COORDINATE_NAMES.has(k.toLowerCase())) asWritten[k] = v;
       else rest[k] = v;
     }
-    const mapped = mapNodeAttributes(rest, b, { pos: (k) => where(nodeAt(f.node, ["properties", k]), f.pos), text: (k) => typeof rest[k] === "number" ? written(f, ["properties", k], rest[k]) : void 0 });
+    const mapped = mapNodeAttributes(rest, b, {
+      pos: (k) => where(nodeAt(f.node, ["properties", k]), f.pos),
+      text: (k) => typeof rest[k] === "number" ? written(f, ["properties", k], rest[k]) : void 0
+    });
     b.addNode({ id, pos: f.pos, ...mapped, attrs: { ...mapped.attrs, ...asWritten }, lat, lon });
     sites.push({ id, lon, lat });
   });
@@ -56389,7 +59642,10 @@ function parseGeojson(text2, file, options = {}) {
     const type = f.geometry.type;
     const here = fail(f.pos);
     if (type !== "LineString" && type !== "MultiLineString") {
-      here(`features[${i}] is a ${type}: only Point (sites) and LineString or MultiLineString (links) are read`, "keep areas and other shapes in another file");
+      here(
+        `features[${i}] is a ${type}: only Point (sites) and LineString or MultiLineString (links) are read`,
+        "keep areas and other shapes in another file"
+      );
     }
     const coords = f.geometry.coordinates;
     const partList = type === "LineString" ? [coords] : Array.isArray(coords) ? coords : [];
@@ -56397,7 +59653,10 @@ function parseGeojson(text2, file, options = {}) {
     const parts = partList.map((part, k) => {
       const base = type === "LineString" ? ["geometry", "coordinates"] : ["geometry", "coordinates", k];
       if (!Array.isArray(part) || part.length < 2) {
-        fail(where(nodeAt(f.node, base), f.pos))(`link features[${i}] has a line with fewer than two positions`, "a line needs at least its two ends");
+        fail(where(nodeAt(f.node, base), f.pos))(
+          `link features[${i}] has a line with fewer than two positions`,
+          "a line needs at least its two ends"
+        );
       }
       return part.map((p, j) => position(f, [...base, j], p, `position ${j} of link features[${i}]`));
     });
@@ -56443,7 +59702,10 @@ function parseGeojson(text2, file, options = {}) {
     const mapped = mapLinkAttributes(
       listedGroups === void 0 && groupsRaw !== void 0 ? { ...rest, risk_groups: groupsRaw } : rest,
       b,
-      { pos: (k) => where(nodeAt(f.node, ["properties", k]), f.pos), text: (k) => typeof raw[k] === "number" ? written(f, ["properties", k], raw[k]) : void 0 }
+      {
+        pos: (k) => where(nodeAt(f.node, ["properties", k]), f.pos),
+        text: (k) => typeof raw[k] === "number" ? written(f, ["properties", k], raw[k]) : void 0
+      }
     );
     if (listedGroups !== void 0) mapped.riskGroups = listedGroups;
     const measured = parts.reduce((s, p) => s + routeKm(p), 0);
@@ -56459,16 +59721,21 @@ function parseGeojson(text2, file, options = {}) {
       pos: f.pos,
       ...mapped,
       ...mapped.length === void 0 ? { length: measured } : {},
-      attrs: { ...mapped.attrs, route_km: Math.round(measured * 1e3) / 1e3, route: { type, coordinates: type === "LineString" ? parts[0] : parts } },
+      attrs: {
+        ...mapped.attrs,
+        route_km: Math.round(measured * 1e3) / 1e3,
+        route: { type, coordinates: type === "LineString" ? parts[0] : parts }
+      },
       what: `link features[${i}]`
     });
-    if (added && mapped.attrs[ROUTE_KNOWN] !== false) routes.push({ parts, linkIndex: linkCount, groups: mapped.riskGroups ?? [], pos: f.pos });
+    if (added && mapped.attrs[ROUTE_KNOWN] !== false)
+      routes.push({ parts, linkIndex: linkCount, groups: mapped.riskGroups ?? [], pos: f.pos });
     if (added) linkCount++;
   });
-  const meta = rootMap.metadata;
+  const meta2 = rootMap.metadata;
   const t = b.finish({
     ...typeof rootMap.name === "string" ? { name: rootMap.name } : {},
-    ...isObject(meta) ? { metadata: meta } : {}
+    ...isObject(meta2) ? { metadata: meta2 } : {}
   });
   if (typeof rootMap.description === "string") t.description = rootMap.description;
   const flat = [];
@@ -56507,19 +59774,6 @@ function parseGeojson(text2, file, options = {}) {
 }
 
 // src/topology/parse.ts
-function utf8Length(text2) {
-  let bytes = 0;
-  for (let i = 0; i < text2.length; i++) {
-    const c = text2.charCodeAt(i);
-    if (c < 128) bytes += 1;
-    else if (c < 2048) bytes += 2;
-    else if (c >= 55296 && c <= 56319 && i + 1 < text2.length) {
-      bytes += 4;
-      i++;
-    } else bytes += 3;
-  }
-  return bytes;
-}
 function checkSize(text2, file, maxBytes = DEFAULT_MAX_BYTES) {
   if (text2.length * 3 <= maxBytes) return;
   const bytes = utf8Length(text2);
@@ -56604,7 +59858,9 @@ async function addMapAndMend(report, input, ctx) {
   if (settings.candidates !== void 0) {
     const text2 = await ctx.deps.readAt(ctx.head, settings.candidates);
     if (text2 === null) {
-      notes.push(`the candidate list ${settings.candidates} named by the policy does not exist${ctx.head === "worktree" ? "" : ` at ${ctx.head}`}`);
+      notes.push(
+        `the candidate list ${settings.candidates} named by the policy does not exist${ctx.head === "worktree" ? "" : ` at ${ctx.head}`}`
+      );
       candidates2 = { list: [], unit: "link", source: "list", notes: [] };
     } else {
       try {
@@ -56633,7 +59889,14 @@ async function addMapAndMend(report, input, ctx) {
     const head = await evaluateGraph(mended, void 0, budgeted.head, budgeted.cuts, ctx.request, ctx.deps);
     let base = baseSide;
     if (baseSide && JSON.stringify(budgeted.base) !== JSON.stringify(original.base)) {
-      base = await evaluateGraph(baseSide.graph, baseSide.topology, budgeted.base, budgeted.cuts, ctx.request, ctx.deps);
+      base = await evaluateGraph(
+        baseSide.graph,
+        baseSide.topology,
+        budgeted.base,
+        budgeted.cuts,
+        ctx.request,
+        ctx.deps
+      );
     }
     return compareDesign({ ...input, head, ...base ? { base } : {} });
   };
@@ -56650,19 +59913,26 @@ async function addMapAndMend(report, input, ctx) {
   });
 }
 
-// src/version.ts
-var VERSION = "0.1.0";
-
 // src/gate/join.ts
 function upgradeReport(value2, name = "report") {
   const r = value2;
   if (r === null || typeof r !== "object" || typeof r.version !== "number" || !Array.isArray(r.files)) {
-    throw new UsageError(`${name} is not a netbrace report`, 'pass the JSON files written by "netbrace check --json" or the action');
+    throw new UsageError(
+      `${name} is not a netbrace report`,
+      'pass the JSON files written by "netbrace check --json" or the action'
+    );
   }
   if (r.version > REPORT_VERSION) {
-    throw new UsageError(`${name} has report version ${r.version}, newer than this netbrace (${REPORT_VERSION})`, "join with the newest netbrace");
+    throw new UsageError(
+      `${name} has report version ${r.version}, newer than this netbrace (${REPORT_VERSION})`,
+      "join with the newest netbrace"
+    );
   }
-  const files = r.files.map((f) => ({ ...f, findings: f.findings ?? [], requirements: f.requirements ?? [] }));
+  const files = r.files.map((f) => ({
+    ...f,
+    findings: f.findings ?? [],
+    requirements: f.requirements ?? []
+  }));
   return {
     ...r,
     version: REPORT_VERSION,
@@ -56674,6 +59944,13 @@ function upgradeReport(value2, name = "report") {
 function joinReports(reports) {
   if (reports.length === 0) throw new UsageError("there are no reports to join", "check the folder of part reports");
   const list = reports.map((r, i) => upgradeReport(r, `report ${i + 1}`));
+  const split = list.find((r) => r.split?.length);
+  if (split) {
+    throw new UsageError(
+      `${split.split[0].path} was split across the parts by realizations, and a join of reports alone cannot judge it`,
+      `join in a checkout with "netbrace check --join", which judges it from the parts' samples`
+    );
+  }
   const first = list[0];
   const byPath = /* @__PURE__ */ new Map();
   for (const r of list) for (const f of r.files) if (!byPath.has(f.path)) byPath.set(f.path, f);
@@ -56694,23 +59971,30 @@ function joinReports(reports) {
   };
   const parts = list.map((r) => r.part).filter((s) => s !== void 0);
   if (parts.length > 0) {
-    joined.parts = { total: Math.max(...parts.map((s) => s.total)), joined: [...new Set(parts.map((s) => s.index))].sort((a, b) => a - b) };
+    joined.parts = {
+      total: Math.max(...parts.map((s) => s.total)),
+      joined: [...new Set(parts.map((s) => s.index))].sort((a, b) => a - b)
+    };
   }
   return joined;
 }
 
 // src/run-gate.ts
-function pathHash(path3) {
-  let h = 2166136261;
-  const bytes = new TextEncoder().encode(path3);
-  for (const b of bytes) {
-    h ^= b;
-    h = Math.imul(h, 16777619) >>> 0;
-  }
-  return h >>> 0;
-}
 function inPart(path3, part) {
-  return pathHash(path3) % part.total === part.index - 1;
+  return fnv1a32(path3) % part.total === part.index - 1;
+}
+function checkJoin(join3, base, head, seed) {
+  for (const r of join3.reports) {
+    const name = `part ${r.part.index}/${r.part.total}`;
+    if (r.head !== head || r.base !== base) {
+      throw new UsageError(
+        `${name} judged ${r.base ?? "(no base)"} → ${r.head ?? "?"}, not ${base ?? "(no base)"} → ${head}`,
+        "join with the same --base and --head the parts ran with"
+      );
+    }
+    if (r.seed !== seed)
+      throw new UsageError(`${name} ran with seed ${r.seed}, not ${seed}`, "join with the seed the parts ran with");
+  }
 }
 var NeedFile = class {
   constructor(path3) {
@@ -56768,14 +60052,15 @@ async function choosePolicy(request2, deps, base, head) {
   const trusted = request2.policySource === "base" && base !== void 0 ? base : head;
   const other = trusted === head ? base : head;
   const readOrg = async (p) => {
-    if (!deps.readOrgPolicy) throw new UsageError(`the organisation policy ${p} cannot be read here`, "give the path of its checkout");
+    if (!deps.readOrgPolicy)
+      throw new UsageError(`the organisation policy ${p} cannot be read here`, "give the path of its checkout");
     return deps.readOrgPolicy(p);
   };
-  const readAtRev = (rev) => async (p) => isOrgFile(request2, p) ? readOrg(p) : deps.readAt(rev, p);
+  const readAtRev = (rev2) => async (p) => isOrgFile(request2, p) ? readOrg(p) : deps.readAt(rev2, p);
   const readTrusted = readAtRev(trusted);
-  const exists2 = async (rev, p) => {
+  const exists2 = async (rev2, p) => {
     try {
-      return await deps.readAt(rev, p) !== null;
+      return await deps.readAt(rev2, p) !== null;
     } catch (e) {
       if (e instanceof EncodingError) return true;
       throw e;
@@ -56798,12 +60083,23 @@ async function choosePolicy(request2, deps, base, head) {
       };
     }
     if (explicit) {
-      throw new UsageError(`the policy file ${path3} does not exist${trusted === "worktree" ? "" : ` at ${trusted}`}`, 'check --policy, or run "netbrace init"');
+      throw new UsageError(
+        `the policy file ${path3} does not exist${trusted === "worktree" ? "" : ` at ${trusted}`}`,
+        'check --policy, or run "netbrace init"'
+      );
     }
     if (request2.orgPolicyPath !== void 0) {
       const org = request2.orgPolicyPath;
       const { policy: policy2 } = await loadPolicyAt(org, readOrg);
-      return { policy: policy2, info: { source: "file", path: org, files: policy2.files, note: `the repository has no policy; the organisation policy ${org} applies` } };
+      return {
+        policy: policy2,
+        info: {
+          source: "file",
+          path: org,
+          files: policy2.files,
+          note: `the repository has no policy; the organisation policy ${org} applies`
+        }
+      };
     }
     return { policy: builtinPolicy(), info: { source: "builtin", revision: trusted } };
   }
@@ -56812,18 +60108,24 @@ async function choosePolicy(request2, deps, base, head) {
   const info2 = { source: "file", path: path3, revision: trusted, files: policy.files };
   if (other !== void 0) {
     let changed = false;
-    for (const [p, text2] of texts) if (!isOrgFile(request2, p) && await readSide(deps, other, p) !== text2) changed = true;
+    for (const [p, text2] of texts)
+      if (!isOrgFile(request2, p) && await readSide(deps, other, p) !== text2) changed = true;
     if (changed) {
       info2.changed = true;
+      let otherPolicy;
+      let otherError;
+      try {
+        const loaded = await loadPolicyAt(path3, readAtRev(other));
+        requireOrgPolicy(request2, path3, loaded.policy);
+        otherPolicy = loaded.policy;
+      } catch (e) {
+        if (!isNetbraceError(e)) throw e;
+        otherError = e.format().split("\n")[0];
+      }
+      if (otherPolicy)
+        info2.changes = trusted === base ? policyChanges(policy, otherPolicy) : policyChanges(otherPolicy, policy);
       if (trusted === base) {
-        let verdict = "it applies once merged";
-        try {
-          const proposed = await loadPolicyAt(path3, readAtRev(other));
-          requireOrgPolicy(request2, path3, proposed.policy);
-        } catch (e) {
-          if (!isNetbraceError(e)) throw e;
-          verdict = `the proposed version has an error: ${e.format().split("\n")[0]}`;
-        }
+        const verdict = otherError === void 0 ? "it applies once merged" : `the proposed version has an error: ${otherError}`;
         info2.note = `this change modifies the policy; the version at the base judges it (${verdict})`;
       } else {
         info2.note = "this change modifies the policy, and the policy of the head applies (policy-source: head)";
@@ -56838,14 +60140,21 @@ async function candidates(request2, deps, policy, base, head) {
     for (const path3 of [...new Set(request2.paths.map(normalizePath))]) {
       if (base === void 0) {
         if (await deps.readAt(head, path3) === null) {
-          throw new UsageError(`${path3} does not exist${head === "worktree" ? "" : ` at ${head}`} (or is not a file)`, "give the path of a design file");
+          throw new UsageError(
+            `${path3} does not exist${head === "worktree" ? "" : ` at ${head}`} (or is not a file)`,
+            "give the path of a design file"
+          );
         }
         list2.push({ path: path3, change: "unchanged" });
         continue;
       }
       const [h, b] = [await readSide(deps, head, path3), await readSide(deps, base, path3)];
       const change = h === null ? "deleted" : b === null ? "added" : typeof h === "string" && h === b ? "unchanged" : "modified";
-      if (h === null && b === null) throw new UsageError(`${path3} exists neither at ${head} nor at ${base}`, "give paths relative to the repository root");
+      if (h === null && b === null)
+        throw new UsageError(
+          `${path3} exists neither at ${head} nor at ${base}`,
+          "give paths relative to the repository root"
+        );
       list2.push({ path: path3, change });
     }
     return { list: list2, scope: "paths" };
@@ -56856,14 +60165,20 @@ async function candidates(request2, deps, policy, base, head) {
     return { list: await withDesignHeaders(list2, deps, policy, void 0, head), scope: "all" };
   }
   const changed = await deps.listChanged(base, head);
-  const selected = changed.filter((f) => isDesignPath(policy, f.path) || f.previousPath !== void 0 && isDesignPath(policy, f.previousPath)).map((f) => ({ path: f.path, change: f.status, ...f.previousPath !== void 0 ? { previousPath: f.previousPath } : {} }));
+  const selected = changed.filter(
+    (f) => isDesignPath(policy, f.path) || f.previousPath !== void 0 && isDesignPath(policy, f.previousPath)
+  ).map((f) => ({
+    path: f.path,
+    change: f.status,
+    ...f.previousPath !== void 0 ? { previousPath: f.previousPath } : {}
+  }));
   const list = await withDesignHeaders(selected, deps, policy, base, head);
   const note2 = await deadGlobNote(changed, deps, policy, base, head);
   return { list: await pairMovedDesigns(list, deps, policy, base, head), scope: "changed", ...note2 ? { note: note2 } : {} };
 }
-async function textOrNull(deps, rev, path3) {
+async function textOrNull(deps, rev2, path3) {
   try {
-    return await deps.readAt(rev, path3);
+    return await deps.readAt(rev2, path3);
   } catch (e) {
     if (e instanceof EncodingError) return null;
     throw e;
@@ -56873,7 +60188,7 @@ async function hasDesignHeader(c, deps, policy, base, head) {
   const sides = [];
   if (c.change !== "deleted") sides.push([head, c.path]);
   if (base !== void 0 && c.change !== "added") sides.push([base, c.previousPath ?? c.path]);
-  for (const [rev, p] of sides) if (isDesignText(policy, p, await textOrNull(deps, rev, p))) return true;
+  for (const [rev2, p] of sides) if (isDesignText(policy, p, await textOrNull(deps, rev2, p))) return true;
   return false;
 }
 async function withDesignHeaders(list, deps, policy, base, head) {
@@ -56900,10 +60215,10 @@ async function pairMovedDesigns(list, deps, policy, base, head) {
   const deleted = list.filter((c) => c.change === "deleted");
   const added = list.filter((c) => c.change === "added");
   if (deleted.length === 0 || added.length === 0) return list;
-  const named2 = async (rev, cs) => {
+  const named2 = async (rev2, cs) => {
     const out = [];
     for (const c of cs) {
-      const name = networkName(await deps.readAt(rev, c.path), c.path, policy);
+      const name = networkName(await deps.readAt(rev2, c.path), c.path, policy);
       out.push({ path: c.path, ...name !== void 0 ? { name } : {} });
     }
     return out;
@@ -56912,12 +60227,18 @@ async function pairMovedDesigns(list, deps, policy, base, head) {
   if (pairs.length === 0) return list;
   const gone = new Set(pairs.map((p) => p.previousPath));
   const into = new Map(pairs.map((p) => [p.path, p.previousPath]));
-  return list.filter((c) => !(c.change === "deleted" && gone.has(c.path))).map((c) => c.change === "added" && into.has(c.path) ? { path: c.path, previousPath: into.get(c.path), change: "renamed" } : c);
+  return list.filter((c) => !(c.change === "deleted" && gone.has(c.path))).map(
+    (c) => c.change === "added" && into.has(c.path) ? { path: c.path, previousPath: into.get(c.path), change: "renamed" } : c
+  );
 }
 var UNSELECTED_SHOWN = 5;
 async function deadGlobNote(changed, deps, policy, base, head) {
   const looksLikeDesign = (p) => globsMatch(DEFAULT_DESIGN_GLOBS, p) && !isDesignPath(policy, p) && !globsMatch(policy.exclude, p);
-  const looking = [...new Set(changed.flatMap((f) => [f.path, ...f.previousPath !== void 0 ? [f.previousPath] : []]).filter(looksLikeDesign))].sort();
+  const looking = [
+    ...new Set(
+      changed.flatMap((f) => [f.path, ...f.previousPath !== void 0 ? [f.previousPath] : []]).filter(looksLikeDesign)
+    )
+  ].sort();
   if (looking.length === 0) return void 0;
   const written = policy.designs.flatMap((d) => d.paths.map((glob, i) => ({ glob, where: d.fileWhere[i] ?? d.where }))).filter((g) => g.where.file !== BUILTIN_POLICY_NAME);
   if (written.length === 0) return void 0;
@@ -56928,7 +60249,8 @@ async function deadGlobNote(changed, deps, policy, base, head) {
   const unselected = [];
   for (const p of looking) {
     if (!designNeedsHeader(builtin2, p)) unselected.push(p);
-    else if (isDesignText(builtin2, p, await textOrNull(deps, head, p)) || isDesignText(builtin2, p, await textOrNull(deps, base, p))) unselected.push(p);
+    else if (isDesignText(builtin2, p, await textOrNull(deps, head, p)) || isDesignText(builtin2, p, await textOrNull(deps, base, p)))
+      unselected.push(p);
   }
   if (unselected.length === 0) return void 0;
   const globs2 = dead.map((g) => `designs glob "${g.glob}" (${g.where.file}:${g.where.line}:${g.where.column})`).join(", ");
@@ -56938,53 +60260,12 @@ async function deadGlobNote(changed, deps, policy, base, head) {
 function normalizePath(p) {
   return p.replace(/\\/g, "/").replace(/^\.\//, "");
 }
-function evaluationSpecs(fp, seed) {
-  const challenges2 = fp.challenges.map((c) => {
-    const at = fp.requirements.filter((r) => r.kind === "r-threshold" && r.challenge === c.name && r.at !== void 0).map((r) => r.kind === "r-threshold" ? r.at : 0);
-    const params = { ...c.params };
-    if (c.random && at.length > 0) params.at = [...new Set(at)].sort((a, b) => a - b);
-    return params;
-  });
-  const elements = [...new Set(fp.requirements.flatMap((r) => r.kind === "n-1" ? [r.element] : []))].sort();
-  const budget = { maxWork: fp.budget.maxWork };
-  const specs = [{ r: fp.rValue, challenges: challenges2, seed, budget }];
-  elements.forEach((element, i) => {
-    const n1 = { challenge: "n-1", element };
-    if (i === 0) specs[0].challenges.push(n1);
-    else specs.push({ r: fp.rValue, challenges: [n1], seed, budget });
-  });
-  return specs;
-}
-function joinEvaluations(parts) {
-  if (parts.length === 1) return parts[0];
-  const [first, ...rest] = parts;
-  const evaluation = { ...first.evaluation };
-  evaluation.envelopes = [...first.evaluation.envelopes];
-  evaluation.attacks = [...first.evaluation.attacks];
-  evaluation.contingencies = [...first.evaluation.contingencies];
-  evaluation.degraded = [...first.evaluation.degraded];
-  const notApplicable = [...first.evaluation.notApplicable ?? []];
-  const samples = new Map(first.samples);
-  const labels2 = new Map(first.labels);
-  for (const p of rest) {
-    evaluation.envelopes.push(...p.evaluation.envelopes);
-    evaluation.attacks.push(...p.evaluation.attacks);
-    evaluation.contingencies.push(...p.evaluation.contingencies);
-    evaluation.degraded.push(...p.evaluation.degraded);
-    notApplicable.push(...p.evaluation.notApplicable ?? []);
-    for (const [k, v] of p.samples) samples.set(k, v);
-    for (const [k, v] of p.labels) labels2.set(k, v);
-  }
-  if (notApplicable.length) evaluation.notApplicable = notApplicable;
-  else delete evaluation.notApplicable;
-  return { evaluation, samples, labels: labels2 };
-}
 function problemOf(e) {
   return { message: e.hint ? `${e.message} — ${e.hint}` : e.message, line: e.line, column: e.column };
 }
-async function readSide(deps, rev, path3) {
+async function readSide(deps, rev2, path3) {
   try {
-    return await deps.readAt(rev, path3);
+    return await deps.readAt(rev2, path3);
   } catch (e) {
     if (e instanceof EncodingError) return { error: problemOf(e) };
     throw e;
@@ -57004,24 +60285,20 @@ function compileText(text2, path3, format, rValue) {
     throw e;
   }
 }
-async function evaluateGraph(g, topology, specs, cuts, request2, deps) {
-  const evaluate = deps.evaluate ?? ((graph, spec) => evaluateDesign(graph, spec));
-  const parts = [];
-  for (const [i, spec] of specs.entries()) {
-    const part = await evaluate(g, spec, request2.threads);
-    notePairedCuts(part, cuts, i);
-    parts.push(part);
-  }
-  return { graph: g, result: joinEvaluations(parts), topology };
-}
 function validateRequest(request2) {
-  if (request2.mode !== "block" && request2.mode !== "inform") throw new UsageError(`mode must be block or inform, not ${String(request2.mode)}`);
+  if (request2.mode !== "block" && request2.mode !== "inform")
+    throw new UsageError(`mode must be block or inform, not ${String(request2.mode)}`);
   if (request2.policySource !== "base" && request2.policySource !== "head") {
     throw new UsageError(`policy-source must be base or head, not ${String(request2.policySource)}`);
   }
+  if (request2.part && request2.join)
+    throw new UsageError("a join judges no part of its own", "leave out --part when joining part reports");
   const s = request2.part;
   if (s && !(Number.isInteger(s.index) && Number.isInteger(s.total) && s.total >= 1 && s.index >= 1 && s.index <= s.total)) {
-    throw new UsageError(`part ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`, "e.g. 2/4 for the second of four parts");
+    throw new UsageError(
+      `part ${s.index}/${s.total} is not k/n with 1 ≤ k ≤ n`,
+      "e.g. 2/4 for the second of four parts"
+    );
   }
   if (request2.seed !== void 0 && !(Number.isInteger(request2.seed) && request2.seed >= 0 && request2.seed <= 4294967295)) {
     throw new UsageError(`seed must be a whole number from 0 to 4294967295, not ${request2.seed}`);
@@ -57037,22 +60314,39 @@ async function runGate(request2, deps) {
   const { policy, info: info2 } = await choosePolicy(request2, deps, base, head);
   const { list: all, scope, note: note2 } = await candidates(request2, deps, policy, base, head);
   if (note2) info2.note = info2.note ? `${info2.note}. ${note2}` : note2;
-  const chosen = [...all].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0).filter((c) => !request2.part || inPart(c.path, request2.part));
+  const part = request2.part && request2.part.total > 1 ? request2.part : void 0;
+  const sorted = [...all].sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
+  const chosen = sorted.filter((c) => !request2.part || part !== void 0 || inPart(c.path, request2.part));
   const rules = chosen.map((c) => policyForFile(policy, c.path));
   const seed = request2.seed ?? policy.seed;
+  const join3 = request2.join;
+  if (join3) checkJoin(join3, base, head, seed);
   const files = [];
+  const split = [];
   for (const [i, c] of chosen.entries()) {
     const fp = rules[i];
+    const home = !part || inPart(c.path, part);
+    const fromPart = join3?.files.get(c.path);
+    if (fromPart) {
+      files.push(fromPart);
+      continue;
+    }
+    const onlyIfSplit = !home || join3 !== void 0;
     const thresholdsOnly = base === void 0 || scope === "all";
     const input = { path: c.path, change: c.change, policy: fp, thresholdsOnly };
     if (c.previousPath !== void 0) input.previousPath = c.previousPath;
     if (fp.format) input.format = fp.format;
+    let headWarnings = [];
+    let fileDeps = deps;
+    let share;
+    let evaluated = false;
     if (c.change !== "deleted") {
       const headText = await readSide(deps, head, c.path);
       if (headText === null) {
         input.change = "deleted";
       } else {
         const h = typeof headText === "string" ? compileText(headText, c.path, fp.format, fp.rValue) : headText;
+        if ("topology" in h) headWarnings = h.topology.warnings;
         if ("error" in h) input.headError = h.error;
         else if ("unsupported" in h) input.headUnsupported = h.unsupported;
         else {
@@ -57065,7 +60359,12 @@ async function runGate(request2, deps) {
             if (baseText === headText) {
               same = true;
             } else if (baseText !== null) {
-              const b = typeof baseText === "string" ? compileText(baseText, basePath, basePath === c.path ? fp.format : designFormat(policy, basePath), fp.rValue) : baseText;
+              const b = typeof baseText === "string" ? compileText(
+                baseText,
+                basePath,
+                basePath === c.path ? fp.format : designFormat(policy, basePath),
+                fp.rValue
+              ) : baseText;
               if ("error" in b) input.baseError = b.error;
               else if ("unsupported" in b) input.baseError = b.unsupported;
               else {
@@ -57074,48 +60373,108 @@ async function runGate(request2, deps) {
               }
             }
           }
-          const specs = budgetSpecs(evaluationSpecs(fp, seed), fp.budget.maxWork, h.graph, baseGraph);
-          input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request2, deps);
-          if (same) input.base = input.head;
-          else if (baseGraph) {
-            if (sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph))) input.base = { graph: baseGraph, topology: baseTopology, result: input.head.result };
-            else input.base = await evaluateGraph(baseGraph, baseTopology, specs.base, specs.cuts, request2, deps);
+          const oneEvaluation = same || baseGraph !== void 0 && sameDesign(baseGraph, h.graph, matchDesigns(baseGraph, h.graph));
+          const specs = budgetSpecs(
+            evaluationSpecs(fp, seed),
+            fp.budget.maxWork,
+            h.graph,
+            oneEvaluation ? void 0 : baseGraph
+          );
+          const otherGraph = oneEvaluation ? void 0 : baseGraph;
+          const isSplit = !deps.evaluate && splitAcrossParts(part?.total ?? join3?.total ?? 1, specs.head, h.graph, otherGraph);
+          if (join3 && isSplit !== join3.split.has(c.path)) {
+            throw new UsageError(
+              `${c.path} was ${isSplit ? "not " : ""}split across the parts, and would be ${isSplit ? "" : "not "}here`,
+              "join the part reports of one run: the same revisions, policy, seed and netbrace version"
+            );
+          }
+          if (part && isSplit) {
+            const sides = [
+              { side: "head", graph: h.graph, specs: specs.head },
+              ...otherGraph ? [{ side: "base", graph: otherGraph, specs: specs.base }] : []
+            ];
+            share = await splitShare(c.path, part, sides, request2, deps);
+          } else if (!onlyIfSplit || isSplit) {
+            evaluated = true;
+            if (join3 && isSplit) fileDeps = { ...deps, runTasks: servedTasks(join3, c.path, h.graph, otherGraph, deps) };
+            if (!fileDeps.evaluate && sequentialRun(request2, specs.head, h.graph, otherGraph)) {
+              const sides = await evaluateSequentially(
+                fp,
+                { graph: h.graph, topology: h.topology },
+                otherGraph && { graph: otherGraph, topology: baseTopology },
+                specs,
+                !thresholdsOnly && (same || baseGraph !== void 0),
+                request2,
+                fileDeps
+              );
+              input.head = sides.head;
+              if (same) input.base = input.head;
+              else if (baseGraph)
+                input.base = oneEvaluation ? { graph: baseGraph, topology: baseTopology, result: input.head.result } : sides.base;
+            } else {
+              input.head = await evaluateGraph(h.graph, h.topology, specs.head, specs.cuts, request2, fileDeps);
+              if (same) input.base = input.head;
+              else if (baseGraph) {
+                if (oneEvaluation)
+                  input.base = { graph: baseGraph, topology: baseTopology, result: input.head.result };
+                else
+                  input.base = await evaluateGraph(
+                    baseGraph,
+                    baseTopology,
+                    specs.base,
+                    specs.cuts,
+                    request2,
+                    fileDeps
+                  );
+              }
+            }
           }
         }
       }
     }
+    if (share) {
+      split.push(share);
+      continue;
+    }
+    if (onlyIfSplit && !evaluated) {
+      if (!join3) continue;
+      throw new UsageError(
+        `no part report judges ${c.path} (part ${fnv1a32(c.path) % join3.total + 1}/${join3.total} would)`,
+        "join the part reports of one run: the same revisions, policy and seed"
+      );
+    }
     const judged = compareDesign(input);
-    await addMapAndMend(judged, input, { request: request2, deps, head, ...base !== void 0 ? { base } : {}, seed });
+    if (headWarnings.length) {
+      judged.warnings = headWarnings.slice(0, DESIGN_WARNINGS_KEPT).map((w) => ({ message: w.message, line: w.line, column: w.column, ...w.hint ? { hint: w.hint } : {} }));
+    }
+    await addMapAndMend(judged, input, {
+      request: request2,
+      deps: fileDeps,
+      head,
+      ...base !== void 0 ? { base } : {},
+      seed
+    });
     files.push(judged);
   }
-  const report = {
-    version: REPORT_VERSION,
-    tool: { name: "netbrace", version: VERSION },
-    verdict: verdictOf(files),
-    mode: request2.mode,
-    policy: info2,
-    ...base !== void 0 ? { base } : {},
-    head,
-    seed,
-    ...request2.part ? { part: { index: request2.part.index, total: request2.part.total } } : {},
-    scope,
-    counts: countStatuses(files),
-    files,
-    caution: CAUTION
-  };
+  const report = assembleReport(
+    {
+      mode: request2.mode,
+      policy: info2,
+      ...base !== void 0 ? { base } : {},
+      head,
+      seed,
+      ...request2.part ? { part: request2.part } : {},
+      scope
+    },
+    files
+  );
+  if (split.length) report.split = split;
   return { report, exitCode: exitCodeOf(report) };
 }
-
-// src/shell/action-run.ts
-import { execFileSync } from "node:child_process";
-import { lstatSync as lstatSync2, readFileSync as readFileSync3, readdirSync, statSync as statSync2, writeFileSync, appendFileSync as appendFileSync2, realpathSync as realpathSync2 } from "node:fs";
-import path2 from "node:path";
 
 // src/report/finding-text.ts
 function findingNumbers(x, deltaWord = "Δ") {
   if (x.status !== void 0) return "";
-  const stated = x.delta !== void 0 && x.delta !== null ? formatDelta(x.delta) : x.head !== void 0 && x.head !== null ? formatValue(x.head) : void 0;
-  if (stated !== void 0 && x.message.includes(stated)) return "";
   const parts = [];
   if (x.base !== void 0 && x.base !== null) parts.push(`base ${formatValue(x.base)}`);
   if (x.head !== void 0 && x.head !== null) parts.push(`head ${formatValue(x.head)}`);
@@ -57133,217 +60492,8 @@ function repoPath(prefix, p) {
   return clean ? `${clean}/${p}` : p;
 }
 
-// src/report/rank.ts
-var SEVERITY_RANK2 = { fail: 0, warn: 1, notice: 2 };
-var STATUS_RANK = {
-  unreadable: 0,
-  "below-floor": 1,
-  weakened: 2,
-  removed: 3,
-  new: 4,
-  renamed: 5,
-  holds: 6
-};
-function worstSeverity(f) {
-  let worst;
-  for (const x of f.findings) if (worst === void 0 || SEVERITY_RANK2[x.severity] < SEVERITY_RANK2[worst]) worst = x.severity;
-  return f.status === "unreadable" ? "fail" : worst;
-}
-function countOf(f, s) {
-  let n = 0;
-  for (const x of f.findings) if (x.severity === s) n++;
-  return n;
-}
-function rankFiles(files) {
-  const rank = (f) => {
-    const w = worstSeverity(f);
-    return w === void 0 ? 3 : SEVERITY_RANK2[w];
-  };
-  return [...files].sort(
-    (a, b) => rank(a) - rank(b) || countOf(b, "fail") - countOf(a, "fail") || countOf(b, "warn") - countOf(a, "warn") || STATUS_RANK[a.status] - STATUS_RANK[b.status] || (a.path < b.path ? -1 : a.path > b.path ? 1 : 0)
-  );
-}
-function rankFindings(findings) {
-  return [...findings].sort((a, b) => SEVERITY_RANK2[a.severity] - SEVERITY_RANK2[b.severity]);
-}
-
-// src/report/annotations.ts
-var ANNOTATIONS_PER_LEVEL = 10;
-var LEVEL = { fail: "error", warn: "warning", notice: "notice" };
-var TITLE = {
-  "r-threshold": "r-threshold not held",
-  "area-floor": "envelope area below its floor",
-  "spread-ceiling": "envelope spread above its ceiling",
-  "n-1": "N−1 rule broken",
-  "new-bridge": "new single point of failure (bridge)",
-  "new-cut-node": "new single point of failure (cut site)",
-  "new-stranding-group": "new single point of failure (shared-risk group)",
-  "hardened-weak-point": "new weak point hidden by hardening",
-  regression: "robustness weakened",
-  "weakest-sequence": "weakest removal sequence",
-  "parse-error": "design could not be read",
-  "removed-design": "design removed",
-  "policy-changed": "policy changed (applies after merge)",
-  degraded: "evaluation reduced by budget",
-  "not-computable": "value could not be computed"
-};
-function annotationsOf(report, options = {}) {
-  const out = [];
-  for (const f of rankFiles(report.files)) {
-    const file = repoPath(options.pathPrefix, f.path);
-    const touched = options.changedLines?.get(file);
-    const findings = [...f.findings];
-    if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
-      findings.push({ rule: "parse-error", severity: "fail", message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
-    }
-    for (const x of findings) {
-      const startLine = Math.max(1, Math.floor(x.line || 1));
-      out.push({
-        level: LEVEL[x.severity],
-        file,
-        startLine,
-        ...x.column && x.column > 0 ? { startColumn: Math.floor(x.column) } : {},
-        title: oneLine(`netbrace: ${findingTitle(x, TITLE)}`, 200),
-        message: logText(`${x.message}${findingNumbers(x)}${findingCost(x)}`),
-        rule: x.rule,
-        inDiff: touched ? touched.has(startLine) : false
-      });
-    }
-  }
-  for (const n of configurationNotes(report)) {
-    const file = repoPath(options.pathPrefix, n.file);
-    const startLine = Math.max(1, n.line);
-    out.push({
-      level: n.weakens ? "error" : "notice",
-      file,
-      startLine,
-      title: n.weakens ? "netbrace: the change weakens netbrace’s own settings" : n.file === report.policy.path ? "netbrace: policy changed (applies after merge)" : "netbrace: the change edits netbrace’s workflow",
-      message: logText(n.text),
-      rule: n.file === report.policy.path ? "policy-changed" : "own-settings",
-      inDiff: options.changedLines?.get(file)?.has(startLine) ?? false
-    });
-  }
-  const rank = (a) => SEVERITY_RANK2[a.level === "error" ? "fail" : a.level === "warning" ? "warn" : "notice"];
-  return out.sort((a, b) => rank(a) - rank(b) || Number(b.inDiff) - Number(a.inDiff));
-}
-function planAnnotations(report, options = {}) {
-  const perLevel = options.perLevel ?? ANNOTATIONS_PER_LEVEL;
-  const all = annotationsOf(report, options);
-  const taken = [];
-  const used = { error: 0, warning: 0, notice: 0 };
-  const errorCap = Math.max(0, perLevel - (options.reservedErrors ?? 0));
-  const capOf = (l) => l === "error" ? errorCap : perLevel;
-  const fitsAll = ["error", "warning", "notice"].every((l) => all.filter((a) => a.level === l).length <= capOf(l));
-  const cap = { error: errorCap, warning: perLevel, notice: fitsAll ? perLevel : perLevel - 1 };
-  for (const a of all) {
-    if (used[a.level] < cap[a.level]) {
-      taken.push(a);
-      used[a.level]++;
-    }
-  }
-  const omitted = all.length - taken.length;
-  if (omitted > 0) {
-    const elsewhere = options.elsewhere ?? "the job summary and the SARIF file";
-    taken.push({
-      level: "notice",
-      file: "",
-      startLine: 0,
-      title: "netbrace: more findings",
-      message: logText(
-        `${omitted} more finding${omitted === 1 ? "" : "s"} (of ${all.length}) not annotated here: GitHub shows at most ${perLevel} annotations per level and step. All of them are in ${elsewhere}.`
-      ),
-      rule: "more",
-      inDiff: false
-    });
-  }
-  return { annotations: taken, omitted, total: all.length };
-}
-
-// src/gate/own-settings.ts
-var import_yaml8 = __toESM(require_dist(), 1);
-var isObj = (v) => typeof v === "object" && v !== null && !Array.isArray(v);
-function usesNetbrace(uses) {
-  return typeof uses === "string" && (/(^|\/)netbrace(@|\/|$)/i.test(uses) || uses === "./" || uses === ".");
-}
-function lineOf(text2, needle, from) {
-  const lines = text2.split("\n");
-  for (let i = Math.max(0, from - 1); i < lines.length; i++) if (needle.test(lines[i])) return i + 1;
-  return from;
-}
-function stepSettings(text2, job) {
-  const none = { present: false, mode: "", policySource: "", policy: "", orgPolicy: "", continueOnError: "", condition: "", line: 1, lines: {} };
-  if (text2 === null) return none;
-  let wf;
-  try {
-    wf = (0, import_yaml8.parse)(text2, { maxAliasCount: 50 });
-  } catch {
-    return none;
-  }
-  if (!isObj(wf) || !isObj(wf.jobs)) return none;
-  const jobs2 = Object.entries(wf.jobs).filter(([id, j]) => isObj(j) && (job === void 0 || id === job));
-  for (const [id, j] of jobs2) {
-    const steps = j.steps;
-    if (!Array.isArray(steps)) continue;
-    const step = steps.find((s) => isObj(s) && usesNetbrace(s.uses));
-    if (!step) continue;
-    const w = isObj(step.with) ? step.with : {};
-    const str = (v) => v === void 0 || v === null ? "" : String(v);
-    const jobLine = lineOf(text2, new RegExp(`^\\s{1,}${id.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}:\\s*$`), 1);
-    const stepLine = lineOf(text2, /uses:\s*\S*netbrace|uses:\s*\.\/?\s*$/i, jobLine);
-    const at = (key) => lineOf(text2, new RegExp(`^\\s*${key}:`), stepLine);
-    const jobContinue = str(j["continue-on-error"]);
-    return {
-      present: true,
-      mode: str(w.mode) || "block",
-      policySource: str(w["policy-source"]) || "base",
-      policy: str(w.policy),
-      orgPolicy: str(w["org-policy"]),
-      continueOnError: str(step["continue-on-error"]) || jobContinue,
-      condition: str(step.if),
-      line: stepLine,
-      lines: { mode: at("mode"), "policy-source": at("policy-source"), policy: at("policy"), "org-policy": at("org-policy"), "continue-on-error": at("continue-on-error"), if: at("if") }
-    };
-  }
-  return none;
-}
-function compareSettings(baseText, headText, job) {
-  const b = stepSettings(baseText, job);
-  const h = stepSettings(headText, job);
-  if (!b.present && !h.present) return [];
-  const out = [];
-  if (b.present && !h.present) {
-    out.push({ setting: "the netbrace step", base: "present", head: "removed", weakens: true, line: 1, message: "the change removes the netbrace step (or its job) from the workflow: the check would no longer run" });
-    return out;
-  }
-  if (!b.present) return [{ setting: "the netbrace step", base: "absent", head: "added", weakens: false, line: h.line, message: "the change adds the netbrace step to the workflow" }];
-  const add = (setting, base, head, weakens, why) => {
-    if (base === head) return;
-    out.push({ setting, base: base || "(unset)", head: head || "(unset)", weakens, line: h.lines[setting] ?? h.line, message: `${setting} ${base || "(unset)"} → ${head || "(unset)"}: ${why}` });
-  };
-  add("mode", b.mode, h.mode, b.mode === "block" && h.mode !== "block", h.mode === "inform" ? "the check would report but never fail" : "how the check ends");
-  add("policy-source", b.policySource, h.policySource, b.policySource === "base" && h.policySource !== "base", "the pull request would choose the rules that judge it");
-  add("policy", b.policy, h.policy, true, "another policy file would judge the change");
-  add("org-policy", b.orgPolicy, h.orgPolicy, b.orgPolicy !== "" && h.orgPolicy !== b.orgPolicy, h.orgPolicy === "" ? "the organisation floors would no longer be required" : "another organisation policy");
-  add("continue-on-error", b.continueOnError, h.continueOnError, h.continueOnError !== "" && h.continueOnError !== "false", "a failing check would no longer fail the job");
-  add("if", b.condition, h.condition, h.condition !== "", "the step would run only when the condition holds");
-  return out.sort((x, y) => Number(y.weakens) - Number(x.weakens));
-}
-
-// src/report/fingerprint.ts
-var OFFSET = 0xcbf29ce484222325n;
-var PRIME = 0x100000001b3n;
-var MASK = 0xffffffffffffffffn;
-function stableHash(text2) {
-  let h = OFFSET;
-  for (const byte of new TextEncoder().encode(text2)) {
-    h ^= BigInt(byte);
-    h = h * PRIME & MASK;
-  }
-  return h.toString(16).padStart(16, "0");
-}
-
 // src/report/mermaid-map.ts
-var MAX_ELEMENTS3 = 40;
+var MAX_ELEMENTS2 = 40;
 var COLORS = { fail: "#a4161a", added: "#2d6a3e", removed: "#8a949a", cut: "#8f5200" };
 function mermaidLabel(id) {
   const safe = [...id].map((c) => /[\p{L}\p{N} ._-]/u.test(c) ? c : "_").join("").replace(/\s+/g, " ").trim();
@@ -57353,8 +60503,12 @@ function mermaidLabel(id) {
 function neighbourhoodMermaid(f) {
   const map = f.map;
   if (!map || "omitted" in map) return "";
-  const newBridges = new Set(f.findings.filter((x) => x.rule === "new-bridge").flatMap((x) => x.elements.map((e) => e.id)));
-  const newCuts = new Set(f.findings.filter((x) => x.rule === "new-cut-node").flatMap((x) => x.elements.map((e) => e.id)));
+  const newBridges = new Set(
+    f.findings.filter((x) => x.rule === "new-bridge").flatMap((x) => x.elements.map((e) => e.id))
+  );
+  const newCuts = new Set(
+    f.findings.filter((x) => x.rule === "new-cut-node").flatMap((x) => x.elements.map((e) => e.id))
+  );
   const focusLinks = map.links.filter((l) => l.side !== "both" || newBridges.has(l.id));
   const focus = /* @__PURE__ */ new Set();
   for (const n of map.nodes) if (n.side !== "both" || newCuts.has(n.id)) focus.add(n.id);
@@ -57364,7 +60518,7 @@ function neighbourhoodMermaid(f) {
   }
   if (focus.size === 0) return "";
   const linksAmong = (set) => map.links.filter((l) => set.has(l.source) && set.has(l.target));
-  if (focus.size + linksAmong(focus).length > MAX_ELEMENTS3) {
+  if (focus.size + linksAmong(focus).length > MAX_ELEMENTS2) {
     return `The change touches ${focus.size} sites and ${focusLinks.length} links: too many to draw legibly here. The HTML report has the map of the whole design.
 
 `;
@@ -57382,7 +60536,7 @@ function neighbourhoodMermaid(f) {
       for (const w of adj.get(v) ?? []) {
         if (chosen.has(w)) continue;
         const trial = new Set(chosen).add(w);
-        if (trial.size + linksAmong(trial).length > MAX_ELEMENTS3) continue;
+        if (trial.size + linksAmong(trial).length > MAX_ELEMENTS2) continue;
         chosen.add(w);
         next.push(w);
       }
@@ -57433,7 +60587,9 @@ ${legend2}
 `;
 }
 function suggestionWords(s) {
-  const what = s.kind === "links" ? `add ${s.links.map((l) => `${markdownCode(l.id, 80)} (${markdownCode(`${l.between[0]}–${l.between[1]}`, 120)}${l.lengthKm !== void 0 ? `, ${l.lengthKm} km` : ""}${l.cost !== void 0 ? `, cost ${l.cost}` : ""})`).join(" and ")}` : `harden ${s.harden.length} element${s.harden.length === 1 ? "" : "s"} (${s.harden.slice(0, 6).map((e) => markdownCode(e.id, 80)).join(", ")}${s.harden.length > 6 ? ", …" : ""})`;
+  const what = s.kind === "links" ? `add ${s.links.map(
+    (l) => `${markdownCode(l.id, 80)} (${markdownCode(`${l.between[0]}–${l.between[1]}`, 120)}${l.lengthKm !== void 0 ? `, ${l.lengthKm} km` : ""}${l.cost !== void 0 ? `, cost ${l.cost}` : ""})`
+  ).join(" and ")}` : `harden ${s.harden.length} element${s.harden.length === 1 ? "" : "s"} (${s.harden.slice(0, 6).map((e) => markdownCode(e.id, 80)).join(", ")}${s.harden.length > 6 ? ", …" : ""})`;
   const r = s.rBefore !== null && s.rAfter !== null ? `, R̄ ${formatValue(s.rBefore)} → ${formatValue(s.rAfter)}` : "";
   return `${what}: ${s.holds ? "holds" : "does not hold on its own"}${r}`;
 }
@@ -57442,8 +60598,11 @@ function mendMarkdown(f) {
   if (!m || m.targets.length === 0) return "";
   const links = m.suggestions.find((s) => s.kind === "links");
   const harden = m.suggestions.find((s) => s.kind === "harden");
-  const parts = [links ? suggestionWords(links) : "no link suggestion", ...harden ? [`or ${suggestionWords(harden)}`] : []];
-  return `**What would mend it**, each judged again by the same gate: ${parts.join("; ")}. The HTML report (or \`netbrace mend\`) has every suggestion, the YAML to add and the caution: a suggestion is a topology-level hint, not a route survey.
+  const parts = [
+    links ? suggestionWords(links) : "no link suggestion",
+    ...harden ? [`or ${suggestionWords(harden)}`] : []
+  ];
+  return `**What would mend it**, each judged again by the same check: ${parts.join("; ")}. The HTML report (or \`netbrace mend\`) has every suggestion, the YAML to add and the caution: a suggestion is a topology-level hint, not a route survey.
 
 `;
 }
@@ -57455,25 +60614,6 @@ function changeMapMarkdown(f) {
 var SUMMARY_BUDGET_BYTES = 900 * 1024;
 var COMMENT_BUDGET_CHARS = 6e4;
 var CHART_POINTS = 21;
-var ICON = { fail: "❌", warn: "⚠️", notice: "ℹ️", ok: "✅" };
-var SEVERITY_WORD = { fail: "failure", warn: "warning", notice: "notice" };
-var RULE_WORD = {
-  "r-threshold": "r-threshold",
-  "area-floor": "area floor",
-  "spread-ceiling": "spread ceiling",
-  "n-1": "N−1 rule",
-  "new-bridge": "new bridge",
-  "new-cut-node": "new cut node",
-  "new-stranding-group": "new stranding shared-risk group",
-  "hardened-weak-point": "weak point hidden by hardening",
-  regression: "regression",
-  "weakest-sequence": "weakest sequence",
-  "parse-error": "unreadable design",
-  "removed-design": "removed design",
-  "policy-changed": "policy changed",
-  degraded: "reduced evaluation",
-  "not-computable": "value not computable"
-};
 function commentMarker(key) {
   return `<!-- netbrace:comment key=${markerValue(key)} -->`;
 }
@@ -57497,14 +60637,17 @@ function reportDigest(report) {
 function renderSummary(report, options = {}) {
   return assemble(report, options, {
     budget: options.budget ?? SUMMARY_BUDGET_BYTES,
-    measure: utf8Length2,
-    overviewRows: 1e3,
-    findingsFull: 200,
-    findingsCompact: 20,
+    measure: utf8Length,
+    itemsFull: 200,
+    itemsCompact: 20,
     charts: Number.MAX_SAFE_INTEGER,
     prefix: "",
     chartPoints: options.chartPoints ?? CHART_POINTS,
-    envelopesPerDesign: 4
+    envelopesPerDesign: 4,
+    sequences: 6,
+    chain: 12,
+    structure: true,
+    map: true
   });
 }
 function renderComment(report, options) {
@@ -57514,52 +60657,76 @@ function renderComment(report, options) {
   return assemble(report, options, {
     budget: Math.min(options.budget ?? COMMENT_BUDGET_CHARS, 65e3),
     measure: (s) => s.length,
-    overviewRows: 100,
-    findingsFull: 25,
-    findingsCompact: 5,
+    itemsFull: 25,
+    itemsCompact: 5,
     charts: 3,
     prefix,
     chartPoints: options.chartPoints ?? CHART_POINTS,
-    envelopesPerDesign: 1
+    envelopesPerDesign: 1,
+    sequences: 1,
+    chain: 5,
+    structure: false,
+    map: false
   });
 }
+function md(s, max = 600) {
+  return s.map(
+    (x) => x.kind === "text" && !(x.user && x.text.includes("`")) ? escapeProse(x.text, max) : markdownCode(x.text, x.kind === "text" ? max : 160)
+  ).join("");
+}
+function mdElement(e) {
+  return md(elementSentence(e));
+}
+function definitionsUrl(options) {
+  const url = options.readmeUrl;
+  return url && /^https?:\/\/[^\s<>()]+$/.test(url) ? `${url.replace(/#.*$/, "")}#reading-the-report` : void 0;
+}
 function assemble(report, options, layout) {
-  const files = rankFiles(report.files);
   const path3 = (p) => repoPath(options.pathPrefix, p);
-  const head = layout.prefix + header(report, options) + overview(files, layout.overviewRows, path3);
+  const stories = designStories(report);
+  const head = layout.prefix + header(report, options);
+  if (report.part) return fit(head + partBody(stories, path3) + footer(report, options, ""), layout);
   let body = "";
   let used = layout.measure(head);
   let charts2 = 0;
-  let omitted = 0;
-  const reserve = 2048;
-  const footerText = (note3) => footer(report, options, note3);
-  const footerSize = layout.measure(footerText(""));
-  for (const f of files) {
-    if (omitted > 0) {
-      omitted++;
+  let omitted = [];
+  const reserve = 4096;
+  const footerSize = layout.measure(footer(report, options, ""));
+  for (const s of stories) {
+    if (omitted.length > 0) {
+      omitted.push(s);
       continue;
     }
     let placed = false;
     for (const detail of ["full", "compact"]) {
-      const section = fileSection(f, detail, layout, path3, detail === "full" && charts2 < layout.charts);
+      const chart = detail === "full" && charts2 < layout.charts;
+      const section = designSection2(s, detail, layout, path3, chart, options);
       const size = layout.measure(section);
       if (used + size + reserve + footerSize <= layout.budget) {
         body += section;
         used += size;
-        if (detail === "full" && charts2 < layout.charts && hasChart(f)) charts2++;
+        if (chart && s.file.head?.envelopes.length) charts2++;
         placed = true;
         break;
       }
     }
-    if (!placed) omitted = 1;
+    if (!placed) omitted = [s];
   }
-  const note2 = omitted > 0 ? `${ICON.notice} ${omitted} more design${omitted === 1 ? "" : "s"} (the least severe) did not fit within GitHub's size limit for this view and ${omitted === 1 ? "is" : "are"} listed only in the table above; every finding is in the JSON report and the SARIF file.
+  let note2 = "";
+  if (omitted.length > 0) {
+    const n = omitted.length;
+    const list = omitted.slice(0, 10).map((s) => `- ${s.mark} ${s.statusWord} · ${markdownCode(path3(s.file.path), 200)}`).join("\n");
+    note2 = `${MARK.notice} ${n} more design${n === 1 ? "" : "s"} (the least severe) did not fit within GitHub’s size limit for this view; every finding is in the JSON report and the SARIF file:
 
-` : "";
-  const text2 = head + body + footerText(note2);
-  return layout.measure(text2) <= layout.budget ? text2 : truncateTo(text2, layout);
+${list}${n > 10 ? `
+- … ${n - 10} more` : ""}
+
+`;
+  }
+  return fit(head + body + footer(report, options, note2), layout);
 }
-function truncateTo(text2, layout) {
+function fit(text2, layout) {
+  if (layout.measure(text2) <= layout.budget) return text2;
   const tail = "\n\n… (cut to fit GitHub’s size limit; the JSON report has everything)\n";
   let lo = 0;
   let hi = text2.length;
@@ -57573,152 +60740,161 @@ function truncateTo(text2, layout) {
   return text2.slice(0, cut) + tail;
 }
 function header(report, options) {
-  const name = options.title ? `netbrace — ${escapeMarkdown(options.title, 120)}` : "netbrace";
-  let verdict;
-  if (report.files.length === 0) verdict = `${ICON.ok} ${name}: no design file changed — pass`;
-  else if (report.verdict === "pass") verdict = `${ICON.ok} ${name}: pass`;
-  else if (report.mode === "inform") verdict = `${ICON.warn} ${name}: would fail (inform mode, not blocking)`;
-  else verdict = `${ICON.fail} ${name}: the gate failed`;
+  const verdict = verdictStory(report, options.title ? oneLine(options.title, 120) : void 0);
+  let text2 = `## ${verdict.mark} ${md(verdict.sentence, 400)}
+
+${escapeProse(CAUTION_LINE)}
+
+`;
   const facts2 = [`${report.mode} mode`];
   if (report.policy.source === "builtin") facts2.push("built-in default policy (no policy file)");
-  else {
-    const where = report.policy.revision ? ` at ${shortSha(report.policy.revision)}` : "";
-    facts2.push(`policy ${markdownCode(report.policy.path ?? "?")}${where}`);
-  }
-  if (report.base && report.head) facts2.push(`base ${shortSha(report.base)} → head ${shortSha(report.head)}`);
-  else if (report.head) facts2.push(`head ${shortSha(report.head)}, thresholds only (no base)`);
+  else
+    facts2.push(
+      `policy ${markdownCode(report.policy.path ?? "?")}${report.policy.revision ? ` at ${rev(report.policy.revision)}` : ""}`
+    );
+  if (report.base && report.head) facts2.push(`base ${rev(report.base)} → head ${rev(report.head)}`);
+  else if (report.head) facts2.push(`head ${rev(report.head)}, thresholds only (no base)`);
   facts2.push(`seed ${report.seed}`);
   if (report.scope === "all") facts2.push("every design, thresholds only");
   if (report.part) facts2.push(`part ${report.part.index} of ${report.part.total}`);
   if (report.parts) facts2.push(`joined parts ${report.parts.joined.join(", ")} of ${report.parts.total}`);
-  let text2 = `## ${verdict}
-
-${facts2.join(" · ")}
-
-`;
-  if (report.policy.changed) {
-    const said = report.policy.note ? `${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ""), 600)}.` : "The policy shown here was read from the base; the proposed policy applies once the change is merged.";
-    text2 += `> ${ICON.warn} This change modifies the policy file. ${said}
+  facts2.push(`netbrace ${escapeProse(report.tool.version, 40)}`);
+  text2 += `${facts2.join(" · ")}
 
 `;
-  } else if (report.policy.note) {
-    text2 += `> ${ICON.notice} ${escapeMarkdown(report.policy.note.replace(/\.\s*$/, ""), 600)}.
+  const policy = policyChangeSentence(report);
+  if (policy) text2 += `${MARK.warn} ${md(policy, 1200)}
 
 `;
-  }
+  else if (report.policy.note)
+    text2 += `${MARK.notice} Policy: ${escapeProse(report.policy.note.replace(/\.\s*$/, ""), 600)}.
+
+`;
   for (const n of configurationNotes(report).filter((x) => x.file !== report.policy.path)) {
-    text2 += `> ${n.weakens ? ICON.fail : ICON.notice} ${escapeMarkdown(n.text, 600)}.
+    text2 += `${n.weakens ? MARK.fail : MARK.notice} Settings: ${escapeProse(n.text, 600)}.
 
 `;
   }
-  for (const n of options.notes ?? []) text2 += `> ${escapeMarkdown(n, 500)}
+  for (const n of options.notes ?? []) text2 += `${MARK.notice} Note: ${escapeProse(n, 500)}
 
 `;
+  for (const d of report.split ?? []) {
+    text2 += `${MARK.notice} ${markdownCode(d.path)} is split across the parts: this part ran realizations ${escapeProse(rangesText(d), 200)} of ${d.realizations}, and the join judges it.
+
+`;
+  }
+  if (report.files.length === 0)
+    text2 += "No design file changed between base and head, so there is nothing to judge.\n\n";
   return text2;
 }
-function overview(files, maxRows, path3) {
-  if (files.length === 0) return "No design file changed between base and head, so there is nothing to judge.\n\n";
-  const counts = /* @__PURE__ */ new Map();
-  for (const f of files) counts.set(fileStatusWord(f), (counts.get(fileStatusWord(f)) ?? 0) + 1);
-  const parts = [...counts.entries()].map(([s, n]) => `${n} ${s}`);
-  let text2 = `${files.length} design${files.length === 1 ? "" : "s"} evaluated: ${parts.join(", ")}.
+function rev(sha2) {
+  return markdownCode(shortRevision(sha2), 60);
+}
+function partBody(stories, path3) {
+  if (!stories.length) return "";
+  const lines = stories.slice(0, 500).map(
+    (s) => `- ${s.mark} ${s.statusWord} · ${markdownCode(path3(s.file.path), 200)}: ${escapeProse(s.headline, 300)}`
+  );
+  const more = stories.length > 500 ? `
+- … ${stories.length - 500} more` : "";
+  return `${lines.join("\n")}${more}
+
+This part’s designs in one line each; the joined summary tells what weakened and how much.
 
 `;
-  text2 += "| | design | status | findings | worst finding |\n|---|---|---|---|---|\n";
-  for (const f of files.slice(0, maxRows)) {
-    const worst = rankFindings(f.findings)[0];
-    const w = worstSeverity(f);
-    const name = f.previousPath ? `${markdownCode(path3(f.previousPath), 200, true)} → ${markdownCode(path3(f.path), 200, true)}` : markdownCode(path3(f.path), 200, true);
-    const worstText = worst ? `${lineRef(worst)}${escapeMarkdown(worst.message, 160)}` : "";
-    text2 += `| ${w ? ICON[w] : ICON.ok} | ${name} | ${fileStatusWord(f)} | ${findingCounts(f)} | ${worstText} |
-`;
-  }
-  if (files.length > maxRows) text2 += `
-… and ${files.length - maxRows} more designs, least severe last; see the JSON report.
-`;
-  return `${text2}
-`;
 }
-function findingCounts(f) {
-  const n = { fail: 0, warn: 0, notice: 0 };
-  for (const x of f.findings) n[x.severity]++;
-  const parts = ["fail", "warn", "notice"].filter((s) => n[s] > 0).map((s) => `${n[s]} ${SEVERITY_WORD[s]}${n[s] === 1 ? "" : "s"}`);
-  return parts.length ? parts.join(", ") : "none";
-}
-function lineRef(x) {
-  return x.line > 0 ? `line ${x.line}: ` : "";
-}
-function hasChart(f) {
-  return Boolean(f.head?.envelopes.length);
-}
-function fileSection(f, detail, layout, path3, chart) {
-  const w = worstSeverity(f);
+var OUTCOME_WORD = { fail: "fails", warn: "warns", notice: "note" };
+function designSection2(s, detail, layout, path3, chart, options) {
+  const f = s.file;
   const renamed = f.previousPath ? ` (renamed from ${markdownCode(path3(f.previousPath))})` : "";
-  let text2 = `### ${w ? ICON[w] : ICON.ok} ${markdownCode(path3(f.path))} — ${fileStatusWord(f)}${renamed}
+  let text2 = `### ${s.mark} ${s.statusWord} · ${markdownCode(path3(f.path))}${renamed}
 
 `;
-  if (f.error) {
-    const what = fileStatusWord(f) === STATUS_WORD.unreadable ? "Could not be read" : "Could not be evaluated";
-    text2 += `${what}: line ${f.error.line}, column ${f.error.column}: ${escapeMarkdown(f.error.message, 500)}
+  if (f.error && !s.weakened.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
+    const what = s.statusWord === "could not be evaluated" ? "Could not be evaluated" : "Could not be read";
+    text2 += `${what}: line ${f.error.line}, column ${f.error.column}: ${escapeProse(f.error.message, 500)}
 
 `;
   }
-  if (f.requirements.length) text2 += requirementTable2(f.requirements);
+  const cap = detail === "full" ? layout.itemsFull : layout.itemsCompact;
+  if (s.weakened.length) {
+    text2 += "**What weakened**, worst first:\n\n";
+    for (const x of s.weakened.slice(0, cap))
+      text2 += `- ${x.severity === "fail" ? MARK.fail : MARK.warn} ${OUTCOME_WORD[x.severity]}: ${md(x.sentence)}
+`;
+    if (s.weakened.length > cap)
+      text2 += `- … ${s.weakened.length - cap} more in the JSON report and the SARIF file
+`;
+    text2 += "\n";
+  } else if (f.requirements.length) {
+    text2 += `**What weakened**: ${s.outcome === "holds" && !s.howMuch.some((l) => l.requirement.status === "weakened" || l.requirement.status === "short") ? "nothing; every requirement holds" : "no single element stands out; see the numbers below"}.
+
+`;
+  }
+  if (s.howMuch.length) {
+    text2 += "**How much**, one line per requirement:\n\n";
+    for (const l of s.howMuch) text2 += `- ${l.mark} ${md(l.sentence, 400)}
+`;
+    text2 += "\n";
+    const url = definitionsUrl(options);
+    const lines = s.definitions.map((d) => `${MARK.notice} ${md(d.sentence)}${url ? ` [more](${url})` : ""}`);
+    if (lines.length)
+      text2 += `${lines.join("\\\n")}${url ? "" : " The README’s “Reading the report” says more."}
+
+`;
+  }
   const notApplicable = describeNotApplicable(f.head);
-  if (notApplicable) text2 += `Not applicable to this design: ${escapeMarkdown(notApplicable, 600)}
+  if (notApplicable) text2 += `Not applicable to this design: ${escapeProse(notApplicable, 600)}
 
 `;
-  const changes = describeChanges(f);
-  const modified = describeModifications(f, detail === "full" ? 50 : 10);
-  if (changes || modified.length) {
-    text2 += "**What the change does**:\n\n";
-    if (changes) text2 += `- ${escapeMarkdown(changes, 1500)}
+  const change = changeSentence(f);
+  if (change) text2 += `**The change**: ${md(change, 1500)}
+
 `;
-    for (const m of modified) text2 += `- ${escapeMarkdown(m, 300)}
-`;
-    text2 += "\n";
-  }
-  const findings = groupFindings(rankFindings(f.findings));
-  const cap = detail === "full" ? layout.findingsFull : layout.findingsCompact;
-  if (findings.length) {
-    text2 += "**Findings**, worst first:\n\n";
-    for (const x of findings.slice(0, cap)) text2 += `- ${findingLine(x)}
-`;
-    if (findings.length > cap) text2 += `- … ${findings.length - cap} more in the JSON report and the SARIF file
-`;
-    text2 += "\n";
-  }
-  if (detail === "full") {
-    if (chart) for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign)) text2 += chartSection(f, env, layout.chartPoints);
-    text2 += changeMapMarkdown(f);
-    text2 += weakestSection(f);
-    text2 += structureSection(f);
-  }
+  if (detail === "full") text2 += folded(s, layout, chart);
   return text2;
 }
-function requirementTable2(rows) {
-  let text2 = "| requirement | base | head | Δ ± error | status |\n|---|---:|---:|---:|---|\n";
-  let noise2 = false;
-  for (const r of rows) {
-    const icon = r.status === "holds" ? ICON.ok : r.status === "inside-error" ? "〰️" : r.status === "unsettled" ? "❔" : r.status === "not-applicable" ? "➖" : ICON[r.severity];
-    if (r.status === "inside-error") noise2 = true;
-    const err = formatError(r.se);
-    const delta = r.delta === null ? "–" : `${formatRequirementDelta(r)}${err ? ` ${err}` : ""}`;
-    text2 += `| ${escapeMarkdown(r.description, 200)} | ${formatRequirementValue(r, r.base)} | ${formatRequirementValue(r, r.head)} | ${delta} | ${icon} ${REQUIREMENT_STATUS_WORD[r.status]} |
+function folded(s, layout, chart) {
+  const f = s.file;
+  let inner = "";
+  const modified = f.changes?.modified ?? [];
+  if (modified.length) {
+    const max = layout.structure ? 50 : 10;
+    inner += `**Attributes the change altered**:
+
+${modified.slice(0, max).map((c) => `- ${md(modificationSentence(c), 300)}`).join("\n")}
 `;
+    inner += modified.length > max ? `- … ${modified.length - max} more attribute changes in the JSON report
+
+` : "\n";
   }
-  if (noise2) text2 += "\n〰️ *inside the error*: the value dropped by less than its Monte Carlo error, which is never a failure.\n";
-  return `${text2}
+  if (chart)
+    for (const env of (f.head?.envelopes ?? []).slice(0, layout.envelopesPerDesign))
+      inner += chartSection(f, env, layout.chartPoints);
+  inner += layout.map ? changeMapMarkdown(f) : mendMarkdown(f);
+  inner += sequencesSection(f, layout.sequences, layout.chain);
+  if (layout.structure) inner += structureSection(f);
+  if (s.notices.length) {
+    inner += `**Notices**:
+
+${s.notices.slice(0, layout.itemsFull).map((x) => `- ${MARK.notice} ${md(x.sentence)}`).join("\n")}
 `;
-}
-function findingLine(x) {
-  const where = x.line > 0 ? ` (line ${x.line}${x.column ? `, column ${x.column}` : ""})` : "";
-  const text2 = `${ICON[x.severity]} **${RULE_WORD[x.rule] ? findingTitle(x, RULE_WORD) : escapeMarkdown(x.rule, 40)}**${where}: ${escapeMarkdown(x.message, 600)}${findingNumbers(x)}`;
-  const members = x.grouped && x.members && x.members.length > 1 ? x.members.filter((m) => m.consequence) : [];
-  const plain = (t) => escapeMarkdown(t, 1200);
-  if (members.length) return `${text2}
-${members.map((m) => `  - ${plain(`${formatElement(m.elements[0])}: ${consequenceSentence(m.consequence, "")}`)}`).join("\n")}`;
-  return x.consequence ? `${text2} ${plain(consequenceSentence(x.consequence))}` : text2;
+    inner += s.notices.length > layout.itemsFull ? `- … ${s.notices.length - layout.itemsFull} more in the JSON report
+
+` : "\n";
+  }
+  if (!inner) return "";
+  const what = [
+    chart && f.head?.envelopes.length ? "chart" : "",
+    weakestSequences2(f).length || f.head?.contingencies.length ? "removal sequences" : "",
+    layout.structure && f.head ? "structure" : "",
+    s.notices.length ? `${s.notices.length} notice${s.notices.length === 1 ? "" : "s"}` : ""
+  ].filter(Boolean);
+  return `<details><summary>Detail${what.length ? `: ${what.join(", ")}` : ""}</summary>
+
+${inner}</details>
+
+`;
 }
 function sampleIndices(length, max) {
   if (length <= max) return Array.from({ length }, (_, i) => i);
@@ -57730,83 +60906,63 @@ var BARS = "▁▂▃▄▅▆▇█";
 function sparkline(values) {
   return values.map((v) => Number.isFinite(v) ? BARS[Math.min(7, Math.max(0, Math.round(v * 7)))] : " ").join("");
 }
-function chartNumber(v) {
-  return Number.isFinite(v) ? String(Math.round(v * 1e3) / 1e3) : "0";
-}
 function chartSection(f, head, points) {
-  const base = f.base?.envelopes.find((e) => e.challenge === head.challenge && e.kind === head.kind && sameGrid(e, head));
+  const base = f.base?.envelopes.find(
+    (e) => e.challenge === head.challenge && e.kind === head.kind && sameGrid(e, head)
+  );
   const idx = sampleIndices(head.x.length, points);
   const pick = (v) => idx.map((i) => v[i] ?? 0);
   const [qlo, qhi] = head.band;
-  const lo = head.quantiles[String(qlo)]?.value;
-  const series = [{ name: "head median", values: pick(head.median) }];
-  if (base) series.push({ name: "base median", values: pick(base.median) });
-  if (lo) series.push({ name: `head ${Math.round(qlo * 100)} % quantile (band low)`, values: pick(lo) });
+  const series = [];
   const hi = head.quantiles[String(qhi)]?.value;
-  if (hi) series.push({ name: `head ${Math.round(qhi * 100)} % quantile (band high)`, values: pick(hi) });
-  const xs = pick(head.x);
-  const caption = challengeLabel(head.challenge);
-  let text2 = `**Head envelope against the base** — ${caption}, R against ${xAxisLabel(head.kind, head.xUnit)}:
+  if (hi) series.push({ name: `head ${Math.round(qhi * 100)} % quantile`, values: pick(hi) });
+  series.push({ name: "head median", values: pick(head.median) });
+  if (base) series.push({ name: "base median", values: pick(base.median) });
+  const lo = head.quantiles[String(qlo)]?.value;
+  if (lo) series.push({ name: `head ${Math.round(qlo * 100)} % quantile`, values: pick(lo) });
+  const end = head.x[head.x.length - 1] ?? 0;
+  const range = head.xUnit === "km" ? `0 to ${formatValue(end)} km` : `0 to ${Math.round(end * 100)} % ${kindPlural(head.kind)} removed`;
+  const width = Math.max(...series.map((s) => s.name.length));
+  let text2 = `**${challengeLabel(head.challenge)}**: R (bars on a 0–1 scale) against ${xAxisLabel(head.kind, head.xUnit)}, ${range}:
 
+\`\`\`text
 `;
-  text2 += "```mermaid\nxychart-beta\n";
-  text2 += `  title "${mermaidSafe(caption)}"
-`;
-  text2 += `  x-axis "${mermaidSafe(xAxisLabel(head.kind, head.xUnit))}" [${xs.map((x) => `"${chartNumber(x)}"`).join(", ")}]
-`;
-  text2 += '  y-axis "R" 0 --> 1\n';
-  for (const s of series) text2 += `  line [${s.values.map(chartNumber).join(", ")}]
+  for (const s of series)
+    text2 += `${s.name.padEnd(width)}  ${sparkline(s.values)}  ${formatValue(s.values[0])} → ${formatValue(s.values[s.values.length - 1])}
 `;
   text2 += "```\n\n";
-  const end = head.x[head.x.length - 1] ?? 0;
-  const range = head.xUnit === "km" ? `0 to ${chartNumber(end)} km` : `0 to ${Math.round(end * 100)} % ${kindPlural(head.kind)} removed`;
-  text2 += `| line (in drawing order) | R over ${range} | start | end |
-|---|---|---:|---:|
-`;
-  for (const s of series) {
-    text2 += `| ${s.name} | ${sparkline(s.values)} | ${formatValue(s.values[0])} | ${formatValue(s.values[s.values.length - 1])} |
-`;
-  }
   const areas = `area ${formatValue(head.area)}${base ? ` (base ${formatValue(base.area)})` : ""}, spread ${formatValue(head.spread)}${base ? ` (base ${formatValue(base.spread)})` : ""}`;
-  return `${text2}
-${head.realizations} realizations, seed ${head.seed}; ${areas}.
+  return `${text2}${head.realizations} realizations, seed ${head.seed}; ${areas}.
 
 `;
 }
 function sameGrid(a, b) {
   return a.x.length === b.x.length && a.x.every((v, i) => Math.abs(v - (b.x[i] ?? NaN)) < 1e-12);
 }
-function mermaidSafe(text2) {
-  return text2.replace(/["\n\r\\`<>]/g, " ");
-}
-function mdElement(e) {
-  return formatElement(e, MD_STYLE);
-}
 function elementChain(elements, max = 12) {
   const shown2 = elements.slice(0, max).map(mdElement);
   return shown2.join(" → ") + (elements.length > max ? ` → … (${elements.length - max} more)` : "");
 }
-function elementList2(elements, max = 20) {
+function elementList(elements, max = 20) {
   const shown2 = elements.slice(0, max).map(mdElement);
   return shown2.join(", ") + (elements.length > max ? `, … (${elements.length - max} more)` : "");
 }
-function mdCost(c, subject) {
-  return c ? ` ${consequenceSentence(c, subject, MD_STYLE)}` : "";
-}
-var MD_STYLE = { id: (x) => markdownCode(x, 120), text: (x) => markdownCode(x, 120) };
-function weakestSection(f) {
+function sequencesSection(f, max, chain2) {
   const head = f.head;
   if (!head) return "";
   const known = knownElements(f);
   const items = [];
-  for (const seq of weakestSequences2(f).slice(0, 6)) {
+  for (const seq of weakestSequences2(f).slice(0, max)) {
     const r = seq.values && seq.values.length ? `; R ${formatValue(seq.values[0])} → ${formatValue(seq.values[seq.values.length - 1])}` : "";
-    items.push(`- ${escapeMarkdown(seq.title, 300)}: ${elementChain(seq.elements)}${r}.${mdCost(seq.consequence, "These removals")}`);
+    const cost = seq.consequence ? ` These removals ${md(costSentence(seq.consequence, true))}.` : "";
+    items.push(`- ${escapeProse(seq.title, 300)}: ${elementChain(seq.elements, chain2)}${r}.${cost}`);
   }
   for (const c of head.contingencies) {
     const worst = c.worst[0];
     if (worst) {
-      items.push(`- ${contingencyLabel(c.challenge, c.kind)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList2(worst.elements.map((id, i) => worst.located?.[i] ?? knownElement(known, c.kind, id)))}, leaves R ${formatValue(worst.value)}`);
+      items.push(
+        `- ${contingencyLabel(c.challenge, c.kind)}, ${c.evaluated} of ${c.total} cases: the worst, ${elementList(worst.elements.map((id, i) => worst.located?.[i] ?? knownElement(known, c.kind, id)))}, leaves R ${formatValue(worst.value)}`
+      );
     }
   }
   if (!items.length) return "";
@@ -57820,7 +60976,7 @@ function structureSection(f) {
   const h = f.head?.structure;
   if (!h) return "";
   const b = f.base?.structure;
-  const list = (els) => els.length ? elementList2(els) : "none";
+  const list = (els) => els.length ? elementList(els) : "none";
   const rows = [
     `| sites | ${b ? b.nodes : "–"} | ${h.nodes} |`,
     `| links | ${b ? b.links : "–"} | ${h.links} |`,
@@ -57828,7 +60984,7 @@ function structureSection(f) {
     `| bridges | ${b ? b.bridges.length : "–"} | ${h.bridges.length} |`,
     `| cut sites | ${b ? b.cutNodes.length : "–"} | ${h.cutNodes.length} |`
   ];
-  let text2 = `<details><summary>Structure of ${escapeHtml(oneLine(f.path, 300))}</summary>
+  let text2 = `**Structure** of ${markdownCode(f.path, 300)}:
 
 | | base | head |
 |---|---:|---:|
@@ -57841,12 +60997,10 @@ Cut sites at head: ${list(h.cutNodes)}
 
 `;
   const degraded = f.head?.degraded ?? [];
-  if (degraded.length) text2 += `Reduced evaluation: ${degraded.map((d) => escapeMarkdown(d, 200)).join("; ")}
+  if (degraded.length) text2 += `Reduced evaluation: ${degraded.map((d) => escapeProse(d, 200)).join("; ")}
 
 `;
-  return `${text2}</details>
-
-`;
+  return text2;
 }
 function footer(report, options, note2) {
   let text2 = note2;
@@ -57858,214 +61012,9 @@ function footer(report, options, note2) {
 
 `;
   }
-  text2 += `<sub>${escapeMarkdown(report.caution, 1e3)} netbrace ${escapeMarkdown(report.tool.version, 40)}.</sub>
+  text2 += `**Caution.** ${escapeProse(report.caution, 1e3)}
 `;
   return text2;
-}
-function shortSha(sha2) {
-  return markdownCode(/^[0-9a-f]{40}$/i.test(sha2) ? sha2.slice(0, 7) : sha2, 60);
-}
-function utf8Length2(s) {
-  let n = 0;
-  for (let i = 0; i < s.length; i++) {
-    const c = s.charCodeAt(i);
-    if (c < 128) n += 1;
-    else if (c < 2048) n += 2;
-    else if (c >= 55296 && c <= 56319) {
-      n += 4;
-      i++;
-    } else n += 3;
-  }
-  return n;
-}
-
-// src/report/sarif.ts
-var SARIF_SCHEMA_URI = "https://json.schemastore.org/sarif-2.1.0.json";
-var SARIF_MAX_RESULTS = 25e3;
-var RULES = {
-  "r-threshold": {
-    name: "RThreshold",
-    short: "An r-threshold of the policy is not held",
-    full: "At the stated removal fraction, the stated statistic of the robustness envelope (a quantile, the median, the minimum or the worst case) of R is below the threshold the policy requires.",
-    help: "The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by scopes but never loosened below a floor it inherits."
-  },
-  "area-floor": {
-    name: "AreaFloor",
-    short: "The envelope area is below its floor",
-    full: "The area of the robustness envelope (the mean over the removal grid of the median R) is below the floor the policy requires.",
-    help: "The design loses robustness too quickly over the whole range of removals. The weakest removal sequences show where; adding links between otherwise distant parts of the network usually raises the area most."
-  },
-  "spread-ceiling": {
-    name: "SpreadCeiling",
-    short: "The envelope spread is above its ceiling",
-    full: "The spread of the robustness envelope (the mean width of the band between its quantiles) is above the ceiling the policy allows: the outcome of a failure depends too much on which elements fail.",
-    help: "A wide band means a few elements matter far more than the rest. Look at the weakest removal sequences and give those elements alternatives."
-  },
-  "n-1": {
-    name: "NMinusOne",
-    short: "The loss of one element drops R below the N−1 floor",
-    full: "Removing the named single element (site or link) drops R below the value the N−1 rule of the policy requires.",
-    help: "The named element is critical on its own. Give the traffic it carries an alternative (a parallel link or a second path through other sites), or mark it as hardened in the design if it is engineered not to fail."
-  },
-  "new-bridge": {
-    name: "NewBridge",
-    short: "The change adds a bridge (a link whose loss splits the network)",
-    full: "At head, the named link is a bridge: removing it disconnects the network. It was not a bridge at the base, so the change adds a single point of failure.",
-    help: "Restore the redundancy that the change removed (for example the chord that made a ring), or add another link between the two sides the bridge separates."
-  },
-  "new-cut-node": {
-    name: "NewCutNode",
-    short: "The change adds a cut site (a site whose loss splits the network)",
-    full: "At head, the named site is a cut node: removing it disconnects the network. It was not one at the base, so the change adds a single point of failure.",
-    help: "Connect the part that hangs off this site to the rest of the network by a second path that avoids it."
-  },
-  "new-stranding-group": {
-    name: "NewStrandingGroup",
-    short: "The change adds a shared-risk group whose loss cuts sites off",
-    full: "At head, losing the named shared-risk group (all of its links at once, as in a duct cut) cuts sites off from the rest of the network, through links that are not bridges on their own. The base had no such group, so the change adds a single point of failure that the bridges and cut nodes do not show.",
-    help: "Route one of the links through a different duct or path, or add a link outside the group between the parts it separates."
-  },
-  "hardened-weak-point": {
-    name: "HardenedWeakPoint",
-    short: "A weak point the change hides by marking elements hardened",
-    full: "Ignoring the hardened flags, the named element would be a new bridge, cut node or stranding shared-risk group. The change marks it (or its links) hardened, so the challenges never remove it; hardening is a claim in the design file that the gate cannot check.",
-    help: "Make sure the element really is engineered not to fail (and reviewed as such), or restore the redundancy instead. The policy key hardened-weak-points sets how this is judged."
-  },
-  regression: {
-    name: "Regression",
-    short: "A requirement’s value dropped from base to head beyond tolerance",
-    full: "The paired difference head − base of a requirement’s value is a drop larger than the tolerance in the policy and larger than its Monte Carlo error.",
-    help: "The change makes the design measurably weaker than the base. The report gives base, head, the delta and its standard error; drops within the Monte Carlo error are never reported as failures."
-  },
-  "weakest-sequence": {
-    name: "WeakestSequence",
-    short: "The weakest removal sequence found",
-    full: "The order of element removals that lowered R the most among the evaluated realizations or the worst-case search. Informational.",
-    help: "These elements, in this order, are where the design is weakest under the challenge. They are the first place to add redundancy."
-  },
-  "parse-error": {
-    name: "ParseError",
-    short: "The design file could not be read",
-    full: "The design file at head has a syntax or consistency error (for example a link naming an unknown site), so it could not be evaluated. This fails the gate.",
-    help: "Fix the file at the line and column given. The other design files were still evaluated."
-  },
-  "removed-design": {
-    name: "RemovedDesign",
-    short: "A design file was removed",
-    full: "A design file that exists at the base is deleted at head. It is reported, and fails the gate only if the policy says so.",
-    help: "Make sure removing the design is intended; the policy decides whether a removal needs a review."
-  },
-  "policy-changed": {
-    name: "PolicyChanged",
-    short: "The change modifies the policy file",
-    full: "The policy file differs between base and head. The gate applied the base policy, so a change cannot loosen the rules that judge it; the proposed policy applies after the merge.",
-    help: "Have the policy change reviewed on its own merits by the owners of the policy."
-  },
-  degraded: {
-    name: "Degraded",
-    short: "The evaluation was reduced to fit its budget",
-    full: "The evaluation of this design was reduced (fewer realizations, sampled sources, a shorter worst-case search) to stay within the configured budgets, so its results carry more uncertainty.",
-    help: "Raise the budgets in the policy, or run netbrace with more threads, for a full evaluation."
-  },
-  "not-computable": {
-    name: "NotComputable",
-    short: "A value the gate needs could not be computed",
-    full: "R, or a requirement’s value, could not be computed on this design: a metric of R does not apply to it (demand_served on a design without demands, weighted_efficiency without link lengths or latencies), or the value came out NaN or infinite. A value that cannot be computed is never a pass, so this fails the gate.",
-    help: "Give the design what the metric needs (the message says what), or define R in the policy with metrics the design supports."
-  }
-};
-var LEVEL2 = { fail: "error", warn: "warning", notice: "note" };
-var RULE_IDS = Object.keys(RULES);
-function findingFingerprint(path3, x) {
-  return stableHash([x.rule, path3, x.requirement ?? "", ...x.elements.map((e) => `${e.kind}:${e.id}`)].join("\0"));
-}
-var FINGERPRINT_KEY = "netbraceFinding/v1";
-function instanceOf(report) {
-  return (report.head ?? "worktree").replace(/[^A-Za-z0-9._-]/g, "-") || "worktree";
-}
-function uriOf(path3) {
-  return path3.split("/").map(encodeURIComponent).join("/");
-}
-function nonEmpty(text2, fallback) {
-  const t = oneLine(text2).trim();
-  return t.length ? t : fallback;
-}
-function renderSarif(report, options = {}) {
-  const category = (options.category ?? "netbrace").replace(/[^A-Za-z0-9._-]/g, "-") || "netbrace";
-  const rules = RULE_IDS.map((id) => {
-    const r = RULES[id];
-    return {
-      id,
-      name: r.name,
-      shortDescription: { text: r.short },
-      fullDescription: { text: r.full },
-      help: { text: r.help, markdown: `**${r.short}.** ${r.full}
-
-${r.help}` },
-      defaultConfiguration: { level: id === "weakest-sequence" || id === "removed-design" || id === "policy-changed" ? "note" : id === "degraded" || id === "hardened-weak-point" ? "warning" : "error" },
-      properties: { tags: ["robustness", "network-design"] }
-    };
-  });
-  const results = [];
-  const seen = /* @__PURE__ */ new Map();
-  let total = 0;
-  for (const f of rankFiles(report.files)) {
-    const path3 = repoPath(options.pathPrefix, f.path);
-    const findings = rankFindings(f.findings);
-    if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
-      findings.unshift({ rule: "parse-error", severity: "fail", message: f.error.message, elements: [], line: f.error.line, column: f.error.column });
-    }
-    for (const x of findings) {
-      total++;
-      if (results.length >= SARIF_MAX_RESULTS) continue;
-      const base = findingFingerprint(path3, x);
-      const occurrence = (seen.get(base) ?? 0) + 1;
-      seen.set(base, occurrence);
-      const region = { startLine: Math.max(1, Math.floor(x.line || 1)) };
-      if (x.column && x.column > 0) region.startColumn = Math.floor(x.column);
-      const properties = { fileStatus: f.status };
-      if (x.requirement) properties.requirement = x.requirement;
-      for (const k of ["base", "head", "delta", "se", "threshold", "allowance"]) if (typeof x[k] === "number") properties[k] = x[k];
-      if (x.status) properties.status = x.status;
-      if (x.elements.length) properties.elements = x.elements.map((e) => ({ id: e.id, kind: e.kind, line: e.line, ...e.label !== void 0 ? { label: e.label } : {} }));
-      if (x.consequence) properties.consequence = x.consequence;
-      results.push({
-        ruleId: x.rule,
-        ruleIndex: RULE_IDS.indexOf(x.rule),
-        level: LEVEL2[x.severity],
-        message: { text: nonEmpty(`${x.message}${findingNumbers(x, "delta")}${findingCost(x)}`, RULES[x.rule].short) },
-        locations: [{ physicalLocation: { artifactLocation: { uri: uriOf(path3) }, region } }],
-        // Our id is a hash of rule, path, requirement and elements, not of the line's text, so
-        // it goes under the standard `fingerprints` with a key of our own; code scanning fills
-        // partialFingerprints.primaryLocationLineHash (a hash of the line) itself.
-        fingerprints: { [FINGERPRINT_KEY]: `${base}:${occurrence}` },
-        properties
-      });
-    }
-  }
-  const runProperties = { verdict: report.verdict, mode: report.mode, seed: report.seed };
-  if (total > results.length) runProperties.resultsOmitted = total - results.length;
-  return {
-    $schema: SARIF_SCHEMA_URI,
-    version: "2.1.0",
-    runs: [
-      {
-        tool: {
-          driver: {
-            name: "netbrace",
-            version: report.tool.version,
-            semanticVersion: report.tool.version,
-            rules
-          }
-        },
-        // "category/instance" (SARIF 2.1.0 §3.17.4; code scanning reads the category as
-        // everything before the last slash): the instance is the head revision judged.
-        automationDetails: { id: `${category}/${instanceOf(report)}` },
-        results,
-        properties: runProperties
-      }
-    ]
-  };
 }
 
 // node_modules/@actions/github/lib/context.js
@@ -62632,16 +65581,26 @@ async function findComment(client, ref, marker, login) {
   const me = await (login ?? (() => tokenLogin(client)))();
   return marked.find((m) => m.author === me)?.found;
 }
-async function upsertComment(client, ref, marker, body, decide = () => true) {
+async function upsertComment(client, ref, marker, body, decide2 = () => true) {
   if (!body.includes(marker)) throw new Error("the comment body must contain its marker");
   const existing = await findComment(client, ref, marker);
-  if (!decide(existing)) return { action: "skipped", ...existing ? { id: existing.id, url: existing.url } : {} };
+  if (!decide2(existing)) return { action: "skipped", ...existing ? { id: existing.id, url: existing.url } : {} };
   if (existing) {
     if (existing.body === body) return { action: "unchanged", id: existing.id, url: existing.url };
-    const res2 = await client.rest.issues.updateComment({ owner: ref.owner, repo: ref.repo, comment_id: existing.id, body });
+    const res2 = await client.rest.issues.updateComment({
+      owner: ref.owner,
+      repo: ref.repo,
+      comment_id: existing.id,
+      body
+    });
     return { action: "updated", id: res2.data.id, url: res2.data.html_url };
   }
-  const res = await client.rest.issues.createComment({ owner: ref.owner, repo: ref.repo, issue_number: ref.issueNumber, body });
+  const res = await client.rest.issues.createComment({
+    owner: ref.owner,
+    repo: ref.repo,
+    issue_number: ref.issueNumber,
+    body
+  });
   return { action: "created", id: res.data.id, url: res.data.html_url };
 }
 var PR_FILES_LIMIT = 3e3;
@@ -62668,6 +65627,412 @@ function isPermissionError(error2) {
   if (e.response?.headers?.["x-ratelimit-remaining"] === "0") return false;
   if (/rate limit/i.test(e.message ?? "")) return false;
   return true;
+}
+
+// src/shell/action-comment.ts
+function shouldWriteComment(mode, report, existing) {
+  if (mode === "off") return false;
+  if (mode === "every-run") return true;
+  const failing = report.verdict === "fail";
+  if (mode === "when-failing") return failing || existing !== void 0;
+  if (existing) return commentDigest(existing.body) !== reportDigest(report);
+  return failing || report.files.some((f) => f.findings.length > 0);
+}
+async function postComment(deps, env, inputs, target, report, body) {
+  if (!target.pr || inputs.comment === "off") return "not-applicable";
+  if (!inputs.token) {
+    deps.out.warning('netbrace: no token, so no pull-request comment (set the "token" input, default github.token)');
+    return "failed";
+  }
+  const apiUrl = env.GITHUB_API_URL || "https://api.github.com";
+  try {
+    const client = deps.github({
+      token: inputs.token,
+      baseUrl: apiUrl,
+      ...httpSettingsFromEnv(env),
+      log: (m) => deps.out.info(`netbrace: ${logText(m, 500)}`)
+    });
+    const ref = { owner: target.pr.owner, repo: target.pr.repo, issueNumber: target.pr.number };
+    const result = await upsertComment(
+      client,
+      ref,
+      commentMarker(inputs.commentKey),
+      body,
+      (existing) => shouldWriteComment(inputs.comment, report, existing)
+    );
+    deps.out.info(`netbrace: pull-request comment ${result.action}${result.url ? ` (${result.url})` : ""}`);
+    return result;
+  } catch (error2) {
+    const why = error2 instanceof Error ? error2.message : String(error2);
+    if (isPermissionError(error2)) {
+      deps.out.warning(
+        `netbrace: the token cannot write the pull-request comment (${oneLine(why, 200)}). ` + (target.pr.fork ? "This pull request comes from a fork, whose token is read-only; the verdict, summary and annotations are unaffected. To comment on fork pull requests, use the two-workflow pattern in the README." : "Grant `pull-requests: write` in the workflow’s permissions.")
+      );
+    } else {
+      deps.out.warning(
+        `netbrace: could not write the pull-request comment (${oneLine(why, 200)}); the verdict is unaffected`
+      );
+    }
+    return "failed";
+  }
+}
+async function trustedPullRequest(deps, env, inputs, target, number) {
+  const [owner = "", repo = ""] = (env.GITHUB_REPOSITORY ?? "").split("/");
+  const pr = { owner, repo, number, fork: false };
+  if (target.eventName !== "workflow_run") return pr;
+  if (!target.runHeadSha || !inputs.token) {
+    deps.out.warning(
+      "netbrace: no comment: the workflow_run payload has no head commit to check the pull request against"
+    );
+    return void 0;
+  }
+  try {
+    const client = deps.github({
+      token: inputs.token,
+      baseUrl: env.GITHUB_API_URL || "https://api.github.com",
+      ...httpSettingsFromEnv(env)
+    });
+    const head = await pullRequestHead(client, { owner, repo, issueNumber: number });
+    if (head === target.runHeadSha) return pr;
+    deps.out.warning(
+      `netbrace: no comment: pull request #${number} is at ${head.slice(0, 12)}, not at ${target.runHeadSha.slice(0, 12)} which the report is about`
+    );
+  } catch (error2) {
+    deps.out.warning(
+      `netbrace: no comment: could not read pull request #${number} (${oneLine(error2 instanceof Error ? error2.message : String(error2), 200)})`
+    );
+  }
+  return void 0;
+}
+function defaultGithub(options) {
+  return createClient(options);
+}
+
+// src/shell/action-outputs.ts
+import { appendFileSync as appendFileSync2, writeFileSync } from "node:fs";
+
+// src/report/annotations.ts
+var ANNOTATIONS_PER_LEVEL = 10;
+var LEVEL = { fail: "error", warn: "warning", notice: "notice" };
+function annotationsOf(report, options = {}) {
+  const out = [];
+  for (const f of rankFiles(report.files)) {
+    const file = repoPath(options.pathPrefix, f.path);
+    const touched = options.changedLines?.get(file);
+    const findings = [...f.findings];
+    if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
+      findings.push({
+        rule: "parse-error",
+        severity: "fail",
+        message: f.error.message,
+        elements: [],
+        line: f.error.line,
+        column: f.error.column
+      });
+    }
+    for (const x of findings) {
+      const startLine = Math.max(1, Math.floor(x.line || 1));
+      out.push({
+        level: LEVEL[x.severity],
+        file,
+        startLine,
+        ...x.column && x.column > 0 ? { startColumn: Math.floor(x.column) } : {},
+        title: oneLine(`netbrace: ${findingTitle(x, RULE_TITLE)}`, 200),
+        message: logText(`${x.message}${findingNumbers(x)}${findingCost(x)}`),
+        rule: x.rule,
+        inDiff: touched ? touched.has(startLine) : false
+      });
+    }
+  }
+  const loosens = report.policy.changes?.some((c) => c.effect === "loosens") ?? false;
+  for (const n of configurationNotes(report)) {
+    const file = repoPath(options.pathPrefix, n.file);
+    const startLine = Math.max(1, n.line);
+    const policy = n.file === report.policy.path;
+    out.push({
+      level: n.weakens ? "error" : policy && loosens ? "warning" : "notice",
+      file,
+      startLine,
+      title: n.weakens ? "netbrace: the change weakens netbrace’s own settings" : policy ? `netbrace: ${RULE_TITLE["policy-changed"]}` : "netbrace: the change edits netbrace’s workflow",
+      message: logText(policy ? `${n.text}.` : n.text),
+      rule: policy ? "policy-changed" : "own-settings",
+      inDiff: options.changedLines?.get(file)?.has(startLine) ?? false
+    });
+  }
+  const rank = (a) => SEVERITY_RANK[a.level === "error" ? "fail" : a.level === "warning" ? "warn" : "notice"];
+  return out.sort((a, b) => rank(a) - rank(b) || Number(b.inDiff) - Number(a.inDiff));
+}
+function planAnnotations(report, options = {}) {
+  const perLevel = options.perLevel ?? ANNOTATIONS_PER_LEVEL;
+  const all = annotationsOf(report, options);
+  const taken = [];
+  const used = { error: 0, warning: 0, notice: 0 };
+  const errorCap = Math.max(0, perLevel - (options.reservedErrors ?? 0));
+  const capOf = (l) => l === "error" ? errorCap : perLevel;
+  const fitsAll = ["error", "warning", "notice"].every(
+    (l) => all.filter((a) => a.level === l).length <= capOf(l)
+  );
+  const cap = {
+    error: errorCap,
+    warning: perLevel,
+    notice: fitsAll ? perLevel : perLevel - 1
+  };
+  for (const a of all) {
+    if (used[a.level] < cap[a.level]) {
+      taken.push(a);
+      used[a.level]++;
+    }
+  }
+  const omitted = all.length - taken.length;
+  if (omitted > 0) {
+    const elsewhere = options.elsewhere ?? "the job summary and the SARIF file";
+    taken.push({
+      level: "notice",
+      file: "",
+      startLine: 0,
+      title: "netbrace: more findings",
+      message: logText(
+        `${omitted} more finding${omitted === 1 ? "" : "s"} (of ${all.length}) not annotated here: GitHub shows at most ${perLevel} annotations per level and step. All of them are in ${elsewhere}.`
+      ),
+      rule: "more",
+      inDiff: false
+    });
+  }
+  return { annotations: taken, omitted, total: all.length };
+}
+
+// src/report/sarif.ts
+var SARIF_SCHEMA_URI = "https://json.schemastore.org/sarif-2.1.0.json";
+var SARIF_MAX_RESULTS = 25e3;
+var RULES = {
+  "r-threshold": {
+    name: "RThreshold",
+    short: "An r-threshold of the policy is not held",
+    full: "At the stated removal fraction, the stated statistic of the robustness envelope (a quantile, the median, the minimum or the worst case) of R is below the threshold the policy requires.",
+    help: "The design does not keep the required level of R when the stated share of elements fails. Add redundancy (a second path, a link to another site) near the elements listed in the weakest removal sequences, then rerun netbrace. The threshold is set in the policy file; it can be tightened by scopes but never loosened below a floor it inherits."
+  },
+  "area-floor": {
+    name: "AreaFloor",
+    short: "The envelope area is below its floor",
+    full: "The area of the robustness envelope (the mean over the removal grid of the median R) is below the floor the policy requires.",
+    help: "The design loses robustness too quickly over the whole range of removals. The weakest removal sequences show where; adding links between otherwise distant parts of the network usually raises the area most."
+  },
+  "spread-ceiling": {
+    name: "SpreadCeiling",
+    short: "The envelope spread is above its ceiling",
+    full: "The spread of the robustness envelope (the mean width of the band between its quantiles) is above the ceiling the policy allows: the outcome of a failure depends too much on which elements fail.",
+    help: "A wide band means a few elements matter far more than the rest. Look at the weakest removal sequences and give those elements alternatives."
+  },
+  "n-1": {
+    name: "NMinusOne",
+    short: "The loss of one element drops R below the N−1 floor",
+    full: "Removing the named single element (site or link) drops R below the value the N−1 rule of the policy requires.",
+    help: "The named element is critical on its own. Give the traffic it carries an alternative (a parallel link or a second path through other sites), or mark it as hardened in the design if it is engineered not to fail."
+  },
+  "new-bridge": {
+    name: "NewBridge",
+    short: "The change adds a bridge (a link whose loss splits the network)",
+    full: "At head, the named link is a bridge: removing it disconnects the network. It was not a bridge at the base, so the change adds a single point of failure.",
+    help: "Restore the redundancy that the change removed (for example the chord that made a ring), or add another link between the two sides the bridge separates."
+  },
+  "new-cut-node": {
+    name: "NewCutNode",
+    short: "The change adds a cut site (a site whose loss splits the network)",
+    full: "At head, the named site is a cut node: removing it disconnects the network. It was not one at the base, so the change adds a single point of failure.",
+    help: "Connect the part that hangs off this site to the rest of the network by a second path that avoids it."
+  },
+  "new-stranding-group": {
+    name: "NewStrandingGroup",
+    short: "The change adds a shared-risk group whose loss cuts sites off",
+    full: "At head, losing the named shared-risk group (all of its links at once, as in a duct cut) cuts sites off from the rest of the network, through links that are not bridges on their own. The base had no such group, so the change adds a single point of failure that the bridges and cut nodes do not show.",
+    help: "Route one of the links through a different duct or path, or add a link outside the group between the parts it separates."
+  },
+  "hardened-weak-point": {
+    name: "HardenedWeakPoint",
+    short: "A weak point the change hides by marking elements hardened",
+    full: "Ignoring the hardened flags, the named element would be a new bridge, cut node or stranding shared-risk group. The change marks it (or its links) hardened, so the challenges never remove it; hardening is a claim in the design file that netbrace cannot verify.",
+    help: "Make sure the element really is engineered not to fail (and reviewed as such), or restore the redundancy instead. The policy key hardened-weak-points sets how this is judged."
+  },
+  regression: {
+    name: "Regression",
+    short: "A requirement’s value dropped from base to head beyond tolerance",
+    full: "The paired difference head − base of a requirement’s value is a drop larger than the tolerance in the policy and larger than its Monte Carlo error.",
+    help: "The change makes the design measurably weaker than the base. The report gives base, head, the delta and its standard error; drops within the Monte Carlo error are never reported as failures."
+  },
+  "weakest-sequence": {
+    name: "WeakestSequence",
+    short: "The weakest removal sequence found",
+    full: "The order of element removals that lowered R the most among the evaluated realizations or the worst-case search. Informational.",
+    help: "These elements, in this order, are where the design is weakest under the challenge. They are the first place to add redundancy."
+  },
+  "parse-error": {
+    name: "ParseError",
+    short: "The design file could not be read",
+    full: "The design file at head has a syntax or consistency error (for example a link naming an unknown site), so it could not be evaluated. This fails the check.",
+    help: "Fix the file at the line and column given. The other design files were still evaluated."
+  },
+  "removed-design": {
+    name: "RemovedDesign",
+    short: "A design file was removed",
+    full: "A design file that exists at the base is deleted at head. It is reported, and fails the check only if the policy says so.",
+    help: "Make sure removing the design is intended; the policy decides whether a removal needs a review."
+  },
+  "policy-changed": {
+    name: "PolicyChanged",
+    short: "The change modifies the policy file",
+    full: "The policy file differs between base and head. netbrace applied the base policy, so a change cannot loosen the rules that judge it; the proposed policy applies after the merge.",
+    help: "Have the policy change reviewed on its own merits by the owners of the policy."
+  },
+  degraded: {
+    name: "Degraded",
+    short: "The evaluation was reduced to fit its budget",
+    full: "The evaluation of this design was reduced (fewer realizations, sampled sources, a shorter worst-case search) to stay within the configured budgets, so its results carry more uncertainty.",
+    help: "Raise the budgets in the policy, or run netbrace with more threads, for a full evaluation."
+  },
+  "not-computable": {
+    name: "NotComputable",
+    short: "A value the check needs could not be computed",
+    full: "R, or a requirement’s value, could not be computed on this design: a metric of R does not apply to it (demand_served on a design without demands, weighted_efficiency without link lengths or latencies), or the value came out NaN or infinite. A value that cannot be computed is never a pass, so this fails the check.",
+    help: "Give the design what the metric needs (the message says what), or define R in the policy with metrics the design supports."
+  }
+};
+var LEVEL2 = { fail: "error", warn: "warning", notice: "note" };
+var RULE_IDS = Object.keys(RULES);
+function findingFingerprint(path3, x) {
+  return stableHash([x.rule, path3, x.requirement ?? "", ...x.elements.map((e) => `${e.kind}:${e.id}`)].join("\0"));
+}
+var FINGERPRINT_KEY = "netbraceFinding/v1";
+function instanceOf(report) {
+  return (report.head ?? "worktree").replace(/[^A-Za-z0-9._-]/g, "-") || "worktree";
+}
+function uriOf(path3) {
+  return path3.split("/").map(encodeURIComponent).join("/");
+}
+function nonEmpty(text2, fallback) {
+  const t = oneLine(text2).trim();
+  return t.length ? t : fallback;
+}
+function renderSarif(report, options = {}) {
+  const category = (options.category ?? "netbrace").replace(/[^A-Za-z0-9._-]/g, "-") || "netbrace";
+  const rules = RULE_IDS.map((id) => {
+    const r = RULES[id];
+    return {
+      id,
+      name: r.name,
+      shortDescription: { text: RULE_TITLE[id] },
+      fullDescription: { text: r.full },
+      help: { text: r.help, markdown: `**${r.short}.** ${r.full}
+
+${r.help}` },
+      defaultConfiguration: {
+        level: id === "weakest-sequence" || id === "removed-design" || id === "policy-changed" ? "note" : id === "degraded" || id === "hardened-weak-point" ? "warning" : "error"
+      },
+      properties: { tags: ["robustness", "network-design"] }
+    };
+  });
+  const results = [];
+  const seen = /* @__PURE__ */ new Map();
+  let total = 0;
+  for (const f of rankFiles(report.files)) {
+    const path3 = repoPath(options.pathPrefix, f.path);
+    const findings = rankFindings(f.findings);
+    if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
+      findings.unshift({
+        rule: "parse-error",
+        severity: "fail",
+        message: f.error.message,
+        elements: [],
+        line: f.error.line,
+        column: f.error.column
+      });
+    }
+    for (const x of findings) {
+      total++;
+      if (results.length >= SARIF_MAX_RESULTS) continue;
+      const base = findingFingerprint(path3, x);
+      const occurrence = (seen.get(base) ?? 0) + 1;
+      seen.set(base, occurrence);
+      const region = { startLine: Math.max(1, Math.floor(x.line || 1)) };
+      if (x.column && x.column > 0) region.startColumn = Math.floor(x.column);
+      const properties = { fileStatus: f.status };
+      if (x.requirement) properties.requirement = x.requirement;
+      for (const k of ["base", "head", "delta", "se", "threshold", "allowance"])
+        if (typeof x[k] === "number") properties[k] = x[k];
+      if (x.status) properties.status = x.status;
+      if (x.elements.length)
+        properties.elements = x.elements.map((e) => ({
+          id: e.id,
+          kind: e.kind,
+          line: e.line,
+          ...e.label !== void 0 ? { label: e.label } : {}
+        }));
+      if (x.consequence) properties.consequence = x.consequence;
+      results.push({
+        ruleId: x.rule,
+        ruleIndex: RULE_IDS.indexOf(x.rule),
+        level: LEVEL2[x.severity],
+        message: { text: nonEmpty(`${x.message}${findingNumbers(x, "delta")}${findingCost(x)}`, RULES[x.rule].short) },
+        locations: [{ physicalLocation: { artifactLocation: { uri: uriOf(path3) }, region } }],
+        // Our id is a hash of rule, path, requirement and elements, not of the line's text, so
+        // it goes under the standard `fingerprints` with a key of our own; code scanning fills
+        // partialFingerprints.primaryLocationLineHash (a hash of the line) itself.
+        fingerprints: { [FINGERPRINT_KEY]: `${base}:${occurrence}` },
+        properties
+      });
+    }
+  }
+  const policyNote = configurationNotes(report).find((n) => n.file === report.policy.path && report.policy.changed);
+  if (policyNote && results.length < SARIF_MAX_RESULTS) {
+    total++;
+    const path3 = repoPath(options.pathPrefix, policyNote.file);
+    const changes = report.policy.changes ?? [];
+    const x = {
+      rule: "policy-changed",
+      severity: "notice",
+      message: policyNote.text,
+      elements: [],
+      line: policyNote.line
+    };
+    results.push({
+      ruleId: "policy-changed",
+      ruleIndex: RULE_IDS.indexOf("policy-changed"),
+      level: changes.some((c) => c.effect === "loosens") ? "warning" : "note",
+      message: { text: nonEmpty(`${policyNote.text}.`, RULES["policy-changed"].short) },
+      locations: [
+        {
+          physicalLocation: {
+            artifactLocation: { uri: uriOf(path3) },
+            region: { startLine: Math.max(1, policyNote.line) }
+          }
+        }
+      ],
+      fingerprints: { [FINGERPRINT_KEY]: `${findingFingerprint(path3, x)}:1` },
+      properties: { changes }
+    });
+  }
+  const runProperties = { verdict: report.verdict, mode: report.mode, seed: report.seed };
+  if (total > results.length) runProperties.resultsOmitted = total - results.length;
+  return {
+    $schema: SARIF_SCHEMA_URI,
+    version: "2.1.0",
+    runs: [
+      {
+        tool: {
+          driver: {
+            name: "netbrace",
+            version: report.tool.version,
+            semanticVersion: report.tool.version,
+            rules
+          }
+        },
+        // "category/instance" (SARIF 2.1.0 §3.17.4; code scanning reads the category as
+        // everything before the last slash): the instance is the head revision judged.
+        automationDetails: { id: `${category}/${instanceOf(report)}` },
+        results,
+        properties: runProperties
+      }
+    ]
+  };
 }
 
 // src/shell/workspace.ts
@@ -62700,12 +66065,18 @@ function resolveInWorkspace(workspace, base, given, input) {
   const root = realpathSync(workspace);
   const full = path.resolve(base, given);
   if (!isInside(root, full) && !isInside(path.resolve(workspace), full)) {
-    throw new WorkspacePathError(`${named(label, given)} points outside the workspace`, "give a path inside the repository");
+    throw new WorkspacePathError(
+      `${named(label, given)} points outside the workspace`,
+      "give a path inside the repository"
+    );
   }
   const existing = nearestExisting(full);
   const real = realpathSync(existing);
   if (!isInside(root, real)) {
-    throw new WorkspacePathError(`${named(label, given)} leads outside the workspace through a symbolic link`, "give a path inside the repository");
+    throw new WorkspacePathError(
+      `${named(label, given)} leads outside the workspace through a symbolic link`,
+      "give a path inside the repository"
+    );
   }
   return path.join(real, path.relative(existing, full));
 }
@@ -62718,7 +66089,8 @@ function prepareWrite(workspace, base, given, input) {
   } catch {
     st = void 0;
   }
-  if (st?.isSymbolicLink()) throw new WorkspacePathError(`${named(label, given)} is a symbolic link; netbrace does not write through links`);
+  if (st?.isSymbolicLink())
+    throw new WorkspacePathError(`${named(label, given)} is a symbolic link; netbrace does not write through links`);
   if (st?.isDirectory()) throw new WorkspacePathError(`${named(label, given)} is a directory; name a file`);
   mkdirSync(path.dirname(full), { recursive: true });
   if (!isInside(realpathSync(workspace), realpathSync(path.dirname(full)))) {
@@ -62734,15 +66106,22 @@ function repositoryPath(given, what) {
   if (given.includes("\0")) throw new WorkspacePathError(`${what} contains a NUL character`);
   const slashed = given.replace(/\\/g, "/");
   if (slashed.startsWith("/") || /^[A-Za-z]:\//.test(slashed)) {
-    throw new WorkspacePathError(`${named(what, given)} is an absolute path`, "give a path relative to the repository root");
+    throw new WorkspacePathError(
+      `${named(what, given)} is an absolute path`,
+      "give a path relative to the repository root"
+    );
   }
   const parts = [];
-  for (const seg2 of slashed.split("/")) {
-    if (seg2 === "" || seg2 === ".") continue;
-    if (seg2 === "..") {
-      if (parts.length === 0) throw new WorkspacePathError(`${named(what, given)} points outside the repository`, "give a path inside the repository");
+  for (const seg3 of slashed.split("/")) {
+    if (seg3 === "" || seg3 === ".") continue;
+    if (seg3 === "..") {
+      if (parts.length === 0)
+        throw new WorkspacePathError(
+          `${named(what, given)} points outside the repository`,
+          "give a path inside the repository"
+        );
       parts.pop();
-    } else parts.push(seg2);
+    } else parts.push(seg3);
   }
   return parts.join("/");
 }
@@ -62760,10 +66139,12 @@ function tooLarge(file, bytes, maxBytes, revision = "") {
 }
 function readInsideSync(root, file, maxBytes = DEFAULT_MAX_BYTES) {
   const full = path.resolve(root, file);
-  if (file.includes("\0") || !isInside(path.resolve(root), full)) throw new WorkspacePathError(`${quoted(file)} is outside the repository`, "give paths inside the repository");
+  if (file.includes("\0") || !isInside(path.resolve(root), full))
+    throw new WorkspacePathError(`${quoted(file)} is outside the repository`, "give paths inside the repository");
   try {
     const real = realpathSync(full);
-    if (!isInside(realpathSync(root), real)) throw new WorkspacePathError(`${quoted(file)} leads outside the repository through a symbolic link`);
+    if (!isInside(realpathSync(root), real))
+      throw new WorkspacePathError(`${quoted(file)} leads outside the repository through a symbolic link`);
     const st = statSync(real);
     if (st.isDirectory()) return null;
     if (st.size > maxBytes) throw tooLarge(file, st.size, maxBytes);
@@ -62777,7 +66158,172 @@ async function readInside(root, file, maxBytes = DEFAULT_MAX_BYTES) {
   return readInsideSync(root, file, maxBytes);
 }
 
+// src/shell/action-outputs.ts
+function emptyReport(inputs, target) {
+  return assembleReport(
+    {
+      mode: inputs.mode,
+      policy: inputs.policy ? { source: "file", path: inputs.policy } : { source: "builtin" },
+      ...target.base ? { base: target.base } : {},
+      ...target.head ? { head: target.head } : {},
+      // No policy was read: the seed is the built-in policy's, as the gate would have used.
+      seed: inputs.seed ?? builtinPolicy().seed
+    },
+    []
+  );
+}
+async function changedLines(deps, cwd, base, head) {
+  const out = /* @__PURE__ */ new Map();
+  const diff = await deps.git(
+    [
+      "-c",
+      "core.quotePath=false",
+      "diff",
+      "-U0",
+      "--no-color",
+      "--no-ext-diff",
+      "-M",
+      "--end-of-options",
+      base,
+      head,
+      "--"
+    ],
+    cwd
+  );
+  if (diff.code !== 0) return out;
+  let current;
+  for (const line of diff.stdout.split("\n")) {
+    if (line.startsWith("+++ ")) {
+      const name = line.slice(4);
+      current = name === "/dev/null" ? void 0 : /* @__PURE__ */ new Set();
+      if (current) out.set(name.replace(/^b\//, ""), current);
+      continue;
+    }
+    const m = /^@@ -\d+(?:,\d+)? \+(\d+)(?:,(\d+))? @@/.exec(line);
+    if (m && current) {
+      const start = Number(m[1]);
+      const count = m[2] === void 0 ? 1 : Number(m[2]);
+      for (let i = 0; i < Math.min(count, 1e5); i++) current.add(start + i);
+    }
+  }
+  return out;
+}
+function writeArtifacts(deps, workspace, inputs, report, partJob, readme) {
+  const written = [];
+  const write = (input, given, text2) => {
+    const full = prepareWrite(workspace, workspace, given, input);
+    writeFileSync(full, text2);
+    const rel = workspaceRelative(workspace, full);
+    written.push(rel);
+    return rel;
+  };
+  const reportPath = inputs.report ? write("report", inputs.report, serializeReport(report)) : "";
+  let sarifPath = "";
+  let htmlPath = "";
+  if (!partJob) {
+    if (inputs.sarif)
+      sarifPath = write(
+        "sarif",
+        inputs.sarif,
+        `${JSON.stringify(renderSarif(report, { category: inputs.sarifCategory }), null, 2)}
+`
+      );
+    if (inputs.html && deps.renderHtml)
+      htmlPath = write("html", inputs.html, deps.renderHtml(report, readme ? { readmeUrl: readme } : {}));
+  }
+  return { written, report: reportPath, sarif: sarifPath, html: htmlPath };
+}
+function annotate(deps, report, lines, sarifPath) {
+  const elsewhere = sarifPath ? `the job summary and ${sarifPath}` : "the job summary and the JSON report";
+  const reservedErrors = report.verdict === "fail" && report.mode === "block" ? 1 : 0;
+  const plan = planAnnotations(report, { changedLines: lines, elsewhere, reservedErrors });
+  for (const a of plan.annotations) deps.out.annotate(a);
+}
+function setOutputs(out, report, files, comment) {
+  const counts = { ...report.counts };
+  out.setOutput("verdict", report.verdict);
+  for (const s of FILE_STATUSES) out.setOutput(`count-${s}`, String(counts[s] ?? 0));
+  out.setOutput("designs", String(report.files.length));
+  out.setOutput("findings", String(report.files.reduce((n, f) => n + f.findings.length, 0)));
+  out.setOutput("report", files.report);
+  out.setOutput("sarif", files.sarif);
+  out.setOutput("html", files.html);
+  out.setOutput("comment-url", typeof comment === "object" && comment.url ? comment.url : "");
+}
+function runUrl(env) {
+  const server = env.GITHUB_SERVER_URL || "https://github.com";
+  if (!env.GITHUB_REPOSITORY || !env.GITHUB_RUN_ID) return void 0;
+  return `${server}/${env.GITHUB_REPOSITORY}/actions/runs/${env.GITHUB_RUN_ID}`;
+}
+function readmeUrl(env) {
+  const server = env.GITHUB_SERVER_URL || "https://github.com";
+  const repo = env.GITHUB_ACTION_REPOSITORY ?? "";
+  const ref = env.GITHUB_ACTION_REF ?? "";
+  if (!/^[A-Za-z0-9_.-]+\/[A-Za-z0-9_.-]+$/.test(repo) || !/^[A-Za-z0-9_./-]+$/.test(ref) || ref.includes(".."))
+    return void 0;
+  return `${server}/${repo}/blob/${ref}/README.md`;
+}
+function coreOutput(env) {
+  return {
+    annotate(a) {
+      const props = a.file ? {
+        title: a.title,
+        file: a.file,
+        startLine: a.startLine,
+        ...a.startColumn ? { startColumn: a.startColumn } : {}
+      } : { title: a.title };
+      if (a.level === "error") error(a.message, props);
+      else if (a.level === "warning") warning(a.message, props);
+      else notice(a.message, props);
+    },
+    info: (m) => info(m),
+    warning: (m) => warning(m),
+    setOutput: (name, value2) => setOutput(name, value2),
+    setFailed: (m) => setFailed(m),
+    appendSummary(markdown) {
+      const file = env.GITHUB_STEP_SUMMARY;
+      if (!file) {
+        info(markdown);
+        return;
+      }
+      appendFileSync2(file, markdown.endsWith("\n") ? markdown : `${markdown}
+`);
+    }
+  };
+}
+
 // src/shell/action-run.ts
+import { realpathSync as realpathSync2, statSync as statSync3 } from "node:fs";
+
+// src/shell/action-event.ts
+import { readFileSync as readFileSync3, statSync as statSync2 } from "node:fs";
+
+// src/shell/shared-options.ts
+var MODES = ["block", "inform"];
+var MAX_PARTS = 256;
+function whole(min, max) {
+  return {
+    read: (text2) => /^[0-9]+$/.test(text2) && Number(text2) >= min && Number(text2) <= max ? Number(text2) : void 0,
+    expected: `a whole number from ${min} to ${max}`
+  };
+}
+var SEED = whole(0, 4294967295);
+var THREADS = whole(1, 256);
+var PART = {
+  read(text2) {
+    const m = /^\s*([0-9]+)\s*\/\s*([0-9]+)\s*$/.exec(text2);
+    if (!m) return void 0;
+    const [index, total] = [Number(m[1]), Number(m[2])];
+    return index >= 1 && index <= total && total <= MAX_PARTS ? { index, total } : void 0;
+  },
+  expected: `K/N with 1 ≤ K ≤ N ≤ ${MAX_PARTS}`
+};
+var MODE = {
+  read: (text2) => MODES.includes(text2) ? text2 : void 0,
+  expected: `one of: ${MODES.join(", ")}`
+};
+
+// src/shell/action-inputs.ts
 var InputError = class extends Error {
   name = "InputError";
 };
@@ -62803,38 +66349,41 @@ function repositoryInput(value2, name) {
 function optionalInt(env, name, min, max) {
   const v = getInput(env, name);
   if (v === "") return void 0;
-  if (!/^\d+$/.test(v) || Number(v) < min || Number(v) > max) throw new InputError(`input "${name}" is "${oneLine(v, 40)}"; give a whole number from ${min} to ${max}`);
+  if (!/^\d+$/.test(v) || Number(v) < min || Number(v) > max)
+    throw new InputError(`input "${name}" is "${oneLine(v, 40)}"; give a whole number from ${min} to ${max}`);
   return Number(v);
+}
+function sharedInput(env, name, option, example = "") {
+  const v = getInput(env, name);
+  if (v === "") return void 0;
+  const read = option.read(v);
+  if (read === void 0)
+    throw new InputError(`input "${name}" is "${oneLine(v, 60)}"; use ${option.expected}${example}`);
+  return read;
 }
 var KEY_RE = /^[A-Za-z0-9._/-]{1,64}$/;
 var REF_RE = /^(?!-)(?!.*\.\.)[A-Za-z0-9._/@^~-]{1,200}$/;
 function readInputs(env) {
   const workingDirectory = relativePath(env, "working-directory", ".");
-  const partText = getInput(env, "part");
-  let part;
-  if (partText) {
-    const m = /^(\d+)\s*\/\s*(\d+)$/.exec(partText);
-    const index = m ? Number(m[1]) : NaN;
-    const total = m ? Number(m[2]) : NaN;
-    if (!m || index < 1 || total < 1 || index > total || total > 256) {
-      throw new InputError(`input "part" is "${oneLine(partText, 40)}"; write k/n with 1 ≤ k ≤ n ≤ 256, e.g. 2/4 (use the matrix: part: \${{ matrix.part }}/4)`);
-    }
-    part = { index, total };
-  }
+  const part = sharedInput(env, "part", PART, ", e.g. 2/4 (use the matrix: part: ${{ matrix.part }}/4)");
   const defaultKey = workingDirectory === "." || workingDirectory === "" ? "default" : workingDirectory.replace(/[^A-Za-z0-9._/-]/g, "-").slice(0, 64);
   const commentKey = getInput(env, "comment-key") || defaultKey;
-  if (!KEY_RE.test(commentKey)) throw new InputError(`input "comment-key" may use letters, digits, ".", "_", "/" and "-" (at most 64)`);
+  if (!KEY_RE.test(commentKey))
+    throw new InputError(`input "comment-key" may use letters, digits, ".", "_", "/" and "-" (at most 64)`);
   const base = getInput(env, "base");
   if (base && !REF_RE.test(base)) throw new InputError(`input "base" is not a valid git ref or commit id`);
   const joinParts = relativePath(env, "join-parts", "");
-  if (joinParts && part) throw new InputError('inputs "join-parts" and "part" exclude each other: parts evaluate, the join job combines their reports');
+  if (joinParts && part)
+    throw new InputError(
+      'inputs "join-parts" and "part" exclude each other: parts evaluate, the join job combines their reports'
+    );
   const category = getInput(env, "sarif-category") || (commentKey === "default" ? "netbrace" : `netbrace-${commentKey}`);
   return {
     policy: repositoryInput(relativePath(env, "policy", ""), "policy"),
     orgPolicy: repositoryInput(relativePath(env, "org-policy", ""), "org-policy"),
     policySource: oneOf(env, "policy-source", ["base", "head"], "base"),
     token: getInput(env, "token"),
-    mode: oneOf(env, "mode", ["block", "inform"], "block"),
+    mode: sharedInput(env, "mode", MODE) ?? "block",
     comment: oneOf(env, "comment", ["every-run", "when-changed", "when-failing", "off"], "when-changed"),
     commentKey,
     report: relativePath(env, "report", ".netbrace-out/netbrace-report.json"),
@@ -62846,15 +66395,18 @@ function readInputs(env) {
     joinParts,
     workingDirectory,
     title: oneLine(getInput(env, "title"), 120),
-    seed: optionalInt(env, "seed", 0, 2 ** 32 - 1),
-    threads: optionalInt(env, "threads", 1, 256),
+    seed: sharedInput(env, "seed", SEED),
+    threads: sharedInput(env, "threads", THREADS),
     pullRequest: optionalInt(env, "pull-request", 1, 2 ** 31 - 1)
   };
 }
+
+// src/shell/action-event.ts
 var SHA_RE = /^[0-9a-f]{40}([0-9a-f]{24})?$/;
 var ZERO_RE = /^0+$/;
 function sha(value2, what) {
-  if (typeof value2 !== "string" || !SHA_RE.test(value2)) throw new InputError(`the event payload has no valid ${what} (got ${oneLine(String(value2), 60)})`);
+  if (typeof value2 !== "string" || !SHA_RE.test(value2))
+    throw new InputError(`the event payload has no valid ${what} (got ${oneLine(String(value2), 60)})`);
   return value2;
 }
 function readTarget(env) {
@@ -62877,19 +66429,31 @@ function readTarget(env) {
       kind: "pull-request",
       base: sha(pr.base?.sha, "pull_request.base.sha"),
       head: sha(pr.head?.sha, "pull_request.head.sha"),
-      pr: { owner, repo, number: Number(pr.number ?? payload.number), fork: Boolean(pr.head?.repo?.fork) || headRepo !== void 0 && headRepo !== baseRepo || pr.head?.repo === null }
+      pr: {
+        owner,
+        repo,
+        number: Number(pr.number ?? payload.number),
+        fork: Boolean(pr.head?.repo?.fork) || headRepo !== void 0 && headRepo !== baseRepo || pr.head?.repo === null
+      }
     };
   }
   if (eventName === "push") {
     const after = String(payload.after ?? env.GITHUB_SHA ?? "");
-    if (payload.deleted === true || ZERO_RE.test(after)) return { eventName, kind: "nothing", reason: "the push deleted a branch or tag" };
+    if (payload.deleted === true || ZERO_RE.test(after))
+      return { eventName, kind: "nothing", reason: "the push deleted a branch or tag" };
     const before = String(payload.before ?? "");
-    if (ZERO_RE.test(before) || before === "") return { eventName, kind: "push", head: sha(after, "after"), newBranch: true };
+    if (ZERO_RE.test(before) || before === "")
+      return { eventName, kind: "push", head: sha(after, "after"), newBranch: true };
     return { eventName, kind: "push", base: sha(before, "before"), head: sha(after, "after") };
   }
   const head = env.GITHUB_SHA && SHA_RE.test(env.GITHUB_SHA) ? env.GITHUB_SHA : void 0;
   const runHead = payload.workflow_run?.head_sha;
-  return { eventName, kind: "full", ...head ? { head } : {}, ...typeof runHead === "string" && SHA_RE.test(runHead) ? { runHeadSha: runHead } : {} };
+  return {
+    eventName,
+    kind: "full",
+    ...head ? { head } : {},
+    ...typeof runHead === "string" && SHA_RE.test(runHead) ? { runHeadSha: runHead } : {}
+  };
 }
 async function hasCommit(deps, cwd, commit) {
   return (await deps.git(["cat-file", "-e", `${commit}^{commit}`], cwd)).code === 0;
@@ -62897,70 +66461,71 @@ async function hasCommit(deps, cwd, commit) {
 var FETCH_DEPTH_HINT = "add `fetch-depth: 0` to the actions/checkout step (under `with:`), so that the base commit is in the clone";
 async function ensureCommit(deps, cwd, commit, what) {
   if (await hasCommit(deps, cwd, commit)) return void 0;
-  deps.out.info(`netbrace: the ${what} commit ${commit.slice(0, 12)} is not in the clone (shallow checkout); fetching that one commit`);
+  deps.out.info(
+    `netbrace: the ${what} commit ${commit.slice(0, 12)} is not in the clone (shallow checkout); fetching that one commit`
+  );
   const fetched = await deps.git(["fetch", "--no-tags", "--no-recurse-submodules", "--depth=1", "origin", commit], cwd);
   if (fetched.code === 0 && await hasCommit(deps, cwd, commit)) return void 0;
   return `the ${what} commit ${commit} is not in the clone and could not be fetched (git fetch: ${oneLine(fetched.stderr, 300) || `exit ${fetched.code}`})`;
 }
-function workflowPathOf(env) {
-  const ref = env.GITHUB_WORKFLOW_REF ?? "";
-  const at = ref.lastIndexOf("@");
-  const full = at > 0 ? ref.slice(0, at) : ref;
-  const parts = full.split("/");
-  if (parts.length < 3) return void 0;
-  const p = parts.slice(2).join("/");
-  return /^\.github\/workflows\/[^\0]+\.ya?ml$/.test(p) ? p : void 0;
-}
-async function showAt(deps, cwd, rev, file) {
-  const r = await deps.git(["show", `${rev}:${file}`], cwd);
-  return r.code === 0 ? r.stdout : null;
-}
-async function ownSettingChanges(deps, env, root, base, head) {
-  const workflow = workflowPathOf(env);
-  if (!workflow) return void 0;
-  const [b, h] = [await showAt(deps, root, base, workflow), await showAt(deps, root, head, workflow)];
-  if (b === h) return void 0;
-  return { workflow, changes: compareSettings(b, h, env.GITHUB_JOB || void 0) };
-}
-function applyBaseSettings(inputs, changes, deps) {
-  for (const c of changes) {
-    if (!c.weakens) continue;
-    const base = c.base === "(unset)" ? "" : c.base;
-    if (c.setting === "mode" && base === "block") inputs.mode = "block";
-    else if (c.setting === "policy-source" && base === "base") inputs.policySource = "base";
-    else if (c.setting === "policy") inputs.policy = base;
-    else if (c.setting === "org-policy") inputs.orgPolicy = base;
-    deps.out.warning(`netbrace: this change edits its own workflow: ${c.message}; the base's setting (${c.base}) applies`);
-  }
-}
-function attachSettings(report, own, mode) {
-  report.configuration = { workflow: own.workflow, changes: own.changes.map((c) => ({ ...c, severity: c.weakens ? "fail" : "notice" })) };
-  if (own.changes.some((c) => c.weakens)) {
-    report.verdict = "fail";
-    report.mode = mode;
-  }
-}
-async function changedLines(deps, cwd, base, head) {
-  const out = /* @__PURE__ */ new Map();
-  const diff = await deps.git(["-c", "core.quotePath=false", "diff", "-U0", "--no-color", "--no-ext-diff", "-M", "--end-of-options", base, head, "--"], cwd);
-  if (diff.code !== 0) return out;
-  let current;
-  for (const line of diff.stdout.split("\n")) {
-    if (line.startsWith("+++ ")) {
-      const name = line.slice(4);
-      current = name === "/dev/null" ? void 0 : /* @__PURE__ */ new Set();
-      if (current) out.set(name.replace(/^b\//, ""), current);
-      continue;
-    }
-    const m = /^@@ -\d+(?:,\d+)? \+(\d+)(?:,(\d+))? @@/.exec(line);
-    if (m && current) {
-      const start = Number(m[1]);
-      const count = m[2] === void 0 ? 1 : Number(m[2]);
-      for (let i = 0; i < Math.min(count, 1e5); i++) current.add(start + i);
+async function designsAmong(deps, root, head, policyPath, changed) {
+  let unsure = false;
+  const read = async (p) => {
+    const r = await deps.git(["show", "--no-textconv", "--end-of-options", `${head}:${p}`], root);
+    if (r.code !== 0) return null;
+    if (r.stdout.includes("�")) unsure = true;
+    return r.stdout;
+  };
+  const entry = policyPath || DEFAULT_POLICY_PATH;
+  const text2 = await read(entry);
+  const policy = text2 === null ? builtinPolicy() : (await loadPolicyAt(entry, read)).policy;
+  const policyFiles = /* @__PURE__ */ new Set([entry, ...policy.files]);
+  if (unsure || changed.some((p) => policyFiles.has(p))) return Number.POSITIVE_INFINITY;
+  let n = 0;
+  for (const p of changed) {
+    if (!isDesignPath(policy, p)) continue;
+    if (!designNeedsHeader(policy, p)) n++;
+    else {
+      const t = await read(p);
+      if (t === null || isDesignText(policy, p, t)) n++;
     }
   }
-  return out;
+  return unsure ? Number.POSITIVE_INFINITY : n;
 }
+async function prFilesFallback(deps, env, inputs, target) {
+  if (!target.pr || !inputs.token) return void 0;
+  try {
+    const client = deps.github({
+      token: inputs.token,
+      baseUrl: env.GITHUB_API_URL || "https://api.github.com",
+      ...httpSettingsFromEnv(env)
+    });
+    const { files, truncated } = await listPullRequestFiles(client, {
+      owner: target.pr.owner,
+      repo: target.pr.repo,
+      issueNumber: target.pr.number
+    });
+    if (truncated) return void 0;
+    const names = files.filter((f) => f.status !== "D").map((f) => f.path);
+    const plain = (p) => {
+      try {
+        return repositoryPath(p, "a file name") === p;
+      } catch {
+        return false;
+      }
+    };
+    return names.every(plain) ? names : void 0;
+  } catch (error2) {
+    deps.out.warning(
+      `netbrace: could not list the pull request’s files (${oneLine(error2 instanceof Error ? error2.message : String(error2), 200)})`
+    );
+    return void 0;
+  }
+}
+
+// src/shell/action-parts.ts
+import { lstatSync as lstatSync2, readFileSync as readFileSync4, readdirSync } from "node:fs";
+import path2 from "node:path";
 var MAX_REPORT_BYTES = 64 * 1024 * 1024;
 function readPartReports(folder) {
   const names = [];
@@ -62979,57 +66544,233 @@ function readPartReports(folder) {
     if (stat2.size > MAX_REPORT_BYTES) throw new InputError(`part report ${path2.basename(file)} is larger than 64 MiB`);
     let parsed2;
     try {
-      parsed2 = JSON.parse(readFileSync3(file, "utf8"));
+      parsed2 = JSON.parse(readFileSync4(file, "utf8"));
     } catch {
       throw new InputError(`part report ${path2.basename(file)} is not valid JSON`);
     }
     reports.push(parsed2);
   }
-  if (!reports.length) throw new InputError(`input "join-parts": no part report (*.json) in ${path2.basename(folder)}; download the parts' artifacts there first`);
+  if (!reports.length)
+    throw new InputError(
+      `input "join-parts": no part report (*.json) in ${path2.basename(folder)}; download the parts' artifacts there first`
+    );
   return { reports, names };
 }
-function shouldWriteComment(mode, report, existing) {
-  if (mode === "off") return false;
-  if (mode === "every-run") return true;
-  const failing = report.verdict === "fail";
-  if (mode === "when-failing") return failing || existing !== void 0;
-  if (existing) return commentDigest(existing.body) !== reportDigest(report);
-  return failing || report.files.some((f) => f.findings.length > 0);
-}
-async function postComment(deps, env, inputs, target, report, body) {
-  if (!target.pr || inputs.comment === "off") return "not-applicable";
-  if (!inputs.token) {
-    deps.out.warning('netbrace: no token, so no pull-request comment (set the "token" input, default github.token)');
-    return "failed";
-  }
-  const apiUrl = env.GITHUB_API_URL || "https://api.github.com";
+function joinPartReports(deps, folder, given, notes) {
+  const { reports, names } = readPartReports(folder);
+  deps.out.info(`netbrace: joining ${reports.length} part reports`);
+  let report;
   try {
-    const client = deps.github({ token: inputs.token, baseUrl: apiUrl, ...httpSettingsFromEnv(env), log: (m) => deps.out.info(`netbrace: ${logText(m, 500)}`) });
-    const ref = { owner: target.pr.owner, repo: target.pr.repo, issueNumber: target.pr.number };
-    const result = await upsertComment(client, ref, commentMarker(inputs.commentKey), body, (existing) => shouldWriteComment(inputs.comment, report, existing));
-    deps.out.info(`netbrace: pull-request comment ${result.action}${result.url ? ` (${result.url})` : ""}`);
-    return result;
+    report = deps.join(reports);
   } catch (error2) {
-    const why = error2 instanceof Error ? error2.message : String(error2);
-    if (isPermissionError(error2)) {
-      deps.out.warning(
-        `netbrace: the token cannot write the pull-request comment (${oneLine(why, 200)}). ` + (target.pr.fork ? "This pull request comes from a fork, whose token is read-only; the verdict, summary and annotations are unaffected. To comment on fork pull requests, use the two-workflow pattern in the README." : "Grant `pull-requests: write` in the workflow’s permissions.")
+    const m = /^report (\d+)/.exec(error2 instanceof Error ? error2.message : "");
+    if (m && isNetbraceError(error2))
+      throw new InputError(
+        `part report ${path2.basename(names[Number(m[1]) - 1] ?? "?")}: ${error2.message.replace(/^report \d+ /, "")}`
       );
-    } else {
-      deps.out.warning(`netbrace: could not write the pull-request comment (${oneLine(why, 200)}); the verdict is unaffected`);
+    throw error2;
+  }
+  const joined = report.parts;
+  if (joined) {
+    const missing2 = Array.from({ length: joined.total }, (_, i) => i + 1).filter((k) => !joined.joined.includes(k));
+    if (missing2.length) {
+      return {
+        failure: `netbrace: part report${missing2.length === 1 ? "" : "s"} ${missing2.map((k) => `${k}/${joined.total}`).join(", ")} missing from ${given}: every part must upload its report before the join job runs (needs: the part job)`
+      };
     }
-    return "failed";
+  }
+  notes.push(`Joined from ${names.length} part report${names.length === 1 ? "" : "s"}.`);
+  return { report };
+}
+function splitJoinInput(folder) {
+  const { reports, names } = readPartReports(folder);
+  if (!reports.some((r) => r !== null && typeof r === "object" && Array.isArray(r.split)))
+    return void 0;
+  const checked = reports.map((r, i) => upgradeReport(r, `part report ${path2.basename(names[i])}`));
+  return checked.some((r) => r.split?.length) ? joinInput(checked) : void 0;
+}
+
+// src/gate/own-settings.ts
+var import_yaml8 = __toESM(require_dist(), 1);
+var isObj = (v) => typeof v === "object" && v !== null && !Array.isArray(v);
+function usesNetbrace(uses) {
+  return typeof uses === "string" && (/(^|\/)netbrace(@|\/|$)/i.test(uses) || uses === "./" || uses === ".");
+}
+function lineOf(text2, needle, from) {
+  const lines = text2.split("\n");
+  for (let i = Math.max(0, from - 1); i < lines.length; i++) if (needle.test(lines[i])) return i + 1;
+  return from;
+}
+function stepSettings(text2, job) {
+  const none = {
+    present: false,
+    mode: "",
+    policySource: "",
+    policy: "",
+    orgPolicy: "",
+    continueOnError: "",
+    condition: "",
+    line: 1,
+    lines: {}
+  };
+  if (text2 === null) return none;
+  let wf;
+  try {
+    wf = (0, import_yaml8.parse)(text2, { maxAliasCount: 50 });
+  } catch {
+    return none;
+  }
+  if (!isObj(wf) || !isObj(wf.jobs)) return none;
+  const jobs2 = Object.entries(wf.jobs).filter(([id, j]) => isObj(j) && (job === void 0 || id === job));
+  for (const [id, j] of jobs2) {
+    const steps = j.steps;
+    if (!Array.isArray(steps)) continue;
+    const step = steps.find((s) => isObj(s) && usesNetbrace(s.uses));
+    if (!step) continue;
+    const w = isObj(step.with) ? step.with : {};
+    const str = (v) => v === void 0 || v === null ? "" : String(v);
+    const jobLine = lineOf(text2, new RegExp(`^\\s{1,}${id.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}:\\s*$`), 1);
+    const stepLine = lineOf(text2, /uses:\s*\S*netbrace|uses:\s*\.\/?\s*$/i, jobLine);
+    const at = (key) => lineOf(text2, new RegExp(`^\\s*${key}:`), stepLine);
+    const jobContinue = str(j["continue-on-error"]);
+    return {
+      present: true,
+      mode: str(w.mode) || "block",
+      policySource: str(w["policy-source"]) || "base",
+      policy: str(w.policy),
+      orgPolicy: str(w["org-policy"]),
+      continueOnError: str(step["continue-on-error"]) || jobContinue,
+      condition: str(step.if),
+      line: stepLine,
+      lines: {
+        mode: at("mode"),
+        "policy-source": at("policy-source"),
+        policy: at("policy"),
+        "org-policy": at("org-policy"),
+        "continue-on-error": at("continue-on-error"),
+        if: at("if")
+      }
+    };
+  }
+  return none;
+}
+function compareSettings(baseText, headText, job) {
+  const b = stepSettings(baseText, job);
+  const h = stepSettings(headText, job);
+  if (!b.present && !h.present) return [];
+  const out = [];
+  if (b.present && !h.present) {
+    out.push({
+      setting: "the netbrace step",
+      base: "present",
+      head: "removed",
+      weakens: true,
+      line: 1,
+      message: "the change removes the netbrace step (or its job) from the workflow: the check would no longer run"
+    });
+    return out;
+  }
+  if (!b.present)
+    return [
+      {
+        setting: "the netbrace step",
+        base: "absent",
+        head: "added",
+        weakens: false,
+        line: h.line,
+        message: "the change adds the netbrace step to the workflow"
+      }
+    ];
+  const add = (setting, base, head, weakens, why) => {
+    if (base === head) return;
+    out.push({
+      setting,
+      base: base || "(unset)",
+      head: head || "(unset)",
+      weakens,
+      line: h.lines[setting] ?? h.line,
+      message: `${setting} ${base || "(unset)"} → ${head || "(unset)"}: ${why}`
+    });
+  };
+  add(
+    "mode",
+    b.mode,
+    h.mode,
+    b.mode === "block" && h.mode !== "block",
+    h.mode === "inform" ? "the check would report but never fail" : "how the check ends"
+  );
+  add(
+    "policy-source",
+    b.policySource,
+    h.policySource,
+    b.policySource === "base" && h.policySource !== "base",
+    "the pull request would choose the rules that judge it"
+  );
+  add("policy", b.policy, h.policy, true, "another policy file would judge the change");
+  add(
+    "org-policy",
+    b.orgPolicy,
+    h.orgPolicy,
+    b.orgPolicy !== "" && h.orgPolicy !== b.orgPolicy,
+    h.orgPolicy === "" ? "the organisation floors would no longer be required" : "another organisation policy"
+  );
+  add(
+    "continue-on-error",
+    b.continueOnError,
+    h.continueOnError,
+    h.continueOnError !== "" && h.continueOnError !== "false",
+    "a failing check would no longer fail the job"
+  );
+  add("if", b.condition, h.condition, h.condition !== "", "the step would run only when the condition holds");
+  return out.sort((x, y) => Number(y.weakens) - Number(x.weakens));
+}
+
+// src/shell/action-settings.ts
+function workflowPathOf(env) {
+  const ref = env.GITHUB_WORKFLOW_REF ?? "";
+  const at = ref.lastIndexOf("@");
+  const full = at > 0 ? ref.slice(0, at) : ref;
+  const parts = full.split("/");
+  if (parts.length < 3) return void 0;
+  const p = parts.slice(2).join("/");
+  return /^\.github\/workflows\/[^\0]+\.ya?ml$/.test(p) ? p : void 0;
+}
+async function showAt(deps, cwd, rev2, file) {
+  const r = await deps.git(["show", `${rev2}:${file}`], cwd);
+  return r.code === 0 ? r.stdout : null;
+}
+async function ownSettingChanges(deps, env, root, base, head) {
+  const workflow = workflowPathOf(env);
+  if (!workflow) return void 0;
+  const [b, h] = [await showAt(deps, root, base, workflow), await showAt(deps, root, head, workflow)];
+  if (b === h) return void 0;
+  return { workflow, changes: compareSettings(b, h, env.GITHUB_JOB || void 0) };
+}
+function applyBaseSettings(inputs, changes, deps) {
+  for (const c of changes) {
+    if (!c.weakens) continue;
+    const base = c.base === "(unset)" ? "" : c.base;
+    if (c.setting === "mode" && base === "block") inputs.mode = "block";
+    else if (c.setting === "policy-source" && base === "base") inputs.policySource = "base";
+    else if (c.setting === "policy") inputs.policy = base;
+    else if (c.setting === "org-policy") inputs.orgPolicy = base;
+    deps.out.warning(
+      `netbrace: this change edits its own workflow: ${c.message}; the base's setting (${c.base}) applies`
+    );
   }
 }
-var STATUSES = ["holds", "weakened", "below-floor", "new", "removed", "renamed", "unreadable"];
-function runUrl(env) {
-  const server = env.GITHUB_SERVER_URL || "https://github.com";
-  if (!env.GITHUB_REPOSITORY || !env.GITHUB_RUN_ID) return void 0;
-  return `${server}/${env.GITHUB_REPOSITORY}/actions/runs/${env.GITHUB_RUN_ID}`;
+function attachSettings(report, own, mode) {
+  report.configuration = {
+    workflow: own.workflow,
+    changes: own.changes.map((c) => ({ ...c, severity: c.weakens ? "fail" : "notice" }))
+  };
+  if (own.changes.some((c) => c.weakens)) {
+    report.verdict = "fail";
+    report.mode = mode;
+  }
 }
-function emptyCounts() {
-  return { holds: 0, weakened: 0, "below-floor": 0, new: 0, removed: 0, renamed: 0, unreadable: 0 };
-}
+
+// src/shell/action-run.ts
 async function run(env, deps) {
   let failed = false;
   const fail = (message, code) => {
@@ -63042,11 +66783,14 @@ async function run(env, deps) {
     const workspaceGiven = env.GITHUB_WORKSPACE || process.cwd();
     const workspace = realpathSync2(workspaceGiven);
     const workdir = resolveInWorkspace(workspace, workspace, inputs.workingDirectory || ".", "working-directory");
-    if (!statSync2(workdir).isDirectory()) throw new InputError(`input "working-directory" (${inputs.workingDirectory}) is not a directory`);
+    if (!statSync3(workdir).isDirectory())
+      throw new InputError(`input "working-directory" (${inputs.workingDirectory}) is not a directory`);
     const repositoryRoot = async () => {
       const top = await deps.git(["rev-parse", "--show-toplevel"], workdir);
       if (top.code !== 0 || top.stdout.trim() === "") {
-        throw new InputError(`input "working-directory" (${inputs.workingDirectory}) is not inside a git repository; run actions/checkout before netbrace`);
+        throw new InputError(
+          `input "working-directory" (${inputs.workingDirectory}) is not inside a git repository; run actions/checkout before netbrace`
+        );
       }
       return resolveInWorkspace(workspace, workspace, top.stdout.trim(), "working-directory");
     };
@@ -63055,25 +66799,12 @@ async function run(env, deps) {
     let ownSettings;
     let report;
     let lines = /* @__PURE__ */ new Map();
-    if (inputs.joinParts) {
-      const folder = resolveInWorkspace(workspace, workspace, inputs.joinParts, "join-parts");
-      const { reports, names } = readPartReports(folder);
-      deps.out.info(`netbrace: joining ${reports.length} part reports`);
-      try {
-        report = deps.join(reports);
-      } catch (error2) {
-        const m = /^report (\d+)/.exec(error2 instanceof Error ? error2.message : "");
-        if (m && isNetbraceError(error2)) throw new InputError(`part report ${path2.basename(names[Number(m[1]) - 1] ?? "?")}: ${error2.message.replace(/^report \d+ /, "")}`);
-        throw error2;
-      }
-      const joined = report.parts;
-      if (joined) {
-        const missing2 = Array.from({ length: joined.total }, (_, i) => i + 1).filter((k) => !joined.joined.includes(k));
-        if (missing2.length) {
-          return fail(`netbrace: part report${missing2.length === 1 ? "" : "s"} ${missing2.map((k) => `${k}/${joined.total}`).join(", ")} missing from ${inputs.joinParts}: every part must upload its report before the join job runs (needs: the part job)`, 2);
-        }
-      }
-      notes.push(`Joined from ${names.length} part report${names.length === 1 ? "" : "s"}.`);
+    const joinFolder = inputs.joinParts ? resolveInWorkspace(workspace, workspace, inputs.joinParts, "join-parts") : void 0;
+    const splitJoin = joinFolder !== void 0 ? splitJoinInput(joinFolder) : void 0;
+    if (joinFolder !== void 0 && !splitJoin) {
+      const joined = joinPartReports(deps, joinFolder, inputs.joinParts, notes);
+      if ("failure" in joined) return fail(joined.failure, 2);
+      report = joined.report;
     } else if (target.kind === "nothing") {
       report = emptyReport(inputs, target);
       notes.push(`Nothing to judge: ${target.reason}.`);
@@ -63082,8 +66813,12 @@ async function run(env, deps) {
       let base = inputs.base || target.base;
       const head = target.head;
       if (inputs.base && !SHA_RE.test(inputs.base)) {
-        const resolved = await deps.git(["rev-parse", "--verify", "--quiet", "--end-of-options", `${inputs.base}^{commit}`], root);
-        if (resolved.code !== 0) throw new InputError(`input "base" (${inputs.base}) is not a commit in the clone; ${FETCH_DEPTH_HINT}`);
+        const resolved = await deps.git(
+          ["rev-parse", "--verify", "--quiet", "--end-of-options", `${inputs.base}^{commit}`],
+          root
+        );
+        if (resolved.code !== 0)
+          throw new InputError(`input "base" (${inputs.base}) is not a commit in the clone; ${FETCH_DEPTH_HINT}`);
         base = resolved.stdout.trim();
       }
       if (target.newBranch && !inputs.base && head) {
@@ -63094,7 +66829,11 @@ async function run(env, deps) {
       }
       if (head) {
         const missing2 = await ensureCommit(deps, root, head, "head");
-        if (missing2) return fail(`netbrace: ${missing2}. For pull_request_target, check out the pull request head (ref: \${{ github.event.pull_request.head.sha }}) or ${FETCH_DEPTH_HINT}.`, 2);
+        if (missing2)
+          return fail(
+            `netbrace: ${missing2}. For pull_request_target, check out the pull request head (ref: \${{ github.event.pull_request.head.sha }}) or ${FETCH_DEPTH_HINT}.`,
+            2
+          );
       }
       let kind = target.kind === "full" || !base ? "schedule" : target.kind;
       let paths;
@@ -63102,9 +66841,11 @@ async function run(env, deps) {
         const missing2 = await ensureCommit(deps, root, base, "base");
         if (missing2) {
           const fromApi = target.pr && head ? await prFilesFallback(deps, env, inputs, target) : void 0;
-          if (fromApi && head && designsAmong(root, head, inputs.policy, fromApi) === 0) paths = [];
+          if (fromApi && head && await designsAmong(deps, root, head, inputs.policy, fromApi) === 0) paths = [];
           if (paths === void 0) return fail(`netbrace: ${missing2}. To fix it, ${FETCH_DEPTH_HINT}.`, 2);
-          notes.push("The base commit could not be fetched; the pull request’s file list (REST API) shows that no design file changed.");
+          notes.push(
+            "The base commit could not be fetched; the pull request’s file list (REST API) shows that no design file changed."
+          );
           base = void 0;
           kind = "schedule";
         }
@@ -63124,8 +66865,13 @@ async function run(env, deps) {
         ...inputs.seed !== void 0 ? { seed: inputs.seed } : {},
         ...inputs.threads !== void 0 ? { threads: inputs.threads } : {},
         ...inputs.part ? { part: inputs.part } : {},
+        ...splitJoin ? { join: splitJoin } : {},
         eventKind: kind
       };
+      if (splitJoin)
+        notes.push(
+          `Joined from ${splitJoin.reports.length} part reports; designs split across the parts were judged here from their samples.`
+        );
       if (paths && paths.length === 0) {
         report = emptyReport(inputs, target);
       } else {
@@ -63136,175 +66882,64 @@ async function run(env, deps) {
       }
     }
     const partJob = Boolean(inputs.part);
-    const artifacts = [];
-    const write = (input, given, text2) => {
-      const full = prepareWrite(workspace, workspace, given, input);
-      writeFileSync(full, text2);
-      const rel = workspaceRelative(workspace, full);
-      artifacts.push(rel);
-      return rel;
-    };
-    const reportPath = inputs.report ? write("report", inputs.report, serializeReport(report)) : "";
-    let sarifPath = "";
-    let htmlPath = "";
-    if (!partJob) {
-      if (inputs.sarif) sarifPath = write("sarif", inputs.sarif, `${JSON.stringify(renderSarif(report, { category: inputs.sarifCategory }), null, 2)}
-`);
-      if (inputs.html && deps.renderHtml) htmlPath = write("html", inputs.html, deps.renderHtml(report));
-    }
-    if (!partJob) {
-      const elsewhere = sarifPath ? `the job summary and ${sarifPath}` : "the job summary and the JSON report";
-      const reservedErrors = report.verdict === "fail" && report.mode === "block" ? 1 : 0;
-      const plan = planAnnotations(report, { changedLines: lines, elsewhere, reservedErrors });
-      for (const a of plan.annotations) deps.out.annotate(a);
-    }
+    const files = writeArtifacts(deps, workspace, inputs, report, partJob, readmeUrl(env));
+    if (!partJob) annotate(deps, report, lines, files.sarif);
     let comment = "not-applicable";
     const url = runUrl(env);
-    const viewOptions = { ...url ? { runUrl: url } : {}, artifacts, ...inputs.title ? { title: inputs.title } : {} };
+    const readme = readmeUrl(env);
+    const viewOptions = {
+      ...url ? { runUrl: url } : {},
+      ...readme ? { readmeUrl: readme } : {},
+      artifacts: files.written,
+      ...inputs.title ? { title: inputs.title } : {}
+    };
     if (!partJob && !target.pr && inputs.pullRequest) {
       target.pr = await trustedPullRequest(deps, env, inputs, target, inputs.pullRequest);
     }
     if (!partJob) {
       const body = renderComment(report, { ...viewOptions, key: inputs.commentKey });
       comment = await postComment(deps, env, inputs, target, report, body);
-      if (comment === "failed") notes.push("The pull-request comment could not be written (see the warning in the log); this does not change the verdict.");
+      if (comment === "failed")
+        notes.push(
+          "The pull-request comment could not be written (see the warning in the log); this does not change the verdict."
+        );
     }
     deps.out.appendSummary(renderSummary(report, { ...viewOptions, notes }));
-    const counts = { ...emptyCounts(), ...report.counts };
-    deps.out.setOutput("verdict", report.verdict);
-    for (const s of STATUSES) deps.out.setOutput(`count-${s}`, String(counts[s] ?? 0));
-    deps.out.setOutput("designs", String(report.files.length));
-    deps.out.setOutput("findings", String(report.files.reduce((n, f) => n + f.findings.length, 0)));
-    deps.out.setOutput("report", reportPath);
-    deps.out.setOutput("sarif", sarifPath);
-    deps.out.setOutput("html", htmlPath);
-    deps.out.setOutput("comment-url", typeof comment === "object" && comment.url ? comment.url : "");
+    setOutputs(deps.out, report, files, comment);
     const verdict = report.verdict;
     if (partJob) {
-      deps.out.info(`netbrace: part ${inputs.part.index}/${inputs.part.total} ${verdict === "fail" ? "has failures" : "passes"}; the join job decides`);
+      deps.out.info(
+        `netbrace: part ${inputs.part.index}/${inputs.part.total} ${verdict === "fail" ? "has failures" : "passes"}; the join job decides`
+      );
       return { exitCode: 0, verdict, comment };
     }
+    const sentence = plainSentence(verdictStory(report).sentence);
     if (verdict === "fail" && inputs.mode === "block") {
-      const n = report.files.filter((f) => f.status === "unreadable" || f.findings.some((x) => x.severity === "fail")).length;
-      const own = report.configuration?.changes.filter((c) => c.weakens).length ?? 0;
-      const what = [
-        ...n > 0 ? [`${n} design${n === 1 ? "" : "s"} with failures`] : [],
-        ...own > 0 ? [`the change weakens netbrace's own settings in ${report.configuration.workflow}`] : []
-      ].join("; ");
-      return { ...fail(`netbrace: the gate failed: ${what} (see the annotations and the job summary)`, 1), verdict, comment };
+      return { ...fail(`${sentence} (see the annotations and the job summary)`, 1), verdict, comment };
     }
-    if (verdict === "fail") deps.out.warning("netbrace: the gate would fail; inform mode reports without failing the step");
+    if (verdict === "fail") deps.out.warning(sentence);
     return { exitCode: 0, verdict, comment };
   } catch (error2) {
     if (isNetbraceError(error2)) {
       if (error2.file && error2.line > 0) {
-        deps.out.annotate({ level: "error", file: error2.file, startLine: error2.line, ...error2.column > 0 ? { startColumn: error2.column } : {}, title: "netbrace: configuration error", message: logText(error2.message), rule: "parse-error", inDiff: false });
+        deps.out.annotate({
+          level: "error",
+          file: error2.file,
+          startLine: error2.line,
+          ...error2.column > 0 ? { startColumn: error2.column } : {},
+          title: "netbrace: configuration error",
+          message: logText(error2.message),
+          rule: "parse-error",
+          inDiff: false
+        });
       }
       return fail(`netbrace: ${formatDiagnostic(error2)}`, error2.kind === "design" ? 1 : 2);
     }
-    if (error2 instanceof InputError || error2 instanceof WorkspacePathError) return fail(`netbrace: ${error2.message}`, 2);
+    if (error2 instanceof InputError || error2 instanceof WorkspacePathError)
+      return fail(`netbrace: ${error2.message}`, 2);
     const message = error2 instanceof Error ? error2.message : String(error2);
     return fail(`netbrace: internal error: ${message} — please report this with the workflow run`, 2);
   }
-}
-async function trustedPullRequest(deps, env, inputs, target, number) {
-  const [owner = "", repo = ""] = (env.GITHUB_REPOSITORY ?? "").split("/");
-  const pr = { owner, repo, number, fork: false };
-  if (target.eventName !== "workflow_run") return pr;
-  if (!target.runHeadSha || !inputs.token) {
-    deps.out.warning("netbrace: no comment: the workflow_run payload has no head commit to check the pull request against");
-    return void 0;
-  }
-  try {
-    const client = deps.github({ token: inputs.token, baseUrl: env.GITHUB_API_URL || "https://api.github.com", ...httpSettingsFromEnv(env) });
-    const head = await pullRequestHead(client, { owner, repo, issueNumber: number });
-    if (head === target.runHeadSha) return pr;
-    deps.out.warning(`netbrace: no comment: pull request #${number} is at ${head.slice(0, 12)}, not at ${target.runHeadSha.slice(0, 12)} which the report is about`);
-  } catch (error2) {
-    deps.out.warning(`netbrace: no comment: could not read pull request #${number} (${oneLine(error2 instanceof Error ? error2.message : String(error2), 200)})`);
-  }
-  return void 0;
-}
-function designsAmong(root, head, policyPath, changed) {
-  const read = (p) => {
-    try {
-      return decodeText(execFileSync("git", ["show", "--no-textconv", "--end-of-options", `${head}:${p}`], { cwd: root, maxBuffer: 64 * 1024 * 1024, stdio: ["ignore", "pipe", "ignore"] }), p);
-    } catch {
-      return null;
-    }
-  };
-  const entry = policyPath || DEFAULT_POLICY_PATH;
-  const text2 = read(entry);
-  const policy = text2 === null ? builtinPolicy() : loadPolicy(entry, read);
-  const policyFiles = /* @__PURE__ */ new Set([entry, ...policy.files]);
-  if (changed.some((p) => policyFiles.has(p))) return Number.POSITIVE_INFINITY;
-  const counts = (p) => {
-    if (!designNeedsHeader(policy, p)) return true;
-    const t = read(p);
-    return t === null || isDesignText(policy, p, t);
-  };
-  return changed.filter((p) => isDesignPath(policy, p) && counts(p)).length;
-}
-async function prFilesFallback(deps, env, inputs, target) {
-  if (!target.pr || !inputs.token) return void 0;
-  try {
-    const client = deps.github({ token: inputs.token, baseUrl: env.GITHUB_API_URL || "https://api.github.com", ...httpSettingsFromEnv(env) });
-    const { files, truncated } = await listPullRequestFiles(client, { owner: target.pr.owner, repo: target.pr.repo, issueNumber: target.pr.number });
-    if (truncated) return void 0;
-    const names = files.filter((f) => f.status !== "D").map((f) => f.path);
-    const plain = (p) => {
-      try {
-        return repositoryPath(p, "a file name") === p;
-      } catch {
-        return false;
-      }
-    };
-    return names.every(plain) ? names : void 0;
-  } catch (error2) {
-    deps.out.warning(`netbrace: could not list the pull request’s files (${oneLine(error2 instanceof Error ? error2.message : String(error2), 200)})`);
-    return void 0;
-  }
-}
-function emptyReport(inputs, target) {
-  return {
-    version: REPORT_VERSION,
-    tool: { name: "netbrace", version: VERSION },
-    verdict: "pass",
-    mode: inputs.mode,
-    policy: inputs.policy ? { source: "file", path: inputs.policy } : { source: "builtin" },
-    ...target.base ? { base: target.base } : {},
-    ...target.head ? { head: target.head } : {},
-    seed: inputs.seed ?? 0,
-    counts: emptyCounts(),
-    files: [],
-    caution: CAUTION
-  };
-}
-function coreOutput(env) {
-  return {
-    annotate(a) {
-      const props = a.file ? { title: a.title, file: a.file, startLine: a.startLine, ...a.startColumn ? { startColumn: a.startColumn } : {} } : { title: a.title };
-      if (a.level === "error") error(a.message, props);
-      else if (a.level === "warning") warning(a.message, props);
-      else notice(a.message, props);
-    },
-    info: (m) => info(m),
-    warning: (m) => warning(m),
-    setOutput: (name, value2) => setOutput(name, value2),
-    setFailed: (m) => setFailed(m),
-    appendSummary(markdown) {
-      const file = env.GITHUB_STEP_SUMMARY;
-      if (!file) {
-        info(markdown);
-        return;
-      }
-      appendFileSync2(file, markdown.endsWith("\n") ? markdown : `${markdown}
-`);
-    }
-  };
-}
-function defaultGithub(options) {
-  return createClient(options);
 }
 
 // src/shell/git.ts
@@ -63332,7 +66967,9 @@ function execGit(cwd, args, timeout, encoding) {
       (error2, stdout, stderr) => {
         if (error2 && typeof error2.code === "string") {
           const code = error2.code;
-          reject(new GitError(code === "ENOENT" ? "git is not installed or not on PATH" : `git failed: ${error2.message}`));
+          reject(
+            new GitError(code === "ENOENT" ? "git is not installed or not on PATH" : `git failed: ${error2.message}`)
+          );
           return;
         }
         resolve({ code: error2 ? error2.code ?? 1 : 0, stdout, stderr: String(stderr) });
@@ -63354,11 +66991,22 @@ async function git(cwd, args, what) {
 }
 function checkRef(ref) {
   if (ref === "" || ref.startsWith("-") || /[\0-\x1f\x7f\s]/.test(ref)) {
-    throw new UsageError(`"${ref.replace(/[\0-\x1f\x7f]/g, "?")}" is not a git revision`, "give a branch, tag or commit id");
+    throw new UsageError(
+      `"${ref.replace(/[\0-\x1f\x7f]/g, "?")}" is not a git revision`,
+      "give a branch, tag or commit id"
+    );
   }
   return ref;
 }
-var STATUS = { A: "added", M: "modified", D: "deleted", R: "renamed", T: "modified", C: "added", U: "modified" };
+var STATUS = {
+  A: "added",
+  M: "modified",
+  D: "deleted",
+  R: "renamed",
+  T: "modified",
+  C: "added",
+  U: "modified"
+};
 function parseNameStatus(out) {
   const parts = out.split("\0");
   const files = [];
@@ -63382,7 +67030,11 @@ function parseNameStatus(out) {
 }
 async function listChanged(cwd, base, head) {
   const range = head === "worktree" ? [checkRef(base)] : [checkRef(base), checkRef(head)];
-  const diff = await git(cwd, ["diff", "--name-status", "-M", "-z", "--no-ext-diff", "--end-of-options", ...range, "--"], "git diff");
+  const diff = await git(
+    cwd,
+    ["diff", "--name-status", "-M", "-z", "--no-ext-diff", "--end-of-options", ...range, "--"],
+    "git diff"
+  );
   const files = parseNameStatus(diff);
   if (head === "worktree") {
     const untracked = await git(cwd, ["ls-files", "-z", "--others", "--exclude-standard"], "git ls-files");
@@ -63390,24 +67042,29 @@ async function listChanged(cwd, base, head) {
   }
   return files;
 }
-async function showFile(cwd, rev, file) {
-  const spec = `${checkRef(rev)}:${file}`;
+async function showFile(cwd, rev2, file) {
+  const spec = `${checkRef(rev2)}:${file}`;
   const out = await runGitBytes(cwd, ["show", "--no-textconv", "--end-of-options", spec]).catch((e) => {
-    if (e instanceof GitError && /maxBuffer/i.test(e.message)) throw tooLarge(file, void 0, MAX_BUFFER, rev.slice(0, 12));
+    if (e instanceof GitError && /maxBuffer/i.test(e.message))
+      throw tooLarge(file, void 0, MAX_BUFFER, rev2.slice(0, 12));
     throw e;
   });
   if (out.code === 0) return decodeText(out.stdout, file);
-  const listed = await runGit(cwd, ["ls-tree", "-z", "--end-of-options", checkRef(rev), "--", file]);
+  const listed = await runGit(cwd, ["ls-tree", "-z", "--end-of-options", checkRef(rev2), "--", file]);
   if (listed.code === 0 && listed.stdout === "") return null;
   throw new GitError(`git show ${spec}: ${gitReason(out)}`, damageHint(out) || damageHint(listed));
 }
 async function readWorktree(root, file) {
   return readInside(root, file, MAX_BUFFER);
 }
-async function listFiles(cwd, rev) {
+async function listFiles(cwd, rev2) {
   const split = (out) => out.split("\0").filter(Boolean);
-  if (rev !== "worktree") {
-    return [...new Set(split(await git(cwd, ["ls-tree", "-r", "-z", "--name-only", "--end-of-options", checkRef(rev)], "git ls-tree")))].sort();
+  if (rev2 !== "worktree") {
+    return [
+      ...new Set(
+        split(await git(cwd, ["ls-tree", "-r", "-z", "--name-only", "--end-of-options", checkRef(rev2)], "git ls-tree"))
+      )
+    ].sort();
   }
   const all = split(await git(cwd, ["ls-files", "-z", "--cached", "--others", "--exclude-standard"], "git ls-files"));
   const deleted = new Set(split(await git(cwd, ["ls-files", "-z", "--deleted"], "git ls-files")));
@@ -63416,8 +67073,8 @@ async function listFiles(cwd, rev) {
 function gitDeps(root) {
   return {
     listChanged: (base, head) => listChanged(root, base, head),
-    readAt: (rev, file) => rev === "worktree" ? readWorktree(root, file) : showFile(root, rev, file),
-    listAll: (rev) => listFiles(root, rev),
+    readAt: (rev2, file) => rev2 === "worktree" ? readWorktree(root, file) : showFile(root, rev2, file),
+    listAll: (rev2) => listFiles(root, rev2),
     readOrgPolicy: (file) => readWorktree(root, file)
   };
 }
@@ -63426,11 +67083,13 @@ function gitDeps(root) {
 run(process.env, {
   gate: (request2, root) => {
     const threads = request2.threads ?? availableParallelism();
-    return runGate(request2, { ...gitDeps(root), ...threads > 1 ? { evaluate: (g, spec, n) => evaluateDesignParallel(g, spec, n ?? threads) } : {} });
+    return runGate(request2, { ...gitDeps(root), ...threadedGate(threads) });
   },
   join: joinReports,
   git: (args, cwd) => runGit(cwd, args),
   github: defaultGithub,
   renderHtml,
   out: coreOutput(process.env)
-}).catch((error2) => setFailed(`netbrace: internal error: ${error2 instanceof Error ? error2.message : String(error2)}`));
+}).catch(
+  (error2) => setFailed(`netbrace: internal error: ${error2 instanceof Error ? error2.message : String(error2)}`)
+);

@@ -65,7 +65,8 @@ function eligibleUnits(g, kind) {
 function isEligible(g, kind, u) {
   if (kind === "node") return g.nodeHardened[u] === 0;
   if (kind === "link") return g.linkHardened[u] === 0;
-  for (let p = g.groupOffsets[u]; p < g.groupOffsets[u + 1]; p++) if (g.linkHardened[g.groupLinks[p]] === 0) return true;
+  for (let p = g.groupOffsets[u]; p < g.groupOffsets[u + 1]; p++)
+    if (g.linkHardened[g.groupLinks[p]] === 0) return true;
   return false;
 }
 function removeUnit(g, mask, kind, u) {
@@ -425,7 +426,7 @@ var linkBetweennessAdaptive = {
   sequence: (g, steps) => adaptiveLinkBetweennessOrder(g, steps)
 };
 
-// src/metrics/kernels/hash-noise.ts
+// src/random.ts
 function mix32(h) {
   h ^= h >>> 16;
   h = Math.imul(h, 2246822507);
@@ -437,14 +438,14 @@ function mix32(h) {
 function hash32(a, b) {
   return mix32(Math.imul(a ^ 2654435769, 2246822507) ^ Math.imul(b + 1663821227, 3266489909));
 }
-function noise(a, b) {
-  return hash32(a, b) / 2147483648 - 1;
+function fnv1a32CodeUnits(text) {
+  let h = 2166136261;
+  for (let i = 0; i < text.length; i++) {
+    h ^= text.charCodeAt(i);
+    h = Math.imul(h, 16777619);
+  }
+  return h | 0;
 }
-function sign(a, b) {
-  return hash32(a, b) & 1 ? 1 : -1;
-}
-
-// src/envelope/rng.ts
 function hashString(s, seed) {
   let h = seed >>> 0;
   for (let i = 0; i < s.length; i++) {
@@ -1059,6 +1060,14 @@ function createDenseSpectrum(limit) {
   };
 }
 
+// src/metrics/kernels/hash-noise.ts
+function noise(a, b) {
+  return hash32(a, b) / 2147483648 - 1;
+}
+function sign(a, b) {
+  return hash32(a, b) & 1 ? 1 : -1;
+}
+
 // src/metrics/kernels/lanczos.ts
 function dot(a, ao, b, bo, n) {
   let s = 0;
@@ -1267,11 +1276,12 @@ function createLanczos(capacity, maxCount, basis = 24) {
 }
 
 // src/metrics/kernels/extremal-eigen.ts
+var FIEDLER_BASIS = 48;
 function createExtremalSolver(g, kind, denseLimit, warmStart) {
   const limit = Math.min(g.n, denseLimit);
   const fiedler = kind === "fiedler";
   const dense = createDenseSpectrum(limit);
-  const lanczos = createLanczos(g.n, 1);
+  const lanczos = createLanczos(g.n, 1, fiedler ? FIEDLER_BASIS : void 0);
   const op = fiedler ? createLaplacianOperator() : createAdjacencyOperator();
   const one = new Float64Array(fiedler ? g.n : 0);
   const previous = new Float64Array(warmStart ? g.n : 0);
@@ -1303,6 +1313,9 @@ function createExtremalSolver(g, kind, denseLimit, warmStart) {
     return r.values[0];
   };
 }
+
+// src/metrics/kernels/work-count.ts
+var kernelWork = { visits: 0, wordVisits: 0 };
 
 // src/metrics/kernels/subgraph.ts
 function allocateLocalGraph(nodeCapacity, entryCapacity) {
@@ -1352,6 +1365,7 @@ function createSurvivorBuilder(g, simple) {
     out.offsets[n] = k;
     out.n = n;
     out.entries = k;
+    kernelWork.visits += g.n + offsets[g.n];
     return out;
   };
 }
@@ -1391,7 +1405,7 @@ function createSpectralSurvivors(g) {
   const list = { count: 0, order, start };
   const part = allocateLocalGraph(g.n, 2 * g.m);
   const idKey = new Int32Array(g.n);
-  for (let i = 0; i < g.n; i++) idKey[i] = fnv1a(g.nodeIds[i] ?? String(i));
+  for (let i = 0; i < g.n; i++) idKey[i] = fnv1a32CodeUnits(g.nodeIds[i] ?? String(i));
   const keys = new Int32Array(g.n);
   return {
     survivors(mask) {
@@ -1436,14 +1450,6 @@ function createSpectralSurvivors(g) {
     }
   };
 }
-function fnv1a(s) {
-  let h = 2166136261;
-  for (let i = 0; i < s.length; i++) {
-    h ^= s.charCodeAt(i);
-    h = Math.imul(h, 16777619);
-  }
-  return h | 0;
-}
 
 // src/metrics/algebraic-connectivity.ts
 var algebraicConnectivity = {
@@ -1454,7 +1460,12 @@ var algebraicConnectivity = {
   appliesTo: () => true,
   create(g, options = {}) {
     const spectral = createSpectralSurvivors(g);
-    const solve = createExtremalSolver(g, "fiedler", options.denseLimit ?? EXTREMAL_DENSE_LIMIT, options.warmStart ?? false);
+    const solve = createExtremalSolver(
+      g,
+      "fiedler",
+      options.denseLimit ?? EXTREMAL_DENSE_LIMIT,
+      options.warmStart ?? false
+    );
     return (mask) => {
       const local = spectral.survivors(mask);
       if (local.n < 2 || spectral.components(local).count > 1) return { raw: 0, normalized: 0 };
@@ -1472,174 +1483,523 @@ function popcount32(x) {
   return Math.imul(x, 16843009) >>> 24;
 }
 var LONG_GRAPH_ECCENTRICITY = 12;
-function wordsFor(sources) {
-  return Math.max(1, Math.min(8, Math.ceil(sources / 32)));
+var THIN_LEVEL = 12;
+var PLANES = 24;
+function createHopHistogram(capacity, longEccentricity = LONG_GRAPH_ECCENTRICITY) {
+  const cap = Math.max(1, capacity);
+  const k = new BfsScratch(cap, longEccentricity);
+  return { run: (graph, sources, count, perSource) => k.run(graph, sources, count, perSource) };
 }
-function createHopHistogram(capacity) {
-  const maxWords = wordsFor(capacity);
-  const size = Math.max(1, capacity * maxWords);
-  const seen = new Uint32Array(size);
-  let frontier = new Uint32Array(size);
-  let next = new Uint32Array(size);
-  const done = new Uint8Array(Math.max(1, capacity));
-  const listed = new Uint8Array(Math.max(1, capacity));
-  let active = new Int32Array(Math.max(1, capacity));
-  let nextActive = new Int32Array(Math.max(1, capacity));
-  const full = new Uint32Array(maxWords);
-  const acc = new Uint32Array(maxWords);
-  const result = { hist: new Float64Array(capacity + 1), maxDistance: 0 };
-  const dist = new Int32Array(Math.max(1, capacity));
-  const queue = new Int32Array(Math.max(1, capacity));
-  function single(graph, s) {
-    const { offsets, neighbors } = graph;
-    dist.fill(-1, 0, graph.n);
+var BfsScratch = class {
+  constructor(cap, longEccentricity) {
+    this.longEccentricity = longEccentricity;
+    this.newOf = new Int32Array(cap);
+    this.order = new Int32Array(cap);
+    this.compStart = new Int32Array(cap + 1);
+    this.compOf = new Int32Array(cap);
+    this.ro = new Int32Array(cap + 1);
+    this.rn = new Int32Array(16);
+    this.srcSorted = new Int32Array(cap);
+    this.srcIndex = new Int32Array(cap);
+    this.compSrcStart = new Int32Array(cap + 1);
+    this.seen = new Uint32Array(8 * cap);
+    this.frontier = new Uint32Array(8 * cap);
+    this.next = new Uint32Array(8 * cap);
+    this.done = new Uint8Array(cap);
+    this.listed = new Uint8Array(cap);
+    this.active = new Int32Array(cap);
+    this.nextActive = new Int32Array(cap);
+    this.dist = new Int32Array(cap).fill(-1);
+    this.queue = new Int32Array(cap);
+    this.result = { hist: new Float64Array(cap + 1), maxDistance: 0 };
+  }
+  longEccentricity;
+  // Renumbered graph (breadth-first, component by component).
+  newOf;
+  order;
+  compStart;
+  compOf;
+  ro;
+  rn;
+  // Sources grouped by component.
+  srcSorted;
+  srcIndex;
+  compSrcStart;
+  // Two words per node.
+  seen;
+  frontier;
+  next;
+  done;
+  listed;
+  active;
+  nextActive;
+  dist;
+  queue;
+  planes = new Uint32Array(8 * PLANES);
+  full = new Uint32Array(8);
+  result;
+  run(graph, sources, count, perSource) {
+    const result = this.result;
+    result.hist.fill(0, 0, result.maxDistance + 1);
+    result.maxDistance = 0;
+    if (perSource) perSource.fill(0, 0, count);
+    if (count === 0 || graph.n === 0) return result;
+    const comps = this.renumber(graph);
+    this.groupSources(sources, count, comps);
+    for (let c = 0; c < comps; c++) {
+      const s0 = this.compSrcStart[c];
+      const s1 = this.compSrcStart[c + 1];
+      if (s0 === s1) continue;
+      const lo = this.compStart[c];
+      const hi = this.compStart[c + 1];
+      if (hi - lo < 2) continue;
+      const ecc = this.single(this.srcSorted[s0], perSource, this.srcIndex[s0]);
+      if (ecc >= this.longEccentricity && hi - lo < THIN_LEVEL * (ecc + 1)) {
+        for (let i = s0 + 1; i < s1; i++) this.single(this.srcSorted[i], perSource, this.srcIndex[i]);
+        continue;
+      }
+      for (let b = s0 + 1; b < s1; ) {
+        const left = s1 - b;
+        if (left > 64) {
+          const width = Math.min(256, left);
+          this.batch8(b, width, lo, hi, perSource);
+          b += width;
+        } else {
+          this.batch(b, left, lo, hi, perSource);
+          b += left;
+        }
+      }
+    }
+    return result;
+  }
+  /** Breadth-first renumbering, component by component; returns the component count. */
+  renumber(g) {
+    const n = g.n;
+    const { offsets, neighbors } = g;
+    const newOf = this.newOf;
+    const order = this.order;
+    newOf.fill(-1, 0, n);
+    let tail = 0;
+    let c = 0;
+    for (let s = 0; s < n; s++) {
+      if (newOf[s] >= 0) continue;
+      this.compStart[c] = tail;
+      newOf[s] = tail;
+      order[tail++] = s;
+      for (let head = this.compStart[c]; head < tail; head++) {
+        const v = order[head];
+        for (let p = offsets[v]; p < offsets[v + 1]; p++) {
+          const w = neighbors[p];
+          if (newOf[w] < 0) {
+            newOf[w] = tail;
+            order[tail++] = w;
+          }
+        }
+      }
+      for (let i = this.compStart[c]; i < tail; i++) this.compOf[i] = c;
+      c++;
+    }
+    this.compStart[c] = tail;
+    const entries = offsets[n];
+    if (this.rn.length < entries) this.rn = new Int32Array(Math.max(entries, 2 * this.rn.length));
+    const rn = this.rn;
+    const ro = this.ro;
+    let k = 0;
+    for (let i = 0; i < n; i++) {
+      ro[i] = k;
+      const v = order[i];
+      for (let p = offsets[v]; p < offsets[v + 1]; p++) rn[k++] = newOf[neighbors[p]];
+    }
+    ro[n] = k;
+    kernelWork.visits += n + k;
+    return c;
+  }
+  /** Sources by component (counting sort), renumbered, each with its position in the input. */
+  groupSources(sources, count, comps) {
+    const start = this.compSrcStart;
+    start.fill(0, 0, comps + 1);
+    for (let i = 0; i < count; i++) start[this.compOf[this.newOf[sources[i]]] + 1]++;
+    for (let c = 0; c < comps; c++) start[c + 1] += start[c];
+    const cursor = this.queue;
+    for (let c = 0; c < comps; c++) cursor[c] = start[c];
+    for (let i = 0; i < count; i++) {
+      const v = this.newOf[sources[i]];
+      const at = cursor[this.compOf[v]]++;
+      this.srcSorted[at] = v;
+      this.srcIndex[at] = i;
+    }
+  }
+  /** Plain BFS from s (renumbered), adding its distances; returns the eccentricity. */
+  single(s, perSource, index) {
+    const ro = this.ro;
+    const rn = this.rn;
+    const dist = this.dist;
+    const queue = this.queue;
+    const hist = this.result.hist;
     dist[s] = 0;
     queue[0] = s;
     let head = 0;
     let tail = 1;
     let ecc = 0;
-    const hist = result.hist;
+    let inv = 0;
+    let scanned = 0;
     while (head < tail) {
       const v = queue[head++];
       const dv = dist[v] + 1;
-      for (let p = offsets[v]; p < offsets[v + 1]; p++) {
-        const w = neighbors[p];
+      scanned += ro[v + 1] - ro[v];
+      for (let p = ro[v]; p < ro[v + 1]; p++) {
+        const w = rn[p];
         if (dist[w] >= 0) continue;
         dist[w] = dv;
         queue[tail++] = w;
         hist[dv]++;
+        inv += 1 / dv;
         if (dv > ecc) ecc = dv;
       }
     }
-    if (ecc > result.maxDistance) result.maxDistance = ecc;
+    for (let i = 0; i < tail; i++) dist[queue[i]] = -1;
+    kernelWork.visits += tail + scanned;
+    if (perSource) perSource[index] = inv;
+    if (ecc > this.result.maxDistance) this.result.maxDistance = ecc;
     return ecc;
   }
-  return {
-    run(graph, sources, count) {
-      const n = graph.n;
-      const { offsets, neighbors } = graph;
-      const hist = result.hist;
-      hist.fill(0, 0, result.maxDistance + 1);
-      result.maxDistance = 0;
-      if (count === 0) return result;
-      const ecc = single(graph, sources[0]);
-      if (ecc >= LONG_GRAPH_ECCENTRICITY) {
-        for (let i = 1; i < count; i++) single(graph, sources[i]);
-        return result;
+  /** One batch of up to 64 sources (srcSorted[from .. from+width)) in the node range [lo, hi). */
+  batch(from, width, lo, hi, perSource) {
+    const ro = this.ro;
+    const rn = this.rn;
+    const seen = this.seen;
+    const done = this.done;
+    const listed = this.listed;
+    const hist = this.result.hist;
+    const planes = this.planes;
+    let frontier = this.frontier;
+    let next = this.next;
+    let active = this.active;
+    let nextActive = this.nextActive;
+    const f0 = width >= 32 ? 4294967295 : (1 << width) - 1 >>> 0;
+    const f1 = width >= 64 ? 4294967295 : width <= 32 ? 0 : (1 << width - 32) - 1 >>> 0;
+    seen.fill(0, 2 * lo, 2 * hi);
+    frontier.fill(0, 2 * lo, 2 * hi);
+    next.fill(0, 2 * lo, 2 * hi);
+    done.fill(0, lo, hi);
+    let activeCount = 0;
+    for (let i = 0; i < width; i++) {
+      const s = this.srcSorted[from + i];
+      const at = 2 * s + (i >>> 5);
+      const bit = 1 << (i & 31);
+      seen[at] |= bit;
+      frontier[at] |= bit;
+      if (!listed[s]) {
+        listed[s] = 1;
+        active[activeCount++] = s;
       }
-      hist.fill(0, 0, result.maxDistance + 1);
-      result.maxDistance = 0;
-      const W = wordsFor(count);
-      const batch = 32 * W;
-      const sweepWork = n + offsets[n];
-      for (let start = 0; start < count; start += batch) {
-        const width = Math.min(batch, count - start);
-        const used = n * W;
-        seen.fill(0, 0, used);
-        frontier.fill(0, 0, used);
-        next.fill(0, 0, used);
-        done.fill(0, 0, n);
-        for (let w = 0; w < W; w++) {
-          const bits = width - 32 * w;
-          full[w] = bits >= 32 ? 4294967295 : bits <= 0 ? 0 : (1 << bits) - 1 >>> 0;
-        }
-        let activeCount = 0;
-        for (let i = 0; i < width; i++) {
-          const s = sources[start + i];
-          const at = s * W + (i >>> 5);
-          const bit = 1 << (i & 31);
-          seen[at] |= bit;
-          frontier[at] |= bit;
-          if (!listed[s]) {
-            listed[s] = 1;
-            active[activeCount++] = s;
-          }
-        }
-        for (let i = 0; i < activeCount; i++) listed[active[i]] = 0;
-        for (let d = 1; activeCount > 0; d++) {
-          let frontierWork = 0;
-          for (let i = 0; i < activeCount; i++) frontierWork += offsets[active[i] + 1] - offsets[active[i]];
-          let reached = 0;
-          let nextCount = 0;
-          if (4 * frontierWork < sweepWork) {
-            for (let i = 0; i < activeCount; i++) {
-              const v = active[i];
-              const vb = v * W;
-              for (let p = offsets[v]; p < offsets[v + 1]; p++) {
-                const u = neighbors[p];
-                if (done[u]) continue;
-                const ub = u * W;
-                let any = 0;
-                for (let w = 0; w < W; w++) {
-                  const x = frontier[vb + w] & ~seen[ub + w];
-                  next[ub + w] |= x;
-                  any |= x;
-                }
-                if (any !== 0 && !listed[u]) {
-                  listed[u] = 1;
-                  nextActive[nextCount++] = u;
-                }
-              }
-            }
-            for (let i = 0; i < nextCount; i++) {
-              const u = nextActive[i];
-              listed[u] = 0;
-              const ub = u * W;
-              let complete2 = true;
-              for (let w = 0; w < W; w++) {
-                const x = next[ub + w];
-                reached += popcount32(x);
-                const t = (seen[ub + w] | x) >>> 0;
-                seen[ub + w] = t;
-                if (t !== full[w]) complete2 = false;
-              }
-              if (complete2) done[u] = 1;
-            }
-          } else {
-            for (let v = 0; v < n; v++) {
-              if (done[v]) continue;
-              const base = v * W;
-              for (let w = 0; w < W; w++) acc[w] = 0;
-              for (let p = offsets[v]; p < offsets[v + 1]; p++) {
-                const ub = neighbors[p] * W;
-                for (let w = 0; w < W; w++) acc[w] |= frontier[ub + w];
-              }
-              let any = 0;
-              let complete2 = true;
-              for (let w = 0; w < W; w++) {
-                const s = seen[base + w];
-                const x = acc[w] & ~s;
-                next[base + w] = x;
-                any |= x;
-                const t = (s | x) >>> 0;
-                seen[base + w] = t;
-                if (t !== full[w]) complete2 = false;
-                if (x !== 0) reached += popcount32(x);
-              }
-              if (any !== 0) nextActive[nextCount++] = v;
-              if (complete2) done[v] = 1;
-            }
-          }
-          if (reached > 0) {
-            hist[d] += reached;
-            if (d > result.maxDistance) result.maxDistance = d;
-          }
-          for (let i = 0; i < activeCount; i++) {
-            const vb = active[i] * W;
-            for (let w = 0; w < W; w++) frontier[vb + w] = 0;
-          }
-          const f = frontier;
-          frontier = next;
-          next = f;
-          const a = active;
-          active = nextActive;
-          nextActive = a;
-          activeCount = nextCount;
-        }
-      }
-      return result;
     }
-  };
+    for (let i = 0; i < activeCount; i++) listed[active[i]] = 0;
+    const sweepWork = hi - lo + (ro[hi] - ro[lo]);
+    const counting = perSource !== void 0;
+    for (let d = 1; activeCount > 0; d++) {
+      let frontierWork = 0;
+      for (let i = 0; i < activeCount; i++) frontierWork += ro[active[i] + 1] - ro[active[i]];
+      let reached = 0;
+      let nextCount = 0;
+      if (counting) planes.fill(0);
+      kernelWork.wordVisits += 2 * (4 * frontierWork < sweepWork ? activeCount + frontierWork : sweepWork);
+      if (4 * frontierWork < sweepWork) {
+        for (let i = 0; i < activeCount; i++) {
+          const v = active[i];
+          const a0 = frontier[2 * v];
+          const a1 = frontier[2 * v + 1];
+          for (let p = ro[v]; p < ro[v + 1]; p++) {
+            const u = rn[p];
+            if (done[u]) continue;
+            const x0 = a0 & ~seen[2 * u];
+            const x1 = a1 & ~seen[2 * u + 1];
+            if ((x0 | x1) === 0) continue;
+            next[2 * u] |= x0;
+            next[2 * u + 1] |= x1;
+            if (!listed[u]) {
+              listed[u] = 1;
+              nextActive[nextCount++] = u;
+            }
+          }
+        }
+        for (let i = 0; i < nextCount; i++) {
+          const u = nextActive[i];
+          listed[u] = 0;
+          const x0 = next[2 * u];
+          const x1 = next[2 * u + 1];
+          reached += popcount32(x0) + popcount32(x1);
+          if (counting) addBits(planes, x0, x1);
+          const t0 = (seen[2 * u] | x0) >>> 0;
+          const t1 = (seen[2 * u + 1] | x1) >>> 0;
+          seen[2 * u] = t0;
+          seen[2 * u + 1] = t1;
+          if (t0 === f0 && t1 === f1) done[u] = 1;
+        }
+      } else {
+        for (let v = lo; v < hi; v++) {
+          if (done[v]) continue;
+          let a0 = 0;
+          let a1 = 0;
+          for (let p = ro[v]; p < ro[v + 1]; p++) {
+            const u = 2 * rn[p];
+            a0 |= frontier[u];
+            a1 |= frontier[u + 1];
+          }
+          const s0 = seen[2 * v];
+          const s1 = seen[2 * v + 1];
+          const x0 = a0 & ~s0;
+          const x1 = a1 & ~s1;
+          next[2 * v] = x0;
+          next[2 * v + 1] = x1;
+          if ((x0 | x1) === 0) continue;
+          const t0 = (s0 | x0) >>> 0;
+          const t1 = (s1 | x1) >>> 0;
+          seen[2 * v] = t0;
+          seen[2 * v + 1] = t1;
+          reached += popcount32(x0) + popcount32(x1);
+          if (counting) addBits(planes, x0, x1);
+          nextActive[nextCount++] = v;
+          if (t0 === f0 && t1 === f1) done[v] = 1;
+        }
+      }
+      if (reached > 0) {
+        hist[d] += reached;
+        if (d > this.result.maxDistance) this.result.maxDistance = d;
+        if (counting) this.drainPlanes(perSource, from, width, 1 / d, 2);
+      }
+      for (let i = 0; i < activeCount; i++) {
+        const v = active[i];
+        frontier[2 * v] = 0;
+        frontier[2 * v + 1] = 0;
+      }
+      const f = frontier;
+      frontier = next;
+      next = f;
+      const a = active;
+      active = nextActive;
+      nextActive = a;
+      activeCount = nextCount;
+    }
+    this.frontier = frontier;
+    this.next = next;
+    this.active = active;
+    this.nextActive = nextActive;
+  }
+  /** One batch of up to 256 sources, eight words per node, unrolled (see batch()). */
+  batch8(from, width, lo, hi, perSource) {
+    const ro = this.ro;
+    const rn = this.rn;
+    const seen = this.seen;
+    const done = this.done;
+    const listed = this.listed;
+    const hist = this.result.hist;
+    const planes = this.planes;
+    const full = this.full;
+    let frontier = this.frontier;
+    let next = this.next;
+    let active = this.active;
+    let nextActive = this.nextActive;
+    for (let w = 0; w < 8; w++) {
+      const bits = width - 32 * w;
+      full[w] = bits >= 32 ? 4294967295 : bits <= 0 ? 0 : (1 << bits) - 1 >>> 0;
+    }
+    const f0 = full[0], f1 = full[1], f2 = full[2], f3 = full[3], f4 = full[4], f5 = full[5], f6 = full[6], f7 = full[7];
+    seen.fill(0, 8 * lo, 8 * hi);
+    frontier.fill(0, 8 * lo, 8 * hi);
+    next.fill(0, 8 * lo, 8 * hi);
+    done.fill(0, lo, hi);
+    let activeCount = 0;
+    for (let i = 0; i < width; i++) {
+      const s = this.srcSorted[from + i];
+      const at = 8 * s + (i >>> 5);
+      const bit = 1 << (i & 31);
+      seen[at] |= bit;
+      frontier[at] |= bit;
+      if (!listed[s]) {
+        listed[s] = 1;
+        active[activeCount++] = s;
+      }
+    }
+    for (let i = 0; i < activeCount; i++) listed[active[i]] = 0;
+    const sweepWork = hi - lo + (ro[hi] - ro[lo]);
+    const counting = perSource !== void 0;
+    for (let d = 1; activeCount > 0; d++) {
+      let frontierWork = 0;
+      for (let i = 0; i < activeCount; i++) frontierWork += ro[active[i] + 1] - ro[active[i]];
+      let reached = 0;
+      let nextCount = 0;
+      if (counting) planes.fill(0);
+      kernelWork.wordVisits += 8 * (4 * frontierWork < sweepWork ? activeCount + frontierWork : sweepWork);
+      if (4 * frontierWork < sweepWork) {
+        for (let i = 0; i < activeCount; i++) {
+          const v = active[i];
+          const vb = 8 * v;
+          const a0 = frontier[vb + 0];
+          const a1 = frontier[vb + 1];
+          const a2 = frontier[vb + 2];
+          const a3 = frontier[vb + 3];
+          const a4 = frontier[vb + 4];
+          const a5 = frontier[vb + 5];
+          const a6 = frontier[vb + 6];
+          const a7 = frontier[vb + 7];
+          for (let p = ro[v]; p < ro[v + 1]; p++) {
+            const u = rn[p];
+            if (done[u]) continue;
+            const ub = 8 * u;
+            const x0 = a0 & ~seen[ub + 0];
+            const x1 = a1 & ~seen[ub + 1];
+            const x2 = a2 & ~seen[ub + 2];
+            const x3 = a3 & ~seen[ub + 3];
+            const x4 = a4 & ~seen[ub + 4];
+            const x5 = a5 & ~seen[ub + 5];
+            const x6 = a6 & ~seen[ub + 6];
+            const x7 = a7 & ~seen[ub + 7];
+            if ((x0 | x1 | x2 | x3 | x4 | x5 | x6 | x7) === 0) continue;
+            next[ub + 0] |= x0;
+            next[ub + 1] |= x1;
+            next[ub + 2] |= x2;
+            next[ub + 3] |= x3;
+            next[ub + 4] |= x4;
+            next[ub + 5] |= x5;
+            next[ub + 6] |= x6;
+            next[ub + 7] |= x7;
+            if (!listed[u]) {
+              listed[u] = 1;
+              nextActive[nextCount++] = u;
+            }
+          }
+        }
+        for (let i = 0; i < nextCount; i++) {
+          const u = nextActive[i];
+          listed[u] = 0;
+          const ub = 8 * u;
+          let complete2 = true;
+          for (let w = 0; w < 8; w++) {
+            const x = next[ub + w];
+            if (x === 0) {
+              if (seen[ub + w] !== full[w]) complete2 = false;
+              continue;
+            }
+            reached += popcount32(x);
+            const t = (seen[ub + w] | x) >>> 0;
+            seen[ub + w] = t;
+            if (t !== full[w]) complete2 = false;
+          }
+          if (counting) addBits8(planes, next, ub);
+          if (complete2) done[u] = 1;
+        }
+      } else {
+        for (let v = lo; v < hi; v++) {
+          if (done[v]) continue;
+          let a0 = 0, a1 = 0, a2 = 0, a3 = 0, a4 = 0, a5 = 0, a6 = 0, a7 = 0;
+          for (let p = ro[v]; p < ro[v + 1]; p++) {
+            const u = 8 * rn[p];
+            a0 |= frontier[u + 0];
+            a1 |= frontier[u + 1];
+            a2 |= frontier[u + 2];
+            a3 |= frontier[u + 3];
+            a4 |= frontier[u + 4];
+            a5 |= frontier[u + 5];
+            a6 |= frontier[u + 6];
+            a7 |= frontier[u + 7];
+          }
+          const vb = 8 * v;
+          const x0 = a0 & ~seen[vb + 0];
+          const x1 = a1 & ~seen[vb + 1];
+          const x2 = a2 & ~seen[vb + 2];
+          const x3 = a3 & ~seen[vb + 3];
+          const x4 = a4 & ~seen[vb + 4];
+          const x5 = a5 & ~seen[vb + 5];
+          const x6 = a6 & ~seen[vb + 6];
+          const x7 = a7 & ~seen[vb + 7];
+          next[vb + 0] = x0;
+          next[vb + 1] = x1;
+          next[vb + 2] = x2;
+          next[vb + 3] = x3;
+          next[vb + 4] = x4;
+          next[vb + 5] = x5;
+          next[vb + 6] = x6;
+          next[vb + 7] = x7;
+          if ((x0 | x1 | x2 | x3 | x4 | x5 | x6 | x7) === 0) continue;
+          const t0 = (seen[vb + 0] | x0) >>> 0;
+          const t1 = (seen[vb + 1] | x1) >>> 0;
+          const t2 = (seen[vb + 2] | x2) >>> 0;
+          const t3 = (seen[vb + 3] | x3) >>> 0;
+          const t4 = (seen[vb + 4] | x4) >>> 0;
+          const t5 = (seen[vb + 5] | x5) >>> 0;
+          const t6 = (seen[vb + 6] | x6) >>> 0;
+          const t7 = (seen[vb + 7] | x7) >>> 0;
+          seen[vb + 0] = t0;
+          seen[vb + 1] = t1;
+          seen[vb + 2] = t2;
+          seen[vb + 3] = t3;
+          seen[vb + 4] = t4;
+          seen[vb + 5] = t5;
+          seen[vb + 6] = t6;
+          seen[vb + 7] = t7;
+          reached += popcount32(x0) + popcount32(x1) + popcount32(x2) + popcount32(x3) + popcount32(x4) + popcount32(x5) + popcount32(x6) + popcount32(x7);
+          if (counting) addBits8(planes, next, vb);
+          nextActive[nextCount++] = v;
+          if (t0 === f0 && t1 === f1 && t2 === f2 && t3 === f3 && t4 === f4 && t5 === f5 && t6 === f6 && t7 === f7)
+            done[v] = 1;
+        }
+      }
+      if (reached > 0) {
+        hist[d] += reached;
+        if (d > this.result.maxDistance) this.result.maxDistance = d;
+        if (counting) this.drainPlanes(perSource, from, width, 1 / d, 8);
+      }
+      for (let i = 0; i < activeCount; i++) {
+        const vb = 8 * active[i];
+        for (let w = 0; w < 8; w++) frontier[vb + w] = 0;
+      }
+      const f = frontier;
+      frontier = next;
+      next = f;
+      const a = active;
+      active = nextActive;
+      nextActive = a;
+      activeCount = nextCount;
+    }
+    this.frontier = frontier;
+    this.next = next;
+    this.active = active;
+    this.nextActive = nextActive;
+  }
+  /** Per-source counts of this level (bit-sliced) → perSource += count / d. */
+  drainPlanes(perSource, from, width, inv, words) {
+    const planes = this.planes;
+    for (let i = 0; i < width; i++) {
+      const word = i >>> 5;
+      const bit = i & 31;
+      let c = 0;
+      for (let p = 0; p < PLANES; p++) c += (planes[words * p + word] >>> bit & 1) * (1 << p);
+      if (c > 0) perSource[this.srcIndex[from + i]] += c * inv;
+    }
+  }
+};
+function addBits8(planes, next, at) {
+  for (let w = 0; w < 8; w++) {
+    let c = next[at + w];
+    for (let p = 0; p < PLANES && c !== 0; p++) {
+      const q = planes[8 * p + w];
+      planes[8 * p + w] = q ^ c;
+      c &= q;
+    }
+  }
+}
+function addBits(planes, x0, x1) {
+  let c0 = x0;
+  let c1 = x1;
+  for (let p = 0; p < PLANES && (c0 | c1) !== 0; p++) {
+    const q0 = planes[2 * p];
+    const q1 = planes[2 * p + 1];
+    planes[2 * p] = q0 ^ c0;
+    planes[2 * p + 1] = q1 ^ c1;
+    c0 &= q0;
+    c1 &= q1;
+  }
 }
 
 // src/metrics/kernels/union-find.ts
@@ -1708,6 +2068,7 @@ function createComponentCounter(g) {
       summary.largest = largest;
       summary.largestRoot = largestRoot;
       summary.connectedPairs = pairs;
+      kernelWork.visits += 2 * n + g.m;
       return summary;
     }
   };
@@ -1994,7 +2355,10 @@ var demandServed = {
   normalization: "served volume / total demand volume; raw = served volume.",
   cost: "linear",
   appliesTo: (g) => totalVolume(g) > 0,
-  needs: { what: "demands", hint: "declare demands (a volume > 0 between two sites) in the design, or take demand_served out of the r-value" },
+  needs: {
+    what: "demands",
+    hint: "declare demands (a volume > 0 between two sites) in the design, or take demand_served out of the r-value"
+  },
   create(g, options = {}) {
     const total = totalVolume(g);
     const budget = options.latencyBudget ?? g.latencyBudget;
@@ -2130,7 +2494,8 @@ function createBandedResistance(capacity) {
     prepare(g) {
       const n = g.n;
       let start = 0;
-      for (let v = 1; v < n; v++) if (g.offsets[v + 1] - g.offsets[v] < g.offsets[start + 1] - g.offsets[start]) start = v;
+      for (let v = 1; v < n; v++)
+        if (g.offsets[v + 1] - g.offsets[v] < g.offsets[start + 1] - g.offsets[start]) start = v;
       start = cuthillMcKee(g, start);
       cuthillMcKee(g, start);
       for (let i = 0; i < n; i++) order[i] = queue[n - 1 - i];
@@ -2248,11 +2613,27 @@ function createTraceEstimator(capacity, maxSteps) {
      * the `dc` orthonormal vectors in `defl` (packed with stride op.n).
      */
     estimate(op, f, keys, defl, dc, opts) {
+      return this.estimateWithError(op, f, keys, defl, dc, opts).mean;
+    },
+    /**
+     * The estimate and its standard error: the probes' sample standard deviation over √probes
+     * (each probe is an unbiased Hutchinson sample of the trace, up to the quadrature's error,
+     * which `tol` keeps far below it).
+     */
+    estimateWithError(op, f, keys, defl, dc, opts) {
       const n = op.n;
-      if (n - dc <= 0) return 0;
+      if (n - dc <= 0) return { mean: 0, se: 0, probes: 0 };
       const steps = Math.min(opts.steps, maxSteps, n - dc);
+      const most = opts.targetSe !== void 0 ? Math.max(opts.probes, opts.maxProbes ?? opts.probes) : opts.probes;
       let total = 0;
-      for (let p = 0; p < opts.probes; p++) {
+      let squares = 0;
+      let p = 0;
+      for (; p < most; p++) {
+        if (opts.targetSe !== void 0 && p >= opts.probes && p % opts.probes === 0) {
+          const mean2 = total / p;
+          const se2 = Math.sqrt(Math.max(0, squares / p - mean2 * mean2) / (p - 1));
+          if (se2 <= opts.targetSe(mean2)) break;
+        }
         for (let i = 0; i < n; i++) q[i] = sign(keys[i], 20903 + p);
         deflate(q, n, defl, dc);
         let nz2 = 0;
@@ -2295,8 +2676,11 @@ function createTraceEstimator(capacity, maxSteps) {
           betaPrev = beta;
         }
         total += nz2 * estimate;
+        squares += (nz2 * estimate) ** 2;
       }
-      return total / opts.probes;
+      const mean = total / p;
+      const se = p > 1 ? Math.sqrt(Math.max(0, squares / p - mean * mean) * p / (p - 1) / p) : Number.POSITIVE_INFINITY;
+      return { mean, se, probes: p };
     }
   };
 }
@@ -2345,6 +2729,73 @@ var effectiveResistance = {
   }
 };
 
+// src/graph/canonical.ts
+var WHOLE = /^[0-9]+$/;
+function compareIds(a, b) {
+  if (a === b) return 0;
+  return compareParsed(a, WHOLE.test(a) ? stripZeros(a) : null, b, WHOLE.test(b) ? stripZeros(b) : null);
+}
+function compareParsed(a, da, b, db) {
+  if (da !== null && db !== null) {
+    if (da.length !== db.length) return da.length - db.length;
+    if (da !== db) return da < db ? -1 : 1;
+  } else if (da !== null || db !== null) return da !== null ? -1 : 1;
+  return compareCodePoints(a, b);
+}
+function stripZeros(s) {
+  let i = 0;
+  while (i < s.length - 1 && s.charCodeAt(i) === 48) i++;
+  return s.slice(i);
+}
+function compareCodePoints(a, b) {
+  const n = Math.min(a.length, b.length);
+  for (let i = 0; i < n; i++) {
+    const x = a.charCodeAt(i);
+    const y = b.charCodeAt(i);
+    if (x !== y) return unitRank(x) - unitRank(y);
+  }
+  return a.length - b.length;
+}
+function unitRank(u) {
+  if (u >= 55296 && u <= 57343) return u + 8192;
+  if (u >= 57344) return u - 2048;
+  return u;
+}
+
+// src/metrics/kernels/source-sample.ts
+function sourceHash(id, seed) {
+  let h = mix32((Math.floor(seed / 4294967296) ^ 1936684402) >>> 0) ^ seed >>> 0;
+  for (let i = 0; i < id.length; i++) {
+    let k = Math.imul(id.charCodeAt(i), 3432918353);
+    k = k << 15 | k >>> 17;
+    h ^= Math.imul(k, 461845907);
+    h = h << 13 | h >>> 19;
+    h = Math.imul(h, 5) + 3864292196 | 0;
+  }
+  return mix32(h ^ id.length);
+}
+function sampleSources(ids, choice, seed) {
+  if (choice === void 0 || choice === "all") return null;
+  if (!Number.isInteger(choice) || choice < 1)
+    throw new RangeError(`sources must be a whole number of at least 1 or 'all', got ${String(choice)}`);
+  if (choice >= ids.length) return null;
+  const keys = new Uint32Array(ids.length);
+  for (let i = 0; i < ids.length; i++) keys[i] = sourceHash(ids[i], seed);
+  const order = Array.from({ length: ids.length }, (_, i) => i);
+  order.sort((a, b) => keys[a] - keys[b] || compareIds(ids[a], ids[b]));
+  return Int32Array.from(order.slice(0, choice)).sort();
+}
+function sampleMean(y, k, population) {
+  let sum = 0;
+  for (let i = 0; i < k; i++) sum += y[i];
+  const mean = sum / k;
+  if (k < 2) return { mean, se: Number.POSITIVE_INFINITY };
+  let ss = 0;
+  for (let i = 0; i < k; i++) ss += (y[i] - mean) * (y[i] - mean);
+  const variance = ss / (k - 1);
+  return { mean, se: Math.sqrt(Math.max(0, 1 - k / population) * (variance / k)) };
+}
+
 // src/metrics/efficiency.ts
 var efficiency = {
   id: "efficiency",
@@ -2352,12 +2803,36 @@ var efficiency = {
   normalization: "Already in [0, 1] with N0 in the denominator; 1 only for a complete graph.",
   cost: "all-pairs",
   appliesTo: () => true,
-  create(g) {
+  create(g, options = {}) {
     const survivors = createSurvivorBuilder(g, true);
     const bfs = createHopHistogram(g.n);
+    const pairs = g.n * (g.n - 1);
+    const sample = sampleSources(g.nodeIds, options.sources, options.sourceSeed ?? 0);
+    if (sample) {
+      const k = sample.length;
+      const local = new Int32Array(k);
+      const at = new Int32Array(k);
+      const sums = new Float64Array(k);
+      const y = new Float64Array(k);
+      return (mask) => {
+        const graph = survivors(mask);
+        let alive = 0;
+        for (let i = 0; i < k; i++) {
+          const v = graph.toLocal[sample[i]];
+          if (v >= 0) {
+            local[alive] = v;
+            at[alive++] = i;
+          }
+        }
+        y.fill(0);
+        bfs.run(graph, local, alive, sums);
+        for (let i = 0; i < alive; i++) y[at[i]] = sums[i] / (g.n - 1);
+        const { mean, se } = sampleMean(y, k, g.n);
+        return { raw: mean, normalized: Math.min(1, Math.max(0, mean)), se };
+      };
+    }
     const sources = new Int32Array(g.n);
     for (let i = 0; i < g.n; i++) sources[i] = i;
-    const pairs = g.n * (g.n - 1);
     return (mask) => {
       if (pairs === 0) return { raw: 0, normalized: 0 };
       const local = survivors(mask);
@@ -2433,7 +2908,8 @@ function createFlowNetwork(nodeCapacity, entryCapacity) {
         if (split) addPair(2 * v, 2 * v + 1, 1, 0);
         for (let p = graph.offsets[v]; p < graph.offsets[v + 1]; p++) {
           const w = graph.neighbors[p];
-          if (split) addPair(2 * v + 1, 2 * w, 1, 0);
+          if (split)
+            addPair(2 * v + 1, 2 * w, 1, 0);
           else if (v < w) addPair(v, w, 1, 1);
         }
       }
@@ -2599,7 +3075,10 @@ var linkConnectivity = {
 // src/metrics/natural-connectivity.ts
 var DEFLATE = 8;
 var PROBES2 = 32;
+var MAX_PROBES = 256;
+var NATURAL_DENSE_LIMIT = 2e3;
 var STEPS2 = 40;
+var STATED_ERROR = 1e-3;
 function naturalConnectivityOfComplete(n) {
   if (n <= 1) return 0;
   return n - 1 + Math.log1p((n - 1) * Math.exp(-n)) - Math.log(n);
@@ -2617,7 +3096,7 @@ var naturalConnectivity = {
   cost: "spectral",
   appliesTo: () => true,
   create(g, options = {}) {
-    const limit = Math.min(g.n, options.denseLimit ?? TRACE_DENSE_LIMIT);
+    const limit = Math.min(g.n, options.denseLimit ?? NATURAL_DENSE_LIMIT);
     const spectral = createSpectralSurvivors(g);
     const dense = createDenseSpectrum(limit);
     const big = g.n > limit;
@@ -2626,12 +3105,15 @@ var naturalConnectivity = {
     const op = createAdjacencyOperator();
     const deflation = big ? new Float64Array(DEFLATE * g.n) : new Float64Array(0);
     const best = naturalConnectivityOfComplete(g.n);
+    const relSe = new Float64Array(big ? g.n : 0);
+    const logOf = new Float64Array(big ? g.n : 0);
     return (mask) => {
       const local = spectral.survivors(mask);
       if (local.n === 0) return { raw: 0, normalized: 0 };
       const comps = spectral.components(local);
       let logTotal = -Infinity;
       let isolated = 0;
+      let estimated = 0;
       for (let c = 0; c < comps.count; c++) {
         const size = comps.start[c + 1] - comps.start[c];
         if (size === 1) {
@@ -2656,18 +3138,32 @@ var naturalConnectivity = {
             s += Math.exp(r.values[j] - top);
             deflation.set(r.vectors.subarray(j * r.stride, j * r.stride + size), j * size);
           }
-          s += slq.estimate(op, (x) => Math.exp(x - top), spectral.keysOf(part), deflation, r.found, {
+          const exact = s;
+          const est = slq.estimateWithError(op, (x) => Math.exp(x - top), spectral.keysOf(part), deflation, r.found, {
             probes: PROBES2,
+            maxProbes: MAX_PROBES,
             steps: STEPS2,
-            tol: 1e-10
+            tol: 1e-10,
+            targetSe: (mean) => {
+              const sum = exact + mean;
+              const guess = Math.max(1e-6, top + Math.log(sum) - Math.log(local.n));
+              return STATED_ERROR / 2 * guess * sum;
+            }
           });
+          s += est.mean;
           logPart = top + Math.log(s);
+          relSe[estimated] = est.se / s;
+          logOf[estimated++] = logPart;
         }
         logTotal = logAdd(logTotal, logPart);
       }
       if (isolated > 0) logTotal = logAdd(logTotal, Math.log(isolated));
       const lambda = Math.max(0, logTotal - Math.log(local.n));
-      return { raw: lambda, normalized: best > 0 ? Math.min(1, lambda / best) : 0 };
+      const normalized = best > 0 ? Math.min(1, lambda / best) : 0;
+      if (estimated === 0) return { raw: lambda, normalized };
+      let v = 0;
+      for (let i = 0; i < estimated; i++) v += (Math.exp(logOf[i] - logTotal) * relSe[i]) ** 2;
+      return { raw: lambda, normalized, se: Math.sqrt(v) };
     };
   }
 };
@@ -2718,7 +3214,12 @@ var spectralRadius = {
   appliesTo: () => true,
   create(g, options = {}) {
     const spectral = createSpectralSurvivors(g);
-    const solve = createExtremalSolver(g, "radius", options.denseLimit ?? EXTREMAL_DENSE_LIMIT, options.warmStart ?? false);
+    const solve = createExtremalSolver(
+      g,
+      "radius",
+      options.denseLimit ?? EXTREMAL_DENSE_LIMIT,
+      options.warmStart ?? false
+    );
     return (mask) => {
       const local = spectral.survivors(mask);
       const comps = spectral.components(local);
@@ -2760,7 +3261,10 @@ var weightedEfficiency = {
   normalization: "E_w / E_ideal, ideal = every pair joined directly (great-circle distance, at least the cheapest link).",
   cost: "all-pairs",
   appliesTo: (g) => chooseLinkCost(g) !== null,
-  needs: { what: "a latency, length or weight > 0 on every link", hint: "give every link latency_ms or length_km, or take weighted_efficiency out of the r-value" },
+  needs: {
+    what: "a latency, length or weight > 0 on every link",
+    hint: "give every link latency_ms or length_km, or take weighted_efficiency out of the r-value"
+  },
   create(g) {
     const cost = chooseLinkCost(g);
     if (!cost) throw new RangeError("weighted_efficiency needs latency, length or weight on every link");
@@ -2816,7 +3320,8 @@ function getMetric(id) {
 function validateRSpec(spec) {
   if (spec.metrics.length === 0) throw new RangeError("the R-value needs at least one metric");
   for (const m of spec.metrics) {
-    if (!(m.weight > 0) || !Number.isFinite(m.weight)) throw new RangeError(`metric ${m.id}: weight must be > 0, got ${m.weight}`);
+    if (!(m.weight > 0) || !Number.isFinite(m.weight))
+      throw new RangeError(`metric ${m.id}: weight must be > 0, got ${m.weight}`);
   }
   if (spec.combine !== "mean" && spec.combine !== "min") throw new RangeError(`combine must be "mean" or "min"`);
 }
@@ -2947,6 +3452,7 @@ function connectivityCurve(g, kind, order, count, ws = createUnionFindWorkspace(
     out.lcc[i] = st.lcc;
     out.pairs[i] = st.pairs;
   }
+  kernelWork.visits += 2 * g.n + g.m + count;
   return out;
 }
 function join(st, parent, size, a, b) {
@@ -3043,7 +3549,9 @@ function searchWorstCase(g, kind, k, rfn, options) {
     }
     if (candidates.length === 0) break;
     for (const c of candidates) c.key = [...c.parent.seq, c.u].sort((x, y) => x - y).join(",");
-    candidates.sort((x, y) => x.r - y.r || compareKeys(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u]));
+    candidates.sort(
+      (x, y) => x.r - y.r || compareKeys(x.key, y.key) || compareSeq([...x.parent.seq, x.u], [...y.parent.seq, y.u])
+    );
     const next = [];
     const seen = /* @__PURE__ */ new Set();
     for (const c of candidates) {

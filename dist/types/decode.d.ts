@@ -11,3 +11,5 @@ export declare function firstInvalidUtf8(b: Uint8Array, from?: number): number;
  * file looks like.
  */
 export declare function decodeText(bytes: Uint8Array, file: string): string;
+/** The length of `text` in UTF-8 bytes (GitHub's summary limit and the design size limit count bytes). */
+export declare function utf8Length(text: string): number;

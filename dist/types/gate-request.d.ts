@@ -91,13 +91,13 @@ export interface GateResult {
 export declare function evaluationSpecs(fp: FilePolicy, seed: number): EvaluationSpec[];
 export declare function evaluateGraph(g: CompactGraph, topology: Topology | undefined, specs: EvaluationSpec[], cuts: readonly PairedCut[], request: GateRequest, deps: GateDeps): Promise<DesignSide>;
 /**
- * Estimated work (element visits, unreduced) above which a design runs sequentially: about 20 s
+ * Estimated work (element visits, unreduced) above which a design runs sequentially: about 10 s
  * at the budget's fixed rate (policy/budget.ts). Below it every realization the policy asks
  * for is cheap, so all of them run and are judged as one fixed sample (§7.3–7.4); above it,
  * batches with confidence sequences (§7.6), so that large designs stop as soon as they are
  * decided instead of running into the budget.
  */
-export declare const SEQUENTIAL_MIN_WORK = 1000000000;
+export declare const SEQUENTIAL_MIN_WORK = 500000000;
 /** Whether a design runs in batches under the sequential stopping rule (request.sequential overrides). */
 export declare function sequentialRun(request: GateRequest, specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): boolean;
 /**

@@ -1,6 +1,6 @@
 import { type CompareInput } from './gate/compare.js';
 import type { FileReport } from './report/report.js';
-import { type GateDeps, type GateRequest, type Revision } from './run-gate.js';
+import { type GateDeps, type GateRequest, type Revision } from './gate-request.js';
 /** Default most evaluations of mended designs, and the share of the design's budget they may use together. */
 export declare const MEND_MAX_EVALUATIONS = 10;
 export declare const MEND_BUDGET_FACTOR = 4;

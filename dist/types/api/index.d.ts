@@ -1,6 +1,6 @@
 import type { FileReport, Report } from '../report/report.js';
 import type { ParseOptions, Topology } from '../topology/model.js';
-export { toGraph, fromGraph, type DesignGraph, type NodeAttributes, type LinkAttributes, type DesignAttributes, type FromGraphOptions } from './graph.js';
+export { toGraph, fromGraph, type DesignGraph, type NodeAttributes, type LinkAttributes, type DesignAttributes, type FromGraphOptions, } from './graph.js';
 export type { Topology, TopoNode, TopoLink, RiskGroup, Demand, DesignFormat } from '../topology/model.js';
 export type { Report, FileReport, Finding, RequirementResult, Evaluation } from '../report/report.js';
 export { serializeReport } from '../report/report.js';

@@ -1,5 +1,5 @@
 import type { CompactGraph } from '../graph/compact.js';
-import type { ChallengeName, ChallengeParams } from '../envelope/types.js';
+import type { ChallengeName, ChallengeParams } from './types.js';
 import type { Challenge, ResolvedParams } from './types.js';
 export declare const challenges: readonly Challenge[];
 export declare function getChallenge(name: ChallengeName): Challenge;

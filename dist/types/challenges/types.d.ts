@@ -1,6 +1,27 @@
 import type { CompactGraph } from '../graph/compact.js';
 import type { Mask } from '../graph/mask.js';
-import type { ChallengeName, ElementKind } from '../envelope/types.js';
+import type { ElementKind } from '../graph/element.js';
+/** Every challenge the engine runs, by name (registry.ts holds one per name). */
+export type ChallengeName = 'random-nodes' | 'random-links' | 'degree' | 'degree-adaptive' | 'betweenness' | 'betweenness-adaptive' | 'eigenvector' | 'closeness' | 'link-betweenness' | 'link-betweenness-adaptive' | 'risk-groups' | 'risk-groups-worst' | 'regional' | 'n-1' | 'n-2';
+export interface ChallengeParams {
+    challenge: ChallengeName;
+    /** Upper end of the x axis: a fraction in (0, 1] for removal challenges, km for `regional`. */
+    until?: number;
+    /** Grid points on the x axis, 0 included. */
+    points?: number;
+    realizations?: number;
+    /** Quantiles of the band, e.g. [0.1, 0.9]. */
+    band?: [number, number];
+    seed?: number;
+    /** Length of the worst-case search (0 = none). */
+    worstCase?: number;
+    /** Beam width of the worst-case search beyond exact enumeration (1 = greedy, the default). */
+    beam?: number;
+    /** For n-1 / n-2: which kind of element. */
+    element?: 'node' | 'link';
+    /** x values that must be grid points (policy thresholds), merged into the grid. */
+    at?: number[];
+}
 interface ChallengeInfo {
     readonly name: ChallengeName;
     /** One line for `netbrace envelope --help` and the README. */

@@ -1,6 +1,6 @@
 import type { CompactGraph } from '../graph/compact.js';
 import type { Mask } from '../graph/mask.js';
-import type { ElementKind } from '../envelope/types.js';
+import type { ElementKind } from '../graph/element.js';
 export declare function unitCount(g: CompactGraph, kind: ElementKind): number;
 /** Display ids (what reports show). */
 export declare function unitIds(g: CompactGraph, kind: ElementKind): readonly string[];

@@ -1,6 +1,8 @@
 import type { CompactGraph } from '../graph/compact.js';
 import type { BandPlan, ResolvedParams } from '../challenges/types.js';
-import type { ChallengeName, Contingency, ElementKind, RValueSpec, WorstCase } from './types.js';
+import type { Contingency, RValueSpec, WorstCase } from './types.js';
+import type { ChallengeName } from '../challenges/types.js';
+import type { ElementKind } from '../graph/element.js';
 import { type RFunction } from './r-value.js';
 /**
  * Realizations per band task: about 32 tasks per band (so two or four threads stay evenly
@@ -8,6 +10,13 @@ import { type RFunction } from './r-value.js';
  * part of what makes results thread-count independent.
  */
 export declare function chunkSize(realizations: number): number;
+/**
+ * Realizations per batch of a sequential run (the gate adds batches until its decisions are
+ * settled, gate/sequential.ts). Band tasks are also cut at every multiple of BATCH, so a
+ * realization's value depends on its index and the policy's count alone, never on how many
+ * batches ran.
+ */
+export declare const BATCH = 32;
 export interface PlannedChallenge {
     params: ResolvedParams;
     type: 'band' | 'attack' | 'contingency';

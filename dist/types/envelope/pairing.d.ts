@@ -1,4 +1,4 @@
-import type { ChallengeName } from './types.js';
+import type { ChallengeName } from '../challenges/types.js';
 import type { DesignEvaluation } from './evaluate.js';
 export type Statistic = {
     kind: 'quantile';

@@ -1,5 +1,7 @@
 import type { MetricId } from '../metrics/types.js';
-import type { Consequence, ReportElement } from '../report/report.js';
+import type { ChallengeName } from '../challenges/types.js';
+import type { Consequence } from '../graph/consequence.js';
+import type { ElementKind, ReportElement } from '../graph/element.js';
 /** How normalized metrics combine into R. */
 export interface RValueSpec {
     metrics: {
@@ -7,28 +9,6 @@ export interface RValueSpec {
         weight: number;
     }[];
     combine: 'mean' | 'min';
-}
-export type ChallengeName = 'random-nodes' | 'random-links' | 'degree' | 'degree-adaptive' | 'betweenness' | 'betweenness-adaptive' | 'eigenvector' | 'closeness' | 'link-betweenness' | 'link-betweenness-adaptive' | 'risk-groups' | 'risk-groups-worst' | 'regional' | 'n-1' | 'n-2';
-export type ElementKind = 'node' | 'link' | 'group';
-export interface ChallengeParams {
-    challenge: ChallengeName;
-    /** Upper end of the x axis: a fraction in (0, 1] for removal challenges, km for `regional`. */
-    until?: number;
-    /** Grid points on the x axis, 0 included. */
-    points?: number;
-    realizations?: number;
-    /** Quantiles of the band, e.g. [0.1, 0.9]. */
-    band?: [number, number];
-    seed?: number;
-    /** Length of the worst-case search (0 = none). */
-    worstCase?: number;
-    /** Beam width of the worst-case search beyond exact enumeration (1 = greedy, the default). */
-    beam?: number;
-    /** For n-1 / n-2: which kind of element. */
-    element?: 'node' | 'link';
-    threads?: number;
-    /** x values that must be grid points (policy thresholds), merged into the grid. */
-    at?: number[];
 }
 /** A removal sequence reported to the user: element ids in removal order. */
 export interface RemovalSequence {
@@ -71,6 +51,8 @@ export interface Envelope {
     xUnit: 'fraction' | 'km';
     x: number[];
     realizations: number;
+    /** Set when a sequential run stopped before the realizations its plan allowed: that count. */
+    maxRealizations?: number;
     seed: number;
     band: [number, number];
     min: number[];
@@ -130,8 +112,25 @@ export interface Contingency {
     /** Lowest R over evaluated cases. */
     min: number;
 }
-/** A paired difference head − base with its standard error. */
-export interface PairedDelta {
-    delta: number;
-    se: number;
+export interface StructureSummary {
+    nodes: number;
+    links: number;
+    components: number;
+    bridges: ReportElement[];
+    cutNodes: ReportElement[];
+}
+/** Everything evaluated on one side (base or head) of one design. */
+export interface Evaluation {
+    r: RValueSpec;
+    structure: StructureSummary;
+    envelopes: Envelope[];
+    attacks: AttackCurve[];
+    contingencies: Contingency[];
+    /** Reasons the evaluation was reduced by budgets; empty when it ran in full. */
+    degraded: string[];
+    /** Challenges that do not apply to this design (it lacks coordinates, risk groups...), with why; absent when all applied. */
+    notApplicable?: {
+        challenge: ChallengeName;
+        reason: string;
+    }[];
 }

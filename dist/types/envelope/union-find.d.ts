@@ -1,5 +1,5 @@
 import type { CompactGraph } from '../graph/compact.js';
-import type { ElementKind } from './types.js';
+import type { ElementKind } from '../graph/element.js';
 export interface ConnectivityCurve {
     /** Size of the largest component after k removals, k = 0..K. */
     lcc: Float64Array;

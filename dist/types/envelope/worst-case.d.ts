@@ -1,5 +1,6 @@
 import type { CompactGraph } from '../graph/compact.js';
-import type { ElementKind, WorstCase } from './types.js';
+import type { WorstCase } from './types.js';
+import type { ElementKind } from '../graph/element.js';
 import type { RFunction } from './r-value.js';
 export interface WorstCaseOptions {
     /** Largest number of subsets the exact search may evaluate. */

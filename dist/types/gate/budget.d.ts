@@ -1,5 +1,5 @@
 import { type DesignEvaluation, type EvaluationSpec } from '../envelope/evaluate.js';
-import type { ChallengeName } from '../envelope/types.js';
+import type { ChallengeName } from '../challenges/types.js';
 import type { CompactGraph } from '../graph/compact.js';
 /** A random challenge both sides run with fewer realizations than asked. */
 export interface PairedCut {

@@ -2,7 +2,8 @@ import type { CompactGraph } from '../graph/compact.js';
 import { type Mask } from '../graph/mask.js';
 import { type Components } from '../graph/structure.js';
 import type { RemovalSequence } from '../envelope/types.js';
-import type { Consequence, Evaluation } from '../report/report.js';
+import type { Consequence } from '../graph/consequence.js';
+import type { Evaluation } from '../envelope/types.js';
 /** Sites a consequence lists by name; the count says how many there are in all. */
 export declare const MAX_STRANDED = 20;
 /**

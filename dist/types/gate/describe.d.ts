@@ -1,10 +1,12 @@
 import type { CompactGraph } from '../graph/compact.js';
+import { formatDelta, formatFixed } from '../report/format.js';
 import type { ChallengeDef, Requirement } from '../policy/types.js';
-import type { AttributeChange, FileReport, ReportElement } from '../report/report.js';
+import type { AttributeChange, FileReport } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
 import type { Topology } from '../topology/model.js';
 import type { Matching } from './rename.js';
 /** R values and deltas: three decimals (or more when asked), a true minus sign, no "-0.000". */
-export declare function formatR(x: number, decimals?: number): string;
+export declare const formatR: typeof formatFixed;
 /**
  * The fewest decimals (at least `min`) at which `a` and `b` print differently, so that a message
  * shows the digits that decide (a drop of 0.0104 against an allowance of 0.010 prints as 0.0104
@@ -19,8 +21,8 @@ export declare function decidingDecimals(a: number, b: number, min?: number): nu
  * shown numbers and reach the opposite verdict. `drop` = base − head when higher is better.
  */
 export declare function changeDecimals(base: number, head: number, higherIsBetter: boolean, limit: number): number;
-/** A signed delta with its standard error, both at `decimals` decimals: "−0.0104 ± 0.0020". */
-export declare function formatDelta(delta: number, se: number | null, decimals?: number): string;
+/** A signed delta with its standard error, both at `decimals` decimals: "−0.0104 ± 0.0020" (report/format.ts). */
+export { formatDelta };
 /** One line naming what a requirement judges, e.g. `10 % quantile of R at 20 % of nodes removed, "fail" (random nodes) ≥ 0.6`. */
 export declare function describeRequirement(r: Requirement, challenges: readonly ChallengeDef[]): string;
 export type ElementChanges = NonNullable<FileReport['changes']>;

@@ -1,7 +1,7 @@
-import { type DesignEvaluation } from '../envelope/evaluate.js';
-import type { ElementKind } from '../envelope/types.js';
+import type { DesignEvaluation } from '../envelope/evaluate.js';
+import type { ElementKind } from '../graph/element.js';
 import type { CompactGraph } from '../graph/compact.js';
-import type { ReportElement } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
 import type { ChallengeDef, Requirement } from '../policy/types.js';
 import type { Topology } from '../topology/model.js';
 /** One side of a comparison: the compiled design and what the engine made of it. */

@@ -6,9 +6,6 @@ export interface Mask {
     readonly link: Uint8Array;
 }
 export declare function createMask(g: CompactGraph): Mask;
-export declare function clearMask(mask: Mask): void;
 export declare function copyMask(from: Mask, to: Mask): void;
 /** A link carries traffic iff it and both of its ends are present. */
 export declare function isLinkAlive(g: CompactGraph, mask: Mask, e: number): boolean;
-export declare function countAliveNodes(mask: Mask): number;
-export declare function countAliveLinks(g: CompactGraph, mask: Mask): number;

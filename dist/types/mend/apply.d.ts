@@ -1,5 +1,5 @@
 import { type CompactGraph } from '../graph/compact.js';
-import type { ReportElement } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
 import { type DesignFormat, type Topology } from '../topology/model.js';
 import type { MendLink } from './types.js';
 export interface Change {

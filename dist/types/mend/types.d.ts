@@ -1,4 +1,5 @@
-import type { FileStatus, Finding, ReportElement, RequirementResult } from '../report/report.js';
+import type { FileStatus, Finding, RequirementResult } from '../report/report.js';
+import type { ReportElement } from '../graph/element.js';
 /** A finding the suggestions aim to remove, named so that two runs can be compared. */
 export interface MendTarget {
     /** Stable key: rule, requirement and element ids. */

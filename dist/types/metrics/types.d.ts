@@ -12,6 +12,12 @@ export interface MetricValue {
     raw: number;
     /** In [0, 1]; 1 = the best the metric can say, 0 = no robustness left. */
     normalized: number;
+    /**
+     * Standard error of `raw` (and of `normalized`, the same scale for the metrics that sample)
+     * when the value is an estimate from sampled sources (`MetricOptions.sources`); absent when
+     * the value is exact.
+     */
+    se?: number;
 }
 export interface MetricOptions {
     /** Latency budget factor for demand_served (overrides the design's). */
@@ -35,6 +41,15 @@ export interface MetricOptions {
      * value is a pure function of the graph and the mask, whatever the thread count.
      */
     warmStart?: boolean;
+    /**
+     * efficiency: search from every node ('all', the default) or from a seeded sample of this
+     * many nodes (kernels/source-sample.ts): the value is then the unbiased sample estimate and
+     * `se` its standard error. The sample depends only on `sourceSeed` and the node ids, so base
+     * and head share their sources and an unchanged design gives the same value exactly.
+     */
+    sources?: number | 'all';
+    /** Seed of the source sample (default 0); pass the policy's seed. */
+    sourceSeed?: number;
 }
 /** An evaluator bound to one graph; reuse it for every mask. */
 export type MetricEvaluator = (mask: Mask) => MetricValue;

@@ -1,5 +1,6 @@
 import type { SourceLocation } from '../errors.js';
-import type { ChallengeName, ChallengeParams, RValueSpec } from '../envelope/types.js';
+import type { RValueSpec } from '../envelope/types.js';
+import type { ChallengeName, ChallengeParams } from '../challenges/types.js';
 import type { Severity } from '../report/report.js';
 import type { DesignFormat } from '../topology/model.js';
 export type { Severity };
@@ -88,7 +89,6 @@ export interface SpofRequirement extends RequirementBase {
     hardenedWhere?: Where;
 }
 export type Requirement = ThresholdRequirement | AreaRequirement | SpreadRequirement | ContingencyRequirement | SpofRequirement;
-export type RequirementKind = Requirement['kind'];
 export interface WeakeningRule {
     /** Largest drop tolerated, in units of R (absolute). */
     allowedDrop?: number;

@@ -1,25 +1,21 @@
-import type { ChallengeName, ElementKind } from '../envelope/types.js';
+import type { ChallengeName } from '../challenges/types.js';
+import type { ElementKind } from '../graph/element.js';
 import type { AttributeChange, Consequence, FileReport, FileStatus, Finding, ReportElement, Report, RequirementResult } from './report.js';
+export { formatDelta, formatError, formatValue, shortRevision } from './format.js';
+export { REQUIREMENT_STATUS_WORD, fileFails, fileWarns } from './vocabulary.js';
+export declare const STATUS_WORD: Record<FileStatus, string>;
 export declare function challengeLabel(c: ChallengeName): string;
 export declare function kindPlural(k: ElementKind): string;
 export declare function kindSingular(k: ElementKind): string;
 /** The x-axis caption of an envelope chart. */
 export declare function xAxisLabel(kind: ElementKind, xUnit: 'fraction' | 'km'): string;
-/** A value of R or a metric: three decimals, a real minus sign, "–" when absent. */
-export declare function formatValue(v: number | null | undefined): string;
 /** Whether a requirement counts things (bridges, cut nodes): shown as whole numbers. */
 export declare function isCountRequirement(r: RequirementResult): boolean;
 /** A requirement's value: whole numbers for counts, else as formatValue. */
 export declare function formatRequirementValue(r: RequirementResult, v: number | null): string;
 /** A requirement's delta: signed whole numbers for counts, else as formatDelta. */
 export declare function formatRequirementDelta(r: RequirementResult): string;
-/** A signed delta: "+0.012", "\u22120.040", "0.000" for an exact zero (never "\u22120.000"). */
-export declare function formatDelta(v: number | null | undefined): string;
-/** "\u00b1 0.004" for a Monte Carlo error; empty for deterministic values (se 0) and absent ones. */
-export declare function formatError(se: number | null | undefined): string;
 export declare function formatFraction(x: number): string;
-export declare const STATUS_WORD: Record<FileStatus, string>;
-export declare const REQUIREMENT_STATUS_WORD: Record<RequirementResult['status'], string>;
 /** A file's status in words; an error whose R cannot be computed is not "could not be read". */
 export declare function fileStatusWord(f: FileReport): string;
 /** "2 pass, 1 could not be read": the report's counts in words, errors told apart by fileStatusWord. */
@@ -34,10 +30,6 @@ export declare function describeNotApplicable(ev: {
         reason: string;
     }[];
 } | undefined): string | undefined;
-/** Whether a file, on its own, fails the gate: any fail-severity finding, or an error. */
-export declare function fileFails(f: FileReport): boolean;
-/** Whether a file has warnings (and no failure). */
-export declare function fileWarns(f: FileReport): boolean;
 /**
  * id → element (line, label) for every element the file's report names: findings first, then
  * structure, sequences and what they strand, then the change list. Keyed by kind and id.
@@ -104,8 +96,6 @@ export type GroupedFinding = Finding & {
 export declare function bySeverity<T extends Finding>(findings: readonly T[]): T[];
 /** New bridges and cut nodes (and weak points hidden by hardening) of one severity read best as one list: merge their findings. */
 export declare function groupFindings(findings: readonly Finding[]): GroupedFinding[];
-/** A revision for display: a full commit id shortened to 12 hex digits, anything else as given. */
-export declare function shortRevision(rev: string | undefined): string;
 /**
  * The change edits the gate's own configuration: one sentence per setting of the workflow that
  * runs netbrace, and one for the policy files; shown at the top of every view.

@@ -1,34 +1,12 @@
-import type { AttackCurve, ChallengeName, Contingency, Envelope, RValueSpec } from '../envelope/types.js';
+import type { Consequence } from '../graph/consequence.js';
+import type { ReportElement } from '../graph/element.js';
+import type { Evaluation, StructureSummary } from '../envelope/types.js';
 import type { DesignMap, OmittedMap } from '../map/types.js';
 import type { MendReport } from '../mend/types.js';
+export type { Consequence, Evaluation, ReportElement, StructureSummary };
 export declare const REPORT_VERSION = 1;
 export type FileStatus = 'holds' | 'weakened' | 'below-floor' | 'new' | 'removed' | 'renamed' | 'unreadable';
 export type Severity = 'fail' | 'warn' | 'notice';
-export interface ReportElement {
-    id: string;
-    kind: 'node' | 'link' | 'group';
-    /** 1-based line in the design file (head side unless the element only exists at base). */
-    line: number;
-    /** The site's name in the design (GraphML/GML `label` or `name`, our `label`), when it has one. */
-    label?: string;
-}
-/**
- * What losing an element (or a whole removal sequence) costs, on connectivity alone: the
- * surviving sites cut off from the largest part and, when the design has demands, the demands
- * whose two ends no longer share a part (latency budgets are not considered here).
- */
-export interface Consequence {
-    /** Surviving sites cut off from the largest part, in file order (at most MAX_STRANDED listed). */
-    stranded: ReportElement[];
-    /** How many sites are cut off (the list may be shorter). */
-    strandedCount: number;
-    /** Demands that were connected and lose every path, and how many demands the design has. */
-    demandsLost?: number;
-    demandsTotal?: number;
-    /** Their volume, and the volume of all demands (the design's own unit). */
-    volumeLost?: number;
-    volumeTotal?: number;
-}
 /** One requirement of the policy, judged on one file: the rows of the requirement table. */
 export interface RequirementResult {
     /** Stable id, e.g. "threshold:random-nodes@0.2:q0.1" or "no-new-spof". */
@@ -49,6 +27,44 @@ export interface RequirementResult {
      *  judged with enough confidence (never reported as holds); not-applicable: a tracked value
      *  (no floor) whose challenge does not apply to the design on either side (no risk groups). */
     status: 'holds' | 'short' | 'weakened' | 'inside-error' | 'unsettled' | 'not-applicable';
+    /** Realizations the decision needed (sequential runs, random challenges): see docs/METHODS.md §7.6. */
+    realizations?: number;
+    /** Confidence-sequence bounds of the head value and of the change after the realizations that ran. */
+    bounds?: {
+        head?: {
+            lo: number;
+            hi: number;
+        };
+        delta?: {
+            lo: number;
+            hi: number;
+        };
+    };
+    /** What the requirement measures, as data, so that views word it themselves. */
+    subject?: RequirementSubject;
+    /** Decimals at which base, head and delta decide the judging (at least 3); absent: 3. */
+    decimals?: number;
+}
+/** What a requirement measures: the parts its words are made from. */
+export interface RequirementSubject {
+    kind: 'r-threshold' | 'area-floor' | 'spread-ceiling' | 'n-1' | 'no-new-spof';
+    /** What the challenge removes (for N−1: the element kind, as "nodes" or "links"). */
+    remove?: 'nodes' | 'links' | 'risk-groups' | 'region';
+    /** The policy's name for the challenge. */
+    challenge?: string;
+    /** "random", or the order of a targeted attack ("degree", "betweenness", …). */
+    order?: string;
+    adaptive?: boolean;
+    /** The removal fraction (or radius in km for regions) the value is read at. */
+    at?: number;
+    /** Which statistic of the envelope: a quantile q, the median, mean, minimum, worst case of k removals, or the one value of a curve. */
+    statistic?: {
+        kind: 'quantile' | 'median' | 'mean' | 'min' | 'worst-case' | 'value';
+        q?: number;
+        removals?: number;
+    };
+    /** Whether a higher value is better (false for a spread ceiling and for counts of weak points). */
+    higherIsBetter: boolean;
 }
 export interface Finding {
     /** Finding kind; also the SARIF rule id (stable). */
@@ -71,6 +87,8 @@ export interface Finding {
     threshold?: number;
     /** The drop the regression rule allows for this requirement (head − base beyond it regresses). */
     allowance?: number;
+    /** Decimals at which the numbers above decide the judging (at least 3); absent: 3. */
+    decimals?: number;
     /** Elements that cause the finding, in order (a weakest sequence is ordered). */
     elements: ReportElement[];
     /** Line to annotate: the first element's, or the error's. */
@@ -99,28 +117,6 @@ export interface AttributeChange {
     baseLine: number;
     headLine: number;
 }
-export interface StructureSummary {
-    nodes: number;
-    links: number;
-    components: number;
-    bridges: ReportElement[];
-    cutNodes: ReportElement[];
-}
-/** Everything evaluated on one side (base or head) of one design. */
-export interface Evaluation {
-    r: RValueSpec;
-    structure: StructureSummary;
-    envelopes: Envelope[];
-    attacks: AttackCurve[];
-    contingencies: Contingency[];
-    /** Reasons the evaluation was reduced by budgets; empty when it ran in full. */
-    degraded: string[];
-    /** Challenges that do not apply to this design (it lacks coordinates, risk groups...), with why; absent when all applied. */
-    notApplicable?: {
-        challenge: ChallengeName;
-        reason: string;
-    }[];
-}
 export interface FileReport {
     path: string;
     /** For renamed files: the base-side path. */
@@ -137,6 +133,13 @@ export interface FileReport {
         line: number;
         column: number;
     };
+    /** What reading the head design warned of, at its line (the first DESIGN_WARNINGS_KEPT). */
+    warnings?: {
+        message: string;
+        line: number;
+        column: number;
+        hint?: string;
+    }[];
     /**
      * What the change does: elements added and removed (nodes by id or, renamed, by neighbourhood;
      * links by their ends; shared-risk groups by id or members; head lines for added, base lines
@@ -180,6 +183,8 @@ export interface Report {
         files?: string[];
         /** A plain sentence about the policy, e.g. why a changed policy was not applied. */
         note?: string;
+        /** What the head's policy would judge differently, when the change modifies the policy. */
+        changes?: PolicyChange[];
     };
     base?: string;
     head?: string;
@@ -194,6 +199,11 @@ export interface Report {
         total: number;
         joined: number[];
     };
+    /**
+     * A part run's share of the designs split across the parts (gate/split.ts): the realizations
+     * it ran, for the join to judge them. Never in a whole run's or a joined report.
+     */
+    split?: SplitDesign[];
     /**
      * The change edits the gate's own configuration: the workflow that runs netbrace (settings
      * compared with the base's; a weakening fails the check unless the base already allowed it).
@@ -217,6 +227,22 @@ export interface Report {
     /** The plain statement that the tool informs engineering judgement and does not replace it. */
     caution: string;
 }
+/** One way the head's policy differs from the policy that judged the change. */
+export interface PolicyChange {
+    /** A requirement's id, or "weakening" (the rule for drops) or "removed-designs". */
+    subject: string;
+    /** The key that differs: "min", "max", "severity", "allowed-drop", "allowed-relative-drop", "error-multiple", "requirement" (added or dropped), … */
+    key: string;
+    effect: 'loosens' | 'tightens';
+    /** The value in the judging policy and in the head's (null: absent). */
+    base: string | number | null;
+    head: string | number | null;
+    /** Where the head's value is written (the policy file and line; line 0 when it was dropped). */
+    file: string;
+    line: number;
+}
+/** Design warnings a file report keeps; `netbrace inspect` lists them all. */
+export declare const DESIGN_WARNINGS_KEPT = 50;
 export declare const CAUTION: string;
 /** Significant digits kept in the JSON report: enough for any R, few enough that engines that
  *  differ in the last bits of Math.exp/log still write the same bytes (docs/METHODS.md §7.5). */
@@ -224,3 +250,17 @@ export declare const REPORT_DIGITS = 12;
 /** The report as JSON: stable key order (construction order), numbers rounded to REPORT_DIGITS
  *  significant digits, non-finite numbers as null, two-space indent, final newline. */
 export declare function serializeReport(report: Report): string;
+/** One design split across parts: this part's band realizations, exact (float64 LE, base64). */
+export interface SplitDesign {
+    path: string;
+    /** Realizations of its largest band in all parts together. */
+    realizations: number;
+    samples: {
+        side: 'head' | 'base';
+        challenge: string;
+        from: number;
+        to: number;
+        points: number;
+        values: string;
+    }[];
+}

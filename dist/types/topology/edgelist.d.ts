@@ -9,8 +9,6 @@ interface Row {
     /** Where the row ends (for "missing column" errors). */
     end: SourcePos;
 }
-/** Splits RFC 4180 text into rows of located cells; blank lines are skipped. */
-export declare function readCsv(text: string, b: TopologyBuilder): Row[];
 /**
  * The rows one at a time, so that a file with millions of rows is never held as rows: the
  * builder's element limit stops the read where it is crossed.

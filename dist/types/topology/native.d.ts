@@ -5,4 +5,4 @@ import { type BuilderOptions } from './builder.js';
  * default (100) already stops exponential growth, and a lower cap fails sooner.
  */
 export declare const MAX_ALIAS_COUNT = 50;
-export declare function parseNative(text: string, file: string, options?: BuilderOptions, format?: DesignFormat): Topology;
+export declare function parseNative(text: string, file: string, options?: BuilderOptions, format?: DesignFormat, fast?: boolean): Topology;

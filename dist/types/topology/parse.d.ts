@@ -1,7 +1,7 @@
 import { LimitError } from '../errors.js';
+import { utf8Length } from '../decode.js';
 import { type ParseOptions, type Topology } from './model.js';
-/** UTF-8 byte length without allocating an encoded copy. */
-export declare function utf8Length(text: string): number;
+export { utf8Length };
 /** Refuses text over the byte limit (cheap bounds first: each UTF-16 unit is 1–3 bytes). */
 export declare function checkSize(text: string, file: string, maxBytes?: number): void;
 export declare function sizeError(file: string, bytes: number, maxBytes: number): LimitError;
