@@ -27845,10 +27845,10 @@ function absent(e) {
   const code = e.code;
   return code === "ENOENT" || code === "ENOTDIR" || code === "EISDIR";
 }
-function tooLarge(file, bytes, maxBytes, revision2 = "") {
+function tooLarge(file, bytes, maxBytes, revision = "") {
   const size = bytes === void 0 ? `more than ${maxBytes} bytes` : `${bytes} bytes > ${maxBytes}`;
   return new LimitError(
-    `the file${revision2 ? ` at ${revision2}` : ""} is larger than netbrace reads (${size})`,
+    `the file${revision ? ` at ${revision}` : ""} is larger than netbrace reads (${size})`,
     { file },
     `design and policy files are limited to ${DEFAULT_MAX_BYTES} bytes`
   );
@@ -27957,6 +27957,16 @@ async function ensureCommit(cwd, sha, remote = "origin") {
     `commit ${sha} is not in this clone and could not be fetched from ${remote} (${out.stderr.trim().split("\n").pop() || `exit ${out.code}`})`,
     'fetch the history: with actions/checkout set "fetch-depth: 0", or run "git fetch origin <base>" first'
   );
+}
+async function resolveCommit(root, ref) {
+  if (/^[0-9a-f]{40}$/.test(ref) && !await revParse(root, ref)) await ensureCommit(root, ref);
+  const sha = await revParse(root, ref);
+  if (!sha)
+    throw new UsageError(
+      `"${ref}" is not a commit in this repository`,
+      "check the ref (git fetch it first if it is remote)"
+    );
+  return sha;
 }
 var STATUS = {
   A: "added",
@@ -28585,20 +28595,24 @@ function headlineOf(items, lines) {
   if (!parts.length && !worse.length) return lines.length ? "every requirement holds" : "nothing to judge";
   return [parts.join(", "), ...worse].filter(Boolean).join("; ");
 }
+function unreadableFinding(f) {
+  if (f.status !== "unreadable" || !f.error) return void 0;
+  if (f.findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) return void 0;
+  return {
+    rule: "parse-error",
+    severity: "fail",
+    message: f.error.message,
+    elements: [],
+    line: f.error.line,
+    column: f.error.column
+  };
+}
 function designStory(f) {
   const items = [];
   const notices = [];
   const findings = [...f.findings];
-  if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
-    findings.push({
-      rule: "parse-error",
-      severity: "fail",
-      message: f.error.message,
-      elements: [],
-      line: f.error.line,
-      column: f.error.column
-    });
-  }
+  const unread = unreadableFinding(f);
+  if (unread) findings.push(unread);
   for (const x of findings) {
     if (isNumberFinding(x, f)) continue;
     if (x.rule === "weakest-sequence" && x.severity === "notice") continue;
@@ -33655,16 +33669,8 @@ ${r.help}` },
   for (const f of rankFiles(report.files)) {
     const path11 = repoPath(options.pathPrefix, f.path);
     const findings = rankFindings(f.findings);
-    if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
-      findings.unshift({
-        rule: "parse-error",
-        severity: "fail",
-        message: f.error.message,
-        elements: [],
-        line: f.error.line,
-        column: f.error.column
-      });
-    }
+    const unread = unreadableFinding(f);
+    if (unread) findings.unshift(unread);
     for (const x of findings) {
       total++;
       if (results.length >= SARIF_MAX_RESULTS) continue;
@@ -41075,7 +41081,7 @@ async function runGate(request, deps) {
   return { report, exitCode: exitCodeOf(report) };
 }
 
-// src/shell/shared-options.ts
+// src/shell/common-options.ts
 var MODES = ["block", "inform"];
 var MAX_PARTS = 256;
 function whole(min, max) {
@@ -41181,16 +41187,6 @@ function repoPath2(root, cwd, p) {
     throw new UsageError(`${p} is not inside the repository`);
   return rel.split(path4.sep).join("/");
 }
-async function revision(root, ref) {
-  if (/^[0-9a-f]{40}$/.test(ref) && !await revParse(root, ref)) await ensureCommit(root, ref);
-  const sha = await revParse(root, ref);
-  if (!sha)
-    throw new UsageError(
-      `"${ref}" is not a commit in this repository`,
-      "check the ref (git fetch it first if it is remote)"
-    );
-  return sha;
-}
 async function readReports(given, io) {
   const files = [];
   for (const g of given) {
@@ -41263,9 +41259,9 @@ async function buildRequest(v, positionals, io) {
   const worktree = v.head === void 0;
   let head;
   if (worktree) request.worktree = true;
-  else request.head = head = await revision(root, v.head);
+  else request.head = head = await resolveCommit(root, v.head);
   if (v.base !== void 0) {
-    const b = await revision(root, v.base);
+    const b = await resolveCommit(root, v.base);
     const from = head ?? await revParse(root, "HEAD");
     request.base = (from && await mergeBase(root, b, from)) ?? b;
   } else {
@@ -41913,16 +41909,6 @@ function relative(from, cwd, p) {
     throw new UsageError(`${p} is not inside ${from === cwd ? "the working directory" : "the repository"}`);
   return rel.split(path7.sep).join("/");
 }
-async function commit(root, ref) {
-  if (/^[0-9a-f]{40}$/.test(ref) && !await revParse(root, ref)) await ensureCommit(root, ref);
-  const sha = await revParse(root, ref);
-  if (!sha)
-    throw new UsageError(
-      `"${ref}" is not a commit in this repository`,
-      "check the ref (git fetch it first if it is remote)"
-    );
-  return sha;
-}
 async function judgeOneDesign(file, v, io, views) {
   const threads = sharedOption("--threads", v.threads, THREADS);
   const seed = sharedOption("--seed", v.seed, SEED);
@@ -41943,7 +41929,7 @@ async function judgeOneDesign(file, v, io, views) {
     deps = gitDeps(root);
     const headSha = await revParse(root, "HEAD");
     if (v.base !== void 0) {
-      const b = await commit(root, v.base);
+      const b = await resolveCommit(root, v.base);
       request.base = (headSha && await mergeBase(root, b, headSha)) ?? b;
     } else if (headSha) request.base = headSha;
   }

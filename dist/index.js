@@ -46382,20 +46382,24 @@ function headlineOf(items, lines) {
   if (!parts.length && !worse.length) return lines.length ? "every requirement holds" : "nothing to judge";
   return [parts.join(", "), ...worse].filter(Boolean).join("; ");
 }
+function unreadableFinding(f) {
+  if (f.status !== "unreadable" || !f.error) return void 0;
+  if (f.findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) return void 0;
+  return {
+    rule: "parse-error",
+    severity: "fail",
+    message: f.error.message,
+    elements: [],
+    line: f.error.line,
+    column: f.error.column
+  };
+}
 function designStory(f) {
   const items = [];
   const notices = [];
   const findings = [...f.findings];
-  if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
-    findings.push({
-      rule: "parse-error",
-      severity: "fail",
-      message: f.error.message,
-      elements: [],
-      line: f.error.line,
-      column: f.error.column
-    });
-  }
+  const unread = unreadableFinding(f);
+  if (unread) findings.push(unread);
   for (const x of findings) {
     if (isNumberFinding(x, f)) continue;
     if (x.rule === "weakest-sequence" && x.severity === "notice") continue;
@@ -65720,16 +65724,8 @@ function annotationsOf(report, options = {}) {
     const file = repoPath(options.pathPrefix, f.path);
     const touched = options.changedLines?.get(file);
     const findings = [...f.findings];
-    if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
-      findings.push({
-        rule: "parse-error",
-        severity: "fail",
-        message: f.error.message,
-        elements: [],
-        line: f.error.line,
-        column: f.error.column
-      });
-    }
+    const unread = unreadableFinding(f);
+    if (unread) findings.push(unread);
     for (const x of findings) {
       const startLine = Math.max(1, Math.floor(x.line || 1));
       out.push({
@@ -65936,16 +65932,8 @@ ${r.help}` },
   for (const f of rankFiles(report.files)) {
     const path3 = repoPath(options.pathPrefix, f.path);
     const findings = rankFindings(f.findings);
-    if (f.status === "unreadable" && f.error && !findings.some((x) => x.rule === "parse-error" || x.rule === "not-computable")) {
-      findings.unshift({
-        rule: "parse-error",
-        severity: "fail",
-        message: f.error.message,
-        elements: [],
-        line: f.error.line,
-        column: f.error.column
-      });
-    }
+    const unread = unreadableFinding(f);
+    if (unread) findings.unshift(unread);
     for (const x of findings) {
       total++;
       if (results.length >= SARIF_MAX_RESULTS) continue;
@@ -66298,7 +66286,7 @@ import { realpathSync as realpathSync2, statSync as statSync3 } from "node:fs";
 // src/shell/action-event.ts
 import { readFileSync as readFileSync3, statSync as statSync2 } from "node:fs";
 
-// src/shell/shared-options.ts
+// src/shell/common-options.ts
 var MODES = ["block", "inform"];
 var MAX_PARTS = 256;
 function whole(min, max) {

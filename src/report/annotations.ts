@@ -8,6 +8,7 @@
 import { logText, oneLine } from './escape.js';
 import { findingCost, findingNumbers, repoPath } from './finding-text.js';
 import { configurationNotes, findingTitle } from './labels.js';
+import { unreadableFinding } from './story.js';
 import { RULE_TITLE } from './vocabulary.js';
 import { SEVERITY_RANK, rankFiles } from './rank.js';
 import type { Finding, Report, Severity } from './report.js';
@@ -62,20 +63,8 @@ export function annotationsOf(report: Report, options: AnnotationOptions = {}): 
     const file = repoPath(options.pathPrefix, f.path);
     const touched = options.changedLines?.get(file);
     const findings = [...f.findings];
-    if (
-      f.status === 'unreadable' &&
-      f.error &&
-      !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')
-    ) {
-      findings.push({
-        rule: 'parse-error',
-        severity: 'fail',
-        message: f.error.message,
-        elements: [],
-        line: f.error.line,
-        column: f.error.column,
-      });
-    }
+    const unread = unreadableFinding(f);
+    if (unread) findings.push(unread);
     for (const x of findings) {
       const startLine = Math.max(1, Math.floor(x.line || 1));
       out.push({

@@ -9,6 +9,7 @@ import { stableHash } from '../random.js';
 import { findingCost, findingNumbers, repoPath } from './finding-text.js';
 import { configurationNotes } from './labels.js';
 import { rankFiles, rankFindings } from './rank.js';
+import { unreadableFinding } from './story.js';
 import { RULE_TITLE } from './vocabulary.js';
 import type { Finding, Report, Severity } from './report.js';
 
@@ -191,20 +192,8 @@ export function renderSarif(report: Report, options: SarifOptions = {}): SarifLo
   for (const f of rankFiles(report.files)) {
     const path = repoPath(options.pathPrefix, f.path);
     const findings = rankFindings(f.findings);
-    if (
-      f.status === 'unreadable' &&
-      f.error &&
-      !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')
-    ) {
-      findings.unshift({
-        rule: 'parse-error',
-        severity: 'fail',
-        message: f.error.message,
-        elements: [],
-        line: f.error.line,
-        column: f.error.column,
-      });
-    }
+    const unread = unreadableFinding(f);
+    if (unread) findings.unshift(unread);
     for (const x of findings) {
       total++;
       if (results.length >= SARIF_MAX_RESULTS) continue;

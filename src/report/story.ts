@@ -486,24 +486,29 @@ function headlineOf(items: readonly WeakenedItem[], lines: readonly RequirementL
   return [parts.join(', '), ...worse].filter(Boolean).join('; ');
 }
 
+/**
+ * The finding an unreadable file is told by in every view (its located reading error, as a
+ * failure), unless its findings already say it; undefined for any other file.
+ */
+export function unreadableFinding(f: FileReport): Finding | undefined {
+  if (f.status !== 'unreadable' || !f.error) return undefined;
+  if (f.findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')) return undefined;
+  return {
+    rule: 'parse-error',
+    severity: 'fail',
+    message: f.error.message,
+    elements: [],
+    line: f.error.line,
+    column: f.error.column,
+  };
+}
+
 export function designStory(f: FileReport): DesignStory {
   const items: WeakenedItem[] = [];
   const notices: WeakenedItem[] = [];
   const findings = [...f.findings];
-  if (
-    f.status === 'unreadable' &&
-    f.error &&
-    !findings.some((x) => x.rule === 'parse-error' || x.rule === 'not-computable')
-  ) {
-    findings.push({
-      rule: 'parse-error',
-      severity: 'fail',
-      message: f.error.message,
-      elements: [],
-      line: f.error.line,
-      column: f.error.column,
-    });
-  }
+  const unread = unreadableFinding(f);
+  if (unread) findings.push(unread);
   for (const x of findings) {
     if (isNumberFinding(x, f)) continue;
     // A weakest sequence that is only context is told with the other sequences (detail).

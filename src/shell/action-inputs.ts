@@ -4,7 +4,7 @@
 
 import { oneLine } from '../report/escape.js';
 import type { Env } from './action-deps.js';
-import { MODE, PART, SEED, THREADS, type SharedOption } from './shared-options.js';
+import { MODE, PART, SEED, THREADS, type SharedOption } from './common-options.js';
 import { repositoryPath } from './workspace.js';
 
 export class InputError extends Error {
@@ -70,7 +70,7 @@ function optionalInt(env: Env, name: string, min: number, max: number): number |
   return Number(v);
 }
 
-/** An input the Action shares with the CLI (shared-options.ts), or undefined when not given. */
+/** An input the Action shares with the CLI (common-options.ts), or undefined when not given. */
 function sharedInput<T>(env: Env, name: string, option: SharedOption<T>, example = ''): T | undefined {
   const v = getInput(env, name);
   if (v === '') return undefined;

@@ -4,7 +4,7 @@
 
 import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { UsageError } from '../errors.js';
-import type { SharedOption } from './shared-options.js';
+import type { SharedOption } from './common-options.js';
 
 type Options = NonNullable<ParseArgsConfig['options']>;
 
@@ -65,7 +65,7 @@ export function choice<T extends string>(
   return value as T;
 }
 
-/** An option the CLI shares with the Action (shared-options.ts), or undefined when absent. */
+/** An option the CLI shares with the Action (common-options.ts), or undefined when absent. */
 export function sharedOption<T>(
   name: string,
   value: string | undefined,

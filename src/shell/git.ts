@@ -136,6 +136,18 @@ export async function ensureCommit(cwd: string, sha: string, remote = 'origin'):
   );
 }
 
+/** The commit a ref names; a full commit id missing from a shallow clone is fetched (that one commit only). */
+export async function resolveCommit(root: string, ref: string): Promise<string> {
+  if (/^[0-9a-f]{40}$/.test(ref) && !(await revParse(root, ref))) await ensureCommit(root, ref);
+  const sha = await revParse(root, ref);
+  if (!sha)
+    throw new UsageError(
+      `"${ref}" is not a commit in this repository`,
+      'check the ref (git fetch it first if it is remote)',
+    );
+  return sha;
+}
+
 const STATUS: Record<string, ChangedFile['status']> = {
   A: 'added',
   M: 'modified',

@@ -7,11 +7,11 @@ import { UsageError } from '../errors.js';
 import { threadedGate } from '../parallel/pool.js';
 import type { FileReport, Report } from '../report/report.js';
 import { runGate, type GateDeps, type GateRequest } from '../run-gate.js';
-import { ensureCommit, gitDeps, mergeBase, repoRoot, revParse } from './git.js';
+import { gitDeps, mergeBase, repoRoot, resolveCommit, revParse } from './git.js';
 import type { CommandIO } from './io.js';
 import { readInside } from './workspace.js';
 import { sharedOption } from './args.js';
-import { SEED, THREADS } from './shared-options.js';
+import { SEED, THREADS } from './common-options.js';
 
 export const ONE_DESIGN_OPTIONS = {
   base: { type: 'string' },
@@ -41,17 +41,6 @@ function relative(from: string, cwd: string, p: string): string {
   return rel.split(path.sep).join('/');
 }
 
-async function commit(root: string, ref: string): Promise<string> {
-  if (/^[0-9a-f]{40}$/.test(ref) && !(await revParse(root, ref))) await ensureCommit(root, ref);
-  const sha = await revParse(root, ref);
-  if (!sha)
-    throw new UsageError(
-      `"${ref}" is not a commit in this repository`,
-      'check the ref (git fetch it first if it is remote)',
-    );
-  return sha;
-}
-
 /** Judge FILE through the gate, with the map and the mend search as asked. */
 export async function judgeOneDesign(
   file: string,
@@ -78,7 +67,7 @@ export async function judgeOneDesign(
     deps = gitDeps(root);
     const headSha = await revParse(root, 'HEAD');
     if (v.base !== undefined) {
-      const b = await commit(root, v.base);
+      const b = await resolveCommit(root, v.base);
       request.base = (headSha && (await mergeBase(root, b, headSha))) ?? b;
     } else if (headSha) request.base = headSha;
   }

@@ -85,6 +85,11 @@ export interface DesignStory {
     howMuch: RequirementLine[];
     definitions: Definition[];
 }
+/**
+ * The finding an unreadable file is told by in every view (its located reading error, as a
+ * failure), unless its findings already say it; undefined for any other file.
+ */
+export declare function unreadableFinding(f: FileReport): Finding | undefined;
 export declare function designStory(f: FileReport): DesignStory;
 /** For a design with no element to name whose requirements fell: what "what weakened" says instead of "nothing". */
 export declare function numbersOnly(d: Pick<DesignStory, 'howMuch'>): string | undefined;

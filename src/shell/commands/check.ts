@@ -13,11 +13,11 @@ import { renderSarif } from '../../report/sarif.js';
 import { renderTerminal } from '../../report/terminal.js';
 import { runGate, type GateDeps, type GateRequest } from '../../run-gate.js';
 import { colorEnabled, terminalWidth } from '../color.js';
-import { ensureCommit, gitDeps, mergeBase, repoRoot, revParse } from '../git.js';
+import { gitDeps, mergeBase, repoRoot, resolveCommit, revParse } from '../git.js';
 import type { Command, CommandIO } from '../io.js';
 import { readInside } from '../workspace.js';
 import { choice, parseCommandArgs, sharedOption } from '../args.js';
-import { MODE, PART, SEED, THREADS } from '../shared-options.js';
+import { MODE, PART, SEED, THREADS } from '../common-options.js';
 import { upgradeReport } from '../../gate/join.js';
 import { joinInput } from '../../gate/split.js';
 
@@ -108,18 +108,6 @@ function repoPath(root: string, cwd: string, p: string): string {
   return rel.split(path.sep).join('/');
 }
 
-async function revision(root: string, ref: string): Promise<string> {
-  // A full commit id missing from a shallow clone is fetched (that one commit only).
-  if (/^[0-9a-f]{40}$/.test(ref) && !(await revParse(root, ref))) await ensureCommit(root, ref);
-  const sha = await revParse(root, ref);
-  if (!sha)
-    throw new UsageError(
-      `"${ref}" is not a commit in this repository`,
-      'check the ref (git fetch it first if it is remote)',
-    );
-  return sha;
-}
-
 /** The part reports named by --join (files, or the *.json files of folders), checked as reports. */
 async function readReports(given: string[], io: CommandIO): Promise<Report[]> {
   const files: string[] = [];
@@ -202,9 +190,9 @@ async function buildRequest(
   const worktree = v.head === undefined;
   let head: string | undefined;
   if (worktree) request.worktree = true;
-  else request.head = head = await revision(root, v.head!);
+  else request.head = head = await resolveCommit(root, v.head!);
   if (v.base !== undefined) {
-    const b = await revision(root, v.base);
+    const b = await resolveCommit(root, v.base);
     const from = head ?? (await revParse(root, 'HEAD'));
     // What the head changes since its history left the base, as a pull request shows it.
     request.base = (from && (await mergeBase(root, b, from))) ?? b;

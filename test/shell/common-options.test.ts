@@ -1,11 +1,11 @@
 // seed, threads, part and mode mean the same on the command line and in the Action: one
-// parser (src/shell/shared-options.ts) decides for both, so a value one accepts the other
+// parser (src/shell/common-options.ts) decides for both, so a value one accepts the other
 // accepts, with the same meaning, and a value one refuses the other refuses.
 
 import { describe, expect, it } from 'vitest';
 import { sharedOption } from '../../src/shell/args.js';
 import { readInputs } from '../../src/shell/action-inputs.js';
-import { MODE, PART, SEED, THREADS, type SharedOption } from '../../src/shell/shared-options.js';
+import { MODE, PART, SEED, THREADS, type SharedOption } from '../../src/shell/common-options.js';
 
 const CASES: [name: 'seed' | 'threads' | 'part' | 'mode', option: SharedOption<unknown>, texts: string[]][] = [
   ['seed', SEED, ['0', '1', '4294967295', '4294967296', '-1', '1.5', '1e3', 'x', '007']],
