@@ -43,6 +43,7 @@ import type { ChallengeName, ChallengeParams } from '../challenges/types.js';
 import { unionFindR, unsupportedMetric, UnsupportedMetricError, validateRSpec } from './r-value.js';
 import {
   attackSteps,
+  attackStride,
   bandPlan,
   challengeKind,
   planTasks,
@@ -279,14 +280,16 @@ function attackCurveCost(c: CostModel, p: PlannedChallenge['params'], kind: Elem
     }
     if (!order) return (k + 1) * c.intact;
     const len = Math.min(k, order.length);
+    // Past ATTACK_EVALUATIONS steps the engine computes R every `every`-th step only.
+    const every = attackStride(len, false);
     const at = [
       ...new Set(Array.from({ length: ATTACK_SAMPLES }, (_, i) => Math.round((i * len) / (ATTACK_SAMPLES - 1)))),
     ];
     const cost = at.map((s) => c.along(kind, order, s));
-    // Trapezoids between the sampled steps: every step 0..len is one evaluation.
+    // Trapezoids between the sampled steps: every evaluated step 0..len is one evaluation.
     let sum = cost[0];
-    for (let i = 1; i < at.length; i++) sum += ((cost[i - 1] + cost[i]) / 2) * (at[i] - at[i - 1]);
-    return sum + (k - len) * cost[cost.length - 1];
+    for (let i = 1; i < at.length; i++) sum += ((cost[i - 1] + cost[i]) / 2) * ((at[i] - at[i - 1]) / every);
+    return sum + ((k - len) * cost[cost.length - 1]) / every;
   });
 }
 
@@ -489,6 +492,7 @@ export function assembleEvaluation(
         count,
         area: attackArea(values, until),
       };
+      if (res.every !== undefined) curve.every = res.every;
       attackOf.set(item, curve);
       evaluation.attacks.push(curve);
     } else {

@@ -98,6 +98,11 @@ export interface AttackCurve {
    * fraction and R there is interpolated (summary.ts attackArea).
    */
   area: number;
+  /**
+   * Set on long attacks (engine.ts ATTACK_EVALUATIONS): R was computed after every `every`-th
+   * removal and after the last, and `values` in between are read linearly between those.
+   */
+  every?: number;
   worstCase?: WorstCase;
 }
 

@@ -12,7 +12,7 @@ import { describe, expect, it } from 'vitest';
 import { graphFromEdges } from '../../src/graph/compact.js';
 import { evaluateDesign, type EvaluationSpec } from '../../src/envelope/evaluate.js';
 import { pairedStatistic } from '../../src/envelope/pairing.js';
-import { bandPlan } from '../../src/envelope/engine.js';
+import { ATTACK_EVALUATIONS, bandPlan } from '../../src/envelope/engine.js';
 import { resolveParams } from '../../src/challenges/registry.js';
 import { countAt } from '../../src/challenges/units.js';
 import type { MetricId } from '../../src/metrics/types.js';
@@ -95,5 +95,63 @@ describe('R at a fraction of nodes removed', () => {
     expect(pairedStatistic(ev, ev, 'degree', { kind: 'mean' }, 3 / 7).head).toBe(3 / 7);
     // Area up to 3.5 removals: (R(1) + R(2) + R(3) + 0.5·R(3.5)) / 3.5.
     expect(a.area).toBeCloseTo((5 / 7 + 4 / 7 + 3 / 7 + 0.5 * (5 / 14)) / 3.5, 15);
+  });
+});
+
+// Long attacks are computed every ⌈K/ATTACK_EVALUATIONS⌉-th removal (engine.ts attackStride).
+// Path P_n under the degree attack (ties to the lowest index) loses nodes 1, 2, 3, … in turn:
+// after k ≥ 1 removals node 0 is alone and nodes k+1..n−1 form a path of m = n − 1 − k nodes,
+// whose ordered-pair efficiency sum is 2 Σ_{d=1}^{m−1} (m − d)/d (elementary; Latora &
+// Marchiori's definition with the original n(n − 1) pairs).
+describe('a long attack, computed at every few removals', () => {
+  const n = 1101;
+  const path = graphFromEdges(
+    n,
+    Array.from({ length: n - 1 }, (_, i) => [i, i + 1] as [number, number]),
+  );
+  const exact = (k: number) => {
+    const m = k === 0 ? n : n - 1 - k;
+    let s = 0;
+    for (let d = 1; d < m; d++) s += (m - d) / d;
+    return (2 * s) / (n * (n - 1));
+  };
+  const run = evaluateDesign(path, {
+    r: { metrics: [{ id: 'efficiency', weight: 1 }], combine: 'mean' },
+    seed: 3,
+    challenges: [{ challenge: 'degree', until: 0.2 }],
+  }).evaluation.attacks[0];
+  const K = Math.ceil(0.2 * n);
+
+  it('says its stride, and is exact where it computes', () => {
+    expect(K).toBeGreaterThan(ATTACK_EVALUATIONS);
+    expect(run.every).toBe(Math.ceil(K / ATTACK_EVALUATIONS));
+    expect(run.values).toHaveLength(K + 1);
+    for (let k = 0; k < K; k += run.every!) expect(run.values[k]).toBeCloseTo(exact(k), 12);
+    expect(run.values[K]).toBeCloseTo(exact(K), 12);
+  });
+
+  it('reads linearly between, and keeps the area within 1e-6 of every step computed', () => {
+    const s = run.every!;
+    for (let k = 1; k < K; k++) {
+      if (k % s === 0) continue;
+      const a = k - (k % s);
+      const b = Math.min(a + s, K);
+      expect(run.values[k]).toBeCloseTo(exact(a) + ((k - a) / (b - a)) * (exact(b) - exact(a)), 12);
+    }
+    let full = 0;
+    for (let k = 1; k <= 0.2 * n; k++) full += exact(k);
+    const c = 0.2 * n;
+    const lo = Math.floor(c);
+    full = (full + (c - lo) * (exact(lo) + (c - lo) * (exact(lo + 1) - exact(lo)))) / c;
+    expect(Math.abs(run.area - full)).toBeLessThan(1e-6);
+  });
+
+  it('computes short attacks at every step', () => {
+    const short = evaluateDesign(graphFromEdges(50, [[0, 1]]), {
+      r: { metrics: [{ id: 'efficiency', weight: 1 }], combine: 'mean' },
+      seed: 3,
+      challenges: [{ challenge: 'degree', until: 0.5 }],
+    }).evaluation.attacks[0];
+    expect(short.every).toBeUndefined();
   });
 });
