@@ -18967,6 +18967,7 @@ var DEFAULT_DESIGN_GLOBS = [
   CSV_DESIGN_GLOB
 ];
 var REGIONAL_UNTIL_KM = 50;
+var DEFAULT_SOURCES = 1024;
 var DEFAULT_ERROR_MULTIPLE = 2;
 var STARTER_POLICY = `# netbrace policy: what a network design must satisfy before a change to it merges.
 # Every key is optional; a key left out takes the value of the built-in policy, which is
@@ -18992,6 +18993,9 @@ r-value:
     pair_connectivity: 1   # share of node pairs that can still reach each other
     efficiency: 1          # mean inverse hop distance
   combine: mean            # mean (weighted) or min
+  # On designs of more sites, efficiency searches from this many seeded sites (the same on base
+  # and head) instead of all: an unbiased estimate whose standard error joins the ±; "all" is exact.
+  sources: 1024
 
 # Challenges, each under a name of your choosing (requirements refer to it).
 #   remove:   nodes | links | risk-groups | region
@@ -22937,12 +22941,36 @@ function createRValue(g, spec, options) {
   validateRSpec(spec);
   const problem = unsupportedMetric(g, spec);
   if (problem) throw new UnsupportedMetricError(problem);
-  const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, options));
+  const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, metricOptions(spec, options)));
   const values = new Float64Array(evaluators.length);
   return (mask) => {
     for (let i = 0; i < evaluators.length; i++) values[i] = evaluators[i](mask).normalized;
     return combineR(spec, values);
   };
+}
+function metricOptions(spec, options) {
+  if (spec.sources === void 0) return options;
+  return { sources: spec.sources, sourceSeed: spec.sourceSeed ?? 0, ...options };
+}
+function samplesSources(g, spec) {
+  return spec.sources !== void 0 && spec.sources < g.n && spec.metrics.some((m) => m.id === "efficiency");
+}
+function rSourceErrors(g, spec, masks) {
+  if (!samplesSources(g, spec)) return masks.map(() => 0);
+  const options = metricOptions(spec);
+  const sampled = spec.metrics.map((m) => m.id === "efficiency" ? getMetric(m.id).create(g, options) : null);
+  const weight = spec.metrics.reduce((s, m) => s + m.weight, 0);
+  return masks.map((mask) => {
+    let mean = 0;
+    let most = 0;
+    sampled.forEach((ev, i) => {
+      if (!ev) return;
+      const se = ev(mask).se ?? 0;
+      mean += spec.metrics[i].weight * se / weight;
+      most = Math.max(most, se);
+    });
+    return spec.combine === "min" ? most : mean;
+  });
 }
 var UNION_FIND_METRICS = /* @__PURE__ */ new Set(["largest_component", "pair_connectivity"]);
 function unionFindR(g, spec) {
@@ -23260,6 +23288,10 @@ function challengeKind(g, params) {
 function attackSteps(g, kind, until) {
   return stepsAt(until, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
 }
+var ATTACK_EVALUATIONS = 200;
+function attackStride(steps, free) {
+  return free || steps <= ATTACK_EVALUATIONS ? 1 : Math.ceil(steps / ATTACK_EVALUATIONS);
+}
 var StepEvaluator = class {
   constructor(g, spec) {
     this.g = g;
@@ -23326,6 +23358,24 @@ var StepEvaluator = class {
     memo.rLast = r;
     return r;
   }
+  /**
+   * R after every step k = 0..len, computed after every `every`-th removal and after the last,
+   * and read linearly between them (attackStride says why).
+   */
+  strided(kind, order, len, every) {
+    const at = [];
+    for (let k = 0; k < len; k += every) at.push(k);
+    at.push(len);
+    const computed = this.at(kind, order, len, at, new Float64Array(at.length));
+    const out = new Float64Array(len + 1);
+    for (let i = 0; i + 1 < at.length; i++) {
+      const a = at[i];
+      const b = at[i + 1];
+      for (let k = a; k < b; k++) out[k] = lerp(computed[i], computed[i + 1], (k - a) / (b - a));
+    }
+    out[len] = computed[at.length - 1];
+    return out;
+  }
   /** R after every step k = 0..len. */
   everyStep(kind, order, len) {
     const steps = new Int32Array(len + 1);
@@ -23353,7 +23403,9 @@ function runTask(g, plan, task) {
       const c = getChallenge(params.challenge);
       if (c.type !== "attack") throw new TypeError(`${params.challenge} is not an attack`);
       const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: ev.r });
-      return { type: "attack", sequence, values: ev.everyStep(c.kind, sequence, sequence.length) };
+      const every = attackStride(sequence.length, ev.stepsAreFree);
+      if (every === 1) return { type: "attack", sequence, values: ev.everyStep(c.kind, sequence, sequence.length) };
+      return { type: "attack", sequence, values: ev.strided(c.kind, sequence, sequence.length, every), every };
     }
     case "contingency": {
       const c = getChallenge(params.challenge);
@@ -23411,7 +23463,7 @@ function survivorShape(g, mask) {
   }
   return out;
 }
-function hopSearchCost(shape) {
+function hopSearchCost(shape, share = 1) {
   let plain = shape.designEntries;
   let words = 0;
   for (let c = 0; c < shape.sizes.length; c++) {
@@ -23421,12 +23473,13 @@ function hopSearchCost(shape) {
     if (n < 2) continue;
     plain += sweep;
     const ecc = shape.eccentricities[c];
+    const sources = share < 1 ? Math.ceil((n - 1) * share) : n - 1;
     if (ecc >= LONG_GRAPH_ECCENTRICITY && n < THIN_LEVEL * (ecc + 1)) {
-      plain += (n - 1) * sweep;
+      plain += sources * sweep;
       continue;
     }
     const levels = LEVELS_PER_ECCENTRICITY * (shape.eccentricities[c] + 1);
-    let left = n - 1;
+    let left = sources;
     while (left > 0) {
       const width = left > 64 ? Math.min(256, left) : left;
       words += (width > 64 ? 8 : 2) * levels * sweep;
@@ -23440,7 +23493,8 @@ function rCost(g, spec, shape) {
   let total = 0;
   for (const m of spec.metrics) {
     const cost = getMetric(m.id).cost;
-    if (HOP_METRICS.has(m.id)) total += hopSearchCost(shape);
+    if (HOP_METRICS.has(m.id))
+      total += hopSearchCost(shape, m.id === "efficiency" && samplesSources(g, spec) ? spec.sources / g.n : 1);
     else if (cost === "linear") total += scan;
     else if (cost === "spectral") total += scan * SPECTRAL_PRODUCTS;
     else total += scan * Math.max(1, g.n);
@@ -23772,13 +23826,14 @@ function attackCurveCost(c, p, kind, k) {
     }
     if (!order) return (k + 1) * c.intact;
     const len = Math.min(k, order.length);
+    const every = attackStride(len, false);
     const at = [
       ...new Set(Array.from({ length: ATTACK_SAMPLES }, (_, i) => Math.round(i * len / (ATTACK_SAMPLES - 1))))
     ];
     const cost = at.map((s) => c.along(kind, order, s));
     let sum = cost[0];
-    for (let i = 1; i < at.length; i++) sum += (cost[i - 1] + cost[i]) / 2 * (at[i] - at[i - 1]);
-    return sum + (k - len) * cost[cost.length - 1];
+    for (let i = 1; i < at.length; i++) sum += (cost[i - 1] + cost[i]) / 2 * ((at[i] - at[i - 1]) / every);
+    return sum + (k - len) * cost[cost.length - 1] / every;
   });
 }
 function estimate(g, it, c) {
@@ -23935,6 +23990,7 @@ function assembleEvaluation(g, plan, tasks, results) {
         count,
         area: attackArea(values, until)
       };
+      if (res.every !== void 0) curve.every = res.every;
       attackOf2.set(item, curve);
       evaluation.attacks.push(curve);
     } else {
@@ -23947,6 +24003,8 @@ function assembleEvaluation(g, plan, tasks, results) {
       if (target) target.worstCase = worst.result;
     }
   });
+  const sampling = sourceSampling(g, plan, tasks, results);
+  if (sampling) evaluation.sampling = sampling;
   for (const env of evaluation.envelopes) {
     if (env.xUnit !== "fraction") continue;
     const candidates2 = evaluation.attacks.filter((a) => a.kind === env.kind);
@@ -23964,6 +24022,38 @@ function assembleEvaluation(g, plan, tasks, results) {
     if (gap !== null) env.attackGap = { value: gap, attack: worst.challenge };
   }
   return { evaluation, samples, labels: labels2 };
+}
+function sourceSampling(g, plan, tasks, results) {
+  if (!samplesSources(g, plan.r)) return void 0;
+  const masks = [createMask(g)];
+  plan.items.forEach((it, item) => {
+    const mine = results.filter((_, i) => tasks[i].item === item);
+    if (it.type === "band") {
+      const values = mine.flatMap((res) => res.type === "band" ? res.values : []);
+      if (values.length === 0) return;
+      const score = values.map((v) => gridMean(v));
+      const weakest = score.reduce((best, v, r) => v < score[best] ? r : best, 0);
+      const bp = bandPlan(g, it.params);
+      const order = new Int32Array(bp.maxUnits);
+      const steps = new Float64Array(bp.x.length);
+      const len = bp.realize(weakest, order, steps);
+      for (const c of steps) {
+        if (!(c > 0)) continue;
+        const mask = createMask(g);
+        for (let i = 0; i < Math.min(len, Math.ceil(c)); i++) removeUnit(g, mask, bp.kind, order[i]);
+        masks.push(mask);
+      }
+    } else if (it.type === "attack") {
+      const res = mine.find((r) => r.type === "attack");
+      const c = getChallenge(it.params.challenge);
+      if (!res || c.type !== "attack" || res.sequence.length === 0) return;
+      const mask = createMask(g);
+      for (const u of res.sequence) removeUnit(g, mask, c.kind, u);
+      masks.push(mask);
+    }
+  });
+  const se = Math.max(...rSourceErrors(g, plan.r, masks));
+  return { metric: "efficiency", sources: plan.r.sources, nodes: g.n, se };
 }
 function buildEnvelope(g, it, bp, values, ev) {
   const p = it.params;
@@ -24904,6 +24994,13 @@ function pairedBand(base, head, envB, envH, statistic, x) {
 }
 
 // src/gate/measure.ts
+function sourceSe(side) {
+  return side?.result.evaluation.sampling?.se ?? 0;
+}
+function sampledHead(head) {
+  const s = head.result.evaluation.sampling;
+  return s ? { sourceSe: s.se, sources: { sources: s.sources, nodes: s.nodes } } : {};
+}
 var MAX_ELEMENTS = 10;
 function locate(el, head, base) {
   return locateElement(el, head, base);
@@ -25061,7 +25158,9 @@ function measure(req, challenges2, head, base) {
       base: baseEnv ? p.base : null,
       head: p.head,
       delta: baseEnv ? same2 ? 0 : p.delta : null,
-      se: baseEnv ? same2 ? 0 : p.se : null,
+      // Sampled sources add an error the realizations do not show (the sample is fixed).
+      se: baseEnv ? same2 ? 0 : Math.hypot(p.se, sourceSe(base), sourceSe(head)) : null,
+      ...sampledHead(head),
       higherIsBetter,
       elements: sequenceElements(
         env.weakest[0],
@@ -25078,7 +25177,7 @@ function measure(req, challenges2, head, base) {
     if (reduction.reduced !== void 0) {
       out.reduced = reduction.reduced;
       const h2 = realizationsOf(env, c, head.graph);
-      if (h2.ran < h2.asked) out.headSe = ownSe(head.result, env, stat, x);
+      if (h2.ran < h2.asked) out.headSe = Math.hypot(ownSe(head.result, env, stat, x), sourceSe(head));
     }
     if (reduction.unpaired !== void 0) out.unpaired = reduction.unpaired;
     return out;
@@ -25098,7 +25197,8 @@ function measure(req, challenges2, head, base) {
     base: bv,
     head: h.value,
     delta: bv === null ? null : same ? 0 : h.value - bv,
-    se: bv === null ? null : 0,
+    se: bv === null ? null : same ? 0 : Math.hypot(sourceSe(base), sourceSe(head)),
+    ...sampledHead(head),
     higherIsBetter,
     elements: h.elements,
     ...h.incomplete !== void 0 ? { incomplete: h.incomplete } : {}
@@ -25188,7 +25288,12 @@ function decide(input) {
   const env = input.head.evaluation.envelopes.find((e) => e.challenge === c.engine);
   const samples = input.head.samples.get(c.engine);
   if (!env || !samples) return void 0;
-  const head = sideBounds(stat, env, samples, DECISION_ALPHA);
+  const srcHead = input.head.evaluation.sampling?.se ?? 0;
+  const srcBase = input.base?.evaluation.sampling?.se ?? 0;
+  const sampled = srcHead > 0 || srcBase > 0;
+  const alpha = sampled ? DECISION_ALPHA / 2 : DECISION_ALPHA;
+  const z = normalQuantile(1 - DECISION_ALPHA / 4);
+  const head = widen(sideBounds(stat, env, samples, alpha), z * srcHead);
   if (!head) return void 0;
   const out = { head };
   if (stat.kind === "min") out.needsAll = true;
@@ -25204,9 +25309,12 @@ function decide(input) {
     const baseSamples = base.samples.get(c.engine);
     if (base === input.head) out.delta = { lo: 0, hi: 0 };
     else if (baseEnv && baseSamples && stat.kind !== "min") {
-      const h = sideBounds(stat, env, samples, DECISION_ALPHA / 2);
-      const b = sideBounds(stat, baseEnv, baseSamples, DECISION_ALPHA / 2);
-      if (h && b) out.delta = { lo: h.lo - b.hi, hi: h.hi - b.lo };
+      const h = sideBounds(stat, env, samples, alpha / 2);
+      const b = sideBounds(stat, baseEnv, baseSamples, alpha / 2);
+      if (h && b) {
+        const shift = z * Math.hypot(srcHead, srcBase);
+        out.delta = { lo: h.lo - b.hi - shift, hi: h.hi - b.lo + shift };
+      }
     }
     if (out.delta) {
       const allowance = allowanceOf(input.weakening, input.baseValue);
@@ -25215,6 +25323,9 @@ function decide(input) {
     } else out.weakening = "open";
   }
   return out;
+}
+function widen(b, by) {
+  return b && by > 0 ? { lo: b.lo - by, hi: b.hi + by } : b;
 }
 function isOpen(d) {
   return d.floor === "open" || d.weakening === "open";
@@ -25351,6 +25462,20 @@ function judgeFloor(j) {
         rule,
         unsettledSeverity(r.severity),
         `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
+        elements,
+        { ...extra, status: "unsettled" }
+      )
+    );
+  } else if (threshold !== null && m.sourceSe !== void 0 && m.sources !== void 0 && !((m.higherIsBetter ? headValue - threshold : threshold - headValue) > REDUCED_MARGIN_SE * m.sourceSe)) {
+    status = "unsettled";
+    const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
+    const needed = REDUCED_MARGIN_SE * m.sourceSe;
+    const d = decidingDecimals(margin, needed);
+    findings.push(
+      finding2(
+        rule,
+        unsettledSeverity(r.severity),
+        `${description}: ${against(headValue, threshold)} meets it, but efficiency searched from ${m.sources.sources.toLocaleString("en")} of ${m.sources.nodes.toLocaleString("en")} sites, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors of that estimate (${REDUCED_MARGIN_SE} × ${formatR(m.sourceSe, d)}); more sources (r-value sources) would settle it`,
         elements,
         { ...extra, status: "unsettled" }
       )
@@ -26843,6 +26968,14 @@ var policy_schema_default = {
           description: "mean: weighted mean of the normalized metrics; min: the smallest of them (weights ignored).",
           enum: ["mean", "min"],
           default: "mean"
+        },
+        sources: {
+          description: "Sites efficiency searches from: all, or a seeded sample of this many on designs with more sites (an unbiased estimate whose error joins the ±).",
+          oneOf: [
+            { const: "all" },
+            { type: "integer", minimum: 32, maximum: 1e6 }
+          ],
+          default: "all"
         }
       }
     },
@@ -27863,6 +27996,14 @@ function parsePolicyFile(text2, file) {
       })),
       combine: r.combine ?? "mean"
     };
+    const sources = r.sources ?? DEFAULT_SOURCES;
+    if (typeof sources === "number" && spec.metrics.some((m) => m.id === "efficiency")) spec.sources = sources;
+    if (typeof r.sources === "number" && !spec.metrics.some((m) => m.id === "efficiency"))
+      throw new PolicyError(
+        "r-value.sources applies to efficiency, which this r-value does not use",
+        src.where(["r-value", "sources"]),
+        'remove "sources", or add efficiency to r-value.metrics'
+      );
     policy.rValue = { spec, where: src.where(["r-value"], true) };
   }
   const byEngine = /* @__PURE__ */ new Map();
@@ -29602,20 +29743,24 @@ function sampleKey(path, side, challenge, from, to) {
 }
 
 // src/gate-request.ts
+function policyR(fp, seed) {
+  return fp.rValue.sources !== void 0 ? { ...fp.rValue, sourceSeed: seed } : fp.rValue;
+}
 function evaluationSpecs(fp, seed) {
   const challenges2 = fp.challenges.map((c) => {
-    const at = fp.requirements.filter((r) => r.kind === "r-threshold" && r.challenge === c.name && r.at !== void 0).map((r) => r.kind === "r-threshold" ? r.at : 0);
+    const at = fp.requirements.filter((r2) => r2.kind === "r-threshold" && r2.challenge === c.name && r2.at !== void 0).map((r2) => r2.kind === "r-threshold" ? r2.at : 0);
     const params = { ...c.params };
     if (c.random && at.length > 0) params.at = [...new Set(at)].sort((a, b) => a - b);
     return params;
   });
-  const elements = [...new Set(fp.requirements.flatMap((r) => r.kind === "n-1" ? [r.element] : []))].sort();
+  const elements = [...new Set(fp.requirements.flatMap((r2) => r2.kind === "n-1" ? [r2.element] : []))].sort();
   const budget = { maxWork: fp.budget.maxWork };
-  const specs = [{ r: fp.rValue, challenges: challenges2, seed, budget }];
+  const r = policyR(fp, seed);
+  const specs = [{ r, challenges: challenges2, seed, budget }];
   elements.forEach((element, i) => {
     const n1 = { challenge: "n-1", element };
     if (i === 0) specs[0].challenges.push(n1);
-    else specs.push({ r: fp.rValue, challenges: [n1], seed, budget });
+    else specs.push({ r, challenges: [n1], seed, budget });
   });
   return specs;
 }
@@ -31665,7 +31810,7 @@ function parseDesign(text2, file, options = {}) {
 
 // src/map-mend-step.ts
 var MEND_MAX_EVALUATIONS = 10;
-var MEND_BUDGET_FACTOR = 4;
+var MEND_BUDGET_FACTOR = 1;
 var MEND_MIN_EVALUATIONS = 2;
 function parsed(text2, path, format) {
   if (text2 === null) return null;
@@ -31728,7 +31873,16 @@ async function addMapAndMend(report, input, ctx) {
     });
   }
   const baseSide = comparing ? input.base : void 0;
-  const specs = evaluationSpecs(fp, ctx.seed);
+  const batched = input.head.result.sequential !== void 0;
+  const ran = new Map(input.head.result.evaluation.envelopes.map((e) => [e.challenge, e]));
+  const specs = evaluationSpecs(fp, ctx.seed).map(
+    (spec) => batched ? {
+      ...spec,
+      challenges: spec.challenges.map(
+        (c) => ran.has(c.challenge) && c.challenge !== "regional" ? { ...c, realizations: ran.get(c.challenge).realizations } : c
+      )
+    } : spec
+  );
   const original = budgetSpecs(specs, fp.budget.maxWork, g, baseSide?.graph);
   const work = original.head.reduce((s, spec) => s + planEvaluation(g, spec).work, 0);
   const affordable = work > 0 ? Math.floor(MEND_BUDGET_FACTOR * fp.budget.maxWork / work) : MEND_MAX_EVALUATIONS;
@@ -31737,8 +31891,14 @@ async function addMapAndMend(report, input, ctx) {
     const mended = compileTopology(applyToTopology(headTopo, change));
     const budgeted = budgetSpecs(specs, fp.budget.maxWork, mended, baseSide?.graph);
     const head = await evaluateGraph(mended, void 0, budgeted.head, budgeted.cuts, ctx.request, ctx.deps);
+    if (batched)
+      for (const env of head.result.evaluation.envelopes) {
+        const gate = ran.get(env.challenge);
+        if (gate?.maxRealizations !== void 0 && env.realizations === gate.realizations)
+          env.maxRealizations = gate.maxRealizations;
+      }
     let base = baseSide;
-    if (baseSide && JSON.stringify(budgeted.base) !== JSON.stringify(original.base)) {
+    if (!batched && baseSide && JSON.stringify(budgeted.base) !== JSON.stringify(original.base)) {
       base = await evaluateGraph(
         baseSide.graph,
         baseSide.topology,

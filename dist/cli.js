@@ -25285,12 +25285,36 @@ function createRValue(g, spec, options) {
   validateRSpec(spec);
   const problem = unsupportedMetric(g, spec);
   if (problem) throw new UnsupportedMetricError(problem);
-  const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, options));
+  const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, metricOptions(spec, options)));
   const values = new Float64Array(evaluators.length);
   return (mask) => {
     for (let i = 0; i < evaluators.length; i++) values[i] = evaluators[i](mask).normalized;
     return combineR(spec, values);
   };
+}
+function metricOptions(spec, options) {
+  if (spec.sources === void 0) return options;
+  return { sources: spec.sources, sourceSeed: spec.sourceSeed ?? 0, ...options };
+}
+function samplesSources(g, spec) {
+  return spec.sources !== void 0 && spec.sources < g.n && spec.metrics.some((m) => m.id === "efficiency");
+}
+function rSourceErrors(g, spec, masks) {
+  if (!samplesSources(g, spec)) return masks.map(() => 0);
+  const options = metricOptions(spec);
+  const sampled = spec.metrics.map((m) => m.id === "efficiency" ? getMetric(m.id).create(g, options) : null);
+  const weight2 = spec.metrics.reduce((s, m) => s + m.weight, 0);
+  return masks.map((mask) => {
+    let mean = 0;
+    let most = 0;
+    sampled.forEach((ev, i) => {
+      if (!ev) return;
+      const se = ev(mask).se ?? 0;
+      mean += spec.metrics[i].weight * se / weight2;
+      most = Math.max(most, se);
+    });
+    return spec.combine === "min" ? most : mean;
+  });
 }
 var UNION_FIND_METRICS = /* @__PURE__ */ new Set(["largest_component", "pair_connectivity"]);
 function unionFindR(g, spec) {
@@ -25350,7 +25374,7 @@ function survivorShape(g, mask) {
   }
   return out;
 }
-function hopSearchCost(shape) {
+function hopSearchCost(shape, share = 1) {
   let plain2 = shape.designEntries;
   let words = 0;
   for (let c = 0; c < shape.sizes.length; c++) {
@@ -25360,12 +25384,13 @@ function hopSearchCost(shape) {
     if (n < 2) continue;
     plain2 += sweep;
     const ecc = shape.eccentricities[c];
+    const sources = share < 1 ? Math.ceil((n - 1) * share) : n - 1;
     if (ecc >= LONG_GRAPH_ECCENTRICITY && n < THIN_LEVEL * (ecc + 1)) {
-      plain2 += (n - 1) * sweep;
+      plain2 += sources * sweep;
       continue;
     }
     const levels = LEVELS_PER_ECCENTRICITY * (shape.eccentricities[c] + 1);
-    let left = n - 1;
+    let left = sources;
     while (left > 0) {
       const width2 = left > 64 ? Math.min(256, left) : left;
       words += (width2 > 64 ? 8 : 2) * levels * sweep;
@@ -25379,7 +25404,8 @@ function rCost(g, spec, shape) {
   let total = 0;
   for (const m of spec.metrics) {
     const cost = getMetric(m.id).cost;
-    if (HOP_METRICS.has(m.id)) total += hopSearchCost(shape);
+    if (HOP_METRICS.has(m.id))
+      total += hopSearchCost(shape, m.id === "efficiency" && samplesSources(g, spec) ? spec.sources / g.n : 1);
     else if (cost === "linear") total += scan;
     else if (cost === "spectral") total += scan * SPECTRAL_PRODUCTS;
     else total += scan * Math.max(1, g.n);
@@ -25480,6 +25506,7 @@ var DEFAULT_DESIGN_GLOBS = [
   CSV_DESIGN_GLOB
 ];
 var REGIONAL_UNTIL_KM = 50;
+var DEFAULT_SOURCES = 1024;
 var DEFAULT_ERROR_MULTIPLE = 2;
 var STARTER_POLICY = `# netbrace policy: what a network design must satisfy before a change to it merges.
 # Every key is optional; a key left out takes the value of the built-in policy, which is
@@ -25505,6 +25532,9 @@ r-value:
     pair_connectivity: 1   # share of node pairs that can still reach each other
     efficiency: 1          # mean inverse hop distance
   combine: mean            # mean (weighted) or min
+  # On designs of more sites, efficiency searches from this many seeded sites (the same on base
+  # and head) instead of all: an unbiased estimate whose standard error joins the ±; "all" is exact.
+  sources: 1024
 
 # Challenges, each under a name of your choosing (requirements refer to it).
 #   remove:   nodes | links | risk-groups | region
@@ -26369,6 +26399,14 @@ var policy_schema_default = {
           description: "mean: weighted mean of the normalized metrics; min: the smallest of them (weights ignored).",
           enum: ["mean", "min"],
           default: "mean"
+        },
+        sources: {
+          description: "Sites efficiency searches from: all, or a seeded sample of this many on designs with more sites (an unbiased estimate whose error joins the ±).",
+          oneOf: [
+            { const: "all" },
+            { type: "integer", minimum: 32, maximum: 1e6 }
+          ],
+          default: "all"
         }
       }
     },
@@ -27317,6 +27355,14 @@ function parsePolicyFile(text2, file) {
       })),
       combine: r.combine ?? "mean"
     };
+    const sources = r.sources ?? DEFAULT_SOURCES;
+    if (typeof sources === "number" && spec.metrics.some((m) => m.id === "efficiency")) spec.sources = sources;
+    if (typeof r.sources === "number" && !spec.metrics.some((m) => m.id === "efficiency"))
+      throw new PolicyError(
+        "r-value.sources applies to efficiency, which this r-value does not use",
+        src.where(["r-value", "sources"]),
+        'remove "sources", or add efficiency to r-value.metrics'
+      );
     policy.rValue = { spec, where: src.where(["r-value"], true) };
   }
   const byEngine = /* @__PURE__ */ new Map();
@@ -28525,13 +28571,19 @@ function definitions(f) {
       metrics2.push(seg.code(m.id), seg.text(ev.r.combine === "min" ? "" : ` ${m.weight}`));
     });
     const how = ev.r.combine === "min" ? "the least of " : "the weighted mean of ";
+    const sampling = f.head?.sampling ?? f.base?.sampling;
     out.push({
       term: "R",
       anchor: README_ANCHOR,
       sentence: compact([
         seg.text(`R: ${how}`),
         ...metrics2,
-        seg.text(", each metric scaled to 0–1 with 1 the intact design.")
+        seg.text(", each metric scaled to 0–1 with 1 the intact design."),
+        ...sampling ? [
+          seg.text(
+            ` Here ${sampling.metric} is estimated from ${sampling.sources.toLocaleString("en")} of ${sampling.nodes.toLocaleString("en")} sites as seeded sources (the same on base and head); that leaves R a standard error of up to ${sampling.se.toPrecision(2)}, part of every ±.`
+          )
+        ] : []
       ])
     });
   }
@@ -28559,7 +28611,7 @@ function definitions(f) {
       anchor: README_ANCHOR,
       sentence: [
         seg.text(
-          "±: one standard error of the change, from the same random removals on base and head (paired Monte Carlo)."
+          f.head?.sampling || f.base?.sampling ? "±: one standard error of the change: the same random removals on base and head (paired Monte Carlo) and the sampled sources’ error together." : "±: one standard error of the change, from the same random removals on base and head (paired Monte Carlo)."
         )
       ]
     });
@@ -29537,285 +29589,6 @@ function terminalWidth(io) {
 
 // src/shell/commands/explain.ts
 var import_picocolors2 = __toESM(require_picocolors(), 1);
-var KINDS = ["node", "link", "group"];
-function rankSingleLosses(g, rfn, kinds = KINDS, onStep = () => {
-}, only) {
-  const mask = createMask(g);
-  const intact = rfn(mask);
-  const cuts = findCutElements(g);
-  const bridge = new Set(cuts.bridges);
-  const cutNode = new Set(cuts.cutNodes);
-  const evaluated = { node: 0, link: 0, group: 0 };
-  const hardened = { node: 0, link: 0, group: 0 };
-  const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
-  let total = 0;
-  for (const k of kinds) total += only ? only.get(k)?.size ?? 0 : countOnes(eligible.get(k));
-  const byLine = nodesByLine(g, g.nodeIds.keys());
-  const out = [];
-  let done = 0;
-  for (const kind of kinds) {
-    const ok = eligible.get(kind);
-    const ids = unitIds(g, kind);
-    for (let u = 0; u < unitCount(g, kind); u++) {
-      if (!ok[u]) {
-        hardened[kind]++;
-        continue;
-      }
-      if (only && !only.get(kind)?.has(u)) continue;
-      removeUnit(g, mask, kind, u);
-      const r = rfn(mask);
-      const comps = findComponents(g, mask);
-      const cutsOff = [];
-      for (const v of byLine) if (comps.label[v] >= 0 && comps.label[v] !== comps.largest) cutsOff.push(g.nodeIds[v]);
-      restoreUnit(g, mask, kind, u);
-      evaluated[kind]++;
-      out.push({
-        kind,
-        id: ids[u],
-        line: kind === "node" ? g.nodeLine[u] : kind === "link" ? g.linkLine[u] : g.groupLine[u],
-        r,
-        drop: intact - r,
-        cutsOff,
-        singlePointOfFailure: kind === "node" ? cutNode.has(u) : kind === "link" ? bridge.has(u) : false,
-        order: out.length
-      });
-      onStep(++done, total);
-    }
-  }
-  out.sort(
-    (a, b) => a.r - b.r || kinds.indexOf(a.kind) - kinds.indexOf(b.kind) || a.line - b.line || a.order - b.order
-  );
-  return { intact, evaluated, hardened, ranked: out.map(({ order: _order, ...rest }) => rest) };
-}
-function metricR(metricIds) {
-  if (metricIds.length === 0) return void 0;
-  for (const id2 of metricIds) {
-    if (!isMetricId(id2)) getMetric(id2);
-  }
-  return {
-    spec: {
-      metrics: metricIds.map((id2) => ({ id: id2, weight: 1 })),
-      combine: "mean"
-    },
-    source: metricIds.length === 1 ? "--metric" : "--metric (equal weights)"
-  };
-}
-var CHOSEN = "single points of failure (cut sites, bridges) first, then shared-risk groups, then the other sites and links by the links they touch, most first (a share for each kind); the rest are not ranked, and one of them may hurt more than those shown";
-function planSingleLosses(g, spec, kinds, maxWork) {
-  const perCase = rCost(g, spec, survivorShape(g)) + passCost(g);
-  const units = /* @__PURE__ */ new Map();
-  const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
-  let total = 0;
-  for (const k of kinds) total += countOnes(eligible.get(k));
-  const work = (total + 1) * perCase;
-  const fit2 = Math.max(0, Math.floor(maxWork / perCase) - 1);
-  if (work <= maxWork || fit2 >= total) {
-    for (const k of kinds) {
-      const ok = eligible.get(k);
-      units.set(k, new Set(Array.from({ length: ok.length }, (_, u) => u).filter((u) => ok[u])));
-    }
-    return { units, perCase };
-  }
-  for (const k of kinds) units.set(k, /* @__PURE__ */ new Set());
-  let room = fit2;
-  const take = (k, u) => {
-    if (room > 0 && !units.get(k).has(u)) {
-      units.get(k).add(u);
-      room--;
-    }
-  };
-  const cuts = findCutElements(g);
-  const okOf = (k) => eligible.get(k);
-  if (okOf("node")) {
-    for (const v of [...cuts.cutNodes].sort((a, b) => a - b)) if (okOf("node")[v]) take("node", v);
-  }
-  if (okOf("link")) {
-    for (const e of [...cuts.bridges].sort((a, b) => a - b)) if (okOf("link")[e]) take("link", e);
-  }
-  if (okOf("group")) {
-    for (let u = 0; u < g.groupIds.length; u++) if (okOf("group")[u]) take("group", u);
-  }
-  const degree2 = (v) => g.offsets[v + 1] - g.offsets[v];
-  const rest = /* @__PURE__ */ new Map();
-  for (const k of ["node", "link"]) {
-    const ok = okOf(k);
-    if (!ok) continue;
-    const score = k === "node" ? degree2 : (e) => degree2(g.linkSource[e]) + degree2(g.linkTarget[e]) - 2;
-    const list2 = Array.from({ length: ok.length }, (_, u) => u).filter((u) => ok[u] && !units.get(k).has(u));
-    list2.sort((a, b) => score(b) - score(a) || a - b);
-    rest.set(k, list2);
-  }
-  const left = [...rest.values()].reduce((s, l) => s + l.length, 0);
-  const budget = room;
-  for (const [k, list2] of rest)
-    for (const u of list2.slice(0, Math.floor(budget * list2.length / Math.max(1, left)))) take(k, u);
-  for (const [k, list2] of rest) for (const u of list2) take(k, u);
-  let evaluated = 0;
-  for (const s of units.values()) evaluated += s.size;
-  return { units, perCase, reduced: { evaluated, total, maxWork, work, chosen: CHOSEN } };
-}
-function explainDesign(t, spec, source, kinds = KINDS, progress, g = compileTopology(t), maxWork = Infinity) {
-  const rfn = createRValue(g, spec, t.latencyBudget !== void 0 ? { latencyBudget: t.latencyBudget } : void 0);
-  const plan = planSingleLosses(g, spec, kinds, maxWork);
-  const res = rankSingleLosses(g, rfn, kinds, (done) => progress?.update(done), plan.reduced ? plan.units : void 0);
-  const labels2 = new Map(t.nodes.filter((n) => n.label).map((n) => [n.id, n.label]));
-  return {
-    file: t.file,
-    r: spec,
-    rSource: source,
-    intact: res.intact,
-    evaluated: res.evaluated,
-    hardened: res.hardened,
-    elements: res.ranked.map((e, i) => {
-      const label = e.kind === "node" ? labels2.get(e.id) : void 0;
-      return { rank: i + 1, ...e, ...label !== void 0 && label !== e.id ? { label } : {} };
-    }),
-    ...plan.reduced ? { reduced: plan.reduced } : {}
-  };
-}
-function visits2(n) {
-  return n >= 1e6 ? n.toExponential(1).replace("e+", "e").replace(".0e", "e") : String(n);
-}
-var r4 = (v) => v.toFixed(4);
-var KIND_WORD2 = { node: "site", link: "link", group: "duct/group" };
-function formatExplanation(x, top, color, width2) {
-  const c = (0, import_picocolors2.createColors)(color);
-  const metrics2 = x.r.metrics.map((m) => `${m.id}${x.r.metrics.length > 1 ? ` ${m.weight}` : ""}`).join(", ");
-  const out = [];
-  out.push(c.bold(`${x.file} — single losses ranked by the R they leave`));
-  out.push(
-    c.dim(
-      `R = ${x.r.combine === "min" ? "minimum" : x.r.metrics.length > 1 ? "weighted mean" : "normalized"} of ${metrics2} (from ${x.rSource})`
-    )
-  );
-  const hard = KINDS.filter((k) => x.hardened[k] > 0).map(
-    (k) => `${x.hardened[k]} ${KIND_WORD2[k]}${x.hardened[k] === 1 ? "" : "s"}`
-  );
-  out.push(
-    `intact R ${r4(x.intact)} · evaluated ${x.evaluated.node} sites, ${x.evaluated.link} links, ${x.evaluated.group} shared-risk groups` + (hard.length ? ` · hardened, not removed: ${hard.join(", ")}` : "")
-  );
-  if (x.reduced) {
-    const r = x.reduced;
-    const line = `reduced: ${r.evaluated} of ${r.total} single losses evaluated within the work budget (${visits2(r.maxWork)} element visits; all of them need ${visits2(r.work)}): ${r.chosen}. Raise the policy's budget or give --max-work to rank them all.`;
-    for (const l of wrap(line, width2)) out.push(c.yellow(l));
-  }
-  out.push("");
-  const rows = x.elements.slice(0, top);
-  const shown2 = (e) => e.label && e.label.toLowerCase() !== e.id.toLowerCase() ? `${e.id} (${e.label})` : e.id;
-  const idW = Math.min(34, Math.max(7, ...rows.map((e) => shown2(e).length)));
-  out.push(
-    c.bold(
-      `${"#".padStart(3)}  ${"kind".padEnd(10)}  ${"element".padEnd(idW)}  ${"line".padStart(5)}  ${"R left".padStart(7)}  ${"drop".padStart(7)}  cuts off`
-    )
-  );
-  for (const e of rows) {
-    const name = shown2(e).slice(0, idW);
-    const cut = e.cutsOff.length ? `${e.cutsOff.length} site${e.cutsOff.length === 1 ? "" : "s"}: ${e.cutsOff.slice(0, 6).join(", ")}${e.cutsOff.length > 6 ? ", …" : ""}` : "–";
-    const prefix = `${String(e.rank).padStart(3)}  ${KIND_WORD2[e.kind].padEnd(10)}  ${name.padEnd(idW)}  ${String(e.line).padStart(5)}  ${r4(e.r).padStart(7)}  ${("−" + r4(Math.max(0, e.drop))).padStart(7)}  `;
-    const room = Math.max(16, width2 - prefix.length);
-    const line = prefix + (cut.length > room ? `${cut.slice(0, room - 1)}…` : cut);
-    out.push(e.cutsOff.length ? c.red(line) : e.drop > 0 ? line : c.dim(line));
-  }
-  if (x.elements.length > rows.length)
-    out.push(c.dim(`  … ${x.elements.length - rows.length} more (--top N shows more)`));
-  out.push("");
-  const note2 = "Start at the top: each row is one element whose loss alone costs the most R. A row that cuts sites off is a single point of failure. A duct is one event: declare risk_groups for links that share one.";
-  for (const l of wrap(note2, width2)) out.push(c.dim(l));
-  for (const l of wrap(`Caution: ${CAUTION}`, width2)) out.push(c.dim(l));
-  return out.join("\n") + "\n";
-}
-var HELP2 = `Usage: netbrace explain FILE [--metric ID]... [--top N] [--kind K] [--policy FILE] [--max-work W] [--json]
-
-The planner's to-do list: removes every site, every link and every shared-risk group
-(a duct: all its links at once) on its own, computes R on what is left, and ranks them
-by the R they leave, worst first. Each row gives the element's line in FILE, the R it
-leaves, the drop from the intact R, and the sites it cuts off from the largest part.
-
-The policy is check's: --policy FILE, else ${DEFAULT_POLICY_PATH} at the root of the git
-repository that holds the working directory (outside git: in the working directory), else
-the built-in policy. R is the --metric options (equal weights), else the policy's r-value for
-FILE. The work is held to the policy's budget for FILE (or --max-work): on a design too big
-to rank in full, single points of failure come first, then shared-risk groups, then the
-sites and links that touch the most links, and the output says how many were left out.
-Hardened elements are never removed.
-
-Options:
-  --metric ID    a metric for R (repeat for an equal-weight mean); one of:
-                 ${metrics.map((m) => m.id).join(", ")}
-  --top N        show the N worst rows (default 15; --json lists all)
-  --kind K       node, link, group or all (default all)
-  --policy FILE  the policy file (default ${DEFAULT_POLICY_PATH} at the repository root, if present)
-  --max-work W   work budget in element visits (default: the policy's budget for FILE)
-  --format F     read FILE as F (${FORMAT_CHOICES}) instead of by extension
-  --json         print the ranking as JSON: {file, r, intact, evaluated, hardened, elements,
-                 reduced (when the budget left losses out)}
-
-Examples:
-  netbrace explain designs/backbone.net.yaml
-  netbrace explain designs/backbone.net.yaml --metric largest_component --top 5
-  netbrace explain core.graphml --kind link --json | jq '.elements[0]'
-  netbrace explain big.graphml --max-work 1e10      rank more of a big design
-
-Exit codes:
-  0  the ranking was printed
-  1  FILE could not be read (the message gives file:line:col), or R cannot be computed
-     on it (a metric that needs demands or link lengths the design does not have)
-  2  usage or configuration error (bad option, unknown metric, broken policy)
-`;
-var explainCommand = {
-  name: "explain",
-  summary: "rank the sites, links and ducts whose single loss hurts R most (with their lines)",
-  help: HELP2,
-  async run(args, io) {
-    const parsed2 = parseCommandArgs("explain", args, {
-      metric: { type: "string", multiple: true },
-      top: { type: "string" },
-      kind: { type: "string" },
-      policy: { type: "string" },
-      "max-work": { type: "string" },
-      format: { type: "string" },
-      json: { type: "boolean" }
-    });
-    const [file, ...extra] = parsed2.positionals;
-    if (file === void 0)
-      throw new UsageError("explain needs a design FILE", "netbrace explain designs/backbone.net.yaml");
-    if (extra.length)
-      throw new UsageError(`explain takes one FILE, got ${parsed2.positionals.length}`, "run it once per file");
-    const top = wholeNumber("--top", parsed2.values.top, 1) ?? 15;
-    const kindArg = parsed2.values.kind ?? "all";
-    if (!["node", "link", "group", "all"].includes(kindArg)) {
-      throw new UsageError(`--kind must be node, link, group or all, not "${kindArg}"`);
-    }
-    const kinds = kindArg === "all" ? KINDS : [kindArg];
-    const options = { cwd: io.cwd };
-    if (parsed2.values.format !== void 0) options.format = parseFormatName(parsed2.values.format);
-    const maxWorkArg = finiteNumber("--max-work", parsed2.values["max-work"], (x2) => x2 > 0, "a number > 0");
-    const local = await readLocalPolicy(io, parsed2.values.policy);
-    const fp = designPolicy(local, io, file);
-    const { spec, source } = metricR(parsed2.values.metric ?? []) ?? { spec: fp.rValue, source: local.source };
-    const maxWork = maxWorkArg !== void 0 ? budgetWork({ work: maxWorkArg }) : fp.budget.maxWork;
-    if (options.format === void 0 && fp.format) options.format = fp.format;
-    const t = readDesign(file, options);
-    const g = compileTopology(t);
-    const unsupported = unsupportedMetric(g, spec);
-    if (unsupported) throw new DesignError(unsupported.message, { file }, unsupported.hint);
-    const total = [...planSingleLosses(g, spec, kinds, maxWork).units.values()].reduce((s, u) => s + u.size, 0);
-    const progress = createProgress(io, { label: `explain ${file}`, total });
-    let x;
-    try {
-      x = explainDesign(t, spec, source, kinds, progress, g, maxWork);
-    } finally {
-      progress.finish();
-    }
-    if (parsed2.values.json) io.stdout(`${JSON.stringify(x, null, 2)}
-`);
-    else io.stdout(formatExplanation(x, top, colorEnabled(io), terminalWidth(io)));
-    return 0;
-  }
-};
-
-// src/shell/commands/envelope.ts
-import { availableParallelism } from "node:os";
 
 // src/graph/element.ts
 function reportElement(g, kind, i) {
@@ -30143,6 +29916,10 @@ function challengeKind(g, params) {
 function attackSteps(g, kind, until) {
   return stepsAt(until, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
 }
+var ATTACK_EVALUATIONS = 200;
+function attackStride(steps, free) {
+  return free || steps <= ATTACK_EVALUATIONS ? 1 : Math.ceil(steps / ATTACK_EVALUATIONS);
+}
 var StepEvaluator = class {
   constructor(g, spec) {
     this.g = g;
@@ -30209,6 +29986,24 @@ var StepEvaluator = class {
     memo.rLast = r;
     return r;
   }
+  /**
+   * R after every step k = 0..len, computed after every `every`-th removal and after the last,
+   * and read linearly between them (attackStride says why).
+   */
+  strided(kind, order, len, every) {
+    const at = [];
+    for (let k = 0; k < len; k += every) at.push(k);
+    at.push(len);
+    const computed = this.at(kind, order, len, at, new Float64Array(at.length));
+    const out = new Float64Array(len + 1);
+    for (let i = 0; i + 1 < at.length; i++) {
+      const a = at[i];
+      const b = at[i + 1];
+      for (let k = a; k < b; k++) out[k] = lerp(computed[i], computed[i + 1], (k - a) / (b - a));
+    }
+    out[len] = computed[at.length - 1];
+    return out;
+  }
   /** R after every step k = 0..len. */
   everyStep(kind, order, len) {
     const steps = new Int32Array(len + 1);
@@ -30236,7 +30031,9 @@ function runTask(g, plan, task) {
       const c = getChallenge(params.challenge);
       if (c.type !== "attack") throw new TypeError(`${params.challenge} is not an attack`);
       const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: ev.r });
-      return { type: "attack", sequence, values: ev.everyStep(c.kind, sequence, sequence.length) };
+      const every = attackStride(sequence.length, ev.stepsAreFree);
+      if (every === 1) return { type: "attack", sequence, values: ev.everyStep(c.kind, sequence, sequence.length) };
+      return { type: "attack", sequence, values: ev.strided(c.kind, sequence, sequence.length, every), every };
     }
     case "contingency": {
       const c = getChallenge(params.challenge);
@@ -30569,13 +30366,14 @@ function attackCurveCost(c, p, kind, k) {
     }
     if (!order) return (k + 1) * c.intact;
     const len = Math.min(k, order.length);
+    const every = attackStride(len, false);
     const at = [
       ...new Set(Array.from({ length: ATTACK_SAMPLES }, (_, i) => Math.round(i * len / (ATTACK_SAMPLES - 1))))
     ];
     const cost = at.map((s) => c.along(kind, order, s));
     let sum = cost[0];
-    for (let i = 1; i < at.length; i++) sum += (cost[i - 1] + cost[i]) / 2 * (at[i] - at[i - 1]);
-    return sum + (k - len) * cost[cost.length - 1];
+    for (let i = 1; i < at.length; i++) sum += (cost[i - 1] + cost[i]) / 2 * ((at[i] - at[i - 1]) / every);
+    return sum + (k - len) * cost[cost.length - 1] / every;
   });
 }
 function estimate(g, it, c) {
@@ -30732,6 +30530,7 @@ function assembleEvaluation(g, plan, tasks, results) {
         count,
         area: attackArea(values, until)
       };
+      if (res.every !== void 0) curve.every = res.every;
       attackOf2.set(item, curve);
       evaluation.attacks.push(curve);
     } else {
@@ -30744,6 +30543,8 @@ function assembleEvaluation(g, plan, tasks, results) {
       if (target) target.worstCase = worst.result;
     }
   });
+  const sampling = sourceSampling(g, plan, tasks, results);
+  if (sampling) evaluation.sampling = sampling;
   for (const env of evaluation.envelopes) {
     if (env.xUnit !== "fraction") continue;
     const candidates2 = evaluation.attacks.filter((a) => a.kind === env.kind);
@@ -30761,6 +30562,38 @@ function assembleEvaluation(g, plan, tasks, results) {
     if (gap !== null) env.attackGap = { value: gap, attack: worst.challenge };
   }
   return { evaluation, samples, labels: labels2 };
+}
+function sourceSampling(g, plan, tasks, results) {
+  if (!samplesSources(g, plan.r)) return void 0;
+  const masks = [createMask(g)];
+  plan.items.forEach((it, item) => {
+    const mine = results.filter((_, i) => tasks[i].item === item);
+    if (it.type === "band") {
+      const values = mine.flatMap((res) => res.type === "band" ? res.values : []);
+      if (values.length === 0) return;
+      const score = values.map((v) => gridMean(v));
+      const weakest2 = score.reduce((best, v, r) => v < score[best] ? r : best, 0);
+      const bp = bandPlan(g, it.params);
+      const order = new Int32Array(bp.maxUnits);
+      const steps = new Float64Array(bp.x.length);
+      const len = bp.realize(weakest2, order, steps);
+      for (const c of steps) {
+        if (!(c > 0)) continue;
+        const mask = createMask(g);
+        for (let i = 0; i < Math.min(len, Math.ceil(c)); i++) removeUnit(g, mask, bp.kind, order[i]);
+        masks.push(mask);
+      }
+    } else if (it.type === "attack") {
+      const res = mine.find((r) => r.type === "attack");
+      const c = getChallenge(it.params.challenge);
+      if (!res || c.type !== "attack" || res.sequence.length === 0) return;
+      const mask = createMask(g);
+      for (const u of res.sequence) removeUnit(g, mask, c.kind, u);
+      masks.push(mask);
+    }
+  });
+  const se = Math.max(...rSourceErrors(g, plan.r, masks));
+  return { metric: "efficiency", sources: plan.r.sources, nodes: g.n, se };
 }
 function buildEnvelope(g, it, bp, values, ev) {
   const p = it.params;
@@ -30909,7 +30742,12 @@ function decide(input) {
   const env = input.head.evaluation.envelopes.find((e) => e.challenge === c.engine);
   const samples = input.head.samples.get(c.engine);
   if (!env || !samples) return void 0;
-  const head = sideBounds(stat2, env, samples, DECISION_ALPHA);
+  const srcHead = input.head.evaluation.sampling?.se ?? 0;
+  const srcBase = input.base?.evaluation.sampling?.se ?? 0;
+  const sampled = srcHead > 0 || srcBase > 0;
+  const alpha = sampled ? DECISION_ALPHA / 2 : DECISION_ALPHA;
+  const z = normalQuantile(1 - DECISION_ALPHA / 4);
+  const head = widen(sideBounds(stat2, env, samples, alpha), z * srcHead);
   if (!head) return void 0;
   const out = { head };
   if (stat2.kind === "min") out.needsAll = true;
@@ -30925,9 +30763,12 @@ function decide(input) {
     const baseSamples = base.samples.get(c.engine);
     if (base === input.head) out.delta = { lo: 0, hi: 0 };
     else if (baseEnv && baseSamples && stat2.kind !== "min") {
-      const h = sideBounds(stat2, env, samples, DECISION_ALPHA / 2);
-      const b = sideBounds(stat2, baseEnv, baseSamples, DECISION_ALPHA / 2);
-      if (h && b) out.delta = { lo: h.lo - b.hi, hi: h.hi - b.lo };
+      const h = sideBounds(stat2, env, samples, alpha / 2);
+      const b = sideBounds(stat2, baseEnv, baseSamples, alpha / 2);
+      if (h && b) {
+        const shift = z * Math.hypot(srcHead, srcBase);
+        out.delta = { lo: h.lo - b.hi - shift, hi: h.hi - b.lo + shift };
+      }
     }
     if (out.delta) {
       const allowance = allowanceOf(input.weakening, input.baseValue);
@@ -30936,6 +30777,9 @@ function decide(input) {
     } else out.weakening = "open";
   }
   return out;
+}
+function widen(b, by) {
+  return b && by > 0 ? { lo: b.lo - by, hi: b.hi + by } : b;
 }
 function isOpen(d) {
   return d.floor === "open" || d.weakening === "open";
@@ -31060,6 +30904,13 @@ function pairedBand(base, head, envB, envH, statistic, x) {
 }
 
 // src/gate/measure.ts
+function sourceSe(side) {
+  return side?.result.evaluation.sampling?.se ?? 0;
+}
+function sampledHead(head) {
+  const s = head.result.evaluation.sampling;
+  return s ? { sourceSe: s.se, sources: { sources: s.sources, nodes: s.nodes } } : {};
+}
 var MAX_ELEMENTS = 10;
 function locate(el, head, base) {
   return locateElement(el, head, base);
@@ -31217,7 +31068,9 @@ function measure(req, challenges2, head, base) {
       base: baseEnv ? p.base : null,
       head: p.head,
       delta: baseEnv ? same2 ? 0 : p.delta : null,
-      se: baseEnv ? same2 ? 0 : p.se : null,
+      // Sampled sources add an error the realizations do not show (the sample is fixed).
+      se: baseEnv ? same2 ? 0 : Math.hypot(p.se, sourceSe(base), sourceSe(head)) : null,
+      ...sampledHead(head),
       higherIsBetter,
       elements: sequenceElements(
         env.weakest[0],
@@ -31234,7 +31087,7 @@ function measure(req, challenges2, head, base) {
     if (reduction.reduced !== void 0) {
       out.reduced = reduction.reduced;
       const h2 = realizationsOf(env, c, head.graph);
-      if (h2.ran < h2.asked) out.headSe = ownSe(head.result, env, stat2, x);
+      if (h2.ran < h2.asked) out.headSe = Math.hypot(ownSe(head.result, env, stat2, x), sourceSe(head));
     }
     if (reduction.unpaired !== void 0) out.unpaired = reduction.unpaired;
     return out;
@@ -31254,7 +31107,8 @@ function measure(req, challenges2, head, base) {
     base: bv,
     head: h.value,
     delta: bv === null ? null : same ? 0 : h.value - bv,
-    se: bv === null ? null : 0,
+    se: bv === null ? null : same ? 0 : Math.hypot(sourceSe(base), sourceSe(head)),
+    ...sampledHead(head),
     higherIsBetter,
     elements: h.elements,
     ...h.incomplete !== void 0 ? { incomplete: h.incomplete } : {}
@@ -31428,20 +31282,24 @@ function rangesText(d) {
 }
 
 // src/gate-request.ts
+function policyR(fp, seed) {
+  return fp.rValue.sources !== void 0 ? { ...fp.rValue, sourceSeed: seed } : fp.rValue;
+}
 function evaluationSpecs(fp, seed) {
   const challenges2 = fp.challenges.map((c) => {
-    const at = fp.requirements.filter((r) => r.kind === "r-threshold" && r.challenge === c.name && r.at !== void 0).map((r) => r.kind === "r-threshold" ? r.at : 0);
+    const at = fp.requirements.filter((r2) => r2.kind === "r-threshold" && r2.challenge === c.name && r2.at !== void 0).map((r2) => r2.kind === "r-threshold" ? r2.at : 0);
     const params = { ...c.params };
     if (c.random && at.length > 0) params.at = [...new Set(at)].sort((a, b) => a - b);
     return params;
   });
-  const elements = [...new Set(fp.requirements.flatMap((r) => r.kind === "n-1" ? [r.element] : []))].sort();
+  const elements = [...new Set(fp.requirements.flatMap((r2) => r2.kind === "n-1" ? [r2.element] : []))].sort();
   const budget = { maxWork: fp.budget.maxWork };
-  const specs = [{ r: fp.rValue, challenges: challenges2, seed, budget }];
+  const r = policyR(fp, seed);
+  const specs = [{ r, challenges: challenges2, seed, budget }];
   elements.forEach((element, i) => {
     const n1 = { challenge: "n-1", element };
     if (i === 0) specs[0].challenges.push(n1);
-    else specs.push({ r: fp.rValue, challenges: [n1], seed, budget });
+    else specs.push({ r, challenges: [n1], seed, budget });
   });
   return specs;
 }
@@ -31624,6 +31482,287 @@ async function evaluateSequentially(fp, head, base, specs, comparing, request, d
     }
   }
 }
+
+// src/shell/commands/explain.ts
+var KINDS = ["node", "link", "group"];
+function rankSingleLosses(g, rfn, kinds = KINDS, onStep = () => {
+}, only) {
+  const mask = createMask(g);
+  const intact = rfn(mask);
+  const cuts = findCutElements(g);
+  const bridge = new Set(cuts.bridges);
+  const cutNode = new Set(cuts.cutNodes);
+  const evaluated = { node: 0, link: 0, group: 0 };
+  const hardened = { node: 0, link: 0, group: 0 };
+  const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
+  let total = 0;
+  for (const k of kinds) total += only ? only.get(k)?.size ?? 0 : countOnes(eligible.get(k));
+  const byLine = nodesByLine(g, g.nodeIds.keys());
+  const out = [];
+  let done = 0;
+  for (const kind of kinds) {
+    const ok = eligible.get(kind);
+    const ids = unitIds(g, kind);
+    for (let u = 0; u < unitCount(g, kind); u++) {
+      if (!ok[u]) {
+        hardened[kind]++;
+        continue;
+      }
+      if (only && !only.get(kind)?.has(u)) continue;
+      removeUnit(g, mask, kind, u);
+      const r = rfn(mask);
+      const comps = findComponents(g, mask);
+      const cutsOff = [];
+      for (const v of byLine) if (comps.label[v] >= 0 && comps.label[v] !== comps.largest) cutsOff.push(g.nodeIds[v]);
+      restoreUnit(g, mask, kind, u);
+      evaluated[kind]++;
+      out.push({
+        kind,
+        id: ids[u],
+        line: kind === "node" ? g.nodeLine[u] : kind === "link" ? g.linkLine[u] : g.groupLine[u],
+        r,
+        drop: intact - r,
+        cutsOff,
+        singlePointOfFailure: kind === "node" ? cutNode.has(u) : kind === "link" ? bridge.has(u) : false,
+        order: out.length
+      });
+      onStep(++done, total);
+    }
+  }
+  out.sort(
+    (a, b) => a.r - b.r || kinds.indexOf(a.kind) - kinds.indexOf(b.kind) || a.line - b.line || a.order - b.order
+  );
+  return { intact, evaluated, hardened, ranked: out.map(({ order: _order, ...rest }) => rest) };
+}
+function metricR(metricIds) {
+  if (metricIds.length === 0) return void 0;
+  for (const id2 of metricIds) {
+    if (!isMetricId(id2)) getMetric(id2);
+  }
+  return {
+    spec: {
+      metrics: metricIds.map((id2) => ({ id: id2, weight: 1 })),
+      combine: "mean"
+    },
+    source: metricIds.length === 1 ? "--metric" : "--metric (equal weights)"
+  };
+}
+var CHOSEN = "single points of failure (cut sites, bridges) first, then shared-risk groups, then the other sites and links by the links they touch, most first (a share for each kind); the rest are not ranked, and one of them may hurt more than those shown";
+function planSingleLosses(g, spec, kinds, maxWork) {
+  const perCase = rCost(g, spec, survivorShape(g)) + passCost(g);
+  const units = /* @__PURE__ */ new Map();
+  const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
+  let total = 0;
+  for (const k of kinds) total += countOnes(eligible.get(k));
+  const work = (total + 1) * perCase;
+  const fit2 = Math.max(0, Math.floor(maxWork / perCase) - 1);
+  if (work <= maxWork || fit2 >= total) {
+    for (const k of kinds) {
+      const ok = eligible.get(k);
+      units.set(k, new Set(Array.from({ length: ok.length }, (_, u) => u).filter((u) => ok[u])));
+    }
+    return { units, perCase };
+  }
+  for (const k of kinds) units.set(k, /* @__PURE__ */ new Set());
+  let room = fit2;
+  const take = (k, u) => {
+    if (room > 0 && !units.get(k).has(u)) {
+      units.get(k).add(u);
+      room--;
+    }
+  };
+  const cuts = findCutElements(g);
+  const okOf = (k) => eligible.get(k);
+  if (okOf("node")) {
+    for (const v of [...cuts.cutNodes].sort((a, b) => a - b)) if (okOf("node")[v]) take("node", v);
+  }
+  if (okOf("link")) {
+    for (const e of [...cuts.bridges].sort((a, b) => a - b)) if (okOf("link")[e]) take("link", e);
+  }
+  if (okOf("group")) {
+    for (let u = 0; u < g.groupIds.length; u++) if (okOf("group")[u]) take("group", u);
+  }
+  const degree2 = (v) => g.offsets[v + 1] - g.offsets[v];
+  const rest = /* @__PURE__ */ new Map();
+  for (const k of ["node", "link"]) {
+    const ok = okOf(k);
+    if (!ok) continue;
+    const score = k === "node" ? degree2 : (e) => degree2(g.linkSource[e]) + degree2(g.linkTarget[e]) - 2;
+    const list2 = Array.from({ length: ok.length }, (_, u) => u).filter((u) => ok[u] && !units.get(k).has(u));
+    list2.sort((a, b) => score(b) - score(a) || a - b);
+    rest.set(k, list2);
+  }
+  const left = [...rest.values()].reduce((s, l) => s + l.length, 0);
+  const budget = room;
+  for (const [k, list2] of rest)
+    for (const u of list2.slice(0, Math.floor(budget * list2.length / Math.max(1, left)))) take(k, u);
+  for (const [k, list2] of rest) for (const u of list2) take(k, u);
+  let evaluated = 0;
+  for (const s of units.values()) evaluated += s.size;
+  return { units, perCase, reduced: { evaluated, total, maxWork, work, chosen: CHOSEN } };
+}
+function explainDesign(t, spec, source, kinds = KINDS, progress, g = compileTopology(t), maxWork = Infinity) {
+  const rfn = createRValue(g, spec, t.latencyBudget !== void 0 ? { latencyBudget: t.latencyBudget } : void 0);
+  const plan = planSingleLosses(g, spec, kinds, maxWork);
+  const res = rankSingleLosses(g, rfn, kinds, (done) => progress?.update(done), plan.reduced ? plan.units : void 0);
+  const labels2 = new Map(t.nodes.filter((n) => n.label).map((n) => [n.id, n.label]));
+  return {
+    file: t.file,
+    r: spec,
+    rSource: source,
+    intact: res.intact,
+    evaluated: res.evaluated,
+    hardened: res.hardened,
+    elements: res.ranked.map((e, i) => {
+      const label = e.kind === "node" ? labels2.get(e.id) : void 0;
+      return { rank: i + 1, ...e, ...label !== void 0 && label !== e.id ? { label } : {} };
+    }),
+    ...plan.reduced ? { reduced: plan.reduced } : {}
+  };
+}
+function visits2(n) {
+  return n >= 1e6 ? n.toExponential(1).replace("e+", "e").replace(".0e", "e") : String(n);
+}
+var r4 = (v) => v.toFixed(4);
+var KIND_WORD2 = { node: "site", link: "link", group: "duct/group" };
+function formatExplanation(x, top, color, width2) {
+  const c = (0, import_picocolors2.createColors)(color);
+  const metrics2 = x.r.metrics.map((m) => `${m.id}${x.r.metrics.length > 1 ? ` ${m.weight}` : ""}`).join(", ");
+  const out = [];
+  out.push(c.bold(`${x.file} — single losses ranked by the R they leave`));
+  out.push(
+    c.dim(
+      `R = ${x.r.combine === "min" ? "minimum" : x.r.metrics.length > 1 ? "weighted mean" : "normalized"} of ${metrics2} (from ${x.rSource})`
+    )
+  );
+  const hard = KINDS.filter((k) => x.hardened[k] > 0).map(
+    (k) => `${x.hardened[k]} ${KIND_WORD2[k]}${x.hardened[k] === 1 ? "" : "s"}`
+  );
+  out.push(
+    `intact R ${r4(x.intact)} · evaluated ${x.evaluated.node} sites, ${x.evaluated.link} links, ${x.evaluated.group} shared-risk groups` + (hard.length ? ` · hardened, not removed: ${hard.join(", ")}` : "")
+  );
+  if (x.reduced) {
+    const r = x.reduced;
+    const line = `reduced: ${r.evaluated} of ${r.total} single losses evaluated within the work budget (${visits2(r.maxWork)} element visits; all of them need ${visits2(r.work)}): ${r.chosen}. Raise the policy's budget or give --max-work to rank them all.`;
+    for (const l of wrap(line, width2)) out.push(c.yellow(l));
+  }
+  out.push("");
+  const rows = x.elements.slice(0, top);
+  const shown2 = (e) => e.label && e.label.toLowerCase() !== e.id.toLowerCase() ? `${e.id} (${e.label})` : e.id;
+  const idW = Math.min(34, Math.max(7, ...rows.map((e) => shown2(e).length)));
+  out.push(
+    c.bold(
+      `${"#".padStart(3)}  ${"kind".padEnd(10)}  ${"element".padEnd(idW)}  ${"line".padStart(5)}  ${"R left".padStart(7)}  ${"drop".padStart(7)}  cuts off`
+    )
+  );
+  for (const e of rows) {
+    const name = shown2(e).slice(0, idW);
+    const cut = e.cutsOff.length ? `${e.cutsOff.length} site${e.cutsOff.length === 1 ? "" : "s"}: ${e.cutsOff.slice(0, 6).join(", ")}${e.cutsOff.length > 6 ? ", …" : ""}` : "–";
+    const prefix = `${String(e.rank).padStart(3)}  ${KIND_WORD2[e.kind].padEnd(10)}  ${name.padEnd(idW)}  ${String(e.line).padStart(5)}  ${r4(e.r).padStart(7)}  ${("−" + r4(Math.max(0, e.drop))).padStart(7)}  `;
+    const room = Math.max(16, width2 - prefix.length);
+    const line = prefix + (cut.length > room ? `${cut.slice(0, room - 1)}…` : cut);
+    out.push(e.cutsOff.length ? c.red(line) : e.drop > 0 ? line : c.dim(line));
+  }
+  if (x.elements.length > rows.length)
+    out.push(c.dim(`  … ${x.elements.length - rows.length} more (--top N shows more)`));
+  out.push("");
+  const note2 = "Start at the top: each row is one element whose loss alone costs the most R. A row that cuts sites off is a single point of failure. A duct is one event: declare risk_groups for links that share one.";
+  for (const l of wrap(note2, width2)) out.push(c.dim(l));
+  for (const l of wrap(`Caution: ${CAUTION}`, width2)) out.push(c.dim(l));
+  return out.join("\n") + "\n";
+}
+var HELP2 = `Usage: netbrace explain FILE [--metric ID]... [--top N] [--kind K] [--policy FILE] [--max-work W] [--json]
+
+The planner's to-do list: removes every site, every link and every shared-risk group
+(a duct: all its links at once) on its own, computes R on what is left, and ranks them
+by the R they leave, worst first. Each row gives the element's line in FILE, the R it
+leaves, the drop from the intact R, and the sites it cuts off from the largest part.
+
+The policy is check's: --policy FILE, else ${DEFAULT_POLICY_PATH} at the root of the git
+repository that holds the working directory (outside git: in the working directory), else
+the built-in policy. R is the --metric options (equal weights), else the policy's r-value for
+FILE. The work is held to the policy's budget for FILE (or --max-work): on a design too big
+to rank in full, single points of failure come first, then shared-risk groups, then the
+sites and links that touch the most links, and the output says how many were left out.
+Hardened elements are never removed.
+
+Options:
+  --metric ID    a metric for R (repeat for an equal-weight mean); one of:
+                 ${metrics.map((m) => m.id).join(", ")}
+  --top N        show the N worst rows (default 15; --json lists all)
+  --kind K       node, link, group or all (default all)
+  --policy FILE  the policy file (default ${DEFAULT_POLICY_PATH} at the repository root, if present)
+  --max-work W   work budget in element visits (default: the policy's budget for FILE)
+  --format F     read FILE as F (${FORMAT_CHOICES}) instead of by extension
+  --json         print the ranking as JSON: {file, r, intact, evaluated, hardened, elements,
+                 reduced (when the budget left losses out)}
+
+Examples:
+  netbrace explain designs/backbone.net.yaml
+  netbrace explain designs/backbone.net.yaml --metric largest_component --top 5
+  netbrace explain core.graphml --kind link --json | jq '.elements[0]'
+  netbrace explain big.graphml --max-work 1e10      rank more of a big design
+
+Exit codes:
+  0  the ranking was printed
+  1  FILE could not be read (the message gives file:line:col), or R cannot be computed
+     on it (a metric that needs demands or link lengths the design does not have)
+  2  usage or configuration error (bad option, unknown metric, broken policy)
+`;
+var explainCommand = {
+  name: "explain",
+  summary: "rank the sites, links and ducts whose single loss hurts R most (with their lines)",
+  help: HELP2,
+  async run(args, io) {
+    const parsed2 = parseCommandArgs("explain", args, {
+      metric: { type: "string", multiple: true },
+      top: { type: "string" },
+      kind: { type: "string" },
+      policy: { type: "string" },
+      "max-work": { type: "string" },
+      format: { type: "string" },
+      json: { type: "boolean" }
+    });
+    const [file, ...extra] = parsed2.positionals;
+    if (file === void 0)
+      throw new UsageError("explain needs a design FILE", "netbrace explain designs/backbone.net.yaml");
+    if (extra.length)
+      throw new UsageError(`explain takes one FILE, got ${parsed2.positionals.length}`, "run it once per file");
+    const top = wholeNumber("--top", parsed2.values.top, 1) ?? 15;
+    const kindArg = parsed2.values.kind ?? "all";
+    if (!["node", "link", "group", "all"].includes(kindArg)) {
+      throw new UsageError(`--kind must be node, link, group or all, not "${kindArg}"`);
+    }
+    const kinds = kindArg === "all" ? KINDS : [kindArg];
+    const options = { cwd: io.cwd };
+    if (parsed2.values.format !== void 0) options.format = parseFormatName(parsed2.values.format);
+    const maxWorkArg = finiteNumber("--max-work", parsed2.values["max-work"], (x2) => x2 > 0, "a number > 0");
+    const local = await readLocalPolicy(io, parsed2.values.policy);
+    const fp = designPolicy(local, io, file);
+    const { spec, source } = metricR(parsed2.values.metric ?? []) ?? { spec: policyR(fp, fp.seed), source: local.source };
+    const maxWork = maxWorkArg !== void 0 ? budgetWork({ work: maxWorkArg }) : fp.budget.maxWork;
+    if (options.format === void 0 && fp.format) options.format = fp.format;
+    const t = readDesign(file, options);
+    const g = compileTopology(t);
+    const unsupported = unsupportedMetric(g, spec);
+    if (unsupported) throw new DesignError(unsupported.message, { file }, unsupported.hint);
+    const total = [...planSingleLosses(g, spec, kinds, maxWork).units.values()].reduce((s, u) => s + u.size, 0);
+    const progress = createProgress(io, { label: `explain ${file}`, total });
+    let x;
+    try {
+      x = explainDesign(t, spec, source, kinds, progress, g, maxWork);
+    } finally {
+      progress.finish();
+    }
+    if (parsed2.values.json) io.stdout(`${JSON.stringify(x, null, 2)}
+`);
+    else io.stdout(formatExplanation(x, top, colorEnabled(io), terminalWidth(io)));
+    return 0;
+  }
+};
+
+// src/shell/commands/envelope.ts
+import { availableParallelism } from "node:os";
 
 // src/parallel/pool.ts
 import { createRequire } from "node:module";
@@ -31978,7 +32117,7 @@ var envelopeCommand = {
     if (!defined && !isChallengeName(v.challenge))
       throw new UsageError(`unknown challenge "${v.challenge}"`, `one of: ${names.join(", ")}`);
     const origin = {};
-    let r;
+    let r = fp.rValue;
     if (v.score !== void 0) {
       r = parseScore(v.score, v.combine);
       origin.rSource = "--score";
@@ -31987,11 +32126,12 @@ var envelopeCommand = {
         throw new UsageError(`unknown metric "${v.metric}"`, `known metrics: ${metrics.map((m) => m.id).join(", ")}`);
       r = { metrics: [{ id: v.metric, weight: 1 }], combine: "mean" };
       origin.rSource = "--metric";
-    } else {
-      r = fp.rValue;
-      origin.rSource = local.source;
     }
     const seed = wholeNumber("--seed", v.seed, 0) ?? fp.seed;
+    if (v.score === void 0 && v.metric === void 0) {
+      r = policyR(fp, seed);
+      origin.rSource = local.source;
+    }
     let params;
     if (defined) {
       const gate = evaluationSpecs(fp, seed)[0].challenges.find((c) => c.challenge === defined.engine);
@@ -34534,6 +34674,20 @@ function judgeFloor(j) {
         rule,
         unsettledSeverity(r.severity),
         `${description}: ${against(headValue, threshold)} meets it, but ${m.reduced}, and the minimum of fewer realizations can only be higher than that of all of them`,
+        elements,
+        { ...extra, status: "unsettled" }
+      )
+    );
+  } else if (threshold !== null && m.sourceSe !== void 0 && m.sources !== void 0 && !((m.higherIsBetter ? headValue - threshold : threshold - headValue) > REDUCED_MARGIN_SE * m.sourceSe)) {
+    status = "unsettled";
+    const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
+    const needed = REDUCED_MARGIN_SE * m.sourceSe;
+    const d = decidingDecimals(margin, needed);
+    findings.push(
+      finding2(
+        rule,
+        unsettledSeverity(r.severity),
+        `${description}: ${against(headValue, threshold)} meets it, but efficiency searched from ${m.sources.sources.toLocaleString("en")} of ${m.sources.nodes.toLocaleString("en")} sites, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors of that estimate (${REDUCED_MARGIN_SE} × ${formatR(m.sourceSe, d)}); more sources (r-value sources) would settle it`,
         elements,
         { ...extra, status: "unsettled" }
       )
@@ -40461,7 +40615,7 @@ function suggestion2(j, kind, method, targets, before, rBefore, prices, unit) {
 
 // src/map-mend-step.ts
 var MEND_MAX_EVALUATIONS = 10;
-var MEND_BUDGET_FACTOR = 4;
+var MEND_BUDGET_FACTOR = 1;
 var MEND_MIN_EVALUATIONS = 2;
 function parsed(text2, path11, format) {
   if (text2 === null) return null;
@@ -40524,7 +40678,16 @@ async function addMapAndMend(report, input, ctx) {
     });
   }
   const baseSide = comparing ? input.base : void 0;
-  const specs = evaluationSpecs(fp, ctx.seed);
+  const batched = input.head.result.sequential !== void 0;
+  const ran = new Map(input.head.result.evaluation.envelopes.map((e) => [e.challenge, e]));
+  const specs = evaluationSpecs(fp, ctx.seed).map(
+    (spec) => batched ? {
+      ...spec,
+      challenges: spec.challenges.map(
+        (c) => ran.has(c.challenge) && c.challenge !== "regional" ? { ...c, realizations: ran.get(c.challenge).realizations } : c
+      )
+    } : spec
+  );
   const original = budgetSpecs(specs, fp.budget.maxWork, g, baseSide?.graph);
   const work = original.head.reduce((s, spec) => s + planEvaluation(g, spec).work, 0);
   const affordable = work > 0 ? Math.floor(MEND_BUDGET_FACTOR * fp.budget.maxWork / work) : MEND_MAX_EVALUATIONS;
@@ -40533,8 +40696,14 @@ async function addMapAndMend(report, input, ctx) {
     const mended = compileTopology(applyToTopology(headTopo, change));
     const budgeted = budgetSpecs(specs, fp.budget.maxWork, mended, baseSide?.graph);
     const head = await evaluateGraph(mended, void 0, budgeted.head, budgeted.cuts, ctx.request, ctx.deps);
+    if (batched)
+      for (const env of head.result.evaluation.envelopes) {
+        const gate = ran.get(env.challenge);
+        if (gate?.maxRealizations !== void 0 && env.realizations === gate.realizations)
+          env.maxRealizations = gate.maxRealizations;
+      }
     let base = baseSide;
-    if (baseSide && JSON.stringify(budgeted.base) !== JSON.stringify(original.base)) {
+    if (!batched && baseSide && JSON.stringify(budgeted.base) !== JSON.stringify(original.base)) {
       base = await evaluateGraph(
         baseSide.graph,
         baseSide.topology,

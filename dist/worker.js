@@ -3359,12 +3359,16 @@ function createRValue(g, spec, options) {
   validateRSpec(spec);
   const problem = unsupportedMetric(g, spec);
   if (problem) throw new UnsupportedMetricError(problem);
-  const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, options));
+  const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, metricOptions(spec, options)));
   const values = new Float64Array(evaluators.length);
   return (mask) => {
     for (let i = 0; i < evaluators.length; i++) values[i] = evaluators[i](mask).normalized;
     return combineR(spec, values);
   };
+}
+function metricOptions(spec, options) {
+  if (spec.sources === void 0) return options;
+  return { sources: spec.sources, sourceSeed: spec.sourceSeed ?? 0, ...options };
 }
 var UNION_FIND_METRICS = /* @__PURE__ */ new Set(["largest_component", "pair_connectivity"]);
 function unionFindR(g, spec) {
@@ -3652,6 +3656,10 @@ function challengeKind(g, params) {
 function attackSteps(g, kind, until) {
   return stepsAt(until, unitCount(g, kind), countOnes(eligibleUnits(g, kind)));
 }
+var ATTACK_EVALUATIONS = 200;
+function attackStride(steps, free) {
+  return free || steps <= ATTACK_EVALUATIONS ? 1 : Math.ceil(steps / ATTACK_EVALUATIONS);
+}
 var StepEvaluator = class {
   constructor(g, spec) {
     this.g = g;
@@ -3718,6 +3726,24 @@ var StepEvaluator = class {
     memo.rLast = r;
     return r;
   }
+  /**
+   * R after every step k = 0..len, computed after every `every`-th removal and after the last,
+   * and read linearly between them (attackStride says why).
+   */
+  strided(kind, order, len, every) {
+    const at = [];
+    for (let k = 0; k < len; k += every) at.push(k);
+    at.push(len);
+    const computed = this.at(kind, order, len, at, new Float64Array(at.length));
+    const out = new Float64Array(len + 1);
+    for (let i = 0; i + 1 < at.length; i++) {
+      const a = at[i];
+      const b = at[i + 1];
+      for (let k = a; k < b; k++) out[k] = lerp(computed[i], computed[i + 1], (k - a) / (b - a));
+    }
+    out[len] = computed[at.length - 1];
+    return out;
+  }
   /** R after every step k = 0..len. */
   everyStep(kind, order, len) {
     const steps = new Int32Array(len + 1);
@@ -3745,7 +3771,9 @@ function runTask(g, plan, task) {
       const c = getChallenge(params.challenge);
       if (c.type !== "attack") throw new TypeError(`${params.challenge} is not an attack`);
       const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: ev.r });
-      return { type: "attack", sequence, values: ev.everyStep(c.kind, sequence, sequence.length) };
+      const every = attackStride(sequence.length, ev.stepsAreFree);
+      if (every === 1) return { type: "attack", sequence, values: ev.everyStep(c.kind, sequence, sequence.length) };
+      return { type: "attack", sequence, values: ev.strided(c.kind, sequence, sequence.length, every), every };
     }
     case "contingency": {
       const c = getChallenge(params.challenge);

@@ -15,6 +15,7 @@ import {
   type StagedEvaluation,
 } from './envelope/evaluate.js';
 import { BATCH, runTask, type EvaluationPlan, type Task, type TaskResult } from './envelope/engine.js';
+import type { RValueSpec } from './envelope/types.js';
 import { decide, isOpen } from './gate/decide.js';
 import { measure } from './gate/measure.js';
 import type { ChallengeParams } from './challenges/types.js';
@@ -106,6 +107,11 @@ export interface GateResult {
   exitCode: 0 | 1;
 }
 
+/** The policy's R as the engine takes it: a source sample is keyed by the seed, as every other random choice. */
+export function policyR(fp: FilePolicy, seed: number): RValueSpec {
+  return fp.rValue.sources !== undefined ? { ...fp.rValue, sourceSeed: seed } : fp.rValue;
+}
+
 /**
  * The engine request for one file: its challenges, every threshold's x on the grid, N−1 where
  * required, and the policy's work budget (runGate shares it out between the requests of a
@@ -123,11 +129,12 @@ export function evaluationSpecs(fp: FilePolicy, seed: number): EvaluationSpec[] 
   const elements = [...new Set(fp.requirements.flatMap((r) => (r.kind === 'n-1' ? [r.element] : [])))].sort();
   // The engine runs each challenge once per evaluation: N−1 of a second element kind gets its own.
   const budget = { maxWork: fp.budget.maxWork };
-  const specs: EvaluationSpec[] = [{ r: fp.rValue, challenges, seed, budget }];
+  const r = policyR(fp, seed);
+  const specs: EvaluationSpec[] = [{ r, challenges, seed, budget }];
   elements.forEach((element, i) => {
     const n1: ChallengeParams = { challenge: 'n-1', element };
     if (i === 0) specs[0].challenges.push(n1);
-    else specs.push({ r: fp.rValue, challenges: [n1], seed, budget });
+    else specs.push({ r, challenges: [n1], seed, budget });
   });
   return specs;
 }

@@ -21,7 +21,7 @@ import type { Topology } from './topology/model.js';
 
 /** Default most evaluations of mended designs, and the share of the design's budget they may use together. */
 export const MEND_MAX_EVALUATIONS = 10;
-export const MEND_BUDGET_FACTOR = 4;
+export const MEND_BUDGET_FACTOR = 1;
 export const MEND_MIN_EVALUATIONS = 2;
 
 export interface StepContext {
@@ -98,7 +98,23 @@ export async function addMapAndMend(report: FileReport, input: CompareInput, ctx
   }
 
   const baseSide: DesignSide | undefined = comparing ? input.base : undefined;
-  const specs = evaluationSpecs(fp, ctx.seed);
+  // A design judged in batches stopped where its decisions settled: each mended design runs as
+  // many realizations as the head's decisions needed, the same indices, so it pairs with the
+  // base already evaluated, which is reused as it is.
+  const batched = input.head.result.sequential !== undefined;
+  const ran = new Map(input.head.result.evaluation.envelopes.map((e) => [e.challenge, e]));
+  const specs = evaluationSpecs(fp, ctx.seed).map((spec) =>
+    batched
+      ? {
+          ...spec,
+          challenges: spec.challenges.map((c) =>
+            ran.has(c.challenge) && c.challenge !== 'regional'
+              ? { ...c, realizations: ran.get(c.challenge)!.realizations }
+              : c,
+          ),
+        }
+      : spec,
+  );
   const original = budgetSpecs(specs, fp.budget.maxWork, g, baseSide?.graph);
   const work = original.head.reduce((s, spec) => s + planEvaluation(g, spec).work, 0);
   const affordable = work > 0 ? Math.floor((MEND_BUDGET_FACTOR * fp.budget.maxWork) / work) : MEND_MAX_EVALUATIONS;
@@ -109,8 +125,15 @@ export async function addMapAndMend(report: FileReport, input: CompareInput, ctx
     const mended: CompactGraph = compileTopology(applyToTopology(headTopo, change));
     const budgeted = budgetSpecs(specs, fp.budget.maxWork, mended, baseSide?.graph);
     const head = await evaluateGraph(mended, undefined, budgeted.head, budgeted.cuts, ctx.request, ctx.deps);
+    if (batched)
+      // Stopped where the gate's decisions stopped, not cut by the budget: the count the policy allows.
+      for (const env of head.result.evaluation.envelopes) {
+        const gate = ran.get(env.challenge);
+        if (gate?.maxRealizations !== undefined && env.realizations === gate.realizations)
+          env.maxRealizations = gate.maxRealizations;
+      }
     let base = baseSide;
-    if (baseSide && JSON.stringify(budgeted.base) !== JSON.stringify(original.base)) {
+    if (!batched && baseSide && JSON.stringify(budgeted.base) !== JSON.stringify(original.base)) {
       base = await evaluateGraph(
         baseSide.graph,
         baseSide.topology,

@@ -1,5 +1,6 @@
 import { type DesignEvaluation, type EvaluationSpec } from './envelope/evaluate.js';
 import { type EvaluationPlan, type Task, type TaskResult } from './envelope/engine.js';
+import type { RValueSpec } from './envelope/types.js';
 import type { CompactGraph } from './graph/compact.js';
 import { type BudgetedSpecs, type PairedCut } from './gate/budget.js';
 import type { DesignSide } from './gate/compare.js';
@@ -83,6 +84,8 @@ export interface GateResult {
     report: Report;
     exitCode: 0 | 1;
 }
+/** The policy's R as the engine takes it: a source sample is keyed by the seed, as every other random choice. */
+export declare function policyR(fp: FilePolicy, seed: number): RValueSpec;
 /**
  * The engine request for one file: its challenges, every threshold's x on the grid, N−1 where
  * required, and the policy's work budget (runGate shares it out between the requests of a

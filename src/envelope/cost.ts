@@ -26,6 +26,7 @@ import { LONG_GRAPH_ECCENTRICITY, THIN_LEVEL } from '../metrics/kernels/bit-bfs.
 import { getMetric } from '../metrics/registry.js';
 import type { MetricId } from '../metrics/types.js';
 import type { RValueSpec } from './types.js';
+import { samplesSources } from './r-value.js';
 
 /** Units per node or adjacency entry a plain pass touches (a queue search, a scan, a build). */
 export const PLAIN_VISIT = 0.35;
@@ -91,8 +92,11 @@ export function survivorShape(g: CompactGraph, mask?: Mask): SurvivorShape {
   return out;
 }
 
-/** Units of one all-pairs hop search from every survivor (bit-bfs.ts), on a shape. */
-export function hopSearchCost(shape: SurvivorShape): number {
+/**
+ * Units of one all-pairs hop search from every survivor (bit-bfs.ts), on a shape; with `share`
+ * < 1 from that share of them (a source sample, spread over the components as the sites are).
+ */
+export function hopSearchCost(shape: SurvivorShape, share = 1): number {
   let plain = shape.designEntries;
   let words = 0;
   for (let c = 0; c < shape.sizes.length; c++) {
@@ -103,12 +107,13 @@ export function hopSearchCost(shape: SurvivorShape): number {
     plain += sweep; // the first source's plain search
     // The kernel's own test (bit-bfs.ts): one source at a time only on long, thin components.
     const ecc = shape.eccentricities[c];
+    const sources = share < 1 ? Math.ceil((n - 1) * share) : n - 1;
     if (ecc >= LONG_GRAPH_ECCENTRICITY && n < THIN_LEVEL * (ecc + 1)) {
-      plain += (n - 1) * sweep;
+      plain += sources * sweep;
       continue;
     }
     const levels = LEVELS_PER_ECCENTRICITY * (shape.eccentricities[c] + 1);
-    let left = n - 1;
+    let left = sources;
     while (left > 0) {
       const width = left > 64 ? Math.min(256, left) : left;
       words += (width > 64 ? 8 : 2) * levels * sweep;
@@ -124,7 +129,8 @@ export function rCost(g: CompactGraph, spec: RValueSpec, shape: SurvivorShape): 
   let total = 0;
   for (const m of spec.metrics) {
     const cost = getMetric(m.id).cost;
-    if (HOP_METRICS.has(m.id)) total += hopSearchCost(shape);
+    if (HOP_METRICS.has(m.id))
+      total += hopSearchCost(shape, m.id === 'efficiency' && samplesSources(g, spec) ? spec.sources! / g.n : 1);
     else if (cost === 'linear') total += scan;
     else if (cost === 'spectral') total += scan * SPECTRAL_PRODUCTS;
     else total += scan * Math.max(1, g.n); // Dijkstra per source, max-flow per node

@@ -38,9 +38,24 @@ import {
   unitIds,
   valueAtCount,
 } from '../challenges/units.js';
-import type { AttackCurve, Contingency, Envelope, RValueSpec, RemovalSequence, WorstCase } from './types.js';
+import type {
+  AttackCurve,
+  Contingency,
+  Envelope,
+  RValueSpec,
+  RemovalSequence,
+  SourceSampling,
+  WorstCase,
+} from './types.js';
 import type { ChallengeName, ChallengeParams } from '../challenges/types.js';
-import { unionFindR, unsupportedMetric, UnsupportedMetricError, validateRSpec } from './r-value.js';
+import {
+  rSourceErrors,
+  samplesSources,
+  unionFindR,
+  unsupportedMetric,
+  UnsupportedMetricError,
+  validateRSpec,
+} from './r-value.js';
 import {
   attackSteps,
   attackStride,
@@ -56,7 +71,7 @@ import {
 } from './engine.js';
 import { contingencyTotal } from './contingency.js';
 import { orderCost, passCost, rCost, STRUCTURE_PASSES, survivorShape } from './cost.js';
-import { createMask } from '../graph/mask.js';
+import { createMask, type Mask } from '../graph/mask.js';
 import type { ElementKind } from '../graph/element.js';
 import { subsets } from './worst-case.js';
 import { area, attackArea, attackGap, gridMean, gridStats, quantileKey, spread } from './summary.js';
@@ -510,6 +525,9 @@ export function assembleEvaluation(
     }
   });
 
+  const sampling = sourceSampling(g, plan, tasks, results);
+  if (sampling) evaluation.sampling = sampling;
+
   // Attack gap: each fraction envelope against the most harmful attack of its element kind.
   for (const env of evaluation.envelopes) {
     if (env.xUnit !== 'fraction') continue;
@@ -528,6 +546,51 @@ export function assembleEvaluation(
     if (gap !== null) env.attackGap = { value: gap, attack: worst.challenge };
   }
   return { evaluation, samples, labels };
+}
+
+/**
+ * The error R carries when its efficiency searched from sampled sources: the largest source
+ * standard error over a few states that stand for the run — the intact design, the weakest
+ * realization of every band (its lowest mean R) at each grid point, and the end of every attack
+ * — which are where the sample loses the most sources and the spread of the per-source terms is
+ * widest. A pure function of the plan and the results, so every run and every join agrees.
+ */
+function sourceSampling(
+  g: CompactGraph,
+  plan: EvaluationPlan,
+  tasks: Task[],
+  results: TaskResult[],
+): SourceSampling | undefined {
+  if (!samplesSources(g, plan.r)) return undefined;
+  const masks: Mask[] = [createMask(g)];
+  plan.items.forEach((it, item) => {
+    const mine = results.filter((_, i) => tasks[i].item === item);
+    if (it.type === 'band') {
+      const values = mine.flatMap((res) => (res.type === 'band' ? res.values : []));
+      if (values.length === 0) return;
+      const score = values.map((v) => gridMean(v));
+      const weakest = score.reduce((best, v, r) => (v < score[best] ? r : best), 0);
+      const bp = bandPlan(g, it.params);
+      const order = new Int32Array(bp.maxUnits);
+      const steps = new Float64Array(bp.x.length);
+      const len = bp.realize(weakest, order, steps);
+      for (const c of steps) {
+        if (!(c > 0)) continue;
+        const mask = createMask(g);
+        for (let i = 0; i < Math.min(len, Math.ceil(c)); i++) removeUnit(g, mask, bp.kind, order[i]);
+        masks.push(mask);
+      }
+    } else if (it.type === 'attack') {
+      const res = mine.find((r) => r.type === 'attack') as Extract<TaskResult, { type: 'attack' }> | undefined;
+      const c = getChallenge(it.params.challenge);
+      if (!res || c.type !== 'attack' || res.sequence.length === 0) return;
+      const mask = createMask(g);
+      for (const u of res.sequence) removeUnit(g, mask, c.kind, u);
+      masks.push(mask);
+    }
+  });
+  const se = Math.max(...rSourceErrors(g, plan.r, masks));
+  return { metric: 'efficiency', sources: plan.r.sources!, nodes: g.n, se };
 }
 
 function buildEnvelope(

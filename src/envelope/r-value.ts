@@ -70,12 +70,47 @@ export function createRValue(g: CompactGraph, spec: RValueSpec, options?: Metric
   validateRSpec(spec);
   const problem = unsupportedMetric(g, spec);
   if (problem) throw new UnsupportedMetricError(problem);
-  const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, options));
+  const evaluators = spec.metrics.map((m) => getMetric(m.id).create(g, metricOptions(spec, options)));
   const values = new Float64Array(evaluators.length);
   return (mask) => {
     for (let i = 0; i < evaluators.length; i++) values[i] = evaluators[i](mask).normalized;
     return combineR(spec, values);
   };
+}
+
+/** The metric options R's spec implies (its source sample), under the caller's own. */
+function metricOptions(spec: RValueSpec, options?: MetricOptions): MetricOptions | undefined {
+  if (spec.sources === undefined) return options;
+  return { sources: spec.sources, sourceSeed: spec.sourceSeed ?? 0, ...options };
+}
+
+/** Whether R, on this design, is an estimate from sampled sources (fewer sources than sites). */
+export function samplesSources(g: CompactGraph, spec: RValueSpec): boolean {
+  return spec.sources !== undefined && spec.sources < g.n && spec.metrics.some((m) => m.id === 'efficiency');
+}
+
+/**
+ * Standard error of R from sampled sources on each of these states: the sampled metrics' se
+ * combined as R combines them (weighted mean: Σ w·se / Σ w, a bound whatever the errors'
+ * correlation, by the triangle inequality for standard deviations; min: the largest se).
+ * 0 for every state when R is exact on this design.
+ */
+export function rSourceErrors(g: CompactGraph, spec: RValueSpec, masks: readonly Mask[]): number[] {
+  if (!samplesSources(g, spec)) return masks.map(() => 0);
+  const options = metricOptions(spec);
+  const sampled = spec.metrics.map((m) => (m.id === 'efficiency' ? getMetric(m.id).create(g, options) : null));
+  const weight = spec.metrics.reduce((s, m) => s + m.weight, 0);
+  return masks.map((mask) => {
+    let mean = 0;
+    let most = 0;
+    sampled.forEach((ev, i) => {
+      if (!ev) return;
+      const se = ev(mask).se ?? 0;
+      mean += (spec.metrics[i].weight * se) / weight;
+      most = Math.max(most, se);
+    });
+    return spec.combine === 'min' ? most : mean;
+  });
 }
 
 const UNION_FIND_METRICS: ReadonlySet<MetricId> = new Set(['largest_component', 'pair_connectivity']);

@@ -11,6 +11,27 @@ import type { ElementKind, ReportElement } from '../graph/element.js';
 export interface RValueSpec {
   metrics: { id: MetricId; weight: number }[];
   combine: 'mean' | 'min';
+  /**
+   * efficiency searches from a seeded sample of this many sites on designs with more (absent:
+   * from every site); the sample is keyed by `sourceSeed` and the site ids (metrics/kernels/
+   * source-sample.ts), so base and head share it.
+   */
+  sources?: number;
+  /** Seed of that sample: the policy's seed (gate-request.ts). */
+  sourceSeed?: number;
+}
+
+/** How far R may be off because a metric of it searched from sampled sources (evaluate.ts). */
+export interface SourceSampling {
+  metric: 'efficiency';
+  /** Sources searched from, and the sites of the design. */
+  sources: number;
+  nodes: number;
+  /**
+   * Standard error of R from the sample: the largest over the intact design, the weakest
+   * realization of every band at each grid point and the end of every attack. Exact R: absent.
+   */
+  se: number;
 }
 
 /** A removal sequence reported to the user: element ids in removal order. */
@@ -136,6 +157,8 @@ export interface Evaluation {
   contingencies: Contingency[];
   /** Reasons the evaluation was reduced by budgets; empty when it ran in full. */
   degraded: string[];
+  /** Set when R is estimated from sampled sources (RValueSpec.sources): the estimate's error. */
+  sampling?: SourceSampling;
   /** Challenges that do not apply to this design (it lacks coordinates, risk groups...), with why; absent when all applied. */
   notApplicable?: { challenge: ChallengeName; reason: string }[];
 }

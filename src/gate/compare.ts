@@ -292,6 +292,26 @@ export function judgeFloor(j: Judging): { status: RowStatus; findings: Finding[]
         { ...extra, status: 'unsettled' },
       ),
     );
+  } else if (
+    threshold !== null &&
+    m.sourceSe !== undefined &&
+    m.sources !== undefined &&
+    !((m.higherIsBetter ? headValue - threshold : threshold - headValue) > REDUCED_MARGIN_SE * m.sourceSe)
+  ) {
+    // Met by an R estimated from sampled sources, by a margin that estimate's own error does not clear.
+    status = 'unsettled';
+    const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
+    const needed = REDUCED_MARGIN_SE * m.sourceSe;
+    const d = decidingDecimals(margin, needed);
+    findings.push(
+      finding(
+        rule,
+        unsettledSeverity(r.severity),
+        `${description}: ${against(headValue, threshold)} meets it, but efficiency searched from ${m.sources.sources.toLocaleString('en')} of ${m.sources.nodes.toLocaleString('en')} sites, and it clears the ${limitWord} by ${formatR(margin, d)}, not by more than ${REDUCED_MARGIN_SE} standard errors of that estimate (${REDUCED_MARGIN_SE} \u00d7 ${formatR(m.sourceSe, d)}); more sources (r-value sources) would settle it`,
+        elements,
+        { ...extra, status: 'unsettled' },
+      ),
+    );
   } else if (threshold !== null && m.headSe !== undefined) {
     const margin = m.higherIsBetter ? headValue - threshold : threshold - headValue;
     const needed = REDUCED_MARGIN_SE * m.headSe;

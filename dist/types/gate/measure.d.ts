@@ -46,6 +46,15 @@ export interface Measured {
     headSe?: number;
     /** Set when the budget cut base and head differently, so their realizations do not pair. */
     unpaired?: string;
+    /**
+     * Set when the head's R is estimated from sampled sources: that estimate's standard error
+     * (already part of `se`, and of `headSe` when set), and the sample's size.
+     */
+    sourceSe?: number;
+    sources?: {
+        sources: number;
+        nodes: number;
+    };
 }
 /** Most elements a finding lists. */
 export declare const MAX_ELEMENTS = 10;

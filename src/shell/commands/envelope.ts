@@ -18,7 +18,7 @@ import { CAUTION } from '../../report/report.js';
 import type { DesignEvaluation, EvaluationSpec } from '../../envelope/evaluate.js';
 import { budgetWork } from '../../policy/budget.js';
 import { DEFAULT_POLICY_PATH, REGIONAL_UNTIL_KM } from '../../policy/defaults.js';
-import { evaluationSpecs } from '../../gate-request.js';
+import { evaluationSpecs, policyR } from '../../gate-request.js';
 import { designPolicy, readLocalPolicy } from '../local-policy.js';
 import { evaluateDesignParallel } from '../../parallel/pool.js';
 import type { AttackCurve, Contingency, Envelope, RValueSpec, WorstCase } from '../../envelope/types.js';
@@ -297,7 +297,7 @@ export const envelopeCommand: Command = {
     if (!defined && !isChallengeName(v.challenge))
       throw new UsageError(`unknown challenge "${v.challenge}"`, `one of: ${names.join(', ')}`);
     const origin: EnvelopeOrigin = {};
-    let r: RValueSpec;
+    let r: RValueSpec = fp.rValue;
     if (v.score !== undefined) {
       r = parseScore(v.score, v.combine);
       origin.rSource = '--score';
@@ -306,11 +306,12 @@ export const envelopeCommand: Command = {
         throw new UsageError(`unknown metric "${v.metric}"`, `known metrics: ${metrics.map((m) => m.id).join(', ')}`);
       r = { metrics: [{ id: v.metric, weight: 1 }], combine: 'mean' };
       origin.rSource = '--metric';
-    } else {
-      r = fp.rValue;
-      origin.rSource = local.source;
     }
     const seed = wholeNumber('--seed', v.seed, 0) ?? fp.seed;
+    if (v.score === undefined && v.metric === undefined) {
+      r = policyR(fp, seed);
+      origin.rSource = local.source;
+    }
     let params: ChallengeParams;
     if (defined) {
       // The gate's request for this challenge (its grid includes every threshold's x).

@@ -30,6 +30,7 @@ import { readDesign, type ReadDesignOptions } from '../read-design.js';
 import { createProgress, type Progress } from '../progress.js';
 import { colorEnabled, terminalWidth } from '../color.js';
 import { createColors } from 'picocolors';
+import { policyR } from '../../gate-request.js';
 
 export interface SingleLoss {
   rank: number;
@@ -394,7 +395,10 @@ export const explainCommand: Command = {
 
     const local = await readLocalPolicy(io, parsed.values.policy);
     const fp = designPolicy(local, io, file);
-    const { spec, source } = metricR(parsed.values.metric ?? []) ?? { spec: fp.rValue, source: local.source };
+    const { spec, source } = metricR(parsed.values.metric ?? []) ?? {
+      spec: policyR(fp, fp.seed),
+      source: local.source,
+    };
     // The same budget arithmetic as the gate's (policy/budget.ts).
     const maxWork = maxWorkArg !== undefined ? budgetWork({ work: maxWorkArg }) : fp.budget.maxWork;
     if (options.format === undefined && fp.format) options.format = fp.format; // as the gate reads it
