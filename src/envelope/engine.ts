@@ -66,13 +66,14 @@ export interface EvaluationPlan {
 
 export type Task =
   | { type: 'band'; item: number; from: number; to: number }
-  | { type: 'attack'; item: number }
+  | { type: 'attack'; item: number; piece?: { index: number; of: number } }
   | { type: 'contingency'; item: number }
   | { type: 'worst'; item: number };
 
 export type TaskResult =
   | { type: 'band'; values: Float64Array[] }
-  | { type: 'attack'; sequence: Int32Array; values: Float64Array; every?: number }
+  /** R at this piece's share of the attack's evaluated steps (attackPlan), in order. */
+  | { type: 'attack'; sequence: Int32Array; values: Float64Array; every: number }
   | { type: 'contingency'; result: Contingency }
   | { type: 'worst'; result: WorstCase };
 
@@ -87,8 +88,11 @@ export function planTasks(plan: EvaluationPlan, g: CompactGraph): Task[] {
         tasks.push({ type: 'band', item, from, to });
         from = to;
       }
-    } else if (it.type === 'attack') tasks.push({ type: 'attack', item });
-    else tasks.push({ type: 'contingency', item });
+    } else if (it.type === 'attack') {
+      const of = attackPieces(g, it.params);
+      if (of === 1) tasks.push({ type: 'attack', item });
+      else for (let index = 0; index < of; index++) tasks.push({ type: 'attack', item, piece: { index, of } });
+    } else tasks.push({ type: 'contingency', item });
     if (it.params.worstCase > 0) tasks.push({ type: 'worst', item });
   });
   return tasks;
@@ -143,6 +147,53 @@ export const ATTACK_EVALUATIONS = 200;
 /** Removals between two evaluations of R along an attack of `steps` steps (1: every step). */
 export function attackStride(steps: number, free: boolean): number {
   return free || steps <= ATTACK_EVALUATIONS ? 1 : Math.ceil(steps / ATTACK_EVALUATIONS);
+}
+
+/** The removal counts at which R is computed along an attack of `len` steps: every `every`-th, and the last. */
+export function attackEvaluationSteps(len: number, every: number): number[] {
+  const at: number[] = [];
+  for (let k = 0; k < len; k += every) at.push(k);
+  at.push(len);
+  return at;
+}
+
+/**
+ * Evaluations of R one task of a long attack takes on. A strided attack's steps are independent
+ * once its removal order is known, so they are shared out between tasks that each rank the
+ * order again (only for rankings that cost a few passes, not R) and evaluate their share: the
+ * pieces are fixed by the plan, never by the thread count, so the values stay the same.
+ */
+export const ATTACK_PIECE_EVALUATIONS = 25;
+
+/** Attacks whose order costs no evaluation of R (so every piece may rank it again). */
+const CHEAP_RANKINGS: ReadonlySet<ChallengeName> = new Set(['degree', 'degree-adaptive']);
+
+/** How many tasks an attack is shared out to (1: one task). */
+export function attackPieces(g: CompactGraph, params: ResolvedParams): number {
+  const c = getChallenge(params.challenge);
+  if (c.type !== 'attack' || !CHEAP_RANKINGS.has(params.challenge)) return 1;
+  const steps = attackSteps(g, c.kind, params.until);
+  if (steps <= ATTACK_EVALUATIONS) return 1;
+  const evaluations = attackEvaluationSteps(steps, attackStride(steps, false)).length;
+  return Math.max(1, Math.ceil(evaluations / ATTACK_PIECE_EVALUATIONS));
+}
+
+/** The share [from, to) of `count` evaluated steps that piece `index` of `of` takes. */
+export function pieceRange(count: number, piece: { index: number; of: number } | undefined): [number, number] {
+  if (!piece) return [0, count];
+  return [Math.floor((piece.index * count) / piece.of), Math.floor(((piece.index + 1) * count) / piece.of)];
+}
+
+/** R after every step 0..len from R at the evaluated steps `at`, read linearly between them. */
+export function fillAttackCurve(at: readonly number[], computed: ArrayLike<number>, len: number): Float64Array {
+  const out = new Float64Array(len + 1);
+  for (let i = 0; i + 1 < at.length; i++) {
+    const a = at[i];
+    const b = at[i + 1];
+    for (let k = a; k < b; k++) out[k] = lerp(computed[i], computed[i + 1], (k - a) / (b - a));
+  }
+  out[len] = computed[at.length - 1];
+  return out;
 }
 
 /** Evaluates R along one removal order at the given step counts (non-decreasing). */
@@ -231,25 +282,6 @@ export class StepEvaluator {
     return r;
   }
 
-  /**
-   * R after every step k = 0..len, computed after every `every`-th removal and after the last,
-   * and read linearly between them (attackStride says why).
-   */
-  strided(kind: ElementKind, order: ArrayLike<number>, len: number, every: number): Float64Array {
-    const at: number[] = [];
-    for (let k = 0; k < len; k += every) at.push(k);
-    at.push(len);
-    const computed = this.at(kind, order, len, at, new Float64Array(at.length));
-    const out = new Float64Array(len + 1);
-    for (let i = 0; i + 1 < at.length; i++) {
-      const a = at[i];
-      const b = at[i + 1];
-      for (let k = a; k < b; k++) out[k] = lerp(computed[i], computed[i + 1], (k - a) / (b - a));
-    }
-    out[len] = computed[at.length - 1];
-    return out;
-  }
-
   /** R after every step k = 0..len. */
   everyStep(kind: ElementKind, order: ArrayLike<number>, len: number): Float64Array {
     const steps = new Int32Array(len + 1);
@@ -279,8 +311,11 @@ export function runTask(g: CompactGraph, plan: EvaluationPlan, task: Task): Task
       if (c.type !== 'attack') throw new TypeError(`${params.challenge} is not an attack`);
       const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: ev.r });
       const every = attackStride(sequence.length, ev.stepsAreFree);
-      if (every === 1) return { type: 'attack', sequence, values: ev.everyStep(c.kind, sequence, sequence.length) };
-      return { type: 'attack', sequence, values: ev.strided(c.kind, sequence, sequence.length, every), every };
+      const at = attackEvaluationSteps(sequence.length, every);
+      const [from, to] = pieceRange(at.length, task.type === 'attack' ? task.piece : undefined);
+      const mine = at.slice(from, to);
+      const values = ev.at(c.kind, sequence, sequence.length, mine, new Float64Array(mine.length));
+      return { type: 'attack', sequence, values, every };
     }
     case 'contingency': {
       const c = getChallenge(params.challenge);

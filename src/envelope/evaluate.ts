@@ -57,9 +57,12 @@ import {
   validateRSpec,
 } from './r-value.js';
 import {
+  attackEvaluationSteps,
+  attackPieces,
   attackSteps,
   attackStride,
   bandPlan,
+  fillAttackCurve,
   challengeKind,
   planTasks,
   runTask,
@@ -327,7 +330,8 @@ function estimate(g: CompactGraph, it: PlannedChallenge, c: CostModel): Estimate
       p.challenge === 'risk-groups-worst'
         ? ((groups * (groups + 1)) / 2) * c.intact
         : RANKING_PASSES[p.challenge]!(g.n, k) * c.pass;
-    e.fixed = ranking + (free ? c.pass : attackCurveCost(c, p, kind, k));
+    // A long attack shared out to pieces ranks its order once per piece.
+    e.fixed = ranking * (free ? 1 : attackPieces(g, p)) + (free ? c.pass : attackCurveCost(c, p, kind, k));
   } else {
     const order = p.challenge === 'n-2' ? 2 : 1;
     e.totalCases = contingencyTotal(g, p.element, order);
@@ -491,7 +495,18 @@ export function assembleEvaluation(
       envelopeOf.set(item, env);
       evaluation.envelopes.push(env);
     } else if (it.type === 'attack') {
-      const res = mine.find(({ res }) => res.type === 'attack')!.res as Extract<TaskResult, { type: 'attack' }>;
+      // The attack's pieces, in task order, hold R at its evaluated steps in order.
+      const pieces = mine.flatMap(({ res }) => (res.type === 'attack' ? [res] : []));
+      const first = pieces[0];
+      const at = attackEvaluationSteps(first.sequence.length, first.every);
+      const computed = pieces.flatMap((x) => Array.from(x.values));
+      if (computed.length !== at.length)
+        throw new Error(`attack ${p.challenge}: ${computed.length} of ${at.length} steps`);
+      const res = {
+        sequence: first.sequence,
+        values: fillAttackCurve(at, computed, first.sequence.length),
+        every: first.every > 1 ? first.every : undefined,
+      };
       const c = getChallenge(p.challenge);
       const kind = c.type === 'attack' ? c.kind : 'node';
       const count = unitCount(g, kind);

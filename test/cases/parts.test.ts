@@ -69,6 +69,8 @@ describe('one design split across parts', () => {
     ]);
     const env = wholeReport.files.find((f) => f.path === GRID)!.head!.envelopes[0];
     expect(env.maxRealizations).toBeGreaterThan(env.realizations);
+    // R is estimated from sampled sources: the join must reproduce the sample's error too.
+    expect(wholeReport.files.find((f) => f.path === GRID)!.head!.sampling).toMatchObject({ sources: 200, nodes: 400 });
     expect(wholeReport.split).toBeUndefined();
     const [p1, p2] = [await part(1, 2), await part(2, 2)];
     for (const [k, p] of [p1, p2].entries()) {

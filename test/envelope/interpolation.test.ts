@@ -10,9 +10,10 @@
 //   and the largest component after k of them is 6 − k.
 import { describe, expect, it } from 'vitest';
 import { graphFromEdges } from '../../src/graph/compact.js';
-import { evaluateDesign, type EvaluationSpec } from '../../src/envelope/evaluate.js';
+import { evaluateDesign, planEvaluation, type EvaluationSpec } from '../../src/envelope/evaluate.js';
 import { pairedStatistic } from '../../src/envelope/pairing.js';
-import { ATTACK_EVALUATIONS, bandPlan } from '../../src/envelope/engine.js';
+import { ATTACK_EVALUATIONS, ATTACK_PIECE_EVALUATIONS, bandPlan, planTasks } from '../../src/envelope/engine.js';
+import { closeWorkers, evaluateDesignParallel } from '../../src/parallel/pool.js';
 import { resolveParams } from '../../src/challenges/registry.js';
 import { countAt } from '../../src/challenges/units.js';
 import type { MetricId } from '../../src/metrics/types.js';
@@ -144,6 +145,21 @@ describe('a long attack, computed at every few removals', () => {
     const lo = Math.floor(c);
     full = (full + (c - lo) * (exact(lo) + (c - lo) * (exact(lo + 1) - exact(lo)))) / c;
     expect(Math.abs(run.area - full)).toBeLessThan(1e-6);
+  });
+
+  it('is shared out to pieces fixed by the plan, which give the same curve on any number of threads', async () => {
+    const spec = {
+      r: { metrics: [{ id: 'efficiency' as const, weight: 1 }], combine: 'mean' as const },
+      seed: 3,
+      challenges: [{ challenge: 'degree' as const, until: 0.2 }],
+    };
+    const plan = planEvaluation(path, spec);
+    const tasks = planTasks(plan, path);
+    const evaluations = Math.ceil(K / run.every!) + 1;
+    expect(tasks.filter((t) => t.type === 'attack')).toHaveLength(Math.ceil(evaluations / ATTACK_PIECE_EVALUATIONS));
+    const threaded = await evaluateDesignParallel(path, spec, 2, { minWork: 0 });
+    expect(threaded.evaluation.attacks[0]).toEqual(run);
+    await closeWorkers();
   });
 
   it('computes short attacks at every step', () => {
