@@ -1,0 +1,275 @@
+// One extremal eigenvalue (and, on request, its eigenvector) of a large sparse symmetric
+// operator by the plain Lanczos three-term recurrence, with NO reorthogonalisation against
+// the basis. Why: on a graph Laplacian a product costs a few flops per link, while full
+// reorthogonalisation costs about 4·n flops per basis vector per step; in the thick-restart
+// solver (lanczos.ts) that dominated the time of the Fiedler value (BA(5000, 2): 1.6 s).
+// Why it is still exact: in finite precision, loss of orthogonality goes hand in hand with
+// convergence of Ritz values, and a Ritz value θ of the tridiagonal T_k whose residual
+// estimate β_k·|s_k| is small lies that close to an eigenvalue of the operator (Paige, Linear
+// Algebra Appl. 34:235, 1980); lost orthogonality only adds copies ("ghosts") of values that
+// have already converged (Cullum & Willoughby, Lanczos Algorithms for Large Symmetric
+// Eigenvalue Computations, vol. 1, 1985). The nested T_k interlace, so the smallest Ritz value
+// falls monotonically to the smallest eigenvalue; we stop when its residual estimate is
+// ≤ tol·|θ|, the same test as lanczos.ts. Deflation vectors (the constant vector of a
+// Laplacian) are projected out of every new direction, so their eigenvalue never reappears.
+// T_k's smallest eigenvalue comes from Sturm-sequence bisection and its eigenvector (for s_k)
+// from inverse iteration with the LDLᵀ factors at the bisection's lower end, where T − xI is
+// positive definite, so the factorisation needs no pivoting. The eigenvector of the operator,
+// when asked for, comes from a second run of the same recurrence (bit-identical vectors)
+// accumulating Σ y_j v_j: O(n) storage instead of O(n·k). The start vector is the caller's
+// or a fixed function of the original node indices, so results do not depend on call order.
+
+import { noise } from './hash-noise.js';
+import type { SymmetricOperator } from './lanczos.js';
+
+export interface ExtremalRequest {
+  which: 'smallest' | 'largest';
+  /** Orthonormal vectors to keep out of the search space: `deflation[k*n .. +n)`. */
+  deflation?: Float64Array;
+  deflationCount?: number;
+  /** Stop when the Ritz residual ≤ tol·|θ| (default 1e-10), floored at 1e-14·normBound. */
+  tol?: number;
+  /** Start vector (length ≥ n); null for the fixed default. */
+  start?: Float64Array | null;
+  /** Original index per entry, for the default start vector (identity when absent). */
+  keys?: Int32Array | null;
+  /** Upper limit on operator applications (default 60·n, at least 2000). */
+  maxApplications?: number;
+  /** Also form the unit eigenvector (in `vector`); costs a second pass. */
+  wantVector?: boolean;
+}
+
+export interface ExtremalResult {
+  value: number;
+  /** The eigenvector in entries 0..n-1 when `wantVector` was set. */
+  vector: Float64Array;
+  /** Operator applications of the first pass (the second pass repeats them). */
+  applications: number;
+  /** Lanczos steps taken (the order of T). */
+  steps: number;
+  converged: boolean;
+}
+
+// Module-level kernels on explicit arrays keep the hot call sites monomorphic.
+
+function dot(a: Float64Array, ao: number, b: Float64Array, n: number): number {
+  let s = 0;
+  for (let i = 0; i < n; i++) s += a[ao + i] * b[i];
+  return s;
+}
+
+function project(w: Float64Array, defl: Float64Array | undefined, dc: number, n: number): void {
+  for (let k = 0; k < dc; k++) {
+    const o = k * n;
+    const c = dot(defl!, o, w, n);
+    for (let i = 0; i < n; i++) w[i] -= c * defl![o + i];
+  }
+}
+
+/**
+ * One Lanczos step: w ← sgn·A v − βprev·u − α·v (deflation projected out); returns α.
+ * The coupling to u is removed before α is formed (the stabler of Paige's variants).
+ */
+function step(
+  op: SymmetricOperator,
+  sgn: number,
+  v: Float64Array,
+  u: Float64Array,
+  w: Float64Array,
+  betaPrev: number,
+  defl: Float64Array | undefined,
+  dc: number,
+  n: number,
+): number {
+  op.apply(v, w);
+  let alpha = 0;
+  for (let i = 0; i < n; i++) {
+    const x = sgn * w[i] - betaPrev * u[i];
+    w[i] = x;
+    alpha += x * v[i];
+  }
+  for (let i = 0; i < n; i++) w[i] -= alpha * v[i];
+  project(w, defl, dc, n);
+  return alpha;
+}
+
+/** Eigenvalues of T (diagonal a, off-diagonal b; b[i] joins i and i+1) below x: Sturm count. */
+function countBelow(a: Float64Array, b: Float64Array, k: number, x: number): number {
+  let c = 0;
+  let q = a[0] - x;
+  for (let i = 0; ; i++) {
+    if (q < 0) c++;
+    if (i + 1 === k) return c;
+    if (q === 0) q = 1e-300; // a zero pivot: the limit from above (LAPACK's pivmin idea)
+    q = a[i + 1] - x - (b[i] * b[i]) / q;
+  }
+}
+
+export function createExtremalLanczos(capacity: number) {
+  const stride = Math.max(1, capacity);
+  let v = new Float64Array(stride);
+  let u = new Float64Array(stride);
+  let w = new Float64Array(stride);
+  const vector = new Float64Array(stride);
+  let cap = 256;
+  let a = new Float64Array(cap);
+  let b = new Float64Array(cap);
+  let piv = new Float64Array(cap);
+  let z = new Float64Array(cap);
+  const result: ExtremalResult = { value: 0, vector, applications: 0, steps: 0, converged: false };
+
+  function grow(): void {
+    cap *= 2;
+    const na = new Float64Array(cap);
+    na.set(a);
+    a = na;
+    const nb = new Float64Array(cap);
+    nb.set(b);
+    b = nb;
+    piv = new Float64Array(cap);
+    z = new Float64Array(cap);
+  }
+
+  /**
+   * Smallest eigenvalue θ of T_k and the last entry of its unit eigenvector (left in z).
+   * Bisection to full precision, then two inverse-iteration solves at the lower end.
+   */
+  function smallestRitz(k: number, upper: number): { theta: number; last: number } {
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let i = 0; i < k; i++) {
+      const r = (i > 0 ? Math.abs(b[i - 1]) : 0) + (i + 1 < k ? Math.abs(b[i]) : 0);
+      lo = Math.min(lo, a[i] - r);
+      hi = Math.max(hi, a[i] + r);
+    }
+    hi = Math.min(hi, upper);
+    lo -= 1e-14 * Math.max(1, Math.abs(lo));
+    for (;;) {
+      const mid = 0.5 * (lo + hi);
+      if (mid <= lo || mid >= hi) break;
+      if (countBelow(a, b, k, mid) > 0) hi = mid;
+      else lo = mid;
+    }
+    // LDLᵀ of T − lo·I (all eigenvalues ≥ lo, so the pivots are ≥ 0).
+    const tiny = 1e-300;
+    piv[0] = a[0] - lo || tiny;
+    for (let i = 1; i < k; i++) piv[i] = a[i] - lo - (b[i - 1] * b[i - 1]) / piv[i - 1] || tiny;
+    z.fill(1, 0, k);
+    for (let it = 0; it < 2; it++) {
+      for (let i = 1; i < k; i++) z[i] -= (b[i - 1] / piv[i - 1]) * z[i - 1];
+      for (let i = 0; i < k; i++) z[i] /= piv[i];
+      for (let i = k - 2; i >= 0; i--) z[i] -= (b[i] / piv[i]) * z[i + 1];
+      let s = 0;
+      for (let i = 0; i < k; i++) s = Math.max(s, Math.abs(z[i]));
+      for (let i = 0; i < k; i++) z[i] /= s; // keep it finite before the next solve
+      let nz = 0;
+      for (let i = 0; i < k; i++) nz += z[i] * z[i];
+      nz = Math.sqrt(nz);
+      for (let i = 0; i < k; i++) z[i] /= nz;
+    }
+    return { theta: 0.5 * (lo + hi), last: z[k - 1] };
+  }
+
+  function startVector(op: SymmetricOperator, req: ExtremalRequest, salt: number): number {
+    const n = op.n;
+    const keys = req.keys ?? null;
+    if (req.start && salt === 0) for (let i = 0; i < n; i++) v[i] = req.start[i];
+    else for (let i = 0; i < n; i++) v[i] = noise(keys ? keys[i] : i, 0x5eed + salt);
+    project(v, req.deflation, req.deflationCount ?? 0, n);
+    let s = 0;
+    for (let i = 0; i < n; i++) s += v[i] * v[i];
+    return Math.sqrt(s);
+  }
+
+  return {
+    result,
+    solve(op: SymmetricOperator, req: ExtremalRequest): ExtremalResult {
+      const n = op.n;
+      const dc = req.deflationCount ?? 0;
+      const defl = req.deflation;
+      const sgn = req.which === 'largest' ? -1 : 1;
+      const tol = req.tol ?? 1e-10;
+      const floor = 1e-14 * Math.max(op.normBound, 1e-300);
+      const maxApps = req.maxApplications ?? Math.max(2000, 60 * n);
+      result.applications = 0;
+      result.steps = 0;
+      result.converged = false;
+      result.value = 0;
+      if (n - dc <= 0) return result;
+
+      // Start vector (a fresh seeded one if the given one lies in the deflation space).
+      let salt = 0;
+      let norm0 = startVector(op, req, salt);
+      while (!(norm0 > 1e-8) && salt < 4) norm0 = startVector(op, req, ++salt);
+      for (let i = 0; i < n; i++) v[i] = v[i] / norm0;
+      u.fill(0, 0, n);
+      let betaPrev = 0;
+      let k = 0;
+      let nextCheck = 8;
+      let upper = Infinity;
+      let theta: number;
+      for (;;) {
+        if (k === cap) grow();
+        a[k] = step(op, sgn, v, u, w, betaPrev, defl, dc, n);
+        let beta = 0;
+        for (let i = 0; i < n; i++) beta += w[i] * w[i];
+        beta = Math.sqrt(beta);
+        b[k] = beta;
+        k++;
+        result.applications++;
+        // An invariant subspace (β at rounding level) makes θ exact; otherwise test the
+        // residual estimate every so often (every k/16 steps: at most ~6% extra steps).
+        const breakdown = beta <= floor;
+        if (breakdown || k >= nextCheck || result.applications >= maxApps) {
+          const r = smallestRitz(k, upper);
+          theta = r.theta;
+          upper = theta + 1e-12 * Math.max(1, Math.abs(theta));
+          const converged = breakdown || beta * Math.abs(r.last) <= Math.max(tol * Math.abs(theta), floor);
+          if (converged || result.applications >= maxApps) {
+            result.converged = converged;
+            break;
+          }
+          nextCheck = k + Math.max(8, k >> 4);
+        }
+        const t = u;
+        u = v;
+        v = w;
+        w = t;
+        const inv = 1 / beta;
+        for (let i = 0; i < n; i++) v[i] *= inv;
+        betaPrev = beta;
+      }
+      result.value = sgn * theta;
+      result.steps = k;
+      if (req.wantVector) {
+        // Second pass: the same recurrence from the same start, accumulating Σ z_j v_j.
+        startVector(op, req, salt);
+        for (let i = 0; i < n; i++) v[i] = v[i] / norm0;
+        u.fill(0, 0, n);
+        for (let i = 0; i < n; i++) vector[i] = z[0] * v[i];
+        betaPrev = 0;
+        for (let j = 1; j < k; j++) {
+          step(op, sgn, v, u, w, betaPrev, defl, dc, n);
+          const beta = b[j - 1];
+          const t = u;
+          u = v;
+          v = w;
+          w = t;
+          const inv = 1 / beta;
+          const c = z[j];
+          for (let i = 0; i < n; i++) {
+            v[i] *= inv;
+            vector[i] += c * v[i];
+          }
+          betaPrev = beta;
+        }
+        project(vector, defl, dc, n);
+        let s = 0;
+        for (let i = 0; i < n; i++) s += vector[i] * vector[i];
+        s = Math.sqrt(s);
+        for (let i = 0; i < n; i++) vector[i] /= s;
+      }
+      return result;
+    },
+  };
+}
