@@ -29,7 +29,7 @@ export interface ExtremalRequest {
   deflationCount?: number;
   /** Stop when the Ritz residual ≤ tol·|θ| (default 1e-10), floored at 1e-14·normBound. */
   tol?: number;
-  /** Start vector (length ≥ n); null for the fixed default. */
+  /** Start vector (length ≥ n; 1e-3 of the default is mixed in); null for the default. */
   start?: Float64Array | null;
   /** Original index per entry, for the default start vector (identity when absent). */
   keys?: Int32Array | null;
@@ -173,8 +173,20 @@ export function createExtremalLanczos(capacity: number) {
   function startVector(op: SymmetricOperator, req: ExtremalRequest, salt: number): number {
     const n = op.n;
     const keys = req.keys ?? null;
-    if (req.start && salt === 0) for (let i = 0; i < n; i++) v[i] = req.start[i];
-    else for (let i = 0; i < n; i++) v[i] = noise(keys ? keys[i] : i, 0x5eed + salt);
+    for (let i = 0; i < n; i++) v[i] = noise(keys ? keys[i] : i, 0x5eed + salt);
+    if (req.start && salt === 0) {
+      // A caller's start keeps 1e-3 of the seeded noise: a start that is (nearly) an
+      // eigenvector would otherwise end the recurrence at once in an invariant subspace that
+      // need not hold the wanted value (there is no basis to continue orthogonally to).
+      let sv = 0;
+      let ss = 0;
+      for (let i = 0; i < n; i++) {
+        sv += v[i] * v[i];
+        ss += req.start[i] * req.start[i];
+      }
+      const c = 1e-3 * Math.sqrt(ss / Math.max(sv, 1e-300));
+      for (let i = 0; i < n; i++) v[i] = req.start[i] + c * v[i];
+    }
     project(v, req.deflation, req.deflationCount ?? 0, n);
     let s = 0;
     for (let i = 0; i < n; i++) s += v[i] * v[i];
