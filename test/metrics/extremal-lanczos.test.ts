@@ -56,8 +56,7 @@ describe('plain Lanczos for one extremal eigenvalue', () => {
       const solver = createExtremalLanczos(n);
       const fiedler = solver.solve(p.laplacian, {
         which: 'smallest',
-        deflation: p.one,
-        deflationCount: 1,
+        deflate: p.one,
         keys: p.keys,
       });
       expect(fiedler.converged).toBe(true);
@@ -82,8 +81,7 @@ describe('plain Lanczos for one extremal eigenvalue', () => {
       const n = p.local.n;
       const r = createExtremalLanczos(n).solve(p.laplacian, {
         which: 'smallest',
-        deflation: p.one,
-        deflationCount: 1,
+        deflate: p.one,
         keys: p.keys,
         wantVector: true,
       });
@@ -111,7 +109,7 @@ describe('plain Lanczos for one extremal eigenvalue', () => {
     const solver = createExtremalLanczos(p.local.n);
     for (const k of [2, 3, 10]) {
       const start = Float64Array.from(d.eigenvectorMatrix.getColumn(order[k][1]));
-      const r = solver.solve(p.laplacian, { which: 'smallest', deflation: p.one, deflationCount: 1, start });
+      const r = solver.solve(p.laplacian, { which: 'smallest', deflate: p.one, start });
       expectRelative(r.value, order[1][0], 1e-10);
     }
   });
@@ -120,10 +118,10 @@ describe('plain Lanczos for one extremal eigenvalue', () => {
     const a = prepare(graphFromEdges(400, randomEdges(400, 1000, 21)));
     const b = prepare(grid(30, 30));
     const solver = createExtremalLanczos(900);
-    const req = { which: 'smallest' as const, deflation: a.one, deflationCount: 1, keys: a.keys };
+    const req = { which: 'smallest' as const, deflate: a.one, keys: a.keys };
     const first = solver.solve(a.laplacian, req).value;
     const steps = solver.result.steps;
-    solver.solve(b.laplacian, { which: 'smallest', deflation: b.one, deflationCount: 1, keys: b.keys });
+    solver.solve(b.laplacian, { which: 'smallest', deflate: b.one, keys: b.keys });
     expect(solver.solve(a.laplacian, req).value).toBe(first);
     expect(solver.solve(a.laplacian, { ...req, wantVector: true }).value).toBe(first);
     const start = solver.result.vector.slice(0, a.local.n);

@@ -44,7 +44,7 @@ export function createExtremalSolver(
     op.bind(part);
     if (fiedler) {
       one.fill(1 / Math.sqrt(n), 0, n);
-      return plain.solve(op, { which: 'smallest', deflation: one, deflationCount: 1, keys }).value;
+      return plain.solve(op, { which: 'smallest', deflate: one, keys }).value;
     }
     const warm = warmStart && hasPrevious;
     if (warm) for (let i = 0; i < n; i++) start[i] = previous[part.toOriginal[i]];
