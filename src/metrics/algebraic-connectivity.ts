@@ -5,9 +5,10 @@
 // graph is used (parallel links merged). Normalisation: a / N0 (a ≤ N' ≤ N0, with a = N
 // only for the complete graph), so the scale is the same at every removal step.
 // Solvers: survivors of up to `denseLimit` nodes (default 48) use the dense values-only
-// tridiagonal QL; above that, thick-restart Lanczos on the matrix-free Laplacian with the
-// constant vector deflated, converged to a residual of 1e-10·a (so a is correct to about
-// 1e-10 relative). Lanczos is faster than the dense solver from a few dozen nodes up.
+// tridiagonal QL; above that, the plain Lanczos recurrence (no reorthogonalisation, Paige
+// 1980; kernels/extremal-lanczos.ts) on the matrix-free Laplacian with the constant vector
+// deflated, converged to a residual of 1e-10·a (so a is correct to about 1e-10 relative).
+// Lanczos is faster than the dense solver from a few dozen nodes up.
 
 import { createExtremalSolver } from './kernels/extremal-eigen.js';
 import { createSpectralSurvivors, EXTREMAL_DENSE_LIMIT } from './kernels/spectral-survivors.js';

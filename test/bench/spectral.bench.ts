@@ -1,14 +1,14 @@
 // Spectral metrics on large designs, side by side with SciPy/NumPy (spectral_peer.py):
 // - algebraic connectivity (Fiedler value) of seeded Barabási–Albert designs (m = 2) and of
 //   the largest component of seeded Erdős–Rényi graphs (mean degree 6), 5,000 to 20,000
-//   nodes: netbrace's thick-restart Lanczos (kernels/lanczos.ts, the constant vector deflated,
-//   residual ≤ 1e-10·a) against eigsh(L, k=2, which='SM', tol=1e-10); the values must agree to
-//   1e-8 relative;
+//   nodes: netbrace's plain Lanczos recurrence (kernels/extremal-lanczos.ts, the constant
+//   vector deflated, residual ≤ 1e-10·a) against eigsh(L, k=2, which='SM', tol=1e-10); the
+//   values must agree to 1e-8 relative;
 // - natural connectivity: exact (dense) up to 2,000 nodes against NumPy's eigvalsh, and above
 //   it the estimate with its stated error (2·se relative to λ̄).
 // Each netbrace figure is one warm call (the evaluator is created once per design, as the
 // engine does). Timings on a shared machine are noisy: compare within one run.
-// Targets (in the issue): algebraic connectivity no slower than eigsh at 5,000–20,000 nodes;
+// Targets: algebraic connectivity no slower than eigsh at 5,000–20,000 nodes;
 // natural connectivity exact to 2,000 nodes, stated error ≤ 1e-3 relative beyond.
 // NETBRACE_SPECTRAL_SIZES=5000 limits the sizes (default 5000,20000).
 import { rmSync, writeFileSync } from 'node:fs';

@@ -29,7 +29,7 @@ const binom = (n: number, k: number) => {
   return r;
 };
 
-// Both solver paths: the dense solver and (denseLimit 0) thick-restart Lanczos.
+// Both solver paths: the dense solver and (denseLimit 0) Lanczos.
 const paths: [string, MetricOptions][] = [
   ['dense', {}],
   ['Lanczos', { denseLimit: 0 }],
