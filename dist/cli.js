@@ -9340,9 +9340,9 @@ var require_float = __commonJS({
       test: /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/,
       resolve(str) {
         const node = new Scalar.Scalar(parseFloat(str));
-        const dot2 = str.indexOf(".");
-        if (dot2 !== -1 && str[str.length - 1] === "0")
-          node.minFractionDigits = str.length - dot2 - 1;
+        const dot3 = str.indexOf(".");
+        if (dot3 !== -1 && str[str.length - 1] === "0")
+          node.minFractionDigits = str.length - dot3 - 1;
         return node;
       },
       stringify: stringifyNumber.stringifyNumber
@@ -9780,9 +9780,9 @@ var require_float2 = __commonJS({
       test: /^[-+]?(?:[0-9][0-9_]*)?\.[0-9_]*$/,
       resolve(str) {
         const node = new Scalar.Scalar(parseFloat(str.replace(/_/g, "")));
-        const dot2 = str.indexOf(".");
-        if (dot2 !== -1) {
-          const f = str.substring(dot2 + 1).replace(/_/g, "");
+        const dot3 = str.indexOf(".");
+        if (dot3 !== -1) {
+          const f = str.substring(dot3 + 1).replace(/_/g, "");
           if (f[f.length - 1] === "0")
             node.minFractionDigits = f.length;
         }
@@ -23024,8 +23024,220 @@ function sign(a, b) {
   return hash32(a, b) & 1 ? 1 : -1;
 }
 
+// src/metrics/kernels/extremal-lanczos.ts
+function dot(a, ao, b, n) {
+  let s = 0;
+  for (let i = 0; i < n; i++) s += a[ao + i] * b[i];
+  return s;
+}
+function project(w, d, n) {
+  if (!d) return;
+  const c = dot(d, 0, w, n);
+  for (let i = 0; i < n; i++) w[i] -= c * d[i];
+}
+function couple(op, sgn, v, u, w, betaPrev, n) {
+  op.apply(v, w);
+  let alpha = 0;
+  for (let i = 0; i < n; i++) {
+    const x = sgn * w[i] - betaPrev * u[i];
+    w[i] = x;
+    alpha += x * v[i];
+  }
+  return alpha;
+}
+function orthogonalNorm(w, v, alpha, d, n, out) {
+  let q = 0;
+  let c = 0;
+  if (d)
+    for (let i = 0; i < n; i++) {
+      const x = w[i] - alpha * v[i];
+      w[i] = x;
+      q += x * x;
+      c += x * d[i];
+    }
+  else
+    for (let i = 0; i < n; i++) {
+      const x = w[i] - alpha * v[i];
+      w[i] = x;
+      q += x * x;
+    }
+  out[0] = c;
+  return Math.max(0, q - c * c);
+}
+function nextVector(v, w, c, d, inv, n) {
+  if (d) for (let i = 0; i < n; i++) v[i] = (w[i] - c * d[i]) * inv;
+  else for (let i = 0; i < n; i++) v[i] = w[i] * inv;
+}
+function countBelow(a, b, k, x) {
+  let c = 0;
+  let q = a[0] - x;
+  for (let i = 0; ; i++) {
+    if (q < 0) c++;
+    if (i + 1 === k) return c;
+    if (q === 0) q = 1e-300;
+    q = a[i + 1] - x - b[i] * b[i] / q;
+  }
+}
+function createExtremalLanczos(capacity) {
+  const stride = Math.max(1, capacity);
+  let v = new Float64Array(stride);
+  let u = new Float64Array(stride);
+  const w = new Float64Array(stride);
+  const vector = new Float64Array(stride);
+  let cap = 256;
+  let a = new Float64Array(cap);
+  let b = new Float64Array(cap);
+  let piv = new Float64Array(cap);
+  let z = new Float64Array(cap);
+  const out = new Float64Array(1);
+  const result = { value: 0, vector, applications: 0, steps: 0, converged: false };
+  function grow() {
+    cap *= 2;
+    const na = new Float64Array(cap);
+    na.set(a);
+    a = na;
+    const nb = new Float64Array(cap);
+    nb.set(b);
+    b = nb;
+    piv = new Float64Array(cap);
+    z = new Float64Array(cap);
+  }
+  function smallestRitz(k, upper) {
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let i = 0; i < k; i++) {
+      const r = (i > 0 ? Math.abs(b[i - 1]) : 0) + (i + 1 < k ? Math.abs(b[i]) : 0);
+      lo = Math.min(lo, a[i] - r);
+      hi = Math.max(hi, a[i] + r);
+    }
+    hi = Math.min(hi, upper);
+    lo -= 1e-14 * Math.max(1, Math.abs(lo));
+    for (; ; ) {
+      const mid2 = 0.5 * (lo + hi);
+      if (mid2 <= lo || mid2 >= hi) break;
+      if (countBelow(a, b, k, mid2) > 0) hi = mid2;
+      else lo = mid2;
+    }
+    const tiny = 1e-300;
+    piv[0] = a[0] - lo || tiny;
+    for (let i = 1; i < k; i++) piv[i] = a[i] - lo - b[i - 1] * b[i - 1] / piv[i - 1] || tiny;
+    z.fill(1, 0, k);
+    for (let it = 0; it < 2; it++) {
+      for (let i = 1; i < k; i++) z[i] -= b[i - 1] / piv[i - 1] * z[i - 1];
+      for (let i = 0; i < k; i++) z[i] /= piv[i];
+      for (let i = k - 2; i >= 0; i--) z[i] -= b[i] / piv[i] * z[i + 1];
+      let s = 0;
+      for (let i = 0; i < k; i++) s = Math.max(s, Math.abs(z[i]));
+      for (let i = 0; i < k; i++) z[i] /= s;
+      let nz = 0;
+      for (let i = 0; i < k; i++) nz += z[i] * z[i];
+      nz = Math.sqrt(nz);
+      for (let i = 0; i < k; i++) z[i] /= nz;
+    }
+    return { theta: 0.5 * (lo + hi), last: z[k - 1] };
+  }
+  function startVector(op, req, salt) {
+    const n = op.n;
+    const keys = req.keys ?? null;
+    for (let i = 0; i < n; i++) v[i] = noise(keys ? keys[i] : i, 24301 + salt);
+    if (req.start && salt === 0) {
+      let sv = 0;
+      let ss = 0;
+      for (let i = 0; i < n; i++) {
+        sv += v[i] * v[i];
+        ss += req.start[i] * req.start[i];
+      }
+      const c = 1e-3 * Math.sqrt(ss / Math.max(sv, 1e-300));
+      for (let i = 0; i < n; i++) v[i] = req.start[i] + c * v[i];
+    }
+    project(v, req.deflate, n);
+    let s = 0;
+    for (let i = 0; i < n; i++) s += v[i] * v[i];
+    return Math.sqrt(s);
+  }
+  return {
+    result,
+    solve(op, req) {
+      const n = op.n;
+      const d = req.deflate;
+      const sgn = req.which === "largest" ? -1 : 1;
+      const tol = req.tol ?? 1e-10;
+      const floor = 1e-14 * Math.max(op.normBound, 1e-300);
+      const maxApps = req.maxApplications ?? Math.max(2e3, 60 * n);
+      result.applications = 0;
+      result.steps = 0;
+      result.converged = false;
+      result.value = 0;
+      if (n - (d ? 1 : 0) <= 0) return result;
+      let salt = 0;
+      let norm0 = startVector(op, req, salt);
+      while (!(norm0 > 1e-8) && salt < 4) norm0 = startVector(op, req, ++salt);
+      for (let i = 0; i < n; i++) v[i] = v[i] / norm0;
+      u.fill(0, 0, n);
+      let betaPrev = 0;
+      let k = 0;
+      let nextCheck = 8;
+      let upper = Infinity;
+      let theta;
+      for (; ; ) {
+        if (k === cap) grow();
+        const alpha = couple(op, sgn, v, u, w, betaPrev, n);
+        a[k] = alpha;
+        const beta = Math.sqrt(orthogonalNorm(w, v, alpha, d, n, out));
+        b[k] = beta;
+        k++;
+        result.applications++;
+        const breakdown = beta <= floor;
+        if (breakdown || k >= nextCheck || result.applications >= maxApps) {
+          const r = smallestRitz(k, upper);
+          theta = r.theta;
+          upper = theta + 1e-12 * Math.max(Math.abs(theta), op.normBound, 1);
+          const converged = breakdown || beta * Math.abs(r.last) <= Math.max(tol * Math.abs(theta), floor);
+          if (converged || result.applications >= maxApps) {
+            result.converged = converged;
+            break;
+          }
+          nextCheck = k + Math.max(8, k >> 4);
+        }
+        const t = u;
+        u = v;
+        v = t;
+        nextVector(v, w, out[0], d, 1 / beta, n);
+        betaPrev = beta;
+      }
+      result.value = sgn * theta;
+      result.steps = k;
+      if (req.wantVector) {
+        startVector(op, req, salt);
+        for (let i = 0; i < n; i++) v[i] = v[i] / norm0;
+        u.fill(0, 0, n);
+        for (let i = 0; i < n; i++) vector[i] = z[0] * v[i];
+        betaPrev = 0;
+        for (let j = 1; j < k; j++) {
+          const alpha = couple(op, sgn, v, u, w, betaPrev, n);
+          orthogonalNorm(w, v, alpha, d, n, out);
+          const beta = b[j - 1];
+          const t = u;
+          u = v;
+          v = t;
+          nextVector(v, w, out[0], d, 1 / beta, n);
+          const c = z[j];
+          for (let i = 0; i < n; i++) vector[i] += c * v[i];
+          betaPrev = beta;
+        }
+        project(vector, d, n);
+        let s = 0;
+        for (let i = 0; i < n; i++) s += vector[i] * vector[i];
+        s = Math.sqrt(s);
+        for (let i = 0; i < n; i++) vector[i] /= s;
+      }
+      return result;
+    }
+  };
+}
+
 // src/metrics/kernels/lanczos.ts
-function dot(a, ao, b, bo, n) {
+function dot2(a, ao, b, bo, n) {
   let s = 0;
   for (let i = 0; i < n; i++) s += a[ao + i] * b[bo + i];
   return s;
@@ -23034,13 +23246,13 @@ function axpy(w, c, V, off, n) {
   for (let i = 0; i < n; i++) w[i] -= c * V[off + i];
 }
 function norm(w, n) {
-  return Math.sqrt(dot(w, 0, w, 0, n));
+  return Math.sqrt(dot2(w, 0, w, 0, n));
 }
 function orthogonalize(w, V, stride, n, upTo, defl, dc, coeff, ref = norm(w, n)) {
   for (let pass = 0; pass < 2; pass++) {
     if (pass === 1 && norm(w, n) > 0.7071 * ref) break;
     for (let k = 0; k < dc; k++) {
-      const c = dot(defl, k * n, w, 0, n);
+      const c = dot2(defl, k * n, w, 0, n);
       axpy(w, c, defl, k * n, n);
     }
     let l = 0;
@@ -23069,7 +23281,7 @@ function orthogonalize(w, V, stride, n, upTo, defl, dc, coeff, ref = norm(w, n))
       }
     }
     for (; l < upTo; l++) {
-      const c = dot(V, l * stride, w, 0, n);
+      const c = dot2(V, l * stride, w, 0, n);
       if (coeff) coeff[l] += c;
       axpy(w, c, V, l * stride, n);
     }
@@ -23145,7 +23357,7 @@ function createLanczos(capacity, maxCount, basis = 24) {
             h[i - 1] = betaPrev;
             axpy(w, betaPrev, V, (i - 1) * stride, n);
           }
-          const alpha = dot(V, i * stride, w, 0, n);
+          const alpha = dot2(V, i * stride, w, 0, n);
           h[i] += alpha;
           axpy(w, alpha, V, i * stride, n);
           orthogonalize(w, V, stride, n, i + 1, defl, dc, h);
@@ -23232,16 +23444,16 @@ function createLanczos(capacity, maxCount, basis = 24) {
 }
 
 // src/metrics/kernels/extremal-eigen.ts
-var FIEDLER_BASIS = 48;
 function createExtremalSolver(g, kind, denseLimit, warmStart) {
   const limit = Math.min(g.n, denseLimit);
   const fiedler2 = kind === "fiedler";
   const dense = createDenseSpectrum(limit);
-  const lanczos = createLanczos(g.n, 1, fiedler2 ? FIEDLER_BASIS : void 0);
+  const lanczos = createLanczos(fiedler2 ? 0 : g.n, 1);
+  const plain2 = createExtremalLanczos(fiedler2 ? g.n : 0);
   const op = fiedler2 ? createLaplacianOperator() : createAdjacencyOperator();
   const one = new Float64Array(fiedler2 ? g.n : 0);
-  const previous = new Float64Array(warmStart ? g.n : 0);
-  const start = new Float64Array(warmStart ? g.n : 0);
+  const previous = new Float64Array(warmStart && !fiedler2 ? g.n : 0);
+  const start = new Float64Array(warmStart && !fiedler2 ? g.n : 0);
   let hasPrevious = false;
   return (part, keys) => {
     const n = part.n;
@@ -23250,17 +23462,13 @@ function createExtremalSolver(g, kind, denseLimit, warmStart) {
       return fiedler2 ? d[1] : d[n - 1];
     }
     op.bind(part);
-    if (fiedler2) one.fill(1 / Math.sqrt(n), 0, n);
+    if (fiedler2) {
+      one.fill(1 / Math.sqrt(n), 0, n);
+      return plain2.solve(op, { which: "smallest", deflate: one, keys }).value;
+    }
     const warm = warmStart && hasPrevious;
     if (warm) for (let i = 0; i < n; i++) start[i] = previous[part.toOriginal[i]];
-    const r = lanczos.solve(op, {
-      which: fiedler2 ? "smallest" : "largest",
-      count: 1,
-      deflation: fiedler2 ? one : void 0,
-      deflationCount: fiedler2 ? 1 : 0,
-      start: warm ? start : null,
-      keys
-    });
+    const r = lanczos.solve(op, { which: "largest", count: 1, start: warm ? start : null, keys });
     if (warmStart) {
       previous.fill(0);
       for (let i = 0; i < n; i++) previous[part.toOriginal[i]] = r.vectors[i];
@@ -26402,10 +26610,7 @@ var policy_schema_default = {
         },
         sources: {
           description: "Sites efficiency searches from: all, or a seeded sample of this many on designs with more sites (an unbiased estimate whose error joins the ±).",
-          oneOf: [
-            { const: "all" },
-            { type: "integer", minimum: 32, maximum: 1e6 }
-          ],
+          oneOf: [{ const: "all" }, { type: "integer", minimum: 32, maximum: 1e6 }],
           default: "all"
         }
       }
@@ -29884,8 +30089,11 @@ function planTasks(plan, g) {
         tasks.push({ type: "band", item, from, to });
         from = to;
       }
-    } else if (it.type === "attack") tasks.push({ type: "attack", item });
-    else tasks.push({ type: "contingency", item });
+    } else if (it.type === "attack") {
+      const of = attackPieces(g, it.params);
+      if (of === 1) tasks.push({ type: "attack", item });
+      else for (let index = 0; index < of; index++) tasks.push({ type: "attack", item, piece: { index, of } });
+    } else tasks.push({ type: "contingency", item });
     if (it.params.worstCase > 0) tasks.push({ type: "worst", item });
   });
   return tasks;
@@ -29919,6 +30127,36 @@ function attackSteps(g, kind, until) {
 var ATTACK_EVALUATIONS = 200;
 function attackStride(steps, free) {
   return free || steps <= ATTACK_EVALUATIONS ? 1 : Math.ceil(steps / ATTACK_EVALUATIONS);
+}
+function attackEvaluationSteps(len, every) {
+  const at = [];
+  for (let k = 0; k < len; k += every) at.push(k);
+  at.push(len);
+  return at;
+}
+var ATTACK_PIECE_EVALUATIONS = 25;
+var CHEAP_RANKINGS = /* @__PURE__ */ new Set(["degree", "degree-adaptive"]);
+function attackPieces(g, params) {
+  const c = getChallenge(params.challenge);
+  if (c.type !== "attack" || !CHEAP_RANKINGS.has(params.challenge)) return 1;
+  const steps = attackSteps(g, c.kind, params.until);
+  if (steps <= ATTACK_EVALUATIONS) return 1;
+  const evaluations = attackEvaluationSteps(steps, attackStride(steps, false)).length;
+  return Math.max(1, Math.ceil(evaluations / ATTACK_PIECE_EVALUATIONS));
+}
+function pieceRange(count, piece) {
+  if (!piece) return [0, count];
+  return [Math.floor(piece.index * count / piece.of), Math.floor((piece.index + 1) * count / piece.of)];
+}
+function fillAttackCurve(at, computed, len) {
+  const out = new Float64Array(len + 1);
+  for (let i = 0; i + 1 < at.length; i++) {
+    const a = at[i];
+    const b = at[i + 1];
+    for (let k = a; k < b; k++) out[k] = lerp(computed[i], computed[i + 1], (k - a) / (b - a));
+  }
+  out[len] = computed[at.length - 1];
+  return out;
 }
 var StepEvaluator = class {
   constructor(g, spec) {
@@ -29986,24 +30224,6 @@ var StepEvaluator = class {
     memo.rLast = r;
     return r;
   }
-  /**
-   * R after every step k = 0..len, computed after every `every`-th removal and after the last,
-   * and read linearly between them (attackStride says why).
-   */
-  strided(kind, order, len, every) {
-    const at = [];
-    for (let k = 0; k < len; k += every) at.push(k);
-    at.push(len);
-    const computed = this.at(kind, order, len, at, new Float64Array(at.length));
-    const out = new Float64Array(len + 1);
-    for (let i = 0; i + 1 < at.length; i++) {
-      const a = at[i];
-      const b = at[i + 1];
-      for (let k = a; k < b; k++) out[k] = lerp(computed[i], computed[i + 1], (k - a) / (b - a));
-    }
-    out[len] = computed[at.length - 1];
-    return out;
-  }
   /** R after every step k = 0..len. */
   everyStep(kind, order, len) {
     const steps = new Int32Array(len + 1);
@@ -30032,8 +30252,11 @@ function runTask(g, plan, task) {
       if (c.type !== "attack") throw new TypeError(`${params.challenge} is not an attack`);
       const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: ev.r });
       const every = attackStride(sequence.length, ev.stepsAreFree);
-      if (every === 1) return { type: "attack", sequence, values: ev.everyStep(c.kind, sequence, sequence.length) };
-      return { type: "attack", sequence, values: ev.strided(c.kind, sequence, sequence.length, every), every };
+      const at = attackEvaluationSteps(sequence.length, every);
+      const [from, to] = pieceRange(at.length, task.type === "attack" ? task.piece : void 0);
+      const mine = at.slice(from, to);
+      const values = ev.at(c.kind, sequence, sequence.length, mine, new Float64Array(mine.length));
+      return { type: "attack", sequence, values, every };
     }
     case "contingency": {
       const c = getChallenge(params.challenge);
@@ -30390,7 +30613,7 @@ function estimate(g, it, c) {
     const k = attackSteps(g, kind, p.until);
     const groups = g.groupIds.length;
     const ranking = p.challenge === "risk-groups-worst" ? groups * (groups + 1) / 2 * c.intact : RANKING_PASSES[p.challenge](g.n, k) * c.pass;
-    e.fixed = ranking + (free ? c.pass : attackCurveCost(c, p, kind, k));
+    e.fixed = ranking * (free ? 1 : attackPieces(g, p)) + (free ? c.pass : attackCurveCost(c, p, kind, k));
   } else {
     const order = p.challenge === "n-2" ? 2 : 1;
     e.totalCases = contingencyTotal(g, p.element, order);
@@ -30514,7 +30737,17 @@ function assembleEvaluation(g, plan, tasks, results) {
       envelopeOf2.set(item, env);
       evaluation.envelopes.push(env);
     } else if (it.type === "attack") {
-      const res = mine.find(({ res: res2 }) => res2.type === "attack").res;
+      const pieces = mine.flatMap(({ res: res2 }) => res2.type === "attack" ? [res2] : []);
+      const first = pieces[0];
+      const at = attackEvaluationSteps(first.sequence.length, first.every);
+      const computed = pieces.flatMap((x) => Array.from(x.values));
+      if (computed.length !== at.length)
+        throw new Error(`attack ${p.challenge}: ${computed.length} of ${at.length} steps`);
+      const res = {
+        sequence: first.sequence,
+        values: fillAttackCurve(at, computed, first.sequence.length),
+        every: first.every > 1 ? first.every : void 0
+      };
       const c = getChallenge(p.challenge);
       const kind = c.type === "attack" ? c.kind : "node";
       const count = unitCount(g, kind);
@@ -31739,7 +31972,10 @@ var explainCommand = {
     const maxWorkArg = finiteNumber("--max-work", parsed2.values["max-work"], (x2) => x2 > 0, "a number > 0");
     const local = await readLocalPolicy(io, parsed2.values.policy);
     const fp = designPolicy(local, io, file);
-    const { spec, source } = metricR(parsed2.values.metric ?? []) ?? { spec: policyR(fp, fp.seed), source: local.source };
+    const { spec, source } = metricR(parsed2.values.metric ?? []) ?? {
+      spec: policyR(fp, fp.seed),
+      source: local.source
+    };
     const maxWork = maxWorkArg !== void 0 ? budgetWork({ work: maxWorkArg }) : fp.budget.maxWork;
     if (options.format === void 0 && fp.format) options.format = fp.format;
     const t = readDesign(file, options);
@@ -35130,8 +35366,8 @@ function designStem(path11) {
   const ext = EXTENSIONS.find((e) => lower.endsWith(e));
   if (ext) return path11.slice(0, -ext.length);
   const slash = path11.lastIndexOf("/");
-  const dot2 = path11.lastIndexOf(".");
-  return dot2 > slash + 1 ? path11.slice(0, dot2) : path11;
+  const dot3 = path11.lastIndexOf(".");
+  return dot3 > slash + 1 ? path11.slice(0, dot3) : path11;
 }
 function pairBy(deleted, added, key, by, out) {
   const group = (list2) => {

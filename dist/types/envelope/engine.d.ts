@@ -49,6 +49,10 @@ export type Task = {
 } | {
     type: 'attack';
     item: number;
+    piece?: {
+        index: number;
+        of: number;
+    };
 } | {
     type: 'contingency';
     item: number;
@@ -59,11 +63,13 @@ export type Task = {
 export type TaskResult = {
     type: 'band';
     values: Float64Array[];
-} | {
+}
+/** R at this piece's share of the attack's evaluated steps (attackPlan), in order. */
+ | {
     type: 'attack';
     sequence: Int32Array;
     values: Float64Array;
-    every?: number;
+    every: number;
 } | {
     type: 'contingency';
     result: Contingency;
@@ -90,6 +96,24 @@ export declare function attackSteps(g: CompactGraph, kind: ElementKind, until: n
 export declare const ATTACK_EVALUATIONS = 200;
 /** Removals between two evaluations of R along an attack of `steps` steps (1: every step). */
 export declare function attackStride(steps: number, free: boolean): number;
+/** The removal counts at which R is computed along an attack of `len` steps: every `every`-th, and the last. */
+export declare function attackEvaluationSteps(len: number, every: number): number[];
+/**
+ * Evaluations of R one task of a long attack takes on. A strided attack's steps are independent
+ * once its removal order is known, so they are shared out between tasks that each rank the
+ * order again (only for rankings that cost a few passes, not R) and evaluate their share: the
+ * pieces are fixed by the plan, never by the thread count, so the values stay the same.
+ */
+export declare const ATTACK_PIECE_EVALUATIONS = 25;
+/** How many tasks an attack is shared out to (1: one task). */
+export declare function attackPieces(g: CompactGraph, params: ResolvedParams): number;
+/** The share [from, to) of `count` evaluated steps that piece `index` of `of` takes. */
+export declare function pieceRange(count: number, piece: {
+    index: number;
+    of: number;
+} | undefined): [number, number];
+/** R after every step 0..len from R at the evaluated steps `at`, read linearly between them. */
+export declare function fillAttackCurve(at: readonly number[], computed: ArrayLike<number>, len: number): Float64Array;
 /** Evaluates R along one removal order at the given step counts (non-decreasing). */
 export declare class StepEvaluator {
     private readonly g;
@@ -110,11 +134,6 @@ export declare class StepEvaluator {
     private readonly memo;
     /** R after k removals of `order` on the shared mask; k never below the last two asked. */
     private rAfter;
-    /**
-     * R after every step k = 0..len, computed after every `every`-th removal and after the last,
-     * and read linearly between them (attackStride says why).
-     */
-    strided(kind: ElementKind, order: ArrayLike<number>, len: number, every: number): Float64Array;
     /** R after every step k = 0..len. */
     everyStep(kind: ElementKind, order: ArrayLike<number>, len: number): Float64Array;
 }

@@ -39,6 +39,7 @@ export interface MetricOptions {
      * (faster on sequences of similar masks). Off by default, because results then depend on
      * the order of evaluation in the last digits (about 1e-10 relative) — with it off, every
      * value is a pure function of the graph and the mask, whatever the thread count.
+     * algebraic_connectivity ignores it (its solver is faster cold; kernels/extremal-eigen.ts).
      */
     warmStart?: boolean;
     /**
