@@ -14,7 +14,16 @@ import {
   type EvaluationSpec,
   type StagedEvaluation,
 } from './envelope/evaluate.js';
-import { BATCH, runTask, type EvaluationPlan, type Task, type TaskResult } from './envelope/engine.js';
+import {
+  attackEvaluationSteps,
+  attackOrder,
+  BATCH,
+  pieceRange,
+  runTask,
+  type EvaluationPlan,
+  type Task,
+  type TaskResult,
+} from './envelope/engine.js';
 import type { RValueSpec } from './envelope/types.js';
 import { decide, isOpen } from './gate/decide.js';
 import { measure } from './gate/measure.js';
@@ -26,7 +35,7 @@ import type { FilePolicy } from './policy/types.js';
 import type { Report } from './report/report.js';
 import type { Topology } from './topology/model.js';
 import { UsageError } from './errors.js';
-import { batchOwner, decodeValues, encodeValues, sampleKey, type JoinInput } from './gate/split.js';
+import { batchOwner, decodeValues, encodeValues, pieceOwner, sampleKey, type JoinInput } from './gate/split.js';
 import type { SplitDesign } from './report/report.js';
 
 /** A revision as git names it, or "worktree" for the files on disk. */
@@ -261,22 +270,31 @@ export async function splitShare(
       const st = stageEvaluation(graph, spec);
       out.realizations = Math.max(out.realizations, stagedMaximum(st));
       const mine = st.tasks.filter(
-        (t): t is Extract<Task, { type: 'band' }> => t.type === 'band' && batchOwner(t.from, part.total) === part.index,
+        (t) =>
+          (t.type === 'band' && batchOwner(t.from, part.total) === part.index) ||
+          (t.type === 'attack' && t.piece !== undefined && pieceOwner(t.piece.index, part.total) === part.index),
       );
       if (mine.length === 0) continue;
       const results = await run(graph, st.plan, mine, request.threads);
       mine.forEach((t, k) => {
         const res = results[k];
-        if (res.type !== 'band') throw new TypeError('a band task returned another result');
-        const points = res.values.length ? res.values[0].length : 0;
-        out.samples.push({
-          side,
-          challenge: st.plan.items[t.item].params.challenge,
-          from: t.from,
-          to: t.to,
-          points,
-          values: encodeValues(res.values),
-        });
+        const challenge = st.plan.items[t.item].params.challenge;
+        if (t.type === 'band' && res.type === 'band') {
+          const points = res.values.length ? res.values[0].length : 0;
+          out.samples.push({ side, challenge, from: t.from, to: t.to, points, values: encodeValues(res.values) });
+        } else if (t.type === 'attack' && t.piece !== undefined && res.type === 'attack') {
+          const at = attackEvaluationSteps(res.sequence.length, res.every);
+          const [from, to] = pieceRange(at.length, t.piece);
+          out.samples.push({
+            side,
+            challenge,
+            from,
+            to,
+            points: to - from,
+            values: encodeValues([res.values]),
+            piece: t.piece.index,
+          });
+        } else throw new TypeError(`a ${t.type} task returned a ${res.type} result`);
       });
     }
   }
@@ -300,6 +318,19 @@ export function servedTasks(
     const side = g === head ? 'head' : base !== undefined && g === base ? 'base' : undefined;
     if (side === undefined) return run(g, plan, tasks, threads);
     const out: (TaskResult | undefined)[] = tasks.map((t) => {
+      if (t.type === 'attack' && t.piece !== undefined) {
+        const challenge = plan.items[t.item].params.challenge;
+        const { sequence, every } = attackOrder(g, plan, t.item);
+        const [from, to] = pieceRange(attackEvaluationSteps(sequence.length, every).length, t.piece);
+        const found = join.samples.get(sampleKey(path, side, challenge, from, to));
+        if (!found)
+          throw new UsageError(
+            `part ${pieceOwner(t.piece.index, join.total)}/${join.total} holds no piece ${t.piece.index + 1} of the ${challenge} attack of ${path} (${side})`,
+            'join the part reports of one run: the same revisions, policy and seed',
+          );
+        const [values] = decodeValues(found.values, 1, to - from, `part ${found.part}/${join.total}`);
+        return { type: 'attack', sequence, values, every };
+      }
       if (t.type !== 'band') return undefined;
       const found = join.samples.get(sampleKey(path, side, plan.items[t.item].params.challenge, t.from, t.to));
       if (!found) {

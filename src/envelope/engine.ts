@@ -178,6 +178,24 @@ export function attackPieces(g: CompactGraph, params: ResolvedParams): number {
   return Math.max(1, Math.ceil(evaluations / ATTACK_PIECE_EVALUATIONS));
 }
 
+/**
+ * A piece's attack order without running it: the ranking again (only for CHEAP_RANKINGS, which
+ * never ask for R) and the stride, as runTask takes them — for a join that serves the piece
+ * from a part's values (gate-request.ts servedTasks).
+ */
+export function attackOrder(
+  g: CompactGraph,
+  plan: EvaluationPlan,
+  item: number,
+): { sequence: Int32Array; every: number } {
+  const params = plan.items[item].params;
+  const c = getChallenge(params.challenge);
+  if (c.type !== 'attack' || !CHEAP_RANKINGS.has(params.challenge))
+    throw new TypeError(`${params.challenge} is not an attack shared out to pieces`);
+  const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: () => Number.NaN });
+  return { sequence, every: attackStride(sequence.length, unionFindR(g, plan.r) !== null) };
+}
+
 /** The share [from, to) of `count` evaluated steps that piece `index` of `of` takes. */
 export function pieceRange(count: number, piece: { index: number; of: number } | undefined): [number, number] {
   if (!piece) return [0, count];

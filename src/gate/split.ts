@@ -5,6 +5,8 @@
 // code a single run does (the stopping rule of docs/METHODS.md §7.6 included), so it stops at
 // the batch a single run stops at and writes the same bytes. A realization's values depend on
 // its index alone (engine.ts cuts band tasks at every multiple of BATCH), never on the part.
+// A long degree attack's pieces (engine.ts attackPieces) are shared out the same way (piece i to
+// part i mod n + 1), so the join does not run the attacks alone.
 
 import { UsageError } from '../errors.js';
 import { BATCH } from '../envelope/engine.js';
@@ -13,6 +15,11 @@ import type { Report, SplitDesign } from '../report/report.js';
 /** The part (1-based) that runs the realizations from `from` on (a task never crosses a batch). */
 export function batchOwner(from: number, total: number): number {
   return (Math.floor(from / BATCH) % total) + 1;
+}
+
+/** The part (1-based) that runs piece `index` of a long attack (engine.ts attackPieces). */
+export function pieceOwner(index: number, total: number): number {
+  return (index % total) + 1;
 }
 
 export function encodeValues(values: readonly Float64Array[]): string {
@@ -109,7 +116,9 @@ export function joinInput(reports: readonly Report[]): JoinInput {
 
 /** Realization ranges as people count them (1-based, inclusive): "1–32, 65–96". */
 export function rangesText(d: Pick<SplitDesign, 'samples'>): string {
-  const spans = [...new Set(d.samples.filter((s) => s.side === 'head').map((s) => `${s.from}:${s.to}`))]
+  const spans = [
+    ...new Set(d.samples.filter((s) => s.side === 'head' && s.piece === undefined).map((s) => `${s.from}:${s.to}`)),
+  ]
     .map((s) => s.split(':').map(Number) as [number, number])
     .sort((a, b) => a[0] - b[0]);
   const merged: [number, number][] = [];

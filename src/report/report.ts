@@ -271,5 +271,17 @@ export interface SplitDesign {
   path: string;
   /** Realizations of its largest band in all parts together. */
   realizations: number;
-  samples: { side: 'head' | 'base'; challenge: string; from: number; to: number; points: number; values: string }[];
+  /**
+   * Band realizations from..to (points values each), or, with `piece`, an attack piece's
+   * evaluated steps from..to (one row of to − from values; engine.ts attackPieces).
+   */
+  samples: {
+    side: 'head' | 'base';
+    challenge: string;
+    from: number;
+    to: number;
+    points: number;
+    values: string;
+    piece?: number;
+  }[];
 }

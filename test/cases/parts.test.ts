@@ -77,7 +77,12 @@ describe('one design split across parts', () => {
       expect(p.report.files.map((f) => f.path)).not.toContain(GRID);
       const share = p.report.split!.find((d) => d.path === GRID)!;
       // Batch b (realizations 32b … 32b + 31) belongs to part b mod 2 + 1.
-      for (const s of share.samples) expect(Math.floor(s.from / 32) % 2).toBe(k);
+      for (const s of share.samples) if (s.piece === undefined) expect(Math.floor(s.from / 32) % 2).toBe(k);
+      // The long degree attack's pieces too: piece i belongs to part i mod 2 + 1, on both sides.
+      const pieces = share.samples.filter((s) => s.piece !== undefined);
+      expect(pieces.length).toBeGreaterThan(0);
+      for (const s of pieces) expect(s.piece! % 2).toBe(k);
+      expect(new Set(pieces.map((s) => s.side))).toEqual(new Set(['head', 'base']));
       expect(new Set(share.samples.map((s) => s.side))).toEqual(new Set(['head', 'base']));
       expect(p.summary).toMatch(
         /`networks\/grid\.csv` is split across the parts: this part ran realizations [0-9–, ]+ of \d+, and the join judges it/,
@@ -140,7 +145,7 @@ describe('one design split across parts, fixed sample', () => {
       await runGate({ ...request, part: { index: 2, total: 2 } }, deps),
     ];
     const held = parts.flatMap((p) =>
-      p.report.split![0].samples.filter((s) => s.side === 'head').map((s) => s.to - s.from),
+      p.report.split![0].samples.filter((s) => s.side === 'head' && s.piece === undefined).map((s) => s.to - s.from),
     );
     expect(held.reduce((a, b) => a + b, 0)).toBe(env.realizations);
     // Through JSON, as the reports travel.
