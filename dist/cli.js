@@ -30144,6 +30144,14 @@ function attackPieces(g, params) {
   const evaluations = attackEvaluationSteps(steps, attackStride(steps, false)).length;
   return Math.max(1, Math.ceil(evaluations / ATTACK_PIECE_EVALUATIONS));
 }
+function attackOrder(g, plan, item) {
+  const params = plan.items[item].params;
+  const c = getChallenge(params.challenge);
+  if (c.type !== "attack" || !CHEAP_RANKINGS.has(params.challenge))
+    throw new TypeError(`${params.challenge} is not an attack shared out to pieces`);
+  const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: () => Number.NaN });
+  return { sequence, every: attackStride(sequence.length, unionFindR(g, plan.r) !== null) };
+}
 function pieceRange(count, piece) {
   if (!piece) return [0, count];
   return [Math.floor(piece.index * count / piece.of), Math.floor((piece.index + 1) * count / piece.of)];
@@ -31424,6 +31432,9 @@ function notePairedCuts(result, cuts, spec) {
 function batchOwner(from, total) {
   return Math.floor(from / BATCH) % total + 1;
 }
+function pieceOwner(index, total) {
+  return index % total + 1;
+}
 function encodeValues(values) {
   const points = values.length ? values[0].length : 0;
   const bytes = new Uint8Array(values.length * points * 8);
@@ -31504,7 +31515,9 @@ function joinInput(reports) {
   return { total, files, split, samples, reports };
 }
 function rangesText(d) {
-  const spans = [...new Set(d.samples.filter((s) => s.side === "head").map((s) => `${s.from}:${s.to}`))].map((s) => s.split(":").map(Number)).sort((a, b) => a[0] - b[0]);
+  const spans = [
+    ...new Set(d.samples.filter((s) => s.side === "head" && s.piece === void 0).map((s) => `${s.from}:${s.to}`))
+  ].map((s) => s.split(":").map(Number)).sort((a, b) => a[0] - b[0]);
   const merged = [];
   for (const [a, b] of spans) {
     const last = merged[merged.length - 1];
@@ -31603,22 +31616,29 @@ async function splitShare(path11, part, sides, request, deps) {
       const st = stageEvaluation(graph, spec);
       out.realizations = Math.max(out.realizations, stagedMaximum(st));
       const mine = st.tasks.filter(
-        (t) => t.type === "band" && batchOwner(t.from, part.total) === part.index
+        (t) => t.type === "band" && batchOwner(t.from, part.total) === part.index || t.type === "attack" && t.piece !== void 0 && pieceOwner(t.piece.index, part.total) === part.index
       );
       if (mine.length === 0) continue;
       const results = await run6(graph, st.plan, mine, request.threads);
       mine.forEach((t, k) => {
         const res = results[k];
-        if (res.type !== "band") throw new TypeError("a band task returned another result");
-        const points = res.values.length ? res.values[0].length : 0;
-        out.samples.push({
-          side,
-          challenge: st.plan.items[t.item].params.challenge,
-          from: t.from,
-          to: t.to,
-          points,
-          values: encodeValues(res.values)
-        });
+        const challenge = st.plan.items[t.item].params.challenge;
+        if (t.type === "band" && res.type === "band") {
+          const points = res.values.length ? res.values[0].length : 0;
+          out.samples.push({ side, challenge, from: t.from, to: t.to, points, values: encodeValues(res.values) });
+        } else if (t.type === "attack" && t.piece !== void 0 && res.type === "attack") {
+          const at = attackEvaluationSteps(res.sequence.length, res.every);
+          const [from, to] = pieceRange(at.length, t.piece);
+          out.samples.push({
+            side,
+            challenge,
+            from,
+            to,
+            points: to - from,
+            values: encodeValues([res.values]),
+            piece: t.piece.index
+          });
+        } else throw new TypeError(`a ${t.type} task returned a ${res.type} result`);
       });
     }
   }
@@ -31630,6 +31650,19 @@ function servedTasks(join3, path11, head, base, deps) {
     const side = g === head ? "head" : base !== void 0 && g === base ? "base" : void 0;
     if (side === void 0) return run6(g, plan, tasks, threads);
     const out = tasks.map((t) => {
+      if (t.type === "attack" && t.piece !== void 0) {
+        const challenge = plan.items[t.item].params.challenge;
+        const { sequence, every } = attackOrder(g, plan, t.item);
+        const [from, to] = pieceRange(attackEvaluationSteps(sequence.length, every).length, t.piece);
+        const found2 = join3.samples.get(sampleKey(path11, side, challenge, from, to));
+        if (!found2)
+          throw new UsageError(
+            `part ${pieceOwner(t.piece.index, join3.total)}/${join3.total} holds no piece ${t.piece.index + 1} of the ${challenge} attack of ${path11} (${side})`,
+            "join the part reports of one run: the same revisions, policy and seed"
+          );
+        const [values] = decodeValues(found2.values, 1, to - from, `part ${found2.part}/${join3.total}`);
+        return { type: "attack", sequence, values, every };
+      }
       if (t.type !== "band") return void 0;
       const found = join3.samples.get(sampleKey(path11, side, plan.items[t.item].params.challenge, t.from, t.to));
       if (!found) {

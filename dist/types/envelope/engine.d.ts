@@ -107,6 +107,15 @@ export declare function attackEvaluationSteps(len: number, every: number): numbe
 export declare const ATTACK_PIECE_EVALUATIONS = 25;
 /** How many tasks an attack is shared out to (1: one task). */
 export declare function attackPieces(g: CompactGraph, params: ResolvedParams): number;
+/**
+ * A piece's attack order without running it: the ranking again (only for CHEAP_RANKINGS, which
+ * never ask for R) and the stride, as runTask takes them — for a join that serves the piece
+ * from a part's values (gate-request.ts servedTasks).
+ */
+export declare function attackOrder(g: CompactGraph, plan: EvaluationPlan, item: number): {
+    sequence: Int32Array;
+    every: number;
+};
 /** The share [from, to) of `count` evaluated steps that piece `index` of `of` takes. */
 export declare function pieceRange(count: number, piece: {
     index: number;

@@ -1,6 +1,8 @@
 import type { Report, SplitDesign } from '../report/report.js';
 /** The part (1-based) that runs the realizations from `from` on (a task never crosses a batch). */
 export declare function batchOwner(from: number, total: number): number;
+/** The part (1-based) that runs piece `index` of a long attack (engine.ts attackPieces). */
+export declare function pieceOwner(index: number, total: number): number;
 export declare function encodeValues(values: readonly Float64Array[]): string;
 export declare function decodeValues(text: string, rows: number, points: number, name: string): Float64Array[];
 export declare function sampleKey(path: string, side: 'head' | 'base', challenge: string, from: number, to: number): string;

@@ -255,6 +255,10 @@ export interface SplitDesign {
     path: string;
     /** Realizations of its largest band in all parts together. */
     realizations: number;
+    /**
+     * Band realizations from..to (points values each), or, with `piece`, an attack piece's
+     * evaluated steps from..to (one row of to − from values; engine.ts attackPieces).
+     */
     samples: {
         side: 'head' | 'base';
         challenge: string;
@@ -262,5 +266,6 @@ export interface SplitDesign {
         to: number;
         points: number;
         values: string;
+        piece?: number;
     }[];
 }
