@@ -24269,7 +24269,9 @@ function assembleEvaluation(g, plan, tasks, results) {
 }
 function sourceSampling(g, plan, tasks, results) {
   if (!samplesSources(g, plan.r)) return void 0;
+  const named = [plan.r];
   const masks = [createMask(g)];
+  const known = (key) => sourceErrorCache.get(g)?.get(JSON.stringify(key));
   plan.items.forEach((it, item) => {
     const mine = results.filter((_, i) => tasks[i].item === item);
     if (it.type === "band") {
@@ -24277,6 +24279,7 @@ function sourceSampling(g, plan, tasks, results) {
       if (values.length === 0) return;
       const score = values.map((v) => gridMean(v));
       const weakest = score.reduce((best, v, r) => v < score[best] ? r : best, 0);
+      named.push(it.params, weakest);
       const bp = bandPlan(g, it.params);
       const order = new Int32Array(bp.maxUnits);
       const steps = new Float64Array(bp.x.length);
@@ -24291,14 +24294,23 @@ function sourceSampling(g, plan, tasks, results) {
       const res = mine.find((r) => r.type === "attack");
       const c = getChallenge(it.params.challenge);
       if (!res || c.type !== "attack" || res.sequence.length === 0) return;
+      named.push(it.params);
       const mask = createMask(g);
       for (const u of res.sequence) removeUnit(g, mask, c.kind, u);
       masks.push(mask);
     }
   });
-  const se = Math.max(...rSourceErrors(g, plan.r, masks));
+  let se = known(named);
+  if (se === void 0) {
+    se = Math.max(...rSourceErrors(g, plan.r, masks));
+    let byKey = sourceErrorCache.get(g);
+    if (!byKey) sourceErrorCache.set(g, byKey = /* @__PURE__ */ new Map());
+    if (byKey.size > 64) byKey.clear();
+    byKey.set(JSON.stringify(named), se);
+  }
   return { metric: "efficiency", sources: plan.r.sources, nodes: g.n, se };
 }
+var sourceErrorCache = /* @__PURE__ */ new WeakMap();
 function buildEnvelope(g, it, bp, values, ev) {
   const p = it.params;
   const stats = gridStats(values, bp.x.length, p.band);
@@ -29950,7 +29962,8 @@ function suggestion2(j, kind, method, targets, before, rBefore, prices, unit) {
 
 // src/gate/split.ts
 function batchOwner(from, total) {
-  return Math.floor(from / BATCH) % total + 1;
+  const batch = Math.floor(from / BATCH);
+  return batch < total ? batch + 1 : void 0;
 }
 function pieceOwner(index, total) {
   return index % total + 1;
@@ -30123,9 +30136,10 @@ function servedTasks(join2, path, head, base, deps) {
         return { type: "attack", sequence, values, every };
       }
       if (t.type !== "band") return void 0;
+      const owner = batchOwner(t.from, join2.total);
+      if (owner === void 0) return void 0;
       const found = join2.samples.get(sampleKey(path, side, plan.items[t.item].params.challenge, t.from, t.to));
       if (!found) {
-        const owner = batchOwner(t.from, join2.total);
         throw new UsageError(
           `part ${owner}/${join2.total} holds no realizations ${t.from + 1}–${t.to} of ${path} (${side})`,
           "join the part reports of one run: the same revisions, policy and seed"

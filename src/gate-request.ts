@@ -332,9 +332,11 @@ export function servedTasks(
         return { type: 'attack', sequence, values, every };
       }
       if (t.type !== 'band') return undefined;
+      const owner = batchOwner(t.from, join.total);
+      // Batches past the parts' are the join's own (a decision still open after the parts).
+      if (owner === undefined) return undefined;
       const found = join.samples.get(sampleKey(path, side, plan.items[t.item].params.challenge, t.from, t.to));
       if (!found) {
-        const owner = batchOwner(t.from, join.total);
         throw new UsageError(
           `part ${owner}/${join.total} holds no realizations ${t.from + 1}–${t.to} of ${path} (${side})`,
           'join the part reports of one run: the same revisions, policy and seed',

@@ -1,5 +1,5 @@
 // One large design split across the parts of a run (`part: k/n`): each part runs the band
-// realizations of the batches it owns (batch b of BATCH realizations belongs to part b mod n + 1)
+// realizations of the batch it owns (batch b < n of BATCH realizations belongs to part b + 1)
 // and ships their R values exactly (little-endian float64, base64) in its report's `split`.
 // The join rebuilds the design's evaluation from the union of those samples and runs the same
 // code a single run does (the stopping rule of docs/METHODS.md §7.6 included), so it stops at
@@ -12,9 +12,15 @@ import { UsageError } from '../errors.js';
 import { BATCH } from '../envelope/engine.js';
 import type { Report, SplitDesign } from '../report/report.js';
 
-/** The part (1-based) that runs the realizations from `from` on (a task never crosses a batch). */
-export function batchOwner(from: number, total: number): number {
-  return (Math.floor(from / BATCH) % total) + 1;
+/**
+ * The part (1-based) that runs the realizations from `from` on (a task never crosses a batch):
+ * batch b < n belongs to part b + 1; later batches to none. Parts cannot stop early (none sees
+ * the others' samples), so they run the first n batches side by side, and a join whose decisions
+ * are still open after them runs the next batches itself, by the same rule as one run.
+ */
+export function batchOwner(from: number, total: number): number | undefined {
+  const batch = Math.floor(from / BATCH);
+  return batch < total ? batch + 1 : undefined;
 }
 
 /** The part (1-based) that runs piece `index` of a long attack (engine.ts attackPieces). */

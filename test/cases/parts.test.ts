@@ -1,6 +1,7 @@
 // Parts of one design, through `netbrace check`: the fixture case parts-split-design holds a
 // 400-site grid whose unreduced work estimate puts it in batches (docs/METHODS.md §7.6), so
-// `--part K/N` splits its realizations across the N parts (batch b to part b mod N + 1), and a
+// `--part K/N` splits its realizations across the N parts (batch b < N to part b + 1; the join
+// runs any later batch its decisions still need), and a
 // five-site ring that stays whole in the part its path hashes to. Joining the part reports
 // (`--join`) must give the report of one run byte for byte, whatever the number of parts and
 // the thread counts; the one run stops before the most realizations the budget allows, so the
@@ -76,8 +77,8 @@ describe('one design split across parts', () => {
     for (const [k, p] of [p1, p2].entries()) {
       expect(p.report.files.map((f) => f.path)).not.toContain(GRID);
       const share = p.report.split!.find((d) => d.path === GRID)!;
-      // Batch b (realizations 32b … 32b + 31) belongs to part b mod 2 + 1.
-      for (const s of share.samples) if (s.piece === undefined) expect(Math.floor(s.from / 32) % 2).toBe(k);
+      // Batch b < 2 (realizations 32b … 32b + 31) belongs to part b + 1; later ones to the join.
+      for (const s of share.samples) if (s.piece === undefined) expect(Math.floor(s.from / 32)).toBe(k);
       // The long degree attack's pieces too: piece i belongs to part i mod 2 + 1, on both sides.
       const pieces = share.samples.filter((s) => s.piece !== undefined);
       expect(pieces.length).toBeGreaterThan(0);
@@ -129,7 +130,7 @@ describe('one design split across parts', () => {
 // The fixed-sample path (every realization the budget allows, no stopping rule): the command
 // line has no switch for it, so through runGate with `sequential: false`.
 describe('one design split across parts, fixed sample', () => {
-  it('2 parts joined give the one run byte for byte, and the samples hold every realization', async () => {
+  it('2 parts joined give the one run byte for byte: the parts hold the first two batches, the join runs the rest', async () => {
     const v = partsVariants();
     const policy = readFileSync(path.join(casesRoot, CASE, 'base', '.netbrace.yaml'), 'utf8');
     const deps = memoryDeps({
@@ -147,7 +148,9 @@ describe('one design split across parts, fixed sample', () => {
     const held = parts.flatMap((p) =>
       p.report.split![0].samples.filter((s) => s.side === 'head' && s.piece === undefined).map((s) => s.to - s.from),
     );
-    expect(held.reduce((a, b) => a + b, 0)).toBe(env.realizations);
+    // The parts hold the first two batches; the join ran the rest itself.
+    expect(env.realizations).toBeGreaterThan(64);
+    expect(held.reduce((a, b) => a + b, 0)).toBe(64);
     // Through JSON, as the reports travel.
     const reports = parts.map((p) => JSON.parse(serializeReport(p.report)) as Report);
     const joined = await runGate({ ...request, join: joinInput(reports) }, deps);

@@ -1,6 +1,11 @@
 import type { Report, SplitDesign } from '../report/report.js';
-/** The part (1-based) that runs the realizations from `from` on (a task never crosses a batch). */
-export declare function batchOwner(from: number, total: number): number;
+/**
+ * The part (1-based) that runs the realizations from `from` on (a task never crosses a batch):
+ * batch b < n belongs to part b + 1; later batches to none. Parts cannot stop early (none sees
+ * the others' samples), so they run the first n batches side by side, and a join whose decisions
+ * are still open after them runs the next batches itself, by the same rule as one run.
+ */
+export declare function batchOwner(from: number, total: number): number | undefined;
 /** The part (1-based) that runs piece `index` of a long attack (engine.ts attackPieces). */
 export declare function pieceOwner(index: number, total: number): number;
 export declare function encodeValues(values: readonly Float64Array[]): string;
