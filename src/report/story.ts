@@ -360,12 +360,31 @@ export function requirementNumbers(r: RequirementResult, allowance?: number): st
 export function requirementLine(r: RequirementResult, findings: readonly Finding[] = []): RequirementLine {
   const allowance = findings.find((x) => x.requirement === r.id && x.allowance !== undefined)?.allowance;
   const label = requirementLabel(r);
+  const why = r.status === 'unsettled' ? unsettledWhy(r, findings) : undefined;
   return {
     requirement: r,
     mark: requirementMark(r),
     label,
-    sentence: compact([seg.text(`${r.status} \u00b7 `), ...label, seg.text(` ${requirementNumbers(r, allowance)}`)]),
+    sentence: compact([
+      seg.text(`${r.status} \u00b7 `),
+      ...label,
+      seg.text(` ${requirementNumbers(r, allowance)}`),
+      ...(why ? [seg.text(` \u2014 ${why}`)] : []),
+    ]),
   };
+}
+
+/**
+ * Why an unsettled requirement is unsettled, from its finding ("… meets it, but <why>"), so the
+ * line that says "unsettled" also says what would settle it; undefined when no finding says.
+ */
+function unsettledWhy(r: RequirementResult, findings: readonly Finding[]): string | undefined {
+  const f = findings.find((x) => x.requirement === r.id && x.status === 'unsettled');
+  if (!f) return undefined;
+  const but = /\bbut (.+)$/.exec(f.message);
+  if (but) return but[1];
+  const told = /, (within .+)$/.exec(f.message);
+  return told ? told[1] : undefined;
 }
 
 /* ------------------------------------------------------------------ definitions */
@@ -491,7 +510,11 @@ function headlineOf(items: readonly WeakenedItem[], lines: readonly RequirementL
   };
   const parts = [...counts].map(([t, n]) => (n === 1 ? `1 ${t}` : `${n} ${plural[t] ?? t}`));
   const bad = lines.filter((l) => l.requirement.status === 'short' || l.requirement.status === 'weakened').length;
-  const worse = bad ? [`${bad} requirement${bad === 1 ? '' : 's'} weakened or short`] : [];
+  const open = lines.filter((l) => l.requirement.status === 'unsettled').length;
+  const worse = [
+    ...(bad ? [`${bad} requirement${bad === 1 ? '' : 's'} weakened or short`] : []),
+    ...(open ? [`${open} requirement${open === 1 ? '' : 's'} unsettled`] : []),
+  ];
   if (!parts.length && !worse.length) return lines.length ? 'every requirement holds' : 'nothing to judge';
   return [parts.join(', '), ...worse].filter(Boolean).join('; ');
 }
