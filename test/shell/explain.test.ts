@@ -6,7 +6,14 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { main } from '../../src/shell/dispatch.js';
-import { explainDesign, rankSingleLosses, type Explanation } from '../../src/shell/commands/explain.js';
+import {
+  explainDesign,
+  formatExplanation,
+  rankSingleLosses,
+  type Explanation,
+} from '../../src/shell/commands/explain.js';
+import type { RValueSpec } from '../../src/envelope/types.js';
+import { sampledVariants } from '../cases/sampled-design.js';
 import { compileTopology, graphFromEdges } from '../../src/graph/compact.js';
 import { createRValue } from '../../src/envelope/r-value.js';
 import { evaluateContingency } from '../../src/envelope/contingency.js';
@@ -175,5 +182,30 @@ describe('netbrace explain', () => {
       ['a', 'Alpha'],
       ['b', undefined],
     ]);
+  });
+});
+
+describe('explain on an R estimated from sampled sources', () => {
+  const t = parseDesign(sampledVariants().base, 'torus.csv');
+  const spec = (sources?: number): RValueSpec => ({
+    metrics: [
+      { id: 'pair_connectivity', weight: 1 },
+      { id: 'efficiency', weight: 1 },
+    ],
+    combine: 'mean',
+    ...(sources !== undefined ? { sources, sourceSeed: 5 } : {}),
+  });
+
+  it('says the estimate and its error above the ranking; an exact R says nothing of it', () => {
+    const x = explainDesign(t, spec(64), 'test', ['link']);
+    expect(x.sampling).toMatchObject({ metric: 'efficiency', sources: 64, nodes: 400 });
+    expect(x.sampling!.se).toBeGreaterThan(0);
+    const text = formatExplanation(x, 5, false, 200);
+    expect(text).toContain('estimated: efficiency searched from 64 of 400 sites as seeded sources');
+    const exact = explainDesign(t, spec(), 'test', ['link']);
+    expect(exact.sampling).toBeUndefined();
+    expect(formatExplanation(exact, 5, false, 200)).not.toContain('estimated:');
+    // The estimate's intact R lies within 3 of its standard errors of the exact one.
+    expect(Math.abs(x.intact - exact.intact)).toBeLessThan(3 * x.sampling!.se);
   });
 });

@@ -13,7 +13,14 @@ import { DesignError, UsageError } from '../../errors.js';
 import { compileTopology, nodesByLine, type CompactGraph } from '../../graph/compact.js';
 import { createMask } from '../../graph/mask.js';
 import { findComponents, findCutElements } from '../../graph/structure.js';
-import { createRValue, unsupportedMetric, type RFunction } from '../../envelope/r-value.js';
+import {
+  createRValue,
+  rSourceErrors,
+  samplesSources,
+  unsupportedMetric,
+  type RFunction,
+} from '../../envelope/r-value.js';
+import type { SourceSampling } from '../../envelope/types.js';
 import { passCost, rCost, survivorShape } from '../../envelope/cost.js';
 import type { RValueSpec } from '../../envelope/types.js';
 import type { ElementKind } from '../../graph/element.js';
@@ -61,6 +68,8 @@ export interface Explanation {
   elements: SingleLoss[];
   /** Set when the work budget left single losses out (they are not ranked). */
   reduced?: ReducedRanking;
+  /** Set when R's efficiency searched from sampled sources: the sample and R's standard error on the intact design. */
+  sampling?: SourceSampling;
 }
 
 export interface ReducedRanking {
@@ -257,6 +266,16 @@ export function explainDesign(
       return { rank: i + 1, ...e, ...(label !== undefined && label !== e.id ? { label } : {}) };
     }),
     ...(plan.reduced ? { reduced: plan.reduced } : {}),
+    ...(samplesSources(g, spec)
+      ? {
+          sampling: {
+            metric: 'efficiency' as const,
+            sources: spec.sources!,
+            nodes: g.n,
+            se: rSourceErrors(g, spec, [createMask(g)])[0],
+          },
+        }
+      : {}),
   };
 }
 
@@ -286,6 +305,14 @@ export function formatExplanation(x: Explanation, top: number, color: boolean, w
     `intact R ${r4(x.intact)} \u00b7 evaluated ${x.evaluated.node} sites, ${x.evaluated.link} links, ${x.evaluated.group} shared-risk groups` +
       (hard.length ? ` \u00b7 hardened, not removed: ${hard.join(', ')}` : ''),
   );
+  if (x.sampling) {
+    const sm = x.sampling;
+    const line =
+      `estimated: efficiency searched from ${sm.sources} of ${sm.nodes} sites as seeded sources, the same for every loss; ` +
+      `R's standard error about ${sm.se.toPrecision(2)} on the intact design. Every drop shares that sample, so drops compare ` +
+      `better than that, but two drops close together may change places with every site as a source (r-value sources: all).`;
+    for (const l of wrap(line, width)) out.push(c.yellow(l));
+  }
   if (x.reduced) {
     const r = x.reduced;
     const line =
