@@ -134,8 +134,9 @@ export function attackSteps(g: CompactGraph, kind: ElementKind, until: number): 
 
 // R of the intact design: every realization of every band task starts there, so a thread
 // computes it once per evaluation (keyed by the evaluation's plan, then the graph). Only for an
-// R whose value is a function of the mask alone — spectral metrics warm-start
-// (MetricOptions.warmStart), so their first evaluation also seeds the next and is never skipped.
+// R whose value is a function of the mask alone: spectral metrics may warm-start
+// (MetricOptions.warmStart; the engine asks for it), so with one in R the first evaluation also
+// seeds the next and is never skipped. Any spectral metric counts, whether it warm-starts or not.
 const intactCache = new WeakMap<object, WeakMap<CompactGraph, { r?: number }>>();
 
 /** The slot holding R of the intact design for this scope and graph (a private one without scope). */
