@@ -4,6 +4,7 @@ import { build } from 'esbuild';
 import { execFileSync } from 'node:child_process';
 import { copyFileSync, existsSync, mkdirSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
+import { precompiledValidators } from './validators.mjs';
 
 const banner = {
   // Some CommonJS dependencies call require(); give the ESM bundle one.
@@ -19,6 +20,8 @@ const common = {
   legalComments: 'none',
   logLevel: 'warning',
   charset: 'utf8',
+  // The schema validators as ajv's standalone code, not compiled at start (validators.mjs).
+  plugins: [precompiledValidators()],
 };
 
 mkdirSync('dist', { recursive: true });

@@ -217,7 +217,10 @@ function unreducedWork(specs: readonly EvaluationSpec[], head: CompactGraph, bas
   return Math.max(work(head), base ? work(base) : 0);
 }
 
-/** Whether a design runs in batches under the sequential stopping rule (request.sequential overrides). */
+/**
+ * Whether a design runs in batches under the sequential stopping rule (request.sequential
+ * overrides). `specs`: the requests as the policy asks them (budget.ts askedSpecs).
+ */
 export function sequentialRun(
   request: GateRequest,
   specs: readonly EvaluationSpec[],
@@ -233,20 +236,22 @@ export function sequentialRun(
  * part, when its unreduced work estimate exceeds SEQUENTIAL_MIN_WORK (the designs that run in
  * batches: a minute-scale evaluation, where a part's time matters) and its bands run more than
  * one batch. Smaller designs stay whole, in the part their path hashes to: splitting costs
- * every part a parse, and parts cannot stop early (none sees the others' samples).
+ * every part a parse, and parts cannot stop early (none sees the others' samples). `specs`: the
+ * requests as run; `asked`: as the policy asks them (budget.ts askedSpecs), for the size.
  */
 export function splitAcrossParts(
   total: number,
   specs: readonly EvaluationSpec[],
   head: CompactGraph,
   base: CompactGraph | undefined,
+  asked: readonly EvaluationSpec[] = specs,
 ): boolean {
   if (total < 2) return false;
   const most = Math.max(
     0,
     ...[head, ...(base ? [base] : [])].flatMap((g) => specs.map((spec) => stagedMaximum(stageEvaluation(g, spec)))),
   );
-  return most > BATCH && unreducedWork(specs, head, base) > SEQUENTIAL_MIN_WORK;
+  return most > BATCH && unreducedWork(asked, head, base) > SEQUENTIAL_MIN_WORK;
 }
 
 type RunTasks = NonNullable<GateDeps['runTasks']>;

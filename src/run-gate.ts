@@ -19,7 +19,7 @@
 import { EncodingError } from './decode.js';
 import { isNetbraceError, PolicyError, UsageError, type Diagnostic, type NetbraceError } from './errors.js';
 import { compileTopology, type CompactGraph } from './graph/compact.js';
-import { budgetSpecs } from './gate/budget.js';
+import { askedSpecs, budgetSpecs } from './gate/budget.js';
 import { matchDesigns, sameDesign } from './gate/rename.js';
 import { compareDesign, type CompareInput } from './gate/compare.js';
 import { assembleReport, exitCodeOf } from './gate/verdict.js';
@@ -652,7 +652,8 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
           );
           const otherGraph = oneEvaluation ? undefined : baseGraph;
           const isSplit =
-            !deps.evaluate && splitAcrossParts(part?.total ?? join?.total ?? 1, specs.head, h.graph, otherGraph);
+            !deps.evaluate &&
+            splitAcrossParts(part?.total ?? join?.total ?? 1, specs.head, h.graph, otherGraph, askedSpecs(specs));
           if (join && isSplit !== join.split.has(c.path)) {
             throw new UsageError(
               `${c.path} was ${isSplit ? 'not ' : ''}split across the parts, and would be ${isSplit ? '' : 'not '}here`,
@@ -668,7 +669,7 @@ export async function runGate(request: GateRequest, deps: GateDeps): Promise<Gat
           } else if (!onlyIfSplit || isSplit) {
             evaluated = true;
             if (join && isSplit) fileDeps = { ...deps, runTasks: servedTasks(join, c.path, h.graph, otherGraph, deps) };
-            if (!fileDeps.evaluate && sequentialRun(request, specs.head, h.graph, otherGraph)) {
+            if (!fileDeps.evaluate && sequentialRun(request, askedSpecs(specs), h.graph, otherGraph)) {
               const sides = await evaluateSequentially(
                 fp,
                 { graph: h.graph, topology: h.topology },

@@ -14,6 +14,7 @@ import { countOnes, eligibleUnits, lerp, removeUnit, stepsAt, unitCount } from '
 import type { Contingency, RValueSpec, WorstCase } from './types.js';
 import type { ChallengeName } from '../challenges/types.js';
 import type { ElementKind } from '../graph/element.js';
+import { getMetric } from '../metrics/registry.js';
 import { createRValue, unionFindR, type RFunction } from './r-value.js';
 import {
   connectivityCurve,
@@ -71,7 +72,8 @@ export type Task =
   | { type: 'worst'; item: number };
 
 export type TaskResult =
-  | { type: 'band'; values: Float64Array[] }
+  /** `whole`: per realization, R at ⌊c⌋ and ⌈c⌉ of each grid point (StepEvaluator.at), when reusable. */
+  | { type: 'band'; values: Float64Array[]; whole?: Float64Array[] }
   /** R at this piece's share of the attack's evaluated steps (attackPlan), in order. */
   | { type: 'attack'; sequence: Int32Array; values: Float64Array; every: number }
   | { type: 'contingency'; result: Contingency }
@@ -214,16 +216,42 @@ export function fillAttackCurve(at: readonly number[], computed: ArrayLike<numbe
   return out;
 }
 
+// R of the intact design: every realization of every band task starts there, so a thread
+// computes it once per evaluation (keyed by the evaluation's plan, then the graph). Only for an
+// R whose value is a function of the mask alone: spectral metrics may warm-start
+// (MetricOptions.warmStart; the engine asks for it), so with one in R the first evaluation also
+// seeds the next and is never skipped. Any spectral metric counts, whether it warm-starts or not.
+const intactCache = new WeakMap<object, WeakMap<CompactGraph, { r?: number }>>();
+
+/** The slot holding R of the intact design for this scope and graph (a private one without scope). */
+function sharedIntact(g: CompactGraph, scope: object | undefined): { r?: number } {
+  if (!scope) return {};
+  let byGraph = intactCache.get(scope);
+  if (!byGraph) intactCache.set(scope, (byGraph = new WeakMap()));
+  let slot = byGraph.get(g);
+  if (!slot) byGraph.set(g, (slot = {}));
+  return slot;
+}
+
+/** True when every metric of R gives the same value on a mask whatever was evaluated before. */
+export function historyFree(spec: RValueSpec): boolean {
+  return spec.metrics.every((m) => getMetric(m.id).cost !== 'spectral');
+}
+
 /** Evaluates R along one removal order at the given step counts (non-decreasing). */
 export class StepEvaluator {
   private readonly rfn: RFunction;
   private readonly ufr: ((c: ConnectivityCurve, k: number) => number) | null;
   private readonly ws: UnionFindWorkspace | null;
   private readonly mask: Mask;
+  /** R on the intact design once known (shared by `scope`), or null when R keeps history. */
+  private readonly intact: { r?: number } | null;
 
+  /** `scope`: the evaluation this evaluator works for (its plan); evaluators of one scope share R of the intact design. */
   constructor(
     private readonly g: CompactGraph,
     spec: RValueSpec,
+    scope?: object,
   ) {
     // Warm starts are safe here: a task evaluates its masks in a fixed order (realizations of a
     // fixed chunk, grid points ascending), so every value is still a function of the plan alone.
@@ -231,6 +259,7 @@ export class StepEvaluator {
     this.ufr = unionFindR(g, spec);
     this.ws = this.ufr ? createUnionFindWorkspace(g) : null;
     this.mask = createMask(g);
+    this.intact = this.ufr === null && historyFree(spec) ? sharedIntact(g, scope) : null;
   }
 
   get r(): RFunction {
@@ -243,9 +272,18 @@ export class StepEvaluator {
   }
 
   /**
+   * True when R after k removals of an order is the same number however it is reached, so
+   * values kept from a band task (`whole` of `at`) may stand for a recomputation.
+   */
+  get valuesAreReusable(): boolean {
+    return this.ufr !== null || this.intact !== null;
+  }
+
+  /**
    * R after steps[j] units of `order` are removed, for each j (non-decreasing). A real count c
    * (a fraction of the units, units.ts countAt) reads R linearly between ⌊c⌋ and ⌈c⌉ removals of
    * this same order, so `order` must hold ⌈c⌉ units; a whole count is R there exactly.
+   * `whole`, when given, receives R at ⌊c⌋ and ⌈c⌉ for each j (2j, 2j + 1).
    */
   at(
     kind: ElementKind,
@@ -253,6 +291,7 @@ export class StepEvaluator {
     len: number,
     steps: ArrayLike<number>,
     out: Float64Array,
+    whole?: Float64Array,
   ): Float64Array {
     if (this.ufr !== null) {
       // One curve gives every whole count; a real count costs one more lookup.
@@ -261,7 +300,12 @@ export class StepEvaluator {
         const c = steps[j];
         const lo = Math.floor(c);
         const r = this.ufr(curve, lo);
-        out[j] = c === lo ? r : lerp(r, this.ufr(curve, lo + 1), c - lo);
+        const up = c === lo ? r : this.ufr(curve, lo + 1);
+        out[j] = c === lo ? r : lerp(r, up, c - lo);
+        if (whole) {
+          whole[2 * j] = r;
+          whole[2 * j + 1] = up;
+        }
       }
       return out;
     }
@@ -278,7 +322,12 @@ export class StepEvaluator {
       const c = steps[j];
       const lo = Math.floor(c);
       const r = this.rAfter(kind, order, lo);
-      out[j] = c === lo ? r : lerp(r, this.rAfter(kind, order, lo + 1), c - lo);
+      const up = c === lo ? r : this.rAfter(kind, order, lo + 1);
+      out[j] = c === lo ? r : lerp(r, up, c - lo);
+      if (whole) {
+        whole[2 * j] = r;
+        whole[2 * j + 1] = up;
+      }
     }
     return out;
   }
@@ -292,12 +341,18 @@ export class StepEvaluator {
     if (k === memo.kPrev) return memo.rPrev;
     if (k < memo.applied) throw new RangeError(`removal counts must not decrease (${k} after ${memo.applied})`);
     while (memo.applied < k) removeUnit(this.g, this.mask, kind, order[memo.applied++]);
-    const r = this.rfn(this.mask);
+    const r = k === 0 ? this.rIntact() : this.rfn(this.mask);
     memo.kPrev = memo.kLast;
     memo.rPrev = memo.rLast;
     memo.kLast = k;
     memo.rLast = r;
     return r;
+  }
+
+  /** R on the intact design (the shared mask before any removal), once per scope when R allows. */
+  private rIntact(): number {
+    if (this.intact === null) return this.rfn(this.mask);
+    return (this.intact.r ??= this.rfn(this.mask));
   }
 
   /** R after every step k = 0..len. */
@@ -311,18 +366,22 @@ export class StepEvaluator {
 export function runTask(g: CompactGraph, plan: EvaluationPlan, task: Task): TaskResult {
   const it = plan.items[task.item];
   const params = it.params;
-  const ev = new StepEvaluator(g, plan.r);
+  const ev = new StepEvaluator(g, plan.r, plan);
   switch (task.type) {
     case 'band': {
       const bp = bandPlan(g, params);
       const order = new Int32Array(bp.maxUnits);
       const steps = new Float64Array(bp.x.length);
       const values: Float64Array[] = [];
+      // The whole counts' values let the weakest sequences be reported without evaluating again.
+      const whole: Float64Array[] | undefined = ev.valuesAreReusable && !ev.stepsAreFree ? [] : undefined;
       for (let r = task.from; r < task.to; r++) {
         const len = bp.realize(r, order, steps);
-        values.push(ev.at(bp.kind, order, len, steps, new Float64Array(bp.x.length)));
+        const w = whole ? new Float64Array(2 * bp.x.length) : undefined;
+        values.push(ev.at(bp.kind, order, len, steps, new Float64Array(bp.x.length), w));
+        if (whole) whole.push(w!);
       }
-      return { type: 'band', values };
+      return whole ? { type: 'band', values, whole } : { type: 'band', values };
     }
     case 'attack': {
       const c = getChallenge(params.challenge);

@@ -64,6 +64,7 @@ import {
   bandPlan,
   fillAttackCurve,
   challengeKind,
+  historyFree,
   planTasks,
   runTask,
   StepEvaluator,
@@ -263,9 +264,14 @@ function cached(g: CompactGraph, key: string, compute: () => number): number {
   return value;
 }
 
-/** Work of one realization of a band: R at each distinct whole count its grid needs, on the survivors of the first orders. */
-function bandRealizationCost(c: CostModel, p: PlannedChallenge['params']): number {
-  return cached(c.g, JSON.stringify(['band', c.r, p.challenge, p.until, p.points, p.at, p.seed]), () => {
+/**
+ * Work of a band's realizations: R at each distinct whole count its grid needs, on the survivors
+ * of the first orders (`each`, per realization), except count 0 — the intact design, the same for
+ * every realization, which the engine evaluates once (`once`) when R allows (engine.ts).
+ */
+function bandRealizationCost(c: CostModel, p: PlannedChallenge['params']): { each: number; once: number } {
+  const shared = historyFree(c.r);
+  const each = cached(c.g, JSON.stringify(['band', c.r, p.challenge, p.until, p.points, p.at, p.seed]), () => {
     const bp = bandPlan(c.g, p);
     const order = new Int32Array(bp.maxUnits);
     const steps = new Float64Array(bp.x.length);
@@ -278,10 +284,11 @@ function bandRealizationCost(c: CostModel, p: PlannedChallenge['params']): numbe
       const counts = new Set(
         Array.from(steps).flatMap((v) => [Math.floor(v), Math.ceil(v)].map((k) => Math.min(k, len))),
       );
-      for (const k of counts) sum += c.along(bp.kind, order, k);
+      for (const k of counts) if (k > 0 || !shared) sum += c.along(bp.kind, order, k);
     }
     return sum / samples;
   });
+  return { each, once: shared ? c.intact : 0 };
 }
 
 /** Work of an attack curve: R after every step 0..K along its sequence (sampled, interpolated). */
@@ -322,7 +329,8 @@ function estimate(g: CompactGraph, it: PlannedChallenge, c: CostModel): Estimate
     e.realizations = m;
     // Each realization draws its order, then takes R (one union–find pass on the free path).
     const order = p.challenge === 'regional' ? c.pass : orderCost(g, unitCount(g, kind));
-    e.band = m * ((free ? c.pass : bandRealizationCost(c, p)) + order);
+    const r = free ? { each: c.pass, once: 0 } : bandRealizationCost(c, p);
+    e.band = m * (r.each + order) + r.once;
   } else if (it.type === 'attack') {
     const k = attackSteps(g, kind, p.until);
     const groups = g.groupIds.length;
@@ -484,8 +492,11 @@ export function assembleEvaluation(
     const mine = tasks.map((t, i) => ({ t, res: results[i] })).filter(({ t }) => t.item === item);
     if (it.type === 'band') {
       const values = mine.flatMap(({ res }) => (res.type === 'band' ? res.values : []));
+      // Whole-count values, when every task kept them (samples joined from parts do not).
+      const bands = mine.flatMap(({ res }) => (res.type === 'band' ? [res] : []));
+      const whole = bands.every((res) => res.whole) ? bands.flatMap((res) => res.whole!) : undefined;
       const bp = bandPlan(g, p);
-      const env = buildEnvelope(g, it, bp, values, ev);
+      const env = buildEnvelope(g, it, bp, values, ev, whole);
       samples.set(p.challenge, values);
       if (bp.label)
         labels.set(
@@ -630,6 +641,7 @@ function buildEnvelope(
   bp: ReturnType<typeof bandPlan>,
   values: Float64Array[],
   ev: StepEvaluator,
+  whole: Float64Array[] | undefined,
 ): Envelope {
   const p = it.params;
   const stats = gridStats(values, bp.x.length, p.band);
@@ -650,7 +662,7 @@ function buildEnvelope(
     quantiles: stats.quantiles,
     area: area(stats.median),
     spread: spread(lo, hi),
-    weakest: weakestSequences(g, bp, values, ev),
+    weakest: weakestSequences(g, bp, values, ev, whole),
   };
   if (it.degraded) env.degraded = it.degraded;
   return env;
@@ -662,6 +674,7 @@ function weakestSequences(
   bp: ReturnType<typeof bandPlan>,
   values: Float64Array[],
   ev: StepEvaluator,
+  whole: Float64Array[] | undefined,
 ): RemovalSequence[] {
   const score = values.map((v) => gridMean(v));
   const picks = values
@@ -695,12 +708,19 @@ function weakestSequences(
       seq.steps = at;
     } else {
       // Some grid values lie between two whole counts (x·N is not whole): R at those whole
-      // counts, recomputed for these few sequences, so the steps stay removal counts.
-      const whole = new Set<number>();
-      for (let j = 0; j < steps.length; j++)
-        for (const k of [Math.floor(steps[j]), Math.ceil(steps[j])]) if (k > 0) whole.add(k);
-      const at = [...whole].sort((a, b) => a - b);
-      seq.values = Array.from(ev.at(bp.kind, order, len, at, new Float64Array(at.length)));
+      // counts, so the steps stay removal counts — as the band task kept them when R allows,
+      // else recomputed for these few sequences.
+      const byCount = new Map<number, number>();
+      for (let j = 0; j < steps.length; j++) {
+        const lo = Math.floor(steps[j]);
+        const hi = Math.ceil(steps[j]);
+        if (lo > 0) byCount.set(lo, whole ? whole[r][2 * j] : NaN);
+        if (hi > 0) byCount.set(hi, whole ? whole[r][2 * j + 1] : NaN);
+      }
+      const at = [...byCount.keys()].sort((a, b) => a - b);
+      seq.values = whole
+        ? at.map((k) => byCount.get(k)!)
+        : Array.from(ev.at(bp.kind, order, len, at, new Float64Array(at.length)));
       seq.steps = at;
     }
     return seq;

@@ -107,6 +107,21 @@ export function budgetSpecs(
 }
 
 /**
+ * The head's engine requests with the realizations the policy asks for: pairing's lowered
+ * counts undone. A design's size (its unreduced work, gate-request.ts) is judged on these; the
+ * lowered counts are a budget's doing and would make a large design look small.
+ */
+export function askedSpecs(b: BudgetedSpecs): EvaluationSpec[] {
+  return b.head.map((spec, i) => ({
+    ...spec,
+    challenges: spec.challenges.map((c) => {
+      const cut = b.cuts.find((x) => x.spec === i && x.challenge === c.challenge);
+      return cut ? { ...c, realizations: cut.from } : c;
+    }),
+  }));
+}
+
+/**
  * Restate, on one side's result of engine run `spec`, the cuts that pairing made: the engine
  * saw only the lowered count, so its own words would start from it, or say nothing.
  */

@@ -3,7 +3,6 @@
 // express (which removal orders exist for what, grids, duplicates). Pure: the caller reads
 // the file; `inherits` and scopes are applied in resolve.ts.
 
-import { Ajv, type ValidateFunction } from 'ajv';
 import { PolicyError } from '../errors.js';
 import type { RValueSpec } from '../envelope/types.js';
 import type { ChallengeName, ChallengeParams } from '../challenges/types.js';
@@ -14,7 +13,7 @@ import { DEFAULTS as CHALLENGE_DEFAULTS } from '../challenges/registry.js';
 import { DEFAULT_ERROR_MULTIPLE, DEFAULT_SOURCES, REGIONAL_UNTIL_KM } from './defaults.js';
 import { globProblem } from './globs.js';
 import { requirementId } from './requirement-id.js';
-import schema from './policy.schema.json' with { type: 'json' };
+import { policyValidator } from './policy-validator.js';
 import { describePath as describe, throwSchemaErrors } from './schema-errors.js';
 import type {
   Budget,
@@ -41,14 +40,6 @@ import { type Segment, YamlSource } from './yaml-source.js';
  */
 export const MIN_METRIC_WEIGHT = 1e-6;
 export const MAX_METRIC_WEIGHT = 1e6;
-
-let validator: ValidateFunction | undefined;
-
-function validate(data: unknown): ValidateFunction {
-  validator ??= new Ajv({ allErrors: true, verbose: true, discriminator: true, strict: false }).compile(schema);
-  validator(data);
-  return validator;
-}
 
 /** Which engine challenge a (remove, order, adaptive) triple is; undefined when it does not exist. */
 const ENGINE: Record<
@@ -409,7 +400,8 @@ export function parsePolicyFile(text: string, file: string): PolicyFile {
   const odd = firstNonNormal(data, []);
   if (odd)
     throw new PolicyError(`${describe(odd.path)} ${odd.why}`, src.where(odd.path), 'write a plain decimal number');
-  const v = validate(data);
+  const v = policyValidator();
+  v(data);
   if (v.errors && v.errors.length > 0) throwSchemaErrors(v.errors, src);
 
   const raw = data as Obj;

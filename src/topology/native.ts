@@ -5,7 +5,7 @@
 // The structure is validated against design.schema.json with ajv, then checked for what a
 // schema cannot say (ids unique, link and demand ends declared).
 
-import AjvModule, { type ErrorObject, type ValidateFunction } from 'ajv';
+import type { ErrorObject } from 'ajv';
 import {
   isAlias,
   isCollection,
@@ -18,8 +18,8 @@ import {
   type Document,
   type Node as YamlNode,
 } from 'yaml';
-import schema from './design.schema.json' with { type: 'json' };
 import { DesignError } from '../errors.js';
+import { designValidator } from './design-validator.js';
 import type { DesignFormat, SourcePos, Topology } from './model.js';
 import { TopologyBuilder, type BuilderOptions } from './builder.js';
 import { didYouMean } from './suggest.js';
@@ -32,18 +32,6 @@ import { lineColumn, readFastYaml, type FastYaml } from './fast-yaml.js';
  * default (100) already stops exponential growth, and a lower cap fails sooner.
  */
 export const MAX_ALIAS_COUNT = 50;
-
-// ajv is published as CommonJS with a `default` property; under NodeNext the default import
-// is the module object, so pick the class from whichever shape arrives.
-const Ajv = ((AjvModule as unknown as { default?: typeof AjvModule }).default ?? AjvModule) as unknown as new (
-  opts: Record<string, unknown>,
-) => { compile(s: object): ValidateFunction };
-
-let validator: ValidateFunction | undefined;
-function validate(): ValidateFunction {
-  validator ??= new Ajv({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true }).compile(schema);
-  return validator;
-}
 
 type Path = (string | number)[];
 
@@ -412,7 +400,7 @@ function buildDesign(
       'write a plain decimal number',
     );
   }
-  const check = validate();
+  const check = designValidator();
   if (!check(data)) throw firstError(check.errors ?? [], file, loc);
   const d = data as NativeDesign;
   /** An id as written: `0x10` and `16` are two ids, and 12345678901234567890 keeps its digits. */

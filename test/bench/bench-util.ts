@@ -7,6 +7,7 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { build } from 'esbuild';
+import { precompiledValidators } from '../../.ci/validators.mjs';
 
 export const repo = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..', '..');
 
@@ -26,6 +27,7 @@ export const bundleOptions = {
   banner: {
     js: "import { createRequire as __nbCreateRequire } from 'node:module';\nconst require = __nbCreateRequire(import.meta.url);",
   },
+  plugins: [precompiledValidators()],
 };
 
 export async function bundleCli(dir: string): Promise<string> {
@@ -39,6 +41,7 @@ export async function bundleCli(dir: string): Promise<string> {
     banner: {
       js: "import { createRequire as __nbCreateRequire } from 'node:module';\nconst require = __nbCreateRequire(import.meta.url);",
     },
+    plugins: [precompiledValidators()],
   };
   await build({ ...options, entryPoints: [path.join(repo, 'src/shell/cli.ts')], outfile: path.join(dir, 'cli.js') });
   await build({

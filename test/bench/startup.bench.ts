@@ -150,7 +150,7 @@ console.log(
   `netbrace: whole process ${s(whole.seconds)} (peak RSS ${whole.maxRssMb.toFixed(0)} MB); in process the engine took ${ms(engineMs)} for ${evaluations} evaluations`,
 );
 console.log(
-  `  (${evaluations} = realizations × grid points with a real removal count read between ⌊c⌋ and ⌈c⌉ removals: two evaluations per such point, engine.ts)`,
+  `  (${evaluations} = R of the intact design once, then per realization each whole removal count its grid reads — a real count x·L is read between ⌊c⌋ and ⌈c⌉, two evaluations per such point; engine.ts)`,
 );
 console.log(
   `  time inside the metric ${ms(inMetric)} = ${ms(perEvalMs)} per evaluation; fixed cost of the run ${s(whole.seconds - inMetric / 1000)} (start-up, reading, planning, report)`,
