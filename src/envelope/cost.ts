@@ -47,6 +47,8 @@ export const PLAIN_VISIT = 0.35;
 export const WORD_VISIT = 0.18;
 /** Level sweeps of one batch per level of the first source's eccentricity (+1). */
 export const LEVELS_PER_ECCENTRICITY = 1;
+/** Share of a long component's levels swept in full beyond a batch's span (fitted on grids of 20–50 a side). */
+export const FRONTIER_SHARE = 0.45;
 /** Fixed units of one evaluation of an all-pairs metric (scratch resets, histogram). */
 export const ALL_PAIRS_OVERHEAD = 2000;
 /** Plain passes of every evaluation's structure summary (components, bridges and cut nodes). */
@@ -208,11 +210,17 @@ export function hopSearchCost(shape: SurvivorShape, share = 1): number {
       plain += sources * sweep;
       continue;
     }
-    const levels = LEVELS_PER_ECCENTRICITY * (shape.eccentricities[c] + 1);
+    const levels = LEVELS_PER_ECCENTRICITY * (ecc + 1);
     let left = sources;
     while (left > 0) {
       const width = left > 64 ? Math.min(256, left) : left;
-      words += (width > 64 ? 8 : 2) * levels * sweep;
+      // All sources of a component are consecutive in breadth-first order, so a batch spans
+      // about width · (e + 1) / n levels; on a long component the kernel then sweeps only the
+      // frontier on levels where it is under a quarter of the component (long ones: e at least
+      // LONG_GRAPH_ECCENTRICITY), which costs about
+      // span + FRONTIER_SHARE · (e + 1) full sweeps in all. A sample's sources are spread out.
+      const span = share < 1 || ecc < LONG_GRAPH_ECCENTRICITY ? Infinity : (width * (ecc + 1)) / n;
+      words += (width > 64 ? 8 : 2) * Math.min(levels, span + FRONTIER_SHARE * (ecc + 1)) * sweep;
       left -= width;
     }
   }
