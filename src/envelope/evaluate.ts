@@ -74,7 +74,7 @@ import {
   type TaskResult,
 } from './engine.js';
 import { contingencyTotal } from './contingency.js';
-import { orderCost, passCost, rCost, STRUCTURE_PASSES, survivorShape } from './cost.js';
+import { needsBands, orderCost, passCost, rCost, STRUCTURE_PASSES, survivorShape } from './cost.js';
 import { createMask, type Mask } from '../graph/mask.js';
 import type { ElementKind } from '../graph/element.js';
 import { subsets } from './worst-case.js';
@@ -238,17 +238,18 @@ const costCache = new WeakMap<CompactGraph, Map<string, number>>();
 
 function costModel(g: CompactGraph, r: RValueSpec): CostModel {
   const mask = createMask(g);
+  const bands = needsBands(r);
   return {
     g,
     r,
     free: unionFindR(g, r) !== null,
     pass: passCost(g),
-    intact: rCost(g, r, survivorShape(g)),
+    intact: rCost(g, r, survivorShape(g, undefined, bands)),
     along(kind, order, k) {
       mask.node.fill(0);
       mask.link.fill(0);
       for (let i = 0; i < k; i++) removeUnit(g, mask, kind, order[i]);
-      return rCost(g, r, survivorShape(g, mask));
+      return rCost(g, r, survivorShape(g, mask, bands));
     },
   };
 }
@@ -303,13 +304,17 @@ function attackCurveCost(c: CostModel, p: PlannedChallenge['params'], kind: Elem
       const deg = (v: number) => c.g.offsets[v + 1] - c.g.offsets[v];
       order = Array.from({ length: c.g.n }, (_, v) => v).sort((a, b) => deg(b) - deg(a) || a - b);
     }
-    if (!order) return (k + 1) * c.intact;
-    const len = Math.min(k, order.length);
     // Past ATTACK_EVALUATIONS steps the engine computes R every `every`-th step only.
+    if (!order) return attackEvaluationSteps(k, attackStride(k, false)).length * c.intact;
+    const len = Math.min(k, order.length);
     const every = attackStride(len, false);
-    const at = [
-      ...new Set(Array.from({ length: ATTACK_SAMPLES }, (_, i) => Math.round((i * len) / (ATTACK_SAMPLES - 1)))),
-    ];
+    // Evenly spaced samples, and the first steps at doubling counts: a targeted attack often
+    // cuts the design within a few removals, and R on the pieces (μ₂, the resistance: no
+    // solve at all) is far cheaper than on the whole, a drop the even samples alone smear out.
+    const even = Array.from({ length: ATTACK_SAMPLES }, (_, i) => Math.round((i * len) / (ATTACK_SAMPLES - 1)));
+    const early: number[] = [];
+    for (let s = 1; s < len / (ATTACK_SAMPLES - 1); s *= 2) early.push(s);
+    const at = [...new Set([...even, ...early])].sort((x, y) => x - y);
     const cost = at.map((s) => c.along(kind, order, s));
     // Trapezoids between the sampled steps: every evaluated step 0..len is one evaluation.
     let sum = cost[0];

@@ -92,6 +92,44 @@ describe('work estimate against counted operations', () => {
     });
   }
 
+  // Efficiency from a seeded sample of 1,024 sources (r-value sources), as the built-in policy
+  // runs larger designs; the attacks are long enough to be strided and shared out to pieces.
+  const sampledChallenges: ChallengeParams[] = [
+    { challenge: 'random-nodes', until: 0.2, points: 5, realizations: 2 },
+    { challenge: 'degree-adaptive', until: 0.06 },
+  ];
+  for (const n of [4000, 10_000]) {
+    it(`preferential attachment ${n} × 2, 1,024 sampled sources: estimates within ${LOW}–${HIGH}× of counted`, () => {
+      const g = preferentialGraph(n, 2, 5);
+      const sampled: RValueSpec = { ...r, sources: 1024 };
+      // The long attack on the larger one would take seconds; its band is the sampled path.
+      for (const c of n > 4000 ? sampledChallenges.slice(0, 1) : sampledChallenges) {
+        const spec: EvaluationSpec = { r: sampled, seed: 3, challenges: [{ ...c }], budget: { maxWork: Infinity } };
+        const estimate = planEvaluation(g, spec).work;
+        resetKernelWork();
+        evaluateDesign(g, spec);
+        const ratio = estimate / counted();
+        if (process.env.NETBRACE_PRINT_RATIOS) console.log(`sampled ${n}, ${c.challenge}: ${ratio.toFixed(2)}`);
+        expect(ratio, `${n}, ${c.challenge}: estimate ${estimate}, counted ${counted()}`).toBeGreaterThan(LOW);
+        expect(ratio, `${n}, ${c.challenge}: estimate ${estimate}, counted ${counted()}`).toBeLessThan(HIGH);
+      }
+      // The sample is what makes it cheap: the exact search costs several times more.
+      const exact = planEvaluation(g, {
+        r,
+        seed: 3,
+        challenges: [sampledChallenges[0]],
+        budget: { maxWork: Infinity },
+      });
+      const cheap = planEvaluation(g, {
+        r: sampled,
+        seed: 3,
+        challenges: [sampledChallenges[0]],
+        budget: { maxWork: Infinity },
+      });
+      expect(exact.work).toBeGreaterThan(2.5 * cheap.work);
+    });
+  }
+
   it('costs one all-pairs search on the survivors: a ring cut into pieces is far cheaper than the whole ring', () => {
     const g = ring(300);
     const mask = createMask(g);

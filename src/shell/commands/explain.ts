@@ -21,7 +21,7 @@ import {
   type RFunction,
 } from '../../envelope/r-value.js';
 import type { SourceSampling } from '../../envelope/types.js';
-import { passCost, rCost, survivorShape } from '../../envelope/cost.js';
+import { needsBands, passCost, rCost, survivorShape } from '../../envelope/cost.js';
 import type { RValueSpec } from '../../envelope/types.js';
 import type { ElementKind } from '../../graph/element.js';
 import { countOnes, eligibleUnits, removeUnit, restoreUnit, unitCount, unitIds } from '../../challenges/units.js';
@@ -192,7 +192,7 @@ export function planSingleLosses(
   kinds: readonly ElementKind[],
   maxWork: number,
 ): SingleLossPlan {
-  const perCase = rCost(g, spec, survivorShape(g)) + passCost(g);
+  const perCase = rCost(g, spec, survivorShape(g, undefined, needsBands(spec))) + passCost(g);
   const units = new Map<ElementKind, Set<number>>();
   const eligible = new Map(kinds.map((k) => [k, eligibleUnits(g, k)]));
   let total = 0;
