@@ -3878,19 +3878,35 @@ function pieceRange(count, piece) {
   if (!piece) return [0, count];
   return [Math.floor(piece.index * count / piece.of), Math.floor((piece.index + 1) * count / piece.of)];
 }
+var intactCache = /* @__PURE__ */ new WeakMap();
+function sharedIntact(g, scope) {
+  if (!scope) return {};
+  let byGraph = intactCache.get(scope);
+  if (!byGraph) intactCache.set(scope, byGraph = /* @__PURE__ */ new WeakMap());
+  let slot = byGraph.get(g);
+  if (!slot) byGraph.set(g, slot = {});
+  return slot;
+}
+function historyFree(spec) {
+  return spec.metrics.every((m) => getMetric(m.id).cost !== "spectral");
+}
 var StepEvaluator = class {
-  constructor(g, spec) {
+  /** `scope`: the evaluation this evaluator works for (its plan); evaluators of one scope share R of the intact design. */
+  constructor(g, spec, scope) {
     this.g = g;
     this.rfn = createRValue(g, spec, { warmStart: true });
     this.ufr = unionFindR(g, spec);
     this.ws = this.ufr ? createUnionFindWorkspace(g) : null;
     this.mask = createMask(g);
+    this.intact = this.ufr === null && historyFree(spec) ? sharedIntact(g, scope) : null;
   }
   g;
   rfn;
   ufr;
   ws;
   mask;
+  /** R on the intact design once known (shared by `scope`), or null when R keeps history. */
+  intact;
   get r() {
     return this.rfn;
   }
@@ -3899,18 +3915,31 @@ var StepEvaluator = class {
     return this.ufr !== null;
   }
   /**
+   * True when R after k removals of an order is the same number however it is reached, so
+   * values kept from a band task (`whole` of `at`) may stand for a recomputation.
+   */
+  get valuesAreReusable() {
+    return this.ufr !== null || this.intact !== null;
+  }
+  /**
    * R after steps[j] units of `order` are removed, for each j (non-decreasing). A real count c
    * (a fraction of the units, units.ts countAt) reads R linearly between ⌊c⌋ and ⌈c⌉ removals of
    * this same order, so `order` must hold ⌈c⌉ units; a whole count is R there exactly.
+   * `whole`, when given, receives R at ⌊c⌋ and ⌈c⌉ for each j (2j, 2j + 1).
    */
-  at(kind, order, len, steps, out) {
+  at(kind, order, len, steps, out, whole) {
     if (this.ufr !== null) {
       const curve = connectivityCurve(this.g, kind, order, len, this.ws);
       for (let j = 0; j < steps.length; j++) {
         const c = steps[j];
         const lo = Math.floor(c);
         const r = this.ufr(curve, lo);
-        out[j] = c === lo ? r : lerp(r, this.ufr(curve, lo + 1), c - lo);
+        const up = c === lo ? r : this.ufr(curve, lo + 1);
+        out[j] = c === lo ? r : lerp(r, up, c - lo);
+        if (whole) {
+          whole[2 * j] = r;
+          whole[2 * j + 1] = up;
+        }
       }
       return out;
     }
@@ -3925,7 +3954,12 @@ var StepEvaluator = class {
       const c = steps[j];
       const lo = Math.floor(c);
       const r = this.rAfter(kind, order, lo);
-      out[j] = c === lo ? r : lerp(r, this.rAfter(kind, order, lo + 1), c - lo);
+      const up = c === lo ? r : this.rAfter(kind, order, lo + 1);
+      out[j] = c === lo ? r : lerp(r, up, c - lo);
+      if (whole) {
+        whole[2 * j] = r;
+        whole[2 * j + 1] = up;
+      }
     }
     return out;
   }
@@ -3937,12 +3971,17 @@ var StepEvaluator = class {
     if (k === memo.kPrev) return memo.rPrev;
     if (k < memo.applied) throw new RangeError(`removal counts must not decrease (${k} after ${memo.applied})`);
     while (memo.applied < k) removeUnit(this.g, this.mask, kind, order[memo.applied++]);
-    const r = this.rfn(this.mask);
+    const r = k === 0 ? this.rIntact() : this.rfn(this.mask);
     memo.kPrev = memo.kLast;
     memo.rPrev = memo.rLast;
     memo.kLast = k;
     memo.rLast = r;
     return r;
+  }
+  /** R on the intact design (the shared mask before any removal), once per scope when R allows. */
+  rIntact() {
+    if (this.intact === null) return this.rfn(this.mask);
+    return this.intact.r ??= this.rfn(this.mask);
   }
   /** R after every step k = 0..len. */
   everyStep(kind, order, len) {
@@ -3954,18 +3993,21 @@ var StepEvaluator = class {
 function runTask(g, plan, task) {
   const it = plan.items[task.item];
   const params = it.params;
-  const ev = new StepEvaluator(g, plan.r);
+  const ev = new StepEvaluator(g, plan.r, plan);
   switch (task.type) {
     case "band": {
       const bp = bandPlan(g, params);
       const order = new Int32Array(bp.maxUnits);
       const steps = new Float64Array(bp.x.length);
       const values = [];
+      const whole = ev.valuesAreReusable && !ev.stepsAreFree ? [] : void 0;
       for (let r = task.from; r < task.to; r++) {
         const len = bp.realize(r, order, steps);
-        values.push(ev.at(bp.kind, order, len, steps, new Float64Array(bp.x.length)));
+        const w = whole ? new Float64Array(2 * bp.x.length) : void 0;
+        values.push(ev.at(bp.kind, order, len, steps, new Float64Array(bp.x.length), w));
+        if (whole) whole.push(w);
       }
-      return { type: "band", values };
+      return whole ? { type: "band", values, whole } : { type: "band", values };
     }
     case "attack": {
       const c = getChallenge(params.challenge);

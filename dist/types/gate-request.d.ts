@@ -101,16 +101,20 @@ export declare function evaluateGraph(g: CompactGraph, topology: Topology | unde
  * decided instead of running into the budget.
  */
 export declare const SEQUENTIAL_MIN_WORK = 500000000;
-/** Whether a design runs in batches under the sequential stopping rule (request.sequential overrides). */
+/**
+ * Whether a design runs in batches under the sequential stopping rule (request.sequential
+ * overrides). `specs`: the requests as the policy asks them (budget.ts askedSpecs).
+ */
 export declare function sequentialRun(request: GateRequest, specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): boolean;
 /**
  * Whether a design's realizations are split across the parts of a run: with more than one
  * part, when its unreduced work estimate exceeds SEQUENTIAL_MIN_WORK (the designs that run in
  * batches: a minute-scale evaluation, where a part's time matters) and its bands run more than
  * one batch. Smaller designs stay whole, in the part their path hashes to: splitting costs
- * every part a parse, and parts cannot stop early (none sees the others' samples).
+ * every part a parse, and parts cannot stop early (none sees the others' samples). `specs`: the
+ * requests as run; `asked`: as the policy asks them (budget.ts askedSpecs), for the size.
  */
-export declare function splitAcrossParts(total: number, specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined): boolean;
+export declare function splitAcrossParts(total: number, specs: readonly EvaluationSpec[], head: CompactGraph, base: CompactGraph | undefined, asked?: readonly EvaluationSpec[]): boolean;
 type RunTasks = NonNullable<GateDeps['runTasks']>;
 /** A part's share of a split design: the band tasks of the batches it owns, on each side evaluated. */
 export declare function splitShare(path: string, part: {

@@ -60,9 +60,12 @@ export type Task = {
     type: 'worst';
     item: number;
 };
-export type TaskResult = {
+export type TaskResult = 
+/** `whole`: per realization, R at ⌊c⌋ and ⌈c⌉ of each grid point (StepEvaluator.at), when reusable. */
+{
     type: 'band';
     values: Float64Array[];
+    whole?: Float64Array[];
 }
 /** R at this piece's share of the attack's evaluated steps (attackPlan), in order. */
  | {
@@ -123,6 +126,8 @@ export declare function pieceRange(count: number, piece: {
 } | undefined): [number, number];
 /** R after every step 0..len from R at the evaluated steps `at`, read linearly between them. */
 export declare function fillAttackCurve(at: readonly number[], computed: ArrayLike<number>, len: number): Float64Array;
+/** True when every metric of R gives the same value on a mask whatever was evaluated before. */
+export declare function historyFree(spec: RValueSpec): boolean;
 /** Evaluates R along one removal order at the given step counts (non-decreasing). */
 export declare class StepEvaluator {
     private readonly g;
@@ -130,19 +135,30 @@ export declare class StepEvaluator {
     private readonly ufr;
     private readonly ws;
     private readonly mask;
-    constructor(g: CompactGraph, spec: RValueSpec);
+    /** R on the intact design once known (shared by `scope`), or null when R keeps history. */
+    private readonly intact;
+    /** `scope`: the evaluation this evaluator works for (its plan); evaluators of one scope share R of the intact design. */
+    constructor(g: CompactGraph, spec: RValueSpec, scope?: object);
     get r(): RFunction;
     /** True when every step is free (union–find curve). */
     get stepsAreFree(): boolean;
     /**
+     * True when R after k removals of an order is the same number however it is reached, so
+     * values kept from a band task (`whole` of `at`) may stand for a recomputation.
+     */
+    get valuesAreReusable(): boolean;
+    /**
      * R after steps[j] units of `order` are removed, for each j (non-decreasing). A real count c
      * (a fraction of the units, units.ts countAt) reads R linearly between ⌊c⌋ and ⌈c⌉ removals of
      * this same order, so `order` must hold ⌈c⌉ units; a whole count is R there exactly.
+     * `whole`, when given, receives R at ⌊c⌋ and ⌈c⌉ for each j (2j, 2j + 1).
      */
-    at(kind: ElementKind, order: ArrayLike<number>, len: number, steps: ArrayLike<number>, out: Float64Array): Float64Array;
+    at(kind: ElementKind, order: ArrayLike<number>, len: number, steps: ArrayLike<number>, out: Float64Array, whole?: Float64Array): Float64Array;
     private readonly memo;
     /** R after k removals of `order` on the shared mask; k never below the last two asked. */
     private rAfter;
+    /** R on the intact design (the shared mask before any removal), once per scope when R allows. */
+    private rIntact;
     /** R after every step k = 0..len. */
     everyStep(kind: ElementKind, order: ArrayLike<number>, len: number): Float64Array;
 }

@@ -21,6 +21,12 @@ export declare function shareBudget(specs: readonly EvaluationSpec[], maxWork: n
 /** The engine requests for one design under a budget of `maxWork` element visits, paired across base and head. */
 export declare function budgetSpecs(specs: readonly EvaluationSpec[], maxWork: number, head: CompactGraph, base?: CompactGraph): BudgetedSpecs;
 /**
+ * The head's engine requests with the realizations the policy asks for: pairing's lowered
+ * counts undone. A design's size (its unreduced work, gate-request.ts) is judged on these; the
+ * lowered counts are a budget's doing and would make a large design look small.
+ */
+export declare function askedSpecs(b: BudgetedSpecs): EvaluationSpec[];
+/**
  * Restate, on one side's result of engine run `spec`, the cuts that pairing made: the engine
  * saw only the lowered count, so its own words would start from it, or say nothing.
  */
