@@ -1,5 +1,5 @@
 // The per-design work budget of a policy, in the engine's unit (one element visit, see
-// src/envelope/evaluate.ts). A policy may give it as `work` (element visits), as `seconds`, or
+// src/envelope/evaluate.ts). A policy may give it as `visits` (element visits), as `seconds`, or
 // both; seconds are converted with one fixed rate, never with the clock, so a report stays a
 // function of its inputs and seed (byte for byte on any machine): the budget is a ration of
 // work, and `seconds` is only the unit people think in.
@@ -27,14 +27,14 @@ export const DEFAULT_BUDGET_SECONDS = 60;
 
 /** A budget as a policy writes it (either key may be left out). */
 export interface BudgetLimits {
-  work?: number;
+  visits?: number;
   seconds?: number;
 }
 
-/** Element visits a budget allows: the smaller of `work` and `seconds` × the fixed rate. */
+/** Element visits a budget allows: the smaller of `visits` and `seconds` × the fixed rate. */
 export function budgetWork(b: BudgetLimits): number {
   const fromSeconds = b.seconds === undefined ? Infinity : Math.floor(b.seconds * ENGINE_VISITS_PER_SECOND);
-  const work = Math.min(b.work ?? Infinity, fromSeconds);
+  const work = Math.min(b.visits ?? Infinity, fromSeconds);
   if (work === Infinity) return budgetWork({ seconds: DEFAULT_BUDGET_SECONDS });
   return Math.max(1, Math.floor(work));
 }

@@ -319,7 +319,7 @@ class FileBuilder {
   budget(raw: Obj | undefined, path: readonly Segment[]): Budget | undefined {
     if (raw === undefined) return undefined;
     const budget: Budget = { where: this.at(path, true), fieldWhere: {} };
-    for (const key of ['work', 'seconds'] as const) {
+    for (const key of ['visits', 'seconds'] as const) {
       if (raw[key] === undefined) continue;
       budget[key] = raw[key] as number;
       budget.fieldWhere[key] = this.at([...path, key]);

@@ -197,14 +197,17 @@ function visits(n: number): string {
 }
 
 /** The key of a budget that sets its element visits (the smaller limit), for naming its line. */
-function bindingKey(b: Budget): 'work' | 'seconds' | undefined {
-  if (b.seconds !== undefined && (b.work === undefined || b.seconds * ENGINE_VISITS_PER_SECOND <= b.work))
+function bindingKey(b: Budget): 'visits' | 'seconds' | undefined {
+  if (b.seconds !== undefined && (b.visits === undefined || b.seconds * ENGINE_VISITS_PER_SECOND <= b.visits))
     return 'seconds';
-  return b.work !== undefined ? 'work' : undefined;
+  return b.visits !== undefined ? 'visits' : undefined;
 }
 
 function describeBudget(b: Budget): string {
-  return [b.work !== undefined ? `work ${visits(b.work)}` : '', b.seconds !== undefined ? `seconds ${b.seconds}` : '']
+  return [
+    b.visits !== undefined ? `visits ${visits(b.visits)}` : '',
+    b.seconds !== undefined ? `seconds ${b.seconds}` : '',
+  ]
     .filter(Boolean)
     .join(', ');
 }
@@ -216,7 +219,7 @@ function describeBudget(b: Budget): string {
  */
 function mergeBudget(prev: Layered<Budget>, next: Layered<Budget>, what: string): Layered<Budget> {
   const merged: Budget = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
-  for (const key of ['work', 'seconds'] as const) {
+  for (const key of ['visits', 'seconds'] as const) {
     const value = next.value[key];
     if (value === undefined) continue;
     merged[key] = value;
@@ -581,7 +584,7 @@ export function policyForFile(policy: Policy, path: string): FilePolicy {
     weakening: weakening.value,
     removedDesigns: removed.value.severity,
     budget: {
-      ...(b.work !== undefined ? { work: b.work } : {}),
+      ...(b.visits !== undefined ? { visits: b.visits } : {}),
       ...(b.seconds !== undefined ? { seconds: b.seconds } : {}),
       maxWork: budgetWork(b),
     },

@@ -129,16 +129,16 @@ export interface DesignGlob {
  */
 export interface Budget {
   /** Element visits (the engine's unit of work). */
-  work?: number;
+  visits?: number;
   /** Seconds, converted to element visits at a fixed rate (src/policy/budget.ts). */
   seconds?: number;
   where: Where;
-  fieldWhere: Partial<Record<'work' | 'seconds', Where>>;
+  fieldWhere: Partial<Record<'visits' | 'seconds', Where>>;
 }
 
 /** A budget in force for one file: as written, and the element visits it allows. */
 export interface ResolvedBudget {
-  work?: number;
+  visits?: number;
   seconds?: number;
   maxWork: number;
 }

@@ -83,7 +83,7 @@ describe('the engine reduces work the documented way', () => {
 });
 
 // ---------------------------------------------------------------------------------------------
-// Through the gate, with the budget in the policy (`budget: work: N`, element visits).
+// Through the gate, with the budget in the policy (`budget: visits: N`, element visits).
 
 const FILE = 'networks/mesh.net.yaml';
 const HEAD = gateFixture('removed-node/head.net.yaml'); // the same mesh without its annex site
@@ -93,9 +93,9 @@ function policy(requirements: string, challenge = FAILURES, rest = ''): string {
   return `seed: 3\nr-value:\n  metrics:\n    largest_component: 1\nchallenges:\n${challenge}requirements:\n${requirements}${rest}`;
 }
 
-const withBudget = (text: string, work?: number) => (work === undefined ? text : `${text}budget:\n  work: ${work}\n`);
+const withBudget = (text: string, work?: number) => (work === undefined ? text : `${text}budget:\n  visits: ${work}\n`);
 
-/** The mesh alone (thresholds only) under a policy, with a budget of `work` element visits. */
+/** The mesh alone (thresholds only) under a policy, with a budget of `visits` element visits. */
 async function judge(
   policyText: string,
   work?: number,
@@ -392,7 +392,7 @@ describe('the budget in the policy', () => {
   });
 
   it('a scope raises the budget for its files only', async () => {
-    const text = `${policy('  - kind: area-floor\n    challenge: failures\n')}budget:\n  work: ${REALIZATION * 20}\nscopes:\n  - paths: "networks/core/**"\n    budget:\n      work: 1e9\n`;
+    const text = `${policy('  - kind: area-floor\n    challenge: failures\n')}budget:\n  visits: ${REALIZATION * 20}\nscopes:\n  - paths: "networks/core/**"\n    budget:\n      visits: 1e9\n`;
     const core = 'networks/core/mesh.net.yaml';
     const { report } = await runGate(
       { head: 'head', policySource: 'head', mode: 'block', paths: [FILE, core] },

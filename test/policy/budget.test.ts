@@ -20,12 +20,12 @@ describe('seconds become work at one fixed rate', () => {
   });
 
   it('with both keys the smaller limit applies', () => {
-    expect(budgetWork({ work: 4e7, seconds: 2 })).toBe(4e7);
-    expect(budgetWork({ work: 4e9, seconds: 2 })).toBe(1e8);
+    expect(budgetWork({ visits: 4e7, seconds: 2 })).toBe(4e7);
+    expect(budgetWork({ visits: 4e9, seconds: 2 })).toBe(1e8);
   });
 
   it('a fraction of a visit rounds down, but a budget never reaches 0', () => {
-    expect(budgetWork({ work: 10.9 })).toBe(10);
+    expect(budgetWork({ visits: 10.9 })).toBe(10);
     expect(budgetWork({ seconds: 1e-12 })).toBe(1);
   });
 
@@ -61,8 +61,8 @@ describe('the default budget and the engine request', () => {
   it('a policy that leaves the budget out has the built-in one; one that writes it has its own, whole', () => {
     expect(budgetOf({ 'p.yaml': 'seed: 2\n' })).toEqual({ seconds: 60, maxWork: 3e9 });
     // Written at the root, the block replaces the built-in one: work alone, no seconds limit.
-    expect(budgetOf({ 'p.yaml': 'budget:\n  work: 2e10\n' })).toEqual({ work: 2e10, maxWork: 2e10 });
-    expect(budgetOf({ 'p.yaml': 'budget:\n  work: 1000\n' })).toEqual({ work: 1000, maxWork: 1000 });
+    expect(budgetOf({ 'p.yaml': 'budget:\n  visits: 2e10\n' })).toEqual({ visits: 2e10, maxWork: 2e10 });
+    expect(budgetOf({ 'p.yaml': 'budget:\n  visits: 1000\n' })).toEqual({ visits: 1000, maxWork: 1000 });
   });
 });
 
@@ -76,10 +76,10 @@ describe('scopes and inheriting policies may raise the budget, never lower it', 
   });
 
   it('an inheriting policy raises it, and keys it leaves out keep the value in force', () => {
-    const files = { 'org.yaml': org, 'p.yaml': 'inherits: org.yaml\nbudget:\n  work: 9e8\n  seconds: 30\n' };
-    expect(budgetOf(files, 'edge/a.graphml')).toEqual({ work: 9e8, seconds: 30, maxWork: 9e8 });
-    // The org scope (40 s) raises it further for core/**; work 9e8 stays in force and binds.
-    expect(budgetOf(files, 'core/a.graphml')).toEqual({ work: 9e8, seconds: 40, maxWork: 9e8 });
+    const files = { 'org.yaml': org, 'p.yaml': 'inherits: org.yaml\nbudget:\n  visits: 9e8\n  seconds: 30\n' };
+    expect(budgetOf(files, 'edge/a.graphml')).toEqual({ visits: 9e8, seconds: 30, maxWork: 9e8 });
+    // The org scope (40 s) raises it further for core/**; visits 9e8 stays in force and binds.
+    expect(budgetOf(files, 'core/a.graphml')).toEqual({ visits: 9e8, seconds: 40, maxWork: 9e8 });
   });
 
   it('a more basic file\u2019s smaller scope is outvoted by a larger budget of the inheriting file', () => {

@@ -240,7 +240,7 @@ describe('explain under a work budget', () => {
   const budget = 1e5;
 
   it('ranks what the policy budget allows, single points of failure first, and says how many it left out', async () => {
-    const dir = newRepo({ '.netbrace.yaml': `budget:\n  work: ${budget}\n`, 'big.net.yaml': text });
+    const dir = newRepo({ '.netbrace.yaml': `budget:\n  visits: ${budget}\n`, 'big.net.yaml': text });
     // What the whole ranking would need under the built-in R, by the engine's estimate.
     const g = compileTopology(parseDesign(text, 'big.net.yaml'));
     const rSpec = {
@@ -276,7 +276,7 @@ describe('explain under a work budget', () => {
   });
 
   it('--max-work raises it: everything ranked, nothing said', async () => {
-    const dir = newRepo({ '.netbrace.yaml': `budget:\n  work: ${budget}\n`, 'big.net.yaml': text });
+    const dir = newRepo({ '.netbrace.yaml': `budget:\n  visits: ${budget}\n`, 'big.net.yaml': text });
     const r = await run(
       dir,
       'explain',

@@ -8,8 +8,8 @@ export declare const ENGINE_VISITS_PER_SECOND = 50000000;
 export declare const DEFAULT_BUDGET_SECONDS = 60;
 /** A budget as a policy writes it (either key may be left out). */
 export interface BudgetLimits {
-    work?: number;
+    visits?: number;
     seconds?: number;
 }
-/** Element visits a budget allows: the smaller of `work` and `seconds` × the fixed rate. */
+/** Element visits a budget allows: the smaller of `visits` and `seconds` × the fixed rate. */
 export declare function budgetWork(b: BudgetLimits): number;

@@ -350,7 +350,7 @@ export const envelopeCommand: Command = {
     const threads = wholeNumber('--threads', v.threads, 1) ?? Math.min(4, availableParallelism());
     const maxWorkArg = finiteNumber('--max-work', v['max-work'], (x) => x > 0, 'a number > 0');
     // The same budget arithmetic as the gate's (policy/budget.ts).
-    const maxWork = maxWorkArg !== undefined ? budgetWork({ work: maxWorkArg }) : fp.budget.maxWork;
+    const maxWork = maxWorkArg !== undefined ? budgetWork({ visits: maxWorkArg }) : fp.budget.maxWork;
     const options: ReadDesignOptions = { cwd: io.cwd };
     if (v.format !== undefined) options.format = parseFormatName(v.format);
     else if (fp.format) options.format = fp.format; // as the gate reads it

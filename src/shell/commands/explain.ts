@@ -427,7 +427,7 @@ export const explainCommand: Command = {
       source: local.source,
     };
     // The same budget arithmetic as the gate's (policy/budget.ts).
-    const maxWork = maxWorkArg !== undefined ? budgetWork({ work: maxWorkArg }) : fp.budget.maxWork;
+    const maxWork = maxWorkArg !== undefined ? budgetWork({ visits: maxWorkArg }) : fp.budget.maxWork;
     if (options.format === undefined && fp.format) options.format = fp.format; // as the gate reads it
     const t = readDesign(file, options);
     const g = compileTopology(t);
