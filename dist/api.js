@@ -16686,13 +16686,17 @@ function attackPieces(g, params) {
   const evaluations = attackEvaluationSteps(steps, attackStride(steps, false)).length;
   return Math.max(1, Math.ceil(evaluations / ATTACK_PIECE_EVALUATIONS));
 }
-function attackOrder(g, plan, item) {
+function attackOrder(g, plan, item, rvalue = () => Number.NaN) {
   const params = plan.items[item].params;
   const c = getChallenge(params.challenge);
-  if (c.type !== "attack" || !CHEAP_RANKINGS.has(params.challenge))
-    throw new TypeError(`${params.challenge} is not an attack shared out to pieces`);
-  const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: () => Number.NaN });
+  if (c.type !== "attack") throw new TypeError(`${params.challenge} is not an attack`);
+  const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue });
   return { sequence, every: attackStride(sequence.length, unionFindR(g, plan.r) !== null) };
+}
+function pieceSteps(len, every, piece) {
+  const at = attackEvaluationSteps(len, every);
+  const [from, to] = pieceRange(at.length, piece);
+  return { steps: at.slice(from, to), from, to };
 }
 function pieceRange(count, piece) {
   if (!piece) return [0, count];
@@ -16840,14 +16844,10 @@ function runTask(g, plan, task) {
       return whole ? { type: "band", values, whole } : { type: "band", values };
     }
     case "attack": {
-      const c = getChallenge(params.challenge);
-      if (c.type !== "attack") throw new TypeError(`${params.challenge} is not an attack`);
-      const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: ev.r });
-      const every = attackStride(sequence.length, ev.stepsAreFree);
-      const at = attackEvaluationSteps(sequence.length, every);
-      const [from, to] = pieceRange(at.length, task.type === "attack" ? task.piece : void 0);
-      const mine = at.slice(from, to);
-      const values = ev.at(c.kind, sequence, sequence.length, mine, new Float64Array(mine.length));
+      const kind = challengeKind(g, params);
+      const { sequence, every } = attackOrder(g, plan, task.item, ev.r);
+      const { steps } = pieceSteps(sequence.length, every, task.piece);
+      const values = ev.at(kind, sequence, sequence.length, steps, new Float64Array(steps.length));
       return { type: "attack", sequence, values, every };
     }
     case "contingency": {
@@ -17560,7 +17560,7 @@ function assembleEvaluation(g, plan, tasks, results) {
       if (target) target.worstCase = worst.result;
     }
   });
-  const sampling = sourceSampling(g, plan, tasks, results);
+  const sampling = sourceSampling(g, plan, tasks, results, envelopeOf2);
   if (sampling) evaluation.sampling = sampling;
   for (const env of evaluation.envelopes) {
     if (env.xUnit !== "fraction") continue;
@@ -17580,50 +17580,51 @@ function assembleEvaluation(g, plan, tasks, results) {
   }
   return { evaluation, samples, labels: labels2 };
 }
-function sourceSampling(g, plan, tasks, results) {
+function sourceSampling(g, plan, tasks, results, envelopeOf2) {
   if (!samplesSources(g, plan.r)) return void 0;
-  const named = [plan.r];
-  const masks = [createMask(g)];
-  const known = (key) => sourceErrorCache.get(g)?.get(JSON.stringify(key));
+  const named = ["source-error", plan.r];
+  const builders = [() => [createMask(g)]];
   plan.items.forEach((it, item) => {
-    const mine = results.filter((_, i) => tasks[i].item === item);
     if (it.type === "band") {
-      const values = mine.flatMap((res) => res.type === "band" ? res.values : []);
-      if (values.length === 0) return;
-      const score = values.map((v) => gridMean(v));
-      const weakest = score.reduce((best, v, r) => v < score[best] ? r : best, 0);
+      const weakest = envelopeOf2.get(item)?.weakest[0]?.realization;
+      if (weakest === void 0) return;
       named.push(it.params, weakest);
-      const bp = bandPlan(g, it.params);
-      const order = new Int32Array(bp.maxUnits);
-      const steps = new Float64Array(bp.x.length);
-      const len = bp.realize(weakest, order, steps);
-      for (const c of steps) {
-        if (!(c > 0)) continue;
-        const mask = createMask(g);
-        for (let i = 0; i < Math.min(len, Math.ceil(c)); i++) removeUnit(g, mask, bp.kind, order[i]);
-        masks.push(mask);
-      }
+      builders.push(() => {
+        const bp = bandPlan(g, it.params);
+        const order = new Int32Array(bp.maxUnits);
+        const steps = new Float64Array(bp.x.length);
+        const len = bp.realize(weakest, order, steps);
+        return Array.from(steps).filter((c) => c > 0).map((c) => {
+          const mask = createMask(g);
+          for (let i = 0; i < Math.min(len, Math.ceil(c)); i++) removeUnit(g, mask, bp.kind, order[i]);
+          return mask;
+        });
+      });
     } else if (it.type === "attack") {
-      const res = mine.find((r) => r.type === "attack");
+      const res = results.find((r, i) => tasks[i].item === item && r.type === "attack");
       const c = getChallenge(it.params.challenge);
       if (!res || c.type !== "attack" || res.sequence.length === 0) return;
       named.push(it.params);
-      const mask = createMask(g);
-      for (const u of res.sequence) removeUnit(g, mask, c.kind, u);
-      masks.push(mask);
+      builders.push(() => {
+        const mask = createMask(g);
+        for (const u of res.sequence) removeUnit(g, mask, c.kind, u);
+        return [mask];
+      });
     }
   });
-  let se = known(named);
-  if (se === void 0) {
-    se = Math.max(...rSourceErrors(g, plan.r, masks));
-    let byKey = sourceErrorCache.get(g);
-    if (!byKey) sourceErrorCache.set(g, byKey = /* @__PURE__ */ new Map());
-    if (byKey.size > 64) byKey.clear();
-    byKey.set(JSON.stringify(named), se);
-  }
+  const se = cached(
+    g,
+    JSON.stringify(named),
+    () => Math.max(
+      ...rSourceErrors(
+        g,
+        plan.r,
+        builders.flatMap((b) => b())
+      )
+    )
+  );
   return { metric: "efficiency", sources: plan.r.sources, nodes: g.n, se };
 }
-var sourceErrorCache = /* @__PURE__ */ new WeakMap();
 function buildEnvelope(g, it, bp, values, ev, whole) {
   const p = it.params;
   const stats = gridStats(values, bp.x.length, p.band);
@@ -23760,7 +23761,10 @@ function bindingKey(b) {
   return b.visits !== void 0 ? "visits" : void 0;
 }
 function describeBudget(b) {
-  return [b.visits !== void 0 ? `visits ${visits(b.visits)}` : "", b.seconds !== void 0 ? `seconds ${b.seconds}` : ""].filter(Boolean).join(", ");
+  return [
+    b.visits !== void 0 ? `visits ${visits(b.visits)}` : "",
+    b.seconds !== void 0 ? `seconds ${b.seconds}` : ""
+  ].filter(Boolean).join(", ");
 }
 function mergeBudget(prev, next, what) {
   const merged = { ...prev.value, fieldWhere: { ...prev.value.fieldWhere }, where: next.value.where };
@@ -25426,8 +25430,7 @@ async function splitShare(path, part, sides, request, deps) {
           const points = res.values.length ? res.values[0].length : 0;
           out.samples.push({ side, challenge, from: t.from, to: t.to, points, values: encodeValues(res.values) });
         } else if (t.type === "attack" && t.piece !== void 0 && res.type === "attack") {
-          const at = attackEvaluationSteps(res.sequence.length, res.every);
-          const [from, to] = pieceRange(at.length, t.piece);
+          const { from, to } = pieceSteps(res.sequence.length, res.every, t.piece);
           out.samples.push({
             side,
             challenge,
@@ -25452,7 +25455,7 @@ function servedTasks(join2, path, head, base, deps) {
       if (t.type === "attack" && t.piece !== void 0) {
         const challenge = plan.items[t.item].params.challenge;
         const { sequence, every } = attackOrder(g, plan, t.item);
-        const [from, to] = pieceRange(attackEvaluationSteps(sequence.length, every).length, t.piece);
+        const { from, to } = pieceSteps(sequence.length, every, t.piece);
         const found2 = join2.samples.get(sampleKey(path, side, challenge, from, to));
         if (!found2)
           throw new UsageError(

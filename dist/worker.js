@@ -3874,6 +3874,18 @@ function attackEvaluationSteps(len, every) {
   at.push(len);
   return at;
 }
+function attackOrder(g, plan, item, rvalue = () => Number.NaN) {
+  const params = plan.items[item].params;
+  const c = getChallenge(params.challenge);
+  if (c.type !== "attack") throw new TypeError(`${params.challenge} is not an attack`);
+  const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue });
+  return { sequence, every: attackStride(sequence.length, unionFindR(g, plan.r) !== null) };
+}
+function pieceSteps(len, every, piece) {
+  const at = attackEvaluationSteps(len, every);
+  const [from, to] = pieceRange(at.length, piece);
+  return { steps: at.slice(from, to), from, to };
+}
 function pieceRange(count, piece) {
   if (!piece) return [0, count];
   return [Math.floor(piece.index * count / piece.of), Math.floor((piece.index + 1) * count / piece.of)];
@@ -4010,14 +4022,10 @@ function runTask(g, plan, task) {
       return whole ? { type: "band", values, whole } : { type: "band", values };
     }
     case "attack": {
-      const c = getChallenge(params.challenge);
-      if (c.type !== "attack") throw new TypeError(`${params.challenge} is not an attack`);
-      const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: ev.r });
-      const every = attackStride(sequence.length, ev.stepsAreFree);
-      const at = attackEvaluationSteps(sequence.length, every);
-      const [from, to] = pieceRange(at.length, task.type === "attack" ? task.piece : void 0);
-      const mine = at.slice(from, to);
-      const values = ev.at(c.kind, sequence, sequence.length, mine, new Float64Array(mine.length));
+      const kind = challengeKind(g, params);
+      const { sequence, every } = attackOrder(g, plan, task.item, ev.r);
+      const { steps } = pieceSteps(sequence.length, every, task.piece);
+      const values = ev.at(kind, sequence, sequence.length, steps, new Float64Array(steps.length));
       return { type: "attack", sequence, values, every };
     }
     case "contingency": {

@@ -15,10 +15,9 @@ import {
   type StagedEvaluation,
 } from './envelope/evaluate.js';
 import {
-  attackEvaluationSteps,
   attackOrder,
   BATCH,
-  pieceRange,
+  pieceSteps,
   runTask,
   type EvaluationPlan,
   type Task,
@@ -288,8 +287,7 @@ export async function splitShare(
           const points = res.values.length ? res.values[0].length : 0;
           out.samples.push({ side, challenge, from: t.from, to: t.to, points, values: encodeValues(res.values) });
         } else if (t.type === 'attack' && t.piece !== undefined && res.type === 'attack') {
-          const at = attackEvaluationSteps(res.sequence.length, res.every);
-          const [from, to] = pieceRange(at.length, t.piece);
+          const { from, to } = pieceSteps(res.sequence.length, res.every, t.piece);
           out.samples.push({
             side,
             challenge,
@@ -326,7 +324,7 @@ export function servedTasks(
       if (t.type === 'attack' && t.piece !== undefined) {
         const challenge = plan.items[t.item].params.challenge;
         const { sequence, every } = attackOrder(g, plan, t.item);
-        const [from, to] = pieceRange(attackEvaluationSteps(sequence.length, every).length, t.piece);
+        const { from, to } = pieceSteps(sequence.length, every, t.piece);
         const found = join.samples.get(sampleKey(path, side, challenge, from, to));
         if (!found)
           throw new UsageError(

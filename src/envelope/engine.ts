@@ -181,21 +181,32 @@ export function attackPieces(g: CompactGraph, params: ResolvedParams): number {
 }
 
 /**
- * A piece's attack order without running it: the ranking again (only for CHEAP_RANKINGS, which
- * never ask for R) and the stride, as runTask takes them — for a join that serves the piece
- * from a part's values (gate-request.ts servedTasks).
+ * An attack's order and stride, as runTask takes them. A join that serves a piece from a part's
+ * values (gate-request.ts servedTasks) ranks it again without R: pieces exist only for
+ * CHEAP_RANKINGS, which never ask for it.
  */
 export function attackOrder(
   g: CompactGraph,
   plan: EvaluationPlan,
   item: number,
+  rvalue: RFunction = () => Number.NaN,
 ): { sequence: Int32Array; every: number } {
   const params = plan.items[item].params;
   const c = getChallenge(params.challenge);
-  if (c.type !== 'attack' || !CHEAP_RANKINGS.has(params.challenge))
-    throw new TypeError(`${params.challenge} is not an attack shared out to pieces`);
-  const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: () => Number.NaN });
+  if (c.type !== 'attack') throw new TypeError(`${params.challenge} is not an attack`);
+  const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue });
   return { sequence, every: attackStride(sequence.length, unionFindR(g, plan.r) !== null) };
+}
+
+/** The removal counts a piece of an attack evaluates, and their range [from, to) among all its evaluated steps. */
+export function pieceSteps(
+  len: number,
+  every: number,
+  piece: { index: number; of: number } | undefined,
+): { steps: number[]; from: number; to: number } {
+  const at = attackEvaluationSteps(len, every);
+  const [from, to] = pieceRange(at.length, piece);
+  return { steps: at.slice(from, to), from, to };
 }
 
 /** The share [from, to) of `count` evaluated steps that piece `index` of `of` takes. */
@@ -384,14 +395,10 @@ export function runTask(g: CompactGraph, plan: EvaluationPlan, task: Task): Task
       return whole ? { type: 'band', values, whole } : { type: 'band', values };
     }
     case 'attack': {
-      const c = getChallenge(params.challenge);
-      if (c.type !== 'attack') throw new TypeError(`${params.challenge} is not an attack`);
-      const sequence = c.sequence(g, attackSteps(g, c.kind, params.until), { rvalue: ev.r });
-      const every = attackStride(sequence.length, ev.stepsAreFree);
-      const at = attackEvaluationSteps(sequence.length, every);
-      const [from, to] = pieceRange(at.length, task.type === 'attack' ? task.piece : undefined);
-      const mine = at.slice(from, to);
-      const values = ev.at(c.kind, sequence, sequence.length, mine, new Float64Array(mine.length));
+      const kind = challengeKind(g, params);
+      const { sequence, every } = attackOrder(g, plan, task.item, ev.r);
+      const { steps } = pieceSteps(sequence.length, every, task.piece);
+      const values = ev.at(kind, sequence, sequence.length, steps, new Float64Array(steps.length));
       return { type: 'attack', sequence, values, every };
     }
     case 'contingency': {

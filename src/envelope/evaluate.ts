@@ -556,7 +556,7 @@ export function assembleEvaluation(
     }
   });
 
-  const sampling = sourceSampling(g, plan, tasks, results);
+  const sampling = sourceSampling(g, plan, tasks, results, envelopeOf);
   if (sampling) evaluation.sampling = sampling;
 
   // Attack gap: each fraction envelope against the most harmful attack of its element kind.
@@ -591,54 +591,56 @@ function sourceSampling(
   plan: EvaluationPlan,
   tasks: Task[],
   results: TaskResult[],
+  envelopeOf: ReadonlyMap<number, Envelope>,
 ): SourceSampling | undefined {
   if (!samplesSources(g, plan.r)) return undefined;
-  // The states are named by (parameters, weakest realization) per challenge: a batched run
-  // assembles after every batch, and the weakest realization rarely changes between them.
-  const named: unknown[] = [plan.r];
-  const masks: Mask[] = [createMask(g)];
-  const known = (key: unknown[]) => sourceErrorCache.get(g)?.get(JSON.stringify(key));
+  // The states are named by (parameters, weakest realization) per challenge and built only when
+  // their error is not known yet: a batched run assembles after every batch, and the weakest
+  // realization rarely changes between them.
+  const named: unknown[] = ['source-error', plan.r];
+  const builders: (() => Mask[])[] = [() => [createMask(g)]];
   plan.items.forEach((it, item) => {
-    const mine = results.filter((_, i) => tasks[i].item === item);
     if (it.type === 'band') {
-      const values = mine.flatMap((res) => (res.type === 'band' ? res.values : []));
-      if (values.length === 0) return;
-      const score = values.map((v) => gridMean(v));
-      const weakest = score.reduce((best, v, r) => (v < score[best] ? r : best), 0);
+      const weakest = envelopeOf.get(item)?.weakest[0]?.realization;
+      if (weakest === undefined) return;
       named.push(it.params, weakest);
-      const bp = bandPlan(g, it.params);
-      const order = new Int32Array(bp.maxUnits);
-      const steps = new Float64Array(bp.x.length);
-      const len = bp.realize(weakest, order, steps);
-      for (const c of steps) {
-        if (!(c > 0)) continue;
-        const mask = createMask(g);
-        for (let i = 0; i < Math.min(len, Math.ceil(c)); i++) removeUnit(g, mask, bp.kind, order[i]);
-        masks.push(mask);
-      }
+      builders.push(() => {
+        const bp = bandPlan(g, it.params);
+        const order = new Int32Array(bp.maxUnits);
+        const steps = new Float64Array(bp.x.length);
+        const len = bp.realize(weakest, order, steps);
+        return Array.from(steps)
+          .filter((c) => c > 0)
+          .map((c) => {
+            const mask = createMask(g);
+            for (let i = 0; i < Math.min(len, Math.ceil(c)); i++) removeUnit(g, mask, bp.kind, order[i]);
+            return mask;
+          });
+      });
     } else if (it.type === 'attack') {
-      const res = mine.find((r) => r.type === 'attack') as Extract<TaskResult, { type: 'attack' }> | undefined;
+      const res = results.find((r, i) => tasks[i].item === item && r.type === 'attack') as
+        Extract<TaskResult, { type: 'attack' }> | undefined;
       const c = getChallenge(it.params.challenge);
       if (!res || c.type !== 'attack' || res.sequence.length === 0) return;
       named.push(it.params);
-      const mask = createMask(g);
-      for (const u of res.sequence) removeUnit(g, mask, c.kind, u);
-      masks.push(mask);
+      builders.push(() => {
+        const mask = createMask(g);
+        for (const u of res.sequence) removeUnit(g, mask, c.kind, u);
+        return [mask];
+      });
     }
   });
-  let se = known(named);
-  if (se === undefined) {
-    se = Math.max(...rSourceErrors(g, plan.r, masks));
-    let byKey = sourceErrorCache.get(g);
-    if (!byKey) sourceErrorCache.set(g, (byKey = new Map()));
-    if (byKey.size > 64) byKey.clear();
-    byKey.set(JSON.stringify(named), se);
-  }
+  const se = cached(g, JSON.stringify(named), () =>
+    Math.max(
+      ...rSourceErrors(
+        g,
+        plan.r,
+        builders.flatMap((b) => b()),
+      ),
+    ),
+  );
   return { metric: 'efficiency', sources: plan.r.sources!, nodes: g.n, se };
 }
-
-/** Source errors by graph and the states they were taken on (sourceSampling). */
-const sourceErrorCache = new WeakMap<CompactGraph, Map<string, number>>();
 
 function buildEnvelope(
   g: CompactGraph,

@@ -111,13 +111,22 @@ export declare const ATTACK_PIECE_EVALUATIONS = 25;
 /** How many tasks an attack is shared out to (1: one task). */
 export declare function attackPieces(g: CompactGraph, params: ResolvedParams): number;
 /**
- * A piece's attack order without running it: the ranking again (only for CHEAP_RANKINGS, which
- * never ask for R) and the stride, as runTask takes them — for a join that serves the piece
- * from a part's values (gate-request.ts servedTasks).
+ * An attack's order and stride, as runTask takes them. A join that serves a piece from a part's
+ * values (gate-request.ts servedTasks) ranks it again without R: pieces exist only for
+ * CHEAP_RANKINGS, which never ask for it.
  */
-export declare function attackOrder(g: CompactGraph, plan: EvaluationPlan, item: number): {
+export declare function attackOrder(g: CompactGraph, plan: EvaluationPlan, item: number, rvalue?: RFunction): {
     sequence: Int32Array;
     every: number;
+};
+/** The removal counts a piece of an attack evaluates, and their range [from, to) among all its evaluated steps. */
+export declare function pieceSteps(len: number, every: number, piece: {
+    index: number;
+    of: number;
+} | undefined): {
+    steps: number[];
+    from: number;
+    to: number;
 };
 /** The share [from, to) of `count` evaluated steps that piece `index` of `of` takes. */
 export declare function pieceRange(count: number, piece: {
